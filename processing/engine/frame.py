@@ -1,0 +1,335 @@
+"""The sampling frame: the part of the study area that a survey can speak for.
+
+The frame is built by removing, in this order,
+
+1. the excluded polygons (water, private inholdings, ...),
+2. the mask polygons (raster cells outside the accepted range, e.g. slope above
+   30 degrees; see :mod:`plotwise.processing.raster_masking`),
+3. an inward edge buffer: the strip within ``edge_buffer`` metres of the study
+   area's own boundary.
+
+Each rule is charged only with the area that was still in the frame when it was
+applied, so that
+
+    A_study = A_frame + L_exclude + L_mask + L_edge                       (1)
+
+holds by construction. All areas are planar, in the square units of a projected
+CRS (metres); the caller projects geographic inputs first.
+
+Every function here is pure shapely/numpy and works with shapely 1.8 and 2.0.
+"""
+from dataclasses import dataclass, field
+
+import numpy as np
+from shapely.geometry import GeometryCollection, MultiPolygon, Polygon
+from shapely.geometry.base import BaseGeometry
+from shapely.ops import unary_union
+
+from .errors import Cancelled, InputError
+
+try:  # shapely >= 1.8 built against GEOS >= 3.8
+    from shapely.validation import make_valid as _make_valid
+except ImportError:  # pragma: no cover - depends on the host's GEOS
+    _make_valid = None
+
+#: Order in which the rules are applied, with the words used in messages.
+RULES = (
+    ("exclude", "excluded polygons (EXCLUDE)"),
+    ("mask", "raster mask (MASK outside [MASK_MIN, MASK_MAX] or NoData)"),
+    ("edge_buffer", "inward edge buffer (EDGE_BUFFER)"),
+)
+_RULE_LABEL = dict(RULES)
+
+
+@dataclass(frozen=True)
+class CleanedPolygons:
+    """Polygonal geometries made ready for overlay.
+
+    Attributes
+    ----------
+    geometries : tuple of shapely Polygon or MultiPolygon
+        Valid, non-empty geometries with positive area, in input order.
+    ids : tuple
+        Feature id of each kept geometry.
+    skipped_ids : tuple
+        Ids of features that were empty, had no polygonal part or zero area.
+    repaired_ids : tuple
+        Ids of kept features whose geometry was invalid and has been repaired
+        (a feature that has no area left after repair is only in ``skipped_ids``).
+    """
+
+    geometries: tuple
+    ids: tuple
+    skipped_ids: tuple = ()
+    repaired_ids: tuple = ()
+
+    @property
+    def union(self):
+        """Dissolved union of the kept geometries (an empty Polygon if none)."""
+        return dissolve(self.geometries)
+
+
+@dataclass(frozen=True)
+class FrameLoss:
+    """Area removed from the frame by one rule.
+
+    Attributes
+    ----------
+    rule : str
+        ``"exclude"``, ``"mask"`` or ``"edge_buffer"``.
+    label : str
+        The rule in words, for reports and messages.
+    area_m2 : float
+        Area removed by this rule, counting only what was still in the frame
+        when the rule was applied (eq. 1 of the module docstring).
+    """
+
+    rule: str
+    label: str
+    area_m2: float
+
+    @property
+    def area_ha(self):
+        return self.area_m2 / 1e4
+
+
+@dataclass(frozen=True)
+class SamplingFrame:
+    """The result of :func:`build_frame`.
+
+    Attributes
+    ----------
+    geometry : shapely Polygon or MultiPolygon
+        The dissolved, valid frame.
+    study_area_m2 : float
+        Area of the dissolved study area.
+    area_m2 : float
+        Area of the frame.
+    losses : tuple of FrameLoss
+        Area lost to each rule, in the order the rules were applied.
+    edge_buffer_m : float
+        The inward edge buffer that was applied.
+    """
+
+    geometry: BaseGeometry
+    study_area_m2: float
+    area_m2: float
+    losses: tuple = field(default_factory=tuple)
+    edge_buffer_m: float = 0.0
+
+    @property
+    def area_ha(self):
+        return self.area_m2 / 1e4
+
+    @property
+    def kept_fraction(self):
+        """Frame area as a fraction of the study area."""
+        return self.area_m2 / self.study_area_m2 if self.study_area_m2 > 0 else 0.0
+
+    def loss(self, rule):
+        """Area in m² lost to ``rule`` (0 when the rule was not applied)."""
+        for item in self.losses:
+            if item.rule == rule:
+                return item.area_m2
+        return 0.0
+
+
+def polygonal_part(geometry):
+    """The polygonal part of ``geometry`` as a Polygon or MultiPolygon.
+
+    Points and lines (which a repair may leave behind) are dropped. Returns an
+    empty Polygon when nothing polygonal remains.
+    """
+    if geometry is None or geometry.is_empty:
+        return Polygon()
+    if isinstance(geometry, (Polygon, MultiPolygon)):
+        return geometry
+    if isinstance(geometry, GeometryCollection) or hasattr(geometry, "geoms"):
+        parts = []
+        for part in geometry.geoms:
+            sub = polygonal_part(part)
+            if not sub.is_empty:
+                parts.extend(sub.geoms if isinstance(sub, MultiPolygon) else [sub])
+        if not parts:
+            return Polygon()
+        return parts[0] if len(parts) == 1 else MultiPolygon(parts)
+    return Polygon()
+
+
+def repair_geometry(geometry):
+    """Return a valid polygonal version of ``geometry``.
+
+    Uses GEOS ``MakeValid`` (``shapely.validation.make_valid``) where the
+    installed shapely offers it, which keeps every piece of a self-crossing
+    ring. Otherwise falls back on the zero-width buffer ``buffer(0)``, the
+    classic repair, which may drop the inverted lobes of a bow-tie.
+    """
+    if geometry is None or geometry.is_empty:
+        return Polygon()
+    if geometry.is_valid:
+        return polygonal_part(geometry)
+    if _make_valid is not None:
+        repaired = polygonal_part(_make_valid(geometry))
+        if repaired.is_valid:
+            return repaired
+    return polygonal_part(geometry.buffer(0))
+
+
+def clean_polygons(geometries, ids=None):
+    """Repair invalid geometries and drop empty or zero-area ones.
+
+    Parameters
+    ----------
+    geometries : sequence of shapely geometries (None allowed)
+    ids : sequence, optional
+        Feature ids, same length as ``geometries`` (default ``0..n-1``).
+
+    Returns
+    -------
+    CleanedPolygons
+        The host algorithm turns ``skipped_ids`` and ``repaired_ids`` into
+        warnings.
+    """
+    geometries = list(geometries)
+    ids = list(range(len(geometries))) if ids is None else list(ids)
+    if len(ids) != len(geometries):
+        raise ValueError("ids and geometries differ in length")
+    kept, kept_ids, skipped, repaired = [], [], [], []
+    for fid, geom in zip(ids, geometries):
+        if geom is None or geom.is_empty:
+            skipped.append(fid)
+            continue
+        was_valid = geom.is_valid
+        geom = polygonal_part(geom) if was_valid else repair_geometry(geom)
+        if geom.is_empty or not geom.area > 0.0:
+            skipped.append(fid)
+            continue
+        if not was_valid:
+            repaired.append(fid)
+        kept.append(geom)
+        kept_ids.append(fid)
+    return CleanedPolygons(tuple(kept), tuple(kept_ids), tuple(skipped), tuple(repaired))
+
+
+def dissolve(geometries):
+    """Union of polygonal ``geometries`` as one valid Polygon or MultiPolygon."""
+    if isinstance(geometries, BaseGeometry):
+        geometries = [geometries]
+    geometries = [g for g in geometries if g is not None and not g.is_empty]
+    if not geometries:
+        return Polygon()
+    merged = unary_union(geometries)
+    if not merged.is_valid:  # overlay output is valid; this is a safety net
+        merged = repair_geometry(merged)
+    return polygonal_part(merged)
+
+
+def _check_cancel(progress, fraction):
+    if progress is not None and progress(float(fraction)):
+        raise Cancelled("Building the sampling frame was cancelled.")
+
+
+def build_frame(study_area, exclusions=None, mask=None, edge_buffer=0.0, progress=None):
+    """Sampling frame = study area − exclusions − mask − inward edge buffer.
+
+    Parameters
+    ----------
+    study_area : shapely geometry or sequence of them
+        Valid polygonal geometries (see :func:`clean_polygons`), in a projected
+        CRS in metres. They are dissolved into one geometry.
+    exclusions : shapely geometry or sequence, optional
+        Polygons removed first (EXCLUDE).
+    mask : shapely geometry or sequence, optional
+        Polygons removed second: the raster cells outside the accepted range
+        (MASK, MASK_MIN, MASK_MAX).
+    edge_buffer : float
+        Width in metres of the strip along the study area's boundary that is
+        removed last (EDGE_BUFFER, >= 0). The strip is ``S \\ buffer(S, -d)``:
+        every point closer than ``d`` to the boundary of the dissolved study
+        area ``S`` (its outer boundary and the rims of its own holes).
+    progress : callable, optional
+        ``progress(fraction) -> bool``; True cancels (raises ``Cancelled``).
+
+    Returns
+    -------
+    SamplingFrame
+        With the area lost to each applied rule such that eq. (1) of the module
+        docstring holds.
+
+    Raises
+    ------
+    InputError
+        If the study area has no area, ``edge_buffer`` is negative, or a rule
+        removes everything that was left (the message names the rule).
+    """
+    edge_buffer = float(edge_buffer or 0.0)
+    if not np.isfinite(edge_buffer) or edge_buffer < 0:
+        raise InputError(
+            f"EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres."
+        )
+    _check_cancel(progress, 0.0)
+    study = dissolve(study_area)
+    study_m2 = float(study.area)
+    if study.is_empty or study_m2 <= 0.0:
+        raise InputError(
+            "The study area (INPUT) has no polygon with a positive area. "
+            "Check that the layer holds polygons and is in a projected CRS in metres."
+        )
+
+    frame = study
+    losses = []
+    steps = []
+    if exclusions is not None:
+        steps.append(("exclude", exclusions))
+    if mask is not None:
+        steps.append(("mask", mask))
+    if edge_buffer > 0:
+        steps.append(("edge_buffer", None))
+
+    for k, (rule, geoms) in enumerate(steps):
+        _check_cancel(progress, (k + 0.1) / (len(steps) + 1))
+        before = float(frame.area)
+        if rule == "edge_buffer":
+            inner = polygonal_part(study.buffer(-edge_buffer))
+            frame = polygonal_part(frame.intersection(inner)) if not inner.is_empty else Polygon()
+        else:
+            removed = dissolve(geoms)
+            if not removed.is_empty:
+                frame = polygonal_part(frame.difference(removed))
+        after = float(frame.area) if not frame.is_empty else 0.0
+        losses.append(FrameLoss(rule, _RULE_LABEL[rule], before - after))
+        if frame.is_empty or after <= 0.0:
+            raise InputError(_emptied_message(rule, before, edge_buffer, study))
+    _check_cancel(progress, 1.0)
+    if not frame.is_valid:
+        frame = repair_geometry(frame)
+    return SamplingFrame(
+        geometry=frame,
+        study_area_m2=study_m2,
+        area_m2=float(frame.area),
+        losses=tuple(losses),
+        edge_buffer_m=edge_buffer,
+    )
+
+
+def _emptied_message(rule, before_m2, edge_buffer, study):
+    """Error text naming the rule that left nothing of the frame."""
+    left = f"{before_m2 / 1e4:.4g} ha"
+    if rule == "exclude":
+        return (
+            f"Nothing is left of the study area (INPUT) after removing the excluded polygons "
+            f"(EXCLUDE): they cover all {left}. Check that EXCLUDE holds only the areas to leave out."
+        )
+    if rule == "mask":
+        return (
+            f"Nothing is left of the frame after the raster mask (MASK): every cell over the "
+            f"remaining {left} is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, "
+            f"check the raster's units, or check that the raster covers the study area."
+        )
+    minx, miny, maxx, maxy = study.bounds
+    return (
+        f"Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = "
+        f"{edge_buffer:g} m): the remaining {left} all lie within that distance of the study "
+        f"area's boundary (study area extent {maxx - minx:.0f} m x {maxy - miny:.0f} m). "
+        f"Use a smaller EDGE_BUFFER."
+    )
