@@ -1,0 +1,655 @@
+"""Allocation of survey effort (sample units) across strata.
+
+The quantity the survey estimates is the overall density: the mean count per
+unit, divided by the unit area. With stratum weights ``W_h = A_h / A`` (area
+shares), pilot standard deviations of counts per unit ``S_h`` and ``n_h`` units
+drawn without replacement from the ``N_h = A_h / a`` units of area ``a`` that fit
+in stratum ``h``, the variance of the stratified mean count per unit is
+
+    V = sum_h W_h**2 * S_h**2 * (1 - f_h) / n_h,      f_h = n_h / N_h
+
+(Cochran 1977, ch. 5). The allocations here differ in how they share a given
+effort among the strata:
+
+* equal:         n_h = n / H
+* proportional:  n_h = n * W_h
+* Neyman:        n_h = n * W_h S_h / sum_k W_k S_k                (Neyman 1934)
+* optimal with cost, under a budget C = c0 + sum_h c_h n_h:
+                 n_h proportional to W_h S_h / sqrt(c_h)          (Cochran 1977, ch. 5)
+
+Every allocation is bounded: at least ``MIN_PER_STRATUM`` units (two, so that a
+stratum variance can be estimated: common practice) and at most the ``N_h`` units
+that fit. A stratum that reaches a bound keeps it and the remaining effort is
+shared among the others in the same proportions, repeated until stable
+(Cochran 1977, ch. 5). The fixed point of that procedure is
+``n_h = clip(lambda * q_h, lower_h, upper_h)`` with a single ``lambda`` that meets
+the total (or the budget); :func:`bounded_allocation` finds it directly. For the
+Neyman and cost scores this is also the minimiser of ``V`` under the bounds (the
+Karush-Kuhn-Tucker conditions of a separable convex problem).
+
+References
+----------
+Neyman, J. (1934). On the two different aspects of the representative method.
+    Journal of the Royal Statistical Society 97, 558-625.
+Cochran, W. G. (1977). Sampling Techniques, 3rd ed., chapter 5. Wiley.
+"""
+from dataclasses import dataclass
+
+import numpy as np
+
+from .errors import InputError
+
+METHODS = ("equal", "proportional", "neyman", "optimal_cost")
+"""Allocation methods, in the order of the algorithm's METHOD parameter (0..3)."""
+
+DEFAULT_MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
+
+_DEFAULT_NAMES = {
+    "area": "stratum area",
+    "sd": "pilot standard deviation",
+    "mean": "pilot mean count",
+    "cost": "cost per unit",
+}
+
+
+# ----------------------------------------------------------------------------
+# results
+# ----------------------------------------------------------------------------
+@dataclass(frozen=True, eq=False)
+class Precision:
+    """Expected precision of a stratified design (Cochran 1977, ch. 5).
+
+    Attributes
+    ----------
+    variance_mean : float
+        ``V = sum W_h^2 S_h^2 (1 - f_h) / n_h``, variance of the overall mean
+        count per unit (NaN without standard deviations).
+    se_mean : float
+        ``sqrt(V)``.
+    se_density : float
+        ``sqrt(V) / a``: standard error of the overall density, in counts per
+        area unit of ``unit_area``.
+    overall_mean : float
+        ``sum W_h ybar_h``, the pilot mean count per unit (NaN without means).
+    cv : float
+        ``sqrt(V) / sum W_h ybar_h``, expected CV of the overall density (NaN
+        without means). The unit area cancels.
+    stratum_se_mean, stratum_se_density, stratum_cv : ndarray
+        The same per stratum: ``S_h sqrt((1 - f_h) / n_h)``, divided by ``a``,
+        and divided by ``ybar_h`` (NaN where the mean is zero or missing).
+    """
+
+    variance_mean: float
+    se_mean: float
+    se_density: float
+    overall_mean: float
+    cv: float
+    stratum_se_mean: np.ndarray
+    stratum_se_density: np.ndarray
+    stratum_cv: np.ndarray
+
+
+@dataclass(frozen=True, eq=False)
+class MethodComparison:
+    """One allocation method evaluated at a common total, for comparison."""
+
+    method: str
+    n: np.ndarray
+    precision: Precision
+    relative_variance: float
+    """Variance divided by that of the chosen allocation (NaN without SDs)."""
+
+
+@dataclass(frozen=True, eq=False)
+class Allocation:
+    """Units per stratum, with the expected precision they buy.
+
+    Attributes
+    ----------
+    method : str
+        The method asked for (one of :data:`METHODS`).
+    method_used : str
+        The method applied after fallbacks (no SDs, or all SDs zero, gives
+        ``proportional``; the cost method then uses ``W_h / sqrt(c_h)``).
+    target : str
+        ``"total"``, ``"budget"`` or ``"target_cv"``.
+    ids : tuple
+        Stratum identifiers, as given.
+    n : ndarray of int
+        Whole units per stratum; sums to ``total``.
+    n_continuous : ndarray of float
+        The bounded allocation before rounding.
+    total : int
+    lower, upper : ndarray of int
+        The bounds applied per stratum (``upper`` = whole units that fit).
+    capacity : ndarray of float
+        ``N_h = A_h / a``, used in the finite-population correction.
+    cost : float
+        ``c0 + sum c_h n_h`` (NaN without costs).
+    precision : Precision
+    comparison : tuple of MethodComparison
+        Equal, proportional and Neyman at ``total``, with the same bounds.
+    warnings : tuple of str
+    """
+
+    method: str
+    method_used: str
+    target: str
+    ids: tuple
+    n: np.ndarray
+    n_continuous: np.ndarray
+    total: int
+    lower: np.ndarray
+    upper: np.ndarray
+    capacity: np.ndarray
+    cost: float
+    precision: Precision
+    comparison: tuple
+    warnings: tuple
+
+
+# ----------------------------------------------------------------------------
+# continuous allocations (no bounds)
+# ----------------------------------------------------------------------------
+def stratum_weights(areas):
+    """Area shares ``W_h = A_h / sum_k A_k``."""
+    areas = np.asarray(areas, dtype=float)
+    return areas / areas.sum()
+
+
+def unit_capacity(areas, unit_area):
+    """Units that fit in each stratum, ``N_h = A_h / a`` (same area unit for both)."""
+    return np.asarray(areas, dtype=float) / float(unit_area)
+
+
+def allocation_scores(method, areas, sds=None, costs=None):
+    """Relative share ``q_h`` of each stratum under ``method``.
+
+    ``equal``: 1; ``proportional``: ``W_h``; ``neyman``: ``W_h S_h``;
+    ``optimal_cost``: ``W_h S_h / sqrt(c_h)`` (Cochran 1977, ch. 5). With
+    ``sds=None`` the Neyman score is taken as proportional and the cost score as
+    ``W_h / sqrt(c_h)`` (equal SDs assumed).
+    """
+    if method not in METHODS:
+        raise ValueError(f"Unknown allocation method {method!r}; use one of {METHODS}.")
+    w = stratum_weights(areas)
+    if method == "equal":
+        return np.ones_like(w)
+    if method == "proportional":
+        return w
+    s = np.ones_like(w) if sds is None else np.asarray(sds, dtype=float)
+    if method == "neyman":
+        return w * s
+    if costs is None:
+        raise ValueError("The cost method needs a cost per unit for every stratum.")
+    return w * s / np.sqrt(np.asarray(costs, dtype=float))
+
+
+def equal_allocation(total, n_strata):
+    """``n_h = n / H``."""
+    return np.full(int(n_strata), float(total) / int(n_strata))
+
+
+def proportional_allocation(total, areas):
+    """``n_h = n W_h`` (Cochran 1977, ch. 5)."""
+    return float(total) * stratum_weights(areas)
+
+
+def neyman_allocation(total, areas, sds):
+    """``n_h = n W_h S_h / sum_k W_k S_k`` (Neyman 1934; Cochran 1977, ch. 5).
+
+    Minimises ``V`` for a fixed total ``n`` (continuous, without bounds).
+    """
+    q = allocation_scores("neyman", areas, sds)
+    return float(total) * q / q.sum()
+
+
+def cost_optimal_allocation(total, areas, sds, costs):
+    """``n_h = n (W_h S_h / sqrt(c_h)) / sum_k (W_k S_k / sqrt(c_k))`` (Cochran 1977, ch. 5)."""
+    q = allocation_scores("optimal_cost", areas, sds, costs)
+    return float(total) * q / q.sum()
+
+
+def cost_optimal_total(budget, areas, sds, costs, fixed_cost=0.0):
+    """Total units that a budget buys under the cost-optimal allocation.
+
+    ``n = (C - c0) sum(W_h S_h / sqrt(c_h)) / sum(W_h S_h sqrt(c_h))``
+    (Cochran 1977, ch. 5).
+    """
+    w = stratum_weights(areas)
+    s = np.asarray(sds, dtype=float)
+    c = np.asarray(costs, dtype=float)
+    return (float(budget) - float(fixed_cost)) * np.sum(w * s / np.sqrt(c)) / np.sum(w * s * np.sqrt(c))
+
+
+# ----------------------------------------------------------------------------
+# bounds and rounding
+# ----------------------------------------------------------------------------
+def bounded_allocation(scores, amount, lower, upper, costs=None):
+    """Share ``amount`` in proportion to ``scores`` within per-stratum bounds.
+
+    Returns ``n_h = clip(lambda q_h, lower_h, upper_h)`` with ``lambda`` such that
+    ``sum c_h n_h = amount`` (``c_h = 1`` when ``costs`` is None, so the amount is
+    a total of units). This is the stable end of the iterative re-allocation:
+    strata over a bound are set to it and the rest of the effort is shared among
+    the others in proportion to ``q_h`` (Cochran 1977, ch. 5). ``g(lambda)`` is
+    piecewise linear and non-decreasing, so ``lambda`` is found exactly between
+    two of its break points. Strata with a zero score stay at their lower bound
+    unless the others are all full, and then share the rest equally.
+
+    Parameters
+    ----------
+    scores : array_like, non-negative
+    amount : float
+        Total units (or budget net of the fixed cost when ``costs`` is given).
+    lower, upper : array_like
+        Bounds, ``lower <= upper``; ``sum c lower <= amount <= sum c upper``.
+    costs : array_like, optional
+
+    Returns
+    -------
+    ndarray of float
+    """
+    q = np.asarray(scores, dtype=float)
+    lo = np.asarray(lower, dtype=float)
+    hi = np.asarray(upper, dtype=float)
+    c = np.ones_like(q) if costs is None else np.asarray(costs, dtype=float)
+    amount = float(amount)
+    tol = 1e-9 * max(1.0, abs(amount))
+    if amount < np.sum(c * lo) - tol or amount > np.sum(c * hi) + tol:
+        raise ValueError("The amount to allocate lies outside the bounds.")
+    positive = q > 0
+    if not positive.any():
+        return bounded_allocation(np.ones_like(q), amount, lo, hi, c)
+    full = np.where(positive, hi, lo)
+    if amount > np.sum(c * full) + tol:
+        # every stratum with a positive score is full: the zero-score strata take the rest
+        zero = ~positive
+        rest = amount - np.sum(c[positive] * hi[positive])
+        out = hi.copy()
+        out[zero] = bounded_allocation(np.ones(zero.sum()), rest, lo[zero], hi[zero], c[zero])
+        return out
+    breaks = np.unique(np.concatenate(([0.0], lo[positive] / q[positive], hi[positive] / q[positive])))
+    spent = np.sum(c * np.clip(breaks[:, None] * q, lo, hi), axis=1)
+    k = int(np.searchsorted(spent, amount, side="left"))
+    if k == 0:
+        lam = breaks[0]
+    elif k >= breaks.size:
+        lam = breaks[-1]
+    else:
+        g0, g1 = spent[k - 1], spent[k]
+        t = 0.0 if g1 <= g0 else (amount - g0) / (g1 - g0)
+        lam = breaks[k - 1] + t * (breaks[k] - breaks[k - 1])
+    return np.clip(lam * q, lo, hi)
+
+
+def largest_remainder_round(n_continuous, total, lower, upper):
+    """Whole units that sum to ``total`` and stay within the bounds.
+
+    Each stratum gets the whole part of its share; the units still missing go,
+    one each, to the strata with the largest fractional parts that are below
+    their upper bound (Hamilton's largest-remainder method). Integer bounds and
+    ``lower <= n_continuous <= upper`` guarantee the result stays within them.
+    """
+    x = np.asarray(n_continuous, dtype=float)
+    lo = np.asarray(lower, dtype=int)
+    hi = np.asarray(upper, dtype=int)
+    total = int(total)
+    n = np.clip(np.floor(x + 1e-9).astype(int), lo, hi)
+    frac = x - n
+    missing = total - int(n.sum())
+    # stable sort: ties go to the earlier stratum
+    if missing > 0:
+        order = np.argsort(-np.where(n < hi, frac, -np.inf), kind="stable")
+        take = order[:missing]
+        n[take] += 1
+    elif missing < 0:
+        order = np.argsort(np.where(n > lo, frac, np.inf), kind="stable")
+        n[order[:-missing]] -= 1
+    if int(n.sum()) != total or np.any(n < lo) or np.any(n > hi):
+        raise ValueError("The total cannot be met within the bounds.")
+    return n
+
+
+def round_within_budget(n_continuous, budget, costs, lower, upper):
+    """Whole units whose cost ``sum c_h n_h`` stays within ``budget``.
+
+    The whole parts first; then, by largest fractional part, one more unit in
+    each stratum whose cost still fits the budget and which is below its upper
+    bound.
+    """
+    x = np.asarray(n_continuous, dtype=float)
+    c = np.asarray(costs, dtype=float)
+    lo = np.asarray(lower, dtype=int)
+    hi = np.asarray(upper, dtype=int)
+    n = np.clip(np.floor(x + 1e-9).astype(int), lo, hi)
+    left = float(budget) - float(np.sum(c * n))
+    for h in np.argsort(-(x - n), kind="stable"):
+        if n[h] < hi[h] and c[h] <= left + 1e-9 * max(1.0, abs(float(budget))):
+            n[h] += 1
+            left -= c[h]
+    return n
+
+
+# ----------------------------------------------------------------------------
+# precision
+# ----------------------------------------------------------------------------
+def expected_precision(n, areas, unit_area, sds=None, means=None, fpc=True):
+    """Expected SE and CV of the stratified density (Cochran 1977, ch. 5).
+
+    ``V = sum W_h^2 S_h^2 (1 - f_h) / n_h`` with ``f_h = n_h a / A_h`` (0 when
+    ``fpc`` is False); stratum CV ``S_h sqrt((1 - f_h)/n_h) / ybar_h``; overall
+    CV ``sqrt(V) / sum W_h ybar_h``. Areas and ``unit_area`` in the same unit;
+    densities per that area unit.
+    """
+    n = np.asarray(n, dtype=float)
+    w = stratum_weights(areas)
+    a = float(unit_area)
+    nan = np.full(n.shape, np.nan)
+    if sds is None:
+        return Precision(np.nan, np.nan, np.nan, np.nan, np.nan, nan, nan.copy(), nan.copy())
+    s = np.asarray(sds, dtype=float)
+    f = n / unit_capacity(areas, a) if fpc else np.zeros_like(n)
+    one_minus_f = np.clip(1.0 - f, 0.0, 1.0)
+    with np.errstate(divide="ignore", invalid="ignore"):
+        stratum_var = np.where(n > 0, s**2 * one_minus_f / n, np.inf)
+        variance = float(np.sum(w**2 * stratum_var))
+        stratum_se = np.sqrt(stratum_var)
+        if means is None:
+            overall_mean, cv, stratum_cv = np.nan, np.nan, nan.copy()
+        else:
+            m = np.asarray(means, dtype=float)
+            overall_mean = float(np.sum(w * m))
+            cv = float(np.sqrt(variance) / overall_mean) if overall_mean > 0 else np.nan
+            stratum_cv = np.where(m > 0, stratum_se / m, np.nan)
+    return Precision(
+        variance_mean=variance,
+        se_mean=float(np.sqrt(variance)),
+        se_density=float(np.sqrt(variance) / a),
+        overall_mean=overall_mean,
+        cv=cv,
+        stratum_se_mean=stratum_se,
+        stratum_se_density=stratum_se / a,
+        stratum_cv=stratum_cv,
+    )
+
+
+# ----------------------------------------------------------------------------
+# input checks
+# ----------------------------------------------------------------------------
+def _listing(ids, mask):
+    chosen = [ids[i] for i in np.flatnonzero(mask)]
+    shown = ", ".join(str(x) for x in chosen[:20])
+    return chosen, shown + (f" and {len(chosen) - 20} more" if len(chosen) > 20 else "")
+
+
+def check_values(values, name, ids, allow_zero=False):
+    """Return ``values`` as floats, or raise :class:`InputError` naming the bad strata.
+
+    NULL (None/NaN), negative and (unless ``allow_zero``) zero values are refused.
+    """
+    v = np.array([np.nan if x is None else x for x in values], dtype=float)
+    bad = ~np.isfinite(v) | (v < 0 if allow_zero else v <= 0)
+    if bad.any():
+        chosen, shown = _listing(ids, bad)
+        what = "NULL or negative" if allow_zero else "NULL, negative or zero"
+        raise InputError(
+            f"The {name} is {what} for stratum feature(s) {shown}. "
+            f"Fill in a {'non-negative' if allow_zero else 'positive'} value for every stratum, "
+            "or remove those strata from the layer.",
+            ids=chosen,
+        )
+    return v
+
+
+# ----------------------------------------------------------------------------
+# the whole step
+# ----------------------------------------------------------------------------
+def allocate(
+    areas,
+    unit_area,
+    method="neyman",
+    *,
+    total=None,
+    budget=None,
+    target_cv=None,
+    sds=None,
+    means=None,
+    costs=None,
+    fixed_cost=0.0,
+    min_per_stratum=DEFAULT_MIN_PER_STRATUM,
+    ids=None,
+    names=None,
+    fpc=True,
+):
+    """Units per stratum for a total, a budget or a target CV.
+
+    Exactly one target is used: ``target_cv`` if given (> 0), else ``budget``
+    (> 0, needs ``costs``), else ``total``. For a target CV the smallest total is
+    found (by bisection, the CV falls as the total grows) whose rounded allocation
+    has an expected CV of the overall density at most ``target_cv``, with the
+    finite-population correction (Cochran 1977, ch. 5).
+
+    Parameters
+    ----------
+    areas : array_like
+        Stratum areas ``A_h`` (same area unit as ``unit_area``).
+    unit_area : float
+        Area of one sample unit ``a``.
+    method : {"equal", "proportional", "neyman", "optimal_cost"}
+    total : int, optional
+    budget : float, optional
+        ``C`` in ``C = c0 + sum c_h n_h``.
+    target_cv : float, optional
+        Wanted CV of the overall density, e.g. 0.2.
+    sds, means, costs : array_like, optional
+        Pilot SD and mean of counts per unit, cost per unit, per stratum.
+    fixed_cost : float
+        ``c0``, the cost that does not depend on the number of units.
+    min_per_stratum : int
+        Lower bound per stratum (default 2: common practice).
+    ids : sequence, optional
+        Stratum identifiers used in messages.
+    names : dict, optional
+        Display names for ``area``, ``sd``, ``mean`` and ``cost`` in messages
+        (e.g. the field names).
+    fpc : bool
+        Apply the finite-population correction.
+
+    Returns
+    -------
+    Allocation
+    """
+    names = {**_DEFAULT_NAMES, **(names or {})}
+    if method not in METHODS:
+        raise InputError(f"Unknown allocation method {method!r}; use one of: {', '.join(METHODS)}.")
+    n_strata = len(areas)
+    if n_strata == 0:
+        raise InputError("The strata layer has no features. Run the stratification first.")
+    ids = list(range(1, n_strata + 1)) if ids is None else list(ids)
+    area = check_values(areas, names["area"], ids)
+    unit_area = float(unit_area)
+    if not np.isfinite(unit_area) or unit_area <= 0:
+        raise InputError("The unit area must be a positive number.")
+    min_per_stratum = int(min_per_stratum)
+    if min_per_stratum < 1:
+        raise InputError("The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).")
+    warnings = []
+
+    s = None if sds is None else check_values(sds, names["sd"], ids, allow_zero=True)
+    m = None if means is None else check_values(means, names["mean"], ids, allow_zero=True)
+    use_budget = target_cv is None or not target_cv > 0
+    use_budget = use_budget and budget is not None and budget > 0
+    c = None
+    if costs is not None:
+        c = check_values(costs, names["cost"], ids)
+    elif method == "optimal_cost" or use_budget:
+        raise InputError(
+            f"The {'cost method' if method == 'optimal_cost' else 'budget'} needs a cost per unit for "
+            "every stratum: choose the cost field."
+        )
+    fixed_cost = float(fixed_cost or 0.0)
+    if fixed_cost < 0:
+        raise InputError("The fixed cost must be zero or positive.")
+
+    # method actually applied
+    used = method
+    if method in ("neyman", "optimal_cost"):
+        if s is None:
+            warnings.append(
+                "No pilot standard deviations: the allocation assumes equal SDs in all strata "
+                + ("(proportional to area)." if method == "neyman" else "(area / square root of cost).")
+            )
+            used = "proportional" if method == "neyman" else method
+        elif not np.any(s > 0):
+            warnings.append("All pilot standard deviations are zero: proportional allocation is used instead.")
+            used = "proportional"
+        elif np.any(s == 0):
+            zero_ids, shown = _listing(ids, s == 0)
+            warnings.append(
+                f"The {names['sd']} is zero for stratum feature(s) {shown}: they get only the minimum "
+                f"of {min_per_stratum} unit(s). A pilot with no variation is rarely the truth; check it."
+            )
+    scores = allocation_scores(used, area, s, c)
+
+    # bounds
+    capacity = unit_capacity(area, unit_area)
+    upper = np.floor(capacity + 1e-9).astype(int)
+    if np.any(upper < 1):
+        chosen, shown = _listing(ids, upper < 1)
+        raise InputError(
+            f"Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. "
+            "Merge them with a neighbour or use a smaller unit area.",
+            ids=chosen,
+        )
+    lower = np.minimum(min_per_stratum, upper)
+    if np.any(upper < min_per_stratum):
+        _, shown = _listing(ids, upper < min_per_stratum)
+        warnings.append(
+            f"Stratum feature(s) {shown} hold fewer than {min_per_stratum} units: they get all the units that fit."
+        )
+
+    # target
+    if target_cv is not None and target_cv > 0:
+        target = "target_cv"
+        n, x = _allocation_for_cv(float(target_cv), scores, area, unit_area, s, m, lower, upper, fpc, names)
+        if budget is not None and budget > 0:
+            warnings.append("A target CV is set: the budget is not used.")
+    elif use_budget:
+        target = "budget"
+        minimum = fixed_cost + float(np.sum(c * lower))
+        maximum = fixed_cost + float(np.sum(c * upper))
+        if budget < minimum:
+            raise InputError(
+                f"The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus "
+                f"{min_per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the "
+                "minimum per stratum."
+            )
+        spend = min(float(budget), maximum) - fixed_cost
+        if budget > maximum:
+            warnings.append(f"The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.")
+        x = bounded_allocation(scores, spend, lower, upper, c)
+        n = round_within_budget(x, spend, c, lower, upper)
+    else:
+        target = "total"
+        if total is None or total <= 0:
+            raise InputError("Give a total number of units, a budget (with costs) or a target CV.")
+        total = int(round(total))
+        if total < lower.sum():
+            raise InputError(
+                f"The total of {total} units is below the minimum of {int(lower.sum())} "
+                f"({min_per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum."
+            )
+        if total > upper.sum():
+            raise InputError(
+                f"The total of {total} units exceeds the {int(upper.sum())} units of {unit_area:g} that fit "
+                "in the strata. Lower the total or use smaller units."
+            )
+        x = bounded_allocation(scores, total, lower, upper)
+        n = largest_remainder_round(x, total, lower, upper)
+
+    total = int(n.sum())
+    if np.any(n == 1):
+        _, shown = _listing(ids, n == 1)
+        warnings.append(f"Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.")
+    x_at_cap = np.isclose(x, upper) & (upper > lower)
+    if method != "equal" and np.any(x_at_cap):
+        _, shown = _listing(ids, x_at_cap)
+        warnings.append(f"Stratum feature(s) {shown} are sampled completely (every unit that fits).")
+    precision = expected_precision(n, area, unit_area, s, m, fpc)
+    if m is not None and np.any(m == 0):
+        _, shown = _listing(ids, m == 0)
+        warnings.append(f"The {names['mean']} is zero in stratum feature(s) {shown}: their CV is undefined.")
+    comparison = compare_methods(total, area, unit_area, s, m, lower, upper, precision.variance_mean, fpc)
+    return Allocation(
+        method=method,
+        method_used=used,
+        target=target,
+        ids=tuple(ids),
+        n=n,
+        n_continuous=x,
+        total=total,
+        lower=lower,
+        upper=upper,
+        capacity=capacity,
+        cost=float(fixed_cost + np.sum(c * n)) if c is not None else np.nan,
+        precision=precision,
+        comparison=comparison,
+        warnings=tuple(warnings),
+    )
+
+
+def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, fpc, names):
+    """Smallest total whose rounded allocation has expected CV <= target (bisection)."""
+    if s is None or m is None:
+        raise InputError(
+            "A target CV needs both the pilot standard deviation and the pilot mean count per unit: "
+            "choose the SD field and the mean field."
+        )
+    if not np.sum(stratum_weights(area) * m) > 0:
+        raise InputError(f"The {names['mean']} is zero in every stratum: no CV can be computed.")
+
+    def design(total):
+        x = bounded_allocation(scores, total, lower, upper)
+        n = largest_remainder_round(x, total, lower, upper)
+        return n, x, expected_precision(n, area, unit_area, s, m, fpc).cv
+
+    lo_total, hi_total = int(lower.sum()), int(upper.sum())
+    n, x, cv = design(hi_total)
+    if cv > target_cv:
+        raise InputError(
+            f"The target CV of {target_cv:.3g} cannot be reached: even all {hi_total} units that fit give "
+            f"an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units."
+        )
+    best = (n, x)
+    n, x, cv = design(lo_total)
+    if cv <= target_cv:
+        return n, x
+    while hi_total - lo_total > 1:  # invariant: cv(lo_total) > target >= cv(hi_total)
+        mid = (lo_total + hi_total) // 2
+        n, x, cv = design(mid)
+        if cv <= target_cv:
+            hi_total, best = mid, (n, x)
+        else:
+            lo_total = mid
+    return best
+
+
+def compare_methods(total, areas, unit_area, sds, means, lower, upper, reference_variance=np.nan, fpc=True):
+    """Equal, proportional and Neyman allocations of ``total`` with the same bounds.
+
+    Returns a tuple of :class:`MethodComparison`; Neyman is left out without SDs
+    (or when all are zero). ``relative_variance`` is the variance divided by
+    ``reference_variance``.
+    """
+    rows = []
+    methods = ["equal", "proportional"]
+    if sds is not None and np.any(np.asarray(sds) > 0):
+        methods.append("neyman")
+    for method in methods:
+        q = allocation_scores(method, areas, sds)
+        n = largest_remainder_round(bounded_allocation(q, total, lower, upper), total, lower, upper)
+        p = expected_precision(n, areas, unit_area, sds, means, fpc)
+        rel = p.variance_mean / reference_variance if reference_variance > 0 else np.nan
+        rows.append(MethodComparison(method, n, p, float(rel)))
+    return tuple(rows)

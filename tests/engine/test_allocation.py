@@ -1,0 +1,264 @@
+"""Allocation of effort across strata, checked against outside references.
+
+References: Neyman (1934); Cochran, W. G. (1977) Sampling Techniques, 3rd ed.,
+ch. 5; Lohr, S. L. (1999) Sampling: Design and Analysis; scipy.optimize (SLSQP)
+as a numerical oracle; simulated populations with known S_h.
+"""
+import numpy as np
+import pytest
+from scipy.optimize import minimize
+
+from plotwise.processing.engine import allocation as al
+from plotwise.processing.engine.errors import InputError
+
+AREAS = np.array([120.0, 340.0, 75.0, 260.0])
+SDS = np.array([3.0, 1.2, 6.5, 2.0])
+MEANS = np.array([4.0, 1.5, 9.0, 2.5])
+COSTS = np.array([1.5, 0.5, 3.0, 1.0])
+UNIT = 0.25  # so N_h = A_h / a = 480, 1360, 300, 1040
+
+
+def _stratified_variance(n, areas=AREAS, sds=SDS, unit=UNIT):
+    """Sum W_h^2 S_h^2 (1 - f_h) / n_h  (Cochran 1977, ch. 5)."""
+    w = areas / areas.sum()
+    big_n = areas / unit
+    return np.sum(w**2 * sds**2 * (1 - n / big_n) / n)
+
+
+def _slsqp(constraint_costs, amount, lower=None, upper=None, sds=SDS):
+    """Minimise the stratified variance under sum c_h n_h = amount (scipy SLSQP as oracle)."""
+    w = AREAS / AREAS.sum()
+    big_n = AREAS / UNIT
+    k = w**2 * sds**2
+    scale = amount / np.sum(constraint_costs)
+
+    def objective(z):  # z = n / scale keeps the problem well conditioned
+        n = z * scale
+        return np.sum(k * (1 - n / big_n) / n) * scale
+
+    def gradient(z):
+        n = z * scale
+        return -k / n**2 * scale**2
+
+    lo = np.full(AREAS.size, 1e-6) if lower is None else lower / scale
+    hi = [None] * AREAS.size if upper is None else upper / scale
+    result = minimize(
+        objective,
+        np.ones(AREAS.size),
+        jac=gradient,
+        method="SLSQP",
+        bounds=list(zip(lo, hi)),
+        constraints=[{"type": "eq", "fun": lambda z: constraint_costs @ (z * scale) - amount,
+                      "jac": lambda z: constraint_costs * scale}],
+        options={"ftol": 1e-15, "maxiter": 500},
+    )
+    assert result.success, result.message
+    return result.x * scale
+
+
+def test_neyman_equals_slsqp_minimiser():
+    # scipy.optimize.minimize (SLSQP) of sum W^2 S^2 (1-f)/n under sum n = 80
+    expected = _slsqp(np.ones(4), 80.0)
+    got = al.neyman_allocation(80, AREAS, SDS)
+    np.testing.assert_allclose(got, expected, rtol=1e-6)
+
+
+def test_cost_optimal_equals_slsqp_minimiser_under_budget():
+    # scipy SLSQP minimiser under the budget C - c0 = sum c_h n_h (Cochran 1977, ch. 5)
+    budget, fixed = 150.0, 30.0
+    expected = _slsqp(COSTS, budget - fixed)
+    total = al.cost_optimal_total(budget, AREAS, SDS, COSTS, fixed)
+    got = al.cost_optimal_allocation(total, AREAS, SDS, COSTS)
+    np.testing.assert_allclose(got, expected, rtol=1e-6)
+    np.testing.assert_allclose(COSTS @ got + fixed, budget, rtol=1e-12)
+
+
+def test_bounded_neyman_equals_slsqp_with_bounds():
+    # SLSQP with box constraints 2 <= n_h <= N_h: a small stratum hits its cap and
+    # low-SD strata sit on the minimum; the excess is shared among the rest
+    areas = AREAS
+    upper = np.array([30.0, 400.0, 12.0, 300.0])
+    lower = np.full(4, 2.0)
+    q = al.allocation_scores("neyman", areas, SDS)
+    got = al.bounded_allocation(q, 60.0, lower, upper)
+    expected = _slsqp(np.ones(4), 60.0, lower, upper)
+    np.testing.assert_allclose(got, expected, rtol=1e-6)
+    assert got[2] == pytest.approx(12.0)  # the capped stratum
+    # a stratum with a small SD sits on the minimum of 2
+    sds = np.array([3.0, 0.05, 6.5, 2.0])
+    got = al.bounded_allocation(al.allocation_scores("neyman", areas, sds), 30.0, lower, upper)
+    np.testing.assert_allclose(got, _slsqp(np.ones(4), 30.0, lower, upper, sds), rtol=1e-6)
+    assert got[1] == pytest.approx(2.0)
+
+
+def test_bounded_cost_equals_slsqp_with_bounds():
+    upper = np.array([25.0, 400.0, 10.0, 300.0])
+    lower = np.full(4, 2.0)
+    q = al.allocation_scores("optimal_cost", AREAS, SDS, COSTS)
+    got = al.bounded_allocation(q, 90.0, lower, upper, COSTS)
+    expected = _slsqp(COSTS, 90.0, lower, upper)
+    np.testing.assert_allclose(got, expected, rtol=1e-6)
+
+
+def test_lohr_proportional_worked_example():
+    # Lohr (1999), Sampling: Design and Analysis, stratified sample of the 1992
+    # Census of Agriculture by region: N_h = 1054 (NC), 220 (NE), 1382 (S), 422 (W),
+    # n = 300 by proportional allocation gives 103, 21, 135, 41.  # from memory
+    counties = np.array([1054.0, 220.0, 1382.0, 422.0])
+    result = al.allocate(counties, 1.0, "proportional", total=300, min_per_stratum=2)
+    np.testing.assert_array_equal(result.n, [103, 21, 135, 41])
+
+
+def test_cochran_sample_size_for_a_variance_with_fpc():
+    # Cochran (1977), ch. 5: with Neyman allocation the total needed for a variance V is
+    # n = (sum W_h S_h)^2 / (V + sum W_h S_h^2 / N)
+    w = AREAS / AREAS.sum()
+    big_n = AREAS.sum() / UNIT
+    ybar = np.sum(w * MEANS)
+    for target in (0.05, 0.08, 0.15):
+        v = (target * ybar) ** 2
+        n_cochran = np.sum(w * SDS) ** 2 / (v + np.sum(w * SDS**2) / big_n)
+        result = al.allocate(AREAS, UNIT, "neyman", target_cv=target, sds=SDS, means=MEANS)
+        assert result.precision.cv <= target
+        # whole units cost a little precision, never less than the continuous answer
+        assert np.ceil(n_cochran) <= result.total <= np.ceil(n_cochran) + 2
+        # the smallest such total: one fewer misses the target
+        smaller = al.allocate(AREAS, UNIT, "neyman", total=result.total - 1, sds=SDS, means=MEANS)
+        assert smaller.precision.cv > target
+
+
+@pytest.mark.parametrize("method", al.METHODS)
+@pytest.mark.parametrize("total", [8, 9, 37, 250, 3180])
+def test_totals_exact_and_bounds_hold(method, total):
+    result = al.allocate(AREAS, UNIT, method, total=total, sds=SDS, means=MEANS, costs=COSTS, min_per_stratum=2)
+    assert result.n.sum() == total  # the requested total, exactly
+    assert np.all(result.n >= 2)  # MIN_PER_STRATUM  # common practice
+    assert np.all(result.n <= np.floor(AREAS / UNIT))  # units that fit
+    assert np.all(np.abs(result.n - result.n_continuous) < 1.0 + 1e-9)  # rounding moves less than one unit
+
+
+def test_caps_reallocate_excess_until_stable():
+    # N_h = 10, 20, 400, 400: Neyman would give the first two far more than fits
+    areas = np.array([10.0, 20.0, 400.0, 400.0])
+    sds = np.array([50.0, 40.0, 1.0, 2.0])
+    result = al.allocate(areas, 1.0, "neyman", total=100, sds=sds)
+    assert result.n[0] == 10 and result.n[1] == 20  # both capped
+    # the remaining 70 shared 1 : 2 as W_h S_h (Neyman 1934)
+    np.testing.assert_allclose(result.n_continuous[2:], [70 / 3, 140 / 3], rtol=1e-12)
+    assert result.n.sum() == 100
+    assert any("sampled completely" in w for w in result.warnings)
+
+
+def test_budget_rounding_stays_within_budget():
+    result = al.allocate(AREAS, UNIT, "optimal_cost", budget=137.0, fixed_cost=12.0, sds=SDS, costs=COSTS)
+    assert result.cost <= 137.0 + 1e-9
+    assert np.all(result.n >= 2)
+    # one more unit anywhere would break the budget, or the rounding left less than one unit's cost
+    assert 137.0 - result.cost < COSTS.max() * AREAS.size
+
+
+def test_expected_cv_matches_monte_carlo():
+    # truth by construction: a synthetic population with known S_h, stratified
+    # simple random sampling without replacement, simulated 20,000 times
+    rng = np.random.Generator(np.random.PCG64(20261201))
+    sizes = np.array([300, 180, 120])
+    population = [
+        rng.negative_binomial(2, 2 / (2 + mu), size=size).astype(float)
+        for size, mu in zip(sizes, (1.0, 4.0, 12.0))
+    ]
+    sds = np.array([p.std(ddof=1) for p in population])  # S_h with the N_h - 1 divisor (Cochran 1977, ch. 5)
+    means = np.array([p.mean() for p in population])
+    areas = sizes * 0.04  # units of 0.04 area: N_h = sizes exactly
+    result = al.allocate(areas, 0.04, "neyman", total=45, sds=sds, means=means)
+    weights = areas / areas.sum()
+    reps = 20000
+    estimate = np.zeros(reps)
+    for values, n_h, w_h in zip(population, result.n, weights):
+        draws = np.argsort(rng.random((reps, values.size)), axis=1)[:, :n_h]
+        estimate += w_h * values[draws].mean(axis=1)
+    true_mean = np.sum(weights * means)
+    mc_cv = estimate.std(ddof=1) / true_mean
+    assert abs(estimate.mean() / true_mean - 1) < 0.01  # unbiased
+    assert mc_cv == pytest.approx(result.precision.cv, rel=0.05)
+    # the per-stratum CV too
+    for values, n_h, cv_h in zip(population, result.n, result.precision.stratum_cv):
+        draws = np.argsort(rng.random((reps, values.size)), axis=1)[:, :n_h]
+        mc = values[draws].mean(axis=1)
+        assert mc.std(ddof=1) / values.mean() == pytest.approx(cv_h, rel=0.05)
+
+
+def test_comparison_neyman_never_worse():
+    # Neyman minimises the variance for a fixed total (Neyman 1934)
+    result = al.allocate(AREAS, UNIT, "neyman", total=60, sds=SDS, means=MEANS)
+    rows = {row.method: row for row in result.comparison}
+    assert set(rows) == {"equal", "proportional", "neyman"}
+    assert all(row.n.sum() == 60 for row in rows.values())
+    assert rows["neyman"].relative_variance == pytest.approx(1.0)
+    assert rows["proportional"].relative_variance >= 1.0
+    assert rows["equal"].relative_variance >= 1.0
+    np.testing.assert_allclose(rows["neyman"].precision.variance_mean, _stratified_variance(result.n))
+
+
+def test_se_density_scales_with_unit_area():
+    result = al.allocate(AREAS, UNIT, "neyman", total=60, sds=SDS, means=MEANS)
+    p = result.precision
+    assert p.se_density == pytest.approx(np.sqrt(_stratified_variance(result.n)) / UNIT)
+    assert p.cv == pytest.approx(p.se_mean / np.sum(AREAS / AREAS.sum() * MEANS))
+
+
+# ----------------------------------------------------------------------------- bad input
+@pytest.mark.parametrize("bad", [None, np.nan, -3.0, 0.0])
+def test_bad_area_names_the_features(bad):
+    areas = [10.0, bad, 30.0]
+    with pytest.raises(InputError) as err:
+        al.allocate(areas, 1.0, "proportional", total=10, ids=[11, 12, 13])
+    assert err.value.ids == [12]
+    assert "12" in err.value.message
+
+
+@pytest.mark.parametrize("bad", [None, -1.0])
+def test_bad_sd_names_the_features(bad):
+    with pytest.raises(InputError) as err:
+        al.allocate([10.0, 20.0, 30.0], 1.0, "neyman", total=10, sds=[1.0, 2.0, bad], ids=["a", "b", "c"],
+                    names={"sd": "field 'sd'"})
+    assert err.value.ids == ["c"] and "field 'sd'" in err.value.message
+
+
+@pytest.mark.parametrize("bad", [None, -1.0, 0.0])
+def test_bad_cost_names_the_features(bad):
+    with pytest.raises(InputError) as err:
+        al.allocate([10.0, 20.0], 1.0, "optimal_cost", total=10, sds=[1.0, 2.0], costs=[bad, 2.0], ids=[5, 6])
+    assert err.value.ids == [5]
+
+
+def test_all_sd_zero_falls_back_to_proportional():
+    result = al.allocate([10.0, 30.0], 1.0, "neyman", total=8, sds=[0.0, 0.0])
+    assert result.method_used == "proportional"
+    np.testing.assert_array_equal(result.n, [2, 6])
+    assert any("proportional" in w for w in result.warnings)
+
+
+def test_no_sd_falls_back_to_proportional_with_warning():
+    result = al.allocate([10.0, 30.0], 1.0, "neyman", total=8)
+    assert result.method_used == "proportional" and result.warnings
+
+
+def test_unreachable_target_cv_gives_best_cv():
+    with pytest.raises(InputError) as err:
+        al.allocate([2.5, 3.5], 1.0, "neyman", target_cv=1e-6, sds=[2.0, 3.0], means=[1.0, 1.0])
+    assert "cannot be reached" in err.value.message and "expected CV of" in err.value.message
+
+
+def test_budget_too_small_gives_minimum_budget():
+    # minimum = c0 + MIN_PER_STRATUM * sum c_h = 10 + 2 * (1 + 3) = 18
+    with pytest.raises(InputError) as err:
+        al.allocate([10.0, 20.0], 1.0, "optimal_cost", budget=17.0, fixed_cost=10.0, sds=[1.0, 1.0],
+                    costs=[1.0, 3.0])
+    assert "minimum of 18" in err.value.message
+
+
+def test_total_out_of_range():
+    with pytest.raises(InputError):
+        al.allocate([10.0, 20.0], 1.0, "equal", total=3)  # below 2 per stratum
+    with pytest.raises(InputError):
+        al.allocate([10.0, 20.0], 1.0, "equal", total=31)  # more than fits
