@@ -93,14 +93,16 @@ def out_of_range_cells(values, mask_min=None, mask_max=None):
 def _open(source):
     if isinstance(source, gdal.Dataset):
         return source
-    ds = gdal.Open(str(source), gdal.GA_ReadOnly)
+    try:
+        ds = gdal.Open(str(source), gdal.GA_ReadOnly)
+    except RuntimeError:  # GDAL with exceptions enabled
+        ds = None
     if ds is None:
         raise InputError(f"The mask raster (MASK) '{source}' cannot be opened by GDAL.")
     return ds
 
 
-def _same_crs(ds, target):
-    wkt = ds.GetProjection()
+def _same_crs(wkt, target):
     if not wkt:
         return True  # a raster without a CRS is taken to be in the computation CRS
     try:
@@ -162,12 +164,12 @@ def _target_resolution(ds, target_wkt):
 
 def _read_warped(ds, band_no, extent, target_wkt, resolution=None):
     """Values over ``extent`` warped to the target CRS; NoData and uncovered -> NaN."""
-    res = float(resolution) if resolution else _target_resolution(ds, target_wkt)
+    single = gdal.Translate("", ds, format="VRT", bandList=[band_no])
+    res = float(resolution) if resolution else _target_resolution(single, target_wkt)
     c0, r0, cols, rows = _snapped_grid(extent, 0.0, 0.0, res, -res)
     _check_size(rows, cols)
     x0, y1 = c0 * res, -r0 * res
     bounds = (x0, y1 - rows * res, x0 + cols * res, y1)
-    single = gdal.Translate("", ds, format="VRT", bandList=[band_no])
     options = gdal.WarpOptions(
         format="MEM",
         dstSRS=target_wkt,
@@ -226,7 +228,8 @@ def _polygonize(masked, geotransform, target_wkt, progress=None):
 
 
 def mask_polygons(
-    source, extent, crs, mask_min=None, mask_max=None, band=1, resolution=None, progress=None
+    source, extent, crs, mask_min=None, mask_max=None, band=1, resolution=None, source_crs=None,
+    progress=None,
 ):
     """Polygons of the raster cells outside ``[mask_min, mask_max]`` or NoData.
 
@@ -245,6 +248,9 @@ def mask_polygons(
     resolution : float, optional
         Cell size in metres when the raster must be warped (default: the size
         GDAL suggests for the reprojected raster).
+    source_crs : str or pyproj.CRS, optional
+        CRS of the raster when it differs from the one in its file (the host may
+        have it set by the user); default: the file's own CRS.
     progress : callable, optional
         ``progress(fraction) -> bool``; True cancels (raises ``Cancelled``).
 
@@ -262,9 +268,13 @@ def mask_polygons(
         raise InputError(f"The mask raster (MASK) has no band {band}; it has {ds.RasterCount}.")
     target = pyproj.CRS.from_user_input(crs)
     target_wkt = target.to_wkt()
+    if source_crs is not None:
+        source_wkt = pyproj.CRS.from_user_input(source_crs).to_wkt()
+        if not _same_crs(ds.GetProjection(), pyproj.CRS.from_wkt(source_wkt)):
+            ds = gdal.Translate("", ds, format="VRT", outputSRS=source_wkt)
     gt = ds.GetGeoTransform()
     north_up = gt[2] == 0 and gt[4] == 0 and gt[5] < 0
-    if _same_crs(ds, target) and north_up and not resolution:
+    if _same_crs(ds.GetProjection(), target) and north_up and not resolution:
         values, covered, out_gt = _read_aligned(ds, band, extent)
         warped = False
     else:

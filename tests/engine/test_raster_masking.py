@@ -214,3 +214,26 @@ def test_cancel(utm_raster):
     with pytest.raises(Cancelled):
         rm.mask_polygons(utm_raster[0], (X0, Y0 - 900, X0 + 900, Y0), UTM, None, 30.0,
                          progress=lambda f: True)
+
+
+def test_crs_given_by_the_caller_overrides_a_missing_one(tmp_path):
+    # a raster file without a CRS whose CRS the user has set in the host
+    path = str(tmp_path / "nocrs.tif")
+    ds = gdal.GetDriverByName("GTiff").Create(path, 10, 10, 1, gdal.GDT_Float32)
+    ds.SetGeoTransform((X0, RES, 0, Y0, 0, -RES))
+    values = np.zeros((10, 10), np.float32)
+    values[:, :4] = 60.0  # 40 cells above 30
+    ds.GetRasterBand(1).WriteArray(values)
+    ds = None
+    extent = (X0, Y0 - 10 * RES, X0 + 10 * RES, Y0)
+    result = rm.mask_polygons(path, extent, UTM, None, 30.0, source_crs="EPSG:32633")
+    assert not result.warped
+    assert result.masked_cells == 40  # numpy: (values > 30).sum()
+    assert _area(result.polygons) == pytest.approx(40 * RES * RES)
+
+
+def test_unreadable_raster_is_an_input_error(tmp_path):
+    bad = tmp_path / "bad.tif"
+    bad.write_text("not a raster")
+    with pytest.raises(InputError, match="MASK"):
+        rm.mask_polygons(str(bad), (0, 0, 1, 1), UTM)
