@@ -1,0 +1,110 @@
+"""The one place for differences between QGIS 3.22 and 4.x (Qt5 and Qt6).
+
+Algorithms use these names instead of version-specific enums, so that the rest of
+the code reads the same on every supported host.
+"""
+from qgis.core import Qgis, QgsField, QgsProcessing, QgsProcessingParameterDefinition, QgsWkbTypes
+
+QGIS_VERSION_INT = Qgis.QGIS_VERSION_INT
+
+
+def _first(*getters):
+    for getter in getters:
+        try:
+            return getter()
+        except AttributeError:
+            continue
+    raise AttributeError("no compatible enum found")
+
+
+# Field types: QMetaType.Type from 3.38 on (and only that in 4.x), QVariant before.
+try:
+    from qgis.PyQt.QtCore import QMetaType
+
+    _META = QMetaType.Type
+    _HAS_METATYPE_FIELDS = QGIS_VERSION_INT >= 33800
+except (ImportError, AttributeError):  # pragma: no cover
+    _HAS_METATYPE_FIELDS = False
+
+if _HAS_METATYPE_FIELDS:  # pragma: no cover (exercised on 3.38+)
+    FIELD_TYPES = {
+        "int": _META.Int,
+        "int64": _META.LongLong,
+        "double": _META.Double,
+        "string": _META.QString,
+    }
+else:
+    from qgis.PyQt.QtCore import QVariant
+
+    FIELD_TYPES = {
+        "int": QVariant.Int,
+        "int64": QVariant.LongLong,
+        "double": QVariant.Double,
+        "string": QVariant.String,
+    }
+
+
+def make_field(name, kind, length=0, precision=0):
+    """A ``QgsField`` of ``kind`` ('int', 'int64', 'double' or 'string')."""
+    field = QgsField(name, FIELD_TYPES[kind])
+    if length:
+        field.setLength(length)
+    if precision:
+        field.setPrecision(precision)
+    return field
+
+
+def field_is_numeric(field):
+    """True for integer and real fields, on every host version."""
+    return field.isNumeric()
+
+
+# Processing source types: Qgis.ProcessingSourceType from 3.36 on.
+TYPE_VECTOR_POLYGON = _first(lambda: Qgis.ProcessingSourceType.VectorPolygon, lambda: QgsProcessing.TypeVectorPolygon)
+TYPE_VECTOR_POINT = _first(lambda: Qgis.ProcessingSourceType.VectorPoint, lambda: QgsProcessing.TypeVectorPoint)
+TYPE_VECTOR_ANY = _first(lambda: Qgis.ProcessingSourceType.VectorAnyGeometry, lambda: QgsProcessing.TypeVectorAnyGeometry)
+TYPE_VECTOR_LINE = _first(lambda: Qgis.ProcessingSourceType.VectorLine, lambda: QgsProcessing.TypeVectorLine)
+TYPE_VECTOR = _first(lambda: Qgis.ProcessingSourceType.Vector, lambda: QgsProcessing.TypeVector)
+TYPE_RASTER = _first(lambda: Qgis.ProcessingSourceType.Raster, lambda: QgsProcessing.TypeRaster)
+
+# Parameter flags: Qgis.ProcessingParameterFlag from 3.36 on.
+FLAG_ADVANCED = _first(
+    lambda: Qgis.ProcessingParameterFlag.Advanced, lambda: QgsProcessingParameterDefinition.FlagAdvanced
+)
+FLAG_OPTIONAL = _first(
+    lambda: Qgis.ProcessingParameterFlag.Optional, lambda: QgsProcessingParameterDefinition.FlagOptional
+)
+
+# Geometry types: Qgis.WkbType from 3.30 on.
+WKB_POINT = _first(lambda: Qgis.WkbType.Point, lambda: QgsWkbTypes.Point)
+WKB_LINESTRING = _first(lambda: Qgis.WkbType.LineString, lambda: QgsWkbTypes.LineString)
+WKB_POLYGON = _first(lambda: Qgis.WkbType.Polygon, lambda: QgsWkbTypes.Polygon)
+WKB_MULTIPOLYGON = _first(lambda: Qgis.WkbType.MultiPolygon, lambda: QgsWkbTypes.MultiPolygon)
+WKB_NOGEOMETRY = _first(lambda: Qgis.WkbType.NoGeometry, lambda: QgsWkbTypes.NoGeometry)
+
+GEOMETRY_POLYGON = _first(lambda: Qgis.GeometryType.Polygon, lambda: QgsWkbTypes.PolygonGeometry)
+GEOMETRY_POINT = _first(lambda: Qgis.GeometryType.Point, lambda: QgsWkbTypes.PointGeometry)
+GEOMETRY_LINE = _first(lambda: Qgis.GeometryType.Line, lambda: QgsWkbTypes.LineGeometry)
+
+# Number parameter types.
+from qgis.core import QgsProcessingParameterNumber  # noqa: E402
+
+NUMBER_INTEGER = _first(
+    lambda: Qgis.ProcessingNumberParameterType.Integer, lambda: QgsProcessingParameterNumber.Integer
+)
+NUMBER_DOUBLE = _first(
+    lambda: Qgis.ProcessingNumberParameterType.Double, lambda: QgsProcessingParameterNumber.Double
+)
+
+# Message levels.
+LEVEL_INFO = _first(lambda: Qgis.MessageLevel.Info, lambda: Qgis.Info)
+LEVEL_WARNING = _first(lambda: Qgis.MessageLevel.Warning, lambda: Qgis.Warning)
+LEVEL_CRITICAL = _first(lambda: Qgis.MessageLevel.Critical, lambda: Qgis.Critical)
+
+# Sink flags and field parameter types.
+from qgis.core import QgsProcessingParameterField  # noqa: E402
+
+FIELD_NUMERIC = _first(
+    lambda: Qgis.ProcessingFieldParameterDataType.Numeric, lambda: QgsProcessingParameterField.Numeric
+)
+FIELD_ANY = _first(lambda: Qgis.ProcessingFieldParameterDataType.Any, lambda: QgsProcessingParameterField.Any)

@@ -1,0 +1,127 @@
+"""What every Plotwise algorithm shares: translation, groups, seed, report, progress, errors."""
+import contextlib
+import os
+
+from qgis.core import (
+    QgsProcessingAlgorithm,
+    QgsProcessingException,
+    QgsProcessingParameterFileDestination,
+    QgsProcessingParameterNumber,
+)
+from qgis.PyQt.QtCore import QCoreApplication
+from qgis.PyQt.QtGui import QIcon
+
+from ...plugin import compat
+from ..engine.errors import Cancelled, InputError
+from ..engine.rng import make_rng
+from ..report import Report
+
+ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__)))), "plugin", "icons", "plotwise.svg")
+
+# (group id, display name); display names are translated in group()
+GROUPS = {
+    "design": "Survey design",
+    "estimation": "Estimation",
+    "training": "Demo and training",
+}
+
+
+class PlotwiseAlgorithm(QgsProcessingAlgorithm):
+    """Base class: subclasses set ``ALGORITHM_NAME``, ``GROUP_ID`` and implement the usual methods."""
+
+    ALGORITHM_NAME = ""
+    GROUP_ID = "design"
+    SEED = "SEED"
+    REPORT = "REPORT"
+
+    # -- host boilerplate ----------------------------------------------------------
+    def tr(self, text, context=None):
+        return QCoreApplication.translate(context or type(self).__name__, text)
+
+    def createInstance(self):  # noqa: N802 (host naming)
+        return type(self)()
+
+    def name(self):
+        return self.ALGORITHM_NAME
+
+    def group(self):
+        return QCoreApplication.translate("PlotwiseAlgorithm", GROUPS[self.GROUP_ID])
+
+    def groupId(self):  # noqa: N802 (host naming)
+        return self.GROUP_ID
+
+    def icon(self):
+        return QIcon(ICON)
+
+    def helpUrl(self):  # noqa: N802 (host naming)
+        return ""  # the help is in shortHelpString; we publish no web page
+
+    # -- shared parameters ---------------------------------------------------------
+    def add_seed_parameter(self, default=0):
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.SEED,
+                self.tr("Random seed (0 draws one and records it)", "PlotwiseAlgorithm"),
+                type=compat.NUMBER_INTEGER,
+                defaultValue=default,
+                minValue=0,
+                maxValue=2**31 - 1,
+            )
+        )
+
+    def add_report_parameter(self):
+        self.addParameter(
+            QgsProcessingParameterFileDestination(
+                self.REPORT,
+                self.tr("Report (HTML)", "PlotwiseAlgorithm"),
+                self.tr("HTML files (*.html)", "PlotwiseAlgorithm"),
+                createByDefault=True,
+                optional=True,
+            )
+        )
+
+    # -- shared behaviour ----------------------------------------------------------
+    def seeded_generator(self, parameters, context, feedback):
+        """The run's one generator; logs the seed actually used."""
+        seed = self.parameterAsInt(parameters, self.SEED, context)
+        seeded = make_rng(seed)
+        feedback.pushInfo(self.tr("Seed used: {seed}", "PlotwiseAlgorithm").format(seed=seeded.seed))
+        return seeded
+
+    @staticmethod
+    def progress_callback(feedback, start=0.0, end=100.0):
+        """A ``progress(fraction) -> cancelled`` callable for the engine, mapped onto [start, end] %."""
+
+        def progress(fraction):
+            feedback.setProgress(start + (end - start) * min(max(float(fraction), 0.0), 1.0))
+            return feedback.isCanceled()
+
+        return progress
+
+    @contextlib.contextmanager
+    def engine_errors(self):
+        """Turn engine exceptions into the host's ``QgsProcessingException``."""
+        try:
+            yield
+        except InputError as error:
+            raise QgsProcessingException(error.message) from None
+        except Cancelled:
+            raise QgsProcessingException(
+                self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm")
+            ) from None
+
+    def push_warnings(self, feedback, warnings):
+        for warning in warnings:
+            feedback.pushWarning(warning)
+
+    def new_report(self, title):
+        return Report(title, algorithm_id=f"plotwise:{self.name()}", translate=lambda s: self.tr(s, "PlotwiseReport"))
+
+    def write_report(self, report, parameters, context, feedback):
+        """Write ``report`` to the REPORT destination (when one is set); return the path or None."""
+        path = self.parameterAsFileOutput(parameters, self.REPORT, context)
+        if not path:
+            return None
+        report.write(path)
+        feedback.pushInfo(self.tr("Report written to {path}", "PlotwiseAlgorithm").format(path=path))
+        return path

@@ -1,0 +1,241 @@
+"""Host layers <-> engine types.
+
+Reads features into shapely geometries, numpy arrays and plain attribute lists in the
+computation CRS, and writes engine results back into host sinks and GeoTIFFs. The one
+module where host objects and engine objects meet: algorithms call it, the engine never.
+"""
+from dataclasses import dataclass
+
+import numpy as np
+from osgeo import gdal, osr
+from qgis.core import (
+    NULL,
+    QgsCoordinateReferenceSystem,
+    QgsCoordinateTransform,
+    QgsFeature,
+    QgsFeatureRequest,
+    QgsFeatureSink,
+    QgsFields,
+    QgsGeometry,
+    QgsProcessingException,
+)
+from qgis.PyQt.QtCore import QCoreApplication
+from shapely import wkb as shapely_wkb
+
+from ..plugin import compat
+from .engine.crs import utm_epsg_for_lonlat
+from .engine.geometry_types import polygonal_part
+
+
+def tr(text):
+    return QCoreApplication.translate("PlotwiseBridge", text)
+
+
+# -- geometry conversion -----------------------------------------------------------
+def to_shapely(geometry):
+    """A shapely geometry from a ``QgsGeometry`` (None when empty)."""
+    if geometry is None or geometry.isNull() or geometry.isEmpty():
+        return None
+    return shapely_wkb.loads(bytes(geometry.asWkb()))
+
+
+def to_qgs(geometry):
+    """A ``QgsGeometry`` from a shapely geometry."""
+    result = QgsGeometry()
+    result.fromWkb(shapely_wkb.dumps(geometry))
+    return result
+
+
+def plain_value(value):
+    """An attribute value as plain Python: NULL becomes None."""
+    if value is None or value == NULL:
+        return None
+    if hasattr(value, "isNull") and value.isNull():
+        return None
+    return value
+
+
+# -- CRS ---------------------------------------------------------------------------
+def computation_crs(source_crs, extent, context, feedback, layer_name=""):
+    """The projected CRS to compute in.
+
+    A projected ``source_crs`` is kept. A geographic one is replaced by the WGS 84 UTM
+    zone of the extent's centre, and the log says so. ``extent`` is in ``source_crs``.
+    """
+    if not source_crs.isValid():
+        raise QgsProcessingException(
+            tr("Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.").format(layer=layer_name)
+        )
+    if not source_crs.isGeographic():
+        return source_crs
+    wgs84 = QgsCoordinateReferenceSystem("EPSG:4326")
+    centre = extent.center()
+    if source_crs != wgs84:
+        centre = QgsCoordinateTransform(source_crs, wgs84, context.transformContext()).transform(centre)
+    epsg = utm_epsg_for_lonlat(centre.x(), centre.y())
+    crs = QgsCoordinateReferenceSystem(f"EPSG:{epsg}")
+    feedback.pushInfo(
+        tr("Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.").format(
+            layer=layer_name, src=source_crs.authid(), dst=crs.authid(), name=crs.description()
+        )
+    )
+    return crs
+
+
+def crs_wkt(crs):
+    return crs.toWkt(QgsCoordinateReferenceSystem.WKT_PREFERRED) if hasattr(QgsCoordinateReferenceSystem, "WKT_PREFERRED") else crs.toWkt()
+
+
+# -- reading -----------------------------------------------------------------------
+@dataclass(frozen=True)
+class FeatureRecords:
+    """Features of one layer in the computation CRS.
+
+    ``geometries`` are shapely objects (None for empty ones); ``attributes`` maps a field
+    name to a list of plain values, aligned with ``fids``.
+    """
+
+    layer_name: str
+    fids: np.ndarray
+    geometries: tuple
+    attributes: dict
+    warnings: tuple
+
+    def __len__(self):
+        return len(self.fids)
+
+
+def read_features(source, target_crs, context, feedback, field_names=(), layer_name="", repair=True, drop_empty=True):
+    """Read ``source`` (a ``QgsProcessingFeatureSource``) into :class:`FeatureRecords`.
+
+    Geometries are transformed to ``target_crs``. Invalid polygons are repaired (with a
+    warning naming the feature ids); empty or zero-area polygons are dropped (with a
+    warning) when ``drop_empty``.
+    """
+    if source is None:
+        raise QgsProcessingException(tr("The input layer '{layer}' could not be opened.").format(layer=layer_name))
+    layer_name = layer_name or source.sourceName()
+    fields = source.fields()
+    missing = [name for name in field_names if name and fields.lookupField(name) < 0]
+    if missing:
+        raise QgsProcessingException(
+            tr("Layer '{layer}' has no field named {names}. Choose an existing field.").format(
+                layer=layer_name, names=", ".join(f"'{m}'" for m in missing)
+            )
+        )
+    request = QgsFeatureRequest()
+    request.setDestinationCrs(target_crs, context.transformContext())
+    fids, geometries = [], []
+    values = {name: [] for name in field_names if name}
+    repaired, dropped = [], []
+    total = source.featureCount() or 1
+    for i, feature in enumerate(source.getFeatures(request)):
+        if feedback.isCanceled():
+            break
+        geometry = feature.geometry()
+        shape = to_shapely(geometry)
+        if shape is not None and repair and not shape.is_valid:
+            shape = to_shapely(geometry.makeValid())
+            repaired.append(feature.id())
+        is_areal = shape is not None and shape.geom_type in ("Polygon", "MultiPolygon", "GeometryCollection")
+        if drop_empty and (shape is None or shape.is_empty or (is_areal and shape.area <= 0)):
+            dropped.append(feature.id())
+            continue
+        if shape is not None and shape.geom_type == "GeometryCollection":
+            shape = polygonal_part(shape)
+        fids.append(feature.id())
+        geometries.append(shape)
+        for name in values:
+            values[name].append(plain_value(feature[name]))
+        if i % 500 == 0:
+            feedback.setProgress(min(100.0 * i / total, 100.0))
+    warnings = []
+    if repaired:
+        warnings.append(
+            tr("Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.").format(layer=layer_name, ids=_id_list(repaired))
+        )
+    if dropped:
+        warnings.append(
+            tr("Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.").format(layer=layer_name, ids=_id_list(dropped))
+        )
+    for warning in warnings:
+        feedback.pushWarning(warning)
+    return FeatureRecords(layer_name, np.asarray(fids, dtype=np.int64), tuple(geometries), values, tuple(warnings))
+
+
+def point_coordinates(records):
+    """An (n, 2) array of x, y from point records (multi-points give their first point)."""
+    xy = np.empty((len(records), 2))
+    for i, g in enumerate(records.geometries):
+        if g.geom_type == "MultiPoint":
+            g = g.geoms[0]
+        xy[i] = g.x, g.y
+    return xy
+
+
+def _id_list(ids, limit=20):
+    ids = [str(i) for i in ids]
+    more = len(ids) - limit
+    return ", ".join(ids[:limit]) + (tr(" and {n} more").format(n=more) if more > 0 else "")
+
+
+id_list = _id_list
+
+
+# -- writing -----------------------------------------------------------------------
+def make_fields(spec):
+    """``QgsFields`` from ``[(name, kind), ...]`` or ``[(name, kind, length, precision), ...]``."""
+    fields = QgsFields()
+    for item in spec:
+        fields.append(compat.make_field(*item))
+    return fields
+
+
+def write_features(sink, fields, geometries, rows, feedback=None, progress_range=(0.0, 100.0)):
+    """Add one feature per (geometry, row) to ``sink``. ``rows`` are sequences aligned with ``fields``."""
+    total = max(len(rows), 1)
+    start, end = progress_range
+    for i, (geometry, row) in enumerate(zip(geometries, rows)):
+        if feedback is not None and feedback.isCanceled():
+            return False
+        feature = QgsFeature(fields)
+        if geometry is not None:
+            feature.setGeometry(to_qgs(geometry))
+        feature.setAttributes([_sink_value(v) for v in row])
+        sink.addFeature(feature, QgsFeatureSink.FastInsert)
+        if feedback is not None and i % 1000 == 0:
+            feedback.setProgress(start + (end - start) * i / total)
+    return True
+
+
+def _sink_value(value):
+    if value is None:
+        return NULL
+    if isinstance(value, (np.integer,)):
+        return int(value)
+    if isinstance(value, (np.floating,)):
+        v = float(value)
+        return NULL if v != v else v
+    if isinstance(value, float) and value != value:
+        return NULL
+    return value
+
+
+def write_geotiff(path, array, geotransform, crs, nodata=None, data_type=gdal.GDT_Float32):
+    """Write a 2-D array as a tiled, compressed GeoTIFF in ``crs`` (a ``QgsCoordinateReferenceSystem``)."""
+    rows, cols = array.shape
+    driver = gdal.GetDriverByName("GTiff")
+    dataset = driver.Create(path, cols, rows, 1, data_type, options=["TILED=YES", "COMPRESS=DEFLATE"])
+    if dataset is None:
+        raise QgsProcessingException(tr("Could not create the raster file {path}. Check the folder exists and is writable.").format(path=path))
+    dataset.SetGeoTransform(tuple(float(v) for v in geotransform))
+    srs = osr.SpatialReference()
+    srs.ImportFromWkt(crs.toWkt())
+    dataset.SetProjection(srs.ExportToWkt())
+    band = dataset.GetRasterBand(1)
+    if nodata is not None:
+        band.SetNoDataValue(float(nodata))
+    band.WriteArray(array)
+    band.FlushCache()
+    dataset = None
+    return path

@@ -1,0 +1,40 @@
+"""The ``plotwise`` processing provider: one instance of every Plotwise algorithm."""
+import os
+
+from qgis.core import QgsProcessingProvider
+from qgis.PyQt.QtCore import QCoreApplication
+from qgis.PyQt.QtGui import QIcon
+
+from .algorithms.allocate import Allocate
+from .algorithms.demoreserve import DemoReserve
+from .algorithms.simulatecounts import SimulateCounts
+
+ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "plugin", "icons", "plotwise.svg")
+
+# One entry per algorithm; each issue adds its class here.
+ALGORITHM_CLASSES = [
+    Allocate,
+    DemoReserve,
+    SimulateCounts,
+]
+
+
+class PlotwiseProvider(QgsProcessingProvider):
+    def id(self):
+        return "plotwise"
+
+    def name(self):
+        return QCoreApplication.translate("PlotwiseProvider", "Plotwise")
+
+    def longName(self):  # noqa: N802 (host naming)
+        return QCoreApplication.translate("PlotwiseProvider", "Plotwise survey design and estimation")
+
+    def icon(self):
+        return QIcon(ICON)
+
+    def svgIconPath(self):  # noqa: N802 (host naming)
+        return ICON
+
+    def loadAlgorithms(self):  # noqa: N802 (host naming)
+        for algorithm_class in ALGORITHM_CLASSES:
+            self.addAlgorithm(algorithm_class())

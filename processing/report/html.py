@@ -1,0 +1,174 @@
+"""One self-contained HTML report builder shared by every Plotwise algorithm.
+
+A report holds headings, paragraphs, tables, inline SVG figures, the inputs and
+parameters, the seed and CRS, warnings, method references and the field-safety
+caution. It has no external resources (no scripts, fonts, images or style sheets
+from elsewhere) and escapes every string it is given. It never imports the host.
+
+Usage::
+
+    report = Report("Sample-unit layout", translate=tr)
+    report.parameters({"Design": "spatially balanced", "Seed": 1234})
+    report.section("Units per stratum")
+    report.table(["Stratum", "Units"], [[1, 12], [2, 9]])
+    report.figure(svg_text, "Map of the units")
+    report.warnings(["..."])
+    report.references(["Cochran, W. G. (1977) Sampling Techniques. 3rd ed. Wiley."])
+    report.field_safety()
+    report.write(path)
+"""
+import datetime
+import html
+import numbers
+
+from .style import STYLE_SHEET
+
+FIELD_SAFETY_CAUTION = (
+    "Check every unit's access and safety before sending a team. This tool chooses locations "
+    "for statistical reasons only: it never makes a location safe to reach or to work in. "
+    "Steep, remote or flooded terrain, wildlife, weather and private land can put people at "
+    "risk. Follow your agency's field-safety rules and local law, and leave out or replace any "
+    "unit that cannot be reached safely (record it as not surveyed)."
+)
+
+
+def _identity(text):
+    return text
+
+
+def escape(value):
+    """HTML-escape any value (quotes included)."""
+    return html.escape("" if value is None else str(value), quote=True)
+
+
+def format_number(value, digits=3):
+    """A readable number: thousands separators, ``digits`` significant decimals, '–' for missing."""
+    if value is None:
+        return "–"
+    if isinstance(value, bool):
+        return "yes" if value else "no"
+    if isinstance(value, numbers.Integral):
+        return f"{int(value):,}"
+    if isinstance(value, numbers.Real):
+        v = float(value)
+        if v != v:  # NaN
+            return "–"
+        if v in (float("inf"), float("-inf")):
+            return "∞" if v > 0 else "−∞"
+        if abs(v) >= 10**digits:
+            return f"{v:,.0f}"
+        return f"{v:.{digits}g}"
+    return str(value)
+
+
+class Report:
+    """Collects the blocks of one report and renders them as one HTML page."""
+
+    def __init__(self, title, algorithm_id=None, translate=None):
+        self._tr = translate or _identity
+        self.title = title
+        self.algorithm_id = algorithm_id
+        self._blocks = []
+        self._warnings = []
+        self._references = []
+        self._caution = False
+
+    # -- content -----------------------------------------------------------------
+    def section(self, heading):
+        self._blocks.append(f"<h2>{escape(heading)}</h2>")
+
+    def subsection(self, heading):
+        self._blocks.append(f"<h3>{escape(heading)}</h3>")
+
+    def paragraph(self, text):
+        self._blocks.append(f"<p>{escape(text)}</p>")
+
+    def note(self, text):
+        """A highlighted paragraph (assumptions, scope of inference)."""
+        self._blocks.append(f'<p class="note">{escape(text)}</p>')
+
+    def key_figures(self, items):
+        """A row of headline numbers: ``[(label, value_text), ...]``."""
+        cells = "".join(
+            f'<div class="figure-box"><div class="figure-value">{escape(value)}</div>'
+            f'<div class="figure-label">{escape(label)}</div></div>'
+            for label, value in items
+        )
+        self._blocks.append(f'<div class="figures">{cells}</div>')
+
+    def table(self, header, rows, caption=None, digits=3):
+        """A table; numbers are formatted, everything is escaped."""
+        head = "".join(f"<th>{escape(h)}</th>" for h in header)
+        body = []
+        for row in rows:
+            cells = []
+            for value in row:
+                numeric = isinstance(value, numbers.Number) and not isinstance(value, bool)
+                text = format_number(value, digits) if numeric or value is None else str(value)
+                css = ' class="num"' if numeric else ""
+                cells.append(f"<td{css}>{escape(text)}</td>")
+            body.append("<tr>" + "".join(cells) + "</tr>")
+        cap = f"<caption>{escape(caption)}</caption>" if caption else ""
+        self._blocks.append(
+            f'<div class="table-wrap"><table>{cap}<thead><tr>{head}</tr></thead>'
+            f"<tbody>{''.join(body)}</tbody></table></div>"
+        )
+
+    def figure(self, svg_markup, caption=None):
+        """An inline SVG figure. ``svg_markup`` must come from :mod:`.svg` (it escapes its text)."""
+        cap = f"<figcaption>{escape(caption)}</figcaption>" if caption else ""
+        self._blocks.append(f"<figure>{svg_markup}{cap}</figure>")
+
+    def parameters(self, mapping, heading=None):
+        """Inputs and parameters as a two-column table (seed and CRS belong here too)."""
+        self.section(heading or self._tr("Inputs and parameters"))
+        self.table([self._tr("Item"), self._tr("Value")], [[k, v] for k, v in mapping.items()])
+
+    def warnings(self, messages):
+        self._warnings.extend(str(m) for m in messages if m)
+
+    def references(self, items):
+        for item in items:
+            if item not in self._references:
+                self._references.append(item)
+
+    def field_safety(self):
+        """Add the field-safety caution (for every report that sends people outdoors)."""
+        self._caution = True
+
+    # -- output ------------------------------------------------------------------
+    def render(self):
+        tr = self._tr
+        parts = [
+            "<!DOCTYPE html>",
+            '<html lang="en"><head><meta charset="utf-8">',
+            '<meta name="viewport" content="width=device-width, initial-scale=1">',
+            f"<title>{escape(self.title)}</title>",
+            f"<style>{STYLE_SHEET}</style></head><body><main>",
+            '<header class="report-head">',
+            f'<div class="brand">Plotwise</div><h1>{escape(self.title)}</h1>',
+        ]
+        stamp = datetime.datetime.now().strftime("%Y-%m-%d %H:%M")
+        meta = f"{tr('Written')} {stamp}"
+        if self.algorithm_id:
+            meta += f" · {tr('algorithm')} {self.algorithm_id}"
+        parts.append(f'<p class="meta">{escape(meta)}</p></header>')
+        if self._caution:
+            parts.append(
+                f'<aside class="caution"><strong>{escape(tr("Field safety"))}.</strong> '
+                f"{escape(tr(FIELD_SAFETY_CAUTION))}</aside>"
+            )
+        if self._warnings:
+            items = "".join(f"<li>{escape(w)}</li>" for w in self._warnings)
+            parts.append(f'<section class="warnings"><h2>{escape(tr("Warnings"))}</h2><ul>{items}</ul></section>')
+        parts.extend(self._blocks)
+        if self._references:
+            items = "".join(f"<li>{escape(r)}</li>" for r in self._references)
+            parts.append(f'<section class="refs"><h2>{escape(tr("Method references"))}</h2><ol>{items}</ol></section>')
+        parts.append("</main></body></html>")
+        return "\n".join(parts)
+
+    def write(self, path):
+        with open(path, "w", encoding="utf-8") as handle:
+            handle.write(self.render())
+        return path
