@@ -1,0 +1,733 @@
+"""Density and abundance from counts in sample units: stratified ratio estimation.
+
+For stratum *h* with surveyed units i = 1..n_h, counts ``y_hi`` and unit areas
+``a_hi`` and stratum area ``A_h``:
+
+* density ``D_h = Σ_i y_hi / Σ_i a_hi`` (the ratio estimator, Cochran 1977, ch. 6;
+  with equal units it is the mean count divided by the unit area);
+* its linearised variance (Cochran 1977, eq. 6.13)::
+
+      v(D_h) = (1 − f_h) / (n_h ā_h²) · Σ_i (y_hi − D_h a_hi)² / (n_h − 1)
+
+  with the finite-population correction ``f_h = Σ_i a_hi / A_h`` when asked for;
+* abundance ``N_h = D_h A_h``, ``v(N_h) = A_h² v(D_h)``; overall ``N = Σ N_h``,
+  ``v(N) = Σ v(N_h)`` (Cochran 1977, eq. 5.6) and ``D = N / Σ A_h``.
+
+Detection probability p (from a separate study) divides the estimates and adds
+its squared CV (delta method, Seber 1982, §1.3.3). Confidence intervals: Student t
+with Satterthwaite's effective degrees of freedom (Cochran 1977, eq. 5.16),
+log-normal (Burnham et al. 1987; Buckland et al. 2001, eq. 3.71), or a
+stratified percentile bootstrap (Efron & Tibshirani 1993; Buckland et al. 2001).
+
+Nothing here imports the host.
+"""
+from dataclasses import dataclass, replace
+import math
+
+import numpy as np
+from scipy import stats
+
+from .errors import Cancelled, InputError
+from .variance import collapse_single_unit_strata, local_neighbourhood_variance
+
+CI_T, CI_LOGNORMAL, CI_BOOTSTRAP = "t", "lognormal", "bootstrap"
+CI_METHODS = (CI_T, CI_LOGNORMAL, CI_BOOTSTRAP)
+VARIANCE_SRS, VARIANCE_LOCAL = "srs", "local"
+VARIANCE_METHODS = (VARIANCE_SRS, VARIANCE_LOCAL)
+MIN_BOOTSTRAP = 2000
+OVERALL = "all"
+MAX_LISTED_IDS = 50
+
+
+@dataclass(frozen=True)
+class StratumEstimate:
+    """Estimate for one stratum, or for the whole frame (``stratum == "all"``).
+
+    Areas are in the caller's area unit (e.g. km²); densities per that unit.
+    ``mean_c`` and ``sd_c`` are the mean and standard deviation of the counts
+    per surveyed unit. ``cv`` is the coefficient of variation of the abundance
+    (and density) estimate, detection included. ``df`` is the degrees of
+    freedom used by the t interval. ``n_next`` is the number of units for the
+    next survey (``None`` without a target CV).
+    """
+
+    stratum: str
+    area: float
+    n: int
+    n_missing: int
+    mean_c: float
+    sd_c: float
+    dens: float
+    dens_se: float
+    dens_lo: float
+    dens_hi: float
+    abund: float
+    abund_se: float
+    abund_lo: float
+    abund_hi: float
+    cv: float
+    df: float
+    n_next: object = None
+    collapsed_with: tuple = ()
+
+
+@dataclass(frozen=True)
+class Estimate:
+    """Result of :func:`estimate_density`.
+
+    Attributes
+    ----------
+    strata : tuple of StratumEstimate
+        One per stratum that entered the estimate, in natural order of the ids.
+    overall : StratumEstimate
+        The row ``all``.
+    warnings : tuple of str
+        Sentences for the log and the report.
+    missing_ids : tuple
+        Ids of units with no count (not surveyed: non-response).
+    dropped_strata : tuple of str
+        Strata left out because no unit in them was surveyed (the frame shrank).
+    dropped_area : float
+        Area of the dropped strata.
+    """
+
+    strata: tuple
+    overall: StratumEstimate
+    confidence: float
+    ci_method: str
+    variance_method: str
+    fpc: bool
+    detection_p: float
+    detection_se: float
+    presence: bool
+    target_cv: object
+    n_bootstrap: int
+    warnings: tuple = ()
+    missing_ids: tuple = ()
+    dropped_strata: tuple = ()
+    dropped_area: float = 0.0
+
+    def table(self):
+        """All rows: the strata, then ``all``."""
+        return self.strata + (self.overall,)
+
+
+# --------------------------------------------------------------------------- formulas
+
+
+def ratio_density(counts, areas):
+    """Ratio estimator of density, ``Σ y / Σ a`` (Cochran 1977, eq. 6.1)."""
+    return float(np.sum(counts) / np.sum(areas))
+
+
+def satterthwaite_df(variances, dfs):
+    """Satterthwaite's effective degrees of freedom of a sum of variance estimates.
+
+    ``ν = (Σ_g v_g)² / Σ_g (v_g² / ν_g)`` (Satterthwaite 1946; Cochran 1977,
+    eq. 5.16). Components with infinite ``ν_g`` add nothing to the denominator.
+
+    Parameters
+    ----------
+    variances, dfs : array_like
+        The variance components and their degrees of freedom.
+
+    Returns
+    -------
+    float
+        ``inf`` when every component has infinite df, ``nan`` when all are 0.
+    """
+    v = np.asarray(variances, dtype=float)
+    d = np.asarray(dfs, dtype=float)
+    total = v.sum()
+    if not total > 0:
+        return float("nan")
+    finite = np.isfinite(d) & (d > 0)
+    denominator = np.sum(v[finite] ** 2 / d[finite])
+    if denominator <= 0:
+        return float("inf")
+    return float(total ** 2 / denominator)
+
+
+def t_interval(estimate, se, df, confidence):
+    """``estimate ± t_{(1+confidence)/2, df} · se``, lower limit floored at 0.
+
+    Counts cannot be negative, so a lower limit below 0 is reported as 0; this
+    does not change the coverage.
+    """
+    if not np.isfinite(se):
+        return float("nan"), float("nan")
+    if se == 0:
+        return float(estimate), float(estimate)
+    q = stats.t.ppf(0.5 + confidence / 2.0, df) if np.isfinite(df) else stats.norm.ppf(0.5 + confidence / 2.0)
+    return max(0.0, float(estimate - q * se)), float(estimate + q * se)
+
+
+def lognormal_interval(estimate, cv, confidence):
+    """Log-normal interval ``[N / C, N · C]`` with ``C = exp(z √ln(1 + CV²))``.
+
+    Burnham et al. (1987), Buckland et al. (2001), eq. 3.71 with the normal
+    quantile z. For an estimate of 0 the interval is [0, 0].
+    """
+    if estimate == 0:
+        return 0.0, 0.0
+    if not np.isfinite(cv):
+        return float("nan"), float("nan")
+    z = stats.norm.ppf(0.5 + confidence / 2.0)
+    c = math.exp(z * math.sqrt(math.log1p(cv * cv)))
+    return float(estimate / c), float(estimate * c)
+
+
+def detection_corrected(estimate, variance, p, p_se):
+    """Divide by the detection probability and add its squared CV (delta method).
+
+    ``N' = N / p`` and ``CV²(N') = CV²(N) + CV²(p)`` (Seber 1982, §1.3.3), so
+    ``v(N') = v(N) / p² + N'² (se_p / p)²``.
+
+    Returns
+    -------
+    (float, float)
+        The corrected estimate and its variance.
+    """
+    corrected = estimate / p
+    return corrected, variance / p ** 2 + corrected ** 2 * (p_se / p) ** 2
+
+
+def neyman_sample_size(stratum_units, sd_units, target_variance, fpc=False):
+    """Total sample size and its Neyman allocation for a target variance of the total.
+
+    With ``M_h`` units in stratum *h* and standard deviation ``S_h`` per unit,
+    Neyman allocation ``n_h = n M_h S_h / Σ M_k S_k`` (Neyman 1934) reaches the
+    variance V of the estimated total with
+    ``n = (Σ M_h S_h)² / (V + Σ M_h S_h²)`` (Cochran 1977, eq. 5.26; the second
+    term of the denominator only with the finite-population correction).
+
+    Returns
+    -------
+    (float, numpy.ndarray)
+        The total n (not rounded) and the per-stratum n_h (not rounded).
+    """
+    m = np.asarray(stratum_units, dtype=float)
+    s = np.asarray(sd_units, dtype=float)
+    ms = m * s
+    denominator = target_variance + (np.sum(m * s * s) if fpc else 0.0)
+    n = np.sum(ms) ** 2 / denominator
+    share = ms / np.sum(ms) if np.sum(ms) > 0 else np.full(m.size, 1.0 / m.size)
+    return float(n), n * share
+
+
+# --------------------------------------------------------------------------- input checks
+
+
+def stratum_label(value):
+    """The text form of a stratum id: ``3``, ``3.0`` and ``"3"`` are all ``"3"``."""
+    if value is None:
+        return None
+    if isinstance(value, (bool, np.bool_)):
+        return str(int(value))
+    if isinstance(value, (int, np.integer)):
+        return str(int(value))
+    if isinstance(value, (float, np.floating)):
+        if not np.isfinite(value):
+            return None
+        return str(int(value)) if float(value).is_integer() else repr(float(value))
+    text = str(value).strip()
+    return text if text else None
+
+
+def natural_key(label):
+    """Sort key putting numeric ids in numeric order, then text ids."""
+    try:
+        return (0, float(label), label)
+    except ValueError:
+        return (1, 0.0, label)
+
+
+def _id_list(ids):
+    ids = list(ids)
+    shown = ", ".join(str(i) for i in ids[:MAX_LISTED_IDS])
+    if len(ids) > MAX_LISTED_IDS:
+        shown += f" … ({len(ids)} in all)"
+    return shown
+
+
+def read_counts(counts, unit_ids, count_name="count"):
+    """Counts as floats: ``None``/NaN are missing (not surveyed); others must be numbers ≥ 0.
+
+    Raises
+    ------
+    InputError
+        For non-numeric, infinite or negative counts, naming the unit ids.
+    """
+    raw = np.asarray(counts)
+    if raw.dtype.kind in "biuf":
+        values = raw.astype(float).ravel()
+        bad = np.zeros(values.size, dtype=bool)
+    else:
+        raw = raw.astype(object).ravel()
+        values = np.full(raw.size, np.nan)
+        bad = np.zeros(raw.size, dtype=bool)
+        for i, v in enumerate(raw):  # object input only (host lists): one pass to parse
+            if v is None:
+                continue
+            if isinstance(v, (bool, np.bool_)):
+                values[i] = float(v)
+                continue
+            try:
+                values[i] = float(v)
+            except (TypeError, ValueError):
+                bad[i] = True
+    if bad.any():
+        ids = unit_ids[bad]
+        raise InputError(
+            f"The {count_name} field holds values that are not numbers for units {_id_list(ids)}. "
+            "Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) "
+            "for units that were not surveyed.",
+            ids=ids,
+        )
+    infinite = np.isinf(values)
+    negative = values < 0
+    if (infinite | negative).any():
+        ids = unit_ids[infinite | negative]
+        raise InputError(
+            f"The {count_name} field holds negative or infinite counts for units {_id_list(ids)}. "
+            "Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit "
+            "was not surveyed.",
+            ids=ids,
+        )
+    return values
+
+
+# --------------------------------------------------------------------------- the estimator
+
+
+def estimate_density(
+    counts,
+    unit_areas,
+    strata,
+    stratum_areas,
+    *,
+    unit_ids=None,
+    confidence=0.95,
+    ci_method=CI_T,
+    fpc=False,
+    detection_p=1.0,
+    detection_se=0.0,
+    target_cv=None,
+    variance_method=VARIANCE_SRS,
+    coords=None,
+    presence=False,
+    drop_empty_strata=False,
+    neighbours=None,
+    rng=None,
+    n_bootstrap=MIN_BOOTSTRAP,
+    progress=None,
+):
+    """Stratified density and abundance with standard errors and intervals.
+
+    Parameters
+    ----------
+    counts : array_like, shape (n,)
+        Count per unit; ``None`` or NaN means not surveyed (left out, listed in a
+        warning). With ``presence`` the values are 0/1 detections.
+    unit_areas : array_like, shape (n,)
+        Surveyed area of each unit, in the area unit of the result (e.g. km²).
+    strata : array_like, shape (n,)
+        Stratum id of each unit (numbers or text; compared as text).
+    stratum_areas : mapping
+        Stratum id → stratum area (same unit). Every stratum of the frame.
+    unit_ids : array_like, optional
+        Ids used in messages (default 0..n−1).
+    confidence : float
+        Confidence level in (0, 1).
+    ci_method : {"t", "lognormal", "bootstrap"}
+    fpc : bool
+        Apply the finite-population correction ``1 − Σa_h / A_h``.
+    detection_p, detection_se : float
+        Detection probability in (0, 1] and its standard error (from a separate
+        study).
+    target_cv : float, optional
+        Target CV of the overall abundance for the next survey; fills ``n_next``.
+    variance_method : {"srs", "local"}
+        ``"local"``: the local neighbourhood estimator of Stevens & Olsen (2003)
+        for systematic or spatially balanced layouts; needs ``coords``.
+    coords : array_like, shape (n, 2), optional
+        Unit positions in a projected CRS.
+    presence : bool
+        The values are 0/1 detections: density becomes the proportion of units
+        with a detection (naive occupancy) and abundance the number of occupied
+        units in the frame (``A_h / ā_h`` units per stratum).
+    drop_empty_strata : bool
+        Leave out strata with no surveyed unit (the frame shrinks) instead of
+        raising an error.
+    neighbours : mapping, optional
+        Stratum id → stratum id to collapse a one-unit stratum with.
+    rng : numpy.random.Generator, optional
+        Needed for the bootstrap.
+    n_bootstrap : int
+        Bootstrap resamples (at least 2000).
+    progress : callable, optional
+        ``progress(fraction) -> bool``; True means cancel.
+
+    Returns
+    -------
+    Estimate
+    """
+    if not 0.0 < confidence < 1.0:
+        raise InputError(f"The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.")
+    if ci_method not in CI_METHODS:
+        raise InputError(f"Unknown interval method {ci_method!r}; use one of {', '.join(CI_METHODS)}.")
+    if variance_method not in VARIANCE_METHODS:
+        raise InputError(f"Unknown variance method {variance_method!r}; use one of {', '.join(VARIANCE_METHODS)}.")
+    if not (0.0 < detection_p <= 1.0):
+        raise InputError(f"The detection probability must lie in (0, 1] (got {detection_p}).")
+    if detection_se is None or detection_se < 0:
+        raise InputError("The standard error of the detection probability must be 0 or more.")
+    if target_cv is not None and not target_cv > 0:
+        target_cv = None
+    warnings = []
+
+    strata_in = np.asarray(strata, dtype=object).ravel()
+    n_all = strata_in.size
+    ids = np.arange(n_all) if unit_ids is None else np.asarray(unit_ids, dtype=object).ravel()
+    if ids.size != n_all:
+        raise InputError("unit_ids must have one id per unit.")
+    y_all = read_counts(counts, ids)
+    a_all = np.asarray(unit_areas, dtype=float).ravel()
+    if y_all.size != n_all or a_all.size != n_all:
+        raise InputError("counts, unit_areas and strata must have one value per unit.")
+    labels_all = np.array([stratum_label(s) for s in strata_in], dtype=object)
+    frame = {}
+    for key, area in dict(stratum_areas).items():
+        label = stratum_label(key)
+        frame[label] = frame.get(label, 0.0) + float(area)
+    bad_area = [k for k, v in frame.items() if not (np.isfinite(v) and v > 0)]
+    if bad_area:
+        raise InputError(
+            f"Strata {_id_list(bad_area)} have no area. Check the strata layer's geometries.", ids=bad_area
+        )
+
+    # units that belong to no stratum of the frame
+    unknown = np.array([lab is None or lab not in frame for lab in labels_all], dtype=bool)
+    if unknown.any():
+        names = sorted({str(lab) for lab in labels_all[unknown]}, key=natural_key)
+        raise InputError(
+            f"Units {_id_list(ids[unknown])} have stratum ids ({_id_list(names)}) that are not in the strata layer. "
+            "Check the stratum field of the units and the id field of the strata layer.",
+            ids=ids[unknown],
+        )
+
+    missing = np.isnan(y_all)
+    if missing.any():
+        warnings.append(
+            f"{int(missing.sum())} unit(s) have no count and are treated as not surveyed (non-response): "
+            f"{_id_list(ids[missing])}."
+        )
+    surveyed = ~missing
+    bad_units = surveyed & ~(np.isfinite(a_all) & (a_all > 0))
+    if bad_units.any():
+        raise InputError(
+            f"Units {_id_list(ids[bad_units])} have no positive surveyed area. Give a unit area field with "
+            "values above 0, or a fixed unit area for points and lines.",
+            ids=ids[bad_units],
+        )
+
+    if presence:
+        values = y_all[surveyed]
+        if np.any((values != 0) & (values != 1)):
+            odd = ids[surveyed][(values != 0) & (values != 1)]
+            raise InputError(
+                f"Presence data must be 0 or 1; units {_id_list(odd)} hold other values. "
+                "Use the counts without the presence option, or recode the field.",
+                ids=odd,
+            )
+        if detection_p < 1.0 or detection_se > 0:
+            warnings.append(
+                "The detection probability was not applied to presence data: dividing a proportion of "
+                "occupied units by p is not an occupancy correction, which needs repeat visits."
+            )
+        detection_p, detection_se = 1.0, 0.0
+
+    all_labels = sorted(frame, key=natural_key)
+    n_per = {lab: 0 for lab in all_labels}
+    for lab, cnt in zip(*np.unique(labels_all[surveyed].astype(str), return_counts=True)):
+        n_per[lab] = int(cnt)
+    missing_per = {lab: 0 for lab in all_labels}
+    if missing.any():
+        for lab, cnt in zip(*np.unique(labels_all[missing].astype(str), return_counts=True)):
+            missing_per[lab] = int(cnt)
+    empty = [lab for lab in all_labels if n_per[lab] == 0]
+    dropped_area = 0.0
+    if empty:
+        if not drop_empty_strata:
+            raise InputError(
+                f"No unit of strata {_id_list(empty)} was surveyed, so their abundance cannot be estimated. "
+                "Survey units there, or choose to leave these strata out (the estimate then covers a "
+                "smaller frame).",
+                ids=empty,
+            )
+        dropped_area = float(sum(frame[lab] for lab in empty))
+        warnings.append(
+            f"Strata {_id_list(empty)} had no surveyed unit and were left out: the frame shrank by "
+            f"{dropped_area:.6g} area units, and the estimate covers the remaining strata only."
+        )
+    labels = [lab for lab in all_labels if n_per[lab] > 0]
+    n_strata = len(labels)
+    code_of = {lab: h for h, lab in enumerate(labels)}
+
+    keep = surveyed & np.array([lab in code_of for lab in labels_all], dtype=bool)
+    code = np.array([code_of[lab] for lab in labels_all[keep]], dtype=int)
+    y = y_all[keep]
+    a = a_all[keep]
+    xy = None
+    if variance_method == VARIANCE_LOCAL:
+        if coords is None:
+            raise InputError("The local neighbourhood variance needs the positions of the units.")
+        xy = np.asarray(coords, dtype=float).reshape(n_all, 2)[keep]
+
+    area_h = np.array([frame[lab] for lab in labels])
+    n_h = np.bincount(code, minlength=n_strata)
+    sum_y = np.bincount(code, y, minlength=n_strata)
+    sum_a = np.bincount(code, a, minlength=n_strata)
+    mean_a = sum_a / n_h
+    if presence:
+        # proportion of units: every unit weighs 1, and the stratum holds A_h / ā_h units
+        area_h = area_h / mean_a
+        a = np.ones_like(a)
+        sum_a = n_h.astype(float)
+        mean_a = np.ones(n_strata)
+    dens_h = sum_y / sum_a
+    mean_c = sum_y / n_h
+    sd_c = np.sqrt(np.bincount(code, (y - mean_c[code]) ** 2, minlength=n_strata) / np.maximum(n_h - 1, 1))
+    sd_c[n_h < 2] = np.nan
+    sampled_fraction = sum_a / area_h
+    if fpc and np.any(sampled_fraction > 1 + 1e-9):
+        over = [labels[h] for h in np.flatnonzero(sampled_fraction > 1 + 1e-9)]
+        raise InputError(
+            f"In strata {_id_list(over)} the surveyed area exceeds the stratum area. Check the unit areas "
+            "and the area unit, or switch off the finite-population correction.",
+            ids=over,
+        )
+    fpc_h = 1.0 - sampled_fraction if fpc else np.ones(n_strata)
+    fpc_h = np.clip(fpc_h, 0.0, None)
+
+    # residual variance per stratum (two-pass: exact)
+    resid = y - dens_h[code] * a
+    ss_h = np.bincount(code, resid ** 2, minlength=n_strata)
+    s2_h = np.where(n_h > 1, ss_h / np.maximum(n_h - 1, 1), np.nan)
+    df_h = (n_h - 1).astype(float)
+
+    # one-unit strata: collapsed strata (Cochran 1977, §5A.12)
+    collapsed = [()] * n_strata
+    group = np.arange(n_strata)
+    singles = np.flatnonzero(n_h == 1)
+    if singles.size and n_strata >= 2:
+        neighbour_codes = None
+        if neighbours:
+            neighbour_codes = {
+                code_of[stratum_label(k)]: code_of[stratum_label(v)]
+                for k, v in dict(neighbours).items()
+                if stratum_label(k) in code_of and stratum_label(v) in code_of
+            }
+        groups = collapse_single_unit_strata(n_h, dens_h, neighbours=neighbour_codes)
+        group = groups.group
+        collapsed = list(groups.collapsed_with)
+        for g in np.unique(group[singles]):
+            members = np.flatnonzero(group == g)
+            in_group = np.isin(code, members)
+            ratio = sum_y[members].sum() / sum_a[members].sum()
+            pooled = np.sum((y[in_group] - ratio * a[in_group]) ** 2) / (n_h[members].sum() - 1)
+            s2_h[members] = pooled
+            df_h[members] = n_h[members].sum() - 1
+        warnings.append(
+            "Strata "
+            + "; ".join(
+                f"{labels[h]} (one unit) collapsed with {', '.join(labels[j] for j in collapsed[h])}"
+                for h in singles
+            )
+            + ": their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), "
+            "which counts differences between the collapsed strata as variance and so tends to be "
+            "too large."
+        )
+    elif singles.size:
+        warnings.append(
+            "The only stratum has one surveyed unit: no variance, standard error or interval can be "
+            "estimated. Survey at least two units."
+        )
+
+    var_dens_h = fpc_h * s2_h / (n_h * mean_a ** 2)
+    if variance_method == VARIANCE_LOCAL:
+        local_used = []
+        for h in range(n_strata):  # a loop over strata (tens)
+            if n_h[h] < 3 or collapsed[h]:
+                continue
+            inside = code == h
+            var_dens_h[h] = fpc_h[h] * local_neighbourhood_variance(resid[inside] / sum_a[h], xy[inside])
+            local_used.append(labels[h])
+        if len(local_used) < n_strata:
+            rest = [lab for lab in labels if lab not in local_used]
+            warnings.append(
+                f"Strata {_id_list(rest)} have fewer than 3 units or were collapsed: their variance uses "
+                "the simple random sampling formula."
+            )
+    if progress is not None and progress(0.2):
+        raise Cancelled()
+
+    abund_h = dens_h * area_h
+    var_abund_h = area_h ** 2 * var_dens_h
+    total_area = float(area_h.sum())
+    n_total = float(abund_h.sum())
+    var_total = float(np.nansum(var_abund_h)) if np.all(np.isfinite(var_abund_h)) else float("nan")
+    # Satterthwaite over variance groups: collapsed strata count as one component
+    n_groups = int(group.max()) + 1 if n_strata else 0
+    var_group = np.bincount(group, var_abund_h, minlength=n_groups)
+    df_group = np.zeros(n_groups)
+    df_group[group] = df_h
+    df_count_total = satterthwaite_df(var_group, df_group) if np.isfinite(var_total) else float("nan")
+
+    p, p_se = float(detection_p), float(detection_se)
+    cv_p = p_se / p
+
+    def with_detection(est, var, df_count):
+        corrected, var_corrected = detection_corrected(est, var, p, p_se)
+        cv = math.sqrt(var_corrected) / corrected if corrected > 0 else float("nan")
+        if cv_p > 0 and corrected > 0 and var > 0:
+            cv_count = math.sqrt(var) / est
+            # Buckland et al. (2001), eq. 3.75: the detection component has infinite df here
+            df = cv ** 4 / (cv_count ** 4 / df_count) if df_count > 0 else float("nan")
+        else:
+            df = df_count
+        return corrected, var_corrected, cv, df
+
+    rows = []
+    boot = None
+    if ci_method == CI_BOOTSTRAP:
+        if rng is None:
+            raise InputError("The bootstrap needs a random generator (rng).")
+        boot = stratified_bootstrap(
+            y, a, code, n_strata, group, area_h, p, p_se, rng,
+            n_bootstrap=max(int(n_bootstrap), MIN_BOOTSTRAP), progress=progress,
+        )
+    alpha = 1.0 - confidence
+    for h in range(n_strata):
+        est, var, cv, df = with_detection(abund_h[h], var_abund_h[h], df_h[h])
+        rows.append(
+            _row(labels[h], area_h[h], n_h[h], missing_per[labels[h]], mean_c[h], sd_c[h], est, var, cv, df,
+                 ci_method, confidence, None if boot is None else boot[1][:, h], alpha,
+                 tuple(labels[j] for j in collapsed[h]))
+        )
+    est, var, cv, df = with_detection(n_total, var_total, df_count_total)
+    overall_sd = float(np.std(y, ddof=1)) if y.size > 1 else float("nan")
+    overall = _row(OVERALL, total_area, int(n_h.sum()), int(missing.sum()), float(y.mean()) if y.size else float("nan"),
+                   overall_sd, est, var, cv, df, ci_method, confidence, None if boot is None else boot[0], alpha, ())
+
+    if target_cv is not None:
+        rows, overall, note = _plan_next_survey(
+            rows, overall, area_h, mean_a, s2_h, n_total, target_cv, cv_p, fpc
+        )
+        if note:
+            warnings.append(note)
+    if progress is not None and progress(1.0):
+        raise Cancelled()
+    if n_total == 0:
+        warnings.append("No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.")
+    return Estimate(
+        strata=tuple(rows),
+        overall=overall,
+        confidence=confidence,
+        ci_method=ci_method,
+        variance_method=variance_method,
+        fpc=bool(fpc),
+        detection_p=p,
+        detection_se=p_se,
+        presence=bool(presence),
+        target_cv=target_cv,
+        n_bootstrap=0 if boot is None else int(boot[0].size),
+        warnings=tuple(warnings),
+        missing_ids=tuple(ids[missing].tolist()),
+        dropped_strata=tuple(empty),
+        dropped_area=dropped_area,
+    )
+
+
+def _row(label, area, n, n_missing, mean_c, sd_c, abund, var, cv, df, ci_method, confidence, replicates, alpha,
+         collapsed):
+    se = math.sqrt(var) if np.isfinite(var) else float("nan")
+    if ci_method == CI_T:
+        lo, hi = t_interval(abund, se, df, confidence)
+    elif ci_method == CI_LOGNORMAL:
+        lo, hi = lognormal_interval(abund, cv, confidence)
+    else:
+        lo, hi = (float(v) for v in np.quantile(replicates, [alpha / 2.0, 1.0 - alpha / 2.0]))
+    return StratumEstimate(
+        stratum=label, area=float(area), n=int(n), n_missing=int(n_missing), mean_c=float(mean_c),
+        sd_c=float(sd_c), dens=float(abund / area), dens_se=se / area, dens_lo=lo / area, dens_hi=hi / area,
+        abund=float(abund), abund_se=se, abund_lo=lo, abund_hi=hi, cv=float(cv), df=float(df),
+        collapsed_with=collapsed,
+    )
+
+
+def _plan_next_survey(rows, overall, area_h, mean_a, s2_h, n_total, target_cv, cv_p, fpc):
+    """Fill ``n_next`` by Neyman allocation on the observed residual SDs."""
+    note = ""
+    if cv_p >= target_cv:
+        note = (
+            f"The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own "
+            f"CV is {cv_p:.3g}. Improve the detection study first."
+        )
+        return rows, overall, note
+    cv_count = math.sqrt(target_cv ** 2 - cv_p ** 2)
+    units_h = area_h / mean_a
+    sd_h = np.sqrt(np.nan_to_num(s2_h, nan=0.0))
+    if n_total <= 0 or not np.any(sd_h > 0):
+        n_h = np.full(len(rows), 2.0)
+        note = "No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum."
+    else:
+        _, n_h = neyman_sample_size(units_h, sd_h, (cv_count * n_total) ** 2, fpc=fpc)
+    n_next = np.maximum(np.ceil(n_h - 1e-9), 2).astype(int)
+    rows = [replace(r, n_next=int(k)) for r, k in zip(rows, n_next)]
+    return rows, replace(overall, n_next=int(n_next.sum())), note
+
+
+def stratified_bootstrap(y, a, code, n_strata, group, area_h, p, p_se, rng, n_bootstrap=MIN_BOOTSTRAP,
+                         progress=None, chunk_draws=4_000_000):
+    """Stratified bootstrap of the abundance: units resampled with replacement within strata.
+
+    Each resample draws n_h units with replacement from stratum h (from the
+    pooled units of its collapsed group for a one-unit stratum), recomputes
+    ``D_h = Σy/Σa`` and ``N = Σ A_h D_h``; with detection, each resample divides
+    by a p drawn from the beta distribution with mean p and standard deviation
+    se_p. Percentile intervals (Efron & Tibshirani 1993, ch. 13; Buckland et al.
+    2001, §3.7.5). The finite-population correction is not applied.
+
+    Returns
+    -------
+    (numpy.ndarray, numpy.ndarray)
+        Replicates of the total, shape (B,), and per stratum, shape (B, H).
+    """
+    per_stratum = np.empty((n_bootstrap, n_strata))
+    order = np.argsort(code, kind="stable")
+    starts = np.searchsorted(code[order], np.arange(n_strata))
+    ends = np.searchsorted(code[order], np.arange(n_strata), side="right")
+    for h in range(n_strata):  # a loop over strata; the resamples are vectorised
+        n = ends[h] - starts[h]
+        pool = order[starts[h]:ends[h]]
+        if n == 1 and np.sum(group == group[h]) > 1:
+            pool = np.flatnonzero(np.isin(code, np.flatnonzero(group == group[h])))
+        rows_per_chunk = max(1, chunk_draws // max(n, 1))
+        for b0 in range(0, n_bootstrap, rows_per_chunk):
+            b1 = min(n_bootstrap, b0 + rows_per_chunk)
+            pick = pool[rng.integers(0, pool.size, size=(b1 - b0, n))]
+            per_stratum[b0:b1, h] = y[pick].sum(axis=1) / a[pick].sum(axis=1)
+        if progress is not None and progress(0.2 + 0.7 * (h + 1) / n_strata):
+            raise Cancelled()
+    per_stratum *= area_h
+    if p_se > 0:
+        common = p * (1 - p) / p_se ** 2 - 1
+        if common > 0 and p < 1:
+            p_b = rng.beta(p * common, (1 - p) * common, size=n_bootstrap)
+        else:
+            p_b = np.clip(rng.normal(p, p_se, size=n_bootstrap), 1e-6, 1.0)
+        per_stratum /= p_b[:, None]
+    else:
+        per_stratum /= p
+    return per_stratum.sum(axis=1), per_stratum

@@ -1,0 +1,167 @@
+"""Variance estimators for stratified counts: collapsed strata and local neighbourhoods.
+
+Both functions work on the linearised residuals of the ratio estimator
+(Cochran 1977, ch. 6): for unit *i* of a stratum with ratio ``R = Σy / Σa``, the
+residual is ``e_i = y_i − R a_i``. The ratio's error is, to first order,
+``R̂ − R ≈ Σ e_i / Σ a_i``.
+"""
+from dataclasses import dataclass
+
+import numpy as np
+from scipy.spatial import cKDTree
+
+NEIGHBOURHOOD_SIZE = 4  # the unit itself and its three nearest neighbours (Stevens & Olsen 2003)
+
+
+@dataclass(frozen=True)
+class CollapsedGroups:
+    """Strata grouped for variance estimation.
+
+    Attributes
+    ----------
+    group : numpy.ndarray of int
+        ``group[h]`` is the group number of stratum *h* (groups are numbered 0..G−1).
+    collapsed_with : tuple of tuple of int
+        For each stratum the other strata of its group (empty when not collapsed).
+    """
+
+    group: np.ndarray
+    collapsed_with: tuple
+
+
+def collapse_single_unit_strata(n_units, density, order=None, neighbours=None):
+    """Group each stratum with one surveyed unit with a neighbour stratum.
+
+    The collapsed-strata estimator (Cochran 1977, §5A.12; Hansen, Hurwitz &
+    Madow 1953) estimates the variance of a stratum that holds one unit by
+    treating it and a similar stratum as one stratum for the variance. It is
+    conservative: differences between the collapsed strata count as variance.
+
+    Parameters
+    ----------
+    n_units : array_like of int, shape (H,)
+        Surveyed units per stratum (all ≥ 1).
+    density : array_like of float, shape (H,)
+        Observed density per stratum, used to pick the more similar neighbour.
+    order : array_like of int, optional
+        Position of each stratum along the gradient the strata were drawn from
+        (default: their index). The neighbours of a stratum are the strata just
+        before and after it in this order; of the two, the one with the closer
+        observed density is chosen (ties: the one before).
+    neighbours : mapping of int to int, optional
+        Explicit choice ``{single_stratum: neighbour}``, overriding the rule.
+
+    Returns
+    -------
+    CollapsedGroups
+    """
+    n_units = np.asarray(n_units, dtype=int)
+    density = np.asarray(density, dtype=float)
+    n_strata = n_units.size
+    order = np.arange(n_strata) if order is None else np.asarray(order)
+    by_order = np.argsort(order, kind="stable")
+    position = np.empty(n_strata, dtype=int)
+    position[by_order] = np.arange(n_strata)
+    parent = np.arange(n_strata)
+
+    def root(h):
+        while parent[h] != h:
+            parent[h] = parent[parent[h]]
+            h = parent[h]
+        return h
+
+    neighbours = dict(neighbours or {})
+    # a loop over strata (tens), not over units
+    singles = np.flatnonzero(n_units == 1)
+    # explicit choices first; a one-unit stratum already joined by another is not moved again
+    singles = sorted(singles, key=lambda h: h not in neighbours)
+    for h in singles:
+        if n_strata < 2:
+            break
+        if any(root(j) == root(h) for j in range(n_strata) if j != h):
+            continue
+        if h in neighbours:
+            partner = int(neighbours[h])
+        else:
+            k = position[h]
+            candidates = [by_order[j] for j in (k - 1, k + 1) if 0 <= j < n_strata]
+            gaps = [abs(density[c] - density[h]) for c in candidates]
+            partner = candidates[int(np.argmin(gaps))]
+        parent[root(h)] = root(partner)
+    roots = np.array([root(h) for h in range(n_strata)])
+    _, group = np.unique(roots, return_inverse=True)
+    members = [tuple(int(j) for j in np.flatnonzero(group == group[h]) if j != h) for h in range(n_strata)]
+    return CollapsedGroups(group=group, collapsed_with=tuple(members))
+
+
+def neighbourhood_weights(coords, size=NEIGHBOURHOOD_SIZE, tol=1e-12, max_iter=500):
+    """Weights of the local neighbourhoods of Stevens & Olsen (2003).
+
+    Each unit *i* has a neighbourhood D(i): itself and its ``size − 1`` nearest
+    units. The weights ``w_ij`` (j in D(i)) start equal and are scaled by
+    iterative proportional fitting until every neighbourhood's weights sum to 1
+    (Σ_j w_ij = 1) and every unit's weights over the neighbourhoods it belongs
+    to sum to 1 (Σ_i w_ij = 1). Stevens & Olsen (2003), Environmetrics
+    14:593–610, §3 (from memory).
+
+    Parameters
+    ----------
+    coords : array_like, shape (n, 2)
+        Unit positions in a projected CRS.
+
+    Returns
+    -------
+    rows, cols, weights : numpy.ndarray
+        Neighbourhood index *i*, member index *j* and ``w_ij``, one entry per pair.
+    """
+    coords = np.asarray(coords, dtype=float)
+    n = coords.shape[0]
+    k = min(size, n)
+    _, cols = cKDTree(coords).query(coords, k=k)
+    cols = np.asarray(cols).reshape(n, k)
+    rows = np.repeat(np.arange(n), k)
+    cols = cols.ravel()
+    weights = np.full(rows.size, 1.0 / k)
+    for _ in range(max_iter):
+        weights /= np.bincount(cols, weights, minlength=n)[cols]
+        row_sum = np.bincount(rows, weights, minlength=n)
+        weights /= row_sum[rows]
+        if np.max(np.abs(np.bincount(cols, weights, minlength=n) - 1.0)) < tol:
+            break
+    return rows, cols, weights
+
+
+def local_neighbourhood_variance(values, coords, size=NEIGHBOURHOOD_SIZE):
+    """Local neighbourhood variance of a sum of unit contributions.
+
+    For an estimator ``T = Σ_j z_j`` over a spatially balanced or systematic
+    sample, the variance is estimated from local differences only
+    (Stevens & Olsen 2003, Environmetrics 14:593–610)::
+
+        v(T) = Σ_i c_i Σ_{j∈D(i)} w_ij (z_j − z̄_i)²,   z̄_i = Σ_{j∈D(i)} w_ij z_j
+
+    with the weights of :func:`neighbourhood_weights`. The factor
+    ``c_i = 1 / (1 − Σ_j w_ij²)`` is our addition: it makes each local term an
+    unbiased weighted variance, so that ``v`` agrees on average with the
+    simple-random-sampling formula ``n s_z²`` when the population has no spatial
+    pattern (checked by simulation in the tests), and is smaller than it when
+    neighbouring units are alike.
+
+    Parameters
+    ----------
+    values : array_like, shape (n,)
+        The contributions ``z_j`` (e.g. ratio residuals divided by Σa).
+    coords : array_like, shape (n, 2)
+        Unit positions in a projected CRS (n ≥ 2).
+
+    Returns
+    -------
+    float
+    """
+    z = np.asarray(values, dtype=float)
+    rows, cols, w = neighbourhood_weights(coords, size=size)
+    n = z.size
+    local_mean = np.bincount(rows, w * z[cols], minlength=n)
+    spread = np.bincount(rows, w * (z[cols] - local_mean[rows]) ** 2, minlength=n)
+    correction = 1.0 / (1.0 - np.bincount(rows, w * w, minlength=n))
+    return float(np.sum(correction * spread))
