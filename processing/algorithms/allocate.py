@@ -1,0 +1,378 @@
+"""plotwise:allocate: how many sample units each stratum gets, and the precision they buy."""
+import numpy as np
+from qgis.core import (
+    QgsFields,
+    QgsProcessingException,
+    QgsProcessingOutputNumber,
+    QgsProcessingParameterBoolean,
+    QgsProcessingParameterEnum,
+    QgsProcessingParameterFeatureSink,
+    QgsProcessingParameterFeatureSource,
+    QgsProcessingParameterField,
+    QgsProcessingParameterNumber,
+    QgsWkbTypes,
+)
+
+from ...plugin import compat
+from .. import bridge
+from ..engine import allocation
+from ..report import svg
+from .base import PlotwiseAlgorithm
+
+HA_PER_M2 = 1e-4
+KM2_PER_HA = 0.01
+SD_PROXY_FIELD = "cov_sd"  # written by plotwise:stratify
+
+REFERENCES = (
+    "Neyman, J. (1934). On the two different aspects of the representative method: the method of "
+    "stratified sampling and the method of purposive selection. Journal of the Royal Statistical "
+    "Society 97, 558-625.",
+    "Cochran, W. G. (1977). Sampling Techniques, 3rd ed., chapter 5 (stratified random sampling). Wiley.",
+)
+
+
+class Allocate(PlotwiseAlgorithm):
+    ALGORITHM_NAME = "allocate"
+    GROUP_ID = "design"
+
+    STRATA = "STRATA"
+    STRATUM_FIELD = "STRATUM_FIELD"
+    AREA_FIELD = "AREA_FIELD"
+    SD_FIELD = "SD_FIELD"
+    MEAN_FIELD = "MEAN_FIELD"
+    COST_FIELD = "COST_FIELD"
+    COST_IN_DAYS = "COST_IN_DAYS"
+    FIXED_COST = "FIXED_COST"
+    METHOD = "METHOD"
+    TOTAL = "TOTAL"
+    BUDGET = "BUDGET"
+    TARGET_CV = "TARGET_CV"
+    UNIT_AREA = "UNIT_AREA"
+    MIN_PER_STRATUM = "MIN_PER_STRATUM"
+    OUTPUT = "OUTPUT"
+    EXPECTED_CV = "EXPECTED_CV"
+
+    def displayName(self):  # noqa: N802 (host naming)
+        return self.tr("Allocate effort to strata")
+
+    def shortHelpString(self):  # noqa: N802 (host naming)
+        return self.tr(
+            "Decides how many sample units each stratum gets, and shows beforehand the precision they buy.\n\n"
+            "Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; "
+            "Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget "
+            "C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).\n\n"
+            "Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall "
+            "density meets it, with the finite-population correction; else a budget (if above 0, needs the "
+            "cost field); else the total number of units.\n\n"
+            "Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be "
+            "estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches "
+            "a bound keeps it and the rest is shared among the others, until stable. Whole units are "
+            "rounded by largest remainder, keeping the total.\n\n"
+            "Area field: the stratum area in hectares (default area_ha, as written by the stratification); "
+            "when it is empty or missing, the polygon area is used.\n"
+            "SD field: the pilot standard deviation of counts per unit. Without it the covariate SD "
+            "(cov_sd) is used as a proxy, which assumes that counts scale with the covariate; without "
+            "either, the allocation is proportional.\n"
+            "Mean field: the pilot mean count per unit, needed for CVs and for a target CV. "
+            "Cost field: cost of surveying one unit in each stratum (for instance field days).\n\n"
+            "Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), "
+            "and a report comparing equal, proportional and Neyman allocation at the same total."
+        )
+
+    def initAlgorithm(self, config=None):  # noqa: N802 (host naming)
+        self.addParameter(
+            QgsProcessingParameterFeatureSource(self.STRATA, self.tr("Strata"), [compat.TYPE_VECTOR_POLYGON])
+        )
+        self.addParameter(
+            QgsProcessingParameterField(
+                self.STRATUM_FIELD, self.tr("Stratum identifier field"), "stratum", self.STRATA,
+                compat.FIELD_ANY, optional=True,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterField(
+                self.AREA_FIELD, self.tr("Stratum area field (hectares; empty: polygon area)"), "area_ha",
+                self.STRATA, compat.FIELD_NUMERIC, optional=True,
+            )
+        )
+        for name, label in (
+            (self.SD_FIELD, self.tr("Pilot SD of counts per unit")),
+            (self.MEAN_FIELD, self.tr("Pilot mean count per unit")),
+            (self.COST_FIELD, self.tr("Cost per unit")),
+        ):
+            self.addParameter(
+                QgsProcessingParameterField(name, label, None, self.STRATA, compat.FIELD_NUMERIC, optional=True)
+            )
+        self.addParameter(
+            QgsProcessingParameterBoolean(self.COST_IN_DAYS, self.tr("Costs are field days"), defaultValue=False)
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.FIXED_COST, self.tr("Fixed cost of the survey (c0, in the cost unit)"),
+                type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.METHOD,
+                self.tr("Allocation method"),
+                [self.tr("Equal"), self.tr("Proportional to area"), self.tr("Neyman"), self.tr("Optimal with cost")],
+                defaultValue=2,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.TOTAL, self.tr("Total number of units"), type=compat.NUMBER_INTEGER, defaultValue=30, minValue=0
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.BUDGET, self.tr("Budget (0: not used; needs the cost field)"), type=compat.NUMBER_DOUBLE,
+                defaultValue=0.0, minValue=0.0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.TARGET_CV, self.tr("Target CV of the overall density (0: not used; e.g. 0.2)"),
+                type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0, maxValue=10.0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.UNIT_AREA, self.tr("Area of one sample unit (m²)"), type=compat.NUMBER_DOUBLE,
+                defaultValue=10000.0, minValue=0.0001,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.MIN_PER_STRATUM, self.tr("Minimum units per stratum"), type=compat.NUMBER_INTEGER,
+                defaultValue=allocation.DEFAULT_MIN_PER_STRATUM, minValue=1,
+            )
+        )
+        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Strata with allocation")))
+        self.add_report_parameter()
+        self.addOutput(QgsProcessingOutputNumber(self.EXPECTED_CV, self.tr("Expected CV of the overall density")))
+
+    # ------------------------------------------------------------------------------
+    def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
+        source = self.parameterAsSource(parameters, self.STRATA, context)
+        if source is None:
+            raise QgsProcessingException(self.tr("The strata layer could not be opened."))
+        layer = source.sourceName()
+        field_names = source.fields().names()
+
+        def field(name):
+            chosen = self.parameterAsFields(parameters, name, context)
+            return chosen[0] if chosen else None
+
+        stratum_field, area_field = field(self.STRATUM_FIELD), field(self.AREA_FIELD)
+        sd_field, mean_field, cost_field = field(self.SD_FIELD), field(self.MEAN_FIELD), field(self.COST_FIELD)
+        if stratum_field and stratum_field not in field_names:
+            stratum_field = None
+        if area_field and area_field not in field_names:
+            feedback.pushInfo(
+                self.tr("Layer '{layer}' has no field '{field}': the polygon areas are used.").format(
+                    layer=layer, field=area_field)
+            )
+            area_field = None
+        sd_proxy = False
+        if sd_field is None and SD_PROXY_FIELD in field_names:
+            sd_field, sd_proxy = SD_PROXY_FIELD, True
+
+        crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, layer)
+        records = bridge.read_features(source, crs, context, feedback, field_names, layer_name=layer)
+        if len(records) == 0:
+            raise QgsProcessingException(self.tr("Layer '{layer}' has no strata with an area.").format(layer=layer))
+        fids = [int(f) for f in records.fids]
+        labels = records.attributes[stratum_field] if stratum_field else fids
+        if area_field:
+            areas_ha = records.attributes[area_field]
+        else:
+            areas_ha = [g.area * HA_PER_M2 for g in records.geometries]
+
+        def column(name):
+            return None if name is None else records.attributes[name]
+
+        def naming(name, fallback):
+            return f"field '{name}' of layer '{layer}'" if name else fallback
+
+        method = allocation.METHODS[self.parameterAsEnum(parameters, self.METHOD, context)]
+        unit_area_m2 = self.parameterAsDouble(parameters, self.UNIT_AREA, context)
+        cost_in_days = self.parameterAsBool(parameters, self.COST_IN_DAYS, context)
+        settings = dict(
+            total=self.parameterAsInt(parameters, self.TOTAL, context),
+            budget=self.parameterAsDouble(parameters, self.BUDGET, context),
+            target_cv=self.parameterAsDouble(parameters, self.TARGET_CV, context),
+            fixed_cost=self.parameterAsDouble(parameters, self.FIXED_COST, context),
+            min_per_stratum=self.parameterAsInt(parameters, self.MIN_PER_STRATUM, context),
+        )
+        warnings = list(records.warnings)
+        if sd_proxy:
+            warnings.append(
+                self.tr(
+                    "No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts "
+                    "scale with the covariate; replace it with the SD of a pilot survey when you have one. The "
+                    "expected SEs are then in covariate units, not counts."
+                ).format(field=SD_PROXY_FIELD)
+            )
+        with self.engine_errors():
+            result = allocation.allocate(
+                areas_ha,
+                unit_area_m2 * HA_PER_M2,
+                method,
+                sds=column(sd_field),
+                means=column(mean_field),
+                costs=column(cost_field),
+                ids=fids,
+                names={
+                    "area": naming(area_field, "polygon area"),
+                    "sd": naming(sd_field, "pilot SD"),
+                    "mean": naming(mean_field, "pilot mean"),
+                    "cost": naming(cost_field, "cost"),
+                },
+                **settings,
+            )
+        warnings.extend(result.warnings)
+        self.push_warnings(feedback, warnings[len(records.warnings):])
+        feedback.setProgress(60)
+
+        # output: the input fields, plus (or refreshed) n_alloc and exp_cv
+        fields = QgsFields(source.fields())
+        for name, kind in (("n_alloc", "int"), ("exp_cv", "double")):
+            if fields.lookupField(name) < 0:
+                fields.append(compat.make_field(name, kind))
+        names_out = fields.names()
+        exp_cv = result.precision.stratum_cv
+        rows = []
+        for i in range(len(records)):
+            values = {name: records.attributes[name][i] for name in field_names}
+            values["n_alloc"] = int(result.n[i])
+            values["exp_cv"] = float(exp_cv[i]) if mean_field else None
+            rows.append([values.get(name) for name in names_out])
+        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, fields, QgsWkbTypes.multiType(source.wkbType()), crs)
+        if sink is None:
+            raise QgsProcessingException(self.tr("The output layer could not be created."))
+        if not bridge.write_features(sink, fields, records.geometries, rows, feedback, (60.0, 90.0)):
+            raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+
+        overall_cv = result.precision.cv if mean_field and np.isfinite(result.precision.cv) else None
+        report = self._report(
+            result, labels, layer, crs, unit_area_m2, sd_field, sd_proxy, mean_field, cost_field, cost_in_days,
+            settings, warnings,
+        )
+        report_path = self.write_report(report, parameters, context, feedback)
+        feedback.pushInfo(
+            self.tr("{total} units allocated ({method}); expected CV of the overall density: {cv}.").format(
+                total=result.total, method=result.method_used,
+                cv="–" if overall_cv is None else f"{overall_cv:.3f}")
+        )
+        feedback.setProgress(100)
+        return {self.OUTPUT: dest_id, self.REPORT: report_path, self.EXPECTED_CV: overall_cv}
+
+    # ------------------------------------------------------------------------------
+    def _report(self, result, labels, layer, crs, unit_area_m2, sd_field, sd_proxy, mean_field, cost_field,
+                cost_in_days, settings, warnings):
+        tr = self.tr
+        p = result.precision
+        with_mean = mean_field is not None
+        with_sd = sd_field is not None
+        # density SE per km² (areas are in ha in the engine)
+        se_km2 = p.se_density / KM2_PER_HA
+        report = self.new_report(tr("Allocation of survey effort"))
+        method_names = {
+            "equal": tr("equal"), "proportional": tr("proportional to area"),
+            "neyman": tr("Neyman"), "optimal_cost": tr("optimal with cost"),
+        }
+        cost_unit = tr("field days") if cost_in_days else tr("cost units")
+        figures = [(tr("units in total"), f"{result.total:,}"), (tr("method"), method_names[result.method_used])]
+        if with_mean and np.isfinite(p.cv):
+            figures.append((tr("expected CV of the overall density"), f"{p.cv:.3f}"))
+        if cost_field:
+            figures.append((tr("field days needed") if cost_in_days else tr("cost"), f"{result.cost:,.1f}"))
+        report.key_figures(figures)
+        targets = {"total": tr("a total number of units"), "budget": tr("a budget"), "target_cv": tr("a target CV")}
+        report.parameters({
+            tr("Strata layer"): layer,
+            tr("Computation CRS"): crs.authid(),
+            tr("Method asked for"): method_names[result.method],
+            tr("Method applied"): method_names[result.method_used],
+            tr("Target"): targets[result.target],
+            tr("Total asked for"): settings["total"] if result.target == "total" else "–",
+            tr("Budget"): settings["budget"] if result.target == "budget" else "–",
+            tr("Target CV"): settings["target_cv"] if result.target == "target_cv" else "–",
+            tr("Unit area (m²)"): unit_area_m2,
+            tr("Minimum units per stratum"): settings["min_per_stratum"],
+            tr("SD field"): (sd_field + (tr(" (covariate proxy)") if sd_proxy else "")) if with_sd else "–",
+            tr("Mean field"): mean_field or "–",
+            tr("Cost field"): (f"{cost_field} ({cost_unit})" if cost_field else "–"),
+            tr("Fixed cost c0"): settings["fixed_cost"] if cost_field else "–",
+        })
+        report.warnings(warnings)
+
+        report.section(tr("Units per stratum"))
+        se_label = tr("SE of mean per unit (covariate units)") if sd_proxy else tr("SE of mean count per unit")
+        header = [tr("Stratum"), tr("Units that fit"), tr("Lower bound"), tr("Share before rounding"),
+                  tr("Units (n_alloc)"), tr("Sampling fraction")]
+        if with_sd:
+            header.append(se_label)
+            if not sd_proxy:
+                header.append(tr("SE of density (per km²)"))
+        if with_mean:
+            header.append(tr("Expected CV (exp_cv)"))
+        rows = []
+        for h, label in enumerate(labels):
+            row = [str(label), int(result.upper[h]), int(result.lower[h]), float(result.n_continuous[h]),
+                   int(result.n[h]), float(result.n[h] / result.capacity[h])]
+            if with_sd:
+                row.append(float(p.stratum_se_mean[h]))
+                if not sd_proxy:
+                    row.append(float(p.stratum_se_density[h] / KM2_PER_HA))
+            if with_mean:
+                row.append(float(p.stratum_cv[h]))
+            rows.append(row)
+        overall = [tr("all strata"), int(result.upper.sum()), int(result.lower.sum()),
+                   float(result.n_continuous.sum()), int(result.total), float(result.total / result.capacity.sum())]
+        if with_sd:
+            overall.append(float(p.se_mean))
+            if not sd_proxy:
+                overall.append(float(se_km2))
+        if with_mean:
+            overall.append(float(p.cv))
+        rows.append(overall)
+        report.table(header, rows)
+        report.figure(
+            svg.bar_chart_svg([str(label) for label in labels], [int(v) for v in result.n], tr("units per stratum")),
+            tr("Units allocated to each stratum"),
+        )
+        report.note(tr(
+            "Expected precision uses the pilot figures as if they were the truth, with the finite-population "
+            "correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds."
+        ))
+        if cost_field:
+            report.paragraph(
+                tr("{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.").format(
+                    what=tr("Field days needed") if cost_in_days else tr("Cost of the design"),
+                    c0=settings["fixed_cost"], var=result.cost - settings["fixed_cost"], total=result.cost,
+                    unit=cost_unit)
+            )
+
+        report.section(tr("What the choice of method buys, at {n} units").format(n=result.total))
+        header = [tr("Method")] + [tr("stratum {label}").format(label=label) for label in labels]
+        if with_sd:
+            header += [se_label, tr("Variance relative to the applied allocation")]
+        if with_mean:
+            header.append(tr("Expected CV"))
+        rows = []
+        for row in result.comparison:
+            cells = [method_names[row.method]] + [int(v) for v in row.n]
+            if with_sd:
+                cells += [float(row.precision.se_mean), float(row.relative_variance)]
+            if with_mean:
+                cells.append(float(row.precision.cv))
+            rows.append(cells)
+        report.table(header, rows)
+        if not with_sd:
+            report.paragraph(tr("Without standard deviations the precision of the designs cannot be compared."))
+        report.references(REFERENCES)
+        report.field_safety()
+        return report
