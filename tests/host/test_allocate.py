@@ -116,3 +116,26 @@ def test_budget_below_minimum_gives_the_minimum(plotwise_registered):
             "STRATA": _strata_layer(ROWS), "SD_FIELD": "sd_c", "COST_FIELD": "days", "FIXED_COST": 1.0,
             "METHOD": 3, "BUDGET": 7.5, "UNIT_AREA": 10000.0, "OUTPUT": "memory:",
         })
+
+
+class _Feedback(qgis_core.QgsProcessingFeedback):
+    def __init__(self):
+        super().__init__()
+        self.warnings = []
+
+    def pushWarning(self, warning):  # noqa: N802 (host naming)
+        self.warnings.append(warning)
+        super().pushWarning(warning)
+
+
+def test_polygon_area_and_cov_sd_proxy_warning(plotwise_registered):
+    import processing
+
+    feedback = _Feedback()
+    result = processing.run("plotwise:allocate", {
+        "STRATA": _strata_layer(ROWS), "AREA_FIELD": None, "METHOD": 1, "TOTAL": 74,
+        "UNIT_AREA": 10000.0, "OUTPUT": "memory:",
+    }, feedback=feedback)
+    # proportional to the polygon areas 400, 250, 90 ha (Cochran 1977, ch. 5): 40, 25, 9
+    assert [f["n_alloc"] for f in result["OUTPUT"].getFeatures()] == [40, 25, 9]
+    assert any("cov_sd" in w and "proxy" in w for w in feedback.warnings)
