@@ -383,12 +383,20 @@ def _listing(ids, mask):
     return chosen, shown + (f" and {len(chosen) - 20} more" if len(chosen) > 20 else "")
 
 
+def _as_number(value):
+    """A float, or NaN for None and anything that is not a number."""
+    try:
+        return np.nan if value is None else float(value)
+    except (TypeError, ValueError):
+        return np.nan
+
+
 def check_values(values, name, ids, allow_zero=False):
     """Return ``values`` as floats, or raise :class:`InputError` naming the bad strata.
 
-    NULL (None/NaN), negative and (unless ``allow_zero``) zero values are refused.
+    NULL (None/NaN), text, negative and (unless ``allow_zero``) zero values are refused.
     """
-    v = np.array([np.nan if x is None else x for x in values], dtype=float)
+    v = np.array([_as_number(x) for x in values], dtype=float)
     bad = ~np.isfinite(v) | (v < 0 if allow_zero else v <= 0)
     if bad.any():
         chosen, shown = _listing(ids, bad)

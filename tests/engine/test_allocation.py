@@ -207,7 +207,7 @@ def test_se_density_scales_with_unit_area():
 
 
 # ----------------------------------------------------------------------------- bad input
-@pytest.mark.parametrize("bad", [None, np.nan, -3.0, 0.0])
+@pytest.mark.parametrize("bad", [None, np.nan, -3.0, 0.0, "n/a"])
 def test_bad_area_names_the_features(bad):
     areas = [10.0, bad, 30.0]
     with pytest.raises(InputError) as err:
