@@ -162,7 +162,9 @@ class Allocate(PlotwiseAlgorithm):
         field_names = source.fields().names()
 
         def field(name):
-            chosen = self.parameterAsFields(parameters, name, context)
+            # newer hosts name it parameterAsStrings; 3.22 has parameterAsFields
+            read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
+            chosen = read(parameters, name, context)
             return chosen[0] if chosen else None
 
         stratum_field, area_field = field(self.STRATUM_FIELD), field(self.AREA_FIELD)
