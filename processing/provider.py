@@ -6,6 +6,7 @@ from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
 from .algorithms.allocate import Allocate
+from .algorithms.buildframe import BuildFrame
 from .algorithms.demoreserve import DemoReserve
 from .algorithms.simulatecounts import SimulateCounts
 
@@ -14,6 +15,7 @@ ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))),
 # One entry per algorithm; each issue adds its class here.
 ALGORITHM_CLASSES = [
     Allocate,
+    BuildFrame,
     DemoReserve,
     SimulateCounts,
 ]
