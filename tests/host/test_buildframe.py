@@ -44,6 +44,7 @@ def registry(qgis_processing):
             except ImportError:  # other algorithms of the provider not written yet
                 provider = None
             if provider is not None:
+                _KEEP.append(provider)  # keep the Python object alive beside the registry
                 registry.addProvider(provider)
         if registry.algorithmById("plotwise:buildframe") is None:
             # the provider does not list BuildFrame yet: run it through a provider of its own
