@@ -334,6 +334,22 @@ class BuildFrame(PlotwiseAlgorithm):
         })
         return report
 
+    @staticmethod
+    def _for_screen(geometry, tolerance, max_ring_points=500):
+        """``geometry`` simplified until no ring has more than ``max_ring_points`` vertices.
+
+        Raster-cell outlines are staircases with many vertices; simplifying them (rather than
+        dropping vertices) keeps the map faithful at report size.
+        """
+        for _ in range(8):
+            simple = geometry.simplify(tolerance, preserve_topology=True)
+            rings = [r for p in getattr(simple, "geoms", [simple]) if p.geom_type == "Polygon"
+                     for r in (p.exterior, *p.interiors)]
+            if not rings or max(len(r.coords) for r in rings) <= max_ring_points:
+                return simple
+            tolerance *= 2.0
+        return simple
+
     def _map(self, result, study_union, exclusions, mask):
         minx, miny, maxx, maxy = study_union.bounds
         tolerance = max(maxx - minx, maxy - miny) / 1800.0  # about half a pixel at 900 px
@@ -345,10 +361,10 @@ class BuildFrame(PlotwiseAlgorithm):
             merged = frame_engine.dissolve(geometries).intersection(study_union)
             if already_shown is not None and not already_shown.is_empty:
                 merged = merged.difference(already_shown)
-            merged = merged.simplify(tolerance, preserve_topology=True)
+            merged = self._for_screen(merged, tolerance)
             return (merged,) if not merged.is_empty else ()
 
-        layers = [MapLayer((result.geometry.simplify(tolerance, preserve_topology=True),),
+        layers = [MapLayer((self._for_screen(result.geometry, tolerance),),
                            label=self.tr("sampling frame"), fill=ACCENT, stroke=ACCENT, opacity=0.55)]
         if exclusions:
             layers.append(MapLayer(for_display(exclusions), label=self.tr("excluded polygons"),
