@@ -203,3 +203,41 @@ def test_errors_name_the_rule_or_parameter(registry, tmp_path):
     with pytest.raises(QgsProcessingException, match="MASK"):
         processing.run(registry, {"INPUT": study, "MASK": _mask_raster(tmp_path / "m2.tif"),
                                   "MASK_MIN": 50.0, "OUTPUT": "memory:"})
+
+
+def test_mask_in_another_crs_is_warped(registry, tmp_path):
+    """Study area in UTM 33N, slope raster in WGS 84: the steep block is removed after warping."""
+    import processing
+
+    lon0, lat0, d = 15.25, 45.15, 0.001
+    values = np.full((100, 120), 10.0, np.float32)
+    values[30:70, 40:90] = 45.0  # a block of 40 x 50 cells of 0.001°
+    path = str(tmp_path / "slope_ll.tif")
+    ds = gdal.GetDriverByName("GTiff").Create(path, 120, 100, 1, gdal.GDT_Float32)
+    ds.SetGeoTransform((lon0, d, 0, lat0, 0, -d))
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(4326)
+    ds.SetProjection(srs.ExportToWkt())
+    ds.GetRasterBand(1).WriteArray(values)
+    ds = None
+    to_utm = pyproj.Transformer.from_crs(4326, 32633, always_xy=True)
+    xs, ys = to_utm.transform([lon0 + 0.01, lon0 + 0.11], [lat0 - 0.09, lat0 - 0.01])
+    x0, x1 = sorted(xs)
+    y0, y1 = sorted(ys)
+    study = _layer([_box(x0, y0, x1, y1)], name="reserve")
+    feedback = Recorder()
+    result = processing.run(
+        registry, {"INPUT": study, "MASK": path, "MASK_MAX": 30.0, "OUTPUT": "memory:"},
+        feedback=feedback,
+    )
+    assert any("reprojected" in line for line in feedback.infos)
+    frame = _only_feature(result["OUTPUT"])
+    block = "POLYGON(({0} {1},{2} {1},{2} {3},{0} {3},{0} {1}))".format(
+        lon0 + 40 * d, lat0 - 70 * d, lon0 + 90 * d, lat0 - 30 * d)
+    from shapely import wkt as shapely_wkt
+
+    area_block = abs(pyproj.Geod(ellps="WGS84").geometry_area_perimeter(shapely_wkt.loads(block))[0])
+    lost = (x1 - x0) * (y1 - y0) - frame["area_ha"] * 1e4
+    # geodesic area of the block (Karney 2013); nearest-neighbour warping moves its rim
+    # by less than a cell, and UTM's scale factor changes areas by < 0.1 % here
+    assert lost == pytest.approx(area_block, rel=0.03)
