@@ -25,8 +25,8 @@ from shapely import wkb
 
 from .engine.errors import Cancelled, InputError
 
-#: Upper limit on the number of cells read over the extent (about 1.6 GB as float64).
-MAX_CELLS = 200_000_000
+#: Upper limit on the number of cells read over the extent (about 0.6 GB at peak).
+MAX_CELLS = 50_000_000
 
 
 @dataclass(frozen=True)

@@ -237,3 +237,9 @@ def test_unreadable_raster_is_an_input_error(tmp_path):
     bad.write_text("not a raster")
     with pytest.raises(InputError, match="MASK"):
         rm.mask_polygons(str(bad), (0, 0, 1, 1), UTM)
+
+
+def test_too_many_cells_is_an_input_error(utm_raster, monkeypatch):
+    monkeypatch.setattr(rm, "MAX_CELLS", 100)
+    with pytest.raises(InputError, match="coarser"):
+        rm.mask_polygons(utm_raster[0], (X0, Y0 - 900, X0 + 900, Y0), UTM, None, 30.0)
