@@ -77,8 +77,8 @@ def reserve_boundary(rng, area_km2):
     """An irregular, star-shaped boundary of exactly ``area_km2`` around ``ORIGIN``."""
     theta = np.linspace(0.0, 2.0 * np.pi, 720, endpoint=False)
     radius = np.ones_like(theta)
-    for k in range(2, 9):
-        amplitude = rng.uniform(0.02, 0.13) / k**0.6
+    for k in range(2, 40):
+        amplitude = rng.uniform(0.02, 0.13) / k**0.6 if k < 9 else rng.uniform(0.0, 0.05) / k**0.7
         radius += amplitude * np.cos(k * theta + rng.uniform(0, 2 * np.pi))
     shape = Polygon(np.column_stack([np.cos(theta) * radius, np.sin(theta) * radius]))
     scale = np.sqrt(area_km2 * 1e6 / shape.area)

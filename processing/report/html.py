@@ -122,7 +122,8 @@ class Report:
     def parameters(self, mapping, heading=None):
         """Inputs and parameters as a two-column table (seed and CRS belong here too)."""
         self.section(heading or self._tr("Inputs and parameters"))
-        self.table([self._tr("Item"), self._tr("Value")], [[k, v] for k, v in mapping.items()])
+        rows = [[k, str(v) if isinstance(v, numbers.Integral) and not isinstance(v, bool) else v] for k, v in mapping.items()]
+        self.table([self._tr("Item"), self._tr("Value")], rows)  # whole numbers (seeds, ids) without separators
 
     def warnings(self, messages):
         self._warnings.extend(str(m) for m in messages if m)
