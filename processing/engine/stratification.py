@@ -1,0 +1,1048 @@
+"""Strata from raster covariates, computed block by block with bounded memory.
+
+The cells of the sampling frame are read from a *cell source*: any object with
+a ``blocks()`` method returning a fresh iterator of :class:`CellBlock` and an
+``n_blocks`` attribute. Every function here makes one or more passes over the
+source, so memory never depends on the raster's size.
+:class:`ArrayCellSource` serves arrays already in memory (tests, small rasters);
+``processing/raster_io.py`` serves GDAL rasters.
+
+Methods
+-------
+quantile
+    Equal-count strata on the first covariate; the boundaries are the exact
+    sample quantiles (the ``linear`` rule of Hyndman & Fan (1996), definition 7,
+    which is also ``numpy.quantile``'s default).
+equal interval
+    The first covariate's range cut into equal widths.
+cumulative root frequency
+    Dalenius & Hodges (1959), JASA 54:88-101; Cochran (1977) §5A.7.
+k-means
+    Lloyd (1982) iterations from k-means++ seeds (Arthur & Vassilvitskii 2007),
+    on all covariates standardised to mean 0 and standard deviation 1, fitted on
+    a seeded subsample of cells; then every cell goes to its nearest centre.
+raster classes
+    Each value of a categorical first covariate is a stratum.
+
+A cell with no value in any covariate is left out. Strata are numbered 1..k by
+increasing mean of the first covariate; 0 means "no stratum".
+"""
+from dataclasses import dataclass, field
+import math
+
+import numpy as np
+
+from .errors import Cancelled, InputError
+
+QUANTILE = 0
+EQUAL_INTERVAL = 1
+CUM_ROOT_F = 2
+KMEANS = 3
+RASTER_CLASSES = 4
+METHOD_NAMES = ("quantile", "equal interval", "cumulative root frequency", "k-means", "raster classes")
+
+#: fine histogram used to locate quantiles; divisible by the coarse class counts below
+FINE_BINS = 64000
+#: classes of the frequency table for the cum sqrt(f) rule  # common practice
+CUM_ROOT_F_CLASSES = 100
+#: classes of the histogram drawn in the report
+CHART_BINS = 40
+#: most classes a categorical raster may have
+MAX_CLASSES = 50
+#: most values held in memory at once while selecting exact quantiles
+SELECTION_CAP = 4_000_000
+
+
+# ---------------------------------------------------------------------------
+# cell sources
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class CellBlock:
+    """One window of the covariate stack.
+
+    Attributes
+    ----------
+    window : tuple of int
+        ``(xoff, yoff, xsize, ysize)`` on the stack's grid.
+    values : tuple of numpy.ndarray
+        One ``(ysize, xsize)`` array per covariate, in the raster's own dtype.
+    in_frame : numpy.ndarray of bool
+        Cells whose centre lies inside the frame.
+    valid : numpy.ndarray of bool
+        Cells inside the frame with a value in every covariate.
+    strata : numpy.ndarray or None
+        Stratum id per cell (0 = none) when the source carries a stratum raster.
+    """
+
+    window: tuple
+    values: tuple
+    in_frame: np.ndarray
+    valid: np.ndarray
+    strata: np.ndarray = None
+
+
+class ArrayCellSource:
+    """Cells held in memory, served in strips of ``block_rows`` rows.
+
+    Parameters
+    ----------
+    values : sequence of 2-D arrays
+        One array per covariate, all of the same shape. NaN marks NoData.
+    in_frame : 2-D bool array, optional
+        Cells inside the frame (default: all).
+    nodata : sequence, optional
+        NoData value per covariate (``None`` for none), besides NaN.
+    strata : 2-D int array, optional
+        A stratum raster to serve with the blocks.
+    """
+
+    def __init__(self, values, in_frame=None, nodata=None, block_rows=64, strata=None):
+        self.values = tuple(np.asarray(v) for v in values)
+        shape = self.values[0].shape
+        if any(v.shape != shape for v in self.values):
+            raise ValueError("All covariate arrays must have the same shape.")
+        self.in_frame = np.ones(shape, bool) if in_frame is None else np.asarray(in_frame, bool)
+        self.nodata = tuple(nodata) if nodata is not None else (None,) * len(self.values)
+        self.block_rows = max(1, int(block_rows))
+        self.strata = strata
+        self.n_blocks = -(-shape[0] // self.block_rows)
+
+    @property
+    def shape(self):
+        return self.values[0].shape
+
+    def with_strata(self, strata):
+        """The same cells served together with a stratum raster."""
+        return ArrayCellSource(self.values, self.in_frame, self.nodata, self.block_rows, strata)
+
+    def blocks(self):
+        rows, cols = self.shape
+        for y0 in range(0, rows, self.block_rows):
+            y1 = min(rows, y0 + self.block_rows)
+            vals = tuple(v[y0:y1] for v in self.values)
+            frame = self.in_frame[y0:y1]
+            strata = None if self.strata is None else np.asarray(self.strata[y0:y1])
+            yield CellBlock((0, y0, cols, y1 - y0), vals, frame, valid_cells(vals, frame, self.nodata), strata)
+
+
+def valid_cells(values, in_frame, nodata):
+    """Cells inside the frame with a value (not NaN, not NoData) in every covariate."""
+    ok = np.array(in_frame, bool, copy=True)
+    for v, nd in zip(values, nodata):
+        if v.dtype.kind == "f":
+            ok &= np.isfinite(v)
+        if nd is not None and not (isinstance(nd, float) and math.isnan(nd)):
+            ok &= v != nd
+    return ok
+
+
+def scaled_progress(progress, start, stop):
+    """A progress callable mapping [0, 1] onto [start, stop] of ``progress``."""
+    if progress is None:
+        return None
+    return lambda f: progress(start + (stop - start) * min(1.0, max(0.0, f)))
+
+
+def _tick(progress, i, n):
+    if progress is not None and progress((i + 1) / max(1, n)):
+        raise Cancelled("Stratification cancelled.")
+
+
+def _work_dtype(dtype):
+    """float32 data stay float32 (exact and twice as fast); everything else is float64."""
+    return np.float32 if np.dtype(dtype) in (np.float32, np.int8, np.uint8, np.int16, np.uint16) else np.float64
+
+
+def _column(block, covariate):
+    v = block.values[covariate][block.valid]
+    return v.astype(_work_dtype(v.dtype), copy=False)
+
+
+# ---------------------------------------------------------------------------
+# pass 1: the covariates' range, mean and spread
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class CovariateSummary:
+    """Per covariate over the valid cells; ``sd`` is the population SD (ddof 0)."""
+
+    count: int
+    cells_in_frame: int
+    minimum: np.ndarray
+    maximum: np.ndarray
+    mean: np.ndarray
+    sd: np.ndarray
+
+    @property
+    def cells_nodata(self):
+        return self.cells_in_frame - self.count
+
+
+def covariate_summary(source, progress=None):
+    """Count, range, mean and SD of every covariate over the valid cells.
+
+    Block results are merged with the pairwise update of Chan, Golub & LeVeque
+    (1983): for parts A, B with counts n, means m and sums of squared deviations
+    M2, ``M2 = M2_A + M2_B + (m_B - m_A)^2 n_A n_B / (n_A + n_B)``.
+    """
+    n = 0
+    frame = 0
+    lo = hi = mean = m2 = None
+    for i, block in enumerate(source.blocks()):
+        frame += int(np.count_nonzero(block.in_frame))
+        cols = [block.values[c][block.valid].astype(np.float64, copy=False) for c in range(len(block.values))]
+        nb = cols[0].size if cols else 0
+        if nb:
+            bmin = np.array([c.min() for c in cols])
+            bmax = np.array([c.max() for c in cols])
+            bmean = np.array([c.mean() for c in cols])
+            bm2 = np.array([np.square(c - m).sum() for c, m in zip(cols, bmean)])
+            if n == 0:
+                lo, hi, mean, m2 = bmin, bmax, bmean, bm2
+            else:
+                lo, hi = np.minimum(lo, bmin), np.maximum(hi, bmax)
+                delta = bmean - mean
+                tot = n + nb
+                mean = mean + delta * nb / tot
+                m2 = m2 + bm2 + delta**2 * n * nb / tot
+            n += nb
+        _tick(progress, i, source.n_blocks)
+    if n == 0:
+        return CovariateSummary(0, frame, np.array([]), np.array([]), np.array([]), np.array([]))
+    return CovariateSummary(n, frame, lo, hi, mean, np.sqrt(m2 / n))
+
+
+# ---------------------------------------------------------------------------
+# streamed histograms and exact quantiles
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class Histogram:
+    """Equal-width frequency table of the first covariate over [lo, hi].
+
+    Values below ``lo`` count in the first class and values above ``hi`` in the
+    last, so the classes hold every cell. ``minimum``/``maximum`` are exact.
+    """
+
+    lo: float
+    hi: float
+    counts: np.ndarray
+    minimum: float
+    maximum: float
+
+    @property
+    def edges(self):
+        return np.linspace(self.lo, self.hi, self.counts.size + 1)
+
+    @property
+    def total(self):
+        return int(self.counts.sum())
+
+    def coarsen(self, classes):
+        """Merge neighbouring classes down to ``classes`` (must divide the count)."""
+        if self.counts.size % classes:
+            raise ValueError("classes must divide the number of histogram classes")
+        return Histogram(self.lo, self.hi, self.counts.reshape(classes, -1).sum(axis=1), self.minimum, self.maximum)
+
+
+def histogram_class_index(v, lo, hi, bins):
+    """Class index of each value, ``floor((v - lo) * bins / (hi - lo))`` clipped to [0, bins-1].
+
+    The arithmetic runs in ``v``'s dtype. Rounded subtraction and multiplication
+    by a positive constant are monotone, so the index never decreases as ``v``
+    grows; the exact quantile search relies on that, not on exact class edges.
+    """
+    dt = v.dtype
+    scale = dt.type(bins / (hi - lo)) if hi > lo else dt.type(0)
+    t = (v - dt.type(lo)) * scale
+    np.clip(t, 0, bins - 1, out=t)
+    return t.astype(np.intp)
+
+
+def streamed_histogram(source, bins, value_range=None, covariate=0, progress=None):
+    """Frequency table of one covariate in one pass over the valid cells.
+
+    Parameters
+    ----------
+    value_range : (lo, hi), optional
+        Range of the classes. Any range works (values outside fall into the end
+        classes); without one, a first pass finds the exact minimum and maximum.
+    """
+    if value_range is None:
+        s = covariate_summary(_OneCovariate(source, covariate), scaled_progress(progress, 0, 0.5))
+        if s.count == 0:
+            return Histogram(0.0, 0.0, np.zeros(bins, np.int64), math.nan, math.nan)
+        value_range = (float(s.minimum[0]), float(s.maximum[0]))
+        progress = scaled_progress(progress, 0.5, 1)
+    lo, hi = float(value_range[0]), float(value_range[1])
+    counts = np.zeros(bins, np.int64)
+    vmin, vmax = math.inf, -math.inf
+    for i, block in enumerate(source.blocks()):
+        v = _column(block, covariate)
+        if v.size:
+            counts += np.bincount(histogram_class_index(v, lo, hi, bins), minlength=bins)
+            vmin, vmax = min(vmin, float(v.min())), max(vmax, float(v.max()))
+        _tick(progress, i, source.n_blocks)
+    return Histogram(lo, hi, counts, vmin, vmax)
+
+
+class _OneCovariate:
+    """View of a source restricted to one covariate (validity still uses all)."""
+
+    def __init__(self, source, covariate):
+        self.source, self.covariate, self.n_blocks = source, covariate, source.n_blocks
+
+    def blocks(self):
+        for b in self.source.blocks():
+            yield CellBlock(b.window, (b.values[self.covariate],), b.in_frame, b.valid, b.strata)
+
+
+def _numpy_lerp(a, b, t):
+    """``numpy.quantile``'s interpolation (numpy 1.22+ ``_lerp``), for identical results."""
+    diff = b - a
+    return np.where(t >= 0.5, b - diff * (1 - t), a + diff * t)
+
+
+def exact_quantiles(source, probabilities, value_range=None, covariate=0, bins=FINE_BINS,
+                    cap=SELECTION_CAP, progress=None, histogram=None):
+    """Exact sample quantiles of a covariate over the valid cells, in bounded memory.
+
+    The result equals ``numpy.quantile(cells, probabilities)`` (linear rule,
+    Hyndman & Fan 1996 def. 7: with sorted cells x_(0..n-1) and h = (n-1)p,
+    Q(p) = x_(floor h) + (h - floor h)(x_(floor h + 1) - x_(floor h))).
+
+    Two passes (Press et al., *Numerical Recipes*, §8.5 "selecting the Mth
+    largest" by bucketing):
+
+    1. a fine histogram (``bins`` classes) locates the class holding each
+       order statistic needed and the rank within that class;
+    2. a second pass keeps only the cells of those classes (at most ``cap``
+       values in memory) and takes the order statistics with
+       ``numpy.partition``.
+
+    A class holding more than its share of ``cap`` cells (heavy ties, or most
+    cells in one class) is split again by a finer histogram of its own cells on
+    a further pass, until it is small enough or holds a single value.
+
+    Returns
+    -------
+    quantiles : numpy.ndarray of float64
+    histogram : Histogram
+        The pass-1 frequency table (reused for the distinct-value check).
+    """
+    p = np.asarray(probabilities, float)
+    if histogram is None:
+        histogram = streamed_histogram(source, bins, value_range, covariate, scaled_progress(progress, 0, 0.5))
+    n = histogram.total
+    if n == 0:
+        raise InputError("No cell of the frame has a value in every covariate.")
+    h = (n - 1) * p
+    low = np.floor(h).astype(np.int64)
+    high = np.minimum(low + 1, n - 1)
+    ranks = np.unique(np.concatenate([low, high]))
+    order_stats = _order_statistics(source, ranks, histogram, covariate, cap,
+                                    scaled_progress(progress, 0.5, 1))
+    lookup = dict(zip(ranks.tolist(), order_stats))
+    a = np.array([lookup[r] for r in low.tolist()], float)
+    b = np.array([lookup[r] for r in high.tolist()], float)
+    return _numpy_lerp(a, b, h - low), histogram
+
+
+def _order_statistics(source, ranks, histogram, covariate, cap, progress):
+    """Values of the given 0-based ranks (see :func:`exact_quantiles`)."""
+    bins = histogram.counts.size
+    cum = np.cumsum(histogram.counts)
+    # a task: chain of (lo, hi, bins, class) levels, ranks inside the member set
+    tasks = []
+    for cls in np.unique(np.searchsorted(cum, ranks, side="right")):
+        inside = ranks[np.searchsorted(cum, ranks, side="right") == cls]
+        start = cum[cls - 1] if cls else 0
+        lo, hi = _class_range(histogram.lo, histogram.hi, bins, cls, histogram.minimum, histogram.maximum)
+        tasks.append(dict(chain=[(histogram.lo, histogram.hi, bins, int(cls))], ranks=inside - start,
+                          count=int(histogram.counts[cls]), range=(lo, hi), ranks_abs=inside))
+    result = {}
+    level = 0
+    while tasks:
+        share = max(1, cap // len(tasks))
+        for t in tasks:
+            t["collect"] = t["count"] <= share or level >= 12
+            t["values"], t["hist"], t["min"], t["max"] = [], np.zeros(FINE_BINS, np.int64), math.inf, -math.inf
+        level0 = np.zeros(bins, bool)
+        level0[[t["chain"][0][3] for t in tasks]] = True
+        for i, block in enumerate(source.blocks()):
+            v = _column(block, covariate)
+            if v.size:
+                i0 = histogram_class_index(v, histogram.lo, histogram.hi, bins)
+                keep = level0[i0]
+                v, i0 = v[keep], i0[keep]
+                for t in tasks:
+                    m = v[i0 == t["chain"][0][3]]
+                    for lo, hi, nb, cls in t["chain"][1:]:
+                        m = m[histogram_class_index(m, lo, hi, nb) == cls]
+                    if m.size == 0:
+                        continue
+                    t["min"], t["max"] = min(t["min"], float(m.min())), max(t["max"], float(m.max()))
+                    if t["collect"]:
+                        t["values"].append(m)
+                    else:
+                        lo, hi = t["range"]
+                        t["hist"] += np.bincount(histogram_class_index(m, lo, hi, FINE_BINS), minlength=FINE_BINS)
+            _tick(progress, i, source.n_blocks)
+        nxt = []
+        for t in tasks:
+            if t["min"] == t["max"]:
+                result.update((int(r), t["min"]) for r in t["ranks_abs"])
+            elif t["collect"]:
+                vals = np.concatenate(t["values"]).astype(np.float64)
+                part = np.partition(vals, t["ranks"])
+                result.update((int(r), float(part[k])) for r, k in zip(t["ranks_abs"], t["ranks"]))
+            else:
+                lo, hi = t["range"]
+                sub_cum = np.cumsum(t["hist"])
+                where = np.searchsorted(sub_cum, t["ranks"], side="right")
+                for cls in np.unique(where):
+                    sel = where == cls
+                    start = sub_cum[cls - 1] if cls else 0
+                    rng = _class_range(lo, hi, FINE_BINS, cls, t["min"], t["max"])
+                    nxt.append(dict(chain=t["chain"] + [(lo, hi, FINE_BINS, int(cls))], ranks=t["ranks"][sel] - start,
+                                    count=int(t["hist"][cls]), range=rng, ranks_abs=t["ranks_abs"][sel]))
+        tasks = nxt
+        level += 1
+    return [result[int(r)] for r in ranks]
+
+
+def _class_range(lo, hi, bins, cls, vmin, vmax):
+    width = (hi - lo) / bins
+    a = lo + cls * width if cls > 0 else vmin
+    b = lo + (cls + 1) * width if cls < bins - 1 else vmax
+    a, b = max(a, vmin), min(b, vmax)
+    return (a, b) if b > a else (vmin, vmax)
+
+
+# ---------------------------------------------------------------------------
+# boundaries
+# ---------------------------------------------------------------------------
+def quantile_probabilities(n_strata):
+    """Probabilities h/k, h = 1..k-1, of equal-count strata."""
+    return np.arange(1, n_strata) / n_strata
+
+
+def equal_interval_boundaries(minimum, maximum, n_strata):
+    """``b_h = min + h (max - min) / k`` for h = 1..k-1."""
+    return minimum + (maximum - minimum) * np.arange(1, n_strata) / n_strata
+
+
+def cum_root_f_boundaries(edges, counts, n_strata):
+    """Dalenius–Hodges cumulative root frequency boundaries.
+
+    Dalenius & Hodges (1959), JASA 54:88-101; Cochran (1977) §5A.7. With J
+    classes of frequencies f_j and widths d_j, form ``C_j = sum_{i<=j} sqrt(f_i d_i)``
+    (equal widths: ``sqrt(f_i)``). The boundary of stratum h is the upper edge of
+    the class whose ``C_j`` lies nearest to ``h C_J / k``, h = 1..k-1.
+
+    Parameters
+    ----------
+    edges : array of J+1 class edges
+    counts : array of J frequencies
+
+    Returns
+    -------
+    numpy.ndarray of k-1 boundaries (class upper edges), ascending; equal
+    targets may pick the same edge, which the caller must merge.
+    """
+    edges = np.asarray(edges, float)
+    f = np.asarray(counts, float)
+    widths = np.diff(edges)
+    equal = np.allclose(widths, widths[0])
+    root = np.sqrt(f) if equal else np.sqrt(f * widths / widths.min())
+    cum = np.cumsum(root)
+    targets = cum[-1] * np.arange(1, n_strata) / n_strata
+    # the nearest C_j among the first J-1 class tops (the last edge closes the range)
+    candidates = cum[:-1]
+    idx = np.abs(candidates[None, :] - targets[:, None]).argmin(axis=1)
+    return edges[idx + 1]
+
+
+# ---------------------------------------------------------------------------
+# k-means
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class KMeansFit:
+    """Lloyd iterations' result on the (standardised) sample."""
+
+    centres: np.ndarray
+    initial_centres: np.ndarray
+    labels: np.ndarray
+    iterations: int
+    inertia: float
+
+
+def _sq_distances(x, centres):
+    """Squared Euclidean distances (n, k), computed per centre to keep memory at O(n)."""
+    return np.stack([np.square(x - c).sum(axis=1) for c in centres], axis=1)
+
+
+def kmeans_plusplus(x, n_clusters, rng):
+    """k-means++ seeds (Arthur & Vassilvitskii 2007).
+
+    The first centre is a uniformly drawn point; each next one is drawn with
+    probability proportional to D(x)^2, the squared distance to the nearest
+    centre chosen so far.
+    """
+    n = x.shape[0]
+    centres = [x[rng.integers(n)]]
+    d2 = np.square(x - centres[0]).sum(axis=1)
+    for _ in range(1, n_clusters):
+        total = d2.sum()
+        if total <= 0:
+            raise InputError("The covariates take fewer distinct value combinations than strata asked for.")
+        c = x[rng.choice(n, p=d2 / total)]
+        centres.append(c)
+        np.minimum(d2, np.square(x - c).sum(axis=1), out=d2)
+    return np.array(centres, float)
+
+
+def lloyd_kmeans(x, initial_centres, max_iter=300):
+    """Lloyd (1982) iterations until no point changes cluster (or ``max_iter``).
+
+    Each point goes to its nearest centre (lowest index on ties); each centre
+    moves to the mean of its points. An emptied cluster takes the point
+    farthest from its own centre.
+    """
+    centres = np.array(initial_centres, float, copy=True)
+    k = centres.shape[0]
+    labels = None
+    it = 0
+    for it in range(1, max_iter + 1):
+        d2 = _sq_distances(x, centres)
+        new = d2.argmin(axis=1)
+        if labels is not None and np.array_equal(new, labels):
+            break
+        labels = new
+        counts = np.bincount(labels, minlength=k)
+        for j in np.flatnonzero(counts == 0):
+            far = d2[np.arange(x.shape[0]), labels].argmax()
+            labels[far] = j
+            counts = np.bincount(labels, minlength=k)
+        for d in range(x.shape[1]):
+            centres[:, d] = np.bincount(labels, weights=x[:, d], minlength=k) / counts
+    d2 = _sq_distances(x, centres)
+    labels = d2.argmin(axis=1)
+    return KMeansFit(centres, np.array(initial_centres, float), labels, it, float(d2.min(axis=1).sum()))
+
+
+def cell_sample(source, n_cells, size, rng, progress=None):
+    """A simple random sample without replacement of ``size`` valid cells (all if fewer).
+
+    The ranks of the sampled cells in reading order are drawn first
+    (``rng.choice``), then one pass picks them up. Returns an (m, n_covariates)
+    float64 array in reading order.
+    """
+    if size >= n_cells:
+        picks = None
+    else:
+        picks = np.sort(rng.choice(n_cells, size=size, replace=False))
+    rows = []
+    offset = 0
+    for i, block in enumerate(source.blocks()):
+        cols = [block.values[c][block.valid] for c in range(len(block.values))]
+        nb = cols[0].size
+        if nb:
+            if picks is None:
+                sel = slice(None)
+            else:
+                a, b = np.searchsorted(picks, [offset, offset + nb])
+                sel = picks[a:b] - offset
+            rows.append(np.column_stack([c[sel].astype(np.float64) for c in cols]))
+        offset += nb
+        _tick(progress, i, source.n_blocks)
+    return np.concatenate(rows) if rows else np.empty((0, 0))
+
+
+# ---------------------------------------------------------------------------
+# assignment rules
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class ThresholdRule:
+    """Stratum h holds ``b_{h-1} <= x < b_h`` of one covariate (b_0 = -inf, b_k = +inf)."""
+
+    boundaries: np.ndarray
+    covariate: int = 0
+
+    @property
+    def n_strata(self):
+        return len(self.boundaries) + 1
+
+    def assign(self, block):
+        v = _column(block, self.covariate)
+        if len(self.boundaries) <= 16:
+            ids = np.ones(v.size, np.uint8)
+            for b in self.boundaries:
+                ids += v >= exact_threshold(b, v.dtype)
+            return ids
+        return (np.searchsorted(self.boundaries, v, side="right") + 1).astype(np.uint16)
+
+
+def exact_threshold(b, dtype):
+    """The smallest value t of ``dtype`` with t >= b, so that ``v >= t`` equals ``v >= b`` exactly.
+
+    Comparing a float32 array with a float64 scalar would otherwise round the
+    scalar to float32 first (numpy's value-based casting) and misplace cells
+    that lie between the two.
+    """
+    t = np.dtype(dtype).type(b)
+    if float(t) < b:
+        t = np.nextafter(t, np.dtype(dtype).type(np.inf))
+    return t
+
+
+@dataclass(frozen=True)
+class NearestCentreRule:
+    """Nearest centre in covariates standardised by ``(x - mean) / sd``."""
+
+    centres: np.ndarray
+    mean: np.ndarray
+    sd: np.ndarray
+
+    @property
+    def n_strata(self):
+        return self.centres.shape[0]
+
+    def assign(self, block):
+        n = int(np.count_nonzero(block.valid))
+        best = np.full(n, np.inf)
+        ids = np.ones(n, np.uint8)
+        for j, c in enumerate(self.centres):
+            d2 = np.zeros(n)
+            for d in range(len(block.values)):
+                z = (block.values[d][block.valid].astype(np.float64) - self.mean[d]) / self.sd[d]
+                d2 += np.square(z - c[d])
+            closer = d2 < best
+            best[closer] = d2[closer]
+            ids[closer] = j + 1
+        return ids
+
+
+@dataclass(frozen=True)
+class ClassRule:
+    """Stratum h holds the cells whose first covariate equals ``classes[h-1]``."""
+
+    classes: np.ndarray
+    covariate: int = 0
+
+    @property
+    def n_strata(self):
+        return len(self.classes)
+
+    def assign(self, block):
+        v = block.values[self.covariate][block.valid]
+        return (np.searchsorted(self.classes, v) + 1).astype(np.uint8)
+
+
+# ---------------------------------------------------------------------------
+# per-stratum statistics
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class StratumStatistics:
+    """Cell counts and covariate statistics per stratum (rows = strata 1..k).
+
+    ``mean``, ``sd``, ``minimum``, ``maximum`` are (k, n_covariates); ``sd`` is
+    the population SD of the stratum's cells (ddof 0). ``chart_counts`` is a
+    (k, CHART_BINS) histogram of the first covariate per stratum over
+    ``chart_range``. ``cells_in_frame`` counts every frame cell of the grid,
+    with or without values.
+    """
+
+    count: np.ndarray
+    mean: np.ndarray
+    sd: np.ndarray
+    minimum: np.ndarray
+    maximum: np.ndarray
+    chart_range: tuple
+    chart_counts: np.ndarray
+    cells_in_frame: int = 0
+
+    @property
+    def n_strata(self):
+        return self.count.size
+
+    @property
+    def total(self):
+        return int(self.count.sum())
+
+    def overall_mean(self):
+        return (self.count[:, None] * self.mean).sum(axis=0) / self.total
+
+    def overall_sd(self):
+        """Population SD of all cells, from the strata: total SS = within SS + between SS."""
+        m = self.overall_mean()
+        ss = (self.count[:, None] * (self.sd**2 + (self.mean - m) ** 2)).sum(axis=0)
+        return np.sqrt(ss / self.total)
+
+    def r_squared(self):
+        """Share of each covariate's variance explained by the strata.
+
+        ``R^2 = 1 - sum_h N_h S_h^2 / (N S^2)`` with population variances: the
+        between-strata sum of squares over the total sum of squares (one-way
+        analysis of variance). Cochran (1977) §5.6 shows the variance of the
+        stratified mean under proportional allocation shrinks by this share.
+        """
+        within = (self.count[:, None] * self.sd**2).sum(axis=0)
+        total = self.total * self.overall_sd() ** 2
+        with np.errstate(invalid="ignore", divide="ignore"):
+            return np.where(total > 0, 1 - within / total, np.nan)
+
+    def reordered(self, order):
+        """Rows taken in ``order`` (an index array)."""
+        o = np.asarray(order)
+        return StratumStatistics(self.count[o], self.mean[o], self.sd[o], self.minimum[o], self.maximum[o],
+                                 self.chart_range, self.chart_counts[o], self.cells_in_frame)
+
+
+def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, chart_range=None, progress=None):
+    """One pass: assign cells to strata (if ``rule``) or read ``block.strata``, and sum up.
+
+    Per stratum h and covariate x: N_h, sum(x - c), sum((x - c)^2), min, max,
+    with c = ``shift`` close to the covariate's mean so that
+    ``S_h^2 = sum((x-c)^2)/N_h - (sum(x-c)/N_h)^2`` keeps its precision.
+
+    Parameters
+    ----------
+    rule : ThresholdRule, NearestCentreRule or ClassRule, optional
+        Without a rule the source must carry a stratum raster.
+    write : callable ``write(window, ids)``, optional
+        Receives each block's stratum ids (uint8/uint16, 0 = no stratum).
+    chart_range : (lo, hi), optional
+        Range of the per-stratum histogram of the first covariate.
+
+    Returns
+    -------
+    StratumStatistics
+    """
+    k = int(n_strata)
+    s1 = s2 = mn = mx = None
+    count = np.zeros(k + 1, np.int64)
+    chart = np.zeros((k + 1) * CHART_BINS, np.int64)
+    frame = 0
+    for i, block in enumerate(source.blocks()):
+        ncov = len(block.values)
+        frame += int(np.count_nonzero(block.in_frame))
+        if s1 is None:
+            s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
+            mn, mx = np.full((ncov, k + 1), np.inf), np.full((ncov, k + 1), -np.inf)
+            shift = np.zeros(ncov) if shift is None else np.asarray(shift, float)
+        has_cells = bool(block.valid.any())
+        if rule is not None:
+            ids = rule.assign(block) if has_cells else np.zeros(0, np.uint8)
+            if write is not None:
+                full = np.zeros(block.valid.shape, ids.dtype)
+                full[block.valid] = ids
+                write(block.window, full)
+        else:
+            ids = block.strata[block.valid]
+            if ids.size and ids.max() > k:
+                raise ValueError("stratum raster holds ids beyond n_strata")
+        if ids.size:
+            per = np.bincount(ids, minlength=k + 1)
+            count += per
+            present = np.flatnonzero(per)
+            if present.size > 1:
+                order = np.argsort(ids, kind="stable")  # radix sort for small integer ids
+                starts = np.concatenate([[0], np.cumsum(per[present])[:-1]])
+            for c in range(ncov):
+                x = block.values[c][block.valid].astype(np.float64) - shift[c]
+                s1[c] += np.bincount(ids, weights=x, minlength=k + 1)
+                s2[c] += np.bincount(ids, weights=x * x, minlength=k + 1)
+                if present.size == 1:
+                    h = present[0]
+                    mn[c, h] = min(mn[c, h], x.min())
+                    mx[c, h] = max(mx[c, h], x.max())
+                else:
+                    xs = x[order]
+                    mn[c, present] = np.minimum(mn[c, present], np.minimum.reduceat(xs, starts))
+                    mx[c, present] = np.maximum(mx[c, present], np.maximum.reduceat(xs, starts))
+            if chart_range is not None:
+                v0 = _column(block, 0)
+                cls = histogram_class_index(v0, chart_range[0], chart_range[1], CHART_BINS)
+                cls += ids * CHART_BINS
+                chart += np.bincount(cls, minlength=(k + 1) * CHART_BINS)
+        _tick(progress, i, source.n_blocks)
+    if s1 is None:
+        raise InputError("The frame holds no raster cell.")
+    with np.errstate(invalid="ignore", divide="ignore"):
+        n = count[1:].astype(float)
+        m = s1[:, 1:] / n
+        var = np.maximum(s2[:, 1:] / n - m**2, 0.0)
+    return StratumStatistics(count[1:], (m + shift[:, None]).T, np.sqrt(var).T,
+                             (mn[:, 1:] + shift[:, None]).T, (mx[:, 1:] + shift[:, None]).T,
+                             tuple(chart_range) if chart_range is not None else (math.nan, math.nan),
+                             chart.reshape(k + 1, CHART_BINS)[1:], frame)
+
+
+def stratum_order(statistics):
+    """Lookup table old id -> new id: non-empty strata renumbered 1..m by first-covariate mean.
+
+    Entry 0 stays 0; empty strata map to 0. Also returns the old (0-based)
+    index of each new stratum.
+    """
+    k = statistics.n_strata
+    keep = np.flatnonzero(statistics.count > 0)
+    order = keep[np.argsort(statistics.mean[keep, 0], kind="stable")]
+    lut = np.zeros(k + 1, np.int64)
+    lut[order + 1] = np.arange(1, order.size + 1)
+    return lut, order
+
+
+# ---------------------------------------------------------------------------
+# the whole job
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class Stratification:
+    """Result of :func:`stratify_cells`.
+
+    ``lut`` maps the provisional ids written during assignment to the final
+    ids (identity when nothing was reordered or dropped); the caller applies
+    it to the stratum raster when ``needs_remap``. ``statistics`` is already in
+    the final order; ``provisional`` gives each final stratum's 0-based index
+    in ``rule`` (its boundaries, centre or class).
+    """
+
+    method: int
+    rule: object
+    boundaries: np.ndarray
+    statistics: StratumStatistics
+    lut: np.ndarray
+    provisional: np.ndarray
+    cells_valid: int
+    n_distinct: int
+    sample_size: int
+    kmeans: KMeansFit = None
+    warnings: tuple = field(default_factory=tuple)
+
+    @property
+    def n_strata(self):
+        return self.statistics.n_strata
+
+    @property
+    def needs_remap(self):
+        return not np.array_equal(self.lut, np.arange(self.lut.size))
+
+    @property
+    def cells_in_frame(self):
+        return self.statistics.cells_in_frame
+
+    @property
+    def cells_nodata(self):
+        return self.cells_in_frame - self.cells_valid
+
+    def with_statistics(self, statistics, provisional=None):
+        """The same result with statistics recounted (e.g. after sieving); ids are now final.
+
+        ``provisional`` replaces the rule index of each stratum when the
+        recount dropped or reordered strata.
+        """
+        k = statistics.n_strata
+        prov = self.provisional if provisional is None else np.asarray(provisional)
+        return Stratification(self.method, self.rule, self.boundaries, statistics, np.arange(k + 1),
+                              prov, statistics.total, self.n_distinct, self.sample_size,
+                              self.kmeans, self.warnings)
+
+
+def count_distinct(source, cap, covariate=0, progress=None):
+    """Distinct values of a covariate over the valid cells, stopping once more than ``cap`` are seen.
+
+    Returns ``(number, values)``; the number is exact when it is at most ``cap``.
+    """
+    seen = np.empty(0)
+    for i, block in enumerate(source.blocks()):
+        v = block.values[covariate][block.valid]
+        if v.size:
+            seen = np.union1d(seen, np.unique(v))
+            if seen.size > cap:
+                return seen.size, seen
+        _tick(progress, i, source.n_blocks)
+    return seen.size, seen
+
+
+def _constant_error(name, value):
+    return InputError("Covariate '%s' is constant (%s) over the frame: it cannot define strata. "
+                      "Use another covariate, or check the frame and the raster." % (name, "%g" % value))
+
+
+def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, sample_size=100_000,
+                   write=None, progress=None):
+    """Strata for the valid cells of ``source``; see the module docstring for the methods.
+
+    Passes over the source: quantile 3 (histogram, exact selection,
+    assignment), equal interval and cum sqrt(f) 3 (summary, histogram,
+    assignment), k-means 3 (summary, subsample, assignment), raster classes 3
+    (summary, distinct values, assignment).
+
+    Parameters
+    ----------
+    method : int
+        QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F, KMEANS or RASTER_CLASSES.
+    n_strata : int
+        Strata wanted (ignored for raster classes).
+    names : sequence of str
+        Covariate names, for messages.
+    rng : numpy.random.Generator
+        Needed by k-means (subsample and seeds).
+    value_range : (lo, hi), optional
+        An approximate range of the first covariate (quantile: saves one pass).
+    sample_size : int
+        Cells in the k-means subsample.
+    write : callable ``write(window, ids)``, optional
+        Receives the provisional stratum ids of each block.
+
+    Raises
+    ------
+    InputError
+        No valid cell, a constant covariate, more strata than distinct values,
+        a categorical raster with more than 50 classes.
+    """
+    k = int(n_strata)
+    warnings = []
+    name0 = names[0]
+    if method not in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F, KMEANS, RASTER_CLASSES):
+        raise InputError("Unknown METHOD %r: use 0 (quantile) to 4 (raster classes)." % (method,))
+    if method != RASTER_CLASSES and k < 2:
+        raise InputError("Ask for at least 2 strata (STRATA).")
+    no_cell = InputError("No cell of the frame has a value in every covariate (%s). Check that the rasters "
+                         "cover the frame and that their NoData value is right." % ", ".join(names))
+    summ = hist = kfit = None
+    sample_n = 0
+    n_distinct = 0
+    boundaries = None
+    if method == QUANTILE:
+        hist = streamed_histogram(source, FINE_BINS, value_range, 0, scaled_progress(progress, 0, 0.3))
+        if hist.total == 0:
+            raise no_cell
+        vmin, vmax = hist.minimum, hist.maximum
+        shift = np.zeros(len(names))
+    else:
+        summ = covariate_summary(source, scaled_progress(progress, 0, 0.2))
+        if summ.count == 0:
+            raise no_cell
+        vmin, vmax = float(summ.minimum[0]), float(summ.maximum[0])
+        shift = summ.mean
+        if method == KMEANS:
+            for c, nm in enumerate(names):
+                if summ.minimum[c] == summ.maximum[c]:
+                    raise _constant_error(nm, summ.minimum[c])
+    if vmin == vmax:
+        raise _constant_error(name0, vmin)
+
+    if method in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F):
+        if method != QUANTILE:
+            hist = streamed_histogram(source, FINE_BINS, (vmin, vmax), 0, scaled_progress(progress, 0.2, 0.4))
+        else:
+            shift[0] = 0.5 * (vmin + vmax)
+        n_distinct = int(np.count_nonzero(hist.counts))  # a lower bound, enough when >= k
+        if n_distinct < k:
+            n_distinct, _ = count_distinct(source, k)
+            if n_distinct < k:
+                raise InputError("Covariate '%s' takes only %d distinct values over the frame, fewer than the %d "
+                                 "strata asked for. Lower STRATA to %d or fewer." % (name0, n_distinct, k, n_distinct))
+        if method == QUANTILE:
+            boundaries, _ = exact_quantiles(source, quantile_probabilities(k), histogram=hist,
+                                            progress=scaled_progress(progress, 0.3, 0.55))
+        elif method == EQUAL_INTERVAL:
+            boundaries = equal_interval_boundaries(vmin, vmax, k)
+        else:
+            coarse = hist.coarsen(CUM_ROOT_F_CLASSES)
+            boundaries = cum_root_f_boundaries(coarse.edges, coarse.counts, k)
+        unique = np.unique(boundaries)
+        if unique.size < boundaries.size:
+            warnings.append("Some boundaries coincide (many cells share the same value of '%s'); "
+                            "%d strata are formed instead of %d." % (name0, unique.size + 1, k))
+        rule = ThresholdRule(unique)
+    elif method == KMEANS:
+        if rng is None:
+            raise ValueError("k-means needs rng")
+        sample = cell_sample(source, summ.count, sample_size, rng, scaled_progress(progress, 0.2, 0.4))
+        sample_n = sample.shape[0]
+        z = (sample - summ.mean) / summ.sd
+        n_distinct = np.unique(z, axis=0).shape[0]
+        if n_distinct < k:
+            where = "over the frame" if sample_n == summ.count else "in a sample of %d cells" % sample_n
+            raise InputError("The covariates take only %d distinct value combinations %s, fewer than the %d strata "
+                             "asked for. Lower STRATA to %d or fewer." % (n_distinct, where, k, n_distinct))
+        kfit = lloyd_kmeans(z, kmeans_plusplus(z, k, rng))
+        order = np.argsort(kfit.centres[:, 0], kind="stable")
+        rule = NearestCentreRule(kfit.centres[order], summ.mean, summ.sd)
+    else:
+        n_distinct, classes = count_distinct(source, MAX_CLASSES, progress=scaled_progress(progress, 0.2, 0.4))
+        if n_distinct > MAX_CLASSES:
+            raise InputError("Covariate '%s' has more than %d classes (at least %d distinct values over the frame): "
+                             "reclassify it into %d classes or fewer first (for example with the host's reclassify "
+                             "by table tool), or choose another METHOD." % (name0, MAX_CLASSES, n_distinct, MAX_CLASSES))
+        rule = ClassRule(np.asarray(classes))
+
+    k = rule.n_strata
+    stats = accumulate_statistics(source, k, rule, write, shift, (vmin, vmax), scaled_progress(progress, 0.55, 1.0))
+    lut, order = stratum_order(stats)
+    dropped = k - order.size
+    if dropped:
+        warnings.append("%d of the %d strata hold no cell and were dropped." % (dropped, k))
+    return Stratification(method, rule, None if boundaries is None else rule.boundaries, stats.reordered(order),
+                          lut, order, int(stats.total), int(n_distinct), int(sample_n), kfit, tuple(warnings))
+
+
+# ---------------------------------------------------------------------------
+# labels
+# ---------------------------------------------------------------------------
+def display_decimals(values):
+    """Decimals that show ``values`` distinctly: about three significant digits of their spread.
+
+    Whole numbers get none.
+    """
+    v = np.asarray(values, float)
+    v = v[np.isfinite(v)]
+    if v.size == 0 or np.all(v == np.round(v)):
+        return 0
+    spread = float(v.max() - v.min()) or abs(float(v.max())) or 1.0
+    return int(min(6, max(0, 2 - math.floor(math.log10(spread)))))
+
+
+def format_covariate_value(x, decimals):
+    """``1240.3`` -> ``"1,240"`` (thousands separated, fixed decimals)."""
+    return f"{x:,.{decimals}f}"
+
+
+def stratum_ranges(result):
+    """(lower, upper) of the first covariate per final stratum for threshold methods.
+
+    The nominal boundaries, with the covariate's minimum and maximum at the ends.
+    """
+    st = result.statistics
+    b = np.asarray(result.rule.boundaries, float)
+    edges = np.concatenate([[np.nanmin(st.minimum[:, 0])], b, [np.nanmax(st.maximum[:, 0])]])
+    p = np.asarray(result.provisional)
+    return edges[p], edges[p + 1]
+
+
+def stratum_labels(result, names, units=None):
+    """Label text per final stratum, e.g. ``"elevation 1,240–1,610 m"``.
+
+    Threshold methods give the first covariate's range of the stratum;
+    k-means gives the stratum's mean of every covariate; raster classes give
+    the class value.
+    """
+    units = list(units) if units is not None else [""] * len(names)
+
+    def unit(c):
+        return (" " + units[c]) if units[c] else ""
+
+    st = result.statistics
+    if isinstance(result.rule, ThresholdRule):
+        lo, hi = stratum_ranges(result)
+        d = display_decimals(np.concatenate([lo, hi]))
+        return ["%s %s\u2013%s%s" % (names[0], format_covariate_value(a, d), format_covariate_value(z, d), unit(0))
+                for a, z in zip(lo, hi)]
+    if isinstance(result.rule, ClassRule):
+        values = np.asarray(result.rule.classes, float)[result.provisional]
+        d = display_decimals(values)
+        return ["%s class %s" % (names[0], format_covariate_value(v, d)) for v in values]
+    decs = [display_decimals(st.mean[:, c]) for c in range(len(names))]
+    return ["mean " + ", ".join("%s %s%s" % (names[c], format_covariate_value(st.mean[h, c], decs[c]), unit(c))
+                                for c in range(len(names)))
+            for h in range(st.n_strata)]

@@ -1,0 +1,242 @@
+"""Stratification engine against outside references: numpy, scikit-learn, a hand-worked table."""
+import numpy as np
+import pytest
+
+from plotwise.processing.engine import stratification as s
+from plotwise.processing.engine.errors import Cancelled, InputError
+
+
+def _gamma_field(seed=1, shape=(240, 310), nan_share=0.05):
+    rng = np.random.default_rng(seed)
+    a = rng.gamma(2.0, 3.0, shape).astype(np.float32)
+    a[rng.random(shape) < nan_share] = np.nan
+    frame = np.zeros(shape, bool)
+    frame[15:230, 20:300] = True
+    return a, frame
+
+
+def _ids_raster(source, result_lut):
+    """Final stratum id per cell, collected through the ``write`` callback."""
+    rows, cols = source.shape
+    out = np.zeros((rows, cols), np.int64)
+
+    def write(window, ids):
+        xo, yo, xs, ys = window
+        out[yo:yo + ys, xo:xo + xs] = ids
+
+    return out, write
+
+
+# --- quantiles ----------------------------------------------------------------------------------
+
+@pytest.mark.parametrize("cap", [s.SELECTION_CAP, 40])
+def test_exact_quantiles_equal_numpy(cap):
+    a, frame = _gamma_field()
+    src = s.ArrayCellSource([a], frame, block_rows=17)
+    cells = a[frame & np.isfinite(a)].astype(float)
+    p = [0.1, 0.2, 0.25, 0.5, 0.8, 0.999]
+    q, _ = s.exact_quantiles(src, p, cap=cap)  # cap=40 forces the class-splitting passes
+    # numpy.quantile, linear rule (Hyndman & Fan 1996 def. 7)
+    np.testing.assert_allclose(q, np.quantile(cells, p), rtol=0, atol=1e-12)
+
+
+def test_exact_quantiles_with_ties_and_a_poor_range_hint():
+    rng = np.random.default_rng(7)
+    b = rng.integers(0, 7, (200, 150)).astype(np.float64)
+    src = s.ArrayCellSource([b], block_rows=33)
+    p = [0.1, 0.25, 0.5, 0.9]
+    # a range hint narrower than the data: values outside fall in the end classes
+    q, _ = s.exact_quantiles(src, p, value_range=(2.0, 3.0), cap=50)
+    np.testing.assert_array_equal(q, np.quantile(b.ravel(), p))  # numpy.quantile
+
+
+def test_quantile_strata_boundaries_and_areas():
+    a, frame = _gamma_field(seed=3)
+    src = s.ArrayCellSource([a], frame, block_rows=23)
+    out, write = _ids_raster(src, None)
+    k = 5
+    r = s.stratify_cells(src, s.QUANTILE, k, ["gamma"], write=write)
+    cells = a[frame & np.isfinite(a)].astype(float)
+    expected = np.quantile(cells, np.arange(1, k) / k)  # numpy.quantile
+    np.testing.assert_allclose(r.boundaries, expected, rtol=0, atol=1e-12)
+    # equal-count strata: within one cell per boundary of N/k (definition of the quantile)
+    n = cells.size
+    per_boundary = np.array([1, 2, 2, 2, 1])
+    assert np.all(np.abs(r.statistics.count - n / k) <= per_boundary)
+    # the written raster matches numpy.digitize on the same cells
+    ref = np.zeros(a.shape, np.int64)
+    ok = frame & np.isfinite(a)
+    ref[ok] = np.digitize(a[ok].astype(float), expected) + 1
+    np.testing.assert_array_equal(r.lut[out], ref)
+    assert r.cells_in_frame == int(frame.sum()) and r.cells_valid == n
+
+
+def test_float32_cells_compared_with_float64_boundaries_exactly():
+    b = 1.0 + 2.0**-30  # between two float32 values
+    v = np.array([[1.0, np.float32(b), np.nextafter(np.float32(1.0), np.float32(2.0))]], np.float32)
+    rule = s.ThresholdRule(np.array([b]))
+    blk = s.CellBlock((0, 0, 3, 1), (v,), np.ones(v.shape, bool), np.ones(v.shape, bool))
+    # exact comparison in real numbers, as numpy.digitize does in float64
+    np.testing.assert_array_equal(rule.assign(blk), np.digitize(v.ravel().astype(float), [b]) + 1)
+
+
+# --- equal interval and cum sqrt(f) ---------------------------------------------------------------
+
+def test_cum_root_f_hand_worked_table():
+    # Dalenius & Hodges (1959) rule as set out in Cochran (1977) §5A.7; table and arithmetic by hand:
+    # f      = 4, 16, 36, 64, 100, 81, 49, 25, 9, 1   (classes 0-10, 10-20, ..., 90-100)
+    # sqrt f = 2,  4,  6,  8,  10,  9,  7,  5, 3, 1
+    # cum    = 2,  6, 12, 20,  30, 39, 46, 51, 54, 55
+    edges = np.arange(0, 101, 10)
+    f = [4, 16, 36, 64, 100, 81, 49, 25, 9, 1]
+    # k = 3: targets 55/3 = 18.33 -> cum 20 (class 30-40), 36.67 -> cum 39 (class 50-60)
+    np.testing.assert_array_equal(s.cum_root_f_boundaries(edges, f, 3), [40, 60])
+    # k = 4: targets 13.75 -> 12 (20-30), 27.5 -> 30 (40-50), 41.25 -> 39 (50-60)
+    np.testing.assert_array_equal(s.cum_root_f_boundaries(edges, f, 4), [30, 50, 60])
+
+
+def test_cum_root_f_strata_use_the_histogram_of_the_cells():
+    a, frame = _gamma_field(seed=5, nan_share=0.0)
+    src = s.ArrayCellSource([a], frame, block_rows=40)
+    r = s.stratify_cells(src, s.CUM_ROOT_F, 4, ["gamma"])
+    cells = a[frame].astype(float)
+    counts, edges = np.histogram(cells, bins=s.CUM_ROOT_F_CLASSES, range=(cells.min(), cells.max()))  # numpy
+    np.testing.assert_allclose(r.boundaries, s.cum_root_f_boundaries(edges, counts, 4), rtol=1e-9)
+
+
+def test_equal_interval_and_label_text():
+    v = np.linspace(1240.0, 1980.0, 400).reshape(20, 20)
+    r = s.stratify_cells(s.ArrayCellSource([v]), s.EQUAL_INTERVAL, 2, ["elevation"])
+    np.testing.assert_allclose(r.boundaries, [1610.0])  # (1240 + 1980) / 2
+    assert s.stratum_labels(r, ["elevation"], ["m"]) == ["elevation 1,240\u20131,610 m",
+                                                          "elevation 1,610\u20131,980 m"]
+
+
+# --- k-means ---------------------------------------------------------------------------------------
+
+def _three_covariates(seed=11, shape=(120, 150)):
+    rng = np.random.default_rng(seed)
+    centres = np.array([[0, 0, 0], [4, 1, -2], [1, 5, 2], [-3, 3, 4]], float)
+    lab = rng.integers(0, 4, shape)
+    x = centres[lab] + rng.normal(0, 1.0, shape + (3,))
+    x[..., 0] = 1000 + 100 * x[..., 0]  # different scales: standardisation matters
+    x[..., 2] = 0.05 * x[..., 2]
+    covs = [x[..., c] for c in range(3)]
+    covs[1][rng.random(shape) < 0.03] = np.nan
+    return covs
+
+
+def _z(cells, mean, sd):
+    return (cells - mean) / sd
+
+
+def test_kmeans_agrees_with_sklearn_on_all_cells():
+    sklearn_cluster = pytest.importorskip("sklearn.cluster")
+    metrics = pytest.importorskip("sklearn.metrics")
+    covs = _three_covariates()
+    src = s.ArrayCellSource(covs, block_rows=19)
+    out, write = _ids_raster(src, None)
+    r = s.stratify_cells(src, s.KMEANS, 4, ["a", "b", "c"], rng=np.random.default_rng(2), write=write)
+    ok = np.all([np.isfinite(c) for c in covs], axis=0)
+    cells = np.column_stack([c[ok] for c in covs])
+    z = _z(cells, cells.mean(axis=0), cells.std(axis=0))  # numpy standardisation, population SD
+    km = sklearn_cluster.KMeans(4, init=r.kmeans.initial_centres, n_init=1, max_iter=300, tol=0,
+                                algorithm="lloyd").fit(z)
+    ours = r.lut[out][ok]
+    assert metrics.adjusted_rand_score(ours, km.predict(z)) > 0.99  # scikit-learn KMeans
+    assert r.sample_size == cells.shape[0]
+
+
+def test_kmeans_on_a_subsample_agrees_with_sklearn():
+    sklearn_cluster = pytest.importorskip("sklearn.cluster")
+    metrics = pytest.importorskip("sklearn.metrics")
+    covs = _three_covariates(seed=4)
+    src = s.ArrayCellSource(covs, block_rows=31)
+    out, write = _ids_raster(src, None)
+    r = s.stratify_cells(src, s.KMEANS, 4, ["a", "b", "c"], rng=np.random.default_rng(9), sample_size=3000,
+                         write=write)
+    ok = np.all([np.isfinite(c) for c in covs], axis=0)
+    cells = np.column_stack([c[ok] for c in covs])
+    mean, sd = cells.mean(axis=0), cells.std(axis=0)
+    # the same draw as the engine's: the run's generator is used first for the subsample
+    sample = s.cell_sample(src, cells.shape[0], 3000, np.random.default_rng(9))
+    km = sklearn_cluster.KMeans(4, init=r.kmeans.initial_centres, n_init=1, max_iter=300, tol=0,
+                                algorithm="lloyd").fit(_z(sample, mean, sd))
+    assert metrics.adjusted_rand_score(r.lut[out][ok], km.predict(_z(cells, mean, sd))) > 0.99  # scikit-learn
+    # strata numbered by increasing mean of the first covariate
+    assert np.all(np.diff(r.statistics.mean[:, 0]) > 0)
+
+
+def test_kmeans_plusplus_draws_distinct_points_of_the_data():
+    x = np.random.default_rng(0).normal(size=(500, 2))
+    c = s.kmeans_plusplus(x, 5, np.random.default_rng(1))
+    assert c.shape == (5, 2) and np.unique(c, axis=0).shape[0] == 5
+    assert all((x == ci).all(axis=1).any() for ci in c)  # seeds are data points (Arthur & Vassilvitskii 2007)
+
+
+# --- statistics --------------------------------------------------------------------------------------
+
+def test_stratum_statistics_and_r_squared_equal_numpy():
+    covs = _three_covariates(seed=8)
+    src = s.ArrayCellSource(covs, block_rows=13)
+    out, write = _ids_raster(src, None)
+    r = s.stratify_cells(src, s.QUANTILE, 3, ["a", "b", "c"], write=write)
+    ok = np.all([np.isfinite(c) for c in covs], axis=0)
+    ids = r.lut[out][ok]
+    for c in range(3):
+        x = covs[c][ok]
+        groups = [x[ids == h] for h in (1, 2, 3)]
+        np.testing.assert_allclose(r.statistics.mean[:, c], [g.mean() for g in groups], rtol=1e-10)
+        np.testing.assert_allclose(r.statistics.sd[:, c], [g.std() for g in groups], rtol=1e-8)
+        np.testing.assert_allclose(r.statistics.minimum[:, c], [g.min() for g in groups], rtol=1e-12)
+        np.testing.assert_allclose(r.statistics.maximum[:, c], [g.max() for g in groups], rtol=1e-12)
+        # one-way ANOVA: R^2 = between SS / total SS
+        between = sum(g.size * (g.mean() - x.mean()) ** 2 for g in groups)
+        np.testing.assert_allclose(r.statistics.r_squared()[c], between / ((x - x.mean()) ** 2).sum(), rtol=1e-8)
+    assert r.statistics.chart_counts.sum() == ok.sum()
+
+
+# --- classes and bad input -----------------------------------------------------------------------------
+
+def test_raster_classes_become_strata():
+    rng = np.random.default_rng(2)
+    cl = (rng.integers(1, 5, (60, 70)) * 10).astype(np.int16)
+    r = s.stratify_cells(s.ArrayCellSource([cl]), s.RASTER_CLASSES, 0, ["cover"])
+    np.testing.assert_array_equal(r.statistics.count, [np.count_nonzero(cl == v) for v in (10, 20, 30, 40)])
+    assert s.stratum_labels(r, ["cover"]) == ["cover class 10", "cover class 20", "cover class 30", "cover class 40"]
+
+
+def test_too_many_classes_suggests_reclassifying():
+    cl = np.arange(60 * 10).reshape(60, 10) % 51
+    with pytest.raises(InputError, match="reclassify"):
+        s.stratify_cells(s.ArrayCellSource([cl]), s.RASTER_CLASSES, 0, ["cover"])
+
+
+def test_more_strata_than_distinct_values_states_the_number():
+    v = (np.arange(400).reshape(20, 20) % 3).astype(float)
+    with pytest.raises(InputError, match="only 3 distinct values"):
+        s.stratify_cells(s.ArrayCellSource([v]), s.QUANTILE, 5, ["slope class"])
+    with pytest.raises(InputError, match="only 3 distinct value combinations"):
+        s.stratify_cells(s.ArrayCellSource([v, v]), s.KMEANS, 4, ["a", "b"], rng=np.random.default_rng(1))
+
+
+def test_constant_covariate_is_an_error():
+    v = np.full((10, 10), 7.0)
+    g = np.random.default_rng(0).random((10, 10))
+    with pytest.raises(InputError, match="'flat' is constant"):
+        s.stratify_cells(s.ArrayCellSource([v]), s.EQUAL_INTERVAL, 3, ["flat"])
+    with pytest.raises(InputError, match="'flat' is constant"):
+        s.stratify_cells(s.ArrayCellSource([g, v]), s.KMEANS, 3, ["green", "flat"], rng=np.random.default_rng(0))
+
+
+def test_no_valid_cell_is_an_error():
+    v = np.full((10, 10), np.nan)
+    with pytest.raises(InputError, match="No cell"):
+        s.stratify_cells(s.ArrayCellSource([v]), s.QUANTILE, 3, ["empty"])
+
+
+def test_cancel_stops_the_run():
+    a, frame = _gamma_field()
+    with pytest.raises(Cancelled):
+        s.stratify_cells(s.ArrayCellSource([a], frame, block_rows=10), s.QUANTILE, 4, ["g"],
+                         progress=lambda f: f > 0.5)
