@@ -1,0 +1,831 @@
+"""Layout of sample units over a stratified area frame.
+
+Steps (:func:`prepare_strata`, then :func:`draw_layout`):
+
+1. Features are repaired (invalid ones, with a warning), empty or zero-area
+   ones are skipped (with a warning), and features of the same stratum merged.
+2. The number of units per stratum ``n_h`` comes from a per-stratum field
+   (for example the allocation step's ``n_alloc``) or from a total split in
+   proportion to area with at least two units per stratum
+   (:func:`proportional_counts`).
+3. With ``inside``, unit centres are drawn from the stratum shrunk by the
+   unit's circumscribing radius ``R`` (:func:`geometry.inward_buffer`), so every
+   unit lies wholly in its stratum and every admissible centre has the same
+   chance. The effective frame area ``A'_h`` is the area of that region.
+4. Centres are drawn by one of three designs:
+
+   * simple random: independent uniform points (triangle cover, see
+     :mod:`.geometry`);
+   * systematic grid: a square grid of spacing ``s_h = sqrt(A'_h / n_h)`` with a
+     uniform random start, rotated by the bearing (random rotation when
+     ``bearing = -1``); the realised number of units varies about ``n_h``;
+   * spatially balanced: balanced acceptance sampling (Robertson et al. 2013,
+     see :mod:`.halton`).
+
+5. Reserve units follow the primaries in draw order: the next independent
+   draws (simple random), the next accepted points of the same Halton sequence
+   (balanced), or the centres of the primary grid's cells in random order
+   (systematic: the reserves then sit halfway between primaries).
+6. A minimum spacing between the centres of all units of the layout (primaries
+   and reserves of every stratum) is kept by sequential inhibition: a
+   candidate closer than ``d`` to an accepted unit is passed over (Diggle 2003,
+   "Statistical analysis of spatial point patterns", 2nd ed., §5.8.2: simple
+   sequential inhibition). Inhibition lowers the inclusion density slightly
+   near units of neighbouring strata; away from them it stays uniform.
+
+Inclusion probabilities and weights
+-----------------------------------
+With ``n_h`` units of area ``a`` in a stratum of (effective) area ``A'_h``, the
+first-order inclusion probability of a unit is
+
+    incl_p = n_h a / A'_h,        weight = 1 / incl_p,
+
+(the share of the stratum the design covers; Cochran 1977, §2.3 for equal
+probability designs). Point stations and line transects have no area of their
+own (``area_m2 = 0``): for them ``incl_p`` is the inclusion *density* of the
+design at any location, ``n_h / A'_h`` per m², and ``weight = A'_h / n_h`` m² is
+the area each unit stands for (Cordy 1993, "An extension of the
+Horvitz-Thompson theorem to point sampling from a continuous universe",
+Statistics & Probability Letters 18:353-362). Reserves carry the weight of the
+primary they would replace. For the systematic grid ``n_h`` is the expected
+number of units, ``A'_h / s_h**2``.
+"""
+from dataclasses import dataclass, field, replace
+import math
+import re
+
+import numpy as np
+from shapely.ops import unary_union
+
+from . import geometry as geo
+from .crs import lonlat_transformer
+from .errors import Cancelled, InputError
+from .halton import balanced_acceptance_sample
+from .unit_shapes import LINE, POINT, SHAPES, circumscribing_radius, transect_ends, unit_area, unit_outlines
+
+DESIGNS = ("simple random", "systematic grid", "spatially balanced")
+SIMPLE_RANDOM, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(3)
+RANDOM_BEARING = -1
+MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
+PRIMARY, RESERVE = "primary", "reserve"
+
+
+# ----------------------------------------------------------------------------
+# results
+# ----------------------------------------------------------------------------
+@dataclass(frozen=True)
+class LayoutSpec:
+    """The design of a layout (the algorithm's parameters, checked).
+
+    Attributes
+    ----------
+    design : int
+        0 simple random, 1 systematic grid, 2 spatially balanced.
+    shape : int
+        0 point, 1 square (side ``size``), 2 circle (radius ``size``), 3 line
+        transect (length ``size``).
+    size : float
+        Metres.
+    bearing : float
+        Degrees clockwise from grid north, or -1 for random.
+    inside : bool
+        Keep every unit wholly inside its stratum.
+    min_spacing : float
+        Metres between unit centres over the whole layout (0: none).
+    reserve : int
+        Reserve units per stratum.
+    """
+
+    design: int = SPATIALLY_BALANCED
+    shape: int = POINT
+    size: float = 0.0
+    bearing: float = 0.0
+    inside: bool = False
+    min_spacing: float = 0.0
+    reserve: int = 0
+
+    def __post_init__(self):
+        if self.design not in (0, 1, 2):
+            raise InputError("DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).")
+        if self.shape not in (0, 1, 2, 3):
+            raise InputError("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")
+        if self.shape != POINT and not self.size > 0:
+            raise InputError(
+                f"SIZE must be more than 0 m for a {SHAPES[self.shape]} unit; it is {self.size}."
+            )
+        if self.bearing != RANDOM_BEARING and not (0 <= self.bearing < 360):
+            raise InputError(f"BEARING must be -1 (random) or between 0 and 360 degrees; it is {self.bearing}.")
+        if self.min_spacing < 0:
+            raise InputError("MIN_SPACING must be 0 or more metres.")
+        if self.reserve < 0 or int(self.reserve) != self.reserve:
+            raise InputError("RESERVE must be 0 or a positive whole number.")
+
+    @property
+    def radius(self):
+        """Circumscribing radius of one unit (m)."""
+        return circumscribing_radius(self.shape, self.size)
+
+    @property
+    def unit_area(self):
+        """Area of one unit (m²; 0 for points and transects)."""
+        return unit_area(self.shape, self.size)
+
+
+@dataclass(frozen=True, eq=False)
+class PreparedStratum:
+    """A stratum ready for drawing.
+
+    Attributes
+    ----------
+    key : object
+        The stratum value (None when the whole frame is one stratum).
+    label : str
+        Prefix of the unit ids (``S1``, ``forest``, ``U``).
+    geometry : Polygon or MultiPolygon
+        The stratum, repaired and merged.
+    area : float
+        ``A_h`` (m²).
+    region : Polygon or MultiPolygon
+        Where centres are drawn: ``geometry``, or with ``inside`` its inward
+        buffer by the unit's circumscribing radius.
+    effective_area : float
+        ``A'_h``, the area of ``region`` (m²).
+    cover : geometry.TriangleCover
+        For uniform draws in ``region``.
+    n : int
+        Primary units asked for.
+    feature_ids : tuple
+        Input features of this stratum.
+    """
+
+    key: object
+    label: str
+    geometry: object
+    area: float
+    region: object
+    effective_area: float
+    cover: object
+    n: int
+    feature_ids: tuple
+
+
+@dataclass(frozen=True)
+class StratumSummary:
+    """What was drawn in one stratum."""
+
+    key: object
+    label: str
+    area: float
+    effective_area: float
+    n_requested: int
+    n_primary: int
+    n_reserve: int
+    incl_p: float
+    spacing: float = float("nan")  # systematic grid spacing (m)
+    rotation: float = float("nan")  # systematic grid rotation (degrees)
+
+
+@dataclass(frozen=True, eq=False)
+class Layout:
+    """Sample units in draw order, stratum by stratum.
+
+    Per-unit arrays (length ``len(layout)``): ``unit_id``, ``stratum`` (keys),
+    ``role`` ("primary" / "reserve"), ``draw_ord`` (1, 2, ... within the
+    stratum), ``centres`` (n, 2), ``bearing`` (degrees), ``area_m2``,
+    ``incl_p``, ``weight``, ``lon``, ``lat`` (WGS 84; NaN without a CRS) and
+    ``outlines`` (coordinates per :func:`unit_shapes.unit_outlines`).
+    """
+
+    unit_id: tuple
+    stratum: tuple
+    role: tuple
+    draw_ord: np.ndarray
+    centres: np.ndarray
+    bearing: np.ndarray
+    area_m2: np.ndarray
+    incl_p: np.ndarray
+    weight: np.ndarray
+    lon: np.ndarray
+    lat: np.ndarray
+    outlines: np.ndarray
+    spec: LayoutSpec
+    strata: tuple
+    warnings: tuple = ()
+
+    def __len__(self):
+        return len(self.unit_id)
+
+    @property
+    def is_primary(self):
+        return np.array([r == PRIMARY for r in self.role], dtype=bool)
+
+
+@dataclass(frozen=True)
+class PreparedFrame:
+    """Output of :func:`prepare_strata`: the strata and the warnings met."""
+
+    strata: tuple
+    warnings: tuple = ()
+    skipped_ids: tuple = ()
+    repaired_ids: tuple = ()
+
+
+# ----------------------------------------------------------------------------
+# counts per stratum
+# ----------------------------------------------------------------------------
+def proportional_counts(areas, total, minimum=MIN_PER_STRATUM):
+    """Split ``total`` units in proportion to ``areas`` with at least ``minimum`` each.
+
+    ``n_h = max(minimum, total A_h / sum A)`` by repeated re-sharing: strata
+    below the minimum get it and the rest of the total is shared among the
+    others in proportion to area (Cochran 1977, ch. 5, proportional
+    allocation). Whole numbers by largest remainders (Hamilton's method). When
+    ``total < minimum H`` every stratum gets ``minimum``.
+
+    Returns
+    -------
+    ndarray of int
+    """
+    areas = np.asarray(areas, dtype=float)
+    h = len(areas)
+    total = int(total)
+    if h == 0:
+        return np.zeros(0, dtype=int)
+    if total <= minimum * h:
+        return np.full(h, minimum, dtype=int)
+    fixed = np.zeros(h, dtype=bool)
+    share = np.zeros(h)
+    for _ in range(h + 1):
+        free_total = total - minimum * fixed.sum()
+        free_area = areas[~fixed].sum()
+        share = np.where(fixed, float(minimum), free_total * areas / free_area if free_area > 0 else 0.0)
+        low = ~fixed & (share < minimum)
+        if not low.any():
+            break
+        fixed |= low
+    counts = np.floor(share).astype(int)
+    left = total - counts.sum()
+    if left > 0:
+        remainder = share - counts
+        remainder[fixed] = -1.0
+        counts[np.argsort(-remainder, kind="stable")[:left]] += 1
+    return np.maximum(counts, minimum)
+
+
+def counts_from_field(values, feature_ids, field_name="N_FIELD"):
+    """Whole numbers of units per feature, checked.
+
+    Raises
+    ------
+    InputError
+        Naming the features whose value is empty (NULL), negative or not a
+        whole number.
+    """
+    bad_null, bad_neg, bad_frac = [], [], []
+    out = []
+    for fid, v in zip(feature_ids, values):
+        try:
+            f = float(v) if v is not None else float("nan")
+        except (TypeError, ValueError):
+            f = float("nan")
+        if not math.isfinite(f):
+            bad_null.append(fid)
+        elif f < 0:
+            bad_neg.append(fid)
+        elif f != math.floor(f):
+            bad_frac.append(fid)
+        out.append(int(f) if math.isfinite(f) and f >= 0 and f == math.floor(f) else -1)
+    if bad_null:
+        raise InputError(
+            f"{field_name} is empty (NULL) or not a number for feature(s) {_ids(bad_null)}. "
+            "Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.",
+            ids=bad_null,
+        )
+    if bad_neg:
+        raise InputError(
+            f"{field_name} is negative for feature(s) {_ids(bad_neg)}. Use 0 or a positive whole number.",
+            ids=bad_neg,
+        )
+    if bad_frac:
+        raise InputError(
+            f"{field_name} is not a whole number for feature(s) {_ids(bad_frac)}. "
+            "Round the allocation to whole units first.",
+            ids=bad_frac,
+        )
+    return np.asarray(out, dtype=int)
+
+
+def _ids(ids, limit=20):
+    ids = list(ids)
+    text = ", ".join(str(i) for i in ids[:limit])
+    return text + (f" and {len(ids) - limit} more" if len(ids) > limit else "")
+
+
+def stratum_label(key):
+    """Unit-id prefix for a stratum value: ``S3`` for 3, ``forest`` for "forest"."""
+    if key is None:
+        return "U"
+    try:
+        f = float(key)
+        if math.isfinite(f) and f == math.floor(f):
+            return f"S{int(f)}"
+    except (TypeError, ValueError):
+        pass
+    text = re.sub(r"[^A-Za-z0-9_]+", "_", str(key)).strip("_")[:12]
+    return text or "S"
+
+
+def _sort_keys(keys):
+    try:
+        return sorted(keys)
+    except TypeError:
+        return sorted(keys, key=str)
+
+
+# ----------------------------------------------------------------------------
+# preparing the strata
+# ----------------------------------------------------------------------------
+def prepare_strata(
+    geometries,
+    feature_ids=None,
+    strata=None,
+    n_values=None,
+    n_units=None,
+    spec=None,
+    stratum_field="STRATUM_FIELD",
+    n_field="N_FIELD",
+):
+    """Repair, merge and size the strata of a frame.
+
+    Parameters
+    ----------
+    geometries : sequence of shapely geometries (projected, metres)
+    feature_ids : sequence, optional
+        Ids used in messages (default 0, 1, ...).
+    strata : sequence, optional
+        Stratum value of each feature; None: the whole frame is one stratum.
+    n_values : sequence, optional
+        Units per stratum, one value per feature (the same value on every
+        feature of a stratum). Takes precedence over ``n_units``.
+    n_units : int, optional
+        Total units split by area (:func:`proportional_counts`).
+    spec : LayoutSpec
+        For ``inside`` and the unit radius.
+
+    Returns
+    -------
+    PreparedFrame
+    """
+    spec = spec or LayoutSpec()
+    geometries = list(geometries)
+    if feature_ids is None:
+        feature_ids = list(range(len(geometries)))
+    feature_ids = list(feature_ids)
+    warnings = []
+    if n_values is not None:
+        n_feat = counts_from_field(n_values, feature_ids, n_field)
+    elif n_units is None or int(n_units) < 1:
+        raise InputError("Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).")
+    keep, skipped, repaired = [], [], []
+    for i, g in enumerate(geometries):
+        fixed = geo.repair_polygonal(g)
+        if fixed.was_invalid:
+            repaired.append(feature_ids[i])
+        if fixed.geometry.is_empty or fixed.geometry.area <= 0:
+            skipped.append(feature_ids[i])
+            continue
+        keep.append((i, fixed.geometry))
+    if repaired:
+        warnings.append(f"Invalid geometry was repaired for feature(s) {_ids(repaired)}; check their outlines.")
+    if skipped:
+        warnings.append(f"Empty or zero-area feature(s) {_ids(skipped)} were skipped.")
+    if not keep:
+        raise InputError("The frame has no polygon with an area: every feature is empty or has zero area.")
+    groups = {}
+    for i, g in keep:
+        key = strata[i] if strata is not None else None
+        if strata is not None and key is None:
+            raise InputError(
+                f"{stratum_field} is empty (NULL) for feature {feature_ids[i]}. Give it a stratum value.",
+                ids=[feature_ids[i]],
+            )
+        groups.setdefault(key, []).append((i, g))
+    keys = _sort_keys(groups)
+    labels = [stratum_label(k) for k in keys]
+    if len(set(labels)) != len(labels):  # e.g. "a b" and "a_b"
+        labels = [f"S{j + 1}" for j in range(len(keys))]
+    merged, areas, fids = [], [], []
+    for key in keys:
+        members = groups[key]
+        g = members[0][1] if len(members) == 1 else unary_union([m[1] for m in members])
+        g = geo.repair_polygonal(g).geometry
+        merged.append(g)
+        areas.append(float(g.area))
+        fids.append(tuple(feature_ids[i] for i, _ in members))
+    if n_values is not None:
+        counts = []
+        for key, members in zip(keys, (groups[k] for k in keys)):
+            vals = {int(n_feat[i]) for i, _ in members}
+            if len(vals) > 1:
+                ids = [feature_ids[i] for i, _ in members]
+                raise InputError(
+                    f"The features of stratum {key} carry different {n_field} values "
+                    f"({', '.join(str(v) for v in sorted(vals))}) (features {_ids(ids)}). "
+                    f"{n_field} is the number of units of the whole stratum: give its features the same value.",
+                    ids=ids,
+                )
+            counts.append(vals.pop())
+        counts = np.asarray(counts, dtype=int)
+    else:
+        counts = proportional_counts(areas, int(n_units))
+        if int(n_units) < MIN_PER_STRATUM * len(keys):
+            warnings.append(
+                f"N_UNITS = {int(n_units)} is fewer than {MIN_PER_STRATUM} per stratum for {len(keys)} strata; "
+                f"every stratum gets {MIN_PER_STRATUM} ({int(counts.sum())} units)."
+            )
+    out = []
+    radius = spec.radius if spec.inside else 0.0
+    for key, label, g, area, n, ids in zip(keys, labels, merged, areas, counts, fids):
+        region = geo.inward_buffer(g, radius) if radius > 0 else g
+        eff = float(region.area) if not region.is_empty else 0.0
+        name = "the frame" if key is None else f"stratum {key}"
+        if eff <= 0 and n + spec.reserve > 0:
+            raise InputError(
+                f"{name[0].upper() + name[1:]} is too small for a {SHAPES[spec.shape]} unit of SIZE "
+                f"{spec.size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge "
+                f"(features {_ids(ids)}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.",
+                ids=list(ids),
+            )
+        if n == 0:
+            warnings.append(f"{name[0].upper() + name[1:]} gets no units; the estimate cannot speak for it.")
+        elif n == 1:
+            warnings.append(
+                f"{name[0].upper() + name[1:]} gets one unit only; its variance cannot be estimated."
+            )
+        cover = geo.triangle_cover(region) if eff > 0 else geo.triangle_cover(None)
+        out.append(PreparedStratum(key, label, g, area, region, eff, cover, int(n), ids))
+    return PreparedFrame(tuple(out), tuple(warnings), tuple(skipped), tuple(repaired))
+
+
+# ----------------------------------------------------------------------------
+# minimum spacing
+# ----------------------------------------------------------------------------
+class SpacingGuard:
+    """Sequential inhibition: accepts a point only if it is at least ``d`` from every accepted point.
+
+    Accepted points are kept in a hash of square cells of side ``d``, so a test
+    looks at 3 x 3 cells (Diggle 2003, §5.8.2).
+    """
+
+    def __init__(self, distance):
+        self.d = float(distance)
+        self.d2 = self.d * self.d
+        self.cells = {}
+
+    def _cell(self, x, y):
+        return (math.floor(x / self.d), math.floor(y / self.d))
+
+    def take(self, points, limit=None):
+        """Accept points in order; return the mask of accepted ones (at most ``limit``)."""
+        points = np.asarray(points, dtype=float).reshape(-1, 2)
+        mask = np.zeros(len(points), dtype=bool)
+        if limit is None:
+            limit = len(points)
+        taken = 0
+        cells = self.cells
+        d2 = self.d2
+        for j, (x, y) in enumerate(points.tolist()):
+            if taken >= limit:
+                break
+            cx, cy = self._cell(x, y)
+            clear = True
+            for ix in (cx - 1, cx, cx + 1):
+                for iy in (cy - 1, cy, cy + 1):
+                    for px, py in cells.get((ix, iy), ()):
+                        if (px - x) ** 2 + (py - y) ** 2 < d2:
+                            clear = False
+                            break
+                    if not clear:
+                        break
+                if not clear:
+                    break
+            if clear:
+                cells.setdefault((cx, cy), []).append((x, y))
+                mask[j] = True
+                taken += 1
+        return mask
+
+
+def hexagonal_capacity(region, distance, offsets=4):
+    """Number of points of a hexagonal lattice of spacing ``d`` that fall in ``region``.
+
+    The hexagonal (triangular) lattice is the densest arrangement of points
+    at least ``d`` apart (Fejes Toth 1940; Thue's theorem): about
+    ``A / (sqrt(3)/2 d**2)`` points, plus an edge effect. The best of a few
+    lattice offsets is returned, a count that certainly fits.
+    """
+    d = float(distance)
+    if region is None or region.is_empty or d <= 0:
+        return 0
+    area = region.area
+    expected = area / (math.sqrt(3.0) / 2.0 * d * d)
+    if expected > 2e6:  # too many to enumerate: the density bound
+        return int(expected)
+    minx, miny, maxx, maxy = region.bounds
+    dy = d * math.sqrt(3.0) / 2.0
+    best = 0
+    for k in range(int(offsets)):
+        ox, oy = (k % 2) * d / 2.0, (k // 2) * dy / 2.0
+        rows = np.arange(miny - dy + oy, maxy + dy, dy)
+        cols = np.arange(minx - d + ox, maxx + d, d)
+        xx, yy = np.meshgrid(cols, rows)
+        xx = xx + (np.arange(len(rows))[:, None] % 2) * (d / 2.0)
+        inside = geo.contains_xy(region, xx.ravel(), yy.ravel())
+        best = max(best, int(inside.sum()))
+    return best
+
+
+def _spacing_error(stratum, wanted, placed, spec):
+    fit = hexagonal_capacity(stratum.region, spec.min_spacing)
+    name = "the frame" if stratum.key is None else f"stratum {stratum.key}"
+    return InputError(
+        f"MIN_SPACING = {spec.min_spacing:g} m cannot be met in {name}: {wanted} units were asked for "
+        f"(primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing "
+        "(a hexagonal lattice, the densest arrangement; random layouts fill up well before that). "
+        "Ask for fewer units or reserves, or lower MIN_SPACING.",
+        ids=[stratum.key] if stratum.key is not None else [],
+    )
+
+
+# ----------------------------------------------------------------------------
+# designs
+# ----------------------------------------------------------------------------
+def simple_random_centres(stratum, count, rng, guard=None, max_candidates=None):
+    """``count`` independent uniform centres in the stratum's region, in draw order.
+
+    With a ``guard`` (minimum spacing) candidates are drawn until ``count`` are
+    accepted or ``max_candidates`` (default ``200 count + 10000``) were tried.
+    """
+    count = int(count)
+    if count <= 0:
+        return np.zeros((0, 2))
+    if guard is None:
+        return geo.uniform_points(stratum.cover, stratum.region, count, rng)
+    if max_candidates is None:
+        max_candidates = 200 * count + 10000
+    chunks, have, tried = [], 0, 0
+    while have < count and tried < max_candidates:
+        m = min(max(2 * (count - have), 64), max_candidates - tried)
+        cand = geo.uniform_points(stratum.cover, stratum.region, m, rng)
+        tried += m
+        ok = guard.take(cand, count - have)
+        chunks.append(cand[ok])
+        have += int(ok.sum())
+    return np.concatenate(chunks) if chunks else np.zeros((0, 2))
+
+
+def balanced_centres(stratum, count, rng, guard=None):
+    """``count`` centres by balanced acceptance sampling (Robertson et al. 2013), in draw order."""
+    count = int(count)
+    if count <= 0:
+        return np.zeros((0, 2))
+    accept = guard.take if guard is not None else None
+    draw = balanced_acceptance_sample(
+        stratum.region, count, rng, accept=accept, max_tries=None if guard is None else 200 * count + 100000,
+        cover=stratum.cover,
+    )
+    return draw.points
+
+
+@dataclass(frozen=True, eq=False)
+class GridDraw:
+    """A systematic grid in a stratum: primaries, reserve candidates, spacing and rotation."""
+
+    primaries: np.ndarray
+    reserves: np.ndarray
+    spacing: float
+    rotation: float
+    offset: tuple
+
+
+def grid_axes(rotation_deg):
+    """Unit vectors of the grid's rows and columns rotated clockwise by ``rotation_deg``."""
+    t = math.radians(rotation_deg)
+    u = np.array([math.cos(t), -math.sin(t)])  # "east" axis
+    v = np.array([math.sin(t), math.cos(t)])  # "north" axis
+    return u, v
+
+
+def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING):
+    """Square grid of ``spacing`` with a uniform random start (and rotation).
+
+    Grid points are ``c + (i + o_1) s u + (j + o_2) s v`` with ``o ~ U(0, 1)^2``
+    and axes ``u, v`` rotated clockwise by the bearing, or by ``U(0, 90)``
+    degrees when ``bearing = -1``. Every location of the plane has the same
+    inclusion density ``1 / s**2`` (Cochran 1977, ch. 8, systematic sampling
+    with a random start). Reserves are the cell centres (offset ``(1/2, 1/2)``)
+    inside the region, in random order.
+
+    Returns
+    -------
+    GridDraw
+        ``primaries`` row by row (south to north in the rotated frame).
+    """
+    s = float(spacing)
+    rotation = float(rng.uniform(0.0, 90.0)) if bearing == RANDOM_BEARING else float(bearing) % 90.0
+    offset = (float(rng.random()), float(rng.random()))
+    u, v = grid_axes(rotation)
+    minx, miny, maxx, maxy = region.bounds
+    c = np.array([(minx + maxx) / 2.0, (miny + maxy) / 2.0])
+    half = math.hypot(maxx - minx, maxy - miny) / 2.0
+    m = int(math.ceil(half / s)) + 1
+    idx = np.arange(-m, m + 1, dtype=float)
+    jj, ii = np.meshgrid(idx, idx, indexing="ij")  # j rows, i columns
+    def points(o1, o2):
+        p = c + ((ii.ravel() + o1) * s)[:, None] * u + ((jj.ravel() + o2) * s)[:, None] * v
+        return p[geo.contains_xy(region, p[:, 0], p[:, 1])]
+    primaries = points(*offset)
+    reserves = points((offset[0] + 0.5) % 1.0, (offset[1] + 0.5) % 1.0)
+    reserves = reserves[rng.permutation(len(reserves))]
+    return GridDraw(primaries, reserves, s, rotation, offset)
+
+
+# ----------------------------------------------------------------------------
+# the layout
+# ----------------------------------------------------------------------------
+def draw_layout(frame, spec, rng, crs=None, progress=None):
+    """Draw the units of every stratum.
+
+    Parameters
+    ----------
+    frame : PreparedFrame or sequence of PreparedStratum
+    spec : LayoutSpec
+    rng : numpy.random.Generator
+        The run's only generator.
+    crs : str, optional
+        The computation CRS (WKT, "EPSG:n"), for ``lon``/``lat`` in WGS 84.
+    progress : callable, optional
+        ``progress(fraction) -> bool``; True cancels (raises ``Cancelled``).
+
+    Returns
+    -------
+    Layout
+
+    Raises
+    ------
+    InputError
+        When MIN_SPACING cannot be met (stating the most units that fit) or a
+        systematic spacing would be below MIN_SPACING.
+    """
+    strata = frame.strata if isinstance(frame, PreparedFrame) else tuple(frame)
+    warnings = list(frame.warnings) if isinstance(frame, PreparedFrame) else []
+    guard = SpacingGuard(spec.min_spacing) if spec.min_spacing > 0 else None
+    a = spec.unit_area
+    parts = []
+    summaries = []
+    if guard is not None and spec.design != SYSTEMATIC_GRID:  # fail early where even a dense packing cannot hold the units
+        for st in strata:
+            wanted = st.n + spec.reserve if st.n > 0 else 0
+            if wanted and hexagonal_capacity(st.region, spec.min_spacing) < wanted:
+                raise _spacing_error(st, wanted, 0, spec)
+    for h, st in enumerate(strata):
+        if progress is not None and progress(h / max(len(strata), 1)):
+            raise Cancelled("Cancelled while drawing the layout.")
+        n = st.n
+        r = int(spec.reserve) if n > 0 else 0
+        name = "the frame" if st.key is None else f"stratum {st.key}"
+        spacing = rotation = float("nan")
+        if n == 0:
+            centres = np.zeros((0, 2))
+            n_primary = 0
+        elif spec.design == SYSTEMATIC_GRID:
+            spacing = math.sqrt(st.effective_area / n)
+            if guard is not None and spacing < spec.min_spacing:
+                fit = int(st.effective_area // spec.min_spacing**2)
+                raise InputError(
+                    f"The grid spacing for {n} units in {name} would be {spacing:.1f} m, below MIN_SPACING = "
+                    f"{spec.min_spacing:g} m. A square grid at {spec.min_spacing:g} m holds about {fit} units there: "
+                    "ask for at most that many, or lower MIN_SPACING.",
+                    ids=[st.key] if st.key is not None else [],
+                )
+            grid = systematic_grid(st.region, spacing, rng, spec.bearing)
+            rotation = grid.rotation
+            prim = grid.primaries
+            res = grid.reserves
+            if guard is not None:
+                ok = guard.take(prim)
+                if not ok.all():
+                    warnings.append(
+                        f"{(~ok).sum()} grid unit(s) of {name} were dropped: closer than MIN_SPACING to units "
+                        "of a neighbouring stratum."
+                    )
+                prim = prim[ok]
+                res = res[guard.take(res, r)]
+            else:
+                res = res[:r]
+            if len(prim) == 0:
+                warnings.append(
+                    f"No grid point fell in {name} (spacing {spacing:.1f} m); it gets no units. "
+                    "Use the simple random or spatially balanced design for small or thin strata."
+                )
+            if len(res) < r:
+                warnings.append(f"{name[0].upper() + name[1:]} has only {len(res)} of {r} reserve units.")
+            n_primary = len(prim)
+            centres = np.concatenate([prim, res])
+        else:
+            draw = simple_random_centres if spec.design == SIMPLE_RANDOM else balanced_centres
+            centres = draw(st, n + r, rng, guard)
+            if len(centres) < n + r:
+                raise _spacing_error(st, n + r, len(centres), spec)
+            n_primary = n
+        m = len(centres)
+        if spec.bearing == RANDOM_BEARING:
+            bearings = rng.uniform(0.0, 360.0, m)
+        else:
+            bearings = np.full(m, float(spec.bearing))
+        if n > 0:
+            incl = n * a / st.effective_area if a > 0 else n / st.effective_area
+        else:
+            incl = float("nan")
+        summaries.append(
+            StratumSummary(st.key, st.label, st.area, st.effective_area, n, n_primary, m - n_primary, incl, spacing, rotation)
+        )
+        width = max(3, len(str(m)))
+        ids = tuple(f"{st.label}-{k:0{width}d}" for k in range(1, m + 1))
+        roles = tuple([PRIMARY] * n_primary + [RESERVE] * (m - n_primary))
+        parts.append((st.key, ids, roles, centres, bearings, incl))
+    if not parts or sum(len(p[1]) for p in parts) == 0:
+        centres = np.zeros((0, 2))
+    unit_id = tuple(i for p in parts for i in p[1])
+    stratum = tuple(p[0] for p in parts for _ in p[1])
+    role = tuple(x for p in parts for x in p[2])
+    draw_ord = np.concatenate([np.arange(1, len(p[1]) + 1) for p in parts]) if parts else np.zeros(0, int)
+    centres = np.concatenate([p[3] for p in parts]) if parts else np.zeros((0, 2))
+    bearing = np.concatenate([p[4] for p in parts]) if parts else np.zeros(0)
+    incl_p = np.concatenate([np.full(len(p[1]), p[5]) for p in parts]) if parts else np.zeros(0)
+    weight = np.where(incl_p > 0, 1.0 / np.where(incl_p > 0, incl_p, 1.0), np.nan)
+    area_m2 = np.full(len(unit_id), a)
+    if crs is not None and len(centres):
+        lon, lat = lonlat_transformer(crs).transform(centres[:, 0], centres[:, 1])
+        lon, lat = np.asarray(lon, dtype=float), np.asarray(lat, dtype=float)
+    else:
+        lon = lat = np.full(len(unit_id), np.nan)
+    outlines = unit_outlines(spec.shape, centres, bearing, spec.size)
+    if progress is not None and progress(1.0):
+        raise Cancelled("Cancelled while drawing the layout.")
+    return Layout(
+        unit_id, stratum, role, draw_ord.astype(int), centres, bearing, area_m2, incl_p, weight,
+        lon, lat, outlines, spec, tuple(summaries), tuple(warnings),
+    )
+
+
+def layout_units(geometries, spec, rng, feature_ids=None, strata=None, n_values=None, n_units=None, crs=None, progress=None):
+    """:func:`prepare_strata` then :func:`draw_layout` in one call."""
+    frame = prepare_strata(geometries, feature_ids, strata, n_values, n_units, spec)
+    return draw_layout(frame, spec, rng, crs=crs, progress=progress)
+
+
+# ----------------------------------------------------------------------------
+# GPS waypoints
+# ----------------------------------------------------------------------------
+@dataclass(frozen=True)
+class Waypoints:
+    """Waypoints for a GPS: names, WGS 84 positions and descriptions."""
+
+    name: tuple
+    lon: np.ndarray
+    lat: np.ndarray
+    description: tuple
+
+
+def layout_waypoints(layout, crs):
+    """One waypoint per unit centre, or a start (``<id>A``) and end (``<id>B``) per transect.
+
+    Parameters
+    ----------
+    layout : Layout
+    crs : str
+        The computation CRS of ``layout.centres``.
+    """
+    to_wgs = lonlat_transformer(crs)
+    if layout.spec.shape == LINE:
+        ends = transect_ends(layout.centres, layout.bearing, layout.spec.size)
+        x = ends[:, :, 0].ravel()
+        y = ends[:, :, 1].ravel()
+        names = tuple(n for uid in layout.unit_id for n in (f"{uid}A", f"{uid}B"))
+        desc = tuple(
+            f"{what} of transect {uid} ({role}, stratum {s}, bearing {b:.0f} deg)"
+            for uid, role, s, b in zip(layout.unit_id, layout.role, layout.stratum, layout.bearing)
+            for what in ("start", "end")
+        )
+    else:
+        x, y = layout.centres[:, 0], layout.centres[:, 1]
+        names = tuple(layout.unit_id)
+        desc = tuple(
+            f"{SHAPES[layout.spec.shape]} unit {uid} ({role}, stratum {s})"
+            for uid, role, s in zip(layout.unit_id, layout.role, layout.stratum)
+        )
+    if len(x) == 0:
+        return Waypoints((), np.zeros(0), np.zeros(0), ())
+    lon, lat = to_wgs.transform(np.asarray(x), np.asarray(y))
+    return Waypoints(names, np.asarray(lon, float), np.asarray(lat, float), desc)

@@ -1,0 +1,96 @@
+"""Shapes of sample units around their drawn centres.
+
+Shapes (the order of the algorithm's SHAPE parameter):
+
+* 0 point station: the centre itself; area 0.
+* 1 square plot of side ``s``: area ``s**2``; circumscribing radius ``s / sqrt(2)``.
+* 2 circular plot of radius ``r``: area ``pi r**2``; circumscribing radius ``r``.
+* 3 line transect of length ``L``, centred on the drawn point: area 0 (the strip
+  width is chosen when counts are analysed); circumscribing radius ``L / 2``.
+
+Bearings are degrees clockwise from grid north (the +y axis). A square's sides
+and a transect's direction follow the bearing.
+"""
+import numpy as np
+
+SHAPES = ("point", "square", "circle", "line")
+POINT, SQUARE, CIRCLE, LINE = range(4)
+
+
+def unit_area(shape, size):
+    """Area in m² of one unit of ``shape`` and ``size`` (0 for points and lines)."""
+    shape = int(shape)
+    if shape == SQUARE:
+        return float(size) ** 2
+    if shape == CIRCLE:
+        return float(np.pi * float(size) ** 2)
+    return 0.0
+
+
+def circumscribing_radius(shape, size):
+    """Radius of the smallest circle about the centre that holds the unit."""
+    shape = int(shape)
+    if shape == SQUARE:
+        return float(size) / np.sqrt(2.0)
+    if shape in (CIRCLE,):
+        return float(size)
+    if shape == LINE:
+        return float(size) / 2.0
+    return 0.0
+
+
+def _direction(bearing_deg):
+    theta = np.radians(np.asarray(bearing_deg, dtype=float))
+    return np.stack([np.sin(theta), np.cos(theta)], axis=-1)
+
+
+def transect_ends(centres, bearings, length):
+    """Start and end of line transects centred on ``centres``.
+
+    ``start = c - (L/2) d``, ``end = c + (L/2) d`` with ``d = (sin b, cos b)``.
+
+    Returns
+    -------
+    ndarray, shape (n, 2, 2): ``[:, 0]`` starts, ``[:, 1]`` ends.
+    """
+    centres = np.asarray(centres, dtype=float).reshape(-1, 2)
+    d = _direction(bearings).reshape(-1, 2) * (float(length) / 2.0)
+    return np.stack([centres - d, centres + d], axis=1)
+
+
+def square_rings(centres, bearings, side):
+    """Closed rings (n, 5, 2) of squares of ``side`` centred on ``centres``."""
+    centres = np.asarray(centres, dtype=float).reshape(-1, 2)
+    h = float(side) / 2.0
+    local = np.array([[-h, -h], [h, -h], [h, h], [-h, h], [-h, -h]])
+    theta = np.radians(np.asarray(bearings, dtype=float).reshape(-1))
+    c, s = np.cos(theta), np.sin(theta)
+    # clockwise rotation by the bearing: (x, y) -> (x c + y s, -x s + y c)
+    x = local[None, :, 0] * c[:, None] + local[None, :, 1] * s[:, None]
+    y = -local[None, :, 0] * s[:, None] + local[None, :, 1] * c[:, None]
+    return np.stack([x, y], axis=2) + centres[:, None, :]
+
+
+def circle_rings(centres, radius, segments=64):
+    """Closed rings (n, segments + 1, 2) of regular polygons inscribed in circles.
+
+    Vertices lie on the circle, so the ring lies inside the true circle.
+    """
+    centres = np.asarray(centres, dtype=float).reshape(-1, 2)
+    t = np.linspace(0.0, 2.0 * np.pi, int(segments) + 1)
+    t[-1] = 0.0
+    ring = float(radius) * np.stack([np.cos(t), np.sin(t)], axis=1)
+    return ring[None, :, :] + centres[:, None, :]
+
+
+def unit_outlines(shape, centres, bearings, size):
+    """Coordinates of every unit: (n, 2) points, (n, 2, 2) lines or (n, m, 2) rings."""
+    shape = int(shape)
+    centres = np.asarray(centres, dtype=float).reshape(-1, 2)
+    if shape == SQUARE:
+        return square_rings(centres, bearings, size)
+    if shape == CIRCLE:
+        return circle_rings(centres, size)
+    if shape == LINE:
+        return transect_ends(centres, bearings, size)
+    return centres.copy()
