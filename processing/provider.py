@@ -8,6 +8,7 @@ from qgis.PyQt.QtGui import QIcon
 from .algorithms.allocate import Allocate
 from .algorithms.buildframe import BuildFrame
 from .algorithms.demoreserve import DemoReserve
+from .algorithms.estimate import Estimate
 from .algorithms.simulatecounts import SimulateCounts
 
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "plugin", "icons", "plotwise.svg")
@@ -17,6 +18,7 @@ ALGORITHM_CLASSES = [
     Allocate,
     BuildFrame,
     DemoReserve,
+    Estimate,
     SimulateCounts,
 ]
 

@@ -1,0 +1,209 @@
+"""plotwise:estimate run through the host's Processing framework on small memory layers with known numbers."""
+import math
+
+import numpy as np
+import pytest
+
+qgis_core = pytest.importorskip("qgis.core")
+from qgis.core import (  # noqa: E402
+    QgsApplication,
+    QgsFeature,
+    QgsGeometry,
+    QgsProcessingException,
+    QgsProcessingFeedback,
+    QgsVectorLayer,
+)
+from scipy import stats  # noqa: E402
+
+# two strata of 1 km × 2 km (200 ha) and 1 km × 1 km (100 ha), side by side, EPSG:32633
+STRATA = {1: (0.0, 1000.0, 2000.0), 2: (1000.0, 2000.0, 1000.0)}
+UNIT_M2 = 10_000.0  # 1 ha square plots
+COUNTS = {1: [3, 0, 5, 2, 4], 2: [10, 12, 7, 9]}
+
+
+class Warnings(QgsProcessingFeedback):
+    def __init__(self):
+        super().__init__()
+        self.warnings = []
+
+    def pushWarning(self, text):  # noqa: N802
+        self.warnings.append(text)
+        super().pushWarning(text)
+
+
+@pytest.fixture
+def registered(plotwise_provider):
+    assert QgsApplication.processingRegistry().algorithmById("plotwise:estimate") is not None
+
+
+def _strata_layer():
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer("Polygon?crs=EPSG:32633", "strata", "memory")
+    layer.dataProvider().addAttributes([compat.make_field("stratum", "int")])
+    layer.updateFields()
+    features = []
+    for stratum, (x0, x1, height) in STRATA.items():
+        f = QgsFeature(layer.fields())
+        f.setGeometry(QgsGeometry.fromWkt(f"POLYGON(({x0} 0, {x1} 0, {x1} {height}, {x0} {height}, {x0} 0))"))
+        f.setAttributes([stratum])
+        features.append(f)
+    layer.dataProvider().addFeatures(features)
+    return layer
+
+
+def _units_layer(counts=COUNTS, extra=(), role=False):
+    """Square 100 m plots along a line in each stratum; ``extra`` adds (stratum, count, role) rows."""
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer("Polygon?crs=EPSG:32633", "units", "memory")
+    spec = [("unit_id", "int"), ("stratum", "int"), ("count", "string" if any(
+        isinstance(c, str) for _, c, _ in extra) else "double")]
+    if role:
+        spec.append(("role", "string"))
+    layer.dataProvider().addAttributes([compat.make_field(*s) for s in spec])
+    layer.updateFields()
+    rows = [(h, c, "primary") for h, values in counts.items() for c in values] + list(extra)
+    features = []
+    for i, (stratum, count, kind) in enumerate(rows):
+        x0 = STRATA[stratum][0] + 50 + 120 * (i % 7)
+        y0 = 50 + 150 * i
+        f = QgsFeature(layer.fields())
+        f.setGeometry(QgsGeometry.fromWkt(
+            f"POLYGON(({x0} {y0}, {x0 + 100} {y0}, {x0 + 100} {y0 + 100}, {x0} {y0 + 100}, {x0} {y0}))"))
+        f.setAttributes([i + 1, stratum, count] + ([kind] if role else []))
+        features.append(f)
+    layer.dataProvider().addFeatures(features)
+    return layer
+
+
+def _expected(area_unit_m2=1e6):
+    """Cochran (1977), eqs. 5.1, 5.7 (no FPC) and 5.16 with scipy.stats.t, equal 1 ha units."""
+    total, var, comps = 0.0, 0.0, []
+    for h, values in COUNTS.items():
+        area = (STRATA[h][1] - STRATA[h][0]) * STRATA[h][2] / area_unit_m2
+        a = UNIT_M2 / area_unit_m2
+        d = np.mean(values) / a
+        v = area ** 2 * np.var(values, ddof=1) / len(values) / a ** 2
+        total += d * area
+        var += v
+        comps.append((v, len(values) - 1))
+    df = var ** 2 / sum(v ** 2 / k for v, k in comps)
+    se = math.sqrt(var)
+    q = stats.t.ppf(0.975, df)
+    return total, se, df, total - q * se, total + q * se
+
+
+def _run(run_alg, tmp_path, units, **extra):
+    parameters = {
+        "UNITS": units, "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum", "STRATA": _strata_layer(),
+        "STRATA_ID_FIELD": "stratum", "OUTPUT": "memory:", "OUTPUT_TABLE": "memory:",
+        "REPORT": str(tmp_path / "estimate.html"),
+    }
+    parameters.update(extra)
+    feedback = Warnings()
+    return run_alg("plotwise:estimate", parameters, feedback=feedback), feedback
+
+
+def _layer(value):
+    """An output of processing.run: a layer object, or a layer id/path to load."""
+    if not isinstance(value, str):
+        return value
+    from qgis.core import QgsProcessingContext, QgsProcessingUtils
+
+    return QgsProcessingUtils.mapLayerFromString(value, QgsProcessingContext())
+
+
+def test_known_numbers_and_outputs(registered, run_alg, tmp_path):
+    results, _ = _run(run_alg, tmp_path, _units_layer())
+    total, se, df, lo, hi = _expected()
+    assert results["ABUNDANCE"] == pytest.approx(total, rel=1e-9)
+    assert results["ABUNDANCE_LO"] == pytest.approx(lo, rel=1e-9)
+    assert results["ABUNDANCE_HI"] == pytest.approx(hi, rel=1e-9)
+    assert results["DENSITY"] == pytest.approx(total / 3.0, rel=1e-9)  # 3 km² frame
+    assert results["DENSITY_SE"] == pytest.approx(se / 3.0, rel=1e-9)
+    assert results["CV"] == pytest.approx(se / total, rel=1e-9)
+
+    out, tab = _layer(results["OUTPUT"]), _layer(results["OUTPUT_TABLE"])
+    names = [f.name() for f in tab.fields()]
+    assert names == ["stratum", "area", "n", "mean_c", "sd_c", "dens", "dens_se", "dens_lo", "dens_hi", "abund",
+                     "abund_se", "abund_lo", "abund_hi", "cv", "df", "n_next"]
+    rows = {f["stratum"]: f for f in tab.getFeatures()}
+    assert set(rows) == {"1", "2", "all"}
+    assert rows["all"]["df"] == pytest.approx(df, rel=1e-9)
+    assert rows["1"]["mean_c"] == pytest.approx(np.mean(COUNTS[1]))
+    assert rows["2"]["sd_c"] == pytest.approx(np.std(COUNTS[2], ddof=1))
+    assert rows["1"]["area"] == pytest.approx(2.0) and rows["all"]["n"] == 9
+    assert out.featureCount() == 2
+    assert [f.name() for f in out.fields()] == names
+    html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    assert "frame only" in html and "Stevens" in html and "<svg" in html
+    assert "http://" not in html.replace('xmlns="http://www.w3.org/2000/svg"', "")
+
+
+def test_hectares_and_lognormal(registered, run_alg, tmp_path):
+    results, _ = _run(run_alg, tmp_path, _units_layer(), AREA_UNIT=1, CI_METHOD=1)
+    total, se, _, _, _ = _expected(area_unit_m2=1e4)
+    assert results["DENSITY"] == pytest.approx(total / 300.0, rel=1e-9)  # per ha
+    c = math.exp(stats.norm.ppf(0.975) * math.sqrt(math.log(1 + (se / total) ** 2)))  # Buckland et al. (2001)
+    assert results["ABUNDANCE_LO"] == pytest.approx(total / c, rel=1e-9)
+
+
+def test_null_count_is_non_response_and_unused_reserve_is_skipped(registered, run_alg, tmp_path):
+    units = _units_layer(extra=[(1, None, "primary"), (2, None, "reserve")], role=True)
+    results, feedback = _run(run_alg, tmp_path, units)
+    total, _, _, _, _ = _expected()
+    assert results["ABUNDANCE"] == pytest.approx(total, rel=1e-9)
+    assert any("non-response" in w and "10" in w for w in feedback.warnings)
+    assert not any("11" in w.split(":")[-1] for w in feedback.warnings if "non-response" in w)
+
+
+def test_non_numeric_count_names_the_unit(registered, run_alg, tmp_path):
+    counts = {h: [str(c) for c in v] for h, v in COUNTS.items()}
+    units = _units_layer(counts=counts, extra=[(2, "lots", "primary")])
+    with pytest.raises(QgsProcessingException) as err:
+        _run(run_alg, tmp_path, units)
+    assert "10" in str(err.value) and "count" in str(err.value)
+
+
+def test_empty_stratum_error_and_leaving_it_out(registered, run_alg, tmp_path):
+    units = _units_layer(counts={1: COUNTS[1]})
+    with pytest.raises(QgsProcessingException) as err:
+        _run(run_alg, tmp_path, units)
+    assert "2" in str(err.value)
+    results, feedback = _run(run_alg, tmp_path, units, DROP_EMPTY=True)
+    assert results["ABUNDANCE"] == pytest.approx(np.mean(COUNTS[1]) * 200, rel=1e-9)
+    assert any("shrank" in w for w in feedback.warnings)
+    assert "frame shrank" in (tmp_path / "estimate.html").read_text(encoding="utf-8")
+
+
+def test_true_total_shown_in_report(registered, run_alg, tmp_path):
+    _run(run_alg, tmp_path, _units_layer(), TRUE_TOTAL=2500)
+    html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    assert "2,500" in html and "Only a simulation can show this" in html
+
+
+def test_target_cv_and_bootstrap_seeded(registered, run_alg, tmp_path):
+    first, _ = _run(run_alg, tmp_path, _units_layer(), CI_METHOD=2, SEED=7, TARGET_CV=0.1)
+    again, _ = _run(run_alg, tmp_path, _units_layer(), CI_METHOD=2, SEED=7, TARGET_CV=0.1)
+    assert first["ABUNDANCE_LO"] == again["ABUNDANCE_LO"]
+    assert first["ABUNDANCE_LO"] < first["ABUNDANCE"] < first["ABUNDANCE_HI"]
+    rows = {f["stratum"]: f for f in _layer(first["OUTPUT_TABLE"]).getFeatures()}
+    # Neyman (1934); Cochran (1977), eq. 5.26 without FPC: M_h units of 1 ha, S_h the SD of counts
+    m = np.array([200.0, 100.0])
+    s = np.array([np.std(COUNTS[1], ddof=1), np.std(COUNTS[2], ddof=1)])
+    total = sum(np.mean(COUNTS[h]) * m[h - 1] for h in (1, 2))
+    n = (m * s).sum() ** 2 / (0.1 * total) ** 2
+    expected = np.maximum(np.ceil(n * m * s / (m * s).sum()), 2).astype(int)
+    assert [rows["1"]["n_next"], rows["2"]["n_next"]] == expected.tolist()
+    assert rows["all"]["n_next"] == expected.sum()
+    assert "Seed" in (tmp_path / "estimate.html").read_text(encoding="utf-8")
+
+
+def test_presence_gives_naive_occupancy(registered, run_alg, tmp_path):
+    presence = {1: [1, 0, 0, 1, 0], 2: [1, 1, 0, 1]}
+    results, _ = _run(run_alg, tmp_path, _units_layer(counts=presence), PRESENCE=True)
+    # stratified proportion, strata weighted by their units (Cochran 1977, eq. 5.52): 200 and 100 plots
+    assert results["DENSITY"] == pytest.approx((200 * 0.4 + 100 * 0.75) / 300, rel=1e-9)
+    html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    assert "naive occupancy" in html.lower() and "repeat visits" in html
