@@ -18,11 +18,16 @@ from ..report import Report
 
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__)))), "plugin", "icons", "plotwise.svg")
 
-# (group id, display name); display names are translated in group()
+def translatable(context, text):
+    """Mark ``text`` for extraction into the .ts files; it is translated where it is shown."""
+    return text
+
+
+# group id -> display name (translated in group())
 GROUPS = {
-    "design": "Survey design",
-    "estimation": "Estimation",
-    "training": "Demo and training",
+    "design": translatable("PlotwiseAlgorithm", "Survey design"),
+    "estimation": translatable("PlotwiseAlgorithm", "Estimation"),
+    "training": translatable("PlotwiseAlgorithm", "Demo and training"),
 }
 
 
