@@ -1,7 +1,8 @@
 """The ``plotwise`` processing provider: one instance of every Plotwise algorithm."""
+import glob
 import os
 
-from qgis.core import QgsProcessingProvider
+from qgis.core import QgsMessageLog, QgsProcessingModelAlgorithm, QgsProcessingProvider
 from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
@@ -11,6 +12,7 @@ from .algorithms.demoreserve import DemoReserve
 from .algorithms.estimate import Estimate
 from .algorithms.simulatecounts import SimulateCounts
 
+MODELS = os.path.join(os.path.dirname(os.path.abspath(__file__)), "models")
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "plugin", "icons", "plotwise.svg")
 
 # One entry per algorithm; each issue adds its class here.
@@ -42,3 +44,16 @@ class PlotwiseProvider(QgsProcessingProvider):
     def loadAlgorithms(self):  # noqa: N802 (host naming)
         for algorithm_class in ALGORITHM_CLASSES:
             self.addAlgorithm(algorithm_class())
+        for path in sorted(glob.glob(os.path.join(MODELS, "*.model3"))):
+            self.add_model(path)
+
+    def add_model(self, path):
+        """Offer an example chain (.model3) in the toolbox, under the provider."""
+        model = QgsProcessingModelAlgorithm()
+        if model.fromFile(path):
+            self.addAlgorithm(model)
+        else:
+            QgsMessageLog.logMessage(
+                QCoreApplication.translate("PlotwiseProvider", "The example model {path} could not be read.").format(path=path),
+                "Plotwise",
+            )
