@@ -1,0 +1,139 @@
+"""Layout engine: Halton sequence, counts per stratum, bad input, weights and coordinates."""
+import numpy as np
+import pyproj
+import pytest
+from scipy.stats import qmc
+from shapely.geometry import Point, Polygon, box
+
+from plotwise.processing.engine import halton
+from plotwise.processing.engine import layout as L
+from plotwise.processing.engine.errors import InputError
+
+CRS = "EPSG:32736"  # WGS 84 / UTM 36S
+
+
+def test_halton_equals_scipy():
+    ref = qmc.Halton(d=2, scramble=False).random(2000)  # scipy.stats.qmc, the reference library
+    np.testing.assert_allclose(halton.halton_points(np.arange(2000)), ref, rtol=0, atol=1e-15)
+
+
+def test_radical_inverse_by_hand():
+    # Halton (1960): 6 = 110 in base 2 -> 0.011 = 0.375; 5 = 12 in base 3 -> 0.21 = 7/9
+    assert halton.radical_inverse([6], 2)[0] == 0.375
+    assert halton.radical_inverse([5], 3)[0] == pytest.approx(7 / 9)
+
+
+def test_digit_reversal_inverts_the_radical_inverse():
+    i = np.arange(0, 3**7, 13)
+    u = halton.digit_reversal(i, 3, 7)
+    np.testing.assert_allclose(halton.radical_inverse(u, 3), i / 3**7)
+
+
+def test_balanced_start_is_the_uniform_point_and_sequence_continues():
+    region = box(0, 0, 100, 50)
+    draw = halton.balanced_acceptance_sample(region, 20, np.random.default_rng(2))
+    np.testing.assert_array_equal(draw.indices, np.arange(20))  # a full box accepts every point
+    # later points are the random-start Halton points, moved by under one cell
+    later = halton.halton_points(np.arange(1, 20), draw.start) * [100, 50]
+    np.testing.assert_allclose(draw.points[1:], later, atol=1e-6)
+
+
+def test_proportional_counts_with_minimum():
+    # shares of 100 by area 70/20/9/1 -> 70, 20, 9, 1; the last is raised to 2 and the rest re-shared
+    n = L.proportional_counts([70, 20, 9, 1], 100)
+    assert n.sum() == 100 and n.min() >= 2 and n[-1] == 2
+    exact = 98 * np.array([70, 20, 9]) / 99  # Cochran (1977) ch. 5, proportional allocation
+    assert np.all(np.abs(n[:3] - exact) < 1)
+    assert list(L.proportional_counts([1, 1, 1], 4)) == [2, 2, 2]
+
+
+@pytest.mark.parametrize(
+    "values, word, ids",
+    [([3, None, 4], "NULL", [11]), ([3, -2, 4], "negative", [11]), ([3, 2.5, 4], "whole number", [11])],
+)
+def test_bad_n_field_names_the_feature(values, word, ids):
+    geoms = [box(0, 0, 100, 100), box(100, 0, 200, 100), box(200, 0, 300, 100)]
+    with pytest.raises(InputError, match=word) as err:
+        L.prepare_strata(geoms, feature_ids=[10, 11, 12], strata=[1, 2, 3], n_values=values)
+    assert err.value.ids == ids and "11" in str(err.value)
+
+
+def test_invalid_repaired_and_empty_skipped_with_warnings():
+    bow = Polygon([(0, 0), (200, 200), (200, 0), (0, 200)])
+    flat = Polygon([(0, 0), (10, 0), (20, 0)])
+    frame = L.prepare_strata([bow, flat, box(300, 0, 500, 200)], feature_ids=[1, 2, 3], strata=["a", "a", "b"], n_units=6)
+    text = " ".join(frame.warnings)
+    assert "repaired" in text and "1" in text
+    assert "skipped" in text and frame.skipped_ids == (2,)
+    assert [s.key for s in frame.strata] == ["a", "b"]
+
+
+def test_inside_stratum_too_small_names_it():
+    spec = L.LayoutSpec(shape=2, size=30, inside=True)
+    with pytest.raises(InputError, match="Stratum tiny") as err:
+        L.prepare_strata([box(0, 0, 1000, 1000), box(1000, 0, 1040, 1000)], strata=["big", "tiny"], n_units=6, spec=spec)
+    assert "SIZE" in str(err.value)
+
+
+def test_effective_area_and_weights():
+    # squares of side 20 kept inside a 1000 x 500 stratum: centres from the stratum shrunk by 10 sqrt(2)
+    spec = L.LayoutSpec(design=0, shape=1, size=20, bearing=0, inside=True, reserve=2)
+    lay = L.layout_units([box(0, 0, 1000, 500)], spec, np.random.default_rng(1), n_units=25)
+    st = lay.strata[0]
+    r = 10 * np.sqrt(2)
+    assert st.effective_area == pytest.approx((1000 - 2 * r) * (500 - 2 * r), rel=1e-6)  # erosion of a rectangle
+    np.testing.assert_allclose(lay.incl_p, 25 * 400 / st.effective_area)  # n a / A'
+    prim = lay.is_primary
+    # Horvitz-Thompson by construction: sum of primary weights times unit area = frame area
+    assert (lay.weight[prim] * lay.area_m2[prim]).sum() == pytest.approx(st.effective_area)
+    assert lay.role.count("reserve") == 2
+
+
+def test_points_use_inclusion_density():
+    # Cordy (1993): inclusion density n / A per m2; weights sum to the area
+    lay = L.layout_units([box(0, 0, 1000, 1000)], L.LayoutSpec(), np.random.default_rng(1), n_units=10)
+    np.testing.assert_allclose(lay.incl_p, 1e-5)
+    assert lay.weight.sum() == pytest.approx(1e6)
+    assert (lay.area_m2 == 0).all()
+
+
+def test_lon_lat_match_pyproj():
+    spec = L.LayoutSpec()
+    lay = L.layout_units([box(500000, 9000000, 502000, 9002000)], spec, np.random.default_rng(4), n_units=8, crs=CRS)
+    lon, lat = pyproj.Transformer.from_crs(CRS, "EPSG:4326", always_xy=True).transform(lay.centres[:, 0], lay.centres[:, 1])
+    np.testing.assert_allclose(lay.lon, lon)  # pyproj as the oracle
+    np.testing.assert_allclose(lay.lat, lat)
+    assert (lay.lat < 0).all()
+
+
+def test_unit_ids_and_strata_order():
+    lay = L.layout_units([box(0, 0, 100, 100), box(100, 0, 300, 100)], L.LayoutSpec(reserve=1), np.random.default_rng(2), strata=[2, 1], n_units=6)
+    assert lay.unit_id[0] == "S1-001" and lay.stratum[0] == 1
+    assert lay.unit_id[-1].startswith("S2-")
+
+
+def test_transect_waypoints_start_and_end():
+    spec = L.LayoutSpec(shape=3, size=200, bearing=-1)
+    lay = L.layout_units([box(500000, 9000000, 505000, 9005000)], spec, np.random.default_rng(6), n_units=4, crs=CRS)
+    wp = L.layout_waypoints(lay, CRS)
+    assert wp.name[:2] == (lay.unit_id[0] + "A", lay.unit_id[0] + "B")
+    # the two ends are one transect length apart on the ground (pyproj.Geod, within UTM scale error)
+    geod = pyproj.Geod(ellps="WGS84")
+    _, _, dist = geod.inv(wp.lon[0::2], wp.lat[0::2], wp.lon[1::2], wp.lat[1::2])
+    np.testing.assert_allclose(dist, 200, rtol=2e-3)
+
+
+def test_spec_rejects_bad_parameters():
+    with pytest.raises(InputError, match="SIZE"):
+        L.LayoutSpec(shape=1, size=0)
+    with pytest.raises(InputError, match="BEARING"):
+        L.LayoutSpec(bearing=400)
+    with pytest.raises(InputError, match="DESIGN"):
+        L.LayoutSpec(design=5)
+
+
+def test_zero_units_stratum_warns():
+    frame = L.prepare_strata([box(0, 0, 10, 10), box(10, 0, 20, 10)], strata=[1, 2], n_values=[0, 3])
+    assert any("no units" in w for w in frame.warnings)
+    lay = L.draw_layout(frame, L.LayoutSpec(), np.random.default_rng(1))
+    assert len(lay) == 3
