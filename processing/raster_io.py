@@ -1,0 +1,558 @@
+"""Raster work with GDAL for the stratification: never imports the host.
+
+* :class:`CovariateStack` puts every covariate on one grid: the first
+  covariate's grid in the computation CRS (the first covariate is warped when
+  it lies in another CRS; the others are read directly when their grid lines
+  up with it, and warped or resampled with GDAL otherwise), cut to the frame's
+  extent. The frame is rasterised on that grid (a cell belongs to the frame
+  when its centre lies inside). Blocks of rows are served one at a time, so
+  memory stays bounded whatever the raster's size.
+* :class:`StratumRaster` writes the stratum ids (Byte GeoTIFF, 0 = NoData).
+* :func:`sieve_strata` merges patches below a size into their neighbours
+  (GDAL's sieve filter), :func:`polygonise_strata` turns the raster into one
+  multipolygon per stratum.
+* :func:`stratify_rasters` chains them with the engine.
+"""
+from dataclasses import dataclass, field
+import math
+import os
+import shutil
+import tempfile
+
+import numpy as np
+from osgeo import gdal, ogr, osr
+
+from .engine import stratification as strat
+from .engine.errors import Cancelled, InputError
+
+gdal.UseExceptions()
+ogr.UseExceptions()
+osr.UseExceptions()
+
+#: cells per block: 4 Mi cells, about 32 MB per float64 covariate
+BLOCK_CELLS = 1 << 22
+#: rasters up to this many cells keep the frame mask in memory
+MEM_MASK_CELLS = 1 << 25
+
+
+@dataclass(frozen=True)
+class Covariate:
+    """A raster covariate: a GDAL-readable ``path`` and band, with a display ``name``."""
+
+    path: str
+    name: str
+    band: int = 1
+
+
+@dataclass(frozen=True)
+class Grid:
+    """A north-up grid: GDAL geotransform, size and CRS (WKT)."""
+
+    geotransform: tuple
+    width: int
+    height: int
+    crs_wkt: str
+
+    @property
+    def cell_area(self):
+        """Area of one cell in CRS units squared (m² in a projected CRS)."""
+        return abs(self.geotransform[1] * self.geotransform[5])
+
+    @property
+    def extent(self):
+        """(xmin, ymin, xmax, ymax)."""
+        x0, dx, _, y0, _, dy = self.geotransform
+        xs = (x0, x0 + dx * self.width)
+        ys = (y0, y0 + dy * self.height)
+        return min(xs), min(ys), max(xs), max(ys)
+
+    def window_grid(self, col0, row0, width, height):
+        x0, dx, rx, y0, ry, dy = self.geotransform
+        return Grid((x0 + col0 * dx, dx, rx, y0 + row0 * dy, ry, dy), width, height, self.crs_wkt)
+
+
+def _srs(wkt):
+    s = osr.SpatialReference()
+    s.ImportFromWkt(wkt)
+    s.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
+    return s
+
+
+def _same_crs(a_wkt, b_wkt):
+    if not a_wkt or not b_wkt:
+        return True
+    return bool(_srs(a_wkt).IsSame(_srs(b_wkt)))
+
+
+def _open(cov):
+    try:
+        ds = gdal.Open(cov.path)
+    except RuntimeError as exc:
+        raise InputError("Covariate '%s' cannot be read (%s). Check the file." % (cov.name, exc))
+    if ds is None or not (1 <= cov.band <= ds.RasterCount):
+        raise InputError("Covariate '%s' has no band %d." % (cov.name, cov.band))
+    gt = ds.GetGeoTransform()
+    if gt[2] or gt[4]:
+        ds = gdal.Warp("", ds, format="VRT")  # rotated grid: make it north-up
+    return ds
+
+
+def _grid_of(ds, crs_wkt):
+    wkt = ds.GetProjection() or crs_wkt
+    return Grid(tuple(ds.GetGeoTransform()), ds.RasterXSize, ds.RasterYSize, wkt)
+
+
+class _WindowReader:
+    """Reads windows of the stack grid from a band whose grid lines up with it.
+
+    ``col_off``/``row_off`` place the stack grid's origin on the band's grid;
+    cells outside the band come back as NaN (the block is then float64).
+    """
+
+    def __init__(self, ds, band, col_off, row_off):
+        self.ds = ds  # keep the dataset alive
+        self.band = ds.GetRasterBand(band)
+        self.col_off, self.row_off = col_off, row_off
+        self.nodata = self.band.GetNoDataValue()
+
+    def read(self, xoff, yoff, xsize, ysize):
+        c0, r0 = xoff + self.col_off, yoff + self.row_off
+        W, H = self.band.XSize, self.band.YSize
+        a0, b0 = max(c0, 0), max(r0, 0)
+        a1, b1 = min(c0 + xsize, W), min(r0 + ysize, H)
+        if (a0, b0, a1, b1) == (c0, r0, c0 + xsize, r0 + ysize):
+            return self.band.ReadAsArray(c0, r0, xsize, ysize)
+        out = np.full((ysize, xsize), np.nan)
+        if a1 > a0 and b1 > b0:
+            part = self.band.ReadAsArray(a0, b0, a1 - a0, b1 - b0).astype(np.float64)
+            if self.nodata is not None:
+                part[part == self.nodata] = np.nan
+            out[b0 - r0:b1 - r0, a0 - c0:a1 - c0] = part
+        return out
+
+
+class CovariateStack:
+    """Covariates on one grid, cut to the frame, served block by block.
+
+    Parameters
+    ----------
+    covariates : sequence of Covariate
+    frame_wkb : sequence of bytes
+        The frame's polygons (WKB) in the computation CRS.
+    crs_wkt : str
+        The computation CRS (projected, metres).
+    categorical : bool
+        The first covariate holds classes: warp it with nearest neighbour.
+    block_cells : int
+        Cells per block.
+
+    Use as a context manager (temporary files are removed on exit).
+    """
+
+    def __init__(self, covariates, frame_wkb, crs_wkt, categorical=False, block_cells=BLOCK_CELLS, workdir=None):
+        if not covariates:
+            raise InputError("Give at least one raster in COVARIATES.")
+        self.covariates = list(covariates)
+        self.names = [c.name for c in self.covariates]
+        self.crs_wkt = crs_wkt
+        self.warped = []
+        self._own_dir = workdir is None
+        self.workdir = tempfile.mkdtemp(prefix="plotwise_") if workdir is None else workdir
+        self._datasets = []
+        try:
+            self._build(frame_wkb, categorical, block_cells)
+        except Exception:
+            self.close()
+            raise
+
+    # -- construction -----------------------------------------------------
+    def _build(self, frame_wkb, categorical, block_cells):
+        first = self.covariates[0]
+        ds0 = _open(first)
+        if not _same_crs(ds0.GetProjection(), self.crs_wkt):
+            ds0 = gdal.Warp("", ds0, format="VRT", dstSRS=self.crs_wkt,
+                            resampleAlg="near" if categorical else "bilinear")
+            self.warped.append(first.name)
+        self._datasets.append(ds0)
+        band0 = ds0.GetRasterBand(first.band)
+        self.units = [band0.GetUnitType() or ""]
+        base = _grid_of(ds0, self.crs_wkt)
+        base = Grid(base.geotransform, base.width, base.height, self.crs_wkt)
+        self.base_grid = base
+
+        geoms = [ogr.CreateGeometryFromWkb(bytes(w)) for w in frame_wkb]
+        geoms = [g for g in geoms if g is not None and not g.IsEmpty()]
+        if not geoms:
+            raise InputError("The frame has no polygon.")
+        frame = ogr.Geometry(ogr.wkbMultiPolygon)
+        for g in geoms:
+            for part in (g if g.GetGeometryType() in (ogr.wkbMultiPolygon, ogr.wkbMultiPolygon25D) else [g]):
+                frame.AddGeometry(part.Clone())
+        frame = frame.UnionCascaded() if frame.GetGeometryCount() > 1 else frame
+        self.frame_area = frame.GetArea()
+        bx0, by0, bx1, by1 = base.extent
+        box = ogr.CreateGeometryFromWkt("POLYGON((%r %r,%r %r,%r %r,%r %r,%r %r))" % (
+            bx0, by0, bx1, by0, bx1, by1, bx0, by1, bx0, by0))
+        inter = frame.Intersection(box)
+        self.frame_area_on_grid = inter.GetArea() if inter is not None else 0.0
+        if self.frame_area_on_grid <= 0:
+            raise self._no_overlap()
+
+        # the window of the base grid that holds the frame
+        fx0, fx1, fy0, fy1 = frame.GetEnvelope()
+        x0, dx, _, y0, _, dy = base.geotransform
+        cols = sorted(((fx0 - x0) / dx, (fx1 - x0) / dx))
+        rows = sorted(((fy0 - y0) / dy, (fy1 - y0) / dy))
+        c0, c1 = max(0, int(math.floor(cols[0]))), min(base.width, int(math.ceil(cols[1])))
+        r0, r1 = max(0, int(math.floor(rows[0]))), min(base.height, int(math.ceil(rows[1])))
+        if c1 <= c0 or r1 <= r0:
+            raise self._no_overlap()
+        self.grid = base.window_grid(c0, r0, c1 - c0, r1 - r0)
+        self.window_offset = (c0, r0)
+
+        self._readers = [_WindowReader(ds0, first.band, c0, r0)]
+        self.nodata = [band0.GetNoDataValue()]
+        for cov in self.covariates[1:]:
+            reader, unit = self._reader_for(cov)
+            self._readers.append(reader)
+            self.units.append(unit)
+            self.nodata.append(reader.nodata)
+
+        # the frame on the grid
+        self._mask_ds = self._rasterise(frame)
+        self._mask_band = self._mask_ds.GetRasterBand(1)
+
+        bw, bh = band0.GetBlockSize()
+        W = self.grid.width
+        rows_per = max(1, block_cells // max(1, W))
+        if bh > 1 and rows_per >= bh:
+            rows_per = rows_per // bh * bh
+        self.block_rows = rows_per
+        self.n_blocks = -(-self.grid.height // rows_per)
+
+    def _no_overlap(self):
+        return InputError("The frame does not overlap covariate '%s' (%s). Use a raster that covers the "
+                          "frame, or check both layers' CRS." % (self.covariates[0].name, self.covariates[0].path))
+
+    def _reader_for(self, cov):
+        ds = _open(cov)
+        self._datasets.append(ds)
+        unit = ds.GetRasterBand(cov.band).GetUnitType() or ""
+        g = _grid_of(ds, self.crs_wkt)
+        gx0, gdx, _, gy0, _, gdy = self.grid.geotransform
+        sx0, sdx, _, sy0, _, sdy = g.geotransform
+        if _same_crs(g.crs_wkt, self.crs_wkt) and math.isclose(sdx, gdx, rel_tol=1e-9) and \
+                math.isclose(sdy, gdy, rel_tol=1e-9):
+            co, ro = (gx0 - sx0) / sdx, (gy0 - sy0) / sdy
+            if abs(co - round(co)) < 1e-6 and abs(ro - round(ro)) < 1e-6:
+                return _WindowReader(ds, cov.band, int(round(co)), int(round(ro))), unit
+        xmin, ymin, xmax, ymax = self.grid.extent
+        src_nd = ds.GetRasterBand(cov.band).GetNoDataValue()
+        opts = dict(format="VRT", dstSRS=self.crs_wkt, outputBounds=(xmin, ymin, xmax, ymax),
+                    width=self.grid.width, height=self.grid.height, resampleAlg="bilinear",
+                    outputType=gdal.GDT_Float64, dstNodata=float("nan"), bandList=[cov.band])
+        if src_nd is not None:
+            opts["srcNodata"] = src_nd
+        try:
+            warped = gdal.Warp("", ds, **opts)
+        except TypeError:  # old bindings without bandList
+            opts.pop("bandList")
+            warped = gdal.Warp("", ds, **opts)
+        self._datasets.append(warped)
+        self.warped.append(cov.name)
+        band = 1 if warped.RasterCount == 1 else cov.band
+        return _WindowReader(warped, band, 0, 0), unit
+
+    def _rasterise(self, frame):
+        g = self.grid
+        if g.width * g.height <= MEM_MASK_CELLS:
+            ds = gdal.GetDriverByName("MEM").Create("", g.width, g.height, 1, gdal.GDT_Byte)
+        else:
+            ds = gdal.GetDriverByName("GTiff").Create(os.path.join(self.workdir, "frame.tif"), g.width, g.height,
+                                                      1, gdal.GDT_Byte, ["TILED=YES", "SPARSE_OK=YES"])
+        ds.SetGeoTransform(g.geotransform)
+        ds.SetProjection(g.crs_wkt)
+        mem = ogr.GetDriverByName("Memory").CreateDataSource("frame")
+        layer = mem.CreateLayer("frame", _srs(g.crs_wkt), ogr.wkbMultiPolygon)
+        feat = ogr.Feature(layer.GetLayerDefn())
+        feat.SetGeometry(frame)
+        layer.CreateFeature(feat)
+        gdal.RasterizeLayer(ds, [1], layer, burn_values=[1])
+        return ds
+
+    # -- serving -------------------------------------------------------------
+    @property
+    def cell_area(self):
+        return self.grid.cell_area
+
+    def windows(self):
+        W, H = self.grid.width, self.grid.height
+        for y0 in range(0, H, self.block_rows):
+            yield 0, y0, W, min(self.block_rows, H - y0)
+
+    def blocks(self, strata_band=None):
+        """Iterator of :class:`~.engine.stratification.CellBlock`."""
+        for win in self.windows():
+            xo, yo, xs, ys = win
+            frame = self._mask_band.ReadAsArray(xo, yo, xs, ys).astype(bool)
+            if not frame.any():
+                empty = np.broadcast_to(np.zeros(1, np.float32), (ys, xs))
+                vals = (empty,) * len(self._readers)
+                yield strat.CellBlock(win, vals, frame, frame, None if strata_band is None else
+                                      np.zeros((ys, xs), np.uint8))
+                continue
+            vals = tuple(r.read(xo, yo, xs, ys) for r in self._readers)
+            valid = strat.valid_cells(vals, frame, self.nodata)
+            strata = None if strata_band is None else strata_band.ReadAsArray(xo, yo, xs, ys)
+            yield strat.CellBlock(win, vals, frame, valid, strata)
+
+    def source(self, strata_path=None):
+        """A cell source for the engine, optionally carrying a stratum raster."""
+        return _StackSource(self, strata_path)
+
+    def approximate_range(self):
+        """GDAL's quick (approximate) minimum and maximum of the first covariate, or None."""
+        try:
+            band = self._readers[0].band
+            lo, hi = band.ComputeRasterMinMax(True)
+            return (float(lo), float(hi)) if math.isfinite(lo) and math.isfinite(hi) and hi > lo else None
+        except RuntimeError:
+            return None
+
+    def close(self):
+        self._mask_band = None
+        self._mask_ds = None
+        self._readers = []
+        self._datasets = []
+        if self._own_dir and self.workdir and os.path.isdir(self.workdir):
+            shutil.rmtree(self.workdir, ignore_errors=True)
+
+    def __enter__(self):
+        return self
+
+    def __exit__(self, *exc):
+        self.close()
+
+
+class _StackSource:
+    def __init__(self, stack, strata_path=None):
+        self.stack, self.strata_path = stack, strata_path
+        self.n_blocks = stack.n_blocks
+
+    def blocks(self):
+        if self.strata_path is None:
+            yield from self.stack.blocks()
+            return
+        ds = gdal.Open(self.strata_path)
+        try:
+            yield from self.stack.blocks(ds.GetRasterBand(1))
+        finally:
+            ds = None
+
+
+# ---------------------------------------------------------------------------
+# the stratum raster
+# ---------------------------------------------------------------------------
+class StratumRaster:
+    """Byte GeoTIFF of stratum ids on the stack grid (0 = NoData), written block by block."""
+
+    def __init__(self, path, grid):
+        self.path = path
+        opts = ["COMPRESS=DEFLATE", "ZLEVEL=1", "TILED=YES", "BIGTIFF=IF_SAFER"]
+        self.ds = gdal.GetDriverByName("GTiff").Create(path, grid.width, grid.height, 1, gdal.GDT_Byte, opts)
+        if self.ds is None:
+            raise InputError("Cannot write the stratum raster '%s'." % path)
+        self.ds.SetGeoTransform(grid.geotransform)
+        self.ds.SetProjection(grid.crs_wkt)
+        self.band = self.ds.GetRasterBand(1)
+        self.band.SetNoDataValue(0)
+
+    def write(self, window, ids):
+        self.band.WriteArray(ids.astype(np.uint8, copy=False), int(window[0]), int(window[1]))
+
+    def close(self):
+        if self.ds is not None:
+            self.band.FlushCache()
+            self.band = None
+            self.ds = None
+
+
+def _gdal_callback(progress):
+    if progress is None:
+        return None
+
+    def cb(fraction, message, data):
+        return 0 if progress(fraction) else 1
+
+    return cb
+
+
+def remap_strata(path, lut, block_rows=2048, progress=None):
+    """Replace every stratum id ``i`` by ``lut[i]`` in place, block by block."""
+    lut = np.asarray(lut).astype(np.uint8)
+    ds = gdal.Open(path, gdal.GA_Update)
+    band = ds.GetRasterBand(1)
+    H, W = band.YSize, band.XSize
+    n = -(-H // block_rows)
+    for i, y0 in enumerate(range(0, H, block_rows)):
+        ys = min(block_rows, H - y0)
+        band.WriteArray(lut[band.ReadAsArray(0, y0, W, ys)], 0, y0)
+        if progress is not None and progress((i + 1) / n):
+            raise Cancelled("Stratification cancelled.")
+    band.FlushCache()
+    band = ds = None
+
+
+def sieve_cells(min_area_ha, cell_area_m2):
+    """Patch size in cells below which GDAL's sieve merges a patch: ceil(MIN_AREA × 10,000 / cell area)."""
+    if not min_area_ha or min_area_ha <= 0:
+        return 0
+    return int(math.ceil(min_area_ha * 10000.0 / cell_area_m2 - 1e-9))
+
+
+def sieve_strata(path, min_cells, progress=None):
+    """Merge 4-connected patches of fewer than ``min_cells`` cells into their largest neighbour (GDAL sieve).
+
+    Cells with id 0 (outside the frame or NoData) are never changed and never
+    absorb a patch; a small patch with no stratum neighbour stays.
+    """
+    if min_cells <= 1:
+        return
+    # GDAL's sieve leaves a small patch alone when all its neighbours are small too; growing the
+    # threshold (2, 4, 8, ... then MIN_AREA, twice) lets clusters of small patches merge step by step
+    steps = []
+    t = 2
+    while t < min_cells:
+        steps.append(t)
+        t *= 2
+    steps += [int(min_cells)] * 3
+    ds = gdal.Open(path, gdal.GA_Update)
+    band = ds.GetRasterBand(1)
+    try:
+        for i, t in enumerate(steps):
+            cb = _gdal_callback(strat.scaled_progress(progress, i / len(steps), (i + 1) / len(steps)))
+            try:
+                res = gdal.SieveFilter(band, band, band, t, 4, callback=cb)
+            except RuntimeError:
+                res = 1
+            if res != 0:
+                raise Cancelled("Stratification cancelled.")
+    finally:
+        band.FlushCache()
+        band = ds = None
+
+
+def polygonise_strata(path, n_strata, progress=None):
+    """One multipolygon (WKB) per stratum id 1..n_strata from the stratum raster (GDAL polygonize, 4-connected)."""
+    ds = gdal.Open(path)
+    band = ds.GetRasterBand(1)
+    mem = ogr.GetDriverByName("Memory").CreateDataSource("strata")
+    srs = ds.GetSpatialRef()
+    layer = mem.CreateLayer("strata", srs, ogr.wkbPolygon)
+    layer.CreateField(ogr.FieldDefn("stratum", ogr.OFTInteger))
+    try:
+        gdal.Polygonize(band, band, layer, 0, [], callback=_gdal_callback(progress))
+    except RuntimeError as exc:
+        if "interrupt" in str(exc).lower() or "cancel" in str(exc).lower():
+            raise Cancelled("Stratification cancelled.")
+        raise
+    parts = [ogr.Geometry(ogr.wkbMultiPolygon) for _ in range(n_strata)]
+    layer.ResetReading()
+    for feat in layer:
+        h = feat.GetField(0)
+        if 1 <= h <= n_strata:
+            parts[h - 1].AddGeometry(feat.GetGeometryRef())
+    out = [bytes(p.ExportToWkb()) for p in parts]
+    layer = mem = band = ds = None
+    return out
+
+
+# ---------------------------------------------------------------------------
+# the whole job
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True)
+class RasterStratification:
+    """Everything the algorithm writes and reports.
+
+    Areas are in hectares, computed as cells × cell area in the computation CRS.
+    ``coverage`` is the share of the frame's area with a value in every
+    covariate: (frame area on the raster / frame area) × (valid cells / frame cells).
+    """
+
+    result: strat.Stratification
+    names: list
+    units: list
+    labels: list
+    grid: Grid
+    polygons: list
+    area_ha: np.ndarray
+    frame_ha: float
+    frame_cells_ha: float
+    nodata_ha: float
+    outside_ha: float
+    coverage: float
+    sieve_cells: int
+    warped: list
+    output_raster: str
+    warnings: list = field(default_factory=list)
+
+
+def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_raster, min_area_ha=0.0,
+                     rng=None, sample_size=100_000, progress=None, block_cells=BLOCK_CELLS):
+    """Strata from raster covariates clipped to a frame, as a raster and as polygons.
+
+    Steps: stack the covariates on the first one's grid (:class:`CovariateStack`),
+    find the rule and assign every cell (:func:`~.engine.stratification.stratify_cells`),
+    renumber strata by first-covariate mean, sieve patches below MIN_AREA
+    (then recount the statistics), polygonise.
+    """
+    categorical = method == strat.RASTER_CLASSES
+    warnings = []
+    with CovariateStack(covariates, frame_wkb, crs_wkt, categorical, block_cells) as stack:
+        names, units = stack.names, stack.units
+        writer = StratumRaster(output_raster, stack.grid)
+        try:
+            hint = stack.approximate_range() if method == strat.QUANTILE else None
+            res = strat.stratify_cells(stack.source(), method, n_strata, names, rng=rng, value_range=hint,
+                                       sample_size=sample_size, write=writer.write,
+                                       progress=strat.scaled_progress(progress, 0, 0.7))
+        finally:
+            writer.close()
+        warnings.extend(res.warnings)
+        if res.needs_remap:
+            remap_strata(output_raster, res.lut, progress=strat.scaled_progress(progress, 0.7, 0.75))
+        cells = sieve_cells(min_area_ha, stack.cell_area)
+        if cells > 1:
+            sieve_strata(output_raster, cells, strat.scaled_progress(progress, 0.75, 0.8))
+            stats = strat.accumulate_statistics(stack.source(output_raster), res.n_strata,
+                                                shift=res.statistics.overall_mean(),
+                                                chart_range=res.statistics.chart_range,
+                                                progress=strat.scaled_progress(progress, 0.8, 0.9))
+            lut, order = strat.stratum_order(stats)
+            provisional = res.provisional
+            if not np.array_equal(lut, np.arange(lut.size)):
+                if order.size < stats.n_strata:
+                    warnings.append("%d strata consisted only of patches below MIN_AREA and were merged away."
+                                    % (stats.n_strata - order.size))
+                remap_strata(output_raster, lut)
+                stats, provisional = stats.reordered(order), provisional[order]
+            res = res.with_statistics(stats, provisional)
+        polygons = polygonise_strata(output_raster, res.n_strata, strat.scaled_progress(progress, 0.9, 1.0))
+        ca = stack.cell_area / 10000.0
+        frame_ha = stack.frame_area / 10000.0
+        outside_ha = max(0.0, (stack.frame_area - stack.frame_area_on_grid) / 10000.0)
+        on_grid = stack.frame_area_on_grid / stack.frame_area if stack.frame_area > 0 else 0.0
+        coverage = on_grid * res.cells_valid / res.cells_in_frame if res.cells_in_frame else 0.0
+        if res.cells_nodata or on_grid < 1 - 1e-6:
+            warnings.append("The covariates cover %.1f%% of the frame: %s ha lie outside the rasters and %s ha have "
+                            "NoData in at least one covariate; the strata speak for the covered part only."
+                            % (100 * coverage, _ha(outside_ha), _ha(res.cells_nodata * ca)))
+        labels = strat.stratum_labels(res, names, units)
+        return RasterStratification(res, names, units, labels, stack.grid, polygons,
+                                    res.statistics.count * ca, frame_ha, res.cells_in_frame * ca,
+                                    res.cells_nodata * ca, outside_ha, coverage, cells, list(stack.warped),
+                                    output_raster, warnings)
+
+
+def _ha(x):
+    return "{:,.2f}".format(x)

@@ -1,0 +1,197 @@
+"""GDAL side of the stratification against outside references: numpy, shapely, pyproj, scipy."""
+import numpy as np
+import pytest
+from osgeo import gdal, osr
+from pyproj import CRS, Geod, Transformer
+from scipy import ndimage
+from shapely import wkb
+from shapely.geometry import Polygon, box
+from shapely.geometry.polygon import orient
+from shapely.ops import transform
+
+from plotwise.processing import raster_io as rio
+from plotwise.processing.engine import stratification as s
+from plotwise.processing.engine.errors import Cancelled, InputError
+
+UTM33 = CRS.from_epsg(32633).to_wkt()
+GT = (497000.0, 30.0, 0.0, 5001000.0, 0.0, -30.0)  # near the zone's central meridian (15° E)
+H, W = 220, 260
+
+
+def _write(path, a, gt=GT, wkt=UTM33, nodata=None, dtype=gdal.GDT_Float32):
+    ds = gdal.GetDriverByName("GTiff").Create(str(path), a.shape[1], a.shape[0], 1, dtype)
+    ds.SetGeoTransform(gt)
+    ds.SetProjection(wkt)
+    band = ds.GetRasterBand(1)
+    if nodata is not None:
+        band.SetNoDataValue(nodata)
+    band.WriteArray(a)
+    ds = None
+    return str(path)
+
+
+def _centres(gt=GT, shape=(H, W)):
+    rows, cols = np.mgrid[0:shape[0], 0:shape[1]]
+    return gt[0] + (cols + 0.5) * gt[1], gt[3] + (rows + 0.5) * gt[5]
+
+
+def _contains(poly, x, y):
+    """Cell centres inside a polygon; shapely 2 and 1.8."""
+    try:
+        from shapely import contains_xy
+        return contains_xy(poly, x, y)
+    except ImportError:
+        from shapely import vectorized
+        return vectorized.contains(poly, x, y)
+
+
+def _elevation(nodata_box=True):
+    x, y = _centres()
+    rng = np.random.default_rng(3)
+    a = (900 + 0.08 * (x - GT[0]) + 60 * np.sin((y - GT[3]) / 700) + rng.normal(0, 5, x.shape)).astype(np.float32)
+    if nodata_box:
+        a[100:112, 90:130] = -9999
+    return a
+
+
+FRAME = Polygon([(498012, 4999013), (503987, 4998521), (504411, 4995103), (500023, 4994608), (498311, 4996517)])
+
+
+def _read(path):
+    ds = gdal.Open(path)
+    return ds.GetRasterBand(1).ReadAsArray()
+
+
+def test_quantile_boundaries_areas_and_geodesic_area(tmp_path):
+    elev = _elevation()
+    path = _write(tmp_path / "elev.tif", elev, nodata=-9999)
+    out = str(tmp_path / "strata.tif")
+    r = rio.stratify_rasters([rio.Covariate(path, "elevation")], [FRAME.wkb], UTM33, s.QUANTILE, 5, out)
+    x, y = _centres()
+    inside = _contains(FRAME, x, y)
+    ok = inside & (elev != -9999)
+    cells = elev[ok].astype(float)
+    q = np.quantile(cells, [0.2, 0.4, 0.6, 0.8])  # numpy.quantile on the same cells
+    np.testing.assert_allclose(r.result.boundaries, q, rtol=0, atol=1e-9)
+    cell_ha = 30.0 * 30.0 / 1e4
+    # areas: cell count x cell area, the counts equal numpy.digitize on the shapely-selected cells
+    counts = np.bincount(np.digitize(cells, q), minlength=5)
+    np.testing.assert_allclose(r.area_ha, counts * cell_ha)
+    assert np.all(np.abs(counts - cells.size / 5) <= np.array([1, 2, 2, 2, 1]))  # definition of quantiles
+    assert r.nodata_ha == pytest.approx(np.count_nonzero(inside & (elev == -9999)) * cell_ha)
+    assert r.frame_ha == pytest.approx(FRAME.area / 1e4)  # shapely area
+    assert any("%" in w and "NoData" in w for w in r.warnings)
+    # the raster written holds the same strata as numpy.digitize
+    ref = np.zeros((H, W), np.uint8)
+    ref[ok] = np.digitize(cells, q) + 1
+    np.testing.assert_array_equal(_read(out), _window(ref, r.grid))
+    # geodesic area of the polygons (pyproj.Geod on WGS 84) within 0.5 % of cells x cell area
+    to_wgs = Transformer.from_crs(CRS.from_epsg(32633), CRS.from_epsg(4326), always_xy=True)
+    geod = Geod(ellps="WGS84")
+    for h, blob in enumerate(r.polygons):
+        g = transform(to_wgs.transform, wkb.loads(blob))
+        # pyproj's area is signed by ring orientation: shells counter-clockwise, holes clockwise
+        area = sum(geod.geometry_area_perimeter(orient(part, 1.0))[0] for part in getattr(g, "geoms", [g]))
+        assert area == pytest.approx(r.area_ha[h] * 1e4, rel=0.005)
+
+
+def _window(full, grid):
+    """Cut an array on GT to the stack's window grid."""
+    c0 = int(round((grid.geotransform[0] - GT[0]) / GT[1]))
+    r0 = int(round((grid.geotransform[3] - GT[3]) / GT[5]))
+    return full[r0:r0 + grid.height, c0:c0 + grid.width]
+
+
+def test_warped_covariates_land_on_the_first_grid(tmp_path):
+    elev = _elevation(nodata_box=False)
+    p1 = _write(tmp_path / "elev.tif", elev)
+    # greenness defined in lon/lat, stored in WGS 84: g = 10 * (lon - 15) + 5 * (lat - 45)
+    to_ll = Transformer.from_crs(CRS.from_epsg(32633), CRS.from_epsg(4326), always_xy=True)
+    lon0, lat1 = to_ll.transform(GT[0] - 2000, GT[3] + 2000)
+    lon1, lat0 = to_ll.transform(GT[0] + W * 30 + 2000, GT[3] - H * 30 - 2000)
+    n_lon, n_lat = 400, 300
+    dlon, dlat = (lon1 - lon0) / n_lon, (lat1 - lat0) / n_lat
+    lon_c = lon0 + (np.arange(n_lon) + 0.5) * dlon
+    lat_c = lat1 - (np.arange(n_lat) + 0.5) * dlat
+    green = 10 * (lon_c[None, :] - 15) + 5 * (lat_c[:, None] - 45)
+    p2 = _write(tmp_path / "green.tif", green, gt=(lon0, dlon, 0, lat1, 0, -dlat), wkt=CRS.from_epsg(4326).to_wkt(),
+                dtype=gdal.GDT_Float64)
+    r = rio.stratify_rasters([rio.Covariate(p1, "elevation"), rio.Covariate(p2, "greenness")], [FRAME.wkb], UTM33,
+                             s.EQUAL_INTERVAL, 3, str(tmp_path / "st.tif"))
+    assert r.warped == ["greenness"]
+    # truth: the same linear function at each cell centre converted with pyproj; bilinear warping keeps it
+    x, y = _centres()
+    lon, lat = to_ll.transform(x, y)
+    truth = 10 * (lon - 15) + 5 * (lat - 45)
+    ids = _read(str(tmp_path / "st.tif"))
+    t = _window(truth, r.grid)
+    for h in range(3):
+        np.testing.assert_allclose(r.result.statistics.mean[h, 1], t[ids == h + 1].mean(), atol=2e-4)
+
+
+def test_first_covariate_in_another_crs_is_warped(tmp_path):
+    elev = _elevation(nodata_box=False)
+    p1 = _write(tmp_path / "elev.tif", elev)
+    p_ll = str(tmp_path / "elev_ll.tif")
+    gdal.Warp(p_ll, p1, dstSRS="EPSG:4326")
+    r = rio.stratify_rasters([rio.Covariate(p_ll, "elevation")], [FRAME.wkb], UTM33, s.QUANTILE, 3,
+                             str(tmp_path / "st.tif"))
+    assert r.warped == ["elevation"]
+    assert r.grid.crs_wkt == UTM33
+    assert abs(r.area_ha.sum() - FRAME.area / 1e4) / (FRAME.area / 1e4) < 0.01  # shapely area of the frame
+
+
+def test_partial_coverage_warns_with_the_share_covered(tmp_path):
+    path = _write(tmp_path / "elev.tif", _elevation(nodata_box=False))
+    frame = Polygon([(503000, 4998000), (506000, 4998000), (506000, 4996000), (503000, 4996000)])
+    r = rio.stratify_rasters([rio.Covariate(path, "elevation")], [frame.wkb], UTM33, s.QUANTILE, 2,
+                             str(tmp_path / "st.tif"))
+    raster = box(GT[0], GT[3] - H * 30, GT[0] + W * 30, GT[3])
+    share = frame.intersection(raster).area / frame.area  # shapely
+    assert r.coverage == pytest.approx(share, rel=1e-6)
+    assert any(("%.1f%%" % (100 * share)) in w for w in r.warnings)
+
+
+def test_no_overlap_is_an_error(tmp_path):
+    path = _write(tmp_path / "elev.tif", _elevation())
+    far = Polygon([(600000, 4000000), (601000, 4000000), (601000, 4001000)])
+    with pytest.raises(InputError, match="does not overlap"):
+        rio.stratify_rasters([rio.Covariate(path, "elevation")], [far.wkb], UTM33, s.QUANTILE, 3,
+                             str(tmp_path / "st.tif"))
+
+
+def test_sieve_leaves_no_patch_below_min_area(tmp_path):
+    rng = np.random.default_rng(5)
+    noisy = ndimage.gaussian_filter(rng.normal(size=(H, W)), 1.5).astype(np.float32)
+    path = _write(tmp_path / "n.tif", noisy)
+    whole = box(GT[0], GT[3] - H * 30, GT[0] + W * 30, GT[3])
+    out = str(tmp_path / "st.tif")
+    r = rio.stratify_rasters([rio.Covariate(path, "noise")], [whole.wkb], UTM33, s.QUANTILE, 4, out, min_area_ha=2.0)
+    assert r.sieve_cells == 23  # ceil(2 ha / 0.09 ha)
+    ids = _read(out)
+    for h in range(1, r.result.n_strata + 1):
+        lab, n = ndimage.label(ids == h)  # scipy, 4-connected
+        sizes = np.bincount(lab.ravel())[1:]
+        assert sizes.min() >= 23
+    # statistics are those of the sieved strata (numpy on the raster)
+    for h in range(r.result.n_strata):
+        np.testing.assert_allclose(r.result.statistics.mean[h, 0], noisy[ids == h + 1].astype(float).mean(),
+                                   rtol=1e-9)
+    np.testing.assert_allclose(r.area_ha, np.bincount(ids.ravel(), minlength=5)[1:] * 0.09)
+
+
+def test_small_blocks_give_the_same_strata(tmp_path):
+    path = _write(tmp_path / "elev.tif", _elevation(), nodata=-9999)
+    a = rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.KMEANS, 3, str(tmp_path / "a.tif"),
+                             rng=np.random.default_rng(4))
+    b = rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.KMEANS, 3, str(tmp_path / "b.tif"),
+                             rng=np.random.default_rng(4), block_cells=1000)
+    np.testing.assert_array_equal(_read(str(tmp_path / "a.tif")), _read(str(tmp_path / "b.tif")))
+    np.testing.assert_allclose(a.area_ha, b.area_ha)
+
+
+def test_cancel(tmp_path):
+    path = _write(tmp_path / "elev.tif", _elevation())
+    with pytest.raises(Cancelled):
+        rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 3, str(tmp_path / "c.tif"),
+                             progress=lambda f: f > 0.3, block_cells=5000)
