@@ -41,10 +41,12 @@ first-order inclusion probability of a unit is
     incl_p = n_h a / A'_h,        weight = 1 / incl_p,
 
 (the share of the stratum the design covers; Cochran 1977, §2.3 for equal
-probability designs). Point stations and line transects have no area of their
-own (``area_m2 = 0``): for them ``incl_p`` is the inclusion *density* of the
-design at any location, ``n_h / A'_h`` per m², and ``weight = A'_h / n_h`` m² is
-the area each unit stands for (Cordy 1993, "An extension of the
+probability designs). A point station with a counting radius ``r`` (SIZE)
+counts in a circle, ``a = pi r**2``. Line transects and point stations without
+a radius have no area of their own (``area_m2`` NaN, written as NULL): for them
+``incl_p`` is the inclusion *density* of the design at any location,
+``n_h / A'_h`` per m², and ``weight = A'_h / n_h`` m² is the area each unit
+stands for (Cordy 1993, "An extension of the
 Horvitz-Thompson theorem to point sampling from a continuous universe",
 Statistics & Probability Letters 18:353-362). Reserves carry the weight of the
 primary they would replace. For the systematic grid ``n_h`` is the expected
@@ -109,7 +111,7 @@ class LayoutSpec:
             raise InputError("DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).")
         if self.shape not in (0, 1, 2, 3):
             raise InputError("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")
-        if self.shape != POINT and not self.size > 0:
+        if not self.size >= 0 or (self.shape != POINT and not self.size > 0):
             raise InputError(
                 f"SIZE must be more than 0 m for a {SHAPES[self.shape]} unit; it is {self.size}."
             )
@@ -127,7 +129,7 @@ class LayoutSpec:
 
     @property
     def unit_area(self):
-        """Area of one unit (m²; 0 for points and transects)."""
+        """Area of one unit (m²; NaN for transects and for points without a counting radius)."""
         return unit_area(self.shape, self.size)
 
 
@@ -744,7 +746,7 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
         else:
             bearings = np.full(m, float(spec.bearing))
         if n > 0:
-            incl = n * a / st.effective_area if a > 0 else n / st.effective_area
+            incl = n * a / st.effective_area if a > 0 else n / st.effective_area  # a NaN: density
         else:
             incl = float("nan")
         summaries.append(

@@ -2,7 +2,9 @@
 
 Shapes (the order of the algorithm's SHAPE parameter):
 
-* 0 point station: the centre itself; area 0.
+* 0 point station: the centre itself. ``size`` is an optional counting radius
+  ``r``: then the station counts in a circle of area ``pi r**2`` (circumscribing
+  radius ``r``); with ``size = 0`` its area is unknown (NaN).
 * 1 square plot of side ``s``: area ``s**2``; circumscribing radius ``s / sqrt(2)``.
 * 2 circular plot of radius ``r``: area ``pi r**2``; circumscribing radius ``r``.
 * 3 line transect of length ``L``, centred on the drawn point: area 0 (the strip
@@ -18,13 +20,13 @@ POINT, SQUARE, CIRCLE, LINE = range(4)
 
 
 def unit_area(shape, size):
-    """Area in m² of one unit of ``shape`` and ``size`` (0 for points and lines)."""
+    """Area in m² of one unit of ``shape`` and ``size`` (NaN where it is not defined)."""
     shape = int(shape)
     if shape == SQUARE:
         return float(size) ** 2
-    if shape == CIRCLE:
+    if shape == CIRCLE or (shape == POINT and float(size) > 0):
         return float(np.pi * float(size) ** 2)
-    return 0.0
+    return float("nan")
 
 
 def circumscribing_radius(shape, size):
@@ -32,8 +34,8 @@ def circumscribing_radius(shape, size):
     shape = int(shape)
     if shape == SQUARE:
         return float(size) / np.sqrt(2.0)
-    if shape in (CIRCLE,):
-        return float(size)
+    if shape in (CIRCLE, POINT):
+        return max(float(size), 0.0)
     if shape == LINE:
         return float(size) / 2.0
     return 0.0

@@ -94,7 +94,10 @@ def test_points_use_inclusion_density():
     lay = L.layout_units([box(0, 0, 1000, 1000)], L.LayoutSpec(), np.random.default_rng(1), n_units=10)
     np.testing.assert_allclose(lay.incl_p, 1e-5)
     assert lay.weight.sum() == pytest.approx(1e6)
-    assert (lay.area_m2 == 0).all()
+    assert np.isnan(lay.area_m2).all()
+    # a point station with a counting radius counts in a circle: incl_p = n pi r^2 / A
+    lay = L.layout_units([box(0, 0, 1000, 1000)], L.LayoutSpec(size=10), np.random.default_rng(1), n_units=10)
+    np.testing.assert_allclose(lay.incl_p, 10 * np.pi * 100 / 1e6)
 
 
 def test_lon_lat_match_pyproj():
