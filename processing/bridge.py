@@ -239,3 +239,42 @@ def write_geotiff(path, array, geotransform, crs, nodata=None, data_type=gdal.GD
     band.FlushCache()
     dataset = None
     return path
+
+
+sink_value = _sink_value  # public name: a plain or numpy value as a sink attribute (NaN and None -> NULL)
+
+
+def write_gpx_waypoints(path, names, lon, lat, descriptions=None, kinds=None):
+    """Write WGS 84 waypoints to a GPX 1.1 file through GDAL's GPX driver (the standard schema).
+
+    ``names`` become the waypoint names (``<name>``), ``descriptions`` the ``<desc>`` and ``kinds``
+    the ``<type>`` elements. Returns ``path``.
+    """
+    from osgeo import ogr
+
+    driver = ogr.GetDriverByName("GPX")
+    if driver is None:
+        raise QgsProcessingException(tr("GDAL has no GPX driver here; the GPX file cannot be written."))
+    if gdal.VSIStatL(path) is not None:
+        gdal.Unlink(path)  # the GPX driver does not overwrite
+    dataset = driver.CreateDataSource(path)
+    if dataset is None:
+        raise QgsProcessingException(tr("Could not create the GPX file {path}. Check the folder exists and is writable.").format(path=path))
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(4326)
+    srs.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
+    layer = dataset.CreateLayer("waypoints", srs, ogr.wkbPoint)
+    definition = layer.GetLayerDefn()
+    for i, (name, x, y) in enumerate(zip(names, lon, lat)):
+        feature = ogr.Feature(definition)
+        feature.SetField("name", str(name))
+        if descriptions is not None:
+            feature.SetField("desc", str(descriptions[i]))
+        if kinds is not None:
+            feature.SetField("type", str(kinds[i]))
+        point = ogr.Geometry(ogr.wkbPoint)
+        point.AddPoint_2D(float(x), float(y))
+        feature.SetGeometry(point)
+        layer.CreateFeature(feature)
+    dataset = None
+    return path

@@ -10,6 +10,7 @@ from .algorithms.allocate import Allocate
 from .algorithms.buildframe import BuildFrame
 from .algorithms.demoreserve import DemoReserve
 from .algorithms.estimate import Estimate
+from .algorithms.layout import LayoutUnits
 from .algorithms.simulatecounts import SimulateCounts
 
 MODELS = os.path.join(os.path.dirname(os.path.abspath(__file__)), "models")
@@ -21,6 +22,7 @@ ALGORITHM_CLASSES = [
     BuildFrame,
     DemoReserve,
     Estimate,
+    LayoutUnits,
     SimulateCounts,
 ]
 

@@ -1,0 +1,458 @@
+"""plotwise:layout: sample units over a frame or its strata, with reserves and GPS waypoints."""
+import math
+
+import numpy as np
+from qgis.core import (
+    QgsFeature,
+    QgsFeatureRequest,
+    QgsFeatureSink,
+    QgsField,
+    QgsGeometry,
+    QgsPointXY,
+    QgsProcessingException,
+    QgsProcessingParameterBoolean,
+    QgsProcessingParameterEnum,
+    QgsProcessingParameterFeatureSink,
+    QgsProcessingParameterFeatureSource,
+    QgsProcessingParameterField,
+    QgsProcessingParameterFileDestination,
+    QgsProcessingParameterNumber,
+    Qgis,
+)
+from shapely.geometry import LineString, Point, Polygon
+
+from ...plugin import compat
+from .. import bridge
+from ..engine import layout as engine
+from ..report import MapLayer, category_colour, format_number, map_svg
+from ..report.style import INK, MUTED
+from .base import PlotwiseAlgorithm
+
+NO_GEOMETRY_CHECK = getattr(getattr(Qgis, "InvalidGeometryCheck", None), "NoCheck", None)
+if NO_GEOMETRY_CHECK is None:
+    NO_GEOMETRY_CHECK = QgsFeatureRequest.GeometryNoCheck
+
+REFERENCES = (
+    "Robertson, B. L., Brown, J. A., McDonald, T. & Jaksons, P. (2013). BAS: Balanced acceptance "
+    "sampling of natural resources. Biometrics 69, 776-784.",
+    "Halton, J. H. (1960). On the efficiency of certain quasi-random sequences of points in evaluating "
+    "multi-dimensional integrals. Numerische Mathematik 2, 84-90.",
+    "Stevens, D. L. & Olsen, A. R. (2004). Spatially balanced sampling of natural resources. Journal of "
+    "the American Statistical Association 99, 262-278.",
+    "Cochran, W. G. (1977). Sampling Techniques, 3rd ed. Wiley (ch. 5 stratified, ch. 8 systematic sampling).",
+    "Cordy, C. B. (1993). An extension of the Horvitz-Thompson theorem to point sampling from a continuous "
+    "universe. Statistics & Probability Letters 18, 353-362.",
+    "Diggle, P. J. (2003). Statistical Analysis of Spatial Point Patterns, 2nd ed. Arnold (simple sequential inhibition).",
+    "Turk, G. (1990). Generating random points in triangles. In Graphics Gems, ed. A. Glassner, 24-28. Academic Press.",
+)
+
+MAX_MAP_UNITS = 5000  # more units than this are drawn as a systematic subset on the report map
+
+
+class LayoutUnits(PlotwiseAlgorithm):
+    """Draws sample units per stratum: simple random, systematic grid or spatially balanced."""
+
+    ALGORITHM_NAME = "layout"
+    GROUP_ID = "design"
+
+    FRAME = "FRAME"
+    STRATUM_FIELD = "STRATUM_FIELD"
+    N_FIELD = "N_FIELD"
+    N_UNITS = "N_UNITS"
+    DESIGN = "DESIGN"
+    SHAPE = "SHAPE"
+    SIZE = "SIZE"
+    BEARING = "BEARING"
+    INSIDE = "INSIDE"
+    MIN_SPACING = "MIN_SPACING"
+    RESERVE = "RESERVE"
+    OUTPUT = "OUTPUT"
+    OUTPUT_GPX = "OUTPUT_GPX"
+
+    def displayName(self):  # noqa: N802 (host naming)
+        return self.tr("Lay out sample units")
+
+    def shortHelpString(self):  # noqa: N802 (host naming)
+        return self.tr(
+            "Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per "
+            "value of the stratum field; without it the frame is one stratum).\n\n"
+            "Units per stratum: the units field (for example n_alloc from the allocation step; the same "
+            "whole number on every feature of a stratum), else the total split in proportion to area with "
+            "at least 2 per stratum.\n\n"
+            "Designs:\n"
+            "• Simple random: independent points, uniform over the stratum (triangles chosen by area, then a "
+            "point within; Turk 1990).\n"
+            "• Systematic grid: a square grid of spacing √(A/n) with a random start; with bearing −1 the grid "
+            "also gets a random rotation, otherwise it is turned to the bearing. The realised number of "
+            "units varies around n and is reported.\n"
+            "• Spatially balanced: balanced acceptance sampling on a Halton sequence (Robertson et al. 2013). "
+            "Every leading part of the draw order is itself spread evenly, so reserves are the next points "
+            "of the same sequence. The start is a uniform random point of the stratum, which keeps "
+            "inclusion equal for any sample size.\n\n"
+            "Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular "
+            "plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in "
+            "degrees clockwise from grid north, or −1 for a random bearing per unit.\n"
+            "Keep units inside: centres are drawn from the stratum shrunk by the unit's circumscribing radius, "
+            "so every unit lies wholly inside its stratum; the shrunk (effective) area is reported and used "
+            "for the inclusion probabilities.\n"
+            "Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.\n"
+            "Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit "
+            "that cannot be surveyed is replaced by the next unused reserve of the same stratum.\n\n"
+            "Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points "
+            "without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an "
+            "empty count field for the field teams. The GPX file holds one waypoint per unit (a start and an end "
+            "waypoint per transect), named by unit_id.\n\n"
+            "A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's "
+            "access and safety before fieldwork: the tool never makes a location safe."
+        )
+
+    def initAlgorithm(self, config=None):  # noqa: N802 (host naming)
+        self.addParameter(
+            QgsProcessingParameterFeatureSource(self.FRAME, self.tr("Sampling frame or strata"), [compat.TYPE_VECTOR_POLYGON])
+        )
+        self.addParameter(
+            QgsProcessingParameterField(
+                self.STRATUM_FIELD, self.tr("Stratum field (empty: the frame is one stratum)"), None, self.FRAME,
+                compat.FIELD_ANY, optional=True,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterField(
+                self.N_FIELD, self.tr("Units per stratum field (e.g. n_alloc; empty: split the total by area)"), None,
+                self.FRAME, compat.FIELD_NUMERIC, optional=True,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.N_UNITS, self.tr("Total number of units (when no units field is given)"),
+                type=compat.NUMBER_INTEGER, defaultValue=30, minValue=0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.DESIGN, self.tr("Design"),
+                [self.tr("Simple random"), self.tr("Systematic grid"), self.tr("Spatially balanced")], defaultValue=2,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.SHAPE, self.tr("Unit shape"),
+                [self.tr("Point station"), self.tr("Square plot"), self.tr("Circular plot"), self.tr("Line transect")],
+                defaultValue=0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.SIZE, self.tr("Unit size (m): square side, circle radius, transect length, point counting radius"),
+                type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.BEARING, self.tr("Bearing (degrees from grid north; -1: random)"),
+                type=compat.NUMBER_DOUBLE, defaultValue=-1.0, minValue=-1.0, maxValue=359.999,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterBoolean(self.INSIDE, self.tr("Keep every unit wholly inside its stratum"), defaultValue=True)
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.MIN_SPACING, self.tr("Minimum spacing between unit centres (m; 0: none)"),
+                type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.RESERVE, self.tr("Reserve units per stratum"), type=compat.NUMBER_INTEGER, defaultValue=0, minValue=0,
+            )
+        )
+        self.add_seed_parameter()
+        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Sample units")))
+        self.addParameter(
+            QgsProcessingParameterFileDestination(
+                self.OUTPUT_GPX, self.tr("Waypoints for GPS (GPX)"), self.tr("GPX files (*.gpx)"),
+                createByDefault=False, optional=True,
+            )
+        )
+        self.add_report_parameter()
+
+    # -- run -------------------------------------------------------------------------
+    def _field_name(self, parameters, name, context, source):
+        value = self.parameterAsString(parameters, name, context)
+        if not value:
+            return None
+        if source.fields().lookupField(value) < 0:
+            raise QgsProcessingException(
+                self.tr("Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.").format(
+                    layer=source.sourceName(), field=value, param=name
+                )
+            )
+        return value
+
+    def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
+        source = self.parameterAsSource(parameters, self.FRAME, context)
+        if source is None:
+            raise QgsProcessingException(self.invalidSourceError(parameters, self.FRAME))
+        layer_name = source.sourceName() or self.FRAME
+        stratum_field = self._field_name(parameters, self.STRATUM_FIELD, context, source)
+        n_field = self._field_name(parameters, self.N_FIELD, context, source)
+        n_units = self.parameterAsInt(parameters, self.N_UNITS, context)
+        inside = self.parameterAsBool(parameters, self.INSIDE, context)
+        with self.engine_errors():
+            spec = engine.LayoutSpec(
+                design=self.parameterAsEnum(parameters, self.DESIGN, context),
+                shape=self.parameterAsEnum(parameters, self.SHAPE, context),
+                size=self.parameterAsDouble(parameters, self.SIZE, context),
+                bearing=self.parameterAsDouble(parameters, self.BEARING, context),
+                inside=inside,
+                min_spacing=self.parameterAsDouble(parameters, self.MIN_SPACING, context),
+                reserve=self.parameterAsInt(parameters, self.RESERVE, context),
+            )
+        if n_field is None and n_units < 1:
+            raise QgsProcessingException(
+                self.tr("Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.")
+            )
+        seeded = self.seeded_generator(parameters, context, feedback)
+        crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, layer_name)
+        projected_from = source.sourceCrs().authid() if crs != source.sourceCrs() else None
+        feedback.setProgress(2)
+
+        source.setInvalidGeometryCheck(NO_GEOMETRY_CHECK)
+        records = bridge.read_features(
+            source, crs, context, feedback, [f for f in (stratum_field, n_field) if f], layer_name,
+            repair=False, drop_empty=False,
+        )
+        if feedback.isCanceled():
+            return {}
+        feedback.setProgress(10)
+        fids = [int(i) for i in records.fids]
+        with self.engine_errors():
+            frame = engine.prepare_strata(
+                records.geometries,
+                feature_ids=fids,
+                strata=records.attributes[stratum_field] if stratum_field else None,
+                n_values=records.attributes[n_field] if n_field else None,
+                n_units=n_units,
+                spec=spec,
+                stratum_field=self.tr("Stratum field '{field}' of layer '{layer}'").format(field=stratum_field, layer=layer_name),
+                n_field=self.tr("Units field '{field}' of layer '{layer}'").format(field=n_field, layer=layer_name),
+            )
+            feedback.setProgress(30)
+            result = engine.draw_layout(
+                frame, spec, seeded.generator, crs=bridge.crs_wkt(crs), progress=self.progress_callback(feedback, 30, 70)
+            )
+        warnings = [self.tr("Layer '{layer}': {text}").format(layer=layer_name, text=w) for w in result.warnings]
+        self.push_warnings(feedback, warnings)
+        if len(result) == 0:
+            raise QgsProcessingException(
+                self.tr("No unit could be placed in layer '{layer}'. Ask for more units or use another design.").format(layer=layer_name)
+            )
+
+        dest_id = self._write_units(parameters, context, feedback, source, stratum_field, result, crs)
+        if dest_id is None:
+            return {}
+        outputs = {self.OUTPUT: dest_id}
+        gpx_path = self.parameterAsFileOutput(parameters, self.OUTPUT_GPX, context)
+        if gpx_path:
+            waypoints = engine.layout_waypoints(result, bridge.crs_wkt(crs))
+            kinds = [role for role in result.role for _ in range(2 if spec.shape == engine.LINE else 1)]
+            bridge.write_gpx_waypoints(gpx_path, waypoints.name, waypoints.lon, waypoints.lat, waypoints.description, kinds)
+            outputs[self.OUTPUT_GPX] = gpx_path
+            feedback.pushInfo(self.tr("{n} waypoints written to {path}").format(n=len(waypoints.name), path=gpx_path))
+        feedback.setProgress(90)
+        for s in result.strata:
+            feedback.pushInfo(
+                self.tr("{stratum}: {n} primary and {r} reserve units").format(
+                    stratum=self._stratum_text(s.key), n=s.n_primary, r=s.n_reserve
+                )
+            )
+        report = self._report(result, frame, spec, seeded.seed, crs, projected_from, warnings,
+                              layer_name, stratum_field, n_field, n_units)
+        path = self.write_report(report, parameters, context, feedback)
+        if path:
+            outputs[self.REPORT] = path
+        feedback.setProgress(100)
+        return outputs
+
+    def _stratum_text(self, key):
+        return self.tr("the frame") if key is None else self.tr("stratum {key}").format(key=key)
+
+    # -- output --------------------------------------------------------------------
+    def _write_units(self, parameters, context, feedback, source, stratum_field, result, crs):
+        spec = result.spec
+        fields = bridge.make_fields([("unit_id", "string", 24)])
+        if stratum_field:
+            stratum = QgsField(source.fields().field(stratum_field))
+            stratum.setName("stratum")
+            fields.append(stratum)
+        else:
+            fields.append(compat.make_field("stratum", "int"))
+        for item in (
+            ("role", "string", 8), ("draw_ord", "int"), ("area_m2", "double", 20, 3), ("incl_p", "double", 24, 12),
+            ("weight", "double", 24, 6), ("lon", "double", 14, 8), ("lat", "double", 14, 8), ("count", "int"),
+        ):
+            fields.append(compat.make_field(*item))
+        wkb = {engine.POINT: compat.WKB_POINT, engine.LINE: compat.WKB_LINESTRING}.get(spec.shape, compat.WKB_POLYGON)
+        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, fields, wkb, crs)
+        if sink is None:
+            raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
+        outlines = result.outlines
+        stratum_values = [1 if k is None else k for k in result.stratum]
+        area = [None if not math.isfinite(a) else float(a) for a in result.area_m2.tolist()]
+        features = []
+        rows = zip(
+            result.unit_id, stratum_values, result.role, result.draw_ord.tolist(), area, result.incl_p.tolist(),
+            result.weight.tolist(), result.lon.tolist(), result.lat.tolist(),
+        )
+        total = max(len(result), 1)
+        for i, row in enumerate(rows):
+            feature = QgsFeature(fields)
+            xy = outlines[i]
+            if spec.shape == engine.POINT:
+                geometry = QgsGeometry.fromPointXY(QgsPointXY(float(xy[0]), float(xy[1])))
+            elif spec.shape == engine.LINE:
+                geometry = QgsGeometry.fromPolylineXY([QgsPointXY(float(x), float(y)) for x, y in xy])
+            else:
+                geometry = QgsGeometry.fromPolygonXY([[QgsPointXY(float(x), float(y)) for x, y in xy]])
+            feature.setGeometry(geometry)
+            feature.setAttributes([bridge.sink_value(v) for v in row] + [bridge.sink_value(None)])
+            features.append(feature)
+            if i % 2000 == 0:
+                if feedback.isCanceled():
+                    return None
+                feedback.setProgress(70 + 15 * i / total)
+        sink.addFeatures(features, QgsFeatureSink.FastInsert)
+        return dest_id
+
+    # -- report ----------------------------------------------------------------------
+    def _report(self, result, frame, spec, seed, crs, projected_from, warnings, layer_name, stratum_field, n_field, n_units):
+        tr = self.tr
+        report = self.new_report(tr("Sample-unit layout"))
+        report.field_safety()
+        report.warnings(warnings)
+        primary = result.is_primary
+        report.key_figures([
+            (tr("primary units"), format_number(int(primary.sum()))),
+            (tr("reserve units"), format_number(int((~primary).sum()))),
+            (tr("strata"), format_number(len(result.strata))),
+            (tr("design"), tr(engine.DESIGNS[spec.design])),
+        ])
+        report.section(tr("Replacing units in the field"))
+        report.note(
+            tr("A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced "
+               "by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary "
+               "as not surveyed and why; never move a unit to a more convenient place, and never take a reserve "
+               "of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.")
+        )
+        report.section(tr("Units per stratum"))
+        systematic = spec.design == engine.SYSTEMATIC_GRID
+        header = [tr("Stratum"), tr("Area (ha)"), tr("Effective area (ha)"), tr("Units asked"), tr("Primary"),
+                  tr("Reserve"), tr("incl_p"), tr("weight")]
+        if systematic:
+            header += [tr("Grid spacing (m)"), tr("Grid rotation (°)")]
+        rows = []
+        for s in result.strata:
+            row = [tr("frame") if s.key is None else str(s.key), s.area / 1e4, s.effective_area / 1e4, s.n_requested,
+                   s.n_primary, s.n_reserve, s.incl_p, 1.0 / s.incl_p if s.incl_p and s.incl_p > 0 else None]
+            if systematic:
+                row += [s.spacing, s.rotation]
+            rows.append(row)
+        report.table(header, rows)
+        density = not (spec.unit_area > 0)
+        report.paragraph(
+            tr("incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is "
+               "the area in m² each unit stands for (Cordy 1993).") if density else
+            tr("incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.")
+        )
+        if spec.inside and spec.radius > 0:
+            report.paragraph(
+                tr("Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m "
+                   "(the unit's circumscribing radius). The effective area is that shrunk area and the inclusion "
+                   "probabilities use it; the edge strip is covered less often, which the report of the estimate "
+                   "should mention.").format(r=format_number(spec.radius))
+            )
+        if systematic:
+            report.paragraph(
+                tr("The grid spacing is √(A/n) for the asked n; with a random start the realised number of units "
+                   "varies around n (column Primary) while the inclusion density stays n/A everywhere.")
+            )
+        report.section(tr("Map"))
+        report.figure(self._map(result, frame), tr("Strata (filled), primary units (dark) and reserve units (light)"))
+        report.section(tr("Method"))
+        report.paragraph(self._method_text(spec))
+        crs_text = f"{crs.authid()} ({crs.description()})"
+        if projected_from:
+            crs_text += tr(", projected from {src} (UTM zone of the frame's centre)").format(src=projected_from)
+        report.parameters({
+            tr("Frame (FRAME)"): layer_name,
+            tr("Stratum field (STRATUM_FIELD)"): stratum_field or tr("(none: one stratum)"),
+            tr("Units per stratum field (N_FIELD)"): n_field or tr("(none)"),
+            tr("Total units (N_UNITS)"): n_units if not n_field else tr("(not used)"),
+            tr("Design (DESIGN)"): tr(engine.DESIGNS[spec.design]),
+            tr("Unit shape (SHAPE)"): tr(engine.SHAPES[spec.shape]),
+            tr("Unit size (SIZE, m)"): spec.size,
+            tr("Bearing (BEARING, degrees)"): tr("random") if spec.bearing == engine.RANDOM_BEARING else spec.bearing,
+            tr("Keep inside (INSIDE)"): tr("yes") if spec.inside else tr("no"),
+            tr("Minimum spacing (MIN_SPACING, m)"): spec.min_spacing,
+            tr("Reserves per stratum (RESERVE)"): spec.reserve,
+            tr("Seed (SEED)"): seed,
+            tr("CRS of the computation and the output"): crs_text,
+        })
+        report.references(REFERENCES)
+        return report
+
+    def _method_text(self, spec):
+        tr = self.tr
+        text = {
+            engine.SIMPLE_RANDOM: tr("Simple random: every centre is an independent uniform point of its stratum (a "
+                                     "triangle chosen with probability proportional to its area, then a uniform point in it)."),
+            engine.SYSTEMATIC_GRID: tr("Systematic grid: a square grid with a uniform random start in one grid cell "
+                                       "and a rotation, per stratum; reserves are the centres of the grid cells, in random order."),
+            engine.SPATIALLY_BALANCED: tr("Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). "
+                                          "A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and "
+                                          "its points inside the stratum are kept in order. The random start is a uniform "
+                                          "random point of the stratum, so that every location has the same chance for "
+                                          "any sample size; reserves are the next points of the same sequence."),
+        }[spec.design]
+        if spec.min_spacing > 0:
+            text += " " + tr("A candidate closer than {d} m to an accepted unit is passed over (simple sequential "
+                             "inhibition), which lowers the chance of locations next to units slightly.").format(
+                d=format_number(spec.min_spacing))
+        return text
+
+    def _map(self, result, frame):
+        layers = []
+        geoms = [s.geometry for s in frame.strata]
+        fills = tuple(category_colour(i) for i in range(len(geoms)))
+        legend = tuple((self._stratum_text(s.key), category_colour(i)) for i, s in enumerate(frame.strata))
+        layers.append(MapLayer(tuple(geoms), fills=fills, fill=fills[0] if fills else "none", stroke=MUTED,
+                               stroke_width=0.8, opacity=0.35, legend=legend if len(geoms) > 1 else ()))
+        primary = result.is_primary
+        minx, miny, maxx, maxy = np.array([s.geometry.bounds for s in frame.strata]).T
+        span = max(maxx.max() - minx.min(), maxy.max() - miny.min(), 1.0)
+        small = 2 * result.spec.radius < span / 150.0  # plots under a few pixels are drawn as their centres
+        for role_mask, label, fill, radius in ((primary, self.tr("primary units"), INK, 2.5),
+                                              (~primary, self.tr("reserve units"), "#ffffff", 2.5)):
+            idx = np.flatnonzero(role_mask)
+            if len(idx) > MAX_MAP_UNITS:
+                idx = idx[:: int(math.ceil(len(idx) / MAX_MAP_UNITS))]
+            if len(idx) == 0:
+                continue
+            shapes = tuple(self._unit_shape(result, i, small) for i in idx)
+            layers.append(MapLayer(shapes, label=label, fill=fill,
+                                   stroke=INK, stroke_width=0.8, point_radius=radius))
+        return map_svg(layers)
+
+    @staticmethod
+    def _unit_shape(result, i, small):
+        xy = result.outlines[i]
+        shape = result.spec.shape
+        if shape in (engine.SQUARE, engine.CIRCLE) and small:
+            x, y = result.centres[i]
+            return Point(float(x), float(y))
+        if shape == engine.POINT:
+            return Point(float(xy[0]), float(xy[1]))
+        if shape == engine.LINE:
+            return LineString(xy)
+        return Polygon(xy)

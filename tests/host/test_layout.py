@@ -1,0 +1,186 @@
+"""plotwise:layout run through the host's Processing framework.
+
+Outside references: GDAL's GPX driver reading the waypoints back (ogr.Open), pyproj for
+lon/lat and for the UTM projection of a geographic frame, shapely for "inside the stratum".
+"""
+import math
+
+import numpy as np
+import pyproj
+import pytest
+
+pytest.importorskip("qgis.core")
+from osgeo import ogr  # noqa: E402
+from qgis.core import (  # noqa: E402
+    QgsApplication,
+    QgsFeature,
+    QgsGeometry,
+    QgsProcessingException,
+    QgsProcessingFeedback,
+    QgsVectorLayer,
+)
+from shapely import wkb as shapely_wkb  # noqa: E402
+from shapely import wkt as shapely_wkt  # noqa: E402
+
+STRATA = [  # stratum, n_alloc, polygon (EPSG:32736, invented)
+    (1, 6, "POLYGON((500000 9000000, 503000 9000000, 503000 9002000, 500000 9002000, 500000 9000000))"),
+    (2, 4, "POLYGON((503000 9000000, 505000 9000000, 505000 9001000, 503000 9001000, 503000 9000000))"),
+    (3, 3, "POLYGON((503000 9001000, 505000 9001000, 504000 9002500, 503000 9001000))"),
+]
+
+
+@pytest.fixture
+def registered(plotwise_provider):
+    assert QgsApplication.processingRegistry().algorithmById("plotwise:layout") is not None
+
+
+def strata_layer(rows=STRATA, crs="EPSG:32736", n_type="int"):
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer(f"Polygon?crs={crs}", "strata", "memory")
+    layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("n_alloc", n_type)])
+    layer.updateFields()
+    features = []
+    for stratum, n, wkt in rows:
+        f = QgsFeature(layer.fields())
+        f.setGeometry(QgsGeometry.fromWkt(wkt))
+        f.setAttributes([stratum, n])
+        features.append(f)
+    layer.dataProvider().addFeatures(features)
+    return layer
+
+
+def base_parameters(layer, **extra):
+    p = {
+        "FRAME": layer, "STRATUM_FIELD": "stratum", "N_FIELD": "n_alloc", "N_UNITS": 0, "DESIGN": 2,
+        "SHAPE": 2, "SIZE": 20.0, "BEARING": -1.0, "INSIDE": True, "MIN_SPACING": 50.0, "RESERVE": 2,
+        "SEED": 123, "OUTPUT": "memory:",
+    }
+    p.update(extra)
+    return p
+
+
+def test_balanced_circles_fields_gpx_and_report(registered, tmp_path):
+    import processing
+
+    gpx = tmp_path / "units.gpx"
+    report = tmp_path / "layout.html"
+    result = processing.run("plotwise:layout", base_parameters(strata_layer(), OUTPUT_GPX=str(gpx), REPORT=str(report)))
+    out = result["OUTPUT"]
+    assert out.fields().names() == ["unit_id", "stratum", "role", "draw_ord", "area_m2", "incl_p", "weight", "lon", "lat", "count"]
+    feats = list(out.getFeatures())
+    assert len(feats) == 6 + 4 + 3 + 3 * 2
+    geoms = {s: shapely_wkt.loads(w) for s, _, w in STRATA}
+    to_wgs = pyproj.Transformer.from_crs("EPSG:32736", "EPSG:4326", always_xy=True)
+    for f in feats:
+        unit = shapely_wkb.loads(bytes(f.geometry().asWkb()))
+        assert geoms[f["stratum"]].buffer(1e-6).contains(unit)  # INSIDE, shapely as the oracle
+        assert f["area_m2"] == pytest.approx(math.pi * 400, rel=1e-9)
+        assert f["weight"] == pytest.approx(1 / f["incl_p"])
+        lon, lat = to_wgs.transform(unit.centroid.x, unit.centroid.y)
+        assert f["lon"] == pytest.approx(lon, abs=1e-6) and f["lat"] == pytest.approx(lat, abs=1e-6)  # pyproj
+        assert f["count"] is None or f["count"] != f["count"] or str(f["count"]) == "NULL"
+    roles = [(f["stratum"], f["role"], f["draw_ord"]) for f in feats if f["stratum"] == 2]
+    assert [r[1] for r in roles] == ["primary"] * 4 + ["reserve"] * 2 and [r[2] for r in roles] == [1, 2, 3, 4, 5, 6]
+    # GPX read back through GDAL (standard schema): one waypoint per unit, named by unit_id
+    ds = ogr.Open(str(gpx))
+    assert ds is not None
+    wpts = ds.GetLayerByName("waypoints")
+    names = sorted(w.GetField("name") for w in wpts)
+    assert names == sorted(f["unit_id"] for f in feats)
+    text = report.read_text(encoding="utf-8")
+    for needle in ("<svg", "Field safety", "next unused reserve", "123", "EPSG:32736", "Robertson"):
+        assert needle in text
+    assert "<script" not in text and "http://" not in text.replace("http://www.w3.org/2000/svg", "")
+
+
+def test_transects_get_start_and_end_waypoints(registered, tmp_path):
+    import processing
+
+    gpx = tmp_path / "lines.gpx"
+    result = processing.run("plotwise:layout", base_parameters(
+        strata_layer(), SHAPE=3, SIZE=150.0, DESIGN=0, RESERVE=0, MIN_SPACING=0.0, OUTPUT_GPX=str(gpx)))
+    feats = list(result["OUTPUT"].getFeatures())
+    ds = ogr.Open(str(gpx))  # keep the dataset alive while its layer is read
+    wpts = list(ds.GetLayerByName("waypoints"))
+    assert len(wpts) == 2 * len(feats)
+    assert {w.GetField("name") for w in wpts} == {f["unit_id"] + e for f in feats for e in "AB"}
+    geod = pyproj.Geod(ellps="WGS84")
+    lon = np.array([w.GetGeometryRef().GetX() for w in wpts])
+    lat = np.array([w.GetGeometryRef().GetY() for w in wpts])
+    ds = None
+    _, _, d = geod.inv(lon[0::2], lat[0::2], lon[1::2], lat[1::2])
+    np.testing.assert_allclose(d, 150.0, rtol=2e-3)  # pyproj.Geod: one transect length, within the UTM scale
+    assert all(f["area_m2"] is None or str(f["area_m2"]) == "NULL" for f in feats)
+
+
+def test_systematic_grid_from_total_in_geographic_crs(registered):
+    import processing
+
+    to_geo = pyproj.Transformer.from_crs("EPSG:32736", "EPSG:4326", always_xy=True)
+    rows = []
+    from shapely.ops import transform
+
+    for s, n, w in STRATA:
+        rows.append((s, n, transform(to_geo.transform, shapely_wkt.loads(w)).wkt))
+    feedback = QgsProcessingFeedback()
+    result = processing.run("plotwise:layout", base_parameters(
+        strata_layer(rows, crs="EPSG:4326"), N_FIELD=None, N_UNITS=20, DESIGN=1, SHAPE=1, SIZE=30.0,
+        BEARING=0.0, MIN_SPACING=0.0, RESERVE=1), feedback=feedback)
+    out = result["OUTPUT"]
+    assert out.crs().authid() == "EPSG:32736"  # the UTM zone of the frame's centre
+    counts = {}
+    for f in out.getFeatures():
+        counts[f["stratum"]] = counts.get(f["stratum"], 0) + (f["role"] == "primary")
+    assert min(counts.values()) >= 1 and sum(counts.values()) == pytest.approx(20, abs=4)
+
+
+@pytest.mark.parametrize("value, word", [(None, "NULL"), (-1, "negative"), (2.5, "whole number")])
+def test_bad_n_field_names_the_feature(registered, value, word):
+    import processing
+
+    rows = [STRATA[0], (2, value, STRATA[1][2]), STRATA[2]]
+    layer = strata_layer(rows, n_type="double")
+    with pytest.raises(QgsProcessingException, match=word) as err:
+        processing.run("plotwise:layout", base_parameters(layer))
+    fid = [f.id() for f in layer.getFeatures()][1]
+    assert str(fid) in str(err.value) and "n_alloc" in str(err.value)
+
+
+def test_stratum_too_small_for_inside_units(registered):
+    import processing
+
+    rows = STRATA + [(4, 2, "POLYGON((506000 9000000, 506030 9000000, 506030 9001000, 506000 9001000, 506000 9000000))")]
+    with pytest.raises(QgsProcessingException, match="tratum 4 is too small"):
+        processing.run("plotwise:layout", base_parameters(strata_layer(rows)))
+
+
+def test_spacing_infeasible_states_count(registered):
+    import processing
+
+    with pytest.raises(QgsProcessingException, match="at most about"):
+        processing.run("plotwise:layout", base_parameters(strata_layer(), MIN_SPACING=900.0, DESIGN=0))
+
+
+def test_invalid_repaired_and_empty_skipped_with_warnings(registered):
+    import processing
+
+    rows = STRATA + [
+        (4, 2, "POLYGON((506000 9000000, 507000 9001000, 507000 9000000, 506000 9001000, 506000 9000000))"),
+        (5, 2, "POLYGON((508000 9000000, 508100 9000000, 508200 9000000, 508000 9000000))"),
+    ]
+
+    class Feedback(QgsProcessingFeedback):
+        def __init__(self):
+            super().__init__()
+            self.warnings = []
+
+        def pushWarning(self, text):  # noqa: N802
+            self.warnings.append(text)
+            super().pushWarning(text)
+
+    fb = Feedback()
+    result = processing.run("plotwise:layout", base_parameters(strata_layer(rows), INSIDE=False, MIN_SPACING=0.0), feedback=fb)
+    text = " ".join(fb.warnings)
+    assert "repaired" in text and "skipped" in text
+    assert {f["stratum"] for f in result["OUTPUT"].getFeatures()} == {1, 2, 3, 4}
