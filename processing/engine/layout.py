@@ -63,7 +63,7 @@ from . import geometry as geo
 from .crs import lonlat_transformer
 from .errors import Cancelled, InputError
 from .halton import balanced_acceptance_sample
-from .unit_shapes import LINE, POINT, SHAPES, circumscribing_radius, transect_ends, unit_area, unit_outlines
+from .unit_shapes import CIRCLE, LINE, POINT, SHAPES, SQUARE, circumscribing_radius, transect_ends, unit_area, unit_outlines
 
 DESIGNS = ("simple random", "systematic grid", "spatially balanced")
 SIMPLE_RANDOM, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(3)
