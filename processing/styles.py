@@ -1,85 +1,404 @@
 """Layer styles in our own palette, shared by the output post-processors and the demo project.
 
-Colours read well in print and for common colour-vision deficiencies (the qualitative
-palette of :mod:`processing.report.style`).
+Colours come from :mod:`processing.report.style` (the qualitative ``CATEGORY_COLOURS``
+and the ink colour), so that a map in the project and the map in a report agree.
+They read well in print and for common colour-vision deficiencies: categories differ
+in lightness as well as hue, sequential ramps run from light to dark in one direction,
+and primary and reserve units differ in shape and fill, not only in colour.
+
+Two ways in:
+
+* :func:`apply_style` styles a layer by a style name (``"strata"``, ``"units"``,
+  ``"estimate"``, ``"frame"``, ...). The demo project uses it.
+* :func:`style_on_completion` attaches a :class:`StylePostProcessor` to an output
+  that the host will load when the algorithm finishes (the toolbox, batch runs,
+  ``processing.runAndLoadResults``). Algorithms call it through
+  ``PlotwiseAlgorithm.style_output(context, dest_id, style_name)``.
 """
 from qgis.core import (
     QgsCategorizedSymbolRenderer,
+    QgsClassificationQuantile,
     QgsColorRampShader,
     QgsFillSymbol,
+    QgsGradientColorRamp,
+    QgsGradientStop,
+    QgsGraduatedSymbolRenderer,
     QgsLineSymbol,
     QgsMarkerSymbol,
+    QgsPalettedRasterRenderer,
+    QgsPalLayerSettings,
+    QgsProcessingLayerPostProcessorInterface,
+    QgsRasterLayer,
     QgsRasterShader,
     QgsRendererCategory,
+    QgsRuleBasedRenderer,
     QgsSingleBandPseudoColorRenderer,
     QgsSingleSymbolRenderer,
-    QgsStyle,
+    QgsTextBufferSettings,
+    QgsTextFormat,
+    QgsVectorLayer,
+    QgsVectorLayerSimpleLabeling,
 )
-from qgis.PyQt.QtGui import QColor
+from qgis.PyQt.QtCore import QCoreApplication
+from qgis.PyQt.QtGui import QColor, QFont
 
+from ..plugin import compat
 from .report.style import CATEGORY_COLOURS, INK
 
+# -- palette (our own) -----------------------------------------------------------------
+PRIMARY_COLOUR = CATEGORY_COLOURS[0]  # slate blue, filled
+RESERVE_COLOUR = CATEGORY_COLOURS[1]  # amber, hollow
+EXCLUDED_COLOUR = CATEGORY_COLOURS[6]  # bark, hatched
+ANIMAL_COLOUR = CATEGORY_COLOURS[3]  # brick
+NO_ESTIMATE_COLOUR = "#c9cfcd"
 
+# Sequential ramps, light to dark (readable in grey-scale print and for colour-blind readers).
+DENSITY_RAMP = ("#f5efd9", "#cfe0c3", "#8fc0b1", "#4b9296", "#2a6475", "#1f3a44")
+ELEVATION_RAMP = ("#f6f3ec", "#d8cfc0", "#ab9d86", "#7a6b57", "#4b4036")
+GREENNESS_RAMP = ("#f5efd9", "#d7e2b4", "#a3c68a", "#5c9e6e", "#2f6a44")
+
+DENSITY_CLASSES = 5
+
+
+def _tr(text):
+    return QCoreApplication.translate("PlotwiseStyles", text)
+
+
+# -- building blocks -------------------------------------------------------------------
+def colour_ramp(colours):
+    """A ``QgsGradientColorRamp`` through ``colours`` at even steps."""
+    first, last = QColor(colours[0]), QColor(colours[-1])
+    stops = [QgsGradientStop(i / (len(colours) - 1), QColor(c)) for i, c in enumerate(colours[1:-1], start=1)]
+    return QgsGradientColorRamp(first, last, False, stops)
+
+
+def _fill(colour, outline=INK, width=0.3, style="solid", outline_style="solid"):
+    return QgsFillSymbol.createSimple({
+        "color": colour, "style": style, "outline_color": outline, "outline_width": str(width),
+        "outline_style": outline_style,
+    })
+
+
+def _marker(colour, shape="circle", size=2.4, outline=INK, outline_width=0.3):
+    return QgsMarkerSymbol.createSimple({
+        "name": shape, "color": colour, "size": str(size), "outline_color": outline,
+        "outline_width": str(outline_width),
+    })
+
+
+def _line(colour, width=0.8, style="solid"):
+    return QgsLineSymbol.createSimple({"line_color": colour, "line_width": str(width), "line_style": style})
+
+
+def _natural_order(values):
+    """Numbers first in numeric order, then text in natural order (stratum 2 before stratum 10)."""
+    def key(value):
+        if isinstance(value, (int, float)) and not isinstance(value, bool):
+            return (0, float(value), "")
+        text = str(value)
+        try:
+            return (0, float(text), text)
+        except ValueError:
+            return (1, 0.0, text)
+
+    return sorted((v for v in values if v is not None and str(v) != "NULL"), key=key)
+
+
+def _unique(layer, field):
+    index = layer.fields().lookupField(field)
+    return _natural_order(layer.uniqueValues(index)) if index >= 0 else []
+
+
+def _labels_for(layer, field, label_field):
+    """``{value: label}`` from the first feature of each value (strata carry a readable ``label``)."""
+    if layer.fields().lookupField(label_field) < 0:
+        return {}
+    labels = {}
+    for feature in layer.getFeatures():
+        value, label = feature[field], feature[label_field]
+        if value not in labels and label not in (None, "") and str(label) != "NULL":
+            labels[value] = str(label)
+    return labels
+
+
+def _finish(layer, renderer):
+    layer.setRenderer(renderer)
+    layer.triggerRepaint()
+    return layer
+
+
+# -- single-symbol styles --------------------------------------------------------------
 def outline(layer, colour=INK, width=0.6, fill="transparent"):
     """A single outline symbol (frames, study areas)."""
-    symbol = QgsFillSymbol.createSimple(
-        {"color": fill, "outline_color": colour, "outline_width": str(width), "style": "no" if fill == "transparent" else "solid"}
-    )
-    layer.setRenderer(QgsSingleSymbolRenderer(symbol))
-    layer.triggerRepaint()
+    if fill == "transparent":
+        symbol = _fill("0,0,0,0", outline=colour, width=width, style="no")
+    else:
+        symbol = _fill(fill, outline=colour, width=width)
+    return _finish(layer, QgsSingleSymbolRenderer(symbol))
 
 
-def hatched(layer, colour="#a8875b"):
+def frame(layer):
+    """The sampling frame: a firm ink outline over a pale wash, so the strata below still show."""
+    symbol = _fill("31,58,68,20", outline=INK, width=0.9)
+    return _finish(layer, QgsSingleSymbolRenderer(symbol))
+
+
+def hatched(layer, colour=EXCLUDED_COLOUR):
     """Diagonal hatching for excluded areas."""
-    symbol = QgsFillSymbol.createSimple({"color": colour, "outline_color": colour, "style": "b_diagonal", "outline_width": "0.4"})
-    layer.setRenderer(QgsSingleSymbolRenderer(symbol))
-    layer.triggerRepaint()
+    symbol = _fill(colour, outline=colour, width=0.4, style="b_diagonal")
+    return _finish(layer, QgsSingleSymbolRenderer(symbol))
 
 
-def dots(layer, colour=CATEGORY_COLOURS[3], size=1.0):
+def dots(layer, colour=ANIMAL_COLOUR, size=1.0):
     symbol = QgsMarkerSymbol.createSimple({"name": "circle", "color": colour, "size": str(size), "outline_style": "no"})
-    layer.setRenderer(QgsSingleSymbolRenderer(symbol))
-    layer.triggerRepaint()
+    return _finish(layer, QgsSingleSymbolRenderer(symbol))
 
 
 def lines(layer, colour=INK, width=0.8):
-    symbol = QgsLineSymbol.createSimple({"line_color": colour, "line_width": str(width)})
-    layer.setRenderer(QgsSingleSymbolRenderer(symbol))
-    layer.triggerRepaint()
+    return _finish(layer, QgsSingleSymbolRenderer(_line(colour, width)))
 
 
-def categorised(layer, field, opacity=0.75):
-    """One colour per distinct value of ``field`` (strata), in our qualitative palette."""
-    index = layer.fields().lookupField(field)
-    values = sorted(layer.uniqueValues(index), key=lambda v: (str(type(v)), v)) if index >= 0 else []
-    categories = []
+# -- categorised styles ----------------------------------------------------------------
+def _category_symbol(layer, colour, opacity=1.0):
     geometry = layer.geometryType()
-    for i, value in enumerate(values):
-        colour = CATEGORY_COLOURS[i % len(CATEGORY_COLOURS)]
-        if geometry == 2:  # polygon
-            symbol = QgsFillSymbol.createSimple({"color": colour, "outline_color": INK, "outline_width": "0.3"})
-        elif geometry == 1:
-            symbol = QgsLineSymbol.createSimple({"line_color": colour, "line_width": "0.8"})
-        else:
-            symbol = QgsMarkerSymbol.createSimple({"name": "circle", "color": colour, "size": "2.4", "outline_color": INK})
-        symbol.setOpacity(opacity)
-        categories.append(QgsRendererCategory(value, symbol, str(value)))
-    layer.setRenderer(QgsCategorizedSymbolRenderer(field, categories))
+    if geometry == compat.GEOMETRY_POLYGON:
+        symbol = _fill(colour)
+    elif geometry == compat.GEOMETRY_LINE:
+        symbol = _line(colour)
+    else:
+        symbol = _marker(colour)
+    symbol.setOpacity(opacity)
+    return symbol
+
+
+def categorised(layer, field, opacity=0.8, label_field=None):
+    """One colour per distinct value of ``field``, in our qualitative palette (natural order).
+
+    A layer without ``field`` gets the first palette colour as a single symbol.
+    """
+    if layer.fields().lookupField(field) < 0:
+        return _finish(layer, QgsSingleSymbolRenderer(_category_symbol(layer, CATEGORY_COLOURS[0], opacity)))
+    labels = _labels_for(layer, field, label_field) if label_field else {}
+    categories = []
+    for i, value in enumerate(_unique(layer, field)):
+        symbol = _category_symbol(layer, CATEGORY_COLOURS[i % len(CATEGORY_COLOURS)], opacity)
+        text = f"{value} – {labels[value]}" if value in labels and labels[value] != str(value) else str(value)
+        categories.append(QgsRendererCategory(value, symbol, text))
+    return _finish(layer, QgsCategorizedSymbolRenderer(field, categories))
+
+
+def strata(layer, field="stratum"):
+    """Strata categorised by ``field`` (``stratum``; legend text from ``label`` when the layer has it)."""
+    return categorised(layer, field or "stratum", opacity=0.8, label_field="label")
+
+
+def units(layer, label=True):
+    """Sample units by ``role``: primary filled slate blue, reserve hollow amber; labelled with ``unit_id``."""
+    geometry = layer.geometryType()
+    if geometry == compat.GEOMETRY_POLYGON:
+        primary = _fill(PRIMARY_COLOUR, outline=INK, width=0.3)
+        reserve = _fill("0,0,0,0", outline=RESERVE_COLOUR, width=0.7, style="no", outline_style="dash")
+    elif geometry == compat.GEOMETRY_LINE:
+        primary = _line(PRIMARY_COLOUR, 1.0)
+        reserve = _line(RESERVE_COLOUR, 0.8, style="dash")
+    else:
+        primary = _marker(PRIMARY_COLOUR, "circle", 2.6)
+        reserve = _marker("255,255,255,255", "triangle", 2.6, outline=RESERVE_COLOUR, outline_width=0.6)
+    if layer.fields().lookupField("role") < 0:  # units from elsewhere: all drawn as primary
+        renderer = QgsSingleSymbolRenderer(primary)
+    else:
+        categories = [
+            QgsRendererCategory("primary", primary, _tr("primary unit")),
+            QgsRendererCategory("reserve", reserve, _tr("reserve unit")),
+        ]
+        others = [v for v in _unique(layer, "role") if v not in ("primary", "reserve")]
+        for i, value in enumerate(others, start=4):
+            symbol = _category_symbol(layer, CATEGORY_COLOURS[i % len(CATEGORY_COLOURS)])
+            categories.append(QgsRendererCategory(value, symbol, str(value)))
+        renderer = QgsCategorizedSymbolRenderer("role", categories)
+    _finish(layer, renderer)
+    if label and layer.fields().lookupField("unit_id") >= 0:
+        label_features(layer, "unit_id")
+    return layer
+
+
+def label_features(layer, field, size=7.5):
+    """Small ink labels with a white halo (readable over any fill and in grey-scale print)."""
+    text = QgsTextFormat()
+    font = QFont("DejaVu Sans")
+    text.setFont(font)
+    text.setSize(size)
+    text.setColor(QColor(INK))
+    halo = QgsTextBufferSettings()
+    halo.setEnabled(True)
+    halo.setSize(0.8)
+    halo.setColor(QColor("white"))
+    text.setBuffer(halo)
+    settings = QgsPalLayerSettings()
+    settings.fieldName = field
+    settings.isExpression = False
+    settings.setFormat(text)
+    layer.setLabeling(QgsVectorLayerSimpleLabeling(settings))
+    layer.setLabelsEnabled(True)
     layer.triggerRepaint()
+    return layer
 
 
-def pseudocolour(layer, ramp_name="Viridis", band=1):
-    """A continuous colour ramp over the band's min–max."""
+# -- graduated style of the estimate ---------------------------------------------------
+def estimate(layer, area_unit="km²", field="dens", classes=DENSITY_CLASSES):
+    """Strata graduated by density ``dens`` (light to dark), legend in animals per ``area_unit``.
+
+    Classes are quantiles of the strata's densities (one class per stratum when there are
+    few strata). Strata without an estimate (no surveyed unit) are drawn pale grey and
+    labelled so, instead of vanishing from the map.
+    """
+    per = _tr("per {unit}").format(unit=area_unit)
+    title = _tr("Density (animals {per})").format(per=per)
+    layer.setTitle(title)
+    index = layer.fields().lookupField(field)
+    values = set()
+    has_missing = False
+    if index >= 0:
+        for value in layer.uniqueValues(index):
+            if isinstance(value, (int, float)) and not isinstance(value, bool) and value == value:
+                values.add(float(value))
+            else:
+                has_missing = True
+    if not values:
+        symbol = _fill(NO_ESTIMATE_COLOUR, outline=INK, width=0.3, style="dense5")
+        renderer = QgsSingleSymbolRenderer(symbol)
+        return _finish(layer, renderer)
+    renderer = QgsGraduatedSymbolRenderer(field)
+    renderer.setSourceSymbol(_fill(DENSITY_RAMP[0], outline=INK, width=0.3))
+    method = QgsClassificationQuantile()
+    method.setLabelFormat("%1 – %2 " + per)
+    method.setLabelPrecision(2)
+    method.setLabelTrimTrailingZeroes(True)
+    renderer.setClassificationMethod(method)
+    renderer.setSourceColorRamp(colour_ramp(DENSITY_RAMP))
+    renderer.updateClasses(layer, max(1, min(classes, len(values))))
+    renderer.updateColorRamp(colour_ramp(DENSITY_RAMP))
+    if has_missing:
+        rules = QgsRuleBasedRenderer.convertFromRenderer(renderer, layer)
+        root = rules.rootRule()
+        other = QgsRuleBasedRenderer.Rule(_fill(NO_ESTIMATE_COLOUR, outline=INK, width=0.3, style="dense5"))
+        other.setIsElse(True)
+        other.setLabel(_tr("no estimate (no surveyed unit)"))
+        root.appendChild(other)
+        return _finish(layer, rules)
+    return _finish(layer, renderer)
+
+
+# -- rasters ---------------------------------------------------------------------------
+def pseudocolour(layer, colours=DENSITY_RAMP, band=1, classes=8):
+    """A continuous colour ramp over the band's minimum to maximum."""
     provider = layer.dataProvider()
     stats = provider.bandStatistics(band)
-    ramp = QgsStyle.defaultStyle().colorRamp(ramp_name)
-    shader_function = QgsColorRampShader(stats.minimumValue, stats.maximumValue, ramp)
-    shader_function.classifyColorRamp(8, band, layer.extent(), provider)
+    ramp = colour_ramp(colours)
+    function = QgsColorRampShader(stats.minimumValue, stats.maximumValue, ramp)
+    function.classifyColorRamp(classes, band, layer.extent(), provider)
     shader = QgsRasterShader()
-    shader.setRasterShaderFunction(shader_function)
+    shader.setRasterShaderFunction(function)
     renderer = QgsSingleBandPseudoColorRenderer(provider, band, shader)
-    layer.setRenderer(renderer)
-    layer.triggerRepaint()
+    renderer.setClassificationMin(stats.minimumValue)
+    renderer.setClassificationMax(stats.maximumValue)
+    return _finish(layer, renderer)
+
+
+def raster_classes(layer, band=1):
+    """A class raster (strata) with one palette colour per class value."""
+    provider = layer.dataProvider()
+    data = QgsPalettedRasterRenderer.classDataFromRaster(provider, band)
+    classes = [
+        QgsPalettedRasterRenderer.Class(c.value, QColor(CATEGORY_COLOURS[i % len(CATEGORY_COLOURS)]), c.label)
+        for i, c in enumerate(sorted(data, key=lambda c: c.value))
+    ]
+    return _finish(layer, QgsPalettedRasterRenderer(provider, band, classes))
+
+
+# -- by name ---------------------------------------------------------------------------
+STYLES = {
+    # vector outputs
+    "frame": frame,
+    "outline": lambda layer: outline(layer, width=0.8),
+    "hatched": hatched,
+    "excluded": hatched,
+    "dots": dots,
+    "animals": dots,
+    "strata": strata,
+    "units": units,
+    "estimate": estimate,
+    # rasters
+    "terrain": lambda layer: pseudocolour(layer, ELEVATION_RAMP),
+    "elevation": lambda layer: pseudocolour(layer, ELEVATION_RAMP),
+    "greenness": lambda layer: pseudocolour(layer, GREENNESS_RAMP),
+    "intensity": lambda layer: pseudocolour(layer, DENSITY_RAMP),
+    "strata_raster": raster_classes,
+}
+
+_RASTER_STYLES = {"terrain", "elevation", "greenness", "intensity", "strata_raster"}
+
+
+def apply_style(layer, style_name, **options):
+    """Style ``layer`` with the named style; returns True when a style was applied.
+
+    Options go to the style function (``area_unit`` for ``"estimate"``). A layer of the
+    wrong kind for the style (a table without geometry, a vector for a raster style) is
+    left as it is.
+    """
+    if style_name not in STYLES:
+        raise KeyError(f"no Plotwise style called {style_name!r}; known: {', '.join(sorted(STYLES))}")
+    if layer is None or not layer.isValid():
+        return False
+    if style_name in _RASTER_STYLES:
+        if not isinstance(layer, QgsRasterLayer):
+            return False
+    elif not isinstance(layer, QgsVectorLayer) or not layer.isSpatial():
+        return False
+    STYLES[style_name](layer, **options)
+    return True
+
+
+# -- post-processors -------------------------------------------------------------------
+# The host holds post-processors by a C++ pointer only: without a Python reference the
+# Python object (and its postProcessLayer) would be garbage-collected before the host
+# calls it. Keep the latest one per output here.
+_LIVE_POST_PROCESSORS = {}
+
+
+class StylePostProcessor(QgsProcessingLayerPostProcessorInterface):
+    """Styles an output layer once the host has loaded it into the project."""
+
+    def __init__(self, style_name, options=None):
+        super().__init__()
+        if style_name not in STYLES:
+            raise KeyError(f"no Plotwise style called {style_name!r}")
+        self.style_name = style_name
+        self.options = dict(options or {})
+
+    def postProcessLayer(self, layer, context, feedback):  # noqa: N802 (host naming)
+        try:
+            apply_style(layer, self.style_name, **self.options)
+        except Exception as error:  # noqa: BLE001 (a style problem must never fail the run)
+            if feedback is not None:
+                feedback.pushWarning(
+                    _tr("The layer {name} could not be styled ({error}); it keeps the default style.").format(
+                        name=layer.name() if layer is not None else "?", error=error)
+                )
+
+
+def style_on_completion(context, dest_id, style_name, **options):
+    """Style output ``dest_id`` when the host loads it on completion; returns the post-processor or None.
+
+    Nothing happens when the output is not loaded (``processing.run``, ``qgis_process``,
+    intermediate outputs of a model).
+    """
+    if not dest_id or context is None or not context.willLoadLayerOnCompletion(dest_id):
+        return None
+    processor = StylePostProcessor(style_name, options)
+    _LIVE_POST_PROCESSORS[dest_id] = processor
+    context.layerToLoadOnCompletionDetails(dest_id).setPostProcessor(processor)
+    return processor
 
 
 def colour(text):

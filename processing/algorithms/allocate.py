@@ -269,6 +269,7 @@ class Allocate(PlotwiseAlgorithm):
                 cv="–" if overall_cv is None else f"{overall_cv:.3f}")
         )
         feedback.setProgress(100)
+        self.style_output(context, dest_id, "strata", field=stratum_field)
         return {self.OUTPUT: dest_id, self.REPORT: report_path, self.EXPECTED_CV: overall_cv}
 
     # ------------------------------------------------------------------------------

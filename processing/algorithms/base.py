@@ -15,6 +15,7 @@ from ...plugin import compat
 from ..engine.errors import Cancelled, InputError
 from ..engine.rng import make_rng
 from ..report import Report
+from .. import styles
 
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__)))), "plugin", "icons", "plotwise.svg")
 
@@ -114,6 +115,10 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
             raise QgsProcessingException(
                 self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm")
             ) from None
+
+    def style_output(self, context, dest_id, style_name, **options):
+        """Style output ``dest_id`` (a name from ``processing.styles.STYLES``) when the host loads it."""
+        return styles.style_on_completion(context, dest_id, style_name, **options)
 
     def push_warnings(self, feedback, warnings):
         for warning in warnings:

@@ -266,6 +266,7 @@ class BuildFrame(PlotwiseAlgorithm):
             },
         )
         outputs = {self.OUTPUT: dest_id}
+        self.style_output(context, dest_id, "frame")
         path = self.write_report(report, parameters, context, feedback)
         if path:
             outputs[self.REPORT] = path

@@ -123,6 +123,9 @@ class DemoReserve(PlotwiseAlgorithm):
             )
         )
         results[self.REPORT] = self.write_report(self._report(reserve, cell_size, crs), parameters, context, feedback)
+        for key, style in ((self.OUTPUT_AREA, "outline"), (self.OUTPUT_EXCLUDED, "excluded"), (self.OUTPUT_ELEVATION, "elevation"),
+                           (self.OUTPUT_GREENNESS, "greenness"), (self.OUTPUT_INTENSITY, "intensity"), (self.OUTPUT_ANIMALS, "animals")):
+            self.style_output(context, results[key], style)
         return results
 
     def _check_sink(self, sink, key):

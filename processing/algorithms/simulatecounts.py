@@ -117,4 +117,5 @@ class SimulateCounts(PlotwiseAlgorithm):
                 n=len(regions), seen=int(result.seen.sum()), present=int(result.present.sum()), p=detection
             )
         )
+        self.style_output(context, dest, "units")
         return {self.OUTPUT: dest}
