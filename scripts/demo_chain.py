@@ -209,6 +209,36 @@ def step_estimate(demo):
     """Density and abundance from the counts (issue 6)."""
     if not demo.available("plotwise:estimate"):
         return
+    counts, stratify = demo.results.get("counts"), demo.results.get("stratify")
+    if counts is None or stratify is None:
+        print("  plotwise:estimate skipped: no counted units or no strata yet")
+        return
+    # the truth inside the frame (only a simulation knows it): the simulated animals inside the strata
+    inside = demo.run("native:countpointsinpolygon", {
+        "POLYGONS": stratify["OUTPUT"], "POINTS": demo.layer_uri("animals"), "FIELD": "true_n",
+        "OUTPUT": "memory:",
+    })["OUTPUT"]
+    if isinstance(inside, str):
+        from qgis.core import QgsProcessingContext, QgsProcessingUtils
+
+        inside = QgsProcessingUtils.mapLayerFromString(inside, QgsProcessingContext())
+    true_total = float(sum(f["true_n"] for f in inside.getFeatures()))
+    results = demo.run("plotwise:estimate", {
+        "UNITS": counts["OUTPUT"], "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum",
+        "UNIT_AREA_FIELD": "area_m2", "STRATA": stratify["OUTPUT"], "STRATA_ID_FIELD": "stratum",
+        "CONFIDENCE": 0.95, "CI_METHOD": 0, "FPC": False, "DETECTION_P": 1.0, "DETECTION_SE": 0.0,
+        "AREA_UNIT": 0, "TARGET_CV": 0.15, "SEED": SEED + 2,
+        "VARIANCE_METHOD": 1,  # the layout is spatially balanced: local neighbourhood variance
+        "TRUE_TOTAL": true_total,  # simulations and training only
+        "OUTPUT": demo.table("strata_estimate"), "OUTPUT_TABLE": demo.table("estimate_table"),
+        "REPORT": demo.report("07_estimate"),
+    })
+    demo.results["estimate"] = results
+    demo.layers.append(("Density estimate by stratum", demo.layer_uri("strata_estimate"), "ogr", "strata"))
+    covered = results["ABUNDANCE_LO"] <= true_total <= results["ABUNDANCE_HI"]
+    print(f"    estimated {results['ABUNDANCE']:,.0f} velmar (95% CI {results['ABUNDANCE_LO']:,.0f} to "
+          f"{results['ABUNDANCE_HI']:,.0f}, CV {results['CV']:.3f}); true total in the frame {true_total:,.0f} "
+          f"({'inside' if covered else 'outside'} the interval; only a simulation can show this)")
 
 
 def step_compare(demo):

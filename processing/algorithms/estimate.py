@@ -478,22 +478,25 @@ class Estimate(PlotwiseAlgorithm):
         report.warnings(warnings)
 
         report.section(tr("Estimates by stratum"))
-        header = [tr("Stratum"), tr("Area ({unit})").format(unit=per), tr("Units (n)"), tr("Not surveyed"),
-                  tr("Mean count"), tr("SD of counts"), dens_label, tr("SE"), tr("Lower"), tr("Upper"),
-                  tr("Abundance") if not presence else tr("Occupied units"), tr("SE"), tr("Lower"), tr("Upper"),
-                  tr("CV"), tr("df")]
+        density_header = [tr("Stratum"), tr("Area ({unit})").format(unit=per), tr("Units (n)"), tr("Not surveyed"),
+                          tr("Mean count"), tr("SD of counts"), dens_label[:1].upper() + dens_label[1:], tr("SE"),
+                          tr("Lower limit"),
+                          tr("Upper limit"), tr("CV"), tr("df")]
+        abundance_header = [tr("Stratum"), tr("Occupied units") if presence else tr("Abundance"), tr("SE"),
+                            tr("Lower limit"), tr("Upper limit")]
         if result.target_cv:
-            header.append(tr("Units next time (n_next)"))
-        rows = []
+            abundance_header.append(tr("Units next time (n_next)"))
+        density_rows, abundance_rows = [], []
+        total_area = sum(stratum_areas[s.stratum] for s in result.strata)
         for r in result.table():
-            row = self._row(r, stratum_areas.get(r.stratum, r.area), presence)
-            area = sum(stratum_areas[s.stratum] for s in result.strata) if r.stratum == "all" else row[1]
-            cells = [tr("all strata") if r.stratum == "all" else r.stratum, area, r.n, r.n_missing] + row[3:15]
-            if result.target_cv:
-                cells.append(r.n_next)
-            rows.append(cells)
-        report.table(header, rows, caption=tr("Confidence limits at {level}; density per {unit}.").format(
-            level=level, unit=per) if not presence else None)
+            row = self._row(r, total_area if r.stratum == "all" else stratum_areas.get(r.stratum, r.area), presence)
+            label = tr("all strata") if r.stratum == "all" else r.stratum
+            density_rows.append([label, row[1], r.n, r.n_missing] + row[3:9] + row[13:15])
+            abundance_rows.append([label] + row[9:13] + ([r.n_next] if result.target_cv else []))
+        report.table(density_header, density_rows, caption=tr("{what}, limits at {level}.").format(
+            what=dens_label.capitalize(), level=level))
+        report.table(abundance_header, abundance_rows, caption=tr("{what} in the frame, limits at {level}.").format(
+            what=tr("Occupied units") if presence else tr("Abundance"), level=level))
         if result.dropped_strata:
             report.note(tr(
                 "The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). "

@@ -630,6 +630,12 @@ def estimate_density(
         raise Cancelled()
     if n_total == 0:
         warnings.append("No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.")
+    elif np.any((sum_y == 0) & (n_h > 1)):
+        zero = [labels[h] for h in np.flatnonzero((sum_y == 0) & (n_h > 1))]
+        warnings.append(
+            f"In strata {_id_list(zero)} every surveyed unit counted 0: their standard error is 0, which "
+            "understates the uncertainty (the species may be present but rare there)."
+        )
     return Estimate(
         strata=tuple(rows),
         overall=overall,

@@ -268,3 +268,31 @@ def test_satterthwaite_single_stratum_is_n_minus_1():
     # Cochran (1977), eq. 5.16: one component gives its own df
     assert est.satterthwaite_df([3.0], [7]) == pytest.approx(7, rel=REL)
     assert est.satterthwaite_df([1.0, 1.0], [4, 4]) == pytest.approx(8)
+
+
+def test_stratum_of_zeros_is_flagged():
+    result = est.estimate_density([0.0, 0.0, 0.0, 2.0, 5.0, 1.0], np.ones(6), [1, 1, 1, 2, 2, 2], {1: 5, 2: 5})
+    assert any("every surveyed unit counted 0" in w and "1" in w for w in result.warnings)
+
+
+def test_cancel_stops_the_run():
+    from plotwise.processing.engine.errors import Cancelled
+
+    counts, areas, strata, frame = _hand_arrays()
+    with pytest.raises(Cancelled):
+        est.estimate_density(counts, areas, strata, frame, progress=lambda fraction: True)
+
+
+def test_bootstrap_with_detection_matches_delta_method():
+    """With a large sample the bootstrap's spread, p drawn from a beta with the same
+    mean and SE, agrees with the delta-method SE (Seber 1982) to a few per cent."""
+    rng = np.random.default_rng(9)
+    n = 1000
+    counts = rng.poisson(rng.gamma(2.0, 2.0, size=n)).astype(float)
+    result = est.estimate_density(counts, np.full(n, 0.01), np.ones(n), {1: 100.0}, ci_method="bootstrap",
+                                  detection_p=0.5, detection_se=0.05, rng=make_rng(3).generator, n_bootstrap=4000)
+    o = result.overall
+    # log-normal interval from the same CV as the yardstick (Buckland et al. 2001, eq. 3.71)
+    lo, hi = est.lognormal_interval(o.abund, o.cv, 0.95)
+    assert o.abund_lo == pytest.approx(lo, rel=0.05)
+    assert o.abund_hi == pytest.approx(hi, rel=0.05)
