@@ -101,6 +101,12 @@ LEVEL_INFO = _first(lambda: Qgis.MessageLevel.Info, lambda: Qgis.Info)
 LEVEL_WARNING = _first(lambda: Qgis.MessageLevel.Warning, lambda: Qgis.Warning)
 LEVEL_CRITICAL = _first(lambda: Qgis.MessageLevel.Critical, lambda: Qgis.Critical)
 
+# Invalid-geometry handling of feature sources: Qgis.InvalidGeometryCheck from 3.36 on.
+# Our algorithms repair invalid polygons themselves (with a warning), so the host's filter is off.
+from qgis.core import QgsFeatureRequest  # noqa: E402
+
+GEOMETRY_NO_CHECK = _first(lambda: Qgis.InvalidGeometryCheck.NoCheck, lambda: QgsFeatureRequest.GeometryNoCheck)
+
 # Sink flags and field parameter types.
 from qgis.core import QgsProcessingParameterField  # noqa: E402
 

@@ -115,6 +115,8 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
     if source is None:
         raise QgsProcessingException(tr("The input layer '{layer}' could not be opened.").format(layer=layer_name))
     layer_name = layer_name or source.sourceName()
+    # the host would drop or refuse invalid features before we can repair them and say so
+    source.setInvalidGeometryCheck(compat.GEOMETRY_NO_CHECK)
     fields = source.fields()
     missing = [name for name in field_names if name and fields.lookupField(name) < 0]
     if missing:

@@ -1,7 +1,5 @@
 """plotwise:buildframe: the sampling frame from the study area, exclusions, a raster mask and an edge buffer."""
 from qgis.core import (
-    Qgis,
-    QgsFeatureRequest,
     QgsProcessingException,
     QgsProcessingParameterFeatureSink,
     QgsProcessingParameterFeatureSource,
@@ -17,12 +15,6 @@ from ..raster_masking import mask_polygons
 from ..report import MapLayer, format_number, map_svg
 from ..report.style import ACCENT, CAUTION_EDGE, INK, MUTED
 from .base import PlotwiseAlgorithm
-
-# The engine repairs invalid polygons itself (with a warning), so the host's own
-# validity filter is switched off for our sources. Qgis.InvalidGeometryCheck from 3.36 on.
-NO_GEOMETRY_CHECK = getattr(getattr(Qgis, "InvalidGeometryCheck", None), "NoCheck", None)
-if NO_GEOMETRY_CHECK is None:
-    NO_GEOMETRY_CHECK = QgsFeatureRequest.GeometryNoCheck
 
 
 class BuildFrame(PlotwiseAlgorithm):
@@ -124,7 +116,6 @@ class BuildFrame(PlotwiseAlgorithm):
         return self.parameterAsDouble(parameters, name, context)
 
     def _read_polygons(self, source, crs, context, feedback, label):
-        source.setInvalidGeometryCheck(NO_GEOMETRY_CHECK)
         records = bridge.read_features(
             source, crs, context, feedback, layer_name=label, repair=False, drop_empty=False
         )

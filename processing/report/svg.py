@@ -53,12 +53,12 @@ def _ring_path(coords, tx):
     return "M" + " L".join(f"{x:.1f},{y:.1f}" for x, y in xy) + " Z"
 
 
-def _thin(coords, max_points=600):
-    coords = np.asarray(coords)
-    if len(coords) > max_points:
-        step = int(np.ceil(len(coords) / max_points))
-        coords = np.vstack([coords[::step], coords[-1:]])
-    return coords
+def _for_screen(geometry, pixel):
+    """Simplify lines and polygons to about half a pixel (keeps the SVG small, shapes true)."""
+    if geometry.geom_type in ("Point", "MultiPoint"):
+        return geometry
+    simplified = geometry.simplify(pixel * 0.5, preserve_topology=True)
+    return geometry if simplified.is_empty else simplified
 
 
 def map_svg(layers, width=900, height=None, title=None, scale_bar=True):
@@ -98,18 +98,18 @@ def map_svg(layers, width=900, height=None, title=None, scale_bar=True):
             if g is None or g.is_empty:
                 continue
             fill = layer.fills[i] if layer.fills else layer.fill
-            for part in _geom_parts(g):
+            for part in _geom_parts(_for_screen(g, 1.0 / scale)):
                 kind = part.geom_type
                 if kind == "Polygon":
-                    d = _ring_path(_thin(part.exterior.coords), tx)
+                    d = _ring_path(part.exterior.coords, tx)
                     for ring in part.interiors:
-                        d += " " + _ring_path(_thin(ring.coords), tx)
+                        d += " " + _ring_path(ring.coords, tx)
                     out.append(
                         f'<path d="{d}" fill="{fill}" fill-rule="evenodd" fill-opacity="{layer.opacity}" '
                         f'stroke="{layer.stroke}" stroke-width="{layer.stroke_width}"/>'
                     )
                 elif kind in ("LineString", "LinearRing"):
-                    xy = tx(_thin(part.coords)[:, :2])
+                    xy = tx(np.asarray(part.coords)[:, :2])
                     pts = " ".join(f"{x:.1f},{y:.1f}" for x, y in xy)
                     out.append(
                         f'<polyline points="{pts}" fill="none" stroke="{layer.stroke}" '
