@@ -341,6 +341,8 @@ class Estimate(PlotwiseAlgorithm):
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
         if not bridge.write_features(sink, fields, polygons, polygon_rows, feedback, (80.0, 88.0)):
             raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+        if not settings["presence"]:
+            self.style_output(context, dest, "estimate", area_unit=UNIT_NAMES[area_unit])
         table_sink, table_dest = self.parameterAsSink(
             parameters, self.OUTPUT_TABLE, context, fields, compat.WKB_NOGEOMETRY, QgsCoordinateReferenceSystem())
         if table_sink is None:

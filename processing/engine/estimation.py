@@ -407,7 +407,14 @@ def estimate_density(
         )
 
     # units that belong to no stratum of the frame
-    unknown = np.array([lab is None or lab not in frame for lab in labels_all], dtype=bool)
+    no_stratum = np.array([lab is None for lab in labels_all], dtype=bool)
+    if no_stratum.any():
+        raise InputError(
+            f"Units {_id_list(ids[no_stratum])} have no stratum (the stratum field is empty). Fill in their "
+            "stratum, or leave the stratum field out to treat the frame as one stratum.",
+            ids=ids[no_stratum],
+        )
+    unknown = np.array([lab not in frame for lab in labels_all], dtype=bool)
     if unknown.any():
         names = sorted({str(lab) for lab in labels_all[unknown]}, key=natural_key)
         raise InputError(

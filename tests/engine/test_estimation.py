@@ -296,3 +296,9 @@ def test_bootstrap_with_detection_matches_delta_method():
     lo, hi = est.lognormal_interval(o.abund, o.cv, 0.95)
     assert o.abund_lo == pytest.approx(lo, rel=0.05)
     assert o.abund_hi == pytest.approx(hi, rel=0.05)
+
+
+def test_unit_without_stratum_is_an_error():
+    with pytest.raises(InputError) as err:
+        est.estimate_density([1.0, 2.0, 3.0], [1, 1, 1], [1, None, 1], {1: 5}, unit_ids=["a", "b", "c"])
+    assert err.value.ids == ["b"] and "no stratum" in err.value.message
