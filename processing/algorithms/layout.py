@@ -19,7 +19,7 @@ from qgis.core import (
     QgsProcessingParameterNumber,
     Qgis,
 )
-from shapely.geometry import LineString, Point, Polygon
+from shapely.geometry import LineString, Polygon
 
 from ...plugin import compat
 from .. import bridge
@@ -253,6 +253,7 @@ class LayoutUnits(PlotwiseAlgorithm):
         if dest_id is None:
             return {}
         outputs = {self.OUTPUT: dest_id}
+        self.style_output(context, dest_id, "units")
         gpx_path = self.parameterAsFileOutput(parameters, self.OUTPUT_GPX, context)
         if gpx_path:
             waypoints = engine.layout_waypoints(result, bridge.crs_wkt(crs))
@@ -432,27 +433,23 @@ class LayoutUnits(PlotwiseAlgorithm):
         minx, miny, maxx, maxy = np.array([s.geometry.bounds for s in frame.strata]).T
         span = max(maxx.max() - minx.min(), maxy.max() - miny.min(), 1.0)
         small = 2 * result.spec.radius < span / 150.0  # plots under a few pixels are drawn as their centres
-        for role_mask, label, fill, radius in ((primary, self.tr("primary units"), INK, 2.5),
-                                              (~primary, self.tr("reserve units"), "#ffffff", 2.5)):
+        for role_mask, label, fill in ((primary, self.tr("primary units"), INK),
+                                       (~primary, self.tr("reserve units"), "#ffffff")):
             idx = np.flatnonzero(role_mask)
             if len(idx) > MAX_MAP_UNITS:
                 idx = idx[:: int(math.ceil(len(idx) / MAX_MAP_UNITS))]
             if len(idx) == 0:
                 continue
-            shapes = tuple(self._unit_shape(result, i, small) for i in idx)
-            layers.append(MapLayer(shapes, label=label, fill=fill,
-                                   stroke=INK, stroke_width=0.8, point_radius=radius))
+            outlines = ()
+            if result.spec.shape == engine.LINE or (result.spec.shape in (engine.SQUARE, engine.CIRCLE) and not small):
+                outlines = tuple(self._unit_shape(result, i) for i in idx)
+            layers.append(MapLayer(outlines, label=label, fill=fill, stroke=INK, stroke_width=0.8, point_radius=2.5,
+                                   points=result.centres[idx] if not outlines else None))
         return map_svg(layers)
 
     @staticmethod
-    def _unit_shape(result, i, small):
+    def _unit_shape(result, i):
         xy = result.outlines[i]
-        shape = result.spec.shape
-        if shape in (engine.SQUARE, engine.CIRCLE) and small:
-            x, y = result.centres[i]
-            return Point(float(x), float(y))
-        if shape == engine.POINT:
-            return Point(float(xy[0]), float(xy[1]))
-        if shape == engine.LINE:
+        if result.spec.shape == engine.LINE:
             return LineString(xy)
         return Polygon(xy)
