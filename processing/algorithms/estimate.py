@@ -476,6 +476,8 @@ class Estimate(PlotwiseAlgorithm):
         if result.ci_method == "bootstrap":
             parameters[tr("Bootstrap resamples")] = result.n_bootstrap
             parameters[tr("Seed")] = info["seed"]
+        else:
+            parameters[tr("Seed")] = tr("not used (no random draws without the bootstrap)")
         report.parameters(parameters)
         report.warnings(warnings)
 

@@ -207,3 +207,45 @@ def test_presence_gives_naive_occupancy(registered, run_alg, tmp_path):
     assert results["DENSITY"] == pytest.approx((200 * 0.4 + 100 * 0.75) / 300, rel=1e-9)
     html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
     assert "naive occupancy" in html.lower() and "repeat visits" in html
+
+
+def _points_layer():
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer("Point?crs=EPSG:32633", "stations", "memory")
+    layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("count", "int")])
+    layer.updateFields()
+    features = []
+    for i, (stratum, count) in enumerate((h, c) for h, values in COUNTS.items() for c in values):
+        f = QgsFeature(layer.fields())
+        f.setGeometry(QgsGeometry.fromWkt(f"POINT({STRATA[stratum][0] + 100 + 150 * (i % 5)} {100 + 180 * i})"))
+        f.setAttributes([stratum, count])
+        features.append(f)
+    layer.dataProvider().addFeatures(features)
+    return layer
+
+
+def test_points_need_a_unit_area(registered, run_alg, tmp_path):
+    with pytest.raises(QgsProcessingException) as err:
+        _run(run_alg, tmp_path, _points_layer())
+    assert "area" in str(err.value)
+    results, _ = _run(run_alg, tmp_path, _points_layer(), UNIT_AREA=UNIT_M2)
+    assert results["ABUNDANCE"] == pytest.approx(_expected()[0], rel=1e-9)
+
+
+def test_detection_by_delta_method_through_the_host(registered, run_alg, tmp_path):
+    results, _ = _run(run_alg, tmp_path, _points_layer(), UNIT_AREA=UNIT_M2, DETECTION_P=0.8, DETECTION_SE=0.05)
+    total, se, _, _, _ = _expected()
+    assert results["ABUNDANCE"] == pytest.approx(total / 0.8, rel=1e-9)
+    # Seber (1982): squared CVs add
+    assert results["CV"] == pytest.approx(math.sqrt((se / total) ** 2 + (0.05 / 0.8) ** 2), rel=1e-9)
+    html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    assert "separate study" in html
+
+
+def test_local_variance_option_runs(registered, run_alg, tmp_path):
+    srs, _ = _run(run_alg, tmp_path, _points_layer(), UNIT_AREA=UNIT_M2)
+    local, _ = _run(run_alg, tmp_path, _points_layer(), UNIT_AREA=UNIT_M2, VARIANCE_METHOD=1)
+    assert local["ABUNDANCE"] == pytest.approx(srs["ABUNDANCE"], rel=1e-12)
+    assert local["DENSITY_SE"] > 0 and local["DENSITY_SE"] != srs["DENSITY_SE"]
+    assert "Stevens" in (tmp_path / "estimate.html").read_text(encoding="utf-8")
