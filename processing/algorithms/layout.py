@@ -299,25 +299,29 @@ class LayoutUnits(PlotwiseAlgorithm):
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
         outlines = result.outlines
-        stratum_values = [1 if k is None else k for k in result.stratum]
-        area = [None if not math.isfinite(a) else float(a) for a in result.area_m2.tolist()]
+        null = bridge.sink_value(None)
+
+        def column(values):  # plain Python values, NaN as NULL
+            return [null if v != v else v for v in np.asarray(values, dtype=float).tolist()]
+
+        columns = [
+            list(result.unit_id), [1 if k is None else k for k in result.stratum], list(result.role),
+            result.draw_ord.tolist(), column(result.area_m2), column(result.incl_p), column(result.weight),
+            column(result.lon), column(result.lat),
+        ]
         features = []
-        rows = zip(
-            result.unit_id, stratum_values, result.role, result.draw_ord.tolist(), area, result.incl_p.tolist(),
-            result.weight.tolist(), result.lon.tolist(), result.lat.tolist(),
-        )
         total = max(len(result), 1)
-        for i, row in enumerate(rows):
+        for i, row in enumerate(zip(*columns)):
             feature = QgsFeature(fields)
-            xy = outlines[i]
+            xy = outlines[i].tolist()
             if spec.shape == engine.POINT:
-                geometry = QgsGeometry.fromPointXY(QgsPointXY(float(xy[0]), float(xy[1])))
+                geometry = QgsGeometry.fromPointXY(QgsPointXY(*xy))
             elif spec.shape == engine.LINE:
-                geometry = QgsGeometry.fromPolylineXY([QgsPointXY(float(x), float(y)) for x, y in xy])
+                geometry = QgsGeometry.fromPolylineXY([QgsPointXY(x, y) for x, y in xy])
             else:
-                geometry = QgsGeometry.fromPolygonXY([[QgsPointXY(float(x), float(y)) for x, y in xy]])
+                geometry = QgsGeometry.fromPolygonXY([[QgsPointXY(x, y) for x, y in xy]])
             feature.setGeometry(geometry)
-            feature.setAttributes([bridge.sink_value(v) for v in row] + [bridge.sink_value(None)])
+            feature.setAttributes([*row, null])
             features.append(feature)
             if i % 2000 == 0:
                 if feedback.isCanceled():
@@ -424,15 +428,18 @@ class LayoutUnits(PlotwiseAlgorithm):
 
     def _map(self, result, frame):
         layers = []
-        geoms = [s.geometry for s in frame.strata]
+        minx, miny, maxx, maxy = np.array([s.geometry.bounds for s in frame.strata]).T
+        pixel = max(maxx.max() - minx.min(), maxy.max() - miny.min(), 1.0) / 900.0
+        geoms = []
+        for s in frame.strata:  # a fast Douglas-Peucker pass first: the map needs half a pixel, not every vertex
+            quick = s.geometry.simplify(0.5 * pixel, preserve_topology=False)
+            geoms.append(quick if not quick.is_empty else s.geometry)
         fills = tuple(category_colour(i) for i in range(len(geoms)))
         legend = tuple((self._stratum_text(s.key), category_colour(i)) for i, s in enumerate(frame.strata))
         layers.append(MapLayer(tuple(geoms), fills=fills, fill=fills[0] if fills else "none", stroke=MUTED,
                                stroke_width=0.8, opacity=0.35, legend=legend if len(geoms) > 1 else ()))
         primary = result.is_primary
-        minx, miny, maxx, maxy = np.array([s.geometry.bounds for s in frame.strata]).T
-        span = max(maxx.max() - minx.min(), maxy.max() - miny.min(), 1.0)
-        small = 2 * result.spec.radius < span / 150.0  # plots under a few pixels are drawn as their centres
+        small = 2 * result.spec.radius < 6 * pixel  # plots under a few pixels are drawn as their centres
         for role_mask, label, fill in ((primary, self.tr("primary units"), INK),
                                        (~primary, self.tr("reserve units"), "#ffffff")):
             idx = np.flatnonzero(role_mask)

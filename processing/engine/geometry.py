@@ -333,7 +333,7 @@ def _mixed_triangles(points, simplices, neighbors, missing):
     return mixed
 
 
-def triangle_cover(geometry, method="auto", compact_share=0.5):
+def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=None):
     """Triangles that cover ``geometry``, each marked wholly inside or mixed.
 
     See the module docstring for the method. The union of the kept triangles
@@ -343,7 +343,10 @@ def triangle_cover(geometry, method="auto", compact_share=0.5):
     covered by the two triangles of its bounding box, both mixed: rejection
     from the box then accepts at least half of the points and needs no
     triangulation, which is cheaper for polygons with many vertices. Ragged,
-    thin or sparse polygons get the Delaunay cover.
+    thin or sparse polygons get the Delaunay cover, unless ``expected_points``
+    says so few points will be drawn that testing ``expected_points / share``
+    box points costs less than triangulating (taken as ``2 x vertices`` point
+    tests): the cheaper exact sampler is used either way.
 
     Parameters
     ----------
@@ -351,6 +354,8 @@ def triangle_cover(geometry, method="auto", compact_share=0.5):
     method : {"auto", "delaunay", "bbox"}
     compact_share : float
         Threshold of ``area / bounding-box area`` for the box cover in "auto".
+    expected_points : int, optional
+        Points that will be drawn from the cover ("auto" only).
 
     Returns
     -------
@@ -362,9 +367,12 @@ def triangle_cover(geometry, method="auto", compact_share=0.5):
         return empty
     minx, miny, maxx, maxy = geometry.bounds
     box_area = (maxx - minx) * (maxy - miny)
-    if method == "bbox" or (method == "auto" and area >= compact_share * box_area):
+    share = area / box_area if box_area > 0 else 1.0
+    if method == "bbox" or (method == "auto" and share >= compact_share):
         return _bbox_cover(geometry)
     points, edges = _boundary_edges(geometry)
+    if method == "auto" and expected_points is not None and expected_points / share < 2 * len(points):
+        return _bbox_cover(geometry)
     # work relative to the centre: better conditioned orientation tests
     centre = points.mean(axis=0)
     local = points - centre

@@ -356,6 +356,7 @@ def prepare_strata(
     spec=None,
     stratum_field="STRATUM_FIELD",
     n_field="N_FIELD",
+    cover_method="auto",
 ):
     """Repair, merge and size the strata of a frame.
 
@@ -372,7 +373,10 @@ def prepare_strata(
     n_units : int, optional
         Total units split by area (:func:`proportional_counts`).
     spec : LayoutSpec
-        For ``inside`` and the unit radius.
+        For ``inside``, the unit radius and the design.
+    cover_method : {"auto", "delaunay", "bbox"}
+        Sampler for uniform points (:func:`geometry.triangle_cover`); "auto"
+        picks the cheaper exact one for the number of points the design draws.
 
     Returns
     -------
@@ -419,8 +423,10 @@ def prepare_strata(
     merged, areas, fids = [], [], []
     for key in keys:
         members = groups[key]
-        g = members[0][1] if len(members) == 1 else unary_union([m[1] for m in members])
-        g = geo.repair_polygonal(g).geometry
+        if len(members) == 1:
+            g = members[0][1]  # repaired above
+        else:
+            g = geo.repair_polygonal(unary_union([m[1] for m in members])).geometry
         merged.append(g)
         areas.append(float(g.area))
         fids.append(tuple(feature_ids[i] for i, _ in members))
@@ -464,7 +470,11 @@ def prepare_strata(
             warnings.append(
                 f"{name[0].upper() + name[1:]} gets one unit only; its variance cannot be estimated."
             )
-        cover = geo.triangle_cover(region) if eff > 0 else geo.triangle_cover(None)
+        if spec.design == SIMPLE_RANDOM:
+            draws = (n + spec.reserve) * (3 if spec.min_spacing > 0 else 1.1)
+        else:  # the balanced start is one uniform point; the grid needs none
+            draws = 1
+        cover = geo.triangle_cover(region, cover_method, expected_points=draws) if eff > 0 else geo.triangle_cover(None)
         out.append(PreparedStratum(key, label, g, area, region, eff, cover, int(n), ids))
     return PreparedFrame(tuple(out), tuple(warnings), tuple(skipped), tuple(repaired))
 

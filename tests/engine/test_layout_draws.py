@@ -63,16 +63,19 @@ def chisquare_counts(points, xs, ys, share):
 
 
 @pytest.mark.slow
-@pytest.mark.parametrize("design", [L.SIMPLE_RANDOM, L.SYSTEMATIC_GRID, L.SPATIALLY_BALANCED])
-def test_inclusion_is_uniform_over_seeds(stratum, design):
+@pytest.mark.parametrize(
+    "design, cover",
+    [(L.SIMPLE_RANDOM, "delaunay"), (L.SIMPLE_RANDOM, "bbox"), (L.SYSTEMATIC_GRID, "auto"), (L.SPATIALLY_BALANCED, "delaunay")],
+)
+def test_inclusion_is_uniform_over_seeds(stratum, design, cover):
     spec = L.LayoutSpec(design=design)
-    frame = L.prepare_strata([stratum], n_units=12, spec=spec)
+    frame = L.prepare_strata([stratum], n_units=12, spec=spec, cover_method=cover)
     pts = np.concatenate(
         [L.draw_layout(frame, spec, np.random.default_rng(seed)).centres for seed in range(1, SEEDS + 1)]
     )
     xs, ys, share = cell_expected(stratum)
     res = chisquare_counts(pts, xs, ys, share)
-    print(f"{L.DESIGNS[design]}: {len(pts)} units, chi-square p = {res.pvalue:.4f}")
+    print(f"{L.DESIGNS[design]} ({cover} cover): {len(pts)} units, chi-square p = {res.pvalue:.4f}")
     assert res.pvalue > 0.001  # scipy.stats.chisquare, uniform inclusion
 
 

@@ -1,0 +1,139 @@
+"""Speed of plotwise:layout, run on demand (not collected by pytest).
+
+    .venv/bin/python tests/benchmarks/bench_layout.py
+
+1. 10,000 simple-random points in one 50,000-vertex polygon: the whole plotwise:layout run
+   against the host's own native:randompointsinpolygons on the same input, both writing to a
+   memory layer. Target: at most 0.1 x the host's time.
+2. 1,000 spatially balanced units with 200 reserves over a 300 km² multipart frame with 8
+   strata: engine and whole algorithm. Target: under 2 s.
+"""
+import os
+import sys
+import time
+from pathlib import Path
+
+os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
+REPO = Path(__file__).resolve().parents[2]
+sys.path.insert(0, str(REPO / "tests"))
+sys.path.append("/usr/share/qgis/python/plugins")
+import conftest  # noqa: E402,F401  (registers the package as plotwise)
+import numpy as np  # noqa: E402
+from shapely.geometry import MultiPolygon, Polygon, box  # noqa: E402
+
+from plotwise.processing.engine import layout as L  # noqa: E402
+
+CRS = "EPSG:32736"
+X0, Y0 = 500_000.0, 9_000_000.0
+
+
+def big_polygon(vertices=50_000, radius=6_000.0, rugged=False):
+    """An irregular outline (invented) with 50,000 vertices, like a digitised reserve boundary.
+
+    ``rugged``: radial roughness at every scale (amplitudes ~ 1/k up to k = 5000), like a
+    coastline or a boundary digitised along streams. The outline is star-shaped, so valid.
+    """
+    t = np.linspace(0, 2 * np.pi, vertices, endpoint=False)
+    r = 1 + 0.25 * np.sin(3 * t) + 0.1 * np.cos(7 * t) + 0.03 * np.sin(41 * t) + 0.004 * np.sin(997 * t)
+    if rugged:
+        rng = np.random.default_rng(5)
+        k = np.arange(8, 5000)
+        amp = 0.15 / k * rng.standard_normal(k.size)
+        phase = rng.uniform(0, 2 * np.pi, k.size)
+        for chunk in range(0, k.size, 500):
+            kk, aa, pp = k[chunk:chunk + 500], amp[chunk:chunk + 500], phase[chunk:chunk + 500]
+            r = r + (aa[:, None] * np.sin(kk[:, None] * t[None, :] + pp[:, None])).sum(axis=0)
+        r = np.maximum(r, 0.2)
+    r = radius * r
+    return Polygon(np.c_[X0 + r * np.cos(t), Y0 + r * np.sin(t)])
+
+
+def eight_strata(total_km2=300.0):
+    """8 strata, each of two parts (a multipart frame), 300 km² in all."""
+    side = np.sqrt(total_km2 * 1e6 / 16)
+    strata = []
+    for h in range(8):
+        a = box(X0 + h * side, Y0, X0 + (h + 1) * side, Y0 + side)
+        b = box(X0 + h * side, Y0 + 2 * side, X0 + (h + 1) * side, Y0 + 3 * side)
+        strata.append(MultiPolygon([a, b]))
+    return strata
+
+
+def memory_layer(geometries, strata=None, n=None):
+    from qgis.core import QgsFeature, QgsGeometry, QgsVectorLayer
+
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer(f"MultiPolygon?crs={CRS}", "frame", "memory")
+    layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("n_alloc", "int")])
+    layer.updateFields()
+    features = []
+    for i, g in enumerate(geometries):
+        f = QgsFeature(layer.fields())
+        f.setGeometry(QgsGeometry.fromWkt(g.wkt))
+        f.setAttributes([strata[i] if strata else 1, n[i] if n else 0])
+        features.append(f)
+    layer.dataProvider().addFeatures(features)
+    return layer
+
+
+def timed(fn, repeat=3):
+    best = float("inf")
+    for _ in range(repeat):
+        t0 = time.perf_counter()
+        fn()
+        best = min(best, time.perf_counter() - t0)
+    return best
+
+
+def main():
+    from qgis.core import QgsApplication
+
+    app = QgsApplication([], False)
+    app.initQgis()
+    import processing
+    from processing.core.Processing import Processing
+
+    Processing.initialize()
+    from plotwise.processing.provider import PlotwiseProvider
+
+    provider = PlotwiseProvider()
+    QgsApplication.processingRegistry().addProvider(provider)
+
+    # 1. simple random points against the host
+    for rugged in (False, True):
+        poly = big_polygon(rugged=rugged)
+        assert poly.is_valid and len(poly.exterior.coords) == 50_001
+        layer = memory_layer([poly])
+        host = timed(lambda: processing.run("native:randompointsinpolygons", {
+            "INPUT": layer, "POINTS_NUMBER": 10_000, "MIN_DISTANCE": 0, "MIN_DISTANCE_GLOBAL": 0,
+            "MAX_TRIES_PER_POINT": 10, "SEED": 1, "INCLUDE_POLYGON_ATTRIBUTES": False, "OUTPUT": "memory:"}), repeat=1)
+        params = {"FRAME": layer, "N_UNITS": 10_000, "DESIGN": 0, "SHAPE": 0, "SIZE": 0.0, "INSIDE": False,
+                  "MIN_SPACING": 0.0, "RESERVE": 0, "SEED": 1, "OUTPUT": "memory:"}
+        ours = timed(lambda: processing.run("plotwise:layout", params))
+        spec = L.LayoutSpec(design=L.SIMPLE_RANDOM)
+        engine = timed(lambda: L.layout_units([poly], spec, np.random.default_rng(1), n_units=10_000, crs=CRS))
+        shape = "rugged" if rugged else "smooth"
+        print(f"10,000 simple-random points in one 50,000-vertex polygon ({shape} outline, "
+              f"{poly.area / poly.envelope.area:.0%} of its bounding box)")
+        print(f"  host native:randompointsinpolygons  {host:7.3f} s")
+        print(f"  plotwise:layout, whole run + report {ours:7.3f} s   ratio {ours / host:.3f} (target <= 0.1)")
+        print(f"  engine only                         {engine:7.3f} s")
+
+    # 2. balanced units with reserves over 8 strata
+    strata = eight_strata()
+    n = [125] * 8
+    spec = L.LayoutSpec(design=L.SPATIALLY_BALANCED, reserve=25)
+    engine = timed(lambda: L.layout_units(strata, spec, np.random.default_rng(2), strata=list(range(1, 9)), n_values=n, crs=CRS))
+    layer = memory_layer(strata, list(range(1, 9)), n)
+    whole = timed(lambda: processing.run("plotwise:layout", {
+        "FRAME": layer, "STRATUM_FIELD": "stratum", "N_FIELD": "n_alloc", "DESIGN": 2, "SHAPE": 1, "SIZE": 50.0,
+        "BEARING": -1, "INSIDE": True, "MIN_SPACING": 100.0, "RESERVE": 25, "SEED": 2, "OUTPUT": "memory:"}))
+    print("1,000 balanced units + 200 reserves, 300 km², 8 two-part strata")
+    print(f"  engine (points)                     {engine:7.3f} s   (target < 2 s)")
+    print(f"  whole algorithm (50 m squares inside, 100 m spacing, report) {whole:7.3f} s   (target < 2 s)")
+    app.exitQgis()
+
+
+if __name__ == "__main__":
+    main()
