@@ -29,8 +29,8 @@ gdal.UseExceptions()
 ogr.UseExceptions()
 osr.UseExceptions()
 
-#: cells per block: 4 Mi cells, about 32 MB per float64 covariate
-BLOCK_CELLS = 1 << 22
+#: cells per block: 1 Mi cells (8 MB per float64 covariate), small enough for the temporaries to stay in cache
+BLOCK_CELLS = 1 << 20
 #: rasters up to this many cells keep the frame mask in memory
 MEM_MASK_CELLS = 1 << 25
 
@@ -358,7 +358,7 @@ class StratumRaster:
 
     def __init__(self, path, grid):
         self.path = path
-        opts = ["COMPRESS=DEFLATE", "ZLEVEL=1", "TILED=YES", "BIGTIFF=IF_SAFER"]
+        opts = ["TILED=YES", "BIGTIFF=IF_SAFER"] + _fast_compression()
         self.ds = gdal.GetDriverByName("GTiff").Create(path, grid.width, grid.height, 1, gdal.GDT_Byte, opts)
         if self.ds is None:
             raise InputError("Cannot write the stratum raster '%s'." % path)
@@ -375,6 +375,14 @@ class StratumRaster:
             self.band.FlushCache()
             self.band = None
             self.ds = None
+
+
+def _fast_compression():
+    """ZSTD level 1 where GDAL has it (fastest and smallest for stratum ids), DEFLATE otherwise."""
+    options = gdal.GetDriverByName("GTiff").GetMetadataItem("DMD_CREATIONOPTIONLIST") or ""
+    if "ZSTD" in options:
+        return ["COMPRESS=ZSTD", "ZSTD_LEVEL=1"]
+    return ["COMPRESS=DEFLATE", "ZLEVEL=1"]
 
 
 def _gdal_callback(progress):

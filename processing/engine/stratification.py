@@ -27,7 +27,7 @@ raster classes
 A cell with no value in any covariate is left out. Strata are numbered 1..k by
 increasing mean of the first covariate; 0 means "no stratum".
 """
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, replace
 import math
 
 import numpy as np
@@ -252,8 +252,10 @@ def histogram_class_index(v, lo, hi, bins):
     """
     dt = v.dtype
     scale = dt.type(bins / (hi - lo)) if hi > lo else dt.type(0)
-    t = (v - dt.type(lo)) * scale
-    np.clip(t, 0, bins - 1, out=t)
+    t = np.subtract(v, dt.type(lo))
+    t *= scale
+    np.minimum(t, dt.type(bins - 1), out=t)
+    np.maximum(t, dt.type(0), out=t)
     return t.astype(np.intp)
 
 
@@ -571,8 +573,10 @@ class ThresholdRule:
     def n_strata(self):
         return len(self.boundaries) + 1
 
-    def assign(self, block):
-        v = _column(block, self.covariate)
+    def assign(self, columns):
+        """Stratum id per valid cell; ``columns`` holds each covariate's valid cells."""
+        v = columns[self.covariate]
+        v = v.astype(_work_dtype(v.dtype), copy=False)
         if len(self.boundaries) <= 16:
             ids = np.ones(v.size, np.uint8)
             for b in self.boundaries:
@@ -606,15 +610,16 @@ class NearestCentreRule:
     def n_strata(self):
         return self.centres.shape[0]
 
-    def assign(self, block):
-        n = int(np.count_nonzero(block.valid))
+    def assign(self, columns):
+        """Stratum id per valid cell; ``columns`` holds each covariate's valid cells."""
+        n = columns[0].size
         best = np.full(n, np.inf)
         ids = np.ones(n, np.uint8)
+        z = [(col.astype(np.float64) - m) / sd for col, m, sd in zip(columns, self.mean, self.sd)]
         for j, c in enumerate(self.centres):
             d2 = np.zeros(n)
-            for d in range(len(block.values)):
-                z = (block.values[d][block.valid].astype(np.float64) - self.mean[d]) / self.sd[d]
-                d2 += np.square(z - c[d])
+            for d in range(len(z)):
+                d2 += np.square(z[d] - c[d])
             closer = d2 < best
             best[closer] = d2[closer]
             ids[closer] = j + 1
@@ -632,8 +637,9 @@ class ClassRule:
     def n_strata(self):
         return len(self.classes)
 
-    def assign(self, block):
-        v = block.values[self.covariate][block.valid]
+    def assign(self, columns):
+        """Stratum id per valid cell; ``columns`` holds each covariate's valid cells."""
+        v = columns[self.covariate]
         return (np.searchsorted(self.classes, v) + 1).astype(np.uint8)
 
 
@@ -697,12 +703,13 @@ class StratumStatistics:
                                  self.chart_range, self.chart_counts[o], self.cells_in_frame)
 
 
-def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, chart_range=None, progress=None):
+def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, chart_range=None,
+                          extremes=True, progress=None):
     """One pass: assign cells to strata (if ``rule``) or read ``block.strata``, and sum up.
 
-    Per stratum h and covariate x: N_h, sum(x - c), sum((x - c)^2), min, max,
-    with c = ``shift`` close to the covariate's mean so that
-    ``S_h^2 = sum((x-c)^2)/N_h - (sum(x-c)/N_h)^2`` keeps its precision.
+    Per stratum h and covariate x: N_h, sum(x - c), sum((x - c)^2) and, with
+    ``extremes``, min and max; c = ``shift`` is close to the covariate's mean so
+    that ``S_h^2 = sum((x-c)^2)/N_h - (sum(x-c)/N_h)^2`` keeps its precision.
 
     Parameters
     ----------
@@ -712,6 +719,9 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
         Receives each block's stratum ids (uint8/uint16, 0 = no stratum).
     chart_range : (lo, hi), optional
         Range of the per-stratum histogram of the first covariate.
+    extremes : bool
+        Also track each stratum's minimum and maximum (NaN otherwise). Threshold
+        strata are bounded by their boundaries, so the quantile path skips it.
 
     Returns
     -------
@@ -729,9 +739,35 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
             s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
             mn, mx = np.full((ncov, k + 1), np.inf), np.full((ncov, k + 1), -np.inf)
             shift = np.zeros(ncov) if shift is None else np.asarray(shift, float)
-        has_cells = bool(block.valid.any())
+        cols = [v[block.valid] for v in block.values]
+        nested = (isinstance(rule, ThresholdRule) and len(rule.boundaries) <= 16 and not extremes
+                  and chart_range is None)
+        if nested and cols[0].size:
+            # threshold strata are nested upper sets {x >= b_j}: sums over them by masked
+            # reductions, then differences (cheaper than bincount on long runs of equal ids)
+            v = cols[rule.covariate].astype(_work_dtype(cols[rule.covariate].dtype), copy=False)
+            upper = [v >= exact_threshold(b, v.dtype) for b in rule.boundaries]
+            ids = np.ones(v.size, np.uint8)
+            for m in upper:
+                ids += m
+            if write is not None:
+                full = np.zeros(block.valid.shape, np.uint8)
+                full[block.valid] = ids
+                write(block.window, full)
+            n_ge = np.array([v.size] + [np.count_nonzero(m) for m in upper] + [0])
+            count[1:] += n_ge[:-1] - n_ge[1:]
+            for c in range(ncov):
+                x = cols[c].astype(np.float64)
+                x -= shift[c]
+                x2 = x * x
+                a = np.array([x.sum()] + [np.sum(x, where=m) for m in upper] + [0.0])
+                b = np.array([x2.sum()] + [np.sum(x2, where=m) for m in upper] + [0.0])
+                s1[c, 1:] += a[:-1] - a[1:]
+                s2[c, 1:] += b[:-1] - b[1:]
+            _tick(progress, i, source.n_blocks)
+            continue
         if rule is not None:
-            ids = rule.assign(block) if has_cells else np.zeros(0, np.uint8)
+            ids = rule.assign(cols) if cols[0].size else np.zeros(0, np.uint8)
             if write is not None:
                 full = np.zeros(block.valid.shape, ids.dtype)
                 full[block.valid] = ids
@@ -740,17 +776,20 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
             ids = block.strata[block.valid]
             if ids.size and ids.max() > k:
                 raise ValueError("stratum raster holds ids beyond n_strata")
-        if ids.size:
-            per = np.bincount(ids, minlength=k + 1)
-            count += per
-            present = np.flatnonzero(per)
-            if present.size > 1:
-                order = np.argsort(ids, kind="stable")  # radix sort for small integer ids
-                starts = np.concatenate([[0], np.cumsum(per[present])[:-1]])
-            for c in range(ncov):
-                x = block.values[c][block.valid].astype(np.float64) - shift[c]
-                s1[c] += np.bincount(ids, weights=x, minlength=k + 1)
-                s2[c] += np.bincount(ids, weights=x * x, minlength=k + 1)
+        if ids.size == 0:
+            _tick(progress, i, source.n_blocks)
+            continue
+        ids = ids.astype(np.intp)
+        per = np.bincount(ids, minlength=k + 1)
+        count += per
+        present = np.flatnonzero(per)
+        if extremes and present.size > 1:
+            order = np.argsort(ids.astype(np.uint16), kind="stable")  # radix sort for small integer ids
+            starts = np.concatenate([[0], np.cumsum(per[present])[:-1]])
+        for c in range(ncov):
+            x = cols[c].astype(np.float64)
+            x -= shift[c]
+            if extremes:
                 if present.size == 1:
                     h = present[0]
                     mn[c, h] = min(mn[c, h], x.min())
@@ -759,11 +798,18 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
                     xs = x[order]
                     mn[c, present] = np.minimum(mn[c, present], np.minimum.reduceat(xs, starts))
                     mx[c, present] = np.maximum(mx[c, present], np.maximum.reduceat(xs, starts))
-            if chart_range is not None:
-                v0 = _column(block, 0)
-                cls = histogram_class_index(v0, chart_range[0], chart_range[1], CHART_BINS)
-                cls += ids * CHART_BINS
-                chart += np.bincount(cls, minlength=(k + 1) * CHART_BINS)
+            s1[c] += np.bincount(ids, weights=x, minlength=k + 1)
+            x *= x
+            s2[c] += np.bincount(ids, weights=x, minlength=k + 1)
+        if chart_range is not None:
+            v0 = cols[0].astype(_work_dtype(cols[0].dtype), copy=False)
+            cls = histogram_class_index(v0, chart_range[0], chart_range[1], CHART_BINS)
+            if present.size > 1:
+                ids *= CHART_BINS
+                cls += ids
+            else:
+                cls += present[0] * CHART_BINS
+            chart += np.bincount(cls, minlength=(k + 1) * CHART_BINS)
         _tick(progress, i, source.n_blocks)
     if s1 is None:
         raise InputError("The frame holds no raster cell.")
@@ -771,8 +817,9 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
         n = count[1:].astype(float)
         m = s1[:, 1:] / n
         var = np.maximum(s2[:, 1:] / n - m**2, 0.0)
-    return StratumStatistics(count[1:], (m + shift[:, None]).T, np.sqrt(var).T,
-                             (mn[:, 1:] + shift[:, None]).T, (mx[:, 1:] + shift[:, None]).T,
+        lo = np.where(np.isfinite(mn[:, 1:]), mn[:, 1:] + shift[:, None], np.nan)
+        hi = np.where(np.isfinite(mx[:, 1:]), mx[:, 1:] + shift[:, None], np.nan)
+    return StratumStatistics(count[1:], (m + shift[:, None]).T, np.sqrt(var).T, lo.T, hi.T,
                              tuple(chart_range) if chart_range is not None else (math.nan, math.nan),
                              chart.reshape(k + 1, CHART_BINS)[1:], frame)
 
@@ -814,6 +861,7 @@ class Stratification:
     cells_valid: int
     n_distinct: int
     sample_size: int
+    value_range: tuple
     kmeans: KMeansFit = None
     warnings: tuple = field(default_factory=tuple)
 
@@ -842,7 +890,7 @@ class Stratification:
         k = statistics.n_strata
         prov = self.provisional if provisional is None else np.asarray(provisional)
         return Stratification(self.method, self.rule, self.boundaries, statistics, np.arange(k + 1),
-                              prov, statistics.total, self.n_distinct, self.sample_size,
+                              prov, statistics.total, self.n_distinct, self.sample_size, self.value_range,
                               self.kmeans, self.warnings)
 
 
@@ -978,13 +1026,33 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         rule = ClassRule(np.asarray(classes))
 
     k = rule.n_strata
-    stats = accumulate_statistics(source, k, rule, write, shift, (vmin, vmax), scaled_progress(progress, 0.55, 1.0))
+    threshold = isinstance(rule, ThresholdRule)
+    stats = accumulate_statistics(source, k, rule, write, shift, None if threshold else (vmin, vmax),
+                                  extremes=not threshold, progress=scaled_progress(progress, 0.55, 1.0))
+    if threshold:
+        stats = replace(stats, chart_range=(vmin, vmax), chart_counts=chart_from_histogram(hist, rule.boundaries,
+                                                                                           (vmin, vmax)))
     lut, order = stratum_order(stats)
     dropped = k - order.size
     if dropped:
         warnings.append("%d of the %d strata hold no cell and were dropped." % (dropped, k))
     return Stratification(method, rule, None if boundaries is None else rule.boundaries, stats.reordered(order),
-                          lut, order, int(stats.total), int(n_distinct), int(sample_n), kfit, tuple(warnings))
+                          lut, order, int(stats.total), int(n_distinct), int(sample_n), (float(vmin), float(vmax)),
+                          kfit, tuple(warnings))
+
+
+def chart_from_histogram(hist, boundaries, value_range, bins=CHART_BINS):
+    """(k, bins) counts for the report's histogram, re-binned from a fine histogram.
+
+    Each fine class goes whole to the chart class and the stratum of its centre,
+    so the split at a boundary is exact to one fine class (1/64,000 of the range);
+    the chart is for display only.
+    """
+    centres = 0.5 * (hist.edges[:-1] + hist.edges[1:])
+    cls = histogram_class_index(centres, value_range[0], value_range[1], bins)
+    h = np.searchsorted(np.asarray(boundaries, float), centres, side="right")
+    k = len(boundaries) + 1
+    return np.bincount(h * bins + cls, weights=hist.counts, minlength=k * bins).reshape(k, bins).astype(np.int64)
 
 
 # ---------------------------------------------------------------------------
@@ -1011,11 +1079,13 @@ def format_covariate_value(x, decimals):
 def stratum_ranges(result):
     """(lower, upper) of the first covariate per final stratum for threshold methods.
 
-    The nominal boundaries, with the covariate's minimum and maximum at the ends.
+    The nominal boundaries, with the covariate's minimum and maximum at the ends
+    (after sieving, a stratum also holds the merged patches' cells outside its range).
     """
     st = result.statistics
     b = np.asarray(result.rule.boundaries, float)
-    edges = np.concatenate([[np.nanmin(st.minimum[:, 0])], b, [np.nanmax(st.maximum[:, 0])]])
+    lo, hi = result.value_range  # the first covariate's exact range over the valid cells
+    edges = np.concatenate([[lo], b, [hi]])
     p = np.asarray(result.provisional)
     return edges[p], edges[p + 1]
 
