@@ -163,9 +163,11 @@ def step_allocate(demo):
         "METHOD": 2, "TOTAL": 60, "UNIT_AREA": 10000.0, "MIN_PER_STRATUM": 2,
         "OUTPUT": demo.table("strata_allocated"), "REPORT": demo.report("05_allocation"),
     }
-    pilot = (demo.results.get("pilot") or {}).get("estimate")
+    # the pilot step's estimate results, stored as results["pilot"] or results["pilot"]["estimate"]
+    pilot = demo.results.get("pilot") or {}
+    pilot = pilot.get("estimate", pilot)
     results = None
-    if pilot is not None:
+    if pilot.get("OUTPUT") is not None:
         # SDs and means from the pilot survey's estimate (the polygon areas are used)
         try:
             results = demo.run("plotwise:allocate", {
