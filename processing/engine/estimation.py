@@ -234,6 +234,22 @@ def stratum_label(value):
     return text if text else None
 
 
+def stratum_labels(values):
+    """Distinct :func:`stratum_label` values and, per unit, the index of its own.
+
+    The labels are computed once per distinct value (ids repeat over thousands of
+    units). Two distinct values may share a label (``3`` and ``3.0``).
+
+    Returns
+    -------
+    (numpy.ndarray of object, numpy.ndarray of int)
+    """
+    values = np.asarray(values, dtype=object).ravel()
+    _, first, inverse = np.unique(values.astype(str), return_index=True, return_inverse=True)
+    labels = np.array([stratum_label(values[i]) for i in first] + [None], dtype=object)[:-1]
+    return labels, inverse.ravel()
+
+
 def natural_key(label):
     """Sort key putting numeric ids in numeric order, then text ids."""
     try:
@@ -264,18 +280,19 @@ def read_counts(counts, unit_ids, count_name="count"):
         bad = np.zeros(values.size, dtype=bool)
     else:
         raw = raw.astype(object).ravel()
-        values = np.full(raw.size, np.nan)
-        bad = np.zeros(raw.size, dtype=bool)
-        for i, v in enumerate(raw):  # object input only (host lists): one pass to parse
-            if v is None:
-                continue
-            if isinstance(v, (bool, np.bool_)):
-                values[i] = float(v)
-                continue
-            try:
-                values[i] = float(v)
-            except (TypeError, ValueError):
-                bad[i] = True
+        empty = np.equal(raw, None)
+        filled = np.where(empty, np.nan, raw)
+        try:
+            values = filled.astype(float)  # numbers and numeric text, in one vectorised pass
+            bad = np.zeros(raw.size, dtype=bool)
+        except (TypeError, ValueError):
+            values = np.full(raw.size, np.nan)
+            bad = np.zeros(raw.size, dtype=bool)
+            for i in np.flatnonzero(~empty):  # only to find the offending values
+                try:
+                    values[i] = float(raw[i])
+                except (TypeError, ValueError):
+                    bad[i] = True
     if bad.any():
         ids = unit_ids[bad]
         raise InputError(
@@ -395,7 +412,7 @@ def estimate_density(
     a_all = np.asarray(unit_areas, dtype=float).ravel()
     if y_all.size != n_all or a_all.size != n_all:
         raise InputError("counts, unit_areas and strata must have one value per unit.")
-    labels_all = np.array([stratum_label(s) for s in strata_in], dtype=object)
+    unique_labels, label_index = stratum_labels(strata_in)
     frame = {}
     for key, area in dict(stratum_areas).items():
         label = stratum_label(key)
@@ -407,16 +424,17 @@ def estimate_density(
         )
 
     # units that belong to no stratum of the frame
-    no_stratum = np.array([lab is None for lab in labels_all], dtype=bool)
+    no_stratum = np.equal(unique_labels, None)[label_index]
     if no_stratum.any():
         raise InputError(
             f"Units {_id_list(ids[no_stratum])} have no stratum (the stratum field is empty). Fill in their "
             "stratum, or leave the stratum field out to treat the frame as one stratum.",
             ids=ids[no_stratum],
         )
-    unknown = np.array([lab not in frame for lab in labels_all], dtype=bool)
+    unknown_labels = np.array([lab not in frame for lab in unique_labels], dtype=bool)
+    unknown = unknown_labels[label_index]
     if unknown.any():
-        names = sorted({str(lab) for lab in labels_all[unknown]}, key=natural_key)
+        names = sorted((str(lab) for lab in unique_labels[unknown_labels]), key=natural_key)
         raise InputError(
             f"Units {_id_list(ids[unknown])} have stratum ids ({_id_list(names)}) that are not in the strata layer. "
             "Check the stratum field of the units and the id field of the strata layer.",
@@ -430,6 +448,11 @@ def estimate_density(
             f"{_id_list(ids[missing])}."
         )
     surveyed = ~missing
+    if not surveyed.any():
+        raise InputError(
+            "No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units "
+            "(0 when none was seen) in the count field."
+        )
     bad_units = surveyed & ~(np.isfinite(a_all) & (a_all > 0))
     if bad_units.any():
         raise InputError(
@@ -456,12 +479,12 @@ def estimate_density(
 
     all_labels = sorted(frame, key=natural_key)
     n_per = {lab: 0 for lab in all_labels}
-    for lab, cnt in zip(*np.unique(labels_all[surveyed].astype(str), return_counts=True)):
-        n_per[lab] = int(cnt)
     missing_per = {lab: 0 for lab in all_labels}
-    if missing.any():
-        for lab, cnt in zip(*np.unique(labels_all[missing].astype(str), return_counts=True)):
-            missing_per[lab] = int(cnt)
+    surveyed_per_label = np.bincount(label_index[surveyed], minlength=unique_labels.size)
+    missing_per_label = np.bincount(label_index[missing], minlength=unique_labels.size)
+    for lab, n_s, n_m in zip(unique_labels, surveyed_per_label, missing_per_label):  # distinct ids only
+        n_per[lab] += int(n_s)
+        missing_per[lab] += int(n_m)
     empty = [lab for lab in all_labels if n_per[lab] == 0]
     dropped_area = 0.0
     if empty:
@@ -481,8 +504,9 @@ def estimate_density(
     n_strata = len(labels)
     code_of = {lab: h for h, lab in enumerate(labels)}
 
-    keep = surveyed & np.array([lab in code_of for lab in labels_all], dtype=bool)
-    code = np.array([code_of[lab] for lab in labels_all[keep]], dtype=int)
+    code_all = np.array([code_of.get(lab, -1) for lab in unique_labels], dtype=int)[label_index]
+    keep = surveyed & (code_all >= 0)
+    code = code_all[keep]
     y = y_all[keep]
     a = a_all[keep]
     xy = None

@@ -302,3 +302,10 @@ def test_unit_without_stratum_is_an_error():
     with pytest.raises(InputError) as err:
         est.estimate_density([1.0, 2.0, 3.0], [1, 1, 1], [1, None, 1], {1: 5}, unit_ids=["a", "b", "c"])
     assert err.value.ids == ["b"] and "no stratum" in err.value.message
+
+
+def test_no_count_at_all_is_an_error():
+    with pytest.raises(InputError):
+        est.estimate_density([None, None], [1, 1], [1, 1], {1: 5})
+    with pytest.raises(InputError):
+        est.estimate_density([], [], [], {1: 5})
