@@ -581,7 +581,7 @@ def allocate(
         _, shown = _listing(ids, n == 1)
         warnings.append(f"Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.")
     x_at_cap = np.isclose(x, upper) & (upper > lower)
-    if method != "equal" and np.any(x_at_cap):
+    if np.any(x_at_cap):
         _, shown = _listing(ids, x_at_cap)
         warnings.append(f"Stratum feature(s) {shown} are sampled completely (every unit that fits).")
     precision = expected_precision(n, area, unit_area, s, m, fpc)
