@@ -43,7 +43,7 @@ p{{margin:6px 0 10px;overflow-wrap:anywhere}}
 table{{border-collapse:collapse;font-size:13px;min-width:40%}}
 caption{{text-align:left;color:{MUTED};font-size:12px;padding:2px 0}}
 th,td{{border-bottom:1px solid {RULE};padding:4px 9px;text-align:left;vertical-align:top;overflow-wrap:anywhere}}
-th{{background:#edf2f1;font-weight:bold}}
+th{{background:#edf2f1;font-weight:bold;overflow-wrap:normal}}
 td.num{{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}}
 figure{{margin:10px 0 18px;max-width:100%}}
 figure svg{{max-width:100%;height:auto;display:block;border:1px solid {RULE};background:#fff}}

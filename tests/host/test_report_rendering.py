@@ -1,0 +1,400 @@
+"""Every report the algorithms write, rendered in headless Chromium (Debian ``chromium``).
+
+How it is checked, and why this way:
+
+* **Reports come from real runs.** A small invented chain runs through the host's
+  Processing framework (demo reserve → frame; strata → allocation → layout → simulated
+  counts → estimate). Every provider algorithm with a ``REPORT`` output must be in the chain.
+* **No external request, two ways.**
+  1. A static scan of the written HTML and of the DOM as Chromium parsed it
+     (``--dump-dom``): no script, link, iframe, object, embed or base element, and every
+     ``src``/``href``/``xlink:href``/``srcset``/``action``/``poster``/``data`` attribute and
+     every CSS ``url(...)`` or ``@import`` points inside the document (``#fragment`` or
+     ``data:``).
+  2. Chromium's own network log (``--log-net-log``) while it renders each report, with
+     ``--host-resolver-rules="MAP * ~NOTFOUND"`` so that nothing can leave the machine even
+     if a request were made. Chromium makes background requests of its own (updates,
+     accounts); those carry the initiator "not an origin". A request from the page carries
+     the page's initiator and a ``file://`` network isolation key; there must be none. A canary
+     page with an external image proves that such a request is seen.
+* **Nothing overflows its width at 1,024 px.** Nothing is injected into a report. A
+  wrapper page (the test's own, with a measuring script) holds each report unchanged in an
+  ``<iframe srcdoc>`` exactly 1,024 px wide; ``srcdoc`` frames share the wrapper's origin, so
+  the script can read their layout. For every element it checks that the right edge lies
+  within the frame's width, and that no element with clipped or scrolled overflow (such as
+  the horizontal scroller around a wide table) is wider inside than its box. The document's
+  ``scrollWidth`` must equal its ``clientWidth``. The result is written into the wrapper's DOM
+  and read with ``--dump-dom``. A canary frame with a 1,200 px wide block proves the
+  measurement sees an overflow.
+* **PNG at 1,024 px.** Each report is screenshotted at 1,024 px wide and its full
+  measured height; the PNG must have that width and must not be blank.
+
+Set ``PLOTWISE_REPORT_PNG`` to a folder to keep the PNGs.
+"""
+import html
+import html.parser
+import json
+import math
+import os
+import re
+import shutil
+import subprocess
+from pathlib import Path
+
+import numpy as np
+import pytest
+
+CHROMIUM = shutil.which("chromium")
+pytestmark = pytest.mark.skipif(
+    CHROMIUM is None, reason="Debian's chromium is not installed (`make setup` installs it)"
+)
+WIDTH = 1024
+MAX_HEIGHT = 16000
+HOSTILE_NAME = """<script>alert("x")</script> & 'q'"""
+HOSTILE_VALUE = """<img src=x onerror="alert(1)"> "s" & 'v'"""
+
+STRATA_ROWS = [  # stratum, area_ha (nominal), cov_sd, polygon (EPSG:32736, invented)
+    (1, 600.0, 12.0, "POLYGON((500000 9000000, 503000 9000000, 503000 9002000, 500000 9002000, 500000 9000000))"),
+    (2, 200.0, 30.0, "POLYGON((503000 9000000, 505000 9000000, 505000 9001000, 503000 9001000, 503000 9000000))"),
+    (3, 150.0, 45.0, "POLYGON((503000 9001000, 505000 9001000, 504000 9002500, 503000 9001000))"),
+]
+
+
+# -- Chromium ------------------------------------------------------------------------
+def chromium(tmp_path, *arguments, net_log=None, timeout=90):
+    """Run headless Chromium with a fresh profile; return its stdout."""
+    profile = tmp_path / f"profile-{len(list(tmp_path.glob('profile-*')))}"
+    command = [
+        CHROMIUM, "--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
+        "--disable-background-networking", "--disable-component-update", "--disable-sync",
+        "--disable-extensions", "--hide-scrollbars", "--mute-audio", f"--user-data-dir={profile}",
+        "--host-resolver-rules=MAP * ~NOTFOUND",
+    ]
+    if net_log is not None:
+        command.append(f"--log-net-log={net_log}")
+    completed = subprocess.run(command + list(arguments), capture_output=True, text=True, timeout=timeout)
+    assert completed.returncode == 0, completed.stderr[-2000:]
+    return completed.stdout
+
+
+def page_requests(net_log):
+    """URLs the page itself asked the network for (not Chromium's own background requests)."""
+    with open(net_log, encoding="utf-8") as handle:
+        text = handle.read()
+    try:
+        log = json.loads(text)
+    except json.JSONDecodeError:  # a log cut short at exit lacks its closing brackets
+        log = json.loads(text.rstrip().rstrip(",") + "]}")
+    start_job = log["constants"]["logEventTypes"]["URL_REQUEST_START_JOB"]
+    urls = []
+    for event in log["events"]:
+        params = event.get("params") or {}
+        if event.get("type") != start_job or "url" not in params:
+            continue
+        from_page = params.get("initiator") != "not an origin" or "file://" in params.get("network_isolation_key", "")
+        if from_page:
+            urls.append(params["url"])
+    return urls
+
+
+MEASURE = """
+function measure(doc, width) {
+  var problems = [], all = doc.querySelectorAll('*');
+  for (var i = 0; i < all.length; i++) {
+    var el = all[i], box = el.getBoundingClientRect(), name = el.tagName.toLowerCase() +
+        (el.className && el.className.baseVal === undefined ? '.' + el.className : '');
+    if (box.width > 0 && box.right > width + 1) problems.push(name + ' ends at ' + Math.round(box.right) + ' px');
+    var overflow = getComputedStyle(el).overflowX;
+    if (overflow !== 'visible' && el.clientWidth > 0 && el.scrollWidth > el.clientWidth + 1)
+      problems.push(name + ' scrolls: ' + el.scrollWidth + ' px inside ' + el.clientWidth + ' px');
+    if (problems.length > 12) break;
+  }
+  var root = doc.documentElement;
+  return {clientWidth: root.clientWidth, scrollWidth: root.scrollWidth, height: root.scrollHeight, problems: problems};
+}
+window.addEventListener('load', function () {
+  var out = {}, frames = document.querySelectorAll('iframe');
+  for (var i = 0; i < frames.length; i++) out[frames[i].id] = measure(frames[i].contentDocument, WIDTH);
+  document.getElementById('result').textContent = JSON.stringify(out);
+});
+"""
+
+
+def measure_reports(tmp_path, documents):
+    """``{name: measurement}`` for each HTML text in ``documents`` rendered in a 1,024 px frame."""
+    frames = "".join(
+        f'<iframe id="{html.escape(name)}" srcdoc="{html.escape(text, quote=True)}"></iframe>'
+        for name, text in documents.items()
+    )
+    wrapper = tmp_path / "measure.html"
+    wrapper.write_text(
+        '<!DOCTYPE html><html><head><meta charset="utf-8"><style>body{margin:0}'
+        f"iframe{{display:block;border:0;width:{WIDTH}px;height:800px}}</style></head><body>"
+        f'<pre id="result"></pre>{frames}<script>var WIDTH = {WIDTH};{MEASURE}</script></body></html>',
+        encoding="utf-8",
+    )
+    net_log = tmp_path / "measure-net.json"
+    dom = chromium(tmp_path, f"--window-size={WIDTH + 80},900", "--virtual-time-budget=10000", "--dump-dom",
+                   wrapper.as_uri(), net_log=net_log)
+    found = re.search(r'<pre id="result">(.*?)</pre>', dom, re.S)
+    assert found and found.group(1), "the measuring script did not run"
+    return json.loads(html.unescape(found.group(1))), page_requests(net_log)
+
+
+# -- static scan ---------------------------------------------------------------------
+class ExternalReferences(html.parser.HTMLParser):
+    """Elements and attributes that could load something from outside the document."""
+
+    FORBIDDEN_TAGS = {"script", "link", "iframe", "frame", "object", "embed", "base", "applet", "audio", "video", "source"}
+    URL_ATTRIBUTES = {"src", "href", "xlink:href", "srcset", "action", "formaction", "poster", "data", "background", "manifest"}
+
+    def __init__(self):
+        super().__init__(convert_charrefs=True)
+        self.problems, self.text, self._in_style = [], [], False
+
+    @staticmethod
+    def internal(value):
+        value = (value or "").strip()
+        return value.startswith("#") or value.startswith("data:")
+
+    def css(self, text, where):
+        for target in re.findall(r"url\(\s*['\"]?([^'\")]*)", text, re.I):
+            if not self.internal(target):
+                self.problems.append(f"{where}: url({target})")
+        if re.search(r"@import", text, re.I):
+            self.problems.append(f"{where}: @import")
+
+    def handle_starttag(self, tag, attrs):
+        if tag in self.FORBIDDEN_TAGS:
+            self.problems.append(f"<{tag}>")
+        for name, value in attrs:
+            if name in self.URL_ATTRIBUTES and not self.internal(value):
+                self.problems.append(f"<{tag} {name}={value!r}>")
+            if name == "style":
+                self.css(value or "", f"<{tag} style>")
+            if name.startswith("on"):
+                self.problems.append(f"<{tag} {name}> (event handler)")
+        self._in_style = tag == "style"
+
+    def handle_endtag(self, tag):
+        self._in_style = False
+
+    def handle_data(self, data):
+        if self._in_style:
+            self.css(data, "<style>")
+        self.text.append(data)
+
+
+def scan(markup):
+    parser = ExternalReferences()
+    parser.feed(markup)
+    parser.close()
+    return parser
+
+
+# -- the chain -----------------------------------------------------------------------
+def memory_layer(geometry, name, fields, rows, wkts, crs="EPSG:32736"):
+    from qgis.core import QgsFeature, QgsGeometry, QgsVectorLayer
+
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer(f"{geometry}?crs={crs}", name, "memory")
+    layer.dataProvider().addAttributes([compat.make_field(n, k) for n, k in fields])
+    layer.updateFields()
+    features = []
+    for row, wkt in zip(rows, wkts):
+        feature = QgsFeature(layer.fields())
+        feature.setAttributes(list(row))
+        feature.setGeometry(QgsGeometry.fromWkt(wkt))
+        features.append(feature)
+    layer.dataProvider().addFeatures(features)
+    return layer
+
+
+def strata_layer(name="strata", labels=None):
+    kind = "string" if labels else "int"
+    rows = [[labels[i] if labels else s, a, sd] for i, (s, a, sd, _) in enumerate(STRATA_ROWS)]
+    return memory_layer("Polygon", name, [("stratum", kind), ("area_ha", "double"), ("cov_sd", "double")],
+                        rows, [w for *_, w in STRATA_ROWS])
+
+
+def animals_layer(seed=7, n=900):
+    """Invented animals, denser in the east, drawn with numpy inside the strata's bounding box."""
+    rng = np.random.default_rng(seed)
+    x = 500000 + 5000 * rng.beta(2.0, 1.2, n)
+    y = 9000000 + 2500 * rng.random(n)
+    return memory_layer("Point", "animals", [("animal_id", "int")], [[i + 1] for i in range(n)],
+                        [f"POINT({a} {b})" for a, b in zip(x, y)])
+
+
+def output_layer(value):
+    if not isinstance(value, str):
+        return value
+    from qgis.core import QgsProcessingContext, QgsProcessingUtils
+
+    return QgsProcessingUtils.mapLayerFromString(value, QgsProcessingContext())
+
+
+def run_chain(folder, demo_reserve_outputs, strata=None, study_name="study area", units_name=None):
+    """Run every reporting algorithm on small inputs; return ``{algorithm id: report path}``."""
+    import processing
+    from qgis.core import QgsVectorLayer
+
+    reports = {"plotwise:demoreserve": demo_reserve_outputs["REPORT"]}
+
+    def report(name):
+        return str(folder / f"{name}.html")
+
+    study = QgsVectorLayer(demo_reserve_outputs["OUTPUT_AREA"], study_name, "ogr")
+    excluded = QgsVectorLayer(demo_reserve_outputs["OUTPUT_EXCLUDED"], "excluded", "ogr")
+    frame = processing.run("plotwise:buildframe", {
+        "INPUT": study, "EXCLUDE": excluded, "EDGE_BUFFER": 50.0, "OUTPUT": "memory:",
+        "REPORT": report("buildframe"),
+    })
+    reports["plotwise:buildframe"] = frame["REPORT"]
+
+    allocated = processing.run("plotwise:allocate", {
+        "STRATA": strata or strata_layer(), "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha",
+        "METHOD": 2, "TOTAL": 24, "UNIT_AREA": 10000.0, "MIN_PER_STRATUM": 3,
+        "OUTPUT": "memory:", "REPORT": report("allocate"),
+    })
+    reports["plotwise:allocate"] = allocated["REPORT"]
+
+    layout = processing.run("plotwise:layout", {
+        "FRAME": output_layer(allocated["OUTPUT"]), "STRATUM_FIELD": "stratum", "N_FIELD": "n_alloc",
+        "N_UNITS": 0, "DESIGN": 2, "SHAPE": 2, "SIZE": 56.5, "BEARING": -1.0, "INSIDE": True,
+        "MIN_SPACING": 50.0, "RESERVE": 2, "SEED": 123, "OUTPUT": "memory:",
+        "OUTPUT_GPX": str(folder / "units.gpx"), "REPORT": report("layout"),
+    })
+    reports["plotwise:layout"] = layout["REPORT"]
+
+    counted = output_layer(processing.run("plotwise:simulatecounts", {
+        "UNITS": output_layer(layout["OUTPUT"]), "ANIMALS": animals_layer(), "DETECTION": 1.0, "SEED": 5,
+        "OUTPUT": "memory:",
+    })["OUTPUT"])
+    if units_name:
+        counted.setName(units_name)
+    estimate = processing.run("plotwise:estimate", {
+        "UNITS": counted, "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum", "UNIT_AREA_FIELD": "area_m2",
+        "STRATA": output_layer(allocated["OUTPUT"]), "STRATA_ID_FIELD": "stratum", "AREA_UNIT": 1,
+        "TARGET_CV": 0.2, "SEED": 3, "OUTPUT": "memory:", "OUTPUT_TABLE": "memory:",
+        "REPORT": report("estimate"),
+    })
+    reports["plotwise:estimate"] = estimate["REPORT"]
+    return reports
+
+
+@pytest.fixture(scope="module")
+def chain_reports(plotwise_provider, demo_reserve_outputs, tmp_path_factory):
+    return run_chain(tmp_path_factory.mktemp("reports"), demo_reserve_outputs)
+
+
+@pytest.fixture(scope="module")
+def rendered(chain_reports, tmp_path_factory):
+    """One Chromium run measures every report (and two canaries); one run per report takes its PNG."""
+    folder = tmp_path_factory.mktemp("chromium")
+    documents = {alg.split(":")[1]: Path(path).read_text(encoding="utf-8") for alg, path in chain_reports.items()}
+    documents["canary-wide"] = '<!DOCTYPE html><html><body style="margin:0"><div style="width:1200px">wide</div></body></html>'
+    measured, requests = measure_reports(folder, documents)
+    keep = os.environ.get("PLOTWISE_REPORT_PNG")
+    png_folder = Path(keep) if keep else folder
+    png_folder.mkdir(parents=True, exist_ok=True)
+    pngs, logs = {}, {}
+    for alg, path in chain_reports.items():
+        name = alg.split(":")[1]
+        height = min(MAX_HEIGHT, max(600, int(math.ceil(measured[name]["height"]))))
+        png, net_log = png_folder / f"{name}.png", folder / f"{name}-net.json"
+        chromium(folder, f"--window-size={WIDTH},{height}", f"--screenshot={png}", Path(path).as_uri(), net_log=net_log)
+        pngs[alg], logs[alg] = png, page_requests(net_log)
+    return {"measured": measured, "requests": requests, "pngs": pngs, "screenshot_requests": logs}
+
+
+# -- tests ---------------------------------------------------------------------------
+def test_every_reporting_algorithm_is_rendered(plotwise_provider, chain_reports):
+    with_report = {a.id() for a in plotwise_provider.algorithms() if a.parameterDefinition("REPORT") is not None}
+    missing = with_report - set(chain_reports)
+    assert not missing, f"add these algorithms to run_chain() in this test: {sorted(missing)}"
+    for path in chain_reports.values():
+        assert path and Path(path).is_file()
+
+
+def test_reports_reference_nothing_outside_the_document(chain_reports):
+    for alg, path in chain_reports.items():
+        markup = Path(path).read_text(encoding="utf-8")
+        assert scan(markup).problems == [], alg
+
+
+def test_the_static_scan_sees_external_references():
+    canary = ('<html><head><link rel="stylesheet" href="https://cdn.example/x.css"><style>'
+              'body{background:url(http://example.org/a.png)}</style></head><body><img src="x.png">'
+              '<a href="#ok">fine</a><svg><use xlink:href="http://example.org/s.svg#a"/></svg></body></html>')
+    problems = " ".join(scan(canary).problems)
+    for seen in ("<link>", "cdn.example", "url(http://example.org/a.png)", "src='x.png'", "s.svg#a"):
+        assert seen in problems
+    assert "#ok" not in problems
+
+
+def test_no_request_leaves_the_page(rendered):
+    assert rendered["requests"] == []
+    for alg, urls in rendered["screenshot_requests"].items():
+        assert urls == [], alg
+
+
+def test_the_network_log_sees_a_page_request(tmp_path):
+    page = tmp_path / "canary.html"
+    page.write_text('<!DOCTYPE html><html><body><img src="http://plotwise-canary.invalid/x.png"></body></html>')
+    net_log = tmp_path / "canary-net.json"
+    chromium(tmp_path, "--dump-dom", page.as_uri(), net_log=net_log)
+    assert any("plotwise-canary.invalid" in url for url in page_requests(net_log))
+
+
+def test_nothing_overflows_at_1024_px(rendered, chain_reports):
+    measured = rendered["measured"]
+    assert measured["canary-wide"]["problems"], "the measurement must see a 1,200 px block"
+    assert measured["canary-wide"]["scrollWidth"] > WIDTH
+    for alg in chain_reports:
+        m = measured[alg.split(":")[1]]
+        assert m["clientWidth"] == WIDTH, alg
+        assert m["scrollWidth"] <= WIDTH, (alg, m)
+        assert m["problems"] == [], (alg, m["problems"])
+
+
+def test_png_at_1024_px_is_not_blank(rendered):
+    from qgis.PyQt.QtGui import QImage
+
+    for alg, png in rendered["pngs"].items():
+        image = QImage(str(png))
+        assert not image.isNull(), alg
+        assert image.width() == WIDTH, alg
+        assert image.height() >= 600, alg
+        # sample a grid of pixels: a rendered report has text, rules and figures in many colours
+        colours = {image.pixel(x, y) for x in range(0, image.width(), 16) for y in range(0, image.height(), 16)}
+        assert len(colours) > 20, alg
+
+
+def test_hostile_names_and_values_come_out_escaped(plotwise_provider, demo_reserve_outputs, tmp_path):
+    labels = [HOSTILE_VALUE, "two & three", "<b>4</b>"]
+    reports = run_chain(tmp_path, demo_reserve_outputs, strata=strata_layer(HOSTILE_NAME, labels),
+                        study_name=HOSTILE_NAME, units_name=HOSTILE_NAME)
+    escaped_name = html.escape(HOSTILE_NAME, quote=True)
+    escaped_value = html.escape(HOSTILE_VALUE, quote=True)
+    expected = {  # where each hostile string must appear (as text)
+        "plotwise:buildframe": [HOSTILE_NAME],
+        "plotwise:allocate": [HOSTILE_NAME, HOSTILE_VALUE],
+        "plotwise:layout": [HOSTILE_VALUE],
+        "plotwise:estimate": [HOSTILE_NAME, HOSTILE_VALUE],
+    }
+    for alg, strings in expected.items():
+        markup = Path(reports[alg]).read_text(encoding="utf-8")
+        assert "<script" not in markup and "<img" not in markup and "<b>4</b>" not in markup, alg
+        for raw in strings:
+            assert raw not in markup, alg
+        assert (escaped_name in markup) == (HOSTILE_NAME in strings), alg
+        assert (escaped_value in markup) == (HOSTILE_VALUE in strings), alg
+        # as Chromium parses it: no element came out of the strings, and they read as plain text
+        dom = chromium(tmp_path, "--dump-dom", Path(reports[alg]).as_uri())
+        parsed = scan(dom)
+        assert parsed.problems == [], (alg, parsed.problems)
+        text = " ".join(" ".join(parsed.text).split())
+        for raw in strings:
+            assert " ".join(raw.split()) in text, (alg, raw)
