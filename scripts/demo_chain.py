@@ -189,6 +189,36 @@ def step_layout(demo):
     """Spatially balanced layout with reserves, n from the allocation (issue 3)."""
     if not demo.available("plotwise:layout"):
         return
+    allocate, stratify, frame = (demo.results.get(k) for k in ("allocate", "stratify", "frame"))
+    if allocate is not None:  # n per stratum from the allocation step
+        source = {"FRAME": allocate["OUTPUT"], "STRATUM_FIELD": "stratum", "N_FIELD": "n_alloc"}
+        how = "n per stratum from the allocation"
+    elif stratify is not None:  # no allocation yet: 60 units split by area
+        source = {"FRAME": stratify["OUTPUT"], "STRATUM_FIELD": "stratum", "N_UNITS": 60}
+        how = "60 units split over the strata by area"
+    elif frame is not None:  # no strata yet: the whole frame is one stratum
+        source = {"FRAME": frame["OUTPUT"], "N_UNITS": 60}
+        how = "60 units over the whole frame (no strata yet)"
+    else:
+        print("  plotwise:layout skipped: no frame yet")
+        return
+    results = demo.run("plotwise:layout", {
+        **source,
+        "DESIGN": 2,  # spatially balanced (balanced acceptance sampling)
+        "SHAPE": 1, "SIZE": 100.0,  # 1 ha square plots, the unit area the allocation assumed
+        "BEARING": 0.0,  # sides north-south and east-west: easy to peg out with a compass
+        "INSIDE": True, "MIN_SPACING": 250.0, "RESERVE": 3, "SEED": SEED + 3,
+        "OUTPUT": demo.table("units"), "OUTPUT_GPX": str(demo.out / "units.gpx"),
+        "REPORT": demo.report("06_layout"),
+    })
+    demo.results["layout"] = results
+    demo.layers.append(("Sample units", demo.layer_uri("units"), "ogr", "units"))
+    from qgis.core import QgsVectorLayer
+
+    units = list(QgsVectorLayer(demo.layer_uri("units"), "units", "ogr").getFeatures())
+    primary = sum(1 for f in units if f["role"] == "primary")
+    print(f"    {primary} primary and {len(units) - primary} reserve 1 ha plots, spatially balanced ({how}); "
+          f"waypoints in units.gpx")
 
 
 def step_counts(demo):
