@@ -1,0 +1,269 @@
+"""Designs compared by simulation: counting geometry, population realisation, and the designs' behaviour.
+
+Outside references: shapely (point-in-polygon) as the oracle for the cells a unit
+covers; truth by construction for the simulated populations (known mean and
+variance of Poisson and gamma-Poisson sums); Cochran (1977), ch. 5 for
+stratified versus simple random sampling; the nominal 95 % of a t interval.
+"""
+import math
+
+import numpy as np
+import pytest
+from shapely.geometry import LineString, Point, Polygon, box
+
+from plotwise.processing.engine import design_comparison as dc
+from plotwise.processing.engine.errors import InputError
+from plotwise.processing.engine.geometry import contains_xy
+from plotwise.processing.engine.rng import make_rng
+from plotwise.processing.engine.unit_shapes import square_rings
+
+
+def _grid(nx=60, ny=60, cell=100.0, density=None, strata=None, keys=None):
+    """A north-up surface over [0, nx·cell] × [0, ny·cell]; density per km² as a function of x, y."""
+    x = (np.arange(nx) + 0.5) * cell
+    y = (ny * cell) - (np.arange(ny) + 0.5) * cell
+    xx, yy = np.meshgrid(x, y)
+    values = np.full((ny, nx), 30.0) if density is None else density(xx, yy)
+    frame = box(0, 0, nx * cell, ny * cell)
+    gt = (0.0, cell, 0.0, ny * cell, 0.0, -cell)
+    return dc.population_grid(values, gt, frame, strata, keys), frame
+
+
+def _fine_centres(grid, factor):
+    h, w = grid.shape
+    fdx = grid.cell_width / factor
+    cols = np.arange(w * factor)
+    rows = np.arange(h * factor)
+    x = grid.geotransform[0] + (cols + 0.5) * fdx
+    y = grid.geotransform[3] - (rows + 0.5) * fdx
+    return np.meshgrid(x, y)
+
+
+# ----------------------------------------------------------------------------- counting geometry
+@pytest.mark.parametrize("shape,size,distance", [(1, 230.0, 0.0), (3, 700.0, 40.0), (2, 120.0, 0.0), (0, 0.0, 75.0)])
+def test_cells_of_a_unit_match_shapely(shape, size, distance):
+    # oracle: shapely's point-in-polygon on the sub-cell centres
+    grid, _ = _grid(nx=40, ny=40, cell=50.0)
+    region = dc.counting_region(shape, size, distance)
+    factor = dc.subdivision(grid, region)
+    rng = np.random.default_rng(4)
+    centres = rng.uniform(600, 1400, (6, 2))
+    bearings = rng.uniform(0, 360, 6)
+    cells = dc.unit_cells(centres, bearings, region, grid, factor)
+    xx, yy = _fine_centres(grid, factor)
+    for i, (c, b) in enumerate(zip(centres, bearings)):
+        if shape == 1:
+            outline = Polygon(square_rings(c[None], [b], size)[0])
+        elif shape == 3:
+            d = np.array([math.sin(math.radians(b)), math.cos(math.radians(b))]) * size / 2
+            outline = LineString([c - d, c + d]).buffer(distance, cap_style=2)
+        else:
+            outline = Point(c).buffer(region.radius, 1024)
+        expected = np.sort(np.flatnonzero(contains_xy(outline, xx.ravel(), yy.ravel())))
+        got = np.sort(cells.fine[cells.unit == i])
+        if shape in (1, 3):
+            assert np.array_equal(got, expected)
+        else:  # the 4096-gon lies inside the circle: a few boundary cells may differ
+            assert abs(got.size - expected.size) <= max(2, 0.01 * expected.size)
+            assert np.isin(expected, got).all()
+
+
+@pytest.mark.parametrize("shape,size,distance", [(1, 100.0, 0.0), (3, 400.0, 25.0), (0, 0.0, 30.0)])
+def test_mean_counted_area_is_the_unit_area(shape, size, distance):
+    # truth by construction: a randomly placed set covers area / cell area lattice points on average
+    grid, _ = _grid(nx=50, ny=50, cell=40.0)
+    region = dc.counting_region(shape, size, distance)
+    factor = dc.subdivision(grid, region)
+    assert 2 * region.half_width >= dc.MIN_CELLS_ACROSS * grid.cell_width / factor or region.kind == "circle"
+    rng = np.random.default_rng(7)
+    m = 3000
+    centres = rng.uniform(600, 1400, (m, 2))
+    cells = dc.unit_cells(centres, rng.uniform(0, 360, m), region, grid, factor)
+    area = np.bincount(cells.unit, minlength=m) * grid.cell_area / factor ** 2
+    assert area.mean() == pytest.approx(region.area, rel=0.01)
+
+
+def test_units_count_only_their_stratum_and_the_frame():
+    strata = [box(0, 0, 1500, 3000), box(1500, 0, 3000, 3000)]
+    grid, _ = _grid(nx=30, ny=30, cell=100.0, strata=strata, keys=["west", "east"])
+    region = dc.counting_region(1, 400.0)
+    west = grid.keys.index("west")
+    centres = np.array([[1440.0, 1500.0], [1440.0, 1500.0], [60.0, 60.0]])
+    cells = dc.unit_cells(centres, [0, 0, 0], region, grid, 1, np.array([west, -1, -1]))
+    per_unit = np.bincount(cells.unit, minlength=3)
+    # a 400 m square on 100 m cells covers 4 × 4 cell centres (x 1250..1550); west of x = 1500 three columns
+    xs = (cells.coarse[cells.unit == 0] % 30) * 100 + 50
+    assert (xs < 1500).all()
+    assert per_unit[0] == 12
+    assert per_unit[1] == 16
+    assert per_unit[2] == 9  # the corner unit keeps the part inside the frame (3 × 3 cells)
+
+
+# ----------------------------------------------------------------------------- the population grid
+def test_population_grid_strata_areas_and_expected_total():
+    strata = [box(0, 0, 2000, 6000), box(2000, 0, 6000, 6000)]
+    grid, _ = _grid(strata=strata, keys=[2, 1], density=lambda x, y: 10 + x / 100)
+    assert grid.keys == (1, 2)
+    # polygon areas (km²) of the strata: 24 and 12
+    assert grid.stratum_areas_km2.tolist() == pytest.approx([24.0, 12.0])
+    # expected total = ∫ (10 + x/100) dA over 6 km × 6 km = 36·10 + 6·(6000²/2)/100/1000 per km²
+    assert grid.expected_total == pytest.approx(36 * 10 + 6 * 6000 ** 2 / 2 / 100 / 1000)
+
+
+def test_population_grid_refuses_negative_and_foreign_surfaces():
+    with pytest.raises(InputError, match="negative"):
+        _grid(density=lambda x, y: x / 1000 - 1)
+    with pytest.raises(InputError, match="does not overlap"):
+        dc.population_grid(np.ones((5, 5)), (1e6, 10, 0, 1e6, 0, -10), box(0, 0, 100, 100))
+
+
+def test_cells_without_data_leave_the_population_with_a_warning():
+    grid, _ = _grid(density=lambda x, y: np.where(x < 600, np.nan, 5.0))
+    assert (grid.code[:, :6] == -1).all()
+    assert any("no value" in w for w in grid.warnings)
+
+
+# ----------------------------------------------------------------------------- realisation
+@pytest.mark.parametrize("k", [0.0, 0.8])
+def test_realised_total_has_the_population_mean_and_variance(k):
+    # truth by construction: E N = Σ μ_c; Var N = Σ μ_c + Σ μ_c² / k (gamma-Poisson per surface cell)
+    grid, _ = _grid(nx=20, ny=20, cell=100.0, density=lambda x, y: 50 + x / 20)
+    region = dc.counting_region(1, 130.0)
+    factor = dc.subdivision(grid, region)
+    rng = np.random.default_rng(11)
+    reps = 4000
+    totals = np.empty(reps)
+    unit = np.empty(reps)
+    centre = np.array([[1000.0, 1000.0]])
+    cells = dc.unit_cells(np.repeat(centre, 3, axis=0), [0.0, 30.0, 60.0], region, grid, factor)
+    for r in range(reps):
+        out = dc.realise_counts(cells, 3, grid, rng, k)
+        totals[r] = out.total
+        unit[r] = out.counts[0]
+    mean = grid.expected_total
+    var = mean + (grid.sum_mu_squared / k if k > 0 else 0.0)
+    assert abs(totals.mean() - mean) < 4 * math.sqrt(var / reps)
+    assert totals.var(ddof=1) == pytest.approx(var, rel=0.08)
+    lam = grid.mu.ravel()[cells.coarse[cells.unit == 0]].sum() / factor ** 2
+    assert unit.mean() == pytest.approx(lam, rel=0.05)
+
+
+def test_overlapping_units_share_their_animals():
+    grid, _ = _grid(nx=20, ny=20, cell=100.0, density=lambda x, y: np.full_like(x, 400.0))
+    region = dc.counting_region(1, 200.0)
+    cells = dc.unit_cells(np.array([[1000.0, 1000.0], [1000.0, 1000.0]]), [0, 0], region, grid, 2)
+    out = dc.realise_counts(cells, 2, grid, np.random.default_rng(2))
+    assert out.counts[0] == out.counts[1]
+    assert out.areas_m2[0] == pytest.approx(40000.0)
+
+
+# ----------------------------------------------------------------------------- performance formulas
+def test_performance_formulas():
+    # Morris, White & Crowther (2019), table 6, computed by hand
+    truth = np.array([10.0, 10.0, 10.0, 10.0, 10.0])
+    est = np.array([12.0, 8.0, 11.0, 9.0, np.nan])
+    lo = np.array([9.0, 5.0, 10.5, 9.5, np.nan])
+    hi = np.array([15.0, 11.0, 12.0, 11.0, np.nan])
+    p = dc.design_performance(truth, est, lo, hi, [0.1, 0.2, 0.1, 0.1, np.nan], [5, 5, 6, 4, 0])
+    assert p["failed"] == 1 and p["replicates"] == 4
+    assert p["rel_bias"] == pytest.approx(0.0)
+    assert p["rmse"] == pytest.approx(math.sqrt(10 / 4))
+    assert p["emp_se"] == pytest.approx(math.sqrt(10 / 3))
+    assert p["coverage"] == pytest.approx(0.75)  # the third interval misses
+    assert p["mean_cv"] == pytest.approx(0.125)
+    assert p["mean_n"] == pytest.approx(5.0)
+
+
+def _perf(design, rmse, coverage, se=1.0):
+    return dc.DesignPerformance(design, dc.DESIGNS[design], 10, (), 100, 0, 10, 100, 100, 0, rmse, rmse, se,
+                                rmse / 100, 0.1, coverage)
+
+
+def test_recommendation_skips_designs_whose_intervals_mislead():
+    best, near = dc.recommend_design([_perf(0, 10.0, 0.95), _perf(3, 8.0, 0.70), _perf(4, 11.0, 0.94)])
+    assert best == 0 and near == (4,)
+
+
+def test_unit_range_text():
+    assert dc.parse_unit_range("40, 20;80") == (20, 40, 80)
+    assert dc.parse_unit_range("20:60:20") == (20, 40, 60)
+    assert dc.parse_unit_range("") == ()
+    with pytest.raises(InputError):
+        dc.parse_unit_range("twenty")
+
+
+def test_stratified_designs_need_strata():
+    grid, frame = _grid(nx=20, ny=20)
+    region = dc.counting_region(1, 100.0)
+    setup = dc.prepare_comparison(grid, frame, region, 1, 100.0, np.random.default_rng(1))
+    with pytest.raises(InputError, match="needs strata"):
+        dc.plan_design(setup, dc.STRATIFIED_NEYMAN, 10)
+
+
+# ----------------------------------------------------------------------------- the designs
+THREE_BANDS = [box(0, 0, 2000, 6000), box(2000, 0, 4000, 6000), box(4000, 0, 6000, 6000)]
+
+
+@pytest.fixture(scope="module")
+def smooth_comparison():
+    """Five designs, 2,000 replicates, on a gentle linear gradient (20 to 40 per km²)."""
+    grid, frame = _grid(density=lambda x, y: 20 + 20 * x / 6000, strata=THREE_BANDS, keys=[1, 2, 3])
+    rng = make_rng(2026).generator
+    region = dc.counting_region(1, 200.0)
+    setup = dc.prepare_comparison(grid, frame, region, 1, 200.0, rng, THREE_BANDS, [1, 2, 3])
+    return dc.compare_designs(setup, range(5), 30, 2000, rng)
+
+
+def test_every_design_is_unbiased(smooth_comparison):
+    # truth by construction: each replicate's realised total; relative bias under 2 % (issue 8)
+    for p in smooth_comparison.performance:
+        assert p.failed == 0, p.name
+        assert abs(p.rel_bias) < 0.02, (p.name, p.rel_bias)
+
+
+def test_t_interval_coverage_on_a_smooth_surface(smooth_comparison):
+    # nominal 95 % t interval (Cochran 1977, §2.15; Satterthwaite df, eq. 5.16): within 92-98 %
+    for p in smooth_comparison.performance:
+        assert 0.92 <= p.coverage <= 0.98, (p.name, p.coverage)
+        # the estimated CV agrees with the empirical one (truth by construction)
+        assert p.mean_cv == pytest.approx(p.emp_se / p.mean_true, rel=0.15), p.name
+
+
+def test_realised_n(smooth_comparison):
+    p = {q.design: q for q in smooth_comparison.performance}
+    assert p[dc.SIMPLE_RANDOM].mean_n == 30
+    assert sum(p[dc.STRATIFIED_PROPORTIONAL].allocation) == 30
+    assert p[dc.SYSTEMATIC_GRID].mean_n == pytest.approx(30, rel=0.05)  # n varies about A / s²
+
+
+def test_neyman_beats_simple_random_on_a_strong_gradient():
+    # Cochran (1977), ch. 5: with stratum SDs that differ, Neyman allocation gives a lower
+    # variance than simple random sampling of the same size
+    strata = [box(0, 0, 3000, 6000), box(3000, 0, 5000, 6000), box(5000, 0, 6000, 6000)]
+    grid, frame = _grid(density=lambda x, y: 2.0 * np.exp(x / 1000.0), strata=strata, keys=["low", "mid", "high"])
+    rng = make_rng(77).generator
+    region = dc.counting_region(2, 80.0)
+    setup = dc.prepare_comparison(grid, frame, region, 2, 80.0, rng, strata, ["low", "mid", "high"],
+                                  overdispersion=2.0)
+    result = dc.compare_designs(setup, [dc.SIMPLE_RANDOM, dc.STRATIFIED_NEYMAN], 40, 300, rng)
+    srs, neyman = result.by_design(dc.SIMPLE_RANDOM), result.by_design(dc.STRATIFIED_NEYMAN)
+    se = math.hypot(srs.rmse_mc_se, neyman.rmse_mc_se)
+    assert neyman.rmse < srs.rmse - 3 * se
+    keys = [st.key for st in result.plans[1].prepared]
+    allocation = dict(zip(keys, neyman.allocation))
+    assert allocation["high"] > allocation["low"]  # most units where the animals vary most
+    assert result.recommended == dc.STRATIFIED_NEYMAN
+
+
+def test_same_seed_same_comparison():
+    grid, frame = _grid(nx=20, ny=20, density=lambda x, y: 10 + x / 200)
+    region = dc.counting_region(0, 0.0, 60.0)
+
+    def run():
+        rng = make_rng(5).generator
+        setup = dc.prepare_comparison(grid, frame, region, 0, 0.0, rng, bearing=-1)
+        return dc.compare_designs(setup, [0, 3, 4], 12, 20, rng).results
+
+    a, b = run(), run()
+    assert np.array_equal(a.truth, b.truth)
+    assert np.array_equal(a.estimate, b.estimate, equal_nan=True)
