@@ -94,15 +94,19 @@ def collapse_single_unit_strata(n_units, density, order=None, neighbours=None):
     return CollapsedGroups(group=group, collapsed_with=tuple(members))
 
 
-def neighbourhood_weights(coords, size=NEIGHBOURHOOD_SIZE, tol=1e-12, max_iter=500):
+def neighbourhood_weights(coords, size=NEIGHBOURHOOD_SIZE, tol=1e-9, max_iter=100):
     """Weights of the local neighbourhoods of Stevens & Olsen (2003).
 
     Each unit *i* has a neighbourhood D(i): itself and its ``size − 1`` nearest
     units. The weights ``w_ij`` (j in D(i)) start equal and are scaled by
-    iterative proportional fitting until every neighbourhood's weights sum to 1
-    (Σ_j w_ij = 1) and every unit's weights over the neighbourhoods it belongs
-    to sum to 1 (Σ_i w_ij = 1). Stevens & Olsen (2003), Environmetrics
-    14:593–610, §3 (from memory).
+    iterative proportional fitting towards every neighbourhood's weights summing
+    to 1 (Σ_j w_ij = 1) and every unit's weights over the neighbourhoods it
+    belongs to summing to 1 (Σ_i w_ij = 1). Stevens & Olsen (2003),
+    Environmetrics 14:593–610, §3 (from memory).
+
+    A unit that is no other unit's neighbour can only meet both sums with
+    weight 1 on itself, which the fitting approaches slowly; it stops after
+    ``max_iter`` rounds, with the row sums exact and the column sums close.
 
     Parameters
     ----------
@@ -123,11 +127,11 @@ def neighbourhood_weights(coords, size=NEIGHBOURHOOD_SIZE, tol=1e-12, max_iter=5
     cols = cols.ravel()
     weights = np.full(rows.size, 1.0 / k)
     for _ in range(max_iter):
-        weights /= np.bincount(cols, weights, minlength=n)[cols]
-        row_sum = np.bincount(rows, weights, minlength=n)
-        weights /= row_sum[rows]
-        if np.max(np.abs(np.bincount(cols, weights, minlength=n) - 1.0)) < tol:
+        column_sums = np.bincount(cols, weights, minlength=n)
+        if np.max(np.abs(column_sums - 1.0)) < tol:
             break
+        weights /= column_sums[cols]
+        weights /= np.bincount(rows, weights, minlength=n)[rows]
     return rows, cols, weights
 
 
@@ -138,14 +142,15 @@ def local_neighbourhood_variance(values, coords, size=NEIGHBOURHOOD_SIZE):
     sample, the variance is estimated from local differences only
     (Stevens & Olsen 2003, Environmetrics 14:593–610)::
 
-        v(T) = Σ_i c_i Σ_{j∈D(i)} w_ij (z_j − z̄_i)²,   z̄_i = Σ_{j∈D(i)} w_ij z_j
+        v(T) = c · Σ_i Σ_{j∈D(i)} w_ij (z_j − z̄_i)²,   z̄_i = Σ_{j∈D(i)} w_ij z_j
 
     with the weights of :func:`neighbourhood_weights`. The factor
-    ``c_i = 1 / (1 − Σ_j w_ij²)`` is our addition: it makes each local term an
-    unbiased weighted variance, so that ``v`` agrees on average with the
-    simple-random-sampling formula ``n s_z²`` when the population has no spatial
-    pattern (checked by simulation in the tests), and is smaller than it when
-    neighbouring units are alike.
+    ``c = n / Σ_i (1 − Σ_j w_ij²)`` is our addition: the double sum's expectation
+    is ``Σ_i (1 − Σ_j w_ij²) σ²`` when the z are independent with variance σ², so
+    with ``c`` the estimator agrees on average with the simple-random-sampling
+    value ``n σ²`` when the population has no spatial pattern (checked by
+    simulation in the tests), and is smaller than it when neighbouring units are
+    alike.
 
     Parameters
     ----------
@@ -162,6 +167,6 @@ def local_neighbourhood_variance(values, coords, size=NEIGHBOURHOOD_SIZE):
     rows, cols, w = neighbourhood_weights(coords, size=size)
     n = z.size
     local_mean = np.bincount(rows, w * z[cols], minlength=n)
-    spread = np.bincount(rows, w * (z[cols] - local_mean[rows]) ** 2, minlength=n)
-    correction = 1.0 / (1.0 - np.bincount(rows, w * w, minlength=n))
-    return float(np.sum(correction * spread))
+    spread = np.sum(w * (z[cols] - local_mean[rows]) ** 2)
+    effective = np.sum(1.0 - np.bincount(rows, w * w, minlength=n))
+    return float(n * spread / effective) if effective > 0 else 0.0

@@ -309,3 +309,19 @@ def test_no_count_at_all_is_an_error():
         est.estimate_density([None, None], [1, 1], [1, 1], {1: 5})
     with pytest.raises(InputError):
         est.estimate_density([], [], [], {1: 5})
+
+
+def test_neighbourhood_weights_sum_to_one():
+    """Stevens & Olsen (2003): each neighbourhood's weights sum to 1, and each unit's
+    weights over the neighbourhoods it belongs to approach 1."""
+    from plotwise.processing.engine.variance import local_neighbourhood_variance, neighbourhood_weights
+
+    rng = np.random.default_rng(2)
+    gy, gx = np.mgrid[0:12, 0:12]
+    coords = np.column_stack([gx.ravel(), gy.ravel()]) + rng.uniform(-0.2, 0.2, (144, 2))
+    rows, cols, w = neighbourhood_weights(coords)
+    assert np.allclose(np.bincount(rows, w), 1.0, atol=1e-12)
+    assert np.median(np.abs(np.bincount(cols, w, minlength=144) - 1.0)) < 0.01
+    assert local_neighbourhood_variance(np.full(144, 3.0), coords) == pytest.approx(0.0, abs=1e-20)
+    trend = coords[:, 0] * 1.0
+    assert local_neighbourhood_variance(trend, coords) < 0.1 * 144 * np.var(trend, ddof=1)
