@@ -140,3 +140,20 @@ def test_zero_units_stratum_warns():
     assert any("no units" in w for w in frame.warnings)
     lay = L.draw_layout(frame, L.LayoutSpec(), np.random.default_rng(1))
     assert len(lay) == 3
+
+
+def test_cancel_stops_the_draw():
+    from plotwise.processing.engine.errors import Cancelled
+
+    frame = L.prepare_strata([box(0, 0, 100, 100)], n_units=5)
+    with pytest.raises(Cancelled):
+        L.draw_layout(frame, L.LayoutSpec(), np.random.default_rng(1), progress=lambda f: True)
+
+
+def test_features_of_one_stratum_must_agree_on_n():
+    with pytest.raises(InputError, match="different") as err:
+        L.prepare_strata([box(0, 0, 1, 1), box(1, 0, 2, 1)], feature_ids=[5, 6], strata=[1, 1], n_values=[3, 4])
+    assert err.value.ids == [5, 6]
+    # the same value on both parts: one stratum of two parts with 3 units
+    frame = L.prepare_strata([box(0, 0, 1, 1), box(1, 0, 2, 1)], strata=[1, 1], n_values=[3, 3])
+    assert len(frame.strata) == 1 and frame.strata[0].n == 3 and frame.strata[0].area == pytest.approx(2.0)
