@@ -580,8 +580,9 @@ class Estimate(PlotwiseAlgorithm):
                 "three nearest units in the stratum form a neighbourhood, and only differences within "
                 "neighbourhoods count as variance. For systematic and spatially balanced layouts the simple "
                 "random sampling formula overstates the variance; this estimator does not, as long as the "
-                "layout really was systematic or spatially balanced. Each neighbourhood's weighted variance is "
-                "scaled to be unbiased when the population has no spatial pattern (our choice)."))
+                "layout really was systematic or spatially balanced; for a simple random layout use the simple "
+                "formula. The sum of the local variances is scaled once so that it agrees on average with the "
+                "simple formula when the population has no spatial pattern (our choice)."))
         if any(r.collapsed_with for r in result.strata):
             report.paragraph(tr(
                 "Strata with one surveyed unit were collapsed with a neighbour (the next stratum in id order "
