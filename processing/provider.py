@@ -12,6 +12,7 @@ from .algorithms.demoreserve import DemoReserve
 from .algorithms.estimate import Estimate
 from .algorithms.layout import LayoutUnits
 from .algorithms.simulatecounts import SimulateCounts
+from .algorithms.stratify import Stratify
 
 MODELS = os.path.join(os.path.dirname(os.path.abspath(__file__)), "models")
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "plugin", "icons", "plotwise.svg")
@@ -24,6 +25,7 @@ ALGORITHM_CLASSES = [
     Estimate,
     LayoutUnits,
     SimulateCounts,
+    Stratify,
 ]
 
 
