@@ -52,7 +52,7 @@ Statistics & Probability Letters 18:353-362). Reserves carry the weight of the
 primary they would replace. For the systematic grid ``n_h`` is the expected
 number of units, ``A'_h / s_h**2``.
 """
-from dataclasses import dataclass, field, replace
+from dataclasses import dataclass
 import math
 import re
 
@@ -63,7 +63,9 @@ from . import geometry as geo
 from .crs import lonlat_transformer
 from .errors import Cancelled, InputError
 from .halton import balanced_acceptance_sample
-from .unit_shapes import CIRCLE, LINE, POINT, SHAPES, SQUARE, circumscribing_radius, transect_ends, unit_area, unit_outlines
+from .unit_shapes import (  # noqa: F401 (CIRCLE, SQUARE re-exported for the algorithm)
+    CIRCLE, LINE, POINT, SHAPES, SQUARE, circumscribing_radius, transect_ends, unit_area, unit_outlines,
+)
 
 DESIGNS = ("simple random", "systematic grid", "spatially balanced")
 SIMPLE_RANDOM, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(3)

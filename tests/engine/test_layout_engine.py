@@ -3,7 +3,7 @@ import numpy as np
 import pyproj
 import pytest
 from scipy.stats import qmc
-from shapely.geometry import Point, Polygon, box
+from shapely.geometry import Polygon, box
 
 from plotwise.processing.engine import halton
 from plotwise.processing.engine import layout as L
