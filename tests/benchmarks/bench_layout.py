@@ -27,6 +27,14 @@ CRS = "EPSG:32736"
 X0, Y0 = 500_000.0, 9_000_000.0
 
 
+def noisy_polygon(vertices=50_000, radius=6_000.0):
+    """A saw-tooth outline: 10 % random radial noise at every vertex (a worst case for point-in-polygon)."""
+    rng = np.random.default_rng(1)
+    t = np.linspace(0, 2 * np.pi, vertices, endpoint=False)
+    r = radius * (1 + 0.3 * np.sin(7 * t) + 0.1 * rng.random(vertices))
+    return Polygon(np.c_[X0 + r * np.cos(t), Y0 + r * np.sin(t)])
+
+
 def big_polygon(vertices=50_000, radius=6_000.0, rugged=False):
     """An irregular outline (invented) with 50,000 vertices, like a digitised reserve boundary.
 
@@ -101,8 +109,7 @@ def main():
     QgsApplication.processingRegistry().addProvider(provider)
 
     # 1. simple random points against the host
-    for rugged in (False, True):
-        poly = big_polygon(rugged=rugged)
+    for shape, poly in (("smooth", big_polygon()), ("rugged", big_polygon(rugged=True)), ("saw-tooth", noisy_polygon())):
         assert poly.is_valid and len(poly.exterior.coords) == 50_001
         layer = memory_layer([poly])
         host = timed(lambda: processing.run("native:randompointsinpolygons", {
@@ -113,7 +120,6 @@ def main():
         ours = timed(lambda: processing.run("plotwise:layout", params))
         spec = L.LayoutSpec(design=L.SIMPLE_RANDOM)
         engine = timed(lambda: L.layout_units([poly], spec, np.random.default_rng(1), n_units=10_000, crs=CRS))
-        shape = "rugged" if rugged else "smooth"
         print(f"10,000 simple-random points in one 50,000-vertex polygon ({shape} outline, "
               f"{poly.area / poly.envelope.area:.0%} of its bounding box)")
         print(f"  host native:randompointsinpolygons  {host:7.3f} s")
