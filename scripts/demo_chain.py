@@ -142,6 +142,27 @@ def step_stratify(demo):
     """Four strata from greenness and elevation by k-means (issue 4)."""
     if not demo.available("plotwise:stratify"):
         return
+    if demo.results.get("frame") is None:
+        print("  plotwise:stratify skipped: no sampling frame")
+        return
+    results = demo.run("plotwise:stratify", {
+        "FRAME": demo.layer_uri("frame"),
+        "COVARIATES": [str(demo.out / "greenness.tif"), str(demo.out / "elevation.tif")],
+        "METHOD": 3,  # k-means on both covariates, standardised
+        "STRATA": 4,
+        "MIN_AREA": 5.0,  # patches under 5 ha join a neighbour
+        "SEED": SEED,
+        "OUTPUT_RASTER": str(demo.out / "strata.tif"),
+        "OUTPUT": demo.table("strata"),
+        "REPORT": demo.report("03_strata"),
+    })
+    demo.results["stratify"] = results
+    demo.layers.append(("Strata", demo.layer_uri("strata"), "ogr", "strata"))
+    from qgis.core import QgsVectorLayer
+
+    strata = sorted(QgsVectorLayer(demo.layer_uri("strata"), "strata", "ogr").getFeatures(), key=lambda f: f["stratum"])
+    print(f"    {results['N_STRATA']} strata, R² of greenness {results['R_SQUARED']:.2f}: "
+          + "; ".join(f"{f['stratum']}: {f['area_ha']:.0f} ha" for f in strata))
 
 
 def step_pilot(demo):
