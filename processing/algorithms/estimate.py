@@ -19,7 +19,7 @@ from shapely.ops import unary_union
 
 from ...plugin import compat
 from .. import bridge
-from ..engine import estimation
+from ..engine import estimation, variance
 from ..report import MapLayer, interval_chart_svg, map_svg
 from ..report.style import ACCENT, INK, MUTED
 from .base import PlotwiseAlgorithm
@@ -300,6 +300,11 @@ class Estimate(PlotwiseAlgorithm):
         frame_geoms = {k: unary_union(v) for k, v in frame_geoms.items()}
         stratum_areas = {k: g.area / m2_per_unit for k, g in frame_geoms.items()}
 
+        # a one-unit stratum is collapsed with a stratum that touches it on the map
+        frame_labels = list(frame_geoms)
+        touching = variance.adjacent_strata([frame_geoms[k] for k in frame_labels])
+        neighbours = {frame_labels[i]: [frame_labels[j] for j in js] for i, js in touching.items()}
+
         unit_areas_m2 = self._unit_areas(records, area_field, unit_area_m2, ids, counts, units_name)
         coords = None
         if settings["variance_method"] == estimation.VARIANCE_LOCAL:
@@ -319,7 +324,7 @@ class Estimate(PlotwiseAlgorithm):
         with self.engine_errors():
             result = estimation.estimate_density(
                 counts[keep], unit_areas_m2[keep] / m2_per_unit, unit_strata[keep], stratum_areas,
-                unit_ids=ids[keep], coords=coords, rng=None if seeded is None else seeded.generator,
+                unit_ids=ids[keep], coords=coords, neighbours=neighbours, rng=None if seeded is None else seeded.generator,
                 progress=self.progress_callback(feedback, 30, 80), **settings,
             )
         warnings.extend(result.warnings)
@@ -585,8 +590,8 @@ class Estimate(PlotwiseAlgorithm):
                 "simple formula when the population has no spatial pattern (our choice)."))
         if any(r.collapsed_with for r in result.strata):
             report.paragraph(tr(
-                "Strata with one surveyed unit were collapsed with a neighbour (the next stratum in id order "
-                "with the closer density): the members of a collapsed group share the group's pooled residual "
+                "Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on "
+                "the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual "
                 "variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as "
                 "variance, so their standard errors tend to be too large."))
         if result.detection_p < 1 or result.detection_se > 0:

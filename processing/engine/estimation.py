@@ -377,7 +377,10 @@ def estimate_density(
         Leave out strata with no surveyed unit (the frame shrinks) instead of
         raising an error.
     neighbours : mapping, optional
-        Stratum id → stratum id to collapse a one-unit stratum with.
+        Stratum id → the stratum id to collapse a one-unit stratum with, or →
+        a list of candidate ids (e.g. the strata touching it), of which the one
+        with the closer density is taken. Default: the strata before and after
+        it in id order.
     rng : numpy.random.Generator, optional
         Needed for the bootstrap.
     n_bootstrap : int
@@ -554,11 +557,16 @@ def estimate_density(
     if singles.size and n_strata >= 2:
         neighbour_codes = None
         if neighbours:
-            neighbour_codes = {
-                code_of[stratum_label(k)]: code_of[stratum_label(v)]
-                for k, v in dict(neighbours).items()
-                if stratum_label(k) in code_of and stratum_label(v) in code_of
-            }
+            neighbour_codes = {}
+            for k, v in dict(neighbours).items():
+                if stratum_label(k) not in code_of:
+                    continue
+                if isinstance(v, (list, tuple, set, np.ndarray)):
+                    neighbour_codes[code_of[stratum_label(k)]] = [
+                        code_of[stratum_label(c)] for c in v if stratum_label(c) in code_of
+                    ]
+                elif stratum_label(v) in code_of:
+                    neighbour_codes[code_of[stratum_label(k)]] = code_of[stratum_label(v)]
         groups = collapse_single_unit_strata(n_h, dens_h, neighbours=neighbour_codes)
         group = groups.group
         collapsed = list(groups.collapsed_with)

@@ -48,8 +48,11 @@ def collapse_single_unit_strata(n_units, density, order=None, neighbours=None):
         (default: their index). The neighbours of a stratum are the strata just
         before and after it in this order; of the two, the one with the closer
         observed density is chosen (ties: the one before).
-    neighbours : mapping of int to int, optional
-        Explicit choice ``{single_stratum: neighbour}``, overriding the rule.
+    neighbours : mapping of int to int or to a sequence of int, optional
+        ``{single_stratum: neighbour}`` forces the choice; ``{single_stratum:
+        [candidates]}`` (e.g. the strata that touch it on the map) replaces the
+        two strata before and after it as the candidates, of which the one with
+        the closer density is chosen.
 
     Returns
     -------
@@ -80,11 +83,14 @@ def collapse_single_unit_strata(n_units, density, order=None, neighbours=None):
             break
         if any(root(j) == root(h) for j in range(n_strata) if j != h):
             continue
-        if h in neighbours:
-            partner = int(neighbours[h])
+        chosen = neighbours.get(h)
+        if chosen is not None and np.ndim(chosen) == 0:
+            partner = int(chosen)
         else:
-            k = position[h]
-            candidates = [by_order[j] for j in (k - 1, k + 1) if 0 <= j < n_strata]
+            candidates = [int(c) for c in (chosen if chosen is not None else ()) if int(c) != h]
+            if not candidates:
+                k = position[h]
+                candidates = [by_order[j] for j in (k - 1, k + 1) if 0 <= j < n_strata]
             gaps = [abs(density[c] - density[h]) for c in candidates]
             partner = candidates[int(np.argmin(gaps))]
         parent[root(h)] = root(partner)
@@ -92,6 +98,28 @@ def collapse_single_unit_strata(n_units, density, order=None, neighbours=None):
     _, group = np.unique(roots, return_inverse=True)
     members = [tuple(int(j) for j in np.flatnonzero(group == group[h]) if j != h) for h in range(n_strata)]
     return CollapsedGroups(group=group, collapsed_with=tuple(members))
+
+
+def adjacent_strata(geometries, tolerance=1.0):
+    """Strata that touch on the map: ``{i: [j, ...]}`` for geometries within ``tolerance`` (m).
+
+    Used to pick the neighbour a one-unit stratum is collapsed with. A loop over
+    pairs of strata (tens), with a bounding-box test first.
+    """
+    geometries = list(geometries)
+    bounds = np.array([g.bounds if g is not None and not g.is_empty else (np.nan,) * 4 for g in geometries])
+    result = {i: [] for i in range(len(geometries))}
+    for i in range(len(geometries)):
+        for j in range(i + 1, len(geometries)):
+            bi, bj = bounds[i], bounds[j]
+            if np.isnan(bi).any() or np.isnan(bj).any():
+                continue
+            if bi[0] - tolerance > bj[2] or bj[0] - tolerance > bi[2] or bi[1] - tolerance > bj[3] or bj[1] - tolerance > bi[3]:
+                continue
+            if geometries[i].distance(geometries[j]) <= tolerance:
+                result[i].append(j)
+                result[j].append(i)
+    return result
 
 
 def neighbourhood_weights(coords, size=NEIGHBOURHOOD_SIZE, tol=1e-9, max_iter=100):

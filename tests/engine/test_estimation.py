@@ -325,3 +325,24 @@ def test_neighbourhood_weights_sum_to_one():
     assert local_neighbourhood_variance(np.full(144, 3.0), coords) == pytest.approx(0.0, abs=1e-20)
     trend = coords[:, 0] * 1.0
     assert local_neighbourhood_variance(trend, coords) < 0.1 * 144 * np.var(trend, ddof=1)
+
+
+def test_single_unit_stratum_collapses_with_a_touching_stratum():
+    from shapely.geometry import box
+
+    from plotwise.processing.engine.variance import adjacent_strata
+
+    # on the map: 1 is an island; 2 | 3 | 4 in a row
+    geometries = [box(10e3, 10e3, 11e3, 11e3), box(0, 0, 1e3, 1e3), box(1e3, 0, 2e3, 1e3), box(2e3, 0, 3e3, 1e3)]
+    assert adjacent_strata(geometries) == {0: [], 1: [2], 2: [1, 3], 3: [2]}
+    counts = np.array([8.0, 8.0, 9.0, 30.0, 31.0, 32.0, 1.0, 2.0])
+    strata = [1, 1, 2, 3, 3, 3, 4, 4]  # stratum 2 has one unit (9); 1 has density 8, 3 has 31
+    frame = {1: 1.0, 2: 1.0, 3: 1.0, 4: 1.0}
+    # id order: candidates 1 and 3, and 1 has the closer density
+    assert est.estimate_density(counts, np.ones(8), strata, frame).strata[1].collapsed_with == ("1",)
+    # map: 2 touches only 3 (and the island 1 not at all)
+    on_map = est.estimate_density(counts, np.ones(8), strata, frame, neighbours={1: [], 2: [3], 3: [2, 4], 4: [3]})
+    assert on_map.strata[1].collapsed_with == ("3",)
+    # a one-unit stratum that touches nothing falls back to id order
+    alone = est.estimate_density(counts, np.ones(8), strata, frame, neighbours={2: []})
+    assert alone.strata[1].collapsed_with == ("1",)

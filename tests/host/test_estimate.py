@@ -249,3 +249,10 @@ def test_local_variance_option_runs(registered, run_alg, tmp_path):
     assert local["ABUNDANCE"] == pytest.approx(srs["ABUNDANCE"], rel=1e-12)
     assert local["DENSITY_SE"] > 0 and local["DENSITY_SE"] != srs["DENSITY_SE"]
     assert "Stevens" in (tmp_path / "estimate.html").read_text(encoding="utf-8")
+
+
+def test_single_unit_stratum_is_collapsed_with_a_warning(registered, run_alg, tmp_path):
+    results, feedback = _run(run_alg, tmp_path, _units_layer(counts={1: COUNTS[1], 2: [10]}))
+    assert any("collapsed" in w and "2" in w for w in feedback.warnings)
+    rows = {f["stratum"]: f for f in _layer(results["OUTPUT_TABLE"]).getFeatures()}
+    assert rows["2"]["abund_se"] > 0 and rows["2"]["df"] == 5  # pooled group of 6 units: 5 df
