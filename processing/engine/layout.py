@@ -390,9 +390,7 @@ def prepare_strata(
         feature_ids = list(range(len(geometries)))
     feature_ids = list(feature_ids)
     warnings = []
-    if n_values is not None:
-        n_feat = counts_from_field(n_values, feature_ids, n_field)
-    elif n_units is None or int(n_units) < 1:
+    if n_values is None and (n_units is None or int(n_units) < 1):
         raise InputError("Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).")
     keep, skipped, repaired = [], [], []
     for i, g in enumerate(geometries):
@@ -409,6 +407,10 @@ def prepare_strata(
         warnings.append(f"Empty or zero-area feature(s) {_ids(skipped)} were skipped.")
     if not keep:
         raise InputError("The frame has no polygon with an area: every feature is empty or has zero area.")
+    if n_values is not None:  # checked on the features kept (a skipped empty feature may lack a value)
+        n_feat = np.full(len(geometries), -1, dtype=int)
+        kept = [i for i, _ in keep]
+        n_feat[kept] = counts_from_field([n_values[i] for i in kept], [feature_ids[i] for i in kept], n_field)
     groups = {}
     for i, g in keep:
         key = strata[i] if strata is not None else None
@@ -438,10 +440,14 @@ def prepare_strata(
             vals = {int(n_feat[i]) for i, _ in members}
             if len(vals) > 1:
                 ids = [feature_ids[i] for i, _ in members]
+                where = "the frame (no stratum field)" if key is None else f"stratum {key}"
+                hint = (
+                    " or choose a stratum field so that each feature is a stratum" if key is None else ""
+                )
                 raise InputError(
-                    f"The features of stratum {key} carry different {n_field} values "
+                    f"The features of {where} carry different {n_field} values "
                     f"({', '.join(str(v) for v in sorted(vals))}) (features {_ids(ids)}). "
-                    f"{n_field} is the number of units of the whole stratum: give its features the same value.",
+                    f"{n_field} is the number of units of the whole stratum: give its features the same value{hint}.",
                     ids=ids,
                 )
             counts.append(vals.pop())

@@ -157,3 +157,9 @@ def test_features_of_one_stratum_must_agree_on_n():
     # the same value on both parts: one stratum of two parts with 3 units
     frame = L.prepare_strata([box(0, 0, 1, 1), box(1, 0, 2, 1)], strata=[1, 1], n_values=[3, 3])
     assert len(frame.strata) == 1 and frame.strata[0].n == 3 and frame.strata[0].area == pytest.approx(2.0)
+
+
+def test_n_field_checked_on_kept_features_only():
+    # an empty feature without a value is skipped with a warning, not an error
+    frame = L.prepare_strata([box(0, 0, 10, 10), Polygon()], feature_ids=[1, 2], strata=[1, 2], n_values=[3, None])
+    assert frame.skipped_ids == (2,) and frame.strata[0].n == 3
