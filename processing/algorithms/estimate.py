@@ -117,7 +117,8 @@ class Estimate(PlotwiseAlgorithm):
             "Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is "
             "above 0, else the polygon's area, else the fixed unit area for points and lines.\n\n"
             "Strata: polygons with an id field matching the units' stratum field; their areas define the "
-            "frame. Without a stratum field all units form one stratum over all strata polygons. A "
+            "frame. When the units have no stratum field, or the strata layer is a single polygon without "
+            "an id field, all units form one stratum over the frame. A "
             "stratum with one surveyed unit is collapsed with a neighbour for its variance (Cochran 1977, "
             "§5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: "
             "then the frame shrinks, and the report says so.\n\n"
@@ -235,11 +236,19 @@ class Estimate(PlotwiseAlgorithm):
         stratum_field = self._field(parameters, self.STRATUM_FIELD, context, unit_fields)
         area_field = self._field(parameters, self.UNIT_AREA_FIELD, context, unit_fields)
         strata_id_field = self._field(parameters, self.STRATA_ID_FIELD, context, strata_fields)
+        one_stratum_note = ""
         if stratum_field and not strata_id_field:
-            raise QgsProcessingException(self.tr(
-                "Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the strata "
-                "layer's id field (plotwise:stratify writes 'stratum'), or leave the units' stratum field empty "
-                "to treat the frame as one stratum.").format(layer=strata_name, field=stratum_field))
+            if strata_source.featureCount() != 1:
+                raise QgsProcessingException(self.tr(
+                    "Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the "
+                    "strata layer's id field (plotwise:stratify writes 'stratum'), or give a frame layer of one "
+                    "polygon to treat the frame as one stratum.").format(layer=strata_name, field=stratum_field))
+            one_stratum_note = self.tr(
+                "Layer '{layer}' is one polygon without a stratum id field: the frame is treated as one stratum, "
+                "and the units' field '{field}' is not used. If the units were allocated to strata unequally, "
+                "give the strata instead: an unstratified mean is then biased.").format(
+                layer=strata_name, field=stratum_field)
+            stratum_field = None
         unit_area_m2 = self.parameterAsDouble(parameters, self.UNIT_AREA, context)
         area_unit = self.parameterAsEnum(parameters, self.AREA_UNIT, context)
         m2_per_unit = M2_PER[area_unit]
@@ -273,6 +282,8 @@ class Estimate(PlotwiseAlgorithm):
                 layer=strata_name))
         feedback.setProgress(30)
         warnings = list(records.warnings) + list(strata_records.warnings)
+        if one_stratum_note:
+            warnings.append(one_stratum_note)
 
         attrs = records.attributes
         ids = np.array(attrs["unit_id"] if "unit_id" in attrs else records.fids.tolist(), dtype=object)

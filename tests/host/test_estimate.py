@@ -256,3 +256,18 @@ def test_single_unit_stratum_is_collapsed_with_a_warning(registered, run_alg, tm
     assert any("collapsed" in w and "2" in w for w in feedback.warnings)
     rows = {f["stratum"]: f for f in _layer(results["OUTPUT_TABLE"]).getFeatures()}
     assert rows["2"]["abund_se"] > 0 and rows["2"]["df"] == 5  # pooled group of 6 units: 5 df
+
+
+def test_without_stratum_field_the_frame_is_one_stratum(registered, run_alg, tmp_path):
+    frame = QgsVectorLayer("Polygon?crs=EPSG:32633", "frame", "memory")
+    f = QgsFeature(frame.fields())
+    f.setGeometry(QgsGeometry.fromWkt("POLYGON((0 0, 2000 0, 2000 1000, 1000 1000, 1000 2000, 0 2000, 0 0))"))
+    frame.dataProvider().addFeatures([f])
+    results, feedback = _run(run_alg, tmp_path, _units_layer(), STRATA=frame)
+    assert any("one stratum" in w for w in feedback.warnings)
+    values = [c for v in COUNTS.values() for c in v]
+    # simple random sampling over the whole 3 km² frame (Cochran 1977, eqs. 2.8 and 2.12, no FPC)
+    assert results["ABUNDANCE"] == pytest.approx(np.mean(values) / 0.01 * 3.0, rel=1e-9)
+    assert results["DENSITY_SE"] == pytest.approx(np.std(values, ddof=1) / math.sqrt(len(values)) / 0.01, rel=1e-9)
+    rows = {f["stratum"]: f for f in _layer(results["OUTPUT_TABLE"]).getFeatures()}
+    assert set(rows) == {"frame", "all"}
