@@ -36,8 +36,8 @@ counts the part of its own stratum (stratified designs) or of the frame
 its area. Units are enumerated row by row of (sub-)cells, with the column
 interval of each row found analytically for circles and rotated rectangles, so
 the work grows with the cells covered, not with a bounding box. Point stations
-count a circle of radius ``count_distance``, line transects a strip of
-half-width ``count_distance``.
+count a circle of radius SIZE (their counting radius), line transects a strip
+of a given half-width on either side of the line.
 
 Designs
 -------
@@ -332,34 +332,33 @@ class CountingRegion:
         return 2.0 * (self.radius if self.kind == "circle" else min(self.half_length, self.half_width))
 
 
-def counting_region(shape, size, count_distance=0.0):
-    """The region a unit of ``shape`` and ``size`` counts.
+def counting_region(shape, size, half_width=0.0):
+    """The region a unit of ``shape`` and ``size`` counts (as in :mod:`.unit_shapes`).
 
-    * point station: a circle of radius ``count_distance``;
+    * point station: a circle of radius ``size`` (its counting radius);
     * square plot of side ``size``: itself;
     * circular plot of radius ``size``: itself;
-    * line transect of length ``size``: a strip of half-width ``count_distance``
-      (as :mod:`.counting` does for lines).
+    * line transect of length ``size``: a strip of ``half_width`` on each side
+      of the line (as :mod:`.counting` does for lines).
     """
     shape = int(shape)
     size = float(size)
-    count_distance = float(count_distance or 0.0)
-    if shape in (POINT, LINE) and not count_distance > 0:
+    half_width = float(half_width or 0.0)
+    if shape not in (POINT, SQUARE, CIRCLE, LINE):
+        raise InputError("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")
+    if not size > 0:
+        what = "the counting radius of a point station" if shape == POINT else f"the {SHAPES[shape]} unit's size"
+        raise InputError(f"SIZE must be more than 0 m: it is {what}.")
+    if shape == LINE and not half_width > 0:
         raise InputError(
-            f"A {SHAPES[shape]} unit needs a counting distance above 0 m (the radius counted about a point "
-            "station, or the half-width of a transect's strip)."
+            "A line transect needs the half-width of its counting strip (more than 0 m): animals are counted "
+            "up to that distance on either side of the line."
         )
-    if shape != POINT and not size > 0:
-        raise InputError(f"SIZE must be more than 0 m for a {SHAPES[shape]} unit.")
-    if shape == POINT:
-        return CountingRegion("circle", radius=count_distance)
-    if shape == CIRCLE:
+    if shape in (POINT, CIRCLE):
         return CountingRegion("circle", radius=size)
     if shape == SQUARE:
         return CountingRegion("rectangle", half_length=size / 2.0, half_width=size / 2.0)
-    if shape == LINE:
-        return CountingRegion("rectangle", half_length=size / 2.0, half_width=count_distance)
-    raise InputError("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")
+    return CountingRegion("rectangle", half_length=size / 2.0, half_width=half_width)
 
 
 def subdivision(grid, region, min_cells=MIN_CELLS_ACROSS):
@@ -600,15 +599,22 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         raise InputError("The overdispersion k must be 0 (Poisson counts) or more.")
     spec = layout.LayoutSpec(design=layout.SIMPLE_RANDOM, shape=int(shape), size=float(size), bearing=float(bearing))
     factor = subdivision(grid, region)
-    whole = layout.prepare_strata([frame], n_units=layout.MIN_PER_STRATUM, spec=spec)
     warnings = list(grid.warnings)
     prepared = None
     codes = np.zeros(0, dtype=int)
     sd = mean = None
+    covered = frame
     if strata is not None:
         strata = list(strata)
         keys = list(range(len(strata))) if keys is None else list(keys)
         cut = [g.intersection(frame) for g in strata]
+        covered = _union(cut)
+        lost = 1.0 - covered.area / frame.area if frame.area > 0 else 0.0
+        if lost > 0.005:
+            warnings.append(
+                f"The strata cover {1 - lost:.1%} of the frame: every design is compared on the part the strata "
+                "cover."
+            )
         prepared = layout.prepare_strata(cut, strata=keys, n_units=2 * len(strata), spec=spec)
         position = {k: i for i, k in enumerate(grid.keys)}
         try:
@@ -616,6 +622,7 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         except KeyError:
             raise InputError("A stratum of the layout has no cells on the surface grid.") from None
         sd, mean = stratum_unit_sd(grid, prepared, codes, region, factor, spec.bearing, overdispersion, rng, sd_draws)
+    whole = layout.prepare_strata([covered], n_units=layout.MIN_PER_STRATUM, spec=spec)
     return ComparisonSetup(grid, region, factor, spec, whole, prepared, codes, sd, mean, float(overdispersion),
                            tuple(warnings))
 
