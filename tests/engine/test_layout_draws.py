@@ -64,18 +64,24 @@ def chisquare_counts(points, xs, ys, share):
 
 @pytest.mark.slow
 @pytest.mark.parametrize(
-    "design, cover",
-    [(L.SIMPLE_RANDOM, "delaunay"), (L.SIMPLE_RANDOM, "bbox"), (L.SYSTEMATIC_GRID, "auto"), (L.SPATIALLY_BALANCED, "delaunay")],
+    "design, cover, bearing",
+    [
+        (L.SIMPLE_RANDOM, "delaunay", 0.0),
+        (L.SIMPLE_RANDOM, "bbox", 0.0),
+        (L.SYSTEMATIC_GRID, "auto", 0.0),
+        (L.SYSTEMATIC_GRID, "auto", -1.0),  # random rotation as well as a random start
+        (L.SPATIALLY_BALANCED, "delaunay", 0.0),
+    ],
 )
-def test_inclusion_is_uniform_over_seeds(stratum, design, cover):
-    spec = L.LayoutSpec(design=design)
+def test_inclusion_is_uniform_over_seeds(stratum, design, cover, bearing):
+    spec = L.LayoutSpec(design=design, bearing=bearing)
     frame = L.prepare_strata([stratum], n_units=12, spec=spec, cover_method=cover)
     pts = np.concatenate(
         [L.draw_layout(frame, spec, np.random.default_rng(seed)).centres for seed in range(1, SEEDS + 1)]
     )
     xs, ys, share = cell_expected(stratum)
     res = chisquare_counts(pts, xs, ys, share)
-    print(f"{L.DESIGNS[design]} ({cover} cover): {len(pts)} units, chi-square p = {res.pvalue:.4f}")
+    print(f"{L.DESIGNS[design]} ({cover} cover, bearing {bearing:g}): {len(pts)} units, chi-square p = {res.pvalue:.4f}")
     assert res.pvalue > 0.001  # scipy.stats.chisquare, uniform inclusion
 
 
