@@ -322,6 +322,12 @@ class Estimate(PlotwiseAlgorithm):
             coords = np.array([[g.centroid.x, g.centroid.y] if g is not None else [np.nan, np.nan]
                                for g in records.geometries])
             coords = coords[keep]
+            no_position = np.isnan(coords[:, 0]) & np.array([c is not None for c in counts[keep]])
+            if no_position.any():
+                raise QgsProcessingException(self.tr(
+                    "Layer '{layer}': units {ids} have no geometry, so the local neighbourhood variance cannot use "
+                    "them. Give them their location, or use the simple random sampling formula.").format(
+                    layer=units_name, ids=bridge.id_list(ids[keep][no_position])))
         if not settings["presence"]:
             numeric = [c for c in counts[keep] if isinstance(c, (int, float)) and not isinstance(c, bool)]
             if numeric and set(numeric) <= {0, 1} and 1 in numeric and len(numeric) >= 5:

@@ -517,6 +517,13 @@ def estimate_density(
         if coords is None:
             raise InputError("The local neighbourhood variance needs the positions of the units.")
         xy = np.asarray(coords, dtype=float).reshape(n_all, 2)[keep]
+        unplaced = ~np.isfinite(xy).all(axis=1)
+        if unplaced.any():
+            raise InputError(
+                f"Units {_id_list(ids[keep][unplaced])} have no position, so the local neighbourhood variance "
+                "cannot use them. Give their locations, or use the simple random sampling formula.",
+                ids=ids[keep][unplaced],
+            )
 
     area_h = np.array([frame[lab] for lab in labels])
     n_h = np.bincount(code, minlength=n_strata)

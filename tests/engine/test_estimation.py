@@ -346,3 +346,11 @@ def test_single_unit_stratum_collapses_with_a_touching_stratum():
     # a one-unit stratum that touches nothing falls back to id order
     alone = est.estimate_density(counts, np.ones(8), strata, frame, neighbours={2: []})
     assert alone.strata[1].collapsed_with == ("1",)
+
+
+def test_local_variance_needs_positions():
+    coords = np.array([[0, 0], [1, 0], [np.nan, np.nan], [0, 1]], float)
+    with pytest.raises(InputError) as err:
+        est.estimate_density([1.0, 2.0, 3.0, 4.0], np.ones(4), [1] * 4, {1: 10}, variance_method="local",
+                             coords=coords, unit_ids=[11, 12, 13, 14])
+    assert err.value.ids == [13]
