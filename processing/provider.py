@@ -8,6 +8,7 @@ from qgis.PyQt.QtGui import QIcon
 
 from .algorithms.allocate import Allocate
 from .algorithms.buildframe import BuildFrame
+from .algorithms.comparedesigns import CompareDesigns
 from .algorithms.demoreserve import DemoReserve
 from .algorithms.estimate import Estimate
 from .algorithms.layout import LayoutUnits
@@ -21,6 +22,7 @@ ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))),
 ALGORITHM_CLASSES = [
     Allocate,
     BuildFrame,
+    CompareDesigns,
     DemoReserve,
     Estimate,
     LayoutUnits,
