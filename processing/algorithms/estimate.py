@@ -12,7 +12,6 @@ from qgis.core import (
     QgsProcessingParameterFeatureSource,
     QgsProcessingParameterField,
     QgsProcessingParameterNumber,
-    QgsWkbTypes,
 )
 from shapely.geometry import MultiPolygon, Polygon
 from shapely.ops import unary_union
