@@ -222,13 +222,9 @@ class CovariateStack:
         self._mask_ds = self._rasterise(frame)
         self._mask_band = self._mask_ds.GetRasterBand(1)
 
-        bw, bh = band0.GetBlockSize()
-        W = self.grid.width
-        rows_per = max(1, block_cells // max(1, W))
-        if bh > 1 and rows_per >= bh:
-            rows_per = rows_per // bh * bh
-        self.block_rows = rows_per
-        self.n_blocks = -(-self.grid.height // rows_per)
+        self._windows = _block_windows(self.grid.width, self.grid.height, band0.GetBlockSize(), (c0, r0),
+                                       block_cells)
+        self.n_blocks = len(self._windows)
 
     def _no_overlap(self):
         return InputError("The frame does not overlap covariate '%s' (%s). Use a raster that covers the "
@@ -286,9 +282,8 @@ class CovariateStack:
         return self.grid.cell_area
 
     def windows(self):
-        W, H = self.grid.width, self.grid.height
-        for y0 in range(0, H, self.block_rows):
-            yield 0, y0, W, min(self.block_rows, H - y0)
+        """``(xoff, yoff, xsize, ysize)`` of each block, in reading order."""
+        return iter(self._windows)
 
     def blocks(self, strata_band=None):
         """Iterator of :class:`~.engine.stratification.CellBlock`."""
@@ -332,6 +327,35 @@ class CovariateStack:
 
     def __exit__(self, *exc):
         self.close()
+
+
+def _cuts(size, offset, step):
+    """Cut points in [0, size] at multiples of ``step`` of the source grid (offset = window origin)."""
+    first = step - offset % step
+    inner = list(range(first, size, step)) if first < size else []
+    return [0] + [c for c in inner if c > 0] + [size]
+
+
+def _block_windows(width, height, source_block, offset, block_cells):
+    """Windows of about ``block_cells`` cells that follow the first covariate's own blocks.
+
+    Tiled rasters are read by groups of whole tiles, striped ones by groups of
+    whole strips, so that GDAL decodes each of its blocks once.
+    """
+    bw, bh = int(source_block[0]), int(source_block[1])
+    if bw >= width or bw <= 1:  # strips: full-width rows
+        rows = max(1, block_cells // max(1, width))
+        if bh > 1 and rows >= bh:
+            rows = rows // bh * bh
+        return [(0, y, width, min(rows, height - y)) for y in range(0, height, rows)]
+    tiles = max(1, block_cells // (bw * bh))
+    nx = max(1, int(math.sqrt(tiles)))
+    ny = max(1, tiles // nx)
+    xs = _cuts(width, offset[0], bw)[::1]
+    ys = _cuts(height, offset[1], bh)
+    xs = xs[::nx] + ([xs[-1]] if (len(xs) - 1) % nx else [])
+    ys = ys[::ny] + ([ys[-1]] if (len(ys) - 1) % ny else [])
+    return [(x0, y0, x1 - x0, y1 - y0) for y0, y1 in zip(ys[:-1], ys[1:]) for x0, x1 in zip(xs[:-1], xs[1:])]
 
 
 class _StackSource:
@@ -385,14 +409,22 @@ def _fast_compression():
     return ["COMPRESS=DEFLATE", "ZLEVEL=1"]
 
 
-def _gdal_callback(progress):
-    if progress is None:
-        return None
+class _GdalProgress:
+    """GDAL progress callback over our ``progress(fraction) -> cancelled``; remembers a cancel."""
 
-    def cb(fraction, message, data):
-        return 0 if progress(fraction) else 1
+    def __init__(self, progress):
+        self.progress = progress
+        self.cancelled = False
 
-    return cb
+    def __call__(self, fraction, message, data):
+        if self.progress is not None and self.progress(fraction):
+            self.cancelled = True
+            return 0
+        return 1
+
+    def check(self):
+        if self.cancelled:
+            raise Cancelled("Stratification cancelled.")
 
 
 def remap_strata(path, lut, block_rows=2048, progress=None):
@@ -438,13 +470,13 @@ def sieve_strata(path, min_cells, progress=None):
     band = ds.GetRasterBand(1)
     try:
         for i, t in enumerate(steps):
-            cb = _gdal_callback(strat.scaled_progress(progress, i / len(steps), (i + 1) / len(steps)))
+            cb = _GdalProgress(strat.scaled_progress(progress, i / len(steps), (i + 1) / len(steps)))
             try:
-                res = gdal.SieveFilter(band, band, band, t, 4, callback=cb)
+                gdal.SieveFilter(band, band, band, t, 4, callback=cb)
             except RuntimeError:
-                res = 1
-            if res != 0:
-                raise Cancelled("Stratification cancelled.")
+                cb.check()
+                raise
+            cb.check()
     finally:
         band.FlushCache()
         band = ds = None
@@ -458,12 +490,13 @@ def polygonise_strata(path, n_strata, progress=None):
     srs = ds.GetSpatialRef()
     layer = mem.CreateLayer("strata", srs, ogr.wkbPolygon)
     layer.CreateField(ogr.FieldDefn("stratum", ogr.OFTInteger))
+    cb = _GdalProgress(progress)
     try:
-        gdal.Polygonize(band, band, layer, 0, [], callback=_gdal_callback(progress))
-    except RuntimeError as exc:
-        if "interrupt" in str(exc).lower() or "cancel" in str(exc).lower():
-            raise Cancelled("Stratification cancelled.")
+        gdal.Polygonize(band, band, layer, 0, [], callback=cb)
+    except RuntimeError:
+        cb.check()
         raise
+    cb.check()
     parts = [ogr.Geometry(ogr.wkbMultiPolygon) for _ in range(n_strata)]
     layer.ResetReading()
     for feat in layer:

@@ -195,3 +195,33 @@ def test_cancel(tmp_path):
     with pytest.raises(Cancelled):
         rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 3, str(tmp_path / "c.tif"),
                              progress=lambda f: f > 0.3, block_cells=5000)
+
+
+@pytest.mark.parametrize("stage", [0.77, 0.95])  # during the sieve, during polygonising
+def test_cancel_inside_gdal_steps(tmp_path, stage):
+    path = _write(tmp_path / "elev.tif", _elevation())
+    with pytest.raises(Cancelled):
+        rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 3, str(tmp_path / "c.tif"),
+                             min_area_ha=1.0, progress=lambda f: f > stage)
+
+
+@pytest.mark.parametrize("block, offset", [((256, 256), (100, 30)), ((150, 1), (0, 0)), ((64, 64), (0, 0))])
+def test_block_windows_cover_the_grid_once(block, offset):
+    cover = np.zeros((700, 1000), int)
+    for x, y, w, h in rio._block_windows(1000, 700, block, offset, 1 << 16):
+        cover[y:y + h, x:x + w] += 1
+        if block[1] > 1:  # tiled: windows start on the source's tile edges
+            assert (x + offset[0]) % block[0] == 0 or x == 0
+    assert cover.min() == 1 and cover.max() == 1
+
+
+def test_tiled_covariate_gives_the_same_strata(tmp_path):
+    elev = _elevation()
+    p_strip = _write(tmp_path / "strip.tif", elev, nodata=-9999)
+    p_tiled = str(tmp_path / "tiled.tif")
+    gdal.Translate(p_tiled, p_strip, creationOptions=["TILED=YES", "BLOCKXSIZE=32", "BLOCKYSIZE=32"])
+    a = rio.stratify_rasters([rio.Covariate(p_strip, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 4, str(tmp_path / "a.tif"))
+    b = rio.stratify_rasters([rio.Covariate(p_tiled, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 4, str(tmp_path / "b.tif"),
+                             block_cells=3000)
+    np.testing.assert_array_equal(_read(str(tmp_path / "a.tif")), _read(str(tmp_path / "b.tif")))
+    np.testing.assert_array_equal(a.result.boundaries, b.result.boundaries)
