@@ -370,9 +370,11 @@ def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=N
     share = area / box_area if box_area > 0 else 1.0
     if method == "bbox" or (method == "auto" and share >= compact_share):
         return _bbox_cover(geometry)
+    if method == "auto" and expected_points is not None:
+        vertices = sum(len(r) for r in _rings(geometry))
+        if expected_points / share < 2 * vertices:
+            return _bbox_cover(geometry)
     points, edges = _boundary_edges(geometry)
-    if method == "auto" and expected_points is not None and expected_points / share < 2 * len(points):
-        return _bbox_cover(geometry)
     # work relative to the centre: better conditioned orientation tests
     centre = points.mean(axis=0)
     local = points - centre
