@@ -19,7 +19,7 @@ from shapely.ops import unary_union
 from ...plugin import compat
 from .. import bridge
 from ..engine import estimation, variance
-from ..report import MapLayer, interval_chart_svg, map_svg
+from ..report import MapLayer, histogram_svg, interval_chart_svg, map_svg
 from ..report.style import ACCENT, INK, MUTED
 from .base import PlotwiseAlgorithm
 
@@ -530,6 +530,24 @@ class Estimate(PlotwiseAlgorithm):
         if result.missing_ids:
             report.paragraph(tr("Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.").format(
                 n=len(result.missing_ids), ids=bridge.id_list(result.missing_ids, limit=60)))
+
+        report.subsection(tr("The overall interval by method"))
+        report.table(
+            [tr("Interval"), tr("Lower limit"), tr("Upper limit"), tr("Used in the outputs")],
+            [[ci_names[m], lo, hi, tr("yes") if m == result.ci_method else tr("no")]
+             for m, lo, hi in result.overall_intervals])
+        report.paragraph(tr(
+            "The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like "
+            "the sampling distribution of a count-based estimate, and suits small samples of clumped animals "
+            "better. Choose the method before looking at the results."))
+        if result.bootstrap_totals is not None:
+            edges = np.histogram_bin_edges(result.bootstrap_totals, bins=40)
+            frequencies, _ = np.histogram(result.bootstrap_totals, bins=edges)
+            report.figure(
+                histogram_svg(edges, frequencies, marks=(o.abund_lo, o.abund_hi),
+                              x_label=tr("overall abundance in a resample"), y_label=tr("resamples"),
+                              mark_label=tr("{level} percentile limits").format(level=level)),
+                tr("The {n:,} bootstrap resamples of the overall abundance").format(n=result.n_bootstrap))
 
         labels = [r.stratum for r in result.strata]
         dens_rows = [self._row(r, stratum_areas.get(r.stratum, r.area), presence) for r in result.strata]

@@ -21,7 +21,7 @@ stratified percentile bootstrap (Efron & Tibshirani 1993; Buckland et al. 2001).
 
 Nothing here imports the host.
 """
-from dataclasses import dataclass, replace
+from dataclasses import dataclass, field, replace
 import math
 
 import numpy as np
@@ -89,6 +89,11 @@ class Estimate:
         Strata left out because no unit in them was surveyed (the frame shrank).
     dropped_area : float
         Area of the dropped strata.
+    overall_intervals : tuple of (str, float, float)
+        The overall abundance's interval by each method computed: t and
+        log-normal always, the bootstrap when it was run.
+    bootstrap_totals : numpy.ndarray or None
+        The bootstrap replicates of the overall abundance.
     """
 
     strata: tuple
@@ -106,6 +111,8 @@ class Estimate:
     missing_ids: tuple = ()
     dropped_strata: tuple = ()
     dropped_area: float = 0.0
+    overall_intervals: tuple = ()
+    bootstrap_totals: object = field(default=None, repr=False, compare=False)
 
     def table(self):
         """All rows: the strata, then ``all``."""
@@ -662,6 +669,11 @@ def estimate_density(
                  tuple(labels[j] for j in collapsed[h]))
         )
     est, var, cv, df = with_detection(n_total, var_total, df_count_total)
+    se_total = math.sqrt(var) if np.isfinite(var) else float("nan")
+    intervals = [(CI_T,) + t_interval(est, se_total, df, confidence),
+                 (CI_LOGNORMAL,) + lognormal_interval(est, cv, confidence)]
+    if boot is not None:
+        intervals.append((CI_BOOTSTRAP,) + tuple(float(v) for v in np.quantile(boot[0], [alpha / 2, 1 - alpha / 2])))
     overall_sd = float(np.std(y, ddof=1)) if y.size > 1 else float("nan")
     overall = _row(OVERALL, total_area, int(n_h.sum()), int(missing.sum()), float(y.mean()) if y.size else float("nan"),
                    overall_sd, est, var, cv, df, ci_method, confidence, None if boot is None else boot[0], alpha, ())
@@ -694,6 +706,8 @@ def estimate_density(
         presence=bool(presence),
         target_cv=target_cv,
         n_bootstrap=0 if boot is None else int(boot[0].size),
+        overall_intervals=tuple(intervals),
+        bootstrap_totals=None if boot is None else boot[0],
         warnings=tuple(warnings),
         missing_ids=tuple(ids[missing].tolist()),
         dropped_strata=tuple(empty),

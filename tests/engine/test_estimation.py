@@ -354,3 +354,15 @@ def test_local_variance_needs_positions():
         est.estimate_density([1.0, 2.0, 3.0, 4.0], np.ones(4), [1] * 4, {1: 10}, variance_method="local",
                              coords=coords, unit_ids=[11, 12, 13, 14])
     assert err.value.ids == [13]
+
+
+def test_overall_intervals_by_every_method():
+    counts, areas, strata, frame = _hand_arrays()
+    t_run = est.estimate_density(counts, areas, strata, frame)
+    ln_run = est.estimate_density(counts, areas, strata, frame, ci_method="lognormal")
+    boot_run = est.estimate_density(counts, areas, strata, frame, ci_method="bootstrap", rng=make_rng(2).generator)
+    by_method = {m: (lo, hi) for m, lo, hi in boot_run.overall_intervals}
+    assert by_method["t"] == (t_run.overall.abund_lo, t_run.overall.abund_hi)
+    assert by_method["lognormal"] == pytest.approx((ln_run.overall.abund_lo, ln_run.overall.abund_hi), rel=REL)
+    assert by_method["bootstrap"] == (boot_run.overall.abund_lo, boot_run.overall.abund_hi)
+    assert boot_run.bootstrap_totals.shape == (2000,) and t_run.bootstrap_totals is None

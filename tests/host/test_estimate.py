@@ -197,7 +197,8 @@ def test_target_cv_and_bootstrap_seeded(registered, run_alg, tmp_path):
     expected = np.maximum(np.ceil(n * m * s / (m * s).sum()), 2).astype(int)
     assert [rows["1"]["n_next"], rows["2"]["n_next"]] == expected.tolist()
     assert rows["all"]["n_next"] == expected.sum()
-    assert "Seed" in (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    assert "Seed" in html and "bootstrap resamples" in html and "The overall interval by method" in html
 
 
 def test_presence_gives_naive_occupancy(registered, run_alg, tmp_path):
