@@ -17,12 +17,14 @@ from ...plugin import compat
 from .. import bridge
 from .. import raster_io
 from ..engine import stratification as strat
-from ..report import MapLayer, category_colour, format_number, histogram_svg, map_svg
+from ..report import MapLayer, category_colour, format_number, map_svg
+from ..report.svg import stacked_histogram_svg
 from ..report.style import INK
 from .base import PlotwiseAlgorithm
 
 REFERENCES = [
-    "Cochran, W. G. (1977) Sampling Techniques, 3rd ed. Wiley. §5.6 (gain from stratification), §5A.7.",
+    "Cochran, W. G. (1977) Sampling Techniques, 3rd ed. Wiley. Ch. 5 (gain from stratification) and "
+    "5A (construction of strata, the cum √f rule).",
     "Dalenius, T. & Hodges, J. L. (1959) Minimum variance stratification. Journal of the American "
     "Statistical Association 54:88–101.",
     "Hyndman, R. J. & Fan, Y. (1996) Sample quantiles in statistical packages. The American "
@@ -86,7 +88,7 @@ class Stratify(PlotwiseAlgorithm):
             "exact sample quantiles of the frame's cells (Hyndman &amp; Fan 1996, definition 7).</li>"
             "<li><b>Equal interval</b>: the first covariate's range cut into equal widths.</li>"
             "<li><b>Cumulative root frequency</b>: the Dalenius &amp; Hodges (1959) rule on a 100-class "
-            "histogram of the first covariate (Cochran 1977 §5A.7).</li>"
+            "histogram of the first covariate (Cochran 1977, ch. 5A).</li>"
             "<li><b>k-means</b>: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur "
             "&amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with "
             "the seed; then every cell goes to its nearest centre.</li>"
@@ -263,7 +265,7 @@ class Stratify(PlotwiseAlgorithm):
             report.paragraph(tr(
                 "Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL "
                 "sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a "
-                "stratum may hold a few cells outside its nominal range."
+                "stratum may hold a few cells that the rule alone would have put in a neighbouring stratum."
             ).format(ha=format_number(min_area), cells=result.sieve_cells))
 
         method_name = strat.METHOD_NAMES[method]
@@ -302,19 +304,25 @@ class Stratify(PlotwiseAlgorithm):
                       zip(names, stats.overall_mean(), stats.overall_sd(), r2)])
         report.paragraph(tr(
             "R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. "
-            "If density follows a covariate, stratifying on it with proportional allocation lowers the "
-            "variance of the estimate by about this share (Cochran 1977 §5.6)."))
+            "For a quantity that follows the covariate exactly, proportional allocation over these strata "
+            "would lower the variance of the estimated mean by this share compared with simple random "
+            "sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density "
+            "is smaller the less closely density follows the covariate."))
 
         report.section(tr("Histogram of {name}").format(name=names[0]))
         lo, hi = stats.chart_range
         if np.isfinite(lo) and np.isfinite(hi) and hi > lo:
             edges = np.linspace(lo, hi, strat.CHART_BINS + 1)
             marks = res.boundaries if res.boundaries is not None else ()
+            colours = [category_colour(h) for h in range(k)]
             report.figure(
-                histogram_svg(edges, stats.chart_counts.sum(axis=0), marks=marks, x_label=names[0],
-                              y_label=tr("cells"), mark_label=tr("stratum boundaries") if len(marks) else ""),
-                tr("Frame cells by {name}; dashed lines: stratum boundaries.").format(name=names[0])
-                if len(marks) else tr("Frame cells by {name}.").format(name=names[0]))
+                stacked_histogram_svg(edges, stats.chart_counts, colours,
+                                      labels=[tr("stratum {h}").format(h=h + 1) for h in range(k)], marks=marks,
+                                      x_label=names[0], y_label=tr("cells")),
+                tr("Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.").format(
+                    name=names[0]) if len(marks) else
+                tr("Frame cells by {name}, coloured by stratum (k-means strata may overlap on one "
+                   "covariate).").format(name=names[0]))
 
         report.section(tr("Map"))
         report.figure(self._map(shapes, frame_polygons, result.labels), tr("Strata within the sampling frame"))

@@ -16,7 +16,7 @@ quantile
 equal interval
     The first covariate's range cut into equal widths.
 cumulative root frequency
-    Dalenius & Hodges (1959), JASA 54:88-101; Cochran (1977) §5A.7.
+    Dalenius & Hodges (1959), JASA 54:88-101; Cochran (1977) ch. 5A.
 k-means
     Lloyd (1982) iterations from k-means++ seeds (Arthur & Vassilvitskii 2007),
     on all covariates standardised to mean 0 and standard deviation 1, fitted on
@@ -311,8 +311,8 @@ def exact_quantiles(source, probabilities, value_range=None, covariate=0, bins=F
     Hyndman & Fan 1996 def. 7: with sorted cells x_(0..n-1) and h = (n-1)p,
     Q(p) = x_(floor h) + (h - floor h)(x_(floor h + 1) - x_(floor h))).
 
-    Two passes (Press et al., *Numerical Recipes*, §8.5 "selecting the Mth
-    largest" by bucketing):
+    Two passes of selection by bucketing (a histogram narrows each order
+    statistic down to one class, whose cells alone are then kept):
 
     1. a fine histogram (``bins`` classes) locates the class holding each
        order statistic needed and the rank within that class;
@@ -435,7 +435,7 @@ def equal_interval_boundaries(minimum, maximum, n_strata):
 def cum_root_f_boundaries(edges, counts, n_strata):
     """Dalenius–Hodges cumulative root frequency boundaries.
 
-    Dalenius & Hodges (1959), JASA 54:88-101; Cochran (1977) §5A.7. With J
+    Dalenius & Hodges (1959), JASA 54:88-101; Cochran (1977) ch. 5A. With J
     classes of frequencies f_j and widths d_j, form ``C_j = sum_{i<=j} sqrt(f_i d_i)``
     (equal widths: ``sqrt(f_i)``). The boundary of stratum h is the upper edge of
     the class whose ``C_j`` lies nearest to ``h C_J / k``, h = 1..k-1.
@@ -688,7 +688,7 @@ class StratumStatistics:
 
         ``R^2 = 1 - sum_h N_h S_h^2 / (N S^2)`` with population variances: the
         between-strata sum of squares over the total sum of squares (one-way
-        analysis of variance). Cochran (1977) §5.6 shows the variance of the
+        analysis of variance). Cochran (1977) ch. 5 shows the variance of the
         stratified mean under proportional allocation shrinks by this share.
         """
         within = (self.count[:, None] * self.sd**2).sum(axis=0)

@@ -309,3 +309,52 @@ def line_chart_svg(x, series, x_label="", y_label="", width=900, height=320):
     out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
     out.append("</svg>")
     return "".join(out)
+
+
+def stacked_histogram_svg(edges, counts, colours, labels=(), marks=(), x_label="", y_label="cells", width=900, height=320):
+    """A histogram whose bars are stacked by group (rows of ``counts``, e.g. strata), with a legend.
+
+    ``counts`` is (groups, bins) over bins ``edges``; ``colours`` gives one colour per group;
+    ``marks`` draws dashed vertical lines (e.g. stratum boundaries).
+    """
+    edges = np.asarray(edges, dtype=float)
+    counts = np.atleast_2d(np.asarray(counts, dtype=float))
+    legend_w = 190 if len(labels) else 20
+    left, right, top, bottom = 60, legend_w, 15, 45
+    pw, ph = width - left - right, height - top - bottom
+    lo, hi = edges[0], edges[-1]
+    span = hi - lo if hi > lo else 1.0
+    totals = counts.sum(axis=0)
+    cmax = totals.max() if totals.size and totals.max() > 0 else 1.0
+
+    def sx(v):
+        return left + (v - lo) / span * pw
+
+    def sh(c):
+        return c / cmax * ph
+
+    out = [f'<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 {width} {height}" role="img">']
+    for i in range(counts.shape[1]):
+        x0, x1 = sx(edges[i]), sx(edges[i + 1])
+        base = top + ph
+        for g in range(counts.shape[0]):
+            h = sh(counts[g, i])
+            if h <= 0:
+                continue
+            out.append(f'<rect x="{x0:.1f}" y="{base - h:.1f}" width="{max(x1 - x0 - 0.5, 0.5):.1f}" height="{h:.1f}" fill="{colours[g % len(colours)]}"/>')
+            base -= h
+    for m in marks:
+        x = sx(m)
+        out.append(f'<line x1="{x:.1f}" y1="{top}" x2="{x:.1f}" y2="{top + ph}" stroke="{INK}" stroke-width="1.5" stroke-dasharray="6,3"/>')
+    out.append(f'<line x1="{left}" y1="{top + ph}" x2="{left + pw}" y2="{top + ph}" stroke="{INK}"/>')
+    out.append(f'<line x1="{left}" y1="{top}" x2="{left}" y2="{top + ph}" stroke="{INK}"/>')
+    for t in _axis_ticks(lo, hi):
+        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" fill="{INK}">{escape(format_number(float(t)))}</text>')
+    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(x_label)}</text>')
+    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
+    for g, label in enumerate(labels):
+        y = top + 14 + 20 * g
+        out.append(f'<rect x="{left + pw + 14}" y="{y - 10}" width="12" height="12" fill="{colours[g % len(colours)]}"/>')
+        out.append(f'<text x="{left + pw + 32}" y="{y}" font-size="11" {FONT} fill="{INK}">{escape(label)}</text>')
+    out.append("</svg>")
+    return "".join(out)

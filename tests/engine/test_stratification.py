@@ -82,7 +82,8 @@ def test_float32_cells_compared_with_float64_boundaries_exactly():
 # --- equal interval and cum sqrt(f) ---------------------------------------------------------------
 
 def test_cum_root_f_hand_worked_table():
-    # Dalenius & Hodges (1959) rule as set out in Cochran (1977) §5A.7; table and arithmetic by hand:
+    # Dalenius & Hodges (1959) rule as set out in Cochran (1977) ch. 5A (# from memory: the rule's
+    # statement); the table is our own and the arithmetic is done by hand here:
     # f      = 4, 16, 36, 64, 100, 81, 49, 25, 9, 1   (classes 0-10, 10-20, ..., 90-100)
     # sqrt f = 2,  4,  6,  8,  10,  9,  7,  5, 3, 1
     # cum    = 2,  6, 12, 20,  30, 39, 46, 51, 54, 55
