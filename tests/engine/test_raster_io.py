@@ -225,3 +225,23 @@ def test_tiled_covariate_gives_the_same_strata(tmp_path):
                              block_cells=3000)
     np.testing.assert_array_equal(_read(str(tmp_path / "a.tif")), _read(str(tmp_path / "b.tif")))
     np.testing.assert_array_equal(a.result.boundaries, b.result.boundaries)
+
+
+def test_aligned_covariate_covering_part_of_the_grid(tmp_path):
+    elev = _elevation(nodata_box=False)
+    p1 = _write(tmp_path / "elev.tif", elev)
+    # same grid, but only the northern 100 rows: read directly (no warp), the rest counts as NoData
+    green = np.linspace(0, 1, 100 * W, dtype=np.float32).reshape(100, W)
+    p2 = _write(tmp_path / "green.tif", green)
+    r = rio.stratify_rasters([rio.Covariate(p1, "elevation"), rio.Covariate(p2, "greenness")], [FRAME.wkb], UTM33,
+                             s.KMEANS, 3, str(tmp_path / "st.tif"), rng=np.random.default_rng(3))
+    assert r.warped == []
+    x, y = _centres()
+    inside = _contains(FRAME, x, y)  # shapely
+    rows = np.arange(H)[:, None] * np.ones((1, W), int)
+    valid = inside & (rows < 100)
+    assert r.result.cells_valid == int(valid.sum())
+    assert r.nodata_ha == pytest.approx(int((inside & (rows >= 100)).sum()) * 0.09)
+    ids = _read(str(tmp_path / "st.tif"))
+    np.testing.assert_array_equal(ids > 0, _window(valid, r.grid))
+    assert any("%" in w for w in r.warnings)

@@ -162,3 +162,24 @@ def test_bad_input_is_a_clear_error(alg_id, run_alg, tmp_path):
     near = _frame_layer("POLYGON((500000 4000000, 503000 4000000, 503000 3998000, 500000 3998000, 500000 4000000))")
     with pytest.raises(QgsProcessingException, match="reclassify"):
         run_alg(alg_id, {**base, "FRAME": near, "METHOD": 4})
+
+
+def test_geographic_frame_is_projected_and_errors_name_the_covariate(alg_id, run_alg, tmp_path):
+    path, elev = _synthetic(tmp_path)
+    # the raster's centre area as a lon/lat polygon (pyproj), frame in EPSG:4326
+    to_ll = Transformer.from_crs(CRS.from_epsg(32633), CRS.from_epsg(4326), always_xy=True)
+    ring = [to_ll.transform(x, y) for x, y in ((500500, 3999500), (503000, 3999500), (503000, 3997500),
+                                                (500500, 3997500), (500500, 3999500))]
+    frame = _frame_layer("POLYGON((" + ", ".join(f"{lon} {lat}" for lon, lat in ring) + "))", epsg=4326)
+    out = run_alg(alg_id, {
+        "FRAME": frame, "COVARIATES": [path], "METHOD": 1, "STRATA": 3, "MIN_AREA": 1.0,
+        "OUTPUT_RASTER": str(tmp_path / "g.tif"), "OUTPUT": str(tmp_path / "g.gpkg"),
+    })
+    layer, feats = _features(out["OUTPUT"])
+    assert layer.crs().authid() == "EPSG:32633"  # UTM zone of the frame's centre, the covariate's own CRS
+    assert sum(f["area_ha"] for f in feats) == pytest.approx(2500 * 2000 / 1e4, rel=0.01)
+    flat = str(tmp_path / "flat.tif")
+    gdal.Translate(flat, path, scaleParams=[[0, 1e9, 7, 7]], outputType=gdal.GDT_Float32)
+    with pytest.raises(QgsProcessingException, match="constant"):
+        run_alg(alg_id, {"FRAME": frame, "COVARIATES": [flat], "METHOD": 0, "STRATA": 3,
+                         "OUTPUT_RASTER": str(tmp_path / "f.tif"), "OUTPUT": str(tmp_path / "f.gpkg")})
