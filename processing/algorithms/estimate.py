@@ -20,7 +20,8 @@ from ...plugin import compat
 from .. import bridge
 from ..engine import estimation, variance
 from ..report import MapLayer, histogram_svg, interval_chart_svg, map_svg
-from ..report.style import ACCENT, INK, MUTED
+from ..report.style import CATEGORY_COLOURS, INK, MUTED
+from ..styles import DENSITY_RAMP, NO_ESTIMATE_COLOUR
 from .base import PlotwiseAlgorithm
 
 M2_PER = {0: 1e6, 1: 1e4}  # AREA_UNIT: 0 km², 1 ha
@@ -28,6 +29,7 @@ UNIT_NAMES = {0: "km²", 1: "ha"}
 CI_METHODS = (estimation.CI_T, estimation.CI_LOGNORMAL, estimation.CI_BOOTSTRAP)
 VARIANCE_METHODS = (estimation.VARIANCE_SRS, estimation.VARIANCE_LOCAL)
 ONE_STRATUM = "frame"
+UNIT_COLOUR = CATEGORY_COLOURS[1]  # amber: visible on the pale and the dark end of the density shading
 
 OUTPUT_FIELDS = (
     ("stratum", "string", 40), ("area", "double"), ("n", "int"), ("mean_c", "double"), ("sd_c", "double"),
@@ -57,13 +59,16 @@ REFERENCES = (
 )
 
 
-def _sequential_colour(value, lo, hi):
-    """A colour from pale sand (low) to deep teal (high) for a choropleth; grey when missing."""
+def _sequential_colour(value, lo, hi, ramp=DENSITY_RAMP):
+    """The density ramp of the styled layer (light to dark) at ``value``; grey when missing."""
     if value is None or not np.isfinite(value):
-        return "#d9d9d9"
+        return NO_ESTIMATE_COLOUR
     t = 0.0 if hi <= lo else min(max((value - lo) / (hi - lo), 0.0), 1.0)
-    start, end = (0xF3, 0xEB, 0xD3), (0x1C, 0x5F, 0x6B)
-    return "#" + "".join(f"{round(a + (b - a) * t):02x}" for a, b in zip(start, end))
+    stops = [tuple(int(c[i:i + 2], 16) for i in (1, 3, 5)) for c in ramp]
+    position = t * (len(stops) - 1)
+    k = min(int(position), len(stops) - 2)
+    f = position - k
+    return "#" + "".join(f"{round(a + (b - a) * f):02x}" for a, b in zip(stops[k], stops[k + 1]))
 
 
 class Estimate(PlotwiseAlgorithm):
@@ -578,7 +583,7 @@ class Estimate(PlotwiseAlgorithm):
         surveyed = np.array([c is not None for c in records.attributes[info["count_field"]]]) & keep
         points = [g.centroid if g is not None and g.geom_type != "Point" else g for g in records.geometries]
         layers.append(MapLayer(tuple(p for p, s in zip(points, surveyed) if s and p is not None),
-                               label=tr("surveyed units"), fill=ACCENT, stroke=INK, point_radius=2.5))
+                               label=tr("surveyed units"), fill=UNIT_COLOUR, stroke=INK, point_radius=3.0))
         missing = [p for p, s, k in zip(points, surveyed, keep) if k and not s and p is not None]
         if missing:
             layers.append(MapLayer(tuple(missing), label=tr("not surveyed"), fill="#ffffff", stroke=MUTED,
