@@ -1,7 +1,7 @@
 """GDAL side of the stratification against outside references: numpy, shapely, pyproj, scipy."""
 import numpy as np
 import pytest
-from osgeo import gdal, osr
+from osgeo import gdal
 from pyproj import CRS, Geod, Transformer
 from scipy import ndimage
 from shapely import wkb

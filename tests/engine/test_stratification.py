@@ -15,8 +15,8 @@ def _gamma_field(seed=1, shape=(240, 310), nan_share=0.05):
     return a, frame
 
 
-def _ids_raster(source, result_lut):
-    """Final stratum id per cell, collected through the ``write`` callback."""
+def _ids_raster(source):
+    """Provisional stratum id per cell, collected through the ``write`` callback (map with ``lut``)."""
     rows, cols = source.shape
     out = np.zeros((rows, cols), np.int64)
 
@@ -53,7 +53,7 @@ def test_exact_quantiles_with_ties_and_a_poor_range_hint():
 def test_quantile_strata_boundaries_and_areas():
     a, frame = _gamma_field(seed=3)
     src = s.ArrayCellSource([a], frame, block_rows=23)
-    out, write = _ids_raster(src, None)
+    out, write = _ids_raster(src)
     k = 5
     r = s.stratify_cells(src, s.QUANTILE, k, ["gamma"], write=write)
     cells = a[frame & np.isfinite(a)].astype(float)
@@ -135,7 +135,7 @@ def test_kmeans_agrees_with_sklearn_on_all_cells():
     metrics = pytest.importorskip("sklearn.metrics")
     covs = _three_covariates()
     src = s.ArrayCellSource(covs, block_rows=19)
-    out, write = _ids_raster(src, None)
+    out, write = _ids_raster(src)
     r = s.stratify_cells(src, s.KMEANS, 4, ["a", "b", "c"], rng=np.random.default_rng(2), write=write)
     ok = np.all([np.isfinite(c) for c in covs], axis=0)
     cells = np.column_stack([c[ok] for c in covs])
@@ -152,7 +152,7 @@ def test_kmeans_on_a_subsample_agrees_with_sklearn():
     metrics = pytest.importorskip("sklearn.metrics")
     covs = _three_covariates(seed=4)
     src = s.ArrayCellSource(covs, block_rows=31)
-    out, write = _ids_raster(src, None)
+    out, write = _ids_raster(src)
     r = s.stratify_cells(src, s.KMEANS, 4, ["a", "b", "c"], rng=np.random.default_rng(9), sample_size=3000,
                          write=write)
     ok = np.all([np.isfinite(c) for c in covs], axis=0)
@@ -180,7 +180,7 @@ def test_kmeans_plusplus_draws_distinct_points_of_the_data():
 def test_stratum_statistics_and_r_squared_equal_numpy(method):
     covs = _three_covariates(seed=8)
     src = s.ArrayCellSource(covs, block_rows=13)
-    out, write = _ids_raster(src, None)
+    out, write = _ids_raster(src)
     r = s.stratify_cells(src, method, 3, ["a", "b", "c"], write=write, rng=np.random.default_rng(1))
     ok = np.all([np.isfinite(c) for c in covs], axis=0)
     ids = r.lut[out][ok]
