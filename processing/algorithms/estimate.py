@@ -152,7 +152,7 @@ class Estimate(PlotwiseAlgorithm):
         self.addParameter(QgsProcessingParameterField(
             self.COUNT_FIELD, self.tr("Count field"), "count", self.UNITS, compat.FIELD_ANY))
         self.addParameter(QgsProcessingParameterField(
-            self.STRATUM_FIELD, self.tr("Stratum field of the units (empty: one stratum)"), "stratum", self.UNITS,
+            self.STRATUM_FIELD, self.tr("Stratum field of the units"), "stratum", self.UNITS,
             compat.FIELD_ANY, optional=True))
         self.addParameter(QgsProcessingParameterField(
             self.UNIT_AREA_FIELD, self.tr("Unit area field (m²)"), "area_m2", self.UNITS, compat.FIELD_NUMERIC,
