@@ -277,7 +277,7 @@ class Stratify(PlotwiseAlgorithm):
                 "Stratum h holds the cells with b(h−1) ≤ {name} < b(h). Boundaries on {name}:"
             ).format(name=names[0]))
             report.table([tr("Boundary"), tr("Value")],
-                         [[i + 1, strat.format_covariate_value(b, d)] for i, b in enumerate(res.boundaries)])
+                         [[i + 1, strat.format_covariate_value(b, d + 2)] for i, b in enumerate(res.boundaries)])
             if method == strat.QUANTILE:
                 report.paragraph(tr(
                     "Exact sample quantiles at h/k of the frame's cells (Hyndman & Fan 1996, definition 7), "
