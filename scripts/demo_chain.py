@@ -13,6 +13,9 @@ from pathlib import Path
 REPO = Path(__file__).resolve().parents[1]
 OUT = Path(os.environ.get("PLOTWISE_DEMO_OUT", REPO / "demo-output"))
 SEED = 20261201
+# square plots of 400 m × 400 m (16 ha): at the velmar's ~10 per km² a plot holds about 1.6 animals
+PLOT_SIDE = 400.0
+PLOT_HA = PLOT_SIDE**2 / 1e4
 
 
 def start_host():
@@ -130,7 +133,7 @@ def step_frame(demo):
     demo.results["frame"] = results
     demo.layers += [
         ("Slope (degrees)", slope, "gdal", "terrain"),
-        ("Sampling frame", demo.layer_uri("frame"), "ogr", "outline"),
+        ("Sampling frame", demo.layer_uri("frame"), "ogr", "frame"),
     ]
     from qgis.core import QgsVectorLayer
 
@@ -169,6 +172,31 @@ def step_pilot(demo):
     """A small pilot survey whose estimate gives the SDs for allocation (issues 3, 6)."""
     if not (demo.available("plotwise:layout") and demo.available("plotwise:estimate")):
         return
+    stratify = demo.results.get("stratify")
+    if stratify is None:
+        print("  pilot survey skipped: no strata yet")
+        return
+    print(f"  pilot survey: 24 simple-random {PLOT_HA:g} ha plots, simulated counts, estimate")
+    layout = demo.run("plotwise:layout", {
+        "FRAME": stratify["OUTPUT"], "STRATUM_FIELD": "stratum", "N_UNITS": 24,
+        "DESIGN": 0, "SHAPE": 1, "SIZE": PLOT_SIDE, "BEARING": 0.0, "INSIDE": True,
+        "MIN_SPACING": 0.0, "RESERVE": 0, "SEED": SEED + 10,
+        "OUTPUT": demo.table("pilot_units"), "OUTPUT_GPX": str(demo.out / "pilot_units.gpx"),
+        "REPORT": demo.report("04a_pilot_layout"),
+    })
+    counts = demo.run("plotwise:simulatecounts", {
+        "UNITS": layout["OUTPUT"], "ANIMALS": demo.layer_uri("animals"), "DETECTION": 1.0,
+        "SEED": SEED + 11, "OUTPUT": demo.table("pilot_counted"),
+    })
+    estimate = demo.run("plotwise:estimate", {
+        "UNITS": counts["OUTPUT"], "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum",
+        "UNIT_AREA_FIELD": "area_m2", "STRATA": stratify["OUTPUT"], "STRATA_ID_FIELD": "stratum",
+        "CONFIDENCE": 0.95, "CI_METHOD": 0, "AREA_UNIT": 1, "SEED": SEED + 12,
+        "OUTPUT": demo.table("pilot_estimate"), "OUTPUT_TABLE": demo.table("pilot_estimate_table"),
+        "REPORT": demo.report("04b_pilot_estimate"),
+    })
+    demo.results["pilot"] = {"layout": layout, "counts": counts, "estimate": estimate}
+    print(f"    pilot: {estimate['ABUNDANCE']:,.0f} velmar (CV {estimate['CV']:.2f}); its per-stratum SDs feed the allocation")
 
 
 def step_allocate(demo):
@@ -181,7 +209,7 @@ def step_allocate(demo):
         return
     parameters = {
         "STRATA": stratify["OUTPUT"], "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha",
-        "METHOD": 2, "TOTAL": 60, "UNIT_AREA": 10000.0, "MIN_PER_STRATUM": 2,
+        "METHOD": 2, "TOTAL": 60, "UNIT_AREA": PLOT_SIDE**2, "MIN_PER_STRATUM": 2,
         "OUTPUT": demo.table("strata_allocated"), "REPORT": demo.report("05_allocation"),
     }
     # the pilot step's estimate results, stored as results["pilot"] or results["pilot"]["estimate"]
@@ -226,9 +254,9 @@ def step_layout(demo):
     results = demo.run("plotwise:layout", {
         **source,
         "DESIGN": 2,  # spatially balanced (balanced acceptance sampling)
-        "SHAPE": 1, "SIZE": 100.0,  # 1 ha square plots, the unit area the allocation assumed
+        "SHAPE": 1, "SIZE": PLOT_SIDE,  # square plots, the unit area the allocation assumed
         "BEARING": 0.0,  # sides north-south and east-west: easy to peg out with a compass
-        "INSIDE": True, "MIN_SPACING": 250.0, "RESERVE": 3, "SEED": SEED + 3,
+        "INSIDE": True, "MIN_SPACING": 600.0, "RESERVE": 3, "SEED": SEED + 3,
         "OUTPUT": demo.table("units"), "OUTPUT_GPX": str(demo.out / "units.gpx"),
         "REPORT": demo.report("06_layout"),
     })
@@ -238,7 +266,7 @@ def step_layout(demo):
 
     units = list(QgsVectorLayer(demo.layer_uri("units"), "units", "ogr").getFeatures())
     primary = sum(1 for f in units if f["role"] == "primary")
-    print(f"    {primary} primary and {len(units) - primary} reserve 1 ha plots, spatially balanced ({how}); "
+    print(f"    {primary} primary and {len(units) - primary} reserve {PLOT_HA:g} ha plots, spatially balanced ({how}); "
           f"waypoints in units.gpx")
 
 
@@ -287,7 +315,7 @@ def step_estimate(demo):
         "REPORT": demo.report("07_estimate"),
     })
     demo.results["estimate"] = results
-    demo.layers.append(("Density estimate by stratum", demo.layer_uri("strata_estimate"), "ogr", "strata"))
+    demo.layers.append(("Density estimate by stratum", demo.layer_uri("strata_estimate"), "ogr", "estimate"))
     covered = results["ABUNDANCE_LO"] <= true_total <= results["ABUNDANCE_HI"]
     print(f"    estimated {results['ABUNDANCE']:,.0f} velmar (95% CI {results['ABUNDANCE_LO']:,.0f} to "
           f"{results['ABUNDANCE_HI']:,.0f}, CV {results['CV']:.3f}); true total in the frame {true_total:,.0f} "
@@ -298,6 +326,42 @@ def step_compare(demo):
     """Designs compared by simulation on the true intensity surface (issue 8)."""
     if not demo.available("plotwise:comparedesigns"):
         return
+    if demo.results.get("reserve") is None:
+        print("  plotwise:comparedesigns skipped: no demo reserve (no intensity surface)")
+        return
+    frame, stratify = demo.results.get("frame"), demo.results.get("stratify")
+    if frame is not None:
+        source = {"FRAME": frame["OUTPUT"]}
+        where = "the sampling frame"
+    else:  # the frame step is absent: the reserve boundary stands in for the frame
+        source = {"FRAME": demo.layer_uri("reserve")}
+        where = "the reserve boundary (no frame step)"
+    if stratify is not None:
+        source.update({"STRATA": stratify["OUTPUT"], "STRATUM_FIELD": "stratum"})
+    else:
+        where += ", without strata (the stratified designs are left out)"
+    results = demo.run("plotwise:comparedesigns", {
+        **source,
+        "SURFACE": str(demo.out / "velmar_per_km2.tif"),  # the true expected velmar per km² of the demo
+        "DESIGNS": [0, 1, 2, 3, 4],
+        "N_UNITS": 60,
+        "SHAPE": 1, "SIZE": PLOT_SIDE, "BEARING": 0.0,  # the square plots of the layout step
+        "REPLICATES": 400,
+        "OVERDISPERSION": 1.0,  # velmar live in groups: counts far more variable than Poisson
+        "N_RANGE": "30, 60, 120",
+        "SEED": SEED + 4,
+        "OUTPUT_TABLE": demo.table("design_comparison"),
+        "REPORT": demo.report("08_design_comparison"),
+    })
+    demo.results["compare"] = results
+    from qgis.core import QgsVectorLayer
+
+    rows = sorted(QgsVectorLayer(demo.layer_uri("design_comparison"), "designs", "ogr").getFeatures(),
+                  key=lambda f: f["rmse"])
+    print(f"    five designs, 60 plots, 400 simulated surveys each over {where}; recommended: "
+          f"{results['RECOMMENDED']}")
+    for f in rows:
+        print(f"      {f['design']:<24s} RMSE {f['rmse']:7.1f} ({f['rel_rmse']:.1%})  coverage {f['coverage']:.0%}")
 
 
 STEPS = [step_reserve, step_frame, step_stratify, step_pilot, step_allocate, step_layout, step_counts, step_estimate, step_compare]
@@ -327,22 +391,11 @@ def write_project(demo):
 
 
 def apply_style(styles, layer, style):
-    if style == "terrain":
-        styles.pseudocolour(layer, "Greys")
-    elif style == "greenness":
-        styles.pseudocolour(layer, "Greens")
-    elif style == "intensity":
-        styles.pseudocolour(layer, "Viridis")
-    elif style == "outline":
-        styles.outline(layer, width=0.8)
-    elif style == "hatched":
-        styles.hatched(layer)
-    elif style == "dots":
-        styles.dots(layer)
-    elif style == "strata":
-        styles.categorised(layer, "stratum")
-    elif style == "units":
-        styles.categorised(layer, "role", opacity=1.0)
+    """The same named styles as the algorithms' outputs get when they load (processing/styles.py)."""
+    try:
+        styles.apply_style(layer, style)
+    except KeyError as error:
+        print(f"  warning: layer {layer.name()} keeps the default style ({error})")
 
 
 def copy_rasters_into_geopackage(demo):
@@ -357,6 +410,254 @@ def copy_rasters_into_geopackage(demo):
                        creationOptions=[f"RASTER_TABLE={table}", "APPEND_SUBDATASET=YES", "TILE_FORMAT=TIFF"])
 
 
+# -- print layout (issue 7) -----------------------------------------------------------
+PRINT_LAYOUT_NAME = "Survey map (A4)"
+NORTH_ARROW_SVG = (  # our own arrow, the one the report maps draw
+    '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 40 60" width="40" height="60">'
+    '<text x="20" y="18" font-size="18" font-family="DejaVu Sans, sans-serif" font-weight="bold" '
+    'fill="#1f3a44" text-anchor="middle">N</text>'
+    '<path d="M20,22 L8,58 L20,48 L32,58 Z" fill="#1f3a44"/></svg>'
+)
+
+
+def _layout_enum(*getters):
+    for getter in getters:
+        try:
+            return getter()
+        except AttributeError:
+            continue
+    raise AttributeError("no compatible enum")
+
+
+def _text_format(size, bold=False, colour="#1f3a44"):
+    from qgis.core import QgsTextFormat
+    from qgis.PyQt.QtGui import QColor, QFont
+
+    text = QgsTextFormat()
+    font = QFont("DejaVu Sans")
+    font.setBold(bold)
+    text.setFont(font)
+    text.setSize(size)
+    text.setColor(QColor(colour))
+    return text
+
+
+def _label(layout, text, x, y, w, h, size, bold=False, colour="#1f3a44"):
+    from qgis.core import QgsLayoutItemLabel, QgsLayoutPoint, QgsLayoutSize
+
+    label = QgsLayoutItemLabel(layout)
+    label.setText(text)
+    if hasattr(label, "setTextFormat"):  # 3.24 and later
+        label.setTextFormat(_text_format(size, bold, colour))
+    else:  # 3.22
+        from qgis.PyQt.QtGui import QColor, QFont
+
+        font = QFont("DejaVu Sans")
+        font.setPointSizeF(size)
+        font.setBold(bold)
+        label.setFont(font)
+        label.setFontColor(QColor(colour))
+    layout.addLayoutItem(label)
+    label.attemptMove(QgsLayoutPoint(x, y))
+    label.attemptResize(QgsLayoutSize(w, h))
+    return label
+
+
+def add_print_layout(project, title, map_layers, table_layer=None, table_columns=None, note=""):
+    """Add an A4 landscape print layout to ``project`` and return it.
+
+    The layout holds the map of ``map_layers`` (top of the list drawn on top), a legend of
+    those layers (a layer's title, when set, names its legend entry), a scale bar in
+    kilometres, a north arrow, an attribute table of ``table_layer`` (``table_columns``:
+    ``[(field or expression, heading), ...]``; default: its first fields), the title, the
+    date of printing (an expression, so it is the date the layout is printed) and ``note``.
+    """
+    import base64
+
+    from qgis.core import (
+        Qgis,
+        QgsCoordinateTransform,
+        QgsLayerTreeLayer,
+        QgsLayoutFrame,
+        QgsLayoutItemAttributeTable,
+        QgsLayoutItemLegend,
+        QgsLayoutItemMap,
+        QgsLayoutItemPage,
+        QgsLayoutItemPicture,
+        QgsLayoutItemScaleBar,
+        QgsLayoutPoint,
+        QgsLayoutSize,
+        QgsLayoutTableColumn,
+        QgsLegendStyle,
+        QgsPrintLayout,
+        QgsRectangle,
+        QgsUnitTypes,
+    )
+    from qgis.PyQt.QtGui import QColor
+
+    manager = project.layoutManager()
+    old = manager.layoutByName(PRINT_LAYOUT_NAME)
+    if old is not None:
+        manager.removeLayout(old)
+    layout = QgsPrintLayout(project)
+    layout.initializeDefaults()
+    layout.setName(PRINT_LAYOUT_NAME)
+    landscape = _layout_enum(lambda: QgsLayoutItemPage.Orientation.Landscape, lambda: QgsLayoutItemPage.Landscape)
+    layout.pageCollection().page(0).setPageSize("A4", landscape)  # 297 × 210 mm
+
+    _label(layout, title, 10, 7, 277, 10, 18, bold=True)
+    _label(layout, "Printed [% format_date(now(), 'yyyy-MM-dd') %]" + (f" · {note}" if note else ""),
+           10, 17, 277, 6, 9, colour="#5f6f73")
+
+    # map
+    crs = project.crs()
+    boxes = []
+    for layer in map_layers:
+        box = layer.extent()
+        if layer.crs() != crs:
+            box = QgsCoordinateTransform(layer.crs(), crs, project).transformBoundingBox(box)
+        if not box.isEmpty():
+            boxes.append((box.xMinimum(), box.yMinimum(), box.xMaximum(), box.yMaximum()))
+    extent = QgsRectangle(min(b[0] for b in boxes), min(b[1] for b in boxes), max(b[2] for b in boxes), max(b[3] for b in boxes))
+    extent.scale(1.06)
+    chart = QgsLayoutItemMap(layout)
+    chart.setCrs(crs)
+    chart.setLayers(list(map_layers))
+    chart.setKeepLayerSet(True)
+    chart.setFrameEnabled(True)
+    chart.setFrameStrokeColor(QColor("#1f3a44"))
+    layout.addLayoutItem(chart)
+    map_height = 118 if table_layer is not None else 178
+    chart.attemptMove(QgsLayoutPoint(10, 25))
+    chart.attemptResize(QgsLayoutSize(200, map_height))
+    # the extent with the map item's aspect ratio, centred on the layers
+    ratio = 200.0 / map_height
+    width, height = max(extent.width(), extent.height() * ratio), max(extent.height(), extent.width() / ratio)
+    centre = extent.center()
+    chart.setExtent(QgsRectangle(centre.x() - width / 2, centre.y() - height / 2, centre.x() + width / 2, centre.y() + height / 2))
+
+    # north arrow and scale bar on the map
+    arrow = QgsLayoutItemPicture(layout)
+    arrow.setPicturePath("base64:" + base64.b64encode(NORTH_ARROW_SVG.encode("utf-8")).decode("ascii"))
+    layout.addLayoutItem(arrow)
+    arrow.attemptMove(QgsLayoutPoint(196, 28))
+    arrow.attemptResize(QgsLayoutSize(10, 15))
+    bar = QgsLayoutItemScaleBar(layout)
+    bar.setStyle("Single Box")
+    bar.setLinkedMap(chart)
+    kilometres = _layout_enum(lambda: Qgis.DistanceUnit.Kilometers, lambda: QgsUnitTypes.DistanceKilometers)
+    bar.applyDefaultSize(kilometres)
+    bar.setUnitLabel("km")
+    bar.setNumberOfSegmentsLeft(0)
+    bar.setBackgroundEnabled(True)
+    bar.setBackgroundColor(QColor(255, 255, 255, 220))
+    layout.addLayoutItem(bar)
+    bar.attemptMove(QgsLayoutPoint(13, 25 + map_height - 14))
+
+    # legend of the map's layers
+    legend = QgsLayoutItemLegend(layout)
+    legend.setTitle("Legend")
+    legend.setLinkedMap(chart)
+    legend.setAutoUpdateModel(False)
+    root = legend.model().rootGroup()
+    root.removeAllChildren()
+    for layer in map_layers:
+        node = root.addLayer(layer)
+        if layer.title():
+            node.setUseLayerName(False)
+            node.setName(layer.title())
+    legend.setStyleFont(QgsLegendStyle.Title, _text_format(11, bold=True).font())
+    legend.setSymbolWidth(6)
+    legend.setSymbolHeight(4)
+    legend.setWrapString("¶")
+    layout.addLayoutItem(legend)
+    legend.attemptMove(QgsLayoutPoint(215, 25))
+    legend.attemptResize(QgsLayoutSize(72, map_height))
+    legend.setResizeToContents(False)
+    legend.adjustBoxSize()
+
+    # the table
+    if table_layer is not None:
+        table = QgsLayoutItemAttributeTable.create(layout)
+        table.setVectorLayer(table_layer)
+        table.setMaximumNumberOfFeatures(20)
+        columns = table_columns or [
+            (f'format_number("{f.name()}", 2)' if f.isNumeric() and f.typeName().lower().startswith(("real", "double")) else f.name(), f.name())
+            for f in list(table_layer.fields())[:9] if f.name() not in ("fid",)
+        ]
+        table_fields = []
+        for expression, heading in columns:
+            column = QgsLayoutTableColumn(heading)
+            column.setAttribute(expression)
+            table_fields.append(column)
+        table.setColumns(table_fields)
+        table.setHeaderTextFormat(_text_format(7.5, bold=True))
+        table.setContentTextFormat(_text_format(7.5))
+        table.setGridColor(QColor("#d7dedc"))
+        layout.addMultiFrame(table)
+        frame = QgsLayoutFrame(layout, table)
+        frame.attemptMove(QgsLayoutPoint(10, 25 + map_height + 4))
+        frame.attemptResize(QgsLayoutSize(277, 205 - (25 + map_height + 4) - 8))
+        table.addFrame(frame)
+
+    _label(layout, "Check every unit's access and safety before sending a team; this map never makes a location "
+           "safe. Follow your agency's field-safety rules and local law.", 10, 199, 277, 6, 7.5, colour="#5f6f73")
+    manager.addLayout(layout)
+    return layout
+
+
+def export_pdf(layout, path):
+    """Export ``layout`` to a PDF at ``path``; raise RuntimeError when the host cannot."""
+    from qgis.core import QgsLayoutExporter
+
+    settings = QgsLayoutExporter.PdfExportSettings()
+    settings.dpi = 200
+    result = QgsLayoutExporter(layout).exportToPdf(str(path), settings)
+    if result != QgsLayoutExporter.Success:
+        raise RuntimeError(f"the print layout could not be exported to {path} (code {result})")
+    return path
+
+
+def write_print_layout(demo, project_path):
+    """The demo's A4 print layout, saved in the project and exported to PDF (issue 7)."""
+    from qgis.core import QgsProject, QgsVectorLayer
+
+    project = QgsProject.instance()
+    by_name = {layer.name(): layer for layer in project.mapLayers().values()}
+
+    def first(*names):
+        return next((by_name[n] for n in names if n in by_name), None)
+
+    map_layers = [layer for layer in (
+        first("Units with counts", "Sample units"), first("Sampling frame"),
+        first("Density estimate by stratum", "Strata with units allocated", "Strata"),
+        first("Excluded areas"), first("Reserve boundary"),
+    ) if layer is not None]
+    if not map_layers:
+        print("  print layout skipped: no map layer")
+        return None
+    table = QgsVectorLayer(demo.layer_uri("estimate_table"), "Estimate table", "ogr")
+    columns = None
+    if table.isValid():
+        project.addMapLayer(table)
+        unit = "km²"  # step_estimate asks for AREA_UNIT 0 (km²) at 95 %
+        columns = [
+            ("stratum", "Stratum"), ('format_number("area", 1)', f"Area ({unit})"), ("n", "Units"),
+            ('format_number("mean_c", 2)', "Mean count"), ('format_number("dens", 2)', f"Density per {unit}"),
+            ("format_number(\"dens_lo\", 2) || ' – ' || format_number(\"dens_hi\", 2)", "95 % interval"),
+            ('format_number("abund", 0)', "Abundance"),
+            ("format_number(\"abund_lo\", 0) || ' – ' || format_number(\"abund_hi\", 0)", "95 % interval"),
+            ('format_number("cv", 3)', "CV"), ("n_next", "Units next time"),
+        ]
+    else:
+        table = first("Strata with units allocated", "Strata", "Units with counts", "Sample units")
+    layout = add_print_layout(project, project.title(), map_layers, table, columns,
+                              note="invented demo data, not a real reserve")
+    project.write(str(project_path))
+    pdf = export_pdf(layout, demo.out / "plotwise-demo-map.pdf")
+    return pdf
+
+
 def main():
     if OUT.exists():
         shutil.rmtree(OUT)
@@ -368,14 +669,20 @@ def main():
         step(demo)
     copy_rasters_into_geopackage(demo)
     project = write_project(demo)
+    pdf = write_print_layout(demo, project)
     print("\nWritten to", OUT)
     print("  GeoPackage:", demo.gpkg)
     print("  Project:   ", project)
+    if pdf:
+        print("  Print map: ", pdf)
     for report in demo.reports:
         print("  Report:    ", report)
     print("\nCaution: the demo reserve is invented. Before real fieldwork, check every unit's access and "
           "safety; the tool never makes a location safe. Follow your agency's field-safety rules and local law.")
-    app.exitQgis()
+    sys.stdout.flush()
+    sys.stderr.flush()
+    # PyQGIS can crash while tearing down a standalone application; everything is written by now
+    os._exit(0)
 
 
 if __name__ == "__main__":
