@@ -358,7 +358,7 @@ def step_compare(demo):
 
     rows = sorted(QgsVectorLayer(demo.layer_uri("design_comparison"), "designs", "ogr").getFeatures(),
                   key=lambda f: f["rmse"])
-    print(f"    five designs, 60 plots, 400 simulated surveys each over {where}; recommended: "
+    print(f"    five designs, 60 plots of {PLOT_HA:g} ha, 400 simulated surveys each over {where}; recommended: "
           f"{results['RECOMMENDED']}")
     for f in rows:
         print(f"      {f['design']:<24s} RMSE {f['rmse']:7.1f} ({f['rel_rmse']:.1%})  coverage {f['coverage']:.0%}")

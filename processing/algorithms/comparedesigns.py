@@ -280,12 +280,13 @@ class CompareDesigns(PlotwiseAlgorithm):
             region = engine.counting_region(shape, size, half_width)
             setup = engine.prepare_comparison(grid, frame, region, shape, size, rng, strata, keys, bearing, k)
             warnings.extend(setup.warnings)
-            main_end = 70.0 if n_range else 95.0
+            main_end = 70.0 if [m for m in n_range if m != n_units] else 95.0
             comparison = engine.compare_designs(
                 setup, designs, n_units, replicates, rng, variance_method=variance_method,
                 progress=self.progress_callback(feedback, 6, main_end))
             warnings.extend(comparison.warnings)
             curve = []
+            n_range = tuple(m for m in n_range if m != n_units)  # the main comparison stands for N_UNITS
             for i, m in enumerate(n_range):
                 start = main_end + (95.0 - main_end) * i / len(n_range)
                 stop = main_end + (95.0 - main_end) * (i + 1) / len(n_range)
