@@ -80,6 +80,7 @@ class Estimate(PlotwiseAlgorithm):
     STRATUM_FIELD = "STRATUM_FIELD"
     UNIT_AREA_FIELD = "UNIT_AREA_FIELD"
     UNIT_AREA = "UNIT_AREA"
+    STRIP_WIDTH = "STRIP_WIDTH"
     STRATA = "STRATA"
     STRATA_ID_FIELD = "STRATA_ID_FIELD"
     CONFIDENCE = "CONFIDENCE"
@@ -119,7 +120,8 @@ class Estimate(PlotwiseAlgorithm):
             "skipped quietly; reserves that were surveyed count like any other unit. 0 means surveyed, "
             "none seen. Negative or non-numeric counts stop the run, naming the units.\n\n"
             "Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is "
-            "above 0, else the polygon's area, else the fixed unit area for points and lines.\n\n"
+            "above 0, else the polygon's area, else for lines the strip width × the line's length, else the "
+            "fixed unit area for points and lines.\n\n"
             "Strata: polygons with an id field matching the units' stratum field; their areas define the "
             "frame. When the units have no stratum field, or the strata layer is a single polygon without "
             "an id field, all units form one stratum over the frame. A "
@@ -159,6 +161,9 @@ class Estimate(PlotwiseAlgorithm):
             optional=True))
         self.addParameter(QgsProcessingParameterNumber(
             self.UNIT_AREA, self.tr("Fixed unit area for points and lines (m²; 0: not used)"),
+            type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0))
+        self.addParameter(QgsProcessingParameterNumber(
+            self.STRIP_WIDTH, self.tr("Strip width of line transects (m, full width; 0: not used)"),
             type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0))
         self.addParameter(QgsProcessingParameterFeatureSource(
             self.STRATA, self.tr("Strata (the frame)"), [compat.TYPE_VECTOR_POLYGON]))
@@ -320,7 +325,8 @@ class Estimate(PlotwiseAlgorithm):
         touching = variance.adjacent_strata([frame_geoms[k] for k in frame_labels])
         neighbours = {frame_labels[i]: [frame_labels[j] for j in js] for i, js in touching.items()}
 
-        unit_areas_m2 = self._unit_areas(records, area_field, unit_area_m2, ids, counts, units_name)
+        strip_width = self.parameterAsDouble(parameters, self.STRIP_WIDTH, context)
+        unit_areas_m2 = self._unit_areas(records, area_field, unit_area_m2, strip_width, ids, counts, units_name)
         coords = None
         if settings["variance_method"] == estimation.VARIANCE_LOCAL:
             coords = np.array([[g.centroid.x, g.centroid.y] if g is not None else [np.nan, np.nan]
@@ -377,7 +383,8 @@ class Estimate(PlotwiseAlgorithm):
 
         report = self._report(result, stratum_areas, frame_geoms, records, keep, unit_strata, warnings, dict(
             units=units_name, strata=strata_name, count_field=count_field, stratum_field=stratum_field,
-            area_field=area_field, unit_area_m2=unit_area_m2, area_unit=UNIT_NAMES[area_unit], crs=crs.authid(),
+            area_field=area_field, unit_area_m2=unit_area_m2, strip_width=strip_width,
+            area_unit=UNIT_NAMES[area_unit], crs=crs.authid(),
             seed=None if seeded is None else seeded.seed, true_total=true_total))
         report_path = self.write_report(report, parameters, context, feedback)
         overall = result.overall
@@ -396,26 +403,17 @@ class Estimate(PlotwiseAlgorithm):
         }
 
     # ------------------------------------------------------------------------------
-    def _unit_areas(self, records, area_field, unit_area_m2, ids, counts, layer):
-        """Per unit: the area field when above 0, else the polygon area, else the fixed unit area (m²)."""
-        n = len(records)
-        areas = np.full(n, np.nan)
-        if area_field:
-            values = np.array([v if isinstance(v, (int, float)) and not isinstance(v, bool) else np.nan
-                               for v in records.attributes[area_field]], dtype=float)
-            areas = np.where(values > 0, values, np.nan)
-        polygonal = np.array([g is not None and g.geom_type in ("Polygon", "MultiPolygon") for g in records.geometries])
-        polygon_area = np.array([g.area if p else np.nan for g, p in zip(records.geometries, polygonal)])
-        areas = np.where(np.isnan(areas) & polygonal, polygon_area, areas)
-        if unit_area_m2 > 0:
-            areas = np.where(np.isnan(areas) | (areas <= 0), unit_area_m2, areas)
+    def _unit_areas(self, records, area_field, unit_area_m2, strip_width, ids, counts, layer):
+        """Surveyed area per unit in m² (see :func:`estimation.surveyed_areas`); an error names units without."""
+        areas = estimation.surveyed_areas(
+            records.geometries, records.attributes[area_field] if area_field else None, unit_area_m2, strip_width)
         surveyed = np.array([c is not None for c in counts])
-        lacking = surveyed & ~(areas > 0)
+        lacking = surveyed & np.isnan(areas)
         if lacking.any():
             raise QgsProcessingException(self.tr(
-                "Layer '{layer}': units {ids} have no surveyed area. Point and line units need the unit area field "
-                "(area_m2 above 0) or a fixed unit area (m²); polygons use their own area.").format(
-                layer=layer, ids=bridge.id_list(ids[lacking])))
+                "Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field "
+                "(area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed "
+                "unit area; polygons use their own area.").format(layer=layer, ids=bridge.id_list(ids[lacking])))
         return areas
 
     def _design_note(self, attrs, unit_strata, keep):
@@ -487,8 +485,9 @@ class Estimate(PlotwiseAlgorithm):
             tr("Count field"): info["count_field"] + (tr(" (presence/absence)") if presence else ""),
             tr("Stratum field"): info["stratum_field"] or tr("none: one stratum"),
             tr("Unit area"): (tr("field {field} (m²)").format(field=info["area_field"]) if info["area_field"]
-                              else tr("polygon area")) + (f"; {tr('fixed')} {info['unit_area_m2']:g} m²"
-                                                          if info["unit_area_m2"] > 0 else ""),
+                              else tr("polygon area"))
+            + (f"; {tr('strip width')} {info['strip_width']:g} m" if info["strip_width"] > 0 else "")
+            + (f"; {tr('fixed')} {info['unit_area_m2']:g} m²" if info["unit_area_m2"] > 0 else ""),
             tr("Strata (frame)"): info["strata"],
             tr("Computation CRS"): info["crs"],
             tr("Area unit"): per,

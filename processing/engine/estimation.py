@@ -322,6 +322,43 @@ def read_counts(counts, unit_ids, count_name="count"):
     return values
 
 
+def surveyed_areas(geometries, area_values=None, fixed_area=0.0, strip_width=0.0):
+    """The surveyed area of each unit (m² in, m² out), by the first rule that applies.
+
+    1. ``area_values`` (e.g. the layout's ``area_m2``) when above 0;
+    2. the polygon's own area;
+    3. for lines, ``strip_width × length`` (a strip transect of that full width)
+       when ``strip_width`` is above 0;
+    4. ``fixed_area`` when above 0 (point stations, or lines of equal length).
+
+    Returns
+    -------
+    numpy.ndarray
+        NaN where no rule applies.
+    """
+    n = len(geometries)
+    areas = np.full(n, np.nan)
+    if area_values is not None:
+        raw = np.asarray(area_values, dtype=object).ravel()
+        numeric = np.array([isinstance(v, (int, float, np.integer, np.floating)) and not isinstance(v, bool)
+                            for v in raw], dtype=bool)
+        values = np.where(numeric, raw, np.nan).astype(float)
+        areas = np.where(values > 0, values, np.nan)
+    kinds = np.array([g.geom_type if g is not None and not g.is_empty else "" for g in geometries], dtype=object)
+    polygonal = np.isin(kinds, ["Polygon", "MultiPolygon"])
+    linear = np.isin(kinds, ["LineString", "MultiLineString"])
+    need = np.isnan(areas)
+    for i in np.flatnonzero(need & polygonal):
+        areas[i] = geometries[i].area
+    if strip_width > 0:
+        for i in np.flatnonzero(need & linear):
+            areas[i] = strip_width * geometries[i].length
+    if fixed_area > 0:
+        areas = np.where(np.isnan(areas) | (areas <= 0), fixed_area, areas)
+    areas[~(areas > 0)] = np.nan
+    return areas
+
+
 # --------------------------------------------------------------------------- the estimator
 
 

@@ -366,3 +366,16 @@ def test_overall_intervals_by_every_method():
     assert by_method["lognormal"] == pytest.approx((ln_run.overall.abund_lo, ln_run.overall.abund_hi), rel=REL)
     assert by_method["bootstrap"] == (boot_run.overall.abund_lo, boot_run.overall.abund_hi)
     assert boot_run.bootstrap_totals.shape == (2000,) and t_run.bootstrap_totals is None
+
+
+def test_surveyed_areas_follow_the_rules_in_order():
+    from shapely.geometry import LineString, Point, box
+
+    geometries = [box(0, 0, 100, 100), box(0, 0, 10, 10), LineString([(0, 0), (300, 400)]), Point(5, 5), None]
+    field = [None, 50.0, None, 0, None]
+    areas = est.surveyed_areas(geometries, field, fixed_area=0.0, strip_width=20.0)
+    # polygon area (shapely as oracle), the field, strip × length (500 m), nothing for the point
+    assert areas[0] == pytest.approx(10_000.0) and areas[1] == 50.0 and areas[2] == pytest.approx(20.0 * 500.0)
+    assert np.isnan(areas[3]) and np.isnan(areas[4])
+    with_fixed = est.surveyed_areas(geometries, field, fixed_area=700.0)
+    assert with_fixed[2] == 700.0 and with_fixed[3] == 700.0 and with_fixed[4] == 700.0

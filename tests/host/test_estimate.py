@@ -272,3 +272,25 @@ def test_without_stratum_field_the_frame_is_one_stratum(registered, run_alg, tmp
     assert results["DENSITY_SE"] == pytest.approx(np.std(values, ddof=1) / math.sqrt(len(values)) / 0.01, rel=1e-9)
     rows = {f["stratum"]: f for f in _layer(results["OUTPUT_TABLE"]).getFeatures()}
     assert set(rows) == {"frame", "all"}
+
+
+def test_line_transects_use_strip_width_times_length(registered, run_alg, tmp_path):
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer("LineString?crs=EPSG:32633", "transects", "memory")
+    layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("count", "int")])
+    layer.updateFields()
+    features, lengths = [], {1: [400, 500, 600], 2: [300, 500]}
+    counts = {1: [4, 6, 5], 2: [9, 12]}
+    for h in (1, 2):
+        for i, (length, count) in enumerate(zip(lengths[h], counts[h])):
+            x = STRATA[h][0] + 100 + 200 * i
+            f = QgsFeature(layer.fields())
+            f.setGeometry(QgsGeometry.fromWkt(f"LINESTRING({x} 50, {x} {50 + length})"))
+            f.setAttributes([h, count])
+            features.append(f)
+    layer.dataProvider().addFeatures(features)
+    results, _ = _run(run_alg, tmp_path, layer, STRIP_WIDTH=40.0)
+    # ratio estimator, Cochran (1977), eq. 6.1: Σy / Σ(w·L) per stratum, times the stratum area (km²)
+    expected = sum(sum(counts[h]) / (40.0 * sum(lengths[h]) / 1e6) * area for h, area in ((1, 2.0), (2, 1.0)))
+    assert results["ABUNDANCE"] == pytest.approx(expected, rel=1e-9)
