@@ -19,6 +19,7 @@ with Satterthwaite's effective degrees of freedom (Cochran 1977, eq. 5.16),
 log-normal (Burnham et al. 1987; Buckland et al. 2001, eq. 3.71), or a
 stratified percentile bootstrap (Efron & Tibshirani 1993; Buckland et al. 2001).
 
+Equation numbers of Cochran (1977) are given from memory; the formulas are written out.
 Nothing here imports the host.
 """
 from dataclasses import dataclass, field, replace

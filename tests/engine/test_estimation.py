@@ -1,4 +1,8 @@
-"""Stratified density and abundance: checks against formulas, a published example and hand cases."""
+"""Stratified density and abundance: checks against formulas, a published example and hand cases.
+
+Equation numbers of Cochran (1977) are cited from memory (the formulas themselves are
+written out in the tests); the Thompson example is marked from memory where it is used.
+"""
 import math
 
 import numpy as np

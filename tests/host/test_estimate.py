@@ -1,4 +1,8 @@
-"""plotwise:estimate run through the host's Processing framework on small memory layers with known numbers."""
+"""plotwise:estimate run through the host's Processing framework on small memory layers with known numbers.
+
+Expected values are recomputed here from the textbook formulas (Cochran 1977; equation
+numbers from memory) with numpy and scipy.stats.
+"""
 import math
 
 import numpy as np
