@@ -6,6 +6,7 @@ from qgis.core import QgsMessageLog, QgsProcessingModelAlgorithm, QgsProcessingP
 from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
+from .algorithms.base import translatable
 from .algorithms.allocate import Allocate
 from .algorithms.buildframe import BuildFrame
 from .algorithms.comparedesigns import CompareDesigns
@@ -29,6 +30,61 @@ ALGORITHM_CLASSES = [
     SimulateCounts,
     Stratify,
 ]
+
+
+# name in the .model3 file -> (display name, help); translated when shown
+EXAMPLE_CHAINS = {
+    "plan_survey": (
+        translatable("ExampleChain", "Example chain: plan a survey (frame, strata, effort, layout)"),
+        translatable("ExampleChain",
+            "Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws "
+            "k-means strata from the covariate rasters, allocates the units by Neyman allocation with the "
+            "covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 "
+            "reserve units per stratum. Open it in the modeler to change any step. Check every unit's access "
+            "and safety before sending a team: the tool never makes a location safe. Follow your agency's "
+            "field-safety rules and local law."),
+    ),
+    "estimate_simulated_counts": (
+        translatable("ExampleChain", "Example chain: estimate from simulated counts"),
+        translatable("ExampleChain",
+            "For training: fills the units' count field from a simulated population, then estimates density "
+            "and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units "
+            "instead."),
+    ),
+}
+
+
+translatable("ExampleChain", "Example chains")
+
+
+def _tr(context, text):
+    return QCoreApplication.translate(context, text)
+
+
+class ExampleChain(QgsProcessingModelAlgorithm):
+    """An example .model3 chain with a translated name and help."""
+
+    def __init__(self, path):
+        super().__init__()
+        self.path = path
+        self.loaded = self.fromFile(path)
+
+    def displayName(self):  # noqa: N802
+        entry = EXAMPLE_CHAINS.get(self.name())
+        return _tr("ExampleChain", entry[0]) if entry else super().displayName()
+
+    def shortHelpString(self):  # noqa: N802
+        entry = EXAMPLE_CHAINS.get(self.name())
+        return _tr("ExampleChain", entry[1]) if entry else super().shortHelpString()
+
+    def group(self):
+        return _tr("ExampleChain", "Example chains")  # marked below for the translators
+
+    def groupId(self):  # noqa: N802
+        return "examples"
+
+    def createInstance(self):  # noqa: N802
+        return ExampleChain(self.path)
 
 
 class PlotwiseProvider(QgsProcessingProvider):
@@ -55,8 +111,8 @@ class PlotwiseProvider(QgsProcessingProvider):
 
     def add_model(self, path):
         """Offer an example chain (.model3) in the toolbox, under the provider."""
-        model = QgsProcessingModelAlgorithm()
-        if model.fromFile(path):
+        model = ExampleChain(path)
+        if model.loaded:
             self.addAlgorithm(model)
         else:
             QgsMessageLog.logMessage(

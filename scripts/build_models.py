@@ -1,0 +1,135 @@
+"""Write the example chains in processing/models/ (.model3) with the host's model API.
+
+Their display names and help live in processing/provider.py (EXAMPLE_CHAINS), so that they are translated.
+
+Run: .venv/bin/python scripts/build_models.py   (the provider offers the files in the toolbox)
+"""
+import os
+import sys
+from pathlib import Path
+
+REPO = Path(__file__).resolve().parents[1]
+MODELS = REPO / "processing" / "models"
+
+
+def start_host():
+    os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
+    sys.path[:] = [p for p in sys.path if p not in ("", ".") and Path(p).resolve() != REPO]
+    sys.path.insert(0, "/usr/share/qgis/python/plugins")
+    sys.path.insert(0, str(REPO / "tests"))
+    import conftest  # noqa: F401
+    from qgis.core import QgsApplication
+
+    app = QgsApplication([], False)
+    app.initQgis()
+    from processing.core.Processing import Processing
+
+    Processing.initialize()
+    from plotwise.processing.provider import PlotwiseProvider
+
+    provider = PlotwiseProvider()
+    QgsApplication.processingRegistry().addProvider(provider)
+    return app, provider
+
+
+def build():
+    from qgis.core import (
+        QgsProcessingModelAlgorithm as Model,
+        QgsProcessingModelChildAlgorithm as Child,
+        QgsProcessingModelChildParameterSource as Source,
+        QgsProcessingModelOutput as Output,
+        QgsProcessingModelParameter as ModelParameter,
+        QgsProcessingParameterBoolean,
+        QgsProcessingParameterFeatureSource,
+        QgsProcessingParameterMultipleLayers,
+        QgsProcessingParameterNumber,
+        QgsProcessingParameterRasterLayer,
+    )
+    from qgis.PyQt.QtCore import QPointF
+
+    from plotwise.plugin import compat
+
+    def parameter(model, definition, x, y):
+        model.addModelParameter(definition, ModelParameter(definition.name()))
+        model.parameterComponent(definition.name()).setPosition(QPointF(x, y))
+
+    def child(model, child_id, algorithm_id, description, sources, outputs, x, y):
+        step = Child(algorithm_id)
+        step.setChildId(child_id)
+        step.setDescription(description)
+        step.setPosition(QPointF(x, y))
+        for name, source in sources.items():
+            step.addParameterSources(name, [source])
+        model_outputs = {}
+        for output_name, (label, child_output) in outputs.items():
+            out = Output(label, label)
+            out.setChildId(child_id)
+            out.setChildOutputName(child_output)
+            out.setPosition(QPointF(x + 220, y + 40 * len(model_outputs)))
+            model_outputs[label] = out
+        step.setModelOutputs(model_outputs)
+        model.addChildAlgorithm(step)
+        return step
+
+    static, param, output, expr = Source.fromStaticValue, Source.fromModelParameter, Source.fromChildOutput, Source.fromExpression
+
+    # 1. frame -> strata -> effort -> layout
+    plan = Model("plan_survey", "Example chains", "examples")
+    parameter(plan, QgsProcessingParameterFeatureSource("study_area", "Study area", [compat.TYPE_VECTOR_POLYGON]), 40, 40)
+    parameter(plan, QgsProcessingParameterFeatureSource("exclusions", "Excluded areas", [compat.TYPE_VECTOR_POLYGON], optional=True), 40, 100)
+    parameter(plan, QgsProcessingParameterRasterLayer("slope", "Slope raster (degrees)", optional=True), 40, 160)
+    parameter(plan, QgsProcessingParameterNumber("max_slope", "Steepest slope surveyed (degrees)", compat.NUMBER_DOUBLE, 30.0, False, 0.0, 90.0), 40, 220)
+    parameter(plan, QgsProcessingParameterMultipleLayers("covariates", "Covariate rasters", compat.TYPE_RASTER), 40, 280)
+    parameter(plan, QgsProcessingParameterNumber("n_strata", "Number of strata", compat.NUMBER_INTEGER, 4, False, 2, 20), 40, 340)
+    parameter(plan, QgsProcessingParameterNumber("total_units", "Total number of units", compat.NUMBER_INTEGER, 60, False, 2), 40, 400)
+    parameter(plan, QgsProcessingParameterNumber("plot_side", "Side of the square plots (m)", compat.NUMBER_DOUBLE, 400.0, False, 1.0), 40, 460)
+    parameter(plan, QgsProcessingParameterNumber("seed", "Random seed (0 draws one)", compat.NUMBER_INTEGER, 1, False, 0), 40, 520)
+    child(plan, "frame", "plotwise:buildframe", "Sampling frame", {
+        "INPUT": param("study_area"), "EXCLUDE": param("exclusions"), "MASK": param("slope"),
+        "MASK_MAX": param("max_slope"), "EDGE_BUFFER": static(50.0),
+    }, {"OUTPUT": ("Sampling frame", "OUTPUT")}, 320, 40)
+    child(plan, "strata", "plotwise:stratify", "Strata", {
+        "FRAME": output("frame", "OUTPUT"), "COVARIATES": param("covariates"), "METHOD": static(3),
+        "STRATA": param("n_strata"), "MIN_AREA": static(5.0), "SEED": param("seed"),
+    }, {"OUTPUT": ("Strata", "OUTPUT")}, 320, 180)
+    child(plan, "effort", "plotwise:allocate", "Effort per stratum", {
+        "STRATA": output("strata", "OUTPUT"), "STRATUM_FIELD": static("stratum"), "AREA_FIELD": static("area_ha"),
+        "METHOD": static(2), "TOTAL": param("total_units"), "UNIT_AREA": expr("@plot_side * @plot_side"),
+        "MIN_PER_STRATUM": static(2),
+    }, {"OUTPUT": ("Strata with units allocated", "OUTPUT")}, 320, 320)
+    child(plan, "units", "plotwise:layout", "Sample units", {
+        "FRAME": output("effort", "OUTPUT"), "STRATUM_FIELD": static("stratum"), "N_FIELD": static("n_alloc"),
+        "DESIGN": static(2), "SHAPE": static(1), "SIZE": param("plot_side"), "BEARING": static(0.0),
+        "INSIDE": static(True), "MIN_SPACING": static(0.0), "RESERVE": static(3), "SEED": param("seed"),
+    }, {"OUTPUT": ("Sample units", "OUTPUT"), "OUTPUT_GPX": ("Waypoints (GPX)", "OUTPUT_GPX"),
+        "REPORT": ("Layout report", "REPORT")}, 320, 460)
+
+    # 2. simulated counts -> estimate
+    count = Model("estimate_simulated_counts", "Example chains", "examples")
+    parameter(count, QgsProcessingParameterFeatureSource("units", "Sample units", [compat.TYPE_VECTOR_ANY]), 40, 40)
+    parameter(count, QgsProcessingParameterFeatureSource("animals", "Animal points", [compat.TYPE_VECTOR_POINT]), 40, 100)
+    parameter(count, QgsProcessingParameterFeatureSource("strata", "Strata", [compat.TYPE_VECTOR_POLYGON]), 40, 160)
+    parameter(count, QgsProcessingParameterNumber("detection", "Detection probability", compat.NUMBER_DOUBLE, 1.0, False, 0.001, 1.0), 40, 220)
+    parameter(count, QgsProcessingParameterNumber("seed", "Random seed (0 draws one)", compat.NUMBER_INTEGER, 1, False, 0), 40, 280)
+    child(count, "counts", "plotwise:simulatecounts", "Simulated counts", {
+        "UNITS": param("units"), "ANIMALS": param("animals"), "DETECTION": param("detection"), "SEED": param("seed"),
+    }, {"OUTPUT": ("Units with counts", "OUTPUT")}, 320, 40)
+    child(count, "estimate", "plotwise:estimate", "Density and abundance", {
+        "UNITS": output("counts", "OUTPUT"), "COUNT_FIELD": static("count"), "STRATUM_FIELD": static("stratum"),
+        "UNIT_AREA_FIELD": static("area_m2"), "STRATA": param("strata"), "STRATA_ID_FIELD": static("stratum"),
+        "CONFIDENCE": static(0.95), "CI_METHOD": static(0), "DETECTION_P": param("detection"), "SEED": param("seed"),
+    }, {"OUTPUT": ("Estimate by stratum", "OUTPUT"), "OUTPUT_TABLE": ("Estimate table", "OUTPUT_TABLE"),
+        "REPORT": ("Estimate report", "REPORT")}, 320, 200)
+
+    MODELS.mkdir(parents=True, exist_ok=True)
+    for model in (plan, count):
+        path = MODELS / f"{model.name()}.model3"
+        assert model.toFile(str(path)), path
+        print("written", path.relative_to(REPO))
+
+
+if __name__ == "__main__":
+    app, provider = start_host()
+    build()
+    sys.stdout.flush()
+    os._exit(0)
