@@ -267,3 +267,37 @@ def test_same_seed_same_comparison():
     a, b = run(), run()
     assert np.array_equal(a.truth, b.truth)
     assert np.array_equal(a.estimate, b.estimate, equal_nan=True)
+
+
+def test_neyman_sd_is_the_sd_of_a_units_count():
+    # truth by construction: S_h against the SD of counts realised at random unit positions in the stratum
+    from plotwise.processing.engine import layout
+
+    strata = [box(0, 0, 1500, 3000), box(1500, 0, 3000, 3000)]
+    grid, frame = _grid(nx=30, ny=30, density=lambda x, y: 20 + np.where(x > 1500, 30 * y / 1000, 0.0),
+                        strata=strata, keys=[1, 2])
+    rng = np.random.default_rng(5)
+    region = dc.counting_region(1, 200.0)
+    setup = dc.prepare_comparison(grid, frame, region, 1, 200.0, rng, strata, [1, 2], overdispersion=1.5)
+    for st, code, sd, mean in zip(setup.strata.strata, setup.stratum_codes, setup.stratum_sd, setup.stratum_mean):
+        centres = layout.simple_random_centres(st, 1500, rng)
+        counts = np.empty(len(centres))
+        for i, c in enumerate(centres):  # one population per unit: independent draws
+            cells = dc.unit_cells(c[None], [0.0], region, grid, setup.factor, [code])
+            counts[i] = dc.realise_counts(cells, 1, grid, rng, 1.5).counts[0]
+        assert counts.mean() == pytest.approx(mean, rel=0.08)
+        assert counts.std(ddof=1) == pytest.approx(sd, rel=0.1)
+
+
+def test_cancel_and_local_variance():
+    from plotwise.processing.engine.errors import Cancelled
+
+    grid, frame = _grid(nx=20, ny=20, density=lambda x, y: 100 + x / 20)
+    rng = np.random.default_rng(9)
+    region = dc.counting_region(2, 50.0)
+    setup = dc.prepare_comparison(grid, frame, region, 2, 50.0, rng)
+    with pytest.raises(Cancelled):
+        dc.compare_designs(setup, [0], 10, 50, rng, progress=lambda f: True)
+    result = dc.compare_designs(setup, [3, 4], 15, 30, rng, variance_method="local")
+    for p in result.performance:
+        assert p.failed == 0 and np.isfinite(p.mean_cv) and 0 <= p.coverage <= 1
