@@ -4,32 +4,12 @@ Their display names and help live in processing/provider.py (EXAMPLE_CHAINS), so
 
 Run: .venv/bin/python scripts/build_models.py   (the provider offers the files in the toolbox)
 """
-import os
-import sys
 from pathlib import Path
+
+from headless_host import start_host, stop_host
 
 REPO = Path(__file__).resolve().parents[1]
 MODELS = REPO / "processing" / "models"
-
-
-def start_host():
-    os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
-    sys.path[:] = [p for p in sys.path if p not in ("", ".") and Path(p).resolve() != REPO]
-    sys.path.insert(0, "/usr/share/qgis/python/plugins")
-    sys.path.insert(0, str(REPO / "tests"))
-    import conftest  # noqa: F401
-    from qgis.core import QgsApplication
-
-    app = QgsApplication([], False)
-    app.initQgis()
-    from processing.core.Processing import Processing
-
-    Processing.initialize()
-    from plotwise.processing.provider import PlotwiseProvider
-
-    provider = PlotwiseProvider()
-    QgsApplication.processingRegistry().addProvider(provider)
-    return app, provider
 
 
 def build():
@@ -129,7 +109,6 @@ def build():
 
 
 if __name__ == "__main__":
-    app, provider = start_host()
+    app, processing = start_host()
     build()
-    sys.stdout.flush()
-    os._exit(0)
+    stop_host()

@@ -10,35 +10,14 @@ import sys
 from dataclasses import dataclass, field
 from pathlib import Path
 
+from headless_host import start_host, stop_host
+
 REPO = Path(__file__).resolve().parents[1]
 OUT = Path(os.environ.get("PLOTWISE_DEMO_OUT", REPO / "demo-output"))
 SEED = 20261201
 # square plots of 400 m × 400 m (16 ha): at the velmar's ~10 per km² a plot holds about 1.6 animals
 PLOT_SIDE = 400.0
 PLOT_HA = PLOT_SIDE**2 / 1e4
-
-
-def start_host():
-    os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
-    sys.path[:] = [p for p in sys.path if p not in ("", ".") and Path(p).resolve() != REPO]
-    sys.path.insert(0, "/usr/share/qgis/python/plugins")
-    sys.path.insert(0, str(REPO / "tests"))
-    import conftest  # noqa: F401  (registers the clone as the package `plotwise`)
-    from qgis.core import QgsApplication
-
-    app = QgsApplication([], False)
-    app.initQgis()
-    import processing
-    from processing.core.Processing import Processing
-
-    Processing.initialize()
-    from plotwise.processing.provider import PlotwiseProvider
-
-    provider = PlotwiseProvider()
-    if not QgsApplication.processingRegistry().addProvider(provider):
-        raise SystemExit("The Plotwise provider could not be registered.")
-    app.plotwise_provider = provider  # keep a reference for the whole run
-    return app, processing
 
 
 @dataclass
@@ -679,10 +658,7 @@ def main():
         print("  Report:    ", report)
     print("\nCaution: the demo reserve is invented. Before real fieldwork, check every unit's access and "
           "safety; the tool never makes a location safe. Follow your agency's field-safety rules and local law.")
-    sys.stdout.flush()
-    sys.stderr.flush()
-    # PyQGIS can crash while tearing down a standalone application; everything is written by now
-    os._exit(0)
+    stop_host()
 
 
 if __name__ == "__main__":
