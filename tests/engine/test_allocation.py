@@ -262,3 +262,12 @@ def test_total_out_of_range():
         al.allocate([10.0, 20.0], 1.0, "equal", total=3)  # below 2 per stratum
     with pytest.raises(InputError):
         al.allocate([10.0, 20.0], 1.0, "equal", total=31)  # more than fits
+
+
+def test_some_sd_zero_gets_the_minimum_with_warning():
+    # a pilot stratum where every unit counted 0 has S_h = 0: Neyman (1934) gives it
+    # nothing, the bound keeps MIN_PER_STRATUM  # common practice
+    result = al.allocate([50.0, 50.0, 100.0], 1.0, "neyman", total=30, sds=[0.0, 1.0, 2.0], ids=[7, 8, 9])
+    assert result.n[0] == 2 and result.n.sum() == 30
+    np.testing.assert_allclose(result.n_continuous[1:], [28 / 5, 4 * 28 / 5])  # W_h S_h = 0.25 : 1
+    assert any("zero" in w and "7" in w for w in result.warnings)
