@@ -20,6 +20,7 @@ from ...plugin import compat
 from .. import bridge
 from ..engine import design_comparison as engine
 from ..engine import estimation
+from ..engine.errors import InputError
 from ..engine.unit_shapes import LINE
 from ..report import svg
 from .base import PlotwiseAlgorithm
@@ -27,7 +28,6 @@ from .base import PlotwiseAlgorithm
 gdal.UseExceptions()
 
 M2_PER_KM2 = 1e6
-RANGE_REPLICATE_SHARE = 1.0  # the RMSE-against-n curve uses the same number of replicates
 
 REFERENCES = (
     "Cochran, W. G. (1977). Sampling Techniques, 3rd ed. Wiley (ch. 5 stratified random sampling, "
@@ -291,9 +291,12 @@ class CompareDesigns(PlotwiseAlgorithm):
                 start = main_end + (95.0 - main_end) * i / len(n_range)
                 stop = main_end + (95.0 - main_end) * (i + 1) / len(n_range)
                 feedback.pushInfo(self.tr("Simulating {n} units…").format(n=m))
-                curve.append(engine.compare_designs(
-                    setup, designs, m, max(10, int(replicates * RANGE_REPLICATE_SHARE)), rng,
-                    variance_method=variance_method, progress=self.progress_callback(feedback, start, stop)))
+                try:
+                    curve.append(engine.compare_designs(
+                        setup, designs, m, replicates, rng, variance_method=variance_method,
+                        progress=self.progress_callback(feedback, start, stop)))
+                except InputError as error:  # e.g. fewer units than two per stratum: that n is left out
+                    warnings.append(self.tr("{n} units were left out of the range: {why}").format(n=m, why=error.message))
         self.push_warnings(feedback, warnings[len(frame_records.warnings):])
 
         fields = bridge.make_fields(OUTPUT_FIELDS)

@@ -178,3 +178,24 @@ def test_transect_without_strip_is_refused(registered, run_alg, tmp_path):
             "SURFACE": _surface(tmp_path / "density.tif"), "FRAME": _polygons([(FRAME, [])]), "DESIGNS": [3],
             "SHAPE": 3, "SIZE": 500.0, "HALF_WIDTH": 0.0, "REPLICATES": 10, "OUTPUT_TABLE": "memory:",
         })
+
+
+def test_too_few_units_in_the_range_are_left_out_with_a_warning(registered, run_alg, tmp_path):
+    from qgis.core import QgsProcessingFeedback
+
+    warnings = []
+
+    class Feedback(QgsProcessingFeedback):
+        def pushWarning(self, text):  # noqa: N802
+            warnings.append(text)
+            super().pushWarning(text)
+
+    report = tmp_path / "r.html"
+    run_alg("plotwise:comparedesigns", {
+        "SURFACE": _surface(tmp_path / "density.tif"), "FRAME": _polygons([(FRAME, [])]),
+        "STRATA": _polygons(STRATA, [("stratum", "string")]), "DESIGNS": [2], "N_UNITS": 8, "N_RANGE": "3, 12",
+        "SHAPE": 3, "SIZE": 400.0, "HALF_WIDTH": 20.0, "REPLICATES": 10, "SEED": 5,
+        "OUTPUT_TABLE": "memory:", "REPORT": str(report),
+    }, feedback=Feedback())
+    assert any("3 units were left out of the range" in w for w in warnings)
+    assert "RMSE against the number of units" in report.read_text(encoding="utf-8")
