@@ -93,6 +93,7 @@ LAYOUT_DESIGN = {
 MIN_CELLS_ACROSS = 4  # a unit spans at least this many (sub-)cells: our choice, checked in the tests
 MAX_SUBDIVISION = 256
 SD_DRAWS = 400  # random unit positions per stratum for S_h
+MAX_CELLS_PER_REPLICATE = 5_000_000  # (unit, cell) pairs of one replicate: about 200 MB of work arrays
 FRAME_LABEL = "frame"
 M2_PER_KM2 = 1e6
 ACCEPTABLE_COVERAGE = 0.90  # common practice: an interval that covers less than 90 % misleads
@@ -782,6 +783,14 @@ def simulate_designs(setup, designs, n_units, replicates, rng, confidence=0.95, 
     if replicates < 2:
         raise InputError("REPLICATES must be at least 2.")
     plans = tuple(plan_design(setup, d, n_units) for d in designs)
+    units = sum(sum(plan.allocation) for plan in plans)
+    cells = units * setup.region.area / (setup.grid.cell_area / setup.factor ** 2)
+    if cells > MAX_CELLS_PER_REPLICATE:
+        raise InputError(
+            f"Each simulated survey would count about {cells / 1e6:.0f} million surface cells ({units} units of "
+            f"{setup.region.area:,.0f} m² on {setup.grid.cell_width:g} m cells), too many to simulate. Resample "
+            "the surface to coarser cells, or compare fewer designs or units."
+        )
     shape = (replicates, len(plans))
     truth = np.full(replicates, np.nan)
     est, lo, hi, cv, n = (np.full(shape, np.nan) for _ in range(5))

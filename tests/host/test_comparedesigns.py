@@ -199,3 +199,34 @@ def test_too_few_units_in_the_range_are_left_out_with_a_warning(registered, run_
     }, feedback=Feedback())
     assert any("3 units were left out of the range" in w for w in warnings)
     assert "RMSE against the number of units" in report.read_text(encoding="utf-8")
+
+
+def test_surface_in_another_crs_is_warped(registered, run_alg, tmp_path):
+    # the surface in ETRS89-LAEA (EPSG:3035), the frame in UTM 33N: the density is warped onto the frame;
+    # the expected total of a density (an intensive quantity) survives bilinear warping (truth by construction)
+    from qgis.core import QgsProcessingFeedback
+
+    source = _surface(tmp_path / "utm.tif")
+    laea = str(tmp_path / "laea.tif")
+    gdal.Warp(laea, source, dstSRS="EPSG:3035", xRes=80, yRes=80, resampleAlg="bilinear", dstNodata=-9999)
+    warnings = []
+
+    class Feedback(QgsProcessingFeedback):
+        def pushWarning(self, text):  # noqa: N802
+            warnings.append(text)
+            super().pushWarning(text)
+
+    inner = _box(X0 + 500, Y0 + 500, X0 + 3500, Y0 + 3500)
+    result = run_alg("plotwise:comparedesigns", {
+        "SURFACE": laea, "FRAME": _polygons([(inner, [])]), "DESIGNS": [0], "N_UNITS": 10, "SHAPE": 1,
+        "SIZE": 100.0, "REPLICATES": 10, "SEED": 2, "OUTPUT_TABLE": "memory:",
+    }, feedback=Feedback())
+    table = result["OUTPUT_TABLE"]
+    if isinstance(table, str):
+        from qgis.core import QgsProcessingContext, QgsProcessingUtils
+
+        table = QgsProcessingUtils.mapLayerFromString(table, QgsProcessingContext())
+    row = next(table.getFeatures())
+    expected = 3.0 * 2.0 * (math.exp(3.5) - math.exp(0.5))  # 3 km × ∫_0.5^3.5 2 e^x dx
+    assert row["true_mean"] == pytest.approx(expected, rel=0.06)
+    assert any("warped" in w for w in warnings)
