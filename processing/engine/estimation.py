@@ -819,10 +819,13 @@ def stratified_bootstrap(y, a, code, n_strata, group, area_h, p, p_se, rng, n_bo
         if n == 1 and np.sum(group == group[h]) > 1:
             pool = np.flatnonzero(np.isin(code, np.flatnonzero(group == group[h])))
         rows_per_chunk = max(1, chunk_draws // max(n, 1))
+        y_pool, a_pool = y[pool], a[pool]
+        equal_units = bool(np.all(a_pool == a_pool[0]))  # then Σa = n·a in every resample
         for b0 in range(0, n_bootstrap, rows_per_chunk):
             b1 = min(n_bootstrap, b0 + rows_per_chunk)
-            pick = pool[rng.integers(0, pool.size, size=(b1 - b0, n))]
-            per_stratum[b0:b1, h] = y[pick].sum(axis=1) / a[pick].sum(axis=1)
+            pick = rng.integers(0, pool.size, size=(b1 - b0, n), dtype=np.int32 if pool.size < 2**31 else np.int64)
+            surveyed = n * a_pool[0] if equal_units else a_pool[pick].sum(axis=1)
+            per_stratum[b0:b1, h] = y_pool[pick].sum(axis=1) / surveyed
         if progress is not None and progress(0.2 + 0.7 * (h + 1) / n_strata):
             raise Cancelled()
     per_stratum *= area_h
