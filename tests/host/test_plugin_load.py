@@ -1,6 +1,5 @@
 """Loading the plugin the way the host does: provider registration, unload, missing libraries."""
 import json
-import os
 import subprocess
 import sys
 import textwrap
@@ -9,32 +8,13 @@ from pathlib import Path
 REPO = Path(__file__).resolve().parents[2]
 
 
-def test_plugin_registers_and_unloads_provider(qgis_app, qgis_processing, qgis_iface):
-    from qgis.core import QgsApplication
-
-    import plotwise
-
-    registry = QgsApplication.processingRegistry()
-    existing = registry.providerById("plotwise")
-    if existing is not None:  # registered by another test's fixture
-        registry.removeProvider(existing)
-    plugin = plotwise.classFactory(qgis_iface)
-    plugin.initProcessing()
-    plugin.initGui()  # a second call must not register twice
-    provider = registry.providerById("plotwise")
-    assert provider is not None
-    ids = {a.id() for a in provider.algorithms()}
-    assert {"plotwise:demoreserve", "plotwise:simulatecounts"} <= ids
-    plugin.unload()
-    assert registry.providerById("plotwise") is None
-
-
-def test_missing_shapely_gives_a_message_and_no_crash(tmp_path):
-    """Without shapely the plugin loads, registers nothing and says why (issue 2)."""
-    script = textwrap.dedent(
-        f"""
-        import importlib.abc, json, os, sys
-        os.environ["QT_QPA_PLATFORM"] = "offscreen"
+LOADER = textwrap.dedent(
+    f"""
+    import json, os, sys
+    os.environ["QT_QPA_PLATFORM"] = "offscreen"
+    BLOCK_SHAPELY = {{block}}
+    if BLOCK_SHAPELY:
+        import importlib.abc
 
         class BlockShapely(importlib.abc.MetaPathFinder):
             def find_spec(self, name, path=None, target=None):
@@ -43,47 +23,70 @@ def test_missing_shapely_gives_a_message_and_no_crash(tmp_path):
                 return None
 
         sys.meta_path.insert(0, BlockShapely())
-        sys.path.insert(0, "/usr/share/qgis/python/plugins")
-        sys.path.insert(0, {str(REPO / "tests")!r})
-        import conftest  # registers the clone as `plotwise`
-        from qgis.core import QgsApplication
-        app = QgsApplication([], False)
-        app.initQgis()
-        from processing.core.Processing import Processing
-        Processing.initialize()
-        logged = []
-        QgsApplication.messageLog().messageReceived.connect(lambda msg, tag, level: logged.append((tag, msg)))
+    sys.path.insert(0, "/usr/share/qgis/python/plugins")
+    sys.path.insert(0, {str(REPO / "tests")!r})
+    import conftest  # registers the clone as `plotwise`
+    from qgis.core import QgsApplication
+    app = QgsApplication([], False)
+    app.initQgis()
+    from processing.core.Processing import Processing
+    Processing.initialize()
+    logged = []
+    QgsApplication.messageLog().messageReceived.connect(lambda msg, tag, level: logged.append((tag, msg)))
 
-        class Bar:
-            def __init__(self): self.messages = []
-            def pushMessage(self, title, text, level=None, duration=None): self.messages.append(text)
+    class Bar:
+        def __init__(self): self.messages = []
+        def pushMessage(self, title, text, level=None, duration=None): self.messages.append(text)
 
-        class Iface:
-            def __init__(self): self.bar = Bar()
-            def messageBar(self): return self.bar
+    class Iface:
+        def __init__(self): self.bar = Bar()
+        def messageBar(self): return self.bar
 
-        import plotwise
-        iface = Iface()
-        plugin = plotwise.classFactory(iface)
-        plugin.initProcessing()
-        plugin.initGui()
-        QgsApplication.processEvents()
-        result = {{
-            "provider": QgsApplication.processingRegistry().providerById("plotwise") is not None,
-            "bar": iface.bar.messages,
-            "log": [m for t, m in logged if t == "Plotwise"],
-        }}
-        plugin.unload()
-        print("RESULT " + json.dumps(result))
-        """
-    )
-    path = tmp_path / "load_without_shapely.py"
-    path.write_text(script)
+    import plotwise
+    registry = QgsApplication.processingRegistry()
+    iface = Iface()
+    plugin = plotwise.classFactory(iface)
+    plugin.initProcessing()
+    plugin.initGui()  # the host calls both; the second must not register twice
+    QgsApplication.processEvents()
+    provider = registry.providerById("plotwise")
+    result = {{{{
+        "provider": provider is not None,
+        "algorithms": sorted(a.id() for a in provider.algorithms()) if provider else [],
+        "bar": iface.bar.messages,
+        "log": [m for t, m in logged if t == "Plotwise"],
+    }}}}
+    plugin.unload()
+    result["after_unload"] = registry.providerById("plotwise") is not None
+    print("RESULT " + json.dumps(result))
+    sys.stdout.flush()
+    os._exit(0)
+    """
+)
+
+
+def _load_plugin(tmp_path, block_shapely):
+    """Load the plugin as the host does, in a fresh process (unload deletes what it added)."""
+    path = tmp_path / "load_plugin.py"
+    path.write_text(LOADER.format(block=block_shapely))
     run = subprocess.run([sys.executable, str(path)], capture_output=True, text=True, timeout=120)
     assert run.returncode == 0, run.stderr
-    assert "Traceback" not in run.stderr
+    assert "Traceback" not in run.stderr, run.stderr
     line = next(l for l in run.stdout.splitlines() if l.startswith("RESULT "))
-    result = json.loads(line[len("RESULT "):])
+    return json.loads(line[len("RESULT "):])
+
+
+def test_plugin_registers_and_unloads_provider(tmp_path):
+    result = _load_plugin(tmp_path, block_shapely=False)
+    assert result["provider"] is True
+    assert {"plotwise:demoreserve", "plotwise:simulatecounts", "plotwise:layout", "plotwise:estimate"} <= set(result["algorithms"])
+    assert result["bar"] == [] and result["after_unload"] is False
+
+
+def test_missing_shapely_gives_a_message_and_no_crash(tmp_path):
+    """Without shapely the plugin loads, registers nothing and says why (issue 2)."""
+    result = _load_plugin(tmp_path, block_shapely=True)
     assert result["provider"] is False
     assert result["bar"] and "shapely is missing" in result["bar"][0]
     assert any("shapely is missing" in m for m in result["log"])
+    assert result["after_unload"] is False
