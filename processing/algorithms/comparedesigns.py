@@ -379,6 +379,13 @@ class CompareDesigns(PlotwiseAlgorithm):
             rows.append([name, p.mean_n, _pct(p.rel_bias), p.emp_se, p.rmse, p.rmse_mc_se, _pct(p.rel_rmse),
                          p.mean_cv, _pct(p.coverage, 0), p.failed])
         report.table(header, rows)
+        finite = [p for p in comparison.performance if np.isfinite(p.emp_se) and p.mean_true > 0 and p.replicates > 1]
+        if finite:
+            noise = max(2.0 * p.emp_se / (math.sqrt(p.replicates) * p.mean_true) for p in finite)
+            report.paragraph(tr(
+                "Each figure is itself an estimate from {reps} simulated surveys: relative biases within about "
+                "±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. "
+                "More surveys per design narrow both.").format(reps=settings["replicates"], noise=noise))
         names = [p.name for p in comparison.performance]
         highlight = next((i for i, p in enumerate(comparison.performance) if p.design == comparison.recommended), None)
         report.figure(
