@@ -301,3 +301,20 @@ def test_cancel_and_local_variance():
     result = dc.compare_designs(setup, [3, 4], 15, 30, rng, variance_method="local")
     for p in result.performance:
         assert p.failed == 0 and np.isfinite(p.mean_cv) and 0 <= p.coverage <= 1
+
+
+def test_simple_random_error_variance_has_the_finite_population_correction():
+    # truth by construction on a uniform Poisson surface of λ per km²: with n units of area a in A,
+    # Var(N̂ − N) = λ A² (1 − f) / (n a), f = n a / A, the SRS variance of a total with the
+    # finite-population correction (Cochran 1977, §2.4, eq. 2.9 for the total; from memory)
+    lam, n, side = 100.0, 30, 200.0
+    grid, frame = _grid(density=lambda x, y: np.full_like(x, lam))
+    rng = make_rng(31).generator
+    region = dc.counting_region(1, side)
+    setup = dc.prepare_comparison(grid, frame, region, 1, side, rng)
+    result = dc.compare_designs(setup, [dc.SIMPLE_RANDOM], n, 1000, rng)
+    p = result.performance[0]
+    area, a = 36.0, side * side / 1e6
+    expected = math.sqrt(lam * area ** 2 * (1 - n * a / area) / (n * a))
+    assert p.emp_se == pytest.approx(expected, rel=0.08)
+    assert abs(p.rel_bias) < 0.01
