@@ -3,6 +3,7 @@ from qgis.core import (
     QgsFeature,
     QgsFeatureSink,
     QgsProcessingException,
+    QgsProcessingParameterBoolean,
     QgsProcessingParameterFeatureSink,
     QgsProcessingParameterFeatureSource,
     QgsProcessingParameterNumber,
@@ -22,6 +23,7 @@ class SimulateCounts(PlotwiseAlgorithm):
     UNITS = "UNITS"
     ANIMALS = "ANIMALS"
     DETECTION = "DETECTION"
+    COUNT_RESERVES = "COUNT_RESERVES"
     OUTPUT = "OUTPUT"
 
     def displayName(self):  # noqa: N802
@@ -37,6 +39,9 @@ class SimulateCounts(PlotwiseAlgorithm):
             "<li><b>Animal points</b>: one point per animal, for example the demo reserve's simulated animals.</li>"
             "<li><b>Detection probability</b>: each animal in a unit is seen with this probability "
             "(binomial thinning). 1 means every animal is seen.</li>"
+            "<li><b>Count reserve units too</b>: off by default, so that units whose <i>role</i> is "
+            "<i>reserve</i> keep an empty count (not surveyed), as in a survey where no primary unit "
+            "needed replacing.</li>"
             "<li><b>Random seed</b>: 0 draws a seed and records it.</li></ul>"
             "<p>The output is a copy of the units with <i>count</i> filled (added when missing) and "
             "<i>present</i>, the animals actually in the unit. The input is not changed.</p>"
@@ -51,6 +56,9 @@ class SimulateCounts(PlotwiseAlgorithm):
                 defaultValue=1.0, minValue=0.001, maxValue=1.0,
             )
         )
+        self.addParameter(
+            QgsProcessingParameterBoolean(self.COUNT_RESERVES, self.tr("Count reserve units too"), defaultValue=False)
+        )
         self.add_seed_parameter()
         self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Units with simulated counts")))
 
@@ -60,12 +68,12 @@ class SimulateCounts(PlotwiseAlgorithm):
         if units is None or animals is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.UNITS if units is None else self.ANIMALS))
         detection = self.parameterAsDouble(parameters, self.DETECTION, context)
+        count_reserves = self.parameterAsBoolean(parameters, self.COUNT_RESERVES, context)
         seeded = self.seeded_generator(parameters, context, feedback)
         crs = bridge.computation_crs(units.sourceCrs(), units.sourceExtent(), context, feedback, units.sourceName())
-        has_area = units.fields().lookupField("area_m2") >= 0
-        unit_records = bridge.read_features(
-            units, crs, context, feedback, ("area_m2",) if has_area else (), units.sourceName(), drop_empty=False
-        )
+        wanted = tuple(name for name in ("area_m2", "role") if units.fields().lookupField(name) >= 0)
+        unit_records = bridge.read_features(units, crs, context, feedback, wanted, units.sourceName(), drop_empty=False)
+        roles = unit_records.attributes.get("role", [None] * len(unit_records))
         animal_records = bridge.read_features(animals, crs, context, feedback, (), animals.sourceName())
         regions, problems = [], []
         for fid, geometry, area in zip(unit_records.fids, unit_records.geometries, unit_records.attributes.get("area_m2", [None] * len(unit_records))):
@@ -107,14 +115,17 @@ class SimulateCounts(PlotwiseAlgorithm):
             out.setGeometry(feature.geometry())
             attributes = list(feature.attributes()) + [None] * (len(out_fields) - len(fields))
             i = by_fid[feature.id()]
-            attributes[count_index] = int(result.seen[i])
+            surveyed = count_reserves or roles[i] != "reserve"
+            attributes[count_index] = int(result.seen[i]) if surveyed else None
             attributes[present_index] = int(result.present[i])
             out.setAttributes(attributes)
             sink.addFeature(out, QgsFeatureSink.FastInsert)
         feedback.setProgress(100)
+        surveyed = [count_reserves or role != "reserve" for role in roles]
+        seen = sum(int(v) for v, s in zip(result.seen, surveyed) if s)
         feedback.pushInfo(
-            self.tr("{n} units counted: {seen} animals seen of {present} present (detection {p:g}).").format(
-                n=len(regions), seen=int(result.seen.sum()), present=int(result.present.sum()), p=detection
+            self.tr("{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.").format(
+                n=sum(surveyed), seen=seen, present=int(result.present.sum()), p=detection, r=len(roles) - sum(surveyed)
             )
         )
         self.style_output(context, dest, "units")

@@ -81,3 +81,25 @@ def test_simulate_counts_point_units_need_area(run_alg, demo_reserve_outputs):
     units.dataProvider().addFeatures([feature])
     with pytest.raises(QgsProcessingException, match="area_m2"):
         run_alg("plotwise:simulatecounts", {"UNITS": units, "ANIMALS": demo_reserve_outputs["OUTPUT_ANIMALS"], "OUTPUT": "memory:"})
+
+
+def test_reserve_units_stay_unsurveyed_unless_asked(run_alg, demo_reserve_outputs):
+    """Reserve units keep an empty count (not surveyed) unless COUNT_RESERVES is set."""
+    from qgis.core import NULL
+
+    layout = run_alg("plotwise:layout", {
+        "FRAME": demo_reserve_outputs["OUTPUT_AREA"], "N_UNITS": 6, "DESIGN": 2, "SHAPE": 1, "SIZE": 300.0,
+        "BEARING": 0.0, "RESERVE": 3, "SEED": 4, "OUTPUT": "memory:", "OUTPUT_GPX": "TEMPORARY_OUTPUT",
+        "REPORT": "TEMPORARY_OUTPUT",
+    })
+    for count_reserves in (False, True):
+        out = run_alg("plotwise:simulatecounts", {
+            "UNITS": layout["OUTPUT"], "ANIMALS": demo_reserve_outputs["OUTPUT_ANIMALS"], "SEED": 2,
+            "COUNT_RESERVES": count_reserves, "OUTPUT": "memory:",
+        })["OUTPUT"]
+        by_role = {}
+        for feature in out.getFeatures():
+            by_role.setdefault(feature["role"], []).append(feature["count"])
+        assert len(by_role["primary"]) == 6 and len(by_role["reserve"]) == 3
+        assert all(c != NULL for c in by_role["primary"])
+        assert all((c != NULL) == count_reserves for c in by_role["reserve"])
