@@ -289,7 +289,7 @@ class CovariateStack:
         """Iterator of :class:`~.engine.stratification.CellBlock`."""
         for win in self.windows():
             xo, yo, xs, ys = win
-            frame = self._mask_band.ReadAsArray(xo, yo, xs, ys).astype(bool)
+            frame = self._mask_band.ReadAsArray(xo, yo, xs, ys).view(bool)  # burnt 0/1
             if not frame.any():
                 empty = np.broadcast_to(np.zeros(1, np.float32), (ys, xs))
                 vals = (empty,) * len(self._readers)
@@ -297,9 +297,8 @@ class CovariateStack:
                                       np.zeros((ys, xs), np.uint8))
                 continue
             vals = tuple(r.read(xo, yo, xs, ys) for r in self._readers)
-            valid = strat.valid_cells(vals, frame, self.nodata)
             strata = None if strata_band is None else strata_band.ReadAsArray(xo, yo, xs, ys)
-            yield strat.CellBlock(win, vals, frame, valid, strata)
+            yield strat.CellBlock(win, vals, frame, None, strata, self.nodata)  # validity: worked out by the worker
 
     def source(self, strata_path=None):
         """A cell source for the engine, optionally carrying a stratum raster."""

@@ -27,8 +27,11 @@ raster classes
 A cell with no value in any covariate is left out. Strata are numbered 1..k by
 increasing mean of the first covariate; 0 means "no stratum".
 """
+from collections import deque
+from concurrent.futures import ThreadPoolExecutor
 from dataclasses import dataclass, field, replace
 import math
+import os
 
 import numpy as np
 
@@ -56,7 +59,6 @@ SELECTION_CAP = 4_000_000
 # ---------------------------------------------------------------------------
 # cell sources
 # ---------------------------------------------------------------------------
-@dataclass(frozen=True)
 class CellBlock:
     """One window of the covariate stack.
 
@@ -69,16 +71,27 @@ class CellBlock:
     in_frame : numpy.ndarray of bool
         Cells whose centre lies inside the frame.
     valid : numpy.ndarray of bool
-        Cells inside the frame with a value in every covariate.
+        Cells inside the frame with a value in every covariate. When not given,
+        it is worked out on first use from ``values``, ``in_frame`` and
+        ``nodata`` (so that a worker thread, not the reader, does it).
     strata : numpy.ndarray or None
         Stratum id per cell (0 = none) when the source carries a stratum raster.
+    nodata : sequence or None
+        NoData value per covariate (None: NaN only).
     """
 
-    window: tuple
-    values: tuple
-    in_frame: np.ndarray
-    valid: np.ndarray
-    strata: np.ndarray = None
+    __slots__ = ("window", "values", "in_frame", "strata", "nodata", "_valid")
+
+    def __init__(self, window, values, in_frame, valid=None, strata=None, nodata=None):
+        self.window, self.values, self.in_frame = window, values, in_frame
+        self.strata, self.nodata, self._valid = strata, nodata, valid
+
+    @property
+    def valid(self):
+        if self._valid is None:
+            nodata = self.nodata if self.nodata is not None else (None,) * len(self.values)
+            self._valid = valid_cells(self.values, self.in_frame, nodata)
+        return self._valid
 
 
 class ArrayCellSource:
@@ -127,7 +140,7 @@ class ArrayCellSource:
 
 def valid_cells(values, in_frame, nodata):
     """Cells inside the frame with a value (not NaN, not NoData) in every covariate."""
-    ok = np.array(in_frame, bool, copy=True)
+    ok = np.array(in_frame, bool, copy=True)  # never a view of the caller's mask
     for v, nd in zip(values, nodata):
         if v.dtype.kind == "f":
             ok &= np.isfinite(v)
@@ -146,6 +159,48 @@ def scaled_progress(progress, start, stop):
 def _tick(progress, i, n):
     if progress is not None and progress((i + 1) / max(1, n)):
         raise Cancelled("Stratification cancelled.")
+
+
+#: threads that work on blocks while the calling thread reads the next ones (0: all in the calling thread).
+#: With two cores or fewer the threads would only compete with the reader and the host, so none are used.
+WORKERS = 0 if (os.cpu_count() or 1) <= 2 else 2
+
+
+def map_blocks(source, work, progress=None, workers=None):
+    """``work(block)`` for every block of ``source``, yielded in reading order.
+
+    The blocks are read in the calling thread (a GDAL dataset must not be shared
+    between threads); ``work`` runs on a small thread pool, where numpy releases
+    the interpreter lock in its array loops. At most ``workers + 1`` blocks are
+    in flight, so memory stays bounded. Results come back in reading order, so
+    every total is summed in the same order as in a serial run: the results do
+    not depend on the number of workers. ``progress`` is ticked per block and a
+    cancel raises :class:`Cancelled`.
+    """
+    workers = WORKERS if workers is None else int(workers)
+    n = source.n_blocks
+    if workers <= 0:
+        for i, block in enumerate(source.blocks()):
+            yield work(block)
+            _tick(progress, i, n)
+        return
+    pending = deque()
+    done = 0
+    with ThreadPoolExecutor(workers) as pool:
+        try:
+            for block in source.blocks():
+                pending.append(pool.submit(work, block))
+                if len(pending) > workers:
+                    yield pending.popleft().result()
+                    _tick(progress, done, n)
+                    done += 1
+            while pending:
+                yield pending.popleft().result()
+                _tick(progress, done, n)
+                done += 1
+        finally:
+            for future in pending:
+                future.cancel()
 
 
 def _work_dtype(dtype):
@@ -184,28 +239,33 @@ def covariate_summary(source, progress=None):
     (1983): for parts A, B with counts n, means m and sums of squared deviations
     M2, ``M2 = M2_A + M2_B + (m_B - m_A)^2 n_A n_B / (n_A + n_B)``.
     """
+    def work(block):
+        cols = [v[block.valid].astype(np.float64, copy=False) for v in block.values]
+        nb = cols[0].size if cols else 0
+        if not nb:
+            return int(np.count_nonzero(block.in_frame)), 0, None
+        means = np.array([c.mean() for c in cols])
+        return (int(np.count_nonzero(block.in_frame)), nb,
+                (np.array([c.min() for c in cols]), np.array([c.max() for c in cols]), means,
+                 np.array([np.square(c - m).sum() for c, m in zip(cols, means)])))
+
     n = 0
     frame = 0
     lo = hi = mean = m2 = None
-    for i, block in enumerate(source.blocks()):
-        frame += int(np.count_nonzero(block.in_frame))
-        cols = [block.values[c][block.valid].astype(np.float64, copy=False) for c in range(len(block.values))]
-        nb = cols[0].size if cols else 0
-        if nb:
-            bmin = np.array([c.min() for c in cols])
-            bmax = np.array([c.max() for c in cols])
-            bmean = np.array([c.mean() for c in cols])
-            bm2 = np.array([np.square(c - m).sum() for c, m in zip(cols, bmean)])
-            if n == 0:
-                lo, hi, mean, m2 = bmin, bmax, bmean, bm2
-            else:
-                lo, hi = np.minimum(lo, bmin), np.maximum(hi, bmax)
-                delta = bmean - mean
-                tot = n + nb
-                mean = mean + delta * nb / tot
-                m2 = m2 + bm2 + delta**2 * n * nb / tot
-            n += nb
-        _tick(progress, i, source.n_blocks)
+    for nf, nb, part in map_blocks(source, work, progress):
+        frame += nf
+        if not nb:
+            continue
+        bmin, bmax, bmean, bm2 = part
+        if n == 0:
+            lo, hi, mean, m2 = bmin, bmax, bmean, bm2
+        else:
+            lo, hi = np.minimum(lo, bmin), np.maximum(hi, bmax)
+            delta = bmean - mean
+            tot = n + nb
+            mean = mean + delta * nb / tot
+            m2 = m2 + bm2 + delta**2 * n * nb / tot
+        n += nb
     if n == 0:
         return CovariateSummary(0, frame, np.array([]), np.array([]), np.array([]), np.array([]))
     return CovariateSummary(n, frame, lo, hi, mean, np.sqrt(m2 / n))
@@ -275,14 +335,18 @@ def streamed_histogram(source, bins, value_range=None, covariate=0, progress=Non
         value_range = (float(s.minimum[0]), float(s.maximum[0]))
         progress = scaled_progress(progress, 0.5, 1)
     lo, hi = float(value_range[0]), float(value_range[1])
+    def work(block):
+        v = _column(block, covariate)
+        if not v.size:
+            return None
+        return np.bincount(histogram_class_index(v, lo, hi, bins), minlength=bins), float(v.min()), float(v.max())
+
     counts = np.zeros(bins, np.int64)
     vmin, vmax = math.inf, -math.inf
-    for i, block in enumerate(source.blocks()):
-        v = _column(block, covariate)
-        if v.size:
-            counts += np.bincount(histogram_class_index(v, lo, hi, bins), minlength=bins)
-            vmin, vmax = min(vmin, float(v.min())), max(vmax, float(v.max()))
-        _tick(progress, i, source.n_blocks)
+    for part in map_blocks(source, work, progress):
+        if part is not None:
+            counts += part[0]
+            vmin, vmax = min(vmin, part[1]), max(vmax, part[2])
     return Histogram(lo, hi, counts, vmin, vmax)
 
 
@@ -294,7 +358,7 @@ class _OneCovariate:
 
     def blocks(self):
         for b in self.source.blocks():
-            yield CellBlock(b.window, (b.values[self.covariate],), b.in_frame, b.valid, b.strata)
+            yield CellBlock(b.window, (b.values[self.covariate],), b.in_frame, b.valid, b.strata)  # valid of all
 
 
 def _numpy_lerp(a, b, t):
@@ -369,25 +433,40 @@ def _order_statistics(source, ranks, histogram, covariate, cap, progress):
             t["values"], t["hist"], t["min"], t["max"] = [], np.zeros(FINE_BINS, np.int64), math.inf, -math.inf
         level0 = np.zeros(bins, bool)
         level0[[t["chain"][0][3] for t in tasks]] = True
-        for i, block in enumerate(source.blocks()):
+
+        def work(block, tasks=tasks, level0=level0):
+            """Per task: the block's member cells (or their sub-histogram), their min and max."""
             v = _column(block, covariate)
-            if v.size:
-                i0 = histogram_class_index(v, histogram.lo, histogram.hi, bins)
-                keep = level0[i0]
-                v, i0 = v[keep], i0[keep]
-                for t in tasks:
-                    m = v[i0 == t["chain"][0][3]]
-                    for lo, hi, nb, cls in t["chain"][1:]:
-                        m = m[histogram_class_index(m, lo, hi, nb) == cls]
-                    if m.size == 0:
-                        continue
-                    t["min"], t["max"] = min(t["min"], float(m.min())), max(t["max"], float(m.max()))
-                    if t["collect"]:
-                        t["values"].append(m)
-                    else:
-                        lo, hi = t["range"]
-                        t["hist"] += np.bincount(histogram_class_index(m, lo, hi, FINE_BINS), minlength=FINE_BINS)
-            _tick(progress, i, source.n_blocks)
+            out = []
+            if not v.size:
+                return out
+            i0 = histogram_class_index(v, histogram.lo, histogram.hi, bins)
+            keep = level0[i0]
+            v, i0 = v[keep], i0[keep]
+            for t in tasks:
+                m = v[i0 == t["chain"][0][3]]
+                for lo, hi, nb, cls in t["chain"][1:]:
+                    m = m[histogram_class_index(m, lo, hi, nb) == cls]
+                if m.size == 0:
+                    out.append(None)
+                elif t["collect"]:
+                    out.append((m, float(m.min()), float(m.max())))
+                else:
+                    lo, hi = t["range"]
+                    sub = np.bincount(histogram_class_index(m, lo, hi, FINE_BINS), minlength=FINE_BINS)
+                    out.append((sub, float(m.min()), float(m.max())))
+            return out
+
+        for parts in map_blocks(source, work, progress):
+            for t, part in zip(tasks, parts):
+                if part is None:
+                    continue
+                data, pmin, pmax = part
+                t["min"], t["max"] = min(t["min"], pmin), max(t["max"], pmax)
+                if t["collect"]:
+                    t["values"].append(data)
+                else:
+                    t["hist"] += data
         nxt = []
         for t in tasks:
             if t["min"] == t["max"]:
@@ -728,91 +807,40 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
     StratumStatistics
     """
     k = int(n_strata)
+    nested = isinstance(rule, ThresholdRule) and len(rule.boundaries) <= 16 and not extremes and chart_range is None
+
+    def work(block):
+        return _block_sums(block, k, rule, shift, chart_range, extremes, nested, write is not None)
+
     s1 = s2 = mn = mx = None
     count = np.zeros(k + 1, np.int64)
     chart = np.zeros((k + 1) * CHART_BINS, np.int64)
     frame = 0
-    for i, block in enumerate(source.blocks()):
-        ncov = len(block.values)
-        frame += int(np.count_nonzero(block.in_frame))
+    for window, full, part in map_blocks(source, work, progress):
+        if write is not None and full is not None:
+            write(window, full)
+        nf, bcount, bs1, bs2, bmn, bmx, bchart = part
+        frame += nf
+        if bs1 is None:
+            continue
         if s1 is None:
-            s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
-            mn, mx = np.full((ncov, k + 1), np.inf), np.full((ncov, k + 1), -np.inf)
-            shift = np.zeros(ncov) if shift is None else np.asarray(shift, float)
-        cols = [v[block.valid] for v in block.values]
-        nested = (isinstance(rule, ThresholdRule) and len(rule.boundaries) <= 16 and not extremes
-                  and chart_range is None)
-        if nested and cols[0].size:
-            # threshold strata are nested upper sets {x >= b_j}: sums over them by masked
-            # reductions, then differences (cheaper than bincount on long runs of equal ids)
-            v = cols[rule.covariate].astype(_work_dtype(cols[rule.covariate].dtype), copy=False)
-            upper = [v >= exact_threshold(b, v.dtype) for b in rule.boundaries]
-            ids = np.ones(v.size, np.uint8)
-            for m in upper:
-                ids += m
-            if write is not None:
-                full = np.zeros(block.valid.shape, np.uint8)
-                full[block.valid] = ids
-                write(block.window, full)
-            n_ge = np.array([v.size] + [np.count_nonzero(m) for m in upper] + [0])
-            count[1:] += n_ge[:-1] - n_ge[1:]
-            for c in range(ncov):
-                x = cols[c].astype(np.float64)
-                x -= shift[c]
-                x2 = x * x
-                a = np.array([x.sum()] + [np.sum(x, where=m) for m in upper] + [0.0])
-                b = np.array([x2.sum()] + [np.sum(x2, where=m) for m in upper] + [0.0])
-                s1[c, 1:] += a[:-1] - a[1:]
-                s2[c, 1:] += b[:-1] - b[1:]
-            _tick(progress, i, source.n_blocks)
-            continue
-        if rule is not None:
-            ids = rule.assign(cols) if cols[0].size else np.zeros(0, np.uint8)
-            if write is not None:
-                full = np.zeros(block.valid.shape, ids.dtype)
-                full[block.valid] = ids
-                write(block.window, full)
-        else:
-            ids = block.strata[block.valid]
-            if ids.size and ids.max() > k:
-                raise ValueError("stratum raster holds ids beyond n_strata")
-        if ids.size == 0:
-            _tick(progress, i, source.n_blocks)
-            continue
-        ids = ids.astype(np.intp)
-        per = np.bincount(ids, minlength=k + 1)
-        count += per
-        present = np.flatnonzero(per)
-        if extremes and present.size > 1:
-            order = np.argsort(ids.astype(np.uint16), kind="stable")  # radix sort for small integer ids
-            starts = np.concatenate([[0], np.cumsum(per[present])[:-1]])
-        for c in range(ncov):
-            x = cols[c].astype(np.float64)
-            x -= shift[c]
-            if extremes:
-                if present.size == 1:
-                    h = present[0]
-                    mn[c, h] = min(mn[c, h], x.min())
-                    mx[c, h] = max(mx[c, h], x.max())
-                else:
-                    xs = x[order]
-                    mn[c, present] = np.minimum(mn[c, present], np.minimum.reduceat(xs, starts))
-                    mx[c, present] = np.maximum(mx[c, present], np.maximum.reduceat(xs, starts))
-            s1[c] += np.bincount(ids, weights=x, minlength=k + 1)
-            x *= x
-            s2[c] += np.bincount(ids, weights=x, minlength=k + 1)
-        if chart_range is not None:
-            v0 = cols[0].astype(_work_dtype(cols[0].dtype), copy=False)
-            cls = histogram_class_index(v0, chart_range[0], chart_range[1], CHART_BINS)
-            if present.size > 1:
-                ids *= CHART_BINS
-                cls += ids
-            else:
-                cls += present[0] * CHART_BINS
-            chart += np.bincount(cls, minlength=(k + 1) * CHART_BINS)
-        _tick(progress, i, source.n_blocks)
-    if s1 is None:
+            s1, s2 = np.zeros_like(bs1), np.zeros_like(bs2)
+            mn, mx = np.full_like(bs1, np.inf), np.full_like(bs1, -np.inf)
+        count += bcount
+        s1 += bs1
+        s2 += bs2
+        if bmn is not None:
+            np.minimum(mn, bmn, out=mn)
+            np.maximum(mx, bmx, out=mx)
+        if bchart is not None:
+            chart += bchart
+    if s1 is None and frame == 0:
         raise InputError("The frame holds no raster cell.")
+    if s1 is None:
+        ncov = _n_covariates(source)
+        s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
+        mn, mx = np.full((ncov, k + 1), np.inf), np.full((ncov, k + 1), -np.inf)
+    shift = np.zeros(s1.shape[0]) if shift is None else np.asarray(shift, float)
     with np.errstate(invalid="ignore", divide="ignore"):
         n = count[1:].astype(float)
         m = s1[:, 1:] / n
@@ -822,6 +850,94 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
     return StratumStatistics(count[1:], (m + shift[:, None]).T, np.sqrt(var).T, lo.T, hi.T,
                              tuple(chart_range) if chart_range is not None else (math.nan, math.nan),
                              chart.reshape(k + 1, CHART_BINS)[1:], frame)
+
+
+def _n_covariates(source):
+    for block in source.blocks():
+        return len(block.values)
+    return 0
+
+
+def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
+    """One block's share of :func:`accumulate_statistics`: ``(window, ids or None, sums)``.
+
+    ``sums`` = (frame cells, N_h, sum(x-c), sum((x-c)^2), min-c, max-c, chart);
+    the arrays are (n_covariates, k+1) with column 0 for "no stratum".
+    """
+    ncov = len(block.values)
+    c0 = np.zeros(ncov) if shift is None else np.asarray(shift, float)
+    nf = int(np.count_nonzero(block.in_frame))
+    cols = [v[block.valid] for v in block.values]
+    n = cols[0].size
+    empty = (nf, None, None, None, None, None, None)
+    full = None
+    if n == 0:
+        if want_ids and rule is not None:
+            full = np.zeros(block.valid.shape, np.uint8)
+        return block.window, full, empty
+    count = np.zeros(k + 1, np.int64)
+    s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
+    if nested:
+        # threshold strata are nested upper sets {x >= b_j}: sums over them by masked
+        # reductions, then differences (cheaper than bincount on long runs of equal ids)
+        v = cols[rule.covariate].astype(_work_dtype(cols[rule.covariate].dtype), copy=False)
+        upper = [v >= exact_threshold(b, v.dtype) for b in rule.boundaries]
+        ids = np.ones(n, np.uint8)
+        for m in upper:
+            ids += m
+        if want_ids:
+            full = np.zeros(block.valid.shape, np.uint8)
+            full[block.valid] = ids
+        n_ge = np.array([n] + [np.count_nonzero(m) for m in upper] + [0])
+        count[1:] = n_ge[:-1] - n_ge[1:]
+        for c in range(ncov):
+            x = cols[c].astype(np.float64)
+            x -= c0[c]
+            x2 = x * x
+            a = np.array([x.sum()] + [np.sum(x, where=m) for m in upper] + [0.0])
+            b = np.array([x2.sum()] + [np.sum(x2, where=m) for m in upper] + [0.0])
+            s1[c, 1:] = a[:-1] - a[1:]
+            s2[c, 1:] = b[:-1] - b[1:]
+        return block.window, full, (nf, count, s1, s2, None, None, None)
+    if rule is not None:
+        ids = rule.assign(cols)
+        if want_ids:
+            full = np.zeros(block.valid.shape, ids.dtype)
+            full[block.valid] = ids
+    else:
+        ids = block.strata[block.valid]
+        if ids.max() > k:
+            raise ValueError("stratum raster holds ids beyond n_strata")
+    ids = ids.astype(np.intp)
+    count = np.bincount(ids, minlength=k + 1)
+    present = np.flatnonzero(count)
+    mn = mx = None
+    if extremes:
+        mn, mx = np.full((ncov, k + 1), np.inf), np.full((ncov, k + 1), -np.inf)
+        if present.size > 1:
+            order = np.argsort(ids.astype(np.uint16), kind="stable")  # radix sort for small integer ids
+            starts = np.concatenate([[0], np.cumsum(count[present])[:-1]])
+    for c in range(ncov):
+        x = cols[c].astype(np.float64)
+        x -= c0[c]
+        if extremes:
+            if present.size == 1:
+                mn[c, present[0]], mx[c, present[0]] = x.min(), x.max()
+            else:
+                xs = x[order]
+                mn[c, present] = np.minimum.reduceat(xs, starts)
+                mx[c, present] = np.maximum.reduceat(xs, starts)
+        s1[c] = np.bincount(ids, weights=x, minlength=k + 1)
+        x *= x
+        s2[c] = np.bincount(ids, weights=x, minlength=k + 1)
+    chart = None
+    if chart_range is not None:
+        v0 = cols[0].astype(_work_dtype(cols[0].dtype), copy=False)
+        cls = histogram_class_index(v0, chart_range[0], chart_range[1], CHART_BINS)
+        ids *= CHART_BINS
+        cls += ids
+        chart = np.bincount(cls, minlength=(k + 1) * CHART_BINS)
+    return block.window, full, (nf, count, s1, s2, mn, mx, chart)
 
 
 def stratum_order(statistics):

@@ -242,3 +242,19 @@ def test_cancel_stops_the_run():
     with pytest.raises(Cancelled):
         s.stratify_cells(s.ArrayCellSource([a], frame, block_rows=10), s.QUANTILE, 4, ["g"],
                          progress=lambda f: f > 0.5)
+
+
+@pytest.mark.parametrize("method", [s.QUANTILE, s.KMEANS, s.CUM_ROOT_F])
+def test_results_do_not_depend_on_the_worker_threads(monkeypatch, method):
+    covs = _three_covariates(seed=12)
+    runs = []
+    for workers in (0, 1, 2):  # serial, one worker thread, two
+        monkeypatch.setattr(s, "WORKERS", workers)
+        src = s.ArrayCellSource(covs, block_rows=9)
+        out, write = _ids_raster(src)
+        r = s.stratify_cells(src, method, 4, ["a", "b", "c"], rng=np.random.default_rng(6), write=write)
+        runs.append((out, r))
+    for out, r in runs[1:]:
+        np.testing.assert_array_equal(out, runs[0][0])  # bit for bit: sums are taken in reading order
+        np.testing.assert_array_equal(r.statistics.mean, runs[0][1].statistics.mean)
+        np.testing.assert_array_equal(r.statistics.sd, runs[0][1].statistics.sd)
