@@ -5,6 +5,7 @@ import numpy as np
 from osgeo import gdal
 from qgis.core import (
     QgsProcessingException,
+    QgsProcessingParameterBoolean,
     QgsProcessingOutputString,
     QgsProcessingParameterEnum,
     QgsProcessingParameterFeatureSink,
@@ -70,6 +71,7 @@ class CompareDesigns(PlotwiseAlgorithm):
     SIZE = "SIZE"
     HALF_WIDTH = "HALF_WIDTH"
     BEARING = "BEARING"
+    INSIDE = "INSIDE"
     REPLICATES = "REPLICATES"
     OVERDISPERSION = "OVERDISPERSION"
     VARIANCE_METHOD = "VARIANCE_METHOD"
@@ -100,7 +102,9 @@ class CompareDesigns(PlotwiseAlgorithm):
             "acceptance sampling, Robertson et al. 2013).\n\n"
             "Units: point station (size = counting radius), square plot (side), circular plot (radius), line "
             "transect (length, counting a strip of the given half-width on each side). Bearing in degrees "
-            "clockwise from grid north, −1 random.\n\n"
+            "clockwise from grid north, −1 random. Keep units inside: centres are drawn from each stratum "
+            "shrunk by the unit's radius, as the layout's option does. Otherwise a unit reaching over the "
+            "edge of its stratum or of the frame counts only the part inside, and its area is that part.\n\n"
             "Output table, one row per design: rel_bias (relative bias against each population's true total), "
             "emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), "
             "rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % "
@@ -165,6 +169,12 @@ class CompareDesigns(PlotwiseAlgorithm):
             QgsProcessingParameterNumber(
                 self.BEARING, self.tr("Bearing of units and grid (degrees from grid north; −1 random)"),
                 type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=-1.0, maxValue=359.999,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterBoolean(
+                self.INSIDE, self.tr("Keep units wholly inside their stratum (as the layout's option)"),
+                defaultValue=False,
             )
         )
         self.addParameter(
@@ -258,6 +268,7 @@ class CompareDesigns(PlotwiseAlgorithm):
         bearing = self.parameterAsDouble(parameters, self.BEARING, context)
         if bearing < 0:
             bearing = -1.0
+        inside = self.parameterAsBool(parameters, self.INSIDE, context)
         n_units = self.parameterAsInt(parameters, self.N_UNITS, context)
         replicates = self.parameterAsInt(parameters, self.REPLICATES, context)
         k = self.parameterAsDouble(parameters, self.OVERDISPERSION, context)
@@ -278,7 +289,8 @@ class CompareDesigns(PlotwiseAlgorithm):
             grid = engine.population_grid(density, geotransform, frame, strata, keys,
                                            progress=self.progress_callback(feedback, 3, 6))
             region = engine.counting_region(shape, size, half_width)
-            setup = engine.prepare_comparison(grid, frame, region, shape, size, rng, strata, keys, bearing, k)
+            setup = engine.prepare_comparison(grid, frame, region, shape, size, rng, strata, keys, bearing, k,
+                                              inside=inside)
             warnings.extend(setup.warnings)
             main_end = 70.0 if [m for m in n_range if m != n_units] else 95.0
             comparison = engine.compare_designs(
@@ -311,6 +323,7 @@ class CompareDesigns(PlotwiseAlgorithm):
         settings = {
             "surface": surface.name(), "frame": frame_name, "strata": strata_name, "stratum_field": stratum_field,
             "crs": crs.authid(), "shape": shape, "size": size, "half_width": half_width, "bearing": bearing,
+            "inside": inside,
             "n_units": n_units, "replicates": replicates, "k": k, "variance_method": variance_method,
             "seed": seeded.seed, "n_range": n_range,
         }
@@ -357,6 +370,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             tr("Unit"): unit_text,
             tr("Counted area per unit (m²)"): round(setup.region.area, 1),
             tr("Bearing"): tr("random") if settings["bearing"] < 0 else f"{settings['bearing']:g}°",
+            tr("Units wholly inside their stratum"): tr("yes") if settings["inside"] else tr("no"),
             tr("Number of units"): settings["n_units"],
             tr("Simulated surveys per design"): settings["replicates"],
             tr("Counts per cell"): (tr("negative binomial, k = {k:g}").format(k=settings["k"]) if settings["k"] > 0
@@ -379,9 +393,10 @@ class CompareDesigns(PlotwiseAlgorithm):
             rows.append([name, p.mean_n, _pct(p.rel_bias), p.emp_se, p.rmse, p.rmse_mc_se, _pct(p.rel_rmse),
                          p.mean_cv, _pct(p.coverage, 0), p.failed])
         report.table(header, rows)
-        finite = [p for p in comparison.performance if np.isfinite(p.emp_se) and p.mean_true > 0 and p.replicates > 1]
-        if finite:
-            noise = max(2.0 * p.emp_se / (math.sqrt(p.replicates) * p.mean_true) for p in finite)
+        noises = [engine.bias_noise(p) for p in comparison.performance]
+        noises = [v for v in noises if np.isfinite(v)]
+        if noises:
+            noise = max(noises)
             report.paragraph(tr(
                 "Each figure is itself an estimate from {reps} simulated surveys: relative biases within about "
                 "±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. "

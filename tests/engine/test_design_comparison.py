@@ -318,3 +318,25 @@ def test_simple_random_error_variance_has_the_finite_population_correction():
     expected = math.sqrt(lam * area ** 2 * (1 - n * a / area) / (n * a))
     assert p.emp_se == pytest.approx(expected, rel=0.08)
     assert abs(p.rel_bias) < 0.01
+
+
+def test_units_kept_inside_miss_an_empty_edge_band_and_the_bias_is_flagged():
+    # truth by construction: no animals within 300 m of the frame edge; units kept inside have centres at least
+    # r = 200·√2 m from the edge. A point at t weighs w(t) = |[t − 200, t + 200] ∩ [r, 6000 − r]| (units are
+    # uniform there), so the density estimated is 100 · (share of ∫w over the animals' core)², against the
+    # truth 100 · 5.4² km²
+    def density(x, y):
+        edge = np.minimum.reduce([x, y, 6000 - x, 6000 - y])
+        return np.where(edge < 300, 0.0, 100.0)
+
+    grid, frame = _grid(density=density)
+    rng = make_rng(12).generator
+    region = dc.counting_region(1, 400.0)
+    setup = dc.prepare_comparison(grid, frame, region, 1, 400.0, rng, inside=True)
+    result = dc.compare_designs(setup, [dc.SIMPLE_RANDOM], 20, 100, rng)
+    p = result.performance[0]
+    r = 200 * math.sqrt(2)
+    lost = (300 - (r - 200)) ** 2  # ∫ w over the empty band at both ends of an axis: 2 · (300 − (r − 200))² / 2
+    share = 1 - lost / (400 * (6000 - 2 * r))
+    assert p.rel_bias == pytest.approx(share ** 2 * 36 / 5.4 ** 2 - 1, abs=0.03)
+    assert any("beyond the simulation's noise" in w for w in result.warnings)
