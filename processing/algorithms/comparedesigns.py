@@ -251,6 +251,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             if not strata:
                 strata = keys = None
 
+        already_pushed = len(warnings)  # bridge.read_features pushes its own warnings
         designs = sorted(set(self.parameterAsEnums(parameters, self.DESIGNS, context))) or list(range(5))
         if strata is None:
             dropped = [d for d in designs if d in engine.STRATIFIED_DESIGNS]
@@ -309,7 +310,7 @@ class CompareDesigns(PlotwiseAlgorithm):
                         progress=self.progress_callback(feedback, start, stop)))
                 except InputError as error:  # e.g. fewer units than two per stratum: that n is left out
                     warnings.append(self.tr("{n} units were left out of the range: {why}").format(n=m, why=error.message))
-        self.push_warnings(feedback, warnings[len(frame_records.warnings):])
+        self.push_warnings(feedback, warnings[already_pushed:])
 
         fields = bridge.make_fields(OUTPUT_FIELDS)
         sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT_TABLE, context, fields, compat.WKB_NOGEOMETRY, crs)
