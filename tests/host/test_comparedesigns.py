@@ -71,8 +71,6 @@ STRATA = [(_box(X0, Y0, X0 + 2500, Y0 + 4000), ["low"]), (_box(X0 + 2500, Y0, X0
 
 
 def test_five_designs_table_and_report(registered, run_alg, tmp_path):
-    import processing  # noqa: F401
-
     surface = _surface(tmp_path / "density.tif")
     report = tmp_path / "compare.html"
     result = run_alg("plotwise:comparedesigns", {
@@ -92,7 +90,7 @@ def test_five_designs_table_and_report(registered, run_alg, tmp_path):
     })
     table = result["OUTPUT_TABLE"]
     if isinstance(table, str):
-        from qgis.core import QgsProcessingUtils, QgsProcessingContext
+        from qgis.core import QgsProcessingContext, QgsProcessingUtils
 
         table = QgsProcessingUtils.mapLayerFromString(table, QgsProcessingContext())
     assert [f.name() for f in table.fields()] == FIELDS
