@@ -196,13 +196,13 @@ def units(layer, label=True):
     """Sample units by ``role``: primary filled slate blue, reserve hollow amber; labelled with ``unit_id``."""
     geometry = layer.geometryType()
     if geometry == compat.GEOMETRY_POLYGON:
-        primary = _fill(PRIMARY_COLOUR, outline=INK, width=0.3)
+        primary = _fill(PRIMARY_COLOUR, outline="white", width=0.4)  # a white rim shows over dark strata
         reserve = _fill("0,0,0,0", outline=RESERVE_COLOUR, width=0.7, style="no", outline_style="dash")
     elif geometry == compat.GEOMETRY_LINE:
         primary = _line(PRIMARY_COLOUR, 1.0)
         reserve = _line(RESERVE_COLOUR, 0.8, style="dash")
     else:
-        primary = _marker(PRIMARY_COLOUR, "circle", 2.6)
+        primary = _marker(PRIMARY_COLOUR, "circle", 2.6, outline="white", outline_width=0.4)
         reserve = _marker("255,255,255,255", "triangle", 2.6, outline=RESERVE_COLOUR, outline_width=0.6)
     if layer.fields().lookupField("role") < 0:  # units from elsewhere: all drawn as primary
         renderer = QgsSingleSymbolRenderer(primary)

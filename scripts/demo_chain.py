@@ -1,7 +1,8 @@
 """The demo chain, run headless by `make demo`: every Plotwise step on the invented demo reserve.
 
 Writes demo-output/: plotwise-demo.gpkg (every layer), one HTML report per step, the
-rasters as GeoTIFF, and plotwise-demo.qgz (the layers styled). Each issue adds its step:
+rasters as GeoTIFF, plotwise-demo.qgz (the layers styled, with an A4 print layout) and
+plotwise-demo-map.pdf (that layout exported). Each issue adds its step:
 a step whose algorithm is not available yet says so and is skipped.
 """
 import os
@@ -448,7 +449,7 @@ def add_print_layout(project, title, map_layers, table_layer=None, table_columns
     The layout holds the map of ``map_layers`` (top of the list drawn on top), a legend of
     those layers (a layer's title, when set, names its legend entry), a scale bar in
     kilometres, a north arrow, an attribute table of ``table_layer`` (``table_columns``:
-    ``[(field or expression, heading), ...]``; default: its first fields), the title, the
+    ``[(field, heading, decimals), ...]``; default: its first fields), the title, the
     date of printing (an expression, so it is the date the layout is printed) and ``note``.
     """
     import base64
@@ -456,9 +457,6 @@ def add_print_layout(project, title, map_layers, table_layer=None, table_columns
     from qgis.core import (
         Qgis,
         QgsCoordinateTransform,
-        QgsLayerTreeLayer,
-        QgsLayoutFrame,
-        QgsLayoutItemAttributeTable,
         QgsLayoutItemLegend,
         QgsLayoutItemMap,
         QgsLayoutItemPage,
@@ -466,7 +464,6 @@ def add_print_layout(project, title, map_layers, table_layer=None, table_columns
         QgsLayoutItemScaleBar,
         QgsLayoutPoint,
         QgsLayoutSize,
-        QgsLayoutTableColumn,
         QgsLegendStyle,
         QgsPrintLayout,
         QgsRectangle,
@@ -557,27 +554,7 @@ def add_print_layout(project, title, map_layers, table_layer=None, table_columns
 
     # the table
     if table_layer is not None:
-        table = QgsLayoutItemAttributeTable.create(layout)
-        table.setVectorLayer(table_layer)
-        table.setMaximumNumberOfFeatures(20)
-        columns = table_columns or [
-            (f'format_number("{f.name()}", 2)' if f.isNumeric() and f.typeName().lower().startswith(("real", "double")) else f.name(), f.name())
-            for f in list(table_layer.fields())[:9] if f.name() not in ("fid",)
-        ]
-        table_fields = []
-        for expression, heading in columns:
-            column = QgsLayoutTableColumn(heading)
-            column.setAttribute(expression)
-            table_fields.append(column)
-        table.setColumns(table_fields)
-        table.setHeaderTextFormat(_text_format(7.5, bold=True))
-        table.setContentTextFormat(_text_format(7.5))
-        table.setGridColor(QColor("#d7dedc"))
-        layout.addMultiFrame(table)
-        frame = QgsLayoutFrame(layout, table)
-        frame.attemptMove(QgsLayoutPoint(10, 25 + map_height + 4))
-        frame.attemptResize(QgsLayoutSize(277, 205 - (25 + map_height + 4) - 8))
-        table.addFrame(frame)
+        add_attribute_table(layout, table_layer, table_columns, 10, 25 + map_height + 4, 277, 205 - (25 + map_height + 4) - 8)
 
     _label(layout, "Check every unit's access and safety before sending a team; this map never makes a location "
            "safe. Follow your agency's field-safety rules and local law.", 10, 199, 277, 6, 7.5, colour="#5f6f73")
@@ -585,12 +562,62 @@ def add_print_layout(project, title, map_layers, table_layer=None, table_columns
     return layout
 
 
+def add_attribute_table(layout, layer, columns, x, y, width, height):
+    """An attribute table of ``layer`` in one frame; ``columns``: ``[(field, heading, decimals), ...]``.
+
+    Each column is an expression field added to ``layer`` (``print_<field>``, saved with the
+    project): the value with ``decimals`` places and thousands separators, or a dash when it
+    is missing, under ``heading`` as its alias. The columns are chosen with
+    ``setDisplayedFields``: on QGIS 3.22, ``setColumns`` with fewer columns than the layer
+    has fields corrupts the heap when the layout is rendered.
+    """
+    from qgis.core import QgsLayoutFrame, QgsLayoutItemAttributeTable, QgsLayoutPoint, QgsLayoutSize
+    from qgis.PyQt.QtGui import QColor
+
+    from plotwise.plugin import compat
+
+    fields = layer.fields()
+    if not columns:
+        columns = [
+            (f.name(), f.name(), 2 if f.isNumeric() and f.typeName().lower().startswith(("real", "double")) else None)
+            for f in list(fields)[:10] if f.name() != "fid"
+        ]
+    shown = []
+    for name, heading, decimals in columns:
+        if fields.lookupField(name) < 0:
+            continue
+        value = f'format_number("{name}", {decimals})' if decimals is not None else f'to_string("{name}")'
+        display = f"print_{name}"
+        existing = layer.fields().lookupField(display)
+        if existing >= 0:
+            layer.removeExpressionField(existing)
+        layer.addExpressionField(f"coalesce({value}, '–')", compat.make_field(display, "string"))
+        layer.setFieldAlias(layer.fields().lookupField(display), heading)
+        shown.append(display)
+    table = QgsLayoutItemAttributeTable.create(layout)
+    table.setVectorLayer(layer)
+    table.setDisplayedFields(shown)
+    table.setMaximumNumberOfFeatures(20)
+    table.setHeaderTextFormat(_text_format(7.5, bold=True))
+    table.setContentTextFormat(_text_format(7.5))
+    table.setGridColor(QColor("#d7dedc"))
+    layout.addMultiFrame(table)
+    frame = QgsLayoutFrame(layout, table)
+    frame.attemptMove(QgsLayoutPoint(x, y))
+    frame.attemptResize(QgsLayoutSize(width, height))
+    table.addFrame(frame)
+    return table
+
+
 def export_pdf(layout, path):
     """Export ``layout`` to a PDF at ``path``; raise RuntimeError when the host cannot."""
-    from qgis.core import QgsLayoutExporter
+    from qgis.core import Qgis, QgsLayoutExporter, QgsRenderContext
 
     settings = QgsLayoutExporter.PdfExportSettings()
     settings.dpi = 200
+    # real text, not outlines: the PDF can be searched, copied from and read aloud
+    settings.textRenderFormat = _layout_enum(lambda: Qgis.TextRenderFormat.AlwaysText,
+                                             lambda: QgsRenderContext.TextFormatAlwaysText)
     result = QgsLayoutExporter(layout).exportToPdf(str(path), settings)
     if result != QgsLayoutExporter.Success:
         raise RuntimeError(f"the print layout could not be exported to {path} (code {result})")
@@ -621,12 +648,10 @@ def write_print_layout(demo, project_path):
         project.addMapLayer(table)
         unit = "km²"  # step_estimate asks for AREA_UNIT 0 (km²) at 95 %
         columns = [
-            ("stratum", "Stratum"), ('format_number("area", 1)', f"Area ({unit})"), ("n", "Units"),
-            ('format_number("mean_c", 2)', "Mean count"), ('format_number("dens", 2)', f"Density per {unit}"),
-            ("format_number(\"dens_lo\", 2) || ' – ' || format_number(\"dens_hi\", 2)", "95 % interval"),
-            ('format_number("abund", 0)', "Abundance"),
-            ("format_number(\"abund_lo\", 0) || ' – ' || format_number(\"abund_hi\", 0)", "95 % interval"),
-            ('format_number("cv", 3)', "CV"), ("n_next", "Units next time"),
+            ("stratum", "Stratum", None), ("area", f"Area ({unit})", 1), ("n", "Units", None),
+            ("mean_c", "Mean count", 2), ("dens", f"Density per {unit}", 2), ("dens_lo", "Lower 95 %", 2),
+            ("dens_hi", "Upper 95 %", 2), ("abund", "Abundance", 0), ("abund_lo", "Lower 95 %", 0),
+            ("abund_hi", "Upper 95 %", 0), ("cv", "CV", 3), ("n_next", "Units next time", None),
         ]
     else:
         table = first("Strata with units allocated", "Strata", "Units with counts", "Sample units")
