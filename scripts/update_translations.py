@@ -5,11 +5,18 @@ Run: .venv/bin/python scripts/update_translations.py [--check]
 Recognised calls (contexts as the running code uses them):
 - ``self.tr("text")`` inside class C: context C (``PlotwiseAlgorithm.tr`` uses the class name);
 - ``self.tr("text", "Ctx")``: context Ctx;
+- ``tr("text")`` where a function bound ``tr = self.tr`` (context of the enclosing class);
 - ``QCoreApplication.translate("Ctx", "text")``, ``QT_TRANSLATE_NOOP("Ctx", "text")`` and
   ``translatable("Ctx", "text")`` (a marker for strings translated later, e.g. group names);
-- ``tr("text")`` in a module whose own ``def tr`` calls ``QCoreApplication.translate("Ctx", ...)``;
+- ``tr("text")`` / ``_tr("text")`` in a module whose own ``def tr`` / ``def _tr`` calls
+  ``QCoreApplication.translate("Ctx", ...)``;
 - ``self._tr("text")`` / ``tr("text")`` in processing/report (context ``PlotwiseReport``), including
   module-level string constants passed by name.
+
+The text may be a literal, a module-level string constant, ``"a" if c else "b"`` (both), or a
+constant of an imported package module (``tr(engine.DESIGNS[i])``: every string of the tuple,
+list or dict ``DESIGNS``; ``tr(demo_reserve.SPECIES_DESCRIPTION)``), followed through relative
+imports. A call whose text cannot be resolved is listed on stderr as "unresolved": make it a literal.
 
 With ``--check`` nothing is written; the exit status is 1 when a string lacks a translation.
 Debian's pylupdate5 treats a second argument of ``tr()`` as a comment, not a context, so this
@@ -24,30 +31,124 @@ REPO = Path(__file__).resolve().parents[1]
 LANGUAGES = {"fr": "fr_FR", "es": "es_ES"}
 SOURCES = ["plugin", "processing"]
 REPORT_CONTEXT = "PlotwiseReport"
+MARKERS = ("translate", "QT_TRANSLATE_NOOP", "translatable")
 
 
-def _const(node, constants):
+# -- constants of a module, followed through relative imports ------------------------------
+class ModuleIndex:
+    """Module-level string constants (and containers of strings) of the package's modules."""
+
+    def __init__(self):
+        self._trees = {}
+
+    def tree(self, path):
+        if path not in self._trees:
+            self._trees[path] = ast.parse(path.read_text(encoding="utf-8")) if path.exists() else None
+        return self._trees[path]
+
+    @staticmethod
+    def _target(path, level, module):
+        base = path.parent
+        for _ in range(max(level - 1, 0)):
+            base = base.parent
+        parts = module.split(".") if module else []
+        return base.joinpath(*parts)
+
+    def module_path(self, path, level, module):
+        """File of ``from <level dots><module> import ...`` seen from ``path`` (None if not ours)."""
+        if level == 0:
+            return None
+        target = self._target(path, level, module)
+        if target.with_suffix(".py").exists():
+            return target.with_suffix(".py")
+        if (target / "__init__.py").exists():
+            return target / "__init__.py"
+        return None
+
+    def imported_modules(self, path):
+        """Local names bound to package modules in ``path``: ``from ..engine import layout as engine``."""
+        names = {}
+        tree = self.tree(path)
+        for node in tree.body if tree else ():
+            if isinstance(node, ast.ImportFrom) and node.level:
+                for alias in node.names:
+                    target = self._target(path, node.level, node.module)
+                    candidate = (target / alias.name).with_suffix(".py")
+                    if candidate.exists():
+                        names[alias.asname or alias.name] = candidate
+        return names
+
+    def strings(self, path, name, depth=0):
+        """Strings of module constant ``name`` in ``path`` (one for a str, all for a container)."""
+        tree = self.tree(path)
+        if tree is None or depth > 5:
+            return []
+        for node in tree.body:
+            if isinstance(node, ast.Assign) and any(isinstance(t, ast.Name) and t.id == name for t in node.targets):
+                return _literal_strings(node.value)
+        for node in tree.body:  # re-exported: from .unit_shapes import SHAPES
+            if isinstance(node, ast.ImportFrom) and node.level:
+                for alias in node.names:
+                    if (alias.asname or alias.name) == name:
+                        source = self.module_path(path, node.level, node.module)
+                        if source is not None:
+                            return self.strings(source, alias.name, depth + 1)
+        return []
+
+
+def _literal_strings(node):
     if isinstance(node, ast.Constant) and isinstance(node.value, str):
-        return node.value
-    if isinstance(node, ast.Name) and node.id in constants:
-        return constants[node.id]
-    return None
+        return [node.value]
+    if isinstance(node, (ast.Tuple, ast.List)):
+        return [s for element in node.elts for s in _literal_strings(element)]
+    if isinstance(node, ast.Dict):
+        return [s for value in node.values for s in _literal_strings(value)]
+    if isinstance(node, ast.Call) and getattr(node.func, "id", None) in MARKERS and len(node.args) >= 2:
+        return _literal_strings(node.args[1])  # translatable("Ctx", "text")
+    return []
+
+
+INDEX = ModuleIndex()
 
 
 def _module_tr_context(tree):
+    """Context of a module-level ``def tr(text)`` / ``def _tr(text)`` wrapping ``translate``."""
     for node in tree.body:
-        if isinstance(node, ast.FunctionDef) and node.name == "tr":
+        if isinstance(node, ast.FunctionDef) and node.name in ("tr", "_tr") and len(node.args.args) == 1:
             for call in ast.walk(node):
                 if isinstance(call, ast.Call) and getattr(call.func, "attr", None) == "translate" and call.args:
-                    value = _const(call.args[0], {})
-                    if value:
-                        return value
+                    value = call.args[0]
+                    if isinstance(value, ast.Constant) and isinstance(value.value, str):
+                        return value.value
     return None
 
 
-def extract_file(path):
-    """Yield (context, source, line) for one Python file."""
-    tree = ast.parse(path.read_text(encoding="utf-8"))
+def _module_context_wrappers(tree):
+    """Module-level ``def _tr(context, text)`` wrapping ``translate(context, text)``: used like translate."""
+    names = set()
+    for node in tree.body:
+        if isinstance(node, ast.FunctionDef) and len(node.args.args) == 2:
+            first = node.args.args[0].arg
+            for call in ast.walk(node):
+                if (isinstance(call, ast.Call) and getattr(call.func, "attr", None) == "translate" and call.args
+                        and isinstance(call.args[0], ast.Name) and call.args[0].id == first):
+                    names.add(node.name)
+    return names
+
+
+def _self_tr_aliases(function):
+    """Names bound to ``self.tr`` in a function body: ``tr = self.tr``."""
+    aliases = set()
+    for node in ast.walk(function):
+        if (isinstance(node, ast.Assign) and isinstance(node.value, ast.Attribute) and node.value.attr == "tr"
+                and isinstance(node.value.value, ast.Name) and node.value.value.id == "self"):
+            aliases.update(t.id for t in node.targets if isinstance(t, ast.Name))
+    return aliases
+
+
+def extract_file(path, unresolved=None):
+    """Yield (context, source, line) for one Python file; append unresolved calls to ``unresolved``."""
+    tree = INDEX.tree(path)
     constants = {
         t.id: n.value.value
         for n in tree.body
@@ -55,49 +156,120 @@ def extract_file(path):
         for t in n.targets
         if isinstance(t, ast.Name)
     }
+    module_containers = {
+        t.id: n.value
+        for n in tree.body
+        if isinstance(n, ast.Assign) and isinstance(n.value, (ast.Tuple, ast.List, ast.Dict))
+        for t in n.targets
+        if isinstance(t, ast.Name)
+    }
+    modules = INDEX.imported_modules(path)
     in_report = "report" in path.parts
     module_context = REPORT_CONTEXT if in_report else _module_tr_context(tree)
+    context_wrappers = _module_context_wrappers(tree)
 
-    def visit(node, class_name):
+    def texts(node):
+        """The strings a text argument can take; None when it cannot be resolved."""
+        if isinstance(node, ast.Constant) and isinstance(node.value, str):
+            return [node.value]
+        if isinstance(node, ast.Name):
+            if node.id in constants:
+                return [constants[node.id]]
+            if node.id in module_containers:
+                return _literal_strings(module_containers[node.id]) or None
+            return None
+        if isinstance(node, ast.IfExp):
+            body, orelse = texts(node.body), texts(node.orelse)
+            return body + orelse if body is not None and orelse is not None else None
+        if isinstance(node, ast.Subscript):
+            return texts(node.value)
+        if isinstance(node, ast.Attribute) and isinstance(node.value, ast.Name) and node.value.id in modules:
+            return INDEX.strings(modules[node.value.id], node.attr) or None
+        return None
+
+    def context_of(node):
+        if isinstance(node, ast.Constant) and isinstance(node.value, str):
+            return node.value
+        if isinstance(node, ast.Name) and node.id in constants:
+            return constants[node.id]
+        return None
+
+    def emit(ctx, text_node, call):
+        values = texts(text_node)
+        if values is None:
+            marked_elsewhere = isinstance(call.func, ast.Name) and call.func.id in context_wrappers
+            if unresolved is not None and not marked_elsewhere:  # _tr(ctx, entry[0]): marked by translatable()
+                unresolved.append((path.relative_to(REPO), call.lineno, ast.unparse(call)[:100]))
+            return
+        for value in values:
+            if value:
+                yield ctx, value, call.lineno
+
+    def visit(node, class_name, aliases):
         for child in ast.iter_child_nodes(node):
-            name = child.name if isinstance(child, ast.ClassDef) else class_name
+            name, child_aliases = class_name, aliases
+            if isinstance(child, ast.ClassDef):
+                name = child.name
+            elif isinstance(child, (ast.FunctionDef, ast.AsyncFunctionDef)):
+                child_aliases = aliases | _self_tr_aliases(child)
             if isinstance(child, ast.Call):
-                yield from from_call(child, class_name)
-            yield from visit(child, name)
+                yield from from_call(child, class_name, aliases)
+            yield from visit(child, name, child_aliases)
 
-    def from_call(call, class_name):
+    def from_call(call, class_name, aliases):
         func = call.func
         attr = func.attr if isinstance(func, ast.Attribute) else getattr(func, "id", None)
         args = call.args
-        if attr in ("translate", "QT_TRANSLATE_NOOP", "translatable") and len(args) >= 2:
-            ctx, text = _const(args[0], constants), _const(args[1], constants)
-            if ctx and text:
-                yield ctx, text, call.lineno
+        if (attr in MARKERS or isinstance(func, ast.Name) and attr in context_wrappers) and len(args) >= 2:
+            ctx = context_of(args[0])
+            if ctx:  # translate(context, text) with a variable context is a wrapper, not a message
+                yield from emit(ctx, args[1], call)
+        elif (attr in ("tr", "_tr") and isinstance(func, ast.Attribute) and isinstance(func.value, ast.Name)
+              and func.value.id in modules):  # bridge.tr("..."): the context of that module's tr()
+            ctx = _module_tr_context(INDEX.tree(modules[func.value.id]))
+            if ctx and len(args) == 1:
+                yield from emit(ctx, args[0], call)
+            elif unresolved is not None:
+                unresolved.append((path.relative_to(REPO), call.lineno, ast.unparse(call)[:100]))
         elif attr == "tr" and isinstance(func, ast.Attribute) and args:
-            text = _const(args[0], constants)
-            ctx = _const(args[1], constants) if len(args) > 1 else class_name
-            if text and ctx:
-                yield ctx, text, call.lineno
-        elif attr in ("tr", "_tr") and isinstance(func, ast.Name) and args and module_context:
-            text = _const(args[0], constants)
-            if text:
-                yield module_context, text, call.lineno
+            if isinstance(func.value, ast.Name) and func.value.id in ("self", "cls") or class_name:
+                ctx = context_of(args[1]) if len(args) > 1 else class_name
+                if ctx:
+                    yield from emit(ctx, args[0], call)
+        elif isinstance(func, ast.Name) and attr in aliases and args and class_name:
+            ctx = context_of(args[1]) if len(args) > 1 else class_name
+            if ctx:
+                yield from emit(ctx, args[0], call)
+        elif attr in ("tr", "_tr") and isinstance(func, ast.Name) and args and module_context and len(args) == 1:
+            yield from emit(module_context, args[0], call)
         elif attr == "_tr" and isinstance(func, ast.Attribute) and args and in_report:
-            text = _const(args[0], constants)
-            if text:
-                yield REPORT_CONTEXT, text, call.lineno
+            yield from emit(REPORT_CONTEXT, args[0], call)
 
-    yield from visit(tree, None)
+    yield from visit(tree, None, frozenset())
 
 
-def extract():
+# -- the wrappers themselves pass variables on: they are not messages ------------------------
+def _is_wrapper(path, line):
+    tree = INDEX.tree(path)
+    for node in ast.walk(tree):
+        if isinstance(node, ast.FunctionDef) and node.name in ("tr", "_tr") and node.lineno <= line <= node.end_lineno:
+            return True
+        if isinstance(node, ast.Lambda) and node.lineno <= line <= node.end_lineno:
+            return True
+    return False
+
+
+def extract(unresolved=None):
     messages = {}
+    found = []
     for folder in SOURCES:
         for path in sorted((REPO / folder).rglob("*.py")):
             if "engine" in path.relative_to(REPO).parts:
                 continue
-            for ctx, text, line in extract_file(path):
+            for ctx, text, line in extract_file(path, found):
                 messages.setdefault((ctx, text), []).append((path.relative_to(REPO), line))
+    if unresolved is not None:
+        unresolved.extend(item for item in found if not _is_wrapper(REPO / item[0], item[1]))
     return messages
 
 
@@ -141,7 +313,10 @@ def write_ts(path, language, messages, existing):
 
 def main(argv):
     check = "--check" in argv
-    messages = extract()
+    unresolved = []
+    messages = extract(unresolved)
+    for file, line, code in unresolved:
+        print(f"unresolved (make the text a literal inside tr()): {file}:{line}: {code}", file=sys.stderr)
     missing_total = 0
     for short, language in LANGUAGES.items():
         path = REPO / "i18n" / f"plotwise_{short}.ts"

@@ -1,0 +1,3494 @@
+<?xml version="1.0" encoding="utf-8"?>
+<!DOCTYPE TS>
+<TS version="2.1" language="es_ES">
+  <context>
+    <name>Allocate</name>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="56" />
+      <source>Allocate effort to strata</source>
+      <translation>Asignar el esfuerzo a los estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="59" />
+      <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
+
+Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
+
+Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall density meets it, with the finite-population correction; else a budget (if above 0, needs the cost field); else the total number of units.
+
+Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches a bound keeps it and the rest is shared among the others, until stable. Whole units are rounded by largest remainder, keeping the total.
+
+Area field: the stratum area in hectares (default area_ha, as written by the stratification); when it is empty or missing, the polygon area is used.
+SD field: the pilot standard deviation of counts per unit. Without it the covariate SD (cov_sd) is used as a proxy, which assumes that counts scale with the covariate; without either, the allocation is proportional.
+Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
+
+Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
+      <translation>Decide cuántas unidades de muestreo recibe cada estrato y muestra de antemano la precisión que aportan.
+
+Métodos: igual; proporcional al área del estrato; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, cap. 5); óptima con coste, n_h ∝ A_h·S_h/√c_h, con un presupuesto C = c0 + Σ c_h·n_h (Cochran 1977, cap. 5).
+
+Objetivo: un CV objetivo (si es mayor que 0) busca el menor total cuyo coeficiente de variación esperado de la densidad global lo cumple, con la corrección por población finita; si no, un presupuesto (si es mayor que 0, necesita el campo de coste); si no, el número total de unidades.
+
+Límites: al menos el mínimo por estrato (2 por defecto, para que se pueda estimar la varianza de cada estrato) y como máximo las unidades que caben (área del estrato / área de la unidad). Un estrato que alcanza un límite lo conserva y el resto se reparte entre los demás, hasta que se estabiliza. Las unidades enteras se redondean por el mayor resto, conservando el total.
+
+Campo de área: el área del estrato en hectáreas (area_ha por defecto, como lo escribe la estratificación); si está vacío o falta, se usa el área del polígono.
+Campo de DE: la desviación estándar piloto de los conteos por unidad. Sin él se usa como sustituto la DE de la covariable (cov_sd), lo que supone que los conteos siguen a la covariable; sin ninguno de los dos, la asignación es proporcional.
+Campo de media: el conteo medio piloto por unidad, necesario para los CV y para un CV objetivo. Campo de coste: coste de muestrear una unidad en cada estrato (por ejemplo, jornadas de campo).
+
+Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad del estrato), y un informe que compara la asignación igual, la proporcional y la de Neyman con el mismo total.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="84" />
+      <source>Strata</source>
+      <translation>Estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="88" />
+      <source>Stratum identifier field</source>
+      <translation>Campo identificador del estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="94" />
+      <source>Stratum area field (hectares; empty: polygon area)</source>
+      <translation>Campo de área del estrato (hectáreas; vacío: área del polígono)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="99" />
+      <source>Pilot SD of counts per unit</source>
+      <translation>Desviación estándar piloto de los conteos por unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="100" />
+      <source>Pilot mean count per unit</source>
+      <translation>Conteo medio piloto por unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="101" />
+      <source>Cost per unit</source>
+      <translation>Coste por unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="107" />
+      <source>Costs are field days</source>
+      <translation>Los costes son jornadas de campo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="111" />
+      <source>Fixed cost of the survey (c0, in the cost unit)</source>
+      <translation>Coste fijo del muestreo (c0, en la unidad de coste)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="118" />
+      <source>Allocation method</source>
+      <translation>Método de asignación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <source>Equal</source>
+      <translation>Igual</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <source>Proportional to area</source>
+      <translation>Proporcional al área</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <source>Neyman</source>
+      <translation>Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <source>Optimal with cost</source>
+      <translation>Óptima con coste</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="125" />
+      <source>Total number of units</source>
+      <translation>Número total de unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="130" />
+      <source>Budget (0: not used; needs the cost field)</source>
+      <translation>Presupuesto (0: no se usa; necesita el campo de coste)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="136" />
+      <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
+      <translation>CV objetivo de la densidad global (0: no se usa; p. ej. 0.2)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="142" />
+      <source>Area of one sample unit (m²)</source>
+      <translation>Área de una unidad de muestreo (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="148" />
+      <location filename="../processing/algorithms/allocate.py" line="307" />
+      <source>Minimum units per stratum</source>
+      <translation>Mínimo de unidades por estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="152" />
+      <source>Strata with allocation</source>
+      <translation>Estratos con asignación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="154" />
+      <source>Expected CV of the overall density</source>
+      <translation>CV esperado de la densidad global</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="160" />
+      <source>The strata layer could not be opened.</source>
+      <translation>No se pudo abrir la capa de estratos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="176" />
+      <source>Layer '{layer}' has no field '{field}': the polygon areas are used.</source>
+      <translation>La capa «{layer}» no tiene el campo «{field}»: se usan las áreas de los polígonos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="187" />
+      <source>Layer '{layer}' has no strata with an area.</source>
+      <translation>La capa «{layer}» no tiene ningún estrato con área.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="214" />
+      <source>No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
+      <translation>No hay campo de DE piloto: se usa como sustituto la DE de la covariable («{field}»). Esto supone que los conteos siguen a la covariable; sustitúyala por la DE de un muestreo piloto cuando la tenga. Los errores estándar esperados quedan entonces en unidades de la covariable, no en conteos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="256" />
+      <source>The output layer could not be created.</source>
+      <translation>No se pudo crear la capa de salida.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="267" />
+      <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
+      <translation>{total} unidades asignadas ({method}); CV esperado de la densidad global: {cv}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="284" />
+      <source>Allocation of survey effort</source>
+      <translation>Asignación del esfuerzo de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <source>equal</source>
+      <translation>igual</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <source>proportional to area</source>
+      <translation>proporcional al área</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <source>optimal with cost</source>
+      <translation>óptima con coste</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <source>field days</source>
+      <translation>jornadas de campo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <source>cost units</source>
+      <translation>unidades de coste</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <source>units in total</source>
+      <translation>unidades en total</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <source>method</source>
+      <translation>método</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="292" />
+      <source>expected CV of the overall density</source>
+      <translation>CV esperado de la densidad global</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <source>field days needed</source>
+      <translation>jornadas de campo necesarias</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <source>cost</source>
+      <translation>coste</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <source>a total number of units</source>
+      <translation>un número total de unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <source>a budget</source>
+      <translation>un presupuesto</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <source>a target CV</source>
+      <translation>un CV objetivo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="298" />
+      <source>Strata layer</source>
+      <translation>Capa de estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="299" />
+      <source>Computation CRS</source>
+      <translation>SRC de cálculo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="300" />
+      <source>Method asked for</source>
+      <translation>Método solicitado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="301" />
+      <source>Method applied</source>
+      <translation>Método aplicado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="302" />
+      <source>Target</source>
+      <translation>Objetivo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="303" />
+      <source>Total asked for</source>
+      <translation>Total solicitado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="304" />
+      <source>Budget</source>
+      <translation>Presupuesto</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="305" />
+      <source>Target CV</source>
+      <translation>CV objetivo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="306" />
+      <source>Unit area (m²)</source>
+      <translation>Área de la unidad (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <source>SD field</source>
+      <translation>Campo de DE</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <source> (covariate proxy)</source>
+      <translation> (sustituto por la covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="309" />
+      <source>Mean field</source>
+      <translation>Campo de media</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="310" />
+      <source>Cost field</source>
+      <translation>Campo de coste</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="311" />
+      <source>Fixed cost c0</source>
+      <translation>Coste fijo c0</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="315" />
+      <source>Units per stratum</source>
+      <translation>Unidades por estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <source>SE of mean per unit (covariate units)</source>
+      <translation>Error estándar de la media por unidad (unidades de la covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <source>SE of mean count per unit</source>
+      <translation>Error estándar del conteo medio por unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Stratum</source>
+      <translation>Estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Units that fit</source>
+      <translation>Unidades que caben</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Lower bound</source>
+      <translation>Límite inferior</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Share before rounding</source>
+      <translation>Cuota antes del redondeo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <source>Units (n_alloc)</source>
+      <translation>Unidades (n_alloc)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <source>Sampling fraction</source>
+      <translation>Fracción de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="322" />
+      <source>SE of density (per km²)</source>
+      <translation>Error estándar de la densidad (por km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="324" />
+      <source>Expected CV (exp_cv)</source>
+      <translation>CV esperado (exp_cv)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="336" />
+      <source>all strata</source>
+      <translation>todos los estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="347" />
+      <source>units per stratum</source>
+      <translation>unidades por estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="348" />
+      <source>Units allocated to each stratum</source>
+      <translation>Unidades asignadas a cada estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="350" />
+      <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
+      <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="356" />
+      <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
+      <translation>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <source>Field days needed</source>
+      <translation>Jornadas de campo necesarias</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <source>Cost of the design</source>
+      <translation>Coste del diseño</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="362" />
+      <source>What the choice of method buys, at {n} units</source>
+      <translation>Lo que aporta la elección del método, con {n} unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <source>Method</source>
+      <translation>Método</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <source>stratum {label}</source>
+      <translation>estrato {label}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="365" />
+      <source>Variance relative to the applied allocation</source>
+      <translation>Varianza relativa a la asignación aplicada</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="367" />
+      <source>Expected CV</source>
+      <translation>CV esperado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="378" />
+      <source>Without standard deviations the precision of the designs cannot be compared.</source>
+      <translation>Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
+    </message>
+  </context>
+  <context>
+    <name>BuildFrame</name>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="35" />
+      <source>Build sampling frame</source>
+      <translation>Construir el marco de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="38" />
+      <source>Builds the sampling frame: the part of the study area that the survey can speak for.
+
+Three rules are applied in this order, each one charged only with the area still in the frame when it is applied:
+1. Excluded polygons (water, private inholdings, ...) are removed.
+2. Cells of the mask raster (band 1) whose value lies outside [minimum, maximum], or is NoData, are removed. Either bound may be left empty. Cells of the study area that the raster does not cover count as NoData. A raster in another CRS is reprojected on the fly (nearest neighbour). Example: a slope raster in degrees with maximum 30.
+3. An inward strip of the given width (metres) along the study area's boundary is removed.
+
+The result is dissolved into one valid feature with fields frame_id and area_ha. The report gives the area kept, the area lost to each rule and a map.
+
+A study area in geographic coordinates is projected to the UTM zone of its centre; the output is in that CRS. Empty or zero-area features are skipped and invalid geometries repaired, each with a warning.
+
+Estimates from a survey on this frame apply to the frame only. Excluding steep terrain does not make the remaining terrain safe: check every unit's access and safety before fieldwork.</source>
+      <translation>Construye el marco de muestreo: la parte del área de estudio sobre la que el muestreo puede pronunciarse.
+
+Se aplican tres reglas en este orden, y a cada una solo se le imputa el área que seguía en el marco cuando se aplica:
+1. Se quitan los polígonos excluidos (agua, enclaves privados, ...).
+2. Se quitan las celdas del ráster de máscara (banda 1) cuyo valor queda fuera de [mínimo, máximo] o es NoData. Cualquiera de los límites puede quedar vacío. Las celdas del área de estudio que el ráster no cubre cuentan como NoData. Un ráster en otro SRC se reproyecta al vuelo (vecino más próximo). Ejemplo: un ráster de pendiente en grados con máximo 30.
+3. Se quita una franja interior del ancho indicado (metros) a lo largo del límite del área de estudio.
+
+El resultado se disuelve en una sola entidad válida con los campos frame_id y area_ha. El informe da el área conservada, el área perdida por cada regla y un mapa.
+
+Un área de estudio en coordenadas geográficas se proyecta a la zona UTM de su centro; la salida está en ese SRC. Las entidades vacías o de área nula se omiten y las geometrías no válidas se reparan, cada vez con una advertencia.
+
+Las estimaciones de un muestreo sobre este marco valen solo para el marco. Excluir el terreno escarpado no hace seguro el terreno restante: compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="61" />
+      <source>Study area</source>
+      <translation>Área de estudio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="67" />
+      <source>Areas to exclude (water, inholdings, ...)</source>
+      <translation>Zonas que excluir (agua, enclaves, ...)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="74" />
+      <source>Mask raster (cells outside the range are excluded)</source>
+      <translation>Ráster de máscara (se excluyen las celdas fuera del intervalo)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="80" />
+      <source>Lowest accepted mask value (empty: no lower limit)</source>
+      <translation>Valor mínimo aceptado de la máscara (vacío: sin límite inferior)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="88" />
+      <source>Highest accepted mask value (empty: no upper limit)</source>
+      <translation>Valor máximo aceptado de la máscara (vacío: sin límite superior)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="96" />
+      <source>Inward edge buffer (m)</source>
+      <translation>Franja interior en el borde (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="104" />
+      <location filename="../processing/algorithms/buildframe.py" line="270" />
+      <source>Sampling frame</source>
+      <translation>Marco de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="126" />
+      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
+      <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="132" />
+      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
+      <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="152" />
+      <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
+      <translation>MASK_MIN o MASK_MAX tiene valor pero no se ha dado ningún ráster de máscara (MASK). Elija un ráster o deje vacíos ambos límites.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="157" />
+      <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
+      <translation>El valor mínimo aceptado de la máscara (MASK_MIN = {lo}) es mayor que el máximo (MASK_MAX = {hi}). Intercámbielos o deje uno vacío.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="170" />
+      <source>Layer '{layer}' (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
+      <translation>La capa «{layer}» (INPUT) no tiene ningún polígono con área positiva. Elija la capa de polígonos del área de estudio.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="189" />
+      <source>Mask raster '{layer}' is given without limits: only its NoData cells are excluded.</source>
+      <translation>El ráster de máscara «{layer}» se ha dado sin límites: solo se excluyen sus celdas NoData.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="196" />
+      <source>Mask raster '{layer}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+      <translation>El ráster de máscara «{layer}» no es un archivo ráster que GDAL pueda leer. Guárdelo primero como GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="199" />
+      <source>Reading mask raster '{layer}'…</source>
+      <translation>Leyendo el ráster de máscara «{layer}»…</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="213" />
+      <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
+      <translation>Ráster de máscara reproyectado al vuelo a {crs}: {rows} × {cols} celdas de {size} m.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="220" />
+      <source>Mask raster '{layer}' does not cover {n} of the {total} cells over the study area's extent; those cells count as NoData and are excluded.</source>
+      <translation>El ráster de máscara «{layer}» no cubre {n} de las {total} celdas de la extensión del área de estudio; esas celdas cuentan como NoData y se excluyen.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="244" />
+      <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
+      <translation>Marco: {kept} ha de {total} ha ({pct} %).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="275" />
+      <source>study area (ha)</source>
+      <translation>área de estudio (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="276" />
+      <source>frame (ha)</source>
+      <translation>marco (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="277" />
+      <source>kept</source>
+      <translation>conservado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="280" />
+      <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
+      <translation>Las estimaciones de un muestreo sobre este marco valen solo para el marco ({ha} ha), no para toda el área de estudio.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="283" />
+      <source>Area kept and area lost to each rule</source>
+      <translation>Área conservada y área perdida por cada regla</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="285" />
+      <source>lost to the excluded polygons (EXCLUDE)</source>
+      <translation>perdida por los polígonos excluidos (EXCLUDE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="286" />
+      <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
+      <translation>perdida por la máscara ráster (MASK fuera del intervalo aceptado, o NoData)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="287" />
+      <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
+      <translation>perdida por la franja interior del borde (EDGE_BUFFER)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="289" />
+      <source>study area</source>
+      <translation>área de estudio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="292" />
+      <source>sampling frame (kept)</source>
+      <translation>marco de muestreo (conservado)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="293" />
+      <location filename="../processing/algorithms/buildframe.py" line="300" />
+      <source>Item</source>
+      <translation>Elemento</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="293" />
+      <source>Area (ha)</source>
+      <translation>Área (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="293" />
+      <source>% of study area</source>
+      <translation>% del área de estudio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="295" />
+      <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
+      <translation>Las reglas se aplican en el orden mostrado; a cada una solo se le imputa el área que seguía en el marco, de modo que el marco y las áreas perdidas suman el área de estudio.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="299" />
+      <source>Mask raster</source>
+      <translation>Ráster de máscara</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="300" />
+      <source>Value</source>
+      <translation>Valor</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="301" />
+      <source>cells tested over the study area's extent</source>
+      <translation>celdas comprobadas en la extensión del área de estudio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="302" />
+      <source>cell size (m)</source>
+      <translation>tamaño de celda (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="303" />
+      <source>cells below the lowest accepted value</source>
+      <translation>celdas por debajo del valor mínimo aceptado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="304" />
+      <source>cells above the highest accepted value</source>
+      <translation>celdas por encima del valor máximo aceptado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="305" />
+      <source>NoData cells (including cells outside the raster)</source>
+      <translation>celdas NoData (incluidas las celdas fuera del ráster)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="306" />
+      <source>reprojected on the fly (nearest neighbour)</source>
+      <translation>reproyectado al vuelo (vecino más próximo)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="306" />
+      <source>yes</source>
+      <translation>sí</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="306" />
+      <source>no</source>
+      <translation>no</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="309" />
+      <source>Map</source>
+      <translation>Mapa</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="310" />
+      <source>Frame (filled), with the areas lost to each rule</source>
+      <translation>Marco (relleno), con las áreas perdidas por cada regla</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="313" />
+      <source>(none)</source>
+      <translation>(ninguno)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="317" />
+      <source>, projected from {src} (UTM zone of the study area's centre)</source>
+      <translation>, proyectado desde {src} (zona UTM del centro del área de estudio)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="319" />
+      <source>Study area (INPUT)</source>
+      <translation>Área de estudio (INPUT)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="320" />
+      <source>Areas to exclude (EXCLUDE)</source>
+      <translation>Zonas que excluir (EXCLUDE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="321" />
+      <source>Mask raster (MASK)</source>
+      <translation>Ráster de máscara (MASK)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="322" />
+      <source>Lowest accepted mask value (MASK_MIN)</source>
+      <translation>Valor mínimo aceptado de la máscara (MASK_MIN)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="323" />
+      <source>Highest accepted mask value (MASK_MAX)</source>
+      <translation>Valor máximo aceptado de la máscara (MASK_MAX)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="324" />
+      <source>Inward edge buffer (EDGE_BUFFER, m)</source>
+      <translation>Franja interior del borde (EDGE_BUFFER, m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="325" />
+      <source>CRS of the computation and the output</source>
+      <translation>SRC del cálculo y de la salida</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="360" />
+      <source>sampling frame</source>
+      <translation>marco de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="362" />
+      <source>excluded polygons</source>
+      <translation>polígonos excluidos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="366" />
+      <source>raster mask</source>
+      <translation>máscara ráster</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="368" />
+      <source>study area boundary</source>
+      <translation>límite del área de estudio</translation>
+    </message>
+  </context>
+  <context>
+    <name>CompareDesigns</name>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="83" />
+      <source>Compare survey designs by simulation</source>
+      <translation>Comparar diseños de muestreo por simulación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="86" />
+      <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
+
+Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
+
+Each replicate realises a population: Poisson counts in every surface cell, or with an overdispersion k above 0 negative binomial counts (gamma-Poisson, variance μ + μ²/k per cell). Every chosen design is then laid out with the layout engine, its units count the animals in the cells they cover (the part inside the frame or their stratum), and the abundance is estimated with the estimation engine (ratio estimator, t interval with Satterthwaite df; Cochran 1977). All designs survey the same populations, so their differences are not blurred.
+
+Designs: simple random; stratified with proportional allocation; stratified with Neyman allocation, n_h ∝ A_h·S_h with S_h the SD of a unit's count implied by the surface (Neyman 1934); systematic grid with a random start (its n varies); spatially balanced (balanced acceptance sampling, Robertson et al. 2013).
+
+Units: point station (size = counting radius), square plot (side), circular plot (radius), line transect (length, counting a strip of the given half-width on each side). Bearing in degrees clockwise from grid north, −1 random. Keep units inside: centres are drawn from each stratum shrunk by the unit's radius, as the layout's option does. Otherwise a unit reaching over the edge of its stratum or of the frame counts only the part inside, and its area is that part.
+
+Output table, one row per design: rel_bias (relative bias against each population's true total), emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % intervals holding the truth), mean_n (mean units surveyed), alloc (units per stratum), recommend (1 for the recommended design: the lowest RMSE among designs whose intervals cover at least 90 %).
+
+Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
+
+The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+      <translation>Antes del trabajo de campo: ¿qué diseño, y cuántas unidades, dan una estimación útil en esta zona? El algoritmo simula muchos muestreos de una superficie de densidad plausible e informa de cómo le fue a cada diseño.
+
+Superficie: un ráster de animales esperados por km² (de un modelo de hábitat, un mapa de expertos o un muestreo anterior), reproyectado al SRC del marco cuando hace falta. Marco: el marco de muestreo. Estratos (opcionales, con el campo de estrato, 'stratum' por defecto): necesarios para los dos diseños estratificados.
+
+Cada réplica genera una población: conteos de Poisson en cada celda de la superficie o, con una sobredispersión k mayor que 0, conteos binomiales negativos (gamma-Poisson, varianza μ + μ²/k por celda). Luego cada diseño elegido se dispone con el motor de disposición, sus unidades cuentan los animales de las celdas que cubren (la parte dentro del marco o de su estrato) y la abundancia se estima con el motor de estimación (estimador de razón, intervalo t con gl de Satterthwaite; Cochran 1977). Todos los diseños muestrean las mismas poblaciones, de modo que sus diferencias no se difuminan.
+
+Diseños: aleatorio simple; estratificado con asignación proporcional; estratificado con asignación de Neyman, n_h ∝ A_h·S_h con S_h la DE del conteo de una unidad implicada por la superficie (Neyman 1934); cuadrícula sistemática con inicio aleatorio (su n varía); espacialmente equilibrado (muestreo por aceptación equilibrada, Robertson et al. 2013).
+
+Unidades: estación puntual (tamaño = radio de conteo), parcela cuadrada (lado), parcela circular (radio), transecto lineal (longitud, contando una franja de la semianchura indicada a cada lado). Rumbo en grados en sentido horario desde el norte de la cuadrícula, −1 aleatorio. Mantener las unidades dentro: los centros se sortean en cada estrato reducido en el radio de la unidad, como hace la opción de la disposición. Si no, una unidad que sobresale del borde de su estrato o del marco solo cuenta la parte interior, y su área es esa parte.
+
+Tabla de salida, una fila por diseño: rel_bias (sesgo relativo frente al total verdadero de cada población), emp_se (DE de los errores), rmse (raíz del error cuadrático medio) y rmse_mcse (su error estándar de Monte Carlo), rel_rmse (rmse / total verdadero medio), mean_cv (CV estimado medio), coverage (proporción de intervalos al 95 % que contienen la verdad), mean_n (media de unidades muestreadas), alloc (unidades por estrato), recommend (1 para el diseño recomendado: la menor RECM entre los diseños cuyos intervalos cubren al menos el 90 %).
+
+Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación se repite con cada n y el informe dibuja la RECM frente a n, mostrando dónde más esfuerzo deja de compensar.
+
+La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="122" />
+      <source>Density surface (expected animals per km²)</source>
+      <translation>Superficie de densidad (animales esperados por km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="124" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="365" />
+      <source>Sampling frame</source>
+      <translation>Marco de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <source>Strata (for the stratified designs)</source>
+      <translation>Estratos (para los diseños estratificados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="133" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <source>Stratum field</source>
+      <translation>Campo de estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="138" />
+      <source>Designs to compare</source>
+      <translation>Diseños que comparar</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <source>Simple random</source>
+      <translation>Aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <source>Stratified, proportional allocation</source>
+      <translation>Estratificado, asignación proporcional</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <source>Stratified, Neyman allocation</source>
+      <translation>Estratificado, asignación de Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <source>Systematic grid</source>
+      <translation>Cuadrícula sistemática</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <source>Spatially balanced</source>
+      <translation>Espacialmente equilibrado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="146" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
+      <source>Number of units</source>
+      <translation>Número de unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="151" />
+      <source>Unit shape</source>
+      <translation>Forma de la unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Point station</source>
+      <translation>Estación puntual</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Square plot</source>
+      <translation>Parcela cuadrada</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Circular plot</source>
+      <translation>Parcela circular</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Line transect</source>
+      <translation>Transecto lineal</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="158" />
+      <source>Unit size (m): counting radius, side, radius or transect length</source>
+      <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="164" />
+      <source>Half-width of a transect's counting strip (m)</source>
+      <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="170" />
+      <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
+      <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="176" />
+      <source>Keep units wholly inside their stratum (as the layout's option)</source>
+      <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="182" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
+      <source>Simulated surveys per design</source>
+      <translation>Muestreos simulados por diseño</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="188" />
+      <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
+      <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="194" />
+      <source>Variance estimator for the grid and balanced designs</source>
+      <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <source>Simple random sampling formula</source>
+      <translation>Fórmula del muestreo aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
+      <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="201" />
+      <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
+      <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="207" />
+      <source>Design comparison</source>
+      <translation>Comparación de diseños</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="210" />
+      <source>Recommended design</source>
+      <translation>Diseño recomendado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="216" />
+      <source>The density surface could not be opened.</source>
+      <translation>No se pudo abrir la superficie de densidad.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="219" />
+      <source>The sampling frame could not be opened.</source>
+      <translation>No se pudo abrir el marco de muestreo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="225" />
+      <source>Layer '{layer}' has no polygon with an area.</source>
+      <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="239" />
+      <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
+      <translation>La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="249" />
+      <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
+      <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="259" />
+      <source>No strata were given: the stratified designs are left out ({names}).</source>
+      <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="264" />
+      <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
+      <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="281" />
+      <source>Reading the density surface…</source>
+      <translation>Leyendo la superficie de densidad…</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="284" />
+      <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
+      <translation>La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="306" />
+      <source>Simulating {n} units…</source>
+      <translation>Simulando {n} unidades…</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="312" />
+      <source>{n} units were left out of the range: {why}</source>
+      <translation>{n} unidades quedaron fuera del rango: {why}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="318" />
+      <source>The output table could not be created.</source>
+      <translation>No se pudo crear la tabla de salida.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="335" />
+      <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
+      <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="344" />
+      <source>Survey designs compared by simulation</source>
+      <translation>Diseños de muestreo comparados por simulación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="350" />
+      <source>recommended design</source>
+      <translation>diseño recomendado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="351" />
+      <source>its RMSE (animals)</source>
+      <translation>su RECM (animales)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="352" />
+      <source>its RMSE relative to the total</source>
+      <translation>su RECM relativa al total</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="353" />
+      <source>its 95 % interval coverage</source>
+      <translation>cobertura de sus intervalos al 95 %</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
+      <source>expected animals in the frame</source>
+      <translation>animales esperados en el marco</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>point station</source>
+      <translation>estación puntual</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>square plot</source>
+      <translation>parcela cuadrada</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>circular plot</source>
+      <translation>parcela circular</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>line transect</source>
+      <translation>transecto lineal</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>counting radius</source>
+      <translation>radio de conteo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>side</source>
+      <translation>lado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>radius</source>
+      <translation>radio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>length</source>
+      <translation>longitud</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <source>, strip half-width {w:g} m</source>
+      <translation>, semianchura de franja {w:g} m</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="364" />
+      <source>Density surface</source>
+      <translation>Superficie de densidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="466" />
+      <source>Strata</source>
+      <translation>Estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <source>none</source>
+      <translation>ninguno</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <source>feature id</source>
+      <translation>identificador de entidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
+      <source>Computation CRS</source>
+      <translation>SRC de cálculo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
+      <source>Surface cell</source>
+      <translation>Celda de la superficie</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <source>Sub-cells per cell side (for counting)</source>
+      <translation>Subceldas por lado de celda (para el conteo)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <source>Unit</source>
+      <translation>Unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
+      <source>Counted area per unit (m²)</source>
+      <translation>Área contada por unidad (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <source>Bearing</source>
+      <translation>Rumbo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <source>random</source>
+      <translation>aleatorio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <source>Units wholly inside their stratum</source>
+      <translation>Unidades por completo dentro de su estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <source>yes</source>
+      <translation>sí</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <source>no</source>
+      <translation>no</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <source>Counts per cell</source>
+      <translation>Conteos por celda</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <source>negative binomial, k = {k:g}</source>
+      <translation>binomial negativa, k = {k:g}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <source>Poisson</source>
+      <translation>Poisson</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <source>Variance estimator (grid, balanced)</source>
+      <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <source>local neighbourhood</source>
+      <translation>vecindario local</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
+      <source>simple random sampling formula</source>
+      <translation>fórmula del muestreo aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <source>Confidence level</source>
+      <translation>Nivel de confianza</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
+      <source>Seed</source>
+      <translation>Semilla</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
+      <source>How the designs did at {n} units</source>
+      <translation>Resultados de los diseños con {n} unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Design</source>
+      <translation>Diseño</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Mean units surveyed</source>
+      <translation>Media de unidades muestreadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Relative bias</source>
+      <translation>Sesgo relativo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Empirical SE (animals)</source>
+      <translation>Error estándar empírico (animales)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <source>RMSE (animals)</source>
+      <translation>RECM (animales)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <source>± Monte Carlo SE</source>
+      <translation>± error estándar de Monte Carlo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <source>RMSE / total</source>
+      <translation>RECM / total</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <source>Mean estimated CV</source>
+      <translation>CV estimado medio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <source>95 % interval coverage</source>
+      <translation>Cobertura de los intervalos al 95 %</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <source>Surveys without an estimate</source>
+      <translation>Muestreos sin estimación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="401" />
+      <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
+      <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="408" />
+      <source>RMSE of the abundance (animals)</source>
+      <translation>RECM de la abundancia (animales)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="410" />
+      <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
+      <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
+      <source>Recommendation</source>
+      <translation>Recomendación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
+      <source>No design gave estimates: see the warnings.</source>
+      <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
+      <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
+      <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="422" />
+      <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
+      <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="429" />
+      <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
+      <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="434" />
+      <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
+      <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="443" />
+      <source>How the simulation works</source>
+      <translation>Cómo funciona la simulación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="444" />
+      <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
+      <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="453" />
+      <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
+      <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>Stratum</source>
+      <translation>Estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>Area (km²)</source>
+      <translation>Área (km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>Mean expected count per unit</source>
+      <translation>Conteo esperado medio por unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>S_h (count SD per unit)</source>
+      <translation>S_h (DE del conteo por unidad)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="471" />
+      <source>Units, proportional</source>
+      <translation>Unidades, proporcional</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <source>Units, Neyman</source>
+      <translation>Unidades, Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="483" />
+      <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
+      <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="491" />
+      <source>RMSE against the number of units</source>
+      <translation>RECM frente al número de unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
+      <source>number of units</source>
+      <translation>número de unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="499" />
+      <source>RMSE of the abundance estimate against the number of units</source>
+      <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="501" />
+      <source>Units</source>
+      <translation>Unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="509" />
+      <source>{a} → {b} units: RMSE {change:+.0%}</source>
+      <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="510" />
+      <source>For {name}: </source>
+      <translation>Para {name}: </translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="511" />
+      <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
+      <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
+    </message>
+  </context>
+  <context>
+    <name>DemoReserve</name>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="34" />
+      <source>Demo reserve with a simulated population</source>
+      <translation>Reserva de demostración con una población simulada</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="37" />
+      <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Construye Hollin Ridge Reserve, una reserva de montaña inventada para demostraciones, formación y pruebas, y una población simulada de velmar, un antílope herbívoro inventado. Nada de ello describe un lugar o una especie reales.&lt;/p&gt;&lt;p&gt;La reserva abarca 250–350 km² en WGS 84 / UTM zona 36S, con un límite irregular, un lago y un enclave privado (ambos en la capa de zonas excluidas), un ráster de altitud (relieve fractal sintético con un escarpe abrupto) y un ráster de verdor (un índice de vegetación de 0 a 1, correlacionado con la altitud, más ruido).&lt;/p&gt;&lt;p&gt;Los velmar viven en grupos: un proceso de conglomerados de Thomas no homogéneo cuyos centros de grupo son más densos donde el verdor es alto y la altitud baja. El total verdadero se conoce, y el número esperado de animales por km² se escribe como ráster, para poder contrastar los diseños de muestreo y las estimaciones con la verdad.&lt;/p&gt;&lt;h3&gt;Parámetros&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: la misma semilla da la misma reserva y los mismos animales. 0 sortea una y la registra.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Tamaño de celda del ráster&lt;/b&gt;: metros, de 10 a 500 (50 por defecto).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Límite de la reserva (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zonas excluidas (&lt;i&gt;kind&lt;/i&gt; lake o inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rásteres de altitud (m), verdor (0–1) y velmar esperados por km²&lt;/li&gt;&lt;li&gt;Animales (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un informe HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Referencias: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="65" />
+      <location filename="../processing/algorithms/demoreserve.py" line="148" />
+      <source>Raster cell size (m)</source>
+      <translation>Tamaño de celda del ráster (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="69" />
+      <source>Reserve boundary</source>
+      <translation>Límite de la reserva</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="70" />
+      <source>Excluded areas (lake, inholding)</source>
+      <translation>Zonas excluidas (lago, enclave)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="71" />
+      <source>Elevation (m)</source>
+      <translation>Altitud (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="72" />
+      <source>Greenness (0–1)</source>
+      <translation>Verdor (0–1)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="73" />
+      <source>Expected animals per km²</source>
+      <translation>Animales esperados por km²</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="74" />
+      <source>Simulated animals</source>
+      <translation>Animales simulados</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="76" />
+      <source>True number of animals</source>
+      <translation>Número verdadero de animales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="77" />
+      <source>Expected number of animals</source>
+      <translation>Número esperado de animales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="120" />
+      <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
+      <translation>{name}: {area:,.1f} km², {n:,} velmar en {g:,} grupos (esperados: {e:,.0f}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="136" />
+      <source>Demo reserve: {name}</source>
+      <translation>Reserva de demostración: {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="137" />
+      <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
+      <translation>Datos inventados para demostraciones, formación y pruebas. {name} y el velmar ({desc}) no existen.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="139" />
+      <source>an invented grazing antelope that lives in loose groups</source>
+      <translation>un antílope herbívoro inventado que vive en grupos laxos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="141" />
+      <source>reserve area</source>
+      <translation>superficie de la reserva</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="142" />
+      <source>true number of velmar</source>
+      <translation>número verdadero de velmar</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="143" />
+      <source>expected number</source>
+      <translation>número esperado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="144" />
+      <source>groups</source>
+      <translation>grupos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="147" />
+      <source>Seed</source>
+      <translation>Semilla</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="149" />
+      <source>CRS</source>
+      <translation>SRC</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="150" />
+      <source>Mean group size (mu)</source>
+      <translation>Tamaño medio de los grupos (mu)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="151" />
+      <source>Group spread, SD of members around the centre (m)</source>
+      <translation>Dispersión de los grupos, desviación estándar de los miembros alrededor del centro (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="153" />
+      <source>Areas</source>
+      <translation>Zonas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="155" />
+      <source>Part</source>
+      <translation>Parte</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="155" />
+      <source>Area (km²)</source>
+      <translation>Área (km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="156" />
+      <location filename="../processing/algorithms/demoreserve.py" line="163" />
+      <source>Reserve</source>
+      <translation>Reserva</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="156" />
+      <source>Lake (excluded)</source>
+      <translation>Lago (excluido)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="157" />
+      <source>Private inholding (excluded)</source>
+      <translation>Enclave privado (excluido)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="159" />
+      <source>Map</source>
+      <translation>Mapa</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="164" />
+      <source>Lake</source>
+      <translation>Lago</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="165" />
+      <source>Private inholding</source>
+      <translation>Enclave privado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="167" />
+      <source>Velmar (every third animal)</source>
+      <translation>Velmar (uno de cada tres animales)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="168" />
+      <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
+      <translation>Hollin Ridge Reserve, las zonas excluidas y los animales simulados.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="169" />
+      <source>How the population was simulated</source>
+      <translation>Cómo se simuló la población</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="170" />
+      <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
+      <translation>Los centros de grupo forman un proceso de Poisson no homogéneo sobre el hábitat (la reserva sin el lago); su intensidad es proporcional a exp(0,9 × verdor estandarizado − 0,6 × altitud estandarizada). Cada grupo tiene un número de miembros de Poisson (media {mu:g}) dispersos alrededor de su centro con un desplazamiento normal de {sigma:g} m; los miembros que caen fuera del hábitat no forman parte de la población. Es un proceso de conglomerados de Thomas. Su total esperado y su varianza se calculan a partir de la superficie de intensidad en la malla del ráster.</translation>
+    </message>
+  </context>
+  <context>
+    <name>Estimate</name>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="107" />
+      <source>Estimate density and abundance</source>
+      <translation>Estimar la densidad y la abundancia</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="110" />
+      <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
+
+Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
+
+Counts: a NULL count means the unit was not surveyed: it is left out and listed as non-response. Reserve units (role = reserve) without a count are unused reserves and are skipped quietly; reserves that were surveyed count like any other unit. 0 means surveyed, none seen. Negative or non-numeric counts stop the run, naming the units.
+
+Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is above 0, else the polygon's area, else for lines the strip width × the line's length, else the fixed unit area for points and lines.
+
+Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is collapsed with a neighbour for its variance (Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so.
+
+Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a stratified percentile bootstrap of 2,000 resamples (seeded).
+
+Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance.
+
+Detection: with a detection probability p below 1, estimates are divided by p and the squared CVs add (delta method, Seber 1982). p and its SE must come from a separate study.
+
+Presence data: with the presence option a 0/1 field gives the stratified proportion of units where the species was detected (naive occupancy, not corrected for detection), and abund is the number of occupied units in the frame.
+
+Target CV (above 0): n_next is the number of units each stratum needs next time for that CV of the overall abundance, by Neyman allocation on the observed standard deviations (Neyman 1934; Cochran 1977, eq. 5.26).
+
+True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
+
+Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
+      <translation>Estima la densidad y la abundancia por estrato y para todo el marco de muestreo a partir de los conteos en las unidades de muestreo, con error estándar, coeficiente de variación (CV) e intervalo de confianza, y el tamaño de muestra que necesita el próximo muestreo.
+
+Estimador: D_h = Σy / Σa por estrato (el estimador de razón; con unidades iguales, el conteo medio dividido por el área de la unidad), con su varianza linealizada (Cochran 1977, cap. 5 y 6); abundancia N_h = D_h·A_h; en total N = Σ N_h y D = N / Σ A_h, sumando las varianzas. La corrección por población finita 1 − Σa/A_h se aplica cuando se pide.
+
+Conteos: un conteo NULL significa que la unidad no se muestreó: se deja fuera y se lista como no respuesta. Las unidades de reserva (role = reserve) sin conteo son reservas no usadas y se omiten sin aviso; las reservas que se muestrearon cuentan como cualquier otra unidad. 0 significa muestreada, ningún animal visto. Los conteos negativos o no numéricos detienen la ejecución, nombrando las unidades.
+
+Área de la unidad (m²): el campo de área de la unidad (area_m2 por defecto, como lo escribe la disposición) si es mayor que 0; si no, el área del polígono; si no, para líneas, el ancho de franja × la longitud de la línea; si no, el área fija de la unidad para puntos y líneas.
+
+Estratos: polígonos con un campo identificador que corresponde al campo de estrato de las unidades; sus áreas definen el marco. Cuando las unidades no tienen campo de estrato, o la capa de estratos es un solo polígono sin campo identificador, todas las unidades forman un solo estrato sobre el marco. Un estrato con una sola unidad muestreada se agrupa con un vecino para su varianza (Cochran 1977, §5A.12), con una advertencia. Un estrato sin ninguna es un error, salvo que decida dejarlo fuera: entonces el marco se reduce y el informe lo indica.
+
+Intervalos: t con los grados de libertad de Satterthwaite (Satterthwaite 1946; Cochran 1977); log-normal, de N/C a N·C con C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); o un bootstrap estratificado de percentiles con 2.000 remuestreos (con semilla).
+
+Varianza: la fórmula del muestreo aleatorio simple, o el estimador de vecindario local (Stevens &amp; Olsen 2003) para cuadrículas sistemáticas y disposiciones espacialmente equilibradas, donde la fórmula simple sobrestima la varianza.
+
+Detección: con una probabilidad de detección p menor que 1, las estimaciones se dividen por p y los CV al cuadrado se suman (método delta, Seber 1982). p y su error estándar deben proceder de un estudio aparte.
+
+Datos de presencia: con la opción de presencia, un campo 0/1 da la proporción estratificada de unidades donde se detectó la especie (ocupación ingenua, sin corregir por la detección), y abund es el número de unidades ocupadas en el marco.
+
+CV objetivo (mayor que 0): n_next es el número de unidades que cada estrato necesita la próxima vez para ese CV de la abundancia global, por asignación de Neyman sobre las desviaciones estándar observadas (Neyman 1934; Cochran 1977, ec. 5.26).
+
+Total verdadero: solo para simulaciones y formación. El informe lo muestra entonces junto a la estimación; en un muestreo real el total verdadero nunca se conoce.
+
+Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="153" />
+      <source>Sample units with counts</source>
+      <translation>Unidades de muestreo con conteos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="155" />
+      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <source>Count field</source>
+      <translation>Campo de conteo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="157" />
+      <source>Stratum field of the units</source>
+      <translation>Campo de estrato de las unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="160" />
+      <source>Unit area field (m²)</source>
+      <translation>Campo de área de la unidad (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="163" />
+      <source>Fixed unit area for points and lines (m²; 0: not used)</source>
+      <translation>Área fija de la unidad para puntos y líneas (m²; 0: no se usa)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="166" />
+      <source>Strip width of line transects (m, full width; 0: not used)</source>
+      <translation>Ancho de franja de los transectos lineales (m, ancho total; 0: no se usa)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="169" />
+      <source>Strata (the frame)</source>
+      <translation>Estratos (el marco)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="171" />
+      <source>Stratum id field of the strata</source>
+      <translation>Campo identificador de los estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="174" />
+      <location filename="../processing/algorithms/estimate.py" line="494" />
+      <source>Confidence level</source>
+      <translation>Nivel de confianza</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="177" />
+      <source>Confidence interval</source>
+      <translation>Intervalo de confianza</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="178" />
+      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <source>t with Satterthwaite degrees of freedom</source>
+      <translation>t con los grados de libertad de Satterthwaite</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="178" />
+      <source>Log-normal</source>
+      <translation>Log-normal</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="179" />
+      <source>Stratified bootstrap (2,000 resamples)</source>
+      <translation>Bootstrap estratificado (2.000 remuestreos)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="181" />
+      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <source>Finite-population correction</source>
+      <translation>Corrección por población finita</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="183" />
+      <source>Detection probability p (from a separate study; 1: all seen)</source>
+      <translation>Probabilidad de detección p (de un estudio aparte; 1: todos vistos)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="186" />
+      <source>Standard error of p</source>
+      <translation>Error estándar de p</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <source>Area unit of the results</source>
+      <translation>Unidad de área de los resultados</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <source>km²</source>
+      <translation>km²</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <source>hectares</source>
+      <translation>hectáreas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="192" />
+      <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
+      <translation>CV objetivo para el próximo muestreo (0: no se usa; p. ej. 0.15)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="196" />
+      <location filename="../processing/algorithms/estimate.py" line="496" />
+      <source>Variance estimator</source>
+      <translation>Estimador de la varianza</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="197" />
+      <source>Simple random sampling formula</source>
+      <translation>Fórmula del muestreo aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="198" />
+      <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
+      <translation>Vecindario local (disposiciones sistemáticas o espacialmente equilibradas)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="200" />
+      <source>The count field holds presence (1) / absence (0)</source>
+      <translation>El campo de conteo contiene presencia (1) / ausencia (0)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="202" />
+      <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
+      <translation>Dejar fuera los estratos sin unidades muestreadas (el marco se reduce)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="205" />
+      <source>True total of a simulated population (simulations and training only; 0: none)</source>
+      <translation>Total verdadero de una población simulada (solo simulaciones y formación; 0: ninguno)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="210" />
+      <source>Strata with estimates</source>
+      <translation>Estratos con estimaciones</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="212" />
+      <source>Estimate table</source>
+      <translation>Tabla de estimaciones</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <source>Overall density</source>
+      <translation>Densidad global</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <source>SE of the overall density</source>
+      <translation>Error estándar de la densidad global</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="216" />
+      <source>Overall abundance</source>
+      <translation>Abundancia global</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="217" />
+      <source>Lower confidence limit of the abundance</source>
+      <translation>Límite inferior de confianza de la abundancia</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="218" />
+      <source>Upper confidence limit of the abundance</source>
+      <translation>Límite superior de confianza de la abundancia</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="219" />
+      <source>CV of the overall estimate</source>
+      <translation>CV de la estimación global</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="242" />
+      <source>Layer '{layer}' has no count field '{field}'. Choose the field that holds the counts.</source>
+      <translation>La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="251" />
+      <source>Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the strata layer's id field (plotwise:stratify writes 'stratum'), or give a frame layer of one polygon to treat the frame as one stratum.</source>
+      <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos (plotwise:stratify escribe 'stratum') o dé una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="255" />
+      <source>Layer '{layer}' is one polygon without a stratum id field: the frame is treated as one stratum, and the units' field '{field}' is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
+      <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato y no se usa el campo «{field}» de las unidades. Si las unidades se asignaron a los estratos de forma desigual, dé en su lugar los estratos: una media no estratificada está entonces sesgada.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="285" />
+      <source>Layer '{layer}' has no features.</source>
+      <translation>La capa «{layer}» no tiene entidades.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="290" />
+      <source>Layer '{layer}' has no polygons with an area.</source>
+      <translation>La capa «{layer}» no tiene polígonos con área.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="306" />
+      <source>{n} unused reserve unit(s) without a count were skipped.</source>
+      <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="337" />
+      <source>Layer '{layer}': units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
+      <translation>Capa «{layer}»: las unidades {ids} no tienen geometría, así que la varianza de vecindario local no puede usarlas. Deles su ubicación o use la fórmula del muestreo aleatorio simple.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="344" />
+      <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
+      <translation>Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="391" />
+      <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
+      <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="413" />
+      <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
+      <translation>Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="432" />
+      <source>In strata {strata} the units' inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
+      <translation>En los estratos {strata} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <source>occupied units</source>
+      <translation>unidades ocupadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <source>animals</source>
+      <translation>animales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <source>Naive occupancy from presence data</source>
+      <translation>Ocupación ingenua a partir de datos de presencia</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <source>Density and abundance estimate</source>
+      <translation>Estimación de la densidad y la abundancia</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <source>proportion of units occupied (naive)</source>
+      <translation>proporción de unidades ocupadas (ingenua)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <source>density per {unit}</source>
+      <translation>densidad por {unit}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="459" />
+      <source>estimated {what} in the frame</source>
+      <translation>estimación de {what} en el marco</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="460" />
+      <source>{level} interval</source>
+      <translation>intervalo al {level}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="462" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <source>CV</source>
+      <translation>CV</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="463" />
+      <source>units surveyed</source>
+      <translation>unidades muestreadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="466" />
+      <source>true total of the simulated population</source>
+      <translation>total verdadero de la población simulada</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="471" />
+      <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).</source>
+      <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <source>covers</source>
+      <translation>contiene</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <source>misses</source>
+      <translation>no contiene</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <source>log-normal</source>
+      <translation>log-normal</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="480" />
+      <source>stratified percentile bootstrap</source>
+      <translation>bootstrap estratificado de percentiles</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="481" />
+      <source>simple random sampling formula</source>
+      <translation>fórmula del muestreo aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="482" />
+      <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
+      <translation>vecindario local (Stevens &amp; Olsen 2003)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="484" />
+      <source>Sample units</source>
+      <translation>Unidades de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <source> (presence/absence)</source>
+      <translation> (presencia/ausencia)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <source>Stratum field</source>
+      <translation>Campo de estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <source>none: one stratum</source>
+      <translation>ninguno: un solo estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <source>Unit area</source>
+      <translation>Área de la unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <source>field {field} (m²)</source>
+      <translation>campo {field} (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="488" />
+      <source>polygon area</source>
+      <translation>área del polígono</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="489" />
+      <source>strip width</source>
+      <translation>ancho de franja</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="490" />
+      <source>fixed</source>
+      <translation>fija</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="491" />
+      <source>Strata (frame)</source>
+      <translation>Estratos (marco)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="492" />
+      <source>Computation CRS</source>
+      <translation>SRC de cálculo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="493" />
+      <source>Area unit</source>
+      <translation>Unidad de área</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="495" />
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Interval</source>
+      <translation>Intervalo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <source>yes</source>
+      <translation>sí</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <source>no</source>
+      <translation>no</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="498" />
+      <source>Detection probability p</source>
+      <translation>Probabilidad de detección p</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="499" />
+      <source>Target CV for the next survey</source>
+      <translation>CV objetivo para el próximo muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="502" />
+      <source>Bootstrap resamples</source>
+      <translation>Remuestreos bootstrap</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="503" />
+      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <source>Seed</source>
+      <translation>Semilla</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <source>not used (no random draws without the bootstrap)</source>
+      <translation>no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="509" />
+      <source>Estimates by stratum</source>
+      <translation>Estimaciones por estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <source>Stratum</source>
+      <translation>Estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <source>Area ({unit})</source>
+      <translation>Área ({unit})</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <source>Units (n)</source>
+      <translation>Unidades (n)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <source>Not surveyed</source>
+      <translation>No muestreadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <source>Mean count</source>
+      <translation>Conteo medio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <source>SD of counts</source>
+      <translation>DE de los conteos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <source>SE</source>
+      <translation>EE</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="512" />
+      <location filename="../processing/algorithms/estimate.py" line="515" />
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Lower limit</source>
+      <translation>Límite inferior</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="515" />
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Upper limit</source>
+      <translation>Límite superior</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <source>df</source>
+      <translation>gl</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <source>Occupied units</source>
+      <translation>Unidades ocupadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <source>Abundance</source>
+      <translation>Abundancia</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <source>Units next time (n_next)</source>
+      <translation>Unidades la próxima vez (n_next)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="522" />
+      <location filename="../processing/algorithms/estimate.py" line="565" />
+      <source>all strata</source>
+      <translation>todos los estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="525" />
+      <source>{what}, limits at {level}.</source>
+      <translation>{what}, límites al {level}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="527" />
+      <source>{what} in the frame, limits at {level}.</source>
+      <translation>{what} en el marco, límites al {level}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="530" />
+      <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
+      <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="535" />
+      <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
+      <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="538" />
+      <source>The overall interval by method</source>
+      <translation>El intervalo global según el método</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Used in the outputs</source>
+      <translation>Usado en las salidas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="543" />
+      <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
+      <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <source>overall abundance in a resample</source>
+      <translation>abundancia global en un remuestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <source>resamples</source>
+      <translation>remuestreos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="553" />
+      <source>{level} percentile limits</source>
+      <translation>límites de percentiles al {level}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="554" />
+      <source>The {n:,} bootstrap resamples of the overall abundance</source>
+      <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="563" />
+      <source>true density (simulation)</source>
+      <translation>densidad verdadera (simulación)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="568" />
+      <source>{what} by stratum with {level} confidence intervals</source>
+      <translation>{what} por estrato con intervalos de confianza al {level}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="579" />
+      <source>lowest</source>
+      <translation>mínimo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="580" />
+      <source>highest</source>
+      <translation>máximo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="585" />
+      <source>surveyed units</source>
+      <translation>unidades muestreadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="588" />
+      <source>not surveyed</source>
+      <translation>no muestreadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="590" />
+      <source>Strata shaded by {what}, with the units</source>
+      <translation>Estratos sombreados según {what}, con las unidades</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="593" />
+      <source>Method</source>
+      <translation>Método</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="595" />
+      <source>Each stratum's value is the proportion of its surveyed units where the species was detected; the frame's value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
+      <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="602" />
+      <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
+      <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="610" />
+      <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
+      <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="613" />
+      <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
+      <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). Son asimétricos y nunca bajan de 0.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="615" />
+      <source>Intervals are stratified percentile bootstrap intervals: units are resampled with replacement within each stratum, {b:,} times, from the recorded seed (Efron &amp; Tibshirani 1993). The finite-population correction is not applied to them.</source>
+      <translation>Los intervalos son intervalos bootstrap estratificados de percentiles: las unidades se remuestrean con reposición dentro de cada estrato, {b:,} veces, a partir de la semilla registrada (Efron &amp; Tibshirani 1993). No se les aplica la corrección por población finita.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="621" />
+      <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
+      <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, y solo las diferencias dentro de los vecindarios cuentan como varianza. Para disposiciones sistemáticas y espacialmente equilibradas, la fórmula del muestreo aleatorio simple sobrestima la varianza; este estimador no, siempre que la disposición fuera realmente sistemática o espacialmente equilibrada; para una disposición aleatoria simple use la fórmula simple. La suma de las varianzas locales se escala una vez para que coincida en promedio con la fórmula simple cuando la población no tiene estructura espacial (decisión nuestra).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="630" />
+      <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
+      <translation>Los estratos con una sola unidad muestreada se agruparon con un vecino (entre los estratos que lo tocan en el mapa o, si no, los estratos contiguos en el orden de identificadores, el de densidad más próxima): los miembros de un grupo comparten la varianza residual combinada del grupo (Cochran 1977, §5A.12). Las diferencias entre los estratos agrupados cuentan entonces como varianza, por lo que sus errores estándar tienden a ser demasiado grandes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="636" />
+      <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval's degrees of freedom combine the two parts (Buckland et al. 2001), p's part counting as known with infinite degrees of freedom.</source>
+      <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad del intervalo t combinan ambas partes (Buckland et al. 2001), contando la de p como conocida con grados de libertad infinitos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="643" />
+      <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
+      <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar observadas ahora (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 por estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="649" />
+      <source>Cautions</source>
+      <translation>Precauciones</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="650" />
+      <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
+      <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="654" />
+      <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
+      <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="657" />
+      <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
+      <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="662" />
+      <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
+      <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="665" />
+      <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
+      <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
+    </message>
+  </context>
+  <context>
+    <name>ExampleChain</name>
+    <message>
+      <location filename="../processing/provider.py" line="38" />
+      <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
+      <translation>Cadena de ejemplo: planificar un muestreo (marco, estratos, esfuerzo, disposición)</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="39" />
+      <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+      <translation>Construye el marco de muestreo (área de estudio menos las exclusiones y las celdas por encima de la pendiente límite), forma estratos por k-medias a partir de los rásteres de covariables, reparte las unidades por asignación de Neyman con la desviación estándar de la covariable como sustituto y dispone parcelas cuadradas espacialmente equilibradas con 3 unidades de reserva por estrato. Ábrala en el modelador para cambiar cualquier paso. Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="48" />
+      <source>Example chain: estimate from simulated counts</source>
+      <translation>Cadena de ejemplo: estimar a partir de conteos simulados</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="49" />
+      <source>For training: fills the units' count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
+      <translation>Para formación: rellena el campo de conteo de las unidades a partir de una población simulada y luego estima la densidad y la abundancia por estrato y en total. Con trabajo de campo real, ejecute en su lugar la estimación sobre las unidades contadas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="57" />
+      <location filename="../processing/provider.py" line="81" />
+      <source>Example chains</source>
+      <translation>Cadenas de ejemplo</translation>
+    </message>
+  </context>
+  <context>
+    <name>LayoutUnits</name>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="73" />
+      <source>Lay out sample units</source>
+      <translation>Disponer las unidades de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="76" />
+      <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
+
+Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
+
+Designs:
+• Simple random: independent points, uniform over the stratum (triangles chosen by area, then a point within; Turk 1990).
+• Systematic grid: a square grid of spacing √(A/n) with a random start; with bearing −1 the grid also gets a random rotation, otherwise it is turned to the bearing. The realised number of units varies around n and is reported.
+• Spatially balanced: balanced acceptance sampling on a Halton sequence (Robertson et al. 2013). Every leading part of the draw order is itself spread evenly, so reserves are the next points of the same sequence. The start is a uniform random point of the stratum, which keeps inclusion equal for any sample size.
+
+Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in degrees clockwise from grid north, or −1 for a random bearing per unit.
+Keep units inside: centres are drawn from the stratum shrunk by the unit's circumscribing radius, so every unit lies wholly inside its stratum; the shrunk (effective) area is reported and used for the inclusion probabilities.
+Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.
+Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit that cannot be surveyed is replaced by the next unused reserve of the same stratum.
+
+Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an empty count field for the field teams. The GPX file holds one waypoint per unit (a start and an end waypoint per transect), named by unit_id.
+
+A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+      <translation>Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato por valor del campo de estrato; sin él, el marco es un solo estrato).
+
+Unidades por estrato: el campo de unidades (por ejemplo n_alloc del paso de asignación; el mismo número entero en cada entidad de un estrato); si no, el total repartido en proporción al área con al menos 2 por estrato.
+
+Diseños:
+• Aleatorio simple: puntos independientes, uniformes en el estrato (triángulos elegidos según su área y luego un punto dentro; Turk 1990).
+• Cuadrícula sistemática: una cuadrícula cuadrada de espaciado √(A/n) con un inicio aleatorio; con rumbo −1 la cuadrícula recibe además una rotación aleatoria; si no, se orienta según el rumbo. El número de unidades obtenido varía en torno a n y se indica.
+• Espacialmente equilibrado: muestreo por aceptación equilibrada sobre una secuencia de Halton (Robertson et al. 2013). Cada tramo inicial del orden de sorteo está a su vez repartido de modo uniforme, de modo que las reservas son los puntos siguientes de la misma secuencia. El inicio es un punto aleatorio uniforme del estrato, lo que mantiene la inclusión igual para cualquier tamaño de muestra.
+
+Formas: estación puntual (tamaño: radio de conteo opcional, m), parcela cuadrada (tamaño: lado, m), parcela circular (tamaño: radio, m), transecto lineal (tamaño: longitud, m; centrado en el punto sorteado). Rumbo en grados en sentido horario desde el norte de la cuadrícula, o −1 para un rumbo aleatorio por unidad.
+Mantener las unidades dentro: los centros se sortean en el estrato reducido en el radio circunscrito de la unidad, de modo que cada unidad queda por completo dentro de su estrato; el área reducida (efectiva) se indica y se usa para las probabilidades de inclusión.
+Separación mínima (m) entre los centros de todas las unidades, principales y de reserva, en toda la disposición.
+Reservas: unidades adicionales por estrato, role = reserve, en orden de sorteo. Regla de sustitución: una unidad principal que no se puede muestrear se sustituye por la siguiente reserva no usada del mismo estrato.
+
+Campos de salida: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; para transectos y puntos sin radio, la densidad de inclusión n/A por m²), weight = 1/incl_p, lon/lat (WGS 84) y un campo count vacío para los equipos de campo. El archivo GPX contiene un punto de paso por unidad (uno de inicio y otro de fin por transecto), con el nombre de unit_id.
+
+Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="111" />
+      <source>Sampling frame or strata</source>
+      <translation>Marco de muestreo o estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="115" />
+      <source>Stratum field (empty: the frame is one stratum)</source>
+      <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="121" />
+      <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
+      <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="127" />
+      <source>Total number of units (when no units field is given)</source>
+      <translation>Número total de unidades (si no se da un campo de unidades)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="133" />
+      <source>Design</source>
+      <translation>Diseño</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="134" />
+      <source>Simple random</source>
+      <translation>Aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="134" />
+      <source>Systematic grid</source>
+      <translation>Cuadrícula sistemática</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="134" />
+      <source>Spatially balanced</source>
+      <translation>Espacialmente equilibrado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="139" />
+      <source>Unit shape</source>
+      <translation>Forma de la unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Point station</source>
+      <translation>Estación puntual</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Square plot</source>
+      <translation>Parcela cuadrada</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Circular plot</source>
+      <translation>Parcela circular</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Line transect</source>
+      <translation>Transecto lineal</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="146" />
+      <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
+      <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="152" />
+      <source>Bearing (degrees from grid north; -1: random)</source>
+      <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="157" />
+      <source>Keep every unit wholly inside its stratum</source>
+      <translation>Mantener cada unidad por completo dentro de su estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="161" />
+      <source>Minimum spacing between unit centres (m; 0: none)</source>
+      <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="167" />
+      <source>Reserve units per stratum</source>
+      <translation>Unidades de reserva por estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="171" />
+      <source>Sample units</source>
+      <translation>Unidades de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="174" />
+      <source>Waypoints for GPS (GPX)</source>
+      <translation>Puntos de paso para GPS (GPX)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="174" />
+      <source>GPX files (*.gpx)</source>
+      <translation>Archivos GPX (*.gpx)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="187" />
+      <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
+      <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="214" />
+      <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
+      <translation>Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="238" />
+      <source>Stratum field '{field}' of layer '{layer}'</source>
+      <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="239" />
+      <source>Units field '{field}' of layer '{layer}'</source>
+      <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="245" />
+      <source>Layer '{layer}': {text}</source>
+      <translation>Capa «{layer}»: {text}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="249" />
+      <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
+      <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="263" />
+      <source>{n} waypoints written to {path}</source>
+      <translation>{n} puntos de paso escritos en {path}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="267" />
+      <source>{stratum}: {n} primary and {r} reserve units</source>
+      <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="280" />
+      <source>the frame</source>
+      <translation>el marco</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="280" />
+      <source>stratum {key}</source>
+      <translation>estrato {key}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="336" />
+      <source>Sample-unit layout</source>
+      <translation>Disposición de las unidades de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="341" />
+      <location filename="../processing/algorithms/layout.py" line="443" />
+      <source>primary units</source>
+      <translation>unidades principales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="444" />
+      <source>reserve units</source>
+      <translation>unidades de reserva</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <source>strata</source>
+      <translation>estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <source>design</source>
+      <translation>diseño</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>simple random</source>
+      <translation>aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>systematic grid</source>
+      <translation>cuadrícula sistemática</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>spatially balanced</source>
+      <translation>espacialmente equilibrado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="346" />
+      <source>Replacing units in the field</source>
+      <translation>Sustituir unidades en el terreno</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="348" />
+      <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
+      <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="353" />
+      <source>Units per stratum</source>
+      <translation>Unidades por estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Stratum</source>
+      <translation>Estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Area (ha)</source>
+      <translation>Área (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Effective area (ha)</source>
+      <translation>Área efectiva (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Units asked</source>
+      <translation>Unidades pedidas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Primary</source>
+      <translation>Principales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="356" />
+      <source>Reserve</source>
+      <translation>Reservas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="356" />
+      <source>incl_p</source>
+      <translation>incl_p</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="356" />
+      <source>weight</source>
+      <translation>weight</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="358" />
+      <source>Grid spacing (m)</source>
+      <translation>Espaciado de la cuadrícula (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="358" />
+      <source>Grid rotation (°)</source>
+      <translation>Rotación de la cuadrícula (°)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="361" />
+      <source>frame</source>
+      <translation>marco</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="369" />
+      <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
+      <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="371" />
+      <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
+      <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="375" />
+      <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
+      <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="382" />
+      <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
+      <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="385" />
+      <source>Map</source>
+      <translation>Mapa</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="386" />
+      <source>Strata (filled), primary units (dark) and reserve units (light)</source>
+      <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="387" />
+      <source>Method</source>
+      <translation>Método</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="391" />
+      <source>, projected from {src} (UTM zone of the frame's centre)</source>
+      <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="393" />
+      <source>Frame (FRAME)</source>
+      <translation>Marco (FRAME)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="394" />
+      <source>Stratum field (STRATUM_FIELD)</source>
+      <translation>Campo de estrato (STRATUM_FIELD)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="394" />
+      <source>(none: one stratum)</source>
+      <translation>(ninguno: un solo estrato)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="395" />
+      <source>Units per stratum field (N_FIELD)</source>
+      <translation>Campo de unidades por estrato (N_FIELD)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="395" />
+      <source>(none)</source>
+      <translation>(ninguno)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="396" />
+      <source>Total units (N_UNITS)</source>
+      <translation>Total de unidades (N_UNITS)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="396" />
+      <source>(not used)</source>
+      <translation>(no se usa)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>Design (DESIGN)</source>
+      <translation>Diseño (DESIGN)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>Unit shape (SHAPE)</source>
+      <translation>Forma de la unidad (SHAPE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>point</source>
+      <translation>punto</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>square</source>
+      <translation>cuadrado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>circle</source>
+      <translation>círculo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>line</source>
+      <translation>línea</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="399" />
+      <source>Unit size (SIZE, m)</source>
+      <translation>Tamaño de la unidad (SIZE, m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="400" />
+      <source>Bearing (BEARING, degrees)</source>
+      <translation>Rumbo (BEARING, grados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="400" />
+      <source>random</source>
+      <translation>aleatorio</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="401" />
+      <source>Keep inside (INSIDE)</source>
+      <translation>Mantener dentro (INSIDE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="401" />
+      <source>yes</source>
+      <translation>sí</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="401" />
+      <source>no</source>
+      <translation>no</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="402" />
+      <source>Minimum spacing (MIN_SPACING, m)</source>
+      <translation>Separación mínima (MIN_SPACING, m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="403" />
+      <source>Reserves per stratum (RESERVE)</source>
+      <translation>Reservas por estrato (RESERVE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="404" />
+      <source>Seed (SEED)</source>
+      <translation>Semilla (SEED)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="405" />
+      <source>CRS of the computation and the output</source>
+      <translation>SRC del cálculo y de la salida</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="413" />
+      <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
+      <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="415" />
+      <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
+      <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="417" />
+      <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
+      <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="424" />
+      <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
+      <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseAlgorithm</name>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="258" />
+      <location filename="../processing/algorithms/base.py" line="116" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="321" />
+      <location filename="../processing/algorithms/demoreserve.py" line="117" />
+      <location filename="../processing/algorithms/estimate.py" line="375" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="113" />
+      <location filename="../processing/algorithms/stratify.py" line="210" />
+      <source>Cancelled by the user. No result was written.</source>
+      <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="29" />
+      <location filename="../processing/algorithms/base.py" line="54" />
+      <source>Survey design</source>
+      <translation>Diseño del muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="30" />
+      <location filename="../processing/algorithms/base.py" line="54" />
+      <source>Estimation</source>
+      <translation>Estimación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="31" />
+      <location filename="../processing/algorithms/base.py" line="54" />
+      <source>Demo and training</source>
+      <translation>Demostración y formación</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="70" />
+      <source>Random seed (0 draws one and records it)</source>
+      <translation>Semilla aleatoria (0 sortea una y la registra)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="82" />
+      <source>Report (HTML)</source>
+      <translation>Informe (HTML)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="83" />
+      <source>HTML files (*.html)</source>
+      <translation>Archivos HTML (*.html)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="94" />
+      <source>Seed used: {seed}</source>
+      <translation>Semilla usada: {seed}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="136" />
+      <source>Report written to {path}</source>
+      <translation>Informe escrito en {path}</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseBridge</name>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="547" />
+      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
+      <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="559" />
+      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
+      <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="572" />
+      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
+      <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="67" />
+      <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
+      <translation>La capa «{layer}» no tiene un sistema de referencia de coordenadas válido. Defina su SRC (Propiedades de la capa → Fuente) y vuelva a ejecutar.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="78" />
+      <source>Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
+      <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="116" />
+      <source>The input layer '{layer}' could not be opened.</source>
+      <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="124" />
+      <source>Layer '{layer}' has no field named {names}. Choose an existing field.</source>
+      <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="157" />
+      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
+      <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="161" />
+      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
+      <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="181" />
+      <source> and {n} more</source>
+      <translation> y {n} más</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="232" />
+      <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
+      <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="259" />
+      <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
+      <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="264" />
+      <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
+      <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwisePlugin</name>
+    <message>
+      <location filename="../plugin/plugin.py" line="51" />
+      <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
+      <translation>Plotwise no puede iniciarse porque falta una biblioteca necesaria o es demasiado antigua: {problems} Instale los paquetes estándar del anfitrión (en Debian o Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) y reinicie QGIS. No se ha añadido ningún algoritmo de Plotwise.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseProvider</name>
+    <message>
+      <location filename="../processing/provider.py" line="95" />
+      <source>Plotwise</source>
+      <translation>Plotwise</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="98" />
+      <source>Plotwise survey design and estimation</source>
+      <translation>Plotwise: diseño de muestreos y estimación</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="119" />
+      <source>The example model {path} could not be read.</source>
+      <translation>No se pudo leer el modelo de ejemplo {path}.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseReport</name>
+    <message>
+      <location filename="../processing/report/html.py" line="124" />
+      <source>Inputs and parameters</source>
+      <translation>Entradas y parámetros</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="126" />
+      <source>Item</source>
+      <translation>Elemento</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="126" />
+      <source>Value</source>
+      <translation>Valor</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="153" />
+      <source>Written</source>
+      <translation>Generado el</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="155" />
+      <source>algorithm</source>
+      <translation>algoritmo</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="159" />
+      <source>Field safety</source>
+      <translation>Seguridad en el terreno</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="160" />
+      <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
+      <translation>Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo. Esta herramienta elige ubicaciones solo por razones estadísticas: nunca hace que una ubicación sea segura para llegar a ella ni para trabajar en ella. El terreno escarpado, remoto o inundado, la fauna, el tiempo atmosférico y las tierras privadas pueden poner a las personas en riesgo. Siga las normas de seguridad en el terreno de su organismo y la legislación local, y excluya o sustituya cualquier unidad a la que no se pueda llegar con seguridad (regístrela como no muestreada).</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="164" />
+      <source>Warnings</source>
+      <translation>Advertencias</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="168" />
+      <source>Method references</source>
+      <translation>Referencias de los métodos</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseStyles</name>
+    <message>
+      <location filename="../processing/styles.py" line="211" />
+      <source>primary unit</source>
+      <translation>unidad principal</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="212" />
+      <source>reserve unit</source>
+      <translation>unidad de reserva</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="255" />
+      <source>per {unit}</source>
+      <translation>por {unit}</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="256" />
+      <source>Density (animals {per})</source>
+      <translation>Densidad (animales {per})</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="286" />
+      <source>no estimate (no surveyed unit)</source>
+      <translation>sin estimación (ninguna unidad muestreada)</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="385" />
+      <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
+      <translation>No se pudo aplicar el estilo a la capa {name} ({error}); conserva el estilo predeterminado.</translation>
+    </message>
+  </context>
+  <context>
+    <name>SimulateCounts</name>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="30" />
+      <source>Simulate counts in sample units</source>
+      <translation>Simular conteos en las unidades de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="33" />
+      <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit's &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve's simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
+      <source>Sample units</source>
+      <translation>Unidades de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="52" />
+      <source>Animal points</source>
+      <translation>Puntos de animales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="55" />
+      <source>Detection probability</source>
+      <translation>Probabilidad de detección</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="60" />
+      <source>Count reserve units too</source>
+      <translation>Contar también las unidades de reserva</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="63" />
+      <source>Units with simulated counts</source>
+      <translation>Unidades con conteos simulados</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="88" />
+      <source>Layer '{layer}': these features cannot be counted: {items}. Point and line units need a positive 'area_m2' field (the layout step writes it); polygons need a geometry.</source>
+      <translation>Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="127" />
+      <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
+      <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
+    </message>
+  </context>
+  <context>
+    <name>Stratify</name>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="67" />
+      <source>Quantile (equal areas on the first covariate)</source>
+      <translation>Cuantiles (áreas iguales sobre la primera covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="68" />
+      <source>Equal interval (on the first covariate)</source>
+      <translation>Intervalos iguales (sobre la primera covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="69" />
+      <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
+      <translation>Raíz acumulada de las frecuencias (Dalenius–Hodges, primera covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="70" />
+      <source>k-means (all covariates, standardised)</source>
+      <translation>k-medias (todas las covariables, estandarizadas)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="71" />
+      <source>Raster classes (each class of the first covariate)</source>
+      <translation>Clases del ráster (cada clase de la primera covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="75" />
+      <source>Stratify from raster covariates</source>
+      <translation>Estratificar a partir de covariables ráster</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="78" />
+      <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches smaller than the minimum patch area (ha) are merged into their neighbours (GDAL sieve, 4-connected) before the strata are turned into polygons.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Forma estratos (zonas de densidad esperada similar) a partir de covariables ráster como la altitud, un índice de vegetación o un mapa de cobertura del suelo. Solo cuentan las celdas cuyo centro está dentro del marco de muestreo. Una celda con NoData en alguna covariable se deja fuera y se informa de su área.&lt;/p&gt;&lt;p&gt;Las covariables se llevan a la malla de la primera, en el SRC del marco (un marco en coordenadas geográficas se proyecta a la zona UTM de su centro). Los rásteres en otro SRC o en otra malla se remuestrean al vuelo (bilineal; vecino más próximo para las clases del ráster). Los rásteres se leen bloque a bloque, de modo que la memoria queda acotada sea cual sea su tamaño.&lt;/p&gt;&lt;h3&gt;Métodos&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Cuantiles&lt;/b&gt;: estratos de igual área a lo largo de la primera covariable. Los límites son los cuantiles muestrales exactos de las celdas del marco (Hyndman &amp;amp; Fan 1996, definición 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalos iguales&lt;/b&gt;: el rango de la primera covariable dividido en anchos iguales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raíz acumulada de las frecuencias&lt;/b&gt;: la regla de Dalenius &amp;amp; Hodges (1959) sobre un histograma de 100 clases de la primera covariable (Cochran 1977, cap. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-medias&lt;/b&gt;: todas las covariables estandarizadas a media 0 y DE 1, semillas k-means++ (Arthur &amp;amp; Vassilvitskii 2007) e iteraciones de Lloyd sobre una muestra aleatoria de 100.000 celdas sorteada con la semilla; después cada celda va al centro más próximo.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Clases del ráster&lt;/b&gt;: cada valor de la primera covariable (un ráster categórico, como máximo 50 clases) es un estrato; el número de estratos se ignora.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Los estratos se numeran de 1 a k por media creciente de la primera covariable. Las manchas menores que el área mínima (ha) se fusionan con sus vecinas (criba de GDAL, conectividad 4) antes de convertir los estratos en polígonos.&lt;/p&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Ráster de estratos: el estrato de cada celda (0 = ninguno).&lt;/li&gt;&lt;li&gt;Estratos: un multipolígono por estrato con &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (celdas × área de la celda), &lt;i&gt;cov_mean&lt;/i&gt; y &lt;i&gt;cov_sd&lt;/i&gt; de la primera covariable, y &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … para las demás (DE sobre las celdas del estrato).&lt;/li&gt;&lt;li&gt;Informe: límites, áreas, estadísticas de las covariables por estrato, la parte de la varianza de cada covariable que explican los estratos (R²), un histograma con los límites y un mapa.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La semilla aleatoria solo la usa k-medias (0 sortea una y la registra).&lt;/p&gt;&lt;p&gt;Los estratos son un recurso estadístico: antes del trabajo de campo, compruebe el acceso y la seguridad de cada unidad.&lt;/p&gt;</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="113" />
+      <source>Sampling frame</source>
+      <translation>Marco de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="115" />
+      <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
+      <translation>Covariables ráster (banda 1 de cada una; la primera fija la malla)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="118" />
+      <source>Method</source>
+      <translation>Método</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="120" />
+      <source>Number of strata (ignored for raster classes)</source>
+      <translation>Número de estratos (se ignora con clases del ráster)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="123" />
+      <source>Minimum patch area (ha); smaller patches join a neighbour</source>
+      <translation>Área mínima de mancha (ha); las manchas menores se unen a una vecina</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="126" />
+      <source>Stratum raster</source>
+      <translation>Ráster de estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="128" />
+      <location filename="../processing/algorithms/stratify.py" line="251" />
+      <source>Strata</source>
+      <translation>Estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="130" />
+      <source>Number of strata formed</source>
+      <translation>Número de estratos formados</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="132" />
+      <source>Share of the first covariate's variance explained by the strata (R²)</source>
+      <translation>Parte de la varianza de la primera covariable explicada por los estratos (R²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="138" />
+      <source>Give at least one raster in COVARIATES.</source>
+      <translation>Indique al menos un ráster en COVARIATES.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="140" />
+      <source>COVARIATES holds {n} rasters; use at most {m}.</source>
+      <translation>COVARIATES contiene {n} rásteres; use como máximo {m}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="145" />
+      <source>COVARIATES: '{name}' is not a raster layer.</source>
+      <translation>COVARIATES: «{name}» no es una capa ráster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="147" />
+      <source>Covariate '{name}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+      <translation>La covariable «{name}» no es un archivo ráster que GDAL pueda leer. Guárdela primero como GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="175" />
+      <source>Layer '{layer}' (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
+      <translation>La capa «{layer}» (FRAME) no tiene ningún polígono con área positiva. Elija la capa del marco de muestreo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="190" />
+      <source>Warped onto the grid of '{first}' in {crs}: {names}.</source>
+      <translation>Remuestreadas sobre la malla de «{first}» en {crs}: {names}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="213" />
+      <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
+      <translation>{k} estratos en {ha} ha; R² de «{name}»: {r2}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="235" />
+      <source>Strata from raster covariates</source>
+      <translation>Estratos a partir de covariables ráster</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="241" />
+      <source>strata</source>
+      <translation>estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="242" />
+      <location filename="../processing/algorithms/stratify.py" line="336" />
+      <source>area stratified (ha)</source>
+      <translation>área estratificada (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="243" />
+      <source>frame covered</source>
+      <translation>parte del marco cubierta</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="244" />
+      <source>R² of {name}</source>
+      <translation>R² de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="246" />
+      <source>The strata cover the frame's cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
+      <translation>Los estratos cubren las celdas del marco que tienen valor en todas las covariables ({ha} ha). Un muestreo asignado sobre estos estratos solo vale para esa área.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Stratum</source>
+      <translation>Estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Label</source>
+      <translation>Etiqueta</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Area (ha)</source>
+      <translation>Área (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>% of area</source>
+      <translation>% del área</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Cells</source>
+      <translation>Celdas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="255" />
+      <source>{name} mean</source>
+      <translation>media de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="255" />
+      <source>{name} SD</source>
+      <translation>DE de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="265" />
+      <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
+      <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron con su vecina mayor (criba de GDAL, conectividad 4) antes de vectorizar; las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener algunas celdas que la regla por sí sola habría puesto en un estrato vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="272" />
+      <source>Method: {name}</source>
+      <translation>Método: {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="276" />
+      <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
+      <translation>El estrato h contiene las celdas con b(h−1) ≤ {name} &lt; b(h). Límites sobre {name}:</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="279" />
+      <source>Boundary</source>
+      <translation>Límite</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="279" />
+      <location filename="../processing/algorithms/stratify.py" line="332" />
+      <source>Value</source>
+      <translation>Valor</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="282" />
+      <source>Exact sample quantiles at h/k of the frame's cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
+      <translation>Cuantiles muestrales exactos en h/k de las celdas del marco (Hyndman &amp; Fan 1996, definición 7), hallados en dos pasadas: un histograma de 64.000 clases localiza cada cuantil y luego se ordenan las celdas de esa clase.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="287" />
+      <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
+      <translation>Dalenius &amp; Hodges (1959): sobre un histograma de {name} de {n} clases, los límites son los extremos superiores de las clases donde la suma acumulada de √f está más cerca de h/k de su total.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="293" />
+      <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
+      <translation>Covariables estandarizadas con su media y su DE sobre el marco; semillas k-means++ e iteraciones de Lloyd sobre una muestra aleatoria de {m} celdas (semilla {seed}); {it} iteraciones. Después cada celda fue al centro más próximo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="299" />
+      <source>Each class of '{name}' is one stratum ({k} classes).</source>
+      <translation>Cada clase de «{name}» es un estrato ({k} clases).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="301" />
+      <source>Share of covariate variance explained by the strata (R²)</source>
+      <translation>Parte de la varianza de las covariables explicada por los estratos (R²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>Covariate</source>
+      <translation>Covariable</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>Mean</source>
+      <translation>Media</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>SD</source>
+      <translation>DE</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>R²</source>
+      <translation>R²</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="305" />
+      <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
+      <translation>R² = 1 − Σ N_h S_h² / (N S²): la parte entre estratos de la varianza de la covariable sobre las celdas. Para una magnitud que sigue exactamente a la covariable, la asignación proporcional sobre estos estratos reduciría la varianza de la media estimada en esta parte respecto al muestreo aleatorio simple (Cochran 1977, cap. 5, aproximación para poblaciones grandes). La ganancia para la densidad animal es menor cuanto menos sigue la densidad a la covariable.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="312" />
+      <source>Histogram of {name}</source>
+      <translation>Histograma de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="320" />
+      <source>stratum {h}</source>
+      <translation>estrato {h}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="321" />
+      <source>cells</source>
+      <translation>celdas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="322" />
+      <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
+      <translation>Celdas del marco según {name}, coloreadas por estrato; líneas discontinuas: límites de los estratos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="324" />
+      <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
+      <translation>Celdas del marco según {name}, coloreadas por estrato (los estratos de k-medias pueden solaparse en una covariable).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="327" />
+      <source>Map</source>
+      <translation>Mapa</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="328" />
+      <source>Strata within the sampling frame</source>
+      <translation>Estratos dentro del marco de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="330" />
+      <source>Coverage</source>
+      <translation>Cobertura</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="332" />
+      <source>Item</source>
+      <translation>Elemento</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="333" />
+      <source>frame area (ha)</source>
+      <translation>área del marco (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="334" />
+      <source>frame area outside the first covariate's extent (ha)</source>
+      <translation>área del marco fuera de la extensión de la primera covariable (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="335" />
+      <source>frame cells with NoData in a covariate (ha)</source>
+      <translation>celdas del marco con NoData en alguna covariable (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="337" />
+      <source>share of the frame covered</source>
+      <translation>parte del marco cubierta</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="338" />
+      <source>cells stratified</source>
+      <translation>celdas estratificadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="339" />
+      <source>cell size (m)</source>
+      <translation>tamaño de celda (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="340" />
+      <source>grid</source>
+      <translation>malla</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="341" />
+      <source>covariates warped on the fly</source>
+      <translation>covariables remuestreadas al vuelo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="341" />
+      <source>none</source>
+      <translation>ninguna</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="346" />
+      <source>, projected from {src} (UTM zone of the frame's centre)</source>
+      <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="348" />
+      <source>Sampling frame (FRAME)</source>
+      <translation>Marco de muestreo (FRAME)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="349" />
+      <source>Covariates (COVARIATES)</source>
+      <translation>Covariables (COVARIATES)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="350" />
+      <source>Method (METHOD)</source>
+      <translation>Método (METHOD)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="351" />
+      <source>Number of strata (STRATA)</source>
+      <translation>Número de estratos (STRATA)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="351" />
+      <source>ignored</source>
+      <translation>ignorado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="352" />
+      <source>Minimum patch area (MIN_AREA, ha)</source>
+      <translation>Área mínima de mancha (MIN_AREA, ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="353" />
+      <source>CRS of the computation and the outputs</source>
+      <translation>SRC del cálculo y de las salidas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="356" />
+      <source>Seed (SEED)</source>
+      <translation>Semilla (SEED)</translation>
+    </message>
+  </context>
+</TS>

@@ -1,0 +1,3494 @@
+<?xml version="1.0" encoding="utf-8"?>
+<!DOCTYPE TS>
+<TS version="2.1" language="fr_FR">
+  <context>
+    <name>Allocate</name>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="56" />
+      <source>Allocate effort to strata</source>
+      <translation>Répartir l'effort entre les strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="59" />
+      <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
+
+Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
+
+Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall density meets it, with the finite-population correction; else a budget (if above 0, needs the cost field); else the total number of units.
+
+Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches a bound keeps it and the rest is shared among the others, until stable. Whole units are rounded by largest remainder, keeping the total.
+
+Area field: the stratum area in hectares (default area_ha, as written by the stratification); when it is empty or missing, the polygon area is used.
+SD field: the pilot standard deviation of counts per unit. Without it the covariate SD (cov_sd) is used as a proxy, which assumes that counts scale with the covariate; without either, the allocation is proportional.
+Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
+
+Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
+      <translation>Décide combien d'unités d'échantillonnage reçoit chaque strate, et montre à l'avance la précision qu'elles apportent.
+
+Méthodes : égale ; proportionnelle à la surface de la strate ; Neyman, n_h ∝ A_h·S_h (Neyman 1934 ; Cochran 1977, ch. 5) ; optimale avec coût, n_h ∝ A_h·S_h/√c_h, sous un budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
+
+Objectif : un CV cible (s'il est supérieur à 0) trouve le plus petit total dont le coefficient de variation attendu de la densité globale l'atteint, avec la correction pour population finie ; sinon un budget (s'il est supérieur à 0, il faut le champ de coût) ; sinon le nombre total d'unités.
+
+Bornes : au moins le minimum par strate (2 par défaut, pour que la variance de chaque strate puisse être estimée) et au plus les unités qui y tiennent (surface de la strate / surface d'une unité). Une strate qui atteint une borne la garde et le reste est partagé entre les autres, jusqu'à stabilité. Les unités entières sont arrondies par le plus fort reste, en conservant le total.
+
+Champ de surface : la surface de la strate en hectares (area_ha par défaut, tel qu'écrit par la stratification) ; s'il est vide ou absent, la surface du polygone est utilisée.
+Champ d'écart-type : l'écart-type pilote des comptages par unité. Sans lui, l'écart-type de la covariable (cov_sd) sert de substitut, ce qui suppose que les comptages suivent la covariable ; sans l'un ni l'autre, l'allocation est proportionnelle.
+Champ de moyenne : le comptage moyen pilote par unité, nécessaire aux CV et à un CV cible. Champ de coût : coût de l'inventaire d'une unité dans chaque strate (par exemple en jours de terrain).
+
+Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité de la strate), et un rapport comparant les allocations égale, proportionnelle et de Neyman pour le même total.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="84" />
+      <source>Strata</source>
+      <translation>Strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="88" />
+      <source>Stratum identifier field</source>
+      <translation>Champ d'identifiant de strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="94" />
+      <source>Stratum area field (hectares; empty: polygon area)</source>
+      <translation>Champ de surface de la strate (hectares ; vide : surface du polygone)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="99" />
+      <source>Pilot SD of counts per unit</source>
+      <translation>Écart-type pilote des comptages par unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="100" />
+      <source>Pilot mean count per unit</source>
+      <translation>Comptage moyen pilote par unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="101" />
+      <source>Cost per unit</source>
+      <translation>Coût par unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="107" />
+      <source>Costs are field days</source>
+      <translation>Les coûts sont des jours de terrain</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="111" />
+      <source>Fixed cost of the survey (c0, in the cost unit)</source>
+      <translation>Coût fixe de l'inventaire (c0, dans l'unité de coût)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="118" />
+      <source>Allocation method</source>
+      <translation>Méthode d'allocation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <source>Equal</source>
+      <translation>Égale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <source>Proportional to area</source>
+      <translation>Proportionnelle à la surface</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <source>Neyman</source>
+      <translation>Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="119" />
+      <source>Optimal with cost</source>
+      <translation>Optimale avec coût</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="125" />
+      <source>Total number of units</source>
+      <translation>Nombre total d'unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="130" />
+      <source>Budget (0: not used; needs the cost field)</source>
+      <translation>Budget (0 : non utilisé ; nécessite le champ de coût)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="136" />
+      <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
+      <translation>CV cible de la densité globale (0 : non utilisé ; p. ex. 0.2)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="142" />
+      <source>Area of one sample unit (m²)</source>
+      <translation>Surface d'une unité d'échantillonnage (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="148" />
+      <location filename="../processing/algorithms/allocate.py" line="307" />
+      <source>Minimum units per stratum</source>
+      <translation>Nombre minimal d'unités par strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="152" />
+      <source>Strata with allocation</source>
+      <translation>Strates avec allocation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="154" />
+      <source>Expected CV of the overall density</source>
+      <translation>CV attendu de la densité globale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="160" />
+      <source>The strata layer could not be opened.</source>
+      <translation>La couche des strates n'a pas pu être ouverte.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="176" />
+      <source>Layer '{layer}' has no field '{field}': the polygon areas are used.</source>
+      <translation>La couche « {layer} » n'a pas de champ « {field} » : les surfaces des polygones sont utilisées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="187" />
+      <source>Layer '{layer}' has no strata with an area.</source>
+      <translation>La couche « {layer} » n'a aucune strate ayant une surface.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="214" />
+      <source>No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
+      <translation>Pas de champ d'écart-type pilote : l'écart-type de la covariable (« {field} ») sert de substitut. Cela suppose que les comptages suivent la covariable ; remplacez-le par l'écart-type d'un inventaire pilote dès que vous en avez un. Les erreurs types attendues sont alors dans les unités de la covariable, pas en comptages.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="256" />
+      <source>The output layer could not be created.</source>
+      <translation>La couche de sortie n'a pas pu être créée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="267" />
+      <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
+      <translation>{total} unités allouées ({method}) ; CV attendu de la densité globale : {cv}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="284" />
+      <source>Allocation of survey effort</source>
+      <translation>Allocation de l'effort d'inventaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <source>equal</source>
+      <translation>égale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <source>proportional to area</source>
+      <translation>proportionnelle à la surface</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <source>optimal with cost</source>
+      <translation>optimale avec coût</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <source>field days</source>
+      <translation>jours de terrain</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <source>cost units</source>
+      <translation>unités de coût</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <source>units in total</source>
+      <translation>unités au total</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <source>method</source>
+      <translation>méthode</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="292" />
+      <source>expected CV of the overall density</source>
+      <translation>CV attendu de la densité globale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <source>field days needed</source>
+      <translation>jours de terrain nécessaires</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <source>cost</source>
+      <translation>coût</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <source>a total number of units</source>
+      <translation>un nombre total d'unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <source>a budget</source>
+      <translation>un budget</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <source>a target CV</source>
+      <translation>un CV cible</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="298" />
+      <source>Strata layer</source>
+      <translation>Couche des strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="299" />
+      <source>Computation CRS</source>
+      <translation>SCR de calcul</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="300" />
+      <source>Method asked for</source>
+      <translation>Méthode demandée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="301" />
+      <source>Method applied</source>
+      <translation>Méthode appliquée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="302" />
+      <source>Target</source>
+      <translation>Objectif</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="303" />
+      <source>Total asked for</source>
+      <translation>Total demandé</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="304" />
+      <source>Budget</source>
+      <translation>Budget</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="305" />
+      <source>Target CV</source>
+      <translation>CV cible</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="306" />
+      <source>Unit area (m²)</source>
+      <translation>Surface d'une unité (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <source>SD field</source>
+      <translation>Champ d'écart-type</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <source> (covariate proxy)</source>
+      <translation> (substitut par la covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="309" />
+      <source>Mean field</source>
+      <translation>Champ de moyenne</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="310" />
+      <source>Cost field</source>
+      <translation>Champ de coût</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="311" />
+      <source>Fixed cost c0</source>
+      <translation>Coût fixe c0</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="315" />
+      <source>Units per stratum</source>
+      <translation>Unités par strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <source>SE of mean per unit (covariate units)</source>
+      <translation>Erreur type de la moyenne par unité (unités de la covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <source>SE of mean count per unit</source>
+      <translation>Erreur type du comptage moyen par unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Stratum</source>
+      <translation>Strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Units that fit</source>
+      <translation>Unités qui y tiennent</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Lower bound</source>
+      <translation>Borne inférieure</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <source>Share before rounding</source>
+      <translation>Part avant arrondi</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <source>Units (n_alloc)</source>
+      <translation>Unités (n_alloc)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <source>Sampling fraction</source>
+      <translation>Fraction d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="322" />
+      <source>SE of density (per km²)</source>
+      <translation>Erreur type de la densité (par km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="324" />
+      <source>Expected CV (exp_cv)</source>
+      <translation>CV attendu (exp_cv)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="336" />
+      <source>all strata</source>
+      <translation>toutes les strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="347" />
+      <source>units per stratum</source>
+      <translation>unités par strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="348" />
+      <source>Units allocated to each stratum</source>
+      <translation>Unités allouées à chaque strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="350" />
+      <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
+      <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="356" />
+      <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
+      <translation>{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <source>Field days needed</source>
+      <translation>Jours de terrain nécessaires</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <source>Cost of the design</source>
+      <translation>Coût du plan</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="362" />
+      <source>What the choice of method buys, at {n} units</source>
+      <translation>Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <source>Method</source>
+      <translation>Méthode</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <source>stratum {label}</source>
+      <translation>strate {label}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="365" />
+      <source>Variance relative to the applied allocation</source>
+      <translation>Variance relative à l'allocation appliquée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="367" />
+      <source>Expected CV</source>
+      <translation>CV attendu</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="378" />
+      <source>Without standard deviations the precision of the designs cannot be compared.</source>
+      <translation>Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
+    </message>
+  </context>
+  <context>
+    <name>BuildFrame</name>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="35" />
+      <source>Build sampling frame</source>
+      <translation>Construire la base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="38" />
+      <source>Builds the sampling frame: the part of the study area that the survey can speak for.
+
+Three rules are applied in this order, each one charged only with the area still in the frame when it is applied:
+1. Excluded polygons (water, private inholdings, ...) are removed.
+2. Cells of the mask raster (band 1) whose value lies outside [minimum, maximum], or is NoData, are removed. Either bound may be left empty. Cells of the study area that the raster does not cover count as NoData. A raster in another CRS is reprojected on the fly (nearest neighbour). Example: a slope raster in degrees with maximum 30.
+3. An inward strip of the given width (metres) along the study area's boundary is removed.
+
+The result is dissolved into one valid feature with fields frame_id and area_ha. The report gives the area kept, the area lost to each rule and a map.
+
+A study area in geographic coordinates is projected to the UTM zone of its centre; the output is in that CRS. Empty or zero-area features are skipped and invalid geometries repaired, each with a warning.
+
+Estimates from a survey on this frame apply to the frame only. Excluding steep terrain does not make the remaining terrain safe: check every unit's access and safety before fieldwork.</source>
+      <translation>Construit la base de sondage : la partie de la zone d'étude sur laquelle l'inventaire peut se prononcer.
+
+Trois règles sont appliquées dans cet ordre, chacune n'étant comptée que pour la surface encore dans la base au moment où elle s'applique :
+1. Les polygones exclus (eau, enclaves privées, ...) sont retirés.
+2. Les cellules du raster de masque (bande 1) dont la valeur sort de [minimum, maximum], ou est NoData, sont retirées. Chaque borne peut rester vide. Les cellules de la zone d'étude que le raster ne couvre pas comptent comme NoData. Un raster dans un autre SCR est reprojeté à la volée (plus proche voisin). Exemple : un raster de pente en degrés avec un maximum de 30.
+3. Une bande intérieure de la largeur donnée (mètres) le long de la limite de la zone d'étude est retirée.
+
+Le résultat est fusionné en une seule entité valide avec les champs frame_id et area_ha. Le rapport donne la surface conservée, la surface perdue par chaque règle et une carte.
+
+Une zone d'étude en coordonnées géographiques est projetée dans la zone UTM de son centre ; la sortie est dans ce SCR. Les entités vides ou de surface nulle sont ignorées et les géométries invalides réparées, chaque fois avec un avertissement.
+
+Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclure les terrains escarpés ne rend pas le terrain restant sûr : vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="61" />
+      <source>Study area</source>
+      <translation>Zone d'étude</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="67" />
+      <source>Areas to exclude (water, inholdings, ...)</source>
+      <translation>Zones à exclure (eau, enclaves, ...)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="74" />
+      <source>Mask raster (cells outside the range are excluded)</source>
+      <translation>Raster de masque (les cellules hors de l'intervalle sont exclues)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="80" />
+      <source>Lowest accepted mask value (empty: no lower limit)</source>
+      <translation>Valeur de masque minimale acceptée (vide : pas de limite inférieure)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="88" />
+      <source>Highest accepted mask value (empty: no upper limit)</source>
+      <translation>Valeur de masque maximale acceptée (vide : pas de limite supérieure)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="96" />
+      <source>Inward edge buffer (m)</source>
+      <translation>Zone tampon intérieure en bordure (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="104" />
+      <location filename="../processing/algorithms/buildframe.py" line="270" />
+      <source>Sampling frame</source>
+      <translation>Base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="126" />
+      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
+      <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="132" />
+      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
+      <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="152" />
+      <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
+      <translation>MASK_MIN ou MASK_MAX est renseigné mais aucun raster de masque (MASK) n'est donné. Choisissez un raster ou laissez les deux limites vides.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="157" />
+      <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
+      <translation>La valeur de masque minimale acceptée (MASK_MIN = {lo}) est supérieure à la maximale (MASK_MAX = {hi}). Inversez-les ou laissez-en une vide.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="170" />
+      <source>Layer '{layer}' (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
+      <translation>La couche « {layer} » (INPUT) n'a aucun polygone de surface positive. Choisissez la couche de polygones de la zone d'étude.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="189" />
+      <source>Mask raster '{layer}' is given without limits: only its NoData cells are excluded.</source>
+      <translation>Le raster de masque « {layer} » est donné sans limites : seules ses cellules NoData sont exclues.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="196" />
+      <source>Mask raster '{layer}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+      <translation>Le raster de masque « {layer} » n'est pas un fichier raster lisible par GDAL. Enregistrez-le d'abord en GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="199" />
+      <source>Reading mask raster '{layer}'…</source>
+      <translation>Lecture du raster de masque « {layer} »…</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="213" />
+      <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
+      <translation>Raster de masque reprojeté à la volée en {crs} : {rows} × {cols} cellules de {size} m.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="220" />
+      <source>Mask raster '{layer}' does not cover {n} of the {total} cells over the study area's extent; those cells count as NoData and are excluded.</source>
+      <translation>Le raster de masque « {layer} » ne couvre pas {n} des {total} cellules de l'emprise de la zone d'étude ; ces cellules comptent comme NoData et sont exclues.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="244" />
+      <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
+      <translation>Base de sondage : {kept} ha sur {total} ha ({pct} %).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="275" />
+      <source>study area (ha)</source>
+      <translation>zone d'étude (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="276" />
+      <source>frame (ha)</source>
+      <translation>base de sondage (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="277" />
+      <source>kept</source>
+      <translation>conservé</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="280" />
+      <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
+      <translation>Les estimations d'un inventaire sur cette base ne valent que pour la base ({ha} ha), pas pour toute la zone d'étude.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="283" />
+      <source>Area kept and area lost to each rule</source>
+      <translation>Surface conservée et surface perdue par chaque règle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="285" />
+      <source>lost to the excluded polygons (EXCLUDE)</source>
+      <translation>perdue par les polygones exclus (EXCLUDE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="286" />
+      <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
+      <translation>perdue par le masque raster (MASK hors de l'intervalle accepté, ou NoData)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="287" />
+      <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
+      <translation>perdue par la zone tampon intérieure (EDGE_BUFFER)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="289" />
+      <source>study area</source>
+      <translation>zone d'étude</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="292" />
+      <source>sampling frame (kept)</source>
+      <translation>base de sondage (conservée)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="293" />
+      <location filename="../processing/algorithms/buildframe.py" line="300" />
+      <source>Item</source>
+      <translation>Élément</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="293" />
+      <source>Area (ha)</source>
+      <translation>Surface (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="293" />
+      <source>% of study area</source>
+      <translation>% de la zone d'étude</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="295" />
+      <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
+      <translation>Les règles sont appliquées dans l'ordre indiqué ; chacune n'est comptée que pour la surface encore dans la base, si bien que la base et les surfaces perdues totalisent la zone d'étude.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="299" />
+      <source>Mask raster</source>
+      <translation>Raster de masque</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="300" />
+      <source>Value</source>
+      <translation>Valeur</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="301" />
+      <source>cells tested over the study area's extent</source>
+      <translation>cellules testées sur l'emprise de la zone d'étude</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="302" />
+      <source>cell size (m)</source>
+      <translation>taille de cellule (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="303" />
+      <source>cells below the lowest accepted value</source>
+      <translation>cellules sous la valeur minimale acceptée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="304" />
+      <source>cells above the highest accepted value</source>
+      <translation>cellules au-dessus de la valeur maximale acceptée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="305" />
+      <source>NoData cells (including cells outside the raster)</source>
+      <translation>cellules NoData (y compris les cellules hors du raster)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="306" />
+      <source>reprojected on the fly (nearest neighbour)</source>
+      <translation>reprojeté à la volée (plus proche voisin)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="306" />
+      <source>yes</source>
+      <translation>oui</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="306" />
+      <source>no</source>
+      <translation>non</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="309" />
+      <source>Map</source>
+      <translation>Carte</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="310" />
+      <source>Frame (filled), with the areas lost to each rule</source>
+      <translation>Base de sondage (remplie), avec les surfaces perdues par chaque règle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="313" />
+      <source>(none)</source>
+      <translation>(aucun)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="317" />
+      <source>, projected from {src} (UTM zone of the study area's centre)</source>
+      <translation>, projeté depuis {src} (zone UTM du centre de la zone d'étude)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="319" />
+      <source>Study area (INPUT)</source>
+      <translation>Zone d'étude (INPUT)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="320" />
+      <source>Areas to exclude (EXCLUDE)</source>
+      <translation>Zones à exclure (EXCLUDE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="321" />
+      <source>Mask raster (MASK)</source>
+      <translation>Raster de masque (MASK)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="322" />
+      <source>Lowest accepted mask value (MASK_MIN)</source>
+      <translation>Valeur de masque minimale acceptée (MASK_MIN)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="323" />
+      <source>Highest accepted mask value (MASK_MAX)</source>
+      <translation>Valeur de masque maximale acceptée (MASK_MAX)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="324" />
+      <source>Inward edge buffer (EDGE_BUFFER, m)</source>
+      <translation>Zone tampon intérieure (EDGE_BUFFER, m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="325" />
+      <source>CRS of the computation and the output</source>
+      <translation>SCR du calcul et de la sortie</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="360" />
+      <source>sampling frame</source>
+      <translation>base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="362" />
+      <source>excluded polygons</source>
+      <translation>polygones exclus</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="366" />
+      <source>raster mask</source>
+      <translation>masque raster</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/buildframe.py" line="368" />
+      <source>study area boundary</source>
+      <translation>limite de la zone d'étude</translation>
+    </message>
+  </context>
+  <context>
+    <name>CompareDesigns</name>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="83" />
+      <source>Compare survey designs by simulation</source>
+      <translation>Comparer des plans d'inventaire par simulation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="86" />
+      <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
+
+Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
+
+Each replicate realises a population: Poisson counts in every surface cell, or with an overdispersion k above 0 negative binomial counts (gamma-Poisson, variance μ + μ²/k per cell). Every chosen design is then laid out with the layout engine, its units count the animals in the cells they cover (the part inside the frame or their stratum), and the abundance is estimated with the estimation engine (ratio estimator, t interval with Satterthwaite df; Cochran 1977). All designs survey the same populations, so their differences are not blurred.
+
+Designs: simple random; stratified with proportional allocation; stratified with Neyman allocation, n_h ∝ A_h·S_h with S_h the SD of a unit's count implied by the surface (Neyman 1934); systematic grid with a random start (its n varies); spatially balanced (balanced acceptance sampling, Robertson et al. 2013).
+
+Units: point station (size = counting radius), square plot (side), circular plot (radius), line transect (length, counting a strip of the given half-width on each side). Bearing in degrees clockwise from grid north, −1 random. Keep units inside: centres are drawn from each stratum shrunk by the unit's radius, as the layout's option does. Otherwise a unit reaching over the edge of its stratum or of the frame counts only the part inside, and its area is that part.
+
+Output table, one row per design: rel_bias (relative bias against each population's true total), emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % intervals holding the truth), mean_n (mean units surveyed), alloc (units per stratum), recommend (1 for the recommended design: the lowest RMSE among designs whose intervals cover at least 90 %).
+
+Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
+
+The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+      <translation>Avant le terrain : quel plan, et combien d'unités, donnent une estimation utilisable sur cette zone ? L'algorithme simule de nombreux inventaires d'une surface de densité plausible et indique comment chaque plan s'en est sorti.
+
+Surface : un raster d'animaux attendus par km² (issu d'un modèle d'habitat, d'une carte d'expert ou d'un inventaire antérieur), reprojeté dans le SCR de la base si nécessaire. Base : la base de sondage. Strates (facultatives, avec le champ de strate, 'stratum' par défaut) : nécessaires aux deux plans stratifiés.
+
+Chaque réplique réalise une population : comptages de Poisson dans chaque cellule de la surface ou, avec une surdispersion k supérieure à 0, comptages binomiaux négatifs (gamma-Poisson, variance μ + μ²/k par cellule). Chaque plan choisi est ensuite disposé avec le moteur de disposition, ses unités comptent les animaux des cellules qu'elles couvrent (la partie dans la base ou dans leur strate), et l'abondance est estimée avec le moteur d'estimation (estimateur par le ratio, intervalle t avec ddl de Satterthwaite ; Cochran 1977). Tous les plans inventorient les mêmes populations, si bien que leurs différences ne sont pas brouillées.
+
+Plans : aléatoire simple ; stratifié avec allocation proportionnelle ; stratifié avec allocation de Neyman, n_h ∝ A_h·S_h où S_h est l'écart-type du comptage d'une unité impliqué par la surface (Neyman 1934) ; grille systématique avec départ aléatoire (son n varie) ; spatialement équilibré (échantillonnage par acceptation équilibrée, Robertson et al. 2013).
+
+Unités : station ponctuelle (taille = rayon de comptage), placette carrée (côté), placette circulaire (rayon), transect linéaire (longueur, comptage sur une bande de la demi-largeur donnée de chaque côté). Azimut en degrés dans le sens horaire depuis le nord de la grille, −1 aléatoire. Garder les unités à l'intérieur : les centres sont tirés dans chaque strate réduite du rayon de l'unité, comme le fait l'option de la disposition. Sinon, une unité qui déborde de sa strate ou de la base ne compte que la partie intérieure, et sa surface est cette partie.
+
+Table de sortie, une ligne par plan : rel_bias (biais relatif par rapport au vrai total de chaque population), emp_se (écart-type des erreurs), rmse (racine de l'erreur quadratique moyenne) et rmse_mcse (son erreur type de Monte-Carlo), rel_rmse (rmse / vrai total moyen), mean_cv (CV estimé moyen), coverage (part des intervalles à 95 % contenant la vérité), mean_n (nombre moyen d'unités inventoriées), alloc (unités par strate), recommend (1 pour le plan recommandé : la plus faible REQM parmi les plans dont les intervalles couvrent au moins 90 %).
+
+Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparaison est répétée pour chaque n et le rapport trace la REQM en fonction de n, montrant où davantage d'effort cesse de payer.
+
+La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="122" />
+      <source>Density surface (expected animals per km²)</source>
+      <translation>Surface de densité (animaux attendus par km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="124" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="365" />
+      <source>Sampling frame</source>
+      <translation>Base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <source>Strata (for the stratified designs)</source>
+      <translation>Strates (pour les plans stratifiés)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="133" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <source>Stratum field</source>
+      <translation>Champ de strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="138" />
+      <source>Designs to compare</source>
+      <translation>Plans à comparer</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <source>Simple random</source>
+      <translation>Aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <source>Stratified, proportional allocation</source>
+      <translation>Stratifié, allocation proportionnelle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <source>Stratified, Neyman allocation</source>
+      <translation>Stratifié, allocation de Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <source>Systematic grid</source>
+      <translation>Grille systématique</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <source>Spatially balanced</source>
+      <translation>Spatialement équilibré</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="146" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
+      <source>Number of units</source>
+      <translation>Nombre d'unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="151" />
+      <source>Unit shape</source>
+      <translation>Forme de l'unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Point station</source>
+      <translation>Station ponctuelle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Square plot</source>
+      <translation>Placette carrée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Circular plot</source>
+      <translation>Placette circulaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <source>Line transect</source>
+      <translation>Transect linéaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="158" />
+      <source>Unit size (m): counting radius, side, radius or transect length</source>
+      <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="164" />
+      <source>Half-width of a transect's counting strip (m)</source>
+      <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="170" />
+      <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
+      <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="176" />
+      <source>Keep units wholly inside their stratum (as the layout's option)</source>
+      <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="182" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
+      <source>Simulated surveys per design</source>
+      <translation>Inventaires simulés par plan</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="188" />
+      <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
+      <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="194" />
+      <source>Variance estimator for the grid and balanced designs</source>
+      <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <source>Simple random sampling formula</source>
+      <translation>Formule de l'échantillonnage aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
+      <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="201" />
+      <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
+      <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="207" />
+      <source>Design comparison</source>
+      <translation>Comparaison des plans</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="210" />
+      <source>Recommended design</source>
+      <translation>Plan recommandé</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="216" />
+      <source>The density surface could not be opened.</source>
+      <translation>La surface de densité n'a pas pu être ouverte.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="219" />
+      <source>The sampling frame could not be opened.</source>
+      <translation>La base de sondage n'a pas pu être ouverte.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="225" />
+      <source>Layer '{layer}' has no polygon with an area.</source>
+      <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="239" />
+      <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
+      <translation>La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="249" />
+      <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
+      <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="259" />
+      <source>No strata were given: the stratified designs are left out ({names}).</source>
+      <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="264" />
+      <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
+      <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="281" />
+      <source>Reading the density surface…</source>
+      <translation>Lecture de la surface de densité…</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="284" />
+      <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
+      <translation>La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="306" />
+      <source>Simulating {n} units…</source>
+      <translation>Simulation avec {n} unités…</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="312" />
+      <source>{n} units were left out of the range: {why}</source>
+      <translation>{n} unités ont été retirées de la gamme : {why}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="318" />
+      <source>The output table could not be created.</source>
+      <translation>La table de sortie n'a pas pu être créée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="335" />
+      <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
+      <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="344" />
+      <source>Survey designs compared by simulation</source>
+      <translation>Plans d'inventaire comparés par simulation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="350" />
+      <source>recommended design</source>
+      <translation>plan recommandé</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="351" />
+      <source>its RMSE (animals)</source>
+      <translation>sa REQM (animaux)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="352" />
+      <source>its RMSE relative to the total</source>
+      <translation>sa REQM relative au total</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="353" />
+      <source>its 95 % interval coverage</source>
+      <translation>couverture de ses intervalles à 95 %</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
+      <source>expected animals in the frame</source>
+      <translation>animaux attendus dans la base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>point station</source>
+      <translation>station ponctuelle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>square plot</source>
+      <translation>placette carrée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>circular plot</source>
+      <translation>placette circulaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <source>line transect</source>
+      <translation>transect linéaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>counting radius</source>
+      <translation>rayon de comptage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>side</source>
+      <translation>côté</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>radius</source>
+      <translation>rayon</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <source>length</source>
+      <translation>longueur</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <source>, strip half-width {w:g} m</source>
+      <translation>, demi-largeur de bande {w:g} m</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="364" />
+      <source>Density surface</source>
+      <translation>Surface de densité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="466" />
+      <source>Strata</source>
+      <translation>Strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <source>none</source>
+      <translation>aucune</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <source>feature id</source>
+      <translation>identifiant d'entité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
+      <source>Computation CRS</source>
+      <translation>SCR de calcul</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
+      <source>Surface cell</source>
+      <translation>Cellule de la surface</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <source>Sub-cells per cell side (for counting)</source>
+      <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <source>Unit</source>
+      <translation>Unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
+      <source>Counted area per unit (m²)</source>
+      <translation>Surface comptée par unité (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <source>Bearing</source>
+      <translation>Azimut</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <source>random</source>
+      <translation>aléatoire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <source>Units wholly inside their stratum</source>
+      <translation>Unités entièrement dans leur strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <source>yes</source>
+      <translation>oui</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <source>no</source>
+      <translation>non</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <source>Counts per cell</source>
+      <translation>Comptages par cellule</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <source>negative binomial, k = {k:g}</source>
+      <translation>binomiale négative, k = {k:g}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <source>Poisson</source>
+      <translation>Poisson</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <source>Variance estimator (grid, balanced)</source>
+      <translation>Estimateur de variance (grille, équilibré)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <source>local neighbourhood</source>
+      <translation>voisinage local</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
+      <source>simple random sampling formula</source>
+      <translation>formule de l'échantillonnage aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <source>Confidence level</source>
+      <translation>Niveau de confiance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
+      <source>Seed</source>
+      <translation>Graine</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
+      <source>How the designs did at {n} units</source>
+      <translation>Résultats des plans pour {n} unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Design</source>
+      <translation>Plan</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Mean units surveyed</source>
+      <translation>Unités inventoriées en moyenne</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Relative bias</source>
+      <translation>Biais relatif</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <source>Empirical SE (animals)</source>
+      <translation>Erreur type empirique (animaux)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <source>RMSE (animals)</source>
+      <translation>REQM (animaux)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <source>± Monte Carlo SE</source>
+      <translation>± erreur type de Monte-Carlo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <source>RMSE / total</source>
+      <translation>REQM / total</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <source>Mean estimated CV</source>
+      <translation>CV estimé moyen</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <source>95 % interval coverage</source>
+      <translation>Couverture des intervalles à 95 %</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <source>Surveys without an estimate</source>
+      <translation>Inventaires sans estimation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="401" />
+      <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
+      <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="408" />
+      <source>RMSE of the abundance (animals)</source>
+      <translation>REQM de l'abondance (animaux)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="410" />
+      <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
+      <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
+      <source>Recommendation</source>
+      <translation>Recommandation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
+      <source>No design gave estimates: see the warnings.</source>
+      <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
+      <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
+      <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="422" />
+      <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
+      <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="429" />
+      <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
+      <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="434" />
+      <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
+      <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="443" />
+      <source>How the simulation works</source>
+      <translation>Fonctionnement de la simulation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="444" />
+      <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
+      <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="453" />
+      <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
+      <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>Stratum</source>
+      <translation>Strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>Area (km²)</source>
+      <translation>Surface (km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>Mean expected count per unit</source>
+      <translation>Comptage attendu moyen par unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <source>S_h (count SD per unit)</source>
+      <translation>S_h (écart-type du comptage par unité)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="471" />
+      <source>Units, proportional</source>
+      <translation>Unités, proportionnelle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <source>Units, Neyman</source>
+      <translation>Unités, Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="483" />
+      <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
+      <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="491" />
+      <source>RMSE against the number of units</source>
+      <translation>REQM en fonction du nombre d'unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
+      <source>number of units</source>
+      <translation>nombre d'unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="499" />
+      <source>RMSE of the abundance estimate against the number of units</source>
+      <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="501" />
+      <source>Units</source>
+      <translation>Unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="509" />
+      <source>{a} → {b} units: RMSE {change:+.0%}</source>
+      <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="510" />
+      <source>For {name}: </source>
+      <translation>Pour {name} : </translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="511" />
+      <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
+      <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
+    </message>
+  </context>
+  <context>
+    <name>DemoReserve</name>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="34" />
+      <source>Demo reserve with a simulated population</source>
+      <translation>Réserve de démonstration avec une population simulée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="37" />
+      <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Construit Hollin Ridge Reserve, une réserve d'altitude inventée pour les démonstrations, la formation et les tests, et une population simulée de velmar, une antilope brouteuse inventée. Rien ici ne décrit un lieu ou une espèce réels.&lt;/p&gt;&lt;p&gt;La réserve couvre 250–350 km² en WGS 84 / UTM zone 36S, avec une limite irrégulière, un lac et une enclave privée (tous deux dans la couche des zones exclues), un raster d'altitude (relief fractal synthétique avec un escarpement abrupt) et un raster de verdure (un indice de végétation de 0 à 1, corrélé à l'altitude, plus du bruit).&lt;/p&gt;&lt;p&gt;Les velmar vivent en groupes : un processus d'agrégats de Thomas inhomogène dont les centres de groupe sont plus denses là où la verdure est forte et l'altitude basse. Le vrai total est connu, et le nombre attendu d'animaux par km² est écrit dans un raster, afin de pouvoir confronter les plans d'inventaire et les estimations à la vérité.&lt;/p&gt;&lt;h3&gt;Paramètres&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : la même graine donne la même réserve et les mêmes animaux. 0 en tire une et l'enregistre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Taille de cellule raster&lt;/b&gt; : en mètres, de 10 à 500 (50 par défaut).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Limite de la réserve (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zones exclues (&lt;i&gt;kind&lt;/i&gt; lake ou inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rasters d'altitude (m), de verdure (0–1) et de velmar attendus par km²&lt;/li&gt;&lt;li&gt;Animaux (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un rapport HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Références : Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="65" />
+      <location filename="../processing/algorithms/demoreserve.py" line="148" />
+      <source>Raster cell size (m)</source>
+      <translation>Taille de cellule raster (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="69" />
+      <source>Reserve boundary</source>
+      <translation>Limite de la réserve</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="70" />
+      <source>Excluded areas (lake, inholding)</source>
+      <translation>Zones exclues (lac, enclave)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="71" />
+      <source>Elevation (m)</source>
+      <translation>Altitude (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="72" />
+      <source>Greenness (0–1)</source>
+      <translation>Verdure (0–1)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="73" />
+      <source>Expected animals per km²</source>
+      <translation>Animaux attendus par km²</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="74" />
+      <source>Simulated animals</source>
+      <translation>Animaux simulés</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="76" />
+      <source>True number of animals</source>
+      <translation>Nombre réel d'animaux</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="77" />
+      <source>Expected number of animals</source>
+      <translation>Nombre attendu d'animaux</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="120" />
+      <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
+      <translation>{name} : {area:,.1f} km², {n:,} velmar en {g:,} groupes (attendus : {e:,.0f}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="136" />
+      <source>Demo reserve: {name}</source>
+      <translation>Réserve de démonstration : {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="137" />
+      <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
+      <translation>Données inventées pour les démonstrations, la formation et les tests. {name} et le velmar ({desc}) n'existent pas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="139" />
+      <source>an invented grazing antelope that lives in loose groups</source>
+      <translation>une antilope brouteuse inventée qui vit en groupes lâches</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="141" />
+      <source>reserve area</source>
+      <translation>surface de la réserve</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="142" />
+      <source>true number of velmar</source>
+      <translation>nombre réel de velmar</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="143" />
+      <source>expected number</source>
+      <translation>nombre attendu</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="144" />
+      <source>groups</source>
+      <translation>groupes</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="147" />
+      <source>Seed</source>
+      <translation>Graine</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="149" />
+      <source>CRS</source>
+      <translation>SCR</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="150" />
+      <source>Mean group size (mu)</source>
+      <translation>Taille moyenne des groupes (mu)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="151" />
+      <source>Group spread, SD of members around the centre (m)</source>
+      <translation>Dispersion des groupes, écart-type des membres autour du centre (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="153" />
+      <source>Areas</source>
+      <translation>Zones</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="155" />
+      <source>Part</source>
+      <translation>Partie</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="155" />
+      <source>Area (km²)</source>
+      <translation>Surface (km²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="156" />
+      <location filename="../processing/algorithms/demoreserve.py" line="163" />
+      <source>Reserve</source>
+      <translation>Réserve</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="156" />
+      <source>Lake (excluded)</source>
+      <translation>Lac (exclu)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="157" />
+      <source>Private inholding (excluded)</source>
+      <translation>Enclave privée (exclue)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="159" />
+      <source>Map</source>
+      <translation>Carte</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="164" />
+      <source>Lake</source>
+      <translation>Lac</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="165" />
+      <source>Private inholding</source>
+      <translation>Enclave privée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="167" />
+      <source>Velmar (every third animal)</source>
+      <translation>Velmar (un animal sur trois)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="168" />
+      <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
+      <translation>Hollin Ridge Reserve, les zones exclues et les animaux simulés.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="169" />
+      <source>How the population was simulated</source>
+      <translation>Comment la population a été simulée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/demoreserve.py" line="170" />
+      <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
+      <translation>Les centres de groupe forment un processus de Poisson inhomogène sur l'habitat (la réserve sans le lac) ; leur intensité est proportionnelle à exp(0,9 × verdure standardisée − 0,6 × altitude standardisée). Chaque groupe a un nombre de membres suivant une loi de Poisson (moyenne {mu:g}), dispersés autour de son centre avec un déplacement normal de {sigma:g} m ; les membres qui tombent hors de l'habitat ne font pas partie de la population. C'est un processus d'agrégats de Thomas. Son total attendu et sa variance sont calculés à partir de la surface d'intensité sur la grille du raster.</translation>
+    </message>
+  </context>
+  <context>
+    <name>Estimate</name>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="107" />
+      <source>Estimate density and abundance</source>
+      <translation>Estimer la densité et l'abondance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="110" />
+      <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
+
+Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
+
+Counts: a NULL count means the unit was not surveyed: it is left out and listed as non-response. Reserve units (role = reserve) without a count are unused reserves and are skipped quietly; reserves that were surveyed count like any other unit. 0 means surveyed, none seen. Negative or non-numeric counts stop the run, naming the units.
+
+Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is above 0, else the polygon's area, else for lines the strip width × the line's length, else the fixed unit area for points and lines.
+
+Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is collapsed with a neighbour for its variance (Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so.
+
+Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a stratified percentile bootstrap of 2,000 resamples (seeded).
+
+Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance.
+
+Detection: with a detection probability p below 1, estimates are divided by p and the squared CVs add (delta method, Seber 1982). p and its SE must come from a separate study.
+
+Presence data: with the presence option a 0/1 field gives the stratified proportion of units where the species was detected (naive occupancy, not corrected for detection), and abund is the number of occupied units in the frame.
+
+Target CV (above 0): n_next is the number of units each stratum needs next time for that CV of the overall abundance, by Neyman allocation on the observed standard deviations (Neyman 1934; Cochran 1977, eq. 5.26).
+
+True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
+
+Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
+      <translation>Estime la densité et l'abondance par strate et pour toute la base de sondage à partir des comptages dans les unités d'échantillonnage, avec erreur type, coefficient de variation (CV) et intervalle de confiance, ainsi que la taille d'échantillon nécessaire au prochain inventaire.
+
+Estimateur : D_h = Σy / Σa par strate (l'estimateur par le ratio ; avec des unités égales, le comptage moyen divisé par la surface d'une unité), avec sa variance linéarisée (Cochran 1977, ch. 5 et 6) ; abondance N_h = D_h·A_h ; au total N = Σ N_h et D = N / Σ A_h, les variances s'additionnant. La correction pour population finie 1 − Σa/A_h est appliquée sur demande.
+
+Comptages : un comptage NULL signifie que l'unité n'a pas été inventoriée : elle est écartée et listée comme non-réponse. Les unités de réserve (role = reserve) sans comptage sont des réserves non utilisées et sont ignorées sans avertissement ; les réserves inventoriées comptent comme toute autre unité. 0 signifie inventoriée, aucun animal vu. Des comptages négatifs ou non numériques arrêtent le traitement, en nommant les unités.
+
+Surface d'une unité (m²) : le champ de surface d'unité (area_m2 par défaut, tel que l'écrit la disposition) s'il est supérieur à 0, sinon la surface du polygone, sinon pour les lignes la largeur de bande × la longueur de la ligne, sinon la surface d'unité fixe pour les points et les lignes.
+
+Strates : des polygones avec un champ d'identifiant correspondant au champ de strate des unités ; leurs surfaces définissent la base de sondage. Quand les unités n'ont pas de champ de strate, ou que la couche des strates est un seul polygone sans champ d'identifiant, toutes les unités forment une seule strate sur la base. Une strate avec une seule unité inventoriée est regroupée avec une voisine pour sa variance (Cochran 1977, §5A.12), avec un avertissement. Une strate sans unité inventoriée est une erreur, sauf si vous choisissez de l'écarter : la base se réduit alors, et le rapport le dit.
+
+Intervalles : t avec les degrés de liberté de Satterthwaite (Satterthwaite 1946 ; Cochran 1977) ; log-normal, de N/C à N·C avec C = exp(z√ln(1+CV²)) (Burnham et al. 1987 ; Buckland et al. 2001) ; ou un bootstrap stratifié des percentiles sur 2 000 rééchantillonnages (avec graine).
+
+Variance : la formule de l'échantillonnage aléatoire simple, ou l'estimateur de voisinage local (Stevens &amp; Olsen 2003) pour les grilles systématiques et les dispositions spatialement équilibrées, où la formule simple surestime la variance.
+
+Détection : avec une probabilité de détection p inférieure à 1, les estimations sont divisées par p et les CV au carré s'additionnent (méthode delta, Seber 1982). p et son erreur type doivent provenir d'une étude distincte.
+
+Données de présence : avec l'option présence, un champ 0/1 donne la proportion stratifiée d'unités où l'espèce a été détectée (occupation naïve, non corrigée de la détection), et abund est le nombre d'unités occupées dans la base.
+
+CV cible (supérieur à 0) : n_next est le nombre d'unités dont chaque strate aura besoin la prochaine fois pour ce CV de l'abondance globale, par allocation de Neyman sur les écarts-types observés (Neyman 1934 ; Cochran 1977, éq. 5.26).
+
+Vrai total : pour les simulations et la formation uniquement. Le rapport l'affiche alors à côté de l'estimation ; dans un vrai inventaire, le vrai total n'est jamais connu.
+
+Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="153" />
+      <source>Sample units with counts</source>
+      <translation>Unités d'échantillonnage avec comptages</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="155" />
+      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <source>Count field</source>
+      <translation>Champ de comptage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="157" />
+      <source>Stratum field of the units</source>
+      <translation>Champ de strate des unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="160" />
+      <source>Unit area field (m²)</source>
+      <translation>Champ de surface d'unité (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="163" />
+      <source>Fixed unit area for points and lines (m²; 0: not used)</source>
+      <translation>Surface d'unité fixe pour les points et les lignes (m² ; 0 : non utilisée)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="166" />
+      <source>Strip width of line transects (m, full width; 0: not used)</source>
+      <translation>Largeur de bande des transects linéaires (m, largeur totale ; 0 : non utilisée)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="169" />
+      <source>Strata (the frame)</source>
+      <translation>Strates (la base de sondage)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="171" />
+      <source>Stratum id field of the strata</source>
+      <translation>Champ d'identifiant des strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="174" />
+      <location filename="../processing/algorithms/estimate.py" line="494" />
+      <source>Confidence level</source>
+      <translation>Niveau de confiance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="177" />
+      <source>Confidence interval</source>
+      <translation>Intervalle de confiance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="178" />
+      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <source>t with Satterthwaite degrees of freedom</source>
+      <translation>t avec les degrés de liberté de Satterthwaite</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="178" />
+      <source>Log-normal</source>
+      <translation>Log-normal</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="179" />
+      <source>Stratified bootstrap (2,000 resamples)</source>
+      <translation>Bootstrap stratifié (2 000 rééchantillonnages)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="181" />
+      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <source>Finite-population correction</source>
+      <translation>Correction pour population finie</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="183" />
+      <source>Detection probability p (from a separate study; 1: all seen)</source>
+      <translation>Probabilité de détection p (d'une étude distincte ; 1 : tous vus)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="186" />
+      <source>Standard error of p</source>
+      <translation>Erreur type de p</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <source>Area unit of the results</source>
+      <translation>Unité de surface des résultats</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <source>km²</source>
+      <translation>km²</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <source>hectares</source>
+      <translation>hectares</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="192" />
+      <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
+      <translation>CV cible pour le prochain inventaire (0 : non utilisé ; p. ex. 0.15)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="196" />
+      <location filename="../processing/algorithms/estimate.py" line="496" />
+      <source>Variance estimator</source>
+      <translation>Estimateur de variance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="197" />
+      <source>Simple random sampling formula</source>
+      <translation>Formule de l'échantillonnage aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="198" />
+      <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
+      <translation>Voisinage local (dispositions systématiques ou spatialement équilibrées)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="200" />
+      <source>The count field holds presence (1) / absence (0)</source>
+      <translation>Le champ de comptage contient présence (1) / absence (0)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="202" />
+      <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
+      <translation>Écarter les strates sans unité inventoriée (la base se réduit)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="205" />
+      <source>True total of a simulated population (simulations and training only; 0: none)</source>
+      <translation>Vrai total d'une population simulée (simulations et formation uniquement ; 0 : aucun)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="210" />
+      <source>Strata with estimates</source>
+      <translation>Strates avec estimations</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="212" />
+      <source>Estimate table</source>
+      <translation>Table des estimations</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <source>Overall density</source>
+      <translation>Densité globale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <source>SE of the overall density</source>
+      <translation>Erreur type de la densité globale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="216" />
+      <source>Overall abundance</source>
+      <translation>Abondance globale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="217" />
+      <source>Lower confidence limit of the abundance</source>
+      <translation>Limite inférieure de confiance de l'abondance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="218" />
+      <source>Upper confidence limit of the abundance</source>
+      <translation>Limite supérieure de confiance de l'abondance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="219" />
+      <source>CV of the overall estimate</source>
+      <translation>CV de l'estimation globale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="242" />
+      <source>Layer '{layer}' has no count field '{field}'. Choose the field that holds the counts.</source>
+      <translation>La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="251" />
+      <source>Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the strata layer's id field (plotwise:stratify writes 'stratum'), or give a frame layer of one polygon to treat the frame as one stratum.</source>
+      <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates (plotwise:stratify écrit 'stratum'), ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="255" />
+      <source>Layer '{layer}' is one polygon without a stratum id field: the frame is treated as one stratum, and the units' field '{field}' is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
+      <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base est traitée comme une seule strate, et le champ « {field} » des unités n'est pas utilisé. Si les unités ont été allouées aux strates de façon inégale, donnez plutôt les strates : une moyenne non stratifiée est alors biaisée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="285" />
+      <source>Layer '{layer}' has no features.</source>
+      <translation>La couche « {layer} » n'a aucune entité.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="290" />
+      <source>Layer '{layer}' has no polygons with an area.</source>
+      <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="306" />
+      <source>{n} unused reserve unit(s) without a count were skipped.</source>
+      <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="337" />
+      <source>Layer '{layer}': units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
+      <translation>Couche « {layer} » : les unités {ids} n'ont pas de géométrie, la variance de voisinage local ne peut donc pas les utiliser. Donnez-leur leur position, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="344" />
+      <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
+      <translation>Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="391" />
+      <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
+      <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="413" />
+      <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
+      <translation>Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="432" />
+      <source>In strata {strata} the units' inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
+      <translation>Dans les strates {strata}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <source>occupied units</source>
+      <translation>unités occupées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <source>animals</source>
+      <translation>animaux</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <source>Naive occupancy from presence data</source>
+      <translation>Occupation naïve à partir de données de présence</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <source>Density and abundance estimate</source>
+      <translation>Estimation de la densité et de l'abondance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <source>proportion of units occupied (naive)</source>
+      <translation>proportion d'unités occupées (naïve)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <source>density per {unit}</source>
+      <translation>densité par {unit}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="459" />
+      <source>estimated {what} in the frame</source>
+      <translation>estimation des {what} dans la base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="460" />
+      <source>{level} interval</source>
+      <translation>intervalle à {level}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="462" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <source>CV</source>
+      <translation>CV</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="463" />
+      <source>units surveyed</source>
+      <translation>unités inventoriées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="466" />
+      <source>true total of the simulated population</source>
+      <translation>vrai total de la population simulée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="471" />
+      <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).</source>
+      <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <source>covers</source>
+      <translation>contient</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <source>misses</source>
+      <translation>ne contient pas</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <source>log-normal</source>
+      <translation>log-normal</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="480" />
+      <source>stratified percentile bootstrap</source>
+      <translation>bootstrap stratifié des percentiles</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="481" />
+      <source>simple random sampling formula</source>
+      <translation>formule de l'échantillonnage aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="482" />
+      <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
+      <translation>voisinage local (Stevens &amp; Olsen 2003)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="484" />
+      <source>Sample units</source>
+      <translation>Unités d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <source> (presence/absence)</source>
+      <translation> (présence/absence)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <source>Stratum field</source>
+      <translation>Champ de strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <source>none: one stratum</source>
+      <translation>aucun : une seule strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <source>Unit area</source>
+      <translation>Surface d'une unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <source>field {field} (m²)</source>
+      <translation>champ {field} (m²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="488" />
+      <source>polygon area</source>
+      <translation>surface du polygone</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="489" />
+      <source>strip width</source>
+      <translation>largeur de bande</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="490" />
+      <source>fixed</source>
+      <translation>fixe</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="491" />
+      <source>Strata (frame)</source>
+      <translation>Strates (base de sondage)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="492" />
+      <source>Computation CRS</source>
+      <translation>SCR de calcul</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="493" />
+      <source>Area unit</source>
+      <translation>Unité de surface</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="495" />
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Interval</source>
+      <translation>Intervalle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <source>yes</source>
+      <translation>oui</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <source>no</source>
+      <translation>non</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="498" />
+      <source>Detection probability p</source>
+      <translation>Probabilité de détection p</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="499" />
+      <source>Target CV for the next survey</source>
+      <translation>CV cible pour le prochain inventaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="502" />
+      <source>Bootstrap resamples</source>
+      <translation>Rééchantillonnages bootstrap</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="503" />
+      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <source>Seed</source>
+      <translation>Graine</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <source>not used (no random draws without the bootstrap)</source>
+      <translation>non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="509" />
+      <source>Estimates by stratum</source>
+      <translation>Estimations par strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <source>Stratum</source>
+      <translation>Strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <source>Area ({unit})</source>
+      <translation>Surface ({unit})</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <source>Units (n)</source>
+      <translation>Unités (n)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <source>Not surveyed</source>
+      <translation>Non inventoriées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <source>Mean count</source>
+      <translation>Comptage moyen</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <source>SD of counts</source>
+      <translation>Écart-type des comptages</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <source>SE</source>
+      <translation>Erreur type</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="512" />
+      <location filename="../processing/algorithms/estimate.py" line="515" />
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Lower limit</source>
+      <translation>Limite inférieure</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="515" />
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Upper limit</source>
+      <translation>Limite supérieure</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <source>df</source>
+      <translation>ddl</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <source>Occupied units</source>
+      <translation>Unités occupées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <source>Abundance</source>
+      <translation>Abondance</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <source>Units next time (n_next)</source>
+      <translation>Unités la prochaine fois (n_next)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="522" />
+      <location filename="../processing/algorithms/estimate.py" line="565" />
+      <source>all strata</source>
+      <translation>toutes les strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="525" />
+      <source>{what}, limits at {level}.</source>
+      <translation>{what}, limites à {level}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="527" />
+      <source>{what} in the frame, limits at {level}.</source>
+      <translation>{what} dans la base de sondage, limites à {level}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="530" />
+      <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
+      <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="535" />
+      <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
+      <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="538" />
+      <source>The overall interval by method</source>
+      <translation>L'intervalle global selon la méthode</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <source>Used in the outputs</source>
+      <translation>Utilisé dans les sorties</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="543" />
+      <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
+      <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <source>overall abundance in a resample</source>
+      <translation>abondance globale dans un rééchantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <source>resamples</source>
+      <translation>rééchantillonnages</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="553" />
+      <source>{level} percentile limits</source>
+      <translation>limites des percentiles à {level}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="554" />
+      <source>The {n:,} bootstrap resamples of the overall abundance</source>
+      <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="563" />
+      <source>true density (simulation)</source>
+      <translation>vraie densité (simulation)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="568" />
+      <source>{what} by stratum with {level} confidence intervals</source>
+      <translation>{what} par strate avec intervalles de confiance à {level}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="579" />
+      <source>lowest</source>
+      <translation>minimum</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="580" />
+      <source>highest</source>
+      <translation>maximum</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="585" />
+      <source>surveyed units</source>
+      <translation>unités inventoriées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="588" />
+      <source>not surveyed</source>
+      <translation>non inventoriées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="590" />
+      <source>Strata shaded by {what}, with the units</source>
+      <translation>Strates ombrées selon {what}, avec les unités</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="593" />
+      <source>Method</source>
+      <translation>Méthode</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="595" />
+      <source>Each stratum's value is the proportion of its surveyed units where the species was detected; the frame's value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
+      <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="602" />
+      <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
+      <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie est appliquée et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="610" />
+      <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
+      <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="613" />
+      <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
+      <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987 ; Buckland et al. 2001). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="615" />
+      <source>Intervals are stratified percentile bootstrap intervals: units are resampled with replacement within each stratum, {b:,} times, from the recorded seed (Efron &amp; Tibshirani 1993). The finite-population correction is not applied to them.</source>
+      <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles : les unités sont rééchantillonnées avec remise dans chaque strate, {b:,} fois, à partir de la graine enregistrée (Efron &amp; Tibshirani 1993). La correction pour population finie ne leur est pas appliquée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="621" />
+      <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
+      <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, et seules les différences à l'intérieur des voisinages comptent comme variance. Pour les dispositions systématiques et spatialement équilibrées, la formule de l'échantillonnage aléatoire simple surestime la variance ; cet estimateur non, pourvu que la disposition ait réellement été systématique ou spatialement équilibrée ; pour une disposition aléatoire simple, utilisez la formule simple. La somme des variances locales est mise à l'échelle une fois pour concorder en moyenne avec la formule simple quand la population n'a pas de structure spatiale (notre choix).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="630" />
+      <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
+      <translation>Les strates avec une seule unité inventoriée ont été regroupées avec une voisine (parmi les strates qui la touchent sur la carte, ou à défaut les strates voisines dans l'ordre des identifiants, celle dont la densité est la plus proche) : les membres d'un groupe partagent la variance résiduelle commune du groupe (Cochran 1977, §5A.12). Les différences entre strates regroupées comptent alors comme variance, si bien que leurs erreurs types tendent à être trop grandes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="636" />
+      <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval's degrees of freedom combine the two parts (Buckland et al. 2001), p's part counting as known with infinite degrees of freedom.</source>
+      <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté de l'intervalle t combinent les deux parts (Buckland et al. 2001), celle de p étant comptée comme connue avec des degrés de liberté infinis.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="643" />
+      <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
+      <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types observés maintenant (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 par strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="649" />
+      <source>Cautions</source>
+      <translation>Mises en garde</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="650" />
+      <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
+      <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="654" />
+      <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
+      <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="657" />
+      <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
+      <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="662" />
+      <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
+      <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/estimate.py" line="665" />
+      <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
+      <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
+    </message>
+  </context>
+  <context>
+    <name>ExampleChain</name>
+    <message>
+      <location filename="../processing/provider.py" line="38" />
+      <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
+      <translation>Chaîne d'exemple : planifier un inventaire (base de sondage, strates, effort, disposition)</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="39" />
+      <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+      <translation>Construit la base de sondage (zone d'étude moins les exclusions et les cellules au-delà de la pente limite), forme des strates par k-moyennes à partir des rasters de covariables, répartit les unités par allocation de Neyman avec l'écart-type de la covariable comme substitut, et dispose des placettes carrées spatialement équilibrées avec 3 unités de réserve par strate. Ouvrez-la dans le modeleur pour modifier une étape. Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="48" />
+      <source>Example chain: estimate from simulated counts</source>
+      <translation>Chaîne d'exemple : estimer à partir de comptages simulés</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="49" />
+      <source>For training: fills the units' count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
+      <translation>Pour la formation : remplit le champ de comptage des unités à partir d'une population simulée, puis estime la densité et l'abondance par strate et au total. Avec un vrai travail de terrain, lancez plutôt l'estimation sur les unités comptées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="57" />
+      <location filename="../processing/provider.py" line="81" />
+      <source>Example chains</source>
+      <translation>Chaînes d'exemple</translation>
+    </message>
+  </context>
+  <context>
+    <name>LayoutUnits</name>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="73" />
+      <source>Lay out sample units</source>
+      <translation>Disposer les unités d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="76" />
+      <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
+
+Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
+
+Designs:
+• Simple random: independent points, uniform over the stratum (triangles chosen by area, then a point within; Turk 1990).
+• Systematic grid: a square grid of spacing √(A/n) with a random start; with bearing −1 the grid also gets a random rotation, otherwise it is turned to the bearing. The realised number of units varies around n and is reported.
+• Spatially balanced: balanced acceptance sampling on a Halton sequence (Robertson et al. 2013). Every leading part of the draw order is itself spread evenly, so reserves are the next points of the same sequence. The start is a uniform random point of the stratum, which keeps inclusion equal for any sample size.
+
+Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in degrees clockwise from grid north, or −1 for a random bearing per unit.
+Keep units inside: centres are drawn from the stratum shrunk by the unit's circumscribing radius, so every unit lies wholly inside its stratum; the shrunk (effective) area is reported and used for the inclusion probabilities.
+Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.
+Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit that cannot be surveyed is replaced by the next unused reserve of the same stratum.
+
+Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an empty count field for the field teams. The GPX file holds one waypoint per unit (a start and an end waypoint per transect), named by unit_id.
+
+A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+      <translation>Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate par valeur du champ de strate ; sans lui, la base forme une seule strate).
+
+Unités par strate : le champ d'unités (par exemple n_alloc de l'étape d'allocation ; le même nombre entier sur chaque entité d'une strate), sinon le total réparti proportionnellement à la surface avec au moins 2 par strate.
+
+Plans :
+• Aléatoire simple : points indépendants, uniformes sur la strate (triangles choisis selon leur surface, puis un point à l'intérieur ; Turk 1990).
+• Grille systématique : une grille carrée de pas √(A/n) avec un départ aléatoire ; avec un azimut de −1 la grille reçoit aussi une rotation aléatoire, sinon elle est orientée selon l'azimut. Le nombre d'unités obtenu varie autour de n et il est indiqué.
+• Spatialement équilibré : échantillonnage par acceptation équilibrée sur une suite de Halton (Robertson et al. 2013). Chaque début de l'ordre de tirage est lui-même réparti uniformément, si bien que les réserves sont les points suivants de la même suite. Le départ est un point aléatoire uniforme de la strate, ce qui garde l'inclusion égale pour toute taille d'échantillon.
+
+Formes : station ponctuelle (taille : rayon de comptage facultatif, m), placette carrée (taille : côté, m), placette circulaire (taille : rayon, m), transect linéaire (taille : longueur, m ; centré sur le point tiré). Azimut en degrés dans le sens horaire depuis le nord de la grille, ou −1 pour un azimut aléatoire par unité.
+Garder les unités à l'intérieur : les centres sont tirés dans la strate réduite du rayon circonscrit de l'unité, si bien que chaque unité est entièrement dans sa strate ; la surface réduite (effective) est indiquée et utilisée pour les probabilités d'inclusion.
+Espacement minimal (m) entre les centres de toutes les unités, principales et de réserve, sur toute la disposition.
+Réserves : unités supplémentaires par strate, role = reserve, dans l'ordre de tirage. Règle de remplacement : une unité principale qui ne peut pas être inventoriée est remplacée par la réserve suivante non utilisée de la même strate.
+
+Champs de sortie : unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A ; pour les transects et les points sans rayon, la densité d'inclusion n/A par m²), weight = 1/incl_p, lon/lat (WGS 84), et un champ count vide pour les équipes de terrain. Le fichier GPX contient un point de passage par unité (un point de début et un de fin par transect), nommé par unit_id.
+
+Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="111" />
+      <source>Sampling frame or strata</source>
+      <translation>Base de sondage ou strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="115" />
+      <source>Stratum field (empty: the frame is one stratum)</source>
+      <translation>Champ de strate (vide : la base forme une seule strate)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="121" />
+      <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
+      <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="127" />
+      <source>Total number of units (when no units field is given)</source>
+      <translation>Nombre total d'unités (sans champ d'unités)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="133" />
+      <source>Design</source>
+      <translation>Plan</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="134" />
+      <source>Simple random</source>
+      <translation>Aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="134" />
+      <source>Systematic grid</source>
+      <translation>Grille systématique</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="134" />
+      <source>Spatially balanced</source>
+      <translation>Spatialement équilibré</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="139" />
+      <source>Unit shape</source>
+      <translation>Forme de l'unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Point station</source>
+      <translation>Station ponctuelle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Square plot</source>
+      <translation>Placette carrée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Circular plot</source>
+      <translation>Placette circulaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="140" />
+      <source>Line transect</source>
+      <translation>Transect linéaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="146" />
+      <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
+      <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="152" />
+      <source>Bearing (degrees from grid north; -1: random)</source>
+      <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="157" />
+      <source>Keep every unit wholly inside its stratum</source>
+      <translation>Garder chaque unité entièrement dans sa strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="161" />
+      <source>Minimum spacing between unit centres (m; 0: none)</source>
+      <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="167" />
+      <source>Reserve units per stratum</source>
+      <translation>Unités de réserve par strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="171" />
+      <source>Sample units</source>
+      <translation>Unités d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="174" />
+      <source>Waypoints for GPS (GPX)</source>
+      <translation>Points de passage pour GPS (GPX)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="174" />
+      <source>GPX files (*.gpx)</source>
+      <translation>Fichiers GPX (*.gpx)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="187" />
+      <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
+      <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="214" />
+      <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
+      <translation>Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="238" />
+      <source>Stratum field '{field}' of layer '{layer}'</source>
+      <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="239" />
+      <source>Units field '{field}' of layer '{layer}'</source>
+      <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="245" />
+      <source>Layer '{layer}': {text}</source>
+      <translation>Couche « {layer} » : {text}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="249" />
+      <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
+      <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="263" />
+      <source>{n} waypoints written to {path}</source>
+      <translation>{n} points de passage écrits dans {path}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="267" />
+      <source>{stratum}: {n} primary and {r} reserve units</source>
+      <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="280" />
+      <source>the frame</source>
+      <translation>la base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="280" />
+      <source>stratum {key}</source>
+      <translation>strate {key}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="336" />
+      <source>Sample-unit layout</source>
+      <translation>Disposition des unités d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="341" />
+      <location filename="../processing/algorithms/layout.py" line="443" />
+      <source>primary units</source>
+      <translation>unités principales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="444" />
+      <source>reserve units</source>
+      <translation>unités de réserve</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <source>strata</source>
+      <translation>strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <source>design</source>
+      <translation>plan</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>simple random</source>
+      <translation>aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>systematic grid</source>
+      <translation>grille systématique</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>spatially balanced</source>
+      <translation>spatialement équilibré</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="346" />
+      <source>Replacing units in the field</source>
+      <translation>Remplacer des unités sur le terrain</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="348" />
+      <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
+      <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="353" />
+      <source>Units per stratum</source>
+      <translation>Unités par strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Stratum</source>
+      <translation>Strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Area (ha)</source>
+      <translation>Surface (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Effective area (ha)</source>
+      <translation>Surface effective (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Units asked</source>
+      <translation>Unités demandées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="355" />
+      <source>Primary</source>
+      <translation>Principales</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="356" />
+      <source>Reserve</source>
+      <translation>Réserves</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="356" />
+      <source>incl_p</source>
+      <translation>incl_p</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="356" />
+      <source>weight</source>
+      <translation>weight</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="358" />
+      <source>Grid spacing (m)</source>
+      <translation>Pas de la grille (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="358" />
+      <source>Grid rotation (°)</source>
+      <translation>Rotation de la grille (°)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="361" />
+      <source>frame</source>
+      <translation>base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="369" />
+      <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
+      <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="371" />
+      <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
+      <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="375" />
+      <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
+      <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="382" />
+      <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
+      <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="385" />
+      <source>Map</source>
+      <translation>Carte</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="386" />
+      <source>Strata (filled), primary units (dark) and reserve units (light)</source>
+      <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="387" />
+      <source>Method</source>
+      <translation>Méthode</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="391" />
+      <source>, projected from {src} (UTM zone of the frame's centre)</source>
+      <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="393" />
+      <source>Frame (FRAME)</source>
+      <translation>Base de sondage (FRAME)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="394" />
+      <source>Stratum field (STRATUM_FIELD)</source>
+      <translation>Champ de strate (STRATUM_FIELD)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="394" />
+      <source>(none: one stratum)</source>
+      <translation>(aucun : une seule strate)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="395" />
+      <source>Units per stratum field (N_FIELD)</source>
+      <translation>Champ d'unités par strate (N_FIELD)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="395" />
+      <source>(none)</source>
+      <translation>(aucun)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="396" />
+      <source>Total units (N_UNITS)</source>
+      <translation>Total d'unités (N_UNITS)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="396" />
+      <source>(not used)</source>
+      <translation>(non utilisé)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="397" />
+      <source>Design (DESIGN)</source>
+      <translation>Plan (DESIGN)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>Unit shape (SHAPE)</source>
+      <translation>Forme de l'unité (SHAPE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>point</source>
+      <translation>point</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>square</source>
+      <translation>carré</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>circle</source>
+      <translation>cercle</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="398" />
+      <source>line</source>
+      <translation>ligne</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="399" />
+      <source>Unit size (SIZE, m)</source>
+      <translation>Taille de l'unité (SIZE, m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="400" />
+      <source>Bearing (BEARING, degrees)</source>
+      <translation>Azimut (BEARING, degrés)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="400" />
+      <source>random</source>
+      <translation>aléatoire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="401" />
+      <source>Keep inside (INSIDE)</source>
+      <translation>Garder à l'intérieur (INSIDE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="401" />
+      <source>yes</source>
+      <translation>oui</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="401" />
+      <source>no</source>
+      <translation>non</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="402" />
+      <source>Minimum spacing (MIN_SPACING, m)</source>
+      <translation>Espacement minimal (MIN_SPACING, m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="403" />
+      <source>Reserves per stratum (RESERVE)</source>
+      <translation>Réserves par strate (RESERVE)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="404" />
+      <source>Seed (SEED)</source>
+      <translation>Graine (SEED)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="405" />
+      <source>CRS of the computation and the output</source>
+      <translation>SCR du calcul et de la sortie</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="413" />
+      <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
+      <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="415" />
+      <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
+      <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="417" />
+      <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
+      <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/layout.py" line="424" />
+      <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
+      <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseAlgorithm</name>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="258" />
+      <location filename="../processing/algorithms/base.py" line="116" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="321" />
+      <location filename="../processing/algorithms/demoreserve.py" line="117" />
+      <location filename="../processing/algorithms/estimate.py" line="375" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="113" />
+      <location filename="../processing/algorithms/stratify.py" line="210" />
+      <source>Cancelled by the user. No result was written.</source>
+      <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="29" />
+      <location filename="../processing/algorithms/base.py" line="54" />
+      <source>Survey design</source>
+      <translation>Conception de l'inventaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="30" />
+      <location filename="../processing/algorithms/base.py" line="54" />
+      <source>Estimation</source>
+      <translation>Estimation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="31" />
+      <location filename="../processing/algorithms/base.py" line="54" />
+      <source>Demo and training</source>
+      <translation>Démonstration et formation</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="70" />
+      <source>Random seed (0 draws one and records it)</source>
+      <translation>Graine aléatoire (0 en tire une et l'enregistre)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="82" />
+      <source>Report (HTML)</source>
+      <translation>Rapport (HTML)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="83" />
+      <source>HTML files (*.html)</source>
+      <translation>Fichiers HTML (*.html)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="94" />
+      <source>Seed used: {seed}</source>
+      <translation>Graine utilisée : {seed}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="136" />
+      <source>Report written to {path}</source>
+      <translation>Rapport écrit dans {path}</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseBridge</name>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="547" />
+      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
+      <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="559" />
+      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
+      <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="572" />
+      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
+      <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="67" />
+      <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
+      <translation>La couche « {layer} » n'a pas de système de coordonnées de référence valide. Définissez son SCR (Propriétés de la couche → Source) et relancez.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="78" />
+      <source>Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
+      <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="116" />
+      <source>The input layer '{layer}' could not be opened.</source>
+      <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="124" />
+      <source>Layer '{layer}' has no field named {names}. Choose an existing field.</source>
+      <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="157" />
+      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
+      <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="161" />
+      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
+      <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="181" />
+      <source> and {n} more</source>
+      <translation> et {n} autres</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="232" />
+      <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
+      <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="259" />
+      <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
+      <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
+    </message>
+    <message>
+      <location filename="../processing/bridge.py" line="264" />
+      <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
+      <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwisePlugin</name>
+    <message>
+      <location filename="../plugin/plugin.py" line="51" />
+      <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
+      <translation>Plotwise ne peut pas démarrer car une bibliothèque nécessaire est absente ou trop ancienne : {problems} Installez les paquets standard de l'hôte (sous Debian ou Ubuntu : python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) et redémarrez QGIS. Aucun algorithme Plotwise n'a été ajouté.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseProvider</name>
+    <message>
+      <location filename="../processing/provider.py" line="95" />
+      <source>Plotwise</source>
+      <translation>Plotwise</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="98" />
+      <source>Plotwise survey design and estimation</source>
+      <translation>Plotwise : conception d'inventaires et estimation</translation>
+    </message>
+    <message>
+      <location filename="../processing/provider.py" line="119" />
+      <source>The example model {path} could not be read.</source>
+      <translation>Le modèle d'exemple {path} n'a pas pu être lu.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseReport</name>
+    <message>
+      <location filename="../processing/report/html.py" line="124" />
+      <source>Inputs and parameters</source>
+      <translation>Entrées et paramètres</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="126" />
+      <source>Item</source>
+      <translation>Élément</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="126" />
+      <source>Value</source>
+      <translation>Valeur</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="153" />
+      <source>Written</source>
+      <translation>Généré le</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="155" />
+      <source>algorithm</source>
+      <translation>algorithme</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="159" />
+      <source>Field safety</source>
+      <translation>Sécurité sur le terrain</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="160" />
+      <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
+      <translation>Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe. Cet outil choisit des emplacements pour des raisons uniquement statistiques : il ne rend jamais un emplacement sûr à atteindre ni sûr pour y travailler. Un terrain escarpé, isolé ou inondé, la faune, la météo et les terrains privés peuvent mettre des personnes en danger. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale, et écartez ou remplacez toute unité qui ne peut pas être atteinte en sécurité (notez-la comme non inventoriée).</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="164" />
+      <source>Warnings</source>
+      <translation>Avertissements</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="168" />
+      <source>Method references</source>
+      <translation>Références des méthodes</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseStyles</name>
+    <message>
+      <location filename="../processing/styles.py" line="211" />
+      <source>primary unit</source>
+      <translation>unité principale</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="212" />
+      <source>reserve unit</source>
+      <translation>unité de réserve</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="255" />
+      <source>per {unit}</source>
+      <translation>par {unit}</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="256" />
+      <source>Density (animals {per})</source>
+      <translation>Densité (animaux {per})</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="286" />
+      <source>no estimate (no surveyed unit)</source>
+      <translation>pas d'estimation (aucune unité inventoriée)</translation>
+    </message>
+    <message>
+      <location filename="../processing/styles.py" line="385" />
+      <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
+      <translation>La couche {name} n'a pas pu recevoir son style ({error}) ; elle garde le style par défaut.</translation>
+    </message>
+  </context>
+  <context>
+    <name>SimulateCounts</name>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="30" />
+      <source>Simulate counts in sample units</source>
+      <translation>Simuler des comptages dans les unités d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="33" />
+      <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit's &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve's simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
+      <source>Sample units</source>
+      <translation>Unités d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="52" />
+      <source>Animal points</source>
+      <translation>Points des animaux</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="55" />
+      <source>Detection probability</source>
+      <translation>Probabilité de détection</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="60" />
+      <source>Count reserve units too</source>
+      <translation>Compter aussi les unités de réserve</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="63" />
+      <source>Units with simulated counts</source>
+      <translation>Unités avec comptages simulés</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="88" />
+      <source>Layer '{layer}': these features cannot be counted: {items}. Point and line units need a positive 'area_m2' field (the layout step writes it); polygons need a geometry.</source>
+      <translation>Couche « {layer} » : ces entités ne peuvent pas être comptées : {items}. Les unités ponctuelles et linéaires ont besoin d'un champ « area_m2 » positif (l'étape de disposition l'écrit) ; les polygones ont besoin d'une géométrie.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="127" />
+      <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
+      <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
+    </message>
+  </context>
+  <context>
+    <name>Stratify</name>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="67" />
+      <source>Quantile (equal areas on the first covariate)</source>
+      <translation>Quantiles (surfaces égales sur la première covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="68" />
+      <source>Equal interval (on the first covariate)</source>
+      <translation>Intervalles égaux (sur la première covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="69" />
+      <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
+      <translation>Racine cumulée des fréquences (Dalenius–Hodges, première covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="70" />
+      <source>k-means (all covariates, standardised)</source>
+      <translation>k-moyennes (toutes les covariables, standardisées)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="71" />
+      <source>Raster classes (each class of the first covariate)</source>
+      <translation>Classes raster (chaque classe de la première covariable)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="75" />
+      <source>Stratify from raster covariates</source>
+      <translation>Stratifier à partir de covariables raster</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="78" />
+      <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches smaller than the minimum patch area (ha) are merged into their neighbours (GDAL sieve, 4-connected) before the strata are turned into polygons.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Forme des strates (zones de densité attendue semblable) à partir de covariables raster telles que l'altitude, un indice de végétation ou une carte d'occupation du sol. Seules comptent les cellules dont le centre est dans la base de sondage. Une cellule NoData dans une covariable est écartée et sa surface signalée.&lt;/p&gt;&lt;p&gt;Les covariables sont mises sur la grille de la première, dans le SCR de la base de sondage (une base en coordonnées géographiques est projetée dans la zone UTM de son centre). Les rasters dans un autre SCR ou sur une autre grille sont rééchantillonnés à la volée (bilinéaire ; plus proche voisin pour les classes raster). Les rasters sont lus bloc par bloc, si bien que la mémoire reste bornée quelle que soit leur taille.&lt;/p&gt;&lt;h3&gt;Méthodes&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantiles&lt;/b&gt; : strates de surface égale le long de la première covariable. Les limites sont les quantiles empiriques exacts des cellules de la base (Hyndman &amp;amp; Fan 1996, définition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalles égaux&lt;/b&gt; : l'étendue de la première covariable découpée en largeurs égales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Racine cumulée des fréquences&lt;/b&gt; : la règle de Dalenius &amp;amp; Hodges (1959) sur un histogramme à 100 classes de la première covariable (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-moyennes&lt;/b&gt; : toutes les covariables standardisées à moyenne 0 et écart-type 1, graines k-means++ (Arthur &amp;amp; Vassilvitskii 2007) et itérations de Lloyd sur un échantillon aléatoire de 100 000 cellules tiré avec la graine ; puis chaque cellule va au centre le plus proche.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Classes raster&lt;/b&gt; : chaque valeur de la première covariable (un raster catégoriel, 50 classes au plus) forme une strate ; le nombre de strates est ignoré.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Les strates sont numérotées de 1 à k par moyenne croissante de la première covariable. Les taches plus petites que la surface minimale (ha) sont fusionnées avec leurs voisines (tamis GDAL, 4-connexité) avant que les strates ne soient converties en polygones.&lt;/p&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Raster des strates : la strate de chaque cellule (0 = aucune).&lt;/li&gt;&lt;li&gt;Strates : un multipolygone par strate avec &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cellules × surface d'une cellule), &lt;i&gt;cov_mean&lt;/i&gt; et &lt;i&gt;cov_sd&lt;/i&gt; de la première covariable, et &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … pour les autres (écart-type sur les cellules de la strate).&lt;/li&gt;&lt;li&gt;Rapport : limites, surfaces, statistiques des covariables par strate, part de la variance de chaque covariable expliquée par les strates (R²), un histogramme avec les limites et une carte.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La graine aléatoire ne sert qu'aux k-moyennes (0 en tire une et l'enregistre).&lt;/p&gt;&lt;p&gt;Les strates sont un outil statistique : avant le travail de terrain, vérifiez l'accès à chaque unité et sa sécurité.&lt;/p&gt;</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="113" />
+      <source>Sampling frame</source>
+      <translation>Base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="115" />
+      <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
+      <translation>Covariables raster (bande 1 de chacune ; la première fixe la grille)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="118" />
+      <source>Method</source>
+      <translation>Méthode</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="120" />
+      <source>Number of strata (ignored for raster classes)</source>
+      <translation>Nombre de strates (ignoré pour les classes raster)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="123" />
+      <source>Minimum patch area (ha); smaller patches join a neighbour</source>
+      <translation>Surface minimale d'une tache (ha) ; les taches plus petites rejoignent une voisine</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="126" />
+      <source>Stratum raster</source>
+      <translation>Raster des strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="128" />
+      <location filename="../processing/algorithms/stratify.py" line="251" />
+      <source>Strata</source>
+      <translation>Strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="130" />
+      <source>Number of strata formed</source>
+      <translation>Nombre de strates formées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="132" />
+      <source>Share of the first covariate's variance explained by the strata (R²)</source>
+      <translation>Part de la variance de la première covariable expliquée par les strates (R²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="138" />
+      <source>Give at least one raster in COVARIATES.</source>
+      <translation>Donnez au moins un raster dans COVARIATES.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="140" />
+      <source>COVARIATES holds {n} rasters; use at most {m}.</source>
+      <translation>COVARIATES contient {n} rasters ; utilisez-en au plus {m}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="145" />
+      <source>COVARIATES: '{name}' is not a raster layer.</source>
+      <translation>COVARIATES : « {name} » n'est pas une couche raster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="147" />
+      <source>Covariate '{name}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+      <translation>La covariable « {name} » n'est pas un fichier raster lisible par GDAL. Enregistrez-la d'abord en GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="175" />
+      <source>Layer '{layer}' (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
+      <translation>La couche « {layer} » (FRAME) n'a aucun polygone de surface positive. Choisissez la couche de la base de sondage.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="190" />
+      <source>Warped onto the grid of '{first}' in {crs}: {names}.</source>
+      <translation>Rééchantillonnées sur la grille de « {first} » en {crs} : {names}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="213" />
+      <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
+      <translation>{k} strates sur {ha} ha ; R² de « {name} » : {r2}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="235" />
+      <source>Strata from raster covariates</source>
+      <translation>Strates à partir de covariables raster</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="241" />
+      <source>strata</source>
+      <translation>strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="242" />
+      <location filename="../processing/algorithms/stratify.py" line="336" />
+      <source>area stratified (ha)</source>
+      <translation>surface stratifiée (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="243" />
+      <source>frame covered</source>
+      <translation>part de la base couverte</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="244" />
+      <source>R² of {name}</source>
+      <translation>R² de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="246" />
+      <source>The strata cover the frame's cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
+      <translation>Les strates couvrent les cellules de la base de sondage qui ont une valeur dans chaque covariable ({ha} ha). Un inventaire alloué sur ces strates ne vaut que pour cette surface.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Stratum</source>
+      <translation>Strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Label</source>
+      <translation>Libellé</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Area (ha)</source>
+      <translation>Surface (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>% of area</source>
+      <translation>% de la surface</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="252" />
+      <source>Cells</source>
+      <translation>Cellules</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="255" />
+      <source>{name} mean</source>
+      <translation>moyenne de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="255" />
+      <source>{name} SD</source>
+      <translation>écart-type de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="265" />
+      <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
+      <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avec leur plus grande voisine (tamis GDAL, 4-connexité) avant la vectorisation ; surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir quelques cellules que la règle seule aurait mises dans une strate voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="272" />
+      <source>Method: {name}</source>
+      <translation>Méthode : {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="276" />
+      <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
+      <translation>La strate h contient les cellules telles que b(h−1) ≤ {name} &lt; b(h). Limites sur {name} :</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="279" />
+      <source>Boundary</source>
+      <translation>Limite</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="279" />
+      <location filename="../processing/algorithms/stratify.py" line="332" />
+      <source>Value</source>
+      <translation>Valeur</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="282" />
+      <source>Exact sample quantiles at h/k of the frame's cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
+      <translation>Quantiles empiriques exacts à h/k des cellules de la base (Hyndman &amp; Fan 1996, définition 7), trouvés en deux passes : un histogramme à 64 000 classes situe chaque quantile, puis les cellules de cette classe sont triées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="287" />
+      <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
+      <translation>Dalenius &amp; Hodges (1959) : sur un histogramme de {name} à {n} classes, les limites sont les bornes supérieures des classes où le cumul de √f est le plus proche de h/k de son total.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="293" />
+      <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
+      <translation>Covariables standardisées avec leur moyenne et leur écart-type sur la base ; graines k-means++ et itérations de Lloyd sur un échantillon aléatoire de {m} cellules (graine {seed}) ; {it} itérations. Puis chaque cellule est allée au centre le plus proche.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="299" />
+      <source>Each class of '{name}' is one stratum ({k} classes).</source>
+      <translation>Chaque classe de « {name} » forme une strate ({k} classes).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="301" />
+      <source>Share of covariate variance explained by the strata (R²)</source>
+      <translation>Part de la variance des covariables expliquée par les strates (R²)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>Covariate</source>
+      <translation>Covariable</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>Mean</source>
+      <translation>Moyenne</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>SD</source>
+      <translation>Écart-type</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="302" />
+      <source>R²</source>
+      <translation>R²</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="305" />
+      <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
+      <translation>R² = 1 − Σ N_h S_h² / (N S²) : la part inter-strates de la variance de la covariable sur les cellules. Pour une grandeur qui suit exactement la covariable, une allocation proportionnelle sur ces strates réduirait la variance de la moyenne estimée de cette part par rapport à un échantillonnage aléatoire simple (Cochran 1977, ch. 5, approximation pour grande population). Le gain pour la densité animale est d'autant plus faible que la densité suit moins étroitement la covariable.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="312" />
+      <source>Histogram of {name}</source>
+      <translation>Histogramme de {name}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="320" />
+      <source>stratum {h}</source>
+      <translation>strate {h}</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="321" />
+      <source>cells</source>
+      <translation>cellules</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="322" />
+      <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
+      <translation>Cellules de la base selon {name}, colorées par strate ; tirets : limites des strates.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="324" />
+      <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
+      <translation>Cellules de la base selon {name}, colorées par strate (les strates des k-moyennes peuvent se chevaucher sur une covariable).</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="327" />
+      <source>Map</source>
+      <translation>Carte</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="328" />
+      <source>Strata within the sampling frame</source>
+      <translation>Strates dans la base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="330" />
+      <source>Coverage</source>
+      <translation>Couverture</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="332" />
+      <source>Item</source>
+      <translation>Élément</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="333" />
+      <source>frame area (ha)</source>
+      <translation>surface de la base (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="334" />
+      <source>frame area outside the first covariate's extent (ha)</source>
+      <translation>surface de la base hors de l'emprise de la première covariable (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="335" />
+      <source>frame cells with NoData in a covariate (ha)</source>
+      <translation>cellules de la base NoData dans une covariable (ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="337" />
+      <source>share of the frame covered</source>
+      <translation>part de la base couverte</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="338" />
+      <source>cells stratified</source>
+      <translation>cellules stratifiées</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="339" />
+      <source>cell size (m)</source>
+      <translation>taille de cellule (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="340" />
+      <source>grid</source>
+      <translation>grille</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="341" />
+      <source>covariates warped on the fly</source>
+      <translation>covariables rééchantillonnées à la volée</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="341" />
+      <source>none</source>
+      <translation>aucune</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="346" />
+      <source>, projected from {src} (UTM zone of the frame's centre)</source>
+      <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="348" />
+      <source>Sampling frame (FRAME)</source>
+      <translation>Base de sondage (FRAME)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="349" />
+      <source>Covariates (COVARIATES)</source>
+      <translation>Covariables (COVARIATES)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="350" />
+      <source>Method (METHOD)</source>
+      <translation>Méthode (METHOD)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="351" />
+      <source>Number of strata (STRATA)</source>
+      <translation>Nombre de strates (STRATA)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="351" />
+      <source>ignored</source>
+      <translation>ignoré</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="352" />
+      <source>Minimum patch area (MIN_AREA, ha)</source>
+      <translation>Surface minimale d'une tache (MIN_AREA, ha)</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="353" />
+      <source>CRS of the computation and the outputs</source>
+      <translation>SCR du calcul et des sorties</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/stratify.py" line="356" />
+      <source>Seed (SEED)</source>
+      <translation>Graine (SEED)</translation>
+    </message>
+  </context>
+</TS>
