@@ -74,7 +74,7 @@ test-shapely2:
 demo: setup
 	$(PY) scripts/demo_chain.py
 
-package:
+package: translations
 	rm -rf build/package dist/plotwise-$(VERSION).zip
 	mkdir -p build/package/plotwise dist
 	cp __init__.py metadata.txt LICENSE build/package/plotwise/
