@@ -156,9 +156,9 @@ def step_pilot(demo):
     if stratify is None:
         print("  pilot survey skipped: no strata yet")
         return
-    print(f"  pilot survey: 24 simple-random {PLOT_HA:g} ha plots, simulated counts, estimate")
+    print(f"  pilot survey: 32 simple-random {PLOT_HA:g} ha plots, simulated counts, estimate")
     layout = demo.run("plotwise:layout", {
-        "FRAME": stratify["OUTPUT"], "STRATUM_FIELD": "stratum", "N_UNITS": 24,
+        "FRAME": stratify["OUTPUT"], "STRATUM_FIELD": "stratum", "N_UNITS": 32,
         "DESIGN": 0, "SHAPE": 1, "SIZE": PLOT_SIDE, "BEARING": 0.0, "INSIDE": False,
         "MIN_SPACING": 0.0, "RESERVE": 0, "SEED": SEED + 10,
         "OUTPUT": demo.table("pilot_units"), "OUTPUT_GPX": str(demo.out / "pilot_units.gpx"),
@@ -189,7 +189,9 @@ def step_allocate(demo):
         return
     parameters = {
         "STRATA": stratify["OUTPUT"], "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha",
-        "METHOD": 2, "TOTAL": 60, "UNIT_AREA": PLOT_SIDE**2, "MIN_PER_STRATUM": 2,
+        "METHOD": 2, "TOTAL": 60, "UNIT_AREA": PLOT_SIDE**2,
+        # 5 at least: a pilot that saw nothing in a stratum must not leave it with 2 plots and a useless variance
+        "MIN_PER_STRATUM": 5,
         "OUTPUT": demo.table("strata_allocated"), "REPORT": demo.report("05_allocation"),
     }
     # the pilot step's estimate results, stored as results["pilot"] or results["pilot"]["estimate"]
