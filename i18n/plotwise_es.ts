@@ -760,7 +760,32 @@ Las estimaciones de un muestreo sobre este marco valen solo para el marco. Exclu
       <translation>Comparar diseños de muestreo por simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="86" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>simple random</source>
+      <translation>aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>stratified proportional</source>
+      <translation>estratificado proporcional</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>stratified Neyman</source>
+      <translation>estratificado Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>systematic grid</source>
+      <translation>cuadrícula sistemática</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>spatially balanced</source>
+      <translation>espacialmente equilibrado</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="90" />
       <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -793,584 +818,584 @@ Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación
 La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="122" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="126" />
       <source>Density surface (expected animals per km²)</source>
       <translation>Superficie de densidad (animales esperados por km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="124" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="365" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
       <source>Sampling frame</source>
       <translation>Marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="132" />
       <source>Strata (for the stratified designs)</source>
       <translation>Estratos (para los diseños estratificados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="133" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="137" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
       <source>Stratum field</source>
       <translation>Campo de estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="138" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="142" />
       <source>Designs to compare</source>
       <translation>Diseños que comparar</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
       <source>Simple random</source>
       <translation>Aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
       <source>Stratified, proportional allocation</source>
       <translation>Estratificado, asignación proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
       <source>Stratified, Neyman allocation</source>
       <translation>Estratificado, asignación de Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
       <source>Systematic grid</source>
       <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
       <source>Spatially balanced</source>
       <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="146" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="150" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>Number of units</source>
       <translation>Número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="151" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="155" />
       <source>Unit shape</source>
       <translation>Forma de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Point station</source>
       <translation>Estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Square plot</source>
       <translation>Parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Circular plot</source>
       <translation>Parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Line transect</source>
       <translation>Transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="158" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="162" />
       <source>Unit size (m): counting radius, side, radius or transect length</source>
       <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="164" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="168" />
       <source>Half-width of a transect's counting strip (m)</source>
       <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="170" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="174" />
       <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
       <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="176" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="180" />
       <source>Keep units wholly inside their stratum (as the layout's option)</source>
       <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="182" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="186" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
       <source>Simulated surveys per design</source>
       <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="188" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="192" />
       <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
       <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="194" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="198" />
       <source>Variance estimator for the grid and balanced designs</source>
       <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
       <source>Simple random sampling formula</source>
       <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
       <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
       <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="201" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="205" />
       <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
       <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="207" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
       <source>Design comparison</source>
       <translation>Comparación de diseños</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="210" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="214" />
       <source>Recommended design</source>
       <translation>Diseño recomendado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="216" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
       <source>The density surface could not be opened.</source>
       <translation>No se pudo abrir la superficie de densidad.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="219" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="223" />
       <source>The sampling frame could not be opened.</source>
       <translation>No se pudo abrir el marco de muestreo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="225" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="229" />
       <source>Layer '{layer}' has no polygon with an area.</source>
       <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="239" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="243" />
       <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
       <translation>La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="249" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="253" />
       <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
       <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="259" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="263" />
       <source>No strata were given: the stratified designs are left out ({names}).</source>
       <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="264" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="268" />
       <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
       <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="281" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="285" />
       <source>Reading the density surface…</source>
       <translation>Leyendo la superficie de densidad…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="284" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="288" />
       <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
       <translation>La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="306" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="310" />
       <source>Simulating {n} units…</source>
       <translation>Simulando {n} unidades…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="312" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="316" />
       <source>{n} units were left out of the range: {why}</source>
       <translation>{n} unidades quedaron fuera del rango: {why}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="318" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="322" />
       <source>The output table could not be created.</source>
       <translation>No se pudo crear la tabla de salida.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="335" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="339" />
       <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
       <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="344" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="348" />
       <source>Survey designs compared by simulation</source>
       <translation>Diseños de muestreo comparados por simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="350" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="354" />
       <source>recommended design</source>
       <translation>diseño recomendado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="351" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
       <source>its RMSE (animals)</source>
       <translation>su RECM (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="352" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="356" />
       <source>its RMSE relative to the total</source>
       <translation>su RECM relativa al total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="353" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
       <source>its 95 % interval coverage</source>
       <translation>cobertura de sus intervalos al 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="359" />
       <source>expected animals in the frame</source>
       <translation>animales esperados en el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>point station</source>
       <translation>estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>square plot</source>
       <translation>parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>circular plot</source>
       <translation>parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>line transect</source>
       <translation>transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>counting radius</source>
       <translation>radio de conteo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>side</source>
       <translation>lado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>radius</source>
       <translation>radio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>length</source>
       <translation>longitud</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
       <source>, strip half-width {w:g} m</source>
       <translation>, semianchura de franja {w:g} m</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="364" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
       <source>Density surface</source>
       <translation>Superficie de densidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="466" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="470" />
       <source>Strata</source>
       <translation>Estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
       <source>none</source>
       <translation>ninguno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
       <source>feature id</source>
       <translation>identificador de entidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>Computation CRS</source>
       <translation>SRC de cálculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
       <source>Surface cell</source>
       <translation>Celda de la superficie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
       <source>Sub-cells per cell side (for counting)</source>
       <translation>Subceldas por lado de celda (para el conteo)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
       <source>Unit</source>
       <translation>Unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
       <source>Counted area per unit (m²)</source>
       <translation>Área contada por unidad (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
       <source>Bearing</source>
       <translation>Rumbo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
       <source>random</source>
       <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>Units wholly inside their stratum</source>
       <translation>Unidades por completo dentro de su estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>yes</source>
       <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>no</source>
       <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>Counts per cell</source>
       <translation>Conteos por celda</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>negative binomial, k = {k:g}</source>
       <translation>binomial negativa, k = {k:g}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
       <source>Poisson</source>
       <translation>Poisson</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
       <source>Variance estimator (grid, balanced)</source>
       <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
       <source>local neighbourhood</source>
       <translation>vecindario local</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
       <source>simple random sampling formula</source>
       <translation>fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
       <source>Confidence level</source>
       <translation>Nivel de confianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
       <source>Seed</source>
       <translation>Semilla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="391" />
       <source>How the designs did at {n} units</source>
       <translation>Resultados de los diseños con {n} unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Design</source>
       <translation>Diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Mean units surveyed</source>
       <translation>Media de unidades muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Relative bias</source>
       <translation>Sesgo relativo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Empirical SE (animals)</source>
       <translation>Error estándar empírico (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="507" />
       <source>RMSE (animals)</source>
       <translation>RECM (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>± Monte Carlo SE</source>
       <translation>± error estándar de Monte Carlo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>RMSE / total</source>
       <translation>RECM / total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Mean estimated CV</source>
       <translation>CV estimado medio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>95 % interval coverage</source>
       <translation>Cobertura de los intervalos al 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>Surveys without an estimate</source>
       <translation>Muestreos sin estimación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="401" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="405" />
       <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
       <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="408" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
       <source>RMSE of the abundance (animals)</source>
       <translation>RECM de la abundancia (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="410" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
       <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
       <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
       <source>Recommendation</source>
       <translation>Recomendación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="418" />
       <source>No design gave estimates: see the warnings.</source>
       <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="420" />
       <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
       <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="422" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="426" />
       <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
       <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="429" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="433" />
       <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
       <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="434" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="438" />
       <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
       <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="443" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="447" />
       <source>How the simulation works</source>
       <translation>Cómo funciona la simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="444" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="448" />
       <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
       <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="453" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="457" />
       <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
       <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>Area (km²)</source>
       <translation>Área (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>Mean expected count per unit</source>
       <translation>Conteo esperado medio por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>S_h (count SD per unit)</source>
       <translation>S_h (DE del conteo por unidad)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="471" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="475" />
       <source>Units, proportional</source>
       <translation>Unidades, proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="477" />
       <source>Units, Neyman</source>
       <translation>Unidades, Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="483" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="487" />
       <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
       <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="491" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="495" />
       <source>RMSE against the number of units</source>
       <translation>RECM frente al número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
       <source>number of units</source>
       <translation>número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="499" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
       <source>RMSE of the abundance estimate against the number of units</source>
       <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="501" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="505" />
       <source>Units</source>
       <translation>Unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="509" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="513" />
       <source>{a} → {b} units: RMSE {change:+.0%}</source>
       <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="510" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="514" />
       <source>For {name}: </source>
       <translation>Para {name}: </translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="511" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="515" />
       <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
       <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
     </message>
@@ -2820,7 +2845,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
     <message>
       <location filename="../processing/algorithms/allocate.py" line="258" />
       <location filename="../processing/algorithms/base.py" line="116" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="321" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="325" />
       <location filename="../processing/algorithms/demoreserve.py" line="117" />
       <location filename="../processing/algorithms/estimate.py" line="375" />
       <location filename="../processing/algorithms/simulatecounts.py" line="113" />
@@ -2875,17 +2900,17 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwiseBridge</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="547" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="551" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="559" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="563" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="572" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="576" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>

@@ -760,7 +760,32 @@ Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclu
       <translation>Comparer des plans d'inventaire par simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="86" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>simple random</source>
+      <translation>aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>stratified proportional</source>
+      <translation>stratifié proportionnel</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>stratified Neyman</source>
+      <translation>stratifié Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>systematic grid</source>
+      <translation>grille systématique</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <source>spatially balanced</source>
+      <translation>spatialement équilibré</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/comparedesigns.py" line="90" />
       <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -793,584 +818,584 @@ Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparais
 La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="122" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="126" />
       <source>Density surface (expected animals per km²)</source>
       <translation>Surface de densité (animaux attendus par km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="124" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="365" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
       <source>Sampling frame</source>
       <translation>Base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="132" />
       <source>Strata (for the stratified designs)</source>
       <translation>Strates (pour les plans stratifiés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="133" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="137" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
       <source>Stratum field</source>
       <translation>Champ de strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="138" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="142" />
       <source>Designs to compare</source>
       <translation>Plans à comparer</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
       <source>Simple random</source>
       <translation>Aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
       <source>Stratified, proportional allocation</source>
       <translation>Stratifié, allocation proportionnelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
       <source>Stratified, Neyman allocation</source>
       <translation>Stratifié, allocation de Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
       <source>Systematic grid</source>
       <translation>Grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
       <source>Spatially balanced</source>
       <translation>Spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="146" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="150" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>Number of units</source>
       <translation>Nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="151" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="155" />
       <source>Unit shape</source>
       <translation>Forme de l'unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Point station</source>
       <translation>Station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Square plot</source>
       <translation>Placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Circular plot</source>
       <translation>Placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
       <source>Line transect</source>
       <translation>Transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="158" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="162" />
       <source>Unit size (m): counting radius, side, radius or transect length</source>
       <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="164" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="168" />
       <source>Half-width of a transect's counting strip (m)</source>
       <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="170" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="174" />
       <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
       <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="176" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="180" />
       <source>Keep units wholly inside their stratum (as the layout's option)</source>
       <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="182" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="186" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
       <source>Simulated surveys per design</source>
       <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="188" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="192" />
       <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
       <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="194" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="198" />
       <source>Variance estimator for the grid and balanced designs</source>
       <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
       <source>Simple random sampling formula</source>
       <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
       <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
       <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="201" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="205" />
       <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
       <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="207" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
       <source>Design comparison</source>
       <translation>Comparaison des plans</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="210" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="214" />
       <source>Recommended design</source>
       <translation>Plan recommandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="216" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
       <source>The density surface could not be opened.</source>
       <translation>La surface de densité n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="219" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="223" />
       <source>The sampling frame could not be opened.</source>
       <translation>La base de sondage n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="225" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="229" />
       <source>Layer '{layer}' has no polygon with an area.</source>
       <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="239" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="243" />
       <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
       <translation>La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="249" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="253" />
       <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
       <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="259" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="263" />
       <source>No strata were given: the stratified designs are left out ({names}).</source>
       <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="264" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="268" />
       <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
       <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="281" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="285" />
       <source>Reading the density surface…</source>
       <translation>Lecture de la surface de densité…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="284" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="288" />
       <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
       <translation>La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="306" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="310" />
       <source>Simulating {n} units…</source>
       <translation>Simulation avec {n} unités…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="312" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="316" />
       <source>{n} units were left out of the range: {why}</source>
       <translation>{n} unités ont été retirées de la gamme : {why}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="318" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="322" />
       <source>The output table could not be created.</source>
       <translation>La table de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="335" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="339" />
       <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
       <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="344" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="348" />
       <source>Survey designs compared by simulation</source>
       <translation>Plans d'inventaire comparés par simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="350" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="354" />
       <source>recommended design</source>
       <translation>plan recommandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="351" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
       <source>its RMSE (animals)</source>
       <translation>sa REQM (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="352" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="356" />
       <source>its RMSE relative to the total</source>
       <translation>sa REQM relative au total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="353" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
       <source>its 95 % interval coverage</source>
       <translation>couverture de ses intervalles à 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="359" />
       <source>expected animals in the frame</source>
       <translation>animaux attendus dans la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>point station</source>
       <translation>station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>square plot</source>
       <translation>placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>circular plot</source>
       <translation>placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
       <source>line transect</source>
       <translation>transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>counting radius</source>
       <translation>rayon de comptage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>side</source>
       <translation>côté</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>radius</source>
       <translation>rayon</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>length</source>
       <translation>longueur</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
       <source>, strip half-width {w:g} m</source>
       <translation>, demi-largeur de bande {w:g} m</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="364" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
       <source>Density surface</source>
       <translation>Surface de densité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="466" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="470" />
       <source>Strata</source>
       <translation>Strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
       <source>none</source>
       <translation>aucune</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
       <source>feature id</source>
       <translation>identifiant d'entité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>Computation CRS</source>
       <translation>SCR de calcul</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
       <source>Surface cell</source>
       <translation>Cellule de la surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
       <source>Sub-cells per cell side (for counting)</source>
       <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
       <source>Unit</source>
       <translation>Unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
       <source>Counted area per unit (m²)</source>
       <translation>Surface comptée par unité (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
       <source>Bearing</source>
       <translation>Azimut</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
       <source>random</source>
       <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>Units wholly inside their stratum</source>
       <translation>Unités entièrement dans leur strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>yes</source>
       <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>no</source>
       <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>Counts per cell</source>
       <translation>Comptages par cellule</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>negative binomial, k = {k:g}</source>
       <translation>binomiale négative, k = {k:g}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
       <source>Poisson</source>
       <translation>Poisson</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
       <source>Variance estimator (grid, balanced)</source>
       <translation>Estimateur de variance (grille, équilibré)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
       <source>local neighbourhood</source>
       <translation>voisinage local</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
       <source>simple random sampling formula</source>
       <translation>formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
       <source>Confidence level</source>
       <translation>Niveau de confiance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
       <source>Seed</source>
       <translation>Graine</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="391" />
       <source>How the designs did at {n} units</source>
       <translation>Résultats des plans pour {n} unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Design</source>
       <translation>Plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Mean units surveyed</source>
       <translation>Unités inventoriées en moyenne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Relative bias</source>
       <translation>Biais relatif</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>Empirical SE (animals)</source>
       <translation>Erreur type empirique (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="507" />
       <source>RMSE (animals)</source>
       <translation>REQM (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>± Monte Carlo SE</source>
       <translation>± erreur type de Monte-Carlo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>RMSE / total</source>
       <translation>REQM / total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Mean estimated CV</source>
       <translation>CV estimé moyen</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>95 % interval coverage</source>
       <translation>Couverture des intervalles à 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>Surveys without an estimate</source>
       <translation>Inventaires sans estimation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="401" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="405" />
       <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
       <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="408" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
       <source>RMSE of the abundance (animals)</source>
       <translation>REQM de l'abondance (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="410" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
       <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
       <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
       <source>Recommendation</source>
       <translation>Recommandation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="418" />
       <source>No design gave estimates: see the warnings.</source>
       <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="420" />
       <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
       <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="422" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="426" />
       <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
       <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="429" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="433" />
       <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
       <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="434" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="438" />
       <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
       <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="443" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="447" />
       <source>How the simulation works</source>
       <translation>Fonctionnement de la simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="444" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="448" />
       <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
       <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="453" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="457" />
       <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
       <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>Area (km²)</source>
       <translation>Surface (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>Mean expected count per unit</source>
       <translation>Comptage attendu moyen par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="469" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
       <source>S_h (count SD per unit)</source>
       <translation>S_h (écart-type du comptage par unité)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="471" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="475" />
       <source>Units, proportional</source>
       <translation>Unités, proportionnelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="477" />
       <source>Units, Neyman</source>
       <translation>Unités, Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="483" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="487" />
       <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
       <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="491" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="495" />
       <source>RMSE against the number of units</source>
       <translation>REQM en fonction du nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="498" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
       <source>number of units</source>
       <translation>nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="499" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
       <source>RMSE of the abundance estimate against the number of units</source>
       <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="501" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="505" />
       <source>Units</source>
       <translation>Unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="509" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="513" />
       <source>{a} → {b} units: RMSE {change:+.0%}</source>
       <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="510" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="514" />
       <source>For {name}: </source>
       <translation>Pour {name} : </translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="511" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="515" />
       <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
       <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
     </message>
@@ -2820,7 +2845,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
     <message>
       <location filename="../processing/algorithms/allocate.py" line="258" />
       <location filename="../processing/algorithms/base.py" line="116" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="321" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="325" />
       <location filename="../processing/algorithms/demoreserve.py" line="117" />
       <location filename="../processing/algorithms/estimate.py" line="375" />
       <location filename="../processing/algorithms/simulatecounts.py" line="113" />
@@ -2875,17 +2900,17 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwiseBridge</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="547" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="551" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="559" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="563" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="572" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="576" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>

@@ -1464,6 +1464,8 @@ TRANSLATIONS.update({
     "Stratum field": ("Champ de strate", "Campo de estrato"),
     "Designs to compare": ("Plans à comparer", "Diseños que comparar"),
     "Simple random": ("Aléatoire simple", "Aleatorio simple"),
+    "stratified proportional": ("stratifié proportionnel", "estratificado proporcional"),
+    "stratified Neyman": ("stratifié Neyman", "estratificado Neyman"),
     "Stratified, proportional allocation": ("Stratifié, allocation proportionnelle", "Estratificado, asignación proporcional"),
     "Spatially balanced": ("Spatialement équilibré", "Espacialmente equilibrado"),
     "Stratified, Neyman allocation": ("Stratifié, allocation de Neyman", "Estratificado, asignación de Neyman"),

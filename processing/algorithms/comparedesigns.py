@@ -82,6 +82,10 @@ class CompareDesigns(PlotwiseAlgorithm):
     def displayName(self):  # noqa: N802 (host naming)
         return self.tr("Compare survey designs by simulation")
 
+    def design_name(self, design):
+        """The name of design ``design`` (an index of ``engine.DESIGNS``) in the user's language."""
+        return self.tr(engine.DESIGNS[design])
+
     def shortHelpString(self):  # noqa: N802 (host naming)
         return self.tr(
             "Before fieldwork: which design, and how many units, give a usable estimate on this area? The "
@@ -257,7 +261,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             dropped = [d for d in designs if d in engine.STRATIFIED_DESIGNS]
             if dropped:
                 warnings.append(self.tr("No strata were given: the stratified designs are left out ({names}).").format(
-                    names=", ".join(engine.DESIGNS[d] for d in dropped)))
+                    names=", ".join(self.design_name(d) for d in dropped)))
                 designs = [d for d in designs if d not in engine.STRATIFIED_DESIGNS]
             if not designs:
                 raise QgsProcessingException(
@@ -347,7 +351,7 @@ class CompareDesigns(PlotwiseAlgorithm):
         figures = []
         if best is not None:
             figures += [
-                (tr("recommended design"), best.name),
+                (tr("recommended design"), self.design_name(best.design)),
                 (tr("its RMSE (animals)"), f"{best.rmse:,.1f}"),
                 (tr("its RMSE relative to the total"), f"{best.rel_rmse:.1%}"),
                 (tr("its 95 % interval coverage"), f"{best.coverage:.0%}"),
@@ -390,7 +394,7 @@ class CompareDesigns(PlotwiseAlgorithm):
                   tr("95 % interval coverage"), tr("Surveys without an estimate")]
         rows = []
         for p in comparison.performance:
-            name = p.name + (" ★" if p.design == comparison.recommended else "")
+            name = self.design_name(p.design) + (" ★" if p.design == comparison.recommended else "")
             rows.append([name, p.mean_n, _pct(p.rel_bias), p.emp_se, p.rmse, p.rmse_mc_se, _pct(p.rel_rmse),
                          p.mean_cv, _pct(p.coverage, 0), p.failed])
         report.table(header, rows)
@@ -402,7 +406,7 @@ class CompareDesigns(PlotwiseAlgorithm):
                 "Each figure is itself an estimate from {reps} simulated surveys: relative biases within about "
                 "±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. "
                 "More surveys per design narrow both.").format(reps=settings["replicates"], noise=noise))
-        names = [p.name for p in comparison.performance]
+        names = [self.design_name(p.design) for p in comparison.performance]
         highlight = next((i for i, p in enumerate(comparison.performance) if p.design == comparison.recommended), None)
         report.figure(
             svg.bar_chart_svg(names, [p.rmse for p in comparison.performance], tr("RMSE of the abundance (animals)"),
@@ -417,14 +421,14 @@ class CompareDesigns(PlotwiseAlgorithm):
                 "{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true "
                 "total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the "
                 "time."
-            ).format(name=best.name, rmse=best.rmse, rel=best.rel_rmse, total=best.mean_true)
+            ).format(name=self.design_name(best.design), rmse=best.rmse, rel=best.rel_rmse, total=best.mean_true)
             if comparison.near_best:
                 text += " " + tr(
                     "{others} did about as well: the differences lie within the Monte Carlo error of the simulation. "
                     "Among these, choose the one that is easiest to carry out in the field."
-                ).format(others=", ".join(engine.DESIGNS[d] for d in comparison.near_best))
+                ).format(others=", ".join(self.design_name(d) for d in comparison.near_best))
             report.paragraph(text)
-            poor = [p.name for p in comparison.performance if np.isfinite(p.coverage) and p.coverage < engine.ACCEPTABLE_COVERAGE]
+            poor = [self.design_name(p.design) for p in comparison.performance if np.isfinite(p.coverage) and p.coverage < engine.ACCEPTABLE_COVERAGE]
             if poor:
                 report.paragraph(tr(
                     "The intervals of {names} held the truth less than 90 % of the time: their stated precision would "
@@ -493,12 +497,12 @@ class CompareDesigns(PlotwiseAlgorithm):
         ns = [c.n_units for c in points]
         series = []
         for p in comparison.performance:
-            series.append((p.name, [c.by_design(p.design).rmse for c in points]))
+            series.append((self.design_name(p.design), [c.by_design(p.design).rmse for c in points]))
         report.figure(
             svg.line_chart_svg(ns, series, tr("number of units"), tr("RMSE (animals)")),
             tr("RMSE of the abundance estimate against the number of units"),
         )
-        header = [tr("Units")] + [p.name for p in comparison.performance]
+        header = [tr("Units")] + [self.design_name(p.design) for p in comparison.performance]
         rows = [[c.n_units] + [c.by_design(p.design).rmse for p in comparison.performance] for c in points]
         report.table(header, rows, caption=tr("RMSE (animals)"))
         best = comparison.recommended if comparison.recommended is not None else comparison.performance[0].design
@@ -507,7 +511,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             gains = []
             for (a, va), (b, vb) in zip(zip(ns, values), zip(ns[1:], values[1:])):
                 gains.append(tr("{a} → {b} units: RMSE {change:+.0%}").format(a=a, b=b, change=vb / va - 1 if va > 0 else 0))
-            report.paragraph(tr("For {name}: ").format(name=engine.DESIGNS[best]) + "; ".join(gains) + ".")
+            report.paragraph(tr("For {name}: ").format(name=self.design_name(best)) + "; ".join(gains) + ".")
         report.note(tr(
             "The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve "
             "flattens, more units buy little; spend the effort on better counts (detection) or a better surface "
