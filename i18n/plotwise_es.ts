@@ -2324,6 +2324,114 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
   <context>
     <name>ExampleChain</name>
     <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="40" />
+      <source>Units with counts</source>
+      <translation>Unidades con conteos</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="118" />
+      <source>Estimate by stratum</source>
+      <translation>Estimación por estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="143" />
+      <source>Estimate report</source>
+      <translation>Informe de la estimación</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="168" />
+      <source>Estimate table</source>
+      <translation>Tabla de estimaciones</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="261" />
+      <source>Animal points</source>
+      <translation>Puntos de animales</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="286" />
+      <source>Detection probability</source>
+      <translation>Probabilidad de detección</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="340" />
+      <location filename="../processing/models/plan_survey.model3" line="551" />
+      <source>Random seed (0 draws one)</source>
+      <translation>Semilla aleatoria (0 sortea una)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="355" />
+      <location filename="../processing/models/plan_survey.model3" line="200" />
+      <source>Strata</source>
+      <translation>Estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="368" />
+      <location filename="../processing/models/plan_survey.model3" line="291" />
+      <source>Sample units</source>
+      <translation>Unidades de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="40" />
+      <source>Strata with units allocated</source>
+      <translation>Estratos con unidades asignadas</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="116" />
+      <source>Sampling frame</source>
+      <translation>Marco de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="312" />
+      <source>Layout report</source>
+      <translation>Informe de la disposición</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="362" />
+      <source>Waypoints (GPX)</source>
+      <translation>Puntos de paso (GPX)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="458" />
+      <source>Covariate rasters</source>
+      <translation>Rásteres de covariables</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="487" />
+      <source>Excluded areas</source>
+      <translation>Zonas excluidas</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="512" />
+      <source>Steepest slope surveyed (degrees)</source>
+      <translation>Pendiente máxima muestreada (grados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="525" />
+      <source>Number of strata</source>
+      <translation>Número de estratos</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="538" />
+      <source>Side of the square plots (m)</source>
+      <translation>Lado de las parcelas cuadradas (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="563" />
+      <source>Slope raster (degrees)</source>
+      <translation>Ráster de pendiente (grados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="590" />
+      <source>Study area</source>
+      <translation>Área de estudio</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="601" />
+      <source>Total number of units</source>
+      <translation>Número total de unidades</translation>
+    </message>
+    <message>
       <location filename="../processing/provider.py" line="38" />
       <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
       <translation>Cadena de ejemplo: planificar un muestreo (marco, estratos, esfuerzo, disposición)</translation>
@@ -2345,7 +2453,7 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
     </message>
     <message>
       <location filename="../processing/provider.py" line="57" />
-      <location filename="../processing/provider.py" line="81" />
+      <location filename="../processing/provider.py" line="83" />
       <source>Example chains</source>
       <translation>Cadenas de ejemplo</translation>
     </message>
@@ -2976,17 +3084,17 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwiseProvider</name>
     <message>
-      <location filename="../processing/provider.py" line="95" />
+      <location filename="../processing/provider.py" line="97" />
       <source>Plotwise</source>
       <translation>Plotwise</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="98" />
+      <location filename="../processing/provider.py" line="100" />
       <source>Plotwise survey design and estimation</source>
       <translation>Plotwise: diseño de muestreos y estimación</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="119" />
+      <location filename="../processing/provider.py" line="121" />
       <source>The example model {path} could not be read.</source>
       <translation>No se pudo leer el modelo de ejemplo {path}.</translation>
     </message>

@@ -2324,6 +2324,114 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
   <context>
     <name>ExampleChain</name>
     <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="40" />
+      <source>Units with counts</source>
+      <translation>Unités avec comptages</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="118" />
+      <source>Estimate by stratum</source>
+      <translation>Estimation par strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="143" />
+      <source>Estimate report</source>
+      <translation>Rapport d'estimation</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="168" />
+      <source>Estimate table</source>
+      <translation>Table des estimations</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="261" />
+      <source>Animal points</source>
+      <translation>Points des animaux</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="286" />
+      <source>Detection probability</source>
+      <translation>Probabilité de détection</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="340" />
+      <location filename="../processing/models/plan_survey.model3" line="551" />
+      <source>Random seed (0 draws one)</source>
+      <translation>Graine aléatoire (0 en tire une)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="355" />
+      <location filename="../processing/models/plan_survey.model3" line="200" />
+      <source>Strata</source>
+      <translation>Strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/estimate_simulated_counts.model3" line="368" />
+      <location filename="../processing/models/plan_survey.model3" line="291" />
+      <source>Sample units</source>
+      <translation>Unités d'échantillonnage</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="40" />
+      <source>Strata with units allocated</source>
+      <translation>Strates avec unités allouées</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="116" />
+      <source>Sampling frame</source>
+      <translation>Base de sondage</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="312" />
+      <source>Layout report</source>
+      <translation>Rapport de disposition</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="362" />
+      <source>Waypoints (GPX)</source>
+      <translation>Points de passage (GPX)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="458" />
+      <source>Covariate rasters</source>
+      <translation>Rasters de covariables</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="487" />
+      <source>Excluded areas</source>
+      <translation>Zones exclues</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="512" />
+      <source>Steepest slope surveyed (degrees)</source>
+      <translation>Pente maximale inventoriée (degrés)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="525" />
+      <source>Number of strata</source>
+      <translation>Nombre de strates</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="538" />
+      <source>Side of the square plots (m)</source>
+      <translation>Côté des placettes carrées (m)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="563" />
+      <source>Slope raster (degrees)</source>
+      <translation>Raster de pente (degrés)</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="590" />
+      <source>Study area</source>
+      <translation>Zone d'étude</translation>
+    </message>
+    <message>
+      <location filename="../processing/models/plan_survey.model3" line="601" />
+      <source>Total number of units</source>
+      <translation>Nombre total d'unités</translation>
+    </message>
+    <message>
       <location filename="../processing/provider.py" line="38" />
       <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
       <translation>Chaîne d'exemple : planifier un inventaire (base de sondage, strates, effort, disposition)</translation>
@@ -2345,7 +2453,7 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
     </message>
     <message>
       <location filename="../processing/provider.py" line="57" />
-      <location filename="../processing/provider.py" line="81" />
+      <location filename="../processing/provider.py" line="83" />
       <source>Example chains</source>
       <translation>Chaînes d'exemple</translation>
     </message>
@@ -2976,17 +3084,17 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwiseProvider</name>
     <message>
-      <location filename="../processing/provider.py" line="95" />
+      <location filename="../processing/provider.py" line="97" />
       <source>Plotwise</source>
       <translation>Plotwise</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="98" />
+      <location filename="../processing/provider.py" line="100" />
       <source>Plotwise survey design and estimation</source>
       <translation>Plotwise : conception d'inventaires et estimation</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="119" />
+      <location filename="../processing/provider.py" line="121" />
       <source>The example model {path} could not be read.</source>
       <translation>Le modèle d'exemple {path} n'a pas pu être lu.</translation>
     </message>

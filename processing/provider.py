@@ -62,12 +62,14 @@ def _tr(context, text):
 
 
 class ExampleChain(QgsProcessingModelAlgorithm):
-    """An example .model3 chain with a translated name and help."""
+    """An example .model3 chain with a translated name, help and parameter labels."""
 
     def __init__(self, path):
         super().__init__()
         self.path = path
         self.loaded = self.fromFile(path)
+        for parameter in self.parameterDefinitions():  # labels from the .model3, extracted for the translators
+            parameter.setDescription(_tr("ExampleChain", parameter.description()))
 
     def displayName(self):  # noqa: N802
         entry = EXAMPLE_CHAINS.get(self.name())

@@ -2282,3 +2282,20 @@ TRANSLATIONS.update({
         "error estándar muestra.",
     ),
 })
+
+# -- parameter labels of the example chains (processing/models/*.model3) ------------------------
+TRANSLATIONS.update({
+    "Units with counts": ("Unités avec comptages", "Unidades con conteos"),
+    "Estimate by stratum": ("Estimation par strate", "Estimación por estrato"),
+    "Estimate report": ("Rapport d'estimation", "Informe de la estimación"),
+    "Random seed (0 draws one)": ("Graine aléatoire (0 en tire une)", "Semilla aleatoria (0 sortea una)"),
+    "Strata with units allocated": ("Strates avec unités allouées", "Estratos con unidades asignadas"),
+    "Layout report": ("Rapport de disposition", "Informe de la disposición"),
+    "Waypoints (GPX)": ("Points de passage (GPX)", "Puntos de paso (GPX)"),
+    "Covariate rasters": ("Rasters de covariables", "Rásteres de covariables"),
+    "Excluded areas": ("Zones exclues", "Zonas excluidas"),
+    "Steepest slope surveyed (degrees)": ("Pente maximale inventoriée (degrés)", "Pendiente máxima muestreada (grados)"),
+    "Number of strata": ("Nombre de strates", "Número de estratos"),
+    "Side of the square plots (m)": ("Côté des placettes carrées (m)", "Lado de las parcelas cuadradas (m)"),
+    "Slope raster (degrees)": ("Raster de pente (degrés)", "Ráster de pendiente (grados)"),
+})

@@ -13,6 +13,9 @@ Recognised calls (contexts as the running code uses them):
 - ``self._tr("text")`` / ``tr("text")`` in processing/report (context ``PlotwiseReport``), including
   module-level string constants passed by name.
 
+The parameter labels of the example chains (``processing/models/*.model3``) are extracted too,
+in context ``ExampleChain`` (the provider translates them when it loads a chain).
+
 The text may be a literal, a module-level string constant, ``"a" if c else "b"`` (both), or a
 constant of an imported package module (``tr(engine.DESIGNS[i])``: every string of the tuple,
 list or dict ``DESIGNS``; ``tr(demo_reserve.SPECIES_DESCRIPTION)``), followed through relative
@@ -31,6 +34,7 @@ REPO = Path(__file__).resolve().parents[1]
 LANGUAGES = {"fr": "fr_FR", "es": "es_ES"}
 SOURCES = ["plugin", "processing"]
 REPORT_CONTEXT = "PlotwiseReport"
+MODEL_CONTEXT = "ExampleChain"
 MARKERS = ("translate", "QT_TRANSLATE_NOOP", "translatable")
 
 
@@ -259,9 +263,30 @@ def _is_wrapper(path, line):
     return False
 
 
+def extract_model(path):
+    """Yield ("ExampleChain", label, line) for the parameter labels of a .model3 file.
+
+    ``processing.provider.ExampleChain`` shows them through ``translate("ExampleChain", label)``.
+    """
+    text = path.read_text(encoding="utf-8")
+    root = ET.fromstring(text)
+    for option in root.iter("Option"):
+        if option.get("name") != "parameterDefinitions":
+            continue
+        for parameter in option.findall("Option"):
+            for field in parameter.findall("Option"):
+                label = field.get("value")
+                if field.get("name") == "description" and label:
+                    line = text[: max(text.find(f'value="{label}"'), 0)].count("\n") + 1
+                    yield MODEL_CONTEXT, label, line
+
+
 def extract(unresolved=None):
     messages = {}
     found = []
+    for path in sorted((REPO / "processing" / "models").glob("*.model3")):
+        for ctx, text, line in extract_model(path):
+            messages.setdefault((ctx, text), []).append((path.relative_to(REPO), line))
     for folder in SOURCES:
         for path in sorted((REPO / folder).rglob("*.py")):
             if "engine" in path.relative_to(REPO).parts:

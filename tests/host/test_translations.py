@@ -120,11 +120,10 @@ def _by_id(toolbox):
 def _shown_texts(alg):
     """Every translatable text an algorithm shows in the toolbox and its dialog."""
     texts = [("displayName", alg["displayName"]), ("group", alg["group"]), ("help", alg["help"])]
-    if not alg["model"]:  # a .model3 keeps its own parameter labels
-        for p in alg["parameters"]:
-            texts.append((p["name"], p["description"]))
-            texts.extend((p["name"] + " option", o) for o in p["options"])
-        texts.extend(("output", o) for o in alg["outputs"])
+    for p in alg["parameters"]:  # example chains too: the provider translates their .model3 labels
+        texts.append((p["name"], p["description"]))
+        texts.extend((p["name"] + " option", o) for o in p["options"])
+    texts.extend(("output", o) for o in alg["outputs"])
     return texts
 
 
