@@ -337,7 +337,7 @@ class CompareDesigns(PlotwiseAlgorithm):
         if recommended:
             best = comparison.by_design(comparison.recommended)
             feedback.pushInfo(self.tr("Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; "
-                                      "coverage {cov:.0%}).").format(name=recommended, rmse=best.rmse,
+                                      "coverage {cov:.0%}).").format(name=self.design_name(best.design), rmse=best.rmse,
                                                                       rel=best.rel_rmse, cov=best.coverage))
         feedback.setProgress(100)
         return {self.OUTPUT_TABLE: dest_id, self.REPORT: report_path, self.RECOMMENDED: recommended}
