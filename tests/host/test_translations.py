@@ -52,7 +52,14 @@ LOADER = textwrap.dedent(
             "help": alg.shortHelpString(), "parameters": parameters,
             "outputs": [o.description() for o in alg.outputDefinitions()],
         }})
-    print("RESULT " + json.dumps({{"provider": provider.longName(), "algorithms": algorithms}}))
+    layout = provider.algorithm("layout")  # a report as the algorithms build it (translate hook)
+    report = layout.new_report(layout.tr("Sample-unit layout"))
+    report.field_safety()
+    report.warnings(["w"])
+    report.parameters({{layout.tr("Seed (SEED)"): 1}})
+    report.references(["r"])
+    print("RESULT " + json.dumps({{"provider": provider.longName(), "algorithms": algorithms,
+                                   "report": report.render()}}))
     sys.stdout.flush()
     os._exit(0)
     """
@@ -209,6 +216,21 @@ def test_no_english_left_in_the_toolbox(english, french, spanish, lang):
             elif text not in translations[text_en]:
                 untranslated.append((alg_id, what, text_en[:70], text[:70]))
     assert not untranslated, untranslated
+
+
+@pytest.mark.parametrize("lang", LANGUAGES)
+def test_report_headings_and_caution_in_the_host_language(english, french, spanish, lang):
+    from plotwise.processing.report import FIELD_SAFETY_CAUTION
+    from plotwise.processing.report.html import escape
+
+    html = {"fr": french, "es": spanish}[lang]["report"]
+    translations = _translations(lang)
+    for source in ("Sample-unit layout", "Field safety", FIELD_SAFETY_CAUTION, "Warnings", "Method references",
+                   "Inputs and parameters", "Item", "Value", "Seed (SEED)"):
+        assert escape(source) in english["report"], source
+        (translated,) = translations[source]
+        assert escape(translated) in html, (lang, source)
+        assert escape(source) not in html, (lang, source)
 
 
 def test_field_safety_caution_is_translated():
