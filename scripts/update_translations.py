@@ -16,7 +16,8 @@ Recognised calls (contexts as the running code uses them):
 The parameter labels of the example chains (``processing/models/*.model3``) are extracted too,
 in context ``ExampleChain`` (the provider translates them when it loads a chain).
 
-The text may be a literal, a module-level string constant, ``"a" if c else "b"`` (both), or a
+The text may be a literal, a module-level string constant, ``"a" if c else "b"`` (both), a loop
+variable over literal strings (``[self.tr(o) for o in ("A", "B")]``), or a
 constant of an imported package module (``tr(engine.DESIGNS[i])``: every string of the tuple,
 list or dict ``DESIGNS``; ``tr(demo_reserve.SPECIES_DESCRIPTION)``), followed through relative
 imports. A call whose text cannot be resolved is listed on stderr as "unresolved": make it a literal.
@@ -115,6 +116,13 @@ def _literal_strings(node):
 INDEX = ModuleIndex()
 
 
+def _relative(path):
+    try:
+        return path.relative_to(REPO)
+    except ValueError:
+        return path
+
+
 def _module_tr_context(tree):
     """Context of a module-level ``def tr(text)`` / ``def _tr(text)`` wrapping ``translate``."""
     for node in tree.body:
@@ -181,7 +189,12 @@ def extract_file(path, unresolved=None):
                 return [constants[node.id]]
             if node.id in module_containers:
                 return _literal_strings(module_containers[node.id]) or None
-            return None
+            return loop_strings.get(node.id)
+        if isinstance(node, (ast.Tuple, ast.List)):
+            return _literal_strings(node) or None
+        if isinstance(node, ast.BinOp) and isinstance(node.op, ast.Add):  # "a" + "b"
+            left, right = texts(node.left), texts(node.right)
+            return [x + y for x in left for y in right] if left and right and len(left) == len(right) == 1 else None
         if isinstance(node, ast.IfExp):
             body, orelse = texts(node.body), texts(node.orelse)
             return body + orelse if body is not None and orelse is not None else None
@@ -190,6 +203,14 @@ def extract_file(path, unresolved=None):
         if isinstance(node, ast.Attribute) and isinstance(node.value, ast.Name) and node.value.id in modules:
             return INDEX.strings(modules[node.value.id], node.attr) or None
         return None
+
+    # loop variables over known strings: [self.tr(o) for o in ("A", "B")], for label in LABELS: tr(label)
+    loop_strings = {}
+    for node in ast.walk(tree):
+        if isinstance(node, (ast.For, ast.comprehension)) and isinstance(node.target, ast.Name):
+            values = texts(node.iter)
+            if values:
+                loop_strings.setdefault(node.target.id, []).extend(values)
 
     def context_of(node):
         if isinstance(node, ast.Constant) and isinstance(node.value, str):
@@ -203,7 +224,7 @@ def extract_file(path, unresolved=None):
         if values is None:
             marked_elsewhere = isinstance(call.func, ast.Name) and call.func.id in context_wrappers
             if unresolved is not None and not marked_elsewhere:  # _tr(ctx, entry[0]): marked by translatable()
-                unresolved.append((path.relative_to(REPO), call.lineno, ast.unparse(call)[:100]))
+                unresolved.append((_relative(path), call.lineno, ast.unparse(call)[:100]))
             return
         for value in values:
             if value:
@@ -234,7 +255,7 @@ def extract_file(path, unresolved=None):
             if ctx and len(args) == 1:
                 yield from emit(ctx, args[0], call)
             elif unresolved is not None:
-                unresolved.append((path.relative_to(REPO), call.lineno, ast.unparse(call)[:100]))
+                unresolved.append((_relative(path), call.lineno, ast.unparse(call)[:100]))
         elif attr == "tr" and isinstance(func, ast.Attribute) and args:
             if isinstance(func.value, ast.Name) and func.value.id in ("self", "cls") or class_name:
                 ctx = context_of(args[1]) if len(args) > 1 else class_name

@@ -142,6 +142,41 @@ def test_every_extracted_string_has_a_translation():
     assert "unresolved" not in run.stderr, run.stderr  # every tr() argument is a literal the extractor sees
 
 
+def test_extractor_sees_the_patterns_the_code_uses(tmp_path):
+    """Contexts as ``PlotwiseAlgorithm.tr`` (class name), aliases, loops and conditionals are found;
+    an f-string inside tr() is reported, since no translation could ever match it."""
+    sys.path.insert(0, str(REPO / "scripts"))
+    try:
+        import update_translations as extractor
+    finally:
+        sys.path.remove(str(REPO / "scripts"))
+    source = tmp_path / "sample.py"
+    source.write_text(textwrap.dedent(
+        """
+        LABELS = ("Alpha", "Beta")
+        HEADING = "Heading"
+
+        class Sample:
+            def name(self):
+                return self.tr("Shown name")
+
+            def options(self):
+                return [self.tr(o) for o in ("One", "Two")] + [self.tr(x, "Shared") for x in LABELS]
+
+            def report(self, flag, n):
+                tr = self.tr
+                bad = self.tr(f"{n} items")
+                return tr("Yes" if flag else "No"), tr(HEADING), tr("Long " "joined"), bad
+        """
+    ))
+    unresolved = []
+    found = {(ctx, text) for ctx, text, _ in extractor.extract_file(source, unresolved)}
+    assert found == {("Sample", "Shown name"), ("Sample", "One"), ("Sample", "Two"), ("Shared", "Alpha"),
+                     ("Shared", "Beta"), ("Sample", "Yes"), ("Sample", "No"), ("Sample", "Heading"),
+                     ("Sample", "Long joined")}
+    assert [u[1] for u in unresolved] == [14]  # the f-string
+
+
 # -- (d) placeholders survive translation --------------------------------------------------
 @pytest.mark.parametrize("lang", LANGUAGES)
 def test_placeholders_match_the_source(lang):
