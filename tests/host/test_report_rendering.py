@@ -3,11 +3,11 @@
 How it is checked, and why this way:
 
 * **Reports come from real runs.** A small invented chain runs through the host's
-  Processing framework (demo reserve → frame; strata → allocation → layout → simulated
-  counts → estimate). Every provider algorithm with a ``REPORT`` output must be in the chain.
+  Processing framework (demo reserve → frame → stratification → design comparison;
+  invented strata → allocation → layout → simulated counts → estimate). Every provider algorithm with a ``REPORT`` output must be in the chain.
 * **No external request, two ways.**
-  1. A static scan of the written HTML and of the DOM as Chromium parsed it
-     (``--dump-dom``): no script, link, iframe, object, embed or base element, and every
+  1. A static scan of the written HTML and of the DOM as Chromium parsed it (read from
+     the measuring frames below): no script, link, iframe, object, embed or base element, and every
      ``src``/``href``/``xlink:href``/``srcset``/``action``/``poster``/``data`` attribute and
      every CSS ``url(...)`` or ``@import`` points inside the document (``#fragment`` or
      ``data:``).
@@ -19,13 +19,18 @@ How it is checked, and why this way:
      page with an external image proves that such a request is seen.
 * **Nothing overflows its width at 1,024 px.** Nothing is injected into a report. A
   wrapper page (the test's own, with a measuring script) holds each report unchanged in an
-  ``<iframe srcdoc>`` exactly 1,024 px wide; ``srcdoc`` frames share the wrapper's origin, so
-  the script can read their layout. For every element it checks that the right edge lies
+  ``<iframe srcdoc>`` exactly 1,024 px wide, sandboxed without scripts; ``srcdoc`` frames
+  share the wrapper's origin (``allow-same-origin``), so the script can read their layout. For every element it checks that the right edge lies
   within the frame's width, and that no element with clipped or scrolled overflow (such as
   the horizontal scroller around a wide table) is wider inside than its box. The document's
   ``scrollWidth`` must equal its ``clientWidth``. The result is written into the wrapper's DOM
   and read with ``--dump-dom``. A canary frame with a 1,200 px wide block proves the
   measurement sees an overflow.
+* **Hostile strings.** A layer name and stratum values holding ``<script>``, an ``<img>``
+  with an event handler, quotes and ``&`` go through a real run of every reporting
+  algorithm; the written HTML holds them escaped, and in Chromium's DOM they created no
+  element and no handler and read as the plain text given (a canary page without escaping
+  proves the inspection sees the difference).
 * **PNG at 1,024 px.** Each report is screenshotted at 1,024 px wide and its full
   measured height; the PNG must have that width and must not be blank.
 
@@ -98,7 +103,7 @@ def page_requests(net_log):
 
 
 MEASURE = """
-function measure(doc, width) {
+function check(doc, width) {
   var problems = [], all = doc.querySelectorAll('*');
   for (var i = 0; i < all.length; i++) {
     var el = all[i], box = el.getBoundingClientRect(), name = el.tagName.toLowerCase() +
@@ -110,35 +115,61 @@ function measure(doc, width) {
     if (problems.length > 12) break;
   }
   var root = doc.documentElement;
-  return {clientWidth: root.clientWidth, scrollWidth: root.scrollWidth, height: root.scrollHeight, problems: problems};
+  return {clientWidth: root.clientWidth, scrollWidth: root.scrollWidth, height: root.scrollHeight, problems: problems,
+          dom: root.outerHTML};
 }
-window.addEventListener('load', function () {
-  var out = {}, frames = document.querySelectorAll('iframe');
-  for (var i = 0; i < frames.length; i++) out[frames[i].id] = measure(frames[i].contentDocument, WIDTH);
-  document.getElementById('result').textContent = JSON.stringify(out);
-});
+"""
+
+# Elements a hostile string could have turned into, event-handler attributes, and the text as read.
+INSPECT = """
+function check(doc, strings) {
+  var elements = doc.querySelectorAll('script,img,iframe,object,embed,link,b,svg script').length, handlers = 0;
+  var all = doc.querySelectorAll('*');
+  for (var i = 0; i < all.length; i++)
+    for (var j = 0; j < all[i].attributes.length; j++)
+      if (all[i].attributes[j].name.indexOf('on') === 0) handlers++;
+  var text = doc.body.textContent.replace(/\\s+/g, ' ');
+  return {elements: elements, handlers: handlers, found: strings.map(function (s) { return text.indexOf(s) >= 0; })};
+}
 """
 
 
-def measure_reports(tmp_path, documents):
-    """``{name: measurement}`` for each HTML text in ``documents`` rendered in a 1,024 px frame."""
+def run_in_frames(folder, documents, check_source, argument, stem):
+    """``{name: check(document, argument)}``: each HTML text in ``documents`` in its own 1,024 px
+    ``<iframe srcdoc>`` of one wrapper page, ``check`` (JavaScript) run on load, read with
+    ``--dump-dom``; also returns the page's network requests. The frames are sandboxed without
+    scripts (``allow-same-origin`` only, so the wrapper can read them): a script that escaped
+    into a report could not run, or block Chromium with a dialog."""
     frames = "".join(
-        f'<iframe id="{html.escape(name)}" srcdoc="{html.escape(text, quote=True)}"></iframe>'
+        f'<iframe id="{html.escape(name)}" sandbox="allow-same-origin" srcdoc="{html.escape(text, quote=True)}"></iframe>'
         for name, text in documents.items()
     )
-    wrapper = tmp_path / "measure.html"
+    runner = (
+        "window.addEventListener('load', function () {"
+        " var out = {}, frames = document.querySelectorAll('iframe');"
+        " for (var i = 0; i < frames.length; i++) out[frames[i].id] = check(frames[i].contentDocument, ARGUMENT);"
+        " document.getElementById('result').textContent = JSON.stringify(out); });"
+    )
+    argument_js = json.dumps(argument).replace("<", "\\u003c")
+    wrapper = folder / f"{stem}.html"
     wrapper.write_text(
         '<!DOCTYPE html><html><head><meta charset="utf-8"><style>body{margin:0}'
         f"iframe{{display:block;border:0;width:{WIDTH}px;height:800px}}</style></head><body>"
-        f'<pre id="result"></pre>{frames}<script>var WIDTH = {WIDTH};{MEASURE}</script></body></html>',
+        f'<pre id="result"></pre>{frames}<script>var ARGUMENT = {argument_js};{check_source}{runner}</script>'
+        "</body></html>",
         encoding="utf-8",
     )
-    net_log = tmp_path / "measure-net.json"
-    dom = chromium(tmp_path, f"--window-size={WIDTH + 80},900", "--virtual-time-budget=10000", "--dump-dom",
+    net_log = folder / f"{stem}-net.json"
+    dom = chromium(folder, f"--window-size={WIDTH + 80},900", "--virtual-time-budget=10000", "--dump-dom",
                    wrapper.as_uri(), net_log=net_log)
     found = re.search(r'<pre id="result">(.*?)</pre>', dom, re.S)
-    assert found and found.group(1), "the measuring script did not run"
+    assert found and found.group(1), "the checking script did not run"
     return json.loads(html.unescape(found.group(1))), page_requests(net_log)
+
+
+def measure_reports(folder, documents):
+    """``{name: measurement}`` for each HTML text in ``documents`` rendered in a 1,024 px frame."""
+    return run_in_frames(folder, documents, MEASURE, WIDTH, "measure")
 
 
 # -- static scan ---------------------------------------------------------------------
@@ -235,8 +266,12 @@ def output_layer(value):
     return QgsProcessingUtils.mapLayerFromString(value, QgsProcessingContext())
 
 
-def run_chain(folder, demo_reserve_outputs, strata=None, study_name="study area", units_name=None):
-    """Run every reporting algorithm on small inputs; return ``{algorithm id: report path}``."""
+def run_chain(folder, demo_reserve_outputs, strata=None, name=None):
+    """Run every reporting algorithm on small inputs; return ``{algorithm id: report path}``.
+
+    ``strata``: the strata layer for allocation, layout and estimate (default: three
+    invented rectangles); ``name``: a name given to every input layer of the chain.
+    """
     import processing
     from qgis.core import QgsVectorLayer
 
@@ -245,13 +280,32 @@ def run_chain(folder, demo_reserve_outputs, strata=None, study_name="study area"
     def report(name):
         return str(folder / f"{name}.html")
 
-    study = QgsVectorLayer(demo_reserve_outputs["OUTPUT_AREA"], study_name, "ogr")
+    study = QgsVectorLayer(demo_reserve_outputs["OUTPUT_AREA"], name or "study area", "ogr")
     excluded = QgsVectorLayer(demo_reserve_outputs["OUTPUT_EXCLUDED"], "excluded", "ogr")
     frame = processing.run("plotwise:buildframe", {
         "INPUT": study, "EXCLUDE": excluded, "EDGE_BUFFER": 50.0, "OUTPUT": "memory:",
         "REPORT": report("buildframe"),
     })
     reports["plotwise:buildframe"] = frame["REPORT"]
+    frame_layer = output_layer(frame["OUTPUT"])
+    if name:
+        frame_layer.setName(name)
+
+    strata_from_rasters = processing.run("plotwise:stratify", {
+        "FRAME": frame_layer,
+        "COVARIATES": [demo_reserve_outputs["OUTPUT_GREENNESS"], demo_reserve_outputs["OUTPUT_ELEVATION"]],
+        "METHOD": 0, "STRATA": 3, "MIN_AREA": 0.0, "SEED": 5,
+        "OUTPUT_RASTER": str(folder / "strata.tif"), "OUTPUT": "memory:", "REPORT": report("stratify"),
+    })
+    reports["plotwise:stratify"] = strata_from_rasters["REPORT"]
+
+    compared = processing.run("plotwise:comparedesigns", {
+        "SURFACE": demo_reserve_outputs["OUTPUT_INTENSITY"], "FRAME": frame_layer,
+        "STRATA": output_layer(strata_from_rasters["OUTPUT"]), "STRATUM_FIELD": "stratum",
+        "DESIGNS": [0, 1, 2, 3, 4], "N_UNITS": 15, "SHAPE": 1, "SIZE": 200.0, "REPLICATES": 20,
+        "N_RANGE": "10, 30", "SEED": 9, "OUTPUT_TABLE": "memory:", "REPORT": report("comparedesigns"),
+    })
+    reports["plotwise:comparedesigns"] = compared["REPORT"]
 
     allocated = processing.run("plotwise:allocate", {
         "STRATA": strata or strata_layer(), "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha",
@@ -272,8 +326,8 @@ def run_chain(folder, demo_reserve_outputs, strata=None, study_name="study area"
         "UNITS": output_layer(layout["OUTPUT"]), "ANIMALS": animals_layer(), "DETECTION": 1.0, "SEED": 5,
         "OUTPUT": "memory:",
     })["OUTPUT"])
-    if units_name:
-        counted.setName(units_name)
+    if name:
+        counted.setName(name)
     estimate = processing.run("plotwise:estimate", {
         "UNITS": counted, "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum", "UNIT_AREA_FIELD": "area_m2",
         "STRATA": output_layer(allocated["OUTPUT"]), "STRATA_ID_FIELD": "stratum", "AREA_UNIT": 1,
@@ -322,6 +376,13 @@ def test_reports_reference_nothing_outside_the_document(chain_reports):
     for alg, path in chain_reports.items():
         markup = Path(path).read_text(encoding="utf-8")
         assert scan(markup).problems == [], alg
+
+
+def test_the_dom_as_chromium_parsed_it_references_nothing_outside(rendered, chain_reports):
+    for alg in chain_reports:
+        dom = rendered["measured"][alg.split(":")[1]]["dom"]
+        assert "<main" in dom, alg
+        assert scan(dom).problems == [], alg
 
 
 def test_the_static_scan_sees_external_references():
@@ -374,27 +435,33 @@ def test_png_at_1024_px_is_not_blank(rendered):
 
 def test_hostile_names_and_values_come_out_escaped(plotwise_provider, demo_reserve_outputs, tmp_path):
     labels = [HOSTILE_VALUE, "two & three", "<b>4</b>"]
-    reports = run_chain(tmp_path, demo_reserve_outputs, strata=strata_layer(HOSTILE_NAME, labels),
-                        study_name=HOSTILE_NAME, units_name=HOSTILE_NAME)
+    reports = run_chain(tmp_path, demo_reserve_outputs, strata=strata_layer(HOSTILE_NAME, labels), name=HOSTILE_NAME)
     escaped_name = html.escape(HOSTILE_NAME, quote=True)
     escaped_value = html.escape(HOSTILE_VALUE, quote=True)
     expected = {  # where each hostile string must appear (as text)
         "plotwise:buildframe": [HOSTILE_NAME],
+        "plotwise:stratify": [HOSTILE_NAME],
+        "plotwise:comparedesigns": [HOSTILE_NAME],
         "plotwise:allocate": [HOSTILE_NAME, HOSTILE_VALUE],
         "plotwise:layout": [HOSTILE_VALUE],
         "plotwise:estimate": [HOSTILE_NAME, HOSTILE_VALUE],
     }
+    documents = {}
     for alg, strings in expected.items():
         markup = Path(reports[alg]).read_text(encoding="utf-8")
+        documents[alg.split(":")[1]] = markup
         assert "<script" not in markup and "<img" not in markup and "<b>4</b>" not in markup, alg
         for raw in strings:
             assert raw not in markup, alg
         assert (escaped_name in markup) == (HOSTILE_NAME in strings), alg
         assert (escaped_value in markup) == (HOSTILE_VALUE in strings), alg
-        # as Chromium parses it: no element came out of the strings, and they read as plain text
-        dom = chromium(tmp_path, "--dump-dom", Path(reports[alg]).as_uri())
-        parsed = scan(dom)
-        assert parsed.problems == [], (alg, parsed.problems)
-        text = " ".join(" ".join(parsed.text).split())
-        for raw in strings:
-            assert " ".join(raw.split()) in text, (alg, raw)
+    # as Chromium parses them: no element or handler came out of the strings, which read as plain text
+    raw = [" ".join(HOSTILE_NAME.split()), " ".join(HOSTILE_VALUE.split())]
+    documents["canary-unescaped"] = f"<!DOCTYPE html><html><body><p>{HOSTILE_NAME} {HOSTILE_VALUE}</p></body></html>"
+    inspected, _ = run_in_frames(tmp_path, documents, INSPECT, raw, "inspect")
+    canary = inspected["canary-unescaped"]
+    assert canary["elements"] >= 2 and canary["handlers"] >= 1  # the inspection sees what escaping prevents
+    for alg, strings in expected.items():
+        result = inspected[alg.split(":")[1]]
+        assert result["elements"] == 0 and result["handlers"] == 0, (alg, result)
+        assert result["found"] == [HOSTILE_NAME in strings, HOSTILE_VALUE in strings], (alg, result)
