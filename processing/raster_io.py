@@ -20,7 +20,7 @@ import shutil
 import tempfile
 
 import numpy as np
-from osgeo import gdal, ogr, osr
+from osgeo import gdal, gdal_array, ogr, osr
 
 from .engine import stratification as strat
 from .engine.errors import Cancelled, InputError
@@ -29,8 +29,9 @@ gdal.UseExceptions()
 ogr.UseExceptions()
 osr.UseExceptions()
 
-#: cells per block: 1 Mi cells (8 MB per float64 covariate), small enough for the temporaries to stay in cache
-BLOCK_CELLS = 1 << 20
+#: cells per block: 256 Ki cells (one 512 x 512 tile; 2 MB per float64 covariate), small enough for the
+#: temporaries to stay in the processor's cache
+BLOCK_CELLS = 1 << 18
 #: rasters up to this many cells keep the frame mask in memory
 MEM_MASK_CELLS = 1 << 25
 
@@ -114,14 +115,18 @@ class _WindowReader:
         self.band = ds.GetRasterBand(band)
         self.col_off, self.row_off = col_off, row_off
         self.nodata = self.band.GetNoDataValue()
+        self.dtype = np.dtype(gdal_array.GDALTypeCodeToNumericTypeCode(self.band.DataType))
 
-    def read(self, xoff, yoff, xsize, ysize):
+    def read(self, xoff, yoff, xsize, ysize, ring=None):
         c0, r0 = xoff + self.col_off, yoff + self.row_off
         W, H = self.band.XSize, self.band.YSize
         a0, b0 = max(c0, 0), max(r0, 0)
         a1, b1 = min(c0 + xsize, W), min(r0 + ysize, H)
         if (a0, b0, a1, b1) == (c0, r0, c0 + xsize, r0 + ysize):
-            return self.band.ReadAsArray(c0, r0, xsize, ysize)
+            if ring is None:
+                return self.band.ReadAsArray(c0, r0, xsize, ysize)
+            buf = ring.get(id(self), (ysize, xsize), self.dtype)
+            return self.band.ReadAsArray(c0, r0, xsize, ysize, buf_obj=buf)
         out = np.full((ysize, xsize), np.nan)
         if a1 > a0 and b1 > b0:
             part = self.band.ReadAsArray(a0, b0, a1 - a0, b1 - b0).astype(np.float64)
@@ -129,6 +134,28 @@ class _WindowReader:
                 part[part == self.nodata] = np.nan
             out[b0 - r0:b1 - r0, a0 - c0:a1 - c0] = part
         return out
+
+
+class _BufferRing:
+    """A few reusable read buffers per (reader, shape): the blocks in flight never exceed ``size``.
+
+    Fresh arrays for every block cost page faults; a ring of buffers, reused in
+    turn, avoids them. ``size`` must exceed the blocks a consumer holds at once
+    (:func:`~.engine.stratification.map_blocks` holds at most its workers + 2).
+    """
+
+    def __init__(self, size):
+        self.size = size
+        self._buffers = {}
+
+    def get(self, key, shape, dtype):
+        k = (key, shape, np.dtype(dtype).str)
+        entry = self._buffers.get(k)
+        if entry is None:
+            entry = self._buffers[k] = [[np.empty(shape, dtype) for _ in range(self.size)], 0]
+        buffers, i = entry
+        entry[1] = (i + 1) % self.size
+        return buffers[i]
 
 
 class CovariateStack:
@@ -287,16 +314,18 @@ class CovariateStack:
 
     def blocks(self, strata_band=None):
         """Iterator of :class:`~.engine.stratification.CellBlock`."""
+        ring = _BufferRing(max(strat.WORKERS, 1) + 3)
         for win in self.windows():
             xo, yo, xs, ys = win
-            frame = self._mask_band.ReadAsArray(xo, yo, xs, ys).view(bool)  # burnt 0/1
+            mask = self._mask_band.ReadAsArray(xo, yo, xs, ys, buf_obj=ring.get("frame", (ys, xs), np.uint8))
+            frame = mask.view(bool)  # burnt 0/1
             if not frame.any():
                 empty = np.broadcast_to(np.zeros(1, np.float32), (ys, xs))
                 vals = (empty,) * len(self._readers)
                 yield strat.CellBlock(win, vals, frame, frame, None if strata_band is None else
                                       np.zeros((ys, xs), np.uint8))
                 continue
-            vals = tuple(r.read(xo, yo, xs, ys) for r in self._readers)
+            vals = tuple(r.read(xo, yo, xs, ys, ring) for r in self._readers)
             strata = None if strata_band is None else strata_band.ReadAsArray(xo, yo, xs, ys)
             yield strat.CellBlock(win, vals, frame, None, strata, self.nodata)  # validity: worked out by the worker
 

@@ -32,6 +32,7 @@ from concurrent.futures import ThreadPoolExecutor
 from dataclasses import dataclass, field, replace
 import math
 import os
+import threading
 
 import numpy as np
 
@@ -208,8 +209,13 @@ def _work_dtype(dtype):
     return np.float32 if np.dtype(dtype) in (np.float32, np.int8, np.uint8, np.int16, np.uint16) else np.float64
 
 
+def _valid_values(block, covariate):
+    """The covariate's valid cells (boolean indexing: numpy's fastest gather for this)."""
+    return block.values[covariate][block.valid]
+
+
 def _column(block, covariate):
-    v = block.values[covariate][block.valid]
+    v = _valid_values(block, covariate)
     return v.astype(_work_dtype(v.dtype), copy=False)
 
 
@@ -303,20 +309,46 @@ class Histogram:
         return Histogram(self.lo, self.hi, self.counts.reshape(classes, -1).sum(axis=1), self.minimum, self.maximum)
 
 
-def histogram_class_index(v, lo, hi, bins):
+_SCRATCH = threading.local()
+
+
+def _scratch(name, n, dtype):
+    """A reusable work array of ``n`` items for this thread (valid until the next call with ``name``).
+
+    Fresh large temporaries cost page faults on every block; reusing a few per
+    thread keeps the passes close to memory speed.
+    """
+    pool = getattr(_SCRATCH, "pool", None)
+    if pool is None:
+        pool = _SCRATCH.pool = {}
+    key = (name, np.dtype(dtype).str)
+    buf = pool.get(key)
+    if buf is None or buf.size < n:
+        buf = pool[key] = np.empty(max(n, 1), dtype)
+    return buf[:n]
+
+
+def histogram_class_index(v, lo, hi, bins, reuse=False):
     """Class index of each value, ``floor((v - lo) * bins / (hi - lo))`` clipped to [0, bins-1].
 
     The arithmetic runs in ``v``'s dtype. Rounded subtraction and multiplication
     by a positive constant are monotone, so the index never decreases as ``v``
     grows; the exact quantile search relies on that, not on exact class edges.
+    With ``reuse`` the result lives in this thread's scratch space: use it
+    before the next call.
     """
     dt = v.dtype
     scale = dt.type(bins / (hi - lo)) if hi > lo else dt.type(0)
-    t = np.subtract(v, dt.type(lo))
+    t = _scratch("class-float", v.size, dt) if reuse else np.empty(v.size, dt)
+    np.subtract(v, dt.type(lo), out=t)
     t *= scale
     np.minimum(t, dt.type(bins - 1), out=t)
     np.maximum(t, dt.type(0), out=t)
-    return t.astype(np.intp)
+    if not reuse:
+        return t.astype(np.intp)
+    out = _scratch("class-index", v.size, np.intp)
+    np.copyto(out, t, casting="unsafe")  # truncation, as astype
+    return out
 
 
 def streamed_histogram(source, bins, value_range=None, covariate=0, progress=None):
@@ -339,7 +371,8 @@ def streamed_histogram(source, bins, value_range=None, covariate=0, progress=Non
         v = _column(block, covariate)
         if not v.size:
             return None
-        return np.bincount(histogram_class_index(v, lo, hi, bins), minlength=bins), float(v.min()), float(v.max())
+        counts = np.bincount(histogram_class_index(v, lo, hi, bins, reuse=True), minlength=bins)
+        return counts, float(v.min()), float(v.max())
 
     counts = np.zeros(bins, np.int64)
     vmin, vmax = math.inf, -math.inf
@@ -368,7 +401,7 @@ def _numpy_lerp(a, b, t):
 
 
 def exact_quantiles(source, probabilities, value_range=None, covariate=0, bins=FINE_BINS,
-                    cap=SELECTION_CAP, progress=None, histogram=None):
+                    cap=None, progress=None, histogram=None):
     """Exact sample quantiles of a covariate over the valid cells, in bounded memory.
 
     The result equals ``numpy.quantile(cells, probabilities)`` (linear rule,
@@ -395,6 +428,7 @@ def exact_quantiles(source, probabilities, value_range=None, covariate=0, bins=F
         The pass-1 frequency table (reused for the distinct-value check).
     """
     p = np.asarray(probabilities, float)
+    cap = SELECTION_CAP if cap is None else int(cap)
     if histogram is None:
         histogram = streamed_histogram(source, bins, value_range, covariate, scaled_progress(progress, 0, 0.5))
     n = histogram.total
@@ -440,7 +474,7 @@ def _order_statistics(source, ranks, histogram, covariate, cap, progress):
             out = []
             if not v.size:
                 return out
-            i0 = histogram_class_index(v, histogram.lo, histogram.hi, bins)
+            i0 = histogram_class_index(v, histogram.lo, histogram.hi, bins, reuse=True)
             keep = level0[i0]
             v, i0 = v[keep], i0[keep]
             for t in tasks:
@@ -867,7 +901,7 @@ def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
     ncov = len(block.values)
     c0 = np.zeros(ncov) if shift is None else np.asarray(shift, float)
     nf = int(np.count_nonzero(block.in_frame))
-    cols = [v[block.valid] for v in block.values]
+    cols = [_valid_values(block, c) for c in range(ncov)]
     n = cols[0].size
     empty = (nf, None, None, None, None, None, None)
     full = None
@@ -881,7 +915,8 @@ def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
         # threshold strata are nested upper sets {x >= b_j}: sums over them by masked
         # reductions, then differences (cheaper than bincount on long runs of equal ids)
         v = cols[rule.covariate].astype(_work_dtype(cols[rule.covariate].dtype), copy=False)
-        upper = [v >= exact_threshold(b, v.dtype) for b in rule.boundaries]
+        upper = [np.greater_equal(v, exact_threshold(b, v.dtype), out=_scratch(f"upper{j}", n, bool))
+                 for j, b in enumerate(rule.boundaries)]
         ids = np.ones(n, np.uint8)
         for m in upper:
             ids += m
@@ -891,9 +926,10 @@ def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
         n_ge = np.array([n] + [np.count_nonzero(m) for m in upper] + [0])
         count[1:] = n_ge[:-1] - n_ge[1:]
         for c in range(ncov):
-            x = cols[c].astype(np.float64)
-            x -= c0[c]
-            x2 = x * x
+            x = _scratch("x", n, np.float64)
+            np.subtract(cols[c], c0[c], out=x, dtype=np.float64)
+            x2 = _scratch("x2", n, np.float64)
+            np.multiply(x, x, out=x2)
             a = np.array([x.sum()] + [np.sum(x, where=m) for m in upper] + [0.0])
             b = np.array([x2.sum()] + [np.sum(x2, where=m) for m in upper] + [0.0])
             s1[c, 1:] = a[:-1] - a[1:]

@@ -258,3 +258,4 @@ def test_results_do_not_depend_on_the_worker_threads(monkeypatch, method):
         np.testing.assert_array_equal(out, runs[0][0])  # bit for bit: sums are taken in reading order
         np.testing.assert_array_equal(r.statistics.mean, runs[0][1].statistics.mean)
         np.testing.assert_array_equal(r.statistics.sd, runs[0][1].statistics.sd)
+
