@@ -245,3 +245,21 @@ def test_aligned_covariate_covering_part_of_the_grid(tmp_path):
     ids = _read(str(tmp_path / "st.tif"))
     np.testing.assert_array_equal(ids > 0, _window(valid, r.grid))
     assert any("%" in w for w in r.warnings)
+
+
+def test_worker_threads_give_the_same_rasters(tmp_path, monkeypatch):
+    elev = _elevation()
+    p_tiled = str(tmp_path / "tiled.tif")
+    gdal.Translate(p_tiled, _write(tmp_path / "e.tif", elev, nodata=-9999),
+                   creationOptions=["TILED=YES", "BLOCKXSIZE=32", "BLOCKYSIZE=32"])
+    outs = []
+    for workers in (0, 2):
+        monkeypatch.setattr(s, "WORKERS", workers)
+        for method in (s.QUANTILE, s.KMEANS):
+            path = str(tmp_path / f"w{workers}_{method}.tif")
+            r = rio.stratify_rasters([rio.Covariate(p_tiled, "e")], [FRAME.wkb], UTM33, method, 4, path,
+                                     rng=np.random.default_rng(8), block_cells=2048)
+            outs.append((_read(path), r.result.statistics.mean))
+    for (a, ma), (b, mb) in zip(outs[:2], outs[2:]):
+        np.testing.assert_array_equal(a, b)
+        np.testing.assert_array_equal(ma, mb)
