@@ -336,6 +336,8 @@ STYLES = {
     "strata_raster": raster_classes,
 }
 
+STYLE_PROPERTY = "plotwise/style"  # custom layer property: the name of the style applied (saved in projects)
+
 _RASTER_STYLES = {"terrain", "elevation", "greenness", "intensity", "strata_raster"}
 
 
@@ -356,6 +358,7 @@ def apply_style(layer, style_name, **options):
     elif not isinstance(layer, QgsVectorLayer) or not layer.isSpatial():
         return False
     STYLES[style_name](layer, **options)
+    layer.setCustomProperty(STYLE_PROPERTY, style_name)
     return True
 
 

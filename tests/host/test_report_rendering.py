@@ -259,21 +259,26 @@ def animals_layer(seed=7, n=900):
 
 
 def output_layer(value):
+    """An output of a run: a layer object, the id of a layer loaded into the project, or a source."""
     if not isinstance(value, str):
         return value
-    from qgis.core import QgsProcessingContext, QgsProcessingUtils
+    from qgis.core import QgsProcessingContext, QgsProcessingUtils, QgsProject
 
-    return QgsProcessingUtils.mapLayerFromString(value, QgsProcessingContext())
+    loaded = QgsProject.instance().mapLayer(value)
+    return loaded if loaded is not None else QgsProcessingUtils.mapLayerFromString(value, QgsProcessingContext())
 
 
-def run_chain(folder, demo_reserve_outputs, strata=None, name=None):
+def run_chain(folder, demo_reserve_outputs, strata=None, name=None, run=None):
     """Run every reporting algorithm on small inputs; return ``{algorithm id: report path}``.
 
     ``strata``: the strata layer for allocation, layout and estimate (default: three
-    invented rectangles); ``name``: a name given to every input layer of the chain.
+    invented rectangles); ``name``: a name given to every input layer of the chain; ``run``:
+    how to run an algorithm (default ``processing.run``).
     """
     import processing
     from qgis.core import QgsVectorLayer
+
+    run = run or processing.run
 
     reports = {"plotwise:demoreserve": demo_reserve_outputs["REPORT"]}
 
@@ -282,7 +287,7 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None):
 
     study = QgsVectorLayer(demo_reserve_outputs["OUTPUT_AREA"], name or "study area", "ogr")
     excluded = QgsVectorLayer(demo_reserve_outputs["OUTPUT_EXCLUDED"], "excluded", "ogr")
-    frame = processing.run("plotwise:buildframe", {
+    frame = run("plotwise:buildframe", {
         "INPUT": study, "EXCLUDE": excluded, "EDGE_BUFFER": 50.0, "OUTPUT": "memory:",
         "REPORT": report("buildframe"),
     })
@@ -291,7 +296,7 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None):
     if name:
         frame_layer.setName(name)
 
-    strata_from_rasters = processing.run("plotwise:stratify", {
+    strata_from_rasters = run("plotwise:stratify", {
         "FRAME": frame_layer,
         "COVARIATES": [demo_reserve_outputs["OUTPUT_GREENNESS"], demo_reserve_outputs["OUTPUT_ELEVATION"]],
         "METHOD": 0, "STRATA": 3, "MIN_AREA": 0.0, "SEED": 5,
@@ -299,7 +304,7 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None):
     })
     reports["plotwise:stratify"] = strata_from_rasters["REPORT"]
 
-    compared = processing.run("plotwise:comparedesigns", {
+    compared = run("plotwise:comparedesigns", {
         "SURFACE": demo_reserve_outputs["OUTPUT_INTENSITY"], "FRAME": frame_layer,
         "STRATA": output_layer(strata_from_rasters["OUTPUT"]), "STRATUM_FIELD": "stratum",
         "DESIGNS": [0, 1, 2, 3, 4], "N_UNITS": 15, "SHAPE": 1, "SIZE": 200.0, "REPLICATES": 20,
@@ -307,14 +312,14 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None):
     })
     reports["plotwise:comparedesigns"] = compared["REPORT"]
 
-    allocated = processing.run("plotwise:allocate", {
+    allocated = run("plotwise:allocate", {
         "STRATA": strata or strata_layer(), "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha",
         "METHOD": 2, "TOTAL": 24, "UNIT_AREA": 10000.0, "MIN_PER_STRATUM": 3,
         "OUTPUT": "memory:", "REPORT": report("allocate"),
     })
     reports["plotwise:allocate"] = allocated["REPORT"]
 
-    layout = processing.run("plotwise:layout", {
+    layout = run("plotwise:layout", {
         "FRAME": output_layer(allocated["OUTPUT"]), "STRATUM_FIELD": "stratum", "N_FIELD": "n_alloc",
         "N_UNITS": 0, "DESIGN": 2, "SHAPE": 2, "SIZE": 56.5, "BEARING": -1.0, "INSIDE": True,
         "MIN_SPACING": 50.0, "RESERVE": 2, "SEED": 123, "OUTPUT": "memory:",
@@ -322,13 +327,13 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None):
     })
     reports["plotwise:layout"] = layout["REPORT"]
 
-    counted = output_layer(processing.run("plotwise:simulatecounts", {
+    counted = output_layer(run("plotwise:simulatecounts", {
         "UNITS": output_layer(layout["OUTPUT"]), "ANIMALS": animals_layer(), "DETECTION": 1.0, "SEED": 5,
         "OUTPUT": "memory:",
     })["OUTPUT"])
     if name:
         counted.setName(name)
-    estimate = processing.run("plotwise:estimate", {
+    estimate = run("plotwise:estimate", {
         "UNITS": counted, "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum", "UNIT_AREA_FIELD": "area_m2",
         "STRATA": output_layer(allocated["OUTPUT"]), "STRATA_ID_FIELD": "stratum", "AREA_UNIT": 1,
         "TARGET_CV": 0.2, "SEED": 3, "OUTPUT": "memory:", "OUTPUT_TABLE": "memory:",

@@ -245,3 +245,24 @@ def test_toolbox_run_loads_the_demo_reserve_styled(plotwise_provider, tmp_path):
         assert greenness[-1].color.name() == styles.GREENNESS_RAMP[-1]
     finally:
         project.removeAllMapLayers()
+
+
+def test_every_spatial_output_loads_styled(plotwise_provider, demo_reserve_outputs, tmp_path):
+    """Each algorithm of the chain run the toolbox's way: every map layer it loads is ours."""
+    import processing
+    from qgis.core import QgsProject, QgsRasterLayer
+    from test_report_rendering import run_chain  # the same small invented chain
+
+    project = QgsProject.instance()
+    project.removeAllMapLayers()
+    try:
+        run_chain(tmp_path, demo_reserve_outputs, run=lambda alg, parameters: processing.runAndLoadResults(alg, parameters))
+        spatial = [layer for layer in project.mapLayers().values()
+                   if isinstance(layer, QgsRasterLayer) or layer.isSpatial()]
+        applied = {layer.name(): layer.customProperty(styles.STYLE_PROPERTY) for layer in spatial}
+        assert all(applied.values()), applied
+        # frame (buildframe), strata and their raster (stratify), strata (allocate), units (layout,
+        # simulatecounts), estimate (estimate); comparedesigns writes a table only
+        assert sorted(applied.values()) == ["estimate", "frame", "strata", "strata", "strata_raster", "units", "units"]
+    finally:
+        project.removeAllMapLayers()
