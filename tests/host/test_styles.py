@@ -266,3 +266,29 @@ def test_every_spatial_output_loads_styled(plotwise_provider, demo_reserve_outpu
         assert sorted(applied.values()) == ["estimate", "frame", "strata", "strata", "strata_raster", "units", "units"]
     finally:
         project.removeAllMapLayers()
+
+
+def test_outputs_of_a_model_load_styled(plotwise_provider, demo_reserve_outputs, tmp_path):
+    """The example chain (processing/models) run the toolbox's way: its final outputs are styled too."""
+    import processing
+    from qgis.core import QgsProject
+
+    layout = processing.run("plotwise:layout", {
+        "FRAME": demo_reserve_outputs["OUTPUT_AREA"], "N_UNITS": 20, "DESIGN": 0, "SHAPE": 1, "SIZE": 400.0,
+        "BEARING": 0.0, "SEED": 8, "OUTPUT": str(tmp_path / "units.gpkg"),
+    })
+    project = QgsProject.instance()
+    project.removeAllMapLayers()
+    try:
+        processing.runAndLoadResults("plotwise:estimate_simulated_counts", {
+            "units": layout["OUTPUT"], "animals": demo_reserve_outputs["OUTPUT_ANIMALS"],
+            "strata": demo_reserve_outputs["OUTPUT_AREA"], "detection": 1.0, "seed": 9,
+            "estimate:Estimate table": str(tmp_path / "table.gpkg"),
+            "estimate:Estimate report": str(tmp_path / "estimate.html"),
+            "counts:Units with counts": "TEMPORARY_OUTPUT", "estimate:Estimate by stratum": "TEMPORARY_OUTPUT",
+        })
+        applied = {layer.name(): layer.customProperty(styles.STYLE_PROPERTY) for layer in project.mapLayers().values()
+                   if layer.isSpatial()}
+        assert sorted(applied.values()) == ["estimate", "units"], applied
+    finally:
+        project.removeAllMapLayers()
