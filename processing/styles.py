@@ -16,8 +16,10 @@ Two ways in:
   ``PlotwiseAlgorithm.style_output(context, dest_id, style_name)``.
 """
 from qgis.core import (
+    QgsBasicNumericFormat,
     QgsCategorizedSymbolRenderer,
     QgsClassificationQuantile,
+    QgsColorRampLegendNodeSettings,
     QgsColorRampShader,
     QgsFillSymbol,
     QgsGradientColorRamp,
@@ -290,13 +292,20 @@ def estimate(layer, area_unit="km²", field="dens", classes=DENSITY_CLASSES):
 
 
 # -- rasters ---------------------------------------------------------------------------
-def pseudocolour(layer, colours=DENSITY_RAMP, band=1, classes=8):
-    """A continuous colour ramp over the band's minimum to maximum."""
+def pseudocolour(layer, colours=DENSITY_RAMP, band=1, classes=8, decimals=1, suffix=""):
+    """A continuous colour ramp over the band's minimum to maximum; legend numbers with ``decimals``."""
     provider = layer.dataProvider()
     stats = provider.bandStatistics(band)
     ramp = colour_ramp(colours)
     function = QgsColorRampShader(stats.minimumValue, stats.maximumValue, ramp)
     function.classifyColorRamp(classes, band, layer.extent(), provider)
+    legend = QgsColorRampLegendNodeSettings()
+    number_format = QgsBasicNumericFormat()
+    number_format.setNumberDecimalPlaces(decimals)
+    number_format.setShowTrailingZeros(False)
+    legend.setNumericFormat(number_format)
+    legend.setSuffix(suffix)
+    function.setLegendSettings(legend)
     shader = QgsRasterShader()
     shader.setRasterShaderFunction(function)
     renderer = QgsSingleBandPseudoColorRenderer(provider, band, shader)
@@ -329,10 +338,10 @@ STYLES = {
     "units": units,
     "estimate": estimate,
     # rasters
-    "terrain": lambda layer: pseudocolour(layer, ELEVATION_RAMP),
-    "elevation": lambda layer: pseudocolour(layer, ELEVATION_RAMP),
-    "greenness": lambda layer: pseudocolour(layer, GREENNESS_RAMP),
-    "intensity": lambda layer: pseudocolour(layer, DENSITY_RAMP),
+    "terrain": lambda layer: pseudocolour(layer, ELEVATION_RAMP, decimals=0),
+    "elevation": lambda layer: pseudocolour(layer, ELEVATION_RAMP, decimals=0, suffix=" m"),
+    "greenness": lambda layer: pseudocolour(layer, GREENNESS_RAMP, decimals=2),
+    "intensity": lambda layer: pseudocolour(layer, DENSITY_RAMP, decimals=0, suffix=_tr(" per km²")),
     "strata_raster": raster_classes,
 }
 

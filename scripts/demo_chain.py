@@ -546,7 +546,8 @@ def add_print_layout(project, title, map_layers, table_layer=None, table_columns
         if layer.title():
             node.setUseLayerName(False)
             node.setName(layer.title())
-    legend.setStyleFont(QgsLegendStyle.Title, _text_format(11, bold=True).font())
+    title_style = _layout_enum(lambda: QgsLegendStyle.Style.Title, lambda: QgsLegendStyle.Title)
+    legend.setStyleFont(title_style, _text_format(11, bold=True).font())
     legend.setSymbolWidth(6)
     legend.setSymbolHeight(4)
     legend.setWrapString("¶")
@@ -623,7 +624,7 @@ def export_pdf(layout, path):
     settings.textRenderFormat = _layout_enum(lambda: Qgis.TextRenderFormat.AlwaysText,
                                              lambda: QgsRenderContext.TextFormatAlwaysText)
     result = QgsLayoutExporter(layout).exportToPdf(str(path), settings)
-    if result != QgsLayoutExporter.Success:
+    if result != _layout_enum(lambda: QgsLayoutExporter.ExportResult.Success, lambda: QgsLayoutExporter.Success):
         raise RuntimeError(f"the print layout could not be exported to {path} (code {result})")
     return path
 
