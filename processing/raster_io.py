@@ -312,10 +312,12 @@ class CovariateStack:
         """``(xoff, yoff, xsize, ysize)`` of each block, in reading order."""
         return iter(self._windows)
 
-    def blocks(self, strata_band=None):
-        """Iterator of :class:`~.engine.stratification.CellBlock`."""
+    def blocks(self, strata_band=None, keep=None):
+        """Iterator of :class:`~.engine.stratification.CellBlock` (only those with ``keep`` True, if given)."""
         ring = _BufferRing(max(strat.WORKERS, 1) + 3)
-        for win in self.windows():
+        for i, win in enumerate(self.windows()):
+            if keep is not None and not keep[i]:
+                continue
             xo, yo, xs, ys = win
             mask = self._mask_band.ReadAsArray(xo, yo, xs, ys, buf_obj=ring.get("frame", (ys, xs), np.uint8))
             frame = mask.view(bool)  # burnt 0/1
@@ -392,12 +394,15 @@ class _StackSource:
         self.n_blocks = stack.n_blocks
 
     def blocks(self):
+        return self.blocks_where(None)
+
+    def blocks_where(self, keep):
         if self.strata_path is None:
-            yield from self.stack.blocks()
+            yield from self.stack.blocks(keep=keep)
             return
         ds = gdal.Open(self.strata_path)
         try:
-            yield from self.stack.blocks(ds.GetRasterBand(1))
+            yield from self.stack.blocks(ds.GetRasterBand(1), keep=keep)
         finally:
             ds = None
 

@@ -130,8 +130,14 @@ class ArrayCellSource:
         return ArrayCellSource(self.values, self.in_frame, self.nodata, self.block_rows, strata)
 
     def blocks(self):
+        return self.blocks_where(None)
+
+    def blocks_where(self, keep):
+        """The blocks whose ``keep`` entry is True (all when ``keep`` is None)."""
         rows, cols = self.shape
-        for y0 in range(0, rows, self.block_rows):
+        for i, y0 in enumerate(range(0, rows, self.block_rows)):
+            if keep is not None and not keep[i]:
+                continue
             y1 = min(rows, y0 + self.block_rows)
             vals = tuple(v[y0:y1] for v in self.values)
             frame = self.in_frame[y0:y1]
@@ -167,7 +173,16 @@ def _tick(progress, i, n):
 WORKERS = 0 if (os.cpu_count() or 1) <= 2 else 2
 
 
-def map_blocks(source, work, progress=None, workers=None):
+def _kept_blocks(source, keep):
+    """The source's blocks, leaving out those with ``keep`` False (unread when the source can skip)."""
+    if keep is None:
+        return source.blocks()
+    if hasattr(source, "blocks_where"):
+        return source.blocks_where(keep)
+    return (b for b, k in zip(source.blocks(), keep) if k)
+
+
+def map_blocks(source, work, progress=None, workers=None, keep=None):
     """``work(block)`` for every block of ``source``, yielded in reading order.
 
     The blocks are read in the calling thread (a GDAL dataset must not be shared
@@ -176,12 +191,13 @@ def map_blocks(source, work, progress=None, workers=None):
     in flight, so memory stays bounded. Results come back in reading order, so
     every total is summed in the same order as in a serial run: the results do
     not depend on the number of workers. ``progress`` is ticked per block and a
-    cancel raises :class:`Cancelled`.
+    cancel raises :class:`Cancelled`. ``keep`` (one bool per block) leaves
+    blocks out; sources with a ``blocks_where(keep)`` method do not even read them.
     """
     workers = WORKERS if workers is None else int(workers)
-    n = source.n_blocks
+    n = source.n_blocks if keep is None else int(np.count_nonzero(keep))
     if workers <= 0:
-        for i, block in enumerate(source.blocks()):
+        for i, block in enumerate(_kept_blocks(source, keep)):
             yield work(block)
             _tick(progress, i, n)
         return
@@ -189,7 +205,7 @@ def map_blocks(source, work, progress=None, workers=None):
     done = 0
     with ThreadPoolExecutor(workers) as pool:
         try:
-            for block in source.blocks():
+            for block in _kept_blocks(source, keep):
                 pending.append(pool.submit(work, block))
                 if len(pending) > workers:
                     yield pending.popleft().result()
@@ -286,6 +302,9 @@ class Histogram:
 
     Values below ``lo`` count in the first class and values above ``hi`` in the
     last, so the classes hold every cell. ``minimum``/``maximum`` are exact.
+    ``block_ranges`` holds, per block of the pass, the class indexes of the
+    block's smallest and largest value ((-1, -1) for a block without cells):
+    a later pass that needs only some classes can skip the other blocks.
     """
 
     lo: float
@@ -293,6 +312,7 @@ class Histogram:
     counts: np.ndarray
     minimum: float
     maximum: float
+    block_ranges: np.ndarray = None
 
     @property
     def edges(self):
@@ -372,15 +392,20 @@ def streamed_histogram(source, bins, value_range=None, covariate=0, progress=Non
         if not v.size:
             return None
         counts = np.bincount(histogram_class_index(v, lo, hi, bins, reuse=True), minlength=bins)
-        return counts, float(v.min()), float(v.max())
+        ends = np.array([v.min(), v.max()], v.dtype)
+        return counts, float(ends[0]), float(ends[1]), histogram_class_index(ends, lo, hi, bins)
 
     counts = np.zeros(bins, np.int64)
     vmin, vmax = math.inf, -math.inf
+    ranges = []
     for part in map_blocks(source, work, progress):
-        if part is not None:
-            counts += part[0]
-            vmin, vmax = min(vmin, part[1]), max(vmax, part[2])
-    return Histogram(lo, hi, counts, vmin, vmax)
+        if part is None:
+            ranges.append((-1, -1))
+            continue
+        counts += part[0]
+        vmin, vmax = min(vmin, part[1]), max(vmax, part[2])
+        ranges.append(tuple(part[3]))
+    return Histogram(lo, hi, counts, vmin, vmax, np.array(ranges, np.int64).reshape(-1, 2))
 
 
 class _OneCovariate:
@@ -467,6 +492,7 @@ def _order_statistics(source, ranks, histogram, covariate, cap, progress):
             t["values"], t["hist"], t["min"], t["max"] = [], np.zeros(FINE_BINS, np.int64), math.inf, -math.inf
         level0 = np.zeros(bins, bool)
         level0[[t["chain"][0][3] for t in tasks]] = True
+        keep = _blocks_holding(histogram.block_ranges, np.flatnonzero(level0), source.n_blocks)
 
         def work(block, tasks=tasks, level0=level0):
             """Per task: the block's member cells (or their sub-histogram), their min and max."""
@@ -491,7 +517,7 @@ def _order_statistics(source, ranks, histogram, covariate, cap, progress):
                     out.append((sub, float(m.min()), float(m.max())))
             return out
 
-        for parts in map_blocks(source, work, progress):
+        for parts in map_blocks(source, work, progress, keep=keep):
             for t, part in zip(tasks, parts):
                 if part is None:
                     continue
@@ -522,6 +548,20 @@ def _order_statistics(source, ranks, histogram, covariate, cap, progress):
         tasks = nxt
         level += 1
     return [result[int(r)] for r in ranks]
+
+
+def _blocks_holding(block_ranges, classes, n_blocks):
+    """Which blocks can hold cells of the given classes (None: all, when ranges are unknown).
+
+    Class indexes never decrease with the value, so a block whose smallest and
+    largest values fall in classes a and b holds no cell outside [a, b].
+    """
+    if block_ranges is None or len(block_ranges) != n_blocks:
+        return None
+    classes = np.sort(np.asarray(classes))
+    lo, hi = block_ranges[:, 0], block_ranges[:, 1]
+    inside = np.searchsorted(classes, hi, side="right") - np.searchsorted(classes, lo, side="left")
+    return (inside > 0) & (lo >= 0)
 
 
 def _class_range(lo, hi, bins, cls, vmin, vmax):

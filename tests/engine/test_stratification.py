@@ -259,3 +259,23 @@ def test_results_do_not_depend_on_the_worker_threads(monkeypatch, method):
         np.testing.assert_array_equal(r.statistics.mean, runs[0][1].statistics.mean)
         np.testing.assert_array_equal(r.statistics.sd, runs[0][1].statistics.sd)
 
+
+
+def test_selection_reads_only_blocks_that_can_hold_the_quantiles():
+    # a covariate rising row by row: each quantile's class lies in one or two strips of rows
+    rows = np.repeat(np.arange(400.0), 50).reshape(400, 50) + np.tile(np.linspace(0, 0.9, 50), (400, 1))
+
+    class Counting(s.ArrayCellSource):
+        read = 0
+
+        def blocks_where(self, keep):
+            for b in super().blocks_where(keep):
+                Counting.read += 1
+                yield b
+
+    src = Counting([rows], block_rows=10)
+    hist = s.streamed_histogram(src, s.FINE_BINS)
+    before = Counting.read
+    q, _ = s.exact_quantiles(src, [0.25, 0.5, 0.75], histogram=hist)
+    np.testing.assert_allclose(q, np.quantile(rows.ravel(), [0.25, 0.5, 0.75]), rtol=0, atol=1e-12)  # numpy
+    assert Counting.read - before <= 6  # of 40 blocks
