@@ -341,7 +341,7 @@ STYLES = {
     "terrain": lambda layer: pseudocolour(layer, ELEVATION_RAMP, decimals=0),
     "elevation": lambda layer: pseudocolour(layer, ELEVATION_RAMP, decimals=0, suffix=" m"),
     "greenness": lambda layer: pseudocolour(layer, GREENNESS_RAMP, decimals=2),
-    "intensity": lambda layer: pseudocolour(layer, DENSITY_RAMP, decimals=0, suffix=_tr(" per km²")),
+    "intensity": lambda layer: pseudocolour(layer, DENSITY_RAMP, decimals=0, suffix=" " + _tr("per {unit}").format(unit="km²")),
     "strata_raster": raster_classes,
 }
 
