@@ -169,8 +169,9 @@ def _tick(progress, i, n):
 
 
 #: threads that work on blocks while the calling thread reads the next ones (0: all in the calling thread).
-#: With two cores or fewer the threads would only compete with the reader and the host, so none are used.
-WORKERS = 0 if (os.cpu_count() or 1) <= 2 else 2
+#: With two cores or fewer the threads would only compete with the reader and the host, so none are used;
+#: the environment variable PLOTWISE_WORKERS overrides the choice.
+WORKERS = int(os.environ.get("PLOTWISE_WORKERS", 0 if (os.cpu_count() or 1) <= 2 else 2))
 
 
 def _kept_blocks(source, keep):

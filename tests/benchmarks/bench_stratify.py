@@ -13,6 +13,9 @@ Run on demand: ``.venv/bin/python tests/benchmarks/bench_stratify.py [--size N] 
   given our boundaries) as a printed ratio.
 * Peak memory includes GDAL's block cache (GDAL_CACHEMAX, by default 5 % of the RAM), which
   the bare pass fills as much as ours.
+* On a shared machine each side's fastest of alternated runs is kept (``--repeats``).
+  ``PLOTWISE_WORKERS=2`` lets the engine work on blocks in two threads (the default above
+  two cores).
 """
 import argparse
 import json
