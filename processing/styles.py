@@ -16,11 +16,13 @@ Two ways in:
   ``PlotwiseAlgorithm.style_output(context, dest_id, style_name)``.
 """
 from qgis.core import (
+    Qgis,
     QgsBasicNumericFormat,
     QgsCategorizedSymbolRenderer,
     QgsClassificationQuantile,
     QgsColorRampLegendNodeSettings,
     QgsColorRampShader,
+    QgsFeatureRequest,
     QgsFillSymbol,
     QgsGradientColorRamp,
     QgsGradientStop,
@@ -60,6 +62,12 @@ ELEVATION_RAMP = ("#f6f3ec", "#d8cfc0", "#ab9d86", "#7a6b57", "#4b4036")
 GREENNESS_RAMP = ("#f5efd9", "#d7e2b4", "#a3c68a", "#5c9e6e", "#2f6a44")
 
 DENSITY_CLASSES = 5
+
+
+try:  # Qgis.FeatureRequestFlag from 3.36 on
+    _NO_GEOMETRY = Qgis.FeatureRequestFlag.NoGeometry
+except AttributeError:
+    _NO_GEOMETRY = QgsFeatureRequest.NoGeometry
 
 
 def _tr(text):
@@ -115,8 +123,11 @@ def _labels_for(layer, field, label_field):
     """``{value: label}`` from the first feature of each value (strata carry a readable ``label``)."""
     if layer.fields().lookupField(label_field) < 0:
         return {}
+    request = QgsFeatureRequest()
+    request.setFlags(_NO_GEOMETRY)
+    request.setSubsetOfAttributes([field, label_field], layer.fields())
     labels = {}
-    for feature in layer.getFeatures():
+    for feature in layer.getFeatures(request):
         value, label = feature[field], feature[label_field]
         if value not in labels and label not in (None, "") and str(label) != "NULL":
             labels[value] = str(label)
