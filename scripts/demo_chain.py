@@ -629,6 +629,26 @@ def export_pdf(layout, path):
     return path
 
 
+def show_in_canvas(project, map_layers):
+    """The project opens on the print map: ``map_layers`` shown in their order (first on top),
+    every other layer kept below them (points, lines, polygons, rasters) and switched off."""
+    from qgis.core import QgsRasterLayer
+
+    def rank(layer):
+        if isinstance(layer, QgsRasterLayer):
+            return 9
+        return {0: 1, 1: 2, 2: 3}.get(int(layer.geometryType()), 4)
+
+    others = sorted((layer for layer in project.mapLayers().values() if layer not in map_layers), key=rank)
+    root = project.layerTreeRoot()
+    root.setHasCustomLayerOrder(True)
+    root.setCustomLayerOrder(list(map_layers) + others)
+    for layer in project.mapLayers().values():
+        node = root.findLayer(layer.id())
+        if node is not None:
+            node.setItemVisibilityChecked(layer in map_layers)
+
+
 def write_print_layout(demo, project_path):
     """The demo's A4 print layout, saved in the project and exported to PDF (issue 7)."""
     from qgis.core import QgsProject, QgsVectorLayer
@@ -662,6 +682,7 @@ def write_print_layout(demo, project_path):
         table = first("Strata with units allocated", "Strata", "Units with counts", "Sample units")
     layout = add_print_layout(project, project.title(), map_layers, table, columns,
                               note="invented demo data, not a real reserve")
+    show_in_canvas(project, map_layers)
     project.write(str(project_path))
     pdf = export_pdf(layout, demo.out / "plotwise-demo-map.pdf")
     return pdf
