@@ -156,3 +156,58 @@ def check_read_back(project, layout):
     layers = {layer.name(): layer for layer in project.mapLayers().values()}
     symbol = layers["Excluded areas"].renderer().symbol().symbolLayer(0).properties()
     assert symbol["style"] == "b_diagonal"
+
+
+def test_demo_print_layout_with_the_estimate_table(demo_reserve_outputs, tmp_path):
+    """The demo's own step (write_print_layout) on the reserve layers and a small estimate table."""
+    from types import SimpleNamespace
+
+    from osgeo import ogr
+    from qgis.core import QgsProject, QgsVectorLayer
+
+    from plotwise.processing import styles
+
+    # an estimate table with the pinned fields (invented numbers), as plotwise:estimate writes it
+    gpkg = tmp_path / "demo.gpkg"
+    source = ogr.GetDriverByName("GPKG").CreateDataSource(str(gpkg))
+    table = source.CreateLayer("estimate_table", geom_type=ogr.wkbNone)
+    names = ["stratum", "area", "n", "mean_c", "sd_c", "dens", "dens_se", "dens_lo", "dens_hi", "abund", "abund_se",
+             "abund_lo", "abund_hi", "cv", "df", "n_next"]
+    for name in names:
+        table.CreateField(ogr.FieldDefn(name, ogr.OFTString if name == "stratum" else ogr.OFTReal))
+    for row in (["1", 40.0, 10, 1.2, 0.9, 7.5, 1.1, 5.2, 9.8, 300.0, 44.0, 208.0, 392.0, 0.147, 9.0, 12],
+                ["all", 40.0, 10, 1.2, 0.9, 7.5, 1.1, 5.2, 9.8, 300.0, 44.0, 208.0, 392.0, 0.147, 9.0, None]):
+        feature = ogr.Feature(table.GetLayerDefn())
+        for name, value in zip(names, row):
+            if value is not None:
+                feature.SetField(name, value)
+        table.CreateFeature(feature)
+    source = None
+
+    chain = demo_chain()
+    project = QgsProject.instance()
+    project.clear()
+    project.setTitle(TITLE)
+    try:
+        for name, key, style in (("Reserve boundary", "OUTPUT_AREA", "outline"),
+                                 ("Excluded areas", "OUTPUT_EXCLUDED", "excluded"),
+                                 ("Simulated velmar", "OUTPUT_ANIMALS", "animals")):
+            layer = QgsVectorLayer(demo_reserve_outputs[key], name, "ogr")
+            styles.apply_style(layer, style)
+            project.addMapLayer(layer)
+        project.setCrs(layer.crs())
+        demo = SimpleNamespace(out=tmp_path, layer_uri=lambda name: f"{gpkg}|layername={name}")
+        pdf = chain.write_print_layout(demo, tmp_path / "demo.qgz")
+        text = subprocess.run(["pdftotext", "-layout", str(pdf), "-"], capture_output=True, text=True, check=True).stdout
+        words = " ".join(unicodedata.normalize("NFKC", text).split())
+        # NFKC also turns "km²" into "km2"
+        for expected in ("Density per km2", "Units next time", "all", "7.50", "208", "392", "0.147", "Reserve boundary"):
+            assert expected in words, expected
+        assert "NULL" not in words  # a missing value prints as a dash
+        root = project.layerTreeRoot()
+        shown = {node.name(): node.isVisible() for node in root.findLayers()}
+        assert shown["Reserve boundary"] and shown["Excluded areas"] and not shown["Simulated velmar"]
+        assert root.customLayerOrder()[0].name() == "Excluded areas"  # print layers first, on top
+    finally:
+        project.layoutManager().clear()
+        project.clear()
