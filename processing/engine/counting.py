@@ -10,7 +10,7 @@ from dataclasses import dataclass
 import numpy as np
 
 from .errors import Cancelled, InputError
-from .geometry_types import contains_xy
+from .geometry import contains_xy
 
 
 @dataclass(frozen=True)

@@ -29,7 +29,8 @@ from shapely import affinity
 from shapely.geometry import Polygon, box
 
 from .errors import Cancelled, InputError
-from .geometry_types import contains_xy, polygonal_part
+from .geometry import contains_xy
+from .geometry_types import polygonal_part
 
 RESERVE_NAME = "Hollin Ridge Reserve"
 SPECIES_NAME = "velmar"

@@ -21,16 +21,12 @@ Every function here is pure shapely/numpy and works with shapely 1.8 and 2.0.
 from dataclasses import dataclass, field
 
 import numpy as np
-from shapely.geometry import GeometryCollection, MultiPolygon, Polygon
+from shapely.geometry import MultiPolygon, Polygon
 from shapely.geometry.base import BaseGeometry
 from shapely.ops import unary_union
 
 from .errors import Cancelled, InputError
-
-try:  # shapely >= 1.8 built against GEOS >= 3.8
-    from shapely.validation import make_valid as _make_valid
-except ImportError:  # pragma: no cover - depends on the host's GEOS
-    _make_valid = None
+from .geometry_types import polygonal_part, valid_polygonal
 
 #: Order in which the rules are applied, with the words used in messages.
 RULES = (
@@ -134,47 +130,6 @@ class SamplingFrame:
         return 0.0
 
 
-def polygonal_part(geometry):
-    """The polygonal part of ``geometry`` as a Polygon or MultiPolygon.
-
-    Points and lines (which a repair may leave behind) are dropped. Returns an
-    empty Polygon when nothing polygonal remains.
-    """
-    if geometry is None or geometry.is_empty:
-        return Polygon()
-    if isinstance(geometry, (Polygon, MultiPolygon)):
-        return geometry
-    if isinstance(geometry, GeometryCollection) or hasattr(geometry, "geoms"):
-        parts = []
-        for part in geometry.geoms:
-            sub = polygonal_part(part)
-            if not sub.is_empty:
-                parts.extend(sub.geoms if isinstance(sub, MultiPolygon) else [sub])
-        if not parts:
-            return Polygon()
-        return parts[0] if len(parts) == 1 else MultiPolygon(parts)
-    return Polygon()
-
-
-def repair_geometry(geometry):
-    """Return a valid polygonal version of ``geometry``.
-
-    Uses GEOS ``MakeValid`` (``shapely.validation.make_valid``) where the
-    installed shapely offers it, which keeps every piece of a self-crossing
-    ring. Otherwise falls back on the zero-width buffer ``buffer(0)``, the
-    classic repair, which may drop the inverted lobes of a bow-tie.
-    """
-    if geometry is None or geometry.is_empty:
-        return Polygon()
-    if geometry.is_valid:
-        return polygonal_part(geometry)
-    if _make_valid is not None:
-        repaired = polygonal_part(_make_valid(geometry))
-        if repaired.is_valid:
-            return repaired
-    return polygonal_part(geometry.buffer(0))
-
-
 def clean_polygons(geometries, ids=None):
     """Repair invalid geometries and drop empty or zero-area ones.
 
@@ -200,7 +155,7 @@ def clean_polygons(geometries, ids=None):
             skipped.append(fid)
             continue
         was_valid = geom.is_valid
-        geom = polygonal_part(geom) if was_valid else repair_geometry(geom)
+        geom = polygonal_part(geom) if was_valid else valid_polygonal(geom)
         if geom.is_empty or not geom.area > 0.0:
             skipped.append(fid)
             continue
@@ -220,7 +175,7 @@ def dissolve(geometries):
         return Polygon()
     merged = unary_union(geometries)
     if not merged.is_valid:  # overlay output is valid; this is a safety net
-        merged = repair_geometry(merged)
+        merged = valid_polygonal(merged)
     return polygonal_part(merged)
 
 
@@ -302,7 +257,7 @@ def build_frame(study_area, exclusions=None, mask=None, edge_buffer=0.0, progres
             raise InputError(_emptied_message(rule, before, edge_buffer, study))
     _check_cancel(progress, 1.0)
     if not frame.is_valid:
-        frame = repair_geometry(frame)
+        frame = valid_polygonal(frame)
     return SamplingFrame(
         geometry=frame,
         study_area_m2=study_m2,

@@ -48,14 +48,9 @@ from scipy.spatial import Delaunay
 from shapely.geometry import MultiPolygon, Polygon
 from shapely.geometry.base import BaseGeometry
 
-from .geometry_types import polygonal_part
+from .geometry_types import polygonal_part, valid_polygonal
 
 SHAPELY_2 = int(shapely.__version__.split(".")[0]) >= 2
-
-try:  # shapely >= 1.8 built against GEOS >= 3.8
-    from shapely.validation import make_valid as _make_valid
-except ImportError:  # pragma: no cover - depends on the host's GEOS
-    _make_valid = None
 
 if not SHAPELY_2:  # pragma: no cover - exercised in the shapely 1.8 venv
     import shapely.vectorized as _vectorized
@@ -98,6 +93,8 @@ def polygons_of(geometry):
     if geometry is None or geometry.is_empty:
         return []
     geometry = polygonal_part(geometry)
+    if geometry.is_empty:
+        return []
     if isinstance(geometry, Polygon):
         return [geometry]
     if isinstance(geometry, MultiPolygon):
@@ -131,10 +128,7 @@ class Repaired:
 
 
 def repair_polygonal(geometry):
-    """Make ``geometry`` valid and keep its polygonal part.
-
-    ``make_valid`` (GEOS >= 3.8) keeps every area of the input; where it is not
-    available, ``buffer(0)`` is used.
+    """Make ``geometry`` valid and keep its polygonal part (see ``geometry_types.valid_polygonal``).
 
     Returns
     -------
@@ -142,13 +136,7 @@ def repair_polygonal(geometry):
     """
     if geometry is None or geometry.is_empty:
         return Repaired(Polygon(), False)
-    if geometry.is_valid:
-        return Repaired(as_polygonal(polygons_of(geometry)), False)
-    fixed = _make_valid(geometry) if _make_valid is not None else geometry.buffer(0)
-    fixed = as_polygonal(polygons_of(fixed))
-    if not fixed.is_valid:  # pragma: no cover - make_valid gives valid output
-        fixed = as_polygonal(polygons_of(fixed.buffer(0)))
-    return Repaired(fixed, True)
+    return Repaired(valid_polygonal(geometry), not geometry.is_valid)
 
 
 def inward_buffer(geometry, distance, quad_segs=16):

@@ -1,37 +1,48 @@
-"""Small geometry-type helpers that work on shapely 1.8 and 2.0."""
-from shapely.geometry import MultiPolygon, Polygon
+"""Polygon clean-up shared by the engine, working on shapely 1.8 and 2.0."""
+from shapely.geometry import GeometryCollection, MultiPolygon, Polygon
+
+try:  # shapely >= 1.8 built against GEOS >= 3.8
+    from shapely.validation import make_valid as _make_valid
+except ImportError:  # pragma: no cover - depends on the host's GEOS
+    _make_valid = None
 
 
 def polygonal_part(geometry):
-    """The polygons of a geometry (a repaired polygon may come back as a collection)."""
+    """The polygonal part of ``geometry`` as a Polygon or MultiPolygon.
+
+    Points and lines (which a repair or an intersection may leave behind) are
+    dropped. Returns an empty Polygon when nothing polygonal remains.
+    """
     if geometry is None or geometry.is_empty:
-        return geometry
+        return Polygon()
     if isinstance(geometry, (Polygon, MultiPolygon)):
         return geometry
-    polygons = []
-    for part in getattr(geometry, "geoms", []):
-        part = polygonal_part(part)
-        if isinstance(part, Polygon):
-            polygons.append(part)
-        elif isinstance(part, MultiPolygon):
-            polygons.extend(part.geoms)
-    if not polygons:
-        return geometry
-    return polygons[0] if len(polygons) == 1 else MultiPolygon(polygons)
+    if isinstance(geometry, GeometryCollection) or hasattr(geometry, "geoms"):
+        parts = []
+        for part in geometry.geoms:
+            sub = polygonal_part(part)
+            if not sub.is_empty:
+                parts.extend(sub.geoms if isinstance(sub, MultiPolygon) else [sub])
+        if not parts:
+            return Polygon()
+        return parts[0] if len(parts) == 1 else MultiPolygon(parts)
+    return Polygon()
 
 
-def contains_xy(geometry, x, y):
-    """Vectorised point-in-polygon test (boolean array), on shapely 2.0 and 1.8.
+def valid_polygonal(geometry):
+    """A valid polygonal version of ``geometry``.
 
-    Shapely 2 has ``shapely.contains_xy``; shapely 1.8 has ``shapely.vectorized.contains``.
-    Points on the boundary may count either way.
+    Uses GEOS ``MakeValid`` (``shapely.validation.make_valid``) where the installed
+    shapely offers it, which keeps every piece of a self-crossing ring. Otherwise
+    falls back on the zero-width buffer ``buffer(0)``, the classic repair, which may
+    drop the inverted lobes of a bow-tie.
     """
-    import numpy as np
-
-    x = np.asarray(x, dtype=float)
-    y = np.asarray(y, dtype=float)
-    try:
-        from shapely import contains_xy as _contains_xy  # shapely >= 2.0
-    except ImportError:
-        from shapely.vectorized import contains as _contains_xy  # shapely 1.8
-    return np.asarray(_contains_xy(geometry, x, y), dtype=bool)
+    if geometry is None or geometry.is_empty:
+        return Polygon()
+    if geometry.is_valid:
+        return polygonal_part(geometry)
+    if _make_valid is not None:
+        repaired = polygonal_part(_make_valid(geometry))
+        if repaired.is_valid:
+            return repaired
+    return polygonal_part(geometry.buffer(0))

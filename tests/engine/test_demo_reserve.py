@@ -48,7 +48,7 @@ def test_scenario_as_specified():
     assert reserve.inholding.area > 1e6 and reserve.boundary.buffer(1).contains(reserve.inholding)
     assert 1000 < reserve.true_total < 10000
     inside = reserve.habitat
-    from plotwise.processing.engine.geometry_types import contains_xy
+    from plotwise.processing.engine.geometry import contains_xy
 
     assert contains_xy(inside, reserve.animals_xy[:, 0], reserve.animals_xy[:, 1]).all()
     # greenness correlated with elevation (negatively), plus noise

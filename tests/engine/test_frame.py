@@ -15,6 +15,7 @@ from shapely.ops import transform
 
 from plotwise.processing.engine import crs as pw_crs
 from plotwise.processing.engine import frame as fr
+from plotwise.processing.engine import geometry_types
 from plotwise.processing.engine.errors import Cancelled, InputError
 
 STUDY = box(0, 0, 10_000, 6_000)  # 6.0e7 m²
@@ -130,8 +131,8 @@ BOWTIE = Polygon([(0, 0), (2, 2), (2, 0), (0, 2)])  # self-crossing ring
 @pytest.mark.parametrize("use_make_valid", [True, False])
 def test_clean_polygons_repairs_and_skips(monkeypatch, use_make_valid):
     if not use_make_valid:  # the buffer(0) fallback for shapely without MakeValid
-        monkeypatch.setattr(fr, "_make_valid", None)
-    elif fr._make_valid is None:
+        monkeypatch.setattr(geometry_types, "_make_valid", None)
+    elif geometry_types._make_valid is None:
         pytest.skip("this shapely has no make_valid")
     flat = Polygon([(0, 0), (1, 0), (2, 0)])  # zero area
     geoms = [box(0, 0, 1, 1), None, Polygon(), flat, BOWTIE]
