@@ -14,54 +14,21 @@ import pytest
 pytest.importorskip("qgis.core")
 from osgeo import gdal, osr  # noqa: E402
 from qgis.core import (  # noqa: E402
-    QgsApplication,
     QgsFeature,
     QgsGeometry,
     QgsProcessingException,
     QgsProcessingFeedback,
-    QgsProcessingProvider,
     QgsVectorLayer,
 )
 from shapely import wkb as shapely_wkb  # noqa: E402
 from shapely.ops import transform  # noqa: E402
 
 EDGE = 100.0
-_KEEP = []
 
 
 @pytest.fixture
-def registry(qgis_processing):
-    """The plotwise provider in the registry (the real one if it loads, else one holding BuildFrame)."""
-    registry = QgsApplication.processingRegistry()
-    if registry.algorithmById("plotwise:buildframe") is None:
-        from plotwise.processing.algorithms.buildframe import BuildFrame
-
-        if registry.providerById("plotwise") is None:
-            try:
-                from plotwise.processing.provider import PlotwiseProvider
-
-                provider = PlotwiseProvider()
-            except ImportError:  # other algorithms of the provider not written yet
-                provider = None
-            if provider is not None:
-                _KEEP.append(provider)  # keep the Python object alive beside the registry
-                registry.addProvider(provider)
-        if registry.algorithmById("plotwise:buildframe") is None:
-            # the provider does not list BuildFrame yet: run it through a provider of its own
-            class _FrameOnly(QgsProcessingProvider):
-                def id(self):
-                    return "plotwise_buildframe_test"
-
-                def name(self):
-                    return "Plotwise (buildframe test)"
-
-                def loadAlgorithms(self):  # noqa: N802
-                    self.addAlgorithm(BuildFrame())
-
-            if registry.providerById("plotwise_buildframe_test") is None:
-                _KEEP.append(_FrameOnly())  # the registry does not own Python providers
-                registry.addProvider(_KEEP[-1])
-            return "plotwise_buildframe_test:buildframe"
+def registry(plotwise_provider):
+    """The id of the algorithm under test (the provider is registered by tests/host/conftest.py)."""
     return "plotwise:buildframe"
 
 
