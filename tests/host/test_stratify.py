@@ -178,6 +178,7 @@ def test_geographic_frame_is_projected_and_errors_name_the_covariate(alg_id, run
     layer, feats = _features(out["OUTPUT"])
     assert layer.crs().authid() == "EPSG:32633"  # UTM zone of the frame's centre, the covariate's own CRS
     assert sum(f["area_ha"] for f in feats) == pytest.approx(2500 * 2000 / 1e4, rel=0.01)
+    del layer, feats
     flat = str(tmp_path / "flat.tif")
     gdal.Translate(flat, path, scaleParams=[[0, 1e9, 7, 7]], outputType=gdal.GDT_Float32)
     with pytest.raises(QgsProcessingException, match="constant"):
