@@ -12,7 +12,7 @@ from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
 from ...plugin import compat
-from ..engine.errors import Cancelled, InputError
+from ..engine.errors import Cancelled, InputError, Message
 from ..engine.rng import make_rng
 from ..report import Report
 from .. import styles
@@ -110,7 +110,8 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
         try:
             yield
         except InputError as error:
-            raise QgsProcessingException(error.message) from None
+            text = self.translate_message(error.detail) if error.detail is not None else error.message
+            raise QgsProcessingException(text) from None
         except Cancelled:
             raise QgsProcessingException(
                 self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm")
@@ -120,9 +121,19 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
         """Style output ``dest_id`` (a name from ``processing.styles.STYLES``) when the host loads it."""
         return styles.style_on_completion(context, dest_id, style_name, **options)
 
+    def translate_message(self, item):
+        """The user's-language text of an engine :class:`Message` (context ``PlotwiseEngine``); a str as is."""
+        if not isinstance(item, Message):
+            return item
+        values = {name: self.translate_message(value) for name, value in item.values}
+        try:
+            return QCoreApplication.translate("PlotwiseEngine", item.template).format(**values)
+        except (KeyError, IndexError, ValueError):  # a broken translation: the English text
+            return str(item)
+
     def push_warnings(self, feedback, warnings):
         for warning in warnings:
-            feedback.pushWarning(warning)
+            feedback.pushWarning(self.translate_message(warning))
 
     def new_report(self, title):
         return Report(title, algorithm_id=f"plotwise:{self.name()}", translate=lambda s: self.tr(s, "PlotwiseReport"))
