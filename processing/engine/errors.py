@@ -10,41 +10,47 @@ translates the template (context ``PlotwiseEngine``) and fills in the same value
 Every word of the sentence sits in the template, so a translator sees the whole
 sentence; numbers are formatted in the template (``{cv:.3f}``).
 """
-from dataclasses import dataclass
 
 
-@dataclass(frozen=True)
-class Message:
-    """An English template and the values of its placeholders.
+class Message(str):
+    """An English sentence that remembers its template and the values that fill it.
+
+    The string value is the English text, ``template.format(**dict(values))``, so a
+    ``Message`` is used wherever the engine used a str before (``"zero" in warning``,
+    ``" ".join(warnings)``, ``feedback.pushWarning(warning)``); the host translates
+    ``template`` and fills in the same ``values``. Immutable and hashable (as its text).
 
     Attributes
     ----------
     template : str
         Text for ``str.format`` with named placeholders, e.g. ``"Stratum {ids} is empty."``.
     values : tuple of (str, object)
-        ``(name, value)`` pairs (a tuple, so the message stays hashable). A value may itself
-        be a :class:`Message` (it is formatted, and translated, first).
+        ``(name, value)`` pairs. A value may itself be a :class:`Message` (formatted, and
+        translated, first).
     """
 
-    template: str
-    values: tuple = ()
+    def __new__(cls, template, values=()):
+        values = tuple((str(name), value) for name, value in values)
+        self = super().__new__(cls, template.format(**dict(values)))
+        object.__setattr__(self, "template", template)
+        object.__setattr__(self, "values", values)
+        return self
 
-    def __str__(self):
-        return self.template.format(**dict(self.values))
+    def __setattr__(self, name, value):
+        raise AttributeError("Message is immutable")
 
-    def __format__(self, spec):
-        return format(str(self), spec)
+    __delattr__ = __setattr__
 
+    def __reduce__(self):
+        return (Message, (self.template, self.values))
 
-def _frozen(value):
-    if isinstance(value, (list, tuple)):
-        return tuple(_frozen(v) for v in value)
-    return value
+    def __repr__(self):
+        return f"message({self.template!r}, **{dict(self.values)!r})"
 
 
 def message(template, **values):
     """A :class:`Message` from an English ``template`` and its placeholder values."""
-    return Message(template, tuple((name, _frozen(value)) for name, value in values.items()))
+    return Message(template, tuple(values.items()))
 
 
 class InputError(ValueError):

@@ -5,21 +5,36 @@ became translatable (truth by construction: the old f-strings).
 """
 import pytest
 
+import pickle
+
 from plotwise.processing.engine.errors import InputError, Message, message
 
 
 def test_message_is_the_filled_template_and_hashable():
     m = message("Stratum feature(s) {shown} are empty (cv {cv:.3f}).", shown="3, 7", cv=0.12345)
     assert str(m) == "Stratum feature(s) 3, 7 are empty (cv 0.123)."
-    assert f"{m}" == str(m)
+    assert type(str(m)) is str and f"{m}" == str(m)
     assert isinstance(m, Message) and hash(m) == hash(message(m.template, shown="3, 7", cv=0.12345))
     assert dict(m.values) == {"shown": "3, 7", "cv": 0.12345}
+    assert m.template == "Stratum feature(s) {shown} are empty (cv {cv:.3f})."
 
 
-def test_list_values_are_frozen():
-    m = message("{ids}", ids=[1, 2])
-    hash(m)
-    assert dict(m.values)["ids"] == (1, 2)
+def test_message_behaves_as_its_english_text():
+    m = message("The total of {total} units exceeds {n}.", total=12, n=10)
+    assert "12 units" in m and m.startswith("The total") and " ".join([m, "x"]).endswith("10. x")
+    assert m == "The total of 12 units exceeds 10."
+    again = pickle.loads(pickle.dumps(m))
+    assert again.template == m.template and dict(again.values) == dict(m.values)
+
+
+def test_message_is_immutable():
+    m = message("{n}", n=1)
+    try:
+        m.template = "other"
+    except AttributeError:
+        pass
+    else:
+        raise AssertionError("a Message must not change")
 
 
 def test_nested_message_is_formatted():
