@@ -37,7 +37,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from .errors import InputError
+from .errors import InputError, message
 
 METHODS = ("equal", "proportional", "neyman", "optimal_cost")
 """Allocation methods, in the order of the algorithm's METHOD parameter (0..3)."""
@@ -45,10 +45,10 @@ METHODS = ("equal", "proportional", "neyman", "optimal_cost")
 DEFAULT_MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
 
 _DEFAULT_NAMES = {
-    "area": "stratum area",
-    "sd": "pilot standard deviation",
-    "mean": "pilot mean count",
-    "cost": "cost per unit",
+    "area": message("stratum area"),
+    "sd": message("pilot standard deviation"),
+    "mean": message("pilot mean count"),
+    "cost": message("cost per unit"),
 }
 
 
@@ -380,7 +380,9 @@ def expected_precision(n, areas, unit_area, sds=None, means=None, fpc=True):
 def _listing(ids, mask):
     chosen = [ids[i] for i in np.flatnonzero(mask)]
     shown = ", ".join(str(x) for x in chosen[:20])
-    return chosen, shown + (f" and {len(chosen) - 20} more" if len(chosen) > 20 else "")
+    if len(chosen) > 20:
+        return chosen, message("{shown} and {more} more", shown=shown, more=len(chosen) - 20)
+    return chosen, shown
 
 
 def _as_number(value):
@@ -400,13 +402,15 @@ def check_values(values, name, ids, allow_zero=False):
     bad = ~np.isfinite(v) | (v < 0 if allow_zero else v <= 0)
     if bad.any():
         chosen, shown = _listing(ids, bad)
-        what = "NULL or negative" if allow_zero else "NULL, negative or zero"
-        raise InputError(
-            f"The {name} is {what} for stratum feature(s) {shown}. "
-            f"Fill in a {'non-negative' if allow_zero else 'positive'} value for every stratum, "
-            "or remove those strata from the layer.",
-            ids=chosen,
-        )
+        if allow_zero:
+            text = message(
+                "The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value "
+                "for every stratum, or remove those strata from the layer.", name=name, shown=shown)
+        else:
+            text = message(
+                "The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value "
+                "for every stratum, or remove those strata from the layer.", name=name, shown=shown)
+        raise InputError(text, ids=chosen)
     return v
 
 
@@ -470,18 +474,20 @@ def allocate(
     """
     names = {**_DEFAULT_NAMES, **(names or {})}
     if method not in METHODS:
-        raise InputError(f"Unknown allocation method {method!r}; use one of: {', '.join(METHODS)}.")
+        raise InputError(message("Unknown allocation method {method!r}; use one of: {methods}.",
+                                 method=method, methods=", ".join(METHODS)))
     n_strata = len(areas)
     if n_strata == 0:
-        raise InputError("The strata layer has no features. Run the stratification first.")
+        raise InputError(message("The strata layer has no features. Run the stratification first."))
     ids = list(range(1, n_strata + 1)) if ids is None else list(ids)
     area = check_values(areas, names["area"], ids)
     unit_area = float(unit_area)
     if not np.isfinite(unit_area) or unit_area <= 0:
-        raise InputError("The unit area must be a positive number.")
+        raise InputError(message("The unit area must be a positive number."))
     min_per_stratum = int(min_per_stratum)
     if min_per_stratum < 1:
-        raise InputError("The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).")
+        raise InputError(message(
+            "The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated)."))
     warnings = []
 
     s = None if sds is None else check_values(sds, names["sd"], ids, allow_zero=True)
@@ -493,31 +499,35 @@ def allocate(
         c = check_values(costs, names["cost"], ids)
     elif method == "optimal_cost" or use_budget:
         raise InputError(
-            f"The {'cost method' if method == 'optimal_cost' else 'budget'} needs a cost per unit for "
-            "every stratum: choose the cost field."
+            message("The cost method needs a cost per unit for every stratum: choose the cost field.")
+            if method == "optimal_cost"
+            else message("The budget needs a cost per unit for every stratum: choose the cost field.")
         )
     fixed_cost = float(fixed_cost or 0.0)
     if fixed_cost < 0:
-        raise InputError("The fixed cost must be zero or positive.")
+        raise InputError(message("The fixed cost must be zero or positive."))
 
     # method actually applied
     used = method
     if method in ("neyman", "optimal_cost"):
         if s is None:
             warnings.append(
-                "No pilot standard deviations: the allocation assumes equal SDs in all strata "
-                + ("(proportional to area)." if method == "neyman" else "(area / square root of cost).")
+                message("No pilot standard deviations: the allocation assumes equal SDs in all strata "
+                        "(proportional to area).")
+                if method == "neyman"
+                else message("No pilot standard deviations: the allocation assumes equal SDs in all strata "
+                             "(area / square root of cost).")
             )
             used = "proportional" if method == "neyman" else method
         elif not np.any(s > 0):
-            warnings.append("All pilot standard deviations are zero: proportional allocation is used instead.")
+            warnings.append(message("All pilot standard deviations are zero: proportional allocation is used instead."))
             used = "proportional"
         elif np.any(s == 0):
             zero_ids, shown = _listing(ids, s == 0)
-            warnings.append(
-                f"The {names['sd']} is zero for stratum feature(s) {shown}: they get only the minimum "
-                f"of {min_per_stratum} unit(s). A pilot with no variation is rarely the truth; check it."
-            )
+            warnings.append(message(
+                "The {name} is zero for stratum feature(s) {shown}: they get only the minimum "
+                "of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.",
+                name=names["sd"], shown=shown, minimum=min_per_stratum))
     scores = allocation_scores(used, area, s, c)
 
     # bounds
@@ -526,68 +536,73 @@ def allocate(
     if np.any(upper < 1):
         chosen, shown = _listing(ids, upper < 1)
         raise InputError(
-            f"Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. "
-            "Merge them with a neighbour or use a smaller unit area.",
+            message("Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. "
+                    "Merge them with a neighbour or use a smaller unit area.", shown=shown, unit_area=unit_area),
             ids=chosen,
         )
     lower = np.minimum(min_per_stratum, upper)
     if np.any(upper < min_per_stratum):
         _, shown = _listing(ids, upper < min_per_stratum)
-        warnings.append(
-            f"Stratum feature(s) {shown} hold fewer than {min_per_stratum} units: they get all the units that fit."
-        )
+        warnings.append(message(
+            "Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.",
+            shown=shown, minimum=min_per_stratum))
 
     # target
     if target_cv is not None and target_cv > 0:
         target = "target_cv"
         n, x = _allocation_for_cv(float(target_cv), scores, area, unit_area, s, m, lower, upper, fpc, names)
         if budget is not None and budget > 0:
-            warnings.append("A target CV is set: the budget is not used.")
+            warnings.append(message("A target CV is set: the budget is not used."))
     elif use_budget:
         target = "budget"
         minimum = fixed_cost + float(np.sum(c * lower))
         maximum = fixed_cost + float(np.sum(c * upper))
         if budget < minimum:
-            raise InputError(
-                f"The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus "
-                f"{min_per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the "
-                "minimum per stratum."
-            )
+            raise InputError(message(
+                "The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus "
+                "{per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the "
+                "minimum per stratum.", budget=budget, minimum=minimum, fixed_cost=fixed_cost,
+                per_stratum=min_per_stratum))
         spend = min(float(budget), maximum) - fixed_cost
         if budget > maximum:
-            warnings.append(f"The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.")
+            warnings.append(message(
+                "The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.",
+                maximum=maximum))
         x = bounded_allocation(scores, spend, lower, upper, c)
         n = round_within_budget(x, spend, c, lower, upper)
     else:
         target = "total"
         if total is None or total <= 0:
-            raise InputError("Give a total number of units, a budget (with costs) or a target CV.")
+            raise InputError(message("Give a total number of units, a budget (with costs) or a target CV."))
         total = int(round(total))
         if total < lower.sum():
-            raise InputError(
-                f"The total of {total} units is below the minimum of {int(lower.sum())} "
-                f"({min_per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum."
-            )
+            raise InputError(message(
+                "The total of {total} units is below the minimum of {minimum} "
+                "({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.",
+                total=total, minimum=int(lower.sum()), per_stratum=min_per_stratum, n_strata=n_strata))
         if total > upper.sum():
-            raise InputError(
-                f"The total of {total} units exceeds the {int(upper.sum())} units of {unit_area:g} that fit "
-                "in the strata. Lower the total or use smaller units."
-            )
+            raise InputError(message(
+                "The total of {total} units exceeds the {fit} units of {unit_area:g} that fit "
+                "in the strata. Lower the total or use smaller units.",
+                total=total, fit=int(upper.sum()), unit_area=unit_area))
         x = bounded_allocation(scores, total, lower, upper)
         n = largest_remainder_round(x, total, lower, upper)
 
     total = int(n.sum())
     if np.any(n == 1):
         _, shown = _listing(ids, n == 1)
-        warnings.append(f"Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.")
+        warnings.append(message(
+            "Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.", shown=shown))
     x_at_cap = np.isclose(x, upper) & (upper > lower)
     if np.any(x_at_cap):
         _, shown = _listing(ids, x_at_cap)
-        warnings.append(f"Stratum feature(s) {shown} are sampled completely (every unit that fits).")
+        warnings.append(message("Stratum feature(s) {shown} are sampled completely (every unit that fits).",
+                                shown=shown))
     precision = expected_precision(n, area, unit_area, s, m, fpc)
     if m is not None and np.any(m == 0):
         _, shown = _listing(ids, m == 0)
-        warnings.append(f"The {names['mean']} is zero in stratum feature(s) {shown}: their CV is undefined.")
+        warnings.append(message("The {name} is zero in stratum feature(s) {shown}: their CV is undefined.",
+                                name=names["mean"], shown=shown))
     comparison = compare_methods(total, area, unit_area, s, m, lower, upper, precision.variance_mean, fpc)
     return Allocation(
         method=method,
@@ -610,12 +625,12 @@ def allocate(
 def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, fpc, names):
     """Smallest total whose rounded allocation has expected CV <= target (bisection)."""
     if s is None or m is None:
-        raise InputError(
+        raise InputError(message(
             "A target CV needs both the pilot standard deviation and the pilot mean count per unit: "
             "choose the SD field and the mean field."
-        )
+        ))
     if not np.sum(stratum_weights(area) * m) > 0:
-        raise InputError(f"The {names['mean']} is zero in every stratum: no CV can be computed.")
+        raise InputError(message("The {name} is zero in every stratum: no CV can be computed.", name=names["mean"]))
 
     def design(total):
         x = bounded_allocation(scores, total, lower, upper)
@@ -625,10 +640,10 @@ def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, f
     lo_total, hi_total = int(lower.sum()), int(upper.sum())
     n, x, cv = design(hi_total)
     if cv > target_cv:
-        raise InputError(
-            f"The target CV of {target_cv:.3g} cannot be reached: even all {hi_total} units that fit give "
-            f"an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units."
-        )
+        raise InputError(message(
+            "The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give "
+            "an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.",
+            target_cv=target_cv, fit=hi_total, cv=cv))
     best = (n, x)
     n, x, cv = design(lo_total)
     if cv <= target_cv:
