@@ -196,7 +196,7 @@ class Allocate(PlotwiseAlgorithm):
             return None if name is None else records.attributes[name]
 
         def naming(name, fallback):
-            return f"field '{name}' of layer '{layer}'" if name else fallback
+            return self.tr("field '{name}' of layer '{layer}'").format(name=name, layer=layer) if name else fallback
 
         method = allocation.METHODS[self.parameterAsEnum(parameters, self.METHOD, context)]
         unit_area_m2 = self.parameterAsDouble(parameters, self.UNIT_AREA, context)
@@ -227,14 +227,14 @@ class Allocate(PlotwiseAlgorithm):
                 costs=column(cost_field),
                 ids=fids,
                 names={
-                    "area": naming(area_field, "polygon area"),
-                    "sd": naming(sd_field, "pilot SD"),
-                    "mean": naming(mean_field, "pilot mean"),
-                    "cost": naming(cost_field, "cost"),
+                    "area": naming(area_field, self.tr("polygon area")),
+                    "sd": naming(sd_field, self.tr("pilot SD")),
+                    "mean": naming(mean_field, self.tr("pilot mean")),
+                    "cost": naming(cost_field, self.tr("cost")),
                 },
                 **settings,
             )
-        warnings.extend(result.warnings)
+        warnings.extend(self.translate_message(w) for w in result.warnings)
         self.push_warnings(feedback, warnings[len(records.warnings):])
         feedback.setProgress(60)
 
