@@ -79,10 +79,10 @@ class SimulateCounts(PlotwiseAlgorithm):
         for fid, geometry, area in zip(unit_records.fids, unit_records.geometries, unit_records.attributes.get("area_m2", [None] * len(unit_records))):
             try:
                 if geometry is None:
-                    raise InputError("has no geometry")
+                    raise InputError(self.tr("has no geometry"))
                 regions.append(counting.counting_region(geometry, None if area is None else float(area)))
             except InputError as error:
-                problems.append(f"{fid} ({error.message})")
+                problems.append(f"{fid} ({self.translate_message(error.detail or error.message)})")
         if problems:
             raise QgsProcessingException(
                 self.tr(

@@ -28,7 +28,7 @@ from scipy import ndimage
 from shapely import affinity
 from shapely.geometry import Polygon, box
 
-from .errors import Cancelled, InputError
+from .errors import Cancelled, InputError, message
 from .geometry import contains_xy
 from .geometry_types import polygonal_part
 
@@ -105,7 +105,7 @@ def lake_polygon(rng, boundary):
         lake = affinity.rotate(lake, rng.uniform(0, 180), origin=(x, y))
         if boundary.buffer(-1500).contains(lake):
             return lake
-    raise InputError("Could not place the demo lake; try another seed.")
+    raise InputError(message("Could not place the demo lake; try another seed."))
 
 
 def inholding_polygon(rng, boundary):
@@ -181,7 +181,7 @@ def build_demo_reserve(rng, seed, cell_size=50.0, progress=None):
         Raster cell size in metres (10 to 500).
     """
     if not 10.0 <= cell_size <= 500.0:
-        raise InputError(f"The cell size must be between 10 and 500 m (got {cell_size:g} m).")
+        raise InputError(message("The cell size must be between 10 and 500 m (got {cell_size:g} m).", cell_size=cell_size))
     area_km2 = rng.uniform(250.0, 350.0)
     boundary = reserve_boundary(rng, area_km2)
     lake = lake_polygon(rng, boundary)
