@@ -136,7 +136,9 @@ def repair_polygonal(geometry):
     """
     if geometry is None or geometry.is_empty:
         return Repaired(Polygon(), False)
-    return Repaired(valid_polygonal(geometry), not geometry.is_valid)
+    if geometry.is_valid:  # one validity check: it is the costly part for long outlines
+        return Repaired(polygonal_part(geometry), False)
+    return Repaired(valid_polygonal(geometry), True)
 
 
 def inward_buffer(geometry, distance, quad_segs=16):
