@@ -184,7 +184,7 @@ class Stratify(PlotwiseAlgorithm):
                 raster_path, min_area_ha=min_area, rng=None if seeded is None else seeded.generator,
                 progress=self.progress_callback(feedback, 5, 90),
             )
-        warnings = list(records.warnings) + list(result.warnings)
+        warnings = list(records.warnings) + [self.translate_message(w) for w in result.warnings]
         self.push_warnings(feedback, result.warnings)
         if result.warped:
             feedback.pushInfo(self.tr("Warped onto the grid of '{first}' in {crs}: {names}.").format(

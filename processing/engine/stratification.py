@@ -36,7 +36,7 @@ import threading
 
 import numpy as np
 
-from .errors import Cancelled, InputError
+from .errors import Cancelled, InputError, message
 
 QUANTILE = 0
 EQUAL_INTERVAL = 1
@@ -459,7 +459,7 @@ def exact_quantiles(source, probabilities, value_range=None, covariate=0, bins=F
         histogram = streamed_histogram(source, bins, value_range, covariate, scaled_progress(progress, 0, 0.5))
     n = histogram.total
     if n == 0:
-        raise InputError("No cell of the frame has a value in every covariate.")
+        raise InputError(message("No cell of the frame has a value in every covariate."))
     h = (n - 1) * p
     low = np.floor(h).astype(np.int64)
     high = np.minimum(low + 1, n - 1)
@@ -649,7 +649,7 @@ def kmeans_plusplus(x, n_clusters, rng):
     for _ in range(1, n_clusters):
         total = d2.sum()
         if total <= 0:
-            raise InputError("The covariates take fewer distinct value combinations than strata asked for.")
+            raise InputError(message("The covariates take fewer distinct value combinations than strata asked for."))
         c = x[rng.choice(n, p=d2 / total)]
         centres.append(c)
         np.minimum(d2, np.square(x - c).sum(axis=1), out=d2)
@@ -910,7 +910,7 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
         if bchart is not None:
             chart += bchart
     if s1 is None and frame == 0:
-        raise InputError("The frame holds no raster cell.")
+        raise InputError(message("The frame holds no raster cell."))
     if s1 is None:
         ncov = _n_covariates(source)
         s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
@@ -1104,8 +1104,8 @@ def count_distinct(source, cap, covariate=0, progress=None):
 
 
 def _constant_error(name, value):
-    return InputError("Covariate '%s' is constant (%s) over the frame: it cannot define strata. "
-                      "Use another covariate, or check the frame and the raster." % (name, "%g" % value))
+    return InputError(message("Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. "
+                              "Use another covariate, or check the frame and the raster.", name=name, value=value))
 
 
 def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, sample_size=100_000,
@@ -1144,11 +1144,12 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     warnings = []
     name0 = names[0]
     if method not in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F, KMEANS, RASTER_CLASSES):
-        raise InputError("Unknown METHOD %r: use 0 (quantile) to 4 (raster classes)." % (method,))
+        raise InputError(message("Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).", method=method))
     if method != RASTER_CLASSES and k < 2:
-        raise InputError("Ask for at least 2 strata (STRATA).")
-    no_cell = InputError("No cell of the frame has a value in every covariate (%s). Check that the rasters "
-                         "cover the frame and that their NoData value is right." % ", ".join(names))
+        raise InputError(message("Ask for at least 2 strata (STRATA)."))
+    no_cell = InputError(message("No cell of the frame has a value in every covariate ({names}). Check that the "
+                                 "rasters cover the frame and that their NoData value is right.",
+                                 names=", ".join(names)))
     summ = hist = kfit = None
     sample_n = 0
     n_distinct = 0
@@ -1181,8 +1182,10 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         if n_distinct < k:
             n_distinct, _ = count_distinct(source, k)
             if n_distinct < k:
-                raise InputError("Covariate '%s' takes only %d distinct values over the frame, fewer than the %d "
-                                 "strata asked for. Lower STRATA to %d or fewer." % (name0, n_distinct, k, n_distinct))
+                raise InputError(message(
+                    "Covariate '{name}' takes only {n_distinct:d} distinct values over the frame, fewer than the "
+                    "{k:d} strata asked for. Lower STRATA to {n_distinct:d} or fewer.",
+                    name=name0, n_distinct=int(n_distinct), k=k))
         if method == QUANTILE:
             boundaries, _ = exact_quantiles(source, quantile_probabilities(k), histogram=hist,
                                             progress=scaled_progress(progress, 0.3, 0.55))
@@ -1193,8 +1196,9 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
             boundaries = cum_root_f_boundaries(coarse.edges, coarse.counts, k)
         unique = np.unique(boundaries)
         if unique.size < boundaries.size:
-            warnings.append("Some boundaries coincide (many cells share the same value of '%s'); "
-                            "%d strata are formed instead of %d." % (name0, unique.size + 1, k))
+            warnings.append(message("Some boundaries coincide (many cells share the same value of '{name}'); "
+                                    "{formed:d} strata are formed instead of {k:d}.",
+                                    name=name0, formed=int(unique.size + 1), k=k))
         rule = ThresholdRule(unique)
     elif method == KMEANS:
         if rng is None:
@@ -1204,18 +1208,26 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         z = (sample - summ.mean) / summ.sd
         n_distinct = np.unique(z, axis=0).shape[0]
         if n_distinct < k:
-            where = "over the frame" if sample_n == summ.count else "in a sample of %d cells" % sample_n
-            raise InputError("The covariates take only %d distinct value combinations %s, fewer than the %d strata "
-                             "asked for. Lower STRATA to %d or fewer." % (n_distinct, where, k, n_distinct))
+            if sample_n == summ.count:
+                text = message("The covariates take only {n_distinct:d} distinct value combinations over the frame, "
+                               "fewer than the {k:d} strata asked for. Lower STRATA to {n_distinct:d} or fewer.",
+                               n_distinct=int(n_distinct), k=k)
+            else:
+                text = message("The covariates take only {n_distinct:d} distinct value combinations in a sample of "
+                               "{sample_n:d} cells, fewer than the {k:d} strata asked for. Lower STRATA to "
+                               "{n_distinct:d} or fewer.", n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
+            raise InputError(text)
         kfit = lloyd_kmeans(z, kmeans_plusplus(z, k, rng))
         order = np.argsort(kfit.centres[:, 0], kind="stable")
         rule = NearestCentreRule(kfit.centres[order], summ.mean, summ.sd)
     else:
         n_distinct, classes = count_distinct(source, MAX_CLASSES, progress=scaled_progress(progress, 0.2, 0.4))
         if n_distinct > MAX_CLASSES:
-            raise InputError("Covariate '%s' has more than %d classes (at least %d distinct values over the frame): "
-                             "reclassify it into %d classes or fewer first (for example with the host's reclassify "
-                             "by table tool), or choose another METHOD." % (name0, MAX_CLASSES, n_distinct, MAX_CLASSES))
+            raise InputError(message(
+                "Covariate '{name}' has more than {max_classes:d} classes (at least {n_distinct:d} distinct values "
+                "over the frame): reclassify it into {max_classes:d} classes or fewer first (for example with the "
+                "host's reclassify by table tool), or choose another METHOD.",
+                name=name0, max_classes=MAX_CLASSES, n_distinct=int(n_distinct)))
         rule = ClassRule(np.asarray(classes))
 
     k = rule.n_strata
@@ -1228,7 +1240,8 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     lut, order = stratum_order(stats)
     dropped = k - order.size
     if dropped:
-        warnings.append("%d of the %d strata hold no cell and were dropped." % (dropped, k))
+        warnings.append(message("{dropped:d} of the {k:d} strata hold no cell and were dropped.",
+                                dropped=int(dropped), k=k))
     return Stratification(method, rule, None if boundaries is None else rule.boundaries, stats.reordered(order),
                           lut, order, int(stats.total), int(n_distinct), int(sample_n), (float(vmin), float(vmax)),
                           kfit, tuple(warnings))
