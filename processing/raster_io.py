@@ -23,7 +23,7 @@ import numpy as np
 from osgeo import gdal, gdal_array, ogr, osr
 
 from .engine import stratification as strat
-from .engine.errors import Cancelled, InputError
+from .engine.errors import Cancelled, InputError, message
 
 gdal.UseExceptions()
 ogr.UseExceptions()
@@ -89,9 +89,10 @@ def _open(cov):
     try:
         ds = gdal.Open(cov.path)
     except RuntimeError as exc:
-        raise InputError("Covariate '%s' cannot be read (%s). Check the file." % (cov.name, exc))
+        raise InputError(message("Covariate '{name}' cannot be read ({error}). Check the file.", name=cov.name,
+                                 error=str(exc)))
     if ds is None or not (1 <= cov.band <= ds.RasterCount):
-        raise InputError("Covariate '%s' has no band %d." % (cov.name, cov.band))
+        raise InputError(message("Covariate '{name}' has no band {band:d}.", name=cov.name, band=int(cov.band)))
     gt = ds.GetGeoTransform()
     if gt[2] or gt[4]:
         ds = gdal.Warp("", ds, format="VRT")  # rotated grid: make it north-up
@@ -178,7 +179,7 @@ class CovariateStack:
 
     def __init__(self, covariates, frame_wkb, crs_wkt, categorical=False, block_cells=BLOCK_CELLS, workdir=None):
         if not covariates:
-            raise InputError("Give at least one raster in COVARIATES.")
+            raise InputError(message("Give at least one raster in COVARIATES."))
         self.covariates = list(covariates)
         self.names = [c.name for c in self.covariates]
         self.crs_wkt = crs_wkt
@@ -210,7 +211,7 @@ class CovariateStack:
         geoms = [ogr.CreateGeometryFromWkb(bytes(w)) for w in frame_wkb]
         geoms = [g for g in geoms if g is not None and not g.IsEmpty()]
         if not geoms:
-            raise InputError("The frame has no polygon.")
+            raise InputError(message("The frame has no polygon."))
         frame = ogr.Geometry(ogr.wkbMultiPolygon)
         for g in geoms:
             for part in (g if g.GetGeometryType() in (ogr.wkbMultiPolygon, ogr.wkbMultiPolygon25D) else [g]):
@@ -254,8 +255,9 @@ class CovariateStack:
         self.n_blocks = len(self._windows)
 
     def _no_overlap(self):
-        return InputError("The frame does not overlap covariate '%s' (%s). Use a raster that covers the "
-                          "frame, or check both layers' CRS." % (self.covariates[0].name, self.covariates[0].path))
+        return InputError(message("The frame does not overlap covariate '{name}' ({path}). Use a raster that covers "
+                                  "the frame, or check both layers' CRS.", name=self.covariates[0].name,
+                                  path=self.covariates[0].path))
 
     def _reader_for(self, cov):
         ds = _open(cov)
@@ -418,7 +420,7 @@ class StratumRaster:
         opts = ["TILED=YES", "BIGTIFF=IF_SAFER"] + _fast_compression()
         self.ds = gdal.GetDriverByName("GTiff").Create(path, grid.width, grid.height, 1, gdal.GDT_Byte, opts)
         if self.ds is None:
-            raise InputError("Cannot write the stratum raster '%s'." % path)
+            raise InputError(message("Cannot write the stratum raster '{path}'.", path=path))
         self.ds.SetGeoTransform(grid.geotransform)
         self.ds.SetProjection(grid.crs_wkt)
         self.band = self.ds.GetRasterBand(1)
@@ -606,8 +608,8 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
             provisional = res.provisional
             if not np.array_equal(lut, np.arange(lut.size)):
                 if order.size < stats.n_strata:
-                    warnings.append("%d strata consisted only of patches below MIN_AREA and were merged away."
-                                    % (stats.n_strata - order.size))
+                    warnings.append(message("{merged:d} strata consisted only of patches below MIN_AREA and were "
+                                            "merged away.", merged=int(stats.n_strata - order.size)))
                 remap_strata(output_raster, lut)
                 stats, provisional = stats.reordered(order), provisional[order]
             res = res.with_statistics(stats, provisional)
@@ -618,15 +620,12 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
         on_grid = stack.frame_area_on_grid / stack.frame_area if stack.frame_area > 0 else 0.0
         coverage = on_grid * res.cells_valid / res.cells_in_frame if res.cells_in_frame else 0.0
         if res.cells_nodata or on_grid < 1 - 1e-6:
-            warnings.append("The covariates cover %.1f%% of the frame: %s ha lie outside the rasters and %s ha have "
-                            "NoData in at least one covariate; the strata speak for the covered part only."
-                            % (100 * coverage, _ha(outside_ha), _ha(res.cells_nodata * ca)))
+            warnings.append(message("The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie "
+                                    "outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one "
+                                    "covariate; the strata speak for the covered part only.",
+                                    percent=100 * coverage, outside_ha=outside_ha, nodata_ha=res.cells_nodata * ca))
         labels = strat.stratum_labels(res, names, units)
         return RasterStratification(res, names, units, labels, stack.grid, polygons,
                                     res.statistics.count * ca, frame_ha, res.cells_in_frame * ca,
                                     res.cells_nodata * ca, outside_ha, coverage, cells, list(stack.warped),
                                     output_raster, warnings)
-
-
-def _ha(x):
-    return "{:,.2f}".format(x)

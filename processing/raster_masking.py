@@ -23,7 +23,7 @@ import pyproj
 from osgeo import gdal, ogr, osr
 from shapely import wkb
 
-from .engine.errors import Cancelled, InputError
+from .engine.errors import Cancelled, InputError, message
 
 #: Upper limit on the number of cells read over the extent (about 0.6 GB at peak).
 MAX_CELLS = 50_000_000
@@ -98,7 +98,7 @@ def _open(source):
     except RuntimeError:  # GDAL with exceptions enabled
         ds = None
     if ds is None:
-        raise InputError(f"The mask raster (MASK) '{source}' cannot be opened by GDAL.")
+        raise InputError(message("The mask raster (MASK) '{source}' cannot be opened by GDAL.", source=str(source)))
     return ds
 
 
@@ -147,17 +147,18 @@ def _read_aligned(ds, band_no, extent):
 
 def _check_size(rows, cols):
     if rows * cols > MAX_CELLS:
-        raise InputError(
-            f"The mask raster (MASK) would need {rows} x {cols} cells over the study area; "
-            f"that is more than {MAX_CELLS:,}. Resample the raster to coarser cells first."
-        )
+        raise InputError(message(
+            "The mask raster (MASK) would need {rows} x {cols} cells over the study area; "
+            "that is more than {max_cells:,}. Resample the raster to coarser cells first.",
+            rows=rows, cols=cols, max_cells=MAX_CELLS,
+        ))
 
 
 def _target_resolution(ds, target_wkt):
     """Cell size GDAL suggests for ``ds`` in the target CRS (square cells)."""
     vrt = gdal.AutoCreateWarpedVRT(ds, None, target_wkt, gdal.GRA_NearestNeighbour)
     if vrt is None:
-        raise InputError("The mask raster (MASK) cannot be reprojected to the computation CRS.")
+        raise InputError(message("The mask raster (MASK) cannot be reprojected to the computation CRS."))
     gt = vrt.GetGeoTransform()
     return float(min(abs(gt[1]), abs(gt[5])))
 
@@ -185,7 +186,7 @@ def _read_warped(ds, band_no, extent, target_wkt, resolution=None):
     )
     out = gdal.Warp("", single, options=options)
     if out is None:
-        raise InputError("The mask raster (MASK) cannot be reprojected to the computation CRS.")
+        raise InputError(message("The mask raster (MASK) cannot be reprojected to the computation CRS."))
     values = out.GetRasterBand(1).ReadAsArray().astype(float)
     covered = out.GetRasterBand(2).ReadAsArray() > 0
     values[~covered] = np.nan
@@ -219,7 +220,7 @@ def _polygonize(masked, geotransform, target_wkt, progress=None):
     if state["cancelled"]:
         raise Cancelled("Masking the raster was cancelled.")
     if err != 0:
-        raise InputError("GDAL could not turn the masked raster cells into polygons.")
+        raise InputError(message("GDAL could not turn the masked raster cells into polygons."))
     polygons = []
     layer.ResetReading()
     for feat in layer:
@@ -259,13 +260,14 @@ def mask_polygons(
     RasterMask
     """
     if mask_min is not None and mask_max is not None and mask_min > mask_max:
-        raise InputError(
-            f"MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be "
-            f"kept. Swap the two values or leave one of them empty."
-        )
+        raise InputError(message(
+            "MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be "
+            "kept. Swap the two values or leave one of them empty.", mask_min=mask_min, mask_max=mask_max,
+        ))
     ds = _open(source)
     if band < 1 or band > ds.RasterCount:
-        raise InputError(f"The mask raster (MASK) has no band {band}; it has {ds.RasterCount}.")
+        raise InputError(message("The mask raster (MASK) has no band {band}; it has {count}.", band=band,
+                                 count=ds.RasterCount))
     target = pyproj.CRS.from_user_input(crs)
     target_wkt = target.to_wkt()
     if source_crs is not None:
