@@ -28,7 +28,7 @@ import math
 import numpy as np
 from scipy import special
 
-from .errors import Cancelled, InputError
+from .errors import Cancelled, InputError, Message, message
 from .variance import collapse_single_unit_strata, local_neighbourhood_variance
 
 CI_T, CI_LOGNORMAL, CI_BOOTSTRAP = "t", "lognormal", "bootstrap"
@@ -271,7 +271,7 @@ def _id_list(ids):
     ids = list(ids)
     shown = ", ".join(str(i) for i in ids[:MAX_LISTED_IDS])
     if len(ids) > MAX_LISTED_IDS:
-        shown += f" … ({len(ids)} in all)"
+        return message("{shown} … ({n} in all)", shown=shown, n=len(ids))
     return shown
 
 
@@ -305,9 +305,9 @@ def read_counts(counts, unit_ids, count_name="count"):
     if bad.any():
         ids = unit_ids[bad]
         raise InputError(
-            f"The {count_name} field holds values that are not numbers for units {_id_list(ids)}. "
-            "Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) "
-            "for units that were not surveyed.",
+            message("The {count_name} field holds values that are not numbers for units {ids}. "
+                    "Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) "
+                    "for units that were not surveyed.", count_name=count_name, ids=_id_list(ids)),
             ids=ids,
         )
     infinite = np.isinf(values)
@@ -315,9 +315,9 @@ def read_counts(counts, unit_ids, count_name="count"):
     if (infinite | negative).any():
         ids = unit_ids[infinite | negative]
         raise InputError(
-            f"The {count_name} field holds negative or infinite counts for units {_id_list(ids)}. "
-            "Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit "
-            "was not surveyed.",
+            message("The {count_name} field holds negative or infinite counts for units {ids}. "
+                    "Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit "
+                    "was not surveyed.", count_name=count_name, ids=_id_list(ids)),
             ids=ids,
         )
     return values
@@ -439,15 +439,18 @@ def estimate_density(
     Estimate
     """
     if not 0.0 < confidence < 1.0:
-        raise InputError(f"The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.")
+        raise InputError(message("The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.",
+                                 confidence=confidence))
     if ci_method not in CI_METHODS:
-        raise InputError(f"Unknown interval method {ci_method!r}; use one of {', '.join(CI_METHODS)}.")
+        raise InputError(message("Unknown interval method {method!r}; use one of {methods}.", method=ci_method,
+                                 methods=", ".join(CI_METHODS)))
     if variance_method not in VARIANCE_METHODS:
-        raise InputError(f"Unknown variance method {variance_method!r}; use one of {', '.join(VARIANCE_METHODS)}.")
+        raise InputError(message("Unknown variance method {method!r}; use one of {methods}.", method=variance_method,
+                                 methods=", ".join(VARIANCE_METHODS)))
     if not (0.0 < detection_p <= 1.0):
-        raise InputError(f"The detection probability must lie in (0, 1] (got {detection_p}).")
+        raise InputError(message("The detection probability must lie in (0, 1] (got {p}).", p=detection_p))
     if detection_se is None or detection_se < 0:
-        raise InputError("The standard error of the detection probability must be 0 or more.")
+        raise InputError(message("The standard error of the detection probability must be 0 or more."))
     if target_cv is not None and not target_cv > 0:
         target_cv = None
     warnings = []
@@ -456,11 +459,11 @@ def estimate_density(
     n_all = strata_in.size
     ids = np.arange(n_all) if unit_ids is None else np.asarray(unit_ids, dtype=object).ravel()
     if ids.size != n_all:
-        raise InputError("unit_ids must have one id per unit.")
+        raise InputError(message("unit_ids must have one id per unit."))
     y_all = read_counts(counts, ids)
     a_all = np.asarray(unit_areas, dtype=float).ravel()
     if y_all.size != n_all or a_all.size != n_all:
-        raise InputError("counts, unit_areas and strata must have one value per unit.")
+        raise InputError(message("counts, unit_areas and strata must have one value per unit."))
     unique_labels, label_index = stratum_labels(strata_in)
     frame = {}
     for key, area in dict(stratum_areas).items():
@@ -469,15 +472,17 @@ def estimate_density(
     bad_area = [k for k, v in frame.items() if not (np.isfinite(v) and v > 0)]
     if bad_area:
         raise InputError(
-            f"Strata {_id_list(bad_area)} have no area. Check the strata layer's geometries.", ids=bad_area
+            message("Strata {ids} have no area. Check the strata layer's geometries.", ids=_id_list(bad_area)),
+            ids=bad_area,
         )
 
     # units that belong to no stratum of the frame
     no_stratum = np.equal(unique_labels, None)[label_index]
     if no_stratum.any():
         raise InputError(
-            f"Units {_id_list(ids[no_stratum])} have no stratum (the stratum field is empty). Fill in their "
-            "stratum, or leave the stratum field out to treat the frame as one stratum.",
+            message("Units {ids} have no stratum (the stratum field is empty). Fill in their "
+                    "stratum, or leave the stratum field out to treat the frame as one stratum.",
+                    ids=_id_list(ids[no_stratum])),
             ids=ids[no_stratum],
         )
     unknown_labels = np.array([lab not in frame for lab in unique_labels], dtype=bool)
@@ -485,28 +490,28 @@ def estimate_density(
     if unknown.any():
         names = sorted((str(lab) for lab in unique_labels[unknown_labels]), key=natural_key)
         raise InputError(
-            f"Units {_id_list(ids[unknown])} have stratum ids ({_id_list(names)}) that are not in the strata layer. "
-            "Check the stratum field of the units and the id field of the strata layer.",
+            message("Units {ids} have stratum ids ({names}) that are not in the strata layer. "
+                    "Check the stratum field of the units and the id field of the strata layer.",
+                    ids=_id_list(ids[unknown]), names=_id_list(names)),
             ids=ids[unknown],
         )
 
     missing = np.isnan(y_all)
     if missing.any():
-        warnings.append(
-            f"{int(missing.sum())} unit(s) have no count and are treated as not surveyed (non-response): "
-            f"{_id_list(ids[missing])}."
-        )
+        warnings.append(message(
+            "{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.",
+            n=int(missing.sum()), ids=_id_list(ids[missing])))
     surveyed = ~missing
     if not surveyed.any():
-        raise InputError(
+        raise InputError(message(
             "No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units "
             "(0 when none was seen) in the count field."
-        )
+        ))
     bad_units = surveyed & ~(np.isfinite(a_all) & (a_all > 0))
     if bad_units.any():
         raise InputError(
-            f"Units {_id_list(ids[bad_units])} have no positive surveyed area. Give a unit area field with "
-            "values above 0, or a fixed unit area for points and lines.",
+            message("Units {ids} have no positive surveyed area. Give a unit area field with "
+                    "values above 0, or a fixed unit area for points and lines.", ids=_id_list(ids[bad_units])),
             ids=ids[bad_units],
         )
 
@@ -515,15 +520,15 @@ def estimate_density(
         if np.any((values != 0) & (values != 1)):
             odd = ids[surveyed][(values != 0) & (values != 1)]
             raise InputError(
-                f"Presence data must be 0 or 1; units {_id_list(odd)} hold other values. "
-                "Use the counts without the presence option, or recode the field.",
+                message("Presence data must be 0 or 1; units {ids} hold other values. "
+                        "Use the counts without the presence option, or recode the field.", ids=_id_list(odd)),
                 ids=odd,
             )
         if detection_p < 1.0 or detection_se > 0:
-            warnings.append(
+            warnings.append(message(
                 "The detection probability was not applied to presence data: dividing a proportion of "
                 "occupied units by p is not an occupancy correction, which needs repeat visits."
-            )
+            ))
         detection_p, detection_se = 1.0, 0.0
 
     all_labels = sorted(frame, key=natural_key)
@@ -539,16 +544,16 @@ def estimate_density(
     if empty:
         if not drop_empty_strata:
             raise InputError(
-                f"No unit of strata {_id_list(empty)} was surveyed, so their abundance cannot be estimated. "
-                "Survey units there, or choose to leave these strata out (the estimate then covers a "
-                "smaller frame).",
+                message("No unit of strata {ids} was surveyed, so their abundance cannot be estimated. "
+                        "Survey units there, or choose to leave these strata out (the estimate then covers a "
+                        "smaller frame).", ids=_id_list(empty)),
                 ids=empty,
             )
         dropped_area = float(sum(frame[lab] for lab in empty))
-        warnings.append(
-            f"Strata {_id_list(empty)} had no surveyed unit and were left out: the frame shrank by "
-            f"{dropped_area:.6g} area units, and the estimate covers the remaining strata only."
-        )
+        warnings.append(message(
+            "Strata {ids} had no surveyed unit and were left out: the frame shrank by "
+            "{dropped_area:.6g} area units, and the estimate covers the remaining strata only.",
+            ids=_id_list(empty), dropped_area=dropped_area))
     labels = [lab for lab in all_labels if n_per[lab] > 0]
     n_strata = len(labels)
     code_of = {lab: h for h, lab in enumerate(labels)}
@@ -561,13 +566,14 @@ def estimate_density(
     xy = None
     if variance_method == VARIANCE_LOCAL:
         if coords is None:
-            raise InputError("The local neighbourhood variance needs the positions of the units.")
+            raise InputError(message("The local neighbourhood variance needs the positions of the units."))
         xy = np.asarray(coords, dtype=float).reshape(n_all, 2)[keep]
         unplaced = ~np.isfinite(xy).all(axis=1)
         if unplaced.any():
             raise InputError(
-                f"Units {_id_list(ids[keep][unplaced])} have no position, so the local neighbourhood variance "
-                "cannot use them. Give their locations, or use the simple random sampling formula.",
+                message("Units {ids} have no position, so the local neighbourhood variance "
+                        "cannot use them. Give their locations, or use the simple random sampling formula.",
+                        ids=_id_list(ids[keep][unplaced])),
                 ids=ids[keep][unplaced],
             )
 
@@ -590,8 +596,8 @@ def estimate_density(
     if fpc and np.any(sampled_fraction > 1 + 1e-9):
         over = [labels[h] for h in np.flatnonzero(sampled_fraction > 1 + 1e-9)]
         raise InputError(
-            f"In strata {_id_list(over)} the surveyed area exceeds the stratum area. Check the unit areas "
-            "and the area unit, or switch off the finite-population correction.",
+            message("In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas "
+                    "and the area unit, or switch off the finite-population correction.", ids=_id_list(over)),
             ids=over,
         )
     fpc_h = 1.0 - sampled_fraction if fpc else np.ones(n_strata)
@@ -630,21 +636,21 @@ def estimate_density(
             pooled = np.sum((y[in_group] - ratio * a[in_group]) ** 2) / (n_h[members].sum() - 1)
             s2_h[members] = pooled
             df_h[members] = n_h[members].sum() - 1
-        warnings.append(
-            "Strata "
-            + "; ".join(
-                f"{labels[h]} (one unit) collapsed with {', '.join(labels[j] for j in collapsed[h])}"
-                for h in singles
-            )
-            + ": their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), "
-            "which counts differences between the collapsed strata as variance and so tends to be "
-            "too large."
+        pairs = tuple(
+            (f"s{i}", message("{label} (one unit) collapsed with {others}", label=labels[h],
+                              others=", ".join(labels[j] for j in collapsed[h])))
+            for i, h in enumerate(singles)
         )
+        groups = Message("; ".join("{%s}" % name for name, _ in pairs), pairs)  # a list: no words of its own
+        warnings.append(message(
+            "Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), "
+            "which counts differences between the collapsed strata as variance and so tends to be "
+            "too large.", groups=groups))
     elif singles.size:
-        warnings.append(
+        warnings.append(message(
             "The only stratum has one surveyed unit: no variance, standard error or interval can be "
             "estimated. Survey at least two units."
-        )
+        ))
 
     var_dens_h = fpc_h * s2_h / (n_h * mean_a ** 2)
     if variance_method == VARIANCE_LOCAL:
@@ -657,10 +663,9 @@ def estimate_density(
             local_used.append(labels[h])
         if len(local_used) < n_strata:
             rest = [lab for lab in labels if lab not in local_used]
-            warnings.append(
-                f"Strata {_id_list(rest)} have fewer than 3 units or were collapsed: their variance uses "
-                "the simple random sampling formula."
-            )
+            warnings.append(message(
+                "Strata {ids} have fewer than 3 units or were collapsed: their variance uses "
+                "the simple random sampling formula.", ids=_id_list(rest)))
     if progress is not None and progress(0.2):
         raise Cancelled()
 
@@ -694,7 +699,7 @@ def estimate_density(
     boot = None
     if ci_method == CI_BOOTSTRAP:
         if rng is None:
-            raise InputError("The bootstrap needs a random generator (rng).")
+            raise InputError(message("The bootstrap needs a random generator (rng)."))
         boot = stratified_bootstrap(
             y, a, code, n_strata, group, area_h, p, p_se, rng,
             n_bootstrap=max(int(n_bootstrap), MIN_BOOTSTRAP), progress=progress,
@@ -726,13 +731,12 @@ def estimate_density(
     if progress is not None and progress(1.0):
         raise Cancelled()
     if n_total == 0:
-        warnings.append("No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.")
+        warnings.append(message("No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined."))
     elif np.any((sum_y == 0) & (n_h > 1)):
         zero = [labels[h] for h in np.flatnonzero((sum_y == 0) & (n_h > 1))]
-        warnings.append(
-            f"In strata {_id_list(zero)} every surveyed unit counted 0: their standard error is 0, which "
-            "understates the uncertainty (the species may be present but rare there)."
-        )
+        warnings.append(message(
+            "In strata {ids} every surveyed unit counted 0: their standard error is 0, which "
+            "understates the uncertainty (the species may be present but rare there).", ids=_id_list(zero)))
     return Estimate(
         strata=tuple(rows),
         overall=overall,
@@ -775,17 +779,17 @@ def _plan_next_survey(rows, overall, area_h, mean_a, s2_h, n_total, target_cv, c
     """Fill ``n_next`` by Neyman allocation on the observed residual SDs."""
     note = ""
     if cv_p >= target_cv:
-        note = (
-            f"The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own "
-            f"CV is {cv_p:.3g}. Improve the detection study first."
-        )
+        note = message(
+            "The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own "
+            "CV is {cv_p:.3g}. Improve the detection study first.", target_cv=target_cv, cv_p=cv_p)
         return rows, overall, note
     cv_count = math.sqrt(target_cv ** 2 - cv_p ** 2)
     units_h = area_h / mean_a
     sd_h = np.sqrt(np.nan_to_num(s2_h, nan=0.0))
     if n_total <= 0 or not np.any(sd_h > 0):
         n_h = np.full(len(rows), 2.0)
-        note = "No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum."
+        note = message(
+            "No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.")
     else:
         _, n_h = neyman_sample_size(units_h, sd_h, (cv_count * n_total) ** 2, fpc=fpc)
     n_next = np.maximum(np.ceil(n_h - 1e-9), 2).astype(int)
