@@ -354,7 +354,7 @@ class Estimate(PlotwiseAlgorithm):
                 unit_ids=ids[keep], coords=coords, neighbours=neighbours, rng=None if seeded is None else seeded.generator,
                 progress=self.progress_callback(feedback, 30, 80), **settings,
             )
-        warnings.extend(result.warnings)
+        warnings.extend(self.translate_message(w) for w in result.warnings)
         self.push_warnings(feedback, warnings)
 
         # -- write -----------------------------------------------------------------
