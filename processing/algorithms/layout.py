@@ -242,7 +242,8 @@ class LayoutUnits(PlotwiseAlgorithm):
             result = engine.draw_layout(
                 frame, spec, seeded.generator, crs=bridge.crs_wkt(crs), progress=self.progress_callback(feedback, 30, 70)
             )
-        warnings = [self.tr("Layer '{layer}': {text}").format(layer=layer_name, text=w) for w in result.warnings]
+        warnings = [self.tr("Layer '{layer}': {text}").format(layer=layer_name, text=self.translate_message(w))
+                    for w in result.warnings]
         self.push_warnings(feedback, warnings)
         if len(result) == 0:
             raise QgsProcessingException(

@@ -61,7 +61,7 @@ from shapely.ops import unary_union
 
 from . import geometry as geo
 from .crs import lonlat_transformer
-from .errors import Cancelled, InputError
+from .errors import Cancelled, InputError, message
 from .halton import balanced_acceptance_sample
 from .unit_shapes import (  # noqa: F401 (CIRCLE, SQUARE re-exported for the algorithm)
     CIRCLE, LINE, POINT, SHAPES, SQUARE, circumscribing_radius, transect_ends, unit_area, unit_outlines,
@@ -70,6 +70,40 @@ from .unit_shapes import (  # noqa: F401 (CIRCLE, SQUARE re-exported for the alg
 DESIGNS = ("simple random", "systematic grid", "spatially balanced")
 SIMPLE_RANDOM, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(3)
 RANDOM_BEARING = -1
+
+# message templates that differ by unit shape (every word of a message sits in its template)
+_SIZE_NOT_POSITIVE = {
+    POINT: "SIZE must be more than 0 m for a point unit; it is {size}.",
+    SQUARE: "SIZE must be more than 0 m for a square unit; it is {size}.",
+    CIRCLE: "SIZE must be more than 0 m for a circle unit; it is {size}.",
+    LINE: "SIZE must be more than 0 m for a line unit; it is {size}.",
+}
+_TOO_SMALL = {  # (whole frame?, shape)
+    (True, POINT): "The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies "
+                   "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+                   "merge the stratum with a neighbour.",
+    (True, SQUARE): "The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies "
+                    "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+                    "merge the stratum with a neighbour.",
+    (True, CIRCLE): "The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies "
+                    "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+                    "merge the stratum with a neighbour.",
+    (True, LINE): "The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies "
+                  "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+                  "merge the stratum with a neighbour.",
+    (False, POINT): "Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point "
+                    "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+                    "INSIDE, or merge the stratum with a neighbour.",
+    (False, SQUARE): "Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point "
+                     "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+                     "INSIDE, or merge the stratum with a neighbour.",
+    (False, CIRCLE): "Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point "
+                     "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+                     "INSIDE, or merge the stratum with a neighbour.",
+    (False, LINE): "Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point "
+                   "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+                   "INSIDE, or merge the stratum with a neighbour.",
+}
 MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
 PRIMARY, RESERVE = "primary", "reserve"
 
@@ -110,19 +144,18 @@ class LayoutSpec:
 
     def __post_init__(self):
         if self.design not in (0, 1, 2):
-            raise InputError("DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).")
+            raise InputError(message("DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced)."))
         if self.shape not in (0, 1, 2, 3):
-            raise InputError("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")
+            raise InputError(message("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect)."))
         if not self.size >= 0 or (self.shape != POINT and not self.size > 0):
-            raise InputError(
-                f"SIZE must be more than 0 m for a {SHAPES[self.shape]} unit; it is {self.size}."
-            )
+            raise InputError(message(_SIZE_NOT_POSITIVE[self.shape], size=self.size))
         if self.bearing != RANDOM_BEARING and not (0 <= self.bearing < 360):
-            raise InputError(f"BEARING must be -1 (random) or between 0 and 360 degrees; it is {self.bearing}.")
+            raise InputError(message("BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.",
+                                     bearing=self.bearing))
         if self.min_spacing < 0:
-            raise InputError("MIN_SPACING must be 0 or more metres.")
+            raise InputError(message("MIN_SPACING must be 0 or more metres."))
         if self.reserve < 0 or int(self.reserve) != self.reserve:
-            raise InputError("RESERVE must be 0 or a positive whole number.")
+            raise InputError(message("RESERVE must be 0 or a positive whole number."))
 
     @property
     def radius(self):
@@ -301,19 +334,21 @@ def counts_from_field(values, feature_ids, field_name="N_FIELD"):
         out.append(int(f) if math.isfinite(f) and f >= 0 and f == math.floor(f) else -1)
     if bad_null:
         raise InputError(
-            f"{field_name} is empty (NULL) or not a number for feature(s) {_ids(bad_null)}. "
-            "Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.",
+            message("{field} is empty (NULL) or not a number for feature(s) {ids}. "
+                    "Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.",
+                    field=field_name, ids=_ids(bad_null)),
             ids=bad_null,
         )
     if bad_neg:
         raise InputError(
-            f"{field_name} is negative for feature(s) {_ids(bad_neg)}. Use 0 or a positive whole number.",
+            message("{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.",
+                    field=field_name, ids=_ids(bad_neg)),
             ids=bad_neg,
         )
     if bad_frac:
         raise InputError(
-            f"{field_name} is not a whole number for feature(s) {_ids(bad_frac)}. "
-            "Round the allocation to whole units first.",
+            message("{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.",
+                    field=field_name, ids=_ids(bad_frac)),
             ids=bad_frac,
         )
     return np.asarray(out, dtype=int)
@@ -322,7 +357,9 @@ def counts_from_field(values, feature_ids, field_name="N_FIELD"):
 def _ids(ids, limit=20):
     ids = list(ids)
     text = ", ".join(str(i) for i in ids[:limit])
-    return text + (f" and {len(ids) - limit} more" if len(ids) > limit else "")
+    if len(ids) > limit:
+        return message("{shown} and {more} more", shown=text, more=len(ids) - limit)
+    return text
 
 
 def stratum_label(key):
@@ -391,7 +428,7 @@ def prepare_strata(
     feature_ids = list(feature_ids)
     warnings = []
     if n_values is None and (n_units is None or int(n_units) < 1):
-        raise InputError("Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).")
+        raise InputError(message("Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1)."))
     keep, skipped, repaired = [], [], []
     for i, g in enumerate(geometries):
         fixed = geo.repair_polygonal(g)
@@ -402,11 +439,12 @@ def prepare_strata(
             continue
         keep.append((i, fixed.geometry))
     if repaired:
-        warnings.append(f"Invalid geometry was repaired for feature(s) {_ids(repaired)}; check their outlines.")
+        warnings.append(message("Invalid geometry was repaired for feature(s) {ids}; check their outlines.",
+                                ids=_ids(repaired)))
     if skipped:
-        warnings.append(f"Empty or zero-area feature(s) {_ids(skipped)} were skipped.")
+        warnings.append(message("Empty or zero-area feature(s) {ids} were skipped.", ids=_ids(skipped)))
     if not keep:
-        raise InputError("The frame has no polygon with an area: every feature is empty or has zero area.")
+        raise InputError(message("The frame has no polygon with an area: every feature is empty or has zero area."))
     if n_values is not None:  # checked on the features kept (a skipped empty feature may lack a value)
         n_feat = np.full(len(geometries), -1, dtype=int)
         kept = [i for i, _ in keep]
@@ -416,7 +454,8 @@ def prepare_strata(
         key = strata[i] if strata is not None else None
         if strata is not None and key is None:
             raise InputError(
-                f"{stratum_field} is empty (NULL) for feature {feature_ids[i]}. Give it a stratum value.",
+                message("{field} is empty (NULL) for feature {fid}. Give it a stratum value.",
+                        field=stratum_field, fid=feature_ids[i]),
                 ids=[feature_ids[i]],
             )
         groups.setdefault(key, []).append((i, g))
@@ -440,14 +479,15 @@ def prepare_strata(
             vals = {int(n_feat[i]) for i, _ in members}
             if len(vals) > 1:
                 ids = [feature_ids[i] for i, _ in members]
-                where = "the frame (no stratum field)" if key is None else f"stratum {key}"
-                hint = (
-                    " or choose a stratum field so that each feature is a stratum" if key is None else ""
-                )
                 raise InputError(
-                    f"The features of {where} carry different {n_field} values "
-                    f"({', '.join(str(v) for v in sorted(vals))}) (features {_ids(ids)}). "
-                    f"{n_field} is the number of units of the whole stratum: give its features the same value{hint}.",
+                    message(
+                        "The features of the frame (no stratum field) carry different {n_field} values ({values}) "
+                        "(features {ids}). {n_field} is the number of units of the whole stratum: give its features "
+                        "the same value or choose a stratum field so that each feature is a stratum."
+                        if key is None else
+                        "The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). "
+                        "{n_field} is the number of units of the whole stratum: give its features the same value.",
+                        key=key, n_field=n_field, values=", ".join(str(v) for v in sorted(vals)), ids=_ids(ids)),
                     ids=ids,
                 )
             counts.append(vals.pop())
@@ -455,29 +495,27 @@ def prepare_strata(
     else:
         counts = proportional_counts(areas, int(n_units))
         if int(n_units) < MIN_PER_STRATUM * len(keys):
-            warnings.append(
-                f"N_UNITS = {int(n_units)} is fewer than {MIN_PER_STRATUM} per stratum for {len(keys)} strata; "
-                f"every stratum gets {MIN_PER_STRATUM} ({int(counts.sum())} units)."
-            )
+            warnings.append(message(
+                "N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; "
+                "every stratum gets {minimum} ({total} units).",
+                n_units=int(n_units), minimum=MIN_PER_STRATUM, n_strata=len(keys), total=int(counts.sum())))
     out = []
     radius = spec.radius if spec.inside else 0.0
     for key, label, g, area, n, ids in zip(keys, labels, merged, areas, counts, fids):
         region = geo.inward_buffer(g, radius) if radius > 0 else g
         eff = float(region.area) if not region.is_empty else 0.0
-        name = "the frame" if key is None else f"stratum {key}"
         if eff <= 0 and n + spec.reserve > 0:
             raise InputError(
-                f"{name[0].upper() + name[1:]} is too small for a {SHAPES[spec.shape]} unit of SIZE "
-                f"{spec.size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge "
-                f"(features {_ids(ids)}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.",
+                message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius, ids=_ids(ids)),
                 ids=list(ids),
             )
         if n == 0:
-            warnings.append(f"{name[0].upper() + name[1:]} gets no units; the estimate cannot speak for it.")
+            warnings.append(message("The frame gets no units; the estimate cannot speak for it." if key is None
+                                    else "Stratum {key} gets no units; the estimate cannot speak for it.", key=key))
         elif n == 1:
-            warnings.append(
-                f"{name[0].upper() + name[1:]} gets one unit only; its variance cannot be estimated."
-            )
+            warnings.append(message("The frame gets one unit only; its variance cannot be estimated." if key is None
+                                    else "Stratum {key} gets one unit only; its variance cannot be estimated.",
+                                    key=key))
         if spec.design == SIMPLE_RANDOM:
             draws = (n + spec.reserve) * (3 if spec.min_spacing > 0 else 1.1)
         else:  # the balanced start is one uniform point; the grid needs none
@@ -567,12 +605,18 @@ def hexagonal_capacity(region, distance, offsets=4):
 
 def _spacing_error(stratum, wanted, placed, spec):
     fit = hexagonal_capacity(stratum.region, spec.min_spacing)
-    name = "the frame" if stratum.key is None else f"stratum {stratum.key}"
     return InputError(
-        f"MIN_SPACING = {spec.min_spacing:g} m cannot be met in {name}: {wanted} units were asked for "
-        f"(primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing "
-        "(a hexagonal lattice, the densest arrangement; random layouts fill up well before that). "
-        "Ask for fewer units or reserves, or lower MIN_SPACING.",
+        message(
+            "MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for "
+            "(primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing "
+            "(a hexagonal lattice, the densest arrangement; random layouts fill up well before that). "
+            "Ask for fewer units or reserves, or lower MIN_SPACING."
+            if stratum.key is None else
+            "MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for "
+            "(primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing "
+            "(a hexagonal lattice, the densest arrangement; random layouts fill up well before that). "
+            "Ask for fewer units or reserves, or lower MIN_SPACING.",
+            spacing=spec.min_spacing, key=stratum.key, wanted=wanted, placed=placed, fit=fit),
         ids=[stratum.key] if stratum.key is not None else [],
     )
 
@@ -713,7 +757,7 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
             raise Cancelled("Cancelled while drawing the layout.")
         n = st.n
         r = int(spec.reserve) if n > 0 else 0
-        name = "the frame" if st.key is None else f"stratum {st.key}"
+        whole = st.key is None  # the frame has no strata: messages name "the frame"
         spacing = rotation = float("nan")
         if n == 0:
             centres = np.zeros((0, 2))
@@ -723,9 +767,15 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
             if guard is not None and spacing < spec.min_spacing:
                 fit = int(st.effective_area // spec.min_spacing**2)
                 raise InputError(
-                    f"The grid spacing for {n} units in {name} would be {spacing:.1f} m, below MIN_SPACING = "
-                    f"{spec.min_spacing:g} m. A square grid at {spec.min_spacing:g} m holds about {fit} units there: "
-                    "ask for at most that many, or lower MIN_SPACING.",
+                    message(
+                        "The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = "
+                        "{min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: "
+                        "ask for at most that many, or lower MIN_SPACING."
+                        if whole else
+                        "The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below "
+                        "MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units "
+                        "there: ask for at most that many, or lower MIN_SPACING.",
+                        n=n, key=st.key, spacing=spacing, min_spacing=spec.min_spacing, fit=fit),
                     ids=[st.key] if st.key is not None else [],
                 )
             grid = systematic_grid(st.region, spacing, rng, spec.bearing)
@@ -735,21 +785,26 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
             if guard is not None:
                 ok = guard.take(prim)
                 if not ok.all():
-                    warnings.append(
-                        f"{(~ok).sum()} grid unit(s) of {name} were dropped: closer than MIN_SPACING to units "
-                        "of a neighbouring stratum."
-                    )
+                    warnings.append(message(
+                        "{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units "
+                        "of a neighbouring stratum." if whole else
+                        "{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units "
+                        "of a neighbouring stratum.", n=int((~ok).sum()), key=st.key))
                 prim = prim[ok]
                 res = res[guard.take(res, r)]
             else:
                 res = res[:r]
             if len(prim) == 0:
-                warnings.append(
-                    f"No grid point fell in {name} (spacing {spacing:.1f} m); it gets no units. "
-                    "Use the simple random or spatially balanced design for small or thin strata."
-                )
+                warnings.append(message(
+                    "No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. "
+                    "Use the simple random or spatially balanced design for small or thin strata." if whole else
+                    "No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. "
+                    "Use the simple random or spatially balanced design for small or thin strata.",
+                    spacing=spacing, key=st.key))
             if len(res) < r:
-                warnings.append(f"{name[0].upper() + name[1:]} has only {len(res)} of {r} reserve units.")
+                warnings.append(message(
+                    "The frame has only {n} of {r} reserve units." if whole
+                    else "Stratum {key} has only {n} of {r} reserve units.", n=len(res), r=r, key=st.key))
             n_primary = len(prim)
             centres = np.concatenate([prim, res])
         else:
