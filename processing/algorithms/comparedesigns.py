@@ -296,12 +296,12 @@ class CompareDesigns(PlotwiseAlgorithm):
             region = engine.counting_region(shape, size, half_width)
             setup = engine.prepare_comparison(grid, frame, region, shape, size, rng, strata, keys, bearing, k,
                                               inside=inside)
-            warnings.extend(setup.warnings)
+            warnings.extend(self.translate_message(w) for w in setup.warnings)
             main_end = 70.0 if [m for m in n_range if m != n_units] else 95.0
             comparison = engine.compare_designs(
                 setup, designs, n_units, replicates, rng, variance_method=variance_method,
                 progress=self.progress_callback(feedback, 6, main_end))
-            warnings.extend(comparison.warnings)
+            warnings.extend(self.translate_message(w) for w in comparison.warnings)
             curve = []
             n_range = tuple(m for m in n_range if m != n_units)  # the main comparison stands for N_UNITS
             for i, m in enumerate(n_range):
@@ -313,7 +313,8 @@ class CompareDesigns(PlotwiseAlgorithm):
                         setup, designs, m, replicates, rng, variance_method=variance_method,
                         progress=self.progress_callback(feedback, start, stop)))
                 except InputError as error:  # e.g. fewer units than two per stratum: that n is left out
-                    warnings.append(self.tr("{n} units were left out of the range: {why}").format(n=m, why=error.message))
+                    warnings.append(self.tr("{n} units were left out of the range: {why}").format(
+                        n=m, why=self.translate_message(error.detail or error.message)))
         self.push_warnings(feedback, warnings[already_pushed:])
 
         fields = bridge.make_fields(OUTPUT_FIELDS)

@@ -70,9 +70,9 @@ import math
 import numpy as np
 
 from . import allocation, estimation, layout
-from .errors import Cancelled, InputError
+from .errors import Cancelled, InputError, message
 from .geometry import contains_xy
-from .unit_shapes import CIRCLE, LINE, POINT, SHAPES, SQUARE
+from .unit_shapes import CIRCLE, LINE, POINT, SQUARE
 
 DESIGNS = (
     "simple random",
@@ -82,6 +82,12 @@ DESIGNS = (
     "spatially balanced",
 )
 SIMPLE_RANDOM, STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(5)
+_SIZE_NOT_POSITIVE = {  # by unit shape: every word of a message sits in its template
+    POINT: "SIZE must be more than 0 m: it is the counting radius of a point station.",
+    SQUARE: "SIZE must be more than 0 m: it is the square unit's size.",
+    CIRCLE: "SIZE must be more than 0 m: it is the circle unit's size.",
+    LINE: "SIZE must be more than 0 m: it is the line unit's size.",
+}
 STRATIFIED_DESIGNS = (STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN)
 LAYOUT_DESIGN = {
     SIMPLE_RANDOM: layout.SIMPLE_RANDOM,
@@ -194,10 +200,10 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
     """
     density = np.asarray(density, dtype=float)
     if density.ndim != 2:
-        raise InputError("The density surface must be a single raster band.")
+        raise InputError(message("The density surface must be a single raster band."))
     x0, dx, rx, y0, ry, dy = (float(v) for v in geotransform)
     if rx or ry or dx <= 0 or dy >= 0:
-        raise InputError("The density surface must be a north-up raster (no rotation); warp it first.")
+        raise InputError(message("The density surface must be a north-up raster (no rotation); warp it first."))
     rows, cols = density.shape
     minx, miny, maxx, maxy = frame.bounds
     c0 = max(0, int(math.floor((minx - x0) / dx)))
@@ -205,10 +211,10 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
     r0 = max(0, int(math.floor((y0 - maxy) / -dy)))
     r1 = min(rows, int(math.ceil((y0 - miny) / -dy)))
     if c1 <= c0 or r1 <= r0:
-        raise InputError(
+        raise InputError(message(
             "The density surface does not overlap the frame. Check that both cover the same area "
             "(and their coordinate reference systems)."
-        )
+        ))
     sub = density[r0:r1, c0:c1]
     gt = (x0 + c0 * dx, dx, 0.0, y0 + r0 * dy, 0.0, dy)
     h, w = sub.shape
@@ -224,7 +230,7 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
         groups = {}
         for g, k in zip(strata, keys):
             if k is None:
-                raise InputError("A stratum has no stratum value (NULL). Give every stratum a value.")
+                raise InputError(message("A stratum has no stratum value (NULL). Give every stratum a value."))
             groups.setdefault(k, []).append(g)
         stratum_keys = tuple(_sorted_keys(groups))
         regions = []
@@ -248,40 +254,39 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
         if progress is not None and progress((index + 1) / len(regions)):
             raise Cancelled("Cancelled while reading the surface.")
     if overlap:
-        warnings.append(
-            f"{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. "
-            "Strata should not overlap."
-        )
+        warnings.append(message(
+            "{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. "
+            "Strata should not overlap.", overlap=overlap))
     inside = code >= 0
     if not inside.any():
-        raise InputError(
+        raise InputError(message(
             "No cell centre of the density surface lies in the frame: the surface cells are too coarse for "
             "the frame, or the two do not overlap."
-        )
+        ))
     negative = inside & (sub < 0)
     if negative.any():
-        raise InputError(
-            f"The density surface has {int(negative.sum())} negative cell(s) in the frame. Expected animals "
-            "per km² must be 0 or more: correct the surface (for instance clip it at 0)."
-        )
+        raise InputError(message(
+            "The density surface has {n} negative cell(s) in the frame. Expected animals "
+            "per km² must be 0 or more: correct the surface (for instance clip it at 0).", n=int(negative.sum())))
     missing = inside & ~np.isfinite(sub)
     if missing.any():
         share = missing.sum() / inside.sum()
-        warnings.append(
-            f"{int(missing.sum())} cell(s) of the frame ({share:.1%}) have no value on the density surface "
-            "and are left out of the population: the comparison speaks for the rest of the frame."
-        )
+        warnings.append(message(
+            "{n} cell(s) of the frame ({share:.1%}) have no value on the density surface "
+            "and are left out of the population: the comparison speaks for the rest of the frame.",
+            n=int(missing.sum()), share=share))
         code[missing] = -1
         inside &= ~missing
         if not inside.any():
-            raise InputError("The density surface has no value in the frame.")
+            raise InputError(message("The density surface has no value in the frame."))
     mu = np.where(inside, np.nan_to_num(sub) * dx * -dy / M2_PER_KM2, 0.0)
     cells = np.bincount(code[inside], minlength=len(stratum_keys)).astype(np.int64)
     empty = [k for k, n in zip(stratum_keys, cells) if n == 0]
     if empty:
         raise InputError(
-            f"Strata {', '.join(str(k) for k in empty)} hold no cell centre of the density surface inside the "
-            "frame. Remove them, merge them with a neighbour, or use a finer surface.",
+            message("Strata {ids} hold no cell centre of the density surface inside the "
+                    "frame. Remove them, merge them with a neighbour, or use a finer surface.",
+                    ids=", ".join(str(k) for k in empty)),
             ids=empty,
         )
     return PopulationGrid(mu, code, gt, stratum_keys, cells, tuple(warnings))
@@ -347,15 +352,14 @@ def counting_region(shape, size, half_width=0.0):
     size = float(size)
     half_width = float(half_width or 0.0)
     if shape not in (POINT, SQUARE, CIRCLE, LINE):
-        raise InputError("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")
+        raise InputError(message("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect)."))
     if not size > 0:
-        what = "the counting radius of a point station" if shape == POINT else f"the {SHAPES[shape]} unit's size"
-        raise InputError(f"SIZE must be more than 0 m: it is {what}.")
+        raise InputError(message(_SIZE_NOT_POSITIVE[shape]))
     if shape == LINE and not half_width > 0:
-        raise InputError(
+        raise InputError(message(
             "A line transect needs the half-width of its counting strip (more than 0 m): animals are counted "
             "up to that distance on either side of the line."
-        )
+        ))
     if shape in (POINT, CIRCLE):
         return CountingRegion("circle", radius=size)
     if shape == SQUARE:
@@ -602,7 +606,7 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         by the unit's circumscribing radius.
     """
     if overdispersion < 0:
-        raise InputError("The overdispersion k must be 0 (Poisson counts) or more.")
+        raise InputError(message("The overdispersion k must be 0 (Poisson counts) or more."))
     spec = layout.LayoutSpec(design=layout.SIMPLE_RANDOM, shape=int(shape), size=float(size), bearing=float(bearing),
                              inside=bool(inside))
     factor = subdivision(grid, region)
@@ -618,16 +622,15 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         covered = _union(cut)
         lost = 1.0 - covered.area / frame.area if frame.area > 0 else 0.0
         if lost > 0.005:
-            warnings.append(
-                f"The strata cover {1 - lost:.1%} of the frame: every design is compared on the part the strata "
-                "cover."
-            )
+            warnings.append(message(
+                "The strata cover {share:.1%} of the frame: every design is compared on the part the strata "
+                "cover.", share=1 - lost))
         prepared = layout.prepare_strata(cut, strata=keys, n_units=2 * len(strata), spec=spec)
         position = {k: i for i, k in enumerate(grid.keys)}
         try:
             codes = np.array([position[st.key] for st in prepared.strata], dtype=int)
         except KeyError:
-            raise InputError("A stratum of the layout has no cells on the surface grid.") from None
+            raise InputError(message("A stratum of the layout has no cells on the surface grid.")) from None
         sd, mean = stratum_unit_sd(grid, prepared, codes, region, factor, spec.bearing, overdispersion, rng, sd_draws)
     whole = layout.prepare_strata([covered], n_units=layout.MIN_PER_STRATUM, spec=spec)
     return ComparisonSetup(grid, region, factor, spec, whole, prepared, codes, sd, mean, float(overdispersion),
@@ -703,15 +706,16 @@ def plan_design(setup, design, n_units):
     """
     design = int(design)
     if design not in range(len(DESIGNS)):
-        raise InputError(f"Unknown design {design}; use 0 to {len(DESIGNS) - 1}.")
+        raise InputError(message("Unknown design {design}; use 0 to {last}.", design=design, last=len(DESIGNS) - 1))
     n_units = int(n_units)
     if n_units < layout.MIN_PER_STRATUM:
-        raise InputError(f"N_UNITS must be at least {layout.MIN_PER_STRATUM}.")
+        raise InputError(message("N_UNITS must be at least {minimum}.", minimum=layout.MIN_PER_STRATUM))
     spec = replace(setup.spec, design=LAYOUT_DESIGN[design])
     grid = setup.grid
     if design in STRATIFIED_DESIGNS:
         if setup.strata is None:
-            raise InputError(f"The {DESIGNS[design]} design needs strata: give the STRATA layer.")
+            raise InputError(message("The {design} design needs strata: give the STRATA layer.",
+                                     design=message(DESIGNS[design])))
         strata = setup.strata.strata
         areas = grid.stratum_areas_km2[setup.stratum_codes]
         method = "proportional" if design == STRATIFIED_PROPORTIONAL else "neyman"
@@ -787,16 +791,16 @@ def simulate_designs(setup, designs, n_units, replicates, rng, confidence=0.95, 
     designs = [int(d) for d in designs]
     replicates = int(replicates)
     if replicates < 2:
-        raise InputError("REPLICATES must be at least 2.")
+        raise InputError(message("REPLICATES must be at least 2."))
     plans = tuple(plan_design(setup, d, n_units) for d in designs)
     units = sum(sum(plan.allocation) for plan in plans)
     cells = units * setup.region.area / (setup.grid.cell_area / setup.factor ** 2)
     if cells > MAX_CELLS_PER_REPLICATE:
-        raise InputError(
-            f"Each simulated survey would count about {cells / 1e6:.0f} million surface cells ({units} units of "
-            f"{setup.region.area:,.0f} m² on {setup.grid.cell_width:g} m cells), too many to simulate. Resample "
-            "the surface to coarser cells, or compare fewer designs or units."
-        )
+        raise InputError(message(
+            "Each simulated survey would count about {millions:.0f} million surface cells ({units} units of "
+            "{unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample "
+            "the surface to coarser cells, or compare fewer designs or units.",
+            millions=cells / 1e6, units=units, unit_area=setup.region.area, cell_width=setup.grid.cell_width))
     shape = (replicates, len(plans))
     truth = np.full(replicates, np.nan)
     est, lo, hi, cv, n = (np.full(shape, np.nan) for _ in range(5))
@@ -981,23 +985,27 @@ def compare_designs(setup, designs, n_units, replicates, rng, confidence=0.95, v
                                    results.cv[:, j], results.n[:, j])
         performance.append(DesignPerformance(plan.design, DESIGNS[plan.design], int(n_units), plan.allocation,
                                              **stats))
-        warnings.extend(f"{DESIGNS[plan.design]}: {w}" for w in plan.warnings)
+        design_name = message(DESIGNS[plan.design])
+        warnings.extend(message("{design}: {warning}", design=design_name, warning=w) for w in plan.warnings)
         if stats["failed"]:
-            warnings.append(
-                f"{DESIGNS[plan.design]} at {n_units} units: {stats['failed']} of {replicates} simulated surveys "
+            warnings.append(message(
+                "{design} at {n_units} units: {failed} of {replicates} simulated surveys "
                 "gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out "
-                "of its figures."
-            )
+                "of its figures.", design=design_name, n_units=n_units, failed=stats["failed"], replicates=replicates))
     for p in performance:
         noise = bias_noise(p)
         if np.isfinite(p.rel_bias) and abs(p.rel_bias) > max(NOTABLE_BIAS, noise):
-            edge = ("its stratum" if p.design in STRATIFIED_DESIGNS else "the frame")
-            warnings.append(
-                f"{p.name} at {n_units} units: relative bias {p.rel_bias:+.1%}, beyond the simulation's noise "
-                f"(±{noise:.1%}). Units near the edge of {edge} count only the part inside it (or, kept inside, "
+            warnings.append(message(
+                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
+                "(±{noise:.1%}). Units near the edge of its stratum count only the part inside it (or, kept inside, "
                 "never reach the edge), so edge areas weigh less in the estimate; where their density differs from "
                 "the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it."
-            )
+                if p.design in STRATIFIED_DESIGNS else
+                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
+                "(±{noise:.1%}). Units near the edge of the frame count only the part inside it (or, kept inside, "
+                "never reach the edge), so edge areas weigh less in the estimate; where their density differs from "
+                "the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.",
+                design=message(DESIGNS[p.design]), n_units=n_units, bias=p.rel_bias, noise=noise))
     recommended, near = recommend_design(performance)
     return Comparison(int(n_units), tuple(performance), recommended, near, results, plans, tuple(warnings))
 
@@ -1027,12 +1035,13 @@ def parse_unit_range(text):
             else:
                 values.append(int(float(part)))
     except ValueError:
-        raise InputError(
-            f"The range of units '{text}' cannot be read. Give whole numbers separated by commas "
-            "(e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20)."
-        ) from None
+        raise InputError(message(
+            "The range of units '{text}' cannot be read. Give whole numbers separated by commas "
+            "(e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).", text=text
+        )) from None
     if any(v < layout.MIN_PER_STRATUM for v in values):
-        raise InputError(f"Every number of units in the range must be at least {layout.MIN_PER_STRATUM}.")
+        raise InputError(message("Every number of units in the range must be at least {minimum}.",
+                                 minimum=layout.MIN_PER_STRATUM))
     if len(set(values)) > 20:
-        raise InputError("The range of units holds more than 20 values; give at most 20.")
+        raise InputError(message("The range of units holds more than 20 values; give at most 20."))
     return tuple(sorted(set(values)))
