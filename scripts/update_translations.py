@@ -11,7 +11,10 @@ Recognised calls (contexts as the running code uses them):
 - ``tr("text")`` / ``_tr("text")`` in a module whose own ``def tr`` / ``def _tr`` calls
   ``QCoreApplication.translate("Ctx", ...)``;
 - ``self._tr("text")`` / ``tr("text")`` in processing/report (context ``PlotwiseReport``), including
-  module-level string constants passed by name.
+  module-level string constants passed by name;
+- ``message("template", ...)`` in a module that imports ``message`` from ``engine/errors.py`` (the
+  engine, ``raster_io``, ``raster_masking``): context ``PlotwiseEngine``, as the algorithms'
+  ``translate_message`` uses it.
 
 The parameter labels of the example chains (``processing/models/*.model3``) are extracted too,
 in context ``ExampleChain`` (the provider translates them when it loads a chain).
@@ -35,6 +38,7 @@ REPO = Path(__file__).resolve().parents[1]
 LANGUAGES = {"fr": "fr_FR", "es": "es_ES"}
 SOURCES = ["plugin", "processing"]
 REPORT_CONTEXT = "PlotwiseReport"
+ENGINE_CONTEXT = "PlotwiseEngine"
 MODEL_CONTEXT = "ExampleChain"
 MARKERS = ("translate", "QT_TRANSLATE_NOOP", "translatable")
 
@@ -178,6 +182,11 @@ def extract_file(path, unresolved=None):
     modules = INDEX.imported_modules(path)
     in_report = "report" in path.parts
     module_context = REPORT_CONTEXT if in_report else _module_tr_context(tree)
+    engine_messages = any(  # from .errors import message / from .engine.errors import message
+        isinstance(n, ast.ImportFrom) and (n.module or "").split(".")[-1] == "errors"
+        and any(a.name == "message" and not a.asname for a in n.names)
+        for n in tree.body
+    )
     context_wrappers = _module_context_wrappers(tree)
 
     def texts(node):
@@ -245,7 +254,9 @@ def extract_file(path, unresolved=None):
         func = call.func
         attr = func.attr if isinstance(func, ast.Attribute) else getattr(func, "id", None)
         args = call.args
-        if (attr in MARKERS or isinstance(func, ast.Name) and attr in context_wrappers) and len(args) >= 2:
+        if engine_messages and attr == "message" and isinstance(func, ast.Name) and args:
+            yield from emit(ENGINE_CONTEXT, args[0], call)
+        elif (attr in MARKERS or isinstance(func, ast.Name) and attr in context_wrappers) and len(args) >= 2:
             ctx = context_of(args[0])
             if ctx:  # translate(context, text) with a variable context is a wrapper, not a message
                 yield from emit(ctx, args[1], call)
@@ -277,7 +288,8 @@ def extract_file(path, unresolved=None):
 def _is_wrapper(path, line):
     tree = INDEX.tree(path)
     for node in ast.walk(tree):
-        if isinstance(node, ast.FunctionDef) and node.name in ("tr", "_tr") and node.lineno <= line <= node.end_lineno:
+        if (isinstance(node, ast.FunctionDef) and node.name in ("tr", "_tr", "translate_message")
+                and node.lineno <= line <= node.end_lineno):
             return True
         if isinstance(node, ast.Lambda) and node.lineno <= line <= node.end_lineno:
             return True
@@ -310,8 +322,6 @@ def extract(unresolved=None):
             messages.setdefault((ctx, text), []).append((path.relative_to(REPO), line))
     for folder in SOURCES:
         for path in sorted((REPO / folder).rglob("*.py")):
-            if "engine" in path.relative_to(REPO).parts:
-                continue
             for ctx, text, line in extract_file(path, found):
                 messages.setdefault((ctx, text), []).append((path.relative_to(REPO), line))
     if unresolved is not None:
