@@ -155,9 +155,35 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
       <translation>La capa «{layer}» no tiene ningún estrato con área.</translation>
     </message>
     <message>
+      <location filename="../processing/algorithms/allocate.py" line="199" />
+      <source>field '{name}' of layer '{layer}'</source>
+      <translation>campo «{name}» de la capa «{layer}»</translation>
+    </message>
+    <message>
       <location filename="../processing/algorithms/allocate.py" line="214" />
       <source>No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
       <translation>No hay campo de DE piloto: se usa como sustituto la DE de la covariable («{field}»). Esto supone que los conteos siguen a la covariable; sustitúyala por la DE de un muestreo piloto cuando la tenga. Los errores estándar esperados quedan entonces en unidades de la covariable, no en conteos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="230" />
+      <source>polygon area</source>
+      <translation>área del polígono</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="231" />
+      <source>pilot SD</source>
+      <translation>desviación estándar piloto</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="232" />
+      <source>pilot mean</source>
+      <translation>media piloto</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="233" />
+      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <source>cost</source>
+      <translation>coste</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="256" />
@@ -218,11 +244,6 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
       <location filename="../processing/algorithms/allocate.py" line="294" />
       <source>field days needed</source>
       <translation>jornadas de campo necesarias</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/allocate.py" line="294" />
-      <source>cost</source>
-      <translation>coste</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="296" />
@@ -824,7 +845,7 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="128" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
       <source>Sampling frame</source>
       <translation>Marco de muestreo</translation>
     </message>
@@ -835,7 +856,7 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="137" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>Stratum field</source>
       <translation>Campo de estrato</translation>
     </message>
@@ -871,7 +892,7 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="150" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
       <source>Number of units</source>
       <translation>Número de unidades</translation>
     </message>
@@ -922,7 +943,7 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="186" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>Simulated surveys per design</source>
       <translation>Muestreos simulados por diseño</translation>
     </message>
@@ -1017,385 +1038,385 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
       <translation>{n} unidades quedaron fuera del rango: {why}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="322" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="323" />
       <source>The output table could not be created.</source>
       <translation>No se pudo crear la tabla de salida.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="339" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="340" />
       <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
       <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="348" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="349" />
       <source>Survey designs compared by simulation</source>
       <translation>Diseños de muestreo comparados por simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="354" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
       <source>recommended design</source>
       <translation>diseño recomendado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="356" />
       <source>its RMSE (animals)</source>
       <translation>su RECM (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="356" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
       <source>its RMSE relative to the total</source>
       <translation>su RECM relativa al total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
       <source>its 95 % interval coverage</source>
       <translation>cobertura de sus intervalos al 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="359" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="360" />
       <source>expected animals in the frame</source>
       <translation>animales esperados en el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>point station</source>
       <translation>estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>square plot</source>
       <translation>parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>circular plot</source>
       <translation>parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>line transect</source>
       <translation>transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>counting radius</source>
       <translation>radio de conteo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>side</source>
       <translation>lado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>radius</source>
       <translation>radio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>length</source>
       <translation>longitud</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
       <source>, strip half-width {w:g} m</source>
       <translation>, semianchura de franja {w:g} m</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
       <source>Density surface</source>
       <translation>Superficie de densidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="470" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="471" />
       <source>Strata</source>
       <translation>Estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
       <source>none</source>
       <translation>ninguno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>feature id</source>
       <translation>identificador de entidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
       <source>Computation CRS</source>
       <translation>SRC de cálculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
       <source>Surface cell</source>
       <translation>Celda de la superficie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
       <source>Sub-cells per cell side (for counting)</source>
       <translation>Subceldas por lado de celda (para el conteo)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
       <source>Unit</source>
       <translation>Unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
       <source>Counted area per unit (m²)</source>
       <translation>Área contada por unidad (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>Bearing</source>
       <translation>Rumbo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>random</source>
       <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>Units wholly inside their stratum</source>
       <translation>Unidades por completo dentro de su estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>yes</source>
       <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>no</source>
       <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
       <source>Counts per cell</source>
       <translation>Conteos por celda</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
       <source>negative binomial, k = {k:g}</source>
       <translation>binomial negativa, k = {k:g}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
       <source>Poisson</source>
       <translation>Poisson</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
       <source>Variance estimator (grid, balanced)</source>
       <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
       <source>local neighbourhood</source>
       <translation>vecindario local</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
       <source>simple random sampling formula</source>
       <translation>fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
       <source>Confidence level</source>
       <translation>Nivel de confianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
       <source>Seed</source>
       <translation>Semilla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="391" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>How the designs did at {n} units</source>
       <translation>Resultados de los diseños con {n} unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Design</source>
       <translation>Diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Mean units surveyed</source>
       <translation>Media de unidades muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Relative bias</source>
       <translation>Sesgo relativo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Empirical SE (animals)</source>
       <translation>Error estándar empírico (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="507" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="508" />
       <source>RMSE (animals)</source>
       <translation>RECM (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>± Monte Carlo SE</source>
       <translation>± error estándar de Monte Carlo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>RMSE / total</source>
       <translation>RECM / total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>Mean estimated CV</source>
       <translation>CV estimado medio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="395" />
       <source>95 % interval coverage</source>
       <translation>Cobertura de los intervalos al 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="395" />
       <source>Surveys without an estimate</source>
       <translation>Muestreos sin estimación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="405" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="406" />
       <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
       <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="413" />
       <source>RMSE of the abundance (animals)</source>
       <translation>RECM de la abundancia (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="415" />
       <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
       <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="417" />
       <source>Recommendation</source>
       <translation>Recomendación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="418" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="419" />
       <source>No design gave estimates: see the warnings.</source>
       <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="420" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="421" />
       <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
       <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="426" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="427" />
       <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
       <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="433" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="434" />
       <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
       <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="438" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="439" />
       <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
       <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="447" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="448" />
       <source>How the simulation works</source>
       <translation>Cómo funciona la simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="448" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="449" />
       <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
       <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="457" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="458" />
       <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
       <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>Area (km²)</source>
       <translation>Área (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>Mean expected count per unit</source>
       <translation>Conteo esperado medio por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>S_h (count SD per unit)</source>
       <translation>S_h (DE del conteo por unidad)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="475" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="476" />
       <source>Units, proportional</source>
       <translation>Unidades, proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="477" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="478" />
       <source>Units, Neyman</source>
       <translation>Unidades, Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="487" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="488" />
       <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
       <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="495" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="496" />
       <source>RMSE against the number of units</source>
       <translation>RECM frente al número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
       <source>number of units</source>
       <translation>número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="504" />
       <source>RMSE of the abundance estimate against the number of units</source>
       <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="505" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="506" />
       <source>Units</source>
       <translation>Unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="513" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="514" />
       <source>{a} → {b} units: RMSE {change:+.0%}</source>
       <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="514" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="515" />
       <source>For {name}: </source>
       <translation>Para {name}: </translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="515" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="516" />
       <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
       <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
     </message>
@@ -2633,317 +2654,317 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="249" />
+      <location filename="../processing/algorithms/layout.py" line="250" />
       <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
       <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="263" />
+      <location filename="../processing/algorithms/layout.py" line="264" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="267" />
+      <location filename="../processing/algorithms/layout.py" line="268" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="281" />
       <source>the frame</source>
       <translation>el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="281" />
       <source>stratum {key}</source>
       <translation>estrato {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="336" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Sample-unit layout</source>
       <translation>Disposición de las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="341" />
-      <location filename="../processing/algorithms/layout.py" line="443" />
+      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="444" />
       <source>primary units</source>
       <translation>unidades principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <location filename="../processing/algorithms/layout.py" line="444" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="445" />
       <source>reserve units</source>
       <translation>unidades de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
       <source>strata</source>
       <translation>estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
       <source>design</source>
       <translation>diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>simple random</source>
       <translation>aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>systematic grid</source>
       <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>spatially balanced</source>
       <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="346" />
+      <location filename="../processing/algorithms/layout.py" line="347" />
       <source>Replacing units in the field</source>
       <translation>Sustituir unidades en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="348" />
+      <location filename="../processing/algorithms/layout.py" line="349" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="353" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Units per stratum</source>
       <translation>Unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Area (ha)</source>
       <translation>Área (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Effective area (ha)</source>
       <translation>Área efectiva (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Units asked</source>
       <translation>Unidades pedidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Reserve</source>
       <translation>Reservas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="359" />
       <source>Grid spacing (m)</source>
       <translation>Espaciado de la cuadrícula (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="359" />
       <source>Grid rotation (°)</source>
       <translation>Rotación de la cuadrícula (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="361" />
+      <location filename="../processing/algorithms/layout.py" line="362" />
       <source>frame</source>
       <translation>marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="369" />
+      <location filename="../processing/algorithms/layout.py" line="370" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="371" />
+      <location filename="../processing/algorithms/layout.py" line="372" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="375" />
+      <location filename="../processing/algorithms/layout.py" line="376" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Map</source>
       <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="387" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
+      <location filename="../processing/algorithms/layout.py" line="388" />
       <source>Method</source>
       <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="391" />
+      <location filename="../processing/algorithms/layout.py" line="392" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>Frame (FRAME)</source>
       <translation>Marco (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Campo de estrato (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>(none: one stratum)</source>
       <translation>(ninguno: un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Campo de unidades por estrato (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>(none)</source>
       <translation>(ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Total units (N_UNITS)</source>
       <translation>Total de unidades (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>(not used)</source>
       <translation>(no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>Design (DESIGN)</source>
       <translation>Diseño (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forma de la unidad (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>point</source>
       <translation>punto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>square</source>
       <translation>cuadrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>circle</source>
       <translation>círculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>line</source>
       <translation>línea</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>Unit size (SIZE, m)</source>
       <translation>Tamaño de la unidad (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Rumbo (BEARING, grados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>random</source>
       <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>Keep inside (INSIDE)</source>
       <translation>Mantener dentro (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>yes</source>
       <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>no</source>
       <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="403" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Separación mínima (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="404" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Reservas por estrato (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="405" />
       <source>Seed (SEED)</source>
       <translation>Semilla (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="405" />
+      <location filename="../processing/algorithms/layout.py" line="406" />
       <source>CRS of the computation and the output</source>
       <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="413" />
+      <location filename="../processing/algorithms/layout.py" line="414" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="415" />
+      <location filename="../processing/algorithms/layout.py" line="416" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="417" />
+      <location filename="../processing/algorithms/layout.py" line="418" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="424" />
+      <location filename="../processing/algorithms/layout.py" line="425" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
     </message>
@@ -2952,8 +2973,8 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
     <name>PlotwiseAlgorithm</name>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="258" />
-      <location filename="../processing/algorithms/base.py" line="116" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="325" />
+      <location filename="../processing/algorithms/base.py" line="117" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="326" />
       <location filename="../processing/algorithms/demoreserve.py" line="117" />
       <location filename="../processing/algorithms/estimate.py" line="375" />
       <location filename="../processing/algorithms/simulatecounts.py" line="113" />
@@ -3000,7 +3021,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>Semilla usada: {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="136" />
+      <location filename="../processing/algorithms/base.py" line="147" />
       <source>Report written to {path}</source>
       <translation>Informe escrito en {path}</translation>
     </message>
@@ -3008,17 +3029,17 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwiseBridge</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="551" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="552" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="563" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="564" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="576" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="577" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>
@@ -3071,6 +3092,917 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <location filename="../processing/bridge.py" line="264" />
       <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
       <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseEngine</name>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="48" />
+      <source>stratum area</source>
+      <translation>área del estrato</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="49" />
+      <source>pilot standard deviation</source>
+      <translation>desviación estándar piloto</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="50" />
+      <source>pilot mean count</source>
+      <translation>conteo medio piloto</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="51" />
+      <source>cost per unit</source>
+      <translation>coste por unidad</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="384" />
+      <location filename="../processing/engine/layout.py" line="361" />
+      <source>{shown} and {more} more</source>
+      <translation>{shown} y {more} más</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="406" />
+      <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
+      <translation>Valor NULL o negativo ({name}) para las entidades de estrato {shown}. Introduzca un valor no negativo para cada estrato, o quite esos estratos de la capa.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="410" />
+      <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
+      <translation>Valor NULL, negativo o cero ({name}) para las entidades de estrato {shown}. Introduzca un valor positivo para cada estrato, o quite esos estratos de la capa.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="477" />
+      <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
+      <translation>Método de asignación desconocido {method!r}; use uno de: {methods}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="481" />
+      <source>The strata layer has no features. Run the stratification first.</source>
+      <translation>La capa de estratos no tiene entidades. Ejecute primero la estratificación.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="486" />
+      <source>The unit area must be a positive number.</source>
+      <translation>El área de la unidad debe ser un número positivo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="489" />
+      <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
+      <translation>El mínimo por estrato debe ser al menos 1 (2 permite estimar la varianza de cada estrato).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="502" />
+      <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
+      <translation>El método por coste necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="504" />
+      <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
+      <translation>El presupuesto necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="508" />
+      <source>The fixed cost must be zero or positive.</source>
+      <translation>El coste fijo debe ser cero o positivo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="515" />
+      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
+      <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (proporcional al área).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="518" />
+      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
+      <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (área / raíz cuadrada del coste).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="523" />
+      <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
+      <translation>Todas las desviaciones estándar piloto son cero: se usa en su lugar la asignación proporcional.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="527" />
+      <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
+      <translation>Valor cero ({name}) para las entidades de estrato {shown}: reciben solo el mínimo de {minimum} unidad(es). Un piloto sin variación rara vez refleja la realidad; compruébelo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="539" />
+      <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
+      <translation>Las entidades de estrato {shown} son más pequeñas que una unidad de muestreo de {unit_area:g}. Fusiónelas con una vecina o use un área de unidad menor.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="546" />
+      <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
+      <translation>Las entidades de estrato {shown} contienen menos de {minimum} unidades: reciben todas las unidades que caben.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="555" />
+      <source>A target CV is set: the budget is not used.</source>
+      <translation>Hay un CV objetivo: no se usa el presupuesto.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="561" />
+      <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
+      <translation>El presupuesto {budget:g} es inferior al mínimo de {minimum:g} (coste fijo {fixed_cost:g} más {per_stratum} unidad(es) en cada estrato a su coste). Aumente el presupuesto o baje el mínimo por estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="568" />
+      <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
+      <translation>El presupuesto supera el coste de todas las unidades que caben ({maximum:g}): se toman todas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="576" />
+      <source>Give a total number of units, a budget (with costs) or a target CV.</source>
+      <translation>Indique un número total de unidades, un presupuesto (con costes) o un CV objetivo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="579" />
+      <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
+      <translation>El total de {total} unidades es inferior al mínimo de {minimum} ({per_stratum} por estrato en {n_strata} estratos). Aumente el total o baje el mínimo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="584" />
+      <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
+      <translation>El total de {total} unidades supera las {fit} unidades de {unit_area:g} que caben en los estratos. Baje el total o use unidades más pequeñas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="594" />
+      <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
+      <translation>Las entidades de estrato {shown} reciben una sola unidad: su varianza no puede estimarse.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="599" />
+      <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
+      <translation>Las entidades de estrato {shown} se muestrean por completo (todas las unidades que caben).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="604" />
+      <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
+      <translation>Valor cero ({name}) en las entidades de estrato {shown}: su CV no está definido.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="628" />
+      <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
+      <translation>Un CV objetivo necesita la desviación estándar piloto y el conteo medio piloto por unidad: elija el campo de DE y el campo de media.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="633" />
+      <source>The {name} is zero in every stratum: no CV can be computed.</source>
+      <translation>Valor cero ({name}) en todos los estratos: no puede calcularse ningún CV.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="643" />
+      <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
+      <translation>El CV objetivo de {target_cv:.3g} no puede alcanzarse: incluso las {fit} unidades que caben dan un CV esperado de {cv:.3g}. Acepte un CV de al menos {cv:.3g}, o use unidades más pequeñas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="31" />
+      <source>needs a positive area_m2</source>
+      <translation>necesita un area_m2 positivo</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="36" />
+      <source>has a line of zero length</source>
+      <translation>tiene una línea de longitud cero</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="38" />
+      <source>has an unsupported geometry type ({kind})</source>
+      <translation>tiene un tipo de geometría no admitido ({kind})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="64" />
+      <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
+      <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {detection:g}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/demo_reserve.py" line="108" />
+      <source>Could not place the demo lake; try another seed.</source>
+      <translation>No se pudo colocar el lago de demostración; pruebe otra semilla.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/demo_reserve.py" line="184" />
+      <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
+      <translation>El tamaño de celda debe estar entre 10 y 500 m (se recibió {cell_size:g} m).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="203" />
+      <source>The density surface must be a single raster band.</source>
+      <translation>La superficie de densidad debe ser una sola banda ráster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="206" />
+      <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
+      <translation>La superficie de densidad debe ser un ráster orientado al norte (sin rotación); reproyéctela primero.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="214" />
+      <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
+      <translation>La superficie de densidad no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona (y sus sistemas de referencia de coordenadas).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="233" />
+      <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
+      <translation>Un estrato no tiene valor de estrato (NULL). Dé un valor a cada estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="257" />
+      <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
+      <translation>{overlap} celda(s) de la superficie están en más de un estrato; cada una se asignó al primero. Los estratos no deberían superponerse.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="262" />
+      <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
+      <translation>Ningún centro de celda de la superficie de densidad cae en el marco de muestreo: las celdas son demasiado gruesas para él, o ambos no se superponen.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="268" />
+      <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
+      <translation>La superficie de densidad tiene {n} celda(s) negativa(s) en el marco de muestreo. Los animales esperados por km² deben ser 0 o más: corrija la superficie (por ejemplo, recórtela en 0).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="274" />
+      <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
+      <translation>{n} celda(s) del marco de muestreo ({share:.1%}) no tienen valor en la superficie de densidad y quedan fuera de la población: la comparación vale para el resto del marco.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="281" />
+      <source>The density surface has no value in the frame.</source>
+      <translation>La superficie de densidad no tiene ningún valor en el marco de muestreo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="287" />
+      <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
+      <translation>Los estratos {ids} no contienen ningún centro de celda de la superficie de densidad dentro del marco de muestreo. Quítelos, fusiónelos con un vecino, o use una superficie más fina.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="355" />
+      <location filename="../processing/engine/layout.py" line="149" />
+      <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
+      <translation>SHAPE debe ser 0 (punto), 1 (cuadrado), 2 (círculo) o 3 (transecto lineal).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
+      <translation>SIZE debe ser mayor que 0 m: es el radio de conteo de una estación puntual.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the square unit's size.</source>
+      <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad cuadrada.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the circle unit's size.</source>
+      <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad circular.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the line unit's size.</source>
+      <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad lineal.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="359" />
+      <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
+      <translation>Un transecto lineal necesita la semianchura de su franja de conteo (más de 0 m): los animales se cuentan hasta esa distancia a cada lado de la línea.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="609" />
+      <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
+      <translation>La sobredispersión k debe ser 0 (conteos de Poisson) o más.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="625" />
+      <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
+      <translation>Los estratos cubren el {share:.1%} del marco de muestreo: cada diseño se compara en la parte que cubren.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="633" />
+      <source>A stratum of the layout has no cells on the surface grid.</source>
+      <translation>Un estrato de la disposición no tiene celdas en la cuadrícula de la superficie.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="709" />
+      <source>Unknown design {design}; use 0 to {last}.</source>
+      <translation>Diseño desconocido {design}; use de 0 a {last}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="712" />
+      <source>N_UNITS must be at least {minimum}.</source>
+      <translation>N_UNITS debe ser al menos {minimum}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="717" />
+      <source>The {design} design needs strata: give the STRATA layer.</source>
+      <translation>El diseño «{design}» necesita estratos: indique la capa STRATA.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>simple random</source>
+      <translation>aleatorio simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>stratified proportional</source>
+      <translation>estratificado proporcional</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>stratified Neyman</source>
+      <translation>estratificado Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>systematic grid</source>
+      <translation>cuadrícula sistemática</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>spatially balanced</source>
+      <translation>espacialmente equilibrado</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="794" />
+      <source>REPLICATES must be at least 2.</source>
+      <translation>REPLICATES debe ser al menos 2.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="799" />
+      <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
+      <translation>Cada muestreo simulado contaría unos {millions:.0f} millones de celdas de la superficie ({units} unidades de {unit_area:,.0f} m² en celdas de {cell_width:g} m), demasiadas para simular. Remuestree la superficie a celdas más gruesas, o compare menos diseños o unidades.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="989" />
+      <source>{design}: {warning}</source>
+      <translation>{design}: {warning}</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="991" />
+      <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
+      <translation>{design} con {n_units} unidades: {failed} de los {replicates} muestreos simulados no dieron estimación (un estrato sin unidad contada, o ninguna unidad en el marco de muestreo); se excluyen de sus cifras.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="998" />
+      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%}). Units near the edge of its stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
+      <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%}). Las unidades cercanas al borde de su estrato cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más compactos, lo reducen.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="998" />
+      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%}). Units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
+      <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%}). Las unidades cercanas al borde del marco de muestreo cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más compactos, lo reducen.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="1038" />
+      <source>The range of units '{text}' cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
+      <translation>El rango de unidades «{text}» no puede leerse. Indique números enteros separados por comas (p. ej. 20, 40, 80) o inicio:fin:paso (p. ej. 20:100:20).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="1043" />
+      <source>Every number of units in the range must be at least {minimum}.</source>
+      <translation>Cada número de unidades del rango debe ser al menos {minimum}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="1046" />
+      <source>The range of units holds more than 20 values; give at most 20.</source>
+      <translation>El rango de unidades tiene más de 20 valores; indique como máximo 20.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="274" />
+      <source>{shown} … ({n} in all)</source>
+      <translation>{shown} … ({n} en total)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="308" />
+      <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
+      <translation>El campo {count_name} contiene valores que no son números para las unidades {ids}. Introduzca un conteo entero (0 si se muestreó y no se vio ninguno) o deje el campo vacío (NULL) para las unidades no muestreadas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="318" />
+      <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
+      <translation>El campo {count_name} contiene conteos negativos o infinitos para las unidades {ids}. Los conteos deben ser 0 o más; corríjalos, o deje el campo vacío (NULL) si la unidad no se muestreó.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="442" />
+      <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
+      <translation>El nivel de confianza debe estar entre 0 y 1 (se recibió {confidence}); use p. ej. 0.95.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="445" />
+      <source>Unknown interval method {method!r}; use one of {methods}.</source>
+      <translation>Método de intervalo desconocido {method!r}; use uno de {methods}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="448" />
+      <source>Unknown variance method {method!r}; use one of {methods}.</source>
+      <translation>Método de varianza desconocido {method!r}; use uno de {methods}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="451" />
+      <source>The detection probability must lie in (0, 1] (got {p}).</source>
+      <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {p}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="453" />
+      <source>The standard error of the detection probability must be 0 or more.</source>
+      <translation>El error estándar de la probabilidad de detección debe ser 0 o más.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="462" />
+      <source>unit_ids must have one id per unit.</source>
+      <translation>unit_ids debe tener un identificador por unidad.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="466" />
+      <source>counts, unit_areas and strata must have one value per unit.</source>
+      <translation>counts, unit_areas y strata deben tener un valor por unidad.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="475" />
+      <source>Strata {ids} have no area. Check the strata layer's geometries.</source>
+      <translation>Los estratos {ids} no tienen área. Compruebe las geometrías de la capa de estratos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="483" />
+      <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
+      <translation>Las unidades {ids} no tienen estrato (el campo de estrato está vacío). Rellene su estrato, u omita el campo de estrato para tratar el marco de muestreo como un solo estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="493" />
+      <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
+      <translation>Las unidades {ids} tienen identificadores de estrato ({names}) que no están en la capa de estratos. Compruebe el campo de estrato de las unidades y el campo identificador de la capa de estratos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="501" />
+      <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
+      <translation>{n} unidad(es) no tienen conteo y se tratan como no muestreadas (no respuesta): {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="506" />
+      <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
+      <translation>Ninguna unidad tiene conteo, así que no puede estimarse nada. Introduzca los conteos de las unidades muestreadas (0 si no se vio ninguno) en el campo de conteo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="513" />
+      <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
+      <translation>Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="523" />
+      <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
+      <translation>Los datos de presencia deben ser 0 o 1; las unidades {ids} contienen otros valores. Use los conteos sin la opción de presencia, o recodifique el campo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="528" />
+      <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
+      <translation>La probabilidad de detección no se aplicó a los datos de presencia: dividir una proporción de unidades ocupadas por p no es una corrección de ocupación, que requiere visitas repetidas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="547" />
+      <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
+      <translation>Ninguna unidad de los estratos {ids} se muestreó, así que su abundancia no puede estimarse. Muestree unidades allí, o elija dejar fuera esos estratos (la estimación cubre entonces un marco de muestreo menor).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="553" />
+      <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
+      <translation>Los estratos {ids} no tenían ninguna unidad muestreada y se dejaron fuera: el marco de muestreo se redujo en {dropped_area:.6g} unidades de área, y la estimación cubre solo los estratos restantes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="569" />
+      <source>The local neighbourhood variance needs the positions of the units.</source>
+      <translation>La varianza de vecindad local necesita las posiciones de las unidades.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="574" />
+      <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
+      <translation>Las unidades {ids} no tienen posición, así que la varianza de vecindad local no puede usarlas. Indique sus ubicaciones, o use la fórmula del muestreo aleatorio simple.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="599" />
+      <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
+      <translation>En los estratos {ids} el área muestreada supera el área del estrato. Compruebe las áreas de las unidades y la unidad de área, o desactive la corrección por población finita.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="640" />
+      <source>{label} (one unit) collapsed with {others}</source>
+      <translation>{label} (una unidad) agrupado con {others}</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="645" />
+      <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
+      <translation>Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="650" />
+      <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
+      <translation>El único estrato tiene una sola unidad muestreada: no puede estimarse ninguna varianza, error estándar ni intervalo. Muestree al menos dos unidades.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="666" />
+      <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
+      <translation>Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="702" />
+      <source>The bootstrap needs a random generator (rng).</source>
+      <translation>El bootstrap necesita un generador aleatorio (rng).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="734" />
+      <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
+      <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0 y su CV no está definido.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="737" />
+      <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
+      <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="782" />
+      <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own CV is {cv_p:.3g}. Improve the detection study first.</source>
+      <translation>El CV objetivo {target_cv:.3g} no puede alcanzarse con más unidades: el CV propio de la probabilidad de detección es {cv_p:.3g}. Mejore primero el estudio de detección.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="791" />
+      <source>No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.</source>
+      <translation>No se observó variación, así que los tamaños de muestra del próximo muestreo se fijan en el mínimo de 2 por estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="222" />
+      <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
+      <translation>EDGE_BUFFER es {edge_buffer} m; debe ser cero o una distancia positiva en metros.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="229" />
+      <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
+      <translation>El área de estudio (INPUT) no tiene ningún polígono con área positiva. Compruebe que la capa contiene polígonos y está en un SRC proyectado en metros.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="274" />
+      <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
+      <translation>No queda nada del área de estudio (INPUT) tras quitar los polígonos excluidos (EXCLUDE): cubren las {hectares:.4g} ha. Compruebe que EXCLUDE contiene solo las zonas que hay que dejar fuera.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="280" />
+      <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster's units, or check that the raster covers the study area.</source>
+      <translation>No queda nada del marco de muestreo tras la máscara ráster (MASK): cada celda de las {hectares:.4g} ha restantes está fuera de [MASK_MIN, MASK_MAX] o es NoData. Amplíe el rango, compruebe las unidades del ráster, o compruebe que el ráster cubre el área de estudio.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="287" />
+      <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area's boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
+      <translation>No queda nada del marco de muestreo tras el búfer interior (EDGE_BUFFER = {edge_buffer:g} m): las {hectares:.4g} ha restantes están todas a menos de esa distancia del límite del área de estudio (extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="147" />
+      <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
+      <translation>DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
+      <translation>SIZE debe ser mayor que 0 m para una unidad puntual; es {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
+      <translation>SIZE debe ser mayor que 0 m para una unidad cuadrada; es {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
+      <translation>SIZE debe ser mayor que 0 m para una unidad circular; es {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
+      <translation>SIZE debe ser mayor que 0 m para una unidad lineal; es {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="153" />
+      <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
+      <translation>BEARING debe ser -1 (aleatorio) o estar entre 0 y 360 grados; es {bearing}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="156" />
+      <source>MIN_SPACING must be 0 or more metres.</source>
+      <translation>MIN_SPACING debe ser 0 metros o más.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="158" />
+      <source>RESERVE must be 0 or a positive whole number.</source>
+      <translation>RESERVE debe ser 0 o un número entero positivo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="337" />
+      <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
+      <translation>{field} está vacío (NULL) o no es un número para las entidades {ids}. Dé a cada estrato un número entero de unidades, o deje N_FIELD sin definir para usar N_UNITS.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="344" />
+      <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
+      <translation>{field} es negativo para las entidades {ids}. Use 0 o un número entero positivo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="350" />
+      <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
+      <translation>{field} no es un número entero para las entidades {ids}. Redondee primero la asignación a unidades enteras.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="431" />
+      <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
+      <translation>Indique N_FIELD (unidades por estrato) o N_UNITS (un total de al menos 1).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="442" />
+      <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
+      <translation>Se reparó una geometría no válida en las entidades {ids}; compruebe sus contornos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="445" />
+      <source>Empty or zero-area feature(s) {ids} were skipped.</source>
+      <translation>Se omitieron las entidades vacías o de área nula {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="447" />
+      <source>The frame has no polygon with an area: every feature is empty or has zero area.</source>
+      <translation>El marco de muestreo no tiene ningún polígono con área: cada entidad está vacía o tiene área nula.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="457" />
+      <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
+      <translation>{field} está vacío (NULL) para la entidad {fid}. Dele un valor de estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="483" />
+      <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
+      <translation>Las entidades del marco de muestreo (sin campo de estrato) tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades o elija un campo de estrato para que cada entidad sea un estrato.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="483" />
+      <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
+      <translation>Las entidades del estrato {key} tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="498" />
+      <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
+      <translation>N_UNITS = {n_units} es menos de {minimum} por estrato para {n_strata} estratos; cada estrato recibe {minimum} ({total} unidades).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El marco de muestreo es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El marco de muestreo es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El marco de muestreo es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El marco de muestreo es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El estrato {key} es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El estrato {key} es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El estrato {key} es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="513" />
+      <source>The frame gets no units; the estimate cannot speak for it.</source>
+      <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="513" />
+      <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
+      <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="516" />
+      <source>The frame gets one unit only; its variance cannot be estimated.</source>
+      <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="516" />
+      <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
+      <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="609" />
+      <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+      <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="609" />
+      <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+      <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="770" />
+      <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+      <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="770" />
+      <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+      <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="788" />
+      <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+      <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="788" />
+      <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+      <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="798" />
+      <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+      <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="798" />
+      <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+      <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="805" />
+      <source>The frame has only {n} of {r} reserve units.</source>
+      <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="805" />
+      <source>Stratum {key} has only {n} of {r} reserve units.</source>
+      <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="462" />
+      <source>No cell of the frame has a value in every covariate.</source>
+      <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="652" />
+      <source>The covariates take fewer distinct value combinations than strata asked for.</source>
+      <translation>Las covariables toman menos combinaciones de valores distintas que estratos pedidos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="913" />
+      <source>The frame holds no raster cell.</source>
+      <translation>El marco de muestreo no contiene ninguna celda ráster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1107" />
+      <source>Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
+      <translation>La covariable «{name}» es constante ({value:g}) en el marco de muestreo: no puede definir estratos. Use otra covariable, o compruebe el marco y el ráster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1147" />
+      <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
+      <translation>METHOD desconocido {method!r}: use de 0 (cuantiles) a 4 (clases del ráster).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1149" />
+      <source>Ask for at least 2 strata (STRATA).</source>
+      <translation>Pida al menos 2 estratos (STRATA).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1150" />
+      <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
+      <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables ({names}). Compruebe que los rásteres cubren el marco y que su valor NoData es correcto.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1185" />
+      <source>Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+      <translation>La covariable «{name}» toma solo {n_distinct} valores distintos en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1199" />
+      <source>Some boundaries coincide (many cells share the same value of '{name}'); {formed} strata are formed instead of {k}.</source>
+      <translation>Algunos límites coinciden (muchas celdas comparten el mismo valor de «{name}»); se forman {formed} estratos en lugar de {k}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1212" />
+      <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+      <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1216" />
+      <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+      <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en una muestra de {sample_n} celdas, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1226" />
+      <source>Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host's reclassify by table tool), or choose another METHOD.</source>
+      <translation>La covariable «{name}» tiene más de {max_classes} clases (al menos {n_distinct} valores distintos en el marco de muestreo): reclasifíquela primero en {max_classes} clases o menos (por ejemplo con la herramienta de reclasificación por tabla del anfitrión), o elija otro METHOD.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1243" />
+      <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
+      <translation>{dropped} de los {k} estratos no contienen ninguna celda y se quitaron.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="92" />
+      <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
+      <translation>La covariable «{name}» no puede leerse ({error}). Compruebe el archivo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="95" />
+      <source>Covariate '{name}' has no band {band}.</source>
+      <translation>La covariable «{name}» no tiene banda {band}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="182" />
+      <source>Give at least one raster in COVARIATES.</source>
+      <translation>Indique al menos un ráster en COVARIATES.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="214" />
+      <source>The frame has no polygon.</source>
+      <translation>El marco de muestreo no tiene ningún polígono.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="258" />
+      <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
+      <translation>El marco de muestreo no se superpone a la covariable «{name}» ({path}). Use un ráster que cubra el marco, o compruebe el SRC de ambas capas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="423" />
+      <source>Cannot write the stratum raster '{path}'.</source>
+      <translation>No se puede escribir el ráster de estratos «{path}».</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="611" />
+      <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
+      <translation>{merged} estratos constaban solo de manchas por debajo de MIN_AREA y se fusionaron con sus vecinos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="623" />
+      <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
+      <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="101" />
+      <source>The mask raster (MASK) '{source}' cannot be opened by GDAL.</source>
+      <translation>GDAL no puede abrir el ráster de máscara (MASK) «{source}».</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="150" />
+      <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
+      <translation>El ráster de máscara (MASK) necesitaría {rows} x {cols} celdas sobre el área de estudio, más de {max_cells:,}. Remuestree primero el ráster a celdas más gruesas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="161" />
+      <location filename="../processing/raster_masking.py" line="189" />
+      <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
+      <translation>El ráster de máscara (MASK) no puede reproyectarse al SRC de cálculo.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="223" />
+      <source>GDAL could not turn the masked raster cells into polygons.</source>
+      <translation>GDAL no pudo convertir las celdas enmascaradas del ráster en polígonos.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="263" />
+      <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
+      <translation>MASK_MIN ({mask_min:g}) es mayor que MASK_MAX ({mask_max:g}); no podría conservarse ninguna celda. Intercambie los dos valores o deje uno de ellos vacío.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="269" />
+      <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
+      <translation>El ráster de máscara (MASK) no tiene banda {band}; tiene {count}.</translation>
     </message>
   </context>
   <context>
@@ -3150,32 +4082,33 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwiseStyles</name>
     <message>
-      <location filename="../processing/styles.py" line="211" />
+      <location filename="../processing/styles.py" line="224" />
       <source>primary unit</source>
       <translation>unidad principal</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="212" />
+      <location filename="../processing/styles.py" line="225" />
       <source>reserve unit</source>
       <translation>unidad de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="255" />
+      <location filename="../processing/styles.py" line="268" />
+      <location filename="../processing/styles.py" line="355" />
       <source>per {unit}</source>
       <translation>por {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="256" />
+      <location filename="../processing/styles.py" line="269" />
       <source>Density (animals {per})</source>
       <translation>Densidad (animales {per})</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="286" />
+      <location filename="../processing/styles.py" line="299" />
       <source>no estimate (no surveyed unit)</source>
       <translation>sin estimación (ninguna unidad muestreada)</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="385" />
+      <location filename="../processing/styles.py" line="408" />
       <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
       <translation>No se pudo aplicar el estilo a la capa {name} ({error}); conserva el estilo predeterminado.</translation>
     </message>
@@ -3216,6 +4149,11 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <location filename="../processing/algorithms/simulatecounts.py" line="63" />
       <source>Units with simulated counts</source>
       <translation>Unidades con conteos simulados</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="82" />
+      <source>has no geometry</source>
+      <translation>no tiene geometría</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/simulatecounts.py" line="88" />

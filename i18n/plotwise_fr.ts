@@ -155,9 +155,35 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
       <translation>La couche « {layer} » n'a aucune strate ayant une surface.</translation>
     </message>
     <message>
+      <location filename="../processing/algorithms/allocate.py" line="199" />
+      <source>field '{name}' of layer '{layer}'</source>
+      <translation>champ « {name} » de la couche « {layer} »</translation>
+    </message>
+    <message>
       <location filename="../processing/algorithms/allocate.py" line="214" />
       <source>No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
       <translation>Pas de champ d'écart-type pilote : l'écart-type de la covariable (« {field} ») sert de substitut. Cela suppose que les comptages suivent la covariable ; remplacez-le par l'écart-type d'un inventaire pilote dès que vous en avez un. Les erreurs types attendues sont alors dans les unités de la covariable, pas en comptages.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="230" />
+      <source>polygon area</source>
+      <translation>surface du polygone</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="231" />
+      <source>pilot SD</source>
+      <translation>écart-type pilote</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="232" />
+      <source>pilot mean</source>
+      <translation>moyenne pilote</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="233" />
+      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <source>cost</source>
+      <translation>coût</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="256" />
@@ -218,11 +244,6 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
       <location filename="../processing/algorithms/allocate.py" line="294" />
       <source>field days needed</source>
       <translation>jours de terrain nécessaires</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/allocate.py" line="294" />
-      <source>cost</source>
-      <translation>coût</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="296" />
@@ -824,7 +845,7 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="128" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
       <source>Sampling frame</source>
       <translation>Base de sondage</translation>
     </message>
@@ -835,7 +856,7 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="137" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>Stratum field</source>
       <translation>Champ de strate</translation>
     </message>
@@ -871,7 +892,7 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="150" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
       <source>Number of units</source>
       <translation>Nombre d'unités</translation>
     </message>
@@ -922,7 +943,7 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="186" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>Simulated surveys per design</source>
       <translation>Inventaires simulés par plan</translation>
     </message>
@@ -1017,385 +1038,385 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
       <translation>{n} unités ont été retirées de la gamme : {why}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="322" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="323" />
       <source>The output table could not be created.</source>
       <translation>La table de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="339" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="340" />
       <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
       <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="348" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="349" />
       <source>Survey designs compared by simulation</source>
       <translation>Plans d'inventaire comparés par simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="354" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
       <source>recommended design</source>
       <translation>plan recommandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="355" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="356" />
       <source>its RMSE (animals)</source>
       <translation>sa REQM (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="356" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
       <source>its RMSE relative to the total</source>
       <translation>sa REQM relative au total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="357" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="358" />
       <source>its 95 % interval coverage</source>
       <translation>couverture de ses intervalles à 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="359" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="360" />
       <source>expected animals in the frame</source>
       <translation>animaux attendus dans la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>point station</source>
       <translation>station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>square plot</source>
       <translation>placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>circular plot</source>
       <translation>placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
       <source>line transect</source>
       <translation>transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>counting radius</source>
       <translation>rayon de comptage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>side</source>
       <translation>côté</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>radius</source>
       <translation>rayon</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="363" />
       <source>length</source>
       <translation>longueur</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
       <source>, strip half-width {w:g} m</source>
       <translation>, demi-largeur de bande {w:g} m</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="368" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="369" />
       <source>Density surface</source>
       <translation>Surface de densité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="470" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="471" />
       <source>Strata</source>
       <translation>Strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="370" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
       <source>none</source>
       <translation>aucune</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>feature id</source>
       <translation>identifiant d'entité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="372" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
       <source>Computation CRS</source>
       <translation>SCR de calcul</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
       <source>Surface cell</source>
       <translation>Cellule de la surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
       <source>Sub-cells per cell side (for counting)</source>
       <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
       <source>Unit</source>
       <translation>Unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
       <source>Counted area per unit (m²)</source>
       <translation>Surface comptée par unité (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>Bearing</source>
       <translation>Azimut</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
       <source>random</source>
       <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>Units wholly inside their stratum</source>
       <translation>Unités entièrement dans leur strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>yes</source>
       <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
       <source>no</source>
       <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
       <source>Counts per cell</source>
       <translation>Comptages par cellule</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
       <source>negative binomial, k = {k:g}</source>
       <translation>binomiale négative, k = {k:g}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
       <source>Poisson</source>
       <translation>Poisson</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
       <source>Variance estimator (grid, balanced)</source>
       <translation>Estimateur de variance (grille, équilibré)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
       <source>local neighbourhood</source>
       <translation>voisinage local</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
       <source>simple random sampling formula</source>
       <translation>formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
       <source>Confidence level</source>
       <translation>Niveau de confiance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
       <source>Seed</source>
       <translation>Graine</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="391" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
       <source>How the designs did at {n} units</source>
       <translation>Résultats des plans pour {n} unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Design</source>
       <translation>Plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Mean units surveyed</source>
       <translation>Unités inventoriées en moyenne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Relative bias</source>
       <translation>Biais relatif</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="392" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
       <source>Empirical SE (animals)</source>
       <translation>Erreur type empirique (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="507" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="508" />
       <source>RMSE (animals)</source>
       <translation>REQM (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>± Monte Carlo SE</source>
       <translation>± erreur type de Monte-Carlo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>RMSE / total</source>
       <translation>REQM / total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="393" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
       <source>Mean estimated CV</source>
       <translation>CV estimé moyen</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="395" />
       <source>95 % interval coverage</source>
       <translation>Couverture des intervalles à 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="394" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="395" />
       <source>Surveys without an estimate</source>
       <translation>Inventaires sans estimation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="405" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="406" />
       <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
       <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="412" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="413" />
       <source>RMSE of the abundance (animals)</source>
       <translation>REQM de l'abondance (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="414" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="415" />
       <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
       <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="416" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="417" />
       <source>Recommendation</source>
       <translation>Recommandation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="418" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="419" />
       <source>No design gave estimates: see the warnings.</source>
       <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="420" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="421" />
       <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
       <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="426" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="427" />
       <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
       <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="433" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="434" />
       <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
       <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="438" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="439" />
       <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
       <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="447" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="448" />
       <source>How the simulation works</source>
       <translation>Fonctionnement de la simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="448" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="449" />
       <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
       <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="457" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="458" />
       <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
       <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>Area (km²)</source>
       <translation>Surface (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>Mean expected count per unit</source>
       <translation>Comptage attendu moyen par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="473" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="474" />
       <source>S_h (count SD per unit)</source>
       <translation>S_h (écart-type du comptage par unité)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="475" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="476" />
       <source>Units, proportional</source>
       <translation>Unités, proportionnelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="477" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="478" />
       <source>Units, Neyman</source>
       <translation>Unités, Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="487" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="488" />
       <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
       <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="495" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="496" />
       <source>RMSE against the number of units</source>
       <translation>REQM en fonction du nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="502" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
       <source>number of units</source>
       <translation>nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="503" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="504" />
       <source>RMSE of the abundance estimate against the number of units</source>
       <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="505" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="506" />
       <source>Units</source>
       <translation>Unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="513" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="514" />
       <source>{a} → {b} units: RMSE {change:+.0%}</source>
       <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="514" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="515" />
       <source>For {name}: </source>
       <translation>Pour {name} : </translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="515" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="516" />
       <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
       <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
     </message>
@@ -2633,317 +2654,317 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="249" />
+      <location filename="../processing/algorithms/layout.py" line="250" />
       <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
       <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="263" />
+      <location filename="../processing/algorithms/layout.py" line="264" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="267" />
+      <location filename="../processing/algorithms/layout.py" line="268" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="281" />
       <source>the frame</source>
       <translation>la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="281" />
       <source>stratum {key}</source>
       <translation>strate {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="336" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Sample-unit layout</source>
       <translation>Disposition des unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="341" />
-      <location filename="../processing/algorithms/layout.py" line="443" />
+      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="444" />
       <source>primary units</source>
       <translation>unités principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <location filename="../processing/algorithms/layout.py" line="444" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="445" />
       <source>reserve units</source>
       <translation>unités de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
       <source>strata</source>
       <translation>strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
       <source>design</source>
       <translation>plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>simple random</source>
       <translation>aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>systematic grid</source>
       <translation>grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>spatially balanced</source>
       <translation>spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="346" />
+      <location filename="../processing/algorithms/layout.py" line="347" />
       <source>Replacing units in the field</source>
       <translation>Remplacer des unités sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="348" />
+      <location filename="../processing/algorithms/layout.py" line="349" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="353" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Units per stratum</source>
       <translation>Unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Area (ha)</source>
       <translation>Surface (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Effective area (ha)</source>
       <translation>Surface effective (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Units asked</source>
       <translation>Unités demandées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Reserve</source>
       <translation>Réserves</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="359" />
       <source>Grid spacing (m)</source>
       <translation>Pas de la grille (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="359" />
       <source>Grid rotation (°)</source>
       <translation>Rotation de la grille (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="361" />
+      <location filename="../processing/algorithms/layout.py" line="362" />
       <source>frame</source>
       <translation>base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="369" />
+      <location filename="../processing/algorithms/layout.py" line="370" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="371" />
+      <location filename="../processing/algorithms/layout.py" line="372" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="375" />
+      <location filename="../processing/algorithms/layout.py" line="376" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Map</source>
       <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="387" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
+      <location filename="../processing/algorithms/layout.py" line="388" />
       <source>Method</source>
       <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="391" />
+      <location filename="../processing/algorithms/layout.py" line="392" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>Frame (FRAME)</source>
       <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Champ de strate (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>(none: one stratum)</source>
       <translation>(aucun : une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Champ d'unités par strate (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>(none)</source>
       <translation>(aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Total units (N_UNITS)</source>
       <translation>Total d'unités (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>(not used)</source>
       <translation>(non utilisé)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>Design (DESIGN)</source>
       <translation>Plan (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forme de l'unité (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>point</source>
       <translation>point</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>square</source>
       <translation>carré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>circle</source>
       <translation>cercle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>line</source>
       <translation>ligne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>Unit size (SIZE, m)</source>
       <translation>Taille de l'unité (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Azimut (BEARING, degrés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>random</source>
       <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>Keep inside (INSIDE)</source>
       <translation>Garder à l'intérieur (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>yes</source>
       <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>no</source>
       <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="403" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Espacement minimal (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="404" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Réserves par strate (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="405" />
       <source>Seed (SEED)</source>
       <translation>Graine (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="405" />
+      <location filename="../processing/algorithms/layout.py" line="406" />
       <source>CRS of the computation and the output</source>
       <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="413" />
+      <location filename="../processing/algorithms/layout.py" line="414" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="415" />
+      <location filename="../processing/algorithms/layout.py" line="416" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="417" />
+      <location filename="../processing/algorithms/layout.py" line="418" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="424" />
+      <location filename="../processing/algorithms/layout.py" line="425" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
     </message>
@@ -2952,8 +2973,8 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
     <name>PlotwiseAlgorithm</name>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="258" />
-      <location filename="../processing/algorithms/base.py" line="116" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="325" />
+      <location filename="../processing/algorithms/base.py" line="117" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="326" />
       <location filename="../processing/algorithms/demoreserve.py" line="117" />
       <location filename="../processing/algorithms/estimate.py" line="375" />
       <location filename="../processing/algorithms/simulatecounts.py" line="113" />
@@ -3000,7 +3021,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>Graine utilisée : {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="136" />
+      <location filename="../processing/algorithms/base.py" line="147" />
       <source>Report written to {path}</source>
       <translation>Rapport écrit dans {path}</translation>
     </message>
@@ -3008,17 +3029,17 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwiseBridge</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="551" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="552" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="563" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="564" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="576" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="577" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>
@@ -3071,6 +3092,917 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <location filename="../processing/bridge.py" line="264" />
       <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
       <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
+    </message>
+  </context>
+  <context>
+    <name>PlotwiseEngine</name>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="48" />
+      <source>stratum area</source>
+      <translation>surface de la strate</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="49" />
+      <source>pilot standard deviation</source>
+      <translation>écart-type pilote</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="50" />
+      <source>pilot mean count</source>
+      <translation>comptage moyen pilote</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="51" />
+      <source>cost per unit</source>
+      <translation>coût par unité</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="384" />
+      <location filename="../processing/engine/layout.py" line="361" />
+      <source>{shown} and {more} more</source>
+      <translation>{shown} et {more} autres</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="406" />
+      <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
+      <translation>Valeur NULL ou négative ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur positive ou nulle pour chaque strate, ou retirez ces strates de la couche.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="410" />
+      <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
+      <translation>Valeur NULL, négative ou nulle ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur strictement positive pour chaque strate, ou retirez ces strates de la couche.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="477" />
+      <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
+      <translation>Méthode d'allocation inconnue {method!r} ; utilisez l'une de : {methods}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="481" />
+      <source>The strata layer has no features. Run the stratification first.</source>
+      <translation>La couche des strates n'a aucune entité. Lancez d'abord la stratification.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="486" />
+      <source>The unit area must be a positive number.</source>
+      <translation>La surface d'une unité doit être un nombre positif.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="489" />
+      <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
+      <translation>Le minimum par strate doit être d'au moins 1 (2 permet d'estimer la variance de chaque strate).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="502" />
+      <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
+      <translation>La méthode par coût a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="504" />
+      <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
+      <translation>Le budget a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="508" />
+      <source>The fixed cost must be zero or positive.</source>
+      <translation>Le coût fixe doit être nul ou positif.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="515" />
+      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
+      <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (proportionnelle à la surface).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="518" />
+      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
+      <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (surface / racine carrée du coût).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="523" />
+      <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
+      <translation>Tous les écarts-types pilotes sont nuls : l'allocation proportionnelle est utilisée à la place.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="527" />
+      <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
+      <translation>Valeur nulle ({name}) pour la ou les entités de strate {shown} : elles ne reçoivent que le minimum de {minimum} unité(s). Un pilote sans variation reflète rarement la réalité ; vérifiez-le.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="539" />
+      <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
+      <translation>La ou les entités de strate {shown} sont plus petites qu'une unité d'échantillonnage de {unit_area:g}. Fusionnez-les avec une voisine ou utilisez une surface d'unité plus petite.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="546" />
+      <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
+      <translation>La ou les entités de strate {shown} contiennent moins de {minimum} unités : elles reçoivent toutes les unités qui y tiennent.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="555" />
+      <source>A target CV is set: the budget is not used.</source>
+      <translation>Un CV cible est fixé : le budget n'est pas utilisé.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="561" />
+      <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
+      <translation>Le budget {budget:g} est inférieur au minimum de {minimum:g} (coût fixe {fixed_cost:g} plus {per_stratum} unité(s) dans chaque strate à son coût). Augmentez le budget ou baissez le minimum par strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="568" />
+      <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
+      <translation>Le budget dépasse le coût de toutes les unités qui tiennent ({maximum:g}) : toutes les unités sont prises.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="576" />
+      <source>Give a total number of units, a budget (with costs) or a target CV.</source>
+      <translation>Indiquez un nombre total d'unités, un budget (avec des coûts) ou un CV cible.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="579" />
+      <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
+      <translation>Le total de {total} unités est inférieur au minimum de {minimum} ({per_stratum} par strate sur {n_strata} strates). Augmentez le total ou baissez le minimum.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="584" />
+      <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
+      <translation>Le total de {total} unités dépasse les {fit} unités de {unit_area:g} qui tiennent dans les strates. Baissez le total ou utilisez des unités plus petites.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="594" />
+      <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
+      <translation>La ou les entités de strate {shown} ne reçoivent qu'une unité : leur variance ne peut pas être estimée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="599" />
+      <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
+      <translation>La ou les entités de strate {shown} sont échantillonnées entièrement (toutes les unités qui y tiennent).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="604" />
+      <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
+      <translation>Valeur nulle ({name}) dans la ou les entités de strate {shown} : leur CV n'est pas défini.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="628" />
+      <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
+      <translation>Un CV cible a besoin de l'écart-type pilote et du comptage moyen pilote par unité : choisissez le champ d'écart-type et le champ de moyenne.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="633" />
+      <source>The {name} is zero in every stratum: no CV can be computed.</source>
+      <translation>Valeur nulle ({name}) dans toutes les strates : aucun CV ne peut être calculé.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/allocation.py" line="643" />
+      <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
+      <translation>Le CV cible de {target_cv:.3g} ne peut pas être atteint : même les {fit} unités qui tiennent donnent un CV attendu de {cv:.3g}. Acceptez un CV d'au moins {cv:.3g}, ou utilisez des unités plus petites.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="31" />
+      <source>needs a positive area_m2</source>
+      <translation>a besoin d'un area_m2 positif</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="36" />
+      <source>has a line of zero length</source>
+      <translation>a une ligne de longueur nulle</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="38" />
+      <source>has an unsupported geometry type ({kind})</source>
+      <translation>a un type de géométrie non pris en charge ({kind})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/counting.py" line="64" />
+      <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
+      <translation>La probabilité de détection doit être dans ]0, 1] (reçu {detection:g}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/demo_reserve.py" line="108" />
+      <source>Could not place the demo lake; try another seed.</source>
+      <translation>Impossible de placer le lac de démonstration ; essayez une autre graine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/demo_reserve.py" line="184" />
+      <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
+      <translation>La taille de cellule doit être comprise entre 10 et 500 m (reçu {cell_size:g} m).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="203" />
+      <source>The density surface must be a single raster band.</source>
+      <translation>La surface de densité doit être une seule bande raster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="206" />
+      <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
+      <translation>La surface de densité doit être un raster orienté nord en haut (sans rotation) ; reprojetez-la d'abord.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="214" />
+      <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
+      <translation>La surface de densité ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone (et leurs systèmes de coordonnées de référence).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="233" />
+      <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
+      <translation>Une strate n'a pas de valeur de strate (NULL). Donnez une valeur à chaque strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="257" />
+      <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
+      <translation>{overlap} cellule(s) de la surface se trouvent dans plus d'une strate ; chacune a été attribuée à la première. Les strates ne devraient pas se chevaucher.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="262" />
+      <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
+      <translation>Aucun centre de cellule de la surface de densité ne se trouve dans la base de sondage : les cellules sont trop grossières pour elle, ou les deux ne se recouvrent pas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="268" />
+      <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
+      <translation>La surface de densité a {n} cellule(s) négative(s) dans la base de sondage. Le nombre attendu d'animaux par km² doit être de 0 ou plus : corrigez la surface (par exemple en la bornant à 0).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="274" />
+      <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
+      <translation>{n} cellule(s) de la base de sondage ({share:.1%}) n'ont pas de valeur sur la surface de densité et sont exclues de la population : la comparaison vaut pour le reste de la base de sondage.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="281" />
+      <source>The density surface has no value in the frame.</source>
+      <translation>La surface de densité n'a aucune valeur dans la base de sondage.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="287" />
+      <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
+      <translation>Les strates {ids} ne contiennent aucun centre de cellule de la surface de densité dans la base de sondage. Retirez-les, fusionnez-les avec une voisine, ou utilisez une surface plus fine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="355" />
+      <location filename="../processing/engine/layout.py" line="149" />
+      <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
+      <translation>SHAPE doit valoir 0 (point), 1 (carré), 2 (cercle) ou 3 (transect linéaire).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
+      <translation>SIZE doit dépasser 0 m : c'est le rayon de comptage d'une station ponctuelle.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the square unit's size.</source>
+      <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité carrée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the circle unit's size.</source>
+      <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité circulaire.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="357" />
+      <source>SIZE must be more than 0 m: it is the line unit's size.</source>
+      <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité linéaire.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="359" />
+      <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
+      <translation>Un transect linéaire a besoin de la demi-largeur de sa bande de comptage (plus de 0 m) : les animaux sont comptés jusqu'à cette distance de part et d'autre de la ligne.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="609" />
+      <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
+      <translation>La surdispersion k doit valoir 0 (comptages de Poisson) ou plus.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="625" />
+      <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
+      <translation>Les strates couvrent {share:.1%} de la base de sondage : chaque plan est comparé sur la partie qu'elles couvrent.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="633" />
+      <source>A stratum of the layout has no cells on the surface grid.</source>
+      <translation>Une strate de la disposition n'a aucune cellule sur la grille de la surface.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="709" />
+      <source>Unknown design {design}; use 0 to {last}.</source>
+      <translation>Plan inconnu {design} ; utilisez 0 à {last}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="712" />
+      <source>N_UNITS must be at least {minimum}.</source>
+      <translation>N_UNITS doit valoir au moins {minimum}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="717" />
+      <source>The {design} design needs strata: give the STRATA layer.</source>
+      <translation>Le plan « {design} » a besoin de strates : indiquez la couche STRATA.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>simple random</source>
+      <translation>aléatoire simple</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>stratified proportional</source>
+      <translation>stratifié proportionnel</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>stratified Neyman</source>
+      <translation>stratifié Neyman</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>systematic grid</source>
+      <translation>grille systématique</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="718" />
+      <location filename="../processing/engine/design_comparison.py" line="988" />
+      <location filename="../processing/engine/design_comparison.py" line="1008" />
+      <source>spatially balanced</source>
+      <translation>spatialement équilibré</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="794" />
+      <source>REPLICATES must be at least 2.</source>
+      <translation>REPLICATES doit valoir au moins 2.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="799" />
+      <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
+      <translation>Chaque inventaire simulé compterait environ {millions:.0f} millions de cellules de la surface ({units} unités de {unit_area:,.0f} m² sur des cellules de {cell_width:g} m), trop pour être simulé. Rééchantillonnez la surface en cellules plus grossières, ou comparez moins de plans ou d'unités.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="989" />
+      <source>{design}: {warning}</source>
+      <translation>{design} : {warning}</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="991" />
+      <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
+      <translation>{design} avec {n_units} unités : {failed} des {replicates} inventaires simulés n'ont donné aucune estimation (une strate sans unité comptée, ou aucune unité dans la base de sondage) ; ils sont exclus de ses chiffres.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="998" />
+      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%}). Units near the edge of its stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
+      <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%}). Les unités proches du bord de leur strate ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord) : les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="998" />
+      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%}). Units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
+      <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%}). Les unités proches du bord de la base de sondage ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord) : les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="1038" />
+      <source>The range of units '{text}' cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
+      <translation>La plage d'unités « {text} » ne peut pas être lue. Donnez des nombres entiers séparés par des virgules (p. ex. 20, 40, 80) ou début:fin:pas (p. ex. 20:100:20).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="1043" />
+      <source>Every number of units in the range must be at least {minimum}.</source>
+      <translation>Chaque nombre d'unités de la plage doit valoir au moins {minimum}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/design_comparison.py" line="1046" />
+      <source>The range of units holds more than 20 values; give at most 20.</source>
+      <translation>La plage d'unités contient plus de 20 valeurs ; donnez-en au plus 20.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="274" />
+      <source>{shown} … ({n} in all)</source>
+      <translation>{shown} … ({n} en tout)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="308" />
+      <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
+      <translation>Le champ {count_name} contient des valeurs qui ne sont pas des nombres pour les unités {ids}. Saisissez un comptage entier (0 si l'unité a été inventoriée sans rien voir) ou laissez le champ vide (NULL) pour les unités non inventoriées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="318" />
+      <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
+      <translation>Le champ {count_name} contient des comptages négatifs ou infinis pour les unités {ids}. Les comptages doivent valoir 0 ou plus ; corrigez-les, ou laissez le champ vide (NULL) si l'unité n'a pas été inventoriée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="442" />
+      <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
+      <translation>Le niveau de confiance doit être compris entre 0 et 1 (reçu {confidence}) ; utilisez p. ex. 0.95.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="445" />
+      <source>Unknown interval method {method!r}; use one of {methods}.</source>
+      <translation>Méthode d'intervalle inconnue {method!r} ; utilisez l'une de {methods}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="448" />
+      <source>Unknown variance method {method!r}; use one of {methods}.</source>
+      <translation>Méthode de variance inconnue {method!r} ; utilisez l'une de {methods}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="451" />
+      <source>The detection probability must lie in (0, 1] (got {p}).</source>
+      <translation>La probabilité de détection doit être dans ]0, 1] (reçu {p}).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="453" />
+      <source>The standard error of the detection probability must be 0 or more.</source>
+      <translation>L'erreur type de la probabilité de détection doit valoir 0 ou plus.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="462" />
+      <source>unit_ids must have one id per unit.</source>
+      <translation>unit_ids doit avoir un identifiant par unité.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="466" />
+      <source>counts, unit_areas and strata must have one value per unit.</source>
+      <translation>counts, unit_areas et strata doivent avoir une valeur par unité.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="475" />
+      <source>Strata {ids} have no area. Check the strata layer's geometries.</source>
+      <translation>Les strates {ids} n'ont pas de surface. Vérifiez les géométries de la couche des strates.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="483" />
+      <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
+      <translation>Les unités {ids} n'ont pas de strate (le champ de strate est vide). Renseignez leur strate, ou omettez le champ de strate pour traiter la base de sondage comme une seule strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="493" />
+      <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
+      <translation>Les unités {ids} ont des identifiants de strate ({names}) absents de la couche des strates. Vérifiez le champ de strate des unités et le champ d'identifiant de la couche des strates.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="501" />
+      <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
+      <translation>{n} unité(s) n'ont pas de comptage et sont traitées comme non inventoriées (non-réponse) : {ids}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="506" />
+      <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
+      <translation>Aucune unité n'a de comptage : rien ne peut être estimé. Saisissez les comptages des unités inventoriées (0 si rien n'a été vu) dans le champ de comptage.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="513" />
+      <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
+      <translation>Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="523" />
+      <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
+      <translation>Les données de présence doivent valoir 0 ou 1 ; les unités {ids} contiennent d'autres valeurs. Utilisez les comptages sans l'option de présence, ou recodez le champ.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="528" />
+      <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
+      <translation>La probabilité de détection n'a pas été appliquée aux données de présence : diviser une proportion d'unités occupées par p n'est pas une correction d'occupation, qui demande des visites répétées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="547" />
+      <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
+      <translation>Aucune unité des strates {ids} n'a été inventoriée : leur abondance ne peut pas être estimée. Inventoriez-y des unités, ou choisissez d'exclure ces strates (l'estimation couvre alors une base de sondage plus petite).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="553" />
+      <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
+      <translation>Les strates {ids} n'avaient aucune unité inventoriée et ont été exclues : la base de sondage a diminué de {dropped_area:.6g} unités de surface, et l'estimation ne couvre que les strates restantes.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="569" />
+      <source>The local neighbourhood variance needs the positions of the units.</source>
+      <translation>La variance de voisinage local a besoin des positions des unités.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="574" />
+      <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
+      <translation>Les unités {ids} n'ont pas de position : la variance de voisinage local ne peut pas les utiliser. Donnez leurs emplacements, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="599" />
+      <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
+      <translation>Dans les strates {ids}, la surface inventoriée dépasse la surface de la strate. Vérifiez les surfaces des unités et l'unité de surface, ou désactivez la correction de population finie.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="640" />
+      <source>{label} (one unit) collapsed with {others}</source>
+      <translation>{label} (une unité) regroupée avec {others}</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="645" />
+      <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
+      <translation>Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="650" />
+      <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
+      <translation>La seule strate n'a qu'une unité inventoriée : aucune variance, erreur type ou intervalle ne peut être estimé. Inventoriez au moins deux unités.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="666" />
+      <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
+      <translation>Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="702" />
+      <source>The bootstrap needs a random generator (rng).</source>
+      <translation>Le bootstrap a besoin d'un générateur aléatoire (rng).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="734" />
+      <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
+      <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0 et son CV n'est pas défini.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="737" />
+      <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
+      <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="782" />
+      <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own CV is {cv_p:.3g}. Improve the detection study first.</source>
+      <translation>Le CV cible {target_cv:.3g} ne peut pas être atteint avec plus d'unités : le CV propre de la probabilité de détection est de {cv_p:.3g}. Améliorez d'abord l'étude de détection.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/estimation.py" line="791" />
+      <source>No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.</source>
+      <translation>Aucune variation n'a été observée : les tailles d'échantillon du prochain inventaire sont fixées au minimum de 2 par strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="222" />
+      <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
+      <translation>EDGE_BUFFER vaut {edge_buffer} m ; il doit être nul ou une distance positive en mètres.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="229" />
+      <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
+      <translation>La zone d'étude (INPUT) n'a aucun polygone de surface positive. Vérifiez que la couche contient des polygones et qu'elle est dans un SCR projeté en mètres.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="274" />
+      <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
+      <translation>Il ne reste rien de la zone d'étude (INPUT) après retrait des polygones exclus (EXCLUDE) : ils en couvrent la totalité, {hectares:.4g} ha. Vérifiez qu'EXCLUDE ne contient que les zones à écarter.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="280" />
+      <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster's units, or check that the raster covers the study area.</source>
+      <translation>Il ne reste rien de la base de sondage après le masque raster (MASK) : chaque cellule des {hectares:.4g} ha restants est hors de [MASK_MIN, MASK_MAX] ou NoData. Élargissez l'intervalle, vérifiez les unités du raster, ou vérifiez que le raster couvre la zone d'étude.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/frame.py" line="287" />
+      <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area's boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
+      <translation>Il ne reste rien de la base de sondage après la zone tampon intérieure (EDGE_BUFFER = {edge_buffer:g} m) : les {hectares:.4g} ha restants se trouvent tous à moins de cette distance de la limite de la zone d'étude (emprise de la zone d'étude {width:.0f} m x {height:.0f} m). Utilisez un EDGE_BUFFER plus petit.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="147" />
+      <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
+      <translation>DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
+      <translation>SIZE doit dépasser 0 m pour une unité ponctuelle ; il vaut {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
+      <translation>SIZE doit dépasser 0 m pour une unité carrée ; il vaut {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
+      <translation>SIZE doit dépasser 0 m pour une unité circulaire ; il vaut {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="151" />
+      <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
+      <translation>SIZE doit dépasser 0 m pour une unité linéaire ; il vaut {size}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="153" />
+      <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
+      <translation>BEARING doit valoir -1 (aléatoire) ou être compris entre 0 et 360 degrés ; il vaut {bearing}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="156" />
+      <source>MIN_SPACING must be 0 or more metres.</source>
+      <translation>MIN_SPACING doit valoir 0 mètre ou plus.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="158" />
+      <source>RESERVE must be 0 or a positive whole number.</source>
+      <translation>RESERVE doit valoir 0 ou un nombre entier positif.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="337" />
+      <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
+      <translation>{field} est vide (NULL) ou n'est pas un nombre pour la ou les entités {ids}. Donnez à chaque strate un nombre entier d'unités, ou laissez N_FIELD vide pour utiliser N_UNITS.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="344" />
+      <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
+      <translation>{field} est négatif pour la ou les entités {ids}. Utilisez 0 ou un nombre entier positif.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="350" />
+      <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
+      <translation>{field} n'est pas un nombre entier pour la ou les entités {ids}. Arrondissez d'abord l'allocation à des unités entières.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="431" />
+      <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
+      <translation>Indiquez N_FIELD (unités par strate) ou N_UNITS (un total d'au moins 1).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="442" />
+      <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
+      <translation>Une géométrie invalide a été réparée pour la ou les entités {ids} ; vérifiez leurs contours.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="445" />
+      <source>Empty or zero-area feature(s) {ids} were skipped.</source>
+      <translation>Les entités vides ou de surface nulle {ids} ont été ignorées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="447" />
+      <source>The frame has no polygon with an area: every feature is empty or has zero area.</source>
+      <translation>La base de sondage n'a aucun polygone avec une surface : chaque entité est vide ou de surface nulle.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="457" />
+      <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
+      <translation>{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="483" />
+      <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
+      <translation>Les entités de la base de sondage (sans champ de strate) portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités ou choisissez un champ de strate pour que chaque entité soit une strate.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="483" />
+      <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
+      <translation>Les entités de la strate {key} portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="498" />
+      <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
+      <translation>N_UNITS = {n_units} fait moins de {minimum} par strate pour {n_strata} strates ; chaque strate en reçoit {minimum} ({total} unités).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La base de sondage est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La base de sondage est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La base de sondage est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La base de sondage est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La strate {key} est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La strate {key} est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La strate {key} est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="509" />
+      <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+      <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="513" />
+      <source>The frame gets no units; the estimate cannot speak for it.</source>
+      <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="513" />
+      <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
+      <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="516" />
+      <source>The frame gets one unit only; its variance cannot be estimated.</source>
+      <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="516" />
+      <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
+      <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="609" />
+      <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+      <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="609" />
+      <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+      <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="770" />
+      <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+      <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="770" />
+      <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+      <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="788" />
+      <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+      <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="788" />
+      <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+      <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="798" />
+      <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+      <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="798" />
+      <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+      <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="805" />
+      <source>The frame has only {n} of {r} reserve units.</source>
+      <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="805" />
+      <source>Stratum {key} has only {n} of {r} reserve units.</source>
+      <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="462" />
+      <source>No cell of the frame has a value in every covariate.</source>
+      <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="652" />
+      <source>The covariates take fewer distinct value combinations than strata asked for.</source>
+      <translation>Les covariables prennent moins de combinaisons de valeurs distinctes que de strates demandées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="913" />
+      <source>The frame holds no raster cell.</source>
+      <translation>La base de sondage ne contient aucune cellule raster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1107" />
+      <source>Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
+      <translation>La covariable « {name} » est constante ({value:g}) sur la base de sondage : elle ne peut pas définir de strates. Utilisez une autre covariable, ou vérifiez la base de sondage et le raster.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1147" />
+      <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
+      <translation>METHOD inconnu {method!r} : utilisez 0 (quantiles) à 4 (classes du raster).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1149" />
+      <source>Ask for at least 2 strata (STRATA).</source>
+      <translation>Demandez au moins 2 strates (STRATA).</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1150" />
+      <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
+      <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables ({names}). Vérifiez que les rasters couvrent la base de sondage et que leur valeur NoData est juste.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1185" />
+      <source>Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+      <translation>La covariable « {name} » ne prend que {n_distinct} valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1199" />
+      <source>Some boundaries coincide (many cells share the same value of '{name}'); {formed} strata are formed instead of {k}.</source>
+      <translation>Certaines limites coïncident (beaucoup de cellules partagent la même valeur de « {name} ») ; {formed} strates sont formées au lieu de {k}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1212" />
+      <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+      <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1216" />
+      <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+      <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes dans un échantillon de {sample_n} cellules, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1226" />
+      <source>Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host's reclassify by table tool), or choose another METHOD.</source>
+      <translation>La covariable « {name} » a plus de {max_classes} classes (au moins {n_distinct} valeurs distinctes sur la base de sondage) : reclassez-la d'abord en {max_classes} classes ou moins (par exemple avec l'outil de reclassement par table de l'hôte), ou choisissez une autre METHOD.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1243" />
+      <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
+      <translation>{dropped} des {k} strates ne contiennent aucune cellule et ont été retirées.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="92" />
+      <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
+      <translation>La covariable « {name} » ne peut pas être lue ({error}). Vérifiez le fichier.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="95" />
+      <source>Covariate '{name}' has no band {band}.</source>
+      <translation>La covariable « {name} » n'a pas de bande {band}.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="182" />
+      <source>Give at least one raster in COVARIATES.</source>
+      <translation>Donnez au moins un raster dans COVARIATES.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="214" />
+      <source>The frame has no polygon.</source>
+      <translation>La base de sondage n'a aucun polygone.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="258" />
+      <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
+      <translation>La base de sondage ne recouvre pas la covariable « {name} » ({path}). Utilisez un raster qui couvre la base de sondage, ou vérifiez le SCR des deux couches.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="423" />
+      <source>Cannot write the stratum raster '{path}'.</source>
+      <translation>Impossible d'écrire le raster des strates « {path} ».</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="611" />
+      <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
+      <translation>{merged} strates n'étaient faites que de taches sous MIN_AREA et ont été fusionnées avec leurs voisines.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="623" />
+      <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
+      <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="101" />
+      <source>The mask raster (MASK) '{source}' cannot be opened by GDAL.</source>
+      <translation>Le raster de masque (MASK) « {source} » ne peut pas être ouvert par GDAL.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="150" />
+      <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
+      <translation>Le raster de masque (MASK) demanderait {rows} x {cols} cellules sur la zone d'étude, soit plus de {max_cells:,}. Rééchantillonnez d'abord le raster en cellules plus grossières.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="161" />
+      <location filename="../processing/raster_masking.py" line="189" />
+      <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
+      <translation>Le raster de masque (MASK) ne peut pas être reprojeté dans le SCR de calcul.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="223" />
+      <source>GDAL could not turn the masked raster cells into polygons.</source>
+      <translation>GDAL n'a pas pu transformer les cellules masquées du raster en polygones.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="263" />
+      <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
+      <translation>MASK_MIN ({mask_min:g}) est supérieur à MASK_MAX ({mask_max:g}) ; aucune cellule ne pourrait être gardée. Inversez les deux valeurs ou laissez l'une d'elles vide.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_masking.py" line="269" />
+      <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
+      <translation>Le raster de masque (MASK) n'a pas de bande {band} ; il en a {count}.</translation>
     </message>
   </context>
   <context>
@@ -3150,32 +4082,33 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwiseStyles</name>
     <message>
-      <location filename="../processing/styles.py" line="211" />
+      <location filename="../processing/styles.py" line="224" />
       <source>primary unit</source>
       <translation>unité principale</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="212" />
+      <location filename="../processing/styles.py" line="225" />
       <source>reserve unit</source>
       <translation>unité de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="255" />
+      <location filename="../processing/styles.py" line="268" />
+      <location filename="../processing/styles.py" line="355" />
       <source>per {unit}</source>
       <translation>par {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="256" />
+      <location filename="../processing/styles.py" line="269" />
       <source>Density (animals {per})</source>
       <translation>Densité (animaux {per})</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="286" />
+      <location filename="../processing/styles.py" line="299" />
       <source>no estimate (no surveyed unit)</source>
       <translation>pas d'estimation (aucune unité inventoriée)</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="385" />
+      <location filename="../processing/styles.py" line="408" />
       <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
       <translation>La couche {name} n'a pas pu recevoir son style ({error}) ; elle garde le style par défaut.</translation>
     </message>
@@ -3216,6 +4149,11 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <location filename="../processing/algorithms/simulatecounts.py" line="63" />
       <source>Units with simulated counts</source>
       <translation>Unités avec comptages simulés</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/simulatecounts.py" line="82" />
+      <source>has no geometry</source>
+      <translation>n'a pas de géométrie</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/simulatecounts.py" line="88" />

@@ -92,7 +92,7 @@ def _open(cov):
         raise InputError(message("Covariate '{name}' cannot be read ({error}). Check the file.", name=cov.name,
                                  error=str(exc)))
     if ds is None or not (1 <= cov.band <= ds.RasterCount):
-        raise InputError(message("Covariate '{name}' has no band {band:d}.", name=cov.name, band=int(cov.band)))
+        raise InputError(message("Covariate '{name}' has no band {band}.", name=cov.name, band=int(cov.band)))
     gt = ds.GetGeoTransform()
     if gt[2] or gt[4]:
         ds = gdal.Warp("", ds, format="VRT")  # rotated grid: make it north-up
@@ -608,7 +608,7 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
             provisional = res.provisional
             if not np.array_equal(lut, np.arange(lut.size)):
                 if order.size < stats.n_strata:
-                    warnings.append(message("{merged:d} strata consisted only of patches below MIN_AREA and were "
+                    warnings.append(message("{merged} strata consisted only of patches below MIN_AREA and were "
                                             "merged away.", merged=int(stats.n_strata - order.size)))
                 remap_strata(output_raster, lut)
                 stats, provisional = stats.reordered(order), provisional[order]

@@ -2299,3 +2299,8 @@ TRANSLATIONS.update({
     "Side of the square plots (m)": ("Côté des placettes carrées (m)", "Lado de las parcelas cuadradas (m)"),
     "Slope raster (degrees)": ("Raster de pente (degrés)", "Ráster de pendiente (grados)"),
 })
+
+# -- engine error and warning messages (context PlotwiseEngine): kept in their own file ---------
+from translations_engine import ENGINE_TRANSLATIONS  # noqa: E402  (scripts/ is on sys.path here)
+
+TRANSLATIONS.update(ENGINE_TRANSLATIONS)

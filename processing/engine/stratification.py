@@ -1183,8 +1183,8 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
             n_distinct, _ = count_distinct(source, k)
             if n_distinct < k:
                 raise InputError(message(
-                    "Covariate '{name}' takes only {n_distinct:d} distinct values over the frame, fewer than the "
-                    "{k:d} strata asked for. Lower STRATA to {n_distinct:d} or fewer.",
+                    "Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the "
+                    "{k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
                     name=name0, n_distinct=int(n_distinct), k=k))
         if method == QUANTILE:
             boundaries, _ = exact_quantiles(source, quantile_probabilities(k), histogram=hist,
@@ -1197,7 +1197,7 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         unique = np.unique(boundaries)
         if unique.size < boundaries.size:
             warnings.append(message("Some boundaries coincide (many cells share the same value of '{name}'); "
-                                    "{formed:d} strata are formed instead of {k:d}.",
+                                    "{formed} strata are formed instead of {k}.",
                                     name=name0, formed=int(unique.size + 1), k=k))
         rule = ThresholdRule(unique)
     elif method == KMEANS:
@@ -1209,13 +1209,13 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         n_distinct = np.unique(z, axis=0).shape[0]
         if n_distinct < k:
             if sample_n == summ.count:
-                text = message("The covariates take only {n_distinct:d} distinct value combinations over the frame, "
-                               "fewer than the {k:d} strata asked for. Lower STRATA to {n_distinct:d} or fewer.",
+                text = message("The covariates take only {n_distinct} distinct value combinations over the frame, "
+                               "fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
                                n_distinct=int(n_distinct), k=k)
             else:
-                text = message("The covariates take only {n_distinct:d} distinct value combinations in a sample of "
-                               "{sample_n:d} cells, fewer than the {k:d} strata asked for. Lower STRATA to "
-                               "{n_distinct:d} or fewer.", n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
+                text = message("The covariates take only {n_distinct} distinct value combinations in a sample of "
+                               "{sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to "
+                               "{n_distinct} or fewer.", n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
             raise InputError(text)
         kfit = lloyd_kmeans(z, kmeans_plusplus(z, k, rng))
         order = np.argsort(kfit.centres[:, 0], kind="stable")
@@ -1224,8 +1224,8 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         n_distinct, classes = count_distinct(source, MAX_CLASSES, progress=scaled_progress(progress, 0.2, 0.4))
         if n_distinct > MAX_CLASSES:
             raise InputError(message(
-                "Covariate '{name}' has more than {max_classes:d} classes (at least {n_distinct:d} distinct values "
-                "over the frame): reclassify it into {max_classes:d} classes or fewer first (for example with the "
+                "Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values "
+                "over the frame): reclassify it into {max_classes} classes or fewer first (for example with the "
                 "host's reclassify by table tool), or choose another METHOD.",
                 name=name0, max_classes=MAX_CLASSES, n_distinct=int(n_distinct)))
         rule = ClassRule(np.asarray(classes))
@@ -1240,7 +1240,7 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     lut, order = stratum_order(stats)
     dropped = k - order.size
     if dropped:
-        warnings.append(message("{dropped:d} of the {k:d} strata hold no cell and were dropped.",
+        warnings.append(message("{dropped} of the {k} strata hold no cell and were dropped.",
                                 dropped=int(dropped), k=k))
     return Stratification(method, rule, None if boundaries is None else rule.boundaries, stats.reordered(order),
                           lut, order, int(stats.total), int(n_distinct), int(sample_n), (float(vmin), float(vmax)),
