@@ -58,3 +58,17 @@ def test_zip_installs_and_runs_in_a_fresh_profile(package_zip, tmp_path):
     )
     assert "TRUE_TOTAL" in stdout
     assert (out / "animals.gpkg").exists() and (out / "report.html").exists()
+    # the next steps of a season, as a script would call them: frame, then a layout with waypoints
+    qgis_process(
+        "run", "plotwise:buildframe", "--", f"INPUT={out / 'area.gpkg'}", f"EXCLUDE={out / 'excluded.gpkg'}",
+        "EDGE_BUFFER=50", f"OUTPUT={out / 'frame.gpkg'}", f"REPORT={out / 'frame.html'}",
+    )
+    qgis_process(
+        "run", "plotwise:layout", "--", f"FRAME={out / 'frame.gpkg'}", "N_UNITS=12", "DESIGN=2", "SHAPE=1",
+        "SIZE=300", "RESERVE=2", "SEED=4", f"OUTPUT={out / 'units.gpkg'}", f"OUTPUT_GPX={out / 'units.gpx'}",
+        f"REPORT={out / 'layout.html'}",
+    )
+    from osgeo import ogr
+
+    gpx = ogr.Open(str(out / "units.gpx"))  # keep the dataset alive while its layer is read
+    assert gpx.GetLayerByName("waypoints").GetFeatureCount() == 12 + 2  # one waypoint per square plot
