@@ -180,6 +180,19 @@ def _axis_ticks(lo, hi, count=5):
     return np.arange(start, hi + step * 0.001, step)
 
 
+def _histogram_axes(lo, hi, sx, left, top, pw, ph, height, x_label, y_label):
+    """The axes, x ticks and axis labels shared by the histograms."""
+    out = [
+        f'<line x1="{left}" y1="{top + ph}" x2="{left + pw}" y2="{top + ph}" stroke="{INK}"/>',
+        f'<line x1="{left}" y1="{top}" x2="{left}" y2="{top + ph}" stroke="{INK}"/>',
+    ]
+    for t in _axis_ticks(lo, hi):
+        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" fill="{INK}">{escape(format_number(float(t)))}</text>')
+    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(x_label)}</text>')
+    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
+    return out
+
+
 def histogram_svg(edges, counts, marks=(), x_label="", y_label="cells", width=900, height=300, mark_label=""):
     """A histogram of ``counts`` over bins ``edges`` with vertical lines at ``marks`` (e.g. stratum boundaries)."""
     edges = np.asarray(edges, dtype=float)
@@ -203,12 +216,7 @@ def histogram_svg(edges, counts, marks=(), x_label="", y_label="cells", width=90
     for m in marks:
         x = sx(m)
         out.append(f'<line x1="{x:.1f}" y1="{top}" x2="{x:.1f}" y2="{top + ph}" stroke="#b4443b" stroke-width="2" stroke-dasharray="6,3"/>')
-    out.append(f'<line x1="{left}" y1="{top + ph}" x2="{left + pw}" y2="{top + ph}" stroke="{INK}"/>')
-    out.append(f'<line x1="{left}" y1="{top}" x2="{left}" y2="{top + ph}" stroke="{INK}"/>')
-    for t in _axis_ticks(lo, hi):
-        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" fill="{INK}">{escape(format_number(float(t)))}</text>')
-    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(x_label)}</text>')
-    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
+    out.extend(_histogram_axes(lo, hi, sx, left, top, pw, ph, height, x_label, y_label))
     if mark_label and len(marks):
         out.append(f'<text x="{left + pw}" y="{top + 10}" font-size="11" {FONT} text-anchor="end" fill="#b4443b">{escape(mark_label)}</text>')
     out.append("</svg>")
@@ -346,12 +354,7 @@ def stacked_histogram_svg(edges, counts, colours, labels=(), marks=(), x_label="
     for m in marks:
         x = sx(m)
         out.append(f'<line x1="{x:.1f}" y1="{top}" x2="{x:.1f}" y2="{top + ph}" stroke="{INK}" stroke-width="1.5" stroke-dasharray="6,3"/>')
-    out.append(f'<line x1="{left}" y1="{top + ph}" x2="{left + pw}" y2="{top + ph}" stroke="{INK}"/>')
-    out.append(f'<line x1="{left}" y1="{top}" x2="{left}" y2="{top + ph}" stroke="{INK}"/>')
-    for t in _axis_ticks(lo, hi):
-        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" fill="{INK}">{escape(format_number(float(t)))}</text>')
-    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(x_label)}</text>')
-    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
+    out.extend(_histogram_axes(lo, hi, sx, left, top, pw, ph, height, x_label, y_label))
     for g, label in enumerate(labels):
         y = top + 14 + 20 * g
         out.append(f'<rect x="{left + pw + 14}" y="{y - 10}" width="12" height="12" fill="{colours[g % len(colours)]}"/>')
