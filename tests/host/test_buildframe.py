@@ -10,6 +10,7 @@ Outside references:
 import numpy as np
 import pyproj
 import pytest
+from recording_feedback import RecordingFeedback as Recorder
 
 pytest.importorskip("qgis.core")
 from osgeo import gdal, osr  # noqa: E402
@@ -17,7 +18,6 @@ from qgis.core import (  # noqa: E402
     QgsFeature,
     QgsGeometry,
     QgsProcessingException,
-    QgsProcessingFeedback,
     QgsVectorLayer,
 )
 from shapely import wkb as shapely_wkb  # noqa: E402
@@ -31,19 +31,6 @@ def registry(plotwise_provider):
     """The id of the algorithm under test (the provider is registered by tests/host/conftest.py)."""
     return "plotwise:buildframe"
 
-
-class Recorder(QgsProcessingFeedback):
-    def __init__(self):
-        super().__init__()
-        self.infos, self.warnings = [], []
-
-    def pushInfo(self, info):  # noqa: N802
-        self.infos.append(info)
-        super().pushInfo(info)
-
-    def pushWarning(self, warning):  # noqa: N802
-        self.warnings.append(warning)
-        super().pushWarning(warning)
 
 
 def _layer(wkts, crs="EPSG:32633", name="polygons"):

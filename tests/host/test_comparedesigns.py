@@ -8,6 +8,7 @@ import math
 
 import numpy as np
 import pytest
+from recording_feedback import RecordingFeedback
 
 qgis_core = pytest.importorskip("qgis.core")
 from osgeo import gdal, osr  # noqa: E402
@@ -119,14 +120,9 @@ def test_five_designs_table_and_report(registered, run_alg, tmp_path):
 
 
 def test_without_strata_the_stratified_designs_are_left_out(registered, run_alg, tmp_path):
-    from qgis.core import QgsProcessingFeedback
 
-    warnings = []
-
-    class Feedback(QgsProcessingFeedback):
-        def pushWarning(self, text):  # noqa: N802
-            warnings.append(text)
-            super().pushWarning(text)
+    feedback = RecordingFeedback()
+    warnings = feedback.warnings
 
     result = run_alg("plotwise:comparedesigns", {
         "SURFACE": _surface(tmp_path / "density.tif"),
@@ -134,7 +130,7 @@ def test_without_strata_the_stratified_designs_are_left_out(registered, run_alg,
         "N_UNITS": 12, "SHAPE": 0, "SIZE": 60.0, "BEARING": -1, "REPLICATES": 20, "SEED": 3,
         "OVERDISPERSION": 1.5,
         "OUTPUT_TABLE": "memory:",
-    }, feedback=Feedback())
+    }, feedback=feedback)
     table = result["OUTPUT_TABLE"]
     if isinstance(table, str):
         from qgis.core import QgsProcessingContext, QgsProcessingUtils
@@ -179,14 +175,9 @@ def test_transect_without_strip_is_refused(registered, run_alg, tmp_path):
 
 
 def test_too_few_units_in_the_range_are_left_out_with_a_warning(registered, run_alg, tmp_path):
-    from qgis.core import QgsProcessingFeedback
 
-    warnings = []
-
-    class Feedback(QgsProcessingFeedback):
-        def pushWarning(self, text):  # noqa: N802
-            warnings.append(text)
-            super().pushWarning(text)
+    feedback = RecordingFeedback()
+    warnings = feedback.warnings
 
     report = tmp_path / "r.html"
     run_alg("plotwise:comparedesigns", {
@@ -194,7 +185,7 @@ def test_too_few_units_in_the_range_are_left_out_with_a_warning(registered, run_
         "STRATA": _polygons(STRATA, [("stratum", "string")]), "DESIGNS": [2], "N_UNITS": 8, "N_RANGE": "3, 12",
         "SHAPE": 3, "SIZE": 400.0, "HALF_WIDTH": 20.0, "REPLICATES": 10, "SEED": 5,
         "OUTPUT_TABLE": "memory:", "REPORT": str(report),
-    }, feedback=Feedback())
+    }, feedback=feedback)
     assert any("3 units were left out of the range" in w for w in warnings)
     assert "RMSE against the number of units" in report.read_text(encoding="utf-8")
 
@@ -202,23 +193,18 @@ def test_too_few_units_in_the_range_are_left_out_with_a_warning(registered, run_
 def test_surface_in_another_crs_is_warped(registered, run_alg, tmp_path):
     # the surface in ETRS89-LAEA (EPSG:3035), the frame in UTM 33N: the density is warped onto the frame;
     # the expected total of a density (an intensive quantity) survives bilinear warping (truth by construction)
-    from qgis.core import QgsProcessingFeedback
-
     source = _surface(tmp_path / "utm.tif")
     laea = str(tmp_path / "laea.tif")
     gdal.Warp(laea, source, dstSRS="EPSG:3035", xRes=80, yRes=80, resampleAlg="bilinear", dstNodata=-9999)
-    warnings = []
 
-    class Feedback(QgsProcessingFeedback):
-        def pushWarning(self, text):  # noqa: N802
-            warnings.append(text)
-            super().pushWarning(text)
+    feedback = RecordingFeedback()
+    warnings = feedback.warnings
 
     inner = _box(X0 + 500, Y0 + 500, X0 + 3500, Y0 + 3500)
     result = run_alg("plotwise:comparedesigns", {
         "SURFACE": laea, "FRAME": _polygons([(inner, [])]), "DESIGNS": [0], "N_UNITS": 10, "SHAPE": 1,
         "SIZE": 100.0, "REPLICATES": 10, "SEED": 2, "OUTPUT_TABLE": "memory:",
-    }, feedback=Feedback())
+    }, feedback=feedback)
     table = result["OUTPUT_TABLE"]
     if isinstance(table, str):
         from qgis.core import QgsProcessingContext, QgsProcessingUtils

@@ -12,13 +12,13 @@ import xml.etree.ElementTree as ET
 from pathlib import Path
 
 import pytest
+from recording_feedback import RecordingFeedback as Warnings
 
 qgis_core = pytest.importorskip("qgis.core")
 from qgis.core import (  # noqa: E402
     QgsFeature,
     QgsGeometry,
     QgsProcessingException,
-    QgsProcessingFeedback,
     QgsVectorLayer,
 )
 
@@ -61,15 +61,6 @@ def french_ui(plotwise_provider):
     finally:
         remove_translator(translator)
 
-
-class Warnings(QgsProcessingFeedback):
-    def __init__(self):
-        super().__init__()
-        self.warnings = []
-
-    def pushWarning(self, text):  # noqa: N802 (host naming)
-        self.warnings.append(text)
-        super().pushWarning(text)
 
 
 def _squares(fields, rows, crs="EPSG:32633"):

@@ -7,6 +7,7 @@ import math
 
 import numpy as np
 import pytest
+from recording_feedback import RecordingFeedback as Warnings
 
 qgis_core = pytest.importorskip("qgis.core")
 from qgis.core import (  # noqa: E402
@@ -14,7 +15,6 @@ from qgis.core import (  # noqa: E402
     QgsFeature,
     QgsGeometry,
     QgsProcessingException,
-    QgsProcessingFeedback,
     QgsVectorLayer,
 )
 from scipy import stats  # noqa: E402
@@ -24,15 +24,6 @@ STRATA = {1: (0.0, 1000.0, 2000.0), 2: (1000.0, 2000.0, 1000.0)}
 UNIT_M2 = 10_000.0  # 1 ha square plots
 COUNTS = {1: [3, 0, 5, 2, 4], 2: [10, 12, 7, 9]}
 
-
-class Warnings(QgsProcessingFeedback):
-    def __init__(self):
-        super().__init__()
-        self.warnings = []
-
-    def pushWarning(self, text):  # noqa: N802
-        self.warnings.append(text)
-        super().pushWarning(text)
 
 
 @pytest.fixture

@@ -8,6 +8,7 @@ import math
 import numpy as np
 import pyproj
 import pytest
+from recording_feedback import RecordingFeedback
 
 pytest.importorskip("qgis.core")
 from osgeo import ogr  # noqa: E402
@@ -170,16 +171,7 @@ def test_invalid_repaired_and_empty_skipped_with_warnings(registered):
         (5, 2, "POLYGON((508000 9000000, 508100 9000000, 508200 9000000, 508000 9000000))"),
     ]
 
-    class Feedback(QgsProcessingFeedback):
-        def __init__(self):
-            super().__init__()
-            self.warnings = []
-
-        def pushWarning(self, text):  # noqa: N802
-            self.warnings.append(text)
-            super().pushWarning(text)
-
-    fb = Feedback()
+    fb = RecordingFeedback()
     result = processing.run("plotwise:layout", base_parameters(strata_layer(rows), INSIDE=False, MIN_SPACING=0.0), feedback=fb)
     text = " ".join(fb.warnings)
     assert "repaired" in text and "skipped" in text

@@ -8,6 +8,7 @@ Outside references:
 """
 import numpy as np
 import pytest
+from recording_feedback import RecordingFeedback as Recorder
 
 pytest.importorskip("qgis.core")
 from osgeo import gdal  # noqa: E402
@@ -17,7 +18,6 @@ from qgis.core import (  # noqa: E402
     QgsFeature,
     QgsGeometry,
     QgsProcessingException,
-    QgsProcessingFeedback,
     QgsProcessingProvider,
     QgsVectorLayer,
 )
@@ -51,15 +51,6 @@ def alg_id(plotwise_provider):
         registry.addProvider(_KEEP[-1])
     return "plotwise_stratify_test:stratify"
 
-
-class Recorder(QgsProcessingFeedback):
-    def __init__(self):
-        super().__init__()
-        self.warnings = []
-
-    def pushWarning(self, warning):  # noqa: N802
-        self.warnings.append(warning)
-        super().pushWarning(warning)
 
 
 def _features(path):
