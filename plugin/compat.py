@@ -107,7 +107,12 @@ from qgis.core import QgsFeatureRequest  # noqa: E402
 
 GEOMETRY_NO_CHECK = _first(lambda: Qgis.InvalidGeometryCheck.NoCheck, lambda: QgsFeatureRequest.GeometryNoCheck)
 
-# Sink flags and field parameter types.
+# Sink flags (fully scoped: works on 3.22 and 4.x).
+from qgis.core import QgsFeatureSink  # noqa: E402
+
+FAST_INSERT = QgsFeatureSink.Flag.FastInsert
+
+# Field parameter types.
 from qgis.core import QgsProcessingParameterField  # noqa: E402
 
 FIELD_NUMERIC = _first(

@@ -14,7 +14,6 @@ from qgis.core import (
     QgsCoordinateTransform,
     QgsFeature,
     QgsFeatureRequest,
-    QgsFeatureSink,
     QgsFields,
     QgsGeometry,
     QgsProcessingException,
@@ -204,7 +203,7 @@ def write_features(sink, fields, geometries, rows, feedback=None, progress_range
         if geometry is not None:
             feature.setGeometry(to_qgs(geometry))
         feature.setAttributes([_sink_value(v) for v in row])
-        sink.addFeature(feature, QgsFeatureSink.FastInsert)
+        sink.addFeature(feature, compat.FAST_INSERT)
         if feedback is not None and i % 1000 == 0:
             feedback.setProgress(start + (end - start) * i / total)
     return True

@@ -5,7 +5,6 @@ import numpy as np
 from qgis.core import (
     QgsFeature,
     QgsFeatureRequest,
-    QgsFeatureSink,
     QgsField,
     QgsGeometry,
     QgsPointXY,
@@ -328,7 +327,7 @@ class LayoutUnits(PlotwiseAlgorithm):
                 if feedback.isCanceled():
                     return None
                 feedback.setProgress(70 + 15 * i / total)
-        sink.addFeatures(features, QgsFeatureSink.FastInsert)
+        sink.addFeatures(features, compat.FAST_INSERT)
         return dest_id
 
     # -- report ----------------------------------------------------------------------

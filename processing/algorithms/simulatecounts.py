@@ -1,7 +1,6 @@
 """plotwise:simulatecounts — fill the `count` field of sample units from a point population."""
 from qgis.core import (
     QgsFeature,
-    QgsFeatureSink,
     QgsProcessingException,
     QgsProcessingParameterBoolean,
     QgsProcessingParameterFeatureSink,
@@ -119,7 +118,7 @@ class SimulateCounts(PlotwiseAlgorithm):
             attributes[count_index] = int(result.seen[i]) if surveyed else None
             attributes[present_index] = int(result.present[i])
             out.setAttributes(attributes)
-            sink.addFeature(out, QgsFeatureSink.FastInsert)
+            sink.addFeature(out, compat.FAST_INSERT)
         feedback.setProgress(100)
         surveyed = [count_reserves or role != "reserve" for role in roles]
         seen = sum(int(v) for v, s in zip(result.seen, surveyed) if s)
