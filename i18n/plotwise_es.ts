@@ -2482,12 +2482,12 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
   <context>
     <name>LayoutUnits</name>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="73" />
+      <location filename="../processing/algorithms/layout.py" line="72" />
       <source>Lay out sample units</source>
       <translation>Disponer las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="76" />
+      <location filename="../processing/algorithms/layout.py" line="75" />
       <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -2524,447 +2524,447 @@ Campos de salida: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; par
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="111" />
+      <location filename="../processing/algorithms/layout.py" line="110" />
       <source>Sampling frame or strata</source>
       <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="115" />
+      <location filename="../processing/algorithms/layout.py" line="114" />
       <source>Stratum field (empty: the frame is one stratum)</source>
       <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="121" />
+      <location filename="../processing/algorithms/layout.py" line="120" />
       <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
       <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="127" />
+      <location filename="../processing/algorithms/layout.py" line="126" />
       <source>Total number of units (when no units field is given)</source>
       <translation>Número total de unidades (si no se da un campo de unidades)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="132" />
       <source>Design</source>
       <translation>Diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="134" />
+      <location filename="../processing/algorithms/layout.py" line="133" />
       <source>Simple random</source>
       <translation>Aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="134" />
+      <location filename="../processing/algorithms/layout.py" line="133" />
       <source>Systematic grid</source>
       <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="134" />
+      <location filename="../processing/algorithms/layout.py" line="133" />
       <source>Spatially balanced</source>
       <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="138" />
       <source>Unit shape</source>
       <translation>Forma de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Point station</source>
       <translation>Estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Square plot</source>
       <translation>Parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Circular plot</source>
       <translation>Parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Line transect</source>
       <translation>Transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="146" />
+      <location filename="../processing/algorithms/layout.py" line="145" />
       <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
       <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="152" />
+      <location filename="../processing/algorithms/layout.py" line="151" />
       <source>Bearing (degrees from grid north; -1: random)</source>
       <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="157" />
+      <location filename="../processing/algorithms/layout.py" line="156" />
       <source>Keep every unit wholly inside its stratum</source>
       <translation>Mantener cada unidad por completo dentro de su estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="161" />
+      <location filename="../processing/algorithms/layout.py" line="160" />
       <source>Minimum spacing between unit centres (m; 0: none)</source>
       <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="167" />
+      <location filename="../processing/algorithms/layout.py" line="166" />
       <source>Reserve units per stratum</source>
       <translation>Unidades de reserva por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="171" />
+      <location filename="../processing/algorithms/layout.py" line="170" />
       <source>Sample units</source>
       <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="174" />
+      <location filename="../processing/algorithms/layout.py" line="173" />
       <source>Waypoints for GPS (GPX)</source>
       <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="174" />
+      <location filename="../processing/algorithms/layout.py" line="173" />
       <source>GPX files (*.gpx)</source>
       <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="187" />
+      <location filename="../processing/algorithms/layout.py" line="186" />
       <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
       <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="214" />
+      <location filename="../processing/algorithms/layout.py" line="213" />
       <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
       <translation>Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="238" />
+      <location filename="../processing/algorithms/layout.py" line="237" />
       <source>Stratum field '{field}' of layer '{layer}'</source>
       <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="239" />
+      <location filename="../processing/algorithms/layout.py" line="238" />
       <source>Units field '{field}' of layer '{layer}'</source>
       <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="245" />
+      <location filename="../processing/algorithms/layout.py" line="244" />
       <source>Layer '{layer}': {text}</source>
       <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="250" />
+      <location filename="../processing/algorithms/layout.py" line="249" />
       <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
       <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="264" />
+      <location filename="../processing/algorithms/layout.py" line="263" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="268" />
+      <location filename="../processing/algorithms/layout.py" line="267" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="281" />
+      <location filename="../processing/algorithms/layout.py" line="280" />
       <source>the frame</source>
       <translation>el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="281" />
+      <location filename="../processing/algorithms/layout.py" line="280" />
       <source>stratum {key}</source>
       <translation>estrato {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="337" />
+      <location filename="../processing/algorithms/layout.py" line="336" />
       <source>Sample-unit layout</source>
       <translation>Disposición de las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <location filename="../processing/algorithms/layout.py" line="444" />
+      <location filename="../processing/algorithms/layout.py" line="341" />
+      <location filename="../processing/algorithms/layout.py" line="443" />
       <source>primary units</source>
       <translation>unidades principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="445" />
+      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="444" />
       <source>reserve units</source>
       <translation>unidades de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
       <source>strata</source>
       <translation>estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
       <source>design</source>
       <translation>diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>simple random</source>
       <translation>aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>systematic grid</source>
       <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>spatially balanced</source>
       <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="347" />
+      <location filename="../processing/algorithms/layout.py" line="346" />
       <source>Replacing units in the field</source>
       <translation>Sustituir unidades en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="349" />
+      <location filename="../processing/algorithms/layout.py" line="348" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="353" />
       <source>Units per stratum</source>
       <translation>Unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Area (ha)</source>
       <translation>Área (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Effective area (ha)</source>
       <translation>Área efectiva (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Units asked</source>
       <translation>Unidades pedidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Reserve</source>
       <translation>Reservas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="359" />
+      <location filename="../processing/algorithms/layout.py" line="358" />
       <source>Grid spacing (m)</source>
       <translation>Espaciado de la cuadrícula (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="359" />
+      <location filename="../processing/algorithms/layout.py" line="358" />
       <source>Grid rotation (°)</source>
       <translation>Rotación de la cuadrícula (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="362" />
+      <location filename="../processing/algorithms/layout.py" line="361" />
       <source>frame</source>
       <translation>marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="370" />
+      <location filename="../processing/algorithms/layout.py" line="369" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="372" />
+      <location filename="../processing/algorithms/layout.py" line="371" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="376" />
+      <location filename="../processing/algorithms/layout.py" line="375" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="383" />
+      <location filename="../processing/algorithms/layout.py" line="382" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="385" />
       <source>Map</source>
       <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="388" />
+      <location filename="../processing/algorithms/layout.py" line="387" />
       <source>Method</source>
       <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="392" />
+      <location filename="../processing/algorithms/layout.py" line="391" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="393" />
       <source>Frame (FRAME)</source>
       <translation>Marco (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Campo de estrato (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>(none: one stratum)</source>
       <translation>(ninguno: un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Campo de unidades por estrato (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>(none)</source>
       <translation>(ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>Total units (N_UNITS)</source>
       <translation>Total de unidades (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>(not used)</source>
       <translation>(no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Design (DESIGN)</source>
       <translation>Diseño (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forma de la unidad (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>point</source>
       <translation>punto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>square</source>
       <translation>cuadrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>circle</source>
       <translation>círculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>line</source>
       <translation>línea</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Unit size (SIZE, m)</source>
       <translation>Tamaño de la unidad (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Rumbo (BEARING, grados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>random</source>
       <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>Keep inside (INSIDE)</source>
       <translation>Mantener dentro (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>yes</source>
       <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>no</source>
       <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Separación mínima (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="403" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Reservas por estrato (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="405" />
+      <location filename="../processing/algorithms/layout.py" line="404" />
       <source>Seed (SEED)</source>
       <translation>Semilla (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="406" />
+      <location filename="../processing/algorithms/layout.py" line="405" />
       <source>CRS of the computation and the output</source>
       <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="414" />
+      <location filename="../processing/algorithms/layout.py" line="413" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="416" />
+      <location filename="../processing/algorithms/layout.py" line="415" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="418" />
+      <location filename="../processing/algorithms/layout.py" line="417" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="425" />
+      <location filename="../processing/algorithms/layout.py" line="424" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
     </message>
@@ -2977,7 +2977,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <location filename="../processing/algorithms/comparedesigns.py" line="326" />
       <location filename="../processing/algorithms/demoreserve.py" line="117" />
       <location filename="../processing/algorithms/estimate.py" line="375" />
-      <location filename="../processing/algorithms/simulatecounts.py" line="113" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="112" />
       <location filename="../processing/algorithms/stratify.py" line="210" />
       <source>Cancelled by the user. No result was written.</source>
       <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
@@ -3044,52 +3044,52 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="67" />
+      <location filename="../processing/bridge.py" line="66" />
       <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
       <translation>La capa «{layer}» no tiene un sistema de referencia de coordenadas válido. Defina su SRC (Propiedades de la capa → Fuente) y vuelva a ejecutar.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="78" />
+      <location filename="../processing/bridge.py" line="77" />
       <source>Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
       <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="116" />
+      <location filename="../processing/bridge.py" line="115" />
       <source>The input layer '{layer}' could not be opened.</source>
       <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="124" />
+      <location filename="../processing/bridge.py" line="123" />
       <source>Layer '{layer}' has no field named {names}. Choose an existing field.</source>
       <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="157" />
+      <location filename="../processing/bridge.py" line="156" />
       <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
       <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="161" />
+      <location filename="../processing/bridge.py" line="160" />
       <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
       <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="181" />
+      <location filename="../processing/bridge.py" line="180" />
       <source> and {n} more</source>
       <translation> y {n} más</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="232" />
+      <location filename="../processing/bridge.py" line="231" />
       <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
       <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="259" />
+      <location filename="../processing/bridge.py" line="258" />
       <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
       <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="264" />
+      <location filename="../processing/bridge.py" line="263" />
       <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
       <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
@@ -3118,7 +3118,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
     </message>
     <message>
       <location filename="../processing/engine/allocation.py" line="384" />
-      <location filename="../processing/engine/layout.py" line="361" />
+      <location filename="../processing/engine/layout.py" line="364" />
       <source>{shown} and {more} more</source>
       <translation>{shown} y {more} más</translation>
     </message>
@@ -3339,7 +3339,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
     </message>
     <message>
       <location filename="../processing/engine/design_comparison.py" line="355" />
-      <location filename="../processing/engine/layout.py" line="149" />
+      <location filename="../processing/engine/layout.py" line="152" />
       <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
       <translation>SHAPE debe ser 0 (punto), 1 (cuadrado), 2 (círculo) o 3 (transecto lineal).</translation>
     </message>
@@ -3664,207 +3664,217 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>No queda nada del marco de muestreo tras el búfer interior (EDGE_BUFFER = {edge_buffer:g} m): las {hectares:.4g} ha restantes están todas a menos de esa distancia del límite del área de estudio (extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="147" />
+      <location filename="../processing/engine/layout.py" line="150" />
       <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
       <translation>DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad puntual; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad cuadrada; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad circular; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad lineal; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="153" />
+      <location filename="../processing/engine/layout.py" line="156" />
       <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
       <translation>BEARING debe ser -1 (aleatorio) o estar entre 0 y 360 grados; es {bearing}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="156" />
+      <location filename="../processing/engine/layout.py" line="159" />
       <source>MIN_SPACING must be 0 or more metres.</source>
       <translation>MIN_SPACING debe ser 0 metros o más.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="158" />
+      <location filename="../processing/engine/layout.py" line="161" />
       <source>RESERVE must be 0 or a positive whole number.</source>
       <translation>RESERVE debe ser 0 o un número entero positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="337" />
+      <location filename="../processing/engine/layout.py" line="340" />
       <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
       <translation>{field} está vacío (NULL) o no es un número para las entidades {ids}. Dé a cada estrato un número entero de unidades, o deje N_FIELD sin definir para usar N_UNITS.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="344" />
+      <location filename="../processing/engine/layout.py" line="347" />
       <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
       <translation>{field} es negativo para las entidades {ids}. Use 0 o un número entero positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="350" />
+      <location filename="../processing/engine/layout.py" line="353" />
       <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
       <translation>{field} no es un número entero para las entidades {ids}. Redondee primero la asignación a unidades enteras.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="431" />
+      <location filename="../processing/engine/layout.py" line="434" />
       <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
       <translation>Indique N_FIELD (unidades por estrato) o N_UNITS (un total de al menos 1).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="442" />
+      <location filename="../processing/engine/layout.py" line="445" />
       <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
       <translation>Se reparó una geometría no válida en las entidades {ids}; compruebe sus contornos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="445" />
+      <location filename="../processing/engine/layout.py" line="448" />
       <source>Empty or zero-area feature(s) {ids} were skipped.</source>
       <translation>Se omitieron las entidades vacías o de área nula {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="447" />
+      <location filename="../processing/engine/layout.py" line="450" />
       <source>The frame has no polygon with an area: every feature is empty or has zero area.</source>
       <translation>El marco de muestreo no tiene ningún polígono con área: cada entidad está vacía o tiene área nula.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="457" />
+      <location filename="../processing/engine/layout.py" line="460" />
       <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
       <translation>{field} está vacío (NULL) para la entidad {fid}. Dele un valor de estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="483" />
+      <location filename="../processing/engine/layout.py" line="486" />
       <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
       <translation>Las entidades del marco de muestreo (sin campo de estrato) tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades o elija un campo de estrato para que cada entidad sea un estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="483" />
+      <location filename="../processing/engine/layout.py" line="486" />
       <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
       <translation>Las entidades del estrato {key} tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="498" />
+      <location filename="../processing/engine/layout.py" line="501" />
       <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
       <translation>N_UNITS = {n_units} es menos de {minimum} por estrato para {n_strata} estratos; cada estrato recibe {minimum} ({total} unidades).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="513" />
+      <location filename="../processing/engine/layout.py" line="517" />
+      <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+      <translation>Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="517" />
+      <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+      <translation>Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="526" />
       <source>The frame gets no units; the estimate cannot speak for it.</source>
       <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="513" />
+      <location filename="../processing/engine/layout.py" line="526" />
       <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
       <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="516" />
+      <location filename="../processing/engine/layout.py" line="529" />
       <source>The frame gets one unit only; its variance cannot be estimated.</source>
       <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="516" />
+      <location filename="../processing/engine/layout.py" line="529" />
       <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
       <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="609" />
+      <location filename="../processing/engine/layout.py" line="622" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="609" />
+      <location filename="../processing/engine/layout.py" line="622" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="770" />
+      <location filename="../processing/engine/layout.py" line="783" />
       <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="770" />
+      <location filename="../processing/engine/layout.py" line="783" />
       <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="788" />
+      <location filename="../processing/engine/layout.py" line="801" />
       <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="788" />
+      <location filename="../processing/engine/layout.py" line="801" />
       <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="798" />
+      <location filename="../processing/engine/layout.py" line="811" />
       <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="798" />
+      <location filename="../processing/engine/layout.py" line="811" />
       <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="805" />
+      <location filename="../processing/engine/layout.py" line="818" />
       <source>The frame has only {n} of {r} reserve units.</source>
       <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="805" />
+      <location filename="../processing/engine/layout.py" line="818" />
       <source>Stratum {key} has only {n} of {r} reserve units.</source>
       <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
@@ -4116,52 +4126,52 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>SimulateCounts</name>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="30" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="29" />
       <source>Simulate counts in sample units</source>
       <translation>Simular conteos en las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="33" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="32" />
       <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit's &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve's simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
       <translation>&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="50" />
       <source>Sample units</source>
       <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="52" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
       <source>Animal points</source>
       <translation>Puntos de animales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="55" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="54" />
       <source>Detection probability</source>
       <translation>Probabilidad de detección</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="60" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="59" />
       <source>Count reserve units too</source>
       <translation>Contar también las unidades de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="63" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="62" />
       <source>Units with simulated counts</source>
       <translation>Unidades con conteos simulados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="82" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="81" />
       <source>has no geometry</source>
       <translation>no tiene geometría</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="88" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="87" />
       <source>Layer '{layer}': these features cannot be counted: {items}. Point and line units need a positive 'area_m2' field (the layout step writes it); polygons need a geometry.</source>
       <translation>Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="127" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="126" />
       <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
       <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
     </message>

@@ -2482,12 +2482,12 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
   <context>
     <name>LayoutUnits</name>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="73" />
+      <location filename="../processing/algorithms/layout.py" line="72" />
       <source>Lay out sample units</source>
       <translation>Disposer les unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="76" />
+      <location filename="../processing/algorithms/layout.py" line="75" />
       <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -2524,447 +2524,447 @@ Champs de sortie : unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A ; p
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="111" />
+      <location filename="../processing/algorithms/layout.py" line="110" />
       <source>Sampling frame or strata</source>
       <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="115" />
+      <location filename="../processing/algorithms/layout.py" line="114" />
       <source>Stratum field (empty: the frame is one stratum)</source>
       <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="121" />
+      <location filename="../processing/algorithms/layout.py" line="120" />
       <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
       <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="127" />
+      <location filename="../processing/algorithms/layout.py" line="126" />
       <source>Total number of units (when no units field is given)</source>
       <translation>Nombre total d'unités (sans champ d'unités)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="132" />
       <source>Design</source>
       <translation>Plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="134" />
+      <location filename="../processing/algorithms/layout.py" line="133" />
       <source>Simple random</source>
       <translation>Aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="134" />
+      <location filename="../processing/algorithms/layout.py" line="133" />
       <source>Systematic grid</source>
       <translation>Grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="134" />
+      <location filename="../processing/algorithms/layout.py" line="133" />
       <source>Spatially balanced</source>
       <translation>Spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="138" />
       <source>Unit shape</source>
       <translation>Forme de l'unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Point station</source>
       <translation>Station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Square plot</source>
       <translation>Placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Circular plot</source>
       <translation>Placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="140" />
+      <location filename="../processing/algorithms/layout.py" line="139" />
       <source>Line transect</source>
       <translation>Transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="146" />
+      <location filename="../processing/algorithms/layout.py" line="145" />
       <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
       <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="152" />
+      <location filename="../processing/algorithms/layout.py" line="151" />
       <source>Bearing (degrees from grid north; -1: random)</source>
       <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="157" />
+      <location filename="../processing/algorithms/layout.py" line="156" />
       <source>Keep every unit wholly inside its stratum</source>
       <translation>Garder chaque unité entièrement dans sa strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="161" />
+      <location filename="../processing/algorithms/layout.py" line="160" />
       <source>Minimum spacing between unit centres (m; 0: none)</source>
       <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="167" />
+      <location filename="../processing/algorithms/layout.py" line="166" />
       <source>Reserve units per stratum</source>
       <translation>Unités de réserve par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="171" />
+      <location filename="../processing/algorithms/layout.py" line="170" />
       <source>Sample units</source>
       <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="174" />
+      <location filename="../processing/algorithms/layout.py" line="173" />
       <source>Waypoints for GPS (GPX)</source>
       <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="174" />
+      <location filename="../processing/algorithms/layout.py" line="173" />
       <source>GPX files (*.gpx)</source>
       <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="187" />
+      <location filename="../processing/algorithms/layout.py" line="186" />
       <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
       <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="214" />
+      <location filename="../processing/algorithms/layout.py" line="213" />
       <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
       <translation>Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="238" />
+      <location filename="../processing/algorithms/layout.py" line="237" />
       <source>Stratum field '{field}' of layer '{layer}'</source>
       <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="239" />
+      <location filename="../processing/algorithms/layout.py" line="238" />
       <source>Units field '{field}' of layer '{layer}'</source>
       <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="245" />
+      <location filename="../processing/algorithms/layout.py" line="244" />
       <source>Layer '{layer}': {text}</source>
       <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="250" />
+      <location filename="../processing/algorithms/layout.py" line="249" />
       <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
       <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="264" />
+      <location filename="../processing/algorithms/layout.py" line="263" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="268" />
+      <location filename="../processing/algorithms/layout.py" line="267" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="281" />
+      <location filename="../processing/algorithms/layout.py" line="280" />
       <source>the frame</source>
       <translation>la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="281" />
+      <location filename="../processing/algorithms/layout.py" line="280" />
       <source>stratum {key}</source>
       <translation>strate {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="337" />
+      <location filename="../processing/algorithms/layout.py" line="336" />
       <source>Sample-unit layout</source>
       <translation>Disposition des unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <location filename="../processing/algorithms/layout.py" line="444" />
+      <location filename="../processing/algorithms/layout.py" line="341" />
+      <location filename="../processing/algorithms/layout.py" line="443" />
       <source>primary units</source>
       <translation>unités principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="445" />
+      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="444" />
       <source>reserve units</source>
       <translation>unités de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
       <source>strata</source>
       <translation>strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
       <source>design</source>
       <translation>plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>simple random</source>
       <translation>aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>systematic grid</source>
       <translation>grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>spatially balanced</source>
       <translation>spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="347" />
+      <location filename="../processing/algorithms/layout.py" line="346" />
       <source>Replacing units in the field</source>
       <translation>Remplacer des unités sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="349" />
+      <location filename="../processing/algorithms/layout.py" line="348" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="353" />
       <source>Units per stratum</source>
       <translation>Unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Area (ha)</source>
       <translation>Surface (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Effective area (ha)</source>
       <translation>Surface effective (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Units asked</source>
       <translation>Unités demandées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>Reserve</source>
       <translation>Réserves</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="356" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="359" />
+      <location filename="../processing/algorithms/layout.py" line="358" />
       <source>Grid spacing (m)</source>
       <translation>Pas de la grille (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="359" />
+      <location filename="../processing/algorithms/layout.py" line="358" />
       <source>Grid rotation (°)</source>
       <translation>Rotation de la grille (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="362" />
+      <location filename="../processing/algorithms/layout.py" line="361" />
       <source>frame</source>
       <translation>base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="370" />
+      <location filename="../processing/algorithms/layout.py" line="369" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="372" />
+      <location filename="../processing/algorithms/layout.py" line="371" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="376" />
+      <location filename="../processing/algorithms/layout.py" line="375" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="383" />
+      <location filename="../processing/algorithms/layout.py" line="382" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="385" />
       <source>Map</source>
       <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="388" />
+      <location filename="../processing/algorithms/layout.py" line="387" />
       <source>Method</source>
       <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="392" />
+      <location filename="../processing/algorithms/layout.py" line="391" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="393" />
       <source>Frame (FRAME)</source>
       <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Champ de strate (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>(none: one stratum)</source>
       <translation>(aucun : une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Champ d'unités par strate (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>(none)</source>
       <translation>(aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>Total units (N_UNITS)</source>
       <translation>Total d'unités (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>(not used)</source>
       <translation>(non utilisé)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Design (DESIGN)</source>
       <translation>Plan (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forme de l'unité (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>point</source>
       <translation>point</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>square</source>
       <translation>carré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>circle</source>
       <translation>cercle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>line</source>
       <translation>ligne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Unit size (SIZE, m)</source>
       <translation>Taille de l'unité (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Azimut (BEARING, degrés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>random</source>
       <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>Keep inside (INSIDE)</source>
       <translation>Garder à l'intérieur (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>yes</source>
       <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>no</source>
       <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Espacement minimal (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="403" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Réserves par strate (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="405" />
+      <location filename="../processing/algorithms/layout.py" line="404" />
       <source>Seed (SEED)</source>
       <translation>Graine (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="406" />
+      <location filename="../processing/algorithms/layout.py" line="405" />
       <source>CRS of the computation and the output</source>
       <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="414" />
+      <location filename="../processing/algorithms/layout.py" line="413" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="416" />
+      <location filename="../processing/algorithms/layout.py" line="415" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="418" />
+      <location filename="../processing/algorithms/layout.py" line="417" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="425" />
+      <location filename="../processing/algorithms/layout.py" line="424" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
     </message>
@@ -2977,7 +2977,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <location filename="../processing/algorithms/comparedesigns.py" line="326" />
       <location filename="../processing/algorithms/demoreserve.py" line="117" />
       <location filename="../processing/algorithms/estimate.py" line="375" />
-      <location filename="../processing/algorithms/simulatecounts.py" line="113" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="112" />
       <location filename="../processing/algorithms/stratify.py" line="210" />
       <source>Cancelled by the user. No result was written.</source>
       <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
@@ -3044,52 +3044,52 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="67" />
+      <location filename="../processing/bridge.py" line="66" />
       <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
       <translation>La couche « {layer} » n'a pas de système de coordonnées de référence valide. Définissez son SCR (Propriétés de la couche → Source) et relancez.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="78" />
+      <location filename="../processing/bridge.py" line="77" />
       <source>Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
       <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="116" />
+      <location filename="../processing/bridge.py" line="115" />
       <source>The input layer '{layer}' could not be opened.</source>
       <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="124" />
+      <location filename="../processing/bridge.py" line="123" />
       <source>Layer '{layer}' has no field named {names}. Choose an existing field.</source>
       <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="157" />
+      <location filename="../processing/bridge.py" line="156" />
       <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
       <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="161" />
+      <location filename="../processing/bridge.py" line="160" />
       <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
       <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="181" />
+      <location filename="../processing/bridge.py" line="180" />
       <source> and {n} more</source>
       <translation> et {n} autres</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="232" />
+      <location filename="../processing/bridge.py" line="231" />
       <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
       <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="259" />
+      <location filename="../processing/bridge.py" line="258" />
       <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
       <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="264" />
+      <location filename="../processing/bridge.py" line="263" />
       <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
       <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
@@ -3118,7 +3118,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
     </message>
     <message>
       <location filename="../processing/engine/allocation.py" line="384" />
-      <location filename="../processing/engine/layout.py" line="361" />
+      <location filename="../processing/engine/layout.py" line="364" />
       <source>{shown} and {more} more</source>
       <translation>{shown} et {more} autres</translation>
     </message>
@@ -3339,7 +3339,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
     </message>
     <message>
       <location filename="../processing/engine/design_comparison.py" line="355" />
-      <location filename="../processing/engine/layout.py" line="149" />
+      <location filename="../processing/engine/layout.py" line="152" />
       <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
       <translation>SHAPE doit valoir 0 (point), 1 (carré), 2 (cercle) ou 3 (transect linéaire).</translation>
     </message>
@@ -3664,207 +3664,217 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>Il ne reste rien de la base de sondage après la zone tampon intérieure (EDGE_BUFFER = {edge_buffer:g} m) : les {hectares:.4g} ha restants se trouvent tous à moins de cette distance de la limite de la zone d'étude (emprise de la zone d'étude {width:.0f} m x {height:.0f} m). Utilisez un EDGE_BUFFER plus petit.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="147" />
+      <location filename="../processing/engine/layout.py" line="150" />
       <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
       <translation>DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité ponctuelle ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité carrée ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité circulaire ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="151" />
+      <location filename="../processing/engine/layout.py" line="154" />
       <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité linéaire ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="153" />
+      <location filename="../processing/engine/layout.py" line="156" />
       <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
       <translation>BEARING doit valoir -1 (aléatoire) ou être compris entre 0 et 360 degrés ; il vaut {bearing}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="156" />
+      <location filename="../processing/engine/layout.py" line="159" />
       <source>MIN_SPACING must be 0 or more metres.</source>
       <translation>MIN_SPACING doit valoir 0 mètre ou plus.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="158" />
+      <location filename="../processing/engine/layout.py" line="161" />
       <source>RESERVE must be 0 or a positive whole number.</source>
       <translation>RESERVE doit valoir 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="337" />
+      <location filename="../processing/engine/layout.py" line="340" />
       <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
       <translation>{field} est vide (NULL) ou n'est pas un nombre pour la ou les entités {ids}. Donnez à chaque strate un nombre entier d'unités, ou laissez N_FIELD vide pour utiliser N_UNITS.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="344" />
+      <location filename="../processing/engine/layout.py" line="347" />
       <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
       <translation>{field} est négatif pour la ou les entités {ids}. Utilisez 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="350" />
+      <location filename="../processing/engine/layout.py" line="353" />
       <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
       <translation>{field} n'est pas un nombre entier pour la ou les entités {ids}. Arrondissez d'abord l'allocation à des unités entières.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="431" />
+      <location filename="../processing/engine/layout.py" line="434" />
       <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
       <translation>Indiquez N_FIELD (unités par strate) ou N_UNITS (un total d'au moins 1).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="442" />
+      <location filename="../processing/engine/layout.py" line="445" />
       <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
       <translation>Une géométrie invalide a été réparée pour la ou les entités {ids} ; vérifiez leurs contours.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="445" />
+      <location filename="../processing/engine/layout.py" line="448" />
       <source>Empty or zero-area feature(s) {ids} were skipped.</source>
       <translation>Les entités vides ou de surface nulle {ids} ont été ignorées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="447" />
+      <location filename="../processing/engine/layout.py" line="450" />
       <source>The frame has no polygon with an area: every feature is empty or has zero area.</source>
       <translation>La base de sondage n'a aucun polygone avec une surface : chaque entité est vide ou de surface nulle.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="457" />
+      <location filename="../processing/engine/layout.py" line="460" />
       <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
       <translation>{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="483" />
+      <location filename="../processing/engine/layout.py" line="486" />
       <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
       <translation>Les entités de la base de sondage (sans champ de strate) portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités ou choisissez un champ de strate pour que chaque entité soit une strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="483" />
+      <location filename="../processing/engine/layout.py" line="486" />
       <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
       <translation>Les entités de la strate {key} portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="498" />
+      <location filename="../processing/engine/layout.py" line="501" />
       <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
       <translation>N_UNITS = {n_units} fait moins de {minimum} par strate pour {n_strata} strates ; chaque strate en reçoit {minimum} ({total} unités).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="509" />
+      <location filename="../processing/engine/layout.py" line="512" />
       <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="513" />
+      <location filename="../processing/engine/layout.py" line="517" />
+      <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+      <translation>Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="517" />
+      <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+      <translation>Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="526" />
       <source>The frame gets no units; the estimate cannot speak for it.</source>
       <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="513" />
+      <location filename="../processing/engine/layout.py" line="526" />
       <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
       <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="516" />
+      <location filename="../processing/engine/layout.py" line="529" />
       <source>The frame gets one unit only; its variance cannot be estimated.</source>
       <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="516" />
+      <location filename="../processing/engine/layout.py" line="529" />
       <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
       <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="609" />
+      <location filename="../processing/engine/layout.py" line="622" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="609" />
+      <location filename="../processing/engine/layout.py" line="622" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="770" />
+      <location filename="../processing/engine/layout.py" line="783" />
       <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="770" />
+      <location filename="../processing/engine/layout.py" line="783" />
       <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="788" />
+      <location filename="../processing/engine/layout.py" line="801" />
       <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="788" />
+      <location filename="../processing/engine/layout.py" line="801" />
       <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="798" />
+      <location filename="../processing/engine/layout.py" line="811" />
       <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="798" />
+      <location filename="../processing/engine/layout.py" line="811" />
       <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="805" />
+      <location filename="../processing/engine/layout.py" line="818" />
       <source>The frame has only {n} of {r} reserve units.</source>
       <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="805" />
+      <location filename="../processing/engine/layout.py" line="818" />
       <source>Stratum {key} has only {n} of {r} reserve units.</source>
       <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
     </message>
@@ -4116,52 +4126,52 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>SimulateCounts</name>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="30" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="29" />
       <source>Simulate counts in sample units</source>
       <translation>Simuler des comptages dans les unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="33" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="32" />
       <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit's &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve's simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
       <translation>&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="50" />
       <source>Sample units</source>
       <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="52" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
       <source>Animal points</source>
       <translation>Points des animaux</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="55" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="54" />
       <source>Detection probability</source>
       <translation>Probabilité de détection</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="60" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="59" />
       <source>Count reserve units too</source>
       <translation>Compter aussi les unités de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="63" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="62" />
       <source>Units with simulated counts</source>
       <translation>Unités avec comptages simulés</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="82" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="81" />
       <source>has no geometry</source>
       <translation>n'a pas de géométrie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="88" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="87" />
       <source>Layer '{layer}': these features cannot be counted: {items}. Point and line units need a positive 'area_m2' field (the layout step writes it); polygons need a geometry.</source>
       <translation>Couche « {layer} » : ces entités ne peuvent pas être comptées : {items}. Les unités ponctuelles et linéaires ont besoin d'un champ « area_m2 » positif (l'étape de disposition l'écrit) ; les polygones ont besoin d'une géométrie.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="127" />
+      <location filename="../processing/algorithms/simulatecounts.py" line="126" />
       <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
       <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
     </message>

@@ -790,6 +790,30 @@ ENGINE_TRANSLATIONS = {
         "La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.",
         "El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.",
     ),
+    (E, "Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) "
+        "where no unit centre can fall; the estimate carries the inner part's density over that band. "
+        "If density differs near edges, turn INSIDE off or use smaller units."): (
+        "Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de "
+        "{radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité "
+        "de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE "
+        "ou utilisez des unités plus petites.",
+        "Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de "
+        "{radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la "
+        "densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive "
+        "INSIDE o use unidades más pequeñas.",
+    ),
+    (E, "Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its "
+        "edge) where no unit centre can fall; the estimate carries the inner part's density over that "
+        "band. If density differs near edges, turn INSIDE off or use smaller units."): (
+        "Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de "
+        "{radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité "
+        "de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE "
+        "ou utilisez des unités plus petites.",
+        "Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de "
+        "{radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la "
+        "densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive "
+        "INSIDE o use unidades más pequeñas.",
+    ),
     (E, "Stratum {key} gets one unit only; its variance cannot be estimated."): (
         "La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.",
         "El estrato {key} recibe una sola unidad; su varianza no puede estimarse.",

@@ -105,6 +105,9 @@ _TOO_SMALL = {  # (whole frame?, shape)
                    "INSIDE, or merge the stratum with a neighbour.",
 }
 MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
+# With INSIDE, a warning when the edge band where no centre can fall exceeds this share of a
+# stratum: the estimate then carries the inner part's density over a large unsampled band (our choice).
+EDGE_BAND_WARNING_SHARE = 0.2
 PRIMARY, RESERVE = "primary", "reserve"
 
 
@@ -509,6 +512,16 @@ def prepare_strata(
                 message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius, ids=_ids(ids)),
                 ids=list(ids),
             )
+        band = 1.0 - eff / area if area > 0 else 0.0
+        if radius > 0 and eff > 0 and band > EDGE_BAND_WARNING_SHARE:
+            warnings.append(message(
+                "Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) "
+                "where no unit centre can fall; the estimate carries the inner part's density over that band. "
+                "If density differs near edges, turn INSIDE off or use smaller units." if key is None else
+                "Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its "
+                "edge) where no unit centre can fall; the estimate carries the inner part's density over that "
+                "band. If density differs near edges, turn INSIDE off or use smaller units.",
+                share=band, radius=radius, key=key))
         if n == 0:
             warnings.append(message("The frame gets no units; the estimate cannot speak for it." if key is None
                                     else "Stratum {key} gets no units; the estimate cannot speak for it.", key=key))

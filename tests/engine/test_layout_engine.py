@@ -163,3 +163,25 @@ def test_n_field_checked_on_kept_features_only():
     # an empty feature without a value is skipped with a warning, not an error
     frame = L.prepare_strata([box(0, 0, 10, 10), Polygon()], feature_ids=[1, 2], strata=[1, 2], n_values=[3, None])
     assert frame.skipped_ids == (2,) and frame.strata[0].n == 3
+
+
+def test_inside_warns_when_the_edge_band_is_large():
+    """A 5,000 m × 300 m strip with 100 m squares kept inside.
+
+    The circumscribing radius of a 100 m square is r = 50·√2 ≈ 70.7 m, so centres fall only in the
+    inner (5000 − 2r) × (300 − 2r) rectangle, by construction: the band without centres is
+    1 − 4858.6 × 158.6 / 1.5e6 ≈ 49% of the strip, above the 20% warning share.
+    """
+    from shapely.geometry import box
+
+    from plotwise.processing.engine import layout as L
+
+    strip = box(0, 0, 5000, 300)
+    spec = L.LayoutSpec(design=L.SIMPLE_RANDOM, shape=L.SQUARE, size=100.0, inside=True)
+    frame = L.prepare_strata([strip], n_units=5, spec=spec)
+    text = " ".join(str(w) for w in frame.warnings)
+    r = 50.0 * 2 ** 0.5
+    share = 1 - (5000 - 2 * r) * (300 - 2 * r) / (5000 * 300)
+    assert f"Keeping units inside leaves {share:.0%} of the frame" in text
+    wide = L.prepare_strata([box(0, 0, 5000, 5000)], n_units=5, spec=spec)
+    assert not any("Keeping units inside" in str(w) for w in wide.warnings)
