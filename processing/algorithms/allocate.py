@@ -255,7 +255,7 @@ class Allocate(PlotwiseAlgorithm):
         if sink is None:
             raise QgsProcessingException(self.tr("The output layer could not be created."))
         if not bridge.write_features(sink, fields, records.geometries, rows, feedback, (60.0, 90.0)):
-            raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+            raise self.cancelled_error()
 
         overall_cv = result.precision.cv if mean_field and np.isfinite(result.precision.cv) else None
         report = self._report(

@@ -113,9 +113,11 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
             text = self.translate_message(error.detail) if error.detail is not None else error.message
             raise QgsProcessingException(text) from None
         except Cancelled:
-            raise QgsProcessingException(
-                self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm")
-            ) from None
+            raise self.cancelled_error() from None
+
+    def cancelled_error(self):
+        """The exception a cancelled run ends with."""
+        return QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
 
     def style_output(self, context, dest_id, style_name, **options):
         """Style output ``dest_id`` (a name from ``processing.styles.STYLES``) when the host loads it."""
@@ -130,6 +132,21 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
             return QCoreApplication.translate("PlotwiseEngine", item.template).format(**values)
         except (KeyError, IndexError, ValueError):  # a broken translation: the English text
             return str(item)
+
+    @staticmethod
+    @contextlib.contextmanager
+    def discard_on_failure(*paths):
+        """Delete the files a run has started writing (and GDAL's side files) when it fails or is cancelled,
+        so that nothing half-written can pass for a finished result."""
+        try:
+            yield
+        except BaseException:
+            for path in paths:
+                side_files = (".aux.xml", ".ovr", "-wal", "-shm", "-journal")  # GDAL and SQLite (GeoPackage)
+                for candidate in (path, *(path + suffix for suffix in side_files)) if path else ():
+                    if os.path.isfile(candidate):
+                        os.remove(candidate)
+            raise
 
     def push_warnings(self, feedback, warnings):
         for warning in warnings:

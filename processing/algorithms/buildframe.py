@@ -177,7 +177,7 @@ class BuildFrame(PlotwiseAlgorithm):
             warnings += found
             exclusions = cleaned.geometries
         if feedback.isCanceled():
-            return {}
+            raise self.cancelled_error()
         feedback.setProgress(10)
 
         raster = None

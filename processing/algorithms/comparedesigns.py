@@ -323,7 +323,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             raise QgsProcessingException(self.tr("The output table could not be created."))
         rows = [performance_row(p, comparison.recommended) for p in comparison.performance]
         if not bridge.write_features(sink, fields, [None] * len(rows), rows, feedback, (95.0, 97.0)):
-            raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+            raise self.cancelled_error()
 
         recommended = engine.DESIGNS[comparison.recommended] if comparison.recommended is not None else ""
         settings = {

@@ -114,7 +114,7 @@ class DemoReserve(PlotwiseAlgorithm):
         points = [Point(x, y) for x, y in reserve.animals_xy]
         rows = [[i + 1, int(g)] for i, g in enumerate(reserve.group_ids)]
         if not bridge.write_features(sink, fields, points, rows, feedback, (85, 98)):
-            raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+            raise self.cancelled_error()
 
         feedback.pushInfo(
             self.tr("{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).").format(

@@ -372,7 +372,7 @@ class Estimate(PlotwiseAlgorithm):
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
         if not bridge.write_features(sink, fields, polygons, polygon_rows, feedback, (80.0, 88.0)):
-            raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+            raise self.cancelled_error()
         if not settings["presence"]:
             self.style_output(context, dest, "estimate", area_unit=UNIT_NAMES[area_unit])
         table_sink, table_dest = self.parameterAsSink(

@@ -223,7 +223,7 @@ class LayoutUnits(PlotwiseAlgorithm):
             repair=False, drop_empty=False,
         )
         if feedback.isCanceled():
-            return {}
+            raise self.cancelled_error()
         feedback.setProgress(10)
         fids = [int(i) for i in records.fids]
         with self.engine_errors():
@@ -249,9 +249,8 @@ class LayoutUnits(PlotwiseAlgorithm):
                 self.tr("No unit could be placed in layer '{layer}'. Ask for more units or use another design.").format(layer=layer_name)
             )
 
-        dest_id = self._write_units(parameters, context, feedback, source, stratum_field, result, crs)
-        if dest_id is None:
-            return {}
+        with self.discard_on_failure(self.parameterAsOutputLayer(parameters, self.OUTPUT, context)):
+            dest_id = self._write_units(parameters, context, feedback, source, stratum_field, result, crs)
         outputs = {self.OUTPUT: dest_id}
         self.style_output(context, dest_id, "units")
         gpx_path = self.parameterAsFileOutput(parameters, self.OUTPUT_GPX, context)
@@ -325,7 +324,7 @@ class LayoutUnits(PlotwiseAlgorithm):
             features.append(feature)
             if i % 2000 == 0:
                 if feedback.isCanceled():
-                    return None
+                    raise self.cancelled_error()
                 feedback.setProgress(70 + 15 * i / total)
         sink.addFeatures(features, compat.FAST_INSERT)
         return dest_id

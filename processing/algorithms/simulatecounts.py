@@ -109,7 +109,7 @@ class SimulateCounts(PlotwiseAlgorithm):
         by_fid = {int(fid): i for i, fid in enumerate(unit_records.fids)}
         for feature in units.getFeatures():
             if feedback.isCanceled():
-                raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+                raise self.cancelled_error()
             out = QgsFeature(out_fields)
             out.setGeometry(feature.geometry())
             attributes = list(feature.attributes()) + [None] * (len(out_fields) - len(fields))

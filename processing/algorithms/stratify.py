@@ -169,7 +169,7 @@ class Stratify(PlotwiseAlgorithm):
         projected_from = source.sourceCrs().authid() if crs != source.sourceCrs() else None
         records = bridge.read_features(source, crs, context, feedback, layer_name=frame_name)
         if feedback.isCanceled():
-            return {}
+            raise self.cancelled_error()
         polygons = [g for g in records.geometries if g is not None and g.geom_type in ("Polygon", "MultiPolygon")]
         if not polygons:
             raise QgsProcessingException(self.tr(
@@ -178,7 +178,7 @@ class Stratify(PlotwiseAlgorithm):
         feedback.setProgress(5)
 
         seeded = self.seeded_generator(parameters, context, feedback) if method == strat.KMEANS else None
-        with self.engine_errors():
+        with self.discard_on_failure(raster_path), self.engine_errors():
             result = raster_io.stratify_rasters(
                 covariates, [shapely_wkb.dumps(g) for g in polygons], bridge.crs_wkt(crs), method, n_strata,
                 raster_path, min_area_ha=min_area, rng=None if seeded is None else seeded.generator,
@@ -207,7 +207,7 @@ class Stratify(PlotwiseAlgorithm):
                 row += [float(stats.mean[h, c]), float(stats.sd[h, c])]
             rows.append(row)
         if not bridge.write_features(sink, fields, shapes, rows, feedback, (90, 96)):
-            raise QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+            raise self.cancelled_error()
 
         r2 = stats.r_squared()
         feedback.pushInfo(self.tr("{k} strata on {ha} ha; R² of '{name}': {r2}.").format(
