@@ -776,37 +776,37 @@ Las estimaciones de un muestreo sobre este marco valen solo para el marco. Exclu
   <context>
     <name>CompareDesigns</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="83" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="80" />
       <source>Compare survey designs by simulation</source>
       <translation>Comparar diseños de muestreo por simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>simple random</source>
       <translation>aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>stratified proportional</source>
       <translation>estratificado proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>stratified Neyman</source>
       <translation>estratificado Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>systematic grid</source>
       <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>spatially balanced</source>
       <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="90" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
       <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -839,186 +839,186 @@ Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación
 La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="126" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="123" />
       <source>Density surface (expected animals per km²)</source>
       <translation>Superficie de densidad (animales esperados por km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="125" />
       <location filename="../processing/algorithms/comparedesigns.py" line="370" />
       <source>Sampling frame</source>
       <translation>Marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="132" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="129" />
       <source>Strata (for the stratified designs)</source>
       <translation>Estratos (para los diseños estratificados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="137" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="134" />
       <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>Stratum field</source>
       <translation>Campo de estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="142" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
       <source>Designs to compare</source>
       <translation>Diseños que comparar</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
       <source>Simple random</source>
       <translation>Aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
       <source>Stratified, proportional allocation</source>
       <translation>Estratificado, asignación proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
       <source>Stratified, Neyman allocation</source>
       <translation>Estratificado, asignación de Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
       <source>Systematic grid</source>
       <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
       <source>Spatially balanced</source>
       <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="150" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="147" />
       <location filename="../processing/algorithms/comparedesigns.py" line="380" />
       <source>Number of units</source>
       <translation>Número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="155" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
       <source>Unit shape</source>
       <translation>Forma de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Point station</source>
       <translation>Estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Square plot</source>
       <translation>Parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Circular plot</source>
       <translation>Parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Line transect</source>
       <translation>Transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="162" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="159" />
       <source>Unit size (m): counting radius, side, radius or transect length</source>
       <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="168" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="165" />
       <source>Half-width of a transect's counting strip (m)</source>
       <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="174" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="171" />
       <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
       <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="180" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="177" />
       <source>Keep units wholly inside their stratum (as the layout's option)</source>
       <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="186" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="183" />
       <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>Simulated surveys per design</source>
       <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="192" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="189" />
       <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
       <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="198" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
       <source>Variance estimator for the grid and balanced designs</source>
       <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
       <source>Simple random sampling formula</source>
       <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
       <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
       <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="205" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="202" />
       <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
       <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="208" />
       <source>Design comparison</source>
       <translation>Comparación de diseños</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="214" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
       <source>Recommended design</source>
       <translation>Diseño recomendado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="217" />
       <source>The density surface could not be opened.</source>
       <translation>No se pudo abrir la superficie de densidad.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="223" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
       <source>The sampling frame could not be opened.</source>
       <translation>No se pudo abrir el marco de muestreo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="229" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="226" />
       <source>Layer '{layer}' has no polygon with an area.</source>
       <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="243" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="240" />
       <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
       <translation>La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="253" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="250" />
       <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
       <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="263" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="260" />
       <source>No strata were given: the stratified designs are left out ({names}).</source>
       <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="268" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="265" />
       <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
       <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="285" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="282" />
       <source>Reading the density surface…</source>
       <translation>Leyendo la superficie de densidad…</translation>
     </message>
@@ -2659,329 +2659,318 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="263" />
+      <location filename="../processing/algorithms/layout.py" line="262" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="267" />
+      <location filename="../processing/algorithms/layout.py" line="266" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="279" />
       <source>the frame</source>
       <translation>el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="279" />
       <source>stratum {key}</source>
       <translation>estrato {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="336" />
+      <location filename="../processing/algorithms/layout.py" line="335" />
       <source>Sample-unit layout</source>
       <translation>Disposición de las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="341" />
-      <location filename="../processing/algorithms/layout.py" line="443" />
+      <location filename="../processing/algorithms/layout.py" line="340" />
+      <location filename="../processing/algorithms/layout.py" line="442" />
       <source>primary units</source>
       <translation>unidades principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <location filename="../processing/algorithms/layout.py" line="444" />
+      <location filename="../processing/algorithms/layout.py" line="341" />
+      <location filename="../processing/algorithms/layout.py" line="443" />
       <source>reserve units</source>
       <translation>unidades de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="342" />
       <source>strata</source>
       <translation>estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
       <source>design</source>
       <translation>diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>simple random</source>
       <translation>aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>systematic grid</source>
       <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>spatially balanced</source>
       <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="346" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
       <source>Replacing units in the field</source>
       <translation>Sustituir unidades en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="348" />
+      <location filename="../processing/algorithms/layout.py" line="347" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="353" />
+      <location filename="../processing/algorithms/layout.py" line="352" />
       <source>Units per stratum</source>
       <translation>Unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Area (ha)</source>
       <translation>Área (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Effective area (ha)</source>
       <translation>Área efectiva (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Units asked</source>
       <translation>Unidades pedidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Reserve</source>
       <translation>Reservas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Grid spacing (m)</source>
       <translation>Espaciado de la cuadrícula (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Grid rotation (°)</source>
       <translation>Rotación de la cuadrícula (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="361" />
+      <location filename="../processing/algorithms/layout.py" line="360" />
       <source>frame</source>
       <translation>marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="369" />
+      <location filename="../processing/algorithms/layout.py" line="368" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="371" />
+      <location filename="../processing/algorithms/layout.py" line="370" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="375" />
+      <location filename="../processing/algorithms/layout.py" line="374" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
+      <location filename="../processing/algorithms/layout.py" line="381" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
+      <location filename="../processing/algorithms/layout.py" line="384" />
       <source>Map</source>
       <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="385" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Method</source>
       <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="391" />
+      <location filename="../processing/algorithms/layout.py" line="390" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="392" />
       <source>Frame (FRAME)</source>
       <translation>Marco (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="393" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Campo de estrato (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="393" />
       <source>(none: one stratum)</source>
       <translation>(ninguno: un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Campo de unidades por estrato (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>(none)</source>
       <translation>(ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Total units (N_UNITS)</source>
       <translation>Total de unidades (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>(not used)</source>
       <translation>(no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>Design (DESIGN)</source>
       <translation>Diseño (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forma de la unidad (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>point</source>
       <translation>punto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>square</source>
       <translation>cuadrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>circle</source>
       <translation>círculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>line</source>
       <translation>línea</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>Unit size (SIZE, m)</source>
       <translation>Tamaño de la unidad (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Rumbo (BEARING, grados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>random</source>
       <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>Keep inside (INSIDE)</source>
       <translation>Mantener dentro (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>yes</source>
       <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>no</source>
       <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Separación mínima (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Reservas por estrato (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="403" />
       <source>Seed (SEED)</source>
       <translation>Semilla (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="405" />
+      <location filename="../processing/algorithms/layout.py" line="404" />
       <source>CRS of the computation and the output</source>
       <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="413" />
+      <location filename="../processing/algorithms/layout.py" line="412" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="415" />
+      <location filename="../processing/algorithms/layout.py" line="414" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="417" />
+      <location filename="../processing/algorithms/layout.py" line="416" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="424" />
+      <location filename="../processing/algorithms/layout.py" line="423" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
     </message>
   </context>
   <context>
     <name>PlotwiseAlgorithm</name>
-    <message>
-      <location filename="../processing/algorithms/allocate.py" line="258" />
-      <location filename="../processing/algorithms/base.py" line="117" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="326" />
-      <location filename="../processing/algorithms/demoreserve.py" line="117" />
-      <location filename="../processing/algorithms/estimate.py" line="375" />
-      <location filename="../processing/algorithms/simulatecounts.py" line="112" />
-      <location filename="../processing/algorithms/stratify.py" line="210" />
-      <source>Cancelled by the user. No result was written.</source>
-      <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
-    </message>
     <message>
       <location filename="../processing/algorithms/base.py" line="29" />
       <location filename="../processing/algorithms/base.py" line="54" />
@@ -3021,28 +3010,18 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>Semilla usada: {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="147" />
+      <location filename="../processing/algorithms/base.py" line="120" />
+      <source>Cancelled by the user. No result was written.</source>
+      <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="164" />
       <source>Report written to {path}</source>
       <translation>Informe escrito en {path}</translation>
     </message>
   </context>
   <context>
     <name>PlotwiseBridge</name>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="552" />
-      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
-      <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="564" />
-      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
-      <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="577" />
-      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
-      <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
-    </message>
     <message>
       <location filename="../processing/bridge.py" line="66" />
       <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
@@ -3982,6 +3961,21 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <location filename="../processing/raster_io.py" line="623" />
       <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
       <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="648" />
+      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
+      <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="659" />
+      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
+      <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="670" />
+      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
+      <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>
     <message>
       <location filename="../processing/raster_masking.py" line="101" />

@@ -776,37 +776,37 @@ Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclu
   <context>
     <name>CompareDesigns</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="83" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="80" />
       <source>Compare survey designs by simulation</source>
       <translation>Comparer des plans d'inventaire par simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>simple random</source>
       <translation>aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>stratified proportional</source>
       <translation>stratifié proportionnel</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>stratified Neyman</source>
       <translation>stratifié Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>systematic grid</source>
       <translation>grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
       <source>spatially balanced</source>
       <translation>spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="90" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
       <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -839,186 +839,186 @@ Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparais
 La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="126" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="123" />
       <source>Density surface (expected animals per km²)</source>
       <translation>Surface de densité (animaux attendus par km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="128" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="125" />
       <location filename="../processing/algorithms/comparedesigns.py" line="370" />
       <source>Sampling frame</source>
       <translation>Base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="132" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="129" />
       <source>Strata (for the stratified designs)</source>
       <translation>Strates (pour les plans stratifiés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="137" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="134" />
       <location filename="../processing/algorithms/comparedesigns.py" line="372" />
       <source>Stratum field</source>
       <translation>Champ de strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="142" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
       <source>Designs to compare</source>
       <translation>Plans à comparer</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
       <source>Simple random</source>
       <translation>Aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="143" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
       <source>Stratified, proportional allocation</source>
       <translation>Stratifié, allocation proportionnelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
       <source>Stratified, Neyman allocation</source>
       <translation>Stratifié, allocation de Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
       <source>Systematic grid</source>
       <translation>Grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="144" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
       <source>Spatially balanced</source>
       <translation>Spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="150" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="147" />
       <location filename="../processing/algorithms/comparedesigns.py" line="380" />
       <source>Number of units</source>
       <translation>Nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="155" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
       <source>Unit shape</source>
       <translation>Forme de l'unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Point station</source>
       <translation>Station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Square plot</source>
       <translation>Placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Circular plot</source>
       <translation>Placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="156" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
       <source>Line transect</source>
       <translation>Transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="162" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="159" />
       <source>Unit size (m): counting radius, side, radius or transect length</source>
       <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="168" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="165" />
       <source>Half-width of a transect's counting strip (m)</source>
       <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="174" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="171" />
       <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
       <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="180" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="177" />
       <source>Keep units wholly inside their stratum (as the layout's option)</source>
       <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="186" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="183" />
       <location filename="../processing/algorithms/comparedesigns.py" line="381" />
       <source>Simulated surveys per design</source>
       <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="192" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="189" />
       <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
       <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="198" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
       <source>Variance estimator for the grid and balanced designs</source>
       <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
       <source>Simple random sampling formula</source>
       <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="199" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
       <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
       <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="205" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="202" />
       <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
       <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="208" />
       <source>Design comparison</source>
       <translation>Comparaison des plans</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="214" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
       <source>Recommended design</source>
       <translation>Plan recommandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="217" />
       <source>The density surface could not be opened.</source>
       <translation>La surface de densité n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="223" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
       <source>The sampling frame could not be opened.</source>
       <translation>La base de sondage n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="229" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="226" />
       <source>Layer '{layer}' has no polygon with an area.</source>
       <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="243" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="240" />
       <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
       <translation>La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="253" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="250" />
       <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
       <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="263" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="260" />
       <source>No strata were given: the stratified designs are left out ({names}).</source>
       <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="268" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="265" />
       <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
       <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="285" />
+      <location filename="../processing/algorithms/comparedesigns.py" line="282" />
       <source>Reading the density surface…</source>
       <translation>Lecture de la surface de densité…</translation>
     </message>
@@ -2659,329 +2659,318 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="263" />
+      <location filename="../processing/algorithms/layout.py" line="262" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="267" />
+      <location filename="../processing/algorithms/layout.py" line="266" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="279" />
       <source>the frame</source>
       <translation>la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="280" />
+      <location filename="../processing/algorithms/layout.py" line="279" />
       <source>stratum {key}</source>
       <translation>strate {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="336" />
+      <location filename="../processing/algorithms/layout.py" line="335" />
       <source>Sample-unit layout</source>
       <translation>Disposition des unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="341" />
-      <location filename="../processing/algorithms/layout.py" line="443" />
+      <location filename="../processing/algorithms/layout.py" line="340" />
+      <location filename="../processing/algorithms/layout.py" line="442" />
       <source>primary units</source>
       <translation>unités principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <location filename="../processing/algorithms/layout.py" line="444" />
+      <location filename="../processing/algorithms/layout.py" line="341" />
+      <location filename="../processing/algorithms/layout.py" line="443" />
       <source>reserve units</source>
       <translation>unités de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="342" />
       <source>strata</source>
       <translation>strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
       <source>design</source>
       <translation>plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>simple random</source>
       <translation>aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>systematic grid</source>
       <translation>grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="344" />
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>spatially balanced</source>
       <translation>spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="346" />
+      <location filename="../processing/algorithms/layout.py" line="345" />
       <source>Replacing units in the field</source>
       <translation>Remplacer des unités sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="348" />
+      <location filename="../processing/algorithms/layout.py" line="347" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="353" />
+      <location filename="../processing/algorithms/layout.py" line="352" />
       <source>Units per stratum</source>
       <translation>Unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Area (ha)</source>
       <translation>Surface (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Effective area (ha)</source>
       <translation>Surface effective (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Units asked</source>
       <translation>Unités demandées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="354" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>Reserve</source>
       <translation>Réserves</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="356" />
+      <location filename="../processing/algorithms/layout.py" line="355" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Grid spacing (m)</source>
       <translation>Pas de la grille (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="358" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Grid rotation (°)</source>
       <translation>Rotation de la grille (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="361" />
+      <location filename="../processing/algorithms/layout.py" line="360" />
       <source>frame</source>
       <translation>base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="369" />
+      <location filename="../processing/algorithms/layout.py" line="368" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="371" />
+      <location filename="../processing/algorithms/layout.py" line="370" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="375" />
+      <location filename="../processing/algorithms/layout.py" line="374" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
+      <location filename="../processing/algorithms/layout.py" line="381" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
+      <location filename="../processing/algorithms/layout.py" line="384" />
       <source>Map</source>
       <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="385" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Method</source>
       <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="391" />
+      <location filename="../processing/algorithms/layout.py" line="390" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="392" />
       <source>Frame (FRAME)</source>
       <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="393" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Champ de strate (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="393" />
       <source>(none: one stratum)</source>
       <translation>(aucun : une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Champ d'unités par strate (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="394" />
       <source>(none)</source>
       <translation>(aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Total units (N_UNITS)</source>
       <translation>Total d'unités (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>(not used)</source>
       <translation>(non utilisé)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="396" />
       <source>Design (DESIGN)</source>
       <translation>Plan (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forme de l'unité (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>point</source>
       <translation>point</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>square</source>
       <translation>carré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>circle</source>
       <translation>cercle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>line</source>
       <translation>ligne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="398" />
       <source>Unit size (SIZE, m)</source>
       <translation>Taille de l'unité (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Azimut (BEARING, degrés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>random</source>
       <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>Keep inside (INSIDE)</source>
       <translation>Garder à l'intérieur (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>yes</source>
       <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="400" />
       <source>no</source>
       <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="401" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Espacement minimal (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="402" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Réserves par strate (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="403" />
       <source>Seed (SEED)</source>
       <translation>Graine (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="405" />
+      <location filename="../processing/algorithms/layout.py" line="404" />
       <source>CRS of the computation and the output</source>
       <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="413" />
+      <location filename="../processing/algorithms/layout.py" line="412" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="415" />
+      <location filename="../processing/algorithms/layout.py" line="414" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="417" />
+      <location filename="../processing/algorithms/layout.py" line="416" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="424" />
+      <location filename="../processing/algorithms/layout.py" line="423" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
     </message>
   </context>
   <context>
     <name>PlotwiseAlgorithm</name>
-    <message>
-      <location filename="../processing/algorithms/allocate.py" line="258" />
-      <location filename="../processing/algorithms/base.py" line="117" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="326" />
-      <location filename="../processing/algorithms/demoreserve.py" line="117" />
-      <location filename="../processing/algorithms/estimate.py" line="375" />
-      <location filename="../processing/algorithms/simulatecounts.py" line="112" />
-      <location filename="../processing/algorithms/stratify.py" line="210" />
-      <source>Cancelled by the user. No result was written.</source>
-      <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
-    </message>
     <message>
       <location filename="../processing/algorithms/base.py" line="29" />
       <location filename="../processing/algorithms/base.py" line="54" />
@@ -3021,28 +3010,18 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>Graine utilisée : {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="147" />
+      <location filename="../processing/algorithms/base.py" line="120" />
+      <source>Cancelled by the user. No result was written.</source>
+      <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/base.py" line="164" />
       <source>Report written to {path}</source>
       <translation>Rapport écrit dans {path}</translation>
     </message>
   </context>
   <context>
     <name>PlotwiseBridge</name>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="552" />
-      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
-      <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="564" />
-      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
-      <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="577" />
-      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
-      <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
-    </message>
     <message>
       <location filename="../processing/bridge.py" line="66" />
       <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
@@ -3982,6 +3961,21 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <location filename="../processing/raster_io.py" line="623" />
       <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
       <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="648" />
+      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
+      <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="659" />
+      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
+      <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
+    </message>
+    <message>
+      <location filename="../processing/raster_io.py" line="670" />
+      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
+      <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>
     <message>
       <location filename="../processing/raster_masking.py" line="101" />

@@ -1,8 +1,6 @@
 """plotwise:comparedesigns: survey designs compared by simulating surveys of a density surface."""
-import math
 
 import numpy as np
-from osgeo import gdal
 from qgis.core import (
     QgsProcessingException,
     QgsProcessingParameterBoolean,
@@ -18,7 +16,7 @@ from qgis.core import (
 from shapely.ops import unary_union
 
 from ...plugin import compat
-from .. import bridge
+from .. import bridge, raster_io
 from ..engine import design_comparison as engine
 from ..engine import estimation
 from ..engine.errors import InputError
@@ -26,7 +24,6 @@ from ..engine.unit_shapes import LINE
 from ..report import svg
 from .base import PlotwiseAlgorithm
 
-gdal.UseExceptions()
 
 M2_PER_KM2 = 1e6
 
@@ -283,7 +280,10 @@ class CompareDesigns(PlotwiseAlgorithm):
         rng = seeded.generator
 
         feedback.pushInfo(self.tr("Reading the density surface…"))
-        density, geotransform, warped = read_surface(surface, crs, frame.bounds, context)
+        with self.engine_errors():
+            density, geotransform, warped = raster_io.read_surface_window(
+                surface.source(), surface.name(), bridge.crs_wkt(surface.crs()), bridge.crs_wkt(crs), crs.authid(),
+                frame.bounds)
         if warped:
             warnings.append(self.tr("The density surface was warped to {crs} (bilinear) to match the frame.").format(
                 crs=crs.authid()))
@@ -536,45 +536,3 @@ def performance_row(p, recommended):
         num(p.rel_rmse), num(p.mean_cv), num(p.coverage), int(p.replicates), int(p.failed),
         int(p.design == recommended),
     ]
-
-
-def read_surface(layer, crs, bounds, context):
-    """The surface's first band over ``bounds`` in ``crs``: (array with NaN for NoData, geotransform, warped).
-
-    A surface already in ``crs`` and north-up is read as it is (a window); otherwise it is warped with
-    GDAL (bilinear: densities are smooth quantities).
-    """
-    path = layer.source()
-    try:
-        dataset = gdal.Open(path)
-    except RuntimeError as error:
-        raise QgsProcessingException(
-            bridge.tr("The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.").format(
-                name=layer.name(), error=error)) from None
-    minx, miny, maxx, maxy = bounds
-    gt = dataset.GetGeoTransform()
-    same_crs = layer.crs() == crs
-    if same_crs and gt[2] == 0 and gt[4] == 0 and gt[5] < 0:
-        band = dataset.GetRasterBand(1)
-        c0 = max(0, int(math.floor((minx - gt[0]) / gt[1])) - 1)
-        c1 = min(dataset.RasterXSize, int(math.ceil((maxx - gt[0]) / gt[1])) + 1)
-        r0 = max(0, int(math.floor((gt[3] - maxy) / -gt[5])) - 1)
-        r1 = min(dataset.RasterYSize, int(math.ceil((gt[3] - miny) / -gt[5])) + 1)
-        if c1 <= c0 or r1 <= r0:
-            raise QgsProcessingException(bridge.tr(
-                "The density surface '{name}' does not overlap the sampling frame. Check that both cover the same "
-                "area.").format(name=layer.name()))
-        values = band.ReadAsArray(c0, r0, c1 - c0, r1 - r0).astype(np.float64)
-        nodata = band.GetNoDataValue()
-        if nodata is not None:
-            values[values == nodata] = np.nan
-        return values, (gt[0] + c0 * gt[1], gt[1], 0.0, gt[3] + r0 * gt[5], 0.0, gt[5]), False
-    try:
-        warped = gdal.Warp("", dataset, format="MEM", dstSRS=bridge.crs_wkt(crs), outputBounds=(minx, miny, maxx, maxy),
-                           resampleAlg="bilinear", outputType=gdal.GDT_Float64, dstNodata=float("nan"))
-    except RuntimeError as error:
-        raise QgsProcessingException(
-            bridge.tr("The density surface '{name}' could not be warped to {crs} ({error}).").format(
-                name=layer.name(), crs=crs.authid(), error=error)) from None
-    values = warped.GetRasterBand(1).ReadAsArray().astype(np.float64)
-    return values, tuple(warped.GetGeoTransform()), True
