@@ -4,6 +4,8 @@ import os
 from qgis.core import QgsApplication, QgsSettings
 from qgis.PyQt.QtCore import QCoreApplication, QLocale, QTranslator
 
+_INSTALLED = {}  # translator -> language, for the reports' lang attribute
+
 I18N_DIR = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "i18n")
 
 
@@ -27,9 +29,16 @@ def install_translator(language=None):
     if not translator.load(path):
         return None
     QCoreApplication.installTranslator(translator)
+    _INSTALLED[translator] = language
     return translator
+
+
+def active_language():
+    """Language of the Plotwise translator in use ("en" when none is installed)."""
+    return next(reversed(_INSTALLED.values()), "en")
 
 
 def remove_translator(translator):
     if translator is not None:
         QCoreApplication.removeTranslator(translator)
+        _INSTALLED.pop(translator, None)

@@ -12,6 +12,7 @@ from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
 from ...plugin import compat
+from ...plugin.translation import active_language
 from ..engine.errors import Cancelled, InputError, Message
 from ..engine.rng import make_rng
 from ..report import Report
@@ -153,7 +154,8 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
             feedback.pushWarning(self.translate_message(warning))
 
     def new_report(self, title):
-        return Report(title, algorithm_id=f"plotwise:{self.name()}", translate=lambda s: self.tr(s, "PlotwiseReport"))
+        return Report(title, algorithm_id=f"plotwise:{self.name()}", translate=lambda s: self.tr(s, "PlotwiseReport"),
+                      language=active_language())
 
     def write_report(self, report, parameters, context, feedback):
         """Write ``report`` to the REPORT destination (when one is set); return the path or None."""

@@ -64,8 +64,9 @@ def format_number(value, digits=3):
 class Report:
     """Collects the blocks of one report and renders them as one HTML page."""
 
-    def __init__(self, title, algorithm_id=None, translate=None):
+    def __init__(self, title, algorithm_id=None, translate=None, language="en"):
         self._tr = translate or _identity
+        self.language = language
         self.title = title
         self.algorithm_id = algorithm_id
         self._blocks = []
@@ -142,7 +143,7 @@ class Report:
         tr = self._tr
         parts = [
             "<!DOCTYPE html>",
-            '<html lang="en"><head><meta charset="utf-8">',
+            f'<html lang="{escape(self.language)}"><head><meta charset="utf-8">',
             '<meta name="viewport" content="width=device-width, initial-scale=1">',
             f"<title>{escape(self.title)}</title>",
             f"<style>{STYLE_SHEET}</style></head><body><main>",

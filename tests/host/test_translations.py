@@ -266,6 +266,7 @@ def test_report_headings_and_caution_in_the_host_language(english, french, spani
         (translated,) = translations[source]
         assert escape(translated) in html, (lang, source)
         assert escape(source) not in html, (lang, source)
+    assert f'<html lang="{lang}">' in html and '<html lang="en">' in english["report"]  # the page's own language
 
 
 def test_field_safety_caution_is_translated():
