@@ -2972,50 +2972,50 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwiseAlgorithm</name>
     <message>
-      <location filename="../processing/algorithms/base.py" line="29" />
-      <location filename="../processing/algorithms/base.py" line="54" />
+      <location filename="../processing/algorithms/base.py" line="30" />
+      <location filename="../processing/algorithms/base.py" line="55" />
       <source>Survey design</source>
       <translation>Diseño del muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="30" />
-      <location filename="../processing/algorithms/base.py" line="54" />
+      <location filename="../processing/algorithms/base.py" line="31" />
+      <location filename="../processing/algorithms/base.py" line="55" />
       <source>Estimation</source>
       <translation>Estimación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="31" />
-      <location filename="../processing/algorithms/base.py" line="54" />
+      <location filename="../processing/algorithms/base.py" line="32" />
+      <location filename="../processing/algorithms/base.py" line="55" />
       <source>Demo and training</source>
       <translation>Demostración y formación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="70" />
+      <location filename="../processing/algorithms/base.py" line="71" />
       <source>Random seed (0 draws one and records it)</source>
       <translation>Semilla aleatoria (0 sortea una y la registra)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="82" />
+      <location filename="../processing/algorithms/base.py" line="83" />
       <source>Report (HTML)</source>
       <translation>Informe (HTML)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="83" />
+      <location filename="../processing/algorithms/base.py" line="84" />
       <source>HTML files (*.html)</source>
       <translation>Archivos HTML (*.html)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="94" />
+      <location filename="../processing/algorithms/base.py" line="95" />
       <source>Seed used: {seed}</source>
       <translation>Semilla usada: {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="120" />
+      <location filename="../processing/algorithms/base.py" line="121" />
       <source>Cancelled by the user. No result was written.</source>
       <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="164" />
+      <location filename="../processing/algorithms/base.py" line="166" />
       <source>Report written to {path}</source>
       <translation>Informe escrito en {path}</translation>
     </message>
@@ -4038,47 +4038,47 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwiseReport</name>
     <message>
-      <location filename="../processing/report/html.py" line="124" />
+      <location filename="../processing/report/html.py" line="125" />
       <source>Inputs and parameters</source>
       <translation>Entradas y parámetros</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="126" />
+      <location filename="../processing/report/html.py" line="127" />
       <source>Item</source>
       <translation>Elemento</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="126" />
+      <location filename="../processing/report/html.py" line="127" />
       <source>Value</source>
       <translation>Valor</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="153" />
+      <location filename="../processing/report/html.py" line="154" />
       <source>Written</source>
       <translation>Generado el</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="155" />
+      <location filename="../processing/report/html.py" line="156" />
       <source>algorithm</source>
       <translation>algoritmo</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="159" />
+      <location filename="../processing/report/html.py" line="160" />
       <source>Field safety</source>
       <translation>Seguridad en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="160" />
+      <location filename="../processing/report/html.py" line="161" />
       <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
       <translation>Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo. Esta herramienta elige ubicaciones solo por razones estadísticas: nunca hace que una ubicación sea segura para llegar a ella ni para trabajar en ella. El terreno escarpado, remoto o inundado, la fauna, el tiempo atmosférico y las tierras privadas pueden poner a las personas en riesgo. Siga las normas de seguridad en el terreno de su organismo y la legislación local, y excluya o sustituya cualquier unidad a la que no se pueda llegar con seguridad (regístrela como no muestreada).</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="164" />
+      <location filename="../processing/report/html.py" line="165" />
       <source>Warnings</source>
       <translation>Advertencias</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="168" />
+      <location filename="../processing/report/html.py" line="169" />
       <source>Method references</source>
       <translation>Referencias de los métodos</translation>
     </message>

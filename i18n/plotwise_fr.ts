@@ -559,7 +559,7 @@ Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclu
     <message>
       <location filename="../processing/algorithms/buildframe.py" line="199" />
       <source>Reading mask raster '{layer}'…</source>
-      <translation>Lecture du raster de masque « {layer} »…</translation>
+      <translation>Chargement du raster de masque « {layer} »…</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/buildframe.py" line="213" />
@@ -1020,7 +1020,7 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="282" />
       <source>Reading the density surface…</source>
-      <translation>Lecture de la surface de densité…</translation>
+      <translation>Chargement de la surface de densité…</translation>
     </message>
     <message>
       <location filename="../processing/algorithms/comparedesigns.py" line="288" />
@@ -2972,50 +2972,50 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwiseAlgorithm</name>
     <message>
-      <location filename="../processing/algorithms/base.py" line="29" />
-      <location filename="../processing/algorithms/base.py" line="54" />
+      <location filename="../processing/algorithms/base.py" line="30" />
+      <location filename="../processing/algorithms/base.py" line="55" />
       <source>Survey design</source>
       <translation>Conception de l'inventaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="30" />
-      <location filename="../processing/algorithms/base.py" line="54" />
+      <location filename="../processing/algorithms/base.py" line="31" />
+      <location filename="../processing/algorithms/base.py" line="55" />
       <source>Estimation</source>
       <translation>Estimation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="31" />
-      <location filename="../processing/algorithms/base.py" line="54" />
+      <location filename="../processing/algorithms/base.py" line="32" />
+      <location filename="../processing/algorithms/base.py" line="55" />
       <source>Demo and training</source>
       <translation>Démonstration et formation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="70" />
+      <location filename="../processing/algorithms/base.py" line="71" />
       <source>Random seed (0 draws one and records it)</source>
       <translation>Graine aléatoire (0 en tire une et l'enregistre)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="82" />
+      <location filename="../processing/algorithms/base.py" line="83" />
       <source>Report (HTML)</source>
       <translation>Rapport (HTML)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="83" />
+      <location filename="../processing/algorithms/base.py" line="84" />
       <source>HTML files (*.html)</source>
       <translation>Fichiers HTML (*.html)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="94" />
+      <location filename="../processing/algorithms/base.py" line="95" />
       <source>Seed used: {seed}</source>
       <translation>Graine utilisée : {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="120" />
+      <location filename="../processing/algorithms/base.py" line="121" />
       <source>Cancelled by the user. No result was written.</source>
       <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="164" />
+      <location filename="../processing/algorithms/base.py" line="166" />
       <source>Report written to {path}</source>
       <translation>Rapport écrit dans {path}</translation>
     </message>
@@ -4038,47 +4038,47 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwiseReport</name>
     <message>
-      <location filename="../processing/report/html.py" line="124" />
+      <location filename="../processing/report/html.py" line="125" />
       <source>Inputs and parameters</source>
       <translation>Entrées et paramètres</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="126" />
+      <location filename="../processing/report/html.py" line="127" />
       <source>Item</source>
       <translation>Élément</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="126" />
+      <location filename="../processing/report/html.py" line="127" />
       <source>Value</source>
       <translation>Valeur</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="153" />
+      <location filename="../processing/report/html.py" line="154" />
       <source>Written</source>
       <translation>Généré le</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="155" />
+      <location filename="../processing/report/html.py" line="156" />
       <source>algorithm</source>
       <translation>algorithme</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="159" />
+      <location filename="../processing/report/html.py" line="160" />
       <source>Field safety</source>
       <translation>Sécurité sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="160" />
+      <location filename="../processing/report/html.py" line="161" />
       <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
       <translation>Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe. Cet outil choisit des emplacements pour des raisons uniquement statistiques : il ne rend jamais un emplacement sûr à atteindre ni sûr pour y travailler. Un terrain escarpé, isolé ou inondé, la faune, la météo et les terrains privés peuvent mettre des personnes en danger. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale, et écartez ou remplacez toute unité qui ne peut pas être atteinte en sécurité (notez-la comme non inventoriée).</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="164" />
+      <location filename="../processing/report/html.py" line="165" />
       <source>Warnings</source>
       <translation>Avertissements</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="168" />
+      <location filename="../processing/report/html.py" line="169" />
       <source>Method references</source>
       <translation>Références des méthodes</translation>
     </message>

@@ -350,7 +350,7 @@ TRANSLATIONS.update({
         "El ráster de máscara «{layer}» no es un archivo ráster que GDAL pueda leer. Guárdelo primero como GeoTIFF.",
     ),
     "Reading mask raster '{layer}'…": (
-        "Lecture du raster de masque « {layer} »…",
+        "Chargement du raster de masque « {layer} »…",
         "Leyendo el ráster de máscara «{layer}»…",
     ),
     "Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.": (
@@ -1559,7 +1559,7 @@ TRANSLATIONS.update({
         "Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.",
         "Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.",
     ),
-    "Reading the density surface…": ("Lecture de la surface de densité…", "Leyendo la superficie de densidad…"),
+    "Reading the density surface…": ("Chargement de la surface de densité…", "Leyendo la superficie de densidad…"),
     "The density surface was warped to {crs} (bilinear) to match the frame.": (
         "La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.",
         "La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.",
