@@ -4038,47 +4038,57 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwiseReport</name>
     <message>
-      <location filename="../processing/report/html.py" line="125" />
+      <location filename="../processing/report/html.py" line="109" />
+      <source>yes</source>
+      <translation>sí</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="109" />
+      <source>no</source>
+      <translation>no</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="128" />
       <source>Inputs and parameters</source>
       <translation>Entradas y parámetros</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="127" />
+      <location filename="../processing/report/html.py" line="130" />
       <source>Item</source>
       <translation>Elemento</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="127" />
+      <location filename="../processing/report/html.py" line="130" />
       <source>Value</source>
       <translation>Valor</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="154" />
+      <location filename="../processing/report/html.py" line="157" />
       <source>Written</source>
       <translation>Generado el</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="156" />
+      <location filename="../processing/report/html.py" line="159" />
       <source>algorithm</source>
       <translation>algoritmo</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="160" />
+      <location filename="../processing/report/html.py" line="163" />
       <source>Field safety</source>
       <translation>Seguridad en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="161" />
+      <location filename="../processing/report/html.py" line="164" />
       <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
       <translation>Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo. Esta herramienta elige ubicaciones solo por razones estadísticas: nunca hace que una ubicación sea segura para llegar a ella ni para trabajar en ella. El terreno escarpado, remoto o inundado, la fauna, el tiempo atmosférico y las tierras privadas pueden poner a las personas en riesgo. Siga las normas de seguridad en el terreno de su organismo y la legislación local, y excluya o sustituya cualquier unidad a la que no se pueda llegar con seguridad (regístrela como no muestreada).</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="165" />
+      <location filename="../processing/report/html.py" line="168" />
       <source>Warnings</source>
       <translation>Advertencias</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="169" />
+      <location filename="../processing/report/html.py" line="172" />
       <source>Method references</source>
       <translation>Referencias de los métodos</translation>
     </message>

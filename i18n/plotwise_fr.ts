@@ -4038,47 +4038,57 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwiseReport</name>
     <message>
-      <location filename="../processing/report/html.py" line="125" />
+      <location filename="../processing/report/html.py" line="109" />
+      <source>yes</source>
+      <translation>oui</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="109" />
+      <source>no</source>
+      <translation>non</translation>
+    </message>
+    <message>
+      <location filename="../processing/report/html.py" line="128" />
       <source>Inputs and parameters</source>
       <translation>Entrées et paramètres</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="127" />
+      <location filename="../processing/report/html.py" line="130" />
       <source>Item</source>
       <translation>Élément</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="127" />
+      <location filename="../processing/report/html.py" line="130" />
       <source>Value</source>
       <translation>Valeur</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="154" />
+      <location filename="../processing/report/html.py" line="157" />
       <source>Written</source>
       <translation>Généré le</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="156" />
+      <location filename="../processing/report/html.py" line="159" />
       <source>algorithm</source>
       <translation>algorithme</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="160" />
+      <location filename="../processing/report/html.py" line="163" />
       <source>Field safety</source>
       <translation>Sécurité sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="161" />
+      <location filename="../processing/report/html.py" line="164" />
       <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
       <translation>Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe. Cet outil choisit des emplacements pour des raisons uniquement statistiques : il ne rend jamais un emplacement sûr à atteindre ni sûr pour y travailler. Un terrain escarpé, isolé ou inondé, la faune, la météo et les terrains privés peuvent mettre des personnes en danger. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale, et écartez ou remplacez toute unité qui ne peut pas être atteinte en sécurité (notez-la comme non inventoriée).</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="165" />
+      <location filename="../processing/report/html.py" line="168" />
       <source>Warnings</source>
       <translation>Avertissements</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="169" />
+      <location filename="../processing/report/html.py" line="172" />
       <source>Method references</source>
       <translation>Références des méthodes</translation>
     </message>

@@ -105,7 +105,10 @@ class Report:
             cells = []
             for value in row:
                 numeric = isinstance(value, numbers.Number) and not isinstance(value, bool)
-                text = format_number(value, digits) if numeric or value is None else str(value)
+                if isinstance(value, bool):
+                    text = self._tr("yes") if value else self._tr("no")
+                else:
+                    text = format_number(value, digits) if numeric or value is None else str(value)
                 css = ' class="num"' if numeric else ""
                 cells.append(f"<td{css}>{escape(text)}</td>")
             body.append("<tr>" + "".join(cells) + "</tr>")
