@@ -17,6 +17,8 @@ from pathlib import Path
 
 sys.path.insert(0, str(Path(__file__).resolve().parents[1]))
 import conftest  # noqa: E402,F401  (registers the package as plotwise)
+sys.path.insert(0, str(Path(__file__).resolve().parents[2] / "scripts"))
+from headless_host import start_host  # noqa: E402
 import numpy as np  # noqa: E402
 from shapely.geometry import Polygon, box  # noqa: E402
 
@@ -67,18 +69,12 @@ def engine_run():
 def host_way(density, gt, frame, replicates=3):
     """Seconds per replicate and design with host algorithms (None without the host)."""
     try:
-        from qgis.core import QgsApplication, QgsFeature, QgsGeometry, QgsVectorLayer
+        from qgis.core import QgsFeature, QgsGeometry, QgsVectorLayer
     except ImportError:
         return None
     from osgeo import gdal, osr
 
-    sys.path.append("/usr/share/qgis/python/plugins")
-    app = QgsApplication([], False)
-    app.initQgis()
-    import processing
-    from processing.core.Processing import Processing
-
-    Processing.initialize()
+    app, processing = start_host()  # scripts/headless_host.py
     layer = QgsVectorLayer("Polygon?crs=EPSG:32633", "frame", "memory")
     feature = QgsFeature()
     feature.setGeometry(QgsGeometry.fromWkt(frame.wkt))
@@ -105,7 +101,6 @@ def host_way(density, gt, frame, replicates=3):
             "INPUT": squares, "INPUT_RASTER": path, "RASTER_BAND": 1, "COLUMN_PREFIX": "c_", "STATISTICS": [1],
             "OUTPUT": "memory:"})
     seconds = (time.perf_counter() - t0) / replicates
-    app.exitQgis()
     return seconds
 
 

@@ -11,6 +11,8 @@ from pathlib import Path
 
 sys.path.insert(0, str(Path(__file__).resolve().parents[1]))
 import conftest  # noqa: E402,F401  (registers the package as plotwise)
+sys.path.insert(0, str(Path(__file__).resolve().parents[2] / "scripts"))
+from headless_host import start_host  # noqa: E402
 import numpy as np  # noqa: E402
 
 from plotwise.processing.engine.estimation import estimate_density  # noqa: E402
@@ -40,20 +42,15 @@ def timed(label, **kwargs):
 
 def host_baseline():
     try:
-        from qgis.core import QgsApplication, QgsFeature, QgsField, QgsVectorLayer
-        from qgis.PyQt.QtCore import QVariant
+        from qgis.core import QgsFeature, QgsVectorLayer
+
+        from plotwise.plugin import compat
     except ImportError:
         return None
-    sys.path.append("/usr/share/qgis/python/plugins")
-    app = QgsApplication([], False)
-    app.initQgis()
-    import processing
-    from processing.core.Processing import Processing
-
-    Processing.initialize()
+    app, processing = start_host()  # scripts/headless_host.py
     counts, _, strata, _, _ = data()
     layer = QgsVectorLayer("None", "units", "memory")
-    layer.dataProvider().addAttributes([QgsField("stratum", QVariant.Int), QgsField("count", QVariant.Double)])
+    layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("count", "double")])
     layer.updateFields()
     features = []
     for s, c in zip(strata.tolist(), counts.tolist()):

@@ -18,6 +18,8 @@ REPO = Path(__file__).resolve().parents[2]
 sys.path.insert(0, str(REPO / "tests"))
 sys.path.append("/usr/share/qgis/python/plugins")
 import conftest  # noqa: E402,F401  (registers the package as plotwise)
+sys.path.insert(0, str(REPO / "scripts"))
+from headless_host import start_host  # noqa: E402
 import numpy as np  # noqa: E402
 from shapely.geometry import MultiPolygon, Polygon, box  # noqa: E402
 
@@ -95,18 +97,7 @@ def timed(fn, repeat=3):
 
 
 def main():
-    from qgis.core import QgsApplication
-
-    app = QgsApplication([], False)
-    app.initQgis()
-    import processing
-    from processing.core.Processing import Processing
-
-    Processing.initialize()
-    from plotwise.processing.provider import PlotwiseProvider
-
-    provider = PlotwiseProvider()
-    QgsApplication.processingRegistry().addProvider(provider)
+    app, processing = start_host()  # scripts/headless_host.py: QGIS, Processing and our provider
 
     # 1. simple random points against the host
     for shape, poly in (("smooth", big_polygon()), ("rugged", big_polygon(rugged=True)), ("saw-tooth", noisy_polygon())):
@@ -138,7 +129,6 @@ def main():
     print("1,000 balanced units + 200 reserves, 300 km², 8 two-part strata")
     print(f"  engine (points)                     {engine:7.3f} s   (target < 2 s)")
     print(f"  whole algorithm (50 m squares inside, 100 m spacing, report) {whole:7.3f} s   (target < 2 s)")
-    app.exitQgis()
 
 
 if __name__ == "__main__":

@@ -31,6 +31,8 @@ from pathlib import Path
 HERE = Path(__file__).resolve()
 sys.path.insert(0, str(HERE.parents[1]))
 import conftest  # noqa: E402,F401  (registers the package as plotwise)
+sys.path.insert(0, str(Path(__file__).resolve().parents[2] / "scripts"))
+from headless_host import start_host  # noqa: E402
 
 import numpy as np  # noqa: E402
 from osgeo import gdal, ogr, osr  # noqa: E402
@@ -126,15 +128,7 @@ def measure_ours(folder):
 
 def measure_host(folder, bounds):
     os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
-    sys.path.append("/usr/share/qgis/python/plugins")
-    from qgis.core import QgsApplication
-
-    app = QgsApplication([], False)
-    app.initQgis()
-    import processing
-    from processing.core.Processing import Processing
-
-    Processing.initialize()
+    app, processing = start_host()  # scripts/headless_host.py
     edges = [-1e30] + list(bounds) + [1e30]
     table = []
     for h in range(len(edges) - 1):
@@ -158,7 +152,6 @@ def measure_host(folder, bounds):
     times["polygonize"] = time.perf_counter() - t2
     times["total"] = time.perf_counter() - t
     times["peak"] = peak()
-    app.exitQgis()
     return times
 
 
