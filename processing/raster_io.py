@@ -79,7 +79,8 @@ def _srs(wkt):
     return s
 
 
-def _same_crs(a_wkt, b_wkt):
+def same_crs(a_wkt, b_wkt):
+    """True when two WKT CRS are the same (a raster without a CRS is taken to be in the other's)."""
     if not a_wkt or not b_wkt:
         return True
     return bool(_srs(a_wkt).IsSame(_srs(b_wkt)))
@@ -197,7 +198,7 @@ class CovariateStack:
     def _build(self, frame_wkb, categorical, block_cells):
         first = self.covariates[0]
         ds0 = _open(first)
-        if not _same_crs(ds0.GetProjection(), self.crs_wkt):
+        if not same_crs(ds0.GetProjection(), self.crs_wkt):
             ds0 = gdal.Warp("", ds0, format="VRT", dstSRS=self.crs_wkt,
                             resampleAlg="near" if categorical else "bilinear")
             self.warped.append(first.name)
@@ -266,7 +267,7 @@ class CovariateStack:
         g = _grid_of(ds, self.crs_wkt)
         gx0, gdx, _, gy0, _, gdy = self.grid.geotransform
         sx0, sdx, _, sy0, _, sdy = g.geotransform
-        if _same_crs(g.crs_wkt, self.crs_wkt) and math.isclose(sdx, gdx, rel_tol=1e-9) and \
+        if same_crs(g.crs_wkt, self.crs_wkt) and math.isclose(sdx, gdx, rel_tol=1e-9) and \
                 math.isclose(sdy, gdy, rel_tol=1e-9):
             co, ro = (gx0 - sx0) / sdx, (gy0 - sy0) / sdy
             if abs(co - round(co)) < 1e-6 and abs(ro - round(ro)) < 1e-6:
@@ -649,7 +650,7 @@ def read_surface_window(path, name, surface_wkt, target_wkt, target_label, bound
                                  "GeoTIFF first.", name=name, error=error)) from None
     minx, miny, maxx, maxy = bounds
     gt = dataset.GetGeoTransform()
-    if _same_crs(surface_wkt, target_wkt) and gt[2] == 0 and gt[4] == 0 and gt[5] < 0:
+    if same_crs(surface_wkt, target_wkt) and gt[2] == 0 and gt[4] == 0 and gt[5] < 0:
         band = dataset.GetRasterBand(1)
         c0 = max(0, int(math.floor((minx - gt[0]) / gt[1])) - 1)
         c1 = min(dataset.RasterXSize, int(math.ceil((maxx - gt[0]) / gt[1])) + 1)

@@ -24,6 +24,7 @@ from osgeo import gdal, ogr, osr
 from shapely import wkb
 
 from .engine.errors import Cancelled, InputError, message
+from .raster_io import same_crs
 
 #: Upper limit on the number of cells read over the extent (about 0.6 GB at peak).
 MAX_CELLS = 50_000_000
@@ -100,15 +101,6 @@ def _open(source):
     if ds is None:
         raise InputError(message("The mask raster (MASK) '{source}' cannot be opened by GDAL.", source=str(source)))
     return ds
-
-
-def _same_crs(wkt, target):
-    if not wkt:
-        return True  # a raster without a CRS is taken to be in the computation CRS
-    try:
-        return pyproj.CRS.from_wkt(wkt).equals(target, ignore_axis_order=True)
-    except pyproj.exceptions.CRSError:
-        return False
 
 
 def _snapped_grid(extent, origin_x, origin_y, res_x, res_y):
@@ -272,11 +264,11 @@ def mask_polygons(
     target_wkt = target.to_wkt()
     if source_crs is not None:
         source_wkt = pyproj.CRS.from_user_input(source_crs).to_wkt()
-        if not _same_crs(ds.GetProjection(), pyproj.CRS.from_wkt(source_wkt)):
+        if not same_crs(ds.GetProjection(), source_wkt):
             ds = gdal.Translate("", ds, format="VRT", outputSRS=source_wkt)
     gt = ds.GetGeoTransform()
     north_up = gt[2] == 0 and gt[4] == 0 and gt[5] < 0
-    if _same_crs(ds.GetProjection(), target) and north_up and not resolution:
+    if same_crs(ds.GetProjection(), target_wkt) and north_up and not resolution:
         values, covered, out_gt = _read_aligned(ds, band, extent)
         warped = False
     else:
