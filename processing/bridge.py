@@ -209,6 +209,61 @@ def write_features(sink, fields, geometries, rows, feedback=None, progress_range
     return True
 
 
+#: WKB headers: byte order (1 = little endian), geometry type, then counts (ISO/OGC simple features)
+_WKB_LAYOUT = {
+    "point": (1, ()),
+    "line": (2, ("points",)),
+    "polygon": (3, ("rings", "points")),
+}
+
+
+def wkb_geometries(coordinates, kind):
+    """One WKB geometry per row of a uniform coordinate array, packed in one numpy pass.
+
+    ``kind`` "point" takes an (n, 2) array; "line" an (n, m, 2) array of m-point lines;
+    "polygon" an (n, m, 2) array of closed rings (one ring per polygon). Returns a list of
+    ``bytes``, one per row: cheaper for the host than building its geometries vertex by vertex.
+    """
+    xy = np.asarray(coordinates, dtype=float)
+    code, counts = _WKB_LAYOUT[kind]
+    shape = xy.shape[1:]
+    dtype = np.dtype([("order", "u1"), ("type", "<u4")] + [(c, "<u4") for c in counts] + [("xy", "<f8", shape)])
+    packed = np.empty(len(xy), dtype)
+    packed["order"], packed["type"] = 1, code
+    if "rings" in counts:
+        packed["rings"] = 1
+    if "points" in counts:
+        packed["points"] = shape[0]
+    packed["xy"] = xy
+    raw, size = packed.tobytes(), dtype.itemsize
+    return [raw[i:i + size] for i in range(0, len(raw), size)]
+
+
+def write_rows(sink, geometries_wkb, rows, feedback=None, progress_range=(0.0, 100.0), chunk=2000):
+    """Add one feature per (WKB geometry, row) to ``sink``, in chunks; False when cancelled.
+
+    ``rows`` hold plain Python values aligned with the sink's fields (NULL already in place):
+    see :func:`sink_value`. The fast path for many features with simple geometries.
+    """
+    total = max(len(rows), 1)
+    start, end = progress_range
+    for first in range(0, len(rows), chunk):
+        if feedback is not None and feedback.isCanceled():
+            return False
+        features = []
+        for wkb, row in zip(geometries_wkb[first:first + chunk], rows[first:first + chunk]):
+            geometry = QgsGeometry()
+            geometry.fromWkb(wkb)
+            feature = QgsFeature()
+            feature.setGeometry(geometry)
+            feature.setAttributes(row)
+            features.append(feature)
+        sink.addFeatures(features, compat.FAST_INSERT)
+        if feedback is not None:
+            feedback.setProgress(start + (end - start) * min(first + chunk, total) / total)
+    return True
+
+
 def _sink_value(value):
     if value is None:
         return NULL

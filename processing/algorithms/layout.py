@@ -3,11 +3,8 @@ import math
 
 import numpy as np
 from qgis.core import (
-    QgsFeature,
     QgsFeatureRequest,
     QgsField,
-    QgsGeometry,
-    QgsPointXY,
     QgsProcessingException,
     QgsProcessingParameterBoolean,
     QgsProcessingParameterEnum,
@@ -297,7 +294,6 @@ class LayoutUnits(PlotwiseAlgorithm):
         sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, fields, wkb, crs)
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
-        outlines = result.outlines
         null = bridge.sink_value(None)
 
         def column(values):  # plain Python values, NaN as NULL
@@ -306,27 +302,13 @@ class LayoutUnits(PlotwiseAlgorithm):
         columns = [
             list(result.unit_id), [1 if k is None else k for k in result.stratum], list(result.role),
             result.draw_ord.tolist(), column(result.area_m2), column(result.incl_p), column(result.weight),
-            column(result.lon), column(result.lat),
+            column(result.lon), column(result.lat), [null] * len(result),
         ]
-        features = []
-        total = max(len(result), 1)
-        for i, row in enumerate(zip(*columns)):
-            feature = QgsFeature(fields)
-            xy = outlines[i].tolist()
-            if spec.shape == engine.POINT:
-                geometry = QgsGeometry.fromPointXY(QgsPointXY(*xy))
-            elif spec.shape == engine.LINE:
-                geometry = QgsGeometry.fromPolylineXY([QgsPointXY(x, y) for x, y in xy])
-            else:
-                geometry = QgsGeometry.fromPolygonXY([[QgsPointXY(x, y) for x, y in xy]])
-            feature.setGeometry(geometry)
-            feature.setAttributes([*row, null])
-            features.append(feature)
-            if i % 2000 == 0:
-                if feedback.isCanceled():
-                    raise self.cancelled_error()
-                feedback.setProgress(70 + 15 * i / total)
-        sink.addFeatures(features, compat.FAST_INSERT)
+        kind = {engine.POINT: "point", engine.LINE: "line"}.get(spec.shape, "polygon")
+        written = bridge.write_rows(sink, bridge.wkb_geometries(result.outlines, kind), [list(r) for r in zip(*columns)],
+                                    feedback, (70.0, 85.0))
+        if not written:
+            raise self.cancelled_error()
         return dest_id
 
     # -- report ----------------------------------------------------------------------

@@ -176,3 +176,21 @@ def test_invalid_repaired_and_empty_skipped_with_warnings(registered):
     text = " ".join(fb.warnings)
     assert "repaired" in text and "skipped" in text
     assert {f["stratum"] for f in result["OUTPUT"].getFeatures()} == {1, 2, 3, 4}
+
+
+@pytest.mark.parametrize("kind, shape, geom_type", [("point", (5, 2), "Point"), ("line", (5, 2, 2), "LineString"),
+                                                    ("polygon", (5, 9, 2), "Polygon")])
+def test_packed_wkb_reads_back_in_shapely_and_the_host(kind, shape, geom_type):
+    from plotwise.processing import bridge
+
+    xy = np.random.default_rng(4).uniform(0, 1e5, shape)
+    if kind == "polygon":
+        xy[:, -1] = xy[:, 0]  # closed rings
+    for coords, wkb in zip(xy, bridge.wkb_geometries(xy, kind)):
+        shape_ = shapely_wkb.loads(wkb)  # shapely's WKB reader as the oracle (OGC simple features)
+        assert shape_.geom_type == geom_type
+        ring = shape_.exterior if kind == "polygon" else shape_
+        np.testing.assert_array_equal(np.asarray(ring.coords).reshape(coords.shape), coords)
+        host = QgsGeometry()
+        host.fromWkb(wkb)
+        assert host.asWkb() == wkb
