@@ -81,11 +81,12 @@ class CellBlock:
         NoData value per covariate (None: NaN only).
     """
 
-    __slots__ = ("window", "values", "in_frame", "strata", "nodata", "_valid")
+    __slots__ = ("window", "values", "in_frame", "strata", "nodata", "_valid", "_all_valid")
 
     def __init__(self, window, values, in_frame, valid=None, strata=None, nodata=None):
         self.window, self.values, self.in_frame = window, values, in_frame
         self.strata, self.nodata, self._valid = strata, nodata, valid
+        self._all_valid = None
 
     @property
     def valid(self):
@@ -93,6 +94,21 @@ class CellBlock:
             nodata = self.nodata if self.nodata is not None else (None,) * len(self.values)
             self._valid = valid_cells(self.values, self.in_frame, nodata)
         return self._valid
+
+    @property
+    def all_valid(self):
+        """True when every cell of the block is valid (a block wholly inside the frame, without NoData)."""
+        if self._all_valid is None:
+            self._all_valid = bool(self.valid.all())
+        return self._all_valid
+
+    def spread(self, ids):
+        """Per-cell array of the block's shape: ``ids`` (one per valid cell) in place, 0 elsewhere."""
+        if self.all_valid:
+            return ids.reshape(self.valid.shape)
+        full = np.zeros(self.valid.shape, ids.dtype)
+        full[self.valid] = ids
+        return full
 
 
 class ArrayCellSource:
@@ -169,9 +185,10 @@ def _tick(progress, i, n):
 
 
 #: threads that work on blocks while the calling thread reads the next ones (0: all in the calling thread).
-#: With two cores or fewer the threads would only compete with the reader and the host, so none are used;
-#: the environment variable PLOTWISE_WORKERS overrides the choice.
-WORKERS = int(os.environ.get("PLOTWISE_WORKERS", 0 if (os.cpu_count() or 1) <= 2 else 2))
+#: One core: none. Two cores: one, so that reading and computing overlap (a quarter off the wall time of
+#: a stratification on 10^8 cells, tests/benchmarks/bench_stratify.py). More: two; the reader is then the
+#: bottleneck. The environment variable PLOTWISE_WORKERS overrides the choice.
+WORKERS = int(os.environ.get("PLOTWISE_WORKERS", min(2, max(0, (os.cpu_count() or 1) - 1))))
 
 
 def _kept_blocks(source, keep):
@@ -227,7 +244,12 @@ def _work_dtype(dtype):
 
 
 def _valid_values(block, covariate):
-    """The covariate's valid cells (boolean indexing: numpy's fastest gather for this)."""
+    """The covariate's valid cells, in reading order; read only (a view of the block when all are valid).
+
+    Boolean indexing is numpy's fastest gather; a block wholly inside the frame needs none.
+    """
+    if block.all_valid:
+        return block.values[covariate].reshape(-1)
     return block.values[covariate][block.valid]
 
 
@@ -962,8 +984,7 @@ def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
         for m in upper:
             ids += m
         if want_ids:
-            full = np.zeros(block.valid.shape, np.uint8)
-            full[block.valid] = ids
+            full = block.spread(ids)
         n_ge = np.array([n] + [np.count_nonzero(m) for m in upper] + [0])
         count[1:] = n_ge[:-1] - n_ge[1:]
         for c in range(ncov):
@@ -979,8 +1000,7 @@ def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
     if rule is not None:
         ids = rule.assign(cols)
         if want_ids:
-            full = np.zeros(block.valid.shape, ids.dtype)
-            full[block.valid] = ids
+            full = block.spread(ids)
     else:
         ids = block.strata[block.valid]
         if ids.max() > k:

@@ -14,8 +14,8 @@ Run on demand: ``.venv/bin/python tests/benchmarks/bench_stratify.py [--size N] 
 * Peak memory includes GDAL's block cache (GDAL_CACHEMAX, by default 5 % of the RAM), which
   the bare pass fills as much as ours.
 * On a shared machine each side's fastest of alternated runs is kept (``--repeats``).
-  ``PLOTWISE_WORKERS=2`` lets the engine work on blocks in two threads (the default above
-  two cores).
+  The engine works on blocks in one thread beside the reader on two cores, two above
+  (``PLOTWISE_WORKERS=0`` runs everything in the calling thread, as the bare pass does).
 """
 import argparse
 import json
@@ -165,9 +165,9 @@ def child(kind, folder, bounds):
     print("RESULT " + json.dumps(out))
 
 
-def run_child(kind, folder, bounds=()):
+def run_child(kind, folder, bounds=(), env=None):
     cmd = [sys.executable, str(HERE), "--child", kind, "--folder", folder, "--bounds", json.dumps(list(bounds))]
-    proc = subprocess.run(cmd, capture_output=True, text=True)
+    proc = subprocess.run(cmd, capture_output=True, text=True, env=None if env is None else {**os.environ, **env})
     for line in proc.stdout.splitlines():
         if line.startswith("RESULT "):
             return json.loads(line[7:])
@@ -210,6 +210,10 @@ def main():
               f" = {ours['total']:.2f} s), peak {ours['peak'] / GIB:.2f} GiB")
         ratio = ours["seconds"] / bare["seconds"]
         print(f"  ratio to the bare pass: {ratio:.2f} (target <= 2.00) {'OK' if ratio <= 2 else 'OVER'}")
+        serial = run_child("ours", folder, env={"PLOTWISE_WORKERS": "0"})
+        if serial is not None:
+            print(f"  all in the calling thread (PLOTWISE_WORKERS=0): {serial['seconds']:.2f} s, ratio "
+                  f"{serial['seconds'] / bare['seconds']:.2f}")
         print(f"  peak memory: {ours['peak'] / GIB:.2f} GiB (target < 1 GiB) {'OK' if ours['peak'] < GIB else 'OVER'}")
         print("  boundaries:", ", ".join(f"{b:.2f}" for b in ours["boundaries"]))
         print("  areas (ha):", ", ".join(f"{a:,.0f}" for a in ours["areas_ha"]))
