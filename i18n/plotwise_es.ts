@@ -2482,12 +2482,12 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
   <context>
     <name>LayoutUnits</name>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="72" />
+      <location filename="../processing/algorithms/layout.py" line="69" />
       <source>Lay out sample units</source>
       <translation>Disponer las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="75" />
+      <location filename="../processing/algorithms/layout.py" line="72" />
       <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -2524,447 +2524,447 @@ Campos de salida: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; par
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="110" />
+      <location filename="../processing/algorithms/layout.py" line="107" />
       <source>Sampling frame or strata</source>
       <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="114" />
+      <location filename="../processing/algorithms/layout.py" line="111" />
       <source>Stratum field (empty: the frame is one stratum)</source>
       <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="120" />
+      <location filename="../processing/algorithms/layout.py" line="117" />
       <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
       <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="126" />
+      <location filename="../processing/algorithms/layout.py" line="123" />
       <source>Total number of units (when no units field is given)</source>
       <translation>Número total de unidades (si no se da un campo de unidades)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
+      <location filename="../processing/algorithms/layout.py" line="129" />
       <source>Design</source>
       <translation>Diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="130" />
       <source>Simple random</source>
       <translation>Aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="130" />
       <source>Systematic grid</source>
       <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="130" />
       <source>Spatially balanced</source>
       <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
+      <location filename="../processing/algorithms/layout.py" line="135" />
       <source>Unit shape</source>
       <translation>Forma de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Point station</source>
       <translation>Estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Square plot</source>
       <translation>Parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Circular plot</source>
       <translation>Parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Line transect</source>
       <translation>Transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="145" />
+      <location filename="../processing/algorithms/layout.py" line="142" />
       <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
       <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="151" />
+      <location filename="../processing/algorithms/layout.py" line="148" />
       <source>Bearing (degrees from grid north; -1: random)</source>
       <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="156" />
+      <location filename="../processing/algorithms/layout.py" line="153" />
       <source>Keep every unit wholly inside its stratum</source>
       <translation>Mantener cada unidad por completo dentro de su estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="160" />
+      <location filename="../processing/algorithms/layout.py" line="157" />
       <source>Minimum spacing between unit centres (m; 0: none)</source>
       <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="166" />
+      <location filename="../processing/algorithms/layout.py" line="163" />
       <source>Reserve units per stratum</source>
       <translation>Unidades de reserva por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="170" />
+      <location filename="../processing/algorithms/layout.py" line="167" />
       <source>Sample units</source>
       <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="173" />
+      <location filename="../processing/algorithms/layout.py" line="170" />
       <source>Waypoints for GPS (GPX)</source>
       <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="173" />
+      <location filename="../processing/algorithms/layout.py" line="170" />
       <source>GPX files (*.gpx)</source>
       <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="186" />
+      <location filename="../processing/algorithms/layout.py" line="183" />
       <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
       <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="213" />
+      <location filename="../processing/algorithms/layout.py" line="210" />
       <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
       <translation>Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="237" />
+      <location filename="../processing/algorithms/layout.py" line="234" />
       <source>Stratum field '{field}' of layer '{layer}'</source>
       <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="238" />
+      <location filename="../processing/algorithms/layout.py" line="235" />
       <source>Units field '{field}' of layer '{layer}'</source>
       <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="244" />
+      <location filename="../processing/algorithms/layout.py" line="241" />
       <source>Layer '{layer}': {text}</source>
       <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="249" />
+      <location filename="../processing/algorithms/layout.py" line="246" />
       <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
       <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="262" />
+      <location filename="../processing/algorithms/layout.py" line="260" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="266" />
+      <location filename="../processing/algorithms/layout.py" line="264" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
+      <location filename="../processing/algorithms/layout.py" line="277" />
       <source>the frame</source>
       <translation>el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
+      <location filename="../processing/algorithms/layout.py" line="277" />
       <source>stratum {key}</source>
       <translation>estrato {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="335" />
+      <location filename="../processing/algorithms/layout.py" line="318" />
       <source>Sample-unit layout</source>
       <translation>Disposición de las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <location filename="../processing/algorithms/layout.py" line="442" />
+      <location filename="../processing/algorithms/layout.py" line="323" />
+      <location filename="../processing/algorithms/layout.py" line="425" />
       <source>primary units</source>
       <translation>unidades principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="341" />
-      <location filename="../processing/algorithms/layout.py" line="443" />
+      <location filename="../processing/algorithms/layout.py" line="324" />
+      <location filename="../processing/algorithms/layout.py" line="426" />
       <source>reserve units</source>
       <translation>unidades de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="325" />
       <source>strata</source>
       <translation>estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
       <source>design</source>
       <translation>diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>simple random</source>
       <translation>aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>systematic grid</source>
       <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>spatially balanced</source>
       <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="328" />
       <source>Replacing units in the field</source>
       <translation>Sustituir unidades en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="347" />
+      <location filename="../processing/algorithms/layout.py" line="330" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="352" />
+      <location filename="../processing/algorithms/layout.py" line="335" />
       <source>Units per stratum</source>
       <translation>Unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Area (ha)</source>
       <translation>Área (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Effective area (ha)</source>
       <translation>Área efectiva (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Units asked</source>
       <translation>Unidades pedidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="338" />
       <source>Reserve</source>
       <translation>Reservas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="338" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="338" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="340" />
       <source>Grid spacing (m)</source>
       <translation>Espaciado de la cuadrícula (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="340" />
       <source>Grid rotation (°)</source>
       <translation>Rotación de la cuadrícula (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="360" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
       <source>frame</source>
       <translation>marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="368" />
+      <location filename="../processing/algorithms/layout.py" line="351" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="370" />
+      <location filename="../processing/algorithms/layout.py" line="353" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="374" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="381" />
+      <location filename="../processing/algorithms/layout.py" line="364" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="384" />
+      <location filename="../processing/algorithms/layout.py" line="367" />
       <source>Map</source>
       <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
+      <location filename="../processing/algorithms/layout.py" line="368" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="369" />
       <source>Method</source>
       <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="390" />
+      <location filename="../processing/algorithms/layout.py" line="373" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="392" />
+      <location filename="../processing/algorithms/layout.py" line="375" />
       <source>Frame (FRAME)</source>
       <translation>Marco (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="376" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Campo de estrato (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="376" />
       <source>(none: one stratum)</source>
       <translation>(ninguno: un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="377" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Campo de unidades por estrato (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="377" />
       <source>(none)</source>
       <translation>(ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="378" />
       <source>Total units (N_UNITS)</source>
       <translation>Total de unidades (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="378" />
       <source>(not used)</source>
       <translation>(no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>Design (DESIGN)</source>
       <translation>Diseño (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forma de la unidad (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>point</source>
       <translation>punto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>square</source>
       <translation>cuadrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>circle</source>
       <translation>círculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>line</source>
       <translation>línea</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="381" />
       <source>Unit size (SIZE, m)</source>
       <translation>Tamaño de la unidad (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="382" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Rumbo (BEARING, grados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="382" />
       <source>random</source>
       <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>Keep inside (INSIDE)</source>
       <translation>Mantener dentro (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>yes</source>
       <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>no</source>
       <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="384" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Separación mínima (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="385" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Reservas por estrato (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Seed (SEED)</source>
       <translation>Semilla (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="387" />
       <source>CRS of the computation and the output</source>
       <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="412" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="414" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="416" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="423" />
+      <location filename="../processing/algorithms/layout.py" line="406" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
     </message>
@@ -3058,17 +3058,17 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation> y {n} más</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="231" />
+      <location filename="../processing/bridge.py" line="286" />
       <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
       <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="258" />
+      <location filename="../processing/bridge.py" line="313" />
       <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
       <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="263" />
+      <location filename="../processing/bridge.py" line="318" />
       <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
       <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
@@ -3097,7 +3097,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
     </message>
     <message>
       <location filename="../processing/engine/allocation.py" line="384" />
-      <location filename="../processing/engine/layout.py" line="364" />
+      <location filename="../processing/engine/layout.py" line="380" />
       <source>{shown} and {more} more</source>
       <translation>{shown} y {more} más</translation>
     </message>
@@ -3318,7 +3318,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
     </message>
     <message>
       <location filename="../processing/engine/design_comparison.py" line="355" />
-      <location filename="../processing/engine/layout.py" line="152" />
+      <location filename="../processing/engine/layout.py" line="168" />
       <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
       <translation>SHAPE debe ser 0 (punto), 1 (cuadrado), 2 (círculo) o 3 (transecto lineal).</translation>
     </message>
@@ -3643,368 +3643,418 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>No queda nada del marco de muestreo tras el búfer interior (EDGE_BUFFER = {edge_buffer:g} m): las {hectares:.4g} ha restantes están todas a menos de esa distancia del límite del área de estudio (extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="150" />
+      <location filename="../processing/engine/layout.py" line="166" />
       <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
       <translation>DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad puntual; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad cuadrada; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad circular; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
       <translation>SIZE debe ser mayor que 0 m para una unidad lineal; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="156" />
+      <location filename="../processing/engine/layout.py" line="172" />
       <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
       <translation>BEARING debe ser -1 (aleatorio) o estar entre 0 y 360 grados; es {bearing}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="159" />
+      <location filename="../processing/engine/layout.py" line="175" />
       <source>MIN_SPACING must be 0 or more metres.</source>
       <translation>MIN_SPACING debe ser 0 metros o más.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="161" />
+      <location filename="../processing/engine/layout.py" line="177" />
       <source>RESERVE must be 0 or a positive whole number.</source>
       <translation>RESERVE debe ser 0 o un número entero positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="340" />
+      <location filename="../processing/engine/layout.py" line="356" />
       <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
       <translation>{field} está vacío (NULL) o no es un número para las entidades {ids}. Dé a cada estrato un número entero de unidades, o deje N_FIELD sin definir para usar N_UNITS.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="347" />
+      <location filename="../processing/engine/layout.py" line="363" />
       <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
       <translation>{field} es negativo para las entidades {ids}. Use 0 o un número entero positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="353" />
+      <location filename="../processing/engine/layout.py" line="369" />
       <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
       <translation>{field} no es un número entero para las entidades {ids}. Redondee primero la asignación a unidades enteras.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="434" />
+      <location filename="../processing/engine/layout.py" line="450" />
       <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
       <translation>Indique N_FIELD (unidades por estrato) o N_UNITS (un total de al menos 1).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="445" />
+      <location filename="../processing/engine/layout.py" line="461" />
       <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
       <translation>Se reparó una geometría no válida en las entidades {ids}; compruebe sus contornos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="448" />
+      <location filename="../processing/engine/layout.py" line="464" />
       <source>Empty or zero-area feature(s) {ids} were skipped.</source>
       <translation>Se omitieron las entidades vacías o de área nula {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="450" />
+      <location filename="../processing/engine/layout.py" line="466" />
       <source>The frame has no polygon with an area: every feature is empty or has zero area.</source>
       <translation>El marco de muestreo no tiene ningún polígono con área: cada entidad está vacía o tiene área nula.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="460" />
+      <location filename="../processing/engine/layout.py" line="476" />
       <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
       <translation>{field} está vacío (NULL) para la entidad {fid}. Dele un valor de estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="486" />
+      <location filename="../processing/engine/layout.py" line="502" />
       <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
       <translation>Las entidades del marco de muestreo (sin campo de estrato) tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades o elija un campo de estrato para que cada entidad sea un estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="486" />
+      <location filename="../processing/engine/layout.py" line="502" />
       <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
       <translation>Las entidades del estrato {key} tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="501" />
+      <location filename="../processing/engine/layout.py" line="517" />
       <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
       <translation>N_UNITS = {n_units} es menos de {minimum} por estrato para {n_strata} estratos; cada estrato recibe {minimum} ({total} unidades).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El marco de muestreo es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="517" />
+      <location filename="../processing/engine/layout.py" line="533" />
       <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
       <translation>Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="517" />
+      <location filename="../processing/engine/layout.py" line="533" />
       <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
       <translation>Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="526" />
+      <location filename="../processing/engine/layout.py" line="542" />
       <source>The frame gets no units; the estimate cannot speak for it.</source>
       <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="526" />
+      <location filename="../processing/engine/layout.py" line="542" />
       <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
       <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="529" />
+      <location filename="../processing/engine/layout.py" line="545" />
       <source>The frame gets one unit only; its variance cannot be estimated.</source>
       <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="529" />
+      <location filename="../processing/engine/layout.py" line="545" />
       <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
       <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="622" />
+      <location filename="../processing/engine/layout.py" line="638" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="622" />
+      <location filename="../processing/engine/layout.py" line="638" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="783" />
+      <location filename="../processing/engine/layout.py" line="799" />
       <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="783" />
+      <location filename="../processing/engine/layout.py" line="799" />
       <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="801" />
+      <location filename="../processing/engine/layout.py" line="817" />
       <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="801" />
+      <location filename="../processing/engine/layout.py" line="817" />
       <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="811" />
+      <location filename="../processing/engine/layout.py" line="827" />
       <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="811" />
+      <location filename="../processing/engine/layout.py" line="827" />
       <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="818" />
+      <location filename="../processing/engine/layout.py" line="834" />
       <source>The frame has only {n} of {r} reserve units.</source>
       <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="818" />
+      <location filename="../processing/engine/layout.py" line="834" />
       <source>Stratum {key} has only {n} of {r} reserve units.</source>
       <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="462" />
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>inicio del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>inicio del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>fin del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>fin del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>point unit {unit} (primary, stratum {stratum})</source>
+      <translation>unidad puntual {unit} (principal, estrato {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>point unit {unit} (reserve, stratum {stratum})</source>
+      <translation>unidad puntual {unit} (de reserva, estrato {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>square unit {unit} (primary, stratum {stratum})</source>
+      <translation>unidad cuadrada {unit} (principal, estrato {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>square unit {unit} (reserve, stratum {stratum})</source>
+      <translation>unidad cuadrada {unit} (de reserva, estrato {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>circle unit {unit} (primary, stratum {stratum})</source>
+      <translation>unidad circular {unit} (principal, estrato {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>circle unit {unit} (reserve, stratum {stratum})</source>
+      <translation>unidad circular {unit} (de reserva, estrato {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="484" />
       <source>No cell of the frame has a value in every covariate.</source>
       <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="652" />
+      <location filename="../processing/engine/stratification.py" line="674" />
       <source>The covariates take fewer distinct value combinations than strata asked for.</source>
       <translation>Las covariables toman menos combinaciones de valores distintas que estratos pedidos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="913" />
+      <location filename="../processing/engine/stratification.py" line="935" />
       <source>The frame holds no raster cell.</source>
       <translation>El marco de muestreo no contiene ninguna celda ráster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1107" />
+      <location filename="../processing/engine/stratification.py" line="1127" />
       <source>Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
       <translation>La covariable «{name}» es constante ({value:g}) en el marco de muestreo: no puede definir estratos. Use otra covariable, o compruebe el marco y el ráster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1147" />
+      <location filename="../processing/engine/stratification.py" line="1167" />
       <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
       <translation>METHOD desconocido {method!r}: use de 0 (cuantiles) a 4 (clases del ráster).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1149" />
+      <location filename="../processing/engine/stratification.py" line="1169" />
       <source>Ask for at least 2 strata (STRATA).</source>
       <translation>Pida al menos 2 estratos (STRATA).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1150" />
+      <location filename="../processing/engine/stratification.py" line="1170" />
       <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
       <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables ({names}). Compruebe que los rásteres cubren el marco y que su valor NoData es correcto.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1185" />
+      <location filename="../processing/engine/stratification.py" line="1205" />
       <source>Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
       <translation>La covariable «{name}» toma solo {n_distinct} valores distintos en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1199" />
+      <location filename="../processing/engine/stratification.py" line="1219" />
       <source>Some boundaries coincide (many cells share the same value of '{name}'); {formed} strata are formed instead of {k}.</source>
       <translation>Algunos límites coinciden (muchas celdas comparten el mismo valor de «{name}»); se forman {formed} estratos en lugar de {k}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1212" />
+      <location filename="../processing/engine/stratification.py" line="1232" />
       <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
       <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1216" />
+      <location filename="../processing/engine/stratification.py" line="1236" />
       <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
       <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en una muestra de {sample_n} celdas, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1226" />
+      <location filename="../processing/engine/stratification.py" line="1246" />
       <source>Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host's reclassify by table tool), or choose another METHOD.</source>
       <translation>La covariable «{name}» tiene más de {max_classes} clases (al menos {n_distinct} valores distintos en el marco de muestreo): reclasifíquela primero en {max_classes} clases o menos (por ejemplo con la herramienta de reclasificación por tabla del anfitrión), o elija otro METHOD.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1243" />
+      <location filename="../processing/engine/stratification.py" line="1263" />
       <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
       <translation>{dropped} de los {k} estratos no contienen ninguna celda y se quitaron.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="92" />
+      <location filename="../processing/raster_io.py" line="93" />
       <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
       <translation>La covariable «{name}» no puede leerse ({error}). Compruebe el archivo.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="95" />
+      <location filename="../processing/raster_io.py" line="96" />
       <source>Covariate '{name}' has no band {band}.</source>
       <translation>La covariable «{name}» no tiene banda {band}.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="182" />
+      <location filename="../processing/raster_io.py" line="183" />
       <source>Give at least one raster in COVARIATES.</source>
       <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="214" />
+      <location filename="../processing/raster_io.py" line="215" />
       <source>The frame has no polygon.</source>
       <translation>El marco de muestreo no tiene ningún polígono.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="258" />
+      <location filename="../processing/raster_io.py" line="259" />
       <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
       <translation>El marco de muestreo no se superpone a la covariable «{name}» ({path}). Use un ráster que cubra el marco, o compruebe el SRC de ambas capas.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="423" />
+      <location filename="../processing/raster_io.py" line="424" />
       <source>Cannot write the stratum raster '{path}'.</source>
       <translation>No se puede escribir el ráster de estratos «{path}».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="611" />
+      <location filename="../processing/raster_io.py" line="612" />
       <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
       <translation>{merged} estratos constaban solo de manchas por debajo de MIN_AREA y se fusionaron con sus vecinos.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="623" />
+      <location filename="../processing/raster_io.py" line="624" />
       <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
       <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="648" />
+      <location filename="../processing/raster_io.py" line="649" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="659" />
+      <location filename="../processing/raster_io.py" line="660" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="670" />
+      <location filename="../processing/raster_io.py" line="671" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="101" />
+      <location filename="../processing/raster_masking.py" line="102" />
       <source>The mask raster (MASK) '{source}' cannot be opened by GDAL.</source>
       <translation>GDAL no puede abrir el ráster de máscara (MASK) «{source}».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="150" />
+      <location filename="../processing/raster_masking.py" line="142" />
       <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
       <translation>El ráster de máscara (MASK) necesitaría {rows} x {cols} celdas sobre el área de estudio, más de {max_cells:,}. Remuestree primero el ráster a celdas más gruesas.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="161" />
-      <location filename="../processing/raster_masking.py" line="189" />
+      <location filename="../processing/raster_masking.py" line="153" />
+      <location filename="../processing/raster_masking.py" line="181" />
       <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
       <translation>El ráster de máscara (MASK) no puede reproyectarse al SRC de cálculo.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="223" />
+      <location filename="../processing/raster_masking.py" line="215" />
       <source>GDAL could not turn the masked raster cells into polygons.</source>
       <translation>GDAL no pudo convertir las celdas enmascaradas del ráster en polígonos.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="263" />
+      <location filename="../processing/raster_masking.py" line="255" />
       <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
       <translation>MASK_MIN ({mask_min:g}) es mayor que MASK_MAX ({mask_max:g}); no podría conservarse ninguna celda. Intercambie los dos valores o deje uno de ellos vacío.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="269" />
+      <location filename="../processing/raster_masking.py" line="261" />
       <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
       <translation>El ráster de máscara (MASK) no tiene banda {band}; tiene {count}.</translation>
     </message>

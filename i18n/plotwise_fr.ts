@@ -2482,12 +2482,12 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
   <context>
     <name>LayoutUnits</name>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="72" />
+      <location filename="../processing/algorithms/layout.py" line="69" />
       <source>Lay out sample units</source>
       <translation>Disposer les unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="75" />
+      <location filename="../processing/algorithms/layout.py" line="72" />
       <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -2524,447 +2524,447 @@ Champs de sortie : unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A ; p
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="110" />
+      <location filename="../processing/algorithms/layout.py" line="107" />
       <source>Sampling frame or strata</source>
       <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="114" />
+      <location filename="../processing/algorithms/layout.py" line="111" />
       <source>Stratum field (empty: the frame is one stratum)</source>
       <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="120" />
+      <location filename="../processing/algorithms/layout.py" line="117" />
       <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
       <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="126" />
+      <location filename="../processing/algorithms/layout.py" line="123" />
       <source>Total number of units (when no units field is given)</source>
       <translation>Nombre total d'unités (sans champ d'unités)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
+      <location filename="../processing/algorithms/layout.py" line="129" />
       <source>Design</source>
       <translation>Plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="130" />
       <source>Simple random</source>
       <translation>Aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="130" />
       <source>Systematic grid</source>
       <translation>Grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="133" />
+      <location filename="../processing/algorithms/layout.py" line="130" />
       <source>Spatially balanced</source>
       <translation>Spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
+      <location filename="../processing/algorithms/layout.py" line="135" />
       <source>Unit shape</source>
       <translation>Forme de l'unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Point station</source>
       <translation>Station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Square plot</source>
       <translation>Placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Circular plot</source>
       <translation>Placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="139" />
+      <location filename="../processing/algorithms/layout.py" line="136" />
       <source>Line transect</source>
       <translation>Transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="145" />
+      <location filename="../processing/algorithms/layout.py" line="142" />
       <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
       <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="151" />
+      <location filename="../processing/algorithms/layout.py" line="148" />
       <source>Bearing (degrees from grid north; -1: random)</source>
       <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="156" />
+      <location filename="../processing/algorithms/layout.py" line="153" />
       <source>Keep every unit wholly inside its stratum</source>
       <translation>Garder chaque unité entièrement dans sa strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="160" />
+      <location filename="../processing/algorithms/layout.py" line="157" />
       <source>Minimum spacing between unit centres (m; 0: none)</source>
       <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="166" />
+      <location filename="../processing/algorithms/layout.py" line="163" />
       <source>Reserve units per stratum</source>
       <translation>Unités de réserve par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="170" />
+      <location filename="../processing/algorithms/layout.py" line="167" />
       <source>Sample units</source>
       <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="173" />
+      <location filename="../processing/algorithms/layout.py" line="170" />
       <source>Waypoints for GPS (GPX)</source>
       <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="173" />
+      <location filename="../processing/algorithms/layout.py" line="170" />
       <source>GPX files (*.gpx)</source>
       <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="186" />
+      <location filename="../processing/algorithms/layout.py" line="183" />
       <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
       <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="213" />
+      <location filename="../processing/algorithms/layout.py" line="210" />
       <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
       <translation>Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="237" />
+      <location filename="../processing/algorithms/layout.py" line="234" />
       <source>Stratum field '{field}' of layer '{layer}'</source>
       <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="238" />
+      <location filename="../processing/algorithms/layout.py" line="235" />
       <source>Units field '{field}' of layer '{layer}'</source>
       <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="244" />
+      <location filename="../processing/algorithms/layout.py" line="241" />
       <source>Layer '{layer}': {text}</source>
       <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="249" />
+      <location filename="../processing/algorithms/layout.py" line="246" />
       <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
       <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="262" />
+      <location filename="../processing/algorithms/layout.py" line="260" />
       <source>{n} waypoints written to {path}</source>
       <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="266" />
+      <location filename="../processing/algorithms/layout.py" line="264" />
       <source>{stratum}: {n} primary and {r} reserve units</source>
       <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
+      <location filename="../processing/algorithms/layout.py" line="277" />
       <source>the frame</source>
       <translation>la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
+      <location filename="../processing/algorithms/layout.py" line="277" />
       <source>stratum {key}</source>
       <translation>strate {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="335" />
+      <location filename="../processing/algorithms/layout.py" line="318" />
       <source>Sample-unit layout</source>
       <translation>Disposition des unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <location filename="../processing/algorithms/layout.py" line="442" />
+      <location filename="../processing/algorithms/layout.py" line="323" />
+      <location filename="../processing/algorithms/layout.py" line="425" />
       <source>primary units</source>
       <translation>unités principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="341" />
-      <location filename="../processing/algorithms/layout.py" line="443" />
+      <location filename="../processing/algorithms/layout.py" line="324" />
+      <location filename="../processing/algorithms/layout.py" line="426" />
       <source>reserve units</source>
       <translation>unités de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
+      <location filename="../processing/algorithms/layout.py" line="325" />
       <source>strata</source>
       <translation>strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
       <source>design</source>
       <translation>plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>simple random</source>
       <translation>aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>systematic grid</source>
       <translation>grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="343" />
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="326" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>spatially balanced</source>
       <translation>spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
+      <location filename="../processing/algorithms/layout.py" line="328" />
       <source>Replacing units in the field</source>
       <translation>Remplacer des unités sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="347" />
+      <location filename="../processing/algorithms/layout.py" line="330" />
       <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
       <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="352" />
+      <location filename="../processing/algorithms/layout.py" line="335" />
       <source>Units per stratum</source>
       <translation>Unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Area (ha)</source>
       <translation>Surface (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Effective area (ha)</source>
       <translation>Surface effective (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Units asked</source>
       <translation>Unités demandées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="354" />
+      <location filename="../processing/algorithms/layout.py" line="337" />
       <source>Primary</source>
       <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="338" />
       <source>Reserve</source>
       <translation>Réserves</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="338" />
       <source>incl_p</source>
       <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
+      <location filename="../processing/algorithms/layout.py" line="338" />
       <source>weight</source>
       <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="340" />
       <source>Grid spacing (m)</source>
       <translation>Pas de la grille (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="357" />
+      <location filename="../processing/algorithms/layout.py" line="340" />
       <source>Grid rotation (°)</source>
       <translation>Rotation de la grille (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="360" />
+      <location filename="../processing/algorithms/layout.py" line="343" />
       <source>frame</source>
       <translation>base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="368" />
+      <location filename="../processing/algorithms/layout.py" line="351" />
       <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
       <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="370" />
+      <location filename="../processing/algorithms/layout.py" line="353" />
       <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
       <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="374" />
+      <location filename="../processing/algorithms/layout.py" line="357" />
       <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
       <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="381" />
+      <location filename="../processing/algorithms/layout.py" line="364" />
       <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
       <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="384" />
+      <location filename="../processing/algorithms/layout.py" line="367" />
       <source>Map</source>
       <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
+      <location filename="../processing/algorithms/layout.py" line="368" />
       <source>Strata (filled), primary units (dark) and reserve units (light)</source>
       <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
+      <location filename="../processing/algorithms/layout.py" line="369" />
       <source>Method</source>
       <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="390" />
+      <location filename="../processing/algorithms/layout.py" line="373" />
       <source>, projected from {src} (UTM zone of the frame's centre)</source>
       <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="392" />
+      <location filename="../processing/algorithms/layout.py" line="375" />
       <source>Frame (FRAME)</source>
       <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="376" />
       <source>Stratum field (STRATUM_FIELD)</source>
       <translation>Champ de strate (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="393" />
+      <location filename="../processing/algorithms/layout.py" line="376" />
       <source>(none: one stratum)</source>
       <translation>(aucun : une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="377" />
       <source>Units per stratum field (N_FIELD)</source>
       <translation>Champ d'unités par strate (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="394" />
+      <location filename="../processing/algorithms/layout.py" line="377" />
       <source>(none)</source>
       <translation>(aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="378" />
       <source>Total units (N_UNITS)</source>
       <translation>Total d'unités (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="395" />
+      <location filename="../processing/algorithms/layout.py" line="378" />
       <source>(not used)</source>
       <translation>(non utilisé)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="396" />
+      <location filename="../processing/algorithms/layout.py" line="379" />
       <source>Design (DESIGN)</source>
       <translation>Plan (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>Unit shape (SHAPE)</source>
       <translation>Forme de l'unité (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>point</source>
       <translation>point</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>square</source>
       <translation>carré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>circle</source>
       <translation>cercle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
+      <location filename="../processing/algorithms/layout.py" line="380" />
       <source>line</source>
       <translation>ligne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="398" />
+      <location filename="../processing/algorithms/layout.py" line="381" />
       <source>Unit size (SIZE, m)</source>
       <translation>Taille de l'unité (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="382" />
       <source>Bearing (BEARING, degrees)</source>
       <translation>Azimut (BEARING, degrés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
+      <location filename="../processing/algorithms/layout.py" line="382" />
       <source>random</source>
       <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>Keep inside (INSIDE)</source>
       <translation>Garder à l'intérieur (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>yes</source>
       <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="400" />
+      <location filename="../processing/algorithms/layout.py" line="383" />
       <source>no</source>
       <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
+      <location filename="../processing/algorithms/layout.py" line="384" />
       <source>Minimum spacing (MIN_SPACING, m)</source>
       <translation>Espacement minimal (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="402" />
+      <location filename="../processing/algorithms/layout.py" line="385" />
       <source>Reserves per stratum (RESERVE)</source>
       <translation>Réserves par strate (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="403" />
+      <location filename="../processing/algorithms/layout.py" line="386" />
       <source>Seed (SEED)</source>
       <translation>Graine (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="404" />
+      <location filename="../processing/algorithms/layout.py" line="387" />
       <source>CRS of the computation and the output</source>
       <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="412" />
+      <location filename="../processing/algorithms/layout.py" line="395" />
       <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
       <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="414" />
+      <location filename="../processing/algorithms/layout.py" line="397" />
       <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
       <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="416" />
+      <location filename="../processing/algorithms/layout.py" line="399" />
       <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
       <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="423" />
+      <location filename="../processing/algorithms/layout.py" line="406" />
       <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
       <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
     </message>
@@ -3058,17 +3058,17 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation> et {n} autres</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="231" />
+      <location filename="../processing/bridge.py" line="286" />
       <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
       <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="258" />
+      <location filename="../processing/bridge.py" line="313" />
       <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
       <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="263" />
+      <location filename="../processing/bridge.py" line="318" />
       <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
       <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
@@ -3097,7 +3097,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
     </message>
     <message>
       <location filename="../processing/engine/allocation.py" line="384" />
-      <location filename="../processing/engine/layout.py" line="364" />
+      <location filename="../processing/engine/layout.py" line="380" />
       <source>{shown} and {more} more</source>
       <translation>{shown} et {more} autres</translation>
     </message>
@@ -3318,7 +3318,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
     </message>
     <message>
       <location filename="../processing/engine/design_comparison.py" line="355" />
-      <location filename="../processing/engine/layout.py" line="152" />
+      <location filename="../processing/engine/layout.py" line="168" />
       <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
       <translation>SHAPE doit valoir 0 (point), 1 (carré), 2 (cercle) ou 3 (transect linéaire).</translation>
     </message>
@@ -3643,368 +3643,418 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>Il ne reste rien de la base de sondage après la zone tampon intérieure (EDGE_BUFFER = {edge_buffer:g} m) : les {hectares:.4g} ha restants se trouvent tous à moins de cette distance de la limite de la zone d'étude (emprise de la zone d'étude {width:.0f} m x {height:.0f} m). Utilisez un EDGE_BUFFER plus petit.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="150" />
+      <location filename="../processing/engine/layout.py" line="166" />
       <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
       <translation>DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité ponctuelle ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité carrée ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité circulaire ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="154" />
+      <location filename="../processing/engine/layout.py" line="170" />
       <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
       <translation>SIZE doit dépasser 0 m pour une unité linéaire ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="156" />
+      <location filename="../processing/engine/layout.py" line="172" />
       <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
       <translation>BEARING doit valoir -1 (aléatoire) ou être compris entre 0 et 360 degrés ; il vaut {bearing}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="159" />
+      <location filename="../processing/engine/layout.py" line="175" />
       <source>MIN_SPACING must be 0 or more metres.</source>
       <translation>MIN_SPACING doit valoir 0 mètre ou plus.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="161" />
+      <location filename="../processing/engine/layout.py" line="177" />
       <source>RESERVE must be 0 or a positive whole number.</source>
       <translation>RESERVE doit valoir 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="340" />
+      <location filename="../processing/engine/layout.py" line="356" />
       <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
       <translation>{field} est vide (NULL) ou n'est pas un nombre pour la ou les entités {ids}. Donnez à chaque strate un nombre entier d'unités, ou laissez N_FIELD vide pour utiliser N_UNITS.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="347" />
+      <location filename="../processing/engine/layout.py" line="363" />
       <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
       <translation>{field} est négatif pour la ou les entités {ids}. Utilisez 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="353" />
+      <location filename="../processing/engine/layout.py" line="369" />
       <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
       <translation>{field} n'est pas un nombre entier pour la ou les entités {ids}. Arrondissez d'abord l'allocation à des unités entières.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="434" />
+      <location filename="../processing/engine/layout.py" line="450" />
       <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
       <translation>Indiquez N_FIELD (unités par strate) ou N_UNITS (un total d'au moins 1).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="445" />
+      <location filename="../processing/engine/layout.py" line="461" />
       <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
       <translation>Une géométrie invalide a été réparée pour la ou les entités {ids} ; vérifiez leurs contours.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="448" />
+      <location filename="../processing/engine/layout.py" line="464" />
       <source>Empty or zero-area feature(s) {ids} were skipped.</source>
       <translation>Les entités vides ou de surface nulle {ids} ont été ignorées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="450" />
+      <location filename="../processing/engine/layout.py" line="466" />
       <source>The frame has no polygon with an area: every feature is empty or has zero area.</source>
       <translation>La base de sondage n'a aucun polygone avec une surface : chaque entité est vide ou de surface nulle.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="460" />
+      <location filename="../processing/engine/layout.py" line="476" />
       <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
       <translation>{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="486" />
+      <location filename="../processing/engine/layout.py" line="502" />
       <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
       <translation>Les entités de la base de sondage (sans champ de strate) portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités ou choisissez un champ de strate pour que chaque entité soit une strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="486" />
+      <location filename="../processing/engine/layout.py" line="502" />
       <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
       <translation>Les entités de la strate {key} portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="501" />
+      <location filename="../processing/engine/layout.py" line="517" />
       <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
       <translation>N_UNITS = {n_units} fait moins de {minimum} par strate pour {n_strata} strates ; chaque strate en reçoit {minimum} ({total} unités).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La base de sondage est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="512" />
+      <location filename="../processing/engine/layout.py" line="528" />
       <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
       <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="517" />
+      <location filename="../processing/engine/layout.py" line="533" />
       <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
       <translation>Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="517" />
+      <location filename="../processing/engine/layout.py" line="533" />
       <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
       <translation>Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="526" />
+      <location filename="../processing/engine/layout.py" line="542" />
       <source>The frame gets no units; the estimate cannot speak for it.</source>
       <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="526" />
+      <location filename="../processing/engine/layout.py" line="542" />
       <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
       <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="529" />
+      <location filename="../processing/engine/layout.py" line="545" />
       <source>The frame gets one unit only; its variance cannot be estimated.</source>
       <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="529" />
+      <location filename="../processing/engine/layout.py" line="545" />
       <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
       <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="622" />
+      <location filename="../processing/engine/layout.py" line="638" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="622" />
+      <location filename="../processing/engine/layout.py" line="638" />
       <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
       <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="783" />
+      <location filename="../processing/engine/layout.py" line="799" />
       <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="783" />
+      <location filename="../processing/engine/layout.py" line="799" />
       <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
       <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="801" />
+      <location filename="../processing/engine/layout.py" line="817" />
       <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="801" />
+      <location filename="../processing/engine/layout.py" line="817" />
       <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
       <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="811" />
+      <location filename="../processing/engine/layout.py" line="827" />
       <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="811" />
+      <location filename="../processing/engine/layout.py" line="827" />
       <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
       <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="818" />
+      <location filename="../processing/engine/layout.py" line="834" />
       <source>The frame has only {n} of {r} reserve units.</source>
       <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="818" />
+      <location filename="../processing/engine/layout.py" line="834" />
       <source>Stratum {key} has only {n} of {r} reserve units.</source>
       <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="462" />
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>début du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>début du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>fin du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="921" />
+      <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+      <translation>fin du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>point unit {unit} (primary, stratum {stratum})</source>
+      <translation>unité ponctuelle {unit} (principale, strate {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>point unit {unit} (reserve, stratum {stratum})</source>
+      <translation>unité ponctuelle {unit} (de réserve, strate {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>square unit {unit} (primary, stratum {stratum})</source>
+      <translation>unité carrée {unit} (principale, strate {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>square unit {unit} (reserve, stratum {stratum})</source>
+      <translation>unité carrée {unit} (de réserve, strate {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>circle unit {unit} (primary, stratum {stratum})</source>
+      <translation>unité circulaire {unit} (principale, strate {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/layout.py" line="929" />
+      <source>circle unit {unit} (reserve, stratum {stratum})</source>
+      <translation>unité circulaire {unit} (de réserve, strate {stratum})</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="484" />
       <source>No cell of the frame has a value in every covariate.</source>
       <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="652" />
+      <location filename="../processing/engine/stratification.py" line="674" />
       <source>The covariates take fewer distinct value combinations than strata asked for.</source>
       <translation>Les covariables prennent moins de combinaisons de valeurs distinctes que de strates demandées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="913" />
+      <location filename="../processing/engine/stratification.py" line="935" />
       <source>The frame holds no raster cell.</source>
       <translation>La base de sondage ne contient aucune cellule raster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1107" />
+      <location filename="../processing/engine/stratification.py" line="1127" />
       <source>Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
       <translation>La covariable « {name} » est constante ({value:g}) sur la base de sondage : elle ne peut pas définir de strates. Utilisez une autre covariable, ou vérifiez la base de sondage et le raster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1147" />
+      <location filename="../processing/engine/stratification.py" line="1167" />
       <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
       <translation>METHOD inconnu {method!r} : utilisez 0 (quantiles) à 4 (classes du raster).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1149" />
+      <location filename="../processing/engine/stratification.py" line="1169" />
       <source>Ask for at least 2 strata (STRATA).</source>
       <translation>Demandez au moins 2 strates (STRATA).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1150" />
+      <location filename="../processing/engine/stratification.py" line="1170" />
       <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
       <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables ({names}). Vérifiez que les rasters couvrent la base de sondage et que leur valeur NoData est juste.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1185" />
+      <location filename="../processing/engine/stratification.py" line="1205" />
       <source>Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
       <translation>La covariable « {name} » ne prend que {n_distinct} valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1199" />
+      <location filename="../processing/engine/stratification.py" line="1219" />
       <source>Some boundaries coincide (many cells share the same value of '{name}'); {formed} strata are formed instead of {k}.</source>
       <translation>Certaines limites coïncident (beaucoup de cellules partagent la même valeur de « {name} ») ; {formed} strates sont formées au lieu de {k}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1212" />
+      <location filename="../processing/engine/stratification.py" line="1232" />
       <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
       <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1216" />
+      <location filename="../processing/engine/stratification.py" line="1236" />
       <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
       <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes dans un échantillon de {sample_n} cellules, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1226" />
+      <location filename="../processing/engine/stratification.py" line="1246" />
       <source>Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host's reclassify by table tool), or choose another METHOD.</source>
       <translation>La covariable « {name} » a plus de {max_classes} classes (au moins {n_distinct} valeurs distinctes sur la base de sondage) : reclassez-la d'abord en {max_classes} classes ou moins (par exemple avec l'outil de reclassement par table de l'hôte), ou choisissez une autre METHOD.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1243" />
+      <location filename="../processing/engine/stratification.py" line="1263" />
       <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
       <translation>{dropped} des {k} strates ne contiennent aucune cellule et ont été retirées.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="92" />
+      <location filename="../processing/raster_io.py" line="93" />
       <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
       <translation>La covariable « {name} » ne peut pas être lue ({error}). Vérifiez le fichier.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="95" />
+      <location filename="../processing/raster_io.py" line="96" />
       <source>Covariate '{name}' has no band {band}.</source>
       <translation>La covariable « {name} » n'a pas de bande {band}.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="182" />
+      <location filename="../processing/raster_io.py" line="183" />
       <source>Give at least one raster in COVARIATES.</source>
       <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="214" />
+      <location filename="../processing/raster_io.py" line="215" />
       <source>The frame has no polygon.</source>
       <translation>La base de sondage n'a aucun polygone.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="258" />
+      <location filename="../processing/raster_io.py" line="259" />
       <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
       <translation>La base de sondage ne recouvre pas la covariable « {name} » ({path}). Utilisez un raster qui couvre la base de sondage, ou vérifiez le SCR des deux couches.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="423" />
+      <location filename="../processing/raster_io.py" line="424" />
       <source>Cannot write the stratum raster '{path}'.</source>
       <translation>Impossible d'écrire le raster des strates « {path} ».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="611" />
+      <location filename="../processing/raster_io.py" line="612" />
       <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
       <translation>{merged} strates n'étaient faites que de taches sous MIN_AREA et ont été fusionnées avec leurs voisines.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="623" />
+      <location filename="../processing/raster_io.py" line="624" />
       <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
       <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="648" />
+      <location filename="../processing/raster_io.py" line="649" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="659" />
+      <location filename="../processing/raster_io.py" line="660" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="670" />
+      <location filename="../processing/raster_io.py" line="671" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="101" />
+      <location filename="../processing/raster_masking.py" line="102" />
       <source>The mask raster (MASK) '{source}' cannot be opened by GDAL.</source>
       <translation>Le raster de masque (MASK) « {source} » ne peut pas être ouvert par GDAL.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="150" />
+      <location filename="../processing/raster_masking.py" line="142" />
       <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
       <translation>Le raster de masque (MASK) demanderait {rows} x {cols} cellules sur la zone d'étude, soit plus de {max_cells:,}. Rééchantillonnez d'abord le raster en cellules plus grossières.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="161" />
-      <location filename="../processing/raster_masking.py" line="189" />
+      <location filename="../processing/raster_masking.py" line="153" />
+      <location filename="../processing/raster_masking.py" line="181" />
       <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
       <translation>Le raster de masque (MASK) ne peut pas être reprojeté dans le SCR de calcul.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="223" />
+      <location filename="../processing/raster_masking.py" line="215" />
       <source>GDAL could not turn the masked raster cells into polygons.</source>
       <translation>GDAL n'a pas pu transformer les cellules masquées du raster en polygones.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="263" />
+      <location filename="../processing/raster_masking.py" line="255" />
       <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
       <translation>MASK_MIN ({mask_min:g}) est supérieur à MASK_MAX ({mask_max:g}) ; aucune cellule ne pourrait être gardée. Inversez les deux valeurs ou laissez l'une d'elles vide.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="269" />
+      <location filename="../processing/raster_masking.py" line="261" />
       <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
       <translation>Le raster de masque (MASK) n'a pas de bande {band} ; il en a {count}.</translation>
     </message>

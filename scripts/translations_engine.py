@@ -605,6 +605,46 @@ ENGINE_TRANSLATIONS = {
     ),
 
     # -- layout --------------------------------------------------------------------------------
+    (E, "point unit {unit} (primary, stratum {stratum})"): (
+        "unité ponctuelle {unit} (principale, strate {stratum})",
+        "unidad puntual {unit} (principal, estrato {stratum})",
+    ),
+    (E, "point unit {unit} (reserve, stratum {stratum})"): (
+        "unité ponctuelle {unit} (de réserve, strate {stratum})",
+        "unidad puntual {unit} (de reserva, estrato {stratum})",
+    ),
+    (E, "square unit {unit} (primary, stratum {stratum})"): (
+        "unité carrée {unit} (principale, strate {stratum})",
+        "unidad cuadrada {unit} (principal, estrato {stratum})",
+    ),
+    (E, "square unit {unit} (reserve, stratum {stratum})"): (
+        "unité carrée {unit} (de réserve, strate {stratum})",
+        "unidad cuadrada {unit} (de reserva, estrato {stratum})",
+    ),
+    (E, "circle unit {unit} (primary, stratum {stratum})"): (
+        "unité circulaire {unit} (principale, strate {stratum})",
+        "unidad circular {unit} (principal, estrato {stratum})",
+    ),
+    (E, "circle unit {unit} (reserve, stratum {stratum})"): (
+        "unité circulaire {unit} (de réserve, strate {stratum})",
+        "unidad circular {unit} (de reserva, estrato {stratum})",
+    ),
+    (E, "start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)"): (
+        "début du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)",
+        "inicio del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)",
+    ),
+    (E, "start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)"): (
+        "début du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)",
+        "inicio del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)",
+    ),
+    (E, "end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)"): (
+        "fin du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)",
+        "fin del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)",
+    ),
+    (E, "end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)"): (
+        "fin du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)",
+        "fin del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)",
+    ),
     (E, "DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced)."): (
         "DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).",
         "DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).",

@@ -254,7 +254,8 @@ class LayoutUnits(PlotwiseAlgorithm):
         if gpx_path:
             waypoints = engine.layout_waypoints(result, bridge.crs_wkt(crs))
             kinds = [role for role in result.role for _ in range(2 if spec.shape == engine.LINE else 1)]
-            bridge.write_gpx_waypoints(gpx_path, waypoints.name, waypoints.lon, waypoints.lat, waypoints.description, kinds)
+            descriptions = [self.translate_message(d) for d in waypoints.description]
+            bridge.write_gpx_waypoints(gpx_path, waypoints.name, waypoints.lon, waypoints.lat, descriptions, kinds)
             outputs[self.OUTPUT_GPX] = gpx_path
             feedback.pushInfo(self.tr("{n} waypoints written to {path}").format(n=len(waypoints.name), path=gpx_path))
         feedback.setProgress(90)

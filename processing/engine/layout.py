@@ -104,11 +104,27 @@ _TOO_SMALL = {  # (whole frame?, shape)
                    "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
                    "INSIDE, or merge the stratum with a neighbour.",
 }
+PRIMARY, RESERVE = "primary", "reserve"
+# GPS waypoint descriptions: one template per unit shape and role (and transect end), so that a
+# translator sees each whole phrase; the English text is what the GPX files always carried
+_WAYPOINT_TEXT = {
+    (POINT, PRIMARY): "point unit {unit} (primary, stratum {stratum})",
+    (POINT, RESERVE): "point unit {unit} (reserve, stratum {stratum})",
+    (SQUARE, PRIMARY): "square unit {unit} (primary, stratum {stratum})",
+    (SQUARE, RESERVE): "square unit {unit} (reserve, stratum {stratum})",
+    (CIRCLE, PRIMARY): "circle unit {unit} (primary, stratum {stratum})",
+    (CIRCLE, RESERVE): "circle unit {unit} (reserve, stratum {stratum})",
+}
+_TRANSECT_END_TEXT = {
+    ("start", PRIMARY): "start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)",
+    ("start", RESERVE): "start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)",
+    ("end", PRIMARY): "end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)",
+    ("end", RESERVE): "end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)",
+}
 MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
 # With INSIDE, a warning when the edge band where no centre can fall exceeds this share of a
 # stratum: the estimate then carries the inner part's density over a large unsampled band (our choice).
 EDGE_BAND_WARNING_SHARE = 0.2
-PRIMARY, RESERVE = "primary", "reserve"
 
 
 # ----------------------------------------------------------------------------
@@ -902,7 +918,7 @@ def layout_waypoints(layout, crs):
         y = ends[:, :, 1].ravel()
         names = tuple(n for uid in layout.unit_id for n in (f"{uid}A", f"{uid}B"))
         desc = tuple(
-            f"{what} of transect {uid} ({role}, stratum {s}, bearing {b:.0f} deg)"
+            message(_TRANSECT_END_TEXT[what, role], unit=uid, stratum=1 if s is None else s, bearing=float(b))
             for uid, role, s, b in zip(layout.unit_id, layout.role, layout.stratum, layout.bearing)
             for what in ("start", "end")
         )
@@ -910,7 +926,7 @@ def layout_waypoints(layout, crs):
         x, y = layout.centres[:, 0], layout.centres[:, 1]
         names = tuple(layout.unit_id)
         desc = tuple(
-            f"{SHAPES[layout.spec.shape]} unit {uid} ({role}, stratum {s})"
+            message(_WAYPOINT_TEXT[layout.spec.shape, role], unit=uid, stratum=1 if s is None else s)
             for uid, role, s in zip(layout.unit_id, layout.role, layout.stratum)
         )
     if len(x) == 0:

@@ -159,3 +159,29 @@ def test_allocate_warning_in_french(french_ui):
         "Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.",
     ).format(shown=str(small_fid), minimum=2)
     assert expected in feedback.warnings, feedback.warnings
+
+
+def test_gpx_waypoint_descriptions_in_french(french_ui, tmp_path):
+    import processing
+    from osgeo import ogr
+
+    layer = _squares([("stratum", "int"), ("n_alloc", "int")], [(3000.0, 1, 3), (2000.0, 2, 2)], crs="EPSG:32736")
+    gpx = tmp_path / "units.gpx"
+    result = processing.run("plotwise:layout", {
+        "FRAME": layer, "STRATUM_FIELD": "stratum", "N_FIELD": "n_alloc", "N_UNITS": 0, "DESIGN": 0,
+        "SHAPE": 3, "SIZE": 100.0, "BEARING": 90.0, "INSIDE": True, "MIN_SPACING": 0.0, "RESERVE": 1,
+        "SEED": 5, "OUTPUT": "memory:", "OUTPUT_GPX": str(gpx),
+    })
+    units = {f["unit_id"]: f for f in result["OUTPUT"].getFeatures()}
+    ds = ogr.Open(str(gpx))  # GDAL's GPX driver reads the standard schema back
+    described = {w.GetField("name"): w.GetField("desc") for w in ds.GetLayerByName("waypoints")}
+    ds = None
+    assert len(described) == 2 * len(units)
+    for name, text in described.items():
+        unit = units[name[:-1]]
+        source = "{end} of transect {{unit}} ({role}, stratum {{stratum}}, bearing {{bearing:.0f}} deg)".format(
+            end="start" if name.endswith("A") else "end", role=unit["role"])
+        expected = french("PlotwiseEngine", source).format(unit=unit["unit_id"], stratum=unit["stratum"], bearing=90.0)
+        assert text == expected
+    assert any(t.startswith("début du transect") for t in described.values())
+    assert any("de réserve" in t for t in described.values())
