@@ -105,6 +105,28 @@ def _grid_of(ds, crs_wkt):
     return Grid(tuple(ds.GetGeoTransform()), ds.RasterXSize, ds.RasterYSize, wkt)
 
 
+def read_window(band, col0, row0, cols, rows):
+    """A window of a band as float64, NoData and cells beyond the raster as NaN.
+
+    The window (``cols`` x ``rows`` cells from column ``col0``, row ``row0`` of the
+    band's grid) may reach past the raster's edges. Returns ``(values, covered)``:
+    ``covered`` is True for the cells the raster holds.
+    """
+    values = np.full((rows, cols), np.nan)
+    covered = np.zeros((rows, cols), bool)
+    a0, b0 = max(col0, 0), max(row0, 0)
+    a1, b1 = min(col0 + cols, band.XSize), min(row0 + rows, band.YSize)
+    if a1 > a0 and b1 > b0:
+        part = band.ReadAsArray(a0, b0, a1 - a0, b1 - b0).astype(np.float64)
+        nodata = band.GetNoDataValue()
+        if nodata is not None and not math.isnan(nodata):
+            part[part == nodata] = np.nan
+        inside = (slice(b0 - row0, b1 - row0), slice(a0 - col0, a1 - col0))
+        values[inside] = part
+        covered[inside] = True
+    return values, covered
+
+
 class _WindowReader:
     """Reads windows of the stack grid from a band whose grid lines up with it.
 
@@ -121,21 +143,12 @@ class _WindowReader:
 
     def read(self, xoff, yoff, xsize, ysize, ring=None):
         c0, r0 = xoff + self.col_off, yoff + self.row_off
-        W, H = self.band.XSize, self.band.YSize
-        a0, b0 = max(c0, 0), max(r0, 0)
-        a1, b1 = min(c0 + xsize, W), min(r0 + ysize, H)
-        if (a0, b0, a1, b1) == (c0, r0, c0 + xsize, r0 + ysize):
+        if c0 >= 0 and r0 >= 0 and c0 + xsize <= self.band.XSize and r0 + ysize <= self.band.YSize:
             if ring is None:
                 return self.band.ReadAsArray(c0, r0, xsize, ysize)
             buf = ring.get(id(self), (ysize, xsize), self.dtype)
             return self.band.ReadAsArray(c0, r0, xsize, ysize, buf_obj=buf)
-        out = np.full((ysize, xsize), np.nan)
-        if a1 > a0 and b1 > b0:
-            part = self.band.ReadAsArray(a0, b0, a1 - a0, b1 - b0).astype(np.float64)
-            if self.nodata is not None:
-                part[part == self.nodata] = np.nan
-            out[b0 - r0:b1 - r0, a0 - c0:a1 - c0] = part
-        return out
+        return read_window(self.band, c0, r0, xsize, ysize)[0]
 
 
 class _BufferRing:
@@ -445,11 +458,17 @@ def _fast_compression():
     return ["COMPRESS=DEFLATE", "ZLEVEL=1"]
 
 
-class _GdalProgress:
-    """GDAL progress callback over our ``progress(fraction) -> cancelled``; remembers a cancel."""
+class GdalProgress:
+    """GDAL progress callback over our ``progress(fraction) -> cancelled``; remembers a cancel.
 
-    def __init__(self, progress):
+    GDAL stops when the callback returns 0 (and raises, with exceptions on): call
+    :meth:`check` after the GDAL call, and in its ``except RuntimeError``, to raise
+    :class:`Cancelled` with ``cancel_text`` instead.
+    """
+
+    def __init__(self, progress, cancel_text="Stratification cancelled."):
         self.progress = progress
+        self.cancel_text = cancel_text
         self.cancelled = False
 
     def __call__(self, fraction, message, data):
@@ -460,7 +479,7 @@ class _GdalProgress:
 
     def check(self):
         if self.cancelled:
-            raise Cancelled("Stratification cancelled.")
+            raise Cancelled(self.cancel_text)
 
 
 def remap_strata(path, lut, block_rows=2048, progress=None):
@@ -506,7 +525,7 @@ def sieve_strata(path, min_cells, progress=None):
     band = ds.GetRasterBand(1)
     try:
         for i, t in enumerate(steps):
-            cb = _GdalProgress(strat.scaled_progress(progress, i / len(steps), (i + 1) / len(steps)))
+            cb = GdalProgress(strat.scaled_progress(progress, i / len(steps), (i + 1) / len(steps)))
             try:
                 gdal.SieveFilter(band, band, band, t, 4, callback=cb)
             except RuntimeError:
@@ -526,7 +545,7 @@ def polygonise_strata(path, n_strata, progress=None):
     srs = ds.GetSpatialRef()
     layer = mem.CreateLayer("strata", srs, ogr.wkbPolygon)
     layer.CreateField(ogr.FieldDefn("stratum", ogr.OFTInteger))
-    cb = _GdalProgress(progress)
+    cb = GdalProgress(progress)
     try:
         gdal.Polygonize(band, band, layer, 0, [], callback=cb)
     except RuntimeError:
@@ -659,10 +678,7 @@ def read_surface_window(path, name, surface_wkt, target_wkt, target_label, bound
         if c1 <= c0 or r1 <= r0:
             raise InputError(message("The density surface '{name}' does not overlap the sampling frame. Check that "
                                      "both cover the same area.", name=name))
-        values = band.ReadAsArray(c0, r0, c1 - c0, r1 - r0).astype(np.float64)
-        nodata = band.GetNoDataValue()
-        if nodata is not None:
-            values[values == nodata] = np.nan
+        values, _ = read_window(band, c0, r0, c1 - c0, r1 - r0)
         return values, (gt[0] + c0 * gt[1], gt[1], 0.0, gt[3] + r0 * gt[5], 0.0, gt[5]), False
     try:
         warped = gdal.Warp("", dataset, format="MEM", dstSRS=target_wkt, outputBounds=(minx, miny, maxx, maxy),

@@ -24,7 +24,7 @@ from osgeo import gdal, ogr, osr
 from shapely import wkb
 
 from .engine.errors import Cancelled, InputError, message
-from .raster_io import same_crs
+from .raster_io import GdalProgress, read_window, same_crs
 
 #: Upper limit on the number of cells read over the extent (about 0.6 GB at peak).
 MAX_CELLS = 50_000_000
@@ -119,20 +119,7 @@ def _read_aligned(ds, band_no, extent):
     gt = ds.GetGeoTransform()
     c0, r0, cols, rows = _snapped_grid(extent, gt[0], gt[3], gt[1], gt[5])
     _check_size(rows, cols)
-    values = np.full((rows, cols), np.nan)
-    covered = np.zeros((rows, cols), bool)
-    # overlap of the window with the raster
-    rc0, rr0 = max(c0, 0), max(r0, 0)
-    rc1, rr1 = min(c0 + cols, ds.RasterXSize), min(r0 + rows, ds.RasterYSize)
-    band = ds.GetRasterBand(band_no)
-    if rc1 > rc0 and rr1 > rr0:
-        block = band.ReadAsArray(rc0, rr0, rc1 - rc0, rr1 - rr0).astype(float)
-        nd = band.GetNoDataValue()
-        if nd is not None and not np.isnan(nd):
-            block[block == nd] = np.nan
-        sub = (slice(rr0 - r0, rr1 - r0), slice(rc0 - c0, rc1 - c0))
-        values[sub] = block
-        covered[sub] = True
+    values, covered = read_window(ds.GetRasterBand(band_no), c0, r0, cols, rows)
     out_gt = (gt[0] + c0 * gt[1], gt[1], 0.0, gt[3] + r0 * gt[5], 0.0, gt[5])
     return values, covered, out_gt
 
@@ -200,17 +187,13 @@ def _polygonize(masked, geotransform, target_wkt, progress=None):
     layer = vec.CreateLayer("mask", srs=srs, geom_type=ogr.wkbPolygon)
     layer.CreateField(ogr.FieldDefn("v", ogr.OFTInteger))
 
-    state = {"cancelled": False}
-
-    def callback(complete, message, data):  # GDAL progress protocol: 0 stops
-        if progress is not None and progress(float(complete)):
-            state["cancelled"] = True
-            return 0
-        return 1
-
-    err = gdal.Polygonize(band, band, layer, 0, [], callback=callback)
-    if state["cancelled"]:
-        raise Cancelled("Masking the raster was cancelled.")
+    callback = GdalProgress(progress, "Masking the raster was cancelled.")
+    try:
+        err = gdal.Polygonize(band, band, layer, 0, [], callback=callback)
+    except RuntimeError:  # GDAL with exceptions on: a stop asked by the callback raises too
+        callback.check()
+        raise
+    callback.check()
     if err != 0:
         raise InputError(message("GDAL could not turn the masked raster cells into polygons."))
     polygons = []

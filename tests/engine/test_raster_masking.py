@@ -214,6 +214,9 @@ def test_cancel(utm_raster):
     with pytest.raises(Cancelled):
         rm.mask_polygons(utm_raster[0], (X0, Y0 - 900, X0 + 900, Y0), UTM, None, 30.0,
                          progress=lambda f: True)
+    with pytest.raises(Cancelled):  # a stop asked while GDAL turns the cells into polygons
+        rm.mask_polygons(utm_raster[0], (X0, Y0 - 900, X0 + 900, Y0), UTM, None, 30.0,
+                         progress=lambda f: f > 0.3)
 
 
 def test_crs_given_by_the_caller_overrides_a_missing_one(tmp_path):
