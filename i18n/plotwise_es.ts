@@ -3973,6 +3973,16 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>{dropped} de los {k} estratos no contienen ninguna celda y se quitaron.</translation>
     </message>
     <message>
+      <location filename="../processing/engine/stratification.py" line="1340" />
+      <source>{name} class {value}</source>
+      <translation>{name}: clase {value}</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1342" />
+      <source>mean {values}</source>
+      <translation>media {values}</translation>
+    </message>
+    <message>
       <location filename="../processing/raster_io.py" line="93" />
       <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
       <translation>La covariable «{name}» no puede leerse ({error}). Compruebe el archivo.</translation>
@@ -3983,47 +3993,47 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>La covariable «{name}» no tiene banda {band}.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="183" />
+      <location filename="../processing/raster_io.py" line="196" />
       <source>Give at least one raster in COVARIATES.</source>
       <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="215" />
+      <location filename="../processing/raster_io.py" line="228" />
       <source>The frame has no polygon.</source>
       <translation>El marco de muestreo no tiene ningún polígono.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="259" />
+      <location filename="../processing/raster_io.py" line="272" />
       <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
       <translation>El marco de muestreo no se superpone a la covariable «{name}» ({path}). Use un ráster que cubra el marco, o compruebe el SRC de ambas capas.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="424" />
+      <location filename="../processing/raster_io.py" line="437" />
       <source>Cannot write the stratum raster '{path}'.</source>
       <translation>No se puede escribir el ráster de estratos «{path}».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="612" />
+      <location filename="../processing/raster_io.py" line="631" />
       <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
       <translation>{merged} estratos constaban solo de manchas por debajo de MIN_AREA y se fusionaron con sus vecinos.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="624" />
+      <location filename="../processing/raster_io.py" line="643" />
       <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
       <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="649" />
+      <location filename="../processing/raster_io.py" line="668" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="660" />
+      <location filename="../processing/raster_io.py" line="679" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="671" />
+      <location filename="../processing/raster_io.py" line="687" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>
@@ -4033,28 +4043,28 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>GDAL no puede abrir el ráster de máscara (MASK) «{source}».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="142" />
+      <location filename="../processing/raster_masking.py" line="129" />
       <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
       <translation>El ráster de máscara (MASK) necesitaría {rows} x {cols} celdas sobre el área de estudio, más de {max_cells:,}. Remuestree primero el ráster a celdas más gruesas.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="153" />
-      <location filename="../processing/raster_masking.py" line="181" />
+      <location filename="../processing/raster_masking.py" line="140" />
+      <location filename="../processing/raster_masking.py" line="168" />
       <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
       <translation>El ráster de máscara (MASK) no puede reproyectarse al SRC de cálculo.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="215" />
+      <location filename="../processing/raster_masking.py" line="198" />
       <source>GDAL could not turn the masked raster cells into polygons.</source>
       <translation>GDAL no pudo convertir las celdas enmascaradas del ráster en polígonos.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="255" />
+      <location filename="../processing/raster_masking.py" line="238" />
       <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
       <translation>MASK_MIN ({mask_min:g}) es mayor que MASK_MAX ({mask_max:g}); no podría conservarse ninguna celda. Intercambie los dos valores o deje uno de ellos vacío.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="261" />
+      <location filename="../processing/raster_masking.py" line="244" />
       <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
       <translation>El ráster de máscara (MASK) no tiene banda {band}; tiene {count}.</translation>
     </message>

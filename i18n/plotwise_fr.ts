@@ -3973,6 +3973,16 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>{dropped} des {k} strates ne contiennent aucune cellule et ont été retirées.</translation>
     </message>
     <message>
+      <location filename="../processing/engine/stratification.py" line="1340" />
+      <source>{name} class {value}</source>
+      <translation>{name} : classe {value}</translation>
+    </message>
+    <message>
+      <location filename="../processing/engine/stratification.py" line="1342" />
+      <source>mean {values}</source>
+      <translation>moyenne {values}</translation>
+    </message>
+    <message>
       <location filename="../processing/raster_io.py" line="93" />
       <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
       <translation>La covariable « {name} » ne peut pas être lue ({error}). Vérifiez le fichier.</translation>
@@ -3983,47 +3993,47 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>La covariable « {name} » n'a pas de bande {band}.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="183" />
+      <location filename="../processing/raster_io.py" line="196" />
       <source>Give at least one raster in COVARIATES.</source>
       <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="215" />
+      <location filename="../processing/raster_io.py" line="228" />
       <source>The frame has no polygon.</source>
       <translation>La base de sondage n'a aucun polygone.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="259" />
+      <location filename="../processing/raster_io.py" line="272" />
       <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
       <translation>La base de sondage ne recouvre pas la covariable « {name} » ({path}). Utilisez un raster qui couvre la base de sondage, ou vérifiez le SCR des deux couches.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="424" />
+      <location filename="../processing/raster_io.py" line="437" />
       <source>Cannot write the stratum raster '{path}'.</source>
       <translation>Impossible d'écrire le raster des strates « {path} ».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="612" />
+      <location filename="../processing/raster_io.py" line="631" />
       <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
       <translation>{merged} strates n'étaient faites que de taches sous MIN_AREA et ont été fusionnées avec leurs voisines.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="624" />
+      <location filename="../processing/raster_io.py" line="643" />
       <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
       <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="649" />
+      <location filename="../processing/raster_io.py" line="668" />
       <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
       <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="660" />
+      <location filename="../processing/raster_io.py" line="679" />
       <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
       <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="671" />
+      <location filename="../processing/raster_io.py" line="687" />
       <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
       <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>
@@ -4033,28 +4043,28 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>Le raster de masque (MASK) « {source} » ne peut pas être ouvert par GDAL.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="142" />
+      <location filename="../processing/raster_masking.py" line="129" />
       <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
       <translation>Le raster de masque (MASK) demanderait {rows} x {cols} cellules sur la zone d'étude, soit plus de {max_cells:,}. Rééchantillonnez d'abord le raster en cellules plus grossières.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="153" />
-      <location filename="../processing/raster_masking.py" line="181" />
+      <location filename="../processing/raster_masking.py" line="140" />
+      <location filename="../processing/raster_masking.py" line="168" />
       <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
       <translation>Le raster de masque (MASK) ne peut pas être reprojeté dans le SCR de calcul.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="215" />
+      <location filename="../processing/raster_masking.py" line="198" />
       <source>GDAL could not turn the masked raster cells into polygons.</source>
       <translation>GDAL n'a pas pu transformer les cellules masquées du raster en polygones.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="255" />
+      <location filename="../processing/raster_masking.py" line="238" />
       <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
       <translation>MASK_MIN ({mask_min:g}) est supérieur à MASK_MAX ({mask_max:g}) ; aucune cellule ne pourrait être gardée. Inversez les deux valeurs ou laissez l'une d'elles vide.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="261" />
+      <location filename="../processing/raster_masking.py" line="244" />
       <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
       <translation>Le raster de masque (MASK) n'a pas de bande {band} ; il en a {count}.</translation>
     </message>

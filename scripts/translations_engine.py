@@ -604,6 +604,10 @@ ENGINE_TRANSLATIONS = {
         "(extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.",
     ),
 
+    # -- stratum labels (the label field) -------------------------------------------------------
+    (E, "{name} class {value}"): ("{name} : classe {value}", "{name}: clase {value}"),
+    (E, "mean {values}"): ("moyenne {values}", "media {values}"),
+
     # -- layout --------------------------------------------------------------------------------
     (E, "point unit {unit} (primary, stratum {stratum})"): (
         "unité ponctuelle {unit} (principale, strate {stratum})",

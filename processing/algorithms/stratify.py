@@ -202,7 +202,7 @@ class Stratify(PlotwiseAlgorithm):
         shapes = [shapely_wkb.loads(bytes(blob)) for blob in result.polygons]
         rows = []
         for h in range(k):
-            row = [h + 1, result.labels[h], float(result.area_ha[h])]
+            row = [h + 1, self.translate_message(result.labels[h]), float(result.area_ha[h])]
             for c in range(len(covariates)):
                 row += [float(stats.mean[h, c]), float(stats.sd[h, c])]
             rows.append(row)
@@ -255,7 +255,7 @@ class Stratify(PlotwiseAlgorithm):
             header += [tr("{name} mean").format(name=name) + u, tr("{name} SD").format(name=name) + u]
         rows = []
         for h in range(k):
-            row = [h + 1, result.labels[h], float(result.area_ha[h]), 100 * float(result.area_ha[h]) / covered_ha,
+            row = [h + 1, self.translate_message(result.labels[h]), float(result.area_ha[h]), 100 * float(result.area_ha[h]) / covered_ha,
                    int(stats.count[h])]
             for c in range(len(names)):
                 row += [float(stats.mean[h, c]), float(stats.sd[h, c])]
@@ -325,7 +325,7 @@ class Stratify(PlotwiseAlgorithm):
                    "covariate).").format(name=names[0]))
 
         report.section(tr("Map"))
-        report.figure(self._map(shapes, frame_polygons, result.labels), tr("Strata within the sampling frame"))
+        report.figure(self._map(shapes, frame_polygons, [self.translate_message(label) for label in result.labels]), tr("Strata within the sampling frame"))
 
         report.section(tr("Coverage"))
         cell = result.grid.cell_area

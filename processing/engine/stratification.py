@@ -1321,7 +1321,7 @@ def stratum_labels(result, names, units=None):
 
     Threshold methods give the first covariate's range of the stratum;
     k-means gives the stratum's mean of every covariate; raster classes give
-    the class value.
+    the class value. The words of the last two are translatable messages.
     """
     units = list(units) if units is not None else [""] * len(names)
 
@@ -1337,8 +1337,8 @@ def stratum_labels(result, names, units=None):
     if isinstance(result.rule, ClassRule):
         values = np.asarray(result.rule.classes, float)[result.provisional]
         d = display_decimals(values)
-        return ["%s class %s" % (names[0], format_covariate_value(v, d)) for v in values]
+        return [message("{name} class {value}", name=names[0], value=format_covariate_value(v, d)) for v in values]
     decs = [display_decimals(st.mean[:, c]) for c in range(len(names))]
-    return ["mean " + ", ".join("%s %s%s" % (names[c], format_covariate_value(st.mean[h, c], decs[c]), unit(c))
-                                for c in range(len(names)))
-            for h in range(st.n_strata)]
+    return [message("mean {values}", values=", ".join(
+        "%s %s%s" % (names[c], format_covariate_value(st.mean[h, c], decs[c]), unit(c)) for c in range(len(names))))
+        for h in range(st.n_strata)]

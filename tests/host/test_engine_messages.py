@@ -185,3 +185,27 @@ def test_gpx_waypoint_descriptions_in_french(french_ui, tmp_path):
         assert text == expected
     assert any(t.startswith("début du transect") for t in described.values())
     assert any("de réserve" in t for t in described.values())
+
+
+def test_raster_class_labels_in_french(french_ui, tmp_path):
+    import numpy as np
+    import processing
+    from osgeo import gdal, osr
+
+    path = str(tmp_path / "cover.tif")  # two invented cover classes, 10 and 20, on 20 m cells
+    ds = gdal.GetDriverByName("GTiff").Create(path, 40, 30, 1, gdal.GDT_Byte)
+    ds.SetGeoTransform((500000.0, 20.0, 0.0, 9000600.0, 0.0, -20.0))
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(32736)
+    ds.SetProjection(srs.ExportToWkt())
+    ds.GetRasterBand(1).WriteArray(np.where(np.arange(40)[None, :] < 20, 10, 20).repeat(30, axis=0).astype(np.uint8))
+    ds = None
+    frame = _squares([("id", "int")], [(600.0, 1)], crs="EPSG:32736")
+    result = processing.run("plotwise:stratify", {
+        "FRAME": frame, "COVARIATES": [path], "METHOD": 4, "STRATA": 2, "MIN_AREA": 0.0, "SEED": 1,
+        "OUTPUT_RASTER": str(tmp_path / "classes.tif"), "OUTPUT": "memory:",
+    })
+    labels = sorted(f["label"] for f in result["OUTPUT"].getFeatures())
+    template = french("PlotwiseEngine", "{name} class {value}")
+    assert labels == [template.format(name="cover", value=v) for v in ("10", "20")]
+    assert "classe" in template
