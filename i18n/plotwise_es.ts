@@ -94,7 +94,7 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="119" />
-      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <location filename="../processing/algorithms/allocate.py" line="280" />
       <source>Neyman</source>
       <translation>Neyman</translation>
     </message>
@@ -125,7 +125,7 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="148" />
-      <location filename="../processing/algorithms/allocate.py" line="307" />
+      <location filename="../processing/algorithms/allocate.py" line="311" />
       <source>Minimum units per stratum</source>
       <translation>Mínimo de unidades por estrato</translation>
     </message>
@@ -181,7 +181,7 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="233" />
-      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <location filename="../processing/algorithms/allocate.py" line="298" />
       <source>cost</source>
       <translation>coste</translation>
     </message>
@@ -196,257 +196,257 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
       <translation>{total} unidades asignadas ({method}); CV esperado de la densidad global: {cv}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="284" />
-      <source>Allocation of survey effort</source>
-      <translation>Asignación del esfuerzo de muestreo</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <location filename="../processing/algorithms/allocate.py" line="279" />
       <source>equal</source>
       <translation>igual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <location filename="../processing/algorithms/allocate.py" line="279" />
       <source>proportional to area</source>
       <translation>proporcional al área</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <location filename="../processing/algorithms/allocate.py" line="280" />
       <source>optimal with cost</source>
       <translation>óptima con coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <location filename="../processing/algorithms/allocate.py" line="291" />
+      <source>Allocation of survey effort</source>
+      <translation>Asignación del esfuerzo de muestreo</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="293" />
       <source>field days</source>
       <translation>jornadas de campo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <location filename="../processing/algorithms/allocate.py" line="293" />
       <source>cost units</source>
       <translation>unidades de coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <location filename="../processing/algorithms/allocate.py" line="294" />
       <source>units in total</source>
       <translation>unidades en total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <location filename="../processing/algorithms/allocate.py" line="294" />
       <source>method</source>
       <translation>método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="292" />
+      <location filename="../processing/algorithms/allocate.py" line="296" />
       <source>expected CV of the overall density</source>
       <translation>CV esperado de la densidad global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <location filename="../processing/algorithms/allocate.py" line="298" />
       <source>field days needed</source>
       <translation>jornadas de campo necesarias</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <location filename="../processing/algorithms/allocate.py" line="300" />
       <source>a total number of units</source>
       <translation>un número total de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <location filename="../processing/algorithms/allocate.py" line="300" />
       <source>a budget</source>
       <translation>un presupuesto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <location filename="../processing/algorithms/allocate.py" line="300" />
       <source>a target CV</source>
       <translation>un CV objetivo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="298" />
+      <location filename="../processing/algorithms/allocate.py" line="302" />
       <source>Strata layer</source>
       <translation>Capa de estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="299" />
+      <location filename="../processing/algorithms/allocate.py" line="303" />
       <source>Computation CRS</source>
       <translation>SRC de cálculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="300" />
+      <location filename="../processing/algorithms/allocate.py" line="304" />
       <source>Method asked for</source>
       <translation>Método solicitado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="301" />
+      <location filename="../processing/algorithms/allocate.py" line="305" />
       <source>Method applied</source>
       <translation>Método aplicado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="302" />
+      <location filename="../processing/algorithms/allocate.py" line="306" />
       <source>Target</source>
       <translation>Objetivo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
+      <location filename="../processing/algorithms/allocate.py" line="307" />
       <source>Total asked for</source>
       <translation>Total solicitado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="304" />
+      <location filename="../processing/algorithms/allocate.py" line="308" />
       <source>Budget</source>
       <translation>Presupuesto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="305" />
+      <location filename="../processing/algorithms/allocate.py" line="309" />
       <source>Target CV</source>
       <translation>CV objetivo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="306" />
+      <location filename="../processing/algorithms/allocate.py" line="310" />
       <source>Unit area (m²)</source>
       <translation>Área de la unidad (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <location filename="../processing/algorithms/allocate.py" line="312" />
       <source>SD field</source>
       <translation>Campo de DE</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <location filename="../processing/algorithms/allocate.py" line="312" />
       <source> (covariate proxy)</source>
       <translation> (sustituto por la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="309" />
+      <location filename="../processing/algorithms/allocate.py" line="313" />
       <source>Mean field</source>
       <translation>Campo de media</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="310" />
+      <location filename="../processing/algorithms/allocate.py" line="314" />
       <source>Cost field</source>
       <translation>Campo de coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="311" />
+      <location filename="../processing/algorithms/allocate.py" line="315" />
       <source>Fixed cost c0</source>
       <translation>Coste fijo c0</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="315" />
+      <location filename="../processing/algorithms/allocate.py" line="319" />
       <source>Units per stratum</source>
       <translation>Unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <location filename="../processing/algorithms/allocate.py" line="320" />
       <source>SE of mean per unit (covariate units)</source>
       <translation>Error estándar de la media por unidad (unidades de la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <location filename="../processing/algorithms/allocate.py" line="320" />
       <source>SE of mean count per unit</source>
       <translation>Error estándar del conteo medio por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Units that fit</source>
       <translation>Unidades que caben</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Lower bound</source>
       <translation>Límite inferior</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Share before rounding</source>
       <translation>Cuota antes del redondeo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <location filename="../processing/algorithms/allocate.py" line="322" />
       <source>Units (n_alloc)</source>
       <translation>Unidades (n_alloc)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <location filename="../processing/algorithms/allocate.py" line="322" />
       <source>Sampling fraction</source>
       <translation>Fracción de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="322" />
+      <location filename="../processing/algorithms/allocate.py" line="326" />
       <source>SE of density (per km²)</source>
       <translation>Error estándar de la densidad (por km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
+      <location filename="../processing/algorithms/allocate.py" line="328" />
       <source>Expected CV (exp_cv)</source>
       <translation>CV esperado (exp_cv)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="336" />
+      <location filename="../processing/algorithms/allocate.py" line="340" />
       <source>all strata</source>
       <translation>todos los estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="347" />
+      <location filename="../processing/algorithms/allocate.py" line="351" />
       <source>units per stratum</source>
       <translation>unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="348" />
+      <location filename="../processing/algorithms/allocate.py" line="352" />
       <source>Units allocated to each stratum</source>
       <translation>Unidades asignadas a cada estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="350" />
+      <location filename="../processing/algorithms/allocate.py" line="354" />
       <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
       <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="356" />
+      <location filename="../processing/algorithms/allocate.py" line="360" />
       <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
       <translation>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <location filename="../processing/algorithms/allocate.py" line="361" />
       <source>Field days needed</source>
       <translation>Jornadas de campo necesarias</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <location filename="../processing/algorithms/allocate.py" line="361" />
       <source>Cost of the design</source>
       <translation>Coste del diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="362" />
+      <location filename="../processing/algorithms/allocate.py" line="366" />
       <source>What the choice of method buys, at {n} units</source>
       <translation>Lo que aporta la elección del método, con {n} unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <location filename="../processing/algorithms/allocate.py" line="367" />
       <source>Method</source>
       <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <location filename="../processing/algorithms/allocate.py" line="367" />
       <source>stratum {label}</source>
       <translation>estrato {label}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="365" />
+      <location filename="../processing/algorithms/allocate.py" line="369" />
       <source>Variance relative to the applied allocation</source>
       <translation>Varianza relativa a la asignación aplicada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="367" />
+      <location filename="../processing/algorithms/allocate.py" line="371" />
       <source>Expected CV</source>
       <translation>CV esperado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="378" />
+      <location filename="../processing/algorithms/allocate.py" line="382" />
       <source>Without standard deviations the precision of the designs cannot be compared.</source>
       <translation>Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
     </message>
@@ -4072,7 +4072,17 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
   <context>
     <name>PlotwisePlugin</name>
     <message>
-      <location filename="../plugin/plugin.py" line="51" />
+      <location filename="../plugin/plugin.py" line="53" />
+      <source>{name} is missing ({error}).</source>
+      <translation>Falta {name} ({error}).</translation>
+    </message>
+    <message>
+      <location filename="../plugin/plugin.py" line="54" />
+      <source>{name} {version} is too old; version {wanted} or newer is needed.</source>
+      <translation>{name} {version} es demasiado antiguo; se necesita la versión {wanted} o posterior.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/plugin.py" line="58" />
       <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
       <translation>Plotwise no puede iniciarse porque falta una biblioteca necesaria o es demasiado antigua: {problems} Instale los paquetes estándar del anfitrión (en Debian o Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) y reinicie QGIS. No se ha añadido ningún algoritmo de Plotwise.</translation>
     </message>

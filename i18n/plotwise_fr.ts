@@ -94,7 +94,7 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="119" />
-      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <location filename="../processing/algorithms/allocate.py" line="280" />
       <source>Neyman</source>
       <translation>Neyman</translation>
     </message>
@@ -125,7 +125,7 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="148" />
-      <location filename="../processing/algorithms/allocate.py" line="307" />
+      <location filename="../processing/algorithms/allocate.py" line="311" />
       <source>Minimum units per stratum</source>
       <translation>Nombre minimal d'unités par strate</translation>
     </message>
@@ -181,7 +181,7 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
     </message>
     <message>
       <location filename="../processing/algorithms/allocate.py" line="233" />
-      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <location filename="../processing/algorithms/allocate.py" line="298" />
       <source>cost</source>
       <translation>coût</translation>
     </message>
@@ -196,257 +196,257 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
       <translation>{total} unités allouées ({method}) ; CV attendu de la densité globale : {cv}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="284" />
-      <source>Allocation of survey effort</source>
-      <translation>Allocation de l'effort d'inventaire</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <location filename="../processing/algorithms/allocate.py" line="279" />
       <source>equal</source>
       <translation>égale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="286" />
+      <location filename="../processing/algorithms/allocate.py" line="279" />
       <source>proportional to area</source>
       <translation>proportionnelle à la surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="287" />
+      <location filename="../processing/algorithms/allocate.py" line="280" />
       <source>optimal with cost</source>
       <translation>optimale avec coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <location filename="../processing/algorithms/allocate.py" line="291" />
+      <source>Allocation of survey effort</source>
+      <translation>Allocation de l'effort d'inventaire</translation>
+    </message>
+    <message>
+      <location filename="../processing/algorithms/allocate.py" line="293" />
       <source>field days</source>
       <translation>jours de terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="289" />
+      <location filename="../processing/algorithms/allocate.py" line="293" />
       <source>cost units</source>
       <translation>unités de coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <location filename="../processing/algorithms/allocate.py" line="294" />
       <source>units in total</source>
       <translation>unités au total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="290" />
+      <location filename="../processing/algorithms/allocate.py" line="294" />
       <source>method</source>
       <translation>méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="292" />
+      <location filename="../processing/algorithms/allocate.py" line="296" />
       <source>expected CV of the overall density</source>
       <translation>CV attendu de la densité globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="294" />
+      <location filename="../processing/algorithms/allocate.py" line="298" />
       <source>field days needed</source>
       <translation>jours de terrain nécessaires</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <location filename="../processing/algorithms/allocate.py" line="300" />
       <source>a total number of units</source>
       <translation>un nombre total d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <location filename="../processing/algorithms/allocate.py" line="300" />
       <source>a budget</source>
       <translation>un budget</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
+      <location filename="../processing/algorithms/allocate.py" line="300" />
       <source>a target CV</source>
       <translation>un CV cible</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="298" />
+      <location filename="../processing/algorithms/allocate.py" line="302" />
       <source>Strata layer</source>
       <translation>Couche des strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="299" />
+      <location filename="../processing/algorithms/allocate.py" line="303" />
       <source>Computation CRS</source>
       <translation>SCR de calcul</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="300" />
+      <location filename="../processing/algorithms/allocate.py" line="304" />
       <source>Method asked for</source>
       <translation>Méthode demandée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="301" />
+      <location filename="../processing/algorithms/allocate.py" line="305" />
       <source>Method applied</source>
       <translation>Méthode appliquée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="302" />
+      <location filename="../processing/algorithms/allocate.py" line="306" />
       <source>Target</source>
       <translation>Objectif</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
+      <location filename="../processing/algorithms/allocate.py" line="307" />
       <source>Total asked for</source>
       <translation>Total demandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="304" />
+      <location filename="../processing/algorithms/allocate.py" line="308" />
       <source>Budget</source>
       <translation>Budget</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="305" />
+      <location filename="../processing/algorithms/allocate.py" line="309" />
       <source>Target CV</source>
       <translation>CV cible</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="306" />
+      <location filename="../processing/algorithms/allocate.py" line="310" />
       <source>Unit area (m²)</source>
       <translation>Surface d'une unité (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <location filename="../processing/algorithms/allocate.py" line="312" />
       <source>SD field</source>
       <translation>Champ d'écart-type</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="308" />
+      <location filename="../processing/algorithms/allocate.py" line="312" />
       <source> (covariate proxy)</source>
       <translation> (substitut par la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="309" />
+      <location filename="../processing/algorithms/allocate.py" line="313" />
       <source>Mean field</source>
       <translation>Champ de moyenne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="310" />
+      <location filename="../processing/algorithms/allocate.py" line="314" />
       <source>Cost field</source>
       <translation>Champ de coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="311" />
+      <location filename="../processing/algorithms/allocate.py" line="315" />
       <source>Fixed cost c0</source>
       <translation>Coût fixe c0</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="315" />
+      <location filename="../processing/algorithms/allocate.py" line="319" />
       <source>Units per stratum</source>
       <translation>Unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <location filename="../processing/algorithms/allocate.py" line="320" />
       <source>SE of mean per unit (covariate units)</source>
       <translation>Erreur type de la moyenne par unité (unités de la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="316" />
+      <location filename="../processing/algorithms/allocate.py" line="320" />
       <source>SE of mean count per unit</source>
       <translation>Erreur type du comptage moyen par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Units that fit</source>
       <translation>Unités qui y tiennent</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Lower bound</source>
       <translation>Borne inférieure</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
+      <location filename="../processing/algorithms/allocate.py" line="321" />
       <source>Share before rounding</source>
       <translation>Part avant arrondi</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <location filename="../processing/algorithms/allocate.py" line="322" />
       <source>Units (n_alloc)</source>
       <translation>Unités (n_alloc)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="318" />
+      <location filename="../processing/algorithms/allocate.py" line="322" />
       <source>Sampling fraction</source>
       <translation>Fraction d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="322" />
+      <location filename="../processing/algorithms/allocate.py" line="326" />
       <source>SE of density (per km²)</source>
       <translation>Erreur type de la densité (par km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
+      <location filename="../processing/algorithms/allocate.py" line="328" />
       <source>Expected CV (exp_cv)</source>
       <translation>CV attendu (exp_cv)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="336" />
+      <location filename="../processing/algorithms/allocate.py" line="340" />
       <source>all strata</source>
       <translation>toutes les strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="347" />
+      <location filename="../processing/algorithms/allocate.py" line="351" />
       <source>units per stratum</source>
       <translation>unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="348" />
+      <location filename="../processing/algorithms/allocate.py" line="352" />
       <source>Units allocated to each stratum</source>
       <translation>Unités allouées à chaque strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="350" />
+      <location filename="../processing/algorithms/allocate.py" line="354" />
       <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
       <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="356" />
+      <location filename="../processing/algorithms/allocate.py" line="360" />
       <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
       <translation>{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <location filename="../processing/algorithms/allocate.py" line="361" />
       <source>Field days needed</source>
       <translation>Jours de terrain nécessaires</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="357" />
+      <location filename="../processing/algorithms/allocate.py" line="361" />
       <source>Cost of the design</source>
       <translation>Coût du plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="362" />
+      <location filename="../processing/algorithms/allocate.py" line="366" />
       <source>What the choice of method buys, at {n} units</source>
       <translation>Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <location filename="../processing/algorithms/allocate.py" line="367" />
       <source>Method</source>
       <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="363" />
+      <location filename="../processing/algorithms/allocate.py" line="367" />
       <source>stratum {label}</source>
       <translation>strate {label}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="365" />
+      <location filename="../processing/algorithms/allocate.py" line="369" />
       <source>Variance relative to the applied allocation</source>
       <translation>Variance relative à l'allocation appliquée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="367" />
+      <location filename="../processing/algorithms/allocate.py" line="371" />
       <source>Expected CV</source>
       <translation>CV attendu</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="378" />
+      <location filename="../processing/algorithms/allocate.py" line="382" />
       <source>Without standard deviations the precision of the designs cannot be compared.</source>
       <translation>Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
     </message>
@@ -4072,7 +4072,17 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
   <context>
     <name>PlotwisePlugin</name>
     <message>
-      <location filename="../plugin/plugin.py" line="51" />
+      <location filename="../plugin/plugin.py" line="53" />
+      <source>{name} is missing ({error}).</source>
+      <translation>{name} est absent ({error}).</translation>
+    </message>
+    <message>
+      <location filename="../plugin/plugin.py" line="54" />
+      <source>{name} {version} is too old; version {wanted} or newer is needed.</source>
+      <translation>{name} {version} est trop ancien ; il faut la version {wanted} ou plus récente.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/plugin.py" line="58" />
       <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
       <translation>Plotwise ne peut pas démarrer car une bibliothèque nécessaire est absente ou trop ancienne : {problems} Installez les paquets standard de l'hôte (sous Debian ou Ubuntu : python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) et redémarrez QGIS. Aucun algorithme Plotwise n'a été ajouté.</translation>
     </message>

@@ -47,13 +47,20 @@ class PlotwisePlugin:
         remove_translator(self.translator)
         self.translator = None
 
+    @staticmethod
+    def _problem_text(problem):
+        if problem.missing:
+            return tr("{name} is missing ({error}).").format(name=problem.name, error=problem.error)
+        return tr("{name} {version} is too old; version {wanted} or newer is needed.").format(
+            name=problem.name, version=problem.version, wanted=problem.wanted)
+
     def _explain_missing(self):
         text = tr(
             "Plotwise cannot start because a library it needs is missing or too old: {problems} "
             "Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, "
             "python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. "
             "No Plotwise algorithm has been added."
-        ).format(problems=" ".join(self.problems))
+        ).format(problems=" ".join(self._problem_text(p) for p in self.problems))
         QgsMessageLog.logMessage(text, LOG_TAG, compat.LEVEL_CRITICAL)
         if self.iface is not None:
             try:

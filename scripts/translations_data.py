@@ -28,6 +28,11 @@ TRANSLATIONS.update({
         "Instale los paquetes estándar del anfitrión (en Debian o Ubuntu: python3-numpy, python3-scipy, "
         "python3-shapely, python3-pyproj, python3-gdal) y reinicie QGIS. No se ha añadido ningún algoritmo de Plotwise.",
     ),
+    "{name} is missing ({error}).": ("{name} est absent ({error}).", "Falta {name} ({error})."),
+    "{name} {version} is too old; version {wanted} or newer is needed.": (
+        "{name} {version} est trop ancien ; il faut la version {wanted} ou plus récente.",
+        "{name} {version} es demasiado antiguo; se necesita la versión {wanted} o posterior.",
+    ),
     "Plotwise": ("Plotwise", "Plotwise"),
     "Plotwise survey design and estimation": (
         "Plotwise : conception d'inventaires et estimation",

@@ -265,7 +265,7 @@ class Allocate(PlotwiseAlgorithm):
         report_path = self.write_report(report, parameters, context, feedback)
         feedback.pushInfo(
             self.tr("{total} units allocated ({method}); expected CV of the overall density: {cv}.").format(
-                total=result.total, method=result.method_used,
+                total=result.total, method=self._method_names()[result.method_used],
                 cv="–" if overall_cv is None else f"{overall_cv:.3f}")
         )
         feedback.setProgress(100)
@@ -273,6 +273,13 @@ class Allocate(PlotwiseAlgorithm):
         return {self.OUTPUT: dest_id, self.REPORT: report_path, self.EXPECTED_CV: overall_cv}
 
     # ------------------------------------------------------------------------------
+    def _method_names(self):
+        """The allocation methods (engine keys) in the user's language."""
+        return {
+            "equal": self.tr("equal"), "proportional": self.tr("proportional to area"),
+            "neyman": self.tr("Neyman"), "optimal_cost": self.tr("optimal with cost"),
+        }
+
     def _report(self, result, labels, layer, crs, unit_area_m2, sd_field, sd_proxy, mean_field, cost_field,
                 cost_in_days, settings, warnings):
         tr = self.tr
@@ -282,10 +289,7 @@ class Allocate(PlotwiseAlgorithm):
         # density SE per km² (areas are in ha in the engine)
         se_km2 = p.se_density / KM2_PER_HA
         report = self.new_report(tr("Allocation of survey effort"))
-        method_names = {
-            "equal": tr("equal"), "proportional": tr("proportional to area"),
-            "neyman": tr("Neyman"), "optimal_cost": tr("optimal with cost"),
-        }
+        method_names = self._method_names()
         cost_unit = tr("field days") if cost_in_days else tr("cost units")
         figures = [(tr("units in total"), f"{result.total:,}"), (tr("method"), method_names[result.method_used])]
         if with_mean and np.isfinite(p.cv):

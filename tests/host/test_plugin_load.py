@@ -1,5 +1,6 @@
 """Loading the plugin the way the host does: provider registration, unload, missing libraries."""
 import json
+import os
 import subprocess
 import sys
 import textwrap
@@ -69,7 +70,9 @@ def _load_plugin(tmp_path, block_shapely):
     """Load the plugin as the host does, in a fresh process (unload deletes what it added)."""
     path = tmp_path / "load_plugin.py"
     path.write_text(LOADER.format(block=block_shapely))
-    run = subprocess.run([sys.executable, str(path)], capture_output=True, text=True, timeout=120)
+    private = str(tmp_path / "qgis")  # a fresh QGIS profile: the host's default (English) user interface
+    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=private, QGIS_OPTIONS_PATH=private)
+    run = subprocess.run([sys.executable, str(path)], capture_output=True, text=True, timeout=120, env=env)
     assert run.returncode == 0, run.stderr
     assert "Traceback" not in run.stderr, run.stderr
     line = next(l for l in run.stdout.splitlines() if l.startswith("RESULT "))

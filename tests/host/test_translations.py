@@ -86,7 +86,11 @@ def _toolbox(tmp_path_factory, locale, override=True):
     folder = tmp_path_factory.mktemp(f"locale_{locale}")
     script = folder / "toolbox.py"
     script.write_text(LOADER.format(tests=str(REPO / "tests"), locale=locale, override=override))
-    env = dict(os.environ, XDG_CONFIG_HOME=str(folder / "config"), HOME=str(folder))  # private QgsSettings
+    # private QgsSettings: pytest-qgis points QGIS_CUSTOM_CONFIG_PATH at the shared test profile, which the
+    # locale set here must not reach (later processes would start in that language)
+    private = str(folder / "qgis")
+    env = dict(os.environ, XDG_CONFIG_HOME=str(folder / "config"), HOME=str(folder),
+               QGIS_CUSTOM_CONFIG_PATH=private, QGIS_OPTIONS_PATH=private)
     run = subprocess.run([sys.executable, str(script)], capture_output=True, text=True, timeout=180, env=env)
     assert run.returncode == 0, run.stderr
     line = next((l for l in run.stdout.splitlines() if l.startswith("RESULT ")), None)
