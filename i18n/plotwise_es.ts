@@ -1609,12 +1609,12 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
   <context>
     <name>Estimate</name>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="107" />
+      <location filename="../processing/algorithms/estimate.py" line="109" />
       <source>Estimate density and abundance</source>
       <translation>Estimar la densidad y la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="110" />
+      <location filename="../processing/algorithms/estimate.py" line="112" />
       <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
 
 Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
@@ -1625,7 +1625,7 @@ Unit area (m²): the unit area field (default area_m2, as the layout writes it) 
 
 Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is collapsed with a neighbour for its variance (Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so.
 
-Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a stratified percentile bootstrap of 2,000 resamples (seeded).
+Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a rescaled stratified percentile bootstrap of 2,000 resamples (seeded; Rao &amp; Wu 1988), which carries the finite-population correction.
 
 Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance.
 
@@ -1648,7 +1648,7 @@ Conteos: un conteo NULL significa que la unidad no se muestreó: se deja fuera y
 
 Estratos: polígonos con un campo identificador que corresponde al campo de estrato de las unidades; sus áreas definen el marco. Cuando las unidades no tienen campo de estrato, o la capa de estratos es un solo polígono sin campo identificador, todas las unidades forman un solo estrato sobre el marco. Un estrato con una sola unidad muestreada se agrupa con un vecino para su varianza (Cochran 1977, §5A.12), con una advertencia. Un estrato sin ninguna es un error, salvo que decida dejarlo fuera: entonces el marco se reduce y el informe lo indica.
 
-Intervalos: t con los grados de libertad de Satterthwaite (Satterthwaite 1946; Cochran 1977); log-normal, de N/C a N·C con C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); o un bootstrap estratificado de percentiles con 2.000 remuestreos (con semilla).
+Intervalos: t con los grados de libertad de Satterthwaite (Satterthwaite 1946; Cochran 1977); log-normal, de N/C a N·C con C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); o un bootstrap estratificado de percentiles reescalado con 2.000 remuestreos (con semilla; Rao &amp; Wu 1988), que incluye la corrección por población finita.
 
 Varianza: la fórmula del muestreo aleatorio simple, o el estimador de vecindario local (Stevens &amp; Olsen 2003) para cuadrículas sistemáticas y disposiciones espacialmente equilibradas, donde la fórmula simple sobrestima la varianza.
 
@@ -1663,681 +1663,681 @@ Total verdadero: solo para simulaciones y formación. El informe lo muestra ento
 Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="153" />
+      <location filename="../processing/algorithms/estimate.py" line="156" />
       <source>Sample units with counts</source>
       <translation>Unidades de muestreo con conteos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="155" />
-      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <location filename="../processing/algorithms/estimate.py" line="158" />
+      <location filename="../processing/algorithms/estimate.py" line="488" />
       <source>Count field</source>
       <translation>Campo de conteo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="157" />
+      <location filename="../processing/algorithms/estimate.py" line="160" />
       <source>Stratum field of the units</source>
       <translation>Campo de estrato de las unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="160" />
+      <location filename="../processing/algorithms/estimate.py" line="163" />
       <source>Unit area field (m²)</source>
       <translation>Campo de área de la unidad (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="163" />
+      <location filename="../processing/algorithms/estimate.py" line="166" />
       <source>Fixed unit area for points and lines (m²; 0: not used)</source>
       <translation>Área fija de la unidad para puntos y líneas (m²; 0: no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="166" />
+      <location filename="../processing/algorithms/estimate.py" line="169" />
       <source>Strip width of line transects (m, full width; 0: not used)</source>
       <translation>Ancho de franja de los transectos lineales (m, ancho total; 0: no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="169" />
+      <location filename="../processing/algorithms/estimate.py" line="172" />
       <source>Strata (the frame)</source>
       <translation>Estratos (el marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="171" />
+      <location filename="../processing/algorithms/estimate.py" line="174" />
       <source>Stratum id field of the strata</source>
       <translation>Campo identificador de los estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="174" />
-      <location filename="../processing/algorithms/estimate.py" line="494" />
+      <location filename="../processing/algorithms/estimate.py" line="177" />
+      <location filename="../processing/algorithms/estimate.py" line="497" />
       <source>Confidence level</source>
       <translation>Nivel de confianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="177" />
+      <location filename="../processing/algorithms/estimate.py" line="180" />
       <source>Confidence interval</source>
       <translation>Intervalo de confianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="178" />
-      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <location filename="../processing/algorithms/estimate.py" line="181" />
+      <location filename="../processing/algorithms/estimate.py" line="482" />
       <source>t with Satterthwaite degrees of freedom</source>
       <translation>t con los grados de libertad de Satterthwaite</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="178" />
+      <location filename="../processing/algorithms/estimate.py" line="181" />
       <source>Log-normal</source>
       <translation>Log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="179" />
+      <location filename="../processing/algorithms/estimate.py" line="182" />
       <source>Stratified bootstrap (2,000 resamples)</source>
       <translation>Bootstrap estratificado (2.000 remuestreos)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="181" />
-      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <location filename="../processing/algorithms/estimate.py" line="184" />
+      <location filename="../processing/algorithms/estimate.py" line="500" />
       <source>Finite-population correction</source>
       <translation>Corrección por población finita</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="183" />
+      <location filename="../processing/algorithms/estimate.py" line="186" />
       <source>Detection probability p (from a separate study; 1: all seen)</source>
       <translation>Probabilidad de detección p (de un estudio aparte; 1: todos vistos)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="186" />
+      <location filename="../processing/algorithms/estimate.py" line="189" />
       <source>Standard error of p</source>
       <translation>Error estándar de p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <location filename="../processing/algorithms/estimate.py" line="192" />
       <source>Area unit of the results</source>
       <translation>Unidad de área de los resultados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <location filename="../processing/algorithms/estimate.py" line="192" />
       <source>km²</source>
       <translation>km²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <location filename="../processing/algorithms/estimate.py" line="192" />
       <source>hectares</source>
       <translation>hectáreas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="192" />
+      <location filename="../processing/algorithms/estimate.py" line="195" />
       <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
       <translation>CV objetivo para el próximo muestreo (0: no se usa; p. ej. 0.15)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="196" />
-      <location filename="../processing/algorithms/estimate.py" line="496" />
+      <location filename="../processing/algorithms/estimate.py" line="199" />
+      <location filename="../processing/algorithms/estimate.py" line="499" />
       <source>Variance estimator</source>
       <translation>Estimador de la varianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="197" />
+      <location filename="../processing/algorithms/estimate.py" line="200" />
       <source>Simple random sampling formula</source>
       <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="198" />
+      <location filename="../processing/algorithms/estimate.py" line="201" />
       <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
       <translation>Vecindario local (disposiciones sistemáticas o espacialmente equilibradas)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="200" />
+      <location filename="../processing/algorithms/estimate.py" line="203" />
       <source>The count field holds presence (1) / absence (0)</source>
       <translation>El campo de conteo contiene presencia (1) / ausencia (0)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="202" />
+      <location filename="../processing/algorithms/estimate.py" line="205" />
       <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
       <translation>Dejar fuera los estratos sin unidades muestreadas (el marco se reduce)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="205" />
+      <location filename="../processing/algorithms/estimate.py" line="208" />
       <source>True total of a simulated population (simulations and training only; 0: none)</source>
       <translation>Total verdadero de una población simulada (solo simulaciones y formación; 0: ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="210" />
+      <location filename="../processing/algorithms/estimate.py" line="213" />
       <source>Strata with estimates</source>
       <translation>Estratos con estimaciones</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="212" />
+      <location filename="../processing/algorithms/estimate.py" line="215" />
       <source>Estimate table</source>
       <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <location filename="../processing/algorithms/estimate.py" line="218" />
       <source>Overall density</source>
       <translation>Densidad global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <location filename="../processing/algorithms/estimate.py" line="218" />
       <source>SE of the overall density</source>
       <translation>Error estándar de la densidad global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="216" />
+      <location filename="../processing/algorithms/estimate.py" line="219" />
       <source>Overall abundance</source>
       <translation>Abundancia global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="217" />
+      <location filename="../processing/algorithms/estimate.py" line="220" />
       <source>Lower confidence limit of the abundance</source>
       <translation>Límite inferior de confianza de la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="218" />
+      <location filename="../processing/algorithms/estimate.py" line="221" />
       <source>Upper confidence limit of the abundance</source>
       <translation>Límite superior de confianza de la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="219" />
+      <location filename="../processing/algorithms/estimate.py" line="222" />
       <source>CV of the overall estimate</source>
       <translation>CV de la estimación global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="242" />
+      <location filename="../processing/algorithms/estimate.py" line="245" />
       <source>Layer '{layer}' has no count field '{field}'. Choose the field that holds the counts.</source>
       <translation>La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="251" />
+      <location filename="../processing/algorithms/estimate.py" line="254" />
       <source>Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the strata layer's id field (plotwise:stratify writes 'stratum'), or give a frame layer of one polygon to treat the frame as one stratum.</source>
       <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos (plotwise:stratify escribe 'stratum') o dé una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="255" />
+      <location filename="../processing/algorithms/estimate.py" line="258" />
       <source>Layer '{layer}' is one polygon without a stratum id field: the frame is treated as one stratum, and the units' field '{field}' is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
       <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato y no se usa el campo «{field}» de las unidades. Si las unidades se asignaron a los estratos de forma desigual, dé en su lugar los estratos: una media no estratificada está entonces sesgada.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="285" />
+      <location filename="../processing/algorithms/estimate.py" line="288" />
       <source>Layer '{layer}' has no features.</source>
       <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="290" />
+      <location filename="../processing/algorithms/estimate.py" line="293" />
       <source>Layer '{layer}' has no polygons with an area.</source>
       <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="306" />
+      <location filename="../processing/algorithms/estimate.py" line="309" />
       <source>{n} unused reserve unit(s) without a count were skipped.</source>
       <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="337" />
+      <location filename="../processing/algorithms/estimate.py" line="340" />
       <source>Layer '{layer}': units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
       <translation>Capa «{layer}»: las unidades {ids} no tienen geometría, así que la varianza de vecindario local no puede usarlas. Deles su ubicación o use la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="344" />
+      <location filename="../processing/algorithms/estimate.py" line="347" />
       <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
       <translation>Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="391" />
+      <location filename="../processing/algorithms/estimate.py" line="394" />
       <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
       <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="413" />
+      <location filename="../processing/algorithms/estimate.py" line="416" />
       <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
       <translation>Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="432" />
+      <location filename="../processing/algorithms/estimate.py" line="435" />
       <source>In strata {strata} the units' inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
       <translation>En los estratos {strata} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <location filename="../processing/algorithms/estimate.py" line="456" />
       <source>occupied units</source>
       <translation>unidades ocupadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <location filename="../processing/algorithms/estimate.py" line="456" />
       <source>animals</source>
       <translation>animales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <location filename="../processing/algorithms/estimate.py" line="457" />
       <source>Naive occupancy from presence data</source>
       <translation>Ocupación ingenua a partir de datos de presencia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <location filename="../processing/algorithms/estimate.py" line="457" />
       <source>Density and abundance estimate</source>
       <translation>Estimación de la densidad y la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <location filename="../processing/algorithms/estimate.py" line="460" />
       <source>proportion of units occupied (naive)</source>
       <translation>proporción de unidades ocupadas (ingenua)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <location filename="../processing/algorithms/estimate.py" line="460" />
       <source>density per {unit}</source>
       <translation>densidad por {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="459" />
+      <location filename="../processing/algorithms/estimate.py" line="462" />
       <source>estimated {what} in the frame</source>
       <translation>estimación de {what} en el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="460" />
+      <location filename="../processing/algorithms/estimate.py" line="463" />
       <source>{level} interval</source>
       <translation>intervalo al {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="462" />
-      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="465" />
+      <location filename="../processing/algorithms/estimate.py" line="516" />
       <source>CV</source>
       <translation>CV</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="463" />
+      <location filename="../processing/algorithms/estimate.py" line="466" />
       <source>units surveyed</source>
       <translation>unidades muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="466" />
+      <location filename="../processing/algorithms/estimate.py" line="469" />
       <source>true total of the simulated population</source>
       <translation>total verdadero de la población simulada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="471" />
+      <location filename="../processing/algorithms/estimate.py" line="474" />
       <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).</source>
       <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <location filename="../processing/algorithms/estimate.py" line="480" />
       <source>covers</source>
       <translation>contiene</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <location filename="../processing/algorithms/estimate.py" line="480" />
       <source>misses</source>
       <translation>no contiene</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <location filename="../processing/algorithms/estimate.py" line="482" />
       <source>log-normal</source>
       <translation>log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="480" />
+      <location filename="../processing/algorithms/estimate.py" line="483" />
       <source>stratified percentile bootstrap</source>
       <translation>bootstrap estratificado de percentiles</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="481" />
+      <location filename="../processing/algorithms/estimate.py" line="484" />
       <source>simple random sampling formula</source>
       <translation>fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="482" />
+      <location filename="../processing/algorithms/estimate.py" line="485" />
       <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
       <translation>vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="484" />
+      <location filename="../processing/algorithms/estimate.py" line="487" />
       <source>Sample units</source>
       <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <location filename="../processing/algorithms/estimate.py" line="488" />
       <source> (presence/absence)</source>
       <translation> (presencia/ausencia)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <location filename="../processing/algorithms/estimate.py" line="489" />
       <source>Stratum field</source>
       <translation>Campo de estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <location filename="../processing/algorithms/estimate.py" line="489" />
       <source>none: one stratum</source>
       <translation>ninguno: un solo estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <location filename="../processing/algorithms/estimate.py" line="490" />
       <source>Unit area</source>
       <translation>Área de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <location filename="../processing/algorithms/estimate.py" line="490" />
       <source>field {field} (m²)</source>
       <translation>campo {field} (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="488" />
+      <location filename="../processing/algorithms/estimate.py" line="491" />
       <source>polygon area</source>
       <translation>área del polígono</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="489" />
+      <location filename="../processing/algorithms/estimate.py" line="492" />
       <source>strip width</source>
       <translation>ancho de franja</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="490" />
+      <location filename="../processing/algorithms/estimate.py" line="493" />
       <source>fixed</source>
       <translation>fija</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="491" />
+      <location filename="../processing/algorithms/estimate.py" line="494" />
       <source>Strata (frame)</source>
       <translation>Estratos (marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="492" />
+      <location filename="../processing/algorithms/estimate.py" line="495" />
       <source>Computation CRS</source>
       <translation>SRC de cálculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="493" />
+      <location filename="../processing/algorithms/estimate.py" line="496" />
       <source>Area unit</source>
       <translation>Unidad de área</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="495" />
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="498" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Interval</source>
       <translation>Intervalo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="497" />
-      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <location filename="../processing/algorithms/estimate.py" line="500" />
+      <location filename="../processing/algorithms/estimate.py" line="544" />
       <source>yes</source>
       <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="497" />
-      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <location filename="../processing/algorithms/estimate.py" line="500" />
+      <location filename="../processing/algorithms/estimate.py" line="544" />
       <source>no</source>
       <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="498" />
+      <location filename="../processing/algorithms/estimate.py" line="501" />
       <source>Detection probability p</source>
       <translation>Probabilidad de detección p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="499" />
+      <location filename="../processing/algorithms/estimate.py" line="502" />
       <source>Target CV for the next survey</source>
       <translation>CV objetivo para el próximo muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="502" />
+      <location filename="../processing/algorithms/estimate.py" line="505" />
       <source>Bootstrap resamples</source>
       <translation>Remuestreos bootstrap</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <location filename="../processing/algorithms/estimate.py" line="506" />
+      <location filename="../processing/algorithms/estimate.py" line="508" />
       <source>Seed</source>
       <translation>Semilla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <location filename="../processing/algorithms/estimate.py" line="508" />
       <source>not used (no random draws without the bootstrap)</source>
       <translation>no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="509" />
+      <location filename="../processing/algorithms/estimate.py" line="512" />
       <source>Estimates by stratum</source>
       <translation>Estimaciones por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
-      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
       <source>Stratum</source>
       <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
       <source>Area ({unit})</source>
       <translation>Área ({unit})</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
       <source>Units (n)</source>
       <translation>Unidades (n)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
       <source>Not surveyed</source>
       <translation>No muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
       <source>Mean count</source>
       <translation>Conteo medio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
       <source>SD of counts</source>
       <translation>DE de los conteos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
       <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
       <source>SE</source>
       <translation>EE</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="512" />
       <location filename="../processing/algorithms/estimate.py" line="515" />
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="518" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Lower limit</source>
       <translation>Límite inferior</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="513" />
-      <location filename="../processing/algorithms/estimate.py" line="515" />
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="516" />
+      <location filename="../processing/algorithms/estimate.py" line="518" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Upper limit</source>
       <translation>Límite superior</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="516" />
       <source>df</source>
       <translation>gl</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="514" />
-      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <location filename="../processing/algorithms/estimate.py" line="531" />
       <source>Occupied units</source>
       <translation>Unidades ocupadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="514" />
-      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <location filename="../processing/algorithms/estimate.py" line="531" />
       <source>Abundance</source>
       <translation>Abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <location filename="../processing/algorithms/estimate.py" line="520" />
       <source>Units next time (n_next)</source>
       <translation>Unidades la próxima vez (n_next)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="522" />
-      <location filename="../processing/algorithms/estimate.py" line="565" />
+      <location filename="../processing/algorithms/estimate.py" line="525" />
+      <location filename="../processing/algorithms/estimate.py" line="568" />
       <source>all strata</source>
       <translation>todos los estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="525" />
+      <location filename="../processing/algorithms/estimate.py" line="528" />
       <source>{what}, limits at {level}.</source>
       <translation>{what}, límites al {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="527" />
+      <location filename="../processing/algorithms/estimate.py" line="530" />
       <source>{what} in the frame, limits at {level}.</source>
       <translation>{what} en el marco, límites al {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="530" />
+      <location filename="../processing/algorithms/estimate.py" line="533" />
       <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
       <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="535" />
+      <location filename="../processing/algorithms/estimate.py" line="538" />
       <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
       <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="538" />
+      <location filename="../processing/algorithms/estimate.py" line="541" />
       <source>The overall interval by method</source>
       <translation>El intervalo global según el método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Used in the outputs</source>
       <translation>Usado en las salidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="543" />
+      <location filename="../processing/algorithms/estimate.py" line="546" />
       <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
       <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <location filename="../processing/algorithms/estimate.py" line="555" />
       <source>overall abundance in a resample</source>
       <translation>abundancia global en un remuestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <location filename="../processing/algorithms/estimate.py" line="555" />
       <source>resamples</source>
       <translation>remuestreos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="553" />
+      <location filename="../processing/algorithms/estimate.py" line="556" />
       <source>{level} percentile limits</source>
       <translation>límites de percentiles al {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="554" />
+      <location filename="../processing/algorithms/estimate.py" line="557" />
       <source>The {n:,} bootstrap resamples of the overall abundance</source>
       <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="563" />
+      <location filename="../processing/algorithms/estimate.py" line="566" />
       <source>true density (simulation)</source>
       <translation>densidad verdadera (simulación)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="568" />
+      <location filename="../processing/algorithms/estimate.py" line="571" />
       <source>{what} by stratum with {level} confidence intervals</source>
       <translation>{what} por estrato con intervalos de confianza al {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="579" />
+      <location filename="../processing/algorithms/estimate.py" line="582" />
       <source>lowest</source>
       <translation>mínimo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="580" />
+      <location filename="../processing/algorithms/estimate.py" line="583" />
       <source>highest</source>
       <translation>máximo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="585" />
+      <location filename="../processing/algorithms/estimate.py" line="588" />
       <source>surveyed units</source>
       <translation>unidades muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="588" />
+      <location filename="../processing/algorithms/estimate.py" line="591" />
       <source>not surveyed</source>
       <translation>no muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="590" />
+      <location filename="../processing/algorithms/estimate.py" line="593" />
       <source>Strata shaded by {what}, with the units</source>
       <translation>Estratos sombreados según {what}, con las unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="593" />
+      <location filename="../processing/algorithms/estimate.py" line="596" />
       <source>Method</source>
       <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="595" />
+      <location filename="../processing/algorithms/estimate.py" line="598" />
       <source>Each stratum's value is the proportion of its surveyed units where the species was detected; the frame's value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
       <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="602" />
+      <location filename="../processing/algorithms/estimate.py" line="605" />
       <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
       <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="610" />
+      <location filename="../processing/algorithms/estimate.py" line="613" />
       <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
       <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="613" />
+      <location filename="../processing/algorithms/estimate.py" line="616" />
       <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
       <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). Son asimétricos y nunca bajan de 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="615" />
-      <source>Intervals are stratified percentile bootstrap intervals: units are resampled with replacement within each stratum, {b:,} times, from the recorded seed (Efron &amp; Tibshirani 1993). The finite-population correction is not applied to them.</source>
-      <translation>Los intervalos son intervalos bootstrap estratificados de percentiles: las unidades se remuestrean con reposición dentro de cada estrato, {b:,} veces, a partir de la semilla registrada (Efron &amp; Tibshirani 1993). No se les aplica la corrección por población finita.</translation>
+      <location filename="../processing/algorithms/estimate.py" line="618" />
+      <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
+      <translation>Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita cuando se pide (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="621" />
+      <location filename="../processing/algorithms/estimate.py" line="626" />
       <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
       <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, y solo las diferencias dentro de los vecindarios cuentan como varianza. Para disposiciones sistemáticas y espacialmente equilibradas, la fórmula del muestreo aleatorio simple sobrestima la varianza; este estimador no, siempre que la disposición fuera realmente sistemática o espacialmente equilibrada; para una disposición aleatoria simple use la fórmula simple. La suma de las varianzas locales se escala una vez para que coincida en promedio con la fórmula simple cuando la población no tiene estructura espacial (decisión nuestra).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="630" />
+      <location filename="../processing/algorithms/estimate.py" line="635" />
       <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
       <translation>Los estratos con una sola unidad muestreada se agruparon con un vecino (entre los estratos que lo tocan en el mapa o, si no, los estratos contiguos en el orden de identificadores, el de densidad más próxima): los miembros de un grupo comparten la varianza residual combinada del grupo (Cochran 1977, §5A.12). Las diferencias entre los estratos agrupados cuentan entonces como varianza, por lo que sus errores estándar tienden a ser demasiado grandes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="636" />
+      <location filename="../processing/algorithms/estimate.py" line="641" />
       <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval's degrees of freedom combine the two parts (Buckland et al. 2001), p's part counting as known with infinite degrees of freedom.</source>
       <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad del intervalo t combinan ambas partes (Buckland et al. 2001), contando la de p como conocida con grados de libertad infinitos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="643" />
+      <location filename="../processing/algorithms/estimate.py" line="648" />
       <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
       <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar observadas ahora (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 por estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="649" />
+      <location filename="../processing/algorithms/estimate.py" line="654" />
       <source>Cautions</source>
       <translation>Precauciones</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="650" />
+      <location filename="../processing/algorithms/estimate.py" line="655" />
       <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
       <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="654" />
+      <location filename="../processing/algorithms/estimate.py" line="659" />
       <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
       <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="657" />
+      <location filename="../processing/algorithms/estimate.py" line="662" />
       <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
       <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="662" />
+      <location filename="../processing/algorithms/estimate.py" line="667" />
       <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
       <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="665" />
+      <location filename="../processing/algorithms/estimate.py" line="670" />
       <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
       <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
     </message>
@@ -3458,162 +3458,162 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
       <translation>El rango de unidades tiene más de 20 valores; indique como máximo 20.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="274" />
+      <location filename="../processing/engine/estimation.py" line="275" />
       <source>{shown} … ({n} in all)</source>
       <translation>{shown} … ({n} en total)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="308" />
+      <location filename="../processing/engine/estimation.py" line="309" />
       <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
       <translation>El campo {count_name} contiene valores que no son números para las unidades {ids}. Introduzca un conteo entero (0 si se muestreó y no se vio ninguno) o deje el campo vacío (NULL) para las unidades no muestreadas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="318" />
+      <location filename="../processing/engine/estimation.py" line="319" />
       <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
       <translation>El campo {count_name} contiene conteos negativos o infinitos para las unidades {ids}. Los conteos deben ser 0 o más; corríjalos, o deje el campo vacío (NULL) si la unidad no se muestreó.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="442" />
+      <location filename="../processing/engine/estimation.py" line="443" />
       <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
       <translation>El nivel de confianza debe estar entre 0 y 1 (se recibió {confidence}); use p. ej. 0.95.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="445" />
+      <location filename="../processing/engine/estimation.py" line="446" />
       <source>Unknown interval method {method!r}; use one of {methods}.</source>
       <translation>Método de intervalo desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="448" />
+      <location filename="../processing/engine/estimation.py" line="449" />
       <source>Unknown variance method {method!r}; use one of {methods}.</source>
       <translation>Método de varianza desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="451" />
+      <location filename="../processing/engine/estimation.py" line="452" />
       <source>The detection probability must lie in (0, 1] (got {p}).</source>
       <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {p}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="453" />
+      <location filename="../processing/engine/estimation.py" line="454" />
       <source>The standard error of the detection probability must be 0 or more.</source>
       <translation>El error estándar de la probabilidad de detección debe ser 0 o más.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="462" />
+      <location filename="../processing/engine/estimation.py" line="463" />
       <source>unit_ids must have one id per unit.</source>
       <translation>unit_ids debe tener un identificador por unidad.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="466" />
+      <location filename="../processing/engine/estimation.py" line="467" />
       <source>counts, unit_areas and strata must have one value per unit.</source>
       <translation>counts, unit_areas y strata deben tener un valor por unidad.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="475" />
+      <location filename="../processing/engine/estimation.py" line="476" />
       <source>Strata {ids} have no area. Check the strata layer's geometries.</source>
       <translation>Los estratos {ids} no tienen área. Compruebe las geometrías de la capa de estratos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="483" />
+      <location filename="../processing/engine/estimation.py" line="484" />
       <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
       <translation>Las unidades {ids} no tienen estrato (el campo de estrato está vacío). Rellene su estrato, u omita el campo de estrato para tratar el marco de muestreo como un solo estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="493" />
+      <location filename="../processing/engine/estimation.py" line="494" />
       <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
       <translation>Las unidades {ids} tienen identificadores de estrato ({names}) que no están en la capa de estratos. Compruebe el campo de estrato de las unidades y el campo identificador de la capa de estratos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="501" />
+      <location filename="../processing/engine/estimation.py" line="502" />
       <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
       <translation>{n} unidad(es) no tienen conteo y se tratan como no muestreadas (no respuesta): {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="506" />
+      <location filename="../processing/engine/estimation.py" line="507" />
       <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
       <translation>Ninguna unidad tiene conteo, así que no puede estimarse nada. Introduzca los conteos de las unidades muestreadas (0 si no se vio ninguno) en el campo de conteo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="513" />
+      <location filename="../processing/engine/estimation.py" line="514" />
       <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
       <translation>Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="523" />
+      <location filename="../processing/engine/estimation.py" line="524" />
       <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
       <translation>Los datos de presencia deben ser 0 o 1; las unidades {ids} contienen otros valores. Use los conteos sin la opción de presencia, o recodifique el campo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="528" />
+      <location filename="../processing/engine/estimation.py" line="529" />
       <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
       <translation>La probabilidad de detección no se aplicó a los datos de presencia: dividir una proporción de unidades ocupadas por p no es una corrección de ocupación, que requiere visitas repetidas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="547" />
+      <location filename="../processing/engine/estimation.py" line="548" />
       <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
       <translation>Ninguna unidad de los estratos {ids} se muestreó, así que su abundancia no puede estimarse. Muestree unidades allí, o elija dejar fuera esos estratos (la estimación cubre entonces un marco de muestreo menor).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="553" />
+      <location filename="../processing/engine/estimation.py" line="554" />
       <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
       <translation>Los estratos {ids} no tenían ninguna unidad muestreada y se dejaron fuera: el marco de muestreo se redujo en {dropped_area:.6g} unidades de área, y la estimación cubre solo los estratos restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="569" />
+      <location filename="../processing/engine/estimation.py" line="570" />
       <source>The local neighbourhood variance needs the positions of the units.</source>
       <translation>La varianza de vecindad local necesita las posiciones de las unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="574" />
+      <location filename="../processing/engine/estimation.py" line="575" />
       <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
       <translation>Las unidades {ids} no tienen posición, así que la varianza de vecindad local no puede usarlas. Indique sus ubicaciones, o use la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="599" />
+      <location filename="../processing/engine/estimation.py" line="600" />
       <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
       <translation>En los estratos {ids} el área muestreada supera el área del estrato. Compruebe las áreas de las unidades y la unidad de área, o desactive la corrección por población finita.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="640" />
+      <location filename="../processing/engine/estimation.py" line="641" />
       <source>{label} (one unit) collapsed with {others}</source>
       <translation>{label} (una unidad) agrupado con {others}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="645" />
+      <location filename="../processing/engine/estimation.py" line="646" />
       <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
       <translation>Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="650" />
+      <location filename="../processing/engine/estimation.py" line="651" />
       <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
       <translation>El único estrato tiene una sola unidad muestreada: no puede estimarse ninguna varianza, error estándar ni intervalo. Muestree al menos dos unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="666" />
+      <location filename="../processing/engine/estimation.py" line="667" />
       <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
       <translation>Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="702" />
+      <location filename="../processing/engine/estimation.py" line="703" />
       <source>The bootstrap needs a random generator (rng).</source>
       <translation>El bootstrap necesita un generador aleatorio (rng).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="734" />
+      <location filename="../processing/engine/estimation.py" line="735" />
       <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
       <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0 y su CV no está definido.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="737" />
+      <location filename="../processing/engine/estimation.py" line="738" />
       <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
       <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="782" />
+      <location filename="../processing/engine/estimation.py" line="783" />
       <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own CV is {cv_p:.3g}. Improve the detection study first.</source>
       <translation>El CV objetivo {target_cv:.3g} no puede alcanzarse con más unidades: el CV propio de la probabilidad de detección es {cv_p:.3g}. Mejore primero el estudio de detección.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="791" />
+      <location filename="../processing/engine/estimation.py" line="792" />
       <source>No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.</source>
       <translation>No se observó variación, así que los tamaños de muestra del próximo muestreo se fijan en el mínimo de 2 por estrato.</translation>
     </message>

@@ -1609,12 +1609,12 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
   <context>
     <name>Estimate</name>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="107" />
+      <location filename="../processing/algorithms/estimate.py" line="109" />
       <source>Estimate density and abundance</source>
       <translation>Estimer la densité et l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="110" />
+      <location filename="../processing/algorithms/estimate.py" line="112" />
       <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
 
 Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
@@ -1625,7 +1625,7 @@ Unit area (m²): the unit area field (default area_m2, as the layout writes it) 
 
 Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is collapsed with a neighbour for its variance (Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so.
 
-Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a stratified percentile bootstrap of 2,000 resamples (seeded).
+Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a rescaled stratified percentile bootstrap of 2,000 resamples (seeded; Rao &amp; Wu 1988), which carries the finite-population correction.
 
 Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance.
 
@@ -1648,7 +1648,7 @@ Surface d'une unité (m²) : le champ de surface d'unité (area_m2 par défaut, 
 
 Strates : des polygones avec un champ d'identifiant correspondant au champ de strate des unités ; leurs surfaces définissent la base de sondage. Quand les unités n'ont pas de champ de strate, ou que la couche des strates est un seul polygone sans champ d'identifiant, toutes les unités forment une seule strate sur la base. Une strate avec une seule unité inventoriée est regroupée avec une voisine pour sa variance (Cochran 1977, §5A.12), avec un avertissement. Une strate sans unité inventoriée est une erreur, sauf si vous choisissez de l'écarter : la base se réduit alors, et le rapport le dit.
 
-Intervalles : t avec les degrés de liberté de Satterthwaite (Satterthwaite 1946 ; Cochran 1977) ; log-normal, de N/C à N·C avec C = exp(z√ln(1+CV²)) (Burnham et al. 1987 ; Buckland et al. 2001) ; ou un bootstrap stratifié des percentiles sur 2 000 rééchantillonnages (avec graine).
+Intervalles : t avec les degrés de liberté de Satterthwaite (Satterthwaite 1946 ; Cochran 1977) ; log-normal, de N/C à N·C avec C = exp(z√ln(1+CV²)) (Burnham et al. 1987 ; Buckland et al. 2001) ; ou un bootstrap stratifié des percentiles, remis à l'échelle, sur 2 000 rééchantillonnages (avec graine ; Rao &amp; Wu 1988), qui tient compte de la correction pour population finie.
 
 Variance : la formule de l'échantillonnage aléatoire simple, ou l'estimateur de voisinage local (Stevens &amp; Olsen 2003) pour les grilles systématiques et les dispositions spatialement équilibrées, où la formule simple surestime la variance.
 
@@ -1663,681 +1663,681 @@ Vrai total : pour les simulations et la formation uniquement. Le rapport l'affic
 Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="153" />
+      <location filename="../processing/algorithms/estimate.py" line="156" />
       <source>Sample units with counts</source>
       <translation>Unités d'échantillonnage avec comptages</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="155" />
-      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <location filename="../processing/algorithms/estimate.py" line="158" />
+      <location filename="../processing/algorithms/estimate.py" line="488" />
       <source>Count field</source>
       <translation>Champ de comptage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="157" />
+      <location filename="../processing/algorithms/estimate.py" line="160" />
       <source>Stratum field of the units</source>
       <translation>Champ de strate des unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="160" />
+      <location filename="../processing/algorithms/estimate.py" line="163" />
       <source>Unit area field (m²)</source>
       <translation>Champ de surface d'unité (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="163" />
+      <location filename="../processing/algorithms/estimate.py" line="166" />
       <source>Fixed unit area for points and lines (m²; 0: not used)</source>
       <translation>Surface d'unité fixe pour les points et les lignes (m² ; 0 : non utilisée)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="166" />
+      <location filename="../processing/algorithms/estimate.py" line="169" />
       <source>Strip width of line transects (m, full width; 0: not used)</source>
       <translation>Largeur de bande des transects linéaires (m, largeur totale ; 0 : non utilisée)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="169" />
+      <location filename="../processing/algorithms/estimate.py" line="172" />
       <source>Strata (the frame)</source>
       <translation>Strates (la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="171" />
+      <location filename="../processing/algorithms/estimate.py" line="174" />
       <source>Stratum id field of the strata</source>
       <translation>Champ d'identifiant des strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="174" />
-      <location filename="../processing/algorithms/estimate.py" line="494" />
+      <location filename="../processing/algorithms/estimate.py" line="177" />
+      <location filename="../processing/algorithms/estimate.py" line="497" />
       <source>Confidence level</source>
       <translation>Niveau de confiance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="177" />
+      <location filename="../processing/algorithms/estimate.py" line="180" />
       <source>Confidence interval</source>
       <translation>Intervalle de confiance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="178" />
-      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <location filename="../processing/algorithms/estimate.py" line="181" />
+      <location filename="../processing/algorithms/estimate.py" line="482" />
       <source>t with Satterthwaite degrees of freedom</source>
       <translation>t avec les degrés de liberté de Satterthwaite</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="178" />
+      <location filename="../processing/algorithms/estimate.py" line="181" />
       <source>Log-normal</source>
       <translation>Log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="179" />
+      <location filename="../processing/algorithms/estimate.py" line="182" />
       <source>Stratified bootstrap (2,000 resamples)</source>
       <translation>Bootstrap stratifié (2 000 rééchantillonnages)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="181" />
-      <location filename="../processing/algorithms/estimate.py" line="497" />
+      <location filename="../processing/algorithms/estimate.py" line="184" />
+      <location filename="../processing/algorithms/estimate.py" line="500" />
       <source>Finite-population correction</source>
       <translation>Correction pour population finie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="183" />
+      <location filename="../processing/algorithms/estimate.py" line="186" />
       <source>Detection probability p (from a separate study; 1: all seen)</source>
       <translation>Probabilité de détection p (d'une étude distincte ; 1 : tous vus)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="186" />
+      <location filename="../processing/algorithms/estimate.py" line="189" />
       <source>Standard error of p</source>
       <translation>Erreur type de p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <location filename="../processing/algorithms/estimate.py" line="192" />
       <source>Area unit of the results</source>
       <translation>Unité de surface des résultats</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <location filename="../processing/algorithms/estimate.py" line="192" />
       <source>km²</source>
       <translation>km²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="189" />
+      <location filename="../processing/algorithms/estimate.py" line="192" />
       <source>hectares</source>
       <translation>hectares</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="192" />
+      <location filename="../processing/algorithms/estimate.py" line="195" />
       <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
       <translation>CV cible pour le prochain inventaire (0 : non utilisé ; p. ex. 0.15)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="196" />
-      <location filename="../processing/algorithms/estimate.py" line="496" />
+      <location filename="../processing/algorithms/estimate.py" line="199" />
+      <location filename="../processing/algorithms/estimate.py" line="499" />
       <source>Variance estimator</source>
       <translation>Estimateur de variance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="197" />
+      <location filename="../processing/algorithms/estimate.py" line="200" />
       <source>Simple random sampling formula</source>
       <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="198" />
+      <location filename="../processing/algorithms/estimate.py" line="201" />
       <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
       <translation>Voisinage local (dispositions systématiques ou spatialement équilibrées)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="200" />
+      <location filename="../processing/algorithms/estimate.py" line="203" />
       <source>The count field holds presence (1) / absence (0)</source>
       <translation>Le champ de comptage contient présence (1) / absence (0)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="202" />
+      <location filename="../processing/algorithms/estimate.py" line="205" />
       <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
       <translation>Écarter les strates sans unité inventoriée (la base se réduit)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="205" />
+      <location filename="../processing/algorithms/estimate.py" line="208" />
       <source>True total of a simulated population (simulations and training only; 0: none)</source>
       <translation>Vrai total d'une population simulée (simulations et formation uniquement ; 0 : aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="210" />
+      <location filename="../processing/algorithms/estimate.py" line="213" />
       <source>Strata with estimates</source>
       <translation>Strates avec estimations</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="212" />
+      <location filename="../processing/algorithms/estimate.py" line="215" />
       <source>Estimate table</source>
       <translation>Table des estimations</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <location filename="../processing/algorithms/estimate.py" line="218" />
       <source>Overall density</source>
       <translation>Densité globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="215" />
+      <location filename="../processing/algorithms/estimate.py" line="218" />
       <source>SE of the overall density</source>
       <translation>Erreur type de la densité globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="216" />
+      <location filename="../processing/algorithms/estimate.py" line="219" />
       <source>Overall abundance</source>
       <translation>Abondance globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="217" />
+      <location filename="../processing/algorithms/estimate.py" line="220" />
       <source>Lower confidence limit of the abundance</source>
       <translation>Limite inférieure de confiance de l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="218" />
+      <location filename="../processing/algorithms/estimate.py" line="221" />
       <source>Upper confidence limit of the abundance</source>
       <translation>Limite supérieure de confiance de l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="219" />
+      <location filename="../processing/algorithms/estimate.py" line="222" />
       <source>CV of the overall estimate</source>
       <translation>CV de l'estimation globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="242" />
+      <location filename="../processing/algorithms/estimate.py" line="245" />
       <source>Layer '{layer}' has no count field '{field}'. Choose the field that holds the counts.</source>
       <translation>La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="251" />
+      <location filename="../processing/algorithms/estimate.py" line="254" />
       <source>Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the strata layer's id field (plotwise:stratify writes 'stratum'), or give a frame layer of one polygon to treat the frame as one stratum.</source>
       <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates (plotwise:stratify écrit 'stratum'), ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="255" />
+      <location filename="../processing/algorithms/estimate.py" line="258" />
       <source>Layer '{layer}' is one polygon without a stratum id field: the frame is treated as one stratum, and the units' field '{field}' is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
       <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base est traitée comme une seule strate, et le champ « {field} » des unités n'est pas utilisé. Si les unités ont été allouées aux strates de façon inégale, donnez plutôt les strates : une moyenne non stratifiée est alors biaisée.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="285" />
+      <location filename="../processing/algorithms/estimate.py" line="288" />
       <source>Layer '{layer}' has no features.</source>
       <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="290" />
+      <location filename="../processing/algorithms/estimate.py" line="293" />
       <source>Layer '{layer}' has no polygons with an area.</source>
       <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="306" />
+      <location filename="../processing/algorithms/estimate.py" line="309" />
       <source>{n} unused reserve unit(s) without a count were skipped.</source>
       <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="337" />
+      <location filename="../processing/algorithms/estimate.py" line="340" />
       <source>Layer '{layer}': units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
       <translation>Couche « {layer} » : les unités {ids} n'ont pas de géométrie, la variance de voisinage local ne peut donc pas les utiliser. Donnez-leur leur position, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="344" />
+      <location filename="../processing/algorithms/estimate.py" line="347" />
       <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
       <translation>Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="391" />
+      <location filename="../processing/algorithms/estimate.py" line="394" />
       <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
       <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="413" />
+      <location filename="../processing/algorithms/estimate.py" line="416" />
       <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
       <translation>Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="432" />
+      <location filename="../processing/algorithms/estimate.py" line="435" />
       <source>In strata {strata} the units' inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
       <translation>Dans les strates {strata}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <location filename="../processing/algorithms/estimate.py" line="456" />
       <source>occupied units</source>
       <translation>unités occupées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="453" />
+      <location filename="../processing/algorithms/estimate.py" line="456" />
       <source>animals</source>
       <translation>animaux</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <location filename="../processing/algorithms/estimate.py" line="457" />
       <source>Naive occupancy from presence data</source>
       <translation>Occupation naïve à partir de données de présence</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="454" />
+      <location filename="../processing/algorithms/estimate.py" line="457" />
       <source>Density and abundance estimate</source>
       <translation>Estimation de la densité et de l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <location filename="../processing/algorithms/estimate.py" line="460" />
       <source>proportion of units occupied (naive)</source>
       <translation>proportion d'unités occupées (naïve)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="457" />
+      <location filename="../processing/algorithms/estimate.py" line="460" />
       <source>density per {unit}</source>
       <translation>densité par {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="459" />
+      <location filename="../processing/algorithms/estimate.py" line="462" />
       <source>estimated {what} in the frame</source>
       <translation>estimation des {what} dans la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="460" />
+      <location filename="../processing/algorithms/estimate.py" line="463" />
       <source>{level} interval</source>
       <translation>intervalle à {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="462" />
-      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="465" />
+      <location filename="../processing/algorithms/estimate.py" line="516" />
       <source>CV</source>
       <translation>CV</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="463" />
+      <location filename="../processing/algorithms/estimate.py" line="466" />
       <source>units surveyed</source>
       <translation>unités inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="466" />
+      <location filename="../processing/algorithms/estimate.py" line="469" />
       <source>true total of the simulated population</source>
       <translation>vrai total de la population simulée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="471" />
+      <location filename="../processing/algorithms/estimate.py" line="474" />
       <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).</source>
       <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <location filename="../processing/algorithms/estimate.py" line="480" />
       <source>covers</source>
       <translation>contient</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="477" />
+      <location filename="../processing/algorithms/estimate.py" line="480" />
       <source>misses</source>
       <translation>ne contient pas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="479" />
+      <location filename="../processing/algorithms/estimate.py" line="482" />
       <source>log-normal</source>
       <translation>log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="480" />
+      <location filename="../processing/algorithms/estimate.py" line="483" />
       <source>stratified percentile bootstrap</source>
       <translation>bootstrap stratifié des percentiles</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="481" />
+      <location filename="../processing/algorithms/estimate.py" line="484" />
       <source>simple random sampling formula</source>
       <translation>formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="482" />
+      <location filename="../processing/algorithms/estimate.py" line="485" />
       <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
       <translation>voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="484" />
+      <location filename="../processing/algorithms/estimate.py" line="487" />
       <source>Sample units</source>
       <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="485" />
+      <location filename="../processing/algorithms/estimate.py" line="488" />
       <source> (presence/absence)</source>
       <translation> (présence/absence)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <location filename="../processing/algorithms/estimate.py" line="489" />
       <source>Stratum field</source>
       <translation>Champ de strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="486" />
+      <location filename="../processing/algorithms/estimate.py" line="489" />
       <source>none: one stratum</source>
       <translation>aucun : une seule strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <location filename="../processing/algorithms/estimate.py" line="490" />
       <source>Unit area</source>
       <translation>Surface d'une unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="487" />
+      <location filename="../processing/algorithms/estimate.py" line="490" />
       <source>field {field} (m²)</source>
       <translation>champ {field} (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="488" />
+      <location filename="../processing/algorithms/estimate.py" line="491" />
       <source>polygon area</source>
       <translation>surface du polygone</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="489" />
+      <location filename="../processing/algorithms/estimate.py" line="492" />
       <source>strip width</source>
       <translation>largeur de bande</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="490" />
+      <location filename="../processing/algorithms/estimate.py" line="493" />
       <source>fixed</source>
       <translation>fixe</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="491" />
+      <location filename="../processing/algorithms/estimate.py" line="494" />
       <source>Strata (frame)</source>
       <translation>Strates (base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="492" />
+      <location filename="../processing/algorithms/estimate.py" line="495" />
       <source>Computation CRS</source>
       <translation>SCR de calcul</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="493" />
+      <location filename="../processing/algorithms/estimate.py" line="496" />
       <source>Area unit</source>
       <translation>Unité de surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="495" />
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="498" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Interval</source>
       <translation>Intervalle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="497" />
-      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <location filename="../processing/algorithms/estimate.py" line="500" />
+      <location filename="../processing/algorithms/estimate.py" line="544" />
       <source>yes</source>
       <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="497" />
-      <location filename="../processing/algorithms/estimate.py" line="541" />
+      <location filename="../processing/algorithms/estimate.py" line="500" />
+      <location filename="../processing/algorithms/estimate.py" line="544" />
       <source>no</source>
       <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="498" />
+      <location filename="../processing/algorithms/estimate.py" line="501" />
       <source>Detection probability p</source>
       <translation>Probabilité de détection p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="499" />
+      <location filename="../processing/algorithms/estimate.py" line="502" />
       <source>Target CV for the next survey</source>
       <translation>CV cible pour le prochain inventaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="502" />
+      <location filename="../processing/algorithms/estimate.py" line="505" />
       <source>Bootstrap resamples</source>
       <translation>Rééchantillonnages bootstrap</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <location filename="../processing/algorithms/estimate.py" line="506" />
+      <location filename="../processing/algorithms/estimate.py" line="508" />
       <source>Seed</source>
       <translation>Graine</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="505" />
+      <location filename="../processing/algorithms/estimate.py" line="508" />
       <source>not used (no random draws without the bootstrap)</source>
       <translation>non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="509" />
+      <location filename="../processing/algorithms/estimate.py" line="512" />
       <source>Estimates by stratum</source>
       <translation>Estimations par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
-      <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
       <source>Stratum</source>
       <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
       <source>Area ({unit})</source>
       <translation>Surface ({unit})</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
       <source>Units (n)</source>
       <translation>Unités (n)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="510" />
+      <location filename="../processing/algorithms/estimate.py" line="513" />
       <source>Not surveyed</source>
       <translation>Non inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
       <source>Mean count</source>
       <translation>Comptage moyen</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
+      <location filename="../processing/algorithms/estimate.py" line="514" />
       <source>SD of counts</source>
       <translation>Écart-type des comptages</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
       <location filename="../processing/algorithms/estimate.py" line="514" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
       <source>SE</source>
       <translation>Erreur type</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="512" />
       <location filename="../processing/algorithms/estimate.py" line="515" />
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="518" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Lower limit</source>
       <translation>Limite inférieure</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="513" />
-      <location filename="../processing/algorithms/estimate.py" line="515" />
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="516" />
+      <location filename="../processing/algorithms/estimate.py" line="518" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Upper limit</source>
       <translation>Limite supérieure</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="513" />
+      <location filename="../processing/algorithms/estimate.py" line="516" />
       <source>df</source>
       <translation>ddl</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="514" />
-      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <location filename="../processing/algorithms/estimate.py" line="531" />
       <source>Occupied units</source>
       <translation>Unités occupées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="514" />
-      <location filename="../processing/algorithms/estimate.py" line="528" />
+      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <location filename="../processing/algorithms/estimate.py" line="531" />
       <source>Abundance</source>
       <translation>Abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
+      <location filename="../processing/algorithms/estimate.py" line="520" />
       <source>Units next time (n_next)</source>
       <translation>Unités la prochaine fois (n_next)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="522" />
-      <location filename="../processing/algorithms/estimate.py" line="565" />
+      <location filename="../processing/algorithms/estimate.py" line="525" />
+      <location filename="../processing/algorithms/estimate.py" line="568" />
       <source>all strata</source>
       <translation>toutes les strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="525" />
+      <location filename="../processing/algorithms/estimate.py" line="528" />
       <source>{what}, limits at {level}.</source>
       <translation>{what}, limites à {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="527" />
+      <location filename="../processing/algorithms/estimate.py" line="530" />
       <source>{what} in the frame, limits at {level}.</source>
       <translation>{what} dans la base de sondage, limites à {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="530" />
+      <location filename="../processing/algorithms/estimate.py" line="533" />
       <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
       <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="535" />
+      <location filename="../processing/algorithms/estimate.py" line="538" />
       <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
       <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="538" />
+      <location filename="../processing/algorithms/estimate.py" line="541" />
       <source>The overall interval by method</source>
       <translation>L'intervalle global selon la méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="540" />
+      <location filename="../processing/algorithms/estimate.py" line="543" />
       <source>Used in the outputs</source>
       <translation>Utilisé dans les sorties</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="543" />
+      <location filename="../processing/algorithms/estimate.py" line="546" />
       <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
       <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <location filename="../processing/algorithms/estimate.py" line="555" />
       <source>overall abundance in a resample</source>
       <translation>abondance globale dans un rééchantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="552" />
+      <location filename="../processing/algorithms/estimate.py" line="555" />
       <source>resamples</source>
       <translation>rééchantillonnages</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="553" />
+      <location filename="../processing/algorithms/estimate.py" line="556" />
       <source>{level} percentile limits</source>
       <translation>limites des percentiles à {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="554" />
+      <location filename="../processing/algorithms/estimate.py" line="557" />
       <source>The {n:,} bootstrap resamples of the overall abundance</source>
       <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="563" />
+      <location filename="../processing/algorithms/estimate.py" line="566" />
       <source>true density (simulation)</source>
       <translation>vraie densité (simulation)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="568" />
+      <location filename="../processing/algorithms/estimate.py" line="571" />
       <source>{what} by stratum with {level} confidence intervals</source>
       <translation>{what} par strate avec intervalles de confiance à {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="579" />
+      <location filename="../processing/algorithms/estimate.py" line="582" />
       <source>lowest</source>
       <translation>minimum</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="580" />
+      <location filename="../processing/algorithms/estimate.py" line="583" />
       <source>highest</source>
       <translation>maximum</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="585" />
+      <location filename="../processing/algorithms/estimate.py" line="588" />
       <source>surveyed units</source>
       <translation>unités inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="588" />
+      <location filename="../processing/algorithms/estimate.py" line="591" />
       <source>not surveyed</source>
       <translation>non inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="590" />
+      <location filename="../processing/algorithms/estimate.py" line="593" />
       <source>Strata shaded by {what}, with the units</source>
       <translation>Strates ombrées selon {what}, avec les unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="593" />
+      <location filename="../processing/algorithms/estimate.py" line="596" />
       <source>Method</source>
       <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="595" />
+      <location filename="../processing/algorithms/estimate.py" line="598" />
       <source>Each stratum's value is the proportion of its surveyed units where the species was detected; the frame's value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
       <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="602" />
+      <location filename="../processing/algorithms/estimate.py" line="605" />
       <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
       <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie est appliquée et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="610" />
+      <location filename="../processing/algorithms/estimate.py" line="613" />
       <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
       <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="613" />
+      <location filename="../processing/algorithms/estimate.py" line="616" />
       <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
       <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987 ; Buckland et al. 2001). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="615" />
-      <source>Intervals are stratified percentile bootstrap intervals: units are resampled with replacement within each stratum, {b:,} times, from the recorded seed (Efron &amp; Tibshirani 1993). The finite-population correction is not applied to them.</source>
-      <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles : les unités sont rééchantillonnées avec remise dans chaque strate, {b:,} fois, à partir de la graine enregistrée (Efron &amp; Tibshirani 1993). La correction pour population finie ne leur est pas appliquée.</translation>
+      <location filename="../processing/algorithms/estimate.py" line="618" />
+      <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
+      <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie quand elle est demandée (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="621" />
+      <location filename="../processing/algorithms/estimate.py" line="626" />
       <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
       <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, et seules les différences à l'intérieur des voisinages comptent comme variance. Pour les dispositions systématiques et spatialement équilibrées, la formule de l'échantillonnage aléatoire simple surestime la variance ; cet estimateur non, pourvu que la disposition ait réellement été systématique ou spatialement équilibrée ; pour une disposition aléatoire simple, utilisez la formule simple. La somme des variances locales est mise à l'échelle une fois pour concorder en moyenne avec la formule simple quand la population n'a pas de structure spatiale (notre choix).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="630" />
+      <location filename="../processing/algorithms/estimate.py" line="635" />
       <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
       <translation>Les strates avec une seule unité inventoriée ont été regroupées avec une voisine (parmi les strates qui la touchent sur la carte, ou à défaut les strates voisines dans l'ordre des identifiants, celle dont la densité est la plus proche) : les membres d'un groupe partagent la variance résiduelle commune du groupe (Cochran 1977, §5A.12). Les différences entre strates regroupées comptent alors comme variance, si bien que leurs erreurs types tendent à être trop grandes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="636" />
+      <location filename="../processing/algorithms/estimate.py" line="641" />
       <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval's degrees of freedom combine the two parts (Buckland et al. 2001), p's part counting as known with infinite degrees of freedom.</source>
       <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté de l'intervalle t combinent les deux parts (Buckland et al. 2001), celle de p étant comptée comme connue avec des degrés de liberté infinis.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="643" />
+      <location filename="../processing/algorithms/estimate.py" line="648" />
       <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
       <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types observés maintenant (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 par strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="649" />
+      <location filename="../processing/algorithms/estimate.py" line="654" />
       <source>Cautions</source>
       <translation>Mises en garde</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="650" />
+      <location filename="../processing/algorithms/estimate.py" line="655" />
       <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
       <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="654" />
+      <location filename="../processing/algorithms/estimate.py" line="659" />
       <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
       <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="657" />
+      <location filename="../processing/algorithms/estimate.py" line="662" />
       <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
       <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="662" />
+      <location filename="../processing/algorithms/estimate.py" line="667" />
       <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
       <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="665" />
+      <location filename="../processing/algorithms/estimate.py" line="670" />
       <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
       <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
     </message>
@@ -3458,162 +3458,162 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
       <translation>La plage d'unités contient plus de 20 valeurs ; donnez-en au plus 20.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="274" />
+      <location filename="../processing/engine/estimation.py" line="275" />
       <source>{shown} … ({n} in all)</source>
       <translation>{shown} … ({n} en tout)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="308" />
+      <location filename="../processing/engine/estimation.py" line="309" />
       <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
       <translation>Le champ {count_name} contient des valeurs qui ne sont pas des nombres pour les unités {ids}. Saisissez un comptage entier (0 si l'unité a été inventoriée sans rien voir) ou laissez le champ vide (NULL) pour les unités non inventoriées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="318" />
+      <location filename="../processing/engine/estimation.py" line="319" />
       <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
       <translation>Le champ {count_name} contient des comptages négatifs ou infinis pour les unités {ids}. Les comptages doivent valoir 0 ou plus ; corrigez-les, ou laissez le champ vide (NULL) si l'unité n'a pas été inventoriée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="442" />
+      <location filename="../processing/engine/estimation.py" line="443" />
       <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
       <translation>Le niveau de confiance doit être compris entre 0 et 1 (reçu {confidence}) ; utilisez p. ex. 0.95.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="445" />
+      <location filename="../processing/engine/estimation.py" line="446" />
       <source>Unknown interval method {method!r}; use one of {methods}.</source>
       <translation>Méthode d'intervalle inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="448" />
+      <location filename="../processing/engine/estimation.py" line="449" />
       <source>Unknown variance method {method!r}; use one of {methods}.</source>
       <translation>Méthode de variance inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="451" />
+      <location filename="../processing/engine/estimation.py" line="452" />
       <source>The detection probability must lie in (0, 1] (got {p}).</source>
       <translation>La probabilité de détection doit être dans ]0, 1] (reçu {p}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="453" />
+      <location filename="../processing/engine/estimation.py" line="454" />
       <source>The standard error of the detection probability must be 0 or more.</source>
       <translation>L'erreur type de la probabilité de détection doit valoir 0 ou plus.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="462" />
+      <location filename="../processing/engine/estimation.py" line="463" />
       <source>unit_ids must have one id per unit.</source>
       <translation>unit_ids doit avoir un identifiant par unité.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="466" />
+      <location filename="../processing/engine/estimation.py" line="467" />
       <source>counts, unit_areas and strata must have one value per unit.</source>
       <translation>counts, unit_areas et strata doivent avoir une valeur par unité.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="475" />
+      <location filename="../processing/engine/estimation.py" line="476" />
       <source>Strata {ids} have no area. Check the strata layer's geometries.</source>
       <translation>Les strates {ids} n'ont pas de surface. Vérifiez les géométries de la couche des strates.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="483" />
+      <location filename="../processing/engine/estimation.py" line="484" />
       <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
       <translation>Les unités {ids} n'ont pas de strate (le champ de strate est vide). Renseignez leur strate, ou omettez le champ de strate pour traiter la base de sondage comme une seule strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="493" />
+      <location filename="../processing/engine/estimation.py" line="494" />
       <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
       <translation>Les unités {ids} ont des identifiants de strate ({names}) absents de la couche des strates. Vérifiez le champ de strate des unités et le champ d'identifiant de la couche des strates.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="501" />
+      <location filename="../processing/engine/estimation.py" line="502" />
       <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
       <translation>{n} unité(s) n'ont pas de comptage et sont traitées comme non inventoriées (non-réponse) : {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="506" />
+      <location filename="../processing/engine/estimation.py" line="507" />
       <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
       <translation>Aucune unité n'a de comptage : rien ne peut être estimé. Saisissez les comptages des unités inventoriées (0 si rien n'a été vu) dans le champ de comptage.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="513" />
+      <location filename="../processing/engine/estimation.py" line="514" />
       <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
       <translation>Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="523" />
+      <location filename="../processing/engine/estimation.py" line="524" />
       <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
       <translation>Les données de présence doivent valoir 0 ou 1 ; les unités {ids} contiennent d'autres valeurs. Utilisez les comptages sans l'option de présence, ou recodez le champ.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="528" />
+      <location filename="../processing/engine/estimation.py" line="529" />
       <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
       <translation>La probabilité de détection n'a pas été appliquée aux données de présence : diviser une proportion d'unités occupées par p n'est pas une correction d'occupation, qui demande des visites répétées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="547" />
+      <location filename="../processing/engine/estimation.py" line="548" />
       <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
       <translation>Aucune unité des strates {ids} n'a été inventoriée : leur abondance ne peut pas être estimée. Inventoriez-y des unités, ou choisissez d'exclure ces strates (l'estimation couvre alors une base de sondage plus petite).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="553" />
+      <location filename="../processing/engine/estimation.py" line="554" />
       <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
       <translation>Les strates {ids} n'avaient aucune unité inventoriée et ont été exclues : la base de sondage a diminué de {dropped_area:.6g} unités de surface, et l'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="569" />
+      <location filename="../processing/engine/estimation.py" line="570" />
       <source>The local neighbourhood variance needs the positions of the units.</source>
       <translation>La variance de voisinage local a besoin des positions des unités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="574" />
+      <location filename="../processing/engine/estimation.py" line="575" />
       <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
       <translation>Les unités {ids} n'ont pas de position : la variance de voisinage local ne peut pas les utiliser. Donnez leurs emplacements, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="599" />
+      <location filename="../processing/engine/estimation.py" line="600" />
       <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
       <translation>Dans les strates {ids}, la surface inventoriée dépasse la surface de la strate. Vérifiez les surfaces des unités et l'unité de surface, ou désactivez la correction de population finie.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="640" />
+      <location filename="../processing/engine/estimation.py" line="641" />
       <source>{label} (one unit) collapsed with {others}</source>
       <translation>{label} (une unité) regroupée avec {others}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="645" />
+      <location filename="../processing/engine/estimation.py" line="646" />
       <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
       <translation>Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="650" />
+      <location filename="../processing/engine/estimation.py" line="651" />
       <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
       <translation>La seule strate n'a qu'une unité inventoriée : aucune variance, erreur type ou intervalle ne peut être estimé. Inventoriez au moins deux unités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="666" />
+      <location filename="../processing/engine/estimation.py" line="667" />
       <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
       <translation>Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="702" />
+      <location filename="../processing/engine/estimation.py" line="703" />
       <source>The bootstrap needs a random generator (rng).</source>
       <translation>Le bootstrap a besoin d'un générateur aléatoire (rng).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="734" />
+      <location filename="../processing/engine/estimation.py" line="735" />
       <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
       <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0 et son CV n'est pas défini.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="737" />
+      <location filename="../processing/engine/estimation.py" line="738" />
       <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
       <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="782" />
+      <location filename="../processing/engine/estimation.py" line="783" />
       <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own CV is {cv_p:.3g}. Improve the detection study first.</source>
       <translation>Le CV cible {target_cv:.3g} ne peut pas être atteint avec plus d'unités : le CV propre de la probabilité de détection est de {cv_p:.3g}. Améliorez d'abord l'étude de détection.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="791" />
+      <location filename="../processing/engine/estimation.py" line="792" />
       <source>No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.</source>
       <translation>Aucune variation n'a été observée : les tailles d'échantillon du prochain inventaire sont fixées au minimum de 2 par strate.</translation>
     </message>

@@ -1778,8 +1778,8 @@ TRANSLATIONS.update({
     "(Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: "
     "then the frame shrinks, and the report says so.\n\n"
     "Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to "
-    "N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a stratified percentile "
-    "bootstrap of 2,000 resamples (seeded).\n\n"
+    "N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a rescaled stratified percentile "
+    "bootstrap of 2,000 resamples (seeded; Rao & Wu 1988), which carries the finite-population correction.\n\n"
     "Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens & Olsen 2003) for "
     "systematic grids and spatially balanced layouts, where the simple formula overstates the variance.\n\n"
     "Detection: with a detection probability p below 1, estimates are divided by p and the squared CVs add (delta "
@@ -1816,7 +1816,8 @@ TRANSLATIONS.update({
         "vous choisissez de l'écarter : la base se réduit alors, et le rapport le dit.\n\n"
         "Intervalles : t avec les degrés de liberté de Satterthwaite (Satterthwaite 1946 ; Cochran 1977) ; "
         "log-normal, de N/C à N·C avec C = exp(z√ln(1+CV²)) (Burnham et al. 1987 ; Buckland et al. 2001) ; ou un "
-        "bootstrap stratifié des percentiles sur 2 000 rééchantillonnages (avec graine).\n\n"
+        "bootstrap stratifié des percentiles, remis à l'échelle, sur 2 000 rééchantillonnages (avec graine ; Rao & "
+        "Wu 1988), qui tient compte de la correction pour population finie.\n\n"
         "Variance : la formule de l'échantillonnage aléatoire simple, ou l'estimateur de voisinage local (Stevens & "
         "Olsen 2003) pour les grilles systématiques et les dispositions spatialement équilibrées, où la formule "
         "simple surestime la variance.\n\n"
@@ -1855,7 +1856,8 @@ TRANSLATIONS.update({
         "reduce y el informe lo indica.\n\n"
         "Intervalos: t con los grados de libertad de Satterthwaite (Satterthwaite 1946; Cochran 1977); log-normal, "
         "de N/C a N·C con C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); o un bootstrap "
-        "estratificado de percentiles con 2.000 remuestreos (con semilla).\n\n"
+        "estratificado de percentiles reescalado con 2.000 remuestreos (con semilla; Rao & Wu 1988), que incluye la "
+        "corrección por población finita.\n\n"
         "Varianza: la fórmula del muestreo aleatorio simple, o el estimador de vecindario local (Stevens & Olsen "
         "2003) para cuadrículas sistemáticas y disposiciones espacialmente equilibradas, donde la fórmula simple "
         "sobrestima la varianza.\n\n"
@@ -2166,15 +2168,20 @@ TRANSLATIONS.update({
         "Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland "
         "et al. 2001). Son asimétricos y nunca bajan de 0.",
     ),
-    "Intervals are stratified percentile bootstrap intervals: units are resampled with replacement within each "
-    "stratum, {b:,} times, from the recorded seed (Efron & Tibshirani 1993). The finite-population correction is "
-    "not applied to them.": (
-        "Les intervalles sont des intervalles bootstrap stratifiés des percentiles : les unités sont rééchantillonnées "
-        "avec remise dans chaque strate, {b:,} fois, à partir de la graine enregistrée (Efron & Tibshirani 1993). La "
-        "correction pour population finie ne leur est pas appliquée.",
-        "Los intervalos son intervalos bootstrap estratificados de percentiles: las unidades se remuestrean con "
-        "reposición dentro de cada estrato, {b:,} veces, a partir de la semilla registrada (Efron & Tibshirani "
-        "1993). No se les aplica la corrección por población finita.",
+    "Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded "
+    "seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's "
+    "estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the "
+    "finite-population correction when it is asked for (Rao & Wu 1988; Efron & Tibshirani 1993).": (
+        "Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} "
+        "rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées "
+        "avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte "
+        "que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour "
+        "population finie quand elle est demandée (Rao & Wu 1988 ; Efron & Tibshirani 1993).",
+        "Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} "
+        "remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su "
+        "densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían "
+        "tanto como indica la varianza estratificada, con la corrección por población finita cuando se pide "
+        "(Rao & Wu 1988; Efron & Tibshirani 1993).",
     ),
     "Variances use the local neighbourhood estimator of Stevens & Olsen (2003): each unit and its three nearest "
     "units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For "

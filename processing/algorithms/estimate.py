@@ -52,6 +52,8 @@ REFERENCES = (
     "Introduction to Distance Sampling. Oxford University Press (log-normal intervals, combining CVs, "
     "bootstrap).",
     "Efron, B. & Tibshirani, R. J. (1993). An Introduction to the Bootstrap. Chapman & Hall.",
+    "Rao, J. N. K. & Wu, C. F. J. (1988). Resampling inference with complex survey data. Journal of the "
+    "American Statistical Association 83, 231-241 (the rescaled bootstrap).",
     "Stevens, D. L. & Olsen, A. R. (2003). Variance estimation for spatially balanced samples of "
     "environmental resources. Environmetrics 14, 593-610.",
     "Neyman, J. (1934). On the two different aspects of the representative method. Journal of the Royal "
@@ -130,7 +132,8 @@ class Estimate(PlotwiseAlgorithm):
             "then the frame shrinks, and the report says so.\n\n"
             "Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); "
             "log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. "
-            "2001); or a stratified percentile bootstrap of 2,000 resamples (seeded).\n\n"
+            "2001); or a rescaled stratified percentile bootstrap of 2,000 resamples (seeded; Rao & Wu 1988), "
+            "which carries the finite-population correction.\n\n"
             "Variance: the simple random sampling formula, or the local neighbourhood estimator "
             "(Stevens & Olsen 2003) for systematic grids and spatially balanced layouts, where the simple "
             "formula overstates the variance.\n\n"
@@ -612,10 +615,12 @@ class Estimate(PlotwiseAlgorithm):
                     "below 0 are shown as 0."),
             "lognormal": tr("Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. "
                             "1987; Buckland et al. 2001). They are asymmetric and never go below 0."),
-            "bootstrap": tr("Intervals are stratified percentile bootstrap intervals: units are resampled with "
-                            "replacement within each stratum, {b:,} times, from the recorded seed (Efron & "
-                            "Tibshirani 1993). The finite-population correction is not applied to them.").format(
-                b=result.n_bootstrap),
+            "bootstrap": tr("Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples "
+                            "drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement "
+                            "and their density is moved towards the stratum's estimate by the factor √(1 − f), so "
+                            "that the resamples vary as much as the stratified variance says, with the "
+                            "finite-population correction when it is asked for (Rao & Wu 1988; Efron & "
+                            "Tibshirani 1993).").format(b=result.n_bootstrap),
         }[result.ci_method])
         if result.variance_method == "local":
             report.paragraph(tr(

@@ -17,7 +17,8 @@ Detection probability p (from a separate study) divides the estimates and adds
 its squared CV (delta method, Seber 1982, §1.3.3). Confidence intervals: Student t
 with Satterthwaite's effective degrees of freedom (Cochran 1977, eq. 5.16),
 log-normal (Burnham et al. 1987; Buckland et al. 2001, eq. 3.71), or a
-stratified percentile bootstrap (Efron & Tibshirani 1993; Buckland et al. 2001).
+rescaled stratified percentile bootstrap (Rao & Wu 1988; Efron & Tibshirani 1993;
+Buckland et al. 2001), which carries the finite-population correction.
 
 Equation numbers of Cochran (1977) are given from memory; the formulas are written out.
 Nothing here imports the host.
@@ -702,7 +703,7 @@ def estimate_density(
             raise InputError(message("The bootstrap needs a random generator (rng)."))
         boot = stratified_bootstrap(
             y, a, code, n_strata, group, area_h, p, p_se, rng,
-            n_bootstrap=max(int(n_bootstrap), MIN_BOOTSTRAP), progress=progress,
+            n_bootstrap=max(int(n_bootstrap), MIN_BOOTSTRAP), progress=progress, fpc_h=fpc_h,
         )
     alpha = 1.0 - confidence
     for h in range(n_strata):
@@ -798,15 +799,29 @@ def _plan_next_survey(rows, overall, area_h, mean_a, s2_h, n_total, target_cv, c
 
 
 def stratified_bootstrap(y, a, code, n_strata, group, area_h, p, p_se, rng, n_bootstrap=MIN_BOOTSTRAP,
-                         progress=None, chunk_draws=4_000_000):
-    """Stratified bootstrap of the abundance: units resampled with replacement within strata.
+                         progress=None, chunk_draws=4_000_000, fpc_h=None):
+    """Rescaled stratified bootstrap of the abundance (Rao & Wu 1988).
 
-    Each resample draws n_h units with replacement from stratum h (from the
-    pooled units of its collapsed group for a one-unit stratum), recomputes
-    ``D_h = Σy/Σa`` and ``N = Σ A_h D_h``; with detection, each resample divides
-    by a p drawn from the beta distribution with mean p and standard deviation
-    se_p. Percentile intervals (Efron & Tibshirani 1993, ch. 13; Buckland et al.
-    2001, §3.7.5). The finite-population correction is not applied.
+    Each resample draws ``m_h = n_h - 1`` units with replacement from stratum h,
+    computes their density ``D*_h = Σy*/Σa*`` and rescales it about the
+    stratum's estimate: ``D~_h = D_h + λ_h (D*_h - D_h)`` with
+    ``λ_h = sqrt(m_h (1 - f_h) / (n_h - 1)) = sqrt(1 - f_h)`` (f_h the sampled
+    fraction when the finite-population correction is asked for, else 0).
+    The replicates' variance is then ``(1 - f_h) s_h² / (n_h ā_h²)``, the
+    textbook variance of the ratio estimator with its finite-population
+    correction (Cochran 1977, ch. 6 and §2.6), where the plain bootstrap of
+    n_h draws falls short by the factor (n_h - 1)/n_h
+    (Rao & Wu 1988, JASA 83:231-241, §2.2; Efron & Tibshirani 1993, ch. 13).
+    A one-unit stratum draws its one unit from the pooled units of its
+    collapsed group, without rescaling. ``N = Σ A_h D~_h``; with detection,
+    each resample divides by a p drawn from the beta distribution with mean p
+    and standard deviation se_p. Percentile intervals (Efron & Tibshirani
+    1993, ch. 13; Buckland et al. 2001, §3.7.5).
+
+    Parameters
+    ----------
+    fpc_h : numpy.ndarray, optional
+        ``1 - f_h`` per stratum (default: ones, no correction).
 
     Returns
     -------
@@ -817,19 +832,26 @@ def stratified_bootstrap(y, a, code, n_strata, group, area_h, p, p_se, rng, n_bo
     order = np.argsort(code, kind="stable")
     starts = np.searchsorted(code[order], np.arange(n_strata))
     ends = np.searchsorted(code[order], np.arange(n_strata), side="right")
+    fpc_h = np.ones(n_strata) if fpc_h is None else np.asarray(fpc_h, float)
     for h in range(n_strata):  # a loop over strata; the resamples are vectorised
         n = ends[h] - starts[h]
         pool = order[starts[h]:ends[h]]
-        if n == 1 and np.sum(group == group[h]) > 1:
-            pool = np.flatnonzero(np.isin(code, np.flatnonzero(group == group[h])))
-        rows_per_chunk = max(1, chunk_draws // max(n, 1))
         y_pool, a_pool = y[pool], a[pool]
-        equal_units = bool(np.all(a_pool == a_pool[0]))  # then Σa = n·a in every resample
+        if n >= 2:  # Rao & Wu (1988): n - 1 draws, rescaled about the stratum's estimate
+            draws, scale, centre = n - 1, math.sqrt(max(float(fpc_h[h]), 0.0)), y_pool.sum() / a_pool.sum()
+        else:  # one unit: one draw from the pooled units of its collapsed group
+            if np.sum(group == group[h]) > 1:
+                pool = np.flatnonzero(np.isin(code, np.flatnonzero(group == group[h])))
+                y_pool, a_pool = y[pool], a[pool]
+            draws, scale, centre = n, 1.0, 0.0
+        rows_per_chunk = max(1, chunk_draws // max(draws, 1))
+        equal_units = bool(np.all(a_pool == a_pool[0]))  # then Σa = m·a in every resample
         for b0 in range(0, n_bootstrap, rows_per_chunk):
             b1 = min(n_bootstrap, b0 + rows_per_chunk)
-            pick = rng.integers(0, pool.size, size=(b1 - b0, n), dtype=np.int32 if pool.size < 2**31 else np.int64)
-            surveyed = n * a_pool[0] if equal_units else a_pool[pick].sum(axis=1)
-            per_stratum[b0:b1, h] = y_pool[pick].sum(axis=1) / surveyed
+            pick = rng.integers(0, pool.size, size=(b1 - b0, draws),
+                                dtype=np.int32 if pool.size < 2**31 else np.int64)
+            surveyed = draws * a_pool[0] if equal_units else a_pool[pick].sum(axis=1)
+            per_stratum[b0:b1, h] = centre + scale * (y_pool[pick].sum(axis=1) / surveyed - centre)
         if progress is not None and progress(0.2 + 0.7 * (h + 1) / n_strata):
             raise Cancelled()
     per_stratum *= area_h
