@@ -255,8 +255,8 @@ class Stratify(PlotwiseAlgorithm):
             header += [tr("{name} mean").format(name=name) + u, tr("{name} SD").format(name=name) + u]
         rows = []
         for h in range(k):
-            row = [h + 1, self.translate_message(result.labels[h]), float(result.area_ha[h]), 100 * float(result.area_ha[h]) / covered_ha,
-                   int(stats.count[h])]
+            row = [h + 1, self.translate_message(result.labels[h]), float(result.area_ha[h]),
+                   100 * float(result.area_ha[h]) / covered_ha, int(stats.count[h])]
             for c in range(len(names)):
                 row += [float(stats.mean[h, c]), float(stats.sd[h, c])]
             rows.append(row)
@@ -325,7 +325,8 @@ class Stratify(PlotwiseAlgorithm):
                    "covariate).").format(name=names[0]))
 
         report.section(tr("Map"))
-        report.figure(self._map(shapes, frame_polygons, [self.translate_message(label) for label in result.labels]), tr("Strata within the sampling frame"))
+        labels = [self.translate_message(label) for label in result.labels]
+        report.figure(self._map(shapes, frame_polygons, labels), tr("Strata within the sampling frame"))
 
         report.section(tr("Coverage"))
         cell = result.grid.cell_area
