@@ -26,6 +26,7 @@ from shapely.geometry.base import BaseGeometry
 from shapely.ops import unary_union
 
 from .errors import Cancelled, InputError, message
+from .geometry import without_slivers
 from .geometry_types import polygonal_part, valid_polygonal
 
 #: Order in which the rules are applied, with the words used in messages.
@@ -251,6 +252,9 @@ def build_frame(study_area, exclusions=None, mask=None, edge_buffer=0.0, progres
             removed = dissolve(geoms)
             if not removed.is_empty:
                 frame = polygonal_part(frame.difference(removed))
+        # an overlay leaves slivers where edges nearly coincide (e.g. layers reprojected from other CRS):
+        # parts under 1 m² are no frame, and count as lost to the rule that cut them off
+        frame, _ = without_slivers(frame)
         after = float(frame.area) if not frame.is_empty else 0.0
         losses.append(FrameLoss(rule, _RULE_LABEL[rule], before - after))
         if frame.is_empty or after <= 0.0:

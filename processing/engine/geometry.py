@@ -141,6 +141,49 @@ def repair_polygonal(geometry):
     return Repaired(valid_polygonal(geometry), True)
 
 
+#: polygons (or parts) smaller than this many square metres are slivers: left-overs of overlays and
+#: reprojection, too small for any sample unit (our choice; a real stratum is thousands of m²)
+SLIVER_AREA = 1.0
+
+
+def without_slivers(geometry, min_area=SLIVER_AREA):
+    """``geometry`` without its polygon parts of less than ``min_area`` (m²), and the area removed.
+
+    Returns
+    -------
+    (Polygon or MultiPolygon, float)
+        The kept parts (an empty Polygon when none is left) and the removed area.
+    """
+    parts = polygons_of(geometry)
+    kept = [p for p in parts if p.area >= min_area]
+    if len(kept) == len(parts):
+        return geometry, 0.0
+    return as_polygonal(kept), float(sum(p.area for p in parts if p.area < min_area))
+
+
+def overlapping_pairs(geometries, min_area=SLIVER_AREA):
+    """Pairs of polygonal geometries that overlap by ``min_area`` (m²) or more.
+
+    Only pairs whose bounding boxes meet are intersected; touching along an edge
+    is no overlap.
+
+    Returns
+    -------
+    list of (i, j, area)
+        Indexes into ``geometries`` (i < j) and the area they share.
+    """
+    bounds = np.array([g.bounds if not g.is_empty else (np.inf, np.inf, -np.inf, -np.inf) for g in geometries],
+                      dtype=float).reshape(-1, 4)
+    meet = ((bounds[:, None, 0] <= bounds[None, :, 2]) & (bounds[None, :, 0] <= bounds[:, None, 2])
+            & (bounds[:, None, 1] <= bounds[None, :, 3]) & (bounds[None, :, 1] <= bounds[:, None, 3]))
+    pairs = []
+    for i, j in zip(*np.nonzero(np.triu(meet, 1))):
+        area = float(geometries[i].intersection(geometries[j]).area)
+        if area >= min_area:
+            pairs.append((int(i), int(j), area))
+    return pairs
+
+
 def inward_buffer(geometry, distance, quad_segs=16):
     """The part of ``geometry`` farther than ``distance`` from its boundary.
 

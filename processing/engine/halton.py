@@ -44,7 +44,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from .errors import Cancelled
+from .errors import Cancelled, InputError, message
 from .geometry import contains_xy, triangle_cover, uniform_points
 
 BASES = (2, 3)
@@ -204,7 +204,11 @@ def balanced_acceptance_sample(region, n, rng, box=None, accept=None, progress=N
         return BalancedDraw(np.zeros((0, 2)), np.zeros(0, dtype=np.int64), (0, 0), (0.0, 0.0), (minx, miny, maxx, maxy))
     if cover is None:
         cover = triangle_cover(region)
-    first = uniform_points(cover, region, 1, rng)[0]
+    first = uniform_points(cover, region, 1, rng)
+    if len(first) == 0:  # a region too thin for its coordinates to resolve (slivers are removed before)
+        raise InputError(message("No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a "
+                                 "sample unit. Check the frame for slivers.", area=float(region.area)))
+    first = first[0]
     start, shift = region_start((first - origin) / span)
     if max_tries is None:
         max_tries = 1000 * n + 10**6

@@ -104,6 +104,10 @@ _TOO_SMALL = {  # (whole frame?, shape)
                    "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
                    "INSIDE, or merge the stratum with a neighbour.",
 }
+# strata overlapping by more than this share of the smaller one are an error, less a warning (our choice)
+OVERLAP_ERROR_SHARE = 0.001
+# most candidate points a systematic grid may test in one stratum (about 0.5 GB of work arrays)
+MAX_GRID_CANDIDATES = 5_000_000
 PRIMARY, RESERVE = "primary", "reserve"
 # GPS waypoint descriptions: one template per unit shape and role (and transect end), so that a
 # translator sees each whole phrase; the English text is what the GPX files always carried
@@ -448,7 +452,7 @@ def prepare_strata(
     warnings = []
     if n_values is None and (n_units is None or int(n_units) < 1):
         raise InputError(message("Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1)."))
-    keep, skipped, repaired = [], [], []
+    keep, skipped, slivers, repaired = [], [], [], []
     for i, g in enumerate(geometries):
         fixed = geo.repair_polygonal(g)
         if fixed.was_invalid:
@@ -456,14 +460,24 @@ def prepare_strata(
         if fixed.geometry.is_empty or fixed.geometry.area <= 0:
             skipped.append(feature_ids[i])
             continue
-        keep.append((i, fixed.geometry))
+        kept, _ = geo.without_slivers(fixed.geometry)  # sliver parts would only stretch the grid's extent
+        if kept.is_empty:
+            slivers.append(feature_ids[i])
+            continue
+        keep.append((i, kept))
     if repaired:
         warnings.append(message("Invalid geometry was repaired for feature(s) {ids}; check their outlines.",
                                 ids=_ids(repaired)))
     if skipped:
         warnings.append(message("Empty or zero-area feature(s) {ids} were skipped.", ids=_ids(skipped)))
+    if slivers:
+        warnings.append(message("Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an "
+                                "overlay or a reprojection) and were skipped.", ids=_ids(slivers),
+                                area=geo.SLIVER_AREA))
+    skipped += slivers
     if not keep:
-        raise InputError(message("The frame has no polygon with an area: every feature is empty or has zero area."))
+        raise InputError(message("The frame has no polygon of {area:g} m² or more: every feature is empty, has zero "
+                                 "area or is a sliver.", area=geo.SLIVER_AREA))
     if n_values is not None:  # checked on the features kept (a skipped empty feature may lack a value)
         n_feat = np.full(len(geometries), -1, dtype=int)
         kept = [i for i, _ in keep]
@@ -492,6 +506,7 @@ def prepare_strata(
         merged.append(g)
         areas.append(float(g.area))
         fids.append(tuple(feature_ids[i] for i, _ in members))
+    warnings += _overlap_problems(keys, merged)
     if n_values is not None:
         counts = []
         for key, members in zip(keys, (groups[k] for k in keys)):
@@ -552,6 +567,31 @@ def prepare_strata(
         cover = geo.triangle_cover(region, cover_method, expected_points=draws) if eff > 0 else geo.triangle_cover(None)
         out.append(PreparedStratum(key, label, g, area, region, eff, cover, int(n), ids))
     return PreparedFrame(tuple(out), tuple(warnings), tuple(skipped), tuple(repaired))
+
+
+def _overlap_problems(keys, geometries):
+    """Warnings for strata that overlap a little; an error when they overlap by more than a trace.
+
+    A location belongs to one stratum: where two overlap, units are drawn in both and their
+    weights count the shared area twice. An overlap above ``OVERLAP_ERROR_SHARE`` of the
+    smaller stratum is an error; a smaller one (digitising noise) a warning.
+    """
+    if len(keys) < 2:
+        return []
+    pairs = geo.overlapping_pairs(geometries)
+    if not pairs:
+        return []
+    text = "; ".join(f"{keys[i]} / {keys[j]}: {area:,.1f} m²" for i, j, area in pairs[:10])
+    if len(pairs) > 10:
+        text += " …"
+    worst = max(area / min(geometries[i].area, geometries[j].area) for i, j, area in pairs)
+    if worst > OVERLAP_ERROR_SHARE:
+        raise InputError(message(
+            "Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be "
+            "drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the "
+            "host's Difference or Union tools) and run again.", pairs=text))
+    return [message("Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons "
+                    "disjoint if this is more than digitising noise.", pairs=text)]
 
 
 # ----------------------------------------------------------------------------
@@ -732,6 +772,13 @@ def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING):
     c = np.array([(minx + maxx) / 2.0, (miny + maxy) / 2.0])
     half = math.hypot(maxx - minx, maxy - miny) / 2.0
     m = int(math.ceil(half / s)) + 1
+    if (2 * m + 1) ** 2 > MAX_GRID_CANDIDATES:
+        raise InputError(message(
+            "A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over "
+            "{width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or "
+            "far too small for the number of units: check the frame for slivers, ask for fewer units, or use "
+            "another design.", spacing=s, area=float(region.area), width=maxx - minx, height=maxy - miny,
+            count=(2 * m + 1) ** 2))
     idx = np.arange(-m, m + 1, dtype=float)
     jj, ii = np.meshgrid(idx, idx, indexing="ij")  # j rows, i columns
     def points(o1, o2):

@@ -167,3 +167,16 @@ def test_frame_result_is_frozen():
     result = fr.build_frame(STUDY)
     with pytest.raises(Exception):
         result.area_m2 = 0.0
+
+
+def test_exclusion_slivers_left_by_a_reprojection_leave_nothing():
+    # the study square and the same square sent to WGS 84 and back (pyproj): their difference is
+    # slivers of floating-point noise, not frame
+    square = box(500000, 9000000, 504000, 9004000)
+    to_geo = pyproj.Transformer.from_crs("EPSG:32736", "EPSG:4326", always_xy=True)
+    back = pyproj.Transformer.from_crs("EPSG:4326", "EPSG:32736", always_xy=True)
+    round_trip = transform(back.transform, transform(to_geo.transform, square))
+    slightly_off = transform(lambda x, y: (x + 1e-7 * (y - 9000000) / 4000, y), square)  # a 0.1 µm skew
+    for exclusion in (round_trip, slightly_off):
+        with pytest.raises(InputError, match="Nothing is left"):
+            fr.build_frame(square, exclusions=[exclusion])

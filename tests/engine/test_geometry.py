@@ -108,3 +108,16 @@ def test_polygons_of_collections():
     mp = MultiPolygon([box(0, 0, 1, 1), box(2, 0, 3, 1)])
     assert len(geo.polygons_of(mp)) == 2
     assert geo.as_polygonal([]).is_empty
+
+
+def test_without_slivers_and_overlapping_pairs_against_shapely():
+    real, sliver = box(0, 0, 10, 10), box(20, 0, 20.001, 100)  # 0.1 m²
+    kept, removed = geo.without_slivers(MultiPolygon([real, sliver]))
+    assert kept.equals(real) and removed == pytest.approx(sliver.area)  # shapely areas
+    assert geo.without_slivers(real) == (real, 0.0)
+    shapes = [box(0, 0, 10, 10), box(5, 0, 15, 10), box(10, 0, 20, 10), box(100, 100, 110, 110)]
+    pairs = geo.overlapping_pairs(shapes)
+    expected = [(i, j, shapes[i].intersection(shapes[j]).area) for i in range(4) for j in range(i + 1, 4)
+                if shapes[i].intersection(shapes[j]).area >= 1.0]  # shapely's intersection as the oracle
+    assert [p[:2] for p in pairs] == [e[:2] for e in expected]  # (0, 1) and (1, 2); (0, 2) only touch
+    np.testing.assert_allclose([p[2] for p in pairs], [e[2] for e in expected])

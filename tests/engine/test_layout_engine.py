@@ -3,7 +3,7 @@ import numpy as np
 import pyproj
 import pytest
 from scipy.stats import qmc
-from shapely.geometry import Polygon, box
+from shapely.geometry import MultiPolygon, Polygon, box
 
 from plotwise.processing.engine import halton
 from plotwise.processing.engine import layout as L
@@ -185,3 +185,46 @@ def test_inside_warns_when_the_edge_band_is_large():
     assert f"Keeping units inside leaves {share:.0%} of the frame" in text
     wide = L.prepare_strata([box(0, 0, 5000, 5000)], n_units=5, spec=spec)
     assert not any("Keeping units inside" in str(w) for w in wide.warnings)
+
+
+# a reprojection sliver: a triangle 0.1 µm wide, far thinner than a double resolves at 500 km (invented)
+SLIVER = Polygon([(504000, 9000000), (504000.0000001, 9000000), (504000, 9000666.667)])
+
+
+@pytest.mark.parametrize("design", [L.SIMPLE_RANDOM, L.SYSTEMATIC_GRID, L.SPATIALLY_BALANCED])
+def test_slivers_are_skipped_with_a_warning(design):
+    spec = L.LayoutSpec(design=design)
+    frame = L.prepare_strata([box(500000, 9000000, 501000, 9001000), SLIVER], feature_ids=[7, 8], n_units=10,
+                             spec=spec)
+    assert len(frame.strata) == 1 and frame.skipped_ids == (8,)
+    assert any("8" in w and "sliver" in w for w in frame.warnings)
+    with pytest.raises(InputError, match="sliver"):  # nothing but a sliver: an error, not a traceback
+        L.layout_units([SLIVER], spec, np.random.default_rng(1), n_units=10, crs=CRS)
+
+
+def test_sliver_parts_are_dropped_from_a_stratum():
+    real = box(500000, 9000000, 501000, 9001000)
+    far_sliver = Polygon([(520000, 9000000), (520000.001, 9000000), (520000, 9000500)])  # 0.25 m², 19 km away
+    frame = L.prepare_strata([MultiPolygon([real, far_sliver])], n_units=5, spec=L.LayoutSpec(design=L.SYSTEMATIC_GRID))
+    assert frame.strata[0].area == pytest.approx(real.area)  # shapely's area of the real part
+    assert frame.strata[0].region.bounds == real.bounds  # the grid spans the real part only
+
+
+def test_overlapping_strata_are_an_error_and_a_trace_of_overlap_a_warning():
+    a, b = box(0, 0, 1000, 1000), box(900, 0, 2000, 1000)  # 100 m x 1000 m shared
+    with pytest.raises(InputError, match="overlap") as err:
+        L.prepare_strata([a, b], strata=[1, 2], n_units=10)
+    assert "100,000.0 m²" in str(err.value)  # shapely: a.intersection(b).area == 1e5
+    c = box(999.5, 0, 2000, 1000)  # a 0.5 m x 1000 m seam: 0.05 % of the smaller stratum
+    frame = L.prepare_strata([a, c], strata=[1, 2], n_units=10)
+    assert any("overlap slightly" in w and "500.0 m²" in w for w in frame.warnings)
+    frame = L.prepare_strata([a, box(1000, 0, 2000, 1000)], strata=[1, 2], n_units=10)  # touching only
+    assert not any("overlap" in w for w in frame.warnings)
+
+
+def test_systematic_grid_on_a_hair_thin_stratum_is_an_error_not_a_memory_failure():
+    thin = box(0, 0, 50_000, 0.02)  # 1,000 m² spread over 50 km
+    frame = L.prepare_strata([thin], n_units=10, spec=L.LayoutSpec(design=L.SYSTEMATIC_GRID))
+    with pytest.raises(InputError, match="candidate points"):
+        L.draw_layout(frame, L.LayoutSpec(design=L.SYSTEMATIC_GRID), np.random.default_rng(1))
+
