@@ -14,7 +14,6 @@ from qgis.core import (
     QgsProcessingParameterNumber,
 )
 from shapely.geometry import MultiPolygon, Polygon
-from shapely.ops import unary_union
 
 from ...plugin import compat
 from .. import bridge
@@ -294,6 +293,7 @@ class Estimate(PlotwiseAlgorithm):
                 layer=strata_name))
         feedback.setProgress(30)
         warnings = list(records.warnings) + list(strata_records.warnings)
+        already_pushed = len(warnings)  # bridge.read_features pushes its own warnings
         if one_stratum_note:
             warnings.append(one_stratum_note)
 
@@ -311,17 +311,18 @@ class Estimate(PlotwiseAlgorithm):
         keep = ~unused
         if stratum_field:
             unit_strata = np.array(attrs[stratum_field], dtype=object)
-            frame_geoms = {}
-            for key, geometry in zip(strata_records.attributes[strata_id_field], strata_records.geometries):
-                label = estimation.stratum_label(key)
-                if label is None:
-                    continue
-                frame_geoms.setdefault(label, []).append(geometry)
+            strata_ids = strata_records.attributes[strata_id_field]
         else:
             unit_strata = np.full(len(records), ONE_STRATUM, dtype=object)
-            frame_geoms = {ONE_STRATUM: list(strata_records.geometries)}
-        frame_geoms = {k: unary_union(v) for k, v in frame_geoms.items()}
-        stratum_areas = {k: g.area / m2_per_unit for k, g in frame_geoms.items()}
+            strata_ids = [ONE_STRATUM] * len(strata_records)
+        # one polygon per stratum; overlapping strata and polygons without an id are errors or warnings
+        with self.engine_errors():
+            frame = estimation.frame_strata(
+                strata_ids, strata_records.geometries, strata_records.fids.tolist(), m2_per_unit=m2_per_unit,
+                unit=UNIT_NAMES[area_unit], layer=strata_name, field=strata_id_field or "",
+                drop_unlabelled=settings["drop_empty_strata"])
+        warnings.extend(self.translate_message(w) for w in frame.warnings)
+        frame_geoms, stratum_areas = frame.geometries, frame.areas
 
         # a one-unit stratum is collapsed with a stratum that touches it on the map
         frame_labels = list(frame_geoms)
@@ -358,7 +359,7 @@ class Estimate(PlotwiseAlgorithm):
                 progress=self.progress_callback(feedback, 30, 80), **settings,
             )
         warnings.extend(self.translate_message(w) for w in result.warnings)
-        self.push_warnings(feedback, warnings)
+        self.push_warnings(feedback, warnings[already_pushed:])
 
         # -- write -----------------------------------------------------------------
         fields = bridge.make_fields(OUTPUT_FIELDS)
@@ -547,7 +548,7 @@ class Estimate(PlotwiseAlgorithm):
             "The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like "
             "the sampling distribution of a count-based estimate, and suits small samples of clumped animals "
             "better. Choose the method before looking at the results."))
-        if result.bootstrap_totals is not None:
+        if result.bootstrap_totals is not None and np.all(np.isfinite(result.bootstrap_totals)):
             edges = np.histogram_bin_edges(result.bootstrap_totals, bins=40)
             frequencies, _ = np.histogram(result.bootstrap_totals, bins=edges)
             report.figure(
@@ -637,6 +638,12 @@ class Estimate(PlotwiseAlgorithm):
                 "the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual "
                 "variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as "
                 "variance, so their standard errors tend to be too large."))
+            if result.ci_method == "bootstrap":
+                report.paragraph(tr(
+                    "In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled "
+                    "units of its group (each unit's count minus the group's density times the unit's area), adds "
+                    "them to its own estimate and rescales them, so that its resamples are centred on its own "
+                    "estimate and vary as much as the collapsed-strata variance says."))
         if result.detection_p < 1 or result.detection_se > 0:
             report.paragraph(tr(
                 "Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p "

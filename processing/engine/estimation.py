@@ -28,8 +28,11 @@ import math
 
 import numpy as np
 from scipy import special
+from shapely.ops import unary_union
 
 from .errors import Cancelled, InputError, Message, message
+from .geometry import OVERLAP_ERROR_SHARE, SLIVER_AREA, listed_overlaps, overlapping_pairs, worst_overlap_share
+from .geometry_types import polygonal_part
 from .variance import collapse_single_unit_strata, local_neighbourhood_variance
 
 CI_T, CI_LOGNORMAL, CI_BOOTSTRAP = "t", "lognormal", "bootstrap"
@@ -185,6 +188,20 @@ def lognormal_interval(estimate, cv, confidence):
     z = special.ndtri(0.5 + confidence / 2.0)
     c = math.exp(z * math.sqrt(math.log1p(cv * cv)))
     return float(estimate / c), float(estimate * c)
+
+
+def percentile_interval(replicates, confidence):
+    """Bootstrap percentile interval, the ``(1 ∓ confidence)/2`` quantiles of the replicates.
+
+    Efron & Tibshirani (1993), ch. 13. As for :func:`t_interval`, a lower limit
+    below 0 (replicates of collapsed strata may go below 0) is reported as 0.
+    NaN when a replicate is NaN (a stratum without variance).
+    """
+    replicates = np.asarray(replicates, dtype=float)
+    if not np.all(np.isfinite(replicates)):
+        return float("nan"), float("nan")
+    lo, hi = np.quantile(replicates, [0.5 - confidence / 2.0, 0.5 + confidence / 2.0])
+    return max(0.0, float(lo)), float(hi)
 
 
 def detection_corrected(estimate, variance, p, p_se):
@@ -359,6 +376,164 @@ def surveyed_areas(geometries, area_values=None, fixed_area=0.0, strip_width=0.0
         areas = np.where(np.isnan(areas) | (areas <= 0), fixed_area, areas)
     areas[~(areas > 0)] = np.nan
     return areas
+
+
+# --------------------------------------------------------------------------- the frame
+
+
+@dataclass(frozen=True)
+class StrataFrame:
+    """The strata the estimate speaks for: one polygon and one area per stratum id.
+
+    Attributes
+    ----------
+    geometries : dict
+        Stratum label → its polygons dissolved into one (Multi)Polygon (CRS units).
+    areas : dict
+        Stratum label → area in the caller's area unit.
+    overlaps : tuple of (str, str, float)
+        Pairs of strata whose polygons overlap, with the area they share (area unit).
+    overlap_area : float
+        The area counted in more than one stratum, ``Σ A_h − A(∪ strata)`` (area unit).
+    unlabelled_ids : tuple
+        Feature ids of the polygons without a stratum id, which were left out.
+    unlabelled_area : float
+        The area that left the frame with them (the part no other stratum covers).
+    warnings : tuple of Message
+    """
+
+    geometries: dict
+    areas: dict
+    overlaps: tuple = ()
+    overlap_area: float = 0.0
+    unlabelled_ids: tuple = ()
+    unlabelled_area: float = 0.0
+    warnings: tuple = ()
+
+
+def frame_strata(stratum_ids, geometries, feature_ids=None, *, m2_per_unit=1.0, unit="m²", layer="", field="",
+                 drop_unlabelled=False):
+    """The frame's strata from the strata polygons, checked for overlaps and missing ids.
+
+    Polygons with the same id are one stratum (dissolved, so they may overlap
+    each other). The estimate speaks for the land the strata cover, and
+    ``N = Σ D_h A_h`` (Cochran 1977, ch. 5) holds only when the strata do not
+    overlap: land in two strata would be counted twice. So:
+
+    * two strata that share more than ``OVERLAP_ERROR_SHARE`` of the smaller
+      one are an error; a smaller overlap (digitising noise) is a warning. The
+      rule and the overlap test (:func:`geometry.overlapping_pairs`, overlaps
+      of ``SLIVER_AREA`` m² or more) are the layout's, so that strata accepted
+      for the layout are accepted here. Both name the pairs of strata, the area
+      each pair shares and the area counted twice, ``Σ A_h − A(∪ strata)``;
+    * a polygon whose id is empty (NULL) belongs to no stratum, so its land
+      would leave the frame unseen. That is an error naming the feature ids,
+      unless ``drop_unlabelled`` (the caller's choice to leave out strata with no
+      surveyed unit: the frame then shrinks), or unless other strata cover it
+      (less than ``SLIVER_AREA`` m² is left); then a warning.
+
+    Parameters
+    ----------
+    stratum_ids : sequence
+        Stratum id of each polygon (compared as text, see :func:`stratum_label`).
+    geometries : sequence of Polygon or MultiPolygon
+        In a projected CRS in metres.
+    feature_ids : sequence, optional
+        Ids named in messages (default 0..n−1).
+    m2_per_unit : float
+        Square metres per area unit of the result (1e4 for hectares, 1e6 for km²).
+    unit : str
+        The area unit's symbol, for messages.
+    layer, field : str
+        The strata layer and its id field, for messages.
+    drop_unlabelled : bool
+
+    Returns
+    -------
+    StrataFrame
+
+    Raises
+    ------
+    InputError
+        For overlapping strata or polygons without an id, as above.
+    """
+    geometries = list(geometries)
+    feature_ids = list(range(len(geometries))) if feature_ids is None else list(feature_ids)
+    parts, unlabelled, unlabelled_ids = {}, [], []
+    for value, geometry, fid in zip(stratum_ids, geometries, feature_ids):
+        if geometry is None or geometry.is_empty:
+            continue
+        label = stratum_label(value)
+        if label is None:
+            unlabelled.append(geometry)
+            unlabelled_ids.append(fid)
+        else:
+            parts.setdefault(label, []).append(geometry)
+    order = sorted(parts, key=natural_key)
+    merged = {k: polygonal_part(parts[k][0] if len(parts[k]) == 1 else unary_union(parts[k])) for k in order}
+    areas_m2 = {k: float(g.area) for k, g in merged.items()}
+    warnings = []
+
+    lost_m2 = 0.0
+    if unlabelled:
+        lost = unary_union(unlabelled)
+        if merged:
+            lost = lost.difference(unary_union(list(merged.values())))
+        lost_m2 = float(lost.area)
+        values = dict(layer=layer, field=field, ids=_id_list(unlabelled_ids), area=lost_m2 / m2_per_unit, unit=unit)
+        if lost_m2 >= SLIVER_AREA and not drop_unlabelled:
+            raise InputError(
+                message("Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. "
+                        "These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would "
+                        "silently speak for a smaller frame. Give each polygon the id of its stratum, delete the "
+                        "polygons that are not part of the frame, or choose to leave out strata with no surveyed "
+                        "unit (the frame then shrinks).", **values),
+                ids=unlabelled_ids,
+            )
+        warnings.append(message(
+            "Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These "
+            "polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. "
+            "To keep them in the frame, give each polygon the id of its stratum.", **values))
+    if not merged:
+        raise InputError(
+            message("Layer '{layer}': no polygon has a stratum id in the field '{field}'. Fill in the stratum ids, "
+                    "or choose the field that holds them.", layer=layer, field=field),
+            ids=unlabelled_ids,
+        )
+
+    overlaps, overlap_m2 = (), 0.0
+    shapes = [merged[k] for k in order]
+    pairs = overlapping_pairs(shapes)
+    if pairs:
+        overlaps = tuple((order[i], order[j], shared / m2_per_unit) for i, j, shared in pairs)
+        covered_m2 = float(unary_union(shapes).area)
+        overlap_m2 = max(sum(areas_m2.values()) - covered_m2, 0.0)  # land in three strata counts twice over
+        listed = listed_overlaps(order, pairs, m2_per_unit, unit, limit=MAX_LISTED_IDS)
+        values = dict(layer=layer, pairs=listed, area=overlap_m2 / m2_per_unit, unit=unit,
+                      percent=100.0 * overlap_m2 / covered_m2, covered=covered_m2 / m2_per_unit)
+        if worst_overlap_share(shapes, pairs) > OVERLAP_ERROR_SHARE:
+            raise InputError(
+                message("Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} "
+                        "({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more "
+                        "than one stratum, which inflates the frame area and the abundance. Fix the strata polygons "
+                        "so that they do not overlap: each piece of land belongs to one stratum only (cut each "
+                        "overlap out of all strata but one, or redraw the shared edges).", **values),
+                ids=sorted({k for pair in overlaps for k in pair[:2]}, key=natural_key),
+            )
+        warnings.append(message(
+            "Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the "
+            "{covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the "
+            "abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared "
+            "edges, or cut each overlap out of all strata but one).", **values))
+    return StrataFrame(
+        geometries=merged,
+        areas={k: a / m2_per_unit for k, a in areas_m2.items()},
+        overlaps=overlaps,
+        overlap_area=overlap_m2 / m2_per_unit,
+        unlabelled_ids=tuple(unlabelled_ids),
+        unlabelled_area=lost_m2 / m2_per_unit,
+        warnings=tuple(warnings),
+    )
 
 
 # --------------------------------------------------------------------------- the estimator
@@ -718,7 +893,7 @@ def estimate_density(
     intervals = [(CI_T,) + t_interval(est, se_total, df, confidence),
                  (CI_LOGNORMAL,) + lognormal_interval(est, cv, confidence)]
     if boot is not None:
-        intervals.append((CI_BOOTSTRAP,) + tuple(float(v) for v in np.quantile(boot[0], [alpha / 2, 1 - alpha / 2])))
+        intervals.append((CI_BOOTSTRAP,) + percentile_interval(boot[0], confidence))
     overall_sd = float(np.std(y, ddof=1)) if y.size > 1 else float("nan")
     overall = _row(OVERALL, total_area, int(n_h.sum()), int(missing.sum()), float(y.mean()) if y.size else float("nan"),
                    overall_sd, est, var, cv, df, ci_method, confidence, None if boot is None else boot[0], alpha, ())
@@ -767,7 +942,7 @@ def _row(label, area, n, n_missing, mean_c, sd_c, abund, var, cv, df, ci_method,
     elif ci_method == CI_LOGNORMAL:
         lo, hi = lognormal_interval(abund, cv, confidence)
     else:
-        lo, hi = (float(v) for v in np.quantile(replicates, [alpha / 2.0, 1.0 - alpha / 2.0]))
+        lo, hi = percentile_interval(replicates, confidence)
     return StratumEstimate(
         stratum=label, area=float(area), n=int(n), n_missing=int(n_missing), mean_c=float(mean_c),
         sd_c=float(sd_c), dens=float(abund / area), dens_se=se / area, dens_lo=lo / area, dens_hi=hi / area,
@@ -800,26 +975,43 @@ def _plan_next_survey(rows, overall, area_h, mean_a, s2_h, n_total, target_cv, c
 
 def stratified_bootstrap(y, a, code, n_strata, group, area_h, p, p_se, rng, n_bootstrap=MIN_BOOTSTRAP,
                          progress=None, chunk_draws=4_000_000, fpc_h=None):
-    """Rescaled stratified bootstrap of the abundance (Rao & Wu 1988).
+    """Rescaled stratified bootstrap of the abundance (Rao & Wu 1988), collapsed strata included.
 
-    Each resample draws ``m_h = n_h - 1`` units with replacement from stratum h,
-    computes their density ``D*_h = Σy*/Σa*`` and rescales it about the
-    stratum's estimate: ``D~_h = D_h + λ_h (D*_h - D_h)`` with
-    ``λ_h = sqrt(m_h (1 - f_h) / (n_h - 1)) = sqrt(1 - f_h)`` (f_h the sampled
-    fraction when the finite-population correction is asked for, else 0).
-    The replicates' variance is then ``(1 - f_h) s_h² / (n_h ā_h²)``, the
+    A stratum of its own (n_h ≥ 2, not collapsed) draws ``m_h = n_h - 1`` of its
+    units with replacement, computes their density ``D*_h = Σy*/Σa*`` and
+    rescales it about the stratum's estimate: ``D~_h = D_h + λ_h (D*_h - D_h)``
+    with ``λ_h = sqrt(m_h (1 - f_h) / (n_h - 1)) = sqrt(1 - f_h)`` (f_h the
+    sampled fraction when the finite-population correction is asked for, else
+    0). The replicates' variance is then ``(1 - f_h) s_h² / (n_h ā_h²)``, the
     textbook variance of the ratio estimator with its finite-population
     correction (Cochran 1977, ch. 6 and §2.6), where the plain bootstrap of
     n_h draws falls short by the factor (n_h - 1)/n_h
     (Rao & Wu 1988, JASA 83:231-241, §2.2; Efron & Tibshirani 1993, ch. 13).
-    A one-unit stratum draws its one unit from the pooled units of its
-    collapsed group, without rescaling. ``N = Σ A_h D~_h``; with detection,
-    each resample divides by a p drawn from the beta distribution with mean p
-    and standard deviation se_p. Percentile intervals (Efron & Tibshirani
-    1993, ch. 13; Buckland et al. 2001, §3.7.5).
+
+    A stratum collapsed into a group G for its variance (it, or a partner, has
+    one unit: Cochran 1977, §5A.12) resamples the residuals of the group's
+    pooled ratio ``R_G = Σ_G y / Σ_G a``, ``e_j = y_j - R_G a_j`` (which sum to
+    0), and adds them to its own estimate::
+
+        D~_h = D_h + λ_G · Σ_{k=1..n_h} e*_k / Σ_h a,   λ_G = sqrt((1 - f_h) n_G / (n_G - 1))
+
+    with n_h draws from the n_G units of the group. The replicates are centred
+    on ``D_h`` (the mean of the e_j is 0) and their variance is
+    ``(1 - f_h) s_G² / (n_h ā_h²)`` with ``s_G² = Σ_G e_j² / (n_G - 1)``: the
+    pooled collapsed-strata variance that the t interval uses, with the same
+    rescaling as above (λ² corrects the residuals' divisor n_G to n_G - 1). A
+    one-unit stratum that could not be collapsed (it is the only stratum) has
+    no variance: its replicates are NaN.
+
+    ``N = Σ A_h D~_h``; with detection, each resample divides by a p drawn
+    from the beta distribution with mean p and standard deviation se_p.
+    Percentile intervals (Efron & Tibshirani 1993, ch. 13; Buckland et al.
+    2001, §3.7.5).
 
     Parameters
     ----------
+    group : numpy.ndarray of int
+        Variance group of each stratum (strata sharing a number were collapsed).
     fpc_h : numpy.ndarray, optional
         ``1 - f_h`` per stratum (default: ones, no correction).
 
@@ -833,25 +1025,38 @@ def stratified_bootstrap(y, a, code, n_strata, group, area_h, p, p_se, rng, n_bo
     starts = np.searchsorted(code[order], np.arange(n_strata))
     ends = np.searchsorted(code[order], np.arange(n_strata), side="right")
     fpc_h = np.ones(n_strata) if fpc_h is None else np.asarray(fpc_h, float)
+    group = np.asarray(group)
+    strata_in_group = np.bincount(group)[group]
     for h in range(n_strata):  # a loop over strata; the resamples are vectorised
-        n = ends[h] - starts[h]
-        pool = order[starts[h]:ends[h]]
-        y_pool, a_pool = y[pool], a[pool]
-        if n >= 2:  # Rao & Wu (1988): n - 1 draws, rescaled about the stratum's estimate
-            draws, scale, centre = n - 1, math.sqrt(max(float(fpc_h[h]), 0.0)), y_pool.sum() / a_pool.sum()
-        else:  # one unit: one draw from the pooled units of its collapsed group
-            if np.sum(group == group[h]) > 1:
-                pool = np.flatnonzero(np.isin(code, np.flatnonzero(group == group[h])))
-                y_pool, a_pool = y[pool], a[pool]
-            draws, scale, centre = n, 1.0, 0.0
+        own = order[starts[h]:ends[h]]
+        n = own.size
+        f_scale = max(float(fpc_h[h]), 0.0)
+        estimate = y[own].sum() / a[own].sum()
+        collapsed = strata_in_group[h] > 1
+        if collapsed:  # residuals of the group's pooled ratio, added to the stratum's own estimate
+            pool = np.flatnonzero(group[code] == group[h])
+            residuals = y[pool] - (y[pool].sum() / a[pool].sum()) * a[pool]
+            residuals -= residuals.mean()  # 0 up to rounding
+            draws = n
+            scale = math.sqrt(f_scale * pool.size / (pool.size - 1)) / a[own].sum()
+        elif n >= 2:  # Rao & Wu (1988): n - 1 draws, rescaled about the stratum's estimate
+            pool = own
+            y_pool, a_pool = y[pool], a[pool]
+            draws, scale = n - 1, math.sqrt(f_scale)
+            equal_units = bool(np.all(a_pool == a_pool[0]))  # then Σa = m·a in every resample
+        else:  # the only stratum, with one unit: no variance, no interval
+            per_stratum[:, h] = np.nan
+            continue
         rows_per_chunk = max(1, chunk_draws // max(draws, 1))
-        equal_units = bool(np.all(a_pool == a_pool[0]))  # then Σa = m·a in every resample
         for b0 in range(0, n_bootstrap, rows_per_chunk):
             b1 = min(n_bootstrap, b0 + rows_per_chunk)
             pick = rng.integers(0, pool.size, size=(b1 - b0, draws),
                                 dtype=np.int32 if pool.size < 2**31 else np.int64)
-            surveyed = draws * a_pool[0] if equal_units else a_pool[pick].sum(axis=1)
-            per_stratum[b0:b1, h] = centre + scale * (y_pool[pick].sum(axis=1) / surveyed - centre)
+            if collapsed:
+                per_stratum[b0:b1, h] = estimate + scale * residuals[pick].sum(axis=1)
+            else:
+                surveyed = draws * a_pool[0] if equal_units else a_pool[pick].sum(axis=1)
+                per_stratum[b0:b1, h] = estimate + scale * (y_pool[pick].sum(axis=1) / surveyed - estimate)
         if progress is not None and progress(0.2 + 0.7 * (h + 1) / n_strata):
             raise Cancelled()
     per_stratum *= area_h

@@ -48,6 +48,7 @@ from scipy.spatial import Delaunay
 from shapely.geometry import MultiPolygon, Polygon
 from shapely.geometry.base import BaseGeometry
 
+from .errors import Message, message
 from .geometry_types import polygonal_part, valid_polygonal
 
 SHAPELY_2 = int(shapely.__version__.split(".")[0]) >= 2
@@ -182,6 +183,32 @@ def overlapping_pairs(geometries, min_area=SLIVER_AREA):
         if area >= min_area:
             pairs.append((int(i), int(j), area))
     return pairs
+
+
+#: strata sharing more than this share of the smaller one are an error; less (digitising noise), a warning
+#: (our choice; layout and estimate apply the same rule, so strata accepted for a layout are accepted after)
+OVERLAP_ERROR_SHARE = 0.001
+
+
+def worst_overlap_share(geometries, pairs):
+    """The largest shared area of :func:`overlapping_pairs` as a share of the smaller geometry of its pair."""
+    return max(shared / min(geometries[i].area, geometries[j].area) for i, j, shared in pairs)
+
+
+def listed_overlaps(names, pairs, m2_per_unit=1.0, unit="m²", limit=20):
+    """The pairs of :func:`overlapping_pairs` as a translatable list, ``"1 and 2 (0.35 ha); …"``.
+
+    ``names`` name the geometries; at most ``limit`` pairs are shown.
+    """
+    items = tuple(
+        (f"p{n}", message("{first} and {second} ({area:.4g} {unit})", first=names[i], second=names[j],
+                          area=shared / m2_per_unit, unit=unit))
+        for n, (i, j, shared) in enumerate(pairs[:limit])
+    )
+    listed = Message("; ".join("{%s}" % name for name, _ in items), items)  # a list: no words of its own
+    if len(pairs) > limit:
+        listed = message("{shown} … ({n} in all)", shown=listed, n=len(pairs))
+    return listed
 
 
 def inward_buffer(geometry, distance, quad_segs=16):

@@ -104,8 +104,6 @@ _TOO_SMALL = {  # (whole frame?, shape)
                    "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
                    "INSIDE, or merge the stratum with a neighbour.",
 }
-# strata overlapping by more than this share of the smaller one are an error, less a warning (our choice)
-OVERLAP_ERROR_SHARE = 0.001
 # most candidate points a systematic grid may test in one stratum (about 0.5 GB of work arrays)
 MAX_GRID_CANDIDATES = 5_000_000
 PRIMARY, RESERVE = "primary", "reserve"
@@ -573,25 +571,19 @@ def _overlap_problems(keys, geometries):
     """Warnings for strata that overlap a little; an error when they overlap by more than a trace.
 
     A location belongs to one stratum: where two overlap, units are drawn in both and their
-    weights count the shared area twice. An overlap above ``OVERLAP_ERROR_SHARE`` of the
-    smaller stratum is an error; a smaller one (digitising noise) a warning.
+    weights count the shared area twice. The rule is ``geometry.OVERLAP_ERROR_SHARE``'s.
     """
-    if len(keys) < 2:
-        return []
-    pairs = geo.overlapping_pairs(geometries)
+    pairs = geo.overlapping_pairs(geometries) if len(keys) > 1 else []
     if not pairs:
         return []
-    text = "; ".join(f"{keys[i]} / {keys[j]}: {area:,.1f} m²" for i, j, area in pairs[:10])
-    if len(pairs) > 10:
-        text += " …"
-    worst = max(area / min(geometries[i].area, geometries[j].area) for i, j, area in pairs)
-    if worst > OVERLAP_ERROR_SHARE:
+    listed = geo.listed_overlaps(keys, pairs, 1e4, "ha")
+    if geo.worst_overlap_share(geometries, pairs) > geo.OVERLAP_ERROR_SHARE:
         raise InputError(message(
             "Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be "
             "drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the "
-            "host's Difference or Union tools) and run again.", pairs=text))
+            "host's Difference or Union tools) and run again.", pairs=listed))
     return [message("Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons "
-                    "disjoint if this is more than digitising noise.", pairs=text)]
+                    "disjoint if this is more than digitising noise.", pairs=listed)]
 
 
 # ----------------------------------------------------------------------------

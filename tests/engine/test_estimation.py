@@ -407,3 +407,154 @@ def test_rescaled_bootstrap_variance_equals_the_stratified_formula(fpc):
     assert result.overall.abund_se ** 2 == pytest.approx(expected, rel=1e-9)  # the analytic SE agrees
     # 40,000 replicates: the sample variance is within about 2 % of its expectation
     assert np.var(result.bootstrap_totals, ddof=1) == pytest.approx(expected, rel=0.04)
+
+
+# --------------------------------------------------------------------------- the frame: overlaps and NULL ids
+
+
+def test_overlapping_strata_are_an_error_naming_the_pair_and_the_shared_area():
+    from shapely.geometry import box
+
+    # stratum 1 is 1 km × 2 km; stratum 2 is a square beside it plus a square inside stratum 1
+    one, two_a, two_b = box(0, 0, 1000, 2000), box(1000, 0, 2000, 1000), box(0, 500, 1000, 1500)
+    with pytest.raises(InputError) as err:
+        est.frame_strata([1, 2, 2], [one, two_a, two_b], [11, 12, 13], m2_per_unit=1e4, unit="ha",
+                         layer="strata", field="stratum")
+    shared = one.intersection(two_a.union(two_b)).area / 1e4  # shapely's intersection as the oracle: 100 ha
+    covered = one.union(two_a).union(two_b).area / 1e4  # 300 ha (shapely)
+    text = str(err.value)
+    assert err.value.ids == ["1", "2"]
+    assert "'strata'" in text and f"1 and 2 ({shared:.4g} ha)" in text and f"{covered:.4g} ha" in text
+    assert "do not overlap" in text
+
+
+def test_a_trace_of_overlap_is_a_warning_with_the_area_counted_twice():
+    from shapely.geometry import box
+    from shapely.ops import unary_union
+
+    from plotwise.processing.engine.geometry import OVERLAP_ERROR_SHARE
+
+    # three strata digitised without snapping: 0.5 m slivers along the shared edges, and one corner in all three
+    shapes = [box(0, 0, 1000.5, 1000.5), box(1000, 0, 2000, 1000.5), box(0, 1000, 2000, 2000)]
+    frame = est.frame_strata(["a", "b", "c"], shapes, m2_per_unit=1e4, unit="ha", layer="strata")
+    pairs = {(i, j): shapes[i].intersection(shapes[j]).area for i in range(3) for j in range(i + 1, 3)}
+    # shapely's intersection areas as the oracle, each far below the layout's error share of the smaller stratum
+    assert max(v / min(shapes[i].area, shapes[j].area) for (i, j), v in pairs.items()) < OVERLAP_ERROR_SHARE
+    assert [(a, b) for a, b, _ in frame.overlaps] == [("a", "b"), ("a", "c"), ("b", "c")]
+    np.testing.assert_allclose([v for _, _, v in frame.overlaps], [v / 1e4 for v in pairs.values()], rtol=1e-9)
+    # the area counted more than once: Σ A_h − A(∪) (shapely), with the corner in all three counted twice over
+    twice = (sum(g.area for g in shapes) - unary_union(shapes).area) / 1e4
+    assert frame.overlap_area == pytest.approx(twice, rel=1e-9)
+    assert sum(frame.areas.values()) == pytest.approx(sum(g.area for g in shapes) / 1e4, rel=1e-12)
+    assert len(frame.warnings) == 1 and "counted in more than one stratum" in frame.warnings[0]
+    assert f"{twice:.4g} ha" in frame.warnings[0]
+
+
+def test_polygons_of_one_stratum_may_overlap_and_touching_strata_do_not():
+    from shapely.geometry import box
+
+    shapes = [box(0, 0, 1000, 1000), box(500, 0, 1500, 1000), box(1500, 0, 2500, 1000)]
+    frame = est.frame_strata([1, 1, 2], shapes, m2_per_unit=1e6, unit="km²")
+    # stratum 1 is the union of its two polygons (1.5 km², shapely); 2 only touches it
+    assert frame.areas == {"1": pytest.approx(shapes[0].union(shapes[1]).area / 1e6), "2": pytest.approx(1.0)}
+    assert frame.overlaps == () and frame.warnings == ()
+
+
+def test_polygon_without_a_stratum_id_is_an_error_unless_left_out():
+    from shapely.geometry import box
+
+    shapes = [box(0, 0, 1000, 2000), box(1000, 0, 2000, 1000), box(1000, 1000, 2000, 2000)]
+    with pytest.raises(InputError) as err:
+        est.frame_strata([1, 2, None], shapes, [1, 2, 3], m2_per_unit=1e4, unit="ha", layer="strata",
+                         field="stratum")
+    assert err.value.ids == [3]
+    text = str(err.value)
+    assert "'strata'" in text and "'stratum'" in text and "(NULL)" in text and "feature id(s) 3" in text
+    assert "100 ha" in text  # 1 km² left the frame: shapely's box area
+    frame = est.frame_strata([1, 2, None], shapes, [1, 2, 3], m2_per_unit=1e4, unit="ha", drop_unlabelled=True)
+    assert set(frame.areas) == {"1", "2"} and frame.unlabelled_ids == (3,)
+    assert frame.unlabelled_area == pytest.approx(shapes[2].area / 1e4)  # shapely
+    assert len(frame.warnings) == 1 and "shrank" in frame.warnings[0]
+    # a NULL polygon that lies inside other strata takes nothing from the frame: a warning, not an error
+    inside = est.frame_strata([1, 2, float("nan")], shapes[:2] + [box(100, 100, 900, 900)], [1, 2, 3],
+                              m2_per_unit=1e4, unit="ha")
+    assert inside.unlabelled_ids == (3,) and inside.unlabelled_area == 0.0 and len(inside.warnings) == 1
+    with pytest.raises(InputError):
+        est.frame_strata([None], shapes[:1], drop_unlabelled=True)  # no stratum at all
+
+
+# --------------------------------------------------------------------------- bootstrap of collapsed strata
+
+
+def test_bootstrap_of_a_one_unit_stratum_is_centred_on_its_own_estimate():
+    """Stratum 2 holds one unit and is collapsed with stratum 1 (Cochran 1977, §5A.12).
+
+    By construction its replicates are its estimate plus the group's ratio residuals, which sum
+    to 0: their mean is the stratum's own estimate, within Monte Carlo error (3.5 SE), and their
+    variance is the pooled collapsed-strata variance the t interval uses,
+    A_h² s_G² / (n_h a_h²) with s_G² = Σ (y − R_G a)² / (n_G − 1) (Cochran 1977, §5A.12 and
+    eq. 6.13; numpy as the oracle).
+    """
+    y = np.array([3.0, 0.0, 5.0, 10.0])
+    strata = [1, 1, 1, 2]
+    frame = {1: 200.0, 2: 100.0}  # ha; unit area 1 ha
+    b = 40_000
+    result = est.estimate_density(y, np.ones(4), strata, frame, ci_method="bootstrap", rng=make_rng(5).generator,
+                                  n_bootstrap=b)
+    _, per_stratum = est.stratified_bootstrap(
+        y, np.ones(4), np.array([0, 0, 0, 1]), 2, np.array([0, 0]), np.array([200.0, 100.0]), 1.0, 0.0,
+        make_rng(5).generator, n_bootstrap=b)
+    single = per_stratum[:, 1]
+    assert result.strata[1].abund == 1000.0  # 10 animals in 1 ha of a 100 ha stratum
+    s2_pooled = np.var(y, ddof=1)  # equal unit areas: the residuals about the pooled ratio are y − ȳ
+    assert single.mean() == pytest.approx(1000.0, abs=3.5 * math.sqrt(100.0 ** 2 * s2_pooled / b))
+    assert np.var(single, ddof=1) == pytest.approx(100.0 ** 2 * s2_pooled, rel=0.04)  # Cochran §5A.12
+    assert result.strata[1].abund_se ** 2 == pytest.approx(100.0 ** 2 * s2_pooled, rel=1e-12)
+    # the collapsed 3-unit stratum shares the pooled variance: A² s_G² / n (Cochran 1977, §5A.12)
+    assert np.var(per_stratum[:, 0], ddof=1) == pytest.approx(200.0 ** 2 * s2_pooled / 3, rel=0.04)
+    # the stratum's interval holds its estimate (it used to end exactly at it)
+    assert result.strata[1].abund_lo < 1000.0 < result.strata[1].abund_hi
+
+
+def test_bootstrap_with_collapsed_strata_agrees_with_the_t_interval():
+    """A one-unit stratum between two large ones: many degrees of freedom, so the percentile interval
+    is close to the t interval (Efron & Tibshirani 1993, ch. 13: both near estimate ± 1.96 SE), and the
+    replicates' variance matches the analytic variance with collapsed strata (Cochran 1977, §5A.12)."""
+    rng = np.random.default_rng(8)
+    y = np.concatenate([rng.poisson(4.0, 60), [12.0], rng.poisson(7.0, 60)]).astype(float)
+    a = np.concatenate([rng.uniform(0.8, 1.2, 60), [1.0], rng.uniform(0.8, 1.2, 60)]) * 0.01  # km²
+    strata = np.repeat([1, 2, 3], [60, 1, 60])
+    frame = {1: 30.0, 2: 10.0, 3: 40.0}
+    boot = est.estimate_density(y, a, strata, frame, ci_method="bootstrap", rng=make_rng(3).generator,
+                                n_bootstrap=40_000)
+    t_run = est.estimate_density(y, a, strata, frame)
+    o = boot.overall
+    assert boot.strata[1].collapsed_with  # stratum 2 was collapsed with a neighbour
+    assert np.var(boot.bootstrap_totals, ddof=1) == pytest.approx(o.abund_se ** 2, rel=0.04)
+    assert boot.bootstrap_totals.mean() == pytest.approx(o.abund, abs=3.5 * o.abund_se / math.sqrt(40_000))
+    # about 1 % apart here; replicates of the one-unit stratum centred on the pooled density instead of its
+    # own estimate put both limits some 8 % below the t limits
+    assert o.abund_lo == pytest.approx(t_run.overall.abund_lo, rel=0.03)
+    assert o.abund_hi == pytest.approx(t_run.overall.abund_hi, rel=0.03)
+
+
+def test_bootstrap_with_one_unit_in_every_stratum_is_centred():
+    """One unit per stratum, collapsed in pairs: the bootstrap total is centred on the estimate and
+    varies as Σ over pairs of (N̂_1 − N̂_2)² for equal strata (Cochran 1977, §5A.12, from memory)."""
+    y = np.array([4.0, 10.0, 3.0, 7.0])
+    strata = [1, 2, 3, 4]
+    frame = {h: 50.0 for h in strata}
+    result = est.estimate_density(y, np.ones(4), strata, frame, ci_method="bootstrap", n_bootstrap=40_000,
+                                  neighbours={1: 2, 3: 4}, rng=make_rng(7).generator)
+    pair_var = (50 * 4.0 - 50 * 10.0) ** 2 + (50 * 3.0 - 50 * 7.0) ** 2  # Cochran (1977) §5A.12
+    assert result.overall.abund_se ** 2 == pytest.approx(pair_var, rel=1e-12)
+    assert np.var(result.bootstrap_totals, ddof=1) == pytest.approx(pair_var, rel=0.04)
+    assert result.bootstrap_totals.mean() == pytest.approx(1200.0, abs=3.5 * math.sqrt(pair_var / 40_000))
+    assert result.overall.abund_lo < 1200.0 < result.overall.abund_hi
+
+
+def test_bootstrap_of_a_lone_one_unit_stratum_gives_no_interval():
+    result = est.estimate_density([5.0], [1.0], [1], {1: 10.0}, ci_method="bootstrap", rng=make_rng(1).generator)
+    # no variance can be estimated from one unit (Cochran 1977, ch. 5): no interval rather than a zero-width one
+    assert math.isnan(result.overall.abund_lo) and math.isnan(result.overall.abund_hi)
+    assert any("one surveyed unit" in w for w in result.warnings)

@@ -214,10 +214,10 @@ def test_overlapping_strata_are_an_error_and_a_trace_of_overlap_a_warning():
     a, b = box(0, 0, 1000, 1000), box(900, 0, 2000, 1000)  # 100 m x 1000 m shared
     with pytest.raises(InputError, match="overlap") as err:
         L.prepare_strata([a, b], strata=[1, 2], n_units=10)
-    assert "100,000.0 m²" in str(err.value)  # shapely: a.intersection(b).area == 1e5
+    assert "1 and 2 (10 ha)" in str(err.value)  # shapely: a.intersection(b).area == 1e5 m²
     c = box(999.5, 0, 2000, 1000)  # a 0.5 m x 1000 m seam: 0.05 % of the smaller stratum
     frame = L.prepare_strata([a, c], strata=[1, 2], n_units=10)
-    assert any("overlap slightly" in w and "500.0 m²" in w for w in frame.warnings)
+    assert any("overlap slightly" in w and "1 and 2 (0.05 ha)" in w for w in frame.warnings)  # 500 m²
     frame = L.prepare_strata([a, box(1000, 0, 2000, 1000)], strata=[1, 2], n_units=10)  # touching only
     assert not any("overlap" in w for w in frame.warnings)
 

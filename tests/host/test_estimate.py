@@ -289,3 +289,83 @@ def test_line_transects_use_strip_width_times_length(registered, run_alg, tmp_pa
     # ratio estimator, Cochran (1977), eq. 6.1: Σy / Σ(w·L) per stratum, times the stratum area (km²)
     expected = sum(sum(counts[h]) / (40.0 * sum(lengths[h]) / 1e6) * area for h, area in ((1, 2.0), (2, 1.0)))
     assert results["ABUNDANCE"] == pytest.approx(expected, rel=1e-9)
+
+
+def _strata_from(rects, name="strata"):
+    """A strata layer of rectangles ``(x0, y0, x1, y1, stratum)``; a stratum of None is a NULL id."""
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer("Polygon?crs=EPSG:32633", name, "memory")
+    layer.dataProvider().addAttributes([compat.make_field("stratum", "int")])
+    layer.updateFields()
+    features = []
+    for x0, y0, x1, y1, stratum in rects:
+        f = QgsFeature(layer.fields())
+        f.setGeometry(QgsGeometry.fromWkt(f"POLYGON(({x0} {y0}, {x1} {y0}, {x1} {y1}, {x0} {y1}, {x0} {y0}))"))
+        f.setAttributes([stratum])
+        features.append(f)
+    layer.dataProvider().addFeatures(features)
+    return layer
+
+
+def test_overlapping_strata_stop_the_run_naming_them(registered, run_alg, tmp_path):
+    from shapely.geometry import box
+
+    # a second polygon of stratum 2 lies inside stratum 1: 100 ha would be counted twice
+    rects = [(0, 0, 1000, 2000, 1), (1000, 0, 2000, 1000, 2), (0, 500, 1000, 1500, 2)]
+    with pytest.raises(QgsProcessingException) as err:
+        _run(run_alg, tmp_path, _units_layer(), STRATA=_strata_from(rects, "strata_overlap"), AREA_UNIT=1)
+    shared = box(*rects[0][:4]).intersection(box(*rects[2][:4])).area / 1e4  # shapely's intersection: 100 ha
+    text = str(err.value)
+    assert "'strata_overlap'" in text and f"1 and 2 ({shared:.4g} ha)" in text and "do not overlap" in text
+
+
+def test_a_sliver_of_overlap_is_a_warning(registered, run_alg, tmp_path):
+    from shapely.geometry import box
+
+    rects = [(0, 0, 1000.5, 2000, 1), (1000, 0, 2000, 1000, 2)]  # stratum 1 overlaps 2 by a 0.5 m × 1 km sliver
+    results, feedback = _run(run_alg, tmp_path, _units_layer(), STRATA=_strata_from(rects), AREA_UNIT=1)
+    shared = box(*rects[0][:4]).intersection(box(*rects[1][:4])).area / 1e4  # shapely
+    assert any("overlap" in w and f"1 and 2 ({shared:.4g} ha)" in w for w in feedback.warnings)
+    assert "counted in more than one stratum" in (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    # the run goes on with each stratum's own area (shapely), the sliver counted in both (Cochran 1977, eq. 5.1)
+    areas = [box(*r[:4]).area / 1e4 for r in rects]
+    assert results["ABUNDANCE"] == pytest.approx(np.mean(COUNTS[1]) * areas[0] + np.mean(COUNTS[2]) * areas[1],
+                                                 rel=1e-9)
+
+
+def test_null_stratum_id_is_an_error_unless_left_out(registered, run_alg, tmp_path):
+    rects = [(0, 0, 1000, 2000, 1), (1000, 0, 2000, 1000, 2), (1000, 1000, 2000, 2000, None)]
+    strata = _strata_from(rects, "strata_null_id")
+    null_fid = [f.id() for f in strata.getFeatures()][2]  # the third square has no id
+    with pytest.raises(QgsProcessingException) as err:
+        _run(run_alg, tmp_path, _units_layer(), STRATA=strata, AREA_UNIT=1)
+    text = str(err.value)
+    assert "'strata_null_id'" in text and "(NULL)" in text and f"feature id(s) {null_fid}" in text
+    assert "100 ha" in text  # the 1 km² square no stratum covers
+    results, feedback = _run(run_alg, tmp_path, _units_layer(), STRATA=strata, AREA_UNIT=1, DROP_EMPTY=True)
+    total, _, _, _, _ = _expected(area_unit_m2=1e4)
+    assert results["ABUNDANCE"] == pytest.approx(total, rel=1e-9)  # the frame of strata 1 and 2 (Cochran 1977)
+    assert any("(NULL)" in w and "shrank" in w and str(null_fid) in w for w in feedback.warnings)
+
+
+def test_bootstrap_interval_of_a_one_unit_stratum_holds_its_estimate(registered, run_alg, tmp_path):
+    results, _ = _run(run_alg, tmp_path, _units_layer(counts={1: [3, 0, 5], 2: [10]}), CI_METHOD=2, SEED=5)
+    rows = {f["stratum"]: f for f in _layer(results["OUTPUT_TABLE"]).getFeatures()}
+    # 10 animals in a 1 ha unit of a 1 km² stratum: 1000 (ratio estimator, Cochran 1977, ch. 6)
+    assert rows["2"]["abund"] == pytest.approx(1000.0, rel=1e-12)
+    assert rows["2"]["abund_lo"] < 1000.0 < rows["2"]["abund_hi"]
+    assert results["ABUNDANCE_LO"] < results["ABUNDANCE"] < results["ABUNDANCE_HI"]
+    html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    assert "centred on its own estimate" in html
+
+
+def test_warnings_of_reading_the_layers_are_shown_once(registered, run_alg, tmp_path):
+    # a bow-tie stratum polygon is repaired while reading, with one warning naming the feature
+    strata = _strata_from([(0, 0, 1000, 2000, 1), (1000, 0, 2000, 1000, 2)])
+    bowtie = QgsFeature(strata.fields())
+    bowtie.setGeometry(QgsGeometry.fromWkt("POLYGON((3000 0, 3100 100, 3100 0, 3000 100, 3000 0))"))
+    bowtie.setAttributes([2])
+    strata.dataProvider().addFeatures([bowtie])
+    _, feedback = _run(run_alg, tmp_path, _units_layer(), STRATA=strata)
+    assert sum("invalid geometry repaired" in w for w in feedback.warnings) == 1
