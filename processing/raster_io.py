@@ -8,9 +8,10 @@
   when its centre lies inside). Blocks of rows are served one at a time, so
   memory stays bounded whatever the raster's size.
 * :class:`StratumRaster` writes the stratum ids (Byte GeoTIFF, 0 = NoData).
-* :func:`sieve_strata` merges patches below a size into their neighbours
-  (GDAL's sieve filter), :func:`polygonise_strata` turns the raster into one
-  multipolygon per stratum.
+* :func:`sieve_strata` merges specks (patches of a few cells) into their
+  largest neighbour (GDAL's sieve filter), :func:`merge_small_patches` brings
+  every patch up to the minimum area, :func:`polygonise_strata` turns the
+  raster into one multipolygon per stratum.
 * :func:`stratify_rasters` chains them with the engine.
 """
 from dataclasses import dataclass, field
@@ -499,28 +500,45 @@ def remap_strata(path, lut, block_rows=2048, progress=None):
 
 
 def sieve_cells(min_area_ha, cell_area_m2):
-    """Patch size in cells below which GDAL's sieve merges a patch: ceil(MIN_AREA × 10,000 / cell area)."""
+    """Patch size in cells below which a patch is merged: ceil(MIN_AREA × 10,000 / cell area)."""
     if not min_area_ha or min_area_ha <= 0:
         return 0
     return int(math.ceil(min_area_ha * 10000.0 / cell_area_m2 - 1e-9))
 
 
+#: patches below this many cells are specks, merged by GDAL's sieve before :func:`merge_small_patches`
+SPECK_CELLS = 8
+
+
+def _speck_steps(min_cells):
+    return [t for t in (2, 4, 8) if t <= min(int(min_cells), SPECK_CELLS)]
+
+
+def speck_cells(min_cells):
+    """Patches below this many cells are specks for :func:`sieve_strata` (0: none)."""
+    steps = _speck_steps(min_cells)
+    return steps[-1] if steps else 0
+
+
 def sieve_strata(path, min_cells, progress=None):
-    """Merge 4-connected patches of fewer than ``min_cells`` cells into their largest neighbour (GDAL sieve).
+    """Merge specks into their largest neighbour (GDAL's sieve filter, 4-connected).
+
+    Specks are patches of fewer than :func:`speck_cells` cells. The
+    threshold grows (2, 4, 8), so that clusters of specks merge step by step.
+    GDAL is fast on the many tiny patches of a noisy covariate, and after it
+    at most one patch in :data:`SPECK_CELLS` cells is left for
+    :func:`merge_small_patches`, which brings every patch up to ``min_cells``.
+    The sieve stops at :data:`SPECK_CELLS`: GDAL merges a small patch only
+    when its chain of largest neighbours reaches a big patch, and with larger
+    thresholds a few big patches swallow a whole mosaic of small ones, strata
+    and all.
 
     Cells with id 0 (outside the frame or NoData) are never changed and never
-    absorb a patch; a small patch with no stratum neighbour stays.
+    absorb a patch.
     """
-    if min_cells <= 1:
+    steps = _speck_steps(min_cells)
+    if not steps:
         return
-    # GDAL's sieve leaves a small patch alone when all its neighbours are small too; growing the
-    # threshold (2, 4, 8, ... then MIN_AREA, twice) lets clusters of small patches merge step by step
-    steps = []
-    t = 2
-    while t < min_cells:
-        steps.append(t)
-        t *= 2
-    steps += [int(min_cells)] * 3
     ds = gdal.Open(path, gdal.GA_Update)
     band = ds.GetRasterBand(1)
     try:
@@ -532,6 +550,160 @@ def sieve_strata(path, min_cells, progress=None):
                 cb.check()
                 raise
             cb.check()
+    finally:
+        band.FlushCache()
+        band = ds = None
+
+
+#: loss of R² (first covariate) from merging patches below MIN_AREA worth a warning (our choice)
+R2_LOSS_WARNING = 0.1
+
+
+@dataclass(frozen=True)
+class PatchCheck:
+    """What :func:`merge_small_patches` did: patches merged, and those still below the minimum."""
+
+    merged: int
+    left: int
+    left_cells: int
+
+
+def _row_blocks(width, height, block_cells):
+    rows = max(1, block_cells // max(1, width))
+    return [(y, min(rows, height - y)) for y in range(0, height, rows)]
+
+
+def _block_patches(ids):
+    """4-connected patches of one stratum block (scipy.ndimage.label per stratum): labels 1..k (0: none), strata."""
+    from scipy import ndimage
+
+    labels = np.zeros(ids.shape, np.int64)
+    strata = []
+    for h in np.unique(ids):
+        if h == 0:
+            continue
+        lab, k = ndimage.label(ids == h)
+        inside = lab > 0
+        labels[inside] = lab[inside] + len(strata)
+        strata.extend([int(h)] * k)
+    return labels, strata
+
+
+def _pair_codes(a, b):
+    """Codes of unordered label pairs (labels below 2³¹): min · 2³² + max."""
+    return (np.minimum(a, b) << 32) | np.maximum(a, b)
+
+
+def _count_codes(codes, counts, new_codes, new_counts=None):
+    """Add ``new_codes`` (with ``new_counts``, default one each) to the running (codes, counts)."""
+    if new_codes.size == 0:
+        return codes, counts
+    if new_counts is None:
+        new_codes, new_counts = np.unique(new_codes, return_counts=True)
+    merged, inverse = np.unique(np.concatenate([codes, new_codes]), return_inverse=True)
+    total = np.bincount(inverse, weights=np.concatenate([counts, new_counts]), minlength=merged.size)
+    return merged, np.rint(total).astype(np.int64)
+
+
+def merge_small_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None):
+    """Merge the patches below ``min_cells`` after the speck sieve (:func:`~.engine.stratification.merge_small_patches`).
+
+    Two passes over the stratum raster by blocks of rows. The first labels the
+    4-connected patches of each block (scipy.ndimage.label), joins the parts of
+    a patch that a block boundary cuts (scipy.sparse.csgraph), counts every
+    patch's cells and the cell edges neighbouring patches share, and numbers
+    the patches by their first cell in reading order, so the result does not
+    depend on the blocks. The engine then merges the small patches; the second
+    pass labels each block again and writes the new strata. Memory grows with
+    the number of patches, not with the raster.
+
+    Returns
+    -------
+    PatchCheck
+        Patches merged, and the patches (and their cells) still below the
+        minimum because they touch no other stratum.
+    """
+    from scipy.sparse import coo_matrix
+    from scipy.sparse.csgraph import connected_components
+
+    if min_cells <= 1:
+        return PatchCheck(0, 0, 0)
+    ds = gdal.Open(path, gdal.GA_Update)
+    band = ds.GetRasterBand(1)
+    try:
+        width, height = band.XSize, band.YSize
+        blocks = _row_blocks(width, height, block_cells)
+        bases, sizes, strata, first = [], [], [], []
+        seam_a, seam_b = [], []
+        codes, counts = np.zeros(0, np.int64), np.zeros(0, np.int64)
+        prev_ids = prev_lab = None
+        base = 0
+        for i, (y0, rows) in enumerate(blocks):  # pass 1: patches, sizes, shared edges
+            ids = band.ReadAsArray(0, y0, width, rows)
+            lab, block_strata = _block_patches(ids)
+            k = len(block_strata)
+            sizes.append(np.bincount(lab.ravel(), minlength=k + 1)[1:])
+            lab[lab > 0] += base
+            bases.append(base)
+            strata.extend(block_strata)
+            seen, at = np.unique(lab.ravel(), return_index=True)  # each label's first cell in the block
+            first.append((y0 * width + at[seen > 0]).astype(np.int64))
+            found = []
+            for a, b, same in ((lab[:, :-1], lab[:, 1:], None), (lab[:-1], lab[1:], None),
+                               (prev_lab, lab[:1], None if prev_ids is None else prev_ids == ids[:1])):
+                if a is None:
+                    continue
+                touch = (a != b) & (a > 0) & (b > 0)
+                if same is not None:  # across the block boundary: one patch cut in two, or two patches
+                    seam = touch & same
+                    seam_a.append(a[seam])
+                    seam_b.append(b[seam])
+                    touch &= ~same
+                found.append(_pair_codes(a[touch], b[touch]))
+            codes, counts = _count_codes(codes, counts, np.concatenate(found))
+            prev_ids, prev_lab = ids[-1:], lab[-1:]
+            base += k
+            if progress is not None and progress(0.6 * (i + 1) / len(blocks)):
+                raise Cancelled("Stratification cancelled.")
+        if base == 0:
+            return PatchCheck(0, 0, 0)
+        # local labels 1..base -> patches: parts joined across block boundaries, numbered by their first cell
+        seam_a = np.concatenate(seam_a) - 1 if seam_a else np.zeros(0, np.int64)
+        seam_b = np.concatenate(seam_b) - 1 if seam_b else np.zeros(0, np.int64)
+        graph = coo_matrix((np.ones(seam_a.size), (seam_a, seam_b)), shape=(base, base))
+        n_patches, part_of = connected_components(graph, directed=False)
+        first = np.concatenate(first)
+        patch_first = np.full(n_patches, np.iinfo(np.int64).max)
+        np.minimum.at(patch_first, part_of, first)
+        rank = np.empty(n_patches, np.int64)
+        rank[np.argsort(patch_first, kind="stable")] = np.arange(1, n_patches + 1)
+        patch = rank[part_of]  # patch (1..n) of each local label (0-based)
+        local_strata = np.asarray(strata, np.int64)
+        patch_sizes = np.bincount(patch, weights=np.concatenate(sizes), minlength=n_patches + 1).astype(np.int64)
+        patch_strata = np.zeros(n_patches + 1, np.int64)
+        patch_strata[patch] = local_strata
+        small = patch_sizes < min_cells
+        small[0] = False
+        if not small.any():
+            return PatchCheck(0, 0, 0)
+        a, b = patch[(codes >> 32) - 1], patch[(codes & 0xFFFFFFFF) - 1]
+        keep = small[a] | small[b]
+        pair_codes, shared = _count_codes(np.zeros(0, np.int64), np.zeros(0, np.int64),
+                                          _pair_codes(a[keep], b[keep]), counts[keep])
+        pairs = np.column_stack([pair_codes >> 32, pair_codes & 0xFFFFFFFF])
+        merge = strat.merge_small_patches(patch_sizes, patch_strata, pairs, shared, min_cells)
+        if merge.merged:
+            lut = np.concatenate([[0], merge.strata[patch]]).astype(np.uint8)  # local label -> stratum
+            changed = np.concatenate([[False], merge.strata[patch] != local_strata])
+            for i, (y0, rows) in enumerate(blocks):  # pass 2: the same labels, the new strata
+                ids = band.ReadAsArray(0, y0, width, rows)
+                lab, _ = _block_patches(ids)
+                lab[lab > 0] += bases[i]
+                if changed[lab].any():
+                    band.WriteArray(lut[lab], 0, y0)
+                if progress is not None and progress(0.6 + 0.4 * (i + 1) / len(blocks)):
+                    raise Cancelled("Stratification cancelled.")
+        return PatchCheck(merge.merged, int(merge.left.size), int(merge.left_cells.sum()))
     finally:
         band.FlushCache()
         band = ds = None
@@ -591,6 +763,11 @@ class RasterStratification:
     warped: list
     output_raster: str
     warnings: list = field(default_factory=list)
+    patches_merged: int = 0
+    """Patches that GDAL's sieve left below MIN_AREA and :func:`merge_small_patches` merged."""
+    small_patches: int = 0
+    """Patches still below MIN_AREA (they touch no other stratum)."""
+    small_patches_ha: float = 0.0
 
 
 def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_raster, min_area_ha=0.0,
@@ -599,8 +776,9 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
 
     Steps: stack the covariates on the first one's grid (:class:`CovariateStack`),
     find the rule and assign every cell (:func:`~.engine.stratification.stratify_cells`),
-    renumber strata by first-covariate mean, sieve patches below MIN_AREA
-    (then recount the statistics), polygonise.
+    renumber strata by first-covariate mean, merge patches below MIN_AREA
+    (specks with GDAL's sieve, then :func:`merge_small_patches`) and recount
+    the statistics, polygonise.
     """
     categorical = method == strat.RASTER_CLASSES
     warnings = []
@@ -618,14 +796,21 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
         if res.needs_remap:
             remap_strata(output_raster, res.lut, progress=strat.scaled_progress(progress, 0.7, 0.75))
         cells = sieve_cells(min_area_ha, stack.cell_area)
+        patches = PatchCheck(0, 0, 0)
         if cells > 1:
             sieve_strata(output_raster, cells, strat.scaled_progress(progress, 0.75, 0.8))
+            patches = merge_small_patches(output_raster, cells, block_cells, strat.scaled_progress(progress, 0.8, 0.84))
             stats = strat.accumulate_statistics(stack.source(output_raster), res.n_strata,
                                                 shift=res.statistics.overall_mean(),
                                                 chart_range=res.statistics.chart_range,
-                                                progress=strat.scaled_progress(progress, 0.8, 0.9))
+                                                progress=strat.scaled_progress(progress, 0.84, 0.9))
             lut, order = strat.stratum_order(stats)
+            if order.size < 2:
+                raise InputError(message(
+                    "With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there "
+                    "is nothing to stratify. Lower MIN_AREA.", min_area=min_area_ha))
             provisional = res.provisional
+            r2_before = float(res.statistics.r_squared()[0])
             if not np.array_equal(lut, np.arange(lut.size)):
                 if order.size < stats.n_strata:
                     warnings.append(message("{merged} strata consisted only of patches below MIN_AREA and were "
@@ -633,6 +818,18 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
                 remap_strata(output_raster, lut)
                 stats, provisional = stats.reordered(order), provisional[order]
             res = res.with_statistics(stats, provisional)
+            r2_after = float(stats.r_squared()[0])
+            if np.isfinite(r2_before) and np.isfinite(r2_after) and r2_after < r2_before - R2_LOSS_WARNING:
+                warnings.append(message(
+                    "Merging the patches below MIN_AREA moved cells between strata: the share of the variance of "
+                    "'{name}' that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA "
+                    "keeps the strata closer to the covariates.", name=names[0], before=r2_before, after=r2_after))
+            if patches.left:
+                warnings.append(message(
+                    "{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no "
+                    "other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from "
+                    "the frame, fill the NoData in the covariates, or lower MIN_AREA.",
+                    n=patches.left, ha=patches.left_cells * stack.cell_area / 10000.0, min_area=min_area_ha))
         polygons = polygonise_strata(output_raster, res.n_strata, strat.scaled_progress(progress, 0.9, 1.0))
         ca = stack.cell_area / 10000.0
         frame_ha = stack.frame_area / 10000.0
@@ -648,7 +845,8 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
         return RasterStratification(res, names, units, labels, stack.grid, polygons,
                                     res.statistics.count * ca, frame_ha, res.cells_in_frame * ca,
                                     res.cells_nodata * ca, outside_ha, coverage, cells, list(stack.warped),
-                                    output_raster, warnings)
+                                    output_raster, warnings, patches.merged, patches.left,
+                                    patches.left_cells * ca)
 
 
 def read_surface_window(path, name, surface_wkt, target_wkt, target_label, bounds):

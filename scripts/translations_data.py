@@ -244,10 +244,6 @@ TRANSLATIONS.update({
         "Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un "
         "campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.",
     ),
-    "{n} units counted: {seen} animals seen of {present} present (detection {p:g}).": (
-        "{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}).",
-        "{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}).",
-    ),
     "{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.": (
         "{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve "
         "laissées vides.",
@@ -841,8 +837,10 @@ TRANSLATIONS.update({
     "random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.</li><li><b>"
     "Raster classes</b>: each value of the first covariate (a categorical raster, at most 50 classes) is one "
     "stratum; the number of strata is ignored.</li></ul><p>Strata are numbered 1..k by increasing mean of the "
-    "first covariate. Patches smaller than the minimum patch area (ha) are merged into their neighbours (GDAL "
-    "sieve, 4-connected) before the strata are turned into polygons.</p><h3>Outputs</h3><ul><li>Stratum raster: "
+    "first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum "
+    "before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, "
+    "the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a "
+    "warning.</p><h3>Outputs</h3><ul><li>Stratum raster: "
     "the stratum of each cell (0 = none).</li><li>Strata: one multipolygon per stratum with <i>stratum</i>, "
     "<i>label</i>, <i>area_ha</i> (cells × cell area), <i>cov_mean</i> and <i>cov_sd</i> of the first covariate, "
     "and <i>cov2_mean</i>, <i>cov2_sd</i>, … for the others (SD over the stratum's cells).</li><li>Report: "
@@ -867,8 +865,10 @@ TRANSLATIONS.update({
         "graine ; puis chaque cellule va au centre le plus proche.</li><li><b>Classes raster</b> : chaque valeur de "
         "la première covariable (un raster catégoriel, 50 classes au plus) forme une strate ; le nombre de strates "
         "est ignoré.</li></ul><p>Les strates sont numérotées de 1 à k par moyenne croissante de la première "
-        "covariable. Les taches plus petites que la surface minimale (ha) sont fusionnées avec leurs voisines (tamis "
-        "GDAL, 4-connexité) avant que les strates ne soient converties en polygones.</p><h3>Sorties</h3><ul><li>"
+        "covariable. Les taches (4-connexité) plus petites que la surface minimale (ha) rejoignent une strate voisine "
+        "avant que les strates ne soient converties en polygones : les grains par le tamis de GDAL, puis chaque petite "
+        "tache, de la plus petite à la plus grande, rejoint la voisine qui l'amène à la surface minimale. "
+        "Une tache qui ne touche aucune autre strate reste, avec un avertissement.</p><h3>Sorties</h3><ul><li>"
         "Raster des strates : la strate de chaque cellule (0 = aucune).</li><li>Strates : un multipolygone par "
         "strate avec <i>stratum</i>, <i>label</i>, <i>area_ha</i> (cellules × surface d'une cellule), "
         "<i>cov_mean</i> et <i>cov_sd</i> de la première covariable, et <i>cov2_mean</i>, <i>cov2_sd</i>, … pour "
@@ -893,8 +893,10 @@ TRANSLATIONS.update({
         "celdas sorteada con la semilla; después cada celda va al centro más próximo.</li><li><b>Clases del ráster"
         "</b>: cada valor de la primera covariable (un ráster categórico, como máximo 50 clases) es un estrato; el "
         "número de estratos se ignora.</li></ul><p>Los estratos se numeran de 1 a k por media creciente de la "
-        "primera covariable. Las manchas menores que el área mínima (ha) se fusionan con sus vecinas (criba de "
-        "GDAL, conectividad 4) antes de convertir los estratos en polígonos.</p><h3>Salidas</h3><ul><li>Ráster de "
+        "primera covariable. Las manchas (conectividad 4) menores que el área mínima (ha) se unen a un estrato vecino "
+        "antes de convertir los estratos en polígonos: los granos mediante la criba de GDAL y luego cada mancha "
+        "pequeña, de la menor a la mayor, al vecino que la lleva al área mínima. Una mancha que no toca ningún "
+        "otro estrato se queda, con una advertencia.</p><h3>Salidas</h3><ul><li>Ráster de "
         "estratos: el estrato de cada celda (0 = ninguno).</li><li>Estratos: un multipolígono por estrato con "
         "<i>stratum</i>, <i>label</i>, <i>area_ha</i> (celdas × área de la celda), <i>cov_mean</i> y <i>cov_sd</i> "
         "de la primera covariable, y <i>cov2_mean</i>, <i>cov2_sd</i>, … para las demás (DE sobre las celdas del "
@@ -976,6 +978,36 @@ TRANSLATIONS.update({
         "Las manchas menores de {ha} ha ({cells} celdas) se fusionaron con su vecina mayor (criba de GDAL, "
         "conectividad 4) antes de vectorizar; las áreas y estadísticas son las posteriores a la fusión, por lo que un "
         "estrato puede contener algunas celdas que la regla por sí sola habría puesto en un estrato vecino.",
+    ),
+    # -- stratify: patches below MIN_AREA (QA) --
+    "Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer "
+    "than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each "
+    "into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest "
+    "patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are "
+    "those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.": (
+        "Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avant la vectorisation (4-connexité) : "
+        "les taches minuscules (moins de {specks} cellules) avec leur plus grande voisine (tamis GDAL), puis {n} "
+        "autres taches, de la plus petite à la plus grande, chacune avec la strate voisine qui formait la plus "
+        "petite tache d'au moins {ha} ha (ou, à défaut, la plus grande), afin qu'une mosaïque de petites taches ne "
+        "soit pas absorbée par une seule tache qui grandit. Surfaces et statistiques sont celles d'après la fusion, "
+        "si bien qu'une strate peut contenir des cellules que la règle seule aurait mises dans une autre strate.",
+        "Las manchas menores de {ha} ha ({cells} celdas) se fusionaron antes de vectorizar (conectividad 4): las "
+        "manchas diminutas (menos de {specks} celdas) con su vecina mayor (criba de GDAL), y después otras {n} "
+        "manchas, de la menor a la mayor, cada una con el estrato vecino que formaba la mancha más pequeña de al "
+        "menos {ha} ha (o, en su defecto, la mayor), para que un mosaico de manchas pequeñas no quede absorbido por "
+        "una sola mancha que crece. Las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato "
+        "puede contener celdas que la regla por sí sola habría puesto en otro estrato.",
+    ),
+    "{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) "
+    "and stay smaller than {ha} ha.": (
+        "{n} tache(s) couvrant {area} ha ne touchent aucune autre strate (îlots de la base de sondage, ou taches "
+        "entourées de NoData) et restent plus petites que {ha} ha.",
+        "{n} mancha(s) que cubren {area} ha no tocan ningún otro estrato (islas del marco de muestreo, o manchas "
+        "rodeadas de NoData) y siguen siendo menores de {ha} ha.",
+    ),
+    "Every patch of the strata now covers at least {ha} ha.": (
+        "Chaque tache des strates couvre désormais au moins {ha} ha.",
+        "Cada mancha de los estratos cubre ahora al menos {ha} ha.",
     ),
     "Method: {name}": ("Méthode : {name}", "Método: {name}"),
     "Stratum h holds the cells with b(h−1) ≤ {name} < b(h). Boundaries on {name}:": (
@@ -1107,6 +1139,8 @@ TRANSLATIONS.update({
     "radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an empty count field for "
     "the field teams. The GPX file holds one waypoint per unit (a start and an end waypoint per transect), named by "
     "unit_id.\n\n"
+    "Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a "
+    "warning. Features under 1 m² (slivers) are skipped, with a warning.\n\n"
     "A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and "
     "safety before fieldwork: the tool never makes a location safe.": (
         "Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate "
@@ -1140,6 +1174,9 @@ TRANSLATIONS.update({
         "points sans rayon, la densité d'inclusion n/A par m²), weight = 1/incl_p, lon/lat (WGS 84), et un champ "
         "count vide pour les équipes de terrain. Le fichier GPX contient un point de passage par unité (un point de "
         "début et un de fin par transect), nommé par unit_id.\n\n"
+        "Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de la plus petite strate est une "
+        "erreur, un plus petit un avertissement. Les entités de moins de 1 m² (liserés) sont écartées, avec un "
+        "avertissement.\n\n"
         "Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez "
         "l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.",
         "Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato "
@@ -1172,6 +1209,8 @@ TRANSLATIONS.update({
         "radio, la densidad de inclusión n/A por m²), weight = 1/incl_p, lon/lat (WGS 84) y un campo count vacío "
         "para los equipos de campo. El archivo GPX contiene un punto de paso por unidad (uno de inicio y otro de fin "
         "por transecto), con el nombre de unit_id.\n\n"
+        "Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato menor es un error, uno menor "
+        "una advertencia. Las entidades de menos de 1 m² (astillas) se omiten, con una advertencia.\n\n"
         "Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la "
         "seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.",
     ),
@@ -1776,7 +1815,9 @@ TRANSLATIONS.update({
     "units have no stratum field, or the strata layer is a single polygon without an id field, all units form one "
     "stratum over the frame. A stratum with one surveyed unit is collapsed with a neighbour for its variance "
     "(Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: "
-    "then the frame shrinks, and the report says so.\n\n"
+    "then the frame shrinks, and the report says so. Strata must not overlap (an overlap of more than 0.1 % of the "
+    "smaller stratum is an error, a smaller one a warning), and every strata polygon needs its id: a polygon without "
+    "one is an error, unless strata with no surveyed unit may be left out.\n\n"
     "Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to "
     "N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a rescaled stratified percentile "
     "bootstrap of 2,000 resamples (seeded; Rao & Wu 1988), which carries the finite-population correction.\n\n"
@@ -1813,7 +1854,10 @@ TRANSLATIONS.update({
         "des strates est un seul polygone sans champ d'identifiant, toutes les unités forment une seule strate sur "
         "la base. Une strate avec une seule unité inventoriée est regroupée avec une voisine pour sa variance "
         "(Cochran 1977, §5A.12), avec un avertissement. Une strate sans unité inventoriée est une erreur, sauf si "
-        "vous choisissez de l'écarter : la base se réduit alors, et le rapport le dit.\n\n"
+        "vous choisissez de l'écarter : la base se réduit alors, et le rapport le dit. Les strates ne doivent pas se "
+        "chevaucher (un chevauchement de plus de 0,1 % de la plus petite strate est une erreur, un plus petit un "
+        "avertissement), et chaque polygone de strate doit porter son identifiant : un polygone sans identifiant est "
+        "une erreur, sauf si les strates sans unité inventoriée peuvent être écartées.\n\n"
         "Intervalles : t avec les degrés de liberté de Satterthwaite (Satterthwaite 1946 ; Cochran 1977) ; "
         "log-normal, de N/C à N·C avec C = exp(z√ln(1+CV²)) (Burnham et al. 1987 ; Buckland et al. 2001) ; ou un "
         "bootstrap stratifié des percentiles, remis à l'échelle, sur 2 000 rééchantillonnages (avec graine ; Rao & "
@@ -1853,7 +1897,9 @@ TRANSLATIONS.update({
         "polígono sin campo identificador, todas las unidades forman un solo estrato sobre el marco. Un estrato con "
         "una sola unidad muestreada se agrupa con un vecino para su varianza (Cochran 1977, §5A.12), con una "
         "advertencia. Un estrato sin ninguna es un error, salvo que decida dejarlo fuera: entonces el marco se "
-        "reduce y el informe lo indica.\n\n"
+        "reduce y el informe lo indica. Los estratos no deben solaparse (un solapamiento de más del 0,1 % del estrato "
+        "menor es un error, uno menor una advertencia), y cada polígono de estrato necesita su identificador: un "
+        "polígono sin él es un error, salvo que se puedan dejar fuera los estratos sin unidades muestreadas.\n\n"
         "Intervalos: t con los grados de libertad de Satterthwaite (Satterthwaite 1946; Cochran 1977); log-normal, "
         "de N/C a N·C con C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); o un bootstrap "
         "estratificado de percentiles reescalado con 2.000 remuestreos (con semilla; Rao & Wu 1988), que incluye la "
@@ -2292,6 +2338,24 @@ TRANSLATIONS.update({
         "sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o "
         "campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún "
         "error estándar muestra.",
+    ),
+})
+
+# -- estimate: the bootstrap of collapsed strata (QA) ---------------------------------------------
+TRANSLATIONS.update({
+    "In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its "
+    "group (each unit's count minus the group's density times the unit's area), adds them to its own estimate and "
+    "rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata "
+    "variance says.": (
+        "Dans le bootstrap, une strate regroupée tire autant de résidus qu'elle a d'unités parmi les unités mises "
+        "en commun de son groupe (le comptage de chaque unité moins la densité du groupe multipliée par la surface "
+        "de l'unité), les ajoute à sa propre estimation et les remet à l'échelle, de sorte que ses "
+        "rééchantillonnages sont centrés sur sa propre estimation et varient autant que l'indique la variance des "
+        "strates regroupées.",
+        "En el bootstrap, un estrato agrupado toma tantos residuos como unidades tiene entre las unidades combinadas "
+        "de su grupo (el conteo de cada unidad menos la densidad del grupo por el área de la unidad), los suma a su "
+        "propia estimación y los reescala, de modo que sus remuestreos están centrados en su propia estimación y "
+        "varían tanto como indica la varianza de estratos agrupados.",
     ),
 })
 

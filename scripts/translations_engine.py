@@ -18,6 +18,115 @@ es « estrato », « marco de muestreo », « unidad de muestreo », « entidad 
 E = "PlotwiseEngine"
 
 ENGINE_TRANSLATIONS = {
+    # -- stratify, allocate, comparedesigns (QA) --------------------------------------------------
+    (E, "Stratum field '{field}' of layer '{layer}' is empty (NULL) for feature(s) {ids}. Give every stratum an "
+        "id, or remove those features from the layer."): (
+        "Le champ de strate « {field} » de la couche « {layer} » est vide (NULL) pour la ou les entités {ids}. "
+        "Donnez un identifiant à chaque strate, ou retirez ces entités de la couche.",
+        "El campo de estrato «{field}» de la capa «{layer}» está vacío (NULL) para las entidades {ids}. Dé un "
+        "identificador a cada estrato, o quite esas entidades de la capa.",
+    ),
+    (E, "Features {ids} of layer '{layer}' carry the same stratum id {value} in field '{field}', so each would get "
+        "its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then recompute the "
+        "area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id."): (
+        "Les entités {ids} de la couche « {layer} » portent le même identifiant de strate {value} dans le champ "
+        "« {field} » : chacune recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil "
+        "Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la "
+        "surface des polygones), ou donnez à chaque entité son propre identifiant.",
+        "Las entidades {ids} de la capa «{layer}» llevan el mismo identificador de estrato {value} en el campo "
+        "«{field}», así que cada una recibiría su propia asignación. Disuelva primero los estratos por «{field}» "
+        "(herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar "
+        "el área de los polígonos), o dé a cada entidad su propio identificador.",
+    ),
+    (E, "Several stratum ids in field '{field}' of layer '{layer}' are carried by more than one feature: {value} "
+        "(features {ids}) and {more} other id(s) ({others}), so each of those features would get its own "
+        "allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then recompute the area "
+        "field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id."): (
+        "Plusieurs identifiants de strate du champ « {field} » de la couche « {layer} » sont portés par plus d'une "
+        "entité : {value} (entités {ids}) et {more} autre(s) identifiant(s) ({others}) ; chacune de ces entités "
+        "recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; "
+        "recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des "
+        "polygones), ou donnez à chaque entité son propre identifiant.",
+        "Varios identificadores de estrato del campo «{field}» de la capa «{layer}» los llevan varias entidades: "
+        "{value} (entidades {ids}) y {more} identificador(es) más ({others}), así que cada una de esas entidades "
+        "recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del "
+        "anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los "
+        "polígonos), o dé a cada entidad su propio identificador.",
+    ),
+    (E, "In the range of units '{text}', '{part}' starts above where it stops (start {start}, stop {stop}), so it "
+        "holds no number of units. Write start:stop:step with the start at or below the stop (e.g. "
+        "{stop}:{start}:{step})."): (
+        "Dans la plage d'unités « {text} », « {part} » commence au-dessus de sa fin (début {start}, fin {stop}) et "
+        "ne contient donc aucun nombre d'unités. Écrivez début:fin:pas avec un début inférieur ou égal à la fin "
+        "(p. ex. {stop}:{start}:{step}).",
+        "En el rango de unidades «{text}», «{part}» empieza por encima de donde termina (inicio {start}, fin "
+        "{stop}), así que no contiene ningún número de unidades. Escriba inicio:fin:paso con el inicio menor o "
+        "igual que el fin (p. ej. {stop}:{start}:{step}).",
+    ),
+    (E, "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with "
+        "{replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely "
+        "cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach "
+        "the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the "
+        "estimate is biased. Smaller units, or fewer and more compact strata, reduce it."): (
+        "{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation "
+        "(±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des "
+        "{tests} plan(s)). Cause probable : les unités proches du bord de leur strate ne comptent que la partie "
+        "intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent "
+        "moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités "
+        "plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.",
+        "{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación "
+        "(±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de "
+        "{tests} diseño(s)). Causa probable: las unidades cercanas al borde de su estrato cuentan solo la parte "
+        "interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la "
+        "estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o "
+        "estratos menos numerosos y más compactos, lo reducen.",
+    ),
+    (E, "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with "
+        "{replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely "
+        "cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the "
+        "edge), so edge areas weigh less in the estimate; where their density differs from the interior, the "
+        "estimate is biased. Smaller units reduce it."): (
+        "{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation "
+        "(±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des "
+        "{tests} plan(s)). Cause probable : les unités proches du bord de la base de sondage ne comptent que la "
+        "partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord "
+        "pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des "
+        "unités plus petites le réduisent.",
+        "{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación "
+        "(±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de "
+        "{tests} diseño(s)). Causa probable: las unidades cercanas al borde del marco de muestreo cuentan solo la "
+        "parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la "
+        "estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas lo "
+        "reducen.",
+    ),
+    (E, "With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing "
+        "to stratify. Lower MIN_AREA."): (
+        "Avec MIN_AREA = {min_area:g} ha, la fusion des taches plus petites n'a laissé qu'une seule strate : il "
+        "n'y a plus rien à stratifier. Réduisez MIN_AREA.",
+        "Con MIN_AREA = {min_area:g} ha, la fusión de las manchas más pequeñas dejó un solo estrato: no queda nada "
+        "que estratificar. Reduzca MIN_AREA.",
+    ),
+    (E, "Merging the patches below MIN_AREA moved cells between strata: the share of the variance of '{name}' "
+        "that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer "
+        "to the covariates."): (
+        "La fusion des taches sous MIN_AREA a fait passer des cellules d'une strate à l'autre : la part de la "
+        "variance de « {name} » expliquée par les strates est tombée de {before:.2f} à {after:.2f}. Un MIN_AREA "
+        "plus petit garde les strates plus proches des covariables.",
+        "La fusión de las manchas por debajo de MIN_AREA pasó celdas de un estrato a otro: la parte de la varianza "
+        "de «{name}» que explican los estratos bajó de {before:.2f} a {after:.2f}. Un MIN_AREA menor mantiene los "
+        "estratos más cerca de las covariables.",
+    ),
+    (E, "{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum "
+        "(islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData "
+        "in the covariates, or lower MIN_AREA."): (
+        "{n} tache(s) couvrant {ha:,.2f} ha restent sous MIN_AREA ({min_area:g} ha) : elles ne touchent aucune "
+        "autre strate (îlots de la base de sondage, ou taches entourées de NoData). Retirez ces îlots de la base "
+        "de sondage, comblez les NoData des covariables, ou réduisez MIN_AREA.",
+        "{n} mancha(s) que cubren {ha:,.2f} ha quedan por debajo de MIN_AREA ({min_area:g} ha): no tocan ningún "
+        "otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData). Quite esas islas del marco de "
+        "muestreo, rellene los NoData de las covariables, o reduzca MIN_AREA.",
+    ),
+
     # -- host strings that fill engine messages (allocate, simulatecounts) -------------------------
     "field '{name}' of layer '{layer}'": (
         "champ « {name} » de la couche « {layer} »",
@@ -334,36 +443,6 @@ ENGINE_TRANSLATIONS = {
         "{design} con {n_units} unidades: {failed} de los {replicates} muestreos simulados no dieron estimación "
         "(un estrato sin unidad contada, o ninguna unidad en el marco de muestreo); se excluyen de sus cifras.",
     ),
-    (E, "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%}). "
-        "Units near the edge of its stratum count only the part inside it (or, kept inside, never reach the edge), "
-        "so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is "
-        "biased. Smaller units, or fewer and more compact strata, reduce it."): (
-        "{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation "
-        "(±{noise:.1%}). Les unités proches du bord de leur strate ne comptent que la partie intérieure (ou, "
-        "gardées à l'intérieur, n'atteignent jamais le bord) : les zones de bord pèsent moins dans l'estimation ; là "
-        "où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates "
-        "moins nombreuses et plus compactes, le réduisent.",
-        "{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación "
-        "(±{noise:.1%}). Las unidades cercanas al borde de su estrato cuentan solo la parte interior (o, mantenidas "
-        "dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad "
-        "difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más "
-        "compactos, lo reducen.",
-    ),
-    (E, "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%}). "
-        "Units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), "
-        "so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is "
-        "biased. Smaller units, or fewer and more compact strata, reduce it."): (
-        "{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation "
-        "(±{noise:.1%}). Les unités proches du bord de la base de sondage ne comptent que la partie intérieure "
-        "(ou, gardées à l'intérieur, n'atteignent jamais le bord) : les zones de bord pèsent moins dans "
-        "l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus "
-        "petites, ou des strates moins nombreuses et plus compactes, le réduisent.",
-        "{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación "
-        "(±{noise:.1%}). Las unidades cercanas al borde del marco de muestreo cuentan solo la parte interior (o, "
-        "mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde "
-        "su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos "
-        "numerosos y más compactos, lo reducen.",
-    ),
     (E, "The range of units '{text}' cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or "
         "start:stop:step (e.g. 20:100:20)."): (
         "La plage d'unités « {text} » ne peut pas être lue. Donnez des nombres entiers séparés par des virgules "
@@ -608,6 +687,76 @@ ENGINE_TRANSLATIONS = {
     (E, "{name} class {value}"): ("{name} : classe {value}", "{name}: clase {value}"),
     (E, "mean {values}"): ("moyenne {values}", "media {values}"),
 
+    # -- estimate: overlap, NULL ids (QA) --
+    (E, "Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These polygons "
+        "cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. "
+        "Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to "
+        "leave out strata with no surveyed unit (the frame then shrinks)."): (
+        "Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les "
+        "identifiants d'entité {ids}. Ces polygones couvrent {area:.4g} {unit} qu'aucune strate ne couvre, si bien "
+        "que l'estimation porterait sans le dire sur une base de sondage plus petite. Donnez à chaque polygone "
+        "l'identifiant de sa strate, supprimez les polygones qui ne font pas partie de la base de sondage, ou "
+        "choisissez d'écarter les strates sans unité inventoriée (la base de sondage se réduit alors).",
+        "Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores "
+        "de entidad {ids}. Estos polígonos cubren {area:.4g} {unit} que ningún estrato cubre, así que la estimación "
+        "hablaría sin avisar de un marco de muestreo más pequeño. Dé a cada polígono el identificador de su "
+        "estrato, elimine los polígonos que no forman parte del marco, o elija dejar fuera los estratos sin "
+        "unidades muestreadas (el marco se reduce entonces).",
+    ),
+    (E, "Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These polygons "
+        "were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them "
+        "in the frame, give each polygon the id of its stratum."): (
+        "Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les "
+        "identifiants d'entité {ids}. Ces polygones ont été écartés, et la base de sondage a diminué des "
+        "{area:.4g} {unit} qu'aucune strate ne couvre. Pour les garder dans la base de sondage, donnez à "
+        "chaque polygone l'identifiant de sa strate.",
+        "Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores "
+        "de entidad {ids}. Estos polígonos se dejaron fuera, y el marco de muestreo se redujo en la parte que "
+        "ningún estrato cubre: {area:.4g} {unit}. Para mantenerlos en el marco, dé a cada polígono el "
+        "identificador de su estrato.",
+    ),
+    (E, "Layer '{layer}': no polygon has a stratum id in the field '{field}'. Fill in the stratum ids, or choose "
+        "the field that holds them."): (
+        "Couche « {layer} » : aucun polygone n'a d'identifiant de strate dans le champ « {field} ». Renseignez les "
+        "identifiants de strate, ou choisissez le champ qui les contient.",
+        "Capa «{layer}»: ningún polígono tiene identificador de estrato en el campo «{field}». Rellene los "
+        "identificadores de estrato, o elija el campo que los contiene.",
+    ),
+    (E, "{first} and {second} ({area:.4g} {unit})"): (
+        "{first} et {second} ({area:.4g} {unit})",
+        "{first} y {second} ({area:.4g} {unit})",
+    ),
+    (E, "Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the "
+        "{covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame "
+        "area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to "
+        "one stratum only (cut each overlap out of all strata but one, or redraw the shared edges)."): (
+        "Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % "
+        "de la surface couverte par les strates, {covered:.4g} {unit}) seraient comptés dans plus d'une strate, ce "
+        "qui gonfle la surface de la base de sondage et l'abondance. Corrigez les polygones des strates pour qu'ils "
+        "ne se chevauchent pas : chaque parcelle de terrain appartient à une seule strate (découpez chaque "
+        "chevauchement de toutes les strates sauf une, ou redessinez les limites communes).",
+        "Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la "
+        "superficie cubierta por los estratos, {covered:.4g} {unit}) se contarían en más de un estrato, lo que "
+        "infla el área del marco de muestreo y la abundancia. Corrija los polígonos de los estratos para que no se "
+        "solapen: cada trozo de terreno pertenece a un solo estrato (recorte cada solape de todos los estratos "
+        "salvo uno, o vuelva a trazar los bordes comunes).",
+    ),
+    (E, "Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the "
+        "{covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the "
+        "abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared "
+        "edges, or cut each overlap out of all strata but one)."): (
+        "Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % "
+        "de la surface couverte par les strates, {covered:.4g} {unit}) sont comptés dans plus d'une strate, si bien "
+        "que la surface de la base de sondage et l'abondance sont légèrement trop grandes. Corrigez les polygones "
+        "des strates pour qu'ils ne se chevauchent pas (alignez les limites communes par accrochage, ou découpez "
+        "chaque chevauchement de toutes les strates sauf une).",
+        "Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la "
+        "superficie cubierta por los estratos, {covered:.4g} {unit}) se cuentan en más de un estrato, por lo que "
+        "el área del marco de muestreo y la abundancia son algo mayores de lo debido. Corrija los polígonos de los "
+        "estratos para que no se solapen (ajuste los bordes comunes con el autoensamblado, o recorte cada solape "
+        "de todos los estratos salvo uno).",
+    ),
+
     # -- layout --------------------------------------------------------------------------------
     (E, "point unit {unit} (primary, stratum {stratum})"): (
         "unité ponctuelle {unit} (principale, strate {stratum})",
@@ -710,9 +859,53 @@ ENGINE_TRANSLATIONS = {
         "Les entités vides ou de surface nulle {ids} ont été ignorées.",
         "Se omitieron las entidades vacías o de área nula {ids}.",
     ),
-    (E, "The frame has no polygon with an area: every feature is empty or has zero area."): (
-        "La base de sondage n'a aucun polygone avec une surface : chaque entité est vide ou de surface nulle.",
-        "El marco de muestreo no tiene ningún polígono con área: cada entidad está vacía o tiene área nula.",
+    (E, "The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver."): (
+        "La base de sondage n'a aucun polygone de {area:g} m² ou plus : chaque entité est vide, de surface nulle ou "
+        "n'est qu'un liseré.",
+        "El marco de muestreo no tiene ningún polígono de {area:g} m² o más: cada entidad está vacía, tiene área nula "
+        "o es una astilla.",
+    ),
+    (E, "Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a "
+        "reprojection) and were skipped."): (
+        "Les entités {ids} ont moins de {area:g} m² de surface (des liserés, laissés par exemple par une superposition "
+        "ou une reprojection) et ont été écartées.",
+        "Las entidades {ids} tienen menos de {area:g} m² de área (astillas, dejadas por ejemplo por una superposición "
+        "o una reproyección) y se han omitido.",
+    ),
+    (E, "Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn "
+        "in both strata and weighted twice. Make the strata polygons disjoint (for example with the host's Difference "
+        "or Union tools) and run again."): (
+        "Des strates se chevauchent ({pairs}) : un lieu n'appartient qu'à une strate, et les unités d'une zone commune "
+        "seraient tirées dans les deux strates et pondérées deux fois. Rendez les polygones des strates disjoints (par "
+        "exemple avec les outils Différence ou Union de l'hôte) et relancez.",
+        "Hay estratos que se solapan ({pairs}): un lugar pertenece a un solo estrato, y las unidades de una zona común "
+        "se sortearían en ambos estratos y se ponderarían dos veces. Haga disjuntos los polígonos de los estratos (por "
+        "ejemplo con las herramientas Diferencia o Unión del anfitrión) y vuelva a ejecutar.",
+    ),
+    (E, "Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is "
+        "more than digitising noise."): (
+        "Des strates se chevauchent légèrement ({pairs}) ; les unités qui s'y trouvent appartiennent aux deux. Rendez "
+        "les polygones des strates disjoints si ce n'est pas qu'une imprécision de numérisation.",
+        "Hay estratos que se solapan ligeramente ({pairs}); las unidades allí pertenecen a ambos. Haga disjuntos los "
+        "polígonos de los estratos si es más que ruido de digitalización.",
+    ),
+    (E, "A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m "
+        "x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the "
+        "number of units: check the frame for slivers, ask for fewer units, or use another design."): (
+        "Une grille systématique de pas {spacing:.3g} m sur une surface de {area:,.1f} m² étalée sur {width:,.0f} m "
+        "x {height:,.0f} m demanderait {count:,} points candidats. La surface est un liseré ou bien trop petite pour "
+        "le nombre d'unités : cherchez les liserés dans la base de sondage, demandez moins d'unités ou choisissez un "
+        "autre plan.",
+        "Una cuadrícula sistemática de espaciado {spacing:.3g} m sobre un área de {area:,.1f} m² extendida sobre "
+        "{width:,.0f} m x {height:,.0f} m necesitaría {count:,} puntos candidatos. El área es una astilla o demasiado "
+        "pequeña para el número de unidades: busque astillas en el marco, pida menos unidades o use otro diseño.",
+    ),
+    (E, "No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a sample unit. Check the frame "
+        "for slivers."): (
+        "Aucun point n'a pu être tiré dans une surface de {area:.3g} m² : elle est trop mince pour accueillir une "
+        "unité d'échantillonnage. Cherchez les liserés dans la base de sondage.",
+        "No se pudo sortear ningún punto en un área de {area:.3g} m²: es demasiado delgada para contener una unidad "
+        "de muestreo. Busque astillas en el marco.",
     ),
     (E, "{field} is empty (NULL) for feature {fid}. Give it a stratum value."): (
         "{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.",

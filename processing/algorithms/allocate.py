@@ -186,6 +186,9 @@ class Allocate(PlotwiseAlgorithm):
         if len(records) == 0:
             raise QgsProcessingException(self.tr("Layer '{layer}' has no strata with an area.").format(layer=layer))
         fids = [int(f) for f in records.fids]
+        if stratum_field:  # one feature per stratum, each with an id: layout relies on both
+            with self.engine_errors():
+                allocation.check_stratum_ids(records.attributes[stratum_field], fids, layer, stratum_field)
         labels = records.attributes[stratum_field] if stratum_field else fids
         if area_field:
             areas_ha = records.attributes[area_field]

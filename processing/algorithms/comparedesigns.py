@@ -228,7 +228,7 @@ class CompareDesigns(PlotwiseAlgorithm):
         warnings = list(frame_records.warnings)
 
         strata_source = self.parameterAsSource(parameters, self.STRATA, context)
-        strata = keys = None
+        strata = keys = strata_ids = None
         strata_name = stratum_field = None
         if strata_source is not None:
             strata_name = strata_source.sourceName()
@@ -243,14 +243,15 @@ class CompareDesigns(PlotwiseAlgorithm):
                                            [stratum_field] if stratum_field else [], layer_name=strata_name)
             warnings.extend(records.warnings)
             strata = list(records.geometries)
-            keys = list(records.attributes[stratum_field]) if stratum_field else [int(f) for f in records.fids]
+            strata_ids = [int(f) for f in records.fids]
+            keys = list(records.attributes[stratum_field]) if stratum_field else list(strata_ids)
             nulls = [int(f) for f, k in zip(records.fids, keys) if k is None]
             if nulls:
                 raise QgsProcessingException(
                     self.tr("Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every "
                             "stratum a value.").format(layer=strata_name, field=stratum_field, ids=bridge.id_list(nulls)))
             if not strata:
-                strata = keys = None
+                strata = keys = strata_ids = None
 
         already_pushed = len(warnings)  # bridge.read_features pushes its own warnings
         designs = sorted(set(self.parameterAsEnums(parameters, self.DESIGNS, context))) or list(range(5))
@@ -294,8 +295,11 @@ class CompareDesigns(PlotwiseAlgorithm):
             grid = engine.population_grid(density, geotransform, frame, strata, keys,
                                            progress=self.progress_callback(feedback, 3, 6))
             region = engine.counting_region(shape, size, half_width)
+            frame_parts = [(g, int(f)) for g, f in zip(frame_records.geometries, frame_records.fids) if g is not None]
             setup = engine.prepare_comparison(grid, frame, region, shape, size, rng, strata, keys, bearing, k,
-                                              inside=inside)
+                                              inside=inside, strata_ids=strata_ids,
+                                              frame_parts=[g for g, _ in frame_parts],
+                                              frame_ids=[f for _, f in frame_parts])
             warnings.extend(self.translate_message(w) for w in setup.warnings)
             main_end = 70.0 if [m for m in n_range if m != n_units] else 95.0
             comparison = engine.compare_designs(
@@ -399,7 +403,8 @@ class CompareDesigns(PlotwiseAlgorithm):
             rows.append([name, p.mean_n, _pct(p.rel_bias), p.emp_se, p.rmse, p.rmse_mc_se, _pct(p.rel_rmse),
                          p.mean_cv, _pct(p.coverage, 0), p.failed])
         report.table(header, rows)
-        noises = [engine.bias_noise(p) for p in comparison.performance]
+        tested = [p for p in comparison.performance if np.isfinite(engine.bias_standard_error(p))]
+        noises = [engine.bias_noise(p, len(tested)) for p in tested]  # the threshold of the bias warning
         noises = [v for v in noises if np.isfinite(v)]
         if noises:
             noise = max(noises)

@@ -98,6 +98,8 @@ class LayoutUnits(PlotwiseAlgorithm):
             "without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an "
             "empty count field for the field teams. The GPX file holds one waypoint per unit (a start and an end "
             "waypoint per transect), named by unit_id.\n\n"
+            "Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one "
+            "a warning. Features under 1 m² (slivers) are skipped, with a warning.\n\n"
             "A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's "
             "access and safety before fieldwork: the tool never makes a location safe."
         )

@@ -94,9 +94,10 @@ class Stratify(PlotwiseAlgorithm):
             "the seed; then every cell goes to its nearest centre.</li>"
             "<li><b>Raster classes</b>: each value of the first covariate (a categorical raster, at most 50 "
             "classes) is one stratum; the number of strata is ignored.</li></ul>"
-            "<p>Strata are numbered 1..k by increasing mean of the first covariate. Patches smaller than the "
-            "minimum patch area (ha) are merged into their neighbours (GDAL sieve, 4-connected) before the "
-            "strata are turned into polygons.</p>"
+            "<p>Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller "
+            "than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into "
+            "polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that "
+            "brings it to the minimum area. A patch that touches no other stratum stays, with a warning.</p>"
             "<h3>Outputs</h3><ul>"
             "<li>Stratum raster: the stratum of each cell (0 = none).</li>"
             "<li>Strata: one multipolygon per stratum with <i>stratum</i>, <i>label</i>, <i>area_ha</i> "
@@ -261,12 +262,32 @@ class Stratify(PlotwiseAlgorithm):
                 row += [float(stats.mean[h, c]), float(stats.sd[h, c])]
             rows.append(row)
         report.table(header, rows)
-        if result.sieve_cells > 1:
+        if result.sieve_cells > 1 and not result.patches_merged:
             report.paragraph(tr(
                 "Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL "
                 "sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a "
                 "stratum may hold a few cells that the rule alone would have put in a neighbouring stratum."
             ).format(ha=format_number(min_area), cells=result.sieve_cells))
+        elif result.sieve_cells > 1:
+            report.paragraph(tr(
+                "Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): "
+                "specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more "
+                "patches, smallest first, each into the neighbouring stratum that made the smallest patch of at "
+                "least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not "
+                "swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may "
+                "hold cells that the rule alone would have put in another stratum."
+            ).format(ha=format_number(min_area), cells=result.sieve_cells,
+                     specks=raster_io.speck_cells(result.sieve_cells), n=result.patches_merged))
+        if result.sieve_cells > 1:
+            if result.small_patches:
+                report.paragraph(tr(
+                    "{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches "
+                    "ringed by NoData) and stay smaller than {ha} ha."
+                ).format(n=result.small_patches, area=format_number(result.small_patches_ha),
+                         ha=format_number(min_area)))
+            else:
+                report.paragraph(tr("Every patch of the strata now covers at least {ha} ha.").format(
+                    ha=format_number(min_area)))
 
         method_name = strat.METHOD_NAMES[method]
         report.section(tr("Method: {name}").format(name=method_name))

@@ -393,6 +393,74 @@ def _as_number(value):
         return np.nan
 
 
+def _is_null(value):
+    return value is None or (isinstance(value, float) and value != value)
+
+
+def _shown_id(value):
+    """A stratum id as shown in a message: text in quotes, numbers as they are."""
+    return f"'{value}'" if isinstance(value, str) else str(value)
+
+
+def check_stratum_ids(values, feature_ids, layer, field):
+    """Refuse stratum ids that are empty (NULL) or carried by more than one feature.
+
+    Every feature of the strata layer is allocated as one stratum, so a stratum
+    split over several features would get several allocations under one id, and
+    a feature without an id could not be matched by the layout. Both are errors.
+
+    Parameters
+    ----------
+    values : sequence
+        The stratum id of each feature (None or NaN for NULL).
+    feature_ids : sequence
+        The host's feature ids, named in the messages.
+    layer, field : str
+        Layer and field names, named in the messages.
+
+    Raises
+    ------
+    InputError
+        Naming the layer, the field, the id and the feature ids, with the remedy.
+    """
+    values, feature_ids = list(values), list(feature_ids)
+    null = np.array([_is_null(v) for v in values], dtype=bool)
+    if null.any():
+        chosen, shown = _listing(feature_ids, null)
+        raise InputError(message(
+            "Stratum field '{field}' of layer '{layer}' is empty (NULL) for feature(s) {ids}. Give every "
+            "stratum an id, or remove those features from the layer.", field=field, layer=layer, ids=shown),
+            ids=chosen)
+    features = {}
+    for value, fid in zip(values, feature_ids):
+        try:
+            features.setdefault(value, []).append(fid)
+        except TypeError:  # an unhashable value: compare by its text
+            features.setdefault(str(value), []).append(fid)
+    repeated = [(value, fids) for value, fids in features.items() if len(fids) > 1]
+    if not repeated:
+        return
+    value, fids = repeated[0]
+    _, shown = _listing(fids, np.ones(len(fids), dtype=bool))
+    chosen = [fid for _, group in repeated for fid in group]
+    if len(repeated) == 1:
+        text = message(
+            "Features {ids} of layer '{layer}' carry the same stratum id {value} in field '{field}', so each "
+            "would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; "
+            "then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
+            "feature its own id.", ids=shown, layer=layer, value=_shown_id(value), field=field)
+    else:
+        others = ", ".join(_shown_id(v) for v, _ in repeated[1:21]) + (" …" if len(repeated) > 21 else "")
+        text = message(
+            "Several stratum ids in field '{field}' of layer '{layer}' are carried by more than one feature: "
+            "{value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get "
+            "its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then "
+            "recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
+            "feature its own id.", field=field, layer=layer, value=_shown_id(value), ids=shown,
+            more=len(repeated) - 1, others=others)
+    raise InputError(text, ids=chosen)
+
+
 def check_values(values, name, ids, allow_zero=False):
     """Return ``values`` as floats, or raise :class:`InputError` naming the bad strata.
 

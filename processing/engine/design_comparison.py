@@ -55,7 +55,13 @@ Performance (per design, over the replicates r with an estimate ``N̂_r`` of the
 realised total ``N_r``; Morris, White & Crowther 2019, Statistics in Medicine
 38:2074–2102, table 6):
 
-* relative bias ``Σ (N̂_r − N_r) / Σ N_r``;
+* relative bias ``Σ (N̂_r − N_r) / Σ N_r``, with its Monte Carlo standard
+  error ``emp_se / (√R · mean N_r)``; a bias is reported as beyond the
+  simulation's noise when it exceeds 2 % and both Student's t of the mean
+  error and its skewness-corrected form (Johnson 1978, made monotone by
+  Hall 1992) pass Student's t quantile (R − 1 df) at ``1 − 0.01 / (2 m)``:
+  a two-sided test with the Bonferroni correction over the m designs (at
+  most 1 % false alarms per comparison);
 * empirical SE, the standard deviation of the errors ``N̂_r − N_r``;
 * RMSE ``√(mean (N̂_r − N_r)²)``, with its Monte Carlo standard error
   ``sd((N̂ − N)²) / (2 RMSE √R)`` (delta method);
@@ -65,6 +71,7 @@ realised total ``N_r``; Morris, White & Crowther 2019, Statistics in Medicine
 Nothing here imports the host.
 """
 from dataclasses import dataclass, replace
+import functools
 import math
 
 import numpy as np
@@ -104,6 +111,7 @@ FRAME_LABEL = "frame"
 M2_PER_KM2 = 1e6
 ACCEPTABLE_COVERAGE = 0.90  # common practice: an interval that covers less than 90 % misleads
 NOTABLE_BIAS = 0.02  # relative bias worth a warning when also beyond the Monte Carlo noise (the issue's 2 %)
+BIAS_TEST_LEVEL = 0.01  # chance that noise alone raises the bias warning in a comparison (our choice)
 
 
 # ----------------------------------------------------------------------------
@@ -581,7 +589,8 @@ class ComparisonSetup:
 
 
 def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=None, bearing=0.0,
-                       overdispersion=0.0, sd_draws=SD_DRAWS, inside=False):
+                       overdispersion=0.0, sd_draws=SD_DRAWS, inside=False, strata_ids=None, frame_parts=None,
+                       frame_ids=None):
     """Prepare the frame, the strata and the Neyman ``S_h`` for :func:`simulate_designs`.
 
     Parameters
@@ -604,6 +613,12 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         Keep every unit wholly inside its stratum (or the frame), as the
         layout's INSIDE option does: centres are drawn from the region shrunk
         by the unit's circumscribing radius.
+    strata_ids : sequence, optional
+        The host's feature id of each polygon of ``strata``, named in messages
+        (default 0, 1, ...).
+    frame_parts, frame_ids : sequence, optional
+        The frame's features (their union is ``frame``) and their feature ids,
+        named in messages about the frame when there are no strata.
     """
     if overdispersion < 0:
         raise InputError(message("The overdispersion k must be 0 (Poisson counts) or more."))
@@ -625,14 +640,19 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
             warnings.append(message(
                 "The strata cover {share:.1%} of the frame: every design is compared on the part the strata "
                 "cover.", share=1 - lost))
-        prepared = layout.prepare_strata(cut, strata=keys, n_units=2 * len(strata), spec=spec)
+        prepared = layout.prepare_strata(cut, feature_ids=strata_ids, strata=keys, n_units=2 * len(strata),
+                                         spec=spec)
         position = {k: i for i, k in enumerate(grid.keys)}
         try:
             codes = np.array([position[st.key] for st in prepared.strata], dtype=int)
         except KeyError:
             raise InputError(message("A stratum of the layout has no cells on the surface grid.")) from None
         sd, mean = stratum_unit_sd(grid, prepared, codes, region, factor, spec.bearing, overdispersion, rng, sd_draws)
-    whole = layout.prepare_strata([covered], n_units=layout.MIN_PER_STRATUM, spec=spec)
+    if strata is None and frame_parts is not None and frame_ids is not None:  # messages name the features
+        whole = layout.prepare_strata(list(frame_parts), feature_ids=frame_ids,
+                                      n_units=layout.MIN_PER_STRATUM, spec=spec)
+    else:
+        whole = layout.prepare_strata([covered], n_units=layout.MIN_PER_STRATUM, spec=spec)
     return ComparisonSetup(grid, region, factor, spec, whole, prepared, codes, sd, mean, float(overdispersion),
                            tuple(warnings))
 
@@ -858,6 +878,8 @@ class DesignPerformance:
     rel_rmse: float
     mean_cv: float
     coverage: float
+    error_m3: float = float("nan")
+    """Third central moment of the errors ``mean((e − ē)³)``, for the skewness-corrected bias test."""
 
 
 def design_performance(truth, estimate, lower, upper, cv, n):
@@ -879,7 +901,7 @@ def design_performance(truth, estimate, lower, upper, cv, n):
     nan = float("nan")
     if m == 0:
         out.update(mean_n=nan, mean_true=nan, mean_estimate=nan, rel_bias=nan, emp_se=nan, rmse=nan,
-                   rmse_mc_se=nan, rel_rmse=nan, mean_cv=nan, coverage=nan)
+                   rmse_mc_se=nan, rel_rmse=nan, mean_cv=nan, coverage=nan, error_m3=nan)
         return out
     t, e = truth[ok], estimate[ok]
     err = e - t
@@ -898,6 +920,7 @@ def design_performance(truth, estimate, lower, upper, cv, n):
         rel_rmse=rmse / float(t.mean()) if t.mean() > 0 else nan,
         mean_cv=float(np.nanmean(cvs)) if np.isfinite(cvs).any() else nan,
         coverage=float(covered.mean()),
+        error_m3=float(np.mean((err - err.mean()) ** 3)),
     )
     return out
 
@@ -961,12 +984,102 @@ def recommend_design(performance, min_coverage=ACCEPTABLE_COVERAGE):
     return best.design, tuple(near)
 
 
-def bias_noise(performance):
-    """Two Monte Carlo standard errors of the relative bias, ``2 emp_se / (√R · mean true total)``."""
+def bias_standard_error(performance):
+    """Monte Carlo standard error of the relative bias, ``emp_se / (√R · mean true total)``.
+
+    The relative bias is the mean error over the mean true total; the mean of R
+    errors has the standard error ``emp_se / √R`` (Morris, White & Crowther 2019,
+    table 6).
+    """
     p = performance
     if p.replicates < 2 or not (np.isfinite(p.emp_se) and p.mean_true > 0):
         return float("nan")
-    return 2.0 * p.emp_se / (math.sqrt(p.replicates) * p.mean_true)
+    return p.emp_se / (math.sqrt(p.replicates) * p.mean_true)
+
+
+@functools.lru_cache(maxsize=256)
+def bias_critical_value(replicates, n_tests=1, level=BIAS_TEST_LEVEL):
+    """Critical |t| of the bias test: Student's t with ``R − 1`` df at ``1 − level / (2 n_tests)``.
+
+    A two-sided one-sample t test of "mean error = 0" for each of ``n_tests``
+    designs, with the Bonferroni correction, so that with every design unbiased
+    the warning fires in at most about ``level`` of the comparisons. With few
+    replicates the t quantile is large: a bias must then be large to count.
+    """
+    from scipy.stats import t
+
+    replicates, n_tests = int(replicates), max(int(n_tests), 1)
+    if replicates < 2:
+        return float("nan")
+    return float(t.ppf(1.0 - level / (2.0 * n_tests), replicates - 1))
+
+
+def bias_noise(performance, n_tests=1, level=BIAS_TEST_LEVEL):
+    """The relative bias that noise alone stays within: critical value × Monte Carlo SE.
+
+    See :func:`bias_standard_error` and :func:`bias_critical_value`; ``n_tests``
+    is the number of designs tested together.
+    """
+    return bias_critical_value(performance.replicates, n_tests, level) * bias_standard_error(performance)
+
+
+def bias_test_statistics(performance):
+    """Student's t of the mean error, and the same corrected for the errors' skewness.
+
+    With the R errors' mean ``ē``, standard deviation ``s``, third central
+    moment ``μ₃`` and skewness ``γ = μ₃ / s³``, and ``x = ē / s``:
+    ``t = √R x`` and ``t₁ = √R (x + γ x² / 3 + γ² x³ / 27 + γ / (6 R))``, Johnson's
+    (1978) skewness-corrected t made monotone in ``x`` by Hall's (1992) cubic term
+    (Johnson, N. J., JASA 73:536–544; Hall, P., JRSS B 54:221–228). The errors of
+    a survey of few animals are skewed, and then ``t`` alone rejects more often
+    than its level on one side; ``t₁`` corrects that. NaN when undefined.
+    """
+    p = performance
+    nan = float("nan")
+    if p.replicates < 2 or not (np.isfinite(p.emp_se) and p.emp_se > 0 and np.isfinite(p.rel_bias)):
+        return nan, nan
+    root = math.sqrt(p.replicates)
+    x = p.rel_bias * p.mean_true / p.emp_se  # Σ err / Σ N = ē / mean N, so ē = rel_bias · mean N
+    if not np.isfinite(p.error_m3):
+        return root * x, nan
+    gamma = p.error_m3 / p.emp_se ** 3
+    return root * x, root * (x + gamma * x * x / 3.0 + gamma * gamma * x ** 3 / 27.0 + gamma / (6.0 * p.replicates))
+
+
+def bias_warnings(performance, n_units, level=BIAS_TEST_LEVEL):
+    """Warnings for the designs whose relative bias is both notable and beyond the simulation's noise.
+
+    A design is flagged when ``|rel_bias| > NOTABLE_BIAS`` and both Student's t
+    and the skewness-corrected t of its mean error (:func:`bias_test_statistics`)
+    pass the critical value of :func:`bias_critical_value` on the same side
+    (Bonferroni over the designs with a bias). Requiring both keeps the chance
+    that unbiased designs raise it at or below ``level`` per comparison, for
+    skewed errors too and whatever the number of replicates.
+    """
+    tested = [p for p in performance if np.isfinite(bias_standard_error(p)) and np.isfinite(p.rel_bias)]
+    warnings = []
+    for p in tested:
+        critical = bias_critical_value(p.replicates, len(tested), level)
+        t, t1 = bias_test_statistics(p)
+        beyond = abs(t) > critical and (not np.isfinite(t1) or (abs(t1) > critical and t * t1 > 0))
+        if abs(p.rel_bias) > NOTABLE_BIAS and beyond:
+            noise = critical * bias_standard_error(p)
+            warnings.append(message(
+                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
+                "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
+                "design(s)). A likely cause: units near the edge of their stratum count only the part inside it "
+                "(or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their "
+                "density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact "
+                "strata, reduce it."
+                if p.design in STRATIFIED_DESIGNS else
+                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
+                "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
+                "design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, "
+                "kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density "
+                "differs from the interior, the estimate is biased. Smaller units reduce it.",
+                design=message(DESIGNS[p.design]), n_units=n_units, bias=p.rel_bias, noise=noise,
+                replicates=p.replicates, level=level, tests=len(tested)))
+    return warnings
 
 
 def compare_designs(setup, designs, n_units, replicates, rng, confidence=0.95, variance_method=estimation.VARIANCE_SRS,
@@ -992,20 +1105,7 @@ def compare_designs(setup, designs, n_units, replicates, rng, confidence=0.95, v
                 "{design} at {n_units} units: {failed} of {replicates} simulated surveys "
                 "gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out "
                 "of its figures.", design=design_name, n_units=n_units, failed=stats["failed"], replicates=replicates))
-    for p in performance:
-        noise = bias_noise(p)
-        if np.isfinite(p.rel_bias) and abs(p.rel_bias) > max(NOTABLE_BIAS, noise):
-            warnings.append(message(
-                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
-                "(±{noise:.1%}). Units near the edge of its stratum count only the part inside it (or, kept inside, "
-                "never reach the edge), so edge areas weigh less in the estimate; where their density differs from "
-                "the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it."
-                if p.design in STRATIFIED_DESIGNS else
-                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
-                "(±{noise:.1%}). Units near the edge of the frame count only the part inside it (or, kept inside, "
-                "never reach the edge), so edge areas weigh less in the estimate; where their density differs from "
-                "the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.",
-                design=message(DESIGNS[p.design]), n_units=n_units, bias=p.rel_bias, noise=noise))
+    warnings.extend(bias_warnings(performance, n_units))
     recommended, near = recommend_design(performance)
     return Comparison(int(n_units), tuple(performance), recommended, near, results, plans, tuple(warnings))
 
@@ -1022,6 +1122,7 @@ def parse_unit_range(text):
     if not text:
         return ()
     values = []
+    backwards = None
     try:
         for part in text.replace(";", ",").split(","):
             part = part.strip()
@@ -1031,6 +1132,9 @@ def parse_unit_range(text):
                 bits = [int(float(b)) for b in part.split(":")]
                 if len(bits) != 3 or bits[2] <= 0:
                     raise ValueError(part)
+                if bits[0] > bits[1]:
+                    backwards = (part, bits[0], bits[1], bits[2])
+                    break
                 values.extend(range(bits[0], bits[1] + 1, bits[2]))
             else:
                 values.append(int(float(part)))
@@ -1039,6 +1143,12 @@ def parse_unit_range(text):
             "The range of units '{text}' cannot be read. Give whole numbers separated by commas "
             "(e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).", text=text
         )) from None
+    if backwards is not None:
+        part, start, stop, step = backwards
+        raise InputError(message(
+            "In the range of units '{text}', '{part}' starts above where it stops (start {start}, stop {stop}), "
+            "so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. "
+            "{stop}:{start}:{step}).", text=text, part=part, start=start, stop=stop, step=step))
     if any(v < layout.MIN_PER_STRATUM for v in values):
         raise InputError(message("Every number of units in the range must be at least {minimum}.",
                                  minimum=layout.MIN_PER_STRATUM))

@@ -1052,6 +1052,138 @@ def stratum_order(statistics):
 
 
 # ---------------------------------------------------------------------------
+# patches below the minimum area
+# ---------------------------------------------------------------------------
+@dataclass(frozen=True, eq=False)
+class PatchMerge:
+    """Result of :func:`merge_small_patches`.
+
+    Attributes
+    ----------
+    strata : ndarray of int
+        The stratum of every patch after merging.
+    merged : int
+        Patches that changed stratum.
+    left : ndarray of int
+        The patches (indices; each the representative of its merged group) still
+        below the minimum: they touch no patch of another stratum.
+    left_cells : ndarray of int
+        The cells of each of ``left``.
+    """
+
+    strata: np.ndarray
+    merged: int
+    left: np.ndarray
+    left_cells: np.ndarray
+
+
+def merge_small_patches(sizes, strata, pairs, shared, min_cells):
+    """Merge patches below ``min_cells`` with a neighbouring stratum, smallest patch first.
+
+    A patch is a 4-connected group of cells of one stratum; two patches are
+    neighbours when they share cell edges (they then belong to different
+    strata). "Join the largest neighbour" (GDAL's sieve) fails on a mosaic of
+    small patches: with no big neighbour it merges nothing, and once one patch
+    has grown past the minimum it swallows the whole mosaic, strata and all.
+
+    The rule (our choice): the smallest patch below the minimum (ties: the
+    lowest index) takes the stratum of a neighbour. Taking stratum s joins it
+    with all its neighbours of stratum s into one patch; the stratum chosen is
+    the one whose joined patch is the smallest that reaches the minimum, so
+    that as few cells as possible are tied together and the map's pattern is
+    kept; when no stratum gets there, the one whose joined patch is largest.
+    Ties: the longest boundary shared with the stratum, then the lowest patch
+    index. Sizes and neighbours are updated and the next smallest patch
+    follows, until every patch reaches the minimum or touches no other stratum.
+    The fixed order makes the result deterministic.
+
+    Parameters
+    ----------
+    sizes : array_like of int
+        Cells per patch (a patch of 0 cells, e.g. index 0 for "no stratum", is ignored).
+    strata : array_like of int
+        Stratum of each patch.
+    pairs : array_like of int, shape (m, 2)
+        Neighbouring patches (indices), each pair once.
+    shared : array_like of int, shape (m,)
+        Cell edges each pair shares.
+    min_cells : int
+
+    Returns
+    -------
+    PatchMerge
+    """
+    import heapq
+
+    size = [int(v) for v in np.asarray(sizes).ravel()]
+    stratum = [int(v) for v in np.asarray(strata).ravel()]
+    n = len(size)
+    parent = list(range(n))
+    neighbours = [dict() for _ in range(n)]
+    for (a, b), length in zip(np.asarray(pairs, dtype=np.int64).reshape(-1, 2).tolist(),
+                              np.asarray(shared).ravel().tolist()):
+        if a != b:
+            neighbours[a][b] = neighbours[a].get(b, 0) + int(length)
+            neighbours[b][a] = neighbours[b].get(a, 0) + int(length)
+
+    def find(i):
+        root = i
+        while parent[root] != root:
+            root = parent[root]
+        while parent[i] != root:
+            parent[i], i = root, parent[i]
+        return root
+
+    def join(target, other):
+        """``other`` (a root) into ``target``'s stratum: the root with more neighbours absorbs the other."""
+        keep, gone = (target, other) if len(neighbours[target]) >= len(neighbours[other]) else (other, target)
+        parent[gone] = keep
+        size[keep] += size[gone]
+        stratum[keep] = stratum[target]
+        for x, length in neighbours[gone].items():
+            del neighbours[x][gone]
+            if x == keep:
+                continue
+            neighbours[keep][x] = neighbours[keep].get(x, 0) + length
+            neighbours[x][keep] = neighbours[x].get(keep, 0) + length
+        neighbours[gone] = {}
+        return keep
+
+    heap = [(size[i], i) for i in range(n) if 0 < size[i] < min_cells]
+    heapq.heapify(heap)
+    left = []
+    while heap:
+        cells, p = heapq.heappop(heap)
+        if parent[p] != p or size[p] != cells:
+            continue  # merged away, or grown since it was queued
+        if not neighbours[p]:
+            left.append(p)
+            continue
+        options = {}  # stratum -> [joined size, shared boundary, lowest neighbour]
+        for x, length in neighbours[p].items():
+            entry = options.setdefault(stratum[x], [size[p], 0, x])
+            entry[0] += size[x]
+            entry[1] += length
+            entry[2] = min(entry[2], x)
+
+        def preference(item):
+            joined, boundary, lowest = item[1]
+            reaches = joined >= min_cells
+            return (reaches, -joined if reaches else joined, boundary, -lowest)
+
+        chosen = max(options.items(), key=preference)[0]
+        root = p
+        for x in [x for x in neighbours[p] if stratum[x] == chosen]:
+            root = join(x, root)
+        if size[root] < min_cells:
+            heapq.heappush(heap, (size[root], root))
+    final = np.array([stratum[find(i)] for i in range(n)], dtype=np.int64)
+    left = [p for p in left if parent[p] == p]
+    return PatchMerge(final, int(np.count_nonzero(final != np.asarray(strata).ravel())),
+                      np.asarray(left, dtype=np.int64), np.asarray([size[p] for p in left], dtype=np.int64))
+
+
+# ---------------------------------------------------------------------------
 # the whole job
 # ---------------------------------------------------------------------------
 @dataclass(frozen=True)

@@ -271,3 +271,38 @@ def test_some_sd_zero_gets_the_minimum_with_warning():
     assert result.n[0] == 2 and result.n.sum() == 30
     np.testing.assert_allclose(result.n_continuous[1:], [28 / 5, 4 * 28 / 5])  # W_h S_h = 0.25 : 1
     assert any("zero" in w and "7" in w for w in result.warnings)
+
+
+# ----------------------------------------------------------------------------- stratum ids
+def test_unique_stratum_ids_pass():
+    # truth by construction: one feature per stratum, every id filled in
+    assert al.check_stratum_ids([1, 2, "3"], [10, 11, 12], "strata", "stratum") is None
+
+
+@pytest.mark.parametrize("null", [None, float("nan")])
+def test_null_stratum_id_names_layer_field_and_features(null):
+    # truth by construction: features 11 and 14 have no id
+    with pytest.raises(InputError) as err:
+        al.check_stratum_ids([1, null, 2, 3, null], [10, 11, 12, 13, 14], "my strata", "zone")
+    assert err.value.ids == [11, 14]
+    text = err.value.message
+    assert "'zone'" in text and "'my strata'" in text and "11, 14" in text and "NULL" in text
+    assert "Give every stratum an id" in text
+
+
+def test_duplicate_stratum_id_names_value_features_and_dissolve():
+    # truth by construction: id 1 is carried by features 10 and 12
+    with pytest.raises(InputError) as err:
+        al.check_stratum_ids([1, 2, 1.0], [10, 11, 12], "strata", "stratum")
+    assert err.value.ids == [10, 12]
+    text = err.value.message
+    assert "Features 10, 12" in text and "stratum id 1 " in text and "'stratum'" in text and "'strata'" in text
+    assert "Dissolve" in text
+
+
+def test_several_duplicate_stratum_ids_are_all_counted():
+    # truth by construction: 'a' on features 1 and 3, 'b' on features 2 and 4
+    with pytest.raises(InputError) as err:
+        al.check_stratum_ids(["a", "b", "a", "b", "c"], [1, 2, 3, 4, 5], "strata", "name")
+    assert err.value.ids == [1, 3, 2, 4]
+    assert "'a' (features 1, 3)" in err.value.message and "1 other id(s) ('b')" in err.value.message

@@ -172,6 +172,9 @@ def test_performance_formulas():
     assert p["coverage"] == pytest.approx(0.75)  # the third interval misses
     assert p["mean_cv"] == pytest.approx(0.125)
     assert p["mean_n"] == pytest.approx(5.0)
+    assert p["error_m3"] == pytest.approx((8 - 8 + 1 - 1) / 4)  # errors 2, −2, 1, −1: mean((e − ē)³) = 0
+    q = dc.design_performance([10.0] * 3, [13.0, 10.0, 10.0], [0.0] * 3, [20.0] * 3, [0.1] * 3, [5] * 3)
+    assert q["error_m3"] == pytest.approx((8 - 1 - 1) / 3)  # errors 3, 0, 0 about their mean 1: 2³, −1, −1
 
 
 def _perf(design, rmse, coverage, se=1.0):
@@ -188,8 +191,87 @@ def test_unit_range_text():
     assert dc.parse_unit_range("40, 20;80") == (20, 40, 80)
     assert dc.parse_unit_range("20:60:20") == (20, 40, 60)
     assert dc.parse_unit_range("") == ()
+    assert dc.parse_unit_range("20:20:5") == (20,)  # start = stop: one value
     with pytest.raises(InputError):
         dc.parse_unit_range("twenty")
+
+
+def test_unit_range_starting_above_its_stop_is_an_error():
+    # truth by construction: 100:20:20 holds no number of units; the message names the part and the fix
+    with pytest.raises(InputError) as err:
+        dc.parse_unit_range("10, 100:20:20")
+    text = err.value.message
+    assert "'10, 100:20:20'" in text and "start 100, stop 20" in text and "20:100:20" in text
+
+
+def _performances(truth, estimate):
+    """DesignPerformance of each design (columns of ``estimate``) for one comparison."""
+    out = []
+    for j in range(estimate.shape[1]):
+        e = estimate[:, j]
+        stats = dc.design_performance(truth, e, e, e, np.full(e.size, 0.1), np.full(e.size, 10))
+        out.append(dc.DesignPerformance(j, dc.DESIGNS[j], 10, (), **stats))
+    return out
+
+
+def _performances_of_many(truth, estimate):
+    """DesignPerformance per comparison and design (numpy moments, as design_performance computes them)."""
+    err = estimate - truth[:, :, None]
+    mean_true = truth.mean(axis=1)
+    rel_bias = err.sum(axis=1) / truth.sum(axis=1)[:, None]
+    emp_se = err.std(axis=1, ddof=1)
+    m3 = ((err - err.mean(axis=1, keepdims=True)) ** 3).mean(axis=1)
+    replicates = truth.shape[1]
+    return [[dc.DesignPerformance(j, dc.DESIGNS[j], 10, (), replicates, 0, 10, mean_true[c], mean_true[c],
+                                  rel_bias[c, j], emp_se[c, j], emp_se[c, j], 0.0, 0.0, 0.1, 0.95, m3[c, j])
+             for j in range(err.shape[2])] for c in range(err.shape[0])]
+
+
+@pytest.mark.parametrize("animals", [0.3, 5.0, 50.0])
+def test_bias_warning_fires_at_most_at_its_level_on_unbiased_designs(animals):
+    # truth by construction: each replicate's estimate is A/a · (Poisson count of the units), unbiased for the
+    # Poisson total it is judged against; few animals per survey make the errors skewed. 3 designs, 20
+    # replicates, 4,000 comparisons: the warning may fire in at most its 1 % level plus three binomial SEs
+    rng = np.random.default_rng(8)
+    comparisons, replicates, designs = 4000, 20, 3
+    scale = 200.0  # A / a
+    truth = rng.poisson(animals * scale, (comparisons, replicates)).astype(float)
+    estimate = scale * rng.poisson(animals, (comparisons, replicates, designs)).astype(float)
+    fired = sum(bool(dc.bias_warnings(p, 10)) for p in _performances_of_many(truth, estimate))
+    level = dc.BIAS_TEST_LEVEL
+    assert fired / comparisons <= level + 3 * math.sqrt(level * (1 - level) / comparisons)
+    # the rule it replaces, |bias| > max(2 %, 2 SE), fired in about 1 − 0.94³ ≈ 17 % of these comparisons
+    # (Student's t, 19 df: P(|t| > 2) ≈ 0.06; scipy.stats.t), more where the errors are skewed
+
+
+def test_bias_warning_fires_for_a_clear_bias_even_with_few_replicates():
+    # truth by construction: estimates 30 % too high with a 5 % spread; 20 replicates
+    rng = np.random.default_rng(3)
+    truth = rng.poisson(1000, 20).astype(float)
+    estimate = (truth * 1.3 + rng.normal(0, 50, 20))[:, None]
+    performance = _performances(truth, estimate)
+    assert performance[0].rel_bias == pytest.approx(0.3, abs=0.02)
+    warnings = dc.bias_warnings(performance, 10)
+    assert len(warnings) == 1 and "1% level across 1 design(s)" in warnings[0] and "edge of the frame" in warnings[0]
+
+
+def test_unit_too_big_to_fit_names_the_host_feature_ids():
+    # truth by construction: a 2,000 m square kept inside needs a point 1,414 m from every edge; stratum 'b'
+    # (host feature 9) is 1,000 m wide and the frame (host features 4 and 5) 2,000 m wide
+    strata = [box(0, 0, 1000, 2000), box(1000, 0, 2000, 2000)]
+    grid, frame = _grid(nx=20, ny=20, strata=strata, keys=["a", "b"])
+    region = dc.counting_region(1, 2000.0)
+    rng = np.random.default_rng(1)
+    with pytest.raises(InputError) as err:
+        dc.prepare_comparison(grid, frame, region, 1, 2000.0, rng, strata, ["a", "b"], inside=True,
+                              strata_ids=[8, 9])
+    assert "(features 8)" in err.value.message and err.value.ids == [8]
+    grid, frame = _grid(nx=20, ny=20)
+    halves = [box(0, 0, 2000, 1000), box(0, 1000, 2000, 2000)]
+    with pytest.raises(InputError) as err:
+        dc.prepare_comparison(grid, frame, region, 1, 2000.0, rng, inside=True, frame_parts=halves,
+                              frame_ids=[4, 5])
+    assert "The frame is too small" in err.value.message and "(features 4, 5)" in err.value.message
 
 
 def test_stratified_designs_need_strata():
@@ -227,6 +309,25 @@ def test_t_interval_coverage_on_a_smooth_surface(smooth_comparison):
         assert 0.92 <= p.coverage <= 0.98, (p.name, p.coverage)
         # the estimated CV agrees with the empirical one (truth by construction)
         assert p.mean_cv == pytest.approx(p.emp_se / p.mean_true, rel=0.15), p.name
+
+
+def test_bias_warning_stays_quiet_on_unbiased_designs_in_short_runs(smooth_comparison):
+    # truth by construction: on a linear gradient the edge weighting of each band is symmetric, so every design
+    # is unbiased (test above). Cut the 2,000 replicates into 100 comparisons of 20: the warning (1 % level over
+    # the 5 designs) may fire in at most binom.ppf(0.999, 100, 0.01) = 5 of them (scipy.stats.binom); the rule it
+    # replaces fired in about a quarter
+    res = smooth_comparison.results
+    fired = 0
+    for k in range(100):
+        rows = slice(20 * k, 20 * k + 20)
+        performance = []
+        for j in range(res.estimate.shape[1]):
+            stats = dc.design_performance(res.truth[rows], res.estimate[rows, j], res.lower[rows, j],
+                                          res.upper[rows, j], res.cv[rows, j], res.n[rows, j])
+            performance.append(dc.DesignPerformance(j, dc.DESIGNS[j], 30, (), **stats))
+        fired += bool(dc.bias_warnings(performance, 30))
+    assert fired <= 5
+    assert not any("beyond the simulation's noise" in w for w in smooth_comparison.warnings)
 
 
 def test_realised_n(smooth_comparison):
@@ -339,4 +440,4 @@ def test_units_kept_inside_miss_an_empty_edge_band_and_the_bias_is_flagged():
     lost = (300 - (r - 200)) ** 2  # ∫ w over the empty band at both ends of an axis: 2 · (300 − (r − 200))² / 2
     share = 1 - lost / (400 * (6000 - 2 * r))
     assert p.rel_bias == pytest.approx(share ** 2 * 36 / 5.4 ** 2 - 1, abs=0.03)
-    assert any("beyond the simulation's noise" in w for w in result.warnings)
+    assert any("beyond the simulation's noise" in w and "edge of the frame" in w for w in result.warnings)

@@ -263,3 +263,91 @@ def test_worker_threads_give_the_same_rasters(tmp_path, monkeypatch):
     for (a, ma), (b, mb) in zip(outs[:2], outs[2:]):
         np.testing.assert_array_equal(a, b)
         np.testing.assert_array_equal(ma, mb)
+
+
+def _mosaic(tmp_path, size=4):
+    """A covariate of size x size-cell squares taking 3 values in diagonal bands (30 m cells: 16 cells = 1.44 ha)."""
+    rows, cols = np.mgrid[0:H, 0:W]
+    jitter = np.random.default_rng(2).random((H, W)) * 0.1  # distinct values: the tercile cuts fall between bands
+    values = ((((cols // size) + (rows // size)) % 3) + jitter).astype(np.float32)
+    return _write(tmp_path / "mosaic.tif", values)
+
+
+def _parts(polygons):
+    return [p for blob in polygons for p in getattr(wkb.loads(blob), "geoms", [wkb.loads(blob)])]
+
+
+def test_min_area_on_a_mosaic_where_every_patch_is_small(tmp_path):
+    # truth by construction: the tercile strata follow the covariate's squares, so every patch is 1.44 ha
+    # (16 cells; less where the frame cuts one), below MIN_AREA 2 ha (23 cells), and so is every neighbour:
+    # "join the largest neighbour" has nothing to join. Oracles: shapely areas of the polygons and
+    # scipy.ndimage.label (4-connected) of the stratum raster
+    path = _mosaic(tmp_path)
+    frame = box(GT[0] + 300, GT[3] - 6000, GT[0] + 6000, GT[3] - 300)
+    out = str(tmp_path / "st.tif")
+    r = rio.stratify_rasters([rio.Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3, out,
+                             min_area_ha=2.0)
+    assert r.sieve_cells == 23 and r.patches_merged > 0 and r.small_patches == 0
+    areas = [p.area for p in _parts(r.polygons)]  # shapely
+    assert min(areas) >= 2.0e4
+    assert sum(areas) == pytest.approx(frame.area)
+    ids = _read(out)
+    for h in range(1, r.result.n_strata + 1):
+        lab, _ = ndimage.label(ids == h)
+        assert np.bincount(lab.ravel())[1:].min() >= 23
+    assert r.result.n_strata >= 2
+    assert any("fell from" in w and "MIN_AREA" in w for w in r.warnings)  # R² of the mosaic's strata drops
+    again = str(tmp_path / "again.tif")
+    rio.stratify_rasters([rio.Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3, again,
+                         min_area_ha=2.0, block_cells=5000)
+    np.testing.assert_array_equal(_read(again), ids)  # deterministic, whatever the blocks
+
+
+def test_small_island_of_the_frame_stays_below_min_area_with_a_warning(tmp_path):
+    # truth by construction: a 0.81 ha island (3 x 3 cells, cell-aligned) far from the main frame touches no
+    # other stratum, so it stays below MIN_AREA 2 ha; its area from shapely
+    path = _write(tmp_path / "elev.tif", _elevation(nodata_box=False))
+    main = box(GT[0] + 300, GT[3] - 3000, GT[0] + 3000, GT[3] - 300)
+    island = box(GT[0] + 6000, GT[3] - 5400, GT[0] + 6090, GT[3] - 5310)
+    r = rio.stratify_rasters([rio.Covariate(path, "e")], [main.wkb, island.wkb], UTM33, s.QUANTILE, 3,
+                             str(tmp_path / "st.tif"), min_area_ha=2.0)
+    assert r.small_patches == 1 and r.small_patches_ha == pytest.approx(island.area / 1e4)
+    text = next(w for w in r.warnings if "stay below MIN_AREA" in w)
+    assert text.startswith("1 patch(es) covering 0.81 ha") and "lower MIN_AREA" in text
+    assert min(p.area for p in _parts(r.polygons)) == pytest.approx(island.area)  # shapely
+
+
+def test_min_area_leaving_one_stratum_is_an_error(tmp_path):
+    # truth by construction: MIN_AREA above the frame's area leaves no room for two strata
+    path = _mosaic(tmp_path)
+    frame = box(GT[0] + 300, GT[3] - 1500, GT[0] + 1500, GT[3] - 300)  # 144 ha
+    with pytest.raises(InputError, match="single stratum"):
+        rio.stratify_rasters([rio.Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3,
+                             str(tmp_path / "st.tif"), min_area_ha=200.0)
+
+
+def test_min_area_with_nodata_and_small_blocks_matches_scipy_patches(tmp_path):
+    # oracle: scipy.ndimage.label (4-connected) of the stratum raster written. Every patch reaches MIN_AREA
+    # (2 ha, 23 cells) but those touching no other stratum, which the result counts; the same raster comes
+    # out whatever the block size (the patches are numbered by their first cell, not by block)
+    rng = np.random.default_rng(11)
+    noisy = ndimage.gaussian_filter(rng.normal(size=(H, W)), 2.0).astype(np.float32)
+    noisy[100:112, 90:130] = -9999
+    path = _write(tmp_path / "n.tif", noisy, nodata=-9999)
+    out = str(tmp_path / "a.tif")
+    r = rio.stratify_rasters([rio.Covariate(path, "noise")], [FRAME.wkb], UTM33, s.QUANTILE, 4, out,
+                             min_area_ha=2.0)
+    ids = _read(out)
+    small, small_cells = 0, 0
+    for h in range(1, r.result.n_strata + 1):
+        lab, n = ndimage.label(ids == h)
+        sizes = np.bincount(lab.ravel())[1:]
+        for j in np.flatnonzero(sizes < 23):
+            ring = ndimage.binary_dilation(lab == j + 1) & ~(lab == j + 1)  # 4-neighbours of the patch
+            assert not np.any((ids[ring] > 0) & (ids[ring] != h))  # it touches no other stratum
+            small, small_cells = small + 1, small_cells + sizes[j]
+    assert (r.small_patches, r.small_patches_ha) == (small, pytest.approx(small_cells * 0.09))
+    b = rio.stratify_rasters([rio.Covariate(path, "noise")], [FRAME.wkb], UTM33, s.QUANTILE, 4,
+                             str(tmp_path / "b.tif"), min_area_ha=2.0, block_cells=3000)
+    np.testing.assert_array_equal(_read(str(tmp_path / "b.tif")), ids)
+    assert b.patches_merged == r.patches_merged

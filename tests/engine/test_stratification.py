@@ -279,3 +279,91 @@ def test_selection_reads_only_blocks_that_can_hold_the_quantiles():
     q, _ = s.exact_quantiles(src, [0.25, 0.5, 0.75], histogram=hist)
     np.testing.assert_allclose(q, np.quantile(rows.ravel(), [0.25, 0.5, 0.75]), rtol=0, atol=1e-12)  # numpy
     assert Counting.read - before <= 6  # of 40 blocks
+
+
+# --- patches below the minimum area ---------------------------------------------------------------
+
+def _patch_graph(ids):
+    """Patches of a stratum map (scipy.ndimage.label, 4-connected): labels, sizes, strata, neighbour pairs."""
+    from scipy import ndimage
+
+    labels = np.zeros(ids.shape, np.int64)
+    strata, n = [0], 0
+    for h in np.unique(ids[ids > 0]):
+        lab, k = ndimage.label(ids == h)
+        labels[lab > 0] = lab[lab > 0] + n
+        strata += [int(h)] * k
+        n += k
+    sizes = np.bincount(labels.ravel(), minlength=n + 1)
+    sizes[0] = 0
+    edges = []
+    for a, b in ((labels[:, :-1], labels[:, 1:]), (labels[:-1], labels[1:])):
+        e = (a != b) & (a > 0) & (b > 0)
+        edges.append(np.stack([np.minimum(a[e], b[e]), np.maximum(a[e], b[e])], 1))
+    pairs, shared = np.unique(np.concatenate(edges), axis=0, return_counts=True)
+    return labels, sizes, np.asarray(strata), pairs, shared
+
+
+def test_mosaic_of_small_patches_is_merged_to_the_minimum():
+    # truth by construction: 4 x 4-cell squares of three strata in diagonal bands, every patch (16 cells)
+    # below the minimum of 20 cells and every neighbour too, where GDAL's sieve merges nothing.
+    # Oracle: scipy.ndimage.label of the merged map
+    from scipy import ndimage
+
+    yy, xx = np.mgrid[0:48, 0:48]
+    ids = ((xx // 4) + (yy // 4)) % 3 + 1
+    labels, sizes, strata, pairs, shared = _patch_graph(ids)
+    assert sizes[1:].max() == 16
+    merge = s.merge_small_patches(sizes, strata, pairs, shared, 20)
+    merged = merge.strata[labels]
+    for h in np.unique(merged):
+        lab, _ = ndimage.label(merged == h)
+        assert np.bincount(lab.ravel())[1:].min() >= 20
+    assert merge.left.size == 0 and merge.merged == np.count_nonzero(merge.strata != strata)
+    assert np.unique(merged).size >= 2  # the mosaic does not collapse into one stratum
+    again = s.merge_small_patches(sizes, strata, pairs, shared, 20)
+    np.testing.assert_array_equal(again.strata, merge.strata)  # deterministic
+
+
+def test_small_patch_takes_the_stratum_giving_the_smallest_patch_that_reaches_the_minimum():
+    # truth by construction, one row: stratum 1 (10 cells) | stratum 3 (3 cells) | stratum 2 (30 cells).
+    # With a minimum of 12, joining stratum 1 gives 13 cells, joining stratum 2 gives 33: stratum 1
+    ids = np.array([[1] * 10 + [3] * 3 + [2] * 30])
+    labels, sizes, strata, pairs, shared = _patch_graph(ids)
+    merge = s.merge_small_patches(sizes, strata, pairs, shared, 12)
+    np.testing.assert_array_equal(merge.strata[labels][0], [1] * 13 + [2] * 30)
+    assert merge.merged == 1 and merge.left.size == 0
+
+
+def test_small_patch_takes_the_largest_join_when_none_reaches_the_minimum():
+    # truth by construction, one row: stratum 1 (4 cells) | stratum 3 (2) | stratum 2 (5), minimum 20.
+    # The 2-cell patch joins stratum 2 (7 cells, more than 6 with stratum 1); then the 4-cell patch, the
+    # smallest left, joins it: 11 cells of stratum 2, still below 20, with no other neighbour.
+    # (Had it joined stratum 1, the 5-cell patch would have followed into stratum 1.)
+    ids = np.array([[1] * 4 + [3] * 2 + [2] * 5])
+    labels, sizes, strata, pairs, shared = _patch_graph(ids)
+    merge = s.merge_small_patches(sizes, strata, pairs, shared, 20)
+    assert (merge.strata[labels] == 2).all()
+    assert merge.left_cells.tolist() == [11]
+
+
+def test_joining_a_stratum_links_its_patches():
+    # truth by construction: a 1-cell patch of stratum 2 between two 5-cell patches of stratum 1; taking
+    # stratum 1 joins all three into one 11-cell patch, which reaches a minimum of 11 (but not 12)
+    ids = np.array([[1] * 5 + [2] + [1] * 5])
+    labels, sizes, strata, pairs, shared = _patch_graph(ids)
+    merge = s.merge_small_patches(sizes, strata, pairs, shared, 11)
+    assert (merge.strata[labels] == 1).all() and merge.left.size == 0
+    merge = s.merge_small_patches(sizes, strata, pairs, shared, 12)
+    assert (merge.strata[labels] == 1).all() and merge.left_cells.tolist() == [11]
+
+
+def test_isolated_small_patch_stays_and_is_reported():
+    # truth by construction: a 2 x 2 island of stratum 2 ringed by cells without a stratum (0)
+    ids = np.zeros((8, 8), int)
+    ids[:, :3] = 1
+    ids[4:6, 5:7] = 2
+    labels, sizes, strata, pairs, shared = _patch_graph(ids)
+    merge = s.merge_small_patches(sizes, strata, pairs, shared, 10)
+    np.testing.assert_array_equal(merge.strata, strata)
+    assert merge.merged == 0 and merge.left_cells.tolist() == [4]

@@ -139,3 +139,35 @@ def test_polygon_area_and_cov_sd_proxy_warning(plotwise_registered):
     # proportional to the polygon areas 400, 250, 90 ha (Cochran 1977, ch. 5): 40, 25, 9
     assert [f["n_alloc"] for f in result["OUTPUT"].getFeatures()] == [40, 25, 9]
     assert any("cov_sd" in w and "proxy" in w for w in feedback.warnings)
+
+
+def test_duplicate_stratum_id_is_an_error_naming_features_and_remedy(plotwise_registered):
+    import processing
+
+    # truth by construction: stratum 1 is split over features 1 and 2 (memory-layer ids start at 1)
+    rows = [ROWS[0], (1, 250.0, 30.0, 6.0, 5.0, 1.0), ROWS[2]]
+    layer = _strata_layer(rows)
+    with pytest.raises(QgsProcessingException) as err:
+        processing.run("plotwise:allocate", {
+            "STRATA": layer, "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha", "SD_FIELD": "sd_c",
+            "METHOD": 2, "TOTAL": 30, "UNIT_AREA": 10000.0, "OUTPUT": "memory:",
+        })
+    text = str(err.value)
+    assert "Features 1, 2" in text and "stratum id 1 " in text and "'stratum'" in text and "'strata'" in text
+    assert "Dissolve" in text
+    del err
+
+
+def test_null_stratum_id_is_an_error_naming_the_feature(plotwise_registered):
+    import processing
+
+    # truth by construction: feature 2 has no stratum id
+    rows = [ROWS[0], (None, 250.0, 30.0, 6.0, 5.0, 1.0), ROWS[2]]
+    with pytest.raises(QgsProcessingException) as err:
+        processing.run("plotwise:allocate", {
+            "STRATA": _strata_layer(rows), "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha", "METHOD": 1,
+            "TOTAL": 30, "UNIT_AREA": 10000.0, "OUTPUT": "memory:",
+        })
+    text = str(err.value)
+    assert "NULL" in text and "feature(s) 2." in text and "'stratum'" in text and "'strata'" in text
+    del err

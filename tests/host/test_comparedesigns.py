@@ -214,3 +214,29 @@ def test_surface_in_another_crs_is_warped(registered, run_alg, tmp_path):
     expected = 3.0 * 2.0 * (math.exp(3.5) - math.exp(0.5))  # 3 km × ∫_0.5^3.5 2 e^x dx
     assert row["true_mean"] == pytest.approx(expected, rel=0.06)
     assert any("warped" in w for w in warnings)
+
+
+def test_unit_too_big_names_the_strata_feature_id(registered, run_alg, tmp_path):
+    # truth by construction: a 5,000 m square kept inside fits in neither stratum; memory-layer feature ids
+    # start at 1, so stratum 'high' (checked first, in sorted order) is feature 2
+    with pytest.raises(QgsProcessingException) as err:
+        run_alg("plotwise:comparedesigns", {
+            "SURFACE": _surface(tmp_path / "density.tif"), "FRAME": _polygons([(FRAME, [])]),
+            "STRATA": _polygons(STRATA, [("stratum", "string")]), "STRATUM_FIELD": "stratum", "DESIGNS": [0],
+            "N_UNITS": 10, "SHAPE": 1, "SIZE": 5000.0, "INSIDE": True, "REPLICATES": 10, "SEED": 3,
+            "OUTPUT_TABLE": "memory:",
+        })
+    text = str(err.value)
+    assert "Stratum high is too small" in text and "(features 2)" in text
+    del err
+
+
+def test_unit_range_starting_above_its_stop_is_an_error(registered, run_alg, tmp_path):
+    with pytest.raises(QgsProcessingException) as err:
+        run_alg("plotwise:comparedesigns", {
+            "SURFACE": _surface(tmp_path / "density.tif"), "FRAME": _polygons([(FRAME, [])]), "DESIGNS": [0],
+            "N_UNITS": 20, "SHAPE": 1, "SIZE": 100.0, "REPLICATES": 10, "N_RANGE": "100:20:20", "SEED": 3,
+            "OUTPUT_TABLE": "memory:",
+        })
+    assert "100:20:20" in str(err.value) and "20:100:20" in str(err.value)
+    del err

@@ -175,3 +175,60 @@ def test_geographic_frame_is_projected_and_errors_name_the_covariate(alg_id, run
     with pytest.raises(QgsProcessingException, match="constant"):
         run_alg(alg_id, {"FRAME": frame, "COVARIATES": [flat], "METHOD": 0, "STRATA": 3,
                          "OUTPUT_RASTER": str(tmp_path / "f.tif"), "OUTPUT": str(tmp_path / "f.gpkg")})
+
+
+def _mosaic(tmp_path):
+    """4 x 4-cell squares (25 m cells: 1 ha) taking 3 values in diagonal bands, with a little jitter."""
+    rows, cols = 120, 150
+    y, x = np.mgrid[0:rows, 0:cols]
+    values = ((((x // 4) + (y // 4)) % 3) + np.random.default_rng(4).random((rows, cols)) * 0.1).astype(np.float32)
+    path = str(tmp_path / "mosaic.tif")
+    ds = gdal.GetDriverByName("GTiff").Create(path, cols, rows, 1, gdal.GDT_Float32)
+    ds.SetGeoTransform((500000, 25, 0, 4000000, 0, -25))
+    ds.SetProjection(CRS.from_epsg(32633).to_wkt())
+    ds.GetRasterBand(1).WriteArray(values)
+    ds = None
+    return path
+
+
+def test_min_area_is_met_on_a_mosaic_of_small_patches(alg_id, run_alg, tmp_path):
+    # truth by construction: every patch of the terciles is 1 ha or less (4 x 4 cells of 25 m) and borders only
+    # patches as small, where GDAL's sieve merges nothing; MIN_AREA 1.5 ha. Oracle: shapely areas of the parts
+    frame = _frame_layer("POLYGON((500100 3999900, 503600 3999900, 503600 3997100, 500100 3997100, 500100 3999900))")
+    fb = Recorder()
+    out = run_alg(alg_id, {
+        "FRAME": frame, "COVARIATES": [_mosaic(tmp_path)], "METHOD": 0, "STRATA": 3, "MIN_AREA": 1.5,
+        "OUTPUT_RASTER": str(tmp_path / "m.tif"), "OUTPUT": str(tmp_path / "m.gpkg"), "REPORT": str(tmp_path / "m.html"),
+    }, feedback=fb)
+    layer, feats = _features(out["OUTPUT"])
+    assert len(feats) == 3
+    parts = [p for f in feats for p in getattr(shapely_wkb.loads(bytes(f.geometry().asWkb())), "geoms", [])]
+    assert parts and min(p.area for p in parts) >= 1.5e4  # shapely
+    assert sum(p.area for p in parts) == pytest.approx(3500 * 2800)
+    html = open(out["REPORT"], encoding="utf-8").read()
+    assert "Every patch of the strata now covers at least 1.5 ha." in html
+    assert "specks of fewer than 8 cells" in html and "smallest first" in html
+    assert any("fell from" in w for w in fb.warnings)
+    del layer, feats
+
+
+def test_min_area_warns_about_an_island_it_cannot_merge(alg_id, run_alg, tmp_path):
+    # truth by construction: a 0.5 ha island of the frame (8 cells of 25 m) touches no other stratum; it stays
+    # below MIN_AREA 2 ha, with a warning naming its number and area and a sentence in the report
+    path, _ = _synthetic(tmp_path)
+    layer = QgsVectorLayer("Polygon?crs=EPSG:32633", "frame", "memory")
+    features = []
+    for wkt in ("POLYGON((500000 4000000, 502000 4000000, 502000 3998000, 500000 3998000, 500000 4000000))",
+                "POLYGON((503000 3998000, 503100 3998000, 503100 3997950, 503000 3997950, 503000 3998000))"):
+        feat = QgsFeature()
+        feat.setGeometry(QgsGeometry.fromWkt(wkt))
+        features.append(feat)
+    layer.dataProvider().addFeatures(features)
+    fb = Recorder()
+    out = run_alg(alg_id, {
+        "FRAME": layer, "COVARIATES": [path], "METHOD": 0, "STRATA": 3, "MIN_AREA": 2.0,
+        "OUTPUT_RASTER": str(tmp_path / "i.tif"), "OUTPUT": str(tmp_path / "i.gpkg"), "REPORT": str(tmp_path / "i.html"),
+    }, feedback=fb)
+    assert any(w.startswith("1 patch(es) covering 0.50 ha stay below MIN_AREA (2 ha)") for w in fb.warnings), fb.warnings
+    html = open(out["REPORT"], encoding="utf-8").read()
+    assert "touch no other stratum" in html and "Every patch of the strata now covers" not in html
