@@ -38,13 +38,6 @@ def to_shapely(geometry):
     return shapely_wkb.loads(bytes(geometry.asWkb()))
 
 
-def to_qgs(geometry):
-    """A ``QgsGeometry`` from a shapely geometry."""
-    result = QgsGeometry()
-    result.fromWkb(shapely_wkb.dumps(geometry))
-    return result
-
-
 def plain_value(value):
     """An attribute value as plain Python: NULL becomes None."""
     if value is None or value == NULL:
@@ -193,20 +186,13 @@ def make_fields(spec):
 
 
 def write_features(sink, fields, geometries, rows, feedback=None, progress_range=(0.0, 100.0)):
-    """Add one feature per (geometry, row) to ``sink``. ``rows`` are sequences aligned with ``fields``."""
-    total = max(len(rows), 1)
-    start, end = progress_range
-    for i, (geometry, row) in enumerate(zip(geometries, rows)):
-        if feedback is not None and feedback.isCanceled():
-            return False
-        feature = QgsFeature(fields)
-        if geometry is not None:
-            feature.setGeometry(to_qgs(geometry))
-        feature.setAttributes([_sink_value(v) for v in row])
-        sink.addFeature(feature, compat.FAST_INSERT)
-        if feedback is not None and i % 1000 == 0:
-            feedback.setProgress(start + (end - start) * i / total)
-    return True
+    """Add one feature per (shapely geometry or None, row) to ``sink`` through :func:`write_rows`.
+
+    ``rows`` are sequences aligned with ``fields`` (the sink's fields); values are made sink-ready
+    with :func:`sink_value`.
+    """
+    wkb = [None if g is None else shapely_wkb.dumps(g) for g in geometries]
+    return write_rows(sink, wkb, [[_sink_value(v) for v in row] for row in rows], feedback, progress_range)
 
 
 #: WKB headers: byte order (1 = little endian), geometry type, then counts (ISO/OGC simple features)
@@ -243,7 +229,7 @@ def write_rows(sink, geometries_wkb, rows, feedback=None, progress_range=(0.0, 1
     """Add one feature per (WKB geometry, row) to ``sink``, in chunks; False when cancelled.
 
     ``rows`` hold plain Python values aligned with the sink's fields (NULL already in place):
-    see :func:`sink_value`. The fast path for many features with simple geometries.
+    see :func:`sink_value`. A geometry of None writes a feature without geometry.
     """
     total = max(len(rows), 1)
     start, end = progress_range
@@ -252,10 +238,11 @@ def write_rows(sink, geometries_wkb, rows, feedback=None, progress_range=(0.0, 1
             return False
         features = []
         for wkb, row in zip(geometries_wkb[first:first + chunk], rows[first:first + chunk]):
-            geometry = QgsGeometry()
-            geometry.fromWkb(wkb)
             feature = QgsFeature()
-            feature.setGeometry(geometry)
+            if wkb is not None:
+                geometry = QgsGeometry()
+                geometry.fromWkb(wkb)
+                feature.setGeometry(geometry)
             feature.setAttributes(row)
             features.append(feature)
         sink.addFeatures(features, compat.FAST_INSERT)

@@ -568,11 +568,6 @@ class PatchCheck:
     left_cells: int
 
 
-def _row_blocks(width, height, block_cells):
-    rows = max(1, block_cells // max(1, width))
-    return [(y, min(rows, height - y)) for y in range(0, height, rows)]
-
-
 def _block_patches(ids):
     """4-connected patches of one stratum block (scipy.ndimage.label per stratum): labels 1..k (0: none), strata."""
     from scipy import ndimage
@@ -632,7 +627,7 @@ def merge_small_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None)
     band = ds.GetRasterBand(1)
     try:
         width, height = band.XSize, band.YSize
-        blocks = _row_blocks(width, height, block_cells)
+        blocks = [(y, rows) for _, y, _, rows in _block_windows(width, height, (width, 1), (0, 0), block_cells)]
         bases, sizes, strata, first = [], [], [], []
         seam_a, seam_b = [], []
         codes, counts = np.zeros(0, np.int64), np.zeros(0, np.int64)
