@@ -1,12 +1,13 @@
 """Allocation of effort across strata, checked against outside references.
 
 References: Neyman (1934); Cochran, W. G. (1977) Sampling Techniques, 3rd ed.,
-ch. 5; Lohr, S. L. (1999) Sampling: Design and Analysis; scipy.optimize (SLSQP)
-as a numerical oracle; simulated populations with known S_h.
+ch. 5; Lohr, S. L. (1999) Sampling: Design and Analysis; an exhaustive search over
+the Lagrange conditions with capped strata as the bounded reference; simulated populations with known S_h.
 """
+import itertools
+
 import numpy as np
 import pytest
-from scipy.optimize import minimize
 
 from plotwise.processing.engine import allocation as al
 from plotwise.processing.engine.errors import InputError
@@ -25,78 +26,87 @@ def _stratified_variance(n, areas=AREAS, sds=SDS, unit=UNIT):
     return np.sum(w**2 * sds**2 * (1 - n / big_n) / n)
 
 
-def _slsqp(constraint_costs, amount, lower=None, upper=None, sds=SDS):
-    """Minimise the stratified variance under sum c_h n_h = amount (scipy SLSQP as oracle)."""
+def _active_set_minimiser(constraint_costs, amount, lower=None, upper=None, sds=SDS):
+    """Minimise the stratified variance under sum c_h n_h = amount and lower <= n <= upper.
+
+    Exhaustive reference: the objective sum k_h (1 - n_h/N_h) / n_h is convex, so its
+    minimiser is the one feasible point of the Lagrange conditions. Every stratum is
+    either on its lower bound, on its upper bound, or free; the free ones take the
+    closed form n_h = lambda sqrt(k_h / c_h) (Cochran 1977, §5.5) with lambda set by the
+    budget. All 3^H assignments are tried and the feasible one with the least variance
+    is returned; the test fails if none is feasible (the reference cannot fail silently).
+    """
     w = AREAS / AREAS.sum()
-    big_n = AREAS / UNIT
     k = w**2 * sds**2
-    scale = amount / np.sum(constraint_costs)
+    c = np.asarray(constraint_costs, dtype=float)
+    lo = np.zeros(AREAS.size) if lower is None else np.asarray(lower, dtype=float)
+    hi = np.full(AREAS.size, np.inf) if upper is None else np.asarray(upper, dtype=float)
+    best, best_value = None, np.inf
+    for states in itertools.product((0, 1, 2), repeat=AREAS.size):  # 0 lower, 1 upper, 2 free
+        states = np.array(states)
+        if np.any((states == 1) & ~np.isfinite(hi)) or np.any((states == 0) & (lo <= 0)):
+            continue
+        free = states == 2
+        if not free.any():
+            continue
+        n = np.where(states == 0, lo, hi).astype(float)
+        rest = amount - np.sum(c[~free] * n[~free])
+        shape = np.sqrt(k[free] / c[free])
+        lam = rest / np.sum(c[free] * shape)
+        if lam <= 0:
+            continue
+        n[free] = lam * shape
+        if np.any(n < lo - 1e-9) or np.any(n > hi + 1e-9):
+            continue
+        value = np.sum(k / n)
+        if value < best_value:
+            best, best_value = n, value
+    assert best is not None, "no assignment of bounds satisfies the Lagrange conditions"
+    np.testing.assert_allclose(c @ best, amount, rtol=1e-12)
+    return best
 
-    def objective(z):  # z = n / scale keeps the problem well conditioned
-        n = z * scale
-        return np.sum(k * (1 - n / big_n) / n) * scale
 
-    def gradient(z):
-        n = z * scale
-        return -k / n**2 * scale**2
-
-    lo = np.full(AREAS.size, 1e-6) if lower is None else lower / scale
-    hi = [None] * AREAS.size if upper is None else upper / scale
-    result = minimize(
-        objective,
-        np.ones(AREAS.size),
-        jac=gradient,
-        method="SLSQP",
-        bounds=list(zip(lo, hi)),
-        constraints=[{"type": "eq", "fun": lambda z: constraint_costs @ (z * scale) - amount,
-                      "jac": lambda z: constraint_costs * scale}],
-        options={"ftol": 1e-15, "maxiter": 500},
-    )
-    assert result.success, result.message
-    return result.x * scale
-
-
-def test_neyman_equals_slsqp_minimiser():
-    # scipy.optimize.minimize (SLSQP) of sum W^2 S^2 (1-f)/n under sum n = 80
-    expected = _slsqp(np.ones(4), 80.0)
+def test_neyman_equals_lagrange_minimiser():
+    # the Lagrange minimiser of sum W^2 S^2 (1-f)/n under sum n = 80 (Cochran 1977, §5.5)
+    expected = _active_set_minimiser(np.ones(4), 80.0)
     got = al.neyman_allocation(80, AREAS, SDS)
     np.testing.assert_allclose(got, expected, rtol=1e-6)
 
 
-def test_cost_optimal_equals_slsqp_minimiser_under_budget():
-    # scipy SLSQP minimiser under the budget C - c0 = sum c_h n_h (Cochran 1977, ch. 5)
+def test_cost_optimal_equals_lagrange_minimiser_under_budget():
+    # the Lagrange minimiser under the budget C - c0 = sum c_h n_h (Cochran 1977, ch. 5)
     budget, fixed = 150.0, 30.0
-    expected = _slsqp(COSTS, budget - fixed)
+    expected = _active_set_minimiser(COSTS, budget - fixed)
     total = al.cost_optimal_total(budget, AREAS, SDS, COSTS, fixed)
     got = al.cost_optimal_allocation(total, AREAS, SDS, COSTS)
     np.testing.assert_allclose(got, expected, rtol=1e-6)
     np.testing.assert_allclose(COSTS @ got + fixed, budget, rtol=1e-12)
 
 
-def test_bounded_neyman_equals_slsqp_with_bounds():
-    # SLSQP with box constraints 2 <= n_h <= N_h: a small stratum hits its cap and
+def test_bounded_neyman_equals_lagrange_with_bounds():
+    # the minimiser with box constraints 2 <= n_h <= N_h: a small stratum hits its cap and
     # low-SD strata sit on the minimum; the excess is shared among the rest
     areas = AREAS
     upper = np.array([30.0, 400.0, 12.0, 300.0])
     lower = np.full(4, 2.0)
     q = al.allocation_scores("neyman", areas, SDS)
     got = al.bounded_allocation(q, 60.0, lower, upper)
-    expected = _slsqp(np.ones(4), 60.0, lower, upper)
+    expected = _active_set_minimiser(np.ones(4), 60.0, lower, upper)
     np.testing.assert_allclose(got, expected, rtol=1e-6)
     assert got[2] == pytest.approx(12.0)  # the capped stratum
     # a stratum with a small SD sits on the minimum of 2
     sds = np.array([3.0, 0.05, 6.5, 2.0])
     got = al.bounded_allocation(al.allocation_scores("neyman", areas, sds), 30.0, lower, upper)
-    np.testing.assert_allclose(got, _slsqp(np.ones(4), 30.0, lower, upper, sds), rtol=1e-6)
+    np.testing.assert_allclose(got, _active_set_minimiser(np.ones(4), 30.0, lower, upper, sds), rtol=1e-6)
     assert got[1] == pytest.approx(2.0)
 
 
-def test_bounded_cost_equals_slsqp_with_bounds():
+def test_bounded_cost_equals_lagrange_with_bounds():
     upper = np.array([25.0, 400.0, 10.0, 300.0])
     lower = np.full(4, 2.0)
     q = al.allocation_scores("optimal_cost", AREAS, SDS, COSTS)
     got = al.bounded_allocation(q, 90.0, lower, upper, COSTS)
-    expected = _slsqp(COSTS, 90.0, lower, upper)
+    expected = _active_set_minimiser(COSTS, 90.0, lower, upper)
     np.testing.assert_allclose(got, expected, rtol=1e-6)
 
 
