@@ -7,19 +7,19 @@ VENV := .venv
 VENV2 := .venv-shapely2
 PY := $(VENV)/bin/python
 PY2 := $(VENV2)/bin/python
-PYTEST_QGIS := pytest-qgis==5.0.2
+PIP_INSTALL = $(1)/bin/pip install -q --disable-pip-version-check -c constraints.txt
 SUDO := $(shell [ "$$(id -u)" = "0" ] || echo sudo)
 VERSION := $(shell sed -n 's/^version=//p' metadata.txt)
 export QT_QPA_PLATFORM := offscreen
 export PYTHONDONTWRITEBYTECODE := 1
 
 # Debian packages: the host and its Python libraries, lrelease for translations,
-# Chromium for the report rendering test, scikit-learn as a test-only reference.
+# Chromium for the report rendering test, scikit-learn and statsmodels as test-only references.
 DEB_PACKAGES := python3-qgis qgis-providers qgis python3-numpy python3-scipy python3-shapely \
-	python3-pyproj python3-gdal python3-venv python3-sklearn qttools5-dev-tools pyqt5-dev-tools \
+	python3-pyproj python3-gdal python3-venv python3-sklearn python3-statsmodels qttools5-dev-tools pyqt5-dev-tools \
 	chromium poppler-utils zip unzip
 
-.PHONY: setup host venvs translations test test-shapely18 test-shapely2 demo package bench clean
+.PHONY: setup host venvs translations lint test test-shapely18 test-shapely2 demo package bench clean
 
 setup: host $(VENV)/.ready $(VENV2)/.ready translations
 
@@ -37,22 +37,26 @@ host:
 HEADLESS_PTH = echo 'import os; os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")' \
 	> "$$($(1)/bin/python -c 'import sysconfig; print(sysconfig.get_paths()["purelib"])')/plotwise_headless.pth"
 
-$(VENV)/.ready: Makefile
+$(VENV)/.ready: Makefile constraints.txt
 	$(HOST_PYTHON) -m venv --system-site-packages $(VENV)
-	$(VENV)/bin/pip install -q --disable-pip-version-check $(PYTEST_QGIS)
+	$(call PIP_INSTALL,$(VENV)) pytest-qgis ruff
 	$(call HEADLESS_PTH,$(VENV))
 	touch $@
 
 # shapely 2.0 beside the system numpy 1.24 (a plain `pip install shapely` would pull numpy 2)
-$(VENV2)/.ready: Makefile
+$(VENV2)/.ready: Makefile constraints.txt
 	$(HOST_PYTHON) -m venv --system-site-packages $(VENV2)
-	$(VENV2)/bin/pip install -q --disable-pip-version-check 'shapely>=2.0,<2.1' numpy==1.24.2 $(PYTEST_QGIS)
+	$(call PIP_INSTALL,$(VENV2)) shapely numpy pytest-qgis
 	$(call HEADLESS_PTH,$(VENV2))
 	touch $@
 
 translations:
 	@for ts in i18n/*.ts; do [ -e "$$ts" ] || continue; \
 		lrelease -silent "$$ts" -qm "$${ts%.ts}.qm" || exit 1; done
+
+# ruff with ruff.toml (pycodestyle and pyflakes, 120 columns)
+lint: $(VENV)/.ready
+	$(VENV)/bin/ruff check .
 
 # The suite twice: the host's stock shapely (1.8 on Debian 12), then shapely 2.0.
 test: setup
