@@ -70,7 +70,8 @@ class DemoReserve(PlotwiseAlgorithm):
         self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_EXCLUDED, self.tr("Excluded areas (lake, inholding)"), compat.TYPE_VECTOR_POLYGON))
         self.addParameter(QgsProcessingParameterRasterDestination(self.OUTPUT_ELEVATION, self.tr("Elevation (m)")))
         self.addParameter(QgsProcessingParameterRasterDestination(self.OUTPUT_GREENNESS, self.tr("Greenness (0–1)")))
-        self.addParameter(QgsProcessingParameterRasterDestination(self.OUTPUT_INTENSITY, self.tr("Expected animals per km²")))
+        self.addParameter(QgsProcessingParameterRasterDestination(
+            self.OUTPUT_INTENSITY, self.tr("Expected animals per km²"), optional=True, createByDefault=False))
         self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_ANIMALS, self.tr("Simulated animals"), compat.TYPE_VECTOR_POINT))
         self.add_report_parameter()
         self.addOutput(QgsProcessingOutputNumber(self.TRUE_TOTAL, self.tr("True number of animals")))
@@ -96,12 +97,14 @@ class DemoReserve(PlotwiseAlgorithm):
         self._check_sink(sink, self.OUTPUT_EXCLUDED)
         bridge.write_features(
             sink, fields, [reserve.lake, reserve.inholding],
-            [["lake", "Tarnmere", reserve.lake.area / 1e4], ["inholding", "Oakhurst farm (private)", reserve.inholding.area / 1e4]],
+            [["lake", "Tarnmere", reserve.lake.area / 1e4], ["inholding", "Quillimer croft (private)", reserve.inholding.area / 1e4]],
         )
         feedback.setProgress(75)
 
         for key, array in ((self.OUTPUT_ELEVATION, reserve.elevation), (self.OUTPUT_GREENNESS, reserve.greenness), (self.OUTPUT_INTENSITY, reserve.intensity)):
             path = self.parameterAsOutputLayer(parameters, key, context)
+            if not path:  # an optional output left out
+                continue
             bridge.write_geotiff(path, array, reserve.geotransform, crs, nodata=-9999.0)
             results[key] = path
         feedback.setProgress(85)
@@ -125,7 +128,8 @@ class DemoReserve(PlotwiseAlgorithm):
         results[self.REPORT] = self.write_report(self._report(reserve, cell_size, crs), parameters, context, feedback)
         for key, style in ((self.OUTPUT_AREA, "outline"), (self.OUTPUT_EXCLUDED, "excluded"), (self.OUTPUT_ELEVATION, "elevation"),
                            (self.OUTPUT_GREENNESS, "greenness"), (self.OUTPUT_INTENSITY, "intensity"), (self.OUTPUT_ANIMALS, "animals")):
-            self.style_output(context, results[key], style)
+            if results.get(key):
+                self.style_output(context, results[key], style)
         return results
 
     def _check_sink(self, sink, key):

@@ -35,9 +35,9 @@ from .geometry_types import polygonal_part
 RESERVE_NAME = "Hollin Ridge Reserve"
 SPECIES_NAME = "velmar"
 SPECIES_DESCRIPTION = "an invented grazing antelope that lives in loose groups"
-# WGS 84 / UTM zone 36S; the reserve's coordinates are invented and lie in open country
+# WGS 84 / UTM zone 36S; the coordinates are invented and lie in open ocean, on no real land
 CRS_EPSG = 32736
-ORIGIN = (612_000.0, 7_415_000.0)
+ORIGIN = (500_000.0, 5_570_000.0)  # open ocean (40° S, 33° E): the reserve is on no real land
 
 MEAN_GROUP_SIZE = 7.0  # mu
 GROUP_SPREAD_M = 140.0  # sigma

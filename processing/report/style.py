@@ -2,11 +2,11 @@
 
 # Palette (our own): deep teal ink, warm sand background accents, ochre for cautions.
 INK = "#1f3a44"
-ACCENT = "#2c7a7b"
+ACCENT = "#2b6e74"
 MUTED = "#5f6f73"
 RULE = "#d7dedc"
 CAUTION_BG = "#fff4dc"
-CAUTION_EDGE = "#b7791f"
+CAUTION_EDGE = "#a66d2c"
 WARN_BG = "#fdeceb"
 WARN_EDGE = "#b4443b"
 

@@ -74,3 +74,17 @@ def test_cell_size_out_of_range():
 
     with pytest.raises(InputError, match="cell size"):
         _reserve(1, 5.0)
+
+
+def test_reserve_lies_in_open_ocean():
+    # The invented reserve must sit on no real land. Its UTM zone 36S spans 30° E to 36° E;
+    # there the African coast ends north of 35° S and the Antarctic ice starts south of 65° S
+    # (from memory, any atlas), so 38° S to 60° S is open ocean.
+    import pyproj
+
+    reserve = _reserve(7, cell_size=250.0)
+    to_geo = pyproj.Transformer.from_crs(reserve.crs_epsg, 4326, always_xy=True)
+    x0, y0, x1, y1 = reserve.boundary.bounds
+    lons, lats = to_geo.transform([x0, x1, x0, x1], [y0, y0, y1, y1])
+    assert all(30.0 < lon < 36.0 for lon in lons)
+    assert all(-60.0 < lat < -38.0 for lat in lats)

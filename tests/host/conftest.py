@@ -50,3 +50,29 @@ def demo_reserve_outputs(plotwise_provider, tmp_path_factory):
         },
     )
     return results
+
+
+@pytest.fixture(scope="session")
+def qgis_process(tmp_path_factory):
+    """Run ``qgis_process.bin`` as a user would, in a throwaway profile holding this clone as
+    the enabled plugin ``plotwise``. Returns ``run(*args) -> stdout``; a failing run fails the test."""
+    import os
+    import subprocess
+    from pathlib import Path
+
+    repo = Path(__file__).resolve().parents[2]
+    home = tmp_path_factory.mktemp("qgis_process_profile")
+    plugins = home / "profiles" / "default" / "python" / "plugins"
+    plugins.mkdir(parents=True)
+    (plugins / "plotwise").symlink_to(repo, target_is_directory=True)
+    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(home), QT_QPA_PLATFORM="offscreen", XDG_RUNTIME_DIR=str(home))
+
+    def run(*args, check=True):
+        done = subprocess.run(["/usr/bin/qgis_process.bin", *map(str, args)], capture_output=True, text=True,
+                              env=env, timeout=600)
+        if check:
+            assert done.returncode == 0, done.stdout[-4000:] + done.stderr[-4000:]
+        return done.stdout if check else done
+
+    run("plugins", "enable", "plotwise")
+    return run

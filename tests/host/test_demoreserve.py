@@ -3,6 +3,8 @@ import numpy as np
 import pytest
 from osgeo import gdal
 
+from plotwise.processing.engine import demo_reserve
+
 
 def test_demo_reserve_outputs(demo_reserve_outputs):
     from qgis.core import QgsVectorLayer
@@ -76,7 +78,7 @@ def test_simulate_counts_point_units_need_area(run_alg, demo_reserve_outputs):
 
     units = QgsVectorLayer("Point?crs=EPSG:32736&field=unit_id:string", "stations", "memory")
     feature = QgsFeature(units.fields())
-    feature.setGeometry(QgsGeometry.fromPointXY(QgsPointXY(612000, 7415000)))
+    feature.setGeometry(QgsGeometry.fromPointXY(QgsPointXY(*demo_reserve.ORIGIN)))
     feature.setAttributes(["S1"])
     units.dataProvider().addFeatures([feature])
     with pytest.raises(QgsProcessingException, match="area_m2"):
