@@ -40,6 +40,7 @@ def _keep_host_processing_importable():
 
 _keep_host_processing_importable()
 _register_package()
+import plotwise.processing.engine  # noqa: E402,F401  (points pyproj at PROJ's data before a test imports it)
 
 # the host's Processing framework (module ``processing``) lives here on Debian
 _HOST_PLUGINS = "/usr/share/qgis/python/plugins"
