@@ -4,7 +4,7 @@ from qgis.PyQt.QtCore import QCoreApplication
 
 from . import compat
 from .dependencies import missing_dependencies
-from .translation import install_translator, remove_translator
+from ..processing.translation import install_translator, remove_translator
 
 LOG_TAG = "Plotwise"
 

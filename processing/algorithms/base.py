@@ -12,7 +12,7 @@ from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
 from ...plugin import compat
-from ...plugin.translation import active_language
+from ..translation import active_language
 from ..engine.errors import Cancelled, InputError, Message
 from ..engine.rng import make_rng
 from ..report import Report

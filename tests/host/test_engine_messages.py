@@ -1,7 +1,7 @@
 """Engine errors and warnings reach a French user in French, with the ids filled in.
 
 The French translator (``i18n/plotwise_fr.qm``, compiled by ``make translations``) is installed
-the way the plugin installs it (``plugin.translation.install_translator``) and removed after each
+the way the plugin installs it (``processing.translation.install_translator``) and removed after each
 test. The expected texts come from outside the running code: the committed French translation
 in ``i18n/plotwise_fr.ts`` of each English template (looked up by the English source written out
 below), filled with the feature ids and field names of the invented test layers.
@@ -51,7 +51,7 @@ def french(context, source):
 
 @pytest.fixture
 def french_ui(plotwise_provider):
-    from plotwise.plugin.translation import install_translator, remove_translator
+    from plotwise.processing.translation import install_translator, remove_translator
 
     _ensure_qm()
     translator = install_translator("fr")
