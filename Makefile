@@ -1,4 +1,4 @@
-# Plotwise: make setup | test | demo | package | translations
+# Plotwise: make setup | test | demo | package | translations | update-translations
 # Every target is idempotent. `make test` and `make demo` each start from nothing on Debian 12.
 
 SHELL := /bin/bash
@@ -19,7 +19,7 @@ DEB_PACKAGES := python3-qgis qgis-providers qgis python3-numpy python3-scipy pyt
 	python3-pyproj python3-gdal python3-venv python3-sklearn python3-statsmodels qttools5-dev-tools pyqt5-dev-tools \
 	chromium poppler-utils zip unzip
 
-.PHONY: setup host venvs translations lint test test-shapely18 test-shapely2 demo package bench clean
+.PHONY: setup host venvs translations update-translations lint test test-shapely18 test-shapely2 demo package bench clean
 
 setup: host $(VENV)/.ready $(VENV2)/.ready translations
 
@@ -50,9 +50,22 @@ $(VENV2)/.ready: Makefile constraints.txt
 	$(call HEADLESS_PTH,$(VENV2))
 	touch $@
 
+# The .ts files are the one home of the translations (edit them with Qt Linguist or any .ts editor).
+# `make translations` compiles them; unfinished entries are left out, so a changed English string
+# shows in English until its translation is done again.
 translations:
 	@for ts in i18n/*.ts; do [ -e "$$ts" ] || continue; \
-		lrelease -silent "$$ts" -qm "$${ts%.ts}.qm" || exit 1; done
+		lrelease -silent -nounfinished "$$ts" -qm "$${ts%.ts}.qm" || exit 1; done
+
+# `make update-translations` refreshes the .ts files from the code with Debian's pylupdate5: new strings
+# come in unfinished, strings gone from the code stay as obsolete entries (their translation kept for
+# reuse). PYLUPDATE_FLAGS=-noobsolete drops those; TS_FILES=... (and TS_SOURCES=...) work on other files (the tests do).
+TS_SOURCES ?= $(shell find plugin processing -name '*.py' -not -path '*/__pycache__/*' | LC_ALL=C sort) \
+	scripts/build_models.py
+TS_FILES ?= $(wildcard i18n/plotwise_*.ts)
+PYLUPDATE_FLAGS ?=
+update-translations:
+	PYTHONWARNINGS=ignore pylupdate5 $(PYLUPDATE_FLAGS) $(TS_SOURCES) -ts $(TS_FILES)
 
 # ruff with ruff.toml (pycodestyle and pyflakes, 120 columns)
 lint: $(VENV)/.ready

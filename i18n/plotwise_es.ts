@@ -1,16 +1,16 @@
 <?xml version="1.0" encoding="utf-8"?>
 <!DOCTYPE TS>
 <TS version="2.1" language="es_ES">
-  <context>
+<context>
     <name>Allocate</name>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="56" />
-      <source>Allocate effort to strata</source>
-      <translation>Asignar el esfuerzo a los estratos</translation>
+        <location filename="../processing/algorithms/allocate.py" line="56"/>
+        <source>Allocate effort to strata</source>
+        <translation>Asignar el esfuerzo a los estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="59" />
-      <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
+        <location filename="../processing/algorithms/allocate.py" line="59"/>
+        <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
 
 Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
 
@@ -23,7 +23,7 @@ SD field: the pilot standard deviation of counts per unit. Without it the covari
 Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
 
 Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-      <translation>Decide cuántas unidades de muestreo recibe cada estrato y muestra de antemano la precisión que aportan.
+        <translation>Decide cuántas unidades de muestreo recibe cada estrato y muestra de antemano la precisión que aportan.
 
 Métodos: igual; proporcional al área del estrato; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, cap. 5); óptima con coste, n_h ∝ A_h·S_h/√c_h, con un presupuesto C = c0 + Σ c_h·n_h (Cochran 1977, cap. 5).
 
@@ -38,441 +38,438 @@ Campo de media: el conteo medio piloto por unidad, necesario para los CV y para 
 Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad del estrato), y un informe que compara la asignación igual, la proporcional y la de Neyman con el mismo total.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="84" />
-      <source>Strata</source>
-      <translation>Estratos</translation>
+        <location filename="../processing/algorithms/allocate.py" line="83"/>
+        <source>Strata</source>
+        <translation>Estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="88" />
-      <source>Stratum identifier field</source>
-      <translation>Campo identificador del estrato</translation>
+        <location filename="../processing/algorithms/allocate.py" line="86"/>
+        <source>Stratum identifier field</source>
+        <translation>Campo identificador del estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="94" />
-      <source>Stratum area field (hectares; empty: polygon area)</source>
-      <translation>Campo de área del estrato (hectáreas; vacío: área del polígono)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="92"/>
+        <source>Stratum area field (hectares; empty: polygon area)</source>
+        <translation>Campo de área del estrato (hectáreas; vacío: área del polígono)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="99" />
-      <source>Pilot SD of counts per unit</source>
-      <translation>Desviación estándar piloto de los conteos por unidad</translation>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <source>Pilot SD of counts per unit</source>
+        <translation>Desviación estándar piloto de los conteos por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="100" />
-      <source>Pilot mean count per unit</source>
-      <translation>Conteo medio piloto por unidad</translation>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <source>Pilot mean count per unit</source>
+        <translation>Conteo medio piloto por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="101" />
-      <source>Cost per unit</source>
-      <translation>Coste por unidad</translation>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <source>Cost per unit</source>
+        <translation>Coste por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="107" />
-      <source>Costs are field days</source>
-      <translation>Los costes son jornadas de campo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="106"/>
+        <source>Costs are field days</source>
+        <translation>Los costes son jornadas de campo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="111" />
-      <source>Fixed cost of the survey (c0, in the cost unit)</source>
-      <translation>Coste fijo del muestreo (c0, en la unidad de coste)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="109"/>
+        <source>Fixed cost of the survey (c0, in the cost unit)</source>
+        <translation>Coste fijo del muestreo (c0, en la unidad de coste)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="118" />
-      <source>Allocation method</source>
-      <translation>Método de asignación</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Allocation method</source>
+        <translation>Método de asignación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <source>Equal</source>
-      <translation>Igual</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Equal</source>
+        <translation>Igual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <source>Proportional to area</source>
-      <translation>Proporcional al área</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Proportional to area</source>
+        <translation>Proporcional al área</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <location filename="../processing/algorithms/allocate.py" line="283" />
-      <source>Neyman</source>
-      <translation>Neyman</translation>
+        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <source>Neyman</source>
+        <translation>Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <source>Optimal with cost</source>
-      <translation>Óptima con coste</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Optimal with cost</source>
+        <translation>Óptima con coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="125" />
-      <source>Total number of units</source>
-      <translation>Número total de unidades</translation>
+        <location filename="../processing/algorithms/allocate.py" line="123"/>
+        <source>Total number of units</source>
+        <translation>Número total de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="130" />
-      <source>Budget (0: not used; needs the cost field)</source>
-      <translation>Presupuesto (0: no se usa; necesita el campo de coste)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="128"/>
+        <source>Budget (0: not used; needs the cost field)</source>
+        <translation>Presupuesto (0: no se usa; necesita el campo de coste)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="136" />
-      <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
-      <translation>CV objetivo de la densidad global (0: no se usa; p. ej. 0.2)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="134"/>
+        <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
+        <translation>CV objetivo de la densidad global (0: no se usa; p. ej. 0.2)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="142" />
-      <source>Area of one sample unit (m²)</source>
-      <translation>Área de una unidad de muestreo (m²)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="140"/>
+        <source>Area of one sample unit (m²)</source>
+        <translation>Área de una unidad de muestreo (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="148" />
-      <location filename="../processing/algorithms/allocate.py" line="314" />
-      <source>Minimum units per stratum</source>
-      <translation>Mínimo de unidades por estrato</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Minimum units per stratum</source>
+        <translation>Mínimo de unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="152" />
-      <source>Strata with allocation</source>
-      <translation>Estratos con asignación</translation>
+        <location filename="../processing/algorithms/allocate.py" line="152"/>
+        <source>Strata with allocation</source>
+        <translation>Estratos con asignación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="154" />
-      <source>Expected CV of the overall density</source>
-      <translation>CV esperado de la densidad global</translation>
+        <location filename="../processing/algorithms/allocate.py" line="154"/>
+        <source>Expected CV of the overall density</source>
+        <translation>CV esperado de la densidad global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="160" />
-      <source>The strata layer could not be opened.</source>
-      <translation>No se pudo abrir la capa de estratos.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="160"/>
+        <source>The strata layer could not be opened.</source>
+        <translation>No se pudo abrir la capa de estratos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="176" />
-      <source>Layer '{layer}' has no field '{field}': the polygon areas are used.</source>
-      <translation>La capa «{layer}» no tiene el campo «{field}»: se usan las áreas de los polígonos.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="175"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
+        <translation>La capa «{layer}» no tiene el campo «{field}»: se usan las áreas de los polígonos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="187" />
-      <source>Layer '{layer}' has no strata with an area.</source>
-      <translation>La capa «{layer}» no tiene ningún estrato con área.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="187"/>
+        <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
+        <translation>La capa «{layer}» no tiene ningún estrato con área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="202" />
-      <source>field '{name}' of layer '{layer}'</source>
-      <translation>campo «{name}» de la capa «{layer}»</translation>
+        <location filename="../processing/algorithms/allocate.py" line="202"/>
+        <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
+        <translation>campo «{name}» de la capa «{layer}»</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="217" />
-      <source>No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
-      <translation>No hay campo de DE piloto: se usa como sustituto la DE de la covariable («{field}»). Esto supone que los conteos siguen a la covariable; sustitúyala por la DE de un muestreo piloto cuando la tenga. Los errores estándar esperados quedan entonces en unidades de la covariable, no en conteos.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="216"/>
+        <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
+        <translation>No hay campo de DE piloto: se usa como sustituto la DE de la covariable («{field}»). Esto supone que los conteos siguen a la covariable; sustitúyala por la DE de un muestreo piloto cuando la tenga. Los errores estándar esperados quedan entonces en unidades de la covariable, no en conteos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="233" />
-      <source>polygon area</source>
-      <translation>área del polígono</translation>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <source>polygon area</source>
+        <translation>área del polígono</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="234" />
-      <source>pilot SD</source>
-      <translation>desviación estándar piloto</translation>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <source>pilot SD</source>
+        <translation>desviación estándar piloto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="235" />
-      <source>pilot mean</source>
-      <translation>media piloto</translation>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <source>pilot mean</source>
+        <translation>media piloto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="236" />
-      <location filename="../processing/algorithms/allocate.py" line="301" />
-      <source>cost</source>
-      <translation>coste</translation>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <source>cost</source>
+        <translation>coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="259" />
-      <source>The output layer could not be created.</source>
-      <translation>No se pudo crear la capa de salida.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="259"/>
+        <source>The output layer could not be created.</source>
+        <translation>No se pudo crear la capa de salida.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="270" />
-      <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
-      <translation>{total} unidades asignadas ({method}); CV esperado de la densidad global: {cv}.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="269"/>
+        <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
+        <translation>{total} unidades asignadas ({method}); CV esperado de la densidad global: {cv}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="282" />
-      <source>equal</source>
-      <translation>igual</translation>
+        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <source>equal</source>
+        <translation>igual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="282" />
-      <source>proportional to area</source>
-      <translation>proporcional al área</translation>
+        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <source>proportional to area</source>
+        <translation>proporcional al área</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="283" />
-      <source>optimal with cost</source>
-      <translation>óptima con coste</translation>
+        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <source>optimal with cost</source>
+        <translation>óptima con coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="294" />
-      <source>Allocation of survey effort</source>
-      <translation>Asignación del esfuerzo de muestreo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="293"/>
+        <source>Allocation of survey effort</source>
+        <translation>Asignación del esfuerzo de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
-      <source>field days</source>
-      <translation>jornadas de campo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="295"/>
+        <source>field days</source>
+        <translation>jornadas de campo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
-      <source>cost units</source>
-      <translation>unidades de coste</translation>
+        <location filename="../processing/algorithms/allocate.py" line="295"/>
+        <source>cost units</source>
+        <translation>unidades de coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="297" />
-      <source>units in total</source>
-      <translation>unidades en total</translation>
+        <location filename="../processing/algorithms/allocate.py" line="296"/>
+        <source>units in total</source>
+        <translation>unidades en total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="297" />
-      <source>method</source>
-      <translation>método</translation>
+        <location filename="../processing/algorithms/allocate.py" line="296"/>
+        <source>method</source>
+        <translation>método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="299" />
-      <source>expected CV of the overall density</source>
-      <translation>CV esperado de la densidad global</translation>
+        <location filename="../processing/algorithms/allocate.py" line="298"/>
+        <source>expected CV of the overall density</source>
+        <translation>CV esperado de la densidad global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="301" />
-      <source>field days needed</source>
-      <translation>jornadas de campo necesarias</translation>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <source>field days needed</source>
+        <translation>jornadas de campo necesarias</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
-      <source>a total number of units</source>
-      <translation>un número total de unidades</translation>
+        <location filename="../processing/algorithms/allocate.py" line="302"/>
+        <source>a total number of units</source>
+        <translation>un número total de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
-      <source>a budget</source>
-      <translation>un presupuesto</translation>
+        <location filename="../processing/algorithms/allocate.py" line="302"/>
+        <source>a budget</source>
+        <translation>un presupuesto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
-      <source>a target CV</source>
-      <translation>un CV objetivo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="302"/>
+        <source>a target CV</source>
+        <translation>un CV objetivo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="305" />
-      <source>Strata layer</source>
-      <translation>Capa de estratos</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Strata layer</source>
+        <translation>Capa de estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="306" />
-      <source>Computation CRS</source>
-      <translation>SRC de cálculo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Computation CRS</source>
+        <translation>SRC de cálculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="307" />
-      <source>Method asked for</source>
-      <translation>Método solicitado</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Method asked for</source>
+        <translation>Método solicitado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="308" />
-      <source>Method applied</source>
-      <translation>Método aplicado</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Method applied</source>
+        <translation>Método aplicado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="309" />
-      <source>Target</source>
-      <translation>Objetivo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Target</source>
+        <translation>Objetivo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="310" />
-      <source>Total asked for</source>
-      <translation>Total solicitado</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Total asked for</source>
+        <translation>Total solicitado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="311" />
-      <source>Budget</source>
-      <translation>Presupuesto</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Budget</source>
+        <translation>Presupuesto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="312" />
-      <source>Target CV</source>
-      <translation>CV objetivo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Target CV</source>
+        <translation>CV objetivo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="313" />
-      <source>Unit area (m²)</source>
-      <translation>Área de la unidad (m²)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Unit area (m²)</source>
+        <translation>Área de la unidad (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="315" />
-      <source>SD field</source>
-      <translation>Campo de DE</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>SD field</source>
+        <translation>Campo de DE</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="315" />
-      <source> (covariate proxy)</source>
-      <translation> (sustituto por la covariable)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source> (covariate proxy)</source>
+        <translation> (sustituto por la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="316" />
-      <source>Mean field</source>
-      <translation>Campo de media</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Mean field</source>
+        <translation>Campo de media</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
-      <source>Cost field</source>
-      <translation>Campo de coste</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Cost field</source>
+        <translation>Campo de coste</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="318" />
-      <source>Fixed cost c0</source>
-      <translation>Coste fijo c0</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Fixed cost c0</source>
+        <translation>Coste fijo c0</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="322" />
-      <source>Units per stratum</source>
-      <translation>Unidades por estrato</translation>
+        <location filename="../processing/algorithms/allocate.py" line="321"/>
+        <source>Units per stratum</source>
+        <translation>Unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="323" />
-      <source>SE of mean per unit (covariate units)</source>
-      <translation>Error estándar de la media por unidad (unidades de la covariable)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="322"/>
+        <source>SE of mean per unit (covariate units)</source>
+        <translation>Error estándar de la media por unidad (unidades de la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="323" />
-      <source>SE of mean count per unit</source>
-      <translation>Error estándar del conteo medio por unidad</translation>
+        <location filename="../processing/algorithms/allocate.py" line="322"/>
+        <source>SE of mean count per unit</source>
+        <translation>Error estándar del conteo medio por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Stratum</source>
-      <translation>Estrato</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Stratum</source>
+        <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Units that fit</source>
-      <translation>Unidades que caben</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Units that fit</source>
+        <translation>Unidades que caben</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Lower bound</source>
-      <translation>Límite inferior</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Lower bound</source>
+        <translation>Límite inferior</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Share before rounding</source>
-      <translation>Cuota antes del redondeo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Share before rounding</source>
+        <translation>Cuota antes del redondeo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="325" />
-      <source>Units (n_alloc)</source>
-      <translation>Unidades (n_alloc)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="324"/>
+        <source>Units (n_alloc)</source>
+        <translation>Unidades (n_alloc)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="325" />
-      <source>Sampling fraction</source>
-      <translation>Fracción de muestreo</translation>
+        <location filename="../processing/algorithms/allocate.py" line="324"/>
+        <source>Sampling fraction</source>
+        <translation>Fracción de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="329" />
-      <source>SE of density (per km²)</source>
-      <translation>Error estándar de la densidad (por km²)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="328"/>
+        <source>SE of density (per km²)</source>
+        <translation>Error estándar de la densidad (por km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="331" />
-      <source>Expected CV (exp_cv)</source>
-      <translation>CV esperado (exp_cv)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="330"/>
+        <source>Expected CV (exp_cv)</source>
+        <translation>CV esperado (exp_cv)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="343" />
-      <source>all strata</source>
-      <translation>todos los estratos</translation>
+        <location filename="../processing/algorithms/allocate.py" line="342"/>
+        <source>all strata</source>
+        <translation>todos los estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="354" />
-      <source>units per stratum</source>
-      <translation>unidades por estrato</translation>
+        <location filename="../processing/algorithms/allocate.py" line="352"/>
+        <source>units per stratum</source>
+        <translation>unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="355" />
-      <source>Units allocated to each stratum</source>
-      <translation>Unidades asignadas a cada estrato</translation>
+        <location filename="../processing/algorithms/allocate.py" line="352"/>
+        <source>Units allocated to each stratum</source>
+        <translation>Unidades asignadas a cada estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="357" />
-      <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-      <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="356"/>
+        <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
+        <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="363" />
-      <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-      <translation>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="361"/>
+        <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
+        <translation>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="364" />
-      <source>Field days needed</source>
-      <translation>Jornadas de campo necesarias</translation>
+        <location filename="../processing/algorithms/allocate.py" line="361"/>
+        <source>Field days needed</source>
+        <translation>Jornadas de campo necesarias</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="364" />
-      <source>Cost of the design</source>
-      <translation>Coste del diseño</translation>
+        <location filename="../processing/algorithms/allocate.py" line="361"/>
+        <source>Cost of the design</source>
+        <translation>Coste del diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="369" />
-      <source>What the choice of method buys, at {n} units</source>
-      <translation>Lo que aporta la elección del método, con {n} unidades</translation>
+        <location filename="../processing/algorithms/allocate.py" line="368"/>
+        <source>What the choice of method buys, at {n} units</source>
+        <translation>Lo que aporta la elección del método, con {n} unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="370" />
-      <source>Method</source>
-      <translation>Método</translation>
+        <location filename="../processing/algorithms/allocate.py" line="369"/>
+        <source>Method</source>
+        <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="370" />
-      <source>stratum {label}</source>
-      <translation>estrato {label}</translation>
+        <location filename="../processing/algorithms/allocate.py" line="369"/>
+        <source>stratum {label}</source>
+        <translation>estrato {label}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="372" />
-      <source>Variance relative to the applied allocation</source>
-      <translation>Varianza relativa a la asignación aplicada</translation>
+        <location filename="../processing/algorithms/allocate.py" line="371"/>
+        <source>Variance relative to the applied allocation</source>
+        <translation>Varianza relativa a la asignación aplicada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="374" />
-      <source>Expected CV</source>
-      <translation>CV esperado</translation>
+        <location filename="../processing/algorithms/allocate.py" line="373"/>
+        <source>Expected CV</source>
+        <translation>CV esperado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="385" />
-      <source>Without standard deviations the precision of the designs cannot be compared.</source>
-      <translation>Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="384"/>
+        <source>Without standard deviations the precision of the designs cannot be compared.</source>
+        <translation>Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>BuildFrame</name>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="35" />
-      <source>Build sampling frame</source>
-      <translation>Construir el marco de muestreo</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="35"/>
+        <source>Build sampling frame</source>
+        <translation>Construir el marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="38" />
-      <source>Builds the sampling frame: the part of the study area that the survey can speak for.
+        <location filename="../processing/algorithms/buildframe.py" line="38"/>
+        <source>Builds the sampling frame: the part of the study area that the survey can speak for.
 
 Three rules are applied in this order, each one charged only with the area still in the frame when it is applied:
 1. Excluded polygons (water, private inholdings, ...) are removed.
 2. Cells of the mask raster (band 1) whose value lies outside [minimum, maximum], or is NoData, are removed. Either bound may be left empty. Cells of the study area that the raster does not cover count as NoData. A raster in another CRS is reprojected on the fly (nearest neighbour). Example: a slope raster in degrees with maximum 30.
-3. An inward strip of the given width (metres) along the study area's boundary is removed.
+3. An inward strip of the given width (metres) along the study area&apos;s boundary is removed.
 
 The result is dissolved into one valid feature with fields frame_id and area_ha. The report gives the area kept, the area lost to each rule and a map.
 
 A study area in geographic coordinates is projected to the UTM zone of its centre; the output is in that CRS. Empty or zero-area features are skipped and invalid geometries repaired, each with a warning.
 
-Estimates from a survey on this frame apply to the frame only. Excluding steep terrain does not make the remaining terrain safe: check every unit's access and safety before fieldwork.</source>
-      <translation>Construye el marco de muestreo: la parte del área de estudio sobre la que el muestreo puede pronunciarse.
+Estimates from a survey on this frame apply to the frame only. Excluding steep terrain does not make the remaining terrain safe: check every unit&apos;s access and safety before fieldwork.</source>
+        <translation>Construye el marco de muestreo: la parte del área de estudio sobre la que el muestreo puede pronunciarse.
 
 Se aplican tres reglas en este orden, y a cada una solo se le imputa el área que seguía en el marco cuando se aplica:
 1. Se quitan los polígonos excluidos (agua, enclaves privados, ...).
@@ -486,328 +483,301 @@ Un área de estudio en coordenadas geográficas se proyecta a la zona UTM de su 
 Las estimaciones de un muestreo sobre este marco valen solo para el marco. Excluir el terreno escarpado no hace seguro el terreno restante: compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="61" />
-      <source>Study area</source>
-      <translation>Área de estudio</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="59"/>
+        <source>Study area</source>
+        <translation>Área de estudio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="67" />
-      <source>Areas to exclude (water, inholdings, ...)</source>
-      <translation>Zonas que excluir (agua, enclaves, ...)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="64"/>
+        <source>Areas to exclude (water, inholdings, ...)</source>
+        <translation>Zonas que excluir (agua, enclaves, ...)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="74" />
-      <source>Mask raster (cells outside the range are excluded)</source>
-      <translation>Ráster de máscara (se excluyen las celdas fuera del intervalo)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="72"/>
+        <source>Mask raster (cells outside the range are excluded)</source>
+        <translation>Ráster de máscara (se excluyen las celdas fuera del intervalo)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="80" />
-      <source>Lowest accepted mask value (empty: no lower limit)</source>
-      <translation>Valor mínimo aceptado de la máscara (vacío: sin límite inferior)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="77"/>
+        <source>Lowest accepted mask value (empty: no lower limit)</source>
+        <translation>Valor mínimo aceptado de la máscara (vacío: sin límite inferior)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="88" />
-      <source>Highest accepted mask value (empty: no upper limit)</source>
-      <translation>Valor máximo aceptado de la máscara (vacío: sin límite superior)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="85"/>
+        <source>Highest accepted mask value (empty: no upper limit)</source>
+        <translation>Valor máximo aceptado de la máscara (vacío: sin límite superior)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="96" />
-      <source>Inward edge buffer (m)</source>
-      <translation>Franja interior en el borde (m)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="93"/>
+        <source>Inward edge buffer (m)</source>
+        <translation>Franja interior en el borde (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="104" />
-      <location filename="../processing/algorithms/buildframe.py" line="270" />
-      <source>Sampling frame</source>
-      <translation>Marco de muestreo</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="269"/>
+        <source>Sampling frame</source>
+        <translation>Marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="126" />
-      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
-      <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="125"/>
+        <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
+        <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="132" />
-      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
-      <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="131"/>
+        <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
+        <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="152" />
-      <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
-      <translation>MASK_MIN o MASK_MAX tiene valor pero no se ha dado ningún ráster de máscara (MASK). Elija un ráster o deje vacíos ambos límites.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="151"/>
+        <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
+        <translation>MASK_MIN o MASK_MAX tiene valor pero no se ha dado ningún ráster de máscara (MASK). Elija un ráster o deje vacíos ambos límites.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="157" />
-      <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
-      <translation>El valor mínimo aceptado de la máscara (MASK_MIN = {lo}) es mayor que el máximo (MASK_MAX = {hi}). Intercámbielos o deje uno vacío.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="156"/>
+        <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
+        <translation>El valor mínimo aceptado de la máscara (MASK_MIN = {lo}) es mayor que el máximo (MASK_MAX = {hi}). Intercámbielos o deje uno vacío.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="170" />
-      <source>Layer '{layer}' (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
-      <translation>La capa «{layer}» (INPUT) no tiene ningún polígono con área positiva. Elija la capa de polígonos del área de estudio.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="169"/>
+        <source>Layer &apos;{layer}&apos; (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
+        <translation>La capa «{layer}» (INPUT) no tiene ningún polígono con área positiva. Elija la capa de polígonos del área de estudio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="189" />
-      <source>Mask raster '{layer}' is given without limits: only its NoData cells are excluded.</source>
-      <translation>El ráster de máscara «{layer}» se ha dado sin límites: solo se excluyen sus celdas NoData.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="188"/>
+        <source>Mask raster &apos;{layer}&apos; is given without limits: only its NoData cells are excluded.</source>
+        <translation>El ráster de máscara «{layer}» se ha dado sin límites: solo se excluyen sus celdas NoData.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="196" />
-      <source>Mask raster '{layer}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
-      <translation>El ráster de máscara «{layer}» no es un archivo ráster que GDAL pueda leer. Guárdelo primero como GeoTIFF.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="195"/>
+        <source>Mask raster &apos;{layer}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+        <translation>El ráster de máscara «{layer}» no es un archivo ráster que GDAL pueda leer. Guárdelo primero como GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="199" />
-      <source>Reading mask raster '{layer}'…</source>
-      <translation>Leyendo el ráster de máscara «{layer}»…</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="199"/>
+        <source>Reading mask raster '{layer}'…</source>
+        <translation>Leyendo el ráster de máscara «{layer}»…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="213" />
-      <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
-      <translation>Ráster de máscara reproyectado al vuelo a {crs}: {rows} × {cols} celdas de {size} m.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="212"/>
+        <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
+        <translation>Ráster de máscara reproyectado al vuelo a {crs}: {rows} × {cols} celdas de {size} m.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="220" />
-      <source>Mask raster '{layer}' does not cover {n} of the {total} cells over the study area's extent; those cells count as NoData and are excluded.</source>
-      <translation>El ráster de máscara «{layer}» no cubre {n} de las {total} celdas de la extensión del área de estudio; esas celdas cuentan como NoData y se excluyen.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="219"/>
+        <source>Mask raster &apos;{layer}&apos; does not cover {n} of the {total} cells over the study area&apos;s extent; those cells count as NoData and are excluded.</source>
+        <translation>El ráster de máscara «{layer}» no cubre {n} de las {total} celdas de la extensión del área de estudio; esas celdas cuentan como NoData y se excluyen.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="244" />
-      <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
-      <translation>Marco: {kept} ha de {total} ha ({pct} %).</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="243"/>
+        <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
+        <translation>Marco: {kept} ha de {total} ha ({pct} %).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="275" />
-      <source>study area (ha)</source>
-      <translation>área de estudio (ha)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="273"/>
+        <source>study area (ha)</source>
+        <translation>área de estudio (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="276" />
-      <source>frame (ha)</source>
-      <translation>marco (ha)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="273"/>
+        <source>frame (ha)</source>
+        <translation>marco (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="277" />
-      <source>kept</source>
-      <translation>conservado</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="273"/>
+        <source>kept</source>
+        <translation>conservado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="280" />
-      <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
-      <translation>Las estimaciones de un muestreo sobre este marco valen solo para el marco ({ha} ha), no para toda el área de estudio.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="278"/>
+        <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
+        <translation>Las estimaciones de un muestreo sobre este marco valen solo para el marco ({ha} ha), no para toda el área de estudio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="283" />
-      <source>Area kept and area lost to each rule</source>
-      <translation>Área conservada y área perdida por cada regla</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="282"/>
+        <source>Area kept and area lost to each rule</source>
+        <translation>Área conservada y área perdida por cada regla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="285" />
-      <source>lost to the excluded polygons (EXCLUDE)</source>
-      <translation>perdida por los polígonos excluidos (EXCLUDE)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="284"/>
+        <source>lost to the excluded polygons (EXCLUDE)</source>
+        <translation>perdida por los polígonos excluidos (EXCLUDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="286" />
-      <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
-      <translation>perdida por la máscara ráster (MASK fuera del intervalo aceptado, o NoData)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="285"/>
+        <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
+        <translation>perdida por la máscara ráster (MASK fuera del intervalo aceptado, o NoData)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="287" />
-      <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
-      <translation>perdida por la franja interior del borde (EDGE_BUFFER)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="286"/>
+        <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
+        <translation>perdida por la franja interior del borde (EDGE_BUFFER)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="289" />
-      <source>study area</source>
-      <translation>área de estudio</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="288"/>
+        <source>study area</source>
+        <translation>área de estudio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="292" />
-      <source>sampling frame (kept)</source>
-      <translation>marco de muestreo (conservado)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="291"/>
+        <source>sampling frame (kept)</source>
+        <translation>marco de muestreo (conservado)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="293" />
-      <location filename="../processing/algorithms/buildframe.py" line="300" />
-      <source>Item</source>
-      <translation>Elemento</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>Item</source>
+        <translation>Elemento</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="293" />
-      <source>Area (ha)</source>
-      <translation>Área (ha)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="292"/>
+        <source>Area (ha)</source>
+        <translation>Área (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="293" />
-      <source>% of study area</source>
-      <translation>% del área de estudio</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="292"/>
+        <source>% of study area</source>
+        <translation>% del área de estudio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="295" />
-      <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
-      <translation>Las reglas se aplican en el orden mostrado; a cada una solo se le imputa el área que seguía en el marco, de modo que el marco y las áreas perdidas suman el área de estudio.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="293"/>
+        <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
+        <translation>Las reglas se aplican en el orden mostrado; a cada una solo se le imputa el área que seguía en el marco, de modo que el marco y las áreas perdidas suman el área de estudio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="299" />
-      <source>Mask raster</source>
-      <translation>Ráster de máscara</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="298"/>
+        <source>Mask raster</source>
+        <translation>Ráster de máscara</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="300" />
-      <source>Value</source>
-      <translation>Valor</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>Value</source>
+        <translation>Valor</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="301" />
-      <source>cells tested over the study area's extent</source>
-      <translation>celdas comprobadas en la extensión del área de estudio</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cells tested over the study area&apos;s extent</source>
+        <translation>celdas comprobadas en la extensión del área de estudio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="302" />
-      <source>cell size (m)</source>
-      <translation>tamaño de celda (m)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cell size (m)</source>
+        <translation>tamaño de celda (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="303" />
-      <source>cells below the lowest accepted value</source>
-      <translation>celdas por debajo del valor mínimo aceptado</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cells below the lowest accepted value</source>
+        <translation>celdas por debajo del valor mínimo aceptado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="304" />
-      <source>cells above the highest accepted value</source>
-      <translation>celdas por encima del valor máximo aceptado</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cells above the highest accepted value</source>
+        <translation>celdas por encima del valor máximo aceptado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="305" />
-      <source>NoData cells (including cells outside the raster)</source>
-      <translation>celdas NoData (incluidas las celdas fuera del ráster)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>NoData cells (including cells outside the raster)</source>
+        <translation>celdas NoData (incluidas las celdas fuera del ráster)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="306" />
-      <source>reprojected on the fly (nearest neighbour)</source>
-      <translation>reproyectado al vuelo (vecino más próximo)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>reprojected on the fly (nearest neighbour)</source>
+        <translation>reproyectado al vuelo (vecino más próximo)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="306" />
-      <source>yes</source>
-      <translation>sí</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>yes</source>
+        <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="306" />
-      <source>no</source>
-      <translation>no</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>no</source>
+        <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="309" />
-      <source>Map</source>
-      <translation>Mapa</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="308"/>
+        <source>Map</source>
+        <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="310" />
-      <source>Frame (filled), with the areas lost to each rule</source>
-      <translation>Marco (relleno), con las áreas perdidas por cada regla</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="309"/>
+        <source>Frame (filled), with the areas lost to each rule</source>
+        <translation>Marco (relleno), con las áreas perdidas por cada regla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="313" />
-      <source>(none)</source>
-      <translation>(ninguno)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="312"/>
+        <source>(none)</source>
+        <translation>(ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="317" />
-      <source>, projected from {src} (UTM zone of the study area's centre)</source>
-      <translation>, proyectado desde {src} (zona UTM del centro del área de estudio)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="316"/>
+        <source>, projected from {src} (UTM zone of the study area&apos;s centre)</source>
+        <translation>, proyectado desde {src} (zona UTM del centro del área de estudio)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="319" />
-      <source>Study area (INPUT)</source>
-      <translation>Área de estudio (INPUT)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Study area (INPUT)</source>
+        <translation>Área de estudio (INPUT)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="320" />
-      <source>Areas to exclude (EXCLUDE)</source>
-      <translation>Zonas que excluir (EXCLUDE)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Areas to exclude (EXCLUDE)</source>
+        <translation>Zonas que excluir (EXCLUDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="321" />
-      <source>Mask raster (MASK)</source>
-      <translation>Ráster de máscara (MASK)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Mask raster (MASK)</source>
+        <translation>Ráster de máscara (MASK)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="322" />
-      <source>Lowest accepted mask value (MASK_MIN)</source>
-      <translation>Valor mínimo aceptado de la máscara (MASK_MIN)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Lowest accepted mask value (MASK_MIN)</source>
+        <translation>Valor mínimo aceptado de la máscara (MASK_MIN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="323" />
-      <source>Highest accepted mask value (MASK_MAX)</source>
-      <translation>Valor máximo aceptado de la máscara (MASK_MAX)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Highest accepted mask value (MASK_MAX)</source>
+        <translation>Valor máximo aceptado de la máscara (MASK_MAX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="324" />
-      <source>Inward edge buffer (EDGE_BUFFER, m)</source>
-      <translation>Franja interior del borde (EDGE_BUFFER, m)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Inward edge buffer (EDGE_BUFFER, m)</source>
+        <translation>Franja interior del borde (EDGE_BUFFER, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="325" />
-      <source>CRS of the computation and the output</source>
-      <translation>SRC del cálculo y de la salida</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>CRS of the computation and the output</source>
+        <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="360" />
-      <source>sampling frame</source>
-      <translation>marco de muestreo</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="358"/>
+        <source>sampling frame</source>
+        <translation>marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="362" />
-      <source>excluded polygons</source>
-      <translation>polígonos excluidos</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="361"/>
+        <source>excluded polygons</source>
+        <translation>polígonos excluidos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="366" />
-      <source>raster mask</source>
-      <translation>máscara ráster</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="365"/>
+        <source>raster mask</source>
+        <translation>máscara ráster</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="368" />
-      <source>study area boundary</source>
-      <translation>límite del área de estudio</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="367"/>
+        <source>study area boundary</source>
+        <translation>límite del área de estudio</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>CompareDesigns</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="80" />
-      <source>Compare survey designs by simulation</source>
-      <translation>Comparar diseños de muestreo por simulación</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="80"/>
+        <source>Compare survey designs by simulation</source>
+        <translation>Comparar diseños de muestreo por simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>simple random</source>
-      <translation>aleatorio simple</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>stratified proportional</source>
-      <translation>estratificado proporcional</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>stratified Neyman</source>
-      <translation>estratificado Neyman</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>systematic grid</source>
-      <translation>cuadrícula sistemática</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>spatially balanced</source>
-      <translation>espacialmente equilibrado</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
-      <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
+        <location filename="../processing/algorithms/comparedesigns.py" line="87"/>
+        <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
 
@@ -822,7 +792,7 @@ Output table, one row per design: rel_bias (relative bias against each populatio
 Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
 
 The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-      <translation>Antes del trabajo de campo: ¿qué diseño, y cuántas unidades, dan una estimación útil en esta zona? El algoritmo simula muchos muestreos de una superficie de densidad plausible e informa de cómo le fue a cada diseño.
+        <translation>Antes del trabajo de campo: ¿qué diseño, y cuántas unidades, dan una estimación útil en esta zona? El algoritmo simula muchos muestreos de una superficie de densidad plausible e informa de cómo le fue a cada diseño.
 
 Superficie: un ráster de animales esperados por km² (de un modelo de hábitat, un mapa de expertos o un muestreo anterior), reproyectado al SRC del marco cuando hace falta. Marco: el marco de muestreo. Estratos (opcionales, con el campo de estrato, 'stratum' por defecto): necesarios para los dos diseños estratificados.
 
@@ -839,783 +809,769 @@ Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación
 La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="123" />
-      <source>Density surface (expected animals per km²)</source>
-      <translation>Superficie de densidad (animales esperados por km²)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="123"/>
+        <source>Density surface (expected animals per km²)</source>
+        <translation>Superficie de densidad (animales esperados por km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="125" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
-      <source>Sampling frame</source>
-      <translation>Marco de muestreo</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="373"/>
+        <source>Sampling frame</source>
+        <translation>Marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="129" />
-      <source>Strata (for the stratified designs)</source>
-      <translation>Estratos (para los diseños estratificados)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="127"/>
+        <source>Strata (for the stratified designs)</source>
+        <translation>Estratos (para los diseños estratificados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="134" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
-      <source>Stratum field</source>
-      <translation>Campo de estrato</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
+        <source>Stratum field</source>
+        <translation>Campo de estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
-      <source>Designs to compare</source>
-      <translation>Diseños que comparar</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Designs to compare</source>
+        <translation>Diseños que comparar</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
-      <source>Simple random</source>
-      <translation>Aleatorio simple</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Simple random</source>
+        <translation>Aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
-      <source>Stratified, proportional allocation</source>
-      <translation>Estratificado, asignación proporcional</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Stratified, proportional allocation</source>
+        <translation>Estratificado, asignación proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
-      <source>Stratified, Neyman allocation</source>
-      <translation>Estratificado, asignación de Neyman</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Stratified, Neyman allocation</source>
+        <translation>Estratificado, asignación de Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
-      <source>Systematic grid</source>
-      <translation>Cuadrícula sistemática</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Systematic grid</source>
+        <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
-      <source>Spatially balanced</source>
-      <translation>Espacialmente equilibrado</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Spatially balanced</source>
+        <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="147" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
-      <source>Number of units</source>
-      <translation>Número de unidades</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="383"/>
+        <source>Number of units</source>
+        <translation>Número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
-      <source>Unit shape</source>
-      <translation>Forma de la unidad</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Unit shape</source>
+        <translation>Forma de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Point station</source>
-      <translation>Estación puntual</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Point station</source>
+        <translation>Estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Square plot</source>
-      <translation>Parcela cuadrada</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Square plot</source>
+        <translation>Parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Circular plot</source>
-      <translation>Parcela circular</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Circular plot</source>
+        <translation>Parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Line transect</source>
-      <translation>Transecto lineal</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Line transect</source>
+        <translation>Transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="159" />
-      <source>Unit size (m): counting radius, side, radius or transect length</source>
-      <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
+        <source>Unit size (m): counting radius, side, radius or transect length</source>
+        <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="165" />
-      <source>Half-width of a transect's counting strip (m)</source>
-      <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
+        <source>Half-width of a transect&apos;s counting strip (m)</source>
+        <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="171" />
-      <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
-      <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
+        <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
+        <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="177" />
-      <source>Keep units wholly inside their stratum (as the layout's option)</source>
-      <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
+        <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
+        <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="183" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
-      <source>Simulated surveys per design</source>
-      <translation>Muestreos simulados por diseño</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="384"/>
+        <source>Simulated surveys per design</source>
+        <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="189" />
-      <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
-      <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="187"/>
+        <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
+        <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
-      <source>Variance estimator for the grid and balanced designs</source>
-      <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <source>Variance estimator for the grid and balanced designs</source>
+        <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
-      <source>Simple random sampling formula</source>
-      <translation>Fórmula del muestreo aleatorio simple</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <source>Simple random sampling formula</source>
+        <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
-      <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
-      <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
+        <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="202" />
-      <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
-      <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="200"/>
+        <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
+        <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="208" />
-      <source>Design comparison</source>
-      <translation>Comparación de diseños</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="207"/>
+        <source>Design comparison</source>
+        <translation>Comparación de diseños</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
-      <source>Recommended design</source>
-      <translation>Diseño recomendado</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
+        <source>Recommended design</source>
+        <translation>Diseño recomendado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="217" />
-      <source>The density surface could not be opened.</source>
-      <translation>No se pudo abrir la superficie de densidad.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="217"/>
+        <source>The density surface could not be opened.</source>
+        <translation>No se pudo abrir la superficie de densidad.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
-      <source>The sampling frame could not be opened.</source>
-      <translation>No se pudo abrir el marco de muestreo.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
+        <source>The sampling frame could not be opened.</source>
+        <translation>No se pudo abrir el marco de muestreo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="226" />
-      <source>Layer '{layer}' has no polygon with an area.</source>
-      <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="225"/>
+        <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
+        <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="240" />
-      <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
-      <translation>La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
+        <translation>La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="251" />
-      <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
-      <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
+        <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
+        <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="261" />
-      <source>No strata were given: the stratified designs are left out ({names}).</source>
-      <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="261"/>
+        <source>No strata were given: the stratified designs are left out ({names}).</source>
+        <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="266" />
-      <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
-      <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="265"/>
+        <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
+        <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="283" />
-      <source>Reading the density surface…</source>
-      <translation>Leyendo la superficie de densidad…</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
+        <source>Reading the density surface…</source>
+        <translation>Leyendo la superficie de densidad…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="289" />
-      <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
-      <translation>La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="289"/>
+        <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
+        <translation>La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="314" />
-      <source>Simulating {n} units…</source>
-      <translation>Simulando {n} unidades…</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
+        <source>Simulating {n} units…</source>
+        <translation>Simulando {n} unidades…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="320" />
-      <source>{n} units were left out of the range: {why}</source>
-      <translation>{n} unidades quedaron fuera del rango: {why}</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="320"/>
+        <source>{n} units were left out of the range: {why}</source>
+        <translation>{n} unidades quedaron fuera del rango: {why}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="327" />
-      <source>The output table could not be created.</source>
-      <translation>No se pudo crear la tabla de salida.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="327"/>
+        <source>The output table could not be created.</source>
+        <translation>No se pudo crear la tabla de salida.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="344" />
-      <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
-      <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="344"/>
+        <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
+        <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="353" />
-      <source>Survey designs compared by simulation</source>
-      <translation>Diseños de muestreo comparados por simulación</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="352"/>
+        <source>Survey designs compared by simulation</source>
+        <translation>Diseños de muestreo comparados por simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="359" />
-      <source>recommended design</source>
-      <translation>diseño recomendado</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="358"/>
+        <source>recommended design</source>
+        <translation>diseño recomendado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="360" />
-      <source>its RMSE (animals)</source>
-      <translation>su RECM (animales)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
+        <source>its RMSE (animals)</source>
+        <translation>su RECM (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
-      <source>its RMSE relative to the total</source>
-      <translation>su RECM relativa al total</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="360"/>
+        <source>its RMSE relative to the total</source>
+        <translation>su RECM relativa al total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
-      <source>its 95 % interval coverage</source>
-      <translation>cobertura de sus intervalos al 95 %</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="361"/>
+        <source>its 95 % interval coverage</source>
+        <translation>cobertura de sus intervalos al 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="364" />
-      <source>expected animals in the frame</source>
-      <translation>animales esperados en el marco</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="363"/>
+        <source>expected animals in the frame</source>
+        <translation>animales esperados en el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>point station</source>
-      <translation>estación puntual</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>point station</source>
+        <translation>estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>square plot</source>
-      <translation>parcela cuadrada</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>square plot</source>
+        <translation>parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>circular plot</source>
-      <translation>parcela circular</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>circular plot</source>
+        <translation>parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>line transect</source>
-      <translation>transecto lineal</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>line transect</source>
+        <translation>transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>counting radius</source>
-      <translation>radio de conteo</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>counting radius</source>
+        <translation>radio de conteo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>side</source>
-      <translation>lado</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>side</source>
+        <translation>lado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>radius</source>
-      <translation>radio</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>radius</source>
+        <translation>radio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>length</source>
-      <translation>longitud</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>length</source>
+        <translation>longitud</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
-      <source>, strip half-width {w:g} m</source>
-      <translation>, semianchura de franja {w:g} m</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="370"/>
+        <source>, strip half-width {w:g} m</source>
+        <translation>, semianchura de franja {w:g} m</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
-      <source>Density surface</source>
-      <translation>Superficie de densidad</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="372"/>
+        <source>Density surface</source>
+        <translation>Superficie de densidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="476" />
-      <source>Strata</source>
-      <translation>Estratos</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="474"/>
+        <source>Strata</source>
+        <translation>Estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
-      <source>none</source>
-      <translation>ninguno</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
+        <source>none</source>
+        <translation>ninguno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
-      <source>feature id</source>
-      <translation>identificador de entidad</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
+        <source>feature id</source>
+        <translation>identificador de entidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
-      <source>Computation CRS</source>
-      <translation>SRC de cálculo</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="376"/>
+        <source>Computation CRS</source>
+        <translation>SRC de cálculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
-      <source>Surface cell</source>
-      <translation>Celda de la superficie</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="377"/>
+        <source>Surface cell</source>
+        <translation>Celda de la superficie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
-      <source>Sub-cells per cell side (for counting)</source>
-      <translation>Subceldas por lado de celda (para el conteo)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="378"/>
+        <source>Sub-cells per cell side (for counting)</source>
+        <translation>Subceldas por lado de celda (para el conteo)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
-      <source>Unit</source>
-      <translation>Unidad</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="379"/>
+        <source>Unit</source>
+        <translation>Unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
-      <source>Counted area per unit (m²)</source>
-      <translation>Área contada por unidad (m²)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="380"/>
+        <source>Counted area per unit (m²)</source>
+        <translation>Área contada por unidad (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
-      <source>Bearing</source>
-      <translation>Rumbo</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
+        <source>Bearing</source>
+        <translation>Rumbo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
-      <source>random</source>
-      <translation>aleatorio</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
+        <source>random</source>
+        <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
-      <source>Units wholly inside their stratum</source>
-      <translation>Unidades por completo dentro de su estrato</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
+        <source>Units wholly inside their stratum</source>
+        <translation>Unidades por completo dentro de su estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
-      <source>yes</source>
-      <translation>sí</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
+        <source>yes</source>
+        <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
-      <source>no</source>
-      <translation>no</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
+        <source>no</source>
+        <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
-      <source>Counts per cell</source>
-      <translation>Conteos por celda</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
+        <source>Counts per cell</source>
+        <translation>Conteos por celda</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
-      <source>negative binomial, k = {k:g}</source>
-      <translation>binomial negativa, k = {k:g}</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
+        <source>negative binomial, k = {k:g}</source>
+        <translation>binomial negativa, k = {k:g}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
-      <source>Poisson</source>
-      <translation>Poisson</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
+        <source>Poisson</source>
+        <translation>Poisson</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
-      <source>Variance estimator (grid, balanced)</source>
-      <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
+        <source>Variance estimator (grid, balanced)</source>
+        <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
-      <source>local neighbourhood</source>
-      <translation>vecindario local</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
+        <source>local neighbourhood</source>
+        <translation>vecindario local</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
-      <source>simple random sampling formula</source>
-      <translation>fórmula del muestreo aleatorio simple</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
+        <source>simple random sampling formula</source>
+        <translation>fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
-      <source>Confidence level</source>
-      <translation>Nivel de confianza</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="389"/>
+        <source>Confidence level</source>
+        <translation>Nivel de confianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="391" />
-      <source>Seed</source>
-      <translation>Semilla</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="390"/>
+        <source>Seed</source>
+        <translation>Semilla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="396" />
-      <source>How the designs did at {n} units</source>
-      <translation>Resultados de los diseños con {n} unidades</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="395"/>
+        <source>How the designs did at {n} units</source>
+        <translation>Resultados de los diseños con {n} unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Design</source>
-      <translation>Diseño</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Design</source>
+        <translation>Diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Mean units surveyed</source>
-      <translation>Media de unidades muestreadas</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Mean units surveyed</source>
+        <translation>Media de unidades muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Relative bias</source>
-      <translation>Sesgo relativo</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Relative bias</source>
+        <translation>Sesgo relativo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Empirical SE (animals)</source>
-      <translation>Error estándar empírico (animales)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Empirical SE (animals)</source>
+        <translation>Error estándar empírico (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="508" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="513" />
-      <source>RMSE (animals)</source>
-      <translation>RECM (animales)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="510"/>
+        <source>RMSE (animals)</source>
+        <translation>RECM (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <source>± Monte Carlo SE</source>
-      <translation>± error estándar de Monte Carlo</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
+        <source>± Monte Carlo SE</source>
+        <translation>± error estándar de Monte Carlo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <source>RMSE / total</source>
-      <translation>RECM / total</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
+        <source>RMSE / total</source>
+        <translation>RECM / total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <source>Mean estimated CV</source>
-      <translation>CV estimado medio</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
+        <source>Mean estimated CV</source>
+        <translation>CV estimado medio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="399" />
-      <source>95 % interval coverage</source>
-      <translation>Cobertura de los intervalos al 95 %</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
+        <source>95 % interval coverage</source>
+        <translation>Cobertura de los intervalos al 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="399" />
-      <source>Surveys without an estimate</source>
-      <translation>Muestreos sin estimación</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
+        <source>Surveys without an estimate</source>
+        <translation>Muestreos sin estimación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="411" />
-      <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-      <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="410"/>
+        <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
+        <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="418" />
-      <source>RMSE of the abundance (animals)</source>
-      <translation>RECM de la abundancia (animales)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
+        <source>RMSE of the abundance (animals)</source>
+        <translation>RECM de la abundancia (animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="420" />
-      <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-      <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
+        <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
+        <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="422" />
-      <source>Recommendation</source>
-      <translation>Recomendación</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="421"/>
+        <source>Recommendation</source>
+        <translation>Recomendación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="424" />
-      <source>No design gave estimates: see the warnings.</source>
-      <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="423"/>
+        <source>No design gave estimates: see the warnings.</source>
+        <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="426" />
-      <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-      <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="425"/>
+        <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
+        <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="432" />
-      <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-      <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="431"/>
+        <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
+        <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="439" />
-      <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-      <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="438"/>
+        <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
+        <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="444" />
-      <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-      <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="443"/>
+        <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
+        <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="453" />
-      <source>How the simulation works</source>
-      <translation>Cómo funciona la simulación</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="452"/>
+        <source>How the simulation works</source>
+        <translation>Cómo funciona la simulación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="454" />
-      <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-      <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="453"/>
+        <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
+        <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="463" />
-      <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-      <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="462"/>
+        <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
+        <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>Stratum</source>
-      <translation>Estrato</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>Stratum</source>
+        <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>Area (km²)</source>
-      <translation>Área (km²)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>Area (km²)</source>
+        <translation>Área (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>Mean expected count per unit</source>
-      <translation>Conteo esperado medio por unidad</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>Mean expected count per unit</source>
+        <translation>Conteo esperado medio por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>S_h (count SD per unit)</source>
-      <translation>S_h (DE del conteo por unidad)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>S_h (count SD per unit)</source>
+        <translation>S_h (DE del conteo por unidad)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="481" />
-      <source>Units, proportional</source>
-      <translation>Unidades, proporcional</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="479"/>
+        <source>Units, proportional</source>
+        <translation>Unidades, proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="483" />
-      <source>Units, Neyman</source>
-      <translation>Unidades, Neyman</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="481"/>
+        <source>Units, Neyman</source>
+        <translation>Unidades, Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="493" />
-      <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-      <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="491"/>
+        <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
+        <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="501" />
-      <source>RMSE against the number of units</source>
-      <translation>RECM frente al número de unidades</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="498"/>
+        <source>RMSE against the number of units</source>
+        <translation>RECM frente al número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="508" />
-      <source>number of units</source>
-      <translation>número de unidades</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
+        <source>number of units</source>
+        <translation>número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="509" />
-      <source>RMSE of the abundance estimate against the number of units</source>
-      <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
+        <source>RMSE of the abundance estimate against the number of units</source>
+        <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="511" />
-      <source>Units</source>
-      <translation>Unidades</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="508"/>
+        <source>Units</source>
+        <translation>Unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="519" />
-      <source>{a} → {b} units: RMSE {change:+.0%}</source>
-      <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="516"/>
+        <source>{a} → {b} units: RMSE {change:+.0%}</source>
+        <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="520" />
-      <source>For {name}: </source>
-      <translation>Para {name}: </translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="517"/>
+        <source>For {name}: </source>
+        <translation>Para {name}: </translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="521" />
-      <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-      <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="518"/>
+        <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
+        <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>DemoReserve</name>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="34" />
-      <source>Demo reserve with a simulated population</source>
-      <translation>Reserva de demostración con una población simulada</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="34"/>
+        <source>Demo reserve with a simulated population</source>
+        <translation>Reserva de demostración con una población simulada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="37" />
-      <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Construye Hollin Ridge Reserve, una reserva de montaña inventada para demostraciones, formación y pruebas, y una población simulada de velmar, un antílope herbívoro inventado. Nada de ello describe un lugar o una especie reales.&lt;/p&gt;&lt;p&gt;La reserva abarca 250–350 km² en WGS 84 / UTM zona 36S, con un límite irregular, un lago y un enclave privado (ambos en la capa de zonas excluidas), un ráster de altitud (relieve fractal sintético con un escarpe abrupto) y un ráster de verdor (un índice de vegetación de 0 a 1, correlacionado con la altitud, más ruido).&lt;/p&gt;&lt;p&gt;Los velmar viven en grupos: un proceso de conglomerados de Thomas no homogéneo cuyos centros de grupo son más densos donde el verdor es alto y la altitud baja. El total verdadero se conoce, y el número esperado de animales por km² se escribe como ráster, para poder contrastar los diseños de muestreo y las estimaciones con la verdad.&lt;/p&gt;&lt;h3&gt;Parámetros&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: la misma semilla da la misma reserva y los mismos animales. 0 sortea una y la registra.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Tamaño de celda del ráster&lt;/b&gt;: metros, de 10 a 500 (50 por defecto).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Límite de la reserva (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zonas excluidas (&lt;i&gt;kind&lt;/i&gt; lake o inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rásteres de altitud (m), verdor (0–1) y velmar esperados por km²&lt;/li&gt;&lt;li&gt;Animales (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un informe HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Referencias: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="37"/>
+        <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Construye Hollin Ridge Reserve, una reserva de montaña inventada para demostraciones, formación y pruebas, y una población simulada de velmar, un antílope herbívoro inventado. Nada de ello describe un lugar o una especie reales.&lt;/p&gt;&lt;p&gt;La reserva abarca 250–350 km² en WGS 84 / UTM zona 36S, con un límite irregular, un lago y un enclave privado (ambos en la capa de zonas excluidas), un ráster de altitud (relieve fractal sintético con un escarpe abrupto) y un ráster de verdor (un índice de vegetación de 0 a 1, correlacionado con la altitud, más ruido).&lt;/p&gt;&lt;p&gt;Los velmar viven en grupos: un proceso de conglomerados de Thomas no homogéneo cuyos centros de grupo son más densos donde el verdor es alto y la altitud baja. El total verdadero se conoce, y el número esperado de animales por km² se escribe como ráster, para poder contrastar los diseños de muestreo y las estimaciones con la verdad.&lt;/p&gt;&lt;h3&gt;Parámetros&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: la misma semilla da la misma reserva y los mismos animales. 0 sortea una y la registra.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Tamaño de celda del ráster&lt;/b&gt;: metros, de 10 a 500 (50 por defecto).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Límite de la reserva (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zonas excluidas (&lt;i&gt;kind&lt;/i&gt; lake o inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rásteres de altitud (m), verdor (0–1) y velmar esperados por km²&lt;/li&gt;&lt;li&gt;Animales (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un informe HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Referencias: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="65" />
-      <location filename="../processing/algorithms/demoreserve.py" line="148" />
-      <source>Raster cell size (m)</source>
-      <translation>Tamaño de celda del ráster (m)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Raster cell size (m)</source>
+        <translation>Tamaño de celda del ráster (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="69" />
-      <source>Reserve boundary</source>
-      <translation>Límite de la reserva</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="69"/>
+        <source>Reserve boundary</source>
+        <translation>Límite de la reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="70" />
-      <source>Excluded areas (lake, inholding)</source>
-      <translation>Zonas excluidas (lago, enclave)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="70"/>
+        <source>Excluded areas (lake, inholding)</source>
+        <translation>Zonas excluidas (lago, enclave)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="71" />
-      <source>Elevation (m)</source>
-      <translation>Altitud (m)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="71"/>
+        <source>Elevation (m)</source>
+        <translation>Altitud (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="72" />
-      <source>Greenness (0–1)</source>
-      <translation>Verdor (0–1)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="72"/>
+        <source>Greenness (0–1)</source>
+        <translation>Verdor (0–1)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="73" />
-      <source>Expected animals per km²</source>
-      <translation>Animales esperados por km²</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="73"/>
+        <source>Expected animals per km²</source>
+        <translation>Animales esperados por km²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="74" />
-      <source>Simulated animals</source>
-      <translation>Animales simulados</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="74"/>
+        <source>Simulated animals</source>
+        <translation>Animales simulados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="76" />
-      <source>True number of animals</source>
-      <translation>Número verdadero de animales</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="76"/>
+        <source>True number of animals</source>
+        <translation>Número verdadero de animales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="77" />
-      <source>Expected number of animals</source>
-      <translation>Número esperado de animales</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
+        <source>Expected number of animals</source>
+        <translation>Número esperado de animales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="120" />
-      <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
-      <translation>{name}: {area:,.1f} km², {n:,} velmar en {g:,} grupos (esperados: {e:,.0f}).</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="119"/>
+        <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
+        <translation>{name}: {area:,.1f} km², {n:,} velmar en {g:,} grupos (esperados: {e:,.0f}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="136" />
-      <source>Demo reserve: {name}</source>
-      <translation>Reserva de demostración: {name}</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="136"/>
+        <source>Demo reserve: {name}</source>
+        <translation>Reserva de demostración: {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="137" />
-      <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
-      <translation>Datos inventados para demostraciones, formación y pruebas. {name} y el velmar ({desc}) no existen.</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="137"/>
+        <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
+        <translation>Datos inventados para demostraciones, formación y pruebas. {name} y el velmar ({desc}) no existen.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="139" />
-      <source>an invented grazing antelope that lives in loose groups</source>
-      <translation>un antílope herbívoro inventado que vive en grupos laxos</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>reserve area</source>
+        <translation>superficie de la reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="141" />
-      <source>reserve area</source>
-      <translation>superficie de la reserva</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>true number of velmar</source>
+        <translation>número verdadero de velmar</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="142" />
-      <source>true number of velmar</source>
-      <translation>número verdadero de velmar</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>expected number</source>
+        <translation>número esperado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="143" />
-      <source>expected number</source>
-      <translation>número esperado</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>groups</source>
+        <translation>grupos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="144" />
-      <source>groups</source>
-      <translation>grupos</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Seed</source>
+        <translation>Semilla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="147" />
-      <source>Seed</source>
-      <translation>Semilla</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>CRS</source>
+        <translation>SRC</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="149" />
-      <source>CRS</source>
-      <translation>SRC</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Mean group size (mu)</source>
+        <translation>Tamaño medio de los grupos (mu)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="150" />
-      <source>Mean group size (mu)</source>
-      <translation>Tamaño medio de los grupos (mu)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Group spread, SD of members around the centre (m)</source>
+        <translation>Dispersión de los grupos, desviación estándar de los miembros alrededor del centro (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="151" />
-      <source>Group spread, SD of members around the centre (m)</source>
-      <translation>Dispersión de los grupos, desviación estándar de los miembros alrededor del centro (m)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="153"/>
+        <source>Areas</source>
+        <translation>Zonas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="153" />
-      <source>Areas</source>
-      <translation>Zonas</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Part</source>
+        <translation>Parte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="155" />
-      <source>Part</source>
-      <translation>Parte</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Area (km²)</source>
+        <translation>Área (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="155" />
-      <source>Area (km²)</source>
-      <translation>Área (km²)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Reserve</source>
+        <translation>Reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="156" />
-      <location filename="../processing/algorithms/demoreserve.py" line="163" />
-      <source>Reserve</source>
-      <translation>Reserva</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Lake (excluded)</source>
+        <translation>Lago (excluido)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="156" />
-      <source>Lake (excluded)</source>
-      <translation>Lago (excluido)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Private inholding (excluded)</source>
+        <translation>Enclave privado (excluido)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="157" />
-      <source>Private inholding (excluded)</source>
-      <translation>Enclave privado (excluido)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="159"/>
+        <source>Map</source>
+        <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="159" />
-      <source>Map</source>
-      <translation>Mapa</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Lake</source>
+        <translation>Lago</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="164" />
-      <source>Lake</source>
-      <translation>Lago</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Private inholding</source>
+        <translation>Enclave privado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="165" />
-      <source>Private inholding</source>
-      <translation>Enclave privado</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Velmar (every third animal)</source>
+        <translation>Velmar (uno de cada tres animales)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="167" />
-      <source>Velmar (every third animal)</source>
-      <translation>Velmar (uno de cada tres animales)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
+        <translation>Hollin Ridge Reserve, las zonas excluidas y los animales simulados.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="168" />
-      <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
-      <translation>Hollin Ridge Reserve, las zonas excluidas y los animales simulados.</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="169"/>
+        <source>How the population was simulated</source>
+        <translation>Cómo se simuló la población</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="169" />
-      <source>How the population was simulated</source>
-      <translation>Cómo se simuló la población</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="170"/>
+        <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
+        <translation>Los centros de grupo forman un proceso de Poisson no homogéneo sobre el hábitat (la reserva sin el lago); su intensidad es proporcional a exp(0,9 × verdor estandarizado − 0,6 × altitud estandarizada). Cada grupo tiene un número de miembros de Poisson (media {mu:g}) dispersos alrededor de su centro con un desplazamiento normal de {sigma:g} m; los miembros que caen fuera del hábitat no forman parte de la población. Es un proceso de conglomerados de Thomas. Su total esperado y su varianza se calculan a partir de la superficie de intensidad en la malla del ráster.</translation>
     </message>
-    <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="170" />
-      <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
-      <translation>Los centros de grupo forman un proceso de Poisson no homogéneo sobre el hábitat (la reserva sin el lago); su intensidad es proporcional a exp(0,9 × verdor estandarizado − 0,6 × altitud estandarizada). Cada grupo tiene un número de miembros de Poisson (media {mu:g}) dispersos alrededor de su centro con un desplazamiento normal de {sigma:g} m; los miembros que caen fuera del hábitat no forman parte de la población. Es un proceso de conglomerados de Thomas. Su total esperado y su varianza se calculan a partir de la superficie de intensidad en la malla del ráster.</translation>
-    </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>Estimate</name>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="108" />
-      <source>Estimate density and abundance</source>
-      <translation>Estimar la densidad y la abundancia</translation>
+        <location filename="../processing/algorithms/estimate.py" line="108"/>
+        <source>Estimate density and abundance</source>
+        <translation>Estimar la densidad y la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="111" />
-      <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
+        <location filename="../processing/algorithms/estimate.py" line="111"/>
+        <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
 
 Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
 
@@ -1638,7 +1594,7 @@ Target CV (above 0): n_next is the number of units each stratum needs next time 
 True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
 
 Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-      <translation>Estima la densidad y la abundancia por estrato y para todo el marco de muestreo a partir de los conteos en las unidades de muestreo, con error estándar, coeficiente de variación (CV) e intervalo de confianza, y el tamaño de muestra que necesita el próximo muestreo.
+        <translation>Estima la densidad y la abundancia por estrato y para todo el marco de muestreo a partir de los conteos en las unidades de muestreo, con error estándar, coeficiente de variación (CV) e intervalo de confianza, y el tamaño de muestra que necesita el próximo muestreo.
 
 Estimador: D_h = Σy / Σa por estrato (el estimador de razón; con unidades iguales, el conteo medio dividido por el área de la unidad), con su varianza linealizada (Cochran 1977, cap. 5 y 6); abundancia N_h = D_h·A_h; en total N = Σ N_h y D = N / Σ A_h, sumando las varianzas. La corrección por población finita 1 − Σa/A_h se aplica cuando se pide.
 
@@ -1663,837 +1619,814 @@ Total verdadero: solo para simulaciones y formación. El informe lo muestra ento
 Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="157" />
-      <source>Sample units with counts</source>
-      <translation>Unidades de muestreo con conteos</translation>
+        <location filename="../processing/algorithms/estimate.py" line="156"/>
+        <source>Sample units with counts</source>
+        <translation>Unidades de muestreo con conteos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="159" />
-      <location filename="../processing/algorithms/estimate.py" line="491" />
-      <source>Count field</source>
-      <translation>Campo de conteo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="490"/>
+        <source>Count field</source>
+        <translation>Campo de conteo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="161" />
-      <source>Stratum field of the units</source>
-      <translation>Campo de estrato de las unidades</translation>
+        <location filename="../processing/algorithms/estimate.py" line="160"/>
+        <source>Stratum field of the units</source>
+        <translation>Campo de estrato de las unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="164" />
-      <source>Unit area field (m²)</source>
-      <translation>Campo de área de la unidad (m²)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
+        <source>Unit area field (m²)</source>
+        <translation>Campo de área de la unidad (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="167" />
-      <source>Fixed unit area for points and lines (m²; 0: not used)</source>
-      <translation>Área fija de la unidad para puntos y líneas (m²; 0: no se usa)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="166"/>
+        <source>Fixed unit area for points and lines (m²; 0: not used)</source>
+        <translation>Área fija de la unidad para puntos y líneas (m²; 0: no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="170" />
-      <source>Strip width of line transects (m, full width; 0: not used)</source>
-      <translation>Ancho de franja de los transectos lineales (m, ancho total; 0: no se usa)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="169"/>
+        <source>Strip width of line transects (m, full width; 0: not used)</source>
+        <translation>Ancho de franja de los transectos lineales (m, ancho total; 0: no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="173" />
-      <source>Strata (the frame)</source>
-      <translation>Estratos (el marco)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="172"/>
+        <source>Strata (the frame)</source>
+        <translation>Estratos (el marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="175" />
-      <source>Stratum id field of the strata</source>
-      <translation>Campo identificador de los estratos</translation>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <source>Stratum id field of the strata</source>
+        <translation>Campo identificador de los estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="178" />
-      <location filename="../processing/algorithms/estimate.py" line="500" />
-      <source>Confidence level</source>
-      <translation>Nivel de confianza</translation>
+        <location filename="../processing/algorithms/estimate.py" line="499"/>
+        <source>Confidence level</source>
+        <translation>Nivel de confianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="181" />
-      <source>Confidence interval</source>
-      <translation>Intervalo de confianza</translation>
+        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <source>Confidence interval</source>
+        <translation>Intervalo de confianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="182" />
-      <location filename="../processing/algorithms/estimate.py" line="485" />
-      <source>t with Satterthwaite degrees of freedom</source>
-      <translation>t con los grados de libertad de Satterthwaite</translation>
+        <location filename="../processing/algorithms/estimate.py" line="484"/>
+        <source>t with Satterthwaite degrees of freedom</source>
+        <translation>t con los grados de libertad de Satterthwaite</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="182" />
-      <source>Log-normal</source>
-      <translation>Log-normal</translation>
+        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <source>Log-normal</source>
+        <translation>Log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="183" />
-      <source>Stratified bootstrap (2,000 resamples)</source>
-      <translation>Bootstrap estratificado (2.000 remuestreos)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <source>Stratified bootstrap (2,000 resamples)</source>
+        <translation>Bootstrap estratificado (2.000 remuestreos)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="185" />
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <source>Finite-population correction</source>
-      <translation>Corrección por población finita</translation>
+        <location filename="../processing/algorithms/estimate.py" line="502"/>
+        <source>Finite-population correction</source>
+        <translation>Corrección por población finita</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="187" />
-      <source>Detection probability p (from a separate study; 1: all seen)</source>
-      <translation>Probabilidad de detección p (de un estudio aparte; 1: todos vistos)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <source>Detection probability p (from a separate study; 1: all seen)</source>
+        <translation>Probabilidad de detección p (de un estudio aparte; 1: todos vistos)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="190" />
-      <source>Standard error of p</source>
-      <translation>Error estándar de p</translation>
+        <location filename="../processing/algorithms/estimate.py" line="189"/>
+        <source>Standard error of p</source>
+        <translation>Error estándar de p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="193" />
-      <source>Area unit of the results</source>
-      <translation>Unidad de área de los resultados</translation>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <source>Area unit of the results</source>
+        <translation>Unidad de área de los resultados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="193" />
-      <source>km²</source>
-      <translation>km²</translation>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <source>km²</source>
+        <translation>km²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="193" />
-      <source>hectares</source>
-      <translation>hectáreas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <source>hectares</source>
+        <translation>hectáreas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="196" />
-      <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
-      <translation>CV objetivo para el próximo muestreo (0: no se usa; p. ej. 0.15)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="195"/>
+        <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
+        <translation>CV objetivo para el próximo muestreo (0: no se usa; p. ej. 0.15)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="200" />
-      <location filename="../processing/algorithms/estimate.py" line="502" />
-      <source>Variance estimator</source>
-      <translation>Estimador de la varianza</translation>
+        <location filename="../processing/algorithms/estimate.py" line="501"/>
+        <source>Variance estimator</source>
+        <translation>Estimador de la varianza</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="201" />
-      <source>Simple random sampling formula</source>
-      <translation>Fórmula del muestreo aleatorio simple</translation>
+        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <source>Simple random sampling formula</source>
+        <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="202" />
-      <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
-      <translation>Vecindario local (disposiciones sistemáticas o espacialmente equilibradas)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
+        <translation>Vecindario local (disposiciones sistemáticas o espacialmente equilibradas)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="204" />
-      <source>The count field holds presence (1) / absence (0)</source>
-      <translation>El campo de conteo contiene presencia (1) / ausencia (0)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="203"/>
+        <source>The count field holds presence (1) / absence (0)</source>
+        <translation>El campo de conteo contiene presencia (1) / ausencia (0)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="206" />
-      <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
-      <translation>Dejar fuera los estratos sin unidades muestreadas (el marco se reduce)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="205"/>
+        <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
+        <translation>Dejar fuera los estratos sin unidades muestreadas (el marco se reduce)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="209" />
-      <source>True total of a simulated population (simulations and training only; 0: none)</source>
-      <translation>Total verdadero de una población simulada (solo simulaciones y formación; 0: ninguno)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="208"/>
+        <source>True total of a simulated population (simulations and training only; 0: none)</source>
+        <translation>Total verdadero de una población simulada (solo simulaciones y formación; 0: ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="214" />
-      <source>Strata with estimates</source>
-      <translation>Estratos con estimaciones</translation>
+        <location filename="../processing/algorithms/estimate.py" line="213"/>
+        <source>Strata with estimates</source>
+        <translation>Estratos con estimaciones</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="216" />
-      <source>Estimate table</source>
-      <translation>Tabla de estimaciones</translation>
+        <location filename="../processing/algorithms/estimate.py" line="215"/>
+        <source>Estimate table</source>
+        <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="219" />
-      <source>Overall density</source>
-      <translation>Densidad global</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Overall density</source>
+        <translation>Densidad global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="219" />
-      <source>SE of the overall density</source>
-      <translation>Error estándar de la densidad global</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>SE of the overall density</source>
+        <translation>Error estándar de la densidad global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="220" />
-      <source>Overall abundance</source>
-      <translation>Abundancia global</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Overall abundance</source>
+        <translation>Abundancia global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="221" />
-      <source>Lower confidence limit of the abundance</source>
-      <translation>Límite inferior de confianza de la abundancia</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Lower confidence limit of the abundance</source>
+        <translation>Límite inferior de confianza de la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="222" />
-      <source>Upper confidence limit of the abundance</source>
-      <translation>Límite superior de confianza de la abundancia</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Upper confidence limit of the abundance</source>
+        <translation>Límite superior de confianza de la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="223" />
-      <source>CV of the overall estimate</source>
-      <translation>CV de la estimación global</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>CV of the overall estimate</source>
+        <translation>CV de la estimación global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="246" />
-      <source>Layer '{layer}' has no count field '{field}'. Choose the field that holds the counts.</source>
-      <translation>La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="246"/>
+        <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
+        <translation>La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="255" />
-      <source>Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the strata layer's id field (plotwise:stratify writes 'stratum'), or give a frame layer of one polygon to treat the frame as one stratum.</source>
-      <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos (plotwise:stratify escribe 'stratum') o dé una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="255"/>
+        <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
+        <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos (plotwise:stratify escribe 'stratum') o dé una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="259" />
-      <source>Layer '{layer}' is one polygon without a stratum id field: the frame is treated as one stratum, and the units' field '{field}' is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
-      <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato y no se usa el campo «{field}» de las unidades. Si las unidades se asignaron a los estratos de forma desigual, dé en su lugar los estratos: una media no estratificada está entonces sesgada.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="259"/>
+        <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
+        <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato y no se usa el campo «{field}» de las unidades. Si las unidades se asignaron a los estratos de forma desigual, dé en su lugar los estratos: una media no estratificada está entonces sesgada.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="289" />
-      <source>Layer '{layer}' has no features.</source>
-      <translation>La capa «{layer}» no tiene entidades.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="289"/>
+        <source>Layer &apos;{layer}&apos; has no features.</source>
+        <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="294" />
-      <source>Layer '{layer}' has no polygons with an area.</source>
-      <translation>La capa «{layer}» no tiene polígonos con área.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="294"/>
+        <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
+        <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="311" />
-      <source>{n} unused reserve unit(s) without a count were skipped.</source>
-      <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="311"/>
+        <source>{n} unused reserve unit(s) without a count were skipped.</source>
+        <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="343" />
-      <source>Layer '{layer}': units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
-      <translation>Capa «{layer}»: las unidades {ids} no tienen geometría, así que la varianza de vecindario local no puede usarlas. Deles su ubicación o use la fórmula del muestreo aleatorio simple.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="343"/>
+        <source>Layer &apos;{layer}&apos;: units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
+        <translation>Capa «{layer}»: las unidades {ids} no tienen geometría, así que la varianza de vecindario local no puede usarlas. Deles su ubicación o use la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="350" />
-      <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-      <translation>Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="350"/>
+        <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
+        <translation>Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="397" />
-      <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
-      <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="397"/>
+        <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
+        <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="419" />
-      <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-      <translation>Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="419"/>
+        <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
+        <translation>Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="438" />
-      <source>In strata {strata} the units' inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-      <translation>En los estratos {strata} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="438"/>
+        <source>In strata {strata} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
+        <translation>En los estratos {strata} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="459" />
-      <source>occupied units</source>
-      <translation>unidades ocupadas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="458"/>
+        <source>occupied units</source>
+        <translation>unidades ocupadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="459" />
-      <source>animals</source>
-      <translation>animales</translation>
+        <location filename="../processing/algorithms/estimate.py" line="458"/>
+        <source>animals</source>
+        <translation>animales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="460" />
-      <source>Naive occupancy from presence data</source>
-      <translation>Ocupación ingenua a partir de datos de presencia</translation>
+        <location filename="../processing/algorithms/estimate.py" line="459"/>
+        <source>Naive occupancy from presence data</source>
+        <translation>Ocupación ingenua a partir de datos de presencia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="460" />
-      <source>Density and abundance estimate</source>
-      <translation>Estimación de la densidad y la abundancia</translation>
+        <location filename="../processing/algorithms/estimate.py" line="459"/>
+        <source>Density and abundance estimate</source>
+        <translation>Estimación de la densidad y la abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="463" />
-      <source>proportion of units occupied (naive)</source>
-      <translation>proporción de unidades ocupadas (ingenua)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="462"/>
+        <source>proportion of units occupied (naive)</source>
+        <translation>proporción de unidades ocupadas (ingenua)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="463" />
-      <source>density per {unit}</source>
-      <translation>densidad por {unit}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="462"/>
+        <source>density per {unit}</source>
+        <translation>densidad por {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="465" />
-      <source>estimated {what} in the frame</source>
-      <translation>estimación de {what} en el marco</translation>
+        <location filename="../processing/algorithms/estimate.py" line="464"/>
+        <source>estimated {what} in the frame</source>
+        <translation>estimación de {what} en el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="466" />
-      <source>{level} interval</source>
-      <translation>intervalo al {level}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="465"/>
+        <source>{level} interval</source>
+        <translation>intervalo al {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="468" />
-      <location filename="../processing/algorithms/estimate.py" line="519" />
-      <source>CV</source>
-      <translation>CV</translation>
+        <location filename="../processing/algorithms/estimate.py" line="518"/>
+        <source>CV</source>
+        <translation>CV</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="469" />
-      <source>units surveyed</source>
-      <translation>unidades muestreadas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="468"/>
+        <source>units surveyed</source>
+        <translation>unidades muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="472" />
-      <source>true total of the simulated population</source>
-      <translation>total verdadero de la población simulada</translation>
+        <location filename="../processing/algorithms/estimate.py" line="471"/>
+        <source>true total of the simulated population</source>
+        <translation>total verdadero de la población simulada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="477" />
-      <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-      <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="476"/>
+        <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
+        <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="483" />
-      <source>covers</source>
-      <translation>contiene</translation>
+        <location filename="../processing/algorithms/estimate.py" line="476"/>
+        <source>covers</source>
+        <translation>contiene</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="483" />
-      <source>misses</source>
-      <translation>no contiene</translation>
+        <location filename="../processing/algorithms/estimate.py" line="476"/>
+        <source>misses</source>
+        <translation>no contiene</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="485" />
-      <source>log-normal</source>
-      <translation>log-normal</translation>
+        <location filename="../processing/algorithms/estimate.py" line="484"/>
+        <source>log-normal</source>
+        <translation>log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="486" />
-      <source>stratified percentile bootstrap</source>
-      <translation>bootstrap estratificado de percentiles</translation>
+        <location filename="../processing/algorithms/estimate.py" line="485"/>
+        <source>stratified percentile bootstrap</source>
+        <translation>bootstrap estratificado de percentiles</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="487" />
-      <source>simple random sampling formula</source>
-      <translation>fórmula del muestreo aleatorio simple</translation>
+        <location filename="../processing/algorithms/estimate.py" line="486"/>
+        <source>simple random sampling formula</source>
+        <translation>fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="488" />
-      <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-      <translation>vecindario local (Stevens &amp; Olsen 2003)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="487"/>
+        <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
+        <translation>vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="490" />
-      <source>Sample units</source>
-      <translation>Unidades de muestreo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="489"/>
+        <source>Sample units</source>
+        <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="491" />
-      <source> (presence/absence)</source>
-      <translation> (presencia/ausencia)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="490"/>
+        <source> (presence/absence)</source>
+        <translation> (presencia/ausencia)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="492" />
-      <source>Stratum field</source>
-      <translation>Campo de estrato</translation>
+        <location filename="../processing/algorithms/estimate.py" line="491"/>
+        <source>Stratum field</source>
+        <translation>Campo de estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="492" />
-      <source>none: one stratum</source>
-      <translation>ninguno: un solo estrato</translation>
+        <location filename="../processing/algorithms/estimate.py" line="491"/>
+        <source>none: one stratum</source>
+        <translation>ninguno: un solo estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="493" />
-      <source>Unit area</source>
-      <translation>Área de la unidad</translation>
+        <location filename="../processing/algorithms/estimate.py" line="492"/>
+        <source>Unit area</source>
+        <translation>Área de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="493" />
-      <source>field {field} (m²)</source>
-      <translation>campo {field} (m²)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="492"/>
+        <source>field {field} (m²)</source>
+        <translation>campo {field} (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="494" />
-      <source>polygon area</source>
-      <translation>área del polígono</translation>
+        <location filename="../processing/algorithms/estimate.py" line="492"/>
+        <source>polygon area</source>
+        <translation>área del polígono</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="495" />
-      <source>strip width</source>
-      <translation>ancho de franja</translation>
+        <location filename="../processing/algorithms/estimate.py" line="494"/>
+        <source>strip width</source>
+        <translation>ancho de franja</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="496" />
-      <source>fixed</source>
-      <translation>fija</translation>
+        <location filename="../processing/algorithms/estimate.py" line="495"/>
+        <source>fixed</source>
+        <translation>fija</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="497" />
-      <source>Strata (frame)</source>
-      <translation>Estratos (marco)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="496"/>
+        <source>Strata (frame)</source>
+        <translation>Estratos (marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="498" />
-      <source>Computation CRS</source>
-      <translation>SRC de cálculo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="497"/>
+        <source>Computation CRS</source>
+        <translation>SRC de cálculo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="499" />
-      <source>Area unit</source>
-      <translation>Unidad de área</translation>
+        <location filename="../processing/algorithms/estimate.py" line="498"/>
+        <source>Area unit</source>
+        <translation>Unidad de área</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="501" />
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Interval</source>
-      <translation>Intervalo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Interval</source>
+        <translation>Intervalo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <location filename="../processing/algorithms/estimate.py" line="547" />
-      <source>yes</source>
-      <translation>sí</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>yes</source>
+        <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <location filename="../processing/algorithms/estimate.py" line="547" />
-      <source>no</source>
-      <translation>no</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>no</source>
+        <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="504" />
-      <source>Detection probability p</source>
-      <translation>Probabilidad de detección p</translation>
+        <location filename="../processing/algorithms/estimate.py" line="503"/>
+        <source>Detection probability p</source>
+        <translation>Probabilidad de detección p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="505" />
-      <source>Target CV for the next survey</source>
-      <translation>CV objetivo para el próximo muestreo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="504"/>
+        <source>Target CV for the next survey</source>
+        <translation>CV objetivo para el próximo muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="508" />
-      <source>Bootstrap resamples</source>
-      <translation>Remuestreos bootstrap</translation>
+        <location filename="../processing/algorithms/estimate.py" line="507"/>
+        <source>Bootstrap resamples</source>
+        <translation>Remuestreos bootstrap</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="509" />
-      <location filename="../processing/algorithms/estimate.py" line="511" />
-      <source>Seed</source>
-      <translation>Semilla</translation>
+        <location filename="../processing/algorithms/estimate.py" line="510"/>
+        <source>Seed</source>
+        <translation>Semilla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
-      <source>not used (no random draws without the bootstrap)</source>
-      <translation>no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="510"/>
+        <source>not used (no random draws without the bootstrap)</source>
+        <translation>no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="515" />
-      <source>Estimates by stratum</source>
-      <translation>Estimaciones por estrato</translation>
+        <location filename="../processing/algorithms/estimate.py" line="514"/>
+        <source>Estimates by stratum</source>
+        <translation>Estimaciones por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <source>Stratum</source>
-      <translation>Estrato</translation>
+        <location filename="../processing/algorithms/estimate.py" line="519"/>
+        <source>Stratum</source>
+        <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <source>Area ({unit})</source>
-      <translation>Área ({unit})</translation>
+        <location filename="../processing/algorithms/estimate.py" line="515"/>
+        <source>Area ({unit})</source>
+        <translation>Área ({unit})</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <source>Units (n)</source>
-      <translation>Unidades (n)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="515"/>
+        <source>Units (n)</source>
+        <translation>Unidades (n)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <source>Not surveyed</source>
-      <translation>No muestreadas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="515"/>
+        <source>Not surveyed</source>
+        <translation>No muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
-      <source>Mean count</source>
-      <translation>Conteo medio</translation>
+        <location filename="../processing/algorithms/estimate.py" line="516"/>
+        <source>Mean count</source>
+        <translation>Conteo medio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
-      <source>SD of counts</source>
-      <translation>DE de los conteos</translation>
+        <location filename="../processing/algorithms/estimate.py" line="516"/>
+        <source>SD of counts</source>
+        <translation>DE de los conteos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <source>SE</source>
-      <translation>EE</translation>
+        <location filename="../processing/algorithms/estimate.py" line="519"/>
+        <source>SE</source>
+        <translation>EE</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="518" />
-      <location filename="../processing/algorithms/estimate.py" line="521" />
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Lower limit</source>
-      <translation>Límite inferior</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Lower limit</source>
+        <translation>Límite inferior</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="519" />
-      <location filename="../processing/algorithms/estimate.py" line="521" />
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Upper limit</source>
-      <translation>Límite superior</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Upper limit</source>
+        <translation>Límite superior</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="519" />
-      <source>df</source>
-      <translation>gl</translation>
+        <location filename="../processing/algorithms/estimate.py" line="518"/>
+        <source>df</source>
+        <translation>gl</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <location filename="../processing/algorithms/estimate.py" line="534" />
-      <source>Occupied units</source>
-      <translation>Unidades ocupadas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="532"/>
+        <source>Occupied units</source>
+        <translation>Unidades ocupadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <location filename="../processing/algorithms/estimate.py" line="534" />
-      <source>Abundance</source>
-      <translation>Abundancia</translation>
+        <location filename="../processing/algorithms/estimate.py" line="532"/>
+        <source>Abundance</source>
+        <translation>Abundancia</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="523" />
-      <source>Units next time (n_next)</source>
-      <translation>Unidades la próxima vez (n_next)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="522"/>
+        <source>Units next time (n_next)</source>
+        <translation>Unidades la próxima vez (n_next)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="528" />
-      <location filename="../processing/algorithms/estimate.py" line="571" />
-      <source>all strata</source>
-      <translation>todos los estratos</translation>
+        <location filename="../processing/algorithms/estimate.py" line="569"/>
+        <source>all strata</source>
+        <translation>todos los estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="531" />
-      <source>{what}, limits at {level}.</source>
-      <translation>{what}, límites al {level}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="530"/>
+        <source>{what}, limits at {level}.</source>
+        <translation>{what}, límites al {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="533" />
-      <source>{what} in the frame, limits at {level}.</source>
-      <translation>{what} en el marco, límites al {level}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="532"/>
+        <source>{what} in the frame, limits at {level}.</source>
+        <translation>{what} en el marco, límites al {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="536" />
-      <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-      <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="535"/>
+        <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
+        <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="541" />
-      <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-      <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="540"/>
+        <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
+        <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="544" />
-      <source>The overall interval by method</source>
-      <translation>El intervalo global según el método</translation>
+        <location filename="../processing/algorithms/estimate.py" line="543"/>
+        <source>The overall interval by method</source>
+        <translation>El intervalo global según el método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Used in the outputs</source>
-      <translation>Usado en las salidas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Used in the outputs</source>
+        <translation>Usado en las salidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="549" />
-      <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-      <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="548"/>
+        <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
+        <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="558" />
-      <source>overall abundance in a resample</source>
-      <translation>abundancia global en un remuestreo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>overall abundance in a resample</source>
+        <translation>abundancia global en un remuestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="558" />
-      <source>resamples</source>
-      <translation>remuestreos</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>resamples</source>
+        <translation>remuestreos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="559" />
-      <source>{level} percentile limits</source>
-      <translation>límites de percentiles al {level}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>{level} percentile limits</source>
+        <translation>límites de percentiles al {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="560" />
-      <source>The {n:,} bootstrap resamples of the overall abundance</source>
-      <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>The {n:,} bootstrap resamples of the overall abundance</source>
+        <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="569" />
-      <source>true density (simulation)</source>
-      <translation>densidad verdadera (simulación)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="568"/>
+        <source>true density (simulation)</source>
+        <translation>densidad verdadera (simulación)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="574" />
-      <source>{what} by stratum with {level} confidence intervals</source>
-      <translation>{what} por estrato con intervalos de confianza al {level}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="573"/>
+        <source>{what} by stratum with {level} confidence intervals</source>
+        <translation>{what} por estrato con intervalos de confianza al {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="585" />
-      <source>lowest</source>
-      <translation>mínimo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="581"/>
+        <source>lowest</source>
+        <translation>mínimo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="586" />
-      <source>highest</source>
-      <translation>máximo</translation>
+        <location filename="../processing/algorithms/estimate.py" line="581"/>
+        <source>highest</source>
+        <translation>máximo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="591" />
-      <source>surveyed units</source>
-      <translation>unidades muestreadas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="589"/>
+        <source>surveyed units</source>
+        <translation>unidades muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="594" />
-      <source>not surveyed</source>
-      <translation>no muestreadas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="593"/>
+        <source>not surveyed</source>
+        <translation>no muestreadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="596" />
-      <source>Strata shaded by {what}, with the units</source>
-      <translation>Estratos sombreados según {what}, con las unidades</translation>
+        <location filename="../processing/algorithms/estimate.py" line="595"/>
+        <source>Strata shaded by {what}, with the units</source>
+        <translation>Estratos sombreados según {what}, con las unidades</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="599" />
-      <source>Method</source>
-      <translation>Método</translation>
+        <location filename="../processing/algorithms/estimate.py" line="598"/>
+        <source>Method</source>
+        <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="601" />
-      <source>Each stratum's value is the proportion of its surveyed units where the species was detected; the frame's value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-      <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="600"/>
+        <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
+        <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="608" />
-      <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-      <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="607"/>
+        <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
+        <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="616" />
-      <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-      <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="614"/>
+        <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
+        <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="619" />
-      <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
-      <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). Son asimétricos y nunca bajan de 0.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="614"/>
+        <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
+        <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). Son asimétricos y nunca bajan de 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="621" />
-      <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-      <translation>Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita cuando se pide (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="614"/>
+        <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
+        <translation>Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita cuando se pide (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="629" />
-      <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
-      <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, y solo las diferencias dentro de los vecindarios cuentan como varianza. Para disposiciones sistemáticas y espacialmente equilibradas, la fórmula del muestreo aleatorio simple sobrestima la varianza; este estimador no, siempre que la disposición fuera realmente sistemática o espacialmente equilibrada; para una disposición aleatoria simple use la fórmula simple. La suma de las varianzas locales se escala una vez para que coincida en promedio con la fórmula simple cuando la población no tiene estructura espacial (decisión nuestra).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="628"/>
+        <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
+        <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, y solo las diferencias dentro de los vecindarios cuentan como varianza. Para disposiciones sistemáticas y espacialmente equilibradas, la fórmula del muestreo aleatorio simple sobrestima la varianza; este estimador no, siempre que la disposición fuera realmente sistemática o espacialmente equilibrada; para una disposición aleatoria simple use la fórmula simple. La suma de las varianzas locales se escala una vez para que coincida en promedio con la fórmula simple cuando la población no tiene estructura espacial (decisión nuestra).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="638" />
-      <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
-      <translation>Los estratos con una sola unidad muestreada se agruparon con un vecino (entre los estratos que lo tocan en el mapa o, si no, los estratos contiguos en el orden de identificadores, el de densidad más próxima): los miembros de un grupo comparten la varianza residual combinada del grupo (Cochran 1977, §5A.12). Las diferencias entre los estratos agrupados cuentan entonces como varianza, por lo que sus errores estándar tienden a ser demasiado grandes.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="637"/>
+        <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
+        <translation>Los estratos con una sola unidad muestreada se agruparon con un vecino (entre los estratos que lo tocan en el mapa o, si no, los estratos contiguos en el orden de identificadores, el de densidad más próxima): los miembros de un grupo comparten la varianza residual combinada del grupo (Cochran 1977, §5A.12). Las diferencias entre los estratos agrupados cuentan entonces como varianza, por lo que sus errores estándar tienden a ser demasiado grandes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="644" />
-      <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit's count minus the group's density times the unit's area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
-      <translation>En el bootstrap, un estrato agrupado toma tantos residuos como unidades tiene entre las unidades combinadas de su grupo (el conteo de cada unidad menos la densidad del grupo por el área de la unidad), los suma a su propia estimación y los reescala, de modo que sus remuestreos están centrados en su propia estimación y varían tanto como indica la varianza de estratos agrupados.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="643"/>
+        <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit&apos;s count minus the group&apos;s density times the unit&apos;s area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
+        <translation>En el bootstrap, un estrato agrupado toma tantos residuos como unidades tiene entre las unidades combinadas de su grupo (el conteo de cada unidad menos la densidad del grupo por el área de la unidad), los suma a su propia estimación y los reescala, de modo que sus remuestreos están centrados en su propia estimación y varían tanto como indica la varianza de estratos agrupados.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="650" />
-      <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval's degrees of freedom combine the two parts (Buckland et al. 2001), p's part counting as known with infinite degrees of freedom.</source>
-      <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad del intervalo t combinan ambas partes (Buckland et al. 2001), contando la de p como conocida con grados de libertad infinitos.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="649"/>
+        <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval&apos;s degrees of freedom combine the two parts (Buckland et al. 2001), p&apos;s part counting as known with infinite degrees of freedom.</source>
+        <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad del intervalo t combinan ambas partes (Buckland et al. 2001), contando la de p como conocida con grados de libertad infinitos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="657" />
-      <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
-      <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar observadas ahora (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 por estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="656"/>
+        <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
+        <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar observadas ahora (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 por estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="663" />
-      <source>Cautions</source>
-      <translation>Precauciones</translation>
+        <location filename="../processing/algorithms/estimate.py" line="662"/>
+        <source>Cautions</source>
+        <translation>Precauciones</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="664" />
-      <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-      <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="663"/>
+        <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
+        <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="668" />
-      <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-      <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="667"/>
+        <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
+        <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="671" />
-      <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-      <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="670"/>
+        <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
+        <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="676" />
-      <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-      <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="675"/>
+        <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
+        <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="679" />
-      <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-      <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="678"/>
+        <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
+        <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>ExampleChain</name>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="40" />
-      <source>Units with counts</source>
-      <translation>Unidades con conteos</translation>
+        <location filename="../scripts/build_models.py" line="94"/>
+        <source>Units with counts</source>
+        <translation>Unidades con conteos</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="118" />
-      <source>Estimate by stratum</source>
-      <translation>Estimación por estrato</translation>
+        <location filename="../scripts/build_models.py" line="97"/>
+        <source>Estimate by stratum</source>
+        <translation>Estimación por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="143" />
-      <source>Estimate report</source>
-      <translation>Informe de la estimación</translation>
+        <location filename="../scripts/build_models.py" line="97"/>
+        <source>Estimate report</source>
+        <translation>Informe de la estimación</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="168" />
-      <source>Estimate table</source>
-      <translation>Tabla de estimaciones</translation>
+        <location filename="../scripts/build_models.py" line="97"/>
+        <source>Estimate table</source>
+        <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="261" />
-      <source>Animal points</source>
-      <translation>Puntos de animales</translation>
+        <location filename="../scripts/build_models.py" line="90"/>
+        <source>Animal points</source>
+        <translation>Puntos de animales</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="286" />
-      <source>Detection probability</source>
-      <translation>Probabilidad de detección</translation>
+        <location filename="../scripts/build_models.py" line="92"/>
+        <source>Detection probability</source>
+        <translation>Probabilidad de detección</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="340" />
-      <location filename="../processing/models/plan_survey.model3" line="551" />
-      <source>Random seed (0 draws one)</source>
-      <translation>Semilla aleatoria (0 sortea una)</translation>
+        <location filename="../scripts/build_models.py" line="93"/>
+        <source>Random seed (0 draws one)</source>
+        <translation>Semilla aleatoria (0 sortea una)</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="355" />
-      <location filename="../processing/models/plan_survey.model3" line="200" />
-      <source>Strata</source>
-      <translation>Estratos</translation>
+        <location filename="../scripts/build_models.py" line="91"/>
+        <source>Strata</source>
+        <translation>Estratos</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="368" />
-      <location filename="../processing/models/plan_survey.model3" line="291" />
-      <source>Sample units</source>
-      <translation>Unidades de muestreo</translation>
+        <location filename="../scripts/build_models.py" line="89"/>
+        <source>Sample units</source>
+        <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="40" />
-      <source>Strata with units allocated</source>
-      <translation>Estratos con unidades asignadas</translation>
+        <location filename="../scripts/build_models.py" line="75"/>
+        <source>Strata with units allocated</source>
+        <translation>Estratos con unidades asignadas</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="116" />
-      <source>Sampling frame</source>
-      <translation>Marco de muestreo</translation>
+        <location filename="../scripts/build_models.py" line="67"/>
+        <source>Sampling frame</source>
+        <translation>Marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="312" />
-      <source>Layout report</source>
-      <translation>Informe de la disposición</translation>
+        <location filename="../scripts/build_models.py" line="80"/>
+        <source>Layout report</source>
+        <translation>Informe de la disposición</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="362" />
-      <source>Waypoints (GPX)</source>
-      <translation>Puntos de paso (GPX)</translation>
+        <location filename="../scripts/build_models.py" line="80"/>
+        <source>Waypoints (GPX)</source>
+        <translation>Puntos de paso (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="458" />
-      <source>Covariate rasters</source>
-      <translation>Rásteres de covariables</translation>
+        <location filename="../scripts/build_models.py" line="62"/>
+        <source>Covariate rasters</source>
+        <translation>Rásteres de covariables</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="487" />
-      <source>Excluded areas</source>
-      <translation>Zonas excluidas</translation>
+        <location filename="../scripts/build_models.py" line="59"/>
+        <source>Excluded areas</source>
+        <translation>Zonas excluidas</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="512" />
-      <source>Steepest slope surveyed (degrees)</source>
-      <translation>Pendiente máxima muestreada (grados)</translation>
+        <location filename="../scripts/build_models.py" line="61"/>
+        <source>Steepest slope surveyed (degrees)</source>
+        <translation>Pendiente máxima muestreada (grados)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="525" />
-      <source>Number of strata</source>
-      <translation>Número de estratos</translation>
+        <location filename="../scripts/build_models.py" line="63"/>
+        <source>Number of strata</source>
+        <translation>Número de estratos</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="538" />
-      <source>Side of the square plots (m)</source>
-      <translation>Lado de las parcelas cuadradas (m)</translation>
+        <location filename="../scripts/build_models.py" line="65"/>
+        <source>Side of the square plots (m)</source>
+        <translation>Lado de las parcelas cuadradas (m)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="563" />
-      <source>Slope raster (degrees)</source>
-      <translation>Ráster de pendiente (grados)</translation>
+        <location filename="../scripts/build_models.py" line="60"/>
+        <source>Slope raster (degrees)</source>
+        <translation>Ráster de pendiente (grados)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="590" />
-      <source>Study area</source>
-      <translation>Área de estudio</translation>
+        <location filename="../scripts/build_models.py" line="58"/>
+        <source>Study area</source>
+        <translation>Área de estudio</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="601" />
-      <source>Total number of units</source>
-      <translation>Número total de unidades</translation>
+        <location filename="../scripts/build_models.py" line="64"/>
+        <source>Total number of units</source>
+        <translation>Número total de unidades</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="38" />
-      <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
-      <translation>Cadena de ejemplo: planificar un muestreo (marco, estratos, esfuerzo, disposición)</translation>
+        <location filename="../processing/provider.py" line="37"/>
+        <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
+        <translation>Cadena de ejemplo: planificar un muestreo (marco, estratos, esfuerzo, disposición)</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="39" />
-      <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
-      <translation>Construye el marco de muestreo (área de estudio menos las exclusiones y las celdas por encima de la pendiente límite), forma estratos por k-medias a partir de los rásteres de covariables, reparte las unidades por asignación de Neyman con la desviación estándar de la covariable como sustituto y dispone parcelas cuadradas espacialmente equilibradas con 3 unidades de reserva por estrato. Ábrala en el modelador para cambiar cualquier paso. Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
+        <location filename="../processing/provider.py" line="37"/>
+        <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
+        <translation>Construye el marco de muestreo (área de estudio menos las exclusiones y las celdas por encima de la pendiente límite), forma estratos por k-medias a partir de los rásteres de covariables, reparte las unidades por asignación de Neyman con la desviación estándar de la covariable como sustituto y dispone parcelas cuadradas espacialmente equilibradas con 3 unidades de reserva por estrato. Ábrala en el modelador para cambiar cualquier paso. Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="48" />
-      <source>Example chain: estimate from simulated counts</source>
-      <translation>Cadena de ejemplo: estimar a partir de conteos simulados</translation>
+        <location filename="../processing/provider.py" line="47"/>
+        <source>Example chain: estimate from simulated counts</source>
+        <translation>Cadena de ejemplo: estimar a partir de conteos simulados</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="49" />
-      <source>For training: fills the units' count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
-      <translation>Para formación: rellena el campo de conteo de las unidades a partir de una población simulada y luego estima la densidad y la abundancia por estrato y en total. Con trabajo de campo real, ejecute en su lugar la estimación sobre las unidades contadas.</translation>
+        <location filename="../processing/provider.py" line="47"/>
+        <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
+        <translation>Para formación: rellena el campo de conteo de las unidades a partir de una población simulada y luego estima la densidad y la abundancia por estrato y en total. Con trabajo de campo real, ejecute en su lugar la estimación sobre las unidades contadas.</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="57" />
-      <location filename="../processing/provider.py" line="83" />
-      <source>Example chains</source>
-      <translation>Cadenas de ejemplo</translation>
+        <location filename="../processing/provider.py" line="76"/>
+        <source>Example chains</source>
+        <translation>Cadenas de ejemplo</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>LayoutUnits</name>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="69" />
-      <source>Lay out sample units</source>
-      <translation>Disponer las unidades de muestreo</translation>
+        <location filename="../processing/algorithms/layout.py" line="69"/>
+        <source>Lay out sample units</source>
+        <translation>Disponer las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="72" />
-      <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
+        <location filename="../processing/algorithms/layout.py" line="72"/>
+        <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
 
@@ -2512,7 +2445,7 @@ Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for tr
 Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
 
 A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-      <translation>Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato por valor del campo de estrato; sin él, el marco es un solo estrato).
+        <translation>Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato por valor del campo de estrato; sin él, el marco es un solo estrato).
 
 Unidades por estrato: el campo de unidades (por ejemplo n_alloc del paso de asignación; el mismo número entero en cada entidad de un estrato); si no, el total repartido en proporción al área con al menos 2 por estrato.
 
@@ -2533,2232 +2466,2196 @@ Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato m
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="109" />
-      <source>Sampling frame or strata</source>
-      <translation>Marco de muestreo o estratos</translation>
+        <location filename="../processing/algorithms/layout.py" line="108"/>
+        <source>Sampling frame or strata</source>
+        <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="113" />
-      <source>Stratum field (empty: the frame is one stratum)</source>
-      <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <source>Stratum field (empty: the frame is one stratum)</source>
+        <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="119" />
-      <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
-      <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
+        <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="125" />
-      <source>Total number of units (when no units field is given)</source>
-      <translation>Número total de unidades (si no se da un campo de unidades)</translation>
+        <location filename="../processing/algorithms/layout.py" line="123"/>
+        <source>Total number of units (when no units field is given)</source>
+        <translation>Número total de unidades (si no se da un campo de unidades)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="131" />
-      <source>Design</source>
-      <translation>Diseño</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Design</source>
+        <translation>Diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
-      <source>Simple random</source>
-      <translation>Aleatorio simple</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Simple random</source>
+        <translation>Aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
-      <source>Systematic grid</source>
-      <translation>Cuadrícula sistemática</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Systematic grid</source>
+        <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
-      <source>Spatially balanced</source>
-      <translation>Espacialmente equilibrado</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Spatially balanced</source>
+        <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="137" />
-      <source>Unit shape</source>
-      <translation>Forma de la unidad</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Unit shape</source>
+        <translation>Forma de la unidad</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Point station</source>
-      <translation>Estación puntual</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Point station</source>
+        <translation>Estación puntual</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Square plot</source>
-      <translation>Parcela cuadrada</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Square plot</source>
+        <translation>Parcela cuadrada</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Circular plot</source>
-      <translation>Parcela circular</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Circular plot</source>
+        <translation>Parcela circular</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Line transect</source>
-      <translation>Transecto lineal</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Line transect</source>
+        <translation>Transecto lineal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="144" />
-      <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
-      <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
+        <location filename="../processing/algorithms/layout.py" line="142"/>
+        <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
+        <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="150" />
-      <source>Bearing (degrees from grid north; -1: random)</source>
-      <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
+        <location filename="../processing/algorithms/layout.py" line="148"/>
+        <source>Bearing (degrees from grid north; -1: random)</source>
+        <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="155" />
-      <source>Keep every unit wholly inside its stratum</source>
-      <translation>Mantener cada unidad por completo dentro de su estrato</translation>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
+        <source>Keep every unit wholly inside its stratum</source>
+        <translation>Mantener cada unidad por completo dentro de su estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="159" />
-      <source>Minimum spacing between unit centres (m; 0: none)</source>
-      <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
+        <location filename="../processing/algorithms/layout.py" line="157"/>
+        <source>Minimum spacing between unit centres (m; 0: none)</source>
+        <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="165" />
-      <source>Reserve units per stratum</source>
-      <translation>Unidades de reserva por estrato</translation>
+        <location filename="../processing/algorithms/layout.py" line="163"/>
+        <source>Reserve units per stratum</source>
+        <translation>Unidades de reserva por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="169" />
-      <source>Sample units</source>
-      <translation>Unidades de muestreo</translation>
+        <location filename="../processing/algorithms/layout.py" line="169"/>
+        <source>Sample units</source>
+        <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="172" />
-      <source>Waypoints for GPS (GPX)</source>
-      <translation>Puntos de paso para GPS (GPX)</translation>
+        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <source>Waypoints for GPS (GPX)</source>
+        <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="172" />
-      <source>GPX files (*.gpx)</source>
-      <translation>Archivos GPX (*.gpx)</translation>
+        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <source>GPX files (*.gpx)</source>
+        <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="185" />
-      <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
-      <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
+        <location filename="../processing/algorithms/layout.py" line="184"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
+        <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="212" />
-      <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
-      <translation>Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
+        <location filename="../processing/algorithms/layout.py" line="211"/>
+        <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
+        <translation>Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="236" />
-      <source>Stratum field '{field}' of layer '{layer}'</source>
-      <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
+        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
+        <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="237" />
-      <source>Units field '{field}' of layer '{layer}'</source>
-      <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
+        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
+        <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="243" />
-      <source>Layer '{layer}': {text}</source>
-      <translation>Capa «{layer}»: {text}</translation>
+        <location filename="../processing/algorithms/layout.py" line="243"/>
+        <source>Layer &apos;{layer}&apos;: {text}</source>
+        <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="248" />
-      <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
-      <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
+        <location filename="../processing/algorithms/layout.py" line="247"/>
+        <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
+        <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="262" />
-      <source>{n} waypoints written to {path}</source>
-      <translation>{n} puntos de paso escritos en {path}</translation>
+        <location filename="../processing/algorithms/layout.py" line="262"/>
+        <source>{n} waypoints written to {path}</source>
+        <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="266" />
-      <source>{stratum}: {n} primary and {r} reserve units</source>
-      <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
+        <location filename="../processing/algorithms/layout.py" line="265"/>
+        <source>{stratum}: {n} primary and {r} reserve units</source>
+        <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
-      <source>the frame</source>
-      <translation>el marco</translation>
+        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <source>the frame</source>
+        <translation>el marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
-      <source>stratum {key}</source>
-      <translation>estrato {key}</translation>
+        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <source>stratum {key}</source>
+        <translation>estrato {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="320" />
-      <source>Sample-unit layout</source>
-      <translation>Disposición de las unidades de muestreo</translation>
+        <location filename="../processing/algorithms/layout.py" line="319"/>
+        <source>Sample-unit layout</source>
+        <translation>Disposición de las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="325" />
-      <location filename="../processing/algorithms/layout.py" line="427" />
-      <source>primary units</source>
-      <translation>unidades principales</translation>
+        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <source>primary units</source>
+        <translation>unidades principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="326" />
-      <location filename="../processing/algorithms/layout.py" line="428" />
-      <source>reserve units</source>
-      <translation>unidades de reserva</translation>
+        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <source>reserve units</source>
+        <translation>unidades de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="327" />
-      <source>strata</source>
-      <translation>estratos</translation>
+        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <source>strata</source>
+        <translation>estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <source>design</source>
-      <translation>diseño</translation>
+        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <source>design</source>
+        <translation>diseño</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>simple random</source>
-      <translation>aleatorio simple</translation>
+        <location filename="../processing/algorithms/layout.py" line="329"/>
+        <source>Replacing units in the field</source>
+        <translation>Sustituir unidades en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>systematic grid</source>
-      <translation>cuadrícula sistemática</translation>
+        <location filename="../processing/algorithms/layout.py" line="330"/>
+        <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
+        <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>spatially balanced</source>
-      <translation>espacialmente equilibrado</translation>
+        <location filename="../processing/algorithms/layout.py" line="336"/>
+        <source>Units per stratum</source>
+        <translation>Unidades por estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="330" />
-      <source>Replacing units in the field</source>
-      <translation>Sustituir unidades en el terreno</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Stratum</source>
+        <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="332" />
-      <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
-      <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Area (ha)</source>
+        <translation>Área (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="337" />
-      <source>Units per stratum</source>
-      <translation>Unidades por estrato</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Effective area (ha)</source>
+        <translation>Área efectiva (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Stratum</source>
-      <translation>Estrato</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Units asked</source>
+        <translation>Unidades pedidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Area (ha)</source>
-      <translation>Área (ha)</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Primary</source>
+        <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Effective area (ha)</source>
-      <translation>Área efectiva (ha)</translation>
+        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <source>Reserve</source>
+        <translation>Reservas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Units asked</source>
-      <translation>Unidades pedidas</translation>
+        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <source>incl_p</source>
+        <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Primary</source>
-      <translation>Principales</translation>
+        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <source>weight</source>
+        <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <source>Reserve</source>
-      <translation>Reservas</translation>
+        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <source>Grid spacing (m)</source>
+        <translation>Espaciado de la cuadrícula (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <source>incl_p</source>
-      <translation>incl_p</translation>
+        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <source>Grid rotation (°)</source>
+        <translation>Rotación de la cuadrícula (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <source>weight</source>
-      <translation>weight</translation>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
+        <source>frame</source>
+        <translation>marco</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <source>Grid spacing (m)</source>
-      <translation>Espaciado de la cuadrícula (m)</translation>
+        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
+        <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <source>Grid rotation (°)</source>
-      <translation>Rotación de la cuadrícula (°)</translation>
+        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
+        <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <source>frame</source>
-      <translation>marco</translation>
+        <location filename="../processing/algorithms/layout.py" line="357"/>
+        <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
+        <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="353" />
-      <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
-      <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
+        <location filename="../processing/algorithms/layout.py" line="364"/>
+        <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
+        <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
-      <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
-      <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
+        <location filename="../processing/algorithms/layout.py" line="368"/>
+        <source>Map</source>
+        <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="359" />
-      <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
-      <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
+        <location filename="../processing/algorithms/layout.py" line="369"/>
+        <source>Strata (filled), primary units (dark) and reserve units (light)</source>
+        <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="366" />
-      <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
-      <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
+        <location filename="../processing/algorithms/layout.py" line="370"/>
+        <source>Method</source>
+        <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="369" />
-      <source>Map</source>
-      <translation>Mapa</translation>
+        <location filename="../processing/algorithms/layout.py" line="374"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="370" />
-      <source>Strata (filled), primary units (dark) and reserve units (light)</source>
-      <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Frame (FRAME)</source>
+        <translation>Marco (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="371" />
-      <source>Method</source>
-      <translation>Método</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Stratum field (STRATUM_FIELD)</source>
+        <translation>Campo de estrato (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="375" />
-      <source>, projected from {src} (UTM zone of the frame's centre)</source>
-      <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>(none: one stratum)</source>
+        <translation>(ninguno: un solo estrato)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="377" />
-      <source>Frame (FRAME)</source>
-      <translation>Marco (FRAME)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Units per stratum field (N_FIELD)</source>
+        <translation>Campo de unidades por estrato (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="378" />
-      <source>Stratum field (STRATUM_FIELD)</source>
-      <translation>Campo de estrato (STRATUM_FIELD)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>(none)</source>
+        <translation>(ninguno)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="378" />
-      <source>(none: one stratum)</source>
-      <translation>(ninguno: un solo estrato)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Total units (N_UNITS)</source>
+        <translation>Total de unidades (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="379" />
-      <source>Units per stratum field (N_FIELD)</source>
-      <translation>Campo de unidades por estrato (N_FIELD)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>(not used)</source>
+        <translation>(no se usa)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="379" />
-      <source>(none)</source>
-      <translation>(ninguno)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Design (DESIGN)</source>
+        <translation>Diseño (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="380" />
-      <source>Total units (N_UNITS)</source>
-      <translation>Total de unidades (N_UNITS)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Unit shape (SHAPE)</source>
+        <translation>Forma de la unidad (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="380" />
-      <source>(not used)</source>
-      <translation>(no se usa)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Unit size (SIZE, m)</source>
+        <translation>Tamaño de la unidad (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>Design (DESIGN)</source>
-      <translation>Diseño (DESIGN)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Bearing (BEARING, degrees)</source>
+        <translation>Rumbo (BEARING, grados)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>Unit shape (SHAPE)</source>
-      <translation>Forma de la unidad (SHAPE)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>random</source>
+        <translation>aleatorio</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>point</source>
-      <translation>punto</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Keep inside (INSIDE)</source>
+        <translation>Mantener dentro (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>square</source>
-      <translation>cuadrado</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>yes</source>
+        <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>circle</source>
-      <translation>círculo</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>no</source>
+        <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>line</source>
-      <translation>línea</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Minimum spacing (MIN_SPACING, m)</source>
+        <translation>Separación mínima (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="383" />
-      <source>Unit size (SIZE, m)</source>
-      <translation>Tamaño de la unidad (SIZE, m)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Reserves per stratum (RESERVE)</source>
+        <translation>Reservas por estrato (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="384" />
-      <source>Bearing (BEARING, degrees)</source>
-      <translation>Rumbo (BEARING, grados)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Seed (SEED)</source>
+        <translation>Semilla (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="384" />
-      <source>random</source>
-      <translation>aleatorio</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>CRS of the computation and the output</source>
+        <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
-      <source>Keep inside (INSIDE)</source>
-      <translation>Mantener dentro (INSIDE)</translation>
+        <location filename="../processing/algorithms/layout.py" line="395"/>
+        <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
+        <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
-      <source>yes</source>
-      <translation>sí</translation>
+        <location filename="../processing/algorithms/layout.py" line="397"/>
+        <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
+        <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
-      <source>no</source>
-      <translation>no</translation>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
+        <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
-      <source>Minimum spacing (MIN_SPACING, m)</source>
-      <translation>Separación mínima (MIN_SPACING, m)</translation>
+        <location filename="../processing/algorithms/layout.py" line="406"/>
+        <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
+        <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
     </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
-      <source>Reserves per stratum (RESERVE)</source>
-      <translation>Reservas por estrato (RESERVE)</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="388" />
-      <source>Seed (SEED)</source>
-      <translation>Semilla (SEED)</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="389" />
-      <source>CRS of the computation and the output</source>
-      <translation>SRC del cálculo y de la salida</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
-      <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
-      <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
-      <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
-      <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
-      <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
-      <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="408" />
-      <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
-      <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
-    </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseAlgorithm</name>
     <message>
-      <location filename="../processing/algorithms/base.py" line="30" />
-      <location filename="../processing/algorithms/base.py" line="55" />
-      <source>Survey design</source>
-      <translation>Diseño del muestreo</translation>
+        <location filename="../processing/algorithms/base.py" line="25"/>
+        <source>Survey design</source>
+        <translation>Diseño del muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="31" />
-      <location filename="../processing/algorithms/base.py" line="55" />
-      <source>Estimation</source>
-      <translation>Estimación</translation>
+        <location filename="../processing/algorithms/base.py" line="26"/>
+        <source>Estimation</source>
+        <translation>Estimación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="32" />
-      <location filename="../processing/algorithms/base.py" line="55" />
-      <source>Demo and training</source>
-      <translation>Demostración y formación</translation>
+        <location filename="../processing/algorithms/base.py" line="27"/>
+        <source>Demo and training</source>
+        <translation>Demostración y formación</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="71" />
-      <source>Random seed (0 draws one and records it)</source>
-      <translation>Semilla aleatoria (0 sortea una y la registra)</translation>
+        <location filename="../processing/algorithms/base.py" line="69"/>
+        <source>Random seed (0 draws one and records it)</source>
+        <translation>Semilla aleatoria (0 sortea una y la registra)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="83" />
-      <source>Report (HTML)</source>
-      <translation>Informe (HTML)</translation>
+        <location filename="../processing/algorithms/base.py" line="81"/>
+        <source>Report (HTML)</source>
+        <translation>Informe (HTML)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="84" />
-      <source>HTML files (*.html)</source>
-      <translation>Archivos HTML (*.html)</translation>
+        <location filename="../processing/algorithms/base.py" line="81"/>
+        <source>HTML files (*.html)</source>
+        <translation>Archivos HTML (*.html)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="95" />
-      <source>Seed used: {seed}</source>
-      <translation>Semilla usada: {seed}</translation>
+        <location filename="../processing/algorithms/base.py" line="96"/>
+        <source>Seed used: {seed}</source>
+        <translation>Semilla usada: {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="121" />
-      <source>Cancelled by the user. No result was written.</source>
-      <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
+        <location filename="../processing/algorithms/base.py" line="122"/>
+        <source>Cancelled by the user. No result was written.</source>
+        <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="166" />
-      <source>Report written to {path}</source>
-      <translation>Informe escrito en {path}</translation>
+        <location filename="../processing/algorithms/base.py" line="174"/>
+        <source>Report written to {path}</source>
+        <translation>Informe escrito en {path}</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseBridge</name>
     <message>
-      <location filename="../processing/bridge.py" line="66" />
-      <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
-      <translation>La capa «{layer}» no tiene un sistema de referencia de coordenadas válido. Defina su SRC (Propiedades de la capa → Fuente) y vuelva a ejecutar.</translation>
+        <location filename="../processing/bridge.py" line="54"/>
+        <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
+        <translation>La capa «{layer}» no tiene un sistema de referencia de coordenadas válido. Defina su SRC (Propiedades de la capa → Fuente) y vuelva a ejecutar.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="77" />
-      <source>Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
-      <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
+        <location filename="../processing/bridge.py" line="68"/>
+        <source>Layer &apos;{layer}&apos; is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
+        <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="115" />
-      <source>The input layer '{layer}' could not be opened.</source>
-      <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
+        <location filename="../processing/bridge.py" line="110"/>
+        <source>The input layer &apos;{layer}&apos; could not be opened.</source>
+        <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="123" />
-      <source>Layer '{layer}' has no field named {names}. Choose an existing field.</source>
-      <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
+        <location filename="../processing/bridge.py" line="119"/>
+        <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
+        <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="156" />
-      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
-      <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
+        <location filename="../processing/bridge.py" line="153"/>
+        <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
+        <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="160" />
-      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
-      <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
+        <location filename="../processing/bridge.py" line="159"/>
+        <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
+        <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="180" />
-      <source> and {n} more</source>
-      <translation> y {n} más</translation>
+        <location filename="../processing/bridge.py" line="182"/>
+        <source> and {n} more</source>
+        <translation> y {n} más</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="286" />
-      <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
-      <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
+        <location filename="../processing/bridge.py" line="283"/>
+        <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
+        <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="313" />
-      <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
-      <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
+        <location filename="../processing/bridge.py" line="312"/>
+        <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
+        <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="318" />
-      <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
-      <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
+        <location filename="../processing/bridge.py" line="318"/>
+        <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
+        <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseEngine</name>
     <message>
-      <location filename="../processing/engine/allocation.py" line="48" />
-      <source>stratum area</source>
-      <translation>área del estrato</translation>
+        <location filename="../processing/engine/allocation.py" line="48"/>
+        <source>stratum area</source>
+        <translation>área del estrato</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="49" />
-      <source>pilot standard deviation</source>
-      <translation>desviación estándar piloto</translation>
+        <location filename="../processing/engine/allocation.py" line="49"/>
+        <source>pilot standard deviation</source>
+        <translation>desviación estándar piloto</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="50" />
-      <source>pilot mean count</source>
-      <translation>conteo medio piloto</translation>
+        <location filename="../processing/engine/allocation.py" line="50"/>
+        <source>pilot mean count</source>
+        <translation>conteo medio piloto</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="51" />
-      <source>cost per unit</source>
-      <translation>coste por unidad</translation>
+        <location filename="../processing/engine/allocation.py" line="51"/>
+        <source>cost per unit</source>
+        <translation>coste por unidad</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="384" />
-      <location filename="../processing/engine/layout.py" line="382" />
-      <source>{shown} and {more} more</source>
-      <translation>{shown} y {more} más</translation>
+        <location filename="../processing/engine/layout.py" line="416"/>
+        <source>{shown} and {more} more</source>
+        <translation>{shown} y {more} más</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="430" />
-      <source>Stratum field '{field}' of layer '{layer}' is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
-      <translation>El campo de estrato «{field}» de la capa «{layer}» está vacío (NULL) para las entidades {ids}. Dé un identificador a cada estrato, o quite esas entidades de la capa.</translation>
+        <location filename="../processing/engine/allocation.py" line="431"/>
+        <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos; is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
+        <translation>El campo de estrato «{field}» de la capa «{layer}» está vacío (NULL) para las entidades {ids}. Dé un identificador a cada estrato, o quite esas entidades de la capa.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="447" />
-      <source>Features {ids} of layer '{layer}' carry the same stratum id {value} in field '{field}', so each would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
-      <translation>Las entidades {ids} de la capa «{layer}» llevan el mismo identificador de estrato {value} en el campo «{field}», así que cada una recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
+        <location filename="../processing/engine/allocation.py" line="448"/>
+        <source>Features {ids} of layer &apos;{layer}&apos; carry the same stratum id {value} in field &apos;{field}&apos;, so each would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
+        <translation>Las entidades {ids} de la capa «{layer}» llevan el mismo identificador de estrato {value} en el campo «{field}», así que cada una recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="454" />
-      <source>Several stratum ids in field '{field}' of layer '{layer}' are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
-      <translation>Varios identificadores de estrato del campo «{field}» de la capa «{layer}» los llevan varias entidades: {value} (entidades {ids}) y {more} identificador(es) más ({others}), así que cada una de esas entidades recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
+        <location filename="../processing/engine/allocation.py" line="455"/>
+        <source>Several stratum ids in field &apos;{field}&apos; of layer &apos;{layer}&apos; are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
+        <translation>Varios identificadores de estrato del campo «{field}» de la capa «{layer}» los llevan varias entidades: {value} (entidades {ids}) y {more} identificador(es) más ({others}), así que cada una de esas entidades recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="474" />
-      <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
-      <translation>Valor NULL o negativo ({name}) para las entidades de estrato {shown}. Introduzca un valor no negativo para cada estrato, o quite esos estratos de la capa.</translation>
+        <location filename="../processing/engine/allocation.py" line="475"/>
+        <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
+        <translation>Valor NULL o negativo ({name}) para las entidades de estrato {shown}. Introduzca un valor no negativo para cada estrato, o quite esos estratos de la capa.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="478" />
-      <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
-      <translation>Valor NULL, negativo o cero ({name}) para las entidades de estrato {shown}. Introduzca un valor positivo para cada estrato, o quite esos estratos de la capa.</translation>
+        <location filename="../processing/engine/allocation.py" line="479"/>
+        <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
+        <translation>Valor NULL, negativo o cero ({name}) para las entidades de estrato {shown}. Introduzca un valor positivo para cada estrato, o quite esos estratos de la capa.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="545" />
-      <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
-      <translation>Método de asignación desconocido {method!r}; use uno de: {methods}.</translation>
+        <location filename="../processing/engine/allocation.py" line="546"/>
+        <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
+        <translation>Método de asignación desconocido {method!r}; use uno de: {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="549" />
-      <source>The strata layer has no features. Run the stratification first.</source>
-      <translation>La capa de estratos no tiene entidades. Ejecute primero la estratificación.</translation>
+        <location filename="../processing/engine/allocation.py" line="551"/>
+        <source>The strata layer has no features. Run the stratification first.</source>
+        <translation>La capa de estratos no tiene entidades. Ejecute primero la estratificación.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="554" />
-      <source>The unit area must be a positive number.</source>
-      <translation>El área de la unidad debe ser un número positivo.</translation>
+        <location filename="../processing/engine/allocation.py" line="557"/>
+        <source>The unit area must be a positive number.</source>
+        <translation>El área de la unidad debe ser un número positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="557" />
-      <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
-      <translation>El mínimo por estrato debe ser al menos 1 (2 permite estimar la varianza de cada estrato).</translation>
+        <location filename="../processing/engine/allocation.py" line="560"/>
+        <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
+        <translation>El mínimo por estrato debe ser al menos 1 (2 permite estimar la varianza de cada estrato).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="570" />
-      <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
-      <translation>El método por coste necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
+        <location filename="../processing/engine/allocation.py" line="572"/>
+        <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
+        <translation>El método por coste necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="572" />
-      <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
-      <translation>El presupuesto necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
+        <location filename="../processing/engine/allocation.py" line="572"/>
+        <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
+        <translation>El presupuesto necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="576" />
-      <source>The fixed cost must be zero or positive.</source>
-      <translation>El coste fijo debe ser cero o positivo.</translation>
+        <location filename="../processing/engine/allocation.py" line="581"/>
+        <source>The fixed cost must be zero or positive.</source>
+        <translation>El coste fijo debe ser cero o positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="583" />
-      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
-      <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (proporcional al área).</translation>
+        <location filename="../processing/engine/allocation.py" line="587"/>
+        <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
+        <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (proporcional al área).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="586" />
-      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
-      <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (área / raíz cuadrada del coste).</translation>
+        <location filename="../processing/engine/allocation.py" line="587"/>
+        <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
+        <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (área / raíz cuadrada del coste).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="591" />
-      <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
-      <translation>Todas las desviaciones estándar piloto son cero: se usa en su lugar la asignación proporcional.</translation>
+        <location filename="../processing/engine/allocation.py" line="598"/>
+        <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
+        <translation>Todas las desviaciones estándar piloto son cero: se usa en su lugar la asignación proporcional.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="595" />
-      <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
-      <translation>Valor cero ({name}) para las entidades de estrato {shown}: reciben solo el mínimo de {minimum} unidad(es). Un piloto sin variación rara vez refleja la realidad; compruébelo.</translation>
+        <location filename="../processing/engine/allocation.py" line="603"/>
+        <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
+        <translation>Valor cero ({name}) para las entidades de estrato {shown}: reciben solo el mínimo de {minimum} unidad(es). Un piloto sin variación rara vez refleja la realidad; compruébelo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="607" />
-      <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
-      <translation>Las entidades de estrato {shown} son más pequeñas que una unidad de muestreo de {unit_area:g}. Fusiónelas con una vecina o use un área de unidad menor.</translation>
+        <location filename="../processing/engine/allocation.py" line="614"/>
+        <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
+        <translation>Las entidades de estrato {shown} son más pequeñas que una unidad de muestreo de {unit_area:g}. Fusiónelas con una vecina o use un área de unidad menor.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="614" />
-      <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
-      <translation>Las entidades de estrato {shown} contienen menos de {minimum} unidades: reciben todas las unidades que caben.</translation>
+        <location filename="../processing/engine/allocation.py" line="623"/>
+        <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
+        <translation>Las entidades de estrato {shown} contienen menos de {minimum} unidades: reciben todas las unidades que caben.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="623" />
-      <source>A target CV is set: the budget is not used.</source>
-      <translation>Hay un CV objetivo: no se usa el presupuesto.</translation>
+        <location filename="../processing/engine/allocation.py" line="632"/>
+        <source>A target CV is set: the budget is not used.</source>
+        <translation>Hay un CV objetivo: no se usa el presupuesto.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="629" />
-      <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
-      <translation>El presupuesto {budget:g} es inferior al mínimo de {minimum:g} (coste fijo {fixed_cost:g} más {per_stratum} unidad(es) en cada estrato a su coste). Aumente el presupuesto o baje el mínimo por estrato.</translation>
+        <location filename="../processing/engine/allocation.py" line="638"/>
+        <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
+        <translation>El presupuesto {budget:g} es inferior al mínimo de {minimum:g} (coste fijo {fixed_cost:g} más {per_stratum} unidad(es) en cada estrato a su coste). Aumente el presupuesto o baje el mínimo por estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="636" />
-      <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
-      <translation>El presupuesto supera el coste de todas las unidades que caben ({maximum:g}): se toman todas.</translation>
+        <location filename="../processing/engine/allocation.py" line="645"/>
+        <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
+        <translation>El presupuesto supera el coste de todas las unidades que caben ({maximum:g}): se toman todas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="644" />
-      <source>Give a total number of units, a budget (with costs) or a target CV.</source>
-      <translation>Indique un número total de unidades, un presupuesto (con costes) o un CV objetivo.</translation>
+        <location filename="../processing/engine/allocation.py" line="653"/>
+        <source>Give a total number of units, a budget (with costs) or a target CV.</source>
+        <translation>Indique un número total de unidades, un presupuesto (con costes) o un CV objetivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="647" />
-      <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
-      <translation>El total de {total} unidades es inferior al mínimo de {minimum} ({per_stratum} por estrato en {n_strata} estratos). Aumente el total o baje el mínimo.</translation>
+        <location filename="../processing/engine/allocation.py" line="657"/>
+        <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
+        <translation>El total de {total} unidades es inferior al mínimo de {minimum} ({per_stratum} por estrato en {n_strata} estratos). Aumente el total o baje el mínimo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="652" />
-      <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
-      <translation>El total de {total} unidades supera las {fit} unidades de {unit_area:g} que caben en los estratos. Baje el total o use unidades más pequeñas.</translation>
+        <location filename="../processing/engine/allocation.py" line="662"/>
+        <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
+        <translation>El total de {total} unidades supera las {fit} unidades de {unit_area:g} que caben en los estratos. Baje el total o use unidades más pequeñas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="662" />
-      <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
-      <translation>Las entidades de estrato {shown} reciben una sola unidad: su varianza no puede estimarse.</translation>
+        <location filename="../processing/engine/allocation.py" line="672"/>
+        <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
+        <translation>Las entidades de estrato {shown} reciben una sola unidad: su varianza no puede estimarse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="667" />
-      <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
-      <translation>Las entidades de estrato {shown} se muestrean por completo (todas las unidades que caben).</translation>
+        <location filename="../processing/engine/allocation.py" line="677"/>
+        <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
+        <translation>Las entidades de estrato {shown} se muestrean por completo (todas las unidades que caben).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="672" />
-      <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
-      <translation>Valor cero ({name}) en las entidades de estrato {shown}: su CV no está definido.</translation>
+        <location filename="../processing/engine/allocation.py" line="683"/>
+        <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
+        <translation>Valor cero ({name}) en las entidades de estrato {shown}: su CV no está definido.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="696" />
-      <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
-      <translation>Un CV objetivo necesita la desviación estándar piloto y el conteo medio piloto por unidad: elija el campo de DE y el campo de media.</translation>
+        <location filename="../processing/engine/allocation.py" line="708"/>
+        <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
+        <translation>Un CV objetivo necesita la desviación estándar piloto y el conteo medio piloto por unidad: elija el campo de DE y el campo de media.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="701" />
-      <source>The {name} is zero in every stratum: no CV can be computed.</source>
-      <translation>Valor cero ({name}) en todos los estratos: no puede calcularse ningún CV.</translation>
+        <location filename="../processing/engine/allocation.py" line="713"/>
+        <source>The {name} is zero in every stratum: no CV can be computed.</source>
+        <translation>Valor cero ({name}) en todos los estratos: no puede calcularse ningún CV.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="711" />
-      <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
-      <translation>El CV objetivo de {target_cv:.3g} no puede alcanzarse: incluso las {fit} unidades que caben dan un CV esperado de {cv:.3g}. Acepte un CV de al menos {cv:.3g}, o use unidades más pequeñas.</translation>
+        <location filename="../processing/engine/allocation.py" line="724"/>
+        <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
+        <translation>El CV objetivo de {target_cv:.3g} no puede alcanzarse: incluso las {fit} unidades que caben dan un CV esperado de {cv:.3g}. Acepte un CV de al menos {cv:.3g}, o use unidades más pequeñas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="31" />
-      <source>needs a positive area_m2</source>
-      <translation>necesita un area_m2 positivo</translation>
+        <location filename="../processing/engine/counting.py" line="31"/>
+        <source>needs a positive area_m2</source>
+        <translation>necesita un area_m2 positivo</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="36" />
-      <source>has a line of zero length</source>
-      <translation>tiene una línea de longitud cero</translation>
+        <location filename="../processing/engine/counting.py" line="36"/>
+        <source>has a line of zero length</source>
+        <translation>tiene una línea de longitud cero</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="38" />
-      <source>has an unsupported geometry type ({kind})</source>
-      <translation>tiene un tipo de geometría no admitido ({kind})</translation>
+        <location filename="../processing/engine/counting.py" line="38"/>
+        <source>has an unsupported geometry type ({kind})</source>
+        <translation>tiene un tipo de geometría no admitido ({kind})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="64" />
-      <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
-      <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {detection:g}).</translation>
+        <location filename="../processing/engine/counting.py" line="65"/>
+        <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
+        <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {detection:g}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/demo_reserve.py" line="108" />
-      <source>Could not place the demo lake; try another seed.</source>
-      <translation>No se pudo colocar el lago de demostración; pruebe otra semilla.</translation>
+        <location filename="../processing/engine/demo_reserve.py" line="108"/>
+        <source>Could not place the demo lake; try another seed.</source>
+        <translation>No se pudo colocar el lago de demostración; pruebe otra semilla.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/demo_reserve.py" line="184" />
-      <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
-      <translation>El tamaño de celda debe estar entre 10 y 500 m (se recibió {cell_size:g} m).</translation>
+        <location filename="../processing/engine/demo_reserve.py" line="184"/>
+        <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
+        <translation>El tamaño de celda debe estar entre 10 y 500 m (se recibió {cell_size:g} m).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="211" />
-      <source>The density surface must be a single raster band.</source>
-      <translation>La superficie de densidad debe ser una sola banda ráster.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="213"/>
+        <source>The density surface must be a single raster band.</source>
+        <translation>La superficie de densidad debe ser una sola banda ráster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="214" />
-      <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
-      <translation>La superficie de densidad debe ser un ráster orientado al norte (sin rotación); reproyéctela primero.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="217"/>
+        <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
+        <translation>La superficie de densidad debe ser un ráster orientado al norte (sin rotación); reproyéctela primero.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="222" />
-      <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
-      <translation>La superficie de densidad no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona (y sus sistemas de referencia de coordenadas).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="226"/>
+        <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
+        <translation>La superficie de densidad no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona (y sus sistemas de referencia de coordenadas).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="241" />
-      <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
-      <translation>Un estrato no tiene valor de estrato (NULL). Dé un valor a cada estrato.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="245"/>
+        <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
+        <translation>Un estrato no tiene valor de estrato (NULL). Dé un valor a cada estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="265" />
-      <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
-      <translation>{overlap} celda(s) de la superficie están en más de un estrato; cada una se asignó al primero. Los estratos no deberían superponerse.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="270"/>
+        <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
+        <translation>{overlap} celda(s) de la superficie están en más de un estrato; cada una se asignó al primero. Los estratos no deberían superponerse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="270" />
-      <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
-      <translation>Ningún centro de celda de la superficie de densidad cae en el marco de muestreo: las celdas son demasiado gruesas para él, o ambos no se superponen.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="275"/>
+        <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
+        <translation>Ningún centro de celda de la superficie de densidad cae en el marco de muestreo: las celdas son demasiado gruesas para él, o ambos no se superponen.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="276" />
-      <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
-      <translation>La superficie de densidad tiene {n} celda(s) negativa(s) en el marco de muestreo. Los animales esperados por km² deben ser 0 o más: corrija la superficie (por ejemplo, recórtela en 0).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="281"/>
+        <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
+        <translation>La superficie de densidad tiene {n} celda(s) negativa(s) en el marco de muestreo. Los animales esperados por km² deben ser 0 o más: corrija la superficie (por ejemplo, recórtela en 0).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="282" />
-      <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
-      <translation>{n} celda(s) del marco de muestreo ({share:.1%}) no tienen valor en la superficie de densidad y quedan fuera de la población: la comparación vale para el resto del marco.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="287"/>
+        <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
+        <translation>{n} celda(s) del marco de muestreo ({share:.1%}) no tienen valor en la superficie de densidad y quedan fuera de la población: la comparación vale para el resto del marco.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="289" />
-      <source>The density surface has no value in the frame.</source>
-      <translation>La superficie de densidad no tiene ningún valor en el marco de muestreo.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="294"/>
+        <source>The density surface has no value in the frame.</source>
+        <translation>La superficie de densidad no tiene ningún valor en el marco de muestreo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="295" />
-      <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
-      <translation>Los estratos {ids} no contienen ningún centro de celda de la superficie de densidad dentro del marco de muestreo. Quítelos, fusiónelos con un vecino, o use una superficie más fina.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="300"/>
+        <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
+        <translation>Los estratos {ids} no contienen ningún centro de celda de la superficie de densidad dentro del marco de muestreo. Quítelos, fusiónelos con un vecino, o use una superficie más fina.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="363" />
-      <location filename="../processing/engine/layout.py" line="170" />
-      <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
-      <translation>SHAPE debe ser 0 (punto), 1 (cuadrado), 2 (círculo) o 3 (transecto lineal).</translation>
+        <location filename="../processing/engine/layout.py" line="199"/>
+        <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
+        <translation>SHAPE debe ser 0 (punto), 1 (cuadrado), 2 (círculo) o 3 (transecto lineal).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
-      <translation>SIZE debe ser mayor que 0 m: es el radio de conteo de una estación puntual.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="93"/>
+        <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
+        <translation>SIZE debe ser mayor que 0 m: es el radio de conteo de una estación puntual.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the square unit's size.</source>
-      <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad cuadrada.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="96"/>
+        <source>SIZE must be more than 0 m: it is the square unit&apos;s size.</source>
+        <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad cuadrada.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the circle unit's size.</source>
-      <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad circular.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="97"/>
+        <source>SIZE must be more than 0 m: it is the circle unit&apos;s size.</source>
+        <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad circular.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the line unit's size.</source>
-      <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad lineal.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="98"/>
+        <source>SIZE must be more than 0 m: it is the line unit&apos;s size.</source>
+        <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad lineal.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="367" />
-      <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
-      <translation>Un transecto lineal necesita la semianchura de su franja de conteo (más de 0 m): los animales se cuentan hasta esa distancia a cada lado de la línea.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="375"/>
+        <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
+        <translation>Un transecto lineal necesita la semianchura de su franja de conteo (más de 0 m): los animales se cuentan hasta esa distancia a cada lado de la línea.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="624" />
-      <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
-      <translation>La sobredispersión k debe ser 0 (conteos de Poisson) o más.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="632"/>
+        <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
+        <translation>La sobredispersión k debe ser 0 (conteos de Poisson) o más.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="640" />
-      <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
-      <translation>Los estratos cubren el {share:.1%} del marco de muestreo: cada diseño se compara en la parte que cubren.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="649"/>
+        <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
+        <translation>Los estratos cubren el {share:.1%} del marco de muestreo: cada diseño se compara en la parte que cubren.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="649" />
-      <source>A stratum of the layout has no cells on the surface grid.</source>
-      <translation>Un estrato de la disposición no tiene celdas en la cuadrícula de la superficie.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="658"/>
+        <source>A stratum of the layout has no cells on the surface grid.</source>
+        <translation>Un estrato de la disposición no tiene celdas en la cuadrícula de la superficie.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="729" />
-      <source>Unknown design {design}; use 0 to {last}.</source>
-      <translation>Diseño desconocido {design}; use de 0 a {last}.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="739"/>
+        <source>Unknown design {design}; use 0 to {last}.</source>
+        <translation>Diseño desconocido {design}; use de 0 a {last}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="732" />
-      <source>N_UNITS must be at least {minimum}.</source>
-      <translation>N_UNITS debe ser al menos {minimum}.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="743"/>
+        <source>N_UNITS must be at least {minimum}.</source>
+        <translation>N_UNITS debe ser al menos {minimum}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="737" />
-      <source>The {design} design needs strata: give the STRATA layer.</source>
-      <translation>El diseño «{design}» necesita estratos: indique la capa STRATA.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="749"/>
+        <source>The {design} design needs strata: give the STRATA layer.</source>
+        <translation>El diseño «{design}» necesita estratos: indique la capa STRATA.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>simple random</source>
-      <translation>aleatorio simple</translation>
+        <location filename="../processing/engine/layout.py" line="70"/>
+        <source>simple random</source>
+        <translation>aleatorio simple</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>stratified proportional</source>
-      <translation>estratificado proporcional</translation>
+        <location filename="../processing/engine/design_comparison.py" line="84"/>
+        <source>stratified proportional</source>
+        <translation>estratificado proporcional</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>stratified Neyman</source>
-      <translation>estratificado Neyman</translation>
+        <location filename="../processing/engine/design_comparison.py" line="84"/>
+        <source>stratified Neyman</source>
+        <translation>estratificado Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>systematic grid</source>
-      <translation>cuadrícula sistemática</translation>
+        <location filename="../processing/engine/layout.py" line="70"/>
+        <source>systematic grid</source>
+        <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>spatially balanced</source>
-      <translation>espacialmente equilibrado</translation>
+        <location filename="../processing/engine/layout.py" line="70"/>
+        <source>spatially balanced</source>
+        <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="814" />
-      <source>REPLICATES must be at least 2.</source>
-      <translation>REPLICATES debe ser al menos 2.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="827"/>
+        <source>REPLICATES must be at least 2.</source>
+        <translation>REPLICATES debe ser al menos 2.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="819" />
-      <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
-      <translation>Cada muestreo simulado contaría unos {millions:.0f} millones de celdas de la superficie ({units} unidades de {unit_area:,.0f} m² en celdas de {cell_width:g} m), demasiadas para simular. Remuestree la superficie a celdas más gruesas, o compare menos diseños o unidades.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="832"/>
+        <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
+        <translation>Cada muestreo simulado contaría unos {millions:.0f} millones de celdas de la superficie ({units} unidades de {unit_area:,.0f} m² en celdas de {cell_width:g} m), demasiadas para simular. Remuestree la superficie a celdas más gruesas, o compare menos diseños o unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1067" />
-      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
-      <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde de su estrato cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más compactos, lo reducen.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1080"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
+        <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde de su estrato cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más compactos, lo reducen.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1067" />
-      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
-      <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde del marco de muestreo cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas lo reducen.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1080"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
+        <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde del marco de muestreo cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas lo reducen.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1102" />
-      <source>{design}: {warning}</source>
-      <translation>{design}: {warning}</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1116"/>
+        <source>{design}: {warning}</source>
+        <translation>{design}: {warning}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1104" />
-      <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
-      <translation>{design} con {n_units} unidades: {failed} de los {replicates} muestreos simulados no dieron estimación (un estrato sin unidad contada, o ninguna unidad en el marco de muestreo); se excluyen de sus cifras.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1119"/>
+        <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
+        <translation>{design} con {n_units} unidades: {failed} de los {replicates} muestreos simulados no dieron estimación (un estrato sin unidad contada, o ninguna unidad en el marco de muestreo); se excluyen de sus cifras.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1142" />
-      <source>The range of units '{text}' cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
-      <translation>El rango de unidades «{text}» no puede leerse. Indique números enteros separados por comas (p. ej. 20, 40, 80) o inicio:fin:paso (p. ej. 20:100:20).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1157"/>
+        <source>The range of units &apos;{text}&apos; cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
+        <translation>El rango de unidades «{text}» no puede leerse. Indique números enteros separados por comas (p. ej. 20, 40, 80) o inicio:fin:paso (p. ej. 20:100:20).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1148" />
-      <source>In the range of units '{text}', '{part}' starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
-      <translation>En el rango de unidades «{text}», «{part}» empieza por encima de donde termina (inicio {start}, fin {stop}), así que no contiene ningún número de unidades. Escriba inicio:fin:paso con el inicio menor o igual que el fin (p. ej. {stop}:{start}:{step}).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1163"/>
+        <source>In the range of units &apos;{text}&apos;, &apos;{part}&apos; starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
+        <translation>En el rango de unidades «{text}», «{part}» empieza por encima de donde termina (inicio {start}, fin {stop}), así que no contiene ningún número de unidades. Escriba inicio:fin:paso con el inicio menor o igual que el fin (p. ej. {stop}:{start}:{step}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1153" />
-      <source>Every number of units in the range must be at least {minimum}.</source>
-      <translation>Cada número de unidades del rango debe ser al menos {minimum}.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1168"/>
+        <source>Every number of units in the range must be at least {minimum}.</source>
+        <translation>Cada número de unidades del rango debe ser al menos {minimum}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1156" />
-      <source>The range of units holds more than 20 values; give at most 20.</source>
-      <translation>El rango de unidades tiene más de 20 valores; indique como máximo 20.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1172"/>
+        <source>The range of units holds more than 20 values; give at most 20.</source>
+        <translation>El rango de unidades tiene más de 20 valores; indique como máximo 20.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="292" />
-      <location filename="../processing/engine/geometry.py" line="210" />
-      <source>{shown} … ({n} in all)</source>
-      <translation>{shown} … ({n} en total)</translation>
+        <location filename="../processing/engine/geometry.py" line="211"/>
+        <source>{shown} … ({n} in all)</source>
+        <translation>{shown} … ({n} en total)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="326" />
-      <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
-      <translation>El campo {count_name} contiene valores que no son números para las unidades {ids}. Introduzca un conteo entero (0 si se muestreó y no se vio ninguno) o deje el campo vacío (NULL) para las unidades no muestreadas.</translation>
+        <location filename="../processing/engine/estimation.py" line="325"/>
+        <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
+        <translation>El campo {count_name} contiene valores que no son números para las unidades {ids}. Introduzca un conteo entero (0 si se muestreó y no se vio ninguno) o deje el campo vacío (NULL) para las unidades no muestreadas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="336" />
-      <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
-      <translation>El campo {count_name} contiene conteos negativos o infinitos para las unidades {ids}. Los conteos deben ser 0 o más; corríjalos, o deje el campo vacío (NULL) si la unidad no se muestreó.</translation>
+        <location filename="../processing/engine/estimation.py" line="336"/>
+        <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
+        <translation>El campo {count_name} contiene conteos negativos o infinitos para las unidades {ids}. Los conteos deben ser 0 o más; corríjalos, o deje el campo vacío (NULL) si la unidad no se muestreó.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="486" />
-      <source>Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
-      <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos cubren {area:.4g} {unit} que ningún estrato cubre, así que la estimación hablaría sin avisar de un marco de muestreo más pequeño. Dé a cada polígono el identificador de su estrato, elimine los polígonos que no forman parte del marco, o elija dejar fuera los estratos sin unidades muestreadas (el marco se reduce entonces).</translation>
+        <location filename="../processing/engine/estimation.py" line="487"/>
+        <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
+        <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos cubren {area:.4g} {unit} que ningún estrato cubre, así que la estimación hablaría sin avisar de un marco de muestreo más pequeño. Dé a cada polígono el identificador de su estrato, elimine los polígonos que no forman parte del marco, o elija dejar fuera los estratos sin unidades muestreadas (el marco se reduce entonces).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="493" />
-      <source>Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
-      <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos se dejaron fuera, y el marco de muestreo se redujo en la parte que ningún estrato cubre: {area:.4g} {unit}. Para mantenerlos en el marco, dé a cada polígono el identificador de su estrato.</translation>
+        <location filename="../processing/engine/estimation.py" line="496"/>
+        <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
+        <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos se dejaron fuera, y el marco de muestreo se redujo en la parte que ningún estrato cubre: {area:.4g} {unit}. Para mantenerlos en el marco, dé a cada polígono el identificador de su estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="499" />
-      <source>Layer '{layer}': no polygon has a stratum id in the field '{field}'. Fill in the stratum ids, or choose the field that holds them.</source>
-      <translation>Capa «{layer}»: ningún polígono tiene identificador de estrato en el campo «{field}». Rellene los identificadores de estrato, o elija el campo que los contiene.</translation>
+        <location filename="../processing/engine/estimation.py" line="501"/>
+        <source>Layer &apos;{layer}&apos;: no polygon has a stratum id in the field &apos;{field}&apos;. Fill in the stratum ids, or choose the field that holds them.</source>
+        <translation>Capa «{layer}»: ningún polígono tiene identificador de estrato en el campo «{field}». Rellene los identificadores de estrato, o elija el campo que los contiene.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="516" />
-      <source>Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
-      <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se contarían en más de un estrato, lo que infla el área del marco de muestreo y la abundancia. Corrija los polígonos de los estratos para que no se solapen: cada trozo de terreno pertenece a un solo estrato (recorte cada solape de todos los estratos salvo uno, o vuelva a trazar los bordes comunes).</translation>
+        <location filename="../processing/engine/estimation.py" line="519"/>
+        <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
+        <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se contarían en más de un estrato, lo que infla el área del marco de muestreo y la abundancia. Corrija los polígonos de los estratos para que no se solapen: cada trozo de terreno pertenece a un solo estrato (recorte cada solape de todos los estratos salvo uno, o vuelva a trazar los bordes comunes).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="523" />
-      <source>Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
-      <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se cuentan en más de un estrato, por lo que el área del marco de muestreo y la abundancia son algo mayores de lo debido. Corrija los polígonos de los estratos para que no se solapen (ajuste los bordes comunes con el autoensamblado, o recorte cada solape de todos los estratos salvo uno).</translation>
+        <location filename="../processing/engine/estimation.py" line="528"/>
+        <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
+        <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se cuentan en más de un estrato, por lo que el área del marco de muestreo y la abundancia son algo mayores de lo debido. Corrija los polígonos de los estratos para que no se solapen (ajuste los bordes comunes con el autoensamblado, o recorte cada solape de todos los estratos salvo uno).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="618" />
-      <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
-      <translation>El nivel de confianza debe estar entre 0 y 1 (se recibió {confidence}); use p. ej. 0.95.</translation>
+        <location filename="../processing/engine/estimation.py" line="623"/>
+        <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
+        <translation>El nivel de confianza debe estar entre 0 y 1 (se recibió {confidence}); use p. ej. 0.95.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="621" />
-      <source>Unknown interval method {method!r}; use one of {methods}.</source>
-      <translation>Método de intervalo desconocido {method!r}; use uno de {methods}.</translation>
+        <location filename="../processing/engine/estimation.py" line="627"/>
+        <source>Unknown interval method {method!r}; use one of {methods}.</source>
+        <translation>Método de intervalo desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="624" />
-      <source>Unknown variance method {method!r}; use one of {methods}.</source>
-      <translation>Método de varianza desconocido {method!r}; use uno de {methods}.</translation>
+        <location filename="../processing/engine/estimation.py" line="631"/>
+        <source>Unknown variance method {method!r}; use one of {methods}.</source>
+        <translation>Método de varianza desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="627" />
-      <source>The detection probability must lie in (0, 1] (got {p}).</source>
-      <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {p}).</translation>
+        <location filename="../processing/engine/estimation.py" line="635"/>
+        <source>The detection probability must lie in (0, 1] (got {p}).</source>
+        <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {p}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="629" />
-      <source>The standard error of the detection probability must be 0 or more.</source>
-      <translation>El error estándar de la probabilidad de detección debe ser 0 o más.</translation>
+        <location filename="../processing/engine/estimation.py" line="638"/>
+        <source>The standard error of the detection probability must be 0 or more.</source>
+        <translation>El error estándar de la probabilidad de detección debe ser 0 o más.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="638" />
-      <source>unit_ids must have one id per unit.</source>
-      <translation>unit_ids debe tener un identificador por unidad.</translation>
+        <location filename="../processing/engine/estimation.py" line="648"/>
+        <source>unit_ids must have one id per unit.</source>
+        <translation>unit_ids debe tener un identificador por unidad.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="642" />
-      <source>counts, unit_areas and strata must have one value per unit.</source>
-      <translation>counts, unit_areas y strata deben tener un valor por unidad.</translation>
+        <location filename="../processing/engine/estimation.py" line="652"/>
+        <source>counts, unit_areas and strata must have one value per unit.</source>
+        <translation>counts, unit_areas y strata deben tener un valor por unidad.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="651" />
-      <source>Strata {ids} have no area. Check the strata layer's geometries.</source>
-      <translation>Los estratos {ids} no tienen área. Compruebe las geometrías de la capa de estratos.</translation>
+        <location filename="../processing/engine/estimation.py" line="661"/>
+        <source>Strata {ids} have no area. Check the strata layer&apos;s geometries.</source>
+        <translation>Los estratos {ids} no tienen área. Compruebe las geometrías de la capa de estratos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="659" />
-      <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
-      <translation>Las unidades {ids} no tienen estrato (el campo de estrato está vacío). Rellene su estrato, u omita el campo de estrato para tratar el marco de muestreo como un solo estrato.</translation>
+        <location filename="../processing/engine/estimation.py" line="670"/>
+        <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
+        <translation>Las unidades {ids} no tienen estrato (el campo de estrato está vacío). Rellene su estrato, u omita el campo de estrato para tratar el marco de muestreo como un solo estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="669" />
-      <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
-      <translation>Las unidades {ids} tienen identificadores de estrato ({names}) que no están en la capa de estratos. Compruebe el campo de estrato de las unidades y el campo identificador de la capa de estratos.</translation>
+        <location filename="../processing/engine/estimation.py" line="681"/>
+        <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
+        <translation>Las unidades {ids} tienen identificadores de estrato ({names}) que no están en la capa de estratos. Compruebe el campo de estrato de las unidades y el campo identificador de la capa de estratos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="677" />
-      <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
-      <translation>{n} unidad(es) no tienen conteo y se tratan como no muestreadas (no respuesta): {ids}.</translation>
+        <location filename="../processing/engine/estimation.py" line="691"/>
+        <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
+        <translation>{n} unidad(es) no tienen conteo y se tratan como no muestreadas (no respuesta): {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="682" />
-      <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
-      <translation>Ninguna unidad tiene conteo, así que no puede estimarse nada. Introduzca los conteos de las unidades muestreadas (0 si no se vio ninguno) en el campo de conteo.</translation>
+        <location filename="../processing/engine/estimation.py" line="696"/>
+        <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
+        <translation>Ninguna unidad tiene conteo, así que no puede estimarse nada. Introduzca los conteos de las unidades muestreadas (0 si no se vio ninguno) en el campo de conteo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="689" />
-      <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
-      <translation>Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
+        <location filename="../processing/engine/estimation.py" line="702"/>
+        <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
+        <translation>Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="699" />
-      <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
-      <translation>Los datos de presencia deben ser 0 o 1; las unidades {ids} contienen otros valores. Use los conteos sin la opción de presencia, o recodifique el campo.</translation>
+        <location filename="../processing/engine/estimation.py" line="713"/>
+        <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
+        <translation>Los datos de presencia deben ser 0 o 1; las unidades {ids} contienen otros valores. Use los conteos sin la opción de presencia, o recodifique el campo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="704" />
-      <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
-      <translation>La probabilidad de detección no se aplicó a los datos de presencia: dividir una proporción de unidades ocupadas por p no es una corrección de ocupación, que requiere visitas repetidas.</translation>
+        <location filename="../processing/engine/estimation.py" line="720"/>
+        <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
+        <translation>La probabilidad de detección no se aplicó a los datos de presencia: dividir una proporción de unidades ocupadas por p no es una corrección de ocupación, que requiere visitas repetidas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="723" />
-      <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
-      <translation>Ninguna unidad de los estratos {ids} se muestreó, así que su abundancia no puede estimarse. Muestree unidades allí, o elija dejar fuera esos estratos (la estimación cubre entonces un marco de muestreo menor).</translation>
+        <location filename="../processing/engine/estimation.py" line="738"/>
+        <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
+        <translation>Ninguna unidad de los estratos {ids} se muestreó, así que su abundancia no puede estimarse. Muestree unidades allí, o elija dejar fuera esos estratos (la estimación cubre entonces un marco de muestreo menor).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="729" />
-      <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
-      <translation>Los estratos {ids} no tenían ninguna unidad muestreada y se dejaron fuera: el marco de muestreo se redujo en {dropped_area:.6g} unidades de área, y la estimación cubre solo los estratos restantes.</translation>
+        <location filename="../processing/engine/estimation.py" line="746"/>
+        <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
+        <translation>Los estratos {ids} no tenían ninguna unidad muestreada y se dejaron fuera: el marco de muestreo se redujo en {dropped_area:.6g} unidades de área, y la estimación cubre solo los estratos restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="745" />
-      <source>The local neighbourhood variance needs the positions of the units.</source>
-      <translation>La varianza de vecindad local necesita las posiciones de las unidades.</translation>
+        <location filename="../processing/engine/estimation.py" line="762"/>
+        <source>The local neighbourhood variance needs the positions of the units.</source>
+        <translation>La varianza de vecindad local necesita las posiciones de las unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="750" />
-      <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
-      <translation>Las unidades {ids} no tienen posición, así que la varianza de vecindad local no puede usarlas. Indique sus ubicaciones, o use la fórmula del muestreo aleatorio simple.</translation>
+        <location filename="../processing/engine/estimation.py" line="767"/>
+        <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
+        <translation>Las unidades {ids} no tienen posición, así que la varianza de vecindad local no puede usarlas. Indique sus ubicaciones, o use la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="775" />
-      <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
-      <translation>En los estratos {ids} el área muestreada supera el área del estrato. Compruebe las áreas de las unidades y la unidad de área, o desactive la corrección por población finita.</translation>
+        <location filename="../processing/engine/estimation.py" line="793"/>
+        <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
+        <translation>En los estratos {ids} el área muestreada supera el área del estrato. Compruebe las áreas de las unidades y la unidad de área, o desactive la corrección por población finita.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="816" />
-      <source>{label} (one unit) collapsed with {others}</source>
-      <translation>{label} (una unidad) agrupado con {others}</translation>
+        <location filename="../processing/engine/estimation.py" line="835"/>
+        <source>{label} (one unit) collapsed with {others}</source>
+        <translation>{label} (una unidad) agrupado con {others}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="821" />
-      <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
-      <translation>Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
+        <location filename="../processing/engine/estimation.py" line="842"/>
+        <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
+        <translation>Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="826" />
-      <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
-      <translation>El único estrato tiene una sola unidad muestreada: no puede estimarse ninguna varianza, error estándar ni intervalo. Muestree al menos dos unidades.</translation>
+        <location filename="../processing/engine/estimation.py" line="847"/>
+        <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
+        <translation>El único estrato tiene una sola unidad muestreada: no puede estimarse ninguna varianza, error estándar ni intervalo. Muestree al menos dos unidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="842" />
-      <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
-      <translation>Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
+        <location filename="../processing/engine/estimation.py" line="863"/>
+        <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
+        <translation>Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="878" />
-      <source>The bootstrap needs a random generator (rng).</source>
-      <translation>El bootstrap necesita un generador aleatorio (rng).</translation>
+        <location filename="../processing/engine/estimation.py" line="899"/>
+        <source>The bootstrap needs a random generator (rng).</source>
+        <translation>El bootstrap necesita un generador aleatorio (rng).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="910" />
-      <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
-      <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0 y su CV no está definido.</translation>
+        <location filename="../processing/engine/estimation.py" line="932"/>
+        <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
+        <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0 y su CV no está definido.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="913" />
-      <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
-      <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
+        <location filename="../processing/engine/estimation.py" line="936"/>
+        <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
+        <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="958" />
-      <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own CV is {cv_p:.3g}. Improve the detection study first.</source>
-      <translation>El CV objetivo {target_cv:.3g} no puede alcanzarse con más unidades: el CV propio de la probabilidad de detección es {cv_p:.3g}. Mejore primero el estudio de detección.</translation>
+        <location filename="../processing/engine/estimation.py" line="981"/>
+        <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability&apos;s own CV is {cv_p:.3g}. Improve the detection study first.</source>
+        <translation>El CV objetivo {target_cv:.3g} no puede alcanzarse con más unidades: el CV propio de la probabilidad de detección es {cv_p:.3g}. Mejore primero el estudio de detección.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="967" />
-      <source>No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.</source>
-      <translation>No se observó variación, así que los tamaños de muestra del próximo muestreo se fijan en el mínimo de 2 por estrato.</translation>
+        <location filename="../processing/engine/estimation.py" line="990"/>
+        <source>No variation was observed, so the next survey&apos;s sample sizes are set to the minimum of 2 per stratum.</source>
+        <translation>No se observó variación, así que los tamaños de muestra del próximo muestreo se fijan en el mínimo de 2 por estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="223" />
-      <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
-      <translation>EDGE_BUFFER es {edge_buffer} m; debe ser cero o una distancia positiva en metros.</translation>
+        <location filename="../processing/engine/frame.py" line="223"/>
+        <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
+        <translation>EDGE_BUFFER es {edge_buffer} m; debe ser cero o una distancia positiva en metros.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="230" />
-      <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
-      <translation>El área de estudio (INPUT) no tiene ningún polígono con área positiva. Compruebe que la capa contiene polígonos y está en un SRC proyectado en metros.</translation>
+        <location filename="../processing/engine/frame.py" line="230"/>
+        <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
+        <translation>El área de estudio (INPUT) no tiene ningún polígono con área positiva. Compruebe que la capa contiene polígonos y está en un SRC proyectado en metros.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="278" />
-      <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
-      <translation>No queda nada del área de estudio (INPUT) tras quitar los polígonos excluidos (EXCLUDE): cubren las {hectares:.4g} ha. Compruebe que EXCLUDE contiene solo las zonas que hay que dejar fuera.</translation>
+        <location filename="../processing/engine/frame.py" line="278"/>
+        <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
+        <translation>No queda nada del área de estudio (INPUT) tras quitar los polígonos excluidos (EXCLUDE): cubren las {hectares:.4g} ha. Compruebe que EXCLUDE contiene solo las zonas que hay que dejar fuera.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="284" />
-      <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster's units, or check that the raster covers the study area.</source>
-      <translation>No queda nada del marco de muestreo tras la máscara ráster (MASK): cada celda de las {hectares:.4g} ha restantes está fuera de [MASK_MIN, MASK_MAX] o es NoData. Amplíe el rango, compruebe las unidades del ráster, o compruebe que el ráster cubre el área de estudio.</translation>
+        <location filename="../processing/engine/frame.py" line="284"/>
+        <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster&apos;s units, or check that the raster covers the study area.</source>
+        <translation>No queda nada del marco de muestreo tras la máscara ráster (MASK): cada celda de las {hectares:.4g} ha restantes está fuera de [MASK_MIN, MASK_MAX] o es NoData. Amplíe el rango, compruebe las unidades del ráster, o compruebe que el ráster cubre el área de estudio.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="291" />
-      <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area's boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
-      <translation>No queda nada del marco de muestreo tras el búfer interior (EDGE_BUFFER = {edge_buffer:g} m): las {hectares:.4g} ha restantes están todas a menos de esa distancia del límite del área de estudio (extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.</translation>
+        <location filename="../processing/engine/frame.py" line="291"/>
+        <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area&apos;s boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
+        <translation>No queda nada del marco de muestreo tras el búfer interior (EDGE_BUFFER = {edge_buffer:g} m): las {hectares:.4g} ha restantes están todas a menos de esa distancia del límite del área de estudio (extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/geometry.py" line="204" />
-      <source>{first} and {second} ({area:.4g} {unit})</source>
-      <translation>{first} y {second} ({area:.4g} {unit})</translation>
+        <location filename="../processing/engine/geometry.py" line="203"/>
+        <source>{first} and {second} ({area:.4g} {unit})</source>
+        <translation>{first} y {second} ({area:.4g} {unit})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/halton.py" line="209" />
-      <source>No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a sample unit. Check the frame for slivers.</source>
-      <translation>No se pudo sortear ningún punto en un área de {area:.3g} m²: es demasiado delgada para contener una unidad de muestreo. Busque astillas en el marco.</translation>
+        <location filename="../processing/engine/halton.py" line="209"/>
+        <source>No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a sample unit. Check the frame for slivers.</source>
+        <translation>No se pudo sortear ningún punto en un área de {area:.3g} m²: es demasiado delgada para contener una unidad de muestreo. Busque astillas en el marco.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="168" />
-      <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
-      <translation>DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).</translation>
+        <location filename="../processing/engine/layout.py" line="196"/>
+        <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
+        <translation>DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
-      <translation>SIZE debe ser mayor que 0 m para una unidad puntual; es {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="80"/>
+        <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
+        <translation>SIZE debe ser mayor que 0 m para una unidad puntual; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
-      <translation>SIZE debe ser mayor que 0 m para una unidad cuadrada; es {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="81"/>
+        <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
+        <translation>SIZE debe ser mayor que 0 m para una unidad cuadrada; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
-      <translation>SIZE debe ser mayor que 0 m para una unidad circular; es {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="82"/>
+        <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
+        <translation>SIZE debe ser mayor que 0 m para una unidad circular; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
-      <translation>SIZE debe ser mayor que 0 m para una unidad lineal; es {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="83"/>
+        <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
+        <translation>SIZE debe ser mayor que 0 m para una unidad lineal; es {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="174" />
-      <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
-      <translation>BEARING debe ser -1 (aleatorio) o estar entre 0 y 360 grados; es {bearing}.</translation>
+        <location filename="../processing/engine/layout.py" line="204"/>
+        <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
+        <translation>BEARING debe ser -1 (aleatorio) o estar entre 0 y 360 grados; es {bearing}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="177" />
-      <source>MIN_SPACING must be 0 or more metres.</source>
-      <translation>MIN_SPACING debe ser 0 metros o más.</translation>
+        <location filename="../processing/engine/layout.py" line="208"/>
+        <source>MIN_SPACING must be 0 or more metres.</source>
+        <translation>MIN_SPACING debe ser 0 metros o más.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="179" />
-      <source>RESERVE must be 0 or a positive whole number.</source>
-      <translation>RESERVE debe ser 0 o un número entero positivo.</translation>
+        <location filename="../processing/engine/layout.py" line="210"/>
+        <source>RESERVE must be 0 or a positive whole number.</source>
+        <translation>RESERVE debe ser 0 o un número entero positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="358" />
-      <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
-      <translation>{field} está vacío (NULL) o no es un número para las entidades {ids}. Dé a cada estrato un número entero de unidades, o deje N_FIELD sin definir para usar N_UNITS.</translation>
+        <location filename="../processing/engine/layout.py" line="389"/>
+        <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
+        <translation>{field} está vacío (NULL) o no es un número para las entidades {ids}. Dé a cada estrato un número entero de unidades, o deje N_FIELD sin definir para usar N_UNITS.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="365" />
-      <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
-      <translation>{field} es negativo para las entidades {ids}. Use 0 o un número entero positivo.</translation>
+        <location filename="../processing/engine/layout.py" line="396"/>
+        <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
+        <translation>{field} es negativo para las entidades {ids}. Use 0 o un número entero positivo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="371" />
-      <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
-      <translation>{field} no es un número entero para las entidades {ids}. Redondee primero la asignación a unidades enteras.</translation>
+        <location filename="../processing/engine/layout.py" line="403"/>
+        <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
+        <translation>{field} no es un número entero para las entidades {ids}. Redondee primero la asignación a unidades enteras.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="452" />
-      <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
-      <translation>Indique N_FIELD (unidades por estrato) o N_UNITS (un total de al menos 1).</translation>
+        <location filename="../processing/engine/layout.py" line="487"/>
+        <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
+        <translation>Indique N_FIELD (unidades por estrato) o N_UNITS (un total de al menos 1).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="467" />
-      <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
-      <translation>Se reparó una geometría no válida en las entidades {ids}; compruebe sus contornos.</translation>
+        <location filename="../processing/engine/layout.py" line="503"/>
+        <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
+        <translation>Se reparó una geometría no válida en las entidades {ids}; compruebe sus contornos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="470" />
-      <source>Empty or zero-area feature(s) {ids} were skipped.</source>
-      <translation>Se omitieron las entidades vacías o de área nula {ids}.</translation>
+        <location filename="../processing/engine/layout.py" line="507"/>
+        <source>Empty or zero-area feature(s) {ids} were skipped.</source>
+        <translation>Se omitieron las entidades vacías o de área nula {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="472" />
-      <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
-      <translation>Las entidades {ids} tienen menos de {area:g} m² de área (astillas, dejadas por ejemplo por una superposición o una reproyección) y se han omitido.</translation>
+        <location filename="../processing/engine/layout.py" line="510"/>
+        <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
+        <translation>Las entidades {ids} tienen menos de {area:g} m² de área (astillas, dejadas por ejemplo por una superposición o una reproyección) y se han omitido.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="477" />
-      <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
-      <translation>El marco de muestreo no tiene ningún polígono de {area:g} m² o más: cada entidad está vacía, tiene área nula o es una astilla.</translation>
+        <location filename="../processing/engine/layout.py" line="516"/>
+        <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
+        <translation>El marco de muestreo no tiene ningún polígono de {area:g} m² o más: cada entidad está vacía, tiene área nula o es una astilla.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="488" />
-      <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
-      <translation>{field} está vacío (NULL) para la entidad {fid}. Dele un valor de estrato.</translation>
+        <location filename="../processing/engine/layout.py" line="527"/>
+        <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
+        <translation>{field} está vacío (NULL) para la entidad {fid}. Dele un valor de estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="515" />
-      <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
-      <translation>Las entidades del marco de muestreo (sin campo de estrato) tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades o elija un campo de estrato para que cada entidad sea un estrato.</translation>
+        <location filename="../processing/engine/layout.py" line="555"/>
+        <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
+        <translation>Las entidades del marco de muestreo (sin campo de estrato) tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades o elija un campo de estrato para que cada entidad sea un estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="515" />
-      <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
-      <translation>Las entidades del estrato {key} tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades.</translation>
+        <location filename="../processing/engine/layout.py" line="555"/>
+        <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
+        <translation>Las entidades del estrato {key} tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="530" />
-      <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
-      <translation>N_UNITS = {n_units} es menos de {minimum} por estrato para {n_strata} estratos; cada estrato recibe {minimum} ({total} unidades).</translation>
+        <location filename="../processing/engine/layout.py" line="572"/>
+        <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
+        <translation>N_UNITS = {n_units} es menos de {minimum} por estrato para {n_strata} estratos; cada estrato recibe {minimum} ({total} unidades).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El marco de muestreo es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="86"/>
+        <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El marco de muestreo es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El marco de muestreo es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="91"/>
+        <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El marco de muestreo es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El marco de muestreo es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="96"/>
+        <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El marco de muestreo es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El marco de muestreo es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="101"/>
+        <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El marco de muestreo es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El estrato {key} es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="106"/>
+        <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El estrato {key} es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El estrato {key} es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="111"/>
+        <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El estrato {key} es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El estrato {key} es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="116"/>
+        <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El estrato {key} es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="121"/>
+        <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="546" />
-      <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
-      <translation>Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
+        <location filename="../processing/engine/layout.py" line="588"/>
+        <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+        <translation>Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="546" />
-      <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
-      <translation>Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
+        <location filename="../processing/engine/layout.py" line="588"/>
+        <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+        <translation>Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="555" />
-      <source>The frame gets no units; the estimate cannot speak for it.</source>
-      <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
+        <location filename="../processing/engine/layout.py" line="598"/>
+        <source>The frame gets no units; the estimate cannot speak for it.</source>
+        <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="555" />
-      <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
-      <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
+        <location filename="../processing/engine/layout.py" line="598"/>
+        <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
+        <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="558" />
-      <source>The frame gets one unit only; its variance cannot be estimated.</source>
-      <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
+        <location filename="../processing/engine/layout.py" line="603"/>
+        <source>The frame gets one unit only; its variance cannot be estimated.</source>
+        <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="558" />
-      <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
-      <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
+        <location filename="../processing/engine/layout.py" line="603"/>
+        <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
+        <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="581" />
-      <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host's Difference or Union tools) and run again.</source>
-      <translation>Hay estratos que se solapan ({pairs}): un lugar pertenece a un solo estrato, y las unidades de una zona común se sortearían en ambos estratos y se ponderarían dos veces. Haga disjuntos los polígonos de los estratos (por ejemplo con las herramientas Diferencia o Unión del anfitrión) y vuelva a ejecutar.</translation>
+        <location filename="../processing/engine/layout.py" line="628"/>
+        <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
+        <translation>Hay estratos que se solapan ({pairs}): un lugar pertenece a un solo estrato, y las unidades de una zona común se sortearían en ambos estratos y se ponderarían dos veces. Haga disjuntos los polígonos de los estratos (por ejemplo con las herramientas Diferencia o Unión del anfitrión) y vuelva a ejecutar.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="585" />
-      <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
-      <translation>Hay estratos que se solapan ligeramente ({pairs}); las unidades allí pertenecen a ambos. Haga disjuntos los polígonos de los estratos si es más que ruido de digitalización.</translation>
+        <location filename="../processing/engine/layout.py" line="632"/>
+        <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
+        <translation>Hay estratos que se solapan ligeramente ({pairs}); las unidades allí pertenecen a ambos. Haga disjuntos los polígonos de los estratos si es más que ruido de digitalización.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="670" />
-      <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
-      <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="717"/>
+        <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+        <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="670" />
-      <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
-      <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="717"/>
+        <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+        <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="768" />
-      <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
-      <translation>Una cuadrícula sistemática de espaciado {spacing:.3g} m sobre un área de {area:,.1f} m² extendida sobre {width:,.0f} m x {height:,.0f} m necesitaría {count:,} puntos candidatos. El área es una astilla o demasiado pequeña para el número de unidades: busque astillas en el marco, pida menos unidades o use otro diseño.</translation>
+        <location filename="../processing/engine/layout.py" line="817"/>
+        <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
+        <translation>Una cuadrícula sistemática de espaciado {spacing:.3g} m sobre un área de {area:,.1f} m² extendida sobre {width:,.0f} m x {height:,.0f} m necesitaría {count:,} puntos candidatos. El área es una astilla o demasiado pequeña para el número de unidades: busque astillas en el marco, pida menos unidades o use otro diseño.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="838" />
-      <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
-      <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="886"/>
+        <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+        <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="838" />
-      <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
-      <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="886"/>
+        <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+        <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="856" />
-      <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
-      <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="906"/>
+        <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+        <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="856" />
-      <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
-      <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
+        <location filename="../processing/engine/layout.py" line="906"/>
+        <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+        <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="866" />
-      <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
-      <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
+        <location filename="../processing/engine/layout.py" line="917"/>
+        <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+        <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="866" />
-      <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
-      <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
+        <location filename="../processing/engine/layout.py" line="917"/>
+        <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+        <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="873" />
-      <source>The frame has only {n} of {r} reserve units.</source>
-      <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
+        <location filename="../processing/engine/layout.py" line="925"/>
+        <source>The frame has only {n} of {r} reserve units.</source>
+        <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="873" />
-      <source>Stratum {key} has only {n} of {r} reserve units.</source>
-      <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
+        <location filename="../processing/engine/layout.py" line="925"/>
+        <source>Stratum {key} has only {n} of {r} reserve units.</source>
+        <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>inicio del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+        <location filename="../processing/engine/layout.py" line="141"/>
+        <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>inicio del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>inicio del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+        <location filename="../processing/engine/layout.py" line="144"/>
+        <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>inicio del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>fin del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+        <location filename="../processing/engine/layout.py" line="147"/>
+        <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>fin del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>fin del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
+        <location filename="../processing/engine/layout.py" line="150"/>
+        <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>fin del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>point unit {unit} (primary, stratum {stratum})</source>
-      <translation>unidad puntual {unit} (principal, estrato {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="133"/>
+        <source>point unit {unit} (primary, stratum {stratum})</source>
+        <translation>unidad puntual {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>point unit {unit} (reserve, stratum {stratum})</source>
-      <translation>unidad puntual {unit} (de reserva, estrato {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="134"/>
+        <source>point unit {unit} (reserve, stratum {stratum})</source>
+        <translation>unidad puntual {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>square unit {unit} (primary, stratum {stratum})</source>
-      <translation>unidad cuadrada {unit} (principal, estrato {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="135"/>
+        <source>square unit {unit} (primary, stratum {stratum})</source>
+        <translation>unidad cuadrada {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>square unit {unit} (reserve, stratum {stratum})</source>
-      <translation>unidad cuadrada {unit} (de reserva, estrato {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="136"/>
+        <source>square unit {unit} (reserve, stratum {stratum})</source>
+        <translation>unidad cuadrada {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>circle unit {unit} (primary, stratum {stratum})</source>
-      <translation>unidad circular {unit} (principal, estrato {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="137"/>
+        <source>circle unit {unit} (primary, stratum {stratum})</source>
+        <translation>unidad circular {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>circle unit {unit} (reserve, stratum {stratum})</source>
-      <translation>unidad circular {unit} (de reserva, estrato {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="138"/>
+        <source>circle unit {unit} (reserve, stratum {stratum})</source>
+        <translation>unidad circular {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="484" />
-      <source>No cell of the frame has a value in every covariate.</source>
-      <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables.</translation>
+        <location filename="../processing/engine/stratification.py" line="484"/>
+        <source>No cell of the frame has a value in every covariate.</source>
+        <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="674" />
-      <source>The covariates take fewer distinct value combinations than strata asked for.</source>
-      <translation>Las covariables toman menos combinaciones de valores distintas que estratos pedidos.</translation>
+        <location filename="../processing/engine/stratification.py" line="675"/>
+        <source>The covariates take fewer distinct value combinations than strata asked for.</source>
+        <translation>Las covariables toman menos combinaciones de valores distintas que estratos pedidos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="935" />
-      <source>The frame holds no raster cell.</source>
-      <translation>El marco de muestreo no contiene ninguna celda ráster.</translation>
+        <location filename="../processing/engine/stratification.py" line="937"/>
+        <source>The frame holds no raster cell.</source>
+        <translation>El marco de muestreo no contiene ninguna celda ráster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1259" />
-      <source>Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
-      <translation>La covariable «{name}» es constante ({value:g}) en el marco de muestreo: no puede definir estratos. Use otra covariable, o compruebe el marco y el ráster.</translation>
+        <location filename="../processing/engine/stratification.py" line="1261"/>
+        <source>Covariate &apos;{name}&apos; is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
+        <translation>La covariable «{name}» es constante ({value:g}) en el marco de muestreo: no puede definir estratos. Use otra covariable, o compruebe el marco y el ráster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1299" />
-      <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
-      <translation>METHOD desconocido {method!r}: use de 0 (cuantiles) a 4 (clases del ráster).</translation>
+        <location filename="../processing/engine/stratification.py" line="1302"/>
+        <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
+        <translation>METHOD desconocido {method!r}: use de 0 (cuantiles) a 4 (clases del ráster).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1301" />
-      <source>Ask for at least 2 strata (STRATA).</source>
-      <translation>Pida al menos 2 estratos (STRATA).</translation>
+        <location filename="../processing/engine/stratification.py" line="1305"/>
+        <source>Ask for at least 2 strata (STRATA).</source>
+        <translation>Pida al menos 2 estratos (STRATA).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1302" />
-      <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
-      <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables ({names}). Compruebe que los rásteres cubren el marco y que su valor NoData es correcto.</translation>
+        <location filename="../processing/engine/stratification.py" line="1306"/>
+        <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
+        <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables ({names}). Compruebe que los rásteres cubren el marco y que su valor NoData es correcto.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1337" />
-      <source>Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
-      <translation>La covariable «{name}» toma solo {n_distinct} valores distintos en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
+        <location filename="../processing/engine/stratification.py" line="1342"/>
+        <source>Covariate &apos;{name}&apos; takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+        <translation>La covariable «{name}» toma solo {n_distinct} valores distintos en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1351" />
-      <source>Some boundaries coincide (many cells share the same value of '{name}'); {formed} strata are formed instead of {k}.</source>
-      <translation>Algunos límites coinciden (muchas celdas comparten el mismo valor de «{name}»); se forman {formed} estratos en lugar de {k}.</translation>
+        <location filename="../processing/engine/stratification.py" line="1356"/>
+        <source>Some boundaries coincide (many cells share the same value of &apos;{name}&apos;); {formed} strata are formed instead of {k}.</source>
+        <translation>Algunos límites coinciden (muchas celdas comparten el mismo valor de «{name}»); se forman {formed} estratos en lugar de {k}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1364" />
-      <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
-      <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
+        <location filename="../processing/engine/stratification.py" line="1370"/>
+        <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+        <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1368" />
-      <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
-      <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en una muestra de {sample_n} celdas, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
+        <location filename="../processing/engine/stratification.py" line="1375"/>
+        <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+        <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en una muestra de {sample_n} celdas, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1378" />
-      <source>Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host's reclassify by table tool), or choose another METHOD.</source>
-      <translation>La covariable «{name}» tiene más de {max_classes} clases (al menos {n_distinct} valores distintos en el marco de muestreo): reclasifíquela primero en {max_classes} clases o menos (por ejemplo con la herramienta de reclasificación por tabla del anfitrión), o elija otro METHOD.</translation>
+        <location filename="../processing/engine/stratification.py" line="1386"/>
+        <source>Covariate &apos;{name}&apos; has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host&apos;s reclassify by table tool), or choose another METHOD.</source>
+        <translation>La covariable «{name}» tiene más de {max_classes} clases (al menos {n_distinct} valores distintos en el marco de muestreo): reclasifíquela primero en {max_classes} clases o menos (por ejemplo con la herramienta de reclasificación por tabla del anfitrión), o elija otro METHOD.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1395" />
-      <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
-      <translation>{dropped} de los {k} estratos no contienen ninguna celda y se quitaron.</translation>
+        <location filename="../processing/engine/stratification.py" line="1403"/>
+        <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
+        <translation>{dropped} de los {k} estratos no contienen ninguna celda y se quitaron.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1472" />
-      <source>{name} class {value}</source>
-      <translation>{name}: clase {value}</translation>
+        <location filename="../processing/engine/stratification.py" line="1481"/>
+        <source>{name} class {value}</source>
+        <translation>{name}: clase {value}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1474" />
-      <source>mean {values}</source>
-      <translation>media {values}</translation>
+        <location filename="../processing/engine/stratification.py" line="1484"/>
+        <source>mean {values}</source>
+        <translation>media {values}</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="94" />
-      <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
-      <translation>La covariable «{name}» no puede leerse ({error}). Compruebe el archivo.</translation>
+        <location filename="../processing/raster_io.py" line="94"/>
+        <source>Covariate &apos;{name}&apos; cannot be read ({error}). Check the file.</source>
+        <translation>La covariable «{name}» no puede leerse ({error}). Compruebe el archivo.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="97" />
-      <source>Covariate '{name}' has no band {band}.</source>
-      <translation>La covariable «{name}» no tiene banda {band}.</translation>
+        <location filename="../processing/raster_io.py" line="98"/>
+        <source>Covariate &apos;{name}&apos; has no band {band}.</source>
+        <translation>La covariable «{name}» no tiene banda {band}.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="197" />
-      <source>Give at least one raster in COVARIATES.</source>
-      <translation>Indique al menos un ráster en COVARIATES.</translation>
+        <location filename="../processing/raster_io.py" line="199"/>
+        <source>Give at least one raster in COVARIATES.</source>
+        <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="229" />
-      <source>The frame has no polygon.</source>
-      <translation>El marco de muestreo no tiene ningún polígono.</translation>
+        <location filename="../processing/raster_io.py" line="231"/>
+        <source>The frame has no polygon.</source>
+        <translation>El marco de muestreo no tiene ningún polígono.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="273" />
-      <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
-      <translation>El marco de muestreo no se superpone a la covariable «{name}» ({path}). Use un ráster que cubra el marco, o compruebe el SRC de ambas capas.</translation>
+        <location filename="../processing/raster_io.py" line="275"/>
+        <source>The frame does not overlap covariate &apos;{name}&apos; ({path}). Use a raster that covers the frame, or check both layers&apos; CRS.</source>
+        <translation>El marco de muestreo no se superpone a la covariable «{name}» ({path}). Use un ráster que cubra el marco, o compruebe el SRC de ambas capas.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="438" />
-      <source>Cannot write the stratum raster '{path}'.</source>
-      <translation>No se puede escribir el ráster de estratos «{path}».</translation>
+        <location filename="../processing/raster_io.py" line="441"/>
+        <source>Cannot write the stratum raster &apos;{path}&apos;.</source>
+        <translation>No se puede escribir el ráster de estratos «{path}».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="809" />
-      <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
-      <translation>Con MIN_AREA = {min_area:g} ha, la fusión de las manchas más pequeñas dejó un solo estrato: no queda nada que estratificar. Reduzca MIN_AREA.</translation>
+        <location filename="../processing/raster_io.py" line="808"/>
+        <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
+        <translation>Con MIN_AREA = {min_area:g} ha, la fusión de las manchas más pequeñas dejó un solo estrato: no queda nada que estratificar. Reduzca MIN_AREA.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="816" />
-      <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
-      <translation>{merged} estratos constaban solo de manchas por debajo de MIN_AREA y se fusionaron con sus vecinos.</translation>
+        <location filename="../processing/raster_io.py" line="815"/>
+        <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
+        <translation>{merged} estratos constaban solo de manchas por debajo de MIN_AREA y se fusionaron con sus vecinos.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="823" />
-      <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of '{name}' that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
-      <translation>La fusión de las manchas por debajo de MIN_AREA pasó celdas de un estrato a otro: la parte de la varianza de «{name}» que explican los estratos bajó de {before:.2f} a {after:.2f}. Un MIN_AREA menor mantiene los estratos más cerca de las covariables.</translation>
+        <location filename="../processing/raster_io.py" line="823"/>
+        <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of &apos;{name}&apos; that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
+        <translation>La fusión de las manchas por debajo de MIN_AREA pasó celdas de un estrato a otro: la parte de la varianza de «{name}» que explican los estratos bajó de {before:.2f} a {after:.2f}. Un MIN_AREA menor mantiene los estratos más cerca de las covariables.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="828" />
-      <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
-      <translation>{n} mancha(s) que cubren {ha:,.2f} ha quedan por debajo de MIN_AREA ({min_area:g} ha): no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData). Quite esas islas del marco de muestreo, rellene los NoData de las covariables, o reduzca MIN_AREA.</translation>
+        <location filename="../processing/raster_io.py" line="828"/>
+        <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
+        <translation>{n} mancha(s) que cubren {ha:,.2f} ha quedan por debajo de MIN_AREA ({min_area:g} ha): no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData). Quite esas islas del marco de muestreo, rellene los NoData de las covariables, o reduzca MIN_AREA.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="840" />
-      <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
-      <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
+        <location filename="../processing/raster_io.py" line="840"/>
+        <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
+        <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="866" />
-      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
-      <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
+        <location filename="../processing/raster_io.py" line="867"/>
+        <source>The density surface &apos;{name}&apos; cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
+        <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="877" />
-      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
-      <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
+        <location filename="../processing/raster_io.py" line="879"/>
+        <source>The density surface &apos;{name}&apos; does not overlap the sampling frame. Check that both cover the same area.</source>
+        <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="885" />
-      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
-      <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
+        <location filename="../processing/raster_io.py" line="888"/>
+        <source>The density surface &apos;{name}&apos; could not be warped to {crs} ({error}).</source>
+        <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="102" />
-      <source>The mask raster (MASK) '{source}' cannot be opened by GDAL.</source>
-      <translation>GDAL no puede abrir el ráster de máscara (MASK) «{source}».</translation>
+        <location filename="../processing/raster_masking.py" line="102"/>
+        <source>The mask raster (MASK) &apos;{source}&apos; cannot be opened by GDAL.</source>
+        <translation>GDAL no puede abrir el ráster de máscara (MASK) «{source}».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="129" />
-      <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
-      <translation>El ráster de máscara (MASK) necesitaría {rows} x {cols} celdas sobre el área de estudio, más de {max_cells:,}. Remuestree primero el ráster a celdas más gruesas.</translation>
+        <location filename="../processing/raster_masking.py" line="130"/>
+        <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
+        <translation>El ráster de máscara (MASK) necesitaría {rows} x {cols} celdas sobre el área de estudio, más de {max_cells:,}. Remuestree primero el ráster a celdas más gruesas.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="140" />
-      <location filename="../processing/raster_masking.py" line="168" />
-      <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
-      <translation>El ráster de máscara (MASK) no puede reproyectarse al SRC de cálculo.</translation>
+        <location filename="../processing/raster_masking.py" line="170"/>
+        <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
+        <translation>El ráster de máscara (MASK) no puede reproyectarse al SRC de cálculo.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="198" />
-      <source>GDAL could not turn the masked raster cells into polygons.</source>
-      <translation>GDAL no pudo convertir las celdas enmascaradas del ráster en polígonos.</translation>
+        <location filename="../processing/raster_masking.py" line="201"/>
+        <source>GDAL could not turn the masked raster cells into polygons.</source>
+        <translation>GDAL no pudo convertir las celdas enmascaradas del ráster en polígonos.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="238" />
-      <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
-      <translation>MASK_MIN ({mask_min:g}) es mayor que MASK_MAX ({mask_max:g}); no podría conservarse ninguna celda. Intercambie los dos valores o deje uno de ellos vacío.</translation>
+        <location filename="../processing/raster_masking.py" line="242"/>
+        <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
+        <translation>MASK_MIN ({mask_min:g}) es mayor que MASK_MAX ({mask_max:g}); no podría conservarse ninguna celda. Intercambie los dos valores o deje uno de ellos vacío.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="244" />
-      <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
-      <translation>El ráster de máscara (MASK) no tiene banda {band}; tiene {count}.</translation>
+        <location filename="../processing/raster_masking.py" line="248"/>
+        <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
+        <translation>El ráster de máscara (MASK) no tiene banda {band}; tiene {count}.</translation>
     </message>
-  </context>
-  <context>
+    <message>
+        <location filename="../processing/engine/demo_reserve.py" line="37"/>
+        <source>an invented grazing antelope that lives in loose groups</source>
+        <translation>un antílope herbívoro inventado que vive en grupos laxos</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>point</source>
+        <translation>punto</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>square</source>
+        <translation>cuadrado</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>circle</source>
+        <translation>círculo</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>line</source>
+        <translation>línea</translation>
+    </message>
+</context>
+<context>
     <name>PlotwisePlugin</name>
     <message>
-      <location filename="../plugin/plugin.py" line="53" />
-      <source>{name} is missing ({error}).</source>
-      <translation>Falta {name} ({error}).</translation>
+        <location filename="../plugin/plugin.py" line="49"/>
+        <source>{name} is missing ({error}).</source>
+        <translation>Falta {name} ({error}).</translation>
     </message>
     <message>
-      <location filename="../plugin/plugin.py" line="54" />
-      <source>{name} {version} is too old; version {wanted} or newer is needed.</source>
-      <translation>{name} {version} es demasiado antiguo; se necesita la versión {wanted} o posterior.</translation>
+        <location filename="../plugin/plugin.py" line="51"/>
+        <source>{name} {version} is too old; version {wanted} or newer is needed.</source>
+        <translation>{name} {version} es demasiado antiguo; se necesita la versión {wanted} o posterior.</translation>
     </message>
     <message>
-      <location filename="../plugin/plugin.py" line="58" />
-      <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
-      <translation>Plotwise no puede iniciarse porque falta una biblioteca necesaria o es demasiado antigua: {problems} Instale los paquetes estándar del anfitrión (en Debian o Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) y reinicie QGIS. No se ha añadido ningún algoritmo de Plotwise.</translation>
+        <location filename="../plugin/plugin.py" line="56"/>
+        <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host&apos;s standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
+        <translation>Plotwise no puede iniciarse porque falta una biblioteca necesaria o es demasiado antigua: {problems} Instale los paquetes estándar del anfitrión (en Debian o Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) y reinicie QGIS. No se ha añadido ningún algoritmo de Plotwise.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseProvider</name>
     <message>
-      <location filename="../processing/provider.py" line="97" />
-      <source>Plotwise</source>
-      <translation>Plotwise</translation>
+        <location filename="../processing/provider.py" line="90"/>
+        <source>Plotwise</source>
+        <translation>Plotwise</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="100" />
-      <source>Plotwise survey design and estimation</source>
-      <translation>Plotwise: diseño de muestreos y estimación</translation>
+        <location filename="../processing/provider.py" line="93"/>
+        <source>Plotwise survey design and estimation</source>
+        <translation>Plotwise: diseño de muestreos y estimación</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="121" />
-      <source>The example model {path} could not be read.</source>
-      <translation>No se pudo leer el modelo de ejemplo {path}.</translation>
+        <location filename="../processing/provider.py" line="113"/>
+        <source>The example model {path} could not be read.</source>
+        <translation>No se pudo leer el modelo de ejemplo {path}.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseReport</name>
     <message>
-      <location filename="../processing/report/html.py" line="109" />
-      <source>yes</source>
-      <translation>sí</translation>
+        <location filename="../processing/report/html.py" line="120"/>
+        <source>yes</source>
+        <translation>sí</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="109" />
-      <source>no</source>
-      <translation>no</translation>
+        <location filename="../processing/report/html.py" line="120"/>
+        <source>no</source>
+        <translation>no</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="128" />
-      <source>Inputs and parameters</source>
-      <translation>Entradas y parámetros</translation>
+        <location filename="../processing/report/html.py" line="140"/>
+        <source>Inputs and parameters</source>
+        <translation>Entradas y parámetros</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="130" />
-      <source>Item</source>
-      <translation>Elemento</translation>
+        <location filename="../processing/report/html.py" line="142"/>
+        <source>Item</source>
+        <translation>Elemento</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="130" />
-      <source>Value</source>
-      <translation>Valor</translation>
+        <location filename="../processing/report/html.py" line="142"/>
+        <source>Value</source>
+        <translation>Valor</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="157" />
-      <source>Written</source>
-      <translation>Generado el</translation>
+        <location filename="../processing/report/html.py" line="169"/>
+        <source>Written</source>
+        <translation>Generado el</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="159" />
-      <source>algorithm</source>
-      <translation>algoritmo</translation>
+        <location filename="../processing/report/html.py" line="171"/>
+        <source>algorithm</source>
+        <translation>algoritmo</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="163" />
-      <source>Field safety</source>
-      <translation>Seguridad en el terreno</translation>
+        <location filename="../processing/report/html.py" line="174"/>
+        <source>Field safety</source>
+        <translation>Seguridad en el terreno</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="164" />
-      <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
-      <translation>Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo. Esta herramienta elige ubicaciones solo por razones estadísticas: nunca hace que una ubicación sea segura para llegar a ella ni para trabajar en ella. El terreno escarpado, remoto o inundado, la fauna, el tiempo atmosférico y las tierras privadas pueden poner a las personas en riesgo. Siga las normas de seguridad en el terreno de su organismo y la legislación local, y excluya o sustituya cualquier unidad a la que no se pueda llegar con seguridad (regístrela como no muestreada).</translation>
+        <location filename="../processing/report/html.py" line="32"/>
+        <source>Check every unit&apos;s access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency&apos;s field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
+        <translation>Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo. Esta herramienta elige ubicaciones solo por razones estadísticas: nunca hace que una ubicación sea segura para llegar a ella ni para trabajar en ella. El terreno escarpado, remoto o inundado, la fauna, el tiempo atmosférico y las tierras privadas pueden poner a las personas en riesgo. Siga las normas de seguridad en el terreno de su organismo y la legislación local, y excluya o sustituya cualquier unidad a la que no se pueda llegar con seguridad (regístrela como no muestreada).</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="168" />
-      <source>Warnings</source>
-      <translation>Advertencias</translation>
+        <location filename="../processing/report/html.py" line="179"/>
+        <source>Warnings</source>
+        <translation>Advertencias</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="172" />
-      <source>Method references</source>
-      <translation>Referencias de los métodos</translation>
+        <location filename="../processing/report/html.py" line="184"/>
+        <source>Method references</source>
+        <translation>Referencias de los métodos</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseStyles</name>
     <message>
-      <location filename="../processing/styles.py" line="224" />
-      <source>primary unit</source>
-      <translation>unidad principal</translation>
+        <location filename="../processing/styles.py" line="220"/>
+        <source>primary unit</source>
+        <translation>unidad principal</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="225" />
-      <source>reserve unit</source>
-      <translation>unidad de reserva</translation>
+        <location filename="../processing/styles.py" line="221"/>
+        <source>reserve unit</source>
+        <translation>unidad de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="268" />
-      <location filename="../processing/styles.py" line="355" />
-      <source>per {unit}</source>
-      <translation>por {unit}</translation>
+        <location filename="../processing/styles.py" line="351"/>
+        <source>per {unit}</source>
+        <translation>por {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="269" />
-      <source>Density (animals {per})</source>
-      <translation>Densidad (animales {per})</translation>
+        <location filename="../processing/styles.py" line="265"/>
+        <source>Density (animals {per})</source>
+        <translation>Densidad (animales {per})</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="299" />
-      <source>no estimate (no surveyed unit)</source>
-      <translation>sin estimación (ninguna unidad muestreada)</translation>
+        <location filename="../processing/styles.py" line="295"/>
+        <source>no estimate (no surveyed unit)</source>
+        <translation>sin estimación (ninguna unidad muestreada)</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="408" />
-      <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
-      <translation>No se pudo aplicar el estilo a la capa {name} ({error}); conserva el estilo predeterminado.</translation>
+        <location filename="../processing/styles.py" line="405"/>
+        <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
+        <translation>No se pudo aplicar el estilo a la capa {name} ({error}); conserva el estilo predeterminado.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>SimulateCounts</name>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="29" />
-      <source>Simulate counts in sample units</source>
-      <translation>Simular conteos en las unidades de muestreo</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="29"/>
+        <source>Simulate counts in sample units</source>
+        <translation>Simular conteos en las unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="32" />
-      <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit's &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve's simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="32"/>
+        <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="50" />
-      <source>Sample units</source>
-      <translation>Unidades de muestreo</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="50"/>
+        <source>Sample units</source>
+        <translation>Unidades de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
-      <source>Animal points</source>
-      <translation>Puntos de animales</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="51"/>
+        <source>Animal points</source>
+        <translation>Puntos de animales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="54" />
-      <source>Detection probability</source>
-      <translation>Probabilidad de detección</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="52"/>
+        <source>Detection probability</source>
+        <translation>Probabilidad de detección</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="59" />
-      <source>Count reserve units too</source>
-      <translation>Contar también las unidades de reserva</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="58"/>
+        <source>Count reserve units too</source>
+        <translation>Contar también las unidades de reserva</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="62" />
-      <source>Units with simulated counts</source>
-      <translation>Unidades con conteos simulados</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="62"/>
+        <source>Units with simulated counts</source>
+        <translation>Unidades con conteos simulados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="81" />
-      <source>has no geometry</source>
-      <translation>no tiene geometría</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="81"/>
+        <source>has no geometry</source>
+        <translation>no tiene geometría</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="87" />
-      <source>Layer '{layer}': these features cannot be counted: {items}. Point and line units need a positive 'area_m2' field (the layout step writes it); polygons need a geometry.</source>
-      <translation>Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="86"/>
+        <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
+        <translation>Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="126" />
-      <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
-      <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
+        <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
+        <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>Stratify</name>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="67" />
-      <source>Quantile (equal areas on the first covariate)</source>
-      <translation>Cuantiles (áreas iguales sobre la primera covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="67"/>
+        <source>Quantile (equal areas on the first covariate)</source>
+        <translation>Cuantiles (áreas iguales sobre la primera covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="68" />
-      <source>Equal interval (on the first covariate)</source>
-      <translation>Intervalos iguales (sobre la primera covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="68"/>
+        <source>Equal interval (on the first covariate)</source>
+        <translation>Intervalos iguales (sobre la primera covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="69" />
-      <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
-      <translation>Raíz acumulada de las frecuencias (Dalenius–Hodges, primera covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="69"/>
+        <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
+        <translation>Raíz acumulada de las frecuencias (Dalenius–Hodges, primera covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="70" />
-      <source>k-means (all covariates, standardised)</source>
-      <translation>k-medias (todas las covariables, estandarizadas)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="70"/>
+        <source>k-means (all covariates, standardised)</source>
+        <translation>k-medias (todas las covariables, estandarizadas)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="71" />
-      <source>Raster classes (each class of the first covariate)</source>
-      <translation>Clases del ráster (cada clase de la primera covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="71"/>
+        <source>Raster classes (each class of the first covariate)</source>
+        <translation>Clases del ráster (cada clase de la primera covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="75" />
-      <source>Stratify from raster covariates</source>
-      <translation>Estratificar a partir de covariables ráster</translation>
+        <location filename="../processing/algorithms/stratify.py" line="75"/>
+        <source>Stratify from raster covariates</source>
+        <translation>Estratificar a partir de covariables ráster</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="78" />
-      <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Forma estratos (zonas de densidad esperada similar) a partir de covariables ráster como la altitud, un índice de vegetación o un mapa de cobertura del suelo. Solo cuentan las celdas cuyo centro está dentro del marco de muestreo. Una celda con NoData en alguna covariable se deja fuera y se informa de su área.&lt;/p&gt;&lt;p&gt;Las covariables se llevan a la malla de la primera, en el SRC del marco (un marco en coordenadas geográficas se proyecta a la zona UTM de su centro). Los rásteres en otro SRC o en otra malla se remuestrean al vuelo (bilineal; vecino más próximo para las clases del ráster). Los rásteres se leen bloque a bloque, de modo que la memoria queda acotada sea cual sea su tamaño.&lt;/p&gt;&lt;h3&gt;Métodos&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Cuantiles&lt;/b&gt;: estratos de igual área a lo largo de la primera covariable. Los límites son los cuantiles muestrales exactos de las celdas del marco (Hyndman &amp;amp; Fan 1996, definición 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalos iguales&lt;/b&gt;: el rango de la primera covariable dividido en anchos iguales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raíz acumulada de las frecuencias&lt;/b&gt;: la regla de Dalenius &amp;amp; Hodges (1959) sobre un histograma de 100 clases de la primera covariable (Cochran 1977, cap. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-medias&lt;/b&gt;: todas las covariables estandarizadas a media 0 y DE 1, semillas k-means++ (Arthur &amp;amp; Vassilvitskii 2007) e iteraciones de Lloyd sobre una muestra aleatoria de 100.000 celdas sorteada con la semilla; después cada celda va al centro más próximo.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Clases del ráster&lt;/b&gt;: cada valor de la primera covariable (un ráster categórico, como máximo 50 clases) es un estrato; el número de estratos se ignora.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Los estratos se numeran de 1 a k por media creciente de la primera covariable. Las manchas (conectividad 4) menores que el área mínima (ha) se unen a un estrato vecino antes de convertir los estratos en polígonos: los granos mediante la criba de GDAL y luego cada mancha pequeña, de la menor a la mayor, al vecino que la lleva al área mínima. Una mancha que no toca ningún otro estrato se queda, con una advertencia.&lt;/p&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Ráster de estratos: el estrato de cada celda (0 = ninguno).&lt;/li&gt;&lt;li&gt;Estratos: un multipolígono por estrato con &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (celdas × área de la celda), &lt;i&gt;cov_mean&lt;/i&gt; y &lt;i&gt;cov_sd&lt;/i&gt; de la primera covariable, y &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … para las demás (DE sobre las celdas del estrato).&lt;/li&gt;&lt;li&gt;Informe: límites, áreas, estadísticas de las covariables por estrato, la parte de la varianza de cada covariable que explican los estratos (R²), un histograma con los límites y un mapa.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La semilla aleatoria solo la usa k-medias (0 sortea una y la registra).&lt;/p&gt;&lt;p&gt;Los estratos son un recurso estadístico: antes del trabajo de campo, compruebe el acceso y la seguridad de cada unidad.&lt;/p&gt;</translation>
+        <location filename="../processing/algorithms/stratify.py" line="78"/>
+        <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Forma estratos (zonas de densidad esperada similar) a partir de covariables ráster como la altitud, un índice de vegetación o un mapa de cobertura del suelo. Solo cuentan las celdas cuyo centro está dentro del marco de muestreo. Una celda con NoData en alguna covariable se deja fuera y se informa de su área.&lt;/p&gt;&lt;p&gt;Las covariables se llevan a la malla de la primera, en el SRC del marco (un marco en coordenadas geográficas se proyecta a la zona UTM de su centro). Los rásteres en otro SRC o en otra malla se remuestrean al vuelo (bilineal; vecino más próximo para las clases del ráster). Los rásteres se leen bloque a bloque, de modo que la memoria queda acotada sea cual sea su tamaño.&lt;/p&gt;&lt;h3&gt;Métodos&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Cuantiles&lt;/b&gt;: estratos de igual área a lo largo de la primera covariable. Los límites son los cuantiles muestrales exactos de las celdas del marco (Hyndman &amp;amp; Fan 1996, definición 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalos iguales&lt;/b&gt;: el rango de la primera covariable dividido en anchos iguales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raíz acumulada de las frecuencias&lt;/b&gt;: la regla de Dalenius &amp;amp; Hodges (1959) sobre un histograma de 100 clases de la primera covariable (Cochran 1977, cap. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-medias&lt;/b&gt;: todas las covariables estandarizadas a media 0 y DE 1, semillas k-means++ (Arthur &amp;amp; Vassilvitskii 2007) e iteraciones de Lloyd sobre una muestra aleatoria de 100.000 celdas sorteada con la semilla; después cada celda va al centro más próximo.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Clases del ráster&lt;/b&gt;: cada valor de la primera covariable (un ráster categórico, como máximo 50 clases) es un estrato; el número de estratos se ignora.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Los estratos se numeran de 1 a k por media creciente de la primera covariable. Las manchas (conectividad 4) menores que el área mínima (ha) se unen a un estrato vecino antes de convertir los estratos en polígonos: los granos mediante la criba de GDAL y luego cada mancha pequeña, de la menor a la mayor, al vecino que la lleva al área mínima. Una mancha que no toca ningún otro estrato se queda, con una advertencia.&lt;/p&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Ráster de estratos: el estrato de cada celda (0 = ninguno).&lt;/li&gt;&lt;li&gt;Estratos: un multipolígono por estrato con &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (celdas × área de la celda), &lt;i&gt;cov_mean&lt;/i&gt; y &lt;i&gt;cov_sd&lt;/i&gt; de la primera covariable, y &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … para las demás (DE sobre las celdas del estrato).&lt;/li&gt;&lt;li&gt;Informe: límites, áreas, estadísticas de las covariables por estrato, la parte de la varianza de cada covariable que explican los estratos (R²), un histograma con los límites y un mapa.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La semilla aleatoria solo la usa k-medias (0 sortea una y la registra).&lt;/p&gt;&lt;p&gt;Los estratos son un recurso estadístico: antes del trabajo de campo, compruebe el acceso y la seguridad de cada unidad.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="114" />
-      <source>Sampling frame</source>
-      <translation>Marco de muestreo</translation>
+        <location filename="../processing/algorithms/stratify.py" line="113"/>
+        <source>Sampling frame</source>
+        <translation>Marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="116" />
-      <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
-      <translation>Covariables ráster (banda 1 de cada una; la primera fija la malla)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="115"/>
+        <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
+        <translation>Covariables ráster (banda 1 de cada una; la primera fija la malla)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="119" />
-      <source>Method</source>
-      <translation>Método</translation>
+        <location filename="../processing/algorithms/stratify.py" line="118"/>
+        <source>Method</source>
+        <translation>Método</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="121" />
-      <source>Number of strata (ignored for raster classes)</source>
-      <translation>Número de estratos (se ignora con clases del ráster)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="120"/>
+        <source>Number of strata (ignored for raster classes)</source>
+        <translation>Número de estratos (se ignora con clases del ráster)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="124" />
-      <source>Minimum patch area (ha); smaller patches join a neighbour</source>
-      <translation>Área mínima de mancha (ha); las manchas menores se unen a una vecina</translation>
+        <location filename="../processing/algorithms/stratify.py" line="123"/>
+        <source>Minimum patch area (ha); smaller patches join a neighbour</source>
+        <translation>Área mínima de mancha (ha); las manchas menores se unen a una vecina</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="127" />
-      <source>Stratum raster</source>
-      <translation>Ráster de estratos</translation>
+        <location filename="../processing/algorithms/stratify.py" line="127"/>
+        <source>Stratum raster</source>
+        <translation>Ráster de estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="129" />
-      <location filename="../processing/algorithms/stratify.py" line="252" />
-      <source>Strata</source>
-      <translation>Estratos</translation>
+        <location filename="../processing/algorithms/stratify.py" line="251"/>
+        <source>Strata</source>
+        <translation>Estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="131" />
-      <source>Number of strata formed</source>
-      <translation>Número de estratos formados</translation>
+        <location filename="../processing/algorithms/stratify.py" line="131"/>
+        <source>Number of strata formed</source>
+        <translation>Número de estratos formados</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="133" />
-      <source>Share of the first covariate's variance explained by the strata (R²)</source>
-      <translation>Parte de la varianza de la primera covariable explicada por los estratos (R²)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="132"/>
+        <source>Share of the first covariate's variance explained by the strata (R²)</source>
+        <translation>Parte de la varianza de la primera covariable explicada por los estratos (R²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="139" />
-      <source>Give at least one raster in COVARIATES.</source>
-      <translation>Indique al menos un ráster en COVARIATES.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="139"/>
+        <source>Give at least one raster in COVARIATES.</source>
+        <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="141" />
-      <source>COVARIATES holds {n} rasters; use at most {m}.</source>
-      <translation>COVARIATES contiene {n} rásteres; use como máximo {m}.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="141"/>
+        <source>COVARIATES holds {n} rasters; use at most {m}.</source>
+        <translation>COVARIATES contiene {n} rásteres; use como máximo {m}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="146" />
-      <source>COVARIATES: '{name}' is not a raster layer.</source>
-      <translation>COVARIATES: «{name}» no es una capa ráster.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="146"/>
+        <source>COVARIATES: &apos;{name}&apos; is not a raster layer.</source>
+        <translation>COVARIATES: «{name}» no es una capa ráster.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="148" />
-      <source>Covariate '{name}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
-      <translation>La covariable «{name}» no es un archivo ráster que GDAL pueda leer. Guárdela primero como GeoTIFF.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="148"/>
+        <source>Covariate &apos;{name}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+        <translation>La covariable «{name}» no es un archivo ráster que GDAL pueda leer. Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="176" />
-      <source>Layer '{layer}' (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
-      <translation>La capa «{layer}» (FRAME) no tiene ningún polígono con área positiva. Elija la capa del marco de muestreo.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="176"/>
+        <source>Layer &apos;{layer}&apos; (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
+        <translation>La capa «{layer}» (FRAME) no tiene ningún polígono con área positiva. Elija la capa del marco de muestreo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="191" />
-      <source>Warped onto the grid of '{first}' in {crs}: {names}.</source>
-      <translation>Remuestreadas sobre la malla de «{first}» en {crs}: {names}.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="191"/>
+        <source>Warped onto the grid of &apos;{first}&apos; in {crs}: {names}.</source>
+        <translation>Remuestreadas sobre la malla de «{first}» en {crs}: {names}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="214" />
-      <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
-      <translation>{k} estratos en {ha} ha; R² de «{name}»: {r2}.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="214"/>
+        <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
+        <translation>{k} estratos en {ha} ha; R² de «{name}»: {r2}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="236" />
-      <source>Strata from raster covariates</source>
-      <translation>Estratos a partir de covariables ráster</translation>
+        <location filename="../processing/algorithms/stratify.py" line="235"/>
+        <source>Strata from raster covariates</source>
+        <translation>Estratos a partir de covariables ráster</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="242" />
-      <source>strata</source>
-      <translation>estratos</translation>
+        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <source>strata</source>
+        <translation>estratos</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="243" />
-      <location filename="../processing/algorithms/stratify.py" line="358" />
-      <source>area stratified (ha)</source>
-      <translation>área estratificada (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>area stratified (ha)</source>
+        <translation>área estratificada (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="244" />
-      <source>frame covered</source>
-      <translation>parte del marco cubierta</translation>
+        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <source>frame covered</source>
+        <translation>parte del marco cubierta</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="245" />
-      <source>R² of {name}</source>
-      <translation>R² de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <source>R² of {name}</source>
+        <translation>R² de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="247" />
-      <source>The strata cover the frame's cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
-      <translation>Los estratos cubren las celdas del marco que tienen valor en todas las covariables ({ha} ha). Un muestreo asignado sobre estos estratos solo vale para esa área.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="246"/>
+        <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
+        <translation>Los estratos cubren las celdas del marco que tienen valor en todas las covariables ({ha} ha). Un muestreo asignado sobre estos estratos solo vale para esa área.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Stratum</source>
-      <translation>Estrato</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Stratum</source>
+        <translation>Estrato</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Label</source>
-      <translation>Etiqueta</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Label</source>
+        <translation>Etiqueta</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Area (ha)</source>
-      <translation>Área (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Area (ha)</source>
+        <translation>Área (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>% of area</source>
-      <translation>% del área</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>% of area</source>
+        <translation>% del área</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Cells</source>
-      <translation>Celdas</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Cells</source>
+        <translation>Celdas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="256" />
-      <source>{name} mean</source>
-      <translation>media de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <source>{name} mean</source>
+        <translation>media de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="256" />
-      <source>{name} SD</source>
-      <translation>DE de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <source>{name} SD</source>
+        <translation>DE de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="266" />
-      <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
-      <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron con su vecina mayor (criba de GDAL, conectividad 4) antes de vectorizar; las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener algunas celdas que la regla por sí sola habría puesto en un estrato vecino.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="265"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
+        <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron con su vecina mayor (criba de GDAL, conectividad 4) antes de vectorizar; las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener algunas celdas que la regla por sí sola habría puesto en un estrato vecino.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="272" />
-      <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
-      <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron antes de vectorizar (conectividad 4): las manchas diminutas (menos de {specks} celdas) con su vecina mayor (criba de GDAL), y después otras {n} manchas, de la menor a la mayor, cada una con el estrato vecino que formaba la mancha más pequeña de al menos {ha} ha (o, en su defecto, la mayor), para que un mosaico de manchas pequeñas no quede absorbido por una sola mancha que crece. Las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener celdas que la regla por sí sola habría puesto en otro estrato.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="271"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
+        <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron antes de vectorizar (conectividad 4): las manchas diminutas (menos de {specks} celdas) con su vecina mayor (criba de GDAL), y después otras {n} manchas, de la menor a la mayor, cada una con el estrato vecino que formaba la mancha más pequeña de al menos {ha} ha (o, en su defecto, la mayor), para que un mosaico de manchas pequeñas no quede absorbido por una sola mancha que crece. Las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener celdas que la regla por sí sola habría puesto en otro estrato.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="283" />
-      <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
-      <translation>{n} mancha(s) que cubren {area} ha no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData) y siguen siendo menores de {ha} ha.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="282"/>
+        <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
+        <translation>{n} mancha(s) que cubren {area} ha no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData) y siguen siendo menores de {ha} ha.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="289" />
-      <source>Every patch of the strata now covers at least {ha} ha.</source>
-      <translation>Cada mancha de los estratos cubre ahora al menos {ha} ha.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="288"/>
+        <source>Every patch of the strata now covers at least {ha} ha.</source>
+        <translation>Cada mancha de los estratos cubre ahora al menos {ha} ha.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="293" />
-      <source>Method: {name}</source>
-      <translation>Método: {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="292"/>
+        <source>Method: {name}</source>
+        <translation>Método: {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="297" />
-      <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
-      <translation>El estrato h contiene las celdas con b(h−1) ≤ {name} &lt; b(h). Límites sobre {name}:</translation>
+        <location filename="../processing/algorithms/stratify.py" line="296"/>
+        <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
+        <translation>El estrato h contiene las celdas con b(h−1) ≤ {name} &lt; b(h). Límites sobre {name}:</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="300" />
-      <source>Boundary</source>
-      <translation>Límite</translation>
+        <location filename="../processing/algorithms/stratify.py" line="299"/>
+        <source>Boundary</source>
+        <translation>Límite</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="300" />
-      <location filename="../processing/algorithms/stratify.py" line="354" />
-      <source>Value</source>
-      <translation>Valor</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>Value</source>
+        <translation>Valor</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="303" />
-      <source>Exact sample quantiles at h/k of the frame's cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
-      <translation>Cuantiles muestrales exactos en h/k de las celdas del marco (Hyndman &amp; Fan 1996, definición 7), hallados en dos pasadas: un histograma de 64.000 clases localiza cada cuantil y luego se ordenan las celdas de esa clase.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="302"/>
+        <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
+        <translation>Cuantiles muestrales exactos en h/k de las celdas del marco (Hyndman &amp; Fan 1996, definición 7), hallados en dos pasadas: un histograma de 64.000 clases localiza cada cuantil y luego se ordenan las celdas de esa clase.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="308" />
-      <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
-      <translation>Dalenius &amp; Hodges (1959): sobre un histograma de {name} de {n} clases, los límites son los extremos superiores de las clases donde la suma acumulada de √f está más cerca de h/k de su total.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="307"/>
+        <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
+        <translation>Dalenius &amp; Hodges (1959): sobre un histograma de {name} de {n} clases, los límites son los extremos superiores de las clases donde la suma acumulada de √f está más cerca de h/k de su total.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="314" />
-      <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
-      <translation>Covariables estandarizadas con su media y su DE sobre el marco; semillas k-means++ e iteraciones de Lloyd sobre una muestra aleatoria de {m} celdas (semilla {seed}); {it} iteraciones. Después cada celda fue al centro más próximo.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="313"/>
+        <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
+        <translation>Covariables estandarizadas con su media y su DE sobre el marco; semillas k-means++ e iteraciones de Lloyd sobre una muestra aleatoria de {m} celdas (semilla {seed}); {it} iteraciones. Después cada celda fue al centro más próximo.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="320" />
-      <source>Each class of '{name}' is one stratum ({k} classes).</source>
-      <translation>Cada clase de «{name}» es un estrato ({k} clases).</translation>
+        <location filename="../processing/algorithms/stratify.py" line="319"/>
+        <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
+        <translation>Cada clase de «{name}» es un estrato ({k} clases).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="322" />
-      <source>Share of covariate variance explained by the strata (R²)</source>
-      <translation>Parte de la varianza de las covariables explicada por los estratos (R²)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="321"/>
+        <source>Share of covariate variance explained by the strata (R²)</source>
+        <translation>Parte de la varianza de las covariables explicada por los estratos (R²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>Covariate</source>
-      <translation>Covariable</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>Covariate</source>
+        <translation>Covariable</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>Mean</source>
-      <translation>Media</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>Mean</source>
+        <translation>Media</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>SD</source>
-      <translation>DE</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>SD</source>
+        <translation>DE</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>R²</source>
-      <translation>R²</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>R²</source>
+        <translation>R²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="326" />
-      <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
-      <translation>R² = 1 − Σ N_h S_h² / (N S²): la parte entre estratos de la varianza de la covariable sobre las celdas. Para una magnitud que sigue exactamente a la covariable, la asignación proporcional sobre estos estratos reduciría la varianza de la media estimada en esta parte respecto al muestreo aleatorio simple (Cochran 1977, cap. 5, aproximación para poblaciones grandes). La ganancia para la densidad animal es menor cuanto menos sigue la densidad a la covariable.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="325"/>
+        <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
+        <translation>R² = 1 − Σ N_h S_h² / (N S²): la parte entre estratos de la varianza de la covariable sobre las celdas. Para una magnitud que sigue exactamente a la covariable, la asignación proporcional sobre estos estratos reduciría la varianza de la media estimada en esta parte respecto al muestreo aleatorio simple (Cochran 1977, cap. 5, aproximación para poblaciones grandes). La ganancia para la densidad animal es menor cuanto menos sigue la densidad a la covariable.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="333" />
-      <source>Histogram of {name}</source>
-      <translation>Histograma de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="332"/>
+        <source>Histogram of {name}</source>
+        <translation>Histograma de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="341" />
-      <source>stratum {h}</source>
-      <translation>estrato {h}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>stratum {h}</source>
+        <translation>estrato {h}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="342" />
-      <source>cells</source>
-      <translation>celdas</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>cells</source>
+        <translation>celdas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="343" />
-      <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
-      <translation>Celdas del marco según {name}, coloreadas por estrato; líneas discontinuas: límites de los estratos.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
+        <translation>Celdas del marco según {name}, coloreadas por estrato; líneas discontinuas: límites de los estratos.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="345" />
-      <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
-      <translation>Celdas del marco según {name}, coloreadas por estrato (los estratos de k-medias pueden solaparse en una covariable).</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
+        <translation>Celdas del marco según {name}, coloreadas por estrato (los estratos de k-medias pueden solaparse en una covariable).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="348" />
-      <source>Map</source>
-      <translation>Mapa</translation>
+        <location filename="../processing/algorithms/stratify.py" line="347"/>
+        <source>Map</source>
+        <translation>Mapa</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="350" />
-      <source>Strata within the sampling frame</source>
-      <translation>Estratos dentro del marco de muestreo</translation>
+        <location filename="../processing/algorithms/stratify.py" line="349"/>
+        <source>Strata within the sampling frame</source>
+        <translation>Estratos dentro del marco de muestreo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="352" />
-      <source>Coverage</source>
-      <translation>Cobertura</translation>
+        <location filename="../processing/algorithms/stratify.py" line="351"/>
+        <source>Coverage</source>
+        <translation>Cobertura</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="354" />
-      <source>Item</source>
-      <translation>Elemento</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>Item</source>
+        <translation>Elemento</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="355" />
-      <source>frame area (ha)</source>
-      <translation>área del marco (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>frame area (ha)</source>
+        <translation>área del marco (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="356" />
-      <source>frame area outside the first covariate's extent (ha)</source>
-      <translation>área del marco fuera de la extensión de la primera covariable (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>frame area outside the first covariate&apos;s extent (ha)</source>
+        <translation>área del marco fuera de la extensión de la primera covariable (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="357" />
-      <source>frame cells with NoData in a covariate (ha)</source>
-      <translation>celdas del marco con NoData en alguna covariable (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>frame cells with NoData in a covariate (ha)</source>
+        <translation>celdas del marco con NoData en alguna covariable (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="359" />
-      <source>share of the frame covered</source>
-      <translation>parte del marco cubierta</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>share of the frame covered</source>
+        <translation>parte del marco cubierta</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="360" />
-      <source>cells stratified</source>
-      <translation>celdas estratificadas</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>cells stratified</source>
+        <translation>celdas estratificadas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="361" />
-      <source>cell size (m)</source>
-      <translation>tamaño de celda (m)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>cell size (m)</source>
+        <translation>tamaño de celda (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="362" />
-      <source>grid</source>
-      <translation>malla</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>grid</source>
+        <translation>malla</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="363" />
-      <source>covariates warped on the fly</source>
-      <translation>covariables remuestreadas al vuelo</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>covariates warped on the fly</source>
+        <translation>covariables remuestreadas al vuelo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="363" />
-      <source>none</source>
-      <translation>ninguna</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>none</source>
+        <translation>ninguna</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="368" />
-      <source>, projected from {src} (UTM zone of the frame's centre)</source>
-      <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="367"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="370" />
-      <source>Sampling frame (FRAME)</source>
-      <translation>Marco de muestreo (FRAME)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="369"/>
+        <source>Sampling frame (FRAME)</source>
+        <translation>Marco de muestreo (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="371" />
-      <source>Covariates (COVARIATES)</source>
-      <translation>Covariables (COVARIATES)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="370"/>
+        <source>Covariates (COVARIATES)</source>
+        <translation>Covariables (COVARIATES)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="372" />
-      <source>Method (METHOD)</source>
-      <translation>Método (METHOD)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="371"/>
+        <source>Method (METHOD)</source>
+        <translation>Método (METHOD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="373" />
-      <source>Number of strata (STRATA)</source>
-      <translation>Número de estratos (STRATA)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <source>Number of strata (STRATA)</source>
+        <translation>Número de estratos (STRATA)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="373" />
-      <source>ignored</source>
-      <translation>ignorado</translation>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <source>ignored</source>
+        <translation>ignorado</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="374" />
-      <source>Minimum patch area (MIN_AREA, ha)</source>
-      <translation>Área mínima de mancha (MIN_AREA, ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="373"/>
+        <source>Minimum patch area (MIN_AREA, ha)</source>
+        <translation>Área mínima de mancha (MIN_AREA, ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="375" />
-      <source>CRS of the computation and the outputs</source>
-      <translation>SRC del cálculo y de las salidas</translation>
+        <location filename="../processing/algorithms/stratify.py" line="374"/>
+        <source>CRS of the computation and the outputs</source>
+        <translation>SRC del cálculo y de las salidas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="378" />
-      <source>Seed (SEED)</source>
-      <translation>Semilla (SEED)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="377"/>
+        <source>Seed (SEED)</source>
+        <translation>Semilla (SEED)</translation>
     </message>
-  </context>
+</context>
 </TS>

@@ -1,16 +1,16 @@
 <?xml version="1.0" encoding="utf-8"?>
 <!DOCTYPE TS>
 <TS version="2.1" language="fr_FR">
-  <context>
+<context>
     <name>Allocate</name>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="56" />
-      <source>Allocate effort to strata</source>
-      <translation>Répartir l'effort entre les strates</translation>
+        <location filename="../processing/algorithms/allocate.py" line="56"/>
+        <source>Allocate effort to strata</source>
+        <translation>Répartir l'effort entre les strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="59" />
-      <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
+        <location filename="../processing/algorithms/allocate.py" line="59"/>
+        <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
 
 Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
 
@@ -23,7 +23,7 @@ SD field: the pilot standard deviation of counts per unit. Without it the covari
 Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
 
 Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-      <translation>Décide combien d'unités d'échantillonnage reçoit chaque strate, et montre à l'avance la précision qu'elles apportent.
+        <translation>Décide combien d'unités d'échantillonnage reçoit chaque strate, et montre à l'avance la précision qu'elles apportent.
 
 Méthodes : égale ; proportionnelle à la surface de la strate ; Neyman, n_h ∝ A_h·S_h (Neyman 1934 ; Cochran 1977, ch. 5) ; optimale avec coût, n_h ∝ A_h·S_h/√c_h, sous un budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
 
@@ -38,441 +38,438 @@ Champ de moyenne : le comptage moyen pilote par unité, nécessaire aux CV et à
 Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité de la strate), et un rapport comparant les allocations égale, proportionnelle et de Neyman pour le même total.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="84" />
-      <source>Strata</source>
-      <translation>Strates</translation>
+        <location filename="../processing/algorithms/allocate.py" line="83"/>
+        <source>Strata</source>
+        <translation>Strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="88" />
-      <source>Stratum identifier field</source>
-      <translation>Champ d'identifiant de strate</translation>
+        <location filename="../processing/algorithms/allocate.py" line="86"/>
+        <source>Stratum identifier field</source>
+        <translation>Champ d'identifiant de strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="94" />
-      <source>Stratum area field (hectares; empty: polygon area)</source>
-      <translation>Champ de surface de la strate (hectares ; vide : surface du polygone)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="92"/>
+        <source>Stratum area field (hectares; empty: polygon area)</source>
+        <translation>Champ de surface de la strate (hectares ; vide : surface du polygone)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="99" />
-      <source>Pilot SD of counts per unit</source>
-      <translation>Écart-type pilote des comptages par unité</translation>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <source>Pilot SD of counts per unit</source>
+        <translation>Écart-type pilote des comptages par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="100" />
-      <source>Pilot mean count per unit</source>
-      <translation>Comptage moyen pilote par unité</translation>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <source>Pilot mean count per unit</source>
+        <translation>Comptage moyen pilote par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="101" />
-      <source>Cost per unit</source>
-      <translation>Coût par unité</translation>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <source>Cost per unit</source>
+        <translation>Coût par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="107" />
-      <source>Costs are field days</source>
-      <translation>Les coûts sont des jours de terrain</translation>
+        <location filename="../processing/algorithms/allocate.py" line="106"/>
+        <source>Costs are field days</source>
+        <translation>Les coûts sont des jours de terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="111" />
-      <source>Fixed cost of the survey (c0, in the cost unit)</source>
-      <translation>Coût fixe de l'inventaire (c0, dans l'unité de coût)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="109"/>
+        <source>Fixed cost of the survey (c0, in the cost unit)</source>
+        <translation>Coût fixe de l'inventaire (c0, dans l'unité de coût)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="118" />
-      <source>Allocation method</source>
-      <translation>Méthode d'allocation</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Allocation method</source>
+        <translation>Méthode d'allocation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <source>Equal</source>
-      <translation>Égale</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Equal</source>
+        <translation>Égale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <source>Proportional to area</source>
-      <translation>Proportionnelle à la surface</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Proportional to area</source>
+        <translation>Proportionnelle à la surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <location filename="../processing/algorithms/allocate.py" line="283" />
-      <source>Neyman</source>
-      <translation>Neyman</translation>
+        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <source>Neyman</source>
+        <translation>Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="119" />
-      <source>Optimal with cost</source>
-      <translation>Optimale avec coût</translation>
+        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <source>Optimal with cost</source>
+        <translation>Optimale avec coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="125" />
-      <source>Total number of units</source>
-      <translation>Nombre total d'unités</translation>
+        <location filename="../processing/algorithms/allocate.py" line="123"/>
+        <source>Total number of units</source>
+        <translation>Nombre total d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="130" />
-      <source>Budget (0: not used; needs the cost field)</source>
-      <translation>Budget (0 : non utilisé ; nécessite le champ de coût)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="128"/>
+        <source>Budget (0: not used; needs the cost field)</source>
+        <translation>Budget (0 : non utilisé ; nécessite le champ de coût)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="136" />
-      <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
-      <translation>CV cible de la densité globale (0 : non utilisé ; p. ex. 0.2)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="134"/>
+        <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
+        <translation>CV cible de la densité globale (0 : non utilisé ; p. ex. 0.2)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="142" />
-      <source>Area of one sample unit (m²)</source>
-      <translation>Surface d'une unité d'échantillonnage (m²)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="140"/>
+        <source>Area of one sample unit (m²)</source>
+        <translation>Surface d'une unité d'échantillonnage (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="148" />
-      <location filename="../processing/algorithms/allocate.py" line="314" />
-      <source>Minimum units per stratum</source>
-      <translation>Nombre minimal d'unités par strate</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Minimum units per stratum</source>
+        <translation>Nombre minimal d'unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="152" />
-      <source>Strata with allocation</source>
-      <translation>Strates avec allocation</translation>
+        <location filename="../processing/algorithms/allocate.py" line="152"/>
+        <source>Strata with allocation</source>
+        <translation>Strates avec allocation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="154" />
-      <source>Expected CV of the overall density</source>
-      <translation>CV attendu de la densité globale</translation>
+        <location filename="../processing/algorithms/allocate.py" line="154"/>
+        <source>Expected CV of the overall density</source>
+        <translation>CV attendu de la densité globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="160" />
-      <source>The strata layer could not be opened.</source>
-      <translation>La couche des strates n'a pas pu être ouverte.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="160"/>
+        <source>The strata layer could not be opened.</source>
+        <translation>La couche des strates n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="176" />
-      <source>Layer '{layer}' has no field '{field}': the polygon areas are used.</source>
-      <translation>La couche « {layer} » n'a pas de champ « {field} » : les surfaces des polygones sont utilisées.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="175"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
+        <translation>La couche « {layer} » n'a pas de champ « {field} » : les surfaces des polygones sont utilisées.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="187" />
-      <source>Layer '{layer}' has no strata with an area.</source>
-      <translation>La couche « {layer} » n'a aucune strate ayant une surface.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="187"/>
+        <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
+        <translation>La couche « {layer} » n'a aucune strate ayant une surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="202" />
-      <source>field '{name}' of layer '{layer}'</source>
-      <translation>champ « {name} » de la couche « {layer} »</translation>
+        <location filename="../processing/algorithms/allocate.py" line="202"/>
+        <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
+        <translation>champ « {name} » de la couche « {layer} »</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="217" />
-      <source>No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
-      <translation>Pas de champ d'écart-type pilote : l'écart-type de la covariable (« {field} ») sert de substitut. Cela suppose que les comptages suivent la covariable ; remplacez-le par l'écart-type d'un inventaire pilote dès que vous en avez un. Les erreurs types attendues sont alors dans les unités de la covariable, pas en comptages.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="216"/>
+        <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
+        <translation>Pas de champ d'écart-type pilote : l'écart-type de la covariable (« {field} ») sert de substitut. Cela suppose que les comptages suivent la covariable ; remplacez-le par l'écart-type d'un inventaire pilote dès que vous en avez un. Les erreurs types attendues sont alors dans les unités de la covariable, pas en comptages.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="233" />
-      <source>polygon area</source>
-      <translation>surface du polygone</translation>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <source>polygon area</source>
+        <translation>surface du polygone</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="234" />
-      <source>pilot SD</source>
-      <translation>écart-type pilote</translation>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <source>pilot SD</source>
+        <translation>écart-type pilote</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="235" />
-      <source>pilot mean</source>
-      <translation>moyenne pilote</translation>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <source>pilot mean</source>
+        <translation>moyenne pilote</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="236" />
-      <location filename="../processing/algorithms/allocate.py" line="301" />
-      <source>cost</source>
-      <translation>coût</translation>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <source>cost</source>
+        <translation>coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="259" />
-      <source>The output layer could not be created.</source>
-      <translation>La couche de sortie n'a pas pu être créée.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="259"/>
+        <source>The output layer could not be created.</source>
+        <translation>La couche de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="270" />
-      <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
-      <translation>{total} unités allouées ({method}) ; CV attendu de la densité globale : {cv}.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="269"/>
+        <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
+        <translation>{total} unités allouées ({method}) ; CV attendu de la densité globale : {cv}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="282" />
-      <source>equal</source>
-      <translation>égale</translation>
+        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <source>equal</source>
+        <translation>égale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="282" />
-      <source>proportional to area</source>
-      <translation>proportionnelle à la surface</translation>
+        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <source>proportional to area</source>
+        <translation>proportionnelle à la surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="283" />
-      <source>optimal with cost</source>
-      <translation>optimale avec coût</translation>
+        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <source>optimal with cost</source>
+        <translation>optimale avec coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="294" />
-      <source>Allocation of survey effort</source>
-      <translation>Allocation de l'effort d'inventaire</translation>
+        <location filename="../processing/algorithms/allocate.py" line="293"/>
+        <source>Allocation of survey effort</source>
+        <translation>Allocation de l'effort d'inventaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
-      <source>field days</source>
-      <translation>jours de terrain</translation>
+        <location filename="../processing/algorithms/allocate.py" line="295"/>
+        <source>field days</source>
+        <translation>jours de terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="296" />
-      <source>cost units</source>
-      <translation>unités de coût</translation>
+        <location filename="../processing/algorithms/allocate.py" line="295"/>
+        <source>cost units</source>
+        <translation>unités de coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="297" />
-      <source>units in total</source>
-      <translation>unités au total</translation>
+        <location filename="../processing/algorithms/allocate.py" line="296"/>
+        <source>units in total</source>
+        <translation>unités au total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="297" />
-      <source>method</source>
-      <translation>méthode</translation>
+        <location filename="../processing/algorithms/allocate.py" line="296"/>
+        <source>method</source>
+        <translation>méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="299" />
-      <source>expected CV of the overall density</source>
-      <translation>CV attendu de la densité globale</translation>
+        <location filename="../processing/algorithms/allocate.py" line="298"/>
+        <source>expected CV of the overall density</source>
+        <translation>CV attendu de la densité globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="301" />
-      <source>field days needed</source>
-      <translation>jours de terrain nécessaires</translation>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <source>field days needed</source>
+        <translation>jours de terrain nécessaires</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
-      <source>a total number of units</source>
-      <translation>un nombre total d'unités</translation>
+        <location filename="../processing/algorithms/allocate.py" line="302"/>
+        <source>a total number of units</source>
+        <translation>un nombre total d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
-      <source>a budget</source>
-      <translation>un budget</translation>
+        <location filename="../processing/algorithms/allocate.py" line="302"/>
+        <source>a budget</source>
+        <translation>un budget</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="303" />
-      <source>a target CV</source>
-      <translation>un CV cible</translation>
+        <location filename="../processing/algorithms/allocate.py" line="302"/>
+        <source>a target CV</source>
+        <translation>un CV cible</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="305" />
-      <source>Strata layer</source>
-      <translation>Couche des strates</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Strata layer</source>
+        <translation>Couche des strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="306" />
-      <source>Computation CRS</source>
-      <translation>SCR de calcul</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Computation CRS</source>
+        <translation>SCR de calcul</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="307" />
-      <source>Method asked for</source>
-      <translation>Méthode demandée</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Method asked for</source>
+        <translation>Méthode demandée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="308" />
-      <source>Method applied</source>
-      <translation>Méthode appliquée</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Method applied</source>
+        <translation>Méthode appliquée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="309" />
-      <source>Target</source>
-      <translation>Objectif</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Target</source>
+        <translation>Objectif</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="310" />
-      <source>Total asked for</source>
-      <translation>Total demandé</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Total asked for</source>
+        <translation>Total demandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="311" />
-      <source>Budget</source>
-      <translation>Budget</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Budget</source>
+        <translation>Budget</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="312" />
-      <source>Target CV</source>
-      <translation>CV cible</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Target CV</source>
+        <translation>CV cible</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="313" />
-      <source>Unit area (m²)</source>
-      <translation>Surface d'une unité (m²)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Unit area (m²)</source>
+        <translation>Surface d'une unité (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="315" />
-      <source>SD field</source>
-      <translation>Champ d'écart-type</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>SD field</source>
+        <translation>Champ d'écart-type</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="315" />
-      <source> (covariate proxy)</source>
-      <translation> (substitut par la covariable)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source> (covariate proxy)</source>
+        <translation> (substitut par la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="316" />
-      <source>Mean field</source>
-      <translation>Champ de moyenne</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Mean field</source>
+        <translation>Champ de moyenne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="317" />
-      <source>Cost field</source>
-      <translation>Champ de coût</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Cost field</source>
+        <translation>Champ de coût</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="318" />
-      <source>Fixed cost c0</source>
-      <translation>Coût fixe c0</translation>
+        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <source>Fixed cost c0</source>
+        <translation>Coût fixe c0</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="322" />
-      <source>Units per stratum</source>
-      <translation>Unités par strate</translation>
+        <location filename="../processing/algorithms/allocate.py" line="321"/>
+        <source>Units per stratum</source>
+        <translation>Unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="323" />
-      <source>SE of mean per unit (covariate units)</source>
-      <translation>Erreur type de la moyenne par unité (unités de la covariable)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="322"/>
+        <source>SE of mean per unit (covariate units)</source>
+        <translation>Erreur type de la moyenne par unité (unités de la covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="323" />
-      <source>SE of mean count per unit</source>
-      <translation>Erreur type du comptage moyen par unité</translation>
+        <location filename="../processing/algorithms/allocate.py" line="322"/>
+        <source>SE of mean count per unit</source>
+        <translation>Erreur type du comptage moyen par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Stratum</source>
-      <translation>Strate</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Stratum</source>
+        <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Units that fit</source>
-      <translation>Unités qui y tiennent</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Units that fit</source>
+        <translation>Unités qui y tiennent</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Lower bound</source>
-      <translation>Borne inférieure</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Lower bound</source>
+        <translation>Borne inférieure</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="324" />
-      <source>Share before rounding</source>
-      <translation>Part avant arrondi</translation>
+        <location filename="../processing/algorithms/allocate.py" line="323"/>
+        <source>Share before rounding</source>
+        <translation>Part avant arrondi</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="325" />
-      <source>Units (n_alloc)</source>
-      <translation>Unités (n_alloc)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="324"/>
+        <source>Units (n_alloc)</source>
+        <translation>Unités (n_alloc)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="325" />
-      <source>Sampling fraction</source>
-      <translation>Fraction d'échantillonnage</translation>
+        <location filename="../processing/algorithms/allocate.py" line="324"/>
+        <source>Sampling fraction</source>
+        <translation>Fraction d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="329" />
-      <source>SE of density (per km²)</source>
-      <translation>Erreur type de la densité (par km²)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="328"/>
+        <source>SE of density (per km²)</source>
+        <translation>Erreur type de la densité (par km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="331" />
-      <source>Expected CV (exp_cv)</source>
-      <translation>CV attendu (exp_cv)</translation>
+        <location filename="../processing/algorithms/allocate.py" line="330"/>
+        <source>Expected CV (exp_cv)</source>
+        <translation>CV attendu (exp_cv)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="343" />
-      <source>all strata</source>
-      <translation>toutes les strates</translation>
+        <location filename="../processing/algorithms/allocate.py" line="342"/>
+        <source>all strata</source>
+        <translation>toutes les strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="354" />
-      <source>units per stratum</source>
-      <translation>unités par strate</translation>
+        <location filename="../processing/algorithms/allocate.py" line="352"/>
+        <source>units per stratum</source>
+        <translation>unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="355" />
-      <source>Units allocated to each stratum</source>
-      <translation>Unités allouées à chaque strate</translation>
+        <location filename="../processing/algorithms/allocate.py" line="352"/>
+        <source>Units allocated to each stratum</source>
+        <translation>Unités allouées à chaque strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="357" />
-      <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-      <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="356"/>
+        <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
+        <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="363" />
-      <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-      <translation>{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="361"/>
+        <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
+        <translation>{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="364" />
-      <source>Field days needed</source>
-      <translation>Jours de terrain nécessaires</translation>
+        <location filename="../processing/algorithms/allocate.py" line="361"/>
+        <source>Field days needed</source>
+        <translation>Jours de terrain nécessaires</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="364" />
-      <source>Cost of the design</source>
-      <translation>Coût du plan</translation>
+        <location filename="../processing/algorithms/allocate.py" line="361"/>
+        <source>Cost of the design</source>
+        <translation>Coût du plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="369" />
-      <source>What the choice of method buys, at {n} units</source>
-      <translation>Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
+        <location filename="../processing/algorithms/allocate.py" line="368"/>
+        <source>What the choice of method buys, at {n} units</source>
+        <translation>Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="370" />
-      <source>Method</source>
-      <translation>Méthode</translation>
+        <location filename="../processing/algorithms/allocate.py" line="369"/>
+        <source>Method</source>
+        <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="370" />
-      <source>stratum {label}</source>
-      <translation>strate {label}</translation>
+        <location filename="../processing/algorithms/allocate.py" line="369"/>
+        <source>stratum {label}</source>
+        <translation>strate {label}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="372" />
-      <source>Variance relative to the applied allocation</source>
-      <translation>Variance relative à l'allocation appliquée</translation>
+        <location filename="../processing/algorithms/allocate.py" line="371"/>
+        <source>Variance relative to the applied allocation</source>
+        <translation>Variance relative à l'allocation appliquée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="374" />
-      <source>Expected CV</source>
-      <translation>CV attendu</translation>
+        <location filename="../processing/algorithms/allocate.py" line="373"/>
+        <source>Expected CV</source>
+        <translation>CV attendu</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/allocate.py" line="385" />
-      <source>Without standard deviations the precision of the designs cannot be compared.</source>
-      <translation>Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
+        <location filename="../processing/algorithms/allocate.py" line="384"/>
+        <source>Without standard deviations the precision of the designs cannot be compared.</source>
+        <translation>Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>BuildFrame</name>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="35" />
-      <source>Build sampling frame</source>
-      <translation>Construire la base de sondage</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="35"/>
+        <source>Build sampling frame</source>
+        <translation>Construire la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="38" />
-      <source>Builds the sampling frame: the part of the study area that the survey can speak for.
+        <location filename="../processing/algorithms/buildframe.py" line="38"/>
+        <source>Builds the sampling frame: the part of the study area that the survey can speak for.
 
 Three rules are applied in this order, each one charged only with the area still in the frame when it is applied:
 1. Excluded polygons (water, private inholdings, ...) are removed.
 2. Cells of the mask raster (band 1) whose value lies outside [minimum, maximum], or is NoData, are removed. Either bound may be left empty. Cells of the study area that the raster does not cover count as NoData. A raster in another CRS is reprojected on the fly (nearest neighbour). Example: a slope raster in degrees with maximum 30.
-3. An inward strip of the given width (metres) along the study area's boundary is removed.
+3. An inward strip of the given width (metres) along the study area&apos;s boundary is removed.
 
 The result is dissolved into one valid feature with fields frame_id and area_ha. The report gives the area kept, the area lost to each rule and a map.
 
 A study area in geographic coordinates is projected to the UTM zone of its centre; the output is in that CRS. Empty or zero-area features are skipped and invalid geometries repaired, each with a warning.
 
-Estimates from a survey on this frame apply to the frame only. Excluding steep terrain does not make the remaining terrain safe: check every unit's access and safety before fieldwork.</source>
-      <translation>Construit la base de sondage : la partie de la zone d'étude sur laquelle l'inventaire peut se prononcer.
+Estimates from a survey on this frame apply to the frame only. Excluding steep terrain does not make the remaining terrain safe: check every unit&apos;s access and safety before fieldwork.</source>
+        <translation>Construit la base de sondage : la partie de la zone d'étude sur laquelle l'inventaire peut se prononcer.
 
 Trois règles sont appliquées dans cet ordre, chacune n'étant comptée que pour la surface encore dans la base au moment où elle s'applique :
 1. Les polygones exclus (eau, enclaves privées, ...) sont retirés.
@@ -486,328 +483,301 @@ Une zone d'étude en coordonnées géographiques est projetée dans la zone UTM 
 Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclure les terrains escarpés ne rend pas le terrain restant sûr : vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="61" />
-      <source>Study area</source>
-      <translation>Zone d'étude</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="59"/>
+        <source>Study area</source>
+        <translation>Zone d'étude</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="67" />
-      <source>Areas to exclude (water, inholdings, ...)</source>
-      <translation>Zones à exclure (eau, enclaves, ...)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="64"/>
+        <source>Areas to exclude (water, inholdings, ...)</source>
+        <translation>Zones à exclure (eau, enclaves, ...)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="74" />
-      <source>Mask raster (cells outside the range are excluded)</source>
-      <translation>Raster de masque (les cellules hors de l'intervalle sont exclues)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="72"/>
+        <source>Mask raster (cells outside the range are excluded)</source>
+        <translation>Raster de masque (les cellules hors de l'intervalle sont exclues)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="80" />
-      <source>Lowest accepted mask value (empty: no lower limit)</source>
-      <translation>Valeur de masque minimale acceptée (vide : pas de limite inférieure)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="77"/>
+        <source>Lowest accepted mask value (empty: no lower limit)</source>
+        <translation>Valeur de masque minimale acceptée (vide : pas de limite inférieure)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="88" />
-      <source>Highest accepted mask value (empty: no upper limit)</source>
-      <translation>Valeur de masque maximale acceptée (vide : pas de limite supérieure)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="85"/>
+        <source>Highest accepted mask value (empty: no upper limit)</source>
+        <translation>Valeur de masque maximale acceptée (vide : pas de limite supérieure)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="96" />
-      <source>Inward edge buffer (m)</source>
-      <translation>Zone tampon intérieure en bordure (m)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="93"/>
+        <source>Inward edge buffer (m)</source>
+        <translation>Zone tampon intérieure en bordure (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="104" />
-      <location filename="../processing/algorithms/buildframe.py" line="270" />
-      <source>Sampling frame</source>
-      <translation>Base de sondage</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="269"/>
+        <source>Sampling frame</source>
+        <translation>Base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="126" />
-      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
-      <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="125"/>
+        <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
+        <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="132" />
-      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
-      <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="131"/>
+        <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
+        <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="152" />
-      <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
-      <translation>MASK_MIN ou MASK_MAX est renseigné mais aucun raster de masque (MASK) n'est donné. Choisissez un raster ou laissez les deux limites vides.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="151"/>
+        <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
+        <translation>MASK_MIN ou MASK_MAX est renseigné mais aucun raster de masque (MASK) n'est donné. Choisissez un raster ou laissez les deux limites vides.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="157" />
-      <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
-      <translation>La valeur de masque minimale acceptée (MASK_MIN = {lo}) est supérieure à la maximale (MASK_MAX = {hi}). Inversez-les ou laissez-en une vide.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="156"/>
+        <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
+        <translation>La valeur de masque minimale acceptée (MASK_MIN = {lo}) est supérieure à la maximale (MASK_MAX = {hi}). Inversez-les ou laissez-en une vide.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="170" />
-      <source>Layer '{layer}' (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
-      <translation>La couche « {layer} » (INPUT) n'a aucun polygone de surface positive. Choisissez la couche de polygones de la zone d'étude.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="169"/>
+        <source>Layer &apos;{layer}&apos; (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
+        <translation>La couche « {layer} » (INPUT) n'a aucun polygone de surface positive. Choisissez la couche de polygones de la zone d'étude.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="189" />
-      <source>Mask raster '{layer}' is given without limits: only its NoData cells are excluded.</source>
-      <translation>Le raster de masque « {layer} » est donné sans limites : seules ses cellules NoData sont exclues.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="188"/>
+        <source>Mask raster &apos;{layer}&apos; is given without limits: only its NoData cells are excluded.</source>
+        <translation>Le raster de masque « {layer} » est donné sans limites : seules ses cellules NoData sont exclues.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="196" />
-      <source>Mask raster '{layer}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
-      <translation>Le raster de masque « {layer} » n'est pas un fichier raster lisible par GDAL. Enregistrez-le d'abord en GeoTIFF.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="195"/>
+        <source>Mask raster &apos;{layer}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+        <translation>Le raster de masque « {layer} » n'est pas un fichier raster lisible par GDAL. Enregistrez-le d'abord en GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="199" />
-      <source>Reading mask raster '{layer}'…</source>
-      <translation>Chargement du raster de masque « {layer} »…</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="199"/>
+        <source>Reading mask raster '{layer}'…</source>
+        <translation>Chargement du raster de masque « {layer} »…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="213" />
-      <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
-      <translation>Raster de masque reprojeté à la volée en {crs} : {rows} × {cols} cellules de {size} m.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="212"/>
+        <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
+        <translation>Raster de masque reprojeté à la volée en {crs} : {rows} × {cols} cellules de {size} m.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="220" />
-      <source>Mask raster '{layer}' does not cover {n} of the {total} cells over the study area's extent; those cells count as NoData and are excluded.</source>
-      <translation>Le raster de masque « {layer} » ne couvre pas {n} des {total} cellules de l'emprise de la zone d'étude ; ces cellules comptent comme NoData et sont exclues.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="219"/>
+        <source>Mask raster &apos;{layer}&apos; does not cover {n} of the {total} cells over the study area&apos;s extent; those cells count as NoData and are excluded.</source>
+        <translation>Le raster de masque « {layer} » ne couvre pas {n} des {total} cellules de l'emprise de la zone d'étude ; ces cellules comptent comme NoData et sont exclues.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="244" />
-      <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
-      <translation>Base de sondage : {kept} ha sur {total} ha ({pct} %).</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="243"/>
+        <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
+        <translation>Base de sondage : {kept} ha sur {total} ha ({pct} %).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="275" />
-      <source>study area (ha)</source>
-      <translation>zone d'étude (ha)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="273"/>
+        <source>study area (ha)</source>
+        <translation>zone d'étude (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="276" />
-      <source>frame (ha)</source>
-      <translation>base de sondage (ha)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="273"/>
+        <source>frame (ha)</source>
+        <translation>base de sondage (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="277" />
-      <source>kept</source>
-      <translation>conservé</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="273"/>
+        <source>kept</source>
+        <translation>conservé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="280" />
-      <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
-      <translation>Les estimations d'un inventaire sur cette base ne valent que pour la base ({ha} ha), pas pour toute la zone d'étude.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="278"/>
+        <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
+        <translation>Les estimations d'un inventaire sur cette base ne valent que pour la base ({ha} ha), pas pour toute la zone d'étude.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="283" />
-      <source>Area kept and area lost to each rule</source>
-      <translation>Surface conservée et surface perdue par chaque règle</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="282"/>
+        <source>Area kept and area lost to each rule</source>
+        <translation>Surface conservée et surface perdue par chaque règle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="285" />
-      <source>lost to the excluded polygons (EXCLUDE)</source>
-      <translation>perdue par les polygones exclus (EXCLUDE)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="284"/>
+        <source>lost to the excluded polygons (EXCLUDE)</source>
+        <translation>perdue par les polygones exclus (EXCLUDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="286" />
-      <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
-      <translation>perdue par le masque raster (MASK hors de l'intervalle accepté, ou NoData)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="285"/>
+        <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
+        <translation>perdue par le masque raster (MASK hors de l'intervalle accepté, ou NoData)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="287" />
-      <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
-      <translation>perdue par la zone tampon intérieure (EDGE_BUFFER)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="286"/>
+        <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
+        <translation>perdue par la zone tampon intérieure (EDGE_BUFFER)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="289" />
-      <source>study area</source>
-      <translation>zone d'étude</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="288"/>
+        <source>study area</source>
+        <translation>zone d'étude</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="292" />
-      <source>sampling frame (kept)</source>
-      <translation>base de sondage (conservée)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="291"/>
+        <source>sampling frame (kept)</source>
+        <translation>base de sondage (conservée)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="293" />
-      <location filename="../processing/algorithms/buildframe.py" line="300" />
-      <source>Item</source>
-      <translation>Élément</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>Item</source>
+        <translation>Élément</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="293" />
-      <source>Area (ha)</source>
-      <translation>Surface (ha)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="292"/>
+        <source>Area (ha)</source>
+        <translation>Surface (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="293" />
-      <source>% of study area</source>
-      <translation>% de la zone d'étude</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="292"/>
+        <source>% of study area</source>
+        <translation>% de la zone d'étude</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="295" />
-      <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
-      <translation>Les règles sont appliquées dans l'ordre indiqué ; chacune n'est comptée que pour la surface encore dans la base, si bien que la base et les surfaces perdues totalisent la zone d'étude.</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="293"/>
+        <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
+        <translation>Les règles sont appliquées dans l'ordre indiqué ; chacune n'est comptée que pour la surface encore dans la base, si bien que la base et les surfaces perdues totalisent la zone d'étude.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="299" />
-      <source>Mask raster</source>
-      <translation>Raster de masque</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="298"/>
+        <source>Mask raster</source>
+        <translation>Raster de masque</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="300" />
-      <source>Value</source>
-      <translation>Valeur</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>Value</source>
+        <translation>Valeur</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="301" />
-      <source>cells tested over the study area's extent</source>
-      <translation>cellules testées sur l'emprise de la zone d'étude</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cells tested over the study area&apos;s extent</source>
+        <translation>cellules testées sur l'emprise de la zone d'étude</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="302" />
-      <source>cell size (m)</source>
-      <translation>taille de cellule (m)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cell size (m)</source>
+        <translation>taille de cellule (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="303" />
-      <source>cells below the lowest accepted value</source>
-      <translation>cellules sous la valeur minimale acceptée</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cells below the lowest accepted value</source>
+        <translation>cellules sous la valeur minimale acceptée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="304" />
-      <source>cells above the highest accepted value</source>
-      <translation>cellules au-dessus de la valeur maximale acceptée</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>cells above the highest accepted value</source>
+        <translation>cellules au-dessus de la valeur maximale acceptée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="305" />
-      <source>NoData cells (including cells outside the raster)</source>
-      <translation>cellules NoData (y compris les cellules hors du raster)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>NoData cells (including cells outside the raster)</source>
+        <translation>cellules NoData (y compris les cellules hors du raster)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="306" />
-      <source>reprojected on the fly (nearest neighbour)</source>
-      <translation>reprojeté à la volée (plus proche voisin)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>reprojected on the fly (nearest neighbour)</source>
+        <translation>reprojeté à la volée (plus proche voisin)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="306" />
-      <source>yes</source>
-      <translation>oui</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>yes</source>
+        <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="306" />
-      <source>no</source>
-      <translation>non</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="299"/>
+        <source>no</source>
+        <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="309" />
-      <source>Map</source>
-      <translation>Carte</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="308"/>
+        <source>Map</source>
+        <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="310" />
-      <source>Frame (filled), with the areas lost to each rule</source>
-      <translation>Base de sondage (remplie), avec les surfaces perdues par chaque règle</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="309"/>
+        <source>Frame (filled), with the areas lost to each rule</source>
+        <translation>Base de sondage (remplie), avec les surfaces perdues par chaque règle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="313" />
-      <source>(none)</source>
-      <translation>(aucun)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="312"/>
+        <source>(none)</source>
+        <translation>(aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="317" />
-      <source>, projected from {src} (UTM zone of the study area's centre)</source>
-      <translation>, projeté depuis {src} (zone UTM du centre de la zone d'étude)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="316"/>
+        <source>, projected from {src} (UTM zone of the study area&apos;s centre)</source>
+        <translation>, projeté depuis {src} (zone UTM du centre de la zone d'étude)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="319" />
-      <source>Study area (INPUT)</source>
-      <translation>Zone d'étude (INPUT)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Study area (INPUT)</source>
+        <translation>Zone d'étude (INPUT)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="320" />
-      <source>Areas to exclude (EXCLUDE)</source>
-      <translation>Zones à exclure (EXCLUDE)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Areas to exclude (EXCLUDE)</source>
+        <translation>Zones à exclure (EXCLUDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="321" />
-      <source>Mask raster (MASK)</source>
-      <translation>Raster de masque (MASK)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Mask raster (MASK)</source>
+        <translation>Raster de masque (MASK)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="322" />
-      <source>Lowest accepted mask value (MASK_MIN)</source>
-      <translation>Valeur de masque minimale acceptée (MASK_MIN)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Lowest accepted mask value (MASK_MIN)</source>
+        <translation>Valeur de masque minimale acceptée (MASK_MIN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="323" />
-      <source>Highest accepted mask value (MASK_MAX)</source>
-      <translation>Valeur de masque maximale acceptée (MASK_MAX)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Highest accepted mask value (MASK_MAX)</source>
+        <translation>Valeur de masque maximale acceptée (MASK_MAX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="324" />
-      <source>Inward edge buffer (EDGE_BUFFER, m)</source>
-      <translation>Zone tampon intérieure (EDGE_BUFFER, m)</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>Inward edge buffer (EDGE_BUFFER, m)</source>
+        <translation>Zone tampon intérieure (EDGE_BUFFER, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="325" />
-      <source>CRS of the computation and the output</source>
-      <translation>SCR du calcul et de la sortie</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="317"/>
+        <source>CRS of the computation and the output</source>
+        <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="360" />
-      <source>sampling frame</source>
-      <translation>base de sondage</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="358"/>
+        <source>sampling frame</source>
+        <translation>base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="362" />
-      <source>excluded polygons</source>
-      <translation>polygones exclus</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="361"/>
+        <source>excluded polygons</source>
+        <translation>polygones exclus</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="366" />
-      <source>raster mask</source>
-      <translation>masque raster</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="365"/>
+        <source>raster mask</source>
+        <translation>masque raster</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/buildframe.py" line="368" />
-      <source>study area boundary</source>
-      <translation>limite de la zone d'étude</translation>
+        <location filename="../processing/algorithms/buildframe.py" line="367"/>
+        <source>study area boundary</source>
+        <translation>limite de la zone d'étude</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>CompareDesigns</name>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="80" />
-      <source>Compare survey designs by simulation</source>
-      <translation>Comparer des plans d'inventaire par simulation</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="80"/>
+        <source>Compare survey designs by simulation</source>
+        <translation>Comparer des plans d'inventaire par simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>simple random</source>
-      <translation>aléatoire simple</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>stratified proportional</source>
-      <translation>stratifié proportionnel</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>stratified Neyman</source>
-      <translation>stratifié Neyman</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>systematic grid</source>
-      <translation>grille systématique</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="84" />
-      <source>spatially balanced</source>
-      <translation>spatialement équilibré</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="87" />
-      <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
+        <location filename="../processing/algorithms/comparedesigns.py" line="87"/>
+        <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
 
@@ -822,7 +792,7 @@ Output table, one row per design: rel_bias (relative bias against each populatio
 Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
 
 The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-      <translation>Avant le terrain : quel plan, et combien d'unités, donnent une estimation utilisable sur cette zone ? L'algorithme simule de nombreux inventaires d'une surface de densité plausible et indique comment chaque plan s'en est sorti.
+        <translation>Avant le terrain : quel plan, et combien d'unités, donnent une estimation utilisable sur cette zone ? L'algorithme simule de nombreux inventaires d'une surface de densité plausible et indique comment chaque plan s'en est sorti.
 
 Surface : un raster d'animaux attendus par km² (issu d'un modèle d'habitat, d'une carte d'expert ou d'un inventaire antérieur), reprojeté dans le SCR de la base si nécessaire. Base : la base de sondage. Strates (facultatives, avec le champ de strate, 'stratum' par défaut) : nécessaires aux deux plans stratifiés.
 
@@ -839,783 +809,769 @@ Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparais
 La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="123" />
-      <source>Density surface (expected animals per km²)</source>
-      <translation>Surface de densité (animaux attendus par km²)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="123"/>
+        <source>Density surface (expected animals per km²)</source>
+        <translation>Surface de densité (animaux attendus par km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="125" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="374" />
-      <source>Sampling frame</source>
-      <translation>Base de sondage</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="373"/>
+        <source>Sampling frame</source>
+        <translation>Base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="129" />
-      <source>Strata (for the stratified designs)</source>
-      <translation>Strates (pour les plans stratifiés)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="127"/>
+        <source>Strata (for the stratified designs)</source>
+        <translation>Strates (pour les plans stratifiés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="134" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
-      <source>Stratum field</source>
-      <translation>Champ de strate</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
+        <source>Stratum field</source>
+        <translation>Champ de strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="139" />
-      <source>Designs to compare</source>
-      <translation>Plans à comparer</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Designs to compare</source>
+        <translation>Plans à comparer</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
-      <source>Simple random</source>
-      <translation>Aléatoire simple</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Simple random</source>
+        <translation>Aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="140" />
-      <source>Stratified, proportional allocation</source>
-      <translation>Stratifié, allocation proportionnelle</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Stratified, proportional allocation</source>
+        <translation>Stratifié, allocation proportionnelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
-      <source>Stratified, Neyman allocation</source>
-      <translation>Stratifié, allocation de Neyman</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Stratified, Neyman allocation</source>
+        <translation>Stratifié, allocation de Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
-      <source>Systematic grid</source>
-      <translation>Grille systématique</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Systematic grid</source>
+        <translation>Grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="141" />
-      <source>Spatially balanced</source>
-      <translation>Spatialement équilibré</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <source>Spatially balanced</source>
+        <translation>Spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="147" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="384" />
-      <source>Number of units</source>
-      <translation>Nombre d'unités</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="383"/>
+        <source>Number of units</source>
+        <translation>Nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="152" />
-      <source>Unit shape</source>
-      <translation>Forme de l'unité</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Unit shape</source>
+        <translation>Forme de l'unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Point station</source>
-      <translation>Station ponctuelle</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Point station</source>
+        <translation>Station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Square plot</source>
-      <translation>Placette carrée</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Square plot</source>
+        <translation>Placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Circular plot</source>
-      <translation>Placette circulaire</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Circular plot</source>
+        <translation>Placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="153" />
-      <source>Line transect</source>
-      <translation>Transect linéaire</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <source>Line transect</source>
+        <translation>Transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="159" />
-      <source>Unit size (m): counting radius, side, radius or transect length</source>
-      <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
+        <source>Unit size (m): counting radius, side, radius or transect length</source>
+        <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="165" />
-      <source>Half-width of a transect's counting strip (m)</source>
-      <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
+        <source>Half-width of a transect&apos;s counting strip (m)</source>
+        <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="171" />
-      <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
-      <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
+        <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
+        <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="177" />
-      <source>Keep units wholly inside their stratum (as the layout's option)</source>
-      <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
+        <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
+        <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="183" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="385" />
-      <source>Simulated surveys per design</source>
-      <translation>Inventaires simulés par plan</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="384"/>
+        <source>Simulated surveys per design</source>
+        <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="189" />
-      <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
-      <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="187"/>
+        <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
+        <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="195" />
-      <source>Variance estimator for the grid and balanced designs</source>
-      <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <source>Variance estimator for the grid and balanced designs</source>
+        <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
-      <source>Simple random sampling formula</source>
-      <translation>Formule de l'échantillonnage aléatoire simple</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <source>Simple random sampling formula</source>
+        <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="196" />
-      <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
-      <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
+        <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="202" />
-      <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
-      <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="200"/>
+        <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
+        <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="208" />
-      <source>Design comparison</source>
-      <translation>Comparaison des plans</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="207"/>
+        <source>Design comparison</source>
+        <translation>Comparaison des plans</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="211" />
-      <source>Recommended design</source>
-      <translation>Plan recommandé</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
+        <source>Recommended design</source>
+        <translation>Plan recommandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="217" />
-      <source>The density surface could not be opened.</source>
-      <translation>La surface de densité n'a pas pu être ouverte.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="217"/>
+        <source>The density surface could not be opened.</source>
+        <translation>La surface de densité n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="220" />
-      <source>The sampling frame could not be opened.</source>
-      <translation>La base de sondage n'a pas pu être ouverte.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
+        <source>The sampling frame could not be opened.</source>
+        <translation>La base de sondage n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="226" />
-      <source>Layer '{layer}' has no polygon with an area.</source>
-      <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="225"/>
+        <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
+        <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="240" />
-      <source>Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.</source>
-      <translation>La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
+        <translation>La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="251" />
-      <source>Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
-      <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
+        <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
+        <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="261" />
-      <source>No strata were given: the stratified designs are left out ({names}).</source>
-      <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="261"/>
+        <source>No strata were given: the stratified designs are left out ({names}).</source>
+        <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="266" />
-      <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
-      <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="265"/>
+        <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
+        <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="283" />
-      <source>Reading the density surface…</source>
-      <translation>Chargement de la surface de densité…</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
+        <source>Reading the density surface…</source>
+        <translation>Chargement de la surface de densité…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="289" />
-      <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
-      <translation>La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="289"/>
+        <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
+        <translation>La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="314" />
-      <source>Simulating {n} units…</source>
-      <translation>Simulation avec {n} unités…</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
+        <source>Simulating {n} units…</source>
+        <translation>Simulation avec {n} unités…</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="320" />
-      <source>{n} units were left out of the range: {why}</source>
-      <translation>{n} unités ont été retirées de la gamme : {why}</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="320"/>
+        <source>{n} units were left out of the range: {why}</source>
+        <translation>{n} unités ont été retirées de la gamme : {why}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="327" />
-      <source>The output table could not be created.</source>
-      <translation>La table de sortie n'a pas pu être créée.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="327"/>
+        <source>The output table could not be created.</source>
+        <translation>La table de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="344" />
-      <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
-      <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="344"/>
+        <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
+        <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="353" />
-      <source>Survey designs compared by simulation</source>
-      <translation>Plans d'inventaire comparés par simulation</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="352"/>
+        <source>Survey designs compared by simulation</source>
+        <translation>Plans d'inventaire comparés par simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="359" />
-      <source>recommended design</source>
-      <translation>plan recommandé</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="358"/>
+        <source>recommended design</source>
+        <translation>plan recommandé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="360" />
-      <source>its RMSE (animals)</source>
-      <translation>sa REQM (animaux)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
+        <source>its RMSE (animals)</source>
+        <translation>sa REQM (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="361" />
-      <source>its RMSE relative to the total</source>
-      <translation>sa REQM relative au total</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="360"/>
+        <source>its RMSE relative to the total</source>
+        <translation>sa REQM relative au total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="362" />
-      <source>its 95 % interval coverage</source>
-      <translation>couverture de ses intervalles à 95 %</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="361"/>
+        <source>its 95 % interval coverage</source>
+        <translation>couverture de ses intervalles à 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="364" />
-      <source>expected animals in the frame</source>
-      <translation>animaux attendus dans la base de sondage</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="363"/>
+        <source>expected animals in the frame</source>
+        <translation>animaux attendus dans la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>point station</source>
-      <translation>station ponctuelle</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>point station</source>
+        <translation>station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>square plot</source>
-      <translation>placette carrée</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>square plot</source>
+        <translation>placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>circular plot</source>
-      <translation>placette circulaire</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>circular plot</source>
+        <translation>placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="366" />
-      <source>line transect</source>
-      <translation>transect linéaire</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
+        <source>line transect</source>
+        <translation>transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>counting radius</source>
-      <translation>rayon de comptage</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>counting radius</source>
+        <translation>rayon de comptage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>side</source>
-      <translation>côté</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>side</source>
+        <translation>côté</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>radius</source>
-      <translation>rayon</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>radius</source>
+        <translation>rayon</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="367" />
-      <source>length</source>
-      <translation>longueur</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
+        <source>length</source>
+        <translation>longueur</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="371" />
-      <source>, strip half-width {w:g} m</source>
-      <translation>, demi-largeur de bande {w:g} m</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="370"/>
+        <source>, strip half-width {w:g} m</source>
+        <translation>, demi-largeur de bande {w:g} m</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="373" />
-      <source>Density surface</source>
-      <translation>Surface de densité</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="372"/>
+        <source>Density surface</source>
+        <translation>Surface de densité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="476" />
-      <source>Strata</source>
-      <translation>Strates</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="474"/>
+        <source>Strata</source>
+        <translation>Strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="375" />
-      <source>none</source>
-      <translation>aucune</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
+        <source>none</source>
+        <translation>aucune</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="376" />
-      <source>feature id</source>
-      <translation>identifiant d'entité</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
+        <source>feature id</source>
+        <translation>identifiant d'entité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="377" />
-      <source>Computation CRS</source>
-      <translation>SCR de calcul</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="376"/>
+        <source>Computation CRS</source>
+        <translation>SCR de calcul</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="378" />
-      <source>Surface cell</source>
-      <translation>Cellule de la surface</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="377"/>
+        <source>Surface cell</source>
+        <translation>Cellule de la surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="379" />
-      <source>Sub-cells per cell side (for counting)</source>
-      <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="378"/>
+        <source>Sub-cells per cell side (for counting)</source>
+        <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="380" />
-      <source>Unit</source>
-      <translation>Unité</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="379"/>
+        <source>Unit</source>
+        <translation>Unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="381" />
-      <source>Counted area per unit (m²)</source>
-      <translation>Surface comptée par unité (m²)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="380"/>
+        <source>Counted area per unit (m²)</source>
+        <translation>Surface comptée par unité (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
-      <source>Bearing</source>
-      <translation>Azimut</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
+        <source>Bearing</source>
+        <translation>Azimut</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="382" />
-      <source>random</source>
-      <translation>aléatoire</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
+        <source>random</source>
+        <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
-      <source>Units wholly inside their stratum</source>
-      <translation>Unités entièrement dans leur strate</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
+        <source>Units wholly inside their stratum</source>
+        <translation>Unités entièrement dans leur strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
-      <source>yes</source>
-      <translation>oui</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
+        <source>yes</source>
+        <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="383" />
-      <source>no</source>
-      <translation>non</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
+        <source>no</source>
+        <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
-      <source>Counts per cell</source>
-      <translation>Comptages par cellule</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
+        <source>Counts per cell</source>
+        <translation>Comptages par cellule</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="386" />
-      <source>negative binomial, k = {k:g}</source>
-      <translation>binomiale négative, k = {k:g}</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
+        <source>negative binomial, k = {k:g}</source>
+        <translation>binomiale négative, k = {k:g}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="387" />
-      <source>Poisson</source>
-      <translation>Poisson</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
+        <source>Poisson</source>
+        <translation>Poisson</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
-      <source>Variance estimator (grid, balanced)</source>
-      <translation>Estimateur de variance (grille, équilibré)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
+        <source>Variance estimator (grid, balanced)</source>
+        <translation>Estimateur de variance (grille, équilibré)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="388" />
-      <source>local neighbourhood</source>
-      <translation>voisinage local</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
+        <source>local neighbourhood</source>
+        <translation>voisinage local</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="389" />
-      <source>simple random sampling formula</source>
-      <translation>formule de l'échantillonnage aléatoire simple</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
+        <source>simple random sampling formula</source>
+        <translation>formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="390" />
-      <source>Confidence level</source>
-      <translation>Niveau de confiance</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="389"/>
+        <source>Confidence level</source>
+        <translation>Niveau de confiance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="391" />
-      <source>Seed</source>
-      <translation>Graine</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="390"/>
+        <source>Seed</source>
+        <translation>Graine</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="396" />
-      <source>How the designs did at {n} units</source>
-      <translation>Résultats des plans pour {n} unités</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="395"/>
+        <source>How the designs did at {n} units</source>
+        <translation>Résultats des plans pour {n} unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Design</source>
-      <translation>Plan</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Design</source>
+        <translation>Plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Mean units surveyed</source>
-      <translation>Unités inventoriées en moyenne</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Mean units surveyed</source>
+        <translation>Unités inventoriées en moyenne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Relative bias</source>
-      <translation>Biais relatif</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Relative bias</source>
+        <translation>Biais relatif</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="397" />
-      <source>Empirical SE (animals)</source>
-      <translation>Erreur type empirique (animaux)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
+        <source>Empirical SE (animals)</source>
+        <translation>Erreur type empirique (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="508" />
-      <location filename="../processing/algorithms/comparedesigns.py" line="513" />
-      <source>RMSE (animals)</source>
-      <translation>REQM (animaux)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="510"/>
+        <source>RMSE (animals)</source>
+        <translation>REQM (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <source>± Monte Carlo SE</source>
-      <translation>± erreur type de Monte-Carlo</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
+        <source>± Monte Carlo SE</source>
+        <translation>± erreur type de Monte-Carlo</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <source>RMSE / total</source>
-      <translation>REQM / total</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
+        <source>RMSE / total</source>
+        <translation>REQM / total</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="398" />
-      <source>Mean estimated CV</source>
-      <translation>CV estimé moyen</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
+        <source>Mean estimated CV</source>
+        <translation>CV estimé moyen</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="399" />
-      <source>95 % interval coverage</source>
-      <translation>Couverture des intervalles à 95 %</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
+        <source>95 % interval coverage</source>
+        <translation>Couverture des intervalles à 95 %</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="399" />
-      <source>Surveys without an estimate</source>
-      <translation>Inventaires sans estimation</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
+        <source>Surveys without an estimate</source>
+        <translation>Inventaires sans estimation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="411" />
-      <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-      <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="410"/>
+        <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
+        <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="418" />
-      <source>RMSE of the abundance (animals)</source>
-      <translation>REQM de l'abondance (animaux)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
+        <source>RMSE of the abundance (animals)</source>
+        <translation>REQM de l'abondance (animaux)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="420" />
-      <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-      <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
+        <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
+        <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="422" />
-      <source>Recommendation</source>
-      <translation>Recommandation</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="421"/>
+        <source>Recommendation</source>
+        <translation>Recommandation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="424" />
-      <source>No design gave estimates: see the warnings.</source>
-      <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="423"/>
+        <source>No design gave estimates: see the warnings.</source>
+        <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="426" />
-      <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-      <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="425"/>
+        <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
+        <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="432" />
-      <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-      <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="431"/>
+        <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
+        <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="439" />
-      <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-      <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="438"/>
+        <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
+        <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="444" />
-      <source>The systematic grid's number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-      <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="443"/>
+        <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
+        <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="453" />
-      <source>How the simulation works</source>
-      <translation>Fonctionnement de la simulation</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="452"/>
+        <source>How the simulation works</source>
+        <translation>Fonctionnement de la simulation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="454" />
-      <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-      <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="453"/>
+        <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
+        <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="463" />
-      <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-      <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="462"/>
+        <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
+        <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>Stratum</source>
-      <translation>Strate</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>Stratum</source>
+        <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>Area (km²)</source>
-      <translation>Surface (km²)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>Area (km²)</source>
+        <translation>Surface (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>Mean expected count per unit</source>
-      <translation>Comptage attendu moyen par unité</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>Mean expected count per unit</source>
+        <translation>Comptage attendu moyen par unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="479" />
-      <source>S_h (count SD per unit)</source>
-      <translation>S_h (écart-type du comptage par unité)</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
+        <source>S_h (count SD per unit)</source>
+        <translation>S_h (écart-type du comptage par unité)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="481" />
-      <source>Units, proportional</source>
-      <translation>Unités, proportionnelle</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="479"/>
+        <source>Units, proportional</source>
+        <translation>Unités, proportionnelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="483" />
-      <source>Units, Neyman</source>
-      <translation>Unités, Neyman</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="481"/>
+        <source>Units, Neyman</source>
+        <translation>Unités, Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="493" />
-      <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-      <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="491"/>
+        <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
+        <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="501" />
-      <source>RMSE against the number of units</source>
-      <translation>REQM en fonction du nombre d'unités</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="498"/>
+        <source>RMSE against the number of units</source>
+        <translation>REQM en fonction du nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="508" />
-      <source>number of units</source>
-      <translation>nombre d'unités</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
+        <source>number of units</source>
+        <translation>nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="509" />
-      <source>RMSE of the abundance estimate against the number of units</source>
-      <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
+        <source>RMSE of the abundance estimate against the number of units</source>
+        <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="511" />
-      <source>Units</source>
-      <translation>Unités</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="508"/>
+        <source>Units</source>
+        <translation>Unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="519" />
-      <source>{a} → {b} units: RMSE {change:+.0%}</source>
-      <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="516"/>
+        <source>{a} → {b} units: RMSE {change:+.0%}</source>
+        <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="520" />
-      <source>For {name}: </source>
-      <translation>Pour {name} : </translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="517"/>
+        <source>For {name}: </source>
+        <translation>Pour {name} : </translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/comparedesigns.py" line="521" />
-      <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-      <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
+        <location filename="../processing/algorithms/comparedesigns.py" line="518"/>
+        <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
+        <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>DemoReserve</name>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="34" />
-      <source>Demo reserve with a simulated population</source>
-      <translation>Réserve de démonstration avec une population simulée</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="34"/>
+        <source>Demo reserve with a simulated population</source>
+        <translation>Réserve de démonstration avec une population simulée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="37" />
-      <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Construit Hollin Ridge Reserve, une réserve d'altitude inventée pour les démonstrations, la formation et les tests, et une population simulée de velmar, une antilope brouteuse inventée. Rien ici ne décrit un lieu ou une espèce réels.&lt;/p&gt;&lt;p&gt;La réserve couvre 250–350 km² en WGS 84 / UTM zone 36S, avec une limite irrégulière, un lac et une enclave privée (tous deux dans la couche des zones exclues), un raster d'altitude (relief fractal synthétique avec un escarpement abrupt) et un raster de verdure (un indice de végétation de 0 à 1, corrélé à l'altitude, plus du bruit).&lt;/p&gt;&lt;p&gt;Les velmar vivent en groupes : un processus d'agrégats de Thomas inhomogène dont les centres de groupe sont plus denses là où la verdure est forte et l'altitude basse. Le vrai total est connu, et le nombre attendu d'animaux par km² est écrit dans un raster, afin de pouvoir confronter les plans d'inventaire et les estimations à la vérité.&lt;/p&gt;&lt;h3&gt;Paramètres&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : la même graine donne la même réserve et les mêmes animaux. 0 en tire une et l'enregistre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Taille de cellule raster&lt;/b&gt; : en mètres, de 10 à 500 (50 par défaut).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Limite de la réserve (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zones exclues (&lt;i&gt;kind&lt;/i&gt; lake ou inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rasters d'altitude (m), de verdure (0–1) et de velmar attendus par km²&lt;/li&gt;&lt;li&gt;Animaux (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un rapport HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Références : Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="37"/>
+        <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Construit Hollin Ridge Reserve, une réserve d'altitude inventée pour les démonstrations, la formation et les tests, et une population simulée de velmar, une antilope brouteuse inventée. Rien ici ne décrit un lieu ou une espèce réels.&lt;/p&gt;&lt;p&gt;La réserve couvre 250–350 km² en WGS 84 / UTM zone 36S, avec une limite irrégulière, un lac et une enclave privée (tous deux dans la couche des zones exclues), un raster d'altitude (relief fractal synthétique avec un escarpement abrupt) et un raster de verdure (un indice de végétation de 0 à 1, corrélé à l'altitude, plus du bruit).&lt;/p&gt;&lt;p&gt;Les velmar vivent en groupes : un processus d'agrégats de Thomas inhomogène dont les centres de groupe sont plus denses là où la verdure est forte et l'altitude basse. Le vrai total est connu, et le nombre attendu d'animaux par km² est écrit dans un raster, afin de pouvoir confronter les plans d'inventaire et les estimations à la vérité.&lt;/p&gt;&lt;h3&gt;Paramètres&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : la même graine donne la même réserve et les mêmes animaux. 0 en tire une et l'enregistre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Taille de cellule raster&lt;/b&gt; : en mètres, de 10 à 500 (50 par défaut).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Limite de la réserve (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zones exclues (&lt;i&gt;kind&lt;/i&gt; lake ou inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rasters d'altitude (m), de verdure (0–1) et de velmar attendus par km²&lt;/li&gt;&lt;li&gt;Animaux (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un rapport HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Références : Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="65" />
-      <location filename="../processing/algorithms/demoreserve.py" line="148" />
-      <source>Raster cell size (m)</source>
-      <translation>Taille de cellule raster (m)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Raster cell size (m)</source>
+        <translation>Taille de cellule raster (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="69" />
-      <source>Reserve boundary</source>
-      <translation>Limite de la réserve</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="69"/>
+        <source>Reserve boundary</source>
+        <translation>Limite de la réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="70" />
-      <source>Excluded areas (lake, inholding)</source>
-      <translation>Zones exclues (lac, enclave)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="70"/>
+        <source>Excluded areas (lake, inholding)</source>
+        <translation>Zones exclues (lac, enclave)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="71" />
-      <source>Elevation (m)</source>
-      <translation>Altitude (m)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="71"/>
+        <source>Elevation (m)</source>
+        <translation>Altitude (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="72" />
-      <source>Greenness (0–1)</source>
-      <translation>Verdure (0–1)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="72"/>
+        <source>Greenness (0–1)</source>
+        <translation>Verdure (0–1)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="73" />
-      <source>Expected animals per km²</source>
-      <translation>Animaux attendus par km²</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="73"/>
+        <source>Expected animals per km²</source>
+        <translation>Animaux attendus par km²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="74" />
-      <source>Simulated animals</source>
-      <translation>Animaux simulés</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="74"/>
+        <source>Simulated animals</source>
+        <translation>Animaux simulés</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="76" />
-      <source>True number of animals</source>
-      <translation>Nombre réel d'animaux</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="76"/>
+        <source>True number of animals</source>
+        <translation>Nombre réel d'animaux</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="77" />
-      <source>Expected number of animals</source>
-      <translation>Nombre attendu d'animaux</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
+        <source>Expected number of animals</source>
+        <translation>Nombre attendu d'animaux</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="120" />
-      <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
-      <translation>{name} : {area:,.1f} km², {n:,} velmar en {g:,} groupes (attendus : {e:,.0f}).</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="119"/>
+        <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
+        <translation>{name} : {area:,.1f} km², {n:,} velmar en {g:,} groupes (attendus : {e:,.0f}).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="136" />
-      <source>Demo reserve: {name}</source>
-      <translation>Réserve de démonstration : {name}</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="136"/>
+        <source>Demo reserve: {name}</source>
+        <translation>Réserve de démonstration : {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="137" />
-      <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
-      <translation>Données inventées pour les démonstrations, la formation et les tests. {name} et le velmar ({desc}) n'existent pas.</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="137"/>
+        <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
+        <translation>Données inventées pour les démonstrations, la formation et les tests. {name} et le velmar ({desc}) n'existent pas.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="139" />
-      <source>an invented grazing antelope that lives in loose groups</source>
-      <translation>une antilope brouteuse inventée qui vit en groupes lâches</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>reserve area</source>
+        <translation>surface de la réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="141" />
-      <source>reserve area</source>
-      <translation>surface de la réserve</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>true number of velmar</source>
+        <translation>nombre réel de velmar</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="142" />
-      <source>true number of velmar</source>
-      <translation>nombre réel de velmar</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>expected number</source>
+        <translation>nombre attendu</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="143" />
-      <source>expected number</source>
-      <translation>nombre attendu</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <source>groups</source>
+        <translation>groupes</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="144" />
-      <source>groups</source>
-      <translation>groupes</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Seed</source>
+        <translation>Graine</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="147" />
-      <source>Seed</source>
-      <translation>Graine</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>CRS</source>
+        <translation>SCR</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="149" />
-      <source>CRS</source>
-      <translation>SCR</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Mean group size (mu)</source>
+        <translation>Taille moyenne des groupes (mu)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="150" />
-      <source>Mean group size (mu)</source>
-      <translation>Taille moyenne des groupes (mu)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <source>Group spread, SD of members around the centre (m)</source>
+        <translation>Dispersion des groupes, écart-type des membres autour du centre (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="151" />
-      <source>Group spread, SD of members around the centre (m)</source>
-      <translation>Dispersion des groupes, écart-type des membres autour du centre (m)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="153"/>
+        <source>Areas</source>
+        <translation>Zones</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="153" />
-      <source>Areas</source>
-      <translation>Zones</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Part</source>
+        <translation>Partie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="155" />
-      <source>Part</source>
-      <translation>Partie</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Area (km²)</source>
+        <translation>Surface (km²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="155" />
-      <source>Area (km²)</source>
-      <translation>Surface (km²)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Reserve</source>
+        <translation>Réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="156" />
-      <location filename="../processing/algorithms/demoreserve.py" line="163" />
-      <source>Reserve</source>
-      <translation>Réserve</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Lake (excluded)</source>
+        <translation>Lac (exclu)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="156" />
-      <source>Lake (excluded)</source>
-      <translation>Lac (exclu)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <source>Private inholding (excluded)</source>
+        <translation>Enclave privée (exclue)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="157" />
-      <source>Private inholding (excluded)</source>
-      <translation>Enclave privée (exclue)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="159"/>
+        <source>Map</source>
+        <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="159" />
-      <source>Map</source>
-      <translation>Carte</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Lake</source>
+        <translation>Lac</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="164" />
-      <source>Lake</source>
-      <translation>Lac</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Private inholding</source>
+        <translation>Enclave privée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="165" />
-      <source>Private inholding</source>
-      <translation>Enclave privée</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Velmar (every third animal)</source>
+        <translation>Velmar (un animal sur trois)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="167" />
-      <source>Velmar (every third animal)</source>
-      <translation>Velmar (un animal sur trois)</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
+        <translation>Hollin Ridge Reserve, les zones exclues et les animaux simulés.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="168" />
-      <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
-      <translation>Hollin Ridge Reserve, les zones exclues et les animaux simulés.</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="169"/>
+        <source>How the population was simulated</source>
+        <translation>Comment la population a été simulée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="169" />
-      <source>How the population was simulated</source>
-      <translation>Comment la population a été simulée</translation>
+        <location filename="../processing/algorithms/demoreserve.py" line="170"/>
+        <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
+        <translation>Les centres de groupe forment un processus de Poisson inhomogène sur l'habitat (la réserve sans le lac) ; leur intensité est proportionnelle à exp(0,9 × verdure standardisée − 0,6 × altitude standardisée). Chaque groupe a un nombre de membres suivant une loi de Poisson (moyenne {mu:g}), dispersés autour de son centre avec un déplacement normal de {sigma:g} m ; les membres qui tombent hors de l'habitat ne font pas partie de la population. C'est un processus d'agrégats de Thomas. Son total attendu et sa variance sont calculés à partir de la surface d'intensité sur la grille du raster.</translation>
     </message>
-    <message>
-      <location filename="../processing/algorithms/demoreserve.py" line="170" />
-      <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
-      <translation>Les centres de groupe forment un processus de Poisson inhomogène sur l'habitat (la réserve sans le lac) ; leur intensité est proportionnelle à exp(0,9 × verdure standardisée − 0,6 × altitude standardisée). Chaque groupe a un nombre de membres suivant une loi de Poisson (moyenne {mu:g}), dispersés autour de son centre avec un déplacement normal de {sigma:g} m ; les membres qui tombent hors de l'habitat ne font pas partie de la population. C'est un processus d'agrégats de Thomas. Son total attendu et sa variance sont calculés à partir de la surface d'intensité sur la grille du raster.</translation>
-    </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>Estimate</name>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="108" />
-      <source>Estimate density and abundance</source>
-      <translation>Estimer la densité et l'abondance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="108"/>
+        <source>Estimate density and abundance</source>
+        <translation>Estimer la densité et l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="111" />
-      <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
+        <location filename="../processing/algorithms/estimate.py" line="111"/>
+        <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
 
 Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
 
@@ -1638,7 +1594,7 @@ Target CV (above 0): n_next is the number of units each stratum needs next time 
 True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
 
 Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-      <translation>Estime la densité et l'abondance par strate et pour toute la base de sondage à partir des comptages dans les unités d'échantillonnage, avec erreur type, coefficient de variation (CV) et intervalle de confiance, ainsi que la taille d'échantillon nécessaire au prochain inventaire.
+        <translation>Estime la densité et l'abondance par strate et pour toute la base de sondage à partir des comptages dans les unités d'échantillonnage, avec erreur type, coefficient de variation (CV) et intervalle de confiance, ainsi que la taille d'échantillon nécessaire au prochain inventaire.
 
 Estimateur : D_h = Σy / Σa par strate (l'estimateur par le ratio ; avec des unités égales, le comptage moyen divisé par la surface d'une unité), avec sa variance linéarisée (Cochran 1977, ch. 5 et 6) ; abondance N_h = D_h·A_h ; au total N = Σ N_h et D = N / Σ A_h, les variances s'additionnant. La correction pour population finie 1 − Σa/A_h est appliquée sur demande.
 
@@ -1663,837 +1619,814 @@ Vrai total : pour les simulations et la formation uniquement. Le rapport l'affic
 Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="157" />
-      <source>Sample units with counts</source>
-      <translation>Unités d'échantillonnage avec comptages</translation>
+        <location filename="../processing/algorithms/estimate.py" line="156"/>
+        <source>Sample units with counts</source>
+        <translation>Unités d'échantillonnage avec comptages</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="159" />
-      <location filename="../processing/algorithms/estimate.py" line="491" />
-      <source>Count field</source>
-      <translation>Champ de comptage</translation>
+        <location filename="../processing/algorithms/estimate.py" line="490"/>
+        <source>Count field</source>
+        <translation>Champ de comptage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="161" />
-      <source>Stratum field of the units</source>
-      <translation>Champ de strate des unités</translation>
+        <location filename="../processing/algorithms/estimate.py" line="160"/>
+        <source>Stratum field of the units</source>
+        <translation>Champ de strate des unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="164" />
-      <source>Unit area field (m²)</source>
-      <translation>Champ de surface d'unité (m²)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
+        <source>Unit area field (m²)</source>
+        <translation>Champ de surface d'unité (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="167" />
-      <source>Fixed unit area for points and lines (m²; 0: not used)</source>
-      <translation>Surface d'unité fixe pour les points et les lignes (m² ; 0 : non utilisée)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="166"/>
+        <source>Fixed unit area for points and lines (m²; 0: not used)</source>
+        <translation>Surface d'unité fixe pour les points et les lignes (m² ; 0 : non utilisée)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="170" />
-      <source>Strip width of line transects (m, full width; 0: not used)</source>
-      <translation>Largeur de bande des transects linéaires (m, largeur totale ; 0 : non utilisée)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="169"/>
+        <source>Strip width of line transects (m, full width; 0: not used)</source>
+        <translation>Largeur de bande des transects linéaires (m, largeur totale ; 0 : non utilisée)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="173" />
-      <source>Strata (the frame)</source>
-      <translation>Strates (la base de sondage)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="172"/>
+        <source>Strata (the frame)</source>
+        <translation>Strates (la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="175" />
-      <source>Stratum id field of the strata</source>
-      <translation>Champ d'identifiant des strates</translation>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <source>Stratum id field of the strata</source>
+        <translation>Champ d'identifiant des strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="178" />
-      <location filename="../processing/algorithms/estimate.py" line="500" />
-      <source>Confidence level</source>
-      <translation>Niveau de confiance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="499"/>
+        <source>Confidence level</source>
+        <translation>Niveau de confiance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="181" />
-      <source>Confidence interval</source>
-      <translation>Intervalle de confiance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <source>Confidence interval</source>
+        <translation>Intervalle de confiance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="182" />
-      <location filename="../processing/algorithms/estimate.py" line="485" />
-      <source>t with Satterthwaite degrees of freedom</source>
-      <translation>t avec les degrés de liberté de Satterthwaite</translation>
+        <location filename="../processing/algorithms/estimate.py" line="484"/>
+        <source>t with Satterthwaite degrees of freedom</source>
+        <translation>t avec les degrés de liberté de Satterthwaite</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="182" />
-      <source>Log-normal</source>
-      <translation>Log-normal</translation>
+        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <source>Log-normal</source>
+        <translation>Log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="183" />
-      <source>Stratified bootstrap (2,000 resamples)</source>
-      <translation>Bootstrap stratifié (2 000 rééchantillonnages)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <source>Stratified bootstrap (2,000 resamples)</source>
+        <translation>Bootstrap stratifié (2 000 rééchantillonnages)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="185" />
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <source>Finite-population correction</source>
-      <translation>Correction pour population finie</translation>
+        <location filename="../processing/algorithms/estimate.py" line="502"/>
+        <source>Finite-population correction</source>
+        <translation>Correction pour population finie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="187" />
-      <source>Detection probability p (from a separate study; 1: all seen)</source>
-      <translation>Probabilité de détection p (d'une étude distincte ; 1 : tous vus)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <source>Detection probability p (from a separate study; 1: all seen)</source>
+        <translation>Probabilité de détection p (d'une étude distincte ; 1 : tous vus)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="190" />
-      <source>Standard error of p</source>
-      <translation>Erreur type de p</translation>
+        <location filename="../processing/algorithms/estimate.py" line="189"/>
+        <source>Standard error of p</source>
+        <translation>Erreur type de p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="193" />
-      <source>Area unit of the results</source>
-      <translation>Unité de surface des résultats</translation>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <source>Area unit of the results</source>
+        <translation>Unité de surface des résultats</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="193" />
-      <source>km²</source>
-      <translation>km²</translation>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <source>km²</source>
+        <translation>km²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="193" />
-      <source>hectares</source>
-      <translation>hectares</translation>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <source>hectares</source>
+        <translation>hectares</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="196" />
-      <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
-      <translation>CV cible pour le prochain inventaire (0 : non utilisé ; p. ex. 0.15)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="195"/>
+        <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
+        <translation>CV cible pour le prochain inventaire (0 : non utilisé ; p. ex. 0.15)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="200" />
-      <location filename="../processing/algorithms/estimate.py" line="502" />
-      <source>Variance estimator</source>
-      <translation>Estimateur de variance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="501"/>
+        <source>Variance estimator</source>
+        <translation>Estimateur de variance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="201" />
-      <source>Simple random sampling formula</source>
-      <translation>Formule de l'échantillonnage aléatoire simple</translation>
+        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <source>Simple random sampling formula</source>
+        <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="202" />
-      <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
-      <translation>Voisinage local (dispositions systématiques ou spatialement équilibrées)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
+        <translation>Voisinage local (dispositions systématiques ou spatialement équilibrées)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="204" />
-      <source>The count field holds presence (1) / absence (0)</source>
-      <translation>Le champ de comptage contient présence (1) / absence (0)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="203"/>
+        <source>The count field holds presence (1) / absence (0)</source>
+        <translation>Le champ de comptage contient présence (1) / absence (0)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="206" />
-      <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
-      <translation>Écarter les strates sans unité inventoriée (la base se réduit)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="205"/>
+        <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
+        <translation>Écarter les strates sans unité inventoriée (la base se réduit)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="209" />
-      <source>True total of a simulated population (simulations and training only; 0: none)</source>
-      <translation>Vrai total d'une population simulée (simulations et formation uniquement ; 0 : aucun)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="208"/>
+        <source>True total of a simulated population (simulations and training only; 0: none)</source>
+        <translation>Vrai total d'une population simulée (simulations et formation uniquement ; 0 : aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="214" />
-      <source>Strata with estimates</source>
-      <translation>Strates avec estimations</translation>
+        <location filename="../processing/algorithms/estimate.py" line="213"/>
+        <source>Strata with estimates</source>
+        <translation>Strates avec estimations</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="216" />
-      <source>Estimate table</source>
-      <translation>Table des estimations</translation>
+        <location filename="../processing/algorithms/estimate.py" line="215"/>
+        <source>Estimate table</source>
+        <translation>Table des estimations</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="219" />
-      <source>Overall density</source>
-      <translation>Densité globale</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Overall density</source>
+        <translation>Densité globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="219" />
-      <source>SE of the overall density</source>
-      <translation>Erreur type de la densité globale</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>SE of the overall density</source>
+        <translation>Erreur type de la densité globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="220" />
-      <source>Overall abundance</source>
-      <translation>Abondance globale</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Overall abundance</source>
+        <translation>Abondance globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="221" />
-      <source>Lower confidence limit of the abundance</source>
-      <translation>Limite inférieure de confiance de l'abondance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Lower confidence limit of the abundance</source>
+        <translation>Limite inférieure de confiance de l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="222" />
-      <source>Upper confidence limit of the abundance</source>
-      <translation>Limite supérieure de confiance de l'abondance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>Upper confidence limit of the abundance</source>
+        <translation>Limite supérieure de confiance de l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="223" />
-      <source>CV of the overall estimate</source>
-      <translation>CV de l'estimation globale</translation>
+        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <source>CV of the overall estimate</source>
+        <translation>CV de l'estimation globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="246" />
-      <source>Layer '{layer}' has no count field '{field}'. Choose the field that holds the counts.</source>
-      <translation>La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="246"/>
+        <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
+        <translation>La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="255" />
-      <source>Layer '{layer}' has no stratum id field matching the units' field '{field}'. Choose the strata layer's id field (plotwise:stratify writes 'stratum'), or give a frame layer of one polygon to treat the frame as one stratum.</source>
-      <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates (plotwise:stratify écrit 'stratum'), ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="255"/>
+        <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
+        <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates (plotwise:stratify écrit 'stratum'), ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="259" />
-      <source>Layer '{layer}' is one polygon without a stratum id field: the frame is treated as one stratum, and the units' field '{field}' is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
-      <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base est traitée comme une seule strate, et le champ « {field} » des unités n'est pas utilisé. Si les unités ont été allouées aux strates de façon inégale, donnez plutôt les strates : une moyenne non stratifiée est alors biaisée.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="259"/>
+        <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
+        <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base est traitée comme une seule strate, et le champ « {field} » des unités n'est pas utilisé. Si les unités ont été allouées aux strates de façon inégale, donnez plutôt les strates : une moyenne non stratifiée est alors biaisée.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="289" />
-      <source>Layer '{layer}' has no features.</source>
-      <translation>La couche « {layer} » n'a aucune entité.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="289"/>
+        <source>Layer &apos;{layer}&apos; has no features.</source>
+        <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="294" />
-      <source>Layer '{layer}' has no polygons with an area.</source>
-      <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="294"/>
+        <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
+        <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="311" />
-      <source>{n} unused reserve unit(s) without a count were skipped.</source>
-      <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="311"/>
+        <source>{n} unused reserve unit(s) without a count were skipped.</source>
+        <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="343" />
-      <source>Layer '{layer}': units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
-      <translation>Couche « {layer} » : les unités {ids} n'ont pas de géométrie, la variance de voisinage local ne peut donc pas les utiliser. Donnez-leur leur position, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="343"/>
+        <source>Layer &apos;{layer}&apos;: units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
+        <translation>Couche « {layer} » : les unités {ids} n'ont pas de géométrie, la variance de voisinage local ne peut donc pas les utiliser. Donnez-leur leur position, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="350" />
-      <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-      <translation>Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="350"/>
+        <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
+        <translation>Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="397" />
-      <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
-      <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="397"/>
+        <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
+        <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="419" />
-      <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-      <translation>Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="419"/>
+        <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
+        <translation>Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="438" />
-      <source>In strata {strata} the units' inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-      <translation>Dans les strates {strata}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="438"/>
+        <source>In strata {strata} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
+        <translation>Dans les strates {strata}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="459" />
-      <source>occupied units</source>
-      <translation>unités occupées</translation>
+        <location filename="../processing/algorithms/estimate.py" line="458"/>
+        <source>occupied units</source>
+        <translation>unités occupées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="459" />
-      <source>animals</source>
-      <translation>animaux</translation>
+        <location filename="../processing/algorithms/estimate.py" line="458"/>
+        <source>animals</source>
+        <translation>animaux</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="460" />
-      <source>Naive occupancy from presence data</source>
-      <translation>Occupation naïve à partir de données de présence</translation>
+        <location filename="../processing/algorithms/estimate.py" line="459"/>
+        <source>Naive occupancy from presence data</source>
+        <translation>Occupation naïve à partir de données de présence</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="460" />
-      <source>Density and abundance estimate</source>
-      <translation>Estimation de la densité et de l'abondance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="459"/>
+        <source>Density and abundance estimate</source>
+        <translation>Estimation de la densité et de l'abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="463" />
-      <source>proportion of units occupied (naive)</source>
-      <translation>proportion d'unités occupées (naïve)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="462"/>
+        <source>proportion of units occupied (naive)</source>
+        <translation>proportion d'unités occupées (naïve)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="463" />
-      <source>density per {unit}</source>
-      <translation>densité par {unit}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="462"/>
+        <source>density per {unit}</source>
+        <translation>densité par {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="465" />
-      <source>estimated {what} in the frame</source>
-      <translation>estimation des {what} dans la base de sondage</translation>
+        <location filename="../processing/algorithms/estimate.py" line="464"/>
+        <source>estimated {what} in the frame</source>
+        <translation>estimation des {what} dans la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="466" />
-      <source>{level} interval</source>
-      <translation>intervalle à {level}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="465"/>
+        <source>{level} interval</source>
+        <translation>intervalle à {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="468" />
-      <location filename="../processing/algorithms/estimate.py" line="519" />
-      <source>CV</source>
-      <translation>CV</translation>
+        <location filename="../processing/algorithms/estimate.py" line="518"/>
+        <source>CV</source>
+        <translation>CV</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="469" />
-      <source>units surveyed</source>
-      <translation>unités inventoriées</translation>
+        <location filename="../processing/algorithms/estimate.py" line="468"/>
+        <source>units surveyed</source>
+        <translation>unités inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="472" />
-      <source>true total of the simulated population</source>
-      <translation>vrai total de la population simulée</translation>
+        <location filename="../processing/algorithms/estimate.py" line="471"/>
+        <source>true total of the simulated population</source>
+        <translation>vrai total de la population simulée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="477" />
-      <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-      <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="476"/>
+        <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
+        <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="483" />
-      <source>covers</source>
-      <translation>contient</translation>
+        <location filename="../processing/algorithms/estimate.py" line="476"/>
+        <source>covers</source>
+        <translation>contient</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="483" />
-      <source>misses</source>
-      <translation>ne contient pas</translation>
+        <location filename="../processing/algorithms/estimate.py" line="476"/>
+        <source>misses</source>
+        <translation>ne contient pas</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="485" />
-      <source>log-normal</source>
-      <translation>log-normal</translation>
+        <location filename="../processing/algorithms/estimate.py" line="484"/>
+        <source>log-normal</source>
+        <translation>log-normal</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="486" />
-      <source>stratified percentile bootstrap</source>
-      <translation>bootstrap stratifié des percentiles</translation>
+        <location filename="../processing/algorithms/estimate.py" line="485"/>
+        <source>stratified percentile bootstrap</source>
+        <translation>bootstrap stratifié des percentiles</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="487" />
-      <source>simple random sampling formula</source>
-      <translation>formule de l'échantillonnage aléatoire simple</translation>
+        <location filename="../processing/algorithms/estimate.py" line="486"/>
+        <source>simple random sampling formula</source>
+        <translation>formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="488" />
-      <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-      <translation>voisinage local (Stevens &amp; Olsen 2003)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="487"/>
+        <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
+        <translation>voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="490" />
-      <source>Sample units</source>
-      <translation>Unités d'échantillonnage</translation>
+        <location filename="../processing/algorithms/estimate.py" line="489"/>
+        <source>Sample units</source>
+        <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="491" />
-      <source> (presence/absence)</source>
-      <translation> (présence/absence)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="490"/>
+        <source> (presence/absence)</source>
+        <translation> (présence/absence)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="492" />
-      <source>Stratum field</source>
-      <translation>Champ de strate</translation>
+        <location filename="../processing/algorithms/estimate.py" line="491"/>
+        <source>Stratum field</source>
+        <translation>Champ de strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="492" />
-      <source>none: one stratum</source>
-      <translation>aucun : une seule strate</translation>
+        <location filename="../processing/algorithms/estimate.py" line="491"/>
+        <source>none: one stratum</source>
+        <translation>aucun : une seule strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="493" />
-      <source>Unit area</source>
-      <translation>Surface d'une unité</translation>
+        <location filename="../processing/algorithms/estimate.py" line="492"/>
+        <source>Unit area</source>
+        <translation>Surface d'une unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="493" />
-      <source>field {field} (m²)</source>
-      <translation>champ {field} (m²)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="492"/>
+        <source>field {field} (m²)</source>
+        <translation>champ {field} (m²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="494" />
-      <source>polygon area</source>
-      <translation>surface du polygone</translation>
+        <location filename="../processing/algorithms/estimate.py" line="492"/>
+        <source>polygon area</source>
+        <translation>surface du polygone</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="495" />
-      <source>strip width</source>
-      <translation>largeur de bande</translation>
+        <location filename="../processing/algorithms/estimate.py" line="494"/>
+        <source>strip width</source>
+        <translation>largeur de bande</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="496" />
-      <source>fixed</source>
-      <translation>fixe</translation>
+        <location filename="../processing/algorithms/estimate.py" line="495"/>
+        <source>fixed</source>
+        <translation>fixe</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="497" />
-      <source>Strata (frame)</source>
-      <translation>Strates (base de sondage)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="496"/>
+        <source>Strata (frame)</source>
+        <translation>Strates (base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="498" />
-      <source>Computation CRS</source>
-      <translation>SCR de calcul</translation>
+        <location filename="../processing/algorithms/estimate.py" line="497"/>
+        <source>Computation CRS</source>
+        <translation>SCR de calcul</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="499" />
-      <source>Area unit</source>
-      <translation>Unité de surface</translation>
+        <location filename="../processing/algorithms/estimate.py" line="498"/>
+        <source>Area unit</source>
+        <translation>Unité de surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="501" />
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Interval</source>
-      <translation>Intervalle</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Interval</source>
+        <translation>Intervalle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <location filename="../processing/algorithms/estimate.py" line="547" />
-      <source>yes</source>
-      <translation>oui</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>yes</source>
+        <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="503" />
-      <location filename="../processing/algorithms/estimate.py" line="547" />
-      <source>no</source>
-      <translation>non</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>no</source>
+        <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="504" />
-      <source>Detection probability p</source>
-      <translation>Probabilité de détection p</translation>
+        <location filename="../processing/algorithms/estimate.py" line="503"/>
+        <source>Detection probability p</source>
+        <translation>Probabilité de détection p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="505" />
-      <source>Target CV for the next survey</source>
-      <translation>CV cible pour le prochain inventaire</translation>
+        <location filename="../processing/algorithms/estimate.py" line="504"/>
+        <source>Target CV for the next survey</source>
+        <translation>CV cible pour le prochain inventaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="508" />
-      <source>Bootstrap resamples</source>
-      <translation>Rééchantillonnages bootstrap</translation>
+        <location filename="../processing/algorithms/estimate.py" line="507"/>
+        <source>Bootstrap resamples</source>
+        <translation>Rééchantillonnages bootstrap</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="509" />
-      <location filename="../processing/algorithms/estimate.py" line="511" />
-      <source>Seed</source>
-      <translation>Graine</translation>
+        <location filename="../processing/algorithms/estimate.py" line="510"/>
+        <source>Seed</source>
+        <translation>Graine</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="511" />
-      <source>not used (no random draws without the bootstrap)</source>
-      <translation>non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="510"/>
+        <source>not used (no random draws without the bootstrap)</source>
+        <translation>non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="515" />
-      <source>Estimates by stratum</source>
-      <translation>Estimations par strate</translation>
+        <location filename="../processing/algorithms/estimate.py" line="514"/>
+        <source>Estimates by stratum</source>
+        <translation>Estimations par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <source>Stratum</source>
-      <translation>Strate</translation>
+        <location filename="../processing/algorithms/estimate.py" line="519"/>
+        <source>Stratum</source>
+        <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <source>Area ({unit})</source>
-      <translation>Surface ({unit})</translation>
+        <location filename="../processing/algorithms/estimate.py" line="515"/>
+        <source>Area ({unit})</source>
+        <translation>Surface ({unit})</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <source>Units (n)</source>
-      <translation>Unités (n)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="515"/>
+        <source>Units (n)</source>
+        <translation>Unités (n)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="516" />
-      <source>Not surveyed</source>
-      <translation>Non inventoriées</translation>
+        <location filename="../processing/algorithms/estimate.py" line="515"/>
+        <source>Not surveyed</source>
+        <translation>Non inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
-      <source>Mean count</source>
-      <translation>Comptage moyen</translation>
+        <location filename="../processing/algorithms/estimate.py" line="516"/>
+        <source>Mean count</source>
+        <translation>Comptage moyen</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
-      <source>SD of counts</source>
-      <translation>Écart-type des comptages</translation>
+        <location filename="../processing/algorithms/estimate.py" line="516"/>
+        <source>SD of counts</source>
+        <translation>Écart-type des comptages</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="517" />
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <source>SE</source>
-      <translation>Erreur type</translation>
+        <location filename="../processing/algorithms/estimate.py" line="519"/>
+        <source>SE</source>
+        <translation>Erreur type</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="518" />
-      <location filename="../processing/algorithms/estimate.py" line="521" />
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Lower limit</source>
-      <translation>Limite inférieure</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Lower limit</source>
+        <translation>Limite inférieure</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="519" />
-      <location filename="../processing/algorithms/estimate.py" line="521" />
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Upper limit</source>
-      <translation>Limite supérieure</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Upper limit</source>
+        <translation>Limite supérieure</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="519" />
-      <source>df</source>
-      <translation>ddl</translation>
+        <location filename="../processing/algorithms/estimate.py" line="518"/>
+        <source>df</source>
+        <translation>ddl</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <location filename="../processing/algorithms/estimate.py" line="534" />
-      <source>Occupied units</source>
-      <translation>Unités occupées</translation>
+        <location filename="../processing/algorithms/estimate.py" line="532"/>
+        <source>Occupied units</source>
+        <translation>Unités occupées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="520" />
-      <location filename="../processing/algorithms/estimate.py" line="534" />
-      <source>Abundance</source>
-      <translation>Abondance</translation>
+        <location filename="../processing/algorithms/estimate.py" line="532"/>
+        <source>Abundance</source>
+        <translation>Abondance</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="523" />
-      <source>Units next time (n_next)</source>
-      <translation>Unités la prochaine fois (n_next)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="522"/>
+        <source>Units next time (n_next)</source>
+        <translation>Unités la prochaine fois (n_next)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="528" />
-      <location filename="../processing/algorithms/estimate.py" line="571" />
-      <source>all strata</source>
-      <translation>toutes les strates</translation>
+        <location filename="../processing/algorithms/estimate.py" line="569"/>
+        <source>all strata</source>
+        <translation>toutes les strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="531" />
-      <source>{what}, limits at {level}.</source>
-      <translation>{what}, limites à {level}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="530"/>
+        <source>{what}, limits at {level}.</source>
+        <translation>{what}, limites à {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="533" />
-      <source>{what} in the frame, limits at {level}.</source>
-      <translation>{what} dans la base de sondage, limites à {level}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="532"/>
+        <source>{what} in the frame, limits at {level}.</source>
+        <translation>{what} dans la base de sondage, limites à {level}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="536" />
-      <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-      <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="535"/>
+        <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
+        <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="541" />
-      <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-      <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="540"/>
+        <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
+        <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="544" />
-      <source>The overall interval by method</source>
-      <translation>L'intervalle global selon la méthode</translation>
+        <location filename="../processing/algorithms/estimate.py" line="543"/>
+        <source>The overall interval by method</source>
+        <translation>L'intervalle global selon la méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="546" />
-      <source>Used in the outputs</source>
-      <translation>Utilisé dans les sorties</translation>
+        <location filename="../processing/algorithms/estimate.py" line="544"/>
+        <source>Used in the outputs</source>
+        <translation>Utilisé dans les sorties</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="549" />
-      <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-      <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="548"/>
+        <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
+        <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="558" />
-      <source>overall abundance in a resample</source>
-      <translation>abondance globale dans un rééchantillonnage</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>overall abundance in a resample</source>
+        <translation>abondance globale dans un rééchantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="558" />
-      <source>resamples</source>
-      <translation>rééchantillonnages</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>resamples</source>
+        <translation>rééchantillonnages</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="559" />
-      <source>{level} percentile limits</source>
-      <translation>limites des percentiles à {level}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>{level} percentile limits</source>
+        <translation>limites des percentiles à {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="560" />
-      <source>The {n:,} bootstrap resamples of the overall abundance</source>
-      <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
+        <location filename="../processing/algorithms/estimate.py" line="555"/>
+        <source>The {n:,} bootstrap resamples of the overall abundance</source>
+        <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="569" />
-      <source>true density (simulation)</source>
-      <translation>vraie densité (simulation)</translation>
+        <location filename="../processing/algorithms/estimate.py" line="568"/>
+        <source>true density (simulation)</source>
+        <translation>vraie densité (simulation)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="574" />
-      <source>{what} by stratum with {level} confidence intervals</source>
-      <translation>{what} par strate avec intervalles de confiance à {level}</translation>
+        <location filename="../processing/algorithms/estimate.py" line="573"/>
+        <source>{what} by stratum with {level} confidence intervals</source>
+        <translation>{what} par strate avec intervalles de confiance à {level}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="585" />
-      <source>lowest</source>
-      <translation>minimum</translation>
+        <location filename="../processing/algorithms/estimate.py" line="581"/>
+        <source>lowest</source>
+        <translation>minimum</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="586" />
-      <source>highest</source>
-      <translation>maximum</translation>
+        <location filename="../processing/algorithms/estimate.py" line="581"/>
+        <source>highest</source>
+        <translation>maximum</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="591" />
-      <source>surveyed units</source>
-      <translation>unités inventoriées</translation>
+        <location filename="../processing/algorithms/estimate.py" line="589"/>
+        <source>surveyed units</source>
+        <translation>unités inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="594" />
-      <source>not surveyed</source>
-      <translation>non inventoriées</translation>
+        <location filename="../processing/algorithms/estimate.py" line="593"/>
+        <source>not surveyed</source>
+        <translation>non inventoriées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="596" />
-      <source>Strata shaded by {what}, with the units</source>
-      <translation>Strates ombrées selon {what}, avec les unités</translation>
+        <location filename="../processing/algorithms/estimate.py" line="595"/>
+        <source>Strata shaded by {what}, with the units</source>
+        <translation>Strates ombrées selon {what}, avec les unités</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="599" />
-      <source>Method</source>
-      <translation>Méthode</translation>
+        <location filename="../processing/algorithms/estimate.py" line="598"/>
+        <source>Method</source>
+        <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="601" />
-      <source>Each stratum's value is the proportion of its surveyed units where the species was detected; the frame's value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-      <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="600"/>
+        <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
+        <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="608" />
-      <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-      <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie est appliquée et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="607"/>
+        <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
+        <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie est appliquée et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="616" />
-      <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-      <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="614"/>
+        <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
+        <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="619" />
-      <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
-      <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987 ; Buckland et al. 2001). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="614"/>
+        <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
+        <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987 ; Buckland et al. 2001). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="621" />
-      <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-      <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie quand elle est demandée (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="614"/>
+        <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
+        <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie quand elle est demandée (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="629" />
-      <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
-      <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, et seules les différences à l'intérieur des voisinages comptent comme variance. Pour les dispositions systématiques et spatialement équilibrées, la formule de l'échantillonnage aléatoire simple surestime la variance ; cet estimateur non, pourvu que la disposition ait réellement été systématique ou spatialement équilibrée ; pour une disposition aléatoire simple, utilisez la formule simple. La somme des variances locales est mise à l'échelle une fois pour concorder en moyenne avec la formule simple quand la population n'a pas de structure spatiale (notre choix).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="628"/>
+        <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
+        <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, et seules les différences à l'intérieur des voisinages comptent comme variance. Pour les dispositions systématiques et spatialement équilibrées, la formule de l'échantillonnage aléatoire simple surestime la variance ; cet estimateur non, pourvu que la disposition ait réellement été systématique ou spatialement équilibrée ; pour une disposition aléatoire simple, utilisez la formule simple. La somme des variances locales est mise à l'échelle une fois pour concorder en moyenne avec la formule simple quand la population n'a pas de structure spatiale (notre choix).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="638" />
-      <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
-      <translation>Les strates avec une seule unité inventoriée ont été regroupées avec une voisine (parmi les strates qui la touchent sur la carte, ou à défaut les strates voisines dans l'ordre des identifiants, celle dont la densité est la plus proche) : les membres d'un groupe partagent la variance résiduelle commune du groupe (Cochran 1977, §5A.12). Les différences entre strates regroupées comptent alors comme variance, si bien que leurs erreurs types tendent à être trop grandes.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="637"/>
+        <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
+        <translation>Les strates avec une seule unité inventoriée ont été regroupées avec une voisine (parmi les strates qui la touchent sur la carte, ou à défaut les strates voisines dans l'ordre des identifiants, celle dont la densité est la plus proche) : les membres d'un groupe partagent la variance résiduelle commune du groupe (Cochran 1977, §5A.12). Les différences entre strates regroupées comptent alors comme variance, si bien que leurs erreurs types tendent à être trop grandes.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="644" />
-      <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit's count minus the group's density times the unit's area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
-      <translation>Dans le bootstrap, une strate regroupée tire autant de résidus qu'elle a d'unités parmi les unités mises en commun de son groupe (le comptage de chaque unité moins la densité du groupe multipliée par la surface de l'unité), les ajoute à sa propre estimation et les remet à l'échelle, de sorte que ses rééchantillonnages sont centrés sur sa propre estimation et varient autant que l'indique la variance des strates regroupées.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="643"/>
+        <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit&apos;s count minus the group&apos;s density times the unit&apos;s area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
+        <translation>Dans le bootstrap, une strate regroupée tire autant de résidus qu'elle a d'unités parmi les unités mises en commun de son groupe (le comptage de chaque unité moins la densité du groupe multipliée par la surface de l'unité), les ajoute à sa propre estimation et les remet à l'échelle, de sorte que ses rééchantillonnages sont centrés sur sa propre estimation et varient autant que l'indique la variance des strates regroupées.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="650" />
-      <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval's degrees of freedom combine the two parts (Buckland et al. 2001), p's part counting as known with infinite degrees of freedom.</source>
-      <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté de l'intervalle t combinent les deux parts (Buckland et al. 2001), celle de p étant comptée comme connue avec des degrés de liberté infinis.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="649"/>
+        <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval&apos;s degrees of freedom combine the two parts (Buckland et al. 2001), p&apos;s part counting as known with infinite degrees of freedom.</source>
+        <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté de l'intervalle t combinent les deux parts (Buckland et al. 2001), celle de p étant comptée comme connue avec des degrés de liberté infinis.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="657" />
-      <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
-      <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types observés maintenant (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 par strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="656"/>
+        <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
+        <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types observés maintenant (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 par strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="663" />
-      <source>Cautions</source>
-      <translation>Mises en garde</translation>
+        <location filename="../processing/algorithms/estimate.py" line="662"/>
+        <source>Cautions</source>
+        <translation>Mises en garde</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="664" />
-      <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-      <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
+        <location filename="../processing/algorithms/estimate.py" line="663"/>
+        <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
+        <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="668" />
-      <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-      <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="667"/>
+        <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
+        <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="671" />
-      <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-      <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="670"/>
+        <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
+        <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="676" />
-      <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-      <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="675"/>
+        <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
+        <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/estimate.py" line="679" />
-      <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-      <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
+        <location filename="../processing/algorithms/estimate.py" line="678"/>
+        <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
+        <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>ExampleChain</name>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="40" />
-      <source>Units with counts</source>
-      <translation>Unités avec comptages</translation>
+        <location filename="../scripts/build_models.py" line="94"/>
+        <source>Units with counts</source>
+        <translation>Unités avec comptages</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="118" />
-      <source>Estimate by stratum</source>
-      <translation>Estimation par strate</translation>
+        <location filename="../scripts/build_models.py" line="97"/>
+        <source>Estimate by stratum</source>
+        <translation>Estimation par strate</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="143" />
-      <source>Estimate report</source>
-      <translation>Rapport d'estimation</translation>
+        <location filename="../scripts/build_models.py" line="97"/>
+        <source>Estimate report</source>
+        <translation>Rapport d'estimation</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="168" />
-      <source>Estimate table</source>
-      <translation>Table des estimations</translation>
+        <location filename="../scripts/build_models.py" line="97"/>
+        <source>Estimate table</source>
+        <translation>Table des estimations</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="261" />
-      <source>Animal points</source>
-      <translation>Points des animaux</translation>
+        <location filename="../scripts/build_models.py" line="90"/>
+        <source>Animal points</source>
+        <translation>Points des animaux</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="286" />
-      <source>Detection probability</source>
-      <translation>Probabilité de détection</translation>
+        <location filename="../scripts/build_models.py" line="92"/>
+        <source>Detection probability</source>
+        <translation>Probabilité de détection</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="340" />
-      <location filename="../processing/models/plan_survey.model3" line="551" />
-      <source>Random seed (0 draws one)</source>
-      <translation>Graine aléatoire (0 en tire une)</translation>
+        <location filename="../scripts/build_models.py" line="93"/>
+        <source>Random seed (0 draws one)</source>
+        <translation>Graine aléatoire (0 en tire une)</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="355" />
-      <location filename="../processing/models/plan_survey.model3" line="200" />
-      <source>Strata</source>
-      <translation>Strates</translation>
+        <location filename="../scripts/build_models.py" line="91"/>
+        <source>Strata</source>
+        <translation>Strates</translation>
     </message>
     <message>
-      <location filename="../processing/models/estimate_simulated_counts.model3" line="368" />
-      <location filename="../processing/models/plan_survey.model3" line="291" />
-      <source>Sample units</source>
-      <translation>Unités d'échantillonnage</translation>
+        <location filename="../scripts/build_models.py" line="89"/>
+        <source>Sample units</source>
+        <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="40" />
-      <source>Strata with units allocated</source>
-      <translation>Strates avec unités allouées</translation>
+        <location filename="../scripts/build_models.py" line="75"/>
+        <source>Strata with units allocated</source>
+        <translation>Strates avec unités allouées</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="116" />
-      <source>Sampling frame</source>
-      <translation>Base de sondage</translation>
+        <location filename="../scripts/build_models.py" line="67"/>
+        <source>Sampling frame</source>
+        <translation>Base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="312" />
-      <source>Layout report</source>
-      <translation>Rapport de disposition</translation>
+        <location filename="../scripts/build_models.py" line="80"/>
+        <source>Layout report</source>
+        <translation>Rapport de disposition</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="362" />
-      <source>Waypoints (GPX)</source>
-      <translation>Points de passage (GPX)</translation>
+        <location filename="../scripts/build_models.py" line="80"/>
+        <source>Waypoints (GPX)</source>
+        <translation>Points de passage (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="458" />
-      <source>Covariate rasters</source>
-      <translation>Rasters de covariables</translation>
+        <location filename="../scripts/build_models.py" line="62"/>
+        <source>Covariate rasters</source>
+        <translation>Rasters de covariables</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="487" />
-      <source>Excluded areas</source>
-      <translation>Zones exclues</translation>
+        <location filename="../scripts/build_models.py" line="59"/>
+        <source>Excluded areas</source>
+        <translation>Zones exclues</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="512" />
-      <source>Steepest slope surveyed (degrees)</source>
-      <translation>Pente maximale inventoriée (degrés)</translation>
+        <location filename="../scripts/build_models.py" line="61"/>
+        <source>Steepest slope surveyed (degrees)</source>
+        <translation>Pente maximale inventoriée (degrés)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="525" />
-      <source>Number of strata</source>
-      <translation>Nombre de strates</translation>
+        <location filename="../scripts/build_models.py" line="63"/>
+        <source>Number of strata</source>
+        <translation>Nombre de strates</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="538" />
-      <source>Side of the square plots (m)</source>
-      <translation>Côté des placettes carrées (m)</translation>
+        <location filename="../scripts/build_models.py" line="65"/>
+        <source>Side of the square plots (m)</source>
+        <translation>Côté des placettes carrées (m)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="563" />
-      <source>Slope raster (degrees)</source>
-      <translation>Raster de pente (degrés)</translation>
+        <location filename="../scripts/build_models.py" line="60"/>
+        <source>Slope raster (degrees)</source>
+        <translation>Raster de pente (degrés)</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="590" />
-      <source>Study area</source>
-      <translation>Zone d'étude</translation>
+        <location filename="../scripts/build_models.py" line="58"/>
+        <source>Study area</source>
+        <translation>Zone d'étude</translation>
     </message>
     <message>
-      <location filename="../processing/models/plan_survey.model3" line="601" />
-      <source>Total number of units</source>
-      <translation>Nombre total d'unités</translation>
+        <location filename="../scripts/build_models.py" line="64"/>
+        <source>Total number of units</source>
+        <translation>Nombre total d'unités</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="38" />
-      <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
-      <translation>Chaîne d'exemple : planifier un inventaire (base de sondage, strates, effort, disposition)</translation>
+        <location filename="../processing/provider.py" line="37"/>
+        <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
+        <translation>Chaîne d'exemple : planifier un inventaire (base de sondage, strates, effort, disposition)</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="39" />
-      <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
-      <translation>Construit la base de sondage (zone d'étude moins les exclusions et les cellules au-delà de la pente limite), forme des strates par k-moyennes à partir des rasters de covariables, répartit les unités par allocation de Neyman avec l'écart-type de la covariable comme substitut, et dispose des placettes carrées spatialement équilibrées avec 3 unités de réserve par strate. Ouvrez-la dans le modeleur pour modifier une étape. Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
+        <location filename="../processing/provider.py" line="37"/>
+        <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
+        <translation>Construit la base de sondage (zone d'étude moins les exclusions et les cellules au-delà de la pente limite), forme des strates par k-moyennes à partir des rasters de covariables, répartit les unités par allocation de Neyman avec l'écart-type de la covariable comme substitut, et dispose des placettes carrées spatialement équilibrées avec 3 unités de réserve par strate. Ouvrez-la dans le modeleur pour modifier une étape. Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="48" />
-      <source>Example chain: estimate from simulated counts</source>
-      <translation>Chaîne d'exemple : estimer à partir de comptages simulés</translation>
+        <location filename="../processing/provider.py" line="47"/>
+        <source>Example chain: estimate from simulated counts</source>
+        <translation>Chaîne d'exemple : estimer à partir de comptages simulés</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="49" />
-      <source>For training: fills the units' count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
-      <translation>Pour la formation : remplit le champ de comptage des unités à partir d'une population simulée, puis estime la densité et l'abondance par strate et au total. Avec un vrai travail de terrain, lancez plutôt l'estimation sur les unités comptées.</translation>
+        <location filename="../processing/provider.py" line="47"/>
+        <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
+        <translation>Pour la formation : remplit le champ de comptage des unités à partir d'une population simulée, puis estime la densité et l'abondance par strate et au total. Avec un vrai travail de terrain, lancez plutôt l'estimation sur les unités comptées.</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="57" />
-      <location filename="../processing/provider.py" line="83" />
-      <source>Example chains</source>
-      <translation>Chaînes d'exemple</translation>
+        <location filename="../processing/provider.py" line="76"/>
+        <source>Example chains</source>
+        <translation>Chaînes d'exemple</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>LayoutUnits</name>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="69" />
-      <source>Lay out sample units</source>
-      <translation>Disposer les unités d'échantillonnage</translation>
+        <location filename="../processing/algorithms/layout.py" line="69"/>
+        <source>Lay out sample units</source>
+        <translation>Disposer les unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="72" />
-      <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
+        <location filename="../processing/algorithms/layout.py" line="72"/>
+        <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
 
@@ -2512,7 +2445,7 @@ Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for tr
 Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
 
 A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-      <translation>Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate par valeur du champ de strate ; sans lui, la base forme une seule strate).
+        <translation>Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate par valeur du champ de strate ; sans lui, la base forme une seule strate).
 
 Unités par strate : le champ d'unités (par exemple n_alloc de l'étape d'allocation ; le même nombre entier sur chaque entité d'une strate), sinon le total réparti proportionnellement à la surface avec au moins 2 par strate.
 
@@ -2533,2232 +2466,2196 @@ Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de 
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="109" />
-      <source>Sampling frame or strata</source>
-      <translation>Base de sondage ou strates</translation>
+        <location filename="../processing/algorithms/layout.py" line="108"/>
+        <source>Sampling frame or strata</source>
+        <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="113" />
-      <source>Stratum field (empty: the frame is one stratum)</source>
-      <translation>Champ de strate (vide : la base forme une seule strate)</translation>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <source>Stratum field (empty: the frame is one stratum)</source>
+        <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="119" />
-      <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
-      <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
+        <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="125" />
-      <source>Total number of units (when no units field is given)</source>
-      <translation>Nombre total d'unités (sans champ d'unités)</translation>
+        <location filename="../processing/algorithms/layout.py" line="123"/>
+        <source>Total number of units (when no units field is given)</source>
+        <translation>Nombre total d'unités (sans champ d'unités)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="131" />
-      <source>Design</source>
-      <translation>Plan</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Design</source>
+        <translation>Plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
-      <source>Simple random</source>
-      <translation>Aléatoire simple</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Simple random</source>
+        <translation>Aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
-      <source>Systematic grid</source>
-      <translation>Grille systématique</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Systematic grid</source>
+        <translation>Grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="132" />
-      <source>Spatially balanced</source>
-      <translation>Spatialement équilibré</translation>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <source>Spatially balanced</source>
+        <translation>Spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="137" />
-      <source>Unit shape</source>
-      <translation>Forme de l'unité</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Unit shape</source>
+        <translation>Forme de l'unité</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Point station</source>
-      <translation>Station ponctuelle</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Point station</source>
+        <translation>Station ponctuelle</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Square plot</source>
-      <translation>Placette carrée</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Square plot</source>
+        <translation>Placette carrée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Circular plot</source>
-      <translation>Placette circulaire</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Circular plot</source>
+        <translation>Placette circulaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="138" />
-      <source>Line transect</source>
-      <translation>Transect linéaire</translation>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <source>Line transect</source>
+        <translation>Transect linéaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="144" />
-      <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
-      <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
+        <location filename="../processing/algorithms/layout.py" line="142"/>
+        <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
+        <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="150" />
-      <source>Bearing (degrees from grid north; -1: random)</source>
-      <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
+        <location filename="../processing/algorithms/layout.py" line="148"/>
+        <source>Bearing (degrees from grid north; -1: random)</source>
+        <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="155" />
-      <source>Keep every unit wholly inside its stratum</source>
-      <translation>Garder chaque unité entièrement dans sa strate</translation>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
+        <source>Keep every unit wholly inside its stratum</source>
+        <translation>Garder chaque unité entièrement dans sa strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="159" />
-      <source>Minimum spacing between unit centres (m; 0: none)</source>
-      <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
+        <location filename="../processing/algorithms/layout.py" line="157"/>
+        <source>Minimum spacing between unit centres (m; 0: none)</source>
+        <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="165" />
-      <source>Reserve units per stratum</source>
-      <translation>Unités de réserve par strate</translation>
+        <location filename="../processing/algorithms/layout.py" line="163"/>
+        <source>Reserve units per stratum</source>
+        <translation>Unités de réserve par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="169" />
-      <source>Sample units</source>
-      <translation>Unités d'échantillonnage</translation>
+        <location filename="../processing/algorithms/layout.py" line="169"/>
+        <source>Sample units</source>
+        <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="172" />
-      <source>Waypoints for GPS (GPX)</source>
-      <translation>Points de passage pour GPS (GPX)</translation>
+        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <source>Waypoints for GPS (GPX)</source>
+        <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="172" />
-      <source>GPX files (*.gpx)</source>
-      <translation>Fichiers GPX (*.gpx)</translation>
+        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <source>GPX files (*.gpx)</source>
+        <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="185" />
-      <source>Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.</source>
-      <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
+        <location filename="../processing/algorithms/layout.py" line="184"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
+        <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="212" />
-      <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
-      <translation>Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
+        <location filename="../processing/algorithms/layout.py" line="211"/>
+        <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
+        <translation>Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="236" />
-      <source>Stratum field '{field}' of layer '{layer}'</source>
-      <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
+        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
+        <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="237" />
-      <source>Units field '{field}' of layer '{layer}'</source>
-      <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
+        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
+        <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="243" />
-      <source>Layer '{layer}': {text}</source>
-      <translation>Couche « {layer} » : {text}</translation>
+        <location filename="../processing/algorithms/layout.py" line="243"/>
+        <source>Layer &apos;{layer}&apos;: {text}</source>
+        <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="248" />
-      <source>No unit could be placed in layer '{layer}'. Ask for more units or use another design.</source>
-      <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
+        <location filename="../processing/algorithms/layout.py" line="247"/>
+        <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
+        <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="262" />
-      <source>{n} waypoints written to {path}</source>
-      <translation>{n} points de passage écrits dans {path}</translation>
+        <location filename="../processing/algorithms/layout.py" line="262"/>
+        <source>{n} waypoints written to {path}</source>
+        <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="266" />
-      <source>{stratum}: {n} primary and {r} reserve units</source>
-      <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
+        <location filename="../processing/algorithms/layout.py" line="265"/>
+        <source>{stratum}: {n} primary and {r} reserve units</source>
+        <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
-      <source>the frame</source>
-      <translation>la base de sondage</translation>
+        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <source>the frame</source>
+        <translation>la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="279" />
-      <source>stratum {key}</source>
-      <translation>strate {key}</translation>
+        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <source>stratum {key}</source>
+        <translation>strate {key}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="320" />
-      <source>Sample-unit layout</source>
-      <translation>Disposition des unités d'échantillonnage</translation>
+        <location filename="../processing/algorithms/layout.py" line="319"/>
+        <source>Sample-unit layout</source>
+        <translation>Disposition des unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="325" />
-      <location filename="../processing/algorithms/layout.py" line="427" />
-      <source>primary units</source>
-      <translation>unités principales</translation>
+        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <source>primary units</source>
+        <translation>unités principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="326" />
-      <location filename="../processing/algorithms/layout.py" line="428" />
-      <source>reserve units</source>
-      <translation>unités de réserve</translation>
+        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <source>reserve units</source>
+        <translation>unités de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="327" />
-      <source>strata</source>
-      <translation>strates</translation>
+        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <source>strata</source>
+        <translation>strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <source>design</source>
-      <translation>plan</translation>
+        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <source>design</source>
+        <translation>plan</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>simple random</source>
-      <translation>aléatoire simple</translation>
+        <location filename="../processing/algorithms/layout.py" line="329"/>
+        <source>Replacing units in the field</source>
+        <translation>Remplacer des unités sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>systematic grid</source>
-      <translation>grille systématique</translation>
+        <location filename="../processing/algorithms/layout.py" line="330"/>
+        <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
+        <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="328" />
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>spatially balanced</source>
-      <translation>spatialement équilibré</translation>
+        <location filename="../processing/algorithms/layout.py" line="336"/>
+        <source>Units per stratum</source>
+        <translation>Unités par strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="330" />
-      <source>Replacing units in the field</source>
-      <translation>Remplacer des unités sur le terrain</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Stratum</source>
+        <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="332" />
-      <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
-      <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Area (ha)</source>
+        <translation>Surface (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="337" />
-      <source>Units per stratum</source>
-      <translation>Unités par strate</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Effective area (ha)</source>
+        <translation>Surface effective (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Stratum</source>
-      <translation>Strate</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Units asked</source>
+        <translation>Unités demandées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Area (ha)</source>
-      <translation>Surface (ha)</translation>
+        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <source>Primary</source>
+        <translation>Principales</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Effective area (ha)</source>
-      <translation>Surface effective (ha)</translation>
+        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <source>Reserve</source>
+        <translation>Réserves</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Units asked</source>
-      <translation>Unités demandées</translation>
+        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <source>incl_p</source>
+        <translation>incl_p</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="339" />
-      <source>Primary</source>
-      <translation>Principales</translation>
+        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <source>weight</source>
+        <translation>weight</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <source>Reserve</source>
-      <translation>Réserves</translation>
+        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <source>Grid spacing (m)</source>
+        <translation>Pas de la grille (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <source>incl_p</source>
-      <translation>incl_p</translation>
+        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <source>Grid rotation (°)</source>
+        <translation>Rotation de la grille (°)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="340" />
-      <source>weight</source>
-      <translation>weight</translation>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
+        <source>frame</source>
+        <translation>base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <source>Grid spacing (m)</source>
-      <translation>Pas de la grille (m)</translation>
+        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
+        <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="342" />
-      <source>Grid rotation (°)</source>
-      <translation>Rotation de la grille (°)</translation>
+        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
+        <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="345" />
-      <source>frame</source>
-      <translation>base de sondage</translation>
+        <location filename="../processing/algorithms/layout.py" line="357"/>
+        <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
+        <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="353" />
-      <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
-      <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
+        <location filename="../processing/algorithms/layout.py" line="364"/>
+        <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
+        <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="355" />
-      <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
-      <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
+        <location filename="../processing/algorithms/layout.py" line="368"/>
+        <source>Map</source>
+        <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="359" />
-      <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit's circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
-      <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
+        <location filename="../processing/algorithms/layout.py" line="369"/>
+        <source>Strata (filled), primary units (dark) and reserve units (light)</source>
+        <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="366" />
-      <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
-      <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
+        <location filename="../processing/algorithms/layout.py" line="370"/>
+        <source>Method</source>
+        <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="369" />
-      <source>Map</source>
-      <translation>Carte</translation>
+        <location filename="../processing/algorithms/layout.py" line="374"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="370" />
-      <source>Strata (filled), primary units (dark) and reserve units (light)</source>
-      <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Frame (FRAME)</source>
+        <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="371" />
-      <source>Method</source>
-      <translation>Méthode</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Stratum field (STRATUM_FIELD)</source>
+        <translation>Champ de strate (STRATUM_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="375" />
-      <source>, projected from {src} (UTM zone of the frame's centre)</source>
-      <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>(none: one stratum)</source>
+        <translation>(aucun : une seule strate)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="377" />
-      <source>Frame (FRAME)</source>
-      <translation>Base de sondage (FRAME)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Units per stratum field (N_FIELD)</source>
+        <translation>Champ d'unités par strate (N_FIELD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="378" />
-      <source>Stratum field (STRATUM_FIELD)</source>
-      <translation>Champ de strate (STRATUM_FIELD)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>(none)</source>
+        <translation>(aucun)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="378" />
-      <source>(none: one stratum)</source>
-      <translation>(aucun : une seule strate)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Total units (N_UNITS)</source>
+        <translation>Total d'unités (N_UNITS)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="379" />
-      <source>Units per stratum field (N_FIELD)</source>
-      <translation>Champ d'unités par strate (N_FIELD)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>(not used)</source>
+        <translation>(non utilisé)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="379" />
-      <source>(none)</source>
-      <translation>(aucun)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Design (DESIGN)</source>
+        <translation>Plan (DESIGN)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="380" />
-      <source>Total units (N_UNITS)</source>
-      <translation>Total d'unités (N_UNITS)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Unit shape (SHAPE)</source>
+        <translation>Forme de l'unité (SHAPE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="380" />
-      <source>(not used)</source>
-      <translation>(non utilisé)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Unit size (SIZE, m)</source>
+        <translation>Taille de l'unité (SIZE, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="381" />
-      <source>Design (DESIGN)</source>
-      <translation>Plan (DESIGN)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Bearing (BEARING, degrees)</source>
+        <translation>Azimut (BEARING, degrés)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>Unit shape (SHAPE)</source>
-      <translation>Forme de l'unité (SHAPE)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>random</source>
+        <translation>aléatoire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>point</source>
-      <translation>point</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Keep inside (INSIDE)</source>
+        <translation>Garder à l'intérieur (INSIDE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>square</source>
-      <translation>carré</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>yes</source>
+        <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>circle</source>
-      <translation>cercle</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>no</source>
+        <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="382" />
-      <source>line</source>
-      <translation>ligne</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Minimum spacing (MIN_SPACING, m)</source>
+        <translation>Espacement minimal (MIN_SPACING, m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="383" />
-      <source>Unit size (SIZE, m)</source>
-      <translation>Taille de l'unité (SIZE, m)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Reserves per stratum (RESERVE)</source>
+        <translation>Réserves par strate (RESERVE)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="384" />
-      <source>Bearing (BEARING, degrees)</source>
-      <translation>Azimut (BEARING, degrés)</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>Seed (SEED)</source>
+        <translation>Graine (SEED)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="384" />
-      <source>random</source>
-      <translation>aléatoire</translation>
+        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <source>CRS of the computation and the output</source>
+        <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
-      <source>Keep inside (INSIDE)</source>
-      <translation>Garder à l'intérieur (INSIDE)</translation>
+        <location filename="../processing/algorithms/layout.py" line="395"/>
+        <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
+        <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
-      <source>yes</source>
-      <translation>oui</translation>
+        <location filename="../processing/algorithms/layout.py" line="397"/>
+        <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
+        <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="385" />
-      <source>no</source>
-      <translation>non</translation>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
+        <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/layout.py" line="386" />
-      <source>Minimum spacing (MIN_SPACING, m)</source>
-      <translation>Espacement minimal (MIN_SPACING, m)</translation>
+        <location filename="../processing/algorithms/layout.py" line="406"/>
+        <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
+        <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
     </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="387" />
-      <source>Reserves per stratum (RESERVE)</source>
-      <translation>Réserves par strate (RESERVE)</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="388" />
-      <source>Seed (SEED)</source>
-      <translation>Graine (SEED)</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="389" />
-      <source>CRS of the computation and the output</source>
-      <translation>SCR du calcul et de la sortie</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="397" />
-      <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
-      <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="399" />
-      <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
-      <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="401" />
-      <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
-      <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
-    </message>
-    <message>
-      <location filename="../processing/algorithms/layout.py" line="408" />
-      <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
-      <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
-    </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseAlgorithm</name>
     <message>
-      <location filename="../processing/algorithms/base.py" line="30" />
-      <location filename="../processing/algorithms/base.py" line="55" />
-      <source>Survey design</source>
-      <translation>Conception de l'inventaire</translation>
+        <location filename="../processing/algorithms/base.py" line="25"/>
+        <source>Survey design</source>
+        <translation>Conception de l'inventaire</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="31" />
-      <location filename="../processing/algorithms/base.py" line="55" />
-      <source>Estimation</source>
-      <translation>Estimation</translation>
+        <location filename="../processing/algorithms/base.py" line="26"/>
+        <source>Estimation</source>
+        <translation>Estimation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="32" />
-      <location filename="../processing/algorithms/base.py" line="55" />
-      <source>Demo and training</source>
-      <translation>Démonstration et formation</translation>
+        <location filename="../processing/algorithms/base.py" line="27"/>
+        <source>Demo and training</source>
+        <translation>Démonstration et formation</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="71" />
-      <source>Random seed (0 draws one and records it)</source>
-      <translation>Graine aléatoire (0 en tire une et l'enregistre)</translation>
+        <location filename="../processing/algorithms/base.py" line="69"/>
+        <source>Random seed (0 draws one and records it)</source>
+        <translation>Graine aléatoire (0 en tire une et l'enregistre)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="83" />
-      <source>Report (HTML)</source>
-      <translation>Rapport (HTML)</translation>
+        <location filename="../processing/algorithms/base.py" line="81"/>
+        <source>Report (HTML)</source>
+        <translation>Rapport (HTML)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="84" />
-      <source>HTML files (*.html)</source>
-      <translation>Fichiers HTML (*.html)</translation>
+        <location filename="../processing/algorithms/base.py" line="81"/>
+        <source>HTML files (*.html)</source>
+        <translation>Fichiers HTML (*.html)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="95" />
-      <source>Seed used: {seed}</source>
-      <translation>Graine utilisée : {seed}</translation>
+        <location filename="../processing/algorithms/base.py" line="96"/>
+        <source>Seed used: {seed}</source>
+        <translation>Graine utilisée : {seed}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="121" />
-      <source>Cancelled by the user. No result was written.</source>
-      <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
+        <location filename="../processing/algorithms/base.py" line="122"/>
+        <source>Cancelled by the user. No result was written.</source>
+        <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/base.py" line="166" />
-      <source>Report written to {path}</source>
-      <translation>Rapport écrit dans {path}</translation>
+        <location filename="../processing/algorithms/base.py" line="174"/>
+        <source>Report written to {path}</source>
+        <translation>Rapport écrit dans {path}</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseBridge</name>
     <message>
-      <location filename="../processing/bridge.py" line="66" />
-      <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
-      <translation>La couche « {layer} » n'a pas de système de coordonnées de référence valide. Définissez son SCR (Propriétés de la couche → Source) et relancez.</translation>
+        <location filename="../processing/bridge.py" line="54"/>
+        <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
+        <translation>La couche « {layer} » n'a pas de système de coordonnées de référence valide. Définissez son SCR (Propriétés de la couche → Source) et relancez.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="77" />
-      <source>Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
-      <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
+        <location filename="../processing/bridge.py" line="68"/>
+        <source>Layer &apos;{layer}&apos; is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
+        <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="115" />
-      <source>The input layer '{layer}' could not be opened.</source>
-      <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
+        <location filename="../processing/bridge.py" line="110"/>
+        <source>The input layer &apos;{layer}&apos; could not be opened.</source>
+        <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="123" />
-      <source>Layer '{layer}' has no field named {names}. Choose an existing field.</source>
-      <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
+        <location filename="../processing/bridge.py" line="119"/>
+        <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
+        <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="156" />
-      <source>Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.</source>
-      <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
+        <location filename="../processing/bridge.py" line="153"/>
+        <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
+        <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="160" />
-      <source>Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.</source>
-      <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
+        <location filename="../processing/bridge.py" line="159"/>
+        <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
+        <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="180" />
-      <source> and {n} more</source>
-      <translation> et {n} autres</translation>
+        <location filename="../processing/bridge.py" line="182"/>
+        <source> and {n} more</source>
+        <translation> et {n} autres</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="286" />
-      <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
-      <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
+        <location filename="../processing/bridge.py" line="283"/>
+        <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
+        <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="313" />
-      <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
-      <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
+        <location filename="../processing/bridge.py" line="312"/>
+        <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
+        <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
     </message>
     <message>
-      <location filename="../processing/bridge.py" line="318" />
-      <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
-      <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
+        <location filename="../processing/bridge.py" line="318"/>
+        <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
+        <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseEngine</name>
     <message>
-      <location filename="../processing/engine/allocation.py" line="48" />
-      <source>stratum area</source>
-      <translation>surface de la strate</translation>
+        <location filename="../processing/engine/allocation.py" line="48"/>
+        <source>stratum area</source>
+        <translation>surface de la strate</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="49" />
-      <source>pilot standard deviation</source>
-      <translation>écart-type pilote</translation>
+        <location filename="../processing/engine/allocation.py" line="49"/>
+        <source>pilot standard deviation</source>
+        <translation>écart-type pilote</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="50" />
-      <source>pilot mean count</source>
-      <translation>comptage moyen pilote</translation>
+        <location filename="../processing/engine/allocation.py" line="50"/>
+        <source>pilot mean count</source>
+        <translation>comptage moyen pilote</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="51" />
-      <source>cost per unit</source>
-      <translation>coût par unité</translation>
+        <location filename="../processing/engine/allocation.py" line="51"/>
+        <source>cost per unit</source>
+        <translation>coût par unité</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="384" />
-      <location filename="../processing/engine/layout.py" line="382" />
-      <source>{shown} and {more} more</source>
-      <translation>{shown} et {more} autres</translation>
+        <location filename="../processing/engine/layout.py" line="416"/>
+        <source>{shown} and {more} more</source>
+        <translation>{shown} et {more} autres</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="430" />
-      <source>Stratum field '{field}' of layer '{layer}' is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
-      <translation>Le champ de strate « {field} » de la couche « {layer} » est vide (NULL) pour la ou les entités {ids}. Donnez un identifiant à chaque strate, ou retirez ces entités de la couche.</translation>
+        <location filename="../processing/engine/allocation.py" line="431"/>
+        <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos; is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
+        <translation>Le champ de strate « {field} » de la couche « {layer} » est vide (NULL) pour la ou les entités {ids}. Donnez un identifiant à chaque strate, ou retirez ces entités de la couche.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="447" />
-      <source>Features {ids} of layer '{layer}' carry the same stratum id {value} in field '{field}', so each would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
-      <translation>Les entités {ids} de la couche « {layer} » portent le même identifiant de strate {value} dans le champ « {field} » : chacune recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
+        <location filename="../processing/engine/allocation.py" line="448"/>
+        <source>Features {ids} of layer &apos;{layer}&apos; carry the same stratum id {value} in field &apos;{field}&apos;, so each would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
+        <translation>Les entités {ids} de la couche « {layer} » portent le même identifiant de strate {value} dans le champ « {field} » : chacune recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="454" />
-      <source>Several stratum ids in field '{field}' of layer '{layer}' are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
-      <translation>Plusieurs identifiants de strate du champ « {field} » de la couche « {layer} » sont portés par plus d'une entité : {value} (entités {ids}) et {more} autre(s) identifiant(s) ({others}) ; chacune de ces entités recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
+        <location filename="../processing/engine/allocation.py" line="455"/>
+        <source>Several stratum ids in field &apos;{field}&apos; of layer &apos;{layer}&apos; are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
+        <translation>Plusieurs identifiants de strate du champ « {field} » de la couche « {layer} » sont portés par plus d'une entité : {value} (entités {ids}) et {more} autre(s) identifiant(s) ({others}) ; chacune de ces entités recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="474" />
-      <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
-      <translation>Valeur NULL ou négative ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur positive ou nulle pour chaque strate, ou retirez ces strates de la couche.</translation>
+        <location filename="../processing/engine/allocation.py" line="475"/>
+        <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
+        <translation>Valeur NULL ou négative ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur positive ou nulle pour chaque strate, ou retirez ces strates de la couche.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="478" />
-      <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
-      <translation>Valeur NULL, négative ou nulle ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur strictement positive pour chaque strate, ou retirez ces strates de la couche.</translation>
+        <location filename="../processing/engine/allocation.py" line="479"/>
+        <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
+        <translation>Valeur NULL, négative ou nulle ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur strictement positive pour chaque strate, ou retirez ces strates de la couche.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="545" />
-      <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
-      <translation>Méthode d'allocation inconnue {method!r} ; utilisez l'une de : {methods}.</translation>
+        <location filename="../processing/engine/allocation.py" line="546"/>
+        <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
+        <translation>Méthode d'allocation inconnue {method!r} ; utilisez l'une de : {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="549" />
-      <source>The strata layer has no features. Run the stratification first.</source>
-      <translation>La couche des strates n'a aucune entité. Lancez d'abord la stratification.</translation>
+        <location filename="../processing/engine/allocation.py" line="551"/>
+        <source>The strata layer has no features. Run the stratification first.</source>
+        <translation>La couche des strates n'a aucune entité. Lancez d'abord la stratification.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="554" />
-      <source>The unit area must be a positive number.</source>
-      <translation>La surface d'une unité doit être un nombre positif.</translation>
+        <location filename="../processing/engine/allocation.py" line="557"/>
+        <source>The unit area must be a positive number.</source>
+        <translation>La surface d'une unité doit être un nombre positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="557" />
-      <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
-      <translation>Le minimum par strate doit être d'au moins 1 (2 permet d'estimer la variance de chaque strate).</translation>
+        <location filename="../processing/engine/allocation.py" line="560"/>
+        <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
+        <translation>Le minimum par strate doit être d'au moins 1 (2 permet d'estimer la variance de chaque strate).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="570" />
-      <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
-      <translation>La méthode par coût a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
+        <location filename="../processing/engine/allocation.py" line="572"/>
+        <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
+        <translation>La méthode par coût a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="572" />
-      <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
-      <translation>Le budget a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
+        <location filename="../processing/engine/allocation.py" line="572"/>
+        <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
+        <translation>Le budget a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="576" />
-      <source>The fixed cost must be zero or positive.</source>
-      <translation>Le coût fixe doit être nul ou positif.</translation>
+        <location filename="../processing/engine/allocation.py" line="581"/>
+        <source>The fixed cost must be zero or positive.</source>
+        <translation>Le coût fixe doit être nul ou positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="583" />
-      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
-      <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (proportionnelle à la surface).</translation>
+        <location filename="../processing/engine/allocation.py" line="587"/>
+        <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
+        <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (proportionnelle à la surface).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="586" />
-      <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
-      <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (surface / racine carrée du coût).</translation>
+        <location filename="../processing/engine/allocation.py" line="587"/>
+        <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
+        <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (surface / racine carrée du coût).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="591" />
-      <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
-      <translation>Tous les écarts-types pilotes sont nuls : l'allocation proportionnelle est utilisée à la place.</translation>
+        <location filename="../processing/engine/allocation.py" line="598"/>
+        <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
+        <translation>Tous les écarts-types pilotes sont nuls : l'allocation proportionnelle est utilisée à la place.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="595" />
-      <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
-      <translation>Valeur nulle ({name}) pour la ou les entités de strate {shown} : elles ne reçoivent que le minimum de {minimum} unité(s). Un pilote sans variation reflète rarement la réalité ; vérifiez-le.</translation>
+        <location filename="../processing/engine/allocation.py" line="603"/>
+        <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
+        <translation>Valeur nulle ({name}) pour la ou les entités de strate {shown} : elles ne reçoivent que le minimum de {minimum} unité(s). Un pilote sans variation reflète rarement la réalité ; vérifiez-le.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="607" />
-      <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
-      <translation>La ou les entités de strate {shown} sont plus petites qu'une unité d'échantillonnage de {unit_area:g}. Fusionnez-les avec une voisine ou utilisez une surface d'unité plus petite.</translation>
+        <location filename="../processing/engine/allocation.py" line="614"/>
+        <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
+        <translation>La ou les entités de strate {shown} sont plus petites qu'une unité d'échantillonnage de {unit_area:g}. Fusionnez-les avec une voisine ou utilisez une surface d'unité plus petite.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="614" />
-      <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
-      <translation>La ou les entités de strate {shown} contiennent moins de {minimum} unités : elles reçoivent toutes les unités qui y tiennent.</translation>
+        <location filename="../processing/engine/allocation.py" line="623"/>
+        <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
+        <translation>La ou les entités de strate {shown} contiennent moins de {minimum} unités : elles reçoivent toutes les unités qui y tiennent.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="623" />
-      <source>A target CV is set: the budget is not used.</source>
-      <translation>Un CV cible est fixé : le budget n'est pas utilisé.</translation>
+        <location filename="../processing/engine/allocation.py" line="632"/>
+        <source>A target CV is set: the budget is not used.</source>
+        <translation>Un CV cible est fixé : le budget n'est pas utilisé.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="629" />
-      <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
-      <translation>Le budget {budget:g} est inférieur au minimum de {minimum:g} (coût fixe {fixed_cost:g} plus {per_stratum} unité(s) dans chaque strate à son coût). Augmentez le budget ou baissez le minimum par strate.</translation>
+        <location filename="../processing/engine/allocation.py" line="638"/>
+        <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
+        <translation>Le budget {budget:g} est inférieur au minimum de {minimum:g} (coût fixe {fixed_cost:g} plus {per_stratum} unité(s) dans chaque strate à son coût). Augmentez le budget ou baissez le minimum par strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="636" />
-      <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
-      <translation>Le budget dépasse le coût de toutes les unités qui tiennent ({maximum:g}) : toutes les unités sont prises.</translation>
+        <location filename="../processing/engine/allocation.py" line="645"/>
+        <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
+        <translation>Le budget dépasse le coût de toutes les unités qui tiennent ({maximum:g}) : toutes les unités sont prises.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="644" />
-      <source>Give a total number of units, a budget (with costs) or a target CV.</source>
-      <translation>Indiquez un nombre total d'unités, un budget (avec des coûts) ou un CV cible.</translation>
+        <location filename="../processing/engine/allocation.py" line="653"/>
+        <source>Give a total number of units, a budget (with costs) or a target CV.</source>
+        <translation>Indiquez un nombre total d'unités, un budget (avec des coûts) ou un CV cible.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="647" />
-      <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
-      <translation>Le total de {total} unités est inférieur au minimum de {minimum} ({per_stratum} par strate sur {n_strata} strates). Augmentez le total ou baissez le minimum.</translation>
+        <location filename="../processing/engine/allocation.py" line="657"/>
+        <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
+        <translation>Le total de {total} unités est inférieur au minimum de {minimum} ({per_stratum} par strate sur {n_strata} strates). Augmentez le total ou baissez le minimum.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="652" />
-      <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
-      <translation>Le total de {total} unités dépasse les {fit} unités de {unit_area:g} qui tiennent dans les strates. Baissez le total ou utilisez des unités plus petites.</translation>
+        <location filename="../processing/engine/allocation.py" line="662"/>
+        <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
+        <translation>Le total de {total} unités dépasse les {fit} unités de {unit_area:g} qui tiennent dans les strates. Baissez le total ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="662" />
-      <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
-      <translation>La ou les entités de strate {shown} ne reçoivent qu'une unité : leur variance ne peut pas être estimée.</translation>
+        <location filename="../processing/engine/allocation.py" line="672"/>
+        <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
+        <translation>La ou les entités de strate {shown} ne reçoivent qu'une unité : leur variance ne peut pas être estimée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="667" />
-      <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
-      <translation>La ou les entités de strate {shown} sont échantillonnées entièrement (toutes les unités qui y tiennent).</translation>
+        <location filename="../processing/engine/allocation.py" line="677"/>
+        <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
+        <translation>La ou les entités de strate {shown} sont échantillonnées entièrement (toutes les unités qui y tiennent).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="672" />
-      <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
-      <translation>Valeur nulle ({name}) dans la ou les entités de strate {shown} : leur CV n'est pas défini.</translation>
+        <location filename="../processing/engine/allocation.py" line="683"/>
+        <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
+        <translation>Valeur nulle ({name}) dans la ou les entités de strate {shown} : leur CV n'est pas défini.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="696" />
-      <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
-      <translation>Un CV cible a besoin de l'écart-type pilote et du comptage moyen pilote par unité : choisissez le champ d'écart-type et le champ de moyenne.</translation>
+        <location filename="../processing/engine/allocation.py" line="708"/>
+        <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
+        <translation>Un CV cible a besoin de l'écart-type pilote et du comptage moyen pilote par unité : choisissez le champ d'écart-type et le champ de moyenne.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="701" />
-      <source>The {name} is zero in every stratum: no CV can be computed.</source>
-      <translation>Valeur nulle ({name}) dans toutes les strates : aucun CV ne peut être calculé.</translation>
+        <location filename="../processing/engine/allocation.py" line="713"/>
+        <source>The {name} is zero in every stratum: no CV can be computed.</source>
+        <translation>Valeur nulle ({name}) dans toutes les strates : aucun CV ne peut être calculé.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/allocation.py" line="711" />
-      <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
-      <translation>Le CV cible de {target_cv:.3g} ne peut pas être atteint : même les {fit} unités qui tiennent donnent un CV attendu de {cv:.3g}. Acceptez un CV d'au moins {cv:.3g}, ou utilisez des unités plus petites.</translation>
+        <location filename="../processing/engine/allocation.py" line="724"/>
+        <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
+        <translation>Le CV cible de {target_cv:.3g} ne peut pas être atteint : même les {fit} unités qui tiennent donnent un CV attendu de {cv:.3g}. Acceptez un CV d'au moins {cv:.3g}, ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="31" />
-      <source>needs a positive area_m2</source>
-      <translation>a besoin d'un area_m2 positif</translation>
+        <location filename="../processing/engine/counting.py" line="31"/>
+        <source>needs a positive area_m2</source>
+        <translation>a besoin d'un area_m2 positif</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="36" />
-      <source>has a line of zero length</source>
-      <translation>a une ligne de longueur nulle</translation>
+        <location filename="../processing/engine/counting.py" line="36"/>
+        <source>has a line of zero length</source>
+        <translation>a une ligne de longueur nulle</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="38" />
-      <source>has an unsupported geometry type ({kind})</source>
-      <translation>a un type de géométrie non pris en charge ({kind})</translation>
+        <location filename="../processing/engine/counting.py" line="38"/>
+        <source>has an unsupported geometry type ({kind})</source>
+        <translation>a un type de géométrie non pris en charge ({kind})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/counting.py" line="64" />
-      <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
-      <translation>La probabilité de détection doit être dans ]0, 1] (reçu {detection:g}).</translation>
+        <location filename="../processing/engine/counting.py" line="65"/>
+        <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
+        <translation>La probabilité de détection doit être dans ]0, 1] (reçu {detection:g}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/demo_reserve.py" line="108" />
-      <source>Could not place the demo lake; try another seed.</source>
-      <translation>Impossible de placer le lac de démonstration ; essayez une autre graine.</translation>
+        <location filename="../processing/engine/demo_reserve.py" line="108"/>
+        <source>Could not place the demo lake; try another seed.</source>
+        <translation>Impossible de placer le lac de démonstration ; essayez une autre graine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/demo_reserve.py" line="184" />
-      <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
-      <translation>La taille de cellule doit être comprise entre 10 et 500 m (reçu {cell_size:g} m).</translation>
+        <location filename="../processing/engine/demo_reserve.py" line="184"/>
+        <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
+        <translation>La taille de cellule doit être comprise entre 10 et 500 m (reçu {cell_size:g} m).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="211" />
-      <source>The density surface must be a single raster band.</source>
-      <translation>La surface de densité doit être une seule bande raster.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="213"/>
+        <source>The density surface must be a single raster band.</source>
+        <translation>La surface de densité doit être une seule bande raster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="214" />
-      <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
-      <translation>La surface de densité doit être un raster orienté nord en haut (sans rotation) ; reprojetez-la d'abord.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="217"/>
+        <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
+        <translation>La surface de densité doit être un raster orienté nord en haut (sans rotation) ; reprojetez-la d'abord.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="222" />
-      <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
-      <translation>La surface de densité ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone (et leurs systèmes de coordonnées de référence).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="226"/>
+        <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
+        <translation>La surface de densité ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone (et leurs systèmes de coordonnées de référence).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="241" />
-      <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
-      <translation>Une strate n'a pas de valeur de strate (NULL). Donnez une valeur à chaque strate.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="245"/>
+        <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
+        <translation>Une strate n'a pas de valeur de strate (NULL). Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="265" />
-      <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
-      <translation>{overlap} cellule(s) de la surface se trouvent dans plus d'une strate ; chacune a été attribuée à la première. Les strates ne devraient pas se chevaucher.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="270"/>
+        <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
+        <translation>{overlap} cellule(s) de la surface se trouvent dans plus d'une strate ; chacune a été attribuée à la première. Les strates ne devraient pas se chevaucher.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="270" />
-      <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
-      <translation>Aucun centre de cellule de la surface de densité ne se trouve dans la base de sondage : les cellules sont trop grossières pour elle, ou les deux ne se recouvrent pas.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="275"/>
+        <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
+        <translation>Aucun centre de cellule de la surface de densité ne se trouve dans la base de sondage : les cellules sont trop grossières pour elle, ou les deux ne se recouvrent pas.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="276" />
-      <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
-      <translation>La surface de densité a {n} cellule(s) négative(s) dans la base de sondage. Le nombre attendu d'animaux par km² doit être de 0 ou plus : corrigez la surface (par exemple en la bornant à 0).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="281"/>
+        <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
+        <translation>La surface de densité a {n} cellule(s) négative(s) dans la base de sondage. Le nombre attendu d'animaux par km² doit être de 0 ou plus : corrigez la surface (par exemple en la bornant à 0).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="282" />
-      <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
-      <translation>{n} cellule(s) de la base de sondage ({share:.1%}) n'ont pas de valeur sur la surface de densité et sont exclues de la population : la comparaison vaut pour le reste de la base de sondage.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="287"/>
+        <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
+        <translation>{n} cellule(s) de la base de sondage ({share:.1%}) n'ont pas de valeur sur la surface de densité et sont exclues de la population : la comparaison vaut pour le reste de la base de sondage.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="289" />
-      <source>The density surface has no value in the frame.</source>
-      <translation>La surface de densité n'a aucune valeur dans la base de sondage.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="294"/>
+        <source>The density surface has no value in the frame.</source>
+        <translation>La surface de densité n'a aucune valeur dans la base de sondage.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="295" />
-      <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
-      <translation>Les strates {ids} ne contiennent aucun centre de cellule de la surface de densité dans la base de sondage. Retirez-les, fusionnez-les avec une voisine, ou utilisez une surface plus fine.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="300"/>
+        <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
+        <translation>Les strates {ids} ne contiennent aucun centre de cellule de la surface de densité dans la base de sondage. Retirez-les, fusionnez-les avec une voisine, ou utilisez une surface plus fine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="363" />
-      <location filename="../processing/engine/layout.py" line="170" />
-      <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
-      <translation>SHAPE doit valoir 0 (point), 1 (carré), 2 (cercle) ou 3 (transect linéaire).</translation>
+        <location filename="../processing/engine/layout.py" line="199"/>
+        <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
+        <translation>SHAPE doit valoir 0 (point), 1 (carré), 2 (cercle) ou 3 (transect linéaire).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
-      <translation>SIZE doit dépasser 0 m : c'est le rayon de comptage d'une station ponctuelle.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="93"/>
+        <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
+        <translation>SIZE doit dépasser 0 m : c'est le rayon de comptage d'une station ponctuelle.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the square unit's size.</source>
-      <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité carrée.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="96"/>
+        <source>SIZE must be more than 0 m: it is the square unit&apos;s size.</source>
+        <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité carrée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the circle unit's size.</source>
-      <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité circulaire.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="97"/>
+        <source>SIZE must be more than 0 m: it is the circle unit&apos;s size.</source>
+        <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité circulaire.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="365" />
-      <source>SIZE must be more than 0 m: it is the line unit's size.</source>
-      <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité linéaire.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="98"/>
+        <source>SIZE must be more than 0 m: it is the line unit&apos;s size.</source>
+        <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité linéaire.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="367" />
-      <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
-      <translation>Un transect linéaire a besoin de la demi-largeur de sa bande de comptage (plus de 0 m) : les animaux sont comptés jusqu'à cette distance de part et d'autre de la ligne.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="375"/>
+        <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
+        <translation>Un transect linéaire a besoin de la demi-largeur de sa bande de comptage (plus de 0 m) : les animaux sont comptés jusqu'à cette distance de part et d'autre de la ligne.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="624" />
-      <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
-      <translation>La surdispersion k doit valoir 0 (comptages de Poisson) ou plus.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="632"/>
+        <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
+        <translation>La surdispersion k doit valoir 0 (comptages de Poisson) ou plus.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="640" />
-      <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
-      <translation>Les strates couvrent {share:.1%} de la base de sondage : chaque plan est comparé sur la partie qu'elles couvrent.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="649"/>
+        <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
+        <translation>Les strates couvrent {share:.1%} de la base de sondage : chaque plan est comparé sur la partie qu'elles couvrent.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="649" />
-      <source>A stratum of the layout has no cells on the surface grid.</source>
-      <translation>Une strate de la disposition n'a aucune cellule sur la grille de la surface.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="658"/>
+        <source>A stratum of the layout has no cells on the surface grid.</source>
+        <translation>Une strate de la disposition n'a aucune cellule sur la grille de la surface.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="729" />
-      <source>Unknown design {design}; use 0 to {last}.</source>
-      <translation>Plan inconnu {design} ; utilisez 0 à {last}.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="739"/>
+        <source>Unknown design {design}; use 0 to {last}.</source>
+        <translation>Plan inconnu {design} ; utilisez 0 à {last}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="732" />
-      <source>N_UNITS must be at least {minimum}.</source>
-      <translation>N_UNITS doit valoir au moins {minimum}.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="743"/>
+        <source>N_UNITS must be at least {minimum}.</source>
+        <translation>N_UNITS doit valoir au moins {minimum}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="737" />
-      <source>The {design} design needs strata: give the STRATA layer.</source>
-      <translation>Le plan « {design} » a besoin de strates : indiquez la couche STRATA.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="749"/>
+        <source>The {design} design needs strata: give the STRATA layer.</source>
+        <translation>Le plan « {design} » a besoin de strates : indiquez la couche STRATA.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>simple random</source>
-      <translation>aléatoire simple</translation>
+        <location filename="../processing/engine/layout.py" line="70"/>
+        <source>simple random</source>
+        <translation>aléatoire simple</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>stratified proportional</source>
-      <translation>stratifié proportionnel</translation>
+        <location filename="../processing/engine/design_comparison.py" line="84"/>
+        <source>stratified proportional</source>
+        <translation>stratifié proportionnel</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>stratified Neyman</source>
-      <translation>stratifié Neyman</translation>
+        <location filename="../processing/engine/design_comparison.py" line="84"/>
+        <source>stratified Neyman</source>
+        <translation>stratifié Neyman</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>systematic grid</source>
-      <translation>grille systématique</translation>
+        <location filename="../processing/engine/layout.py" line="70"/>
+        <source>systematic grid</source>
+        <translation>grille systématique</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="738" />
-      <location filename="../processing/engine/design_comparison.py" line="1080" />
-      <location filename="../processing/engine/design_comparison.py" line="1101" />
-      <source>spatially balanced</source>
-      <translation>spatialement équilibré</translation>
+        <location filename="../processing/engine/layout.py" line="70"/>
+        <source>spatially balanced</source>
+        <translation>spatialement équilibré</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="814" />
-      <source>REPLICATES must be at least 2.</source>
-      <translation>REPLICATES doit valoir au moins 2.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="827"/>
+        <source>REPLICATES must be at least 2.</source>
+        <translation>REPLICATES doit valoir au moins 2.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="819" />
-      <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
-      <translation>Chaque inventaire simulé compterait environ {millions:.0f} millions de cellules de la surface ({units} unités de {unit_area:,.0f} m² sur des cellules de {cell_width:g} m), trop pour être simulé. Rééchantillonnez la surface en cellules plus grossières, ou comparez moins de plans ou d'unités.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="832"/>
+        <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
+        <translation>Chaque inventaire simulé compterait environ {millions:.0f} millions de cellules de la surface ({units} unités de {unit_area:,.0f} m² sur des cellules de {cell_width:g} m), trop pour être simulé. Rééchantillonnez la surface en cellules plus grossières, ou comparez moins de plans ou d'unités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1067" />
-      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
-      <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de leur strate ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1080"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
+        <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de leur strate ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1067" />
-      <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
-      <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de la base de sondage ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites le réduisent.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1080"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
+        <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de la base de sondage ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites le réduisent.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1102" />
-      <source>{design}: {warning}</source>
-      <translation>{design} : {warning}</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1116"/>
+        <source>{design}: {warning}</source>
+        <translation>{design} : {warning}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1104" />
-      <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
-      <translation>{design} avec {n_units} unités : {failed} des {replicates} inventaires simulés n'ont donné aucune estimation (une strate sans unité comptée, ou aucune unité dans la base de sondage) ; ils sont exclus de ses chiffres.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1119"/>
+        <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
+        <translation>{design} avec {n_units} unités : {failed} des {replicates} inventaires simulés n'ont donné aucune estimation (une strate sans unité comptée, ou aucune unité dans la base de sondage) ; ils sont exclus de ses chiffres.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1142" />
-      <source>The range of units '{text}' cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
-      <translation>La plage d'unités « {text} » ne peut pas être lue. Donnez des nombres entiers séparés par des virgules (p. ex. 20, 40, 80) ou début:fin:pas (p. ex. 20:100:20).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1157"/>
+        <source>The range of units &apos;{text}&apos; cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
+        <translation>La plage d'unités « {text} » ne peut pas être lue. Donnez des nombres entiers séparés par des virgules (p. ex. 20, 40, 80) ou début:fin:pas (p. ex. 20:100:20).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1148" />
-      <source>In the range of units '{text}', '{part}' starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
-      <translation>Dans la plage d'unités « {text} », « {part} » commence au-dessus de sa fin (début {start}, fin {stop}) et ne contient donc aucun nombre d'unités. Écrivez début:fin:pas avec un début inférieur ou égal à la fin (p. ex. {stop}:{start}:{step}).</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1163"/>
+        <source>In the range of units &apos;{text}&apos;, &apos;{part}&apos; starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
+        <translation>Dans la plage d'unités « {text} », « {part} » commence au-dessus de sa fin (début {start}, fin {stop}) et ne contient donc aucun nombre d'unités. Écrivez début:fin:pas avec un début inférieur ou égal à la fin (p. ex. {stop}:{start}:{step}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1153" />
-      <source>Every number of units in the range must be at least {minimum}.</source>
-      <translation>Chaque nombre d'unités de la plage doit valoir au moins {minimum}.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1168"/>
+        <source>Every number of units in the range must be at least {minimum}.</source>
+        <translation>Chaque nombre d'unités de la plage doit valoir au moins {minimum}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/design_comparison.py" line="1156" />
-      <source>The range of units holds more than 20 values; give at most 20.</source>
-      <translation>La plage d'unités contient plus de 20 valeurs ; donnez-en au plus 20.</translation>
+        <location filename="../processing/engine/design_comparison.py" line="1172"/>
+        <source>The range of units holds more than 20 values; give at most 20.</source>
+        <translation>La plage d'unités contient plus de 20 valeurs ; donnez-en au plus 20.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="292" />
-      <location filename="../processing/engine/geometry.py" line="210" />
-      <source>{shown} … ({n} in all)</source>
-      <translation>{shown} … ({n} en tout)</translation>
+        <location filename="../processing/engine/geometry.py" line="211"/>
+        <source>{shown} … ({n} in all)</source>
+        <translation>{shown} … ({n} en tout)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="326" />
-      <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
-      <translation>Le champ {count_name} contient des valeurs qui ne sont pas des nombres pour les unités {ids}. Saisissez un comptage entier (0 si l'unité a été inventoriée sans rien voir) ou laissez le champ vide (NULL) pour les unités non inventoriées.</translation>
+        <location filename="../processing/engine/estimation.py" line="325"/>
+        <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
+        <translation>Le champ {count_name} contient des valeurs qui ne sont pas des nombres pour les unités {ids}. Saisissez un comptage entier (0 si l'unité a été inventoriée sans rien voir) ou laissez le champ vide (NULL) pour les unités non inventoriées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="336" />
-      <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
-      <translation>Le champ {count_name} contient des comptages négatifs ou infinis pour les unités {ids}. Les comptages doivent valoir 0 ou plus ; corrigez-les, ou laissez le champ vide (NULL) si l'unité n'a pas été inventoriée.</translation>
+        <location filename="../processing/engine/estimation.py" line="336"/>
+        <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
+        <translation>Le champ {count_name} contient des comptages négatifs ou infinis pour les unités {ids}. Les comptages doivent valoir 0 ou plus ; corrigez-les, ou laissez le champ vide (NULL) si l'unité n'a pas été inventoriée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="486" />
-      <source>Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
-      <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones couvrent {area:.4g} {unit} qu'aucune strate ne couvre, si bien que l'estimation porterait sans le dire sur une base de sondage plus petite. Donnez à chaque polygone l'identifiant de sa strate, supprimez les polygones qui ne font pas partie de la base de sondage, ou choisissez d'écarter les strates sans unité inventoriée (la base de sondage se réduit alors).</translation>
+        <location filename="../processing/engine/estimation.py" line="487"/>
+        <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
+        <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones couvrent {area:.4g} {unit} qu'aucune strate ne couvre, si bien que l'estimation porterait sans le dire sur une base de sondage plus petite. Donnez à chaque polygone l'identifiant de sa strate, supprimez les polygones qui ne font pas partie de la base de sondage, ou choisissez d'écarter les strates sans unité inventoriée (la base de sondage se réduit alors).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="493" />
-      <source>Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
-      <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones ont été écartés, et la base de sondage a diminué des {area:.4g} {unit} qu'aucune strate ne couvre. Pour les garder dans la base de sondage, donnez à chaque polygone l'identifiant de sa strate.</translation>
+        <location filename="../processing/engine/estimation.py" line="496"/>
+        <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
+        <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones ont été écartés, et la base de sondage a diminué des {area:.4g} {unit} qu'aucune strate ne couvre. Pour les garder dans la base de sondage, donnez à chaque polygone l'identifiant de sa strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="499" />
-      <source>Layer '{layer}': no polygon has a stratum id in the field '{field}'. Fill in the stratum ids, or choose the field that holds them.</source>
-      <translation>Couche « {layer} » : aucun polygone n'a d'identifiant de strate dans le champ « {field} ». Renseignez les identifiants de strate, ou choisissez le champ qui les contient.</translation>
+        <location filename="../processing/engine/estimation.py" line="501"/>
+        <source>Layer &apos;{layer}&apos;: no polygon has a stratum id in the field &apos;{field}&apos;. Fill in the stratum ids, or choose the field that holds them.</source>
+        <translation>Couche « {layer} » : aucun polygone n'a d'identifiant de strate dans le champ « {field} ». Renseignez les identifiants de strate, ou choisissez le champ qui les contient.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="516" />
-      <source>Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
-      <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) seraient comptés dans plus d'une strate, ce qui gonfle la surface de la base de sondage et l'abondance. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas : chaque parcelle de terrain appartient à une seule strate (découpez chaque chevauchement de toutes les strates sauf une, ou redessinez les limites communes).</translation>
+        <location filename="../processing/engine/estimation.py" line="519"/>
+        <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
+        <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) seraient comptés dans plus d'une strate, ce qui gonfle la surface de la base de sondage et l'abondance. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas : chaque parcelle de terrain appartient à une seule strate (découpez chaque chevauchement de toutes les strates sauf une, ou redessinez les limites communes).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="523" />
-      <source>Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
-      <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) sont comptés dans plus d'une strate, si bien que la surface de la base de sondage et l'abondance sont légèrement trop grandes. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas (alignez les limites communes par accrochage, ou découpez chaque chevauchement de toutes les strates sauf une).</translation>
+        <location filename="../processing/engine/estimation.py" line="528"/>
+        <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
+        <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) sont comptés dans plus d'une strate, si bien que la surface de la base de sondage et l'abondance sont légèrement trop grandes. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas (alignez les limites communes par accrochage, ou découpez chaque chevauchement de toutes les strates sauf une).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="618" />
-      <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
-      <translation>Le niveau de confiance doit être compris entre 0 et 1 (reçu {confidence}) ; utilisez p. ex. 0.95.</translation>
+        <location filename="../processing/engine/estimation.py" line="623"/>
+        <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
+        <translation>Le niveau de confiance doit être compris entre 0 et 1 (reçu {confidence}) ; utilisez p. ex. 0.95.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="621" />
-      <source>Unknown interval method {method!r}; use one of {methods}.</source>
-      <translation>Méthode d'intervalle inconnue {method!r} ; utilisez l'une de {methods}.</translation>
+        <location filename="../processing/engine/estimation.py" line="627"/>
+        <source>Unknown interval method {method!r}; use one of {methods}.</source>
+        <translation>Méthode d'intervalle inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="624" />
-      <source>Unknown variance method {method!r}; use one of {methods}.</source>
-      <translation>Méthode de variance inconnue {method!r} ; utilisez l'une de {methods}.</translation>
+        <location filename="../processing/engine/estimation.py" line="631"/>
+        <source>Unknown variance method {method!r}; use one of {methods}.</source>
+        <translation>Méthode de variance inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="627" />
-      <source>The detection probability must lie in (0, 1] (got {p}).</source>
-      <translation>La probabilité de détection doit être dans ]0, 1] (reçu {p}).</translation>
+        <location filename="../processing/engine/estimation.py" line="635"/>
+        <source>The detection probability must lie in (0, 1] (got {p}).</source>
+        <translation>La probabilité de détection doit être dans ]0, 1] (reçu {p}).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="629" />
-      <source>The standard error of the detection probability must be 0 or more.</source>
-      <translation>L'erreur type de la probabilité de détection doit valoir 0 ou plus.</translation>
+        <location filename="../processing/engine/estimation.py" line="638"/>
+        <source>The standard error of the detection probability must be 0 or more.</source>
+        <translation>L'erreur type de la probabilité de détection doit valoir 0 ou plus.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="638" />
-      <source>unit_ids must have one id per unit.</source>
-      <translation>unit_ids doit avoir un identifiant par unité.</translation>
+        <location filename="../processing/engine/estimation.py" line="648"/>
+        <source>unit_ids must have one id per unit.</source>
+        <translation>unit_ids doit avoir un identifiant par unité.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="642" />
-      <source>counts, unit_areas and strata must have one value per unit.</source>
-      <translation>counts, unit_areas et strata doivent avoir une valeur par unité.</translation>
+        <location filename="../processing/engine/estimation.py" line="652"/>
+        <source>counts, unit_areas and strata must have one value per unit.</source>
+        <translation>counts, unit_areas et strata doivent avoir une valeur par unité.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="651" />
-      <source>Strata {ids} have no area. Check the strata layer's geometries.</source>
-      <translation>Les strates {ids} n'ont pas de surface. Vérifiez les géométries de la couche des strates.</translation>
+        <location filename="../processing/engine/estimation.py" line="661"/>
+        <source>Strata {ids} have no area. Check the strata layer&apos;s geometries.</source>
+        <translation>Les strates {ids} n'ont pas de surface. Vérifiez les géométries de la couche des strates.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="659" />
-      <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
-      <translation>Les unités {ids} n'ont pas de strate (le champ de strate est vide). Renseignez leur strate, ou omettez le champ de strate pour traiter la base de sondage comme une seule strate.</translation>
+        <location filename="../processing/engine/estimation.py" line="670"/>
+        <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
+        <translation>Les unités {ids} n'ont pas de strate (le champ de strate est vide). Renseignez leur strate, ou omettez le champ de strate pour traiter la base de sondage comme une seule strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="669" />
-      <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
-      <translation>Les unités {ids} ont des identifiants de strate ({names}) absents de la couche des strates. Vérifiez le champ de strate des unités et le champ d'identifiant de la couche des strates.</translation>
+        <location filename="../processing/engine/estimation.py" line="681"/>
+        <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
+        <translation>Les unités {ids} ont des identifiants de strate ({names}) absents de la couche des strates. Vérifiez le champ de strate des unités et le champ d'identifiant de la couche des strates.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="677" />
-      <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
-      <translation>{n} unité(s) n'ont pas de comptage et sont traitées comme non inventoriées (non-réponse) : {ids}.</translation>
+        <location filename="../processing/engine/estimation.py" line="691"/>
+        <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
+        <translation>{n} unité(s) n'ont pas de comptage et sont traitées comme non inventoriées (non-réponse) : {ids}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="682" />
-      <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
-      <translation>Aucune unité n'a de comptage : rien ne peut être estimé. Saisissez les comptages des unités inventoriées (0 si rien n'a été vu) dans le champ de comptage.</translation>
+        <location filename="../processing/engine/estimation.py" line="696"/>
+        <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
+        <translation>Aucune unité n'a de comptage : rien ne peut être estimé. Saisissez les comptages des unités inventoriées (0 si rien n'a été vu) dans le champ de comptage.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="689" />
-      <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
-      <translation>Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
+        <location filename="../processing/engine/estimation.py" line="702"/>
+        <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
+        <translation>Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="699" />
-      <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
-      <translation>Les données de présence doivent valoir 0 ou 1 ; les unités {ids} contiennent d'autres valeurs. Utilisez les comptages sans l'option de présence, ou recodez le champ.</translation>
+        <location filename="../processing/engine/estimation.py" line="713"/>
+        <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
+        <translation>Les données de présence doivent valoir 0 ou 1 ; les unités {ids} contiennent d'autres valeurs. Utilisez les comptages sans l'option de présence, ou recodez le champ.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="704" />
-      <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
-      <translation>La probabilité de détection n'a pas été appliquée aux données de présence : diviser une proportion d'unités occupées par p n'est pas une correction d'occupation, qui demande des visites répétées.</translation>
+        <location filename="../processing/engine/estimation.py" line="720"/>
+        <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
+        <translation>La probabilité de détection n'a pas été appliquée aux données de présence : diviser une proportion d'unités occupées par p n'est pas une correction d'occupation, qui demande des visites répétées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="723" />
-      <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
-      <translation>Aucune unité des strates {ids} n'a été inventoriée : leur abondance ne peut pas être estimée. Inventoriez-y des unités, ou choisissez d'exclure ces strates (l'estimation couvre alors une base de sondage plus petite).</translation>
+        <location filename="../processing/engine/estimation.py" line="738"/>
+        <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
+        <translation>Aucune unité des strates {ids} n'a été inventoriée : leur abondance ne peut pas être estimée. Inventoriez-y des unités, ou choisissez d'exclure ces strates (l'estimation couvre alors une base de sondage plus petite).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="729" />
-      <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
-      <translation>Les strates {ids} n'avaient aucune unité inventoriée et ont été exclues : la base de sondage a diminué de {dropped_area:.6g} unités de surface, et l'estimation ne couvre que les strates restantes.</translation>
+        <location filename="../processing/engine/estimation.py" line="746"/>
+        <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
+        <translation>Les strates {ids} n'avaient aucune unité inventoriée et ont été exclues : la base de sondage a diminué de {dropped_area:.6g} unités de surface, et l'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="745" />
-      <source>The local neighbourhood variance needs the positions of the units.</source>
-      <translation>La variance de voisinage local a besoin des positions des unités.</translation>
+        <location filename="../processing/engine/estimation.py" line="762"/>
+        <source>The local neighbourhood variance needs the positions of the units.</source>
+        <translation>La variance de voisinage local a besoin des positions des unités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="750" />
-      <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
-      <translation>Les unités {ids} n'ont pas de position : la variance de voisinage local ne peut pas les utiliser. Donnez leurs emplacements, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
+        <location filename="../processing/engine/estimation.py" line="767"/>
+        <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
+        <translation>Les unités {ids} n'ont pas de position : la variance de voisinage local ne peut pas les utiliser. Donnez leurs emplacements, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="775" />
-      <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
-      <translation>Dans les strates {ids}, la surface inventoriée dépasse la surface de la strate. Vérifiez les surfaces des unités et l'unité de surface, ou désactivez la correction de population finie.</translation>
+        <location filename="../processing/engine/estimation.py" line="793"/>
+        <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
+        <translation>Dans les strates {ids}, la surface inventoriée dépasse la surface de la strate. Vérifiez les surfaces des unités et l'unité de surface, ou désactivez la correction de population finie.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="816" />
-      <source>{label} (one unit) collapsed with {others}</source>
-      <translation>{label} (une unité) regroupée avec {others}</translation>
+        <location filename="../processing/engine/estimation.py" line="835"/>
+        <source>{label} (one unit) collapsed with {others}</source>
+        <translation>{label} (une unité) regroupée avec {others}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="821" />
-      <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
-      <translation>Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
+        <location filename="../processing/engine/estimation.py" line="842"/>
+        <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
+        <translation>Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="826" />
-      <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
-      <translation>La seule strate n'a qu'une unité inventoriée : aucune variance, erreur type ou intervalle ne peut être estimé. Inventoriez au moins deux unités.</translation>
+        <location filename="../processing/engine/estimation.py" line="847"/>
+        <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
+        <translation>La seule strate n'a qu'une unité inventoriée : aucune variance, erreur type ou intervalle ne peut être estimé. Inventoriez au moins deux unités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="842" />
-      <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
-      <translation>Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
+        <location filename="../processing/engine/estimation.py" line="863"/>
+        <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
+        <translation>Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="878" />
-      <source>The bootstrap needs a random generator (rng).</source>
-      <translation>Le bootstrap a besoin d'un générateur aléatoire (rng).</translation>
+        <location filename="../processing/engine/estimation.py" line="899"/>
+        <source>The bootstrap needs a random generator (rng).</source>
+        <translation>Le bootstrap a besoin d'un générateur aléatoire (rng).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="910" />
-      <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
-      <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0 et son CV n'est pas défini.</translation>
+        <location filename="../processing/engine/estimation.py" line="932"/>
+        <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
+        <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0 et son CV n'est pas défini.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="913" />
-      <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
-      <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
+        <location filename="../processing/engine/estimation.py" line="936"/>
+        <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
+        <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="958" />
-      <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own CV is {cv_p:.3g}. Improve the detection study first.</source>
-      <translation>Le CV cible {target_cv:.3g} ne peut pas être atteint avec plus d'unités : le CV propre de la probabilité de détection est de {cv_p:.3g}. Améliorez d'abord l'étude de détection.</translation>
+        <location filename="../processing/engine/estimation.py" line="981"/>
+        <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability&apos;s own CV is {cv_p:.3g}. Improve the detection study first.</source>
+        <translation>Le CV cible {target_cv:.3g} ne peut pas être atteint avec plus d'unités : le CV propre de la probabilité de détection est de {cv_p:.3g}. Améliorez d'abord l'étude de détection.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/estimation.py" line="967" />
-      <source>No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.</source>
-      <translation>Aucune variation n'a été observée : les tailles d'échantillon du prochain inventaire sont fixées au minimum de 2 par strate.</translation>
+        <location filename="../processing/engine/estimation.py" line="990"/>
+        <source>No variation was observed, so the next survey&apos;s sample sizes are set to the minimum of 2 per stratum.</source>
+        <translation>Aucune variation n'a été observée : les tailles d'échantillon du prochain inventaire sont fixées au minimum de 2 par strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="223" />
-      <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
-      <translation>EDGE_BUFFER vaut {edge_buffer} m ; il doit être nul ou une distance positive en mètres.</translation>
+        <location filename="../processing/engine/frame.py" line="223"/>
+        <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
+        <translation>EDGE_BUFFER vaut {edge_buffer} m ; il doit être nul ou une distance positive en mètres.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="230" />
-      <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
-      <translation>La zone d'étude (INPUT) n'a aucun polygone de surface positive. Vérifiez que la couche contient des polygones et qu'elle est dans un SCR projeté en mètres.</translation>
+        <location filename="../processing/engine/frame.py" line="230"/>
+        <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
+        <translation>La zone d'étude (INPUT) n'a aucun polygone de surface positive. Vérifiez que la couche contient des polygones et qu'elle est dans un SCR projeté en mètres.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="278" />
-      <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
-      <translation>Il ne reste rien de la zone d'étude (INPUT) après retrait des polygones exclus (EXCLUDE) : ils en couvrent la totalité, {hectares:.4g} ha. Vérifiez qu'EXCLUDE ne contient que les zones à écarter.</translation>
+        <location filename="../processing/engine/frame.py" line="278"/>
+        <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
+        <translation>Il ne reste rien de la zone d'étude (INPUT) après retrait des polygones exclus (EXCLUDE) : ils en couvrent la totalité, {hectares:.4g} ha. Vérifiez qu'EXCLUDE ne contient que les zones à écarter.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="284" />
-      <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster's units, or check that the raster covers the study area.</source>
-      <translation>Il ne reste rien de la base de sondage après le masque raster (MASK) : chaque cellule des {hectares:.4g} ha restants est hors de [MASK_MIN, MASK_MAX] ou NoData. Élargissez l'intervalle, vérifiez les unités du raster, ou vérifiez que le raster couvre la zone d'étude.</translation>
+        <location filename="../processing/engine/frame.py" line="284"/>
+        <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster&apos;s units, or check that the raster covers the study area.</source>
+        <translation>Il ne reste rien de la base de sondage après le masque raster (MASK) : chaque cellule des {hectares:.4g} ha restants est hors de [MASK_MIN, MASK_MAX] ou NoData. Élargissez l'intervalle, vérifiez les unités du raster, ou vérifiez que le raster couvre la zone d'étude.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/frame.py" line="291" />
-      <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area's boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
-      <translation>Il ne reste rien de la base de sondage après la zone tampon intérieure (EDGE_BUFFER = {edge_buffer:g} m) : les {hectares:.4g} ha restants se trouvent tous à moins de cette distance de la limite de la zone d'étude (emprise de la zone d'étude {width:.0f} m x {height:.0f} m). Utilisez un EDGE_BUFFER plus petit.</translation>
+        <location filename="../processing/engine/frame.py" line="291"/>
+        <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area&apos;s boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
+        <translation>Il ne reste rien de la base de sondage après la zone tampon intérieure (EDGE_BUFFER = {edge_buffer:g} m) : les {hectares:.4g} ha restants se trouvent tous à moins de cette distance de la limite de la zone d'étude (emprise de la zone d'étude {width:.0f} m x {height:.0f} m). Utilisez un EDGE_BUFFER plus petit.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/geometry.py" line="204" />
-      <source>{first} and {second} ({area:.4g} {unit})</source>
-      <translation>{first} et {second} ({area:.4g} {unit})</translation>
+        <location filename="../processing/engine/geometry.py" line="203"/>
+        <source>{first} and {second} ({area:.4g} {unit})</source>
+        <translation>{first} et {second} ({area:.4g} {unit})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/halton.py" line="209" />
-      <source>No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a sample unit. Check the frame for slivers.</source>
-      <translation>Aucun point n'a pu être tiré dans une surface de {area:.3g} m² : elle est trop mince pour accueillir une unité d'échantillonnage. Cherchez les liserés dans la base de sondage.</translation>
+        <location filename="../processing/engine/halton.py" line="209"/>
+        <source>No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a sample unit. Check the frame for slivers.</source>
+        <translation>Aucun point n'a pu être tiré dans une surface de {area:.3g} m² : elle est trop mince pour accueillir une unité d'échantillonnage. Cherchez les liserés dans la base de sondage.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="168" />
-      <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
-      <translation>DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).</translation>
+        <location filename="../processing/engine/layout.py" line="196"/>
+        <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
+        <translation>DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
-      <translation>SIZE doit dépasser 0 m pour une unité ponctuelle ; il vaut {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="80"/>
+        <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
+        <translation>SIZE doit dépasser 0 m pour une unité ponctuelle ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
-      <translation>SIZE doit dépasser 0 m pour une unité carrée ; il vaut {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="81"/>
+        <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
+        <translation>SIZE doit dépasser 0 m pour une unité carrée ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
-      <translation>SIZE doit dépasser 0 m pour une unité circulaire ; il vaut {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="82"/>
+        <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
+        <translation>SIZE doit dépasser 0 m pour une unité circulaire ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="172" />
-      <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
-      <translation>SIZE doit dépasser 0 m pour une unité linéaire ; il vaut {size}.</translation>
+        <location filename="../processing/engine/layout.py" line="83"/>
+        <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
+        <translation>SIZE doit dépasser 0 m pour une unité linéaire ; il vaut {size}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="174" />
-      <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
-      <translation>BEARING doit valoir -1 (aléatoire) ou être compris entre 0 et 360 degrés ; il vaut {bearing}.</translation>
+        <location filename="../processing/engine/layout.py" line="204"/>
+        <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
+        <translation>BEARING doit valoir -1 (aléatoire) ou être compris entre 0 et 360 degrés ; il vaut {bearing}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="177" />
-      <source>MIN_SPACING must be 0 or more metres.</source>
-      <translation>MIN_SPACING doit valoir 0 mètre ou plus.</translation>
+        <location filename="../processing/engine/layout.py" line="208"/>
+        <source>MIN_SPACING must be 0 or more metres.</source>
+        <translation>MIN_SPACING doit valoir 0 mètre ou plus.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="179" />
-      <source>RESERVE must be 0 or a positive whole number.</source>
-      <translation>RESERVE doit valoir 0 ou un nombre entier positif.</translation>
+        <location filename="../processing/engine/layout.py" line="210"/>
+        <source>RESERVE must be 0 or a positive whole number.</source>
+        <translation>RESERVE doit valoir 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="358" />
-      <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
-      <translation>{field} est vide (NULL) ou n'est pas un nombre pour la ou les entités {ids}. Donnez à chaque strate un nombre entier d'unités, ou laissez N_FIELD vide pour utiliser N_UNITS.</translation>
+        <location filename="../processing/engine/layout.py" line="389"/>
+        <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
+        <translation>{field} est vide (NULL) ou n'est pas un nombre pour la ou les entités {ids}. Donnez à chaque strate un nombre entier d'unités, ou laissez N_FIELD vide pour utiliser N_UNITS.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="365" />
-      <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
-      <translation>{field} est négatif pour la ou les entités {ids}. Utilisez 0 ou un nombre entier positif.</translation>
+        <location filename="../processing/engine/layout.py" line="396"/>
+        <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
+        <translation>{field} est négatif pour la ou les entités {ids}. Utilisez 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="371" />
-      <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
-      <translation>{field} n'est pas un nombre entier pour la ou les entités {ids}. Arrondissez d'abord l'allocation à des unités entières.</translation>
+        <location filename="../processing/engine/layout.py" line="403"/>
+        <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
+        <translation>{field} n'est pas un nombre entier pour la ou les entités {ids}. Arrondissez d'abord l'allocation à des unités entières.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="452" />
-      <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
-      <translation>Indiquez N_FIELD (unités par strate) ou N_UNITS (un total d'au moins 1).</translation>
+        <location filename="../processing/engine/layout.py" line="487"/>
+        <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
+        <translation>Indiquez N_FIELD (unités par strate) ou N_UNITS (un total d'au moins 1).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="467" />
-      <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
-      <translation>Une géométrie invalide a été réparée pour la ou les entités {ids} ; vérifiez leurs contours.</translation>
+        <location filename="../processing/engine/layout.py" line="503"/>
+        <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
+        <translation>Une géométrie invalide a été réparée pour la ou les entités {ids} ; vérifiez leurs contours.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="470" />
-      <source>Empty or zero-area feature(s) {ids} were skipped.</source>
-      <translation>Les entités vides ou de surface nulle {ids} ont été ignorées.</translation>
+        <location filename="../processing/engine/layout.py" line="507"/>
+        <source>Empty or zero-area feature(s) {ids} were skipped.</source>
+        <translation>Les entités vides ou de surface nulle {ids} ont été ignorées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="472" />
-      <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
-      <translation>Les entités {ids} ont moins de {area:g} m² de surface (des liserés, laissés par exemple par une superposition ou une reprojection) et ont été écartées.</translation>
+        <location filename="../processing/engine/layout.py" line="510"/>
+        <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
+        <translation>Les entités {ids} ont moins de {area:g} m² de surface (des liserés, laissés par exemple par une superposition ou une reprojection) et ont été écartées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="477" />
-      <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
-      <translation>La base de sondage n'a aucun polygone de {area:g} m² ou plus : chaque entité est vide, de surface nulle ou n'est qu'un liseré.</translation>
+        <location filename="../processing/engine/layout.py" line="516"/>
+        <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
+        <translation>La base de sondage n'a aucun polygone de {area:g} m² ou plus : chaque entité est vide, de surface nulle ou n'est qu'un liseré.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="488" />
-      <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
-      <translation>{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.</translation>
+        <location filename="../processing/engine/layout.py" line="527"/>
+        <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
+        <translation>{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="515" />
-      <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
-      <translation>Les entités de la base de sondage (sans champ de strate) portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités ou choisissez un champ de strate pour que chaque entité soit une strate.</translation>
+        <location filename="../processing/engine/layout.py" line="555"/>
+        <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
+        <translation>Les entités de la base de sondage (sans champ de strate) portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités ou choisissez un champ de strate pour que chaque entité soit une strate.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="515" />
-      <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
-      <translation>Les entités de la strate {key} portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités.</translation>
+        <location filename="../processing/engine/layout.py" line="555"/>
+        <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
+        <translation>Les entités de la strate {key} portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="530" />
-      <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
-      <translation>N_UNITS = {n_units} fait moins de {minimum} par strate pour {n_strata} strates ; chaque strate en reçoit {minimum} ({total} unités).</translation>
+        <location filename="../processing/engine/layout.py" line="572"/>
+        <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
+        <translation>N_UNITS = {n_units} fait moins de {minimum} par strate pour {n_strata} strates ; chaque strate en reçoit {minimum} ({total} unités).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La base de sondage est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="86"/>
+        <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La base de sondage est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La base de sondage est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="91"/>
+        <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La base de sondage est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La base de sondage est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="96"/>
+        <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La base de sondage est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La base de sondage est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="101"/>
+        <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La base de sondage est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La strate {key} est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="106"/>
+        <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La strate {key} est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La strate {key} est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="111"/>
+        <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La strate {key} est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La strate {key} est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="116"/>
+        <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La strate {key} est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="541" />
-      <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
-      <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="121"/>
+        <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
+        <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="546" />
-      <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
-      <translation>Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
+        <location filename="../processing/engine/layout.py" line="588"/>
+        <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+        <translation>Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="546" />
-      <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part's density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
-      <translation>Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
+        <location filename="../processing/engine/layout.py" line="588"/>
+        <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
+        <translation>Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="555" />
-      <source>The frame gets no units; the estimate cannot speak for it.</source>
-      <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
+        <location filename="../processing/engine/layout.py" line="598"/>
+        <source>The frame gets no units; the estimate cannot speak for it.</source>
+        <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="555" />
-      <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
-      <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
+        <location filename="../processing/engine/layout.py" line="598"/>
+        <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
+        <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="558" />
-      <source>The frame gets one unit only; its variance cannot be estimated.</source>
-      <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
+        <location filename="../processing/engine/layout.py" line="603"/>
+        <source>The frame gets one unit only; its variance cannot be estimated.</source>
+        <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="558" />
-      <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
-      <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
+        <location filename="../processing/engine/layout.py" line="603"/>
+        <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
+        <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="581" />
-      <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host's Difference or Union tools) and run again.</source>
-      <translation>Des strates se chevauchent ({pairs}) : un lieu n'appartient qu'à une strate, et les unités d'une zone commune seraient tirées dans les deux strates et pondérées deux fois. Rendez les polygones des strates disjoints (par exemple avec les outils Différence ou Union de l'hôte) et relancez.</translation>
+        <location filename="../processing/engine/layout.py" line="628"/>
+        <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
+        <translation>Des strates se chevauchent ({pairs}) : un lieu n'appartient qu'à une strate, et les unités d'une zone commune seraient tirées dans les deux strates et pondérées deux fois. Rendez les polygones des strates disjoints (par exemple avec les outils Différence ou Union de l'hôte) et relancez.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="585" />
-      <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
-      <translation>Des strates se chevauchent légèrement ({pairs}) ; les unités qui s'y trouvent appartiennent aux deux. Rendez les polygones des strates disjoints si ce n'est pas qu'une imprécision de numérisation.</translation>
+        <location filename="../processing/engine/layout.py" line="632"/>
+        <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
+        <translation>Des strates se chevauchent légèrement ({pairs}) ; les unités qui s'y trouvent appartiennent aux deux. Rendez les polygones des strates disjoints si ce n'est pas qu'une imprécision de numérisation.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="670" />
-      <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
-      <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="717"/>
+        <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+        <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="670" />
-      <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
-      <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="717"/>
+        <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
+        <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="768" />
-      <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
-      <translation>Une grille systématique de pas {spacing:.3g} m sur une surface de {area:,.1f} m² étalée sur {width:,.0f} m x {height:,.0f} m demanderait {count:,} points candidats. La surface est un liseré ou bien trop petite pour le nombre d'unités : cherchez les liserés dans la base de sondage, demandez moins d'unités ou choisissez un autre plan.</translation>
+        <location filename="../processing/engine/layout.py" line="817"/>
+        <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
+        <translation>Une grille systématique de pas {spacing:.3g} m sur une surface de {area:,.1f} m² étalée sur {width:,.0f} m x {height:,.0f} m demanderait {count:,} points candidats. La surface est un liseré ou bien trop petite pour le nombre d'unités : cherchez les liserés dans la base de sondage, demandez moins d'unités ou choisissez un autre plan.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="838" />
-      <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
-      <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="886"/>
+        <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+        <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="838" />
-      <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
-      <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
+        <location filename="../processing/engine/layout.py" line="886"/>
+        <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
+        <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="856" />
-      <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
-      <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="906"/>
+        <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+        <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="856" />
-      <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
-      <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
+        <location filename="../processing/engine/layout.py" line="906"/>
+        <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
+        <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="866" />
-      <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
-      <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
+        <location filename="../processing/engine/layout.py" line="917"/>
+        <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+        <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="866" />
-      <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
-      <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
+        <location filename="../processing/engine/layout.py" line="917"/>
+        <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
+        <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="873" />
-      <source>The frame has only {n} of {r} reserve units.</source>
-      <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
+        <location filename="../processing/engine/layout.py" line="925"/>
+        <source>The frame has only {n} of {r} reserve units.</source>
+        <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="873" />
-      <source>Stratum {key} has only {n} of {r} reserve units.</source>
-      <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
+        <location filename="../processing/engine/layout.py" line="925"/>
+        <source>Stratum {key} has only {n} of {r} reserve units.</source>
+        <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>début du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+        <location filename="../processing/engine/layout.py" line="141"/>
+        <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>début du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>début du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+        <location filename="../processing/engine/layout.py" line="144"/>
+        <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>début du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>fin du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+        <location filename="../processing/engine/layout.py" line="147"/>
+        <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>fin du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="960" />
-      <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
-      <translation>fin du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
+        <location filename="../processing/engine/layout.py" line="150"/>
+        <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
+        <translation>fin du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>point unit {unit} (primary, stratum {stratum})</source>
-      <translation>unité ponctuelle {unit} (principale, strate {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="133"/>
+        <source>point unit {unit} (primary, stratum {stratum})</source>
+        <translation>unité ponctuelle {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>point unit {unit} (reserve, stratum {stratum})</source>
-      <translation>unité ponctuelle {unit} (de réserve, strate {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="134"/>
+        <source>point unit {unit} (reserve, stratum {stratum})</source>
+        <translation>unité ponctuelle {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>square unit {unit} (primary, stratum {stratum})</source>
-      <translation>unité carrée {unit} (principale, strate {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="135"/>
+        <source>square unit {unit} (primary, stratum {stratum})</source>
+        <translation>unité carrée {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>square unit {unit} (reserve, stratum {stratum})</source>
-      <translation>unité carrée {unit} (de réserve, strate {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="136"/>
+        <source>square unit {unit} (reserve, stratum {stratum})</source>
+        <translation>unité carrée {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>circle unit {unit} (primary, stratum {stratum})</source>
-      <translation>unité circulaire {unit} (principale, strate {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="137"/>
+        <source>circle unit {unit} (primary, stratum {stratum})</source>
+        <translation>unité circulaire {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/layout.py" line="968" />
-      <source>circle unit {unit} (reserve, stratum {stratum})</source>
-      <translation>unité circulaire {unit} (de réserve, strate {stratum})</translation>
+        <location filename="../processing/engine/layout.py" line="138"/>
+        <source>circle unit {unit} (reserve, stratum {stratum})</source>
+        <translation>unité circulaire {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="484" />
-      <source>No cell of the frame has a value in every covariate.</source>
-      <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables.</translation>
+        <location filename="../processing/engine/stratification.py" line="484"/>
+        <source>No cell of the frame has a value in every covariate.</source>
+        <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="674" />
-      <source>The covariates take fewer distinct value combinations than strata asked for.</source>
-      <translation>Les covariables prennent moins de combinaisons de valeurs distinctes que de strates demandées.</translation>
+        <location filename="../processing/engine/stratification.py" line="675"/>
+        <source>The covariates take fewer distinct value combinations than strata asked for.</source>
+        <translation>Les covariables prennent moins de combinaisons de valeurs distinctes que de strates demandées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="935" />
-      <source>The frame holds no raster cell.</source>
-      <translation>La base de sondage ne contient aucune cellule raster.</translation>
+        <location filename="../processing/engine/stratification.py" line="937"/>
+        <source>The frame holds no raster cell.</source>
+        <translation>La base de sondage ne contient aucune cellule raster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1259" />
-      <source>Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
-      <translation>La covariable « {name} » est constante ({value:g}) sur la base de sondage : elle ne peut pas définir de strates. Utilisez une autre covariable, ou vérifiez la base de sondage et le raster.</translation>
+        <location filename="../processing/engine/stratification.py" line="1261"/>
+        <source>Covariate &apos;{name}&apos; is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
+        <translation>La covariable « {name} » est constante ({value:g}) sur la base de sondage : elle ne peut pas définir de strates. Utilisez une autre covariable, ou vérifiez la base de sondage et le raster.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1299" />
-      <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
-      <translation>METHOD inconnu {method!r} : utilisez 0 (quantiles) à 4 (classes du raster).</translation>
+        <location filename="../processing/engine/stratification.py" line="1302"/>
+        <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
+        <translation>METHOD inconnu {method!r} : utilisez 0 (quantiles) à 4 (classes du raster).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1301" />
-      <source>Ask for at least 2 strata (STRATA).</source>
-      <translation>Demandez au moins 2 strates (STRATA).</translation>
+        <location filename="../processing/engine/stratification.py" line="1305"/>
+        <source>Ask for at least 2 strata (STRATA).</source>
+        <translation>Demandez au moins 2 strates (STRATA).</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1302" />
-      <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
-      <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables ({names}). Vérifiez que les rasters couvrent la base de sondage et que leur valeur NoData est juste.</translation>
+        <location filename="../processing/engine/stratification.py" line="1306"/>
+        <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
+        <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables ({names}). Vérifiez que les rasters couvrent la base de sondage et que leur valeur NoData est juste.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1337" />
-      <source>Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
-      <translation>La covariable « {name} » ne prend que {n_distinct} valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
+        <location filename="../processing/engine/stratification.py" line="1342"/>
+        <source>Covariate &apos;{name}&apos; takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+        <translation>La covariable « {name} » ne prend que {n_distinct} valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1351" />
-      <source>Some boundaries coincide (many cells share the same value of '{name}'); {formed} strata are formed instead of {k}.</source>
-      <translation>Certaines limites coïncident (beaucoup de cellules partagent la même valeur de « {name} ») ; {formed} strates sont formées au lieu de {k}.</translation>
+        <location filename="../processing/engine/stratification.py" line="1356"/>
+        <source>Some boundaries coincide (many cells share the same value of &apos;{name}&apos;); {formed} strata are formed instead of {k}.</source>
+        <translation>Certaines limites coïncident (beaucoup de cellules partagent la même valeur de « {name} ») ; {formed} strates sont formées au lieu de {k}.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1364" />
-      <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
-      <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
+        <location filename="../processing/engine/stratification.py" line="1370"/>
+        <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+        <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1368" />
-      <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
-      <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes dans un échantillon de {sample_n} cellules, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
+        <location filename="../processing/engine/stratification.py" line="1375"/>
+        <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
+        <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes dans un échantillon de {sample_n} cellules, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1378" />
-      <source>Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host's reclassify by table tool), or choose another METHOD.</source>
-      <translation>La covariable « {name} » a plus de {max_classes} classes (au moins {n_distinct} valeurs distinctes sur la base de sondage) : reclassez-la d'abord en {max_classes} classes ou moins (par exemple avec l'outil de reclassement par table de l'hôte), ou choisissez une autre METHOD.</translation>
+        <location filename="../processing/engine/stratification.py" line="1386"/>
+        <source>Covariate &apos;{name}&apos; has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host&apos;s reclassify by table tool), or choose another METHOD.</source>
+        <translation>La covariable « {name} » a plus de {max_classes} classes (au moins {n_distinct} valeurs distinctes sur la base de sondage) : reclassez-la d'abord en {max_classes} classes ou moins (par exemple avec l'outil de reclassement par table de l'hôte), ou choisissez une autre METHOD.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1395" />
-      <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
-      <translation>{dropped} des {k} strates ne contiennent aucune cellule et ont été retirées.</translation>
+        <location filename="../processing/engine/stratification.py" line="1403"/>
+        <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
+        <translation>{dropped} des {k} strates ne contiennent aucune cellule et ont été retirées.</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1472" />
-      <source>{name} class {value}</source>
-      <translation>{name} : classe {value}</translation>
+        <location filename="../processing/engine/stratification.py" line="1481"/>
+        <source>{name} class {value}</source>
+        <translation>{name} : classe {value}</translation>
     </message>
     <message>
-      <location filename="../processing/engine/stratification.py" line="1474" />
-      <source>mean {values}</source>
-      <translation>moyenne {values}</translation>
+        <location filename="../processing/engine/stratification.py" line="1484"/>
+        <source>mean {values}</source>
+        <translation>moyenne {values}</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="94" />
-      <source>Covariate '{name}' cannot be read ({error}). Check the file.</source>
-      <translation>La covariable « {name} » ne peut pas être lue ({error}). Vérifiez le fichier.</translation>
+        <location filename="../processing/raster_io.py" line="94"/>
+        <source>Covariate &apos;{name}&apos; cannot be read ({error}). Check the file.</source>
+        <translation>La covariable « {name} » ne peut pas être lue ({error}). Vérifiez le fichier.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="97" />
-      <source>Covariate '{name}' has no band {band}.</source>
-      <translation>La covariable « {name} » n'a pas de bande {band}.</translation>
+        <location filename="../processing/raster_io.py" line="98"/>
+        <source>Covariate &apos;{name}&apos; has no band {band}.</source>
+        <translation>La covariable « {name} » n'a pas de bande {band}.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="197" />
-      <source>Give at least one raster in COVARIATES.</source>
-      <translation>Donnez au moins un raster dans COVARIATES.</translation>
+        <location filename="../processing/raster_io.py" line="199"/>
+        <source>Give at least one raster in COVARIATES.</source>
+        <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="229" />
-      <source>The frame has no polygon.</source>
-      <translation>La base de sondage n'a aucun polygone.</translation>
+        <location filename="../processing/raster_io.py" line="231"/>
+        <source>The frame has no polygon.</source>
+        <translation>La base de sondage n'a aucun polygone.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="273" />
-      <source>The frame does not overlap covariate '{name}' ({path}). Use a raster that covers the frame, or check both layers' CRS.</source>
-      <translation>La base de sondage ne recouvre pas la covariable « {name} » ({path}). Utilisez un raster qui couvre la base de sondage, ou vérifiez le SCR des deux couches.</translation>
+        <location filename="../processing/raster_io.py" line="275"/>
+        <source>The frame does not overlap covariate &apos;{name}&apos; ({path}). Use a raster that covers the frame, or check both layers&apos; CRS.</source>
+        <translation>La base de sondage ne recouvre pas la covariable « {name} » ({path}). Utilisez un raster qui couvre la base de sondage, ou vérifiez le SCR des deux couches.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="438" />
-      <source>Cannot write the stratum raster '{path}'.</source>
-      <translation>Impossible d'écrire le raster des strates « {path} ».</translation>
+        <location filename="../processing/raster_io.py" line="441"/>
+        <source>Cannot write the stratum raster &apos;{path}&apos;.</source>
+        <translation>Impossible d'écrire le raster des strates « {path} ».</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="809" />
-      <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
-      <translation>Avec MIN_AREA = {min_area:g} ha, la fusion des taches plus petites n'a laissé qu'une seule strate : il n'y a plus rien à stratifier. Réduisez MIN_AREA.</translation>
+        <location filename="../processing/raster_io.py" line="808"/>
+        <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
+        <translation>Avec MIN_AREA = {min_area:g} ha, la fusion des taches plus petites n'a laissé qu'une seule strate : il n'y a plus rien à stratifier. Réduisez MIN_AREA.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="816" />
-      <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
-      <translation>{merged} strates n'étaient faites que de taches sous MIN_AREA et ont été fusionnées avec leurs voisines.</translation>
+        <location filename="../processing/raster_io.py" line="815"/>
+        <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
+        <translation>{merged} strates n'étaient faites que de taches sous MIN_AREA et ont été fusionnées avec leurs voisines.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="823" />
-      <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of '{name}' that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
-      <translation>La fusion des taches sous MIN_AREA a fait passer des cellules d'une strate à l'autre : la part de la variance de « {name} » expliquée par les strates est tombée de {before:.2f} à {after:.2f}. Un MIN_AREA plus petit garde les strates plus proches des covariables.</translation>
+        <location filename="../processing/raster_io.py" line="823"/>
+        <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of &apos;{name}&apos; that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
+        <translation>La fusion des taches sous MIN_AREA a fait passer des cellules d'une strate à l'autre : la part de la variance de « {name} » expliquée par les strates est tombée de {before:.2f} à {after:.2f}. Un MIN_AREA plus petit garde les strates plus proches des covariables.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="828" />
-      <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
-      <translation>{n} tache(s) couvrant {ha:,.2f} ha restent sous MIN_AREA ({min_area:g} ha) : elles ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData). Retirez ces îlots de la base de sondage, comblez les NoData des covariables, ou réduisez MIN_AREA.</translation>
+        <location filename="../processing/raster_io.py" line="828"/>
+        <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
+        <translation>{n} tache(s) couvrant {ha:,.2f} ha restent sous MIN_AREA ({min_area:g} ha) : elles ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData). Retirez ces îlots de la base de sondage, comblez les NoData des covariables, ou réduisez MIN_AREA.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="840" />
-      <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
-      <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
+        <location filename="../processing/raster_io.py" line="840"/>
+        <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
+        <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="866" />
-      <source>The density surface '{name}' cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
-      <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
+        <location filename="../processing/raster_io.py" line="867"/>
+        <source>The density surface &apos;{name}&apos; cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
+        <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="877" />
-      <source>The density surface '{name}' does not overlap the sampling frame. Check that both cover the same area.</source>
-      <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
+        <location filename="../processing/raster_io.py" line="879"/>
+        <source>The density surface &apos;{name}&apos; does not overlap the sampling frame. Check that both cover the same area.</source>
+        <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_io.py" line="885" />
-      <source>The density surface '{name}' could not be warped to {crs} ({error}).</source>
-      <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
+        <location filename="../processing/raster_io.py" line="888"/>
+        <source>The density surface &apos;{name}&apos; could not be warped to {crs} ({error}).</source>
+        <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="102" />
-      <source>The mask raster (MASK) '{source}' cannot be opened by GDAL.</source>
-      <translation>Le raster de masque (MASK) « {source} » ne peut pas être ouvert par GDAL.</translation>
+        <location filename="../processing/raster_masking.py" line="102"/>
+        <source>The mask raster (MASK) &apos;{source}&apos; cannot be opened by GDAL.</source>
+        <translation>Le raster de masque (MASK) « {source} » ne peut pas être ouvert par GDAL.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="129" />
-      <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
-      <translation>Le raster de masque (MASK) demanderait {rows} x {cols} cellules sur la zone d'étude, soit plus de {max_cells:,}. Rééchantillonnez d'abord le raster en cellules plus grossières.</translation>
+        <location filename="../processing/raster_masking.py" line="130"/>
+        <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
+        <translation>Le raster de masque (MASK) demanderait {rows} x {cols} cellules sur la zone d'étude, soit plus de {max_cells:,}. Rééchantillonnez d'abord le raster en cellules plus grossières.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="140" />
-      <location filename="../processing/raster_masking.py" line="168" />
-      <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
-      <translation>Le raster de masque (MASK) ne peut pas être reprojeté dans le SCR de calcul.</translation>
+        <location filename="../processing/raster_masking.py" line="170"/>
+        <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
+        <translation>Le raster de masque (MASK) ne peut pas être reprojeté dans le SCR de calcul.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="198" />
-      <source>GDAL could not turn the masked raster cells into polygons.</source>
-      <translation>GDAL n'a pas pu transformer les cellules masquées du raster en polygones.</translation>
+        <location filename="../processing/raster_masking.py" line="201"/>
+        <source>GDAL could not turn the masked raster cells into polygons.</source>
+        <translation>GDAL n'a pas pu transformer les cellules masquées du raster en polygones.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="238" />
-      <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
-      <translation>MASK_MIN ({mask_min:g}) est supérieur à MASK_MAX ({mask_max:g}) ; aucune cellule ne pourrait être gardée. Inversez les deux valeurs ou laissez l'une d'elles vide.</translation>
+        <location filename="../processing/raster_masking.py" line="242"/>
+        <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
+        <translation>MASK_MIN ({mask_min:g}) est supérieur à MASK_MAX ({mask_max:g}) ; aucune cellule ne pourrait être gardée. Inversez les deux valeurs ou laissez l'une d'elles vide.</translation>
     </message>
     <message>
-      <location filename="../processing/raster_masking.py" line="244" />
-      <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
-      <translation>Le raster de masque (MASK) n'a pas de bande {band} ; il en a {count}.</translation>
+        <location filename="../processing/raster_masking.py" line="248"/>
+        <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
+        <translation>Le raster de masque (MASK) n'a pas de bande {band} ; il en a {count}.</translation>
     </message>
-  </context>
-  <context>
+    <message>
+        <location filename="../processing/engine/demo_reserve.py" line="37"/>
+        <source>an invented grazing antelope that lives in loose groups</source>
+        <translation>une antilope brouteuse inventée qui vit en groupes lâches</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>point</source>
+        <translation>point</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>square</source>
+        <translation>carré</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>circle</source>
+        <translation>cercle</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/unit_shapes.py" line="20"/>
+        <source>line</source>
+        <translation>ligne</translation>
+    </message>
+</context>
+<context>
     <name>PlotwisePlugin</name>
     <message>
-      <location filename="../plugin/plugin.py" line="53" />
-      <source>{name} is missing ({error}).</source>
-      <translation>{name} est absent ({error}).</translation>
+        <location filename="../plugin/plugin.py" line="49"/>
+        <source>{name} is missing ({error}).</source>
+        <translation>{name} est absent ({error}).</translation>
     </message>
     <message>
-      <location filename="../plugin/plugin.py" line="54" />
-      <source>{name} {version} is too old; version {wanted} or newer is needed.</source>
-      <translation>{name} {version} est trop ancien ; il faut la version {wanted} ou plus récente.</translation>
+        <location filename="../plugin/plugin.py" line="51"/>
+        <source>{name} {version} is too old; version {wanted} or newer is needed.</source>
+        <translation>{name} {version} est trop ancien ; il faut la version {wanted} ou plus récente.</translation>
     </message>
     <message>
-      <location filename="../plugin/plugin.py" line="58" />
-      <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
-      <translation>Plotwise ne peut pas démarrer car une bibliothèque nécessaire est absente ou trop ancienne : {problems} Installez les paquets standard de l'hôte (sous Debian ou Ubuntu : python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) et redémarrez QGIS. Aucun algorithme Plotwise n'a été ajouté.</translation>
+        <location filename="../plugin/plugin.py" line="56"/>
+        <source>Plotwise cannot start because a library it needs is missing or too old: {problems} Install the host&apos;s standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. No Plotwise algorithm has been added.</source>
+        <translation>Plotwise ne peut pas démarrer car une bibliothèque nécessaire est absente ou trop ancienne : {problems} Installez les paquets standard de l'hôte (sous Debian ou Ubuntu : python3-numpy, python3-scipy, python3-shapely, python3-pyproj, python3-gdal) et redémarrez QGIS. Aucun algorithme Plotwise n'a été ajouté.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseProvider</name>
     <message>
-      <location filename="../processing/provider.py" line="97" />
-      <source>Plotwise</source>
-      <translation>Plotwise</translation>
+        <location filename="../processing/provider.py" line="90"/>
+        <source>Plotwise</source>
+        <translation>Plotwise</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="100" />
-      <source>Plotwise survey design and estimation</source>
-      <translation>Plotwise : conception d'inventaires et estimation</translation>
+        <location filename="../processing/provider.py" line="93"/>
+        <source>Plotwise survey design and estimation</source>
+        <translation>Plotwise : conception d'inventaires et estimation</translation>
     </message>
     <message>
-      <location filename="../processing/provider.py" line="121" />
-      <source>The example model {path} could not be read.</source>
-      <translation>Le modèle d'exemple {path} n'a pas pu être lu.</translation>
+        <location filename="../processing/provider.py" line="113"/>
+        <source>The example model {path} could not be read.</source>
+        <translation>Le modèle d'exemple {path} n'a pas pu être lu.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseReport</name>
     <message>
-      <location filename="../processing/report/html.py" line="109" />
-      <source>yes</source>
-      <translation>oui</translation>
+        <location filename="../processing/report/html.py" line="120"/>
+        <source>yes</source>
+        <translation>oui</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="109" />
-      <source>no</source>
-      <translation>non</translation>
+        <location filename="../processing/report/html.py" line="120"/>
+        <source>no</source>
+        <translation>non</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="128" />
-      <source>Inputs and parameters</source>
-      <translation>Entrées et paramètres</translation>
+        <location filename="../processing/report/html.py" line="140"/>
+        <source>Inputs and parameters</source>
+        <translation>Entrées et paramètres</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="130" />
-      <source>Item</source>
-      <translation>Élément</translation>
+        <location filename="../processing/report/html.py" line="142"/>
+        <source>Item</source>
+        <translation>Élément</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="130" />
-      <source>Value</source>
-      <translation>Valeur</translation>
+        <location filename="../processing/report/html.py" line="142"/>
+        <source>Value</source>
+        <translation>Valeur</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="157" />
-      <source>Written</source>
-      <translation>Généré le</translation>
+        <location filename="../processing/report/html.py" line="169"/>
+        <source>Written</source>
+        <translation>Généré le</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="159" />
-      <source>algorithm</source>
-      <translation>algorithme</translation>
+        <location filename="../processing/report/html.py" line="171"/>
+        <source>algorithm</source>
+        <translation>algorithme</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="163" />
-      <source>Field safety</source>
-      <translation>Sécurité sur le terrain</translation>
+        <location filename="../processing/report/html.py" line="174"/>
+        <source>Field safety</source>
+        <translation>Sécurité sur le terrain</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="164" />
-      <source>Check every unit's access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency's field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
-      <translation>Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe. Cet outil choisit des emplacements pour des raisons uniquement statistiques : il ne rend jamais un emplacement sûr à atteindre ni sûr pour y travailler. Un terrain escarpé, isolé ou inondé, la faune, la météo et les terrains privés peuvent mettre des personnes en danger. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale, et écartez ou remplacez toute unité qui ne peut pas être atteinte en sécurité (notez-la comme non inventoriée).</translation>
+        <location filename="../processing/report/html.py" line="32"/>
+        <source>Check every unit&apos;s access and safety before sending a team. This tool chooses locations for statistical reasons only: it never makes a location safe to reach or to work in. Steep, remote or flooded terrain, wildlife, weather and private land can put people at risk. Follow your agency&apos;s field-safety rules and local law, and leave out or replace any unit that cannot be reached safely (record it as not surveyed).</source>
+        <translation>Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe. Cet outil choisit des emplacements pour des raisons uniquement statistiques : il ne rend jamais un emplacement sûr à atteindre ni sûr pour y travailler. Un terrain escarpé, isolé ou inondé, la faune, la météo et les terrains privés peuvent mettre des personnes en danger. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale, et écartez ou remplacez toute unité qui ne peut pas être atteinte en sécurité (notez-la comme non inventoriée).</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="168" />
-      <source>Warnings</source>
-      <translation>Avertissements</translation>
+        <location filename="../processing/report/html.py" line="179"/>
+        <source>Warnings</source>
+        <translation>Avertissements</translation>
     </message>
     <message>
-      <location filename="../processing/report/html.py" line="172" />
-      <source>Method references</source>
-      <translation>Références des méthodes</translation>
+        <location filename="../processing/report/html.py" line="184"/>
+        <source>Method references</source>
+        <translation>Références des méthodes</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>PlotwiseStyles</name>
     <message>
-      <location filename="../processing/styles.py" line="224" />
-      <source>primary unit</source>
-      <translation>unité principale</translation>
+        <location filename="../processing/styles.py" line="220"/>
+        <source>primary unit</source>
+        <translation>unité principale</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="225" />
-      <source>reserve unit</source>
-      <translation>unité de réserve</translation>
+        <location filename="../processing/styles.py" line="221"/>
+        <source>reserve unit</source>
+        <translation>unité de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="268" />
-      <location filename="../processing/styles.py" line="355" />
-      <source>per {unit}</source>
-      <translation>par {unit}</translation>
+        <location filename="../processing/styles.py" line="351"/>
+        <source>per {unit}</source>
+        <translation>par {unit}</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="269" />
-      <source>Density (animals {per})</source>
-      <translation>Densité (animaux {per})</translation>
+        <location filename="../processing/styles.py" line="265"/>
+        <source>Density (animals {per})</source>
+        <translation>Densité (animaux {per})</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="299" />
-      <source>no estimate (no surveyed unit)</source>
-      <translation>pas d'estimation (aucune unité inventoriée)</translation>
+        <location filename="../processing/styles.py" line="295"/>
+        <source>no estimate (no surveyed unit)</source>
+        <translation>pas d'estimation (aucune unité inventoriée)</translation>
     </message>
     <message>
-      <location filename="../processing/styles.py" line="408" />
-      <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
-      <translation>La couche {name} n'a pas pu recevoir son style ({error}) ; elle garde le style par défaut.</translation>
+        <location filename="../processing/styles.py" line="405"/>
+        <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
+        <translation>La couche {name} n'a pas pu recevoir son style ({error}) ; elle garde le style par défaut.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>SimulateCounts</name>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="29" />
-      <source>Simulate counts in sample units</source>
-      <translation>Simuler des comptages dans les unités d'échantillonnage</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="29"/>
+        <source>Simulate counts in sample units</source>
+        <translation>Simuler des comptages dans les unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="32" />
-      <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit's &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve's simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="32"/>
+        <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="50" />
-      <source>Sample units</source>
-      <translation>Unités d'échantillonnage</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="50"/>
+        <source>Sample units</source>
+        <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="51" />
-      <source>Animal points</source>
-      <translation>Points des animaux</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="51"/>
+        <source>Animal points</source>
+        <translation>Points des animaux</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="54" />
-      <source>Detection probability</source>
-      <translation>Probabilité de détection</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="52"/>
+        <source>Detection probability</source>
+        <translation>Probabilité de détection</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="59" />
-      <source>Count reserve units too</source>
-      <translation>Compter aussi les unités de réserve</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="58"/>
+        <source>Count reserve units too</source>
+        <translation>Compter aussi les unités de réserve</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="62" />
-      <source>Units with simulated counts</source>
-      <translation>Unités avec comptages simulés</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="62"/>
+        <source>Units with simulated counts</source>
+        <translation>Unités avec comptages simulés</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="81" />
-      <source>has no geometry</source>
-      <translation>n'a pas de géométrie</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="81"/>
+        <source>has no geometry</source>
+        <translation>n'a pas de géométrie</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="87" />
-      <source>Layer '{layer}': these features cannot be counted: {items}. Point and line units need a positive 'area_m2' field (the layout step writes it); polygons need a geometry.</source>
-      <translation>Couche « {layer} » : ces entités ne peuvent pas être comptées : {items}. Les unités ponctuelles et linéaires ont besoin d'un champ « area_m2 » positif (l'étape de disposition l'écrit) ; les polygones ont besoin d'une géométrie.</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="86"/>
+        <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
+        <translation>Couche « {layer} » : ces entités ne peuvent pas être comptées : {items}. Les unités ponctuelles et linéaires ont besoin d'un champ « area_m2 » positif (l'étape de disposition l'écrit) ; les polygones ont besoin d'une géométrie.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/simulatecounts.py" line="126" />
-      <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
-      <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
+        <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
+        <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
+        <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
     </message>
-  </context>
-  <context>
+</context>
+<context>
     <name>Stratify</name>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="67" />
-      <source>Quantile (equal areas on the first covariate)</source>
-      <translation>Quantiles (surfaces égales sur la première covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="67"/>
+        <source>Quantile (equal areas on the first covariate)</source>
+        <translation>Quantiles (surfaces égales sur la première covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="68" />
-      <source>Equal interval (on the first covariate)</source>
-      <translation>Intervalles égaux (sur la première covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="68"/>
+        <source>Equal interval (on the first covariate)</source>
+        <translation>Intervalles égaux (sur la première covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="69" />
-      <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
-      <translation>Racine cumulée des fréquences (Dalenius–Hodges, première covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="69"/>
+        <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
+        <translation>Racine cumulée des fréquences (Dalenius–Hodges, première covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="70" />
-      <source>k-means (all covariates, standardised)</source>
-      <translation>k-moyennes (toutes les covariables, standardisées)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="70"/>
+        <source>k-means (all covariates, standardised)</source>
+        <translation>k-moyennes (toutes les covariables, standardisées)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="71" />
-      <source>Raster classes (each class of the first covariate)</source>
-      <translation>Classes raster (chaque classe de la première covariable)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="71"/>
+        <source>Raster classes (each class of the first covariate)</source>
+        <translation>Classes raster (chaque classe de la première covariable)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="75" />
-      <source>Stratify from raster covariates</source>
-      <translation>Stratifier à partir de covariables raster</translation>
+        <location filename="../processing/algorithms/stratify.py" line="75"/>
+        <source>Stratify from raster covariates</source>
+        <translation>Stratifier à partir de covariables raster</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="78" />
-      <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Forme des strates (zones de densité attendue semblable) à partir de covariables raster telles que l'altitude, un indice de végétation ou une carte d'occupation du sol. Seules comptent les cellules dont le centre est dans la base de sondage. Une cellule NoData dans une covariable est écartée et sa surface signalée.&lt;/p&gt;&lt;p&gt;Les covariables sont mises sur la grille de la première, dans le SCR de la base de sondage (une base en coordonnées géographiques est projetée dans la zone UTM de son centre). Les rasters dans un autre SCR ou sur une autre grille sont rééchantillonnés à la volée (bilinéaire ; plus proche voisin pour les classes raster). Les rasters sont lus bloc par bloc, si bien que la mémoire reste bornée quelle que soit leur taille.&lt;/p&gt;&lt;h3&gt;Méthodes&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantiles&lt;/b&gt; : strates de surface égale le long de la première covariable. Les limites sont les quantiles empiriques exacts des cellules de la base (Hyndman &amp;amp; Fan 1996, définition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalles égaux&lt;/b&gt; : l'étendue de la première covariable découpée en largeurs égales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Racine cumulée des fréquences&lt;/b&gt; : la règle de Dalenius &amp;amp; Hodges (1959) sur un histogramme à 100 classes de la première covariable (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-moyennes&lt;/b&gt; : toutes les covariables standardisées à moyenne 0 et écart-type 1, graines k-means++ (Arthur &amp;amp; Vassilvitskii 2007) et itérations de Lloyd sur un échantillon aléatoire de 100 000 cellules tiré avec la graine ; puis chaque cellule va au centre le plus proche.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Classes raster&lt;/b&gt; : chaque valeur de la première covariable (un raster catégoriel, 50 classes au plus) forme une strate ; le nombre de strates est ignoré.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Les strates sont numérotées de 1 à k par moyenne croissante de la première covariable. Les taches (4-connexité) plus petites que la surface minimale (ha) rejoignent une strate voisine avant que les strates ne soient converties en polygones : les grains par le tamis de GDAL, puis chaque petite tache, de la plus petite à la plus grande, rejoint la voisine qui l'amène à la surface minimale. Une tache qui ne touche aucune autre strate reste, avec un avertissement.&lt;/p&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Raster des strates : la strate de chaque cellule (0 = aucune).&lt;/li&gt;&lt;li&gt;Strates : un multipolygone par strate avec &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cellules × surface d'une cellule), &lt;i&gt;cov_mean&lt;/i&gt; et &lt;i&gt;cov_sd&lt;/i&gt; de la première covariable, et &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … pour les autres (écart-type sur les cellules de la strate).&lt;/li&gt;&lt;li&gt;Rapport : limites, surfaces, statistiques des covariables par strate, part de la variance de chaque covariable expliquée par les strates (R²), un histogramme avec les limites et une carte.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La graine aléatoire ne sert qu'aux k-moyennes (0 en tire une et l'enregistre).&lt;/p&gt;&lt;p&gt;Les strates sont un outil statistique : avant le travail de terrain, vérifiez l'accès à chaque unité et sa sécurité.&lt;/p&gt;</translation>
+        <location filename="../processing/algorithms/stratify.py" line="78"/>
+        <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Forme des strates (zones de densité attendue semblable) à partir de covariables raster telles que l'altitude, un indice de végétation ou une carte d'occupation du sol. Seules comptent les cellules dont le centre est dans la base de sondage. Une cellule NoData dans une covariable est écartée et sa surface signalée.&lt;/p&gt;&lt;p&gt;Les covariables sont mises sur la grille de la première, dans le SCR de la base de sondage (une base en coordonnées géographiques est projetée dans la zone UTM de son centre). Les rasters dans un autre SCR ou sur une autre grille sont rééchantillonnés à la volée (bilinéaire ; plus proche voisin pour les classes raster). Les rasters sont lus bloc par bloc, si bien que la mémoire reste bornée quelle que soit leur taille.&lt;/p&gt;&lt;h3&gt;Méthodes&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantiles&lt;/b&gt; : strates de surface égale le long de la première covariable. Les limites sont les quantiles empiriques exacts des cellules de la base (Hyndman &amp;amp; Fan 1996, définition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalles égaux&lt;/b&gt; : l'étendue de la première covariable découpée en largeurs égales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Racine cumulée des fréquences&lt;/b&gt; : la règle de Dalenius &amp;amp; Hodges (1959) sur un histogramme à 100 classes de la première covariable (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-moyennes&lt;/b&gt; : toutes les covariables standardisées à moyenne 0 et écart-type 1, graines k-means++ (Arthur &amp;amp; Vassilvitskii 2007) et itérations de Lloyd sur un échantillon aléatoire de 100 000 cellules tiré avec la graine ; puis chaque cellule va au centre le plus proche.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Classes raster&lt;/b&gt; : chaque valeur de la première covariable (un raster catégoriel, 50 classes au plus) forme une strate ; le nombre de strates est ignoré.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Les strates sont numérotées de 1 à k par moyenne croissante de la première covariable. Les taches (4-connexité) plus petites que la surface minimale (ha) rejoignent une strate voisine avant que les strates ne soient converties en polygones : les grains par le tamis de GDAL, puis chaque petite tache, de la plus petite à la plus grande, rejoint la voisine qui l'amène à la surface minimale. Une tache qui ne touche aucune autre strate reste, avec un avertissement.&lt;/p&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Raster des strates : la strate de chaque cellule (0 = aucune).&lt;/li&gt;&lt;li&gt;Strates : un multipolygone par strate avec &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cellules × surface d'une cellule), &lt;i&gt;cov_mean&lt;/i&gt; et &lt;i&gt;cov_sd&lt;/i&gt; de la première covariable, et &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … pour les autres (écart-type sur les cellules de la strate).&lt;/li&gt;&lt;li&gt;Rapport : limites, surfaces, statistiques des covariables par strate, part de la variance de chaque covariable expliquée par les strates (R²), un histogramme avec les limites et une carte.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La graine aléatoire ne sert qu'aux k-moyennes (0 en tire une et l'enregistre).&lt;/p&gt;&lt;p&gt;Les strates sont un outil statistique : avant le travail de terrain, vérifiez l'accès à chaque unité et sa sécurité.&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="114" />
-      <source>Sampling frame</source>
-      <translation>Base de sondage</translation>
+        <location filename="../processing/algorithms/stratify.py" line="113"/>
+        <source>Sampling frame</source>
+        <translation>Base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="116" />
-      <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
-      <translation>Covariables raster (bande 1 de chacune ; la première fixe la grille)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="115"/>
+        <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
+        <translation>Covariables raster (bande 1 de chacune ; la première fixe la grille)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="119" />
-      <source>Method</source>
-      <translation>Méthode</translation>
+        <location filename="../processing/algorithms/stratify.py" line="118"/>
+        <source>Method</source>
+        <translation>Méthode</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="121" />
-      <source>Number of strata (ignored for raster classes)</source>
-      <translation>Nombre de strates (ignoré pour les classes raster)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="120"/>
+        <source>Number of strata (ignored for raster classes)</source>
+        <translation>Nombre de strates (ignoré pour les classes raster)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="124" />
-      <source>Minimum patch area (ha); smaller patches join a neighbour</source>
-      <translation>Surface minimale d'une tache (ha) ; les taches plus petites rejoignent une voisine</translation>
+        <location filename="../processing/algorithms/stratify.py" line="123"/>
+        <source>Minimum patch area (ha); smaller patches join a neighbour</source>
+        <translation>Surface minimale d'une tache (ha) ; les taches plus petites rejoignent une voisine</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="127" />
-      <source>Stratum raster</source>
-      <translation>Raster des strates</translation>
+        <location filename="../processing/algorithms/stratify.py" line="127"/>
+        <source>Stratum raster</source>
+        <translation>Raster des strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="129" />
-      <location filename="../processing/algorithms/stratify.py" line="252" />
-      <source>Strata</source>
-      <translation>Strates</translation>
+        <location filename="../processing/algorithms/stratify.py" line="251"/>
+        <source>Strata</source>
+        <translation>Strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="131" />
-      <source>Number of strata formed</source>
-      <translation>Nombre de strates formées</translation>
+        <location filename="../processing/algorithms/stratify.py" line="131"/>
+        <source>Number of strata formed</source>
+        <translation>Nombre de strates formées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="133" />
-      <source>Share of the first covariate's variance explained by the strata (R²)</source>
-      <translation>Part de la variance de la première covariable expliquée par les strates (R²)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="132"/>
+        <source>Share of the first covariate's variance explained by the strata (R²)</source>
+        <translation>Part de la variance de la première covariable expliquée par les strates (R²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="139" />
-      <source>Give at least one raster in COVARIATES.</source>
-      <translation>Donnez au moins un raster dans COVARIATES.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="139"/>
+        <source>Give at least one raster in COVARIATES.</source>
+        <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="141" />
-      <source>COVARIATES holds {n} rasters; use at most {m}.</source>
-      <translation>COVARIATES contient {n} rasters ; utilisez-en au plus {m}.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="141"/>
+        <source>COVARIATES holds {n} rasters; use at most {m}.</source>
+        <translation>COVARIATES contient {n} rasters ; utilisez-en au plus {m}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="146" />
-      <source>COVARIATES: '{name}' is not a raster layer.</source>
-      <translation>COVARIATES : « {name} » n'est pas une couche raster.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="146"/>
+        <source>COVARIATES: &apos;{name}&apos; is not a raster layer.</source>
+        <translation>COVARIATES : « {name} » n'est pas une couche raster.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="148" />
-      <source>Covariate '{name}' is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
-      <translation>La covariable « {name} » n'est pas un fichier raster lisible par GDAL. Enregistrez-la d'abord en GeoTIFF.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="148"/>
+        <source>Covariate &apos;{name}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
+        <translation>La covariable « {name} » n'est pas un fichier raster lisible par GDAL. Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="176" />
-      <source>Layer '{layer}' (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
-      <translation>La couche « {layer} » (FRAME) n'a aucun polygone de surface positive. Choisissez la couche de la base de sondage.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="176"/>
+        <source>Layer &apos;{layer}&apos; (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
+        <translation>La couche « {layer} » (FRAME) n'a aucun polygone de surface positive. Choisissez la couche de la base de sondage.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="191" />
-      <source>Warped onto the grid of '{first}' in {crs}: {names}.</source>
-      <translation>Rééchantillonnées sur la grille de « {first} » en {crs} : {names}.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="191"/>
+        <source>Warped onto the grid of &apos;{first}&apos; in {crs}: {names}.</source>
+        <translation>Rééchantillonnées sur la grille de « {first} » en {crs} : {names}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="214" />
-      <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
-      <translation>{k} strates sur {ha} ha ; R² de « {name} » : {r2}.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="214"/>
+        <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
+        <translation>{k} strates sur {ha} ha ; R² de « {name} » : {r2}.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="236" />
-      <source>Strata from raster covariates</source>
-      <translation>Strates à partir de covariables raster</translation>
+        <location filename="../processing/algorithms/stratify.py" line="235"/>
+        <source>Strata from raster covariates</source>
+        <translation>Strates à partir de covariables raster</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="242" />
-      <source>strata</source>
-      <translation>strates</translation>
+        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <source>strata</source>
+        <translation>strates</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="243" />
-      <location filename="../processing/algorithms/stratify.py" line="358" />
-      <source>area stratified (ha)</source>
-      <translation>surface stratifiée (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>area stratified (ha)</source>
+        <translation>surface stratifiée (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="244" />
-      <source>frame covered</source>
-      <translation>part de la base couverte</translation>
+        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <source>frame covered</source>
+        <translation>part de la base couverte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="245" />
-      <source>R² of {name}</source>
-      <translation>R² de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <source>R² of {name}</source>
+        <translation>R² de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="247" />
-      <source>The strata cover the frame's cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
-      <translation>Les strates couvrent les cellules de la base de sondage qui ont une valeur dans chaque covariable ({ha} ha). Un inventaire alloué sur ces strates ne vaut que pour cette surface.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="246"/>
+        <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
+        <translation>Les strates couvrent les cellules de la base de sondage qui ont une valeur dans chaque covariable ({ha} ha). Un inventaire alloué sur ces strates ne vaut que pour cette surface.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Stratum</source>
-      <translation>Strate</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Stratum</source>
+        <translation>Strate</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Label</source>
-      <translation>Libellé</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Label</source>
+        <translation>Libellé</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Area (ha)</source>
-      <translation>Surface (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Area (ha)</source>
+        <translation>Surface (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>% of area</source>
-      <translation>% de la surface</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>% of area</source>
+        <translation>% de la surface</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="253" />
-      <source>Cells</source>
-      <translation>Cellules</translation>
+        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <source>Cells</source>
+        <translation>Cellules</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="256" />
-      <source>{name} mean</source>
-      <translation>moyenne de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <source>{name} mean</source>
+        <translation>moyenne de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="256" />
-      <source>{name} SD</source>
-      <translation>écart-type de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <source>{name} SD</source>
+        <translation>écart-type de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="266" />
-      <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
-      <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avec leur plus grande voisine (tamis GDAL, 4-connexité) avant la vectorisation ; surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir quelques cellules que la règle seule aurait mises dans une strate voisine.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="265"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
+        <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avec leur plus grande voisine (tamis GDAL, 4-connexité) avant la vectorisation ; surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir quelques cellules que la règle seule aurait mises dans une strate voisine.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="272" />
-      <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
-      <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avant la vectorisation (4-connexité) : les taches minuscules (moins de {specks} cellules) avec leur plus grande voisine (tamis GDAL), puis {n} autres taches, de la plus petite à la plus grande, chacune avec la strate voisine qui formait la plus petite tache d'au moins {ha} ha (ou, à défaut, la plus grande), afin qu'une mosaïque de petites taches ne soit pas absorbée par une seule tache qui grandit. Surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir des cellules que la règle seule aurait mises dans une autre strate.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="271"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
+        <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avant la vectorisation (4-connexité) : les taches minuscules (moins de {specks} cellules) avec leur plus grande voisine (tamis GDAL), puis {n} autres taches, de la plus petite à la plus grande, chacune avec la strate voisine qui formait la plus petite tache d'au moins {ha} ha (ou, à défaut, la plus grande), afin qu'une mosaïque de petites taches ne soit pas absorbée par une seule tache qui grandit. Surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir des cellules que la règle seule aurait mises dans une autre strate.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="283" />
-      <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
-      <translation>{n} tache(s) couvrant {area} ha ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData) et restent plus petites que {ha} ha.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="282"/>
+        <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
+        <translation>{n} tache(s) couvrant {area} ha ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData) et restent plus petites que {ha} ha.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="289" />
-      <source>Every patch of the strata now covers at least {ha} ha.</source>
-      <translation>Chaque tache des strates couvre désormais au moins {ha} ha.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="288"/>
+        <source>Every patch of the strata now covers at least {ha} ha.</source>
+        <translation>Chaque tache des strates couvre désormais au moins {ha} ha.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="293" />
-      <source>Method: {name}</source>
-      <translation>Méthode : {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="292"/>
+        <source>Method: {name}</source>
+        <translation>Méthode : {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="297" />
-      <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
-      <translation>La strate h contient les cellules telles que b(h−1) ≤ {name} &lt; b(h). Limites sur {name} :</translation>
+        <location filename="../processing/algorithms/stratify.py" line="296"/>
+        <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
+        <translation>La strate h contient les cellules telles que b(h−1) ≤ {name} &lt; b(h). Limites sur {name} :</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="300" />
-      <source>Boundary</source>
-      <translation>Limite</translation>
+        <location filename="../processing/algorithms/stratify.py" line="299"/>
+        <source>Boundary</source>
+        <translation>Limite</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="300" />
-      <location filename="../processing/algorithms/stratify.py" line="354" />
-      <source>Value</source>
-      <translation>Valeur</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>Value</source>
+        <translation>Valeur</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="303" />
-      <source>Exact sample quantiles at h/k of the frame's cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
-      <translation>Quantiles empiriques exacts à h/k des cellules de la base (Hyndman &amp; Fan 1996, définition 7), trouvés en deux passes : un histogramme à 64 000 classes situe chaque quantile, puis les cellules de cette classe sont triées.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="302"/>
+        <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
+        <translation>Quantiles empiriques exacts à h/k des cellules de la base (Hyndman &amp; Fan 1996, définition 7), trouvés en deux passes : un histogramme à 64 000 classes situe chaque quantile, puis les cellules de cette classe sont triées.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="308" />
-      <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
-      <translation>Dalenius &amp; Hodges (1959) : sur un histogramme de {name} à {n} classes, les limites sont les bornes supérieures des classes où le cumul de √f est le plus proche de h/k de son total.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="307"/>
+        <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
+        <translation>Dalenius &amp; Hodges (1959) : sur un histogramme de {name} à {n} classes, les limites sont les bornes supérieures des classes où le cumul de √f est le plus proche de h/k de son total.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="314" />
-      <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
-      <translation>Covariables standardisées avec leur moyenne et leur écart-type sur la base ; graines k-means++ et itérations de Lloyd sur un échantillon aléatoire de {m} cellules (graine {seed}) ; {it} itérations. Puis chaque cellule est allée au centre le plus proche.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="313"/>
+        <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
+        <translation>Covariables standardisées avec leur moyenne et leur écart-type sur la base ; graines k-means++ et itérations de Lloyd sur un échantillon aléatoire de {m} cellules (graine {seed}) ; {it} itérations. Puis chaque cellule est allée au centre le plus proche.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="320" />
-      <source>Each class of '{name}' is one stratum ({k} classes).</source>
-      <translation>Chaque classe de « {name} » forme une strate ({k} classes).</translation>
+        <location filename="../processing/algorithms/stratify.py" line="319"/>
+        <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
+        <translation>Chaque classe de « {name} » forme une strate ({k} classes).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="322" />
-      <source>Share of covariate variance explained by the strata (R²)</source>
-      <translation>Part de la variance des covariables expliquée par les strates (R²)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="321"/>
+        <source>Share of covariate variance explained by the strata (R²)</source>
+        <translation>Part de la variance des covariables expliquée par les strates (R²)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>Covariate</source>
-      <translation>Covariable</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>Covariate</source>
+        <translation>Covariable</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>Mean</source>
-      <translation>Moyenne</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>Mean</source>
+        <translation>Moyenne</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>SD</source>
-      <translation>Écart-type</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>SD</source>
+        <translation>Écart-type</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="323" />
-      <source>R²</source>
-      <translation>R²</translation>
+        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <source>R²</source>
+        <translation>R²</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="326" />
-      <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
-      <translation>R² = 1 − Σ N_h S_h² / (N S²) : la part inter-strates de la variance de la covariable sur les cellules. Pour une grandeur qui suit exactement la covariable, une allocation proportionnelle sur ces strates réduirait la variance de la moyenne estimée de cette part par rapport à un échantillonnage aléatoire simple (Cochran 1977, ch. 5, approximation pour grande population). Le gain pour la densité animale est d'autant plus faible que la densité suit moins étroitement la covariable.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="325"/>
+        <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
+        <translation>R² = 1 − Σ N_h S_h² / (N S²) : la part inter-strates de la variance de la covariable sur les cellules. Pour une grandeur qui suit exactement la covariable, une allocation proportionnelle sur ces strates réduirait la variance de la moyenne estimée de cette part par rapport à un échantillonnage aléatoire simple (Cochran 1977, ch. 5, approximation pour grande population). Le gain pour la densité animale est d'autant plus faible que la densité suit moins étroitement la covariable.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="333" />
-      <source>Histogram of {name}</source>
-      <translation>Histogramme de {name}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="332"/>
+        <source>Histogram of {name}</source>
+        <translation>Histogramme de {name}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="341" />
-      <source>stratum {h}</source>
-      <translation>strate {h}</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>stratum {h}</source>
+        <translation>strate {h}</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="342" />
-      <source>cells</source>
-      <translation>cellules</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>cells</source>
+        <translation>cellules</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="343" />
-      <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
-      <translation>Cellules de la base selon {name}, colorées par strate ; tirets : limites des strates.</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
+        <translation>Cellules de la base selon {name}, colorées par strate ; tirets : limites des strates.</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="345" />
-      <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
-      <translation>Cellules de la base selon {name}, colorées par strate (les strates des k-moyennes peuvent se chevaucher sur une covariable).</translation>
+        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
+        <translation>Cellules de la base selon {name}, colorées par strate (les strates des k-moyennes peuvent se chevaucher sur une covariable).</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="348" />
-      <source>Map</source>
-      <translation>Carte</translation>
+        <location filename="../processing/algorithms/stratify.py" line="347"/>
+        <source>Map</source>
+        <translation>Carte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="350" />
-      <source>Strata within the sampling frame</source>
-      <translation>Strates dans la base de sondage</translation>
+        <location filename="../processing/algorithms/stratify.py" line="349"/>
+        <source>Strata within the sampling frame</source>
+        <translation>Strates dans la base de sondage</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="352" />
-      <source>Coverage</source>
-      <translation>Couverture</translation>
+        <location filename="../processing/algorithms/stratify.py" line="351"/>
+        <source>Coverage</source>
+        <translation>Couverture</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="354" />
-      <source>Item</source>
-      <translation>Élément</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>Item</source>
+        <translation>Élément</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="355" />
-      <source>frame area (ha)</source>
-      <translation>surface de la base (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>frame area (ha)</source>
+        <translation>surface de la base (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="356" />
-      <source>frame area outside the first covariate's extent (ha)</source>
-      <translation>surface de la base hors de l'emprise de la première covariable (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>frame area outside the first covariate&apos;s extent (ha)</source>
+        <translation>surface de la base hors de l'emprise de la première covariable (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="357" />
-      <source>frame cells with NoData in a covariate (ha)</source>
-      <translation>cellules de la base NoData dans une covariable (ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>frame cells with NoData in a covariate (ha)</source>
+        <translation>cellules de la base NoData dans une covariable (ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="359" />
-      <source>share of the frame covered</source>
-      <translation>part de la base couverte</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>share of the frame covered</source>
+        <translation>part de la base couverte</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="360" />
-      <source>cells stratified</source>
-      <translation>cellules stratifiées</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>cells stratified</source>
+        <translation>cellules stratifiées</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="361" />
-      <source>cell size (m)</source>
-      <translation>taille de cellule (m)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>cell size (m)</source>
+        <translation>taille de cellule (m)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="362" />
-      <source>grid</source>
-      <translation>grille</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>grid</source>
+        <translation>grille</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="363" />
-      <source>covariates warped on the fly</source>
-      <translation>covariables rééchantillonnées à la volée</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>covariates warped on the fly</source>
+        <translation>covariables rééchantillonnées à la volée</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="363" />
-      <source>none</source>
-      <translation>aucune</translation>
+        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <source>none</source>
+        <translation>aucune</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="368" />
-      <source>, projected from {src} (UTM zone of the frame's centre)</source>
-      <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="367"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="370" />
-      <source>Sampling frame (FRAME)</source>
-      <translation>Base de sondage (FRAME)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="369"/>
+        <source>Sampling frame (FRAME)</source>
+        <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="371" />
-      <source>Covariates (COVARIATES)</source>
-      <translation>Covariables (COVARIATES)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="370"/>
+        <source>Covariates (COVARIATES)</source>
+        <translation>Covariables (COVARIATES)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="372" />
-      <source>Method (METHOD)</source>
-      <translation>Méthode (METHOD)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="371"/>
+        <source>Method (METHOD)</source>
+        <translation>Méthode (METHOD)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="373" />
-      <source>Number of strata (STRATA)</source>
-      <translation>Nombre de strates (STRATA)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <source>Number of strata (STRATA)</source>
+        <translation>Nombre de strates (STRATA)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="373" />
-      <source>ignored</source>
-      <translation>ignoré</translation>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <source>ignored</source>
+        <translation>ignoré</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="374" />
-      <source>Minimum patch area (MIN_AREA, ha)</source>
-      <translation>Surface minimale d'une tache (MIN_AREA, ha)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="373"/>
+        <source>Minimum patch area (MIN_AREA, ha)</source>
+        <translation>Surface minimale d'une tache (MIN_AREA, ha)</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="375" />
-      <source>CRS of the computation and the outputs</source>
-      <translation>SCR du calcul et des sorties</translation>
+        <location filename="../processing/algorithms/stratify.py" line="374"/>
+        <source>CRS of the computation and the outputs</source>
+        <translation>SCR du calcul et des sorties</translation>
     </message>
     <message>
-      <location filename="../processing/algorithms/stratify.py" line="378" />
-      <source>Seed (SEED)</source>
-      <translation>Graine (SEED)</translation>
+        <location filename="../processing/algorithms/stratify.py" line="377"/>
+        <source>Seed (SEED)</source>
+        <translation>Graine (SEED)</translation>
     </message>
-  </context>
+</context>
 </TS>

@@ -9,10 +9,6 @@ from ..processing.translation import install_translator, remove_translator
 LOG_TAG = "Plotwise"
 
 
-def tr(text):
-    return QCoreApplication.translate("PlotwisePlugin", text)
-
-
 class PlotwisePlugin:
     """Registers the ``plotwise`` processing provider, or explains why it cannot."""
 
@@ -50,12 +46,15 @@ class PlotwisePlugin:
     @staticmethod
     def _problem_text(problem):
         if problem.missing:
-            return tr("{name} is missing ({error}).").format(name=problem.name, error=problem.error)
-        return tr("{name} {version} is too old; version {wanted} or newer is needed.").format(
+            return QCoreApplication.translate("PlotwisePlugin", "{name} is missing ({error}).").format(
+                name=problem.name, error=problem.error)
+        return QCoreApplication.translate(
+            "PlotwisePlugin", "{name} {version} is too old; version {wanted} or newer is needed.").format(
             name=problem.name, version=problem.version, wanted=problem.wanted)
 
     def _explain_missing(self):
-        text = tr(
+        text = QCoreApplication.translate(
+            "PlotwisePlugin",
             "Plotwise cannot start because a library it needs is missing or too old: {problems} "
             "Install the host's standard packages (on Debian or Ubuntu: python3-numpy, python3-scipy, "
             "python3-shapely, python3-pyproj, python3-gdal) and restart QGIS. "

@@ -26,10 +26,6 @@ from .engine.crs import utm_epsg_for_lonlat
 from .engine.geometry_types import polygonal_part
 
 
-def tr(text):
-    return QCoreApplication.translate("PlotwiseBridge", text)
-
-
 # -- geometry conversion -----------------------------------------------------------
 def to_shapely(geometry):
     """A shapely geometry from a ``QgsGeometry`` (None when empty)."""
@@ -56,7 +52,10 @@ def computation_crs(source_crs, extent, context, feedback, layer_name=""):
     """
     if not source_crs.isValid():
         raise QgsProcessingException(
-            tr("Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.").format(layer=layer_name)
+            QCoreApplication.translate(
+                "PlotwiseBridge",
+                "Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) "
+                "and run again.").format(layer=layer_name)
         )
     if not source_crs.isGeographic():
         return source_crs
@@ -67,7 +66,10 @@ def computation_crs(source_crs, extent, context, feedback, layer_name=""):
     epsg = utm_epsg_for_lonlat(centre.x(), centre.y())
     crs = QgsCoordinateReferenceSystem(f"EPSG:{epsg}")
     feedback.pushInfo(
-        tr("Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.").format(
+        QCoreApplication.translate(
+            "PlotwiseBridge",
+            "Layer '{layer}' is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of "
+            "its centre.").format(
             layer=layer_name, src=source_crs.authid(), dst=crs.authid(), name=crs.description()
         )
     )
@@ -105,7 +107,9 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
     warning) when ``drop_empty``.
     """
     if source is None:
-        raise QgsProcessingException(tr("The input layer '{layer}' could not be opened.").format(layer=layer_name))
+        raise QgsProcessingException(
+            QCoreApplication.translate("PlotwiseBridge", "The input layer '{layer}' could not be opened.").format(
+                layer=layer_name))
     layer_name = layer_name or source.sourceName()
     # the host would drop or refuse invalid features before we can repair them and say so
     source.setInvalidGeometryCheck(compat.GEOMETRY_NO_CHECK)
@@ -113,7 +117,8 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
     missing = [name for name in field_names if name and fields.lookupField(name) < 0]
     if missing:
         raise QgsProcessingException(
-            tr("Layer '{layer}' has no field named {names}. Choose an existing field.").format(
+            QCoreApplication.translate(
+                "PlotwiseBridge", "Layer '{layer}' has no field named {names}. Choose an existing field.").format(
                 layer=layer_name, names=", ".join(f"'{m}'" for m in missing)
             )
         )
@@ -146,11 +151,15 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
     warnings = []
     if repaired:
         warnings.append(
-            tr("Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.").format(layer=layer_name, ids=_id_list(repaired))
+            QCoreApplication.translate(
+                "PlotwiseBridge", "Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.").format(
+                layer=layer_name, ids=_id_list(repaired))
         )
     if dropped:
         warnings.append(
-            tr("Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.").format(layer=layer_name, ids=_id_list(dropped))
+            QCoreApplication.translate(
+                "PlotwiseBridge", "Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.").format(
+                layer=layer_name, ids=_id_list(dropped))
         )
     for warning in warnings:
         feedback.pushWarning(warning)
@@ -170,7 +179,8 @@ def point_coordinates(records):
 def _id_list(ids, limit=20):
     ids = [str(i) for i in ids]
     more = len(ids) - limit
-    return ", ".join(ids[:limit]) + (tr(" and {n} more").format(n=more) if more > 0 else "")
+    more_text = QCoreApplication.translate("PlotwiseBridge", " and {n} more").format(n=more) if more > 0 else ""
+    return ", ".join(ids[:limit]) + more_text
 
 
 id_list = _id_list
@@ -270,7 +280,9 @@ def write_geotiff(path, array, geotransform, crs, nodata=None, data_type=gdal.GD
     driver = gdal.GetDriverByName("GTiff")
     dataset = driver.Create(path, cols, rows, 1, data_type, options=["TILED=YES", "COMPRESS=DEFLATE"])
     if dataset is None:
-        raise QgsProcessingException(tr("Could not create the raster file {path}. Check the folder exists and is writable.").format(path=path))
+        raise QgsProcessingException(QCoreApplication.translate(
+            "PlotwiseBridge",
+            "Could not create the raster file {path}. Check the folder exists and is writable.").format(path=path))
     dataset.SetGeoTransform(tuple(float(v) for v in geotransform))
     srs = osr.SpatialReference()
     srs.ImportFromWkt(crs.toWkt())
@@ -297,12 +309,15 @@ def write_gpx_waypoints(path, names, lon, lat, descriptions=None, kinds=None):
 
     driver = ogr.GetDriverByName("GPX")
     if driver is None:
-        raise QgsProcessingException(tr("GDAL has no GPX driver here; the GPX file cannot be written."))
+        raise QgsProcessingException(QCoreApplication.translate(
+            "PlotwiseBridge", "GDAL has no GPX driver here; the GPX file cannot be written."))
     if gdal.VSIStatL(path) is not None:
         gdal.Unlink(path)  # the GPX driver does not overwrite
     dataset = driver.CreateDataSource(path)
     if dataset is None:
-        raise QgsProcessingException(tr("Could not create the GPX file {path}. Check the folder exists and is writable.").format(path=path))
+        raise QgsProcessingException(QCoreApplication.translate(
+            "PlotwiseBridge", "Could not create the GPX file {path}. Check the folder exists and is writable.").format(
+            path=path))
     srs = osr.SpatialReference()
     srs.ImportFromEPSG(4326)
     srs.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)

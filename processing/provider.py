@@ -3,10 +3,9 @@ import glob
 import os
 
 from qgis.core import QgsMessageLog, QgsProcessingModelAlgorithm, QgsProcessingProvider
-from qgis.PyQt.QtCore import QCoreApplication
+from qgis.PyQt.QtCore import QT_TRANSLATE_NOOP, QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
-from .algorithms.base import translatable
 from .algorithms.allocate import Allocate
 from .algorithms.buildframe import BuildFrame
 from .algorithms.comparedesigns import CompareDesigns
@@ -32,11 +31,12 @@ ALGORITHM_CLASSES = [
 ]
 
 
-# name in the .model3 file -> (display name, help); translated when shown
+# name in the .model3 file -> (display name, help); translated when shown. The parameter labels of the
+# chains are marked in scripts/build_models.py, which writes the .model3 files.
 EXAMPLE_CHAINS = {
     "plan_survey": (
-        translatable("ExampleChain", "Example chain: plan a survey (frame, strata, effort, layout)"),
-        translatable("ExampleChain",
+        QT_TRANSLATE_NOOP("ExampleChain", "Example chain: plan a survey (frame, strata, effort, layout)"),
+        QT_TRANSLATE_NOOP("ExampleChain",
             "Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws "
             "k-means strata from the covariate rasters, allocates the units by Neyman allocation with the "
             "covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 "
@@ -45,20 +45,13 @@ EXAMPLE_CHAINS = {
             "field-safety rules and local law."),
     ),
     "estimate_simulated_counts": (
-        translatable("ExampleChain", "Example chain: estimate from simulated counts"),
-        translatable("ExampleChain",
+        QT_TRANSLATE_NOOP("ExampleChain", "Example chain: estimate from simulated counts"),
+        QT_TRANSLATE_NOOP("ExampleChain",
             "For training: fills the units' count field from a simulated population, then estimates density "
             "and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units "
             "instead."),
     ),
 }
-
-
-translatable("ExampleChain", "Example chains")
-
-
-def _tr(context, text):
-    return QCoreApplication.translate(context, text)
 
 
 class ExampleChain(QgsProcessingModelAlgorithm):
@@ -68,19 +61,19 @@ class ExampleChain(QgsProcessingModelAlgorithm):
         super().__init__()
         self.path = path
         self.loaded = self.fromFile(path)
-        for parameter in self.parameterDefinitions():  # labels from the .model3, extracted for the translators
-            parameter.setDescription(_tr("ExampleChain", parameter.description()))
+        for parameter in self.parameterDefinitions():  # labels from the .model3, marked in scripts/build_models.py
+            parameter.setDescription(QCoreApplication.translate("ExampleChain", parameter.description()))
 
     def displayName(self):  # noqa: N802
         entry = EXAMPLE_CHAINS.get(self.name())
-        return _tr("ExampleChain", entry[0]) if entry else super().displayName()
+        return QCoreApplication.translate("ExampleChain", entry[0]) if entry else super().displayName()
 
     def shortHelpString(self):  # noqa: N802
         entry = EXAMPLE_CHAINS.get(self.name())
-        return _tr("ExampleChain", entry[1]) if entry else super().shortHelpString()
+        return QCoreApplication.translate("ExampleChain", entry[1]) if entry else super().shortHelpString()
 
     def group(self):
-        return _tr("ExampleChain", "Example chains")  # marked below for the translators
+        return QCoreApplication.translate("ExampleChain", "Example chains")
 
     def groupId(self):  # noqa: N802
         return "examples"
@@ -118,6 +111,7 @@ class PlotwiseProvider(QgsProcessingProvider):
             self.addAlgorithm(model)
         else:
             QgsMessageLog.logMessage(
-                QCoreApplication.translate("PlotwiseProvider", "The example model {path} could not be read.").format(path=path),
+                QCoreApplication.translate("PlotwiseProvider", "The example model {path} could not be read.").format(
+                    path=path),
                 "Plotwise",
             )

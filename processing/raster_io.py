@@ -24,7 +24,7 @@ import numpy as np
 from osgeo import gdal, gdal_array, ogr, osr
 
 from .engine import stratification as strat
-from .engine.errors import Cancelled, InputError, message
+from .engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 
 gdal.UseExceptions()
 ogr.UseExceptions()
@@ -91,10 +91,12 @@ def _open(cov):
     try:
         ds = gdal.Open(cov.path)
     except RuntimeError as exc:
-        raise InputError(message("Covariate '{name}' cannot be read ({error}). Check the file.", name=cov.name,
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Covariate '{name}' cannot be read ({error}). Check the file."), name=cov.name,
                                  error=str(exc)))
     if ds is None or not (1 <= cov.band <= ds.RasterCount):
-        raise InputError(message("Covariate '{name}' has no band {band}.", name=cov.name, band=int(cov.band)))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Covariate '{name}' has no band {band}."), name=cov.name, band=int(cov.band)))
     gt = ds.GetGeoTransform()
     if gt[2] or gt[4]:
         ds = gdal.Warp("", ds, format="VRT")  # rotated grid: make it north-up
@@ -194,7 +196,7 @@ class CovariateStack:
 
     def __init__(self, covariates, frame_wkb, crs_wkt, categorical=False, block_cells=BLOCK_CELLS, workdir=None):
         if not covariates:
-            raise InputError(message("Give at least one raster in COVARIATES."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Give at least one raster in COVARIATES.")))
         self.covariates = list(covariates)
         self.names = [c.name for c in self.covariates]
         self.crs_wkt = crs_wkt
@@ -226,7 +228,7 @@ class CovariateStack:
         geoms = [ogr.CreateGeometryFromWkb(bytes(w)) for w in frame_wkb]
         geoms = [g for g in geoms if g is not None and not g.IsEmpty()]
         if not geoms:
-            raise InputError(message("The frame has no polygon."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The frame has no polygon.")))
         frame = ogr.Geometry(ogr.wkbMultiPolygon)
         for g in geoms:
             for part in (g if g.GetGeometryType() in (ogr.wkbMultiPolygon, ogr.wkbMultiPolygon25D) else [g]):
@@ -270,8 +272,9 @@ class CovariateStack:
         self.n_blocks = len(self._windows)
 
     def _no_overlap(self):
-        return InputError(message("The frame does not overlap covariate '{name}' ({path}). Use a raster that covers "
-                                  "the frame, or check both layers' CRS.", name=self.covariates[0].name,
+        return InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The frame does not overlap covariate '{name}' ({path}). Use a raster that covers "
+            "the frame, or check both layers' CRS."), name=self.covariates[0].name,
                                   path=self.covariates[0].path))
 
     def _reader_for(self, cov):
@@ -435,7 +438,8 @@ class StratumRaster:
         opts = ["TILED=YES", "BIGTIFF=IF_SAFER"] + _fast_compression()
         self.ds = gdal.GetDriverByName("GTiff").Create(path, grid.width, grid.height, 1, gdal.GDT_Byte, opts)
         if self.ds is None:
-            raise InputError(message("Cannot write the stratum raster '{path}'.", path=path))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Cannot write the stratum raster '{path}'."), path=path))
         self.ds.SetGeoTransform(grid.geotransform)
         self.ds.SetProjection(grid.crs_wkt)
         self.band = self.ds.GetRasterBand(1)
@@ -801,29 +805,30 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
                                                 progress=strat.scaled_progress(progress, 0.84, 0.9))
             lut, order = strat.stratum_order(stats)
             if order.size < 2:
-                raise InputError(message(
+                raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there "
-                    "is nothing to stratify. Lower MIN_AREA.", min_area=min_area_ha))
+                    "is nothing to stratify. Lower MIN_AREA."), min_area=min_area_ha))
             provisional = res.provisional
             r2_before = float(res.statistics.r_squared()[0])
             if not np.array_equal(lut, np.arange(lut.size)):
                 if order.size < stats.n_strata:
-                    warnings.append(message("{merged} strata consisted only of patches below MIN_AREA and were "
-                                            "merged away.", merged=int(stats.n_strata - order.size)))
+                    warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                        "{merged} strata consisted only of patches below MIN_AREA and were "
+                        "merged away."), merged=int(stats.n_strata - order.size)))
                 remap_strata(output_raster, lut)
                 stats, provisional = stats.reordered(order), provisional[order]
             res = res.with_statistics(stats, provisional)
             r2_after = float(stats.r_squared()[0])
             if np.isfinite(r2_before) and np.isfinite(r2_after) and r2_after < r2_before - R2_LOSS_WARNING:
-                warnings.append(message(
+                warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "Merging the patches below MIN_AREA moved cells between strata: the share of the variance of "
                     "'{name}' that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA "
-                    "keeps the strata closer to the covariates.", name=names[0], before=r2_before, after=r2_after))
+                    "keeps the strata closer to the covariates."), name=names[0], before=r2_before, after=r2_after))
             if patches.left:
-                warnings.append(message(
+                warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no "
                     "other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from "
-                    "the frame, fill the NoData in the covariates, or lower MIN_AREA.",
+                    "the frame, fill the NoData in the covariates, or lower MIN_AREA."),
                     n=patches.left, ha=patches.left_cells * stack.cell_area / 10000.0, min_area=min_area_ha))
         polygons = polygonise_strata(output_raster, res.n_strata, strat.scaled_progress(progress, 0.9, 1.0))
         ca = stack.cell_area / 10000.0
@@ -832,9 +837,10 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
         on_grid = stack.frame_area_on_grid / stack.frame_area if stack.frame_area > 0 else 0.0
         coverage = on_grid * res.cells_valid / res.cells_in_frame if res.cells_in_frame else 0.0
         if res.cells_nodata or on_grid < 1 - 1e-6:
-            warnings.append(message("The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie "
-                                    "outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one "
-                                    "covariate; the strata speak for the covered part only.",
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie "
+                "outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one "
+                "covariate; the strata speak for the covered part only."),
                                     percent=100 * coverage, outside_ha=outside_ha, nodata_ha=res.cells_nodata * ca))
         labels = strat.stratum_labels(res, names, units)
         return RasterStratification(res, names, units, labels, stack.grid, polygons,
@@ -858,8 +864,9 @@ def read_surface_window(path, name, surface_wkt, target_wkt, target_label, bound
     try:
         dataset = gdal.Open(path)
     except RuntimeError as error:
-        raise InputError(message("The density surface '{name}' cannot be read by GDAL ({error}). Save it as a "
-                                 "GeoTIFF first.", name=name, error=error)) from None
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The density surface '{name}' cannot be read by GDAL ({error}). Save it as a "
+            "GeoTIFF first."), name=name, error=error)) from None
     minx, miny, maxx, maxy = bounds
     gt = dataset.GetGeoTransform()
     if same_crs(surface_wkt, target_wkt) and gt[2] == 0 and gt[4] == 0 and gt[5] < 0:
@@ -869,15 +876,17 @@ def read_surface_window(path, name, surface_wkt, target_wkt, target_label, bound
         r0 = max(0, int(math.floor((gt[3] - maxy) / -gt[5])) - 1)
         r1 = min(dataset.RasterYSize, int(math.ceil((gt[3] - miny) / -gt[5])) + 1)
         if c1 <= c0 or r1 <= r0:
-            raise InputError(message("The density surface '{name}' does not overlap the sampling frame. Check that "
-                                     "both cover the same area.", name=name))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The density surface '{name}' does not overlap the sampling frame. Check that "
+                "both cover the same area."), name=name))
         values, _ = read_window(band, c0, r0, c1 - c0, r1 - r0)
         return values, (gt[0] + c0 * gt[1], gt[1], 0.0, gt[3] + r0 * gt[5], 0.0, gt[5]), False
     try:
         warped = gdal.Warp("", dataset, format="MEM", dstSRS=target_wkt, outputBounds=(minx, miny, maxx, maxy),
                            resampleAlg="bilinear", outputType=gdal.GDT_Float64, dstNodata=float("nan"))
     except RuntimeError as error:
-        raise InputError(message("The density surface '{name}' could not be warped to {crs} ({error}).",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The density surface '{name}' could not be warped to {crs} ({error})."),
                                  name=name, crs=target_label, error=error)) from None
     values = warped.GetRasterBand(1).ReadAsArray().astype(np.float64)
     return values, tuple(warped.GetGeoTransform()), True

@@ -23,7 +23,7 @@ import pyproj
 from osgeo import gdal, ogr, osr
 from shapely import wkb
 
-from .engine.errors import Cancelled, InputError, message
+from .engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .raster_io import GdalProgress, read_window, same_crs
 
 #: Upper limit on the number of cells read over the extent (about 0.6 GB at peak).
@@ -99,7 +99,8 @@ def _open(source):
     except RuntimeError:  # GDAL with exceptions enabled
         ds = None
     if ds is None:
-        raise InputError(message("The mask raster (MASK) '{source}' cannot be opened by GDAL.", source=str(source)))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The mask raster (MASK) '{source}' cannot be opened by GDAL."), source=str(source)))
     return ds
 
 
@@ -126,9 +127,9 @@ def _read_aligned(ds, band_no, extent):
 
 def _check_size(rows, cols):
     if rows * cols > MAX_CELLS:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The mask raster (MASK) would need {rows} x {cols} cells over the study area; "
-            "that is more than {max_cells:,}. Resample the raster to coarser cells first.",
+            "that is more than {max_cells:,}. Resample the raster to coarser cells first."),
             rows=rows, cols=cols, max_cells=MAX_CELLS,
         ))
 
@@ -137,7 +138,8 @@ def _target_resolution(ds, target_wkt):
     """Cell size GDAL suggests for ``ds`` in the target CRS (square cells)."""
     vrt = gdal.AutoCreateWarpedVRT(ds, None, target_wkt, gdal.GRA_NearestNeighbour)
     if vrt is None:
-        raise InputError(message("The mask raster (MASK) cannot be reprojected to the computation CRS."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The mask raster (MASK) cannot be reprojected to the computation CRS.")))
     gt = vrt.GetGeoTransform()
     return float(min(abs(gt[1]), abs(gt[5])))
 
@@ -165,7 +167,8 @@ def _read_warped(ds, band_no, extent, target_wkt, resolution=None):
     )
     out = gdal.Warp("", single, options=options)
     if out is None:
-        raise InputError(message("The mask raster (MASK) cannot be reprojected to the computation CRS."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The mask raster (MASK) cannot be reprojected to the computation CRS.")))
     values = out.GetRasterBand(1).ReadAsArray().astype(float)
     covered = out.GetRasterBand(2).ReadAsArray() > 0
     values[~covered] = np.nan
@@ -195,7 +198,8 @@ def _polygonize(masked, geotransform, target_wkt, progress=None):
         raise
     callback.check()
     if err != 0:
-        raise InputError(message("GDAL could not turn the masked raster cells into polygons."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "GDAL could not turn the masked raster cells into polygons.")))
     polygons = []
     layer.ResetReading()
     for feat in layer:
@@ -235,13 +239,14 @@ def mask_polygons(
     RasterMask
     """
     if mask_min is not None and mask_max is not None and mask_min > mask_max:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be "
-            "kept. Swap the two values or leave one of them empty.", mask_min=mask_min, mask_max=mask_max,
+            "kept. Swap the two values or leave one of them empty."), mask_min=mask_min, mask_max=mask_max,
         ))
     ds = _open(source)
     if band < 1 or band > ds.RasterCount:
-        raise InputError(message("The mask raster (MASK) has no band {band}; it has {count}.", band=band,
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The mask raster (MASK) has no band {band}; it has {count}."), band=band,
                                  count=ds.RasterCount))
     target = pyproj.CRS.from_user_input(crs)
     target_wkt = target.to_wkt()

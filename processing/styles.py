@@ -70,10 +70,6 @@ except AttributeError:
     _NO_GEOMETRY = QgsFeatureRequest.NoGeometry
 
 
-def _tr(text):
-    return QCoreApplication.translate("PlotwiseStyles", text)
-
-
 # -- building blocks -------------------------------------------------------------------
 def colour_ramp(colours):
     """A ``QgsGradientColorRamp`` through ``colours`` at even steps."""
@@ -221,8 +217,8 @@ def units(layer, label=True):
         renderer = QgsSingleSymbolRenderer(primary)
     else:
         categories = [
-            QgsRendererCategory("primary", primary, _tr("primary unit")),
-            QgsRendererCategory("reserve", reserve, _tr("reserve unit")),
+            QgsRendererCategory("primary", primary, QCoreApplication.translate("PlotwiseStyles", "primary unit")),
+            QgsRendererCategory("reserve", reserve, QCoreApplication.translate("PlotwiseStyles", "reserve unit")),
         ]
         others = [v for v in _unique(layer, "role") if v not in ("primary", "reserve")]
         for i, value in enumerate(others, start=4):
@@ -265,8 +261,8 @@ def estimate(layer, area_unit="km²", field="dens", classes=DENSITY_CLASSES):
     few strata). Strata without an estimate (no surveyed unit) are drawn pale grey and
     labelled so, instead of vanishing from the map.
     """
-    per = _tr("per {unit}").format(unit=area_unit)
-    title = _tr("Density (animals {per})").format(per=per)
+    per = QCoreApplication.translate("PlotwiseStyles", "per {unit}").format(unit=area_unit)
+    title = QCoreApplication.translate("PlotwiseStyles", "Density (animals {per})").format(per=per)
     layer.setTitle(title)
     index = layer.fields().lookupField(field)
     values = set()
@@ -296,7 +292,7 @@ def estimate(layer, area_unit="km²", field="dens", classes=DENSITY_CLASSES):
         root = rules.rootRule()
         other = QgsRuleBasedRenderer.Rule(_fill(NO_ESTIMATE_COLOUR, outline=INK, width=0.3, style="dense5"))
         other.setIsElse(True)
-        other.setLabel(_tr("no estimate (no surveyed unit)"))
+        other.setLabel(QCoreApplication.translate("PlotwiseStyles", "no estimate (no surveyed unit)"))
         root.appendChild(other)
         return _finish(layer, rules)
     return _finish(layer, renderer)
@@ -352,7 +348,9 @@ STYLES = {
     "terrain": lambda layer: pseudocolour(layer, ELEVATION_RAMP, decimals=0),
     "elevation": lambda layer: pseudocolour(layer, ELEVATION_RAMP, decimals=0, suffix=" m"),
     "greenness": lambda layer: pseudocolour(layer, GREENNESS_RAMP, decimals=2),
-    "intensity": lambda layer: pseudocolour(layer, DENSITY_RAMP, decimals=0, suffix=" " + _tr("per {unit}").format(unit="km²")),
+    "intensity": lambda layer: pseudocolour(
+        layer, DENSITY_RAMP, decimals=0,
+        suffix=" " + QCoreApplication.translate("PlotwiseStyles", "per {unit}").format(unit="km²")),
     "strata_raster": raster_classes,
 }
 
@@ -405,7 +403,9 @@ class StylePostProcessor(QgsProcessingLayerPostProcessorInterface):
         except Exception as error:  # noqa: BLE001 (a style problem must never fail the run)
             if feedback is not None:
                 feedback.pushWarning(
-                    _tr("The layer {name} could not be styled ({error}); it keeps the default style.").format(
+                    QCoreApplication.translate(
+                        "PlotwiseStyles",
+                        "The layer {name} could not be styled ({error}); it keeps the default style.").format(
                         name=layer.name() if layer is not None else "?", error=error)
                 )
 

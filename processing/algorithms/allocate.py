@@ -285,50 +285,49 @@ class Allocate(PlotwiseAlgorithm):
 
     def _report(self, result, labels, layer, crs, unit_area_m2, sd_field, sd_proxy, mean_field, cost_field,
                 cost_in_days, settings, warnings):
-        tr = self.tr
         p = result.precision
         with_mean = mean_field is not None
         with_sd = sd_field is not None
         # density SE per km² (areas are in ha in the engine)
         se_km2 = p.se_density / KM2_PER_HA
-        report = self.new_report(tr("Allocation of survey effort"))
+        report = self.new_report(self.tr("Allocation of survey effort"))
         method_names = self._method_names()
-        cost_unit = tr("field days") if cost_in_days else tr("cost units")
-        figures = [(tr("units in total"), f"{result.total:,}"), (tr("method"), method_names[result.method_used])]
+        cost_unit = self.tr("field days") if cost_in_days else self.tr("cost units")
+        figures = [(self.tr("units in total"), f"{result.total:,}"), (self.tr("method"), method_names[result.method_used])]
         if with_mean and np.isfinite(p.cv):
-            figures.append((tr("expected CV of the overall density"), f"{p.cv:.3f}"))
+            figures.append((self.tr("expected CV of the overall density"), f"{p.cv:.3f}"))
         if cost_field:
-            figures.append((tr("field days needed") if cost_in_days else tr("cost"), f"{result.cost:,.1f}"))
+            figures.append((self.tr("field days needed") if cost_in_days else self.tr("cost"), f"{result.cost:,.1f}"))
         report.key_figures(figures)
-        targets = {"total": tr("a total number of units"), "budget": tr("a budget"), "target_cv": tr("a target CV")}
+        targets = {"total": self.tr("a total number of units"), "budget": self.tr("a budget"), "target_cv": self.tr("a target CV")}
         report.parameters({
-            tr("Strata layer"): layer,
-            tr("Computation CRS"): crs.authid(),
-            tr("Method asked for"): method_names[result.method],
-            tr("Method applied"): method_names[result.method_used],
-            tr("Target"): targets[result.target],
-            tr("Total asked for"): settings["total"] if result.target == "total" else "–",
-            tr("Budget"): settings["budget"] if result.target == "budget" else "–",
-            tr("Target CV"): settings["target_cv"] if result.target == "target_cv" else "–",
-            tr("Unit area (m²)"): unit_area_m2,
-            tr("Minimum units per stratum"): settings["min_per_stratum"],
-            tr("SD field"): (sd_field + (tr(" (covariate proxy)") if sd_proxy else "")) if with_sd else "–",
-            tr("Mean field"): mean_field or "–",
-            tr("Cost field"): (f"{cost_field} ({cost_unit})" if cost_field else "–"),
-            tr("Fixed cost c0"): settings["fixed_cost"] if cost_field else "–",
+            self.tr("Strata layer"): layer,
+            self.tr("Computation CRS"): crs.authid(),
+            self.tr("Method asked for"): method_names[result.method],
+            self.tr("Method applied"): method_names[result.method_used],
+            self.tr("Target"): targets[result.target],
+            self.tr("Total asked for"): settings["total"] if result.target == "total" else "–",
+            self.tr("Budget"): settings["budget"] if result.target == "budget" else "–",
+            self.tr("Target CV"): settings["target_cv"] if result.target == "target_cv" else "–",
+            self.tr("Unit area (m²)"): unit_area_m2,
+            self.tr("Minimum units per stratum"): settings["min_per_stratum"],
+            self.tr("SD field"): (sd_field + (self.tr(" (covariate proxy)") if sd_proxy else "")) if with_sd else "–",
+            self.tr("Mean field"): mean_field or "–",
+            self.tr("Cost field"): (f"{cost_field} ({cost_unit})" if cost_field else "–"),
+            self.tr("Fixed cost c0"): settings["fixed_cost"] if cost_field else "–",
         })
         report.warnings(warnings)
 
-        report.section(tr("Units per stratum"))
-        se_label = tr("SE of mean per unit (covariate units)") if sd_proxy else tr("SE of mean count per unit")
-        header = [tr("Stratum"), tr("Units that fit"), tr("Lower bound"), tr("Share before rounding"),
-                  tr("Units (n_alloc)"), tr("Sampling fraction")]
+        report.section(self.tr("Units per stratum"))
+        se_label = self.tr("SE of mean per unit (covariate units)") if sd_proxy else self.tr("SE of mean count per unit")
+        header = [self.tr("Stratum"), self.tr("Units that fit"), self.tr("Lower bound"), self.tr("Share before rounding"),
+                  self.tr("Units (n_alloc)"), self.tr("Sampling fraction")]
         if with_sd:
             header.append(se_label)
             if not sd_proxy:
-                header.append(tr("SE of density (per km²)"))
+                header.append(self.tr("SE of density (per km²)"))
         if with_mean:
-            header.append(tr("Expected CV (exp_cv)"))
+            header.append(self.tr("Expected CV (exp_cv)"))
         rows = []
         for h, label in enumerate(labels):
             row = [str(label), int(result.upper[h]), int(result.lower[h]), float(result.n_continuous[h]),
@@ -340,7 +339,7 @@ class Allocate(PlotwiseAlgorithm):
             if with_mean:
                 row.append(float(p.stratum_cv[h]))
             rows.append(row)
-        overall = [tr("all strata"), int(result.upper.sum()), int(result.lower.sum()),
+        overall = [self.tr("all strata"), int(result.upper.sum()), int(result.lower.sum()),
                    float(result.n_continuous.sum()), int(result.total), float(result.total / result.capacity.sum())]
         if with_sd:
             overall.append(float(p.se_mean))
@@ -351,27 +350,27 @@ class Allocate(PlotwiseAlgorithm):
         rows.append(overall)
         report.table(header, rows)
         report.figure(
-            svg.bar_chart_svg([str(label) for label in labels], [int(v) for v in result.n], tr("units per stratum")),
-            tr("Units allocated to each stratum"),
+            svg.bar_chart_svg([str(label) for label in labels], [int(v) for v in result.n], self.tr("units per stratum")),
+            self.tr("Units allocated to each stratum"),
         )
-        report.note(tr(
+        report.note(self.tr(
             "Expected precision uses the pilot figures as if they were the truth, with the finite-population "
             "correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds."
         ))
         if cost_field:
             report.paragraph(
-                tr("{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.").format(
-                    what=tr("Field days needed") if cost_in_days else tr("Cost of the design"),
+                self.tr("{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.").format(
+                    what=self.tr("Field days needed") if cost_in_days else self.tr("Cost of the design"),
                     c0=settings["fixed_cost"], var=result.cost - settings["fixed_cost"], total=result.cost,
                     unit=cost_unit)
             )
 
-        report.section(tr("What the choice of method buys, at {n} units").format(n=result.total))
-        header = [tr("Method")] + [tr("stratum {label}").format(label=label) for label in labels]
+        report.section(self.tr("What the choice of method buys, at {n} units").format(n=result.total))
+        header = [self.tr("Method")] + [self.tr("stratum {label}").format(label=label) for label in labels]
         if with_sd:
-            header += [se_label, tr("Variance relative to the applied allocation")]
+            header += [se_label, self.tr("Variance relative to the applied allocation")]
         if with_mean:
-            header.append(tr("Expected CV"))
+            header.append(self.tr("Expected CV"))
         rows = []
         for row in result.comparison:
             cells = [method_names[row.method]] + [int(v) for v in row.n]
@@ -382,7 +381,7 @@ class Allocate(PlotwiseAlgorithm):
             rows.append(cells)
         report.table(header, rows)
         if not with_sd:
-            report.paragraph(tr("Without standard deviations the precision of the designs cannot be compared."))
+            report.paragraph(self.tr("Without standard deviations the precision of the designs cannot be compared."))
         report.references(REFERENCES)
         report.field_safety()
         return report

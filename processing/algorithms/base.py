@@ -8,28 +8,23 @@ from qgis.core import (
     QgsProcessingParameterFileDestination,
     QgsProcessingParameterNumber,
 )
-from qgis.PyQt.QtCore import QCoreApplication
+from qgis.PyQt.QtCore import QT_TRANSLATE_NOOP, QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
 from ...plugin import compat
 from ..translation import active_language
-from ..engine.errors import Cancelled, InputError, Message
+from ..engine.errors import ENGINE_CONTEXT, Cancelled, InputError, Message
 from ..engine.rng import make_rng
 from ..report import Report
 from .. import styles
 
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__)))), "plugin", "icons", "plotwise.svg")
 
-def translatable(context, text):
-    """Mark ``text`` for extraction into the .ts files; it is translated where it is shown."""
-    return text
-
-
 # group id -> display name (translated in group())
 GROUPS = {
-    "design": translatable("PlotwiseAlgorithm", "Survey design"),
-    "estimation": translatable("PlotwiseAlgorithm", "Estimation"),
-    "training": translatable("PlotwiseAlgorithm", "Demo and training"),
+    "design": QT_TRANSLATE_NOOP("PlotwiseAlgorithm", "Survey design"),
+    "estimation": QT_TRANSLATE_NOOP("PlotwiseAlgorithm", "Estimation"),
+    "training": QT_TRANSLATE_NOOP("PlotwiseAlgorithm", "Demo and training"),
 }
 
 
@@ -42,8 +37,14 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
     REPORT = "REPORT"
 
     # -- host boilerplate ----------------------------------------------------------
-    def tr(self, text, context=None):
-        return QCoreApplication.translate(context or type(self).__name__, text)
+    def tr(self, text):
+        """``text`` in the user's language, in the context of the algorithm's class.
+
+        pylupdate5 files ``self.tr("…")`` under the name of the class the call is written in, so call
+        it with a literal in the algorithm's own class; the shared code of this base class uses
+        ``QCoreApplication.translate("PlotwiseAlgorithm", "…")``.
+        """
+        return QCoreApplication.translate(type(self).__name__, text)
 
     def createInstance(self):  # noqa: N802 (host naming)
         return type(self)()
@@ -68,7 +69,7 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
         self.addParameter(
             QgsProcessingParameterNumber(
                 self.SEED,
-                self.tr("Random seed (0 draws one and records it)", "PlotwiseAlgorithm"),
+                QCoreApplication.translate("PlotwiseAlgorithm", "Random seed (0 draws one and records it)"),
                 type=compat.NUMBER_INTEGER,
                 defaultValue=default,
                 minValue=0,
@@ -80,8 +81,8 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
         self.addParameter(
             QgsProcessingParameterFileDestination(
                 self.REPORT,
-                self.tr("Report (HTML)", "PlotwiseAlgorithm"),
-                self.tr("HTML files (*.html)", "PlotwiseAlgorithm"),
+                QCoreApplication.translate("PlotwiseAlgorithm", "Report (HTML)"),
+                QCoreApplication.translate("PlotwiseAlgorithm", "HTML files (*.html)"),
                 createByDefault=True,
                 optional=True,
             )
@@ -92,7 +93,7 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
         """The run's one generator; logs the seed actually used."""
         seed = self.parameterAsInt(parameters, self.SEED, context)
         seeded = make_rng(seed)
-        feedback.pushInfo(self.tr("Seed used: {seed}", "PlotwiseAlgorithm").format(seed=seeded.seed))
+        feedback.pushInfo(QCoreApplication.translate("PlotwiseAlgorithm", "Seed used: {seed}").format(seed=seeded.seed))
         return seeded
 
     @staticmethod
@@ -118,11 +119,18 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
 
     def cancelled_error(self):
         """The exception a cancelled run ends with."""
-        return QgsProcessingException(self.tr("Cancelled by the user. No result was written.", "PlotwiseAlgorithm"))
+        return QgsProcessingException(
+            QCoreApplication.translate("PlotwiseAlgorithm", "Cancelled by the user. No result was written."))
 
     def style_output(self, context, dest_id, style_name, **options):
         """Style output ``dest_id`` (a name from ``processing.styles.STYLES``) when the host loads it."""
         return styles.style_on_completion(context, dest_id, style_name, **options)
+
+    @staticmethod
+    def engine_term(text):
+        """A term the engine marks with ``QT_TRANSLATE_NOOP("PlotwiseEngine", …)`` (a design or shape name,
+        the demo species), in the user's language."""
+        return QCoreApplication.translate(ENGINE_CONTEXT, text)
 
     def translate_message(self, item):
         """The user's-language text of an engine :class:`Message` (context ``PlotwiseEngine``); a str as is."""
@@ -130,7 +138,7 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
             return item
         values = {name: self.translate_message(value) for name, value in item.values}
         try:
-            return QCoreApplication.translate("PlotwiseEngine", item.template).format(**values)
+            return QCoreApplication.translate(ENGINE_CONTEXT, item.template).format(**values)
         except (KeyError, IndexError, ValueError):  # a broken translation: the English text
             return str(item)
 
@@ -154,7 +162,7 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
             feedback.pushWarning(self.translate_message(warning))
 
     def new_report(self, title):
-        return Report(title, algorithm_id=f"plotwise:{self.name()}", translate=lambda s: self.tr(s, "PlotwiseReport"),
+        return Report(title, algorithm_id=f"plotwise:{self.name()}", translate=QCoreApplication.translate,
                       language=active_language())
 
     def write_report(self, report, parameters, context, feedback):
@@ -163,5 +171,5 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
         if not path:
             return None
         report.write(path)
-        feedback.pushInfo(self.tr("Report written to {path}", "PlotwiseAlgorithm").format(path=path))
+        feedback.pushInfo(QCoreApplication.translate("PlotwiseAlgorithm", "Report written to {path}").format(path=path))
         return path

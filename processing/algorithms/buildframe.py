@@ -266,63 +266,62 @@ class BuildFrame(PlotwiseAlgorithm):
 
     # -- report ----------------------------------------------------------------------
     def _report(self, result, study_union, exclusions, mask, raster, crs, projected_from, warnings, inputs):
-        tr = self.tr
-        report = self.new_report(tr("Sampling frame"))
+        report = self.new_report(self.tr("Sampling frame"))
         report.field_safety()
         report.warnings(warnings)
         study_ha = result.study_area_m2 / 1e4
         report.key_figures([
-            (tr("study area (ha)"), format_number(study_ha)),
-            (tr("frame (ha)"), format_number(result.area_ha)),
-            (tr("kept"), f"{format_number(100 * result.kept_fraction)} %"),
+            (self.tr("study area (ha)"), format_number(study_ha)),
+            (self.tr("frame (ha)"), format_number(result.area_ha)),
+            (self.tr("kept"), f"{format_number(100 * result.kept_fraction)} %"),
         ])
         report.note(
-            tr("Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the "
+            self.tr("Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the "
                "whole study area.").format(ha=format_number(result.area_ha))
         )
-        report.section(tr("Area kept and area lost to each rule"))
+        report.section(self.tr("Area kept and area lost to each rule"))
         rule_names = {
-            "exclude": tr("lost to the excluded polygons (EXCLUDE)"),
-            "mask": tr("lost to the raster mask (MASK outside the accepted range, or NoData)"),
-            "edge_buffer": tr("lost to the inward edge buffer (EDGE_BUFFER)"),
+            "exclude": self.tr("lost to the excluded polygons (EXCLUDE)"),
+            "mask": self.tr("lost to the raster mask (MASK outside the accepted range, or NoData)"),
+            "edge_buffer": self.tr("lost to the inward edge buffer (EDGE_BUFFER)"),
         }
-        rows = [[tr("study area"), study_ha, 100.0]]
+        rows = [[self.tr("study area"), study_ha, 100.0]]
         for loss in result.losses:
             rows.append([rule_names[loss.rule], loss.area_ha, 100 * loss.area_m2 / result.study_area_m2])
-        rows.append([tr("sampling frame (kept)"), result.area_ha, 100 * result.kept_fraction])
-        report.table([tr("Item"), tr("Area (ha)"), tr("% of study area")], rows)
+        rows.append([self.tr("sampling frame (kept)"), result.area_ha, 100 * result.kept_fraction])
+        report.table([self.tr("Item"), self.tr("Area (ha)"), self.tr("% of study area")], rows)
         report.paragraph(
-            tr("Rules are applied in the order shown; each is charged only with area that was still in "
+            self.tr("Rules are applied in the order shown; each is charged only with area that was still in "
                "the frame, so the frame and the areas lost add up to the study area.")
         )
         if raster is not None:
-            report.subsection(tr("Mask raster"))
-            report.table([tr("Item"), tr("Value")], [
-                [tr("cells tested over the study area's extent"), raster.total_cells],
-                [tr("cell size (m)"), raster.cell_area_m2 ** 0.5],
-                [tr("cells below the lowest accepted value"), raster.below_cells],
-                [tr("cells above the highest accepted value"), raster.above_cells],
-                [tr("NoData cells (including cells outside the raster)"), raster.nodata_cells],
-                [tr("reprojected on the fly (nearest neighbour)"), tr("yes") if raster.warped else tr("no")],
+            report.subsection(self.tr("Mask raster"))
+            report.table([self.tr("Item"), self.tr("Value")], [
+                [self.tr("cells tested over the study area's extent"), raster.total_cells],
+                [self.tr("cell size (m)"), raster.cell_area_m2 ** 0.5],
+                [self.tr("cells below the lowest accepted value"), raster.below_cells],
+                [self.tr("cells above the highest accepted value"), raster.above_cells],
+                [self.tr("NoData cells (including cells outside the raster)"), raster.nodata_cells],
+                [self.tr("reprojected on the fly (nearest neighbour)"), self.tr("yes") if raster.warped else self.tr("no")],
             ])
 
-        report.section(tr("Map"))
-        report.figure(self._map(result, study_union, exclusions, mask), tr("Frame (filled), with the areas lost to each rule"))
+        report.section(self.tr("Map"))
+        report.figure(self._map(result, study_union, exclusions, mask), self.tr("Frame (filled), with the areas lost to each rule"))
 
         def shown(value):
-            return tr("(none)") if value is None else value
+            return self.tr("(none)") if value is None else value
 
         crs_text = f"{crs.authid()} ({crs.description()})"
         if projected_from:
-            crs_text += tr(", projected from {src} (UTM zone of the study area's centre)").format(src=projected_from)
+            crs_text += self.tr(", projected from {src} (UTM zone of the study area's centre)").format(src=projected_from)
         report.parameters({
-            tr("Study area (INPUT)"): inputs["study"],
-            tr("Areas to exclude (EXCLUDE)"): shown(inputs["exclude"]),
-            tr("Mask raster (MASK)"): shown(inputs["mask"]),
-            tr("Lowest accepted mask value (MASK_MIN)"): shown(inputs["mask_min"]),
-            tr("Highest accepted mask value (MASK_MAX)"): shown(inputs["mask_max"]),
-            tr("Inward edge buffer (EDGE_BUFFER, m)"): inputs["edge"],
-            tr("CRS of the computation and the output"): crs_text,
+            self.tr("Study area (INPUT)"): inputs["study"],
+            self.tr("Areas to exclude (EXCLUDE)"): shown(inputs["exclude"]),
+            self.tr("Mask raster (MASK)"): shown(inputs["mask"]),
+            self.tr("Lowest accepted mask value (MASK_MIN)"): shown(inputs["mask_min"]),
+            self.tr("Highest accepted mask value (MASK_MAX)"): shown(inputs["mask_max"]),
+            self.tr("Inward edge buffer (EDGE_BUFFER, m)"): inputs["edge"],
+            self.tr("CRS of the computation and the output"): crs_text,
         })
         return report
 

@@ -81,7 +81,7 @@ class CompareDesigns(PlotwiseAlgorithm):
 
     def design_name(self, design):
         """The name of design ``design`` (an index of ``engine.DESIGNS``) in the user's language."""
-        return self.tr(engine.DESIGNS[design])
+        return self.engine_term(engine.DESIGNS[design])
 
     def shortHelpString(self):  # noqa: N802 (host naming)
         return self.tr(
@@ -349,54 +349,53 @@ class CompareDesigns(PlotwiseAlgorithm):
 
     # ------------------------------------------------------------------------------
     def _report(self, comparison, curve, setup, settings, warnings):
-        tr = self.tr
-        report = self.new_report(tr("Survey designs compared by simulation"))
+        report = self.new_report(self.tr("Survey designs compared by simulation"))
         grid = setup.grid
         best = comparison.by_design(comparison.recommended) if comparison.recommended is not None else None
         figures = []
         if best is not None:
             figures += [
-                (tr("recommended design"), self.design_name(best.design)),
-                (tr("its RMSE (animals)"), f"{best.rmse:,.1f}"),
-                (tr("its RMSE relative to the total"), f"{best.rel_rmse:.1%}"),
-                (tr("its 95 % interval coverage"), f"{best.coverage:.0%}"),
+                (self.tr("recommended design"), self.design_name(best.design)),
+                (self.tr("its RMSE (animals)"), f"{best.rmse:,.1f}"),
+                (self.tr("its RMSE relative to the total"), f"{best.rel_rmse:.1%}"),
+                (self.tr("its 95 % interval coverage"), f"{best.coverage:.0%}"),
             ]
-        figures.append((tr("expected animals in the frame"), f"{grid.expected_total:,.0f}"))
+        figures.append((self.tr("expected animals in the frame"), f"{grid.expected_total:,.0f}"))
         report.key_figures(figures)
-        shapes = [tr("point station"), tr("square plot"), tr("circular plot"), tr("line transect")]
-        size_labels = [tr("counting radius"), tr("side"), tr("radius"), tr("length")]
+        shapes = [self.tr("point station"), self.tr("square plot"), self.tr("circular plot"), self.tr("line transect")]
+        size_labels = [self.tr("counting radius"), self.tr("side"), self.tr("radius"), self.tr("length")]
         shape = settings["shape"]
         unit_text = f"{shapes[shape]}, {size_labels[shape]} {settings['size']:g} m"
         if shape == LINE:
-            unit_text += tr(", strip half-width {w:g} m").format(w=settings["half_width"])
+            unit_text += self.tr(", strip half-width {w:g} m").format(w=settings["half_width"])
         params = {
-            tr("Density surface"): settings["surface"],
-            tr("Sampling frame"): settings["frame"],
-            tr("Strata"): settings["strata"] or tr("none"),
-            tr("Stratum field"): settings["stratum_field"] or ("–" if not settings["strata"] else tr("feature id")),
-            tr("Computation CRS"): settings["crs"],
-            tr("Surface cell"): f"{grid.cell_width:g} × {grid.cell_height:g} m",
-            tr("Sub-cells per cell side (for counting)"): setup.factor,
-            tr("Unit"): unit_text,
-            tr("Counted area per unit (m²)"): round(setup.region.area, 1),
-            tr("Bearing"): tr("random") if settings["bearing"] < 0 else f"{settings['bearing']:g}°",
-            tr("Units wholly inside their stratum"): tr("yes") if settings["inside"] else tr("no"),
-            tr("Number of units"): settings["n_units"],
-            tr("Simulated surveys per design"): settings["replicates"],
-            tr("Counts per cell"): (tr("negative binomial, k = {k:g}").format(k=settings["k"]) if settings["k"] > 0
-                                    else tr("Poisson")),
-            tr("Variance estimator (grid, balanced)"): (tr("local neighbourhood") if settings["variance_method"] == "local"
-                                                        else tr("simple random sampling formula")),
-            tr("Confidence level"): "95 %",
-            tr("Seed"): settings["seed"],
+            self.tr("Density surface"): settings["surface"],
+            self.tr("Sampling frame"): settings["frame"],
+            self.tr("Strata"): settings["strata"] or self.tr("none"),
+            self.tr("Stratum field"): settings["stratum_field"] or ("–" if not settings["strata"] else self.tr("feature id")),
+            self.tr("Computation CRS"): settings["crs"],
+            self.tr("Surface cell"): f"{grid.cell_width:g} × {grid.cell_height:g} m",
+            self.tr("Sub-cells per cell side (for counting)"): setup.factor,
+            self.tr("Unit"): unit_text,
+            self.tr("Counted area per unit (m²)"): round(setup.region.area, 1),
+            self.tr("Bearing"): self.tr("random") if settings["bearing"] < 0 else f"{settings['bearing']:g}°",
+            self.tr("Units wholly inside their stratum"): self.tr("yes") if settings["inside"] else self.tr("no"),
+            self.tr("Number of units"): settings["n_units"],
+            self.tr("Simulated surveys per design"): settings["replicates"],
+            self.tr("Counts per cell"): (self.tr("negative binomial, k = {k:g}").format(k=settings["k"]) if settings["k"] > 0
+                                    else self.tr("Poisson")),
+            self.tr("Variance estimator (grid, balanced)"): (self.tr("local neighbourhood") if settings["variance_method"] == "local"
+                                                        else self.tr("simple random sampling formula")),
+            self.tr("Confidence level"): "95 %",
+            self.tr("Seed"): settings["seed"],
         }
         report.parameters(params)
         report.warnings(warnings)
 
-        report.section(tr("How the designs did at {n} units").format(n=comparison.n_units))
-        header = [tr("Design"), tr("Mean units surveyed"), tr("Relative bias"), tr("Empirical SE (animals)"),
-                  tr("RMSE (animals)"), tr("± Monte Carlo SE"), tr("RMSE / total"), tr("Mean estimated CV"),
-                  tr("95 % interval coverage"), tr("Surveys without an estimate")]
+        report.section(self.tr("How the designs did at {n} units").format(n=comparison.n_units))
+        header = [self.tr("Design"), self.tr("Mean units surveyed"), self.tr("Relative bias"), self.tr("Empirical SE (animals)"),
+                  self.tr("RMSE (animals)"), self.tr("± Monte Carlo SE"), self.tr("RMSE / total"), self.tr("Mean estimated CV"),
+                  self.tr("95 % interval coverage"), self.tr("Surveys without an estimate")]
         rows = []
         for p in comparison.performance:
             name = self.design_name(p.design) + (" ★" if p.design == comparison.recommended else "")
@@ -408,40 +407,40 @@ class CompareDesigns(PlotwiseAlgorithm):
         noises = [v for v in noises if np.isfinite(v)]
         if noises:
             noise = max(noises)
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Each figure is itself an estimate from {reps} simulated surveys: relative biases within about "
                 "±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. "
                 "More surveys per design narrow both.").format(reps=settings["replicates"], noise=noise))
         names = [self.design_name(p.design) for p in comparison.performance]
         highlight = next((i for i, p in enumerate(comparison.performance) if p.design == comparison.recommended), None)
         report.figure(
-            svg.bar_chart_svg(names, [p.rmse for p in comparison.performance], tr("RMSE of the abundance (animals)"),
+            svg.bar_chart_svg(names, [p.rmse for p in comparison.performance], self.tr("RMSE of the abundance (animals)"),
                               highlight=highlight),
-            tr("Root mean square error of the abundance estimate, by design (lower is better)"),
+            self.tr("Root mean square error of the abundance estimate, by design (lower is better)"),
         )
-        report.section(tr("Recommendation"))
+        report.section(self.tr("Recommendation"))
         if best is None:
-            report.paragraph(tr("No design gave estimates: see the warnings."))
+            report.paragraph(self.tr("No design gave estimates: see the warnings."))
         else:
-            text = tr(
+            text = self.tr(
                 "{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true "
                 "total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the "
                 "time."
             ).format(name=self.design_name(best.design), rmse=best.rmse, rel=best.rel_rmse, total=best.mean_true)
             if comparison.near_best:
-                text += " " + tr(
+                text += " " + self.tr(
                     "{others} did about as well: the differences lie within the Monte Carlo error of the simulation. "
                     "Among these, choose the one that is easiest to carry out in the field."
                 ).format(others=", ".join(self.design_name(d) for d in comparison.near_best))
             report.paragraph(text)
             poor = [self.design_name(p.design) for p in comparison.performance if np.isfinite(p.coverage) and p.coverage < engine.ACCEPTABLE_COVERAGE]
             if poor:
-                report.paragraph(tr(
+                report.paragraph(self.tr(
                     "The intervals of {names} held the truth less than 90 % of the time: their stated precision would "
                     "mislead.").format(names=", ".join(poor)))
             if best.design == engine.SYSTEMATIC_GRID or any(
                     p.design == engine.SYSTEMATIC_GRID for p in comparison.performance):
-                report.note(tr(
+                report.note(self.tr(
                     "The systematic grid's number of units varies from survey to survey (mean shown). With the simple "
                     "random sampling formula its interval is usually conservative on smooth surfaces."))
 
@@ -450,8 +449,8 @@ class CompareDesigns(PlotwiseAlgorithm):
         if curve:
             self._curve_section(report, comparison, curve)
 
-        report.section(tr("How the simulation works"))
-        report.paragraph(tr(
+        report.section(self.tr("How the simulation works"))
+        report.paragraph(self.tr(
             "Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or "
             "negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. "
             "Every design is laid out with the layout engine, each unit counts the animals of the cells whose "
@@ -460,7 +459,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             "t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its "
             "own population."
         ))
-        report.note(tr(
+        report.note(self.tr(
             "Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals "
             "do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; "
             "use the comparison to rank designs and to size the effort, not as a promise of precision."
@@ -472,15 +471,14 @@ class CompareDesigns(PlotwiseAlgorithm):
         return report
 
     def _strata_section(self, report, comparison, setup):
-        tr = self.tr
-        report.section(tr("Strata"))
+        report.section(self.tr("Strata"))
         grid = setup.grid
         allocations = {plan.design: plan.allocation for plan in comparison.plans}
-        header = [tr("Stratum"), tr("Area (km²)"), tr("Mean expected count per unit"), tr("S_h (count SD per unit)")]
+        header = [self.tr("Stratum"), self.tr("Area (km²)"), self.tr("Mean expected count per unit"), self.tr("S_h (count SD per unit)")]
         if engine.STRATIFIED_PROPORTIONAL in allocations:
-            header.append(tr("Units, proportional"))
+            header.append(self.tr("Units, proportional"))
         if engine.STRATIFIED_NEYMAN in allocations:
-            header.append(tr("Units, Neyman"))
+            header.append(self.tr("Units, Neyman"))
         rows = []
         for i, st in enumerate(setup.strata.strata):
             row = [str(st.key), float(grid.stratum_areas_km2[setup.stratum_codes[i]]), float(setup.stratum_mean[i]),
@@ -490,35 +488,34 @@ class CompareDesigns(PlotwiseAlgorithm):
                     row.append(int(allocations[design][i]))
             rows.append(row)
         report.table(header, rows)
-        report.paragraph(tr(
+        report.paragraph(self.tr(
             "S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of "
             "the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) "
             "variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman "
             "1934; Cochran 1977, §5.5), with at least 2 per stratum.").format(draws=engine.SD_DRAWS))
 
     def _curve_section(self, report, comparison, curve):
-        tr = self.tr
-        report.section(tr("RMSE against the number of units"))
+        report.section(self.tr("RMSE against the number of units"))
         points = sorted([comparison] + [c for c in curve if c.n_units != comparison.n_units], key=lambda c: c.n_units)
         ns = [c.n_units for c in points]
         series = []
         for p in comparison.performance:
             series.append((self.design_name(p.design), [c.by_design(p.design).rmse for c in points]))
         report.figure(
-            svg.line_chart_svg(ns, series, tr("number of units"), tr("RMSE (animals)")),
-            tr("RMSE of the abundance estimate against the number of units"),
+            svg.line_chart_svg(ns, series, self.tr("number of units"), self.tr("RMSE (animals)")),
+            self.tr("RMSE of the abundance estimate against the number of units"),
         )
-        header = [tr("Units")] + [self.design_name(p.design) for p in comparison.performance]
+        header = [self.tr("Units")] + [self.design_name(p.design) for p in comparison.performance]
         rows = [[c.n_units] + [c.by_design(p.design).rmse for p in comparison.performance] for c in points]
-        report.table(header, rows, caption=tr("RMSE (animals)"))
+        report.table(header, rows, caption=self.tr("RMSE (animals)"))
         best = comparison.recommended if comparison.recommended is not None else comparison.performance[0].design
         values = [c.by_design(best).rmse for c in points]
         if len(points) >= 2 and all(np.isfinite(values)):
             gains = []
             for (a, va), (b, vb) in zip(zip(ns, values), zip(ns[1:], values[1:])):
-                gains.append(tr("{a} → {b} units: RMSE {change:+.0%}").format(a=a, b=b, change=vb / va - 1 if va > 0 else 0))
-            report.paragraph(tr("For {name}: ").format(name=self.design_name(best)) + "; ".join(gains) + ".")
-        report.note(tr(
+                gains.append(self.tr("{a} → {b} units: RMSE {change:+.0%}").format(a=a, b=b, change=vb / va - 1 if va > 0 else 0))
+            report.paragraph(self.tr("For {name}: ").format(name=self.design_name(best)) + "; ".join(gains) + ".")
+        report.note(self.tr(
             "The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve "
             "flattens, more units buy little; spend the effort on better counts (detection) or a better surface "
             "instead."))

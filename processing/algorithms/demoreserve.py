@@ -140,7 +140,7 @@ class DemoReserve(PlotwiseAlgorithm):
         report = self.new_report(self.tr("Demo reserve: {name}").format(name=demo_reserve.RESERVE_NAME))
         report.note(self.tr(
             "Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist."
-        ).format(name=demo_reserve.RESERVE_NAME, desc=self.tr(demo_reserve.SPECIES_DESCRIPTION)))
+        ).format(name=demo_reserve.RESERVE_NAME, desc=self.engine_term(demo_reserve.SPECIES_DESCRIPTION)))
         report.key_figures([
             (self.tr("reserve area"), f"{reserve.boundary.area / 1e6:,.1f} km²"),
             (self.tr("true number of velmar"), f"{reserve.true_total:,}"),

@@ -452,101 +452,100 @@ class Estimate(PlotwiseAlgorithm):
 
     # ------------------------------------------------------------------------------
     def _report(self, result, stratum_areas, frame_geoms, records, keep, unit_strata, warnings, info):
-        tr = self.tr
         o = result.overall
         per = info["area_unit"]
         presence = result.presence
-        what = tr("occupied units") if presence else tr("animals")
-        title = tr("Naive occupancy from presence data") if presence else tr("Density and abundance estimate")
+        what = self.tr("occupied units") if presence else self.tr("animals")
+        title = self.tr("Naive occupancy from presence data") if presence else self.tr("Density and abundance estimate")
         report = self.new_report(title)
         level = f"{result.confidence:.0%}"
-        dens_label = tr("proportion of units occupied (naive)") if presence else tr("density per {unit}").format(unit=per)
+        dens_label = self.tr("proportion of units occupied (naive)") if presence else self.tr("density per {unit}").format(unit=per)
         figures = [
-            (tr("estimated {what} in the frame").format(what=what), f"{o.abund:,.0f}"),
-            (tr("{level} interval").format(level=level), f"{o.abund_lo:,.0f} – {o.abund_hi:,.0f}"),
+            (self.tr("estimated {what} in the frame").format(what=what), f"{o.abund:,.0f}"),
+            (self.tr("{level} interval").format(level=level), f"{o.abund_lo:,.0f} – {o.abund_hi:,.0f}"),
             (dens_label, f"{o.dens:.3g}"),
-            (tr("CV"), "–" if not np.isfinite(o.cv) else f"{o.cv:.3f}"),
-            (tr("units surveyed"), f"{o.n:,}"),
+            (self.tr("CV"), "–" if not np.isfinite(o.cv) else f"{o.cv:.3f}"),
+            (self.tr("units surveyed"), f"{o.n:,}"),
         ]
         if info["true_total"]:
-            figures.append((tr("true total of the simulated population"), f"{info['true_total']:,.0f}"))
+            figures.append((self.tr("true total of the simulated population"), f"{info['true_total']:,.0f}"))
         report.key_figures(figures)
         if info["true_total"]:
             truth = info["true_total"]
             inside = o.abund_lo <= truth <= o.abund_hi
-            report.note(tr(
+            report.note(self.tr(
                 "Simulation only: the true total ({truth:,.0f}) is known here because the population was "
                 "simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval "
                 "{verdict} the truth. Only a simulation can show this; a real survey never knows its true total, "
                 "and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).").format(
                 truth=truth, est=o.abund, error=o.abund / truth - 1, level=level,
-                verdict=tr("covers") if inside else tr("misses"), miss=1 - result.confidence))
+                verdict=self.tr("covers") if inside else self.tr("misses"), miss=1 - result.confidence))
 
-        ci_names = {"t": tr("t with Satterthwaite degrees of freedom"), "lognormal": tr("log-normal"),
-                    "bootstrap": tr("stratified percentile bootstrap")}
-        variance_names = {"srs": tr("simple random sampling formula"),
-                          "local": tr("local neighbourhood (Stevens & Olsen 2003)")}
+        ci_names = {"t": self.tr("t with Satterthwaite degrees of freedom"), "lognormal": self.tr("log-normal"),
+                    "bootstrap": self.tr("stratified percentile bootstrap")}
+        variance_names = {"srs": self.tr("simple random sampling formula"),
+                          "local": self.tr("local neighbourhood (Stevens & Olsen 2003)")}
         parameters = {
-            tr("Sample units"): info["units"],
-            tr("Count field"): info["count_field"] + (tr(" (presence/absence)") if presence else ""),
-            tr("Stratum field"): info["stratum_field"] or tr("none: one stratum"),
-            tr("Unit area"): (tr("field {field} (m²)").format(field=info["area_field"]) if info["area_field"]
-                              else tr("polygon area"))
-            + (f"; {tr('strip width')} {info['strip_width']:g} m" if info["strip_width"] > 0 else "")
-            + (f"; {tr('fixed')} {info['unit_area_m2']:g} m²" if info["unit_area_m2"] > 0 else ""),
-            tr("Strata (frame)"): info["strata"],
-            tr("Computation CRS"): info["crs"],
-            tr("Area unit"): per,
-            tr("Confidence level"): level,
-            tr("Interval"): ci_names[result.ci_method],
-            tr("Variance estimator"): variance_names[result.variance_method],
-            tr("Finite-population correction"): tr("yes") if result.fpc else tr("no"),
-            tr("Detection probability p"): f"{result.detection_p:g} (SE {result.detection_se:g})",
-            tr("Target CV for the next survey"): f"{result.target_cv:g}" if result.target_cv else "–",
+            self.tr("Sample units"): info["units"],
+            self.tr("Count field"): info["count_field"] + (self.tr(" (presence/absence)") if presence else ""),
+            self.tr("Stratum field"): info["stratum_field"] or self.tr("none: one stratum"),
+            self.tr("Unit area"): (self.tr("field {field} (m²)").format(field=info["area_field"]) if info["area_field"]
+                              else self.tr("polygon area"))
+            + ("; " + self.tr("strip width") + f" {info['strip_width']:g} m" if info["strip_width"] > 0 else "")
+            + ("; " + self.tr("fixed") + f" {info['unit_area_m2']:g} m²" if info["unit_area_m2"] > 0 else ""),
+            self.tr("Strata (frame)"): info["strata"],
+            self.tr("Computation CRS"): info["crs"],
+            self.tr("Area unit"): per,
+            self.tr("Confidence level"): level,
+            self.tr("Interval"): ci_names[result.ci_method],
+            self.tr("Variance estimator"): variance_names[result.variance_method],
+            self.tr("Finite-population correction"): self.tr("yes") if result.fpc else self.tr("no"),
+            self.tr("Detection probability p"): f"{result.detection_p:g} (SE {result.detection_se:g})",
+            self.tr("Target CV for the next survey"): f"{result.target_cv:g}" if result.target_cv else "–",
         }
         if result.ci_method == "bootstrap":
-            parameters[tr("Bootstrap resamples")] = result.n_bootstrap
-            parameters[tr("Seed")] = info["seed"]
+            parameters[self.tr("Bootstrap resamples")] = result.n_bootstrap
+            parameters[self.tr("Seed")] = info["seed"]
         else:
-            parameters[tr("Seed")] = tr("not used (no random draws without the bootstrap)")
+            parameters[self.tr("Seed")] = self.tr("not used (no random draws without the bootstrap)")
         report.parameters(parameters)
         report.warnings(warnings)
 
-        report.section(tr("Estimates by stratum"))
-        density_header = [tr("Stratum"), tr("Area ({unit})").format(unit=per), tr("Units (n)"), tr("Not surveyed"),
-                          tr("Mean count"), tr("SD of counts"), dens_label[:1].upper() + dens_label[1:], tr("SE"),
-                          tr("Lower limit"),
-                          tr("Upper limit"), tr("CV"), tr("df")]
-        abundance_header = [tr("Stratum"), tr("Occupied units") if presence else tr("Abundance"), tr("SE"),
-                            tr("Lower limit"), tr("Upper limit")]
+        report.section(self.tr("Estimates by stratum"))
+        density_header = [self.tr("Stratum"), self.tr("Area ({unit})").format(unit=per), self.tr("Units (n)"), self.tr("Not surveyed"),
+                          self.tr("Mean count"), self.tr("SD of counts"), dens_label[:1].upper() + dens_label[1:], self.tr("SE"),
+                          self.tr("Lower limit"),
+                          self.tr("Upper limit"), self.tr("CV"), self.tr("df")]
+        abundance_header = [self.tr("Stratum"), self.tr("Occupied units") if presence else self.tr("Abundance"), self.tr("SE"),
+                            self.tr("Lower limit"), self.tr("Upper limit")]
         if result.target_cv:
-            abundance_header.append(tr("Units next time (n_next)"))
+            abundance_header.append(self.tr("Units next time (n_next)"))
         density_rows, abundance_rows = [], []
         total_area = sum(stratum_areas[s.stratum] for s in result.strata)
         for r in result.table():
             row = self._row(r, total_area if r.stratum == "all" else stratum_areas.get(r.stratum, r.area), presence)
-            label = tr("all strata") if r.stratum == "all" else r.stratum
+            label = self.tr("all strata") if r.stratum == "all" else r.stratum
             density_rows.append([label, row[1], r.n, r.n_missing] + row[3:9] + row[13:15])
             abundance_rows.append([label] + row[9:13] + ([r.n_next] if result.target_cv else []))
-        report.table(density_header, density_rows, caption=tr("{what}, limits at {level}.").format(
+        report.table(density_header, density_rows, caption=self.tr("{what}, limits at {level}.").format(
             what=dens_label.capitalize(), level=level))
-        report.table(abundance_header, abundance_rows, caption=tr("{what} in the frame, limits at {level}.").format(
-            what=tr("Occupied units") if presence else tr("Abundance"), level=level))
+        report.table(abundance_header, abundance_rows, caption=self.tr("{what} in the frame, limits at {level}.").format(
+            what=self.tr("Occupied units") if presence else self.tr("Abundance"), level=level))
         if result.dropped_strata:
-            report.note(tr(
+            report.note(self.tr(
                 "The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). "
                 "The estimate covers the remaining strata only.").format(
                 strata=", ".join(result.dropped_strata), area=result.dropped_area, unit=per))
         if result.missing_ids:
-            report.paragraph(tr("Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.").format(
+            report.paragraph(self.tr("Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.").format(
                 n=len(result.missing_ids), ids=bridge.id_list(result.missing_ids, limit=60)))
 
-        report.subsection(tr("The overall interval by method"))
+        report.subsection(self.tr("The overall interval by method"))
         report.table(
-            [tr("Interval"), tr("Lower limit"), tr("Upper limit"), tr("Used in the outputs")],
-            [[ci_names[m], lo, hi, tr("yes") if m == result.ci_method else tr("no")]
+            [self.tr("Interval"), self.tr("Lower limit"), self.tr("Upper limit"), self.tr("Used in the outputs")],
+            [[ci_names[m], lo, hi, self.tr("yes") if m == result.ci_method else self.tr("no")]
              for m, lo, hi in result.overall_intervals])
-        report.paragraph(tr(
+        report.paragraph(self.tr(
             "The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like "
             "the sampling distribution of a count-based estimate, and suits small samples of clumped animals "
             "better. Choose the method before looking at the results."))
@@ -555,9 +554,9 @@ class Estimate(PlotwiseAlgorithm):
             frequencies, _ = np.histogram(result.bootstrap_totals, bins=edges)
             report.figure(
                 histogram_svg(edges, frequencies, marks=(o.abund_lo, o.abund_hi),
-                              x_label=tr("overall abundance in a resample"), y_label=tr("resamples"),
-                              mark_label=tr("{level} percentile limits").format(level=level)),
-                tr("The {n:,} bootstrap resamples of the overall abundance").format(n=result.n_bootstrap))
+                              x_label=self.tr("overall abundance in a resample"), y_label=self.tr("resamples"),
+                              mark_label=self.tr("{level} percentile limits").format(level=level)),
+                self.tr("The {n:,} bootstrap resamples of the overall abundance").format(n=result.n_bootstrap))
 
         labels = [r.stratum for r in result.strata]
         dens_rows = [self._row(r, stratum_areas.get(r.stratum, r.area), presence) for r in result.strata]
@@ -566,12 +565,12 @@ class Estimate(PlotwiseAlgorithm):
         reference_label = ""
         if info["true_total"] and not presence:
             reference = info["true_total"] / overall_row[1]
-            reference_label = tr("true density (simulation)")
+            reference_label = self.tr("true density (simulation)")
         chart = interval_chart_svg(
-            labels + [tr("all strata")], [row[5] for row in dens_rows] + [overall_row[5]],
+            labels + [self.tr("all strata")], [row[5] for row in dens_rows] + [overall_row[5]],
             [row[7] for row in dens_rows] + [overall_row[7]], [row[8] for row in dens_rows] + [overall_row[8]],
             value_label=dens_label, reference=reference, reference_label=reference_label)
-        report.figure(chart, tr("{what} by stratum with {level} confidence intervals").format(
+        report.figure(chart, self.tr("{what} by stratum with {level} confidence intervals").format(
             what=dens_label.capitalize(), level=level))
 
         values = [by[5] for by in dens_rows]
@@ -582,30 +581,30 @@ class Estimate(PlotwiseAlgorithm):
         layers = [MapLayer(
             tuple(frame_geoms[k] for k in order), fills=tuple(_sequential_colour(shown.get(k), lo, hi) for k in order),
             stroke=INK, stroke_width=0.8,
-            legend=((f"{tr('lowest')}: {lo:.3g}", _sequential_colour(lo, lo, hi)),
-                    (f"{tr('highest')}: {hi:.3g}", _sequential_colour(hi, lo, hi))),
+            legend=((self.tr("lowest") + f": {lo:.3g}", _sequential_colour(lo, lo, hi)),
+                    (self.tr("highest") + f": {hi:.3g}", _sequential_colour(hi, lo, hi))),
         )]
         surveyed = np.array([c is not None for c in records.attributes[info["count_field"]]]) & keep
         points = [g.centroid if g is not None and g.geom_type != "Point" else g for g in records.geometries]
         layers.append(MapLayer(tuple(p for p, s in zip(points, surveyed) if s and p is not None),
-                               label=tr("surveyed units"), fill=UNIT_COLOUR, stroke=INK, point_radius=3.0))
+                               label=self.tr("surveyed units"), fill=UNIT_COLOUR, stroke=INK, point_radius=3.0))
         missing = [p for p, s, k in zip(points, surveyed, keep) if k and not s and p is not None]
         if missing:
-            layers.append(MapLayer(tuple(missing), label=tr("not surveyed"), fill="#ffffff", stroke=MUTED,
+            layers.append(MapLayer(tuple(missing), label=self.tr("not surveyed"), fill="#ffffff", stroke=MUTED,
                                    point_radius=3.0))
-        report.figure(map_svg(layers, title=dens_label), tr("Strata shaded by {what}, with the units").format(
+        report.figure(map_svg(layers, title=dens_label), self.tr("Strata shaded by {what}, with the units").format(
             what=dens_label))
 
-        report.section(tr("Method"))
+        report.section(self.tr("Method"))
         if presence:
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Each stratum's value is the proportion of its surveyed units where the species was detected; "
                 "the frame's value weights the strata by the number of units they hold (area / unit area). "
                 "This is naive occupancy: it is not corrected for detection, so it understates true occupancy "
                 "whenever the species can be present and missed. Detection-corrected occupancy needs repeat "
                 "visits to the same units (occupancy models)."))
         else:
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa "
                 "(the ratio estimator, Cochran 1977, ch. 6), with the linearised variance "
                 "v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the "
@@ -613,12 +612,12 @@ class Estimate(PlotwiseAlgorithm):
                 "frame's abundance is the sum over strata, its variance the sum of the strata variances, and "
                 "its density N / Σ A_h (Cochran 1977, ch. 5)."))
         report.paragraph({
-            "t": tr("Intervals use Student's t with Satterthwaite's effective degrees of freedom, "
+            "t": self.tr("Intervals use Student's t with Satterthwaite's effective degrees of freedom, "
                     "ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits "
                     "below 0 are shown as 0."),
-            "lognormal": tr("Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. "
+            "lognormal": self.tr("Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. "
                             "1987; Buckland et al. 2001). They are asymmetric and never go below 0."),
-            "bootstrap": tr("Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples "
+            "bootstrap": self.tr("Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples "
                             "drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement "
                             "and their density is moved towards the stratum's estimate by the factor √(1 − f), so "
                             "that the resamples vary as much as the stratified variance says, with the "
@@ -626,7 +625,7 @@ class Estimate(PlotwiseAlgorithm):
                             "Tibshirani 1993).").format(b=result.n_bootstrap),
         }[result.ci_method])
         if result.variance_method == "local":
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Variances use the local neighbourhood estimator of Stevens & Olsen (2003): each unit and its "
                 "three nearest units in the stratum form a neighbourhood, and only differences within "
                 "neighbourhoods count as variance. For systematic and spatially balanced layouts the simple "
@@ -635,48 +634,48 @@ class Estimate(PlotwiseAlgorithm):
                 "formula. The sum of the local variances is scaled once so that it agrees on average with the "
                 "simple formula when the population has no spatial pattern (our choice)."))
         if any(r.collapsed_with for r in result.strata):
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on "
                 "the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual "
                 "variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as "
                 "variance, so their standard errors tend to be too large."))
             if result.ci_method == "bootstrap":
-                report.paragraph(tr(
+                report.paragraph(self.tr(
                     "In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled "
                     "units of its group (each unit's count minus the group's density times the unit's area), adds "
                     "them to its own estimate and rescales them, so that its resamples are centred on its own "
                     "estimate and vary as much as the collapsed-strata variance says."))
         if result.detection_p < 1 or result.detection_se > 0:
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p "
                 "(SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval's degrees of freedom "
                 "combine the two parts (Buckland et al. 2001), p's part counting as known with infinite degrees "
                 "of freedom.").format(p=result.detection_p, se=result.detection_se,
                                       cv=result.detection_se / result.detection_p))
         if result.target_cv:
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall "
                 "abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now "
                 "(Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves "
                 "uncertain, especially from few units.").format(cv=result.target_cv))
 
-        report.section(tr("Cautions"))
-        report.note(tr(
+        report.section(self.tr("Cautions"))
+        report.note(self.tr(
             "The inference covers the sampling frame only: the strata polygons given here. It says nothing "
             "about land outside them (excluded areas, inaccessible ground, neighbouring land)."))
         if presence:
-            report.note(tr("Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits "
+            report.note(self.tr("Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits "
                            "before it can be corrected for detection."))
         elif result.detection_p < 1:
-            report.note(tr(
+            report.note(self.tr(
                 "Detection: p must come from a separate study (double observers, marked animals, distance "
                 "sampling) of the same species, season, habitat and observers. If the detection in this survey "
                 "differs, the estimate is biased by the same factor, and no interval here shows it."))
         else:
-            report.note(tr(
+            report.note(self.tr(
                 "Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals "
                 "missed make it too low, and the interval does not show that bias."))
-        report.note(tr(
+        report.note(self.tr(
             "The design the units came from: the formulas assume the units were placed at random within each "
             "stratum with equal chances (simple random, systematic grid or spatially balanced layout), that "
             "unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. "

@@ -316,33 +316,32 @@ class LayoutUnits(PlotwiseAlgorithm):
 
     # -- report ----------------------------------------------------------------------
     def _report(self, result, frame, spec, seed, crs, projected_from, warnings, layer_name, stratum_field, n_field, n_units):
-        tr = self.tr
-        report = self.new_report(tr("Sample-unit layout"))
+        report = self.new_report(self.tr("Sample-unit layout"))
         report.field_safety()
         report.warnings(warnings)
         primary = result.is_primary
         report.key_figures([
-            (tr("primary units"), format_number(int(primary.sum()))),
-            (tr("reserve units"), format_number(int((~primary).sum()))),
-            (tr("strata"), format_number(len(result.strata))),
-            (tr("design"), tr(engine.DESIGNS[spec.design])),
+            (self.tr("primary units"), format_number(int(primary.sum()))),
+            (self.tr("reserve units"), format_number(int((~primary).sum()))),
+            (self.tr("strata"), format_number(len(result.strata))),
+            (self.tr("design"), self.engine_term(engine.DESIGNS[spec.design])),
         ])
-        report.section(tr("Replacing units in the field"))
+        report.section(self.tr("Replacing units in the field"))
         report.note(
-            tr("A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced "
+            self.tr("A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced "
                "by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary "
                "as not surveyed and why; never move a unit to a more convenient place, and never take a reserve "
                "of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.")
         )
-        report.section(tr("Units per stratum"))
+        report.section(self.tr("Units per stratum"))
         systematic = spec.design == engine.SYSTEMATIC_GRID
-        header = [tr("Stratum"), tr("Area (ha)"), tr("Effective area (ha)"), tr("Units asked"), tr("Primary"),
-                  tr("Reserve"), tr("incl_p"), tr("weight")]
+        header = [self.tr("Stratum"), self.tr("Area (ha)"), self.tr("Effective area (ha)"), self.tr("Units asked"), self.tr("Primary"),
+                  self.tr("Reserve"), self.tr("incl_p"), self.tr("weight")]
         if systematic:
-            header += [tr("Grid spacing (m)"), tr("Grid rotation (°)")]
+            header += [self.tr("Grid spacing (m)"), self.tr("Grid rotation (°)")]
         rows = []
         for s in result.strata:
-            row = [tr("frame") if s.key is None else str(s.key), s.area / 1e4, s.effective_area / 1e4, s.n_requested,
+            row = [self.tr("frame") if s.key is None else str(s.key), s.area / 1e4, s.effective_area / 1e4, s.n_requested,
                    s.n_primary, s.n_reserve, s.incl_p, 1.0 / s.incl_p if s.incl_p and s.incl_p > 0 else None]
             if systematic:
                 row += [s.spacing, s.rotation]
@@ -350,62 +349,61 @@ class LayoutUnits(PlotwiseAlgorithm):
         report.table(header, rows)
         density = not (spec.unit_area > 0)
         report.paragraph(
-            tr("incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is "
+            self.tr("incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is "
                "the area in m² each unit stands for (Cordy 1993).") if density else
-            tr("incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.")
+            self.tr("incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.")
         )
         if spec.inside and spec.radius > 0:
             report.paragraph(
-                tr("Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m "
+                self.tr("Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m "
                    "(the unit's circumscribing radius). The effective area is that shrunk area and the inclusion "
                    "probabilities use it; the edge strip is covered less often, which the report of the estimate "
                    "should mention.").format(r=format_number(spec.radius))
             )
         if systematic:
             report.paragraph(
-                tr("The grid spacing is √(A/n) for the asked n; with a random start the realised number of units "
+                self.tr("The grid spacing is √(A/n) for the asked n; with a random start the realised number of units "
                    "varies around n (column Primary) while the inclusion density stays n/A everywhere.")
             )
-        report.section(tr("Map"))
-        report.figure(self._map(result, frame), tr("Strata (filled), primary units (dark) and reserve units (light)"))
-        report.section(tr("Method"))
+        report.section(self.tr("Map"))
+        report.figure(self._map(result, frame), self.tr("Strata (filled), primary units (dark) and reserve units (light)"))
+        report.section(self.tr("Method"))
         report.paragraph(self._method_text(spec))
         crs_text = f"{crs.authid()} ({crs.description()})"
         if projected_from:
-            crs_text += tr(", projected from {src} (UTM zone of the frame's centre)").format(src=projected_from)
+            crs_text += self.tr(", projected from {src} (UTM zone of the frame's centre)").format(src=projected_from)
         report.parameters({
-            tr("Frame (FRAME)"): layer_name,
-            tr("Stratum field (STRATUM_FIELD)"): stratum_field or tr("(none: one stratum)"),
-            tr("Units per stratum field (N_FIELD)"): n_field or tr("(none)"),
-            tr("Total units (N_UNITS)"): n_units if not n_field else tr("(not used)"),
-            tr("Design (DESIGN)"): tr(engine.DESIGNS[spec.design]),
-            tr("Unit shape (SHAPE)"): tr(engine.SHAPES[spec.shape]),
-            tr("Unit size (SIZE, m)"): spec.size,
-            tr("Bearing (BEARING, degrees)"): tr("random") if spec.bearing == engine.RANDOM_BEARING else spec.bearing,
-            tr("Keep inside (INSIDE)"): tr("yes") if spec.inside else tr("no"),
-            tr("Minimum spacing (MIN_SPACING, m)"): spec.min_spacing,
-            tr("Reserves per stratum (RESERVE)"): spec.reserve,
-            tr("Seed (SEED)"): seed,
-            tr("CRS of the computation and the output"): crs_text,
+            self.tr("Frame (FRAME)"): layer_name,
+            self.tr("Stratum field (STRATUM_FIELD)"): stratum_field or self.tr("(none: one stratum)"),
+            self.tr("Units per stratum field (N_FIELD)"): n_field or self.tr("(none)"),
+            self.tr("Total units (N_UNITS)"): n_units if not n_field else self.tr("(not used)"),
+            self.tr("Design (DESIGN)"): self.engine_term(engine.DESIGNS[spec.design]),
+            self.tr("Unit shape (SHAPE)"): self.engine_term(engine.SHAPES[spec.shape]),
+            self.tr("Unit size (SIZE, m)"): spec.size,
+            self.tr("Bearing (BEARING, degrees)"): self.tr("random") if spec.bearing == engine.RANDOM_BEARING else spec.bearing,
+            self.tr("Keep inside (INSIDE)"): self.tr("yes") if spec.inside else self.tr("no"),
+            self.tr("Minimum spacing (MIN_SPACING, m)"): spec.min_spacing,
+            self.tr("Reserves per stratum (RESERVE)"): spec.reserve,
+            self.tr("Seed (SEED)"): seed,
+            self.tr("CRS of the computation and the output"): crs_text,
         })
         report.references(REFERENCES)
         return report
 
     def _method_text(self, spec):
-        tr = self.tr
         text = {
-            engine.SIMPLE_RANDOM: tr("Simple random: every centre is an independent uniform point of its stratum (a "
+            engine.SIMPLE_RANDOM: self.tr("Simple random: every centre is an independent uniform point of its stratum (a "
                                      "triangle chosen with probability proportional to its area, then a uniform point in it)."),
-            engine.SYSTEMATIC_GRID: tr("Systematic grid: a square grid with a uniform random start in one grid cell "
+            engine.SYSTEMATIC_GRID: self.tr("Systematic grid: a square grid with a uniform random start in one grid cell "
                                        "and a rotation, per stratum; reserves are the centres of the grid cells, in random order."),
-            engine.SPATIALLY_BALANCED: tr("Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). "
+            engine.SPATIALLY_BALANCED: self.tr("Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). "
                                           "A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and "
                                           "its points inside the stratum are kept in order. The random start is a uniform "
                                           "random point of the stratum, so that every location has the same chance for "
                                           "any sample size; reserves are the next points of the same sequence."),
         }[spec.design]
         if spec.min_spacing > 0:
-            text += " " + tr("A candidate closer than {d} m to an accepted unit is passed over (simple sequential "
+            text += " " + self.tr("A candidate closer than {d} m to an accepted unit is passed over (simple sequential "
                              "inhibition), which lowers the chance of locations next to units slightly.").format(
                 d=format_number(spec.min_spacing))
         return text

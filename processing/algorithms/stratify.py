@@ -228,32 +228,31 @@ class Stratify(PlotwiseAlgorithm):
     # -- report ----------------------------------------------------------------------
     def _report(self, result, shapes, frame_polygons, method, n_strata, min_area, seeded, crs, projected_from,
                 warnings, frame_name, covariates):
-        tr = self.tr
         res = result.result
         stats = res.statistics
         names = result.names
         k = stats.n_strata
-        report = self.new_report(tr("Strata from raster covariates"))
+        report = self.new_report(self.tr("Strata from raster covariates"))
         report.field_safety()
         report.warnings(warnings)
         covered_ha = float(result.area_ha.sum())
         r2 = stats.r_squared()
         report.key_figures([
-            (tr("strata"), str(k)),
-            (tr("area stratified (ha)"), format_number(covered_ha)),
-            (tr("frame covered"), f"{format_number(100 * result.coverage)} %"),
-            (tr("R² of {name}").format(name=names[0]), format_number(float(r2[0]))),
+            (self.tr("strata"), str(k)),
+            (self.tr("area stratified (ha)"), format_number(covered_ha)),
+            (self.tr("frame covered"), f"{format_number(100 * result.coverage)} %"),
+            (self.tr("R² of {name}").format(name=names[0]), format_number(float(r2[0]))),
         ])
-        report.note(tr(
+        report.note(self.tr(
             "The strata cover the frame's cells that have a value in every covariate ({ha} ha). A survey "
             "allocated on these strata speaks for that area only."
         ).format(ha=format_number(covered_ha)))
 
-        report.section(tr("Strata"))
-        header = [tr("Stratum"), tr("Label"), tr("Area (ha)"), tr("% of area"), tr("Cells")]
+        report.section(self.tr("Strata"))
+        header = [self.tr("Stratum"), self.tr("Label"), self.tr("Area (ha)"), self.tr("% of area"), self.tr("Cells")]
         for name, unit in zip(names, result.units):
             u = f" ({unit})" if unit else ""
-            header += [tr("{name} mean").format(name=name) + u, tr("{name} SD").format(name=name) + u]
+            header += [self.tr("{name} mean").format(name=name) + u, self.tr("{name} SD").format(name=name) + u]
         rows = []
         for h in range(k):
             row = [h + 1, self.translate_message(result.labels[h]), float(result.area_ha[h]),
@@ -263,13 +262,13 @@ class Stratify(PlotwiseAlgorithm):
             rows.append(row)
         report.table(header, rows)
         if result.sieve_cells > 1 and not result.patches_merged:
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL "
                 "sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a "
                 "stratum may hold a few cells that the rule alone would have put in a neighbouring stratum."
             ).format(ha=format_number(min_area), cells=result.sieve_cells))
         elif result.sieve_cells > 1:
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): "
                 "specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more "
                 "patches, smallest first, each into the neighbouring stratum that made the smallest patch of at "
@@ -280,57 +279,57 @@ class Stratify(PlotwiseAlgorithm):
                      specks=raster_io.speck_cells(result.sieve_cells), n=result.patches_merged))
         if result.sieve_cells > 1:
             if result.small_patches:
-                report.paragraph(tr(
+                report.paragraph(self.tr(
                     "{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches "
                     "ringed by NoData) and stay smaller than {ha} ha."
                 ).format(n=result.small_patches, area=format_number(result.small_patches_ha),
                          ha=format_number(min_area)))
             else:
-                report.paragraph(tr("Every patch of the strata now covers at least {ha} ha.").format(
+                report.paragraph(self.tr("Every patch of the strata now covers at least {ha} ha.").format(
                     ha=format_number(min_area)))
 
         method_name = strat.METHOD_NAMES[method]
-        report.section(tr("Method: {name}").format(name=method_name))
+        report.section(self.tr("Method: {name}").format(name=method_name))
         if res.boundaries is not None:
             lo, hi = strat.stratum_ranges(res)
             d = strat.display_decimals(np.concatenate([lo, hi]))
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Stratum h holds the cells with b(h−1) ≤ {name} < b(h). Boundaries on {name}:"
             ).format(name=names[0]))
-            report.table([tr("Boundary"), tr("Value")],
+            report.table([self.tr("Boundary"), self.tr("Value")],
                          [[i + 1, strat.format_covariate_value(b, d + 2)] for i, b in enumerate(res.boundaries)])
             if method == strat.QUANTILE:
-                report.paragraph(tr(
+                report.paragraph(self.tr(
                     "Exact sample quantiles at h/k of the frame's cells (Hyndman & Fan 1996, definition 7), "
                     "found in two passes: a 64,000-class histogram locates each quantile, then the cells of "
                     "that class are sorted."))
             elif method == strat.CUM_ROOT_F:
-                report.paragraph(tr(
+                report.paragraph(self.tr(
                     "Dalenius & Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the "
                     "class tops where the cumulative √f is nearest to h/k of its total."
                 ).format(n=strat.CUM_ROOT_F_CLASSES, name=names[0]))
         elif res.kmeans is not None:
             fit = res.kmeans
-            report.paragraph(tr(
+            report.paragraph(self.tr(
                 "Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd "
                 "iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell "
                 "went to its nearest centre."
             ).format(m=f"{res.sample_size:,}", seed=seeded.seed if seeded else "–", it=fit.iterations))
         else:
-            report.paragraph(tr("Each class of '{name}' is one stratum ({k} classes).").format(name=names[0], k=k))
+            report.paragraph(self.tr("Each class of '{name}' is one stratum ({k} classes).").format(name=names[0], k=k))
 
-        report.section(tr("Share of covariate variance explained by the strata (R²)"))
-        report.table([tr("Covariate"), tr("Mean"), tr("SD"), tr("R²")],
+        report.section(self.tr("Share of covariate variance explained by the strata (R²)"))
+        report.table([self.tr("Covariate"), self.tr("Mean"), self.tr("SD"), self.tr("R²")],
                      [[n, float(m), float(s), float(r)] for n, m, s, r in
                       zip(names, stats.overall_mean(), stats.overall_sd(), r2)])
-        report.paragraph(tr(
+        report.paragraph(self.tr(
             "R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. "
             "For a quantity that follows the covariate exactly, proportional allocation over these strata "
             "would lower the variance of the estimated mean by this share compared with simple random "
             "sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density "
             "is smaller the less closely density follows the covariate."))
 
-        report.section(tr("Histogram of {name}").format(name=names[0]))
+        report.section(self.tr("Histogram of {name}").format(name=names[0]))
         lo, hi = stats.chart_range
         if np.isfinite(lo) and np.isfinite(hi) and hi > lo:
             edges = np.linspace(lo, hi, strat.CHART_BINS + 1)
@@ -338,44 +337,44 @@ class Stratify(PlotwiseAlgorithm):
             colours = [category_colour(h) for h in range(k)]
             report.figure(
                 stacked_histogram_svg(edges, stats.chart_counts, colours,
-                                      labels=[tr("stratum {h}").format(h=h + 1) for h in range(k)], marks=marks,
-                                      x_label=names[0], y_label=tr("cells")),
-                tr("Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.").format(
+                                      labels=[self.tr("stratum {h}").format(h=h + 1) for h in range(k)], marks=marks,
+                                      x_label=names[0], y_label=self.tr("cells")),
+                self.tr("Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.").format(
                     name=names[0]) if len(marks) else
-                tr("Frame cells by {name}, coloured by stratum (k-means strata may overlap on one "
+                self.tr("Frame cells by {name}, coloured by stratum (k-means strata may overlap on one "
                    "covariate).").format(name=names[0]))
 
-        report.section(tr("Map"))
+        report.section(self.tr("Map"))
         labels = [self.translate_message(label) for label in result.labels]
-        report.figure(self._map(shapes, frame_polygons, labels), tr("Strata within the sampling frame"))
+        report.figure(self._map(shapes, frame_polygons, labels), self.tr("Strata within the sampling frame"))
 
-        report.section(tr("Coverage"))
+        report.section(self.tr("Coverage"))
         cell = result.grid.cell_area
-        report.table([tr("Item"), tr("Value")], [
-            [tr("frame area (ha)"), float(result.frame_ha)],
-            [tr("frame area outside the first covariate's extent (ha)"), float(result.outside_ha)],
-            [tr("frame cells with NoData in a covariate (ha)"), float(result.nodata_ha)],
-            [tr("area stratified (ha)"), covered_ha],
-            [tr("share of the frame covered"), f"{format_number(100 * result.coverage)} %"],
-            [tr("cells stratified"), int(res.cells_valid)],
-            [tr("cell size (m)"), float(np.sqrt(cell))],
-            [tr("grid"), f"{result.grid.width} × {result.grid.height}"],
-            [tr("covariates warped on the fly"), ", ".join(result.warped) or tr("none")],
+        report.table([self.tr("Item"), self.tr("Value")], [
+            [self.tr("frame area (ha)"), float(result.frame_ha)],
+            [self.tr("frame area outside the first covariate's extent (ha)"), float(result.outside_ha)],
+            [self.tr("frame cells with NoData in a covariate (ha)"), float(result.nodata_ha)],
+            [self.tr("area stratified (ha)"), covered_ha],
+            [self.tr("share of the frame covered"), f"{format_number(100 * result.coverage)} %"],
+            [self.tr("cells stratified"), int(res.cells_valid)],
+            [self.tr("cell size (m)"), float(np.sqrt(cell))],
+            [self.tr("grid"), f"{result.grid.width} × {result.grid.height}"],
+            [self.tr("covariates warped on the fly"), ", ".join(result.warped) or self.tr("none")],
         ])
 
         crs_text = f"{crs.authid()} ({crs.description()})"
         if projected_from:
-            crs_text += tr(", projected from {src} (UTM zone of the frame's centre)").format(src=projected_from)
+            crs_text += self.tr(", projected from {src} (UTM zone of the frame's centre)").format(src=projected_from)
         params = {
-            tr("Sampling frame (FRAME)"): frame_name,
-            tr("Covariates (COVARIATES)"): ", ".join(c.name for c in covariates),
-            tr("Method (METHOD)"): f"{method} ({method_name})",
-            tr("Number of strata (STRATA)"): n_strata if method != strat.RASTER_CLASSES else tr("ignored"),
-            tr("Minimum patch area (MIN_AREA, ha)"): min_area,
-            tr("CRS of the computation and the outputs"): crs_text,
+            self.tr("Sampling frame (FRAME)"): frame_name,
+            self.tr("Covariates (COVARIATES)"): ", ".join(c.name for c in covariates),
+            self.tr("Method (METHOD)"): f"{method} ({method_name})",
+            self.tr("Number of strata (STRATA)"): n_strata if method != strat.RASTER_CLASSES else self.tr("ignored"),
+            self.tr("Minimum patch area (MIN_AREA, ha)"): min_area,
+            self.tr("CRS of the computation and the outputs"): crs_text,
         }
         if seeded is not None:
-            params[tr("Seed (SEED)")] = seeded.seed
+            params[self.tr("Seed (SEED)")] = seeded.seed
         report.parameters(params)
         report.references(REFERENCES)
         return report

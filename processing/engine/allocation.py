@@ -37,7 +37,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from .errors import InputError, message
+from .errors import QT_TRANSLATE_NOOP, InputError, message
 
 METHODS = ("equal", "proportional", "neyman", "optimal_cost")
 """Allocation methods, in the order of the algorithm's METHOD parameter (0..3)."""
@@ -45,10 +45,10 @@ METHODS = ("equal", "proportional", "neyman", "optimal_cost")
 DEFAULT_MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
 
 _DEFAULT_NAMES = {
-    "area": message("stratum area"),
-    "sd": message("pilot standard deviation"),
-    "mean": message("pilot mean count"),
-    "cost": message("cost per unit"),
+    "area": message(QT_TRANSLATE_NOOP("PlotwiseEngine", "stratum area")),
+    "sd": message(QT_TRANSLATE_NOOP("PlotwiseEngine", "pilot standard deviation")),
+    "mean": message(QT_TRANSLATE_NOOP("PlotwiseEngine", "pilot mean count")),
+    "cost": message(QT_TRANSLATE_NOOP("PlotwiseEngine", "cost per unit")),
 }
 
 
@@ -381,7 +381,8 @@ def _listing(ids, mask):
     chosen = [ids[i] for i in np.flatnonzero(mask)]
     shown = ", ".join(str(x) for x in chosen[:20])
     if len(chosen) > 20:
-        return chosen, message("{shown} and {more} more", shown=shown, more=len(chosen) - 20)
+        return chosen, message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{shown} and {more} more"), shown=shown, more=len(chosen) - 20)
     return chosen, shown
 
 
@@ -427,9 +428,9 @@ def check_stratum_ids(values, feature_ids, layer, field):
     null = np.array([_is_null(v) for v in values], dtype=bool)
     if null.any():
         chosen, shown = _listing(feature_ids, null)
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Stratum field '{field}' of layer '{layer}' is empty (NULL) for feature(s) {ids}. Give every "
-            "stratum an id, or remove those features from the layer.", field=field, layer=layer, ids=shown),
+            "stratum an id, or remove those features from the layer."), field=field, layer=layer, ids=shown),
             ids=chosen)
     features = {}
     for value, fid in zip(values, feature_ids):
@@ -444,19 +445,19 @@ def check_stratum_ids(values, feature_ids, layer, field):
     _, shown = _listing(fids, np.ones(len(fids), dtype=bool))
     chosen = [fid for _, group in repeated for fid in group]
     if len(repeated) == 1:
-        text = message(
+        text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Features {ids} of layer '{layer}' carry the same stratum id {value} in field '{field}', so each "
             "would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; "
             "then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
-            "feature its own id.", ids=shown, layer=layer, value=_shown_id(value), field=field)
+            "feature its own id."), ids=shown, layer=layer, value=_shown_id(value), field=field)
     else:
         others = ", ".join(_shown_id(v) for v, _ in repeated[1:21]) + (" …" if len(repeated) > 21 else "")
-        text = message(
+        text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Several stratum ids in field '{field}' of layer '{layer}' are carried by more than one feature: "
             "{value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get "
             "its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then "
             "recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
-            "feature its own id.", field=field, layer=layer, value=_shown_id(value), ids=shown,
+            "feature its own id."), field=field, layer=layer, value=_shown_id(value), ids=shown,
             more=len(repeated) - 1, others=others)
     raise InputError(text, ids=chosen)
 
@@ -471,13 +472,13 @@ def check_values(values, name, ids, allow_zero=False):
     if bad.any():
         chosen, shown = _listing(ids, bad)
         if allow_zero:
-            text = message(
+            text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value "
-                "for every stratum, or remove those strata from the layer.", name=name, shown=shown)
+                "for every stratum, or remove those strata from the layer."), name=name, shown=shown)
         else:
-            text = message(
+            text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value "
-                "for every stratum, or remove those strata from the layer.", name=name, shown=shown)
+                "for every stratum, or remove those strata from the layer."), name=name, shown=shown)
         raise InputError(text, ids=chosen)
     return v
 
@@ -542,20 +543,22 @@ def allocate(
     """
     names = {**_DEFAULT_NAMES, **(names or {})}
     if method not in METHODS:
-        raise InputError(message("Unknown allocation method {method!r}; use one of: {methods}.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Unknown allocation method {method!r}; use one of: {methods}."),
                                  method=method, methods=", ".join(METHODS)))
     n_strata = len(areas)
     if n_strata == 0:
-        raise InputError(message("The strata layer has no features. Run the stratification first."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The strata layer has no features. Run the stratification first.")))
     ids = list(range(1, n_strata + 1)) if ids is None else list(ids)
     area = check_values(areas, names["area"], ids)
     unit_area = float(unit_area)
     if not np.isfinite(unit_area) or unit_area <= 0:
-        raise InputError(message("The unit area must be a positive number."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The unit area must be a positive number.")))
     min_per_stratum = int(min_per_stratum)
     if min_per_stratum < 1:
-        raise InputError(message(
-            "The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated)."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).")))
     warnings = []
 
     s = None if sds is None else check_values(sds, names["sd"], ids, allow_zero=True)
@@ -567,34 +570,39 @@ def allocate(
         c = check_values(costs, names["cost"], ids)
     elif method == "optimal_cost" or use_budget:
         raise InputError(
-            message("The cost method needs a cost per unit for every stratum: choose the cost field.")
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The cost method needs a cost per unit for every stratum: choose the cost field."))
             if method == "optimal_cost"
-            else message("The budget needs a cost per unit for every stratum: choose the cost field.")
+            else message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The budget needs a cost per unit for every stratum: choose the cost field."))
         )
     fixed_cost = float(fixed_cost or 0.0)
     if fixed_cost < 0:
-        raise InputError(message("The fixed cost must be zero or positive."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The fixed cost must be zero or positive.")))
 
     # method actually applied
     used = method
     if method in ("neyman", "optimal_cost"):
         if s is None:
             warnings.append(
-                message("No pilot standard deviations: the allocation assumes equal SDs in all strata "
-                        "(proportional to area).")
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "No pilot standard deviations: the allocation assumes equal SDs in all strata "
+                    "(proportional to area)."))
                 if method == "neyman"
-                else message("No pilot standard deviations: the allocation assumes equal SDs in all strata "
-                             "(area / square root of cost).")
+                else message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "No pilot standard deviations: the allocation assumes equal SDs in all strata "
+                    "(area / square root of cost)."))
             )
             used = "proportional" if method == "neyman" else method
         elif not np.any(s > 0):
-            warnings.append(message("All pilot standard deviations are zero: proportional allocation is used instead."))
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "All pilot standard deviations are zero: proportional allocation is used instead.")))
             used = "proportional"
         elif np.any(s == 0):
             zero_ids, shown = _listing(ids, s == 0)
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The {name} is zero for stratum feature(s) {shown}: they get only the minimum "
-                "of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.",
+                "of {minimum} unit(s). A pilot with no variation is rarely the truth; check it."),
                 name=names["sd"], shown=shown, minimum=min_per_stratum))
     scores = allocation_scores(used, area, s, c)
 
@@ -604,15 +612,16 @@ def allocate(
     if np.any(upper < 1):
         chosen, shown = _listing(ids, upper < 1)
         raise InputError(
-            message("Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. "
-                    "Merge them with a neighbour or use a smaller unit area.", shown=shown, unit_area=unit_area),
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. "
+                "Merge them with a neighbour or use a smaller unit area."), shown=shown, unit_area=unit_area),
             ids=chosen,
         )
     lower = np.minimum(min_per_stratum, upper)
     if np.any(upper < min_per_stratum):
         _, shown = _listing(ids, upper < min_per_stratum)
-        warnings.append(message(
-            "Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit."),
             shown=shown, minimum=min_per_stratum))
 
     # target
@@ -620,38 +629,39 @@ def allocate(
         target = "target_cv"
         n, x = _allocation_for_cv(float(target_cv), scores, area, unit_area, s, m, lower, upper, fpc, names)
         if budget is not None and budget > 0:
-            warnings.append(message("A target CV is set: the budget is not used."))
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "A target CV is set: the budget is not used.")))
     elif use_budget:
         target = "budget"
         minimum = fixed_cost + float(np.sum(c * lower))
         maximum = fixed_cost + float(np.sum(c * upper))
         if budget < minimum:
-            raise InputError(message(
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus "
                 "{per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the "
-                "minimum per stratum.", budget=budget, minimum=minimum, fixed_cost=fixed_cost,
+                "minimum per stratum."), budget=budget, minimum=minimum, fixed_cost=fixed_cost,
                 per_stratum=min_per_stratum))
         spend = min(float(budget), maximum) - fixed_cost
         if budget > maximum:
-            warnings.append(message(
-                "The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.",
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken."),
                 maximum=maximum))
         x = bounded_allocation(scores, spend, lower, upper, c)
         n = round_within_budget(x, spend, c, lower, upper)
     else:
         target = "total"
         if total is None or total <= 0:
-            raise InputError(message("Give a total number of units, a budget (with costs) or a target CV."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Give a total number of units, a budget (with costs) or a target CV.")))
         total = int(round(total))
         if total < lower.sum():
             raise InputError(message(
-                "The total of {total} units is below the minimum of {minimum} "
-                "({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.",
+                QT_TRANSLATE_NOOP("PlotwiseEngine", "The total of {total} units is below the minimum of {minimum} "
+                "({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum."),
                 total=total, minimum=int(lower.sum()), per_stratum=min_per_stratum, n_strata=n_strata))
         if total > upper.sum():
-            raise InputError(message(
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The total of {total} units exceeds the {fit} units of {unit_area:g} that fit "
-                "in the strata. Lower the total or use smaller units.",
+                "in the strata. Lower the total or use smaller units."),
                 total=total, fit=int(upper.sum()), unit_area=unit_area))
         x = bounded_allocation(scores, total, lower, upper)
         n = largest_remainder_round(x, total, lower, upper)
@@ -659,17 +669,19 @@ def allocate(
     total = int(n.sum())
     if np.any(n == 1):
         _, shown = _listing(ids, n == 1)
-        warnings.append(message(
-            "Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.", shown=shown))
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Stratum feature(s) {shown} get one unit only: their variance cannot be estimated."), shown=shown))
     x_at_cap = np.isclose(x, upper) & (upper > lower)
     if np.any(x_at_cap):
         _, shown = _listing(ids, x_at_cap)
-        warnings.append(message("Stratum feature(s) {shown} are sampled completely (every unit that fits).",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Stratum feature(s) {shown} are sampled completely (every unit that fits)."),
                                 shown=shown))
     precision = expected_precision(n, area, unit_area, s, m, fpc)
     if m is not None and np.any(m == 0):
         _, shown = _listing(ids, m == 0)
-        warnings.append(message("The {name} is zero in stratum feature(s) {shown}: their CV is undefined.",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The {name} is zero in stratum feature(s) {shown}: their CV is undefined."),
                                 name=names["mean"], shown=shown))
     comparison = compare_methods(total, area, unit_area, s, m, lower, upper, precision.variance_mean, fpc)
     return Allocation(
@@ -693,12 +705,13 @@ def allocate(
 def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, fpc, names):
     """Smallest total whose rounded allocation has expected CV <= target (bisection)."""
     if s is None or m is None:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "A target CV needs both the pilot standard deviation and the pilot mean count per unit: "
-            "choose the SD field and the mean field."
+            "choose the SD field and the mean field.")
         ))
     if not np.sum(stratum_weights(area) * m) > 0:
-        raise InputError(message("The {name} is zero in every stratum: no CV can be computed.", name=names["mean"]))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The {name} is zero in every stratum: no CV can be computed."), name=names["mean"]))
 
     def design(total):
         x = bounded_allocation(scores, total, lower, upper)
@@ -708,9 +721,9 @@ def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, f
     lo_total, hi_total = int(lower.sum()), int(upper.sum())
     n, x, cv = design(hi_total)
     if cv > target_cv:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give "
-            "an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.",
+            "an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units."),
             target_cv=target_cv, fit=hi_total, cv=cv))
     best = (n, x)
     n, x, cv = design(lo_total)

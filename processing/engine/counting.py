@@ -9,7 +9,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .geometry import contains_xy
 
 
@@ -28,14 +28,15 @@ def counting_region(geometry, area_m2=None):
     if kind in ("Polygon", "MultiPolygon"):
         return geometry
     if area_m2 is None or not np.isfinite(area_m2) or area_m2 <= 0:
-        raise InputError(message("needs a positive area_m2"))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "needs a positive area_m2")))
     if kind in ("Point", "MultiPoint"):
         return geometry.buffer(np.sqrt(area_m2 / np.pi), 64)
     if kind in ("LineString", "MultiLineString"):
         if geometry.length <= 0:
-            raise InputError(message("has a line of zero length"))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "has a line of zero length")))
         return geometry.buffer(area_m2 / (2.0 * geometry.length), cap_style=2)
-    raise InputError(message("has an unsupported geometry type ({kind})", kind=kind))
+    raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+        "has an unsupported geometry type ({kind})"), kind=kind))
 
 
 def animals_in_regions(regions, animals_xy, progress=None):
@@ -61,7 +62,8 @@ def animals_in_regions(regions, animals_xy, progress=None):
 def simulate_counts(regions, animals_xy, detection, rng, progress=None):
     """Counts seen in each region: Binomial(present, ``detection``), seeded by ``rng``."""
     if not 0.0 < detection <= 1.0:
-        raise InputError(message("The detection probability must be in (0, 1] (got {detection:g}).", detection=detection))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The detection probability must be in (0, 1] (got {detection:g})."), detection=detection))
     present = animals_in_regions(regions, animals_xy, progress)
     seen = rng.binomial(present, detection) if detection < 1.0 else present.copy()
     return UnitCounts(present=present, seen=np.asarray(seen, dtype=np.int64), detection=float(detection))

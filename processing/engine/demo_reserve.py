@@ -28,13 +28,13 @@ from scipy import ndimage
 from shapely import affinity
 from shapely.geometry import Polygon, box
 
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .geometry import contains_xy
 from .geometry_types import polygonal_part
 
 RESERVE_NAME = "Hollin Ridge Reserve"
 SPECIES_NAME = "velmar"
-SPECIES_DESCRIPTION = "an invented grazing antelope that lives in loose groups"
+SPECIES_DESCRIPTION = QT_TRANSLATE_NOOP("PlotwiseEngine", "an invented grazing antelope that lives in loose groups")
 # WGS 84 / UTM zone 36S; the coordinates are invented and lie in open ocean, on no real land
 CRS_EPSG = 32736
 ORIGIN = (500_000.0, 5_570_000.0)  # open ocean (40° S, 33° E): the reserve is on no real land
@@ -105,7 +105,7 @@ def lake_polygon(rng, boundary):
         lake = affinity.rotate(lake, rng.uniform(0, 180), origin=(x, y))
         if boundary.buffer(-1500).contains(lake):
             return lake
-    raise InputError(message("Could not place the demo lake; try another seed."))
+    raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Could not place the demo lake; try another seed.")))
 
 
 def inholding_polygon(rng, boundary):
@@ -181,7 +181,8 @@ def build_demo_reserve(rng, seed, cell_size=50.0, progress=None):
         Raster cell size in metres (10 to 500).
     """
     if not 10.0 <= cell_size <= 500.0:
-        raise InputError(message("The cell size must be between 10 and 500 m (got {cell_size:g} m).", cell_size=cell_size))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The cell size must be between 10 and 500 m (got {cell_size:g} m)."), cell_size=cell_size))
     area_km2 = rng.uniform(250.0, 350.0)
     boundary = reserve_boundary(rng, area_km2)
     lake = lake_polygon(rng, boundary)

@@ -77,23 +77,25 @@ import math
 import numpy as np
 
 from . import allocation, estimation, layout
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .geometry import contains_xy
 from .unit_shapes import CIRCLE, LINE, POINT, SQUARE
 
 DESIGNS = (
-    "simple random",
-    "stratified proportional",
-    "stratified Neyman",
-    "systematic grid",
-    "spatially balanced",
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "simple random"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "stratified proportional"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "stratified Neyman"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "systematic grid"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "spatially balanced"),
 )
 SIMPLE_RANDOM, STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(5)
 _SIZE_NOT_POSITIVE = {  # by unit shape: every word of a message sits in its template
-    POINT: "SIZE must be more than 0 m: it is the counting radius of a point station.",
-    SQUARE: "SIZE must be more than 0 m: it is the square unit's size.",
-    CIRCLE: "SIZE must be more than 0 m: it is the circle unit's size.",
-    LINE: "SIZE must be more than 0 m: it is the line unit's size.",
+    POINT: QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "SIZE must be more than 0 m: it is the counting radius of a point station."),
+    SQUARE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m: it is the square unit's size."),
+    CIRCLE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m: it is the circle unit's size."),
+    LINE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m: it is the line unit's size."),
 }
 STRATIFIED_DESIGNS = (STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN)
 LAYOUT_DESIGN = {
@@ -208,10 +210,12 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
     """
     density = np.asarray(density, dtype=float)
     if density.ndim != 2:
-        raise InputError(message("The density surface must be a single raster band."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The density surface must be a single raster band.")))
     x0, dx, rx, y0, ry, dy = (float(v) for v in geotransform)
     if rx or ry or dx <= 0 or dy >= 0:
-        raise InputError(message("The density surface must be a north-up raster (no rotation); warp it first."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The density surface must be a north-up raster (no rotation); warp it first.")))
     rows, cols = density.shape
     minx, miny, maxx, maxy = frame.bounds
     c0 = max(0, int(math.floor((minx - x0) / dx)))
@@ -219,9 +223,9 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
     r0 = max(0, int(math.floor((y0 - maxy) / -dy)))
     r1 = min(rows, int(math.ceil((y0 - miny) / -dy)))
     if c1 <= c0 or r1 <= r0:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The density surface does not overlap the frame. Check that both cover the same area "
-            "(and their coordinate reference systems)."
+            "(and their coordinate reference systems).")
         ))
     sub = density[r0:r1, c0:c1]
     gt = (x0 + c0 * dx, dx, 0.0, y0 + r0 * dy, 0.0, dy)
@@ -238,7 +242,8 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
         groups = {}
         for g, k in zip(strata, keys):
             if k is None:
-                raise InputError(message("A stratum has no stratum value (NULL). Give every stratum a value."))
+                raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "A stratum has no stratum value (NULL). Give every stratum a value.")))
             groups.setdefault(k, []).append(g)
         stratum_keys = tuple(_sorted_keys(groups))
         regions = []
@@ -262,38 +267,40 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
         if progress is not None and progress((index + 1) / len(regions)):
             raise Cancelled("Cancelled while reading the surface.")
     if overlap:
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. "
-            "Strata should not overlap.", overlap=overlap))
+            "Strata should not overlap."), overlap=overlap))
     inside = code >= 0
     if not inside.any():
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "No cell centre of the density surface lies in the frame: the surface cells are too coarse for "
-            "the frame, or the two do not overlap."
+            "the frame, or the two do not overlap.")
         ))
     negative = inside & (sub < 0)
     if negative.any():
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The density surface has {n} negative cell(s) in the frame. Expected animals "
-            "per km² must be 0 or more: correct the surface (for instance clip it at 0).", n=int(negative.sum())))
+            "per km² must be 0 or more: correct the surface (for instance clip it at 0)."), n=int(negative.sum())))
     missing = inside & ~np.isfinite(sub)
     if missing.any():
         share = missing.sum() / inside.sum()
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "{n} cell(s) of the frame ({share:.1%}) have no value on the density surface "
-            "and are left out of the population: the comparison speaks for the rest of the frame.",
+            "and are left out of the population: the comparison speaks for the rest of the frame."),
             n=int(missing.sum()), share=share))
         code[missing] = -1
         inside &= ~missing
         if not inside.any():
-            raise InputError(message("The density surface has no value in the frame."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The density surface has no value in the frame.")))
     mu = np.where(inside, np.nan_to_num(sub) * dx * -dy / M2_PER_KM2, 0.0)
     cells = np.bincount(code[inside], minlength=len(stratum_keys)).astype(np.int64)
     empty = [k for k, n in zip(stratum_keys, cells) if n == 0]
     if empty:
         raise InputError(
-            message("Strata {ids} hold no cell centre of the density surface inside the "
-                    "frame. Remove them, merge them with a neighbour, or use a finer surface.",
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Strata {ids} hold no cell centre of the density surface inside the "
+                "frame. Remove them, merge them with a neighbour, or use a finer surface."),
                     ids=", ".join(str(k) for k in empty)),
             ids=empty,
         )
@@ -360,13 +367,14 @@ def counting_region(shape, size, half_width=0.0):
     size = float(size)
     half_width = float(half_width or 0.0)
     if shape not in (POINT, SQUARE, CIRCLE, LINE):
-        raise InputError(message("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect)."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")))
     if not size > 0:
         raise InputError(message(_SIZE_NOT_POSITIVE[shape]))
     if shape == LINE and not half_width > 0:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "A line transect needs the half-width of its counting strip (more than 0 m): animals are counted "
-            "up to that distance on either side of the line."
+            "up to that distance on either side of the line.")
         ))
     if shape in (POINT, CIRCLE):
         return CountingRegion("circle", radius=size)
@@ -621,7 +629,8 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         named in messages about the frame when there are no strata.
     """
     if overdispersion < 0:
-        raise InputError(message("The overdispersion k must be 0 (Poisson counts) or more."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The overdispersion k must be 0 (Poisson counts) or more.")))
     spec = layout.LayoutSpec(design=layout.SIMPLE_RANDOM, shape=int(shape), size=float(size), bearing=float(bearing),
                              inside=bool(inside))
     factor = subdivision(grid, region)
@@ -637,16 +646,17 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         covered = _union(cut)
         lost = 1.0 - covered.area / frame.area if frame.area > 0 else 0.0
         if lost > 0.005:
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The strata cover {share:.1%} of the frame: every design is compared on the part the strata "
-                "cover.", share=1 - lost))
+                "cover."), share=1 - lost))
         prepared = layout.prepare_strata(cut, feature_ids=strata_ids, strata=keys, n_units=2 * len(strata),
                                          spec=spec)
         position = {k: i for i, k in enumerate(grid.keys)}
         try:
             codes = np.array([position[st.key] for st in prepared.strata], dtype=int)
         except KeyError:
-            raise InputError(message("A stratum of the layout has no cells on the surface grid.")) from None
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "A stratum of the layout has no cells on the surface grid."))) from None
         sd, mean = stratum_unit_sd(grid, prepared, codes, region, factor, spec.bearing, overdispersion, rng, sd_draws)
     if strata is None and frame_parts is not None and frame_ids is not None:  # messages name the features
         whole = layout.prepare_strata(list(frame_parts), feature_ids=frame_ids,
@@ -726,15 +736,18 @@ def plan_design(setup, design, n_units):
     """
     design = int(design)
     if design not in range(len(DESIGNS)):
-        raise InputError(message("Unknown design {design}; use 0 to {last}.", design=design, last=len(DESIGNS) - 1))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Unknown design {design}; use 0 to {last}."), design=design, last=len(DESIGNS) - 1))
     n_units = int(n_units)
     if n_units < layout.MIN_PER_STRATUM:
-        raise InputError(message("N_UNITS must be at least {minimum}.", minimum=layout.MIN_PER_STRATUM))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "N_UNITS must be at least {minimum}."), minimum=layout.MIN_PER_STRATUM))
     spec = replace(setup.spec, design=LAYOUT_DESIGN[design])
     grid = setup.grid
     if design in STRATIFIED_DESIGNS:
         if setup.strata is None:
-            raise InputError(message("The {design} design needs strata: give the STRATA layer.",
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The {design} design needs strata: give the STRATA layer."),
                                      design=message(DESIGNS[design])))
         strata = setup.strata.strata
         areas = grid.stratum_areas_km2[setup.stratum_codes]
@@ -811,15 +824,15 @@ def simulate_designs(setup, designs, n_units, replicates, rng, confidence=0.95, 
     designs = [int(d) for d in designs]
     replicates = int(replicates)
     if replicates < 2:
-        raise InputError(message("REPLICATES must be at least 2."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "REPLICATES must be at least 2.")))
     plans = tuple(plan_design(setup, d, n_units) for d in designs)
     units = sum(sum(plan.allocation) for plan in plans)
     cells = units * setup.region.area / (setup.grid.cell_area / setup.factor ** 2)
     if cells > MAX_CELLS_PER_REPLICATE:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Each simulated survey would count about {millions:.0f} million surface cells ({units} units of "
             "{unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample "
-            "the surface to coarser cells, or compare fewer designs or units.",
+            "the surface to coarser cells, or compare fewer designs or units."),
             millions=cells / 1e6, units=units, unit_area=setup.region.area, cell_width=setup.grid.cell_width))
     shape = (replicates, len(plans))
     truth = np.full(replicates, np.nan)
@@ -1064,19 +1077,20 @@ def bias_warnings(performance, n_units, level=BIAS_TEST_LEVEL):
         beyond = abs(t) > critical and (not np.isfinite(t1) or (abs(t1) > critical and t * t1 > 0))
         if abs(p.rel_bias) > NOTABLE_BIAS and beyond:
             noise = critical * bias_standard_error(p)
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
                 "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
                 "design(s)). A likely cause: units near the edge of their stratum count only the part inside it "
                 "(or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their "
                 "density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact "
-                "strata, reduce it."
+                "strata, reduce it.")
                 if p.design in STRATIFIED_DESIGNS else
-                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
-                "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
-                "design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, "
-                "kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density "
-                "differs from the interior, the estimate is biased. Smaller units reduce it.",
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
+                    "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
+                    "design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, "
+                    "kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density "
+                    "differs from the interior, the estimate is biased. Smaller units reduce it."),
                 design=message(DESIGNS[p.design]), n_units=n_units, bias=p.rel_bias, noise=noise,
                 replicates=p.replicates, level=level, tests=len(tested)))
     return warnings
@@ -1099,12 +1113,13 @@ def compare_designs(setup, designs, n_units, replicates, rng, confidence=0.95, v
         performance.append(DesignPerformance(plan.design, DESIGNS[plan.design], int(n_units), plan.allocation,
                                              **stats))
         design_name = message(DESIGNS[plan.design])
-        warnings.extend(message("{design}: {warning}", design=design_name, warning=w) for w in plan.warnings)
+        warnings.extend(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{design}: {warning}"), design=design_name, warning=w) for w in plan.warnings)
         if stats["failed"]:
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "{design} at {n_units} units: {failed} of {replicates} simulated surveys "
                 "gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out "
-                "of its figures.", design=design_name, n_units=n_units, failed=stats["failed"], replicates=replicates))
+                "of its figures."), design=design_name, n_units=n_units, failed=stats["failed"], replicates=replicates))
     warnings.extend(bias_warnings(performance, n_units))
     recommended, near = recommend_design(performance)
     return Comparison(int(n_units), tuple(performance), recommended, near, results, plans, tuple(warnings))
@@ -1139,19 +1154,21 @@ def parse_unit_range(text):
             else:
                 values.append(int(float(part)))
     except ValueError:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The range of units '{text}' cannot be read. Give whole numbers separated by commas "
-            "(e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).", text=text
+            "(e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20)."), text=text
         )) from None
     if backwards is not None:
         part, start, stop, step = backwards
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "In the range of units '{text}', '{part}' starts above where it stops (start {start}, stop {stop}), "
             "so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. "
-            "{stop}:{start}:{step}).", text=text, part=part, start=start, stop=stop, step=step))
+            "{stop}:{start}:{step})."), text=text, part=part, start=start, stop=stop, step=step))
     if any(v < layout.MIN_PER_STRATUM for v in values):
-        raise InputError(message("Every number of units in the range must be at least {minimum}.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Every number of units in the range must be at least {minimum}."),
                                  minimum=layout.MIN_PER_STRATUM))
     if len(set(values)) > 20:
-        raise InputError(message("The range of units holds more than 20 values; give at most 20."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The range of units holds more than 20 values; give at most 20.")))
     return tuple(sorted(set(values)))

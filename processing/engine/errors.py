@@ -9,7 +9,29 @@ names, lists of ids). ``str()`` of a :class:`Message` is the English text; the h
 translates the template (context ``PlotwiseEngine``) and fills in the same values.
 Every word of the sentence sits in the template, so a translator sees the whole
 sentence; numbers are formatted in the template (``{cv:.3f}``).
+
+The template is marked for the translators where it is written::
+
+    message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Stratum {ids} is empty."), ids=shown)
+
+``pylupdate5`` (``make update-translations``) reads ``QT_TRANSLATE_NOOP("context", "text")``
+calls and writes the text into ``i18n/*.ts`` under that context; the marker itself only
+returns the text, so the engine stays free of the host.
 """
+
+ENGINE_CONTEXT = "PlotwiseEngine"
+
+
+def QT_TRANSLATE_NOOP(context, text):
+    """Mark ``text`` for translation in ``context`` and return it unchanged.
+
+    The name and signature of Qt's marker, which every lupdate tool recognises. ``context``
+    must be a string literal (pylupdate5 skips a call whose context is a variable), and so
+    must ``text``, without ``\\u``/``\\N`` escapes (pylupdate5 does not decode them: write the
+    character itself). Engine templates use the context ``"PlotwiseEngine"``; host-free report
+    code uses ``"PlotwiseReport"``.
+    """
+    return text
 
 
 class Message(str):

@@ -30,7 +30,7 @@ import numpy as np
 from scipy import special
 from shapely.ops import unary_union
 
-from .errors import Cancelled, InputError, Message, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, Message, message
 from .geometry import OVERLAP_ERROR_SHARE, SLIVER_AREA, listed_overlaps, overlapping_pairs, worst_overlap_share
 from .geometry_types import polygonal_part
 from .variance import collapse_single_unit_strata, local_neighbourhood_variance
@@ -289,7 +289,7 @@ def _id_list(ids):
     ids = list(ids)
     shown = ", ".join(str(i) for i in ids[:MAX_LISTED_IDS])
     if len(ids) > MAX_LISTED_IDS:
-        return message("{shown} … ({n} in all)", shown=shown, n=len(ids))
+        return message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{shown} … ({n} in all)"), shown=shown, n=len(ids))
     return shown
 
 
@@ -323,9 +323,10 @@ def read_counts(counts, unit_ids, count_name="count"):
     if bad.any():
         ids = unit_ids[bad]
         raise InputError(
-            message("The {count_name} field holds values that are not numbers for units {ids}. "
-                    "Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) "
-                    "for units that were not surveyed.", count_name=count_name, ids=_id_list(ids)),
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The {count_name} field holds values that are not numbers for units {ids}. "
+                "Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) "
+                "for units that were not surveyed."), count_name=count_name, ids=_id_list(ids)),
             ids=ids,
         )
     infinite = np.isinf(values)
@@ -333,9 +334,10 @@ def read_counts(counts, unit_ids, count_name="count"):
     if (infinite | negative).any():
         ids = unit_ids[infinite | negative]
         raise InputError(
-            message("The {count_name} field holds negative or infinite counts for units {ids}. "
-                    "Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit "
-                    "was not surveyed.", count_name=count_name, ids=_id_list(ids)),
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The {count_name} field holds negative or infinite counts for units {ids}. "
+                "Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit "
+                "was not surveyed."), count_name=count_name, ids=_id_list(ids)),
             ids=ids,
         )
     return values
@@ -483,21 +485,23 @@ def frame_strata(stratum_ids, geometries, feature_ids=None, *, m2_per_unit=1.0, 
         values = dict(layer=layer, field=field, ids=_id_list(unlabelled_ids), area=lost_m2 / m2_per_unit, unit=unit)
         if lost_m2 >= SLIVER_AREA and not drop_unlabelled:
             raise InputError(
-                message("Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. "
-                        "These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would "
-                        "silently speak for a smaller frame. Give each polygon the id of its stratum, delete the "
-                        "polygons that are not part of the frame, or choose to leave out strata with no surveyed "
-                        "unit (the frame then shrinks).", **values),
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. "
+                    "These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would "
+                    "silently speak for a smaller frame. Give each polygon the id of its stratum, delete the "
+                    "polygons that are not part of the frame, or choose to leave out strata with no surveyed "
+                    "unit (the frame then shrinks)."), **values),
                 ids=unlabelled_ids,
             )
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Layer '{layer}': the stratum id field '{field}' is empty (NULL) for feature id(s) {ids}. These "
             "polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. "
-            "To keep them in the frame, give each polygon the id of its stratum.", **values))
+            "To keep them in the frame, give each polygon the id of its stratum."), **values))
     if not merged:
         raise InputError(
-            message("Layer '{layer}': no polygon has a stratum id in the field '{field}'. Fill in the stratum ids, "
-                    "or choose the field that holds them.", layer=layer, field=field),
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Layer '{layer}': no polygon has a stratum id in the field '{field}'. Fill in the stratum ids, "
+                "or choose the field that holds them."), layer=layer, field=field),
             ids=unlabelled_ids,
         )
 
@@ -513,18 +517,19 @@ def frame_strata(stratum_ids, geometries, feature_ids=None, *, m2_per_unit=1.0, 
                       percent=100.0 * overlap_m2 / covered_m2, covered=covered_m2 / m2_per_unit)
         if worst_overlap_share(shapes, pairs) > OVERLAP_ERROR_SHARE:
             raise InputError(
-                message("Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} "
-                        "({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more "
-                        "than one stratum, which inflates the frame area and the abundance. Fix the strata polygons "
-                        "so that they do not overlap: each piece of land belongs to one stratum only (cut each "
-                        "overlap out of all strata but one, or redraw the shared edges).", **values),
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} "
+                    "({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more "
+                    "than one stratum, which inflates the frame area and the abundance. Fix the strata polygons "
+                    "so that they do not overlap: each piece of land belongs to one stratum only (cut each "
+                    "overlap out of all strata but one, or redraw the shared edges)."), **values),
                 ids=sorted({k for pair in overlaps for k in pair[:2]}, key=natural_key),
             )
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Layer '{layer}': the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the "
             "{covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the "
             "abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared "
-            "edges, or cut each overlap out of all strata but one).", **values))
+            "edges, or cut each overlap out of all strata but one)."), **values))
     return StrataFrame(
         geometries=merged,
         areas={k: a / m2_per_unit for k, a in areas_m2.items()},
@@ -615,18 +620,23 @@ def estimate_density(
     Estimate
     """
     if not 0.0 < confidence < 1.0:
-        raise InputError(message("The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95."),
                                  confidence=confidence))
     if ci_method not in CI_METHODS:
-        raise InputError(message("Unknown interval method {method!r}; use one of {methods}.", method=ci_method,
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Unknown interval method {method!r}; use one of {methods}."), method=ci_method,
                                  methods=", ".join(CI_METHODS)))
     if variance_method not in VARIANCE_METHODS:
-        raise InputError(message("Unknown variance method {method!r}; use one of {methods}.", method=variance_method,
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Unknown variance method {method!r}; use one of {methods}."), method=variance_method,
                                  methods=", ".join(VARIANCE_METHODS)))
     if not (0.0 < detection_p <= 1.0):
-        raise InputError(message("The detection probability must lie in (0, 1] (got {p}).", p=detection_p))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The detection probability must lie in (0, 1] (got {p})."), p=detection_p))
     if detection_se is None or detection_se < 0:
-        raise InputError(message("The standard error of the detection probability must be 0 or more."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The standard error of the detection probability must be 0 or more.")))
     if target_cv is not None and not target_cv > 0:
         target_cv = None
     warnings = []
@@ -635,11 +645,12 @@ def estimate_density(
     n_all = strata_in.size
     ids = np.arange(n_all) if unit_ids is None else np.asarray(unit_ids, dtype=object).ravel()
     if ids.size != n_all:
-        raise InputError(message("unit_ids must have one id per unit."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "unit_ids must have one id per unit.")))
     y_all = read_counts(counts, ids)
     a_all = np.asarray(unit_areas, dtype=float).ravel()
     if y_all.size != n_all or a_all.size != n_all:
-        raise InputError(message("counts, unit_areas and strata must have one value per unit."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "counts, unit_areas and strata must have one value per unit.")))
     unique_labels, label_index = stratum_labels(strata_in)
     frame = {}
     for key, area in dict(stratum_areas).items():
@@ -648,7 +659,8 @@ def estimate_density(
     bad_area = [k for k, v in frame.items() if not (np.isfinite(v) and v > 0)]
     if bad_area:
         raise InputError(
-            message("Strata {ids} have no area. Check the strata layer's geometries.", ids=_id_list(bad_area)),
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Strata {ids} have no area. Check the strata layer's geometries."), ids=_id_list(bad_area)),
             ids=bad_area,
         )
 
@@ -656,8 +668,9 @@ def estimate_density(
     no_stratum = np.equal(unique_labels, None)[label_index]
     if no_stratum.any():
         raise InputError(
-            message("Units {ids} have no stratum (the stratum field is empty). Fill in their "
-                    "stratum, or leave the stratum field out to treat the frame as one stratum.",
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Units {ids} have no stratum (the stratum field is empty). Fill in their "
+                "stratum, or leave the stratum field out to treat the frame as one stratum."),
                     ids=_id_list(ids[no_stratum])),
             ids=ids[no_stratum],
         )
@@ -666,28 +679,30 @@ def estimate_density(
     if unknown.any():
         names = sorted((str(lab) for lab in unique_labels[unknown_labels]), key=natural_key)
         raise InputError(
-            message("Units {ids} have stratum ids ({names}) that are not in the strata layer. "
-                    "Check the stratum field of the units and the id field of the strata layer.",
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Units {ids} have stratum ids ({names}) that are not in the strata layer. "
+                "Check the stratum field of the units and the id field of the strata layer."),
                     ids=_id_list(ids[unknown]), names=_id_list(names)),
             ids=ids[unknown],
         )
 
     missing = np.isnan(y_all)
     if missing.any():
-        warnings.append(message(
-            "{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}."),
             n=int(missing.sum()), ids=_id_list(ids[missing])))
     surveyed = ~missing
     if not surveyed.any():
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units "
-            "(0 when none was seen) in the count field."
+            "(0 when none was seen) in the count field.")
         ))
     bad_units = surveyed & ~(np.isfinite(a_all) & (a_all > 0))
     if bad_units.any():
         raise InputError(
-            message("Units {ids} have no positive surveyed area. Give a unit area field with "
-                    "values above 0, or a fixed unit area for points and lines.", ids=_id_list(ids[bad_units])),
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Units {ids} have no positive surveyed area. Give a unit area field with "
+                "values above 0, or a fixed unit area for points and lines."), ids=_id_list(ids[bad_units])),
             ids=ids[bad_units],
         )
 
@@ -696,14 +711,15 @@ def estimate_density(
         if np.any((values != 0) & (values != 1)):
             odd = ids[surveyed][(values != 0) & (values != 1)]
             raise InputError(
-                message("Presence data must be 0 or 1; units {ids} hold other values. "
-                        "Use the counts without the presence option, or recode the field.", ids=_id_list(odd)),
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "Presence data must be 0 or 1; units {ids} hold other values. "
+                    "Use the counts without the presence option, or recode the field."), ids=_id_list(odd)),
                 ids=odd,
             )
         if detection_p < 1.0 or detection_se > 0:
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The detection probability was not applied to presence data: dividing a proportion of "
-                "occupied units by p is not an occupancy correction, which needs repeat visits."
+                "occupied units by p is not an occupancy correction, which needs repeat visits.")
             ))
         detection_p, detection_se = 1.0, 0.0
 
@@ -720,15 +736,16 @@ def estimate_density(
     if empty:
         if not drop_empty_strata:
             raise InputError(
-                message("No unit of strata {ids} was surveyed, so their abundance cannot be estimated. "
-                        "Survey units there, or choose to leave these strata out (the estimate then covers a "
-                        "smaller frame).", ids=_id_list(empty)),
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "No unit of strata {ids} was surveyed, so their abundance cannot be estimated. "
+                    "Survey units there, or choose to leave these strata out (the estimate then covers a "
+                    "smaller frame)."), ids=_id_list(empty)),
                 ids=empty,
             )
         dropped_area = float(sum(frame[lab] for lab in empty))
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Strata {ids} had no surveyed unit and were left out: the frame shrank by "
-            "{dropped_area:.6g} area units, and the estimate covers the remaining strata only.",
+            "{dropped_area:.6g} area units, and the estimate covers the remaining strata only."),
             ids=_id_list(empty), dropped_area=dropped_area))
     labels = [lab for lab in all_labels if n_per[lab] > 0]
     n_strata = len(labels)
@@ -742,13 +759,15 @@ def estimate_density(
     xy = None
     if variance_method == VARIANCE_LOCAL:
         if coords is None:
-            raise InputError(message("The local neighbourhood variance needs the positions of the units."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The local neighbourhood variance needs the positions of the units.")))
         xy = np.asarray(coords, dtype=float).reshape(n_all, 2)[keep]
         unplaced = ~np.isfinite(xy).all(axis=1)
         if unplaced.any():
             raise InputError(
-                message("Units {ids} have no position, so the local neighbourhood variance "
-                        "cannot use them. Give their locations, or use the simple random sampling formula.",
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "Units {ids} have no position, so the local neighbourhood variance "
+                    "cannot use them. Give their locations, or use the simple random sampling formula."),
                         ids=_id_list(ids[keep][unplaced])),
                 ids=ids[keep][unplaced],
             )
@@ -772,8 +791,9 @@ def estimate_density(
     if fpc and np.any(sampled_fraction > 1 + 1e-9):
         over = [labels[h] for h in np.flatnonzero(sampled_fraction > 1 + 1e-9)]
         raise InputError(
-            message("In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas "
-                    "and the area unit, or switch off the finite-population correction.", ids=_id_list(over)),
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas "
+                "and the area unit, or switch off the finite-population correction."), ids=_id_list(over)),
             ids=over,
         )
     fpc_h = 1.0 - sampled_fraction if fpc else np.ones(n_strata)
@@ -813,19 +833,20 @@ def estimate_density(
             s2_h[members] = pooled
             df_h[members] = n_h[members].sum() - 1
         pairs = tuple(
-            (f"s{i}", message("{label} (one unit) collapsed with {others}", label=labels[h],
+            (f"s{i}", message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "{label} (one unit) collapsed with {others}"), label=labels[h],
                               others=", ".join(labels[j] for j in collapsed[h])))
             for i, h in enumerate(singles)
         )
         groups = Message("; ".join("{%s}" % name for name, _ in pairs), pairs)  # a list: no words of its own
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), "
             "which counts differences between the collapsed strata as variance and so tends to be "
-            "too large.", groups=groups))
+            "too large."), groups=groups))
     elif singles.size:
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The only stratum has one surveyed unit: no variance, standard error or interval can be "
-            "estimated. Survey at least two units."
+            "estimated. Survey at least two units.")
         ))
 
     var_dens_h = fpc_h * s2_h / (n_h * mean_a ** 2)
@@ -839,9 +860,9 @@ def estimate_density(
             local_used.append(labels[h])
         if len(local_used) < n_strata:
             rest = [lab for lab in labels if lab not in local_used]
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Strata {ids} have fewer than 3 units or were collapsed: their variance uses "
-                "the simple random sampling formula.", ids=_id_list(rest)))
+                "the simple random sampling formula."), ids=_id_list(rest)))
     if progress is not None and progress(0.2):
         raise Cancelled()
 
@@ -875,7 +896,8 @@ def estimate_density(
     boot = None
     if ci_method == CI_BOOTSTRAP:
         if rng is None:
-            raise InputError(message("The bootstrap needs a random generator (rng)."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The bootstrap needs a random generator (rng).")))
         boot = stratified_bootstrap(
             y, a, code, n_strata, group, area_h, p, p_se, rng,
             n_bootstrap=max(int(n_bootstrap), MIN_BOOTSTRAP), progress=progress, fpc_h=fpc_h,
@@ -907,12 +929,13 @@ def estimate_density(
     if progress is not None and progress(1.0):
         raise Cancelled()
     if n_total == 0:
-        warnings.append(message("No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined."))
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.")))
     elif np.any((sum_y == 0) & (n_h > 1)):
         zero = [labels[h] for h in np.flatnonzero((sum_y == 0) & (n_h > 1))]
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "In strata {ids} every surveyed unit counted 0: their standard error is 0, which "
-            "understates the uncertainty (the species may be present but rare there).", ids=_id_list(zero)))
+            "understates the uncertainty (the species may be present but rare there)."), ids=_id_list(zero)))
     return Estimate(
         strata=tuple(rows),
         overall=overall,
@@ -955,17 +978,17 @@ def _plan_next_survey(rows, overall, area_h, mean_a, s2_h, n_total, target_cv, c
     """Fill ``n_next`` by Neyman allocation on the observed residual SDs."""
     note = ""
     if cv_p >= target_cv:
-        note = message(
+        note = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The target CV {target_cv:.3g} cannot be reached by more units: the detection probability's own "
-            "CV is {cv_p:.3g}. Improve the detection study first.", target_cv=target_cv, cv_p=cv_p)
+            "CV is {cv_p:.3g}. Improve the detection study first."), target_cv=target_cv, cv_p=cv_p)
         return rows, overall, note
     cv_count = math.sqrt(target_cv ** 2 - cv_p ** 2)
     units_h = area_h / mean_a
     sd_h = np.sqrt(np.nan_to_num(s2_h, nan=0.0))
     if n_total <= 0 or not np.any(sd_h > 0):
         n_h = np.full(len(rows), 2.0)
-        note = message(
-            "No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum.")
+        note = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "No variation was observed, so the next survey's sample sizes are set to the minimum of 2 per stratum."))
     else:
         _, n_h = neyman_sample_size(units_h, sd_h, (cv_count * n_total) ** 2, fpc=fpc)
     n_next = np.maximum(np.ceil(n_h - 1e-9), 2).astype(int)

@@ -25,7 +25,7 @@ from shapely.geometry import MultiPolygon, Polygon
 from shapely.geometry.base import BaseGeometry
 from shapely.ops import unary_union
 
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .geometry import without_slivers
 from .geometry_types import polygonal_part, valid_polygonal
 
@@ -220,16 +220,16 @@ def build_frame(study_area, exclusions=None, mask=None, edge_buffer=0.0, progres
     """
     edge_buffer = float(edge_buffer or 0.0)
     if not np.isfinite(edge_buffer) or edge_buffer < 0:
-        raise InputError(message(
-            "EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.", edge_buffer=edge_buffer
-        ))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres."),
+            edge_buffer=edge_buffer))
     _check_cancel(progress, 0.0)
     study = dissolve(study_area)
     study_m2 = float(study.area)
     if study.is_empty or study_m2 <= 0.0:
         raise InputError(message(
-            "The study area (INPUT) has no polygon with a positive area. "
-            "Check that the layer holds polygons and is in a projected CRS in metres."
+            QT_TRANSLATE_NOOP("PlotwiseEngine", "The study area (INPUT) has no polygon with a positive area. "
+            "Check that the layer holds polygons and is in a projected CRS in metres.")
         ))
 
     frame = study
@@ -275,23 +275,23 @@ def _emptied_message(rule, before_m2, edge_buffer, study):
     """Error text naming the rule that left nothing of the frame."""
     hectares = before_m2 / 1e4
     if rule == "exclude":
-        return message(
+        return message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Nothing is left of the study area (INPUT) after removing the excluded polygons "
-            "(EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.",
+            "(EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out."),
             hectares=hectares,
         )
     if rule == "mask":
-        return message(
+        return message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Nothing is left of the frame after the raster mask (MASK): every cell over the "
             "remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, "
-            "check the raster's units, or check that the raster covers the study area.",
+            "check the raster's units, or check that the raster covers the study area."),
             hectares=hectares,
         )
     minx, miny, maxx, maxy = study.bounds
     return message(
-        "Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = "
+        QT_TRANSLATE_NOOP("PlotwiseEngine", "Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = "
         "{edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study "
         "area's boundary (study area extent {width:.0f} m x {height:.0f} m). "
-        "Use a smaller EDGE_BUFFER.",
+        "Use a smaller EDGE_BUFFER."),
         edge_buffer=edge_buffer, hectares=hectares, width=maxx - minx, height=maxy - miny,
     )

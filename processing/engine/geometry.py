@@ -48,7 +48,7 @@ from scipy.spatial import Delaunay
 from shapely.geometry import MultiPolygon, Polygon
 from shapely.geometry.base import BaseGeometry
 
-from .errors import Message, message
+from .errors import QT_TRANSLATE_NOOP, Message, message
 from .geometry_types import polygonal_part, valid_polygonal
 
 SHAPELY_2 = int(shapely.__version__.split(".")[0]) >= 2
@@ -201,13 +201,14 @@ def listed_overlaps(names, pairs, m2_per_unit=1.0, unit="m²", limit=20):
     ``names`` name the geometries; at most ``limit`` pairs are shown.
     """
     items = tuple(
-        (f"p{n}", message("{first} and {second} ({area:.4g} {unit})", first=names[i], second=names[j],
+        (f"p{n}", message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{first} and {second} ({area:.4g} {unit})"), first=names[i], second=names[j],
                           area=shared / m2_per_unit, unit=unit))
         for n, (i, j, shared) in enumerate(pairs[:limit])
     )
     listed = Message("; ".join("{%s}" % name for name, _ in items), items)  # a list: no words of its own
     if len(pairs) > limit:
-        listed = message("{shown} … ({n} in all)", shown=listed, n=len(pairs))
+        listed = message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{shown} … ({n} in all)"), shown=listed, n=len(pairs))
     return listed
 
 

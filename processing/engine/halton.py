@@ -44,7 +44,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .geometry import contains_xy, triangle_cover, uniform_points
 
 BASES = (2, 3)
@@ -206,8 +206,9 @@ def balanced_acceptance_sample(region, n, rng, box=None, accept=None, progress=N
         cover = triangle_cover(region)
     first = uniform_points(cover, region, 1, rng)
     if len(first) == 0:  # a region too thin for its coordinates to resolve (slivers are removed before)
-        raise InputError(message("No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a "
-                                 "sample unit. Check the frame for slivers.", area=float(region.area)))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a "
+            "sample unit. Check the frame for slivers."), area=float(region.area)))
     first = first[0]
     start, shift = region_start((first - origin) / span)
     if max_tries is None:

@@ -61,48 +61,68 @@ from shapely.ops import unary_union
 
 from . import geometry as geo
 from .crs import lonlat_transformer
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .halton import balanced_acceptance_sample
 from .unit_shapes import (  # noqa: F401 (CIRCLE, SQUARE re-exported for the algorithm)
     CIRCLE, LINE, POINT, SHAPES, SQUARE, circumscribing_radius, transect_ends, unit_area, unit_outlines,
 )
 
-DESIGNS = ("simple random", "systematic grid", "spatially balanced")
+DESIGNS = (
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "simple random"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "systematic grid"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "spatially balanced"),
+)
 SIMPLE_RANDOM, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(3)
 RANDOM_BEARING = -1
 
 # message templates that differ by unit shape (every word of a message sits in its template)
 _SIZE_NOT_POSITIVE = {
-    POINT: "SIZE must be more than 0 m for a point unit; it is {size}.",
-    SQUARE: "SIZE must be more than 0 m for a square unit; it is {size}.",
-    CIRCLE: "SIZE must be more than 0 m for a circle unit; it is {size}.",
-    LINE: "SIZE must be more than 0 m for a line unit; it is {size}.",
+    POINT: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m for a point unit; it is {size}."),
+    SQUARE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m for a square unit; it is {size}."),
+    CIRCLE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m for a circle unit; it is {size}."),
+    LINE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m for a line unit; it is {size}."),
 }
 _TOO_SMALL = {  # (whole frame?, shape)
-    (True, POINT): "The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies "
-                   "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
-                   "merge the stratum with a neighbour.",
-    (True, SQUARE): "The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies "
-                    "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
-                    "merge the stratum with a neighbour.",
-    (True, CIRCLE): "The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies "
-                    "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
-                    "merge the stratum with a neighbour.",
-    (True, LINE): "The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies "
-                  "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
-                  "merge the stratum with a neighbour.",
-    (False, POINT): "Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point "
-                    "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
-                    "INSIDE, or merge the stratum with a neighbour.",
-    (False, SQUARE): "Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point "
-                     "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
-                     "INSIDE, or merge the stratum with a neighbour.",
-    (False, CIRCLE): "Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point "
-                     "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
-                     "INSIDE, or merge the stratum with a neighbour.",
-    (False, LINE): "Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point "
-                   "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
-                   "INSIDE, or merge the stratum with a neighbour.",
+    (True, POINT): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies "
+        "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+        "merge the stratum with a neighbour."),
+    (True, SQUARE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies "
+        "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+        "merge the stratum with a neighbour."),
+    (True, CIRCLE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies "
+        "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+        "merge the stratum with a neighbour."),
+    (True, LINE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies "
+        "{radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or "
+        "merge the stratum with a neighbour."),
+    (False, POINT): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point "
+        "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+        "INSIDE, or merge the stratum with a neighbour."),
+    (False, SQUARE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point "
+        "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+        "INSIDE, or merge the stratum with a neighbour."),
+    (False, CIRCLE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point "
+        "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+        "INSIDE, or merge the stratum with a neighbour."),
+    (False, LINE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point "
+        "lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick "
+        "INSIDE, or merge the stratum with a neighbour."),
 }
 # most candidate points a systematic grid may test in one stratum (about 0.5 GB of work arrays)
 MAX_GRID_CANDIDATES = 5_000_000
@@ -110,18 +130,26 @@ PRIMARY, RESERVE = "primary", "reserve"
 # GPS waypoint descriptions: one template per unit shape and role (and transect end), so that a
 # translator sees each whole phrase; the English text is what the GPX files always carried
 _WAYPOINT_TEXT = {
-    (POINT, PRIMARY): "point unit {unit} (primary, stratum {stratum})",
-    (POINT, RESERVE): "point unit {unit} (reserve, stratum {stratum})",
-    (SQUARE, PRIMARY): "square unit {unit} (primary, stratum {stratum})",
-    (SQUARE, RESERVE): "square unit {unit} (reserve, stratum {stratum})",
-    (CIRCLE, PRIMARY): "circle unit {unit} (primary, stratum {stratum})",
-    (CIRCLE, RESERVE): "circle unit {unit} (reserve, stratum {stratum})",
+    (POINT, PRIMARY): QT_TRANSLATE_NOOP("PlotwiseEngine", "point unit {unit} (primary, stratum {stratum})"),
+    (POINT, RESERVE): QT_TRANSLATE_NOOP("PlotwiseEngine", "point unit {unit} (reserve, stratum {stratum})"),
+    (SQUARE, PRIMARY): QT_TRANSLATE_NOOP("PlotwiseEngine", "square unit {unit} (primary, stratum {stratum})"),
+    (SQUARE, RESERVE): QT_TRANSLATE_NOOP("PlotwiseEngine", "square unit {unit} (reserve, stratum {stratum})"),
+    (CIRCLE, PRIMARY): QT_TRANSLATE_NOOP("PlotwiseEngine", "circle unit {unit} (primary, stratum {stratum})"),
+    (CIRCLE, RESERVE): QT_TRANSLATE_NOOP("PlotwiseEngine", "circle unit {unit} (reserve, stratum {stratum})"),
 }
 _TRANSECT_END_TEXT = {
-    ("start", PRIMARY): "start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)",
-    ("start", RESERVE): "start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)",
-    ("end", PRIMARY): "end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)",
-    ("end", RESERVE): "end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)",
+    ("start", PRIMARY): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)"),
+    ("start", RESERVE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)"),
+    ("end", PRIMARY): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)"),
+    ("end", RESERVE): QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)"),
 }
 MIN_PER_STRATUM = 2  # a stratum variance needs two units: common practice
 # With INSIDE, a warning when the edge band where no centre can fall exceeds this share of a
@@ -165,18 +193,22 @@ class LayoutSpec:
 
     def __post_init__(self):
         if self.design not in (0, 1, 2):
-            raise InputError(message("DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced)."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).")))
         if self.shape not in (0, 1, 2, 3):
-            raise InputError(message("SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect)."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).")))
         if not self.size >= 0 or (self.shape != POINT and not self.size > 0):
             raise InputError(message(_SIZE_NOT_POSITIVE[self.shape], size=self.size))
         if self.bearing != RANDOM_BEARING and not (0 <= self.bearing < 360):
-            raise InputError(message("BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.",
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}."),
                                      bearing=self.bearing))
         if self.min_spacing < 0:
-            raise InputError(message("MIN_SPACING must be 0 or more metres."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "MIN_SPACING must be 0 or more metres.")))
         if self.reserve < 0 or int(self.reserve) != self.reserve:
-            raise InputError(message("RESERVE must be 0 or a positive whole number."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "RESERVE must be 0 or a positive whole number.")))
 
     @property
     def radius(self):
@@ -355,20 +387,22 @@ def counts_from_field(values, feature_ids, field_name="N_FIELD"):
         out.append(int(f) if math.isfinite(f) and f >= 0 and f == math.floor(f) else -1)
     if bad_null:
         raise InputError(
-            message("{field} is empty (NULL) or not a number for feature(s) {ids}. "
-                    "Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.",
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{field} is empty (NULL) or not a number for feature(s) {ids}. "
+                    "Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS."),
                     field=field_name, ids=_ids(bad_null)),
             ids=bad_null,
         )
     if bad_neg:
         raise InputError(
-            message("{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.",
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "{field} is negative for feature(s) {ids}. Use 0 or a positive whole number."),
                     field=field_name, ids=_ids(bad_neg)),
             ids=bad_neg,
         )
     if bad_frac:
         raise InputError(
-            message("{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.",
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first."),
                     field=field_name, ids=_ids(bad_frac)),
             ids=bad_frac,
         )
@@ -379,7 +413,8 @@ def _ids(ids, limit=20):
     ids = list(ids)
     text = ", ".join(str(i) for i in ids[:limit])
     if len(ids) > limit:
-        return message("{shown} and {more} more", shown=text, more=len(ids) - limit)
+        return message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{shown} and {more} more"), shown=text, more=len(ids) - limit)
     return text
 
 
@@ -449,7 +484,8 @@ def prepare_strata(
     feature_ids = list(feature_ids)
     warnings = []
     if n_values is None and (n_units is None or int(n_units) < 1):
-        raise InputError(message("Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1)."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).")))
     keep, skipped, slivers, repaired = [], [], [], []
     for i, g in enumerate(geometries):
         fixed = geo.repair_polygonal(g)
@@ -464,18 +500,22 @@ def prepare_strata(
             continue
         keep.append((i, kept))
     if repaired:
-        warnings.append(message("Invalid geometry was repaired for feature(s) {ids}; check their outlines.",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Invalid geometry was repaired for feature(s) {ids}; check their outlines."),
                                 ids=_ids(repaired)))
     if skipped:
-        warnings.append(message("Empty or zero-area feature(s) {ids} were skipped.", ids=_ids(skipped)))
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Empty or zero-area feature(s) {ids} were skipped."), ids=_ids(skipped)))
     if slivers:
-        warnings.append(message("Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an "
-                                "overlay or a reprojection) and were skipped.", ids=_ids(slivers),
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an "
+            "overlay or a reprojection) and were skipped."), ids=_ids(slivers),
                                 area=geo.SLIVER_AREA))
     skipped += slivers
     if not keep:
-        raise InputError(message("The frame has no polygon of {area:g} m² or more: every feature is empty, has zero "
-                                 "area or is a sliver.", area=geo.SLIVER_AREA))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The frame has no polygon of {area:g} m² or more: every feature is empty, has zero "
+            "area or is a sliver."), area=geo.SLIVER_AREA))
     if n_values is not None:  # checked on the features kept (a skipped empty feature may lack a value)
         n_feat = np.full(len(geometries), -1, dtype=int)
         kept = [i for i, _ in keep]
@@ -485,7 +525,8 @@ def prepare_strata(
         key = strata[i] if strata is not None else None
         if strata is not None and key is None:
             raise InputError(
-                message("{field} is empty (NULL) for feature {fid}. Give it a stratum value.",
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "{field} is empty (NULL) for feature {fid}. Give it a stratum value."),
                         field=stratum_field, fid=feature_ids[i]),
                 ids=[feature_ids[i]],
             )
@@ -512,13 +553,14 @@ def prepare_strata(
             if len(vals) > 1:
                 ids = [feature_ids[i] for i, _ in members]
                 raise InputError(
-                    message(
+                    message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                         "The features of the frame (no stratum field) carry different {n_field} values ({values}) "
                         "(features {ids}). {n_field} is the number of units of the whole stratum: give its features "
-                        "the same value or choose a stratum field so that each feature is a stratum."
+                        "the same value or choose a stratum field so that each feature is a stratum.")
                         if key is None else
+                        QT_TRANSLATE_NOOP("PlotwiseEngine",
                         "The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). "
-                        "{n_field} is the number of units of the whole stratum: give its features the same value.",
+                        "{n_field} is the number of units of the whole stratum: give its features the same value."),
                         key=key, n_field=n_field, values=", ".join(str(v) for v in sorted(vals)), ids=_ids(ids)),
                     ids=ids,
                 )
@@ -527,9 +569,9 @@ def prepare_strata(
     else:
         counts = proportional_counts(areas, int(n_units))
         if int(n_units) < MIN_PER_STRATUM * len(keys):
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; "
-                "every stratum gets {minimum} ({total} units).",
+                "every stratum gets {minimum} ({total} units)."),
                 n_units=int(n_units), minimum=MIN_PER_STRATUM, n_strata=len(keys), total=int(counts.sum())))
     out = []
     radius = spec.radius if spec.inside else 0.0
@@ -543,20 +585,25 @@ def prepare_strata(
             )
         band = 1.0 - eff / area if area > 0 else 0.0
         if radius > 0 and eff > 0 and band > EDGE_BAND_WARNING_SHARE:
-            warnings.append(message(
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) "
                 "where no unit centre can fall; the estimate carries the inner part's density over that band. "
-                "If density differs near edges, turn INSIDE off or use smaller units." if key is None else
-                "Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its "
-                "edge) where no unit centre can fall; the estimate carries the inner part's density over that "
-                "band. If density differs near edges, turn INSIDE off or use smaller units.",
+                "If density differs near edges, turn INSIDE off or use smaller units.") if key is None else
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its "
+                    "edge) where no unit centre can fall; the estimate carries the inner part's density over that "
+                    "band. If density differs near edges, turn INSIDE off or use smaller units."),
                 share=band, radius=radius, key=key))
         if n == 0:
-            warnings.append(message("The frame gets no units; the estimate cannot speak for it." if key is None
-                                    else "Stratum {key} gets no units; the estimate cannot speak for it.", key=key))
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The frame gets no units; the estimate cannot speak for it.") if key is None
+                                    else QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                        "Stratum {key} gets no units; the estimate cannot speak for it."), key=key))
         elif n == 1:
-            warnings.append(message("The frame gets one unit only; its variance cannot be estimated." if key is None
-                                    else "Stratum {key} gets one unit only; its variance cannot be estimated.",
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The frame gets one unit only; its variance cannot be estimated.") if key is None
+                                    else QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                        "Stratum {key} gets one unit only; its variance cannot be estimated."),
                                     key=key))
         if spec.design == SIMPLE_RANDOM:
             draws = (n + spec.reserve) * (3 if spec.min_spacing > 0 else 1.1)
@@ -578,12 +625,13 @@ def _overlap_problems(keys, geometries):
         return []
     listed = geo.listed_overlaps(keys, pairs, 1e4, "ha")
     if geo.worst_overlap_share(geometries, pairs) > geo.OVERLAP_ERROR_SHARE:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be "
             "drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the "
-            "host's Difference or Union tools) and run again.", pairs=listed))
-    return [message("Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons "
-                    "disjoint if this is more than digitising noise.", pairs=listed)]
+            "host's Difference or Union tools) and run again."), pairs=listed))
+    return [message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+        "Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons "
+        "disjoint if this is more than digitising noise."), pairs=listed)]
 
 
 # ----------------------------------------------------------------------------
@@ -667,16 +715,17 @@ def hexagonal_capacity(region, distance, offsets=4):
 def _spacing_error(stratum, wanted, placed, spec):
     fit = hexagonal_capacity(stratum.region, spec.min_spacing)
     return InputError(
-        message(
+        message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for "
             "(primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing "
             "(a hexagonal lattice, the densest arrangement; random layouts fill up well before that). "
-            "Ask for fewer units or reserves, or lower MIN_SPACING."
+            "Ask for fewer units or reserves, or lower MIN_SPACING.")
             if stratum.key is None else
-            "MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for "
-            "(primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing "
-            "(a hexagonal lattice, the densest arrangement; random layouts fill up well before that). "
-            "Ask for fewer units or reserves, or lower MIN_SPACING.",
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for "
+                "(primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing "
+                "(a hexagonal lattice, the densest arrangement; random layouts fill up well before that). "
+                "Ask for fewer units or reserves, or lower MIN_SPACING."),
             spacing=spec.min_spacing, key=stratum.key, wanted=wanted, placed=placed, fit=fit),
         ids=[stratum.key] if stratum.key is not None else [],
     )
@@ -765,11 +814,11 @@ def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING):
     half = math.hypot(maxx - minx, maxy - miny) / 2.0
     m = int(math.ceil(half / s)) + 1
     if (2 * m + 1) ** 2 > MAX_GRID_CANDIDATES:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over "
             "{width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or "
             "far too small for the number of units: check the frame for slivers, ask for fewer units, or use "
-            "another design.", spacing=s, area=float(region.area), width=maxx - minx, height=maxy - miny,
+            "another design."), spacing=s, area=float(region.area), width=maxx - minx, height=maxy - miny,
             count=(2 * m + 1) ** 2))
     idx = np.arange(-m, m + 1, dtype=float)
     jj, ii = np.meshgrid(idx, idx, indexing="ij")  # j rows, i columns
@@ -835,14 +884,15 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
             if guard is not None and spacing < spec.min_spacing:
                 fit = int(st.effective_area // spec.min_spacing**2)
                 raise InputError(
-                    message(
+                    message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                         "The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = "
                         "{min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: "
-                        "ask for at most that many, or lower MIN_SPACING."
+                        "ask for at most that many, or lower MIN_SPACING.")
                         if whole else
+                        QT_TRANSLATE_NOOP("PlotwiseEngine",
                         "The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below "
                         "MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units "
-                        "there: ask for at most that many, or lower MIN_SPACING.",
+                        "there: ask for at most that many, or lower MIN_SPACING."),
                         n=n, key=st.key, spacing=spacing, min_spacing=spec.min_spacing, fit=fit),
                     ids=[st.key] if st.key is not None else [],
                 )
@@ -853,26 +903,29 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
             if guard is not None:
                 ok = guard.take(prim)
                 if not ok.all():
-                    warnings.append(message(
+                    warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                         "{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units "
-                        "of a neighbouring stratum." if whole else
-                        "{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units "
-                        "of a neighbouring stratum.", n=int((~ok).sum()), key=st.key))
+                        "of a neighbouring stratum.") if whole else
+                        QT_TRANSLATE_NOOP("PlotwiseEngine",
+                            "{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units "
+                            "of a neighbouring stratum."), n=int((~ok).sum()), key=st.key))
                 prim = prim[ok]
                 res = res[guard.take(res, r)]
             else:
                 res = res[:r]
             if len(prim) == 0:
-                warnings.append(message(
+                warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. "
-                    "Use the simple random or spatially balanced design for small or thin strata." if whole else
-                    "No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. "
-                    "Use the simple random or spatially balanced design for small or thin strata.",
+                    "Use the simple random or spatially balanced design for small or thin strata.") if whole else
+                    QT_TRANSLATE_NOOP("PlotwiseEngine",
+                        "No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. "
+                        "Use the simple random or spatially balanced design for small or thin strata."),
                     spacing=spacing, key=st.key))
             if len(res) < r:
                 warnings.append(message(
-                    "The frame has only {n} of {r} reserve units." if whole
-                    else "Stratum {key} has only {n} of {r} reserve units.", n=len(res), r=r, key=st.key))
+                    QT_TRANSLATE_NOOP("PlotwiseEngine", "The frame has only {n} of {r} reserve units.") if whole
+                    else QT_TRANSLATE_NOOP("PlotwiseEngine",
+                        "Stratum {key} has only {n} of {r} reserve units."), n=len(res), r=r, key=st.key))
             n_primary = len(prim)
             centres = np.concatenate([prim, res])
         else:

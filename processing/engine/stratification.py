@@ -36,7 +36,7 @@ import threading
 
 import numpy as np
 
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 
 QUANTILE = 0
 EQUAL_INTERVAL = 1
@@ -481,7 +481,8 @@ def exact_quantiles(source, probabilities, value_range=None, covariate=0, bins=F
         histogram = streamed_histogram(source, bins, value_range, covariate, scaled_progress(progress, 0, 0.5))
     n = histogram.total
     if n == 0:
-        raise InputError(message("No cell of the frame has a value in every covariate."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "No cell of the frame has a value in every covariate.")))
     h = (n - 1) * p
     low = np.floor(h).astype(np.int64)
     high = np.minimum(low + 1, n - 1)
@@ -671,7 +672,8 @@ def kmeans_plusplus(x, n_clusters, rng):
     for _ in range(1, n_clusters):
         total = d2.sum()
         if total <= 0:
-            raise InputError(message("The covariates take fewer distinct value combinations than strata asked for."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The covariates take fewer distinct value combinations than strata asked for.")))
         c = x[rng.choice(n, p=d2 / total)]
         centres.append(c)
         np.minimum(d2, np.square(x - c).sum(axis=1), out=d2)
@@ -932,7 +934,7 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
         if bchart is not None:
             chart += bchart
     if s1 is None and frame == 0:
-        raise InputError(message("The frame holds no raster cell."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The frame holds no raster cell.")))
     if s1 is None:
         ncov = _n_covariates(source)
         s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
@@ -1256,8 +1258,9 @@ def count_distinct(source, cap, covariate=0, progress=None):
 
 
 def _constant_error(name, value):
-    return InputError(message("Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. "
-                              "Use another covariate, or check the frame and the raster.", name=name, value=value))
+    return InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+        "Covariate '{name}' is constant ({value:g}) over the frame: it cannot define strata. "
+        "Use another covariate, or check the frame and the raster."), name=name, value=value))
 
 
 def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, sample_size=100_000,
@@ -1296,11 +1299,13 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     warnings = []
     name0 = names[0]
     if method not in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F, KMEANS, RASTER_CLASSES):
-        raise InputError(message("Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).", method=method))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes)."), method=method))
     if method != RASTER_CLASSES and k < 2:
-        raise InputError(message("Ask for at least 2 strata (STRATA)."))
-    no_cell = InputError(message("No cell of the frame has a value in every covariate ({names}). Check that the "
-                                 "rasters cover the frame and that their NoData value is right.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Ask for at least 2 strata (STRATA).")))
+    no_cell = InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+        "No cell of the frame has a value in every covariate ({names}). Check that the "
+        "rasters cover the frame and that their NoData value is right."),
                                  names=", ".join(names)))
     summ = hist = kfit = None
     sample_n = 0
@@ -1334,9 +1339,9 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         if n_distinct < k:
             n_distinct, _ = count_distinct(source, k)
             if n_distinct < k:
-                raise InputError(message(
+                raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the "
-                    "{k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
+                    "{k} strata asked for. Lower STRATA to {n_distinct} or fewer."),
                     name=name0, n_distinct=int(n_distinct), k=k))
         if method == QUANTILE:
             boundaries, _ = exact_quantiles(source, quantile_probabilities(k), histogram=hist,
@@ -1348,8 +1353,9 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
             boundaries = cum_root_f_boundaries(coarse.edges, coarse.counts, k)
         unique = np.unique(boundaries)
         if unique.size < boundaries.size:
-            warnings.append(message("Some boundaries coincide (many cells share the same value of '{name}'); "
-                                    "{formed} strata are formed instead of {k}.",
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Some boundaries coincide (many cells share the same value of '{name}'); "
+                "{formed} strata are formed instead of {k}."),
                                     name=name0, formed=int(unique.size + 1), k=k))
         rule = ThresholdRule(unique)
     elif method == KMEANS:
@@ -1361,13 +1367,15 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         n_distinct = np.unique(z, axis=0).shape[0]
         if n_distinct < k:
             if sample_n == summ.count:
-                text = message("The covariates take only {n_distinct} distinct value combinations over the frame, "
-                               "fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
+                text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "The covariates take only {n_distinct} distinct value combinations over the frame, "
+                    "fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer."),
                                n_distinct=int(n_distinct), k=k)
             else:
-                text = message("The covariates take only {n_distinct} distinct value combinations in a sample of "
-                               "{sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to "
-                               "{n_distinct} or fewer.", n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
+                text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "The covariates take only {n_distinct} distinct value combinations in a sample of "
+                    "{sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to "
+                    "{n_distinct} or fewer."), n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
             raise InputError(text)
         kfit = lloyd_kmeans(z, kmeans_plusplus(z, k, rng))
         order = np.argsort(kfit.centres[:, 0], kind="stable")
@@ -1375,10 +1383,10 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     else:
         n_distinct, classes = count_distinct(source, MAX_CLASSES, progress=scaled_progress(progress, 0.2, 0.4))
         if n_distinct > MAX_CLASSES:
-            raise InputError(message(
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values "
                 "over the frame): reclassify it into {max_classes} classes or fewer first (for example with the "
-                "host's reclassify by table tool), or choose another METHOD.",
+                "host's reclassify by table tool), or choose another METHOD."),
                 name=name0, max_classes=MAX_CLASSES, n_distinct=int(n_distinct)))
         rule = ClassRule(np.asarray(classes))
 
@@ -1392,7 +1400,8 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     lut, order = stratum_order(stats)
     dropped = k - order.size
     if dropped:
-        warnings.append(message("{dropped} of the {k} strata hold no cell and were dropped.",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{dropped} of the {k} strata hold no cell and were dropped."),
                                 dropped=int(dropped), k=k))
     return Stratification(method, rule, None if boundaries is None else rule.boundaries, stats.reordered(order),
                           lut, order, int(stats.total), int(n_distinct), int(sample_n), (float(vmin), float(vmax)),
@@ -1469,8 +1478,9 @@ def stratum_labels(result, names, units=None):
     if isinstance(result.rule, ClassRule):
         values = np.asarray(result.rule.classes, float)[result.provisional]
         d = display_decimals(values)
-        return [message("{name} class {value}", name=names[0], value=format_covariate_value(v, d)) for v in values]
+        return [message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{name} class {value}"), name=names[0], value=format_covariate_value(v, d)) for v in values]
     decs = [display_decimals(st.mean[:, c]) for c in range(len(names))]
-    return [message("mean {values}", values=", ".join(
+    return [message(QT_TRANSLATE_NOOP("PlotwiseEngine", "mean {values}"), values=", ".join(
         "%s %s%s" % (names[c], format_covariate_value(st.mean[h, c], decs[c]), unit(c)) for c in range(len(names))))
         for h in range(st.n_strata)]

@@ -15,7 +15,14 @@ and a transect's direction follow the bearing.
 """
 import numpy as np
 
-SHAPES = ("point", "square", "circle", "line")
+from .errors import QT_TRANSLATE_NOOP
+
+SHAPES = (
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "point"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "square"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "circle"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "line"),
+)
 POINT, SQUARE, CIRCLE, LINE = range(4)
 
 

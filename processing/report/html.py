@@ -7,7 +7,7 @@ from elsewhere) and escapes every string it is given. It never imports the host.
 
 Usage::
 
-    report = Report("Sample-unit layout", translate=tr)
+    report = Report("Sample-unit layout", translate=QCoreApplication.translate)
     report.parameters({"Design": "spatially balanced", "Seed": 1234})
     report.section("Units per stratum")
     report.table(["Stratum", "Units"], [[1, 12], [2, 9]])
@@ -16,14 +16,21 @@ Usage::
     report.references(["Cochran, W. G. (1977) Sampling Techniques. 3rd ed. Wiley."])
     report.field_safety()
     report.write(path)
+
+``translate(context, text)`` is the host's translator (``QCoreApplication.translate``); without it
+the report stays in English. The report's own words are marked for pylupdate5 as
+``self.translate("PlotwiseReport", "…")`` (or ``QT_TRANSLATE_NOOP("PlotwiseReport", "…")`` for a
+constant), and report code elsewhere calls ``report.translate("PlotwiseReport", "…")`` the same way.
 """
 import datetime
 import html
 import numbers
 
+from ..engine.errors import QT_TRANSLATE_NOOP
 from .style import STYLE_SHEET
 
-FIELD_SAFETY_CAUTION = (
+FIELD_SAFETY_CAUTION = QT_TRANSLATE_NOOP(
+    "PlotwiseReport",
     "Check every unit's access and safety before sending a team. This tool chooses locations "
     "for statistical reasons only: it never makes a location safe to reach or to work in. "
     "Steep, remote or flooded terrain, wildlife, weather and private land can put people at "
@@ -32,7 +39,7 @@ FIELD_SAFETY_CAUTION = (
 )
 
 
-def _identity(text):
+def _untranslated(context, text):
     return text
 
 
@@ -65,7 +72,7 @@ class Report:
     """Collects the blocks of one report and renders them as one HTML page."""
 
     def __init__(self, title, algorithm_id=None, translate=None, language="en"):
-        self._tr = translate or _identity
+        self._translate = translate or _untranslated
         self.language = language
         self.title = title
         self.algorithm_id = algorithm_id
@@ -73,6 +80,10 @@ class Report:
         self._warnings = []
         self._references = []
         self._caution = False
+
+    def translate(self, context, text):
+        """``text`` in the report's language (``context`` and ``text`` literals, as pylupdate5 reads them)."""
+        return self._translate(context, text)
 
     # -- content -----------------------------------------------------------------
     def section(self, heading):
@@ -106,7 +117,8 @@ class Report:
             for value in row:
                 numeric = isinstance(value, numbers.Number) and not isinstance(value, bool)
                 if isinstance(value, bool):
-                    text = self._tr("yes") if value else self._tr("no")
+                    text = self.translate("PlotwiseReport", "yes") if value else self.translate(
+                        "PlotwiseReport", "no")
                 else:
                     text = format_number(value, digits) if numeric or value is None else str(value)
                 css = ' class="num"' if numeric else ""
@@ -125,9 +137,10 @@ class Report:
 
     def parameters(self, mapping, heading=None):
         """Inputs and parameters as a two-column table (seed and CRS belong here too)."""
-        self.section(heading or self._tr("Inputs and parameters"))
+        self.section(heading or self.translate("PlotwiseReport", "Inputs and parameters"))
         rows = [[k, str(v) if isinstance(v, numbers.Integral) and not isinstance(v, bool) else v] for k, v in mapping.items()]
-        self.table([self._tr("Item"), self._tr("Value")], rows)  # whole numbers (seeds, ids) without separators
+        header = [self.translate("PlotwiseReport", "Item"), self.translate("PlotwiseReport", "Value")]
+        self.table(header, rows)  # whole numbers (seeds, ids) without separators
 
     def warnings(self, messages):
         self._warnings.extend(str(m) for m in messages if m)
@@ -143,7 +156,6 @@ class Report:
 
     # -- output ------------------------------------------------------------------
     def render(self):
-        tr = self._tr
         parts = [
             "<!DOCTYPE html>",
             f'<html lang="{escape(self.language)}"><head><meta charset="utf-8">',
@@ -154,22 +166,23 @@ class Report:
             f'<div class="brand">Plotwise</div><h1>{escape(self.title)}</h1>',
         ]
         stamp = datetime.datetime.now().strftime("%Y-%m-%d %H:%M")
-        meta = f"{tr('Written')} {stamp}"
+        meta = self.translate("PlotwiseReport", "Written") + f" {stamp}"
         if self.algorithm_id:
-            meta += f" · {tr('algorithm')} {self.algorithm_id}"
+            meta += " · " + self.translate("PlotwiseReport", "algorithm") + f" {self.algorithm_id}"
         parts.append(f'<p class="meta">{escape(meta)}</p></header>')
         if self._caution:
-            parts.append(
-                f'<aside class="caution"><strong>{escape(tr("Field safety"))}.</strong> '
-                f"{escape(tr(FIELD_SAFETY_CAUTION))}</aside>"
-            )
+            heading = escape(self.translate("PlotwiseReport", "Field safety"))
+            caution = escape(self.translate("PlotwiseReport", FIELD_SAFETY_CAUTION))
+            parts.append(f'<aside class="caution"><strong>{heading}.</strong> {caution}</aside>')
         if self._warnings:
             items = "".join(f"<li>{escape(w)}</li>" for w in self._warnings)
-            parts.append(f'<section class="warnings"><h2>{escape(tr("Warnings"))}</h2><ul>{items}</ul></section>')
+            heading = escape(self.translate("PlotwiseReport", "Warnings"))
+            parts.append(f'<section class="warnings"><h2>{heading}</h2><ul>{items}</ul></section>')
         parts.extend(self._blocks)
         if self._references:
             items = "".join(f"<li>{escape(r)}</li>" for r in self._references)
-            parts.append(f'<section class="refs"><h2>{escape(tr("Method references"))}</h2><ol>{items}</ol></section>')
+            heading = escape(self.translate("PlotwiseReport", "Method references"))
+            parts.append(f'<section class="refs"><h2>{heading}</h2><ol>{items}</ol></section>')
         parts.append("</main></body></html>")
         return "\n".join(parts)
 

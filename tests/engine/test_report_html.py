@@ -5,7 +5,7 @@ from plotwise.processing.report import Report
 
 
 def test_cells_are_escaped_and_booleans_read_as_words():
-    report = Report("<b>t</b>", translate=lambda s: {"yes": "oui", "no": "non"}.get(s, s))
+    report = Report("<b>t</b>", translate=lambda context, s: {"yes": "oui", "no": "non"}.get(s, s))
     report.table(["a & b", "flag"], [["<script>x</script>", True], ["'q'", False]])
     page = report.render()
     assert "<script>x</script>" not in page and html.escape("<script>x</script>") in page  # Python's html.escape
