@@ -1397,7 +1397,7 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
         <translation>&lt;p&gt;Construye Hollin Ridge Reserve, una reserva de montaña inventada para demostraciones, formación y pruebas, y una población simulada de velmar, un antílope herbívoro inventado. Nada de ello describe un lugar o una especie reales.&lt;/p&gt;&lt;p&gt;La reserva abarca 250–350 km² en WGS 84 / UTM zona 36S, con un límite irregular, un lago y un enclave privado (ambos en la capa de zonas excluidas), un ráster de altitud (relieve fractal sintético con un escarpe abrupto) y un ráster de verdor (un índice de vegetación de 0 a 1, correlacionado con la altitud, más ruido).&lt;/p&gt;&lt;p&gt;Los velmar viven en grupos: un proceso de conglomerados de Thomas no homogéneo cuyos centros de grupo son más densos donde el verdor es alto y la altitud baja. El total verdadero se conoce, y el número esperado de animales por km² se escribe como ráster, para poder contrastar los diseños de muestreo y las estimaciones con la verdad.&lt;/p&gt;&lt;h3&gt;Parámetros&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: la misma semilla da la misma reserva y los mismos animales. 0 sortea una y la registra.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Tamaño de celda del ráster&lt;/b&gt;: metros, de 10 a 500 (50 por defecto).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Límite de la reserva (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zonas excluidas (&lt;i&gt;kind&lt;/i&gt; lake o inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rásteres de altitud (m), verdor (0–1) y velmar esperados por km²&lt;/li&gt;&lt;li&gt;Animales (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un informe HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Referencias: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Raster cell size (m)</source>
         <translation>Tamaño de celda del ráster (m)</translation>
     </message>
@@ -1427,137 +1427,137 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
         <translation>Animales esperados por km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="74"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="75"/>
         <source>Simulated animals</source>
         <translation>Animales simulados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="76"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
         <source>True number of animals</source>
         <translation>Número verdadero de animales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="78"/>
         <source>Expected number of animals</source>
         <translation>Número esperado de animales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="119"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="122"/>
         <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
         <translation>{name}: {area:,.1f} km², {n:,} velmar en {g:,} grupos (esperados: {e:,.0f}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="136"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
         <source>Demo reserve: {name}</source>
         <translation>Reserva de demostración: {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="137"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="141"/>
         <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
         <translation>Datos inventados para demostraciones, formación y pruebas. {name} y el velmar ({desc}) no existen.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>reserve area</source>
         <translation>superficie de la reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>true number of velmar</source>
         <translation>número verdadero de velmar</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>expected number</source>
         <translation>número esperado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>groups</source>
         <translation>grupos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Seed</source>
         <translation>Semilla</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>CRS</source>
         <translation>SRC</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Mean group size (mu)</source>
         <translation>Tamaño medio de los grupos (mu)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Group spread, SD of members around the centre (m)</source>
         <translation>Dispersión de los grupos, desviación estándar de los miembros alrededor del centro (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="153"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="157"/>
         <source>Areas</source>
         <translation>Zonas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Part</source>
         <translation>Parte</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Area (km²)</source>
         <translation>Área (km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Reserve</source>
         <translation>Reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Lake (excluded)</source>
         <translation>Lago (excluido)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Private inholding (excluded)</source>
         <translation>Enclave privado (excluido)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="159"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="163"/>
         <source>Map</source>
         <translation>Mapa</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Lake</source>
         <translation>Lago</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Private inholding</source>
         <translation>Enclave privado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Velmar (every third animal)</source>
         <translation>Velmar (uno de cada tres animales)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
         <translation>Hollin Ridge Reserve, las zonas excluidas y los animales simulados.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="169"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="173"/>
         <source>How the population was simulated</source>
         <translation>Cómo se simuló la población</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="170"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="174"/>
         <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
         <translation>Los centros de grupo forman un proceso de Poisson no homogéneo sobre el hábitat (la reserva sin el lago); su intensidad es proporcional a exp(0,9 × verdor estandarizado − 0,6 × altitud estandarizada). Cada grupo tiene un número de miembros de Poisson (media {mu:g}) dispersos alrededor de su centro con un desplazamiento normal de {sigma:g} m; los miembros que caen fuera del hábitat no forman parte de la población. Es un proceso de conglomerados de Thomas. Su total esperado y su varianza se calculan a partir de la superficie de intensidad en la malla del ráster.</translation>
     </message>
@@ -2287,107 +2287,107 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
 <context>
     <name>ExampleChain</name>
     <message>
-        <location filename="../scripts/build_models.py" line="94"/>
+        <location filename="../scripts/build_models.py" line="96"/>
         <source>Units with counts</source>
         <translation>Unidades con conteos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="97"/>
+        <location filename="../scripts/build_models.py" line="99"/>
         <source>Estimate by stratum</source>
         <translation>Estimación por estrato</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="97"/>
+        <location filename="../scripts/build_models.py" line="99"/>
         <source>Estimate report</source>
         <translation>Informe de la estimación</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="97"/>
+        <location filename="../scripts/build_models.py" line="99"/>
         <source>Estimate table</source>
         <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="90"/>
+        <location filename="../scripts/build_models.py" line="92"/>
         <source>Animal points</source>
         <translation>Puntos de animales</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="92"/>
+        <location filename="../scripts/build_models.py" line="94"/>
         <source>Detection probability</source>
         <translation>Probabilidad de detección</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="93"/>
+        <location filename="../scripts/build_models.py" line="95"/>
         <source>Random seed (0 draws one)</source>
         <translation>Semilla aleatoria (0 sortea una)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="93"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="89"/>
+        <location filename="../scripts/build_models.py" line="91"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="75"/>
+        <location filename="../scripts/build_models.py" line="77"/>
         <source>Strata with units allocated</source>
         <translation>Estratos con unidades asignadas</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="67"/>
+        <location filename="../scripts/build_models.py" line="69"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="80"/>
+        <location filename="../scripts/build_models.py" line="82"/>
         <source>Layout report</source>
         <translation>Informe de la disposición</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="80"/>
+        <location filename="../scripts/build_models.py" line="82"/>
         <source>Waypoints (GPX)</source>
         <translation>Puntos de paso (GPX)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="62"/>
+        <location filename="../scripts/build_models.py" line="64"/>
         <source>Covariate rasters</source>
         <translation>Rásteres de covariables</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="59"/>
+        <location filename="../scripts/build_models.py" line="61"/>
         <source>Excluded areas</source>
         <translation>Zonas excluidas</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="61"/>
+        <location filename="../scripts/build_models.py" line="63"/>
         <source>Steepest slope surveyed (degrees)</source>
         <translation>Pendiente máxima muestreada (grados)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="63"/>
+        <location filename="../scripts/build_models.py" line="65"/>
         <source>Number of strata</source>
         <translation>Número de estratos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="65"/>
+        <location filename="../scripts/build_models.py" line="67"/>
         <source>Side of the square plots (m)</source>
         <translation>Lado de las parcelas cuadradas (m)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="60"/>
+        <location filename="../scripts/build_models.py" line="62"/>
         <source>Slope raster (degrees)</source>
         <translation>Ráster de pendiente (grados)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="58"/>
+        <location filename="../scripts/build_models.py" line="60"/>
         <source>Study area</source>
         <translation>Área de estudio</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="64"/>
+        <location filename="../scripts/build_models.py" line="66"/>
         <source>Total number of units</source>
         <translation>Número total de unidades</translation>
     </message>

@@ -1397,7 +1397,7 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
         <translation>&lt;p&gt;Construit Hollin Ridge Reserve, une réserve d'altitude inventée pour les démonstrations, la formation et les tests, et une population simulée de velmar, une antilope brouteuse inventée. Rien ici ne décrit un lieu ou une espèce réels.&lt;/p&gt;&lt;p&gt;La réserve couvre 250–350 km² en WGS 84 / UTM zone 36S, avec une limite irrégulière, un lac et une enclave privée (tous deux dans la couche des zones exclues), un raster d'altitude (relief fractal synthétique avec un escarpement abrupt) et un raster de verdure (un indice de végétation de 0 à 1, corrélé à l'altitude, plus du bruit).&lt;/p&gt;&lt;p&gt;Les velmar vivent en groupes : un processus d'agrégats de Thomas inhomogène dont les centres de groupe sont plus denses là où la verdure est forte et l'altitude basse. Le vrai total est connu, et le nombre attendu d'animaux par km² est écrit dans un raster, afin de pouvoir confronter les plans d'inventaire et les estimations à la vérité.&lt;/p&gt;&lt;h3&gt;Paramètres&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : la même graine donne la même réserve et les mêmes animaux. 0 en tire une et l'enregistre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Taille de cellule raster&lt;/b&gt; : en mètres, de 10 à 500 (50 par défaut).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Limite de la réserve (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zones exclues (&lt;i&gt;kind&lt;/i&gt; lake ou inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rasters d'altitude (m), de verdure (0–1) et de velmar attendus par km²&lt;/li&gt;&lt;li&gt;Animaux (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un rapport HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Références : Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Raster cell size (m)</source>
         <translation>Taille de cellule raster (m)</translation>
     </message>
@@ -1427,137 +1427,137 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
         <translation>Animaux attendus par km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="74"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="75"/>
         <source>Simulated animals</source>
         <translation>Animaux simulés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="76"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
         <source>True number of animals</source>
         <translation>Nombre réel d'animaux</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="78"/>
         <source>Expected number of animals</source>
         <translation>Nombre attendu d'animaux</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="119"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="122"/>
         <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
         <translation>{name} : {area:,.1f} km², {n:,} velmar en {g:,} groupes (attendus : {e:,.0f}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="136"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
         <source>Demo reserve: {name}</source>
         <translation>Réserve de démonstration : {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="137"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="141"/>
         <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
         <translation>Données inventées pour les démonstrations, la formation et les tests. {name} et le velmar ({desc}) n'existent pas.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>reserve area</source>
         <translation>surface de la réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>true number of velmar</source>
         <translation>nombre réel de velmar</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>expected number</source>
         <translation>nombre attendu</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
         <source>groups</source>
         <translation>groupes</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Seed</source>
         <translation>Graine</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>CRS</source>
         <translation>SCR</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Mean group size (mu)</source>
         <translation>Taille moyenne des groupes (mu)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="146"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
         <source>Group spread, SD of members around the centre (m)</source>
         <translation>Dispersion des groupes, écart-type des membres autour du centre (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="153"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="157"/>
         <source>Areas</source>
         <translation>Zones</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Part</source>
         <translation>Partie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Area (km²)</source>
         <translation>Surface (km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Reserve</source>
         <translation>Réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Lake (excluded)</source>
         <translation>Lac (exclu)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="154"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
         <source>Private inholding (excluded)</source>
         <translation>Enclave privée (exclue)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="159"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="163"/>
         <source>Map</source>
         <translation>Carte</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Lake</source>
         <translation>Lac</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Private inholding</source>
         <translation>Enclave privée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Velmar (every third animal)</source>
         <translation>Velmar (un animal sur trois)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="162"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
         <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
         <translation>Hollin Ridge Reserve, les zones exclues et les animaux simulés.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="169"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="173"/>
         <source>How the population was simulated</source>
         <translation>Comment la population a été simulée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="170"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="174"/>
         <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
         <translation>Les centres de groupe forment un processus de Poisson inhomogène sur l'habitat (la réserve sans le lac) ; leur intensité est proportionnelle à exp(0,9 × verdure standardisée − 0,6 × altitude standardisée). Chaque groupe a un nombre de membres suivant une loi de Poisson (moyenne {mu:g}), dispersés autour de son centre avec un déplacement normal de {sigma:g} m ; les membres qui tombent hors de l'habitat ne font pas partie de la population. C'est un processus d'agrégats de Thomas. Son total attendu et sa variance sont calculés à partir de la surface d'intensité sur la grille du raster.</translation>
     </message>
@@ -2287,107 +2287,107 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
 <context>
     <name>ExampleChain</name>
     <message>
-        <location filename="../scripts/build_models.py" line="94"/>
+        <location filename="../scripts/build_models.py" line="96"/>
         <source>Units with counts</source>
         <translation>Unités avec comptages</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="97"/>
+        <location filename="../scripts/build_models.py" line="99"/>
         <source>Estimate by stratum</source>
         <translation>Estimation par strate</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="97"/>
+        <location filename="../scripts/build_models.py" line="99"/>
         <source>Estimate report</source>
         <translation>Rapport d'estimation</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="97"/>
+        <location filename="../scripts/build_models.py" line="99"/>
         <source>Estimate table</source>
         <translation>Table des estimations</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="90"/>
+        <location filename="../scripts/build_models.py" line="92"/>
         <source>Animal points</source>
         <translation>Points des animaux</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="92"/>
+        <location filename="../scripts/build_models.py" line="94"/>
         <source>Detection probability</source>
         <translation>Probabilité de détection</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="93"/>
+        <location filename="../scripts/build_models.py" line="95"/>
         <source>Random seed (0 draws one)</source>
         <translation>Graine aléatoire (0 en tire une)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="93"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="89"/>
+        <location filename="../scripts/build_models.py" line="91"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="75"/>
+        <location filename="../scripts/build_models.py" line="77"/>
         <source>Strata with units allocated</source>
         <translation>Strates avec unités allouées</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="67"/>
+        <location filename="../scripts/build_models.py" line="69"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="80"/>
+        <location filename="../scripts/build_models.py" line="82"/>
         <source>Layout report</source>
         <translation>Rapport de disposition</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="80"/>
+        <location filename="../scripts/build_models.py" line="82"/>
         <source>Waypoints (GPX)</source>
         <translation>Points de passage (GPX)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="62"/>
+        <location filename="../scripts/build_models.py" line="64"/>
         <source>Covariate rasters</source>
         <translation>Rasters de covariables</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="59"/>
+        <location filename="../scripts/build_models.py" line="61"/>
         <source>Excluded areas</source>
         <translation>Zones exclues</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="61"/>
+        <location filename="../scripts/build_models.py" line="63"/>
         <source>Steepest slope surveyed (degrees)</source>
         <translation>Pente maximale inventoriée (degrés)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="63"/>
+        <location filename="../scripts/build_models.py" line="65"/>
         <source>Number of strata</source>
         <translation>Nombre de strates</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="65"/>
+        <location filename="../scripts/build_models.py" line="67"/>
         <source>Side of the square plots (m)</source>
         <translation>Côté des placettes carrées (m)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="60"/>
+        <location filename="../scripts/build_models.py" line="62"/>
         <source>Slope raster (degrees)</source>
         <translation>Raster de pente (degrés)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="58"/>
+        <location filename="../scripts/build_models.py" line="60"/>
         <source>Study area</source>
         <translation>Zone d'étude</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="64"/>
+        <location filename="../scripts/build_models.py" line="66"/>
         <source>Total number of units</source>
         <translation>Nombre total d'unités</translation>
     </message>
