@@ -2287,97 +2287,97 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
 <context>
     <name>ExampleChain</name>
     <message>
-        <location filename="../scripts/build_models.py" line="96"/>
+        <location filename="../scripts/build_models.py" line="111"/>
         <source>Units with counts</source>
         <translation>Unidades con conteos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="99"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Estimate by stratum</source>
         <translation>Estimación por estrato</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="99"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Estimate report</source>
         <translation>Informe de la estimación</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="99"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Estimate table</source>
         <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="92"/>
+        <location filename="../scripts/build_models.py" line="103"/>
         <source>Animal points</source>
         <translation>Puntos de animales</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="94"/>
+        <location filename="../scripts/build_models.py" line="107"/>
         <source>Detection probability</source>
         <translation>Probabilidad de detección</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="95"/>
+        <location filename="../scripts/build_models.py" line="109"/>
         <source>Random seed (0 draws one)</source>
         <translation>Semilla aleatoria (0 sortea una)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="93"/>
+        <location filename="../scripts/build_models.py" line="105"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="101"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="77"/>
+        <location filename="../scripts/build_models.py" line="86"/>
         <source>Strata with units allocated</source>
         <translation>Estratos con unidades asignadas</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="69"/>
+        <location filename="../scripts/build_models.py" line="78"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="82"/>
+        <location filename="../scripts/build_models.py" line="91"/>
         <source>Layout report</source>
         <translation>Informe de la disposición</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="82"/>
+        <location filename="../scripts/build_models.py" line="91"/>
         <source>Waypoints (GPX)</source>
         <translation>Puntos de paso (GPX)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="64"/>
+        <location filename="../scripts/build_models.py" line="68"/>
         <source>Covariate rasters</source>
         <translation>Rásteres de covariables</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="61"/>
+        <location filename="../scripts/build_models.py" line="62"/>
         <source>Excluded areas</source>
         <translation>Zonas excluidas</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="63"/>
+        <location filename="../scripts/build_models.py" line="66"/>
         <source>Steepest slope surveyed (degrees)</source>
         <translation>Pendiente máxima muestreada (grados)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="65"/>
+        <location filename="../scripts/build_models.py" line="70"/>
         <source>Number of strata</source>
         <translation>Número de estratos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="67"/>
+        <location filename="../scripts/build_models.py" line="74"/>
         <source>Side of the square plots (m)</source>
         <translation>Lado de las parcelas cuadradas (m)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="62"/>
+        <location filename="../scripts/build_models.py" line="64"/>
         <source>Slope raster (degrees)</source>
         <translation>Ráster de pendiente (grados)</translation>
     </message>
@@ -2387,7 +2387,7 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation>Área de estudio</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="66"/>
+        <location filename="../scripts/build_models.py" line="72"/>
         <source>Total number of units</source>
         <translation>Número total de unidades</translation>
     </message>

@@ -2287,97 +2287,97 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
 <context>
     <name>ExampleChain</name>
     <message>
-        <location filename="../scripts/build_models.py" line="96"/>
+        <location filename="../scripts/build_models.py" line="111"/>
         <source>Units with counts</source>
         <translation>Unités avec comptages</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="99"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Estimate by stratum</source>
         <translation>Estimation par strate</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="99"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Estimate report</source>
         <translation>Rapport d'estimation</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="99"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Estimate table</source>
         <translation>Table des estimations</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="92"/>
+        <location filename="../scripts/build_models.py" line="103"/>
         <source>Animal points</source>
         <translation>Points des animaux</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="94"/>
+        <location filename="../scripts/build_models.py" line="107"/>
         <source>Detection probability</source>
         <translation>Probabilité de détection</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="95"/>
+        <location filename="../scripts/build_models.py" line="109"/>
         <source>Random seed (0 draws one)</source>
         <translation>Graine aléatoire (0 en tire une)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="93"/>
+        <location filename="../scripts/build_models.py" line="105"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="101"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="77"/>
+        <location filename="../scripts/build_models.py" line="86"/>
         <source>Strata with units allocated</source>
         <translation>Strates avec unités allouées</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="69"/>
+        <location filename="../scripts/build_models.py" line="78"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="82"/>
+        <location filename="../scripts/build_models.py" line="91"/>
         <source>Layout report</source>
         <translation>Rapport de disposition</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="82"/>
+        <location filename="../scripts/build_models.py" line="91"/>
         <source>Waypoints (GPX)</source>
         <translation>Points de passage (GPX)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="64"/>
+        <location filename="../scripts/build_models.py" line="68"/>
         <source>Covariate rasters</source>
         <translation>Rasters de covariables</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="61"/>
+        <location filename="../scripts/build_models.py" line="62"/>
         <source>Excluded areas</source>
         <translation>Zones exclues</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="63"/>
+        <location filename="../scripts/build_models.py" line="66"/>
         <source>Steepest slope surveyed (degrees)</source>
         <translation>Pente maximale inventoriée (degrés)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="65"/>
+        <location filename="../scripts/build_models.py" line="70"/>
         <source>Number of strata</source>
         <translation>Nombre de strates</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="67"/>
+        <location filename="../scripts/build_models.py" line="74"/>
         <source>Side of the square plots (m)</source>
         <translation>Côté des placettes carrées (m)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="62"/>
+        <location filename="../scripts/build_models.py" line="64"/>
         <source>Slope raster (degrees)</source>
         <translation>Raster de pente (degrés)</translation>
     </message>
@@ -2387,7 +2387,7 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation>Zone d'étude</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="66"/>
+        <location filename="../scripts/build_models.py" line="72"/>
         <source>Total number of units</source>
         <translation>Nombre total d'unités</translation>
     </message>

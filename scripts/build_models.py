@@ -57,15 +57,24 @@ def build():
 
     # 1. frame -> strata -> effort -> layout
     plan = Model("plan_survey", "Example chains", "examples")
-    parameter(plan, QgsProcessingParameterFeatureSource("study_area", QT_TRANSLATE_NOOP("ExampleChain", "Study area"), [compat.TYPE_VECTOR_POLYGON]), 40, 40)
-    parameter(plan, QgsProcessingParameterFeatureSource("exclusions", QT_TRANSLATE_NOOP("ExampleChain", "Excluded areas"), [compat.TYPE_VECTOR_POLYGON], optional=True), 40, 100)
-    parameter(plan, QgsProcessingParameterRasterLayer("slope", QT_TRANSLATE_NOOP("ExampleChain", "Slope raster (degrees)"), optional=True), 40, 160)
-    parameter(plan, QgsProcessingParameterNumber("max_slope", QT_TRANSLATE_NOOP("ExampleChain", "Steepest slope surveyed (degrees)"), compat.NUMBER_DOUBLE, 30.0, False, 0.0, 90.0), 40, 220)
-    parameter(plan, QgsProcessingParameterMultipleLayers("covariates", QT_TRANSLATE_NOOP("ExampleChain", "Covariate rasters"), compat.TYPE_RASTER), 40, 280)
-    parameter(plan, QgsProcessingParameterNumber("n_strata", QT_TRANSLATE_NOOP("ExampleChain", "Number of strata"), compat.NUMBER_INTEGER, 4, False, 2, 20), 40, 340)
-    parameter(plan, QgsProcessingParameterNumber("total_units", QT_TRANSLATE_NOOP("ExampleChain", "Total number of units"), compat.NUMBER_INTEGER, 60, False, 2), 40, 400)
-    parameter(plan, QgsProcessingParameterNumber("plot_side", QT_TRANSLATE_NOOP("ExampleChain", "Side of the square plots (m)"), compat.NUMBER_DOUBLE, 400.0, False, 1.0), 40, 460)
-    parameter(plan, QgsProcessingParameterNumber("seed", QT_TRANSLATE_NOOP("ExampleChain", "Random seed (0 draws one)"), compat.NUMBER_INTEGER, 1, False, 0), 40, 520)
+    parameter(plan, QgsProcessingParameterFeatureSource("study_area", QT_TRANSLATE_NOOP("ExampleChain", "Study area"),
+        [compat.TYPE_VECTOR_POLYGON]), 40, 40)
+    parameter(plan, QgsProcessingParameterFeatureSource("exclusions", QT_TRANSLATE_NOOP("ExampleChain", "Excluded areas"),
+        [compat.TYPE_VECTOR_POLYGON], optional=True), 40, 100)
+    parameter(plan, QgsProcessingParameterRasterLayer("slope", QT_TRANSLATE_NOOP("ExampleChain", "Slope raster (degrees)"),
+        optional=True), 40, 160)
+    parameter(plan, QgsProcessingParameterNumber("max_slope", QT_TRANSLATE_NOOP("ExampleChain", "Steepest slope surveyed (degrees)"),
+        compat.NUMBER_DOUBLE, 30.0, False, 0.0, 90.0), 40, 220)
+    parameter(plan, QgsProcessingParameterMultipleLayers("covariates", QT_TRANSLATE_NOOP("ExampleChain", "Covariate rasters"),
+        compat.TYPE_RASTER), 40, 280)
+    parameter(plan, QgsProcessingParameterNumber("n_strata", QT_TRANSLATE_NOOP("ExampleChain", "Number of strata"),
+        compat.NUMBER_INTEGER, 4, False, 2, 20), 40, 340)
+    parameter(plan, QgsProcessingParameterNumber("total_units", QT_TRANSLATE_NOOP("ExampleChain", "Total number of units"),
+        compat.NUMBER_INTEGER, 60, False, 2), 40, 400)
+    parameter(plan, QgsProcessingParameterNumber("plot_side", QT_TRANSLATE_NOOP("ExampleChain", "Side of the square plots (m)"),
+        compat.NUMBER_DOUBLE, 400.0, False, 1.0), 40, 460)
+    parameter(plan, QgsProcessingParameterNumber("seed", QT_TRANSLATE_NOOP("ExampleChain", "Random seed (0 draws one)"),
+        compat.NUMBER_INTEGER, 1, False, 0), 40, 520)
     child(plan, "frame", "plotwise:buildframe", "Sampling frame", {
         "INPUT": param("study_area"), "EXCLUDE": param("exclusions"), "MASK": param("slope"),
         "MASK_MAX": param("max_slope"), "EDGE_BUFFER": static(50.0),
@@ -83,16 +92,22 @@ def build():
         "FRAME": output("effort", "OUTPUT"), "STRATUM_FIELD": static("stratum"), "N_FIELD": static("n_alloc"),
         "DESIGN": static(2), "SHAPE": static(1), "SIZE": param("plot_side"), "BEARING": static(0.0),
         "INSIDE": static(True), "MIN_SPACING": static(0.0), "RESERVE": static(3), "SEED": param("seed"),
-    }, {"OUTPUT": (QT_TRANSLATE_NOOP("ExampleChain", "Sample units"), "OUTPUT"), "OUTPUT_GPX": (QT_TRANSLATE_NOOP("ExampleChain", "Waypoints (GPX)"), "OUTPUT_GPX"),
+    }, {"OUTPUT": (QT_TRANSLATE_NOOP("ExampleChain", "Sample units"), "OUTPUT"),
+        "OUTPUT_GPX": (QT_TRANSLATE_NOOP("ExampleChain", "Waypoints (GPX)"), "OUTPUT_GPX"),
         "REPORT": (QT_TRANSLATE_NOOP("ExampleChain", "Layout report"), "REPORT")}, 320, 460)
 
     # 2. simulated counts -> estimate
     count = Model("estimate_simulated_counts", "Example chains", "examples")
-    parameter(count, QgsProcessingParameterFeatureSource("units", QT_TRANSLATE_NOOP("ExampleChain", "Sample units"), [compat.TYPE_VECTOR_ANY]), 40, 40)
-    parameter(count, QgsProcessingParameterFeatureSource("animals", QT_TRANSLATE_NOOP("ExampleChain", "Animal points"), [compat.TYPE_VECTOR_POINT]), 40, 100)
-    parameter(count, QgsProcessingParameterFeatureSource("strata", QT_TRANSLATE_NOOP("ExampleChain", "Strata"), [compat.TYPE_VECTOR_POLYGON]), 40, 160)
-    parameter(count, QgsProcessingParameterNumber("detection", QT_TRANSLATE_NOOP("ExampleChain", "Detection probability"), compat.NUMBER_DOUBLE, 1.0, False, 0.001, 1.0), 40, 220)
-    parameter(count, QgsProcessingParameterNumber("seed", QT_TRANSLATE_NOOP("ExampleChain", "Random seed (0 draws one)"), compat.NUMBER_INTEGER, 1, False, 0), 40, 280)
+    parameter(count, QgsProcessingParameterFeatureSource("units", QT_TRANSLATE_NOOP("ExampleChain", "Sample units"),
+        [compat.TYPE_VECTOR_ANY]), 40, 40)
+    parameter(count, QgsProcessingParameterFeatureSource("animals", QT_TRANSLATE_NOOP("ExampleChain", "Animal points"),
+        [compat.TYPE_VECTOR_POINT]), 40, 100)
+    parameter(count, QgsProcessingParameterFeatureSource("strata", QT_TRANSLATE_NOOP("ExampleChain", "Strata"),
+        [compat.TYPE_VECTOR_POLYGON]), 40, 160)
+    parameter(count, QgsProcessingParameterNumber("detection", QT_TRANSLATE_NOOP("ExampleChain", "Detection probability"),
+        compat.NUMBER_DOUBLE, 1.0, False, 0.001, 1.0), 40, 220)
+    parameter(count, QgsProcessingParameterNumber("seed", QT_TRANSLATE_NOOP("ExampleChain", "Random seed (0 draws one)"),
+        compat.NUMBER_INTEGER, 1, False, 0), 40, 280)
     child(count, "counts", "plotwise:simulatecounts", "Simulated counts", {
         "UNITS": param("units"), "ANIMALS": param("animals"), "DETECTION": param("detection"), "SEED": param("seed"),
     }, {"OUTPUT": (QT_TRANSLATE_NOOP("ExampleChain", "Units with counts"), "OUTPUT")}, 320, 40)
@@ -100,7 +115,8 @@ def build():
         "UNITS": output("counts", "OUTPUT"), "COUNT_FIELD": static("count"), "STRATUM_FIELD": static("stratum"),
         "UNIT_AREA_FIELD": static("area_m2"), "STRATA": param("strata"), "STRATA_ID_FIELD": static("stratum"),
         "CONFIDENCE": static(0.95), "CI_METHOD": static(0), "DETECTION_P": param("detection"), "SEED": param("seed"),
-    }, {"OUTPUT": (QT_TRANSLATE_NOOP("ExampleChain", "Estimate by stratum"), "OUTPUT"), "OUTPUT_TABLE": (QT_TRANSLATE_NOOP("ExampleChain", "Estimate table"), "OUTPUT_TABLE"),
+    }, {"OUTPUT": (QT_TRANSLATE_NOOP("ExampleChain", "Estimate by stratum"), "OUTPUT"),
+        "OUTPUT_TABLE": (QT_TRANSLATE_NOOP("ExampleChain", "Estimate table"), "OUTPUT_TABLE"),
         "REPORT": (QT_TRANSLATE_NOOP("ExampleChain", "Estimate report"), "REPORT")}, 320, 200)
 
     MODELS.mkdir(parents=True, exist_ok=True)
