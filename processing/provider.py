@@ -12,7 +12,10 @@ from .algorithms.comparedesigns import CompareDesigns
 from .algorithms.demoreserve import DemoReserve
 from .algorithms.estimate import Estimate
 from .algorithms.layout import LayoutUnits
+from .algorithms.occupancy import Occupancy
 from .algorithms.simulatecounts import SimulateCounts
+from .algorithms.simulatedetections import SimulateDetections
+from .algorithms.stations import Stations
 from .algorithms.stratify import Stratify
 
 MODELS = os.path.join(os.path.dirname(os.path.abspath(__file__)), "models")
@@ -28,6 +31,9 @@ ALGORITHM_CLASSES = [
     LayoutUnits,
     SimulateCounts,
     Stratify,
+    Stations,
+    Occupancy,
+    SimulateDetections,
 ]
 
 

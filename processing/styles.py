@@ -426,3 +426,39 @@ def style_on_completion(context, dest_id, style_name, **options):
 
 def colour(text):
     return QColor(text)
+
+
+# -- stations and occupancy ------------------------------------------------------------
+def stations(layer):
+    """Stations by ``role`` as the units are (primary filled, reserve hollow), labelled with ``station``."""
+    units(layer, label=False)
+    if layer.fields().lookupField("station") >= 0:
+        label_features(layer, "station")
+    return layer
+
+
+def occupancy(layer, field="psi_cond"):
+    """Sites graduated by ``psi_cond`` in five equal classes from 0 to 1 (light to dark); sites left out grey."""
+    from qgis.core import QgsRendererRange
+
+    from .report.style import PROBABILITY_RAMP
+
+    if layer.fields().lookupField(field) < 0:
+        return _finish(layer, QgsSingleSymbolRenderer(_category_symbol(layer, PROBABILITY_RAMP[0])))
+    ranges = []
+    for i in range(5):
+        lo, hi = i / 5.0, (i + 1) / 5.0
+        colour = colour_ramp(PROBABILITY_RAMP).color((i + 0.5) / 5.0).name()
+        ranges.append(QgsRendererRange(lo, hi, _category_symbol(layer, colour), f"{lo:.1f} – {hi:.1f}"))
+    renderer = QgsGraduatedSymbolRenderer(field, ranges)
+    rules = QgsRuleBasedRenderer.convertFromRenderer(renderer, layer)
+    other = QgsRuleBasedRenderer.Rule(_category_symbol(layer, NO_ESTIMATE_COLOUR))
+    other.setIsElse(True)
+    other.setLabel(_tr("left out (no surveyed occasion)"))
+    rules.rootRule().appendChild(other)
+    layer.setTitle(_tr("Occupancy given the detections (psi_cond)"))
+    return _finish(layer, rules)
+
+
+STYLES["stations"] = stations
+STYLES["occupancy"] = occupancy

@@ -55,3 +55,6 @@ figcaption{{color:{MUTED};font-size:12px;margin-top:4px}}
 .refs ol{{padding-left:22px;font-size:13px}}
 @media print{{body{{background:#fff}}main{{max-width:none;padding:0}}.table-wrap{{overflow:visible}}}}
 """
+
+# Sequential ramp for probabilities (occupancy), light to dark; shared by the report maps and the layer style.
+PROBABILITY_RAMP = ("#f5efd9", "#d9e4bf", "#9cc7a4", "#4f9a8f", "#2a6475", "#1f3a44")

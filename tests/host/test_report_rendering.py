@@ -340,6 +340,26 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None, run=None):
         "REPORT": report("estimate"),
     })
     reports["plotwise:estimate"] = estimate["REPORT"]
+
+    stations = run("plotwise:stations", {
+        "FRAME": frame_layer, "N_STATIONS": 24, "ARRAY": 1, "HOME_RANGE": 2.0, "SPACING": 0.0, "SPACING_RULE": 1,
+        "CLUSTER_SIZE": 4, "MIN_SPACING": 0.0, "RESERVE": 1, "SEED": 6, "SERVICE_HOURS": 1.5,
+        "OUTPUT": "memory:", "OUTPUT_GPX": str(folder / "stations.gpx"), "REPORT": report("stations"),
+    })
+    reports["plotwise:stations"] = stations["REPORT"]
+    detected = output_layer(run("plotwise:simulatedetections", {
+        "STATIONS": output_layer(stations["OUTPUT"]),
+        "ANIMALS": QgsVectorLayer(demo_reserve_outputs["OUTPUT_ANIMALS"], "animals", "ogr"), "OCCASIONS": 6,
+        "P_MAX": 0.6, "SIGMA": 500.0, "NOT_SURVEYED": 0.1, "SEED": 7, "OUTPUT": "memory:",
+    })["OUTPUT"])
+    if name:
+        detected.setName(name)
+    occupancy = run("plotwise:occupancy", {
+        "SITES": detected, "SITE_ID_FIELD": "station", "HISTORY_FIELDS": [f"det_{j:02d}" for j in range(1, 7)],
+        "CONFIDENCE": 0.95, "TARGET_SE": 0.05, "GOF_REPLICATES": 20, "SEED": 8,
+        "OUTPUT": "memory:", "OUTPUT_TABLE": "memory:", "REPORT": report("occupancy"),
+    })
+    reports["plotwise:occupancy"] = occupancy["REPORT"]
     return reports
 
 
@@ -450,6 +470,8 @@ def test_hostile_names_and_values_come_out_escaped(plotwise_provider, demo_reser
         "plotwise:allocate": [HOSTILE_NAME, HOSTILE_VALUE],
         "plotwise:layout": [HOSTILE_VALUE],
         "plotwise:estimate": [HOSTILE_NAME, HOSTILE_VALUE],
+        "plotwise:stations": [HOSTILE_NAME],
+        "plotwise:occupancy": [HOSTILE_NAME],
     }
     documents = {}
     for alg, strings in expected.items():

@@ -262,8 +262,10 @@ def test_every_spatial_output_loads_styled(plotwise_provider, demo_reserve_outpu
         applied = {layer.name(): layer.customProperty(styles.STYLE_PROPERTY) for layer in spatial}
         assert all(applied.values()), applied
         # frame (buildframe), strata and their raster (stratify), strata (allocate), units (layout,
-        # simulatecounts), estimate (estimate); comparedesigns writes a table only
-        assert sorted(applied.values()) == ["estimate", "frame", "strata", "strata", "strata_raster", "units", "units"]
+        # simulatecounts), estimate (estimate); comparedesigns writes a table only; stations (stations,
+        # simulatedetections) and the sites with occupancy (occupancy)
+        assert sorted(applied.values()) == ["estimate", "frame", "occupancy", "stations", "stations", "strata", "strata",
+                                            "strata_raster", "units", "units"]
     finally:
         project.removeAllMapLayers()
 
