@@ -19,6 +19,8 @@ SEED = 20261201
 # square plots of 400 m × 400 m (16 ha): at the velmar's ~10 per km² a plot holds about 1.6 animals
 PLOT_SIDE = 400.0
 PLOT_HA = PLOT_SIDE**2 / 1e4
+VELMAR_HOME_RANGE = 3.0  # km², the invented velmar's home range (for the camera-trap stations)
+CAMERA_OCCASIONS = 8  # weekly occasions of the camera-trap season
 
 
 @dataclass
@@ -348,7 +350,53 @@ def step_compare(demo):
         print(f"      {f['design']:<24s} RMSE {f['rmse']:7.1f} ({f['rel_rmse']:.1%})  coverage {f['coverage']:.0%}")
 
 
+def step_camera_season(demo):
+    """A camera-trap season: stations spaced from the velmar's home range, simulated detections, occupancy (issue 15)."""
+    if not all(demo.available(a) for a in ("plotwise:stations", "plotwise:simulatedetections", "plotwise:occupancy")):
+        return
+    if demo.results.get("reserve") is None:
+        print("  camera-trap season skipped: no demo reserve")
+        return
+    frame = demo.results.get("frame")
+    stations = demo.run("plotwise:stations", {
+        "FRAME": frame["OUTPUT"] if frame is not None else demo.layer_uri("reserve"),
+        "N_STATIONS": 40, "ARRAY": 2,  # spatially balanced single stations
+        "HOME_RANGE": VELMAR_HOME_RANGE, "SPACING": 0.0, "SPACING_RULE": 0,  # independent sites: one diameter apart
+        "CLUSTER_SIZE": 4, "MIN_SPACING": 0.0, "RESERVE": 3, "SEED": SEED + 20, "SERVICE_HOURS": 1.5,
+        "OUTPUT": demo.table("camera_stations"), "OUTPUT_GPX": str(demo.out / "camera_stations.gpx"),
+        "REPORT": demo.report("09_camera_stations"),
+    })
+    # greenness at each station, a covariate of occupancy (the host's own raster sampling)
+    sampled = demo.run("native:rastersampling", {
+        "INPUT": stations["OUTPUT"], "RASTERCOPY": str(demo.out / "greenness.tif"), "COLUMN_PREFIX": "green_",
+        "OUTPUT": "memory:",
+    })["OUTPUT"]
+    detections = demo.run("plotwise:simulatedetections", {
+        "STATIONS": sampled, "ANIMALS": demo.layer_uri("animals"), "GROUP_FIELD": "group_id",
+        "OCCASIONS": CAMERA_OCCASIONS, "P_MAX": 0.5, "SIGMA": 450.0, "NOT_SURVEYED": 0.05, "SEED": SEED + 21,
+        "OUTPUT": demo.table("camera_detections"),
+    })
+    occupancy = demo.run("plotwise:occupancy", {
+        "SITES": detections["OUTPUT"], "SITE_ID_FIELD": "station",
+        "HISTORY_FIELDS": [f"det_{j:02d}" for j in range(1, CAMERA_OCCASIONS + 1)],
+        "PSI_COVARIATES": ["green_1"], "P_COVARIATES": [], "MODELS": "psi:", "CONFIDENCE": 0.95, "TARGET_SE": 0.05,
+        "GOF_REPLICATES": 200, "SEED": SEED + 22,
+        "OUTPUT": demo.table("camera_occupancy"), "OUTPUT_TABLE": demo.table("camera_occupancy_table"),
+        "REPORT": demo.report("10_occupancy"),
+    })
+    demo.results["camera"] = {"stations": stations, "detections": detections, "occupancy": occupancy}
+    demo.layers += [
+        ("Camera stations", demo.layer_uri("camera_stations"), "ogr", "stations"),
+        ("Camera sites: occupancy given the detections", demo.layer_uri("camera_occupancy"), "ogr", "occupancy"),
+    ]
+    print(f"    {stations['N_PRIMARY']} camera stations {stations['SPACING_USED']:,.0f} m apart (one velmar home-range "
+          f"diameter), {CAMERA_OCCASIONS} weekly occasions simulated; occupancy ψ = {occupancy['PSI']:.2f} "
+          f"({occupancy['PSI_LO']:.2f} to {occupancy['PSI_HI']:.2f}), p = {occupancy['P']:.2f} per week, naive "
+          f"{occupancy['NAIVE']:.2f}; {occupancy['OCCASIONS_NEEDED']:.0f} occasions give a cumulative detection of 0.95")
+
+
 STEPS = [step_reserve, step_frame, step_stratify, step_pilot, step_allocate, step_layout, step_counts, step_estimate, step_compare]
+STEPS.append(step_camera_season)
 
 
 # -- project -------------------------------------------------------------------------
