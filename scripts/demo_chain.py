@@ -351,7 +351,7 @@ def step_compare(demo):
 
 
 def step_camera_season(demo):
-    """A camera-trap season: stations spaced from the velmar's home range, simulated detections, occupancy (issue 15)."""
+    """A camera-trap season: stations spaced from the velmar's home range, detections, occupancy (issue 15)."""
     if not all(demo.available(a) for a in ("plotwise:stations", "plotwise:simulatedetections", "plotwise:occupancy")):
         return
     if demo.results.get("reserve") is None:
@@ -392,7 +392,8 @@ def step_camera_season(demo):
     print(f"    {stations['N_PRIMARY']} camera stations {stations['SPACING_USED']:,.0f} m apart (one velmar home-range "
           f"diameter), {CAMERA_OCCASIONS} weekly occasions simulated; occupancy ψ = {occupancy['PSI']:.2f} "
           f"({occupancy['PSI_LO']:.2f} to {occupancy['PSI_HI']:.2f}), p = {occupancy['P']:.2f} per week, naive "
-          f"{occupancy['NAIVE']:.2f}; {occupancy['OCCASIONS_NEEDED']:.0f} occasions give a cumulative detection of 0.95")
+          f"{occupancy['NAIVE']:.2f}; {occupancy['OCCASIONS_NEEDED']:.0f} occasions give a cumulative detection "
+          "of 0.95")
 
 
 STEPS = [step_reserve, step_frame, step_stratify, step_pilot, step_allocate, step_layout, step_counts, step_estimate, step_compare]
