@@ -171,12 +171,11 @@ class Occupancy(PlotwiseAlgorithm):
             if effort_fields:
                 effort = np.array([attrs[f] for f in effort_fields], dtype=object).T
             models = engine.parse_models(models_text, numeric, bool(effort_fields))
-            inp = engine.occupancy_input(
+            result = engine.occupancy_analysis(
                 histories, psi_cov, p_cov, {f: attrs[f] for f in numeric}, effort, models,
                 self.parameterAsDouble(parameters, self.CONFIDENCE, context),
-                self.parameterAsDouble(parameters, self.TARGET_SE, context), gof_replicates, layer, effort_fields)
-            result = engine.occupancy_analysis(inp, rng=seeded.generator if seeded else None,
-                                               progress=self.progress_callback(feedback, 10, 85))
+                self.parameterAsDouble(parameters, self.TARGET_SE, context), gof_replicates, layer, effort_fields,
+                rng=seeded.generator if seeded else None, progress=self.progress_callback(feedback, 10, 85))
         warnings = [self.translate_message(w) for w in result.warnings]
         self.push_warnings(feedback, warnings)
 

@@ -136,18 +136,17 @@ class Stations(PlotwiseAlgorithm):
             raise QgsProcessingException(self.tr("Layer '{layer}' has no field '{field}' ({param}). Choose an "
                                                  "existing field.").format(layer=layer_name, field=stratum_field,
                                                                            param=self.STRATUM_FIELD))
-        with self.engine_errors():
-            spec = engine.station_spec(
-                array=self.parameterAsEnum(parameters, self.ARRAY, context),
-                n_stations=self.parameterAsInt(parameters, self.N_STATIONS, context),
-                home_range=self.parameterAsDouble(parameters, self.HOME_RANGE, context),
-                spacing=self.parameterAsDouble(parameters, self.SPACING, context),
-                rule=self.parameterAsEnum(parameters, self.SPACING_RULE, context),
-                cluster_size=self.parameterAsInt(parameters, self.CLUSTER_SIZE, context),
-                min_spacing=self.parameterAsDouble(parameters, self.MIN_SPACING, context),
-                reserve=self.parameterAsInt(parameters, self.RESERVE, context))
-            service = engine.service_plan(0, self.parameterAsDouble(parameters, self.SERVICE_HOURS, context),
-                                          self.parameterAsDouble(parameters, self.WORKDAY_HOURS, context))
+        settings = dict(
+            array=self.parameterAsEnum(parameters, self.ARRAY, context),
+            n_stations=self.parameterAsInt(parameters, self.N_STATIONS, context),
+            home_range=self.parameterAsDouble(parameters, self.HOME_RANGE, context),
+            spacing=self.parameterAsDouble(parameters, self.SPACING, context),
+            rule=self.parameterAsEnum(parameters, self.SPACING_RULE, context),
+            cluster_size=self.parameterAsInt(parameters, self.CLUSTER_SIZE, context),
+            min_spacing=self.parameterAsDouble(parameters, self.MIN_SPACING, context),
+            reserve=self.parameterAsInt(parameters, self.RESERVE, context))
+        service_hours = self.parameterAsDouble(parameters, self.SERVICE_HOURS, context)
+        workday_hours = self.parameterAsDouble(parameters, self.WORKDAY_HOURS, context)
         seeded = self.seeded_generator(parameters, context, feedback)
         crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, layer_name)
         records = bridge.read_features(source, crs, context, feedback, (stratum_field,) if stratum_field else (),
@@ -156,14 +155,13 @@ class Stations(PlotwiseAlgorithm):
             raise self.cancelled_error()
         feedback.setProgress(10)
         with self.engine_errors():
-            frame = engine.prepare_frame(records.geometries, [int(i) for i in records.fids],
-                                         records.attributes[stratum_field] if stratum_field else None, spec)
-            result = engine.station_layout(frame, spec, seeded.generator, crs=bridge.crs_wkt(crs),
-                                           progress=self.progress_callback(feedback, 10, 60))
-            n_primary = int(result.is_primary.sum())
-            service = engine.service_plan(n_primary, service.service_hours, service.workday_hours,
-                                          spec.cluster_size if spec.array == engine.CLUSTERS else 0) \
-                if service is not None else None
+            result = engine.place_stations(
+                records.geometries, [int(i) for i in records.fids],
+                records.attributes[stratum_field] if stratum_field else None, seeded.generator,
+                crs=bridge.crs_wkt(crs), progress=self.progress_callback(feedback, 10, 60), **settings)
+            spec, n_primary = result.spec, int(result.is_primary.sum())
+            service = engine.service_plan(n_primary, service_hours, workday_hours,
+                                          spec.cluster_size if spec.array == engine.CLUSTERS else 0)
         warnings = [self.tr("Layer '{layer}': {text}").format(layer=layer_name, text=self.translate_message(w))
                     for w in result.warnings]
         self.push_warnings(feedback, warnings)
@@ -182,9 +180,8 @@ class Stations(PlotwiseAlgorithm):
         feedback.pushInfo(self.tr("{n} primary and {r} reserve stations, {s:.0f} m apart.").format(
             n=n_primary, r=len(result) - n_primary, s=spec.spacing))
         report = stations_report(
-            result, frame, StationsRun(layer_name, stratum_field or "", self._crs_text(crs, source), seeded.seed,
-                                       self.parameterAsDouble(parameters, self.SERVICE_HOURS, context),
-                                       self.parameterAsDouble(parameters, self.WORKDAY_HOURS, context)),
+            result, result.frame, StationsRun(layer_name, stratum_field or "", self._crs_text(crs, source),
+                                              seeded.seed, service_hours, workday_hours),
             service, warnings, tr=lambda s: self.tr(s, "PlotwiseReport"), language=active_language())
         path = self.write_report(report, parameters, context, feedback)
         if path:

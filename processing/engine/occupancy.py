@@ -259,7 +259,7 @@ def _model_field_names(names, part, fields, has_effort, line):
 
 @dataclass(frozen=True, eq=False)
 class OccupancyInput:
-    """Everything the analysis needs, checked (:func:`occupancy_input`)."""
+    """Everything the analysis needs, checked (:func:`_occupancy_iv`)."""
 
     histories: DetectionHistories
     main: ModelTerms
@@ -271,7 +271,7 @@ class OccupancyInput:
     gof_replicates: int
 
 
-def occupancy_input(histories, psi_covariates=(), p_covariates=(), covariates=None, effort=None,
+def _occupancy_iv(histories, psi_covariates=(), p_covariates=(), covariates=None, effort=None,
                     models=(), confidence=0.95, target_se=0.05, gof_replicates=0, layer="SITES",
                     effort_fields=()):
     """Validate the analysis' inputs (the ``_iv`` step) and return :class:`OccupancyInput`.
@@ -983,8 +983,18 @@ class OccupancyResult:
         return w / w.sum() if w.sum() > 0 else w
 
 
-def occupancy_analysis(inp, rng=None, progress=None, max_iterations=500):
+def occupancy_analysis(histories, psi_covariates=(), p_covariates=(), covariates=None, effort=None, models=(),
+                       confidence=0.95, target_se=0.05, gof_replicates=0, layer="SITES", effort_fields=(), rng=None,
+                       progress=None, max_iterations=500):
     """Fit the main model and the compared models, give the design advice and (optionally) the fit test.
+
+    Parameters are those of :func:`_occupancy_iv` (checked there), plus ``rng``
+    (the run's generator, for the goodness-of-fit bootstrap), ``progress``
+    (``progress(fraction) -> cancelled``) and the search's ``max_iterations``.
+
+    Returns
+    -------
+    OccupancyResult
 
     Raises
     ------
@@ -992,6 +1002,8 @@ def occupancy_analysis(inp, rng=None, progress=None, max_iterations=500):
         When the main model does not converge or cannot be estimated: no number
         comes from a failed fit.
     """
+    inp = _occupancy_iv(histories, psi_covariates, p_covariates, covariates, effort, models, confidence, target_se,
+                        gof_replicates, layer, effort_fields)
     warnings = []
     fits = []
     for i, terms in enumerate(inp.models):

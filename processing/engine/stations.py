@@ -94,7 +94,7 @@ def rule_spacing(home_range_km2, rule):
 
 @dataclass(frozen=True)
 class StationSpec:
-    """The checked parameters of a station layout (:func:`station_spec`)."""
+    """The checked parameters of a station layout (:func:`_stations_iv`)."""
 
     array: int
     n_stations: int
@@ -111,7 +111,7 @@ class StationSpec:
         return home_range_sigma(self.home_range) if self.home_range > 0 else math.nan
 
 
-def station_spec(array=GRID, n_stations=30, home_range=0.0, spacing=0.0, rule=RULE_OCCUPANCY, cluster_size=4,
+def _stations_iv(array=GRID, n_stations=30, home_range=0.0, spacing=0.0, rule=RULE_OCCUPANCY, cluster_size=4,
                  min_spacing=0.0, reserve=0):
     """Validate the parameters and return :class:`StationSpec` (the ``_iv`` step)."""
     if array not in (GRID, CLUSTERS, BALANCED):
@@ -199,6 +199,7 @@ class StationLayout:
     extent: ArrayExtent
     grid_offset: tuple  # the grid's random start (m), NaN outside the grid array
     warnings: tuple = ()
+    frame: object = None  # the layout.PreparedFrame the stations were placed in
 
     def __len__(self):
         return len(self.station)
@@ -380,7 +381,7 @@ def station_layout(frame, spec, rng, crs=None, progress=None):
         parts = balanced_array(frame, spec, rng, layout.SpacingGuard(max(spec.min_spacing, spec.spacing)))
     if progress is not None and progress(0.8):
         raise Cancelled("Cancelled while placing the stations.")
-    result = _assemble(frame, spec, parts, crs, offset, warnings)
+    result = replace(_assemble(frame, spec, parts, crs, offset, warnings), frame=frame)
     if spec.home_range > 0 and np.isfinite(result.extent.home_ranges) and \
             result.extent.home_ranges < FEW_HOME_RANGES:
         warnings.append(message("The array's primary stations cover {n:.1f} home ranges (convex hull {area:.2f} km² "
@@ -422,6 +423,27 @@ def _assemble(frame, spec, parts, crs, offset, warnings):
     return StationLayout(tuple(stations), tuple(strata_keys), tuple(clusters), tuple(roles),
                          np.concatenate(orders).astype(int), xy, lon, lat, spec, tuple(summaries),
                          array_extent(xy[primary], spec.home_range), offset, tuple(warnings))
+
+
+def place_stations(geometries, feature_ids=None, strata=None, rng=None, crs=None, progress=None, **settings):
+    """Check the settings (:func:`_stations_iv`), prepare the frame (:func:`prepare_frame`) and place the
+    stations (:func:`station_layout`).
+
+    Parameters
+    ----------
+    geometries : sequence of shapely polygons (projected, metres)
+    feature_ids, strata : sequences aligned with ``geometries`` (strata: None for one stratum)
+    rng : numpy.random.Generator
+    settings : array, n_stations, home_range, spacing, rule, cluster_size, min_spacing, reserve
+
+    Returns
+    -------
+    StationLayout
+    """
+    spec = _stations_iv(**settings)
+    ids = list(feature_ids) if feature_ids is not None else list(range(len(geometries)))
+    frame = prepare_frame(geometries, ids, strata, spec)
+    return station_layout(frame, spec, rng, crs=crs, progress=progress)
 
 
 def station_waypoints(stations, crs):

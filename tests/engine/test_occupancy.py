@@ -59,8 +59,7 @@ def direct_constant_fit(y):
 
 
 def fit(y, **options):
-    inp = occ.occupancy_input(histories(y), **options)
-    return occ.occupancy_analysis(inp)
+    return occ.occupancy_analysis(histories(y), **options)
 
 
 # -- the constant model against the likelihood maximised directly --------------------------------------
@@ -107,8 +106,7 @@ def test_covariate_model_equals_a_direct_maximisation():
     psi = special.expit(0.3 + 0.006 * (elevation - 1200.0))
     p = special.expit(-1.8 + 0.3 * effort)
     y = simulate(rng, psi, p, k, s, missing=0.1)
-    inp = occ.occupancy_input(histories(y), psi_covariates=["elev"], covariates={"elev": elevation}, effort=effort)
-    main = occ.occupancy_analysis(inp).main
+    main = fit(y, psi_covariates=["elev"], covariates={"elev": elevation}, effort=effort).main
 
     def negative(b):  # on the covariates' own units, written here
         return -mackenzie_loglik(special.expit(b[0] + b[1] * elevation), special.expit(b[2] + b[3] * effort), y)
@@ -127,7 +125,7 @@ def test_many_data_sets_fitted_together_equal_the_scipy_search():
     s, k = 90, 5
     cover = rng.normal(size=s)
     y = np.stack([simulate(rng, special.expit(0.2 + 0.8 * cover), 0.4, k, s, missing=0.1) for _ in range(8)])
-    inp = occ.occupancy_input(histories(y[0]), psi_covariates=["cover"], covariates={"cover": cover})
+    inp = occ._occupancy_iv(histories(y[0]), psi_covariates=["cover"], covariates={"cover": cover})
     surveyed = ~np.isnan(y[0])
     y = np.where(surveyed, np.nan_to_num(y), np.nan)  # one missing pattern (the design) for every data set
     data = occ.model_data(inp, inp.main)
@@ -156,7 +154,7 @@ def simulated_fits(psi, p, k, s, seed):
         rng = np.random.default_rng(seed)
         z = rng.random((REPLICATES, s)) < psi
         y = ((rng.random((REPLICATES, s, k)) < p) & z[:, :, None]).astype(float)
-        inp = occ.occupancy_input(histories(y[0]))
+        inp = occ._occupancy_iv(histories(y[0]))
         fits = occ.fit_many(occ.model_data(inp, inp.main), y)
         _SIMULATED[key] = (np.array([f.psi_mean.estimate for f in fits]), np.array([f.psi_mean.lo for f in fits]),
                            np.array([f.psi_mean.hi for f in fits]), np.array([f.status for f in fits]))
@@ -232,7 +230,7 @@ def test_history_chi_square_written_out():
         prob = psi_hat * p_hat**d * (1 - p_hat) ** (3 - d) + (1 - psi_hat) * (d == 0)
         observed = np.sum(np.all(y == np.array(h), axis=1))
         expected_x2 += (observed - 80 * prob) ** 2 / (80 * prob)
-    inp = occ.occupancy_input(histories(y))
+    inp = occ._occupancy_iv(histories(y))
     data = occ.model_data(inp, inp.main)
     assert occ.history_chi_square(data, main.psi, main.p) == pytest.approx(expected_x2, rel=1e-9)
 
@@ -244,8 +242,8 @@ def test_bootstrap_c_hat_sees_heterogeneous_detection():
     s, k = 200, 6
     same = simulate(rng, 0.6, 0.35, k, s)
     mixed = simulate(rng, 0.6, rng.beta(0.4, 0.6, s)[:, None], k, s)
-    fair = occ.occupancy_analysis(occ.occupancy_input(histories(same), gof_replicates=200), rng=rng).gof
-    over = occ.occupancy_analysis(occ.occupancy_input(histories(mixed), gof_replicates=200), rng=rng).gof
+    fair = occ.occupancy_analysis(histories(same), gof_replicates=200, rng=rng).gof
+    over = occ.occupancy_analysis(histories(mixed), gof_replicates=200, rng=rng).gof
     assert fair.replicates + fair.failed == 200
     assert 0.6 < fair.c_hat < 1.6 and fair.p_value > 0.01
     assert over.c_hat > 1.5 and over.p_value < 0.05
@@ -264,7 +262,7 @@ def test_a_history_value_other_than_0_1_null_names_field_and_sites():
 def test_sites_without_a_survey_are_left_out_and_listed():
     y = simulate(np.random.default_rng(9), 0.5, 0.5, 4, 40)
     y[[3, 17]] = np.nan
-    result = occ.occupancy_analysis(occ.occupancy_input(histories(y, [f"cam{i}" for i in range(40)])))
+    result = occ.occupancy_analysis(histories(y, [f"cam{i}" for i in range(40)]))
     assert result.summary.n_used == 38
     assert result.histories.left_out == ("cam3", "cam17")
     assert any("cam3, cam17" in w and "left out" in w for w in result.warnings)
@@ -272,9 +270,8 @@ def test_sites_without_a_survey_are_left_out_and_listed():
 
 def test_failed_convergence_gives_no_number():
     y = simulate(np.random.default_rng(10), 0.5, 0.3, 5, 100)
-    inp = occ.occupancy_input(histories(y))
     with pytest.raises(InputError, match="could not be fitted"):
-        occ.occupancy_analysis(inp, max_iterations=1)
+        occ.occupancy_analysis(histories(y), max_iterations=1)
 
 
 def test_psi_at_the_boundary_is_stated():
@@ -304,9 +301,9 @@ def test_covariate_errors_name_the_sites():
     y[0, 0] = 1
     h = histories(y, list("ABCDEF"))
     with pytest.raises(InputError, match="B, E"):
-        occ.occupancy_input(h, psi_covariates=["elev"], covariates={"elev": [1, None, 3, 4, "x", 6]})
+        occ._occupancy_iv(h, psi_covariates=["elev"], covariates={"elev": [1, None, 3, 4, "x", 6]})
     with pytest.raises(InputError, match="same value"):
-        occ.occupancy_input(h, psi_covariates=["elev"], covariates={"elev": [2] * 6})
+        occ._occupancy_iv(h, psi_covariates=["elev"], covariates={"elev": [2] * 6})
 
 
 def test_model_lines_are_parsed():
@@ -325,7 +322,7 @@ def test_models_are_ranked_by_aic():
     cover = rng.normal(size=s)
     y = simulate(rng, special.expit(0.3 + 1.2 * cover), 0.4, k, s)
     models = occ.parse_models("psi: cover", ["cover"], False)
-    result = occ.occupancy_analysis(occ.occupancy_input(histories(y), models=models, covariates={"cover": cover}))
+    result = fit(y, models=models, covariates={"cover": cover})
     labels = [f.terms.label for f in result.fits]
     assert labels == ["psi: constant; p: constant", "psi: cover; p: constant"]
     for f in result.fits:  # Akaike (1973): -2 log L + 2k

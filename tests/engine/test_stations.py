@@ -22,10 +22,8 @@ RAGGED = Polygon(
 )
 
 
-def layout(frame=(RAGGED,), strata=None, seed=1, **spec):
-    spec = st.station_spec(**spec)
-    prepared = st.prepare_frame(list(frame), list(range(len(frame))), strata, spec)
-    return st.station_layout(prepared, spec, make_rng(seed).generator)
+def layout(frame=(RAGGED,), strata=None, seed=1, **settings):
+    return st.place_stations(list(frame), strata=strata, rng=make_rng(seed).generator, **settings)
 
 
 @pytest.mark.parametrize("home_range", [0.5, 2.0, 25.0])
@@ -41,9 +39,9 @@ def test_spacing_rules_in_closed_form():
     hr = 4.0  # km²
     diameter = 2 * math.sqrt(hr * 1e6 / math.pi)  # one home-range diameter: independent sites (common practice)
     sigma = math.sqrt(hr * 1e6 / math.pi) / math.sqrt(-2 * math.log(0.05))
-    assert st.station_spec(home_range=hr, rule=st.RULE_OCCUPANCY).spacing == pytest.approx(diameter, rel=1e-12)
-    assert st.station_spec(home_range=hr, rule=st.RULE_SCR).spacing == pytest.approx(2 * sigma, rel=1e-12)  # Sun 2014
-    assert st.station_spec(home_range=hr, spacing=750.0).spacing == 750.0  # a given spacing replaces the rule
+    assert st._stations_iv(home_range=hr, rule=st.RULE_OCCUPANCY).spacing == pytest.approx(diameter, rel=1e-12)
+    assert st._stations_iv(home_range=hr, rule=st.RULE_SCR).spacing == pytest.approx(2 * sigma, rel=1e-12)  # Sun 2014
+    assert st._stations_iv(home_range=hr, spacing=750.0).spacing == 750.0  # a given spacing replaces the rule
 
 
 @pytest.mark.parametrize("array", [st.GRID, st.CLUSTERS, st.BALANCED])
@@ -100,7 +98,7 @@ def test_min_spacing_is_respected_between_strata():
 
 def test_min_spacing_above_the_spacing_is_an_error():
     with pytest.raises(InputError, match="MIN_SPACING"):
-        st.station_spec(spacing=500.0, min_spacing=800.0)
+        st._stations_iv(spacing=500.0, min_spacing=800.0)
 
 
 def test_reserves_follow_the_primaries_in_draw_order():

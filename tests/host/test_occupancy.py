@@ -181,34 +181,72 @@ def test_simulated_detections_from_the_demo_population(run_alg, demo_reserve_out
     assert 0 < fitted["PSI"] <= 1
 
 
-def test_qgis_process_with_the_pinned_parameters_only(tmp_path):
+@pytest.fixture(scope="module")
+def qgis_process(tmp_path_factory):
+    """``qgis_process.bin`` with the clone installed in a throwaway profile (as tests/host/test_package.py)."""
     if not os.path.exists(QGIS_PROCESS):
         pytest.skip("qgis_process is not installed")
-    profile = tmp_path / "profile"
-    plugins = profile / "profiles" / "default" / "python" / "plugins"
+    folder = tmp_path_factory.mktemp("qgis_process")
+    plugins = folder / "profile" / "profiles" / "default" / "python" / "plugins"
     plugins.mkdir(parents=True)
     shutil.copytree(REPO, plugins / "plotwise", ignore=shutil.ignore_patterns(
         ".venv*", ".git", "tests", "scripts", "__pycache__", "demo-output", "dist"))
-    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(profile), QT_QPA_PLATFORM="offscreen",
-               XDG_RUNTIME_DIR=str(tmp_path))
-    rng = np.random.default_rng(8)
-    layer = site_layer(simulated(seed=8), {"cover": rng.normal(size=80), "wind": rng.normal(size=80)})
+    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(folder / "profile"), QT_QPA_PLATFORM="offscreen",
+               XDG_RUNTIME_DIR=str(folder))
+    subprocess.run([QGIS_PROCESS, "plugins", "enable", "plotwise"], env=env, capture_output=True, timeout=300)
+
+    def run(*arguments):
+        done = subprocess.run([QGIS_PROCESS, *arguments], env=env, capture_output=True, text=True, timeout=300)
+        assert done.returncode == 0, done.stdout + done.stderr
+        return done.stdout
+
+    return run
+
+
+def write_gpkg(layer, path):
     from qgis.core import QgsVectorFileWriter
 
-    sites = tmp_path / "sites.gpkg"
-    QgsVectorFileWriter.writeAsVectorFormat(layer, str(sites), "utf-8", layer.crs(), "GPKG")
-    subprocess.run([QGIS_PROCESS, "plugins", "enable", "plotwise"], env=env, capture_output=True, timeout=300)
+    QgsVectorFileWriter.writeAsVectorFormat(layer, str(path), "utf-8", layer.crs(), "GPKG")
+    return path
+
+
+def test_qgis_process_simulates_detections(qgis_process, tmp_path):
+    from plotwise.plugin import compat
+
+    stations = site_layer(np.zeros((20, 1)))
+    animals = QgsVectorLayer("Point?crs=EPSG:32736", "animals", "memory")
+    animals.dataProvider().addAttributes([compat.make_field("group_id", "int")])
+    animals.updateFields()
+    features = []
+    for i in range(30):
+        f = QgsFeature(animals.fields())
+        f.setGeometry(QgsGeometry.fromWkt(f"POINT({500000 + 300 * i} {9000000 + 200 * (i % 7)})"))
+        f.setAttributes([i // 3])
+        features.append(f)
+    animals.dataProvider().addFeatures(features)
+    out = tmp_path / "detections.gpkg"
+    qgis_process("run", "plotwise:simulatedetections", "--", f"STATIONS={write_gpkg(stations, tmp_path / 's.gpkg')}",
+                 f"ANIMALS={write_gpkg(animals, tmp_path / 'a.gpkg')}", "OCCASIONS=4", "P_MAX=0.7", "SIGMA=600",
+                 "SEED=3", f"OUTPUT={out}")
+    dataset = ogr.Open(str(out))  # keep the dataset alive while its layer is read
+    layer = dataset.GetLayer(0)
+    names = [layer.GetLayerDefn().GetFieldDefn(i).GetName() for i in range(layer.GetLayerDefn().GetFieldCount())]
+    assert {"det_01", "det_04", "dist_grp", "p_true"} <= set(names) and layer.GetFeatureCount() == 20
+
+
+def test_qgis_process_with_the_pinned_parameters_only(qgis_process, tmp_path):
+    rng = np.random.default_rng(8)
+    layer = site_layer(simulated(seed=8), {"cover": rng.normal(size=80), "wind": rng.normal(size=80)})
+    sites = write_gpkg(layer, tmp_path / "sites.gpkg")
     values = [("SITES", str(sites)), ("SITE_ID_FIELD", "site")]
     values += [("HISTORY_FIELDS", f"det_{j + 1}") for j in range(K)]  # a multiple field: one NAME=value per field
     values += [("PSI_COVARIATES", "cover"), ("P_COVARIATES", "wind"), ("CONFIDENCE", "0.9"), ("TARGET_SE", "0.08")]
     assert {k for k, _ in values} == set(PINNED)
     out, table = tmp_path / "sites_out.gpkg", tmp_path / "table.gpkg"
-    run = subprocess.run([QGIS_PROCESS, "run", "plotwise:occupancy", "--", *(f"{k}={v}" for k, v in values),
-                          f"OUTPUT={out}", f"OUTPUT_TABLE={table}", f"REPORT={tmp_path / 'o.html'}"],
-                         env=env, capture_output=True, text=True, timeout=300)
-    assert run.returncode == 0, run.stdout + run.stderr
+    stdout = qgis_process("run", "plotwise:occupancy", "--", *(f"{k}={v}" for k, v in values), f"OUTPUT={out}",
+                          f"OUTPUT_TABLE={table}", f"REPORT={tmp_path / 'o.html'}")
     for name in ("PSI", "PSI_SE", "PSI_LO", "PSI_HI", "P", "P_SE", "NAIVE"):
-        assert name in run.stdout
+        assert name in stdout
     dataset = ogr.Open(str(table))
     params = {f.GetField("param") for f in dataset.GetLayer(0)}
     assert params == {"logit_psi:const", "logit_psi:cover", "logit_p:const", "logit_p:wind", "psi", "p"}
