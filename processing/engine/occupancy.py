@@ -251,9 +251,11 @@ def _model_field_names(names, part, fields, has_effort, line):
         elif name in fields or name.lower() in lookup:
             out.append(name if name in fields else lookup[name.lower()])
         else:
-            raise InputError(message("Model line {line!r}: {name} is not a numeric field of the sites layer{hint}. "
-                                     "Use the field names as they are in the layer.", line=line, name=name,
-                                     hint=" (give EFFORT_FIELDS to use effort)" if name.lower() == EFFORT else ""))
+            raise InputError(message(
+                "Model line {line!r}: {name} is not a numeric field of the sites layer (give EFFORT_FIELDS to use "
+                "effort). Use the field names as they are in the layer." if name.lower() == EFFORT else
+                "Model line {line!r}: {name} is not a numeric field of the sites layer. Use the field names as they "
+                "are in the layer.", line=line, name=name))
     return out
 
 
@@ -1042,11 +1044,13 @@ def _boundary_warnings(fit):
     out = []
     for name in fit.boundary:
         if name == "logit_psi:" + CONSTANT and not fit.terms.psi:
-            out.append(message("psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with "
-                               "every site being occupied{zero}. Its standard error and interval cannot be computed "
-                               "from the information; the other estimates are conditional on it.",
-                               psi=fit.psi_mean.estimate, zero="" if fit.psi_mean.estimate > 0.5 else
-                               " (or none)"))
+            out.append(message(
+                "psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with every site "
+                "being occupied. Its standard error and interval cannot be computed from the information; the other "
+                "estimates are conditional on it." if fit.psi_mean.estimate > 0.5 else
+                "psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with no site "
+                "being occupied. Its standard error and interval cannot be computed from the information; the other "
+                "estimates are conditional on it.", psi=fit.psi_mean.estimate))
         elif name == "logit_p:" + CONSTANT and not fit.terms.p:
             out.append(message("p is at the boundary of its range (estimate {p:.4f}): every survey of a site with a "
                                "detection detected the species. Its standard error cannot be computed; psi is then "

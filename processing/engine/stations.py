@@ -313,17 +313,29 @@ def cluster_array(frame, spec, rng):
     return parts
 
 
+_TOO_MANY = {  # (what, whole frame?)
+    ("stations", False): "{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in "
+                         "stratum {key}: at most about {fit} fit there (a hexagonal lattice; random layouts fill up "
+                         "well before that). Ask for fewer, or lower the spacing.",
+    ("stations", True): "{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in the "
+                        "frame: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well "
+                        "before that). Ask for fewer, or lower the spacing.",
+    ("clusters", False): "{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do "
+                         "not fit in stratum {key}: at most about {fit} fit there (a hexagonal lattice; random "
+                         "layouts fill up well before that). Ask for fewer stations, smaller clusters, or a smaller "
+                         "spacing.",
+    ("clusters", True): "{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do "
+                        "not fit in the frame: at most about {fit} fit there (a hexagonal lattice; random layouts "
+                        "fill up well before that). Ask for fewer stations, smaller clusters, or a smaller spacing.",
+}
+
+
 def _balanced_points(stratum, wanted, rng, guard, distance, what):
     if wanted <= 0:
         return np.zeros((0, 2))
     fit = layout.hexagonal_capacity(stratum.region, distance)
-    too_many = message(
-        "{wanted} {what} (primaries and reserves) at least {distance:.0f} m apart do not fit in stratum {key}: at "
-        "most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer, "
-        "or lower the spacing." if stratum.key is not None else
-        "{wanted} {what} (primaries and reserves) at least {distance:.0f} m apart do not fit in the frame: at most "
-        "about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer, or "
-        "lower the spacing.", wanted=wanted, what=what, distance=distance, key=stratum.key, fit=fit)
+    too_many = message(_TOO_MANY[what, stratum.key is None], wanted=wanted, distance=distance, key=stratum.key,
+                       fit=fit)
     if fit < wanted:
         raise InputError(too_many)
     points = layout.balanced_centres(stratum, wanted, rng, guard)
