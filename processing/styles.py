@@ -454,9 +454,9 @@ def occupancy(layer, field="psi_cond"):
     rules = QgsRuleBasedRenderer.convertFromRenderer(renderer, layer)
     other = QgsRuleBasedRenderer.Rule(_category_symbol(layer, NO_ESTIMATE_COLOUR))
     other.setIsElse(True)
-    other.setLabel(_tr("left out (no surveyed occasion)"))
+    other.setLabel(QCoreApplication.translate("PlotwiseStyles", "left out (no surveyed occasion)"))
     rules.rootRule().appendChild(other)
-    layer.setTitle(_tr("Occupancy given the detections (psi_cond)"))
+    layer.setTitle(QCoreApplication.translate("PlotwiseStyles", "Occupancy given the detections (psi_cond)"))
     return _finish(layer, rules)
 
 

@@ -2,6 +2,7 @@
 import math
 
 import numpy as np
+from qgis.PyQt.QtCore import QCoreApplication
 from qgis.core import (
     QgsCoordinateReferenceSystem,
     QgsFeature,
@@ -15,7 +16,7 @@ from qgis.core import (
 )
 
 from ...plugin import compat
-from ...plugin.translation import active_language
+from ..translation import active_language
 from .. import bridge
 from ..engine import occupancy as engine
 from ..report.occupancy import OccupancyRun, occupancy_report
@@ -184,7 +185,7 @@ class Occupancy(PlotwiseAlgorithm):
         run = OccupancyRun(layer, id_field or "", tuple(history), tuple(effort_fields), models_text,
                            f"{crs.authid()} ({crs.description()})" if spatial else self.tr("(a table: no map)"),
                            seeded.seed if seeded else None)
-        report = occupancy_report(result, run, geometries, warnings, tr=lambda s: self.tr(s, "PlotwiseReport"),
+        report = occupancy_report(result, run, geometries, warnings, translate=QCoreApplication.translate,
                                   language=active_language())
         path = self.write_report(report, parameters, context, feedback)
         if path:

@@ -1,4 +1,5 @@
 """plotwise:stations: camera-trap or recorder stations over a frame, spaced from the species' home range."""
+from qgis.PyQt.QtCore import QCoreApplication
 from qgis.core import (
     QgsField,
     QgsProcessingException,
@@ -12,7 +13,7 @@ from qgis.core import (
 )
 
 from ...plugin import compat
-from ...plugin.translation import active_language
+from ..translation import active_language
 from .. import bridge
 from ..engine import stations as engine
 from ..report.stations import StationsRun, stations_report
@@ -180,9 +181,9 @@ class Stations(PlotwiseAlgorithm):
         feedback.pushInfo(self.tr("{n} primary and {r} reserve stations, {s:.0f} m apart.").format(
             n=n_primary, r=len(result) - n_primary, s=spec.spacing))
         report = stations_report(
-            result, result.frame, StationsRun(layer_name, stratum_field or "", self._crs_text(crs, source),
+            result, StationsRun(layer_name, stratum_field or "", self._crs_text(crs, source),
                                               seeded.seed, service_hours, workday_hours),
-            service, warnings, tr=lambda s: self.tr(s, "PlotwiseReport"), language=active_language())
+            service, warnings, translate=QCoreApplication.translate, language=active_language())
         path = self.write_report(report, parameters, context, feedback)
         if path:
             outputs[self.REPORT] = path

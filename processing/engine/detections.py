@@ -15,7 +15,7 @@ from dataclasses import dataclass
 import numpy as np
 from scipy.spatial import cKDTree
 
-from .errors import InputError, message
+from .errors import QT_TRANSLATE_NOOP, InputError, message
 
 
 @dataclass(frozen=True, eq=False)
@@ -49,16 +49,21 @@ def half_normal_detection(distance, p_max, sigma):
 def simulate_detections(stations_xy, groups_xy, occasions, p_max, sigma, rng, not_surveyed=0.0):
     """Detection histories of ``occasions`` occasions at each station (see the module docstring)."""
     if int(occasions) != occasions or occasions < 1:
-        raise InputError(message("OCCASIONS must be a whole number of at least 1."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "OCCASIONS must be a whole number of at least 1.")))
     if not 0.0 < p_max <= 1.0:
-        raise InputError(message("The detection probability at a group must be in (0, 1]; it is {p:g}.", p=p_max))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "The detection probability at a group must be in (0, 1]; it is {p:g}."), p=p_max))
     if not sigma > 0:
-        raise InputError(message("The detection scale SIGMA must be more than 0 m."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "The detection scale SIGMA must be more than 0 m.")))
     if not 0.0 <= not_surveyed < 1.0:
-        raise InputError(message("The share of occasions not surveyed must be at least 0 and below 1."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "The share of occasions not surveyed must be at least 0 and below 1.")))
     groups = np.asarray(groups_xy, dtype=float).reshape(-1, 2)
     if len(groups) == 0:
-        raise InputError(message("The animal layer holds no animal: there is nothing to detect."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "The animal layer holds no animal: there is nothing to detect.")))
     stations = np.asarray(stations_xy, dtype=float).reshape(-1, 2)
     distance, _ = cKDTree(groups).query(stations)
     p = half_normal_detection(distance, p_max, sigma)

@@ -56,7 +56,7 @@ import re
 import numpy as np
 from scipy import optimize, special
 
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 
 EFFORT = "effort"  # the name of the occasion-level effort in a model
 CONSTANT = "const"
@@ -73,7 +73,8 @@ def _listed(ids, limit=_LIST_LIMIT):
     ids = [str(i) for i in ids]
     text = ", ".join(ids[:limit])
     if len(ids) > limit:
-        return message("{shown} and {more} more", shown=text, more=len(ids) - limit)
+        return message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                       "{shown} and {more} more"), shown=text, more=len(ids) - limit)
     return text
 
 
@@ -164,8 +165,9 @@ def detection_histories(columns, occasions, site_ids, layer="SITES"):
     """
     occasions, site_ids = tuple(str(o) for o in occasions), tuple(site_ids)
     if len(occasions) < 2:
-        raise InputError(message("Layer {layer}: occupancy needs at least 2 occasions (history fields); {n} given. "
-                                 "With one visit per site, detection and occupancy cannot be told apart.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}: occupancy needs at least 2 occasions (history fields); {n} given. "
+                                 "With one visit per site, detection and occupancy cannot be told apart."),
                                  layer=layer, n=len(occasions)))
     _check_site_ids(site_ids, layer)
     y = np.full((len(site_ids), len(occasions)), np.nan)
@@ -174,25 +176,29 @@ def detection_histories(columns, occasions, site_ids, layer="SITES"):
         bad = [sid for sid, v in zip(site_ids, parsed) if v is None]
         if bad:
             raise InputError(message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Layer {layer}, history field {field}: sites {ids} hold a value other than 1 (detected), 0 (not "
-                "detected) or NULL (not surveyed). Correct these values and run again.",
+                "detected) or NULL (not surveyed). Correct these values and run again."),
                 layer=layer, field=name, ids=_listed(bad)), ids=bad)
         y[:, j] = parsed
     kept = ~np.isnan(y).all(axis=1)
     if not kept.any():
-        raise InputError(message("Layer {layer}: no site was surveyed on any occasion (every history value is "
-                                 "NULL).", layer=layer))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}: no site was surveyed on any occasion (every history value is "
+                                 "NULL)."), layer=layer))
     if np.nansum(y[kept]) == 0:
-        raise InputError(message("Layer {layer}: the species was not detected at any site, so occupancy and "
-                                 "detection cannot be estimated (every history is 0).", layer=layer))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}: the species was not detected at any site, so occupancy and "
+                                 "detection cannot be estimated (every history is 0)."), layer=layer))
     return DetectionHistories(site_ids, y, occasions, kept)
 
 
 def _check_site_ids(site_ids, layer):
     empty = [i for i, sid in enumerate(site_ids) if sid is None or str(sid).strip() == ""]
     if empty:
-        raise InputError(message("Layer {layer}: {n} sites have an empty (NULL) site id. Give every site an id, or "
-                                 "leave SITE_ID_FIELD empty to use the feature ids.", layer=layer, n=len(empty)))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}: {n} sites have an empty (NULL) site id. Give every site an id, or "
+                                 "leave SITE_ID_FIELD empty to use the feature ids."), layer=layer, n=len(empty)))
     seen, repeated = set(), []
     for sid in site_ids:
         key = str(sid)
@@ -200,8 +206,9 @@ def _check_site_ids(site_ids, layer):
             repeated.append(key)
         seen.add(key)
     if repeated:
-        raise InputError(message("Layer {layer}: site ids {ids} occur more than once. Each site needs one row "
-                                 "holding all its occasions; merge the rows or correct the ids.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}: site ids {ids} occur more than once. Each site needs one row "
+                                 "holding all its occasions; merge the rows or correct the ids."),
                                  layer=layer, ids=_listed(repeated)), ids=repeated)
 
 
@@ -227,8 +234,9 @@ def parse_models(text, fields, has_effort):
             continue
         parts = _PART.split(line)
         if parts[0].strip() and parts[0].strip().lower() != "constant":
-            raise InputError(message("Model line {line!r}: write the occupancy terms after psi: and the detection "
-                                     "terms after p:, for example psi: elevation p: effort.", line=line))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                     "Model line {line!r}: write the occupancy terms after psi: and the detection "
+                                     "terms after p:, for example psi: elevation p: effort."), line=line))
         terms = {"psi": [], "p": []}
         for key, body in zip(parts[1::2], parts[2::2]):
             names = [t.strip() for t in re.split(r"[,+]", body) if t.strip()]
@@ -245,17 +253,20 @@ def _model_field_names(names, part, fields, has_effort, line):
     for name in names:
         if name.lower() == EFFORT and has_effort and name not in fields:
             if part == "psi":
-                raise InputError(message("Model line {line!r}: effort varies by occasion and acts on detection only; "
-                                         "move it after p:.", line=line))
+                raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                         "Model line {line!r}: effort varies by occasion and acts on detection only; "
+                                         "move it after p:."), line=line))
             out.append(EFFORT)
         elif name in fields or name.lower() in lookup:
             out.append(name if name in fields else lookup[name.lower()])
         else:
             raise InputError(message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Model line {line!r}: {name} is not a numeric field of the sites layer (give EFFORT_FIELDS to use "
-                "effort). Use the field names as they are in the layer." if name.lower() == EFFORT else
+                "effort). Use the field names as they are in the layer.") if name.lower() == EFFORT else
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Model line {line!r}: {name} is not a numeric field of the sites layer. Use the field names as they "
-                "are in the layer.", line=line, name=name))
+                "are in the layer."), line=line, name=name))
     return out
 
 
@@ -285,11 +296,14 @@ def _occupancy_iv(histories, psi_covariates=(), p_covariates=(), covariates=None
     with it by AIC, and the constant model is always among them.
     """
     if not 0.5 <= confidence < 1.0:
-        raise InputError(message("CONFIDENCE must be at least 0.5 and below 1; it is {value}.", value=confidence))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "CONFIDENCE must be at least 0.5 and below 1; it is {value}."), value=confidence))
     if not target_se >= 0:
-        raise InputError(message("TARGET_SE must be 0 (no advice) or more; it is {value}.", value=target_se))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "TARGET_SE must be 0 (no advice) or more; it is {value}."), value=target_se))
     if gof_replicates < 0 or int(gof_replicates) != gof_replicates:
-        raise InputError(message("The number of goodness-of-fit replicates must be 0 or a positive whole number."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "The number of goodness-of-fit replicates must be 0 or a positive whole number.")))
     covariates = dict(covariates or {})
     main = ModelTerms(tuple(psi_covariates), tuple(p_covariates) + ((EFFORT,) if effort is not None else ()))
     all_models = [main] + [m for m in (ModelTerms(),) + tuple(models) if m != main]
@@ -301,7 +315,8 @@ def _occupancy_iv(histories, psi_covariates=(), p_covariates=(), covariates=None
     if effort is not None:
         effort_kept = _effort_values(np.asarray(effort, dtype=object), histories, layer, effort_fields)
     elif any(EFFORT in m.p for m in all_models):
-        raise InputError(message("A model uses effort but no EFFORT_FIELDS were given."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "A model uses effort but no EFFORT_FIELDS were given.")))
     return OccupancyInput(histories, main, tuple(all_models), values, effort_kept, float(confidence),
                           float(target_se), int(gof_replicates))
 
@@ -317,26 +332,30 @@ def _as_float(value):
 
 def _covariate_values(covariates, name, histories, layer):
     if name not in covariates:
-        raise InputError(message("Layer {layer} has no covariate field {field}.", layer=layer, field=name))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer} has no covariate field {field}."), layer=layer, field=name))
     raw = [_as_float(v) for v, k in zip(covariates[name], histories.kept) if k]
     ids = [s for s, k in zip(histories.site_ids, histories.kept) if k]
     bad = [sid for sid, v in zip(ids, raw) if v is None or not math.isfinite(v)]
     if bad:
-        raise InputError(message("Layer {layer}, covariate field {field}: surveyed sites {ids} have no number (NULL "
-                                 "or text). Fill in the values, leave these sites out, or drop the covariate.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}, covariate field {field}: surveyed sites {ids} have no number (NULL "
+                                 "or text). Fill in the values, leave these sites out, or drop the covariate."),
                                  layer=layer, field=name, ids=_listed(bad)), ids=bad)
     values = np.asarray(raw, dtype=float)
     if np.ptp(values) == 0:
-        raise InputError(message("Layer {layer}, covariate field {field}: every surveyed site has the same value "
-                                 "({value:g}), so its effect cannot be estimated. Drop it from the model.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}, covariate field {field}: every surveyed site has the same value "
+                                 "({value:g}), so its effect cannot be estimated. Drop it from the model."),
                                  layer=layer, field=name, value=float(values[0])))
     return values
 
 
 def _effort_values(effort, histories, layer, effort_fields):
     if effort.shape != histories.y.shape:
-        raise InputError(message("Give one effort field per history field, in the same order: {k} history fields "
-                                 "and {e} effort fields.", k=histories.y.shape[1],
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Give one effort field per history field, in the same order: {k} history fields "
+                                 "and {e} effort fields."), k=histories.y.shape[1],
                                  e=effort.shape[1] if effort.ndim == 2 else 0))
     kept = histories.kept
     parsed = [[_as_float(v) for v in row] for row in effort[kept]]
@@ -349,13 +368,15 @@ def _effort_values(effort, histories, layer, effort_fields):
         ids = [s for s, k in zip(histories.site_ids, kept) if k]
         bad = [sid for sid, row in zip(ids, bad_cell) if row.any()]
         fields = [effort_fields[j] if j < len(effort_fields) else str(j + 1) for j in np.flatnonzero(bad_cell.any(0))]
-        raise InputError(message("Layer {layer}, effort fields {fields}: surveyed sites {ids} have no effort, or a "
-                                 "negative one, on an occasion they were surveyed. Give every survey its effort.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}, effort fields {fields}: surveyed sites {ids} have no effort, or a "
+                                 "negative one, on an occasion they were surveyed. Give every survey its effort."),
                                  layer=layer, fields=", ".join(fields), ids=_listed(bad)), ids=bad)
     out = np.where(surveyed, values, np.nan)
     if np.nanstd(out) == 0:
-        raise InputError(message("Layer {layer}: the effort is the same on every survey, so its effect cannot be "
-                                 "estimated. Leave EFFORT_FIELDS empty.", layer=layer))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Layer {layer}: the effort is the same on every survey, so its effect cannot be "
+                                 "estimated. Leave EFFORT_FIELDS empty."), layer=layer))
     return out
 
 
@@ -718,8 +739,9 @@ def fit_at(data, found, confidence=0.95, ll=None):
     """
     nan_k = np.full(len(data.names), np.nan)
     if not found.converged:
-        return _failed_fit(data, nan_k, message("The search for the maximum stopped after {n} iterations without "
-                                                 "converging.", n=found.iterations))
+        return _failed_fit(data, nan_k, message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                                "The search for the maximum stopped after {n} iterations without "
+                                                 "converging."), n=found.iterations))
     ll = log_likelihood(found.theta, data) if ll is None else ll
     at_edge = np.abs(found.theta) > BOUNDARY_LOGIT
     free = ~at_edge
@@ -729,9 +751,10 @@ def fit_at(data, found, confidence=0.95, ll=None):
         np.linalg.cholesky(info)
         cov[np.ix_(free, free)] = np.linalg.inv(info)
     except np.linalg.LinAlgError:
-        return _failed_fit(data, nan_k, message("The observed information is not positive definite at the maximum: "
+        return _failed_fit(data, nan_k, message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                                "The observed information is not positive definite at the maximum: "
                                                  "the parameters cannot all be estimated from these data (collinear "
-                                                 "covariates, or too few detections)."))
+                                                 "covariates, or too few detections).")))
     a_map = data.to_original
     estimate = a_map @ found.theta
     cov_original = a_map @ np.nan_to_num(cov) @ a_map.T
@@ -1014,24 +1037,29 @@ def occupancy_analysis(histories, psi_covariates=(), p_covariates=(), covariates
         fits.append(fit_model(model_data(inp, terms), inp.confidence, max_iterations=max_iterations))
     main = fits[0]
     if main.status == FAILED:
-        raise InputError(message("The occupancy model ({model}) could not be fitted: {why} No estimate is given. "
-                                 "Try fewer covariates, more sites or more occasions.", model=main.terms.label,
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "The occupancy model ({model}) could not be fitted: {why} No estimate is given. "
+                                 "Try fewer covariates, more sites or more occasions."), model=main.terms.label,
                                  why=main.message))
     warnings += _boundary_warnings(main)
-    warnings += [message("The model {model} could not be fitted and is left out of the comparison: {why}",
+    warnings += [message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                         "The model {model} could not be fitted and is left out of the comparison: {why}"),
                          model=f.terms.label, why=f.message) for f in fits[1:] if f.status == FAILED]
     if inp.histories.left_out:
-        warnings.append(message("Sites {ids} have no surveyed occasion (every history value NULL) and were left out "
-                                "of the analysis.", ids=_listed(inp.histories.left_out)))
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                "Sites {ids} have no surveyed occasion (every history value NULL) and were left out "
+                                "of the analysis."), ids=_listed(inp.histories.left_out)))
     advice = design_advice(main.psi_mean.estimate, main.p_mean.estimate, inp.histories.n_occasions, inp.target_se)
     gof = None
     if inp.gof_replicates > 0:
         data = model_data(inp, main.terms)
         if not gof_feasible(data):
-            warnings.append(message("The goodness-of-fit test was skipped: with {k} occasions there are too many "
-                                    "possible detection histories to enumerate.", k=inp.histories.n_occasions))
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                    "The goodness-of-fit test was skipped: with {k} occasions there are too many "
+                                    "possible detection histories to enumerate."), k=inp.histories.n_occasions))
         elif main.status == BOUNDARY:
-            warnings.append(message("The goodness-of-fit test was skipped: the model has parameters at the boundary."))
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                    "The goodness-of-fit test was skipped: the model has parameters at the boundary.")))
         else:
             step = None if progress is None else (lambda f: progress(0.5 + 0.5 * f))
             gof = goodness_of_fit(data, main, inp.gof_replicates, rng, step)
@@ -1045,30 +1073,36 @@ def _boundary_warnings(fit):
     for name in fit.boundary:
         if name == "logit_psi:" + CONSTANT and not fit.terms.psi:
             out.append(message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with every site "
                 "being occupied. Its standard error and interval cannot be computed from the information; the other "
-                "estimates are conditional on it." if fit.psi_mean.estimate > 0.5 else
+                "estimates are conditional on it.") if fit.psi_mean.estimate > 0.5 else
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with no site "
                 "being occupied. Its standard error and interval cannot be computed from the information; the other "
-                "estimates are conditional on it.", psi=fit.psi_mean.estimate))
+                "estimates are conditional on it."), psi=fit.psi_mean.estimate))
         elif name == "logit_p:" + CONSTANT and not fit.terms.p:
-            out.append(message("p is at the boundary of its range (estimate {p:.4f}): every survey of a site with a "
+            out.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                               "p is at the boundary of its range (estimate {p:.4f}): every survey of a site with a "
                                "detection detected the species. Its standard error cannot be computed; psi is then "
-                               "the naive occupancy.", p=fit.p_mean.estimate))
+                               "the naive occupancy."), p=fit.p_mean.estimate))
         else:
-            out.append(message("Parameter {name} is at the boundary (a logit beyond {limit:g}): a covariate separates "
+            out.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                               "Parameter {name} is at the boundary (a logit beyond {limit:g}): a covariate separates "
                                "the sites, or a probability is 0 or 1. Its standard error cannot be computed; simplify "
-                               "the model.", name=name, limit=BOUNDARY_LOGIT))
+                               "the model."), name=name, limit=BOUNDARY_LOGIT))
     return out
 
 
 def _gof_warnings(gof):
     out = []
     if gof.failed:
-        out.append(message("{n} bootstrap data sets could not be fitted and were left out of the goodness-of-fit "
-                           "test.", n=gof.failed))
+        out.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                           "{n} bootstrap data sets could not be fitted and were left out of the goodness-of-fit "
+                           "test."), n=gof.failed))
     if np.isfinite(gof.p_value) and gof.p_value < 0.05:
-        out.append(message("The goodness-of-fit test rejects the model (p = {p:.3f}, c-hat = {c:.2f}): the histories "
+        out.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                           "The goodness-of-fit test rejects the model (p = {p:.3f}, c-hat = {c:.2f}): the histories "
                            "vary more than the model allows. Standard errors may be too small; multiply their "
-                           "squares by c-hat, or add covariates.", p=gof.p_value, c=gof.c_hat))
+                           "squares by c-hat, or add covariates."), p=gof.p_value, c=gof.c_hat))
     return out

@@ -53,7 +53,7 @@ from shapely.ops import unary_union
 from . import geometry as geo
 from . import layout
 from .crs import lonlat_transformer
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 
 ARRAYS = ("grid", "clusters", "balanced")
 GRID, CLUSTERS, BALANCED = range(3)
@@ -65,10 +65,12 @@ R95_IN_SIGMA = math.sqrt(-2.0 * math.log(0.05))
 #: an array whose convex hull covers fewer home ranges than this cannot estimate density well (common practice)
 FEW_HOME_RANGES = 3.0
 _WAYPOINT_TEXT = {
-    (False, PRIMARY): "station {station} (primary, stratum {stratum})",
-    (False, RESERVE): "station {station} (reserve, stratum {stratum})",
-    (True, PRIMARY): "station {station} of cluster {cluster} (primary, stratum {stratum})",
-    (True, RESERVE): "station {station} of cluster {cluster} (reserve, stratum {stratum})",
+    (False, PRIMARY): QT_TRANSLATE_NOOP("PlotwiseEngine", "station {station} (primary, stratum {stratum})"),
+    (False, RESERVE): QT_TRANSLATE_NOOP("PlotwiseEngine", "station {station} (reserve, stratum {stratum})"),
+    (True, PRIMARY): QT_TRANSLATE_NOOP("PlotwiseEngine",
+                     "station {station} of cluster {cluster} (primary, stratum {stratum})"),
+    (True, RESERVE): QT_TRANSLATE_NOOP("PlotwiseEngine",
+                     "station {station} of cluster {cluster} (reserve, stratum {stratum})"),
 }
 
 
@@ -115,28 +117,36 @@ def _stations_iv(array=GRID, n_stations=30, home_range=0.0, spacing=0.0, rule=RU
                  min_spacing=0.0, reserve=0):
     """Validate the parameters and return :class:`StationSpec` (the ``_iv`` step)."""
     if array not in (GRID, CLUSTERS, BALANCED):
-        raise InputError(message("ARRAY must be 0 (grid), 1 (clusters) or 2 (balanced)."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "ARRAY must be 0 (grid), 1 (clusters) or 2 (balanced).")))
     if rule not in (RULE_OCCUPANCY, RULE_SCR):
-        raise InputError(message("The spacing rule must be 0 (independent occupancy sites) or 1 (spatial "
-                                 "capture-recapture)."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "The spacing rule must be 0 (independent occupancy sites) or 1 (spatial "
+                                 "capture-recapture).")))
     for name, value in (("N_STATIONS", n_stations), ("RESERVE", reserve), ("CLUSTER_SIZE", cluster_size)):
         if value < 0 or int(value) != value:
-            raise InputError(message("{name} must be 0 or a positive whole number; it is {value}.", name=name,
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                     "{name} must be 0 or a positive whole number; it is {value}."), name=name,
                                      value=value))
     if not (home_range >= 0 and spacing >= 0 and min_spacing >= 0):
-        raise InputError(message("HOME_RANGE, SPACING and MIN_SPACING must be 0 or more."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "HOME_RANGE, SPACING and MIN_SPACING must be 0 or more.")))
     if spacing <= 0 and home_range <= 0:
-        raise InputError(message("Give the species' home range (HOME_RANGE, km²) or a station spacing (SPACING, "
-                                 "m): the spacing is taken from one of them."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "Give the species' home range (HOME_RANGE, km²) or a station spacing (SPACING, "
+                                 "m): the spacing is taken from one of them.")))
     if array != GRID and n_stations < 1:
-        raise InputError(message("N_STATIONS must be at least 1 for clusters and balanced stations (0 means "
-                                 "\"fill the frame\" for the grid only)."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "N_STATIONS must be at least 1 for clusters and balanced stations (0 means "
+                                 "'fill the frame' for the grid only).")))
     if array == CLUSTERS and cluster_size < 2:
-        raise InputError(message("CLUSTER_SIZE must be at least 2 stations per cluster."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "CLUSTER_SIZE must be at least 2 stations per cluster.")))
     used = float(spacing) if spacing > 0 else rule_spacing(home_range, rule)
     if min_spacing > used:
-        raise InputError(message("MIN_SPACING ({min_spacing:g} m) is larger than the station spacing ({spacing:.0f} "
-                                 "m): stations of the array would break it. Lower MIN_SPACING or raise SPACING.",
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "MIN_SPACING ({min_spacing:g} m) is larger than the station spacing ({spacing:.0f} "
+                                 "m): stations of the array would break it. Lower MIN_SPACING or raise SPACING."),
                                  min_spacing=min_spacing, spacing=used))
     return StationSpec(int(array), int(n_stations), float(home_range), used, spacing <= 0, int(rule),
                        int(cluster_size), float(min_spacing), int(reserve))
@@ -226,8 +236,9 @@ def prepare_frame(geometries, feature_ids, strata, spec):
     if spec.n_stations > 0 and spec.array != GRID:  # the grid's block is one array over the strata
         counts = layout.proportional_counts([s.area for s in frame.strata], spec.n_stations)
         if spec.n_stations < layout.MIN_PER_STRATUM * len(frame.strata):
-            warnings.append(message("N_STATIONS = {n} is fewer than {minimum} per stratum for {h} strata; every "
-                                    "stratum gets {minimum} ({total} stations).", n=spec.n_stations,
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                    "N_STATIONS = {n} is fewer than {minimum} per stratum for {h} strata; every "
+                                    "stratum gets {minimum} ({total} stations)."), n=spec.n_stations,
                                     minimum=layout.MIN_PER_STRATUM, h=len(frame.strata), total=int(counts.sum())))
     else:
         counts = np.zeros(len(frame.strata), dtype=int)
@@ -257,8 +268,9 @@ def grid_array(frame, spec, rng):
     prim, res = grid.primaries, grid.reserves
     if spec.n_stations > 0:
         if len(prim) < spec.n_stations:
-            raise InputError(message("Only {fit} grid stations at {spacing:.0f} m fit in the frame; {n} were asked "
-                                     "for. Ask for fewer stations (0 takes every grid point), or lower the spacing.",
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                     "Only {fit} grid stations at {spacing:.0f} m fit in the frame; {n} were asked "
+                                     "for. Ask for fewer stations (0 takes every grid point), or lower the spacing."),
                                      fit=len(prim), spacing=spec.spacing, n=spec.n_stations))
         centre = geo.uniform_points(geo.triangle_cover(union), union, 1, rng)[0]
         order = np.argsort(np.hypot(*(prim - centre).T), kind="stable")
@@ -298,10 +310,12 @@ def cluster_array(frame, spec, rng):
         region = geo.inward_buffer(st.geometry, radius) if wanted else st.geometry
         if wanted and region.is_empty:
             raise InputError(message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "A cluster of {k} stations {spacing:.0f} m apart (radius {radius:.0f} m) does not fit wholly in "
-                "stratum {key}. Use smaller clusters, a smaller spacing, or the balanced array." if st.key is not None
-                else "A cluster of {k} stations {spacing:.0f} m apart (radius {radius:.0f} m) does not fit wholly in "
-                "the frame. Use smaller clusters, a smaller spacing, or the balanced array.",
+                "stratum {key}. Use smaller clusters, a smaller spacing, or the balanced array.") if st.key is not None
+                else QT_TRANSLATE_NOOP("PlotwiseEngine",
+                     "A cluster of {k} stations {spacing:.0f} m apart (radius {radius:.0f} m) does not fit wholly in "
+                "the frame. Use smaller clusters, a smaller spacing, or the balanced array."),
                 k=spec.cluster_size, spacing=spec.spacing, radius=radius, key=st.key))
         shrunk = replace(st, region=region, cover=geo.triangle_cover(region) if wanted else st.cover,
                          effective_area=float(region.area))
@@ -314,19 +328,23 @@ def cluster_array(frame, spec, rng):
 
 
 _TOO_MANY = {  # (what, whole frame?)
-    ("stations", False): "{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in "
+    ("stations", False): QT_TRANSLATE_NOOP("PlotwiseEngine",
+                         "{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in "
                          "stratum {key}: at most about {fit} fit there (a hexagonal lattice; random layouts fill up "
-                         "well before that). Ask for fewer, or lower the spacing.",
-    ("stations", True): "{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in the "
+                         "well before that). Ask for fewer, or lower the spacing."),
+    ("stations", True): QT_TRANSLATE_NOOP("PlotwiseEngine",
+                        "{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in the "
                         "frame: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well "
-                        "before that). Ask for fewer, or lower the spacing.",
-    ("clusters", False): "{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do "
+                        "before that). Ask for fewer, or lower the spacing."),
+    ("clusters", False): QT_TRANSLATE_NOOP("PlotwiseEngine",
+                         "{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do "
                          "not fit in stratum {key}: at most about {fit} fit there (a hexagonal lattice; random "
                          "layouts fill up well before that). Ask for fewer stations, smaller clusters, or a smaller "
-                         "spacing.",
-    ("clusters", True): "{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do "
+                         "spacing."),
+    ("clusters", True): QT_TRANSLATE_NOOP("PlotwiseEngine",
+                        "{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do "
                         "not fit in the frame: at most about {fit} fit there (a hexagonal lattice; random layouts "
-                        "fill up well before that). Ask for fewer stations, smaller clusters, or a smaller spacing.",
+                        "fill up well before that). Ask for fewer stations, smaller clusters, or a smaller spacing."),
 }
 
 
@@ -396,9 +414,10 @@ def station_layout(frame, spec, rng, crs=None, progress=None):
     result = replace(_assemble(frame, spec, parts, crs, offset, warnings), frame=frame)
     if spec.home_range > 0 and np.isfinite(result.extent.home_ranges) and \
             result.extent.home_ranges < FEW_HOME_RANGES:
-        warnings.append(message("The array's primary stations cover {n:.1f} home ranges (convex hull {area:.2f} km² "
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                "The array's primary stations cover {n:.1f} home ranges (convex hull {area:.2f} km² "
                                 "against a home range of {hr:g} km²): an array smaller than about {few:g} home ranges "
-                                "cannot estimate density (spatial capture-recapture). Spread the stations wider.",
+                                "cannot estimate density (spatial capture-recapture). Spread the stations wider."),
                                 n=result.extent.home_ranges, area=result.extent.hull_area / 1e6,
                                 hr=spec.home_range, few=FEW_HOME_RANGES))
         result = replace(result, warnings=tuple(warnings))
@@ -421,12 +440,14 @@ def _assemble(frame, spec, parts, crs, offset, warnings):
         n_clusters = len(set(cluster_no)) if cluster_no else 0
         summaries.append(StratumStations(st.key, st.label, st.area, st.n, n_primary, m - n_primary, n_clusters))
         if m == 0:
-            warnings.append(message("The frame gets no station." if st.key is None else
-                                    "Stratum {key} gets no station.", key=st.key))
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                    "The frame gets no station.") if st.key is None else
+                                    QT_TRANSLATE_NOOP("PlotwiseEngine", "Stratum {key} gets no station."), key=st.key))
     xy = np.concatenate(xys) if xys else np.zeros((0, 2))
     if len(xy) == 0:
-        raise InputError(message("No station could be placed in the frame at a spacing of {spacing:.0f} m. Lower "
-                                 "the spacing or check the frame.", spacing=spec.spacing))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                 "No station could be placed in the frame at a spacing of {spacing:.0f} m. Lower "
+                                 "the spacing or check the frame."), spacing=spec.spacing))
     if crs is not None:
         lon, lat = (np.asarray(v, float) for v in lonlat_transformer(crs).transform(xy[:, 0], xy[:, 1]))
     else:
@@ -484,7 +505,7 @@ def service_plan(n_primary, service_hours, workday_hours=8.0, cluster_size=0):
     if not service_hours > 0:
         return None
     if not workday_hours > 0:
-        raise InputError(message("The working day must be longer than 0 hours."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The working day must be longer than 0 hours.")))
     per_day = int(math.floor(workday_hours / service_hours + 1e-9))
     days = int(math.ceil(n_primary / per_day)) if per_day > 0 else 0
     cluster = cluster_size * service_hours if cluster_size else math.nan
