@@ -4,11 +4,6 @@ Outside references: MacKenzie et al. (2002)'s likelihood maximised directly with
 the test), and truth known by construction (simulated detections).
 """
 import math
-import os
-import shutil
-import subprocess
-from pathlib import Path
-
 import numpy as np
 import pytest
 from recording_feedback import RecordingFeedback
@@ -18,8 +13,6 @@ pytest.importorskip("qgis.core")
 from osgeo import ogr  # noqa: E402
 from qgis.core import QgsFeature, QgsGeometry, QgsProcessingException, QgsVectorLayer  # noqa: E402
 
-REPO = Path(__file__).resolve().parents[2]
-QGIS_PROCESS = "/usr/bin/qgis_process.bin"
 PINNED = ("SITES", "SITE_ID_FIELD", "HISTORY_FIELDS", "PSI_COVARIATES", "P_COVARIATES", "CONFIDENCE", "TARGET_SE")
 K = 5
 
@@ -181,28 +174,6 @@ def test_simulated_detections_from_the_demo_population(run_alg, demo_reserve_out
     assert 0 < fitted["PSI"] <= 1
 
 
-@pytest.fixture(scope="module")
-def qgis_process(tmp_path_factory):
-    """``qgis_process.bin`` with the clone installed in a throwaway profile (as tests/host/test_package.py)."""
-    if not os.path.exists(QGIS_PROCESS):
-        pytest.skip("qgis_process is not installed")
-    folder = tmp_path_factory.mktemp("qgis_process")
-    plugins = folder / "profile" / "profiles" / "default" / "python" / "plugins"
-    plugins.mkdir(parents=True)
-    shutil.copytree(REPO, plugins / "plotwise", ignore=shutil.ignore_patterns(
-        ".venv*", ".git", "tests", "scripts", "__pycache__", "demo-output", "dist"))
-    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(folder / "profile"), QT_QPA_PLATFORM="offscreen",
-               XDG_RUNTIME_DIR=str(folder))
-    subprocess.run([QGIS_PROCESS, "plugins", "enable", "plotwise"], env=env, capture_output=True, timeout=300)
-
-    def run(*arguments):
-        done = subprocess.run([QGIS_PROCESS, *arguments], env=env, capture_output=True, text=True, timeout=300)
-        assert done.returncode == 0, done.stdout + done.stderr
-        return done.stdout
-
-    return run
-
-
 def write_gpkg(layer, path):
     from qgis.core import QgsVectorFileWriter
 
@@ -239,7 +210,7 @@ def test_qgis_process_with_the_pinned_parameters_only(qgis_process, tmp_path):
     layer = site_layer(simulated(seed=8), {"cover": rng.normal(size=80), "wind": rng.normal(size=80)})
     sites = write_gpkg(layer, tmp_path / "sites.gpkg")
     values = [("SITES", str(sites)), ("SITE_ID_FIELD", "site")]
-    values += [("HISTORY_FIELDS", f"det_{j + 1}") for j in range(K)]  # a multiple field: one NAME=value per field
+    values += [("HISTORY_FIELDS", f"det_{j + 1}") for j in range(K)]  # a multiple field: NAME=value once per field
     values += [("PSI_COVARIATES", "cover"), ("P_COVARIATES", "wind"), ("CONFIDENCE", "0.9"), ("TARGET_SE", "0.08")]
     assert {k for k, _ in values} == set(PINNED)
     out, table = tmp_path / "sites_out.gpkg", tmp_path / "table.gpkg"

@@ -5,10 +5,6 @@ pyproj for lon/lat, and the closed-form spacing rules (95% range of a circular b
 chi-square with 2 degrees of freedom, scipy.stats.chi2).
 """
 import math
-import os
-import shutil
-import subprocess
-from pathlib import Path
 
 import numpy as np
 import pyproj
@@ -21,8 +17,6 @@ from qgis.core import QgsFeature, QgsGeometry, QgsProcessingException, QgsVector
 from shapely import wkb as shapely_wkb  # noqa: E402
 from shapely import wkt as shapely_wkt  # noqa: E402
 
-REPO = Path(__file__).resolve().parents[2]
-QGIS_PROCESS = "/usr/bin/qgis_process.bin"
 STRATA = [  # stratum, polygon (EPSG:32736, invented)
     (1, "POLYGON((500000 9000000, 512000 9000000, 512000 9008000, 500000 9008000, 500000 9000000))"),
     (2, "POLYGON((512000 9000000, 518000 9000000, 518000 9008000, 512000 9008000, 512000 9000000))"),
@@ -127,31 +121,19 @@ def test_neither_home_range_nor_spacing_is_a_clear_error(run_alg):
         run_alg("plotwise:stations", parameters(HOME_RANGE=0.0, SPACING=0.0))
 
 
-def test_qgis_process_with_the_pinned_parameters_only(tmp_path):
+def test_qgis_process_with_the_pinned_parameters_only(qgis_process, tmp_path):
     """A script naming only the pinned parameters runs, the way users call it."""
-    if not os.path.exists(QGIS_PROCESS):
-        pytest.skip("qgis_process is not installed")
-    profile = tmp_path / "profile"
-    plugins = profile / "profiles" / "default" / "python" / "plugins"
-    plugins.mkdir(parents=True)
-    shutil.copytree(REPO, plugins / "plotwise", ignore=shutil.ignore_patterns(
-        ".venv*", ".git", "tests", "scripts", "__pycache__", "demo-output", "dist"))
-    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(profile), QT_QPA_PLATFORM="offscreen",
-               XDG_RUNTIME_DIR=str(tmp_path))
-    frame = tmp_path / "frame.gpkg"
-    layer = frame_layer()
     from qgis.core import QgsVectorFileWriter
 
+    frame = tmp_path / "frame.gpkg"
+    layer = frame_layer()
     QgsVectorFileWriter.writeAsVectorFormat(layer, str(frame), "utf-8", layer.crs(), "GPKG")
-    subprocess.run([QGIS_PROCESS, "plugins", "enable", "plotwise"], env=env, capture_output=True, timeout=300)
     values = {"FRAME": str(frame), "STRATUM_FIELD": "stratum", "N_STATIONS": "12", "ARRAY": "2", "HOME_RANGE": "3",
               "SPACING": "0", "CLUSTER_SIZE": "4", "MIN_SPACING": "100", "RESERVE": "1", "SEED": "5"}
     assert set(values) == set(PINNED)
     out = tmp_path / "stations.gpkg"
-    run = subprocess.run([QGIS_PROCESS, "run", "plotwise:stations", "--", *(f"{k}={v}" for k, v in values.items()),
-                          f"OUTPUT={out}", f"OUTPUT_GPX={tmp_path / 's.gpx'}", f"REPORT={tmp_path / 's.html'}"],
-                         env=env, capture_output=True, text=True, timeout=300)
-    assert run.returncode == 0, run.stdout + run.stderr
-    assert "SPACING_USED" in run.stdout
-    dataset = ogr.Open(str(out))
+    stdout = qgis_process("run", "plotwise:stations", "--", *(f"{k}={v}" for k, v in values.items()),
+                          f"OUTPUT={out}", f"OUTPUT_GPX={tmp_path / 's.gpx'}", f"REPORT={tmp_path / 's.html'}")
+    assert "SPACING_USED" in stdout
+    dataset = ogr.Open(str(out))  # keep the dataset alive while its layer is read
     assert dataset.GetLayer(0).GetFeatureCount() == 12 + 2
