@@ -2392,27 +2392,27 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation>Nombre total d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="37"/>
+        <location filename="../processing/provider.py" line="43"/>
         <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
         <translation>Chaîne d'exemple : planifier un inventaire (base de sondage, strates, effort, disposition)</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="37"/>
+        <location filename="../processing/provider.py" line="43"/>
         <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
         <translation>Construit la base de sondage (zone d'étude moins les exclusions et les cellules au-delà de la pente limite), forme des strates par k-moyennes à partir des rasters de covariables, répartit les unités par allocation de Neyman avec l'écart-type de la covariable comme substitut, et dispose des placettes carrées spatialement équilibrées avec 3 unités de réserve par strate. Ouvrez-la dans le modeleur pour modifier une étape. Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="47"/>
+        <location filename="../processing/provider.py" line="53"/>
         <source>Example chain: estimate from simulated counts</source>
         <translation>Chaîne d'exemple : estimer à partir de comptages simulés</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="47"/>
+        <location filename="../processing/provider.py" line="53"/>
         <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
         <translation>Pour la formation : remplit le champ de comptage des unités à partir d'une population simulée, puis estime la densité et l'abondance par strate et au total. Avec un vrai travail de terrain, lancez plutôt l'estimation sur les unités comptées.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="76"/>
+        <location filename="../processing/provider.py" line="82"/>
         <source>Example chains</source>
         <translation>Chaînes d'exemple</translation>
     </message>
@@ -2872,6 +2872,189 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
     </message>
 </context>
 <context>
+    <name>Occupancy</name>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="57"/>
+        <source>Estimate occupancy from repeat visits</source>
+        <translation>Estimer l'occupation à partir de visites répétées</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="60"/>
+        <source>Estimates the share of sites the species occupies (ψ), corrected for the surveys on which it was there but not detected (p), from detection histories: single-season occupancy model (MacKenzie et al. 2002).
+
+Sites: a layer or a table with one row per site (station) and one history field per occasion, holding 1 (detected), 0 (not detected) or NULL (not surveyed that occasion). Any other value stops the run, naming the field and the sites. Sites with no surveyed occasion are left out and listed. Site id field: the ids used in messages (default: the feature ids); they must be unique.
+
+Covariates: numeric site fields for ψ and for p; effort fields (one per history field, in the same order, e.g. camera-days per occasion) add an occasion-level effort to p. logit ψ and logit p are linear in their covariates. A NULL covariate at a surveyed site is an error.
+
+Models compared (optional): one model per line, or models separated by ;; such as &quot;psi: elevation  p: effort&quot; (terms separated by commas or +; a missing part is constant; the word effort means the effort fields). The chosen model, the constant model and these are compared by AIC; the outputs come from the chosen model (the covariates above).
+
+Maximum likelihood with scipy; standard errors from the observed information, intervals on the logit scale at the confidence level. A model that does not converge gives no number, and a parameter at the boundary (ψ = 1, p = 1, a covariate that separates the sites) is reported as such, without SE.
+
+Design advice: the occasions needed for a cumulative detection of 0.95, and the sites needed for the target SE of ψ, from the asymptotic variance of MacKenzie &amp; Royle (2005).
+Goodness of fit (replicates above 0): parametric bootstrap of the χ² of the detection-history frequencies (MacKenzie &amp; Bailey 2004), with ĉ; seeded.
+
+Outputs: the sites with psi (fitted ψ), psi_cond (probability of occupancy given the site's history; 1 where detected) and naive (1 where detected at least once); a parameters table (param, estimate, se, lo, hi); optionally the model table; an HTML report; and the numbers PSI, PSI_SE, PSI_LO, PSI_HI, P, P_SE, NAIVE, OCCASIONS_NEEDED, SITES_NEEDED, C_HAT, GOF_P.
+
+More fieldwork follows from the design advice: check every site's access and safety before sending a team; the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Estime la part des sites que l'espèce occupe (ψ), corrigée des visites où elle était présente sans être détectée (p), à partir d'historiques de détection : modèle d'occupation à une saison (MacKenzie et al. 2002).
+
+Sites : une couche ou une table avec une ligne par site (station) et un champ d'historique par occasion, contenant 1 (détectée), 0 (non détectée) ou NULL (non échantillonné à cette occasion). Toute autre valeur arrête le traitement, en nommant le champ et les sites. Les sites sans aucune occasion échantillonnée sont écartés et listés. Champ d'identifiant des sites : les identifiants utilisés dans les messages (par défaut : les identifiants d'entité) ; ils doivent être uniques.
+
+Covariables : des champs numériques de site pour ψ et pour p ; les champs d'effort (un par champ d'historique, dans le même ordre, p. ex. jours-caméra par occasion) ajoutent à p un effort propre à chaque occasion. logit ψ et logit p sont linéaires en leurs covariables. Une covariable NULL sur un site échantillonné est une erreur.
+
+Modèles comparés (facultatif) : un modèle par ligne, ou des modèles séparés par ;; comme « psi: elevation  p: effort » (termes séparés par des virgules ou par + ; une partie absente est constante ; le mot effort désigne les champs d'effort). Le modèle choisi, le modèle constant et ceux-ci sont comparés par l'AIC ; les sorties viennent du modèle choisi (les covariables ci-dessus).
+
+Maximum de vraisemblance avec scipy ; erreurs types tirées de l'information observée, intervalles sur l'échelle logit au niveau de confiance choisi. Un modèle qui ne converge pas ne donne aucun nombre, et un paramètre à la borne (ψ = 1, p = 1, une covariable qui sépare les sites) est signalé comme tel, sans erreur type.
+
+Conseils pour le plan d'échantillonnage : les occasions nécessaires pour une détection cumulée de 0,95, et les sites nécessaires pour l'erreur type cible de ψ, d'après la variance asymptotique de MacKenzie &amp; Royle (2005).
+Qualité de l'ajustement (réplicats au-dessus de 0) : bootstrap paramétrique du χ² des fréquences des historiques de détection (MacKenzie &amp; Bailey 2004), avec ĉ ; avec graine.
+
+Sorties : les sites avec psi (ψ ajusté), psi_cond (probabilité d'occupation sachant l'historique du site ; 1 là où l'espèce a été détectée) et naive (1 là où elle a été détectée au moins une fois) ; une table des paramètres (param, estimate, se, lo, hi) ; en option la table des modèles ; un rapport HTML ; et les valeurs PSI, PSI_SE, PSI_LO, PSI_HI, P, P_SE, NAIVE, OCCASIONS_NEEDED, SITES_NEEDED, C_HAT, GOF_P.
+
+Les conseils pour le plan d'échantillonnage entraînent davantage de travail de terrain : vérifiez l'accès à chaque site et sa sécurité avant d'y envoyer une équipe ; l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="90"/>
+        <source>Sites with detection histories</source>
+        <translation>Sites avec historiques de détection</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="92"/>
+        <source>Site id field (empty: feature ids)</source>
+        <translation>Champ d'identifiant des sites (vide : identifiants d'entité)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="95"/>
+        <source>History fields, one per occasion, in order</source>
+        <translation>Champs d'historique, un par occasion, dans l'ordre</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="98"/>
+        <source>Site covariates of occupancy ψ</source>
+        <translation>Covariables de site de l'occupation ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="98"/>
+        <source>Site covariates of detection p</source>
+        <translation>Covariables de site de la détection p</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="98"/>
+        <source>Effort fields, one per history field (optional)</source>
+        <translation>Champs d'effort, un par champ d'historique (facultatif)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="103"/>
+        <source>Models to compare by AIC (one per line, e.g. psi: elevation  p: effort)</source>
+        <translation>Modèles à comparer par l'AIC (un par ligne, p. ex. psi: elevation  p: effort)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="106"/>
+        <source>Confidence level</source>
+        <translation>Niveau de confiance</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="109"/>
+        <source>Target SE of ψ for the design advice (0: none)</source>
+        <translation>Erreur type cible de ψ pour les conseils sur le plan d'échantillonnage (0 : aucune)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="112"/>
+        <source>Goodness-of-fit bootstrap replicates (0: no test)</source>
+        <translation>Réplicats bootstrap du test d'adéquation (0 : pas de test)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="116"/>
+        <source>Sites with occupancy</source>
+        <translation>Sites avec occupation</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="117"/>
+        <source>Occupancy parameters</source>
+        <translation>Paramètres d'occupation</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="119"/>
+        <source>Model comparison</source>
+        <translation>Comparaison des modèles</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Occupancy ψ</source>
+        <translation>Occupation ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>SE of ψ</source>
+        <translation>Erreur type de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Lower limit of ψ</source>
+        <translation>Limite inférieure de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Upper limit of ψ</source>
+        <translation>Limite supérieure de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Detection p per survey</source>
+        <translation>Détection p par visite</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>SE of p</source>
+        <translation>Erreur type de p</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Naive occupancy</source>
+        <translation>Occupation naïve</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Occasions for a cumulative detection of 0.95</source>
+        <translation>Occasions pour une détection cumulée de 0.95</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Sites needed for the target SE of ψ</source>
+        <translation>Sites nécessaires pour l'erreur type cible de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>c-hat of the goodness of fit</source>
+        <translation>c-hat du test d'adéquation</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>p-value of the goodness of fit</source>
+        <translation>Valeur p du test d'adéquation</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="137"/>
+        <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Choose existing fields.</source>
+        <translation>La couche « {layer} » n'a pas de champ {fields} ({param}). Choisissez des champs existants.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="165"/>
+        <source>Layer &apos;{layer}&apos; has no features.</source>
+        <translation>La couche « {layer} » n'a aucune entité.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="185"/>
+        <source>(a table: no map)</source>
+        <translation>(une table : pas de carte)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="195"/>
+        <source>ψ = {psi:.3f} (SE {se}), p = {p:.3f}, naive occupancy {naive:.3f}, {n} sites.</source>
+        <translation>ψ = {psi:.3f} (erreur type {se}), p = {p:.3f}, occupation naïve {naive:.3f}, {n} sites.</translation>
+    </message>
+</context>
+<context>
     <name>PlotwiseAlgorithm</name>
     <message>
         <location filename="../processing/algorithms/base.py" line="25"/>
@@ -2995,7 +3178,7 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
         <translation>coût par unité</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="416"/>
+        <location filename="../processing/engine/occupancy.py" line="76"/>
         <source>{shown} and {more} more</source>
         <translation>{shown} et {more} autres</translation>
     </message>
@@ -4069,6 +4252,321 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
         <source>line</source>
         <translation>ligne</translation>
     </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="52"/>
+        <source>OCCASIONS must be a whole number of at least 1.</source>
+        <translation>OCCASIONS doit être un nombre entier supérieur ou égal à 1.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="55"/>
+        <source>The detection probability at a group must be in (0, 1]; it is {p:g}.</source>
+        <translation>La probabilité de détection à l'emplacement d'un groupe doit être dans ]0, 1] ; elle vaut {p:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="58"/>
+        <source>The detection scale SIGMA must be more than 0 m.</source>
+        <translation>L'échelle de détection SIGMA doit dépasser 0 m.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="61"/>
+        <source>The share of occasions not surveyed must be at least 0 and below 1.</source>
+        <translation>La part des occasions non échantillonnées doit être d'au moins 0 et inférieure à 1.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="65"/>
+        <source>The animal layer holds no animal: there is nothing to detect.</source>
+        <translation>La couche des animaux ne contient aucun animal : il n'y a rien à détecter.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="168"/>
+        <source>Layer {layer}: occupancy needs at least 2 occasions (history fields); {n} given. With one visit per site, detection and occupancy cannot be told apart.</source>
+        <translation>Couche {layer} : l'occupation demande au moins 2 occasions (champs d'historique) ; {n} indiquée(s). Avec une seule visite par site, la détection et l'occupation ne peuvent pas être distinguées.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="178"/>
+        <source>Layer {layer}, history field {field}: sites {ids} hold a value other than 1 (detected), 0 (not detected) or NULL (not surveyed). Correct these values and run again.</source>
+        <translation>Couche {layer}, champ d'historique {field} : les sites {ids} contiennent une valeur autre que 1 (détectée), 0 (non détectée) ou NULL (non échantillonné). Corrigez ces valeurs et relancez.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="186"/>
+        <source>Layer {layer}: no site was surveyed on any occasion (every history value is NULL).</source>
+        <translation>Couche {layer} : aucun site n'a été échantillonné à aucune occasion (toutes les valeurs d'historique sont NULL).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="190"/>
+        <source>Layer {layer}: the species was not detected at any site, so occupancy and detection cannot be estimated (every history is 0).</source>
+        <translation>Couche {layer} : l'espèce n'a été détectée sur aucun site, l'occupation et la détection ne peuvent donc pas être estimées (tous les historiques valent 0).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="199"/>
+        <source>Layer {layer}: {n} sites have an empty (NULL) site id. Give every site an id, or leave SITE_ID_FIELD empty to use the feature ids.</source>
+        <translation>Couche {layer} : {n} sites ont un identifiant de site vide (NULL). Donnez un identifiant à chaque site, ou laissez SITE_ID_FIELD vide pour utiliser les identifiants d'entité.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="209"/>
+        <source>Layer {layer}: site ids {ids} occur more than once. Each site needs one row holding all its occasions; merge the rows or correct the ids.</source>
+        <translation>Couche {layer} : les identifiants de site {ids} apparaissent plus d'une fois. Chaque site demande une seule ligne contenant toutes ses occasions ; fusionnez les lignes ou corrigez les identifiants.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="237"/>
+        <source>Model line {line!r}: write the occupancy terms after psi: and the detection terms after p:, for example psi: elevation p: effort.</source>
+        <translation>Ligne de modèle {line!r} : écrivez les termes d'occupation après psi: et les termes de détection après p:, par exemple psi: elevation p: effort.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="256"/>
+        <source>Model line {line!r}: effort varies by occasion and acts on detection only; move it after p:.</source>
+        <translation>Ligne de modèle {line!r} : effort varie selon l'occasion et n'agit que sur la détection ; placez-le après p:.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <source>Model line {line!r}: {name} is not a numeric field of the sites layer (give EFFORT_FIELDS to use effort). Use the field names as they are in the layer.</source>
+        <translation>Ligne de modèle {line!r} : {name} n'est pas un champ numérique de la couche des sites (indiquez EFFORT_FIELDS pour utiliser effort). Utilisez les noms de champs tels qu'ils figurent dans la couche.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <source>Model line {line!r}: {name} is not a numeric field of the sites layer. Use the field names as they are in the layer.</source>
+        <translation>Ligne de modèle {line!r} : {name} n'est pas un champ numérique de la couche des sites. Utilisez les noms de champs tels qu'ils figurent dans la couche.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="299"/>
+        <source>CONFIDENCE must be at least 0.5 and below 1; it is {value}.</source>
+        <translation>CONFIDENCE doit valoir au moins 0.5 et moins de 1 ; il vaut {value}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="302"/>
+        <source>TARGET_SE must be 0 (no advice) or more; it is {value}.</source>
+        <translation>TARGET_SE doit valoir 0 (pas de conseil) ou plus ; il vaut {value}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="305"/>
+        <source>The number of goodness-of-fit replicates must be 0 or a positive whole number.</source>
+        <translation>Le nombre de réplicats du test d'adéquation doit valoir 0 ou un nombre entier positif.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="318"/>
+        <source>A model uses effort but no EFFORT_FIELDS were given.</source>
+        <translation>Un modèle utilise effort mais aucun champ EFFORT_FIELDS n'a été indiqué.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="335"/>
+        <source>Layer {layer} has no covariate field {field}.</source>
+        <translation>La couche {layer} n'a pas de champ de covariable {field}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="341"/>
+        <source>Layer {layer}, covariate field {field}: surveyed sites {ids} have no number (NULL or text). Fill in the values, leave these sites out, or drop the covariate.</source>
+        <translation>Couche {layer}, champ de covariable {field} : les sites échantillonnés {ids} n'ont pas de nombre (NULL ou texte). Renseignez les valeurs, écartez ces sites, ou retirez la covariable.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="347"/>
+        <source>Layer {layer}, covariate field {field}: every surveyed site has the same value ({value:g}), so its effect cannot be estimated. Drop it from the model.</source>
+        <translation>Couche {layer}, champ de covariable {field} : tous les sites échantillonnés ont la même valeur ({value:g}), son effet ne peut donc pas être estimé. Retirez-la du modèle.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="356"/>
+        <source>Give one effort field per history field, in the same order: {k} history fields and {e} effort fields.</source>
+        <translation>Indiquez un champ d'effort par champ d'historique, dans le même ordre : {k} champs d'historique et {e} champs d'effort.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="371"/>
+        <source>Layer {layer}, effort fields {fields}: surveyed sites {ids} have no effort, or a negative one, on an occasion they were surveyed. Give every survey its effort.</source>
+        <translation>Couche {layer}, champs d'effort {fields} : les sites échantillonnés {ids} n'ont pas d'effort, ou un effort négatif, à une occasion où ils ont été échantillonnés. Donnez son effort à chaque visite.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="377"/>
+        <source>Layer {layer}: the effort is the same on every survey, so its effect cannot be estimated. Leave EFFORT_FIELDS empty.</source>
+        <translation>Couche {layer} : l'effort est le même à chaque visite, son effet ne peut donc pas être estimé. Laissez EFFORT_FIELDS vide.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="742"/>
+        <source>The search for the maximum stopped after {n} iterations without converging.</source>
+        <translation>La recherche du maximum s'est arrêtée après {n} itérations sans converger.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="754"/>
+        <source>The observed information is not positive definite at the maximum: the parameters cannot all be estimated from these data (collinear covariates, or too few detections).</source>
+        <translation>L'information observée n'est pas définie positive au maximum : les paramètres ne peuvent pas tous être estimés à partir de ces données (covariables colinéaires, ou trop peu de détections).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1040"/>
+        <source>The occupancy model ({model}) could not be fitted: {why} No estimate is given. Try fewer covariates, more sites or more occasions.</source>
+        <translation>Le modèle d'occupation ({model}) n'a pas pu être ajusté : {why} Aucune estimation n'est donnée. Essayez moins de covariables, plus de sites ou plus d'occasions.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1045"/>
+        <source>The model {model} could not be fitted and is left out of the comparison: {why}</source>
+        <translation>Le modèle {model} n'a pas pu être ajusté et est exclu de la comparaison : {why}</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1049"/>
+        <source>Sites {ids} have no surveyed occasion (every history value NULL) and were left out of the analysis.</source>
+        <translation>Les sites {ids} n'ont aucune occasion échantillonnée (toutes les valeurs d'historique NULL) et ont été écartés de l'analyse.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1057"/>
+        <source>The goodness-of-fit test was skipped: with {k} occasions there are too many possible detection histories to enumerate.</source>
+        <translation>Le test d'adéquation n'a pas été fait : avec {k} occasions, il y a trop d'historiques de détection possibles à énumérer.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1061"/>
+        <source>The goodness-of-fit test was skipped: the model has parameters at the boundary.</source>
+        <translation>Le test d'adéquation n'a pas été fait : le modèle a des paramètres à la borne.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with every site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
+        <translation>psi est à la borne de son domaine (estimation {psi:.4f}) : les données sont compatibles avec l'occupation de tous les sites. Son erreur type et son intervalle ne peuvent pas être calculés à partir de l'information ; les autres estimations sont conditionnelles à cette valeur.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with no site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
+        <translation>psi est à la borne de son domaine (estimation {psi:.4f}) : les données sont compatibles avec le fait qu'aucun site ne soit occupé. Son erreur type et son intervalle ne peuvent pas être calculés à partir de l'information ; les autres estimations sont conditionnelles à cette valeur.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1085"/>
+        <source>p is at the boundary of its range (estimate {p:.4f}): every survey of a site with a detection detected the species. Its standard error cannot be computed; psi is then the naive occupancy.</source>
+        <translation>p est à la borne de son domaine (estimation {p:.4f}) : chaque visite d'un site avec une détection a détecté l'espèce. Son erreur type ne peut pas être calculée ; psi est alors l'occupation naïve.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1090"/>
+        <source>Parameter {name} is at the boundary (a logit beyond {limit:g}): a covariate separates the sites, or a probability is 0 or 1. Its standard error cannot be computed; simplify the model.</source>
+        <translation>Le paramètre {name} est à la borne (un logit au-delà de {limit:g}) : une covariable sépare les sites, ou une probabilité vaut 0 ou 1. Son erreur type ne peut pas être calculée ; simplifiez le modèle.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1100"/>
+        <source>{n} bootstrap data sets could not be fitted and were left out of the goodness-of-fit test.</source>
+        <translation>{n} jeux de données bootstrap n'ont pas pu être ajustés et ont été exclus du test d'adéquation.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1104"/>
+        <source>The goodness-of-fit test rejects the model (p = {p:.3f}, c-hat = {c:.2f}): the histories vary more than the model allows. Standard errors may be too small; multiply their squares by c-hat, or add covariates.</source>
+        <translation>Le test d'adéquation rejette le modèle (p = {p:.3f}, c-hat = {c:.2f}) : les historiques varient plus que le modèle ne le permet. Les erreurs types sont peut-être trop petites ; multipliez leurs carrés par c-hat, ou ajoutez des covariables.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="68"/>
+        <source>station {station} (primary, stratum {stratum})</source>
+        <translation>station {station} (principale, strate {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="69"/>
+        <source>station {station} (reserve, stratum {stratum})</source>
+        <translation>station {station} (de réserve, strate {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="70"/>
+        <source>station {station} of cluster {cluster} (primary, stratum {stratum})</source>
+        <translation>station {station} de la grappe {cluster} (principale, strate {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="72"/>
+        <source>station {station} of cluster {cluster} (reserve, stratum {stratum})</source>
+        <translation>station {station} de la grappe {cluster} (de réserve, strate {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="120"/>
+        <source>ARRAY must be 0 (grid), 1 (clusters) or 2 (balanced).</source>
+        <translation>ARRAY doit valoir 0 (grille), 1 (grappes) ou 2 (équilibré).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="123"/>
+        <source>The spacing rule must be 0 (independent occupancy sites) or 1 (spatial capture-recapture).</source>
+        <translation>La règle d'espacement doit valoir 0 (sites d'occupation indépendants) ou 1 (capture-recapture spatiale).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="128"/>
+        <source>{name} must be 0 or a positive whole number; it is {value}.</source>
+        <translation>{name} doit valoir 0 ou un nombre entier positif ; il vaut {value}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="132"/>
+        <source>HOME_RANGE, SPACING and MIN_SPACING must be 0 or more.</source>
+        <translation>HOME_RANGE, SPACING et MIN_SPACING doivent valoir 0 ou plus.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="135"/>
+        <source>Give the species' home range (HOME_RANGE, km²) or a station spacing (SPACING, m): the spacing is taken from one of them.</source>
+        <translation>Indiquez le domaine vital de l'espèce (HOME_RANGE, km²) ou un espacement des stations (SPACING, m) : l'espacement est tiré de l'un des deux.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="139"/>
+        <source>N_STATIONS must be at least 1 for clusters and balanced stations (0 means &apos;fill the frame&apos; for the grid only).</source>
+        <translation>N_STATIONS doit valoir au moins 1 pour les grappes et les stations équilibrées (0 signifie « remplir la base de sondage » pour la grille seulement).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="143"/>
+        <source>CLUSTER_SIZE must be at least 2 stations per cluster.</source>
+        <translation>CLUSTER_SIZE doit valoir au moins 2 stations par grappe.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="147"/>
+        <source>MIN_SPACING ({min_spacing:g} m) is larger than the station spacing ({spacing:.0f} m): stations of the array would break it. Lower MIN_SPACING or raise SPACING.</source>
+        <translation>MIN_SPACING ({min_spacing:g} m) dépasse l'espacement des stations ({spacing:.0f} m) : les stations du dispositif ne le respecteraient pas. Baissez MIN_SPACING ou augmentez SPACING.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="239"/>
+        <source>N_STATIONS = {n} is fewer than {minimum} per stratum for {h} strata; every stratum gets {minimum} ({total} stations).</source>
+        <translation>N_STATIONS = {n} fait moins de {minimum} par strate pour {h} strates ; chaque strate en reçoit {minimum} ({total} stations).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="271"/>
+        <source>Only {fit} grid stations at {spacing:.0f} m fit in the frame; {n} were asked for. Ask for fewer stations (0 takes every grid point), or lower the spacing.</source>
+        <translation>Seules {fit} stations de grille à {spacing:.0f} m tiennent dans la base de sondage ; {n} étaient demandées. Demandez moins de stations (0 prend chaque point de la grille), ou réduisez l'espacement.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="312"/>
+        <source>A cluster of {k} stations {spacing:.0f} m apart (radius {radius:.0f} m) does not fit wholly in stratum {key}. Use smaller clusters, a smaller spacing, or the balanced array.</source>
+        <translation>Une grappe de {k} stations espacées de {spacing:.0f} m (rayon {radius:.0f} m) ne tient pas entièrement dans la strate {key}. Utilisez des grappes plus petites, un espacement plus petit, ou le dispositif équilibré.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="312"/>
+        <source>A cluster of {k} stations {spacing:.0f} m apart (radius {radius:.0f} m) does not fit wholly in the frame. Use smaller clusters, a smaller spacing, or the balanced array.</source>
+        <translation>Une grappe de {k} stations espacées de {spacing:.0f} m (rayon {radius:.0f} m) ne tient pas entièrement dans la base de sondage. Utilisez des grappes plus petites, un espacement plus petit, ou le dispositif équilibré.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="331"/>
+        <source>{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in stratum {key}: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer, or lower the spacing.</source>
+        <translation>{wanted} stations (principales et de réserve) espacées d'au moins {distance:.0f} m ne tiennent pas dans la strate {key} : au plus environ {fit} y tiennent (un réseau hexagonal ; les dispositions aléatoires se remplissent bien avant). Demandez-en moins, ou réduisez l'espacement.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="335"/>
+        <source>{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in the frame: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer, or lower the spacing.</source>
+        <translation>{wanted} stations (principales et de réserve) espacées d'au moins {distance:.0f} m ne tiennent pas dans la base de sondage : au plus environ {fit} y tiennent (un réseau hexagonal ; les dispositions aléatoires se remplissent bien avant). Demandez-en moins, ou réduisez l'espacement.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="339"/>
+        <source>{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do not fit in stratum {key}: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer stations, smaller clusters, or a smaller spacing.</source>
+        <translation>{wanted} grappes (principales et de réserve) dont les centres sont espacés d'au moins {distance:.0f} m ne tiennent pas dans la strate {key} : au plus environ {fit} y tiennent (un réseau hexagonal ; les dispositions aléatoires se remplissent bien avant). Demandez moins de stations, des grappes plus petites, ou un espacement plus petit.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="344"/>
+        <source>{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do not fit in the frame: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer stations, smaller clusters, or a smaller spacing.</source>
+        <translation>{wanted} grappes (principales et de réserve) dont les centres sont espacés d'au moins {distance:.0f} m ne tiennent pas dans la base de sondage : au plus environ {fit} y tiennent (un réseau hexagonal ; les dispositions aléatoires se remplissent bien avant). Demandez moins de stations, des grappes plus petites, ou un espacement plus petit.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="417"/>
+        <source>The array's primary stations cover {n:.1f} home ranges (convex hull {area:.2f} km² against a home range of {hr:g} km²): an array smaller than about {few:g} home ranges cannot estimate density (spatial capture-recapture). Spread the stations wider.</source>
+        <translation>Les stations principales du dispositif couvrent {n:.1f} domaines vitaux (enveloppe convexe de {area:.2f} km² pour un domaine vital de {hr:g} km²) : un dispositif plus petit qu'environ {few:g} domaines vitaux ne permet pas d'estimer la densité (capture-recapture spatiale). Écartez davantage les stations.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="443"/>
+        <source>The frame gets no station.</source>
+        <translation>La base de sondage ne reçoit aucune station.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="443"/>
+        <source>Stratum {key} gets no station.</source>
+        <translation>La strate {key} ne reçoit aucune station.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="448"/>
+        <source>No station could be placed in the frame at a spacing of {spacing:.0f} m. Lower the spacing or check the frame.</source>
+        <translation>Aucune station n'a pu être placée dans la base de sondage avec un espacement de {spacing:.0f} m. Réduisez l'espacement ou vérifiez la base de sondage.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="508"/>
+        <source>The working day must be longer than 0 hours.</source>
+        <translation>La journée de travail doit durer plus de 0 heure.</translation>
+    </message>
 </context>
 <context>
     <name>PlotwisePlugin</name>
@@ -4091,17 +4589,17 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
 <context>
     <name>PlotwiseProvider</name>
     <message>
-        <location filename="../processing/provider.py" line="90"/>
+        <location filename="../processing/provider.py" line="96"/>
         <source>Plotwise</source>
         <translation>Plotwise</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="93"/>
+        <location filename="../processing/provider.py" line="99"/>
         <source>Plotwise survey design and estimation</source>
         <translation>Plotwise : conception d'inventaires et estimation</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="113"/>
+        <location filename="../processing/provider.py" line="119"/>
         <source>The example model {path} could not be read.</source>
         <translation>Le modèle d'exemple {path} n'a pas pu être lu.</translation>
     </message>
@@ -4124,12 +4622,12 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
         <translation>Entrées et paramètres</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="142"/>
+        <location filename="../processing/report/occupancy.py" line="153"/>
         <source>Item</source>
         <translation>Élément</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="142"/>
+        <location filename="../processing/report/occupancy.py" line="153"/>
         <source>Value</source>
         <translation>Valeur</translation>
     </message>
@@ -4163,6 +4661,706 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
         <source>Method references</source>
         <translation>Références des méthodes</translation>
     </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="33"/>
+        <source>converged</source>
+        <translation>convergé</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="34"/>
+        <source>at the boundary</source>
+        <translation>à la borne</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="35"/>
+        <source>not fitted</source>
+        <translation>non ajusté</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="77"/>
+        <source>Occupancy from repeat visits</source>
+        <translation>Occupation à partir de visites répétées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>occupancy ψ (share of sites used)</source>
+        <translation>occupation ψ (part des sites utilisés)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>{level} interval of ψ</source>
+        <translation>intervalle à {level} de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>detection p per survey</source>
+        <translation>détection p par visite</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>naive occupancy (detected at least once)</source>
+        <translation>occupation naïve (espèce détectée au moins une fois)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>sites used</source>
+        <translation>sites utilisés</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="89"/>
+        <source>Model: {model}. ψ is the mean fitted occupancy probability of the sites used; with covariates it varies by site (field psi).</source>
+        <translation>Modèle : {model}. ψ est la moyenne des probabilités d'occupation ajustées des sites utilisés ; avec des covariables, elle varie selon le site (champ psi).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="101"/>
+        <source>Map of psi_cond</source>
+        <translation>Carte de psi_cond</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="102"/>
+        <source>Sites shaded by psi_cond, the probability that the site is occupied given its detection history (1 where the species was detected)</source>
+        <translation>Sites ombrés selon psi_cond, la probabilité que le site soit occupé sachant son historique de détection (1 là où l'espèce a été détectée)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="90"/>
+        <source>Method</source>
+        <translation>Méthode</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="107"/>
+        <source>Single-season occupancy model (MacKenzie et al. 2002): a site is occupied with probability ψ and, when occupied, each survey detects the species with probability p; logit ψ and logit p are linear in the covariates. Maximum likelihood with scipy (BFGS, then Newton steps); standard errors from the observed information (Louis 1982), intervals on the logit scale. Covariates are centred and scaled for the fit; the table gives their coefficients in the covariates' own units. Occasions not surveyed (NULL) are left out of a site's likelihood.</source>
+        <translation>Modèle d'occupation à une saison (MacKenzie et al. 2002) : un site est occupé avec la probabilité ψ et, s'il est occupé, chaque visite détecte l'espèce avec la probabilité p ; logit ψ et logit p sont linéaires en les covariables. Maximum de vraisemblance avec scipy (BFGS, puis pas de Newton) ; erreurs types tirées de l'information observée (Louis 1982), intervalles sur l'échelle logit. Les covariables sont centrées et réduites pour l'ajustement ; la table donne leurs coefficients dans les unités propres des covariables. Les occasions non échantillonnées (NULL) sont exclues de la vraisemblance d'un site.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="121"/>
+        <source>(none)</source>
+        <translation>(aucun)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="123"/>
+        <source>Sites (SITES)</source>
+        <translation>Sites (SITES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="124"/>
+        <source>Site id field (SITE_ID_FIELD)</source>
+        <translation>Champ d'identifiant des sites (SITE_ID_FIELD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="125"/>
+        <source>(none: feature ids)</source>
+        <translation>(aucun : identifiants d'entité)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="126"/>
+        <source>History fields (HISTORY_FIELDS)</source>
+        <translation>Champs d'historique (HISTORY_FIELDS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="127"/>
+        <source>Covariates of ψ (PSI_COVARIATES)</source>
+        <translation>Covariables de ψ (PSI_COVARIATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="128"/>
+        <source>Covariates of p (P_COVARIATES)</source>
+        <translation>Covariables de p (P_COVARIATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="130"/>
+        <source>Effort fields (EFFORT_FIELDS)</source>
+        <translation>Champs d'effort (EFFORT_FIELDS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="131"/>
+        <source>Models compared (MODELS)</source>
+        <translation>Modèles comparés (MODELS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="132"/>
+        <source>(the constant model only)</source>
+        <translation>(le modèle constant seulement)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="133"/>
+        <source>Confidence level (CONFIDENCE)</source>
+        <translation>Niveau de confiance (CONFIDENCE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="134"/>
+        <source>Target SE of ψ (TARGET_SE)</source>
+        <translation>Erreur type cible de ψ (TARGET_SE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="136"/>
+        <source>Goodness-of-fit replicates (GOF_REPLICATES)</source>
+        <translation>Réplicats du test d'adéquation (GOF_REPLICATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="120"/>
+        <source>Seed (SEED)</source>
+        <translation>Graine (SEED)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="139"/>
+        <source>not used (no bootstrap)</source>
+        <translation>non utilisée (pas de bootstrap)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="140"/>
+        <source>CRS</source>
+        <translation>SCR</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="152"/>
+        <source>Detection histories</source>
+        <translation>Historiques de détection</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites in the layer</source>
+        <translation>sites dans la couche</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites used (at least one surveyed occasion)</source>
+        <translation>sites utilisés (au moins une occasion échantillonnée)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites left out (no surveyed occasion)</source>
+        <translation>sites écartés (aucune occasion échantillonnée)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>occasions</source>
+        <translation>occasions</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>surveys (site-occasions surveyed)</source>
+        <translation>visites (couples site-occasion échantillonnés)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>site-occasions not surveyed (NULL)</source>
+        <translation>couples site-occasion non échantillonnés (NULL)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites with a detection</source>
+        <translation>sites avec au moins une détection</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>detections</source>
+        <translation>détections</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="163"/>
+        <source>{n} detections</source>
+        <translation>{n} détections</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="165"/>
+        <source>sites</source>
+        <translation>sites</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="165"/>
+        <source>Sites by their number of detections</source>
+        <translation>Sites selon leur nombre de détections</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="167"/>
+        <source>History (1 detected, 0 not, - not surveyed)</source>
+        <translation>Historique (1 détectée, 0 non, - non échantillonné)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="167"/>
+        <source>Sites</source>
+        <translation>Sites</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="167"/>
+        <source>The most frequent detection histories</source>
+        <translation>Les historiques de détection les plus fréquents</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="174"/>
+        <source>Estimates</source>
+        <translation>Estimations</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Parameter</source>
+        <translation>Paramètre</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Estimate</source>
+        <translation>Estimation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>SE</source>
+        <translation>Erreur type</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Lower ({level})</source>
+        <translation>Inférieure ({level})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Upper ({level})</source>
+        <translation>Supérieure ({level})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="182"/>
+        <source>Rows logit_psi:… and logit_p:… are coefficients on the logit scale (const: the logit at covariates 0; a slope per unit of its covariate). Rows psi and p are the mean fitted probabilities, with delta-method SEs and intervals on the logit scale.</source>
+        <translation>Les lignes logit_psi:… et logit_p:… sont des coefficients sur l'échelle logit (const : le logit quand les covariables valent 0 ; une pente par unité de sa covariable). Les lignes psi et p sont les probabilités ajustées moyennes, avec des erreurs types par la méthode delta et des intervalles sur l'échelle logit.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="188"/>
+        <source>Parameters at the boundary of their range: {names}. They get no SE or interval; the other estimates are conditional on them.</source>
+        <translation>Paramètres à la borne de leur domaine : {names}. Ils n'ont ni erreur type ni intervalle ; les autres estimations sont conditionnelles à leur valeur.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="195"/>
+        <source>Model comparison</source>
+        <translation>Comparaison des modèles</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>Model</source>
+        <translation>Modèle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>Parameters</source>
+        <translation>Paramètres</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>log L</source>
+        <translation>log L</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>AIC</source>
+        <translation>AIC</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>AICc</source>
+        <translation>AICc</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>ΔAIC</source>
+        <translation>ΔAIC</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>AIC weight</source>
+        <translation>Poids AIC</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>ψ</source>
+        <translation>ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>p</source>
+        <translation>p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>Fit</source>
+        <translation>Ajustement</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="209"/>
+        <source>The model with the lowest AIC is {model}, {d} AIC units below the model reported above. Consider running again with its covariates.</source>
+        <translation>Le modèle de plus faible AIC est {model}, {d} unités d'AIC sous le modèle présenté plus haut. Envisagez de relancer avec ses covariables.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="218"/>
+        <source>Cumulative detection</source>
+        <translation>Détection cumulée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="221"/>
+        <source>1 − (1 − p)^K</source>
+        <translation>1 − (1 − p)^K</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="223"/>
+        <source>lower limit</source>
+        <translation>limite inférieure</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="224"/>
+        <source>upper limit</source>
+        <translation>limite supérieure</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="226"/>
+        <source>occasions K</source>
+        <translation>occasions K</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="226"/>
+        <source>cumulative detection</source>
+        <translation>détection cumulée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="228"/>
+        <source>Chance of at least one detection at an occupied site after K surveys, at the mean p</source>
+        <translation>Probabilité d'au moins une détection sur un site occupé après K visites, au p moyen</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="234"/>
+        <source>Design advice</source>
+        <translation>Conseils pour le plan d'échantillonnage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="235"/>
+        <source>With p = {p} per survey, {k} occasions give a cumulative detection of {c}; {k95} occasions are needed for 0.95.</source>
+        <translation>Avec p = {p} par visite, {k} occasions donnent une détection cumulée de {c} ; il faut {k95} occasions pour 0.95.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="241"/>
+        <source>For an SE of ψ of {se} with {k} occasions per site, about {s} sites are needed (asymptotic variance of MacKenzie &amp; Royle 2005 at ψ = {psi} and p = {p}: s·Var(ψ̂) = {v}). The fewest surveys (sites × occasions) for that SE come with {kb} occasions per site and about {sb} sites.</source>
+        <translation>Pour une erreur type de ψ de {se} avec {k} occasions par site, il faut environ {s} sites (variance asymptotique de MacKenzie &amp; Royle 2005 à ψ = {psi} et p = {p} : s·Var(ψ̂) = {v}). Le plus petit nombre de visites (sites × occasions) pour cette erreur type s'obtient avec {kb} occasions par site et environ {sb} sites.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="250"/>
+        <source>With covariates the advice uses the mean ψ and p of the model (the constant-model formula): a guide, not an exact figure.</source>
+        <translation>Avec des covariables, les conseils utilisent les ψ et p moyens du modèle (la formule du modèle constant) : un repère, pas un chiffre exact.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="257"/>
+        <source>Goodness of fit</source>
+        <translation>Qualité de l'ajustement</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="258"/>
+        <source>Pearson's χ² of the detection-history frequencies against the model's expected frequencies (sites grouped by their surveyed occasions): {x}. Parametric bootstrap (MacKenzie &amp; Bailey 2004) of {b} data sets simulated from the fitted model: mean χ² {m}, p = {p}; ĉ = {c}.</source>
+        <translation>χ² de Pearson des fréquences des historiques de détection par rapport aux fréquences attendues du modèle (sites groupés selon leurs occasions échantillonnées) : {x}. Bootstrap paramétrique (MacKenzie &amp; Bailey 2004) de {b} jeux de données simulés à partir du modèle ajusté : χ² moyen {m}, p = {p} ; ĉ = {c}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="265"/>
+        <source>ĉ near 1: the model fits; above 1: the histories vary more than the model allows (multiply the variances by ĉ); well below 1 is usually harmless.</source>
+        <translation>ĉ proche de 1 : le modèle s'ajuste ; au-dessus de 1 : les historiques varient plus que le modèle ne le permet (multipliez les variances par ĉ) ; nettement sous 1, c'est en général sans conséquence.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="282"/>
+        <source>{lo} to {hi}</source>
+        <translation>{lo} à {hi}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="29"/>
+        <source>grid</source>
+        <translation>grille</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="29"/>
+        <source>clusters</source>
+        <translation>grappes</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="29"/>
+        <source>balanced</source>
+        <translation>équilibré</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="34"/>
+        <source>independent occupancy sites (one home-range diameter apart)</source>
+        <translation>sites d'occupation indépendants (espacés d'un diamètre de domaine vital)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="34"/>
+        <source>spatial capture-recapture (2σ apart)</source>
+        <translation>capture-recapture spatiale (espacement de 2σ)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="66"/>
+        <source>Camera-trap and recorder stations</source>
+        <translation>Stations de pièges photographiques et d'enregistreurs</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="252"/>
+        <source>primary stations</source>
+        <translation>stations principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="252"/>
+        <source>reserve stations</source>
+        <translation>stations de réserve</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="70"/>
+        <source>spacing used (m)</source>
+        <translation>espacement utilisé (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="70"/>
+        <source>array</source>
+        <translation>dispositif</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="81"/>
+        <source>Replacing stations in the field</source>
+        <translation>Remplacer des stations sur le terrain</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="82"/>
+        <source>A primary station that cannot be set (no safe access, no permission, flooded, ...) is replaced by the next unused reserve station of its stratum, in draw order (draw_ord); for clusters, a whole cluster by the next reserve cluster. Record the primary as not set and why; never move a station to a more convenient place.</source>
+        <translation>Une station principale qui ne peut pas être installée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par la station de réserve suivante non utilisée de sa strate, dans l'ordre de tirage (draw_ord) ; pour les grappes, une grappe entière est remplacée par la grappe de réserve suivante. Notez la station principale comme non installée et pourquoi ; ne déplacez jamais une station vers un endroit plus commode.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="87"/>
+        <source>Map</source>
+        <translation>Carte</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="88"/>
+        <source>Strata (filled), primary stations (dark) and reserve stations (light)</source>
+        <translation>Strates (remplies), stations principales (foncées) et stations de réserve (claires)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="98"/>
+        <source>(not given)</source>
+        <translation>(non indiqué)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="100"/>
+        <source>Frame (FRAME)</source>
+        <translation>Base de sondage (FRAME)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="101"/>
+        <source>Stratum field (STRATUM_FIELD)</source>
+        <translation>Champ de strate (STRATUM_FIELD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="102"/>
+        <source>(none: one stratum)</source>
+        <translation>(aucun : une seule strate)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="103"/>
+        <source>Stations (N_STATIONS)</source>
+        <translation>Stations (N_STATIONS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="104"/>
+        <source>0: every grid point</source>
+        <translation>0 : chaque point de la grille</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="105"/>
+        <source>Array (ARRAY)</source>
+        <translation>Dispositif (ARRAY)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="107"/>
+        <source>Home range (HOME_RANGE, km²)</source>
+        <translation>Domaine vital (HOME_RANGE, km²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="109"/>
+        <source>Spacing (SPACING, m)</source>
+        <translation>Espacement (SPACING, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="110"/>
+        <source>from the home range</source>
+        <translation>d'après le domaine vital</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="111"/>
+        <source>Spacing rule (SPACING_RULE)</source>
+        <translation>Règle d'espacement (SPACING_RULE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="113"/>
+        <source>Stations per cluster (CLUSTER_SIZE)</source>
+        <translation>Stations par grappe (CLUSTER_SIZE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="114"/>
+        <source>(not used)</source>
+        <translation>(non utilisé)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="115"/>
+        <source>Minimum spacing (MIN_SPACING, m)</source>
+        <translation>Espacement minimal (MIN_SPACING, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="116"/>
+        <source>Reserves per stratum (RESERVE)</source>
+        <translation>Réserves par strate (RESERVE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="117"/>
+        <source>Service time per station (SERVICE_HOURS, hours)</source>
+        <translation>Durée d'intervention par station (SERVICE_HOURS, heures)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="119"/>
+        <source>Working day (WORKDAY_HOURS, hours)</source>
+        <translation>Journée de travail (WORKDAY_HOURS, heures)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="121"/>
+        <source>CRS of the computation and the output</source>
+        <translation>SCR du calcul et de la sortie</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="126"/>
+        <source>Spacing</source>
+        <translation>Espacement</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="129"/>
+        <source>Home range {hr} km², taken as the 95% range of a circular bivariate normal distribution of the animal's positions: σ = √(HR/π) / 2.448 = {sigma} m (2.448 = √(−2 ln 0.05)); home-range diameter {diameter} m.</source>
+        <translation>Domaine vital de {hr} km², pris comme le domaine à 95 % d'une loi normale bivariée circulaire des positions de l'animal : σ = √(HR/π) / 2.448 = {sigma} m (2.448 = √(−2 ln 0.05)) ; diamètre du domaine vital {diameter} m.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="136"/>
+        <source>Rule used: spatial capture-recapture, stations about 2σ = {s} m apart, so that an animal meets several stations (Sollmann et al. 2012; Sun et al. 2014).</source>
+        <translation>Règle appliquée : capture-recapture spatiale, stations espacées d'environ 2σ = {s} m, pour qu'un animal rencontre plusieurs stations (Sollmann et al. 2012 ; Sun et al. 2014).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="141"/>
+        <source>Rule used: independent occupancy sites, stations at least one home-range diameter = {s} m apart, so that one animal rarely uses two sites (common practice).</source>
+        <translation>Règle appliquée : sites d'occupation indépendants, stations espacées d'au moins un diamètre de domaine vital = {s} m, pour qu'un même animal utilise rarement deux sites (pratique courante).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="146"/>
+        <source>Spacing given by the user: {s} m (no rule applied).</source>
+        <translation>Espacement donné par l'utilisateur : {s} m (aucune règle appliquée).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="149"/>
+        <source>For comparison: 2σ = {scr} m (spatial capture-recapture); one home-range diameter = {occ} m (independent occupancy sites).</source>
+        <translation>Pour comparaison : 2σ = {scr} m (capture-recapture spatiale) ; un diamètre de domaine vital = {occ} m (sites d'occupation indépendants).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="158"/>
+        <source>Array extent</source>
+        <translation>Étendue du dispositif</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="159"/>
+        <source>The primary stations span {span} km (largest distance between two of them); their convex hull covers {area} km².</source>
+        <translation>Les stations principales s'étendent sur {span} km (plus grande distance entre deux d'entre elles) ; leur enveloppe convexe couvre {area} km².</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="164"/>
+        <source>That is {n} home ranges of {hr} km², and {d} home-range diameters across.</source>
+        <translation>Cela fait {n} domaines vitaux de {hr} km², et {d} diamètres de domaine vital d'un bord à l'autre.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="169"/>
+        <source>An array smaller than a few home ranges cannot estimate density by spatial capture-recapture: too few animals have their range inside it, and movement cannot be separated from density. Spread the stations wider or add stations.</source>
+        <translation>Un dispositif plus petit que quelques domaines vitaux ne permet pas d'estimer la densité par capture-recapture spatiale : trop peu d'animaux ont leur domaine à l'intérieur, et le déplacement ne peut pas être distingué de la densité. Écartez davantage les stations ou ajoutez-en.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="177"/>
+        <source>Field effort</source>
+        <translation>Effort de terrain</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="178"/>
+        <source>With {h} hours per station visit (travel included) and a working day of {day} hours, one team services {n} stations per team-day; one round of every primary station takes {days} team-days.</source>
+        <translation>Avec {h} heures par visite de station (déplacement compris) et une journée de travail de {day} heures, une équipe relève {n} stations par jour-équipe ; une tournée de toutes les stations principales demande {days} jours-équipe.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="186"/>
+        <source>A cluster of {k} stations takes {c} hours: one team can service a cluster in a day.</source>
+        <translation>Une grappe de {k} stations demande {c} heures : une équipe peut relever une grappe dans la journée.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="189"/>
+        <source>A cluster of {k} stations takes {c} hours: more than one team-day; use smaller clusters or two teams.</source>
+        <translation>Une grappe de {k} stations demande {c} heures : plus d'un jour-équipe ; utilisez des grappes plus petites ou deux équipes.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="196"/>
+        <source>Stations per stratum</source>
+        <translation>Stations par strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="198"/>
+        <source>frame</source>
+        <translation>base de sondage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Stratum</source>
+        <translation>Strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Area (ha)</source>
+        <translation>Surface (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Stations asked</source>
+        <translation>Stations demandées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Primary</source>
+        <translation>Principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Reserve</source>
+        <translation>Réserves</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Clusters</source>
+        <translation>Grappes</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="210"/>
+        <source>Grid: one square lattice over the frame, aligned with grid north, with a uniform random start. With N_STATIONS = 0 every lattice point in the frame is a station (reserves: the lattice's cell centres in random order, which sit s/√2 from the nearest primaries); otherwise the N lattice points nearest a uniform random point of the frame form a compact block (reserves: the next nearest lattice points).</source>
+        <translation>Grille : un seul réseau carré sur la base de sondage, aligné sur le nord de la grille, avec un départ aléatoire uniforme. Avec N_STATIONS = 0, chaque point du réseau dans la base de sondage est une station (réserves : les centres des mailles du réseau dans un ordre aléatoire, situés à s/√2 des stations principales les plus proches) ; sinon, les N points du réseau les plus proches d'un point aléatoire uniforme de la base de sondage forment un bloc compact (réserves : les points du réseau suivants par ordre de proximité).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="217"/>
+        <source>Clusters: the stations of a cluster are the k points of a square lattice of the spacing nearest its centre; the centres are drawn by balanced acceptance sampling (Robertson et al. 2013) from each stratum shrunk by the cluster&apos;s radius, so that every station lies in its stratum, and at least twice the radius plus the spacing apart. Reserve clusters are the next points of the same sequence.</source>
+        <translation>Grappes : les stations d'une grappe sont les k points d'un réseau carré au pas de l'espacement les plus proches de son centre ; les centres sont tirés par échantillonnage par acceptation équilibrée (Robertson et al. 2013) dans chaque strate réduite du rayon de la grappe, pour que chaque station soit dans sa strate, et espacés d'au moins deux fois le rayon plus l'espacement. Les grappes de réserve sont les points suivants de la même suite.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="224"/>
+        <source>Balanced: single stations by balanced acceptance sampling (Robertson et al. 2013), each at least the spacing from every other (simple sequential inhibition); reserves are the next accepted points of the same sequence.</source>
+        <translation>Équilibré : stations isolées tirées par échantillonnage par acceptation équilibrée (Robertson et al. 2013), chacune au moins à l'espacement de toutes les autres (inhibition séquentielle simple) ; les réserves sont les points acceptés suivants de la même suite.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="230"/>
+        <source>MIN_SPACING = {d} m holds between all stations of the layout.</source>
+        <translation>MIN_SPACING = {d} m est respecté entre toutes les stations de la disposition.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="246"/>
+        <source>the frame</source>
+        <translation>la base de sondage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="247"/>
+        <source>stratum {key}</source>
+        <translation>strate {key}</translation>
+    </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
@@ -4195,6 +5393,16 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
         <location filename="../processing/styles.py" line="405"/>
         <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
         <translation>La couche {name} n'a pas pu recevoir son style ({error}) ; elle garde le style par défaut.</translation>
+    </message>
+    <message>
+        <location filename="../processing/styles.py" line="457"/>
+        <source>left out (no surveyed occasion)</source>
+        <translation>écarté (aucune occasion échantillonnée)</translation>
+    </message>
+    <message>
+        <location filename="../processing/styles.py" line="459"/>
+        <source>Occupancy given the detections (psi_cond)</source>
+        <translation>Occupation sachant les détections (psi_cond)</translation>
     </message>
 </context>
 <context>
@@ -4248,6 +5456,247 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
         <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
+    </message>
+</context>
+<context>
+    <name>SimulateDetections</name>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="38"/>
+        <source>Simulate detections at stations</source>
+        <translation>Simuler des détections aux stations</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="41"/>
+        <source>&lt;p&gt;Fills detection histories of camera-trap or recorder stations from a simulated population, for training, demonstrations and tests of the occupancy analysis. Real surveys type the detections in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Stations&lt;/b&gt;: points (for example from the stations step).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt; and their &lt;b&gt;group field&lt;/b&gt; (default group_id, as the demo reserve writes it): a group sits at the mean position of its members; without a group field each animal is a group.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Occasions&lt;/b&gt;: the number of survey occasions (days, weeks).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection at a group&lt;/b&gt; and &lt;b&gt;σ (m)&lt;/b&gt;: on each occasion a station detects the species with probability p = p_max·exp(−d²/(2σ²)), d the distance to the nearest group, independently between occasions.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Share not surveyed&lt;/b&gt;: the share of station-occasions left empty (NULL), as a camera that failed.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the stations with det_01, det_02, … (1 detected, 0 not, NULL not surveyed), dist_grp (m to the nearest group) and p_true (the per-occasion detection probability). The input is not changed.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Remplit les historiques de détection de stations de pièges photographiques ou d'enregistreurs à partir d'une population simulée, pour la formation, les démonstrations et les tests de l'analyse d'occupation. Dans un vrai inventaire, les détections sont saisies après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Stations&lt;/b&gt; : des points (par exemple issus de l'étape des stations).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; et leur &lt;b&gt;champ de groupe&lt;/b&gt; (group_id par défaut, tel que l'écrit la réserve de démonstration) : un groupe se trouve à la position moyenne de ses membres ; sans champ de groupe, chaque animal est un groupe.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Occasions&lt;/b&gt; : le nombre d'occasions d'échantillonnage (jours, semaines).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Détection à l'emplacement d'un groupe&lt;/b&gt; et &lt;b&gt;σ (m)&lt;/b&gt; : à chaque occasion, une station détecte l'espèce avec la probabilité p = p_max·exp(−d²/(2σ²)), d étant la distance au groupe le plus proche, indépendamment d'une occasion à l'autre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Part non échantillonnée&lt;/b&gt; : la part des couples station-occasion laissés vides (NULL), comme un piège photographique tombé en panne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des stations avec det_01, det_02, … (1 détectée, 0 non, NULL non échantillonnée), dist_grp (m jusqu'au groupe le plus proche) et p_true (la probabilité de détection par occasion). L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="60"/>
+        <source>Stations</source>
+        <translation>Couche des stations</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="62"/>
+        <source>Animal points</source>
+        <translation>Points des animaux</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="64"/>
+        <source>Group field of the animals (empty: each animal is a group)</source>
+        <translation>Champ de groupe des animaux (vide : chaque animal est un groupe)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="67"/>
+        <source>Occasions</source>
+        <translation>Occasions</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="70"/>
+        <source>Detection probability per occasion at a group</source>
+        <translation>Probabilité de détection par occasion à l'emplacement d'un groupe</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="73"/>
+        <source>σ of the decline with distance (m)</source>
+        <translation>σ de la décroissance avec la distance (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="76"/>
+        <source>Share of occasions not surveyed</source>
+        <translation>Part des occasions non échantillonnées</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="80"/>
+        <source>Stations with detection histories</source>
+        <translation>Stations avec historiques de détection</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="109"/>
+        <source>{n} stations, {k} occasions: the species was detected at {d} stations ({g} animal groups).</source>
+        <translation>{n} stations, {k} occasions : l'espèce a été détectée à {d} stations ({g} groupes d'animaux).</translation>
+    </message>
+</context>
+<context>
+    <name>Stations</name>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="48"/>
+        <source>Lay out camera-trap or recorder stations</source>
+        <translation>Disposer des stations de pièges photographiques ou d'enregistreurs</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="51"/>
+        <source>Places camera-trap or acoustic-recorder stations over a sampling frame (optionally by stratum), spaced from the species' home range, with reserve stations and GPS waypoints.
+
+Spacing: from the home range (km²), taken as the 95% range of a circular bivariate normal distribution of the animal's positions, σ = √(HR/π) / 2.448. Rule 0, independent occupancy sites: stations at least one home-range diameter 2√(HR/π) apart (common practice). Rule 1, spatial capture-recapture: stations about 2σ apart (Sollmann et al. 2012; Sun et al. 2014). A spacing (m) above 0 replaces the rule.
+
+Arrays:
+• Grid: one square lattice at the spacing over the frame, north-aligned, with a random start. Number of stations 0 takes every lattice point in the frame; a number above 0 takes that many lattice points nearest a random point of the frame (a compact block). Strata only label the stations.
+• Clusters: groups of CLUSTER_SIZE stations at the spacing (a small square lattice around a centre), the centres spatially balanced (Robertson et al. 2013) and far enough apart that neighbouring clusters keep the spacing; every station lies inside its stratum. Reserves are whole clusters.
+• Balanced: single spatially balanced stations, each at least the spacing from every other.
+The number of stations is split over the strata by area, at least 2 each (clusters: the stations of a stratum rounded up to whole clusters).
+
+Minimum spacing (m) holds between all stations. Reserves: per stratum, in draw order (draw_ord); a station that cannot be set is replaced by the next unused reserve of its stratum.
+Service time (hours per station visit, travel included; 0: not given) and the working day give the stations one team services per day, and the team-days for one round.
+
+Output fields: station, stratum, cluster, role (primary or reserve), draw_ord, lon/lat (WGS 84). The GPX file holds one waypoint per station, named by its id. The report compares the array's extent with the home range: an array smaller than a few home ranges cannot estimate density.
+
+Check every station's access and safety before fieldwork: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Place des stations de pièges photographiques ou d'enregistreurs acoustiques sur une base de sondage (éventuellement par strate), espacées d'après le domaine vital de l'espèce, avec des stations de réserve et des points de passage GPS.
+
+Espacement : d'après le domaine vital (km²), pris comme le domaine à 95 % d'une loi normale bivariée circulaire des positions de l'animal, σ = √(HR/π) / 2,448. Règle 0, sites d'occupation indépendants : stations espacées d'au moins un diamètre de domaine vital 2√(HR/π) (pratique courante). Règle 1, capture-recapture spatiale : stations espacées d'environ 2σ (Sollmann et al. 2012 ; Sun et al. 2014). Un espacement (m) supérieur à 0 remplace la règle.
+
+Dispositifs :
+• Grille : un seul réseau carré au pas de l'espacement sur la base de sondage, orienté au nord, avec un départ aléatoire. Un nombre de stations de 0 prend chaque point du réseau dans la base ; un nombre supérieur à 0 prend autant de points du réseau, les plus proches d'un point aléatoire de la base (un bloc compact). Les strates ne font qu'étiqueter les stations.
+• Grappes : des groupes de CLUSTER_SIZE stations à l'espacement (un petit réseau carré autour d'un centre), les centres étant spatialement équilibrés (Robertson et al. 2013) et assez éloignés pour que les grappes voisines respectent l'espacement ; chaque station est à l'intérieur de sa strate. Les réserves sont des grappes entières.
+• Équilibré : des stations isolées spatialement équilibrées, chacune au moins à l'espacement de toutes les autres.
+Le nombre de stations est réparti entre les strates selon la surface, au moins 2 chacune (grappes : les stations d'une strate arrondies au nombre supérieur de grappes entières).
+
+L'espacement minimal (m) est respecté entre toutes les stations. Réserves : par strate, dans l'ordre de tirage (draw_ord) ; une station qui ne peut pas être installée est remplacée par la réserve suivante non utilisée de sa strate.
+La durée d'intervention (heures par visite de station, déplacement compris ; 0 : non indiquée) et la journée de travail donnent le nombre de stations qu'une équipe relève par jour, et les jours-équipe d'une tournée.
+
+Champs de sortie : station, stratum, cluster, role (primary ou reserve), draw_ord, lon/lat (WGS 84). Le fichier GPX contient un point de passage par station, nommé par son identifiant. Le rapport compare l'étendue du dispositif au domaine vital : un dispositif plus petit que quelques domaines vitaux ne permet pas d'estimer la densité.
+
+Vérifiez l'accès à chaque station et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="80"/>
+        <source>Sampling frame or strata</source>
+        <translation>Base de sondage ou strates</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="82"/>
+        <source>Stratum field (empty: the frame is one stratum)</source>
+        <translation>Champ de strate (vide : la base forme une seule strate)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="85"/>
+        <source>Number of stations (grid: 0 takes every grid point)</source>
+        <translation>Nombre de stations (grille : 0 prend chaque point de la grille)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Array</source>
+        <translation>Dispositif</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Grid</source>
+        <translation>Grille</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Clusters</source>
+        <translation>Grappes</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Balanced single stations</source>
+        <translation>Stations isolées équilibrées</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="91"/>
+        <source>Home range of the species (km²; 0: not given)</source>
+        <translation>Domaine vital de l'espèce (km² ; 0 : non indiqué)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="94"/>
+        <source>Station spacing (m; 0: from the home range)</source>
+        <translation>Espacement des stations (m ; 0 : d'après le domaine vital)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <source>Spacing rule (when the spacing comes from the home range)</source>
+        <translation>Règle d'espacement (quand l'espacement vient du domaine vital)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <source>Independent occupancy sites: one home-range diameter</source>
+        <translation>Sites d'occupation indépendants : un diamètre de domaine vital</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <source>Spatial capture-recapture: 2σ</source>
+        <translation>Capture-recapture spatiale : 2σ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="101"/>
+        <source>Stations per cluster</source>
+        <translation>Stations par grappe</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="104"/>
+        <source>Minimum spacing between stations (m; 0: none)</source>
+        <translation>Espacement minimal entre les stations (m ; 0 : aucun)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="107"/>
+        <source>Reserve stations per stratum (clusters: reserve clusters)</source>
+        <translation>Stations de réserve par strate (grappes : grappes de réserve)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <source>Service time per station visit (hours, travel included; 0: not given)</source>
+        <translation>Durée d'intervention par visite de station (heures, déplacement compris ; 0 : non indiquée)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <source>Working day of a field team (hours)</source>
+        <translation>Journée de travail d'une équipe de terrain (heures)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="119"/>
+        <source>Stations</source>
+        <translation>Stations</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <source>Waypoints for GPS (GPX)</source>
+        <translation>Points de passage pour GPS (GPX)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <source>GPX files (*.gpx)</source>
+        <translation>Fichiers GPX (*.gpx)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <source>Station spacing used (m)</source>
+        <translation>Espacement des stations utilisé (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <source>σ of the home range (m)</source>
+        <translation>σ du domaine vital (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <source>Number of primary stations</source>
+        <translation>Nombre de stations principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="137"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
+        <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="166"/>
+        <source>Layer &apos;{layer}&apos;: {text}</source>
+        <translation>Couche « {layer} » : {text}</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="180"/>
+        <source>{n} waypoints written to {path}</source>
+        <translation>{n} points de passage écrits dans {path}</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="181"/>
+        <source>{n} primary and {r} reserve stations, {s:.0f} m apart.</source>
+        <translation>{n} stations principales et {r} de réserve, espacées de {s:.0f} m.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="199"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
 </context>
 <context>
