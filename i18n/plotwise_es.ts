@@ -2392,27 +2392,27 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation>Número total de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="37"/>
+        <location filename="../processing/provider.py" line="43"/>
         <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
         <translation>Cadena de ejemplo: planificar un muestreo (marco, estratos, esfuerzo, disposición)</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="37"/>
+        <location filename="../processing/provider.py" line="43"/>
         <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
         <translation>Construye el marco de muestreo (área de estudio menos las exclusiones y las celdas por encima de la pendiente límite), forma estratos por k-medias a partir de los rásteres de covariables, reparte las unidades por asignación de Neyman con la desviación estándar de la covariable como sustituto y dispone parcelas cuadradas espacialmente equilibradas con 3 unidades de reserva por estrato. Ábrala en el modelador para cambiar cualquier paso. Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="47"/>
+        <location filename="../processing/provider.py" line="53"/>
         <source>Example chain: estimate from simulated counts</source>
         <translation>Cadena de ejemplo: estimar a partir de conteos simulados</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="47"/>
+        <location filename="../processing/provider.py" line="53"/>
         <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
         <translation>Para formación: rellena el campo de conteo de las unidades a partir de una población simulada y luego estima la densidad y la abundancia por estrato y en total. Con trabajo de campo real, ejecute en su lugar la estimación sobre las unidades contadas.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="76"/>
+        <location filename="../processing/provider.py" line="82"/>
         <source>Example chains</source>
         <translation>Cadenas de ejemplo</translation>
     </message>
@@ -2872,6 +2872,189 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
     </message>
 </context>
 <context>
+    <name>Occupancy</name>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="57"/>
+        <source>Estimate occupancy from repeat visits</source>
+        <translation>Estimar la ocupación a partir de visitas repetidas</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="60"/>
+        <source>Estimates the share of sites the species occupies (ψ), corrected for the surveys on which it was there but not detected (p), from detection histories: single-season occupancy model (MacKenzie et al. 2002).
+
+Sites: a layer or a table with one row per site (station) and one history field per occasion, holding 1 (detected), 0 (not detected) or NULL (not surveyed that occasion). Any other value stops the run, naming the field and the sites. Sites with no surveyed occasion are left out and listed. Site id field: the ids used in messages (default: the feature ids); they must be unique.
+
+Covariates: numeric site fields for ψ and for p; effort fields (one per history field, in the same order, e.g. camera-days per occasion) add an occasion-level effort to p. logit ψ and logit p are linear in their covariates. A NULL covariate at a surveyed site is an error.
+
+Models compared (optional): one model per line, or models separated by ;; such as &quot;psi: elevation  p: effort&quot; (terms separated by commas or +; a missing part is constant; the word effort means the effort fields). The chosen model, the constant model and these are compared by AIC; the outputs come from the chosen model (the covariates above).
+
+Maximum likelihood with scipy; standard errors from the observed information, intervals on the logit scale at the confidence level. A model that does not converge gives no number, and a parameter at the boundary (ψ = 1, p = 1, a covariate that separates the sites) is reported as such, without SE.
+
+Design advice: the occasions needed for a cumulative detection of 0.95, and the sites needed for the target SE of ψ, from the asymptotic variance of MacKenzie &amp; Royle (2005).
+Goodness of fit (replicates above 0): parametric bootstrap of the χ² of the detection-history frequencies (MacKenzie &amp; Bailey 2004), with ĉ; seeded.
+
+Outputs: the sites with psi (fitted ψ), psi_cond (probability of occupancy given the site's history; 1 where detected) and naive (1 where detected at least once); a parameters table (param, estimate, se, lo, hi); optionally the model table; an HTML report; and the numbers PSI, PSI_SE, PSI_LO, PSI_HI, P, P_SE, NAIVE, OCCASIONS_NEEDED, SITES_NEEDED, C_HAT, GOF_P.
+
+More fieldwork follows from the design advice: check every site's access and safety before sending a team; the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Estima la proporción de sitios que ocupa la especie (ψ), corregida por las visitas en las que estaba presente pero no se detectó (p), a partir de historiales de detección: modelo de ocupación de una temporada (MacKenzie et al. 2002).
+
+Sitios: una capa o una tabla con una fila por sitio (estación) y un campo del historial por ocasión, que contiene 1 (detectada), 0 (no detectada) o NULL (no muestreado en esa ocasión). Cualquier otro valor detiene la ejecución, nombrando el campo y los sitios. Los sitios sin ninguna ocasión muestreada se dejan fuera y se listan. Campo identificador de los sitios: los identificadores usados en los mensajes (por defecto: los identificadores de entidad); deben ser únicos.
+
+Covariables: campos numéricos de sitio para ψ y para p; los campos de esfuerzo (uno por campo del historial, en el mismo orden, p. ej. días-cámara por ocasión) añaden a p un esfuerzo propio de cada ocasión. logit ψ y logit p son lineales en sus covariables. Una covariable NULL en un sitio muestreado es un error.
+
+Modelos comparados (opcional): un modelo por línea, o modelos separados por ;; como «psi: elevation  p: effort» (términos separados por comas o por +; una parte que falta es constante; la palabra effort designa los campos de esfuerzo). El modelo elegido, el modelo constante y estos se comparan por AIC; las salidas proceden del modelo elegido (las covariables de arriba).
+
+Máxima verosimilitud con scipy; errores estándar a partir de la información observada, intervalos en la escala logit al nivel de confianza indicado. Un modelo que no converge no da ningún número, y un parámetro en el límite (ψ = 1, p = 1, una covariable que separa los sitios) se indica como tal, sin error estándar.
+
+Recomendaciones de diseño: las ocasiones necesarias para una detección acumulada de 0,95, y los sitios necesarios para el error estándar objetivo de ψ, según la varianza asintótica de MacKenzie &amp; Royle (2005).
+Bondad de ajuste (réplicas por encima de 0): bootstrap paramétrico del χ² de las frecuencias de los historiales de detección (MacKenzie &amp; Bailey 2004), con ĉ; con semilla.
+
+Salidas: los sitios con psi (ψ ajustado), psi_cond (probabilidad de ocupación dado el historial del sitio; 1 donde se detectó) y naive (1 donde se detectó al menos una vez); una tabla de parámetros (param, estimate, se, lo, hi); opcionalmente la tabla de modelos; un informe HTML; y los valores PSI, PSI_SE, PSI_LO, PSI_HI, P, P_SE, NAIVE, OCCASIONS_NEEDED, SITES_NEEDED, C_HAT, GOF_P.
+
+Las recomendaciones de diseño implican más trabajo de campo: compruebe el acceso y la seguridad de cada sitio antes de enviar un equipo; la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="90"/>
+        <source>Sites with detection histories</source>
+        <translation>Sitios con historiales de detección</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="92"/>
+        <source>Site id field (empty: feature ids)</source>
+        <translation>Campo identificador de los sitios (vacío: identificadores de entidad)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="95"/>
+        <source>History fields, one per occasion, in order</source>
+        <translation>Campos del historial, uno por ocasión, en orden</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="98"/>
+        <source>Site covariates of occupancy ψ</source>
+        <translation>Covariables de sitio de la ocupación ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="98"/>
+        <source>Site covariates of detection p</source>
+        <translation>Covariables de sitio de la detección p</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="98"/>
+        <source>Effort fields, one per history field (optional)</source>
+        <translation>Campos de esfuerzo, uno por campo del historial (opcional)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="103"/>
+        <source>Models to compare by AIC (one per line, e.g. psi: elevation  p: effort)</source>
+        <translation>Modelos que comparar por AIC (uno por línea, p. ej. psi: elevation  p: effort)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="106"/>
+        <source>Confidence level</source>
+        <translation>Nivel de confianza</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="109"/>
+        <source>Target SE of ψ for the design advice (0: none)</source>
+        <translation>Error estándar objetivo de ψ para las recomendaciones de diseño (0: ninguno)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="112"/>
+        <source>Goodness-of-fit bootstrap replicates (0: no test)</source>
+        <translation>Réplicas bootstrap de la prueba de bondad de ajuste (0: sin prueba)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="116"/>
+        <source>Sites with occupancy</source>
+        <translation>Sitios con ocupación</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="117"/>
+        <source>Occupancy parameters</source>
+        <translation>Parámetros de ocupación</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="119"/>
+        <source>Model comparison</source>
+        <translation>Comparación de modelos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Occupancy ψ</source>
+        <translation>Ocupación ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>SE of ψ</source>
+        <translation>Error estándar de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Lower limit of ψ</source>
+        <translation>Límite inferior de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Upper limit of ψ</source>
+        <translation>Límite superior de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Detection p per survey</source>
+        <translation>Detección p por visita</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>SE of p</source>
+        <translation>Error estándar de p</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Naive occupancy</source>
+        <translation>Ocupación ingenua</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Occasions for a cumulative detection of 0.95</source>
+        <translation>Ocasiones para una detección acumulada de 0.95</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>Sites needed for the target SE of ψ</source>
+        <translation>Sitios necesarios para el error estándar objetivo de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>c-hat of the goodness of fit</source>
+        <translation>c-hat de la prueba de bondad de ajuste</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="123"/>
+        <source>p-value of the goodness of fit</source>
+        <translation>Valor p de la prueba de bondad de ajuste</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="137"/>
+        <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Choose existing fields.</source>
+        <translation>La capa «{layer}» no tiene el campo {fields} ({param}). Elija campos existentes.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="165"/>
+        <source>Layer &apos;{layer}&apos; has no features.</source>
+        <translation>La capa «{layer}» no tiene entidades.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="185"/>
+        <source>(a table: no map)</source>
+        <translation>(una tabla: sin mapa)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/occupancy.py" line="195"/>
+        <source>ψ = {psi:.3f} (SE {se}), p = {p:.3f}, naive occupancy {naive:.3f}, {n} sites.</source>
+        <translation>ψ = {psi:.3f} (EE {se}), p = {p:.3f}, ocupación ingenua {naive:.3f}, {n} sitios.</translation>
+    </message>
+</context>
+<context>
     <name>PlotwiseAlgorithm</name>
     <message>
         <location filename="../processing/algorithms/base.py" line="25"/>
@@ -2995,7 +3178,7 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
         <translation>coste por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="416"/>
+        <location filename="../processing/engine/occupancy.py" line="76"/>
         <source>{shown} and {more} more</source>
         <translation>{shown} y {more} más</translation>
     </message>
@@ -4069,6 +4252,321 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
         <source>line</source>
         <translation>línea</translation>
     </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="52"/>
+        <source>OCCASIONS must be a whole number of at least 1.</source>
+        <translation>OCCASIONS debe ser un número entero de al menos 1.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="55"/>
+        <source>The detection probability at a group must be in (0, 1]; it is {p:g}.</source>
+        <translation>La probabilidad de detección en la posición de un grupo debe estar en (0, 1]; es {p:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="58"/>
+        <source>The detection scale SIGMA must be more than 0 m.</source>
+        <translation>La escala de detección SIGMA debe ser mayor que 0 m.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="61"/>
+        <source>The share of occasions not surveyed must be at least 0 and below 1.</source>
+        <translation>La proporción de ocasiones no muestreadas debe ser al menos 0 y menor que 1.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detections.py" line="65"/>
+        <source>The animal layer holds no animal: there is nothing to detect.</source>
+        <translation>La capa de animales no contiene ningún animal: no hay nada que detectar.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="168"/>
+        <source>Layer {layer}: occupancy needs at least 2 occasions (history fields); {n} given. With one visit per site, detection and occupancy cannot be told apart.</source>
+        <translation>Capa {layer}: la ocupación necesita al menos 2 ocasiones (campos del historial); {n} indicada(s). Con una sola visita por sitio, la detección y la ocupación no pueden distinguirse.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="178"/>
+        <source>Layer {layer}, history field {field}: sites {ids} hold a value other than 1 (detected), 0 (not detected) or NULL (not surveyed). Correct these values and run again.</source>
+        <translation>Capa {layer}, campo del historial {field}: los sitios {ids} contienen un valor distinto de 1 (detectada), 0 (no detectada) o NULL (no muestreado). Corrija estos valores y vuelva a ejecutar.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="186"/>
+        <source>Layer {layer}: no site was surveyed on any occasion (every history value is NULL).</source>
+        <translation>Capa {layer}: ningún sitio se muestreó en ninguna ocasión (todos los valores del historial son NULL).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="190"/>
+        <source>Layer {layer}: the species was not detected at any site, so occupancy and detection cannot be estimated (every history is 0).</source>
+        <translation>Capa {layer}: la especie no se detectó en ningún sitio, así que la ocupación y la detección no pueden estimarse (todos los historiales son 0).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="199"/>
+        <source>Layer {layer}: {n} sites have an empty (NULL) site id. Give every site an id, or leave SITE_ID_FIELD empty to use the feature ids.</source>
+        <translation>Capa {layer}: {n} sitios tienen un identificador de sitio vacío (NULL). Dé un identificador a cada sitio, o deje SITE_ID_FIELD vacío para usar los identificadores de entidad.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="209"/>
+        <source>Layer {layer}: site ids {ids} occur more than once. Each site needs one row holding all its occasions; merge the rows or correct the ids.</source>
+        <translation>Capa {layer}: los identificadores de sitio {ids} aparecen más de una vez. Cada sitio necesita una sola fila con todas sus ocasiones; combine las filas o corrija los identificadores.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="237"/>
+        <source>Model line {line!r}: write the occupancy terms after psi: and the detection terms after p:, for example psi: elevation p: effort.</source>
+        <translation>Línea de modelo {line!r}: escriba los términos de ocupación después de psi: y los de detección después de p:, por ejemplo psi: elevation p: effort.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="256"/>
+        <source>Model line {line!r}: effort varies by occasion and acts on detection only; move it after p:.</source>
+        <translation>Línea de modelo {line!r}: effort varía según la ocasión y solo actúa sobre la detección; colóquelo después de p:.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <source>Model line {line!r}: {name} is not a numeric field of the sites layer (give EFFORT_FIELDS to use effort). Use the field names as they are in the layer.</source>
+        <translation>Línea de modelo {line!r}: {name} no es un campo numérico de la capa de sitios (indique EFFORT_FIELDS para usar effort). Use los nombres de los campos tal como están en la capa.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <source>Model line {line!r}: {name} is not a numeric field of the sites layer. Use the field names as they are in the layer.</source>
+        <translation>Línea de modelo {line!r}: {name} no es un campo numérico de la capa de sitios. Use los nombres de los campos tal como están en la capa.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="299"/>
+        <source>CONFIDENCE must be at least 0.5 and below 1; it is {value}.</source>
+        <translation>CONFIDENCE debe ser al menos 0.5 y menor que 1; es {value}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="302"/>
+        <source>TARGET_SE must be 0 (no advice) or more; it is {value}.</source>
+        <translation>TARGET_SE debe ser 0 (sin recomendaciones) o más; es {value}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="305"/>
+        <source>The number of goodness-of-fit replicates must be 0 or a positive whole number.</source>
+        <translation>El número de réplicas de la prueba de bondad de ajuste debe ser 0 o un número entero positivo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="318"/>
+        <source>A model uses effort but no EFFORT_FIELDS were given.</source>
+        <translation>Un modelo usa effort pero no se indicó ningún EFFORT_FIELDS.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="335"/>
+        <source>Layer {layer} has no covariate field {field}.</source>
+        <translation>La capa {layer} no tiene el campo de covariable {field}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="341"/>
+        <source>Layer {layer}, covariate field {field}: surveyed sites {ids} have no number (NULL or text). Fill in the values, leave these sites out, or drop the covariate.</source>
+        <translation>Capa {layer}, campo de covariable {field}: los sitios muestreados {ids} no tienen un número (NULL o texto). Rellene los valores, deje fuera esos sitios o quite la covariable.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="347"/>
+        <source>Layer {layer}, covariate field {field}: every surveyed site has the same value ({value:g}), so its effect cannot be estimated. Drop it from the model.</source>
+        <translation>Capa {layer}, campo de covariable {field}: todos los sitios muestreados tienen el mismo valor ({value:g}), así que su efecto no puede estimarse. Quítela del modelo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="356"/>
+        <source>Give one effort field per history field, in the same order: {k} history fields and {e} effort fields.</source>
+        <translation>Indique un campo de esfuerzo por campo del historial, en el mismo orden: {k} campos del historial y {e} campos de esfuerzo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="371"/>
+        <source>Layer {layer}, effort fields {fields}: surveyed sites {ids} have no effort, or a negative one, on an occasion they were surveyed. Give every survey its effort.</source>
+        <translation>Capa {layer}, campos de esfuerzo {fields}: los sitios muestreados {ids} no tienen esfuerzo, o lo tienen negativo, en una ocasión en la que se muestrearon. Dé a cada visita su esfuerzo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="377"/>
+        <source>Layer {layer}: the effort is the same on every survey, so its effect cannot be estimated. Leave EFFORT_FIELDS empty.</source>
+        <translation>Capa {layer}: el esfuerzo es el mismo en todas las visitas, así que su efecto no puede estimarse. Deje EFFORT_FIELDS vacío.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="742"/>
+        <source>The search for the maximum stopped after {n} iterations without converging.</source>
+        <translation>La búsqueda del máximo se detuvo tras {n} iteraciones sin converger.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="754"/>
+        <source>The observed information is not positive definite at the maximum: the parameters cannot all be estimated from these data (collinear covariates, or too few detections).</source>
+        <translation>La información observada no es definida positiva en el máximo: no todos los parámetros pueden estimarse con estos datos (covariables colineales o muy pocas detecciones).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1040"/>
+        <source>The occupancy model ({model}) could not be fitted: {why} No estimate is given. Try fewer covariates, more sites or more occasions.</source>
+        <translation>No se pudo ajustar el modelo de ocupación ({model}): {why} No se da ninguna estimación. Pruebe con menos covariables, más sitios o más ocasiones.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1045"/>
+        <source>The model {model} could not be fitted and is left out of the comparison: {why}</source>
+        <translation>No se pudo ajustar el modelo {model} y queda fuera de la comparación: {why}</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1049"/>
+        <source>Sites {ids} have no surveyed occasion (every history value NULL) and were left out of the analysis.</source>
+        <translation>Los sitios {ids} no tienen ninguna ocasión muestreada (todos los valores del historial NULL) y se dejaron fuera del análisis.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1057"/>
+        <source>The goodness-of-fit test was skipped: with {k} occasions there are too many possible detection histories to enumerate.</source>
+        <translation>Se omitió la prueba de bondad de ajuste: con {k} ocasiones hay demasiados historiales de detección posibles para enumerarlos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1061"/>
+        <source>The goodness-of-fit test was skipped: the model has parameters at the boundary.</source>
+        <translation>Se omitió la prueba de bondad de ajuste: el modelo tiene parámetros en el límite.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with every site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
+        <translation>psi está en el límite de su rango (estimación {psi:.4f}): los datos son compatibles con que todos los sitios estén ocupados. Su error estándar y su intervalo no pueden calcularse a partir de la información; las demás estimaciones están condicionadas a ese valor.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with no site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
+        <translation>psi está en el límite de su rango (estimación {psi:.4f}): los datos son compatibles con que ningún sitio esté ocupado. Su error estándar y su intervalo no pueden calcularse a partir de la información; las demás estimaciones están condicionadas a ese valor.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1085"/>
+        <source>p is at the boundary of its range (estimate {p:.4f}): every survey of a site with a detection detected the species. Its standard error cannot be computed; psi is then the naive occupancy.</source>
+        <translation>p está en el límite de su rango (estimación {p:.4f}): todas las visitas a un sitio con alguna detección detectaron la especie. Su error estándar no puede calcularse; psi es entonces la ocupación ingenua.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1090"/>
+        <source>Parameter {name} is at the boundary (a logit beyond {limit:g}): a covariate separates the sites, or a probability is 0 or 1. Its standard error cannot be computed; simplify the model.</source>
+        <translation>El parámetro {name} está en el límite (un logit más allá de {limit:g}): una covariable separa los sitios, o una probabilidad es 0 o 1. Su error estándar no puede calcularse; simplifique el modelo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1100"/>
+        <source>{n} bootstrap data sets could not be fitted and were left out of the goodness-of-fit test.</source>
+        <translation>No se pudieron ajustar {n} conjuntos de datos bootstrap y se dejaron fuera de la prueba de bondad de ajuste.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/occupancy.py" line="1104"/>
+        <source>The goodness-of-fit test rejects the model (p = {p:.3f}, c-hat = {c:.2f}): the histories vary more than the model allows. Standard errors may be too small; multiply their squares by c-hat, or add covariates.</source>
+        <translation>La prueba de bondad de ajuste rechaza el modelo (p = {p:.3f}, c-hat = {c:.2f}): los historiales varían más de lo que el modelo permite. Los errores estándar pueden ser demasiado pequeños; multiplique sus cuadrados por c-hat, o añada covariables.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="68"/>
+        <source>station {station} (primary, stratum {stratum})</source>
+        <translation>estación {station} (principal, estrato {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="69"/>
+        <source>station {station} (reserve, stratum {stratum})</source>
+        <translation>estación {station} (de reserva, estrato {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="70"/>
+        <source>station {station} of cluster {cluster} (primary, stratum {stratum})</source>
+        <translation>estación {station} del conglomerado {cluster} (principal, estrato {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="72"/>
+        <source>station {station} of cluster {cluster} (reserve, stratum {stratum})</source>
+        <translation>estación {station} del conglomerado {cluster} (de reserva, estrato {stratum})</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="120"/>
+        <source>ARRAY must be 0 (grid), 1 (clusters) or 2 (balanced).</source>
+        <translation>ARRAY debe ser 0 (cuadrícula), 1 (conglomerados) o 2 (equilibrado).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="123"/>
+        <source>The spacing rule must be 0 (independent occupancy sites) or 1 (spatial capture-recapture).</source>
+        <translation>La regla de separación debe ser 0 (sitios de ocupación independientes) o 1 (captura-recaptura espacial).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="128"/>
+        <source>{name} must be 0 or a positive whole number; it is {value}.</source>
+        <translation>{name} debe ser 0 o un número entero positivo; es {value}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="132"/>
+        <source>HOME_RANGE, SPACING and MIN_SPACING must be 0 or more.</source>
+        <translation>HOME_RANGE, SPACING y MIN_SPACING deben ser 0 o más.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="135"/>
+        <source>Give the species' home range (HOME_RANGE, km²) or a station spacing (SPACING, m): the spacing is taken from one of them.</source>
+        <translation>Indique el ámbito hogareño de la especie (HOME_RANGE, km²) o una separación entre estaciones (SPACING, m): la separación se obtiene de uno de los dos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="139"/>
+        <source>N_STATIONS must be at least 1 for clusters and balanced stations (0 means &apos;fill the frame&apos; for the grid only).</source>
+        <translation>N_STATIONS debe ser al menos 1 para los conglomerados y las estaciones equilibradas (0 significa «llenar el marco» solo para la cuadrícula).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="143"/>
+        <source>CLUSTER_SIZE must be at least 2 stations per cluster.</source>
+        <translation>CLUSTER_SIZE debe ser al menos 2 estaciones por conglomerado.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="147"/>
+        <source>MIN_SPACING ({min_spacing:g} m) is larger than the station spacing ({spacing:.0f} m): stations of the array would break it. Lower MIN_SPACING or raise SPACING.</source>
+        <translation>MIN_SPACING ({min_spacing:g} m) es mayor que la separación entre estaciones ({spacing:.0f} m): las estaciones del dispositivo no la cumplirían. Baje MIN_SPACING o aumente SPACING.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="239"/>
+        <source>N_STATIONS = {n} is fewer than {minimum} per stratum for {h} strata; every stratum gets {minimum} ({total} stations).</source>
+        <translation>N_STATIONS = {n} es menos de {minimum} por estrato para {h} estratos; cada estrato recibe {minimum} ({total} estaciones).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="271"/>
+        <source>Only {fit} grid stations at {spacing:.0f} m fit in the frame; {n} were asked for. Ask for fewer stations (0 takes every grid point), or lower the spacing.</source>
+        <translation>Solo caben {fit} estaciones de cuadrícula a {spacing:.0f} m en el marco; se pidieron {n}. Pida menos estaciones (0 toma todos los puntos de la cuadrícula) o reduzca la separación.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="312"/>
+        <source>A cluster of {k} stations {spacing:.0f} m apart (radius {radius:.0f} m) does not fit wholly in stratum {key}. Use smaller clusters, a smaller spacing, or the balanced array.</source>
+        <translation>Un conglomerado de {k} estaciones separadas {spacing:.0f} m (radio {radius:.0f} m) no cabe por completo en el estrato {key}. Use conglomerados más pequeños, una separación menor o el dispositivo equilibrado.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="312"/>
+        <source>A cluster of {k} stations {spacing:.0f} m apart (radius {radius:.0f} m) does not fit wholly in the frame. Use smaller clusters, a smaller spacing, or the balanced array.</source>
+        <translation>Un conglomerado de {k} estaciones separadas {spacing:.0f} m (radio {radius:.0f} m) no cabe por completo en el marco. Use conglomerados más pequeños, una separación menor o el dispositivo equilibrado.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="331"/>
+        <source>{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in stratum {key}: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer, or lower the spacing.</source>
+        <translation>{wanted} estaciones (principales y de reserva) separadas al menos {distance:.0f} m no caben en el estrato {key}: caben como mucho unas {fit} (una red hexagonal; las disposiciones aleatorias se llenan mucho antes). Pida menos o reduzca la separación.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="335"/>
+        <source>{wanted} stations (primaries and reserves) at least {distance:.0f} m apart do not fit in the frame: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer, or lower the spacing.</source>
+        <translation>{wanted} estaciones (principales y de reserva) separadas al menos {distance:.0f} m no caben en el marco: caben como mucho unas {fit} (una red hexagonal; las disposiciones aleatorias se llenan mucho antes). Pida menos o reduzca la separación.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="339"/>
+        <source>{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do not fit in stratum {key}: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer stations, smaller clusters, or a smaller spacing.</source>
+        <translation>{wanted} conglomerados (principales y de reserva) con centros separados al menos {distance:.0f} m no caben en el estrato {key}: caben como mucho unos {fit} (una red hexagonal; las disposiciones aleatorias se llenan mucho antes). Pida menos estaciones, conglomerados más pequeños o una separación menor.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="344"/>
+        <source>{wanted} clusters (primaries and reserves) with centres at least {distance:.0f} m apart do not fit in the frame: at most about {fit} fit there (a hexagonal lattice; random layouts fill up well before that). Ask for fewer stations, smaller clusters, or a smaller spacing.</source>
+        <translation>{wanted} conglomerados (principales y de reserva) con centros separados al menos {distance:.0f} m no caben en el marco: caben como mucho unos {fit} (una red hexagonal; las disposiciones aleatorias se llenan mucho antes). Pida menos estaciones, conglomerados más pequeños o una separación menor.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="417"/>
+        <source>The array's primary stations cover {n:.1f} home ranges (convex hull {area:.2f} km² against a home range of {hr:g} km²): an array smaller than about {few:g} home ranges cannot estimate density (spatial capture-recapture). Spread the stations wider.</source>
+        <translation>Las estaciones principales del dispositivo cubren {n:.1f} ámbitos hogareños (envolvente convexa de {area:.2f} km² frente a un ámbito hogareño de {hr:g} km²): un dispositivo menor que unos {few:g} ámbitos hogareños no permite estimar la densidad (captura-recaptura espacial). Separe más las estaciones.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="443"/>
+        <source>The frame gets no station.</source>
+        <translation>El marco no recibe ninguna estación.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="443"/>
+        <source>Stratum {key} gets no station.</source>
+        <translation>El estrato {key} no recibe ninguna estación.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="448"/>
+        <source>No station could be placed in the frame at a spacing of {spacing:.0f} m. Lower the spacing or check the frame.</source>
+        <translation>No se pudo colocar ninguna estación en el marco con una separación de {spacing:.0f} m. Reduzca la separación o compruebe el marco.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/stations.py" line="508"/>
+        <source>The working day must be longer than 0 hours.</source>
+        <translation>La jornada de trabajo debe durar más de 0 horas.</translation>
+    </message>
 </context>
 <context>
     <name>PlotwisePlugin</name>
@@ -4091,17 +4589,17 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
 <context>
     <name>PlotwiseProvider</name>
     <message>
-        <location filename="../processing/provider.py" line="90"/>
+        <location filename="../processing/provider.py" line="96"/>
         <source>Plotwise</source>
         <translation>Plotwise</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="93"/>
+        <location filename="../processing/provider.py" line="99"/>
         <source>Plotwise survey design and estimation</source>
         <translation>Plotwise: diseño de muestreos y estimación</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="113"/>
+        <location filename="../processing/provider.py" line="119"/>
         <source>The example model {path} could not be read.</source>
         <translation>No se pudo leer el modelo de ejemplo {path}.</translation>
     </message>
@@ -4124,12 +4622,12 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
         <translation>Entradas y parámetros</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="142"/>
+        <location filename="../processing/report/occupancy.py" line="153"/>
         <source>Item</source>
         <translation>Elemento</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="142"/>
+        <location filename="../processing/report/occupancy.py" line="153"/>
         <source>Value</source>
         <translation>Valor</translation>
     </message>
@@ -4163,6 +4661,706 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
         <source>Method references</source>
         <translation>Referencias de los métodos</translation>
     </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="33"/>
+        <source>converged</source>
+        <translation>convergido</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="34"/>
+        <source>at the boundary</source>
+        <translation>en el límite</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="35"/>
+        <source>not fitted</source>
+        <translation>no ajustado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="77"/>
+        <source>Occupancy from repeat visits</source>
+        <translation>Ocupación a partir de visitas repetidas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>occupancy ψ (share of sites used)</source>
+        <translation>ocupación ψ (proporción de sitios usados)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>{level} interval of ψ</source>
+        <translation>intervalo al {level} de ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>detection p per survey</source>
+        <translation>detección p por visita</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>naive occupancy (detected at least once)</source>
+        <translation>ocupación ingenua (especie detectada al menos una vez)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="80"/>
+        <source>sites used</source>
+        <translation>sitios usados</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="89"/>
+        <source>Model: {model}. ψ is the mean fitted occupancy probability of the sites used; with covariates it varies by site (field psi).</source>
+        <translation>Modelo: {model}. ψ es la media de las probabilidades de ocupación ajustadas de los sitios usados; con covariables varía según el sitio (campo psi).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="101"/>
+        <source>Map of psi_cond</source>
+        <translation>Mapa de psi_cond</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="102"/>
+        <source>Sites shaded by psi_cond, the probability that the site is occupied given its detection history (1 where the species was detected)</source>
+        <translation>Sitios sombreados según psi_cond, la probabilidad de que el sitio esté ocupado dado su historial de detección (1 donde se detectó la especie)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="90"/>
+        <source>Method</source>
+        <translation>Método</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="107"/>
+        <source>Single-season occupancy model (MacKenzie et al. 2002): a site is occupied with probability ψ and, when occupied, each survey detects the species with probability p; logit ψ and logit p are linear in the covariates. Maximum likelihood with scipy (BFGS, then Newton steps); standard errors from the observed information (Louis 1982), intervals on the logit scale. Covariates are centred and scaled for the fit; the table gives their coefficients in the covariates' own units. Occasions not surveyed (NULL) are left out of a site's likelihood.</source>
+        <translation>Modelo de ocupación de una temporada (MacKenzie et al. 2002): un sitio está ocupado con probabilidad ψ y, si lo está, cada visita detecta la especie con probabilidad p; logit ψ y logit p son lineales en las covariables. Máxima verosimilitud con scipy (BFGS y luego pasos de Newton); errores estándar a partir de la información observada (Louis 1982), intervalos en la escala logit. Las covariables se centran y escalan para el ajuste; la tabla da sus coeficientes en las unidades propias de las covariables. Las ocasiones no muestreadas (NULL) se excluyen de la verosimilitud de un sitio.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="121"/>
+        <source>(none)</source>
+        <translation>(ninguno)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="123"/>
+        <source>Sites (SITES)</source>
+        <translation>Sitios (SITES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="124"/>
+        <source>Site id field (SITE_ID_FIELD)</source>
+        <translation>Campo identificador de los sitios (SITE_ID_FIELD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="125"/>
+        <source>(none: feature ids)</source>
+        <translation>(ninguno: identificadores de entidad)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="126"/>
+        <source>History fields (HISTORY_FIELDS)</source>
+        <translation>Campos del historial (HISTORY_FIELDS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="127"/>
+        <source>Covariates of ψ (PSI_COVARIATES)</source>
+        <translation>Covariables de ψ (PSI_COVARIATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="128"/>
+        <source>Covariates of p (P_COVARIATES)</source>
+        <translation>Covariables de p (P_COVARIATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="130"/>
+        <source>Effort fields (EFFORT_FIELDS)</source>
+        <translation>Campos de esfuerzo (EFFORT_FIELDS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="131"/>
+        <source>Models compared (MODELS)</source>
+        <translation>Modelos comparados (MODELS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="132"/>
+        <source>(the constant model only)</source>
+        <translation>(solo el modelo constante)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="133"/>
+        <source>Confidence level (CONFIDENCE)</source>
+        <translation>Nivel de confianza (CONFIDENCE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="134"/>
+        <source>Target SE of ψ (TARGET_SE)</source>
+        <translation>Error estándar objetivo de ψ (TARGET_SE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="136"/>
+        <source>Goodness-of-fit replicates (GOF_REPLICATES)</source>
+        <translation>Réplicas de la prueba de bondad de ajuste (GOF_REPLICATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="120"/>
+        <source>Seed (SEED)</source>
+        <translation>Semilla (SEED)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="139"/>
+        <source>not used (no bootstrap)</source>
+        <translation>no se usa (sin bootstrap)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="140"/>
+        <source>CRS</source>
+        <translation>SRC</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="152"/>
+        <source>Detection histories</source>
+        <translation>Historiales de detección</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites in the layer</source>
+        <translation>sitios en la capa</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites used (at least one surveyed occasion)</source>
+        <translation>sitios usados (al menos una ocasión muestreada)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites left out (no surveyed occasion)</source>
+        <translation>sitios dejados fuera (ninguna ocasión muestreada)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>occasions</source>
+        <translation>ocasiones</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>surveys (site-occasions surveyed)</source>
+        <translation>visitas (pares sitio-ocasión muestreados)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>site-occasions not surveyed (NULL)</source>
+        <translation>pares sitio-ocasión no muestreados (NULL)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>sites with a detection</source>
+        <translation>sitios con alguna detección</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="153"/>
+        <source>detections</source>
+        <translation>detecciones</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="163"/>
+        <source>{n} detections</source>
+        <translation>{n} detecciones</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="165"/>
+        <source>sites</source>
+        <translation>sitios</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="165"/>
+        <source>Sites by their number of detections</source>
+        <translation>Sitios según su número de detecciones</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="167"/>
+        <source>History (1 detected, 0 not, - not surveyed)</source>
+        <translation>Historial (1 detectada, 0 no, - no muestreado)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="167"/>
+        <source>Sites</source>
+        <translation>Sitios</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="167"/>
+        <source>The most frequent detection histories</source>
+        <translation>Los historiales de detección más frecuentes</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="174"/>
+        <source>Estimates</source>
+        <translation>Estimaciones</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Parameter</source>
+        <translation>Parámetro</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Estimate</source>
+        <translation>Estimación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>SE</source>
+        <translation>EE</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Lower ({level})</source>
+        <translation>Inferior ({level})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="178"/>
+        <source>Upper ({level})</source>
+        <translation>Superior ({level})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="182"/>
+        <source>Rows logit_psi:… and logit_p:… are coefficients on the logit scale (const: the logit at covariates 0; a slope per unit of its covariate). Rows psi and p are the mean fitted probabilities, with delta-method SEs and intervals on the logit scale.</source>
+        <translation>Las filas logit_psi:… y logit_p:… son coeficientes en la escala logit (const: el logit con las covariables en 0; una pendiente por unidad de su covariable). Las filas psi y p son las probabilidades ajustadas medias, con errores estándar por el método delta e intervalos en la escala logit.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="188"/>
+        <source>Parameters at the boundary of their range: {names}. They get no SE or interval; the other estimates are conditional on them.</source>
+        <translation>Parámetros en el límite de su rango: {names}. No tienen error estándar ni intervalo; las demás estimaciones están condicionadas a ellos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="195"/>
+        <source>Model comparison</source>
+        <translation>Comparación de modelos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>Model</source>
+        <translation>Modelo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>Parameters</source>
+        <translation>Parámetros</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>log L</source>
+        <translation>log L</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>AIC</source>
+        <translation>AIC</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>AICc</source>
+        <translation>AICc</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>ΔAIC</source>
+        <translation>ΔAIC</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>AIC weight</source>
+        <translation>Peso AIC</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>ψ</source>
+        <translation>ψ</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>p</source>
+        <translation>p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="200"/>
+        <source>Fit</source>
+        <translation>Ajuste</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="209"/>
+        <source>The model with the lowest AIC is {model}, {d} AIC units below the model reported above. Consider running again with its covariates.</source>
+        <translation>El modelo con el AIC más bajo es {model}, {d} unidades de AIC por debajo del modelo presentado arriba. Considere volver a ejecutar con sus covariables.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="218"/>
+        <source>Cumulative detection</source>
+        <translation>Detección acumulada</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="221"/>
+        <source>1 − (1 − p)^K</source>
+        <translation>1 − (1 − p)^K</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="223"/>
+        <source>lower limit</source>
+        <translation>límite inferior</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="224"/>
+        <source>upper limit</source>
+        <translation>límite superior</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="226"/>
+        <source>occasions K</source>
+        <translation>ocasiones K</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="226"/>
+        <source>cumulative detection</source>
+        <translation>detección acumulada</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="228"/>
+        <source>Chance of at least one detection at an occupied site after K surveys, at the mean p</source>
+        <translation>Probabilidad de al menos una detección en un sitio ocupado tras K visitas, con la p media</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="234"/>
+        <source>Design advice</source>
+        <translation>Recomendaciones de diseño</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="235"/>
+        <source>With p = {p} per survey, {k} occasions give a cumulative detection of {c}; {k95} occasions are needed for 0.95.</source>
+        <translation>Con p = {p} por visita, {k} ocasiones dan una detección acumulada de {c}; se necesitan {k95} ocasiones para 0.95.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="241"/>
+        <source>For an SE of ψ of {se} with {k} occasions per site, about {s} sites are needed (asymptotic variance of MacKenzie &amp; Royle 2005 at ψ = {psi} and p = {p}: s·Var(ψ̂) = {v}). The fewest surveys (sites × occasions) for that SE come with {kb} occasions per site and about {sb} sites.</source>
+        <translation>Para un error estándar de ψ de {se} con {k} ocasiones por sitio, se necesitan unos {s} sitios (varianza asintótica de MacKenzie &amp; Royle 2005 con ψ = {psi} y p = {p}: s·Var(ψ̂) = {v}). El menor número de visitas (sitios × ocasiones) para ese error estándar se logra con {kb} ocasiones por sitio y unos {sb} sitios.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="250"/>
+        <source>With covariates the advice uses the mean ψ and p of the model (the constant-model formula): a guide, not an exact figure.</source>
+        <translation>Con covariables, las recomendaciones usan la ψ y la p medias del modelo (la fórmula del modelo constante): una orientación, no una cifra exacta.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="257"/>
+        <source>Goodness of fit</source>
+        <translation>Bondad de ajuste</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="258"/>
+        <source>Pearson's χ² of the detection-history frequencies against the model's expected frequencies (sites grouped by their surveyed occasions): {x}. Parametric bootstrap (MacKenzie &amp; Bailey 2004) of {b} data sets simulated from the fitted model: mean χ² {m}, p = {p}; ĉ = {c}.</source>
+        <translation>χ² de Pearson de las frecuencias de los historiales de detección frente a las frecuencias esperadas del modelo (sitios agrupados según sus ocasiones muestreadas): {x}. Bootstrap paramétrico (MacKenzie &amp; Bailey 2004) de {b} conjuntos de datos simulados a partir del modelo ajustado: χ² medio {m}, p = {p}; ĉ = {c}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="265"/>
+        <source>ĉ near 1: the model fits; above 1: the histories vary more than the model allows (multiply the variances by ĉ); well below 1 is usually harmless.</source>
+        <translation>ĉ cercano a 1: el modelo se ajusta; por encima de 1: los historiales varían más de lo que el modelo permite (multiplique las varianzas por ĉ); muy por debajo de 1 suele ser inofensivo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/occupancy.py" line="282"/>
+        <source>{lo} to {hi}</source>
+        <translation>{lo} a {hi}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="29"/>
+        <source>grid</source>
+        <translation>cuadrícula</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="29"/>
+        <source>clusters</source>
+        <translation>conglomerados</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="29"/>
+        <source>balanced</source>
+        <translation>equilibrado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="34"/>
+        <source>independent occupancy sites (one home-range diameter apart)</source>
+        <translation>sitios de ocupación independientes (separados un diámetro de ámbito hogareño)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="34"/>
+        <source>spatial capture-recapture (2σ apart)</source>
+        <translation>captura-recaptura espacial (separación de 2σ)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="66"/>
+        <source>Camera-trap and recorder stations</source>
+        <translation>Estaciones de cámaras trampa y grabadoras</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="252"/>
+        <source>primary stations</source>
+        <translation>estaciones principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="252"/>
+        <source>reserve stations</source>
+        <translation>estaciones de reserva</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="70"/>
+        <source>spacing used (m)</source>
+        <translation>separación usada (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="70"/>
+        <source>array</source>
+        <translation>dispositivo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="81"/>
+        <source>Replacing stations in the field</source>
+        <translation>Sustituir estaciones en el terreno</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="82"/>
+        <source>A primary station that cannot be set (no safe access, no permission, flooded, ...) is replaced by the next unused reserve station of its stratum, in draw order (draw_ord); for clusters, a whole cluster by the next reserve cluster. Record the primary as not set and why; never move a station to a more convenient place.</source>
+        <translation>Una estación principal que no se puede instalar (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente estación de reserva no usada de su estrato, en orden de sorteo (draw_ord); en los conglomerados, un conglomerado entero se sustituye por el siguiente conglomerado de reserva. Registre la principal como no instalada y el motivo; nunca traslade una estación a un lugar más cómodo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="87"/>
+        <source>Map</source>
+        <translation>Mapa</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="88"/>
+        <source>Strata (filled), primary stations (dark) and reserve stations (light)</source>
+        <translation>Estratos (rellenos), estaciones principales (oscuras) y estaciones de reserva (claras)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="98"/>
+        <source>(not given)</source>
+        <translation>(no indicado)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="100"/>
+        <source>Frame (FRAME)</source>
+        <translation>Marco (FRAME)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="101"/>
+        <source>Stratum field (STRATUM_FIELD)</source>
+        <translation>Campo de estrato (STRATUM_FIELD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="102"/>
+        <source>(none: one stratum)</source>
+        <translation>(ninguno: un solo estrato)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="103"/>
+        <source>Stations (N_STATIONS)</source>
+        <translation>Estaciones (N_STATIONS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="104"/>
+        <source>0: every grid point</source>
+        <translation>0: todos los puntos de la cuadrícula</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="105"/>
+        <source>Array (ARRAY)</source>
+        <translation>Dispositivo (ARRAY)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="107"/>
+        <source>Home range (HOME_RANGE, km²)</source>
+        <translation>Ámbito hogareño (HOME_RANGE, km²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="109"/>
+        <source>Spacing (SPACING, m)</source>
+        <translation>Separación (SPACING, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="110"/>
+        <source>from the home range</source>
+        <translation>a partir del ámbito hogareño</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="111"/>
+        <source>Spacing rule (SPACING_RULE)</source>
+        <translation>Regla de separación (SPACING_RULE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="113"/>
+        <source>Stations per cluster (CLUSTER_SIZE)</source>
+        <translation>Estaciones por conglomerado (CLUSTER_SIZE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="114"/>
+        <source>(not used)</source>
+        <translation>(no se usa)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="115"/>
+        <source>Minimum spacing (MIN_SPACING, m)</source>
+        <translation>Separación mínima (MIN_SPACING, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="116"/>
+        <source>Reserves per stratum (RESERVE)</source>
+        <translation>Reservas por estrato (RESERVE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="117"/>
+        <source>Service time per station (SERVICE_HOURS, hours)</source>
+        <translation>Tiempo de revisión por estación (SERVICE_HOURS, horas)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="119"/>
+        <source>Working day (WORKDAY_HOURS, hours)</source>
+        <translation>Jornada de trabajo (WORKDAY_HOURS, horas)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="121"/>
+        <source>CRS of the computation and the output</source>
+        <translation>SRC del cálculo y de la salida</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="126"/>
+        <source>Spacing</source>
+        <translation>Separación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="129"/>
+        <source>Home range {hr} km², taken as the 95% range of a circular bivariate normal distribution of the animal's positions: σ = √(HR/π) / 2.448 = {sigma} m (2.448 = √(−2 ln 0.05)); home-range diameter {diameter} m.</source>
+        <translation>Ámbito hogareño de {hr} km², tomado como el área del 95 % de una distribución normal bivariada circular de las posiciones del animal: σ = √(HR/π) / 2.448 = {sigma} m (2.448 = √(−2 ln 0.05)); diámetro del ámbito hogareño {diameter} m.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="136"/>
+        <source>Rule used: spatial capture-recapture, stations about 2σ = {s} m apart, so that an animal meets several stations (Sollmann et al. 2012; Sun et al. 2014).</source>
+        <translation>Regla aplicada: captura-recaptura espacial, estaciones separadas unos 2σ = {s} m, para que un animal encuentre varias estaciones (Sollmann et al. 2012; Sun et al. 2014).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="141"/>
+        <source>Rule used: independent occupancy sites, stations at least one home-range diameter = {s} m apart, so that one animal rarely uses two sites (common practice).</source>
+        <translation>Regla aplicada: sitios de ocupación independientes, estaciones separadas al menos un diámetro de ámbito hogareño = {s} m, para que un mismo animal rara vez use dos sitios (práctica habitual).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="146"/>
+        <source>Spacing given by the user: {s} m (no rule applied).</source>
+        <translation>Separación indicada por el usuario: {s} m (no se aplica ninguna regla).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="149"/>
+        <source>For comparison: 2σ = {scr} m (spatial capture-recapture); one home-range diameter = {occ} m (independent occupancy sites).</source>
+        <translation>Para comparar: 2σ = {scr} m (captura-recaptura espacial); un diámetro de ámbito hogareño = {occ} m (sitios de ocupación independientes).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="158"/>
+        <source>Array extent</source>
+        <translation>Extensión del dispositivo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="159"/>
+        <source>The primary stations span {span} km (largest distance between two of them); their convex hull covers {area} km².</source>
+        <translation>Las estaciones principales abarcan {span} km (la mayor distancia entre dos de ellas); su envolvente convexa cubre {area} km².</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="164"/>
+        <source>That is {n} home ranges of {hr} km², and {d} home-range diameters across.</source>
+        <translation>Eso equivale a {n} ámbitos hogareños de {hr} km² y a {d} diámetros de ámbito hogareño de un extremo a otro.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="169"/>
+        <source>An array smaller than a few home ranges cannot estimate density by spatial capture-recapture: too few animals have their range inside it, and movement cannot be separated from density. Spread the stations wider or add stations.</source>
+        <translation>Un dispositivo menor que unos pocos ámbitos hogareños no permite estimar la densidad por captura-recaptura espacial: muy pocos animales tienen su ámbito dentro de él, y el movimiento no puede separarse de la densidad. Separe más las estaciones o añada estaciones.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="177"/>
+        <source>Field effort</source>
+        <translation>Esfuerzo de campo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="178"/>
+        <source>With {h} hours per station visit (travel included) and a working day of {day} hours, one team services {n} stations per team-day; one round of every primary station takes {days} team-days.</source>
+        <translation>Con {h} horas por visita a una estación (desplazamiento incluido) y una jornada de trabajo de {day} horas, un equipo revisa {n} estaciones por jornada de equipo; una ronda por todas las estaciones principales requiere {days} jornadas de equipo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="186"/>
+        <source>A cluster of {k} stations takes {c} hours: one team can service a cluster in a day.</source>
+        <translation>Un conglomerado de {k} estaciones requiere {c} horas: un equipo puede revisar un conglomerado en un día.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="189"/>
+        <source>A cluster of {k} stations takes {c} hours: more than one team-day; use smaller clusters or two teams.</source>
+        <translation>Un conglomerado de {k} estaciones requiere {c} horas: más de una jornada de equipo; use conglomerados más pequeños o dos equipos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="196"/>
+        <source>Stations per stratum</source>
+        <translation>Estaciones por estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="198"/>
+        <source>frame</source>
+        <translation>marco</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Stratum</source>
+        <translation>Estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Area (ha)</source>
+        <translation>Área (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Stations asked</source>
+        <translation>Estaciones pedidas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Primary</source>
+        <translation>Principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Reserve</source>
+        <translation>Reservas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="201"/>
+        <source>Clusters</source>
+        <translation>Conglomerados</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="210"/>
+        <source>Grid: one square lattice over the frame, aligned with grid north, with a uniform random start. With N_STATIONS = 0 every lattice point in the frame is a station (reserves: the lattice's cell centres in random order, which sit s/√2 from the nearest primaries); otherwise the N lattice points nearest a uniform random point of the frame form a compact block (reserves: the next nearest lattice points).</source>
+        <translation>Cuadrícula: una sola red cuadrada sobre el marco, alineada con el norte de la cuadrícula, con un inicio aleatorio uniforme. Con N_STATIONS = 0, cada punto de la red dentro del marco es una estación (reservas: los centros de las celdas de la red en orden aleatorio, situados a s/√2 de las principales más cercanas); si no, los N puntos de la red más cercanos a un punto aleatorio uniforme del marco forman un bloque compacto (reservas: los siguientes puntos de la red más cercanos).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="217"/>
+        <source>Clusters: the stations of a cluster are the k points of a square lattice of the spacing nearest its centre; the centres are drawn by balanced acceptance sampling (Robertson et al. 2013) from each stratum shrunk by the cluster&apos;s radius, so that every station lies in its stratum, and at least twice the radius plus the spacing apart. Reserve clusters are the next points of the same sequence.</source>
+        <translation>Conglomerados: las estaciones de un conglomerado son los k puntos de una red cuadrada con la separación indicada más cercanos a su centro; los centros se sortean por muestreo por aceptación equilibrada (Robertson et al. 2013) en cada estrato reducido en el radio del conglomerado, para que cada estación quede dentro de su estrato, y separados al menos el doble del radio más la separación. Los conglomerados de reserva son los puntos siguientes de la misma secuencia.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="224"/>
+        <source>Balanced: single stations by balanced acceptance sampling (Robertson et al. 2013), each at least the spacing from every other (simple sequential inhibition); reserves are the next accepted points of the same sequence.</source>
+        <translation>Equilibrado: estaciones individuales por muestreo por aceptación equilibrada (Robertson et al. 2013), cada una al menos a la separación indicada de todas las demás (inhibición secuencial simple); las reservas son los siguientes puntos aceptados de la misma secuencia.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="230"/>
+        <source>MIN_SPACING = {d} m holds between all stations of the layout.</source>
+        <translation>MIN_SPACING = {d} m se cumple entre todas las estaciones de la disposición.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="246"/>
+        <source>the frame</source>
+        <translation>el marco</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stations.py" line="247"/>
+        <source>stratum {key}</source>
+        <translation>estrato {key}</translation>
+    </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
@@ -4195,6 +5393,16 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
         <location filename="../processing/styles.py" line="405"/>
         <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
         <translation>No se pudo aplicar el estilo a la capa {name} ({error}); conserva el estilo predeterminado.</translation>
+    </message>
+    <message>
+        <location filename="../processing/styles.py" line="457"/>
+        <source>left out (no surveyed occasion)</source>
+        <translation>dejado fuera (ninguna ocasión muestreada)</translation>
+    </message>
+    <message>
+        <location filename="../processing/styles.py" line="459"/>
+        <source>Occupancy given the detections (psi_cond)</source>
+        <translation>Ocupación dadas las detecciones (psi_cond)</translation>
     </message>
 </context>
 <context>
@@ -4248,6 +5456,247 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
         <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
+    </message>
+</context>
+<context>
+    <name>SimulateDetections</name>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="38"/>
+        <source>Simulate detections at stations</source>
+        <translation>Simular detecciones en las estaciones</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="41"/>
+        <source>&lt;p&gt;Fills detection histories of camera-trap or recorder stations from a simulated population, for training, demonstrations and tests of the occupancy analysis. Real surveys type the detections in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Stations&lt;/b&gt;: points (for example from the stations step).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt; and their &lt;b&gt;group field&lt;/b&gt; (default group_id, as the demo reserve writes it): a group sits at the mean position of its members; without a group field each animal is a group.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Occasions&lt;/b&gt;: the number of survey occasions (days, weeks).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection at a group&lt;/b&gt; and &lt;b&gt;σ (m)&lt;/b&gt;: on each occasion a station detects the species with probability p = p_max·exp(−d²/(2σ²)), d the distance to the nearest group, independently between occasions.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Share not surveyed&lt;/b&gt;: the share of station-occasions left empty (NULL), as a camera that failed.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the stations with det_01, det_02, … (1 detected, 0 not, NULL not surveyed), dist_grp (m to the nearest group) and p_true (the per-occasion detection probability). The input is not changed.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Rellena los historiales de detección de estaciones de cámaras trampa o grabadoras a partir de una población simulada, para formación, demostraciones y pruebas del análisis de ocupación. En un muestreo real las detecciones se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Estaciones&lt;/b&gt;: puntos (por ejemplo, del paso de estaciones).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt; y su &lt;b&gt;campo de grupo&lt;/b&gt; (group_id por defecto, como lo escribe la reserva de demostración): un grupo se sitúa en la posición media de sus miembros; sin campo de grupo, cada animal es un grupo.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Ocasiones&lt;/b&gt;: el número de ocasiones de muestreo (días, semanas).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detección en la posición de un grupo&lt;/b&gt; y &lt;b&gt;σ (m)&lt;/b&gt;: en cada ocasión, una estación detecta la especie con probabilidad p = p_max·exp(−d²/(2σ²)), siendo d la distancia al grupo más cercano, de forma independiente entre ocasiones.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Proporción no muestreada&lt;/b&gt;: la proporción de pares estación-ocasión que quedan vacíos (NULL), como una cámara trampa que falló.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las estaciones con det_01, det_02, … (1 detectada, 0 no, NULL no muestreada), dist_grp (m hasta el grupo más cercano) y p_true (la probabilidad de detección por ocasión). La entrada no se modifica.&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="60"/>
+        <source>Stations</source>
+        <translation>Estaciones</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="62"/>
+        <source>Animal points</source>
+        <translation>Puntos de animales</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="64"/>
+        <source>Group field of the animals (empty: each animal is a group)</source>
+        <translation>Campo de grupo de los animales (vacío: cada animal es un grupo)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="67"/>
+        <source>Occasions</source>
+        <translation>Ocasiones</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="70"/>
+        <source>Detection probability per occasion at a group</source>
+        <translation>Probabilidad de detección por ocasión en la posición de un grupo</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="73"/>
+        <source>σ of the decline with distance (m)</source>
+        <translation>σ del descenso con la distancia (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="76"/>
+        <source>Share of occasions not surveyed</source>
+        <translation>Proporción de ocasiones no muestreadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="80"/>
+        <source>Stations with detection histories</source>
+        <translation>Estaciones con historiales de detección</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatedetections.py" line="109"/>
+        <source>{n} stations, {k} occasions: the species was detected at {d} stations ({g} animal groups).</source>
+        <translation>{n} estaciones, {k} ocasiones: la especie se detectó en {d} estaciones ({g} grupos de animales).</translation>
+    </message>
+</context>
+<context>
+    <name>Stations</name>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="48"/>
+        <source>Lay out camera-trap or recorder stations</source>
+        <translation>Disponer estaciones de cámaras trampa o grabadoras</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="51"/>
+        <source>Places camera-trap or acoustic-recorder stations over a sampling frame (optionally by stratum), spaced from the species' home range, with reserve stations and GPS waypoints.
+
+Spacing: from the home range (km²), taken as the 95% range of a circular bivariate normal distribution of the animal's positions, σ = √(HR/π) / 2.448. Rule 0, independent occupancy sites: stations at least one home-range diameter 2√(HR/π) apart (common practice). Rule 1, spatial capture-recapture: stations about 2σ apart (Sollmann et al. 2012; Sun et al. 2014). A spacing (m) above 0 replaces the rule.
+
+Arrays:
+• Grid: one square lattice at the spacing over the frame, north-aligned, with a random start. Number of stations 0 takes every lattice point in the frame; a number above 0 takes that many lattice points nearest a random point of the frame (a compact block). Strata only label the stations.
+• Clusters: groups of CLUSTER_SIZE stations at the spacing (a small square lattice around a centre), the centres spatially balanced (Robertson et al. 2013) and far enough apart that neighbouring clusters keep the spacing; every station lies inside its stratum. Reserves are whole clusters.
+• Balanced: single spatially balanced stations, each at least the spacing from every other.
+The number of stations is split over the strata by area, at least 2 each (clusters: the stations of a stratum rounded up to whole clusters).
+
+Minimum spacing (m) holds between all stations. Reserves: per stratum, in draw order (draw_ord); a station that cannot be set is replaced by the next unused reserve of its stratum.
+Service time (hours per station visit, travel included; 0: not given) and the working day give the stations one team services per day, and the team-days for one round.
+
+Output fields: station, stratum, cluster, role (primary or reserve), draw_ord, lon/lat (WGS 84). The GPX file holds one waypoint per station, named by its id. The report compares the array's extent with the home range: an array smaller than a few home ranges cannot estimate density.
+
+Check every station's access and safety before fieldwork: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Coloca estaciones de cámaras trampa o grabadoras acústicas sobre un marco de muestreo (opcionalmente por estrato), separadas según el ámbito hogareño de la especie, con estaciones de reserva y puntos de paso GPS.
+
+Separación: a partir del ámbito hogareño (km²), tomado como el área del 95 % de una distribución normal bivariada circular de las posiciones del animal, σ = √(HR/π) / 2,448. Regla 0, sitios de ocupación independientes: estaciones separadas al menos un diámetro de ámbito hogareño 2√(HR/π) (práctica habitual). Regla 1, captura-recaptura espacial: estaciones separadas unos 2σ (Sollmann et al. 2012; Sun et al. 2014). Una separación (m) mayor que 0 sustituye a la regla.
+
+Dispositivos:
+• Cuadrícula: una sola red cuadrada con la separación indicada sobre el marco, orientada al norte, con un inicio aleatorio. Un número de estaciones de 0 toma todos los puntos de la red dentro del marco; un número mayor que 0 toma ese número de puntos de la red, los más cercanos a un punto aleatorio del marco (un bloque compacto). Los estratos solo etiquetan las estaciones.
+• Conglomerados: grupos de CLUSTER_SIZE estaciones con la separación indicada (una pequeña red cuadrada alrededor de un centro), con los centros espacialmente equilibrados (Robertson et al. 2013) y lo bastante alejados para que los conglomerados vecinos mantengan la separación; cada estación queda dentro de su estrato. Las reservas son conglomerados enteros.
+• Equilibrado: estaciones individuales espacialmente equilibradas, cada una al menos a la separación indicada de todas las demás.
+El número de estaciones se reparte entre los estratos según el área, al menos 2 por estrato (conglomerados: las estaciones de un estrato se redondean al alza a conglomerados enteros).
+
+La separación mínima (m) se cumple entre todas las estaciones. Reservas: por estrato, en orden de sorteo (draw_ord); una estación que no se puede instalar se sustituye por la siguiente reserva no usada de su estrato.
+El tiempo de revisión (horas por visita a una estación, desplazamiento incluido; 0: no indicado) y la jornada de trabajo dan las estaciones que un equipo revisa por día y las jornadas de equipo de una ronda.
+
+Campos de salida: station, stratum, cluster, role (primary o reserve), draw_ord, lon/lat (WGS 84). El archivo GPX contiene un punto de paso por estación, con el nombre de su identificador. El informe compara la extensión del dispositivo con el ámbito hogareño: un dispositivo menor que unos pocos ámbitos hogareños no permite estimar la densidad.
+
+Compruebe el acceso y la seguridad de cada estación antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="80"/>
+        <source>Sampling frame or strata</source>
+        <translation>Marco de muestreo o estratos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="82"/>
+        <source>Stratum field (empty: the frame is one stratum)</source>
+        <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="85"/>
+        <source>Number of stations (grid: 0 takes every grid point)</source>
+        <translation>Número de estaciones (cuadrícula: 0 toma todos los puntos de la cuadrícula)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Array</source>
+        <translation>Dispositivo</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Grid</source>
+        <translation>Cuadrícula</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Clusters</source>
+        <translation>Conglomerados</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <source>Balanced single stations</source>
+        <translation>Estaciones individuales equilibradas</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="91"/>
+        <source>Home range of the species (km²; 0: not given)</source>
+        <translation>Ámbito hogareño de la especie (km²; 0: no indicado)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="94"/>
+        <source>Station spacing (m; 0: from the home range)</source>
+        <translation>Separación entre estaciones (m; 0: a partir del ámbito hogareño)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <source>Spacing rule (when the spacing comes from the home range)</source>
+        <translation>Regla de separación (cuando la separación procede del ámbito hogareño)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <source>Independent occupancy sites: one home-range diameter</source>
+        <translation>Sitios de ocupación independientes: un diámetro de ámbito hogareño</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <source>Spatial capture-recapture: 2σ</source>
+        <translation>Captura-recaptura espacial: 2σ</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="101"/>
+        <source>Stations per cluster</source>
+        <translation>Estaciones por conglomerado</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="104"/>
+        <source>Minimum spacing between stations (m; 0: none)</source>
+        <translation>Separación mínima entre estaciones (m; 0: ninguna)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="107"/>
+        <source>Reserve stations per stratum (clusters: reserve clusters)</source>
+        <translation>Estaciones de reserva por estrato (conglomerados: conglomerados de reserva)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <source>Service time per station visit (hours, travel included; 0: not given)</source>
+        <translation>Tiempo de revisión por visita a una estación (horas, desplazamiento incluido; 0: no indicado)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <source>Working day of a field team (hours)</source>
+        <translation>Jornada de trabajo de un equipo de campo (horas)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="119"/>
+        <source>Stations</source>
+        <translation>Estaciones</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <source>Waypoints for GPS (GPX)</source>
+        <translation>Puntos de paso para GPS (GPX)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <source>GPX files (*.gpx)</source>
+        <translation>Archivos GPX (*.gpx)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <source>Station spacing used (m)</source>
+        <translation>Separación entre estaciones usada (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <source>σ of the home range (m)</source>
+        <translation>σ del ámbito hogareño (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <source>Number of primary stations</source>
+        <translation>Número de estaciones principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="137"/>
+        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
+        <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="166"/>
+        <source>Layer &apos;{layer}&apos;: {text}</source>
+        <translation>Capa «{layer}»: {text}</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="180"/>
+        <source>{n} waypoints written to {path}</source>
+        <translation>{n} puntos de paso escritos en {path}</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="181"/>
+        <source>{n} primary and {r} reserve stations, {s:.0f} m apart.</source>
+        <translation>{n} estaciones principales y {r} de reserva, separadas {s:.0f} m.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stations.py" line="199"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
 </context>
 <context>
