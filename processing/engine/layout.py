@@ -11,7 +11,10 @@ Steps (:func:`prepare_strata`, then :func:`draw_layout`):
 3. With ``inside``, unit centres are drawn from the stratum shrunk by the
    unit's circumscribing radius ``R`` (:func:`geometry.inward_buffer`), so every
    unit lies wholly in its stratum and every admissible centre has the same
-   chance. The effective frame area ``A'_h`` is the area of that region.
+   chance. Otherwise (the default) by plus sampling (:mod:`.edge`): centres
+   are drawn from the stratum grown by ``R``, and a unit counts only the part
+   inside its stratum. The effective frame area ``A'_h`` is the area of the
+   region the centres are drawn from.
 4. Centres are drawn by one of three designs:
 
    * simple random: independent uniform points (triangle cover, see
@@ -61,6 +64,7 @@ from shapely.ops import unary_union
 
 from . import geometry as geo
 from .crs import lonlat_transformer
+from .edge import INSIDE as EDGE_INSIDE, PLUS as EDGE_PLUS, design_record, plus_region
 from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .halton import balanced_acceptance_sample
 from .unit_shapes import (  # noqa: F401 (CIRCLE, SQUARE re-exported for the algorithm)
@@ -181,6 +185,9 @@ class LayoutSpec:
         Metres between unit centres over the whole layout (0: none).
     reserve : int
         Reserve units per stratum.
+    margin : float
+        Metres added to the plus-sampling reach (the design comparison adds the
+        half-diagonal of its surface cells); 0 for a real layout.
     """
 
     design: int = SPATIALLY_BALANCED
@@ -190,6 +197,7 @@ class LayoutSpec:
     inside: bool = False
     min_spacing: float = 0.0
     reserve: int = 0
+    margin: float = 0.0
 
     def __post_init__(self):
         if self.design not in (0, 1, 2):
@@ -219,6 +227,16 @@ class LayoutSpec:
     def unit_area(self):
         """Area of one unit (m²; NaN for transects and for points without a counting radius)."""
         return unit_area(self.shape, self.size)
+
+    @property
+    def edge(self):
+        """The edge protocol: :data:`edge.INSIDE` with ``inside``, else plus sampling."""
+        return EDGE_INSIDE if self.inside else EDGE_PLUS
+
+    @property
+    def reach(self):
+        """How far the region of the centres differs from the stratum (m): in by ``R``, or out by ``R + margin``."""
+        return self.radius if self.inside else self.radius + float(self.margin)
 
 
 @dataclass(frozen=True, eq=False)
@@ -301,6 +319,7 @@ class Layout:
     spec: LayoutSpec
     strata: tuple
     warnings: tuple = ()
+    design: tuple = ()  # per unit: the design record (edge.design_record), for the finite-population correction
 
     def __len__(self):
         return len(self.unit_id)
@@ -576,7 +595,7 @@ def prepare_strata(
     out = []
     radius = spec.radius if spec.inside else 0.0
     for key, label, g, area, n, ids in zip(keys, labels, merged, areas, counts, fids):
-        region = geo.inward_buffer(g, radius) if radius > 0 else g
+        region = geo.inward_buffer(g, radius) if radius > 0 else plus_region(g, 0.0 if spec.inside else spec.reach)
         eff = float(region.area) if not region.is_empty else 0.0
         if eff <= 0 and n + spec.reserve > 0:
             raise InputError(
@@ -949,7 +968,8 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
         width = max(3, len(str(m)))
         ids = tuple(f"{st.label}-{k:0{width}d}" for k in range(1, m + 1))
         roles = tuple([PRIMARY] * n_primary + [RESERVE] * (m - n_primary))
-        parts.append((st.key, ids, roles, centres, bearings, incl))
+        parts.append((st.key, ids, roles, centres, bearings, incl,
+                      design_record(spec.design, spec.min_spacing, spec.radius, spacing)))
     if not parts or sum(len(p[1]) for p in parts) == 0:
         centres = np.zeros((0, 2))
     unit_id = tuple(i for p in parts for i in p[1])
@@ -971,7 +991,7 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
         raise Cancelled("Cancelled while drawing the layout.")
     return Layout(
         unit_id, stratum, role, draw_ord.astype(int), centres, bearing, area_m2, incl_p, weight,
-        lon, lat, outlines, spec, tuple(summaries), tuple(warnings),
+        lon, lat, outlines, spec, tuple(summaries), tuple(warnings), tuple(p[6] for p in parts for _ in p[1]),
     )
 
 

@@ -81,14 +81,19 @@ def square_rings(centres, bearings, side):
 
 
 def circle_rings(centres, radius, segments=64):
-    """Closed rings (n, segments + 1, 2) of regular polygons inscribed in circles.
+    """Closed rings (n, segments + 1, 2) of regular polygons with the circle's area ``π r²``.
 
-    Vertices lie on the circle, so the ring lies inside the true circle.
+    A regular m-gon of circumradius ρ has the area ``(m/2) ρ² sin(2π/m)``; its
+    vertices lie at ``ρ = r √(2π / (m sin(2π/m)))``, just outside the circle, so
+    that the outline's area is the unit's ``area_m2`` and a count of the animals
+    inside the outline has the expectation of a count in the circle.
     """
     centres = np.asarray(centres, dtype=float).reshape(-1, 2)
-    t = np.linspace(0.0, 2.0 * np.pi, int(segments) + 1)
+    m = int(segments)
+    t = np.linspace(0.0, 2.0 * np.pi, m + 1)
     t[-1] = 0.0
-    ring = float(radius) * np.stack([np.cos(t), np.sin(t)], axis=1)
+    rho = float(radius) * np.sqrt(2.0 * np.pi / (m * np.sin(2.0 * np.pi / m)))
+    ring = rho * np.stack([np.cos(t), np.sin(t)], axis=1)
     return ring[None, :, :] + centres[:, None, :]
 
 

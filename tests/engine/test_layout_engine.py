@@ -95,9 +95,14 @@ def test_points_use_inclusion_density():
     np.testing.assert_allclose(lay.incl_p, 1e-5)
     assert lay.weight.sum() == pytest.approx(1e6)
     assert np.isnan(lay.area_m2).all()
-    # a point station with a counting radius counts in a circle: incl_p = n pi r^2 / A
+    # a point station with a counting radius counts in a circle: incl_p = n pi r^2 / A+, with plus sampling over
+    # the square grown by r, of area A + P r + pi r^2 (Steiner's formula for a convex set)
     lay = L.layout_units([box(0, 0, 1000, 1000)], L.LayoutSpec(size=10), np.random.default_rng(1), n_units=10)
-    np.testing.assert_allclose(lay.incl_p, 10 * np.pi * 100 / 1e6)
+    # (the region is drawn with its arcs just outside the circle, edge.plus_region: 0.12 % farther out)
+    np.testing.assert_allclose(lay.incl_p, 10 * np.pi * 100 / (1e6 + 4000 * 10 + np.pi * 100), rtol=1e-4)
+    inside = L.layout_units([box(0, 0, 1000, 1000)], L.LayoutSpec(size=10, inside=True), np.random.default_rng(1),
+                            n_units=10)
+    np.testing.assert_allclose(inside.incl_p, 10 * np.pi * 100 / 980 ** 2, rtol=1e-9)  # the square shrunk by r
 
 
 def test_lon_lat_match_pyproj():
