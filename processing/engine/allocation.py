@@ -37,6 +37,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
+from . import edge
 from .errors import QT_TRANSLATE_NOOP, InputError, message
 
 METHODS = ("equal", "proportional", "neyman", "optimal_cost")
@@ -130,6 +131,8 @@ class Allocation:
     comparison : tuple of MethodComparison
         Equal, proportional and Neyman at ``total``, with the same bounds.
     warnings : tuple of str
+    fpc : bool
+        Whether the precision carries the finite-population correction.
     """
 
     method: str
@@ -146,6 +149,7 @@ class Allocation:
     precision: Precision
     comparison: tuple
     warnings: tuple
+    fpc: bool = True
 
 
 # ----------------------------------------------------------------------------
@@ -381,8 +385,8 @@ def _listing(ids, mask):
     chosen = [ids[i] for i in np.flatnonzero(mask)]
     shown = ", ".join(str(x) for x in chosen[:20])
     if len(chosen) > 20:
-        return chosen, message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "{shown} and {more} more"), shown=shown, more=len(chosen) - 20)
+        return chosen, message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{shown} and {more} more"), shown=shown,
+                               more=len(chosen) - 20)
     return chosen, shown
 
 
@@ -428,9 +432,10 @@ def check_stratum_ids(values, feature_ids, layer, field):
     null = np.array([_is_null(v) for v in values], dtype=bool)
     if null.any():
         chosen, shown = _listing(feature_ids, null)
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Stratum field '{field}' of layer '{layer}' is empty (NULL) for feature(s) {ids}. Give every "
-            "stratum an id, or remove those features from the layer."), field=field, layer=layer, ids=shown),
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Stratum field '{field}' of layer '{layer}' is empty (NULL) for feature(s) {ids}. Give every "
+                "stratum an id, or remove those features from the layer."), field=field, layer=layer, ids=shown),
             ids=chosen)
     features = {}
     for value, fid in zip(values, feature_ids):
@@ -445,19 +450,21 @@ def check_stratum_ids(values, feature_ids, layer, field):
     _, shown = _listing(fids, np.ones(len(fids), dtype=bool))
     chosen = [fid for _, group in repeated for fid in group]
     if len(repeated) == 1:
-        text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Features {ids} of layer '{layer}' carry the same stratum id {value} in field '{field}', so each "
-            "would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; "
-            "then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
-            "feature its own id."), ids=shown, layer=layer, value=_shown_id(value), field=field)
+        text = message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Features {ids} of layer '{layer}' carry the same stratum id {value} in field '{field}', so each "
+                "would get its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; "
+                "then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
+                "feature its own id."), ids=shown, layer=layer, value=_shown_id(value), field=field)
     else:
         others = ", ".join(_shown_id(v) for v, _ in repeated[1:21]) + (" …" if len(repeated) > 21 else "")
-        text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Several stratum ids in field '{field}' of layer '{layer}' are carried by more than one feature: "
-            "{value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get "
-            "its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then "
-            "recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
-            "feature its own id."), field=field, layer=layer, value=_shown_id(value), ids=shown,
+        text = message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Several stratum ids in field '{field}' of layer '{layer}' are carried by more than one feature: "
+                "{value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get "
+                "its own allocation. Dissolve the strata by '{field}' first (the host's Dissolve tool; then "
+                "recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each "
+                "feature its own id."), field=field, layer=layer, value=_shown_id(value), ids=shown,
             more=len(repeated) - 1, others=others)
     raise InputError(text, ids=chosen)
 
@@ -472,13 +479,15 @@ def check_values(values, name, ids, allow_zero=False):
     if bad.any():
         chosen, shown = _listing(ids, bad)
         if allow_zero:
-            text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value "
-                "for every stratum, or remove those strata from the layer."), name=name, shown=shown)
+            text = message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value "
+                    "for every stratum, or remove those strata from the layer."), name=name, shown=shown)
         else:
-            text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value "
-                "for every stratum, or remove those strata from the layer."), name=name, shown=shown)
+            text = message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value "
+                    "for every stratum, or remove those strata from the layer."), name=name, shown=shown)
         raise InputError(text, ids=chosen)
     return v
 
@@ -486,6 +495,198 @@ def check_values(values, name, ids, allow_zero=False):
 # ----------------------------------------------------------------------------
 # the whole step
 # ----------------------------------------------------------------------------
+@dataclass(frozen=True, eq=False)
+class AllocationInput:
+    """The input of :func:`allocate` after :func:`_allocate_iv`, checked.
+
+    ``s``, ``m`` and ``c`` are the pilot SDs, means and costs (None when not
+    given); ``lower`` and ``upper`` the bounds per stratum; ``target`` the
+    target used (``"total"``, ``"budget"`` or ``"target_cv"``).
+    """
+
+    method: str
+    ids: tuple
+    area: np.ndarray
+    unit_area: float
+    s: object
+    m: object
+    c: object
+    fixed_cost: float
+    min_per_stratum: int
+    capacity: np.ndarray
+    lower: np.ndarray
+    upper: np.ndarray
+    target: str
+    total: object
+    budget: object
+    target_cv: object
+    fpc: bool
+    names: dict
+    warnings: tuple
+
+
+def _allocate_iv(areas, unit_area, method, total, budget, target_cv, sds, means, costs, fixed_cost, min_per_stratum,
+                 ids, names, fpc):
+    names = {**_DEFAULT_NAMES, **(names or {})}
+    if method not in METHODS:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Unknown allocation method {method!r}; use one of: {methods}."),
+                                 method=method, methods=", ".join(METHODS)))
+    n_strata = len(areas)
+    if n_strata == 0:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The strata layer has no features. Run the stratification first.")))
+    ids = list(range(1, n_strata + 1)) if ids is None else list(ids)
+    area = check_values(areas, names["area"], ids)
+    unit_area = float(unit_area)
+    if not np.isfinite(unit_area) or unit_area <= 0:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The unit area must be a positive number.")))
+    min_per_stratum = int(min_per_stratum)
+    if min_per_stratum < 1:
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).")))
+    s = None if sds is None else check_values(sds, names["sd"], ids, allow_zero=True)
+    m = None if means is None else check_values(means, names["mean"], ids, allow_zero=True)
+    target = "target_cv" if target_cv is not None and target_cv > 0 else (
+        "budget" if budget is not None and budget > 0 else "total")
+    c = None
+    if costs is not None:
+        c = check_values(costs, names["cost"], ids)
+    elif method == "optimal_cost" or target == "budget":
+        raise InputError(
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The cost method needs a cost per unit for every stratum: choose the cost field."))
+            if method == "optimal_cost"
+            else message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The budget needs a cost per unit for every stratum: choose the cost field."))
+        )
+    fixed_cost = float(fixed_cost or 0.0)
+    if fixed_cost < 0:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The fixed cost must be zero or positive.")))
+    capacity, lower, upper, warnings = _stratum_bounds(area, unit_area, min_per_stratum, ids)
+    if target == "target_cv" and budget is not None and budget > 0:
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "A target CV is set: the budget is not used.")))
+    return AllocationInput(method, tuple(ids), area, unit_area, s, m, c, fixed_cost, min_per_stratum, capacity,
+                           lower, upper, target, total, budget, target_cv, bool(fpc), names, tuple(warnings))
+
+
+def _stratum_bounds(area, unit_area, min_per_stratum, ids):
+    """``N_h = A_h / a``, the bounds ``min(minimum, ⌊N_h⌋) ≤ n_h ≤ ⌊N_h⌋``, and warnings."""
+    capacity = unit_capacity(area, unit_area)
+    upper = np.floor(capacity + 1e-9).astype(int)
+    if np.any(upper < 1):
+        chosen, shown = _listing(ids, upper < 1)
+        raise InputError(
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. "
+                "Merge them with a neighbour or use a smaller unit area."), shown=shown, unit_area=unit_area),
+            ids=chosen,
+        )
+    lower = np.minimum(min_per_stratum, upper)
+    warnings = []
+    if np.any(upper < min_per_stratum):
+        _, shown = _listing(ids, upper < min_per_stratum)
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit."),
+            shown=shown, minimum=min_per_stratum))
+    return capacity, lower, upper, warnings
+
+
+def _method_applied(inp):
+    """The method used after the fallbacks for missing or zero pilot SDs, and its warnings."""
+    method, s, names, ids = inp.method, inp.s, inp.names, list(inp.ids)
+    if method not in ("neyman", "optimal_cost"):
+        return method, []
+    if s is None:
+        return ("proportional" if method == "neyman" else method), [
+            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "No pilot standard deviations: the allocation assumes equal SDs in all strata "
+                "(proportional to area)."))
+            if method == "neyman"
+            else message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "No pilot standard deviations: the allocation assumes equal SDs in all strata "
+                "(area / square root of cost)."))]
+    if not np.any(s > 0):
+        return "proportional", [message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "All pilot standard deviations are zero: proportional allocation is used "
+            "instead."))]
+    if np.any(s == 0):
+        _, shown = _listing(ids, s == 0)
+        return method, [message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The {name} is zero for stratum feature(s) {shown}: they get only the minimum "
+                "of {minimum} unit(s). A pilot with no variation is rarely the truth; check it."),
+            name=names["sd"], shown=shown, minimum=inp.min_per_stratum)]
+    return method, []
+
+
+def _allocation_for_budget(inp, scores):
+    c, lower, upper = inp.c, inp.lower, inp.upper
+    minimum = inp.fixed_cost + float(np.sum(c * lower))
+    maximum = inp.fixed_cost + float(np.sum(c * upper))
+    if inp.budget < minimum:
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus "
+                "{per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the "
+                "minimum per stratum."), budget=inp.budget, minimum=minimum, fixed_cost=inp.fixed_cost,
+            per_stratum=inp.min_per_stratum))
+    spend = min(float(inp.budget), maximum) - inp.fixed_cost
+    warnings = []
+    if inp.budget > maximum:
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken."),
+            maximum=maximum))
+    x = bounded_allocation(scores, spend, lower, upper, c)
+    return round_within_budget(x, spend, c, lower, upper), x, warnings
+
+
+def _allocation_for_total(inp, scores):
+    total, lower, upper = inp.total, inp.lower, inp.upper
+    if total is None or total <= 0:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Give a total number of units, a budget (with costs) or a target CV.")))
+    total = int(round(total))
+    if total < lower.sum():
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The total of {total} units is below the minimum of {minimum} "
+                "({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum."),
+            total=total, minimum=int(lower.sum()), per_stratum=inp.min_per_stratum, n_strata=len(inp.ids)))
+    if total > upper.sum():
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The total of {total} units exceeds the {fit} units of {unit_area:g} that fit "
+                "in the strata. Lower the total or use smaller units."),
+            total=total, fit=int(upper.sum()), unit_area=inp.unit_area))
+    x = bounded_allocation(scores, total, lower, upper)
+    return largest_remainder_round(x, total, lower, upper), x, []
+
+
+def _result_warnings(inp, n, x):
+    ids, warnings = list(inp.ids), []
+    if np.any(n == 1):
+        _, shown = _listing(ids, n == 1)
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Stratum feature(s) {shown} get one unit only: their variance cannot be estimated."), shown=shown))
+    x_at_cap = np.isclose(x, inp.upper) & (inp.upper > inp.lower)
+    if np.any(x_at_cap):
+        _, shown = _listing(ids, x_at_cap)
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Stratum feature(s) {shown} are sampled completely (every unit that fits)."),
+                                shown=shown))
+    if inp.m is not None and np.any(inp.m == 0):
+        _, shown = _listing(ids, inp.m == 0)
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The {name} is zero in stratum feature(s) {shown}: their CV is undefined."),
+                                name=inp.names["mean"], shown=shown))
+    return warnings
+
+
 def allocate(
     areas,
     unit_area,
@@ -502,14 +703,15 @@ def allocate(
     ids=None,
     names=None,
     fpc=True,
+    layout_design=None,
 ):
     """Units per stratum for a total, a budget or a target CV.
 
     Exactly one target is used: ``target_cv`` if given (> 0), else ``budget``
     (> 0, needs ``costs``), else ``total``. For a target CV the smallest total is
     found (by bisection, the CV falls as the total grows) whose rounded allocation
-    has an expected CV of the overall density at most ``target_cv``, with the
-    finite-population correction (Cochran 1977, ch. 5).
+    has an expected CV of the overall density at most ``target_cv`` (Cochran
+    1977, ch. 5).
 
     Parameters
     ----------
@@ -535,179 +737,52 @@ def allocate(
         Display names for ``area``, ``sd``, ``mean`` and ``cost`` in messages
         (e.g. the field names).
     fpc : bool
-        Apply the finite-population correction.
+        Apply the finite-population correction ``1 − n_h a / A_h``.
+    layout_design : str, optional
+        The design record of the layout to come (:data:`edge.DESIGN_RECORDS`);
+        when given it decides ``fpc``: the correction only where the units
+        cannot overlap (:func:`edge.fpc_holds`).
 
     Returns
     -------
     Allocation
     """
-    names = {**_DEFAULT_NAMES, **(names or {})}
-    if method not in METHODS:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Unknown allocation method {method!r}; use one of: {methods}."),
-                                 method=method, methods=", ".join(METHODS)))
-    n_strata = len(areas)
-    if n_strata == 0:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The strata layer has no features. Run the stratification first.")))
-    ids = list(range(1, n_strata + 1)) if ids is None else list(ids)
-    area = check_values(areas, names["area"], ids)
-    unit_area = float(unit_area)
-    if not np.isfinite(unit_area) or unit_area <= 0:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The unit area must be a positive number.")))
-    min_per_stratum = int(min_per_stratum)
-    if min_per_stratum < 1:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).")))
-    warnings = []
-
-    s = None if sds is None else check_values(sds, names["sd"], ids, allow_zero=True)
-    m = None if means is None else check_values(means, names["mean"], ids, allow_zero=True)
-    use_budget = target_cv is None or not target_cv > 0
-    use_budget = use_budget and budget is not None and budget > 0
-    c = None
-    if costs is not None:
-        c = check_values(costs, names["cost"], ids)
-    elif method == "optimal_cost" or use_budget:
-        raise InputError(
-            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The cost method needs a cost per unit for every stratum: choose the cost field."))
-            if method == "optimal_cost"
-            else message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The budget needs a cost per unit for every stratum: choose the cost field."))
-        )
-    fixed_cost = float(fixed_cost or 0.0)
-    if fixed_cost < 0:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The fixed cost must be zero or positive.")))
-
-    # method actually applied
-    used = method
-    if method in ("neyman", "optimal_cost"):
-        if s is None:
-            warnings.append(
-                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "No pilot standard deviations: the allocation assumes equal SDs in all strata "
-                    "(proportional to area)."))
-                if method == "neyman"
-                else message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "No pilot standard deviations: the allocation assumes equal SDs in all strata "
-                    "(area / square root of cost)."))
-            )
-            used = "proportional" if method == "neyman" else method
-        elif not np.any(s > 0):
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "All pilot standard deviations are zero: proportional allocation is used instead.")))
-            used = "proportional"
-        elif np.any(s == 0):
-            zero_ids, shown = _listing(ids, s == 0)
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The {name} is zero for stratum feature(s) {shown}: they get only the minimum "
-                "of {minimum} unit(s). A pilot with no variation is rarely the truth; check it."),
-                name=names["sd"], shown=shown, minimum=min_per_stratum))
-    scores = allocation_scores(used, area, s, c)
-
-    # bounds
-    capacity = unit_capacity(area, unit_area)
-    upper = np.floor(capacity + 1e-9).astype(int)
-    if np.any(upper < 1):
-        chosen, shown = _listing(ids, upper < 1)
-        raise InputError(
-            message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. "
-                "Merge them with a neighbour or use a smaller unit area."), shown=shown, unit_area=unit_area),
-            ids=chosen,
-        )
-    lower = np.minimum(min_per_stratum, upper)
-    if np.any(upper < min_per_stratum):
-        _, shown = _listing(ids, upper < min_per_stratum)
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit."),
-            shown=shown, minimum=min_per_stratum))
-
-    # target
-    if target_cv is not None and target_cv > 0:
-        target = "target_cv"
-        n, x = _allocation_for_cv(float(target_cv), scores, area, unit_area, s, m, lower, upper, fpc, names)
-        if budget is not None and budget > 0:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "A target CV is set: the budget is not used.")))
-    elif use_budget:
-        target = "budget"
-        minimum = fixed_cost + float(np.sum(c * lower))
-        maximum = fixed_cost + float(np.sum(c * upper))
-        if budget < minimum:
-            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus "
-                "{per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the "
-                "minimum per stratum."), budget=budget, minimum=minimum, fixed_cost=fixed_cost,
-                per_stratum=min_per_stratum))
-        spend = min(float(budget), maximum) - fixed_cost
-        if budget > maximum:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken."),
-                maximum=maximum))
-        x = bounded_allocation(scores, spend, lower, upper, c)
-        n = round_within_budget(x, spend, c, lower, upper)
+    if layout_design is not None:
+        fpc = bool(edge.fpc_holds(layout_design))
+    inp = _allocate_iv(areas, unit_area, method, total, budget, target_cv, sds, means, costs, fixed_cost,
+                       min_per_stratum, ids, names, fpc)
+    used, warnings = _method_applied(inp)
+    warnings = list(inp.warnings) + warnings
+    scores = allocation_scores(used, inp.area, inp.s, inp.c)
+    if inp.target == "target_cv":
+        n, x = _allocation_for_cv(float(inp.target_cv), scores, inp.area, inp.unit_area, inp.s, inp.m, inp.lower,
+                                  inp.upper, inp.fpc, inp.names)
+    elif inp.target == "budget":
+        n, x, more = _allocation_for_budget(inp, scores)
+        warnings += more
     else:
-        target = "total"
-        if total is None or total <= 0:
-            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "Give a total number of units, a budget (with costs) or a target CV.")))
-        total = int(round(total))
-        if total < lower.sum():
-            raise InputError(message(
-                QT_TRANSLATE_NOOP("PlotwiseEngine", "The total of {total} units is below the minimum of {minimum} "
-                "({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum."),
-                total=total, minimum=int(lower.sum()), per_stratum=min_per_stratum, n_strata=n_strata))
-        if total > upper.sum():
-            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The total of {total} units exceeds the {fit} units of {unit_area:g} that fit "
-                "in the strata. Lower the total or use smaller units."),
-                total=total, fit=int(upper.sum()), unit_area=unit_area))
-        x = bounded_allocation(scores, total, lower, upper)
-        n = largest_remainder_round(x, total, lower, upper)
-
+        n, x, more = _allocation_for_total(inp, scores)
+        warnings += more
+    warnings += _result_warnings(inp, n, x)
     total = int(n.sum())
-    if np.any(n == 1):
-        _, shown = _listing(ids, n == 1)
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Stratum feature(s) {shown} get one unit only: their variance cannot be estimated."), shown=shown))
-    x_at_cap = np.isclose(x, upper) & (upper > lower)
-    if np.any(x_at_cap):
-        _, shown = _listing(ids, x_at_cap)
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Stratum feature(s) {shown} are sampled completely (every unit that fits)."),
-                                shown=shown))
-    precision = expected_precision(n, area, unit_area, s, m, fpc)
-    if m is not None and np.any(m == 0):
-        _, shown = _listing(ids, m == 0)
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The {name} is zero in stratum feature(s) {shown}: their CV is undefined."),
-                                name=names["mean"], shown=shown))
-    comparison = compare_methods(total, area, unit_area, s, m, lower, upper, precision.variance_mean, fpc)
+    precision = expected_precision(n, inp.area, inp.unit_area, inp.s, inp.m, inp.fpc)
+    comparison = compare_methods(total, inp.area, inp.unit_area, inp.s, inp.m, inp.lower, inp.upper,
+                                 precision.variance_mean, inp.fpc)
     return Allocation(
-        method=method,
-        method_used=used,
-        target=target,
-        ids=tuple(ids),
-        n=n,
-        n_continuous=x,
-        total=total,
-        lower=lower,
-        upper=upper,
-        capacity=capacity,
-        cost=float(fixed_cost + np.sum(c * n)) if c is not None else np.nan,
-        precision=precision,
-        comparison=comparison,
-        warnings=tuple(warnings),
+        method=method, method_used=used, target=inp.target, ids=inp.ids, n=n, n_continuous=x, total=total,
+        lower=inp.lower, upper=inp.upper, capacity=inp.capacity,
+        cost=float(inp.fixed_cost + np.sum(inp.c * n)) if inp.c is not None else np.nan,
+        precision=precision, comparison=comparison, warnings=tuple(warnings), fpc=inp.fpc,
     )
 
 
 def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, fpc, names):
     """Smallest total whose rounded allocation has expected CV <= target (bisection)."""
     if s is None or m is None:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "A target CV needs both the pilot standard deviation and the pilot mean count per unit: "
-            "choose the SD field and the mean field.")
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "A target CV needs both the pilot standard deviation and the pilot mean count per unit: "
+                "choose the SD field and the mean field.")
         ))
     if not np.sum(stratum_weights(area) * m) > 0:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
@@ -721,9 +796,10 @@ def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, f
     lo_total, hi_total = int(lower.sum()), int(upper.sum())
     n, x, cv = design(hi_total)
     if cv > target_cv:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give "
-            "an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units."),
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give "
+                "an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units."),
             target_cv=target_cv, fit=hi_total, cv=cv))
     best = (n, x)
     n, x, cv = design(lo_total)

@@ -163,8 +163,12 @@ def test_budget_rounding_stays_within_budget():
     result = al.allocate(AREAS, UNIT, "optimal_cost", budget=137.0, fixed_cost=12.0, sds=SDS, costs=COSTS)
     assert result.cost <= 137.0 + 1e-9
     assert np.all(result.n >= 2)
-    # one more unit anywhere would break the budget, or the rounding left less than one unit's cost
-    assert 137.0 - result.cost < COSTS.max() * AREAS.size
+    # no stratum left at its whole part could take one more unit: each costs more than the budget left over
+    # (truth by construction of the rounding: whole parts, then one more where it still fits)
+    left = 137.0 - result.cost
+    at_floor = (result.n == np.floor(result.n_continuous + 1e-9)) & (result.n < result.upper)
+    assert at_floor.any() and np.all(COSTS[at_floor] > left)
+    assert np.all(result.n - result.n_continuous < 1.0 + 1e-9)
 
 
 def test_expected_cv_matches_monte_carlo():
@@ -316,3 +320,18 @@ def test_several_duplicate_stratum_ids_are_all_counted():
         al.check_stratum_ids(["a", "b", "a", "b", "c"], [1, 2, 3, 4, 5], "strata", "name")
     assert err.value.ids == [1, 3, 2, 4]
     assert "'a' (features 1, 3)" in err.value.message and "1 other id(s) ('b')" in err.value.message
+
+
+def test_fpc_follows_the_layout_design():
+    # Cochran (1977), §5.3: V = Σ W_h² S_h² (1 − f_h) / n_h with f_h = n_h a / A_h for units that tile the
+    # strata; units whose centres are drawn independently may overlap and have no correction (Cordy 1993)
+    areas, unit = np.array([2.0, 3.0]), 0.1  # N_h = 20 and 30 units: sampling fractions of a third and more
+    kwargs = dict(total=20, sds=[2.0, 3.0], means=[4.0, 5.0])
+    grid = al.allocate(areas, unit, "neyman", layout_design="grid", **kwargs)
+    srs = al.allocate(areas, unit, "neyman", layout_design="random", **kwargs)
+    assert grid.fpc and not srs.fpc
+    w, n = areas / areas.sum(), grid.n
+    by_hand = np.sum(w ** 2 * np.array([4.0, 9.0]) * (1 - n * unit / areas) / n)
+    assert grid.precision.variance_mean == pytest.approx(by_hand, rel=1e-12)
+    assert srs.precision.variance_mean == pytest.approx(np.sum(w ** 2 * np.array([4.0, 9.0]) / srs.n), rel=1e-12)
+    assert al.allocate(areas, unit, "neyman", layout_design="random_sep", **kwargs).fpc
