@@ -30,12 +30,15 @@ A unit counts the animals of the cells whose centres it covers, and its
 surveyed area is the area of those cells. When the units are small against the
 surface cells, every cell is split into ``f × f`` sub-cells that share the
 cell's density and its gamma multiplier (the animals of a cell lie uniformly in
-it), so that a unit spans at least :data:`MIN_CELLS_ACROSS` sub-cells. A unit
-counts the part of its own stratum (stratified designs) or of the frame
-(others) it covers: parts reaching over the edge are not counted and not in
-its area. Units are enumerated row by row of (sub-)cells, with the column
-interval of each row found analytically for circles and rotated rectangles, so
-the work grows with the cells covered, not with a bounding box. Point stations
+it), so that a unit spans at least :data:`MIN_CELLS_ACROSS` sub-cells. The edge
+protocol is the real chain's (:mod:`.edge`): by default plus sampling, with
+centres drawn by the layout engine over each stratum (or the frame) grown by
+the unit's reach, a unit counting only the cells of its own stratum (stratified
+designs) or of the frame (others), with its nominal area, and the estimate
+expanding to the plus region's area; with ``inside`` the layout's inward buffer.
+Units are enumerated row by row of (sub-)cells, with the column interval of each
+row found analytically for circles and rotated rectangles, so the work grows
+with the cells covered, not with a bounding box. Point stations
 count a circle of radius SIZE (their counting radius), line transects a strip
 of a given half-width on either side of the line.
 
@@ -43,13 +46,16 @@ Designs
 -------
 0. simple random: uniform centres over the frame (one stratum);
 1. stratified, proportional: simple random within strata, ``n_h ∝ A_h``;
-2. stratified, Neyman: ``n_h ∝ A_h S_h`` (Neyman 1934; Cochran 1977, §5.5),
-   with ``S_h`` the standard deviation of a unit's count in stratum h implied
-   by the surface: ``S_h² = Var_h(Λ) + E_h(Λ) + E_h(Σ_c (m_c μ_c / f²)² / k)``
-   over random unit positions, ``Λ`` the unit's expected count (law of total
-   variance);
+2. stratified, Neyman, best case: ``n_h ∝ A_h S_h`` (Neyman 1934; Cochran
+   1977, §5.5), with ``S_h`` the standard deviation of a unit's count in
+   stratum h implied by the surface (an oracle no survey has):
+   ``S_h² = Var_h(Λ) + E_h(Λ) + E_h(Σ_c (m_c μ_c / f²)² / k)`` over random unit
+   positions, ``Λ`` the unit's expected count (law of total variance);
 3. systematic grid with a random start (the realised n varies);
-4. spatially balanced (balanced acceptance sampling, Robertson et al. 2013).
+4. spatially balanced (balanced acceptance sampling, Robertson et al. 2013);
+5. stratified, Neyman from a pilot: in every replicate ``S_h`` is the sample
+   SD of a pilot of ``pilot_units`` simple random units per stratum
+   (:func:`pilot_sd`), as a survey would have it.
 
 Performance (per design, over the replicates r with an estimate ``N̂_r`` of the
 realised total ``N_r``; Morris, White & Crowther 2019, Statistics in Medicine
@@ -84,11 +90,14 @@ from .unit_shapes import CIRCLE, LINE, POINT, SQUARE
 DESIGNS = (
     QT_TRANSLATE_NOOP("PlotwiseEngine", "simple random"),
     QT_TRANSLATE_NOOP("PlotwiseEngine", "stratified proportional"),
-    QT_TRANSLATE_NOOP("PlotwiseEngine", "stratified Neyman"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "stratified Neyman (best case)"),
     QT_TRANSLATE_NOOP("PlotwiseEngine", "systematic grid"),
     QT_TRANSLATE_NOOP("PlotwiseEngine", "spatially balanced"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "stratified Neyman (pilot)"),
 )
-SIMPLE_RANDOM, STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN, SYSTEMATIC_GRID, SPATIALLY_BALANCED = range(5)
+(SIMPLE_RANDOM, STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN, SYSTEMATIC_GRID, SPATIALLY_BALANCED,
+ STRATIFIED_NEYMAN_PILOT) = range(6)
+DEFAULT_PILOT_UNITS = 5  # pilot units per stratum for the pilot-based Neyman design (our choice)
 _SIZE_NOT_POSITIVE = {  # by unit shape: every word of a message sits in its template
     POINT: QT_TRANSLATE_NOOP(
         "PlotwiseEngine",
@@ -97,13 +106,14 @@ _SIZE_NOT_POSITIVE = {  # by unit shape: every word of a message sits in its tem
     CIRCLE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m: it is the circle unit's size."),
     LINE: QT_TRANSLATE_NOOP("PlotwiseEngine", "SIZE must be more than 0 m: it is the line unit's size."),
 }
-STRATIFIED_DESIGNS = (STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN)
+STRATIFIED_DESIGNS = (STRATIFIED_PROPORTIONAL, STRATIFIED_NEYMAN, STRATIFIED_NEYMAN_PILOT)
 LAYOUT_DESIGN = {
     SIMPLE_RANDOM: layout.SIMPLE_RANDOM,
     STRATIFIED_PROPORTIONAL: layout.SIMPLE_RANDOM,
     STRATIFIED_NEYMAN: layout.SIMPLE_RANDOM,
     SYSTEMATIC_GRID: layout.SYSTEMATIC_GRID,
     SPATIALLY_BALANCED: layout.SPATIALLY_BALANCED,
+    STRATIFIED_NEYMAN_PILOT: layout.SIMPLE_RANDOM,
 }
 MIN_CELLS_ACROSS = 4  # a unit spans at least this many (sub-)cells: our choice, checked in the tests
 MAX_SUBDIVISION = 256
@@ -223,17 +233,23 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
     r0 = max(0, int(math.floor((y0 - maxy) / -dy)))
     r1 = min(rows, int(math.ceil((y0 - miny) / -dy)))
     if c1 <= c0 or r1 <= r0:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The density surface does not overlap the frame. Check that both cover the same area "
-            "(and their coordinate reference systems).")
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The density surface does not overlap the frame. Check that both cover the same area "
+                "(and their coordinate reference systems).")
         ))
     sub = density[r0:r1, c0:c1]
     gt = (x0 + c0 * dx, dx, 0.0, y0 + r0 * dy, 0.0, dy)
     h, w = sub.shape
     xs = gt[0] + (np.arange(w) + 0.5) * dx
     ys = gt[3] + (np.arange(h) + 0.5) * dy
-    code = np.full((h, w), -1, dtype=np.int32)
-    warnings = []
+    regions, stratum_keys = _stratum_regions(frame, strata, keys)
+    code, warnings = _cell_codes(regions, xs, ys, progress)
+    return _checked_grid(sub, code, gt, stratum_keys, warnings)
+
+
+def _stratum_regions(frame, strata, keys):
+    """The strata cut to the frame, one (Multi)Polygon per stratum value, and the values in order."""
     if strata is None:
         regions, stratum_keys = [frame], (None,)
     else:
@@ -250,6 +266,13 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
         for k in stratum_keys:
             parts = [p.intersection(frame) for p in groups[k]]
             regions.append(parts[0] if len(parts) == 1 else _union(parts))
+    return regions, stratum_keys
+
+
+def _cell_codes(regions, xs, ys, progress):
+    """Stratum index of every cell whose centre lies in a region (−1 elsewhere), and a warning for overlaps."""
+    code = np.full((ys.size, xs.size), -1, dtype=np.int32)
+    warnings = []
     overlap = 0
     for index, region in enumerate(regions):
         if region.is_empty:
@@ -267,26 +290,36 @@ def population_grid(density, geotransform, frame, strata=None, keys=None, progre
         if progress is not None and progress((index + 1) / len(regions)):
             raise Cancelled("Cancelled while reading the surface.")
     if overlap:
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. "
-            "Strata should not overlap."), overlap=overlap))
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. "
+                "Strata should not overlap."), overlap=overlap))
+    return code, warnings
+
+
+def _checked_grid(sub, code, gt, stratum_keys, warnings):
+    """The :class:`PopulationGrid`, refusing a surface with no, negative or missing values in the frame."""
+    dx, dy = gt[1], gt[5]
     inside = code >= 0
     if not inside.any():
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "No cell centre of the density surface lies in the frame: the surface cells are too coarse for "
-            "the frame, or the two do not overlap.")
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "No cell centre of the density surface lies in the frame: the surface cells are too coarse for "
+                "the frame, or the two do not overlap.")
         ))
     negative = inside & (sub < 0)
     if negative.any():
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The density surface has {n} negative cell(s) in the frame. Expected animals "
-            "per km² must be 0 or more: correct the surface (for instance clip it at 0)."), n=int(negative.sum())))
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The density surface has {n} negative cell(s) in the frame. Expected animals "
+                "per km² must be 0 or more: correct the surface (for instance clip it at 0)."), n=int(negative.sum())))
     missing = inside & ~np.isfinite(sub)
     if missing.any():
         share = missing.sum() / inside.sum()
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "{n} cell(s) of the frame ({share:.1%}) have no value on the density surface "
-            "and are left out of the population: the comparison speaks for the rest of the frame."),
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "{n} cell(s) of the frame ({share:.1%}) have no value on the density surface "
+                "and are left out of the population: the comparison speaks for the rest of the frame."),
             n=int(missing.sum()), share=share))
         code[missing] = -1
         inside &= ~missing
@@ -372,9 +405,10 @@ def counting_region(shape, size, half_width=0.0):
     if not size > 0:
         raise InputError(message(_SIZE_NOT_POSITIVE[shape]))
     if shape == LINE and not half_width > 0:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "A line transect needs the half-width of its counting strip (more than 0 m): animals are counted "
-            "up to that distance on either side of the line.")
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "A line transect needs the half-width of its counting strip (more than 0 m): animals are counted "
+                "up to that distance on either side of the line.")
         ))
     if shape in (POINT, CIRCLE):
         return CountingRegion("circle", radius=size)
@@ -577,6 +611,8 @@ class ComparisonSetup:
         Mean expected count per unit in each stratum.
     overdispersion : float
     warnings : tuple of str
+    pilot_units : int
+        Pilot units per stratum of the pilot-based Neyman design.
     """
 
     grid: PopulationGrid
@@ -590,6 +626,7 @@ class ComparisonSetup:
     stratum_mean: object
     overdispersion: float
     warnings: tuple = ()
+    pilot_units: int = DEFAULT_PILOT_UNITS
 
     @property
     def unit_area_km2(self):
@@ -598,7 +635,7 @@ class ComparisonSetup:
 
 def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=None, bearing=0.0,
                        overdispersion=0.0, sd_draws=SD_DRAWS, inside=False, strata_ids=None, frame_parts=None,
-                       frame_ids=None):
+                       frame_ids=None, pilot_units=DEFAULT_PILOT_UNITS):
     """Prepare the frame, the strata and the Neyman ``S_h`` for :func:`simulate_designs`.
 
     Parameters
@@ -620,7 +657,13 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
     inside : bool
         Keep every unit wholly inside its stratum (or the frame), as the
         layout's INSIDE option does: centres are drawn from the region shrunk
-        by the unit's circumscribing radius.
+        by the unit's circumscribing radius. Otherwise plus sampling, the
+        layout's default (:mod:`.edge`): centres over the stratum grown by the
+        counting region's reach plus half a surface cell's diagonal (a cell
+        belongs to the stratum by its centre, so its animals lie up to that far
+        outside the polygon), and units count only their stratum's cells.
+    pilot_units : int
+        Pilot units per stratum of the pilot-based Neyman design.
     strata_ids : sequence, optional
         The host's feature id of each polygon of ``strata``, named in messages
         (default 0, 1, ...).
@@ -631,8 +674,12 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
     if overdispersion < 0:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The overdispersion k must be 0 (Poisson counts) or more.")))
+    if int(pilot_units) < 2:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The pilot needs at least 2 units per stratum.")))
     spec = layout.LayoutSpec(design=layout.SIMPLE_RANDOM, shape=int(shape), size=float(size), bearing=float(bearing),
                              inside=bool(inside))
+    if not inside:
+        spec = replace(spec, margin=region.reach - spec.radius + 0.5 * math.hypot(grid.cell_width, grid.cell_height))
     factor = subdivision(grid, region)
     warnings = list(grid.warnings)
     prepared = None
@@ -646,9 +693,10 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
         covered = _union(cut)
         lost = 1.0 - covered.area / frame.area if frame.area > 0 else 0.0
         if lost > 0.005:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The strata cover {share:.1%} of the frame: every design is compared on the part the strata "
-                "cover."), share=1 - lost))
+            warnings.append(message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "The strata cover {share:.1%} of the frame: every design is compared on the part the strata "
+                    "cover."), share=1 - lost))
         prepared = layout.prepare_strata(cut, feature_ids=strata_ids, strata=keys, n_units=2 * len(strata),
                                          spec=spec)
         position = {k: i for i, k in enumerate(grid.keys)}
@@ -664,7 +712,7 @@ def prepare_comparison(grid, frame, region, shape, size, rng, strata=None, keys=
     else:
         whole = layout.prepare_strata([covered], n_units=layout.MIN_PER_STRATUM, spec=spec)
     return ComparisonSetup(grid, region, factor, spec, whole, prepared, codes, sd, mean, float(overdispersion),
-                           tuple(warnings))
+                           tuple(warnings), int(pilot_units))
 
 
 def _bearings(spec, count, rng):
@@ -702,8 +750,6 @@ def stratum_unit_sd(grid, prepared, codes, region, factor, bearing, overdispersi
             uniq, m = np.unique(pair, return_counts=True)
             mu_pair = grid.mu.ravel()[uniq % grid.mu.size] * m / f2
             extra = np.bincount(uniq // grid.mu.size, weights=mu_pair ** 2 / overdispersion, minlength=len(centres))
-        counted = np.bincount(cells.unit, minlength=len(centres)) > 0
-        lam, extra = lam[counted], extra[counted]
         if lam.size < 2:
             sds.append(0.0)
             means.append(float(lam.mean()) if lam.size else 0.0)
@@ -715,7 +761,11 @@ def stratum_unit_sd(grid, prepared, codes, region, factor, bearing, overdispersi
 
 @dataclass(frozen=True, eq=False)
 class DesignPlan:
-    """One design ready to be drawn: its prepared strata, layout spec and estimator labels."""
+    """One design ready to be drawn: its prepared strata, layout spec and estimator labels.
+
+    ``areas`` are the strata's areas (km²) and ``expansion`` the areas the
+    counts expand to (the plus regions' ``A⁺_h``, None when units are kept inside).
+    """
 
     design: int
     prepared: object
@@ -725,45 +775,75 @@ class DesignPlan:
     areas: dict
     allocation: tuple
     warnings: tuple = ()
+    expansion: object = None
 
 
-def plan_design(setup, design, n_units):
+def plan_design(setup, design, n_units, sds=None):
     """A :class:`DesignPlan` for ``design`` with ``n_units`` units in all.
 
     Stratified designs share ``n_units`` by the allocation engine
-    (proportional, or Neyman with ``S_h`` from the surface), at least two
-    units per stratum.
+    (proportional, or Neyman with ``S_h`` from the surface: the best case, or
+    with ``sds`` from a pilot), at least two units per stratum.
     """
     design = int(design)
     if design not in range(len(DESIGNS)):
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Unknown design {design}; use 0 to {last}."), design=design, last=len(DESIGNS) - 1))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Unknown design {design}; use 0 to {last}."),
+                                 design=design, last=len(DESIGNS) - 1))
     n_units = int(n_units)
     if n_units < layout.MIN_PER_STRATUM:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "N_UNITS must be at least {minimum}."), minimum=layout.MIN_PER_STRATUM))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "N_UNITS must be at least {minimum}."),
+                                 minimum=layout.MIN_PER_STRATUM))
     spec = replace(setup.spec, design=LAYOUT_DESIGN[design])
     grid = setup.grid
-    if design in STRATIFIED_DESIGNS:
-        if setup.strata is None:
-            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The {design} design needs strata: give the STRATA layer."),
-                                     design=message(DESIGNS[design])))
-        strata = setup.strata.strata
-        areas = grid.stratum_areas_km2[setup.stratum_codes]
-        method = "proportional" if design == STRATIFIED_PROPORTIONAL else "neyman"
-        result = allocation.allocate(
-            areas, setup.unit_area_km2, method, total=n_units,
-            sds=setup.stratum_sd if design == STRATIFIED_NEYMAN else None,
-            ids=[st.key for st in strata], fpc=False,
-        )
-        prepared = tuple(replace(st, n=int(n)) for st, n in zip(strata, result.n))
-        labels = tuple(estimation.stratum_label(st.key) for st in strata)
-        return DesignPlan(design, prepared, spec, setup.stratum_codes, labels,
-                          dict(zip(labels, areas.tolist())), tuple(int(n) for n in result.n), tuple(result.warnings))
-    st = replace(setup.frame.strata[0], n=n_units)
-    total_area = float(grid.stratum_areas_km2.sum())
-    return DesignPlan(design, (st,), spec, np.array([-1]), (FRAME_LABEL,), {FRAME_LABEL: total_area}, (n_units,))
+    if design not in STRATIFIED_DESIGNS:
+        st = replace(setup.frame.strata[0], n=n_units)
+        expansion = None if spec.inside else {FRAME_LABEL: st.effective_area / M2_PER_KM2}
+        return DesignPlan(design, (st,), spec, np.array([-1]), (FRAME_LABEL,),
+                          {FRAME_LABEL: float(grid.stratum_areas_km2.sum())}, (n_units,), (), expansion)
+    if setup.strata is None:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The {design} design needs strata: give the STRATA layer."),
+                                 design=message(DESIGNS[design])))
+    strata = setup.strata.strata
+    areas = grid.stratum_areas_km2[setup.stratum_codes]
+    method = "proportional" if design == STRATIFIED_PROPORTIONAL else "neyman"
+    if design == STRATIFIED_NEYMAN:
+        sds = setup.stratum_sd
+    elif design == STRATIFIED_NEYMAN_PILOT and sds is None:
+        method = "proportional"  # before any pilot: a placeholder, replaced in every replicate
+    result = allocation.allocate(areas, setup.unit_area_km2, method, total=n_units,
+                                 sds=sds if method == "neyman" else None, ids=[st.key for st in strata], fpc=False)
+    prepared = tuple(replace(st, n=int(n)) for st, n in zip(strata, result.n))
+    labels = tuple(estimation.stratum_label(st.key) for st in strata)
+    expansion = None if spec.inside else {lab: st.effective_area / M2_PER_KM2 for lab, st in zip(labels, strata)}
+    warnings = () if design == STRATIFIED_NEYMAN_PILOT else tuple(result.warnings)
+    return DesignPlan(design, prepared, spec, setup.stratum_codes, labels, dict(zip(labels, areas.tolist())),
+                      tuple(int(n) for n in result.n), warnings, expansion)
+
+
+def pilot_sd(setup, rng):
+    """``S_h`` estimated from a pilot of ``setup.pilot_units`` simple random units per stratum.
+
+    The pilot surveys an independent realisation of the surface (a pilot
+    season): each pilot unit's count is Poisson with the unit's expected count,
+    with the gamma multiplier of every surface cell it covers for negative
+    binomial counts, as in :func:`realise_counts`; ``S_h`` is the sample
+    standard deviation of the pilot counts (the n − 1 divisor).
+    """
+    grid, f2, k = setup.grid, float(setup.factor) ** 2, setup.overdispersion
+    sds = []
+    for st, code in zip(setup.strata.strata, setup.stratum_codes):  # a loop over strata (tens)
+        centres = layout.simple_random_centres(st, setup.pilot_units, rng)
+        cells = unit_cells(centres, _bearings(setup.spec, len(centres), rng), setup.region, grid, setup.factor,
+                           np.full(len(centres), code))
+        pair = cells.unit.astype(np.int64) * grid.mu.size + cells.coarse
+        uniq, m = np.unique(pair, return_counts=True)
+        mu_pair = grid.mu.ravel()[uniq % grid.mu.size] * m / f2
+        if k > 0:
+            mu_pair = mu_pair * rng.gamma(k, 1.0 / k, size=uniq.size)
+        lam = np.bincount(uniq // grid.mu.size, weights=mu_pair, minlength=len(centres))
+        sds.append(float(np.std(rng.poisson(lam), ddof=1)))
+    return np.asarray(sds)
 
 
 # ----------------------------------------------------------------------------
@@ -782,12 +862,16 @@ class ReplicateResults:
 
 
 def _estimate(plan, counts, areas_km2, labels, coords, confidence, variance_method):
-    """The estimation engine's overall abundance for one simulated survey (None when it cannot estimate)."""
-    y = np.where(areas_km2 > 0, counts, np.nan)
+    """The estimation engine's overall abundance for one simulated survey (None when it cannot estimate).
+
+    Every unit was surveyed: a unit over the edge counts only its stratum's part (plus sampling), with its
+    nominal area, and the counts expand to the plus regions (``plan.expansion``).
+    """
     try:
         result = estimation.estimate_density(
-            y, areas_km2, labels, plan.areas, confidence=confidence, ci_method=estimation.CI_T,
-            variance_method=variance_method, coords=coords if variance_method == estimation.VARIANCE_LOCAL else None,
+            counts, areas_km2, labels, plan.areas, confidence=confidence, ci_method=estimation.CI_T,
+            variance_method=variance_method, expansion_areas=plan.expansion,
+            coords=coords if variance_method in estimation.LOCAL_METHODS else None,
         )
     except InputError:
         return None
@@ -808,10 +892,10 @@ def simulate_designs(setup, designs, n_units, replicates, rng, confidence=0.95, 
     replicates : int
     rng : numpy.random.Generator
     confidence : float
-    variance_method : {"srs", "local"}
+    variance_method : {"srs", "local", "local_scaled"}
         The estimation engine's variance estimator for the systematic grid and
-        the spatially balanced design ("local": Stevens & Olsen 2003); the
-        other designs use the simple random sampling formula.
+        the spatially balanced design (Stevens & Olsen 2003, or our scaled
+        variant); the other designs use the simple random sampling formula.
     progress : callable, optional
         ``progress(fraction) -> bool``; True cancels.
 
@@ -819,53 +903,75 @@ def simulate_designs(setup, designs, n_units, replicates, rng, confidence=0.95, 
     -------
     (tuple of DesignPlan, ReplicateResults)
         Arrays of shape (replicates, len(designs)); NaN where a design gave no
-        estimate.
+        estimate. The pilot-based Neyman design's plan carries the mean
+        allocation over the replicates.
     """
     designs = [int(d) for d in designs]
     replicates = int(replicates)
     if replicates < 2:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "REPLICATES must be at least 2.")))
     plans = tuple(plan_design(setup, d, n_units) for d in designs)
-    units = sum(sum(plan.allocation) for plan in plans)
-    cells = units * setup.region.area / (setup.grid.cell_area / setup.factor ** 2)
-    if cells > MAX_CELLS_PER_REPLICATE:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Each simulated survey would count about {millions:.0f} million surface cells ({units} units of "
-            "{unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample "
-            "the surface to coarser cells, or compare fewer designs or units."),
-            millions=cells / 1e6, units=units, unit_area=setup.region.area, cell_width=setup.grid.cell_width))
+    _check_work(setup, plans)
     shape = (replicates, len(plans))
     truth = np.full(replicates, np.nan)
     est, lo, hi, cv, n = (np.full(shape, np.nan) for _ in range(5))
-    local = {SYSTEMATIC_GRID, SPATIALLY_BALANCED}
+    pilot_allocations = []
     for r in range(replicates):
-        centres, bearings, codes, owners, labels = [], [], [], [], []
-        for j, plan in enumerate(plans):
-            drawn = layout.draw_layout(plan.prepared, plan.spec, rng)
-            per = [s.n_primary + s.n_reserve for s in drawn.strata]
-            centres.append(drawn.centres)
-            bearings.append(drawn.bearing)
-            codes.append(np.repeat(plan.codes, per))
-            labels.append(np.repeat(np.asarray(plan.labels, dtype=object), per))
-            owners.append(np.full(len(drawn.centres), j))
-        all_centres = np.concatenate(centres)
-        cells = unit_cells(all_centres, np.concatenate(bearings), setup.region, setup.grid, setup.factor,
-                           np.concatenate(codes))
-        realised = realise_counts(cells, len(all_centres), setup.grid, rng, setup.overdispersion)
-        truth[r] = realised.total
-        owner = np.concatenate(owners)
-        for j, plan in enumerate(plans):
-            mine = owner == j
-            if not mine.any():
-                continue
-            method = variance_method if plan.design in local else estimation.VARIANCE_SRS
-            out = _estimate(plan, realised.counts[mine], realised.areas_m2[mine] / M2_PER_KM2, labels[j],
-                            all_centres[mine], confidence, method)
-            if out is not None:
-                est[r, j], lo[r, j], hi[r, j], cv[r, j], n[r, j] = out
+        drawn = tuple(plan_design(setup, p.design, n_units, sds=pilot_sd(setup, rng))
+                      if p.design == STRATIFIED_NEYMAN_PILOT else p for p in plans)
+        pilot_allocations += [p.allocation for p in drawn if p.design == STRATIFIED_NEYMAN_PILOT]
+        truth[r], rows = _replicate(setup, drawn, rng, confidence, variance_method)
+        for j, out in rows.items():
+            est[r, j], lo[r, j], hi[r, j], cv[r, j], n[r, j] = out
         if progress is not None and progress((r + 1) / replicates):
             raise Cancelled("Cancelled while simulating surveys.")
+    if pilot_allocations:
+        mean_allocation = tuple(int(round(v)) for v in np.mean(pilot_allocations, axis=0))
+        plans = tuple(replace(p, allocation=mean_allocation) if p.design == STRATIFIED_NEYMAN_PILOT else p
+                      for p in plans)
     return plans, ReplicateResults(truth, est, lo, hi, cv, n)
+
+
+def _check_work(setup, plans):
+    units = sum(sum(plan.allocation) for plan in plans)
+    cells = units * setup.region.area / (setup.grid.cell_area / setup.factor ** 2)
+    if cells > MAX_CELLS_PER_REPLICATE:
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Each simulated survey would count about {millions:.0f} million surface cells ({units} units of "
+                "{unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample "
+                "the surface to coarser cells, or compare fewer designs or units."),
+            millions=cells / 1e6, units=units, unit_area=setup.region.area, cell_width=setup.grid.cell_width))
+
+
+def _replicate(setup, plans, rng, confidence, variance_method):
+    """One population and every design's survey of it: the realised total and ``{design index: estimate}``."""
+    centres, bearings, codes, owners, labels = [], [], [], [], []
+    for j, plan in enumerate(plans):
+        drawn = layout.draw_layout(plan.prepared, plan.spec, rng)
+        per = [s.n_primary + s.n_reserve for s in drawn.strata]
+        centres.append(drawn.centres)
+        bearings.append(drawn.bearing)
+        codes.append(np.repeat(plan.codes, per))
+        labels.append(np.repeat(np.asarray(plan.labels, dtype=object), per))
+        owners.append(np.full(len(drawn.centres), j))
+    all_centres = np.concatenate(centres)
+    cells = unit_cells(all_centres, np.concatenate(bearings), setup.region, setup.grid, setup.factor,
+                       np.concatenate(codes))
+    realised = realise_counts(cells, len(all_centres), setup.grid, rng, setup.overdispersion)
+    owner = np.concatenate(owners)
+    local = {SYSTEMATIC_GRID, SPATIALLY_BALANCED}
+    rows = {}
+    for j, plan in enumerate(plans):
+        mine = owner == j
+        if not mine.any():
+            continue
+        method = variance_method if plan.design in local else estimation.VARIANCE_SRS
+        out = _estimate(plan, realised.counts[mine], np.full(int(mine.sum()), setup.unit_area_km2), labels[j],
+                        all_centres[mine], confidence, method)
+        if out is not None:
+            rows[j] = out
+    return realised.total, rows
 
 
 # ----------------------------------------------------------------------------
@@ -1059,7 +1165,7 @@ def bias_test_statistics(performance):
     return root * x, root * (x + gamma * x * x / 3.0 + gamma * gamma * x ** 3 / 27.0 + gamma / (6.0 * p.replicates))
 
 
-def bias_warnings(performance, n_units, level=BIAS_TEST_LEVEL):
+def bias_warnings(performance, n_units, level=BIAS_TEST_LEVEL, inside=False):
     """Warnings for the designs whose relative bias is both notable and beyond the simulation's noise.
 
     A design is flagged when ``|rel_bias| > NOTABLE_BIAS`` and both Student's t
@@ -1067,7 +1173,8 @@ def bias_warnings(performance, n_units, level=BIAS_TEST_LEVEL):
     pass the critical value of :func:`bias_critical_value` on the same side
     (Bonferroni over the designs with a bias). Requiring both keeps the chance
     that unbiased designs raise it at or below ``level`` per comparison, for
-    skewed errors too and whatever the number of replicates.
+    skewed errors too and whatever the number of replicates. ``inside``: the
+    units were kept inside (the likely cause is then the unsampled edge band).
     """
     tested = [p for p in performance if np.isfinite(bias_standard_error(p)) and np.isfinite(p.rel_bias)]
     warnings = []
@@ -1076,23 +1183,23 @@ def bias_warnings(performance, n_units, level=BIAS_TEST_LEVEL):
         t, t1 = bias_test_statistics(p)
         beyond = abs(t) > critical and (not np.isfinite(t1) or (abs(t1) > critical and t * t1 > 0))
         if abs(p.rel_bias) > NOTABLE_BIAS and beyond:
-            noise = critical * bias_standard_error(p)
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
-                "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
-                "design(s)). A likely cause: units near the edge of their stratum count only the part inside it "
-                "(or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their "
-                "density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact "
-                "strata, reduce it.")
-                if p.design in STRATIFIED_DESIGNS else
+            values = dict(design=message(DESIGNS[p.design]), n_units=n_units, bias=p.rel_bias,
+                          noise=critical * bias_standard_error(p), replicates=p.replicates, level=level,
+                          tests=len(tested))
+            warnings.append(message(
                 QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
                     "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
-                    "design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, "
-                    "kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density "
-                    "differs from the interior, the estimate is biased. Smaller units reduce it."),
-                design=message(DESIGNS[p.design]), n_units=n_units, bias=p.rel_bias, noise=noise,
-                replicates=p.replicates, level=level, tests=len(tested)))
+                    "design(s)). A likely cause: units kept inside never reach the edge of the frame or of their "
+                    "stratum, so the edge band weighs less in the estimate; where its density differs from the "
+                    "interior, the estimate is biased. Plus sampling (INSIDE off) removes this bias.")
+                if inside else
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise "
+                    "(±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} "
+                    "design(s)). Plus sampling is unbiased, so the likely cause is the ratio estimator with very few "
+                    "animals per unit, or a systematic grid whose realised number of units varies with the surface; "
+                    "more units reduce it."), **values))
     return warnings
 
 
@@ -1113,14 +1220,16 @@ def compare_designs(setup, designs, n_units, replicates, rng, confidence=0.95, v
         performance.append(DesignPerformance(plan.design, DESIGNS[plan.design], int(n_units), plan.allocation,
                                              **stats))
         design_name = message(DESIGNS[plan.design])
-        warnings.extend(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "{design}: {warning}"), design=design_name, warning=w) for w in plan.warnings)
+        warnings.extend(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{design}: {warning}"), design=design_name,
+                                warning=w) for w in plan.warnings)
         if stats["failed"]:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "{design} at {n_units} units: {failed} of {replicates} simulated surveys "
-                "gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out "
-                "of its figures."), design=design_name, n_units=n_units, failed=stats["failed"], replicates=replicates))
-    warnings.extend(bias_warnings(performance, n_units))
+            warnings.append(message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "{design} at {n_units} units: {failed} of {replicates} simulated surveys "
+                    "gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out "
+                    "of its figures."), design=design_name, n_units=n_units, failed=stats["failed"],
+                replicates=replicates))
+    warnings.extend(bias_warnings(performance, n_units, inside=setup.spec.inside))
     recommended, near = recommend_design(performance)
     return Comparison(int(n_units), tuple(performance), recommended, near, results, plans, tuple(warnings))
 
@@ -1154,16 +1263,18 @@ def parse_unit_range(text):
             else:
                 values.append(int(float(part)))
     except ValueError:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The range of units '{text}' cannot be read. Give whole numbers separated by commas "
-            "(e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20)."), text=text
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The range of units '{text}' cannot be read. Give whole numbers separated by commas "
+                "(e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20)."), text=text
         )) from None
     if backwards is not None:
         part, start, stop, step = backwards
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "In the range of units '{text}', '{part}' starts above where it stops (start {start}, stop {stop}), "
-            "so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. "
-            "{stop}:{start}:{step})."), text=text, part=part, start=start, stop=stop, step=step))
+        raise InputError(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "In the range of units '{text}', '{part}' starts above where it stops (start {start}, stop {stop}), "
+                "so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. "
+                "{stop}:{start}:{step})."), text=text, part=part, start=start, stop=stop, step=step))
     if any(v < layout.MIN_PER_STRATUM for v in values):
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Every number of units in the range must be at least {minimum}."),
