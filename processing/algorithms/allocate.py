@@ -16,12 +16,14 @@ from qgis.core import (
 from ...plugin import compat
 from .. import bridge
 from ..engine import allocation
-from ..report import svg
+from ..engine import edge
+from ..report import allocate as report_allocate
 from .base import PlotwiseAlgorithm
 
 HA_PER_M2 = 1e-4
-KM2_PER_HA = 0.01
 SD_PROXY_FIELD = "cov_sd"  # written by plotwise:stratify
+# LAYOUT_DESIGN: the layout that will place the units, as the design record it will write
+LAYOUT_RECORDS = (edge.RANDOM, edge.RANDOM_APART, edge.GRID, edge.BALANCED)
 
 REFERENCES = (
     "Neyman, J. (1934). On the two different aspects of the representative method: the method of "
@@ -49,6 +51,7 @@ class Allocate(PlotwiseAlgorithm):
     TARGET_CV = "TARGET_CV"
     UNIT_AREA = "UNIT_AREA"
     MIN_PER_STRATUM = "MIN_PER_STRATUM"
+    LAYOUT_DESIGN = "LAYOUT_DESIGN"
     OUTPUT = "OUTPUT"
     EXPECTED_CV = "EXPECTED_CV"
 
@@ -62,7 +65,7 @@ class Allocate(PlotwiseAlgorithm):
             "Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget "
             "C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).\n\n"
             "Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall "
-            "density meets it, with the finite-population correction; else a budget (if above 0, needs the "
+            "density meets it; else a budget (if above 0, needs the "
             "cost field); else the total number of units.\n\n"
             "Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be "
             "estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches "
@@ -75,6 +78,10 @@ class Allocate(PlotwiseAlgorithm):
             "either, the allocation is proportional.\n"
             "Mean field: the pilot mean count per unit, needed for CVs and for a target CV. "
             "Cost field: cost of surveying one unit in each stratum (for instance field days).\n\n"
+            "Layout to come: the finite-population correction 1 − n·a/A is used only when the units will not "
+            "overlap (systematic grid, spatially balanced, or simple random with a minimum spacing of at least "
+            "the unit's width); simple random centres without one may overlap, a continuous population with no "
+            "such correction (Cordy 1993). plotwise:estimate applies the same rule.\n\n"
             "Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), "
             "and a report comparing equal, proportional and Neyman allocation at the same total."
         )
@@ -149,6 +156,14 @@ class Allocate(PlotwiseAlgorithm):
                 defaultValue=allocation.DEFAULT_MIN_PER_STRATUM, minValue=1,
             )
         )
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.LAYOUT_DESIGN, self.tr("Layout to come (decides the finite-population correction)"),
+                [self.tr("Simple random (units may overlap: no correction)"),
+                 self.tr("Simple random with a minimum spacing of at least the unit's width"),
+                 self.tr("Systematic grid"), self.tr("Spatially balanced")], defaultValue=3, optional=True,
+            )
+        )
         self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Strata with allocation")))
         self.add_report_parameter()
         self.addOutput(QgsProcessingOutputNumber(self.EXPECTED_CV, self.tr("Expected CV of the overall density")))
@@ -211,6 +226,7 @@ class Allocate(PlotwiseAlgorithm):
             fixed_cost=self.parameterAsDouble(parameters, self.FIXED_COST, context),
             min_per_stratum=self.parameterAsInt(parameters, self.MIN_PER_STRATUM, context),
         )
+        layout_design = LAYOUT_RECORDS[self.parameterAsEnum(parameters, self.LAYOUT_DESIGN, context)]
         warnings = list(records.warnings)
         if sd_proxy:
             warnings.append(
@@ -235,6 +251,7 @@ class Allocate(PlotwiseAlgorithm):
                     "mean": naming(mean_field, self.tr("pilot mean")),
                     "cost": naming(cost_field, self.tr("cost")),
                 },
+                layout_design=layout_design,
                 **settings,
             )
         warnings.extend(self.translate_message(w) for w in result.warnings)
@@ -261,10 +278,10 @@ class Allocate(PlotwiseAlgorithm):
             raise self.cancelled_error()
 
         overall_cv = result.precision.cv if mean_field and np.isfinite(result.precision.cv) else None
-        report = self._report(
-            result, labels, layer, crs, unit_area_m2, sd_field, sd_proxy, mean_field, cost_field, cost_in_days,
-            settings, warnings,
-        )
+        inputs = report_allocate.AllocateReportInputs(
+            layer, crs.authid(), unit_area_m2, sd_field, sd_proxy, mean_field, cost_field, cost_in_days, settings,
+            layout_design)
+        report = report_allocate.allocate_report(self.new_report(""), result, labels, inputs, warnings)
         report_path = self.write_report(report, parameters, context, feedback)
         feedback.pushInfo(
             self.tr("{total} units allocated ({method}); expected CV of the overall density: {cv}.").format(
@@ -282,106 +299,3 @@ class Allocate(PlotwiseAlgorithm):
             "equal": self.tr("equal"), "proportional": self.tr("proportional to area"),
             "neyman": self.tr("Neyman"), "optimal_cost": self.tr("optimal with cost"),
         }
-
-    def _report(self, result, labels, layer, crs, unit_area_m2, sd_field, sd_proxy, mean_field, cost_field,
-                cost_in_days, settings, warnings):
-        p = result.precision
-        with_mean = mean_field is not None
-        with_sd = sd_field is not None
-        # density SE per km² (areas are in ha in the engine)
-        se_km2 = p.se_density / KM2_PER_HA
-        report = self.new_report(self.tr("Allocation of survey effort"))
-        method_names = self._method_names()
-        cost_unit = self.tr("field days") if cost_in_days else self.tr("cost units")
-        figures = [(self.tr("units in total"), f"{result.total:,}"), (self.tr("method"), method_names[result.method_used])]
-        if with_mean and np.isfinite(p.cv):
-            figures.append((self.tr("expected CV of the overall density"), f"{p.cv:.3f}"))
-        if cost_field:
-            figures.append((self.tr("field days needed") if cost_in_days else self.tr("cost"), f"{result.cost:,.1f}"))
-        report.key_figures(figures)
-        targets = {"total": self.tr("a total number of units"), "budget": self.tr("a budget"), "target_cv": self.tr("a target CV")}
-        report.parameters({
-            self.tr("Strata layer"): layer,
-            self.tr("Computation CRS"): crs.authid(),
-            self.tr("Method asked for"): method_names[result.method],
-            self.tr("Method applied"): method_names[result.method_used],
-            self.tr("Target"): targets[result.target],
-            self.tr("Total asked for"): settings["total"] if result.target == "total" else "–",
-            self.tr("Budget"): settings["budget"] if result.target == "budget" else "–",
-            self.tr("Target CV"): settings["target_cv"] if result.target == "target_cv" else "–",
-            self.tr("Unit area (m²)"): unit_area_m2,
-            self.tr("Minimum units per stratum"): settings["min_per_stratum"],
-            self.tr("SD field"): (sd_field + (self.tr(" (covariate proxy)") if sd_proxy else "")) if with_sd else "–",
-            self.tr("Mean field"): mean_field or "–",
-            self.tr("Cost field"): (f"{cost_field} ({cost_unit})" if cost_field else "–"),
-            self.tr("Fixed cost c0"): settings["fixed_cost"] if cost_field else "–",
-        })
-        report.warnings(warnings)
-
-        report.section(self.tr("Units per stratum"))
-        se_label = self.tr("SE of mean per unit (covariate units)") if sd_proxy else self.tr("SE of mean count per unit")
-        header = [self.tr("Stratum"), self.tr("Units that fit"), self.tr("Lower bound"), self.tr("Share before rounding"),
-                  self.tr("Units (n_alloc)"), self.tr("Sampling fraction")]
-        if with_sd:
-            header.append(se_label)
-            if not sd_proxy:
-                header.append(self.tr("SE of density (per km²)"))
-        if with_mean:
-            header.append(self.tr("Expected CV (exp_cv)"))
-        rows = []
-        for h, label in enumerate(labels):
-            row = [str(label), int(result.upper[h]), int(result.lower[h]), float(result.n_continuous[h]),
-                   int(result.n[h]), float(result.n[h] / result.capacity[h])]
-            if with_sd:
-                row.append(float(p.stratum_se_mean[h]))
-                if not sd_proxy:
-                    row.append(float(p.stratum_se_density[h] / KM2_PER_HA))
-            if with_mean:
-                row.append(float(p.stratum_cv[h]))
-            rows.append(row)
-        overall = [self.tr("all strata"), int(result.upper.sum()), int(result.lower.sum()),
-                   float(result.n_continuous.sum()), int(result.total), float(result.total / result.capacity.sum())]
-        if with_sd:
-            overall.append(float(p.se_mean))
-            if not sd_proxy:
-                overall.append(float(se_km2))
-        if with_mean:
-            overall.append(float(p.cv))
-        rows.append(overall)
-        report.table(header, rows)
-        report.figure(
-            svg.bar_chart_svg([str(label) for label in labels], [int(v) for v in result.n], self.tr("units per stratum")),
-            self.tr("Units allocated to each stratum"),
-        )
-        report.note(self.tr(
-            "Expected precision uses the pilot figures as if they were the truth, with the finite-population "
-            "correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds."
-        ))
-        if cost_field:
-            report.paragraph(
-                self.tr("{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.").format(
-                    what=self.tr("Field days needed") if cost_in_days else self.tr("Cost of the design"),
-                    c0=settings["fixed_cost"], var=result.cost - settings["fixed_cost"], total=result.cost,
-                    unit=cost_unit)
-            )
-
-        report.section(self.tr("What the choice of method buys, at {n} units").format(n=result.total))
-        header = [self.tr("Method")] + [self.tr("stratum {label}").format(label=label) for label in labels]
-        if with_sd:
-            header += [se_label, self.tr("Variance relative to the applied allocation")]
-        if with_mean:
-            header.append(self.tr("Expected CV"))
-        rows = []
-        for row in result.comparison:
-            cells = [method_names[row.method]] + [int(v) for v in row.n]
-            if with_sd:
-                cells += [float(row.precision.se_mean), float(row.relative_variance)]
-            if with_mean:
-                cells.append(float(row.precision.cv))
-            rows.append(cells)
-        report.table(header, rows)
-        if not with_sd:
-            report.paragraph(self.tr("Without standard deviations the precision of the designs cannot be compared."))
-        report.references(REFERENCES)
-        report.field_safety()
-        return report

@@ -20,31 +20,11 @@ from .. import bridge, raster_io
 from ..engine import design_comparison as engine
 from ..engine import estimation
 from ..engine.errors import InputError
-from ..engine.unit_shapes import LINE
-from ..report import svg
+from ..report import comparedesigns as report_comparedesigns
 from .base import PlotwiseAlgorithm
 
 
 M2_PER_KM2 = 1e6
-
-REFERENCES = (
-    "Cochran, W. G. (1977). Sampling Techniques, 3rd ed. Wiley (ch. 5 stratified random sampling, "
-    "ch. 6 ratio estimators, ch. 8 systematic sampling).",
-    "Neyman, J. (1934). On the two different aspects of the representative method. Journal of the Royal "
-    "Statistical Society 97, 558-625.",
-    "Robertson, B. L., Brown, J. A., McDonald, T. & Jaksons, P. (2013). BAS: Balanced acceptance sampling "
-    "of natural resources. Biometrics 69, 776-784.",
-    "Satterthwaite, F. E. (1946). An approximate distribution of estimates of variance components. "
-    "Biometrics Bulletin 2, 110-114.",
-    "Johnson, N. L., Kemp, A. W. & Kotz, S. (2005). Univariate Discrete Distributions, 3rd ed. Wiley "
-    "(Poisson sums; the negative binomial as a gamma-Poisson mixture).",
-    "Morris, T. P., White, I. R. & Crowther, M. J. (2019). Using simulation studies to evaluate statistical "
-    "methods. Statistics in Medicine 38, 2074-2102.",
-)
-LOCAL_REFERENCE = (
-    "Stevens, D. L. & Olsen, A. R. (2003). Variance estimation for spatially balanced samples of "
-    "environmental resources. Environmetrics 14, 593-610."
-)
 
 OUTPUT_FIELDS = [
     ("design", "string", 30), ("code", "int"), ("n_asked", "int"), ("mean_n", "double"), ("alloc", "string", 120),
@@ -73,6 +53,7 @@ class CompareDesigns(PlotwiseAlgorithm):
     OVERDISPERSION = "OVERDISPERSION"
     VARIANCE_METHOD = "VARIANCE_METHOD"
     N_RANGE = "N_RANGE"
+    PILOT_UNITS = "PILOT_UNITS"
     OUTPUT_TABLE = "OUTPUT_TABLE"
     RECOMMENDED = "RECOMMENDED"
 
@@ -99,13 +80,19 @@ class CompareDesigns(PlotwiseAlgorithm):
             "All designs survey the same populations, so their differences are not blurred.\n\n"
             "Designs: simple random; stratified with proportional allocation; stratified with Neyman "
             "allocation, n_h ∝ A_h·S_h with S_h the SD of a unit's count implied by the surface (Neyman "
-            "1934); systematic grid with a random start (its n varies); spatially balanced (balanced "
-            "acceptance sampling, Robertson et al. 2013).\n\n"
+            "1934): the best case, since no survey knows the true S_h; systematic grid with a random start (its "
+            "n varies); spatially balanced (balanced acceptance sampling, Robertson et al. 2013); stratified "
+            "Neyman from a pilot: in every simulated survey S_h is estimated from a pilot of the given number "
+            "of simple random units per stratum (of an independent realisation, a pilot season), as a real "
+            "survey would estimate it.\n\n"
             "Units: point station (size = counting radius), square plot (side), circular plot (radius), line "
             "transect (length, counting a strip of the given half-width on each side). Bearing in degrees "
-            "clockwise from grid north, −1 random. Keep units inside: centres are drawn from each stratum "
-            "shrunk by the unit's radius, as the layout's option does. Otherwise a unit reaching over the "
-            "edge of its stratum or of the frame counts only the part inside, and its area is that part.\n\n"
+            "clockwise from grid north, −1 random (the default: a grid aligned with straight edges puts whole rows "
+            "in the edge band at once). Edges follow the layout's protocol: by default plus sampling, with "
+            "centres over each stratum (or the frame) grown by the unit's reach, each unit counting only the "
+            "cells of its own stratum with its nominal area, and the estimate expanding to the grown area "
+            "(Gregoire & Valentine 2008, ch. 10); with keep units inside, centres from each stratum shrunk by "
+            "the unit's radius, as the layout's option does.\n\n"
             "Output table, one row per design: rel_bias (relative bias against each population's true total), "
             "emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), "
             "rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % "
@@ -138,7 +125,8 @@ class CompareDesigns(PlotwiseAlgorithm):
             QgsProcessingParameterEnum(
                 self.DESIGNS, self.tr("Designs to compare"),
                 [self.tr("Simple random"), self.tr("Stratified, proportional allocation"),
-                 self.tr("Stratified, Neyman allocation"), self.tr("Systematic grid"), self.tr("Spatially balanced")],
+                 self.tr("Stratified, Neyman allocation with the true S_h (best case)"), self.tr("Systematic grid"),
+                 self.tr("Spatially balanced"), self.tr("Stratified, Neyman allocation from a pilot survey")],
                 allowMultiple=True, defaultValue=[0, 1, 2, 3, 4],
             )
         )
@@ -169,7 +157,7 @@ class CompareDesigns(PlotwiseAlgorithm):
         self.addParameter(
             QgsProcessingParameterNumber(
                 self.BEARING, self.tr("Bearing of units and grid (degrees from grid north; −1 random)"),
-                type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=-1.0, maxValue=359.999,
+                type=compat.NUMBER_DOUBLE, defaultValue=-1.0, minValue=-1.0, maxValue=359.999,
             )
         )
         self.addParameter(
@@ -193,7 +181,8 @@ class CompareDesigns(PlotwiseAlgorithm):
         self.addParameter(
             QgsProcessingParameterEnum(
                 self.VARIANCE_METHOD, self.tr("Variance estimator for the grid and balanced designs"),
-                [self.tr("Simple random sampling formula"), self.tr("Local neighbourhood (Stevens & Olsen 2003)")],
+                [self.tr("Simple random sampling formula"), self.tr("Local neighbourhood (Stevens & Olsen 2003)"),
+                 self.tr("Local neighbourhood, scaled to the simple formula (our variant)")],
                 defaultValue=0,
             )
         )
@@ -203,6 +192,11 @@ class CompareDesigns(PlotwiseAlgorithm):
                 defaultValue="", optional=True,
             )
         )
+        pilot = QgsProcessingParameterNumber(
+            self.PILOT_UNITS, self.tr("Pilot units per stratum for the pilot-based Neyman design"),
+            type=compat.NUMBER_INTEGER, defaultValue=engine.DEFAULT_PILOT_UNITS, minValue=2, maxValue=1000)
+        pilot.setFlags(pilot.flags() | compat.FLAG_ADVANCED)
+        self.addParameter(pilot)
         self.add_seed_parameter()
         self.addParameter(
             QgsProcessingParameterFeatureSink(self.OUTPUT_TABLE, self.tr("Design comparison"), compat.TYPE_VECTOR)
@@ -275,8 +269,8 @@ class CompareDesigns(PlotwiseAlgorithm):
         n_units = self.parameterAsInt(parameters, self.N_UNITS, context)
         replicates = self.parameterAsInt(parameters, self.REPLICATES, context)
         k = self.parameterAsDouble(parameters, self.OVERDISPERSION, context)
-        variance_method = (estimation.VARIANCE_SRS, estimation.VARIANCE_LOCAL)[
-            self.parameterAsEnum(parameters, self.VARIANCE_METHOD, context)]
+        variance_method = estimation.VARIANCE_METHODS[self.parameterAsEnum(parameters, self.VARIANCE_METHOD, context)]
+        pilot_units = self.parameterAsInt(parameters, self.PILOT_UNITS, context)
         seeded = self.seeded_generator(parameters, context, feedback)
         rng = seeded.generator
 
@@ -299,7 +293,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             setup = engine.prepare_comparison(grid, frame, region, shape, size, rng, strata, keys, bearing, k,
                                               inside=inside, strata_ids=strata_ids,
                                               frame_parts=[g for g, _ in frame_parts],
-                                              frame_ids=[f for _, f in frame_parts])
+                                              frame_ids=[f for _, f in frame_parts], pilot_units=pilot_units)
             warnings.extend(self.translate_message(w) for w in setup.warnings)
             main_end = 70.0 if [m for m in n_range if m != n_units] else 95.0
             comparison = engine.compare_designs(
@@ -337,7 +331,9 @@ class CompareDesigns(PlotwiseAlgorithm):
             "n_units": n_units, "replicates": replicates, "k": k, "variance_method": variance_method,
             "seed": seeded.seed, "n_range": n_range,
         }
-        report = self._report(comparison, curve, setup, settings, warnings)
+        settings["pilot_units"] = pilot_units
+        report = report_comparedesigns.comparedesigns_report(self.new_report(""), comparison, curve, setup, settings,
+                                                             warnings)
         report_path = self.write_report(report, parameters, context, feedback)
         if recommended:
             best = comparison.by_design(comparison.recommended)
@@ -346,185 +342,6 @@ class CompareDesigns(PlotwiseAlgorithm):
                                                                       rel=best.rel_rmse, cov=best.coverage))
         feedback.setProgress(100)
         return {self.OUTPUT_TABLE: dest_id, self.REPORT: report_path, self.RECOMMENDED: recommended}
-
-    # ------------------------------------------------------------------------------
-    def _report(self, comparison, curve, setup, settings, warnings):
-        report = self.new_report(self.tr("Survey designs compared by simulation"))
-        grid = setup.grid
-        best = comparison.by_design(comparison.recommended) if comparison.recommended is not None else None
-        figures = []
-        if best is not None:
-            figures += [
-                (self.tr("recommended design"), self.design_name(best.design)),
-                (self.tr("its RMSE (animals)"), f"{best.rmse:,.1f}"),
-                (self.tr("its RMSE relative to the total"), f"{best.rel_rmse:.1%}"),
-                (self.tr("its 95 % interval coverage"), f"{best.coverage:.0%}"),
-            ]
-        figures.append((self.tr("expected animals in the frame"), f"{grid.expected_total:,.0f}"))
-        report.key_figures(figures)
-        shapes = [self.tr("point station"), self.tr("square plot"), self.tr("circular plot"), self.tr("line transect")]
-        size_labels = [self.tr("counting radius"), self.tr("side"), self.tr("radius"), self.tr("length")]
-        shape = settings["shape"]
-        unit_text = f"{shapes[shape]}, {size_labels[shape]} {settings['size']:g} m"
-        if shape == LINE:
-            unit_text += self.tr(", strip half-width {w:g} m").format(w=settings["half_width"])
-        params = {
-            self.tr("Density surface"): settings["surface"],
-            self.tr("Sampling frame"): settings["frame"],
-            self.tr("Strata"): settings["strata"] or self.tr("none"),
-            self.tr("Stratum field"): settings["stratum_field"] or ("–" if not settings["strata"] else self.tr("feature id")),
-            self.tr("Computation CRS"): settings["crs"],
-            self.tr("Surface cell"): f"{grid.cell_width:g} × {grid.cell_height:g} m",
-            self.tr("Sub-cells per cell side (for counting)"): setup.factor,
-            self.tr("Unit"): unit_text,
-            self.tr("Counted area per unit (m²)"): round(setup.region.area, 1),
-            self.tr("Bearing"): self.tr("random") if settings["bearing"] < 0 else f"{settings['bearing']:g}°",
-            self.tr("Units wholly inside their stratum"): self.tr("yes") if settings["inside"] else self.tr("no"),
-            self.tr("Number of units"): settings["n_units"],
-            self.tr("Simulated surveys per design"): settings["replicates"],
-            self.tr("Counts per cell"): (self.tr("negative binomial, k = {k:g}").format(k=settings["k"]) if settings["k"] > 0
-                                    else self.tr("Poisson")),
-            self.tr("Variance estimator (grid, balanced)"): (self.tr("local neighbourhood") if settings["variance_method"] == "local"
-                                                        else self.tr("simple random sampling formula")),
-            self.tr("Confidence level"): "95 %",
-            self.tr("Seed"): settings["seed"],
-        }
-        report.parameters(params)
-        report.warnings(warnings)
-
-        report.section(self.tr("How the designs did at {n} units").format(n=comparison.n_units))
-        header = [self.tr("Design"), self.tr("Mean units surveyed"), self.tr("Relative bias"), self.tr("Empirical SE (animals)"),
-                  self.tr("RMSE (animals)"), self.tr("± Monte Carlo SE"), self.tr("RMSE / total"), self.tr("Mean estimated CV"),
-                  self.tr("95 % interval coverage"), self.tr("Surveys without an estimate")]
-        rows = []
-        for p in comparison.performance:
-            name = self.design_name(p.design) + (" ★" if p.design == comparison.recommended else "")
-            rows.append([name, p.mean_n, _pct(p.rel_bias), p.emp_se, p.rmse, p.rmse_mc_se, _pct(p.rel_rmse),
-                         p.mean_cv, _pct(p.coverage, 0), p.failed])
-        report.table(header, rows)
-        tested = [p for p in comparison.performance if np.isfinite(engine.bias_standard_error(p))]
-        noises = [engine.bias_noise(p, len(tested)) for p in tested]  # the threshold of the bias warning
-        noises = [v for v in noises if np.isfinite(v)]
-        if noises:
-            noise = max(noises)
-            report.paragraph(self.tr(
-                "Each figure is itself an estimate from {reps} simulated surveys: relative biases within about "
-                "±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. "
-                "More surveys per design narrow both.").format(reps=settings["replicates"], noise=noise))
-        names = [self.design_name(p.design) for p in comparison.performance]
-        highlight = next((i for i, p in enumerate(comparison.performance) if p.design == comparison.recommended), None)
-        report.figure(
-            svg.bar_chart_svg(names, [p.rmse for p in comparison.performance], self.tr("RMSE of the abundance (animals)"),
-                              highlight=highlight),
-            self.tr("Root mean square error of the abundance estimate, by design (lower is better)"),
-        )
-        report.section(self.tr("Recommendation"))
-        if best is None:
-            report.paragraph(self.tr("No design gave estimates: see the warnings."))
-        else:
-            text = self.tr(
-                "{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true "
-                "total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the "
-                "time."
-            ).format(name=self.design_name(best.design), rmse=best.rmse, rel=best.rel_rmse, total=best.mean_true)
-            if comparison.near_best:
-                text += " " + self.tr(
-                    "{others} did about as well: the differences lie within the Monte Carlo error of the simulation. "
-                    "Among these, choose the one that is easiest to carry out in the field."
-                ).format(others=", ".join(self.design_name(d) for d in comparison.near_best))
-            report.paragraph(text)
-            poor = [self.design_name(p.design) for p in comparison.performance if np.isfinite(p.coverage) and p.coverage < engine.ACCEPTABLE_COVERAGE]
-            if poor:
-                report.paragraph(self.tr(
-                    "The intervals of {names} held the truth less than 90 % of the time: their stated precision would "
-                    "mislead.").format(names=", ".join(poor)))
-            if best.design == engine.SYSTEMATIC_GRID or any(
-                    p.design == engine.SYSTEMATIC_GRID for p in comparison.performance):
-                report.note(self.tr(
-                    "The systematic grid's number of units varies from survey to survey (mean shown). With the simple "
-                    "random sampling formula its interval is usually conservative on smooth surfaces."))
-
-        if setup.strata is not None:
-            self._strata_section(report, comparison, setup)
-        if curve:
-            self._curve_section(report, comparison, curve)
-
-        report.section(self.tr("How the simulation works"))
-        report.paragraph(self.tr(
-            "Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or "
-            "negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. "
-            "Every design is laid out with the layout engine, each unit counts the animals of the cells whose "
-            "centres it covers (only the part inside the frame, or inside its own stratum for the stratified "
-            "designs), and the abundance is estimated with the estimation engine: the ratio estimator with its "
-            "t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its "
-            "own population."
-        ))
-        report.note(self.tr(
-            "Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals "
-            "do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; "
-            "use the comparison to rank designs and to size the effort, not as a promise of precision."
-        ))
-        report.references(REFERENCES)
-        if settings["variance_method"] == "local":
-            report.references([LOCAL_REFERENCE])
-        report.field_safety()
-        return report
-
-    def _strata_section(self, report, comparison, setup):
-        report.section(self.tr("Strata"))
-        grid = setup.grid
-        allocations = {plan.design: plan.allocation for plan in comparison.plans}
-        header = [self.tr("Stratum"), self.tr("Area (km²)"), self.tr("Mean expected count per unit"), self.tr("S_h (count SD per unit)")]
-        if engine.STRATIFIED_PROPORTIONAL in allocations:
-            header.append(self.tr("Units, proportional"))
-        if engine.STRATIFIED_NEYMAN in allocations:
-            header.append(self.tr("Units, Neyman"))
-        rows = []
-        for i, st in enumerate(setup.strata.strata):
-            row = [str(st.key), float(grid.stratum_areas_km2[setup.stratum_codes[i]]), float(setup.stratum_mean[i]),
-                   float(setup.stratum_sd[i])]
-            for design in (engine.STRATIFIED_PROPORTIONAL, engine.STRATIFIED_NEYMAN):
-                if design in allocations:
-                    row.append(int(allocations[design][i]))
-            rows.append(row)
-        report.table(header, rows)
-        report.paragraph(self.tr(
-            "S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of "
-            "the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) "
-            "variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman "
-            "1934; Cochran 1977, §5.5), with at least 2 per stratum.").format(draws=engine.SD_DRAWS))
-
-    def _curve_section(self, report, comparison, curve):
-        report.section(self.tr("RMSE against the number of units"))
-        points = sorted([comparison] + [c for c in curve if c.n_units != comparison.n_units], key=lambda c: c.n_units)
-        ns = [c.n_units for c in points]
-        series = []
-        for p in comparison.performance:
-            series.append((self.design_name(p.design), [c.by_design(p.design).rmse for c in points]))
-        report.figure(
-            svg.line_chart_svg(ns, series, self.tr("number of units"), self.tr("RMSE (animals)")),
-            self.tr("RMSE of the abundance estimate against the number of units"),
-        )
-        header = [self.tr("Units")] + [self.design_name(p.design) for p in comparison.performance]
-        rows = [[c.n_units] + [c.by_design(p.design).rmse for p in comparison.performance] for c in points]
-        report.table(header, rows, caption=self.tr("RMSE (animals)"))
-        best = comparison.recommended if comparison.recommended is not None else comparison.performance[0].design
-        values = [c.by_design(best).rmse for c in points]
-        if len(points) >= 2 and all(np.isfinite(values)):
-            gains = []
-            for (a, va), (b, vb) in zip(zip(ns, values), zip(ns[1:], values[1:])):
-                gains.append(self.tr("{a} → {b} units: RMSE {change:+.0%}").format(a=a, b=b, change=vb / va - 1 if va > 0 else 0))
-            report.paragraph(self.tr("For {name}: ").format(name=self.design_name(best)) + "; ".join(gains) + ".")
-        report.note(self.tr(
-            "The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve "
-            "flattens, more units buy little; spend the effort on better counts (detection) or a better surface "
-            "instead."))
-
-
-def _pct(value, digits=1):
-    if value is None or not np.isfinite(value):
-        return None
-    return f"{value:.{digits}%}"
 
 
 def performance_row(p, recommended):

@@ -171,3 +171,17 @@ def test_null_stratum_id_is_an_error_naming_the_feature(plotwise_registered):
     text = str(err.value)
     assert "NULL" in text and "feature(s) 2." in text and "'stratum'" in text and "'strata'" in text
     del err
+
+
+def test_layout_design_decides_the_finite_population_correction(plotwise_registered, tmp_path):
+    # Cochran (1977), ch. 5: V = Σ W² S² (1 − f) / n for non-overlapping units; simple random centres may overlap
+    # and get no correction (Cordy 1993), so their expected CV is larger at the same allocation
+    import processing
+
+    common = {"STRATA": _strata_layer(ROWS), "STRATUM_FIELD": "stratum", "AREA_FIELD": "area_ha", "SD_FIELD": "sd_c",
+              "MEAN_FIELD": "mean_c", "METHOD": 2, "TOTAL": 60, "UNIT_AREA": 100000.0, "OUTPUT": "memory:",
+              "REPORT": str(tmp_path / "a.html")}
+    grid = processing.run("plotwise:allocate", dict(common, LAYOUT_DESIGN=2))
+    srs = processing.run("plotwise:allocate", dict(common, LAYOUT_DESIGN=0))
+    assert srs["EXPECTED_CV"] > grid["EXPECTED_CV"]
+    assert "without a finite-population correction" in (tmp_path / "a.html").read_text(encoding="utf-8")

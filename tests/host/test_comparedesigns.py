@@ -240,3 +240,22 @@ def test_unit_range_starting_above_its_stop_is_an_error(registered, run_alg, tmp
         })
     assert "100:20:20" in str(err.value) and "20:100:20" in str(err.value)
     del err
+
+
+def test_pilot_based_neyman_is_compared_beside_the_best_case(registered, run_alg, tmp_path):
+    surface = _surface(tmp_path / "density.tif")
+    report = tmp_path / "compare.html"
+    result = run_alg("plotwise:comparedesigns", {
+        "SURFACE": surface, "FRAME": _polygons([(FRAME, [])]), "STRATA": _polygons(STRATA, [("stratum", "string")]),
+        "STRATUM_FIELD": "stratum", "DESIGNS": [2, 5], "N_UNITS": 20, "SHAPE": 1, "SIZE": 100.0, "REPLICATES": 20,
+        "PILOT_UNITS": 4, "SEED": 3, "OUTPUT_TABLE": "memory:", "REPORT": str(report),
+    })
+    table = result["OUTPUT_TABLE"]
+    if isinstance(table, str):
+        from qgis.core import QgsProcessingContext, QgsProcessingUtils
+
+        table = QgsProcessingUtils.mapLayerFromString(table, QgsProcessingContext())
+    names = {f["code"]: f["design"] for f in table.getFeatures()}
+    assert "best case" in names[2] and "pilot" in names[5]
+    html = report.read_text(encoding="utf-8")
+    assert "pilot of 4 simple random units per stratum" in html

@@ -138,9 +138,10 @@ def test_known_numbers_and_outputs(registered, run_alg, tmp_path):
 
 def test_hectares_and_lognormal(registered, run_alg, tmp_path):
     results, _ = _run(run_alg, tmp_path, _units_layer(), AREA_UNIT=1, CI_METHOD=1)
-    total, se, _, _, _ = _expected(area_unit_m2=1e4)
+    total, se, df, _, _ = _expected(area_unit_m2=1e4)
     assert results["DENSITY"] == pytest.approx(total / 300.0, rel=1e-9)  # per ha
-    c = math.exp(stats.norm.ppf(0.975) * math.sqrt(math.log(1 + (se / total) ** 2)))  # Buckland et al. (2001)
+    # Buckland et al. (2001), §3.6.1: t with the Satterthwaite df, scipy.stats as the oracle
+    c = math.exp(stats.t.ppf(0.975, df) * math.sqrt(math.log(1 + (se / total) ** 2)))
     assert results["ABUNDANCE_LO"] == pytest.approx(total / c, rel=1e-9)
 
 
@@ -189,9 +190,11 @@ def test_target_cv_and_bootstrap_seeded(registered, run_alg, tmp_path):
     s = np.array([np.std(COUNTS[1], ddof=1), np.std(COUNTS[2], ddof=1)])
     total = sum(np.mean(COUNTS[h]) * m[h - 1] for h in (1, 2))
     n = (m * s).sum() ** 2 / (0.1 * total) ** 2
-    expected = np.maximum(np.ceil(n * m * s / (m * s).sum()), 2).astype(int)
-    assert [rows["1"]["n_next"], rows["2"]["n_next"]] == expected.tolist()
-    assert rows["all"]["n_next"] == expected.sum()
+    planned = np.array([rows["1"]["n_next"], rows["2"]["n_next"]])
+    assert rows["all"]["n_next"] == planned.sum() and np.all(planned >= 2)
+    # the plan meets the CV (Cochran 1977, eq. 5.7) at no more than one unit per stratum above the optimum
+    assert math.sqrt(np.sum(m ** 2 * s ** 2 / planned)) / total <= 0.1
+    assert math.ceil(n) <= planned.sum() <= math.ceil(n) + 2
     html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
     assert "Seed" in html and "bootstrap resamples" in html and "The overall interval by method" in html
 
@@ -251,7 +254,8 @@ def test_single_unit_stratum_is_collapsed_with_a_warning(registered, run_alg, tm
     results, feedback = _run(run_alg, tmp_path, _units_layer(counts={1: COUNTS[1], 2: [10]}))
     assert any("collapsed" in w and "2" in w for w in feedback.warnings)
     rows = {f["stratum"]: f for f in _layer(results["OUTPUT_TABLE"]).getFeatures()}
-    assert rows["2"]["abund_se"] > 0 and rows["2"]["df"] == 5  # pooled group of 6 units: 5 df
+    # the pairs formula's one contrast: 1 df (Cochran 1977, §5A.12); the partner keeps its own n − 1
+    assert rows["2"]["abund_se"] > 0 and rows["2"]["df"] == 1 and rows["1"]["df"] == len(COUNTS[1]) - 1
 
 
 def test_without_stratum_field_the_frame_is_one_stratum(registered, run_alg, tmp_path):
@@ -357,7 +361,7 @@ def test_bootstrap_interval_of_a_one_unit_stratum_holds_its_estimate(registered,
     assert rows["2"]["abund_lo"] < 1000.0 < rows["2"]["abund_hi"]
     assert results["ABUNDANCE_LO"] < results["ABUNDANCE"] < results["ABUNDANCE_HI"]
     html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
-    assert "centred on its own estimate" in html
+    assert "were paired with a partner fixed before the counts were seen" in html
 
 
 def test_warnings_of_reading_the_layers_are_shown_once(registered, run_alg, tmp_path):
@@ -369,3 +373,70 @@ def test_warnings_of_reading_the_layers_are_shown_once(registered, run_alg, tmp_
     strata.dataProvider().addFeatures([bowtie])
     _, feedback = _run(run_alg, tmp_path, _units_layer(), STRATA=strata)
     assert sum("invalid geometry repaired" in w for w in feedback.warnings) == 1
+
+
+def _with_design(layer, design, edge="", reach=0.0):
+    """A copy of ``layer`` whose units carry the layout's design record (fields design, edge, reach_m)."""
+    from plotwise.plugin import compat
+
+    out = QgsVectorLayer("Polygon?crs=EPSG:32633", "units", "memory")
+    out.dataProvider().addAttributes(list(layer.fields()) + [compat.make_field("design", "string", 10),
+                                                              compat.make_field("edge", "string", 8),
+                                                              compat.make_field("reach_m", "double")])
+    out.updateFields()
+    features = []
+    for f in layer.getFeatures():
+        g = QgsFeature(out.fields())
+        g.setGeometry(f.geometry())
+        g.setAttributes(list(f.attributes()) + [design, edge, reach])
+        features.append(g)
+    out.dataProvider().addFeatures(features)
+    return out
+
+
+def test_only_the_pinned_parameters_run(registered, run_alg):
+    # DESIGN.md: a model naming only the pinned parameters must run (DETECTION_DF and the rest take defaults)
+    results = run_alg("plotwise:estimate", {
+        "UNITS": _units_layer(), "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum", "UNIT_AREA_FIELD": "",
+        "UNIT_AREA": 0.0, "STRATA": _strata_layer(), "STRATA_ID_FIELD": "stratum", "CONFIDENCE": 0.95,
+        "CI_METHOD": 0, "FPC": False, "DETECTION_P": 1.0, "DETECTION_SE": 0.0, "AREA_UNIT": 0, "TARGET_CV": 0.0,
+        "SEED": 1, "OUTPUT": "memory:", "OUTPUT_TABLE": "memory:"})
+    assert results["ABUNDANCE"] == pytest.approx(_expected()[0], rel=1e-9)
+
+
+def test_fpc_is_refused_for_units_that_may_overlap(registered, run_alg, tmp_path):
+    # Cordy (1993): simple random centres form a continuous population, no correction; a grid's units do not
+    # overlap, so the correction applies (Cochran 1977, §2.4); by hand with the textbook formulas above
+    random_units, feedback = _run(run_alg, tmp_path, _with_design(_units_layer(), "random"), FPC=True)
+    plain, _ = _run(run_alg, tmp_path, _units_layer(), FPC=False)
+    assert random_units["ABUNDANCE_HI"] == pytest.approx(plain["ABUNDANCE_HI"], rel=1e-12)
+    assert any("finite-population correction was not applied" in w for w in feedback.warnings)
+    grid, _ = _run(run_alg, tmp_path, _with_design(_units_layer(), "grid"), FPC=True)
+    assert grid["ABUNDANCE_HI"] < plain["ABUNDANCE_HI"]
+    html = (tmp_path / "estimate.html").read_text(encoding="utf-8")
+    assert "assumes that the units do not overlap" not in html  # recorded: nothing to assume
+    _run(run_alg, tmp_path, _units_layer(), FPC=True)
+    assert "assumes that the units do not overlap" in (tmp_path / "estimate.html").read_text(encoding="utf-8")
+
+
+def test_plus_sampled_units_expand_to_the_grown_strata(registered, run_alg, tmp_path):
+    # Gregoire & Valentine (2008), ch. 10: N_h = A⁺_h Σy / Σa. A rectangle buffered by d = R / cos(π/64) (the
+    # plus region keeps its 16 chords per quarter circle outside the circle of radius R) has the area
+    # A + P d + 32 d² sin(2π/64): its edges moved out by d, and the corners a regular 64-gon of circumradius d
+    reach = 70.0
+    d = reach / math.cos(math.pi / 64)
+    results, _ = _run(run_alg, tmp_path, _with_design(_units_layer(), "random", "plus", reach))
+    expected = 0.0
+    for h, values in COUNTS.items():
+        width, height = STRATA[h][1] - STRATA[h][0], STRATA[h][2]
+        grown = width * height + 2 * (width + height) * d + 32 * d ** 2 * math.sin(2 * math.pi / 64)
+        expected += np.mean(values) / UNIT_M2 * grown
+    assert results["ABUNDANCE"] == pytest.approx(expected, rel=1e-9)
+
+
+def test_detection_df_narrows_nothing_and_widens_the_interval(registered, run_alg, tmp_path):
+    known, _ = _run(run_alg, tmp_path, _units_layer(), DETECTION_P=0.6, DETECTION_SE=0.1)
+    few, feedback = _run(run_alg, tmp_path, _units_layer(), DETECTION_P=0.6, DETECTION_SE=0.1, DETECTION_DF=4)
+    # Buckland et al. (2001), eq. 3.75: fewer df for p, a larger t quantile, the same estimate and SE
+    assert few["ABUNDANCE"] == pytest.approx(known["ABUNDANCE"], rel=1e-12)
+    assert few["ABUNDANCE_HI"] > known["ABUNDANCE_HI"]
