@@ -169,6 +169,7 @@ def step_pilot(demo):
     counts = demo.run("plotwise:simulatecounts", {
         "UNITS": layout["OUTPUT"], "ANIMALS": demo.layer_uri("animals"), "DETECTION": 1.0,
         "SEED": SEED + 11, "OUTPUT": demo.table("pilot_counted"),
+        "STRATA": stratify["OUTPUT"], "STRATA_ID_FIELD": "stratum",  # plus sampling: count inside the stratum
     })
     estimate = demo.run("plotwise:estimate", {
         "UNITS": counts["OUTPUT"], "COUNT_FIELD": "count", "STRATUM_FIELD": "stratum",
@@ -262,12 +263,15 @@ def step_counts(demo):
     if layout is None:
         print("  plotwise:simulatecounts skipped: no layout yet")
         return
+    strata = next((demo.results[k]["OUTPUT"] for k in ("allocate", "stratify", "frame") if demo.results.get(k)), None)
     demo.results["counts"] = demo.run("plotwise:simulatecounts", {
         "UNITS": layout["OUTPUT"],
         "ANIMALS": demo.layer_uri("animals"),
         "DETECTION": 1.0,
         "SEED": SEED + 1,
         "OUTPUT": demo.table("units_counted"),
+        # plus sampling (the layout's default): each unit counts only the animals inside its own stratum
+        **({"STRATA": strata, "STRATA_ID_FIELD": "stratum"} if strata is not None else {}),
     })
     demo.layers.append(("Units with counts", demo.layer_uri("units_counted"), "ogr", "units"))
 

@@ -40,6 +40,8 @@ REFERENCES = (
     "universe. Statistics & Probability Letters 18, 353-362.",
     "Diggle, P. J. (2003). Statistical Analysis of Spatial Point Patterns, 2nd ed. Arnold (simple sequential inhibition).",
     "Turk, G. (1990). Generating random points in triangles. In Graphics Gems, ed. A. Glassner, 24-28. Academic Press.",
+    "Gregoire, T. G. & Valentine, H. T. (2008). Sampling Strategies for Natural Resources and the Environment. "
+    "Chapman & Hall/CRC, ch. 10 (plus sampling at the edges).",
 )
 
 MAX_MAP_UNITS = 5000  # more units than this are drawn as a systematic subset on the report map
@@ -88,15 +90,23 @@ class LayoutUnits(PlotwiseAlgorithm):
             "Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular "
             "plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in "
             "degrees clockwise from grid north, or −1 for a random bearing per unit.\n"
-            "Keep units inside: centres are drawn from the stratum shrunk by the unit's circumscribing radius, "
-            "so every unit lies wholly inside its stratum; the shrunk (effective) area is reported and used "
-            "for the inclusion probabilities.\n"
+            "Edges: by default plus sampling (Gregoire & Valentine 2008, ch. 10): centres are drawn over the "
+            "stratum grown by the unit's reach R (its circumscribing radius), and a unit near or beyond the edge "
+            "is surveyed only inside its own stratum (count only the animals inside the stratum; a centre may "
+            "lie outside it, even outside the frame: never enter ground that was excluded as unsafe, survey the "
+            "part inside from within). Every animal then has the same chance of being counted, and "
+            "plotwise:estimate expands the counts to the grown area. Keep units inside instead draws centres "
+            "from the stratum shrunk by R, so every unit lies wholly inside its stratum but the edge band is "
+            "never reached (biased where animals near the edge differ). The effective area (grown or shrunk) is "
+            "reported and used for the inclusion probabilities.\n"
             "Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.\n"
             "Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit "
             "that cannot be surveyed is replaced by the next unused reserve of the same stratum.\n\n"
             "Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points "
-            "without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an "
-            "empty count field for the field teams. The GPX file holds one waypoint per unit (a start and an end "
+            "without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), an "
+            "empty count field for the field teams, and the design record for the estimate: design (random, "
+            "random_sep, grid, grid_ovl or balanced: whether the units can overlap, which decides the "
+            "finite-population correction), edge (plus or inside) and reach_m (R, m). The GPX file holds one waypoint per unit (a start and an end "
             "waypoint per transect), named by unit_id.\n\n"
             "Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one "
             "a warning. Features under 1 m² (slivers) are skipped, with a warning.\n\n"
@@ -152,7 +162,9 @@ class LayoutUnits(PlotwiseAlgorithm):
             )
         )
         self.addParameter(
-            QgsProcessingParameterBoolean(self.INSIDE, self.tr("Keep every unit wholly inside its stratum"), defaultValue=True)
+            QgsProcessingParameterBoolean(
+                self.INSIDE, self.tr("Keep every unit wholly inside its stratum (off: plus sampling)"),
+                defaultValue=False)
         )
         self.addParameter(
             QgsProcessingParameterNumber(
@@ -291,6 +303,7 @@ class LayoutUnits(PlotwiseAlgorithm):
         for item in (
             ("role", "string", 8), ("draw_ord", "int"), ("area_m2", "double", 20, 3), ("incl_p", "double", 24, 12),
             ("weight", "double", 24, 6), ("lon", "double", 14, 8), ("lat", "double", 14, 8), ("count", "int"),
+            ("design", "string", 10), ("edge", "string", 8), ("reach_m", "double", 20, 3),
         ):
             fields.append(compat.make_field(*item))
         wkb = {engine.POINT: compat.WKB_POINT, engine.LINE: compat.WKB_LINESTRING}.get(spec.shape, compat.WKB_POLYGON)
@@ -306,6 +319,7 @@ class LayoutUnits(PlotwiseAlgorithm):
             list(result.unit_id), [1 if k is None else k for k in result.stratum], list(result.role),
             result.draw_ord.tolist(), column(result.area_m2), column(result.incl_p), column(result.weight),
             column(result.lon), column(result.lat), [null] * len(result),
+            list(result.design), [spec.edge] * len(result), [float(spec.reach)] * len(result),
         ]
         kind = {engine.POINT: "point", engine.LINE: "line"}.get(spec.shape, "polygon")
         written = bridge.write_rows(sink, bridge.wkb_geometries(result.outlines, kind), [list(r) for r in zip(*columns)],
@@ -353,6 +367,16 @@ class LayoutUnits(PlotwiseAlgorithm):
                "the area in m² each unit stands for (Cordy 1993).") if density else
             self.tr("incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.")
         )
+        if not spec.inside and spec.reach > 0:
+            report.paragraph(
+                self.tr("Plus sampling: centres were drawn over each stratum grown by {r} m (the unit's reach), so "
+                   "units near the edge reach over it, and some centres lie outside their stratum. Survey only the "
+                   "part of each unit inside its own stratum and count only the animals there (the map shows the "
+                   "strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or "
+                   "unsafe ground to reach a centre: survey the part inside the stratum from within it. The "
+                   "effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire & "
+                   "Valentine 2008, ch. 10).").format(r=format_number(spec.reach))
+            )
         if spec.inside and spec.radius > 0:
             report.paragraph(
                 self.tr("Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m "

@@ -5,13 +5,17 @@ from qgis.core import (
     QgsProcessingParameterBoolean,
     QgsProcessingParameterFeatureSink,
     QgsProcessingParameterFeatureSource,
+    QgsProcessingParameterField,
     QgsProcessingParameterNumber,
 )
+
+from shapely.ops import unary_union
 
 from ...plugin import compat
 from .. import bridge
 from ..engine import counting
 from ..engine.errors import InputError
+from ..engine.estimation import stratum_label
 from .base import PlotwiseAlgorithm
 
 
@@ -23,6 +27,8 @@ class SimulateCounts(PlotwiseAlgorithm):
     ANIMALS = "ANIMALS"
     DETECTION = "DETECTION"
     COUNT_RESERVES = "COUNT_RESERVES"
+    STRATA = "STRATA"
+    STRATA_ID_FIELD = "STRATA_ID_FIELD"
     OUTPUT = "OUTPUT"
 
     def displayName(self):  # noqa: N802
@@ -41,6 +47,10 @@ class SimulateCounts(PlotwiseAlgorithm):
             "<li><b>Count reserve units too</b>: off by default, so that units whose <i>role</i> is "
             "<i>reserve</i> keep an empty count (not surveyed), as in a survey where no primary unit "
             "needed replacing.</li>"
+            "<li><b>Strata</b> (optional, with their id field): each unit counts only the animals inside its own "
+            "stratum (matched by the units' <i>stratum</i> field; without an id field, inside the strata), the "
+            "rule of plus sampling, the layout's default at the edges (Gregoire &amp; Valentine 2008, ch. 10). "
+            "Give the strata the units were laid out on.</li>"
             "<li><b>Random seed</b>: 0 draws a seed and records it.</li></ul>"
             "<p>The output is a copy of the units with <i>count</i> filled (added when missing) and "
             "<i>present</i>, the animals actually in the unit. The input is not changed.</p>"
@@ -59,6 +69,12 @@ class SimulateCounts(PlotwiseAlgorithm):
             QgsProcessingParameterBoolean(self.COUNT_RESERVES, self.tr("Count reserve units too"), defaultValue=False)
         )
         self.add_seed_parameter()
+        self.addParameter(QgsProcessingParameterFeatureSource(
+            self.STRATA, self.tr("Strata: count only inside each unit's stratum (plus sampling)"),
+            [compat.TYPE_VECTOR_POLYGON], optional=True))
+        self.addParameter(QgsProcessingParameterField(
+            self.STRATA_ID_FIELD, self.tr("Stratum id field of the strata"), "stratum", self.STRATA,
+            compat.FIELD_ANY, optional=True))
         self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Units with simulated counts")))
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802
@@ -70,7 +86,7 @@ class SimulateCounts(PlotwiseAlgorithm):
         count_reserves = self.parameterAsBoolean(parameters, self.COUNT_RESERVES, context)
         seeded = self.seeded_generator(parameters, context, feedback)
         crs = bridge.computation_crs(units.sourceCrs(), units.sourceExtent(), context, feedback, units.sourceName())
-        wanted = tuple(name for name in ("area_m2", "role") if units.fields().lookupField(name) >= 0)
+        wanted = tuple(name for name in ("area_m2", "role", "stratum") if units.fields().lookupField(name) >= 0)
         unit_records = bridge.read_features(units, crs, context, feedback, wanted, units.sourceName(), drop_empty=False)
         roles = unit_records.attributes.get("role", [None] * len(unit_records))
         animal_records = bridge.read_features(animals, crs, context, feedback, (), animals.sourceName())
@@ -89,10 +105,11 @@ class SimulateCounts(PlotwiseAlgorithm):
                     "positive 'area_m2' field (the layout step writes it); polygons need a geometry."
                 ).format(layer=units.sourceName(), items="; ".join(problems[:20]))
             )
+        strata, unit_stratum = self._strata(parameters, context, feedback, crs, unit_records)
         with self.engine_errors():
             result = counting.simulate_counts(
                 regions, bridge.point_coordinates(animal_records), detection, seeded.generator,
-                progress=self.progress_callback(feedback, 10, 80),
+                progress=self.progress_callback(feedback, 10, 80), strata=strata, unit_stratum=unit_stratum,
             )
 
         fields = units.fields()
@@ -129,3 +146,25 @@ class SimulateCounts(PlotwiseAlgorithm):
         )
         self.style_output(context, dest, "units")
         return {self.OUTPUT: dest}
+
+    def _strata(self, parameters, context, feedback, crs, unit_records):
+        """The strata polygons and each unit's index among them (None, None without a strata layer)."""
+        source = self.parameterAsSource(parameters, self.STRATA, context)
+        if source is None:
+            return None, None
+        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
+        id_field = (read(parameters, self.STRATA_ID_FIELD, context) or [None])[0]
+        if id_field and source.fields().lookupField(id_field) < 0:
+            id_field = None
+        records = bridge.read_features(source, crs, context, feedback, (id_field,) if id_field else (),
+                                       source.sourceName())
+        unit_ids = unit_records.attributes.get("stratum")
+        if not id_field or unit_ids is None:  # one stratum: the union of the polygons
+            return [unary_union([g for g in records.geometries if g is not None])], [0] * len(unit_records)
+        index = {}
+        for label, geometry in zip(records.attributes[id_field], records.geometries):
+            index.setdefault(stratum_label(label), []).append(geometry)
+        labels = list(index)
+        position = {label: k for k, label in enumerate(labels)}
+        return ([unary_union(index[k]) for k in labels],
+                [position.get(stratum_label(v), -1) for v in unit_ids])

@@ -105,3 +105,41 @@ def test_reserve_units_stay_unsurveyed_unless_asked(run_alg, demo_reserve_output
         assert len(by_role["primary"]) == 6 and len(by_role["reserve"]) == 3
         assert all(c != NULL for c in by_role["primary"])
         assert all((c != NULL) == count_reserves for c in by_role["reserve"])
+
+
+def test_simulated_counts_stay_inside_each_units_stratum(run_alg):
+    # truth by construction: animals on a 100 m lattice; two strata split at x = 500; a 300 m square of
+    # stratum 1 over the split counts only the animals west of it (numpy comparison as the oracle)
+    from qgis.core import QgsFeature, QgsGeometry, QgsPointXY, QgsVectorLayer
+
+    from plotwise.plugin import compat
+
+    animals = QgsVectorLayer("Point?crs=EPSG:32633", "animals", "memory")
+    xy = np.array([(x, y) for x in np.arange(50, 1000, 100.0) for y in np.arange(50, 1000, 100.0)])
+    points = []
+    for x, y in xy:
+        f = QgsFeature()
+        f.setGeometry(QgsGeometry.fromPointXY(QgsPointXY(x, y)))
+        points.append(f)
+    animals.dataProvider().addFeatures(points)
+    strata = QgsVectorLayer("Polygon?crs=EPSG:32633", "strata", "memory")
+    strata.dataProvider().addAttributes([compat.make_field("stratum", "int")])
+    strata.updateFields()
+    units = QgsVectorLayer("Polygon?crs=EPSG:32633", "units", "memory")
+    units.dataProvider().addAttributes([compat.make_field("unit_id", "string"), compat.make_field("stratum", "int")])
+    units.updateFields()
+    for layer, rows in ((strata, [(1, "POLYGON((0 0, 500 0, 500 1000, 0 1000, 0 0))"),
+                                  (2, "POLYGON((500 0, 1000 0, 1000 1000, 500 1000, 500 0))")]),
+                        (units, [("a", 1, "POLYGON((380 380, 680 380, 680 680, 380 680, 380 380))")])):
+        feats = []
+        for row in rows:
+            f = QgsFeature(layer.fields())
+            f.setGeometry(QgsGeometry.fromWkt(row[-1]))
+            f.setAttributes(list(row[:-1]))
+            feats.append(f)
+        layer.dataProvider().addFeatures(feats)
+    out = run_alg("plotwise:simulatecounts", {"UNITS": units, "ANIMALS": animals, "DETECTION": 1.0, "SEED": 1,
+                                              "STRATA": strata, "STRATA_ID_FIELD": "stratum", "OUTPUT": "memory:"})
+    count = next(out["OUTPUT"].getFeatures())["count"]
+    inside = (xy[:, 0] > 380) & (xy[:, 0] < 500) & (xy[:, 1] > 380) & (xy[:, 1] < 680)
+    assert count == int(inside.sum())

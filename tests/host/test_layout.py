@@ -68,7 +68,8 @@ def test_balanced_circles_fields_gpx_and_report(registered, tmp_path):
     report = tmp_path / "layout.html"
     result = processing.run("plotwise:layout", base_parameters(strata_layer(), OUTPUT_GPX=str(gpx), REPORT=str(report)))
     out = result["OUTPUT"]
-    assert out.fields().names() == ["unit_id", "stratum", "role", "draw_ord", "area_m2", "incl_p", "weight", "lon", "lat", "count"]
+    assert out.fields().names() == ["unit_id", "stratum", "role", "draw_ord", "area_m2", "incl_p", "weight", "lon", "lat",
+                                    "count", "design", "edge", "reach_m"]
     feats = list(out.getFeatures())
     assert len(feats) == 6 + 4 + 3 + 3 * 2
     geoms = {s: shapely_wkt.loads(w) for s, _, w in STRATA}
