@@ -209,17 +209,16 @@ def _series_gradient(model, theta, x, w):
     """
     sigma, shape, coefficients = _unpack(model, theta)
     x = np.asarray(x, dtype=float)
-    k = key_function(model.key, x, sigma, shape)
-    if model.key == HALF_NORMAL:
-        key_derivatives = [k * (x / sigma) ** 2]
-    elif model.key == HAZARD_RATE:
+    if model.key == HAZARD_RATE:
         with np.errstate(divide="ignore", over="ignore", invalid="ignore"):
-            u = (x / sigma) ** (-shape)
-            eu = np.where(np.isfinite(u), np.exp(-u) * u, 0.0)  # → 0 at x = 0
-            log_ratio = np.where(x > 0, np.log(np.where(x > 0, x, 1.0) / sigma), 0.0)
-        key_derivatives = [shape * eu, -shape * eu * log_ratio]
+            log_ratio = np.log(x / sigma)  # −inf at x = 0
+            u = np.exp(-shape * log_ratio)
+            k = -np.expm1(-u)
+            eu = np.where(u < 1e300, (1.0 - k) * u, 0.0)  # e^(−u) u → 0 at x = 0
+            key_derivatives = [shape * eu, np.where(eu > 0, -shape * eu * log_ratio, 0.0)]
     else:
-        key_derivatives = []
+        k = key_function(model.key, x, sigma, shape)
+        key_derivatives = [k * (x / sigma) ** 2] if model.key == HALF_NORMAL else []
     cosines = [np.cos(order * np.pi * x / w) for order in model.orders]
     series = 1.0 + sum(a * c for a, c in zip(coefficients, cosines)) if cosines else 1.0
     gradient = [d * series for d in key_derivatives] + [k * c for c in cosines]
@@ -252,6 +251,8 @@ def _unit_rule():
 
 
 _UNIT_NODES, _UNIT_WEIGHTS = _unit_rule()
+_CDF_NODES = (np.polynomial.legendre.leggauss(8)[0] + 1.0) / 2.0  # 8 nodes and weights on [0, 1]
+_CDF_WEIGHTS = np.polynomial.legendre.leggauss(8)[1] / 2.0
 
 
 def _quadrature_rule(edges):
@@ -293,7 +294,8 @@ def _integrals_with_gradient(model, theta, edges, w, survey, cached=False):
 def _whole_range_edges(model, theta, w):
     edges = _whole_range(w)
     if model.key == HAZARD_RATE:  # the shoulder near σ may be steep: more pieces about it
-        edges = np.union1d(edges, np.clip(_unpack(model, theta)[0] * _SHOULDER, 0.0, w))
+        # (edges repeated by the clipping make pieces of zero width, which add nothing)
+        edges = np.sort(np.concatenate([edges, np.clip(np.exp(theta[0]) * _SHOULDER, 0.0, w)]))
     return edges
 
 
@@ -678,7 +680,16 @@ def _fitted_cdf(model, theta, data, x):
     x = np.asarray(x, dtype=float)
     order = np.argsort(x)
     edges = np.concatenate([[0.0], np.minimum(x[order], data.truncation)])
-    cumulative = np.cumsum(interval_integrals(model, theta, edges, data.truncation, data.survey))
+    if not model.orders and model.key in (HALF_NORMAL, UNIFORM):
+        parts = interval_integrals(model, theta, edges, data.truncation, data.survey)
+    else:  # the gaps between sorted distances are short: 8 Gauss-Legendre nodes each are plenty
+        width = np.diff(edges)[:, None]
+        nodes = edges[:-1, None] + width * _CDF_NODES
+        values = _series(model, theta, nodes, data.truncation)
+        if data.survey == POINT:
+            values = values * 2.0 * np.pi * nodes
+        parts = np.sum(values * width * _CDF_WEIGHTS, axis=-1)
+    cumulative = np.cumsum(parts)
     total = _total_integral(model, theta, data.truncation, data.survey)
     out = np.empty_like(x)
     out[order] = np.clip(cumulative / total, 0.0, 1.0)
