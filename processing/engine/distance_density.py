@@ -37,6 +37,7 @@ Nothing here imports the host.
 """
 from dataclasses import dataclass, field, replace
 import math
+import numbers
 
 import numpy as np
 from scipy import special, stats
@@ -151,6 +152,12 @@ def _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names):
     return ids, strata, effort, order
 
 
+def _numbers(values):
+    """Floats from attribute values; NaN for anything that is not a number (None, text, booleans)."""
+    return np.array([float(v) if isinstance(v, numbers.Real) and not isinstance(v, (bool, np.bool_)) else np.nan
+                     for v in values], dtype=float)
+
+
 def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
     """Unit index, distance and group size of each observation, checked."""
     obs_ids = np.asarray(list(range(len(distances))) if obs_ids is None else obs_ids, dtype=object)
@@ -162,8 +169,7 @@ def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
                                  "(field '{field}'): {ids}. Correct these unit ids, or add the units.",
                                  layer=names.observations, units=names.units, field=names.obs_unit_field,
                                  ids=_listed(unknown)), ids=unknown)
-    x = np.array([v if isinstance(v, (int, float)) and not isinstance(v, bool) else np.nan for v in distances],
-                 dtype=float)
+    x = _numbers(distances)
     missing = ~np.isfinite(x)
     if missing.any():
         raise InputError(message("Layer '{layer}': the observations {ids} have no distance in the field '{field}' "
@@ -178,8 +184,7 @@ def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
     if sizes is None:
         s = np.ones(x.size)
     else:
-        s = np.array([v if isinstance(v, (int, float)) and not isinstance(v, bool) else np.nan for v in sizes],
-                     dtype=float)
+        s = _numbers(sizes)
         bad = ~(np.isfinite(s) & (s > 0))
         if bad.any():
             raise InputError(message("Layer '{layer}': the observations {ids} have no group size above 0 in the field "
