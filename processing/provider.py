@@ -17,6 +17,7 @@ from .algorithms.simulatecounts import SimulateCounts
 from .algorithms.simulatedetections import SimulateDetections
 from .algorithms.stations import Stations
 from .algorithms.stratify import Stratify
+from .algorithms.distancedensity import DistanceDensity
 
 MODELS = os.path.join(os.path.dirname(os.path.abspath(__file__)), "models")
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "plugin", "icons", "plotwise.svg")
@@ -34,6 +35,7 @@ ALGORITHM_CLASSES = [
     Stations,
     Occupancy,
     SimulateDetections,
+    DistanceDensity,
 ]
 
 
