@@ -4,7 +4,8 @@ How it is checked, and why this way:
 
 * **Reports come from real runs.** A small invented chain runs through the host's
   Processing framework (demo reserve → frame → stratification → design comparison;
-  invented strata → allocation → layout → simulated counts → estimate). Every provider algorithm with a ``REPORT`` output must be in the chain.
+  invented strata → allocation → layout → simulated counts → estimate; line transects → simulated sightings →
+  distance density). Every provider algorithm with a ``REPORT`` output must be in the chain.
 * **No external request, two ways.**
   1. A static scan of the written HTML and of the DOM as Chromium parsed it (read from
      the measuring frames below): no script, link, iframe, object, embed or base element, and every
@@ -360,6 +361,25 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None, run=None):
         "OUTPUT": "memory:", "OUTPUT_TABLE": "memory:", "REPORT": report("occupancy"),
     })
     reports["plotwise:occupancy"] = occupancy["REPORT"]
+
+    transects = run("plotwise:layout", {
+        "FRAME": output_layer(allocated["OUTPUT"]), "STRATUM_FIELD": "stratum", "N_UNITS": 24, "DESIGN": 0,
+        "SHAPE": 3, "SIZE": 500.0, "BEARING": -1.0, "INSIDE": False, "SEED": 17, "OUTPUT": "memory:",
+        "REPORT": report("layout_transects"),
+    })
+    sighted = run("plotwise:simulatecounts", {
+        "UNITS": output_layer(transects["OUTPUT"]), "ANIMALS": animals_layer(), "SEED": 18,
+        "DETECTION_FUNCTION": 1, "SIGMA": 50.0, "OUTPUT": "memory:", "OUTPUT_OBSERVATIONS": "memory:",
+    })
+    sighted_units = output_layer(sighted["OUTPUT"])
+    if name:
+        sighted_units.setName(name)
+    distance = run("plotwise:distancedensity", {
+        "UNITS": sighted_units, "OBSERVATIONS": output_layer(sighted["OUTPUT_OBSERVATIONS"]),
+        "STRATA": output_layer(allocated["OUTPUT"]), "STRATA_ID_FIELD": "stratum", "AREA_UNIT": 1, "SEED": 4,
+        "OUTPUT": "memory:", "OUTPUT_MODELS": "memory:", "REPORT": report("distancedensity"),
+    })
+    reports["plotwise:distancedensity"] = distance["REPORT"]
     return reports
 
 
@@ -472,6 +492,7 @@ def test_hostile_names_and_values_come_out_escaped(plotwise_provider, demo_reser
         "plotwise:estimate": [HOSTILE_NAME, HOSTILE_VALUE],
         "plotwise:stations": [HOSTILE_NAME],
         "plotwise:occupancy": [HOSTILE_NAME],
+        "plotwise:distancedensity": [HOSTILE_NAME, HOSTILE_VALUE],
     }
     documents = {}
     for alg, strings in expected.items():

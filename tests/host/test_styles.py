@@ -263,8 +263,11 @@ def test_every_spatial_output_loads_styled(plotwise_provider, demo_reserve_outpu
         assert all(applied.values()), applied
         # frame (buildframe), strata and their raster (stratify), strata (allocate), units (layout,
         # simulatecounts), estimate (estimate); comparedesigns writes a table only; stations (stations,
-        # simulatedetections) and the sites with occupancy (occupancy)
-        assert sorted(applied.values()) == ["estimate", "frame", "occupancy", "stations", "stations", "strata", "strata",
+        # simulatedetections) and the sites with occupancy (occupancy); line transects (layout), with
+        # sightings (simulatecounts: units and the observations as dots; the units layers share their names
+        # with the first two, so this mapping by name holds them once), estimate (distancedensity)
+        assert sorted(applied.values()) == ["animals", "estimate", "estimate", "frame", "occupancy", "stations",
+                                            "stations", "strata", "strata",
                                             "strata_raster", "units", "units"]
     finally:
         project.removeAllMapLayers()
