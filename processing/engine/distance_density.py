@@ -124,11 +124,12 @@ def _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names):
     effort = np.asarray(effort, dtype=float)
     bad = ~(np.isfinite(effort) & (effort > 0))
     if bad.any():
-        text = ("Layer '{layer}': the transects {ids} have zero length. Delete them or draw their line."
-                if survey == df.LINE else
-                "Layer '{layer}': the points {ids} have no visits. Give each surveyed point its number of visits "
-                "(1 or more), or delete the points that were not surveyed.")
-        raise InputError(message(text, layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
+        if survey == df.LINE:
+            raise InputError(message("Layer '{layer}': the transects {ids} have zero length. Delete them or draw "
+                                     "their line.", layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
+        raise InputError(message("Layer '{layer}': the points {ids} have no visits. Give each surveyed point its "
+                                 "number of visits (1 or more), or delete the points that were not surveyed.",
+                                 layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
     strata = np.array([stratum_label(v) for v in unit_strata], dtype=object)
     known = {str(k) for k in stratum_areas}
     outside = np.array([s is None or s not in known for s in strata])
