@@ -14,11 +14,12 @@ from qgis.core import (
     QgsProcessingParameterNumber,
     QgsProcessingParameterString,
 )
+from qgis.PyQt.QtCore import QCoreApplication
 from shapely.geometry import MultiPolygon, Polygon
 
 from ...plugin import compat
-from ...plugin.translation import active_language
 from .. import bridge
+from ..translation import active_language
 from ..engine import detection_functions as df
 from ..engine import distance_density as dd
 from ..engine import estimation
@@ -393,16 +394,19 @@ class DistanceDensity(PlotwiseAlgorithm):
         self.push_warnings(feedback, warnings[already_pushed:])
 
         outputs = self._write(parameters, context, feedback, result, strata_geometries, crs, area_unit)
-        report = build_report(result, dict(
+        info = dict(
             units=units.sourceName(), unit_field=fields["unit"], stratum_field=fields["stratum"],
             visits_field=fields["visits"], observations=observations.sourceName(), obs_unit_field=fields["obs_unit"],
             distance_field=fields["distance"], size_field=fields["size"], strata=strata_source.sourceName(),
             area_unit=UNIT_NAMES[area_unit], crs=crs.authid(), seed=None if seeded is None else seeded.seed,
             keys=keys, max_adjustments=self.parameterAsInt(parameters, self.MAX_ADJUSTMENTS, context),
-            warnings=warnings, strata_geometries=strata_geometries, unit_geometries=geometries),
-            translate=lambda s: self.tr(s, "PlotwiseReport"), language=active_language())
-        outputs[self.REPORT] = self.write_report(report, parameters, context, feedback)
+            warnings=warnings, strata_geometries=strata_geometries, unit_geometries=geometries)
+        outputs[self.REPORT] = self._report(result, info, parameters, context, feedback)
         return outputs
+
+    def _report(self, result, info, parameters, context, feedback):
+        report = build_report(result, info, translate=QCoreApplication.translate, language=active_language())
+        return self.write_report(report, parameters, context, feedback)
 
     # ------------------------------------------------------------------------------ writing
     def _write(self, parameters, context, feedback, result, strata_geometries, crs, area_unit):

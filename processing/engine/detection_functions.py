@@ -39,7 +39,7 @@ import functools
 import numpy as np
 from scipy import optimize, special, stats
 
-from .errors import InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 
 HALF_NORMAL, HAZARD_RATE, UNIFORM = "half-normal", "hazard-rate", "uniform"
 KEYS = (HALF_NORMAL, HAZARD_RATE, UNIFORM)  # the order of the algorithm's KEYS parameter
@@ -107,29 +107,47 @@ def distance_data_iv(distances, truncation, survey=LINE, cutpoints=None):
     """
     x = np.asarray(distances, dtype=float).ravel()
     if survey not in SURVEYS:
-        raise InputError(message("The survey type must be 'line' or 'point' (got '{survey}').", survey=survey))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The survey type must be 'line' or 'point' (got '{survey}')."),
+            survey=survey))
     w = float(truncation)
     if not w > 0:
-        raise InputError(message("The truncation distance must be above 0 m (got {w:g} m).", w=w))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The truncation distance must be above 0 m (got {w:g} m)."),
+            w=w))
     if not np.all(np.isfinite(x)):
-        raise InputError(message("{count} distances are missing or not numbers. Fill them in or leave those "
-                                 "detections out.", count=int(np.sum(~np.isfinite(x)))))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "{count} distances are missing or not numbers. Fill them in or leave those detections out."),
+            count=int(np.sum(~np.isfinite(x)))))
     if np.any(x < 0):
-        raise InputError(message("{count} distances are negative. Distances are measured from the line or the "
-                                 "point outwards and are 0 m or more; correct them.", count=int(np.sum(x < 0))))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "{count} distances are negative. Distances are measured from the line or the point outwards and are 0 m "
+            "or more; correct them."),
+            count=int(np.sum(x < 0))))
     if np.any(x > w):
-        raise InputError(message("{count} distances lie beyond the truncation distance of {w:g} m. Leave them out "
-                                 "first (right truncation) or raise the truncation distance.",
-                                 count=int(np.sum(x > w)), w=w))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "{count} distances lie beyond the truncation distance of {w:g} m. Leave them out first (right truncation) "
+            "or raise the truncation distance."),
+            count=int(np.sum(x > w)), w=w))
     if x.size < 2:
-        raise InputError(message("A detection function needs at least 2 distances (got {n}).", n=int(x.size)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "A detection function needs at least 2 distances (got {n})."),
+            n=int(x.size)))
     if cutpoints is None:
         return DistanceData(x, w, survey)
     edges = np.asarray(cutpoints, dtype=float).ravel()
     if edges.size < 3 or edges[0] != 0 or np.any(np.diff(edges) <= 0) or not np.isclose(edges[-1], w):
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "The distance bands must start at 0 m, increase, and end at the truncation distance {w:g} m, with at "
-            "least two bands (got {cutpoints}).", w=w, cutpoints=", ".join(f"{c:g}" for c in edges)))
+            "least two bands (got {cutpoints})."),
+            w=w, cutpoints=", ".join(f"{c:g}" for c in edges)))
     counts = np.histogram(x, bins=edges)[0]
     return DistanceData(x, w, survey, edges, counts)
 
@@ -724,13 +742,18 @@ def fit_detection_function(data, model, start=None, variance=True, goodness=True
     DetectionFit
     """
     if not np.isfinite(data.truncation) and (model.key != HALF_NORMAL or model.orders):
-        raise InputError(message("Without a truncation distance only the half-normal key alone can be fitted; "
-                                 "give a truncation distance for {model}.", model=model.label))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Without a truncation distance only the half-normal key alone can be fitted; give a truncation distance "
+            "for {model}."),
+            model=model.label))
     free = (data.bin_counts.size - 1) if data.grouped else data.n - 1
     if model.n_par > free:
-        raise InputError(message("The model {model} has {q} parameters, more than the {free} the distances can "
-                                 "support. Use fewer cosine terms or more distance bands.",
-                                 model=model.label, q=model.n_par, free=free))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The model {model} has {q} parameters, more than the {free} the distances can support. Use fewer cosine "
+            "terms or more distance bands."),
+            model=model.label, q=model.n_par, free=free))
     if model.n_par == 0:
         theta, converged = np.zeros(0), True
     else:
@@ -792,11 +815,11 @@ def select_detection_function(data, keys=KEYS, max_adjustments=MAX_ADJUSTMENTS, 
     -------
     ModelSelection
     """
-    from .errors import Cancelled
-
     keys = tuple(dict.fromkeys(keys))
     if not keys or any(k not in KEYS for k in keys):
-        raise InputError(message("Choose at least one key function among half-normal, hazard-rate and uniform."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Choose at least one key function among half-normal, hazard-rate and uniform.")))
     fits = []
     planned = len(keys) * (1 + max(int(max_adjustments), 0))
     for key in keys:
@@ -820,8 +843,11 @@ def select_detection_function(data, keys=KEYS, max_adjustments=MAX_ADJUSTMENTS, 
             raise Cancelled()
     usable = [i for i, f in enumerate(fits) if f.converged and np.isfinite(f.aic)]
     if not usable:
-        raise InputError(message("No detection function could be fitted to these {n} distances. Check the "
-                                 "distances and the truncation distance.", n=data.n))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "No detection function could be fitted to these {n} distances. Check the distances and the truncation "
+            "distance."),
+            n=data.n))
     chosen = min(usable, key=lambda i: fits[i].aic)
     return ModelSelection(tuple(fits), chosen)
 

@@ -43,7 +43,7 @@ import numpy as np
 from scipy import special, stats
 
 from . import detection_functions as df
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .estimation import natural_key, satterthwaite_df, stratum_label
 
 OVERALL = "all"
@@ -102,9 +102,10 @@ class DistanceSurvey:
 def _listed(values):
     values = [str(v) for v in values]
     shown = ", ".join(values[:MAX_LISTED])
-    return shown if len(values) <= MAX_LISTED else message("{shown} … ({n} in all)", shown=shown, n=len(values))
-
-
+    return shown if len(values) <= MAX_LISTED else message(QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "{shown} … ({n} in all)"),
+        shown=shown, n=len(values))
 def truncation_distance(distances, share=AUTO_TRUNCATION_SHARE):
     """The distance beyond which the farthest ``share`` of the distances lie (common practice: 5 %)."""
     return float(np.quantile(np.asarray(distances, dtype=float), 1.0 - share))
@@ -114,42 +115,56 @@ def _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names):
     """Unit labels, stratum labels and effort, checked."""
     ids = np.array([stratum_label(v) for v in unit_ids], dtype=object)
     if any(v is None for v in ids):
-        raise InputError(message("Layer '{layer}': {n} units have no id in the field '{field}'. Give every unit its "
-                                 "id.", layer=names.units, n=sum(v is None for v in ids), field=names.unit_field))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Layer '{layer}': {n} units have no id in the field '{field}'. Give every unit its id."),
+            layer=names.units, n=sum(v is None for v in ids), field=names.unit_field))
     labels, counts = np.unique(ids.astype(str), return_counts=True)
     if np.any(counts > 1):
-        raise InputError(message("Layer '{layer}': the unit ids {ids} occur more than once in the field '{field}'. "
-                                 "Each unit needs its own id.", layer=names.units, ids=_listed(labels[counts > 1]),
-                                 field=names.unit_field), ids=list(labels[counts > 1]))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Layer '{layer}': the unit ids {ids} occur more than once in the field '{field}'. Each unit needs its own "
+            "id."),
+            layer=names.units, ids=_listed(labels[counts > 1]), field=names.unit_field), ids=list(labels[counts > 1]))
     effort = np.asarray(effort, dtype=float)
     bad = ~(np.isfinite(effort) & (effort > 0))
     if bad.any():
         if survey == df.LINE:
-            raise InputError(message("Layer '{layer}': the transects {ids} have zero length. Delete them or draw "
-                                     "their line.", layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
-        raise InputError(message("Layer '{layer}': the points {ids} have no visits. Give each surveyed point its "
-                                 "number of visits (1 or more), or delete the points that were not surveyed.",
-                                 layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
+            raise InputError(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "Layer '{layer}': the transects {ids} have zero length. Delete them or draw their line."),
+                layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Layer '{layer}': the points {ids} have no visits. Give each surveyed point its number of visits (1 or "
+            "more), or delete the points that were not surveyed."),
+            layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
     strata = np.array([stratum_label(v) for v in unit_strata], dtype=object)
     known = {str(k) for k in stratum_areas}
     outside = np.array([s is None or s not in known for s in strata])
     if outside.any():
-        raise InputError(message("Layer '{layer}': the units {ids} have no stratum, or a stratum that the strata "
-                                 "layer does not have ({strata}). Give each unit the id of its stratum.",
-                                 layer=names.units, ids=_listed(ids[outside]),
-                                 strata=", ".join(sorted(known, key=natural_key))), ids=list(ids[outside]))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Layer '{layer}': the units {ids} have no stratum, or a stratum that the strata layer does not have "
+            "({strata}). Give each unit the id of its stratum."),
+            layer=names.units, ids=_listed(ids[outside]), strata=", ".join(sorted(known, key=natural_key))),
+            ids=list(ids[outside]))
     order = tuple(sorted(known, key=natural_key))
     per_stratum = {h: int(np.sum(strata == h)) for h in order}
     empty = [h for h, k in per_stratum.items() if k == 0]
     if empty:
-        raise InputError(message("The strata {strata} have no surveyed transect or point. Survey them, or leave them "
-                                 "out of the strata layer (the estimate then speaks for the other strata only).",
-                                 strata=", ".join(empty)), ids=empty)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata "
+            "layer (the estimate then speaks for the other strata only)."),
+            strata=", ".join(empty)), ids=empty)
     single = [h for h, k in per_stratum.items() if k == 1]
     if single:
-        raise InputError(message("The strata {strata} have one transect or point each; the encounter rate's variance "
-                                 "needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata "
-                                 "layer and the units' stratum field.", strata=", ".join(single)), ids=single)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The strata {strata} have one transect or point each; the encounter rate's variance needs at least 2 per "
+            "stratum. Merge each with a neighbouring stratum in the strata layer and the units' stratum field."),
+            strata=", ".join(single)), ids=single)
     return ids, strata, effort, order
 
 
@@ -166,32 +181,38 @@ def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
     keys = [stratum_label(v) for v in obs_unit_ids]
     unknown = sorted({str(k) for k in keys if k not in position}, key=natural_key)
     if unknown:
-        raise InputError(message("Layer '{layer}': observations name units that the layer '{units}' does not have "
-                                 "(field '{field}'): {ids}. Correct these unit ids, or add the units.",
-                                 layer=names.observations, units=names.units, field=names.obs_unit_field,
-                                 ids=_listed(unknown)), ids=unknown)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Layer '{layer}': observations name units that the layer '{units}' does not have (field '{field}'): "
+            "{ids}. Correct these unit ids, or add the units."),
+            layer=names.observations, units=names.units, field=names.obs_unit_field, ids=_listed(unknown)), ids=unknown)
     x = _numbers(distances)
     missing = ~np.isfinite(x)
     if missing.any():
-        raise InputError(message("Layer '{layer}': the observations {ids} have no distance in the field '{field}' "
-                                 "(empty or not a number). Fill in the distances, or delete those observations.",
-                                 layer=names.observations, ids=_listed(obs_ids[missing]), field=names.distance_field),
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Layer '{layer}': the observations {ids} have no distance in the field '{field}' (empty or not a number). "
+            "Fill in the distances, or delete those observations."),
+            layer=names.observations, ids=_listed(obs_ids[missing]), field=names.distance_field),
                          ids=list(obs_ids[missing]))
     if np.any(x < 0):
-        raise InputError(message("Layer '{layer}': the observations {ids} have a negative distance in the field "
-                                 "'{field}'. Distances are measured from the line or the point outwards and are 0 m "
-                                 "or more; correct them.", layer=names.observations, ids=_listed(obs_ids[x < 0]),
-                                 field=names.distance_field), ids=list(obs_ids[x < 0]))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Layer '{layer}': the observations {ids} have a negative distance in the field '{field}'. Distances are "
+            "measured from the line or the point outwards and are 0 m or more; correct them."),
+            layer=names.observations, ids=_listed(obs_ids[x < 0]), field=names.distance_field),
+            ids=list(obs_ids[x < 0]))
     if sizes is None:
         s = np.ones(x.size)
     else:
         s = _numbers(sizes)
         bad = ~(np.isfinite(s) & (s > 0))
         if bad.any():
-            raise InputError(message("Layer '{layer}': the observations {ids} have no group size above 0 in the field "
-                                     "'{field}'. Fill in the number of animals seen in each group (1 for a single "
-                                     "animal), or choose no group-size field.", layer=names.observations,
-                                     ids=_listed(obs_ids[bad]), field=names.size_field), ids=list(obs_ids[bad]))
+            raise InputError(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "Layer '{layer}': the observations {ids} have no group size above 0 in the field '{field}'. Fill in "
+                "the number of animals seen in each group (1 for a single animal), or choose no group-size field."),
+                layer=names.observations, ids=_listed(obs_ids[bad]), field=names.size_field), ids=list(obs_ids[bad]))
     return np.array([position[k] for k in keys], dtype=np.int64), x, s
 
 
@@ -200,14 +221,18 @@ def _truncation_iv(x, truncation, cutpoints):
     if cutpoints is not None and len(cutpoints):
         edges = np.asarray(cutpoints, dtype=float)
         if edges.size < 3 or edges[0] != 0 or np.any(np.diff(edges) <= 0):
-            raise InputError(message("The distance bands must start at 0 m and increase, with at least two bands "
-                                     "(got {cutpoints}).", cutpoints=", ".join(f"{c:g}" for c in edges)))
+            raise InputError(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints})."),
+                cutpoints=", ".join(f"{c:g}" for c in edges)))
         return float(edges[-1]), False, edges
     if truncation is not None and truncation > 0:
         return float(truncation), False, None
     if x.size == 0:
-        raise InputError(message("There are no observations: a detection function needs at least {minimum} "
-                                 "detections.", minimum=MIN_DETECTIONS))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "There are no observations: a detection function needs at least {minimum} detections."),
+            minimum=MIN_DETECTIONS))
     return truncation_distance(x), True, None
 
 
@@ -223,22 +248,30 @@ def distance_survey_iv(unit_ids, unit_strata, effort, stratum_areas, obs_unit_id
         detections within the truncation distance (the message names the count).
     """
     if survey not in df.SURVEYS:
-        raise InputError(message("The survey type must be 'line' or 'point' (got '{survey}').", survey=survey))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The survey type must be 'line' or 'point' (got '{survey}')."),
+            survey=survey))
     ids, strata, effort, order = _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names)
     unit_index, x, s = _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names)
     w, automatic, edges = _truncation_iv(x, truncation, cutpoints)
     kept = x <= w
     n = int(kept.sum())
     if n < MIN_DETECTIONS:
-        raise InputError(message("Only {n} detections lie within the truncation distance of {w:g} m; a detection "
-                                 "function needs at least {minimum} (common practice: 60 to 80). Survey more "
-                                 "transects or points, or raise the truncation distance.", n=n, w=w,
-                                 minimum=MIN_DETECTIONS))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least "
+            "{minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation "
+            "distance."),
+            n=n, w=w, minimum=MIN_DETECTIONS))
     warnings = []
     if n < ADVISED_DETECTIONS:
-        warnings.append(message("Only {n} detections lie within the truncation distance: the detection function "
-                                "rests on few distances (common practice asks for 60 to 80), so its shape and the "
-                                "density are uncertain, and AIC may choose a model by chance.", n=n))
+        warnings.append(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Only {n} detections lie within the truncation distance: the detection function rests on few distances "
+            "(common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a "
+            "model by chance."),
+            n=n))
     surveyed = DistanceSurvey(
         survey=survey, unit_ids=ids, unit_stratum=strata, effort=effort, strata=order,
         stratum_areas={h: float(stratum_areas[h]) for h in order}, detection_unit=unit_index[kept],
@@ -383,10 +416,11 @@ def detection_analyses(survey, settings, progress=None):
     few = [(h, int(np.sum(stratum_of_detection == h))) for h in survey.strata]
     lacking = [f"{h} ({n})" for h, n in few if n < MIN_DETECTIONS]
     if lacking:
-        raise InputError(message("A detection function per stratum needs at least {minimum} detections in each "
-                                 "stratum within the truncation distance; these strata have fewer: {strata}. Use one "
-                                 "detection function for all strata.", minimum=MIN_DETECTIONS,
-                                 strata=", ".join(lacking)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "A detection function per stratum needs at least {minimum} detections in each stratum within the "
+            "truncation distance; these strata have fewer: {strata}. Use one detection function for all strata."),
+            minimum=MIN_DETECTIONS, strata=", ".join(lacking)))
     analyses = []
     for i, h in enumerate(survey.strata):
         inside = stratum_of_detection == h
@@ -401,22 +435,30 @@ def detection_warnings(analyses, per_stratum):
     for a in analyses:
         fit, where = a.fit, ("" if a.stratum == OVERALL else a.stratum)
         if per_stratum and a.n < ADVISED_DETECTIONS:
-            warnings.append(message("Stratum {stratum}: its detection function rests on {n} detections (common "
-                                    "practice asks for 60 to 80 per function); consider one function for all strata.",
-                                    stratum=where, n=a.n))
+            warnings.append(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 "
+                "per function); consider one function for all strata."),
+                stratum=where, n=a.n))
         if np.isfinite(fit.gof_p) and fit.gof_p < 0.05:
-            warnings.append(message("The chosen detection function ({model}{at}) fits the distances poorly "
-                                    "(goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round "
-                                    "distances or a spike at 0, and consider distance bands or another truncation.",
-                                    model=fit.label, at=f", stratum {where}" if where else "", p=fit.gof_p))
+            warnings.append(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). "
+                "Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or "
+                "another truncation."),
+                model=fit.label, at=f", stratum {where}" if where else "", p=fit.gof_p))
         if fit.at_bound:
-            warnings.append(message("The chosen detection function ({model}) has a parameter at the limit of its "
-                                    "range, so its variance is unreliable; try another truncation or key.",
-                                    model=fit.label))
+            warnings.append(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "The chosen detection function ({model}) has a parameter at the limit of its range, so its variance "
+                "is unreliable; try another truncation or key."),
+                model=fit.label))
         if not np.isfinite(fit.p_det_se):
-            warnings.append(message("The variance of the detection function ({model}) could not be computed (the "
-                                    "likelihood is flat at its maximum); its CV is missing from the interval.",
-                                    model=fit.label))
+            warnings.append(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "The variance of the detection function ({model}) could not be computed (the likelihood is flat at "
+                "its maximum); its CV is missing from the interval."),
+                model=fit.label))
     return warnings
 
 
@@ -617,8 +659,10 @@ def bootstrap_over_transects(survey, analyses, settings, m2_per_unit, rng, n_boo
         if progress is not None and b % 10 == 0 and progress(b / n_bootstrap):
             raise Cancelled()
     if len(replicates) < 2:
-        raise InputError(message("The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without "
-                                 "the bootstrap.", failed=failed, n=int(n_bootstrap)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap."),
+            failed=failed, n=int(n_bootstrap)))
     return BootstrapResult(len(replicates), failed, np.asarray(replicates, dtype=float))
 
 
@@ -703,9 +747,15 @@ def estimate_distance_density(unit_ids, unit_strata, effort, stratum_areas, obs_
     DistanceDensityResult
     """
     if size_method not in SIZE_METHODS:
-        raise InputError(message("Unknown group-size method '{method}'.", method=size_method))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Unknown group-size method '{method}'."),
+            method=size_method))
     if not 0.5 <= confidence < 1.0:
-        raise InputError(message("The confidence level must be between 0.5 and 1 (got {level:g}).", level=confidence))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The confidence level must be between 0.5 and 1 (got {level:g})."),
+            level=confidence))
     checked, warnings = distance_survey_iv(unit_ids, unit_strata, effort, stratum_areas, obs_unit_ids, distances,
                                            sizes, survey=survey, truncation=truncation, cutpoints=cutpoints,
                                            obs_ids=obs_ids, names=names)
@@ -719,13 +769,18 @@ def estimate_distance_density(unit_ids, unit_strata, effort, stratum_areas, obs_
     boot = None
     if n_bootstrap:
         if rng is None:
-            raise InputError(message("The bootstrap needs a random generator (a seed)."))
+            raise InputError(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "The bootstrap needs a random generator (a seed).")))
         part = None if progress is None else (lambda f: progress(0.7 + 0.3 * f))
         boot = bootstrap_over_transects(checked, analyses, settings, m2_per_unit, rng, n_bootstrap, part)
         strata = tuple(_with_bootstrap(r, i, boot, confidence) for i, r in enumerate(strata))
         overall = _with_bootstrap(overall, len(strata), boot, confidence)
         if boot.failed:
-            warnings.append(message("{failed} of {n} bootstrap resamples could not be fitted and were left out; the "
-                                    "bootstrap interval may be too narrow.", failed=boot.failed, n=int(n_bootstrap)))
+            warnings.append(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval "
+                "may be too narrow."),
+                failed=boot.failed, n=int(n_bootstrap)))
     return DistanceDensityResult(strata, overall, delta_rows, analyses, checked, float(confidence),
                                  bool(per_stratum), size_method, boot, tuple(warnings))

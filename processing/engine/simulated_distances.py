@@ -13,7 +13,7 @@ from dataclasses import dataclass, field
 import numpy as np
 
 from . import detection_functions as df
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .geometry import contains_xy
 
 NONE, HALF_NORMAL, HAZARD_RATE = 0, 1, 2  # the order of simulatecounts' DETECTION_FUNCTION
@@ -88,19 +88,29 @@ def _animals_near(geometry, width, xs, ys, order):
 
 def _simulation_iv(geometries, function, sigma, shape, max_distance, g0, unit_ids):
     if function not in FUNCTION_KEYS:
-        raise InputError(message("The detection function must be 1 (half-normal) or 2 (hazard-rate)."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The detection function must be 1 (half-normal) or 2 (hazard-rate).")))
     if not sigma > 0 or (function == HAZARD_RATE and not shape > 0):
-        raise InputError(message("The scale σ must be above 0 m and the hazard-rate shape above 0 (got σ = "
-                                 "{sigma:g} m, shape {shape:g}).", sigma=sigma, shape=shape))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The scale σ must be above 0 m and the hazard-rate shape above 0 (got σ = {sigma:g} m, shape {shape:g})."),
+            sigma=sigma, shape=shape))
     if not 0.0 < g0 <= 1.0:
-        raise InputError(message("The detection probability on the line must be in (0, 1] (got {g0:g}).", g0=g0))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The detection probability on the line must be in (0, 1] (got {g0:g})."),
+            g0=g0))
     unit_ids = list(range(len(geometries))) if unit_ids is None else list(unit_ids)
     kinds = ("Point", "MultiPoint", "LineString", "MultiLineString")
     unusable = [str(i) for i, g in zip(unit_ids, geometries)
                 if g is None or g.is_empty or g.geom_type not in kinds or (g.geom_type in kinds[2:] and g.length <= 0)]
     if unusable:
-        raise InputError(message("Units {ids} are neither points nor lines of some length; simulated distances need "
-                                 "line transects or point stations.", ids=", ".join(unusable[:30])), ids=unusable)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Units {ids} are neither points nor lines of some length; simulated distances need line transects or "
+            "point stations."),
+            ids=", ".join(unusable[:30])), ids=unusable)
     width = float(max_distance) if max_distance and max_distance > 0 else automatic_max_distance(function, sigma, shape)
     return width
 

@@ -5,9 +5,6 @@ detection function the sightings were simulated with (half-normal, σ = 80 m). E
 half-width of a truncated half-normal: μ = σ√(2π)(Φ(w/σ) − ½) (Buckland et al. 2001, ch. 3).
 """
 import math
-import os
-import shutil
-import subprocess
 from pathlib import Path
 
 import pytest
@@ -16,8 +13,6 @@ qgis_core = pytest.importorskip("qgis.core")
 from qgis.core import QgsFeature, QgsProcessingException, QgsVectorLayer  # noqa: E402
 from scipy import stats  # noqa: E402
 
-REPO = Path(__file__).resolve().parents[2]
-QGIS_PROCESS = "/usr/bin/qgis_process.bin"  # the Debian wrapper passes a flag 3.22 rejects
 SIGMA = 80.0
 PINNED_STRATA_FIELDS = ["stratum", "area", "n_units", "effort", "n_det", "p_det", "esw", "dens", "dens_se", "dens_lo",
                         "dens_hi", "abund", "abund_se", "abund_lo", "abund_hi", "cv", "df"]
@@ -181,24 +176,9 @@ def test_a_zero_length_transect_is_an_error(run_alg, line_survey):
 # --------------------------------------------------------------------------- as users run it
 
 
-def test_qgis_process_with_the_pinned_parameters_only(line_survey, demo_reserve_outputs, tmp_path):
-    """simulatecounts' pinned distance parameters and distancedensity's pinned parameters, in a fresh profile."""
-    profile = tmp_path / "profile"
-    plugin = profile / "profiles" / "default" / "python" / "plugins" / "plotwise"
-    plugin.mkdir(parents=True)
-    for name in ("__init__.py", "metadata.txt", "LICENSE"):
-        shutil.copy(REPO / name, plugin / name)
-    for name in ("plugin", "processing", "i18n"):
-        shutil.copytree(REPO / name, plugin / name, ignore=shutil.ignore_patterns("__pycache__"))
-    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(profile), QT_QPA_PLATFORM="offscreen",
-               XDG_RUNTIME_DIR=str(tmp_path))
-
-    def qgis_process(*args):
-        run = subprocess.run([QGIS_PROCESS, *args], capture_output=True, text=True, env=env, timeout=300)
-        assert run.returncode == 0, run.stdout + run.stderr
-        return run.stdout
-
-    qgis_process("plugins", "enable", "plotwise")
+def test_qgis_process_with_the_pinned_parameters_only(qgis_process, line_survey, demo_reserve_outputs, tmp_path):
+    """simulatecounts' pinned distance parameters and distancedensity's pinned parameters, in a fresh profile
+    (the shared ``qgis_process`` fixture of tests/host/conftest.py)."""
     out = tmp_path / "out"
     out.mkdir()
     layout = QgsVectorLayer(str(line_survey["folder"] / "lines.gpkg"), "lines", "ogr")
