@@ -10,7 +10,7 @@ from pathlib import Path
 import pytest
 
 qgis_core = pytest.importorskip("qgis.core")
-from qgis.core import QgsFeature, QgsProcessingException, QgsVectorLayer  # noqa: E402
+from qgis.core import NULL, QgsFeature, QgsProcessingException, QgsVectorLayer  # noqa: E402
 from scipy import stats  # noqa: E402
 
 SIGMA = 80.0
@@ -94,6 +94,17 @@ def test_all_keys_and_a_bootstrap_run(run_alg, line_survey):
     again = _run(run_alg, line_survey, BOOTSTRAP=30, SEED=11, AREA_UNIT=1)
     assert again["ABUNDANCE_LO"] == result["ABUNDANCE_LO"]  # seeded
     assert result["DENSITY"] == pytest.approx(result["ABUNDANCE"] / _area_ha(line_survey["strata"]))
+
+
+def test_distance_bands(run_alg, line_survey):
+    """Grouped distances: the fit uses the counts per band, so the models table has χ² p-values only."""
+    result = _run(run_alg, line_survey, CUTPOINTS="0, 25, 50, 75, 100, 150, 200", KEYS=[0, 1])
+    models = list(_layer(result["OUTPUT_MODELS"]).getFeatures())
+    assert all(f["cvm_p"] == NULL for f in models)
+    assert all(f["gof_p"] == f["chisq_p"] for f in models if f["chisq_p"] != NULL)
+    assert result["ESW"] == pytest.approx(result["P_DETECT"] * 200.0)  # the last band edge is the truncation
+    with pytest.raises(QgsProcessingException, match="not numbers"):
+        _run(run_alg, line_survey, CUTPOINTS="0, ten, 20")
 
 
 def _area_ha(path):
