@@ -11,7 +11,7 @@ from shapely.geometry import MultiPolygon, Polygon
 from ...plugin import compat
 from .. import bridge
 from ..engine import frame as frame_engine
-from ..raster_masking import mask_polygons
+from ..gdal_io.masking import mask_polygons
 from ..report import MapLayer, format_number, map_svg
 from ..report.style import ACCENT, CAUTION_EDGE, INK, MUTED
 from .base import PlotwiseAlgorithm

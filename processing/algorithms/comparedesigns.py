@@ -16,7 +16,8 @@ from qgis.core import (
 from shapely.ops import unary_union
 
 from ...plugin import compat
-from .. import bridge, raster_io
+from .. import bridge
+from ..gdal_io import surface as surface_io
 from ..engine import design_comparison as engine
 from ..engine import estimation
 from ..engine.errors import InputError
@@ -276,7 +277,7 @@ class CompareDesigns(PlotwiseAlgorithm):
 
         feedback.pushInfo(self.tr("Reading the density surface…"))
         with self.engine_errors():
-            density, geotransform, warped = raster_io.read_surface_window(
+            density, geotransform, warped = surface_io.read_surface_window(
                 surface.source(), surface.name(), bridge.crs_wkt(surface.crs()), bridge.crs_wkt(crs), crs.authid(),
                 frame.bounds)
         if warped:

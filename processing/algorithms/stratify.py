@@ -15,7 +15,9 @@ from shapely import wkb as shapely_wkb
 
 from ...plugin import compat
 from .. import bridge
-from .. import raster_io
+from ..gdal_io.covariate_stack import Covariate
+from ..gdal_io.patches import speck_cells
+from ..gdal_io.stratify_pipeline import stratify_rasters
 from ..engine import stratification as strat
 from ..report import MapLayer, category_colour, format_number, map_svg
 from ..report.svg import stacked_histogram_svg
@@ -148,10 +150,10 @@ class Stratify(PlotwiseAlgorithm):
                 raise QgsProcessingException(self.tr(
                     "Covariate '{name}' is not a file raster that GDAL can read. Save it as a GeoTIFF first."
                 ).format(name=layer.name()))
-            covariates.append(raster_io.Covariate(layer.source(), layer.name(), 1))
+            covariates.append(Covariate(layer.source(), layer.name(), 1))
         names = [c.name for c in covariates]
         if len(set(names)) < len(names):  # same layer name twice: number them for the report
-            covariates = [raster_io.Covariate(c.path, f"{c.name} ({i + 1})", 1) for i, c in enumerate(covariates)]
+            covariates = [Covariate(c.path, f"{c.name} ({i + 1})", 1) for i, c in enumerate(covariates)]
         return covariates
 
     # -- run -------------------------------------------------------------------------
@@ -180,7 +182,7 @@ class Stratify(PlotwiseAlgorithm):
 
         seeded = self.seeded_generator(parameters, context, feedback) if method == strat.KMEANS else None
         with self.discard_on_failure(raster_path), self.engine_errors():
-            result = raster_io.stratify_rasters(
+            result = stratify_rasters(
                 covariates, [shapely_wkb.dumps(g) for g in polygons], bridge.crs_wkt(crs), method, n_strata,
                 raster_path, min_area_ha=min_area, rng=None if seeded is None else seeded.generator,
                 progress=self.progress_callback(feedback, 5, 90),
@@ -276,7 +278,7 @@ class Stratify(PlotwiseAlgorithm):
                 "swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may "
                 "hold cells that the rule alone would have put in another stratum."
             ).format(ha=format_number(min_area), cells=result.sieve_cells,
-                     specks=raster_io.speck_cells(result.sieve_cells), n=result.patches_merged))
+                     specks=speck_cells(result.sieve_cells), n=result.patches_merged))
         if result.sieve_cells > 1:
             if result.small_patches:
                 report.paragraph(self.tr(

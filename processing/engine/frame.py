@@ -4,7 +4,7 @@ The frame is built by removing, in this order,
 
 1. the excluded polygons (water, private inholdings, ...),
 2. the mask polygons (raster cells outside the accepted range, e.g. slope above
-   30 degrees; see :mod:`plotwise.processing.raster_masking`),
+   30 degrees; see :mod:`plotwise.processing.gdal_io.masking`),
 3. an inward edge buffer: the strip within ``edge_buffer`` metres of the study
    area's own boundary.
 

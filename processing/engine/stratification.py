@@ -5,7 +5,7 @@ a ``blocks()`` method returning a fresh iterator of :class:`CellBlock` and an
 ``n_blocks`` attribute. Every function here makes one or more passes over the
 source, so memory never depends on the raster's size.
 :class:`ArrayCellSource` serves arrays already in memory (tests, small rasters);
-``processing/raster_io.py`` serves GDAL rasters.
+``processing/gdal_io/covariate_stack.py`` serves GDAL rasters.
 
 Methods
 -------
@@ -1058,7 +1058,7 @@ def stratum_order(statistics):
 # ---------------------------------------------------------------------------
 @dataclass(frozen=True, eq=False)
 class PatchMerge:
-    """Result of :func:`merge_small_patches`.
+    """Result of :func:`merge_patch_graph`.
 
     Attributes
     ----------
@@ -1079,7 +1079,7 @@ class PatchMerge:
     left_cells: np.ndarray
 
 
-def merge_small_patches(sizes, strata, pairs, shared, min_cells):
+def merge_patch_graph(sizes, strata, pairs, shared, min_cells):
     """Merge patches below ``min_cells`` with a neighbouring stratum, smallest patch first.
 
     A patch is a 4-connected group of cells of one stratum; two patches are
@@ -1457,7 +1457,7 @@ def stratum_ranges(result):
     return edges[p], edges[p + 1]
 
 
-def stratum_labels(result, names, units=None):
+def stratum_label_texts(result, names, units=None):
     """Label text per final stratum, e.g. ``"elevation 1,240–1,610 m"``.
 
     Threshold methods give the first covariate's range of the stratum;

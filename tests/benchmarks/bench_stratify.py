@@ -101,13 +101,14 @@ def measure_bare(folder, bounds):
 
 
 def measure_ours(folder):
-    from plotwise.processing import raster_io as rio
+    from plotwise.processing.gdal_io import stratify_pipeline
+    from plotwise.processing.gdal_io.covariate_stack import Covariate
     from plotwise.processing.engine import stratification as s
 
     wkt = gdal.Open(os.path.join(folder, "elevation.tif")).GetProjection()
     frame = open(os.path.join(folder, "frame.wkb"), "rb").read()
     times = {}
-    real_polygonise = rio.polygonise_strata
+    real_polygonise = stratify_pipeline.polygonise_strata
 
     def timed_polygonise(*args, **kwargs):
         t0 = time.perf_counter()
@@ -116,9 +117,9 @@ def measure_ours(folder):
         finally:
             times["polygonise"] = time.perf_counter() - t0
 
-    rio.polygonise_strata = timed_polygonise
+    stratify_pipeline.polygonise_strata = timed_polygonise
     t = time.perf_counter()
-    r = rio.stratify_rasters([rio.Covariate(os.path.join(folder, "elevation.tif"), "elevation")], [frame], wkt,
+    r = stratify_pipeline.stratify_rasters([Covariate(os.path.join(folder, "elevation.tif"), "elevation")], [frame], wkt,
                              s.QUANTILE, 5, os.path.join(folder, "strata.tif"))
     total = time.perf_counter() - t
     return {"seconds": total - times["polygonise"], "polygonise": times["polygonise"], "total": total,

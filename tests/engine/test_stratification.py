@@ -108,7 +108,7 @@ def test_equal_interval_and_label_text():
     v = np.linspace(1240.0, 1980.0, 400).reshape(20, 20)
     r = s.stratify_cells(s.ArrayCellSource([v]), s.EQUAL_INTERVAL, 2, ["elevation"])
     np.testing.assert_allclose(r.boundaries, [1610.0])  # (1240 + 1980) / 2
-    assert s.stratum_labels(r, ["elevation"], ["m"]) == ["elevation 1,240\u20131,610 m",
+    assert s.stratum_label_texts(r, ["elevation"], ["m"]) == ["elevation 1,240\u20131,610 m",
                                                           "elevation 1,610\u20131,980 m"]
 
 
@@ -205,7 +205,8 @@ def test_raster_classes_become_strata():
     cl = (rng.integers(1, 5, (60, 70)) * 10).astype(np.int16)
     r = s.stratify_cells(s.ArrayCellSource([cl]), s.RASTER_CLASSES, 0, ["cover"])
     np.testing.assert_array_equal(r.statistics.count, [np.count_nonzero(cl == v) for v in (10, 20, 30, 40)])
-    assert s.stratum_labels(r, ["cover"]) == ["cover class 10", "cover class 20", "cover class 30", "cover class 40"]
+    assert s.stratum_label_texts(r, ["cover"]) == ["cover class 10", "cover class 20", "cover class 30",
+                                                   "cover class 40"]
 
 
 def test_too_many_classes_suggests_reclassifying():
@@ -314,14 +315,14 @@ def test_mosaic_of_small_patches_is_merged_to_the_minimum():
     ids = ((xx // 4) + (yy // 4)) % 3 + 1
     labels, sizes, strata, pairs, shared = _patch_graph(ids)
     assert sizes[1:].max() == 16
-    merge = s.merge_small_patches(sizes, strata, pairs, shared, 20)
+    merge = s.merge_patch_graph(sizes, strata, pairs, shared, 20)
     merged = merge.strata[labels]
     for h in np.unique(merged):
         lab, _ = ndimage.label(merged == h)
         assert np.bincount(lab.ravel())[1:].min() >= 20
     assert merge.left.size == 0 and merge.merged == np.count_nonzero(merge.strata != strata)
     assert np.unique(merged).size >= 2  # the mosaic does not collapse into one stratum
-    again = s.merge_small_patches(sizes, strata, pairs, shared, 20)
+    again = s.merge_patch_graph(sizes, strata, pairs, shared, 20)
     np.testing.assert_array_equal(again.strata, merge.strata)  # deterministic
 
 
@@ -330,7 +331,7 @@ def test_small_patch_takes_the_stratum_giving_the_smallest_patch_that_reaches_th
     # With a minimum of 12, joining stratum 1 gives 13 cells, joining stratum 2 gives 33: stratum 1
     ids = np.array([[1] * 10 + [3] * 3 + [2] * 30])
     labels, sizes, strata, pairs, shared = _patch_graph(ids)
-    merge = s.merge_small_patches(sizes, strata, pairs, shared, 12)
+    merge = s.merge_patch_graph(sizes, strata, pairs, shared, 12)
     np.testing.assert_array_equal(merge.strata[labels][0], [1] * 13 + [2] * 30)
     assert merge.merged == 1 and merge.left.size == 0
 
@@ -342,7 +343,7 @@ def test_small_patch_takes_the_largest_join_when_none_reaches_the_minimum():
     # (Had it joined stratum 1, the 5-cell patch would have followed into stratum 1.)
     ids = np.array([[1] * 4 + [3] * 2 + [2] * 5])
     labels, sizes, strata, pairs, shared = _patch_graph(ids)
-    merge = s.merge_small_patches(sizes, strata, pairs, shared, 20)
+    merge = s.merge_patch_graph(sizes, strata, pairs, shared, 20)
     assert (merge.strata[labels] == 2).all()
     assert merge.left_cells.tolist() == [11]
 
@@ -352,9 +353,9 @@ def test_joining_a_stratum_links_its_patches():
     # stratum 1 joins all three into one 11-cell patch, which reaches a minimum of 11 (but not 12)
     ids = np.array([[1] * 5 + [2] + [1] * 5])
     labels, sizes, strata, pairs, shared = _patch_graph(ids)
-    merge = s.merge_small_patches(sizes, strata, pairs, shared, 11)
+    merge = s.merge_patch_graph(sizes, strata, pairs, shared, 11)
     assert (merge.strata[labels] == 1).all() and merge.left.size == 0
-    merge = s.merge_small_patches(sizes, strata, pairs, shared, 12)
+    merge = s.merge_patch_graph(sizes, strata, pairs, shared, 12)
     assert (merge.strata[labels] == 1).all() and merge.left_cells.tolist() == [11]
 
 
@@ -364,6 +365,6 @@ def test_isolated_small_patch_stays_and_is_reported():
     ids[:, :3] = 1
     ids[4:6, 5:7] = 2
     labels, sizes, strata, pairs, shared = _patch_graph(ids)
-    merge = s.merge_small_patches(sizes, strata, pairs, shared, 10)
+    merge = s.merge_patch_graph(sizes, strata, pairs, shared, 10)
     np.testing.assert_array_equal(merge.strata, strata)
     assert merge.merged == 0 and merge.left_cells.tolist() == [4]

@@ -1,4 +1,4 @@
-"""Tests of the raster mask (processing/raster_masking.py), GDAL only, no host.
+"""Tests of the raster mask (processing/gdal_io/masking.py), GDAL only, no host.
 
 Outside references:
 * numpy's count of the out-of-range cells times the cell area (the oracle for
@@ -17,7 +17,7 @@ from osgeo import gdal, osr
 from shapely.geometry import box
 from shapely.ops import unary_union
 
-from plotwise.processing import raster_masking as rm
+from plotwise.processing.gdal_io import masking as rm
 from plotwise.processing.engine.errors import InputError
 
 gdal.UseExceptions()

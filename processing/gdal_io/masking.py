@@ -23,8 +23,8 @@ import pyproj
 from osgeo import gdal, ogr, osr
 from shapely import wkb
 
-from .engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
-from .raster_io import GdalProgress, read_window, same_crs
+from ..engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
+from .grids import GdalProgress, read_window, same_crs
 
 #: Upper limit on the number of cells read over the extent (about 0.6 GB at peak).
 MAX_CELLS = 50_000_000

@@ -1,4 +1,4 @@
-"""GDAL side of the stratification against outside references: numpy, shapely, pyproj, scipy."""
+"""GDAL side of the stratification (processing/gdal_io) against outside references: numpy, shapely, pyproj, scipy."""
 import numpy as np
 import pytest
 from osgeo import gdal
@@ -9,7 +9,8 @@ from shapely.geometry import Polygon, box
 from shapely.geometry.polygon import orient
 from shapely.ops import transform
 
-from plotwise.processing import raster_io as rio
+from plotwise.processing.gdal_io.covariate_stack import Covariate, block_windows
+from plotwise.processing.gdal_io.stratify_pipeline import stratify_rasters
 from plotwise.processing.engine import stratification as s
 from plotwise.processing.engine.errors import Cancelled, InputError
 
@@ -66,7 +67,7 @@ def test_quantile_boundaries_areas_and_geodesic_area(tmp_path):
     elev = _elevation()
     path = _write(tmp_path / "elev.tif", elev, nodata=-9999)
     out = str(tmp_path / "strata.tif")
-    r = rio.stratify_rasters([rio.Covariate(path, "elevation")], [FRAME.wkb], UTM33, s.QUANTILE, 5, out)
+    r = stratify_rasters([Covariate(path, "elevation")], [FRAME.wkb], UTM33, s.QUANTILE, 5, out)
     x, y = _centres()
     inside = _contains(FRAME, x, y)
     ok = inside & (elev != -9999)
@@ -116,7 +117,7 @@ def test_warped_covariates_land_on_the_first_grid(tmp_path):
     green = 10 * (lon_c[None, :] - 15) + 5 * (lat_c[:, None] - 45)
     p2 = _write(tmp_path / "green.tif", green, gt=(lon0, dlon, 0, lat1, 0, -dlat), wkt=CRS.from_epsg(4326).to_wkt(),
                 dtype=gdal.GDT_Float64)
-    r = rio.stratify_rasters([rio.Covariate(p1, "elevation"), rio.Covariate(p2, "greenness")], [FRAME.wkb], UTM33,
+    r = stratify_rasters([Covariate(p1, "elevation"), Covariate(p2, "greenness")], [FRAME.wkb], UTM33,
                              s.EQUAL_INTERVAL, 3, str(tmp_path / "st.tif"))
     assert r.warped == ["greenness"]
     # truth: the same linear function at each cell centre converted with pyproj; bilinear warping keeps it
@@ -134,7 +135,7 @@ def test_first_covariate_in_another_crs_is_warped(tmp_path):
     p1 = _write(tmp_path / "elev.tif", elev)
     p_ll = str(tmp_path / "elev_ll.tif")
     gdal.Warp(p_ll, p1, dstSRS="EPSG:4326")
-    r = rio.stratify_rasters([rio.Covariate(p_ll, "elevation")], [FRAME.wkb], UTM33, s.QUANTILE, 3,
+    r = stratify_rasters([Covariate(p_ll, "elevation")], [FRAME.wkb], UTM33, s.QUANTILE, 3,
                              str(tmp_path / "st.tif"))
     assert r.warped == ["elevation"]
     assert r.grid.crs_wkt == UTM33
@@ -144,7 +145,7 @@ def test_first_covariate_in_another_crs_is_warped(tmp_path):
 def test_partial_coverage_warns_with_the_share_covered(tmp_path):
     path = _write(tmp_path / "elev.tif", _elevation(nodata_box=False))
     frame = Polygon([(503000, 4998000), (506000, 4998000), (506000, 4996000), (503000, 4996000)])
-    r = rio.stratify_rasters([rio.Covariate(path, "elevation")], [frame.wkb], UTM33, s.QUANTILE, 2,
+    r = stratify_rasters([Covariate(path, "elevation")], [frame.wkb], UTM33, s.QUANTILE, 2,
                              str(tmp_path / "st.tif"))
     raster = box(GT[0], GT[3] - H * 30, GT[0] + W * 30, GT[3])
     share = frame.intersection(raster).area / frame.area  # shapely
@@ -156,7 +157,7 @@ def test_no_overlap_is_an_error(tmp_path):
     path = _write(tmp_path / "elev.tif", _elevation())
     far = Polygon([(600000, 4000000), (601000, 4000000), (601000, 4001000)])
     with pytest.raises(InputError, match="does not overlap"):
-        rio.stratify_rasters([rio.Covariate(path, "elevation")], [far.wkb], UTM33, s.QUANTILE, 3,
+        stratify_rasters([Covariate(path, "elevation")], [far.wkb], UTM33, s.QUANTILE, 3,
                              str(tmp_path / "st.tif"))
 
 
@@ -166,7 +167,7 @@ def test_sieve_leaves_no_patch_below_min_area(tmp_path):
     path = _write(tmp_path / "n.tif", noisy)
     whole = box(GT[0], GT[3] - H * 30, GT[0] + W * 30, GT[3])
     out = str(tmp_path / "st.tif")
-    r = rio.stratify_rasters([rio.Covariate(path, "noise")], [whole.wkb], UTM33, s.QUANTILE, 4, out, min_area_ha=2.0)
+    r = stratify_rasters([Covariate(path, "noise")], [whole.wkb], UTM33, s.QUANTILE, 4, out, min_area_ha=2.0)
     assert r.sieve_cells == 23  # ceil(2 ha / 0.09 ha)
     ids = _read(out)
     for h in range(1, r.result.n_strata + 1):
@@ -182,9 +183,9 @@ def test_sieve_leaves_no_patch_below_min_area(tmp_path):
 
 def test_small_blocks_give_the_same_strata(tmp_path):
     path = _write(tmp_path / "elev.tif", _elevation(), nodata=-9999)
-    a = rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.KMEANS, 3, str(tmp_path / "a.tif"),
+    a = stratify_rasters([Covariate(path, "e")], [FRAME.wkb], UTM33, s.KMEANS, 3, str(tmp_path / "a.tif"),
                              rng=np.random.default_rng(4))
-    b = rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.KMEANS, 3, str(tmp_path / "b.tif"),
+    b = stratify_rasters([Covariate(path, "e")], [FRAME.wkb], UTM33, s.KMEANS, 3, str(tmp_path / "b.tif"),
                              rng=np.random.default_rng(4), block_cells=1000)
     np.testing.assert_array_equal(_read(str(tmp_path / "a.tif")), _read(str(tmp_path / "b.tif")))
     np.testing.assert_allclose(a.area_ha, b.area_ha)
@@ -193,7 +194,7 @@ def test_small_blocks_give_the_same_strata(tmp_path):
 def test_cancel(tmp_path):
     path = _write(tmp_path / "elev.tif", _elevation())
     with pytest.raises(Cancelled):
-        rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 3, str(tmp_path / "c.tif"),
+        stratify_rasters([Covariate(path, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 3, str(tmp_path / "c.tif"),
                              progress=lambda f: f > 0.3, block_cells=5000)
 
 
@@ -201,14 +202,14 @@ def test_cancel(tmp_path):
 def test_cancel_inside_gdal_steps(tmp_path, stage):
     path = _write(tmp_path / "elev.tif", _elevation())
     with pytest.raises(Cancelled):
-        rio.stratify_rasters([rio.Covariate(path, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 3, str(tmp_path / "c.tif"),
+        stratify_rasters([Covariate(path, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 3, str(tmp_path / "c.tif"),
                              min_area_ha=1.0, progress=lambda f: f > stage)
 
 
 @pytest.mark.parametrize("block, offset", [((256, 256), (100, 30)), ((150, 1), (0, 0)), ((64, 64), (0, 0))])
 def test_block_windows_cover_the_grid_once(block, offset):
     cover = np.zeros((700, 1000), int)
-    for x, y, w, h in rio._block_windows(1000, 700, block, offset, 1 << 16):
+    for x, y, w, h in block_windows(1000, 700, block, offset, 1 << 16):
         cover[y:y + h, x:x + w] += 1
         if block[1] > 1:  # tiled: windows start on the source's tile edges
             assert (x + offset[0]) % block[0] == 0 or x == 0
@@ -220,8 +221,8 @@ def test_tiled_covariate_gives_the_same_strata(tmp_path):
     p_strip = _write(tmp_path / "strip.tif", elev, nodata=-9999)
     p_tiled = str(tmp_path / "tiled.tif")
     gdal.Translate(p_tiled, p_strip, creationOptions=["TILED=YES", "BLOCKXSIZE=32", "BLOCKYSIZE=32"])
-    a = rio.stratify_rasters([rio.Covariate(p_strip, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 4, str(tmp_path / "a.tif"))
-    b = rio.stratify_rasters([rio.Covariate(p_tiled, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 4, str(tmp_path / "b.tif"),
+    a = stratify_rasters([Covariate(p_strip, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 4, str(tmp_path / "a.tif"))
+    b = stratify_rasters([Covariate(p_tiled, "e")], [FRAME.wkb], UTM33, s.QUANTILE, 4, str(tmp_path / "b.tif"),
                              block_cells=3000)
     np.testing.assert_array_equal(_read(str(tmp_path / "a.tif")), _read(str(tmp_path / "b.tif")))
     np.testing.assert_array_equal(a.result.boundaries, b.result.boundaries)
@@ -233,7 +234,7 @@ def test_aligned_covariate_covering_part_of_the_grid(tmp_path):
     # same grid, but only the northern 100 rows: read directly (no warp), the rest counts as NoData
     green = np.linspace(0, 1, 100 * W, dtype=np.float32).reshape(100, W)
     p2 = _write(tmp_path / "green.tif", green)
-    r = rio.stratify_rasters([rio.Covariate(p1, "elevation"), rio.Covariate(p2, "greenness")], [FRAME.wkb], UTM33,
+    r = stratify_rasters([Covariate(p1, "elevation"), Covariate(p2, "greenness")], [FRAME.wkb], UTM33,
                              s.KMEANS, 3, str(tmp_path / "st.tif"), rng=np.random.default_rng(3))
     assert r.warped == []
     x, y = _centres()
@@ -257,7 +258,7 @@ def test_worker_threads_give_the_same_rasters(tmp_path, monkeypatch):
         monkeypatch.setattr(s, "WORKERS", workers)
         for method in (s.QUANTILE, s.KMEANS):
             path = str(tmp_path / f"w{workers}_{method}.tif")
-            r = rio.stratify_rasters([rio.Covariate(p_tiled, "e")], [FRAME.wkb], UTM33, method, 4, path,
+            r = stratify_rasters([Covariate(p_tiled, "e")], [FRAME.wkb], UTM33, method, 4, path,
                                      rng=np.random.default_rng(8), block_cells=2048)
             outs.append((_read(path), r.result.statistics.mean))
     for (a, ma), (b, mb) in zip(outs[:2], outs[2:]):
@@ -285,7 +286,7 @@ def test_min_area_on_a_mosaic_where_every_patch_is_small(tmp_path):
     path = _mosaic(tmp_path)
     frame = box(GT[0] + 300, GT[3] - 6000, GT[0] + 6000, GT[3] - 300)
     out = str(tmp_path / "st.tif")
-    r = rio.stratify_rasters([rio.Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3, out,
+    r = stratify_rasters([Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3, out,
                              min_area_ha=2.0)
     assert r.sieve_cells == 23 and r.patches_merged > 0 and r.small_patches == 0
     areas = [p.area for p in _parts(r.polygons)]  # shapely
@@ -298,7 +299,7 @@ def test_min_area_on_a_mosaic_where_every_patch_is_small(tmp_path):
     assert r.result.n_strata >= 2
     assert any("fell from" in w and "MIN_AREA" in w for w in r.warnings)  # R² of the mosaic's strata drops
     again = str(tmp_path / "again.tif")
-    rio.stratify_rasters([rio.Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3, again,
+    stratify_rasters([Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3, again,
                          min_area_ha=2.0, block_cells=5000)
     np.testing.assert_array_equal(_read(again), ids)  # deterministic, whatever the blocks
 
@@ -309,7 +310,7 @@ def test_small_island_of_the_frame_stays_below_min_area_with_a_warning(tmp_path)
     path = _write(tmp_path / "elev.tif", _elevation(nodata_box=False))
     main = box(GT[0] + 300, GT[3] - 3000, GT[0] + 3000, GT[3] - 300)
     island = box(GT[0] + 6000, GT[3] - 5400, GT[0] + 6090, GT[3] - 5310)
-    r = rio.stratify_rasters([rio.Covariate(path, "e")], [main.wkb, island.wkb], UTM33, s.QUANTILE, 3,
+    r = stratify_rasters([Covariate(path, "e")], [main.wkb, island.wkb], UTM33, s.QUANTILE, 3,
                              str(tmp_path / "st.tif"), min_area_ha=2.0)
     assert r.small_patches == 1 and r.small_patches_ha == pytest.approx(island.area / 1e4)
     text = next(w for w in r.warnings if "stay below MIN_AREA" in w)
@@ -322,7 +323,7 @@ def test_min_area_leaving_one_stratum_is_an_error(tmp_path):
     path = _mosaic(tmp_path)
     frame = box(GT[0] + 300, GT[3] - 1500, GT[0] + 1500, GT[3] - 300)  # 144 ha
     with pytest.raises(InputError, match="single stratum"):
-        rio.stratify_rasters([rio.Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3,
+        stratify_rasters([Covariate(path, "mosaic")], [frame.wkb], UTM33, s.QUANTILE, 3,
                              str(tmp_path / "st.tif"), min_area_ha=200.0)
 
 
@@ -335,7 +336,7 @@ def test_min_area_with_nodata_and_small_blocks_matches_scipy_patches(tmp_path):
     noisy[100:112, 90:130] = -9999
     path = _write(tmp_path / "n.tif", noisy, nodata=-9999)
     out = str(tmp_path / "a.tif")
-    r = rio.stratify_rasters([rio.Covariate(path, "noise")], [FRAME.wkb], UTM33, s.QUANTILE, 4, out,
+    r = stratify_rasters([Covariate(path, "noise")], [FRAME.wkb], UTM33, s.QUANTILE, 4, out,
                              min_area_ha=2.0)
     ids = _read(out)
     small, small_cells = 0, 0
@@ -347,7 +348,7 @@ def test_min_area_with_nodata_and_small_blocks_matches_scipy_patches(tmp_path):
             assert not np.any((ids[ring] > 0) & (ids[ring] != h))  # it touches no other stratum
             small, small_cells = small + 1, small_cells + sizes[j]
     assert (r.small_patches, r.small_patches_ha) == (small, pytest.approx(small_cells * 0.09))
-    b = rio.stratify_rasters([rio.Covariate(path, "noise")], [FRAME.wkb], UTM33, s.QUANTILE, 4,
+    b = stratify_rasters([Covariate(path, "noise")], [FRAME.wkb], UTM33, s.QUANTILE, 4,
                              str(tmp_path / "b.tif"), min_area_ha=2.0, block_cells=3000)
     np.testing.assert_array_equal(_read(str(tmp_path / "b.tif")), ids)
     assert b.patches_merged == r.patches_merged

@@ -1,0 +1,127 @@
+"""The whole stratification on GDAL rasters: stack, assign, merge small patches, polygonise (no host import)."""
+from dataclasses import dataclass, field
+
+import numpy as np
+
+from ..engine import stratification as strat
+from ..engine.errors import InputError, message
+from .covariate_stack import BLOCK_CELLS, CovariateStack
+from .grids import Grid
+from .patches import PatchCheck, merge_raster_patches, sieve_cells, sieve_strata
+from .polygonising import polygonise_strata
+from .stratum_raster import StratumRaster, remap_strata
+
+#: loss of R² (first covariate) from merging patches below MIN_AREA worth a warning (our choice)
+R2_LOSS_WARNING = 0.1
+
+
+
+@dataclass(frozen=True)
+class RasterStratification:
+    """Everything the algorithm writes and reports.
+
+    Areas are in hectares, computed as cells × cell area in the computation CRS.
+    ``coverage`` is the share of the frame's area with a value in every
+    covariate: (frame area on the raster / frame area) × (valid cells / frame cells).
+    """
+
+    result: strat.Stratification
+    names: list
+    units: list
+    labels: list
+    grid: Grid
+    polygons: list
+    area_ha: np.ndarray
+    frame_ha: float
+    frame_cells_ha: float
+    nodata_ha: float
+    outside_ha: float
+    coverage: float
+    sieve_cells: int
+    warped: list
+    output_raster: str
+    warnings: list = field(default_factory=list)
+    patches_merged: int = 0
+    """Patches that GDAL's sieve left below MIN_AREA and :func:`merge_raster_patches` merged."""
+    small_patches: int = 0
+    """Patches still below MIN_AREA (they touch no other stratum)."""
+    small_patches_ha: float = 0.0
+
+
+def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_raster, min_area_ha=0.0,
+                     rng=None, sample_size=100_000, progress=None, block_cells=BLOCK_CELLS):
+    """Strata from raster covariates clipped to a frame, as a raster and as polygons.
+
+    Steps: stack the covariates on the first one's grid (:class:`CovariateStack`),
+    find the rule and assign every cell (:func:`~.engine.stratification.stratify_cells`),
+    renumber strata by first-covariate mean, merge patches below MIN_AREA
+    (specks with GDAL's sieve, then :func:`merge_raster_patches`) and recount
+    the statistics, polygonise.
+    """
+    categorical = method == strat.RASTER_CLASSES
+    warnings = []
+    with CovariateStack(covariates, frame_wkb, crs_wkt, categorical, block_cells) as stack:
+        names, units = stack.names, stack.units
+        writer = StratumRaster(output_raster, stack.grid)
+        try:
+            hint = stack.approximate_range() if method == strat.QUANTILE else None
+            res = strat.stratify_cells(stack.source(), method, n_strata, names, rng=rng, value_range=hint,
+                                       sample_size=sample_size, write=writer.write,
+                                       progress=strat.scaled_progress(progress, 0, 0.7))
+        finally:
+            writer.close()
+        warnings.extend(res.warnings)
+        if res.needs_remap:
+            remap_strata(output_raster, res.lut, progress=strat.scaled_progress(progress, 0.7, 0.75))
+        cells = sieve_cells(min_area_ha, stack.cell_area)
+        patches = PatchCheck(0, 0, 0)
+        if cells > 1:
+            sieve_strata(output_raster, cells, strat.scaled_progress(progress, 0.75, 0.8))
+            patches = merge_raster_patches(output_raster, cells, block_cells, strat.scaled_progress(progress, 0.8, 0.84))
+            stats = strat.accumulate_statistics(stack.source(output_raster), res.n_strata,
+                                                shift=res.statistics.overall_mean(),
+                                                chart_range=res.statistics.chart_range,
+                                                progress=strat.scaled_progress(progress, 0.84, 0.9))
+            lut, order = strat.stratum_order(stats)
+            if order.size < 2:
+                raise InputError(message(
+                    "With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there "
+                    "is nothing to stratify. Lower MIN_AREA.", min_area=min_area_ha))
+            provisional = res.provisional
+            r2_before = float(res.statistics.r_squared()[0])
+            if not np.array_equal(lut, np.arange(lut.size)):
+                if order.size < stats.n_strata:
+                    warnings.append(message("{merged} strata consisted only of patches below MIN_AREA and were "
+                                            "merged away.", merged=int(stats.n_strata - order.size)))
+                remap_strata(output_raster, lut)
+                stats, provisional = stats.reordered(order), provisional[order]
+            res = res.with_statistics(stats, provisional)
+            r2_after = float(stats.r_squared()[0])
+            if np.isfinite(r2_before) and np.isfinite(r2_after) and r2_after < r2_before - R2_LOSS_WARNING:
+                warnings.append(message(
+                    "Merging the patches below MIN_AREA moved cells between strata: the share of the variance of "
+                    "'{name}' that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA "
+                    "keeps the strata closer to the covariates.", name=names[0], before=r2_before, after=r2_after))
+            if patches.left:
+                warnings.append(message(
+                    "{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no "
+                    "other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from "
+                    "the frame, fill the NoData in the covariates, or lower MIN_AREA.",
+                    n=patches.left, ha=patches.left_cells * stack.cell_area / 10000.0, min_area=min_area_ha))
+        polygons = polygonise_strata(output_raster, res.n_strata, strat.scaled_progress(progress, 0.9, 1.0))
+        ca = stack.cell_area / 10000.0
+        frame_ha = stack.frame_area / 10000.0
+        outside_ha = max(0.0, (stack.frame_area - stack.frame_area_on_grid) / 10000.0)
+        on_grid = stack.frame_area_on_grid / stack.frame_area if stack.frame_area > 0 else 0.0
+        coverage = on_grid * res.cells_valid / res.cells_in_frame if res.cells_in_frame else 0.0
+        if res.cells_nodata or on_grid < 1 - 1e-6:
+            warnings.append(message("The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie "
+                                    "outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one "
+                                    "covariate; the strata speak for the covered part only.",
+                                    percent=100 * coverage, outside_ha=outside_ha, nodata_ha=res.cells_nodata * ca))
+        labels = strat.stratum_label_texts(res, names, units)
+        return RasterStratification(res, names, units, labels, stack.grid, polygons,
+                                    res.statistics.count * ca, frame_ha, res.cells_in_frame * ca,
+                                    res.cells_nodata * ca, outside_ha, coverage, cells, list(stack.warped),
+                                    output_raster, warnings, patches.merged, patches.left,
+                                    patches.left_cells * ca)
