@@ -16,7 +16,7 @@ from shapely import wkb as shapely_wkb
 from ...plugin import compat
 from .. import bridge
 from ..gdal_io.covariate_stack import Covariate
-from ..gdal_io.patches import speck_cells
+from ..gdal_io.patches import DEFAULT_MIN_AREA_HA, MAX_POLYGON_PATCHES, MAX_SIEVE_PATCHES, speck_cells
 from ..gdal_io.stratify_pipeline import stratify_rasters
 from ..engine import stratification as strat
 from ..report import MapLayer, category_colour, format_number, map_svg
@@ -109,7 +109,21 @@ class Stratify(PlotwiseAlgorithm):
             "variance the strata explain (R²), a histogram with the boundaries and a map.</li></ul>"
             "<p>The random seed is used by k-means only (0 draws one and records it).</p>"
             "<p>Strata are a statistical device: before fieldwork, check every unit's access and safety.</p>"
-        )
+        ) + self.tr(
+            "<h3>Minimum patch area</h3>"
+            "<p>The default of {default:g} ha is chosen for field teams: a patch smaller than a few sample units "
+            "is not a stratum. Four 20 m × 20 m plots 50 m apart need about 1 ha; a zone smaller than that "
+            "cannot hold the units a stratum needs for its own variance, and on the map it is noise of the "
+            "covariate, not a zone to survey. Raise it for larger units (transects, camera stations); 0 keeps "
+            "every cell's stratum.</p>"
+            "<p>A speckled covariate (a 10 m vegetation index, a noisy classification) can form millions of "
+            "patches. The patches are counted before they are merged and before they are turned into polygons: "
+            "strata with more than {max_patches:,} patches stop the run with an error that gives their number and "
+            "a MIN_AREA that brings them under the limit, and a covariate too speckled to merge in bounded memory "
+            "(more than {max_sieve:,} patches) stops it with advice to smooth or coarsen the covariate first. "
+            "When the patches left after merging the specks are too many to merge one by one, patches below "
+            "MIN_AREA first join their largest neighbour (GDAL's sieve), with a warning.</p>"
+        ).format(default=DEFAULT_MIN_AREA_HA, max_patches=MAX_POLYGON_PATCHES, max_sieve=MAX_SIEVE_PATCHES)
 
     def initAlgorithm(self, config=None):  # noqa: N802 (host naming)
         self.addParameter(QgsProcessingParameterFeatureSource(
@@ -124,7 +138,7 @@ class Stratify(PlotwiseAlgorithm):
             defaultValue=4, minValue=2, maxValue=strat.MAX_CLASSES))
         self.addParameter(QgsProcessingParameterNumber(
             self.MIN_AREA, self.tr("Minimum patch area (ha); smaller patches join a neighbour"),
-            type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0))
+            type=compat.NUMBER_DOUBLE, defaultValue=DEFAULT_MIN_AREA_HA, minValue=0.0))
         self.add_seed_parameter()
         self.addParameter(QgsProcessingParameterRasterDestination(self.OUTPUT_RASTER, self.tr("Stratum raster")))
         self.addParameter(QgsProcessingParameterFeatureSink(

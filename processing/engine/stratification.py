@@ -1071,12 +1071,15 @@ class PatchMerge:
         below the minimum: they touch no patch of another stratum.
     left_cells : ndarray of int
         The cells of each of ``left``.
+    patches : int
+        Patches after merging (each group of joined patches counts once).
     """
 
     strata: np.ndarray
     merged: int
     left: np.ndarray
     left_cells: np.ndarray
+    patches: int = -1
 
 
 def merge_patch_graph(sizes, strata, pairs, shared, min_cells):
@@ -1181,8 +1184,9 @@ def merge_patch_graph(sizes, strata, pairs, shared, min_cells):
             heapq.heappush(heap, (size[root], root))
     final = np.array([stratum[find(i)] for i in range(n)], dtype=np.int64)
     left = [p for p in left if parent[p] == p]
+    groups = sum(1 for i in range(n) if parent[i] == i and size[i] > 0)
     return PatchMerge(final, int(np.count_nonzero(final != np.asarray(strata).ravel())),
-                      np.asarray(left, dtype=np.int64), np.asarray([size[p] for p in left], dtype=np.int64))
+                      np.asarray(left, dtype=np.int64), np.asarray([size[p] for p in left], dtype=np.int64), groups)
 
 
 # ---------------------------------------------------------------------------
@@ -1449,7 +1453,6 @@ def stratum_ranges(result):
     The nominal boundaries, with the covariate's minimum and maximum at the ends
     (after sieving, a stratum also holds the merged patches' cells outside its range).
     """
-    st = result.statistics
     b = np.asarray(result.rule.boundaries, float)
     lo, hi = result.value_range  # the first covariate's exact range over the valid cells
     edges = np.concatenate([[lo], b, [hi]])
