@@ -159,7 +159,8 @@ class Stratify(PlotwiseAlgorithm):
         covariates = []
         for layer in layers:
             if not isinstance(layer, QgsRasterLayer):
-                raise QgsProcessingException(self.tr("COVARIATES: '{name}' is not a raster layer.").format(name=layer.name()))
+                raise QgsProcessingException(self.tr("COVARIATES: '{name}' is not a raster layer.").format(
+                    name=layer.name()))
             if layer.providerType() != "gdal":
                 raise QgsProcessingException(self.tr(
                     "Covariate '{name}' is not a file raster that GDAL can read. Save it as a GeoTIFF first."
@@ -228,7 +229,8 @@ class Stratify(PlotwiseAlgorithm):
 
         r2 = stats.r_squared()
         feedback.pushInfo(self.tr("{k} strata on {ha} ha; R² of '{name}': {r2}.").format(
-            k=k, ha=format_number(float(result.area_ha.sum())), name=covariates[0].name, r2=format_number(float(r2[0]))))
+            k=k, ha=format_number(float(result.area_ha.sum())), name=covariates[0].name,
+            r2=format_number(float(r2[0]))))
         outputs = {self.OUTPUT: dest_id, self.OUTPUT_RASTER: raster_path, self.N_STRATA: k,
                    self.R_SQUARED: float(r2[0])}
         report = self._report(result, shapes, polygons, method, n_strata, min_area, seeded, crs, projected_from,

@@ -192,13 +192,14 @@ def nice_area_above(area_ha):
     return 10.0 ** (k + 1)
 
 
-def too_many_patches(n_patches, stratified_ha, min_area_ha, limit=MAX_POLYGON_PATCHES):
+def too_many_patches(n_patches, stratified_ha, min_area_ha, limit=None):
     """The error for strata that form more than ``limit`` patches, with the MIN_AREA that brings them under it.
 
     Every patch reaches MIN_AREA after merging (but for the few that touch no
     other stratum), so at most ``stratified area / MIN_AREA`` patches remain:
     a MIN_AREA of ``stratified area / limit`` or more brings them under the limit.
     """
+    limit = MAX_POLYGON_PATCHES if limit is None else limit
     suggested = nice_area_above(max(stratified_ha / limit, min_area_ha * 2 if min_area_ha > 0 else 0.0))
     return InputError(message(
         "The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} "
@@ -209,8 +210,9 @@ def too_many_patches(n_patches, stratified_ha, min_area_ha, limit=MAX_POLYGON_PA
         area=float(stratified_ha)))
 
 
-def too_speckled(n_patches, min_area_ha, limit=MAX_SIEVE_PATCHES):
+def too_speckled(n_patches, min_area_ha, limit=None):
     """The error for strata with more patches than the merge below MIN_AREA can take in bounded memory."""
+    limit = MAX_SIEVE_PATCHES if limit is None else limit
     return InputError(message(
         "The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} "
         "that can be merged below MIN_AREA in bounded memory: the covariate is speckled at the scale of its "

@@ -7,7 +7,8 @@ from ..engine import stratification as strat
 from ..engine.errors import InputError, message
 from .covariate_stack import BLOCK_CELLS, CovariateStack
 from .grids import Grid
-from .patches import MAX_POLYGON_PATCHES, enforce_min_area, sieve_cells, too_many_patches
+from . import patches as patch_limits
+from .patches import enforce_min_area, sieve_cells, too_many_patches
 from .polygonising import polygonise_strata
 from .stratum_raster import StratumRaster, remap_strata
 
@@ -68,7 +69,7 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
         cells = sieve_cells(min_area_ha, stack.cell_area)
         res, patches = merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_cells, warnings,
                                             strat.scaled_progress(progress, 0.75, 0.9))
-        if patches.patches > MAX_POLYGON_PATCHES:
+        if patches.patches > patch_limits.MAX_POLYGON_PATCHES:
             raise too_many_patches(patches.patches, res.cells_valid * stack.cell_area / 10000.0, min_area_ha)
         polygons = polygonise_strata(output_raster, res.n_strata, strat.scaled_progress(progress, 0.9, 1.0))
         return _raster_stratification(stack, res, polygons, cells, patches, output_raster, warnings)

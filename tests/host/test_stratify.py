@@ -232,3 +232,47 @@ def test_min_area_warns_about_an_island_it_cannot_merge(alg_id, run_alg, tmp_pat
     assert any(w.startswith("1 patch(es) covering 0.50 ha stay below MIN_AREA (2 ha)") for w in fb.warnings), fb.warnings
     html = open(out["REPORT"], encoding="utf-8").read()
     assert "touch no other stratum" in html and "Every patch of the strata now covers" not in html
+
+
+def _speckled(tmp_path, shape=(160, 200)):
+    """White noise (numpy's generator) on 10 m cells in UTM 33N: its strata form patches of a few cells."""
+    path = str(tmp_path / "speckled.tif")
+    ds = gdal.GetDriverByName("GTiff").Create(path, shape[1], shape[0], 1, gdal.GDT_Float32)
+    ds.SetGeoTransform((500000.0, 10.0, 0.0, 4000000.0, 0.0, -10.0))
+    ds.SetProjection(CRS.from_epsg(32633).to_wkt())
+    ds.GetRasterBand(1).WriteArray(np.random.default_rng(21).random(shape).astype(np.float32))
+    ds = None
+    return path
+
+
+def test_pinned_parameters_only_merge_a_speckled_covariate_to_the_default_min_area(alg_id, run_alg, tmp_path):
+    # only the pinned parameters (DESIGN.md): MIN_AREA takes its default of 1 ha = 100 cells of 10 m. Oracle:
+    # scipy.ndimage.label (4-connected) of the stratum raster: every patch reaches 100 cells
+    from scipy import ndimage
+
+    frame = _frame_layer("POLYGON((500000 4000000, 502000 4000000, 502000 3998400, 500000 3998400, 500000 4000000))")
+    out = run_alg(alg_id, {
+        "FRAME": frame, "COVARIATES": [_speckled(tmp_path)], "METHOD": 0, "STRATA": 5,
+        "OUTPUT_RASTER": str(tmp_path / "p.tif"), "OUTPUT": str(tmp_path / "p.gpkg"), "REPORT": str(tmp_path / "p.html"),
+    })
+    ds = gdal.Open(out["OUTPUT_RASTER"])
+    ids = ds.GetRasterBand(1).ReadAsArray()
+    ds = None
+    assert ids.min() >= 1
+    for h in np.unique(ids):
+        lab, _ = ndimage.label(ids == h)
+        assert np.bincount(lab.ravel())[1:].min() >= 100
+    html = open(out["REPORT"], encoding="utf-8").read()
+    assert "Every patch of the strata now covers at least 1 ha." in html
+
+
+def test_speckled_covariate_without_min_area_is_a_clear_error(alg_id, run_alg, tmp_path, monkeypatch):
+    from plotwise.processing.gdal_io import patches
+
+    monkeypatch.setattr(patches, "MAX_POLYGON_PATCHES", 1000)
+    frame = _frame_layer("POLYGON((500000 4000000, 502000 4000000, 502000 3998400, 500000 3998400, 500000 4000000))")
+    with pytest.raises(QgsProcessingException, match=r"patches .*more than the 1,000 .*Set MIN_AREA to 0\.5 ha"):
+        run_alg(alg_id, {
+            "FRAME": frame, "COVARIATES": [_speckled(tmp_path)], "METHOD": 0, "STRATA": 5, "MIN_AREA": 0.0,
+            "OUTPUT_RASTER": str(tmp_path / "e.tif"), "OUTPUT": str(tmp_path / "e.gpkg"),
+        })
