@@ -1120,18 +1120,48 @@ def merge_patch_graph(sizes, strata, pairs, shared, min_cells):
     """
     import heapq
 
-    size = [int(v) for v in np.asarray(sizes).ravel()]
-    stratum = [int(v) for v in np.asarray(strata).ravel()]
-    n = len(size)
-    parent = list(range(n))
-    neighbours = [dict() for _ in range(n)]
-    for (a, b), length in zip(np.asarray(pairs, dtype=np.int64).reshape(-1, 2).tolist(),
-                              np.asarray(shared).ravel().tolist()):
-        if a != b:
-            neighbours[a][b] = neighbours[a].get(b, 0) + int(length)
-            neighbours[b][a] = neighbours[b].get(a, 0) + int(length)
+    graph = _PatchGraph(sizes, strata, pairs, shared)
+    heap = [(graph.size[i], i) for i in range(graph.n) if 0 < graph.size[i] < min_cells]
+    heapq.heapify(heap)
+    left = []
+    while heap:
+        cells, p = heapq.heappop(heap)
+        if graph.parent[p] != p or graph.size[p] != cells:
+            continue  # merged away, or grown since it was queued
+        if not graph.neighbours[p]:
+            left.append(p)
+            continue
+        root = graph.take_stratum(p, graph.preferred_stratum(p, min_cells))
+        if graph.size[root] < min_cells:
+            heapq.heappush(heap, (graph.size[root], root))
+    final = np.array([graph.stratum[graph.find(i)] for i in range(graph.n)], dtype=np.int64)
+    left = [p for p in left if graph.parent[p] == p]
+    return PatchMerge(final, int(np.count_nonzero(final != np.asarray(strata).ravel())),
+                      np.asarray(left, dtype=np.int64), np.asarray([graph.size[p] for p in left], dtype=np.int64),
+                      graph.groups())
 
-    def find(i):
+
+class _PatchGraph:
+    """Patches (nodes) and the cell edges neighbouring patches share; merged groups kept by union-find.
+
+    ``size``, ``stratum`` and ``neighbours`` (patch -> shared edges) are those of
+    each group's root.
+    """
+
+    def __init__(self, sizes, strata, pairs, shared):
+        self.size = [int(v) for v in np.asarray(sizes).ravel()]
+        self.stratum = [int(v) for v in np.asarray(strata).ravel()]
+        self.n = len(self.size)
+        self.parent = list(range(self.n))
+        self.neighbours = [dict() for _ in range(self.n)]
+        for (a, b), length in zip(np.asarray(pairs, dtype=np.int64).reshape(-1, 2).tolist(),
+                                  np.asarray(shared).ravel().tolist()):
+            if a != b:
+                self.neighbours[a][b] = self.neighbours[a].get(b, 0) + int(length)
+                self.neighbours[b][a] = self.neighbours[b].get(a, 0) + int(length)
+
+    def find(self, i):
+        parent = self.parent
         root = i
         while parent[root] != root:
             root = parent[root]
@@ -1139,35 +1169,31 @@ def merge_patch_graph(sizes, strata, pairs, shared, min_cells):
             parent[i], i = root, parent[i]
         return root
 
-    def join(target, other):
+    def join(self, target, other):
         """``other`` (a root) into ``target``'s stratum: the root with more neighbours absorbs the other."""
-        keep, gone = (target, other) if len(neighbours[target]) >= len(neighbours[other]) else (other, target)
-        parent[gone] = keep
-        size[keep] += size[gone]
-        stratum[keep] = stratum[target]
-        for x, length in neighbours[gone].items():
-            del neighbours[x][gone]
+        nb = self.neighbours
+        keep, gone = (target, other) if len(nb[target]) >= len(nb[other]) else (other, target)
+        self.parent[gone] = keep
+        self.size[keep] += self.size[gone]
+        self.stratum[keep] = self.stratum[target]
+        for x, length in nb[gone].items():
+            del nb[x][gone]
             if x == keep:
                 continue
-            neighbours[keep][x] = neighbours[keep].get(x, 0) + length
-            neighbours[x][keep] = neighbours[x].get(keep, 0) + length
-        neighbours[gone] = {}
+            nb[keep][x] = nb[keep].get(x, 0) + length
+            nb[x][keep] = nb[x].get(keep, 0) + length
+        nb[gone] = {}
         return keep
 
-    heap = [(size[i], i) for i in range(n) if 0 < size[i] < min_cells]
-    heapq.heapify(heap)
-    left = []
-    while heap:
-        cells, p = heapq.heappop(heap)
-        if parent[p] != p or size[p] != cells:
-            continue  # merged away, or grown since it was queued
-        if not neighbours[p]:
-            left.append(p)
-            continue
+    def preferred_stratum(self, p, min_cells):
+        """The neighbouring stratum whose joined patch is the smallest reaching ``min_cells`` (else the largest).
+
+        Ties: the longest shared boundary, then the lowest neighbour index.
+        """
         options = {}  # stratum -> [joined size, shared boundary, lowest neighbour]
-        for x, length in neighbours[p].items():
-            entry = options.setdefault(stratum[x], [size[p], 0, x])
-            entry[0] += size[x]
+        for x, length in self.neighbours[p].items():
+            entry = options.setdefault(self.stratum[x], [self.size[p], 0, x])
+            entry[0] += self.size[x]
             entry[1] += length
             entry[2] = min(entry[2], x)
 
@@ -1176,17 +1202,18 @@ def merge_patch_graph(sizes, strata, pairs, shared, min_cells):
             reaches = joined >= min_cells
             return (reaches, -joined if reaches else joined, boundary, -lowest)
 
-        chosen = max(options.items(), key=preference)[0]
+        return max(options.items(), key=preference)[0]
+
+    def take_stratum(self, p, chosen):
+        """Patch ``p`` joins all its neighbours of stratum ``chosen``; returns the root of the joined patch."""
         root = p
-        for x in [x for x in neighbours[p] if stratum[x] == chosen]:
-            root = join(x, root)
-        if size[root] < min_cells:
-            heapq.heappush(heap, (size[root], root))
-    final = np.array([stratum[find(i)] for i in range(n)], dtype=np.int64)
-    left = [p for p in left if parent[p] == p]
-    groups = sum(1 for i in range(n) if parent[i] == i and size[i] > 0)
-    return PatchMerge(final, int(np.count_nonzero(final != np.asarray(strata).ravel())),
-                      np.asarray(left, dtype=np.int64), np.asarray([size[p] for p in left], dtype=np.int64), groups)
+        for x in [x for x in self.neighbours[p] if self.stratum[x] == chosen]:
+            root = self.join(x, root)
+        return root
+
+    def groups(self):
+        """Patches after merging: roots of at least one cell."""
+        return sum(1 for i in range(self.n) if self.parent[i] == i and self.size[i] > 0)
 
 
 # ---------------------------------------------------------------------------
@@ -1267,6 +1294,135 @@ def _constant_error(name, value):
         "Use another covariate, or check the frame and the raster."), name=name, value=value))
 
 
+@dataclass(frozen=True)
+class _StratifyInput:
+    """Validated arguments of :func:`stratify_cells`."""
+
+    method: int
+    n_strata: int
+    names: tuple
+    rng: object
+    sample_size: int
+
+
+def _stratify_iv(method, n_strata, names, rng, sample_size):
+    if method not in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F, KMEANS, RASTER_CLASSES):
+        raise InputError(message("Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).", method=method))
+    k = int(n_strata)
+    if method != RASTER_CLASSES and k < 2:
+        raise InputError(message("Ask for at least 2 strata (STRATA)."))
+    if method == KMEANS and rng is None:
+        raise ValueError("k-means needs rng")
+    return _StratifyInput(method, k, tuple(names), rng, int(sample_size))
+
+
+def _no_cell_error(names):
+    return InputError(message("No cell of the frame has a value in every covariate ({names}). Check that the "
+                              "rasters cover the frame and that their NoData value is right.",
+                              names=", ".join(names)))
+
+
+@dataclass(frozen=True)
+class _FirstPass:
+    """What the first pass over the cells found: the first covariate's range, the shift for the sums."""
+
+    vmin: float
+    vmax: float
+    shift: np.ndarray
+    summary: CovariateSummary = None
+    histogram: Histogram = None
+
+
+def _first_pass(source, inp, value_range, progress):
+    """Quantile: the fine histogram (exact range included); other methods: every covariate's summary.
+
+    Raises InputError for no valid cell and a constant first covariate (k-means: any constant covariate).
+    """
+    if inp.method == QUANTILE:
+        hist = streamed_histogram(source, FINE_BINS, value_range, 0, progress)
+        if hist.total == 0:
+            raise _no_cell_error(inp.names)
+        shift = np.zeros(len(inp.names))
+        shift[0] = 0.5 * (hist.minimum + hist.maximum)
+        first = _FirstPass(hist.minimum, hist.maximum, shift, histogram=hist)
+    else:
+        summ = covariate_summary(source, progress)
+        if summ.count == 0:
+            raise _no_cell_error(inp.names)
+        first = _FirstPass(float(summ.minimum[0]), float(summ.maximum[0]), summ.mean, summary=summ)
+        if inp.method == KMEANS:
+            for c, nm in enumerate(inp.names):
+                if summ.minimum[c] == summ.maximum[c]:
+                    raise _constant_error(nm, summ.minimum[c])
+    if first.vmin == first.vmax:
+        raise _constant_error(inp.names[0], first.vmin)
+    return first
+
+
+def _threshold_rule(source, inp, first, progress, warnings):
+    """Boundaries on the first covariate (quantile, equal interval, cum sqrt(f)): ``(rule, histogram, n_distinct)``."""
+    k, name0 = inp.n_strata, inp.names[0]
+    hist = first.histogram
+    if hist is None:
+        hist = streamed_histogram(source, FINE_BINS, (first.vmin, first.vmax), 0, scaled_progress(progress, 0, 0.4))
+    n_distinct = int(np.count_nonzero(hist.counts))  # a lower bound, enough when >= k
+    if n_distinct < k:
+        n_distinct, _ = count_distinct(source, k)
+        if n_distinct < k:
+            raise InputError(message(
+                "Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the "
+                "{k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
+                name=name0, n_distinct=int(n_distinct), k=k))
+    if inp.method == QUANTILE:
+        boundaries, _ = exact_quantiles(source, quantile_probabilities(k), histogram=hist,
+                                        progress=scaled_progress(progress, 0.4, 1.0))
+    elif inp.method == EQUAL_INTERVAL:
+        boundaries = equal_interval_boundaries(first.vmin, first.vmax, k)
+    else:
+        coarse = hist.coarsen(CUM_ROOT_F_CLASSES)
+        boundaries = cum_root_f_boundaries(coarse.edges, coarse.counts, k)
+    unique = np.unique(boundaries)
+    if unique.size < boundaries.size:
+        warnings.append(message("Some boundaries coincide (many cells share the same value of '{name}'); "
+                                "{formed} strata are formed instead of {k}.",
+                                name=name0, formed=int(unique.size + 1), k=k))
+    return ThresholdRule(unique), hist, n_distinct
+
+
+def _kmeans_rule(source, inp, summ, progress):
+    """Nearest-centre rule of k-means on a standardised sample: ``(rule, fit, n_distinct, sample_n)``."""
+    k = inp.n_strata
+    sample = cell_sample(source, summ.count, inp.sample_size, inp.rng, progress)
+    sample_n = sample.shape[0]
+    z = (sample - summ.mean) / summ.sd
+    n_distinct = np.unique(z, axis=0).shape[0]
+    if n_distinct < k:
+        if sample_n == summ.count:
+            text = message("The covariates take only {n_distinct} distinct value combinations over the frame, "
+                           "fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
+                           n_distinct=int(n_distinct), k=k)
+        else:
+            text = message("The covariates take only {n_distinct} distinct value combinations in a sample of "
+                           "{sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to "
+                           "{n_distinct} or fewer.", n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
+        raise InputError(text)
+    fit = lloyd_kmeans(z, kmeans_plusplus(z, k, inp.rng))
+    order = np.argsort(fit.centres[:, 0], kind="stable")
+    return NearestCentreRule(fit.centres[order], summ.mean, summ.sd), fit, int(n_distinct), int(sample_n)
+
+
+def _class_rule(source, inp, progress):
+    """One stratum per class of a categorical first covariate: ``(rule, n_distinct)``."""
+    n_distinct, classes = count_distinct(source, MAX_CLASSES, progress=progress)
+    if n_distinct > MAX_CLASSES:
+        raise InputError(message(
+            "Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values "
+            "over the frame): reclassify it into {max_classes} classes or fewer first (for example with the "
+            "host's reclassify by table tool), or choose another METHOD.",
+            name=inp.names[0], max_classes=MAX_CLASSES, n_distinct=int(n_distinct)))
+    return ClassRule(np.asarray(classes)), int(n_distinct)
+
+
 def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, sample_size=100_000,
                    write=None, progress=None):
     """Strata for the valid cells of ``source``; see the module docstring for the methods.
@@ -1299,117 +1455,44 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
         No valid cell, a constant covariate, more strata than distinct values,
         a categorical raster with more than 50 classes.
     """
-    k = int(n_strata)
+    inp = _stratify_iv(method, n_strata, names, rng, sample_size)
     warnings = []
-    name0 = names[0]
-    if method not in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F, KMEANS, RASTER_CLASSES):
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes)."), method=method))
-    if method != RASTER_CLASSES and k < 2:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Ask for at least 2 strata (STRATA).")))
-    no_cell = InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-        "No cell of the frame has a value in every covariate ({names}). Check that the "
-        "rasters cover the frame and that their NoData value is right."),
-                                 names=", ".join(names)))
-    summ = hist = kfit = None
+    first = _first_pass(source, inp, value_range, scaled_progress(progress, 0, 0.3 if method == QUANTILE else 0.2))
+    hist = kfit = None
     sample_n = 0
-    n_distinct = 0
-    boundaries = None
-    if method == QUANTILE:
-        hist = streamed_histogram(source, FINE_BINS, value_range, 0, scaled_progress(progress, 0, 0.3))
-        if hist.total == 0:
-            raise no_cell
-        vmin, vmax = hist.minimum, hist.maximum
-        shift = np.zeros(len(names))
-    else:
-        summ = covariate_summary(source, scaled_progress(progress, 0, 0.2))
-        if summ.count == 0:
-            raise no_cell
-        vmin, vmax = float(summ.minimum[0]), float(summ.maximum[0])
-        shift = summ.mean
-        if method == KMEANS:
-            for c, nm in enumerate(names):
-                if summ.minimum[c] == summ.maximum[c]:
-                    raise _constant_error(nm, summ.minimum[c])
-    if vmin == vmax:
-        raise _constant_error(name0, vmin)
-
     if method in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F):
-        if method != QUANTILE:
-            hist = streamed_histogram(source, FINE_BINS, (vmin, vmax), 0, scaled_progress(progress, 0.2, 0.4))
-        else:
-            shift[0] = 0.5 * (vmin + vmax)
-        n_distinct = int(np.count_nonzero(hist.counts))  # a lower bound, enough when >= k
-        if n_distinct < k:
-            n_distinct, _ = count_distinct(source, k)
-            if n_distinct < k:
-                raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the "
-                    "{k} strata asked for. Lower STRATA to {n_distinct} or fewer."),
-                    name=name0, n_distinct=int(n_distinct), k=k))
-        if method == QUANTILE:
-            boundaries, _ = exact_quantiles(source, quantile_probabilities(k), histogram=hist,
-                                            progress=scaled_progress(progress, 0.3, 0.55))
-        elif method == EQUAL_INTERVAL:
-            boundaries = equal_interval_boundaries(vmin, vmax, k)
-        else:
-            coarse = hist.coarsen(CUM_ROOT_F_CLASSES)
-            boundaries = cum_root_f_boundaries(coarse.edges, coarse.counts, k)
-        unique = np.unique(boundaries)
-        if unique.size < boundaries.size:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "Some boundaries coincide (many cells share the same value of '{name}'); "
-                "{formed} strata are formed instead of {k}."),
-                                    name=name0, formed=int(unique.size + 1), k=k))
-        rule = ThresholdRule(unique)
+        lo = 0.3 if method == QUANTILE else 0.2
+        rule, hist, n_distinct = _threshold_rule(source, inp, first, scaled_progress(progress, lo, 0.55), warnings)
     elif method == KMEANS:
-        if rng is None:
-            raise ValueError("k-means needs rng")
-        sample = cell_sample(source, summ.count, sample_size, rng, scaled_progress(progress, 0.2, 0.4))
-        sample_n = sample.shape[0]
-        z = (sample - summ.mean) / summ.sd
-        n_distinct = np.unique(z, axis=0).shape[0]
-        if n_distinct < k:
-            if sample_n == summ.count:
-                text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "The covariates take only {n_distinct} distinct value combinations over the frame, "
-                    "fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer."),
-                               n_distinct=int(n_distinct), k=k)
-            else:
-                text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "The covariates take only {n_distinct} distinct value combinations in a sample of "
-                    "{sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to "
-                    "{n_distinct} or fewer."), n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
-            raise InputError(text)
-        kfit = lloyd_kmeans(z, kmeans_plusplus(z, k, rng))
-        order = np.argsort(kfit.centres[:, 0], kind="stable")
-        rule = NearestCentreRule(kfit.centres[order], summ.mean, summ.sd)
+        rule, kfit, n_distinct, sample_n = _kmeans_rule(source, inp, first.summary, scaled_progress(progress, 0.2, 0.4))
     else:
-        n_distinct, classes = count_distinct(source, MAX_CLASSES, progress=scaled_progress(progress, 0.2, 0.4))
-        if n_distinct > MAX_CLASSES:
-            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values "
-                "over the frame): reclassify it into {max_classes} classes or fewer first (for example with the "
-                "host's reclassify by table tool), or choose another METHOD."),
-                name=name0, max_classes=MAX_CLASSES, n_distinct=int(n_distinct)))
-        rule = ClassRule(np.asarray(classes))
-
-    k = rule.n_strata
-    threshold = isinstance(rule, ThresholdRule)
-    stats = accumulate_statistics(source, k, rule, write, shift, None if threshold else (vmin, vmax),
-                                  extremes=not threshold, progress=scaled_progress(progress, 0.55, 1.0))
-    if threshold:
-        stats = replace(stats, chart_range=(vmin, vmax), chart_counts=chart_from_histogram(hist, rule.boundaries,
-                                                                                           (vmin, vmax)))
+        rule, n_distinct = _class_rule(source, inp, scaled_progress(progress, 0.2, 0.4))
+    stats = _assign_and_count(source, rule, hist, first, write, scaled_progress(progress, 0.55, 1.0))
     lut, order = stratum_order(stats)
-    dropped = k - order.size
+    dropped = rule.n_strata - order.size
     if dropped:
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "{dropped} of the {k} strata hold no cell and were dropped."),
-                                dropped=int(dropped), k=k))
-    return Stratification(method, rule, None if boundaries is None else rule.boundaries, stats.reordered(order),
-                          lut, order, int(stats.total), int(n_distinct), int(sample_n), (float(vmin), float(vmax)),
-                          kfit, tuple(warnings))
+        warnings.append(message("{dropped} of the {k} strata hold no cell and were dropped.",
+                                dropped=int(dropped), k=rule.n_strata))
+    boundaries = rule.boundaries if isinstance(rule, ThresholdRule) else None
+    return Stratification(method, rule, boundaries, stats.reordered(order), lut, order, int(stats.total),
+                          int(n_distinct), int(sample_n), (float(first.vmin), float(first.vmax)), kfit,
+                          tuple(warnings))
+
+
+def _assign_and_count(source, rule, hist, first, write, progress):
+    """The assignment pass: every cell's stratum written, per-stratum statistics summed.
+
+    Threshold strata take their report histogram from the fine histogram
+    (:func:`chart_from_histogram`); the other rules count it in the pass.
+    """
+    threshold = isinstance(rule, ThresholdRule)
+    value_range = (first.vmin, first.vmax)
+    stats = accumulate_statistics(source, rule.n_strata, rule, write, first.shift, None if threshold else value_range,
+                                  extremes=not threshold, progress=progress)
+    if threshold:
+        stats = replace(stats, chart_range=value_range,
+                        chart_counts=chart_from_histogram(hist, rule.boundaries, value_range))
+    return stats
 
 
 def chart_from_histogram(hist, boundaries, value_range, bins=CHART_BINS):

@@ -324,9 +324,6 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
         Patches merged, and the patches (and their cells) still below the
         minimum because they touch no other stratum.
     """
-    from scipy.sparse import coo_matrix
-    from scipy.sparse.csgraph import connected_components
-
     if min_cells <= 1:
         return PatchCheck(0, 0, 0)
     ds = gdal.Open(path, gdal.GA_Update)
@@ -334,77 +331,128 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
     try:
         width, height = band.XSize, band.YSize
         blocks = [(y, rows) for _, y, _, rows in block_windows(width, height, (width, 1), (0, 0), block_cells)]
-        bases, sizes, strata, first = [], [], [], []
-        seam_a, seam_b = [], []
-        codes, counts = np.zeros(0, np.int64), np.zeros(0, np.int64)
-        prev_ids = prev_lab = None
-        base = 0
-        for i, (y0, rows) in enumerate(blocks):  # pass 1: patches, sizes, shared edges
-            ids = band.ReadAsArray(0, y0, width, rows)
-            lab, block_strata = _block_patches(ids)
-            k = len(block_strata)
-            sizes.append(np.bincount(lab.ravel(), minlength=k + 1)[1:])
-            lab[lab > 0] += base
-            bases.append(base)
-            strata.extend(block_strata)
-            seen, at = np.unique(lab.ravel(), return_index=True)  # each label's first cell in the block
-            first.append((y0 * width + at[seen > 0]).astype(np.int64))
-            found = []
-            for a, b, same in ((lab[:, :-1], lab[:, 1:], None), (lab[:-1], lab[1:], None),
-                               (prev_lab, lab[:1], None if prev_ids is None else prev_ids == ids[:1])):
-                if a is None:
-                    continue
-                touch = (a != b) & (a > 0) & (b > 0)
-                if same is not None:  # across the block boundary: one patch cut in two, or two patches
-                    seam = touch & same
-                    seam_a.append(a[seam])
-                    seam_b.append(b[seam])
-                    touch &= ~same
-                found.append(_pair_codes(a[touch], b[touch]))
-            codes, counts = _count_codes(codes, counts, np.concatenate(found))
-            prev_ids, prev_lab = ids[-1:], lab[-1:]
-            base += k
-            if progress is not None and progress(0.6 * (i + 1) / len(blocks)):
-                raise Cancelled("Stratification cancelled.")
-        if base == 0:
+        labels = _label_blocks(band, blocks, strat.scaled_progress(progress, 0, 0.6))
+        if labels.count == 0:
             return PatchCheck(0, 0, 0, 0)
-        # local labels 1..base -> patches: parts joined across block boundaries, numbered by their first cell
-        seam_a = np.concatenate(seam_a) - 1 if seam_a else np.zeros(0, np.int64)
-        seam_b = np.concatenate(seam_b) - 1 if seam_b else np.zeros(0, np.int64)
-        graph = coo_matrix((np.ones(seam_a.size), (seam_a, seam_b)), shape=(base, base))
-        n_patches, part_of = connected_components(graph, directed=False)
-        first = np.concatenate(first)
-        patch_first = np.full(n_patches, np.iinfo(np.int64).max)
-        np.minimum.at(patch_first, part_of, first)
-        rank = np.empty(n_patches, np.int64)
-        rank[np.argsort(patch_first, kind="stable")] = np.arange(1, n_patches + 1)
-        patch = rank[part_of]  # patch (1..n) of each local label (0-based)
-        local_strata = np.asarray(strata, np.int64)
-        patch_sizes = np.bincount(patch, weights=np.concatenate(sizes), minlength=n_patches + 1).astype(np.int64)
-        patch_strata = np.zeros(n_patches + 1, np.int64)
-        patch_strata[patch] = local_strata
+        patch, patch_sizes, patch_strata = _number_patches(labels)
         small = patch_sizes < min_cells
         small[0] = False
         if not small.any():
-            return PatchCheck(0, 0, 0, int(n_patches))
-        a, b = patch[(codes >> 32) - 1], patch[(codes & 0xFFFFFFFF) - 1]
+            return PatchCheck(0, 0, 0, int(patch_sizes.size - 1))
+        a, b = patch[(labels.codes >> 32) - 1], patch[(labels.codes & 0xFFFFFFFF) - 1]
         keep = small[a] | small[b]
         pair_codes, shared = _count_codes(np.zeros(0, np.int64), np.zeros(0, np.int64),
-                                          _pair_codes(a[keep], b[keep]), counts[keep])
+                                          _pair_codes(a[keep], b[keep]), labels.counts[keep])
         pairs = np.column_stack([pair_codes >> 32, pair_codes & 0xFFFFFFFF])
         merge = strat.merge_patch_graph(patch_sizes, patch_strata, pairs, shared, min_cells)
         if merge.merged:
             lut = np.concatenate([[0], merge.strata[patch]]).astype(np.uint8)  # local label -> stratum
-            changed = np.concatenate([[False], merge.strata[patch] != local_strata])
-            for i, (y0, rows) in enumerate(blocks):  # pass 2: the same labels, the new strata
-                ids = band.ReadAsArray(0, y0, width, rows)
-                lab, _ = _block_patches(ids)
-                lab[lab > 0] += bases[i]
-                if changed[lab].any():
-                    band.WriteArray(lut[lab], 0, y0)
-                if progress is not None and progress(0.6 + 0.4 * (i + 1) / len(blocks)):
-                    raise Cancelled("Stratification cancelled.")
+            changed = np.concatenate([[False], merge.strata[patch] != labels.strata])
+            _rewrite_blocks(band, blocks, labels.bases, lut, changed, strat.scaled_progress(progress, 0.6, 1.0))
         return PatchCheck(merge.merged, int(merge.left.size), int(merge.left_cells.sum()), merge.patches)
     finally:
         band.FlushCache()
         band = ds = None
+
+
+@dataclass(frozen=True)
+class _BlockLabels:
+    """Patches of each block of rows (local labels 1..count over all blocks) and how they touch.
+
+    ``bases`` is each block's first label - 1; ``sizes``, ``strata`` and
+    ``first`` (flat index of the first cell) are per local label; ``seam_a`` /
+    ``seam_b`` pair the 0-based local labels that a block boundary cuts from one
+    patch; ``codes`` / ``counts`` are the pairs of local labels of different
+    strata that share cell edges, and how many.
+    """
+
+    bases: list
+    sizes: np.ndarray
+    strata: np.ndarray
+    first: np.ndarray
+    seam_a: np.ndarray
+    seam_b: np.ndarray
+    codes: np.ndarray
+    counts: np.ndarray
+
+    @property
+    def count(self):
+        return int(self.sizes.size)
+
+
+def _label_blocks(band, blocks, progress=None):
+    """Pass 1 of :func:`merge_raster_patches`: every block's patches labelled (scipy.ndimage.label)."""
+    width = band.XSize
+    bases, sizes, strata, first = [], [], [], []
+    seam_a, seam_b = [], []
+    codes, counts = np.zeros(0, np.int64), np.zeros(0, np.int64)
+    prev_ids = prev_lab = None
+    base = 0
+    for i, (y0, rows) in enumerate(blocks):
+        ids = band.ReadAsArray(0, y0, width, rows)
+        lab, block_strata = _block_patches(ids)
+        k = len(block_strata)
+        sizes.append(np.bincount(lab.ravel(), minlength=k + 1)[1:])
+        lab[lab > 0] += base
+        bases.append(base)
+        strata.extend(block_strata)
+        seen, at = np.unique(lab.ravel(), return_index=True)  # each label's first cell in the block
+        first.append((y0 * width + at[seen > 0]).astype(np.int64))
+        found = []
+        for a, b, same in ((lab[:, :-1], lab[:, 1:], None), (lab[:-1], lab[1:], None),
+                           (prev_lab, lab[:1], None if prev_ids is None else prev_ids == ids[:1])):
+            if a is None:
+                continue
+            touch = (a != b) & (a > 0) & (b > 0)
+            if same is not None:  # across the block boundary: one patch cut in two, or two patches
+                seam = touch & same
+                seam_a.append(a[seam])
+                seam_b.append(b[seam])
+                touch &= ~same
+            found.append(_pair_codes(a[touch], b[touch]))
+        codes, counts = _count_codes(codes, counts, np.concatenate(found))
+        prev_ids, prev_lab = ids[-1:], lab[-1:]
+        base += k
+        if progress is not None and progress((i + 1) / len(blocks)):
+            raise Cancelled("Stratification cancelled.")
+    empty = np.zeros(0, np.int64)
+    return _BlockLabels(bases, np.concatenate(sizes) if sizes else empty, np.asarray(strata, np.int64),
+                        np.concatenate(first) if first else empty,
+                        np.concatenate(seam_a) - 1 if seam_a else empty,
+                        np.concatenate(seam_b) - 1 if seam_b else empty, codes, counts)
+
+
+def _number_patches(labels):
+    """Local labels joined across block boundaries (scipy.sparse.csgraph) into patches 1..n, numbered by first cell.
+
+    Returns ``(patch of each local label, cells per patch, stratum per patch)``; index 0 of the last two is
+    "no patch". Numbering by the first cell in reading order makes the result independent of the blocks.
+    """
+    from scipy.sparse import coo_matrix
+    from scipy.sparse.csgraph import connected_components
+
+    n = labels.count
+    graph = coo_matrix((np.ones(labels.seam_a.size), (labels.seam_a, labels.seam_b)), shape=(n, n))
+    n_patches, part_of = connected_components(graph, directed=False)
+    patch_first = np.full(n_patches, np.iinfo(np.int64).max)
+    np.minimum.at(patch_first, part_of, labels.first)
+    rank = np.empty(n_patches, np.int64)
+    rank[np.argsort(patch_first, kind="stable")] = np.arange(1, n_patches + 1)
+    patch = rank[part_of]
+    patch_sizes = np.bincount(patch, weights=labels.sizes, minlength=n_patches + 1).astype(np.int64)
+    patch_strata = np.zeros(n_patches + 1, np.int64)
+    patch_strata[patch] = labels.strata
+    return patch, patch_sizes, patch_strata
+
+
+def _rewrite_blocks(band, blocks, bases, lut, changed, progress=None):
+    """Pass 2 of :func:`merge_raster_patches`: the same labels again, the blocks that changed written anew."""
+    width = band.XSize
+    for i, (y0, rows) in enumerate(blocks):
+        ids = band.ReadAsArray(0, y0, width, rows)
+        lab, _ = _block_patches(ids)
+        lab[lab > 0] += bases[i]
+        if changed[lab].any():
+            band.WriteArray(lut[lab], 0, y0)
+        if progress is not None and progress((i + 1) / len(blocks)):
+            raise Cancelled("Stratification cancelled.")

@@ -253,7 +253,8 @@ def test_pinned_parameters_only_merge_a_speckled_covariate_to_the_default_min_ar
     frame = _frame_layer("POLYGON((500000 4000000, 502000 4000000, 502000 3998400, 500000 3998400, 500000 4000000))")
     out = run_alg(alg_id, {
         "FRAME": frame, "COVARIATES": [_speckled(tmp_path)], "METHOD": 0, "STRATA": 5,
-        "OUTPUT_RASTER": str(tmp_path / "p.tif"), "OUTPUT": str(tmp_path / "p.gpkg"), "REPORT": str(tmp_path / "p.html"),
+        "OUTPUT_RASTER": str(tmp_path / "p.tif"), "OUTPUT": str(tmp_path / "p.gpkg"),
+        "REPORT": str(tmp_path / "p.html"),
     })
     ds = gdal.Open(out["OUTPUT_RASTER"])
     ids = ds.GetRasterBand(1).ReadAsArray()
