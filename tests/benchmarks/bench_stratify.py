@@ -1,84 +1,117 @@
-"""Speed and memory of the stratification on a 10,000 x 10,000 float32 covariate (10^8 cells).
+"""Speed and memory of plotwise:stratify, the whole algorithm (polygons, layer and report written), run on demand.
 
-Run on demand: ``.venv/bin/python tests/benchmarks/bench_stratify.py [--size N] [--repeats R] [--no-host] [--keep]``.
+    .venv/bin/python tests/benchmarks/bench_stratify.py [--case textured|speckled|all] [--size N] [--repeats R]
+                                                        [--folder DIR] [--no-host]
 
-* The covariate (a smooth invented elevation surface, UTM 33N, 10 m cells) and a
-  frame polygon covering most of it are written to a folder in /tmp, deleted at the end.
-* Each measurement runs in its own process, so that its peak memory (ru_maxrss) is its own.
-* Targets: quantile into 5 strata clipped to the frame, peak memory under 1 GiB, wall time
-  within 2x of a bare GDAL block read plus ``numpy.digitize`` over the same raster (the
-  stratification proper: boundaries, assignment, stratum raster written). Polygonising is
-  timed apart, and the whole job is compared with the host's own chain
-  (``gdal:cliprasterbymasklayer`` + ``native:reclassifybytable`` + ``gdal:polygonize``,
-  given our boundaries) as a printed ratio.
-* Peak memory includes GDAL's block cache (GDAL_CACHEMAX, by default 5 % of the RAM), which
-  the bare pass fills as much as ours.
-* On a shared machine each side's fastest of alternated runs is kept (``--repeats``).
-  The engine works on blocks in one thread beside the reader on two cores, two above
-  (``PLOTWISE_WORKERS=0`` runs everything in the calling thread, as the bare pass does).
+Inputs are invented (UTM 33N, 10 m cells) and written once to ``--folder`` (default
+/tmp/plotwise_bench_stratify), then reused: the 10^8-cell raster takes a few seconds to write
+and 0.4 GB of disk. Each measurement runs in its own process, so that its peak memory
+(ru_maxrss, which includes GDAL's block cache) is its own.
+
+1. **textured** (issue 18): a smooth elevation surface plus fine noise (SD 1 m per cell,
+   a DEM's vertical error), 10,000 x 10,000 cells, a frame polygon covering most of it;
+   quantile, 5 strata, default MIN_AREA. Printed: our whole run through the host's
+   Processing framework; a bare GDAL block read plus ``numpy.digitize`` over the same raster
+   (the floor of any stratification); the host's own chain run through Processing in one
+   process (``gdal:cliprasterbymasklayer``, ``native:reclassifybytable`` with our boundaries,
+   ``gdal:polygonize``, ``native:dissolve`` by stratum); the ratios. Targets: at most 3x the
+   bare pass, at most 0.5x the host chain, peak memory under 1 GiB.
+2. **speckled** (issue 12): white noise, quantile, 5 strata, default MIN_AREA, on
+   2,000 x 2,000 cells (target: under 60 s and 1 GiB, or a clear error naming MIN_AREA) and
+   on 10,000 x 10,000 cells (target: no memory blow-up: a result or a clear error).
+
+On a shared machine each side's fastest of alternated runs is kept (``--repeats``).
 """
 import argparse
 import json
 import os
 import resource
-import shutil
 import subprocess
 import sys
-import tempfile
 import time
 from pathlib import Path
 
 HERE = Path(__file__).resolve()
-sys.path.insert(0, str(HERE.parents[1]))
-import conftest  # noqa: E402,F401  (registers the package as plotwise)
-sys.path.insert(0, str(Path(__file__).resolve().parents[2] / "scripts"))
-from headless_host import start_host  # noqa: E402
-
-import numpy as np  # noqa: E402
-from osgeo import gdal, ogr, osr  # noqa: E402
-
-gdal.UseExceptions()
+REPO = HERE.parents[2]
 GIB = 1024**3
 CELL = 10.0
 X0, Y0 = 400000.0, 5200000.0
+NOISE_SD = 1.0
 
 
-def make_inputs(folder, size):
-    path = os.path.join(folder, "elevation.tif")
+def _gdal():
+    from osgeo import gdal, ogr, osr
+
+    gdal.UseExceptions()
+    return gdal, ogr, osr
+
+
+def write_raster(path, size, values_for_rows):
+    gdal, _, osr = _gdal()
     srs = osr.SpatialReference()
     srs.ImportFromEPSG(32633)
-    ds = gdal.GetDriverByName("GTiff").Create(path, size, size, 1, gdal.GDT_Float32,
+    ds = gdal.GetDriverByName("GTiff").Create(path + ".part", size, size, 1, gdal.GDT_Float32,
                                               ["TILED=YES", "BLOCKXSIZE=512", "BLOCKYSIZE=512"])
     ds.SetGeoTransform((X0, CELL, 0, Y0, 0, -CELL))
     ds.SetProjection(srs.ExportToWkt())
     band = ds.GetRasterBand(1)
     band.SetNoDataValue(-9999)
-    x = np.arange(size) * CELL
-    rows = 512
-    for y0 in range(0, size, rows):
-        y = (np.arange(y0, min(size, y0 + rows)) * CELL)[:, None]
-        z = (600 + 0.004 * x[None, :] + 250 * np.sin(x[None, :] / 9000.0) * np.cos(y / 12000.0)
-             + 60 * np.sin((x[None, :] + 2 * y) / 2500.0))
-        band.WriteArray(z.astype(np.float32), 0, y0)
+    for y0 in range(0, size, 512):
+        band.WriteArray(values_for_rows(y0, min(size, y0 + 512)), 0, y0)
     band.FlushCache()
     ds = None
-    span = size * CELL
-    frame = ogr.CreateGeometryFromWkt(
-        "POLYGON((%f %f, %f %f, %f %f, %f %f, %f %f))" % (
-            X0 + 0.03 * span, Y0 - 0.05 * span, X0 + 0.97 * span, Y0 - 0.02 * span,
-            X0 + 0.95 * span, Y0 - 0.96 * span, X0 + 0.10 * span, Y0 - 0.90 * span,
-            X0 + 0.03 * span, Y0 - 0.05 * span))
-    frame_path = os.path.join(folder, "frame.gpkg")
-    drv = ogr.GetDriverByName("GPKG")
-    out = drv.CreateDataSource(frame_path)
+    os.replace(path + ".part", path)
+
+
+def textured(folder, size):
+    """Smooth invented relief (600-1,000 m) plus white noise of SD 1 m: a DEM's fine texture."""
+    import numpy as np
+
+    path = os.path.join(folder, f"textured_{size}.tif")
+    if not os.path.exists(path):
+        x = np.arange(size) * CELL
+        rng = np.random.default_rng(12)
+
+        def rows(y0, y1):
+            y = (np.arange(y0, y1) * CELL)[:, None]
+            z = (600 + 0.004 * x[None, :] + 250 * np.sin(x[None, :] / 9000.0) * np.cos(y / 12000.0)
+                 + 60 * np.sin((x[None, :] + 2 * y) / 2500.0))
+            return (z + rng.normal(0, NOISE_SD, z.shape)).astype(np.float32)
+
+        write_raster(path, size, rows)
+    return path
+
+
+def speckled(folder, size):
+    """White noise in [0, 1): a covariate speckled at the scale of its cells."""
+    import numpy as np
+
+    path = os.path.join(folder, f"speckled_{size}.tif")
+    if not os.path.exists(path):
+        rng = np.random.default_rng(7)
+        write_raster(path, size, lambda y0, y1: rng.random((y1 - y0, size), dtype=np.float32))
+    return path
+
+
+def frame(folder, size, whole=False):
+    """A quadrilateral covering most of the raster (or the whole raster), as a GeoPackage."""
+    _, ogr, osr = _gdal()
+    path = os.path.join(folder, f"frame_{size}{'_whole' if whole else ''}.gpkg")
+    if os.path.exists(path):
+        return path
+    s = size * CELL
+    corners = ([(0, 0), (1, 0), (1, 1), (0, 1)] if whole else
+               [(0.03, 0.05), (0.97, 0.02), (0.95, 0.96), (0.10, 0.90)])
+    ring = ", ".join(f"{X0 + a * s} {Y0 - b * s}" for a, b in corners + corners[:1])
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(32633)
+    out = ogr.GetDriverByName("GPKG").CreateDataSource(path)
     layer = out.CreateLayer("frame", srs, ogr.wkbPolygon)
     feat = ogr.Feature(layer.GetLayerDefn())
-    feat.SetGeometry(frame)
+    feat.SetGeometry(ogr.CreateGeometryFromWkt(f"POLYGON(({ring}))"))
     layer.CreateFeature(feat)
     out = None
-    with open(os.path.join(folder, "frame.wkb"), "wb") as f:
-        f.write(bytes(frame.ExportToWkb()))
-    return path, frame_path
+    return path
 
 
 def peak():
@@ -86,9 +119,12 @@ def peak():
 
 
 # -- measurements, each in a child process ----------------------------------------------
-def measure_bare(folder, bounds):
+def measure_bare(raster, bounds):
     """GDAL reads the raster block by block (its own 512 x 512 tiles) and numpy.digitize classifies each block."""
-    ds = gdal.Open(os.path.join(folder, "elevation.tif"))
+    import numpy as np
+
+    gdal, _, _ = _gdal()
+    ds = gdal.Open(raster)
     band = ds.GetRasterBand(1)
     bx, by = band.GetBlockSize()
     t = time.perf_counter()
@@ -100,36 +136,47 @@ def measure_bare(folder, bounds):
     return {"seconds": time.perf_counter() - t, "peak": peak()}
 
 
-def measure_ours(folder):
-    from plotwise.processing.gdal_io import stratify_pipeline
-    from plotwise.processing.gdal_io.covariate_stack import Covariate
-    from plotwise.processing.engine import stratification as s
+def _host():
+    sys.path.insert(0, str(REPO / "scripts"))
+    from headless_host import start_host
 
-    wkt = gdal.Open(os.path.join(folder, "elevation.tif")).GetProjection()
-    frame = open(os.path.join(folder, "frame.wkb"), "rb").read()
-    times = {}
-    real_polygonise = stratify_pipeline.polygonise_strata
+    return start_host()
 
-    def timed_polygonise(*args, **kwargs):
-        t0 = time.perf_counter()
-        try:
-            return real_polygonise(*args, **kwargs)
-        finally:
-            times["polygonise"] = time.perf_counter() - t0
 
-    stratify_pipeline.polygonise_strata = timed_polygonise
+def measure_ours(raster, frame_path, out_folder):
+    """plotwise:stratify through the host's Processing framework, with only the pinned parameters."""
+    app, processing = _host()
+    from qgis.core import QgsProcessingException, QgsVectorLayer
+
     t = time.perf_counter()
-    r = stratify_pipeline.stratify_rasters([Covariate(os.path.join(folder, "elevation.tif"), "elevation")], [frame], wkt,
-                             s.QUANTILE, 5, os.path.join(folder, "strata.tif"))
-    total = time.perf_counter() - t
-    return {"seconds": total - times["polygonise"], "polygonise": times["polygonise"], "total": total,
-            "peak": peak(), "boundaries": [float(b) for b in r.result.boundaries],
-            "areas_ha": [float(a) for a in r.area_ha]}
+    try:
+        out = processing.run("plotwise:stratify", {
+            "FRAME": frame_path, "COVARIATES": [raster], "METHOD": 0, "STRATA": 5,
+            "OUTPUT_RASTER": os.path.join(out_folder, "ours_strata.tif"),
+            "OUTPUT": os.path.join(out_folder, "ours_strata.gpkg"),
+            "REPORT": os.path.join(out_folder, "ours_report.html")})
+    except QgsProcessingException as error:
+        return {"seconds": time.perf_counter() - t, "peak": peak(), "error": str(error)}
+    seconds = time.perf_counter() - t
+    layer = QgsVectorLayer(out["OUTPUT"], "strata", "ogr")
+    parts = sum(f.geometry().constGet().numGeometries() for f in layer.getFeatures())
+    return {"seconds": seconds, "peak": peak(), "strata": out["N_STRATA"], "parts": parts}
 
 
-def measure_host(folder, bounds):
-    os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
-    app, processing = start_host()  # scripts/headless_host.py
+def boundaries_of(raster, frame_path, out_folder):
+    """Quantile boundaries for the references, from a 2,000 x 2,000 overview read (close to ours; exactness is ours)."""
+    import numpy as np
+
+    gdal, _, _ = _gdal()
+    ds = gdal.Open(raster)
+    band = ds.GetRasterBand(1)
+    sample = band.ReadAsArray(0, 0, band.XSize, band.YSize, buf_xsize=2000, buf_ysize=2000).astype(float)
+    return [float(b) for b in np.quantile(sample[sample != -9999], [0.2, 0.4, 0.6, 0.8])]
+
+
+def measure_host(raster, frame_path, out_folder, bounds):
+    """The host's own chain in one process: clip by mask, reclassify by table, polygonize, dissolve."""
+    app, processing = _host()
     edges = [-1e30] + list(bounds) + [1e30]
     table = []
     for h in range(len(edges) - 1):
@@ -137,100 +184,119 @@ def measure_host(folder, bounds):
     times = {}
     t = time.perf_counter()
     processing.run("gdal:cliprasterbymasklayer", {
-        "INPUT": os.path.join(folder, "elevation.tif"), "MASK": os.path.join(folder, "frame.gpkg"),
-        "NODATA": -9999, "CROP_TO_CUTLINE": True, "OUTPUT": os.path.join(folder, "host_clip.tif")})
+        "INPUT": raster, "MASK": frame_path, "NODATA": -9999, "CROP_TO_CUTLINE": True,
+        "OUTPUT": os.path.join(out_folder, "host_clip.tif")})
     times["clip"] = time.perf_counter() - t
     t1 = time.perf_counter()
     processing.run("native:reclassifybytable", {
-        "INPUT_RASTER": os.path.join(folder, "host_clip.tif"), "RASTER_BAND": 1, "TABLE": table,
+        "INPUT_RASTER": os.path.join(out_folder, "host_clip.tif"), "RASTER_BAND": 1, "TABLE": table,
         "RANGE_BOUNDARIES": 1,  # min <= value < max, as ours
-        "NO_DATA": 0, "DATA_TYPE": 0, "OUTPUT": os.path.join(folder, "host_classes.tif")})
+        "NO_DATA": 0, "DATA_TYPE": 0, "OUTPUT": os.path.join(out_folder, "host_classes.tif")})
     times["reclassify"] = time.perf_counter() - t1
     t2 = time.perf_counter()
     processing.run("gdal:polygonize", {
-        "INPUT": os.path.join(folder, "host_classes.tif"), "BAND": 1, "FIELD": "stratum",
-        "OUTPUT": os.path.join(folder, "host_strata.gpkg")})
+        "INPUT": os.path.join(out_folder, "host_classes.tif"), "BAND": 1, "FIELD": "stratum",
+        "OUTPUT": os.path.join(out_folder, "host_patches.gpkg")})
     times["polygonize"] = time.perf_counter() - t2
-    times["total"] = time.perf_counter() - t
+    t3 = time.perf_counter()
+    processing.run("native:dissolve", {
+        "INPUT": os.path.join(out_folder, "host_patches.gpkg"), "FIELD": ["stratum"],
+        "OUTPUT": os.path.join(out_folder, "host_strata.gpkg")})
+    times["dissolve"] = time.perf_counter() - t3
+    times["seconds"] = time.perf_counter() - t
     times["peak"] = peak()
     return times
 
 
-def child(kind, folder, bounds):
-    if kind == "bare":
-        out = measure_bare(folder, bounds)
-    elif kind == "ours":
-        out = measure_ours(folder)
-    else:
-        out = measure_host(folder, bounds)
-    print("RESULT " + json.dumps(out))
+def child(args):
+    kind, a = args.child, json.loads(args.args)
+    out = {"bare": measure_bare, "ours": measure_ours, "host": measure_host}[kind](*a)
+    print("RESULT " + json.dumps(out), flush=True)
+    os._exit(0)  # PyQGIS may crash while tearing down a standalone application
 
 
-def run_child(kind, folder, bounds=(), env=None):
-    cmd = [sys.executable, str(HERE), "--child", kind, "--folder", folder, "--bounds", json.dumps(list(bounds))]
+def run_child(kind, *args, env=None):
+    cmd = [sys.executable, str(HERE), "--child", kind, "--args", json.dumps(list(args))]
     proc = subprocess.run(cmd, capture_output=True, text=True, env=None if env is None else {**os.environ, **env})
     for line in proc.stdout.splitlines():
         if line.startswith("RESULT "):
             return json.loads(line[7:])
-    sys.stderr.write(proc.stdout + proc.stderr)
+    sys.stderr.write(proc.stdout[-3000:] + proc.stderr[-3000:])
     return None
+
+
+def fastest(runs):
+    ok = [r for r in runs if r]
+    return min(ok, key=lambda r: r["seconds"]) if ok else None
+
+
+def textured_case(folder, size, repeats, host):
+    t = time.perf_counter()
+    raster, frame_path = textured(folder, size), frame(folder, size)
+    print(f"== textured covariate: {size:,} x {size:,} cells, smooth relief + noise SD {NOISE_SD:g} m "
+          f"(inputs ready in {time.perf_counter() - t:.1f} s, {folder})")
+    bounds = boundaries_of(raster, frame_path, folder)
+    run_child("bare", raster, bounds)  # warms the page cache
+    runs_ours, runs_bare = [], []
+    for _ in range(repeats):
+        runs_bare.append(run_child("bare", raster, bounds))
+        runs_ours.append(run_child("ours", raster, frame_path, folder))
+    bare, ours = fastest(runs_bare), fastest(runs_ours)
+    if ours is None or "error" in ours:
+        raise SystemExit(f"our run failed: {ours}")
+    print("runs (s): bare " + ", ".join(f"{r['seconds']:.2f}" for r in runs_bare if r)
+          + "; plotwise " + ", ".join(f"{r['seconds']:.2f}" for r in runs_ours if r))
+    print(f"bare GDAL block read + numpy.digitize: {bare['seconds']:7.2f} s, peak {bare['peak'] / GIB:.2f} GiB")
+    print(f"plotwise:stratify (quantile, 5 strata, default MIN_AREA, polygons, layer and report): "
+          f"{ours['seconds']:7.2f} s, peak {ours['peak'] / GIB:.2f} GiB, {ours['strata']} strata in "
+          f"{ours['parts']:,} polygons")
+    ratio = ours["seconds"] / bare["seconds"]
+    print(f"  ratio to the bare pass: {ratio:.2f} (target <= 3.00) {'OK' if ratio <= 3 else 'OVER'}")
+    print(f"  peak memory: {ours['peak'] / GIB:.2f} GiB (target < 1 GiB) {'OK' if ours['peak'] < GIB else 'OVER'}")
+    if host:
+        ref = run_child("host", raster, frame_path, folder, bounds)
+        if ref is None:
+            print("host chain: not available")
+            return
+        print(f"host chain: clip {ref['clip']:.2f} s + reclassifybytable {ref['reclassify']:.2f} s + polygonize "
+              f"{ref['polygonize']:.2f} s + dissolve {ref['dissolve']:.2f} s = {ref['seconds']:.2f} s, "
+              f"peak {ref['peak'] / GIB:.2f} GiB")
+        r = ours["seconds"] / ref["seconds"]
+        print(f"  ratio plotwise / host chain: {r:.2f} (target <= 0.50) {'OK' if r <= 0.5 else 'OVER'}")
+
+
+def speckled_case(folder, sizes):
+    for size in sizes:
+        raster, frame_path = speckled(folder, size), frame(folder, size, whole=True)
+        r = run_child("ours", raster, frame_path, folder)
+        if r is None:
+            print(f"== speckled {size:,} x {size:,}: the run died (memory?)")
+            continue
+        what = (f"error: {r['error']}" if "error" in r else f"{r['strata']} strata in {r['parts']:,} polygons")
+        limit = 60 if size <= 2000 else None
+        ok = r["peak"] < GIB and (limit is None or r["seconds"] < limit)
+        print(f"== speckled {size:,} x {size:,} (white noise, quantile, 5 strata, default MIN_AREA): "
+              f"{r['seconds']:.1f} s, peak {r['peak'] / GIB:.2f} GiB {'OK' if ok else 'OVER'}\n  {what}")
 
 
 def main():
     ap = argparse.ArgumentParser()
+    ap.add_argument("--case", default="all", choices=["textured", "speckled", "all"])
     ap.add_argument("--size", type=int, default=10_000)
-    ap.add_argument("--keep", action="store_true")
+    ap.add_argument("--repeats", type=int, default=2)
+    ap.add_argument("--folder", default="/tmp/plotwise_bench_stratify")
     ap.add_argument("--no-host", action="store_true")
-    ap.add_argument("--repeats", type=int, default=3)
     ap.add_argument("--child")
-    ap.add_argument("--folder")
-    ap.add_argument("--bounds", default="[]")
+    ap.add_argument("--args", default="[]")
     args = ap.parse_args()
     if args.child:
-        child(args.child, args.folder, json.loads(args.bounds))
+        child(args)
         return
-    folder = tempfile.mkdtemp(prefix="plotwise_bench_", dir="/tmp")
-    try:
-        t = time.perf_counter()
-        make_inputs(folder, args.size)
-        print(f"covariate {args.size:,} x {args.size:,} float32 written in {time.perf_counter() - t:.1f} s ({folder})")
-        ours = run_child("ours", folder)  # first run warms the page cache
-        if ours is None:
-            raise SystemExit("our run failed")
-        # the machine may be shared: alternate the two measurements and keep each one's fastest run
-        runs_ours, runs_bare = [], []
-        for _ in range(args.repeats):
-            runs_bare.append(run_child("bare", folder, ours["boundaries"]))
-            runs_ours.append(run_child("ours", folder))
-        bare = min((r for r in runs_bare if r), key=lambda r: r["seconds"])
-        ours = min((r for r in runs_ours if r), key=lambda r: r["seconds"])
-        print("runs (s): bare " + ", ".join(f"{r['seconds']:.2f}" for r in runs_bare if r)
-              + "; plotwise " + ", ".join(f"{r['seconds']:.2f}" for r in runs_ours if r))
-        print(f"bare GDAL block read + numpy.digitize: {bare['seconds']:7.2f} s, peak {bare['peak'] / GIB:.2f} GiB")
-        print(f"plotwise quantile, 5 strata, clipped: {ours['seconds']:7.2f} s  (+ polygonise {ours['polygonise']:.2f} s"
-              f" = {ours['total']:.2f} s), peak {ours['peak'] / GIB:.2f} GiB")
-        ratio = ours["seconds"] / bare["seconds"]
-        print(f"  ratio to the bare pass: {ratio:.2f} (target <= 2.00) {'OK' if ratio <= 2 else 'OVER'}")
-        serial = run_child("ours", folder, env={"PLOTWISE_WORKERS": "0"})
-        if serial is not None:
-            print(f"  all in the calling thread (PLOTWISE_WORKERS=0): {serial['seconds']:.2f} s, ratio "
-                  f"{serial['seconds'] / bare['seconds']:.2f}")
-        print(f"  peak memory: {ours['peak'] / GIB:.2f} GiB (target < 1 GiB) {'OK' if ours['peak'] < GIB else 'OVER'}")
-        print("  boundaries:", ", ".join(f"{b:.2f}" for b in ours["boundaries"]))
-        print("  areas (ha):", ", ".join(f"{a:,.0f}" for a in ours["areas_ha"]))
-        if not args.no_host:
-            host = run_child("host", folder, ours["boundaries"])
-            if host is None:
-                print("host chain: not available")
-            else:
-                print(f"host chain: clip {host['clip']:.2f} s + reclassifybytable {host['reclassify']:.2f} s + "
-                      f"polygonize {host['polygonize']:.2f} s = {host['total']:.2f} s, peak {host['peak'] / GIB:.2f} GiB")
-                print(f"  ratio plotwise whole job / host chain: {ours['total'] / host['total']:.2f}")
-    finally:
-        if args.keep:
-            print("kept", folder)
-        else:
-            shutil.rmtree(folder, ignore_errors=True)
+    os.makedirs(args.folder, exist_ok=True)
+    if args.case in ("speckled", "all"):
+        speckled_case(args.folder, [2000, args.size])
+    if args.case in ("textured", "all"):
+        textured_case(args.folder, args.size, args.repeats, not args.no_host)
 
 
 if __name__ == "__main__":
