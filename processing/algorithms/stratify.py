@@ -364,7 +364,8 @@ class Stratify(PlotwiseAlgorithm):
 
         report.section(self.tr("Map"))
         labels = [self.translate_message(label) for label in result.labels]
-        report.figure(self._map(shapes, frame_polygons, labels), self.tr("Strata within the sampling frame"))
+        shown = shapes if result.map_polygons is None else [shapely_wkb.loads(bytes(b)) for b in result.map_polygons]
+        report.figure(self._map(shown, frame_polygons, labels), self.tr("Strata within the sampling frame"))
 
         report.section(self.tr("Coverage"))
         cell = result.grid.cell_area

@@ -267,27 +267,34 @@ def _successors(seg, width, height):
 
 
 def _ring_order(succ):
-    """Each segment's ring (numbered 0..) and its position along all the rings, in one depth-first traversal.
+    """Each segment's ring (numbered 0..) and its position along all the rings, in one depth-first walk.
 
-    A root node points at every segment in index order, and each segment at its
-    successor (scipy.sparse.csgraph.depth_first_order): the traversal walks
-    each ring from its lowest segment until it comes back to it, then goes on
-    with the lowest segment not visited yet.
+    The rings are the cycles of ``succ`` (scipy.sparse.csgraph.connected_components);
+    each is cut before its lowest segment and its last segment linked to the next
+    ring's lowest one, so that one walk (scipy.sparse.csgraph.depth_first_order)
+    from the first ring's lowest segment passes every ring in turn.
     """
     from scipy.sparse import csr_matrix
-    from scipy.sparse.csgraph import depth_first_order
+    from scipy.sparse.csgraph import connected_components, depth_first_order
 
     n = succ.size
-    root = n
-    indptr = np.concatenate([np.arange(n + 1), [2 * n]])  # segment i: one edge; the root: n edges
-    indices = np.concatenate([succ, np.arange(n)])
-    graph = csr_matrix((np.ones(2 * n, np.int8), indices, indptr), shape=(n + 1, n + 1))
-    visit, parent = depth_first_order(graph, root, directed=True, return_predecessors=True)
-    visit = visit[1:]  # the root first
-    ring = np.empty(n, np.int64)
-    ring[visit] = np.cumsum(parent[visit] == root) - 1
+    idx = np.arange(n)
+    ones = np.ones(n, np.int8)
+    _, comp = connected_components(csr_matrix((ones, (idx, succ)), shape=(n, n)), directed=True, connection="weak")
+    heads = np.full(comp.max() + 1, n, np.int64)
+    np.minimum.at(heads, comp, idx)
+    heads.sort()  # ring k starts at heads[k]
+    ring_of_head = np.empty(n, np.int64)
+    ring_of_head[heads] = np.arange(heads.size)
+    nxt = succ.copy()
+    tails = np.flatnonzero(np.isin(succ, heads) & (comp[succ] == comp))
+    tails = tails[np.argsort(ring_of_head[succ[tails]])]  # the tail of ring k, for k = 0, 1, ...
+    nxt[tails[:-1]] = heads[1:]
+    walk_graph = csr_matrix((ones[:-1], (np.delete(idx, tails[-1]), np.delete(nxt, tails[-1]))), shape=(n, n))
+    visit = depth_first_order(walk_graph, heads[0], directed=True, return_predecessors=False)
     position = np.empty(n, np.int64)
     position[visit] = np.arange(n)
+    ring = np.searchsorted(position[heads], position, side="right") - 1
     return ring, position
 
 
@@ -324,11 +331,57 @@ def polygonise_strata(path, n_strata, progress=None):
     polygons of its multipolygon.
     """
     ds = gdal.Open(path)
+    try:
+        return _trace_band(ds.GetRasterBand(1), ds.GetGeoTransform(), n_strata, progress)
+    finally:
+        ds = None
+
+
+#: most polygons drawn on the report's map (our choice: the map is an overview a few hundred pixels wide)
+MAP_PATCHES = 3000
+
+
+def display_polygons(path, n_strata, max_side=400):
+    """Polygons of the strata for a map of at most ``max_side`` cells a side, or None when the raster is smaller.
+
+    The stratum raster is read at a coarser cell (nearest neighbour, GDAL's
+    decimating read) and traced as :func:`polygonise_strata` does; patches of
+    fewer than 4 coarse cells join their largest neighbour (GDAL's sieve), and
+    more (8, 16, ...) while more than :data:`MAP_PATCHES` polygons are left. A
+    map of a few hundred pixels shows no finer detail, and a speckled raster's
+    exact polygons would cost the report more than the stratification itself.
+    """
+    ds = gdal.Open(path)
     band = ds.GetRasterBand(1)
+    width, height = band.XSize, band.YSize
+    factor = -(-max(width, height) // max_side)
+    if factor <= 1:
+        return None
+    w, h = -(-width // factor), -(-height // factor)
+    ids = band.ReadAsArray(0, 0, width, height, buf_xsize=w, buf_ysize=h)
     gt = ds.GetGeoTransform()
+    band = ds = None
+    mem = gdal.GetDriverByName("MEM").Create("", w, h, 1, gdal.GDT_Byte)
+    coarse = (gt[0], gt[1] * width / w, 0.0, gt[3], 0.0, gt[5] * height / h)
+    mem_band = mem.GetRasterBand(1)
+    mem_band.WriteArray(ids)
+    try:
+        threshold = 4
+        while True:
+            gdal.SieveFilter(mem_band, mem_band, mem_band, threshold, 4)
+            polygons = _trace_band(mem_band, coarse, n_strata)
+            parts = sum(int.from_bytes(p[5:9], "little") for p in polygons)
+            if parts <= MAP_PATCHES or threshold >= w * h:
+                return polygons
+            threshold *= 2
+    finally:
+        mem_band = mem = None
+
+
+def _trace_band(band, gt, n_strata, progress=None):
+    """The four steps of the module docstring on an open band with geotransform ``gt``."""
     width, height = band.XSize, band.YSize
     edges = _unit_edges(band, progress if progress is None else (lambda f: progress(0.6 * f)))
-    band = ds = None
     seg = _segments(edges, _patches_of_runs(edges))
     del edges
     if seg.direction.size == 0:

@@ -1,5 +1,5 @@
 """The whole stratification on GDAL rasters: stack, assign, merge small patches, polygonise (no host import)."""
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, replace
 
 import numpy as np
 
@@ -9,7 +9,7 @@ from .covariate_stack import BLOCK_CELLS, CovariateStack
 from .grids import Grid
 from . import patches as patch_limits
 from .patches import enforce_min_area, sieve_cells, too_many_patches
-from .polygonising import polygonise_strata
+from .polygonising import display_polygons, polygonise_strata
 from .stratum_raster import StratumRaster, remap_strata
 
 #: loss of R² (first covariate) from merging patches below MIN_AREA worth a warning (our choice)
@@ -48,6 +48,8 @@ class RasterStratification:
     small_patches_ha: float = 0.0
     patches: int = 0
     """Patches (4-connected groups of cells of one stratum) of the strata polygonised."""
+    map_polygons: list = None
+    """Polygons for the report's map, traced at a coarser cell on large rasters (None: ``polygons``)."""
 
 
 def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_raster, min_area_ha=0.0,
@@ -72,7 +74,8 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
         if patches.patches > patch_limits.MAX_POLYGON_PATCHES:
             raise too_many_patches(patches.patches, res.cells_valid * stack.cell_area / 10000.0, min_area_ha)
         polygons = polygonise_strata(output_raster, res.n_strata, strat.scaled_progress(progress, 0.9, 1.0))
-        return _raster_stratification(stack, res, polygons, cells, patches, output_raster, warnings)
+        result = _raster_stratification(stack, res, polygons, cells, patches, output_raster, warnings)
+        return replace(result, map_polygons=display_polygons(output_raster, res.n_strata))
 
 
 def assign_strata(stack, method, n_strata, output_raster, rng=None, sample_size=100_000, progress=None):
