@@ -7,8 +7,9 @@ from osgeo import gdal
 
 from ..engine import stratification as strat
 from ..engine.errors import Cancelled, InputError, message
-from .covariate_stack import BLOCK_CELLS, block_windows
+from .covariate_stack import BLOCK_CELLS
 from .grids import GdalProgress
+from .runs import StripRuns, run_links
 
 #: MIN_AREA (ha) offered by the algorithm (our choice): a patch of a stratum should hold a few sample units with
 #: room between them (four 20 m x 20 m plots 50 m apart fill about 1 ha); smaller patches are noise of the
@@ -274,22 +275,6 @@ def enforce_min_area(path, min_cells, min_area_ha=0.0, block_cells=BLOCK_CELLS, 
     return PatchCheck(check.merged, check.left, check.left_cells, check.patches, sieved_to)
 
 
-def _block_patches(ids):
-    """4-connected patches of one stratum block (scipy.ndimage.label per stratum): labels 1..k (0: none), strata."""
-    from scipy import ndimage
-
-    labels = np.zeros(ids.shape, np.int64)
-    strata = []
-    for h in np.unique(ids):
-        if h == 0:
-            continue
-        lab, k = ndimage.label(ids == h)
-        inside = lab > 0
-        labels[inside] = lab[inside] + len(strata)
-        strata.extend([int(h)] * k)
-    return labels, strata
-
-
 def _pair_codes(a, b):
     """Codes of unordered label pairs (labels below 2³¹): min · 2³² + max."""
     return (np.minimum(a, b) << 32) | np.maximum(a, b)
@@ -309,14 +294,15 @@ def _count_codes(codes, counts, new_codes, new_counts=None):
 def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None):
     """Merge the patches below ``min_cells`` after the speck sieve (:func:`~..engine.stratification.merge_patch_graph`).
 
-    Two passes over the stratum raster by blocks of rows. The first labels the
-    4-connected patches of each block (scipy.ndimage.label), joins the parts of
-    a patch that a block boundary cuts (scipy.sparse.csgraph), counts every
-    patch's cells and the cell edges neighbouring patches share, and numbers
-    the patches by their first cell in reading order, so the result does not
-    depend on the blocks. The engine then merges the small patches; the second
-    pass labels each block again and writes the new strata. Memory grows with
-    the number of patches, not with the raster.
+    Two passes over the stratum raster by strips of full rows. The first finds
+    the runs of equal ids along the rows, joins the runs of neighbouring rows
+    that share a cell edge into 4-connected patches (scipy.sparse.csgraph),
+    counts every patch's cells and the cell edges neighbouring patches share,
+    and numbers the patches by their first cell in reading order, so the result
+    does not depend on the strips. The engine then merges the small patches;
+    the second pass rewrites the strips whose runs changed stratum. Memory grows
+    with the number of runs, not with the raster. (``block_cells`` is kept for
+    callers; the strips follow :data:`STRIP_CELLS`.)
 
     Returns
     -------
@@ -329,26 +315,22 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
     ds = gdal.Open(path, gdal.GA_Update)
     band = ds.GetRasterBand(1)
     try:
-        width, height = band.XSize, band.YSize
-        blocks = [(y, rows) for _, y, _, rows in block_windows(width, height, (width, 1), (0, 0), block_cells)]
-        labels = _label_blocks(band, blocks, strat.scaled_progress(progress, 0, 0.6))
-        if labels.count == 0:
+        graph = _run_graph(band, strat.scaled_progress(progress, 0, 0.6))
+        if graph.lengths.size == 0 or not np.any(graph.values):
             return PatchCheck(0, 0, 0, 0)
-        patch, patch_sizes, patch_strata = _number_patches(labels)
+        patch, patch_sizes, patch_strata = _number_patches(graph)
         small = patch_sizes < min_cells
         small[0] = False
         if not small.any():
             return PatchCheck(0, 0, 0, int(patch_sizes.size - 1))
-        a, b = patch[(labels.codes >> 32) - 1], patch[(labels.codes & 0xFFFFFFFF) - 1]
+        a, b = patch[graph.codes >> 32], patch[graph.codes & 0xFFFFFFFF]
         keep = small[a] | small[b]
         pair_codes, shared = _count_codes(np.zeros(0, np.int64), np.zeros(0, np.int64),
-                                          _pair_codes(a[keep], b[keep]), labels.counts[keep])
+                                          _pair_codes(a[keep], b[keep]), graph.counts[keep])
         pairs = np.column_stack([pair_codes >> 32, pair_codes & 0xFFFFFFFF])
         merge = strat.merge_patch_graph(patch_sizes, patch_strata, pairs, shared, min_cells)
         if merge.merged:
-            lut = np.concatenate([[0], merge.strata[patch]]).astype(np.uint8)  # local label -> stratum
-            changed = np.concatenate([[False], merge.strata[patch] != labels.strata])
-            _rewrite_blocks(band, blocks, labels.bases, lut, changed, strat.scaled_progress(progress, 0.6, 1.0))
+            _rewrite_runs(band, graph, merge.strata[patch].astype(np.uint8), strat.scaled_progress(progress, 0.6, 1))
         return PatchCheck(merge.merged, int(merge.left.size), int(merge.left_cells.sum()), merge.patches)
     finally:
         band.FlushCache()
@@ -356,103 +338,122 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
 
 
 @dataclass(frozen=True)
-class _BlockLabels:
-    """Patches of each block of rows (local labels 1..count over all blocks) and how they touch.
+class _RunGraph:
+    """Runs of the whole stratum raster (numbered in reading order) and how they touch.
 
-    ``bases`` is each block's first label - 1; ``sizes``, ``strata`` and
-    ``first`` (flat index of the first cell) are per local label; ``seam_a`` /
-    ``seam_b`` pair the 0-based local labels that a block boundary cuts from one
-    patch; ``codes`` / ``counts`` are the pairs of local labels of different
-    strata that share cell edges, and how many.
+    ``strips`` are the (first row, rows, runs) read; per run: ``lengths``, ``values``
+    (stratum id) and ``first`` (flat index of its first cell in the raster);
+    ``link_a``/``link_b`` pair runs of one stratum that share a cell edge;
+    ``codes``/``counts`` are the pairs of runs of two strata that share cell
+    edges (:func:`_pair_codes`), and how many.
     """
 
-    bases: list
-    sizes: np.ndarray
-    strata: np.ndarray
+    strips: list
+    lengths: np.ndarray
+    values: np.ndarray
     first: np.ndarray
-    seam_a: np.ndarray
-    seam_b: np.ndarray
+    link_a: np.ndarray
+    link_b: np.ndarray
     codes: np.ndarray
     counts: np.ndarray
 
-    @property
-    def count(self):
-        return int(self.sizes.size)
+
+def _neighbour_runs(ids, runs, prev, prev_runs):
+    """Pairs of runs of two strata (both not 0) sharing a cell edge: along the rows, down the strip, at its seam."""
+    width = ids.shape[1]
+    values = ids.ravel()[runs.first]
+    k = np.flatnonzero((values[:-1] > 0) & (values[1:] > 0) & (runs.first[1:] % width != 0))
+    a, b = [k + runs.offset], [k + 1 + runs.offset]
+    down = np.flatnonzero((ids[:-1] != ids[1:]) & (ids[:-1] > 0) & (ids[1:] > 0))
+    a.append(runs.run_of(down))
+    b.append(runs.run_of(down + width))
+    if prev is not None:
+        seam = np.flatnonzero((prev[0] != ids[0]) & (prev[0] > 0) & (ids[0] > 0))
+        a.append(prev_runs.last_row(0, seam))
+        b.append(runs.run_at(0, seam))
+    return _pair_codes(np.concatenate(a), np.concatenate(b))
 
 
-def _label_blocks(band, blocks, progress=None):
-    """Pass 1 of :func:`merge_raster_patches`: every block's patches labelled (scipy.ndimage.label)."""
-    width = band.XSize
-    bases, sizes, strata, first = [], [], [], []
-    seam_a, seam_b = [], []
+def _run_graph(band, progress=None):
+    """Pass 1 of :func:`merge_raster_patches`: the runs of every strip, their links and neighbours."""
+    width, height = band.XSize, band.YSize
+    rows = _strip_rows(width, band.GetBlockSize()[1])
+    strips = []
+    lengths, values, first, link_a, link_b = [], [], [], [], []
     codes, counts = np.zeros(0, np.int64), np.zeros(0, np.int64)
-    prev_ids = prev_lab = None
-    base = 0
-    for i, (y0, rows) in enumerate(blocks):
-        ids = band.ReadAsArray(0, y0, width, rows)
-        lab, block_strata = _block_patches(ids)
-        k = len(block_strata)
-        sizes.append(np.bincount(lab.ravel(), minlength=k + 1)[1:])
-        lab[lab > 0] += base
-        bases.append(base)
-        strata.extend(block_strata)
-        seen, at = np.unique(lab.ravel(), return_index=True)  # each label's first cell in the block
-        first.append((y0 * width + at[seen > 0]).astype(np.int64))
-        found = []
-        for a, b, same in ((lab[:, :-1], lab[:, 1:], None), (lab[:-1], lab[1:], None),
-                           (prev_lab, lab[:1], None if prev_ids is None else prev_ids == ids[:1])):
-            if a is None:
-                continue
-            touch = (a != b) & (a > 0) & (b > 0)
-            if same is not None:  # across the block boundary: one patch cut in two, or two patches
-                seam = touch & same
-                seam_a.append(a[seam])
-                seam_b.append(b[seam])
-                touch &= ~same
-            found.append(_pair_codes(a[touch], b[touch]))
-        codes, counts = _count_codes(codes, counts, np.concatenate(found))
-        prev_ids, prev_lab = ids[-1:], lab[-1:]
-        base += k
-        if progress is not None and progress((i + 1) / len(blocks)):
+    offset = 0
+    prev = prev_runs = None
+    n_strips = -(-height // rows)
+    for i, y0 in enumerate(range(0, height, rows)):
+        ids = band.ReadAsArray(0, y0, width, min(rows, height - y0))
+        runs = StripRuns(ids, offset)
+        strips.append((y0, ids.shape[0], runs.count))
+        lengths.append(np.diff(np.append(runs.first, ids.size)))
+        values.append(ids.ravel()[runs.first])
+        first.append(runs.first + y0 * width)
+        a, b = run_links(ids, runs)
+        link_a.append(a)
+        link_b.append(b)
+        if prev is not None:
+            seam = np.flatnonzero((prev[0] == ids[0]) & (ids[0] > 0) & (prev_runs.start[-1] | runs.start[0]))
+            link_a.append(prev_runs.last_row(0, seam))
+            link_b.append(runs.run_at(0, seam))
+        codes, counts = _count_codes(codes, counts, _neighbour_runs(ids, runs, prev, prev_runs))
+        prev, prev_runs = ids[-1:].copy(), runs
+        offset += runs.count
+        if progress is not None and progress((i + 1) / n_strips):
             raise Cancelled("Stratification cancelled.")
     empty = np.zeros(0, np.int64)
-    return _BlockLabels(bases, np.concatenate(sizes) if sizes else empty, np.asarray(strata, np.int64),
-                        np.concatenate(first) if first else empty,
-                        np.concatenate(seam_a) - 1 if seam_a else empty,
-                        np.concatenate(seam_b) - 1 if seam_b else empty, codes, counts)
+
+    def joined(parts, dtype=np.int64):
+        return np.concatenate(parts).astype(dtype, copy=False) if parts else empty.astype(dtype)
+
+    return _RunGraph(strips, joined(lengths), joined(values, np.uint8), joined(first), joined(link_a),
+                     joined(link_b), codes, counts)
 
 
-def _number_patches(labels):
-    """Local labels joined across block boundaries (scipy.sparse.csgraph) into patches 1..n, numbered by first cell.
+def _number_patches(graph):
+    """Runs joined into patches 1..n (scipy.sparse.csgraph), numbered by their first cell in reading order.
 
-    Returns ``(patch of each local label, cells per patch, stratum per patch)``; index 0 of the last two is
-    "no patch". Numbering by the first cell in reading order makes the result independent of the blocks.
+    Returns ``(patch of each run, cells per patch, stratum per patch)``; index 0 of the last two is "no
+    patch" (the runs of id 0 are left out). Numbering by the first cell makes the result independent of
+    the strips.
     """
     from scipy.sparse import coo_matrix
     from scipy.sparse.csgraph import connected_components
 
-    n = labels.count
-    graph = coo_matrix((np.ones(labels.seam_a.size), (labels.seam_a, labels.seam_b)), shape=(n, n))
-    n_patches, part_of = connected_components(graph, directed=False)
+    n = graph.lengths.size
+    matrix = coo_matrix((np.ones(graph.link_a.size, np.int8), (graph.link_a, graph.link_b)), shape=(n, n))
+    _, comp = connected_components(matrix, directed=False)
+    comp = np.where(graph.values > 0, comp, -1)
+    stratum_comps, comp = np.unique(comp, return_inverse=True)
+    if stratum_comps[0] == -1:  # the runs of id 0 form no patch
+        comp -= 1
+    n_patches = int(comp.max()) + 1
+    inside = comp >= 0
     patch_first = np.full(n_patches, np.iinfo(np.int64).max)
-    np.minimum.at(patch_first, part_of, labels.first)
+    np.minimum.at(patch_first, comp[inside], graph.first[inside])
     rank = np.empty(n_patches, np.int64)
     rank[np.argsort(patch_first, kind="stable")] = np.arange(1, n_patches + 1)
-    patch = rank[part_of]
-    patch_sizes = np.bincount(patch, weights=labels.sizes, minlength=n_patches + 1).astype(np.int64)
+    patch = np.zeros(n, np.int64)
+    patch[inside] = rank[comp[inside]]
+    patch_sizes = np.bincount(patch, weights=graph.lengths, minlength=n_patches + 1).astype(np.int64)
+    patch_sizes[0] = 0
     patch_strata = np.zeros(n_patches + 1, np.int64)
-    patch_strata[patch] = labels.strata
+    patch_strata[patch[inside]] = graph.values[inside]
     return patch, patch_sizes, patch_strata
 
 
-def _rewrite_blocks(band, blocks, bases, lut, changed, progress=None):
-    """Pass 2 of :func:`merge_raster_patches`: the same labels again, the blocks that changed written anew."""
+def _rewrite_runs(band, graph, run_strata, progress=None):
+    """Pass 2 of :func:`merge_raster_patches`: the strips whose runs changed stratum, rebuilt from their runs."""
+    run_strata = np.where(graph.values > 0, run_strata, 0).astype(np.uint8)
+    changed = run_strata != graph.values
+    offset = 0
     width = band.XSize
-    for i, (y0, rows) in enumerate(blocks):
-        ids = band.ReadAsArray(0, y0, width, rows)
-        lab, _ = _block_patches(ids)
-        lab[lab > 0] += bases[i]
-        if changed[lab].any():
-            band.WriteArray(lut[lab], 0, y0)
-        if progress is not None and progress((i + 1) / len(blocks)):
+    for i, (y0, n_rows, count) in enumerate(graph.strips):
+        part = slice(offset, offset + count)
+        if changed[part].any():
+            band.WriteArray(np.repeat(run_strata[part], graph.lengths[part]).reshape(n_rows, width), 0, y0)
+        offset += count
+        if progress is not None and progress((i + 1) / len(graph.strips)):
             raise Cancelled("Stratification cancelled.")

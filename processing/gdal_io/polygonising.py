@@ -33,47 +33,13 @@ import numpy as np
 from osgeo import gdal
 
 from ..engine.errors import Cancelled
+from .runs import StripRuns, run_links
 
 #: cells per strip read from the stratum raster
 STRIP_CELLS = 1 << 22
 EAST, NORTH, WEST, SOUTH = 0, 1, 2, 3
 #: (row, column) step of each direction (rows grow southwards)
 STEP = np.array([[0, 1], [-1, 0], [0, -1], [1, 0]], np.int64)
-
-
-class _StripRuns:
-    """Runs of equal ids along the rows of a strip: flat index of each run's first cell, numbered from ``offset``.
-
-    ``run_of(flat)`` gives the run of cells by their flat index in the strip (a
-    binary search among the run starts: only boundary cells are ever looked up).
-    """
-
-    def __init__(self, ids, offset):
-        self.start = np.empty(ids.shape, bool)
-        self.start[:, 0] = True
-        np.not_equal(ids[:, 1:], ids[:, :-1], out=self.start[:, 1:])
-        self.first = np.flatnonzero(self.start)
-        self.offset = offset
-        self.rows, self.width = ids.shape
-
-    @property
-    def count(self):
-        return int(self.first.size)
-
-    def run_of(self, flat):
-        return np.searchsorted(self.first, flat, side="right") - 1 + self.offset
-
-    def run_at(self, r, c):
-        """Runs of the cells (r, c) of the strip."""
-        return self.run_of(r * self.width + c)
-
-    def last_row(self, r, c):
-        """Runs of the cells (0, c) of a one-row view of the strip's last row (``r`` is 0)."""
-        return self.run_of((self.rows - 1 + r) * self.width + c)
-
-    def next_row(self, r, c):
-        """Runs of the cells (r + 1, c): the lower rows of the pairs of neighbouring rows."""
-        return self.run_of((r + 1) * self.width + c)
 
 
 def _edges_across_rows(above, below, run_above, run_below, line):
@@ -122,24 +88,6 @@ def _edges_across_columns(ids, runs, row0):
     return out
 
 
-def _run_links(ids, runs):
-    """Pairs of runs of neighbouring rows of a strip that share a cell edge (equal ids, not 0).
-
-    Two overlapping runs share the column where the later one starts: only run starts are tested.
-    """
-    h, w = ids.shape
-    r, c = np.divmod(runs.first, w)
-    a, b = [], []
-    for dr in (1, -1):  # the row below a run start, the row above it
-        ok = (r + dr >= 0) & (r + dr < h)
-        rr, cc = r[ok], c[ok]
-        v = ids[rr, cc]
-        same = (ids[rr + dr, cc] == v) & (v > 0)
-        a.append(runs.run_of(rr[same] * w + cc[same]))
-        b.append(runs.run_of((rr[same] + dr) * w + cc[same]))
-    return np.concatenate(a), np.concatenate(b)
-
-
 @dataclass(frozen=True)
 class _UnitEdges:
     """Directed unit boundary edges (start vertex, direction, stratum on the left, its run) and the run links."""
@@ -165,7 +113,7 @@ def _unit_edges(band, progress=None):
     n = -(-height // rows)
     for i, y0 in enumerate(range(0, height, rows)):
         ids = band.ReadAsArray(0, y0, width, min(rows, height - y0))
-        runs = _StripRuns(ids, offset)
+        runs = StripRuns(ids, offset)
         if prev is None:
             parts += _edges_across_rows(zeros, ids[:1], runs.run_at, runs.run_at, y0)
         else:  # the grid row between the previous strip and this one
@@ -175,7 +123,7 @@ def _unit_edges(band, progress=None):
             link_b.append(runs.run_at(0, seam))
         parts += _edges_across_rows(ids[:-1], ids[1:], runs.run_at, runs.next_row, y0 + 1)
         parts += _edges_across_columns(ids, runs, y0)
-        a, b = _run_links(ids, runs)
+        a, b = run_links(ids, runs)
         link_a.append(a)
         link_b.append(b)
         prev, prev_runs = ids[-1:].copy(), runs
