@@ -1141,6 +1141,115 @@ def merge_patch_graph(sizes, strata, pairs, shared, min_cells):
                       graph.groups())
 
 
+@dataclass(frozen=True, eq=False)
+class PatchGroups:
+    """Patches joined into groups by :func:`sieve_patch_graph` (index 0 is "no patch" throughout).
+
+    Attributes
+    ----------
+    group : ndarray of int
+        The group of every patch of the input.
+    sizes, strata : ndarray of int
+        Cells and stratum of every group.
+    pairs, shared : ndarray of int
+        Neighbouring groups (each pair once, of two strata) and the cell edges they share.
+    """
+
+    group: np.ndarray
+    sizes: np.ndarray
+    strata: np.ndarray
+    pairs: np.ndarray
+    shared: np.ndarray
+
+    @property
+    def n_patches(self):
+        return int(np.count_nonzero(self.sizes))
+
+
+def sieve_patch_graph(sizes, strata, pairs, shared, threshold):
+    """Patches below ``threshold`` cells join their largest neighbour, all at once, in rounds (vectorised).
+
+    The rule of GDAL's sieve filter on a patch graph: each patch below the
+    threshold points at its largest neighbour (ties: the lowest index), if that
+    one is larger than itself; chains are followed to their end (pointer
+    jumping), and every patch takes the stratum at the end of its chain.
+    Groups of one stratum that now touch are one patch. Rounds repeat until no
+    group below the threshold has a larger neighbour. A patch with no neighbour
+    stays as it is.
+
+    Parameters
+    ----------
+    sizes, strata : array_like of int
+        Per patch; index 0 (size 0) is "no patch".
+    pairs, shared : array_like of int
+        Neighbouring patches (each pair once) and the cell edges they share.
+
+    Returns
+    -------
+    PatchGroups
+        Groups numbered by their lowest patch index, so the numbering keeps the patches' order.
+    """
+    groups = PatchGroups(np.arange(len(sizes)), np.asarray(sizes, np.int64), np.asarray(strata, np.int64),
+                         np.asarray(pairs, np.int64).reshape(-1, 2), np.asarray(shared, np.int64))
+    while True:
+        target = _largest_larger_neighbour(groups, threshold)
+        if target is None:
+            return groups
+        groups = _contract(groups, target)
+
+
+def _largest_larger_neighbour(groups, threshold):
+    """Per group, the group it joins (itself when none): its largest neighbour, for groups below ``threshold``."""
+    n = groups.sizes.size
+    key = groups.sizes * n + (n - 1 - np.arange(n))  # larger first, then the lower index
+    src = np.concatenate([groups.pairs[:, 0], groups.pairs[:, 1]])
+    dst = np.concatenate([groups.pairs[:, 1], groups.pairs[:, 0]])
+    keep = (groups.sizes[src] < threshold) & (groups.sizes[src] > 0) & (key[dst] > key[src])
+    if not keep.any():
+        return None
+    src, dst = src[keep], dst[keep]
+    order = np.lexsort((key[dst], src))
+    src, dst = src[order], dst[order]
+    last = np.r_[src[1:] != src[:-1], True]
+    target = np.arange(n)
+    target[src[last]] = dst[last]
+    while True:  # chains end where a group points at itself (keys grow along a chain: no cycle)
+        nxt = target[target]
+        if np.array_equal(nxt, target):
+            return target
+        target = nxt
+
+
+def _contract(groups, target):
+    """Groups joined into their targets, then groups of one stratum that touch joined too; renumbered."""
+    from scipy.sparse import coo_matrix
+    from scipy.sparse.csgraph import connected_components
+
+    n = groups.sizes.size
+    strata = groups.strata[target]
+    a, b = target[groups.pairs[:, 0]], target[groups.pairs[:, 1]]
+    same = (a != b) & (strata[a] == strata[b])
+    _, comp = connected_components(coo_matrix((np.ones(int(same.sum()), np.int8), (a[same], b[same])), shape=(n, n)),
+                                   directed=False)
+    root = comp[target]
+    lowest = np.full(comp.max() + 1, n, np.int64)
+    np.minimum.at(lowest, root, np.arange(n))
+    used = np.unique(root)
+    rank = np.empty(comp.max() + 1, np.int64)
+    rank[used[np.argsort(lowest[used], kind="stable")]] = np.arange(used.size)
+    new = rank[root]
+    sizes = np.bincount(new, weights=groups.sizes, minlength=used.size).astype(np.int64)
+    new_strata = np.zeros(used.size, np.int64)
+    new_strata[new] = strata
+    a, b = new[groups.pairs[:, 0]], new[groups.pairs[:, 1]]
+    other = a != b
+    lo, hi = np.minimum(a[other], b[other]), np.maximum(a[other], b[other])
+    codes, inverse = np.unique(lo * used.size + hi, return_inverse=True)
+    shared = np.bincount(inverse, weights=groups.shared[other], minlength=codes.size).astype(np.int64)
+    pairs = np.column_stack([codes // used.size, codes % used.size])
+    return PatchGroups(new[groups.group], sizes, new_strata, pairs, shared)
+
+
 class _PatchGraph:
     """Patches (nodes) and the cell edges neighbouring patches share; merged groups kept by union-find.
 

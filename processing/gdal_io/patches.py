@@ -21,6 +21,9 @@ DEFAULT_MIN_AREA_HA = 1.0
 MAX_POLYGON_PATCHES = 100_000
 #: most patches given to the patch-graph merge (about 2 kB each in Python: 0.5 GB at most)
 MAX_GRAPH_PATCHES = 250_000
+#: most runs (of equal ids along the rows) read into memory to find the patches (about 100 bytes each at peak);
+#: a raster with more has its specks sieved by GDAL in place first
+MAX_GRAPH_RUNS = 3_000_000
 #: most patches given to GDAL's sieve on the whole raster (GDAL 3.6 needs about 35 bytes per patch: 2.1 GB for
 #: the 6 x 10^7 patches of 10^8 cells of noise in 5 strata; 0.2 GB at this limit)
 MAX_SIEVE_PATCHES = 5_000_000
@@ -154,11 +157,16 @@ def _count_strip(ids, frontier):
     still_open = np.unique(comp[m + run[-1][last]])
     patch = np.full(ids.shape[1], -1, np.int64)
     patch[last] = np.searchsorted(still_open, comp[m + run[-1][last]])
-    return patches.size - still_open.size, _Frontier(patch, ids[-1].copy(), start[-1].copy())
+    return patches.size - still_open.size, _Frontier(patch, ids[-1].copy(), start[-1].copy()), n - m
 
 
 def count_patches(path, progress=None):
-    """Number of patches (4-connected groups of cells of one stratum, id > 0) of a stratum raster.
+    """Number of patches of a stratum raster (:func:`count_patches_and_runs`)."""
+    return count_patches_and_runs(path, progress)[0]
+
+
+def count_patches_and_runs(path, progress=None):
+    """Patches (4-connected groups of cells of one stratum, id > 0) and runs (of equal ids along rows) of a raster.
 
     One pass by strips of full rows, in memory bounded by the strip: runs of
     equal ids along the rows are the nodes, runs of neighbouring rows that
@@ -169,16 +177,17 @@ def count_patches(path, progress=None):
     band = ds.GetRasterBand(1)
     width, height = band.XSize, band.YSize
     rows = _strip_rows(width, band.GetBlockSize()[1])
-    closed, frontier = 0, None
+    closed, frontier, runs = 0, None, 0
     n = -(-height // rows)
     for i, y0 in enumerate(range(0, height, rows)):
         ids = band.ReadAsArray(0, y0, width, min(rows, height - y0))
-        done, frontier = _count_strip(ids, frontier)
+        done, frontier, strip_runs = _count_strip(ids, frontier)
         closed += done
+        runs += strip_runs
         if progress is not None and progress((i + 1) / n):
             raise Cancelled("Stratification cancelled.")
     band = ds = None
-    return closed + (frontier.open if frontier is not None else 0)
+    return closed + (frontier.open if frontier is not None else 0), runs
 
 
 def nice_area_above(area_ha):
@@ -249,30 +258,20 @@ class PatchCheck:
 def enforce_min_area(path, min_cells, min_area_ha=0.0, block_cells=BLOCK_CELLS, progress=None):
     """Bring every patch of the stratum raster up to ``min_cells``, in bounded memory and time.
 
-    Steps: count the patches (:func:`count_patches`); with more than
-    :data:`MAX_SIEVE_PATCHES` an :class:`InputError` (GDAL's sieve would need
-    memory in proportion); the speck sieve (:func:`sieve_strata`); while more
-    than :data:`MAX_GRAPH_PATCHES` patches are left, GDAL's sieve with a
-    doubled threshold (up to ``min_cells``); then the patch-graph merge
-    (:func:`merge_raster_patches`). With ``min_cells`` <= 1 it only counts.
+    Steps: count the patches and runs (:func:`count_patches_and_runs`); with more
+    than :data:`MAX_SIEVE_PATCHES` patches an :class:`InputError`; with more than
+    :data:`MAX_GRAPH_RUNS` runs, GDAL's speck sieve in place first
+    (:func:`sieve_strata`); then :func:`merge_raster_patches`. With
+    ``min_cells`` <= 1 it only counts.
     """
-    counted = count_patches(path, strat.scaled_progress(progress, 0, 0.15))
+    counted, runs = count_patches_and_runs(path, strat.scaled_progress(progress, 0, 0.15))
     if min_cells <= 1:
         return PatchCheck(0, 0, 0, counted)
     if counted > MAX_SIEVE_PATCHES:
         raise too_speckled(counted, min_area_ha)
-    sieve_strata(path, min_cells, strat.scaled_progress(progress, 0.15, 0.35))
-    threshold, sieved_to = speck_cells(min_cells), 0
-    counted = count_patches(path, strat.scaled_progress(progress, 0.35, 0.4))
-    while counted > MAX_GRAPH_PATCHES and threshold < min_cells:
-        threshold = min(2 * threshold, int(min_cells))
-        gdal_sieve(path, [threshold])
-        sieved_to = threshold
-        counted = count_patches(path)
-    if counted > MAX_GRAPH_PATCHES:
-        return PatchCheck(0, 0, 0, counted, sieved_to)
-    check = merge_raster_patches(path, min_cells, block_cells, strat.scaled_progress(progress, 0.4, 1.0))
-    return PatchCheck(check.merged, check.left, check.left_cells, check.patches, sieved_to)
+    if runs > MAX_GRAPH_RUNS:
+        sieve_strata(path, min_cells, strat.scaled_progress(progress, 0.15, 0.4))
+    return merge_raster_patches(path, min_cells, block_cells, strat.scaled_progress(progress, 0.4, 1.0))
 
 
 def _pair_codes(a, b):
@@ -292,23 +291,26 @@ def _count_codes(codes, counts, new_codes, new_counts=None):
 
 
 def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None):
-    """Merge the patches below ``min_cells`` after the speck sieve (:func:`~..engine.stratification.merge_patch_graph`).
+    """Merge the patches below ``min_cells``: specks by the sieve rule, then the patch-graph merge.
 
     Two passes over the stratum raster by strips of full rows. The first finds
     the runs of equal ids along the rows, joins the runs of neighbouring rows
     that share a cell edge into 4-connected patches (scipy.sparse.csgraph),
     counts every patch's cells and the cell edges neighbouring patches share,
     and numbers the patches by their first cell in reading order, so the result
-    does not depend on the strips. The engine then merges the small patches;
-    the second pass rewrites the strips whose runs changed stratum. Memory grows
-    with the number of runs, not with the raster. (``block_cells`` is kept for
-    callers; the strips follow :data:`STRIP_CELLS`.)
+    does not depend on the strips. On that graph, specks (below
+    :func:`speck_cells`) join their largest neighbour
+    (:func:`~..engine.stratification.sieve_patch_graph`, thresholds 2, 4, 8);
+    while more than :data:`MAX_GRAPH_PATCHES` patches are left, the threshold
+    doubles up to ``min_cells`` (``sieved_to`` in the result); then the
+    patch-graph merge (:func:`~..engine.stratification.merge_patch_graph`) takes
+    the rest. The second pass rewrites the strips whose runs changed stratum.
+    Memory grows with the number of runs, not with the raster. (``block_cells``
+    is kept for callers; the strips follow :data:`STRIP_CELLS`.)
 
     Returns
     -------
     PatchCheck
-        Patches merged, and the patches (and their cells) still below the
-        minimum because they touch no other stratum.
     """
     if min_cells <= 1:
         return PatchCheck(0, 0, 0)
@@ -319,22 +321,46 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
         if graph.lengths.size == 0 or not np.any(graph.values):
             return PatchCheck(0, 0, 0, 0)
         patch, patch_sizes, patch_strata = _number_patches(graph)
-        small = patch_sizes < min_cells
-        small[0] = False
-        if not small.any():
-            return PatchCheck(0, 0, 0, int(patch_sizes.size - 1))
         a, b = patch[graph.codes >> 32], patch[graph.codes & 0xFFFFFFFF]
-        keep = small[a] | small[b]
-        pair_codes, shared = _count_codes(np.zeros(0, np.int64), np.zeros(0, np.int64),
-                                          _pair_codes(a[keep], b[keep]), graph.counts[keep])
+        pair_codes, shared = _count_codes(np.zeros(0, np.int64), np.zeros(0, np.int64), _pair_codes(a, b),
+                                          graph.counts)
         pairs = np.column_stack([pair_codes >> 32, pair_codes & 0xFFFFFFFF])
-        merge = strat.merge_patch_graph(patch_sizes, patch_strata, pairs, shared, min_cells)
-        if merge.merged:
-            _rewrite_runs(band, graph, merge.strata[patch].astype(np.uint8), strat.scaled_progress(progress, 0.6, 1))
-        return PatchCheck(merge.merged, int(merge.left.size), int(merge.left_cells.sum()), merge.patches)
+        groups, sieved_to = _sieve_groups(patch_sizes, patch_strata, pairs, shared, int(min_cells))
+        if groups.n_patches > MAX_GRAPH_PATCHES:
+            final, check = groups.strata, PatchCheck(0, 0, 0, groups.n_patches, sieved_to)
+        else:
+            merge = strat.merge_patch_graph(groups.sizes, groups.strata, groups.pairs, groups.shared, min_cells)
+            final = merge.strata
+            check = PatchCheck(merge.merged, int(merge.left.size), int(merge.left_cells.sum()), merge.patches,
+                               sieved_to)
+        run_strata = final[groups.group[patch]].astype(np.uint8)
+        _rewrite_runs(band, graph, run_strata, strat.scaled_progress(progress, 0.6, 1))
+        return check
     finally:
         band.FlushCache()
         band = ds = None
+
+
+def _sieve_groups(sizes, strata, pairs, shared, min_cells):
+    """Specks joined to their largest neighbour (2, 4, 8 cells), then doubling thresholds while too many are left.
+
+    Returns ``(groups, sieved_to)``: the largest threshold used beyond the specks (0 when none was needed).
+    """
+    groups = strat.PatchGroups(np.arange(sizes.size), sizes, strata, pairs, shared)
+    for threshold in _speck_steps(min_cells):
+        groups = _resieve(groups, threshold)
+    threshold, sieved_to = speck_cells(min_cells), 0
+    while groups.n_patches > MAX_GRAPH_PATCHES and threshold < min_cells:
+        threshold = min(2 * threshold, min_cells)
+        groups = _resieve(groups, threshold)
+        sieved_to = threshold
+    return groups, sieved_to
+
+
+def _resieve(groups, threshold):
+    """:func:`~..engine.stratification.sieve_patch_graph` on groups, composed with their groups so far."""
+    again = strat.sieve_patch_graph(groups.sizes, groups.strata, groups.pairs, groups.shared, threshold)
+    return strat.PatchGroups(again.group[groups.group], again.sizes, again.strata, again.pairs, again.shared)
 
 
 @dataclass(frozen=True)
@@ -379,8 +405,7 @@ def _run_graph(band, progress=None):
     width, height = band.XSize, band.YSize
     rows = _strip_rows(width, band.GetBlockSize()[1])
     strips = []
-    lengths, values, first, link_a, link_b = [], [], [], [], []
-    codes, counts = np.zeros(0, np.int64), np.zeros(0, np.int64)
+    lengths, values, first, link_a, link_b, neighbours = [], [], [], [], [], []
     offset = 0
     prev = prev_runs = None
     n_strips = -(-height // rows)
@@ -398,7 +423,7 @@ def _run_graph(band, progress=None):
             seam = np.flatnonzero((prev[0] == ids[0]) & (ids[0] > 0) & (prev_runs.start[-1] | runs.start[0]))
             link_a.append(prev_runs.last_row(0, seam))
             link_b.append(runs.run_at(0, seam))
-        codes, counts = _count_codes(codes, counts, _neighbour_runs(ids, runs, prev, prev_runs))
+        neighbours.append(_neighbour_runs(ids, runs, prev, prev_runs))
         prev, prev_runs = ids[-1:].copy(), runs
         offset += runs.count
         if progress is not None and progress((i + 1) / n_strips):
@@ -408,8 +433,9 @@ def _run_graph(band, progress=None):
     def joined(parts, dtype=np.int64):
         return np.concatenate(parts).astype(dtype, copy=False) if parts else empty.astype(dtype)
 
+    codes, counts = np.unique(joined(neighbours), return_counts=True)
     return _RunGraph(strips, joined(lengths), joined(values, np.uint8), joined(first), joined(link_a),
-                     joined(link_b), codes, counts)
+                     joined(link_b), codes, counts.astype(np.int64))
 
 
 def _number_patches(graph):
