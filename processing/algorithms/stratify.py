@@ -122,7 +122,7 @@ class Stratify(PlotwiseAlgorithm):
             "a MIN_AREA that brings them under the limit, and a covariate too speckled to merge in bounded memory "
             "(more than {max_sieve:,} patches) stops it with advice to smooth or coarsen the covariate first. "
             "When the patches left after merging the specks are too many to merge one by one, patches below "
-            "MIN_AREA first join their largest neighbour (GDAL's sieve), with a warning.</p>"
+            "MIN_AREA first join their largest neighbour (the rule of GDAL's sieve filter), with a warning.</p>"
         ).format(default=DEFAULT_MIN_AREA_HA, max_patches=MAX_POLYGON_PATCHES, max_sieve=MAX_SIEVE_PATCHES)
 
     def initAlgorithm(self, config=None):  # noqa: N802 (host naming)

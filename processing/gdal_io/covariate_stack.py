@@ -26,6 +26,8 @@ from .grids import Grid, read_window, same_crs, srs_from_wkt
 BLOCK_CELLS = 1 << 18
 #: rasters up to this many cells keep the frame mask in memory
 MEM_MASK_CELLS = 1 << 25
+#: blocks read between two releases of GDAL's block cache (16 blocks: 4 Mi cells, 16 MB of float32 per band)
+CACHE_RELEASE_BLOCKS = 16
 
 
 @dataclass(frozen=True)
@@ -277,6 +279,18 @@ class CovariateStack:
             vals = tuple(r.read(xo, yo, xs, ys, ring) for r in self._readers)
             strata = None if strata_band is None else strata_band.ReadAsArray(xo, yo, xs, ys)
             yield strat.CellBlock(win, vals, frame, None, strata, self.nodata)  # validity: worked out by the worker
+            if i % CACHE_RELEASE_BLOCKS == CACHE_RELEASE_BLOCKS - 1:
+                self._release_cache(strata_band)
+
+    def _release_cache(self, strata_band=None):
+        """Drop GDAL's cached blocks of the bands read: every block is read into our own buffers.
+
+        GDAL keeps the blocks it has read (up to 5 % of the RAM by default): on a
+        10^8-cell covariate that alone is half a gigabyte.
+        """
+        for band in [r.band for r in self._readers] + [self._mask_band, strata_band]:
+            if band is not None:
+                band.FlushCache()
 
     def source(self, strata_path=None):
         """A cell source for the engine, optionally carrying a stratum raster."""

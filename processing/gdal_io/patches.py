@@ -38,7 +38,7 @@ def sieve_cells(min_area_ha, cell_area_m2):
     return int(math.ceil(min_area_ha * 10000.0 / cell_area_m2 - 1e-9))
 
 
-#: patches below this many cells are specks, merged by GDAL's sieve before :func:`merge_raster_patches`
+#: patches below this many cells are specks, joined to their largest neighbour before the patch-graph merge
 SPECK_CELLS = 8
 
 
@@ -181,6 +181,7 @@ def count_patches_and_runs(path, progress=None):
     n = -(-height // rows)
     for i, y0 in enumerate(range(0, height, rows)):
         ids = band.ReadAsArray(0, y0, width, min(rows, height - y0))
+        band.FlushCache()  # GDAL's cache would keep every strip read
         done, frontier, strip_runs = _count_strip(ids, frontier)
         closed += done
         runs += strip_runs
@@ -244,7 +245,7 @@ class PatchCheck:
     patches : int
         Patches of the raster after merging (-1: not counted).
     sieved_to : int
-        Largest threshold of GDAL's sieve beyond the specks, used when the patches
+        Largest threshold of the sieve rule beyond the specks, used when the patches
         were too many for the patch-graph merge (0: specks only).
     """
 
@@ -411,6 +412,7 @@ def _run_graph(band, progress=None):
     n_strips = -(-height // rows)
     for i, y0 in enumerate(range(0, height, rows)):
         ids = band.ReadAsArray(0, y0, width, min(rows, height - y0))
+        band.FlushCache()  # GDAL's cache would keep every strip read
         runs = StripRuns(ids, offset)
         strips.append((y0, ids.shape[0], runs.count))
         lengths.append(np.diff(np.append(runs.first, ids.size)))
@@ -480,6 +482,7 @@ def _rewrite_runs(band, graph, run_strata, progress=None):
         part = slice(offset, offset + count)
         if changed[part].any():
             band.WriteArray(np.repeat(run_strata[part], graph.lengths[part]).reshape(n_rows, width), 0, y0)
+            band.FlushCache()
         offset += count
         if progress is not None and progress((i + 1) / len(graph.strips)):
             raise Cancelled("Stratification cancelled.")

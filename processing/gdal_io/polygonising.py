@@ -113,6 +113,7 @@ def _unit_edges(band, progress=None):
     n = -(-height // rows)
     for i, y0 in enumerate(range(0, height, rows)):
         ids = band.ReadAsArray(0, y0, width, min(rows, height - y0))
+        band.FlushCache()  # GDAL's cache would keep every strip read
         runs = StripRuns(ids, offset)
         if prev is None:
             parts += _edges_across_rows(zeros, ids[:1], runs.run_at, runs.run_at, y0)

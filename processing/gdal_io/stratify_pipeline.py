@@ -109,8 +109,9 @@ def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_ce
     if patches.sieved_to:
         warnings.append(message(
             "The strata formed too many small patches to merge one by one: patches below {cells:,} cells were "
-            "first merged into their largest neighbour (GDAL's sieve), which can join a mosaic of small patches "
-            "into one stratum. Smoothing the covariate before stratifying keeps the strata closer to its pattern.",
+            "first merged into their largest neighbour (the rule of GDAL's sieve filter), which can join a mosaic "
+            "of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer "
+            "to its pattern.",
             cells=int(patches.sieved_to)))
     stats = strat.accumulate_statistics(stack.source(output_raster), res.n_strata,
                                         shift=res.statistics.overall_mean(), chart_range=res.statistics.chart_range,

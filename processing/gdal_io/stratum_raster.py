@@ -19,8 +19,14 @@ class StratumRaster:
         self.band = self.ds.GetRasterBand(1)
         self.band.SetNoDataValue(0)
 
+    #: blocks written between two flushes of GDAL's cache (it would otherwise hold the whole raster)
+    FLUSH_BLOCKS = 64
+
     def write(self, window, ids):
         self.band.WriteArray(ids.astype(np.uint8, copy=False), int(window[0]), int(window[1]))
+        self._written = getattr(self, "_written", 0) + 1
+        if self._written % self.FLUSH_BLOCKS == 0:
+            self.band.FlushCache()
 
     def close(self):
         if self.ds is not None:
@@ -48,6 +54,7 @@ def remap_strata(path, lut, block_rows=2048, progress=None):
     for i, y0 in enumerate(range(0, H, block_rows)):
         ys = min(block_rows, H - y0)
         band.WriteArray(lut[band.ReadAsArray(0, y0, W, ys)], 0, y0)
+        band.FlushCache()
         if progress is not None and progress((i + 1) / n):
             raise Cancelled("Stratification cancelled.")
     band.FlushCache()

@@ -368,3 +368,31 @@ def test_isolated_small_patch_stays_and_is_reported():
     merge = s.merge_patch_graph(sizes, strata, pairs, shared, 10)
     np.testing.assert_array_equal(merge.strata, strata)
     assert merge.merged == 0 and merge.left_cells.tolist() == [4]
+
+
+def test_sieve_rule_follows_chains_to_the_largest_neighbour():
+    # truth by construction (the rule of GDAL's sieve filter): patch 3 (1 cell) touches only patch 2 (3 cells),
+    # which touches patch 1 (100 cells); below 4 cells both join along the chain 3 -> 2 -> 1
+    sizes = [0, 100, 3, 1]
+    strata = [0, 1, 3, 2]
+    groups = s.sieve_patch_graph(sizes, strata, [[1, 2], [2, 3]], [10, 2], 4)
+    assert groups.group.tolist() == [0, 1, 1, 1]
+    assert groups.sizes.tolist() == [0, 104] and groups.strata.tolist() == [0, 1]
+    assert groups.pairs.shape == (0, 2)
+
+
+def test_sieve_rule_joins_groups_of_one_stratum_that_now_touch():
+    # truth by construction: a 1-cell patch of stratum 2 between two patches of stratum 1 (50 and 60 cells) joins
+    # the larger; the three are then one patch of 111 cells, and the 40-cell patch of stratum 3 beside keeps its own
+    sizes = [0, 50, 1, 60, 40]
+    strata = [0, 1, 2, 1, 3]
+    pairs = [[1, 2], [2, 3], [1, 4], [3, 4]]
+    groups = s.sieve_patch_graph(sizes, strata, pairs, [1, 1, 5, 7], 2)
+    assert groups.group.tolist() == [0, 1, 1, 1, 2]
+    assert groups.sizes.tolist() == [0, 111, 40] and groups.strata.tolist() == [0, 1, 3]
+    assert groups.pairs.tolist() == [[1, 2]] and groups.shared.tolist() == [12]
+
+
+def test_sieve_rule_leaves_a_patch_without_neighbours():
+    groups = s.sieve_patch_graph([0, 2, 30], [0, 1, 2], np.zeros((0, 2), int), [], 8)
+    assert groups.sizes.tolist() == [0, 2, 30]
