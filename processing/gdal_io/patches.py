@@ -57,9 +57,10 @@ def sieve_strata(path, min_cells, progress=None):
 
     Specks are patches of fewer than :func:`speck_cells` cells. The
     threshold grows (2, 4, 8), so that clusters of specks merge step by step.
-    GDAL is fast on the many tiny patches of a noisy covariate, and after it
-    at most one patch in :data:`SPECK_CELLS` cells is left for
-    :func:`merge_raster_patches`, which brings every patch up to ``min_cells``.
+    Used on rasters with more runs than :data:`MAX_GRAPH_RUNS` (a speckled
+    covariate): GDAL works in place, in memory that grows with the patches
+    only, and after it at most one patch in :data:`SPECK_CELLS` cells is left
+    for :func:`merge_raster_patches`, which brings every patch up to ``min_cells``.
     The sieve stops at :data:`SPECK_CELLS`: GDAL merges a small patch only
     when its chain of largest neighbours reaches a big patch, and with larger
     thresholds a few big patches swallow a whole mosaic of small ones, strata

@@ -131,7 +131,8 @@ def test_quantile_with_partial_coverage_warns(alg_id, run_alg, tmp_path):
     fb = Recorder()
     out = run_alg(alg_id, {
         "FRAME": frame, "COVARIATES": [path], "METHOD": 0, "STRATA": 5, "MIN_AREA": 0.0,
-        "OUTPUT_RASTER": str(tmp_path / "q.tif"), "OUTPUT": str(tmp_path / "q.gpkg"), "REPORT": str(tmp_path / "q.html"),
+        "OUTPUT_RASTER": str(tmp_path / "q.tif"), "OUTPUT": str(tmp_path / "q.gpkg"),
+        "REPORT": str(tmp_path / "q.html"),
     }, feedback=fb)
     _, feats = _features(out["OUTPUT"])
     cells = elev[elev != -9999].astype(float)
@@ -198,7 +199,8 @@ def test_min_area_is_met_on_a_mosaic_of_small_patches(alg_id, run_alg, tmp_path)
     fb = Recorder()
     out = run_alg(alg_id, {
         "FRAME": frame, "COVARIATES": [_mosaic(tmp_path)], "METHOD": 0, "STRATA": 3, "MIN_AREA": 1.5,
-        "OUTPUT_RASTER": str(tmp_path / "m.tif"), "OUTPUT": str(tmp_path / "m.gpkg"), "REPORT": str(tmp_path / "m.html"),
+        "OUTPUT_RASTER": str(tmp_path / "m.tif"), "OUTPUT": str(tmp_path / "m.gpkg"),
+        "REPORT": str(tmp_path / "m.html"),
     }, feedback=fb)
     layer, feats = _features(out["OUTPUT"])
     assert len(feats) == 3
@@ -227,9 +229,11 @@ def test_min_area_warns_about_an_island_it_cannot_merge(alg_id, run_alg, tmp_pat
     fb = Recorder()
     out = run_alg(alg_id, {
         "FRAME": layer, "COVARIATES": [path], "METHOD": 0, "STRATA": 3, "MIN_AREA": 2.0,
-        "OUTPUT_RASTER": str(tmp_path / "i.tif"), "OUTPUT": str(tmp_path / "i.gpkg"), "REPORT": str(tmp_path / "i.html"),
+        "OUTPUT_RASTER": str(tmp_path / "i.tif"), "OUTPUT": str(tmp_path / "i.gpkg"),
+        "REPORT": str(tmp_path / "i.html"),
     }, feedback=fb)
-    assert any(w.startswith("1 patch(es) covering 0.50 ha stay below MIN_AREA (2 ha)") for w in fb.warnings), fb.warnings
+    assert any(w.startswith("1 patch(es) covering 0.50 ha stay below MIN_AREA (2 ha)")
+               for w in fb.warnings), fb.warnings
     html = open(out["REPORT"], encoding="utf-8").read()
     assert "touch no other stratum" in html and "Every patch of the strata now covers" not in html
 
