@@ -1416,18 +1416,20 @@ class _StratifyInput:
 
 def _stratify_iv(method, n_strata, names, rng, sample_size):
     if method not in (QUANTILE, EQUAL_INTERVAL, CUM_ROOT_F, KMEANS, RASTER_CLASSES):
-        raise InputError(message("Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).", method=method))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes)."), method=method))
     k = int(n_strata)
     if method != RASTER_CLASSES and k < 2:
-        raise InputError(message("Ask for at least 2 strata (STRATA)."))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Ask for at least 2 strata (STRATA).")))
     if method == KMEANS and rng is None:
         raise ValueError("k-means needs rng")
     return _StratifyInput(method, k, tuple(names), rng, int(sample_size))
 
 
 def _no_cell_error(names):
-    return InputError(message("No cell of the frame has a value in every covariate ({names}). Check that the "
-                              "rasters cover the frame and that their NoData value is right.",
+    return InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+        "No cell of the frame has a value in every covariate ({names}). Check that the "
+                              "rasters cover the frame and that their NoData value is right."),
                               names=", ".join(names)))
 
 
@@ -1479,8 +1481,9 @@ def _threshold_rule(source, inp, first, progress, warnings):
         n_distinct, _ = count_distinct(source, k)
         if n_distinct < k:
             raise InputError(message(
-                "Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the "
-                "{k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "Covariate '{name}' takes only {n_distinct} distinct values over the frame, fewer than the "
+                "{k} strata asked for. Lower STRATA to {n_distinct} or fewer."),
                 name=name0, n_distinct=int(n_distinct), k=k))
     if inp.method == QUANTILE:
         boundaries, _ = exact_quantiles(source, quantile_probabilities(k), histogram=hist,
@@ -1492,8 +1495,9 @@ def _threshold_rule(source, inp, first, progress, warnings):
         boundaries = cum_root_f_boundaries(coarse.edges, coarse.counts, k)
     unique = np.unique(boundaries)
     if unique.size < boundaries.size:
-        warnings.append(message("Some boundaries coincide (many cells share the same value of '{name}'); "
-                                "{formed} strata are formed instead of {k}.",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Some boundaries coincide (many cells share the same value of '{name}'); "
+                                "{formed} strata are formed instead of {k}."),
                                 name=name0, formed=int(unique.size + 1), k=k))
     return ThresholdRule(unique), hist, n_distinct
 
@@ -1507,13 +1511,15 @@ def _kmeans_rule(source, inp, summ, progress):
     n_distinct = np.unique(z, axis=0).shape[0]
     if n_distinct < k:
         if sample_n == summ.count:
-            text = message("The covariates take only {n_distinct} distinct value combinations over the frame, "
-                           "fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.",
+            text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The covariates take only {n_distinct} distinct value combinations over the frame, "
+                           "fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer."),
                            n_distinct=int(n_distinct), k=k)
         else:
-            text = message("The covariates take only {n_distinct} distinct value combinations in a sample of "
+            text = message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The covariates take only {n_distinct} distinct value combinations in a sample of "
                            "{sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to "
-                           "{n_distinct} or fewer.", n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
+                           "{n_distinct} or fewer."), n_distinct=int(n_distinct), sample_n=int(sample_n), k=k)
         raise InputError(text)
     fit = lloyd_kmeans(z, kmeans_plusplus(z, k, inp.rng))
     order = np.argsort(fit.centres[:, 0], kind="stable")
@@ -1525,9 +1531,10 @@ def _class_rule(source, inp, progress):
     n_distinct, classes = count_distinct(source, MAX_CLASSES, progress=progress)
     if n_distinct > MAX_CLASSES:
         raise InputError(message(
-            "Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values "
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Covariate '{name}' has more than {max_classes} classes (at least {n_distinct} distinct values "
             "over the frame): reclassify it into {max_classes} classes or fewer first (for example with the "
-            "host's reclassify by table tool), or choose another METHOD.",
+            "host's reclassify by table tool), or choose another METHOD."),
             name=inp.names[0], max_classes=MAX_CLASSES, n_distinct=int(n_distinct)))
     return ClassRule(np.asarray(classes)), int(n_distinct)
 
@@ -1580,7 +1587,8 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     lut, order = stratum_order(stats)
     dropped = rule.n_strata - order.size
     if dropped:
-        warnings.append(message("{dropped} of the {k} strata hold no cell and were dropped.",
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "{dropped} of the {k} strata hold no cell and were dropped."),
                                 dropped=int(dropped), k=rule.n_strata))
     boundaries = rule.boundaries if isinstance(rule, ThresholdRule) else None
     return Stratification(method, rule, boundaries, stats.reordered(order), lut, order, int(stats.total),

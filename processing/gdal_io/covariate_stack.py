@@ -18,7 +18,7 @@ import numpy as np
 from osgeo import gdal, gdal_array, ogr
 
 from ..engine import stratification as strat
-from ..engine.errors import InputError, message
+from ..engine.errors import QT_TRANSLATE_NOOP, InputError, message
 from .grids import Grid, read_window, same_crs, srs_from_wkt
 
 #: cells per block: 256 Ki cells (one 512 x 512 tile; 2 MB per float64 covariate), small enough for the
@@ -44,10 +44,12 @@ def _open(cov):
     try:
         ds = gdal.Open(cov.path)
     except RuntimeError as exc:
-        raise InputError(message("Covariate '{name}' cannot be read ({error}). Check the file.", name=cov.name,
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Covariate '{name}' cannot be read ({error}). Check the file."), name=cov.name,
                                  error=str(exc)))
     if ds is None or not (1 <= cov.band <= ds.RasterCount):
-        raise InputError(message("Covariate '{name}' has no band {band}.", name=cov.name, band=int(cov.band)))
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Covariate '{name}' has no band {band}."), name=cov.name, band=int(cov.band)))
     gt = ds.GetGeoTransform()
     if gt[2] or gt[4]:
         ds = gdal.Warp("", ds, format="VRT")  # rotated grid: make it north-up
@@ -126,7 +128,7 @@ class CovariateStack:
 
     def __init__(self, covariates, frame_wkb, crs_wkt, categorical=False, block_cells=BLOCK_CELLS, workdir=None):
         if not covariates:
-            raise InputError(message("Give at least one raster in COVARIATES."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "Give at least one raster in COVARIATES.")))
         self.covariates = list(covariates)
         self.names = [c.name for c in self.covariates]
         self.crs_wkt = crs_wkt
@@ -158,7 +160,7 @@ class CovariateStack:
         geoms = [ogr.CreateGeometryFromWkb(bytes(w)) for w in frame_wkb]
         geoms = [g for g in geoms if g is not None and not g.IsEmpty()]
         if not geoms:
-            raise InputError(message("The frame has no polygon."))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine", "The frame has no polygon.")))
         frame = ogr.Geometry(ogr.wkbMultiPolygon)
         for g in geoms:
             for part in (g if g.GetGeometryType() in (ogr.wkbMultiPolygon, ogr.wkbMultiPolygon25D) else [g]):
@@ -202,8 +204,9 @@ class CovariateStack:
         self.n_blocks = len(self._windows)
 
     def _no_overlap(self):
-        return InputError(message("The frame does not overlap covariate '{name}' ({path}). Use a raster that covers "
-                                  "the frame, or check both layers' CRS.", name=self.covariates[0].name,
+        return InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The frame does not overlap covariate '{name}' ({path}). Use a raster that covers "
+                                  "the frame, or check both layers' CRS."), name=self.covariates[0].name,
                                   path=self.covariates[0].path))
 
     def _reader_for(self, cov):

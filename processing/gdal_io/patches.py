@@ -6,7 +6,7 @@ import numpy as np
 from osgeo import gdal
 
 from ..engine import stratification as strat
-from ..engine.errors import Cancelled, InputError, message
+from ..engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .covariate_stack import BLOCK_CELLS
 from .grids import GdalProgress
 from .runs import StripRuns, run_links
@@ -214,11 +214,12 @@ def too_many_patches(n_patches, stratified_ha, min_area_ha, limit=None):
     limit = MAX_POLYGON_PATCHES if limit is None else limit
     suggested = nice_area_above(max(stratified_ha / limit, min_area_ha * 2 if min_area_ha > 0 else 0.0))
     return InputError(message(
-        "The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} "
+        QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} "
         "that can be turned into polygons: the covariate is speckled at the scale of its cells. Set MIN_AREA to "
         "{suggested:g} ha or more (it is {min_area:g} ha): patches below it join a neighbouring stratum, which "
         "leaves at most {limit:,} patches on the {area:,.0f} ha stratified. Smoothing the covariate first also "
-        "helps.", n=int(n_patches), limit=int(limit), suggested=suggested, min_area=float(min_area_ha),
+        "helps."), n=int(n_patches), limit=int(limit), suggested=suggested, min_area=float(min_area_ha),
         area=float(stratified_ha)))
 
 
@@ -226,10 +227,11 @@ def too_speckled(n_patches, min_area_ha, limit=None):
     """The error for strata with more patches than the merge below MIN_AREA can take in bounded memory."""
     limit = MAX_SIEVE_PATCHES if limit is None else limit
     return InputError(message(
-        "The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} "
+        QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} "
         "that can be merged below MIN_AREA in bounded memory: the covariate is speckled at the scale of its "
         "cells. Smooth or coarsen it first (for example, resample it with the average to cells of about {cell:g} "
-        "m, so that one cell covers MIN_AREA), then run the stratification again.",
+        "m, so that one cell covers MIN_AREA), then run the stratification again."),
         n=int(n_patches), limit=int(limit), cell=round(math.sqrt(max(min_area_ha, 0.01) * 10000.0))))
 
 

@@ -4,7 +4,7 @@ from dataclasses import dataclass, field, replace
 import numpy as np
 
 from ..engine import stratification as strat
-from ..engine.errors import InputError, message
+from ..engine.errors import QT_TRANSLATE_NOOP, InputError, message
 from .covariate_stack import BLOCK_CELLS, CovariateStack
 from .grids import Grid
 from . import patches as patch_limits
@@ -108,10 +108,11 @@ def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_ce
         return res, patches
     if patches.sieved_to:
         warnings.append(message(
-            "The strata formed too many small patches to merge one by one: patches below {cells:,} cells were "
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The strata formed too many small patches to merge one by one: patches below {cells:,} cells were "
             "first merged into their largest neighbour (the rule of GDAL's sieve filter), which can join a mosaic "
             "of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer "
-            "to its pattern.",
+            "to its pattern."),
             cells=int(patches.sieved_to)))
     stats = strat.accumulate_statistics(stack.source(output_raster), res.n_strata,
                                         shift=res.statistics.overall_mean(), chart_range=res.statistics.chart_range,
@@ -119,28 +120,32 @@ def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_ce
     lut, order = strat.stratum_order(stats)
     if order.size < 2:
         raise InputError(message(
-            "With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there "
-            "is nothing to stratify. Lower MIN_AREA.", min_area=min_area_ha))
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there "
+            "is nothing to stratify. Lower MIN_AREA."), min_area=min_area_ha))
     provisional = res.provisional
     r2_before = float(res.statistics.r_squared()[0])
     if not np.array_equal(lut, np.arange(lut.size)):
         if order.size < stats.n_strata:
-            warnings.append(message("{merged} strata consisted only of patches below MIN_AREA and were "
-                                    "merged away.", merged=int(stats.n_strata - order.size)))
+            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "{merged} strata consisted only of patches below MIN_AREA and were "
+                                    "merged away."), merged=int(stats.n_strata - order.size)))
         remap_strata(output_raster, lut)
         stats, provisional = stats.reordered(order), provisional[order]
     res = res.with_statistics(stats, provisional)
     r2_after = float(stats.r_squared()[0])
     if np.isfinite(r2_before) and np.isfinite(r2_after) and r2_after < r2_before - R2_LOSS_WARNING:
         warnings.append(message(
-            "Merging the patches below MIN_AREA moved cells between strata: the share of the variance of "
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Merging the patches below MIN_AREA moved cells between strata: the share of the variance of "
             "'{name}' that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA "
-            "keeps the strata closer to the covariates.", name=stack.names[0], before=r2_before, after=r2_after))
+            "keeps the strata closer to the covariates."), name=stack.names[0], before=r2_before, after=r2_after))
     if patches.left:
         warnings.append(message(
-            "{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no "
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no "
             "other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from "
-            "the frame, fill the NoData in the covariates, or lower MIN_AREA.",
+            "the frame, fill the NoData in the covariates, or lower MIN_AREA."),
             n=patches.left, ha=patches.left_cells * stack.cell_area / 10000.0, min_area=min_area_ha))
     return res, patches
 
@@ -153,9 +158,10 @@ def _raster_stratification(stack, res, polygons, cells, patches, output_raster, 
     on_grid = stack.frame_area_on_grid / stack.frame_area if stack.frame_area > 0 else 0.0
     coverage = on_grid * res.cells_valid / res.cells_in_frame if res.cells_in_frame else 0.0
     if res.cells_nodata or on_grid < 1 - 1e-6:
-        warnings.append(message("The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie "
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie "
                                 "outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one "
-                                "covariate; the strata speak for the covered part only.",
+                                "covariate; the strata speak for the covered part only."),
                                 percent=100 * coverage, outside_ha=outside_ha, nodata_ha=res.cells_nodata * ca))
     labels = strat.stratum_label_texts(res, stack.names, stack.units)
     return RasterStratification(res, stack.names, stack.units, labels, stack.grid, polygons,

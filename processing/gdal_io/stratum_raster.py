@@ -2,7 +2,7 @@
 import numpy as np
 from osgeo import gdal
 
-from ..engine.errors import Cancelled, InputError, message
+from ..engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 
 
 class StratumRaster:
@@ -13,7 +13,8 @@ class StratumRaster:
         opts = ["TILED=YES", "BIGTIFF=IF_SAFER"] + _fast_compression()
         self.ds = gdal.GetDriverByName("GTiff").Create(path, grid.width, grid.height, 1, gdal.GDT_Byte, opts)
         if self.ds is None:
-            raise InputError(message("Cannot write the stratum raster '{path}'.", path=path))
+            raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Cannot write the stratum raster '{path}'."), path=path))
         self.ds.SetGeoTransform(grid.geotransform)
         self.ds.SetProjection(grid.crs_wkt)
         self.band = self.ds.GetRasterBand(1)
