@@ -19,8 +19,9 @@ DEFAULT_MIN_AREA_HA = 1.0
 #: 0.4 GB for 250,000 ragged patches on 10^8 cells, tests/benchmarks/bench_stratify.py), and a field map with
 #: more patches than this is speckle, not strata
 MAX_POLYGON_PATCHES = 100_000
-#: most patches given to the patch-graph merge (about 2 kB each in Python: 0.5 GB at most)
-MAX_GRAPH_PATCHES = 250_000
+#: most patches given to the patch-graph merge, which runs in Python (about 2 kB and 0.1 ms each: 0.1 GB and
+#: a few seconds at most); beyond, the sieve rule takes doubling thresholds first
+MAX_GRAPH_PATCHES = 50_000
 #: most runs (of equal ids along the rows) read into memory to find the patches (about 100 bytes each at peak);
 #: a raster with more has its specks sieved by GDAL in place first
 MAX_GRAPH_RUNS = 3_000_000
