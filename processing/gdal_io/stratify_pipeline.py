@@ -114,8 +114,10 @@ def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_ce
             "of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer "
             "to its pattern."),
             cells=int(patches.sieved_to)))
+    threshold = isinstance(res.rule, strat.ThresholdRule)  # their strata need no minimum and maximum, as before
     stats = strat.accumulate_statistics(stack.source(output_raster), res.n_strata,
                                         shift=res.statistics.overall_mean(), chart_range=res.statistics.chart_range,
+                                        extremes=not threshold,
                                         progress=strat.scaled_progress(progress, 0.6, 1.0))
     lut, order = strat.stratum_order(stats)
     if order.size < 2:
