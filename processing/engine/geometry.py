@@ -39,6 +39,7 @@ bounding box meets that edge as mixed, which is conservative and keeps the
 sampler exact.
 """
 from dataclasses import dataclass
+from functools import cached_property
 
 import numpy as np
 import shapely
@@ -50,6 +51,7 @@ from shapely.geometry.base import BaseGeometry
 
 from .errors import QT_TRANSLATE_NOOP, Message, message
 from .geometry_types import polygonal_part, valid_polygonal
+from .point_in_polygon import PointLocator
 
 SHAPELY_2 = int(shapely.__version__.split(".")[0]) >= 2
 
@@ -84,6 +86,19 @@ def contains_xy(geometry, x, y):
         shapely.prepare(geometry)
         return np.asarray(shapely.contains_xy(geometry, x, y), dtype=bool)
     return np.asarray(_vectorized.contains(geometry, x, y), dtype=bool)
+
+
+def point_locator(geometry):
+    """A :class:`point_in_polygon.PointLocator` of ``geometry``: the answers of :func:`contains_xy`, fast
+    for many points on long, ragged outlines (GEOS decides what the grid cannot)."""
+    return PointLocator(geometry, _rings(geometry), lambda x, y: contains_xy(geometry, x, y))
+
+
+def region_test(geometry, cover=None):
+    """``inside(x, y)`` for ``geometry``: the locator of ``cover`` when it covers ``geometry``, else GEOS."""
+    if cover is not None and cover.geometry is geometry and cover.locator is not None:
+        return cover.locator.contains
+    return lambda x, y: contains_xy(geometry, x, y)
 
 
 # ----------------------------------------------------------------------------
@@ -251,12 +266,22 @@ class TriangleCover:
         boundary passes through (their points need a point-in-polygon test).
     polygon_area : float
         Area of the polygon covered.
+    geometry : Polygon or MultiPolygon, optional
+        The polygon covered; its :attr:`locator` answers point-in-polygon tests.
     """
 
     triangles: np.ndarray
     areas: np.ndarray
     inside: np.ndarray
     polygon_area: float
+    geometry: object = None
+
+    @cached_property
+    def locator(self):
+        """Point locator of :attr:`geometry` (built on first use; None without a geometry)."""
+        if self.geometry is None or self.geometry.is_empty:
+            return None
+        return point_locator(self.geometry)
 
     @property
     def efficiency(self):
@@ -423,7 +448,7 @@ def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=N
     TriangleCover
     """
     area = float(geometry.area) if geometry is not None else 0.0
-    empty = TriangleCover(np.zeros((0, 3, 2)), np.zeros(0), np.zeros(0, bool), area)
+    empty = TriangleCover(np.zeros((0, 3, 2)), np.zeros(0), np.zeros(0, bool), area, geometry)
     if geometry is None or geometry.is_empty or area <= 0:
         return empty
     minx, miny, maxx, maxy = geometry.bounds
@@ -490,7 +515,7 @@ def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=N
     tris = tris[keep] + centre
     areas = 0.5 * np.abs(_cross(tris[:, 0], tris[:, 1], tris[:, 2]))
     ok = areas > 0
-    return TriangleCover(tris[ok], areas[ok], inside[keep][ok], area)
+    return TriangleCover(tris[ok], areas[ok], inside[keep][ok], area, geometry)
 
 
 def _bbox_cover(geometry):
@@ -500,7 +525,7 @@ def _bbox_cover(geometry):
         dtype=float,
     )
     areas = 0.5 * np.abs(_cross(tris[:, 0], tris[:, 1], tris[:, 2]))
-    return TriangleCover(tris, areas, np.zeros(2, bool), float(geometry.area))
+    return TriangleCover(tris, areas, np.zeros(2, bool), float(geometry.area), geometry)
 
 
 def points_in_triangles(triangles, rng):
@@ -545,6 +570,7 @@ def uniform_points(cover, geometry, n, rng, max_rounds=200):
     out = np.zeros((0, 2))
     if n <= 0 or len(cover.areas) == 0:
         return out
+    inside = region_test(geometry, cover)
     cum = np.cumsum(cover.areas)
     cum /= cum[-1]
     eff = max(cover.efficiency, 1e-3)
@@ -557,7 +583,7 @@ def uniform_points(cover, geometry, n, rng, max_rounds=200):
         ok = cover.inside[pick].copy()
         test = ~ok
         if test.any():
-            ok[test] = contains_xy(geometry, pts[test, 0], pts[test, 1])
+            ok[test] = inside(pts[test, 0], pts[test, 1])
         pts = pts[ok]
         chunks.append(pts)
         have += len(pts)

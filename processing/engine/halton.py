@@ -45,7 +45,7 @@ from dataclasses import dataclass
 import numpy as np
 
 from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
-from .geometry import contains_xy, triangle_cover, uniform_points
+from .geometry import region_test, triangle_cover, uniform_points
 
 BASES = (2, 3)
 DIGITS = (30, 19)
@@ -205,6 +205,7 @@ def balanced_acceptance_sample(region, n, rng, box=None, accept=None, progress=N
     if cover is None:
         cover = triangle_cover(region)
     first = uniform_points(cover, region, 1, rng)
+    inside = region_test(region, cover)
     if len(first) == 0:  # a region too thin for its coordinates to resolve (slivers are removed before)
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a "
@@ -221,7 +222,7 @@ def balanced_acceptance_sample(region, n, rng, box=None, accept=None, progress=N
         k = np.arange(k0, k0 + m, dtype=np.int64)
         k0 += m
         xy = origin + cyclic_points(k, start, shift) * span
-        ok = contains_xy(region, xy[:, 0], xy[:, 1])
+        ok = inside(xy[:, 0], xy[:, 1])
         if k[0] == 0:  # the start point is in the region by construction
             xy[0] = first
             ok[0] = True

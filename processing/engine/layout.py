@@ -702,13 +702,14 @@ class SpacingGuard:
         return mask
 
 
-def hexagonal_capacity(region, distance, offsets=4):
+def hexagonal_capacity(region, distance, offsets=4, cover=None):
     """Number of points of a hexagonal lattice of spacing ``d`` that fall in ``region``.
 
     The hexagonal (triangular) lattice is the densest arrangement of points
     at least ``d`` apart (Fejes Toth 1940; Thue's theorem): about
     ``A / (sqrt(3)/2 d**2)`` points, plus an edge effect. The best of a few
-    lattice offsets is returned, a count that certainly fits.
+    lattice offsets is returned, a count that certainly fits. ``cover`` (the region's
+    :class:`geometry.TriangleCover`) lends its point locator.
     """
     d = float(distance)
     if region is None or region.is_empty or d <= 0:
@@ -719,6 +720,7 @@ def hexagonal_capacity(region, distance, offsets=4):
         return int(expected)
     minx, miny, maxx, maxy = region.bounds
     dy = d * math.sqrt(3.0) / 2.0
+    inside_test = geo.region_test(region, cover)
     best = 0
     for k in range(int(offsets)):
         ox, oy = (k % 2) * d / 2.0, (k // 2) * dy / 2.0
@@ -726,13 +728,12 @@ def hexagonal_capacity(region, distance, offsets=4):
         cols = np.arange(minx - d + ox, maxx + d, d)
         xx, yy = np.meshgrid(cols, rows)
         xx = xx + (np.arange(len(rows))[:, None] % 2) * (d / 2.0)
-        inside = geo.contains_xy(region, xx.ravel(), yy.ravel())
-        best = max(best, int(inside.sum()))
+        best = max(best, int(inside_test(xx.ravel(), yy.ravel()).sum()))
     return best
 
 
 def _spacing_error(stratum, wanted, placed, spec):
-    fit = hexagonal_capacity(stratum.region, spec.min_spacing)
+    fit = hexagonal_capacity(stratum.region, spec.min_spacing, cover=stratum.cover)
     return InputError(
         message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for "
@@ -809,7 +810,7 @@ def grid_axes(rotation_deg):
     return u, v
 
 
-def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING):
+def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING, cover=None):
     """Square grid of ``spacing`` with a uniform random start (and rotation).
 
     Grid points are ``c + (i + o_1) s u + (j + o_2) s v`` with ``o ~ U(0, 1)^2``
@@ -818,6 +819,8 @@ def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING):
     inclusion density ``1 / s**2`` (Cochran 1977, ch. 8, systematic sampling
     with a random start). Reserves are the cell centres (offset ``(1/2, 1/2)``)
     inside the region, in random order.
+
+    ``cover`` (the region's :class:`geometry.TriangleCover`) lends its point locator.
 
     Returns
     -------
@@ -841,9 +844,11 @@ def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING):
             count=(2 * m + 1) ** 2))
     idx = np.arange(-m, m + 1, dtype=float)
     jj, ii = np.meshgrid(idx, idx, indexing="ij")  # j rows, i columns
+    inside = geo.region_test(region, cover)
+
     def points(o1, o2):
         p = c + ((ii.ravel() + o1) * s)[:, None] * u + ((jj.ravel() + o2) * s)[:, None] * v
-        return p[geo.contains_xy(region, p[:, 0], p[:, 1])]
+        return p[inside(p[:, 0], p[:, 1])]
     primaries = points(*offset)
     reserves = points((offset[0] + 0.5) % 1.0, (offset[1] + 0.5) % 1.0)
     reserves = reserves[rng.permutation(len(reserves))]
@@ -886,7 +891,7 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
     if guard is not None and spec.design != SYSTEMATIC_GRID:  # fail early where even a dense packing cannot hold the units
         for st in strata:
             wanted = st.n + spec.reserve if st.n > 0 else 0
-            if wanted and hexagonal_capacity(st.region, spec.min_spacing) < wanted:
+            if wanted and hexagonal_capacity(st.region, spec.min_spacing, cover=st.cover) < wanted:
                 raise _spacing_error(st, wanted, 0, spec)
     for h, st in enumerate(strata):
         if progress is not None and progress(h / max(len(strata), 1)):
@@ -915,7 +920,7 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
                         n=n, key=st.key, spacing=spacing, min_spacing=spec.min_spacing, fit=fit),
                     ids=[st.key] if st.key is not None else [],
                 )
-            grid = systematic_grid(st.region, spacing, rng, spec.bearing)
+            grid = systematic_grid(st.region, spacing, rng, spec.bearing, cover=st.cover)
             rotation = grid.rotation
             prim = grid.primaries
             res = grid.reserves

@@ -16,6 +16,7 @@ import pytest
 from shapely.geometry import MultiPolygon, Point, Polygon, box
 
 from plotwise.processing.engine import layout as L
+from plotwise.processing.engine import point_in_polygon
 
 
 def _ragged(n, seed, radius=1000.0, noise=0.1, x0=0.0, y0=0.0):
@@ -103,15 +104,25 @@ def run_case(name, seed=20240611):
     return L.draw_layout(frame, spec, np.random.default_rng(seed))
 
 
+@pytest.fixture(params=["as shipped", "grid everywhere"])
+def locator_use(request, monkeypatch):
+    """Run each case as shipped, and with the grid point locator used on every outline."""
+    if request.param == "grid everywhere":
+        monkeypatch.setattr(point_in_polygon, "MIN_EDGES", 3)
+        monkeypatch.setattr(point_in_polygon, "MIN_CROSSINGS_PER_LINE", 0.0)
+    return request.param
+
+
 @pytest.mark.parametrize("name", sorted(CASES))
-def test_fixed_seed_gives_the_recorded_units(name):
+def test_fixed_seed_gives_the_recorded_units(name, locator_use):
     assert fingerprint(run_case(name)) == EXPECTED[name]
 
 
 @pytest.mark.parametrize("name", sorted(CAPACITY_CASES))
-def test_hexagonal_capacity_is_the_recorded_count(name):
+def test_hexagonal_capacity_is_the_recorded_count(name, locator_use):
     region, distance = CAPACITY_CASES[name]
-    assert L.hexagonal_capacity(region, distance) == EXPECTED_CAPACITY[name]
+    cover = L.geo.triangle_cover(region)
+    assert L.hexagonal_capacity(region, distance, cover=cover) == EXPECTED_CAPACITY[name]
 
 
 if __name__ == "__main__":  # print the fingerprints (run with the code whose behaviour is to be kept)
