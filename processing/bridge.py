@@ -86,7 +86,8 @@ class FeatureRecords:
     """Features of one layer in the computation CRS.
 
     ``geometries`` are shapely objects (None for empty ones); ``attributes`` maps a field
-    name to a list of plain values, aligned with ``fids``.
+    name to a list of plain values, aligned with ``fids``. ``valid`` (when asked for) holds the
+    host's GEOS validity of each geometry, aligned with ``fids``.
     """
 
     layer_name: str
@@ -94,17 +95,22 @@ class FeatureRecords:
     geometries: tuple
     attributes: dict
     warnings: tuple
+    valid: tuple = ()
 
     def __len__(self):
         return len(self.fids)
 
 
-def read_features(source, target_crs, context, feedback, field_names=(), layer_name="", repair=True, drop_empty=True):
+def read_features(source, target_crs, context, feedback, field_names=(), layer_name="", repair=True, drop_empty=True,
+                  check_validity=False):
     """Read ``source`` (a ``QgsProcessingFeatureSource``) into :class:`FeatureRecords`.
 
     Geometries are transformed to ``target_crs``. Invalid polygons are repaired (with a
     warning naming the feature ids); empty or zero-area polygons are dropped (with a
-    warning) when ``drop_empty``.
+    warning) when ``drop_empty``. With ``check_validity`` (and no ``repair``) the host's own
+    check, ``QgsGeometry.isGeosValid`` (the one its feature requests run, and which it keeps with
+    the layer's geometry once done), is recorded per feature in ``valid``, so that the engine
+    repairs only what it flags.
     """
     if source is None:
         raise QgsProcessingException(
@@ -124,7 +130,7 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
         )
     request = QgsFeatureRequest()
     request.setDestinationCrs(target_crs, context.transformContext())
-    fids, geometries = [], []
+    fids, geometries, valid = [], [], []
     values = {name: [] for name in field_names if name}
     repaired, dropped = [], []
     total = source.featureCount() or 1
@@ -140,10 +146,15 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
         if drop_empty and (shape is None or shape.is_empty or (is_areal and shape.area <= 0)):
             dropped.append(feature.id())
             continue
+        # a collection's validity says nothing of its polygonal part: only (multi)polygons are checked
+        host_valid = (check_validity and shape is not None and shape.geom_type in ("Polygon", "MultiPolygon")
+                      and geometry.isGeosValid())
         if shape is not None and shape.geom_type == "GeometryCollection":
             shape = polygonal_part(shape)
         fids.append(feature.id())
         geometries.append(shape)
+        if check_validity:
+            valid.append(bool(host_valid))
         for name in values:
             values[name].append(plain_value(feature[name]))
         if i % 500 == 0:
@@ -163,7 +174,8 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
         )
     for warning in warnings:
         feedback.pushWarning(warning)
-    return FeatureRecords(layer_name, np.asarray(fids, dtype=np.int64), tuple(geometries), values, tuple(warnings))
+    return FeatureRecords(layer_name, np.asarray(fids, dtype=np.int64), tuple(geometries), values, tuple(warnings),
+                          tuple(valid))
 
 
 def point_coordinates(records):

@@ -143,8 +143,11 @@ class Repaired:
     was_invalid: bool
 
 
-def repair_polygonal(geometry):
+def repair_polygonal(geometry, known_valid=False):
     """Make ``geometry`` valid and keep its polygonal part (see ``geometry_types.valid_polygonal``).
+
+    ``known_valid``: the caller's own GEOS validity check (the host's) found it valid; it is not
+    checked again (the check is the costly part for long outlines).
 
     Returns
     -------
@@ -152,7 +155,7 @@ def repair_polygonal(geometry):
     """
     if geometry is None or geometry.is_empty:
         return Repaired(Polygon(), False)
-    if geometry.is_valid:  # one validity check: it is the costly part for long outlines
+    if known_valid or geometry.is_valid:  # one validity check: it is the costly part for long outlines
         return Repaired(polygonal_part(geometry), False)
     return Repaired(valid_polygonal(geometry), True)
 
@@ -327,19 +330,37 @@ def _bbox_overlap(triangles, segment):
 
 
 def _mixed_triangles(points, simplices, neighbors, missing):
-    """Flags of the triangles crossed by the ``missing`` edges (vertex pairs)."""
+    """Flags of the triangles crossed by the ``missing`` edges (vertex pairs).
+
+    Each edge ``a -> b`` is walked from the triangle at ``a`` whose angle holds the direction
+    to ``b`` (:func:`_walk_starts`) through the triangles it crosses (:func:`_walk_edges`).
+    Edges whose walk meets a degenerate case (through a vertex, along a triangle edge) mark
+    every triangle whose bounding box meets them instead.
+    """
     n_tri = len(simplices)
     mixed = np.zeros(n_tri, dtype=bool)
-    degenerate = np.zeros(len(missing), dtype=bool)
     if len(missing) == 0:
         return mixed
-    a_idx = missing[:, 0]
-    b_idx = missing[:, 1]
-    pa = points[a_idx]
-    pb = points[b_idx]
+    pa = points[missing[:, 0]]
+    pb = points[missing[:, 1]]
     seg_len = np.hypot(*(pb - pa).T)
+    start_tri, start_k, degenerate = _walk_starts(points, simplices, missing, seg_len)
+    degenerate |= _walk_edges(points, simplices, neighbors, missing, seg_len, start_tri, start_k, degenerate, mixed)
+    tris = points[simplices]
+    for e in np.flatnonzero(degenerate):
+        mixed |= _bbox_overlap(tris, np.stack([pa[e], pb[e]]))
+    return mixed
 
-    # start: the triangle at vertex a whose angle contains the direction to b
+
+def _walk_starts(points, simplices, missing, seg_len):
+    """For each missing edge ``a -> b``: the triangle at ``a`` whose angle holds ``b``, the corner
+    index of ``a`` in it, and whether that start is degenerate (no such triangle, or ``b`` on one of
+    its rays)."""
+    n_tri = len(simplices)
+    degenerate = np.zeros(len(missing), dtype=bool)
+    a_idx = missing[:, 0]
+    pa = points[a_idx]
+    pb = points[missing[:, 1]]
     inc_tri = np.repeat(np.arange(n_tri), 3)
     inc_k = np.tile(np.arange(3), n_tri)
     inc_v = simplices.ravel()
@@ -369,7 +390,17 @@ def _mixed_triangles(points, simplices, neighbors, missing):
     start_k = np.full(len(missing), -1)
     start_tri[edge_of[hit]] = cand_tri[hit]
     start_k[edge_of[hit]] = cand_k[hit]
+    return start_tri, start_k, degenerate
 
+
+def _walk_edges(points, simplices, neighbors, missing, seg_len, start_tri, start_k, degenerate, mixed):
+    """Walk every non-degenerate missing edge through the triangles it crosses (Lawson's walk),
+    marking them in ``mixed``; returns the flags of the edges whose walk turned degenerate."""
+    n_tri = len(simplices)
+    degenerate = degenerate.copy()
+    b_idx = missing[:, 1]
+    pa = points[missing[:, 0]]
+    pb = points[b_idx]
     active = np.flatnonzero(~degenerate)
     cur = start_tri[active]
     mixed[cur] = True
@@ -412,11 +443,7 @@ def _mixed_triangles(points, simplices, neighbors, missing):
         active, prev, nxt = active[go], nxt[go], new_next[go]
     else:  # pragma: no cover - a walk longer than the triangulation
         degenerate[active] = True
-
-    tris = points[simplices]
-    for e in np.flatnonzero(degenerate):
-        mixed |= _bbox_overlap(tris, np.stack([pa[e], pb[e]]))
-    return mixed
+    return degenerate
 
 
 def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=None):
@@ -460,6 +487,12 @@ def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=N
         vertices = sum(len(r) for r in _rings(geometry))
         if expected_points / share < 2 * vertices:
             return _bbox_cover(geometry)
+    return _delaunay_cover(geometry, area)
+
+
+def _delaunay_cover(geometry, area):
+    """The Delaunay cover of :func:`triangle_cover`: triangles of the vertices, sorted into inside,
+    mixed (walked by the boundary edges that are no Delaunay edges) and outside (dropped)."""
     points, edges = _boundary_edges(geometry)
     # work relative to the centre: better conditioned orientation tests
     centre = points.mean(axis=0)
@@ -481,15 +514,23 @@ def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=N
     edge_keys = np.sort(edges, axis=1) @ np.array([n_pts, 1])
     missing = edges[~np.isin(edge_keys, tri_keys)]
     mixed = _mixed_triangles(local, simplices, neighbors, missing)
+    inside = _unmixed_inside(geometry, local, centre, simplices, neighbors, edge_keys, mixed)
+    keep = inside | mixed
+    tris = local[simplices][keep] + centre
+    areas = 0.5 * np.abs(_cross(tris[:, 0], tris[:, 1], tris[:, 2]))
+    ok = areas > 0
+    return TriangleCover(tris[ok], areas[ok], inside[keep][ok], area, geometry)
 
-    # group the unmixed triangles that share an edge that is not a boundary edge
+
+def _unmixed_inside(geometry, local, centre, simplices, neighbors, edge_keys, mixed):
+    """Inside flags of the triangles that no boundary edge crosses, one point-in-polygon test per
+    connected group (triangles sharing an edge that is not a boundary edge)."""
+    n_pts = len(local)
     n_tri = len(simplices)
     opp_tri = np.repeat(np.arange(n_tri), 3)
     nb = neighbors.ravel()
-    shared_edge_keys = np.concatenate(
-        [np.sort(simplices[:, [1, 2]], axis=1), np.sort(simplices[:, [2, 0]], axis=1), np.sort(simplices[:, [0, 1]], axis=1)],
-        axis=0,
-    )
+    pairs = ([1, 2], [2, 0], [0, 1])
+    shared_edge_keys = np.concatenate([np.sort(simplices[:, pair], axis=1) for pair in pairs], axis=0)
     # reorder to match ravel order of neighbors (tri, k)
     shared_edge_keys = shared_edge_keys.reshape(3, n_tri, 2).transpose(1, 0, 2).reshape(-1, 2) @ np.array([n_pts, 1])
     link = (
@@ -510,12 +551,7 @@ def triangle_cover(geometry, method="auto", compact_share=0.5, expected_points=N
     rep_inside = contains_xy(geometry, centroids[rep, 0], centroids[rep, 1])
     group_inside = np.zeros(group.max() + 1, dtype=bool)
     group_inside[group[rep]] = rep_inside
-    inside = ~mixed & group_inside[group]
-    keep = inside | mixed
-    tris = tris[keep] + centre
-    areas = 0.5 * np.abs(_cross(tris[:, 0], tris[:, 1], tris[:, 2]))
-    ok = areas > 0
-    return TriangleCover(tris[ok], areas[ok], inside[keep][ok], area, geometry)
+    return ~mixed & group_inside[group]
 
 
 def _bbox_cover(geometry):

@@ -461,6 +461,257 @@ def _sort_keys(keys):
 # ----------------------------------------------------------------------------
 # preparing the strata
 # ----------------------------------------------------------------------------
+@dataclass(frozen=True, eq=False)
+class FrameInput:
+    """The checked input of :func:`prepare_strata` (see there for the meaning of each field).
+
+    ``known_valid`` holds, per feature, whether the caller's own validity check (the host's)
+    found its geometry valid; the others are checked here.
+    """
+
+    geometries: tuple
+    feature_ids: tuple
+    strata: tuple
+    n_values: tuple
+    n_units: int
+    spec: LayoutSpec
+    stratum_field: str
+    n_field: str
+    cover_method: str
+    known_valid: tuple
+
+
+def _prepare_strata_iv(geometries, feature_ids, strata, n_values, n_units, spec, stratum_field, n_field, cover_method,
+                       valid):
+    """Check the arguments of :func:`prepare_strata` and freeze them into a :class:`FrameInput`."""
+    geometries = tuple(geometries)
+    feature_ids = tuple(range(len(geometries))) if feature_ids is None else tuple(feature_ids)
+    if n_values is None and (n_units is None or int(n_units) < 1):
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).")))
+    known_valid = tuple(bool(v) for v in valid) if valid is not None else (False,) * len(geometries)
+    return FrameInput(
+        geometries, feature_ids, None if strata is None else tuple(strata),
+        None if n_values is None else tuple(n_values), None if n_units is None else int(n_units),
+        spec or LayoutSpec(), stratum_field, n_field, cover_method, known_valid,
+    )
+
+
+@dataclass(frozen=True, eq=False)
+class _UsableFeatures:
+    """Features kept for the frame (index into the input, repaired geometry) and those left out."""
+
+    kept: tuple
+    skipped_ids: tuple
+    repaired_ids: tuple
+    warnings: tuple
+
+
+def usable_features(frame_input):
+    """Repair invalid features, skip empty ones, zero-area ones and slivers (with warnings).
+
+    Only features that the caller's check did not find valid are checked again (GEOS validity:
+    one check per feature, the costly part for long outlines). Sliver parts, under
+    ``geometry.SLIVER_AREA``, are removed: they would only stretch the grid's extent.
+
+    Raises
+    ------
+    InputError
+        When no feature is left.
+    """
+    ids = frame_input.feature_ids
+    keep, skipped, slivers, repaired = [], [], [], []
+    for i, (g, known) in enumerate(zip(frame_input.geometries, frame_input.known_valid)):
+        fixed = geo.repair_polygonal(g, known_valid=known)
+        if fixed.was_invalid:
+            repaired.append(ids[i])
+        if fixed.geometry.is_empty or fixed.geometry.area <= 0:
+            skipped.append(ids[i])
+            continue
+        kept, _ = geo.without_slivers(fixed.geometry)
+        if kept.is_empty:
+            slivers.append(ids[i])
+            continue
+        keep.append((i, kept))
+    warnings = []
+    if repaired:
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Invalid geometry was repaired for feature(s) {ids}; check their outlines."),
+                                ids=_ids(repaired)))
+    if skipped:
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Empty or zero-area feature(s) {ids} were skipped."), ids=_ids(skipped)))
+    if slivers:
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an "
+            "overlay or a reprojection) and were skipped."), ids=_ids(slivers),
+                                area=geo.SLIVER_AREA))
+    if not keep:
+        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The frame has no polygon of {area:g} m² or more: every feature is empty, has zero "
+            "area or is a sliver."), area=geo.SLIVER_AREA))
+    return _UsableFeatures(tuple(keep), tuple(skipped + slivers), tuple(repaired), tuple(warnings))
+
+
+@dataclass(frozen=True, eq=False)
+class _MergedStrata:
+    """Strata in sorted key order: keys, unit-id labels, merged geometries, areas, members."""
+
+    keys: tuple
+    labels: tuple
+    geometries: tuple
+    areas: tuple
+    members: tuple  # per stratum: the input indexes of its features
+    feature_ids: tuple  # per stratum: their ids
+
+
+def merge_strata(frame_input, kept):
+    """Group the kept features by stratum value and merge each group into one geometry.
+
+    Raises
+    ------
+    InputError
+        For a feature without a stratum value (NULL) when strata are given.
+    """
+    ids, strata = frame_input.feature_ids, frame_input.strata
+    groups = {}
+    for i, g in kept:
+        key = strata[i] if strata is not None else None
+        if strata is not None and key is None:
+            raise InputError(
+                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "{field} is empty (NULL) for feature {fid}. Give it a stratum value."),
+                        field=frame_input.stratum_field, fid=ids[i]),
+                ids=[ids[i]],
+            )
+        groups.setdefault(key, []).append((i, g))
+    keys = _sort_keys(groups)
+    labels = [stratum_label(k) for k in keys]
+    if len(set(labels)) != len(labels):  # e.g. "a b" and "a_b"
+        labels = [f"S{j + 1}" for j in range(len(keys))]
+    merged = []
+    for key in keys:
+        members = groups[key]
+        if len(members) == 1:
+            merged.append(members[0][1])  # repaired already
+        else:
+            merged.append(geo.repair_polygonal(unary_union([m[1] for m in members])).geometry)
+    return _MergedStrata(
+        tuple(keys), tuple(labels), tuple(merged), tuple(float(g.area) for g in merged),
+        tuple(tuple(i for i, _ in groups[k]) for k in keys),
+        tuple(tuple(ids[i] for i, _ in groups[k]) for k in keys),
+    )
+
+
+def units_per_stratum(frame_input, kept, merged):
+    """``n_h`` per stratum, from the units field or the total by area, and the warnings met.
+
+    The units field is checked on the kept features only (a skipped empty feature may lack a
+    value) and must carry one value per stratum.
+
+    Returns
+    -------
+    (ndarray of int, list of Message)
+    """
+    if frame_input.n_values is None:
+        n_units = frame_input.n_units
+        counts = proportional_counts(merged.areas, n_units)
+        if n_units < MIN_PER_STRATUM * len(merged.keys):
+            return counts, [message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; "
+                    "every stratum gets {minimum} ({total} units)."),
+                n_units=n_units, minimum=MIN_PER_STRATUM, n_strata=len(merged.keys), total=int(counts.sum()))]
+        return counts, []
+    ids = frame_input.feature_ids
+    rows = [i for i, _ in kept]
+    n_feat = dict(zip(rows, counts_from_field([frame_input.n_values[i] for i in rows], [ids[i] for i in rows],
+                                              frame_input.n_field)))
+    counts = []
+    for key, members, member_ids in zip(merged.keys, merged.members, merged.feature_ids):
+        values = {int(n_feat[i]) for i in members}
+        if len(values) > 1:
+            n_field = frame_input.n_field
+            raise InputError(
+                message(
+                    QT_TRANSLATE_NOOP("PlotwiseEngine",
+                        "The features of the frame (no stratum field) carry different {n_field} values ({values}) "
+                        "(features {ids}). {n_field} is the number of units of the whole stratum: give its features "
+                        "the same value or choose a stratum field so that each feature is a stratum.")
+                    if key is None else
+                    QT_TRANSLATE_NOOP("PlotwiseEngine",
+                        "The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). "
+                        "{n_field} is the number of units of the whole stratum: give its features the same value."),
+                    key=key, n_field=n_field, values=", ".join(str(v) for v in sorted(values)),
+                    ids=_ids(member_ids)),
+                ids=list(member_ids),
+            )
+        counts.append(values.pop())
+    return np.asarray(counts, dtype=int), []
+
+
+def sampling_region(key, geometry, area, n, feature_ids, spec):
+    """Where the centres of a stratum are drawn, its effective area ``A'_h`` and the warnings met.
+
+    With ``inside`` the region is the stratum shrunk by the unit's circumscribing radius
+    (:func:`geometry.inward_buffer`); a band of more than ``EDGE_BAND_WARNING_SHARE`` of the
+    stratum where no centre can fall is warned about, as are strata with no or one unit.
+    Otherwise it is the stratum grown by the unit's reach, for plus sampling
+    (:func:`edge.plus_region`).
+
+    Raises
+    ------
+    InputError
+        When units are asked for and nothing is left after shrinking.
+    """
+    radius = spec.radius if spec.inside else 0.0
+    if radius > 0:
+        region = geo.inward_buffer(geometry, radius)
+    else:
+        region = plus_region(geometry, 0.0 if spec.inside else spec.reach)
+    effective = float(region.area) if not region.is_empty else 0.0
+    if effective <= 0 and n + spec.reserve > 0:
+        raise InputError(
+            message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius, ids=_ids(feature_ids)),
+            ids=list(feature_ids),
+        )
+    warnings = []
+    band = 1.0 - effective / area if area > 0 else 0.0
+    if radius > 0 and effective > 0 and band > EDGE_BAND_WARNING_SHARE:
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) "
+                "where no unit centre can fall; the estimate carries the inner part's density over that band. "
+                "If density differs near edges, turn INSIDE off or use smaller units.") if key is None else
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its "
+                "edge) where no unit centre can fall; the estimate carries the inner part's density over that "
+                "band. If density differs near edges, turn INSIDE off or use smaller units."),
+            share=band, radius=radius, key=key))
+    if n == 0:
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The frame gets no units; the estimate cannot speak for it.") if key is None
+                                else QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                    "Stratum {key} gets no units; the estimate cannot speak for it."), key=key))
+    elif n == 1:
+        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
+            "The frame gets one unit only; its variance cannot be estimated.") if key is None
+                                else QT_TRANSLATE_NOOP("PlotwiseEngine",
+                                    "Stratum {key} gets one unit only; its variance cannot be estimated."), key=key))
+    return region, effective, warnings
+
+
+def _cover_for_design(region, effective, n, spec, cover_method):
+    """The triangle cover of a region, sized for the uniform points the design will draw there."""
+    if effective <= 0:
+        return geo.triangle_cover(None)
+    if spec.design == SIMPLE_RANDOM:
+        draws = (n + spec.reserve) * (3 if spec.min_spacing > 0 else 1.1)
+    else:  # the balanced start is one uniform point; the grid needs none
+        draws = 1
+    return geo.triangle_cover(region, cover_method, expected_points=draws)
+
+
 def prepare_strata(
     geometries,
     feature_ids=None,
@@ -471,6 +722,7 @@ def prepare_strata(
     stratum_field="STRATUM_FIELD",
     n_field="N_FIELD",
     cover_method="auto",
+    valid=None,
 ):
     """Repair, merge and size the strata of a frame.
 
@@ -488,149 +740,35 @@ def prepare_strata(
         Total units split by area (:func:`proportional_counts`).
     spec : LayoutSpec
         For ``inside``, the unit radius and the design.
+    stratum_field, n_field : str
+        How messages name the stratum and units fields.
     cover_method : {"auto", "delaunay", "bbox"}
         Sampler for uniform points (:func:`geometry.triangle_cover`); "auto"
         picks the cheaper exact one for the number of points the design draws.
+    valid : sequence of bool, optional
+        Per feature, True where the caller's own GEOS validity check (the
+        host's) found it valid: it is not checked again.
 
     Returns
     -------
     PreparedFrame
     """
-    spec = spec or LayoutSpec()
-    geometries = list(geometries)
-    if feature_ids is None:
-        feature_ids = list(range(len(geometries)))
-    feature_ids = list(feature_ids)
-    warnings = []
-    if n_values is None and (n_units is None or int(n_units) < 1):
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).")))
-    keep, skipped, slivers, repaired = [], [], [], []
-    for i, g in enumerate(geometries):
-        fixed = geo.repair_polygonal(g)
-        if fixed.was_invalid:
-            repaired.append(feature_ids[i])
-        if fixed.geometry.is_empty or fixed.geometry.area <= 0:
-            skipped.append(feature_ids[i])
-            continue
-        kept, _ = geo.without_slivers(fixed.geometry)  # sliver parts would only stretch the grid's extent
-        if kept.is_empty:
-            slivers.append(feature_ids[i])
-            continue
-        keep.append((i, kept))
-    if repaired:
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Invalid geometry was repaired for feature(s) {ids}; check their outlines."),
-                                ids=_ids(repaired)))
-    if skipped:
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Empty or zero-area feature(s) {ids} were skipped."), ids=_ids(skipped)))
-    if slivers:
-        warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an "
-            "overlay or a reprojection) and were skipped."), ids=_ids(slivers),
-                                area=geo.SLIVER_AREA))
-    skipped += slivers
-    if not keep:
-        raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "The frame has no polygon of {area:g} m² or more: every feature is empty, has zero "
-            "area or is a sliver."), area=geo.SLIVER_AREA))
-    if n_values is not None:  # checked on the features kept (a skipped empty feature may lack a value)
-        n_feat = np.full(len(geometries), -1, dtype=int)
-        kept = [i for i, _ in keep]
-        n_feat[kept] = counts_from_field([n_values[i] for i in kept], [feature_ids[i] for i in kept], n_field)
-    groups = {}
-    for i, g in keep:
-        key = strata[i] if strata is not None else None
-        if strata is not None and key is None:
-            raise InputError(
-                message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "{field} is empty (NULL) for feature {fid}. Give it a stratum value."),
-                        field=stratum_field, fid=feature_ids[i]),
-                ids=[feature_ids[i]],
-            )
-        groups.setdefault(key, []).append((i, g))
-    keys = _sort_keys(groups)
-    labels = [stratum_label(k) for k in keys]
-    if len(set(labels)) != len(labels):  # e.g. "a b" and "a_b"
-        labels = [f"S{j + 1}" for j in range(len(keys))]
-    merged, areas, fids = [], [], []
-    for key in keys:
-        members = groups[key]
-        if len(members) == 1:
-            g = members[0][1]  # repaired above
-        else:
-            g = geo.repair_polygonal(unary_union([m[1] for m in members])).geometry
-        merged.append(g)
-        areas.append(float(g.area))
-        fids.append(tuple(feature_ids[i] for i, _ in members))
-    warnings += _overlap_problems(keys, merged)
-    if n_values is not None:
-        counts = []
-        for key, members in zip(keys, (groups[k] for k in keys)):
-            vals = {int(n_feat[i]) for i, _ in members}
-            if len(vals) > 1:
-                ids = [feature_ids[i] for i, _ in members]
-                raise InputError(
-                    message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                        "The features of the frame (no stratum field) carry different {n_field} values ({values}) "
-                        "(features {ids}). {n_field} is the number of units of the whole stratum: give its features "
-                        "the same value or choose a stratum field so that each feature is a stratum.")
-                        if key is None else
-                        QT_TRANSLATE_NOOP("PlotwiseEngine",
-                        "The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). "
-                        "{n_field} is the number of units of the whole stratum: give its features the same value."),
-                        key=key, n_field=n_field, values=", ".join(str(v) for v in sorted(vals)), ids=_ids(ids)),
-                    ids=ids,
-                )
-            counts.append(vals.pop())
-        counts = np.asarray(counts, dtype=int)
-    else:
-        counts = proportional_counts(areas, int(n_units))
-        if int(n_units) < MIN_PER_STRATUM * len(keys):
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; "
-                "every stratum gets {minimum} ({total} units)."),
-                n_units=int(n_units), minimum=MIN_PER_STRATUM, n_strata=len(keys), total=int(counts.sum())))
+    frame_input = _prepare_strata_iv(geometries, feature_ids, strata, n_values, n_units, spec, stratum_field, n_field,
+                                     cover_method, valid)
+    spec = frame_input.spec
+    usable = usable_features(frame_input)
+    merged = merge_strata(frame_input, usable.kept)
+    warnings = list(usable.warnings) + _overlap_problems(merged.keys, merged.geometries)
+    counts, count_warnings = units_per_stratum(frame_input, usable.kept, merged)
+    warnings += count_warnings
     out = []
-    radius = spec.radius if spec.inside else 0.0
-    for key, label, g, area, n, ids in zip(keys, labels, merged, areas, counts, fids):
-        region = geo.inward_buffer(g, radius) if radius > 0 else plus_region(g, 0.0 if spec.inside else spec.reach)
-        eff = float(region.area) if not region.is_empty else 0.0
-        if eff <= 0 and n + spec.reserve > 0:
-            raise InputError(
-                message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius, ids=_ids(ids)),
-                ids=list(ids),
-            )
-        band = 1.0 - eff / area if area > 0 else 0.0
-        if radius > 0 and eff > 0 and band > EDGE_BAND_WARNING_SHARE:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) "
-                "where no unit centre can fall; the estimate carries the inner part's density over that band. "
-                "If density differs near edges, turn INSIDE off or use smaller units.") if key is None else
-                QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its "
-                    "edge) where no unit centre can fall; the estimate carries the inner part's density over that "
-                    "band. If density differs near edges, turn INSIDE off or use smaller units."),
-                share=band, radius=radius, key=key))
-        if n == 0:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The frame gets no units; the estimate cannot speak for it.") if key is None
-                                    else QT_TRANSLATE_NOOP("PlotwiseEngine",
-                                        "Stratum {key} gets no units; the estimate cannot speak for it."), key=key))
-        elif n == 1:
-            warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "The frame gets one unit only; its variance cannot be estimated.") if key is None
-                                    else QT_TRANSLATE_NOOP("PlotwiseEngine",
-                                        "Stratum {key} gets one unit only; its variance cannot be estimated."),
-                                    key=key))
-        if spec.design == SIMPLE_RANDOM:
-            draws = (n + spec.reserve) * (3 if spec.min_spacing > 0 else 1.1)
-        else:  # the balanced start is one uniform point; the grid needs none
-            draws = 1
-        cover = geo.triangle_cover(region, cover_method, expected_points=draws) if eff > 0 else geo.triangle_cover(None)
-        out.append(PreparedStratum(key, label, g, area, region, eff, cover, int(n), ids))
-    return PreparedFrame(tuple(out), tuple(warnings), tuple(skipped), tuple(repaired))
+    for key, label, g, area, n, ids in zip(merged.keys, merged.labels, merged.geometries, merged.areas, counts,
+                                           merged.feature_ids):
+        region, effective, region_warnings = sampling_region(key, g, area, int(n), ids, spec)
+        warnings += region_warnings
+        cover = _cover_for_design(region, effective, int(n), spec, frame_input.cover_method)
+        out.append(PreparedStratum(key, label, g, area, region, effective, cover, int(n), ids))
+    return PreparedFrame(tuple(out), tuple(warnings), usable.skipped_ids, usable.repaired_ids)
 
 
 def _overlap_problems(keys, geometries):
@@ -858,6 +996,139 @@ def systematic_grid(region, spacing, rng, bearing=RANDOM_BEARING, cover=None):
 # ----------------------------------------------------------------------------
 # the layout
 # ----------------------------------------------------------------------------
+def _check_room_for_spacing(strata, spec):
+    """Fail early where even the densest packing at MIN_SPACING cannot hold a stratum's units."""
+    for st in strata:
+        wanted = st.n + spec.reserve if st.n > 0 else 0
+        if wanted and hexagonal_capacity(st.region, spec.min_spacing, cover=st.cover) < wanted:
+            raise _spacing_error(st, wanted, 0, spec)
+
+
+def grid_stratum_centres(stratum, spec, rng, guard, warnings):
+    """Primaries and reserves of a stratum on its systematic grid (:func:`systematic_grid`).
+
+    The spacing is ``s_h = sqrt(A'_h / n_h)``. With a minimum spacing, grid points closer than it
+    to units of neighbouring strata are dropped and reserves kept only where they clear it.
+    Warnings for dropped units, empty grids and missing reserves are appended to ``warnings``.
+
+    Returns
+    -------
+    (centres, n_primary, spacing, rotation)
+    """
+    st, n, r = stratum, stratum.n, int(spec.reserve)
+    whole = st.key is None  # the frame has no strata: messages name "the frame"
+    spacing = math.sqrt(st.effective_area / n)
+    if guard is not None and spacing < spec.min_spacing:
+        fit = int(st.effective_area // spec.min_spacing**2)
+        raise InputError(
+            message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = "
+                    "{min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: "
+                    "ask for at most that many, or lower MIN_SPACING.")
+                if whole else
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below "
+                    "MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units "
+                    "there: ask for at most that many, or lower MIN_SPACING."),
+                n=n, key=st.key, spacing=spacing, min_spacing=spec.min_spacing, fit=fit),
+            ids=[st.key] if st.key is not None else [],
+        )
+    grid = systematic_grid(st.region, spacing, rng, spec.bearing, cover=st.cover)
+    prim, res = grid.primaries, grid.reserves
+    if guard is not None:
+        ok = guard.take(prim)
+        if not ok.all():
+            warnings.append(message(
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units "
+                    "of a neighbouring stratum.") if whole else
+                QT_TRANSLATE_NOOP("PlotwiseEngine",
+                    "{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units "
+                    "of a neighbouring stratum."), n=int((~ok).sum()), key=st.key))
+        prim = prim[ok]
+        res = res[guard.take(res, r)]
+    else:
+        res = res[:r]
+    if len(prim) == 0:
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. "
+                "Use the simple random or spatially balanced design for small or thin strata.") if whole else
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. "
+                "Use the simple random or spatially balanced design for small or thin strata."),
+            spacing=spacing, key=st.key))
+    if len(res) < r:
+        warnings.append(message(
+            QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "The frame has only {n} of {r} reserve units.") if whole
+            else QT_TRANSLATE_NOOP("PlotwiseEngine",
+                "Stratum {key} has only {n} of {r} reserve units."), n=len(res), r=r, key=st.key))
+    return np.concatenate([prim, res]), len(prim), spacing, grid.rotation
+
+
+def _stratum_units(stratum, spec, rng, guard, warnings):
+    """Centres (primaries then reserves), unit bearings, and the stratum's summary."""
+    st, n = stratum, stratum.n
+    r = int(spec.reserve) if n > 0 else 0
+    spacing = rotation = float("nan")
+    if n == 0:
+        centres, n_primary = np.zeros((0, 2)), 0
+    elif spec.design == SYSTEMATIC_GRID:
+        centres, n_primary, spacing, rotation = grid_stratum_centres(st, spec, rng, guard, warnings)
+    else:
+        draw = simple_random_centres if spec.design == SIMPLE_RANDOM else balanced_centres
+        centres = draw(st, n + r, rng, guard)
+        if len(centres) < n + r:
+            raise _spacing_error(st, n + r, len(centres), spec)
+        n_primary = n
+    m = len(centres)
+    if spec.bearing == RANDOM_BEARING:
+        bearings = rng.uniform(0.0, 360.0, m)
+    else:
+        bearings = np.full(m, float(spec.bearing))
+    a = spec.unit_area
+    if n > 0:
+        incl = n * a / st.effective_area if a > 0 else n / st.effective_area  # a NaN: density
+    else:
+        incl = float("nan")
+    summary = StratumSummary(st.key, st.label, st.area, st.effective_area, n, n_primary, m - n_primary, incl,
+                             spacing, rotation)
+    return centres, bearings, summary
+
+
+def _assemble_layout(strata, drawn, spec, crs, warnings):
+    """The :class:`Layout` from each stratum's ``(centres, bearings, summary)``, in stratum order."""
+    unit_id, stratum, role, design = [], [], [], []
+    for st, (centres, _, s) in zip(strata, drawn):
+        m = len(centres)
+        design += [design_record(spec.design, spec.min_spacing, spec.radius, s.spacing)] * m
+        template = f"{st.label}-%0{max(3, len(str(m)))}d"  # S1-001, S1-002, ...
+        unit_id += [template % k for k in range(1, m + 1)]
+        stratum += [st.key] * m
+        role += [PRIMARY] * s.n_primary + [RESERVE] * (m - s.n_primary)
+    if drawn:
+        draw_ord = np.concatenate([np.arange(1, len(c) + 1) for c, _, _ in drawn])
+        centres = np.concatenate([c for c, _, _ in drawn])
+        bearing = np.concatenate([b for _, b, _ in drawn])
+        incl_p = np.concatenate([np.full(len(c), s.incl_p) for c, _, s in drawn])
+    else:
+        draw_ord, centres, bearing, incl_p = np.zeros(0, int), np.zeros((0, 2)), np.zeros(0), np.zeros(0)
+    weight = np.where(incl_p > 0, 1.0 / np.where(incl_p > 0, incl_p, 1.0), np.nan)
+    area_m2 = np.full(len(unit_id), spec.unit_area)
+    if crs is not None and len(centres):
+        lon, lat = lonlat_transformer(crs).transform(centres[:, 0], centres[:, 1])
+        lon, lat = np.asarray(lon, dtype=float), np.asarray(lat, dtype=float)
+    else:
+        lon = lat = np.full(len(unit_id), np.nan)
+    outlines = unit_outlines(spec.shape, centres, bearing, spec.size)
+    return Layout(
+        tuple(unit_id), tuple(stratum), tuple(role), draw_ord.astype(int), centres, bearing, area_m2, incl_p, weight,
+        lon, lat, outlines, spec, tuple(s for _, _, s in drawn), tuple(warnings), tuple(design),
+    )
+
+
 def draw_layout(frame, spec, rng, crs=None, progress=None):
     """Draw the units of every stratum.
 
@@ -885,122 +1156,21 @@ def draw_layout(frame, spec, rng, crs=None, progress=None):
     strata = frame.strata if isinstance(frame, PreparedFrame) else tuple(frame)
     warnings = list(frame.warnings) if isinstance(frame, PreparedFrame) else []
     guard = SpacingGuard(spec.min_spacing) if spec.min_spacing > 0 else None
-    a = spec.unit_area
-    parts = []
-    summaries = []
-    if guard is not None and spec.design != SYSTEMATIC_GRID:  # fail early where even a dense packing cannot hold the units
-        for st in strata:
-            wanted = st.n + spec.reserve if st.n > 0 else 0
-            if wanted and hexagonal_capacity(st.region, spec.min_spacing, cover=st.cover) < wanted:
-                raise _spacing_error(st, wanted, 0, spec)
+    if guard is not None and spec.design != SYSTEMATIC_GRID:
+        _check_room_for_spacing(strata, spec)
+    drawn = []
     for h, st in enumerate(strata):
         if progress is not None and progress(h / max(len(strata), 1)):
             raise Cancelled("Cancelled while drawing the layout.")
-        n = st.n
-        r = int(spec.reserve) if n > 0 else 0
-        whole = st.key is None  # the frame has no strata: messages name "the frame"
-        spacing = rotation = float("nan")
-        if n == 0:
-            centres = np.zeros((0, 2))
-            n_primary = 0
-        elif spec.design == SYSTEMATIC_GRID:
-            spacing = math.sqrt(st.effective_area / n)
-            if guard is not None and spacing < spec.min_spacing:
-                fit = int(st.effective_area // spec.min_spacing**2)
-                raise InputError(
-                    message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                        "The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = "
-                        "{min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: "
-                        "ask for at most that many, or lower MIN_SPACING.")
-                        if whole else
-                        QT_TRANSLATE_NOOP("PlotwiseEngine",
-                        "The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below "
-                        "MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units "
-                        "there: ask for at most that many, or lower MIN_SPACING."),
-                        n=n, key=st.key, spacing=spacing, min_spacing=spec.min_spacing, fit=fit),
-                    ids=[st.key] if st.key is not None else [],
-                )
-            grid = systematic_grid(st.region, spacing, rng, spec.bearing, cover=st.cover)
-            rotation = grid.rotation
-            prim = grid.primaries
-            res = grid.reserves
-            if guard is not None:
-                ok = guard.take(prim)
-                if not ok.all():
-                    warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                        "{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units "
-                        "of a neighbouring stratum.") if whole else
-                        QT_TRANSLATE_NOOP("PlotwiseEngine",
-                            "{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units "
-                            "of a neighbouring stratum."), n=int((~ok).sum()), key=st.key))
-                prim = prim[ok]
-                res = res[guard.take(res, r)]
-            else:
-                res = res[:r]
-            if len(prim) == 0:
-                warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                    "No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. "
-                    "Use the simple random or spatially balanced design for small or thin strata.") if whole else
-                    QT_TRANSLATE_NOOP("PlotwiseEngine",
-                        "No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. "
-                        "Use the simple random or spatially balanced design for small or thin strata."),
-                    spacing=spacing, key=st.key))
-            if len(res) < r:
-                warnings.append(message(
-                    QT_TRANSLATE_NOOP("PlotwiseEngine", "The frame has only {n} of {r} reserve units.") if whole
-                    else QT_TRANSLATE_NOOP("PlotwiseEngine",
-                        "Stratum {key} has only {n} of {r} reserve units."), n=len(res), r=r, key=st.key))
-            n_primary = len(prim)
-            centres = np.concatenate([prim, res])
-        else:
-            draw = simple_random_centres if spec.design == SIMPLE_RANDOM else balanced_centres
-            centres = draw(st, n + r, rng, guard)
-            if len(centres) < n + r:
-                raise _spacing_error(st, n + r, len(centres), spec)
-            n_primary = n
-        m = len(centres)
-        if spec.bearing == RANDOM_BEARING:
-            bearings = rng.uniform(0.0, 360.0, m)
-        else:
-            bearings = np.full(m, float(spec.bearing))
-        if n > 0:
-            incl = n * a / st.effective_area if a > 0 else n / st.effective_area  # a NaN: density
-        else:
-            incl = float("nan")
-        summaries.append(
-            StratumSummary(st.key, st.label, st.area, st.effective_area, n, n_primary, m - n_primary, incl, spacing, rotation)
-        )
-        width = max(3, len(str(m)))
-        ids = tuple(f"{st.label}-{k:0{width}d}" for k in range(1, m + 1))
-        roles = tuple([PRIMARY] * n_primary + [RESERVE] * (m - n_primary))
-        parts.append((st.key, ids, roles, centres, bearings, incl,
-                      design_record(spec.design, spec.min_spacing, spec.radius, spacing)))
-    if not parts or sum(len(p[1]) for p in parts) == 0:
-        centres = np.zeros((0, 2))
-    unit_id = tuple(i for p in parts for i in p[1])
-    stratum = tuple(p[0] for p in parts for _ in p[1])
-    role = tuple(x for p in parts for x in p[2])
-    draw_ord = np.concatenate([np.arange(1, len(p[1]) + 1) for p in parts]) if parts else np.zeros(0, int)
-    centres = np.concatenate([p[3] for p in parts]) if parts else np.zeros((0, 2))
-    bearing = np.concatenate([p[4] for p in parts]) if parts else np.zeros(0)
-    incl_p = np.concatenate([np.full(len(p[1]), p[5]) for p in parts]) if parts else np.zeros(0)
-    weight = np.where(incl_p > 0, 1.0 / np.where(incl_p > 0, incl_p, 1.0), np.nan)
-    area_m2 = np.full(len(unit_id), a)
-    if crs is not None and len(centres):
-        lon, lat = lonlat_transformer(crs).transform(centres[:, 0], centres[:, 1])
-        lon, lat = np.asarray(lon, dtype=float), np.asarray(lat, dtype=float)
-    else:
-        lon = lat = np.full(len(unit_id), np.nan)
-    outlines = unit_outlines(spec.shape, centres, bearing, spec.size)
+        drawn.append(_stratum_units(st, spec, rng, guard, warnings))
+    layout = _assemble_layout(strata, drawn, spec, crs, warnings)
     if progress is not None and progress(1.0):
         raise Cancelled("Cancelled while drawing the layout.")
-    return Layout(
-        unit_id, stratum, role, draw_ord.astype(int), centres, bearing, area_m2, incl_p, weight,
-        lon, lat, outlines, spec, tuple(summaries), tuple(warnings), tuple(p[6] for p in parts for _ in p[1]),
-    )
+    return layout
 
 
-def layout_units(geometries, spec, rng, feature_ids=None, strata=None, n_values=None, n_units=None, crs=None, progress=None):
+def layout_units(geometries, spec, rng, feature_ids=None, strata=None, n_values=None, n_units=None, crs=None,
+                 progress=None):
     """:func:`prepare_strata` then :func:`draw_layout` in one call."""
     frame = prepare_strata(geometries, feature_ids, strata, n_values, n_units, spec)
     return draw_layout(frame, spec, rng, crs=crs, progress=progress)
