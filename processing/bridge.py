@@ -252,21 +252,28 @@ def write_rows(sink, geometries_wkb, rows, feedback=None, progress_range=(0.0, 1
 
     ``rows`` hold plain Python values aligned with the sink's fields (NULL already in place):
     see :func:`sink_value`. A geometry of None writes a feature without geometry.
+
+    One chunk's worth of ``QgsFeature`` objects and one ``QgsGeometry`` are made and refilled for
+    every chunk: a sink keeps copies of what it is given (the host's features share their data
+    and copy it when changed), and making a host object is most of the cost of a feature.
     """
     total = max(len(rows), 1)
     start, end = progress_range
+    pool = [QgsFeature() for _ in range(min(chunk, len(rows)))]
+    geometry = QgsGeometry()
+    set_geometry, set_attributes, from_wkb = QgsFeature.setGeometry, QgsFeature.setAttributes, QgsGeometry.fromWkb
     for first in range(0, len(rows), chunk):
         if feedback is not None and feedback.isCanceled():
             return False
-        features = []
-        for wkb, row in zip(geometries_wkb[first:first + chunk], rows[first:first + chunk]):
-            feature = QgsFeature()
-            if wkb is not None:
-                geometry = QgsGeometry()
-                geometry.fromWkb(wkb)
-                feature.setGeometry(geometry)
-            feature.setAttributes(row)
-            features.append(feature)
+        block = rows[first:first + chunk]
+        features = pool[:len(block)]
+        for feature, wkb, row in zip(features, geometries_wkb[first:first + chunk], block):
+            if wkb is None:
+                feature.clearGeometry()
+            else:
+                from_wkb(geometry, wkb)
+                set_geometry(feature, geometry)
+            set_attributes(feature, row)
         sink.addFeatures(features, compat.FAST_INSERT)
         if feedback is not None:
             feedback.setProgress(start + (end - start) * min(first + chunk, total) / total)

@@ -3,7 +3,6 @@ import math
 
 import numpy as np
 from qgis.core import (
-    QgsFeatureRequest,
     QgsField,
     QgsProcessingException,
     QgsProcessingParameterBoolean,
@@ -13,20 +12,16 @@ from qgis.core import (
     QgsProcessingParameterField,
     QgsProcessingParameterFileDestination,
     QgsProcessingParameterNumber,
-    Qgis,
 )
 from shapely.geometry import LineString, Polygon
 
 from ...plugin import compat
 from .. import bridge
+from ..engine import geometry
 from ..engine import layout as engine
 from ..report import MapLayer, category_colour, format_number, map_svg
 from ..report.style import INK, MUTED
 from .base import PlotwiseAlgorithm
-
-NO_GEOMETRY_CHECK = getattr(getattr(Qgis, "InvalidGeometryCheck", None), "NoCheck", None)
-if NO_GEOMETRY_CHECK is None:
-    NO_GEOMETRY_CHECK = QgsFeatureRequest.GeometryNoCheck
 
 REFERENCES = (
     "Robertson, B. L., Brown, J. A., McDonald, T. & Jaksons, P. (2013). BAS: Balanced acceptance "
@@ -188,25 +183,17 @@ class LayoutUnits(PlotwiseAlgorithm):
         self.add_report_parameter()
 
     # -- run -------------------------------------------------------------------------
-    def _field_name(self, parameters, name, context, source):
-        value = self.parameterAsString(parameters, name, context)
-        if not value:
-            return None
-        if source.fields().lookupField(value) < 0:
-            raise QgsProcessingException(
-                self.tr("Layer '{layer}' has no field '{field}' ({param}). Choose an existing field.").format(
-                    layer=source.sourceName(), field=value, param=name
-                )
-            )
-        return value
+    def _field_name(self, parameters, name, context):
+        """The chosen field, or None (bridge.read_features checks that it exists)."""
+        return self.parameterAsString(parameters, name, context) or None
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
         source = self.parameterAsSource(parameters, self.FRAME, context)
         if source is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.FRAME))
         layer_name = source.sourceName() or self.FRAME
-        stratum_field = self._field_name(parameters, self.STRATUM_FIELD, context, source)
-        n_field = self._field_name(parameters, self.N_FIELD, context, source)
+        stratum_field = self._field_name(parameters, self.STRATUM_FIELD, context)
+        n_field = self._field_name(parameters, self.N_FIELD, context)
         n_units = self.parameterAsInt(parameters, self.N_UNITS, context)
         inside = self.parameterAsBool(parameters, self.INSIDE, context)
         with self.engine_errors():
@@ -219,19 +206,14 @@ class LayoutUnits(PlotwiseAlgorithm):
                 min_spacing=self.parameterAsDouble(parameters, self.MIN_SPACING, context),
                 reserve=self.parameterAsInt(parameters, self.RESERVE, context),
             )
-        if n_field is None and n_units < 1:
-            raise QgsProcessingException(
-                self.tr("Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.")
-            )
         seeded = self.seeded_generator(parameters, context, feedback)
         crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, layer_name)
         projected_from = source.sourceCrs().authid() if crs != source.sourceCrs() else None
         feedback.setProgress(2)
 
-        source.setInvalidGeometryCheck(NO_GEOMETRY_CHECK)
-        records = bridge.read_features(
+        records = bridge.read_features(  # the engine repairs what the host's validity check flags
             source, crs, context, feedback, [f for f in (stratum_field, n_field) if f], layer_name,
-            repair=False, drop_empty=False,
+            repair=False, drop_empty=False, check_validity=True,
         )
         if feedback.isCanceled():
             raise self.cancelled_error()
@@ -247,6 +229,7 @@ class LayoutUnits(PlotwiseAlgorithm):
                 spec=spec,
                 stratum_field=self.tr("Stratum field '{field}' of layer '{layer}'").format(field=stratum_field, layer=layer_name),
                 n_field=self.tr("Units field '{field}' of layer '{layer}'").format(field=n_field, layer=layer_name),
+                valid=records.valid,
             )
             feedback.setProgress(30)
             result = engine.draw_layout(
@@ -437,8 +420,8 @@ class LayoutUnits(PlotwiseAlgorithm):
         minx, miny, maxx, maxy = np.array([s.geometry.bounds for s in frame.strata]).T
         pixel = max(maxx.max() - minx.min(), maxy.max() - miny.min(), 1.0) / 900.0
         geoms = []
-        for s in frame.strata:  # a fast Douglas-Peucker pass first: the map needs half a pixel, not every vertex
-            quick = s.geometry.simplify(0.5 * pixel, preserve_topology=False)
+        for s in frame.strata:  # thinned, then a fast Douglas-Peucker pass: the map needs half a pixel
+            quick = geometry.thinned_outline(s.geometry).simplify(0.5 * pixel, preserve_topology=False)
             geoms.append(quick if not quick.is_empty else s.geometry)
         fills = tuple(category_colour(i) for i in range(len(geoms)))
         legend = tuple((self._stratum_text(s.key), category_colour(i)) for i, s in enumerate(frame.strata))

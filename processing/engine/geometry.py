@@ -230,6 +230,27 @@ def listed_overlaps(names, pairs, m2_per_unit=1.0, unit="m²", limit=20):
     return listed
 
 
+def thinned_outline(geometry, max_vertices=8000):
+    """``geometry`` with its long rings thinned to every ``k``-th vertex, for a map at screen scale.
+
+    ``k = ceil(vertices / max_vertices)``; rings of fewer than ``8 k`` vertices are kept whole. On a
+    900-pixel map a ring of tens of thousands of vertices has many per pixel: every ``k``-th keeps its
+    look, and the simplification that follows (GEOS Douglas-Peucker, costly on saw-tooth outlines)
+    gets a few thousand. The result is for drawing only: it may be invalid.
+    """
+    polygons = polygons_of(geometry)
+    total = sum(len(p.exterior.coords) + sum(len(r.coords) for r in p.interiors) for p in polygons)
+    if total <= max_vertices:
+        return geometry
+    k = int(np.ceil(total / max_vertices))
+
+    def thin(ring):
+        xy = np.asarray(ring.coords)[:, :2]
+        return xy if len(xy) < 8 * k else np.vstack([xy[:-1:k], xy[:1]])
+
+    return as_polygonal([Polygon(thin(p.exterior), [thin(r) for r in p.interiors]) for p in polygons])
+
+
 def inward_buffer(geometry, distance, quad_segs=16):
     """The part of ``geometry`` farther than ``distance`` from its boundary.
 

@@ -233,3 +233,17 @@ def test_systematic_grid_on_a_hair_thin_stratum_is_an_error_not_a_memory_failure
     with pytest.raises(InputError, match="candidate points"):
         L.draw_layout(frame, L.LayoutSpec(design=L.SYSTEMATIC_GRID), np.random.default_rng(1))
 
+
+
+def test_thinned_outline_for_the_report_map_stays_within_a_pixel():
+    # a smooth 50,000-vertex outline of 12 km (invented); the report map draws it 900 pixels wide
+    t = np.linspace(0, 2 * np.pi, 50_000, endpoint=False)
+    r = 6000 * (1 + 0.25 * np.sin(3 * t) + 0.03 * np.sin(41 * t))
+    hole = Polygon(np.c_[200 * np.cos(t[::1250]), 200 * np.sin(t[::1250])])
+    poly = Polygon(np.c_[r * np.cos(t), r * np.sin(t)], [hole.exterior.coords])
+    thin = L.geo.thinned_outline(poly)
+    pixel = 15_000 / 900
+    assert len(thin.exterior.coords) <= 8001 and len(thin.interiors) == 1
+    assert len(thin.interiors[0].coords) == len(poly.interiors[0].coords)  # a short ring is kept whole
+    assert thin.hausdorff_distance(poly) < 0.5 * pixel  # shapely's Hausdorff distance as the oracle
+    assert L.geo.thinned_outline(box(0, 0, 1, 1)).equals(box(0, 0, 1, 1))

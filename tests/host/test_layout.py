@@ -195,3 +195,94 @@ def test_packed_wkb_reads_back_in_shapely_and_the_host(kind, shape, geom_type):
         host = QgsGeometry()
         host.fromWkb(wkb)
         assert host.asWkb() == wkb
+
+
+def test_write_rows_to_a_geopackage_reads_back_in_ogr(tmp_path):
+    """Several chunks, geometries and empty ones mixed: every feature reads back as written (GDAL/OGR as the reader)."""
+    from plotwise.plugin import compat
+    from plotwise.processing import bridge
+    from qgis.core import QgsCoordinateReferenceSystem, QgsProject, QgsVectorFileWriter
+
+    n = 2500
+    xy = np.random.default_rng(9).uniform(0, 1000, (n, 2))
+    wkb = [None if i % 7 == 3 else w for i, w in enumerate(bridge.wkb_geometries(xy, "point"))]
+    rows = [[f"U-{i:05d}", i, None if i % 5 == 0 else 0.5 * i] for i in range(n)]
+    fields = bridge.make_fields([("unit_id", "string", 24), ("k", "int"), ("value", "double", 20, 3)])
+    path = str(tmp_path / "units.gpkg")
+    options = QgsVectorFileWriter.SaveVectorOptions()
+    options.driverName = "GPKG"
+    writer = QgsVectorFileWriter.create(path, fields, compat.WKB_POINT, QgsCoordinateReferenceSystem("EPSG:32736"),
+                                        QgsProject.instance().transformContext(), options)
+    assert bridge.write_rows(writer, wkb, [[bridge.sink_value(v) for v in row] for row in rows], chunk=1000)
+    del writer  # closes the file
+    ds = ogr.Open(path)
+    features = list(ds.GetLayer(0))
+    assert len(features) == n
+    for i, f in enumerate(features):
+        assert f.GetField("unit_id") == rows[i][0] and f.GetField("k") == i
+        assert (f.GetField("value") is None) == (rows[i][2] is None)
+        g = f.GetGeometryRef()
+        if wkb[i] is None:
+            assert g is None or g.IsEmpty()
+        else:
+            assert (g.GetX(), g.GetY()) == tuple(xy[i])
+
+
+def test_write_rows_to_a_memory_layer_reads_back(tmp_path):
+    from plotwise.processing import bridge
+
+    n = 2300
+    xy = np.random.default_rng(10).uniform(0, 1000, (n, 2))
+    wkb = [None if i % 11 == 5 else w for i, w in enumerate(bridge.wkb_geometries(xy, "point"))]
+    rows = [[f"U-{i:05d}", i] for i in range(n)]
+    layer = QgsVectorLayer("Point?crs=EPSG:32736", "u", "memory")
+    layer.dataProvider().addAttributes(bridge.make_fields([("unit_id", "string", 24), ("k", "int")]).toList())
+    layer.updateFields()
+    assert bridge.write_rows(layer.dataProvider(), wkb, rows, chunk=1000)
+    got = sorted(layer.getFeatures(), key=lambda f: f["k"])
+    assert len(got) == n
+    for i, f in enumerate(got):
+        assert f.attributes() == rows[i]
+        if wkb[i] is None:
+            assert not f.hasGeometry()
+        else:
+            p = f.geometry().asPoint()
+            assert (p.x(), p.y()) == tuple(xy[i])
+
+
+def test_no_units_field_and_no_total_is_the_engine_error(registered):
+    import processing
+
+    with pytest.raises(QgsProcessingException, match="Give N_FIELD"):
+        processing.run("plotwise:layout", base_parameters(strata_layer(), N_FIELD=None, N_UNITS=0))
+
+
+def test_unknown_field_is_named(registered):
+    import processing
+
+    with pytest.raises(QgsProcessingException, match="no field named 'zone'"):
+        processing.run("plotwise:layout", base_parameters(strata_layer(), STRATUM_FIELD="zone"))
+
+
+def test_host_validity_check_decides_what_is_repaired(registered):
+    """A feature the host's GEOS check passes is used as it is; a bow-tie it flags is repaired (shapely as oracle)."""
+    import processing
+    from plotwise.processing import bridge
+    from qgis.core import QgsCoordinateReferenceSystem, QgsProcessingContext, QgsProcessingFeatureSource
+
+    bow = "POLYGON((506000 9000000, 507000 9001000, 507000 9000000, 506000 9001000, 506000 9000000))"
+    layer = strata_layer(STRATA + [(4, 2, bow)])
+    context = QgsProcessingContext()
+    source = QgsProcessingFeatureSource(layer, context)
+    records = bridge.read_features(source, QgsCoordinateReferenceSystem("EPSG:32736"), context, QgsProcessingFeedback(),
+                                   ["stratum"], "strata", repair=False, drop_empty=False, check_validity=True)
+    assert records.valid == tuple(g.is_valid for g in records.geometries) == (True, True, True, False)  # shapely
+    fb = RecordingFeedback()
+    result = processing.run("plotwise:layout", base_parameters(layer, INSIDE=False, MIN_SPACING=0.0), feedback=fb)
+    assert "repaired" in " ".join(fb.warnings)
+    from shapely.validation import make_valid
+
+    repaired = make_valid(shapely_wkt.loads(bow))  # shapely's repair as the oracle: both lobes of the bow-tie
+    units4 = [shapely_wkb.loads(bytes(f.geometry().asWkb()))
+              for f in result["OUTPUT"].getFeatures() if f["stratum"] == 4]
+    assert units4 and all(repaired.contains(u.centroid) for u in units4)
