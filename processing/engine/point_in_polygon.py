@@ -117,9 +117,10 @@ class PointLocator:
         """Inside (1), outside (0) or undecided (-1) for every grid node, row by row."""
         x1, y1, x2, y2 = self.edges.T
         ylo, yhi = np.minimum(y1, y2), np.maximum(y1, y2)
-        # candidate lines, one more on each side for rounding; the exact test below decides
-        r_lo = np.clip(np.floor((ylo - self.y0) / self.ch).astype(np.int64) - 1, 0, self.ny + 1)
-        r_hi = np.clip(np.floor((yhi - self.y0) / self.ch).astype(np.int64) + 2, 0, self.ny + 1)
+        # candidate lines within ``tol`` of the edge's y-range (far more than the division's rounding);
+        # the exact test below decides
+        r_lo = np.clip(np.floor((ylo - self.tol - self.y0) / self.ch).astype(np.int64) + 1, 0, self.ny + 1)
+        r_hi = np.clip(np.floor((yhi + self.tol - self.y0) / self.ch).astype(np.int64) + 1, 0, self.ny + 1)
         edge, row = _expand_ranges(r_lo, r_hi)
         line = self.ys[row]
         keep = (ylo[edge] <= line) & (line < yhi[edge])  # half-open: exact comparisons
