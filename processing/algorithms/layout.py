@@ -39,7 +39,7 @@ REFERENCES = (
     "Chapman & Hall/CRC, ch. 10 (plus sampling at the edges).",
 )
 
-MAX_MAP_UNITS = 5000  # more units than this are drawn as a systematic subset on the report map
+MAX_MAP_UNITS = 3000  # more units than this are drawn as a systematic subset on the report map
 
 
 class LayoutUnits(PlotwiseAlgorithm):

@@ -46,6 +46,8 @@ CELLS_PER_EDGE = 1.0  # cells per edge: build and query cost balance about there
 # average (smooth outlines cross it a few times) it is as fast as the grid and needs no building
 MIN_CROSSINGS_PER_LINE = 48
 MIN_EDGES = 256
+MAX_EDGES = 2_000_000  # beyond this the index would take hundreds of MB: GEOS answers alone
+MAX_CELLS = 2**20
 
 
 def _orientation(ax, ay, bx, by, cx, cy):
@@ -82,6 +84,9 @@ class PointLocator:
     def __init__(self, geometry, rings, fallback):
         self.geometry = geometry
         self.fallback = fallback
+        self.usable = _worth_a_grid(rings)
+        if not self.usable:
+            return
         edges = _ring_edges(rings)
         self.usable = len(edges) >= MIN_EDGES and bool(np.isfinite(edges).all())
         if not self.usable:
@@ -90,8 +95,8 @@ class PointLocator:
         self.minx, self.miny = float(edges[:, [0, 2]].min()), float(edges[:, [1, 3]].min())
         self.maxx, self.maxy = float(edges[:, [0, 2]].max()), float(edges[:, [1, 3]].max())
         width, height = self.maxx - self.minx, self.maxy - self.miny
-        if not (width > 0 and height > 0) or crossings_per_line(edges) < MIN_CROSSINGS_PER_LINE:
-            self.usable = False  # GEOS answers as fast
+        if not (width > 0 and height > 0):
+            self.usable = False
             return
         self._lay_grid(width, height, len(edges))
         self._classify_nodes()
@@ -105,7 +110,7 @@ class PointLocator:
         margin = 1e-6 * max(width, height)
         x0, y0 = self.minx - margin, self.miny - margin
         full_w, full_h = width + 2 * margin, height + 2 * margin
-        side = np.sqrt(full_w * full_h / max(CELLS_PER_EDGE * n_edges, 16))
+        side = np.sqrt(full_w * full_h / min(max(CELLS_PER_EDGE * n_edges, 16), MAX_CELLS))
         self.nx = int(min(max(np.ceil(full_w / side), 1), MAX_CELLS_PER_SIDE))
         self.ny = int(min(max(np.ceil(full_h / side), 1), MAX_CELLS_PER_SIDE))
         self.cw, self.ch = full_w / self.nx, full_h / self.ny
@@ -236,11 +241,20 @@ class PointLocator:
         return crossings, unsure
 
 
-def crossings_per_line(edges):
+def crossings_per_line(rings):
     """Mean number of edges that a horizontal line through the bounding box crosses: ``sum |dy| / height``."""
-    y1, y2 = edges[:, 1], edges[:, 3]
-    height = max(y1.max(), y2.max()) - min(y1.min(), y2.min())
-    return float(np.abs(y2 - y1).sum() / height) if height > 0 else 0.0
+    rings = [r for r in rings if len(r) >= 2]
+    if not rings:
+        return 0.0
+    height = max(r[:, 1].max() for r in rings) - min(r[:, 1].min() for r in rings)
+    rise = sum(float(np.abs(np.diff(r[:, 1])).sum()) for r in rings)
+    return rise / height if height > 0 else 0.0
+
+
+def _worth_a_grid(rings):
+    """Whether the grid beats GEOS's own index: enough edges, not too many, many per horizontal line."""
+    n_edges = sum(max(len(r) - 1, 0) for r in rings)
+    return MIN_EDGES <= n_edges <= MAX_EDGES and crossings_per_line(rings) >= MIN_CROSSINGS_PER_LINE
 
 
 def _expand_ranges(lo, hi):
