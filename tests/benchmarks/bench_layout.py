@@ -177,7 +177,8 @@ def main():
     strata = eight_strata()
     n = [125] * 8
     spec = L.LayoutSpec(design=L.SPATIALLY_BALANCED, reserve=25)
-    engine = timed(lambda: L.layout_units(strata, spec, np.random.default_rng(2), strata=list(range(1, 9)), n_values=n, crs=CRS))
+    engine = timed(lambda: L.layout_units(strata, spec, np.random.default_rng(2), strata=list(range(1, 9)), n_values=n,
+                                          crs=CRS))
     layer = memory_layer(strata, list(range(1, 9)), n)
     whole = timed(lambda: processing.run("plotwise:layout", {
         "FRAME": layer, "STRATUM_FIELD": "stratum", "N_FIELD": "n_alloc", "DESIGN": 2, "SHAPE": 1, "SIZE": 50.0,
