@@ -195,17 +195,7 @@ class LayoutUnits(PlotwiseAlgorithm):
         stratum_field = self._field_name(parameters, self.STRATUM_FIELD, context)
         n_field = self._field_name(parameters, self.N_FIELD, context)
         n_units = self.parameterAsInt(parameters, self.N_UNITS, context)
-        inside = self.parameterAsBool(parameters, self.INSIDE, context)
-        with self.engine_errors():
-            spec = engine.LayoutSpec(
-                design=self.parameterAsEnum(parameters, self.DESIGN, context),
-                shape=self.parameterAsEnum(parameters, self.SHAPE, context),
-                size=self.parameterAsDouble(parameters, self.SIZE, context),
-                bearing=self.parameterAsDouble(parameters, self.BEARING, context),
-                inside=inside,
-                min_spacing=self.parameterAsDouble(parameters, self.MIN_SPACING, context),
-                reserve=self.parameterAsInt(parameters, self.RESERVE, context),
-            )
+        spec = self._layout_spec(parameters, context)
         seeded = self.seeded_generator(parameters, context, feedback)
         crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, layer_name)
         projected_from = source.sourceCrs().authid() if crs != source.sourceCrs() else None
@@ -247,14 +237,9 @@ class LayoutUnits(PlotwiseAlgorithm):
             dest_id = self._write_units(parameters, context, feedback, source, stratum_field, result, crs)
         outputs = {self.OUTPUT: dest_id}
         self.style_output(context, dest_id, "units")
-        gpx_path = self.parameterAsFileOutput(parameters, self.OUTPUT_GPX, context)
+        gpx_path = self._write_gpx(parameters, context, feedback, result, crs)
         if gpx_path:
-            waypoints = engine.layout_waypoints(result, bridge.crs_wkt(crs))
-            kinds = [role for role in result.role for _ in range(2 if spec.shape == engine.LINE else 1)]
-            descriptions = [self.translate_message(d) for d in waypoints.description]
-            bridge.write_gpx_waypoints(gpx_path, waypoints.name, waypoints.lon, waypoints.lat, descriptions, kinds)
             outputs[self.OUTPUT_GPX] = gpx_path
-            feedback.pushInfo(self.tr("{n} waypoints written to {path}").format(n=len(waypoints.name), path=gpx_path))
         feedback.setProgress(90)
         for s in result.strata:
             feedback.pushInfo(
@@ -269,6 +254,30 @@ class LayoutUnits(PlotwiseAlgorithm):
             outputs[self.REPORT] = path
         feedback.setProgress(100)
         return outputs
+
+    def _layout_spec(self, parameters, context):
+        with self.engine_errors():
+            return engine.LayoutSpec(
+                design=self.parameterAsEnum(parameters, self.DESIGN, context),
+                shape=self.parameterAsEnum(parameters, self.SHAPE, context),
+                size=self.parameterAsDouble(parameters, self.SIZE, context),
+                bearing=self.parameterAsDouble(parameters, self.BEARING, context),
+                inside=self.parameterAsBool(parameters, self.INSIDE, context),
+                min_spacing=self.parameterAsDouble(parameters, self.MIN_SPACING, context),
+                reserve=self.parameterAsInt(parameters, self.RESERVE, context),
+            )
+
+    def _write_gpx(self, parameters, context, feedback, result, crs):
+        """The GPS waypoints, when OUTPUT_GPX is set: its path, else None."""
+        gpx_path = self.parameterAsFileOutput(parameters, self.OUTPUT_GPX, context)
+        if not gpx_path:
+            return None
+        waypoints = engine.layout_waypoints(result, bridge.crs_wkt(crs))
+        kinds = [role for role in result.role for _ in range(2 if result.spec.shape == engine.LINE else 1)]
+        descriptions = [self.translate_message(d) for d in waypoints.description]
+        bridge.write_gpx_waypoints(gpx_path, waypoints.name, waypoints.lon, waypoints.lat, descriptions, kinds)
+        feedback.pushInfo(self.tr("{n} waypoints written to {path}").format(n=len(waypoints.name), path=gpx_path))
+        return gpx_path
 
     def _stratum_text(self, key):
         return self.tr("the frame") if key is None else self.tr("stratum {key}").format(key=key)
