@@ -230,7 +230,7 @@ def listed_overlaps(names, pairs, m2_per_unit=1.0, unit="m²", limit=20):
     return listed
 
 
-def thinned_outline(geometry, max_vertices=4000):
+def thinned_outline(geometry, max_vertices=2000):
     """``geometry`` with its long rings thinned to every ``k``-th vertex, for a map at screen scale.
 
     ``k = ceil(vertices / max_vertices)``; rings of fewer than ``8 k`` vertices are kept whole. On a

@@ -326,7 +326,7 @@ class Layout:
 
     @property
     def is_primary(self):
-        return np.array([r == PRIMARY for r in self.role], dtype=bool)
+        return np.asarray(self.role) == PRIMARY if self.role else np.zeros(0, dtype=bool)
 
 
 @dataclass(frozen=True)
