@@ -252,3 +252,14 @@ def test_thinned_outline_for_the_report_map_stays_within_a_pixel():
     assert L.geo.contains_xy(band, vertices[:, 0], vertices[:, 1]).all()
     assert poly.symmetric_difference(thin).area < 0.5 * pixel * poly.exterior.length
     assert L.geo.thinned_outline(box(0, 0, 1, 1)).equals(box(0, 0, 1, 1))
+
+
+def test_validity_known_to_the_caller_is_not_checked_again_and_changes_nothing():
+    bow = Polygon([(0, 0), (200, 200), (200, 0), (0, 200)])
+    geoms = [bow, box(300, 0, 500, 200), box(600, 0, 700, 100)]
+    flags = [g.is_valid for g in geoms]  # shapely's (GEOS) validity check as the caller's
+    assert flags == [False, True, True]
+    checked = L.prepare_strata(geoms, strata=[1, 2, 3], n_units=9)
+    trusted = L.prepare_strata(geoms, strata=[1, 2, 3], n_units=9, valid=flags)
+    assert checked.warnings == trusted.warnings and checked.repaired_ids == trusted.repaired_ids == (0,)
+    assert [s.geometry.equals(t.geometry) for s, t in zip(checked.strata, trusted.strata)] == [True] * 3
