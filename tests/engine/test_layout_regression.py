@@ -1,10 +1,11 @@
-"""Regression check: a fixed seed gives the same units as the layout code of main at 7cd9fd5.
+"""Regression check: a fixed seed gives the same units as the layout code of main at e528c56.
 
 This is no correctness check (the statistical and geometric checks live in test_layout_draws.py,
 test_layout_engine.py and test_geometry.py): it guards reproducibility, the promise that a seed
 recorded in last season's report gives the same units again. The fingerprints below were recorded
 with the code before the point-in-polygon and validity work (shapely 1.8.5 and 2.0.7 gave the same
-values), by running this file as a script:
+values; they were first recorded at 7cd9fd5, and again at e528c56, whose plus sampling and circle
+outlines changed the units on purpose), by running this file as a script:
 
     .venv/bin/python tests/engine/test_layout_regression.py
 """
@@ -56,22 +57,27 @@ CASES = {
     "bas_saw_transects": ([_ragged(5000, 2)], None, None, 80,
                           L.LayoutSpec(design=2, shape=3, size=100, inside=True, reserve=4), "auto"),
     "bas_box": ([box(0, 0, 1000, 500)], None, None, 64, L.LayoutSpec(design=2, reserve=4), "auto"),
+    "srs_plus_squares": ([_with_hole()], None, None, 120, L.LayoutSpec(design=0, shape=1, size=30, bearing=-1), "auto"),
+    "bas_plus_circles_saw": ([_ragged(5000, 6)], None, None, 90, L.LayoutSpec(design=2, shape=2, size=15, reserve=5),
+                             "auto"),
     "srs_merged_features": ([box(0, 0, 500, 500), box(500, 0, 900, 300), _ragged(800, 5, radius=300, x0=2000)],
                             [7, 7, 8], [25, 25, 10], None, L.LayoutSpec(design=0, reserve=3), "auto"),
 }
 
-EXPECTED = {  # recorded at 7cd9fd5 with shapely 1.8.5 and 2.0.7
-    "bas_box": "261a32147921336641217d81",
-    "bas_saw_transects": "2cdba1c7c37f1ba1bc4d0ae3",
-    "bas_three_strata_spacing": "859c5d78ae11c319fed6b824",
-    "grid_box_bearing0": "1237b3106a4ccb4f79df66c5",
-    "grid_hole_random": "d09405856dd579005f52c310",
-    "grid_squares_inside": "0dbc7dd6ffd19490dd2e9a34",
-    "srs_circles_inside_spacing": "ec22b7c1b6177f99e9893027",
-    "srs_hole_delaunay": "5d0db3b21c40e17dcce7b087",
-    "srs_merged_features": "807e58c163bc14127870e3e6",
-    "srs_saw_auto": "df4ef712928c1a5b4c133425",
-    "srs_saw_bbox": "bc83d1c8ccbfba796aa1de93",
+EXPECTED = {  # recorded at e528c56 with shapely 1.8.5 and 2.0.7
+    "bas_box": "e27aa31902cdfd464d770842",
+    "bas_plus_circles_saw": "74f220812dbd0e760a108186",
+    "bas_saw_transects": "e1f163c5b2440f6011530288",
+    "bas_three_strata_spacing": "8ac708473a8ebc01449eb2ad",
+    "grid_box_bearing0": "5a4fe67588a3e5f00df4702a",
+    "grid_hole_random": "2b719e80927d66b5a49ac5fb",
+    "grid_squares_inside": "50e81447c16c399a22954f2d",
+    "srs_circles_inside_spacing": "67c1c272ac03e7d77596b806",
+    "srs_hole_delaunay": "71ec40508d57ddeef8e49b93",
+    "srs_merged_features": "bbad15be86f49441cb305569",
+    "srs_plus_squares": "c8ef78ffbba7f3aab71f09fe",
+    "srs_saw_auto": "da38b0a82e8952e029a6a459",
+    "srs_saw_bbox": "9aae77551432ebfc12816cd2",
 }
 
 CAPACITY_CASES = {  # hexagonal_capacity: lattice points fall exactly on the edges of boxes
@@ -80,7 +86,7 @@ CAPACITY_CASES = {  # hexagonal_capacity: lattice points fall exactly on the edg
     "saw": (_ragged(5000, 1), 70.0),
 }
 
-EXPECTED_CAPACITY = {  # recorded at 7cd9fd5
+EXPECTED_CAPACITY = {  # recorded at 7cd9fd5 and again at e528c56
     "box": 234,
     "box_with_hole": 1064,
     "saw": 850,
@@ -92,6 +98,7 @@ def fingerprint(layout):
     h = hashlib.sha256()
     h.update("|".join(layout.unit_id).encode())
     h.update("|".join(layout.role).encode())
+    h.update("|".join(str(d) for d in getattr(layout, "design", ())).encode())
     for array in (layout.centres, layout.bearing, layout.incl_p, layout.outlines):
         h.update(np.ascontiguousarray(array, dtype="<f8").tobytes())
     return h.hexdigest()[:24]
