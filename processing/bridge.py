@@ -280,6 +280,49 @@ def write_rows(sink, geometries_wkb, rows, feedback=None, progress_range=(0.0, 1
     return True
 
 
+def write_columns(sink, geometries_wkb, columns, feedback=None, progress_range=(0.0, 100.0), chunk=2000):
+    """Like :func:`write_rows`, from one sequence of sink-ready values per field (``columns``).
+
+    A layout's units share most of their values (stratum, role, inclusion probability, design
+    record): columns that hold one value throughout are set once per refilled feature, and only
+    the others per feature, which costs the host a fraction of a whole row. With more varying
+    columns than constant ones the rows are written as they are.
+    """
+    n = len(geometries_wkb)
+    if n == 0 or any(len(c) != n for c in columns):
+        return write_rows(sink, geometries_wkb, [list(r) for r in zip(*columns)], feedback, progress_range, chunk)
+    varying = [j for j, c in enumerate(columns) if c.count(c[0]) != n]
+    if 2 * len(varying) > len(columns):
+        return write_rows(sink, geometries_wkb, [list(r) for r in zip(*columns)], feedback, progress_range, chunk)
+    first_row = [c[0] for c in columns]
+    start, end = progress_range
+    pool = []
+    for _ in range(min(chunk, n)):
+        feature = QgsFeature()
+        feature.setAttributes(first_row)
+        pool.append(feature)
+    geometry = QgsGeometry()
+    set_geometry, set_attribute, from_wkb = QgsFeature.setGeometry, QgsFeature.setAttribute, QgsGeometry.fromWkb
+    for first in range(0, n, chunk):
+        if feedback is not None and feedback.isCanceled():
+            return False
+        block = geometries_wkb[first:first + chunk]
+        features = pool[:len(block)]
+        values = zip(*[columns[j][first:first + chunk] for j in varying]) if varying else [()] * len(block)
+        for feature, wkb, row in zip(features, block, values):
+            if wkb is None:
+                feature.clearGeometry()
+            else:
+                from_wkb(geometry, wkb)
+                set_geometry(feature, geometry)
+            for j, value in zip(varying, row):
+                set_attribute(feature, j, value)
+        sink.addFeatures(features, compat.FAST_INSERT)
+        if feedback is not None:
+            feedback.setProgress(start + (end - start) * min(first + chunk, n) / n)
+    return True
+
+
 def _sink_value(value):
     if value is None:
         return NULL

@@ -314,8 +314,8 @@ class LayoutUnits(PlotwiseAlgorithm):
             list(result.design), [spec.edge] * len(result), [float(spec.reach)] * len(result),
         ]
         kind = {engine.POINT: "point", engine.LINE: "line"}.get(spec.shape, "polygon")
-        written = bridge.write_rows(sink, bridge.wkb_geometries(result.outlines, kind), [list(r) for r in zip(*columns)],
-                                    feedback, (70.0, 85.0))
+        written = bridge.write_columns(sink, bridge.wkb_geometries(result.outlines, kind), columns, feedback,
+                                       (70.0, 85.0))
         if not written:
             raise self.cancelled_error()
         return dest_id

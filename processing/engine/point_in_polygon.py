@@ -41,7 +41,7 @@ _EPS = np.finfo(float).eps / 2.0  # unit roundoff, 2**-53
 _ORIENT_BOUND = 4.0 * (3.0 + 16.0 * _EPS) * _EPS  # Shewchuk (1997) ccwerrboundA, times 4
 MAX_PAIRS = 1_000_000  # point-edge pairs tested at once (memory bound, about 100 MB of work arrays)
 MAX_CELLS_PER_SIDE = 4096
-CELLS_PER_EDGE = 1.0  # cells per edge: build and query cost balance about there (measured)
+CELLS_PER_EDGE = 0.5  # cells per edge: build and query cost balance about there (measured)
 # GEOS's indexed ray count examines the edges a horizontal line crosses; below this many on
 # average (smooth outlines cross it a few times) it is as fast as the grid and needs no building
 MIN_CROSSINGS_PER_LINE = 48

@@ -287,3 +287,34 @@ def test_host_validity_check_decides_what_is_repaired(registered):
               for f in result["OUTPUT"].getFeatures() if f["stratum"] == 4]
     # plus sampling (INSIDE off): centres lie in the repaired stratum grown by the circles' 20 m reach
     assert units4 and all(repaired.buffer(20.001).contains(u.centroid) for u in units4)
+
+
+def test_write_columns_sets_constant_columns_once_and_reads_back():
+    """Constant and varying columns, NULL among numbers, several chunks: each feature reads back as its row."""
+    from plotwise.processing import bridge
+    from qgis.core import NULL
+
+    n = 2300
+    xy = np.random.default_rng(11).uniform(0, 1000, (n, 2))
+    wkb = [None if i % 13 == 4 else w for i, w in enumerate(bridge.wkb_geometries(xy, "point"))]
+    columns = [
+        [f"U-{i:05d}" for i in range(n)],  # varying
+        [7] * n,  # constant
+        [NULL if i % 3 == 0 else 0.25 * i for i in range(n)],  # NULL first, then numbers
+        ["plus"] * n,  # constant
+        [NULL] * n,  # constant NULL
+    ]
+    layer = QgsVectorLayer("Point?crs=EPSG:32736", "u", "memory")
+    layer.dataProvider().addAttributes(bridge.make_fields(
+        [("unit_id", "string", 24), ("k", "int"), ("value", "double", 20, 3), ("edge", "string", 8),
+         ("count", "int")]).toList())
+    layer.updateFields()
+    assert bridge.write_columns(layer.dataProvider(), wkb, columns, chunk=1000)
+    got = sorted(layer.getFeatures(), key=lambda f: f["unit_id"])
+    assert len(got) == n
+    for i, f in enumerate(got):
+        assert f.attributes() == [c[i] for c in columns]
+        assert f.hasGeometry() == (wkb[i] is not None)
+        if wkb[i] is not None:
+            p = f.geometry().asPoint()
+            assert (p.x(), p.y()) == tuple(xy[i])
