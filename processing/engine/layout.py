@@ -58,6 +58,7 @@ number of units, ``A'_h / s_h**2``.
 from dataclasses import dataclass
 import math
 import re
+import threading
 
 import numpy as np
 from shapely.ops import unary_union
@@ -1098,6 +1099,22 @@ def _stratum_units(stratum, spec, rng, guard, warnings):
     return centres, bearings, summary
 
 
+_TRANSFORMERS = threading.local()  # per thread (pyproj transformers are not shared between threads)
+
+
+def _lonlat(crs):
+    """:func:`crs.lonlat_transformer` of ``crs``, kept for the calling thread's next layouts in the same CRS
+    (making one costs more than transforming ten thousand points)."""
+    kept = getattr(_TRANSFORMERS, "by_crs", None)
+    if kept is None:
+        kept = _TRANSFORMERS.by_crs = {}
+    if crs not in kept:
+        if len(kept) >= 4:
+            kept.clear()
+        kept[crs] = lonlat_transformer(crs)
+    return kept[crs]
+
+
 def _assemble_layout(strata, drawn, spec, crs, warnings):
     """The :class:`Layout` from each stratum's ``(centres, bearings, summary)``, in stratum order."""
     unit_id, stratum, role, design = [], [], [], []
@@ -1118,7 +1135,7 @@ def _assemble_layout(strata, drawn, spec, crs, warnings):
     weight = np.where(incl_p > 0, 1.0 / np.where(incl_p > 0, incl_p, 1.0), np.nan)
     area_m2 = np.full(len(unit_id), spec.unit_area)
     if crs is not None and len(centres):
-        lon, lat = lonlat_transformer(crs).transform(centres[:, 0], centres[:, 1])
+        lon, lat = _lonlat(crs).transform(centres[:, 0], centres[:, 1])
         lon, lat = np.asarray(lon, dtype=float), np.asarray(lat, dtype=float)
     else:
         lon = lat = np.full(len(unit_id), np.nan)
