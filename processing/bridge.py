@@ -24,6 +24,8 @@ from shapely import wkb as shapely_wkb
 from ..plugin import compat
 from .engine.crs import utm_epsg_for_lonlat
 from .engine.geometry_types import polygonal_part
+from .engine.listing import listed_ids as _listed_ids
+from .translation import translated_message
 
 
 # -- geometry conversion -----------------------------------------------------------
@@ -164,13 +166,13 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
         warnings.append(
             QCoreApplication.translate(
                 "PlotwiseBridge", "Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.").format(
-                layer=layer_name, ids=_id_list(repaired))
+                layer=layer_name, ids=listed_ids(repaired))
         )
     if dropped:
         warnings.append(
             QCoreApplication.translate(
                 "PlotwiseBridge", "Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.").format(
-                layer=layer_name, ids=_id_list(dropped))
+                layer=layer_name, ids=listed_ids(dropped))
         )
     for warning in warnings:
         feedback.pushWarning(warning)
@@ -188,14 +190,9 @@ def point_coordinates(records):
     return xy
 
 
-def _id_list(ids, limit=20):
-    ids = [str(i) for i in ids]
-    more = len(ids) - limit
-    more_text = QCoreApplication.translate("PlotwiseBridge", " and {n} more").format(n=more) if more > 0 else ""
-    return ", ".join(ids[:limit]) + more_text
-
-
-id_list = _id_list
+def listed_ids(ids):
+    """Feature ids for a host message: the engine's one listing (``engine.listing``), in the user's language."""
+    return translated_message(_listed_ids(ids))
 
 
 # -- writing -----------------------------------------------------------------------

@@ -47,6 +47,7 @@ from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QColor, QFont
 
 from ..plugin import compat
+from .engine.listing import natural_sorted
 from .report.style import CATEGORY_COLOURS, INK
 
 # -- palette (our own) -----------------------------------------------------------------
@@ -96,23 +97,9 @@ def _line(colour, width=0.8, style="solid"):
     return QgsLineSymbol.createSimple({"line_color": colour, "line_width": str(width), "line_style": style})
 
 
-def _natural_order(values):
-    """Numbers first in numeric order, then text in natural order (stratum 2 before stratum 10)."""
-    def key(value):
-        if isinstance(value, (int, float)) and not isinstance(value, bool):
-            return (0, float(value), "")
-        text = str(value)
-        try:
-            return (0, float(text), text)
-        except ValueError:
-            return (1, 0.0, text)
-
-    return sorted((v for v in values if v is not None and str(v) != "NULL"), key=key)
-
-
 def _unique(layer, field):
     index = layer.fields().lookupField(field)
-    return _natural_order(layer.uniqueValues(index)) if index >= 0 else []
+    return natural_sorted(v for v in layer.uniqueValues(index) if str(v) != "NULL") if index >= 0 else []
 
 
 def _labels_for(layer, field, label_field):

@@ -42,3 +42,17 @@ def remove_translator(translator):
     if translator is not None:
         QCoreApplication.removeTranslator(translator)
         _INSTALLED.pop(translator, None)
+
+
+def translated_message(item):
+    """The user's-language text of an engine :class:`~.engine.errors.Message` (context ``PlotwiseEngine``);
+    any other value as it is. Placeholder values that are messages themselves are translated first."""
+    from .engine.errors import ENGINE_CONTEXT, Message
+
+    if not isinstance(item, Message):
+        return item
+    values = {name: translated_message(value) for name, value in item.values}
+    try:
+        return QCoreApplication.translate(ENGINE_CONTEXT, item.template).format(**values)
+    except (KeyError, IndexError, ValueError):  # a broken translation: the English text
+        return str(item)

@@ -12,8 +12,8 @@ from qgis.PyQt.QtCore import QT_TRANSLATE_NOOP, QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
 from ...plugin import compat
-from ..translation import active_language
-from ..engine.errors import ENGINE_CONTEXT, Cancelled, InputError, Message
+from ..translation import active_language, translated_message
+from ..engine.errors import ENGINE_CONTEXT, Cancelled, InputError
 from ..engine.rng import make_rng
 from ..report import Report
 from .. import styles
@@ -134,13 +134,7 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
 
     def translate_message(self, item):
         """The user's-language text of an engine :class:`Message` (context ``PlotwiseEngine``); a str as is."""
-        if not isinstance(item, Message):
-            return item
-        values = {name: self.translate_message(value) for name, value in item.values}
-        try:
-            return QCoreApplication.translate(ENGINE_CONTEXT, item.template).format(**values)
-        except (KeyError, IndexError, ValueError):  # a broken translation: the English text
-            return str(item)
+        return translated_message(item)
 
     @staticmethod
     @contextlib.contextmanager

@@ -124,13 +124,13 @@ class BuildFrame(PlotwiseAlgorithm):
         if cleaned.repaired_ids:
             warnings.append(
                 self.tr("Layer '{layer}': invalid geometry repaired for feature id(s) {ids}.").format(
-                    layer=label, ids=bridge.id_list(cleaned.repaired_ids)
+                    layer=label, ids=bridge.listed_ids(cleaned.repaired_ids)
                 )
             )
         if cleaned.skipped_ids:
             warnings.append(
                 self.tr("Layer '{layer}': empty or zero-area feature id(s) {ids} skipped.").format(
-                    layer=label, ids=bridge.id_list(cleaned.skipped_ids)
+                    layer=label, ids=bridge.listed_ids(cleaned.skipped_ids)
                 )
             )
         self.push_warnings(feedback, warnings)

@@ -244,7 +244,7 @@ class CompareDesigns(PlotwiseAlgorithm):
             if nulls:
                 raise QgsProcessingException(
                     self.tr("Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every "
-                            "stratum a value.").format(layer=strata_name, field=stratum_field, ids=bridge.id_list(nulls)))
+                            "stratum a value.").format(layer=strata_name, field=stratum_field, ids=bridge.listed_ids(nulls)))
             if not strata:
                 strata = keys = strata_ids = None
 

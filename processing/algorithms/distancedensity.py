@@ -293,13 +293,13 @@ class DistanceDensity(PlotwiseAlgorithm):
         if bad:
             raise QgsProcessingException(self.tr(
                 "Layer '{layer}': the points {ids} have a number of visits in the field '{field}' that is not a "
-                "whole number of 0 or more. Correct them.").format(layer=layer, ids=bridge.id_list(bad), field=field))
+                "whole number of 0 or more. Correct them.").format(layer=layer, ids=bridge.listed_ids(bad), field=field))
         unvisited = [lab for lab, v, k in zip(labels, visits, keep) if v == 0 and lab in observed_units and k]
         if unvisited:
             raise QgsProcessingException(self.tr(
                 "Layer '{layer}': observations name the points {ids}, whose visits field '{field}' is empty or 0. "
                 "Give them their number of visits, or correct the observations' unit ids.").format(
-                layer=layer, ids=bridge.id_list(unvisited), field=field))
+                layer=layer, ids=bridge.listed_ids(unvisited), field=field))
         skipped = int(np.sum((visits == 0) & keep))
         if skipped:
             feedback.pushInfo(self.tr("{n} point(s) with no visits were left out (not surveyed).").format(n=skipped))

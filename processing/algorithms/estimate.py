@@ -18,6 +18,7 @@ from shapely.geometry import MultiPolygon, Polygon
 from ...plugin import compat
 from .. import bridge
 from ..engine import estimation, variance
+from ..engine.listing import natural_key
 from ..report import estimate as report_estimate
 from ..styles import DENSITY_RAMP, NO_ESTIMATE_COLOUR
 from .base import PlotwiseAlgorithm
@@ -362,7 +363,7 @@ class Estimate(PlotwiseAlgorithm):
         table_rows = [self._row(r) for r in result.table()]
         by_label = {r.stratum: row for r, row in zip(result.strata, table_rows)}
         polygon_rows, polygons = [], []
-        for label in sorted(frame.geometries, key=estimation.natural_key):
+        for label in sorted(frame.geometries, key=natural_key):
             row = by_label.get(label) or [label, frame.areas[label], 0] + [None] * (len(OUTPUT_FIELDS) - 3)
             polygon_rows.append(row)
             geometry = frame.geometries[label]
@@ -402,6 +403,5 @@ class Estimate(PlotwiseAlgorithm):
         inputs = report_estimate.EstimateReportInputs(
             frame_geometries=frame.geometries, surveyed_points=tuple(surveyed), missing_points=tuple(missing),
             ramp=DENSITY_RAMP, missing_colour=NO_ESTIMATE_COLOUR, **info)
-        report = report_estimate.estimate_report(self.new_report(""), result, inputs, warnings,
-                                                 natural_key=estimation.natural_key)
+        report = report_estimate.estimate_report(self.new_report(""), result, inputs, warnings)
         return self.write_report(report, parameters, context, feedback)

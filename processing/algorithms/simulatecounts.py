@@ -249,7 +249,7 @@ class SimulateCounts(PlotwiseAlgorithm):
                 raise QgsProcessingException(self.tr(
                     "Layer '{layer}': the animal points {ids} have no group size above 0 in the field '{field}'. "
                     "Fill it in, or choose no group size field.").format(
-                    layer=animals_name, ids=bridge.id_list(bad), field=size_field))
+                    layer=animals_name, ids=bridge.listed_ids(bad), field=size_field))
             sizes = [float(v) for v in raw]
         ids = self._unit_ids(unit_records)
         with self.engine_errors():

@@ -39,6 +39,7 @@ import numpy as np
 
 from . import edge
 from .errors import QT_TRANSLATE_NOOP, InputError, message
+from .listing import listed_ids
 
 METHODS = ("equal", "proportional", "neyman", "optimal_cost")
 """Allocation methods, in the order of the algorithm's METHOD parameter (0..3)."""
@@ -382,12 +383,9 @@ def expected_precision(n, areas, unit_area, sds=None, means=None, fpc=True):
 # input checks
 # ----------------------------------------------------------------------------
 def _listing(ids, mask):
+    """The ids where ``mask`` holds, and their listing for a message."""
     chosen = [ids[i] for i in np.flatnonzero(mask)]
-    shown = ", ".join(str(x) for x in chosen[:20])
-    if len(chosen) > 20:
-        return chosen, message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{shown} and {more} more"), shown=shown,
-                               more=len(chosen) - 20)
-    return chosen, shown
+    return chosen, listed_ids(chosen)
 
 
 def _as_number(value):

@@ -44,7 +44,8 @@ from scipy import special, stats
 
 from . import detection_functions as df
 from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
-from .estimation import natural_key, satterthwaite_df, stratum_label
+from .estimation import satterthwaite_df, stratum_label
+from .listing import listed_ids, natural_key
 
 OVERALL = "all"
 MIN_DETECTIONS = 20
@@ -53,7 +54,6 @@ AUTO_TRUNCATION_SHARE = 0.05  # common practice: drop the farthest 5 % of the di
 SIZE_AUTO, SIZE_MEAN, SIZE_REGRESSION = "automatic", "mean", "regression"
 SIZE_METHODS = (SIZE_AUTO, SIZE_MEAN, SIZE_REGRESSION)
 SIZE_BIAS_ALPHA = 0.15  # common practice (from memory): the size-bias regression is used when p < 0.15
-MAX_LISTED = 30
 
 
 # --------------------------------------------------------------------------- inputs
@@ -99,13 +99,6 @@ class DistanceSurvey:
         return int(self.distances.size)
 
 
-def _listed(values):
-    values = [str(v) for v in values]
-    shown = ", ".join(values[:MAX_LISTED])
-    return shown if len(values) <= MAX_LISTED else message(QT_TRANSLATE_NOOP(
-        "PlotwiseEngine",
-        "{shown} … ({n} in all)"),
-        shown=shown, n=len(values))
 def truncation_distance(distances, share=AUTO_TRUNCATION_SHARE):
     """The distance beyond which the farthest ``share`` of the distances lie (common practice: 5 %)."""
     return float(np.quantile(np.asarray(distances, dtype=float), 1.0 - share))
@@ -125,7 +118,7 @@ def _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names):
             "PlotwiseEngine",
             "Layer '{layer}': the unit ids {ids} occur more than once in the field '{field}'. Each unit needs its own "
             "id."),
-            layer=names.units, ids=_listed(labels[counts > 1]), field=names.unit_field), ids=list(labels[counts > 1]))
+            layer=names.units, ids=listed_ids(labels[counts > 1]), field=names.unit_field), ids=list(labels[counts > 1]))
     effort = np.asarray(effort, dtype=float)
     bad = ~(np.isfinite(effort) & (effort > 0))
     if bad.any():
@@ -133,12 +126,12 @@ def _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names):
             raise InputError(message(QT_TRANSLATE_NOOP(
                 "PlotwiseEngine",
                 "Layer '{layer}': the transects {ids} have zero length. Delete them or draw their line."),
-                layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
+                layer=names.units, ids=listed_ids(ids[bad])), ids=list(ids[bad]))
         raise InputError(message(QT_TRANSLATE_NOOP(
             "PlotwiseEngine",
             "Layer '{layer}': the points {ids} have no visits. Give each surveyed point its number of visits (1 or "
             "more), or delete the points that were not surveyed."),
-            layer=names.units, ids=_listed(ids[bad])), ids=list(ids[bad]))
+            layer=names.units, ids=listed_ids(ids[bad])), ids=list(ids[bad]))
     strata = np.array([stratum_label(v) for v in unit_strata], dtype=object)
     known = {str(k) for k in stratum_areas}
     outside = np.array([s is None or s not in known for s in strata])
@@ -147,7 +140,7 @@ def _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names):
             "PlotwiseEngine",
             "Layer '{layer}': the units {ids} have no stratum, or a stratum that the strata layer does not have "
             "({strata}). Give each unit the id of its stratum."),
-            layer=names.units, ids=_listed(ids[outside]), strata=", ".join(sorted(known, key=natural_key))),
+            layer=names.units, ids=listed_ids(ids[outside]), strata=", ".join(sorted(known, key=natural_key))),
             ids=list(ids[outside]))
     order = tuple(sorted(known, key=natural_key))
     per_stratum = {h: int(np.sum(strata == h)) for h in order}
@@ -185,7 +178,7 @@ def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
             "PlotwiseEngine",
             "Layer '{layer}': observations name units that the layer '{units}' does not have (field '{field}'): "
             "{ids}. Correct these unit ids, or add the units."),
-            layer=names.observations, units=names.units, field=names.obs_unit_field, ids=_listed(unknown)), ids=unknown)
+            layer=names.observations, units=names.units, field=names.obs_unit_field, ids=listed_ids(unknown)), ids=unknown)
     x = _numbers(distances)
     missing = ~np.isfinite(x)
     if missing.any():
@@ -193,14 +186,14 @@ def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
             "PlotwiseEngine",
             "Layer '{layer}': the observations {ids} have no distance in the field '{field}' (empty or not a number). "
             "Fill in the distances, or delete those observations."),
-            layer=names.observations, ids=_listed(obs_ids[missing]), field=names.distance_field),
+            layer=names.observations, ids=listed_ids(obs_ids[missing]), field=names.distance_field),
                          ids=list(obs_ids[missing]))
     if np.any(x < 0):
         raise InputError(message(QT_TRANSLATE_NOOP(
             "PlotwiseEngine",
             "Layer '{layer}': the observations {ids} have a negative distance in the field '{field}'. Distances are "
             "measured from the line or the point outwards and are 0 m or more; correct them."),
-            layer=names.observations, ids=_listed(obs_ids[x < 0]), field=names.distance_field),
+            layer=names.observations, ids=listed_ids(obs_ids[x < 0]), field=names.distance_field),
             ids=list(obs_ids[x < 0]))
     if sizes is None:
         s = np.ones(x.size)
@@ -212,7 +205,7 @@ def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
                 "PlotwiseEngine",
                 "Layer '{layer}': the observations {ids} have no group size above 0 in the field '{field}'. Fill in "
                 "the number of animals seen in each group (1 for a single animal), or choose no group-size field."),
-                layer=names.observations, ids=_listed(obs_ids[bad]), field=names.size_field), ids=list(obs_ids[bad]))
+                layer=names.observations, ids=listed_ids(obs_ids[bad]), field=names.size_field), ids=list(obs_ids[bad]))
     return np.array([position[k] for k in keys], dtype=np.int64), x, s
 
 

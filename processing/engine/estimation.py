@@ -41,6 +41,7 @@ from . import allocation, edge
 from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, Message, message
 from .geometry import OVERLAP_ERROR_SHARE, SLIVER_AREA, listed_overlaps, overlapping_pairs, worst_overlap_share
 from .geometry_types import polygonal_part
+from .listing import MAX_LISTED_IDS, listed_ids, natural_key
 from .variance import collapse_single_unit_strata, local_neighbourhood_variance, single_unit_variance
 
 CI_T, CI_LOGNORMAL, CI_BOOTSTRAP = "t", "lognormal", "bootstrap"
@@ -50,7 +51,6 @@ VARIANCE_METHODS = (VARIANCE_SRS, VARIANCE_LOCAL, VARIANCE_LOCAL_SCALED)
 LOCAL_METHODS = (VARIANCE_LOCAL, VARIANCE_LOCAL_SCALED)
 MIN_BOOTSTRAP = 2000
 OVERALL = "all"
-MAX_LISTED_IDS = 50
 RESERVE_ROLE = "reserve"
 UNEVEN_INCLUSION = 1.01  # incl_p within a stratum differing by more than 1 % is worth a warning (our choice)
 MIN_UNITS_FOR_PRESENCE_HINT = 5  # fewer 0/1 counts than this prove nothing (our choice)
@@ -346,22 +346,6 @@ def stratum_labels(values):
     return labels, inverse.ravel()
 
 
-def natural_key(label):
-    """Sort key putting numeric ids in numeric order, then text ids."""
-    try:
-        return (0, float(label), label)
-    except ValueError:
-        return (1, 0.0, label)
-
-
-def _id_list(ids):
-    ids = list(ids)
-    shown = ", ".join(str(i) for i in ids[:MAX_LISTED_IDS])
-    if len(ids) > MAX_LISTED_IDS:
-        return message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{shown} … ({n} in all)"), shown=shown, n=len(ids))
-    return shown
-
-
 def read_counts(counts, unit_ids, count_name="count"):
     """Counts as floats: ``None``/NaN are missing (not surveyed); others must be numbers ≥ 0.
 
@@ -395,7 +379,7 @@ def read_counts(counts, unit_ids, count_name="count"):
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The {count_name} field holds values that are not numbers for units {ids}. "
                 "Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) "
-                "for units that were not surveyed."), count_name=count_name, ids=_id_list(ids)),
+                "for units that were not surveyed."), count_name=count_name, ids=listed_ids(ids)),
             ids=ids,
         )
     infinite = np.isinf(values)
@@ -406,7 +390,7 @@ def read_counts(counts, unit_ids, count_name="count"):
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "The {count_name} field holds negative or infinite counts for units {ids}. "
                 "Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit "
-                "was not surveyed."), count_name=count_name, ids=_id_list(ids)),
+                "was not surveyed."), count_name=count_name, ids=listed_ids(ids)),
             ids=ids,
         )
     return values
@@ -573,7 +557,7 @@ def _unlabelled_polygons(merged, unlabelled, unlabelled_ids, drop_unlabelled, *,
     if merged:
         lost = lost.difference(unary_union(list(merged.values())))
     lost_m2 = float(lost.area)
-    values = dict(layer=layer, field=field, ids=_id_list(unlabelled_ids), area=lost_m2 / m2_per_unit, unit=unit)
+    values = dict(layer=layer, field=field, ids=listed_ids(unlabelled_ids), area=lost_m2 / m2_per_unit, unit=unit)
     if lost_m2 >= SLIVER_AREA and not drop_unlabelled:
         raise InputError(
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
@@ -725,7 +709,7 @@ def _units_iv(counts, unit_areas, strata, unit_ids, roles, layer):
         warnings.append(message(
             QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}."),
-            n=int(missing.sum()), ids=_id_list(ids[missing])))
+            n=int(missing.sum()), ids=listed_ids(ids[missing])))
     surveyed = ~np.isnan(y)
     if not surveyed.any():
         raise InputError(message(
@@ -739,7 +723,7 @@ def _units_iv(counts, unit_areas, strata, unit_ids, roles, layer):
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field "
                 "(area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a "
-                "fixed unit area; polygons use their own area."), layer=layer, ids=_id_list(ids[bad_units])),
+                "fixed unit area; polygons use their own area."), layer=layer, ids=listed_ids(ids[bad_units])),
             ids=ids[bad_units],
         )
     return ids, y, a, strata_in, unused, warnings
@@ -754,7 +738,7 @@ def _frame_areas(stratum_areas):
     if bad_area:
         raise InputError(
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                "Strata {ids} have no area. Check the strata layer's geometries."), ids=_id_list(bad_area)),
+                "Strata {ids} have no area. Check the strata layer's geometries."), ids=listed_ids(bad_area)),
             ids=bad_area,
         )
     return frame
@@ -769,7 +753,7 @@ def _stratum_codes(strata_in, ids, frame, surveyed, missing, drop_empty):
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Units {ids} have no stratum (the stratum field is empty). Fill in their "
                 "stratum, or leave the stratum field out to treat the frame as one stratum."),
-                    ids=_id_list(ids[no_stratum])),
+                    ids=listed_ids(ids[no_stratum])),
             ids=ids[no_stratum],
         )
     unknown_labels = np.array([lab not in frame for lab in unique_labels], dtype=bool)
@@ -780,7 +764,7 @@ def _stratum_codes(strata_in, ids, frame, surveyed, missing, drop_empty):
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Units {ids} have stratum ids ({names}) that are not in the strata layer. "
                 "Check the stratum field of the units and the id field of the strata layer."),
-                    ids=_id_list(ids[unknown]), names=_id_list(names)),
+                    ids=listed_ids(ids[unknown]), names=listed_ids(names)),
             ids=ids[unknown],
         )
     all_labels = sorted(frame, key=natural_key)
@@ -798,14 +782,14 @@ def _stratum_codes(strata_in, ids, frame, surveyed, missing, drop_empty):
                 message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "No unit of strata {ids} was surveyed, so their abundance cannot be estimated. "
                     "Survey units there, or choose to leave these strata out (the estimate then covers a "
-                    "smaller frame)."), ids=_id_list(empty)),
+                    "smaller frame)."), ids=listed_ids(empty)),
                 ids=empty,
             )
         warnings.append(message(
             QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Strata {ids} had no surveyed unit and were left out: the frame shrank by "
                 "{dropped_area:.6g} area units, and the estimate covers the remaining strata only."),
-            ids=_id_list(empty), dropped_area=float(sum(frame[lab] for lab in empty))))
+            ids=listed_ids(empty), dropped_area=float(sum(frame[lab] for lab in empty))))
     labels = tuple(lab for lab in all_labels if n_per[lab] > 0)
     code_of = {lab: h for h, lab in enumerate(labels)}
     code = np.array([code_of.get(lab, -1) for lab in unique_labels], dtype=int)[label_index]
@@ -828,7 +812,7 @@ def _presence_iv(settings, y, ids):
         raise InputError(
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Presence data must be 0 or 1; units {ids} hold other values. "
-                "Use the counts without the presence option, or recode the field."), ids=_id_list(ids[odd])),
+                "Use the counts without the presence option, or recode the field."), ids=listed_ids(ids[odd])),
             ids=ids[odd],
         )
     warnings = []
@@ -869,7 +853,7 @@ def _fpc_by_stratum(settings, labels, code, designs):
                 "possible positions form a continuous population, which has no such correction (Cordy 1993); "
                 "applying it would make the interval too narrow. A layout with MIN_SPACING of at least the unit's "
                 "width, a systematic grid or a spatially balanced layout keeps the units apart."),
-            ids=_id_list(refused), records=", ".join(records)))
+            ids=listed_ids(refused), records=", ".join(records)))
     assumed = bool(np.any(~refused_h & ~recorded_h))
     return ~refused_h, refused, assumed, warnings
 
@@ -883,7 +867,7 @@ def _expansion_by_stratum(labels, frame, expansion_areas):
     if small:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "The expansion area of strata {ids} is smaller than the stratum: the plus region "
-            "holds the stratum. Check the units' edge record."), ids=_id_list(small)), ids=small)
+            "holds the stratum. Check the units' edge record."), ids=listed_ids(small)), ids=small)
     return out
 
 
@@ -902,7 +886,7 @@ def _inclusion_warnings(incl_p, labels, code):
         return []
     return [message(QT_TRANSLATE_NOOP("PlotwiseEngine",
         "In strata {ids} the units' inclusion probabilities (incl_p) differ. This estimator assumes "
-        "equal chances within a stratum; check the design the units came from."), ids=_id_list(uneven))]
+        "equal chances within a stratum; check the design the units came from."), ids=listed_ids(uneven))]
 
 
 def _positions_iv(settings, coords, n_all, keep, ids):
@@ -918,7 +902,7 @@ def _positions_iv(settings, coords, n_all, keep, ids):
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Units {ids} have no position, so the local neighbourhood variance "
                 "cannot use them. Give their locations, or use the simple random sampling formula."),
-                    ids=_id_list(ids[keep][unplaced])),
+                    ids=listed_ids(ids[keep][unplaced])),
             ids=ids[keep][unplaced],
         )
     return xy
@@ -1016,7 +1000,7 @@ def stratum_sums(inp):
         raise InputError(
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas "
-                "and the area unit, or switch off the finite-population correction."), ids=_id_list(over)),
+                "and the area unit, or switch off the finite-population correction."), ids=listed_ids(over)),
             ids=over,
         )
     resid = y - ratio[code] * a
@@ -1064,7 +1048,7 @@ def count_variances(inp, sums):
             warnings.append(message(
                 QT_TRANSLATE_NOOP("PlotwiseEngine",
                     "Strata {ids} have fewer than 3 units: their variance uses the simple random sampling formula."),
-                ids=_id_list(rest)))
+                ids=listed_ids(rest)))
     groups = collapse_single_unit_strata(n_h, neighbours=inp.neighbours)
     component = groups.group.copy() if n_strata else np.zeros(0, dtype=int)
     singles = np.flatnonzero(n_h == 1)
@@ -1487,7 +1471,7 @@ def _zero_warnings(inp, sums, overall):
         QT_TRANSLATE_NOOP("PlotwiseEngine",
             "In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of "
             "0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species "
-            "may be present but rare there)."), ids=_id_list(zero))]
+            "may be present but rare there)."), ids=listed_ids(zero))]
 
 
 def plus_expansion(frame_geometries, unit_strata, edges, reaches, m2_per_unit=1.0):
@@ -1529,5 +1513,5 @@ def plus_expansion(frame_geometries, unit_strata, edges, reaches, m2_per_unit=1.
     if mixed:
         warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "In strata {ids} the units record different reaches (reach_m): the largest is used "
-            "for the plus region."), ids=_id_list(sorted(set(mixed), key=natural_key))))
+            "for the plus region."), ids=listed_ids(sorted(set(mixed), key=natural_key))))
     return {k: v / m2_per_unit for k, v in areas.items()}, warnings

@@ -68,6 +68,7 @@ from .crs import lonlat_transformer
 from .edge import INSIDE as EDGE_INSIDE, PLUS as EDGE_PLUS, design_record, plus_region
 from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .halton import balanced_acceptance_sample
+from .listing import listed_ids, natural_key
 from .unit_shapes import (  # noqa: F401 (CIRCLE, SQUARE re-exported for the algorithm)
     CIRCLE, LINE, POINT, SHAPES, SQUARE, circumscribing_radius, transect_ends, unit_area, unit_outlines,
 )
@@ -409,33 +410,24 @@ def counts_from_field(values, feature_ids, field_name="N_FIELD"):
         raise InputError(
             message(QT_TRANSLATE_NOOP("PlotwiseEngine", "{field} is empty (NULL) or not a number for feature(s) {ids}. "
                     "Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS."),
-                    field=field_name, ids=_ids(bad_null)),
+                    field=field_name, ids=listed_ids(bad_null)),
             ids=bad_null,
         )
     if bad_neg:
         raise InputError(
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "{field} is negative for feature(s) {ids}. Use 0 or a positive whole number."),
-                    field=field_name, ids=_ids(bad_neg)),
+                    field=field_name, ids=listed_ids(bad_neg)),
             ids=bad_neg,
         )
     if bad_frac:
         raise InputError(
             message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first."),
-                    field=field_name, ids=_ids(bad_frac)),
+                    field=field_name, ids=listed_ids(bad_frac)),
             ids=bad_frac,
         )
     return np.asarray(out, dtype=int)
-
-
-def _ids(ids, limit=20):
-    ids = list(ids)
-    text = ", ".join(str(i) for i in ids[:limit])
-    if len(ids) > limit:
-        return message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "{shown} and {more} more"), shown=text, more=len(ids) - limit)
-    return text
 
 
 def stratum_label(key):
@@ -450,13 +442,6 @@ def stratum_label(key):
         pass
     text = re.sub(r"[^A-Za-z0-9_]+", "_", str(key)).strip("_")[:12]
     return text or "S"
-
-
-def _sort_keys(keys):
-    try:
-        return sorted(keys)
-    except TypeError:
-        return sorted(keys, key=str)
 
 
 # ----------------------------------------------------------------------------
@@ -538,14 +523,14 @@ def usable_features(frame_input):
     if repaired:
         warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Invalid geometry was repaired for feature(s) {ids}; check their outlines."),
-                                ids=_ids(repaired)))
+                                ids=listed_ids(repaired)))
     if skipped:
         warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-            "Empty or zero-area feature(s) {ids} were skipped."), ids=_ids(skipped)))
+            "Empty or zero-area feature(s) {ids} were skipped."), ids=listed_ids(skipped)))
     if slivers:
         warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
             "Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an "
-            "overlay or a reprojection) and were skipped."), ids=_ids(slivers),
+            "overlay or a reprojection) and were skipped."), ids=listed_ids(slivers),
                                 area=geo.SLIVER_AREA))
     if not keep:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
@@ -586,7 +571,7 @@ def merge_strata(frame_input, kept):
                 ids=[ids[i]],
             )
         groups.setdefault(key, []).append((i, g))
-    keys = _sort_keys(groups)
+    keys = sorted(groups, key=natural_key)
     labels = [stratum_label(k) for k in keys]
     if len(set(labels)) != len(labels):  # e.g. "a b" and "a_b"
         labels = [f"S{j + 1}" for j in range(len(keys))]
@@ -644,7 +629,7 @@ def units_per_stratum(frame_input, kept, merged):
                         "The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). "
                         "{n_field} is the number of units of the whole stratum: give its features the same value."),
                     key=key, n_field=n_field, values=", ".join(str(v) for v in sorted(values)),
-                    ids=_ids(member_ids)),
+                    ids=listed_ids(member_ids)),
                 ids=list(member_ids),
             )
         counts.append(values.pop())
@@ -673,7 +658,7 @@ def sampling_region(key, geometry, area, n, feature_ids, spec):
     effective = float(region.area) if not region.is_empty else 0.0
     if effective <= 0 and n + spec.reserve > 0:
         raise InputError(
-            message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius, ids=_ids(feature_ids)),
+            message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius, ids=listed_ids(feature_ids)),
             ids=list(feature_ids),
         )
     warnings = []

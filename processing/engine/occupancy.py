@@ -57,6 +57,7 @@ import numpy as np
 from scipy import optimize, special
 
 from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
+from .listing import listed_ids
 
 EFFORT = "effort"  # the name of the occasion-level effort in a model
 CONSTANT = "const"
@@ -66,16 +67,6 @@ BOUNDARY_LOGIT = 8.0
 CUMULATIVE_TARGET = 0.95  # cumulative detection the occasions advice aims at
 MAX_GOF_CELLS = 20_000_000  # histories x sites the goodness-of-fit may enumerate (memory bound)
 MAX_GOF_OCCASIONS = 16
-_LIST_LIMIT = 20
-
-
-def _listed(ids, limit=_LIST_LIMIT):
-    ids = [str(i) for i in ids]
-    text = ", ".join(ids[:limit])
-    if len(ids) > limit:
-        return message(QT_TRANSLATE_NOOP("PlotwiseEngine",
-                       "{shown} and {more} more"), shown=text, more=len(ids) - limit)
-    return text
 
 
 # ----------------------------------------------------------------------------
@@ -179,7 +170,7 @@ def detection_histories(columns, occasions, site_ids, layer="SITES"):
                 QT_TRANSLATE_NOOP("PlotwiseEngine",
                 "Layer {layer}, history field {field}: sites {ids} hold a value other than 1 (detected), 0 (not "
                 "detected) or NULL (not surveyed). Correct these values and run again."),
-                layer=layer, field=name, ids=_listed(bad)), ids=bad)
+                layer=layer, field=name, ids=listed_ids(bad)), ids=bad)
         y[:, j] = parsed
     kept = ~np.isnan(y).all(axis=1)
     if not kept.any():
@@ -209,7 +200,7 @@ def _check_site_ids(site_ids, layer):
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                                  "Layer {layer}: site ids {ids} occur more than once. Each site needs one row "
                                  "holding all its occasions; merge the rows or correct the ids."),
-                                 layer=layer, ids=_listed(repeated)), ids=repeated)
+                                 layer=layer, ids=listed_ids(repeated)), ids=repeated)
 
 
 _PART = re.compile(r"\b(psi|p)\s*:", re.IGNORECASE)
@@ -341,7 +332,7 @@ def _covariate_values(covariates, name, histories, layer):
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                                  "Layer {layer}, covariate field {field}: surveyed sites {ids} have no number (NULL "
                                  "or text). Fill in the values, leave these sites out, or drop the covariate."),
-                                 layer=layer, field=name, ids=_listed(bad)), ids=bad)
+                                 layer=layer, field=name, ids=listed_ids(bad)), ids=bad)
     values = np.asarray(raw, dtype=float)
     if np.ptp(values) == 0:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
@@ -371,7 +362,7 @@ def _effort_values(effort, histories, layer, effort_fields):
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                                  "Layer {layer}, effort fields {fields}: surveyed sites {ids} have no effort, or a "
                                  "negative one, on an occasion they were surveyed. Give every survey its effort."),
-                                 layer=layer, fields=", ".join(fields), ids=_listed(bad)), ids=bad)
+                                 layer=layer, fields=", ".join(fields), ids=listed_ids(bad)), ids=bad)
     out = np.where(surveyed, values, np.nan)
     if np.nanstd(out) == 0:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
@@ -1048,7 +1039,7 @@ def occupancy_analysis(histories, psi_covariates=(), p_covariates=(), covariates
     if inp.histories.left_out:
         warnings.append(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
                                 "Sites {ids} have no surveyed occasion (every history value NULL) and were left out "
-                                "of the analysis."), ids=_listed(inp.histories.left_out)))
+                                "of the analysis."), ids=listed_ids(inp.histories.left_out)))
     advice = design_advice(main.psi_mean.estimate, main.p_mean.estimate, inp.histories.n_occasions, inp.target_se)
     gof = None
     if inp.gof_replicates > 0:

@@ -5,6 +5,7 @@ from dataclasses import dataclass
 
 import numpy as np
 
+from ..engine.listing import natural_key
 from .style import CATEGORY_COLOURS, INK, MUTED
 from .svg import MapLayer, histogram_svg, interval_chart_svg, map_svg
 
@@ -81,7 +82,7 @@ def _number(value):
     return None if value is None or (isinstance(value, float) and not math.isfinite(value)) else value
 
 
-def estimate_report(report, result, inputs, warnings, natural_key=str):
+def estimate_report(report, result, inputs, warnings):
     """Fill ``report`` (a :class:`report.Report`) with the estimate's results; returns it."""
     presence = result.presence
     report.title = (
@@ -93,7 +94,7 @@ def estimate_report(report, result, inputs, warnings, natural_key=str):
     _parameters(report, result, inputs)
     report.warnings(warnings)
     _tables(report, result, inputs)
-    _figures(report, result, inputs, natural_key)
+    _figures(report, result, inputs)
     _method(report, result)
     _cautions(report, result)
     report.references(REFERENCES)
@@ -368,7 +369,7 @@ def _intervals_table(report, result, level):
         )
 
 
-def _figures(report, result, inputs, natural_key):
+def _figures(report, result, inputs):
     level = f"{result.confidence:.0%}"
     dens_label, _ = _labels(report, result, inputs.area_unit)
     rows = list(result.strata)

@@ -81,12 +81,12 @@ def test_allocation_default_names_and_long_id_lists():
     from plotwise.processing.engine import allocation
 
     areas = [1.0] * 25
-    areas[3:25] = [0.0] * 22  # 22 bad strata: 20 listed, "and 2 more"
+    areas[3:25] = [0.0] * 22  # 22 bad strata: 20 listed, then the total
     with pytest.raises(InputError) as err:
         allocation.allocate(areas, 0.01, "proportional", total=10)
     listed = ", ".join(str(i) for i in range(4, 24))
     assert err.value.message == (
-        f"The stratum area is NULL, negative or zero for stratum feature(s) {listed} and 2 more. Fill in a "
+        f"The stratum area is NULL, negative or zero for stratum feature(s) {listed} … (22 in all). Fill in a "
         "positive value for every stratum, or remove those strata from the layer."
     )
 
@@ -134,8 +134,10 @@ def test_frame_stratification_estimation_messages():
         "Covariate 'elevation' is constant (312) over the frame: it cannot define strata. Use another covariate, "
         "or check the frame and the raster."
     )
+    from plotwise.processing.engine.listing import listed_ids
+
     many = list(range(1, 61))
-    assert str(estimation._id_list(many)) == ", ".join(str(i) for i in range(1, 51)) + " … (60 in all)"
+    assert str(listed_ids(many)) == ", ".join(str(i) for i in range(1, 21)) + " … (60 in all)"
     with pytest.raises(InputError) as err:
         estimation.estimate_density([1, 2], [1.0, 1.0], [1, 1], {1: 10.0}, confidence=1.5)
     assert err.value.message == "The confidence level must lie between 0 and 1 (got 1.5); use e.g. 0.95."
