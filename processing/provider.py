@@ -18,6 +18,9 @@ from .algorithms.simulatedetections import SimulateDetections
 from .algorithms.stations import Stations
 from .algorithms.stratify import Stratify
 from .algorithms.distancedensity import DistanceDensity
+from .algorithms.panels import Panels
+from .algorithms.trend import Trend
+from .algorithms.trendpower import TrendPower
 
 MODELS = os.path.join(os.path.dirname(os.path.abspath(__file__)), "models")
 ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "plugin", "icons", "plotwise.svg")
@@ -36,6 +39,9 @@ ALGORITHM_CLASSES = [
     Occupancy,
     SimulateDetections,
     DistanceDensity,
+    Panels,
+    TrendPower,
+    Trend,
 ]
 
 

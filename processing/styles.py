@@ -449,3 +449,16 @@ def occupancy(layer, field="psi_cond"):
 
 STYLES["stations"] = stations
 STYLES["occupancy"] = occupancy
+
+
+# -- monitoring ------------------------------------------------------------------------
+def panels(layer):
+    """Units by revisit ``panel`` (one palette colour per panel; reserves without a panel), labelled
+    with ``unit_id``."""
+    categorised(layer, "panel", opacity=0.9)
+    if layer.fields().lookupField("unit_id") >= 0:
+        label_features(layer, "unit_id")
+    return layer
+
+
+STYLES["panels"] = panels
