@@ -224,8 +224,8 @@ def _units_iv(unit_ids, strata, draw_ord, roles):
     for key in dict.fromkeys(strata):
         members = np.flatnonzero(primary & np.array([s == key for s in strata]))
         values_h = values[members]
-        _, first, counts = np.unique(values_h, return_index=True, return_counts=True)
-        repeated += [unit_ids[members[i]] for i, c in zip(first, counts) if c > 1]
+        shared, counts = np.unique(values_h, return_counts=True)
+        repeated += [unit_ids[i] for i in members[np.isin(values_h, shared[counts > 1])]]
     if repeated:
         raise InputError(message(
             "Units {ids} share their draw order with another primary unit of the same stratum. Each stratum's "
@@ -378,9 +378,28 @@ class BalanceCheck:
     alpha: float
 
 
-def _log_spread(xy, panel, population, numbers):
-    values = [np.log(max(voronoi_balance(xy[panel == p], population), 1e-12)) for p in numbers]
-    return float(np.sum(values))
+MAX_DISTANCE_CELLS = 4_000_000  # population points x units of a stratum kept as one distance matrix
+
+
+class _StratumSpread:
+    """The Voronoi measure of any subset of one stratum's units over a fixed population, from
+    the population-to-unit distances computed once (or a k-d tree per subset when too many)."""
+
+    def __init__(self, xy, population):
+        self.xy, self.population = xy, population
+        cells = len(xy) * len(population)
+        self.distances = None
+        if cells <= MAX_DISTANCE_CELLS:
+            diff = population[:, None, :] - xy[None, :, :]
+            self.distances = np.einsum("ijk,ijk->ij", diff, diff)
+
+    def measure(self, chosen):
+        if self.distances is None:
+            return voronoi_balance(self.xy[chosen], self.population)
+        columns = np.flatnonzero(chosen)
+        nearest = np.argmin(self.distances[:, columns], axis=1)
+        v = np.bincount(nearest, minlength=len(columns)) * (len(columns) / len(self.population))
+        return float(np.mean((v - 1.0) ** 2))
 
 
 def panel_balance_check(xy, assignment, rng, rearrangements=RANDOM_SUBSETS, alpha=BALANCE_ALPHA):
@@ -403,22 +422,23 @@ def panel_balance_check(xy, assignment, rng, rearrangements=RANDOM_SUBSETS, alph
         numbers = [p for p in assignment.spec.panel_numbers if 2 <= np.sum(labels == p) < len(members)]
         population = hull_population(xy[members]) if numbers and len(members) >= 3 else None
         if population is not None and len(population):
-            groups.append((key, xy[members], labels, population, numbers))
+            groups.append((key, _StratumSpread(xy[members], population), labels, numbers))
     if not groups:
         return BalanceCheck((), float("nan"), False, int(rearrangements), float(alpha))
-    observed = sum(_log_spread(g_xy, labels, pop, nums) for _, g_xy, labels, pop, nums in groups)
+    log = lambda value: np.log(max(value, 1e-12))  # noqa: E731
+    observed = sum(log(spread.measure(labels == p)) for _, spread, labels, nums in groups for p in nums)
     null = np.zeros(rearrangements)
     random_measures = {}
-    for key, g_xy, labels, pop, nums in groups:
+    for key, spread, labels, nums in groups:
         for b in range(rearrangements):
             shuffled = rng.permutation(labels)
             for p in nums:
-                measure = voronoi_balance(g_xy[shuffled == p], pop)
+                measure = spread.measure(shuffled == p)
                 random_measures.setdefault((key, p), []).append(measure)
-                null[b] += np.log(max(measure, 1e-12))
+                null[b] += log(measure)
     rows = tuple(
-        PanelBalance(key, int(p), int(np.sum(labels == p)), voronoi_balance(g_xy[labels == p], pop),
+        PanelBalance(key, int(p), int(np.sum(labels == p)), spread.measure(labels == p),
                      float(np.median(random_measures[(key, p)])))
-        for key, g_xy, labels, pop, nums in groups for p in nums)
+        for key, spread, labels, nums in groups for p in nums)
     p_value = float((1 + np.sum(null <= observed)) / (rearrangements + 1))
     return BalanceCheck(rows, p_value, p_value <= alpha, int(rearrangements), float(alpha))

@@ -24,14 +24,24 @@ levels:
 * between years: counts of one year share that year's weather, observers and
   conditions, which the unit-level scale does not see. The model with one effect per
   year, ``log E[y_it] = log e_it + α_i + γ_t`` (fitted by iterative proportional fitting
-  of the unit and year totals; Bishop, Fienberg & Holland 1975), is compared with the
-  trend model: its deviance drop ``ΔD`` on ``d = T − c − 1`` degrees of freedom (T
-  years, c linked groups of units and years: 1 unless rotating panels never meet) gives
-  the year-level scale ``φ_Y = ΔD / d``, and the standard error used is
-  ``se = √(φ_Y / I_β)`` with Student's t on d degrees of freedom (the quasi-likelihood
-  F-ratio, McCullagh & Nelder 1989, ch. 9; our choice to always allow for it). With
-  only year-to-year noise and large counts this is the t test of the slope of a
-  weighted regression of the log yearly totals on year.
+  of the unit and year totals; Bishop, Fienberg & Holland 1975), gives the deviance drop
+  ``ΔD`` from the trend model on ``d = T − c − 1`` degrees of freedom (T years, c linked
+  sets of units and years: 1 unless rotating panels never meet). With year effects
+  ``γ̂ = β x + v + e``, ``Var(v) = σ_Y² I`` (year-to-year variation) and
+  ``Var(e) = φ S⁻`` (S the year effects' information, φ the Pearson scale within years),
+  ``E[ΔD] = φ d + σ_Y² tr(Q)`` with ``Q = S − S x x'S / x'S x``, and the GLM slope
+  ``β̂ ≈ x'S γ̂ / x'S x`` has variance ``φ / I_β + σ_Y² L``, ``L = ‖S x‖² / (x'S x)²``.
+  When every unit visits every year of its linked set (the every-year and rotating
+  designs) the standard error used is ``se = √(ΔD / d / I_β)``, the quasi-likelihood F
+  scaling (McCullagh & Nelder 1989, ch. 9): with large counts, the t test of the slope
+  of the weighted regression of the log yearly totals on year. With split panels the
+  slope leans on single years more than the average lack-of-fit contrast does, and
+  ``se = √(ΔD / d · max(L d / tr(Q), 1 / I_β))``: unbiased when the year-to-year
+  variation dominates, on the safe side without it (our derivation, checked by
+  simulation in the tests). Student's t on d degrees of freedom in both cases. Our
+  choice: always allow for year-to-year variation. The
+  moment estimate ``σ_Y² = max(0, (ΔD − φ d) / tr(Q))`` (DerSimonian & Laird 1986, here
+  for a log-linear model) is reported.
 
 Yearly indices are the year-effect model's expected mean count per unit at the mean
 effort, with delta-method intervals from the Pearson scale of that model.
@@ -203,9 +213,14 @@ class TrendFit:
     ``beta`` the log-linear trend per year, ``information`` its Poisson profile
     information ``I_β``, ``lack_of_fit`` the deviance drop ``ΔD`` from the trend model
     to the year-effect model on ``lof_df`` degrees of freedom, ``converged`` whether
-    Newton's method met its tolerance. ``group_effect`` (R, P) are the trend model's
-    ``exp(α_p)``; ``year_group_effect`` (R, P) and ``year_effect`` (R, T) the year-effect
-    model's ``exp(α_p)`` and ``exp(γ_t)``.
+    Newton's method met its tolerance; ``dispersion`` the Pearson scale φ of the
+    year-effect model (variation between units within years) on ``dispersion_df``
+    degrees of freedom, ``year_variance`` the moment estimate of the year-to-year
+    variance σ_Y² on the log scale, ``year_leverage`` the factor ``‖S x‖² / (x'S x)²``
+    that turns it into variance of β, ``year_trace`` the ``tr(Q)`` of the estimate and
+    ``complete`` whether every unit visits every year of its linked set. ``group_effect``
+    (R, P) are the trend model's ``exp(α_p)``; ``year_group_effect`` (R, P) and
+    ``year_effect`` (R, T) the year-effect model's ``exp(α_p)`` and ``exp(γ_t)``.
     """
 
     beta: np.ndarray
@@ -213,6 +228,12 @@ class TrendFit:
     lack_of_fit: np.ndarray
     lof_df: np.ndarray
     converged: np.ndarray
+    dispersion: np.ndarray
+    dispersion_df: np.ndarray
+    year_variance: np.ndarray
+    year_leverage: np.ndarray
+    year_trace: np.ndarray
+    complete: np.ndarray
     group_effect: np.ndarray
     year_group_effect: np.ndarray
     year_effect: np.ndarray
@@ -220,15 +241,20 @@ class TrendFit:
 
     @property
     def year_dispersion(self):
-        """``φ_Y = ΔD / d`` (NaN where d < 1)."""
+        """``ΔD / d``, the deviance drop per degree of freedom (NaN where d < 1)."""
         with np.errstate(divide="ignore", invalid="ignore"):
             return np.where(self.lof_df >= 1, self.lack_of_fit / np.maximum(self.lof_df, 1), np.nan)
 
     @property
     def se(self):
-        """``√(φ_Y / I_β)``, the standard error of β allowing for year-to-year variation."""
+        """The standard error of β allowing for variation between units and from year to
+        year (NaN where d < 1): ``√(ΔD / d / I_β)`` when every unit visits every year of its
+        linked set, else ``√(ΔD / d · max(L d / tr(Q), 1 / I_β))`` (see the module notes)."""
         with np.errstate(divide="ignore", invalid="ignore"):
-            return np.sqrt(self.year_dispersion / self.information)
+            d = np.maximum(self.lof_df, 1)
+            factor = np.where(self.complete, 1.0 / self.information,
+                              np.maximum(self.year_leverage * d / self.year_trace, 1.0 / self.information))
+            return np.where(self.lof_df >= 1, np.sqrt(self.lack_of_fit / d * factor), np.nan)
 
 
 def _moments(beta, effort, x):
@@ -295,17 +321,20 @@ def fit_year_effects(group_totals, year_totals, effort):
     return a, b
 
 
-def linked_groups(effort, active):
+def linked_groups(effort, active, complete=False):
     """Number of linked sets ``c`` and of years ``T`` reached, per replicate.
 
     Groups with ``active`` (R, P) True and the years they visit form a bipartite graph;
     ``c`` is its number of connected components, ``T`` the years it holds. Replicates
-    with the same active groups share one graph.
+    with the same active groups share one graph. With ``complete``, also whether every
+    active group visits every year of its component (a complete table in each linked
+    set: the every-year and the rotating designs, not split panels).
     """
     visits = effort > 0
     patterns, inverse = np.unique(np.asarray(active, dtype=bool), axis=0, return_inverse=True)
     c = np.zeros(len(patterns), dtype=int)
     t = np.zeros(len(patterns), dtype=int)
+    full = np.zeros(len(patterns), dtype=bool)
     n_groups, n_years = visits.shape
     for k, pattern in enumerate(patterns):
         block = visits & pattern[:, None]
@@ -316,8 +345,11 @@ def linked_groups(effort, active):
         used = np.concatenate([pattern, years])
         c[k] = len(np.unique(labels[used])) if used.any() else 0
         t[k] = int(years.sum())
+        group_labels, year_labels = labels[:n_groups], labels[n_groups:]
+        full[k] = all(np.array_equal(block[g], years & (year_labels == group_labels[g]))
+                      for g in np.flatnonzero(pattern & block.any(axis=1)))
     inverse = np.asarray(inverse).ravel()
-    return c[inverse], t[inverse]
+    return (c[inverse], t[inverse], full[inverse]) if complete else (c[inverse], t[inverse])
 
 
 def _xlogy_sum(weights, values, axis=1):
@@ -325,18 +357,87 @@ def _xlogy_sum(weights, values, axis=1):
         return np.sum(np.where(weights > 0, weights * np.log(np.where(weights > 0, values, 1.0)), 0.0), axis=axis)
 
 
-def fit_trend(group_totals, year_totals, effort, x):
-    """Both models on R sets of counts: :class:`TrendFit`.
+def year_information(a, b, effort, totals):
+    """The year-effect model's information for the year effects with the unit effects
+    profiled out, ``S = diag(M) − Σ_p μ_p μ_p' / Y_p`` (R, T, T), ``μ_pt = A_p b_t e_pt``,
+    ``M_t = Σ_p μ_pt`` (McCullagh & Nelder 1989, ch. 6; the Schur complement)."""
+    mu = a[:, :, None] * b[:, None, :] * effort[None]
+    with np.errstate(divide="ignore", invalid="ignore"):
+        scaled = np.where(totals[:, :, None] > 0, mu / np.where(totals > 0, totals, 1.0)[:, :, None], 0.0)
+    schur = -np.einsum("rpt,rps->rts", scaled, mu)
+    idx = np.arange(mu.shape[2])
+    schur[:, idx, idx] += mu.sum(axis=1)
+    return schur
 
-    Only the totals are needed: ``Y_p`` and ``Y_·t`` are sufficient for both log-linear
+
+def year_to_year_variance(schur, x, drop, df, dispersion):
+    """The moment estimate of the year-to-year variance (DerSimonian & Laird 1986 in the form
+    of a log-linear model): year effects ``γ̂ = β x + v + e`` with ``Var(v) = σ² I`` and
+    ``Var(e) = φ S⁻``; the deviance drop is ``ΔD ≈ γ̂' Q γ̂``, ``Q = S − S x x' S / x'S x``,
+    so ``E[ΔD] = φ d + σ² tr(Q)`` and ``σ² = max(0, (ΔD − φ d) / tr(Q))``. The GLM slope is
+    ``β̂ ≈ x' S γ̂ / x'S x``, which adds ``σ² ‖S x‖² / (x'S x)²`` to its variance (a first-order
+    expansion: our derivation, checked by simulation in the tests).
+
+    Returns ``(σ², ‖S x‖² / (x'S x)², tr(Q))``, arrays (R,).
+    """
+    sx = schur @ x
+    xsx = sx @ x
+    with np.errstate(divide="ignore", invalid="ignore"):
+        trace_q = np.trace(schur, axis1=1, axis2=2) - np.sum(sx * sx, axis=1) / xsx
+        sigma2 = np.where(trace_q > 0, np.maximum(drop - dispersion * df, 0.0) / trace_q, 0.0)
+        return sigma2, np.sum(sx * sx, axis=1) / xsx ** 2, trace_q
+
+
+def cell_dispersion(counts, mu, cells, parameters):
+    """Pearson scale ``Σ (y − μ)² / μ / (N − parameters)`` over the ``cells`` with μ > 0
+    (arrays (R, ..., T)), 1 where no degree of freedom is left, and its degrees of freedom."""
+    use = cells & (mu > 0)
+    with np.errstate(divide="ignore", invalid="ignore"):
+        x2 = np.sum(np.where(use, (counts - mu) ** 2 / np.where(use, mu, 1.0), 0.0), axis=tuple(range(1, mu.ndim)))
+    df = use.sum(axis=tuple(range(1, mu.ndim))) - parameters
+    return np.where(df > 0, x2 / np.maximum(df, 1), 1.0), np.maximum(df, 0)
+
+
+def unit_dispersion(unit_counts, unit_group, effort, b, linked_parameters):
+    """Pearson scale of the year-effect model from the counts of single units (R, n, T) whose
+    groups (visits and effort) are ``unit_group``: ``μ_it = Y_i b_t e_it / Σ_s b_s e_is``."""
+    unit_effort = effort[unit_group]
+    cells = np.broadcast_to(unit_effort > 0, unit_counts.shape)
+    totals = np.sum(np.where(cells, unit_counts, 0.0), axis=2)
+    with np.errstate(divide="ignore", invalid="ignore"):
+        sb = b @ unit_effort.T
+        a = np.where(sb > 0, totals / sb, 0.0)
+    mu = a[:, :, None] * b[:, None, :] * unit_effort[None]
+    return cell_dispersion(unit_counts, mu, cells, (totals > 0).sum(axis=1) + linked_parameters)
+
+
+def fit_trend(table, effort, x, units=None):
+    """Both models on R tables of counts: :class:`TrendFit`.
+
+    Parameters
+    ----------
+    table : (R, P, T) array
+        Counts of each unit, or group of units with the same visits and effort, in each
+        year (0 where not visited).
+    effort : (P, T) array
+        Effort, 0 where not visited.
+    x : (T,) array
+        Centred years.
+    units : tuple, optional
+        ``(counts (R, n, T), group of each unit (n,))``: the counts of the single units when
+        ``table`` holds groups of units, for the Pearson scale between units within years.
+        Without it, the groups are taken as the units.
+
+    Only the totals enter the fits: ``Y_p`` and ``Y_·t`` are sufficient for both log-linear
     models, and the deviance drop is
 
         ΔD = 2 [Σ_p Y_p (log S0_p − log Σ_t e_pt b_t) + Σ_t Y_·t (log b_t − β x_t)]
 
     (the terms ``y − μ`` vanish because each model fits every unit's total).
     """
-    group_totals = np.atleast_2d(np.asarray(group_totals, dtype=float))
-    year_totals = np.atleast_2d(np.asarray(year_totals, dtype=float))
+    table = np.asarray(table, dtype=float)
+    table = table[None] if table.ndim == 2 else table
+    group_totals, year_totals = table.sum(axis=2), table.sum(axis=1)
     beta, information, converged = fit_trend_slope(group_totals, year_totals, effort, x)
     a, b = fit_year_effects(group_totals, year_totals, effort)
     s0, s1, _ = _moments(np.nan_to_num(beta), effort, x)
@@ -345,9 +446,19 @@ def fit_trend(group_totals, year_totals, effort, x):
         mean_x = np.where(s0 > 0, s1 / s0, 0.0)
     drop = 2.0 * (_xlogy_sum(group_totals, s0) - _xlogy_sum(group_totals, b @ effort.T)
                   + _xlogy_sum(year_totals, b) - year_totals @ x * np.nan_to_num(beta))
-    c, years = linked_groups(effort, group_totals > 0)
+    c, years, complete = linked_groups(effort, group_totals > 0, complete=True)
     drop = np.where(np.isfinite(beta), np.maximum(drop, 0.0), np.nan)
-    return TrendFit(beta, information, drop, years - c - 1, converged, trend_effect, a, b, mean_x)
+    df = years - c - 1
+    if units is None:
+        mu = a[:, :, None] * b[:, None, :] * effort[None]
+        dispersion, dispersion_df = cell_dispersion(table, mu, np.broadcast_to(effort > 0, mu.shape),
+                                                    (group_totals > 0).sum(axis=1) + years - c)
+    else:
+        dispersion, dispersion_df = unit_dispersion(units[0], units[1], effort, b, years - c)
+    sigma2, leverage, trace = year_to_year_variance(year_information(a, b, effort, group_totals), x, drop, df,
+                                                    dispersion)
+    return TrendFit(beta, information, drop, df, converged, dispersion, dispersion_df, sigma2, leverage, trace,
+                    complete, trend_effect, a, b, mean_x)
 
 
 # ----------------------------------------------------------------------------
@@ -371,9 +482,10 @@ class CountDetails:
     """What the unit-count fit saw: units (``n_units`` in the records, ``n_used`` in the
     fit), ``zero_units`` (counted nothing: left out), records used and ``skipped``
     (no count), the between-unit Pearson scale ``unit_dispersion`` with ``se_unit`` (the
-    standard error a Poisson GLM with unit dummies and Pearson scale gives), the
-    year-level ``year_dispersion`` = ``lack_of_fit`` / ``lof_df``, ``index_dispersion``
-    (the Pearson scale of the year-effect model, for the index intervals), ``linked``
+    standard error a Poisson GLM with unit dummies and Pearson scale gives), ``year_sd``
+    (the year-to-year SD on the log scale, from ``lack_of_fit`` on ``lof_df`` degrees of
+    freedom), ``index_dispersion`` (the Pearson scale of the year-effect model: variation
+    between units within years, for the index intervals and the trend), ``linked``
     (c, linked sets of units and years) and ``mean_effort``."""
 
     n_units: int
@@ -383,7 +495,7 @@ class CountDetails:
     skipped: int
     unit_dispersion: float
     se_unit: float
-    year_dispersion: float
+    year_sd: float
     lack_of_fit: float
     lof_df: int
     index_dispersion: float
@@ -519,10 +631,14 @@ def year_index(table, a, b, dispersion, confidence):
     return index, lo, hi
 
 
-def trend_line(table, fit, dispersion, df, confidence):
-    """The fitted trend ``ē Σ_i a_i exp(β x_t) / n`` at the years and its band:
-    ``Var(log line_t) = φ (Σ w_i² / Y_i + (u − x_t)² / I_β)``, ``w_i = a_i / Σ a``,
-    ``u = Σ w_i x̄_i`` (x̄_i the unit's fitted mean year), t quantile on ``df``."""
+def trend_line(table, fit, df, confidence):
+    """The fitted trend ``ē Σ_i a_i exp(β x_t) / n`` at the years and its band,
+
+        Var(log line_t) = φ (Σ w_i² / Y_i + (u − x_t)² / I_β) + σ_Y² (Σ_t m_t² + (u − x_t)² L)
+
+    with ``w_i = a_i / Σ a``, ``u = Σ w_i x̄_i`` (x̄_i the unit's fitted mean year), ``m_t``
+    the years' shares of the fitted counts, σ_Y² the year-to-year variance and L its
+    leverage on β (:func:`year_to_year_variance`); t quantile on ``df``."""
     totals = table.counts.sum(axis=1)
     a = fit.group_effect[0]
     beta, info = float(fit.beta[0]), float(fit.information[0])
@@ -531,17 +647,21 @@ def trend_line(table, fit, dispersion, df, confidence):
     u = float(np.sum(w * fit.mean_x[0][used]))
     x = table.x
     line = float(table.effort[table.visited].mean()) * a.sum() * np.exp(beta * x) / len(a)
-    variance = dispersion * (np.sum(w * w / totals[used]) + (u - x) ** 2 / info)
+    shares = (a[:, None] * table.effort * np.exp(beta * x)[None, :]).sum(axis=0)
+    shares = shares / shares.sum()
+    variance = float(fit.dispersion[0]) * (np.sum(w * w / totals[used]) + (u - x) ** 2 / info)
+    variance = variance + float(fit.year_variance[0]) * (np.sum(shares ** 2) + (u - x) ** 2 * float(
+        fit.year_leverage[0]))
     half = stats.t.ppf(0.5 + confidence / 2.0, df) * np.sqrt(variance)
     return line, line * np.exp(-half), line * np.exp(half)
 
 
 def _count_fit(table):
-    """The fit of :func:`fit_trend` on one table, with the Pearson scales of both models."""
-    totals, year_totals = table.counts.sum(axis=1), table.counts.sum(axis=0)
+    """The fit of :func:`fit_trend` on one table, and the Pearson scale of the trend model."""
+    totals = table.counts.sum(axis=1)
     if totals.sum() <= 0:
         raise InputError(message("Every count is 0: no trend can be estimated from records without animals."))
-    fit = fit_trend(totals[None], year_totals[None], table.effort, table.x)
+    fit = fit_trend(table.counts[None], table.effort, table.x)
     if not np.isfinite(fit.beta[0]):
         raise InputError(message(
             "The trend cannot be estimated: no unit with animals was counted in two different years. A trend "
@@ -553,20 +673,16 @@ def _count_fit(table):
     cells = table.visited & (totals > 0)[:, None]
     n_cells, n_used = int(cells.sum()), int((totals > 0).sum())
     mu_trend = fit.group_effect[0][:, None] * table.effort * np.exp(fit.beta[0] * table.x)[None, :]
-    mu_year = fit.year_group_effect[0][:, None] * fit.year_effect[0][None, :] * table.effort
     linked = int(len(set(_link_labels(cells)[1].tolist()) - {-1}))
-    years_reached = int(cells.any(axis=0).sum())
     df_unit = n_cells - n_used - 1
-    df_index = n_cells - n_used - (years_reached - linked)
     phi_unit = _pearson(table.counts, mu_trend, cells) / df_unit if df_unit > 0 else float("nan")
-    phi_index = _pearson(table.counts, mu_year, cells) / df_index if df_index > 0 else 1.0
-    return fit, phi_unit, df_unit, phi_index, linked
+    return fit, phi_unit, df_unit, linked
 
 
 def unit_count_trend(table, confidence=0.95, with_strata=True):
     """The log-linear trend from unit counts (see the module notes): :class:`TrendResult`."""
     confidence = confidence_iv(confidence)
-    fit, phi_unit, df_unit, phi_index, linked = _count_fit(table)
+    fit, phi_unit, df_unit, linked = _count_fit(table)
     totals = table.counts.sum(axis=1)
     beta, info = float(fit.beta[0]), float(fit.information[0])
     se_unit = float(np.sqrt(phi_unit / info)) if np.isfinite(phi_unit) else float("nan")
@@ -574,21 +690,22 @@ def unit_count_trend(table, confidence=0.95, with_strata=True):
     warnings = []
     year_level = lof_df >= 1
     if year_level:
-        se, df, dispersion = float(fit.se[0]), lof_df, float(fit.year_dispersion[0])
+        se, df = float(fit.se[0]), lof_df
     else:
-        se, df, dispersion = se_unit, max(df_unit, 1), phi_unit
+        se, df = se_unit, max(df_unit, 1)
         warnings.append(message(
             "This revisit design leaves no degrees of freedom for year-to-year variation (the panels do not link "
             "enough years): the interval allows only for variation between units, and is too narrow if whole "
             "years differ. Add a core of units visited every year."))
     change, lo, hi, p = change_summary(beta, se, df, confidence)
+    phi_index = float(fit.dispersion[0])
     index, index_lo, index_hi = year_index(table, fit.year_group_effect[0], fit.year_effect[0], phi_index, confidence)
-    line, line_lo, line_hi = trend_line(table, fit, dispersion, df, confidence)
+    line, line_lo, line_hi = trend_line(table, fit, df, confidence)
     zero = tuple(u for u, y in zip(table.unit_ids, totals) if y <= 0)
     details = CountDetails(
         len(table.unit_ids), int((totals > 0).sum()), zero, table.n_records, table.skipped, phi_unit, se_unit,
-        float(fit.year_dispersion[0]) if year_level else float("nan"), float(fit.lack_of_fit[0]), lof_df, phi_index,
-        linked, float(table.effort[table.visited].mean()), year_level)
+        float(np.sqrt(fit.year_variance[0])) if year_level else float("nan"), float(fit.lack_of_fit[0]), lof_df,
+        phi_index, linked, float(table.effort[table.visited].mean()), year_level)
     strata = stratum_trends(table, confidence) if with_strata and table.strata is not None else ()
     return TrendResult(SOURCE_COUNTS, confidence, table.years, index, index_lo, index_hi, line, line_lo, line_hi,
                        beta, se, float(df), change, lo, hi, p, details, strata, tuple(warnings))

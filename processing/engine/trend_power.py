@@ -230,15 +230,15 @@ def panel_totals(counts, panel, n_panels):
     return np.stack([counts[:, panel == p, :].sum(axis=1) for p in range(n_panels)], axis=1)
 
 
-def detections(totals, effort, x, beta_true, alpha, two_sided):
-    """Whether each replicate's t test on β rejects (NaN fits never do); also the fits."""
-    totals = totals * effort[None]
-    fit = fit_trend(totals.sum(axis=2), totals.sum(axis=1), effort, x)
-    df = fit.lof_df.astype(float)
+def detections(totals, effort, x, beta_true, alpha, two_sided, units=None):
+    """Whether each replicate's t test on β rejects, and whether its fit failed (failed
+    fits never reject). ``totals`` (R, P, T) panel totals, ``units`` the unit counts and
+    panels for the scale between units (see :func:`trend.fit_trend`)."""
+    fit = fit_trend(totals * effort[None], effort, x, units=units)
     with np.errstate(invalid="ignore", divide="ignore"):
         t = fit.beta / fit.se
-        usable = np.isfinite(t) & (df >= 1)
-        dfs = np.maximum(df, 1.0)
+        usable = np.isfinite(t) & (fit.lof_df >= 1)
+        dfs = np.maximum(fit.lof_df, 1).astype(float)
         if two_sided:
             hit = np.abs(t) > stats.t.ppf(1.0 - alpha / 2.0, dfs)
         else:
@@ -301,10 +301,11 @@ def _chunk_hits(spec, configs, rng, size):
         for (k, m) in configs:
             if m not in by_units:
                 effort, panel = _config_effort(spec.plan, m, spec.plan.years)
-                by_units[m] = (panel_totals(counts[:, :m], panel, len(effort)), effort)
-            totals, effort = by_units[m]
+                by_units[m] = (panel_totals(counts[:, :m], panel, len(effort)), effort, panel)
+            totals, effort, panel = by_units[m]
             years = t[:k] - t[:k].mean()
-            hit, bad = detections(totals[:, :, :k], effort[:, :k], years, beta, spec.alpha, spec.two_sided)
+            hit, bad = detections(totals[:, :, :k], effort[:, :k], years, beta, spec.alpha, spec.two_sided,
+                                  units=(counts[:, :m, :k], panel))
             hits[(change, k, m)] = int(hit.sum())
             failed[(change, k, m)] = int(bad.sum())
     return hits, failed

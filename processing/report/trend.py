@@ -144,7 +144,9 @@ def _count_details(report, result, tr):
         [tr("Records without a count (not surveyed)"), d.skipped],
         [tr("Scale between units (Pearson)"), d.unit_dispersion],
         [tr("Standard error of the log change allowing only for variation between units"), d.se_unit],
-        [tr("Scale between years (deviance drop per degree of freedom)"), d.year_dispersion],
+        [tr("Year-to-year SD, log scale (method of moments)"), d.year_sd],
+        [tr("Scale between units within years (Pearson)"), d.index_dispersion],
+        [tr("Deviance drop from the trend to one effect per year"), d.lack_of_fit],
         [tr("Degrees of freedom between years"), d.lof_df],
         [tr("Standard error of the log change used"), result.se],
         [tr("Linked sets of units and years"), d.linked],
@@ -185,12 +187,16 @@ def _method(report, result, tr):
             "a closed form, so β is fitted by Newton's method on the profile likelihood. The change per year is "
             "exp(β) − 1."))
         report.paragraph(tr(
-            "Overdispersion (quasi-likelihood): counts of one year share that year's conditions, so the interval "
-            "uses the scale between years: the model with one effect per year (fitted by iterative proportional "
-            "fitting; Bishop, Fienberg & Holland 1975) is compared with the trend model, and the deviance drop per "
-            "degree of freedom scales the variance of β, with Student's t on those degrees of freedom. The scale "
-            "between units (Pearson) is shown for comparison. The index of each year is the year model's expected "
-            "mean count per unit, with delta-method intervals from the Pearson scale."))
+            "Overdispersion (quasi-likelihood): counts of one year share that year's conditions. The model with one "
+            "effect per year (fitted by iterative proportional fitting; Bishop, Fienberg & Holland 1975) is "
+            "compared with the trend model: the deviance drop per degree of freedom scales the variance of β "
+            "(McCullagh & Nelder 1989), in proportion to how strongly the slope depends on single years, and β is "
+            "tested with Student's t on the degrees of freedom between years. So years that differ as a whole "
+            "widen the interval. The year-to-year SD is estimated from the same drop by the method of moments "
+            "(DerSimonian & Laird 1986, here for a log-linear model). The standard error allowing only for "
+            "variation between units (the Pearson-scaled GLM) is shown for comparison. The index of each year is "
+            "the year model's expected mean count per unit, with delta-method intervals from the Pearson scale "
+            "within years."))
     else:
         report.paragraph(tr(
             "The log yearly estimates are regressed on year by weighted least squares. Each year's variance is its "
