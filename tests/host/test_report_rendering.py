@@ -380,7 +380,54 @@ def run_chain(folder, demo_reserve_outputs, strata=None, name=None, run=None):
         "OUTPUT": "memory:", "OUTPUT_MODELS": "memory:", "REPORT": report("distancedensity"),
     })
     reports["plotwise:distancedensity"] = distance["REPORT"]
+
+    panels = run("plotwise:panels", {
+        "UNITS": output_layer(layout["OUTPUT"]), "PANEL_DESIGN": 2, "PANELS": 3, "CORE_SHARE": 0.3,
+        "START_YEAR": 2030, "YEARS": 9, "UNIT_DAYS": 0.5, "SEED": 2, "OUTPUT": "memory:",
+        "OUTPUT_SCHEDULE": "memory:", "REPORT": report("panels"),
+    })
+    reports["plotwise:panels"] = panels["REPORT"]
+    power = run("plotwise:trendpower", {
+        "N_UNITS": 30, "YEARS": 8, "PANEL_DESIGN": 2, "PANELS": 3, "CORE_SHARE": 0.3, "CHANGES": "-4, -8",
+        "REPLICATES": 60, "SEED": 4, "OUTPUT_TABLE": "memory:", "REPORT": report("trendpower"),
+    })
+    reports["plotwise:trendpower"] = power["REPORT"]
+    trend = run("plotwise:trend", {
+        "INPUT": yearly_counts(counted, name or "unit counts"), "SOURCE": 0, "STRATUM_FIELD": "stratum",
+        "OUTPUT_TABLE": "memory:", "REPORT": report("trend"),
+    })
+    reports["plotwise:trend"] = trend["REPORT"]
     return reports
+
+
+def yearly_counts(units, name, years=8, seed=3):
+    """Invented counts of the counted units over several years (a decline of 5% a year), a table named ``name``
+    with the units' own stratum values."""
+    rng = np.random.default_rng(seed)
+    rows = []
+    for feature in units.getFeatures():
+        if feature["role"] != "primary":
+            continue
+        level = rng.normal(1.0, 0.6)
+        for t in range(years):
+            rows.append([feature["unit_id"], 2020 + t, int(rng.poisson(np.exp(level - 0.05 * t))),
+                         str(feature["stratum"])])
+    from qgis.core import QgsFeature, QgsVectorLayer
+
+    from plotwise.plugin import compat
+
+    layer = QgsVectorLayer("None", name, "memory")
+    layer.dataProvider().addAttributes([compat.make_field(n, k) for n, k in
+                                        (("unit_id", "string"), ("year", "int"), ("count", "int"),
+                                         ("stratum", "string"))])
+    layer.updateFields()
+    features = []
+    for row in rows:
+        feature = QgsFeature(layer.fields())
+        feature.setAttributes(row)
+        features.append(feature)
+    layer.dataProvider().addFeatures(features)
+    return layer
 
 
 @pytest.fixture(scope="module")
@@ -493,6 +540,8 @@ def test_hostile_names_and_values_come_out_escaped(plotwise_provider, demo_reser
         "plotwise:stations": [HOSTILE_NAME],
         "plotwise:occupancy": [HOSTILE_NAME],
         "plotwise:distancedensity": [HOSTILE_NAME, HOSTILE_VALUE],
+        "plotwise:panels": [HOSTILE_VALUE],
+        "plotwise:trend": [HOSTILE_NAME, HOSTILE_VALUE],
     }
     documents = {}
     for alg, strings in expected.items():
