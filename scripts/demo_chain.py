@@ -456,6 +456,90 @@ STEPS.append(step_camera_season)
 STEPS.append(step_distance)
 
 
+MONITORING_YEARS = 10
+VELMAR_CHANGE = -4.0  # % per year: the known decline of the demo's ten simulated years
+
+
+def step_monitoring(demo):
+    """Ten simulated years of the velmar with a known decline, in split panels: panels, power, trend (issue 16)."""
+    if not all(demo.available(a) for a in ("plotwise:panels", "plotwise:trendpower", "plotwise:trend")):
+        return
+    layout = demo.results.get("layout")
+    if layout is None:
+        print("  monitoring skipped: no layout yet")
+        return
+    first = 2026
+    panels = demo.run("plotwise:panels", {
+        "UNITS": layout["OUTPUT"], "PANEL_DESIGN": 2, "PANELS": 3, "CORE_SHARE": 0.3,  # a core + 3 rotating panels
+        "START_YEAR": first, "YEARS": MONITORING_YEARS, "UNIT_DAYS": 0.5, "SEED": SEED + 40,
+        "OUTPUT": demo.table("panels"), "OUTPUT_SCHEDULE": demo.table("panel_schedule"),
+        "REPORT": demo.report("11_panels"),
+    })
+    demo.layers.append(("Revisit panels", demo.layer_uri("panels"), "ogr", "panels"))
+    pilot = (demo.results.get("estimate") or {}).get("OUTPUT_TABLE")
+    power = demo.run("plotwise:trendpower", {
+        "PANEL_LAYER": demo.layer_uri("panels"), "CHANGES": "-2, -4, -6",
+        "SD_UNIT_YEAR": 0.3, "SD_YEAR": 0.1,  # illustrative: a single season cannot measure these
+        **({"PILOT": pilot} if pilot else {"MEAN_COUNT": 1.5, "SD_UNIT": 1.0}),
+        "DETECTION": 0.9, "ALPHA": 0.05, "TWO_SIDED": True, "REPLICATES": 1000, "SEED": SEED + 41,
+        "OUTPUT_TABLE": demo.table("trend_power"), "REPORT": demo.report("12_trend_power"),
+    })
+    counts = simulate_monitoring_years(demo, first)
+    trend = demo.run("plotwise:trend", {
+        "INPUT": counts, "SOURCE": 0, "UNIT_ID_FIELD": "unit_id", "YEAR_FIELD": "year", "COUNT_FIELD": "count",
+        "STRATUM_FIELD": "stratum", "CONFIDENCE": 0.95,
+        "OUTPUT_TABLE": demo.table("velmar_index"), "REPORT": demo.report("13_trend"),
+    })
+    demo.results["monitoring"] = {"panels": panels, "power": power, "trend": trend}
+    print(f"    split panels over {first}-{first + MONITORING_YEARS - 1}; simulated decline {VELMAR_CHANGE:g}% per "
+          f"year; estimated {trend['CHANGE']:+.1f}% per year (95% CI {trend['CHANGE_LO']:+.1f}% to "
+          f"{trend['CHANGE_HI']:+.1f}%)")
+
+
+def simulate_monitoring_years(demo, first):
+    """The velmar counts of the panels' units over the years: each year the simulated animals are thinned to
+    (1 + change)^t of their number (nested: an animal gone stays gone, seeded), the units visited that year
+    are counted with plotwise:simulatecounts at a constant detection of 0.9, and the counts are gathered in
+    one table (unit_id, year, count, stratum) in the demo GeoPackage."""
+    import numpy as np
+    from qgis.core import QgsFeature, QgsVectorLayer
+
+    from plotwise.plugin import compat
+
+    animals = QgsVectorLayer(demo.layer_uri("animals"), "animals", "ogr")
+    keep_score = np.random.default_rng(SEED + 42).random(animals.featureCount())
+    ids = [f.id() for f in animals.getFeatures()]
+    table = QgsVectorLayer("None", "velmar counts", "memory")
+    table.dataProvider().addAttributes([compat.make_field(n, k) for n, k in (
+        ("unit_id", "string"), ("year", "int"), ("count", "int"), ("stratum", "string"))])
+    table.updateFields()
+    for t in range(MONITORING_YEARS):
+        year = first + t
+        alive = [i for i, u in zip(ids, keep_score) if u < (1 + VELMAR_CHANGE / 100) ** t]
+        animals.selectByIds(alive)
+        survivors = demo.processing.run("native:saveselectedfeatures", {"INPUT": animals, "OUTPUT": "memory:"})
+        visited = demo.processing.run("native:extractbyexpression", {
+            "INPUT": demo.layer_uri("panels"), "EXPRESSION": f"array_contains(string_to_array(\"years\"), '{year}')",
+            "OUTPUT": "memory:"})["OUTPUT"]
+        counted = demo.processing.run("plotwise:simulatecounts", {
+            "UNITS": visited, "ANIMALS": survivors["OUTPUT"], "DETECTION": 0.9, "SEED": SEED + 50 + t,
+            "OUTPUT": "memory:"})["OUTPUT"]
+        rows = []
+        for unit in counted.getFeatures():
+            row = QgsFeature(table.fields())
+            row.setAttributes([unit["unit_id"], year, unit["count"], str(unit["stratum"])])
+            rows.append(row)
+        table.dataProvider().addFeatures(rows)
+    animals.removeSelection()
+    demo.processing.run("native:retainfields", {"INPUT": table, "FIELDS": ["unit_id", "year", "count", "stratum"],
+                                                 "OUTPUT": demo.table("velmar_counts")})
+    print(f"  {MONITORING_YEARS} simulated years counted ({first}-{first + MONITORING_YEARS - 1})")
+    return demo.layer_uri("velmar_counts")
+
+
+STEPS.append(step_monitoring)
+
+
 # -- project -------------------------------------------------------------------------
 def write_project(demo):
     from qgis.core import QgsProject, QgsRasterLayer, QgsVectorLayer

@@ -352,11 +352,10 @@ def hull_population(xy, points=2000):
 
 @dataclass(frozen=True)
 class PanelBalance:
-    """The spread of one panel in one stratum: ``measure`` (Stevens & Olsen 2004) and
-    ``random_median``, the median measure of the same number of the stratum's units
-    drawn at random (from the random rearrangements of the check)."""
+    """The spread of one panel over the layout: ``measure`` (Stevens & Olsen 2004) and
+    ``random_median``, the median measure of random panels of the same make-up (the same
+    number of units from each stratum), from the rearrangements of the check."""
 
-    stratum: object
     panel: int
     n_units: int
     measure: float
@@ -368,8 +367,8 @@ class BalanceCheck:
     """The permutation check of :func:`panel_balance_check`: every panel's
     :class:`PanelBalance`, the ``p_value`` of the panels' spread against random
     rearrangements (small: panels spread more evenly than chance) and ``balanced``
-    (``p_value <= alpha``). ``rows`` is empty when no stratum could be checked (a stratum
-    needs 3 units not on one line, and a panel 2 units and fewer than its stratum)."""
+    (``p_value <= alpha``). ``rows`` is empty when nothing could be checked (the units
+    need 3 positions not on one line, and a panel 2 units and fewer than all)."""
 
     rows: tuple
     p_value: float
@@ -378,12 +377,12 @@ class BalanceCheck:
     alpha: float
 
 
-MAX_DISTANCE_CELLS = 4_000_000  # population points x units of a stratum kept as one distance matrix
+MAX_DISTANCE_CELLS = 4_000_000  # population points x units kept as one distance matrix
 
 
-class _StratumSpread:
-    """The Voronoi measure of any subset of one stratum's units over a fixed population, from
-    the population-to-unit distances computed once (or a k-d tree per subset when too many)."""
+class _SubsetSpread:
+    """The Voronoi measure of any subset of the units over a fixed population, from the
+    population-to-unit distances computed once (or a k-d tree per subset when too many)."""
 
     def __init__(self, xy, population):
         self.xy, self.population = xy, population
@@ -405,40 +404,38 @@ class _StratumSpread:
 def panel_balance_check(xy, assignment, rng, rearrangements=RANDOM_SUBSETS, alpha=BALANCE_ALPHA):
     """Are the panels more evenly spread than random parts of the layout?
 
-    In each stratum the population is a fine grid over the convex hull of the stratum's
-    primary units (:func:`hull_population`). The statistic is the sum over panels and
-    strata of ``log B`` (:func:`voronoi_balance`, Stevens & Olsen 2004). Its null
-    distribution comes from ``rearrangements`` random permutations of the panel labels
-    within each stratum (the panel sizes kept): the labels of a simple random layout are
-    exchangeable, so the p-value ``(1 + #{permuted <= observed}) / (rearrangements + 1)``
-    is uniform for it, and small when the draw order spreads every panel evenly.
+    The population is a fine grid over the convex hull of the primary units
+    (:func:`hull_population`); each panel (its units in every stratum) gets the Voronoi
+    measure :func:`voronoi_balance` of Stevens & Olsen (2004), and the statistic is the sum
+    of their logarithms. Its null distribution comes from ``rearrangements`` random
+    permutations of the panel labels within each stratum (each panel keeps its units per
+    stratum): the labels of a (stratified) simple random layout are exchangeable within
+    strata, so the p-value ``(1 + #{permuted <= observed}) / (rearrangements + 1)`` is
+    uniform for it, and small when the draw order spreads every panel evenly.
     """
     xy = np.asarray(xy, dtype=float).reshape(-1, 2)
-    groups = []
-    for key in assignment.strata:
-        in_stratum = np.array([s == key for s in assignment.unit_strata], dtype=bool)
-        members = np.flatnonzero((assignment.panel >= 0) & in_stratum)
-        labels = assignment.panel[members]
-        numbers = [p for p in assignment.spec.panel_numbers if 2 <= np.sum(labels == p) < len(members)]
-        population = hull_population(xy[members]) if numbers and len(members) >= 3 else None
-        if population is not None and len(population):
-            groups.append((key, _StratumSpread(xy[members], population), labels, numbers))
-    if not groups:
+    members = np.flatnonzero(assignment.panel >= 0)
+    labels = assignment.panel[members]
+    numbers = [p for p in assignment.spec.panel_numbers if 2 <= np.sum(labels == p) < len(members)]
+    population = hull_population(xy[members]) if numbers and len(members) >= 3 else None
+    if population is None or not len(population):
         return BalanceCheck((), float("nan"), False, int(rearrangements), float(alpha))
+    spread = _SubsetSpread(xy[members], population)
+    strata = [s for i, s in enumerate(assignment.unit_strata) if assignment.panel[i] >= 0]
+    blocks = [np.flatnonzero(np.array([s == key for s in strata])) for key in dict.fromkeys(strata)]
     log = lambda value: np.log(max(value, 1e-12))  # noqa: E731
-    observed = sum(log(spread.measure(labels == p)) for _, spread, labels, nums in groups for p in nums)
+    observed = sum(log(spread.measure(labels == p)) for p in numbers)
     null = np.zeros(rearrangements)
-    random_measures = {}
-    for key, spread, labels, nums in groups:
-        for b in range(rearrangements):
-            shuffled = rng.permutation(labels)
-            for p in nums:
-                measure = spread.measure(shuffled == p)
-                random_measures.setdefault((key, p), []).append(measure)
-                null[b] += log(measure)
-    rows = tuple(
-        PanelBalance(key, int(p), int(np.sum(labels == p)), spread.measure(labels == p),
-                     float(np.median(random_measures[(key, p)])))
-        for key, spread, labels, nums in groups for p in nums)
+    random_measures = {p: [] for p in numbers}
+    for b in range(rearrangements):
+        shuffled = labels.copy()
+        for block in blocks:
+            shuffled[block] = rng.permutation(labels[block])
+        for p in numbers:
+            measure = spread.measure(shuffled == p)
+            random_measures[p].append(measure)
+            null[b] += log(measure)
+    rows = tuple(PanelBalance(int(p), int(np.sum(labels == p)), spread.measure(labels == p),
+                              float(np.median(random_measures[p]))) for p in numbers)
     p_value = float((1 + np.sum(null <= observed)) / (rearrangements + 1))
     return BalanceCheck(rows, p_value, p_value <= alpha, int(rearrangements), float(alpha))

@@ -111,14 +111,14 @@ def _balance_section(report, balance, run, tr):
     if run.design_source:
         report.paragraph(run.design_source)
     if not balance.rows:
-        report.paragraph(tr("No panel could be checked: a stratum needs at least 3 units not on one line, and a "
-                            "panel at least 2 units and fewer than its stratum."))
+        report.paragraph(tr("No panel could be checked: the units need at least 3 positions not on one line, and a "
+                            "panel at least 2 units."))
         return
-    rows = [[str(r.stratum) if r.stratum is not None else tr("all"), tr("panel {p}").format(p=r.panel)
-             if r.panel else tr("core / every year"), r.n_units, r.measure, r.random_median] for r in balance.rows]
-    report.table([tr("Stratum"), tr("Panel"), tr("Units"), tr("Spread measure"), tr("Same number at random")], rows,
-                 caption=tr("Spread measure of Stevens & Olsen (2004): 0 for a perfectly even spread, larger for "
-                            "clumps and gaps. 'At random' is the median over random rearrangements of the panels."))
+    rows = [[panel_label(r.panel, 1, tr), r.n_units, r.measure, r.random_median] for r in balance.rows]
+    report.table([tr("Panel"), tr("Units"), tr("Spread measure"), tr("Random panels of the same make-up")], rows,
+                 caption=tr("Spread measure of Stevens & Olsen (2004) over the whole layout: 0 for a perfectly even "
+                            "spread, larger for clumps and gaps. The random panels take the same number of units "
+                            "from each stratum (median over the rearrangements of the check)."))
     if balance.balanced:
         report.paragraph(tr(
             "The panels are more evenly spread than random parts of the layout (p = {p:.3f} from {b} random "
@@ -129,7 +129,7 @@ def _balance_section(report, balance, run, tr):
             "The panels are not shown to be more evenly spread than random parts of the layout (p = {p:.3f} from {b} "
             "random rearrangements). If the layout was simple random, each panel is just a random part of it; if it "
             "was a systematic grid, whose draw order runs row by row, the panels are bands. For evenly spread panels, "
-            "lay out the units with the spatially balanced design. With few units per stratum the check may also "
+            "lay out the units with the spatially balanced design. With few units the check may also "
             "miss a real balance.").format(p=balance.p_value, b=balance.rearrangements))
 
 
@@ -144,8 +144,8 @@ def _method_section(report, spec, tr):
     report.paragraph(tr(
         "In a spatially balanced layout every run of consecutive units of the draw order is itself spread over the "
         "stratum (Robertson et al. 2013), so each panel covers the whole stratum. The check compares the Voronoi "
-        "spread measure of the panels (Stevens & Olsen 2004), computed over a fine grid on the convex hull of each "
-        "stratum's units, with random rearrangements of the panels over the same units."))
+        "spread measure of the panels (Stevens & Olsen 2004), computed over a fine grid on the convex hull of the "
+        "units, with random rearrangements of the panels within each stratum."))
     report.paragraph(tr(
         "Reserve units get no panel. A reserve that replaces a primary unit takes over the primary's panel and "
         "years; record the replacement."))

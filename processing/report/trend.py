@@ -37,6 +37,12 @@ class TrendRun:
     area_field: object
 
 
+def _p_text(p):
+    if not np.isfinite(p):
+        return "–"
+    return "< 0.001" if p < 0.001 else f"{p:.3f}"
+
+
 def _pct(value):
     return f"{abs(value):.1f}%"
 
@@ -70,7 +76,7 @@ def fill_trend_report(report, result, run, tr, warnings=()):
         (tr("change per year"), f"{result.change:+.1f}%" if np.isfinite(result.change) else "–"),
         (tr("{level} interval").format(level=f"{100 * result.confidence:g}%"),
          f"{result.change_lo:+.1f}% … {result.change_hi:+.1f}%" if np.isfinite(result.change_lo) else "–"),
-        (tr("p-value (no trend)"), f"{result.p_value:.3g}" if np.isfinite(result.p_value) else "–"),
+        (tr("p-value (no trend)"), _p_text(result.p_value)),
         (tr("years"), f"{int(result.years[0])}–{int(result.years[-1])} ({len(result.years)})"),
     ])
     report.paragraph(tr("Over {first}–{last} the trend is {words}.").format(

@@ -107,7 +107,7 @@ def _curves(report, result, tr):
     report.section(tr("Power against units"))
     series = []
     for change in spec.changes:
-        rows = [r for r in result.rows if r.change == change and "units" in r.curve]
+        rows = sorted((r for r in result.rows if r.change == change and "units" in r.curve), key=lambda r: r.n_units)
         series.append((_change_label(change, tr), [r.n_units for r in rows], [r.power for r in rows],
                        [r.power_se for r in rows]))
     report.figure(power_curves_svg(series, x_label=tr("units"), y_label=tr("power"), target_label=tr("80%")),
@@ -117,8 +117,8 @@ def _curves(report, result, tr):
 
 
 def _table(report, result, curve, tr):
-    rows = [[r.years, r.n_units, f"{r.change:+g}", r.power, r.power_se, r.failed]
-            for r in result.rows if curve in r.curve]
+    chosen = sorted((r for r in result.rows if curve in r.curve), key=lambda r: (r.change, r.years, r.n_units))
+    rows = [[r.years, r.n_units, f"{r.change:+g}", r.power, r.power_se, r.failed] for r in chosen]
     report.table([tr("Years"), tr("Units"), tr("Change (% per year)"), tr("Power"), tr("Monte Carlo SE"),
                   tr("Fits that failed")], rows)
 

@@ -262,12 +262,13 @@ def test_every_spatial_output_loads_styled(plotwise_provider, demo_reserve_outpu
         applied = {layer.name(): layer.customProperty(styles.STYLE_PROPERTY) for layer in spatial}
         assert all(applied.values()), applied
         # frame (buildframe), strata and their raster (stratify), strata (allocate), units (layout,
-        # simulatecounts), estimate (estimate); comparedesigns writes a table only; stations (stations,
-        # simulatedetections) and the sites with occupancy (occupancy); line transects (layout), with
+        # simulatecounts), estimate (estimate); comparedesigns, trendpower and trend write tables only; stations
+        # (stations, simulatedetections) and the sites with occupancy (occupancy); line transects (layout), with
         # sightings (simulatecounts: units and the observations as dots; the units layers share their names
-        # with the first two, so this mapping by name holds them once), estimate (distancedensity)
-        assert sorted(applied.values()) == ["animals", "estimate", "estimate", "frame", "occupancy", "stations",
-                                            "stations", "strata", "strata",
+        # with the first two, so this mapping by name holds them once), estimate (distancedensity); the units
+        # with panels (panels)
+        assert sorted(applied.values()) == ["animals", "estimate", "estimate", "frame", "occupancy", "panels",
+                                            "stations", "stations", "strata", "strata",
                                             "strata_raster", "units", "units"]
     finally:
         project.removeAllMapLayers()
