@@ -400,15 +400,23 @@ def cell_dispersion(counts, mu, cells, parameters):
 
 def unit_dispersion(unit_counts, unit_group, effort, b, linked_parameters):
     """Pearson scale of the year-effect model from the counts of single units (R, n, T) whose
-    groups (visits and effort) are ``unit_group``: ``μ_it = Y_i b_t e_it / Σ_s b_s e_is``."""
+    groups (visits and effort) are ``unit_group``: ``μ_it = a_i b_t e_it`` with
+    ``a_i = Y_i / Σ_s b_s e_is``. Because each unit's fitted total is its count total,
+    ``X² = Σ y² / μ − Σ y``, summed unit by unit without forming μ. Returns the scale and
+    its degrees of freedom."""
     unit_effort = effort[unit_group]
-    cells = np.broadcast_to(unit_effort > 0, unit_counts.shape)
-    totals = np.sum(np.where(cells, unit_counts, 0.0), axis=2)
+    visits = unit_effort > 0
+    counts = unit_counts * visits[None]
+    totals = counts.sum(axis=2)
     with np.errstate(divide="ignore", invalid="ignore"):
-        sb = b @ unit_effort.T
-        a = np.where(sb > 0, totals / sb, 0.0)
-    mu = a[:, :, None] * b[:, None, :] * unit_effort[None]
-    return cell_dispersion(unit_counts, mu, cells, (totals > 0).sum(axis=1) + linked_parameters)
+        a = np.where(totals > 0, totals / (b @ unit_effort.T), 0.0)
+        inverse_b = np.where(b > 0, 1.0 / b, 0.0)
+        inverse_e = np.where(visits, 1.0 / np.where(visits, unit_effort, 1.0), 0.0)
+        squares = np.einsum("rit,rt,it->ri", counts * counts, inverse_b, inverse_e)
+        x2 = np.sum(np.where(a > 0, squares / np.where(a > 0, a, 1.0), 0.0), axis=1) - totals.sum(axis=1)
+    cells = np.sum(np.where(a > 0, np.einsum("it,rt->ri", visits.astype(float), (b > 0).astype(float)), 0.0), axis=1)
+    df = cells - (totals > 0).sum(axis=1) - linked_parameters
+    return np.where(df > 0, x2 / np.maximum(df, 1), 1.0), np.maximum(df, 0)
 
 
 def fit_trend(table, effort, x, units=None):
