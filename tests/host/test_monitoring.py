@@ -232,3 +232,17 @@ def test_the_three_algorithms_run_in_qgis_process_with_pinned_parameters_only(qg
     out = run("run", "plotwise:trend", "--", f"INPUT={counts}", "SOURCE=0", "UNIT_ID_FIELD=unit_id",
               "YEAR_FIELD=year", "COUNT_FIELD=count", "CONFIDENCE=0.95", f"OUTPUT_TABLE={base / 'index.gpkg'}")
     assert "CHANGE" in out and "P_VALUE" in out and (base / "index.gpkg").exists()
+
+
+def test_panels_style_colours_each_panel(run_alg, layout):
+    from qgis.core import QgsCategorizedSymbolRenderer
+
+    from plotwise.processing import styles
+
+    units = run_alg("plotwise:panels", {"UNITS": layout(), "PANEL_DESIGN": 1, "PANELS": 3, "START_YEAR": 2030,
+                                        "YEARS": 6, "OUTPUT": "memory:", "OUTPUT_SCHEDULE": "memory:"})["OUTPUT"]
+    assert styles.apply_style(units, "panels")
+    renderer = units.renderer()
+    assert isinstance(renderer, QgsCategorizedSymbolRenderer) and renderer.classAttribute() == "panel"
+    values = {c.value() for c in renderer.categories()}
+    assert {1, 2, 3} <= values  # one category per panel (and one for the reserves without a panel)
