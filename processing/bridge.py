@@ -413,7 +413,8 @@ def read_attributes(source, field_names, layer_name=""):
     missing = [name for name in field_names if name and fields.lookupField(name) < 0]
     if missing:
         raise QgsProcessingException(
-            tr("Layer '{layer}' has no field named {names}. Choose an existing field.").format(
+            QCoreApplication.translate(
+                "PlotwiseBridge", "Layer '{layer}' has no field named {names}. Choose an existing field.").format(
                 layer=layer_name, names=", ".join(f"'{m}'" for m in missing)))
     request = QgsFeatureRequest()
     request.setFlags(_NO_GEOMETRY)

@@ -162,7 +162,7 @@ class Panels(PlotwiseAlgorithm):
         report = self.new_report(self.tr("Revisit panels"))
         fill_panels_report(report, assignment, balance, PanelsRun(
             units.sourceName(), order_field, stratum_field, int((assignment.panel < 0).sum()), seeded.seed,
-            crs.authid()), lambda s: self.tr(s, "PlotwiseReport"), warnings)
+            crs.authid()), warnings)
         self.style_output(context, dest, "panels")
         result = {self.OUTPUT: dest, self.OUTPUT_SCHEDULE: schedule}
         path = self.write_report(report, parameters, context, feedback)

@@ -137,7 +137,7 @@ class Trend(PlotwiseAlgorithm):
             feedback.pushWarning(warning)
         table = self._write_table(parameters, context, result)
         report = self.new_report(self.tr("Trend over years"))
-        fill_trend_report(report, result, run, lambda s: self.tr(s, "PlotwiseReport"), warnings)
+        fill_trend_report(report, result, run, warnings)
         feedback.pushInfo(self.tr("Change per year: {c:+.2f}% ({lo:+.2f}% to {hi:+.2f}%), p = {p:.3g}.").format(
             c=result.change, lo=result.change_lo, hi=result.change_hi, p=result.p_value))
         outputs = {self.OUTPUT_TABLE: table, self.CHANGE: result.change, self.CHANGE_LO: result.change_lo,

@@ -189,8 +189,7 @@ class TrendPower(PlotwiseAlgorithm):
                               self.tr("Change {c:+g}% per year: 80% power not reached within {t} years.").format(
                                   c=change, t=plan.years))
         report = self.new_report(self.tr("Power to detect a trend"))
-        fill_power_report(report, result, PowerRun(design_from, pilot_from, seeded.seed), design_name,
-                          lambda s: self.tr(s, "PlotwiseReport"), warnings)
+        fill_power_report(report, result, PowerRun(design_from, pilot_from, seeded.seed), design_name, warnings)
         outputs = {self.OUTPUT_TABLE: dest}
         path = self.write_report(report, parameters, context, feedback)
         if path:

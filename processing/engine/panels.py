@@ -29,11 +29,15 @@ import numpy as np
 from scipy.spatial import cKDTree
 from shapely.geometry import MultiPoint
 
-from .errors import InputError, message
+from .errors import QT_TRANSLATE_NOOP, InputError, message
 from .geometry import contains_xy
 
 EVERY_YEAR, ROTATING, SPLIT = 0, 1, 2
-DESIGNS = ("every year", "rotating panels", "split panels")
+DESIGNS = (
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "every year"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "rotating panels"),
+    QT_TRANSLATE_NOOP("PlotwiseEngine", "split panels"),
+)
 CORE = 0  # the panel of units visited every year
 MAX_YEARS = 50  # the `years` text of a unit must fit a 254-character field
 RESERVE = "reserve"
@@ -95,25 +99,36 @@ def panel_spec_iv(design, panels=1, core_share=0.0, start_year=2025, years=10):
     """
     design, panels, years = int(design), int(panels), int(years)
     if design not in (EVERY_YEAR, ROTATING, SPLIT):
-        raise InputError(message("PANEL_DESIGN must be 0 (every year), 1 (rotating) or 2 (split); got {design}.",
-                                 design=design))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "PANEL_DESIGN must be 0 (every year), 1 (rotating) or 2 (split); got {design}."),
+            design=design))
     if not 1 <= years <= MAX_YEARS:
-        raise InputError(message("YEARS must be between 1 and {most}; got {years}.", most=MAX_YEARS, years=years))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "YEARS must be between 1 and {most}; got {years}."),
+            most=MAX_YEARS, years=years))
     if design == EVERY_YEAR:
         return PanelSpec(EVERY_YEAR, 1, 1.0, int(start_year), years)
     if panels < 2:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "Rotating and split designs need at least 2 rotating panels (PANELS = {panels}); with one panel every "
-            "unit is visited every year: choose the every-year design.", panels=panels))
+            "unit is visited every year: choose the every-year design."),
+            panels=panels))
     if panels > years:
-        raise InputError(message(
-            "With {panels} panels over {years} years, panels {first} to {panels} would never be visited: use at "
-            "most {years} panels or more years.", panels=panels, years=years, first=years + 1))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "With {panels} panels over {years} years, panels {first} to {panels} would never be visited: use at most "
+            "{years} panels or more years."),
+            panels=panels, years=years, first=years + 1))
     share = float(core_share)
     if design == SPLIT and not 0.0 < share < 1.0:
-        raise InputError(message(
-            "CORE_SHARE must lie between 0 and 1 for split panels (the share of units visited every year); "
-            "got {share:g}.", share=share))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "CORE_SHARE must lie between 0 and 1 for split panels (the share of units visited every year); got "
+            "{share:g}."),
+            share=share))
     return PanelSpec(design, panels, share if design == SPLIT else 0.0, int(start_year), years)
 
 
@@ -210,16 +225,20 @@ def _units_iv(unit_ids, strata, draw_ord, roles):
     roles = tuple(roles) if roles is not None else ("primary",) * n
     primary = np.array([r != RESERVE for r in roles], dtype=bool)
     if n == 0 or not primary.any():
-        raise InputError(message("The units layer has no primary unit to assign to panels."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The units layer has no primary unit to assign to panels.")))
     order_given = draw_ord is not None
     if not order_given:
         return _UnitsInput(tuple(unit_ids), strata, np.arange(1, n + 1, dtype=float), primary, False)
     values = np.array([np.nan if v is None else float(v) for v in draw_ord])
     missing = [unit_ids[i] for i in np.flatnonzero(~np.isfinite(values) & primary)]
     if missing:
-        raise InputError(message(
-            "Units {ids} have no draw order (draw_ord is empty). Panels follow the draw order of the layout: "
-            "fill it or choose another draw-order field.", ids=_id_text(missing)), ids=missing)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Units {ids} have no draw order (draw_ord is empty). Panels follow the draw order of the layout: fill it "
+            "or choose another draw-order field."),
+            ids=_id_text(missing)), ids=missing)
     repeated = []
     for key in dict.fromkeys(strata):
         members = np.flatnonzero(primary & np.array([s == key for s in strata]))
@@ -227,9 +246,10 @@ def _units_iv(unit_ids, strata, draw_ord, roles):
         shared, counts = np.unique(values_h, return_counts=True)
         repeated += [unit_ids[i] for i in members[np.isin(values_h, shared[counts > 1])]]
     if repeated:
-        raise InputError(message(
-            "Units {ids} share their draw order with another primary unit of the same stratum. Each stratum's "
-            "draw order must run 1, 2, 3, ... without repeats: use the layout's draw_ord field.",
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Units {ids} share their draw order with another primary unit of the same stratum. Each stratum's draw "
+            "order must run 1, 2, 3, ... without repeats: use the layout's draw_ord field."),
             ids=_id_text(repeated)), ids=repeated)
     return _UnitsInput(tuple(unit_ids), strata, values, primary, True)
 
@@ -276,14 +296,19 @@ def assign_panels(unit_ids, spec, strata=None, draw_ord=None, roles=None, days_p
         sizes.update({(key, p): int(c) for p, c in zip(spec.panel_numbers, counts)})
         empty = [p for p, c in zip(spec.panel_numbers, counts) if c == 0]
         if empty:
-            warnings.append(message(
-                "Stratum {key} has {n} primary units, too few for {k} panels: panels {empty} get none of its "
-                "units in that stratum.", key=key if key is not None else "(all)", n=len(members),
-                k=len(spec.panel_numbers), empty=", ".join(str(p) for p in empty)))
+            warnings.append(message(QT_TRANSLATE_NOOP(
+                "PlotwiseEngine",
+                "Stratum {key} has {n} primary units, too few for {k} panels: panels {empty} get none of its units "
+                "in that stratum."),
+                key=key if key is not None else "(all)",
+                n=len(members),
+                k=len(spec.panel_numbers),
+                empty=", ".join(str(p) for p in empty)))
     if not units.order_given:
-        warnings.append(message(
-            "The units have no draw-order field: panels follow the order of the features in the layer. Panels "
-            "are evenly spread only when that order is the draw order of a spatially balanced layout."))
+        warnings.append(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The units have no draw-order field: panels follow the order of the features in the layer. Panels are "
+            "evenly spread only when that order is the draw order of a spatially balanced layout.")))
     return PanelAssignment(
         panel, _years_texts(panel, spec), _schedule(panel, spec, days_per_unit), sizes, spec, keys,
         units.strata, float(days_per_unit), tuple(warnings))

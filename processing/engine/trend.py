@@ -69,7 +69,7 @@ import numpy as np
 from scipy import sparse, stats
 from scipy.sparse.csgraph import connected_components
 
-from .errors import InputError, message
+from .errors import QT_TRANSLATE_NOOP, InputError, message
 
 MIN_YEARS = 3
 NEWTON_TOL = 1e-12
@@ -140,22 +140,27 @@ def count_table_iv(unit_ids, years, counts, effort=None, strata=None, record_ids
     bad = [record_ids[i] for i in range(n) if unit_ids[i] is None or not np.isfinite(year_values[i])
            or year_values[i] != np.round(year_values[i])]
     if bad:
-        raise InputError(message(
-            "Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records.",
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records."),
             ids=_ids(bad)), ids=bad)
     count_values = _as_float(counts)
     given = np.array([c is not None for c in counts], dtype=bool)
     bad = [record_ids[i] for i in np.flatnonzero(given & ~(np.isfinite(count_values) & (count_values >= 0)))]
     if bad:
-        raise InputError(message(
-            "Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty "
-            "(NULL) when the unit was not surveyed.", ids=_ids(bad)), ids=bad)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) "
+            "when the unit was not surveyed."),
+            ids=_ids(bad)), ids=bad)
     effort_values = np.ones(n) if effort is None else _as_float(effort)
     bad = [record_ids[i] for i in np.flatnonzero(given & ~(np.isfinite(effort_values) & (effort_values > 0)))]
     if bad:
-        raise InputError(message(
-            "Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or "
-            "leave the unit-area field empty.", ids=_ids(bad)), ids=bad)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the "
+            "unit-area field empty."),
+            ids=_ids(bad)), ids=bad)
     keep = np.flatnonzero(given)
     return _arrange_counts(
         [unit_ids[i] for i in keep], year_values[keep].astype(int), count_values[keep], effort_values[keep],
@@ -166,8 +171,9 @@ def _arrange_counts(units, years, counts, effort, strata, record_ids, skipped):
     unit_keys = tuple(dict.fromkeys(units))
     calendar = np.unique(years)
     if len(calendar) < MIN_YEARS:
-        raise InputError(message(
-            "A trend needs counts from at least {k} different years; the records hold {found}.",
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "A trend needs counts from at least {k} different years; the records hold {found}."),
             k=MIN_YEARS, found=", ".join(str(y) for y in calendar) or "none"))
     row = {key: i for i, key in enumerate(unit_keys)}
     rows = np.array([row[u] for u in units], dtype=int)
@@ -179,9 +185,11 @@ def _arrange_counts(units, years, counts, effort, strata, record_ids, skipped):
             twice.append(f"{unit_keys[r]} {calendar[c]} ({seen[(r, c)]}, {rid})")
         seen[(r, c)] = rid
     if twice:
-        raise InputError(message(
-            "Units were counted twice in one year (unit, year and record ids): {items}. Keep one record per unit "
-            "and year (add the counts of repeated visits first).", items=_ids(twice)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Units were counted twice in one year (unit, year and record ids): {items}. Keep one record per unit and "
+            "year (add the counts of repeated visits first)."),
+            items=_ids(twice)))
     shape = (len(unit_keys), len(calendar))
     table, visited, area = np.zeros(shape), np.zeros(shape, dtype=bool), np.zeros(shape)
     table[rows, cols], visited[rows, cols], area[rows, cols] = counts, True, effort
@@ -197,9 +205,11 @@ def _unit_strata(unit_keys, units, strata):
         by_unit.setdefault(u, set()).add(s)
     mixed = [u for u, s in by_unit.items() if len(s) > 1]
     if mixed:
-        raise InputError(message(
-            "Units {ids} lie in more than one stratum across their records. A unit keeps its stratum over the "
-            "years: correct the stratum field.", ids=_ids(mixed)), ids=mixed)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Units {ids} lie in more than one stratum across their records. A unit keeps its stratum over the years: "
+            "correct the stratum field."),
+            ids=_ids(mixed)), ids=mixed)
     return tuple(next(iter(by_unit[u])) for u in unit_keys)
 
 
@@ -563,8 +573,10 @@ class TrendResult:
 def confidence_iv(confidence):
     confidence = float(confidence)
     if not 0.5 <= confidence < 1.0:
-        raise InputError(message("CONFIDENCE must lie between 0.5 and 1 (for example 0.95); got {c:g}.",
-                                 c=confidence))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "CONFIDENCE must lie between 0.5 and 1 (for example 0.95); got {c:g}."),
+            c=confidence))
     return confidence
 
 
@@ -668,16 +680,20 @@ def _count_fit(table):
     """The fit of :func:`fit_trend` on one table, and the Pearson scale of the trend model."""
     totals = table.counts.sum(axis=1)
     if totals.sum() <= 0:
-        raise InputError(message("Every count is 0: no trend can be estimated from records without animals."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Every count is 0: no trend can be estimated from records without animals.")))
     fit = fit_trend(table.counts[None], table.effort, table.x)
     if not np.isfinite(fit.beta[0]):
-        raise InputError(message(
-            "The trend cannot be estimated: no unit with animals was counted in two different years. A trend "
-            "needs units revisited over the years."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The trend cannot be estimated: no unit with animals was counted in two different years. A trend needs "
+            "units revisited over the years.")))
     if not fit.converged[0]:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "The trend did not converge (the counts may lie all in the first or all in the last years). Check the "
-            "year and count fields."))
+            "year and count fields.")))
     cells = table.visited & (totals > 0)[:, None]
     n_cells, n_used = int(cells.sum()), int((totals > 0).sum())
     mu_trend = fit.group_effect[0][:, None] * table.effort * np.exp(fit.beta[0] * table.x)[None, :]
@@ -701,10 +717,11 @@ def unit_count_trend(table, confidence=0.95, with_strata=True):
         se, df = float(fit.se[0]), lof_df
     else:
         se, df = se_unit, max(df_unit, 1)
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "This revisit design leaves no degrees of freedom for year-to-year variation (the panels do not link "
-            "enough years): the interval allows only for variation between units, and is too narrow if whole "
-            "years differ. Add a core of units visited every year."))
+            "enough years): the interval allows only for variation between units, and is too narrow if whole years "
+            "differ. Add a core of units visited every year.")))
     change, lo, hi, p = change_summary(beta, se, df, confidence)
     phi_index = float(fit.dispersion[0])
     index, index_lo, index_hi = year_index(table, fit.year_group_effect[0], fit.year_effect[0], phi_index, confidence)
@@ -729,14 +746,16 @@ def stratum_trends(table, confidence):
         sub = CountTable(tuple(u for u, k in zip(table.unit_ids, keep) if k), table.years[years],
                          table.counts[keep][:, years], table.visited[keep][:, years], table.effort[keep][:, years],
                          None, int(table.visited[keep].sum()), 0)
+        missing = StratumTrend(key, int(keep.sum()), *(float("nan"),) * 5)
+        if years.sum() < MIN_YEARS:
+            rows.append(missing)
+            continue
         try:
-            if years.sum() < MIN_YEARS:
-                raise InputError(message("too few years"))
             result = unit_count_trend(sub, confidence, with_strata=False)
             rows.append(StratumTrend(key, int(keep.sum()), result.change, result.change_lo, result.change_hi,
                                      result.p_value, result.df))
         except InputError:
-            rows.append(StratumTrend(key, int(keep.sum()), *(float("nan"),) * 5))
+            rows.append(missing)
     return tuple(rows)
 
 
@@ -769,27 +788,38 @@ def estimate_series_iv(years, estimates, ses, record_ids=None):
     y, e, s = _as_float(years), _as_float(estimates), _as_float(ses)
     bad = [record_ids[i] for i in range(n) if not np.isfinite(y[i]) or y[i] != np.round(y[i])]
     if bad:
-        raise InputError(message("Records {ids} have no whole-number year.", ids=_ids(bad)), ids=bad)
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Records {ids} have no whole-number year."),
+            ids=_ids(bad)), ids=bad)
     bad = [record_ids[i] for i in range(n) if not (np.isfinite(e[i]) and e[i] > 0)]
     if bad:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years "
-            "without an estimate, or use the unit counts instead.", ids=_ids(bad)), ids=bad)
+            "without an estimate, or use the unit counts instead."),
+            ids=_ids(bad)), ids=bad)
     bad = [record_ids[i] for i in range(n) if not (np.isfinite(s[i]) and s[i] > 0)]
     if bad:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the "
-            "estimate step writes it).", ids=_ids(bad)), ids=bad)
+            "estimate step writes it)."),
+            ids=_ids(bad)), ids=bad)
     order = np.argsort(y, kind="stable")
     y, e, s = y[order], e[order], s[order]
     twice = sorted({int(v) for v in y[1:][np.diff(y) == 0]})
     if twice:
-        raise InputError(message("Years {years} have more than one estimate. Keep one estimate per year (for the "
-                                 "estimate step's table: its rows 'all', or one stratum).",
-                                 years=_ids(twice)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Years {years} have more than one estimate. Keep one estimate per year (for the estimate step's table: "
+            "its rows 'all', or one stratum)."),
+            years=_ids(twice)))
     if len(y) < MIN_YEARS:
-        raise InputError(message("A trend needs estimates from at least {k} different years; the records hold {n}.",
-                                 k=MIN_YEARS, n=len(y)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "A trend needs estimates from at least {k} different years; the records hold {n}."),
+            k=MIN_YEARS, n=len(y)))
     return EstimateSeries(y, e, s)
 
 
@@ -838,9 +868,11 @@ def estimate_trend(series, confidence=0.95):
                               float(np.sqrt(plain_inv[1, 1])))
     warnings = []
     if len(y) < 5:
-        warnings.append(message(
+        warnings.append(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "Only {k} years: the year-to-year variation and the trend are both poorly known, and the interval is "
-            "wide.", k=len(y)))
+            "wide."),
+            k=len(y)))
     return TrendResult(SOURCE_ESTIMATES, confidence, series.years, series.estimates, series.estimates / spread,
                        series.estimates * spread, line, line * np.exp(-half), line * np.exp(half), float(coef[1]),
                        se, float(df), change, lo, hi, p, details, (), tuple(warnings))

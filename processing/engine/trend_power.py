@@ -31,7 +31,7 @@ import numpy as np
 from scipy import stats
 
 from . import panels as panel_engine
-from .errors import Cancelled, InputError, message
+from .errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .trend import MIN_YEARS, fit_trend, linked_groups
 
 UNIT_FACTORS = (0.25, 0.5, 1.0, 1.5, 2.0)
@@ -79,7 +79,9 @@ def plan_from_years(year_lists, panel_labels=None):
     panel per distinct set of years, its share the share of units with that set."""
     sets = [tuple(sorted(int(y) for y in years)) for years in year_lists if years]
     if not sets:
-        raise InputError(message("The panels layer holds no unit with visit years (field years)."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The panels layer holds no unit with visit years (field years).")))
     first = min(s[0] for s in sets)
     last = max(s[-1] for s in sets)
     distinct = sorted(set(sets), key=lambda s: (-len(s), s))
@@ -115,14 +117,20 @@ def parse_changes(text):
     try:
         values = tuple(float(p.replace("−", "-")) for p in parts)
     except ValueError:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "CHANGES must be a list of annual changes in % per year, separated by commas (for example -3, -5); got "
-            "'{text}'.", text=text)) from None
+            "'{text}'."),
+            text=text)) from None
     if not values:
-        raise InputError(message("CHANGES is empty: give at least one annual change in % (for example -3)."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "CHANGES is empty: give at least one annual change in % (for example -3).")))
     if any(v <= -100 or not np.isfinite(v) for v in values):
-        raise InputError(message("Annual changes must be above -100 % per year; got {values}.",
-                                 values=", ".join(f"{v:g}" for v in values)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "Annual changes must be above -100 % per year; got {values}."),
+            values=", ".join(f"{v:g}" for v in values)))
     return tuple(dict.fromkeys(values))
 
 
@@ -131,21 +139,38 @@ def power_spec_iv(plan, n_units, changes, mean_count, sd_unit, sd_unit_year, sd_
     """Check the inputs of :func:`trend_power` and return a :class:`PowerSpec`."""
     n_units, replicates = int(n_units), int(replicates)
     if n_units < len(plan.labels):
-        raise InputError(message("N_UNITS = {n} is fewer than the {k} panels of the design: every panel needs a unit.",
-                                 n=n_units, k=len(plan.labels)))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "N_UNITS = {n} is fewer than the {k} panels of the design: every panel needs a unit."),
+            n=n_units, k=len(plan.labels)))
     if plan.years < MIN_YEARS:
-        raise InputError(message("A trend needs at least {k} years; YEARS = {years}.", k=MIN_YEARS, years=plan.years))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "A trend needs at least {k} years; YEARS = {years}."),
+            k=MIN_YEARS, years=plan.years))
     if not 10 <= replicates <= MAX_REPLICATES:
-        raise InputError(message("REPLICATES must lie between 10 and {most}; got {r}.", most=MAX_REPLICATES,
-                                 r=replicates))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "REPLICATES must lie between 10 and {most}; got {r}."),
+            most=MAX_REPLICATES, r=replicates))
     if not mean_count > 0:
-        raise InputError(message("MEAN_COUNT must be above 0 (animals per unit in the first year)."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "MEAN_COUNT must be above 0 (animals per unit in the first year).")))
     if min(sd_unit, sd_unit_year, sd_year) < 0:
-        raise InputError(message("The standard deviations SD_UNIT, SD_UNIT_YEAR and SD_YEAR cannot be negative."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The standard deviations SD_UNIT, SD_UNIT_YEAR and SD_YEAR cannot be negative.")))
     if not 0 < detection <= 1:
-        raise InputError(message("DETECTION must lie in (0, 1]; got {p:g}.", p=detection))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "DETECTION must lie in (0, 1]; got {p:g}."),
+            p=detection))
     if not 0 < alpha < 0.5:
-        raise InputError(message("ALPHA must lie between 0 and 0.5 (for example 0.05 or 0.1); got {a:g}.", a=alpha))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "ALPHA must lie between 0 and 0.5 (for example 0.05 or 0.1); got {a:g}."),
+            a=alpha))
     return PowerSpec(plan, n_units, tuple(float(c) for c in changes), float(mean_count), float(sd_unit),
                      float(sd_unit_year), float(sd_year), float(detection), float(alpha), bool(two_sided), replicates)
 
@@ -163,14 +188,17 @@ def unit_sd_from_pilot(means, sds, ns, sd_unit_year=0.0):
     means, sds, ns = (np.asarray(v, dtype=float) for v in (means, sds, ns))
     keep = np.isfinite(means) & np.isfinite(sds) & (ns >= 2)
     if not keep.any():
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "The pilot table has no stratum with 2 or more units and a mean and SD of the counts (fields n, mean_c, "
-            "sd_c of the estimate step)."))
+            "sd_c of the estimate step).")))
     means, sds, ns = means[keep], sds[keep], ns[keep]
     total = ns.sum()
     m = float(np.sum(ns * means) / total)
     if m <= 0:
-        raise InputError(message("The pilot counted no animal: its mean count is 0, so no power can be computed."))
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The pilot counted no animal: its mean count is 0, so no power can be computed.")))
     variance = (np.sum((ns - 1) * sds ** 2) + np.sum(ns * (means - m) ** 2)) / (total - 1)
     sigma2 = np.log1p(max(variance - m, 0.0) / m ** 2) - sd_unit_year ** 2
     return m, float(np.sqrt(max(sigma2, 0.0)))
@@ -197,9 +225,10 @@ def year_grid(plan, n_units):
         if t[0] - c[0] - 1 >= 1:
             out.append(k)
     if not out:
-        raise InputError(message(
+        raise InputError(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
             "This revisit design never links enough years to test a trend (each panel must be visited in several "
-            "years, or a core visited every year): use fewer panels, a core, or more years."))
+            "years, or a core visited every year): use fewer panels, a core, or more years.")))
     return tuple(out)
 
 
@@ -359,8 +388,10 @@ def _power_result(spec, years_axis, units_axis, configs, hits, failed):
     warnings = []
     worst = max(failed.values()) if failed else 0
     if worst > 0.01 * r:
-        warnings.append(message(
-            "In up to {n} of {r} simulated programmes the trend could not be estimated (too few animals counted "
-            "in revisited units); they count as not detected. Raise MEAN_COUNT or the number of units if that "
-            "is unrealistic.", n=worst, r=r))
+        warnings.append(message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "In up to {n} of {r} simulated programmes the trend could not be estimated (too few animals counted in "
+            "revisited units); they count as not detected. Raise MEAN_COUNT or the number of units if that is "
+            "unrealistic."),
+            n=worst, r=r))
     return PowerResult(tuple(rows), spec, years_axis, units_axis, needed, tuple(warnings))

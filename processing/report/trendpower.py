@@ -1,10 +1,15 @@
 """The report of ``plotwise:trendpower``: power curves against years and against units, the
 years needed for 80% power, the assumptions and the caution that power depends on them.
-Built from the engine's :class:`PowerResult`; never imports the host."""
+Built from the engine's :class:`PowerResult`; never imports the host.
+
+Every string is marked ``report.translate("PlotwiseReport", "…")`` (or
+``QT_TRANSLATE_NOOP("PlotwiseReport", "…")`` for the constants below).
+"""
 from dataclasses import dataclass
 
 import numpy as np
 
+from ..engine.errors import QT_TRANSLATE_NOOP
 from .time_charts import power_curves_svg
 
 REFERENCES = (
@@ -15,6 +20,14 @@ REFERENCES = (
     "Monitoring and Assessment 85, 277-292.",
     "McCullagh, P. & Nelder, J. A. (1989). Generalized Linear Models, 2nd ed. Chapman & Hall (log-linear "
     "models and quasi-likelihood, the test used on each simulated programme).",
+)
+POWER_HEADER = (
+    QT_TRANSLATE_NOOP("PlotwiseReport", "Years"),
+    QT_TRANSLATE_NOOP("PlotwiseReport", "Units"),
+    QT_TRANSLATE_NOOP("PlotwiseReport", "Change (% per year)"),
+    QT_TRANSLATE_NOOP("PlotwiseReport", "Power"),
+    QT_TRANSLATE_NOOP("PlotwiseReport", "Monte Carlo SE"),
+    QT_TRANSLATE_NOOP("PlotwiseReport", "Fits that failed"),
 )
 
 
@@ -29,104 +42,117 @@ class PowerRun:
     seed: int
 
 
-def _change_label(change, tr):
-    return tr("{c:+g}% per year").format(c=change)
+def _change_label(report, change):
+    return report.translate("PlotwiseReport", "{c:+g}% per year").format(c=change)
 
 
-def fill_power_report(report, result, run, design_name, tr, warnings=()):
+def fill_power_report(report, result, run, design_name, warnings=()):
     """Fill ``report`` for a :class:`PowerResult`; ``design_name`` describes the panels,
     ``warnings`` are in the user's language."""
     spec = result.spec
-    planned = {row.change: row for row in result.rows if row.years == spec.plan.years and row.n_units == spec.n_units}
-    report.key_figures(
-        [(tr("power for {c} after {t} years").format(c=_change_label(c, tr), t=spec.plan.years),
-          f"{planned[c].power:.2f} ± {planned[c].power_se:.2f}") for c in spec.changes]
-        + [(tr("years for 80% power ({c})").format(c=_change_label(c, tr)),
-            str(result.years_needed[c]) if result.years_needed[c] else tr("more than {t}").format(t=spec.plan.years))
-           for c in spec.changes])
+    years = spec.plan.years
+    planned = {row.change: row for row in result.rows if row.years == years and row.n_units == spec.n_units}
+    figures = [(report.translate("PlotwiseReport", "power for {c} after {t} years").format(
+        c=_change_label(report, c), t=years), f"{planned[c].power:.2f} ± {planned[c].power_se:.2f}")
+        for c in spec.changes]
     for change in spec.changes:
         needed = result.years_needed[change]
-        report.paragraph(
-            tr("A change of {c} is detected with 80% power after {t} years of this programme.").format(
-                c=_change_label(change, tr), t=needed) if needed else
-            tr("A change of {c} is not detected with 80% power within {t} years of this programme.").format(
-                c=_change_label(change, tr), t=spec.plan.years))
-    report.parameters(_parameters(result, run, design_name, tr))
+        figures.append((report.translate("PlotwiseReport", "years for 80% power ({c})").format(
+            c=_change_label(report, change)), str(needed) if needed else report.translate(
+            "PlotwiseReport", "more than {t}").format(t=years)))
+    report.key_figures(figures)
+    for change in spec.changes:
+        needed, label = result.years_needed[change], _change_label(report, change)
+        if needed:
+            report.paragraph(report.translate(
+                "PlotwiseReport",
+                "A change of {c} is detected with 80% power after {t} years of this programme.").format(
+                c=label, t=needed))
+        else:
+            report.paragraph(report.translate(
+                "PlotwiseReport",
+                "A change of {c} is not detected with 80% power within {t} years of this programme.").format(
+                c=label, t=years))
+    report.parameters(_parameters(report, result, run, design_name))
     report.warnings(list(warnings))
-    _curves(report, result, tr)
-    _method(report, result, tr)
-    report.section(tr("Cautions"))
-    report.note(tr(
-        "Power depends on the variance components assumed: the spread between units, the unit × year noise and "
-        "above all the year-to-year variation shared by all units. Larger values than those entered give less "
-        "power. The defaults are illustrative, not measured: use values from a pilot or from earlier years of the "
-        "programme, and try a range."))
-    report.note(tr(
-        "The simulation assumes a steady change in % per year, constant detection, and that every planned visit "
-        "happens. Missed visits, a change in detection or a trend that is not steady reduce the power."))
+    _curves(report, result)
+    _method(report, result)
+    _cautions(report)
     report.references(REFERENCES)
     report.field_safety()
     return report
 
 
-def _parameters(result, run, design_name, tr):
+def _parameters(report, result, run, design_name):
     spec = result.spec
+    if run.design_from:
+        design_name = report.translate("PlotwiseReport", "{design} (from {layer})").format(
+            design=design_name, layer=run.design_from)
+    two_sided = report.translate("PlotwiseReport", "two-sided")
+    one_sided = report.translate("PlotwiseReport", "one-sided, in the direction of the change")
     return {
-        tr("Units (N_UNITS)"): spec.n_units,
-        tr("Years (YEARS)"): spec.plan.years,
-        tr("Panel design"): (tr("{design} (from {layer})").format(design=design_name, layer=run.design_from)
-                             if run.design_from else design_name),
-        tr("Changes to detect (% per year)"): ", ".join(f"{c:+g}" for c in spec.changes),
-        tr("Mean animals per unit in the first year (MEAN_COUNT)"): f"{spec.mean_count:g}",
-        tr("SD between units, log scale (SD_UNIT)"): f"{spec.sd_unit:.3g}",
-        tr("SD unit × year, log scale (SD_UNIT_YEAR)"): f"{spec.sd_unit_year:.3g}",
-        tr("SD year to year, log scale (SD_YEAR)"): f"{spec.sd_year:.3g}",
-        tr("Mean count and SD between units from"): run.pilot_from or tr("the parameters"),
-        tr("Detection probability (DETECTION)"): f"{spec.detection:g}",
-        tr("Significance level (ALPHA)"): f"{spec.alpha:g}",
-        tr("Test"): tr("two-sided") if spec.two_sided else tr("one-sided, in the direction of the change"),
-        tr("Replicates (REPLICATES)"): spec.replicates,
-        tr("Seed"): run.seed,
-        tr("Largest Monte Carlo standard error of a power"): f"{0.5 / np.sqrt(spec.replicates):.3f}",
+        report.translate("PlotwiseReport", "Units (N_UNITS)"): spec.n_units,
+        report.translate("PlotwiseReport", "Years (YEARS)"): spec.plan.years,
+        report.translate("PlotwiseReport", "Panel design"): design_name,
+        report.translate("PlotwiseReport", "Changes to detect (% per year)"):
+            ", ".join(f"{c:+g}" for c in spec.changes),
+        report.translate("PlotwiseReport", "Mean animals per unit in the first year (MEAN_COUNT)"):
+            f"{spec.mean_count:g}",
+        report.translate("PlotwiseReport", "SD between units, log scale (SD_UNIT)"): f"{spec.sd_unit:.3g}",
+        report.translate("PlotwiseReport", "SD unit × year, log scale (SD_UNIT_YEAR)"): f"{spec.sd_unit_year:.3g}",
+        report.translate("PlotwiseReport", "SD year to year, log scale (SD_YEAR)"): f"{spec.sd_year:.3g}",
+        report.translate("PlotwiseReport", "Mean count and SD between units from"):
+            run.pilot_from or report.translate("PlotwiseReport", "the parameters"),
+        report.translate("PlotwiseReport", "Detection probability (DETECTION)"): f"{spec.detection:g}",
+        report.translate("PlotwiseReport", "Significance level (ALPHA)"): f"{spec.alpha:g}",
+        report.translate("PlotwiseReport", "Test"): two_sided if spec.two_sided else one_sided,
+        report.translate("PlotwiseReport", "Replicates (REPLICATES)"): spec.replicates,
+        report.translate("PlotwiseReport", "Seed"): run.seed,
+        report.translate("PlotwiseReport", "Largest Monte Carlo standard error of a power"):
+            f"{0.5 / np.sqrt(spec.replicates):.3f}",
     }
 
 
-def _curves(report, result, tr):
+def _series(report, result, curve, axis):
+    series = []
+    for change in result.spec.changes:
+        rows = sorted((r for r in result.rows if r.change == change and curve in r.curve), key=lambda r: axis(r))
+        series.append((_change_label(report, change), [axis(r) for r in rows], [r.power for r in rows],
+                       [r.power_se for r in rows]))
+    return series
+
+
+def _curves(report, result):
     spec = result.spec
-    report.section(tr("Power against years"))
-    series = []
-    for change in spec.changes:
-        rows = [r for r in result.rows if r.change == change and "years" in r.curve]
-        series.append((_change_label(change, tr), [r.years for r in rows], [r.power for r in rows],
-                       [r.power_se for r in rows]))
-    report.figure(power_curves_svg(series, x_label=tr("years of the programme"), y_label=tr("power"),
-                                   target_label=tr("80%")),
-                  tr("Power with {n} units against the number of years; bars: ±2 Monte Carlo SE.").format(
-                      n=spec.n_units))
-    _table(report, result, "years", tr)
-    report.section(tr("Power against units"))
-    series = []
-    for change in spec.changes:
-        rows = sorted((r for r in result.rows if r.change == change and "units" in r.curve), key=lambda r: r.n_units)
-        series.append((_change_label(change, tr), [r.n_units for r in rows], [r.power for r in rows],
-                       [r.power_se for r in rows]))
-    report.figure(power_curves_svg(series, x_label=tr("units"), y_label=tr("power"), target_label=tr("80%")),
-                  tr("Power after {t} years against the number of units; bars: ±2 Monte Carlo SE.").format(
-                      t=spec.plan.years))
-    _table(report, result, "units", tr)
+    target = report.translate("PlotwiseReport", "80%")
+    power = report.translate("PlotwiseReport", "power")
+    report.section(report.translate("PlotwiseReport", "Power against years"))
+    chart = power_curves_svg(_series(report, result, "years", lambda r: r.years), y_label=power, target_label=target,
+                             x_label=report.translate("PlotwiseReport", "years of the programme"))
+    report.figure(chart, report.translate(
+        "PlotwiseReport", "Power with {n} units against the number of years; bars: ±2 Monte Carlo SE.").format(
+        n=spec.n_units))
+    _table(report, result, "years")
+    report.section(report.translate("PlotwiseReport", "Power against units"))
+    chart = power_curves_svg(_series(report, result, "units", lambda r: r.n_units), y_label=power,
+                             target_label=target, x_label=report.translate("PlotwiseReport", "units"))
+    report.figure(chart, report.translate(
+        "PlotwiseReport", "Power after {t} years against the number of units; bars: ±2 Monte Carlo SE.").format(
+        t=spec.plan.years))
+    _table(report, result, "units")
 
 
-def _table(report, result, curve, tr):
+def _table(report, result, curve):
     chosen = sorted((r for r in result.rows if curve in r.curve), key=lambda r: (r.change, r.years, r.n_units))
     rows = [[r.years, r.n_units, f"{r.change:+g}", r.power, r.power_se, r.failed] for r in chosen]
-    report.table([tr("Years"), tr("Units"), tr("Change (% per year)"), tr("Power"), tr("Monte Carlo SE"),
-                  tr("Fits that failed")], rows)
+    report.table([report.translate("PlotwiseReport", text) for text in POWER_HEADER], rows)
 
 
-def _method(report, result, tr):
+def _method(report, result):
     spec = result.spec
-    report.section(tr("Method"))
-    report.paragraph(tr(
+    report.section(report.translate("PlotwiseReport", "Method"))
+    report.paragraph(report.translate(
+        "PlotwiseReport",
         "Each of the {r:,} replicates simulates the counts of every unit in every year it is visited: "
         "count ~ Poisson(p·λ), log λ = log(mean) + β·t + unit effect + year effect + unit × year effect, with "
         "normal effects of the SDs given (on the log scale) and β = ln(1 + change/100). The replicate's trend is "
@@ -134,12 +160,28 @@ def _method(report, result, tr):
         "years as plotwise:trend, and the change counts as detected when its t test rejects at level {a:g}. "
         "Power is the share of replicates with a detection; its Monte Carlo SE is √(P(1 − P)/R) "
         "(Gerrodette 1987 for the setting).").format(r=spec.replicates, a=spec.alpha))
-    report.paragraph(tr(
+    report.paragraph(report.translate(
+        "PlotwiseReport",
         "Shorter programmes are the first years of the same simulated programmes; programmes with other numbers of "
         "units are the first units of larger simulated programmes, assigned to panels anew. Power for a programme "
         "of fewer years is shown only from the first length that leaves a degree of freedom for year-to-year "
         "variation."))
-    report.paragraph(tr(
+    report.paragraph(report.translate(
+        "PlotwiseReport",
         "A one-season pilot gives the mean count and the spread between units (the estimate step's mean_c and "
         "sd_c): with a Poisson–log-normal count, SD_UNIT² = ln(1 + (s² − m)/m²) − SD_UNIT_YEAR². The unit × year "
         "and year-to-year SDs need several years of counts."))
+
+
+def _cautions(report):
+    report.section(report.translate("PlotwiseReport", "Cautions"))
+    report.note(report.translate(
+        "PlotwiseReport",
+        "Power depends on the variance components assumed: the spread between units, the unit × year noise and "
+        "above all the year-to-year variation shared by all units. Larger values than those entered give less "
+        "power. The defaults are illustrative, not measured: use values from a pilot or from earlier years of the "
+        "programme, and try a range."))
+    report.note(report.translate(
+        "PlotwiseReport",
+        "The simulation assumes a steady change in % per year, constant detection, and that every planned visit "
+        "happens. Missed visits, a change in detection or a trend that is not steady reduce the power."))

@@ -5,11 +5,6 @@ Outside references: statsmodels' Poisson GLM (test-only) for the change per year
 definition of the revisit designs (McDonald 2003) for the visit years; GDAL (ogr) to write the inputs that
 qgis_process reads.
 """
-import os
-import shutil
-import subprocess
-from pathlib import Path
-
 import numpy as np
 import pytest
 from recording_feedback import RecordingFeedback
@@ -17,8 +12,6 @@ from recording_feedback import RecordingFeedback
 pytest.importorskip("qgis.core")
 from qgis.core import NULL, QgsFeature, QgsGeometry, QgsProcessingException, QgsVectorLayer  # noqa: E402
 
-REPO = Path(__file__).resolve().parents[2]
-QGIS_PROCESS = "/usr/bin/qgis_process.bin"  # the Debian wrapper passes a flag 3.22 rejects
 FRAME = [  # stratum, polygon (EPSG:32736, invented)
     (1, "POLYGON((500000 9000000, 506000 9000000, 506000 9004000, 500000 9004000, 500000 9000000))"),
     (2, "POLYGON((506000 9000000, 509000 9000000, 509000 9004000, 506000 9004000, 506000 9000000))"),
@@ -175,29 +168,7 @@ def test_trendpower_table_and_a_panels_layer_as_the_design(run_alg, layout, tmp_
     assert len(planned) == 1  # the layer's 60 primary units over its 6 years
 
 
-# -- qgis_process with only the pinned parameters -------------------------------------------
-@pytest.fixture(scope="module")
-def qgis_process(tmp_path_factory):
-    """Run qgis_process.bin with the working tree installed as the plugin in a throwaway profile."""
-    base = tmp_path_factory.mktemp("qgis_process")
-    plugin = base / "profile" / "profiles" / "default" / "python" / "plugins" / "plotwise"
-    plugin.mkdir(parents=True)
-    for name in ("__init__.py", "metadata.txt", "LICENSE"):
-        shutil.copy(REPO / name, plugin / name)
-    for name in ("plugin", "processing"):
-        shutil.copytree(REPO / name, plugin / name, ignore=shutil.ignore_patterns("__pycache__"))
-    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(base / "profile"), QT_QPA_PLATFORM="offscreen",
-               XDG_RUNTIME_DIR=str(base))
-
-    def run(*args):
-        completed = subprocess.run([QGIS_PROCESS, *args], capture_output=True, text=True, env=env, timeout=300)
-        assert completed.returncode == 0, completed.stdout + completed.stderr
-        return completed.stdout
-
-    run("plugins", "enable", "plotwise")
-    return run, base
-
-
+# -- qgis_process with only the pinned parameters (the shared qgis_process fixture of conftest.py) ------
 def write_counts_gpkg(path):
     from osgeo import ogr
 
@@ -214,8 +185,8 @@ def write_counts_gpkg(path):
     source = None
 
 
-def test_the_three_algorithms_run_in_qgis_process_with_pinned_parameters_only(qgis_process, layout):
-    run, base = qgis_process
+def test_the_three_algorithms_run_in_qgis_process_with_pinned_parameters_only(qgis_process, layout, tmp_path):
+    run, base = qgis_process, tmp_path
     units = base / "units.gpkg"
     layout(output=str(units))
     out = run("run", "plotwise:panels", "--", f"UNITS={units}", "PANEL_DESIGN=2", "PANELS=3", "CORE_SHARE=0.3",
