@@ -157,7 +157,13 @@ def _balance_section(report, balance):
         "Spread measure of Stevens & Olsen (2004) over the whole layout: 0 for a perfectly even spread, larger for "
         "clumps and gaps. The random panels take the same number of units from each stratum (median over the "
         "rearrangements of the check)."))
-    if balance.balanced:
+    if balance.balanced and balance.p_value > balance.alpha:
+        report.paragraph(report.translate(
+            "PlotwiseReport",
+            "The panels are more evenly spread than random parts of the layout (their spread measure is {r:.0%} of "
+            "that of random panels), though with this few units the check cannot confirm it (p = {p:.3f} from {b} "
+            "random rearrangements).").format(r=balance.spread_ratio, p=balance.p_value, b=balance.rearrangements))
+    elif balance.balanced:
         report.paragraph(report.translate(
             "PlotwiseReport",
             "The panels are more evenly spread than random parts of the layout (p = {p:.3f} from {b} random "

@@ -127,8 +127,9 @@ def test_each_rotating_panel_of_a_balanced_layout_is_spread_more_evenly_than_a_r
 @pytest.mark.slow
 def test_the_check_tells_balanced_panels_from_a_simple_random_layout():
     """The permutation check's p-value is uniform for a simple random layout (exchangeable labels), so about
-    90% of them are flagged at alpha = 0.1; balanced layouts of 60 units in split panels pass. 24 layouts of
-    each kind, 49 rearrangements each (binomial MC SE of a share about 0.06)."""
+    90% of them fail the test at alpha = 0.1, and about 70% are also no more even than random panels by the
+    spread ratio (both needed for a flag); balanced layouts of 60 units in split panels pass. 24 layouts of each
+    kind, 49 rearrangements each (binomial MC SE of a share about 0.09)."""
     rng = np.random.default_rng(21)
     cover = triangle_cover(REGION)
     spec = pe.panel_spec_iv(pe.SPLIT, 4, 0.2, 2025, 12)
@@ -141,4 +142,4 @@ def test_the_check_tells_balanced_panels_from_a_simple_random_layout():
             check = pe.panel_balance_check(xy, assignment, rng, rearrangements=49)
             flagged[kind] += not check.balanced
     assert flagged["balanced"] <= 2, flagged  # observed: none of 40 in trials
-    assert flagged["random"] >= 17, flagged  # expected 0.9 x 24 = 21.6
+    assert flagged["random"] >= 11, flagged  # expected about 0.7 x 24 = 17
