@@ -59,6 +59,10 @@ class Panels(PlotwiseAlgorithm):
             "stratum's share.\n"
             "Field days per unit visit (0: none): adds field days to the schedule.\n"
             "Random seed: only for the check of the panels' spread (the panels themselves follow the draw order).\n\n"
+            "The layout's design: plotwise:layout records it in the units' design field. A simple random layout "
+            "(random, random_sep) gives panels that are random parts of it, a systematic grid (grid, grid_ovl) "
+            "bands, because its draw order runs row by row: both are warned about. Without the field, the check "
+            "below decides.\n"
             "The check: the spread of each panel is measured by the Voronoi measure of Stevens & Olsen (2004) over "
             "a fine grid on the convex hull of the units, and compared with random rearrangements of the panels "
             "within each stratum. When the panels are not more evenly spread than chance (and not clearly more even "
@@ -131,8 +135,8 @@ class Panels(PlotwiseAlgorithm):
                 self.parameterAsInt(parameters, self.YEARS, context))
         seeded = self.seeded_generator(parameters, context, feedback)
         crs = bridge.computation_crs(units.sourceCrs(), units.sourceExtent(), context, feedback, units.sourceName())
-        wanted = tuple(f for f in (order_field, stratum_field, "role" if "role" in names else None,
-                                   "unit_id" if "unit_id" in names else None) if f)
+        layout_fields = tuple(n for n in ("role", "unit_id", "design") if n in names)  # written by plotwise:layout
+        wanted = tuple(dict.fromkeys(f for f in (order_field, stratum_field, *layout_fields) if f))
         records = bridge.read_features(units, crs, context, feedback, wanted, units.sourceName(), drop_empty=False)
         empty = [int(f) for f, g in zip(records.fids, records.geometries) if g is None]
         if empty:
@@ -149,12 +153,9 @@ class Panels(PlotwiseAlgorithm):
         feedback.setProgress(30)
         xy = [(g.centroid.x, g.centroid.y) if g.geom_type != "Point" else (g.x, g.y) for g in records.geometries]
         balance = engine.panel_balance_check(xy, assignment, seeded.generator)
-        warnings = [self.translate_message(w) for w in assignment.warnings]
-        if balance.rows and not balance.balanced:
-            warnings.append(self.tr(
-                "The panels are not more evenly spread than random parts of the layout (p = {p:.2f}). The layout was "
-                "probably simple random or a systematic grid: each panel then covers the frame unevenly. Use a "
-                "spatially balanced layout for evenly spread panels.").format(p=balance.p_value))
+        design = engine.recorded_design(records.attributes.get("design"), records.attributes.get("role"))
+        spread = engine.spread_warning(design, balance)
+        warnings = [self.translate_message(w) for w in assignment.warnings + ((spread,) if spread else ())]
         for warning in warnings:
             feedback.pushWarning(warning)
         feedback.setProgress(60)
@@ -163,7 +164,7 @@ class Panels(PlotwiseAlgorithm):
         report = self.new_report(self.tr("Revisit panels"))
         fill_panels_report(report, assignment, balance, PanelsRun(
             units.sourceName(), order_field, stratum_field, int((assignment.panel < 0).sum()), seeded.seed,
-            crs.authid()), warnings)
+            crs.authid(), design), warnings)
         self.style_output(context, dest, "panels")
         result = {self.OUTPUT: dest, self.OUTPUT_SCHEDULE: schedule}
         path = self.write_report(report, parameters, context, feedback)

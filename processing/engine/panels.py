@@ -29,6 +29,7 @@ import numpy as np
 from scipy.spatial import cKDTree
 from shapely.geometry import MultiPoint
 
+from .edge import BALANCED, GRID, GRID_OVERLAP, RANDOM, RANDOM_APART
 from .errors import QT_TRANSLATE_NOOP, InputError, message
 from .geometry import contains_xy
 
@@ -473,3 +474,47 @@ def panel_balance_check(xy, assignment, rng, rearrangements=RANDOM_SUBSETS, alph
     ratio = float(np.exp(np.mean([np.log(max(r.measure, 1e-12) / max(r.random_median, 1e-12)) for r in rows])))
     balanced = p_value <= alpha or ratio < BALANCE_RATIO
     return BalanceCheck(rows, p_value, ratio, balanced, int(rearrangements), float(alpha))
+
+
+# ----------------------------------------------------------------------------
+# the layout's own design record
+# ----------------------------------------------------------------------------
+RECORDED_BALANCED, RECORDED_RANDOM, RECORDED_GRID = "balanced", "random", "grid"
+_RECORD_KINDS = {BALANCED: RECORDED_BALANCED, RANDOM: RECORDED_RANDOM, RANDOM_APART: RECORDED_RANDOM,
+                 GRID: RECORDED_GRID, GRID_OVERLAP: RECORDED_GRID}
+
+
+def recorded_design(values, roles=None):
+    """The layout's design from its primary units' ``design`` field (the design record
+    ``plotwise:layout`` writes, :func:`edge.design_record`): ``"balanced"``, ``"random"``
+    or ``"grid"``; None when the field is missing, empty, unknown or mixed."""
+    if values is None:
+        return None
+    roles = roles if roles is not None else [None] * len(values)
+    kinds = {_RECORD_KINDS.get(str(v).strip().lower()) for v, r in zip(values, roles)
+             if r != RESERVE and v is not None and str(v).strip()}
+    return kinds.pop() if len(kinds) == 1 and None not in kinds else None
+
+
+def spread_warning(design, balance):
+    """The warning about the panels' spread, or None: from the layout's design record when it
+    has one (simple random: each panel is a random part of the layout; systematic grid: the
+    draw order runs row by row, so panels are bands), else from :func:`panel_balance_check`."""
+    if design == RECORDED_RANDOM:
+        return message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The layout was simple random (its units' design field says so): each panel is a random part of it, "
+            "not an evenly spread sample of the frame. Use a spatially balanced layout for evenly spread panels."))
+    if design == RECORDED_GRID:
+        return message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The layout was a systematic grid (its units' design field says so): its draw order runs row by row, "
+            "so consecutive blocks of it are bands across the frame. Use a spatially balanced layout for evenly "
+            "spread panels."))
+    if design is None and balance.rows and not balance.balanced:
+        return message(QT_TRANSLATE_NOOP(
+            "PlotwiseEngine",
+            "The panels are not more evenly spread than random parts of the layout (p = {p:.2f}). The layout was "
+            "probably simple random or a systematic grid: each panel then covers the frame unevenly. Use a "
+            "spatially balanced layout for evenly spread panels."), p=balance.p_value)
+    return None

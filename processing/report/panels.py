@@ -57,6 +57,7 @@ class PanelsRun:
     n_reserves: int
     seed: int
     crs: str
+    recorded_design: object = None  # "balanced", "random" or "grid" from the units' design field, or None
 
 
 def _words(report, constants):
@@ -88,7 +89,7 @@ def fill_panels_report(report, assignment, balance, run, warnings=()):
     report.parameters(_parameters(report, assignment, run, design))
     report.warnings(list(warnings))
     _schedule_section(report, assignment)
-    _balance_section(report, balance)
+    _balance_section(report, balance, run)
     _method_section(report)
     report.references(REFERENCES)
     report.field_safety()
@@ -143,8 +144,26 @@ def _schedule_section(report, assignment):
                      caption=report.translate("PlotwiseReport", "Units of each stratum in each panel."))
 
 
-def _balance_section(report, balance):
+def _balance_section(report, balance, run):
     report.section(report.translate("PlotwiseReport", "Spread of the panels"))
+    if run.recorded_design == "balanced":
+        report.paragraph(report.translate(
+            "PlotwiseReport", "The layout records a spatially balanced design (the units' design field)."))
+    elif run.recorded_design == "random":
+        report.note(report.translate(
+            "PlotwiseReport",
+            "The layout records a simple random design (the units' design field): each panel is a random part of "
+            "it, not an evenly spread sample of the frame."))
+    elif run.recorded_design == "grid":
+        report.note(report.translate(
+            "PlotwiseReport",
+            "The layout records a systematic grid (the units' design field): its draw order runs row by row, so "
+            "the panels are bands across the frame."))
+    else:
+        report.paragraph(report.translate(
+            "PlotwiseReport",
+            "The units carry no design record (the design field of plotwise:layout): the check below tells whether "
+            "the panels are evenly spread."))
     if not balance.rows:
         report.paragraph(report.translate(
             "PlotwiseReport",

@@ -143,3 +143,23 @@ def test_the_check_tells_balanced_panels_from_a_simple_random_layout():
             flagged[kind] += not check.balanced
     assert flagged["balanced"] <= 2, flagged  # observed: none of 40 in trials
     assert flagged["random"] >= 11, flagged  # expected about 0.7 x 24 = 17
+
+
+def test_the_layout_design_record_decides_the_warning():
+    """plotwise:layout writes the design of its units (edge.design_record); a recorded simple random or grid
+    layout is warned about whatever the check says, a balanced one never, a missing record falls back on the
+    check."""
+    from plotwise.processing.engine import edge
+
+    passed = pe.BalanceCheck((pe.PanelBalance(1, 5, 0.2, 0.4),), 0.02, 0.5, True, 199, 0.1)
+    failed = pe.BalanceCheck((pe.PanelBalance(1, 5, 0.4, 0.4),), 0.6, 1.0, False, 199, 0.1)
+    assert pe.recorded_design([edge.BALANCED] * 3) == pe.RECORDED_BALANCED
+    assert pe.recorded_design([edge.RANDOM_APART, edge.RANDOM, "x"], roles=["primary", "primary", "reserve"]) == \
+        pe.RECORDED_RANDOM
+    assert pe.recorded_design([edge.GRID, edge.BALANCED]) is None  # mixed: no record to trust
+    assert pe.recorded_design(None) is None
+    assert "simple random" in pe.spread_warning(pe.RECORDED_RANDOM, passed)
+    assert "systematic grid" in pe.spread_warning(pe.RECORDED_GRID, passed)
+    assert pe.spread_warning(pe.RECORDED_BALANCED, failed) is None
+    assert pe.spread_warning(None, passed) is None
+    assert "p = 0.60" in pe.spread_warning(None, failed)

@@ -86,7 +86,18 @@ def test_panels_warn_when_the_layout_was_simple_random(run_alg, layout):
     run_alg("plotwise:panels", {"UNITS": layout(design=0, n=90, seed=6), "PANEL_DESIGN": 1, "PANELS": 3,
                                 "START_YEAR": 2030, "YEARS": 9, "OUTPUT": "memory:", "OUTPUT_SCHEDULE": "memory:"},
             feedback=feedback)
-    assert any("not more evenly spread" in w for w in feedback.warnings)
+    assert any("simple random (its units' design field says so)" in w for w in feedback.warnings)
+
+
+def test_panels_without_a_design_record_rely_on_the_check(run_alg, layout):
+    import processing
+
+    bare = processing.run("native:deletecolumn", {"INPUT": layout(design=0, n=90, seed=6), "COLUMN": ["design"],
+                                                  "OUTPUT": "memory:"})["OUTPUT"]
+    feedback = RecordingFeedback()
+    run_alg("plotwise:panels", {"UNITS": bare, "PANEL_DESIGN": 1, "PANELS": 3, "START_YEAR": 2030, "YEARS": 9,
+                                "OUTPUT": "memory:", "OUTPUT_SCHEDULE": "memory:"}, feedback=feedback)
+    assert any("not more evenly spread than random parts" in w for w in feedback.warnings)
 
 
 def test_panels_reject_too_many_panels(run_alg, layout):
