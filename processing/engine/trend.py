@@ -70,6 +70,7 @@ from scipy import sparse, stats
 from scipy.sparse.csgraph import connected_components
 
 from .errors import QT_TRANSLATE_NOOP, InputError, message
+from .listing import listed_ids
 
 MIN_YEARS = 3
 NEWTON_TOL = 1e-12
@@ -102,11 +103,6 @@ class CountTable:
     def x(self):
         """Years centred on the mean of the years with data."""
         return self.years - self.years.mean()
-
-
-def _ids(items, limit=20):
-    items = [str(i) for i in items]
-    return ", ".join(items[:limit]) + (f" (+{len(items) - limit})" if len(items) > limit else "")
 
 
 def _as_float(values):
@@ -143,7 +139,7 @@ def count_table_iv(unit_ids, years, counts, effort=None, strata=None, record_ids
         raise InputError(message(QT_TRANSLATE_NOOP(
             "PlotwiseEngine",
             "Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records."),
-            ids=_ids(bad)), ids=bad)
+            ids=listed_ids(bad)), ids=bad)
     count_values = _as_float(counts)
     given = np.array([c is not None for c in counts], dtype=bool)
     bad = [record_ids[i] for i in np.flatnonzero(given & ~(np.isfinite(count_values) & (count_values >= 0)))]
@@ -152,7 +148,7 @@ def count_table_iv(unit_ids, years, counts, effort=None, strata=None, record_ids
             "PlotwiseEngine",
             "Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) "
             "when the unit was not surveyed."),
-            ids=_ids(bad)), ids=bad)
+            ids=listed_ids(bad)), ids=bad)
     effort_values = np.ones(n) if effort is None else _as_float(effort)
     bad = [record_ids[i] for i in np.flatnonzero(given & ~(np.isfinite(effort_values) & (effort_values > 0)))]
     if bad:
@@ -160,7 +156,7 @@ def count_table_iv(unit_ids, years, counts, effort=None, strata=None, record_ids
             "PlotwiseEngine",
             "Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the "
             "unit-area field empty."),
-            ids=_ids(bad)), ids=bad)
+            ids=listed_ids(bad)), ids=bad)
     keep = np.flatnonzero(given)
     return _arrange_counts(
         [unit_ids[i] for i in keep], year_values[keep].astype(int), count_values[keep], effort_values[keep],
@@ -189,7 +185,7 @@ def _arrange_counts(units, years, counts, effort, strata, record_ids, skipped):
             "PlotwiseEngine",
             "Units were counted twice in one year (unit, year and record ids): {items}. Keep one record per unit and "
             "year (add the counts of repeated visits first)."),
-            items=_ids(twice)))
+            items=listed_ids(twice)))
     shape = (len(unit_keys), len(calendar))
     table, visited, area = np.zeros(shape), np.zeros(shape, dtype=bool), np.zeros(shape)
     table[rows, cols], visited[rows, cols], area[rows, cols] = counts, True, effort
@@ -209,7 +205,7 @@ def _unit_strata(unit_keys, units, strata):
             "PlotwiseEngine",
             "Units {ids} lie in more than one stratum across their records. A unit keeps its stratum over the years: "
             "correct the stratum field."),
-            ids=_ids(mixed)), ids=mixed)
+            ids=listed_ids(mixed)), ids=mixed)
     return tuple(next(iter(by_unit[u])) for u in unit_keys)
 
 
@@ -791,21 +787,21 @@ def estimate_series_iv(years, estimates, ses, record_ids=None):
         raise InputError(message(QT_TRANSLATE_NOOP(
             "PlotwiseEngine",
             "Records {ids} have no whole-number year."),
-            ids=_ids(bad)), ids=bad)
+            ids=listed_ids(bad)), ids=bad)
     bad = [record_ids[i] for i in range(n) if not (np.isfinite(e[i]) and e[i] > 0)]
     if bad:
         raise InputError(message(QT_TRANSLATE_NOOP(
             "PlotwiseEngine",
             "Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years "
             "without an estimate, or use the unit counts instead."),
-            ids=_ids(bad)), ids=bad)
+            ids=listed_ids(bad)), ids=bad)
     bad = [record_ids[i] for i in range(n) if not (np.isfinite(s[i]) and s[i] > 0)]
     if bad:
         raise InputError(message(QT_TRANSLATE_NOOP(
             "PlotwiseEngine",
             "Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the "
             "estimate step writes it)."),
-            ids=_ids(bad)), ids=bad)
+            ids=listed_ids(bad)), ids=bad)
     order = np.argsort(y, kind="stable")
     y, e, s = y[order], e[order], s[order]
     twice = sorted({int(v) for v in y[1:][np.diff(y) == 0]})
@@ -814,7 +810,7 @@ def estimate_series_iv(years, estimates, ses, record_ids=None):
             "PlotwiseEngine",
             "Years {years} have more than one estimate. Keep one estimate per year (for the estimate step's table: "
             "its rows 'all', or one stratum)."),
-            years=_ids(twice)))
+            years=listed_ids(twice)))
     if len(y) < MIN_YEARS:
         raise InputError(message(QT_TRANSLATE_NOOP(
             "PlotwiseEngine",
