@@ -2,7 +2,7 @@
 from qgis.core import QgsApplication, QgsMessageLog
 from qgis.PyQt.QtCore import QCoreApplication
 
-from . import compat
+from ..processing import compat
 from .dependencies import missing_dependencies
 from ..processing.translation import install_translator, remove_translator
 

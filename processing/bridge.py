@@ -21,7 +21,7 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QCoreApplication
 from shapely import wkb as shapely_wkb
 
-from ..plugin import compat
+from . import compat
 from .engine.crs import utm_epsg_for_lonlat
 from .engine.geometry_types import polygonal_part
 from .engine.listing import listed_ids as _listed_ids

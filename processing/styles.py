@@ -46,7 +46,7 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QColor, QFont
 
-from ..plugin import compat
+from . import compat
 from .engine.listing import natural_sorted
 from .report.style import CATEGORY_COLOURS, INK
 

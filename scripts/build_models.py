@@ -29,7 +29,7 @@ def build():
     )
     from qgis.PyQt.QtCore import QT_TRANSLATE_NOOP, QPointF
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     def parameter(model, definition, x, y):
         model.addModelParameter(definition, ModelParameter(definition.name()))

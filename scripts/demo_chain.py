@@ -504,7 +504,7 @@ def simulate_monitoring_years(demo, first):
     import numpy as np
     from qgis.core import QgsFeature, QgsVectorLayer
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     animals = QgsVectorLayer(demo.layer_uri("animals"), "animals", "ogr")
     keep_score = np.random.default_rng(SEED + 42).random(animals.featureCount())
@@ -768,7 +768,7 @@ def add_attribute_table(layout, layer, columns, x, y, width, height):
     from qgis.core import QgsLayoutFrame, QgsLayoutItemAttributeTable, QgsLayoutPoint, QgsLayoutSize
     from qgis.PyQt.QtGui import QColor
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     fields = layer.fields()
     if not columns:

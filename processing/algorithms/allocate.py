@@ -13,7 +13,7 @@ from qgis.core import (
     QgsWkbTypes,
 )
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import allocation
 from ..engine import edge
@@ -177,21 +177,13 @@ class Allocate(PlotwiseAlgorithm):
         field_names = source.fields().names()
 
         def field(name):
-            # newer hosts name it parameterAsStrings; 3.22 has parameterAsFields
-            read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-            chosen = read(parameters, name, context)
-            return chosen[0] if chosen else None
+            return self.field_name(parameters, name, context, source, layer)
 
         stratum_field, area_field = field(self.STRATUM_FIELD), field(self.AREA_FIELD)
         sd_field, mean_field, cost_field = field(self.SD_FIELD), field(self.MEAN_FIELD), field(self.COST_FIELD)
-        if stratum_field and stratum_field not in field_names:
-            stratum_field = None
-        if area_field and area_field not in field_names:
-            feedback.pushInfo(
-                self.tr("Layer '{layer}' has no field '{field}': the polygon areas are used.").format(
-                    layer=layer, field=area_field)
-            )
-            area_field = None
+        if area_field is None:
+            feedback.pushInfo(self.tr("Layer '{layer}' has no area field: the polygon areas are used.").format(
+                layer=layer))
         sd_proxy = False
         if sd_field is None and SD_PROXY_FIELD in field_names:
             sd_field, sd_proxy = SD_PROXY_FIELD, True

@@ -11,7 +11,7 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QT_TRANSLATE_NOOP, QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
-from ...plugin import compat
+from .. import compat
 from ..translation import active_language, translated_message
 from ..engine.errors import ENGINE_CONTEXT, Cancelled, InputError
 from ..engine.rng import make_rng
@@ -135,6 +135,48 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
     def translate_message(self, item):
         """The user's-language text of an engine :class:`Message` (context ``PlotwiseEngine``); a str as is."""
         return translated_message(item)
+
+    # -- field parameters: the one policy for a field the layer lacks ----------------------
+    def field_names(self, parameters, name, context, source, layer_name=None, required=False):
+        """The fields that field parameter ``name`` holds, checked against ``source``'s fields.
+
+        One policy for every algorithm: a field the user chose that the layer lacks is an error
+        naming the layer, the parameter, the field and the fields the layer has. A parameter left at
+        its default (models and batch runs store defaults too, so a value equal to the default counts as
+        left) whose default field the layer lacks is simply not used (an empty list), unless it is
+        ``required``, which is then an error too. Returns a list (empty when the parameter is unset).
+        """
+        chosen = compat.parameter_as_fields(self, parameters, name, context)
+        available = source.fields().names() if source is not None else []
+        missing = [field for field in chosen if field not in available]
+        given = self._names_other_than_default(parameters, name, chosen)
+        if missing and (given or required):
+            raise QgsProcessingException(QCoreApplication.translate(
+                "PlotwiseAlgorithm",
+                "Layer '{layer}' has no field {fields} ({param}). Its fields are: {available}. "
+                "Choose one of them.").format(
+                layer=layer_name or (source.sourceName() if source is not None else name),
+                fields=", ".join(f"'{f}'" for f in missing), param=name, available=", ".join(available)))
+        chosen = [field for field in chosen if field in available]
+        if required and not chosen:
+            raise QgsProcessingException(QCoreApplication.translate(
+                "PlotwiseAlgorithm", "Choose a field of layer '{layer}' for {param}. Its fields are: {available}.").format(
+                layer=layer_name or (source.sourceName() if source is not None else name), param=name,
+                available=", ".join(available)))
+        return chosen
+
+    def _names_other_than_default(self, parameters, name, chosen):
+        if parameters.get(name) in (None, "", []):
+            return False
+        default = self.parameterDefinition(name).defaultValue()
+        if isinstance(default, str):
+            default = [field for field in default.split(";") if field]
+        return list(chosen) != list(default or [])
+
+    def field_name(self, parameters, name, context, source, layer_name=None, required=False):
+        """The one field a single-field parameter holds, or None, by the policy of :meth:`field_names`."""
+        chosen = self.field_names(parameters, name, context, source, layer_name, required)
+        return chosen[0] if chosen else None
 
     @staticmethod
     @contextlib.contextmanager

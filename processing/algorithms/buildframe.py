@@ -8,7 +8,7 @@ from qgis.core import (
 )
 from shapely.geometry import MultiPolygon, Polygon
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import frame as frame_engine
 from ..gdal_io.masking import mask_polygons

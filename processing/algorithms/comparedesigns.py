@@ -15,7 +15,7 @@ from qgis.core import (
 )
 from shapely.ops import unary_union
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..gdal_io import surface as surface_io
 from ..engine import design_comparison as engine
@@ -227,13 +227,7 @@ class CompareDesigns(PlotwiseAlgorithm):
         strata_name = stratum_field = None
         if strata_source is not None:
             strata_name = strata_source.sourceName()
-            chosen = (getattr(self, "parameterAsStrings", None) or self.parameterAsFields)(
-                parameters, self.STRATUM_FIELD, context)
-            stratum_field = chosen[0] if chosen else None
-            if stratum_field and strata_source.fields().lookupField(stratum_field) < 0:
-                raise QgsProcessingException(
-                    self.tr("Layer '{layer}' has no field '{field}'. Choose the field that holds the stratum ids.").format(
-                        layer=strata_name, field=stratum_field))
+            stratum_field = self.field_name(parameters, self.STRATUM_FIELD, context, strata_source, strata_name)
             records = bridge.read_features(strata_source, crs, context, feedback,
                                            [stratum_field] if stratum_field else [], layer_name=strata_name)
             warnings.extend(records.warnings)

@@ -8,7 +8,7 @@ from qgis.core import (
     QgsProcessingParameterRasterDestination,
 )
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import demo_reserve
 from ..report import MapLayer, map_svg

@@ -17,7 +17,7 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QCoreApplication
 from shapely.geometry import MultiPolygon, Polygon
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..translation import active_language
 from ..engine import detection_functions as df
@@ -222,20 +222,6 @@ class DistanceDensity(PlotwiseAlgorithm):
             defaultValue=0, minValue=0, maxValue=9999))
 
     # ------------------------------------------------------------------------------ reading
-    def _field(self, parameters, name, context, layer_fields):
-        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        chosen = read(parameters, name, context)
-        chosen = chosen[0] if chosen else None
-        return chosen if chosen and chosen in layer_fields else None
-
-    def _required_field(self, parameters, name, context, source, label):
-        field = self._field(parameters, name, context, source.fields().names())
-        if field is None:
-            raise QgsProcessingException(self.tr(
-                "Layer '{layer}' has no field for the {what}. Choose the field that holds it.").format(
-                layer=source.sourceName(), what=label))
-        return field
-
     def _cutpoints(self, parameters, context):
         text = (self.parameterAsString(parameters, self.CUTPOINTS, context) or "").strip()
         if not text:
@@ -307,8 +293,7 @@ class DistanceDensity(PlotwiseAlgorithm):
 
     def _strata(self, parameters, context, feedback, strata_source, crs, stratum_field, m2_per_unit, unit_name):
         """``(stratum areas, geometries, strata id field, warnings, stratum field)`` as the estimate reads them."""
-        strata_fields = strata_source.fields().names()
-        strata_id_field = self._field(parameters, self.STRATA_ID_FIELD, context, strata_fields)
+        strata_id_field = self.field_name(parameters, self.STRATA_ID_FIELD, context, strata_source)
         warnings = []
         if stratum_field and not strata_id_field:
             if strata_source.featureCount() != 1:
@@ -345,15 +330,13 @@ class DistanceDensity(PlotwiseAlgorithm):
         survey = (df.LINE, df.POINT)[self.parameterAsEnum(parameters, self.SURVEY_TYPE, context)]
         area_unit = self.parameterAsEnum(parameters, self.AREA_UNIT, context)
         fields = dict(
-            unit=self._required_field(parameters, self.UNIT_ID_FIELD, context, units, self.tr("unit ids")),
-            stratum=self._field(parameters, self.STRATUM_FIELD, context, units.fields().names()),
-            visits=self._field(parameters, self.VISITS_FIELD, context, units.fields().names())
+            unit=self.field_name(parameters, self.UNIT_ID_FIELD, context, units, required=True),
+            stratum=self.field_name(parameters, self.STRATUM_FIELD, context, units),
+            visits=self.field_name(parameters, self.VISITS_FIELD, context, units)
             if survey == df.POINT else None,
-            obs_unit=self._required_field(parameters, self.OBS_UNIT_FIELD, context, observations,
-                                          self.tr("unit ids")),
-            distance=self._required_field(parameters, self.DISTANCE_FIELD, context, observations,
-                                          self.tr("distances")),
-            size=self._field(parameters, self.SIZE_FIELD, context, observations.fields().names()),
+            obs_unit=self.field_name(parameters, self.OBS_UNIT_FIELD, context, observations, required=True),
+            distance=self.field_name(parameters, self.DISTANCE_FIELD, context, observations, required=True),
+            size=self.field_name(parameters, self.SIZE_FIELD, context, observations),
         )
         n_bootstrap = self.parameterAsInt(parameters, self.BOOTSTRAP, context)
         seeded = self.seeded_generator(parameters, context, feedback) if n_bootstrap else None

@@ -15,7 +15,7 @@ from qgis.core import (
 )
 from shapely.geometry import MultiPolygon, Polygon
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import estimation, variance
 from ..engine.listing import natural_key
@@ -214,12 +214,6 @@ class Estimate(PlotwiseAlgorithm):
             self.addOutput(QgsProcessingOutputNumber(name, label))
 
     # ------------------------------------------------------------------------------
-    def _field(self, parameters, name, context, layer_fields):
-        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        chosen = read(parameters, name, context)
-        chosen = chosen[0] if chosen else None
-        return chosen if chosen and chosen in layer_fields else None
-
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
         units = self.parameterAsSource(parameters, self.UNITS, context)
         strata_source = self.parameterAsSource(parameters, self.STRATA, context)
@@ -317,17 +311,11 @@ class Estimate(PlotwiseAlgorithm):
     # ------------------------------------------------------------------------------
     def _fields(self, parameters, context, units, strata_source):
         """The fields chosen, checked against the layers; a note when the frame is one polygon."""
-        unit_fields, strata_fields = units.fields().names(), strata_source.fields().names()
-        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        count_field = (read(parameters, self.COUNT_FIELD, context) or [None])[0]
-        if not count_field or count_field not in unit_fields:
-            raise QgsProcessingException(self.tr(
-                "Layer '{layer}' has no count field '{field}'. Choose the field that holds the counts.").format(
-                layer=units.sourceName(), field=count_field or ""))
+        count_field = self.field_name(parameters, self.COUNT_FIELD, context, units, required=True)
         fields = dict(count=count_field,
-                      stratum=self._field(parameters, self.STRATUM_FIELD, context, unit_fields),
-                      area=self._field(parameters, self.UNIT_AREA_FIELD, context, unit_fields),
-                      strata_id=self._field(parameters, self.STRATA_ID_FIELD, context, strata_fields))
+                      stratum=self.field_name(parameters, self.STRATUM_FIELD, context, units),
+                      area=self.field_name(parameters, self.UNIT_AREA_FIELD, context, units),
+                      strata_id=self.field_name(parameters, self.STRATA_ID_FIELD, context, strata_source))
         notes = []
         if fields["stratum"] and not fields["strata_id"]:
             if strata_source.featureCount() != 1:

@@ -15,7 +15,7 @@ from qgis.core import (
 )
 from shapely.geometry import LineString, Polygon
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import geometry
 from ..engine import layout as engine

@@ -15,7 +15,7 @@ from qgis.core import (
     QgsProcessingParameterString,
 )
 
-from ...plugin import compat
+from .. import compat
 from ..translation import active_language
 from .. import bridge
 from ..engine import occupancy as engine
@@ -129,27 +129,17 @@ class Occupancy(PlotwiseAlgorithm):
             self.addOutput(QgsProcessingOutputNumber(name, label))
 
     # ------------------------------------------------------------------------------
-    def _fields(self, parameters, name, context, layer_fields, layer):
-        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        chosen = [f for f in (read(parameters, name, context) or []) if f]
-        missing = [f for f in chosen if f not in layer_fields]
-        if missing:
-            raise QgsProcessingException(self.tr("Layer '{layer}' has no field {fields} ({param}). Choose existing "
-                                                 "fields.").format(layer=layer, fields=", ".join(missing),
-                                                                   param=name))
-        return chosen
-
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802
         source = self.parameterAsSource(parameters, self.SITES, context)
         if source is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.SITES))
         layer = source.sourceName() or self.SITES
         names = source.fields().names()
-        id_field = (self._fields(parameters, self.SITE_ID_FIELD, context, names, layer) or [None])[0]
-        history = self._fields(parameters, self.HISTORY_FIELDS, context, names, layer)
-        psi_cov = self._fields(parameters, self.PSI_COVARIATES, context, names, layer)
-        p_cov = self._fields(parameters, self.P_COVARIATES, context, names, layer)
-        effort_fields = self._fields(parameters, self.EFFORT_FIELDS, context, names, layer)
+        id_field = self.field_name(parameters, self.SITE_ID_FIELD, context, source, layer)
+        history = self.field_names(parameters, self.HISTORY_FIELDS, context, source, layer)
+        psi_cov = self.field_names(parameters, self.PSI_COVARIATES, context, source, layer)
+        p_cov = self.field_names(parameters, self.P_COVARIATES, context, source, layer)
+        effort_fields = self.field_names(parameters, self.EFFORT_FIELDS, context, source, layer)
         models_text = self.parameterAsString(parameters, self.MODELS, context) or ""
         gof_replicates = self.parameterAsInt(parameters, self.GOF_REPLICATES, context)
         seeded = self.seeded_generator(parameters, context, feedback) if gof_replicates > 0 else None

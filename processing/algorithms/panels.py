@@ -11,7 +11,7 @@ from qgis.core import (
     QgsProcessingParameterNumber,
 )
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import panels as engine
 from ..report.panels import PanelsRun, fill_panels_report
@@ -113,19 +113,13 @@ class Panels(PlotwiseAlgorithm):
         self.add_report_parameter()
 
     # ------------------------------------------------------------------------------
-    def _field(self, parameters, name, context, layer_fields):
-        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        chosen = read(parameters, name, context)
-        chosen = chosen[0] if chosen else None
-        return chosen if chosen and chosen in layer_fields else None
-
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
         units = self.parameterAsSource(parameters, self.UNITS, context)
         if units is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.UNITS))
         names = units.fields().names()
-        order_field = self._field(parameters, self.ORDER_FIELD, context, names)
-        stratum_field = self._field(parameters, self.STRATUM_FIELD, context, names)
+        order_field = self.field_name(parameters, self.ORDER_FIELD, context, units)
+        stratum_field = self.field_name(parameters, self.STRATUM_FIELD, context, units)
         with self.engine_errors():
             spec = engine.panel_spec_iv(
                 self.parameterAsEnum(parameters, self.PANEL_DESIGN, context),

@@ -12,7 +12,7 @@ from qgis.core import (
 
 from shapely.ops import unary_union
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import counting, simulated_distances
 from ..engine.errors import InputError
@@ -138,8 +138,7 @@ class SimulateCounts(PlotwiseAlgorithm):
                        if units.fields().lookupField(name) >= 0)
         unit_records = bridge.read_features(units, crs, context, feedback, wanted, units.sourceName(), drop_empty=False)
         roles = unit_records.attributes.get("role", [None] * len(unit_records))
-        read_fields = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        size_field = (read_fields(parameters, self.GROUP_SIZE_FIELD, context) or [None])[0] if function else None
+        size_field = self.field_name(parameters, self.GROUP_SIZE_FIELD, context, animals) if function else None
         animal_records = bridge.read_features(animals, crs, context, feedback, (size_field,) if size_field else (),
                                               animals.sourceName())
         sightings = None
@@ -220,10 +219,7 @@ class SimulateCounts(PlotwiseAlgorithm):
         source = self.parameterAsSource(parameters, self.STRATA, context)
         if source is None:
             return None, None
-        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        id_field = (read(parameters, self.STRATA_ID_FIELD, context) or [None])[0]
-        if id_field and source.fields().lookupField(id_field) < 0:
-            id_field = None
+        id_field = self.field_name(parameters, self.STRATA_ID_FIELD, context, source)
         records = bridge.read_features(source, crs, context, feedback, (id_field,) if id_field else (),
                                        source.sourceName())
         unit_ids = unit_records.attributes.get("stratum")

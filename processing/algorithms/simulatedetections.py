@@ -8,7 +8,7 @@ from qgis.core import (
     QgsProcessingParameterNumber,
 )
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import detections
 from .base import PlotwiseAlgorithm
@@ -85,9 +85,8 @@ class SimulateDetections(PlotwiseAlgorithm):
         if stations is None or animals is None:
             raise QgsProcessingException(self.invalidSourceError(
                 parameters, self.STATIONS if stations is None else self.ANIMALS))
-        group_field = self.parameterAsString(parameters, self.GROUP_FIELD, context) or None
-        if group_field and animals.fields().lookupField(group_field) < 0:
-            group_field = None  # the default group_id on a layer without it: each animal is a group
+        # the default group_id on a layer without it: each animal is a group
+        group_field = self.field_name(parameters, self.GROUP_FIELD, context, animals)
         occasions = self.parameterAsInt(parameters, self.OCCASIONS, context)
         seeded = self.seeded_generator(parameters, context, feedback)
         crs = bridge.computation_crs(stations.sourceCrs(), stations.sourceExtent(), context, feedback,

@@ -12,7 +12,7 @@ from qgis.core import (
     QgsProcessingParameterNumber,
 )
 
-from ...plugin import compat
+from .. import compat
 from ..translation import active_language
 from .. import bridge
 from ..engine import stations as engine
@@ -132,11 +132,7 @@ class Stations(PlotwiseAlgorithm):
         if source is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.FRAME))
         layer_name = source.sourceName() or self.FRAME
-        stratum_field = self.parameterAsString(parameters, self.STRATUM_FIELD, context) or None
-        if stratum_field and source.fields().lookupField(stratum_field) < 0:
-            raise QgsProcessingException(self.tr("Layer '{layer}' has no field '{field}' ({param}). Choose an "
-                                                 "existing field.").format(layer=layer_name, field=stratum_field,
-                                                                           param=self.STRATUM_FIELD))
+        stratum_field = self.field_name(parameters, self.STRATUM_FIELD, context, source, layer_name)
         settings = dict(
             array=self.parameterAsEnum(parameters, self.ARRAY, context),
             n_stations=self.parameterAsInt(parameters, self.N_STATIONS, context),

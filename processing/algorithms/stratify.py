@@ -13,7 +13,7 @@ from qgis.core import (
 )
 from shapely import wkb as shapely_wkb
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..gdal_io.covariate_stack import Covariate
 from ..gdal_io.patches import DEFAULT_MIN_AREA_HA, MAX_POLYGON_PATCHES, MAX_SIEVE_PATCHES, speck_cells

@@ -9,7 +9,7 @@ from qgis.core import (
     QgsProcessingParameterNumber,
 )
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import trend as engine
 from ..report.trend import TrendRun, fill_trend_report
@@ -103,24 +103,13 @@ class Trend(PlotwiseAlgorithm):
             self.addOutput(QgsProcessingOutputNumber(name, label))
 
     # ------------------------------------------------------------------------------
-    def _field(self, parameters, name, context, source, required=False):
-        read = getattr(self, "parameterAsStrings", None) or self.parameterAsFields
-        chosen = (read(parameters, name, context) or [None])[0]
-        if chosen and source.fields().lookupField(chosen) >= 0:
-            return chosen
-        if required:
-            raise QgsProcessingException(self.tr(
-                "Layer '{layer}' has no field '{field}' for {what}. Choose the field in the parameters.").format(
-                layer=source.sourceName(), field=chosen or "", what=self.parameterDefinition(name).description()))
-        return None
-
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
         source = self.parameterAsSource(parameters, self.INPUT, context)
         if source is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.INPUT))
         counts = self.parameterAsEnum(parameters, self.SOURCE, context) == 0
         confidence = self.parameterAsDouble(parameters, self.CONFIDENCE, context)
-        field = lambda name, required: self._field(parameters, name, context, source, required)  # noqa: E731
+        field = lambda name, required: self.field_name(parameters, name, context, source, required=required)  # noqa: E731
         run = TrendRun(
             source.sourceName(), field(self.UNIT_ID_FIELD, counts) if counts else None,
             field(self.YEAR_FIELD, True), field(self.COUNT_FIELD, counts) if counts else None,

@@ -9,7 +9,7 @@ from qgis.core import (
     QgsProcessingParameterString,
 )
 
-from ...plugin import compat
+from .. import compat
 from .. import bridge
 from ..engine import panels as panel_engine
 from ..engine import trend_power as engine

@@ -72,7 +72,7 @@ def reference_ratio():
 def host_time():
     from qgis.core import QgsFeature, QgsGeometry, QgsPointXY, QgsVectorLayer
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     app, processing = start_host()  # scripts/headless_host.py
     units, x, sizes, strata = survey()

@@ -44,7 +44,7 @@ def host_baseline():
     try:
         from qgis.core import QgsFeature, QgsVectorLayer
 
-        from plotwise.plugin import compat
+        from plotwise.processing import compat
     except ImportError:
         return None
     app, processing = start_host()  # scripts/headless_host.py

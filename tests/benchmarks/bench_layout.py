@@ -97,7 +97,7 @@ def eight_strata(total_km2=300.0):
 def memory_layer(geometries, strata=None, n=None):
     from qgis.core import QgsFeature, QgsGeometry, QgsVectorLayer
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer(f"MultiPolygon?crs={CRS}", "frame", "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("n_alloc", "int")])

@@ -25,7 +25,7 @@ def plotwise_registered(plotwise_provider):
 def _strata_layer(rows):
     """Square strata side by side in EPSG:32633, with the fields of plotwise:stratify plus pilot figures."""
     layer = QgsVectorLayer("Polygon?crs=EPSG:32633", "strata", "memory")
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer.dataProvider().addAttributes(
         [compat.make_field(n, k) for n, k in (

@@ -46,7 +46,7 @@ def _surface(path, epsg=32633, origin=(500000.0, 6000000.0), cells=(40, 40), cel
 
 
 def _polygons(rows, fields=(), crs="EPSG:32633"):
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer(f"Polygon?crs={crs}", "polys", "memory")
     if fields:

@@ -112,7 +112,7 @@ def test_simulated_counts_stay_inside_each_units_stratum(run_alg):
     # stratum 1 over the split counts only the animals west of it (numpy comparison as the oracle)
     from qgis.core import QgsFeature, QgsGeometry, QgsPointXY, QgsVectorLayer
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     animals = QgsVectorLayer("Point?crs=EPSG:32633", "animals", "memory")
     xy = np.array([(x, y) for x in np.arange(50, 1000, 100.0) for y in np.arange(50, 1000, 100.0)])

@@ -65,7 +65,7 @@ def french_ui(plotwise_provider):
 
 def _squares(fields, rows, crs="EPSG:32633"):
     """Square polygons side by side; ``rows`` are (side_m, attributes...)."""
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer(f"Polygon?crs={crs}", "strata", "memory")
     layer.dataProvider().addAttributes([compat.make_field(name, kind) for name, kind in fields])

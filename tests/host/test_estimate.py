@@ -32,7 +32,7 @@ def registered(plotwise_provider):
 
 
 def _strata_layer():
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("Polygon?crs=EPSG:32633", "strata", "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int")])
@@ -49,7 +49,7 @@ def _strata_layer():
 
 def _units_layer(counts=COUNTS, extra=(), role=False):
     """Square 100 m plots along a line in each stratum; ``extra`` adds (stratum, count, role) rows."""
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("Polygon?crs=EPSG:32633", "units", "memory")
     spec = [("unit_id", "int"), ("stratum", "int"), ("count", "string" if any(
@@ -209,7 +209,7 @@ def test_presence_gives_naive_occupancy(registered, run_alg, tmp_path):
 
 
 def _points_layer():
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("Point?crs=EPSG:32633", "stations", "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("count", "int")])
@@ -274,7 +274,7 @@ def test_without_stratum_field_the_frame_is_one_stratum(registered, run_alg, tmp
 
 
 def test_line_transects_use_strip_width_times_length(registered, run_alg, tmp_path):
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("LineString?crs=EPSG:32633", "transects", "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("count", "int")])
@@ -297,7 +297,7 @@ def test_line_transects_use_strip_width_times_length(registered, run_alg, tmp_pa
 
 def _strata_from(rects, name="strata"):
     """A strata layer of rectangles ``(x0, y0, x1, y1, stratum)``; a stratum of None is a NULL id."""
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("Polygon?crs=EPSG:32633", name, "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int")])
@@ -377,7 +377,7 @@ def test_warnings_of_reading_the_layers_are_shown_once(registered, run_alg, tmp_
 
 def _with_design(layer, design, edge="", reach=0.0):
     """A copy of ``layer`` whose units carry the layout's design record (fields design, edge, reach_m)."""
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     out = QgsVectorLayer("Polygon?crs=EPSG:32633", "units", "memory")
     out.dataProvider().addAttributes(list(layer.fields()) + [compat.make_field("design", "string", 10),
@@ -440,3 +440,22 @@ def test_detection_df_narrows_nothing_and_widens_the_interval(registered, run_al
     # Buckland et al. (2001), eq. 3.75: fewer df for p, a larger t quantile, the same estimate and SE
     assert few["ABUNDANCE"] == pytest.approx(known["ABUNDANCE"], rel=1e-12)
     assert few["ABUNDANCE_HI"] > known["ABUNDANCE_HI"]
+
+
+def test_unknown_field_policy(registered, run_alg, tmp_path):
+    # One policy for a field the layer lacks (PlotwiseAlgorithm.field_names): a field the user chose
+    # is an error naming the layer, the parameter and the fields there are ...
+    with pytest.raises(QgsProcessingException, match=r"Layer 'units' has no field 'strat' \(STRATUM_FIELD\)\. "
+                                                     r"Its fields are: unit_id, stratum, count"):
+        _run(run_alg, tmp_path, _units_layer(), STRATUM_FIELD="strat")
+    # ... a required one at its default ("count") that the layer lacks too ...
+    bare = QgsVectorLayer("Polygon?crs=EPSG:32633&field=unit_id:integer", "bare units", "memory")
+    with pytest.raises(QgsProcessingException, match=r"Layer 'bare units' has no field 'count' \(COUNT_FIELD\)"):
+        _run(run_alg, tmp_path, bare, STRATUM_FIELD=None)
+    # ... while a default field the layer lacks is not used (here: the frame is one stratum)
+    frame = QgsVectorLayer("Polygon?crs=EPSG:32633", "frame", "memory")
+    f = QgsFeature(frame.fields())
+    f.setGeometry(QgsGeometry.fromWkt("POLYGON((0 0, 2000 0, 2000 2000, 0 2000, 0 0))"))
+    frame.dataProvider().addFeatures([f])
+    results, feedback = _run(run_alg, tmp_path, _units_layer(), STRATA=frame)
+    assert any("one stratum" in w for w in feedback.warnings)

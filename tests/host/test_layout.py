@@ -36,7 +36,7 @@ def registered(plotwise_provider):
 
 
 def strata_layer(rows=STRATA, crs="EPSG:32736", n_type="int"):
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer(f"Polygon?crs={crs}", "strata", "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int"), compat.make_field("n_alloc", n_type)])
@@ -199,7 +199,7 @@ def test_packed_wkb_reads_back_in_shapely_and_the_host(kind, shape, geom_type):
 
 def test_write_rows_to_a_geopackage_reads_back_in_ogr(tmp_path):
     """Several chunks, geometries and empty ones mixed: every feature reads back as written (GDAL/OGR as the reader)."""
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
     from plotwise.processing import bridge
     from qgis.core import QgsCoordinateReferenceSystem, QgsProject, QgsVectorFileWriter
 

@@ -19,7 +19,7 @@ FRAME = [  # stratum, polygon (EPSG:32736, invented)
 
 
 def frame_layer():
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("Polygon?crs=EPSG:32736", "frame", "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int")])
@@ -33,7 +33,7 @@ def frame_layer():
 
 
 def table_layer(name, fields, rows):
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("None", name, "memory")
     layer.dataProvider().addAttributes([compat.make_field(n, k) for n, k in fields])

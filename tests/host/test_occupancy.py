@@ -19,7 +19,7 @@ K = 5
 
 def site_layer(y, extra=None, geometry="Point", name="cameras", kinds=None):
     """Invented camera sites (EPSG:32736) with det_1..det_K (NULL for NaN) and extra numeric fields."""
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     extra = extra or {}
     layer = QgsVectorLayer(f"{geometry}?crs=EPSG:32736" if geometry else "None", name, "memory")
@@ -182,7 +182,7 @@ def write_gpkg(layer, path):
 
 
 def test_qgis_process_simulates_detections(qgis_process, tmp_path):
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     stations = site_layer(np.zeros((20, 1)))
     animals = QgsVectorLayer("Point?crs=EPSG:32736", "animals", "memory")

@@ -228,7 +228,7 @@ def scan(markup):
 def memory_layer(geometry, name, fields, rows, wkts, crs="EPSG:32736"):
     from qgis.core import QgsFeature, QgsGeometry, QgsVectorLayer
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer(f"{geometry}?crs={crs}", name, "memory")
     layer.dataProvider().addAttributes([compat.make_field(n, k) for n, k in fields])
@@ -414,7 +414,7 @@ def yearly_counts(units, name, years=8, seed=3):
                          str(feature["stratum"])])
     from qgis.core import QgsFeature, QgsVectorLayer
 
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("None", name, "memory")
     layer.dataProvider().addAttributes([compat.make_field(n, k) for n, k in

@@ -26,7 +26,7 @@ PINNED = ("FRAME", "STRATUM_FIELD", "N_STATIONS", "ARRAY", "HOME_RANGE", "SPACIN
 
 
 def frame_layer(rows=STRATA, name="strata"):
-    from plotwise.plugin import compat
+    from plotwise.processing import compat
 
     layer = QgsVectorLayer("Polygon?crs=EPSG:32736", name, "memory")
     layer.dataProvider().addAttributes([compat.make_field("stratum", "int")])

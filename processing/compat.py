@@ -119,3 +119,10 @@ FIELD_NUMERIC = _first(
     lambda: Qgis.ProcessingFieldParameterDataType.Numeric, lambda: QgsProcessingParameterField.Numeric
 )
 FIELD_ANY = _first(lambda: Qgis.ProcessingFieldParameterDataType.Any, lambda: QgsProcessingParameterField.Any)
+
+
+def parameter_as_fields(algorithm, parameters, name, context):
+    """The field names a field parameter holds: ``parameterAsStrings`` on newer hosts, ``parameterAsFields``
+    (deprecated there) on 3.22."""
+    read = getattr(algorithm, "parameterAsStrings", None) or algorithm.parameterAsFields
+    return [field for field in (read(parameters, name, context) or []) if field]
