@@ -4,7 +4,7 @@
 <context>
     <name>Allocate</name>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="56"/>
+        <location filename="../processing/algorithms/allocate.py" line="59"/>
         <source>Allocate effort to strata</source>
         <translation>Asignar el esfuerzo a los estratos</translation>
     </message>
@@ -23,7 +23,7 @@ SD field: the pilot standard deviation of counts per unit. Without it the covari
 Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
 
 Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-        <translation>Decide cuántas unidades de muestreo recibe cada estrato y muestra de antemano la precisión que aportan.
+        <translation type="obsolete">Decide cuántas unidades de muestreo recibe cada estrato y muestra de antemano la precisión que aportan.
 
 Métodos: igual; proporcional al área del estrato; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, cap. 5); óptima con coste, n_h ∝ A_h·S_h/√c_h, con un presupuesto C = c0 + Σ c_h·n_h (Cochran 1977, cap. 5).
 
@@ -38,414 +38,458 @@ Campo de media: el conteo medio piloto por unidad, necesario para los CV y para 
 Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad del estrato), y un informe que compara la asignación igual, la proporcional y la de Neyman con el mismo total.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="83"/>
+        <location filename="../processing/algorithms/allocate.py" line="90"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="86"/>
+        <location filename="../processing/algorithms/allocate.py" line="93"/>
         <source>Stratum identifier field</source>
         <translation>Campo identificador del estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="92"/>
+        <location filename="../processing/algorithms/allocate.py" line="99"/>
         <source>Stratum area field (hectares; empty: polygon area)</source>
         <translation>Campo de área del estrato (hectáreas; vacío: área del polígono)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <location filename="../processing/algorithms/allocate.py" line="105"/>
         <source>Pilot SD of counts per unit</source>
         <translation>Desviación estándar piloto de los conteos por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <location filename="../processing/algorithms/allocate.py" line="105"/>
         <source>Pilot mean count per unit</source>
         <translation>Conteo medio piloto por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <location filename="../processing/algorithms/allocate.py" line="105"/>
         <source>Cost per unit</source>
         <translation>Coste por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="106"/>
+        <location filename="../processing/algorithms/allocate.py" line="113"/>
         <source>Costs are field days</source>
         <translation>Los costes son jornadas de campo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="109"/>
+        <location filename="../processing/algorithms/allocate.py" line="116"/>
         <source>Fixed cost of the survey (c0, in the cost unit)</source>
         <translation>Coste fijo del muestreo (c0, en la unidad de coste)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Allocation method</source>
         <translation>Método de asignación</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Equal</source>
         <translation>Igual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Proportional to area</source>
         <translation>Proporcional al área</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
         <source>Neyman</source>
         <translation>Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Optimal with cost</source>
         <translation>Óptima con coste</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="123"/>
+        <location filename="../processing/algorithms/allocate.py" line="130"/>
         <source>Total number of units</source>
         <translation>Número total de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="128"/>
+        <location filename="../processing/algorithms/allocate.py" line="135"/>
         <source>Budget (0: not used; needs the cost field)</source>
         <translation>Presupuesto (0: no se usa; necesita el campo de coste)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="134"/>
+        <location filename="../processing/algorithms/allocate.py" line="141"/>
         <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
         <translation>CV objetivo de la densidad global (0: no se usa; p. ej. 0.2)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="140"/>
+        <location filename="../processing/algorithms/allocate.py" line="147"/>
         <source>Area of one sample unit (m²)</source>
         <translation>Área de una unidad de muestreo (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <location filename="../processing/algorithms/allocate.py" line="153"/>
         <source>Minimum units per stratum</source>
         <translation>Mínimo de unidades por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="152"/>
+        <location filename="../processing/algorithms/allocate.py" line="167"/>
         <source>Strata with allocation</source>
         <translation>Estratos con asignación</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="154"/>
+        <location filename="../processing/algorithms/allocate.py" line="169"/>
         <source>Expected CV of the overall density</source>
         <translation>CV esperado de la densidad global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="160"/>
+        <location filename="../processing/algorithms/allocate.py" line="175"/>
         <source>The strata layer could not be opened.</source>
         <translation>No se pudo abrir la capa de estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="175"/>
+        <location filename="../processing/algorithms/allocate.py" line="190"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
         <translation>La capa «{layer}» no tiene el campo «{field}»: se usan las áreas de los polígonos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="187"/>
+        <location filename="../processing/algorithms/allocate.py" line="202"/>
         <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
         <translation>La capa «{layer}» no tiene ningún estrato con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="202"/>
+        <location filename="../processing/algorithms/allocate.py" line="217"/>
         <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
         <translation>campo «{name}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="216"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
         <translation>No hay campo de DE piloto: se usa como sustituto la DE de la covariable («{field}»). Esto supone que los conteos siguen a la covariable; sustitúyala por la DE de un muestreo piloto cuando la tenga. Los errores estándar esperados quedan entonces en unidades de la covariable, no en conteos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>polygon area</source>
         <translation>área del polígono</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>pilot SD</source>
         <translation>desviación estándar piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>pilot mean</source>
         <translation>media piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>cost</source>
         <translation>coste</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="259"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>The output layer could not be created.</source>
         <translation>No se pudo crear la capa de salida.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="269"/>
+        <location filename="../processing/algorithms/allocate.py" line="286"/>
         <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
         <translation>{total} unidades asignadas ({method}); CV esperado de la densidad global: {cv}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <location filename="../processing/algorithms/allocate.py" line="299"/>
         <source>equal</source>
         <translation>igual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <location filename="../processing/algorithms/allocate.py" line="299"/>
         <source>proportional to area</source>
         <translation>proporcional al área</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
         <source>optimal with cost</source>
         <translation>óptima con coste</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="293"/>
         <source>Allocation of survey effort</source>
-        <translation>Asignación del esfuerzo de muestreo</translation>
+        <translation type="obsolete">Asignación del esfuerzo de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="295"/>
         <source>field days</source>
-        <translation>jornadas de campo</translation>
+        <translation type="obsolete">jornadas de campo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="295"/>
         <source>cost units</source>
-        <translation>unidades de coste</translation>
+        <translation type="obsolete">unidades de coste</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="296"/>
         <source>units in total</source>
-        <translation>unidades en total</translation>
+        <translation type="obsolete">unidades en total</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="296"/>
         <source>method</source>
-        <translation>método</translation>
+        <translation type="obsolete">método</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="298"/>
         <source>expected CV of the overall density</source>
-        <translation>CV esperado de la densidad global</translation>
+        <translation type="obsolete">CV esperado de la densidad global</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="300"/>
         <source>field days needed</source>
-        <translation>jornadas de campo necesarias</translation>
+        <translation type="obsolete">jornadas de campo necesarias</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="302"/>
         <source>a total number of units</source>
-        <translation>un número total de unidades</translation>
+        <translation type="obsolete">un número total de unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="302"/>
         <source>a budget</source>
-        <translation>un presupuesto</translation>
+        <translation type="obsolete">un presupuesto</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="302"/>
         <source>a target CV</source>
-        <translation>un CV objetivo</translation>
+        <translation type="obsolete">un CV objetivo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Strata layer</source>
-        <translation>Capa de estratos</translation>
+        <translation type="obsolete">Capa de estratos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Computation CRS</source>
-        <translation>SRC de cálculo</translation>
+        <translation type="obsolete">SRC de cálculo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Method asked for</source>
-        <translation>Método solicitado</translation>
+        <translation type="obsolete">Método solicitado</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Method applied</source>
-        <translation>Método aplicado</translation>
+        <translation type="obsolete">Método aplicado</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Target</source>
-        <translation>Objetivo</translation>
+        <translation type="obsolete">Objetivo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Total asked for</source>
-        <translation>Total solicitado</translation>
+        <translation type="obsolete">Total solicitado</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Budget</source>
-        <translation>Presupuesto</translation>
+        <translation type="obsolete">Presupuesto</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Target CV</source>
-        <translation>CV objetivo</translation>
+        <translation type="obsolete">CV objetivo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Unit area (m²)</source>
-        <translation>Área de la unidad (m²)</translation>
+        <translation type="obsolete">Área de la unidad (m²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>SD field</source>
-        <translation>Campo de DE</translation>
+        <translation type="obsolete">Campo de DE</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source> (covariate proxy)</source>
-        <translation> (sustituto por la covariable)</translation>
+        <translation type="obsolete"> (sustituto por la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Mean field</source>
-        <translation>Campo de media</translation>
+        <translation type="obsolete">Campo de media</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Cost field</source>
-        <translation>Campo de coste</translation>
+        <translation type="obsolete">Campo de coste</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Fixed cost c0</source>
-        <translation>Coste fijo c0</translation>
+        <translation type="obsolete">Coste fijo c0</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="321"/>
         <source>Units per stratum</source>
-        <translation>Unidades por estrato</translation>
+        <translation type="obsolete">Unidades por estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="322"/>
         <source>SE of mean per unit (covariate units)</source>
-        <translation>Error estándar de la media por unidad (unidades de la covariable)</translation>
+        <translation type="obsolete">Error estándar de la media por unidad (unidades de la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="322"/>
         <source>SE of mean count per unit</source>
-        <translation>Error estándar del conteo medio por unidad</translation>
+        <translation type="obsolete">Error estándar del conteo medio por unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Stratum</source>
-        <translation>Estrato</translation>
+        <translation type="obsolete">Estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Units that fit</source>
-        <translation>Unidades que caben</translation>
+        <translation type="obsolete">Unidades que caben</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Lower bound</source>
-        <translation>Límite inferior</translation>
+        <translation type="obsolete">Límite inferior</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Share before rounding</source>
-        <translation>Cuota antes del redondeo</translation>
+        <translation type="obsolete">Cuota antes del redondeo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="324"/>
         <source>Units (n_alloc)</source>
-        <translation>Unidades (n_alloc)</translation>
+        <translation type="obsolete">Unidades (n_alloc)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="324"/>
         <source>Sampling fraction</source>
-        <translation>Fracción de muestreo</translation>
+        <translation type="obsolete">Fracción de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="328"/>
         <source>SE of density (per km²)</source>
-        <translation>Error estándar de la densidad (por km²)</translation>
+        <translation type="obsolete">Error estándar de la densidad (por km²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="330"/>
         <source>Expected CV (exp_cv)</source>
-        <translation>CV esperado (exp_cv)</translation>
+        <translation type="obsolete">CV esperado (exp_cv)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="342"/>
         <source>all strata</source>
-        <translation>todos los estratos</translation>
+        <translation type="obsolete">todos los estratos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="352"/>
         <source>units per stratum</source>
-        <translation>unidades por estrato</translation>
+        <translation type="obsolete">unidades por estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="352"/>
         <source>Units allocated to each stratum</source>
-        <translation>Unidades asignadas a cada estrato</translation>
+        <translation type="obsolete">Unidades asignadas a cada estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="356"/>
         <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-        <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
+        <translation type="obsolete">La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="361"/>
         <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-        <translation>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+        <translation type="obsolete">{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="361"/>
         <source>Field days needed</source>
-        <translation>Jornadas de campo necesarias</translation>
+        <translation type="obsolete">Jornadas de campo necesarias</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="361"/>
         <source>Cost of the design</source>
-        <translation>Coste del diseño</translation>
+        <translation type="obsolete">Coste del diseño</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="368"/>
         <source>What the choice of method buys, at {n} units</source>
-        <translation>Lo que aporta la elección del método, con {n} unidades</translation>
+        <translation type="obsolete">Lo que aporta la elección del método, con {n} unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="369"/>
         <source>Method</source>
-        <translation>Método</translation>
+        <translation type="obsolete">Método</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="369"/>
         <source>stratum {label}</source>
-        <translation>estrato {label}</translation>
+        <translation type="obsolete">estrato {label}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="371"/>
         <source>Variance relative to the applied allocation</source>
-        <translation>Varianza relativa a la asignación aplicada</translation>
+        <translation type="obsolete">Varianza relativa a la asignación aplicada</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="373"/>
         <source>Expected CV</source>
-        <translation>CV esperado</translation>
+        <translation type="obsolete">CV esperado</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="384"/>
         <source>Without standard deviations the precision of the designs cannot be compared.</source>
-        <translation>Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
+        <translation type="obsolete">Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="62"/>
+        <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
+
+Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
+
+Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall density meets it; else a budget (if above 0, needs the cost field); else the total number of units.
+
+Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches a bound keeps it and the rest is shared among the others, until stable. Whole units are rounded by largest remainder, keeping the total.
+
+Area field: the stratum area in hectares (default area_ha, as written by the stratification); when it is empty or missing, the polygon area is used.
+SD field: the pilot standard deviation of counts per unit. Without it the covariate SD (cov_sd) is used as a proxy, which assumes that counts scale with the covariate; without either, the allocation is proportional.
+Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
+
+Layout to come: the finite-population correction 1 − n·a/A is used only when the units will not overlap (systematic grid, spatially balanced, or simple random with a minimum spacing of at least the unit's width); simple random centres without one may overlap, a continuous population with no such correction (Cordy 1993). plotwise:estimate applies the same rule.
+
+Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Layout to come (decides the finite-population correction)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Simple random (units may overlap: no correction)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Simple random with a minimum spacing of at least the unit&apos;s width</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Systematic grid</source>
+        <translation type="unfinished">Cuadrícula sistemática</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Spatially balanced</source>
+        <translation type="unfinished">Espacialmente equilibrado</translation>
     </message>
 </context>
 <context>
@@ -771,7 +815,7 @@ Las estimaciones de un muestreo sobre este marco valen solo para el marco. Exclu
 <context>
     <name>CompareDesigns</name>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="80"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="61"/>
         <source>Compare survey designs by simulation</source>
         <translation>Comparar diseños de muestreo por simulación</translation>
     </message>
@@ -792,7 +836,7 @@ Output table, one row per design: rel_bias (relative bias against each populatio
 Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
 
 The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation>Antes del trabajo de campo: ¿qué diseño, y cuántas unidades, dan una estimación útil en esta zona? El algoritmo simula muchos muestreos de una superficie de densidad plausible e informa de cómo le fue a cada diseño.
+        <translation type="obsolete">Antes del trabajo de campo: ¿qué diseño, y cuántas unidades, dan una estimación útil en esta zona? El algoritmo simula muchos muestreos de una superficie de densidad plausible e informa de cómo le fue a cada diseño.
 
 Superficie: un ráster de animales esperados por km² (de un modelo de hábitat, un mapa de expertos o un muestreo anterior), reproyectado al SRC del marco cuando hace falta. Marco: el marco de muestreo. Estratos (opcionales, con el campo de estrato, 'stratum' por defecto): necesarios para los dos diseños estratificados.
 
@@ -809,579 +853,618 @@ Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación
 La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="123"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="110"/>
         <source>Density surface (expected animals per km²)</source>
         <translation>Superficie de densidad (animales esperados por km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="373"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="127"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="114"/>
         <source>Strata (for the stratified designs)</source>
         <translation>Estratos (para los diseños estratificados)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="119"/>
         <source>Stratum field</source>
         <translation>Campo de estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Designs to compare</source>
         <translation>Diseños que comparar</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Simple random</source>
         <translation>Aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Stratified, proportional allocation</source>
         <translation>Estratificado, asignación proporcional</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
         <source>Stratified, Neyman allocation</source>
-        <translation>Estratificado, asignación de Neyman</translation>
+        <translation type="obsolete">Estratificado, asignación de Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="383"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="133"/>
         <source>Number of units</source>
         <translation>Número de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Unit shape</source>
         <translation>Forma de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Point station</source>
         <translation>Estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Square plot</source>
         <translation>Parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Circular plot</source>
         <translation>Parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Line transect</source>
         <translation>Transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="145"/>
         <source>Unit size (m): counting radius, side, radius or transect length</source>
         <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="151"/>
         <source>Half-width of a transect&apos;s counting strip (m)</source>
         <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
         <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
         <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
         <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
         <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="384"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
         <source>Simulated surveys per design</source>
         <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="187"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
         <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
         <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Variance estimator for the grid and balanced designs</source>
         <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Simple random sampling formula</source>
         <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="200"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="189"/>
         <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
         <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="207"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="201"/>
         <source>Design comparison</source>
         <translation>Comparación de diseños</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="205"/>
         <source>Recommended design</source>
         <translation>Diseño recomendado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="217"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
         <source>The density surface could not be opened.</source>
         <translation>No se pudo abrir la superficie de densidad.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="214"/>
         <source>The sampling frame could not be opened.</source>
         <translation>No se pudo abrir el marco de muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="225"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="219"/>
         <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
         <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="233"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
         <translation>La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="244"/>
         <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
         <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="261"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="255"/>
         <source>No strata were given: the stratified designs are left out ({names}).</source>
         <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="265"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="259"/>
         <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
         <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="277"/>
         <source>Reading the density surface…</source>
         <translation>Leyendo la superficie de densidad…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="289"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
         <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
         <translation>La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="308"/>
         <source>Simulating {n} units…</source>
         <translation>Simulando {n} unidades…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="320"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
         <source>{n} units were left out of the range: {why}</source>
         <translation>{n} unidades quedaron fuera del rango: {why}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="327"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="321"/>
         <source>The output table could not be created.</source>
         <translation>No se pudo crear la tabla de salida.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="344"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="340"/>
         <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
         <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="352"/>
         <source>Survey designs compared by simulation</source>
-        <translation>Diseños de muestreo comparados por simulación</translation>
+        <translation type="obsolete">Diseños de muestreo comparados por simulación</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="358"/>
         <source>recommended design</source>
-        <translation>diseño recomendado</translation>
+        <translation type="obsolete">diseño recomendado</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
         <source>its RMSE (animals)</source>
-        <translation>su RECM (animales)</translation>
+        <translation type="obsolete">su RECM (animales)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="360"/>
         <source>its RMSE relative to the total</source>
-        <translation>su RECM relativa al total</translation>
+        <translation type="obsolete">su RECM relativa al total</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="361"/>
         <source>its 95 % interval coverage</source>
-        <translation>cobertura de sus intervalos al 95 %</translation>
+        <translation type="obsolete">cobertura de sus intervalos al 95 %</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="363"/>
         <source>expected animals in the frame</source>
-        <translation>animales esperados en el marco</translation>
+        <translation type="obsolete">animales esperados en el marco</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>point station</source>
-        <translation>estación puntual</translation>
+        <translation type="obsolete">estación puntual</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>square plot</source>
-        <translation>parcela cuadrada</translation>
+        <translation type="obsolete">parcela cuadrada</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>circular plot</source>
-        <translation>parcela circular</translation>
+        <translation type="obsolete">parcela circular</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>line transect</source>
-        <translation>transecto lineal</translation>
+        <translation type="obsolete">transecto lineal</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>counting radius</source>
-        <translation>radio de conteo</translation>
+        <translation type="obsolete">radio de conteo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>side</source>
-        <translation>lado</translation>
+        <translation type="obsolete">lado</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>radius</source>
-        <translation>radio</translation>
+        <translation type="obsolete">radio</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>length</source>
-        <translation>longitud</translation>
+        <translation type="obsolete">longitud</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="370"/>
         <source>, strip half-width {w:g} m</source>
-        <translation>, semianchura de franja {w:g} m</translation>
+        <translation type="obsolete">, semianchura de franja {w:g} m</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="372"/>
         <source>Density surface</source>
-        <translation>Superficie de densidad</translation>
+        <translation type="obsolete">Superficie de densidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="474"/>
         <source>Strata</source>
-        <translation>Estratos</translation>
+        <translation type="obsolete">Estratos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
         <source>none</source>
-        <translation>ninguno</translation>
+        <translation type="obsolete">ninguno</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
         <source>feature id</source>
-        <translation>identificador de entidad</translation>
+        <translation type="obsolete">identificador de entidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="376"/>
         <source>Computation CRS</source>
-        <translation>SRC de cálculo</translation>
+        <translation type="obsolete">SRC de cálculo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="377"/>
         <source>Surface cell</source>
-        <translation>Celda de la superficie</translation>
+        <translation type="obsolete">Celda de la superficie</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="378"/>
         <source>Sub-cells per cell side (for counting)</source>
-        <translation>Subceldas por lado de celda (para el conteo)</translation>
+        <translation type="obsolete">Subceldas por lado de celda (para el conteo)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="379"/>
         <source>Unit</source>
-        <translation>Unidad</translation>
+        <translation type="obsolete">Unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="380"/>
         <source>Counted area per unit (m²)</source>
-        <translation>Área contada por unidad (m²)</translation>
+        <translation type="obsolete">Área contada por unidad (m²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
         <source>Bearing</source>
-        <translation>Rumbo</translation>
+        <translation type="obsolete">Rumbo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
         <source>random</source>
-        <translation>aleatorio</translation>
+        <translation type="obsolete">aleatorio</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
         <source>Units wholly inside their stratum</source>
-        <translation>Unidades por completo dentro de su estrato</translation>
+        <translation type="obsolete">Unidades por completo dentro de su estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
         <source>yes</source>
-        <translation>sí</translation>
+        <translation type="obsolete">sí</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
         <source>no</source>
-        <translation>no</translation>
+        <translation type="obsolete">no</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
         <source>Counts per cell</source>
-        <translation>Conteos por celda</translation>
+        <translation type="obsolete">Conteos por celda</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
         <source>negative binomial, k = {k:g}</source>
-        <translation>binomial negativa, k = {k:g}</translation>
+        <translation type="obsolete">binomial negativa, k = {k:g}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
         <source>Poisson</source>
-        <translation>Poisson</translation>
+        <translation type="obsolete">Poisson</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
         <source>Variance estimator (grid, balanced)</source>
-        <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
+        <translation type="obsolete">Estimador de la varianza (cuadrícula, equilibrado)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
         <source>local neighbourhood</source>
-        <translation>vecindario local</translation>
+        <translation type="obsolete">vecindario local</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
         <source>simple random sampling formula</source>
-        <translation>fórmula del muestreo aleatorio simple</translation>
+        <translation type="obsolete">fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="389"/>
         <source>Confidence level</source>
-        <translation>Nivel de confianza</translation>
+        <translation type="obsolete">Nivel de confianza</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="390"/>
         <source>Seed</source>
-        <translation>Semilla</translation>
+        <translation type="obsolete">Semilla</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="395"/>
         <source>How the designs did at {n} units</source>
-        <translation>Resultados de los diseños con {n} unidades</translation>
+        <translation type="obsolete">Resultados de los diseños con {n} unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Design</source>
-        <translation>Diseño</translation>
+        <translation type="obsolete">Diseño</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Mean units surveyed</source>
-        <translation>Media de unidades muestreadas</translation>
+        <translation type="obsolete">Media de unidades muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Relative bias</source>
-        <translation>Sesgo relativo</translation>
+        <translation type="obsolete">Sesgo relativo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Empirical SE (animals)</source>
-        <translation>Error estándar empírico (animales)</translation>
+        <translation type="obsolete">Error estándar empírico (animales)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="510"/>
         <source>RMSE (animals)</source>
-        <translation>RECM (animales)</translation>
+        <translation type="obsolete">RECM (animales)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
         <source>± Monte Carlo SE</source>
-        <translation>± error estándar de Monte Carlo</translation>
+        <translation type="obsolete">± error estándar de Monte Carlo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
         <source>RMSE / total</source>
-        <translation>RECM / total</translation>
+        <translation type="obsolete">RECM / total</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
         <source>Mean estimated CV</source>
-        <translation>CV estimado medio</translation>
+        <translation type="obsolete">CV estimado medio</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
         <source>95 % interval coverage</source>
-        <translation>Cobertura de los intervalos al 95 %</translation>
+        <translation type="obsolete">Cobertura de los intervalos al 95 %</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
         <source>Surveys without an estimate</source>
-        <translation>Muestreos sin estimación</translation>
+        <translation type="obsolete">Muestreos sin estimación</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="410"/>
         <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-        <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
+        <translation type="obsolete">Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
         <source>RMSE of the abundance (animals)</source>
-        <translation>RECM de la abundancia (animales)</translation>
+        <translation type="obsolete">RECM de la abundancia (animales)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
         <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-        <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
+        <translation type="obsolete">Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="421"/>
         <source>Recommendation</source>
-        <translation>Recomendación</translation>
+        <translation type="obsolete">Recomendación</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="423"/>
         <source>No design gave estimates: see the warnings.</source>
-        <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
+        <translation type="obsolete">Ningún diseño dio estimaciones: vea las advertencias.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="425"/>
         <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-        <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
+        <translation type="obsolete">{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="431"/>
         <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-        <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
+        <translation type="obsolete">{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="438"/>
         <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-        <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
+        <translation type="obsolete">Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="443"/>
         <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-        <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
+        <translation type="obsolete">El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="452"/>
         <source>How the simulation works</source>
-        <translation>Cómo funciona la simulación</translation>
+        <translation type="obsolete">Cómo funciona la simulación</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="453"/>
         <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-        <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
+        <translation type="obsolete">Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="462"/>
         <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-        <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
+        <translation type="obsolete">Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>Stratum</source>
-        <translation>Estrato</translation>
+        <translation type="obsolete">Estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>Area (km²)</source>
-        <translation>Área (km²)</translation>
+        <translation type="obsolete">Área (km²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>Mean expected count per unit</source>
-        <translation>Conteo esperado medio por unidad</translation>
+        <translation type="obsolete">Conteo esperado medio por unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>S_h (count SD per unit)</source>
-        <translation>S_h (DE del conteo por unidad)</translation>
+        <translation type="obsolete">S_h (DE del conteo por unidad)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="479"/>
         <source>Units, proportional</source>
-        <translation>Unidades, proporcional</translation>
+        <translation type="obsolete">Unidades, proporcional</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="481"/>
         <source>Units, Neyman</source>
-        <translation>Unidades, Neyman</translation>
+        <translation type="obsolete">Unidades, Neyman</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="491"/>
         <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-        <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
+        <translation type="obsolete">S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="498"/>
         <source>RMSE against the number of units</source>
-        <translation>RECM frente al número de unidades</translation>
+        <translation type="obsolete">RECM frente al número de unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
         <source>number of units</source>
-        <translation>número de unidades</translation>
+        <translation type="obsolete">número de unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
         <source>RMSE of the abundance estimate against the number of units</source>
-        <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
+        <translation type="obsolete">RECM de la estimación de la abundancia frente al número de unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="508"/>
         <source>Units</source>
-        <translation>Unidades</translation>
+        <translation type="obsolete">Unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="516"/>
         <source>{a} → {b} units: RMSE {change:+.0%}</source>
-        <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
+        <translation type="obsolete">{a} → {b} unidades: RECM {change:+.0%}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="517"/>
         <source>For {name}: </source>
-        <translation>Para {name}: </translation>
+        <translation type="obsolete">Para {name}: </translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="518"/>
         <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-        <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
+        <translation type="obsolete">La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="68"/>
+        <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
+
+Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
+
+Each replicate realises a population: Poisson counts in every surface cell, or with an overdispersion k above 0 negative binomial counts (gamma-Poisson, variance μ + μ²/k per cell). Every chosen design is then laid out with the layout engine, its units count the animals in the cells they cover (the part inside the frame or their stratum), and the abundance is estimated with the estimation engine (ratio estimator, t interval with Satterthwaite df; Cochran 1977). All designs survey the same populations, so their differences are not blurred.
+
+Designs: simple random; stratified with proportional allocation; stratified with Neyman allocation, n_h ∝ A_h·S_h with S_h the SD of a unit's count implied by the surface (Neyman 1934): the best case, since no survey knows the true S_h; systematic grid with a random start (its n varies); spatially balanced (balanced acceptance sampling, Robertson et al. 2013); stratified Neyman from a pilot: in every simulated survey S_h is estimated from a pilot of the given number of simple random units per stratum (of an independent realisation, a pilot season), as a real survey would estimate it.
+
+Units: point station (size = counting radius), square plot (side), circular plot (radius), line transect (length, counting a strip of the given half-width on each side). Bearing in degrees clockwise from grid north, −1 random (the default: a grid aligned with straight edges puts whole rows in the edge band at once). Edges follow the layout's protocol: by default plus sampling, with centres over each stratum (or the frame) grown by the unit's reach, each unit counting only the cells of its own stratum with its nominal area, and the estimate expanding to the grown area (Gregoire &amp; Valentine 2008, ch. 10); with keep units inside, centres from each stratum shrunk by the unit's radius, as the layout's option does.
+
+Output table, one row per design: rel_bias (relative bias against each population's true total), emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % intervals holding the truth), mean_n (mean units surveyed), alloc (units per stratum), recommend (1 for the recommended design: the lowest RMSE among designs whose intervals cover at least 90 %).
+
+Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
+
+The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <source>Stratified, Neyman allocation with the true S_h (best case)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <source>Stratified, Neyman allocation from a pilot survey</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="195"/>
+        <source>Pilot units per stratum for the pilot-based Neyman design</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>
@@ -1563,9 +1646,326 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
     </message>
 </context>
 <context>
+    <name>DistanceDensity</name>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="86"/>
+        <source>Density from detection distances (line and point transects)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="89"/>
+        <source>Estimates density and abundance per stratum and for the frame from the distances at which animals (or groups) were seen from line transects or point stations. A detection function fitted to the distances gives the probability of seeing an animal, so the estimate needs no detection probability typed in by hand (Buckland et al. 2001).
+
+Transects or points: the units from the layout (line transects or point stations), with their id field (unit_id) and stratum field (stratum). Line length comes from the geometry; a visits field gives the visits to each point (empty or 0: not surveyed). Every surveyed unit counts, also those with no detection. Units whose role is 'reserve' are left out unless an observation names them; set the role of a surveyed reserve that saw nothing to 'primary'.
+
+Observations: a table or point layer with one row per detection: the unit id, the distance in m (perpendicular to the line for line transects, from the point for point transects) and, optionally, the group size (empty field: each detection is one animal). A negative or missing distance, a group size not above 0, or a unit id the units layer does not have stops the run, naming the observations.
+
+Survey type: line or point transects. Truncation distance (m): detections farther away are left out; 0 drops the farthest 5 % (common practice). Distance bands (m, optional, e.g. 0, 10, 25, 50, 100): for surveys that record bands; the fit then uses the counts per band, and the last edge is the truncation distance.
+
+Key functions: half-normal, hazard-rate and uniform; each is fitted alone, then with cosine terms added one at a time while AIC improves (at most the number given), under the constraint that detection never rises with distance. The model with the smallest AIC is used; the models table lists every model tried with its AIC, the difference to the best, the detection probability, the effective strip half-width (lines) or effective detection radius (points) and goodness-of-fit p-values (χ² on distance bands; Cramér–von Mises on exact distances).
+
+Group size: the mean size of the detected groups, or the size-bias regression of ln(size) on the detection probability when larger groups are seen farther away (automatic: when the slope is negative at p &lt; 0.15, common practice).
+
+One detection function per stratum (option): each stratum then needs at least 20 detections (60 to 80 advised, common practice); otherwise one function serves all strata.
+
+Density: D = n·E(s) / (2wL·P) for lines and n·E(s) / (kπw²·P) for points. Variance by the delta method: the encounter rate's variance between transects within each stratum (estimator R2 of Fewster et al. 2009), the detection function's from its likelihood, the group size's from the sizes; Satterthwaite's degrees of freedom and a log-normal interval with t (Buckland et al. 2001). Bootstrap resamples (0: none) resample transects or points within strata and refit the chosen model, seeded; the outputs then carry the bootstrap's percentile interval.
+
+Strata: polygons with an id field matching the units' stratum field; their areas define the frame (as in the estimate algorithm). Every stratum needs at least two surveyed units. At least 20 detections within the truncation distance are needed (an error names the count), 60 are advised (a warning).
+
+Confidence level of the intervals; area unit of the results (km² or hectares); random seed, used by the bootstrap only (0 draws one and records it); most cosine terms per key function (0: the keys alone).
+
+Outputs: the strata with stratum, area, n_units (transects or points), effort (km of line, or point visits), n_det (detections within the truncation distance), p_det (detection probability within it), esw (effective strip half-width for lines, effective detection radius for points, m), dens, abund with their SE, limits and CV, and df; a models table (model, n_par, aic, delta_aic, p_det, esw, gof_p, chosen, then stratum, n_det, chisq_p, cvm_p); an HTML report (histogram of the distances with the fitted function, models, estimates, map, assumptions); and the overall numbers for models.
+
+References: Buckland, S. T. et al. (2001) Introduction to Distance Sampling, Oxford University Press. Fewster, R. M. et al. (2009) Biometrics 65:225–236.
+
+Field safety: distance sampling sends observers along lines and to points. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="148"/>
+        <source>Transects or points surveyed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="150"/>
+        <source>Unit id field</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="152"/>
+        <source>Stratum field of the units</source>
+        <translation type="unfinished">Campo de estrato de las unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="155"/>
+        <source>Observations (one row per detection)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="157"/>
+        <source>Unit id field of the observations</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="160"/>
+        <source>Distance field (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="163"/>
+        <source>Group size field (empty: each detection is one animal)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="166"/>
+        <source>Survey type</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="166"/>
+        <source>Line transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="166"/>
+        <source>Point transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="169"/>
+        <source>Truncation distance (m; 0: drop the farthest 5 %)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Key functions to try</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Half-normal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Hazard-rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Uniform with cosine terms</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="176"/>
+        <source>Strata (the frame)</source>
+        <translation type="unfinished">Estratos (el marco)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="178"/>
+        <source>Stratum id field of the strata</source>
+        <translation type="unfinished">Campo identificador de los estratos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="181"/>
+        <source>Confidence level</source>
+        <translation type="unfinished">Nivel de confianza</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="184"/>
+        <source>Area unit of the results</source>
+        <translation type="unfinished">Unidad de área de los resultados</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="184"/>
+        <source>km²</source>
+        <translation type="unfinished">km²</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="184"/>
+        <source>hectares</source>
+        <translation type="unfinished">hectáreas</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="189"/>
+        <source>Strata with distance estimates</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="191"/>
+        <source>Detection function models</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Overall density</source>
+        <translation type="unfinished">Densidad global</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Overall abundance</source>
+        <translation type="unfinished">Abundancia global</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Lower confidence limit of the abundance</source>
+        <translation type="unfinished">Límite inferior de confianza de la abundancia</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Upper confidence limit of the abundance</source>
+        <translation type="unfinished">Límite superior de confianza de la abundancia</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>CV of the overall estimate</source>
+        <translation type="unfinished">CV de la estimación global</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Detection probability within the truncation distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Effective strip half-width or detection radius (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="205"/>
+        <source>Visits field of the points (empty: one visit each)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="208"/>
+        <source>Distance bands (m, from 0, comma-separated; empty: exact distances)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="211"/>
+        <source>Most cosine terms per key function</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Group size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Automatic: mean, or size-bias regression when larger groups are seen farther</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Mean of the detected groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Size-bias regression</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="218"/>
+        <source>One detection function per stratum</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="220"/>
+        <source>Bootstrap resamples over transects (0: none)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="234"/>
+        <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
+        <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="256"/>
+        <source>Layer &apos;{layer}&apos; has no features.</source>
+        <translation type="unfinished">La capa «{layer}» no tiene entidades.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <source>Layer &apos;{layer}&apos; holds {kinds} geometries, but the survey type is {survey}. Choose the survey type that matches the units (line transects need lines, point transects points).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <source>line transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <source>point transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="273"/>
+        <source>{n} reserve unit(s) without observations were left out (not surveyed).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="294"/>
+        <source>Layer &apos;{layer}&apos;: the points {ids} have a number of visits in the field &apos;{field}&apos; that is not a whole number of 0 or more. Correct them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="299"/>
+        <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="305"/>
+        <source>{n} point(s) with no visits were left out (not surveyed).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="315"/>
+        <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="319"/>
+        <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="327"/>
+        <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
+        <translation type="unfinished">La capa «{layer}» no tiene polígonos con área.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
+        <source>unit ids</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
+        <source>distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="447"/>
+        <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="451"/>
+        <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
+        <translation type="unfinished">Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
+    </message>
+</context>
+<context>
     <name>Estimate</name>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="108"/>
+        <location filename="../processing/algorithms/estimate.py" line="73"/>
         <source>Estimate density and abundance</source>
         <translation>Estimar la densidad y la abundancia</translation>
     </message>
@@ -1594,7 +1994,7 @@ Target CV (above 0): n_next is the number of units each stratum needs next time 
 True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
 
 Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-        <translation>Estima la densidad y la abundancia por estrato y para todo el marco de muestreo a partir de los conteos en las unidades de muestreo, con error estándar, coeficiente de variación (CV) e intervalo de confianza, y el tamaño de muestra que necesita el próximo muestreo.
+        <translation type="obsolete">Estima la densidad y la abundancia por estrato y para todo el marco de muestreo a partir de los conteos en las unidades de muestreo, con error estándar, coeficiente de variación (CV) e intervalo de confianza, y el tamaño de muestra que necesita el próximo muestreo.
 
 Estimador: D_h = Σy / Σa por estrato (el estimador de razón; con unidades iguales, el conteo medio dividido por el área de la unidad), con su varianza linealizada (Cochran 1977, cap. 5 y 6); abundancia N_h = D_h·A_h; en total N = Σ N_h y D = N / Σ A_h, sumando las varianzas. La corrección por población finita 1 − Σa/A_h se aplica cuando se pide.
 
@@ -1619,669 +2019,710 @@ Total verdadero: solo para simulaciones y formación. El informe lo muestra ento
 Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="156"/>
+        <location filename="../processing/algorithms/estimate.py" line="138"/>
         <source>Sample units with counts</source>
         <translation>Unidades de muestreo con conteos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="490"/>
+        <location filename="../processing/algorithms/estimate.py" line="140"/>
         <source>Count field</source>
         <translation>Campo de conteo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="160"/>
+        <location filename="../processing/algorithms/estimate.py" line="142"/>
         <source>Stratum field of the units</source>
         <translation>Campo de estrato de las unidades</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="163"/>
+        <location filename="../processing/algorithms/estimate.py" line="145"/>
         <source>Unit area field (m²)</source>
         <translation>Campo de área de la unidad (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="166"/>
+        <location filename="../processing/algorithms/estimate.py" line="148"/>
         <source>Fixed unit area for points and lines (m²; 0: not used)</source>
         <translation>Área fija de la unidad para puntos y líneas (m²; 0: no se usa)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="169"/>
+        <location filename="../processing/algorithms/estimate.py" line="151"/>
         <source>Strip width of line transects (m, full width; 0: not used)</source>
         <translation>Ancho de franja de los transectos lineales (m, ancho total; 0: no se usa)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="172"/>
+        <location filename="../processing/algorithms/estimate.py" line="154"/>
         <source>Strata (the frame)</source>
         <translation>Estratos (el marco)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="156"/>
         <source>Stratum id field of the strata</source>
         <translation>Campo identificador de los estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="499"/>
+        <location filename="../processing/algorithms/estimate.py" line="159"/>
         <source>Confidence level</source>
         <translation>Nivel de confianza</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>Confidence interval</source>
         <translation>Intervalo de confianza</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="484"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>t with Satterthwaite degrees of freedom</source>
         <translation>t con los grados de libertad de Satterthwaite</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>Log-normal</source>
         <translation>Log-normal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>Stratified bootstrap (2,000 resamples)</source>
         <translation>Bootstrap estratificado (2.000 remuestreos)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="502"/>
+        <location filename="../processing/algorithms/estimate.py" line="166"/>
         <source>Finite-population correction</source>
         <translation>Corrección por población finita</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="168"/>
         <source>Detection probability p (from a separate study; 1: all seen)</source>
         <translation>Probabilidad de detección p (de un estudio aparte; 1: todos vistos)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="189"/>
+        <location filename="../processing/algorithms/estimate.py" line="171"/>
         <source>Standard error of p</source>
         <translation>Error estándar de p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
         <source>Area unit of the results</source>
         <translation>Unidad de área de los resultados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
         <source>km²</source>
         <translation>km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
         <source>hectares</source>
         <translation>hectáreas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="195"/>
+        <location filename="../processing/algorithms/estimate.py" line="177"/>
         <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
         <translation>CV objetivo para el próximo muestreo (0: no se usa; p. ej. 0.15)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="501"/>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Variance estimator</source>
         <translation>Estimador de la varianza</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Simple random sampling formula</source>
         <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
         <translation>Vecindario local (disposiciones sistemáticas o espacialmente equilibradas)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="203"/>
+        <location filename="../processing/algorithms/estimate.py" line="191"/>
         <source>The count field holds presence (1) / absence (0)</source>
         <translation>El campo de conteo contiene presencia (1) / ausencia (0)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="205"/>
+        <location filename="../processing/algorithms/estimate.py" line="193"/>
         <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
         <translation>Dejar fuera los estratos sin unidades muestreadas (el marco se reduce)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="208"/>
+        <location filename="../processing/algorithms/estimate.py" line="196"/>
         <source>True total of a simulated population (simulations and training only; 0: none)</source>
         <translation>Total verdadero de una población simulada (solo simulaciones y formación; 0: ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="213"/>
+        <location filename="../processing/algorithms/estimate.py" line="201"/>
         <source>Strata with estimates</source>
         <translation>Estratos con estimaciones</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="215"/>
+        <location filename="../processing/algorithms/estimate.py" line="203"/>
         <source>Estimate table</source>
         <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Overall density</source>
         <translation>Densidad global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>SE of the overall density</source>
         <translation>Error estándar de la densidad global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Overall abundance</source>
         <translation>Abundancia global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Lower confidence limit of the abundance</source>
         <translation>Límite inferior de confianza de la abundancia</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Upper confidence limit of the abundance</source>
         <translation>Límite superior de confianza de la abundancia</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>CV of the overall estimate</source>
         <translation>CV de la estimación global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="246"/>
+        <location filename="../processing/algorithms/estimate.py" line="323"/>
         <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
         <translation>La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="255"/>
+        <location filename="../processing/algorithms/estimate.py" line="333"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos (plotwise:stratify escribe 'stratum') o dé una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="259"/>
+        <location filename="../processing/algorithms/estimate.py" line="338"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
         <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato y no se usa el campo «{field}» de las unidades. Si las unidades se asignaron a los estratos de forma desigual, dé en su lugar los estratos: una media no estratificada está entonces sesgada.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="289"/>
+        <location filename="../processing/algorithms/estimate.py" line="241"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="294"/>
+        <location filename="../processing/algorithms/estimate.py" line="247"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="311"/>
+        <location filename="../processing/algorithms/estimate.py" line="290"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="343"/>
         <source>Layer &apos;{layer}&apos;: units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
-        <translation>Capa «{layer}»: las unidades {ids} no tienen geometría, así que la varianza de vecindario local no puede usarlas. Deles su ubicación o use la fórmula del muestreo aleatorio simple.</translation>
+        <translation type="obsolete">Capa «{layer}»: las unidades {ids} no tienen geometría, así que la varianza de vecindario local no puede usarlas. Deles su ubicación o use la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="350"/>
         <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-        <translation>Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
+        <translation type="obsolete">Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="397"/>
+        <location filename="../processing/algorithms/estimate.py" line="302"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="419"/>
         <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-        <translation>Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
+        <translation type="obsolete">Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="438"/>
         <source>In strata {strata} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-        <translation>En los estratos {strata} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
+        <translation type="obsolete">En los estratos {strata} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="458"/>
         <source>occupied units</source>
-        <translation>unidades ocupadas</translation>
+        <translation type="obsolete">unidades ocupadas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="458"/>
         <source>animals</source>
-        <translation>animales</translation>
+        <translation type="obsolete">animales</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="459"/>
         <source>Naive occupancy from presence data</source>
-        <translation>Ocupación ingenua a partir de datos de presencia</translation>
+        <translation type="obsolete">Ocupación ingenua a partir de datos de presencia</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="459"/>
         <source>Density and abundance estimate</source>
-        <translation>Estimación de la densidad y la abundancia</translation>
+        <translation type="obsolete">Estimación de la densidad y la abundancia</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="462"/>
         <source>proportion of units occupied (naive)</source>
-        <translation>proporción de unidades ocupadas (ingenua)</translation>
+        <translation type="obsolete">proporción de unidades ocupadas (ingenua)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="462"/>
         <source>density per {unit}</source>
-        <translation>densidad por {unit}</translation>
+        <translation type="obsolete">densidad por {unit}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="464"/>
         <source>estimated {what} in the frame</source>
-        <translation>estimación de {what} en el marco</translation>
+        <translation type="obsolete">estimación de {what} en el marco</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="465"/>
         <source>{level} interval</source>
-        <translation>intervalo al {level}</translation>
+        <translation type="obsolete">intervalo al {level}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="518"/>
         <source>CV</source>
-        <translation>CV</translation>
+        <translation type="obsolete">CV</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="468"/>
         <source>units surveyed</source>
-        <translation>unidades muestreadas</translation>
+        <translation type="obsolete">unidades muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="471"/>
         <source>true total of the simulated population</source>
-        <translation>total verdadero de la población simulada</translation>
+        <translation type="obsolete">total verdadero de la población simulada</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="476"/>
         <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-        <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
+        <translation type="obsolete">Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="476"/>
         <source>covers</source>
-        <translation>contiene</translation>
+        <translation type="obsolete">contiene</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="476"/>
         <source>misses</source>
-        <translation>no contiene</translation>
+        <translation type="obsolete">no contiene</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="484"/>
         <source>log-normal</source>
-        <translation>log-normal</translation>
+        <translation type="obsolete">log-normal</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="485"/>
         <source>stratified percentile bootstrap</source>
-        <translation>bootstrap estratificado de percentiles</translation>
+        <translation type="obsolete">bootstrap estratificado de percentiles</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="486"/>
         <source>simple random sampling formula</source>
-        <translation>fórmula del muestreo aleatorio simple</translation>
+        <translation type="obsolete">fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="487"/>
         <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-        <translation>vecindario local (Stevens &amp; Olsen 2003)</translation>
+        <translation type="obsolete">vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="489"/>
         <source>Sample units</source>
-        <translation>Unidades de muestreo</translation>
+        <translation type="obsolete">Unidades de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="490"/>
         <source> (presence/absence)</source>
-        <translation> (presencia/ausencia)</translation>
+        <translation type="obsolete"> (presencia/ausencia)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="491"/>
         <source>Stratum field</source>
-        <translation>Campo de estrato</translation>
+        <translation type="obsolete">Campo de estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="491"/>
         <source>none: one stratum</source>
-        <translation>ninguno: un solo estrato</translation>
+        <translation type="obsolete">ninguno: un solo estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="492"/>
         <source>Unit area</source>
-        <translation>Área de la unidad</translation>
+        <translation type="obsolete">Área de la unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="492"/>
         <source>field {field} (m²)</source>
-        <translation>campo {field} (m²)</translation>
+        <translation type="obsolete">campo {field} (m²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="492"/>
         <source>polygon area</source>
-        <translation>área del polígono</translation>
+        <translation type="obsolete">área del polígono</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="494"/>
         <source>strip width</source>
-        <translation>ancho de franja</translation>
+        <translation type="obsolete">ancho de franja</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="495"/>
         <source>fixed</source>
-        <translation>fija</translation>
+        <translation type="obsolete">fija</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="496"/>
         <source>Strata (frame)</source>
-        <translation>Estratos (marco)</translation>
+        <translation type="obsolete">Estratos (marco)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="497"/>
         <source>Computation CRS</source>
-        <translation>SRC de cálculo</translation>
+        <translation type="obsolete">SRC de cálculo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="498"/>
         <source>Area unit</source>
-        <translation>Unidad de área</translation>
+        <translation type="obsolete">Unidad de área</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Interval</source>
-        <translation>Intervalo</translation>
+        <translation type="obsolete">Intervalo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>yes</source>
-        <translation>sí</translation>
+        <translation type="obsolete">sí</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>no</source>
-        <translation>no</translation>
+        <translation type="obsolete">no</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="503"/>
         <source>Detection probability p</source>
-        <translation>Probabilidad de detección p</translation>
+        <translation type="obsolete">Probabilidad de detección p</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="504"/>
         <source>Target CV for the next survey</source>
-        <translation>CV objetivo para el próximo muestreo</translation>
+        <translation type="obsolete">CV objetivo para el próximo muestreo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="507"/>
         <source>Bootstrap resamples</source>
-        <translation>Remuestreos bootstrap</translation>
+        <translation type="obsolete">Remuestreos bootstrap</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="510"/>
         <source>Seed</source>
-        <translation>Semilla</translation>
+        <translation type="obsolete">Semilla</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="510"/>
         <source>not used (no random draws without the bootstrap)</source>
-        <translation>no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
+        <translation type="obsolete">no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="514"/>
         <source>Estimates by stratum</source>
-        <translation>Estimaciones por estrato</translation>
+        <translation type="obsolete">Estimaciones por estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="519"/>
         <source>Stratum</source>
-        <translation>Estrato</translation>
+        <translation type="obsolete">Estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="515"/>
         <source>Area ({unit})</source>
-        <translation>Área ({unit})</translation>
+        <translation type="obsolete">Área ({unit})</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="515"/>
         <source>Units (n)</source>
-        <translation>Unidades (n)</translation>
+        <translation type="obsolete">Unidades (n)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="515"/>
         <source>Not surveyed</source>
-        <translation>No muestreadas</translation>
+        <translation type="obsolete">No muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="516"/>
         <source>Mean count</source>
-        <translation>Conteo medio</translation>
+        <translation type="obsolete">Conteo medio</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="516"/>
         <source>SD of counts</source>
-        <translation>DE de los conteos</translation>
+        <translation type="obsolete">DE de los conteos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="519"/>
         <source>SE</source>
-        <translation>EE</translation>
+        <translation type="obsolete">EE</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Lower limit</source>
-        <translation>Límite inferior</translation>
+        <translation type="obsolete">Límite inferior</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Upper limit</source>
-        <translation>Límite superior</translation>
+        <translation type="obsolete">Límite superior</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="518"/>
         <source>df</source>
-        <translation>gl</translation>
+        <translation type="obsolete">gl</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="532"/>
         <source>Occupied units</source>
-        <translation>Unidades ocupadas</translation>
+        <translation type="obsolete">Unidades ocupadas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="532"/>
         <source>Abundance</source>
-        <translation>Abundancia</translation>
+        <translation type="obsolete">Abundancia</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="522"/>
         <source>Units next time (n_next)</source>
-        <translation>Unidades la próxima vez (n_next)</translation>
+        <translation type="obsolete">Unidades la próxima vez (n_next)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="569"/>
         <source>all strata</source>
-        <translation>todos los estratos</translation>
+        <translation type="obsolete">todos los estratos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="530"/>
         <source>{what}, limits at {level}.</source>
-        <translation>{what}, límites al {level}.</translation>
+        <translation type="obsolete">{what}, límites al {level}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="532"/>
         <source>{what} in the frame, limits at {level}.</source>
-        <translation>{what} en el marco, límites al {level}.</translation>
+        <translation type="obsolete">{what} en el marco, límites al {level}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="535"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-        <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
+        <translation type="obsolete">El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="540"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-        <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
+        <translation type="obsolete">No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="543"/>
         <source>The overall interval by method</source>
-        <translation>El intervalo global según el método</translation>
+        <translation type="obsolete">El intervalo global según el método</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Used in the outputs</source>
-        <translation>Usado en las salidas</translation>
+        <translation type="obsolete">Usado en las salidas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="548"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-        <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
+        <translation type="obsolete">El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>overall abundance in a resample</source>
-        <translation>abundancia global en un remuestreo</translation>
+        <translation type="obsolete">abundancia global en un remuestreo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>resamples</source>
-        <translation>remuestreos</translation>
+        <translation type="obsolete">remuestreos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>{level} percentile limits</source>
-        <translation>límites de percentiles al {level}</translation>
+        <translation type="obsolete">límites de percentiles al {level}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
-        <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
+        <translation type="obsolete">Los {n:,} remuestreos bootstrap de la abundancia global</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="568"/>
         <source>true density (simulation)</source>
-        <translation>densidad verdadera (simulación)</translation>
+        <translation type="obsolete">densidad verdadera (simulación)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="573"/>
         <source>{what} by stratum with {level} confidence intervals</source>
-        <translation>{what} por estrato con intervalos de confianza al {level}</translation>
+        <translation type="obsolete">{what} por estrato con intervalos de confianza al {level}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="581"/>
         <source>lowest</source>
-        <translation>mínimo</translation>
+        <translation type="obsolete">mínimo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="581"/>
         <source>highest</source>
-        <translation>máximo</translation>
+        <translation type="obsolete">máximo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="589"/>
         <source>surveyed units</source>
-        <translation>unidades muestreadas</translation>
+        <translation type="obsolete">unidades muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="593"/>
         <source>not surveyed</source>
-        <translation>no muestreadas</translation>
+        <translation type="obsolete">no muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="595"/>
         <source>Strata shaded by {what}, with the units</source>
-        <translation>Estratos sombreados según {what}, con las unidades</translation>
+        <translation type="obsolete">Estratos sombreados según {what}, con las unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="598"/>
         <source>Method</source>
-        <translation>Método</translation>
+        <translation type="obsolete">Método</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="600"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-        <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
+        <translation type="obsolete">El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="607"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-        <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
+        <translation type="obsolete">La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="614"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-        <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
+        <translation type="obsolete">Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="614"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
-        <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). Son asimétricos y nunca bajan de 0.</translation>
+        <translation type="obsolete">Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). Son asimétricos y nunca bajan de 0.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="614"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-        <translation>Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita cuando se pide (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
+        <translation type="obsolete">Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita cuando se pide (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="628"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
-        <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, y solo las diferencias dentro de los vecindarios cuentan como varianza. Para disposiciones sistemáticas y espacialmente equilibradas, la fórmula del muestreo aleatorio simple sobrestima la varianza; este estimador no, siempre que la disposición fuera realmente sistemática o espacialmente equilibrada; para una disposición aleatoria simple use la fórmula simple. La suma de las varianzas locales se escala una vez para que coincida en promedio con la fórmula simple cuando la población no tiene estructura espacial (decisión nuestra).</translation>
+        <translation type="obsolete">Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, y solo las diferencias dentro de los vecindarios cuentan como varianza. Para disposiciones sistemáticas y espacialmente equilibradas, la fórmula del muestreo aleatorio simple sobrestima la varianza; este estimador no, siempre que la disposición fuera realmente sistemática o espacialmente equilibrada; para una disposición aleatoria simple use la fórmula simple. La suma de las varianzas locales se escala una vez para que coincida en promedio con la fórmula simple cuando la población no tiene estructura espacial (decisión nuestra).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="637"/>
         <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
-        <translation>Los estratos con una sola unidad muestreada se agruparon con un vecino (entre los estratos que lo tocan en el mapa o, si no, los estratos contiguos en el orden de identificadores, el de densidad más próxima): los miembros de un grupo comparten la varianza residual combinada del grupo (Cochran 1977, §5A.12). Las diferencias entre los estratos agrupados cuentan entonces como varianza, por lo que sus errores estándar tienden a ser demasiado grandes.</translation>
+        <translation type="obsolete">Los estratos con una sola unidad muestreada se agruparon con un vecino (entre los estratos que lo tocan en el mapa o, si no, los estratos contiguos en el orden de identificadores, el de densidad más próxima): los miembros de un grupo comparten la varianza residual combinada del grupo (Cochran 1977, §5A.12). Las diferencias entre los estratos agrupados cuentan entonces como varianza, por lo que sus errores estándar tienden a ser demasiado grandes.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="643"/>
         <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit&apos;s count minus the group&apos;s density times the unit&apos;s area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
-        <translation>En el bootstrap, un estrato agrupado toma tantos residuos como unidades tiene entre las unidades combinadas de su grupo (el conteo de cada unidad menos la densidad del grupo por el área de la unidad), los suma a su propia estimación y los reescala, de modo que sus remuestreos están centrados en su propia estimación y varían tanto como indica la varianza de estratos agrupados.</translation>
+        <translation type="obsolete">En el bootstrap, un estrato agrupado toma tantos residuos como unidades tiene entre las unidades combinadas de su grupo (el conteo de cada unidad menos la densidad del grupo por el área de la unidad), los suma a su propia estimación y los reescala, de modo que sus remuestreos están centrados en su propia estimación y varían tanto como indica la varianza de estratos agrupados.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="649"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval&apos;s degrees of freedom combine the two parts (Buckland et al. 2001), p&apos;s part counting as known with infinite degrees of freedom.</source>
-        <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad del intervalo t combinan ambas partes (Buckland et al. 2001), contando la de p como conocida con grados de libertad infinitos.</translation>
+        <translation type="obsolete">Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad del intervalo t combinan ambas partes (Buckland et al. 2001), contando la de p como conocida con grados de libertad infinitos.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="656"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
-        <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar observadas ahora (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 por estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
+        <translation type="obsolete">Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar observadas ahora (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 por estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="662"/>
         <source>Cautions</source>
-        <translation>Precauciones</translation>
+        <translation type="obsolete">Precauciones</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="663"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-        <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
+        <translation type="obsolete">La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="667"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-        <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
+        <translation type="obsolete">Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="670"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-        <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
+        <translation type="obsolete">Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="675"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-        <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
+        <translation type="obsolete">Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="678"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-        <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
+        <translation type="obsolete">El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/estimate.py" line="76"/>
+        <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
+
+Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added.
+
+Finite-population correction: 1 − Σa/A_h, only for units that cannot overlap (a finite population of units drawn without replacement, Cochran 1977, §2.4). Units from plotwise:layout record their design (field design): the correction is refused, with a warning, in strata laid out by simple random centres without a minimum spacing of at least the unit's width (their units may overlap: a continuous population, Cordy 1993). For units without that record it is your choice, and the report states the assumption that they do not overlap.
+
+Edges: units laid out by plus sampling (field edge = plus, the layout's default) count only inside their stratum, and the counts expand to the stratum grown by the unit's reach (field reach_m), N_h = A⁺_h·Σy/Σa (Gregoire &amp; Valentine 2008, ch. 10), which removes the bias at the edges.
+
+Counts: a NULL count means the unit was not surveyed: it is left out and listed as non-response. Reserve units (role = reserve) without a count are unused reserves and are skipped quietly; reserves that were surveyed count like any other unit. 0 means surveyed, none seen. Negative or non-numeric counts stop the run, naming the units.
+
+Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is above 0, else the polygon's area, else for lines the strip width × the line's length, else the fixed unit area for points and lines.
+
+Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is paired with a partner fixed before the counts are seen (the stratum sharing the longest edge on the map, else the next in id order) and takes its variance from the collapsed-strata pairs formula (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow 1953 for unequal sizes), with 1 degree of freedom and a warning; the partner keeps its own variance. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so. Strata must not overlap (an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning), and every strata polygon needs its id: a polygon without one is an error, unless strata with no surveyed unit may be left out.
+
+Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(t_df·√ln(1+CV²)), t with the same degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987); or a rescaled stratified percentile bootstrap of 2,000 resamples (seeded; Rao &amp; Wu 1988), which carries the finite-population correction. Where every count is 0 the interval is one-sided, from 0 to the Poisson upper limit −ln(1 − level)·A/Σa (Garwood 1936; about 3·A/Σa at 95 %), divided by p.
+
+Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance, with the degrees of freedom of its quadratic form (Box 1954); or our variant of it, scaled by n / Σ(1 − Σw²) so that it agrees with the simple formula where there is no spatial pattern (the published sum falls short by about a quarter there).
+
+Detection: with a detection probability p below 1, estimates are divided by p and the squared CVs add (delta method, Seber 1982). p and its SE must come from a separate study; its degrees of freedom (0: p counts as known) enter the interval's by Satterthwaite's rule (Buckland et al. 2001, eq. 3.75). An SE above p/2 gives a warning.
+
+Presence data: with the presence option a 0/1 field gives the stratified proportion of units where the species was detected (naive occupancy, not corrected for detection), and abund is the number of occupied units in the frame.
+
+Target CV (above 0): n_next is the number of units each stratum needs next time for that CV of the overall abundance, by Neyman allocation on the standard deviations the variance estimator implies (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds.
+
+True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
+
+Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/estimate.py" line="181"/>
+        <source>Degrees of freedom of the detection estimate (0: p known)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>
@@ -2392,27 +2833,27 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation>Número total de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="43"/>
+        <location filename="../processing/provider.py" line="45"/>
         <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
         <translation>Cadena de ejemplo: planificar un muestreo (marco, estratos, esfuerzo, disposición)</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="43"/>
+        <location filename="../processing/provider.py" line="45"/>
         <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
         <translation>Construye el marco de muestreo (área de estudio menos las exclusiones y las celdas por encima de la pendiente límite), forma estratos por k-medias a partir de los rásteres de covariables, reparte las unidades por asignación de Neyman con la desviación estándar de la covariable como sustituto y dispone parcelas cuadradas espacialmente equilibradas con 3 unidades de reserva por estrato. Ábrala en el modelador para cambiar cualquier paso. Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="53"/>
+        <location filename="../processing/provider.py" line="55"/>
         <source>Example chain: estimate from simulated counts</source>
         <translation>Cadena de ejemplo: estimar a partir de conteos simulados</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="53"/>
+        <location filename="../processing/provider.py" line="55"/>
         <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
         <translation>Para formación: rellena el campo de conteo de las unidades a partir de una población simulada y luego estima la densidad y la abundancia por estrato y en total. Con trabajo de campo real, ejecute en su lugar la estimación sobre las unidades contadas.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="82"/>
+        <location filename="../processing/provider.py" line="84"/>
         <source>Example chains</source>
         <translation>Cadenas de ejemplo</translation>
     </message>
@@ -2420,7 +2861,7 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="69"/>
+        <location filename="../processing/algorithms/layout.py" line="71"/>
         <source>Lay out sample units</source>
         <translation>Disponer las unidades de muestreo</translation>
     </message>
@@ -2445,7 +2886,7 @@ Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for tr
 Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
 
 A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation>Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato por valor del campo de estrato; sin él, el marco es un solo estrato).
+        <translation type="obsolete">Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato por valor del campo de estrato; sin él, el marco es un solo estrato).
 
 Unidades por estrato: el campo de unidades (por ejemplo n_alloc del paso de asignación; el mismo número entero en cada entidad de un estrato); si no, el total repartido en proporción al área con al menos 2 por estrato.
 
@@ -2466,409 +2907,442 @@ Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato m
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="108"/>
+        <location filename="../processing/algorithms/layout.py" line="118"/>
         <source>Sampling frame or strata</source>
         <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="121"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="127"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="123"/>
+        <location filename="../processing/algorithms/layout.py" line="133"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Número total de unidades (si no se da un campo de unidades)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Design</source>
         <translation>Diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Simple random</source>
         <translation>Aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Unit shape</source>
         <translation>Forma de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Point station</source>
         <translation>Estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Square plot</source>
         <translation>Parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Circular plot</source>
         <translation>Parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Line transect</source>
         <translation>Transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="142"/>
+        <location filename="../processing/algorithms/layout.py" line="152"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="148"/>
+        <location filename="../processing/algorithms/layout.py" line="158"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>Keep every unit wholly inside its stratum</source>
-        <translation>Mantener cada unidad por completo dentro de su estrato</translation>
+        <translation type="obsolete">Mantener cada unidad por completo dentro de su estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="157"/>
+        <location filename="../processing/algorithms/layout.py" line="169"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="163"/>
+        <location filename="../processing/algorithms/layout.py" line="175"/>
         <source>Reserve units per stratum</source>
         <translation>Unidades de reserva por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="169"/>
+        <location filename="../processing/algorithms/layout.py" line="181"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <location filename="../processing/algorithms/layout.py" line="182"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <location filename="../processing/algorithms/layout.py" line="182"/>
         <source>GPX files (*.gpx)</source>
         <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="184"/>
+        <location filename="../processing/algorithms/layout.py" line="196"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
         <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="211"/>
+        <location filename="../processing/algorithms/layout.py" line="223"/>
         <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
         <translation>Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <location filename="../processing/algorithms/layout.py" line="241"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <location filename="../processing/algorithms/layout.py" line="241"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="243"/>
+        <location filename="../processing/algorithms/layout.py" line="255"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="247"/>
+        <location filename="../processing/algorithms/layout.py" line="259"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="262"/>
+        <location filename="../processing/algorithms/layout.py" line="274"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="265"/>
+        <location filename="../processing/algorithms/layout.py" line="277"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <location filename="../processing/algorithms/layout.py" line="291"/>
         <source>the frame</source>
         <translation>el marco</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <location filename="../processing/algorithms/layout.py" line="291"/>
         <source>stratum {key}</source>
         <translation>estrato {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="319"/>
+        <location filename="../processing/algorithms/layout.py" line="333"/>
         <source>Sample-unit layout</source>
         <translation>Disposición de las unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <location filename="../processing/algorithms/layout.py" line="449"/>
         <source>primary units</source>
         <translation>unidades principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <location filename="../processing/algorithms/layout.py" line="449"/>
         <source>reserve units</source>
         <translation>unidades de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <location filename="../processing/algorithms/layout.py" line="337"/>
         <source>strata</source>
         <translation>estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <location filename="../processing/algorithms/layout.py" line="337"/>
         <source>design</source>
         <translation>diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="329"/>
+        <location filename="../processing/algorithms/layout.py" line="343"/>
         <source>Replacing units in the field</source>
         <translation>Sustituir unidades en el terreno</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="330"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
         <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="336"/>
+        <location filename="../processing/algorithms/layout.py" line="350"/>
         <source>Units per stratum</source>
         <translation>Unidades por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Stratum</source>
         <translation>Estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Area (ha)</source>
         <translation>Área (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Effective area (ha)</source>
         <translation>Área efectiva (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Units asked</source>
         <translation>Unidades pedidas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Primary</source>
         <translation>Principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <location filename="../processing/algorithms/layout.py" line="353"/>
         <source>Reserve</source>
         <translation>Reservas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <location filename="../processing/algorithms/layout.py" line="353"/>
         <source>incl_p</source>
         <translation>incl_p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <location filename="../processing/algorithms/layout.py" line="353"/>
         <source>weight</source>
         <translation>weight</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <location filename="../processing/algorithms/layout.py" line="355"/>
         <source>Grid spacing (m)</source>
         <translation>Espaciado de la cuadrícula (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <location filename="../processing/algorithms/layout.py" line="355"/>
         <source>Grid rotation (°)</source>
         <translation>Rotación de la cuadrícula (°)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
+        <location filename="../processing/algorithms/layout.py" line="358"/>
         <source>frame</source>
         <translation>marco</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <location filename="../processing/algorithms/layout.py" line="365"/>
         <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
         <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <location filename="../processing/algorithms/layout.py" line="365"/>
         <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
         <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="357"/>
+        <location filename="../processing/algorithms/layout.py" line="381"/>
         <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
         <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="364"/>
+        <location filename="../processing/algorithms/layout.py" line="388"/>
         <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
         <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="368"/>
+        <location filename="../processing/algorithms/layout.py" line="392"/>
         <source>Map</source>
         <translation>Mapa</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="369"/>
+        <location filename="../processing/algorithms/layout.py" line="393"/>
         <source>Strata (filled), primary units (dark) and reserve units (light)</source>
         <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="370"/>
+        <location filename="../processing/algorithms/layout.py" line="394"/>
         <source>Method</source>
         <translation>Método</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="374"/>
+        <location filename="../processing/algorithms/layout.py" line="398"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Frame (FRAME)</source>
         <translation>Marco (FRAME)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Stratum field (STRATUM_FIELD)</source>
         <translation>Campo de estrato (STRATUM_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>(none: one stratum)</source>
         <translation>(ninguno: un solo estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Units per stratum field (N_FIELD)</source>
         <translation>Campo de unidades por estrato (N_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>(none)</source>
         <translation>(ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Total units (N_UNITS)</source>
         <translation>Total de unidades (N_UNITS)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>(not used)</source>
         <translation>(no se usa)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Design (DESIGN)</source>
         <translation>Diseño (DESIGN)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Unit shape (SHAPE)</source>
         <translation>Forma de la unidad (SHAPE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Unit size (SIZE, m)</source>
         <translation>Tamaño de la unidad (SIZE, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Bearing (BEARING, degrees)</source>
         <translation>Rumbo (BEARING, grados)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>random</source>
         <translation>aleatorio</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Keep inside (INSIDE)</source>
         <translation>Mantener dentro (INSIDE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>yes</source>
         <translation>sí</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>no</source>
         <translation>no</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Minimum spacing (MIN_SPACING, m)</source>
         <translation>Separación mínima (MIN_SPACING, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Reserves per stratum (RESERVE)</source>
         <translation>Reservas por estrato (RESERVE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Seed (SEED)</source>
         <translation>Semilla (SEED)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>CRS of the computation and the output</source>
         <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="395"/>
+        <location filename="../processing/algorithms/layout.py" line="419"/>
         <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
         <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="397"/>
+        <location filename="../processing/algorithms/layout.py" line="421"/>
         <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
         <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="423"/>
         <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
         <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="406"/>
+        <location filename="../processing/algorithms/layout.py" line="430"/>
         <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
         <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/layout.py" line="74"/>
+        <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
+
+Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
+
+Designs:
+• Simple random: independent points, uniform over the stratum (triangles chosen by area, then a point within; Turk 1990).
+• Systematic grid: a square grid of spacing √(A/n) with a random start; with bearing −1 the grid also gets a random rotation, otherwise it is turned to the bearing. The realised number of units varies around n and is reported.
+• Spatially balanced: balanced acceptance sampling on a Halton sequence (Robertson et al. 2013). Every leading part of the draw order is itself spread evenly, so reserves are the next points of the same sequence. The start is a uniform random point of the stratum, which keeps inclusion equal for any sample size.
+
+Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in degrees clockwise from grid north, or −1 for a random bearing per unit.
+Edges: by default plus sampling (Gregoire &amp; Valentine 2008, ch. 10): centres are drawn over the stratum grown by the unit's reach R (its circumscribing radius), and a unit near or beyond the edge is surveyed only inside its own stratum (count only the animals inside the stratum; a centre may lie outside it, even outside the frame: never enter ground that was excluded as unsafe, survey the part inside from within). Every animal then has the same chance of being counted, and plotwise:estimate expands the counts to the grown area. Keep units inside instead draws centres from the stratum shrunk by R, so every unit lies wholly inside its stratum but the edge band is never reached (biased where animals near the edge differ). The effective area (grown or shrunk) is reported and used for the inclusion probabilities.
+Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.
+Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit that cannot be surveyed is replaced by the next unused reserve of the same stratum.
+
+Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), an empty count field for the field teams, and the design record for the estimate: design (random, random_sep, grid, grid_ovl or balanced: whether the units can overlap, which decides the finite-population correction), edge (plus or inside) and reach_m (R, m). The GPX file holds one waypoint per unit (a start and an end waypoint per transect), named by unit_id.
+
+Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
+
+A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/layout.py" line="164"/>
+        <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/layout.py" line="371"/>
+        <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>
@@ -3158,22 +3632,22 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
 <context>
     <name>PlotwiseEngine</name>
     <message>
-        <location filename="../processing/engine/allocation.py" line="48"/>
+        <location filename="../processing/engine/allocation.py" line="49"/>
         <source>stratum area</source>
         <translation>área del estrato</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="49"/>
+        <location filename="../processing/engine/allocation.py" line="50"/>
         <source>pilot standard deviation</source>
         <translation>desviación estándar piloto</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="50"/>
+        <location filename="../processing/engine/allocation.py" line="51"/>
         <source>pilot mean count</source>
         <translation>conteo medio piloto</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="51"/>
+        <location filename="../processing/engine/allocation.py" line="52"/>
         <source>cost per unit</source>
         <translation>coste por unidad</translation>
     </message>
@@ -3183,172 +3657,172 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>{shown} y {more} más</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="431"/>
+        <location filename="../processing/engine/allocation.py" line="435"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos; is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
         <translation>El campo de estrato «{field}» de la capa «{layer}» está vacío (NULL) para las entidades {ids}. Dé un identificador a cada estrato, o quite esas entidades de la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="448"/>
+        <location filename="../processing/engine/allocation.py" line="453"/>
         <source>Features {ids} of layer &apos;{layer}&apos; carry the same stratum id {value} in field &apos;{field}&apos;, so each would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Las entidades {ids} de la capa «{layer}» llevan el mismo identificador de estrato {value} en el campo «{field}», así que cada una recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="455"/>
+        <location filename="../processing/engine/allocation.py" line="461"/>
         <source>Several stratum ids in field &apos;{field}&apos; of layer &apos;{layer}&apos; are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Varios identificadores de estrato del campo «{field}» de la capa «{layer}» los llevan varias entidades: {value} (entidades {ids}) y {more} identificador(es) más ({others}), así que cada una de esas entidades recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="475"/>
+        <location filename="../processing/engine/allocation.py" line="482"/>
         <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
         <translation>Valor NULL o negativo ({name}) para las entidades de estrato {shown}. Introduzca un valor no negativo para cada estrato, o quite esos estratos de la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="479"/>
+        <location filename="../processing/engine/allocation.py" line="487"/>
         <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
         <translation>Valor NULL, negativo o cero ({name}) para las entidades de estrato {shown}. Introduzca un valor positivo para cada estrato, o quite esos estratos de la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="546"/>
+        <location filename="../processing/engine/allocation.py" line="532"/>
         <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
         <translation>Método de asignación desconocido {method!r}; use uno de: {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="551"/>
+        <location filename="../processing/engine/allocation.py" line="537"/>
         <source>The strata layer has no features. Run the stratification first.</source>
         <translation>La capa de estratos no tiene entidades. Ejecute primero la estratificación.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="557"/>
+        <location filename="../processing/engine/allocation.py" line="543"/>
         <source>The unit area must be a positive number.</source>
         <translation>El área de la unidad debe ser un número positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="560"/>
+        <location filename="../processing/engine/allocation.py" line="546"/>
         <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
         <translation>El mínimo por estrato debe ser al menos 1 (2 permite estimar la varianza de cada estrato).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="572"/>
+        <location filename="../processing/engine/allocation.py" line="557"/>
         <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>El método por coste necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="572"/>
+        <location filename="../processing/engine/allocation.py" line="557"/>
         <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>El presupuesto necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="581"/>
+        <location filename="../processing/engine/allocation.py" line="566"/>
         <source>The fixed cost must be zero or positive.</source>
         <translation>El coste fijo debe ser cero o positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="587"/>
+        <location filename="../processing/engine/allocation.py" line="604"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
         <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (proporcional al área).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="587"/>
+        <location filename="../processing/engine/allocation.py" line="608"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
         <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (área / raíz cuadrada del coste).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="598"/>
+        <location filename="../processing/engine/allocation.py" line="612"/>
         <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
         <translation>Todas las desviaciones estándar piloto son cero: se usa en su lugar la asignación proporcional.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="603"/>
+        <location filename="../processing/engine/allocation.py" line="617"/>
         <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
         <translation>Valor cero ({name}) para las entidades de estrato {shown}: reciben solo el mínimo de {minimum} unidad(es). Un piloto sin variación rara vez refleja la realidad; compruébelo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="614"/>
+        <location filename="../processing/engine/allocation.py" line="580"/>
         <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
         <translation>Las entidades de estrato {shown} son más pequeñas que una unidad de muestreo de {unit_area:g}. Fusiónelas con una vecina o use un área de unidad menor.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="623"/>
+        <location filename="../processing/engine/allocation.py" line="590"/>
         <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
         <translation>Las entidades de estrato {shown} contienen menos de {minimum} unidades: reciben todas las unidades que caben.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="632"/>
+        <location filename="../processing/engine/allocation.py" line="569"/>
         <source>A target CV is set: the budget is not used.</source>
         <translation>Hay un CV objetivo: no se usa el presupuesto.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="638"/>
+        <location filename="../processing/engine/allocation.py" line="630"/>
         <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
         <translation>El presupuesto {budget:g} es inferior al mínimo de {minimum:g} (coste fijo {fixed_cost:g} más {per_stratum} unidad(es) en cada estrato a su coste). Aumente el presupuesto o baje el mínimo por estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="645"/>
+        <location filename="../processing/engine/allocation.py" line="639"/>
         <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
         <translation>El presupuesto supera el coste de todas las unidades que caben ({maximum:g}): se toman todas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="653"/>
+        <location filename="../processing/engine/allocation.py" line="650"/>
         <source>Give a total number of units, a budget (with costs) or a target CV.</source>
         <translation>Indique un número total de unidades, un presupuesto (con costes) o un CV objetivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="657"/>
+        <location filename="../processing/engine/allocation.py" line="654"/>
         <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
         <translation>El total de {total} unidades es inferior al mínimo de {minimum} ({per_stratum} por estrato en {n_strata} estratos). Aumente el total o baje el mínimo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="662"/>
+        <location filename="../processing/engine/allocation.py" line="660"/>
         <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
         <translation>El total de {total} unidades supera las {fit} unidades de {unit_area:g} que caben en los estratos. Baje el total o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="672"/>
+        <location filename="../processing/engine/allocation.py" line="673"/>
         <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
         <translation>Las entidades de estrato {shown} reciben una sola unidad: su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="677"/>
+        <location filename="../processing/engine/allocation.py" line="679"/>
         <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
         <translation>Las entidades de estrato {shown} se muestrean por completo (todas las unidades que caben).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="683"/>
+        <location filename="../processing/engine/allocation.py" line="684"/>
         <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
         <translation>Valor cero ({name}) en las entidades de estrato {shown}: su CV no está definido.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="708"/>
+        <location filename="../processing/engine/allocation.py" line="782"/>
         <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
         <translation>Un CV objetivo necesita la desviación estándar piloto y el conteo medio piloto por unidad: elija el campo de DE y el campo de media.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="713"/>
+        <location filename="../processing/engine/allocation.py" line="788"/>
         <source>The {name} is zero in every stratum: no CV can be computed.</source>
         <translation>Valor cero ({name}) en todos los estratos: no puede calcularse ningún CV.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="724"/>
+        <location filename="../processing/engine/allocation.py" line="799"/>
         <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
         <translation>El CV objetivo de {target_cv:.3g} no puede alcanzarse: incluso las {fit} unidades que caben dan un CV esperado de {cv:.3g}. Acepte un CV de al menos {cv:.3g}, o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="31"/>
+        <location filename="../processing/engine/counting.py" line="42"/>
         <source>needs a positive area_m2</source>
         <translation>necesita un area_m2 positivo</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="36"/>
+        <location filename="../processing/engine/counting.py" line="49"/>
         <source>has a line of zero length</source>
         <translation>tiene una línea de longitud cero</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="38"/>
+        <location filename="../processing/engine/counting.py" line="51"/>
         <source>has an unsupported geometry type ({kind})</source>
         <translation>tiene un tipo de geometría no admitido ({kind})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="65"/>
+        <location filename="../processing/engine/counting.py" line="107"/>
         <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
         <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {detection:g}).</translation>
     </message>
@@ -3363,187 +3837,187 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>El tamaño de celda debe estar entre 10 y 500 m (se recibió {cell_size:g} m).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="213"/>
+        <location filename="../processing/engine/design_comparison.py" line="223"/>
         <source>The density surface must be a single raster band.</source>
         <translation>La superficie de densidad debe ser una sola banda ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="217"/>
+        <location filename="../processing/engine/design_comparison.py" line="227"/>
         <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
         <translation>La superficie de densidad debe ser un ráster orientado al norte (sin rotación); reproyéctela primero.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="226"/>
+        <location filename="../processing/engine/design_comparison.py" line="236"/>
         <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
         <translation>La superficie de densidad no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona (y sus sistemas de referencia de coordenadas).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="245"/>
+        <location filename="../processing/engine/design_comparison.py" line="261"/>
         <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
         <translation>Un estrato no tiene valor de estrato (NULL). Dé un valor a cada estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="270"/>
+        <location filename="../processing/engine/design_comparison.py" line="293"/>
         <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
         <translation>{overlap} celda(s) de la superficie están en más de un estrato; cada una se asignó al primero. Los estratos no deberían superponerse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="275"/>
+        <location filename="../processing/engine/design_comparison.py" line="305"/>
         <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
         <translation>Ningún centro de celda de la superficie de densidad cae en el marco de muestreo: las celdas son demasiado gruesas para él, o ambos no se superponen.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="281"/>
+        <location filename="../processing/engine/design_comparison.py" line="312"/>
         <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
         <translation>La superficie de densidad tiene {n} celda(s) negativa(s) en el marco de muestreo. Los animales esperados por km² deben ser 0 o más: corrija la superficie (por ejemplo, recórtela en 0).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="287"/>
+        <location filename="../processing/engine/design_comparison.py" line="319"/>
         <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
         <translation>{n} celda(s) del marco de muestreo ({share:.1%}) no tienen valor en la superficie de densidad y quedan fuera de la población: la comparación vale para el resto del marco.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="294"/>
+        <location filename="../processing/engine/design_comparison.py" line="327"/>
         <source>The density surface has no value in the frame.</source>
         <translation>La superficie de densidad no tiene ningún valor en el marco de muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="300"/>
+        <location filename="../processing/engine/design_comparison.py" line="333"/>
         <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
         <translation>Los estratos {ids} no contienen ningún centro de celda de la superficie de densidad dentro del marco de muestreo. Quítelos, fusiónelos con un vecino, o use una superficie más fina.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="199"/>
+        <location filename="../processing/engine/layout.py" line="207"/>
         <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
         <translation>SHAPE debe ser 0 (punto), 1 (cuadrado), 2 (círculo) o 3 (transecto lineal).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="93"/>
+        <location filename="../processing/engine/design_comparison.py" line="102"/>
         <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
         <translation>SIZE debe ser mayor que 0 m: es el radio de conteo de una estación puntual.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="96"/>
+        <location filename="../processing/engine/design_comparison.py" line="105"/>
         <source>SIZE must be more than 0 m: it is the square unit&apos;s size.</source>
         <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad cuadrada.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="97"/>
+        <location filename="../processing/engine/design_comparison.py" line="106"/>
         <source>SIZE must be more than 0 m: it is the circle unit&apos;s size.</source>
         <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad circular.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="98"/>
+        <location filename="../processing/engine/design_comparison.py" line="107"/>
         <source>SIZE must be more than 0 m: it is the line unit&apos;s size.</source>
         <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad lineal.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="375"/>
+        <location filename="../processing/engine/design_comparison.py" line="408"/>
         <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
         <translation>Un transecto lineal necesita la semianchura de su franja de conteo (más de 0 m): los animales se cuentan hasta esa distancia a cada lado de la línea.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="632"/>
+        <location filename="../processing/engine/design_comparison.py" line="675"/>
         <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
         <translation>La sobredispersión k debe ser 0 (conteos de Poisson) o más.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="649"/>
+        <location filename="../processing/engine/design_comparison.py" line="696"/>
         <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
         <translation>Los estratos cubren el {share:.1%} del marco de muestreo: cada diseño se compara en la parte que cubren.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="658"/>
+        <location filename="../processing/engine/design_comparison.py" line="706"/>
         <source>A stratum of the layout has no cells on the surface grid.</source>
         <translation>Un estrato de la disposición no tiene celdas en la cuadrícula de la superficie.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="739"/>
+        <location filename="../processing/engine/design_comparison.py" line="790"/>
         <source>Unknown design {design}; use 0 to {last}.</source>
         <translation>Diseño desconocido {design}; use de 0 a {last}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="743"/>
+        <location filename="../processing/engine/design_comparison.py" line="794"/>
         <source>N_UNITS must be at least {minimum}.</source>
         <translation>N_UNITS debe ser al menos {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="749"/>
+        <location filename="../processing/engine/design_comparison.py" line="804"/>
         <source>The {design} design needs strata: give the STRATA layer.</source>
         <translation>El diseño «{design}» necesita estratos: indique la capa STRATA.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="70"/>
+        <location filename="../processing/engine/layout.py" line="74"/>
         <source>simple random</source>
         <translation>aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="84"/>
+        <location filename="../processing/engine/design_comparison.py" line="90"/>
         <source>stratified proportional</source>
         <translation>estratificado proporcional</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="84"/>
         <source>stratified Neyman</source>
-        <translation>estratificado Neyman</translation>
+        <translation type="obsolete">estratificado Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="70"/>
+        <location filename="../processing/engine/layout.py" line="74"/>
         <source>systematic grid</source>
         <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="70"/>
+        <location filename="../processing/engine/layout.py" line="74"/>
         <source>spatially balanced</source>
         <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="827"/>
+        <location filename="../processing/engine/design_comparison.py" line="912"/>
         <source>REPLICATES must be at least 2.</source>
         <translation>REPLICATES debe ser al menos 2.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="832"/>
+        <location filename="../processing/engine/design_comparison.py" line="939"/>
         <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
         <translation>Cada muestreo simulado contaría unos {millions:.0f} millones de celdas de la superficie ({units} unidades de {unit_area:,.0f} m² en celdas de {cell_width:g} m), demasiadas para simular. Remuestree la superficie a celdas más gruesas, o compare menos diseños o unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1080"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
-        <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde de su estrato cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más compactos, lo reducen.</translation>
+        <translation type="obsolete">{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde de su estrato cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más compactos, lo reducen.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1080"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
-        <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde del marco de muestreo cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas lo reducen.</translation>
+        <translation type="obsolete">{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde del marco de muestreo cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas lo reducen.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1116"/>
+        <location filename="../processing/engine/design_comparison.py" line="1223"/>
         <source>{design}: {warning}</source>
         <translation>{design}: {warning}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1119"/>
+        <location filename="../processing/engine/design_comparison.py" line="1226"/>
         <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
         <translation>{design} con {n_units} unidades: {failed} de los {replicates} muestreos simulados no dieron estimación (un estrato sin unidad contada, o ninguna unidad en el marco de muestreo); se excluyen de sus cifras.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1157"/>
+        <location filename="../processing/engine/design_comparison.py" line="1266"/>
         <source>The range of units &apos;{text}&apos; cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
         <translation>El rango de unidades «{text}» no puede leerse. Indique números enteros separados por comas (p. ej. 20, 40, 80) o inicio:fin:paso (p. ej. 20:100:20).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1163"/>
+        <location filename="../processing/engine/design_comparison.py" line="1273"/>
         <source>In the range of units &apos;{text}&apos;, &apos;{part}&apos; starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
         <translation>En el rango de unidades «{text}», «{part}» empieza por encima de donde termina (inicio {start}, fin {stop}), así que no contiene ningún número de unidades. Escriba inicio:fin:paso con el inicio menor o igual que el fin (p. ej. {stop}:{start}:{step}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1168"/>
+        <location filename="../processing/engine/design_comparison.py" line="1279"/>
         <source>Every number of units in the range must be at least {minimum}.</source>
         <translation>Cada número de unidades del rango debe ser al menos {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1172"/>
+        <location filename="../processing/engine/design_comparison.py" line="1283"/>
         <source>The range of units holds more than 20 values; give at most 20.</source>
         <translation>El rango de unidades tiene más de 20 valores; indique como máximo 20.</translation>
     </message>
@@ -3553,182 +4027,182 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>{shown} … ({n} en total)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="325"/>
+        <location filename="../processing/engine/estimation.py" line="394"/>
         <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
         <translation>El campo {count_name} contiene valores que no son números para las unidades {ids}. Introduzca un conteo entero (0 si se muestreó y no se vio ninguno) o deje el campo vacío (NULL) para las unidades no muestreadas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="336"/>
+        <location filename="../processing/engine/estimation.py" line="405"/>
         <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
         <translation>El campo {count_name} contiene conteos negativos o infinitos para las unidades {ids}. Los conteos deben ser 0 o más; corríjalos, o deje el campo vacío (NULL) si la unidad no se muestreó.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="487"/>
+        <location filename="../processing/engine/estimation.py" line="578"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
         <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos cubren {area:.4g} {unit} que ningún estrato cubre, así que la estimación hablaría sin avisar de un marco de muestreo más pequeño. Dé a cada polígono el identificador de su estrato, elimine los polígonos que no forman parte del marco, o elija dejar fuera los estratos sin unidades muestreadas (el marco se reduce entonces).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="496"/>
+        <location filename="../processing/engine/estimation.py" line="587"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
         <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos se dejaron fuera, y el marco de muestreo se redujo en la parte que ningún estrato cubre: {area:.4g} {unit}. Para mantenerlos en el marco, dé a cada polígono el identificador de su estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="501"/>
+        <location filename="../processing/engine/estimation.py" line="550"/>
         <source>Layer &apos;{layer}&apos;: no polygon has a stratum id in the field &apos;{field}&apos;. Fill in the stratum ids, or choose the field that holds them.</source>
         <translation>Capa «{layer}»: ningún polígono tiene identificador de estrato en el campo «{field}». Rellene los identificadores de estrato, o elija el campo que los contiene.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="519"/>
+        <location filename="../processing/engine/estimation.py" line="607"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
         <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se contarían en más de un estrato, lo que infla el área del marco de muestreo y la abundancia. Corrija los polígonos de los estratos para que no se solapen: cada trozo de terreno pertenece a un solo estrato (recorte cada solape de todos los estratos salvo uno, o vuelva a trazar los bordes comunes).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="528"/>
+        <location filename="../processing/engine/estimation.py" line="616"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
         <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se cuentan en más de un estrato, por lo que el área del marco de muestreo y la abundancia son algo mayores de lo debido. Corrija los polígonos de los estratos para que no se solapen (ajuste los bordes comunes con el autoensamblado, o recorte cada solape de todos los estratos salvo uno).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="623"/>
+        <location filename="../processing/engine/estimation.py" line="678"/>
         <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
         <translation>El nivel de confianza debe estar entre 0 y 1 (se recibió {confidence}); use p. ej. 0.95.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="627"/>
+        <location filename="../processing/engine/estimation.py" line="682"/>
         <source>Unknown interval method {method!r}; use one of {methods}.</source>
         <translation>Método de intervalo desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="631"/>
+        <location filename="../processing/engine/estimation.py" line="686"/>
         <source>Unknown variance method {method!r}; use one of {methods}.</source>
         <translation>Método de varianza desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="635"/>
+        <location filename="../processing/engine/estimation.py" line="690"/>
         <source>The detection probability must lie in (0, 1] (got {p}).</source>
         <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {p}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="638"/>
+        <location filename="../processing/engine/estimation.py" line="693"/>
         <source>The standard error of the detection probability must be 0 or more.</source>
         <translation>El error estándar de la probabilidad de detección debe ser 0 o más.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="648"/>
+        <location filename="../processing/engine/estimation.py" line="712"/>
         <source>unit_ids must have one id per unit.</source>
         <translation>unit_ids debe tener un identificador por unidad.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="652"/>
+        <location filename="../processing/engine/estimation.py" line="716"/>
         <source>counts, unit_areas and strata must have one value per unit.</source>
         <translation>counts, unit_areas y strata deben tener un valor por unidad.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="661"/>
+        <location filename="../processing/engine/estimation.py" line="755"/>
         <source>Strata {ids} have no area. Check the strata layer&apos;s geometries.</source>
         <translation>Los estratos {ids} no tienen área. Compruebe las geometrías de la capa de estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="670"/>
+        <location filename="../processing/engine/estimation.py" line="768"/>
         <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
         <translation>Las unidades {ids} no tienen estrato (el campo de estrato está vacío). Rellene su estrato, u omita el campo de estrato para tratar el marco de muestreo como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="681"/>
+        <location filename="../processing/engine/estimation.py" line="779"/>
         <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
         <translation>Las unidades {ids} tienen identificadores de estrato ({names}) que no están en la capa de estratos. Compruebe el campo de estrato de las unidades y el campo identificador de la capa de estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="691"/>
+        <location filename="../processing/engine/estimation.py" line="725"/>
         <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
         <translation>{n} unidad(es) no tienen conteo y se tratan como no muestreadas (no respuesta): {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="696"/>
+        <location filename="../processing/engine/estimation.py" line="731"/>
         <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
         <translation>Ninguna unidad tiene conteo, así que no puede estimarse nada. Introduzca los conteos de las unidades muestreadas (0 si no se vio ninguno) en el campo de conteo.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="702"/>
         <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
-        <translation>Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
+        <translation type="obsolete">Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="713"/>
+        <location filename="../processing/engine/estimation.py" line="828"/>
         <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
         <translation>Los datos de presencia deben ser 0 o 1; las unidades {ids} contienen otros valores. Use los conteos sin la opción de presencia, o recodifique el campo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="720"/>
+        <location filename="../processing/engine/estimation.py" line="836"/>
         <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
         <translation>La probabilidad de detección no se aplicó a los datos de presencia: dividir una proporción de unidades ocupadas por p no es una corrección de ocupación, que requiere visitas repetidas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="738"/>
+        <location filename="../processing/engine/estimation.py" line="797"/>
         <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
         <translation>Ninguna unidad de los estratos {ids} se muestreó, así que su abundancia no puede estimarse. Muestree unidades allí, o elija dejar fuera esos estratos (la estimación cubre entonces un marco de muestreo menor).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="746"/>
+        <location filename="../processing/engine/estimation.py" line="804"/>
         <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
         <translation>Los estratos {ids} no tenían ninguna unidad muestreada y se dejaron fuera: el marco de muestreo se redujo en {dropped_area:.6g} unidades de área, y la estimación cubre solo los estratos restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="762"/>
+        <location filename="../processing/engine/estimation.py" line="912"/>
         <source>The local neighbourhood variance needs the positions of the units.</source>
         <translation>La varianza de vecindad local necesita las posiciones de las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="767"/>
+        <location filename="../processing/engine/estimation.py" line="917"/>
         <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
         <translation>Las unidades {ids} no tienen posición, así que la varianza de vecindad local no puede usarlas. Indique sus ubicaciones, o use la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="793"/>
+        <location filename="../processing/engine/estimation.py" line="1016"/>
         <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
         <translation>En los estratos {ids} el área muestreada supera el área del estrato. Compruebe las áreas de las unidades y la unidad de área, o desactive la corrección por población finita.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="835"/>
         <source>{label} (one unit) collapsed with {others}</source>
-        <translation>{label} (una unidad) agrupado con {others}</translation>
+        <translation type="obsolete">{label} (una unidad) agrupado con {others}</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="842"/>
         <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
-        <translation>Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
+        <translation type="obsolete">Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="847"/>
+        <location filename="../processing/engine/estimation.py" line="1090"/>
         <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
         <translation>El único estrato tiene una sola unidad muestreada: no puede estimarse ninguna varianza, error estándar ni intervalo. Muestree al menos dos unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="863"/>
         <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
-        <translation>Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
+        <translation type="obsolete">Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="899"/>
+        <location filename="../processing/engine/estimation.py" line="1454"/>
         <source>The bootstrap needs a random generator (rng).</source>
         <translation>El bootstrap necesita un generador aleatorio (rng).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="932"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
-        <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0 y su CV no está definido.</translation>
+        <translation type="obsolete">No se contó ningún animal en las unidades muestreadas: la estimación es 0 y su CV no está definido.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="936"/>
         <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
-        <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
+        <translation type="obsolete">En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="981"/>
+        <location filename="../processing/engine/estimation.py" line="1219"/>
         <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability&apos;s own CV is {cv_p:.3g}. Improve the detection study first.</source>
         <translation>El CV objetivo {target_cv:.3g} no puede alcanzarse con más unidades: el CV propio de la probabilidad de detección es {cv_p:.3g}. Mejore primero el estudio de detección.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="990"/>
+        <location filename="../processing/engine/estimation.py" line="1231"/>
         <source>No variation was observed, so the next survey&apos;s sample sizes are set to the minimum of 2 per stratum.</source>
         <translation>No se observó variación, así que los tamaños de muestra del próximo muestreo se fijan en el mínimo de 2 por estrato.</translation>
     </message>
@@ -3768,287 +4242,287 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>No se pudo sortear ningún punto en un área de {area:.3g} m²: es demasiado delgada para contener una unidad de muestreo. Busque astillas en el marco.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="196"/>
+        <location filename="../processing/engine/layout.py" line="204"/>
         <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
         <translation>DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="80"/>
+        <location filename="../processing/engine/layout.py" line="84"/>
         <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad puntual; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="81"/>
+        <location filename="../processing/engine/layout.py" line="85"/>
         <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad cuadrada; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="82"/>
+        <location filename="../processing/engine/layout.py" line="86"/>
         <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad circular; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="83"/>
+        <location filename="../processing/engine/layout.py" line="87"/>
         <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad lineal; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="204"/>
+        <location filename="../processing/engine/layout.py" line="212"/>
         <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
         <translation>BEARING debe ser -1 (aleatorio) o estar entre 0 y 360 grados; es {bearing}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="208"/>
+        <location filename="../processing/engine/layout.py" line="216"/>
         <source>MIN_SPACING must be 0 or more metres.</source>
         <translation>MIN_SPACING debe ser 0 metros o más.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="210"/>
+        <location filename="../processing/engine/layout.py" line="218"/>
         <source>RESERVE must be 0 or a positive whole number.</source>
         <translation>RESERVE debe ser 0 o un número entero positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="389"/>
+        <location filename="../processing/engine/layout.py" line="408"/>
         <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
         <translation>{field} está vacío (NULL) o no es un número para las entidades {ids}. Dé a cada estrato un número entero de unidades, o deje N_FIELD sin definir para usar N_UNITS.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="396"/>
+        <location filename="../processing/engine/layout.py" line="415"/>
         <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
         <translation>{field} es negativo para las entidades {ids}. Use 0 o un número entero positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="403"/>
+        <location filename="../processing/engine/layout.py" line="422"/>
         <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
         <translation>{field} no es un número entero para las entidades {ids}. Redondee primero la asignación a unidades enteras.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="487"/>
+        <location filename="../processing/engine/layout.py" line="506"/>
         <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
         <translation>Indique N_FIELD (unidades por estrato) o N_UNITS (un total de al menos 1).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="503"/>
+        <location filename="../processing/engine/layout.py" line="522"/>
         <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
         <translation>Se reparó una geometría no válida en las entidades {ids}; compruebe sus contornos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="507"/>
+        <location filename="../processing/engine/layout.py" line="526"/>
         <source>Empty or zero-area feature(s) {ids} were skipped.</source>
         <translation>Se omitieron las entidades vacías o de área nula {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="510"/>
+        <location filename="../processing/engine/layout.py" line="529"/>
         <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
         <translation>Las entidades {ids} tienen menos de {area:g} m² de área (astillas, dejadas por ejemplo por una superposición o una reproyección) y se han omitido.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="516"/>
+        <location filename="../processing/engine/layout.py" line="535"/>
         <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
         <translation>El marco de muestreo no tiene ningún polígono de {area:g} m² o más: cada entidad está vacía, tiene área nula o es una astilla.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="527"/>
+        <location filename="../processing/engine/layout.py" line="546"/>
         <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
         <translation>{field} está vacío (NULL) para la entidad {fid}. Dele un valor de estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="555"/>
+        <location filename="../processing/engine/layout.py" line="574"/>
         <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
         <translation>Las entidades del marco de muestreo (sin campo de estrato) tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades o elija un campo de estrato para que cada entidad sea un estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="555"/>
+        <location filename="../processing/engine/layout.py" line="574"/>
         <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
         <translation>Las entidades del estrato {key} tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="572"/>
+        <location filename="../processing/engine/layout.py" line="591"/>
         <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
         <translation>N_UNITS = {n_units} es menos de {minimum} por estrato para {n_strata} estratos; cada estrato recibe {minimum} ({total} unidades).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="86"/>
+        <location filename="../processing/engine/layout.py" line="90"/>
         <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="91"/>
+        <location filename="../processing/engine/layout.py" line="95"/>
         <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="96"/>
+        <location filename="../processing/engine/layout.py" line="100"/>
         <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="101"/>
+        <location filename="../processing/engine/layout.py" line="105"/>
         <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="106"/>
+        <location filename="../processing/engine/layout.py" line="110"/>
         <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="111"/>
+        <location filename="../processing/engine/layout.py" line="115"/>
         <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="116"/>
+        <location filename="../processing/engine/layout.py" line="120"/>
         <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="121"/>
+        <location filename="../processing/engine/layout.py" line="125"/>
         <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="588"/>
+        <location filename="../processing/engine/layout.py" line="607"/>
         <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="588"/>
+        <location filename="../processing/engine/layout.py" line="607"/>
         <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="598"/>
+        <location filename="../processing/engine/layout.py" line="617"/>
         <source>The frame gets no units; the estimate cannot speak for it.</source>
         <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="598"/>
+        <location filename="../processing/engine/layout.py" line="617"/>
         <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
         <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="603"/>
+        <location filename="../processing/engine/layout.py" line="622"/>
         <source>The frame gets one unit only; its variance cannot be estimated.</source>
         <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="603"/>
+        <location filename="../processing/engine/layout.py" line="622"/>
         <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
         <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="628"/>
+        <location filename="../processing/engine/layout.py" line="647"/>
         <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
         <translation>Hay estratos que se solapan ({pairs}): un lugar pertenece a un solo estrato, y las unidades de una zona común se sortearían en ambos estratos y se ponderarían dos veces. Haga disjuntos los polígonos de los estratos (por ejemplo con las herramientas Diferencia o Unión del anfitrión) y vuelva a ejecutar.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="632"/>
+        <location filename="../processing/engine/layout.py" line="651"/>
         <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
         <translation>Hay estratos que se solapan ligeramente ({pairs}); las unidades allí pertenecen a ambos. Haga disjuntos los polígonos de los estratos si es más que ruido de digitalización.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="717"/>
+        <location filename="../processing/engine/layout.py" line="736"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="717"/>
+        <location filename="../processing/engine/layout.py" line="736"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="817"/>
+        <location filename="../processing/engine/layout.py" line="836"/>
         <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
         <translation>Una cuadrícula sistemática de espaciado {spacing:.3g} m sobre un área de {area:,.1f} m² extendida sobre {width:,.0f} m x {height:,.0f} m necesitaría {count:,} puntos candidatos. El área es una astilla o demasiado pequeña para el número de unidades: busque astillas en el marco, pida menos unidades o use otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="886"/>
+        <location filename="../processing/engine/layout.py" line="905"/>
         <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="886"/>
+        <location filename="../processing/engine/layout.py" line="905"/>
         <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="906"/>
+        <location filename="../processing/engine/layout.py" line="925"/>
         <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="906"/>
+        <location filename="../processing/engine/layout.py" line="925"/>
         <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="917"/>
+        <location filename="../processing/engine/layout.py" line="936"/>
         <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="917"/>
+        <location filename="../processing/engine/layout.py" line="936"/>
         <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="944"/>
         <source>The frame has only {n} of {r} reserve units.</source>
         <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="944"/>
         <source>Stratum {key} has only {n} of {r} reserve units.</source>
         <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="141"/>
+        <location filename="../processing/engine/layout.py" line="145"/>
         <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>inicio del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="144"/>
+        <location filename="../processing/engine/layout.py" line="148"/>
         <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>inicio del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="147"/>
+        <location filename="../processing/engine/layout.py" line="151"/>
         <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="150"/>
+        <location filename="../processing/engine/layout.py" line="154"/>
         <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="133"/>
+        <location filename="../processing/engine/layout.py" line="137"/>
         <source>point unit {unit} (primary, stratum {stratum})</source>
         <translation>unidad puntual {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="134"/>
+        <location filename="../processing/engine/layout.py" line="138"/>
         <source>point unit {unit} (reserve, stratum {stratum})</source>
         <translation>unidad puntual {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="135"/>
+        <location filename="../processing/engine/layout.py" line="139"/>
         <source>square unit {unit} (primary, stratum {stratum})</source>
         <translation>unidad cuadrada {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="136"/>
+        <location filename="../processing/engine/layout.py" line="140"/>
         <source>square unit {unit} (reserve, stratum {stratum})</source>
         <translation>unidad cuadrada {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="137"/>
+        <location filename="../processing/engine/layout.py" line="141"/>
         <source>circle unit {unit} (primary, stratum {stratum})</source>
         <translation>unidad circular {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="138"/>
+        <location filename="../processing/engine/layout.py" line="142"/>
         <source>circle unit {unit} (reserve, stratum {stratum})</source>
         <translation>unidad circular {unit} (de reserva, estrato {stratum})</translation>
     </message>
@@ -4567,6 +5041,301 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <source>The working day must be longer than 0 hours.</source>
         <translation>La jornada de trabajo debe durar más de 0 horas.</translation>
     </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="90"/>
+        <source>stratified Neyman (best case)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="90"/>
+        <source>stratified Neyman (pilot)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="678"/>
+        <source>The pilot needs at least 2 units per stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units kept inside never reach the edge of the frame or of their stratum, so the edge band weighs less in the estimate; where its density differs from the interior, the estimate is biased. Plus sampling (INSIDE off) removes this bias.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). Plus sampling is unbiased, so the likely cause is the ratio estimator with very few animals per unit, or a systematic grid whose realised number of units varies with the surface; more units reduce it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="251"/>
+        <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="116"/>
+        <source>The truncation distance must be above 0 m (got {w:g} m).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="121"/>
+        <source>{count} distances are missing or not numbers. Fill them in or leave those detections out.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="126"/>
+        <source>{count} distances are negative. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="132"/>
+        <source>{count} distances lie beyond the truncation distance of {w:g} m. Leave them out first (right truncation) or raise the truncation distance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="138"/>
+        <source>A detection function needs at least 2 distances (got {n}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="146"/>
+        <source>The distance bands must start at 0 m, increase, and end at the truncation distance {w:g} m, with at least two bands (got {cutpoints}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="745"/>
+        <source>Without a truncation distance only the half-normal key alone can be fitted; give a truncation distance for {model}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="752"/>
+        <source>The model {model} has {q} parameters, more than the {free} the distances can support. Use fewer cosine terms or more distance bands.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="820"/>
+        <source>Choose at least one key function among half-normal, hazard-rate and uniform.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="846"/>
+        <source>No detection function could be fitted to these {n} distances. Check the distances and the truncation distance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="118"/>
+        <source>Layer &apos;{layer}&apos;: {n} units have no id in the field &apos;{field}&apos;. Give every unit its id.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="124"/>
+        <source>Layer &apos;{layer}&apos;: the unit ids {ids} occur more than once in the field &apos;{field}&apos;. Each unit needs its own id.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="133"/>
+        <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="137"/>
+        <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="146"/>
+        <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="156"/>
+        <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="163"/>
+        <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="184"/>
+        <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="192"/>
+        <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="199"/>
+        <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="211"/>
+        <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="224"/>
+        <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="232"/>
+        <source>There are no observations: a detection function needs at least {minimum} detections.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="261"/>
+        <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="269"/>
+        <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="419"/>
+        <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="438"/>
+        <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="444"/>
+        <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="451"/>
+        <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="457"/>
+        <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="662"/>
+        <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="750"/>
+        <source>Unknown group-size method &apos;{method}&apos;.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="755"/>
+        <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="772"/>
+        <source>The bootstrap needs a random generator (a seed).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="780"/>
+        <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="697"/>
+        <source>The degrees of freedom of the detection estimate must be 0 (known p) or more.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="738"/>
+        <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
+        <translation type="unfinished">Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="821"/>
+        <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
+        <translation type="unfinished">Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="865"/>
+        <source>The finite-population correction was not applied in strata {ids}: their units come from a design whose units may overlap ({records}: simple random centres, or a grid denser than the units). Their possible positions form a continuous population, which has no such correction (Cordy 1993); applying it would make the interval too narrow. A layout with MIN_SPACING of at least the unit&apos;s width, a systematic grid or a spatially balanced layout keeps the units apart.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="884"/>
+        <source>The expansion area of strata {ids} is smaller than the stratum: the plus region holds the stratum. Check the units&apos; edge record.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="903"/>
+        <source>In strata {ids} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1064"/>
+        <source>Strata {ids} have fewer than 3 units: their variance uses the simple random sampling formula.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1078"/>
+        <source>{label} (one unit) with {other}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1083"/>
+        <source>Strata {groups}: a stratum with one surveyed unit takes its variance from the collapsed-strata pairs formula with its partner (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow weights for unequal sizes), which counts the difference between the two strata as variance and so tends to be too large; the partner keeps its own variance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1243"/>
+        <source>Even every possible unit in every stratum ({n:,}) would miss the target CV {target_cv:.3g}: n_next is every unit.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1466"/>
+        <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1478"/>
+        <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1486"/>
+        <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1530"/>
+        <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="91"/>
+        <source>The detection function must be 1 (half-normal) or 2 (hazard-rate).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="95"/>
+        <source>The scale σ must be above 0 m and the hazard-rate shape above 0 (got σ = {sigma:g} m, shape {shape:g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="100"/>
+        <source>The detection probability on the line must be in (0, 1] (got {g0:g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="109"/>
+        <source>Units {ids} are neither points nor lines of some length; simulated distances need line transects or point stations.</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>PlotwisePlugin</name>
@@ -4589,17 +5358,17 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
 <context>
     <name>PlotwiseProvider</name>
     <message>
-        <location filename="../processing/provider.py" line="96"/>
+        <location filename="../processing/provider.py" line="98"/>
         <source>Plotwise</source>
         <translation>Plotwise</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="99"/>
+        <location filename="../processing/provider.py" line="101"/>
         <source>Plotwise survey design and estimation</source>
         <translation>Plotwise: diseño de muestreos y estimación</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="119"/>
+        <location filename="../processing/provider.py" line="121"/>
         <source>The example model {path} could not be read.</source>
         <translation>No se pudo leer el modelo de ejemplo {path}.</translation>
     </message>
@@ -5361,6 +6130,1411 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <source>stratum {key}</source>
         <translation>estrato {key}</translation>
     </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="40"/>
+        <source>equal</source>
+        <translation type="unfinished">igual</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="41"/>
+        <source>proportional to area</source>
+        <translation type="unfinished">proporcional al área</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="42"/>
+        <source>Neyman</source>
+        <translation type="unfinished">Neyman</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="43"/>
+        <source>optimal with cost</source>
+        <translation type="unfinished">óptima con coste</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="57"/>
+        <source>Allocation of survey effort</source>
+        <translation type="unfinished">Asignación del esfuerzo de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="59"/>
+        <source>field days</source>
+        <translation type="unfinished">jornadas de campo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="59"/>
+        <source>cost units</source>
+        <translation type="unfinished">unidades de coste</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="65"/>
+        <source>units in total</source>
+        <translation type="unfinished">unidades en total</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="66"/>
+        <source>method</source>
+        <translation type="unfinished">método</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="69"/>
+        <source>expected CV of the overall density</source>
+        <translation type="unfinished">CV esperado de la densidad global</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="71"/>
+        <source>field days needed</source>
+        <translation type="unfinished">jornadas de campo necesarias</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="71"/>
+        <source>cost</source>
+        <translation type="unfinished">coste</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="81"/>
+        <source>a total number of units</source>
+        <translation type="unfinished">un número total de unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="82"/>
+        <source>a budget</source>
+        <translation type="unfinished">un presupuesto</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="83"/>
+        <source>a target CV</source>
+        <translation type="unfinished">un CV objetivo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Strata layer</source>
+        <translation type="unfinished">Capa de estratos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="204"/>
+        <source>Computation CRS</source>
+        <translation type="unfinished">SRC de cálculo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Method asked for</source>
+        <translation type="unfinished">Método solicitado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Method applied</source>
+        <translation type="unfinished">Método aplicado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Target</source>
+        <translation type="unfinished">Objetivo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Total asked for</source>
+        <translation type="unfinished">Total solicitado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Budget</source>
+        <translation type="unfinished">Presupuesto</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Target CV</source>
+        <translation type="unfinished">CV objetivo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Unit area (m²)</source>
+        <translation type="unfinished">Área de la unidad (m²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Minimum units per stratum</source>
+        <translation type="unfinished">Mínimo de unidades por estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>SD field</source>
+        <translation type="unfinished">Campo de DE</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source> (covariate proxy)</source>
+        <translation type="unfinished"> (sustituto por la covariable)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Mean field</source>
+        <translation type="unfinished">Campo de media</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Cost field</source>
+        <translation type="unfinished">Campo de coste</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Fixed cost c0</source>
+        <translation type="unfinished">Coste fijo c0</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Layout to come</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="209"/>
+        <source>Finite-population correction</source>
+        <translation type="unfinished">Corrección por población finita</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="119"/>
+        <source>Units per stratum</source>
+        <translation type="unfinished">Unidades por estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="120"/>
+        <source>SE of mean per unit (covariate units)</source>
+        <translation type="unfinished">Error estándar de la media por unidad (unidades de la covariable)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="120"/>
+        <source>SE of mean count per unit</source>
+        <translation type="unfinished">Error estándar del conteo medio por unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="127"/>
+        <source>Units that fit</source>
+        <translation type="unfinished">Unidades que caben</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="128"/>
+        <source>Lower bound</source>
+        <translation type="unfinished">Límite inferior</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="129"/>
+        <source>Share before rounding</source>
+        <translation type="unfinished">Cuota antes del redondeo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="130"/>
+        <source>Units (n_alloc)</source>
+        <translation type="unfinished">Unidades (n_alloc)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="131"/>
+        <source>Sampling fraction</source>
+        <translation type="unfinished">Fracción de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="136"/>
+        <source>SE of density (per km²)</source>
+        <translation type="unfinished">Error estándar de la densidad (por km²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="138"/>
+        <source>Expected CV (exp_cv)</source>
+        <translation type="unfinished">CV esperado (exp_cv)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="379"/>
+        <source>all strata</source>
+        <translation type="unfinished">todos los estratos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="172"/>
+        <source>units per stratum</source>
+        <translation type="unfinished">unidades por estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="172"/>
+        <source>Units allocated to each stratum</source>
+        <translation type="unfinished">Unidades asignadas a cada estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="196"/>
+        <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
+        <translation type="unfinished">{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="196"/>
+        <source>Field days needed</source>
+        <translation type="unfinished">Jornadas de campo necesarias</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="196"/>
+        <source>Cost of the design</source>
+        <translation type="unfinished">Coste del diseño</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="210"/>
+        <source>What the choice of method buys, at {n} units</source>
+        <translation type="unfinished">Lo que aporta la elección del método, con {n} unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="214"/>
+        <source>stratum {label}</source>
+        <translation type="unfinished">estrato {label}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="217"/>
+        <source>Variance relative to the applied allocation</source>
+        <translation type="unfinished">Varianza relativa a la asignación aplicada</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="219"/>
+        <source>Expected CV</source>
+        <translation type="unfinished">CV esperado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="230"/>
+        <source>Without standard deviations the precision of the designs cannot be compared.</source>
+        <translation type="unfinished">Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="43"/>
+        <source>Survey designs compared by simulation</source>
+        <translation type="unfinished">Diseños de muestreo comparados por simulación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="49"/>
+        <source>recommended design</source>
+        <translation type="unfinished">diseño recomendado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="50"/>
+        <source>its RMSE (animals)</source>
+        <translation type="unfinished">su RECM (animales)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="51"/>
+        <source>its RMSE relative to the total</source>
+        <translation type="unfinished">su RECM relativa al total</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="52"/>
+        <source>its 95 % interval coverage</source>
+        <translation type="unfinished">cobertura de sus intervalos al 95 %</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="54"/>
+        <source>expected animals in the frame</source>
+        <translation type="unfinished">animales esperados en el marco</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="57"/>
+        <source>point station</source>
+        <translation type="unfinished">estación puntual</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="58"/>
+        <source>square plot</source>
+        <translation type="unfinished">parcela cuadrada</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="59"/>
+        <source>circular plot</source>
+        <translation type="unfinished">parcela circular</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="60"/>
+        <source>line transect</source>
+        <translation type="unfinished">transecto lineal</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="63"/>
+        <source>counting radius</source>
+        <translation type="unfinished">radio de conteo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="64"/>
+        <source>side</source>
+        <translation type="unfinished">lado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="65"/>
+        <source>radius</source>
+        <translation type="unfinished">radio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="66"/>
+        <source>length</source>
+        <translation type="unfinished">longitud</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="71"/>
+        <source>, strip half-width {w:g} m</source>
+        <translation type="unfinished">, semianchura de franja {w:g} m</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="73"/>
+        <source>Density surface</source>
+        <translation type="unfinished">Superficie de densidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="74"/>
+        <source>Sampling frame</source>
+        <translation type="unfinished">Marco de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="252"/>
+        <source>Strata</source>
+        <translation type="unfinished">Estratos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="147"/>
+        <source>none</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="200"/>
+        <source>Stratum field</source>
+        <translation type="unfinished">Campo de estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="77"/>
+        <source>feature id</source>
+        <translation type="unfinished">identificador de entidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="79"/>
+        <source>Surface cell</source>
+        <translation type="unfinished">Celda de la superficie</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="80"/>
+        <source>Sub-cells per cell side (for counting)</source>
+        <translation type="unfinished">Subceldas por lado de celda (para el conteo)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="81"/>
+        <source>Unit</source>
+        <translation type="unfinished">Unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="82"/>
+        <source>Counted area per unit (m²)</source>
+        <translation type="unfinished">Área contada por unidad (m²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <source>Bearing</source>
+        <translation type="unfinished">Rumbo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <source>random</source>
+        <translation type="unfinished">aleatorio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="86"/>
+        <source>Units wholly inside their stratum</source>
+        <translation type="unfinished">Unidades por completo dentro de su estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="91"/>
+        <source>Number of units</source>
+        <translation type="unfinished">Número de unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="92"/>
+        <source>Simulated surveys per design</source>
+        <translation type="unfinished">Muestreos simulados por diseño</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <source>Counts per cell</source>
+        <translation type="unfinished">Conteos por celda</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <source>negative binomial, k = {k:g}</source>
+        <translation type="unfinished">binomial negativa, k = {k:g}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <source>Poisson</source>
+        <translation type="unfinished">Poisson</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <source>Variance estimator (grid, balanced)</source>
+        <translation type="unfinished">Estimador de la varianza (cuadrícula, equilibrado)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <source>local neighbourhood</source>
+        <translation type="unfinished">vecindario local</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="164"/>
+        <source>simple random sampling formula</source>
+        <translation type="unfinished">fórmula del muestreo aleatorio simple</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="206"/>
+        <source>Confidence level</source>
+        <translation type="unfinished">Nivel de confianza</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="222"/>
+        <source>Seed</source>
+        <translation type="unfinished">Semilla</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="109"/>
+        <source>How the designs did at {n} units</source>
+        <translation type="unfinished">Resultados de los diseños con {n} unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="111"/>
+        <source>Design</source>
+        <translation type="unfinished">Diseño</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="112"/>
+        <source>Mean units surveyed</source>
+        <translation type="unfinished">Media de unidades muestreadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="113"/>
+        <source>Relative bias</source>
+        <translation type="unfinished">Sesgo relativo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
+        <source>Empirical SE (animals)</source>
+        <translation type="unfinished">Error estándar empírico (animales)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="311"/>
+        <source>RMSE (animals)</source>
+        <translation type="unfinished">RECM (animales)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="116"/>
+        <source>± Monte Carlo SE</source>
+        <translation type="unfinished">± error estándar de Monte Carlo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="117"/>
+        <source>RMSE / total</source>
+        <translation type="unfinished">RECM / total</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="118"/>
+        <source>Mean estimated CV</source>
+        <translation type="unfinished">CV estimado medio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="119"/>
+        <source>95 % interval coverage</source>
+        <translation type="unfinished">Cobertura de los intervalos al 95 %</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="120"/>
+        <source>Surveys without an estimate</source>
+        <translation type="unfinished">Muestreos sin estimación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <source>RMSE of the abundance (animals)</source>
+        <translation type="unfinished">RECM de la abundancia (animales)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
+        <translation type="unfinished">Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="166"/>
+        <source>Recommendation</source>
+        <translation type="unfinished">Recomendación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="168"/>
+        <source>No design gave estimates: see the warnings.</source>
+        <translation type="unfinished">Ningún diseño dio estimaciones: vea las advertencias.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="212"/>
+        <source>How the simulation works</source>
+        <translation type="unfinished">Cómo funciona la simulación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="257"/>
+        <source>Area (km²)</source>
+        <translation type="unfinished">Área (km²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="258"/>
+        <source>Mean expected count per unit</source>
+        <translation type="unfinished">Conteo esperado medio por unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="259"/>
+        <source>S_h (count SD per unit)</source>
+        <translation type="unfinished">S_h (DE del conteo por unidad)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="262"/>
+        <source>Units, proportional</source>
+        <translation type="unfinished">Unidades, proporcional</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="264"/>
+        <source>Units, Neyman (best case)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="266"/>
+        <source>Units, Neyman from a pilot (mean)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="292"/>
+        <source>RMSE against the number of units</source>
+        <translation type="unfinished">RECM frente al número de unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <source>number of units</source>
+        <translation type="unfinished">número de unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <source>RMSE of the abundance estimate against the number of units</source>
+        <translation type="unfinished">RECM de la estimación de la abundancia frente al número de unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="307"/>
+        <source>Units</source>
+        <translation type="unfinished">Unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="318"/>
+        <source>{a} → {b} units: RMSE {change:+.0%}</source>
+        <translation type="unfinished">{a} → {b} unidades: RECM {change:+.0%}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="323"/>
+        <source>For {name}: </source>
+        <translation type="unfinished">Para {name}: </translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="125"/>
+        <source>{level} interval</source>
+        <translation type="unfinished">intervalo al {level}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="383"/>
+        <source>animals per {unit}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="378"/>
+        <source>transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="378"/>
+        <source>points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="120"/>
+        <source>estimated animals in the frame</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="244"/>
+        <source>CV</source>
+        <translation type="unfinished">CV</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="124"/>
+        <source>detections used</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="128"/>
+        <source>detection probability within the truncation distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="129"/>
+        <source>effective strip half-width (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="129"/>
+        <source>effective detection radius (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="138"/>
+        <source>the last band edge</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="140"/>
+        <source>automatic: the farthest 5 % of the distances left out</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="148"/>
+        <source>{layer} (id field {field})</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="150"/>
+        <source>{layer} (unit field {unit}, distance field {distance})</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="152"/>
+        <source>line transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="152"/>
+        <source>point transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="154"/>
+        <source>none: exact distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="156"/>
+        <source>one per stratum</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="156"/>
+        <source>one for all strata</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="159"/>
+        <source>mean, or size-bias regression when larger groups are seen farther</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="161"/>
+        <source>mean of the detected groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="162"/>
+        <source>size-bias regression</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Transects or points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Survey type</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="201"/>
+        <source>none: one stratum</source>
+        <translation type="unfinished">ninguno: un solo estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Visits field</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Observations</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Group size field</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>none: each detection is one animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="203"/>
+        <source>Strata (frame)</source>
+        <translation type="unfinished">Estratos (marco)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Truncation distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Distance bands (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Key functions tried</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Most cosine terms per key</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="206"/>
+        <source>Detection function</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Group size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="205"/>
+        <source>Area unit</source>
+        <translation type="unfinished">Unidad de área</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="219"/>
+        <source>Bootstrap resamples</source>
+        <translation type="unfinished">Remuestreos bootstrap</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="194"/>
+        <source>perpendicular distance from the line (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="194"/>
+        <source>Distances seen from the lines, with the fitted detection function scaled to the detections (its height at 0 is where every animal is seen)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="197"/>
+        <source>distance from the point (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="197"/>
+        <source>Distances seen from the points, with the fitted probability density of the distances: it rises from 0 because there is more ground farther from a point, then falls as detection drops</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="207"/>
+        <source>{n} of the {recorded} recorded detections lie within the truncation distance of {w:.1f} m and were used; {dropped} farther ones were left out.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="218"/>
+        <source>detections per metre of distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="218"/>
+        <source>fitted: {model}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="250"/>
+        <source>Stratum {stratum}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="237"/>
+        <source>Effective half-width (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="237"/>
+        <source>Effective radius (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="240"/>
+        <source>AIC above the best</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="241"/>
+        <source>Detection probability within w</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="242"/>
+        <source>Fit, χ² p</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="243"/>
+        <source>Fit, Cramér–von Mises p</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="244"/>
+        <source>Chosen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="245"/>
+        <source>Every model tried, in the order fitted ({n} detections). The smallest AIC is chosen; a fit p below 0.05 means the model misses the shape of the distances.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="259"/>
+        <source>Group size: {n} groups seen, mean size {mean:.3g}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="262"/>
+        <source>The regression of ln(size) on the detection probability has slope {b:.3g} (p = {p:.3f}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="266"/>
+        <source>Larger groups are seen farther away, so the expected size where every group is seen, {e:.3g} (SE {se:.3g}), is used instead of the mean.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="270"/>
+        <source>The mean is used (SE {se:.3g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="284"/>
+        <source>distance (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="284"/>
+        <source>probability of detection</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="286"/>
+        <source>The best model of each key function: the probability of seeing an animal at each distance (1 on the line or at the point, by assumption)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="292"/>
+        <source>Transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="292"/>
+        <source>Points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="293"/>
+        <source>Line length (km)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="293"/>
+        <source>Visits</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="295"/>
+        <source>Detections per km</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="295"/>
+        <source>Detections per visit</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="235"/>
+        <source>Area ({unit})</source>
+        <translation type="unfinished">Área ({unit})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="299"/>
+        <source>Detections</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="300"/>
+        <source>Animals per {unit}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Lower limit</source>
+        <translation type="unfinished">Límite inferior</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Upper limit</source>
+        <translation type="unfinished">Límite superior</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="245"/>
+        <source>df</source>
+        <translation type="unfinished">gl</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="314"/>
+        <source>bootstrap percentile limits</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="314"/>
+        <source>log-normal limits with t</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="316"/>
+        <source>Density by stratum, {method} at {level}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="320"/>
+        <source>Animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="320"/>
+        <source>Abundance in the frame, limits at {level}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="328"/>
+        <source>For comparison: the abundance&apos;s delta-method interval (log-normal with t).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="342"/>
+        <source>Share from the encounter rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="343"/>
+        <source>Share from the detection function</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="344"/>
+        <source>Share from group size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="345"/>
+        <source>Where the uncertainty comes from: each part's share of CV² (delta method). A large encounter-rate share calls for more transects; a large detection share for more detections.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="351"/>
+        <source>Density and abundance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="359"/>
+        <source>Density by stratum with {level} intervals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="372"/>
+        <source>lowest: {value:.3g}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="373"/>
+        <source>highest: {value:.3g}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="384"/>
+        <source>Strata shaded by density (animals per {unit}), with the surveyed {what}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="391"/>
+        <source>Each detection function is a key (half-normal, hazard-rate or uniform) with up to the chosen number of cosine terms, fitted to the distances by maximum likelihood; terms are added one at a time while AIC falls, under the constraint that detection never rises with distance, and the model with the smallest AIC is used (Buckland et al. 2001).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="398"/>
+        <source>Density in a stratum is D = n·E(s) / (2·w·L·P), with n the groups seen within the truncation distance w, L the line length, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="404"/>
+        <source>Density in a stratum is D = n·E(s) / (k·π·w²·P), with n the groups seen within the truncation distance w, k the number of point visits, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="409"/>
+        <source>The squared CV of the density is the sum of those of the encounter rate, of P and of E(s) (delta method). The encounter rate's variance comes from the differences between transects within each stratum (estimator R2 of Fewster et al. 2009), that of P from the curvature of the likelihood, that of E(s) from the spread of group sizes. Intervals are log-normal, D/C to D·C with C = exp(t·√ln(1 + CV²)), t with Satterthwaite's degrees of freedom (Buckland et al. 2001). With one detection function for all strata, its uncertainty is shared by every stratum and counted once in the overall estimate.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="418"/>
+        <source>The intervals reported are bootstrap percentile intervals: {b} resamples drawn from the recorded seed, each taking as many transects or points per stratum as were surveyed, with replacement, refitting the chosen detection function and group size to their detections (AIC is not rerun). {f} resamples could not be fitted.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="427"/>
+        <source>Assumptions and cautions</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="428"/>
+        <source>The estimate is only as good as three things that happened in the field:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="431"/>
+        <source>Animals on the line are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="435"/>
+        <source>Animals at the point are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="438"/>
+        <source>Distances are measured accurately, with a rangefinder and compass where possible. Rounding to round numbers, or guessing, distorts the detection function; distance bands are then safer.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="441"/>
+        <source>Animals do not move before they are detected: animals fleeing from the observer look like a detection function that falls too early, and animals drawn to the observer like one that falls too late.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="445"/>
+        <source>The transects or points were placed at random (or on a randomly placed grid) with respect to the animals, and each stratum&apos;s estimate covers its polygons only: tracks and roads are not random lines.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="467"/>
+        <source>Density from detection distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="87"/>
+        <source>Naive occupancy from presence data</source>
+        <translation type="unfinished">Ocupación ingenua a partir de datos de presencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="87"/>
+        <source>Density and abundance estimate</source>
+        <translation type="unfinished">Estimación de la densidad y la abundancia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="106"/>
+        <source>proportion of units occupied (naive)</source>
+        <translation type="unfinished">proporción de unidades ocupadas (ingenua)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="106"/>
+        <source>occupied units</source>
+        <translation type="unfinished">unidades ocupadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="109"/>
+        <source>density per {unit}</source>
+        <translation type="unfinished">densidad por {unit}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="109"/>
+        <source>animals</source>
+        <translation type="unfinished">animales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="118"/>
+        <source>0 – {hi} (one-sided)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="124"/>
+        <source>estimated {what} in the frame</source>
+        <translation type="unfinished">estimación de {what} en el marco</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="128"/>
+        <source>units surveyed</source>
+        <translation type="unfinished">unidades muestreadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="131"/>
+        <source>true total of the simulated population</source>
+        <translation type="unfinished">total verdadero de la población simulada</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="137"/>
+        <source>covers</source>
+        <translation type="unfinished">contiene</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="137"/>
+        <source>misses</source>
+        <translation type="unfinished">no contiene</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="159"/>
+        <source>t with Satterthwaite degrees of freedom</source>
+        <translation type="unfinished">t con los grados de libertad de Satterthwaite</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="160"/>
+        <source>log-normal (with t)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="161"/>
+        <source>stratified percentile bootstrap</source>
+        <translation type="unfinished">bootstrap estratificado de percentiles</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="165"/>
+        <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
+        <translation type="unfinished">vecindario local (Stevens &amp; Olsen 2003)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="166"/>
+        <source>local neighbourhood, scaled to the simple formula (our variant)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="176"/>
+        <source>plus sampling (units count only inside their stratum)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="177"/>
+        <source>units kept wholly inside their stratum</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="178"/>
+        <source>no record: whole units</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="180"/>
+        <source>field {field} (m²)</source>
+        <translation type="unfinished">campo {field} (m²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="180"/>
+        <source>polygon area</source>
+        <translation type="unfinished">área del polígono</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="186"/>
+        <source>strip width</source>
+        <translation type="unfinished">ancho de franja</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="188"/>
+        <source>fixed</source>
+        <translation type="unfinished">fija</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="190"/>
+        <source>asked for; applied in strata {yes}, refused in {no} (units may overlap)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="197"/>
+        <source>Sample units</source>
+        <translation type="unfinished">Unidades de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="198"/>
+        <source>Count field</source>
+        <translation type="unfinished">Campo de conteo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="199"/>
+        <source> (presence/absence)</source>
+        <translation type="unfinished"> (presencia/ausencia)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="202"/>
+        <source>Unit area</source>
+        <translation type="unfinished">Área de la unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Interval</source>
+        <translation type="unfinished">Intervalo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="208"/>
+        <source>Variance estimator</source>
+        <translation type="unfinished">Estimador de la varianza</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="210"/>
+        <source>Edge protocol of the units</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="211"/>
+        <source>Detection probability p</source>
+        <translation type="unfinished">Probabilidad de detección p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="214"/>
+        <source>Target CV for the next survey</source>
+        <translation type="unfinished">CV objetivo para el próximo muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="222"/>
+        <source>not used (no random draws without the bootstrap)</source>
+        <translation type="unfinished">no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="232"/>
+        <source>Estimates by stratum</source>
+        <translation type="unfinished">Estimaciones por estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="236"/>
+        <source>Units (n)</source>
+        <translation type="unfinished">Unidades (n)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="237"/>
+        <source>Not surveyed</source>
+        <translation type="unfinished">No muestreadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="238"/>
+        <source>Mean count</source>
+        <translation type="unfinished">Conteo medio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="239"/>
+        <source>SD of counts</source>
+        <translation type="unfinished">DE de los conteos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="279"/>
+        <source>Occupied units</source>
+        <translation type="unfinished">Unidades ocupadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="279"/>
+        <source>Abundance</source>
+        <translation type="unfinished">Abundancia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="257"/>
+        <source>Units next time (n_next)</source>
+        <translation type="unfinished">Unidades la próxima vez (n_next)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="272"/>
+        <source>{what}, limits at {level}.</source>
+        <translation type="unfinished">{what}, límites al {level}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="279"/>
+        <source>{what} in the frame, limits at {level}.</source>
+        <translation type="unfinished">{what} en el marco, límites al {level}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="308"/>
+        <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
+        <translation type="unfinished">No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="314"/>
+        <source>{n} unused reserve unit(s) without a count were skipped.</source>
+        <translation type="unfinished">Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="324"/>
+        <source>The overall interval by method</source>
+        <translation type="unfinished">El intervalo global según el método</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Used in the outputs</source>
+        <translation type="unfinished">Usado en las salidas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>overall abundance in a resample</source>
+        <translation type="unfinished">abundancia global en un remuestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>resamples</source>
+        <translation type="unfinished">remuestreos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>{level} percentile limits</source>
+        <translation type="unfinished">límites de percentiles al {level}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>The {n:,} bootstrap resamples of the overall abundance</source>
+        <translation type="unfinished">Los {n:,} remuestreos bootstrap de la abundancia global</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="378"/>
+        <source>true density (simulation)</source>
+        <translation type="unfinished">densidad verdadera (simulación)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="388"/>
+        <source>{what} by stratum with {level} confidence intervals</source>
+        <translation type="unfinished">{what} por estrato con intervalos de confianza al {level}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="403"/>
+        <source>lowest</source>
+        <translation type="unfinished">mínimo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="403"/>
+        <source>highest</source>
+        <translation type="unfinished">máximo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="414"/>
+        <source>surveyed units</source>
+        <translation type="unfinished">unidades muestreadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="424"/>
+        <source>not surveyed</source>
+        <translation type="unfinished">no muestreadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="433"/>
+        <source>Strata shaded by {what}, with the units</source>
+        <translation type="unfinished">Estratos sombreados según {what}, con las unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="600"/>
+        <source>Cautions</source>
+        <translation type="unfinished">Precauciones</translation>
+    </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
@@ -5408,54 +7582,134 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
 <context>
     <name>SimulateCounts</name>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="29"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="42"/>
         <source>Simulate counts in sample units</source>
         <translation>Simular conteos en las unidades de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="32"/>
         <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-        <translation>&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
+        <translation type="obsolete">&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="50"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="88"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="51"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="89"/>
         <source>Animal points</source>
         <translation>Puntos de animales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="52"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="90"/>
         <source>Detection probability</source>
         <translation>Probabilidad de detección</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="58"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="96"/>
         <source>Count reserve units too</source>
         <translation>Contar también las unidades de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="62"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="106"/>
         <source>Units with simulated counts</source>
         <translation>Unidades con conteos simulados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="81"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="200"/>
         <source>has no geometry</source>
         <translation>no tiene geometría</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="86"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="205"/>
         <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
         <translation>Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="181"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="45"/>
+        <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Strata&lt;/b&gt; (optional, with their id field): each unit counts only the animals inside its own stratum (matched by the units&apos; &lt;i&gt;stratum&lt;/i&gt; field; without an id field, inside the strata), the rule of plus sampling, the layout&apos;s default at the edges (Gregoire &amp;amp; Valentine 2008, ch. 10). Give the strata the units were laid out on.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="64"/>
+        <source>&lt;p&gt;Distances (for the distance density algorithm):&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Detection function&lt;/b&gt;: none (the detection probability above, the same at every distance), or half-normal g(x) = exp(−x²/2σ²) or hazard-rate g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), for line transects and point stations. Each animal within the maximum distance of a unit is then seen with probability p·g(x), x its perpendicular distance to the line or its distance to the point, p the detection probability above (1: animals on the line are always seen, as distance sampling assumes).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Scale σ (m)&lt;/b&gt; and &lt;b&gt;hazard-rate shape b&lt;/b&gt; of the detection function.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Maximum distance (m)&lt;/b&gt;: animals farther than this from the line or point are not counted; 0 takes the distance where g falls to 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Group size field&lt;/b&gt; of the animal points (optional): each point is then a group of that many animals; otherwise each point is one animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observations&lt;/b&gt; (optional, with a detection function): one point per sighting at the animal's position, with &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) and &lt;i&gt;size&lt;/i&gt;, ready for the distance density algorithm.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;With a detection function, &lt;i&gt;present&lt;/i&gt; counts the animals within the maximum distance, and the strata are not used: a line or point sees the animals within the maximum distance on both sides of a stratum edge, as observers do.&lt;/p&gt;&lt;p&gt;Reference: Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="100"/>
+        <source>Strata: count only inside each unit&apos;s stratum (plus sampling)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="103"/>
+        <source>Stratum id field of the strata</source>
+        <translation type="unfinished">Campo identificador de los estratos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>Detection function (line transects and point stations)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>None: the same detection probability at every distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>Half-normal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>Hazard-rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="111"/>
+        <source>Scale σ of the detection function (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="114"/>
+        <source>Shape b of the hazard-rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="117"/>
+        <source>Maximum distance from the line or point (m; 0: where g falls to 1 %)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="120"/>
+        <source>Group size field of the animal points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="123"/>
+        <source>Observations with distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="249"/>
+        <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="262"/>
+        <source>Animals within {w:.1f} m of the lines or points are counted.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="285"/>
+        <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>

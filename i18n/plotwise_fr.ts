@@ -4,7 +4,7 @@
 <context>
     <name>Allocate</name>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="56"/>
+        <location filename="../processing/algorithms/allocate.py" line="59"/>
         <source>Allocate effort to strata</source>
         <translation>Répartir l'effort entre les strates</translation>
     </message>
@@ -23,7 +23,7 @@ SD field: the pilot standard deviation of counts per unit. Without it the covari
 Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
 
 Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-        <translation>Décide combien d'unités d'échantillonnage reçoit chaque strate, et montre à l'avance la précision qu'elles apportent.
+        <translation type="obsolete">Décide combien d'unités d'échantillonnage reçoit chaque strate, et montre à l'avance la précision qu'elles apportent.
 
 Méthodes : égale ; proportionnelle à la surface de la strate ; Neyman, n_h ∝ A_h·S_h (Neyman 1934 ; Cochran 1977, ch. 5) ; optimale avec coût, n_h ∝ A_h·S_h/√c_h, sous un budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
 
@@ -38,414 +38,458 @@ Champ de moyenne : le comptage moyen pilote par unité, nécessaire aux CV et à
 Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité de la strate), et un rapport comparant les allocations égale, proportionnelle et de Neyman pour le même total.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="83"/>
+        <location filename="../processing/algorithms/allocate.py" line="90"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="86"/>
+        <location filename="../processing/algorithms/allocate.py" line="93"/>
         <source>Stratum identifier field</source>
         <translation>Champ d'identifiant de strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="92"/>
+        <location filename="../processing/algorithms/allocate.py" line="99"/>
         <source>Stratum area field (hectares; empty: polygon area)</source>
         <translation>Champ de surface de la strate (hectares ; vide : surface du polygone)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <location filename="../processing/algorithms/allocate.py" line="105"/>
         <source>Pilot SD of counts per unit</source>
         <translation>Écart-type pilote des comptages par unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <location filename="../processing/algorithms/allocate.py" line="105"/>
         <source>Pilot mean count per unit</source>
         <translation>Comptage moyen pilote par unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="98"/>
+        <location filename="../processing/algorithms/allocate.py" line="105"/>
         <source>Cost per unit</source>
         <translation>Coût par unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="106"/>
+        <location filename="../processing/algorithms/allocate.py" line="113"/>
         <source>Costs are field days</source>
         <translation>Les coûts sont des jours de terrain</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="109"/>
+        <location filename="../processing/algorithms/allocate.py" line="116"/>
         <source>Fixed cost of the survey (c0, in the cost unit)</source>
         <translation>Coût fixe de l'inventaire (c0, dans l'unité de coût)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Allocation method</source>
         <translation>Méthode d'allocation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Equal</source>
         <translation>Égale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Proportional to area</source>
         <translation>Proportionnelle à la surface</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
         <source>Neyman</source>
         <translation>Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="115"/>
+        <location filename="../processing/algorithms/allocate.py" line="122"/>
         <source>Optimal with cost</source>
         <translation>Optimale avec coût</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="123"/>
+        <location filename="../processing/algorithms/allocate.py" line="130"/>
         <source>Total number of units</source>
         <translation>Nombre total d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="128"/>
+        <location filename="../processing/algorithms/allocate.py" line="135"/>
         <source>Budget (0: not used; needs the cost field)</source>
         <translation>Budget (0 : non utilisé ; nécessite le champ de coût)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="134"/>
+        <location filename="../processing/algorithms/allocate.py" line="141"/>
         <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
         <translation>CV cible de la densité globale (0 : non utilisé ; p. ex. 0.2)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="140"/>
+        <location filename="../processing/algorithms/allocate.py" line="147"/>
         <source>Area of one sample unit (m²)</source>
         <translation>Surface d'une unité d'échantillonnage (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
+        <location filename="../processing/algorithms/allocate.py" line="153"/>
         <source>Minimum units per stratum</source>
         <translation>Nombre minimal d'unités par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="152"/>
+        <location filename="../processing/algorithms/allocate.py" line="167"/>
         <source>Strata with allocation</source>
         <translation>Strates avec allocation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="154"/>
+        <location filename="../processing/algorithms/allocate.py" line="169"/>
         <source>Expected CV of the overall density</source>
         <translation>CV attendu de la densité globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="160"/>
+        <location filename="../processing/algorithms/allocate.py" line="175"/>
         <source>The strata layer could not be opened.</source>
         <translation>La couche des strates n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="175"/>
+        <location filename="../processing/algorithms/allocate.py" line="190"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
         <translation>La couche « {layer} » n'a pas de champ « {field} » : les surfaces des polygones sont utilisées.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="187"/>
+        <location filename="../processing/algorithms/allocate.py" line="202"/>
         <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
         <translation>La couche « {layer} » n'a aucune strate ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="202"/>
+        <location filename="../processing/algorithms/allocate.py" line="217"/>
         <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
         <translation>champ « {name} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="216"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
         <translation>Pas de champ d'écart-type pilote : l'écart-type de la covariable (« {field} ») sert de substitut. Cela suppose que les comptages suivent la covariable ; remplacez-le par l'écart-type d'un inventaire pilote dès que vous en avez un. Les erreurs types attendues sont alors dans les unités de la covariable, pas en comptages.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>polygon area</source>
         <translation>surface du polygone</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>pilot SD</source>
         <translation>écart-type pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>pilot mean</source>
         <translation>moyenne pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <location filename="../processing/algorithms/allocate.py" line="240"/>
         <source>cost</source>
         <translation>coût</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="259"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>The output layer could not be created.</source>
         <translation>La couche de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="269"/>
+        <location filename="../processing/algorithms/allocate.py" line="286"/>
         <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
         <translation>{total} unités allouées ({method}) ; CV attendu de la densité globale : {cv}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <location filename="../processing/algorithms/allocate.py" line="299"/>
         <source>equal</source>
         <translation>égale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="282"/>
+        <location filename="../processing/algorithms/allocate.py" line="299"/>
         <source>proportional to area</source>
         <translation>proportionnelle à la surface</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="283"/>
+        <location filename="../processing/algorithms/allocate.py" line="300"/>
         <source>optimal with cost</source>
         <translation>optimale avec coût</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="293"/>
         <source>Allocation of survey effort</source>
-        <translation>Allocation de l'effort d'inventaire</translation>
+        <translation type="obsolete">Allocation de l'effort d'inventaire</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="295"/>
         <source>field days</source>
-        <translation>jours de terrain</translation>
+        <translation type="obsolete">jours de terrain</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="295"/>
         <source>cost units</source>
-        <translation>unités de coût</translation>
+        <translation type="obsolete">unités de coût</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="296"/>
         <source>units in total</source>
-        <translation>unités au total</translation>
+        <translation type="obsolete">unités au total</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="296"/>
         <source>method</source>
-        <translation>méthode</translation>
+        <translation type="obsolete">méthode</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="298"/>
         <source>expected CV of the overall density</source>
-        <translation>CV attendu de la densité globale</translation>
+        <translation type="obsolete">CV attendu de la densité globale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="300"/>
         <source>field days needed</source>
-        <translation>jours de terrain nécessaires</translation>
+        <translation type="obsolete">jours de terrain nécessaires</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="302"/>
         <source>a total number of units</source>
-        <translation>un nombre total d'unités</translation>
+        <translation type="obsolete">un nombre total d'unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="302"/>
         <source>a budget</source>
-        <translation>un budget</translation>
+        <translation type="obsolete">un budget</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="302"/>
         <source>a target CV</source>
-        <translation>un CV cible</translation>
+        <translation type="obsolete">un CV cible</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Strata layer</source>
-        <translation>Couche des strates</translation>
+        <translation type="obsolete">Couche des strates</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Computation CRS</source>
-        <translation>SCR de calcul</translation>
+        <translation type="obsolete">SCR de calcul</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Method asked for</source>
-        <translation>Méthode demandée</translation>
+        <translation type="obsolete">Méthode demandée</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Method applied</source>
-        <translation>Méthode appliquée</translation>
+        <translation type="obsolete">Méthode appliquée</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Target</source>
-        <translation>Objectif</translation>
+        <translation type="obsolete">Objectif</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Total asked for</source>
-        <translation>Total demandé</translation>
+        <translation type="obsolete">Total demandé</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Budget</source>
-        <translation>Budget</translation>
+        <translation type="obsolete">Budget</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Target CV</source>
-        <translation>CV cible</translation>
+        <translation type="obsolete">CV cible</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Unit area (m²)</source>
-        <translation>Surface d'une unité (m²)</translation>
+        <translation type="obsolete">Surface d'une unité (m²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>SD field</source>
-        <translation>Champ d'écart-type</translation>
+        <translation type="obsolete">Champ d'écart-type</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source> (covariate proxy)</source>
-        <translation> (substitut par la covariable)</translation>
+        <translation type="obsolete"> (substitut par la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Mean field</source>
-        <translation>Champ de moyenne</translation>
+        <translation type="obsolete">Champ de moyenne</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Cost field</source>
-        <translation>Champ de coût</translation>
+        <translation type="obsolete">Champ de coût</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="303"/>
         <source>Fixed cost c0</source>
-        <translation>Coût fixe c0</translation>
+        <translation type="obsolete">Coût fixe c0</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="321"/>
         <source>Units per stratum</source>
-        <translation>Unités par strate</translation>
+        <translation type="obsolete">Unités par strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="322"/>
         <source>SE of mean per unit (covariate units)</source>
-        <translation>Erreur type de la moyenne par unité (unités de la covariable)</translation>
+        <translation type="obsolete">Erreur type de la moyenne par unité (unités de la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="322"/>
         <source>SE of mean count per unit</source>
-        <translation>Erreur type du comptage moyen par unité</translation>
+        <translation type="obsolete">Erreur type du comptage moyen par unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Stratum</source>
-        <translation>Strate</translation>
+        <translation type="obsolete">Strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Units that fit</source>
-        <translation>Unités qui y tiennent</translation>
+        <translation type="obsolete">Unités qui y tiennent</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Lower bound</source>
-        <translation>Borne inférieure</translation>
+        <translation type="obsolete">Borne inférieure</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="323"/>
         <source>Share before rounding</source>
-        <translation>Part avant arrondi</translation>
+        <translation type="obsolete">Part avant arrondi</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="324"/>
         <source>Units (n_alloc)</source>
-        <translation>Unités (n_alloc)</translation>
+        <translation type="obsolete">Unités (n_alloc)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="324"/>
         <source>Sampling fraction</source>
-        <translation>Fraction d'échantillonnage</translation>
+        <translation type="obsolete">Fraction d'échantillonnage</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="328"/>
         <source>SE of density (per km²)</source>
-        <translation>Erreur type de la densité (par km²)</translation>
+        <translation type="obsolete">Erreur type de la densité (par km²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="330"/>
         <source>Expected CV (exp_cv)</source>
-        <translation>CV attendu (exp_cv)</translation>
+        <translation type="obsolete">CV attendu (exp_cv)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="342"/>
         <source>all strata</source>
-        <translation>toutes les strates</translation>
+        <translation type="obsolete">toutes les strates</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="352"/>
         <source>units per stratum</source>
-        <translation>unités par strate</translation>
+        <translation type="obsolete">unités par strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="352"/>
         <source>Units allocated to each stratum</source>
-        <translation>Unités allouées à chaque strate</translation>
+        <translation type="obsolete">Unités allouées à chaque strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="356"/>
         <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-        <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
+        <translation type="obsolete">La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="361"/>
         <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-        <translation>{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+        <translation type="obsolete">{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="361"/>
         <source>Field days needed</source>
-        <translation>Jours de terrain nécessaires</translation>
+        <translation type="obsolete">Jours de terrain nécessaires</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="361"/>
         <source>Cost of the design</source>
-        <translation>Coût du plan</translation>
+        <translation type="obsolete">Coût du plan</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="368"/>
         <source>What the choice of method buys, at {n} units</source>
-        <translation>Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
+        <translation type="obsolete">Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="369"/>
         <source>Method</source>
-        <translation>Méthode</translation>
+        <translation type="obsolete">Méthode</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="369"/>
         <source>stratum {label}</source>
-        <translation>strate {label}</translation>
+        <translation type="obsolete">strate {label}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="371"/>
         <source>Variance relative to the applied allocation</source>
-        <translation>Variance relative à l'allocation appliquée</translation>
+        <translation type="obsolete">Variance relative à l'allocation appliquée</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="373"/>
         <source>Expected CV</source>
-        <translation>CV attendu</translation>
+        <translation type="obsolete">CV attendu</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="384"/>
         <source>Without standard deviations the precision of the designs cannot be compared.</source>
-        <translation>Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
+        <translation type="obsolete">Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="62"/>
+        <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
+
+Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
+
+Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall density meets it; else a budget (if above 0, needs the cost field); else the total number of units.
+
+Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches a bound keeps it and the rest is shared among the others, until stable. Whole units are rounded by largest remainder, keeping the total.
+
+Area field: the stratum area in hectares (default area_ha, as written by the stratification); when it is empty or missing, the polygon area is used.
+SD field: the pilot standard deviation of counts per unit. Without it the covariate SD (cov_sd) is used as a proxy, which assumes that counts scale with the covariate; without either, the allocation is proportional.
+Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
+
+Layout to come: the finite-population correction 1 − n·a/A is used only when the units will not overlap (systematic grid, spatially balanced, or simple random with a minimum spacing of at least the unit's width); simple random centres without one may overlap, a continuous population with no such correction (Cordy 1993). plotwise:estimate applies the same rule.
+
+Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Layout to come (decides the finite-population correction)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Simple random (units may overlap: no correction)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Simple random with a minimum spacing of at least the unit&apos;s width</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Systematic grid</source>
+        <translation type="unfinished">Grille systématique</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <source>Spatially balanced</source>
+        <translation type="unfinished">Spatialement équilibré</translation>
     </message>
 </context>
 <context>
@@ -771,7 +815,7 @@ Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclu
 <context>
     <name>CompareDesigns</name>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="80"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="61"/>
         <source>Compare survey designs by simulation</source>
         <translation>Comparer des plans d'inventaire par simulation</translation>
     </message>
@@ -792,7 +836,7 @@ Output table, one row per design: rel_bias (relative bias against each populatio
 Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
 
 The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation>Avant le terrain : quel plan, et combien d'unités, donnent une estimation utilisable sur cette zone ? L'algorithme simule de nombreux inventaires d'une surface de densité plausible et indique comment chaque plan s'en est sorti.
+        <translation type="obsolete">Avant le terrain : quel plan, et combien d'unités, donnent une estimation utilisable sur cette zone ? L'algorithme simule de nombreux inventaires d'une surface de densité plausible et indique comment chaque plan s'en est sorti.
 
 Surface : un raster d'animaux attendus par km² (issu d'un modèle d'habitat, d'une carte d'expert ou d'un inventaire antérieur), reprojeté dans le SCR de la base si nécessaire. Base : la base de sondage. Strates (facultatives, avec le champ de strate, 'stratum' par défaut) : nécessaires aux deux plans stratifiés.
 
@@ -809,579 +853,618 @@ Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparais
 La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="123"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="110"/>
         <source>Density surface (expected animals per km²)</source>
         <translation>Surface de densité (animaux attendus par km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="373"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="127"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="114"/>
         <source>Strata (for the stratified designs)</source>
         <translation>Strates (pour les plans stratifiés)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="119"/>
         <source>Stratum field</source>
         <translation>Champ de strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Designs to compare</source>
         <translation>Plans à comparer</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Simple random</source>
         <translation>Aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Stratified, proportional allocation</source>
         <translation>Stratifié, allocation proportionnelle</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
         <source>Stratified, Neyman allocation</source>
-        <translation>Stratifié, allocation de Neyman</translation>
+        <translation type="obsolete">Stratifié, allocation de Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="383"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="133"/>
         <source>Number of units</source>
         <translation>Nombre d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Unit shape</source>
         <translation>Forme de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Point station</source>
         <translation>Station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Square plot</source>
         <translation>Placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Circular plot</source>
         <translation>Placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="150"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
         <source>Line transect</source>
         <translation>Transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="145"/>
         <source>Unit size (m): counting radius, side, radius or transect length</source>
         <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="151"/>
         <source>Half-width of a transect&apos;s counting strip (m)</source>
         <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
         <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
         <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
         <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
         <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="384"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
         <source>Simulated surveys per design</source>
         <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="187"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
         <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
         <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Variance estimator for the grid and balanced designs</source>
         <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Simple random sampling formula</source>
         <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="193"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="200"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="189"/>
         <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
         <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="207"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="201"/>
         <source>Design comparison</source>
         <translation>Comparaison des plans</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="205"/>
         <source>Recommended design</source>
         <translation>Plan recommandé</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="217"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
         <source>The density surface could not be opened.</source>
         <translation>La surface de densité n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="214"/>
         <source>The sampling frame could not be opened.</source>
         <translation>La base de sondage n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="225"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="219"/>
         <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="233"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
         <translation>La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="244"/>
         <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
         <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="261"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="255"/>
         <source>No strata were given: the stratified designs are left out ({names}).</source>
         <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="265"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="259"/>
         <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
         <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="277"/>
         <source>Reading the density surface…</source>
         <translation>Chargement de la surface de densité…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="289"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
         <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
         <translation>La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="308"/>
         <source>Simulating {n} units…</source>
         <translation>Simulation avec {n} unités…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="320"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
         <source>{n} units were left out of the range: {why}</source>
         <translation>{n} unités ont été retirées de la gamme : {why}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="327"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="321"/>
         <source>The output table could not be created.</source>
         <translation>La table de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="344"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="340"/>
         <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
         <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="352"/>
         <source>Survey designs compared by simulation</source>
-        <translation>Plans d'inventaire comparés par simulation</translation>
+        <translation type="obsolete">Plans d'inventaire comparés par simulation</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="358"/>
         <source>recommended design</source>
-        <translation>plan recommandé</translation>
+        <translation type="obsolete">plan recommandé</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
         <source>its RMSE (animals)</source>
-        <translation>sa REQM (animaux)</translation>
+        <translation type="obsolete">sa REQM (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="360"/>
         <source>its RMSE relative to the total</source>
-        <translation>sa REQM relative au total</translation>
+        <translation type="obsolete">sa REQM relative au total</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="361"/>
         <source>its 95 % interval coverage</source>
-        <translation>couverture de ses intervalles à 95 %</translation>
+        <translation type="obsolete">couverture de ses intervalles à 95 %</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="363"/>
         <source>expected animals in the frame</source>
-        <translation>animaux attendus dans la base de sondage</translation>
+        <translation type="obsolete">animaux attendus dans la base de sondage</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>point station</source>
-        <translation>station ponctuelle</translation>
+        <translation type="obsolete">station ponctuelle</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>square plot</source>
-        <translation>placette carrée</translation>
+        <translation type="obsolete">placette carrée</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>circular plot</source>
-        <translation>placette circulaire</translation>
+        <translation type="obsolete">placette circulaire</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>line transect</source>
-        <translation>transect linéaire</translation>
+        <translation type="obsolete">transect linéaire</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>counting radius</source>
-        <translation>rayon de comptage</translation>
+        <translation type="obsolete">rayon de comptage</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>side</source>
-        <translation>côté</translation>
+        <translation type="obsolete">côté</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>radius</source>
-        <translation>rayon</translation>
+        <translation type="obsolete">rayon</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
         <source>length</source>
-        <translation>longueur</translation>
+        <translation type="obsolete">longueur</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="370"/>
         <source>, strip half-width {w:g} m</source>
-        <translation>, demi-largeur de bande {w:g} m</translation>
+        <translation type="obsolete">, demi-largeur de bande {w:g} m</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="372"/>
         <source>Density surface</source>
-        <translation>Surface de densité</translation>
+        <translation type="obsolete">Surface de densité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="474"/>
         <source>Strata</source>
-        <translation>Strates</translation>
+        <translation type="obsolete">Strates</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
         <source>none</source>
-        <translation>aucune</translation>
+        <translation type="obsolete">aucune</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
         <source>feature id</source>
-        <translation>identifiant d'entité</translation>
+        <translation type="obsolete">identifiant d'entité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="376"/>
         <source>Computation CRS</source>
-        <translation>SCR de calcul</translation>
+        <translation type="obsolete">SCR de calcul</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="377"/>
         <source>Surface cell</source>
-        <translation>Cellule de la surface</translation>
+        <translation type="obsolete">Cellule de la surface</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="378"/>
         <source>Sub-cells per cell side (for counting)</source>
-        <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
+        <translation type="obsolete">Sous-cellules par côté de cellule (pour le comptage)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="379"/>
         <source>Unit</source>
-        <translation>Unité</translation>
+        <translation type="obsolete">Unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="380"/>
         <source>Counted area per unit (m²)</source>
-        <translation>Surface comptée par unité (m²)</translation>
+        <translation type="obsolete">Surface comptée par unité (m²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
         <source>Bearing</source>
-        <translation>Azimut</translation>
+        <translation type="obsolete">Azimut</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
         <source>random</source>
-        <translation>aléatoire</translation>
+        <translation type="obsolete">aléatoire</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
         <source>Units wholly inside their stratum</source>
-        <translation>Unités entièrement dans leur strate</translation>
+        <translation type="obsolete">Unités entièrement dans leur strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
         <source>yes</source>
-        <translation>oui</translation>
+        <translation type="obsolete">oui</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
         <source>no</source>
-        <translation>non</translation>
+        <translation type="obsolete">non</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
         <source>Counts per cell</source>
-        <translation>Comptages par cellule</translation>
+        <translation type="obsolete">Comptages par cellule</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
         <source>negative binomial, k = {k:g}</source>
-        <translation>binomiale négative, k = {k:g}</translation>
+        <translation type="obsolete">binomiale négative, k = {k:g}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
         <source>Poisson</source>
-        <translation>Poisson</translation>
+        <translation type="obsolete">Poisson</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
         <source>Variance estimator (grid, balanced)</source>
-        <translation>Estimateur de variance (grille, équilibré)</translation>
+        <translation type="obsolete">Estimateur de variance (grille, équilibré)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
         <source>local neighbourhood</source>
-        <translation>voisinage local</translation>
+        <translation type="obsolete">voisinage local</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
         <source>simple random sampling formula</source>
-        <translation>formule de l'échantillonnage aléatoire simple</translation>
+        <translation type="obsolete">formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="389"/>
         <source>Confidence level</source>
-        <translation>Niveau de confiance</translation>
+        <translation type="obsolete">Niveau de confiance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="390"/>
         <source>Seed</source>
-        <translation>Graine</translation>
+        <translation type="obsolete">Graine</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="395"/>
         <source>How the designs did at {n} units</source>
-        <translation>Résultats des plans pour {n} unités</translation>
+        <translation type="obsolete">Résultats des plans pour {n} unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Design</source>
-        <translation>Plan</translation>
+        <translation type="obsolete">Plan</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Mean units surveyed</source>
-        <translation>Unités inventoriées en moyenne</translation>
+        <translation type="obsolete">Unités inventoriées en moyenne</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Relative bias</source>
-        <translation>Biais relatif</translation>
+        <translation type="obsolete">Biais relatif</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
         <source>Empirical SE (animals)</source>
-        <translation>Erreur type empirique (animaux)</translation>
+        <translation type="obsolete">Erreur type empirique (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="510"/>
         <source>RMSE (animals)</source>
-        <translation>REQM (animaux)</translation>
+        <translation type="obsolete">REQM (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
         <source>± Monte Carlo SE</source>
-        <translation>± erreur type de Monte-Carlo</translation>
+        <translation type="obsolete">± erreur type de Monte-Carlo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
         <source>RMSE / total</source>
-        <translation>REQM / total</translation>
+        <translation type="obsolete">REQM / total</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
         <source>Mean estimated CV</source>
-        <translation>CV estimé moyen</translation>
+        <translation type="obsolete">CV estimé moyen</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
         <source>95 % interval coverage</source>
-        <translation>Couverture des intervalles à 95 %</translation>
+        <translation type="obsolete">Couverture des intervalles à 95 %</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
         <source>Surveys without an estimate</source>
-        <translation>Inventaires sans estimation</translation>
+        <translation type="obsolete">Inventaires sans estimation</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="410"/>
         <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-        <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
+        <translation type="obsolete">Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
         <source>RMSE of the abundance (animals)</source>
-        <translation>REQM de l'abondance (animaux)</translation>
+        <translation type="obsolete">REQM de l'abondance (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
         <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-        <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
+        <translation type="obsolete">Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="421"/>
         <source>Recommendation</source>
-        <translation>Recommandation</translation>
+        <translation type="obsolete">Recommandation</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="423"/>
         <source>No design gave estimates: see the warnings.</source>
-        <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
+        <translation type="obsolete">Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="425"/>
         <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-        <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
+        <translation type="obsolete">{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="431"/>
         <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-        <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
+        <translation type="obsolete">{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="438"/>
         <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-        <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
+        <translation type="obsolete">Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="443"/>
         <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-        <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
+        <translation type="obsolete">Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="452"/>
         <source>How the simulation works</source>
-        <translation>Fonctionnement de la simulation</translation>
+        <translation type="obsolete">Fonctionnement de la simulation</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="453"/>
         <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-        <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
+        <translation type="obsolete">Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="462"/>
         <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-        <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
+        <translation type="obsolete">Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>Stratum</source>
-        <translation>Strate</translation>
+        <translation type="obsolete">Strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>Area (km²)</source>
-        <translation>Surface (km²)</translation>
+        <translation type="obsolete">Surface (km²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>Mean expected count per unit</source>
-        <translation>Comptage attendu moyen par unité</translation>
+        <translation type="obsolete">Comptage attendu moyen par unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
         <source>S_h (count SD per unit)</source>
-        <translation>S_h (écart-type du comptage par unité)</translation>
+        <translation type="obsolete">S_h (écart-type du comptage par unité)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="479"/>
         <source>Units, proportional</source>
-        <translation>Unités, proportionnelle</translation>
+        <translation type="obsolete">Unités, proportionnelle</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="481"/>
         <source>Units, Neyman</source>
-        <translation>Unités, Neyman</translation>
+        <translation type="obsolete">Unités, Neyman</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="491"/>
         <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-        <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
+        <translation type="obsolete">S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="498"/>
         <source>RMSE against the number of units</source>
-        <translation>REQM en fonction du nombre d'unités</translation>
+        <translation type="obsolete">REQM en fonction du nombre d'unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
         <source>number of units</source>
-        <translation>nombre d'unités</translation>
+        <translation type="obsolete">nombre d'unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
         <source>RMSE of the abundance estimate against the number of units</source>
-        <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
+        <translation type="obsolete">REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="508"/>
         <source>Units</source>
-        <translation>Unités</translation>
+        <translation type="obsolete">Unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="516"/>
         <source>{a} → {b} units: RMSE {change:+.0%}</source>
-        <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
+        <translation type="obsolete">{a} → {b} unités : REQM {change:+.0%}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="517"/>
         <source>For {name}: </source>
-        <translation>Pour {name} : </translation>
+        <translation type="obsolete">Pour {name} : </translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="518"/>
         <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-        <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
+        <translation type="obsolete">La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="68"/>
+        <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
+
+Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
+
+Each replicate realises a population: Poisson counts in every surface cell, or with an overdispersion k above 0 negative binomial counts (gamma-Poisson, variance μ + μ²/k per cell). Every chosen design is then laid out with the layout engine, its units count the animals in the cells they cover (the part inside the frame or their stratum), and the abundance is estimated with the estimation engine (ratio estimator, t interval with Satterthwaite df; Cochran 1977). All designs survey the same populations, so their differences are not blurred.
+
+Designs: simple random; stratified with proportional allocation; stratified with Neyman allocation, n_h ∝ A_h·S_h with S_h the SD of a unit's count implied by the surface (Neyman 1934): the best case, since no survey knows the true S_h; systematic grid with a random start (its n varies); spatially balanced (balanced acceptance sampling, Robertson et al. 2013); stratified Neyman from a pilot: in every simulated survey S_h is estimated from a pilot of the given number of simple random units per stratum (of an independent realisation, a pilot season), as a real survey would estimate it.
+
+Units: point station (size = counting radius), square plot (side), circular plot (radius), line transect (length, counting a strip of the given half-width on each side). Bearing in degrees clockwise from grid north, −1 random (the default: a grid aligned with straight edges puts whole rows in the edge band at once). Edges follow the layout's protocol: by default plus sampling, with centres over each stratum (or the frame) grown by the unit's reach, each unit counting only the cells of its own stratum with its nominal area, and the estimate expanding to the grown area (Gregoire &amp; Valentine 2008, ch. 10); with keep units inside, centres from each stratum shrunk by the unit's radius, as the layout's option does.
+
+Output table, one row per design: rel_bias (relative bias against each population's true total), emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % intervals holding the truth), mean_n (mean units surveyed), alloc (units per stratum), recommend (1 for the recommended design: the lowest RMSE among designs whose intervals cover at least 90 %).
+
+Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
+
+The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <source>Stratified, Neyman allocation with the true S_h (best case)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <source>Stratified, Neyman allocation from a pilot survey</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/comparedesigns.py" line="195"/>
+        <source>Pilot units per stratum for the pilot-based Neyman design</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>
@@ -1563,9 +1646,326 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
     </message>
 </context>
 <context>
+    <name>DistanceDensity</name>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="86"/>
+        <source>Density from detection distances (line and point transects)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="89"/>
+        <source>Estimates density and abundance per stratum and for the frame from the distances at which animals (or groups) were seen from line transects or point stations. A detection function fitted to the distances gives the probability of seeing an animal, so the estimate needs no detection probability typed in by hand (Buckland et al. 2001).
+
+Transects or points: the units from the layout (line transects or point stations), with their id field (unit_id) and stratum field (stratum). Line length comes from the geometry; a visits field gives the visits to each point (empty or 0: not surveyed). Every surveyed unit counts, also those with no detection. Units whose role is 'reserve' are left out unless an observation names them; set the role of a surveyed reserve that saw nothing to 'primary'.
+
+Observations: a table or point layer with one row per detection: the unit id, the distance in m (perpendicular to the line for line transects, from the point for point transects) and, optionally, the group size (empty field: each detection is one animal). A negative or missing distance, a group size not above 0, or a unit id the units layer does not have stops the run, naming the observations.
+
+Survey type: line or point transects. Truncation distance (m): detections farther away are left out; 0 drops the farthest 5 % (common practice). Distance bands (m, optional, e.g. 0, 10, 25, 50, 100): for surveys that record bands; the fit then uses the counts per band, and the last edge is the truncation distance.
+
+Key functions: half-normal, hazard-rate and uniform; each is fitted alone, then with cosine terms added one at a time while AIC improves (at most the number given), under the constraint that detection never rises with distance. The model with the smallest AIC is used; the models table lists every model tried with its AIC, the difference to the best, the detection probability, the effective strip half-width (lines) or effective detection radius (points) and goodness-of-fit p-values (χ² on distance bands; Cramér–von Mises on exact distances).
+
+Group size: the mean size of the detected groups, or the size-bias regression of ln(size) on the detection probability when larger groups are seen farther away (automatic: when the slope is negative at p &lt; 0.15, common practice).
+
+One detection function per stratum (option): each stratum then needs at least 20 detections (60 to 80 advised, common practice); otherwise one function serves all strata.
+
+Density: D = n·E(s) / (2wL·P) for lines and n·E(s) / (kπw²·P) for points. Variance by the delta method: the encounter rate's variance between transects within each stratum (estimator R2 of Fewster et al. 2009), the detection function's from its likelihood, the group size's from the sizes; Satterthwaite's degrees of freedom and a log-normal interval with t (Buckland et al. 2001). Bootstrap resamples (0: none) resample transects or points within strata and refit the chosen model, seeded; the outputs then carry the bootstrap's percentile interval.
+
+Strata: polygons with an id field matching the units' stratum field; their areas define the frame (as in the estimate algorithm). Every stratum needs at least two surveyed units. At least 20 detections within the truncation distance are needed (an error names the count), 60 are advised (a warning).
+
+Confidence level of the intervals; area unit of the results (km² or hectares); random seed, used by the bootstrap only (0 draws one and records it); most cosine terms per key function (0: the keys alone).
+
+Outputs: the strata with stratum, area, n_units (transects or points), effort (km of line, or point visits), n_det (detections within the truncation distance), p_det (detection probability within it), esw (effective strip half-width for lines, effective detection radius for points, m), dens, abund with their SE, limits and CV, and df; a models table (model, n_par, aic, delta_aic, p_det, esw, gof_p, chosen, then stratum, n_det, chisq_p, cvm_p); an HTML report (histogram of the distances with the fitted function, models, estimates, map, assumptions); and the overall numbers for models.
+
+References: Buckland, S. T. et al. (2001) Introduction to Distance Sampling, Oxford University Press. Fewster, R. M. et al. (2009) Biometrics 65:225–236.
+
+Field safety: distance sampling sends observers along lines and to points. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="148"/>
+        <source>Transects or points surveyed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="150"/>
+        <source>Unit id field</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="152"/>
+        <source>Stratum field of the units</source>
+        <translation type="unfinished">Champ de strate des unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="155"/>
+        <source>Observations (one row per detection)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="157"/>
+        <source>Unit id field of the observations</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="160"/>
+        <source>Distance field (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="163"/>
+        <source>Group size field (empty: each detection is one animal)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="166"/>
+        <source>Survey type</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="166"/>
+        <source>Line transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="166"/>
+        <source>Point transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="169"/>
+        <source>Truncation distance (m; 0: drop the farthest 5 %)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Key functions to try</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Half-normal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Hazard-rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="172"/>
+        <source>Uniform with cosine terms</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="176"/>
+        <source>Strata (the frame)</source>
+        <translation type="unfinished">Strates (la base de sondage)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="178"/>
+        <source>Stratum id field of the strata</source>
+        <translation type="unfinished">Champ d'identifiant des strates</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="181"/>
+        <source>Confidence level</source>
+        <translation type="unfinished">Niveau de confiance</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="184"/>
+        <source>Area unit of the results</source>
+        <translation type="unfinished">Unité de surface des résultats</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="184"/>
+        <source>km²</source>
+        <translation type="unfinished">km²</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="184"/>
+        <source>hectares</source>
+        <translation type="unfinished">hectares</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="189"/>
+        <source>Strata with distance estimates</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="191"/>
+        <source>Detection function models</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Overall density</source>
+        <translation type="unfinished">Densité globale</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Overall abundance</source>
+        <translation type="unfinished">Abondance globale</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Lower confidence limit of the abundance</source>
+        <translation type="unfinished">Limite inférieure de confiance de l'abondance</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Upper confidence limit of the abundance</source>
+        <translation type="unfinished">Limite supérieure de confiance de l'abondance</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>CV of the overall estimate</source>
+        <translation type="unfinished">CV de l'estimation globale</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Detection probability within the truncation distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="194"/>
+        <source>Effective strip half-width or detection radius (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="205"/>
+        <source>Visits field of the points (empty: one visit each)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="208"/>
+        <source>Distance bands (m, from 0, comma-separated; empty: exact distances)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="211"/>
+        <source>Most cosine terms per key function</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Group size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Automatic: mean, or size-bias regression when larger groups are seen farther</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Mean of the detected groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="214"/>
+        <source>Size-bias regression</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="218"/>
+        <source>One detection function per stratum</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="220"/>
+        <source>Bootstrap resamples over transects (0: none)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="234"/>
+        <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
+        <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="256"/>
+        <source>Layer &apos;{layer}&apos; has no features.</source>
+        <translation type="unfinished">La couche « {layer} » n'a aucune entité.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <source>Layer &apos;{layer}&apos; holds {kinds} geometries, but the survey type is {survey}. Choose the survey type that matches the units (line transects need lines, point transects points).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <source>line transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <source>point transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="273"/>
+        <source>{n} reserve unit(s) without observations were left out (not surveyed).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="294"/>
+        <source>Layer &apos;{layer}&apos;: the points {ids} have a number of visits in the field &apos;{field}&apos; that is not a whole number of 0 or more. Correct them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="299"/>
+        <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="305"/>
+        <source>{n} point(s) with no visits were left out (not surveyed).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="315"/>
+        <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="319"/>
+        <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="327"/>
+        <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
+        <translation type="unfinished">La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
+        <source>unit ids</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
+        <source>distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="447"/>
+        <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/distancedensity.py" line="451"/>
+        <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
+        <translation type="unfinished">Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
+    </message>
+</context>
+<context>
     <name>Estimate</name>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="108"/>
+        <location filename="../processing/algorithms/estimate.py" line="73"/>
         <source>Estimate density and abundance</source>
         <translation>Estimer la densité et l'abondance</translation>
     </message>
@@ -1594,7 +1994,7 @@ Target CV (above 0): n_next is the number of units each stratum needs next time 
 True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
 
 Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-        <translation>Estime la densité et l'abondance par strate et pour toute la base de sondage à partir des comptages dans les unités d'échantillonnage, avec erreur type, coefficient de variation (CV) et intervalle de confiance, ainsi que la taille d'échantillon nécessaire au prochain inventaire.
+        <translation type="obsolete">Estime la densité et l'abondance par strate et pour toute la base de sondage à partir des comptages dans les unités d'échantillonnage, avec erreur type, coefficient de variation (CV) et intervalle de confiance, ainsi que la taille d'échantillon nécessaire au prochain inventaire.
 
 Estimateur : D_h = Σy / Σa par strate (l'estimateur par le ratio ; avec des unités égales, le comptage moyen divisé par la surface d'une unité), avec sa variance linéarisée (Cochran 1977, ch. 5 et 6) ; abondance N_h = D_h·A_h ; au total N = Σ N_h et D = N / Σ A_h, les variances s'additionnant. La correction pour population finie 1 − Σa/A_h est appliquée sur demande.
 
@@ -1619,669 +2019,710 @@ Vrai total : pour les simulations et la formation uniquement. Le rapport l'affic
 Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="156"/>
+        <location filename="../processing/algorithms/estimate.py" line="138"/>
         <source>Sample units with counts</source>
         <translation>Unités d'échantillonnage avec comptages</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="490"/>
+        <location filename="../processing/algorithms/estimate.py" line="140"/>
         <source>Count field</source>
         <translation>Champ de comptage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="160"/>
+        <location filename="../processing/algorithms/estimate.py" line="142"/>
         <source>Stratum field of the units</source>
         <translation>Champ de strate des unités</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="163"/>
+        <location filename="../processing/algorithms/estimate.py" line="145"/>
         <source>Unit area field (m²)</source>
         <translation>Champ de surface d'unité (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="166"/>
+        <location filename="../processing/algorithms/estimate.py" line="148"/>
         <source>Fixed unit area for points and lines (m²; 0: not used)</source>
         <translation>Surface d'unité fixe pour les points et les lignes (m² ; 0 : non utilisée)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="169"/>
+        <location filename="../processing/algorithms/estimate.py" line="151"/>
         <source>Strip width of line transects (m, full width; 0: not used)</source>
         <translation>Largeur de bande des transects linéaires (m, largeur totale ; 0 : non utilisée)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="172"/>
+        <location filename="../processing/algorithms/estimate.py" line="154"/>
         <source>Strata (the frame)</source>
         <translation>Strates (la base de sondage)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="156"/>
         <source>Stratum id field of the strata</source>
         <translation>Champ d'identifiant des strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="499"/>
+        <location filename="../processing/algorithms/estimate.py" line="159"/>
         <source>Confidence level</source>
         <translation>Niveau de confiance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>Confidence interval</source>
         <translation>Intervalle de confiance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="484"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>t with Satterthwaite degrees of freedom</source>
         <translation>t avec les degrés de liberté de Satterthwaite</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>Log-normal</source>
         <translation>Log-normal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="180"/>
+        <location filename="../processing/algorithms/estimate.py" line="162"/>
         <source>Stratified bootstrap (2,000 resamples)</source>
         <translation>Bootstrap stratifié (2 000 rééchantillonnages)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="502"/>
+        <location filename="../processing/algorithms/estimate.py" line="166"/>
         <source>Finite-population correction</source>
         <translation>Correction pour population finie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="168"/>
         <source>Detection probability p (from a separate study; 1: all seen)</source>
         <translation>Probabilité de détection p (d'une étude distincte ; 1 : tous vus)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="189"/>
+        <location filename="../processing/algorithms/estimate.py" line="171"/>
         <source>Standard error of p</source>
         <translation>Erreur type de p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
         <source>Area unit of the results</source>
         <translation>Unité de surface des résultats</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
         <source>km²</source>
         <translation>km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="192"/>
+        <location filename="../processing/algorithms/estimate.py" line="174"/>
         <source>hectares</source>
         <translation>hectares</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="195"/>
+        <location filename="../processing/algorithms/estimate.py" line="177"/>
         <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
         <translation>CV cible pour le prochain inventaire (0 : non utilisé ; p. ex. 0.15)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="501"/>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Variance estimator</source>
         <translation>Estimateur de variance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Simple random sampling formula</source>
         <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="199"/>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
         <translation>Voisinage local (dispositions systématiques ou spatialement équilibrées)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="203"/>
+        <location filename="../processing/algorithms/estimate.py" line="191"/>
         <source>The count field holds presence (1) / absence (0)</source>
         <translation>Le champ de comptage contient présence (1) / absence (0)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="205"/>
+        <location filename="../processing/algorithms/estimate.py" line="193"/>
         <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
         <translation>Écarter les strates sans unité inventoriée (la base se réduit)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="208"/>
+        <location filename="../processing/algorithms/estimate.py" line="196"/>
         <source>True total of a simulated population (simulations and training only; 0: none)</source>
         <translation>Vrai total d'une population simulée (simulations et formation uniquement ; 0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="213"/>
+        <location filename="../processing/algorithms/estimate.py" line="201"/>
         <source>Strata with estimates</source>
         <translation>Strates avec estimations</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="215"/>
+        <location filename="../processing/algorithms/estimate.py" line="203"/>
         <source>Estimate table</source>
         <translation>Table des estimations</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Overall density</source>
         <translation>Densité globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>SE of the overall density</source>
         <translation>Erreur type de la densité globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Overall abundance</source>
         <translation>Abondance globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Lower confidence limit of the abundance</source>
         <translation>Limite inférieure de confiance de l'abondance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>Upper confidence limit of the abundance</source>
         <translation>Limite supérieure de confiance de l'abondance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="218"/>
+        <location filename="../processing/algorithms/estimate.py" line="206"/>
         <source>CV of the overall estimate</source>
         <translation>CV de l'estimation globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="246"/>
+        <location filename="../processing/algorithms/estimate.py" line="323"/>
         <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
         <translation>La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="255"/>
+        <location filename="../processing/algorithms/estimate.py" line="333"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates (plotwise:stratify écrit 'stratum'), ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="259"/>
+        <location filename="../processing/algorithms/estimate.py" line="338"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
         <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base est traitée comme une seule strate, et le champ « {field} » des unités n'est pas utilisé. Si les unités ont été allouées aux strates de façon inégale, donnez plutôt les strates : une moyenne non stratifiée est alors biaisée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="289"/>
+        <location filename="../processing/algorithms/estimate.py" line="241"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="294"/>
+        <location filename="../processing/algorithms/estimate.py" line="247"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="311"/>
+        <location filename="../processing/algorithms/estimate.py" line="290"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="343"/>
         <source>Layer &apos;{layer}&apos;: units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
-        <translation>Couche « {layer} » : les unités {ids} n'ont pas de géométrie, la variance de voisinage local ne peut donc pas les utiliser. Donnez-leur leur position, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
+        <translation type="obsolete">Couche « {layer} » : les unités {ids} n'ont pas de géométrie, la variance de voisinage local ne peut donc pas les utiliser. Donnez-leur leur position, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="350"/>
         <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-        <translation>Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
+        <translation type="obsolete">Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="397"/>
+        <location filename="../processing/algorithms/estimate.py" line="302"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="419"/>
         <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-        <translation>Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
+        <translation type="obsolete">Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="438"/>
         <source>In strata {strata} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-        <translation>Dans les strates {strata}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
+        <translation type="obsolete">Dans les strates {strata}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="458"/>
         <source>occupied units</source>
-        <translation>unités occupées</translation>
+        <translation type="obsolete">unités occupées</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="458"/>
         <source>animals</source>
-        <translation>animaux</translation>
+        <translation type="obsolete">animaux</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="459"/>
         <source>Naive occupancy from presence data</source>
-        <translation>Occupation naïve à partir de données de présence</translation>
+        <translation type="obsolete">Occupation naïve à partir de données de présence</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="459"/>
         <source>Density and abundance estimate</source>
-        <translation>Estimation de la densité et de l'abondance</translation>
+        <translation type="obsolete">Estimation de la densité et de l'abondance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="462"/>
         <source>proportion of units occupied (naive)</source>
-        <translation>proportion d'unités occupées (naïve)</translation>
+        <translation type="obsolete">proportion d'unités occupées (naïve)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="462"/>
         <source>density per {unit}</source>
-        <translation>densité par {unit}</translation>
+        <translation type="obsolete">densité par {unit}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="464"/>
         <source>estimated {what} in the frame</source>
-        <translation>estimation des {what} dans la base de sondage</translation>
+        <translation type="obsolete">estimation des {what} dans la base de sondage</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="465"/>
         <source>{level} interval</source>
-        <translation>intervalle à {level}</translation>
+        <translation type="obsolete">intervalle à {level}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="518"/>
         <source>CV</source>
-        <translation>CV</translation>
+        <translation type="obsolete">CV</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="468"/>
         <source>units surveyed</source>
-        <translation>unités inventoriées</translation>
+        <translation type="obsolete">unités inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="471"/>
         <source>true total of the simulated population</source>
-        <translation>vrai total de la population simulée</translation>
+        <translation type="obsolete">vrai total de la population simulée</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="476"/>
         <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-        <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
+        <translation type="obsolete">Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="476"/>
         <source>covers</source>
-        <translation>contient</translation>
+        <translation type="obsolete">contient</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="476"/>
         <source>misses</source>
-        <translation>ne contient pas</translation>
+        <translation type="obsolete">ne contient pas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="484"/>
         <source>log-normal</source>
-        <translation>log-normal</translation>
+        <translation type="obsolete">log-normal</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="485"/>
         <source>stratified percentile bootstrap</source>
-        <translation>bootstrap stratifié des percentiles</translation>
+        <translation type="obsolete">bootstrap stratifié des percentiles</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="486"/>
         <source>simple random sampling formula</source>
-        <translation>formule de l'échantillonnage aléatoire simple</translation>
+        <translation type="obsolete">formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="487"/>
         <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-        <translation>voisinage local (Stevens &amp; Olsen 2003)</translation>
+        <translation type="obsolete">voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="489"/>
         <source>Sample units</source>
-        <translation>Unités d'échantillonnage</translation>
+        <translation type="obsolete">Unités d'échantillonnage</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="490"/>
         <source> (presence/absence)</source>
-        <translation> (présence/absence)</translation>
+        <translation type="obsolete"> (présence/absence)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="491"/>
         <source>Stratum field</source>
-        <translation>Champ de strate</translation>
+        <translation type="obsolete">Champ de strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="491"/>
         <source>none: one stratum</source>
-        <translation>aucun : une seule strate</translation>
+        <translation type="obsolete">aucun : une seule strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="492"/>
         <source>Unit area</source>
-        <translation>Surface d'une unité</translation>
+        <translation type="obsolete">Surface d'une unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="492"/>
         <source>field {field} (m²)</source>
-        <translation>champ {field} (m²)</translation>
+        <translation type="obsolete">champ {field} (m²)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="492"/>
         <source>polygon area</source>
-        <translation>surface du polygone</translation>
+        <translation type="obsolete">surface du polygone</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="494"/>
         <source>strip width</source>
-        <translation>largeur de bande</translation>
+        <translation type="obsolete">largeur de bande</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="495"/>
         <source>fixed</source>
-        <translation>fixe</translation>
+        <translation type="obsolete">fixe</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="496"/>
         <source>Strata (frame)</source>
-        <translation>Strates (base de sondage)</translation>
+        <translation type="obsolete">Strates (base de sondage)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="497"/>
         <source>Computation CRS</source>
-        <translation>SCR de calcul</translation>
+        <translation type="obsolete">SCR de calcul</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="498"/>
         <source>Area unit</source>
-        <translation>Unité de surface</translation>
+        <translation type="obsolete">Unité de surface</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Interval</source>
-        <translation>Intervalle</translation>
+        <translation type="obsolete">Intervalle</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>yes</source>
-        <translation>oui</translation>
+        <translation type="obsolete">oui</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>no</source>
-        <translation>non</translation>
+        <translation type="obsolete">non</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="503"/>
         <source>Detection probability p</source>
-        <translation>Probabilité de détection p</translation>
+        <translation type="obsolete">Probabilité de détection p</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="504"/>
         <source>Target CV for the next survey</source>
-        <translation>CV cible pour le prochain inventaire</translation>
+        <translation type="obsolete">CV cible pour le prochain inventaire</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="507"/>
         <source>Bootstrap resamples</source>
-        <translation>Rééchantillonnages bootstrap</translation>
+        <translation type="obsolete">Rééchantillonnages bootstrap</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="510"/>
         <source>Seed</source>
-        <translation>Graine</translation>
+        <translation type="obsolete">Graine</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="510"/>
         <source>not used (no random draws without the bootstrap)</source>
-        <translation>non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
+        <translation type="obsolete">non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="514"/>
         <source>Estimates by stratum</source>
-        <translation>Estimations par strate</translation>
+        <translation type="obsolete">Estimations par strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="519"/>
         <source>Stratum</source>
-        <translation>Strate</translation>
+        <translation type="obsolete">Strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="515"/>
         <source>Area ({unit})</source>
-        <translation>Surface ({unit})</translation>
+        <translation type="obsolete">Surface ({unit})</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="515"/>
         <source>Units (n)</source>
-        <translation>Unités (n)</translation>
+        <translation type="obsolete">Unités (n)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="515"/>
         <source>Not surveyed</source>
-        <translation>Non inventoriées</translation>
+        <translation type="obsolete">Non inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="516"/>
         <source>Mean count</source>
-        <translation>Comptage moyen</translation>
+        <translation type="obsolete">Comptage moyen</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="516"/>
         <source>SD of counts</source>
-        <translation>Écart-type des comptages</translation>
+        <translation type="obsolete">Écart-type des comptages</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="519"/>
         <source>SE</source>
-        <translation>Erreur type</translation>
+        <translation type="obsolete">Erreur type</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Lower limit</source>
-        <translation>Limite inférieure</translation>
+        <translation type="obsolete">Limite inférieure</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Upper limit</source>
-        <translation>Limite supérieure</translation>
+        <translation type="obsolete">Limite supérieure</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="518"/>
         <source>df</source>
-        <translation>ddl</translation>
+        <translation type="obsolete">ddl</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="532"/>
         <source>Occupied units</source>
-        <translation>Unités occupées</translation>
+        <translation type="obsolete">Unités occupées</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="532"/>
         <source>Abundance</source>
-        <translation>Abondance</translation>
+        <translation type="obsolete">Abondance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="522"/>
         <source>Units next time (n_next)</source>
-        <translation>Unités la prochaine fois (n_next)</translation>
+        <translation type="obsolete">Unités la prochaine fois (n_next)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="569"/>
         <source>all strata</source>
-        <translation>toutes les strates</translation>
+        <translation type="obsolete">toutes les strates</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="530"/>
         <source>{what}, limits at {level}.</source>
-        <translation>{what}, limites à {level}.</translation>
+        <translation type="obsolete">{what}, limites à {level}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="532"/>
         <source>{what} in the frame, limits at {level}.</source>
-        <translation>{what} dans la base de sondage, limites à {level}.</translation>
+        <translation type="obsolete">{what} dans la base de sondage, limites à {level}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="535"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-        <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
+        <translation type="obsolete">La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="540"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-        <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
+        <translation type="obsolete">Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="543"/>
         <source>The overall interval by method</source>
-        <translation>L'intervalle global selon la méthode</translation>
+        <translation type="obsolete">L'intervalle global selon la méthode</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="544"/>
         <source>Used in the outputs</source>
-        <translation>Utilisé dans les sorties</translation>
+        <translation type="obsolete">Utilisé dans les sorties</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="548"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-        <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
+        <translation type="obsolete">L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>overall abundance in a resample</source>
-        <translation>abondance globale dans un rééchantillonnage</translation>
+        <translation type="obsolete">abondance globale dans un rééchantillonnage</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>resamples</source>
-        <translation>rééchantillonnages</translation>
+        <translation type="obsolete">rééchantillonnages</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>{level} percentile limits</source>
-        <translation>limites des percentiles à {level}</translation>
+        <translation type="obsolete">limites des percentiles à {level}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="555"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
-        <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
+        <translation type="obsolete">Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="568"/>
         <source>true density (simulation)</source>
-        <translation>vraie densité (simulation)</translation>
+        <translation type="obsolete">vraie densité (simulation)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="573"/>
         <source>{what} by stratum with {level} confidence intervals</source>
-        <translation>{what} par strate avec intervalles de confiance à {level}</translation>
+        <translation type="obsolete">{what} par strate avec intervalles de confiance à {level}</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="581"/>
         <source>lowest</source>
-        <translation>minimum</translation>
+        <translation type="obsolete">minimum</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="581"/>
         <source>highest</source>
-        <translation>maximum</translation>
+        <translation type="obsolete">maximum</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="589"/>
         <source>surveyed units</source>
-        <translation>unités inventoriées</translation>
+        <translation type="obsolete">unités inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="593"/>
         <source>not surveyed</source>
-        <translation>non inventoriées</translation>
+        <translation type="obsolete">non inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="595"/>
         <source>Strata shaded by {what}, with the units</source>
-        <translation>Strates ombrées selon {what}, avec les unités</translation>
+        <translation type="obsolete">Strates ombrées selon {what}, avec les unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="598"/>
         <source>Method</source>
-        <translation>Méthode</translation>
+        <translation type="obsolete">Méthode</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="600"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-        <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
+        <translation type="obsolete">La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="607"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-        <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie est appliquée et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
+        <translation type="obsolete">La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie est appliquée et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="614"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-        <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
+        <translation type="obsolete">Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="614"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
-        <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987 ; Buckland et al. 2001). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
+        <translation type="obsolete">Les intervalles sont log-normaux : de N/C à N·C avec C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987 ; Buckland et al. 2001). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="614"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-        <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie quand elle est demandée (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
+        <translation type="obsolete">Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie quand elle est demandée (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="628"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
-        <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, et seules les différences à l'intérieur des voisinages comptent comme variance. Pour les dispositions systématiques et spatialement équilibrées, la formule de l'échantillonnage aléatoire simple surestime la variance ; cet estimateur non, pourvu que la disposition ait réellement été systématique ou spatialement équilibrée ; pour une disposition aléatoire simple, utilisez la formule simple. La somme des variances locales est mise à l'échelle une fois pour concorder en moyenne avec la formule simple quand la population n'a pas de structure spatiale (notre choix).</translation>
+        <translation type="obsolete">Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, et seules les différences à l'intérieur des voisinages comptent comme variance. Pour les dispositions systématiques et spatialement équilibrées, la formule de l'échantillonnage aléatoire simple surestime la variance ; cet estimateur non, pourvu que la disposition ait réellement été systématique ou spatialement équilibrée ; pour une disposition aléatoire simple, utilisez la formule simple. La somme des variances locales est mise à l'échelle une fois pour concorder en moyenne avec la formule simple quand la population n'a pas de structure spatiale (notre choix).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="637"/>
         <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
-        <translation>Les strates avec une seule unité inventoriée ont été regroupées avec une voisine (parmi les strates qui la touchent sur la carte, ou à défaut les strates voisines dans l'ordre des identifiants, celle dont la densité est la plus proche) : les membres d'un groupe partagent la variance résiduelle commune du groupe (Cochran 1977, §5A.12). Les différences entre strates regroupées comptent alors comme variance, si bien que leurs erreurs types tendent à être trop grandes.</translation>
+        <translation type="obsolete">Les strates avec une seule unité inventoriée ont été regroupées avec une voisine (parmi les strates qui la touchent sur la carte, ou à défaut les strates voisines dans l'ordre des identifiants, celle dont la densité est la plus proche) : les membres d'un groupe partagent la variance résiduelle commune du groupe (Cochran 1977, §5A.12). Les différences entre strates regroupées comptent alors comme variance, si bien que leurs erreurs types tendent à être trop grandes.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="643"/>
         <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit&apos;s count minus the group&apos;s density times the unit&apos;s area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
-        <translation>Dans le bootstrap, une strate regroupée tire autant de résidus qu'elle a d'unités parmi les unités mises en commun de son groupe (le comptage de chaque unité moins la densité du groupe multipliée par la surface de l'unité), les ajoute à sa propre estimation et les remet à l'échelle, de sorte que ses rééchantillonnages sont centrés sur sa propre estimation et varient autant que l'indique la variance des strates regroupées.</translation>
+        <translation type="obsolete">Dans le bootstrap, une strate regroupée tire autant de résidus qu'elle a d'unités parmi les unités mises en commun de son groupe (le comptage de chaque unité moins la densité du groupe multipliée par la surface de l'unité), les ajoute à sa propre estimation et les remet à l'échelle, de sorte que ses rééchantillonnages sont centrés sur sa propre estimation et varient autant que l'indique la variance des strates regroupées.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="649"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval&apos;s degrees of freedom combine the two parts (Buckland et al. 2001), p&apos;s part counting as known with infinite degrees of freedom.</source>
-        <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté de l'intervalle t combinent les deux parts (Buckland et al. 2001), celle de p étant comptée comme connue avec des degrés de liberté infinis.</translation>
+        <translation type="obsolete">Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté de l'intervalle t combinent les deux parts (Buckland et al. 2001), celle de p étant comptée comme connue avec des degrés de liberté infinis.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="656"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
-        <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types observés maintenant (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 par strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
+        <translation type="obsolete">Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types observés maintenant (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 par strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="662"/>
         <source>Cautions</source>
-        <translation>Mises en garde</translation>
+        <translation type="obsolete">Mises en garde</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="663"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-        <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
+        <translation type="obsolete">L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="667"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-        <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
+        <translation type="obsolete">Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="670"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-        <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
+        <translation type="obsolete">Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="675"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-        <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
+        <translation type="obsolete">Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="678"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-        <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
+        <translation type="obsolete">Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/estimate.py" line="76"/>
+        <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
+
+Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added.
+
+Finite-population correction: 1 − Σa/A_h, only for units that cannot overlap (a finite population of units drawn without replacement, Cochran 1977, §2.4). Units from plotwise:layout record their design (field design): the correction is refused, with a warning, in strata laid out by simple random centres without a minimum spacing of at least the unit's width (their units may overlap: a continuous population, Cordy 1993). For units without that record it is your choice, and the report states the assumption that they do not overlap.
+
+Edges: units laid out by plus sampling (field edge = plus, the layout's default) count only inside their stratum, and the counts expand to the stratum grown by the unit's reach (field reach_m), N_h = A⁺_h·Σy/Σa (Gregoire &amp; Valentine 2008, ch. 10), which removes the bias at the edges.
+
+Counts: a NULL count means the unit was not surveyed: it is left out and listed as non-response. Reserve units (role = reserve) without a count are unused reserves and are skipped quietly; reserves that were surveyed count like any other unit. 0 means surveyed, none seen. Negative or non-numeric counts stop the run, naming the units.
+
+Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is above 0, else the polygon's area, else for lines the strip width × the line's length, else the fixed unit area for points and lines.
+
+Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is paired with a partner fixed before the counts are seen (the stratum sharing the longest edge on the map, else the next in id order) and takes its variance from the collapsed-strata pairs formula (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow 1953 for unequal sizes), with 1 degree of freedom and a warning; the partner keeps its own variance. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so. Strata must not overlap (an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning), and every strata polygon needs its id: a polygon without one is an error, unless strata with no surveyed unit may be left out.
+
+Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(t_df·√ln(1+CV²)), t with the same degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987); or a rescaled stratified percentile bootstrap of 2,000 resamples (seeded; Rao &amp; Wu 1988), which carries the finite-population correction. Where every count is 0 the interval is one-sided, from 0 to the Poisson upper limit −ln(1 − level)·A/Σa (Garwood 1936; about 3·A/Σa at 95 %), divided by p.
+
+Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance, with the degrees of freedom of its quadratic form (Box 1954); or our variant of it, scaled by n / Σ(1 − Σw²) so that it agrees with the simple formula where there is no spatial pattern (the published sum falls short by about a quarter there).
+
+Detection: with a detection probability p below 1, estimates are divided by p and the squared CVs add (delta method, Seber 1982). p and its SE must come from a separate study; its degrees of freedom (0: p counts as known) enter the interval's by Satterthwaite's rule (Buckland et al. 2001, eq. 3.75). An SE above p/2 gives a warning.
+
+Presence data: with the presence option a 0/1 field gives the stratified proportion of units where the species was detected (naive occupancy, not corrected for detection), and abund is the number of occupied units in the frame.
+
+Target CV (above 0): n_next is the number of units each stratum needs next time for that CV of the overall abundance, by Neyman allocation on the standard deviations the variance estimator implies (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds.
+
+True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
+
+Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/estimate.py" line="181"/>
+        <source>Degrees of freedom of the detection estimate (0: p known)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>
@@ -2392,27 +2833,27 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation>Nombre total d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="43"/>
+        <location filename="../processing/provider.py" line="45"/>
         <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
         <translation>Chaîne d'exemple : planifier un inventaire (base de sondage, strates, effort, disposition)</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="43"/>
+        <location filename="../processing/provider.py" line="45"/>
         <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
         <translation>Construit la base de sondage (zone d'étude moins les exclusions et les cellules au-delà de la pente limite), forme des strates par k-moyennes à partir des rasters de covariables, répartit les unités par allocation de Neyman avec l'écart-type de la covariable comme substitut, et dispose des placettes carrées spatialement équilibrées avec 3 unités de réserve par strate. Ouvrez-la dans le modeleur pour modifier une étape. Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="53"/>
+        <location filename="../processing/provider.py" line="55"/>
         <source>Example chain: estimate from simulated counts</source>
         <translation>Chaîne d'exemple : estimer à partir de comptages simulés</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="53"/>
+        <location filename="../processing/provider.py" line="55"/>
         <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
         <translation>Pour la formation : remplit le champ de comptage des unités à partir d'une population simulée, puis estime la densité et l'abondance par strate et au total. Avec un vrai travail de terrain, lancez plutôt l'estimation sur les unités comptées.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="82"/>
+        <location filename="../processing/provider.py" line="84"/>
         <source>Example chains</source>
         <translation>Chaînes d'exemple</translation>
     </message>
@@ -2420,7 +2861,7 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="69"/>
+        <location filename="../processing/algorithms/layout.py" line="71"/>
         <source>Lay out sample units</source>
         <translation>Disposer les unités d'échantillonnage</translation>
     </message>
@@ -2445,7 +2886,7 @@ Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for tr
 Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
 
 A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation>Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate par valeur du champ de strate ; sans lui, la base forme une seule strate).
+        <translation type="obsolete">Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate par valeur du champ de strate ; sans lui, la base forme une seule strate).
 
 Unités par strate : le champ d'unités (par exemple n_alloc de l'étape d'allocation ; le même nombre entier sur chaque entité d'une strate), sinon le total réparti proportionnellement à la surface avec au moins 2 par strate.
 
@@ -2466,409 +2907,442 @@ Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de 
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="108"/>
+        <location filename="../processing/algorithms/layout.py" line="118"/>
         <source>Sampling frame or strata</source>
         <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="121"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="127"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="123"/>
+        <location filename="../processing/algorithms/layout.py" line="133"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Nombre total d'unités (sans champ d'unités)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Design</source>
         <translation>Plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Simple random</source>
         <translation>Aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="129"/>
+        <location filename="../processing/algorithms/layout.py" line="139"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Unit shape</source>
         <translation>Forme de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Point station</source>
         <translation>Station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Square plot</source>
         <translation>Placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Circular plot</source>
         <translation>Placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="135"/>
+        <location filename="../processing/algorithms/layout.py" line="145"/>
         <source>Line transect</source>
         <translation>Transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="142"/>
+        <location filename="../processing/algorithms/layout.py" line="152"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="148"/>
+        <location filename="../processing/algorithms/layout.py" line="158"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>Keep every unit wholly inside its stratum</source>
-        <translation>Garder chaque unité entièrement dans sa strate</translation>
+        <translation type="obsolete">Garder chaque unité entièrement dans sa strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="157"/>
+        <location filename="../processing/algorithms/layout.py" line="169"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="163"/>
+        <location filename="../processing/algorithms/layout.py" line="175"/>
         <source>Reserve units per stratum</source>
         <translation>Unités de réserve par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="169"/>
+        <location filename="../processing/algorithms/layout.py" line="181"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <location filename="../processing/algorithms/layout.py" line="182"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <location filename="../processing/algorithms/layout.py" line="182"/>
         <source>GPX files (*.gpx)</source>
         <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="184"/>
+        <location filename="../processing/algorithms/layout.py" line="196"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
         <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="211"/>
+        <location filename="../processing/algorithms/layout.py" line="223"/>
         <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
         <translation>Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <location filename="../processing/algorithms/layout.py" line="241"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="229"/>
+        <location filename="../processing/algorithms/layout.py" line="241"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="243"/>
+        <location filename="../processing/algorithms/layout.py" line="255"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="247"/>
+        <location filename="../processing/algorithms/layout.py" line="259"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="262"/>
+        <location filename="../processing/algorithms/layout.py" line="274"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="265"/>
+        <location filename="../processing/algorithms/layout.py" line="277"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <location filename="../processing/algorithms/layout.py" line="291"/>
         <source>the frame</source>
         <translation>la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <location filename="../processing/algorithms/layout.py" line="291"/>
         <source>stratum {key}</source>
         <translation>strate {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="319"/>
+        <location filename="../processing/algorithms/layout.py" line="333"/>
         <source>Sample-unit layout</source>
         <translation>Disposition des unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <location filename="../processing/algorithms/layout.py" line="449"/>
         <source>primary units</source>
         <translation>unités principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="425"/>
+        <location filename="../processing/algorithms/layout.py" line="449"/>
         <source>reserve units</source>
         <translation>unités de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <location filename="../processing/algorithms/layout.py" line="337"/>
         <source>strata</source>
         <translation>strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="323"/>
+        <location filename="../processing/algorithms/layout.py" line="337"/>
         <source>design</source>
         <translation>plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="329"/>
+        <location filename="../processing/algorithms/layout.py" line="343"/>
         <source>Replacing units in the field</source>
         <translation>Remplacer des unités sur le terrain</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="330"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
         <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="336"/>
+        <location filename="../processing/algorithms/layout.py" line="350"/>
         <source>Units per stratum</source>
         <translation>Unités par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Stratum</source>
         <translation>Strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Area (ha)</source>
         <translation>Surface (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Effective area (ha)</source>
         <translation>Surface effective (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Units asked</source>
         <translation>Unités demandées</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="338"/>
+        <location filename="../processing/algorithms/layout.py" line="352"/>
         <source>Primary</source>
         <translation>Principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <location filename="../processing/algorithms/layout.py" line="353"/>
         <source>Reserve</source>
         <translation>Réserves</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <location filename="../processing/algorithms/layout.py" line="353"/>
         <source>incl_p</source>
         <translation>incl_p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="339"/>
+        <location filename="../processing/algorithms/layout.py" line="353"/>
         <source>weight</source>
         <translation>weight</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <location filename="../processing/algorithms/layout.py" line="355"/>
         <source>Grid spacing (m)</source>
         <translation>Pas de la grille (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="341"/>
+        <location filename="../processing/algorithms/layout.py" line="355"/>
         <source>Grid rotation (°)</source>
         <translation>Rotation de la grille (°)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
+        <location filename="../processing/algorithms/layout.py" line="358"/>
         <source>frame</source>
         <translation>base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <location filename="../processing/algorithms/layout.py" line="365"/>
         <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
         <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="351"/>
+        <location filename="../processing/algorithms/layout.py" line="365"/>
         <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
         <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="357"/>
+        <location filename="../processing/algorithms/layout.py" line="381"/>
         <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
         <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="364"/>
+        <location filename="../processing/algorithms/layout.py" line="388"/>
         <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
         <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="368"/>
+        <location filename="../processing/algorithms/layout.py" line="392"/>
         <source>Map</source>
         <translation>Carte</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="369"/>
+        <location filename="../processing/algorithms/layout.py" line="393"/>
         <source>Strata (filled), primary units (dark) and reserve units (light)</source>
         <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="370"/>
+        <location filename="../processing/algorithms/layout.py" line="394"/>
         <source>Method</source>
         <translation>Méthode</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="374"/>
+        <location filename="../processing/algorithms/layout.py" line="398"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Frame (FRAME)</source>
         <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Stratum field (STRATUM_FIELD)</source>
         <translation>Champ de strate (STRATUM_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>(none: one stratum)</source>
         <translation>(aucun : une seule strate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Units per stratum field (N_FIELD)</source>
         <translation>Champ d'unités par strate (N_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>(none)</source>
         <translation>(aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Total units (N_UNITS)</source>
         <translation>Total d'unités (N_UNITS)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>(not used)</source>
         <translation>(non utilisé)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Design (DESIGN)</source>
         <translation>Plan (DESIGN)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Unit shape (SHAPE)</source>
         <translation>Forme de l'unité (SHAPE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Unit size (SIZE, m)</source>
         <translation>Taille de l'unité (SIZE, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Bearing (BEARING, degrees)</source>
         <translation>Azimut (BEARING, degrés)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>random</source>
         <translation>aléatoire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Keep inside (INSIDE)</source>
         <translation>Garder à l'intérieur (INSIDE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>yes</source>
         <translation>oui</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>no</source>
         <translation>non</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Minimum spacing (MIN_SPACING, m)</source>
         <translation>Espacement minimal (MIN_SPACING, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Reserves per stratum (RESERVE)</source>
         <translation>Réserves par strate (RESERVE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>Seed (SEED)</source>
         <translation>Graine (SEED)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="375"/>
+        <location filename="../processing/algorithms/layout.py" line="399"/>
         <source>CRS of the computation and the output</source>
         <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="395"/>
+        <location filename="../processing/algorithms/layout.py" line="419"/>
         <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
         <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="397"/>
+        <location filename="../processing/algorithms/layout.py" line="421"/>
         <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
         <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="423"/>
         <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
         <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="406"/>
+        <location filename="../processing/algorithms/layout.py" line="430"/>
         <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
         <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/layout.py" line="74"/>
+        <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
+
+Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
+
+Designs:
+• Simple random: independent points, uniform over the stratum (triangles chosen by area, then a point within; Turk 1990).
+• Systematic grid: a square grid of spacing √(A/n) with a random start; with bearing −1 the grid also gets a random rotation, otherwise it is turned to the bearing. The realised number of units varies around n and is reported.
+• Spatially balanced: balanced acceptance sampling on a Halton sequence (Robertson et al. 2013). Every leading part of the draw order is itself spread evenly, so reserves are the next points of the same sequence. The start is a uniform random point of the stratum, which keeps inclusion equal for any sample size.
+
+Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in degrees clockwise from grid north, or −1 for a random bearing per unit.
+Edges: by default plus sampling (Gregoire &amp; Valentine 2008, ch. 10): centres are drawn over the stratum grown by the unit's reach R (its circumscribing radius), and a unit near or beyond the edge is surveyed only inside its own stratum (count only the animals inside the stratum; a centre may lie outside it, even outside the frame: never enter ground that was excluded as unsafe, survey the part inside from within). Every animal then has the same chance of being counted, and plotwise:estimate expands the counts to the grown area. Keep units inside instead draws centres from the stratum shrunk by R, so every unit lies wholly inside its stratum but the edge band is never reached (biased where animals near the edge differ). The effective area (grown or shrunk) is reported and used for the inclusion probabilities.
+Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.
+Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit that cannot be surveyed is replaced by the next unused reserve of the same stratum.
+
+Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), an empty count field for the field teams, and the design record for the estimate: design (random, random_sep, grid, grid_ovl or balanced: whether the units can overlap, which decides the finite-population correction), edge (plus or inside) and reach_m (R, m). The GPX file holds one waypoint per unit (a start and an end waypoint per transect), named by unit_id.
+
+Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
+
+A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/layout.py" line="164"/>
+        <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/layout.py" line="371"/>
+        <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>
@@ -3158,22 +3632,22 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
 <context>
     <name>PlotwiseEngine</name>
     <message>
-        <location filename="../processing/engine/allocation.py" line="48"/>
+        <location filename="../processing/engine/allocation.py" line="49"/>
         <source>stratum area</source>
         <translation>surface de la strate</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="49"/>
+        <location filename="../processing/engine/allocation.py" line="50"/>
         <source>pilot standard deviation</source>
         <translation>écart-type pilote</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="50"/>
+        <location filename="../processing/engine/allocation.py" line="51"/>
         <source>pilot mean count</source>
         <translation>comptage moyen pilote</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="51"/>
+        <location filename="../processing/engine/allocation.py" line="52"/>
         <source>cost per unit</source>
         <translation>coût par unité</translation>
     </message>
@@ -3183,172 +3657,172 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>{shown} et {more} autres</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="431"/>
+        <location filename="../processing/engine/allocation.py" line="435"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos; is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
         <translation>Le champ de strate « {field} » de la couche « {layer} » est vide (NULL) pour la ou les entités {ids}. Donnez un identifiant à chaque strate, ou retirez ces entités de la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="448"/>
+        <location filename="../processing/engine/allocation.py" line="453"/>
         <source>Features {ids} of layer &apos;{layer}&apos; carry the same stratum id {value} in field &apos;{field}&apos;, so each would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Les entités {ids} de la couche « {layer} » portent le même identifiant de strate {value} dans le champ « {field} » : chacune recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="455"/>
+        <location filename="../processing/engine/allocation.py" line="461"/>
         <source>Several stratum ids in field &apos;{field}&apos; of layer &apos;{layer}&apos; are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Plusieurs identifiants de strate du champ « {field} » de la couche « {layer} » sont portés par plus d'une entité : {value} (entités {ids}) et {more} autre(s) identifiant(s) ({others}) ; chacune de ces entités recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="475"/>
+        <location filename="../processing/engine/allocation.py" line="482"/>
         <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
         <translation>Valeur NULL ou négative ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur positive ou nulle pour chaque strate, ou retirez ces strates de la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="479"/>
+        <location filename="../processing/engine/allocation.py" line="487"/>
         <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
         <translation>Valeur NULL, négative ou nulle ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur strictement positive pour chaque strate, ou retirez ces strates de la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="546"/>
+        <location filename="../processing/engine/allocation.py" line="532"/>
         <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
         <translation>Méthode d'allocation inconnue {method!r} ; utilisez l'une de : {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="551"/>
+        <location filename="../processing/engine/allocation.py" line="537"/>
         <source>The strata layer has no features. Run the stratification first.</source>
         <translation>La couche des strates n'a aucune entité. Lancez d'abord la stratification.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="557"/>
+        <location filename="../processing/engine/allocation.py" line="543"/>
         <source>The unit area must be a positive number.</source>
         <translation>La surface d'une unité doit être un nombre positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="560"/>
+        <location filename="../processing/engine/allocation.py" line="546"/>
         <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
         <translation>Le minimum par strate doit être d'au moins 1 (2 permet d'estimer la variance de chaque strate).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="572"/>
+        <location filename="../processing/engine/allocation.py" line="557"/>
         <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>La méthode par coût a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="572"/>
+        <location filename="../processing/engine/allocation.py" line="557"/>
         <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>Le budget a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="581"/>
+        <location filename="../processing/engine/allocation.py" line="566"/>
         <source>The fixed cost must be zero or positive.</source>
         <translation>Le coût fixe doit être nul ou positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="587"/>
+        <location filename="../processing/engine/allocation.py" line="604"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
         <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (proportionnelle à la surface).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="587"/>
+        <location filename="../processing/engine/allocation.py" line="608"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
         <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (surface / racine carrée du coût).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="598"/>
+        <location filename="../processing/engine/allocation.py" line="612"/>
         <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
         <translation>Tous les écarts-types pilotes sont nuls : l'allocation proportionnelle est utilisée à la place.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="603"/>
+        <location filename="../processing/engine/allocation.py" line="617"/>
         <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
         <translation>Valeur nulle ({name}) pour la ou les entités de strate {shown} : elles ne reçoivent que le minimum de {minimum} unité(s). Un pilote sans variation reflète rarement la réalité ; vérifiez-le.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="614"/>
+        <location filename="../processing/engine/allocation.py" line="580"/>
         <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
         <translation>La ou les entités de strate {shown} sont plus petites qu'une unité d'échantillonnage de {unit_area:g}. Fusionnez-les avec une voisine ou utilisez une surface d'unité plus petite.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="623"/>
+        <location filename="../processing/engine/allocation.py" line="590"/>
         <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
         <translation>La ou les entités de strate {shown} contiennent moins de {minimum} unités : elles reçoivent toutes les unités qui y tiennent.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="632"/>
+        <location filename="../processing/engine/allocation.py" line="569"/>
         <source>A target CV is set: the budget is not used.</source>
         <translation>Un CV cible est fixé : le budget n'est pas utilisé.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="638"/>
+        <location filename="../processing/engine/allocation.py" line="630"/>
         <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
         <translation>Le budget {budget:g} est inférieur au minimum de {minimum:g} (coût fixe {fixed_cost:g} plus {per_stratum} unité(s) dans chaque strate à son coût). Augmentez le budget ou baissez le minimum par strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="645"/>
+        <location filename="../processing/engine/allocation.py" line="639"/>
         <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
         <translation>Le budget dépasse le coût de toutes les unités qui tiennent ({maximum:g}) : toutes les unités sont prises.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="653"/>
+        <location filename="../processing/engine/allocation.py" line="650"/>
         <source>Give a total number of units, a budget (with costs) or a target CV.</source>
         <translation>Indiquez un nombre total d'unités, un budget (avec des coûts) ou un CV cible.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="657"/>
+        <location filename="../processing/engine/allocation.py" line="654"/>
         <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
         <translation>Le total de {total} unités est inférieur au minimum de {minimum} ({per_stratum} par strate sur {n_strata} strates). Augmentez le total ou baissez le minimum.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="662"/>
+        <location filename="../processing/engine/allocation.py" line="660"/>
         <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
         <translation>Le total de {total} unités dépasse les {fit} unités de {unit_area:g} qui tiennent dans les strates. Baissez le total ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="672"/>
+        <location filename="../processing/engine/allocation.py" line="673"/>
         <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
         <translation>La ou les entités de strate {shown} ne reçoivent qu'une unité : leur variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="677"/>
+        <location filename="../processing/engine/allocation.py" line="679"/>
         <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
         <translation>La ou les entités de strate {shown} sont échantillonnées entièrement (toutes les unités qui y tiennent).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="683"/>
+        <location filename="../processing/engine/allocation.py" line="684"/>
         <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
         <translation>Valeur nulle ({name}) dans la ou les entités de strate {shown} : leur CV n'est pas défini.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="708"/>
+        <location filename="../processing/engine/allocation.py" line="782"/>
         <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
         <translation>Un CV cible a besoin de l'écart-type pilote et du comptage moyen pilote par unité : choisissez le champ d'écart-type et le champ de moyenne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="713"/>
+        <location filename="../processing/engine/allocation.py" line="788"/>
         <source>The {name} is zero in every stratum: no CV can be computed.</source>
         <translation>Valeur nulle ({name}) dans toutes les strates : aucun CV ne peut être calculé.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="724"/>
+        <location filename="../processing/engine/allocation.py" line="799"/>
         <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
         <translation>Le CV cible de {target_cv:.3g} ne peut pas être atteint : même les {fit} unités qui tiennent donnent un CV attendu de {cv:.3g}. Acceptez un CV d'au moins {cv:.3g}, ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="31"/>
+        <location filename="../processing/engine/counting.py" line="42"/>
         <source>needs a positive area_m2</source>
         <translation>a besoin d'un area_m2 positif</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="36"/>
+        <location filename="../processing/engine/counting.py" line="49"/>
         <source>has a line of zero length</source>
         <translation>a une ligne de longueur nulle</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="38"/>
+        <location filename="../processing/engine/counting.py" line="51"/>
         <source>has an unsupported geometry type ({kind})</source>
         <translation>a un type de géométrie non pris en charge ({kind})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/counting.py" line="65"/>
+        <location filename="../processing/engine/counting.py" line="107"/>
         <source>The detection probability must be in (0, 1] (got {detection:g}).</source>
         <translation>La probabilité de détection doit être dans ]0, 1] (reçu {detection:g}).</translation>
     </message>
@@ -3363,187 +3837,187 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>La taille de cellule doit être comprise entre 10 et 500 m (reçu {cell_size:g} m).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="213"/>
+        <location filename="../processing/engine/design_comparison.py" line="223"/>
         <source>The density surface must be a single raster band.</source>
         <translation>La surface de densité doit être une seule bande raster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="217"/>
+        <location filename="../processing/engine/design_comparison.py" line="227"/>
         <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
         <translation>La surface de densité doit être un raster orienté nord en haut (sans rotation) ; reprojetez-la d'abord.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="226"/>
+        <location filename="../processing/engine/design_comparison.py" line="236"/>
         <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
         <translation>La surface de densité ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone (et leurs systèmes de coordonnées de référence).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="245"/>
+        <location filename="../processing/engine/design_comparison.py" line="261"/>
         <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
         <translation>Une strate n'a pas de valeur de strate (NULL). Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="270"/>
+        <location filename="../processing/engine/design_comparison.py" line="293"/>
         <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
         <translation>{overlap} cellule(s) de la surface se trouvent dans plus d'une strate ; chacune a été attribuée à la première. Les strates ne devraient pas se chevaucher.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="275"/>
+        <location filename="../processing/engine/design_comparison.py" line="305"/>
         <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
         <translation>Aucun centre de cellule de la surface de densité ne se trouve dans la base de sondage : les cellules sont trop grossières pour elle, ou les deux ne se recouvrent pas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="281"/>
+        <location filename="../processing/engine/design_comparison.py" line="312"/>
         <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
         <translation>La surface de densité a {n} cellule(s) négative(s) dans la base de sondage. Le nombre attendu d'animaux par km² doit être de 0 ou plus : corrigez la surface (par exemple en la bornant à 0).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="287"/>
+        <location filename="../processing/engine/design_comparison.py" line="319"/>
         <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
         <translation>{n} cellule(s) de la base de sondage ({share:.1%}) n'ont pas de valeur sur la surface de densité et sont exclues de la population : la comparaison vaut pour le reste de la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="294"/>
+        <location filename="../processing/engine/design_comparison.py" line="327"/>
         <source>The density surface has no value in the frame.</source>
         <translation>La surface de densité n'a aucune valeur dans la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="300"/>
+        <location filename="../processing/engine/design_comparison.py" line="333"/>
         <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
         <translation>Les strates {ids} ne contiennent aucun centre de cellule de la surface de densité dans la base de sondage. Retirez-les, fusionnez-les avec une voisine, ou utilisez une surface plus fine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="199"/>
+        <location filename="../processing/engine/layout.py" line="207"/>
         <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
         <translation>SHAPE doit valoir 0 (point), 1 (carré), 2 (cercle) ou 3 (transect linéaire).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="93"/>
+        <location filename="../processing/engine/design_comparison.py" line="102"/>
         <source>SIZE must be more than 0 m: it is the counting radius of a point station.</source>
         <translation>SIZE doit dépasser 0 m : c'est le rayon de comptage d'une station ponctuelle.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="96"/>
+        <location filename="../processing/engine/design_comparison.py" line="105"/>
         <source>SIZE must be more than 0 m: it is the square unit&apos;s size.</source>
         <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité carrée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="97"/>
+        <location filename="../processing/engine/design_comparison.py" line="106"/>
         <source>SIZE must be more than 0 m: it is the circle unit&apos;s size.</source>
         <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité circulaire.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="98"/>
+        <location filename="../processing/engine/design_comparison.py" line="107"/>
         <source>SIZE must be more than 0 m: it is the line unit&apos;s size.</source>
         <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité linéaire.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="375"/>
+        <location filename="../processing/engine/design_comparison.py" line="408"/>
         <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
         <translation>Un transect linéaire a besoin de la demi-largeur de sa bande de comptage (plus de 0 m) : les animaux sont comptés jusqu'à cette distance de part et d'autre de la ligne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="632"/>
+        <location filename="../processing/engine/design_comparison.py" line="675"/>
         <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
         <translation>La surdispersion k doit valoir 0 (comptages de Poisson) ou plus.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="649"/>
+        <location filename="../processing/engine/design_comparison.py" line="696"/>
         <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
         <translation>Les strates couvrent {share:.1%} de la base de sondage : chaque plan est comparé sur la partie qu'elles couvrent.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="658"/>
+        <location filename="../processing/engine/design_comparison.py" line="706"/>
         <source>A stratum of the layout has no cells on the surface grid.</source>
         <translation>Une strate de la disposition n'a aucune cellule sur la grille de la surface.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="739"/>
+        <location filename="../processing/engine/design_comparison.py" line="790"/>
         <source>Unknown design {design}; use 0 to {last}.</source>
         <translation>Plan inconnu {design} ; utilisez 0 à {last}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="743"/>
+        <location filename="../processing/engine/design_comparison.py" line="794"/>
         <source>N_UNITS must be at least {minimum}.</source>
         <translation>N_UNITS doit valoir au moins {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="749"/>
+        <location filename="../processing/engine/design_comparison.py" line="804"/>
         <source>The {design} design needs strata: give the STRATA layer.</source>
         <translation>Le plan « {design} » a besoin de strates : indiquez la couche STRATA.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="70"/>
+        <location filename="../processing/engine/layout.py" line="74"/>
         <source>simple random</source>
         <translation>aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="84"/>
+        <location filename="../processing/engine/design_comparison.py" line="90"/>
         <source>stratified proportional</source>
         <translation>stratifié proportionnel</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="84"/>
         <source>stratified Neyman</source>
-        <translation>stratifié Neyman</translation>
+        <translation type="obsolete">stratifié Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="70"/>
+        <location filename="../processing/engine/layout.py" line="74"/>
         <source>systematic grid</source>
         <translation>grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="70"/>
+        <location filename="../processing/engine/layout.py" line="74"/>
         <source>spatially balanced</source>
         <translation>spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="827"/>
+        <location filename="../processing/engine/design_comparison.py" line="912"/>
         <source>REPLICATES must be at least 2.</source>
         <translation>REPLICATES doit valoir au moins 2.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="832"/>
+        <location filename="../processing/engine/design_comparison.py" line="939"/>
         <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
         <translation>Chaque inventaire simulé compterait environ {millions:.0f} millions de cellules de la surface ({units} unités de {unit_area:,.0f} m² sur des cellules de {cell_width:g} m), trop pour être simulé. Rééchantillonnez la surface en cellules plus grossières, ou comparez moins de plans ou d'unités.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1080"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
-        <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de leur strate ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.</translation>
+        <translation type="obsolete">{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de leur strate ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1080"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
-        <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de la base de sondage ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites le réduisent.</translation>
+        <translation type="obsolete">{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de la base de sondage ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites le réduisent.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1116"/>
+        <location filename="../processing/engine/design_comparison.py" line="1223"/>
         <source>{design}: {warning}</source>
         <translation>{design} : {warning}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1119"/>
+        <location filename="../processing/engine/design_comparison.py" line="1226"/>
         <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
         <translation>{design} avec {n_units} unités : {failed} des {replicates} inventaires simulés n'ont donné aucune estimation (une strate sans unité comptée, ou aucune unité dans la base de sondage) ; ils sont exclus de ses chiffres.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1157"/>
+        <location filename="../processing/engine/design_comparison.py" line="1266"/>
         <source>The range of units &apos;{text}&apos; cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
         <translation>La plage d'unités « {text} » ne peut pas être lue. Donnez des nombres entiers séparés par des virgules (p. ex. 20, 40, 80) ou début:fin:pas (p. ex. 20:100:20).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1163"/>
+        <location filename="../processing/engine/design_comparison.py" line="1273"/>
         <source>In the range of units &apos;{text}&apos;, &apos;{part}&apos; starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
         <translation>Dans la plage d'unités « {text} », « {part} » commence au-dessus de sa fin (début {start}, fin {stop}) et ne contient donc aucun nombre d'unités. Écrivez début:fin:pas avec un début inférieur ou égal à la fin (p. ex. {stop}:{start}:{step}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1168"/>
+        <location filename="../processing/engine/design_comparison.py" line="1279"/>
         <source>Every number of units in the range must be at least {minimum}.</source>
         <translation>Chaque nombre d'unités de la plage doit valoir au moins {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1172"/>
+        <location filename="../processing/engine/design_comparison.py" line="1283"/>
         <source>The range of units holds more than 20 values; give at most 20.</source>
         <translation>La plage d'unités contient plus de 20 valeurs ; donnez-en au plus 20.</translation>
     </message>
@@ -3553,182 +4027,182 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>{shown} … ({n} en tout)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="325"/>
+        <location filename="../processing/engine/estimation.py" line="394"/>
         <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
         <translation>Le champ {count_name} contient des valeurs qui ne sont pas des nombres pour les unités {ids}. Saisissez un comptage entier (0 si l'unité a été inventoriée sans rien voir) ou laissez le champ vide (NULL) pour les unités non inventoriées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="336"/>
+        <location filename="../processing/engine/estimation.py" line="405"/>
         <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
         <translation>Le champ {count_name} contient des comptages négatifs ou infinis pour les unités {ids}. Les comptages doivent valoir 0 ou plus ; corrigez-les, ou laissez le champ vide (NULL) si l'unité n'a pas été inventoriée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="487"/>
+        <location filename="../processing/engine/estimation.py" line="578"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
         <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones couvrent {area:.4g} {unit} qu'aucune strate ne couvre, si bien que l'estimation porterait sans le dire sur une base de sondage plus petite. Donnez à chaque polygone l'identifiant de sa strate, supprimez les polygones qui ne font pas partie de la base de sondage, ou choisissez d'écarter les strates sans unité inventoriée (la base de sondage se réduit alors).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="496"/>
+        <location filename="../processing/engine/estimation.py" line="587"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
         <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones ont été écartés, et la base de sondage a diminué des {area:.4g} {unit} qu'aucune strate ne couvre. Pour les garder dans la base de sondage, donnez à chaque polygone l'identifiant de sa strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="501"/>
+        <location filename="../processing/engine/estimation.py" line="550"/>
         <source>Layer &apos;{layer}&apos;: no polygon has a stratum id in the field &apos;{field}&apos;. Fill in the stratum ids, or choose the field that holds them.</source>
         <translation>Couche « {layer} » : aucun polygone n'a d'identifiant de strate dans le champ « {field} ». Renseignez les identifiants de strate, ou choisissez le champ qui les contient.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="519"/>
+        <location filename="../processing/engine/estimation.py" line="607"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
         <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) seraient comptés dans plus d'une strate, ce qui gonfle la surface de la base de sondage et l'abondance. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas : chaque parcelle de terrain appartient à une seule strate (découpez chaque chevauchement de toutes les strates sauf une, ou redessinez les limites communes).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="528"/>
+        <location filename="../processing/engine/estimation.py" line="616"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
         <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) sont comptés dans plus d'une strate, si bien que la surface de la base de sondage et l'abondance sont légèrement trop grandes. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas (alignez les limites communes par accrochage, ou découpez chaque chevauchement de toutes les strates sauf une).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="623"/>
+        <location filename="../processing/engine/estimation.py" line="678"/>
         <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
         <translation>Le niveau de confiance doit être compris entre 0 et 1 (reçu {confidence}) ; utilisez p. ex. 0.95.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="627"/>
+        <location filename="../processing/engine/estimation.py" line="682"/>
         <source>Unknown interval method {method!r}; use one of {methods}.</source>
         <translation>Méthode d'intervalle inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="631"/>
+        <location filename="../processing/engine/estimation.py" line="686"/>
         <source>Unknown variance method {method!r}; use one of {methods}.</source>
         <translation>Méthode de variance inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="635"/>
+        <location filename="../processing/engine/estimation.py" line="690"/>
         <source>The detection probability must lie in (0, 1] (got {p}).</source>
         <translation>La probabilité de détection doit être dans ]0, 1] (reçu {p}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="638"/>
+        <location filename="../processing/engine/estimation.py" line="693"/>
         <source>The standard error of the detection probability must be 0 or more.</source>
         <translation>L'erreur type de la probabilité de détection doit valoir 0 ou plus.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="648"/>
+        <location filename="../processing/engine/estimation.py" line="712"/>
         <source>unit_ids must have one id per unit.</source>
         <translation>unit_ids doit avoir un identifiant par unité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="652"/>
+        <location filename="../processing/engine/estimation.py" line="716"/>
         <source>counts, unit_areas and strata must have one value per unit.</source>
         <translation>counts, unit_areas et strata doivent avoir une valeur par unité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="661"/>
+        <location filename="../processing/engine/estimation.py" line="755"/>
         <source>Strata {ids} have no area. Check the strata layer&apos;s geometries.</source>
         <translation>Les strates {ids} n'ont pas de surface. Vérifiez les géométries de la couche des strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="670"/>
+        <location filename="../processing/engine/estimation.py" line="768"/>
         <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
         <translation>Les unités {ids} n'ont pas de strate (le champ de strate est vide). Renseignez leur strate, ou omettez le champ de strate pour traiter la base de sondage comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="681"/>
+        <location filename="../processing/engine/estimation.py" line="779"/>
         <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
         <translation>Les unités {ids} ont des identifiants de strate ({names}) absents de la couche des strates. Vérifiez le champ de strate des unités et le champ d'identifiant de la couche des strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="691"/>
+        <location filename="../processing/engine/estimation.py" line="725"/>
         <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
         <translation>{n} unité(s) n'ont pas de comptage et sont traitées comme non inventoriées (non-réponse) : {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="696"/>
+        <location filename="../processing/engine/estimation.py" line="731"/>
         <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
         <translation>Aucune unité n'a de comptage : rien ne peut être estimé. Saisissez les comptages des unités inventoriées (0 si rien n'a été vu) dans le champ de comptage.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="702"/>
         <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
-        <translation>Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
+        <translation type="obsolete">Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="713"/>
+        <location filename="../processing/engine/estimation.py" line="828"/>
         <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
         <translation>Les données de présence doivent valoir 0 ou 1 ; les unités {ids} contiennent d'autres valeurs. Utilisez les comptages sans l'option de présence, ou recodez le champ.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="720"/>
+        <location filename="../processing/engine/estimation.py" line="836"/>
         <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
         <translation>La probabilité de détection n'a pas été appliquée aux données de présence : diviser une proportion d'unités occupées par p n'est pas une correction d'occupation, qui demande des visites répétées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="738"/>
+        <location filename="../processing/engine/estimation.py" line="797"/>
         <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
         <translation>Aucune unité des strates {ids} n'a été inventoriée : leur abondance ne peut pas être estimée. Inventoriez-y des unités, ou choisissez d'exclure ces strates (l'estimation couvre alors une base de sondage plus petite).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="746"/>
+        <location filename="../processing/engine/estimation.py" line="804"/>
         <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
         <translation>Les strates {ids} n'avaient aucune unité inventoriée et ont été exclues : la base de sondage a diminué de {dropped_area:.6g} unités de surface, et l'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="762"/>
+        <location filename="../processing/engine/estimation.py" line="912"/>
         <source>The local neighbourhood variance needs the positions of the units.</source>
         <translation>La variance de voisinage local a besoin des positions des unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="767"/>
+        <location filename="../processing/engine/estimation.py" line="917"/>
         <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
         <translation>Les unités {ids} n'ont pas de position : la variance de voisinage local ne peut pas les utiliser. Donnez leurs emplacements, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="793"/>
+        <location filename="../processing/engine/estimation.py" line="1016"/>
         <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
         <translation>Dans les strates {ids}, la surface inventoriée dépasse la surface de la strate. Vérifiez les surfaces des unités et l'unité de surface, ou désactivez la correction de population finie.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="835"/>
         <source>{label} (one unit) collapsed with {others}</source>
-        <translation>{label} (une unité) regroupée avec {others}</translation>
+        <translation type="obsolete">{label} (une unité) regroupée avec {others}</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="842"/>
         <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
-        <translation>Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
+        <translation type="obsolete">Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="847"/>
+        <location filename="../processing/engine/estimation.py" line="1090"/>
         <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
         <translation>La seule strate n'a qu'une unité inventoriée : aucune variance, erreur type ou intervalle ne peut être estimé. Inventoriez au moins deux unités.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="863"/>
         <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
-        <translation>Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
+        <translation type="obsolete">Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="899"/>
+        <location filename="../processing/engine/estimation.py" line="1454"/>
         <source>The bootstrap needs a random generator (rng).</source>
         <translation>Le bootstrap a besoin d'un générateur aléatoire (rng).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="932"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
-        <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0 et son CV n'est pas défini.</translation>
+        <translation type="obsolete">Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0 et son CV n'est pas défini.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="936"/>
         <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
-        <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
+        <translation type="obsolete">Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="981"/>
+        <location filename="../processing/engine/estimation.py" line="1219"/>
         <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability&apos;s own CV is {cv_p:.3g}. Improve the detection study first.</source>
         <translation>Le CV cible {target_cv:.3g} ne peut pas être atteint avec plus d'unités : le CV propre de la probabilité de détection est de {cv_p:.3g}. Améliorez d'abord l'étude de détection.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="990"/>
+        <location filename="../processing/engine/estimation.py" line="1231"/>
         <source>No variation was observed, so the next survey&apos;s sample sizes are set to the minimum of 2 per stratum.</source>
         <translation>Aucune variation n'a été observée : les tailles d'échantillon du prochain inventaire sont fixées au minimum de 2 par strate.</translation>
     </message>
@@ -3768,287 +4242,287 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Aucun point n'a pu être tiré dans une surface de {area:.3g} m² : elle est trop mince pour accueillir une unité d'échantillonnage. Cherchez les liserés dans la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="196"/>
+        <location filename="../processing/engine/layout.py" line="204"/>
         <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
         <translation>DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="80"/>
+        <location filename="../processing/engine/layout.py" line="84"/>
         <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité ponctuelle ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="81"/>
+        <location filename="../processing/engine/layout.py" line="85"/>
         <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité carrée ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="82"/>
+        <location filename="../processing/engine/layout.py" line="86"/>
         <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité circulaire ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="83"/>
+        <location filename="../processing/engine/layout.py" line="87"/>
         <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité linéaire ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="204"/>
+        <location filename="../processing/engine/layout.py" line="212"/>
         <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
         <translation>BEARING doit valoir -1 (aléatoire) ou être compris entre 0 et 360 degrés ; il vaut {bearing}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="208"/>
+        <location filename="../processing/engine/layout.py" line="216"/>
         <source>MIN_SPACING must be 0 or more metres.</source>
         <translation>MIN_SPACING doit valoir 0 mètre ou plus.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="210"/>
+        <location filename="../processing/engine/layout.py" line="218"/>
         <source>RESERVE must be 0 or a positive whole number.</source>
         <translation>RESERVE doit valoir 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="389"/>
+        <location filename="../processing/engine/layout.py" line="408"/>
         <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
         <translation>{field} est vide (NULL) ou n'est pas un nombre pour la ou les entités {ids}. Donnez à chaque strate un nombre entier d'unités, ou laissez N_FIELD vide pour utiliser N_UNITS.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="396"/>
+        <location filename="../processing/engine/layout.py" line="415"/>
         <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
         <translation>{field} est négatif pour la ou les entités {ids}. Utilisez 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="403"/>
+        <location filename="../processing/engine/layout.py" line="422"/>
         <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
         <translation>{field} n'est pas un nombre entier pour la ou les entités {ids}. Arrondissez d'abord l'allocation à des unités entières.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="487"/>
+        <location filename="../processing/engine/layout.py" line="506"/>
         <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
         <translation>Indiquez N_FIELD (unités par strate) ou N_UNITS (un total d'au moins 1).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="503"/>
+        <location filename="../processing/engine/layout.py" line="522"/>
         <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
         <translation>Une géométrie invalide a été réparée pour la ou les entités {ids} ; vérifiez leurs contours.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="507"/>
+        <location filename="../processing/engine/layout.py" line="526"/>
         <source>Empty or zero-area feature(s) {ids} were skipped.</source>
         <translation>Les entités vides ou de surface nulle {ids} ont été ignorées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="510"/>
+        <location filename="../processing/engine/layout.py" line="529"/>
         <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
         <translation>Les entités {ids} ont moins de {area:g} m² de surface (des liserés, laissés par exemple par une superposition ou une reprojection) et ont été écartées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="516"/>
+        <location filename="../processing/engine/layout.py" line="535"/>
         <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
         <translation>La base de sondage n'a aucun polygone de {area:g} m² ou plus : chaque entité est vide, de surface nulle ou n'est qu'un liseré.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="527"/>
+        <location filename="../processing/engine/layout.py" line="546"/>
         <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
         <translation>{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="555"/>
+        <location filename="../processing/engine/layout.py" line="574"/>
         <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
         <translation>Les entités de la base de sondage (sans champ de strate) portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités ou choisissez un champ de strate pour que chaque entité soit une strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="555"/>
+        <location filename="../processing/engine/layout.py" line="574"/>
         <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
         <translation>Les entités de la strate {key} portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="572"/>
+        <location filename="../processing/engine/layout.py" line="591"/>
         <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
         <translation>N_UNITS = {n_units} fait moins de {minimum} par strate pour {n_strata} strates ; chaque strate en reçoit {minimum} ({total} unités).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="86"/>
+        <location filename="../processing/engine/layout.py" line="90"/>
         <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="91"/>
+        <location filename="../processing/engine/layout.py" line="95"/>
         <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="96"/>
+        <location filename="../processing/engine/layout.py" line="100"/>
         <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="101"/>
+        <location filename="../processing/engine/layout.py" line="105"/>
         <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="106"/>
+        <location filename="../processing/engine/layout.py" line="110"/>
         <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="111"/>
+        <location filename="../processing/engine/layout.py" line="115"/>
         <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="116"/>
+        <location filename="../processing/engine/layout.py" line="120"/>
         <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="121"/>
+        <location filename="../processing/engine/layout.py" line="125"/>
         <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="588"/>
+        <location filename="../processing/engine/layout.py" line="607"/>
         <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="588"/>
+        <location filename="../processing/engine/layout.py" line="607"/>
         <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="598"/>
+        <location filename="../processing/engine/layout.py" line="617"/>
         <source>The frame gets no units; the estimate cannot speak for it.</source>
         <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="598"/>
+        <location filename="../processing/engine/layout.py" line="617"/>
         <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
         <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="603"/>
+        <location filename="../processing/engine/layout.py" line="622"/>
         <source>The frame gets one unit only; its variance cannot be estimated.</source>
         <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="603"/>
+        <location filename="../processing/engine/layout.py" line="622"/>
         <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
         <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="628"/>
+        <location filename="../processing/engine/layout.py" line="647"/>
         <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
         <translation>Des strates se chevauchent ({pairs}) : un lieu n'appartient qu'à une strate, et les unités d'une zone commune seraient tirées dans les deux strates et pondérées deux fois. Rendez les polygones des strates disjoints (par exemple avec les outils Différence ou Union de l'hôte) et relancez.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="632"/>
+        <location filename="../processing/engine/layout.py" line="651"/>
         <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
         <translation>Des strates se chevauchent légèrement ({pairs}) ; les unités qui s'y trouvent appartiennent aux deux. Rendez les polygones des strates disjoints si ce n'est pas qu'une imprécision de numérisation.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="717"/>
+        <location filename="../processing/engine/layout.py" line="736"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="717"/>
+        <location filename="../processing/engine/layout.py" line="736"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="817"/>
+        <location filename="../processing/engine/layout.py" line="836"/>
         <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
         <translation>Une grille systématique de pas {spacing:.3g} m sur une surface de {area:,.1f} m² étalée sur {width:,.0f} m x {height:,.0f} m demanderait {count:,} points candidats. La surface est un liseré ou bien trop petite pour le nombre d'unités : cherchez les liserés dans la base de sondage, demandez moins d'unités ou choisissez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="886"/>
+        <location filename="../processing/engine/layout.py" line="905"/>
         <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="886"/>
+        <location filename="../processing/engine/layout.py" line="905"/>
         <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="906"/>
+        <location filename="../processing/engine/layout.py" line="925"/>
         <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="906"/>
+        <location filename="../processing/engine/layout.py" line="925"/>
         <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="917"/>
+        <location filename="../processing/engine/layout.py" line="936"/>
         <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="917"/>
+        <location filename="../processing/engine/layout.py" line="936"/>
         <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="944"/>
         <source>The frame has only {n} of {r} reserve units.</source>
         <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="944"/>
         <source>Stratum {key} has only {n} of {r} reserve units.</source>
         <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="141"/>
+        <location filename="../processing/engine/layout.py" line="145"/>
         <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>début du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="144"/>
+        <location filename="../processing/engine/layout.py" line="148"/>
         <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>début du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="147"/>
+        <location filename="../processing/engine/layout.py" line="151"/>
         <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="150"/>
+        <location filename="../processing/engine/layout.py" line="154"/>
         <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="133"/>
+        <location filename="../processing/engine/layout.py" line="137"/>
         <source>point unit {unit} (primary, stratum {stratum})</source>
         <translation>unité ponctuelle {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="134"/>
+        <location filename="../processing/engine/layout.py" line="138"/>
         <source>point unit {unit} (reserve, stratum {stratum})</source>
         <translation>unité ponctuelle {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="135"/>
+        <location filename="../processing/engine/layout.py" line="139"/>
         <source>square unit {unit} (primary, stratum {stratum})</source>
         <translation>unité carrée {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="136"/>
+        <location filename="../processing/engine/layout.py" line="140"/>
         <source>square unit {unit} (reserve, stratum {stratum})</source>
         <translation>unité carrée {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="137"/>
+        <location filename="../processing/engine/layout.py" line="141"/>
         <source>circle unit {unit} (primary, stratum {stratum})</source>
         <translation>unité circulaire {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="138"/>
+        <location filename="../processing/engine/layout.py" line="142"/>
         <source>circle unit {unit} (reserve, stratum {stratum})</source>
         <translation>unité circulaire {unit} (de réserve, strate {stratum})</translation>
     </message>
@@ -4567,6 +5041,301 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <source>The working day must be longer than 0 hours.</source>
         <translation>La journée de travail doit durer plus de 0 heure.</translation>
     </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="90"/>
+        <source>stratified Neyman (best case)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="90"/>
+        <source>stratified Neyman (pilot)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="678"/>
+        <source>The pilot needs at least 2 units per stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units kept inside never reach the edge of the frame or of their stratum, so the edge band weighs less in the estimate; where its density differs from the interior, the estimate is biased. Plus sampling (INSIDE off) removes this bias.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). Plus sampling is unbiased, so the likely cause is the ratio estimator with very few animals per unit, or a systematic grid whose realised number of units varies with the surface; more units reduce it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="251"/>
+        <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="116"/>
+        <source>The truncation distance must be above 0 m (got {w:g} m).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="121"/>
+        <source>{count} distances are missing or not numbers. Fill them in or leave those detections out.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="126"/>
+        <source>{count} distances are negative. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="132"/>
+        <source>{count} distances lie beyond the truncation distance of {w:g} m. Leave them out first (right truncation) or raise the truncation distance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="138"/>
+        <source>A detection function needs at least 2 distances (got {n}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="146"/>
+        <source>The distance bands must start at 0 m, increase, and end at the truncation distance {w:g} m, with at least two bands (got {cutpoints}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="745"/>
+        <source>Without a truncation distance only the half-normal key alone can be fitted; give a truncation distance for {model}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="752"/>
+        <source>The model {model} has {q} parameters, more than the {free} the distances can support. Use fewer cosine terms or more distance bands.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="820"/>
+        <source>Choose at least one key function among half-normal, hazard-rate and uniform.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/detection_functions.py" line="846"/>
+        <source>No detection function could be fitted to these {n} distances. Check the distances and the truncation distance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="118"/>
+        <source>Layer &apos;{layer}&apos;: {n} units have no id in the field &apos;{field}&apos;. Give every unit its id.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="124"/>
+        <source>Layer &apos;{layer}&apos;: the unit ids {ids} occur more than once in the field &apos;{field}&apos;. Each unit needs its own id.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="133"/>
+        <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="137"/>
+        <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="146"/>
+        <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="156"/>
+        <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="163"/>
+        <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="184"/>
+        <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="192"/>
+        <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="199"/>
+        <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="211"/>
+        <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="224"/>
+        <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="232"/>
+        <source>There are no observations: a detection function needs at least {minimum} detections.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="261"/>
+        <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="269"/>
+        <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="419"/>
+        <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="438"/>
+        <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="444"/>
+        <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="451"/>
+        <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="457"/>
+        <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="662"/>
+        <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="750"/>
+        <source>Unknown group-size method &apos;{method}&apos;.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="755"/>
+        <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="772"/>
+        <source>The bootstrap needs a random generator (a seed).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="780"/>
+        <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="697"/>
+        <source>The degrees of freedom of the detection estimate must be 0 (known p) or more.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="738"/>
+        <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
+        <translation type="unfinished">Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="821"/>
+        <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
+        <translation type="unfinished">Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="865"/>
+        <source>The finite-population correction was not applied in strata {ids}: their units come from a design whose units may overlap ({records}: simple random centres, or a grid denser than the units). Their possible positions form a continuous population, which has no such correction (Cordy 1993); applying it would make the interval too narrow. A layout with MIN_SPACING of at least the unit&apos;s width, a systematic grid or a spatially balanced layout keeps the units apart.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="884"/>
+        <source>The expansion area of strata {ids} is smaller than the stratum: the plus region holds the stratum. Check the units&apos; edge record.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="903"/>
+        <source>In strata {ids} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1064"/>
+        <source>Strata {ids} have fewer than 3 units: their variance uses the simple random sampling formula.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1078"/>
+        <source>{label} (one unit) with {other}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1083"/>
+        <source>Strata {groups}: a stratum with one surveyed unit takes its variance from the collapsed-strata pairs formula with its partner (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow weights for unequal sizes), which counts the difference between the two strata as variance and so tends to be too large; the partner keeps its own variance.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1243"/>
+        <source>Even every possible unit in every stratum ({n:,}) would miss the target CV {target_cv:.3g}: n_next is every unit.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1466"/>
+        <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1478"/>
+        <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1486"/>
+        <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/estimation.py" line="1530"/>
+        <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="91"/>
+        <source>The detection function must be 1 (half-normal) or 2 (hazard-rate).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="95"/>
+        <source>The scale σ must be above 0 m and the hazard-rate shape above 0 (got σ = {sigma:g} m, shape {shape:g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="100"/>
+        <source>The detection probability on the line must be in (0, 1] (got {g0:g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/simulated_distances.py" line="109"/>
+        <source>Units {ids} are neither points nor lines of some length; simulated distances need line transects or point stations.</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>PlotwisePlugin</name>
@@ -4589,17 +5358,17 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
 <context>
     <name>PlotwiseProvider</name>
     <message>
-        <location filename="../processing/provider.py" line="96"/>
+        <location filename="../processing/provider.py" line="98"/>
         <source>Plotwise</source>
         <translation>Plotwise</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="99"/>
+        <location filename="../processing/provider.py" line="101"/>
         <source>Plotwise survey design and estimation</source>
         <translation>Plotwise : conception d'inventaires et estimation</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="119"/>
+        <location filename="../processing/provider.py" line="121"/>
         <source>The example model {path} could not be read.</source>
         <translation>Le modèle d'exemple {path} n'a pas pu être lu.</translation>
     </message>
@@ -5361,6 +6130,1411 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <source>stratum {key}</source>
         <translation>strate {key}</translation>
     </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="40"/>
+        <source>equal</source>
+        <translation type="unfinished">égale</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="41"/>
+        <source>proportional to area</source>
+        <translation type="unfinished">proportionnelle à la surface</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="42"/>
+        <source>Neyman</source>
+        <translation type="unfinished">Neyman</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="43"/>
+        <source>optimal with cost</source>
+        <translation type="unfinished">optimale avec coût</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="57"/>
+        <source>Allocation of survey effort</source>
+        <translation type="unfinished">Allocation de l'effort d'inventaire</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="59"/>
+        <source>field days</source>
+        <translation type="unfinished">jours de terrain</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="59"/>
+        <source>cost units</source>
+        <translation type="unfinished">unités de coût</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="65"/>
+        <source>units in total</source>
+        <translation type="unfinished">unités au total</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="66"/>
+        <source>method</source>
+        <translation type="unfinished">méthode</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="69"/>
+        <source>expected CV of the overall density</source>
+        <translation type="unfinished">CV attendu de la densité globale</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="71"/>
+        <source>field days needed</source>
+        <translation type="unfinished">jours de terrain nécessaires</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="71"/>
+        <source>cost</source>
+        <translation type="unfinished">coût</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="81"/>
+        <source>a total number of units</source>
+        <translation type="unfinished">un nombre total d'unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="82"/>
+        <source>a budget</source>
+        <translation type="unfinished">un budget</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="83"/>
+        <source>a target CV</source>
+        <translation type="unfinished">un CV cible</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Strata layer</source>
+        <translation type="unfinished">Couche des strates</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="204"/>
+        <source>Computation CRS</source>
+        <translation type="unfinished">SCR de calcul</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Method asked for</source>
+        <translation type="unfinished">Méthode demandée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Method applied</source>
+        <translation type="unfinished">Méthode appliquée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Target</source>
+        <translation type="unfinished">Objectif</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Total asked for</source>
+        <translation type="unfinished">Total demandé</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Budget</source>
+        <translation type="unfinished">Budget</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Target CV</source>
+        <translation type="unfinished">CV cible</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Unit area (m²)</source>
+        <translation type="unfinished">Surface d'une unité (m²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Minimum units per stratum</source>
+        <translation type="unfinished">Nombre minimal d'unités par strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>SD field</source>
+        <translation type="unfinished">Champ d'écart-type</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source> (covariate proxy)</source>
+        <translation type="unfinished"> (substitut par la covariable)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Mean field</source>
+        <translation type="unfinished">Champ de moyenne</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Cost field</source>
+        <translation type="unfinished">Champ de coût</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Fixed cost c0</source>
+        <translation type="unfinished">Coût fixe c0</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="85"/>
+        <source>Layout to come</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="209"/>
+        <source>Finite-population correction</source>
+        <translation type="unfinished">Correction pour population finie</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="119"/>
+        <source>Units per stratum</source>
+        <translation type="unfinished">Unités par strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="120"/>
+        <source>SE of mean per unit (covariate units)</source>
+        <translation type="unfinished">Erreur type de la moyenne par unité (unités de la covariable)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="120"/>
+        <source>SE of mean count per unit</source>
+        <translation type="unfinished">Erreur type du comptage moyen par unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="127"/>
+        <source>Units that fit</source>
+        <translation type="unfinished">Unités qui y tiennent</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="128"/>
+        <source>Lower bound</source>
+        <translation type="unfinished">Borne inférieure</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="129"/>
+        <source>Share before rounding</source>
+        <translation type="unfinished">Part avant arrondi</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="130"/>
+        <source>Units (n_alloc)</source>
+        <translation type="unfinished">Unités (n_alloc)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="131"/>
+        <source>Sampling fraction</source>
+        <translation type="unfinished">Fraction d'échantillonnage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="136"/>
+        <source>SE of density (per km²)</source>
+        <translation type="unfinished">Erreur type de la densité (par km²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="138"/>
+        <source>Expected CV (exp_cv)</source>
+        <translation type="unfinished">CV attendu (exp_cv)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="379"/>
+        <source>all strata</source>
+        <translation type="unfinished">toutes les strates</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="172"/>
+        <source>units per stratum</source>
+        <translation type="unfinished">unités par strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="172"/>
+        <source>Units allocated to each stratum</source>
+        <translation type="unfinished">Unités allouées à chaque strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="196"/>
+        <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
+        <translation type="unfinished">{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="196"/>
+        <source>Field days needed</source>
+        <translation type="unfinished">Jours de terrain nécessaires</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="196"/>
+        <source>Cost of the design</source>
+        <translation type="unfinished">Coût du plan</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="210"/>
+        <source>What the choice of method buys, at {n} units</source>
+        <translation type="unfinished">Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="214"/>
+        <source>stratum {label}</source>
+        <translation type="unfinished">strate {label}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="217"/>
+        <source>Variance relative to the applied allocation</source>
+        <translation type="unfinished">Variance relative à l'allocation appliquée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="219"/>
+        <source>Expected CV</source>
+        <translation type="unfinished">CV attendu</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="230"/>
+        <source>Without standard deviations the precision of the designs cannot be compared.</source>
+        <translation type="unfinished">Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="43"/>
+        <source>Survey designs compared by simulation</source>
+        <translation type="unfinished">Plans d'inventaire comparés par simulation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="49"/>
+        <source>recommended design</source>
+        <translation type="unfinished">plan recommandé</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="50"/>
+        <source>its RMSE (animals)</source>
+        <translation type="unfinished">sa REQM (animaux)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="51"/>
+        <source>its RMSE relative to the total</source>
+        <translation type="unfinished">sa REQM relative au total</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="52"/>
+        <source>its 95 % interval coverage</source>
+        <translation type="unfinished">couverture de ses intervalles à 95 %</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="54"/>
+        <source>expected animals in the frame</source>
+        <translation type="unfinished">animaux attendus dans la base de sondage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="57"/>
+        <source>point station</source>
+        <translation type="unfinished">station ponctuelle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="58"/>
+        <source>square plot</source>
+        <translation type="unfinished">placette carrée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="59"/>
+        <source>circular plot</source>
+        <translation type="unfinished">placette circulaire</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="60"/>
+        <source>line transect</source>
+        <translation type="unfinished">transect linéaire</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="63"/>
+        <source>counting radius</source>
+        <translation type="unfinished">rayon de comptage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="64"/>
+        <source>side</source>
+        <translation type="unfinished">côté</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="65"/>
+        <source>radius</source>
+        <translation type="unfinished">rayon</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="66"/>
+        <source>length</source>
+        <translation type="unfinished">longueur</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="71"/>
+        <source>, strip half-width {w:g} m</source>
+        <translation type="unfinished">, demi-largeur de bande {w:g} m</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="73"/>
+        <source>Density surface</source>
+        <translation type="unfinished">Surface de densité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="74"/>
+        <source>Sampling frame</source>
+        <translation type="unfinished">Base de sondage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="252"/>
+        <source>Strata</source>
+        <translation type="unfinished">Strates</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="147"/>
+        <source>none</source>
+        <translation type="unfinished">aucune</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="200"/>
+        <source>Stratum field</source>
+        <translation type="unfinished">Champ de strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="77"/>
+        <source>feature id</source>
+        <translation type="unfinished">identifiant d'entité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="79"/>
+        <source>Surface cell</source>
+        <translation type="unfinished">Cellule de la surface</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="80"/>
+        <source>Sub-cells per cell side (for counting)</source>
+        <translation type="unfinished">Sous-cellules par côté de cellule (pour le comptage)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="81"/>
+        <source>Unit</source>
+        <translation type="unfinished">Unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="82"/>
+        <source>Counted area per unit (m²)</source>
+        <translation type="unfinished">Surface comptée par unité (m²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <source>Bearing</source>
+        <translation type="unfinished">Azimut</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <source>random</source>
+        <translation type="unfinished">aléatoire</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="86"/>
+        <source>Units wholly inside their stratum</source>
+        <translation type="unfinished">Unités entièrement dans leur strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="91"/>
+        <source>Number of units</source>
+        <translation type="unfinished">Nombre d'unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="92"/>
+        <source>Simulated surveys per design</source>
+        <translation type="unfinished">Inventaires simulés par plan</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <source>Counts per cell</source>
+        <translation type="unfinished">Comptages par cellule</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <source>negative binomial, k = {k:g}</source>
+        <translation type="unfinished">binomiale négative, k = {k:g}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <source>Poisson</source>
+        <translation type="unfinished">Poisson</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <source>Variance estimator (grid, balanced)</source>
+        <translation type="unfinished">Estimateur de variance (grille, équilibré)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <source>local neighbourhood</source>
+        <translation type="unfinished">voisinage local</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="164"/>
+        <source>simple random sampling formula</source>
+        <translation type="unfinished">formule de l'échantillonnage aléatoire simple</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="206"/>
+        <source>Confidence level</source>
+        <translation type="unfinished">Niveau de confiance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="222"/>
+        <source>Seed</source>
+        <translation type="unfinished">Graine</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="109"/>
+        <source>How the designs did at {n} units</source>
+        <translation type="unfinished">Résultats des plans pour {n} unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="111"/>
+        <source>Design</source>
+        <translation type="unfinished">Plan</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="112"/>
+        <source>Mean units surveyed</source>
+        <translation type="unfinished">Unités inventoriées en moyenne</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="113"/>
+        <source>Relative bias</source>
+        <translation type="unfinished">Biais relatif</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
+        <source>Empirical SE (animals)</source>
+        <translation type="unfinished">Erreur type empirique (animaux)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="311"/>
+        <source>RMSE (animals)</source>
+        <translation type="unfinished">REQM (animaux)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="116"/>
+        <source>± Monte Carlo SE</source>
+        <translation type="unfinished">± erreur type de Monte-Carlo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="117"/>
+        <source>RMSE / total</source>
+        <translation type="unfinished">REQM / total</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="118"/>
+        <source>Mean estimated CV</source>
+        <translation type="unfinished">CV estimé moyen</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="119"/>
+        <source>95 % interval coverage</source>
+        <translation type="unfinished">Couverture des intervalles à 95 %</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="120"/>
+        <source>Surveys without an estimate</source>
+        <translation type="unfinished">Inventaires sans estimation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <source>RMSE of the abundance (animals)</source>
+        <translation type="unfinished">REQM de l'abondance (animaux)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
+        <translation type="unfinished">Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="166"/>
+        <source>Recommendation</source>
+        <translation type="unfinished">Recommandation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="168"/>
+        <source>No design gave estimates: see the warnings.</source>
+        <translation type="unfinished">Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="212"/>
+        <source>How the simulation works</source>
+        <translation type="unfinished">Fonctionnement de la simulation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="257"/>
+        <source>Area (km²)</source>
+        <translation type="unfinished">Surface (km²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="258"/>
+        <source>Mean expected count per unit</source>
+        <translation type="unfinished">Comptage attendu moyen par unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="259"/>
+        <source>S_h (count SD per unit)</source>
+        <translation type="unfinished">S_h (écart-type du comptage par unité)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="262"/>
+        <source>Units, proportional</source>
+        <translation type="unfinished">Unités, proportionnelle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="264"/>
+        <source>Units, Neyman (best case)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="266"/>
+        <source>Units, Neyman from a pilot (mean)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="292"/>
+        <source>RMSE against the number of units</source>
+        <translation type="unfinished">REQM en fonction du nombre d'unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <source>number of units</source>
+        <translation type="unfinished">nombre d'unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <source>RMSE of the abundance estimate against the number of units</source>
+        <translation type="unfinished">REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="307"/>
+        <source>Units</source>
+        <translation type="unfinished">Unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="318"/>
+        <source>{a} → {b} units: RMSE {change:+.0%}</source>
+        <translation type="unfinished">{a} → {b} unités : REQM {change:+.0%}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="323"/>
+        <source>For {name}: </source>
+        <translation type="unfinished">Pour {name} : </translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="125"/>
+        <source>{level} interval</source>
+        <translation type="unfinished">intervalle à {level}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="383"/>
+        <source>animals per {unit}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="378"/>
+        <source>transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="378"/>
+        <source>points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="120"/>
+        <source>estimated animals in the frame</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="244"/>
+        <source>CV</source>
+        <translation type="unfinished">CV</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="124"/>
+        <source>detections used</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="128"/>
+        <source>detection probability within the truncation distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="129"/>
+        <source>effective strip half-width (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="129"/>
+        <source>effective detection radius (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="138"/>
+        <source>the last band edge</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="140"/>
+        <source>automatic: the farthest 5 % of the distances left out</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="148"/>
+        <source>{layer} (id field {field})</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="150"/>
+        <source>{layer} (unit field {unit}, distance field {distance})</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="152"/>
+        <source>line transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="152"/>
+        <source>point transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="154"/>
+        <source>none: exact distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="156"/>
+        <source>one per stratum</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="156"/>
+        <source>one for all strata</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="159"/>
+        <source>mean, or size-bias regression when larger groups are seen farther</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="161"/>
+        <source>mean of the detected groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="162"/>
+        <source>size-bias regression</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Transects or points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Survey type</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="201"/>
+        <source>none: one stratum</source>
+        <translation type="unfinished">aucun : une seule strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Visits field</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Observations</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Group size field</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>none: each detection is one animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="203"/>
+        <source>Strata (frame)</source>
+        <translation type="unfinished">Strates (base de sondage)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Truncation distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Distance bands (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Key functions tried</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Most cosine terms per key</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="206"/>
+        <source>Detection function</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="167"/>
+        <source>Group size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="205"/>
+        <source>Area unit</source>
+        <translation type="unfinished">Unité de surface</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="219"/>
+        <source>Bootstrap resamples</source>
+        <translation type="unfinished">Rééchantillonnages bootstrap</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="194"/>
+        <source>perpendicular distance from the line (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="194"/>
+        <source>Distances seen from the lines, with the fitted detection function scaled to the detections (its height at 0 is where every animal is seen)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="197"/>
+        <source>distance from the point (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="197"/>
+        <source>Distances seen from the points, with the fitted probability density of the distances: it rises from 0 because there is more ground farther from a point, then falls as detection drops</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="207"/>
+        <source>{n} of the {recorded} recorded detections lie within the truncation distance of {w:.1f} m and were used; {dropped} farther ones were left out.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="218"/>
+        <source>detections per metre of distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="218"/>
+        <source>fitted: {model}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="250"/>
+        <source>Stratum {stratum}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="237"/>
+        <source>Effective half-width (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="237"/>
+        <source>Effective radius (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="240"/>
+        <source>AIC above the best</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="241"/>
+        <source>Detection probability within w</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="242"/>
+        <source>Fit, χ² p</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="243"/>
+        <source>Fit, Cramér–von Mises p</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="244"/>
+        <source>Chosen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="245"/>
+        <source>Every model tried, in the order fitted ({n} detections). The smallest AIC is chosen; a fit p below 0.05 means the model misses the shape of the distances.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="259"/>
+        <source>Group size: {n} groups seen, mean size {mean:.3g}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="262"/>
+        <source>The regression of ln(size) on the detection probability has slope {b:.3g} (p = {p:.3f}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="266"/>
+        <source>Larger groups are seen farther away, so the expected size where every group is seen, {e:.3g} (SE {se:.3g}), is used instead of the mean.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="270"/>
+        <source>The mean is used (SE {se:.3g}).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="284"/>
+        <source>distance (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="284"/>
+        <source>probability of detection</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="286"/>
+        <source>The best model of each key function: the probability of seeing an animal at each distance (1 on the line or at the point, by assumption)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="292"/>
+        <source>Transects</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="292"/>
+        <source>Points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="293"/>
+        <source>Line length (km)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="293"/>
+        <source>Visits</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="295"/>
+        <source>Detections per km</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="295"/>
+        <source>Detections per visit</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="235"/>
+        <source>Area ({unit})</source>
+        <translation type="unfinished">Surface ({unit})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="299"/>
+        <source>Detections</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="300"/>
+        <source>Animals per {unit}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Lower limit</source>
+        <translation type="unfinished">Limite inférieure</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Upper limit</source>
+        <translation type="unfinished">Limite supérieure</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="245"/>
+        <source>df</source>
+        <translation type="unfinished">ddl</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="314"/>
+        <source>bootstrap percentile limits</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="314"/>
+        <source>log-normal limits with t</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="316"/>
+        <source>Density by stratum, {method} at {level}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="320"/>
+        <source>Animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="320"/>
+        <source>Abundance in the frame, limits at {level}.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="328"/>
+        <source>For comparison: the abundance&apos;s delta-method interval (log-normal with t).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="342"/>
+        <source>Share from the encounter rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="343"/>
+        <source>Share from the detection function</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="344"/>
+        <source>Share from group size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="345"/>
+        <source>Where the uncertainty comes from: each part's share of CV² (delta method). A large encounter-rate share calls for more transects; a large detection share for more detections.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="351"/>
+        <source>Density and abundance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="359"/>
+        <source>Density by stratum with {level} intervals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="372"/>
+        <source>lowest: {value:.3g}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="373"/>
+        <source>highest: {value:.3g}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="384"/>
+        <source>Strata shaded by density (animals per {unit}), with the surveyed {what}</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="391"/>
+        <source>Each detection function is a key (half-normal, hazard-rate or uniform) with up to the chosen number of cosine terms, fitted to the distances by maximum likelihood; terms are added one at a time while AIC falls, under the constraint that detection never rises with distance, and the model with the smallest AIC is used (Buckland et al. 2001).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="398"/>
+        <source>Density in a stratum is D = n·E(s) / (2·w·L·P), with n the groups seen within the truncation distance w, L the line length, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="404"/>
+        <source>Density in a stratum is D = n·E(s) / (k·π·w²·P), with n the groups seen within the truncation distance w, k the number of point visits, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="409"/>
+        <source>The squared CV of the density is the sum of those of the encounter rate, of P and of E(s) (delta method). The encounter rate's variance comes from the differences between transects within each stratum (estimator R2 of Fewster et al. 2009), that of P from the curvature of the likelihood, that of E(s) from the spread of group sizes. Intervals are log-normal, D/C to D·C with C = exp(t·√ln(1 + CV²)), t with Satterthwaite's degrees of freedom (Buckland et al. 2001). With one detection function for all strata, its uncertainty is shared by every stratum and counted once in the overall estimate.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="418"/>
+        <source>The intervals reported are bootstrap percentile intervals: {b} resamples drawn from the recorded seed, each taking as many transects or points per stratum as were surveyed, with replacement, refitting the chosen detection function and group size to their detections (AIC is not rerun). {f} resamples could not be fitted.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="427"/>
+        <source>Assumptions and cautions</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="428"/>
+        <source>The estimate is only as good as three things that happened in the field:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="431"/>
+        <source>Animals on the line are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="435"/>
+        <source>Animals at the point are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="438"/>
+        <source>Distances are measured accurately, with a rangefinder and compass where possible. Rounding to round numbers, or guessing, distorts the detection function; distance bands are then safer.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="441"/>
+        <source>Animals do not move before they are detected: animals fleeing from the observer look like a detection function that falls too early, and animals drawn to the observer like one that falls too late.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="445"/>
+        <source>The transects or points were placed at random (or on a randomly placed grid) with respect to the animals, and each stratum&apos;s estimate covers its polygons only: tracks and roads are not random lines.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/distancedensity.py" line="467"/>
+        <source>Density from detection distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="87"/>
+        <source>Naive occupancy from presence data</source>
+        <translation type="unfinished">Occupation naïve à partir de données de présence</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="87"/>
+        <source>Density and abundance estimate</source>
+        <translation type="unfinished">Estimation de la densité et de l'abondance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="106"/>
+        <source>proportion of units occupied (naive)</source>
+        <translation type="unfinished">proportion d'unités occupées (naïve)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="106"/>
+        <source>occupied units</source>
+        <translation type="unfinished">unités occupées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="109"/>
+        <source>density per {unit}</source>
+        <translation type="unfinished">densité par {unit}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="109"/>
+        <source>animals</source>
+        <translation type="unfinished">animaux</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="118"/>
+        <source>0 – {hi} (one-sided)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="124"/>
+        <source>estimated {what} in the frame</source>
+        <translation type="unfinished">estimation des {what} dans la base de sondage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="128"/>
+        <source>units surveyed</source>
+        <translation type="unfinished">unités inventoriées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="131"/>
+        <source>true total of the simulated population</source>
+        <translation type="unfinished">vrai total de la population simulée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="137"/>
+        <source>covers</source>
+        <translation type="unfinished">contient</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="137"/>
+        <source>misses</source>
+        <translation type="unfinished">ne contient pas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="159"/>
+        <source>t with Satterthwaite degrees of freedom</source>
+        <translation type="unfinished">t avec les degrés de liberté de Satterthwaite</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="160"/>
+        <source>log-normal (with t)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="161"/>
+        <source>stratified percentile bootstrap</source>
+        <translation type="unfinished">bootstrap stratifié des percentiles</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="165"/>
+        <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
+        <translation type="unfinished">voisinage local (Stevens &amp; Olsen 2003)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="166"/>
+        <source>local neighbourhood, scaled to the simple formula (our variant)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="176"/>
+        <source>plus sampling (units count only inside their stratum)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="177"/>
+        <source>units kept wholly inside their stratum</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="178"/>
+        <source>no record: whole units</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="180"/>
+        <source>field {field} (m²)</source>
+        <translation type="unfinished">champ {field} (m²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="180"/>
+        <source>polygon area</source>
+        <translation type="unfinished">surface du polygone</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="186"/>
+        <source>strip width</source>
+        <translation type="unfinished">largeur de bande</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="188"/>
+        <source>fixed</source>
+        <translation type="unfinished">fixe</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="190"/>
+        <source>asked for; applied in strata {yes}, refused in {no} (units may overlap)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="197"/>
+        <source>Sample units</source>
+        <translation type="unfinished">Unités d'échantillonnage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="198"/>
+        <source>Count field</source>
+        <translation type="unfinished">Champ de comptage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="199"/>
+        <source> (presence/absence)</source>
+        <translation type="unfinished"> (présence/absence)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="202"/>
+        <source>Unit area</source>
+        <translation type="unfinished">Surface d'une unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Interval</source>
+        <translation type="unfinished">Intervalle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="208"/>
+        <source>Variance estimator</source>
+        <translation type="unfinished">Estimateur de variance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="210"/>
+        <source>Edge protocol of the units</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="211"/>
+        <source>Detection probability p</source>
+        <translation type="unfinished">Probabilité de détection p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="214"/>
+        <source>Target CV for the next survey</source>
+        <translation type="unfinished">CV cible pour le prochain inventaire</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="222"/>
+        <source>not used (no random draws without the bootstrap)</source>
+        <translation type="unfinished">non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="232"/>
+        <source>Estimates by stratum</source>
+        <translation type="unfinished">Estimations par strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="236"/>
+        <source>Units (n)</source>
+        <translation type="unfinished">Unités (n)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="237"/>
+        <source>Not surveyed</source>
+        <translation type="unfinished">Non inventoriées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="238"/>
+        <source>Mean count</source>
+        <translation type="unfinished">Comptage moyen</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="239"/>
+        <source>SD of counts</source>
+        <translation type="unfinished">Écart-type des comptages</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="279"/>
+        <source>Occupied units</source>
+        <translation type="unfinished">Unités occupées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="279"/>
+        <source>Abundance</source>
+        <translation type="unfinished">Abondance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="257"/>
+        <source>Units next time (n_next)</source>
+        <translation type="unfinished">Unités la prochaine fois (n_next)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="272"/>
+        <source>{what}, limits at {level}.</source>
+        <translation type="unfinished">{what}, limites à {level}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="279"/>
+        <source>{what} in the frame, limits at {level}.</source>
+        <translation type="unfinished">{what} dans la base de sondage, limites à {level}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="308"/>
+        <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
+        <translation type="unfinished">Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="314"/>
+        <source>{n} unused reserve unit(s) without a count were skipped.</source>
+        <translation type="unfinished">{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="324"/>
+        <source>The overall interval by method</source>
+        <translation type="unfinished">L'intervalle global selon la méthode</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="325"/>
+        <source>Used in the outputs</source>
+        <translation type="unfinished">Utilisé dans les sorties</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>overall abundance in a resample</source>
+        <translation type="unfinished">abondance globale dans un rééchantillonnage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>resamples</source>
+        <translation type="unfinished">rééchantillonnages</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>{level} percentile limits</source>
+        <translation type="unfinished">limites des percentiles à {level}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="356"/>
+        <source>The {n:,} bootstrap resamples of the overall abundance</source>
+        <translation type="unfinished">Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="378"/>
+        <source>true density (simulation)</source>
+        <translation type="unfinished">vraie densité (simulation)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="388"/>
+        <source>{what} by stratum with {level} confidence intervals</source>
+        <translation type="unfinished">{what} par strate avec intervalles de confiance à {level}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="403"/>
+        <source>lowest</source>
+        <translation type="unfinished">minimum</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="403"/>
+        <source>highest</source>
+        <translation type="unfinished">maximum</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="414"/>
+        <source>surveyed units</source>
+        <translation type="unfinished">unités inventoriées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="424"/>
+        <source>not surveyed</source>
+        <translation type="unfinished">non inventoriées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="433"/>
+        <source>Strata shaded by {what}, with the units</source>
+        <translation type="unfinished">Strates ombrées selon {what}, avec les unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="600"/>
+        <source>Cautions</source>
+        <translation type="unfinished">Mises en garde</translation>
+    </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
@@ -5408,54 +7582,134 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
 <context>
     <name>SimulateCounts</name>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="29"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="42"/>
         <source>Simulate counts in sample units</source>
         <translation>Simuler des comptages dans les unités d'échantillonnage</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="32"/>
         <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-        <translation>&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
+        <translation type="obsolete">&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="50"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="88"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="51"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="89"/>
         <source>Animal points</source>
         <translation>Points des animaux</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="52"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="90"/>
         <source>Detection probability</source>
         <translation>Probabilité de détection</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="58"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="96"/>
         <source>Count reserve units too</source>
         <translation>Compter aussi les unités de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="62"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="106"/>
         <source>Units with simulated counts</source>
         <translation>Unités avec comptages simulés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="81"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="200"/>
         <source>has no geometry</source>
         <translation>n'a pas de géométrie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="86"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="205"/>
         <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
         <translation>Couche « {layer} » : ces entités ne peuvent pas être comptées : {items}. Les unités ponctuelles et linéaires ont besoin d'un champ « area_m2 » positif (l'étape de disposition l'écrit) ; les polygones ont besoin d'une géométrie.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="181"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="45"/>
+        <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Strata&lt;/b&gt; (optional, with their id field): each unit counts only the animals inside its own stratum (matched by the units&apos; &lt;i&gt;stratum&lt;/i&gt; field; without an id field, inside the strata), the rule of plus sampling, the layout&apos;s default at the edges (Gregoire &amp;amp; Valentine 2008, ch. 10). Give the strata the units were laid out on.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="64"/>
+        <source>&lt;p&gt;Distances (for the distance density algorithm):&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Detection function&lt;/b&gt;: none (the detection probability above, the same at every distance), or half-normal g(x) = exp(−x²/2σ²) or hazard-rate g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), for line transects and point stations. Each animal within the maximum distance of a unit is then seen with probability p·g(x), x its perpendicular distance to the line or its distance to the point, p the detection probability above (1: animals on the line are always seen, as distance sampling assumes).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Scale σ (m)&lt;/b&gt; and &lt;b&gt;hazard-rate shape b&lt;/b&gt; of the detection function.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Maximum distance (m)&lt;/b&gt;: animals farther than this from the line or point are not counted; 0 takes the distance where g falls to 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Group size field&lt;/b&gt; of the animal points (optional): each point is then a group of that many animals; otherwise each point is one animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observations&lt;/b&gt; (optional, with a detection function): one point per sighting at the animal's position, with &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) and &lt;i&gt;size&lt;/i&gt;, ready for the distance density algorithm.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;With a detection function, &lt;i&gt;present&lt;/i&gt; counts the animals within the maximum distance, and the strata are not used: a line or point sees the animals within the maximum distance on both sides of a stratum edge, as observers do.&lt;/p&gt;&lt;p&gt;Reference: Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="100"/>
+        <source>Strata: count only inside each unit&apos;s stratum (plus sampling)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="103"/>
+        <source>Stratum id field of the strata</source>
+        <translation type="unfinished">Champ d'identifiant des strates</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>Detection function (line transects and point stations)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>None: the same detection probability at every distance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>Half-normal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <source>Hazard-rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="111"/>
+        <source>Scale σ of the detection function (m)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="114"/>
+        <source>Shape b of the hazard-rate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="117"/>
+        <source>Maximum distance from the line or point (m; 0: where g falls to 1 %)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="120"/>
+        <source>Group size field of the animal points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="123"/>
+        <source>Observations with distances</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="249"/>
+        <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="262"/>
+        <source>Animals within {w:.1f} m of the lines or points are counted.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/simulatecounts.py" line="285"/>
+        <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
+        <translation type="unfinished"></translation>
     </message>
 </context>
 <context>
