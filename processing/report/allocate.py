@@ -182,14 +182,14 @@ def allocate_report(report, result, labels, inputs, warnings):
             "PlotwiseReport",
             "Expected precision uses the pilot figures as if they were the truth, with the finite-population "
             "correction 1 − n_h·a/A_h, since the layout named draws units that do not overlap (Cochran 1977, ch. 5). "
-            "Real precision depends on the counts the survey finds.",
+            "Real precision depends on the counts the survey finds."
         )
         if result.fpc
         else report.translate(
             "PlotwiseReport",
             "Expected precision uses the pilot figures as if they were the truth, without a finite-population "
             "correction: a simple random layout's units may overlap, so their possible positions are a continuous "
-            "population (Cordy 1993). Real precision depends on the counts the survey finds.",
+            "population (Cordy 1993). Real precision depends on the counts the survey finds."
         )
     )
     if cost_field:

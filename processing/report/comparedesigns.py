@@ -147,7 +147,7 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
                 "PlotwiseReport",
                 "Each figure is itself an estimate from {reps} simulated surveys: relative biases within about "
                 "±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. "
-                "More surveys per design narrow both.",
+                "More surveys per design narrow both."
             ).format(reps=settings["replicates"], noise=noise)
         )
     names = [_design_name(report, p.design) for p in comparison.performance]
@@ -171,13 +171,13 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
             "PlotwiseReport",
             "{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true "
             "total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the "
-            "time.",
+            "time."
         ).format(name=_design_name(report, best.design), rmse=best.rmse, rel=best.rel_rmse, total=best.mean_true)
         if comparison.near_best:
             text += " " + report.translate(
                 "PlotwiseReport",
                 "{others} did about as well: the differences lie within the Monte Carlo error of the simulation. "
-                "Among these, choose the one that is easiest to carry out in the field.",
+                "Among these, choose the one that is easiest to carry out in the field."
             ).format(others=", ".join(_design_name(report, d) for d in comparison.near_best))
         report.paragraph(text)
         poor = [
@@ -190,7 +190,7 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
                 report.translate(
                     "PlotwiseReport",
                     "The intervals of {names} held the truth less than 90 % of the time: their stated precision would "
-                    "mislead.",
+                    "mislead."
                 ).format(names=", ".join(poor))
             )
         if best.design == engine.SYSTEMATIC_GRID or any(
@@ -200,7 +200,7 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
                 report.translate(
                     "PlotwiseReport",
                     "The systematic grid's number of units varies from survey to survey (mean shown). With the simple "
-                    "random sampling formula its interval is usually conservative on smooth surfaces.",
+                    "random sampling formula its interval is usually conservative on smooth surfaces."
                 )
             )
 
@@ -220,7 +220,7 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
             "a surface cell), each unit counting the animals of the cells of its own stratum whose centres it covers, "
             "with its nominal area, and the estimation engine expanding the counts to the grown area (Gregoire & "
             "Valentine 2008, ch. 10); the abundance is the ratio estimator with its t interval (Satterthwaite degrees "
-            "of freedom). Each estimate is judged against the true total of its own population.",
+            "of freedom). Each estimate is judged against the true total of its own population."
         )
     )
     if any(p.design == engine.STRATIFIED_NEYMAN for p in comparison.performance):
@@ -230,7 +230,7 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
                 "The stratified Neyman design with the true S_h is the best case: it allocates with the standard "
                 "deviations the surface implies, which no survey knows. The pilot-based Neyman design estimates S_h "
                 "in every simulated survey from a pilot of {pilot} simple random units per stratum (an independent "
-                "realisation: a pilot season), as a survey would; its pilot units are not counted in its n.",
+                "realisation: a pilot season), as a survey would; its pilot units are not counted in its n."
             ).format(pilot=settings.get("pilot_units", engine.DEFAULT_PILOT_UNITS))
         )
     report.note(
@@ -238,7 +238,7 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
             "PlotwiseReport",
             "Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals "
             "do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; "
-            "use the comparison to rank designs and to size the effort, not as a promise of precision.",
+            "use the comparison to rank designs and to size the effort, not as a promise of precision."
         )
     )
     report.references(REFERENCES)
@@ -283,7 +283,7 @@ def _strata_section(report, comparison, setup):
             "S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of "
             "the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) "
             "variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman "
-            "1934; Cochran 1977, §5.5), with at least 2 per stratum.",
+            "1934; Cochran 1977, §5.5), with at least 2 per stratum."
         ).format(draws=engine.SD_DRAWS)
     )
 
@@ -330,6 +330,6 @@ def _curve_section(report, comparison, curve):
             "PlotwiseReport",
             "The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve "
             "flattens, more units buy little; spend the effort on better counts (detection) or a better surface "
-            "instead.",
+            "instead."
         )
     )

@@ -141,7 +141,7 @@ def _key_figures(report, result, inputs):
                 "Simulation only: the true total ({truth:,.0f}) is known here because the population was "
                 "simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval "
                 "{verdict} the truth. Only a simulation can show this; a real survey never knows its true total, "
-                "and one survey's interval may miss it by chance (about {miss:.0%} of surveys should).",
+                "and one survey's interval may miss it by chance (about {miss:.0%} of surveys should)."
             ).format(
                 truth=truth,
                 est=o.abund,
@@ -293,7 +293,7 @@ def _tables(report, result, inputs):
                 "PlotwiseReport",
                 "† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit "
                 "−ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided "
-                "by p with detection. For the frame it assumes one density over the strata.",
+                "by p with detection. For the frame it assumes one density over the strata."
             ).format(level=level)
         )
     if result.dropped_strata:
@@ -301,7 +301,7 @@ def _tables(report, result, inputs):
             report.translate(
                 "PlotwiseReport",
                 "The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). "
-                "The estimate covers the remaining strata only.",
+                "The estimate covers the remaining strata only."
             ).format(strata=", ".join(result.dropped_strata), area=result.dropped_area, unit=per)
         )
     if result.missing_ids:
@@ -347,7 +347,7 @@ def _intervals_table(report, result, level):
             "PlotwiseReport",
             "The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like "
             "the sampling distribution of a count-based estimate, and suits small samples of clumped animals "
-            "better. Choose the method before looking at the results.",
+            "better. Choose the method before looking at the results."
         )
     )
     totals = result.bootstrap_totals
@@ -447,7 +447,7 @@ def _method(report, result):
                 "the frame's value weights the strata by the number of units they hold (area / unit area). "
                 "This is naive occupancy: it is not corrected for detection, so it understates true occupancy "
                 "whenever the species can be present and missed. Detection-corrected occupancy needs repeat "
-                "visits to the same units (occupancy models).",
+                "visits to the same units (occupancy models)."
             )
         )
     else:
@@ -459,7 +459,7 @@ def _method(report, result):
                 "v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the "
                 "finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the "
                 "frame's abundance is the sum over strata, its variance the sum of the strata variances, and "
-                "its density N / Σ A_h (Cochran 1977, ch. 5).",
+                "its density N / Σ A_h (Cochran 1977, ch. 5)."
             )
         )
     if result.edge == "plus":
@@ -469,7 +469,7 @@ def _method(report, result):
                 "Edges: the units were laid out by plus sampling (Gregoire & Valentine 2008, ch. 10): their centres "
                 "were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside "
                 "its own stratum. Every animal then has the same chance of being counted, and the counts expand to "
-                "the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).",
+                "the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output)."
             )
         )
     elif result.edge == "inside":
@@ -478,7 +478,7 @@ def _method(report, result):
                 "PlotwiseReport",
                 "Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit's "
                 "reach of the edge; the estimate carries the inner density over that band. Where the animals near "
-                "the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.",
+                "the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not."
             )
         )
     _interval_method(report, result)
@@ -492,7 +492,7 @@ def _method(report, result):
                 "Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p "
                 "(SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts "
                 "combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, "
-                "eq. 3.75), with df_p = {df} for p.",
+                "eq. 3.75), with df_p = {df} for p."
             ).format(
                 p=result.detection_p, se=result.detection_se, cv=result.detection_se / result.detection_p, df=df_text
             )
@@ -504,7 +504,7 @@ def _method(report, result):
                 "Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall "
                 "abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator "
                 "implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum "
-                "holds. The observed SDs are themselves uncertain, especially from few units.",
+                "holds. The observed SDs are themselves uncertain, especially from few units."
             ).format(cv=result.target_cv)
         )
 
@@ -516,14 +516,14 @@ def _interval_method(report, result):
                 "PlotwiseReport",
                 "Intervals use Student's t with Satterthwaite's effective degrees of freedom, "
                 "ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits "
-                "below 0 are shown as 0.",
+                "below 0 are shown as 0."
             ),
             "lognormal": report.translate(
                 "PlotwiseReport",
                 "Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the "
                 "estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal "
                 "quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go "
-                "below 0.",
+                "below 0."
             ),
             "bootstrap": report.translate(
                 "PlotwiseReport",
@@ -532,7 +532,7 @@ def _interval_method(report, result):
                 "and their density is moved towards the stratum's estimate by the factor √(1 − f), so "
                 "that the resamples vary as much as the stratified variance says, with the "
                 "finite-population correction where it applies (Rao & Wu 1988; Efron & "
-                "Tibshirani 1993).",
+                "Tibshirani 1993)."
             ).format(b=result.n_bootstrap),
         }[result.ci_method]
     )
@@ -547,7 +547,7 @@ def _variance_method(report, result):
                 "three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each "
                 "neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are "
                 "those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to "
-                "the same variance. For a simple random layout use the simple formula.",
+                "the same variance. For a simple random layout use the simple formula."
             )
         )
         if result.variance_method == "local_scaled":
@@ -556,7 +556,7 @@ def _variance_method(report, result):
                     "PlotwiseReport",
                     "Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on "
                     "average with the simple formula where the population has no spatial pattern; the published sum "
-                    "falls about a quarter short there. This scaling is ours, not Stevens & Olsen's.",
+                    "falls about a quarter short there. This scaling is ours, not Stevens & Olsen's."
                 )
             )
     if any(r.collapsed_with for r in result.strata):
@@ -570,7 +570,7 @@ def _variance_method(report, result):
                 "several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's "
                 "spread, while the partner keeps its own variance. Differences between the paired strata count as "
                 "variance, so these standard errors tend to be too large; each such stratum has 1 degree of "
-                "freedom.",
+                "freedom."
             )
         )
 
@@ -582,7 +582,7 @@ def _fpc_method(report, result):
                 "PlotwiseReport",
                 "The finite-population correction was refused in strata {ids}: their units come from a simple random "
                 "layout whose units may overlap, a continuous population of possible units, which has no such "
-                "correction (Cordy 1993).",
+                "correction (Cordy 1993)."
             ).format(ids=", ".join(result.fpc_refused))
         )
     if result.fpc_assumed:
@@ -592,7 +592,7 @@ def _fpc_method(report, result):
                 "The finite-population correction assumes that the units do not overlap and were drawn without "
                 "replacement from the units that tile each stratum. The units carry no design record (they did not "
                 "come from plotwise:layout), so this could not be checked: if they may overlap, switch the "
-                "correction off.",
+                "correction off."
             )
         )
 
@@ -603,7 +603,7 @@ def _cautions(report, result):
         report.translate(
             "PlotwiseReport",
             "The inference covers the sampling frame only: the strata polygons given here. It says nothing "
-            "about land outside them (excluded areas, inaccessible ground, neighbouring land).",
+            "about land outside them (excluded areas, inaccessible ground, neighbouring land)."
         )
     )
     if result.presence:
@@ -611,7 +611,7 @@ def _cautions(report, result):
             report.translate(
                 "PlotwiseReport",
                 "Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits "
-                "before it can be corrected for detection.",
+                "before it can be corrected for detection."
             )
         )
     elif result.detection_p < 1:
@@ -620,7 +620,7 @@ def _cautions(report, result):
                 "PlotwiseReport",
                 "Detection: p must come from a separate study (double observers, marked animals, distance "
                 "sampling) of the same species, season, habitat and observers. If the detection in this survey "
-                "differs, the estimate is biased by the same factor, and no interval here shows it.",
+                "differs, the estimate is biased by the same factor, and no interval here shows it."
             )
         )
     else:
@@ -628,7 +628,7 @@ def _cautions(report, result):
             report.translate(
                 "PlotwiseReport",
                 "Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals "
-                "missed make it too low, and the interval does not show that bias.",
+                "missed make it too low, and the interval does not show that bias."
             )
         )
     report.note(
@@ -638,6 +638,6 @@ def _cautions(report, result):
             "stratum with equal chances (simple random, systematic grid or spatially balanced layout), that "
             "unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. "
             "Units chosen for convenience (near roads or camps) or skipped because of what was expected there "
-            "bias the estimate in ways no standard error shows.",
+            "bias the estimate in ways no standard error shows."
         )
     )
