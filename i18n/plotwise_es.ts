@@ -7535,6 +7535,181 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <source>Cautions</source>
         <translation type="unfinished">Precauciones</translation>
     </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="180"/>
+        <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction 1 − n_h·a/A_h, since the layout named draws units that do not overlap (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/allocate.py" line="180"/>
+        <source>Expected precision uses the pilot figures as if they were the truth, without a finite-population correction: a simple random layout&apos;s units may overlap, so their possible positions are a continuous population (Cordy 1993). Real precision depends on the counts the survey finds.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="145"/>
+        <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
+        <translation type="unfinished">Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="170"/>
+        <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
+        <translation type="unfinished">{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="177"/>
+        <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
+        <translation type="unfinished">{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="189"/>
+        <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
+        <translation type="unfinished">Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="199"/>
+        <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
+        <translation type="unfinished">El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="213"/>
+        <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine and follows the real chain&apos;s edge protocol: by default plus sampling, with centres over each stratum (or the frame) grown by the unit&apos;s reach (and half a surface cell), each unit counting the animals of the cells of its own stratum whose centres it covers, with its nominal area, and the estimation engine expanding the counts to the grown area (Gregoire &amp; Valentine 2008, ch. 10); the abundance is the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="227"/>
+        <source>The stratified Neyman design with the true S_h is the best case: it allocates with the standard deviations the surface implies, which no survey knows. The pilot-based Neyman design estimates S_h in every simulated survey from a pilot of {pilot} simple random units per stratum (an independent realisation: a pilot season), as a survey would; its pilot units are not counted in its n.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="236"/>
+        <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
+        <translation type="unfinished">Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="280"/>
+        <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
+        <translation type="unfinished">S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/comparedesigns.py" line="328"/>
+        <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
+        <translation type="unfinished">La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="137"/>
+        <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
+        <translation type="unfinished">Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="290"/>
+        <source>† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit −ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided by p with detection. For the frame it assumes one density over the strata.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="299"/>
+        <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
+        <translation type="unfinished">El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="344"/>
+        <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
+        <translation type="unfinished">El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="442"/>
+        <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
+        <translation type="unfinished">El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="453"/>
+        <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="465"/>
+        <source>Edges: the units were laid out by plus sampling (Gregoire &amp; Valentine 2008, ch. 10): their centres were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside its own stratum. Every animal then has the same chance of being counted, and the counts expand to the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="475"/>
+        <source>Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit&apos;s reach of the edge; the estimate carries the inner density over that band. Where the animals near the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="488"/>
+        <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, eq. 3.75), with df_p = {df} for p.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="500"/>
+        <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds. The observed SDs are themselves uncertain, especially from few units.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="512"/>
+        <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="512"/>
+        <source>Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go below 0.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="512"/>
+        <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction where it applies (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="542"/>
+        <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to the same variance. For a simple random layout use the simple formula.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="553"/>
+        <source>Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on average with the simple formula where the population has no spatial pattern; the published sum falls about a quarter short there. This scaling is ours, not Stevens &amp; Olsen's.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="562"/>
+        <source>Strata with one surveyed unit were paired with a partner fixed before the counts were seen (the stratum sharing the longest edge on the map, or else the next stratum in id order). Two one-unit strata share the pairs formula v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, with the weights of Hansen, Hurwitz &amp; Madow 1953); a one-unit stratum paired with a stratum of several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's spread, while the partner keeps its own variance. Differences between the paired strata count as variance, so these standard errors tend to be too large; each such stratum has 1 degree of freedom.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="579"/>
+        <source>The finite-population correction was refused in strata {ids}: their units come from a simple random layout whose units may overlap, a continuous population of possible units, which has no such correction (Cordy 1993).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="588"/>
+        <source>The finite-population correction assumes that the units do not overlap and were drawn without replacement from the units that tile each stratum. The units carry no design record (they did not come from plotwise:layout), so this could not be checked: if they may overlap, switch the correction off.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="601"/>
+        <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
+        <translation type="unfinished">La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="609"/>
+        <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
+        <translation type="unfinished">Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="617"/>
+        <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
+        <translation type="unfinished">Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="626"/>
+        <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
+        <translation type="unfinished">Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/estimate.py" line="633"/>
+        <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
+        <translation type="unfinished">El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
+    </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
