@@ -264,6 +264,7 @@ PATTERNS = textwrap.dedent(
     UNMARKED = message("Engine template without marker {x}", x=1)
     VARIABLE_CONTEXT = QCoreApplication.translate(CONTEXT, "Variable context")
     ESCAPED = QCoreApplication.translate("Shared", "Square metres (m\\u00b2)")
+    TRAILING = QCoreApplication.translate("Shared", "A comma after the text",)
     """
 )
 
@@ -287,7 +288,7 @@ def test_how_pylupdate5_reads_each_way_of_marking_a_string(tmp_path):
         ("Groups", "Marked constant", None),
         ("PlotwiseEngine", "Engine {what} template", None),
         ("Shared", "Square metres (mu00b2)", None),  # \\u escapes are not decoded: write the character
-    }  # the unmarked engine template and the variable context are not extracted at all
+    }  # the unmarked engine template, the variable context and the call with a trailing comma are not extracted
 
 
 def _code_contexts():
@@ -368,6 +369,8 @@ def _message_problem(call):
 def _call_problems(call, class_name, base_classes, text):
     func, args = call.func, call.args
     name = func.attr if isinstance(func, ast.Attribute) else getattr(func, "id", None)
+    if name in ("tr", "translate", "QT_TRANSLATE_NOOP") and re.search(r",\s*\)$", ast.get_source_segment(text, call)):
+        yield "pylupdate5 skips a call with a comma after its last argument: drop the comma"
     if name == "_tr":
         yield "pylupdate5 reads no _tr(): " + FIX_TR
     elif name == "tr":
@@ -422,9 +425,9 @@ def test_the_checker_flags_the_patterns_pylupdate5_misreads(tmp_path):
                 return self.tr(f"{n} units"), self.tr(LABEL), message(QT_TRANSLATE_NOOP("Other", "x"))
         """))
     lines = sorted(int(problem.split(":")[1]) for problem in _marking_problems(sample, root=tmp_path))
-    # the alias (twice), the second argument, the unmarked template, the variable context, the escape,
-    # self.tr in a base class, then an f-string, a variable and an engine template in another context
-    assert lines == [8, 8, 14, 18, 19, 20, 24, 28, 28, 28], lines
+    # the alias (twice), the second argument, the unmarked template, the variable context, the escape, the
+    # trailing comma, self.tr in a base class, then an f-string, a variable and an engine template in another context
+    assert lines == [8, 8, 14, 18, 19, 20, 21, 25, 29, 29, 29], lines
 
 
 def test_example_chain_labels_are_translated():
