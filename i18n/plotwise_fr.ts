@@ -464,32 +464,46 @@ Mean field: the pilot mean count per unit, needed for CVs and for a target CV. C
 Layout to come: the finite-population correction 1 − n·a/A is used only when the units will not overlap (systematic grid, spatially balanced, or simple random with a minimum spacing of at least the unit's width); simple random centres without one may overlap, a continuous population with no such correction (Cordy 1993). plotwise:estimate applies the same rule.
 
 Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-        <translation type="unfinished"></translation>
+        <translation>Décide combien d'unités d'échantillonnage reçoit chaque strate, et montre à l'avance la précision qu'elles apportent.
+
+Méthodes : égale ; proportionnelle à la surface de la strate ; Neyman, n_h ∝ A_h·S_h (Neyman 1934 ; Cochran 1977, ch. 5) ; optimale avec coût, n_h ∝ A_h·S_h/√c_h, sous un budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
+
+Objectif : un CV cible (s'il est supérieur à 0) trouve le plus petit total dont le coefficient de variation attendu de la densité globale l'atteint ; sinon un budget (s'il est supérieur à 0, il faut le champ de coût) ; sinon le nombre total d'unités.
+
+Bornes : au moins le minimum par strate (2 par défaut, pour que la variance de chaque strate puisse être estimée) et au plus les unités qui y tiennent (surface de la strate / surface d'une unité). Une strate qui atteint une borne la garde et le reste est partagé entre les autres, jusqu'à stabilité. Les unités entières sont arrondies par le plus fort reste, en conservant le total.
+
+Champ de surface : la surface de la strate en hectares (area_ha par défaut, tel qu'écrit par la stratification) ; s'il est vide ou absent, la surface du polygone est utilisée.
+Champ d'écart-type : l'écart-type pilote des comptages par unité. Sans lui, l'écart-type de la covariable (cov_sd) sert de substitut, ce qui suppose que les comptages suivent la covariable ; sans l'un ni l'autre, l'allocation est proportionnelle.
+Champ de moyenne : le comptage moyen pilote par unité, nécessaire aux CV et à un CV cible. Champ de coût : coût de l'inventaire d'une unité dans chaque strate (par exemple en jours de terrain).
+
+Disposition prévue : la correction pour population finie 1 − n·a/A n'est utilisée que si les unités ne se chevaucheront pas (grille systématique, spatialement équilibrée, ou aléatoire simple avec un espacement minimal d'au moins la largeur de l'unité) ; des centres aléatoires simples sans espacement minimal peuvent se chevaucher, une population continue qui n'a pas de telle correction (Cordy 1993). plotwise:estimate applique la même règle.
+
+Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité de la strate), et un rapport comparant les allocations égale, proportionnelle et de Neyman pour le même total.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Layout to come (decides the finite-population correction)</source>
-        <translation type="unfinished"></translation>
+        <translation>Disposition prévue (décide de la correction pour population finie)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Simple random (units may overlap: no correction)</source>
-        <translation type="unfinished"></translation>
+        <translation>Aléatoire simple (les unités peuvent se chevaucher : pas de correction)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Simple random with a minimum spacing of at least the unit&apos;s width</source>
-        <translation type="unfinished"></translation>
+        <translation>Aléatoire simple avec un espacement minimal d'au moins la largeur de l'unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Systematic grid</source>
-        <translation type="unfinished">Grille systématique</translation>
+        <translation>Grille systématique</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Spatially balanced</source>
-        <translation type="unfinished">Spatialement équilibré</translation>
+        <translation>Spatialement équilibré</translation>
     </message>
 </context>
 <context>
@@ -1444,27 +1458,41 @@ Output table, one row per design: rel_bias (relative bias against each populatio
 Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
 
 The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="unfinished"></translation>
+        <translation>Avant le terrain : quel plan, et combien d'unités, donnent une estimation utilisable sur cette zone ? L'algorithme simule de nombreux inventaires d'une surface de densité plausible et indique comment chaque plan s'en est sorti.
+
+Surface : un raster d'animaux attendus par km² (issu d'un modèle d'habitat, d'une carte d'expert ou d'un inventaire antérieur), reprojeté dans le SCR de la base si nécessaire. Base : la base de sondage. Strates (facultatives, avec le champ de strate, 'stratum' par défaut) : nécessaires aux deux plans stratifiés.
+
+Chaque réplique réalise une population : comptages de Poisson dans chaque cellule de la surface ou, avec une surdispersion k supérieure à 0, comptages binomiaux négatifs (gamma-Poisson, variance μ + μ²/k par cellule). Chaque plan choisi est ensuite disposé avec le moteur de disposition, ses unités comptent les animaux des cellules qu'elles couvrent (la partie dans la base ou dans leur strate), et l'abondance est estimée avec le moteur d'estimation (estimateur par le ratio, intervalle t avec ddl de Satterthwaite ; Cochran 1977). Tous les plans inventorient les mêmes populations, si bien que leurs différences ne sont pas brouillées.
+
+Plans : aléatoire simple ; stratifié avec allocation proportionnelle ; stratifié avec allocation de Neyman, n_h ∝ A_h·S_h où S_h est l'écart-type du comptage d'une unité impliqué par la surface (Neyman 1934) : le meilleur cas, puisque aucun inventaire ne connaît le vrai S_h ; grille systématique avec départ aléatoire (son n varie) ; spatialement équilibré (échantillonnage par acceptation équilibrée, Robertson et al. 2013) ; Neyman stratifié d'après un pilote : dans chaque inventaire simulé, S_h est estimé à partir d'un pilote du nombre indiqué d'unités aléatoires simples par strate (d'une réalisation indépendante, une saison pilote), comme l'estimerait un vrai inventaire.
+
+Unités : station ponctuelle (taille = rayon de comptage), placette carrée (côté), placette circulaire (rayon), transect linéaire (longueur, comptage sur une bande de la demi-largeur donnée de chaque côté). Azimut en degrés dans le sens horaire depuis le nord de la grille, −1 aléatoire (la valeur par défaut : une grille alignée sur des bords rectilignes place d'un coup des rangées entières dans la bande de bordure). Les bords suivent le protocole de la disposition : par défaut l'échantillonnage « plus », avec des centres sur chaque strate (ou la base) agrandie de la portée de l'unité, chaque unité ne comptant que les cellules de sa propre strate avec sa surface nominale, et l'estimation étant étendue à la surface agrandie (Gregoire &amp; Valentine 2008, ch. 10) ; avec les unités gardées à l'intérieur, des centres tirés dans chaque strate réduite du rayon de l'unité, comme le fait l'option de la disposition.
+
+Table de sortie, une ligne par plan : rel_bias (biais relatif par rapport au vrai total de chaque population), emp_se (écart-type des erreurs), rmse (racine de l'erreur quadratique moyenne) et rmse_mcse (son erreur type de Monte-Carlo), rel_rmse (rmse / vrai total moyen), mean_cv (CV estimé moyen), coverage (part des intervalles à 95 % contenant la vérité), mean_n (nombre moyen d'unités inventoriées), alloc (unités par strate), recommend (1 pour le plan recommandé : la plus faible REQM parmi les plans dont les intervalles couvrent au moins 90 %).
+
+Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparaison est répétée pour chaque n et le rapport trace la REQM en fonction de n, montrant où davantage d'effort cesse de payer.
+
+La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Stratified, Neyman allocation with the true S_h (best case)</source>
-        <translation type="unfinished"></translation>
+        <translation>Stratifié, allocation de Neyman avec le vrai S_h (meilleur cas)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Stratified, Neyman allocation from a pilot survey</source>
-        <translation type="unfinished"></translation>
+        <translation>Stratifié, allocation de Neyman d'après un inventaire pilote</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
-        <translation type="unfinished"></translation>
+        <translation>Voisinage local, mis à l'échelle de la formule simple (notre variante)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="195"/>
         <source>Pilot units per stratum for the pilot-based Neyman design</source>
-        <translation type="unfinished"></translation>
+        <translation>Unités pilotes par strate pour le plan de Neyman fondé sur un pilote</translation>
     </message>
 </context>
 <context>
@@ -1650,7 +1678,7 @@ The simulation assumes the surface is right and every animal in a unit is counte
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="86"/>
         <source>Density from detection distances (line and point transects)</source>
-        <translation type="unfinished"></translation>
+        <translation>Densité à partir des distances de détection (transects linéaires et ponctuels)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="89"/>
@@ -1679,287 +1707,311 @@ Outputs: the strata with stratum, area, n_units (transects or points), effort (k
 References: Buckland, S. T. et al. (2001) Introduction to Distance Sampling, Oxford University Press. Fewster, R. M. et al. (2009) Biometrics 65:225–236.
 
 Field safety: distance sampling sends observers along lines and to points. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
-        <translation type="unfinished"></translation>
+        <translation>Estime la densité et l'abondance par strate et pour la base de sondage à partir des distances auxquelles les animaux (ou les groupes) ont été vus depuis des transects linéaires ou des stations ponctuelles. Une fonction de détection ajustée aux distances donne la probabilité de voir un animal, si bien que l'estimation n'a besoin d'aucune probabilité de détection saisie à la main (Buckland et al. 2001).
+
+Transects ou points : les unités de la disposition (transects linéaires ou stations ponctuelles), avec leur champ d'identifiant (unit_id) et leur champ de strate (stratum). La longueur des lignes vient de la géométrie ; un champ des visites donne les visites de chaque point (vide ou 0 : non inventorié). Chaque unité inventoriée compte, même celles sans détection. Les unités dont le role est 'reserve' sont écartées sauf si une observation les nomme ; donnez le role 'primary' à une réserve inventoriée qui n'a rien vu.
+
+Observations : une table ou une couche de points avec une ligne par détection : l'identifiant de l'unité, la distance en m (perpendiculaire à la ligne pour les transects linéaires, depuis le point pour les transects ponctuels) et, facultativement, la taille du groupe (champ vide : chaque détection est un animal). Une distance négative ou manquante, une taille de groupe non supérieure à 0, ou un identifiant d'unité absent de la couche des unités arrête le traitement, en nommant les observations.
+
+Type d'inventaire : transects linéaires ou ponctuels. Distance de troncature (m) : les détections plus éloignées sont écartées ; 0 écarte les 5 % les plus éloignées (pratique courante). Classes de distance (m, facultatif, p. ex. 0, 10, 25, 50, 100) : pour les inventaires qui notent des classes ; l'ajustement utilise alors les effectifs par classe, et la dernière borne est la distance de troncature.
+
+Fonctions clés : demi-normale, taux de risque (hazard-rate) et uniforme ; chacune est ajustée seule, puis avec des termes en cosinus ajoutés un à un tant que l'AIC s'améliore (au plus le nombre indiqué), sous la contrainte que la détection ne croisse jamais avec la distance. Le modèle de plus petit AIC est utilisé ; la table des modèles liste chaque modèle essayé avec son AIC, l'écart au meilleur, la probabilité de détection, la demi-largeur effective de bande (lignes) ou le rayon effectif de détection (points) et les valeurs p du test d'adéquation (χ² sur des classes de distance ; Cramér–von Mises sur les distances exactes).
+
+Taille des groupes : la taille moyenne des groupes détectés, ou la régression du biais de taille de ln(taille) sur la probabilité de détection quand les grands groupes sont vus plus loin (automatique : quand la pente est négative à p &lt; 0.15, pratique courante).
+
+Une fonction de détection par strate (option) : chaque strate demande alors au moins 20 détections (60 à 80 conseillées, pratique courante) ; sinon une seule fonction sert pour toutes les strates.
+
+Densité : D = n·E(s) / (2wL·P) pour les lignes et n·E(s) / (kπw²·P) pour les points. Variance par la méthode delta : celle du taux de rencontre entre transects dans chaque strate (estimateur R2 de Fewster et al. 2009), celle de la fonction de détection d'après sa vraisemblance, celle de la taille des groupes d'après les tailles ; degrés de liberté de Satterthwaite et intervalle log-normal avec t (Buckland et al. 2001). Les rééchantillonnages bootstrap (0 : aucun) rééchantillonnent les transects ou les points dans les strates et réajustent le modèle choisi, avec graine ; les sorties portent alors l'intervalle des percentiles du bootstrap.
+
+Strates : des polygones avec un champ d'identifiant correspondant au champ de strate des unités ; leurs surfaces définissent la base de sondage (comme dans l'algorithme d'estimation). Chaque strate demande au moins deux unités inventoriées. Il faut au moins 20 détections en deçà de la distance de troncature (une erreur indique leur nombre), 60 sont conseillées (un avertissement).
+
+Niveau de confiance des intervalles ; unité de surface des résultats (km² ou hectares) ; graine aléatoire, utilisée par le bootstrap seulement (0 en tire une et l'enregistre) ; nombre maximal de termes en cosinus par fonction clé (0 : les fonctions clés seules).
+
+Sorties : les strates avec stratum, area, n_units (transects ou points), effort (km de ligne, ou visites de points), n_det (détections en deçà de la distance de troncature), p_det (probabilité de détection en deçà de celle-ci), esw (demi-largeur effective de bande pour les lignes, rayon effectif de détection pour les points, m), dens, abund avec leur erreur type, leurs limites et leur CV, et df ; une table des modèles (model, n_par, aic, delta_aic, p_det, esw, gof_p, chosen, puis stratum, n_det, chisq_p, cvm_p) ; un rapport HTML (histogramme des distances avec la fonction ajustée, modèles, estimations, carte, hypothèses) ; et les valeurs globales pour les modèles.
+
+Références : Buckland, S. T. et al. (2001) Introduction to Distance Sampling, Oxford University Press. Fewster, R. M. et al. (2009) Biometrics 65:225–236.
+
+Sécurité sur le terrain : l'échantillonnage par distance envoie des observateurs le long de lignes et vers des points. Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="148"/>
         <source>Transects or points surveyed</source>
-        <translation type="unfinished"></translation>
+        <translation>Transects ou points inventoriés</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="150"/>
         <source>Unit id field</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ d'identifiant d'unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="152"/>
         <source>Stratum field of the units</source>
-        <translation type="unfinished">Champ de strate des unités</translation>
+        <translation>Champ de strate des unités</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="155"/>
         <source>Observations (one row per detection)</source>
-        <translation type="unfinished"></translation>
+        <translation>Observations (une ligne par détection)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="157"/>
         <source>Unit id field of the observations</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ d'identifiant d'unité des observations</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="160"/>
         <source>Distance field (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ de distance (m)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="163"/>
         <source>Group size field (empty: each detection is one animal)</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ de taille des groupes (vide : chaque détection est un animal)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="166"/>
         <source>Survey type</source>
-        <translation type="unfinished"></translation>
+        <translation>Type d'inventaire</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="166"/>
         <source>Line transects</source>
-        <translation type="unfinished"></translation>
+        <translation>Transects linéaires</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="166"/>
         <source>Point transects</source>
-        <translation type="unfinished"></translation>
+        <translation>Transects ponctuels</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="169"/>
         <source>Truncation distance (m; 0: drop the farthest 5 %)</source>
-        <translation type="unfinished"></translation>
+        <translation>Distance de troncature (m ; 0 : écarter les 5 % les plus éloignées)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Key functions to try</source>
-        <translation type="unfinished"></translation>
+        <translation>Fonctions clés à essayer</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Half-normal</source>
-        <translation type="unfinished"></translation>
+        <translation>Demi-normale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Hazard-rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Taux de risque (hazard-rate)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Uniform with cosine terms</source>
-        <translation type="unfinished"></translation>
+        <translation>Uniforme avec termes en cosinus</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="176"/>
         <source>Strata (the frame)</source>
-        <translation type="unfinished">Strates (la base de sondage)</translation>
+        <translation>Strates (la base de sondage)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="178"/>
         <source>Stratum id field of the strata</source>
-        <translation type="unfinished">Champ d'identifiant des strates</translation>
+        <translation>Champ d'identifiant des strates</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="181"/>
         <source>Confidence level</source>
-        <translation type="unfinished">Niveau de confiance</translation>
+        <translation>Niveau de confiance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="184"/>
         <source>Area unit of the results</source>
-        <translation type="unfinished">Unité de surface des résultats</translation>
+        <translation>Unité de surface des résultats</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="184"/>
         <source>km²</source>
-        <translation type="unfinished">km²</translation>
+        <translation>km²</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="184"/>
         <source>hectares</source>
-        <translation type="unfinished">hectares</translation>
+        <translation>hectares</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="189"/>
         <source>Strata with distance estimates</source>
-        <translation type="unfinished"></translation>
+        <translation>Strates avec les estimations par distance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="191"/>
         <source>Detection function models</source>
-        <translation type="unfinished"></translation>
+        <translation>Modèles de fonction de détection</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Overall density</source>
-        <translation type="unfinished">Densité globale</translation>
+        <translation>Densité globale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Overall abundance</source>
-        <translation type="unfinished">Abondance globale</translation>
+        <translation>Abondance globale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Lower confidence limit of the abundance</source>
-        <translation type="unfinished">Limite inférieure de confiance de l'abondance</translation>
+        <translation>Limite inférieure de confiance de l'abondance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Upper confidence limit of the abundance</source>
-        <translation type="unfinished">Limite supérieure de confiance de l'abondance</translation>
+        <translation>Limite supérieure de confiance de l'abondance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>CV of the overall estimate</source>
-        <translation type="unfinished">CV de l'estimation globale</translation>
+        <translation>CV de l'estimation globale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Detection probability within the truncation distance</source>
-        <translation type="unfinished"></translation>
+        <translation>Probabilité de détection en deçà de la distance de troncature</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Effective strip half-width or detection radius (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Demi-largeur effective de bande ou rayon effectif de détection (m)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="205"/>
         <source>Visits field of the points (empty: one visit each)</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ des visites des points (vide : une visite chacun)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="208"/>
         <source>Distance bands (m, from 0, comma-separated; empty: exact distances)</source>
-        <translation type="unfinished"></translation>
+        <translation>Classes de distance (m, depuis 0, séparées par des virgules ; vide : distances exactes)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="211"/>
         <source>Most cosine terms per key function</source>
-        <translation type="unfinished"></translation>
+        <translation>Nombre maximal de termes en cosinus par fonction clé</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Group size</source>
-        <translation type="unfinished"></translation>
+        <translation>Taille des groupes</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Automatic: mean, or size-bias regression when larger groups are seen farther</source>
-        <translation type="unfinished"></translation>
+        <translation>Automatique : moyenne, ou régression du biais de taille si les grands groupes sont vus plus loin</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Mean of the detected groups</source>
-        <translation type="unfinished"></translation>
+        <translation>Moyenne des groupes détectés</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Size-bias regression</source>
-        <translation type="unfinished"></translation>
+        <translation>Régression du biais de taille</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="218"/>
         <source>One detection function per stratum</source>
-        <translation type="unfinished"></translation>
+        <translation>Une fonction de détection par strate</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="220"/>
         <source>Bootstrap resamples over transects (0: none)</source>
-        <translation type="unfinished"></translation>
+        <translation>Rééchantillonnages bootstrap sur les transects (0 : aucun)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="234"/>
         <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
-        <translation type="unfinished"></translation>
+        <translation>La couche « {layer} » n'a pas de champ pour {what}. Choisissez le champ qui les contient.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les classes de distance « {text} » ne sont pas des nombres. Écrivez les bornes des classes en m, depuis 0, séparées par des virgules, p. ex. 0, 10, 25, 50, 100.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="256"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
-        <translation type="unfinished">La couche « {layer} » n'a aucune entité.</translation>
+        <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="260"/>
         <source>Layer &apos;{layer}&apos; holds {kinds} geometries, but the survey type is {survey}. Choose the survey type that matches the units (line transects need lines, point transects points).</source>
-        <translation type="unfinished"></translation>
+        <translation>La couche « {layer} » contient des géométries {kinds}, mais le type d'inventaire est : {survey}. Choisissez le type d'inventaire qui correspond aux unités (les transects linéaires demandent des lignes, les transects ponctuels des points).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="260"/>
         <source>line transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transects linéaires</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="260"/>
         <source>point transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transects ponctuels</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="273"/>
         <source>{n} reserve unit(s) without observations were left out (not surveyed).</source>
-        <translation type="unfinished"></translation>
+        <translation>{n} unité(s) de réserve sans observation ont été écartée(s) (non inventoriée(s)).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="294"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have a number of visits in the field &apos;{field}&apos; that is not a whole number of 0 or more. Correct them.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les points {ids} ont dans le champ « {field} » un nombre de visites qui n'est pas un nombre entier supérieur ou égal à 0. Corrigez-les.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="299"/>
         <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : des observations nomment les points {ids}, dont le champ des visites « {field} » est vide ou vaut 0. Donnez-leur leur nombre de visites, ou corrigez les identifiants d'unité des observations.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="305"/>
         <source>{n} point(s) with no visits were left out (not surveyed).</source>
-        <translation type="unfinished"></translation>
+        <translation>{n} point(s) sans visite ont été écarté(s) (non inventorié(s)).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="315"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates, ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="319"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base de sondage est traitée comme une seule strate.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="327"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
-        <translation type="unfinished">La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
+        <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>unit ids</source>
-        <translation type="unfinished"></translation>
+        <translation>les identifiants d'unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>distances</source>
-        <translation type="unfinished"></translation>
+        <translation>les distances</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="447"/>
         <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
-        <translation type="unfinished"></translation>
+        <translation>Fonction de détection{where} : {model}, P = {p:.3f}, largeur effective {esw:.1f} m, {n} détections.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="451"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
-        <translation type="unfinished">Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
+        <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
 </context>
 <context>
@@ -2712,17 +2764,43 @@ Target CV (above 0): n_next is the number of units each stratum needs next time 
 True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
 
 Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-        <translation type="unfinished"></translation>
+        <translation>Estime la densité et l'abondance par strate et pour toute la base de sondage à partir des comptages dans les unités d'échantillonnage, avec erreur type, coefficient de variation (CV) et intervalle de confiance, ainsi que la taille d'échantillon nécessaire au prochain inventaire.
+
+Estimateur : D_h = Σy / Σa par strate (l'estimateur par le ratio ; avec des unités égales, le comptage moyen divisé par la surface d'une unité), avec sa variance linéarisée (Cochran 1977, ch. 5 et 6) ; abondance N_h = D_h·A_h ; au total N = Σ N_h et D = N / Σ A_h, les variances s'additionnant.
+
+Correction pour population finie : 1 − Σa/A_h, seulement pour des unités qui ne peuvent pas se chevaucher (une population finie d'unités tirées sans remise, Cochran 1977, §2.4). Les unités issues de plotwise:layout enregistrent leur plan (champ design) : la correction est refusée, avec un avertissement, dans les strates disposées par centres aléatoires simples sans espacement minimal d'au moins la largeur de l'unité (leurs unités peuvent se chevaucher : une population continue, Cordy 1993). Pour des unités sans cet enregistrement, c'est votre choix, et le rapport énonce l'hypothèse qu'elles ne se chevauchent pas.
+
+Bords : les unités disposées par échantillonnage « plus » (champ edge = plus, le choix par défaut de la disposition) ne comptent que dans leur strate, et les comptages sont étendus à la strate agrandie de la portée de l'unité (champ reach_m), N_h = A⁺_h·Σy/Σa (Gregoire &amp; Valentine 2008, ch. 10), ce qui supprime le biais aux bords.
+
+Comptages : un comptage NULL signifie que l'unité n'a pas été inventoriée : elle est écartée et listée comme non-réponse. Les unités de réserve (role = reserve) sans comptage sont des réserves non utilisées et sont ignorées sans avertissement ; les réserves inventoriées comptent comme toute autre unité. 0 signifie inventoriée, aucun animal vu. Des comptages négatifs ou non numériques arrêtent le traitement, en nommant les unités.
+
+Surface d'une unité (m²) : le champ de surface d'unité (area_m2 par défaut, tel que l'écrit la disposition) s'il est supérieur à 0, sinon la surface du polygone, sinon pour les lignes la largeur de bande × la longueur de la ligne, sinon la surface d'unité fixe pour les points et les lignes.
+
+Strates : des polygones avec un champ d'identifiant correspondant au champ de strate des unités ; leurs surfaces définissent la base de sondage. Quand les unités n'ont pas de champ de strate, ou que la couche des strates est un seul polygone sans champ d'identifiant, toutes les unités forment une seule strate sur la base. Une strate avec une seule unité inventoriée est associée à une partenaire fixée avant que les comptages ne soient vus (la strate qui partage la plus longue limite sur la carte, sinon la suivante dans l'ordre des identifiants) et tire sa variance de la formule des paires de strates regroupées (Cochran 1977, §5A.12 ; Hansen, Hurwitz &amp; Madow 1953 pour des tailles inégales), avec 1 degré de liberté et un avertissement ; la partenaire garde sa propre variance. Une strate sans unité inventoriée est une erreur, sauf si vous choisissez de l'écarter : la base se réduit alors, et le rapport le dit. Les strates ne doivent pas se chevaucher (un chevauchement de plus de 0,1 % de la plus petite strate est une erreur, un plus petit un avertissement), et chaque polygone de strate doit porter son identifiant : un polygone sans identifiant est une erreur, sauf si les strates sans unité inventoriée peuvent être écartées.
+
+Intervalles : t avec les degrés de liberté de Satterthwaite (Satterthwaite 1946 ; Cochran 1977) ; log-normal, de N/C à N·C avec C = exp(t_df·√ln(1+CV²)), t avec les mêmes degrés de liberté (Buckland et al. 2001, §3.6.1 ; le quantile normal seulement pour des ddl infinis, Burnham et al. 1987) ; ou un bootstrap stratifié des percentiles, remis à l'échelle, sur 2 000 rééchantillonnages (avec graine ; Rao &amp; Wu 1988), qui tient compte de la correction pour population finie. Là où tous les comptages valent 0, l'intervalle est unilatéral, de 0 à la limite supérieure de Poisson −ln(1 − niveau)·A/Σa (Garwood 1936 ; environ 3·A/Σa à 95 %), divisée par p.
+
+Variance : la formule de l'échantillonnage aléatoire simple, ou l'estimateur de voisinage local (Stevens &amp; Olsen 2003) pour les grilles systématiques et les dispositions spatialement équilibrées, où la formule simple surestime la variance, avec les degrés de liberté de sa forme quadratique (Box 1954) ; ou notre variante de cet estimateur, mise à l'échelle par n / Σ(1 − Σw²) pour qu'elle concorde avec la formule simple là où il n'y a pas de structure spatiale (la somme publiée y est inférieure d'environ un quart).
+
+Détection : avec une probabilité de détection p inférieure à 1, les estimations sont divisées par p et les CV au carré s'additionnent (méthode delta, Seber 1982). p et son erreur type doivent provenir d'une étude distincte ; ses degrés de liberté (0 : p est considéré comme connu) entrent dans ceux de l'intervalle selon la règle de Satterthwaite (Buckland et al. 2001, éq. 3.75). Une erreur type supérieure à p/2 donne un avertissement.
+
+Données de présence : avec l'option présence, un champ 0/1 donne la proportion stratifiée d'unités où l'espèce a été détectée (occupation naïve, non corrigée de la détection), et abund est le nombre d'unités occupées dans la base.
+
+CV cible (supérieur à 0) : n_next est le nombre d'unités dont chaque strate aura besoin la prochaine fois pour ce CV de l'abondance globale, par allocation de Neyman sur les écarts-types qu'implique l'estimateur de variance (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 et au plus les unités que contient une strate.
+
+Vrai total : pour les simulations et la formation uniquement. Le rapport l'affiche alors à côté de l'estimation ; dans un vrai inventaire, le vrai total n'est jamais connu.
+
+Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="181"/>
         <source>Degrees of freedom of the detection estimate (0: p known)</source>
-        <translation type="unfinished"></translation>
+        <translation>Degrés de liberté de l'estimation de la détection (0 : p connu)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
-        <translation type="unfinished"></translation>
+        <translation>Voisinage local, mis à l'échelle de la formule simple (notre variante)</translation>
     </message>
 </context>
 <context>
@@ -3332,17 +3410,35 @@ Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for tr
 Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
 
 A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="unfinished"></translation>
+        <translation>Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate par valeur du champ de strate ; sans lui, la base forme une seule strate).
+
+Unités par strate : le champ d'unités (par exemple n_alloc de l'étape d'allocation ; le même nombre entier sur chaque entité d'une strate), sinon le total réparti proportionnellement à la surface avec au moins 2 par strate.
+
+Plans :
+• Aléatoire simple : points indépendants, uniformes sur la strate (triangles choisis selon leur surface, puis un point à l'intérieur ; Turk 1990).
+• Grille systématique : une grille carrée de pas √(A/n) avec un départ aléatoire ; avec un azimut de −1 la grille reçoit aussi une rotation aléatoire, sinon elle est orientée selon l'azimut. Le nombre d'unités obtenu varie autour de n et il est indiqué.
+• Spatialement équilibré : échantillonnage par acceptation équilibrée sur une suite de Halton (Robertson et al. 2013). Chaque début de l'ordre de tirage est lui-même réparti uniformément, si bien que les réserves sont les points suivants de la même suite. Le départ est un point aléatoire uniforme de la strate, ce qui garde l'inclusion égale pour toute taille d'échantillon.
+
+Formes : station ponctuelle (taille : rayon de comptage facultatif, m), placette carrée (taille : côté, m), placette circulaire (taille : rayon, m), transect linéaire (taille : longueur, m ; centré sur le point tiré). Azimut en degrés dans le sens horaire depuis le nord de la grille, ou −1 pour un azimut aléatoire par unité.
+Bords : par défaut échantillonnage « plus » (Gregoire &amp; Valentine 2008, ch. 10) : les centres sont tirés sur la strate agrandie de la portée R de l'unité (son rayon circonscrit), et une unité proche du bord ou au-delà n'est inventoriée qu'à l'intérieur de sa propre strate (ne comptez que les animaux situés dans la strate ; un centre peut se trouver hors de celle-ci, voire hors de la base de sondage : ne pénétrez jamais dans un terrain exclu parce que dangereux, inventoriez la partie intérieure depuis l'intérieur). Chaque animal a alors la même chance d'être compté, et plotwise:estimate étend les comptages à la surface agrandie. Garder les unités à l'intérieur tire plutôt les centres dans la strate réduite de R, si bien que chaque unité est entièrement dans sa strate mais que la bande de bordure n'est jamais atteinte (biais là où les animaux proches du bord diffèrent). La surface effective (agrandie ou réduite) est indiquée et utilisée pour les probabilités d'inclusion.
+Espacement minimal (m) entre les centres de toutes les unités, principales et de réserve, sur toute la disposition.
+Réserves : unités supplémentaires par strate, role = reserve, dans l'ordre de tirage. Règle de remplacement : une unité principale qui ne peut pas être inventoriée est remplacée par la réserve suivante non utilisée de la même strate.
+
+Champs de sortie : unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A ; pour les transects et les points sans rayon, la densité d'inclusion n/A par m²), weight = 1/incl_p, lon/lat (WGS 84), un champ count vide pour les équipes de terrain, et l'enregistrement du plan pour l'estimation : design (random, random_sep, grid, grid_ovl ou balanced : si les unités peuvent se chevaucher, ce qui décide de la correction pour population finie), edge (plus ou inside) et reach_m (R, m). Le fichier GPX contient un point de passage par unité (un point de début et un de fin par transect), nommé par unit_id.
+
+Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de la plus petite strate est une erreur, un plus petit un avertissement. Les entités de moins de 1 m² (liserés) sont écartées, avec un avertissement.
+
+Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="164"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
-        <translation type="unfinished"></translation>
+        <translation>Garder chaque unité entièrement dans sa strate (désactivé : échantillonnage « plus »)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="371"/>
         <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
-        <translation type="unfinished"></translation>
+        <translation>Échantillonnage « plus » : les centres ont été tirés sur chaque strate agrandie de {r} m (la portée de l'unité), si bien que les unités proches du bord le dépassent, et certains centres sont hors de leur strate. N'inventoriez que la partie de chaque unité située dans sa propre strate et ne comptez que les animaux qui s'y trouvent (la carte montre les strates) ; une unité qui n'atteint aucune partie de sa strate compte 0. Ne pénétrez jamais dans un terrain exclu ou dangereux pour atteindre un centre : inventoriez la partie située dans la strate depuis l'intérieur de celle-ci. La surface effective est la surface agrandie, et plotwise:estimate y étend les comptages (Gregoire &amp; Valentine 2008, ch. 10).</translation>
     </message>
 </context>
 <context>
@@ -5044,297 +5140,297 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
     <message>
         <location filename="../processing/engine/design_comparison.py" line="90"/>
         <source>stratified Neyman (best case)</source>
-        <translation type="unfinished"></translation>
+        <translation>stratifié Neyman (meilleur cas)</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="90"/>
         <source>stratified Neyman (pilot)</source>
-        <translation type="unfinished"></translation>
+        <translation>stratifié Neyman (pilote)</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="678"/>
         <source>The pilot needs at least 2 units per stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>Le pilote demande au moins 2 unités par strate.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1189"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units kept inside never reach the edge of the frame or of their stratum, so the edge band weighs less in the estimate; where its density differs from the interior, the estimate is biased. Plus sampling (INSIDE off) removes this bias.</source>
-        <translation type="unfinished"></translation>
+        <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités gardées à l'intérieur n'atteignent jamais le bord de la base de sondage ou de leur strate, si bien que la bande de bordure pèse moins dans l'estimation ; là où sa densité diffère de l'intérieur, l'estimation est biaisée. L'échantillonnage « plus » (INSIDE désactivé) supprime ce biais.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1189"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). Plus sampling is unbiased, so the likely cause is the ratio estimator with very few animals per unit, or a systematic grid whose realised number of units varies with the surface; more units reduce it.</source>
-        <translation type="unfinished"></translation>
+        <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). L'échantillonnage « plus » est sans biais : la cause probable est donc l'estimateur par le ratio avec très peu d'animaux par unité, ou une grille systématique dont le nombre réalisé d'unités varie avec la surface ; davantage d'unités le réduisent.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="251"/>
         <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
-        <translation type="unfinished"></translation>
+        <translation>Le type d'inventaire doit être 'line' ou 'point' (reçu '{survey}').</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="116"/>
         <source>The truncation distance must be above 0 m (got {w:g} m).</source>
-        <translation type="unfinished"></translation>
+        <translation>La distance de troncature doit dépasser 0 m (reçu {w:g} m).</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="121"/>
         <source>{count} distances are missing or not numbers. Fill them in or leave those detections out.</source>
-        <translation type="unfinished"></translation>
+        <translation>{count} distances sont manquantes ou ne sont pas des nombres. Renseignez-les ou écartez ces détections.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="126"/>
         <source>{count} distances are negative. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
-        <translation type="unfinished"></translation>
+        <translation>{count} distances sont négatives. Les distances se mesurent depuis la ligne ou le point vers l'extérieur et valent 0 m ou plus ; corrigez-les.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="132"/>
         <source>{count} distances lie beyond the truncation distance of {w:g} m. Leave them out first (right truncation) or raise the truncation distance.</source>
-        <translation type="unfinished"></translation>
+        <translation>{count} distances se trouvent au-delà de la distance de troncature de {w:g} m. Écartez-les d'abord (troncature à droite) ou augmentez la distance de troncature.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="138"/>
         <source>A detection function needs at least 2 distances (got {n}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Une fonction de détection demande au moins 2 distances (reçu {n}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="146"/>
         <source>The distance bands must start at 0 m, increase, and end at the truncation distance {w:g} m, with at least two bands (got {cutpoints}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Les classes de distance doivent commencer à 0 m, croître et finir à la distance de troncature {w:g} m, avec au moins deux classes (reçu {cutpoints}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="745"/>
         <source>Without a truncation distance only the half-normal key alone can be fitted; give a truncation distance for {model}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Sans distance de troncature, seule la fonction clé demi-normale sans terme d'ajustement peut être ajustée ; donnez une distance de troncature pour {model}.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="752"/>
         <source>The model {model} has {q} parameters, more than the {free} the distances can support. Use fewer cosine terms or more distance bands.</source>
-        <translation type="unfinished"></translation>
+        <translation>Le modèle {model} a {q} paramètres, plus que les {free} que les distances permettent. Utilisez moins de termes en cosinus ou davantage de classes de distance.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="820"/>
         <source>Choose at least one key function among half-normal, hazard-rate and uniform.</source>
-        <translation type="unfinished"></translation>
+        <translation>Choisissez au moins une fonction clé parmi demi-normale, taux de risque (hazard-rate) et uniforme.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="846"/>
         <source>No detection function could be fitted to these {n} distances. Check the distances and the truncation distance.</source>
-        <translation type="unfinished"></translation>
+        <translation>Aucune fonction de détection n'a pu être ajustée à ces {n} distances. Vérifiez les distances et la distance de troncature.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="118"/>
         <source>Layer &apos;{layer}&apos;: {n} units have no id in the field &apos;{field}&apos;. Give every unit its id.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : {n} unités n'ont pas d'identifiant dans le champ « {field} ». Donnez à chaque unité son identifiant.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="124"/>
         <source>Layer &apos;{layer}&apos;: the unit ids {ids} occur more than once in the field &apos;{field}&apos;. Each unit needs its own id.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les identifiants d'unité {ids} apparaissent plus d'une fois dans le champ « {field} ». Chaque unité demande son propre identifiant.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="133"/>
         <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les transects {ids} ont une longueur nulle. Supprimez-les ou tracez leur ligne.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="137"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les points {ids} n'ont aucune visite. Donnez à chaque point inventorié son nombre de visites (1 ou plus), ou supprimez les points qui n'ont pas été inventoriés.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="146"/>
         <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les unités {ids} n'ont pas de strate, ou une strate que la couche des strates n'a pas ({strata}). Donnez à chaque unité l'identifiant de sa strate.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="156"/>
         <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
-        <translation type="unfinished"></translation>
+        <translation>Les strates {strata} n'ont aucun transect ni point inventorié. Inventoriez-les, ou retirez-les de la couche des strates (l'estimation ne porte alors que sur les autres strates).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="163"/>
         <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les strates {strata} n'ont qu'un transect ou un point chacune ; la variance du taux de rencontre en demande au moins 2 par strate. Fusionnez chacune avec une strate voisine dans la couche des strates et dans le champ de strate des unités.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="184"/>
         <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : des observations nomment des unités que la couche « {units} » n'a pas (champ « {field} ») : {ids}. Corrigez ces identifiants d'unité, ou ajoutez les unités.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="192"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les observations {ids} n'ont pas de distance dans le champ « {field} » (vide ou qui n'est pas un nombre). Renseignez les distances, ou supprimez ces observations.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="199"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les observations {ids} ont une distance négative dans le champ « {field} ». Les distances se mesurent depuis la ligne ou le point vers l'extérieur et valent 0 m ou plus ; corrigez-les.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="211"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les observations {ids} n'ont pas de taille de groupe supérieure à 0 dans le champ « {field} ». Renseignez le nombre d'animaux vus dans chaque groupe (1 pour un animal seul), ou ne choisissez pas de champ de taille des groupes.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="224"/>
         <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Les classes de distance doivent commencer à 0 m et croître, avec au moins deux classes (reçu {cutpoints}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="232"/>
         <source>There are no observations: a detection function needs at least {minimum} detections.</source>
-        <translation type="unfinished"></translation>
+        <translation>Il n'y a aucune observation : une fonction de détection demande au moins {minimum} détections.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="261"/>
         <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
-        <translation type="unfinished"></translation>
+        <translation>Seules {n} détections se trouvent en deçà de la distance de troncature de {w:g} m ; une fonction de détection en demande au moins {minimum} (pratique courante : 60 à 80). Inventoriez davantage de transects ou de points, ou augmentez la distance de troncature.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="269"/>
         <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
-        <translation type="unfinished"></translation>
+        <translation>Seules {n} détections se trouvent en deçà de la distance de troncature : la fonction de détection repose sur peu de distances (la pratique courante en demande 60 à 80), si bien que sa forme et la densité sont incertaines, et l'AIC peut choisir un modèle par hasard.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="419"/>
         <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
-        <translation type="unfinished"></translation>
+        <translation>Une fonction de détection par strate demande au moins {minimum} détections dans chaque strate en deçà de la distance de troncature ; ces strates en ont moins : {strata}. Utilisez une seule fonction de détection pour toutes les strates.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="438"/>
         <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
-        <translation type="unfinished"></translation>
+        <translation>Strate {stratum} : sa fonction de détection repose sur {n} détections (la pratique courante en demande 60 à 80 par fonction) ; envisagez une seule fonction pour toutes les strates.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="444"/>
         <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
-        <translation type="unfinished"></translation>
+        <translation>La fonction de détection choisie ({model}{at}) s'ajuste mal aux distances (test d'adéquation p = {p:.3f}). Cherchez dans l'histogramme une accumulation sur des distances rondes ou un pic à 0, et envisagez des classes de distance ou une autre troncature.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="451"/>
         <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
-        <translation type="unfinished"></translation>
+        <translation>La fonction de détection choisie ({model}) a un paramètre à la limite de son domaine, si bien que sa variance n'est pas fiable ; essayez une autre troncature ou une autre fonction clé.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="457"/>
         <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
-        <translation type="unfinished"></translation>
+        <translation>La variance de la fonction de détection ({model}) n'a pas pu être calculée (la vraisemblance est plate à son maximum) ; son CV manque dans l'intervalle.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="662"/>
         <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
-        <translation type="unfinished"></translation>
+        <translation>Le bootstrap a échoué : {failed} des {n} rééchantillonnages n'ont pas pu être ajustés. Relancez sans le bootstrap.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="750"/>
         <source>Unknown group-size method &apos;{method}&apos;.</source>
-        <translation type="unfinished"></translation>
+        <translation>Méthode de taille des groupes inconnue '{method}'.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="755"/>
         <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Le niveau de confiance doit être compris entre 0.5 et 1 (reçu {level:g}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="772"/>
         <source>The bootstrap needs a random generator (a seed).</source>
-        <translation type="unfinished"></translation>
+        <translation>Le bootstrap a besoin d'un générateur aléatoire (une graine).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="780"/>
         <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
-        <translation type="unfinished"></translation>
+        <translation>{failed} des {n} rééchantillonnages bootstrap n'ont pas pu être ajustés et ont été écartés ; l'intervalle bootstrap est peut-être trop étroit.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="697"/>
         <source>The degrees of freedom of the detection estimate must be 0 (known p) or more.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les degrés de liberté de l'estimation de la détection doivent valoir 0 (p connu) ou plus.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="738"/>
         <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-        <translation type="unfinished">Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
+        <translation>Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="821"/>
         <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-        <translation type="unfinished">Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
+        <translation>Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="865"/>
         <source>The finite-population correction was not applied in strata {ids}: their units come from a design whose units may overlap ({records}: simple random centres, or a grid denser than the units). Their possible positions form a continuous population, which has no such correction (Cordy 1993); applying it would make the interval too narrow. A layout with MIN_SPACING of at least the unit&apos;s width, a systematic grid or a spatially balanced layout keeps the units apart.</source>
-        <translation type="unfinished"></translation>
+        <translation>La correction pour population finie n'a pas été appliquée dans les strates {ids} : leurs unités viennent d'un plan dont les unités peuvent se chevaucher ({records} : centres aléatoires simples, ou grille plus dense que les unités). Leurs positions possibles forment une population continue, qui n'a pas de telle correction (Cordy 1993) ; l'appliquer rendrait l'intervalle trop étroit. Une disposition avec un MIN_SPACING d'au moins la largeur de l'unité, une grille systématique ou une disposition spatialement équilibrée tient les unités séparées.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="884"/>
         <source>The expansion area of strata {ids} is smaller than the stratum: the plus region holds the stratum. Check the units&apos; edge record.</source>
-        <translation type="unfinished"></translation>
+        <translation>La surface d'extension des strates {ids} est plus petite que la strate : la région « plus » contient la strate. Vérifiez l'enregistrement du bord (edge) des unités.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="903"/>
         <source>In strata {ids} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-        <translation type="unfinished"></translation>
+        <translation>Dans les strates {ids}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1064"/>
         <source>Strata {ids} have fewer than 3 units: their variance uses the simple random sampling formula.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les strates {ids} ont moins de 3 unités : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1078"/>
         <source>{label} (one unit) with {other}</source>
-        <translation type="unfinished"></translation>
+        <translation>{label} (une unité) avec {other}</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1083"/>
         <source>Strata {groups}: a stratum with one surveyed unit takes its variance from the collapsed-strata pairs formula with its partner (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow weights for unequal sizes), which counts the difference between the two strata as variance and so tends to be too large; the partner keeps its own variance.</source>
-        <translation type="unfinished"></translation>
+        <translation>Strates {groups} : une strate avec une seule unité inventoriée tire sa variance de la formule des paires de strates regroupées avec sa partenaire (Cochran 1977, §5A.12 ; poids de Hansen, Hurwitz &amp; Madow pour des tailles inégales), qui compte la différence entre les deux strates comme de la variance et tend donc à être trop grande ; la partenaire garde sa propre variance.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1243"/>
         <source>Even every possible unit in every stratum ({n:,}) would miss the target CV {target_cv:.3g}: n_next is every unit.</source>
-        <translation type="unfinished"></translation>
+        <translation>Même toutes les unités possibles de chaque strate ({n:,}) manqueraient le CV cible {target_cv:.3g} : n_next vaut toutes les unités.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1466"/>
         <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
-        <translation type="unfinished"></translation>
+        <translation>L'erreur type de la probabilité de détection ({se:.3g}) dépasse la moitié de p ({p:.3g}) : l'étude de détection est trop petite pour corriger les comptages de façon fiable, et la méthode delta sur laquelle repose l'intervalle est médiocre pour un tel CV. Agrandissez l'étude de détection.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1478"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
-        <translation type="unfinished"></translation>
+        <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0, et l'intervalle est la limite supérieure unilatérale {hi:.4g} à {level:.0%} (limite de Poisson exacte pour un comptage de 0, en supposant une seule densité sur la base de sondage).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1486"/>
         <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
-        <translation type="unfinished"></translation>
+        <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur intervalle est la limite supérieure unilatérale d'un comptage de 0 (limite de Poisson exacte), et leur erreur type de 0 sous-estime l'incertitude globale (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1530"/>
         <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
-        <translation type="unfinished"></translation>
+        <translation>Dans les strates {ids}, les unités enregistrent des portées différentes (reach_m) : la plus grande est utilisée pour la région « plus ».</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="91"/>
         <source>The detection function must be 1 (half-normal) or 2 (hazard-rate).</source>
-        <translation type="unfinished"></translation>
+        <translation>La fonction de détection doit valoir 1 (demi-normale) ou 2 (taux de risque, hazard-rate).</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="95"/>
         <source>The scale σ must be above 0 m and the hazard-rate shape above 0 (got σ = {sigma:g} m, shape {shape:g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>L'échelle σ doit dépasser 0 m et la forme du taux de risque doit dépasser 0 (reçu σ = {sigma:g} m, forme {shape:g}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="100"/>
         <source>The detection probability on the line must be in (0, 1] (got {g0:g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>La probabilité de détection sur la ligne doit être dans (0, 1] (reçu {g0:g}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="109"/>
         <source>Units {ids} are neither points nor lines of some length; simulated distances need line transects or point stations.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les unités {ids} ne sont ni des points ni des lignes d'une certaine longueur ; les distances simulées demandent des transects linéaires ou des stations ponctuelles.</translation>
     </message>
 </context>
 <context>
@@ -6133,1582 +6229,1582 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
     <message>
         <location filename="../processing/report/allocate.py" line="40"/>
         <source>equal</source>
-        <translation type="unfinished">égale</translation>
+        <translation>égale</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="41"/>
         <source>proportional to area</source>
-        <translation type="unfinished">proportionnelle à la surface</translation>
+        <translation>proportionnelle à la surface</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="42"/>
         <source>Neyman</source>
-        <translation type="unfinished">Neyman</translation>
+        <translation>Neyman</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="43"/>
         <source>optimal with cost</source>
-        <translation type="unfinished">optimale avec coût</translation>
+        <translation>optimale avec coût</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="57"/>
         <source>Allocation of survey effort</source>
-        <translation type="unfinished">Allocation de l'effort d'inventaire</translation>
+        <translation>Allocation de l'effort d'inventaire</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="59"/>
         <source>field days</source>
-        <translation type="unfinished">jours de terrain</translation>
+        <translation>jours de terrain</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="59"/>
         <source>cost units</source>
-        <translation type="unfinished">unités de coût</translation>
+        <translation>unités de coût</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="65"/>
         <source>units in total</source>
-        <translation type="unfinished">unités au total</translation>
+        <translation>unités au total</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="66"/>
         <source>method</source>
-        <translation type="unfinished">méthode</translation>
+        <translation>méthode</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="69"/>
         <source>expected CV of the overall density</source>
-        <translation type="unfinished">CV attendu de la densité globale</translation>
+        <translation>CV attendu de la densité globale</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="71"/>
         <source>field days needed</source>
-        <translation type="unfinished">jours de terrain nécessaires</translation>
+        <translation>jours de terrain nécessaires</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="71"/>
         <source>cost</source>
-        <translation type="unfinished">coût</translation>
+        <translation>coût</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="81"/>
         <source>a total number of units</source>
-        <translation type="unfinished">un nombre total d'unités</translation>
+        <translation>un nombre total d'unités</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="82"/>
         <source>a budget</source>
-        <translation type="unfinished">un budget</translation>
+        <translation>un budget</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="83"/>
         <source>a target CV</source>
-        <translation type="unfinished">un CV cible</translation>
+        <translation>un CV cible</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Strata layer</source>
-        <translation type="unfinished">Couche des strates</translation>
+        <translation>Couche des strates</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="204"/>
         <source>Computation CRS</source>
-        <translation type="unfinished">SCR de calcul</translation>
+        <translation>SCR de calcul</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Method asked for</source>
-        <translation type="unfinished">Méthode demandée</translation>
+        <translation>Méthode demandée</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Method applied</source>
-        <translation type="unfinished">Méthode appliquée</translation>
+        <translation>Méthode appliquée</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Target</source>
-        <translation type="unfinished">Objectif</translation>
+        <translation>Objectif</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Total asked for</source>
-        <translation type="unfinished">Total demandé</translation>
+        <translation>Total demandé</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Budget</source>
-        <translation type="unfinished">Budget</translation>
+        <translation>Budget</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Target CV</source>
-        <translation type="unfinished">CV cible</translation>
+        <translation>CV cible</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Unit area (m²)</source>
-        <translation type="unfinished">Surface d'une unité (m²)</translation>
+        <translation>Surface d'une unité (m²)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Minimum units per stratum</source>
-        <translation type="unfinished">Nombre minimal d'unités par strate</translation>
+        <translation>Nombre minimal d'unités par strate</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>SD field</source>
-        <translation type="unfinished">Champ d'écart-type</translation>
+        <translation>Champ d'écart-type</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source> (covariate proxy)</source>
-        <translation type="unfinished"> (substitut par la covariable)</translation>
+        <translation> (substitut par la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Mean field</source>
-        <translation type="unfinished">Champ de moyenne</translation>
+        <translation>Champ de moyenne</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Cost field</source>
-        <translation type="unfinished">Champ de coût</translation>
+        <translation>Champ de coût</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Fixed cost c0</source>
-        <translation type="unfinished">Coût fixe c0</translation>
+        <translation>Coût fixe c0</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Layout to come</source>
-        <translation type="unfinished"></translation>
+        <translation>Disposition prévue</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="209"/>
         <source>Finite-population correction</source>
-        <translation type="unfinished">Correction pour population finie</translation>
+        <translation>Correction pour population finie</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="119"/>
         <source>Units per stratum</source>
-        <translation type="unfinished">Unités par strate</translation>
+        <translation>Unités par strate</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="120"/>
         <source>SE of mean per unit (covariate units)</source>
-        <translation type="unfinished">Erreur type de la moyenne par unité (unités de la covariable)</translation>
+        <translation>Erreur type de la moyenne par unité (unités de la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="120"/>
         <source>SE of mean count per unit</source>
-        <translation type="unfinished">Erreur type du comptage moyen par unité</translation>
+        <translation>Erreur type du comptage moyen par unité</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="127"/>
         <source>Units that fit</source>
-        <translation type="unfinished">Unités qui y tiennent</translation>
+        <translation>Unités qui y tiennent</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="128"/>
         <source>Lower bound</source>
-        <translation type="unfinished">Borne inférieure</translation>
+        <translation>Borne inférieure</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="129"/>
         <source>Share before rounding</source>
-        <translation type="unfinished">Part avant arrondi</translation>
+        <translation>Part avant arrondi</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="130"/>
         <source>Units (n_alloc)</source>
-        <translation type="unfinished">Unités (n_alloc)</translation>
+        <translation>Unités (n_alloc)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="131"/>
         <source>Sampling fraction</source>
-        <translation type="unfinished">Fraction d'échantillonnage</translation>
+        <translation>Fraction d'échantillonnage</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="136"/>
         <source>SE of density (per km²)</source>
-        <translation type="unfinished">Erreur type de la densité (par km²)</translation>
+        <translation>Erreur type de la densité (par km²)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="138"/>
         <source>Expected CV (exp_cv)</source>
-        <translation type="unfinished">CV attendu (exp_cv)</translation>
+        <translation>CV attendu (exp_cv)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="379"/>
         <source>all strata</source>
-        <translation type="unfinished">toutes les strates</translation>
+        <translation>toutes les strates</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="172"/>
         <source>units per stratum</source>
-        <translation type="unfinished">unités par strate</translation>
+        <translation>unités par strate</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="172"/>
         <source>Units allocated to each stratum</source>
-        <translation type="unfinished">Unités allouées à chaque strate</translation>
+        <translation>Unités allouées à chaque strate</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="196"/>
         <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-        <translation type="unfinished">{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+        <translation>{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="196"/>
         <source>Field days needed</source>
-        <translation type="unfinished">Jours de terrain nécessaires</translation>
+        <translation>Jours de terrain nécessaires</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="196"/>
         <source>Cost of the design</source>
-        <translation type="unfinished">Coût du plan</translation>
+        <translation>Coût du plan</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="210"/>
         <source>What the choice of method buys, at {n} units</source>
-        <translation type="unfinished">Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
+        <translation>Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="214"/>
         <source>stratum {label}</source>
-        <translation type="unfinished">strate {label}</translation>
+        <translation>strate {label}</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="217"/>
         <source>Variance relative to the applied allocation</source>
-        <translation type="unfinished">Variance relative à l'allocation appliquée</translation>
+        <translation>Variance relative à l'allocation appliquée</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="219"/>
         <source>Expected CV</source>
-        <translation type="unfinished">CV attendu</translation>
+        <translation>CV attendu</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="230"/>
         <source>Without standard deviations the precision of the designs cannot be compared.</source>
-        <translation type="unfinished">Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
+        <translation>Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="43"/>
         <source>Survey designs compared by simulation</source>
-        <translation type="unfinished">Plans d'inventaire comparés par simulation</translation>
+        <translation>Plans d'inventaire comparés par simulation</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="49"/>
         <source>recommended design</source>
-        <translation type="unfinished">plan recommandé</translation>
+        <translation>plan recommandé</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="50"/>
         <source>its RMSE (animals)</source>
-        <translation type="unfinished">sa REQM (animaux)</translation>
+        <translation>sa REQM (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="51"/>
         <source>its RMSE relative to the total</source>
-        <translation type="unfinished">sa REQM relative au total</translation>
+        <translation>sa REQM relative au total</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="52"/>
         <source>its 95 % interval coverage</source>
-        <translation type="unfinished">couverture de ses intervalles à 95 %</translation>
+        <translation>couverture de ses intervalles à 95 %</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="54"/>
         <source>expected animals in the frame</source>
-        <translation type="unfinished">animaux attendus dans la base de sondage</translation>
+        <translation>animaux attendus dans la base de sondage</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="57"/>
         <source>point station</source>
-        <translation type="unfinished">station ponctuelle</translation>
+        <translation>station ponctuelle</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="58"/>
         <source>square plot</source>
-        <translation type="unfinished">placette carrée</translation>
+        <translation>placette carrée</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="59"/>
         <source>circular plot</source>
-        <translation type="unfinished">placette circulaire</translation>
+        <translation>placette circulaire</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="60"/>
         <source>line transect</source>
-        <translation type="unfinished">transect linéaire</translation>
+        <translation>transect linéaire</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="63"/>
         <source>counting radius</source>
-        <translation type="unfinished">rayon de comptage</translation>
+        <translation>rayon de comptage</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="64"/>
         <source>side</source>
-        <translation type="unfinished">côté</translation>
+        <translation>côté</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="65"/>
         <source>radius</source>
-        <translation type="unfinished">rayon</translation>
+        <translation>rayon</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="66"/>
         <source>length</source>
-        <translation type="unfinished">longueur</translation>
+        <translation>longueur</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="71"/>
         <source>, strip half-width {w:g} m</source>
-        <translation type="unfinished">, demi-largeur de bande {w:g} m</translation>
+        <translation>, demi-largeur de bande {w:g} m</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="73"/>
         <source>Density surface</source>
-        <translation type="unfinished">Surface de densité</translation>
+        <translation>Surface de densité</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="74"/>
         <source>Sampling frame</source>
-        <translation type="unfinished">Base de sondage</translation>
+        <translation>Base de sondage</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="252"/>
         <source>Strata</source>
-        <translation type="unfinished">Strates</translation>
+        <translation>Strates</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="147"/>
         <source>none</source>
-        <translation type="unfinished">aucune</translation>
+        <translation>néant</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="200"/>
         <source>Stratum field</source>
-        <translation type="unfinished">Champ de strate</translation>
+        <translation>Champ de strate</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="77"/>
         <source>feature id</source>
-        <translation type="unfinished">identifiant d'entité</translation>
+        <translation>identifiant d'entité</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="79"/>
         <source>Surface cell</source>
-        <translation type="unfinished">Cellule de la surface</translation>
+        <translation>Cellule de la surface</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="80"/>
         <source>Sub-cells per cell side (for counting)</source>
-        <translation type="unfinished">Sous-cellules par côté de cellule (pour le comptage)</translation>
+        <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="81"/>
         <source>Unit</source>
-        <translation type="unfinished">Unité</translation>
+        <translation>Unité</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="82"/>
         <source>Counted area per unit (m²)</source>
-        <translation type="unfinished">Surface comptée par unité (m²)</translation>
+        <translation>Surface comptée par unité (m²)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="83"/>
         <source>Bearing</source>
-        <translation type="unfinished">Azimut</translation>
+        <translation>Azimut</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="83"/>
         <source>random</source>
-        <translation type="unfinished">aléatoire</translation>
+        <translation>aléatoire</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="86"/>
         <source>Units wholly inside their stratum</source>
-        <translation type="unfinished">Unités entièrement dans leur strate</translation>
+        <translation>Unités entièrement dans leur strate</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="91"/>
         <source>Number of units</source>
-        <translation type="unfinished">Nombre d'unités</translation>
+        <translation>Nombre d'unités</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="92"/>
         <source>Simulated surveys per design</source>
-        <translation type="unfinished">Inventaires simulés par plan</translation>
+        <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="93"/>
         <source>Counts per cell</source>
-        <translation type="unfinished">Comptages par cellule</translation>
+        <translation>Comptages par cellule</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="93"/>
         <source>negative binomial, k = {k:g}</source>
-        <translation type="unfinished">binomiale négative, k = {k:g}</translation>
+        <translation>binomiale négative, k = {k:g}</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="93"/>
         <source>Poisson</source>
-        <translation type="unfinished">Poisson</translation>
+        <translation>Poisson</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="98"/>
         <source>Variance estimator (grid, balanced)</source>
-        <translation type="unfinished">Estimateur de variance (grille, équilibré)</translation>
+        <translation>Estimateur de variance (grille, équilibré)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="98"/>
         <source>local neighbourhood</source>
-        <translation type="unfinished">voisinage local</translation>
+        <translation>voisinage local</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="164"/>
         <source>simple random sampling formula</source>
-        <translation type="unfinished">formule de l'échantillonnage aléatoire simple</translation>
+        <translation>formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="206"/>
         <source>Confidence level</source>
-        <translation type="unfinished">Niveau de confiance</translation>
+        <translation>Niveau de confiance</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="222"/>
         <source>Seed</source>
-        <translation type="unfinished">Graine</translation>
+        <translation>Graine</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="109"/>
         <source>How the designs did at {n} units</source>
-        <translation type="unfinished">Résultats des plans pour {n} unités</translation>
+        <translation>Résultats des plans pour {n} unités</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="111"/>
         <source>Design</source>
-        <translation type="unfinished">Plan</translation>
+        <translation>Plan</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="112"/>
         <source>Mean units surveyed</source>
-        <translation type="unfinished">Unités inventoriées en moyenne</translation>
+        <translation>Unités inventoriées en moyenne</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="113"/>
         <source>Relative bias</source>
-        <translation type="unfinished">Biais relatif</translation>
+        <translation>Biais relatif</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>Empirical SE (animals)</source>
-        <translation type="unfinished">Erreur type empirique (animaux)</translation>
+        <translation>Erreur type empirique (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="311"/>
         <source>RMSE (animals)</source>
-        <translation type="unfinished">REQM (animaux)</translation>
+        <translation>REQM (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="116"/>
         <source>± Monte Carlo SE</source>
-        <translation type="unfinished">± erreur type de Monte-Carlo</translation>
+        <translation>± erreur type de Monte-Carlo</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="117"/>
         <source>RMSE / total</source>
-        <translation type="unfinished">REQM / total</translation>
+        <translation>REQM / total</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="118"/>
         <source>Mean estimated CV</source>
-        <translation type="unfinished">CV estimé moyen</translation>
+        <translation>CV estimé moyen</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="119"/>
         <source>95 % interval coverage</source>
-        <translation type="unfinished">Couverture des intervalles à 95 %</translation>
+        <translation>Couverture des intervalles à 95 %</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="120"/>
         <source>Surveys without an estimate</source>
-        <translation type="unfinished">Inventaires sans estimation</translation>
+        <translation>Inventaires sans estimation</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="155"/>
         <source>RMSE of the abundance (animals)</source>
-        <translation type="unfinished">REQM de l'abondance (animaux)</translation>
+        <translation>REQM de l'abondance (animaux)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="155"/>
         <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-        <translation type="unfinished">Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
+        <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="166"/>
         <source>Recommendation</source>
-        <translation type="unfinished">Recommandation</translation>
+        <translation>Recommandation</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="168"/>
         <source>No design gave estimates: see the warnings.</source>
-        <translation type="unfinished">Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
+        <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="212"/>
         <source>How the simulation works</source>
-        <translation type="unfinished">Fonctionnement de la simulation</translation>
+        <translation>Fonctionnement de la simulation</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="257"/>
         <source>Area (km²)</source>
-        <translation type="unfinished">Surface (km²)</translation>
+        <translation>Surface (km²)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="258"/>
         <source>Mean expected count per unit</source>
-        <translation type="unfinished">Comptage attendu moyen par unité</translation>
+        <translation>Comptage attendu moyen par unité</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="259"/>
         <source>S_h (count SD per unit)</source>
-        <translation type="unfinished">S_h (écart-type du comptage par unité)</translation>
+        <translation>S_h (écart-type du comptage par unité)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="262"/>
         <source>Units, proportional</source>
-        <translation type="unfinished">Unités, proportionnelle</translation>
+        <translation>Unités, proportionnelle</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="264"/>
         <source>Units, Neyman (best case)</source>
-        <translation type="unfinished"></translation>
+        <translation>Unités, Neyman (meilleur cas)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="266"/>
         <source>Units, Neyman from a pilot (mean)</source>
-        <translation type="unfinished"></translation>
+        <translation>Unités, Neyman d'après un pilote (moyenne)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="292"/>
         <source>RMSE against the number of units</source>
-        <translation type="unfinished">REQM en fonction du nombre d'unités</translation>
+        <translation>REQM en fonction du nombre d'unités</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="298"/>
         <source>number of units</source>
-        <translation type="unfinished">nombre d'unités</translation>
+        <translation>nombre d'unités</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="298"/>
         <source>RMSE of the abundance estimate against the number of units</source>
-        <translation type="unfinished">REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
+        <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="307"/>
         <source>Units</source>
-        <translation type="unfinished">Unités</translation>
+        <translation>Unités</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="318"/>
         <source>{a} → {b} units: RMSE {change:+.0%}</source>
-        <translation type="unfinished">{a} → {b} unités : REQM {change:+.0%}</translation>
+        <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="323"/>
         <source>For {name}: </source>
-        <translation type="unfinished">Pour {name} : </translation>
+        <translation>Pour {name} : </translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="125"/>
         <source>{level} interval</source>
-        <translation type="unfinished">intervalle à {level}</translation>
+        <translation>intervalle à {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="383"/>
         <source>animals per {unit}</source>
-        <translation type="unfinished"></translation>
+        <translation>animaux par {unit}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="378"/>
         <source>transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transects</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="378"/>
         <source>points</source>
-        <translation type="unfinished"></translation>
+        <translation>points</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="120"/>
         <source>estimated animals in the frame</source>
-        <translation type="unfinished"></translation>
+        <translation>animaux estimés dans la base de sondage</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="244"/>
         <source>CV</source>
-        <translation type="unfinished">CV</translation>
+        <translation>CV</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="124"/>
         <source>detections used</source>
-        <translation type="unfinished"></translation>
+        <translation>détections utilisées</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="128"/>
         <source>detection probability within the truncation distance</source>
-        <translation type="unfinished"></translation>
+        <translation>probabilité de détection en deçà de la distance de troncature</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="129"/>
         <source>effective strip half-width (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>demi-largeur effective de bande (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="129"/>
         <source>effective detection radius (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>rayon effectif de détection (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="138"/>
         <source>the last band edge</source>
-        <translation type="unfinished"></translation>
+        <translation>la dernière borne des classes</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="140"/>
         <source>automatic: the farthest 5 % of the distances left out</source>
-        <translation type="unfinished"></translation>
+        <translation>automatique : les 5 % des distances les plus éloignées sont écartés</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="148"/>
         <source>{layer} (id field {field})</source>
-        <translation type="unfinished"></translation>
+        <translation>{layer} (champ d'identifiant {field})</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="150"/>
         <source>{layer} (unit field {unit}, distance field {distance})</source>
-        <translation type="unfinished"></translation>
+        <translation>{layer} (champ d'unité {unit}, champ de distance {distance})</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="152"/>
         <source>line transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transects linéaires</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="152"/>
         <source>point transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transects ponctuels</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="154"/>
         <source>none: exact distances</source>
-        <translation type="unfinished"></translation>
+        <translation>aucune : distances exactes</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="156"/>
         <source>one per stratum</source>
-        <translation type="unfinished"></translation>
+        <translation>une par strate</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="156"/>
         <source>one for all strata</source>
-        <translation type="unfinished"></translation>
+        <translation>une pour toutes les strates</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="159"/>
         <source>mean, or size-bias regression when larger groups are seen farther</source>
-        <translation type="unfinished"></translation>
+        <translation>moyenne, ou régression du biais de taille si les grands groupes sont vus plus loin</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="161"/>
         <source>mean of the detected groups</source>
-        <translation type="unfinished"></translation>
+        <translation>moyenne des groupes détectés</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="162"/>
         <source>size-bias regression</source>
-        <translation type="unfinished"></translation>
+        <translation>régression du biais de taille</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Transects or points</source>
-        <translation type="unfinished"></translation>
+        <translation>Transects ou points</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Survey type</source>
-        <translation type="unfinished"></translation>
+        <translation>Type d'inventaire</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="201"/>
         <source>none: one stratum</source>
-        <translation type="unfinished">aucun : une seule strate</translation>
+        <translation>aucun : une seule strate</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Visits field</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ des visites</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Observations</source>
-        <translation type="unfinished"></translation>
+        <translation>Observations</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Group size field</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ de taille des groupes</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>none: each detection is one animal</source>
-        <translation type="unfinished"></translation>
+        <translation>aucun : chaque détection est un animal</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="203"/>
         <source>Strata (frame)</source>
-        <translation type="unfinished">Strates (base de sondage)</translation>
+        <translation>Strates (base de sondage)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Truncation distance</source>
-        <translation type="unfinished"></translation>
+        <translation>Distance de troncature</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Distance bands (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Classes de distance (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Key functions tried</source>
-        <translation type="unfinished"></translation>
+        <translation>Fonctions clés essayées</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Most cosine terms per key</source>
-        <translation type="unfinished"></translation>
+        <translation>Nombre maximal de termes en cosinus par fonction clé</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="206"/>
         <source>Detection function</source>
-        <translation type="unfinished"></translation>
+        <translation>Fonction de détection</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Group size</source>
-        <translation type="unfinished"></translation>
+        <translation>Taille des groupes</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="205"/>
         <source>Area unit</source>
-        <translation type="unfinished">Unité de surface</translation>
+        <translation>Unité de surface</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="219"/>
         <source>Bootstrap resamples</source>
-        <translation type="unfinished">Rééchantillonnages bootstrap</translation>
+        <translation>Rééchantillonnages bootstrap</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="194"/>
         <source>perpendicular distance from the line (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>distance perpendiculaire à la ligne (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="194"/>
         <source>Distances seen from the lines, with the fitted detection function scaled to the detections (its height at 0 is where every animal is seen)</source>
-        <translation type="unfinished"></translation>
+        <translation>Distances observées depuis les lignes, avec la fonction de détection ajustée mise à l'échelle des détections (sa hauteur en 0 correspond à la détection de tous les animaux)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="197"/>
         <source>distance from the point (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>distance au point (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="197"/>
         <source>Distances seen from the points, with the fitted probability density of the distances: it rises from 0 because there is more ground farther from a point, then falls as detection drops</source>
-        <translation type="unfinished"></translation>
+        <translation>Distances observées depuis les points, avec la densité de probabilité ajustée des distances : elle croît depuis 0 parce qu'il y a plus de terrain loin d'un point, puis décroît quand la détection baisse</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="207"/>
         <source>{n} of the {recorded} recorded detections lie within the truncation distance of {w:.1f} m and were used; {dropped} farther ones were left out.</source>
-        <translation type="unfinished"></translation>
+        <translation>{n} des {recorded} détections enregistrées se trouvent en deçà de la distance de troncature de {w:.1f} m et ont été utilisées ; {dropped} plus éloignées ont été écartées.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="218"/>
         <source>detections per metre of distance</source>
-        <translation type="unfinished"></translation>
+        <translation>détections par mètre de distance</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="218"/>
         <source>fitted: {model}</source>
-        <translation type="unfinished"></translation>
+        <translation>ajusté : {model}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="250"/>
         <source>Stratum {stratum}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Strate {stratum}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="237"/>
         <source>Effective half-width (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Demi-largeur effective (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="237"/>
         <source>Effective radius (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Rayon effectif (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="240"/>
         <source>AIC above the best</source>
-        <translation type="unfinished"></translation>
+        <translation>AIC au-dessus du meilleur</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="241"/>
         <source>Detection probability within w</source>
-        <translation type="unfinished"></translation>
+        <translation>Probabilité de détection en deçà de w</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="242"/>
         <source>Fit, χ² p</source>
-        <translation type="unfinished"></translation>
+        <translation>Adéquation, p du χ²</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="243"/>
         <source>Fit, Cramér–von Mises p</source>
-        <translation type="unfinished"></translation>
+        <translation>Adéquation, p de Cramér–von Mises</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="244"/>
         <source>Chosen</source>
-        <translation type="unfinished"></translation>
+        <translation>Choisi</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="245"/>
         <source>Every model tried, in the order fitted ({n} detections). The smallest AIC is chosen; a fit p below 0.05 means the model misses the shape of the distances.</source>
-        <translation type="unfinished"></translation>
+        <translation>Chaque modèle essayé, dans l'ordre d'ajustement ({n} détections). Le plus petit AIC est choisi ; un p d'adéquation inférieur à 0.05 signifie que le modèle ne rend pas la forme des distances.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="259"/>
         <source>Group size: {n} groups seen, mean size {mean:.3g}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Taille des groupes : {n} groupes vus, taille moyenne {mean:.3g}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="262"/>
         <source>The regression of ln(size) on the detection probability has slope {b:.3g} (p = {p:.3f}).</source>
-        <translation type="unfinished"></translation>
+        <translation>La régression de ln(taille) sur la probabilité de détection a une pente de {b:.3g} (p = {p:.3f}).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="266"/>
         <source>Larger groups are seen farther away, so the expected size where every group is seen, {e:.3g} (SE {se:.3g}), is used instead of the mean.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les grands groupes sont vus plus loin : la taille attendue là où tous les groupes sont vus, {e:.3g} (erreur type {se:.3g}), est donc utilisée à la place de la moyenne.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="270"/>
         <source>The mean is used (SE {se:.3g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>La moyenne est utilisée (erreur type {se:.3g}).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="284"/>
         <source>distance (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>distance (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="284"/>
         <source>probability of detection</source>
-        <translation type="unfinished"></translation>
+        <translation>probabilité de détection</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="286"/>
         <source>The best model of each key function: the probability of seeing an animal at each distance (1 on the line or at the point, by assumption)</source>
-        <translation type="unfinished"></translation>
+        <translation>Le meilleur modèle de chaque fonction clé : la probabilité de voir un animal à chaque distance (1 sur la ligne ou au point, par hypothèse)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="292"/>
         <source>Transects</source>
-        <translation type="unfinished"></translation>
+        <translation>Transects</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="292"/>
         <source>Points</source>
-        <translation type="unfinished"></translation>
+        <translation>Points</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="293"/>
         <source>Line length (km)</source>
-        <translation type="unfinished"></translation>
+        <translation>Longueur de ligne (km)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="293"/>
         <source>Visits</source>
-        <translation type="unfinished"></translation>
+        <translation>Visites</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="295"/>
         <source>Detections per km</source>
-        <translation type="unfinished"></translation>
+        <translation>Détections par km</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="295"/>
         <source>Detections per visit</source>
-        <translation type="unfinished"></translation>
+        <translation>Détections par visite</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="235"/>
         <source>Area ({unit})</source>
-        <translation type="unfinished">Surface ({unit})</translation>
+        <translation>Surface ({unit})</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="299"/>
         <source>Detections</source>
-        <translation type="unfinished"></translation>
+        <translation>Détections</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="300"/>
         <source>Animals per {unit}</source>
-        <translation type="unfinished"></translation>
+        <translation>Animaux par {unit}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Lower limit</source>
-        <translation type="unfinished">Limite inférieure</translation>
+        <translation>Limite inférieure</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Upper limit</source>
-        <translation type="unfinished">Limite supérieure</translation>
+        <translation>Limite supérieure</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="245"/>
         <source>df</source>
-        <translation type="unfinished">ddl</translation>
+        <translation>ddl</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="314"/>
         <source>bootstrap percentile limits</source>
-        <translation type="unfinished"></translation>
+        <translation>limites des percentiles bootstrap</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="314"/>
         <source>log-normal limits with t</source>
-        <translation type="unfinished"></translation>
+        <translation>limites log-normales avec t</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="316"/>
         <source>Density by stratum, {method} at {level}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Densité par strate, {method} à {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="320"/>
         <source>Animals</source>
-        <translation type="unfinished"></translation>
+        <translation>Animaux</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="320"/>
         <source>Abundance in the frame, limits at {level}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Abondance dans la base de sondage, limites à {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="328"/>
         <source>For comparison: the abundance&apos;s delta-method interval (log-normal with t).</source>
-        <translation type="unfinished"></translation>
+        <translation>Pour comparaison : l'intervalle de l'abondance par la méthode delta (log-normal avec t).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="342"/>
         <source>Share from the encounter rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Part du taux de rencontre</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="343"/>
         <source>Share from the detection function</source>
-        <translation type="unfinished"></translation>
+        <translation>Part de la fonction de détection</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="344"/>
         <source>Share from group size</source>
-        <translation type="unfinished"></translation>
+        <translation>Part de la taille des groupes</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="345"/>
         <source>Where the uncertainty comes from: each part's share of CV² (delta method). A large encounter-rate share calls for more transects; a large detection share for more detections.</source>
-        <translation type="unfinished"></translation>
+        <translation>D'où vient l'incertitude : la part de chaque composante dans le CV² (méthode delta). Une grande part du taux de rencontre appelle davantage de transects ; une grande part de la détection, davantage de détections.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="351"/>
         <source>Density and abundance</source>
-        <translation type="unfinished"></translation>
+        <translation>Densité et abondance</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="359"/>
         <source>Density by stratum with {level} intervals</source>
-        <translation type="unfinished"></translation>
+        <translation>Densité par strate avec intervalles à {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="372"/>
         <source>lowest: {value:.3g}</source>
-        <translation type="unfinished"></translation>
+        <translation>minimum : {value:.3g}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="373"/>
         <source>highest: {value:.3g}</source>
-        <translation type="unfinished"></translation>
+        <translation>maximum : {value:.3g}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="384"/>
         <source>Strata shaded by density (animals per {unit}), with the surveyed {what}</source>
-        <translation type="unfinished"></translation>
+        <translation>Strates ombrées selon la densité (animaux par {unit}), avec les {what} inventoriés</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="391"/>
         <source>Each detection function is a key (half-normal, hazard-rate or uniform) with up to the chosen number of cosine terms, fitted to the distances by maximum likelihood; terms are added one at a time while AIC falls, under the constraint that detection never rises with distance, and the model with the smallest AIC is used (Buckland et al. 2001).</source>
-        <translation type="unfinished"></translation>
+        <translation>Chaque fonction de détection est une fonction clé (demi-normale, taux de risque ou uniforme) avec au plus le nombre choisi de termes en cosinus, ajustée aux distances par maximum de vraisemblance ; les termes sont ajoutés un à un tant que l'AIC baisse, sous la contrainte que la détection ne croisse jamais avec la distance, et le modèle de plus petit AIC est utilisé (Buckland et al. 2001).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="398"/>
         <source>Density in a stratum is D = n·E(s) / (2·w·L·P), with n the groups seen within the truncation distance w, L the line length, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
-        <translation type="unfinished"></translation>
+        <translation>La densité d'une strate est D = n·E(s) / (2·w·L·P), où n est le nombre de groupes vus en deçà de la distance de troncature w, L la longueur de ligne, P la probabilité de voir un groupe en deçà de w et E(s) la taille attendue des groupes (Buckland et al. 2001).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="404"/>
         <source>Density in a stratum is D = n·E(s) / (k·π·w²·P), with n the groups seen within the truncation distance w, k the number of point visits, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
-        <translation type="unfinished"></translation>
+        <translation>La densité d'une strate est D = n·E(s) / (k·π·w²·P), où n est le nombre de groupes vus en deçà de la distance de troncature w, k le nombre de visites de points, P la probabilité de voir un groupe en deçà de w et E(s) la taille attendue des groupes (Buckland et al. 2001).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="409"/>
         <source>The squared CV of the density is the sum of those of the encounter rate, of P and of E(s) (delta method). The encounter rate's variance comes from the differences between transects within each stratum (estimator R2 of Fewster et al. 2009), that of P from the curvature of the likelihood, that of E(s) from the spread of group sizes. Intervals are log-normal, D/C to D·C with C = exp(t·√ln(1 + CV²)), t with Satterthwaite's degrees of freedom (Buckland et al. 2001). With one detection function for all strata, its uncertainty is shared by every stratum and counted once in the overall estimate.</source>
-        <translation type="unfinished"></translation>
+        <translation>Le CV au carré de la densité est la somme de ceux du taux de rencontre, de P et de E(s) (méthode delta). La variance du taux de rencontre vient des différences entre transects dans chaque strate (estimateur R2 de Fewster et al. 2009), celle de P de la courbure de la vraisemblance, celle de E(s) de la dispersion des tailles des groupes. Les intervalles sont log-normaux, de D/C à D·C avec C = exp(t·√ln(1 + CV²)), t avec les degrés de liberté de Satterthwaite (Buckland et al. 2001). Avec une seule fonction de détection pour toutes les strates, son incertitude est partagée par chaque strate et comptée une seule fois dans l'estimation globale.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="418"/>
         <source>The intervals reported are bootstrap percentile intervals: {b} resamples drawn from the recorded seed, each taking as many transects or points per stratum as were surveyed, with replacement, refitting the chosen detection function and group size to their detections (AIC is not rerun). {f} resamples could not be fitted.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les intervalles indiqués sont des intervalles bootstrap des percentiles : {b} rééchantillonnages tirés à partir de la graine enregistrée, chacun prenant avec remise autant de transects ou de points par strate qu'il en a été inventorié, et réajustant à leurs détections la fonction de détection choisie et la taille des groupes (l'AIC n'est pas refait). {f} rééchantillonnages n'ont pas pu être ajustés.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="427"/>
         <source>Assumptions and cautions</source>
-        <translation type="unfinished"></translation>
+        <translation>Hypothèses et mises en garde</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="428"/>
         <source>The estimate is only as good as three things that happened in the field:</source>
-        <translation type="unfinished"></translation>
+        <translation>L'estimation ne vaut que ce que valent trois choses qui se sont passées sur le terrain :</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="431"/>
         <source>Animals on the line are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les animaux sur la ligne sont toujours vus. Chaque animal manqué sur la ligne rend l'estimation trop basse de la même proportion, et aucun intervalle ne le montre.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="435"/>
         <source>Animals at the point are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les animaux au point sont toujours vus. Chaque animal manqué au point rend l'estimation trop basse de la même proportion, et aucun intervalle ne le montre.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="438"/>
         <source>Distances are measured accurately, with a rangefinder and compass where possible. Rounding to round numbers, or guessing, distorts the detection function; distance bands are then safer.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les distances sont mesurées avec précision, au télémètre et à la boussole si possible. Arrondir à des nombres ronds, ou estimer à vue, déforme la fonction de détection ; des classes de distance sont alors plus sûres.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="441"/>
         <source>Animals do not move before they are detected: animals fleeing from the observer look like a detection function that falls too early, and animals drawn to the observer like one that falls too late.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les animaux ne se déplacent pas avant d'être détectés : des animaux qui fuient l'observateur ressemblent à une fonction de détection qui chute trop tôt, et des animaux attirés par l'observateur à une fonction qui chute trop tard.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="445"/>
         <source>The transects or points were placed at random (or on a randomly placed grid) with respect to the animals, and each stratum&apos;s estimate covers its polygons only: tracks and roads are not random lines.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les transects ou les points ont été placés au hasard (ou sur une grille placée au hasard) par rapport aux animaux, et l'estimation de chaque strate ne couvre que ses polygones : les pistes et les routes ne sont pas des lignes aléatoires.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="467"/>
         <source>Density from detection distances</source>
-        <translation type="unfinished"></translation>
+        <translation>Densité à partir des distances de détection</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="87"/>
         <source>Naive occupancy from presence data</source>
-        <translation type="unfinished">Occupation naïve à partir de données de présence</translation>
+        <translation>Occupation naïve à partir de données de présence</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="87"/>
         <source>Density and abundance estimate</source>
-        <translation type="unfinished">Estimation de la densité et de l'abondance</translation>
+        <translation>Estimation de la densité et de l'abondance</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="106"/>
         <source>proportion of units occupied (naive)</source>
-        <translation type="unfinished">proportion d'unités occupées (naïve)</translation>
+        <translation>proportion d'unités occupées (naïve)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="106"/>
         <source>occupied units</source>
-        <translation type="unfinished">unités occupées</translation>
+        <translation>unités occupées</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="109"/>
         <source>density per {unit}</source>
-        <translation type="unfinished">densité par {unit}</translation>
+        <translation>densité par {unit}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="109"/>
         <source>animals</source>
-        <translation type="unfinished">animaux</translation>
+        <translation>animaux</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="118"/>
         <source>0 – {hi} (one-sided)</source>
-        <translation type="unfinished"></translation>
+        <translation>0 – {hi} (unilatéral)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="124"/>
         <source>estimated {what} in the frame</source>
-        <translation type="unfinished">estimation des {what} dans la base de sondage</translation>
+        <translation>estimation des {what} dans la base de sondage</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="128"/>
         <source>units surveyed</source>
-        <translation type="unfinished">unités inventoriées</translation>
+        <translation>unités inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="131"/>
         <source>true total of the simulated population</source>
-        <translation type="unfinished">vrai total de la population simulée</translation>
+        <translation>vrai total de la population simulée</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="137"/>
         <source>covers</source>
-        <translation type="unfinished">contient</translation>
+        <translation>contient</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="137"/>
         <source>misses</source>
-        <translation type="unfinished">ne contient pas</translation>
+        <translation>ne contient pas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="159"/>
         <source>t with Satterthwaite degrees of freedom</source>
-        <translation type="unfinished">t avec les degrés de liberté de Satterthwaite</translation>
+        <translation>t avec les degrés de liberté de Satterthwaite</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="160"/>
         <source>log-normal (with t)</source>
-        <translation type="unfinished"></translation>
+        <translation>log-normal (avec t)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="161"/>
         <source>stratified percentile bootstrap</source>
-        <translation type="unfinished">bootstrap stratifié des percentiles</translation>
+        <translation>bootstrap stratifié des percentiles</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="165"/>
         <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-        <translation type="unfinished">voisinage local (Stevens &amp; Olsen 2003)</translation>
+        <translation>voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="166"/>
         <source>local neighbourhood, scaled to the simple formula (our variant)</source>
-        <translation type="unfinished"></translation>
+        <translation>voisinage local, mis à l'échelle de la formule simple (notre variante)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="176"/>
         <source>plus sampling (units count only inside their stratum)</source>
-        <translation type="unfinished"></translation>
+        <translation>échantillonnage « plus » (les unités ne comptent que dans leur strate)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="177"/>
         <source>units kept wholly inside their stratum</source>
-        <translation type="unfinished"></translation>
+        <translation>unités gardées entièrement dans leur strate</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="178"/>
         <source>no record: whole units</source>
-        <translation type="unfinished"></translation>
+        <translation>pas d'enregistrement : unités entières</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="180"/>
         <source>field {field} (m²)</source>
-        <translation type="unfinished">champ {field} (m²)</translation>
+        <translation>champ {field} (m²)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="180"/>
         <source>polygon area</source>
-        <translation type="unfinished">surface du polygone</translation>
+        <translation>surface du polygone</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="186"/>
         <source>strip width</source>
-        <translation type="unfinished">largeur de bande</translation>
+        <translation>largeur de bande</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="188"/>
         <source>fixed</source>
-        <translation type="unfinished">fixe</translation>
+        <translation>fixe</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="190"/>
         <source>asked for; applied in strata {yes}, refused in {no} (units may overlap)</source>
-        <translation type="unfinished"></translation>
+        <translation>demandée ; appliquée dans les strates {yes}, refusée dans {no} (les unités peuvent se chevaucher)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="197"/>
         <source>Sample units</source>
-        <translation type="unfinished">Unités d'échantillonnage</translation>
+        <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="198"/>
         <source>Count field</source>
-        <translation type="unfinished">Champ de comptage</translation>
+        <translation>Champ de comptage</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="199"/>
         <source> (presence/absence)</source>
-        <translation type="unfinished"> (présence/absence)</translation>
+        <translation> (présence/absence)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="202"/>
         <source>Unit area</source>
-        <translation type="unfinished">Surface d'une unité</translation>
+        <translation>Surface d'une unité</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Interval</source>
-        <translation type="unfinished">Intervalle</translation>
+        <translation>Intervalle</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="208"/>
         <source>Variance estimator</source>
-        <translation type="unfinished">Estimateur de variance</translation>
+        <translation>Estimateur de variance</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="210"/>
         <source>Edge protocol of the units</source>
-        <translation type="unfinished"></translation>
+        <translation>Protocole de bord des unités</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="211"/>
         <source>Detection probability p</source>
-        <translation type="unfinished">Probabilité de détection p</translation>
+        <translation>Probabilité de détection p</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="214"/>
         <source>Target CV for the next survey</source>
-        <translation type="unfinished">CV cible pour le prochain inventaire</translation>
+        <translation>CV cible pour le prochain inventaire</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="222"/>
         <source>not used (no random draws without the bootstrap)</source>
-        <translation type="unfinished">non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
+        <translation>non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="232"/>
         <source>Estimates by stratum</source>
-        <translation type="unfinished">Estimations par strate</translation>
+        <translation>Estimations par strate</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="236"/>
         <source>Units (n)</source>
-        <translation type="unfinished">Unités (n)</translation>
+        <translation>Unités (n)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="237"/>
         <source>Not surveyed</source>
-        <translation type="unfinished">Non inventoriées</translation>
+        <translation>Non inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="238"/>
         <source>Mean count</source>
-        <translation type="unfinished">Comptage moyen</translation>
+        <translation>Comptage moyen</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="239"/>
         <source>SD of counts</source>
-        <translation type="unfinished">Écart-type des comptages</translation>
+        <translation>Écart-type des comptages</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="279"/>
         <source>Occupied units</source>
-        <translation type="unfinished">Unités occupées</translation>
+        <translation>Unités occupées</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="279"/>
         <source>Abundance</source>
-        <translation type="unfinished">Abondance</translation>
+        <translation>Abondance</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="257"/>
         <source>Units next time (n_next)</source>
-        <translation type="unfinished">Unités la prochaine fois (n_next)</translation>
+        <translation>Unités la prochaine fois (n_next)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="272"/>
         <source>{what}, limits at {level}.</source>
-        <translation type="unfinished">{what}, limites à {level}.</translation>
+        <translation>{what}, limites à {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="279"/>
         <source>{what} in the frame, limits at {level}.</source>
-        <translation type="unfinished">{what} dans la base de sondage, limites à {level}.</translation>
+        <translation>{what} dans la base de sondage, limites à {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="308"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-        <translation type="unfinished">Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
+        <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="314"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
-        <translation type="unfinished">{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
+        <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="324"/>
         <source>The overall interval by method</source>
-        <translation type="unfinished">L'intervalle global selon la méthode</translation>
+        <translation>L'intervalle global selon la méthode</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Used in the outputs</source>
-        <translation type="unfinished">Utilisé dans les sorties</translation>
+        <translation>Utilisé dans les sorties</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>overall abundance in a resample</source>
-        <translation type="unfinished">abondance globale dans un rééchantillonnage</translation>
+        <translation>abondance globale dans un rééchantillonnage</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>resamples</source>
-        <translation type="unfinished">rééchantillonnages</translation>
+        <translation>rééchantillonnages</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>{level} percentile limits</source>
-        <translation type="unfinished">limites des percentiles à {level}</translation>
+        <translation>limites des percentiles à {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
-        <translation type="unfinished">Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
+        <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="378"/>
         <source>true density (simulation)</source>
-        <translation type="unfinished">vraie densité (simulation)</translation>
+        <translation>vraie densité (simulation)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="388"/>
         <source>{what} by stratum with {level} confidence intervals</source>
-        <translation type="unfinished">{what} par strate avec intervalles de confiance à {level}</translation>
+        <translation>{what} par strate avec intervalles de confiance à {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="403"/>
         <source>lowest</source>
-        <translation type="unfinished">minimum</translation>
+        <translation>minimum</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="403"/>
         <source>highest</source>
-        <translation type="unfinished">maximum</translation>
+        <translation>maximum</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="414"/>
         <source>surveyed units</source>
-        <translation type="unfinished">unités inventoriées</translation>
+        <translation>unités inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="424"/>
         <source>not surveyed</source>
-        <translation type="unfinished">non inventoriées</translation>
+        <translation>non inventoriées</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="433"/>
         <source>Strata shaded by {what}, with the units</source>
-        <translation type="unfinished">Strates ombrées selon {what}, avec les unités</translation>
+        <translation>Strates ombrées selon {what}, avec les unités</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="600"/>
         <source>Cautions</source>
-        <translation type="unfinished">Mises en garde</translation>
+        <translation>Mises en garde</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="180"/>
         <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction 1 − n_h·a/A_h, since the layout named draws units that do not overlap (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-        <translation type="unfinished"></translation>
+        <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie 1 − n_h·a/A_h, puisque la disposition indiquée tire des unités qui ne se chevauchent pas (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="180"/>
         <source>Expected precision uses the pilot figures as if they were the truth, without a finite-population correction: a simple random layout&apos;s units may overlap, so their possible positions are a continuous population (Cordy 1993). Real precision depends on the counts the survey finds.</source>
-        <translation type="unfinished"></translation>
+        <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, sans correction pour population finie : les unités d'une disposition aléatoire simple peuvent se chevaucher, si bien que leurs positions possibles forment une population continue (Cordy 1993). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="145"/>
         <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-        <translation type="unfinished">Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
+        <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="170"/>
         <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-        <translation type="unfinished">{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
+        <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="177"/>
         <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-        <translation type="unfinished">{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
+        <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="189"/>
         <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-        <translation type="unfinished">Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
+        <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="199"/>
         <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-        <translation type="unfinished">Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
+        <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="213"/>
         <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine and follows the real chain&apos;s edge protocol: by default plus sampling, with centres over each stratum (or the frame) grown by the unit&apos;s reach (and half a surface cell), each unit counting the animals of the cells of its own stratum whose centres it covers, with its nominal area, and the estimation engine expanding the counts to the grown area (Gregoire &amp; Valentine 2008, ch. 10); the abundance is the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-        <translation type="unfinished"></translation>
+        <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition et suit le protocole de bord de la chaîne réelle : par défaut l'échantillonnage « plus », avec des centres sur chaque strate (ou la base) agrandie de la portée de l'unité (et d'une demi-cellule de la surface), chaque unité comptant les animaux des cellules de sa propre strate dont elle couvre le centre, avec sa surface nominale, et le moteur d'estimation étendant les comptages à la surface agrandie (Gregoire &amp; Valentine 2008, ch. 10) ; l'abondance est l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="227"/>
         <source>The stratified Neyman design with the true S_h is the best case: it allocates with the standard deviations the surface implies, which no survey knows. The pilot-based Neyman design estimates S_h in every simulated survey from a pilot of {pilot} simple random units per stratum (an independent realisation: a pilot season), as a survey would; its pilot units are not counted in its n.</source>
-        <translation type="unfinished"></translation>
+        <translation>Le plan stratifié de Neyman avec le vrai S_h est le meilleur cas : il répartit selon les écarts-types qu'implique la surface, qu'aucun inventaire ne connaît. Le plan de Neyman fondé sur un pilote estime S_h dans chaque inventaire simulé à partir d'un pilote de {pilot} unités aléatoires simples par strate (une réalisation indépendante : une saison pilote), comme le ferait un inventaire ; ses unités pilotes ne sont pas comptées dans son n.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="236"/>
         <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-        <translation type="unfinished">Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
+        <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="280"/>
         <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-        <translation type="unfinished">S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
+        <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="328"/>
         <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-        <translation type="unfinished">La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
+        <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="137"/>
         <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-        <translation type="unfinished">Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
+        <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="290"/>
         <source>† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit −ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided by p with detection. For the frame it assumes one density over the strata.</source>
-        <translation type="unfinished"></translation>
+        <translation>† Tous les comptages valaient 0 : l'estimation vaut 0 et l'intervalle va de 0 à la limite supérieure unilatérale −ln(1 − {level}) · A / Σa d'un comptage de Poisson de 0 (Garwood 1936 ; environ 3 · A / Σa à 95 %), divisée par p avec la détection. Pour la base de sondage, elle suppose une seule densité sur les strates.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="299"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-        <translation type="unfinished">La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
+        <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="344"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-        <translation type="unfinished">L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
+        <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="442"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-        <translation type="unfinished">La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
+        <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="453"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-        <translation type="unfinished"></translation>
+        <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie s'applique et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="465"/>
         <source>Edges: the units were laid out by plus sampling (Gregoire &amp; Valentine 2008, ch. 10): their centres were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside its own stratum. Every animal then has the same chance of being counted, and the counts expand to the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).</source>
-        <translation type="unfinished"></translation>
+        <translation>Bords : les unités ont été disposées par échantillonnage « plus » (Gregoire &amp; Valentine 2008, ch. 10) : leurs centres ont été tirés sur chaque strate agrandie de la portée de l'unité, et chaque unité ne compte que les animaux situés dans sa propre strate. Chaque animal a alors la même chance d'être compté, et les comptages sont étendus à la surface agrandie A⁺_h : N_h = A⁺_h Σy/Σa (colonne des surfaces d'extension dans la sortie).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="475"/>
         <source>Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit&apos;s reach of the edge; the estimate carries the inner density over that band. Where the animals near the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.</source>
-        <translation type="unfinished"></translation>
+        <translation>Bords : les unités ont été gardées entièrement dans leurs strates, si bien qu'aucune unité n'atteint la bande située à moins d'une portée d'unité du bord ; l'estimation reporte la densité intérieure sur cette bande. Là où les animaux proches du bord diffèrent (une rive, une lisière de forêt), elle est biaisée ; l'échantillonnage « plus » (INSIDE désactivé) ne l'est pas.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="488"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, eq. 3.75), with df_p = {df} for p.</source>
-        <translation type="unfinished"></translation>
+        <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté des deux parts se combinent selon la règle de Satterthwaite, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, éq. 3.75), avec df_p = {df} pour p.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="500"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds. The observed SDs are themselves uncertain, especially from few units.</source>
-        <translation type="unfinished"></translation>
+        <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types qu'implique maintenant l'estimateur de variance (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 et au plus les unités que contient une strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="512"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="512"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go below 0.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(t_df · √ln(1 + CV²)), t avec les degrés de liberté de Satterthwaite de l'estimation (Buckland et al. 2001, §3.6.1 ; le quantile normal seulement pour des ddl infinis, Burnham et al. 1987). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="512"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction where it applies (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-        <translation type="unfinished"></translation>
+        <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie là où elle s'applique (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="542"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to the same variance. For a simple random layout use the simple formula.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, avec des poids dont la somme vaut 1 sur chaque voisinage et sur chaque unité, et v = Σ_i Σ_j w_ij (z_j − z̄_i)². Ses degrés de liberté sont ceux d'une forme quadratique, (tr Q)² / tr Q² (Box 1954), et le bootstrap disperse ses rééchantillonnages jusqu'à la même variance. Pour une disposition aléatoire simple, utilisez la formule simple.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="553"/>
         <source>Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on average with the simple formula where the population has no spatial pattern; the published sum falls about a quarter short there. This scaling is ours, not Stevens &amp; Olsen's.</source>
-        <translation type="unfinished"></translation>
+        <translation>Notre variante : la double somme est multipliée par n / Σ_i (1 − Σ_j w_ij²), pour qu'elle concorde en moyenne avec la formule simple là où la population n'a pas de structure spatiale ; la somme publiée y est inférieure d'environ un quart. Cette mise à l'échelle est la nôtre, pas celle de Stevens &amp; Olsen.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="562"/>
         <source>Strata with one surveyed unit were paired with a partner fixed before the counts were seen (the stratum sharing the longest edge on the map, or else the next stratum in id order). Two one-unit strata share the pairs formula v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, with the weights of Hansen, Hurwitz &amp; Madow 1953); a one-unit stratum paired with a stratum of several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's spread, while the partner keeps its own variance. Differences between the paired strata count as variance, so these standard errors tend to be too large; each such stratum has 1 degree of freedom.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les strates avec une seule unité inventoriée ont été associées à une partenaire fixée avant que les comptages ne soient vus (la strate qui partage la plus longue limite sur la carte, ou à défaut la strate suivante dans l'ordre des identifiants). Deux strates d'une seule unité partagent la formule des paires v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, avec les poids de Hansen, Hurwitz &amp; Madow 1953) ; une strate d'une seule unité associée à une strate de plusieurs unités prend (D̂_1 − D̂_2)² − v(D̂_2), au moins la variance qu'a une unité avec la dispersion de la partenaire, tandis que la partenaire garde sa propre variance. Les différences entre strates associées comptent comme variance, si bien que ces erreurs types tendent à être trop grandes ; chacune de ces strates a 1 degré de liberté.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="579"/>
         <source>The finite-population correction was refused in strata {ids}: their units come from a simple random layout whose units may overlap, a continuous population of possible units, which has no such correction (Cordy 1993).</source>
-        <translation type="unfinished"></translation>
+        <translation>La correction pour population finie a été refusée dans les strates {ids} : leurs unités viennent d'une disposition aléatoire simple dont les unités peuvent se chevaucher, une population continue d'unités possibles, qui n'a pas de telle correction (Cordy 1993).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="588"/>
         <source>The finite-population correction assumes that the units do not overlap and were drawn without replacement from the units that tile each stratum. The units carry no design record (they did not come from plotwise:layout), so this could not be checked: if they may overlap, switch the correction off.</source>
-        <translation type="unfinished"></translation>
+        <translation>La correction pour population finie suppose que les unités ne se chevauchent pas et ont été tirées sans remise parmi les unités qui pavent chaque strate. Les unités ne portent aucun enregistrement de plan (elles ne viennent pas de plotwise:layout), si bien que cela n'a pas pu être vérifié : si elles peuvent se chevaucher, désactivez la correction.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="601"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-        <translation type="unfinished">L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
+        <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="609"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-        <translation type="unfinished">Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
+        <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="617"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-        <translation type="unfinished">Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
+        <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="626"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-        <translation type="unfinished">Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
+        <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="633"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-        <translation type="unfinished">Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
+        <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
     </message>
 </context>
 <context>
@@ -7809,82 +7905,82 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="45"/>
         <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Strata&lt;/b&gt; (optional, with their id field): each unit counts only the animals inside its own stratum (matched by the units&apos; &lt;i&gt;stratum&lt;/i&gt; field; without an id field, inside the strata), the rule of plus sampling, the layout&apos;s default at the edges (Gregoire &amp;amp; Valentine 2008, ch. 10). Give the strata the units were laid out on.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-        <translation type="unfinished"></translation>
+        <translation>&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Strates&lt;/b&gt; (facultatif, avec leur champ d'identifiant) : chaque unité ne compte que les animaux situés dans sa propre strate (reconnue par le champ &lt;i&gt;stratum&lt;/i&gt; des unités ; sans champ d'identifiant, dans les strates), la règle de l'échantillonnage « plus », le protocole par défaut de la disposition aux bords (Gregoire &amp;amp; Valentine 2008, ch. 10). Donnez les strates sur lesquelles les unités ont été disposées.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="64"/>
         <source>&lt;p&gt;Distances (for the distance density algorithm):&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Detection function&lt;/b&gt;: none (the detection probability above, the same at every distance), or half-normal g(x) = exp(−x²/2σ²) or hazard-rate g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), for line transects and point stations. Each animal within the maximum distance of a unit is then seen with probability p·g(x), x its perpendicular distance to the line or its distance to the point, p the detection probability above (1: animals on the line are always seen, as distance sampling assumes).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Scale σ (m)&lt;/b&gt; and &lt;b&gt;hazard-rate shape b&lt;/b&gt; of the detection function.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Maximum distance (m)&lt;/b&gt;: animals farther than this from the line or point are not counted; 0 takes the distance where g falls to 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Group size field&lt;/b&gt; of the animal points (optional): each point is then a group of that many animals; otherwise each point is one animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observations&lt;/b&gt; (optional, with a detection function): one point per sighting at the animal's position, with &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) and &lt;i&gt;size&lt;/i&gt;, ready for the distance density algorithm.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;With a detection function, &lt;i&gt;present&lt;/i&gt; counts the animals within the maximum distance, and the strata are not used: a line or point sees the animals within the maximum distance on both sides of a stratum edge, as observers do.&lt;/p&gt;&lt;p&gt;Reference: Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</source>
-        <translation type="unfinished"></translation>
+        <translation>&lt;p&gt;Distances (pour l'algorithme de densité à partir des distances) :&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Fonction de détection&lt;/b&gt; : aucune (la probabilité de détection ci-dessus, la même à toute distance), ou demi-normale g(x) = exp(−x²/2σ²) ou taux de risque (hazard-rate) g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), pour les transects linéaires et les stations ponctuelles. Chaque animal situé à moins de la distance maximale d'une unité est alors vu avec la probabilité p·g(x), x étant sa distance perpendiculaire à la ligne ou sa distance au point, et p la probabilité de détection ci-dessus (1 : les animaux sur la ligne sont toujours vus, comme le suppose l'échantillonnage par distance).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Échelle σ (m)&lt;/b&gt; et &lt;b&gt;forme b du taux de risque&lt;/b&gt; de la fonction de détection.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Distance maximale (m)&lt;/b&gt; : les animaux plus éloignés de la ligne ou du point ne sont pas comptés ; 0 prend la distance où g tombe à 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Champ de taille des groupes&lt;/b&gt; des points des animaux (facultatif) : chaque point est alors un groupe d'autant d'animaux ; sinon chaque point est un animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observations&lt;/b&gt; (facultatif, avec une fonction de détection) : un point par observation à la position de l'animal, avec &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) et &lt;i&gt;size&lt;/i&gt;, prêt pour l'algorithme de densité à partir des distances.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Avec une fonction de détection, &lt;i&gt;present&lt;/i&gt; compte les animaux situés à moins de la distance maximale, et les strates ne sont pas utilisées : une ligne ou un point voit les animaux à moins de la distance maximale des deux côtés d'une limite de strate, comme les observateurs.&lt;/p&gt;&lt;p&gt;Référence : Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="100"/>
         <source>Strata: count only inside each unit&apos;s stratum (plus sampling)</source>
-        <translation type="unfinished"></translation>
+        <translation>Strates : ne compter que dans la strate de chaque unité (échantillonnage « plus »)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="103"/>
         <source>Stratum id field of the strata</source>
-        <translation type="unfinished">Champ d'identifiant des strates</translation>
+        <translation>Champ d'identifiant des strates</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>Detection function (line transects and point stations)</source>
-        <translation type="unfinished"></translation>
+        <translation>Fonction de détection (transects linéaires et stations ponctuelles)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>None: the same detection probability at every distance</source>
-        <translation type="unfinished"></translation>
+        <translation>Aucune : la même probabilité de détection à toute distance</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>Half-normal</source>
-        <translation type="unfinished"></translation>
+        <translation>Demi-normale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>Hazard-rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Taux de risque (hazard-rate)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="111"/>
         <source>Scale σ of the detection function (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Échelle σ de la fonction de détection (m)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="114"/>
         <source>Shape b of the hazard-rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Forme b du taux de risque (hazard-rate)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="117"/>
         <source>Maximum distance from the line or point (m; 0: where g falls to 1 %)</source>
-        <translation type="unfinished"></translation>
+        <translation>Distance maximale de la ligne ou du point (m ; 0 : là où g tombe à 1 %)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="120"/>
         <source>Group size field of the animal points</source>
-        <translation type="unfinished"></translation>
+        <translation>Champ de taille des groupes des points des animaux</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="123"/>
         <source>Observations with distances</source>
-        <translation type="unfinished"></translation>
+        <translation>Observations avec les distances</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="249"/>
         <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
-        <translation type="unfinished"></translation>
+        <translation>Couche « {layer} » : les points des animaux {ids} n'ont pas de taille de groupe supérieure à 0 dans le champ « {field} ». Renseignez-la, ou ne choisissez pas de champ de taille des groupes.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="262"/>
         <source>Animals within {w:.1f} m of the lines or points are counted.</source>
-        <translation type="unfinished"></translation>
+        <translation>Les animaux à moins de {w:.1f} m des lignes ou des points sont comptés.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="285"/>
         <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
-        <translation type="unfinished"></translation>
+        <translation>Aucune fonction de détection n'a été choisie, il n'y a donc pas de distances : la couche des observations est vide.</translation>
     </message>
 </context>
 <context>
