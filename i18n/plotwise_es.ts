@@ -464,32 +464,46 @@ Mean field: the pilot mean count per unit, needed for CVs and for a target CV. C
 Layout to come: the finite-population correction 1 − n·a/A is used only when the units will not overlap (systematic grid, spatially balanced, or simple random with a minimum spacing of at least the unit's width); simple random centres without one may overlap, a continuous population with no such correction (Cordy 1993). plotwise:estimate applies the same rule.
 
 Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-        <translation type="unfinished"></translation>
+        <translation>Decide cuántas unidades de muestreo recibe cada estrato y muestra de antemano la precisión que aportan.
+
+Métodos: igual; proporcional al área del estrato; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, cap. 5); óptima con coste, n_h ∝ A_h·S_h/√c_h, con un presupuesto C = c0 + Σ c_h·n_h (Cochran 1977, cap. 5).
+
+Objetivo: un CV objetivo (si es mayor que 0) busca el menor total cuyo coeficiente de variación esperado de la densidad global lo cumple; si no, un presupuesto (si es mayor que 0, necesita el campo de coste); si no, el número total de unidades.
+
+Límites: al menos el mínimo por estrato (2 por defecto, para que se pueda estimar la varianza de cada estrato) y como máximo las unidades que caben (área del estrato / área de la unidad). Un estrato que alcanza un límite lo conserva y el resto se reparte entre los demás, hasta que se estabiliza. Las unidades enteras se redondean por el mayor resto, conservando el total.
+
+Campo de área: el área del estrato en hectáreas (area_ha por defecto, como lo escribe la estratificación); si está vacío o falta, se usa el área del polígono.
+Campo de DE: la desviación estándar piloto de los conteos por unidad. Sin él se usa como sustituto la DE de la covariable (cov_sd), lo que supone que los conteos siguen a la covariable; sin ninguno de los dos, la asignación es proporcional.
+Campo de media: el conteo medio piloto por unidad, necesario para los CV y para un CV objetivo. Campo de coste: coste de muestrear una unidad en cada estrato (por ejemplo, jornadas de campo).
+
+Disposición prevista: la corrección por población finita 1 − n·a/A solo se usa cuando las unidades no se solaparán (cuadrícula sistemática, espacialmente equilibrada, o aleatoria simple con una separación mínima de al menos el ancho de la unidad); los centros aleatorios simples sin ella pueden solaparse, una población continua que no tiene tal corrección (Cordy 1993). plotwise:estimate aplica la misma regla.
+
+Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad del estrato), y un informe que compara la asignación igual, la proporcional y la de Neyman con el mismo total.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Layout to come (decides the finite-population correction)</source>
-        <translation type="unfinished"></translation>
+        <translation>Disposición prevista (decide la corrección por población finita)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Simple random (units may overlap: no correction)</source>
-        <translation type="unfinished"></translation>
+        <translation>Aleatorio simple (las unidades pueden solaparse: sin corrección)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Simple random with a minimum spacing of at least the unit&apos;s width</source>
-        <translation type="unfinished"></translation>
+        <translation>Aleatorio simple con una separación mínima de al menos el ancho de la unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Systematic grid</source>
-        <translation type="unfinished">Cuadrícula sistemática</translation>
+        <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Spatially balanced</source>
-        <translation type="unfinished">Espacialmente equilibrado</translation>
+        <translation>Espacialmente equilibrado</translation>
     </message>
 </context>
 <context>
@@ -1444,27 +1458,41 @@ Output table, one row per design: rel_bias (relative bias against each populatio
 Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
 
 The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="unfinished"></translation>
+        <translation>Antes del trabajo de campo: ¿qué diseño, y cuántas unidades, dan una estimación útil en esta zona? El algoritmo simula muchos muestreos de una superficie de densidad plausible e informa de cómo le fue a cada diseño.
+
+Superficie: un ráster de animales esperados por km² (de un modelo de hábitat, un mapa de expertos o un muestreo anterior), reproyectado al SRC del marco cuando hace falta. Marco: el marco de muestreo. Estratos (opcionales, con el campo de estrato, 'stratum' por defecto): necesarios para los dos diseños estratificados.
+
+Cada réplica genera una población: conteos de Poisson en cada celda de la superficie o, con una sobredispersión k mayor que 0, conteos binomiales negativos (gamma-Poisson, varianza μ + μ²/k por celda). Luego cada diseño elegido se dispone con el motor de disposición, sus unidades cuentan los animales de las celdas que cubren (la parte dentro del marco o de su estrato) y la abundancia se estima con el motor de estimación (estimador de razón, intervalo t con gl de Satterthwaite; Cochran 1977). Todos los diseños muestrean las mismas poblaciones, de modo que sus diferencias no se difuminan.
+
+Diseños: aleatorio simple; estratificado con asignación proporcional; estratificado con asignación de Neyman, n_h ∝ A_h·S_h con S_h la DE del conteo de una unidad implicada por la superficie (Neyman 1934): el mejor caso, ya que ningún muestreo conoce la S_h verdadera; cuadrícula sistemática con inicio aleatorio (su n varía); espacialmente equilibrado (muestreo por aceptación equilibrada, Robertson et al. 2013); Neyman estratificado a partir de un piloto: en cada muestreo simulado, S_h se estima a partir de un piloto con el número indicado de unidades aleatorias simples por estrato (de una realización independiente, una temporada piloto), como lo estimaría un muestreo real.
+
+Unidades: estación puntual (tamaño = radio de conteo), parcela cuadrada (lado), parcela circular (radio), transecto lineal (longitud, contando una franja de la semianchura indicada a cada lado). Rumbo en grados en sentido horario desde el norte de la cuadrícula, −1 aleatorio (el valor por defecto: una cuadrícula alineada con bordes rectos pone de una vez filas enteras en la franja del borde). Los bordes siguen el protocolo de la disposición: por defecto el muestreo «plus», con centros sobre cada estrato (o el marco) ampliado en el alcance de la unidad, cada unidad contando solo las celdas de su propio estrato con su área nominal, y la estimación extendiéndose al área ampliada (Gregoire &amp; Valentine 2008, cap. 10); con las unidades mantenidas dentro, centros sorteados en cada estrato reducido en el radio de la unidad, como hace la opción de la disposición.
+
+Tabla de salida, una fila por diseño: rel_bias (sesgo relativo frente al total verdadero de cada población), emp_se (DE de los errores), rmse (raíz del error cuadrático medio) y rmse_mcse (su error estándar de Monte Carlo), rel_rmse (rmse / total verdadero medio), mean_cv (CV estimado medio), coverage (proporción de intervalos al 95 % que contienen la verdad), mean_n (media de unidades muestreadas), alloc (unidades por estrato), recommend (1 para el diseño recomendado: la menor RECM entre los diseños cuyos intervalos cubren al menos el 90 %).
+
+Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación se repite con cada n y el informe dibuja la RECM frente a n, mostrando dónde más esfuerzo deja de compensar.
+
+La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Stratified, Neyman allocation with the true S_h (best case)</source>
-        <translation type="unfinished"></translation>
+        <translation>Estratificado, asignación de Neyman con la S_h verdadera (mejor caso)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Stratified, Neyman allocation from a pilot survey</source>
-        <translation type="unfinished"></translation>
+        <translation>Estratificado, asignación de Neyman a partir de un muestreo piloto</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
-        <translation type="unfinished"></translation>
+        <translation>Vecindario local, escalado a la fórmula simple (nuestra variante)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="195"/>
         <source>Pilot units per stratum for the pilot-based Neyman design</source>
-        <translation type="unfinished"></translation>
+        <translation>Unidades piloto por estrato para el diseño de Neyman basado en un piloto</translation>
     </message>
 </context>
 <context>
@@ -1650,7 +1678,7 @@ The simulation assumes the surface is right and every animal in a unit is counte
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="86"/>
         <source>Density from detection distances (line and point transects)</source>
-        <translation type="unfinished"></translation>
+        <translation>Densidad a partir de las distancias de detección (transectos lineales y puntuales)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="89"/>
@@ -1679,287 +1707,311 @@ Outputs: the strata with stratum, area, n_units (transects or points), effort (k
 References: Buckland, S. T. et al. (2001) Introduction to Distance Sampling, Oxford University Press. Fewster, R. M. et al. (2009) Biometrics 65:225–236.
 
 Field safety: distance sampling sends observers along lines and to points. Check every unit's access and safety before sending a team: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
-        <translation type="unfinished"></translation>
+        <translation>Estima la densidad y la abundancia por estrato y para el marco a partir de las distancias a las que se vieron los animales (o los grupos) desde transectos lineales o estaciones puntuales. Una función de detección ajustada a las distancias da la probabilidad de ver un animal, así que la estimación no necesita ninguna probabilidad de detección introducida a mano (Buckland et al. 2001).
+
+Transectos o puntos: las unidades de la disposición (transectos lineales o estaciones puntuales), con su campo identificador (unit_id) y su campo de estrato (stratum). La longitud de las líneas procede de la geometría; un campo de visitas da las visitas a cada punto (vacío o 0: no muestreado). Cuenta cada unidad muestreada, también las que no tienen ninguna detección. Las unidades cuyo role es 'reserve' se dejan fuera salvo que una observación las nombre; asigne el role 'primary' a una reserva muestreada que no vio nada.
+
+Observaciones: una tabla o capa de puntos con una fila por detección: el identificador de la unidad, la distancia en m (perpendicular a la línea en los transectos lineales, desde el punto en los puntuales) y, opcionalmente, el tamaño de grupo (campo vacío: cada detección es un animal). Una distancia negativa o ausente, un tamaño de grupo no mayor que 0 o un identificador de unidad que la capa de unidades no tiene detienen la ejecución, nombrando las observaciones.
+
+Tipo de muestreo: transectos lineales o puntuales. Distancia de truncamiento (m): las detecciones más lejanas se dejan fuera; 0 descarta el 5 % más lejano (práctica habitual). Intervalos de distancia (m, opcional, p. ej. 0, 10, 25, 50, 100): para muestreos que registran intervalos; el ajuste usa entonces los conteos por intervalo, y el último límite es la distancia de truncamiento.
+
+Funciones clave: seminormal, tasa de riesgo (hazard-rate) y uniforme; cada una se ajusta sola y luego con términos coseno añadidos de uno en uno mientras mejora el AIC (como máximo el número indicado), con la restricción de que la detección nunca crezca con la distancia. Se usa el modelo con el menor AIC; la tabla de modelos lista cada modelo probado con su AIC, la diferencia con el mejor, la probabilidad de detección, la semianchura efectiva de franja (líneas) o el radio efectivo de detección (puntos) y los valores p de la prueba de bondad de ajuste (χ² sobre intervalos de distancia; Cramér–von Mises sobre distancias exactas).
+
+Tamaño de grupo: el tamaño medio de los grupos detectados, o la regresión del sesgo de tamaño de ln(tamaño) sobre la probabilidad de detección cuando los grupos grandes se ven más lejos (automático: cuando la pendiente es negativa con p &lt; 0.15, práctica habitual).
+
+Una función de detección por estrato (opción): cada estrato necesita entonces al menos 20 detecciones (se aconsejan de 60 a 80, práctica habitual); si no, una sola función sirve para todos los estratos.
+
+Densidad: D = n·E(s) / (2wL·P) para líneas y n·E(s) / (kπw²·P) para puntos. Varianza por el método delta: la de la tasa de encuentro entre transectos dentro de cada estrato (estimador R2 de Fewster et al. 2009), la de la función de detección a partir de su verosimilitud y la del tamaño de grupo a partir de los tamaños; grados de libertad de Satterthwaite e intervalo log-normal con t (Buckland et al. 2001). Los remuestreos bootstrap (0: ninguno) remuestrean transectos o puntos dentro de los estratos y reajustan el modelo elegido, con semilla; las salidas llevan entonces el intervalo de percentiles del bootstrap.
+
+Estratos: polígonos con un campo identificador que corresponde al campo de estrato de las unidades; sus áreas definen el marco (como en el algoritmo de estimación). Cada estrato necesita al menos dos unidades muestreadas. Se necesitan al menos 20 detecciones dentro de la distancia de truncamiento (un error indica el número) y se aconsejan 60 (una advertencia).
+
+Nivel de confianza de los intervalos; unidad de área de los resultados (km² o hectáreas); semilla aleatoria, que solo usa el bootstrap (0 sortea una y la registra); número máximo de términos coseno por función clave (0: las funciones clave solas).
+
+Salidas: los estratos con stratum, area, n_units (transectos o puntos), effort (km de línea, o visitas a los puntos), n_det (detecciones dentro de la distancia de truncamiento), p_det (probabilidad de detección dentro de ella), esw (semianchura efectiva de franja para líneas, radio efectivo de detección para puntos, m), dens, abund con su error estándar, sus límites y su CV, y df; una tabla de modelos (model, n_par, aic, delta_aic, p_det, esw, gof_p, chosen, y luego stratum, n_det, chisq_p, cvm_p); un informe HTML (histograma de las distancias con la función ajustada, modelos, estimaciones, mapa, supuestos); y los valores globales para los modelos.
+
+Referencias: Buckland, S. T. et al. (2001) Introduction to Distance Sampling, Oxford University Press. Fewster, R. M. et al. (2009) Biometrics 65:225–236.
+
+Seguridad en el terreno: el muestreo de distancias envía observadores a lo largo de líneas y a puntos. Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="148"/>
         <source>Transects or points surveyed</source>
-        <translation type="unfinished"></translation>
+        <translation>Transectos o puntos muestreados</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="150"/>
         <source>Unit id field</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo identificador de unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="152"/>
         <source>Stratum field of the units</source>
-        <translation type="unfinished">Campo de estrato de las unidades</translation>
+        <translation>Campo de estrato de las unidades</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="155"/>
         <source>Observations (one row per detection)</source>
-        <translation type="unfinished"></translation>
+        <translation>Observaciones (una fila por detección)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="157"/>
         <source>Unit id field of the observations</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo identificador de unidad de las observaciones</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="160"/>
         <source>Distance field (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo de distancia (m)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="163"/>
         <source>Group size field (empty: each detection is one animal)</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo de tamaño de grupo (vacío: cada detección es un animal)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="166"/>
         <source>Survey type</source>
-        <translation type="unfinished"></translation>
+        <translation>Tipo de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="166"/>
         <source>Line transects</source>
-        <translation type="unfinished"></translation>
+        <translation>Transectos lineales</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="166"/>
         <source>Point transects</source>
-        <translation type="unfinished"></translation>
+        <translation>Transectos puntuales</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="169"/>
         <source>Truncation distance (m; 0: drop the farthest 5 %)</source>
-        <translation type="unfinished"></translation>
+        <translation>Distancia de truncamiento (m; 0: descartar el 5 % más lejano)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Key functions to try</source>
-        <translation type="unfinished"></translation>
+        <translation>Funciones clave que probar</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Half-normal</source>
-        <translation type="unfinished"></translation>
+        <translation>Seminormal</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Hazard-rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Tasa de riesgo (hazard-rate)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="172"/>
         <source>Uniform with cosine terms</source>
-        <translation type="unfinished"></translation>
+        <translation>Uniforme con términos coseno</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="176"/>
         <source>Strata (the frame)</source>
-        <translation type="unfinished">Estratos (el marco)</translation>
+        <translation>Estratos (el marco)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="178"/>
         <source>Stratum id field of the strata</source>
-        <translation type="unfinished">Campo identificador de los estratos</translation>
+        <translation>Campo identificador de los estratos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="181"/>
         <source>Confidence level</source>
-        <translation type="unfinished">Nivel de confianza</translation>
+        <translation>Nivel de confianza</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="184"/>
         <source>Area unit of the results</source>
-        <translation type="unfinished">Unidad de área de los resultados</translation>
+        <translation>Unidad de área de los resultados</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="184"/>
         <source>km²</source>
-        <translation type="unfinished">km²</translation>
+        <translation>km²</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="184"/>
         <source>hectares</source>
-        <translation type="unfinished">hectáreas</translation>
+        <translation>hectáreas</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="189"/>
         <source>Strata with distance estimates</source>
-        <translation type="unfinished"></translation>
+        <translation>Estratos con las estimaciones por distancias</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="191"/>
         <source>Detection function models</source>
-        <translation type="unfinished"></translation>
+        <translation>Modelos de función de detección</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Overall density</source>
-        <translation type="unfinished">Densidad global</translation>
+        <translation>Densidad global</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Overall abundance</source>
-        <translation type="unfinished">Abundancia global</translation>
+        <translation>Abundancia global</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Lower confidence limit of the abundance</source>
-        <translation type="unfinished">Límite inferior de confianza de la abundancia</translation>
+        <translation>Límite inferior de confianza de la abundancia</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Upper confidence limit of the abundance</source>
-        <translation type="unfinished">Límite superior de confianza de la abundancia</translation>
+        <translation>Límite superior de confianza de la abundancia</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>CV of the overall estimate</source>
-        <translation type="unfinished">CV de la estimación global</translation>
+        <translation>CV de la estimación global</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Detection probability within the truncation distance</source>
-        <translation type="unfinished"></translation>
+        <translation>Probabilidad de detección dentro de la distancia de truncamiento</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="194"/>
         <source>Effective strip half-width or detection radius (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Semianchura efectiva de franja o radio efectivo de detección (m)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="205"/>
         <source>Visits field of the points (empty: one visit each)</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo de visitas de los puntos (vacío: una visita cada uno)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="208"/>
         <source>Distance bands (m, from 0, comma-separated; empty: exact distances)</source>
-        <translation type="unfinished"></translation>
+        <translation>Intervalos de distancia (m, desde 0, separados por comas; vacío: distancias exactas)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="211"/>
         <source>Most cosine terms per key function</source>
-        <translation type="unfinished"></translation>
+        <translation>Número máximo de términos coseno por función clave</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Group size</source>
-        <translation type="unfinished"></translation>
+        <translation>Tamaño de grupo</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Automatic: mean, or size-bias regression when larger groups are seen farther</source>
-        <translation type="unfinished"></translation>
+        <translation>Automático: media, o regresión del sesgo de tamaño si los grupos grandes se ven más lejos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Mean of the detected groups</source>
-        <translation type="unfinished"></translation>
+        <translation>Media de los grupos detectados</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="214"/>
         <source>Size-bias regression</source>
-        <translation type="unfinished"></translation>
+        <translation>Regresión del sesgo de tamaño</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="218"/>
         <source>One detection function per stratum</source>
-        <translation type="unfinished"></translation>
+        <translation>Una función de detección por estrato</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="220"/>
         <source>Bootstrap resamples over transects (0: none)</source>
-        <translation type="unfinished"></translation>
+        <translation>Remuestreos bootstrap sobre los transectos (0: ninguno)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="234"/>
         <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
-        <translation type="unfinished"></translation>
+        <translation>La capa «{layer}» no tiene campo para {what}. Elija el campo que los contiene.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los intervalos de distancia «{text}» no son números. Escriba los límites de los intervalos en m, desde 0, separados por comas, p. ej. 0, 10, 25, 50, 100.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="256"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
-        <translation type="unfinished">La capa «{layer}» no tiene entidades.</translation>
+        <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="260"/>
         <source>Layer &apos;{layer}&apos; holds {kinds} geometries, but the survey type is {survey}. Choose the survey type that matches the units (line transects need lines, point transects points).</source>
-        <translation type="unfinished"></translation>
+        <translation>La capa «{layer}» contiene geometrías {kinds}, pero el tipo de muestreo es: {survey}. Elija el tipo de muestreo que corresponde a las unidades (los transectos lineales necesitan líneas; los puntuales, puntos).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="260"/>
         <source>line transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transectos lineales</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="260"/>
         <source>point transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transectos puntuales</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="273"/>
         <source>{n} reserve unit(s) without observations were left out (not surveyed).</source>
-        <translation type="unfinished"></translation>
+        <translation>Se dejaron fuera {n} unidad(es) de reserva sin observaciones (no muestreada(s)).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="294"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have a number of visits in the field &apos;{field}&apos; that is not a whole number of 0 or more. Correct them.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: los puntos {ids} tienen en el campo «{field}» un número de visitas que no es un número entero de 0 o más. Corríjalos.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="299"/>
         <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: hay observaciones que nombran los puntos {ids}, cuyo campo de visitas «{field}» está vacío o es 0. Indique su número de visitas o corrija los identificadores de unidad de las observaciones.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="305"/>
         <source>{n} point(s) with no visits were left out (not surveyed).</source>
-        <translation type="unfinished"></translation>
+        <translation>Se dejaron fuera {n} punto(s) sin visitas (no muestreado(s)).</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="315"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos, o indique una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="319"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="327"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
-        <translation type="unfinished">La capa «{layer}» no tiene polígonos con área.</translation>
+        <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>unit ids</source>
-        <translation type="unfinished"></translation>
+        <translation>los identificadores de unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>distances</source>
-        <translation type="unfinished"></translation>
+        <translation>las distancias</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="447"/>
         <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
-        <translation type="unfinished"></translation>
+        <translation>Función de detección{where}: {model}, P = {p:.3f}, ancho efectivo {esw:.1f} m, {n} detecciones.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="451"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
-        <translation type="unfinished">Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
+        <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
 </context>
 <context>
@@ -2712,17 +2764,43 @@ Target CV (above 0): n_next is the number of units each stratum needs next time 
 True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
 
 Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-        <translation type="unfinished"></translation>
+        <translation>Estima la densidad y la abundancia por estrato y para todo el marco de muestreo a partir de los conteos en las unidades de muestreo, con error estándar, coeficiente de variación (CV) e intervalo de confianza, y el tamaño de muestra que necesita el próximo muestreo.
+
+Estimador: D_h = Σy / Σa por estrato (el estimador de razón; con unidades iguales, el conteo medio dividido por el área de la unidad), con su varianza linealizada (Cochran 1977, cap. 5 y 6); abundancia N_h = D_h·A_h; en total N = Σ N_h y D = N / Σ A_h, sumando las varianzas.
+
+Corrección por población finita: 1 − Σa/A_h, solo para unidades que no pueden solaparse (una población finita de unidades sorteadas sin reposición, Cochran 1977, §2.4). Las unidades de plotwise:layout registran su diseño (campo design): la corrección se rechaza, con una advertencia, en los estratos dispuestos por centros aleatorios simples sin una separación mínima de al menos el ancho de la unidad (sus unidades pueden solaparse: una población continua, Cordy 1993). Para unidades sin ese registro es decisión suya, y el informe indica el supuesto de que no se solapan.
+
+Bordes: las unidades dispuestas por muestreo «plus» (campo edge = plus, la opción por defecto de la disposición) solo cuentan dentro de su estrato, y los conteos se extienden al estrato ampliado en el alcance de la unidad (campo reach_m), N_h = A⁺_h·Σy/Σa (Gregoire &amp; Valentine 2008, cap. 10), lo que elimina el sesgo en los bordes.
+
+Conteos: un conteo NULL significa que la unidad no se muestreó: se deja fuera y se lista como no respuesta. Las unidades de reserva (role = reserve) sin conteo son reservas no usadas y se omiten sin aviso; las reservas que se muestrearon cuentan como cualquier otra unidad. 0 significa muestreada, ningún animal visto. Los conteos negativos o no numéricos detienen la ejecución, nombrando las unidades.
+
+Área de la unidad (m²): el campo de área de la unidad (area_m2 por defecto, como lo escribe la disposición) si es mayor que 0; si no, el área del polígono; si no, para líneas, el ancho de franja × la longitud de la línea; si no, el área fija de la unidad para puntos y líneas.
+
+Estratos: polígonos con un campo identificador que corresponde al campo de estrato de las unidades; sus áreas definen el marco. Cuando las unidades no tienen campo de estrato, o la capa de estratos es un solo polígono sin campo identificador, todas las unidades forman un solo estrato sobre el marco. Un estrato con una sola unidad muestreada se empareja con una pareja fijada antes de ver los conteos (el estrato que comparte el límite más largo en el mapa o, si no, el siguiente en el orden de identificadores) y toma su varianza de la fórmula de pares de estratos agrupados (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow 1953 para tamaños desiguales), con 1 grado de libertad y una advertencia; la pareja conserva su propia varianza. Un estrato sin ninguna es un error, salvo que decida dejarlo fuera: entonces el marco se reduce y el informe lo indica. Los estratos no deben solaparse (un solapamiento de más del 0,1 % del estrato menor es un error, uno menor una advertencia), y cada polígono de estrato necesita su identificador: un polígono sin él es un error, salvo que se puedan dejar fuera los estratos sin unidades muestreadas.
+
+Intervalos: t con los grados de libertad de Satterthwaite (Satterthwaite 1946; Cochran 1977); log-normal, de N/C a N·C con C = exp(t_df·√ln(1+CV²)), t con los mismos grados de libertad (Buckland et al. 2001, §3.6.1; el cuantil normal solo para gl infinitos, Burnham et al. 1987); o un bootstrap estratificado de percentiles reescalado con 2.000 remuestreos (con semilla; Rao &amp; Wu 1988), que incluye la corrección por población finita. Donde todos los conteos son 0 el intervalo es unilateral, de 0 al límite superior de Poisson −ln(1 − nivel)·A/Σa (Garwood 1936; unas 3·A/Σa al 95 %), dividido por p.
+
+Varianza: la fórmula del muestreo aleatorio simple, o el estimador de vecindario local (Stevens &amp; Olsen 2003) para cuadrículas sistemáticas y disposiciones espacialmente equilibradas, donde la fórmula simple sobrestima la varianza, con los grados de libertad de su forma cuadrática (Box 1954); o nuestra variante de él, escalada por n / Σ(1 − Σw²) para que coincida con la fórmula simple donde no hay estructura espacial (la suma publicada se queda allí corta en alrededor de un cuarto).
+
+Detección: con una probabilidad de detección p menor que 1, las estimaciones se dividen por p y los CV al cuadrado se suman (método delta, Seber 1982). p y su error estándar deben proceder de un estudio aparte; sus grados de libertad (0: p se considera conocida) entran en los del intervalo por la regla de Satterthwaite (Buckland et al. 2001, ec. 3.75). Un error estándar mayor que p/2 da una advertencia.
+
+Datos de presencia: con la opción de presencia, un campo 0/1 da la proporción estratificada de unidades donde se detectó la especie (ocupación ingenua, sin corregir por la detección), y abund es el número de unidades ocupadas en el marco.
+
+CV objetivo (mayor que 0): n_next es el número de unidades que cada estrato necesita la próxima vez para ese CV de la abundancia global, por asignación de Neyman sobre las desviaciones estándar que implica el estimador de la varianza (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 y como máximo las unidades que contiene un estrato.
+
+Total verdadero: solo para simulaciones y formación. El informe lo muestra entonces junto a la estimación; en un muestreo real el total verdadero nunca se conoce.
+
+Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="181"/>
         <source>Degrees of freedom of the detection estimate (0: p known)</source>
-        <translation type="unfinished"></translation>
+        <translation>Grados de libertad de la estimación de la detección (0: p conocida)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="186"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
-        <translation type="unfinished"></translation>
+        <translation>Vecindario local, escalado a la fórmula simple (nuestra variante)</translation>
     </message>
 </context>
 <context>
@@ -3332,17 +3410,35 @@ Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for tr
 Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
 
 A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="unfinished"></translation>
+        <translation>Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato por valor del campo de estrato; sin él, el marco es un solo estrato).
+
+Unidades por estrato: el campo de unidades (por ejemplo n_alloc del paso de asignación; el mismo número entero en cada entidad de un estrato); si no, el total repartido en proporción al área con al menos 2 por estrato.
+
+Diseños:
+• Aleatorio simple: puntos independientes, uniformes en el estrato (triángulos elegidos según su área y luego un punto dentro; Turk 1990).
+• Cuadrícula sistemática: una cuadrícula cuadrada de espaciado √(A/n) con un inicio aleatorio; con rumbo −1 la cuadrícula recibe además una rotación aleatoria; si no, se orienta según el rumbo. El número de unidades obtenido varía en torno a n y se indica.
+• Espacialmente equilibrado: muestreo por aceptación equilibrada sobre una secuencia de Halton (Robertson et al. 2013). Cada tramo inicial del orden de sorteo está a su vez repartido de modo uniforme, de modo que las reservas son los puntos siguientes de la misma secuencia. El inicio es un punto aleatorio uniforme del estrato, lo que mantiene la inclusión igual para cualquier tamaño de muestra.
+
+Formas: estación puntual (tamaño: radio de conteo opcional, m), parcela cuadrada (tamaño: lado, m), parcela circular (tamaño: radio, m), transecto lineal (tamaño: longitud, m; centrado en el punto sorteado). Rumbo en grados en sentido horario desde el norte de la cuadrícula, o −1 para un rumbo aleatorio por unidad.
+Bordes: por defecto muestreo «plus» (Gregoire &amp; Valentine 2008, cap. 10): los centros se sortean sobre el estrato ampliado en el alcance R de la unidad (su radio circunscrito), y una unidad cercana al borde o más allá de él solo se muestrea dentro de su propio estrato (cuente solo los animales dentro del estrato; un centro puede quedar fuera de él, incluso fuera del marco: no entre nunca en terreno excluido por peligroso, muestree la parte interior desde dentro). Cada animal tiene entonces la misma probabilidad de ser contado, y plotwise:estimate extiende los conteos al área ampliada. Mantener las unidades dentro sortea en cambio los centros en el estrato reducido en R, de modo que cada unidad queda por completo dentro de su estrato pero nunca se llega a la franja del borde (sesgo donde los animales cercanos al borde difieren). El área efectiva (ampliada o reducida) se indica y se usa para las probabilidades de inclusión.
+Separación mínima (m) entre los centros de todas las unidades, principales y de reserva, en toda la disposición.
+Reservas: unidades adicionales por estrato, role = reserve, en orden de sorteo. Regla de sustitución: una unidad principal que no se puede muestrear se sustituye por la siguiente reserva no usada del mismo estrato.
+
+Campos de salida: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; para transectos y puntos sin radio, la densidad de inclusión n/A por m²), weight = 1/incl_p, lon/lat (WGS 84), un campo count vacío para los equipos de campo y el registro del diseño para la estimación: design (random, random_sep, grid, grid_ovl o balanced: si las unidades pueden solaparse, lo que decide la corrección por población finita), edge (plus o inside) y reach_m (R, m). El archivo GPX contiene un punto de paso por unidad (uno de inicio y otro de fin por transecto), con el nombre de unit_id.
+
+Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato menor es un error, uno menor una advertencia. Las entidades de menos de 1 m² (astillas) se omiten, con una advertencia.
+
+Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="164"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
-        <translation type="unfinished"></translation>
+        <translation>Mantener cada unidad por completo dentro de su estrato (desactivado: muestreo «plus»)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="371"/>
         <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
-        <translation type="unfinished"></translation>
+        <translation>Muestreo «plus»: los centros se sortearon sobre cada estrato ampliado en {r} m (el alcance de la unidad), así que las unidades cercanas al borde lo sobrepasan, y algunos centros quedan fuera de su estrato. Muestree solo la parte de cada unidad dentro de su propio estrato y cuente solo los animales que haya allí (el mapa muestra los estratos); una unidad que no alcanza nada de su estrato cuenta 0. No entre nunca en terreno excluido o peligroso para llegar a un centro: muestree la parte dentro del estrato desde su interior. El área efectiva es el área ampliada, y plotwise:estimate extiende los conteos a ella (Gregoire &amp; Valentine 2008, cap. 10).</translation>
     </message>
 </context>
 <context>
@@ -5044,297 +5140,297 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
     <message>
         <location filename="../processing/engine/design_comparison.py" line="90"/>
         <source>stratified Neyman (best case)</source>
-        <translation type="unfinished"></translation>
+        <translation>estratificado Neyman (mejor caso)</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="90"/>
         <source>stratified Neyman (pilot)</source>
-        <translation type="unfinished"></translation>
+        <translation>estratificado Neyman (piloto)</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="678"/>
         <source>The pilot needs at least 2 units per stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>El piloto necesita al menos 2 unidades por estrato.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1189"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units kept inside never reach the edge of the frame or of their stratum, so the edge band weighs less in the estimate; where its density differs from the interior, the estimate is biased. Plus sampling (INSIDE off) removes this bias.</source>
-        <translation type="unfinished"></translation>
+        <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades mantenidas dentro nunca llegan al borde del marco de muestreo ni de su estrato, así que la franja del borde pesa menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. El muestreo «plus» (INSIDE desactivado) elimina este sesgo.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1189"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). Plus sampling is unbiased, so the likely cause is the ratio estimator with very few animals per unit, or a systematic grid whose realised number of units varies with the surface; more units reduce it.</source>
-        <translation type="unfinished"></translation>
+        <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). El muestreo «plus» es insesgado, así que la causa probable es el estimador de razón con muy pocos animales por unidad, o una cuadrícula sistemática cuyo número realizado de unidades varía con la superficie; más unidades lo reducen.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="251"/>
         <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
-        <translation type="unfinished"></translation>
+        <translation>El tipo de muestreo debe ser 'line' o 'point' (se recibió '{survey}').</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="116"/>
         <source>The truncation distance must be above 0 m (got {w:g} m).</source>
-        <translation type="unfinished"></translation>
+        <translation>La distancia de truncamiento debe ser mayor que 0 m (se recibió {w:g} m).</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="121"/>
         <source>{count} distances are missing or not numbers. Fill them in or leave those detections out.</source>
-        <translation type="unfinished"></translation>
+        <translation>Faltan {count} distancias o no son números. Rellénelas o deje fuera esas detecciones.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="126"/>
         <source>{count} distances are negative. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
-        <translation type="unfinished"></translation>
+        <translation>{count} distancias son negativas. Las distancias se miden desde la línea o el punto hacia fuera y son de 0 m o más; corríjalas.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="132"/>
         <source>{count} distances lie beyond the truncation distance of {w:g} m. Leave them out first (right truncation) or raise the truncation distance.</source>
-        <translation type="unfinished"></translation>
+        <translation>{count} distancias quedan más allá de la distancia de truncamiento de {w:g} m. Déjelas fuera primero (truncamiento por la derecha) o aumente la distancia de truncamiento.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="138"/>
         <source>A detection function needs at least 2 distances (got {n}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Una función de detección necesita al menos 2 distancias (se recibieron {n}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="146"/>
         <source>The distance bands must start at 0 m, increase, and end at the truncation distance {w:g} m, with at least two bands (got {cutpoints}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Los intervalos de distancia deben empezar en 0 m, crecer y terminar en la distancia de truncamiento {w:g} m, con al menos dos intervalos (se recibió {cutpoints}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="745"/>
         <source>Without a truncation distance only the half-normal key alone can be fitted; give a truncation distance for {model}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Sin distancia de truncamiento solo puede ajustarse la función clave seminormal sola; indique una distancia de truncamiento para {model}.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="752"/>
         <source>The model {model} has {q} parameters, more than the {free} the distances can support. Use fewer cosine terms or more distance bands.</source>
-        <translation type="unfinished"></translation>
+        <translation>El modelo {model} tiene {q} parámetros, más que los {free} que admiten las distancias. Use menos términos coseno o más intervalos de distancia.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="820"/>
         <source>Choose at least one key function among half-normal, hazard-rate and uniform.</source>
-        <translation type="unfinished"></translation>
+        <translation>Elija al menos una función clave entre seminormal, tasa de riesgo (hazard-rate) y uniforme.</translation>
     </message>
     <message>
         <location filename="../processing/engine/detection_functions.py" line="846"/>
         <source>No detection function could be fitted to these {n} distances. Check the distances and the truncation distance.</source>
-        <translation type="unfinished"></translation>
+        <translation>No se pudo ajustar ninguna función de detección a estas {n} distancias. Compruebe las distancias y la distancia de truncamiento.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="118"/>
         <source>Layer &apos;{layer}&apos;: {n} units have no id in the field &apos;{field}&apos;. Give every unit its id.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: {n} unidades no tienen identificador en el campo «{field}». Dé a cada unidad su identificador.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="124"/>
         <source>Layer &apos;{layer}&apos;: the unit ids {ids} occur more than once in the field &apos;{field}&apos;. Each unit needs its own id.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: los identificadores de unidad {ids} aparecen más de una vez en el campo «{field}». Cada unidad necesita su propio identificador.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="133"/>
         <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: los transectos {ids} tienen longitud cero. Elimínelos o dibuje su línea.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="137"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: los puntos {ids} no tienen visitas. Indique para cada punto muestreado su número de visitas (1 o más), o elimine los puntos que no se muestrearon.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="146"/>
         <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: las unidades {ids} no tienen estrato, o tienen un estrato que la capa de estratos no tiene ({strata}). Dé a cada unidad el identificador de su estrato.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="156"/>
         <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
-        <translation type="unfinished"></translation>
+        <translation>Los estratos {strata} no tienen ningún transecto ni punto muestreado. Muestréelos, o quítelos de la capa de estratos (la estimación solo se refiere entonces a los demás estratos).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="163"/>
         <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los estratos {strata} tienen un solo transecto o punto cada uno; la varianza de la tasa de encuentro necesita al menos 2 por estrato. Fusione cada uno con un estrato vecino en la capa de estratos y en el campo de estrato de las unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="184"/>
         <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: hay observaciones que nombran unidades que la capa «{units}» no tiene (campo «{field}»): {ids}. Corrija esos identificadores de unidad o añada las unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="192"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: las observaciones {ids} no tienen distancia en el campo «{field}» (vacío o no es un número). Rellene las distancias o elimine esas observaciones.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="199"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: las observaciones {ids} tienen una distancia negativa en el campo «{field}». Las distancias se miden desde la línea o el punto hacia fuera y son de 0 m o más; corríjalas.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="211"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: las observaciones {ids} no tienen un tamaño de grupo mayor que 0 en el campo «{field}». Rellene el número de animales vistos en cada grupo (1 para un animal solo) o no elija ningún campo de tamaño de grupo.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="224"/>
         <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Los intervalos de distancia deben empezar en 0 m y crecer, con al menos dos intervalos (se recibió {cutpoints}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="232"/>
         <source>There are no observations: a detection function needs at least {minimum} detections.</source>
-        <translation type="unfinished"></translation>
+        <translation>No hay observaciones: una función de detección necesita al menos {minimum} detecciones.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="261"/>
         <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
-        <translation type="unfinished"></translation>
+        <translation>Solo {n} detecciones quedan dentro de la distancia de truncamiento de {w:g} m; una función de detección necesita al menos {minimum} (práctica habitual: de 60 a 80). Muestree más transectos o puntos, o aumente la distancia de truncamiento.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="269"/>
         <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
-        <translation type="unfinished"></translation>
+        <translation>Solo {n} detecciones quedan dentro de la distancia de truncamiento: la función de detección se basa en pocas distancias (la práctica habitual pide de 60 a 80), así que su forma y la densidad son inciertas, y el AIC puede elegir un modelo por azar.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="419"/>
         <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
-        <translation type="unfinished"></translation>
+        <translation>Una función de detección por estrato necesita al menos {minimum} detecciones en cada estrato dentro de la distancia de truncamiento; estos estratos tienen menos: {strata}. Use una sola función de detección para todos los estratos.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="438"/>
         <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
-        <translation type="unfinished"></translation>
+        <translation>Estrato {stratum}: su función de detección se basa en {n} detecciones (la práctica habitual pide de 60 a 80 por función); considere una sola función para todos los estratos.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="444"/>
         <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
-        <translation type="unfinished"></translation>
+        <translation>La función de detección elegida ({model}{at}) se ajusta mal a las distancias (prueba de bondad de ajuste p = {p:.3f}). Busque en el histograma acumulaciones en distancias redondas o un pico en 0, y considere intervalos de distancia u otro truncamiento.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="451"/>
         <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
-        <translation type="unfinished"></translation>
+        <translation>La función de detección elegida ({model}) tiene un parámetro en el límite de su rango, así que su varianza no es fiable; pruebe otro truncamiento u otra función clave.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="457"/>
         <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
-        <translation type="unfinished"></translation>
+        <translation>No se pudo calcular la varianza de la función de detección ({model}) (la verosimilitud es plana en su máximo); su CV falta en el intervalo.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="662"/>
         <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
-        <translation type="unfinished"></translation>
+        <translation>El bootstrap falló: no se pudieron ajustar {failed} de los {n} remuestreos. Ejecute sin el bootstrap.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="750"/>
         <source>Unknown group-size method &apos;{method}&apos;.</source>
-        <translation type="unfinished"></translation>
+        <translation>Método de tamaño de grupo desconocido '{method}'.</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="755"/>
         <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>El nivel de confianza debe estar entre 0.5 y 1 (se recibió {level:g}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="772"/>
         <source>The bootstrap needs a random generator (a seed).</source>
-        <translation type="unfinished"></translation>
+        <translation>El bootstrap necesita un generador aleatorio (una semilla).</translation>
     </message>
     <message>
         <location filename="../processing/engine/distance_density.py" line="780"/>
         <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
-        <translation type="unfinished"></translation>
+        <translation>No se pudieron ajustar {failed} de los {n} remuestreos bootstrap y se dejaron fuera; el intervalo bootstrap puede ser demasiado estrecho.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="697"/>
         <source>The degrees of freedom of the detection estimate must be 0 (known p) or more.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los grados de libertad de la estimación de la detección deben ser 0 (p conocida) o más.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="738"/>
         <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-        <translation type="unfinished">Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
+        <translation>Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="821"/>
         <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-        <translation type="unfinished">Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
+        <translation>Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="865"/>
         <source>The finite-population correction was not applied in strata {ids}: their units come from a design whose units may overlap ({records}: simple random centres, or a grid denser than the units). Their possible positions form a continuous population, which has no such correction (Cordy 1993); applying it would make the interval too narrow. A layout with MIN_SPACING of at least the unit&apos;s width, a systematic grid or a spatially balanced layout keeps the units apart.</source>
-        <translation type="unfinished"></translation>
+        <translation>La corrección por población finita no se aplicó en los estratos {ids}: sus unidades proceden de un diseño cuyas unidades pueden solaparse ({records}: centros aleatorios simples, o una cuadrícula más densa que las unidades). Sus posiciones posibles forman una población continua, que no tiene tal corrección (Cordy 1993); aplicarla haría el intervalo demasiado estrecho. Una disposición con MIN_SPACING de al menos el ancho de la unidad, una cuadrícula sistemática o una disposición espacialmente equilibrada mantiene separadas las unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="884"/>
         <source>The expansion area of strata {ids} is smaller than the stratum: the plus region holds the stratum. Check the units&apos; edge record.</source>
-        <translation type="unfinished"></translation>
+        <translation>El área de expansión de los estratos {ids} es menor que el estrato: la región «plus» contiene el estrato. Compruebe el registro del borde (edge) de las unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="903"/>
         <source>In strata {ids} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-        <translation type="unfinished"></translation>
+        <translation>En los estratos {ids} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1064"/>
         <source>Strata {ids} have fewer than 3 units: their variance uses the simple random sampling formula.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los estratos {ids} tienen menos de 3 unidades: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1078"/>
         <source>{label} (one unit) with {other}</source>
-        <translation type="unfinished"></translation>
+        <translation>{label} (una unidad) con {other}</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1083"/>
         <source>Strata {groups}: a stratum with one surveyed unit takes its variance from the collapsed-strata pairs formula with its partner (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow weights for unequal sizes), which counts the difference between the two strata as variance and so tends to be too large; the partner keeps its own variance.</source>
-        <translation type="unfinished"></translation>
+        <translation>Estratos {groups}: un estrato con una sola unidad muestreada toma su varianza de la fórmula de pares de estratos agrupados con su pareja (Cochran 1977, §5A.12; pesos de Hansen, Hurwitz &amp; Madow para tamaños desiguales), que cuenta la diferencia entre los dos estratos como varianza y por eso tiende a ser demasiado grande; la pareja conserva su propia varianza.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1243"/>
         <source>Even every possible unit in every stratum ({n:,}) would miss the target CV {target_cv:.3g}: n_next is every unit.</source>
-        <translation type="unfinished"></translation>
+        <translation>Incluso todas las unidades posibles de cada estrato ({n:,}) quedarían lejos del CV objetivo {target_cv:.3g}: n_next son todas las unidades.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1466"/>
         <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
-        <translation type="unfinished"></translation>
+        <translation>El error estándar de la probabilidad de detección ({se:.3g}) supera la mitad de p ({p:.3g}): el estudio de detección es demasiado pequeño para corregir los conteos de forma fiable, y el método delta en que se basa el intervalo es pobre con ese CV. Amplíe el estudio de detección.</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1478"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
-        <translation type="unfinished"></translation>
+        <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0, y el intervalo es el límite superior unilateral {hi:.4g} al {level:.0%} (límite de Poisson exacto para un conteo de 0, suponiendo una sola densidad en el marco).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1486"/>
         <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
-        <translation type="unfinished"></translation>
+        <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su intervalo es el límite superior unilateral de un conteo de 0 (límite de Poisson exacto), y su error estándar de 0 subestima la incertidumbre global (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1530"/>
         <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
-        <translation type="unfinished"></translation>
+        <translation>En los estratos {ids} las unidades registran alcances distintos (reach_m): se usa el mayor para la región «plus».</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="91"/>
         <source>The detection function must be 1 (half-normal) or 2 (hazard-rate).</source>
-        <translation type="unfinished"></translation>
+        <translation>La función de detección debe ser 1 (seminormal) o 2 (tasa de riesgo, hazard-rate).</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="95"/>
         <source>The scale σ must be above 0 m and the hazard-rate shape above 0 (got σ = {sigma:g} m, shape {shape:g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>La escala σ debe ser mayor que 0 m y la forma de la tasa de riesgo mayor que 0 (se recibió σ = {sigma:g} m, forma {shape:g}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="100"/>
         <source>The detection probability on the line must be in (0, 1] (got {g0:g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>La probabilidad de detección sobre la línea debe estar en (0, 1] (se recibió {g0:g}).</translation>
     </message>
     <message>
         <location filename="../processing/engine/simulated_distances.py" line="109"/>
         <source>Units {ids} are neither points nor lines of some length; simulated distances need line transects or point stations.</source>
-        <translation type="unfinished"></translation>
+        <translation>Las unidades {ids} no son ni puntos ni líneas de cierta longitud; las distancias simuladas necesitan transectos lineales o estaciones puntuales.</translation>
     </message>
 </context>
 <context>
@@ -6133,1582 +6229,1582 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
     <message>
         <location filename="../processing/report/allocate.py" line="40"/>
         <source>equal</source>
-        <translation type="unfinished">igual</translation>
+        <translation>igual</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="41"/>
         <source>proportional to area</source>
-        <translation type="unfinished">proporcional al área</translation>
+        <translation>proporcional al área</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="42"/>
         <source>Neyman</source>
-        <translation type="unfinished">Neyman</translation>
+        <translation>Neyman</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="43"/>
         <source>optimal with cost</source>
-        <translation type="unfinished">óptima con coste</translation>
+        <translation>óptima con coste</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="57"/>
         <source>Allocation of survey effort</source>
-        <translation type="unfinished">Asignación del esfuerzo de muestreo</translation>
+        <translation>Asignación del esfuerzo de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="59"/>
         <source>field days</source>
-        <translation type="unfinished">jornadas de campo</translation>
+        <translation>jornadas de campo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="59"/>
         <source>cost units</source>
-        <translation type="unfinished">unidades de coste</translation>
+        <translation>unidades de coste</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="65"/>
         <source>units in total</source>
-        <translation type="unfinished">unidades en total</translation>
+        <translation>unidades en total</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="66"/>
         <source>method</source>
-        <translation type="unfinished">método</translation>
+        <translation>método</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="69"/>
         <source>expected CV of the overall density</source>
-        <translation type="unfinished">CV esperado de la densidad global</translation>
+        <translation>CV esperado de la densidad global</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="71"/>
         <source>field days needed</source>
-        <translation type="unfinished">jornadas de campo necesarias</translation>
+        <translation>jornadas de campo necesarias</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="71"/>
         <source>cost</source>
-        <translation type="unfinished">coste</translation>
+        <translation>coste</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="81"/>
         <source>a total number of units</source>
-        <translation type="unfinished">un número total de unidades</translation>
+        <translation>un número total de unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="82"/>
         <source>a budget</source>
-        <translation type="unfinished">un presupuesto</translation>
+        <translation>un presupuesto</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="83"/>
         <source>a target CV</source>
-        <translation type="unfinished">un CV objetivo</translation>
+        <translation>un CV objetivo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Strata layer</source>
-        <translation type="unfinished">Capa de estratos</translation>
+        <translation>Capa de estratos</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="204"/>
         <source>Computation CRS</source>
-        <translation type="unfinished">SRC de cálculo</translation>
+        <translation>SRC de cálculo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Method asked for</source>
-        <translation type="unfinished">Método solicitado</translation>
+        <translation>Método solicitado</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Method applied</source>
-        <translation type="unfinished">Método aplicado</translation>
+        <translation>Método aplicado</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Target</source>
-        <translation type="unfinished">Objetivo</translation>
+        <translation>Objetivo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Total asked for</source>
-        <translation type="unfinished">Total solicitado</translation>
+        <translation>Total solicitado</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Budget</source>
-        <translation type="unfinished">Presupuesto</translation>
+        <translation>Presupuesto</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Target CV</source>
-        <translation type="unfinished">CV objetivo</translation>
+        <translation>CV objetivo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Unit area (m²)</source>
-        <translation type="unfinished">Área de la unidad (m²)</translation>
+        <translation>Área de la unidad (m²)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Minimum units per stratum</source>
-        <translation type="unfinished">Mínimo de unidades por estrato</translation>
+        <translation>Mínimo de unidades por estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>SD field</source>
-        <translation type="unfinished">Campo de DE</translation>
+        <translation>Campo de DE</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source> (covariate proxy)</source>
-        <translation type="unfinished"> (sustituto por la covariable)</translation>
+        <translation> (sustituto por la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Mean field</source>
-        <translation type="unfinished">Campo de media</translation>
+        <translation>Campo de media</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Cost field</source>
-        <translation type="unfinished">Campo de coste</translation>
+        <translation>Campo de coste</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Fixed cost c0</source>
-        <translation type="unfinished">Coste fijo c0</translation>
+        <translation>Coste fijo c0</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="85"/>
         <source>Layout to come</source>
-        <translation type="unfinished"></translation>
+        <translation>Disposición prevista</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="209"/>
         <source>Finite-population correction</source>
-        <translation type="unfinished">Corrección por población finita</translation>
+        <translation>Corrección por población finita</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="119"/>
         <source>Units per stratum</source>
-        <translation type="unfinished">Unidades por estrato</translation>
+        <translation>Unidades por estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="120"/>
         <source>SE of mean per unit (covariate units)</source>
-        <translation type="unfinished">Error estándar de la media por unidad (unidades de la covariable)</translation>
+        <translation>Error estándar de la media por unidad (unidades de la covariable)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="120"/>
         <source>SE of mean count per unit</source>
-        <translation type="unfinished">Error estándar del conteo medio por unidad</translation>
+        <translation>Error estándar del conteo medio por unidad</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="127"/>
         <source>Units that fit</source>
-        <translation type="unfinished">Unidades que caben</translation>
+        <translation>Unidades que caben</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="128"/>
         <source>Lower bound</source>
-        <translation type="unfinished">Límite inferior</translation>
+        <translation>Límite inferior</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="129"/>
         <source>Share before rounding</source>
-        <translation type="unfinished">Cuota antes del redondeo</translation>
+        <translation>Cuota antes del redondeo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="130"/>
         <source>Units (n_alloc)</source>
-        <translation type="unfinished">Unidades (n_alloc)</translation>
+        <translation>Unidades (n_alloc)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="131"/>
         <source>Sampling fraction</source>
-        <translation type="unfinished">Fracción de muestreo</translation>
+        <translation>Fracción de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="136"/>
         <source>SE of density (per km²)</source>
-        <translation type="unfinished">Error estándar de la densidad (por km²)</translation>
+        <translation>Error estándar de la densidad (por km²)</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="138"/>
         <source>Expected CV (exp_cv)</source>
-        <translation type="unfinished">CV esperado (exp_cv)</translation>
+        <translation>CV esperado (exp_cv)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="379"/>
         <source>all strata</source>
-        <translation type="unfinished">todos los estratos</translation>
+        <translation>todos los estratos</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="172"/>
         <source>units per stratum</source>
-        <translation type="unfinished">unidades por estrato</translation>
+        <translation>unidades por estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="172"/>
         <source>Units allocated to each stratum</source>
-        <translation type="unfinished">Unidades asignadas a cada estrato</translation>
+        <translation>Unidades asignadas a cada estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="196"/>
         <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-        <translation type="unfinished">{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
+        <translation>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="196"/>
         <source>Field days needed</source>
-        <translation type="unfinished">Jornadas de campo necesarias</translation>
+        <translation>Jornadas de campo necesarias</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="196"/>
         <source>Cost of the design</source>
-        <translation type="unfinished">Coste del diseño</translation>
+        <translation>Coste del diseño</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="210"/>
         <source>What the choice of method buys, at {n} units</source>
-        <translation type="unfinished">Lo que aporta la elección del método, con {n} unidades</translation>
+        <translation>Lo que aporta la elección del método, con {n} unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="214"/>
         <source>stratum {label}</source>
-        <translation type="unfinished">estrato {label}</translation>
+        <translation>estrato {label}</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="217"/>
         <source>Variance relative to the applied allocation</source>
-        <translation type="unfinished">Varianza relativa a la asignación aplicada</translation>
+        <translation>Varianza relativa a la asignación aplicada</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="219"/>
         <source>Expected CV</source>
-        <translation type="unfinished">CV esperado</translation>
+        <translation>CV esperado</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="230"/>
         <source>Without standard deviations the precision of the designs cannot be compared.</source>
-        <translation type="unfinished">Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
+        <translation>Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="43"/>
         <source>Survey designs compared by simulation</source>
-        <translation type="unfinished">Diseños de muestreo comparados por simulación</translation>
+        <translation>Diseños de muestreo comparados por simulación</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="49"/>
         <source>recommended design</source>
-        <translation type="unfinished">diseño recomendado</translation>
+        <translation>diseño recomendado</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="50"/>
         <source>its RMSE (animals)</source>
-        <translation type="unfinished">su RECM (animales)</translation>
+        <translation>su RECM (animales)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="51"/>
         <source>its RMSE relative to the total</source>
-        <translation type="unfinished">su RECM relativa al total</translation>
+        <translation>su RECM relativa al total</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="52"/>
         <source>its 95 % interval coverage</source>
-        <translation type="unfinished">cobertura de sus intervalos al 95 %</translation>
+        <translation>cobertura de sus intervalos al 95 %</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="54"/>
         <source>expected animals in the frame</source>
-        <translation type="unfinished">animales esperados en el marco</translation>
+        <translation>animales esperados en el marco</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="57"/>
         <source>point station</source>
-        <translation type="unfinished">estación puntual</translation>
+        <translation>estación puntual</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="58"/>
         <source>square plot</source>
-        <translation type="unfinished">parcela cuadrada</translation>
+        <translation>parcela cuadrada</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="59"/>
         <source>circular plot</source>
-        <translation type="unfinished">parcela circular</translation>
+        <translation>parcela circular</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="60"/>
         <source>line transect</source>
-        <translation type="unfinished">transecto lineal</translation>
+        <translation>transecto lineal</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="63"/>
         <source>counting radius</source>
-        <translation type="unfinished">radio de conteo</translation>
+        <translation>radio de conteo</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="64"/>
         <source>side</source>
-        <translation type="unfinished">lado</translation>
+        <translation>lado</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="65"/>
         <source>radius</source>
-        <translation type="unfinished">radio</translation>
+        <translation>radio</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="66"/>
         <source>length</source>
-        <translation type="unfinished">longitud</translation>
+        <translation>longitud</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="71"/>
         <source>, strip half-width {w:g} m</source>
-        <translation type="unfinished">, semianchura de franja {w:g} m</translation>
+        <translation>, semianchura de franja {w:g} m</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="73"/>
         <source>Density surface</source>
-        <translation type="unfinished">Superficie de densidad</translation>
+        <translation>Superficie de densidad</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="74"/>
         <source>Sampling frame</source>
-        <translation type="unfinished">Marco de muestreo</translation>
+        <translation>Marco de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="252"/>
         <source>Strata</source>
-        <translation type="unfinished">Estratos</translation>
+        <translation>Estratos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="147"/>
         <source>none</source>
-        <translation type="unfinished"></translation>
+        <translation>ninguno</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="200"/>
         <source>Stratum field</source>
-        <translation type="unfinished">Campo de estrato</translation>
+        <translation>Campo de estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="77"/>
         <source>feature id</source>
-        <translation type="unfinished">identificador de entidad</translation>
+        <translation>identificador de entidad</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="79"/>
         <source>Surface cell</source>
-        <translation type="unfinished">Celda de la superficie</translation>
+        <translation>Celda de la superficie</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="80"/>
         <source>Sub-cells per cell side (for counting)</source>
-        <translation type="unfinished">Subceldas por lado de celda (para el conteo)</translation>
+        <translation>Subceldas por lado de celda (para el conteo)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="81"/>
         <source>Unit</source>
-        <translation type="unfinished">Unidad</translation>
+        <translation>Unidad</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="82"/>
         <source>Counted area per unit (m²)</source>
-        <translation type="unfinished">Área contada por unidad (m²)</translation>
+        <translation>Área contada por unidad (m²)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="83"/>
         <source>Bearing</source>
-        <translation type="unfinished">Rumbo</translation>
+        <translation>Rumbo</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="83"/>
         <source>random</source>
-        <translation type="unfinished">aleatorio</translation>
+        <translation>aleatorio</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="86"/>
         <source>Units wholly inside their stratum</source>
-        <translation type="unfinished">Unidades por completo dentro de su estrato</translation>
+        <translation>Unidades por completo dentro de su estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="91"/>
         <source>Number of units</source>
-        <translation type="unfinished">Número de unidades</translation>
+        <translation>Número de unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="92"/>
         <source>Simulated surveys per design</source>
-        <translation type="unfinished">Muestreos simulados por diseño</translation>
+        <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="93"/>
         <source>Counts per cell</source>
-        <translation type="unfinished">Conteos por celda</translation>
+        <translation>Conteos por celda</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="93"/>
         <source>negative binomial, k = {k:g}</source>
-        <translation type="unfinished">binomial negativa, k = {k:g}</translation>
+        <translation>binomial negativa, k = {k:g}</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="93"/>
         <source>Poisson</source>
-        <translation type="unfinished">Poisson</translation>
+        <translation>Poisson</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="98"/>
         <source>Variance estimator (grid, balanced)</source>
-        <translation type="unfinished">Estimador de la varianza (cuadrícula, equilibrado)</translation>
+        <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="98"/>
         <source>local neighbourhood</source>
-        <translation type="unfinished">vecindario local</translation>
+        <translation>vecindario local</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="164"/>
         <source>simple random sampling formula</source>
-        <translation type="unfinished">fórmula del muestreo aleatorio simple</translation>
+        <translation>fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="206"/>
         <source>Confidence level</source>
-        <translation type="unfinished">Nivel de confianza</translation>
+        <translation>Nivel de confianza</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="222"/>
         <source>Seed</source>
-        <translation type="unfinished">Semilla</translation>
+        <translation>Semilla</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="109"/>
         <source>How the designs did at {n} units</source>
-        <translation type="unfinished">Resultados de los diseños con {n} unidades</translation>
+        <translation>Resultados de los diseños con {n} unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="111"/>
         <source>Design</source>
-        <translation type="unfinished">Diseño</translation>
+        <translation>Diseño</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="112"/>
         <source>Mean units surveyed</source>
-        <translation type="unfinished">Media de unidades muestreadas</translation>
+        <translation>Media de unidades muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="113"/>
         <source>Relative bias</source>
-        <translation type="unfinished">Sesgo relativo</translation>
+        <translation>Sesgo relativo</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>Empirical SE (animals)</source>
-        <translation type="unfinished">Error estándar empírico (animales)</translation>
+        <translation>Error estándar empírico (animales)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="311"/>
         <source>RMSE (animals)</source>
-        <translation type="unfinished">RECM (animales)</translation>
+        <translation>RECM (animales)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="116"/>
         <source>± Monte Carlo SE</source>
-        <translation type="unfinished">± error estándar de Monte Carlo</translation>
+        <translation>± error estándar de Monte Carlo</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="117"/>
         <source>RMSE / total</source>
-        <translation type="unfinished">RECM / total</translation>
+        <translation>RECM / total</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="118"/>
         <source>Mean estimated CV</source>
-        <translation type="unfinished">CV estimado medio</translation>
+        <translation>CV estimado medio</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="119"/>
         <source>95 % interval coverage</source>
-        <translation type="unfinished">Cobertura de los intervalos al 95 %</translation>
+        <translation>Cobertura de los intervalos al 95 %</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="120"/>
         <source>Surveys without an estimate</source>
-        <translation type="unfinished">Muestreos sin estimación</translation>
+        <translation>Muestreos sin estimación</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="155"/>
         <source>RMSE of the abundance (animals)</source>
-        <translation type="unfinished">RECM de la abundancia (animales)</translation>
+        <translation>RECM de la abundancia (animales)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="155"/>
         <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-        <translation type="unfinished">Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
+        <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="166"/>
         <source>Recommendation</source>
-        <translation type="unfinished">Recomendación</translation>
+        <translation>Recomendación</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="168"/>
         <source>No design gave estimates: see the warnings.</source>
-        <translation type="unfinished">Ningún diseño dio estimaciones: vea las advertencias.</translation>
+        <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="212"/>
         <source>How the simulation works</source>
-        <translation type="unfinished">Cómo funciona la simulación</translation>
+        <translation>Cómo funciona la simulación</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="257"/>
         <source>Area (km²)</source>
-        <translation type="unfinished">Área (km²)</translation>
+        <translation>Área (km²)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="258"/>
         <source>Mean expected count per unit</source>
-        <translation type="unfinished">Conteo esperado medio por unidad</translation>
+        <translation>Conteo esperado medio por unidad</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="259"/>
         <source>S_h (count SD per unit)</source>
-        <translation type="unfinished">S_h (DE del conteo por unidad)</translation>
+        <translation>S_h (DE del conteo por unidad)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="262"/>
         <source>Units, proportional</source>
-        <translation type="unfinished">Unidades, proporcional</translation>
+        <translation>Unidades, proporcional</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="264"/>
         <source>Units, Neyman (best case)</source>
-        <translation type="unfinished"></translation>
+        <translation>Unidades, Neyman (mejor caso)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="266"/>
         <source>Units, Neyman from a pilot (mean)</source>
-        <translation type="unfinished"></translation>
+        <translation>Unidades, Neyman a partir de un piloto (media)</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="292"/>
         <source>RMSE against the number of units</source>
-        <translation type="unfinished">RECM frente al número de unidades</translation>
+        <translation>RECM frente al número de unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="298"/>
         <source>number of units</source>
-        <translation type="unfinished">número de unidades</translation>
+        <translation>número de unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="298"/>
         <source>RMSE of the abundance estimate against the number of units</source>
-        <translation type="unfinished">RECM de la estimación de la abundancia frente al número de unidades</translation>
+        <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="307"/>
         <source>Units</source>
-        <translation type="unfinished">Unidades</translation>
+        <translation>Unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="318"/>
         <source>{a} → {b} units: RMSE {change:+.0%}</source>
-        <translation type="unfinished">{a} → {b} unidades: RECM {change:+.0%}</translation>
+        <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="323"/>
         <source>For {name}: </source>
-        <translation type="unfinished">Para {name}: </translation>
+        <translation>Para {name}: </translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="125"/>
         <source>{level} interval</source>
-        <translation type="unfinished">intervalo al {level}</translation>
+        <translation>intervalo al {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="383"/>
         <source>animals per {unit}</source>
-        <translation type="unfinished"></translation>
+        <translation>animales por {unit}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="378"/>
         <source>transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transectos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="378"/>
         <source>points</source>
-        <translation type="unfinished"></translation>
+        <translation>puntos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="120"/>
         <source>estimated animals in the frame</source>
-        <translation type="unfinished"></translation>
+        <translation>animales estimados en el marco</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="244"/>
         <source>CV</source>
-        <translation type="unfinished">CV</translation>
+        <translation>CV</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="124"/>
         <source>detections used</source>
-        <translation type="unfinished"></translation>
+        <translation>detecciones usadas</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="128"/>
         <source>detection probability within the truncation distance</source>
-        <translation type="unfinished"></translation>
+        <translation>probabilidad de detección dentro de la distancia de truncamiento</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="129"/>
         <source>effective strip half-width (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>semianchura efectiva de franja (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="129"/>
         <source>effective detection radius (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>radio efectivo de detección (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="138"/>
         <source>the last band edge</source>
-        <translation type="unfinished"></translation>
+        <translation>el último límite de los intervalos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="140"/>
         <source>automatic: the farthest 5 % of the distances left out</source>
-        <translation type="unfinished"></translation>
+        <translation>automático: se deja fuera el 5 % más lejano de las distancias</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="148"/>
         <source>{layer} (id field {field})</source>
-        <translation type="unfinished"></translation>
+        <translation>{layer} (campo identificador {field})</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="150"/>
         <source>{layer} (unit field {unit}, distance field {distance})</source>
-        <translation type="unfinished"></translation>
+        <translation>{layer} (campo de unidad {unit}, campo de distancia {distance})</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="152"/>
         <source>line transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transectos lineales</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="152"/>
         <source>point transects</source>
-        <translation type="unfinished"></translation>
+        <translation>transectos puntuales</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="154"/>
         <source>none: exact distances</source>
-        <translation type="unfinished"></translation>
+        <translation>ninguno: distancias exactas</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="156"/>
         <source>one per stratum</source>
-        <translation type="unfinished"></translation>
+        <translation>una por estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="156"/>
         <source>one for all strata</source>
-        <translation type="unfinished"></translation>
+        <translation>una para todos los estratos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="159"/>
         <source>mean, or size-bias regression when larger groups are seen farther</source>
-        <translation type="unfinished"></translation>
+        <translation>media, o regresión del sesgo de tamaño si los grupos grandes se ven más lejos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="161"/>
         <source>mean of the detected groups</source>
-        <translation type="unfinished"></translation>
+        <translation>media de los grupos detectados</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="162"/>
         <source>size-bias regression</source>
-        <translation type="unfinished"></translation>
+        <translation>regresión del sesgo de tamaño</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Transects or points</source>
-        <translation type="unfinished"></translation>
+        <translation>Transectos o puntos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Survey type</source>
-        <translation type="unfinished"></translation>
+        <translation>Tipo de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="201"/>
         <source>none: one stratum</source>
-        <translation type="unfinished">ninguno: un solo estrato</translation>
+        <translation>ninguno: un solo estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Visits field</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo de visitas</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Observations</source>
-        <translation type="unfinished"></translation>
+        <translation>Observaciones</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Group size field</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo de tamaño de grupo</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>none: each detection is one animal</source>
-        <translation type="unfinished"></translation>
+        <translation>ninguno: cada detección es un animal</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="203"/>
         <source>Strata (frame)</source>
-        <translation type="unfinished">Estratos (marco)</translation>
+        <translation>Estratos (marco)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Truncation distance</source>
-        <translation type="unfinished"></translation>
+        <translation>Distancia de truncamiento</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Distance bands (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Intervalos de distancia (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Key functions tried</source>
-        <translation type="unfinished"></translation>
+        <translation>Funciones clave probadas</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Most cosine terms per key</source>
-        <translation type="unfinished"></translation>
+        <translation>Número máximo de términos coseno por función clave</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="206"/>
         <source>Detection function</source>
-        <translation type="unfinished"></translation>
+        <translation>Función de detección</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="167"/>
         <source>Group size</source>
-        <translation type="unfinished"></translation>
+        <translation>Tamaño de grupo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="205"/>
         <source>Area unit</source>
-        <translation type="unfinished">Unidad de área</translation>
+        <translation>Unidad de área</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="219"/>
         <source>Bootstrap resamples</source>
-        <translation type="unfinished">Remuestreos bootstrap</translation>
+        <translation>Remuestreos bootstrap</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="194"/>
         <source>perpendicular distance from the line (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>distancia perpendicular a la línea (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="194"/>
         <source>Distances seen from the lines, with the fitted detection function scaled to the detections (its height at 0 is where every animal is seen)</source>
-        <translation type="unfinished"></translation>
+        <translation>Distancias observadas desde las líneas, con la función de detección ajustada escalada a las detecciones (su altura en 0 corresponde a ver todos los animales)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="197"/>
         <source>distance from the point (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>distancia al punto (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="197"/>
         <source>Distances seen from the points, with the fitted probability density of the distances: it rises from 0 because there is more ground farther from a point, then falls as detection drops</source>
-        <translation type="unfinished"></translation>
+        <translation>Distancias observadas desde los puntos, con la densidad de probabilidad ajustada de las distancias: crece desde 0 porque hay más terreno lejos de un punto, y luego decrece a medida que baja la detección</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="207"/>
         <source>{n} of the {recorded} recorded detections lie within the truncation distance of {w:.1f} m and were used; {dropped} farther ones were left out.</source>
-        <translation type="unfinished"></translation>
+        <translation>{n} de las {recorded} detecciones registradas quedan dentro de la distancia de truncamiento de {w:.1f} m y se usaron; se dejaron fuera {dropped} más lejanas.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="218"/>
         <source>detections per metre of distance</source>
-        <translation type="unfinished"></translation>
+        <translation>detecciones por metro de distancia</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="218"/>
         <source>fitted: {model}</source>
-        <translation type="unfinished"></translation>
+        <translation>ajustado: {model}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="250"/>
         <source>Stratum {stratum}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Estrato {stratum}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="237"/>
         <source>Effective half-width (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Semianchura efectiva (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="237"/>
         <source>Effective radius (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Radio efectivo (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="240"/>
         <source>AIC above the best</source>
-        <translation type="unfinished"></translation>
+        <translation>AIC por encima del mejor</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="241"/>
         <source>Detection probability within w</source>
-        <translation type="unfinished"></translation>
+        <translation>Probabilidad de detección dentro de w</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="242"/>
         <source>Fit, χ² p</source>
-        <translation type="unfinished"></translation>
+        <translation>Ajuste, p de χ²</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="243"/>
         <source>Fit, Cramér–von Mises p</source>
-        <translation type="unfinished"></translation>
+        <translation>Ajuste, p de Cramér–von Mises</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="244"/>
         <source>Chosen</source>
-        <translation type="unfinished"></translation>
+        <translation>Elegido</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="245"/>
         <source>Every model tried, in the order fitted ({n} detections). The smallest AIC is chosen; a fit p below 0.05 means the model misses the shape of the distances.</source>
-        <translation type="unfinished"></translation>
+        <translation>Cada modelo probado, en el orden de ajuste ({n} detecciones). Se elige el menor AIC; un p de ajuste inferior a 0.05 significa que el modelo no reproduce la forma de las distancias.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="259"/>
         <source>Group size: {n} groups seen, mean size {mean:.3g}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Tamaño de grupo: {n} grupos vistos, tamaño medio {mean:.3g}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="262"/>
         <source>The regression of ln(size) on the detection probability has slope {b:.3g} (p = {p:.3f}).</source>
-        <translation type="unfinished"></translation>
+        <translation>La regresión de ln(tamaño) sobre la probabilidad de detección tiene pendiente {b:.3g} (p = {p:.3f}).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="266"/>
         <source>Larger groups are seen farther away, so the expected size where every group is seen, {e:.3g} (SE {se:.3g}), is used instead of the mean.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los grupos grandes se ven más lejos, así que se usa en lugar de la media el tamaño esperado donde se ven todos los grupos, {e:.3g} (EE {se:.3g}).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="270"/>
         <source>The mean is used (SE {se:.3g}).</source>
-        <translation type="unfinished"></translation>
+        <translation>Se usa la media (EE {se:.3g}).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="284"/>
         <source>distance (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>distancia (m)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="284"/>
         <source>probability of detection</source>
-        <translation type="unfinished"></translation>
+        <translation>probabilidad de detección</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="286"/>
         <source>The best model of each key function: the probability of seeing an animal at each distance (1 on the line or at the point, by assumption)</source>
-        <translation type="unfinished"></translation>
+        <translation>El mejor modelo de cada función clave: la probabilidad de ver un animal a cada distancia (1 sobre la línea o en el punto, por hipótesis)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="292"/>
         <source>Transects</source>
-        <translation type="unfinished"></translation>
+        <translation>Transectos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="292"/>
         <source>Points</source>
-        <translation type="unfinished"></translation>
+        <translation>Puntos</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="293"/>
         <source>Line length (km)</source>
-        <translation type="unfinished"></translation>
+        <translation>Longitud de línea (km)</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="293"/>
         <source>Visits</source>
-        <translation type="unfinished"></translation>
+        <translation>Visitas</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="295"/>
         <source>Detections per km</source>
-        <translation type="unfinished"></translation>
+        <translation>Detecciones por km</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="295"/>
         <source>Detections per visit</source>
-        <translation type="unfinished"></translation>
+        <translation>Detecciones por visita</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="235"/>
         <source>Area ({unit})</source>
-        <translation type="unfinished">Área ({unit})</translation>
+        <translation>Área ({unit})</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="299"/>
         <source>Detections</source>
-        <translation type="unfinished"></translation>
+        <translation>Detecciones</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="300"/>
         <source>Animals per {unit}</source>
-        <translation type="unfinished"></translation>
+        <translation>Animales por {unit}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Lower limit</source>
-        <translation type="unfinished">Límite inferior</translation>
+        <translation>Límite inferior</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Upper limit</source>
-        <translation type="unfinished">Límite superior</translation>
+        <translation>Límite superior</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="245"/>
         <source>df</source>
-        <translation type="unfinished">gl</translation>
+        <translation>gl</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="314"/>
         <source>bootstrap percentile limits</source>
-        <translation type="unfinished"></translation>
+        <translation>límites de percentiles bootstrap</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="314"/>
         <source>log-normal limits with t</source>
-        <translation type="unfinished"></translation>
+        <translation>límites log-normales con t</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="316"/>
         <source>Density by stratum, {method} at {level}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Densidad por estrato, {method} al {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="320"/>
         <source>Animals</source>
-        <translation type="unfinished"></translation>
+        <translation>Animales</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="320"/>
         <source>Abundance in the frame, limits at {level}.</source>
-        <translation type="unfinished"></translation>
+        <translation>Abundancia en el marco, límites al {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="328"/>
         <source>For comparison: the abundance&apos;s delta-method interval (log-normal with t).</source>
-        <translation type="unfinished"></translation>
+        <translation>Para comparar: el intervalo de la abundancia por el método delta (log-normal con t).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="342"/>
         <source>Share from the encounter rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Parte de la tasa de encuentro</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="343"/>
         <source>Share from the detection function</source>
-        <translation type="unfinished"></translation>
+        <translation>Parte de la función de detección</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="344"/>
         <source>Share from group size</source>
-        <translation type="unfinished"></translation>
+        <translation>Parte del tamaño de grupo</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="345"/>
         <source>Where the uncertainty comes from: each part's share of CV² (delta method). A large encounter-rate share calls for more transects; a large detection share for more detections.</source>
-        <translation type="unfinished"></translation>
+        <translation>De dónde procede la incertidumbre: la parte de cada componente en el CV² (método delta). Una parte grande de la tasa de encuentro pide más transectos; una parte grande de la detección, más detecciones.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="351"/>
         <source>Density and abundance</source>
-        <translation type="unfinished"></translation>
+        <translation>Densidad y abundancia</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="359"/>
         <source>Density by stratum with {level} intervals</source>
-        <translation type="unfinished"></translation>
+        <translation>Densidad por estrato con intervalos al {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="372"/>
         <source>lowest: {value:.3g}</source>
-        <translation type="unfinished"></translation>
+        <translation>mínimo: {value:.3g}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="373"/>
         <source>highest: {value:.3g}</source>
-        <translation type="unfinished"></translation>
+        <translation>máximo: {value:.3g}</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="384"/>
         <source>Strata shaded by density (animals per {unit}), with the surveyed {what}</source>
-        <translation type="unfinished"></translation>
+        <translation>Estratos sombreados según la densidad (animales por {unit}), con los {what} muestreados</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="391"/>
         <source>Each detection function is a key (half-normal, hazard-rate or uniform) with up to the chosen number of cosine terms, fitted to the distances by maximum likelihood; terms are added one at a time while AIC falls, under the constraint that detection never rises with distance, and the model with the smallest AIC is used (Buckland et al. 2001).</source>
-        <translation type="unfinished"></translation>
+        <translation>Cada función de detección es una función clave (seminormal, tasa de riesgo o uniforme) con hasta el número elegido de términos coseno, ajustada a las distancias por máxima verosimilitud; los términos se añaden de uno en uno mientras el AIC baja, con la restricción de que la detección nunca crezca con la distancia, y se usa el modelo con el menor AIC (Buckland et al. 2001).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="398"/>
         <source>Density in a stratum is D = n·E(s) / (2·w·L·P), with n the groups seen within the truncation distance w, L the line length, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
-        <translation type="unfinished"></translation>
+        <translation>La densidad en un estrato es D = n·E(s) / (2·w·L·P), con n los grupos vistos dentro de la distancia de truncamiento w, L la longitud de línea, P la probabilidad de ver un grupo dentro de w y E(s) el tamaño de grupo esperado (Buckland et al. 2001).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="404"/>
         <source>Density in a stratum is D = n·E(s) / (k·π·w²·P), with n the groups seen within the truncation distance w, k the number of point visits, P the probability of seeing a group within w and E(s) the expected group size (Buckland et al. 2001).</source>
-        <translation type="unfinished"></translation>
+        <translation>La densidad en un estrato es D = n·E(s) / (k·π·w²·P), con n los grupos vistos dentro de la distancia de truncamiento w, k el número de visitas a los puntos, P la probabilidad de ver un grupo dentro de w y E(s) el tamaño de grupo esperado (Buckland et al. 2001).</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="409"/>
         <source>The squared CV of the density is the sum of those of the encounter rate, of P and of E(s) (delta method). The encounter rate's variance comes from the differences between transects within each stratum (estimator R2 of Fewster et al. 2009), that of P from the curvature of the likelihood, that of E(s) from the spread of group sizes. Intervals are log-normal, D/C to D·C with C = exp(t·√ln(1 + CV²)), t with Satterthwaite's degrees of freedom (Buckland et al. 2001). With one detection function for all strata, its uncertainty is shared by every stratum and counted once in the overall estimate.</source>
-        <translation type="unfinished"></translation>
+        <translation>El CV al cuadrado de la densidad es la suma de los de la tasa de encuentro, de P y de E(s) (método delta). La varianza de la tasa de encuentro procede de las diferencias entre transectos dentro de cada estrato (estimador R2 de Fewster et al. 2009), la de P de la curvatura de la verosimilitud y la de E(s) de la dispersión de los tamaños de grupo. Los intervalos son log-normales, de D/C a D·C con C = exp(t·√ln(1 + CV²)), t con los grados de libertad de Satterthwaite (Buckland et al. 2001). Con una sola función de detección para todos los estratos, su incertidumbre la comparten todos los estratos y se cuenta una sola vez en la estimación global.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="418"/>
         <source>The intervals reported are bootstrap percentile intervals: {b} resamples drawn from the recorded seed, each taking as many transects or points per stratum as were surveyed, with replacement, refitting the chosen detection function and group size to their detections (AIC is not rerun). {f} resamples could not be fitted.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los intervalos presentados son intervalos bootstrap de percentiles: {b} remuestreos tomados con la semilla registrada, cada uno con tantos transectos o puntos por estrato como se muestrearon, con reposición, reajustando a sus detecciones la función de detección elegida y el tamaño de grupo (el AIC no se repite). No se pudieron ajustar {f} remuestreos.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="427"/>
         <source>Assumptions and cautions</source>
-        <translation type="unfinished"></translation>
+        <translation>Supuestos y precauciones</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="428"/>
         <source>The estimate is only as good as three things that happened in the field:</source>
-        <translation type="unfinished"></translation>
+        <translation>La estimación solo es tan buena como tres cosas que ocurrieron en el campo:</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="431"/>
         <source>Animals on the line are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los animales sobre la línea se ven siempre. Cualquiera que no se vea allí hace la estimación demasiado baja en la misma proporción, y ningún intervalo lo muestra.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="435"/>
         <source>Animals at the point are always seen. Any missed there makes the estimate too low by the same share, and no interval shows it.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los animales en el punto se ven siempre. Cualquiera que no se vea allí hace la estimación demasiado baja en la misma proporción, y ningún intervalo lo muestra.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="438"/>
         <source>Distances are measured accurately, with a rangefinder and compass where possible. Rounding to round numbers, or guessing, distorts the detection function; distance bands are then safer.</source>
-        <translation type="unfinished"></translation>
+        <translation>Las distancias se miden con precisión, con telémetro y brújula cuando sea posible. Redondear a números redondos, o estimar a ojo, deforma la función de detección; los intervalos de distancia son entonces más seguros.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="441"/>
         <source>Animals do not move before they are detected: animals fleeing from the observer look like a detection function that falls too early, and animals drawn to the observer like one that falls too late.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los animales no se mueven antes de ser detectados: los animales que huyen del observador parecen una función de detección que cae demasiado pronto, y los atraídos por el observador, una que cae demasiado tarde.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="445"/>
         <source>The transects or points were placed at random (or on a randomly placed grid) with respect to the animals, and each stratum&apos;s estimate covers its polygons only: tracks and roads are not random lines.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los transectos o los puntos se colocaron al azar (o sobre una cuadrícula colocada al azar) respecto a los animales, y la estimación de cada estrato solo cubre sus polígonos: las pistas y los caminos no son líneas aleatorias.</translation>
     </message>
     <message>
         <location filename="../processing/report/distancedensity.py" line="467"/>
         <source>Density from detection distances</source>
-        <translation type="unfinished"></translation>
+        <translation>Densidad a partir de las distancias de detección</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="87"/>
         <source>Naive occupancy from presence data</source>
-        <translation type="unfinished">Ocupación ingenua a partir de datos de presencia</translation>
+        <translation>Ocupación ingenua a partir de datos de presencia</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="87"/>
         <source>Density and abundance estimate</source>
-        <translation type="unfinished">Estimación de la densidad y la abundancia</translation>
+        <translation>Estimación de la densidad y la abundancia</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="106"/>
         <source>proportion of units occupied (naive)</source>
-        <translation type="unfinished">proporción de unidades ocupadas (ingenua)</translation>
+        <translation>proporción de unidades ocupadas (ingenua)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="106"/>
         <source>occupied units</source>
-        <translation type="unfinished">unidades ocupadas</translation>
+        <translation>unidades ocupadas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="109"/>
         <source>density per {unit}</source>
-        <translation type="unfinished">densidad por {unit}</translation>
+        <translation>densidad por {unit}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="109"/>
         <source>animals</source>
-        <translation type="unfinished">animales</translation>
+        <translation>animales</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="118"/>
         <source>0 – {hi} (one-sided)</source>
-        <translation type="unfinished"></translation>
+        <translation>0 – {hi} (unilateral)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="124"/>
         <source>estimated {what} in the frame</source>
-        <translation type="unfinished">estimación de {what} en el marco</translation>
+        <translation>estimación de {what} en el marco</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="128"/>
         <source>units surveyed</source>
-        <translation type="unfinished">unidades muestreadas</translation>
+        <translation>unidades muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="131"/>
         <source>true total of the simulated population</source>
-        <translation type="unfinished">total verdadero de la población simulada</translation>
+        <translation>total verdadero de la población simulada</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="137"/>
         <source>covers</source>
-        <translation type="unfinished">contiene</translation>
+        <translation>contiene</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="137"/>
         <source>misses</source>
-        <translation type="unfinished">no contiene</translation>
+        <translation>no contiene</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="159"/>
         <source>t with Satterthwaite degrees of freedom</source>
-        <translation type="unfinished">t con los grados de libertad de Satterthwaite</translation>
+        <translation>t con los grados de libertad de Satterthwaite</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="160"/>
         <source>log-normal (with t)</source>
-        <translation type="unfinished"></translation>
+        <translation>log-normal (con t)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="161"/>
         <source>stratified percentile bootstrap</source>
-        <translation type="unfinished">bootstrap estratificado de percentiles</translation>
+        <translation>bootstrap estratificado de percentiles</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="165"/>
         <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-        <translation type="unfinished">vecindario local (Stevens &amp; Olsen 2003)</translation>
+        <translation>vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="166"/>
         <source>local neighbourhood, scaled to the simple formula (our variant)</source>
-        <translation type="unfinished"></translation>
+        <translation>vecindario local, escalado a la fórmula simple (nuestra variante)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="176"/>
         <source>plus sampling (units count only inside their stratum)</source>
-        <translation type="unfinished"></translation>
+        <translation>muestreo «plus» (las unidades solo cuentan dentro de su estrato)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="177"/>
         <source>units kept wholly inside their stratum</source>
-        <translation type="unfinished"></translation>
+        <translation>unidades mantenidas por completo dentro de su estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="178"/>
         <source>no record: whole units</source>
-        <translation type="unfinished"></translation>
+        <translation>sin registro: unidades enteras</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="180"/>
         <source>field {field} (m²)</source>
-        <translation type="unfinished">campo {field} (m²)</translation>
+        <translation>campo {field} (m²)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="180"/>
         <source>polygon area</source>
-        <translation type="unfinished">área del polígono</translation>
+        <translation>área del polígono</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="186"/>
         <source>strip width</source>
-        <translation type="unfinished">ancho de franja</translation>
+        <translation>ancho de franja</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="188"/>
         <source>fixed</source>
-        <translation type="unfinished">fija</translation>
+        <translation>fija</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="190"/>
         <source>asked for; applied in strata {yes}, refused in {no} (units may overlap)</source>
-        <translation type="unfinished"></translation>
+        <translation>solicitada; aplicada en los estratos {yes}, rechazada en {no} (las unidades pueden solaparse)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="197"/>
         <source>Sample units</source>
-        <translation type="unfinished">Unidades de muestreo</translation>
+        <translation>Unidades de muestreo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="198"/>
         <source>Count field</source>
-        <translation type="unfinished">Campo de conteo</translation>
+        <translation>Campo de conteo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="199"/>
         <source> (presence/absence)</source>
-        <translation type="unfinished"> (presencia/ausencia)</translation>
+        <translation> (presencia/ausencia)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="202"/>
         <source>Unit area</source>
-        <translation type="unfinished">Área de la unidad</translation>
+        <translation>Área de la unidad</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Interval</source>
-        <translation type="unfinished">Intervalo</translation>
+        <translation>Intervalo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="208"/>
         <source>Variance estimator</source>
-        <translation type="unfinished">Estimador de la varianza</translation>
+        <translation>Estimador de la varianza</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="210"/>
         <source>Edge protocol of the units</source>
-        <translation type="unfinished"></translation>
+        <translation>Protocolo de borde de las unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="211"/>
         <source>Detection probability p</source>
-        <translation type="unfinished">Probabilidad de detección p</translation>
+        <translation>Probabilidad de detección p</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="214"/>
         <source>Target CV for the next survey</source>
-        <translation type="unfinished">CV objetivo para el próximo muestreo</translation>
+        <translation>CV objetivo para el próximo muestreo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="222"/>
         <source>not used (no random draws without the bootstrap)</source>
-        <translation type="unfinished">no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
+        <translation>no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="232"/>
         <source>Estimates by stratum</source>
-        <translation type="unfinished">Estimaciones por estrato</translation>
+        <translation>Estimaciones por estrato</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="236"/>
         <source>Units (n)</source>
-        <translation type="unfinished">Unidades (n)</translation>
+        <translation>Unidades (n)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="237"/>
         <source>Not surveyed</source>
-        <translation type="unfinished">No muestreadas</translation>
+        <translation>No muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="238"/>
         <source>Mean count</source>
-        <translation type="unfinished">Conteo medio</translation>
+        <translation>Conteo medio</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="239"/>
         <source>SD of counts</source>
-        <translation type="unfinished">DE de los conteos</translation>
+        <translation>DE de los conteos</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="279"/>
         <source>Occupied units</source>
-        <translation type="unfinished">Unidades ocupadas</translation>
+        <translation>Unidades ocupadas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="279"/>
         <source>Abundance</source>
-        <translation type="unfinished">Abundancia</translation>
+        <translation>Abundancia</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="257"/>
         <source>Units next time (n_next)</source>
-        <translation type="unfinished">Unidades la próxima vez (n_next)</translation>
+        <translation>Unidades la próxima vez (n_next)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="272"/>
         <source>{what}, limits at {level}.</source>
-        <translation type="unfinished">{what}, límites al {level}.</translation>
+        <translation>{what}, límites al {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="279"/>
         <source>{what} in the frame, limits at {level}.</source>
-        <translation type="unfinished">{what} en el marco, límites al {level}.</translation>
+        <translation>{what} en el marco, límites al {level}.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="308"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-        <translation type="unfinished">No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
+        <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="314"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
-        <translation type="unfinished">Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
+        <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="324"/>
         <source>The overall interval by method</source>
-        <translation type="unfinished">El intervalo global según el método</translation>
+        <translation>El intervalo global según el método</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="325"/>
         <source>Used in the outputs</source>
-        <translation type="unfinished">Usado en las salidas</translation>
+        <translation>Usado en las salidas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>overall abundance in a resample</source>
-        <translation type="unfinished">abundancia global en un remuestreo</translation>
+        <translation>abundancia global en un remuestreo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>resamples</source>
-        <translation type="unfinished">remuestreos</translation>
+        <translation>remuestreos</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>{level} percentile limits</source>
-        <translation type="unfinished">límites de percentiles al {level}</translation>
+        <translation>límites de percentiles al {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="356"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
-        <translation type="unfinished">Los {n:,} remuestreos bootstrap de la abundancia global</translation>
+        <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="378"/>
         <source>true density (simulation)</source>
-        <translation type="unfinished">densidad verdadera (simulación)</translation>
+        <translation>densidad verdadera (simulación)</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="388"/>
         <source>{what} by stratum with {level} confidence intervals</source>
-        <translation type="unfinished">{what} por estrato con intervalos de confianza al {level}</translation>
+        <translation>{what} por estrato con intervalos de confianza al {level}</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="403"/>
         <source>lowest</source>
-        <translation type="unfinished">mínimo</translation>
+        <translation>mínimo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="403"/>
         <source>highest</source>
-        <translation type="unfinished">máximo</translation>
+        <translation>máximo</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="414"/>
         <source>surveyed units</source>
-        <translation type="unfinished">unidades muestreadas</translation>
+        <translation>unidades muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="424"/>
         <source>not surveyed</source>
-        <translation type="unfinished">no muestreadas</translation>
+        <translation>no muestreadas</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="433"/>
         <source>Strata shaded by {what}, with the units</source>
-        <translation type="unfinished">Estratos sombreados según {what}, con las unidades</translation>
+        <translation>Estratos sombreados según {what}, con las unidades</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="600"/>
         <source>Cautions</source>
-        <translation type="unfinished">Precauciones</translation>
+        <translation>Precauciones</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="180"/>
         <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction 1 − n_h·a/A_h, since the layout named draws units that do not overlap (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-        <translation type="unfinished"></translation>
+        <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita 1 − n_h·a/A_h, ya que la disposición indicada sortea unidades que no se solapan (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
     </message>
     <message>
         <location filename="../processing/report/allocate.py" line="180"/>
         <source>Expected precision uses the pilot figures as if they were the truth, without a finite-population correction: a simple random layout&apos;s units may overlap, so their possible positions are a continuous population (Cordy 1993). Real precision depends on the counts the survey finds.</source>
-        <translation type="unfinished"></translation>
+        <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, sin corrección por población finita: las unidades de una disposición aleatoria simple pueden solaparse, así que sus posiciones posibles forman una población continua (Cordy 1993). La precisión real depende de los conteos que obtenga el muestreo.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="145"/>
         <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-        <translation type="unfinished">Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
+        <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="170"/>
         <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-        <translation type="unfinished">{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
+        <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="177"/>
         <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-        <translation type="unfinished">{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
+        <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="189"/>
         <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-        <translation type="unfinished">Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
+        <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="199"/>
         <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-        <translation type="unfinished">El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
+        <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="213"/>
         <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine and follows the real chain&apos;s edge protocol: by default plus sampling, with centres over each stratum (or the frame) grown by the unit&apos;s reach (and half a surface cell), each unit counting the animals of the cells of its own stratum whose centres it covers, with its nominal area, and the estimation engine expanding the counts to the grown area (Gregoire &amp; Valentine 2008, ch. 10); the abundance is the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-        <translation type="unfinished"></translation>
+        <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición y sigue el protocolo de borde de la cadena real: por defecto el muestreo «plus», con centros sobre cada estrato (o el marco) ampliado en el alcance de la unidad (y media celda de la superficie), cada unidad contando los animales de las celdas de su propio estrato cuyos centros cubre, con su área nominal, y el motor de estimación extendiendo los conteos al área ampliada (Gregoire &amp; Valentine 2008, cap. 10); la abundancia es el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="227"/>
         <source>The stratified Neyman design with the true S_h is the best case: it allocates with the standard deviations the surface implies, which no survey knows. The pilot-based Neyman design estimates S_h in every simulated survey from a pilot of {pilot} simple random units per stratum (an independent realisation: a pilot season), as a survey would; its pilot units are not counted in its n.</source>
-        <translation type="unfinished"></translation>
+        <translation>El diseño estratificado de Neyman con la S_h verdadera es el mejor caso: asigna con las desviaciones estándar que implica la superficie, que ningún muestreo conoce. El diseño de Neyman basado en un piloto estima S_h en cada muestreo simulado a partir de un piloto de {pilot} unidades aleatorias simples por estrato (una realización independiente: una temporada piloto), como lo haría un muestreo; sus unidades piloto no se cuentan en su n.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="236"/>
         <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-        <translation type="unfinished">Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
+        <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="280"/>
         <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-        <translation type="unfinished">S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
+        <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
     </message>
     <message>
         <location filename="../processing/report/comparedesigns.py" line="328"/>
         <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-        <translation type="unfinished">La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
+        <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="137"/>
         <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-        <translation type="unfinished">Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
+        <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="290"/>
         <source>† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit −ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided by p with detection. For the frame it assumes one density over the strata.</source>
-        <translation type="unfinished"></translation>
+        <translation>† Todos los conteos fueron 0: la estimación es 0 y el intervalo va de 0 al límite superior unilateral −ln(1 − {level}) · A / Σa de un conteo de Poisson de 0 (Garwood 1936; unas 3 · A / Σa al 95 %), dividido por p con detección. Para el marco supone una sola densidad en los estratos.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="299"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-        <translation type="unfinished">El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
+        <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="344"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-        <translation type="unfinished">El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
+        <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="442"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-        <translation type="unfinished">El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
+        <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="453"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-        <translation type="unfinished"></translation>
+        <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="465"/>
         <source>Edges: the units were laid out by plus sampling (Gregoire &amp; Valentine 2008, ch. 10): their centres were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside its own stratum. Every animal then has the same chance of being counted, and the counts expand to the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).</source>
-        <translation type="unfinished"></translation>
+        <translation>Bordes: las unidades se dispusieron por muestreo «plus» (Gregoire &amp; Valentine 2008, cap. 10): sus centros se sortearon sobre cada estrato ampliado en el alcance de la unidad, y cada unidad solo cuenta los animales dentro de su propio estrato. Cada animal tiene entonces la misma probabilidad de ser contado, y los conteos se extienden al área ampliada A⁺_h: N_h = A⁺_h Σy/Σa (columna de las áreas de expansión en la salida).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="475"/>
         <source>Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit&apos;s reach of the edge; the estimate carries the inner density over that band. Where the animals near the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.</source>
-        <translation type="unfinished"></translation>
+        <translation>Bordes: las unidades se mantuvieron por completo dentro de sus estratos, así que ninguna unidad alcanza la franja situada a menos de un alcance de unidad del borde; la estimación traslada la densidad interior a esa franja. Donde los animales cercanos al borde difieren (una orilla, el borde de un bosque), está sesgada; el muestreo «plus» (INSIDE desactivado) no lo está.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="488"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, eq. 3.75), with df_p = {df} for p.</source>
-        <translation type="unfinished"></translation>
+        <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad de ambas partes se combinan por la regla de Satterthwaite, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, ec. 3.75), con df_p = {df} para p.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="500"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds. The observed SDs are themselves uncertain, especially from few units.</source>
-        <translation type="unfinished"></translation>
+        <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar que implica ahora el estimador de la varianza (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 y como máximo las unidades que contiene un estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="512"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="512"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go below 0.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(t_df · √ln(1 + CV²)), t con los grados de libertad de Satterthwaite de la estimación (Buckland et al. 2001, §3.6.1; el cuantil normal solo para gl infinitos, Burnham et al. 1987). Son asimétricos y nunca bajan de 0.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="512"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction where it applies (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-        <translation type="unfinished"></translation>
+        <translation>Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita donde se aplica (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="542"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to the same variance. For a simple random layout use the simple formula.</source>
-        <translation type="unfinished"></translation>
+        <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, con pesos que suman 1 en cada vecindario y en cada unidad, y v = Σ_i Σ_j w_ij (z_j − z̄_i)². Sus grados de libertad son los de una forma cuadrática, (tr Q)² / tr Q² (Box 1954), y el bootstrap dispersa sus remuestreos hasta la misma varianza. Para una disposición aleatoria simple use la fórmula simple.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="553"/>
         <source>Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on average with the simple formula where the population has no spatial pattern; the published sum falls about a quarter short there. This scaling is ours, not Stevens &amp; Olsen's.</source>
-        <translation type="unfinished"></translation>
+        <translation>Nuestra variante: la doble suma se multiplica por n / Σ_i (1 − Σ_j w_ij²), para que coincida en promedio con la fórmula simple donde la población no tiene estructura espacial; la suma publicada se queda allí corta en alrededor de un cuarto. Este escalado es nuestro, no de Stevens &amp; Olsen.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="562"/>
         <source>Strata with one surveyed unit were paired with a partner fixed before the counts were seen (the stratum sharing the longest edge on the map, or else the next stratum in id order). Two one-unit strata share the pairs formula v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, with the weights of Hansen, Hurwitz &amp; Madow 1953); a one-unit stratum paired with a stratum of several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's spread, while the partner keeps its own variance. Differences between the paired strata count as variance, so these standard errors tend to be too large; each such stratum has 1 degree of freedom.</source>
-        <translation type="unfinished"></translation>
+        <translation>Los estratos con una sola unidad muestreada se emparejaron con una pareja fijada antes de ver los conteos (el estrato que comparte el límite más largo en el mapa o, si no, el siguiente estrato en el orden de identificadores). Dos estratos de una sola unidad comparten la fórmula de pares v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, con los pesos de Hansen, Hurwitz &amp; Madow 1953); un estrato de una sola unidad emparejado con un estrato de varias unidades toma (D̂_1 − D̂_2)² − v(D̂_2), como mínimo la varianza que tiene una unidad con la dispersión de la pareja, mientras que la pareja conserva su propia varianza. Las diferencias entre los estratos emparejados cuentan como varianza, por lo que estos errores estándar tienden a ser demasiado grandes; cada uno de esos estratos tiene 1 grado de libertad.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="579"/>
         <source>The finite-population correction was refused in strata {ids}: their units come from a simple random layout whose units may overlap, a continuous population of possible units, which has no such correction (Cordy 1993).</source>
-        <translation type="unfinished"></translation>
+        <translation>La corrección por población finita se rechazó en los estratos {ids}: sus unidades proceden de una disposición aleatoria simple cuyas unidades pueden solaparse, una población continua de unidades posibles, que no tiene tal corrección (Cordy 1993).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="588"/>
         <source>The finite-population correction assumes that the units do not overlap and were drawn without replacement from the units that tile each stratum. The units carry no design record (they did not come from plotwise:layout), so this could not be checked: if they may overlap, switch the correction off.</source>
-        <translation type="unfinished"></translation>
+        <translation>La corrección por población finita supone que las unidades no se solapan y se sortearon sin reposición entre las unidades que teselan cada estrato. Las unidades no llevan registro de diseño (no proceden de plotwise:layout), así que esto no pudo comprobarse: si pueden solaparse, desactive la corrección.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="601"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-        <translation type="unfinished">La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
+        <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="609"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-        <translation type="unfinished">Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
+        <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="617"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-        <translation type="unfinished">Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
+        <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="626"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-        <translation type="unfinished">Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
+        <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
     </message>
     <message>
         <location filename="../processing/report/estimate.py" line="633"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-        <translation type="unfinished">El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
+        <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
     </message>
 </context>
 <context>
@@ -7809,82 +7905,82 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="45"/>
         <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Strata&lt;/b&gt; (optional, with their id field): each unit counts only the animals inside its own stratum (matched by the units&apos; &lt;i&gt;stratum&lt;/i&gt; field; without an id field, inside the strata), the rule of plus sampling, the layout&apos;s default at the edges (Gregoire &amp;amp; Valentine 2008, ch. 10). Give the strata the units were laid out on.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-        <translation type="unfinished"></translation>
+        <translation>&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Estratos&lt;/b&gt; (opcional, con su campo identificador): cada unidad solo cuenta los animales dentro de su propio estrato (reconocido por el campo &lt;i&gt;stratum&lt;/i&gt; de las unidades; sin campo identificador, dentro de los estratos), la regla del muestreo «plus», el protocolo por defecto de la disposición en los bordes (Gregoire &amp;amp; Valentine 2008, cap. 10). Indique los estratos sobre los que se dispusieron las unidades.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="64"/>
         <source>&lt;p&gt;Distances (for the distance density algorithm):&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Detection function&lt;/b&gt;: none (the detection probability above, the same at every distance), or half-normal g(x) = exp(−x²/2σ²) or hazard-rate g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), for line transects and point stations. Each animal within the maximum distance of a unit is then seen with probability p·g(x), x its perpendicular distance to the line or its distance to the point, p the detection probability above (1: animals on the line are always seen, as distance sampling assumes).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Scale σ (m)&lt;/b&gt; and &lt;b&gt;hazard-rate shape b&lt;/b&gt; of the detection function.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Maximum distance (m)&lt;/b&gt;: animals farther than this from the line or point are not counted; 0 takes the distance where g falls to 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Group size field&lt;/b&gt; of the animal points (optional): each point is then a group of that many animals; otherwise each point is one animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observations&lt;/b&gt; (optional, with a detection function): one point per sighting at the animal's position, with &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) and &lt;i&gt;size&lt;/i&gt;, ready for the distance density algorithm.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;With a detection function, &lt;i&gt;present&lt;/i&gt; counts the animals within the maximum distance, and the strata are not used: a line or point sees the animals within the maximum distance on both sides of a stratum edge, as observers do.&lt;/p&gt;&lt;p&gt;Reference: Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</source>
-        <translation type="unfinished"></translation>
+        <translation>&lt;p&gt;Distancias (para el algoritmo de densidad a partir de distancias):&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Función de detección&lt;/b&gt;: ninguna (la probabilidad de detección indicada arriba, la misma a cualquier distancia), o seminormal g(x) = exp(−x²/2σ²) o tasa de riesgo (hazard-rate) g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), para transectos lineales y estaciones puntuales. Cada animal a menos de la distancia máxima de una unidad se ve entonces con probabilidad p·g(x), con x su distancia perpendicular a la línea o su distancia al punto y p la probabilidad de detección indicada arriba (1: los animales sobre la línea se ven siempre, como supone el muestreo de distancias).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Escala σ (m)&lt;/b&gt; y &lt;b&gt;forma b de la tasa de riesgo&lt;/b&gt; de la función de detección.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Distancia máxima (m)&lt;/b&gt;: los animales más alejados de la línea o del punto no se cuentan; 0 toma la distancia donde g cae al 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Campo de tamaño de grupo&lt;/b&gt; de los puntos de animales (opcional): cada punto es entonces un grupo de ese número de animales; si no, cada punto es un animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observaciones&lt;/b&gt; (opcional, con una función de detección): un punto por avistamiento en la posición del animal, con &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) y &lt;i&gt;size&lt;/i&gt;, listo para el algoritmo de densidad a partir de distancias.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Con una función de detección, &lt;i&gt;present&lt;/i&gt; cuenta los animales a menos de la distancia máxima, y los estratos no se usan: una línea o un punto ve los animales a menos de la distancia máxima a ambos lados de un límite de estrato, como hacen los observadores.&lt;/p&gt;&lt;p&gt;Referencia: Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="100"/>
         <source>Strata: count only inside each unit&apos;s stratum (plus sampling)</source>
-        <translation type="unfinished"></translation>
+        <translation>Estratos: contar solo dentro del estrato de cada unidad (muestreo «plus»)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="103"/>
         <source>Stratum id field of the strata</source>
-        <translation type="unfinished">Campo identificador de los estratos</translation>
+        <translation>Campo identificador de los estratos</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>Detection function (line transects and point stations)</source>
-        <translation type="unfinished"></translation>
+        <translation>Función de detección (transectos lineales y estaciones puntuales)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>None: the same detection probability at every distance</source>
-        <translation type="unfinished"></translation>
+        <translation>Ninguna: la misma probabilidad de detección a cualquier distancia</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>Half-normal</source>
-        <translation type="unfinished"></translation>
+        <translation>Seminormal</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
         <source>Hazard-rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Tasa de riesgo (hazard-rate)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="111"/>
         <source>Scale σ of the detection function (m)</source>
-        <translation type="unfinished"></translation>
+        <translation>Escala σ de la función de detección (m)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="114"/>
         <source>Shape b of the hazard-rate</source>
-        <translation type="unfinished"></translation>
+        <translation>Forma b de la tasa de riesgo (hazard-rate)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="117"/>
         <source>Maximum distance from the line or point (m; 0: where g falls to 1 %)</source>
-        <translation type="unfinished"></translation>
+        <translation>Distancia máxima a la línea o al punto (m; 0: donde g cae al 1 %)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="120"/>
         <source>Group size field of the animal points</source>
-        <translation type="unfinished"></translation>
+        <translation>Campo de tamaño de grupo de los puntos de animales</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="123"/>
         <source>Observations with distances</source>
-        <translation type="unfinished"></translation>
+        <translation>Observaciones con las distancias</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="249"/>
         <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
-        <translation type="unfinished"></translation>
+        <translation>Capa «{layer}»: los puntos de animales {ids} no tienen un tamaño de grupo mayor que 0 en el campo «{field}». Rellénelo o no elija ningún campo de tamaño de grupo.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="262"/>
         <source>Animals within {w:.1f} m of the lines or points are counted.</source>
-        <translation type="unfinished"></translation>
+        <translation>Se cuentan los animales a menos de {w:.1f} m de las líneas o de los puntos.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="285"/>
         <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
-        <translation type="unfinished"></translation>
+        <translation>No se eligió ninguna función de detección, así que no hay distancias: la capa de observaciones está vacía.</translation>
     </message>
 </context>
 <context>
