@@ -434,12 +434,13 @@ def detection_warnings(analyses, per_stratum):
                 "per function); consider one function for all strata."),
                 stratum=where, n=a.n))
         if np.isfinite(fit.gof_p) and fit.gof_p < 0.05:
+            where_text = message(QT_TRANSLATE_NOOP("PlotwiseEngine", ", stratum {stratum}"), stratum=where) if where else ""
             warnings.append(message(QT_TRANSLATE_NOOP(
                 "PlotwiseEngine",
                 "The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). "
                 "Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or "
                 "another truncation."),
-                model=fit.label, at=f", stratum {where}" if where else "", p=fit.gof_p))
+                model=fit.label, at=where_text, p=fit.gof_p))
         if fit.at_bound:
             warnings.append(message(QT_TRANSLATE_NOOP(
                 "PlotwiseEngine",
