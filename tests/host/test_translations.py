@@ -508,9 +508,33 @@ def test_french_algorithm_names_groups_and_labels(english, french):
             assert fr[alg_id]["parameters"][0]["description"] != en[alg_id]["parameters"][0]["description"], alg_id
 
 
+def _placeholder_name(placeholder):
+    return placeholder[1:-1].split(":")[0].split("!")[0]
+
+
+def _filled_pieces(text_en, source, translations):
+    """``(end, translated piece)`` for a piece ``source`` whose placeholders were filled by ``.format()`` after
+    ``tr()`` (``self.tr(a) + self.tr(b).format(n=...)``): the piece matched at the start of ``text_en``, each
+    placeholder a non-empty run of text (the same for a repeated name), and those values put into each of its
+    translations. Only a piece that starts with text, not with a placeholder, can be anchored."""
+    parts = PLACEHOLDER.split(source)
+    if not parts[0] or not text_en.startswith(parts[0]):
+        return
+    names = [_placeholder_name(p) for p in PLACEHOLDER.findall(source)]
+    pattern = "(.+?)".join(re.escape(part) for part in parts)
+    for match in {re.fullmatch(pattern, text_en, re.S), re.match(pattern, text_en, re.S) if parts[-1] else None}:
+        values = {}
+        if match is None or any(values.setdefault(n, v) != v for n, v in zip(names, match.groups())):
+            continue
+        for translation in translations[source]:
+            yield match.end(), PLACEHOLDER.sub(lambda m: values.get(_placeholder_name(m.group()), m.group()),
+                                               translation)
+
+
 def _translated_forms(text_en, translations):
     """The translations of ``text_en``: of the string itself, or of the strings it is joined from (a help built
-    as ``self.tr(a) + self.tr(b)``), each piece a source of the .ts file. Empty when some part has none."""
+    as ``self.tr(a) + self.tr(b)``, a piece possibly filled by ``.format()``), each piece a source of the .ts
+    file. Empty when some part has none."""
     if text_en in translations:
         return set(translations[text_en])
     forms = set()
@@ -518,6 +542,10 @@ def _translated_forms(text_en, translations):
         if source and len(source) < len(text_en) and text_en.startswith(source):
             rest = _translated_forms(text_en[len(source):], translations)
             forms |= {head + tail for head in translations[source] for tail in rest}
+        elif source and PLACEHOLDER.search(source):
+            for end, head in _filled_pieces(text_en, source, translations):
+                rest = {""} if end == len(text_en) else _translated_forms(text_en[end:], translations)
+                forms |= {head + tail for tail in rest}
     return forms
 
 
