@@ -93,7 +93,7 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
         <translation>Proportionnelle à la surface</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <location filename="../processing/algorithms/allocate.py" line="292"/>
         <source>Neyman</source>
         <translation>Neyman</translation>
     </message>
@@ -145,65 +145,65 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
     <message>
         <location filename="../processing/algorithms/allocate.py" line="190"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
-        <translation>La couche « {layer} » n'a pas de champ « {field} » : les surfaces des polygones sont utilisées.</translation>
+        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} » : les surfaces des polygones sont utilisées.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="202"/>
+        <location filename="../processing/algorithms/allocate.py" line="194"/>
         <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
         <translation>La couche « {layer} » n'a aucune strate ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="217"/>
+        <location filename="../processing/algorithms/allocate.py" line="209"/>
         <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
         <translation>champ « {name} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
         <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
         <translation>Pas de champ d'écart-type pilote : l'écart-type de la covariable (« {field} ») sert de substitut. Cela suppose que les comptages suivent la covariable ; remplacez-le par l'écart-type d'un inventaire pilote dès que vous en avez un. Les erreurs types attendues sont alors dans les unités de la covariable, pas en comptages.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>polygon area</source>
         <translation>surface du polygone</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>pilot SD</source>
         <translation>écart-type pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>pilot mean</source>
         <translation>moyenne pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>cost</source>
         <translation>coût</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="276"/>
+        <location filename="../processing/algorithms/allocate.py" line="268"/>
         <source>The output layer could not be created.</source>
         <translation>La couche de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="286"/>
+        <location filename="../processing/algorithms/allocate.py" line="278"/>
         <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
         <translation>{total} unités allouées ({method}) ; CV attendu de la densité globale : {cv}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="299"/>
+        <location filename="../processing/algorithms/allocate.py" line="291"/>
         <source>equal</source>
         <translation>égale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="299"/>
+        <location filename="../processing/algorithms/allocate.py" line="291"/>
         <source>proportional to area</source>
         <translation>proportionnelle à la surface</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <location filename="../processing/algorithms/allocate.py" line="292"/>
         <source>optimal with cost</source>
         <translation>optimale avec coût</translation>
     </message>
@@ -504,6 +504,11 @@ Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="185"/>
+        <source>Layer &apos;{layer}&apos; has no area field: the polygon areas are used.</source>
+        <translation>La couche « {layer} » n'a pas de champ de surface : les surfaces des polygones sont utilisées.</translation>
     </message>
 </context>
 <context>
@@ -829,7 +834,7 @@ Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclu
 <context>
     <name>CompareDesigns</name>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="61"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="62"/>
         <source>Compare survey designs by simulation</source>
         <translation>Comparer des plans d'inventaire par simulation</translation>
     </message>
@@ -867,37 +872,37 @@ Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparais
 La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="110"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
         <source>Density surface (expected animals per km²)</source>
         <translation>Surface de densité (animaux attendus par km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="112"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="114"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="115"/>
         <source>Strata (for the stratified designs)</source>
         <translation>Strates (pour les plans stratifiés)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="119"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="120"/>
         <source>Stratum field</source>
         <translation>Champ de strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Designs to compare</source>
         <translation>Plans à comparer</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Simple random</source>
         <translation>Aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Stratified, proportional allocation</source>
         <translation>Stratifié, allocation proportionnelle</translation>
     </message>
@@ -907,167 +912,167 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
         <translation type="obsolete">Stratifié, allocation de Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="133"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="134"/>
         <source>Number of units</source>
         <translation>Nombre d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Unit shape</source>
         <translation>Forme de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Point station</source>
         <translation>Station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Square plot</source>
         <translation>Placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Circular plot</source>
         <translation>Placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Line transect</source>
         <translation>Transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="145"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="146"/>
         <source>Unit size (m): counting radius, side, radius or transect length</source>
         <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="151"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="152"/>
         <source>Half-width of a transect&apos;s counting strip (m)</source>
         <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="158"/>
         <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
         <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="164"/>
         <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
         <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="170"/>
         <source>Simulated surveys per design</source>
         <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="176"/>
         <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
         <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Variance estimator for the grid and balanced designs</source>
         <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Simple random sampling formula</source>
         <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="189"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="190"/>
         <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
         <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="201"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Design comparison</source>
         <translation>Comparaison des plans</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="205"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="206"/>
         <source>Recommended design</source>
         <translation>Plan recommandé</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="212"/>
         <source>The density surface could not be opened.</source>
         <translation>La surface de densité n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="214"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="215"/>
         <source>The sampling frame could not be opened.</source>
         <translation>La base de sondage n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="219"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
         <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="233"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
-        <translation>La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
+        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="244"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
         <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
         <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="255"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
         <source>No strata were given: the stratified designs are left out ({names}).</source>
         <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="259"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="254"/>
         <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
         <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="277"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="272"/>
         <source>Reading the density surface…</source>
         <translation>Chargement de la surface de densité…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="278"/>
         <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
         <translation>La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="308"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="303"/>
         <source>Simulating {n} units…</source>
         <translation>Simulation avec {n} unités…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="309"/>
         <source>{n} units were left out of the range: {why}</source>
         <translation>{n} unités ont été retirées de la gamme : {why}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="321"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="316"/>
         <source>The output table could not be created.</source>
         <translation>La table de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="340"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="335"/>
         <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
         <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
     </message>
@@ -1442,7 +1447,7 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
         <translation type="obsolete">La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="68"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="69"/>
         <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -1475,22 +1480,22 @@ Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparais
 La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Stratified, Neyman allocation with the true S_h (best case)</source>
         <translation>Stratifié, allocation de Neyman avec le vrai S_h (meilleur cas)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Stratified, Neyman allocation from a pilot survey</source>
         <translation>Stratifié, allocation de Neyman d'après un inventaire pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>Voisinage local, mis à l'échelle de la formule simple (notre variante)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="195"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="196"/>
         <source>Pilot units per stratum for the pilot-based Neyman design</source>
         <translation>Unités pilotes par strate pour le plan de Neyman fondé sur un pilote</translation>
     </message>
@@ -1931,85 +1936,85 @@ Sécurité sur le terrain : l'échantillonnage par distance envoie des observate
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="234"/>
         <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
-        <translation>La couche « {layer} » n'a pas de champ pour {what}. Choisissez le champ qui les contient.</translation>
+        <translation type="obsolete">La couche « {layer} » n'a pas de champ pour {what}. Choisissez le champ qui les contient.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="232"/>
         <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
         <translation>Les classes de distance « {text} » ne sont pas des nombres. Écrivez les bornes des classes en m, depuis 0, séparées par des virgules, p. ex. 0, 10, 25, 50, 100.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="256"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="242"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>Layer &apos;{layer}&apos; holds {kinds} geometries, but the survey type is {survey}. Choose the survey type that matches the units (line transects need lines, point transects points).</source>
         <translation>La couche « {layer} » contient des géométries {kinds}, mais le type d'inventaire est : {survey}. Choisissez le type d'inventaire qui correspond aux unités (les transects linéaires demandent des lignes, les transects ponctuels des points).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>line transects</source>
         <translation>transects linéaires</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>point transects</source>
         <translation>transects ponctuels</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="273"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="259"/>
         <source>{n} reserve unit(s) without observations were left out (not surveyed).</source>
         <translation>{n} unité(s) de réserve sans observation ont été écartée(s) (non inventoriée(s)).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="294"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="280"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have a number of visits in the field &apos;{field}&apos; that is not a whole number of 0 or more. Correct them.</source>
         <translation>Couche « {layer} » : les points {ids} ont dans le champ « {field} » un nombre de visites qui n'est pas un nombre entier supérieur ou égal à 0. Corrigez-les.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="299"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="285"/>
         <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
         <translation>Couche « {layer} » : des observations nomment les points {ids}, dont le champ des visites « {field} » est vide ou vaut 0. Donnez-leur leur nombre de visites, ou corrigez les identifiants d'unité des observations.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="305"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="291"/>
         <source>{n} point(s) with no visits were left out (not surveyed).</source>
         <translation>{n} point(s) sans visite ont été écarté(s) (non inventorié(s)).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="315"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="300"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates, ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="319"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="304"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
         <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base de sondage est traitée comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="327"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="312"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>unit ids</source>
-        <translation>les identifiants d'unité</translation>
+        <translation type="obsolete">les identifiants d'unité</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>distances</source>
-        <translation>les distances</translation>
+        <translation type="obsolete">les distances</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="447"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="430"/>
         <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
         <translation>Fonction de détection{where} : {model}, P = {p:.3f}, largeur effective {esw:.1f} m, {n} détections.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="451"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="434"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
@@ -2017,7 +2022,7 @@ Sécurité sur le terrain : l'échantillonnage par distance envoie des observate
 <context>
     <name>Estimate</name>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="73"/>
+        <location filename="../processing/algorithms/estimate.py" line="74"/>
         <source>Estimate density and abundance</source>
         <translation>Estimer la densité et l'abondance</translation>
     </message>
@@ -2071,202 +2076,202 @@ Vrai total : pour les simulations et la formation uniquement. Le rapport l'affic
 Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="138"/>
+        <location filename="../processing/algorithms/estimate.py" line="139"/>
         <source>Sample units with counts</source>
         <translation>Unités d'échantillonnage avec comptages</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="140"/>
+        <location filename="../processing/algorithms/estimate.py" line="141"/>
         <source>Count field</source>
         <translation>Champ de comptage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="142"/>
+        <location filename="../processing/algorithms/estimate.py" line="143"/>
         <source>Stratum field of the units</source>
         <translation>Champ de strate des unités</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="145"/>
+        <location filename="../processing/algorithms/estimate.py" line="146"/>
         <source>Unit area field (m²)</source>
         <translation>Champ de surface d'unité (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="148"/>
+        <location filename="../processing/algorithms/estimate.py" line="149"/>
         <source>Fixed unit area for points and lines (m²; 0: not used)</source>
         <translation>Surface d'unité fixe pour les points et les lignes (m² ; 0 : non utilisée)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="151"/>
+        <location filename="../processing/algorithms/estimate.py" line="152"/>
         <source>Strip width of line transects (m, full width; 0: not used)</source>
         <translation>Largeur de bande des transects linéaires (m, largeur totale ; 0 : non utilisée)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="154"/>
+        <location filename="../processing/algorithms/estimate.py" line="155"/>
         <source>Strata (the frame)</source>
         <translation>Strates (la base de sondage)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="156"/>
+        <location filename="../processing/algorithms/estimate.py" line="157"/>
         <source>Stratum id field of the strata</source>
         <translation>Champ d'identifiant des strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="159"/>
+        <location filename="../processing/algorithms/estimate.py" line="160"/>
         <source>Confidence level</source>
         <translation>Niveau de confiance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>Confidence interval</source>
         <translation>Intervalle de confiance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>t with Satterthwaite degrees of freedom</source>
         <translation>t avec les degrés de liberté de Satterthwaite</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>Log-normal</source>
         <translation>Log-normal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>Stratified bootstrap (2,000 resamples)</source>
         <translation>Bootstrap stratifié (2 000 rééchantillonnages)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="166"/>
+        <location filename="../processing/algorithms/estimate.py" line="167"/>
         <source>Finite-population correction</source>
         <translation>Correction pour population finie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="168"/>
+        <location filename="../processing/algorithms/estimate.py" line="169"/>
         <source>Detection probability p (from a separate study; 1: all seen)</source>
         <translation>Probabilité de détection p (d'une étude distincte ; 1 : tous vus)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="171"/>
+        <location filename="../processing/algorithms/estimate.py" line="172"/>
         <source>Standard error of p</source>
         <translation>Erreur type de p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="175"/>
         <source>Area unit of the results</source>
         <translation>Unité de surface des résultats</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="175"/>
         <source>km²</source>
         <translation>km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="175"/>
         <source>hectares</source>
         <translation>hectares</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="177"/>
+        <location filename="../processing/algorithms/estimate.py" line="178"/>
         <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
         <translation>CV cible pour le prochain inventaire (0 : non utilisé ; p. ex. 0.15)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Variance estimator</source>
         <translation>Estimateur de variance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Simple random sampling formula</source>
         <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
         <translation>Voisinage local (dispositions systématiques ou spatialement équilibrées)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="191"/>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
         <source>The count field holds presence (1) / absence (0)</source>
         <translation>Le champ de comptage contient présence (1) / absence (0)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="193"/>
+        <location filename="../processing/algorithms/estimate.py" line="194"/>
         <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
         <translation>Écarter les strates sans unité inventoriée (la base se réduit)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="196"/>
+        <location filename="../processing/algorithms/estimate.py" line="197"/>
         <source>True total of a simulated population (simulations and training only; 0: none)</source>
         <translation>Vrai total d'une population simulée (simulations et formation uniquement ; 0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="201"/>
+        <location filename="../processing/algorithms/estimate.py" line="202"/>
         <source>Strata with estimates</source>
         <translation>Strates avec estimations</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="203"/>
+        <location filename="../processing/algorithms/estimate.py" line="204"/>
         <source>Estimate table</source>
         <translation>Table des estimations</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Overall density</source>
         <translation>Densité globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>SE of the overall density</source>
         <translation>Erreur type de la densité globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Overall abundance</source>
         <translation>Abondance globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Lower confidence limit of the abundance</source>
         <translation>Limite inférieure de confiance de l'abondance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Upper confidence limit of the abundance</source>
         <translation>Limite supérieure de confiance de l'abondance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>CV of the overall estimate</source>
         <translation>CV de l'estimation globale</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="323"/>
         <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
-        <translation>La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
+        <translation type="obsolete">La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="333"/>
+        <location filename="../processing/algorithms/estimate.py" line="322"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates (plotwise:stratify écrit 'stratum'), ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="338"/>
+        <location filename="../processing/algorithms/estimate.py" line="327"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
         <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base est traitée comme une seule strate, et le champ « {field} » des unités n'est pas utilisé. Si les unités ont été allouées aux strates de façon inégale, donnez plutôt les strates : une moyenne non stratifiée est alors biaisée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="241"/>
+        <location filename="../processing/algorithms/estimate.py" line="236"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="247"/>
+        <location filename="../processing/algorithms/estimate.py" line="242"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="290"/>
+        <location filename="../processing/algorithms/estimate.py" line="285"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
@@ -2281,7 +2286,7 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation type="obsolete">Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="302"/>
+        <location filename="../processing/algorithms/estimate.py" line="297"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
@@ -2736,7 +2741,7 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation type="obsolete">Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="76"/>
+        <location filename="../processing/algorithms/estimate.py" line="77"/>
         <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
 
 Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added.
@@ -2793,12 +2798,12 @@ Vrai total : pour les simulations et la formation uniquement. Le rapport l'affic
 Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="181"/>
+        <location filename="../processing/algorithms/estimate.py" line="182"/>
         <source>Degrees of freedom of the detection estimate (0: p known)</source>
         <translation>Degrés de liberté de l'estimation de la détection (0 : p connu)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>Voisinage local, mis à l'échelle de la formule simple (notre variante)</translation>
     </message>
@@ -2911,27 +2916,27 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation>Nombre total d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="45"/>
+        <location filename="../processing/provider.py" line="51"/>
         <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
         <translation>Chaîne d'exemple : planifier un inventaire (base de sondage, strates, effort, disposition)</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="45"/>
+        <location filename="../processing/provider.py" line="51"/>
         <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
         <translation>Construit la base de sondage (zone d'étude moins les exclusions et les cellules au-delà de la pente limite), forme des strates par k-moyennes à partir des rasters de covariables, répartit les unités par allocation de Neyman avec l'écart-type de la covariable comme substitut, et dispose des placettes carrées spatialement équilibrées avec 3 unités de réserve par strate. Ouvrez-la dans le modeleur pour modifier une étape. Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="55"/>
+        <location filename="../processing/provider.py" line="61"/>
         <source>Example chain: estimate from simulated counts</source>
         <translation>Chaîne d'exemple : estimer à partir de comptages simulés</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="55"/>
+        <location filename="../processing/provider.py" line="61"/>
         <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
         <translation>Pour la formation : remplit le champ de comptage des unités à partir d'une population simulée, puis estime la densité et l'abondance par strate et au total. Avec un vrai travail de terrain, lancez plutôt l'estimation sur les unités comptées.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="84"/>
+        <location filename="../processing/provider.py" line="90"/>
         <source>Example chains</source>
         <translation>Chaînes d'exemple</translation>
     </message>
@@ -2939,7 +2944,7 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="71"/>
+        <location filename="../processing/algorithms/layout.py" line="66"/>
         <source>Lay out sample units</source>
         <translation>Disposer les unités d'échantillonnage</translation>
     </message>
@@ -2985,77 +2990,77 @@ Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de 
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="118"/>
+        <location filename="../processing/algorithms/layout.py" line="113"/>
         <source>Sampling frame or strata</source>
         <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="121"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="127"/>
+        <location filename="../processing/algorithms/layout.py" line="122"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="133"/>
+        <location filename="../processing/algorithms/layout.py" line="128"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Nombre total d'unités (sans champ d'unités)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Design</source>
         <translation>Plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Simple random</source>
         <translation>Aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Unit shape</source>
         <translation>Forme de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Point station</source>
         <translation>Station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Square plot</source>
         <translation>Placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Circular plot</source>
         <translation>Placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Line transect</source>
         <translation>Transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="152"/>
+        <location filename="../processing/algorithms/layout.py" line="147"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="158"/>
+        <location filename="../processing/algorithms/layout.py" line="153"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
     </message>
@@ -3065,332 +3070,332 @@ Une base de sondage en coordonnées géographiques est projetée dans la zone UT
         <translation type="obsolete">Garder chaque unité entièrement dans sa strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="169"/>
+        <location filename="../processing/algorithms/layout.py" line="164"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="175"/>
+        <location filename="../processing/algorithms/layout.py" line="170"/>
         <source>Reserve units per stratum</source>
         <translation>Unités de réserve par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="181"/>
+        <location filename="../processing/algorithms/layout.py" line="176"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="182"/>
+        <location filename="../processing/algorithms/layout.py" line="177"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="182"/>
+        <location filename="../processing/algorithms/layout.py" line="177"/>
         <source>GPX files (*.gpx)</source>
         <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="196"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
+        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="223"/>
         <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
-        <translation>Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
+        <translation type="obsolete">Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="241"/>
+        <location filename="../processing/algorithms/layout.py" line="213"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="241"/>
+        <location filename="../processing/algorithms/layout.py" line="213"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="255"/>
+        <location filename="../processing/algorithms/layout.py" line="228"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="259"/>
+        <location filename="../processing/algorithms/layout.py" line="232"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="274"/>
+        <location filename="../processing/algorithms/layout.py" line="279"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="277"/>
+        <location filename="../processing/algorithms/layout.py" line="245"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="291"/>
+        <location filename="../processing/algorithms/layout.py" line="283"/>
         <source>the frame</source>
         <translation>la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="291"/>
+        <location filename="../processing/algorithms/layout.py" line="283"/>
         <source>stratum {key}</source>
         <translation>strate {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="333"/>
+        <location filename="../processing/algorithms/layout.py" line="325"/>
         <source>Sample-unit layout</source>
         <translation>Disposition des unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="449"/>
+        <location filename="../processing/algorithms/layout.py" line="441"/>
         <source>primary units</source>
         <translation>unités principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="449"/>
+        <location filename="../processing/algorithms/layout.py" line="441"/>
         <source>reserve units</source>
         <translation>unités de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="337"/>
+        <location filename="../processing/algorithms/layout.py" line="329"/>
         <source>strata</source>
         <translation>strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="337"/>
+        <location filename="../processing/algorithms/layout.py" line="329"/>
         <source>design</source>
         <translation>plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="343"/>
+        <location filename="../processing/algorithms/layout.py" line="335"/>
         <source>Replacing units in the field</source>
         <translation>Remplacer des unités sur le terrain</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
+        <location filename="../processing/algorithms/layout.py" line="336"/>
         <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
         <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="350"/>
+        <location filename="../processing/algorithms/layout.py" line="342"/>
         <source>Units per stratum</source>
         <translation>Unités par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Stratum</source>
         <translation>Strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Area (ha)</source>
         <translation>Surface (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Effective area (ha)</source>
         <translation>Surface effective (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Units asked</source>
         <translation>Unités demandées</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Primary</source>
         <translation>Principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="353"/>
+        <location filename="../processing/algorithms/layout.py" line="345"/>
         <source>Reserve</source>
         <translation>Réserves</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="353"/>
+        <location filename="../processing/algorithms/layout.py" line="345"/>
         <source>incl_p</source>
         <translation>incl_p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="353"/>
+        <location filename="../processing/algorithms/layout.py" line="345"/>
         <source>weight</source>
         <translation>weight</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="355"/>
+        <location filename="../processing/algorithms/layout.py" line="347"/>
         <source>Grid spacing (m)</source>
         <translation>Pas de la grille (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="355"/>
+        <location filename="../processing/algorithms/layout.py" line="347"/>
         <source>Grid rotation (°)</source>
         <translation>Rotation de la grille (°)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="358"/>
+        <location filename="../processing/algorithms/layout.py" line="350"/>
         <source>frame</source>
         <translation>base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="365"/>
+        <location filename="../processing/algorithms/layout.py" line="357"/>
         <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
         <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="365"/>
+        <location filename="../processing/algorithms/layout.py" line="357"/>
         <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
         <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="381"/>
+        <location filename="../processing/algorithms/layout.py" line="373"/>
         <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
         <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="388"/>
+        <location filename="../processing/algorithms/layout.py" line="380"/>
         <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
         <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="392"/>
+        <location filename="../processing/algorithms/layout.py" line="384"/>
         <source>Map</source>
         <translation>Carte</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="393"/>
+        <location filename="../processing/algorithms/layout.py" line="385"/>
         <source>Strata (filled), primary units (dark) and reserve units (light)</source>
         <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="394"/>
+        <location filename="../processing/algorithms/layout.py" line="386"/>
         <source>Method</source>
         <translation>Méthode</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="398"/>
+        <location filename="../processing/algorithms/layout.py" line="390"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Frame (FRAME)</source>
         <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Stratum field (STRATUM_FIELD)</source>
         <translation>Champ de strate (STRATUM_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>(none: one stratum)</source>
         <translation>(aucun : une seule strate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Units per stratum field (N_FIELD)</source>
         <translation>Champ d'unités par strate (N_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>(none)</source>
         <translation>(aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Total units (N_UNITS)</source>
         <translation>Total d'unités (N_UNITS)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>(not used)</source>
         <translation>(non utilisé)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Design (DESIGN)</source>
         <translation>Plan (DESIGN)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Unit shape (SHAPE)</source>
         <translation>Forme de l'unité (SHAPE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Unit size (SIZE, m)</source>
         <translation>Taille de l'unité (SIZE, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Bearing (BEARING, degrees)</source>
         <translation>Azimut (BEARING, degrés)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>random</source>
         <translation>aléatoire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Keep inside (INSIDE)</source>
         <translation>Garder à l'intérieur (INSIDE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>yes</source>
         <translation>oui</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>no</source>
         <translation>non</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Minimum spacing (MIN_SPACING, m)</source>
         <translation>Espacement minimal (MIN_SPACING, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Reserves per stratum (RESERVE)</source>
         <translation>Réserves par strate (RESERVE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Seed (SEED)</source>
         <translation>Graine (SEED)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>CRS of the computation and the output</source>
         <translation>SCR du calcul et de la sortie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="419"/>
+        <location filename="../processing/algorithms/layout.py" line="411"/>
         <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
         <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="421"/>
+        <location filename="../processing/algorithms/layout.py" line="413"/>
         <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
         <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="423"/>
+        <location filename="../processing/algorithms/layout.py" line="415"/>
         <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
         <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="430"/>
+        <location filename="../processing/algorithms/layout.py" line="422"/>
         <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
         <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="74"/>
+        <location filename="../processing/algorithms/layout.py" line="69"/>
         <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -3431,12 +3436,12 @@ Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de 
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="164"/>
+        <location filename="../processing/algorithms/layout.py" line="159"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
         <translation>Garder chaque unité entièrement dans sa strate (désactivé : échantillonnage « plus »)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="371"/>
+        <location filename="../processing/algorithms/layout.py" line="363"/>
         <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
         <translation>Échantillonnage « plus » : les centres ont été tirés sur chaque strate agrandie de {r} m (la portée de l'unité), si bien que les unités proches du bord le dépassent, et certains centres sont hors de leur strate. N'inventoriez que la partie de chaque unité située dans sa propre strate et ne comptez que les animaux qui s'y trouvent (la carte montre les strates) ; une unité qui n'atteint aucune partie de sa strate compte 0. Ne pénétrez jamais dans un terrain exclu ou dangereux pour atteindre un centre : inventoriez la partie située dans la strate depuis l'intérieur de celle-ci. La surface effective est la surface agrandie, et plotwise:estimate y étend les comptages (Gregoire &amp; Valentine 2008, ch. 10).</translation>
     </message>
@@ -3606,22 +3611,151 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
     <message>
         <location filename="../processing/algorithms/occupancy.py" line="137"/>
         <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Choose existing fields.</source>
-        <translation>La couche « {layer} » n'a pas de champ {fields} ({param}). Choisissez des champs existants.</translation>
+        <translation type="obsolete">La couche « {layer} » n'a pas de champ {fields} ({param}). Choisissez des champs existants.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="165"/>
+        <location filename="../processing/algorithms/occupancy.py" line="155"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="185"/>
+        <location filename="../processing/algorithms/occupancy.py" line="175"/>
         <source>(a table: no map)</source>
         <translation>(une table : pas de carte)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="195"/>
+        <location filename="../processing/algorithms/occupancy.py" line="185"/>
         <source>ψ = {psi:.3f} (SE {se}), p = {p:.3f}, naive occupancy {naive:.3f}, {n} sites.</source>
         <translation>ψ = {psi:.3f} (erreur type {se}), p = {p:.3f}, occupation naïve {naive:.3f}, {n} sites.</translation>
+    </message>
+</context>
+<context>
+    <name>Panels</name>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="40"/>
+        <source>Revisit panels for monitoring</source>
+        <translation>Panels de revisite pour le suivi</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="43"/>
+        <source>Assigns the units of a layout to revisit panels for a monitoring programme over several years, and writes the schedule: which units are surveyed in which year.
+
+Sample units: the layout's units (any geometry). Units whose role is reserve get no panel; a reserve that replaces a primary unit takes over the primary's panel and years.
+Panel design: every year (one panel, panel 0, visited every year); rotating panels (PANELS panels, panel p visited in the years start + (p − 1), start + (p − 1) + K, ..., so each unit once every K years); split panels (a core, panel 0, visited every year, plus K rotating panels).
+Rotating panels (K): 2 or more, at most the number of years. Share of units in the core: split panels only, between 0 and 1.
+First year and years: the programme's calendar; at most 50 years.
+Draw-order field (default draw_ord, as the layout writes it): panels follow the draw order within each stratum, in consecutive blocks: the core first, then panel 1, panel 2, ... In a spatially balanced layout every run of consecutive units of the draw order is spread over the stratum (Robertson et al. 2013), so every panel is. Without the field, the order of the features is used, with a warning.
+Stratum field (default stratum): panels are cut within each stratum, so each panel holds every stratum's share.
+Field days per unit visit (0: none): adds field days to the schedule.
+Random seed: only for the check of the panels' spread (the panels themselves follow the draw order).
+
+The layout's design: plotwise:layout records it in the units' design field. A simple random layout (random, random_sep) gives panels that are random parts of it, a systematic grid (grid, grid_ovl) bands, because its draw order runs row by row: both are warned about. Without the field, the check below decides.
+The check: the spread of each panel is measured by the Voronoi measure of Stevens &amp; Olsen (2004) over a fine grid on the convex hull of the units, and compared with random rearrangements of the panels within each stratum. When the panels are not more evenly spread than chance (and not clearly more even than random panels either: a spread measure at least 90% of theirs), a warning says so: the layout was probably simple random (each panel is then a random part of it) or a systematic grid (whose draw order runs row by row, so panels are bands). With few units the check can miss a real balance.
+
+Outputs: the units with panel (0 core or every-year panel, 1..K rotating, empty for reserves) and years (the years the unit is visited, comma-separated); the schedule table (year, panel, n_units, days); an HTML report with the schedule as a chart.
+
+References: Urquhart &amp; Kincaid (1999); McDonald (2003); Robertson et al. (2013); Stevens &amp; Olsen (2004).
+
+Field safety: check every unit's access and safety before sending a team, each year again: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Affecte les unités d'une disposition à des panels de revisite pour un programme de suivi sur plusieurs années, et écrit le calendrier : quelles unités sont inventoriées quelle année.
+
+Unités d'échantillonnage : les unités de la disposition (toute géométrie). Les unités dont le rôle est reserve ne reçoivent aucun panel ; une réserve qui remplace une unité principale reprend le panel et les années de celle-ci.
+Plan de panels : chaque année (un seul panel, le panel 0, visité chaque année) ; panels rotatifs (PANELS panels, le panel p étant visité les années début + (p − 1), début + (p − 1) + K, ..., donc chaque unité est visitée une fois tous les K ans) ; panels partagés (un noyau, le panel 0, visité chaque année, plus K panels rotatifs).
+Panels rotatifs (K) : 2 ou plus, au plus le nombre d'années. Part des unités dans le noyau : panels partagés seulement, entre 0 et 1.
+Première année et années : le calendrier du programme ; au plus 50 ans.
+Champ d'ordre de tirage (draw_ord par défaut, tel que l'écrit la disposition) : les panels suivent l'ordre de tirage au sein de chaque strate, en blocs consécutifs : le noyau d'abord, puis le panel 1, le panel 2, ... Dans une disposition spatialement équilibrée, toute suite d'unités consécutives de l'ordre de tirage est répartie sur la strate (Robertson et al. 2013), donc chaque panel l'est aussi. Sans ce champ, l'ordre des entités est utilisé, avec un avertissement.
+Champ de strate (stratum par défaut) : les panels sont découpés au sein de chaque strate, si bien que chaque panel contient la part de chaque strate.
+Jours de terrain par visite d'unité (0 : aucun) : ajoute les jours de terrain au calendrier.
+Graine aléatoire : seulement pour le contrôle de la répartition des panels (les panels eux-mêmes suivent l'ordre de tirage).
+
+Le plan de la disposition : plotwise:layout l'enregistre dans le champ design des unités. Une disposition aléatoire simple (random, random_sep) donne des panels qui en sont des parties aléatoires, une grille systématique (grid, grid_ovl) des bandes, parce que son ordre de tirage va ligne par ligne : les deux font l'objet d'un avertissement. Sans ce champ, c'est le contrôle ci-dessous qui décide.
+Le contrôle : la répartition de chaque panel est évaluée par la mesure de Voronoï de Stevens &amp; Olsen (2004) sur une grille fine couvrant l'enveloppe convexe des unités, et comparée à des réarrangements aléatoires des panels au sein de chaque strate. Quand les panels ne sont pas répartis plus uniformément que le hasard (ni nettement plus uniformément que des panels aléatoires : une mesure de répartition d'au moins 90 % de la leur), un avertissement le signale : la disposition était probablement aléatoire simple (chaque panel en est alors une partie aléatoire) ou une grille systématique (dont l'ordre de tirage va ligne par ligne, si bien que les panels sont des bandes). Avec peu d'unités, le contrôle peut manquer un équilibre réel.
+
+Sorties : les unités avec panel (0 pour le noyau ou le panel de chaque année, 1..K pour les panels rotatifs, vide pour les réserves) et years (les années où l'unité est visitée, séparées par des virgules) ; la table du calendrier (year, panel, n_units, days) ; un rapport HTML avec le calendrier sous forme de graphique.
+
+Références : Urquhart &amp; Kincaid (1999) ; McDonald (2003) ; Robertson et al. (2013) ; Stevens &amp; Olsen (2004).
+
+Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe, et de nouveau chaque année : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="83"/>
+        <source>Sample units (a layout)</source>
+        <translation>Unités d'échantillonnage (une disposition)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Panel design</source>
+        <translation>Plan de panels</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Every unit every year</source>
+        <translation>Toutes les unités chaque année</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Rotating panels</source>
+        <translation>Panels rotatifs</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Split panels (core + rotating)</source>
+        <translation>Panels partagés (noyau + rotatifs)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="89"/>
+        <source>Rotating panels (K: each unit once every K years)</source>
+        <translation>Panels rotatifs (K : chaque unité une fois tous les K ans)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="92"/>
+        <source>Share of units in the core (split panels)</source>
+        <translation>Part des unités dans le noyau (panels partagés)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="95"/>
+        <source>First year</source>
+        <translation>Première année</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="98"/>
+        <source>Years of the programme</source>
+        <translation>Années du programme</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="101"/>
+        <source>Draw-order field</source>
+        <translation>Champ d'ordre de tirage</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="104"/>
+        <source>Stratum field</source>
+        <translation>Champ de strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="106"/>
+        <source>Field days per unit visit (0: none)</source>
+        <translation>Jours de terrain par visite d'unité (0 : aucun)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="110"/>
+        <source>Units with panels</source>
+        <translation>Unités avec panels</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="111"/>
+        <source>Schedule</source>
+        <translation>Calendrier</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="137"/>
+        <source>Layer &apos;{layer}&apos;: features {ids} have no geometry. Every unit needs its location: remove them or give them a geometry.</source>
+        <translation>Couche « {layer} » : les entités {ids} n'ont pas de géométrie. Chaque unité a besoin de sa position : supprimez-les ou donnez-leur une géométrie.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="158"/>
+        <source>Revisit panels</source>
+        <translation>Panels de revisite</translation>
     </message>
 </context>
 <context>
@@ -3667,60 +3801,70 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="174"/>
+        <location filename="../processing/algorithms/base.py" line="210"/>
         <source>Report written to {path}</source>
         <translation>Rapport écrit dans {path}</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/base.py" line="154"/>
+        <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Its fields are: {available}. Choose one of them.</source>
+        <translation>La couche « {layer} » n'a pas de champ {fields} ({param}). Ses champs sont : {available}. Choisissez-en un.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/base.py" line="162"/>
+        <source>Choose a field of layer &apos;{layer}&apos; for {param}. Its fields are: {available}.</source>
+        <translation>Choisissez un champ de la couche « {layer} » pour {param}. Ses champs sont : {available}.</translation>
     </message>
 </context>
 <context>
     <name>PlotwiseBridge</name>
     <message>
-        <location filename="../processing/bridge.py" line="54"/>
+        <location filename="../processing/bridge.py" line="56"/>
         <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
         <translation>La couche « {layer} » n'a pas de système de coordonnées de référence valide. Définissez son SCR (Propriétés de la couche → Source) et relancez.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="68"/>
+        <location filename="../processing/bridge.py" line="70"/>
         <source>Layer &apos;{layer}&apos; is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
         <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="110"/>
+        <location filename="../processing/bridge.py" line="118"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="119"/>
+        <location filename="../processing/bridge.py" line="415"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="153"/>
+        <location filename="../processing/bridge.py" line="166"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="159"/>
+        <location filename="../processing/bridge.py" line="172"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
         <location filename="../processing/bridge.py" line="182"/>
         <source> and {n} more</source>
-        <translation> et {n} autres</translation>
+        <translation type="obsolete"> et {n} autres</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="283"/>
+        <location filename="../processing/bridge.py" line="342"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="312"/>
+        <location filename="../processing/bridge.py" line="371"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="318"/>
+        <location filename="../processing/bridge.py" line="377"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
@@ -3728,177 +3872,177 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
 <context>
     <name>PlotwiseEngine</name>
     <message>
-        <location filename="../processing/engine/allocation.py" line="49"/>
+        <location filename="../processing/engine/allocation.py" line="50"/>
         <source>stratum area</source>
         <translation>surface de la strate</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="50"/>
+        <location filename="../processing/engine/allocation.py" line="51"/>
         <source>pilot standard deviation</source>
         <translation>écart-type pilote</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="51"/>
+        <location filename="../processing/engine/allocation.py" line="52"/>
         <source>pilot mean count</source>
         <translation>comptage moyen pilote</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="52"/>
+        <location filename="../processing/engine/allocation.py" line="53"/>
         <source>cost per unit</source>
         <translation>coût par unité</translation>
     </message>
     <message>
         <location filename="../processing/engine/occupancy.py" line="76"/>
         <source>{shown} and {more} more</source>
-        <translation>{shown} et {more} autres</translation>
+        <translation type="obsolete">{shown} et {more} autres</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="435"/>
+        <location filename="../processing/engine/allocation.py" line="433"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos; is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
         <translation>Le champ de strate « {field} » de la couche « {layer} » est vide (NULL) pour la ou les entités {ids}. Donnez un identifiant à chaque strate, ou retirez ces entités de la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="453"/>
+        <location filename="../processing/engine/allocation.py" line="451"/>
         <source>Features {ids} of layer &apos;{layer}&apos; carry the same stratum id {value} in field &apos;{field}&apos;, so each would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Les entités {ids} de la couche « {layer} » portent le même identifiant de strate {value} dans le champ « {field} » : chacune recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="461"/>
+        <location filename="../processing/engine/allocation.py" line="459"/>
         <source>Several stratum ids in field &apos;{field}&apos; of layer &apos;{layer}&apos; are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Plusieurs identifiants de strate du champ « {field} » de la couche « {layer} » sont portés par plus d'une entité : {value} (entités {ids}) et {more} autre(s) identifiant(s) ({others}) ; chacune de ces entités recevrait sa propre allocation. Regroupez d'abord les strates par « {field} » (outil Regrouper de l'hôte ; recalculez ensuite le champ de surface, ou laissez AREA_FIELD vide pour utiliser la surface des polygones), ou donnez à chaque entité son propre identifiant.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="482"/>
+        <location filename="../processing/engine/allocation.py" line="480"/>
         <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
         <translation>Valeur NULL ou négative ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur positive ou nulle pour chaque strate, ou retirez ces strates de la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="487"/>
+        <location filename="../processing/engine/allocation.py" line="485"/>
         <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
         <translation>Valeur NULL, négative ou nulle ({name}) pour la ou les entités de strate {shown}. Saisissez une valeur strictement positive pour chaque strate, ou retirez ces strates de la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="532"/>
+        <location filename="../processing/engine/allocation.py" line="530"/>
         <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
         <translation>Méthode d'allocation inconnue {method!r} ; utilisez l'une de : {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="537"/>
+        <location filename="../processing/engine/allocation.py" line="535"/>
         <source>The strata layer has no features. Run the stratification first.</source>
         <translation>La couche des strates n'a aucune entité. Lancez d'abord la stratification.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="543"/>
+        <location filename="../processing/engine/allocation.py" line="541"/>
         <source>The unit area must be a positive number.</source>
         <translation>La surface d'une unité doit être un nombre positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="546"/>
+        <location filename="../processing/engine/allocation.py" line="544"/>
         <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
         <translation>Le minimum par strate doit être d'au moins 1 (2 permet d'estimer la variance de chaque strate).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="557"/>
+        <location filename="../processing/engine/allocation.py" line="555"/>
         <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>La méthode par coût a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="557"/>
+        <location filename="../processing/engine/allocation.py" line="555"/>
         <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>Le budget a besoin d'un coût par unité pour chaque strate : choisissez le champ de coût.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="566"/>
+        <location filename="../processing/engine/allocation.py" line="564"/>
         <source>The fixed cost must be zero or positive.</source>
         <translation>Le coût fixe doit être nul ou positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="604"/>
+        <location filename="../processing/engine/allocation.py" line="602"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
         <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (proportionnelle à la surface).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="608"/>
+        <location filename="../processing/engine/allocation.py" line="606"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
         <translation>Pas d'écarts-types pilotes : l'allocation suppose des écarts-types égaux dans toutes les strates (surface / racine carrée du coût).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="612"/>
+        <location filename="../processing/engine/allocation.py" line="610"/>
         <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
         <translation>Tous les écarts-types pilotes sont nuls : l'allocation proportionnelle est utilisée à la place.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="617"/>
+        <location filename="../processing/engine/allocation.py" line="615"/>
         <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
         <translation>Valeur nulle ({name}) pour la ou les entités de strate {shown} : elles ne reçoivent que le minimum de {minimum} unité(s). Un pilote sans variation reflète rarement la réalité ; vérifiez-le.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="580"/>
+        <location filename="../processing/engine/allocation.py" line="578"/>
         <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
         <translation>La ou les entités de strate {shown} sont plus petites qu'une unité d'échantillonnage de {unit_area:g}. Fusionnez-les avec une voisine ou utilisez une surface d'unité plus petite.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="590"/>
+        <location filename="../processing/engine/allocation.py" line="588"/>
         <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
         <translation>La ou les entités de strate {shown} contiennent moins de {minimum} unités : elles reçoivent toutes les unités qui y tiennent.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="569"/>
+        <location filename="../processing/engine/allocation.py" line="567"/>
         <source>A target CV is set: the budget is not used.</source>
         <translation>Un CV cible est fixé : le budget n'est pas utilisé.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="630"/>
+        <location filename="../processing/engine/allocation.py" line="628"/>
         <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
         <translation>Le budget {budget:g} est inférieur au minimum de {minimum:g} (coût fixe {fixed_cost:g} plus {per_stratum} unité(s) dans chaque strate à son coût). Augmentez le budget ou baissez le minimum par strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="639"/>
+        <location filename="../processing/engine/allocation.py" line="637"/>
         <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
         <translation>Le budget dépasse le coût de toutes les unités qui tiennent ({maximum:g}) : toutes les unités sont prises.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="650"/>
+        <location filename="../processing/engine/allocation.py" line="648"/>
         <source>Give a total number of units, a budget (with costs) or a target CV.</source>
         <translation>Indiquez un nombre total d'unités, un budget (avec des coûts) ou un CV cible.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="654"/>
+        <location filename="../processing/engine/allocation.py" line="652"/>
         <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
         <translation>Le total de {total} unités est inférieur au minimum de {minimum} ({per_stratum} par strate sur {n_strata} strates). Augmentez le total ou baissez le minimum.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="660"/>
+        <location filename="../processing/engine/allocation.py" line="658"/>
         <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
         <translation>Le total de {total} unités dépasse les {fit} unités de {unit_area:g} qui tiennent dans les strates. Baissez le total ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="673"/>
+        <location filename="../processing/engine/allocation.py" line="671"/>
         <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
         <translation>La ou les entités de strate {shown} ne reçoivent qu'une unité : leur variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="679"/>
+        <location filename="../processing/engine/allocation.py" line="677"/>
         <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
         <translation>La ou les entités de strate {shown} sont échantillonnées entièrement (toutes les unités qui y tiennent).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="684"/>
+        <location filename="../processing/engine/allocation.py" line="682"/>
         <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
         <translation>Valeur nulle ({name}) dans la ou les entités de strate {shown} : leur CV n'est pas défini.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="782"/>
+        <location filename="../processing/engine/allocation.py" line="780"/>
         <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
         <translation>Un CV cible a besoin de l'écart-type pilote et du comptage moyen pilote par unité : choisissez le champ d'écart-type et le champ de moyenne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="788"/>
+        <location filename="../processing/engine/allocation.py" line="786"/>
         <source>The {name} is zero in every stratum: no CV can be computed.</source>
         <translation>Valeur nulle ({name}) dans toutes les strates : aucun CV ne peut être calculé.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="799"/>
+        <location filename="../processing/engine/allocation.py" line="797"/>
         <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
         <translation>Le CV cible de {target_cv:.3g} ne peut pas être atteint : même les {fit} unités qui tiennent donnent un CV attendu de {cv:.3g}. Acceptez un CV d'au moins {cv:.3g}, ou utilisez des unités plus petites.</translation>
     </message>
@@ -3983,7 +4127,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Les strates {ids} ne contiennent aucun centre de cellule de la surface de densité dans la base de sondage. Retirez-les, fusionnez-les avec une voisine, ou utilisez une surface plus fine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="207"/>
+        <location filename="../processing/engine/layout.py" line="209"/>
         <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
         <translation>SHAPE doit valoir 0 (point), 1 (carré), 2 (cercle) ou 3 (transect linéaire).</translation>
     </message>
@@ -4043,7 +4187,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Le plan « {design} » a besoin de strates : indiquez la couche STRATA.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="74"/>
+        <location filename="../processing/engine/layout.py" line="76"/>
         <source>simple random</source>
         <translation>aléatoire simple</translation>
     </message>
@@ -4058,12 +4202,12 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation type="obsolete">stratifié Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="74"/>
+        <location filename="../processing/engine/layout.py" line="76"/>
         <source>systematic grid</source>
         <translation>grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="74"/>
+        <location filename="../processing/engine/layout.py" line="76"/>
         <source>spatially balanced</source>
         <translation>spatialement équilibré</translation>
     </message>
@@ -4118,102 +4262,102 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>La plage d'unités contient plus de 20 valeurs ; donnez-en au plus 20.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/geometry.py" line="211"/>
+        <location filename="../processing/engine/listing.py" line="19"/>
         <source>{shown} … ({n} in all)</source>
         <translation>{shown} … ({n} en tout)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="394"/>
+        <location filename="../processing/engine/estimation.py" line="378"/>
         <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
         <translation>Le champ {count_name} contient des valeurs qui ne sont pas des nombres pour les unités {ids}. Saisissez un comptage entier (0 si l'unité a été inventoriée sans rien voir) ou laissez le champ vide (NULL) pour les unités non inventoriées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="405"/>
+        <location filename="../processing/engine/estimation.py" line="389"/>
         <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
         <translation>Le champ {count_name} contient des comptages négatifs ou infinis pour les unités {ids}. Les comptages doivent valoir 0 ou plus ; corrigez-les, ou laissez le champ vide (NULL) si l'unité n'a pas été inventoriée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="578"/>
+        <location filename="../processing/engine/estimation.py" line="562"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
         <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones couvrent {area:.4g} {unit} qu'aucune strate ne couvre, si bien que l'estimation porterait sans le dire sur une base de sondage plus petite. Donnez à chaque polygone l'identifiant de sa strate, supprimez les polygones qui ne font pas partie de la base de sondage, ou choisissez d'écarter les strates sans unité inventoriée (la base de sondage se réduit alors).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="587"/>
+        <location filename="../processing/engine/estimation.py" line="571"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
         <translation>Couche « {layer} » : le champ d'identifiant de strate « {field} » est vide (NULL) pour le ou les identifiants d'entité {ids}. Ces polygones ont été écartés, et la base de sondage a diminué des {area:.4g} {unit} qu'aucune strate ne couvre. Pour les garder dans la base de sondage, donnez à chaque polygone l'identifiant de sa strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="550"/>
+        <location filename="../processing/engine/estimation.py" line="534"/>
         <source>Layer &apos;{layer}&apos;: no polygon has a stratum id in the field &apos;{field}&apos;. Fill in the stratum ids, or choose the field that holds them.</source>
         <translation>Couche « {layer} » : aucun polygone n'a d'identifiant de strate dans le champ « {field} ». Renseignez les identifiants de strate, ou choisissez le champ qui les contient.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="607"/>
+        <location filename="../processing/engine/estimation.py" line="591"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
         <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) seraient comptés dans plus d'une strate, ce qui gonfle la surface de la base de sondage et l'abondance. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas : chaque parcelle de terrain appartient à une seule strate (découpez chaque chevauchement de toutes les strates sauf une, ou redessinez les limites communes).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="616"/>
+        <location filename="../processing/engine/estimation.py" line="600"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
         <translation>Couche « {layer} » : les strates se chevauchent : {pairs}. Au total, {area:.4g} {unit} ({percent:.3g} % de la surface couverte par les strates, {covered:.4g} {unit}) sont comptés dans plus d'une strate, si bien que la surface de la base de sondage et l'abondance sont légèrement trop grandes. Corrigez les polygones des strates pour qu'ils ne se chevauchent pas (alignez les limites communes par accrochage, ou découpez chaque chevauchement de toutes les strates sauf une).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="678"/>
+        <location filename="../processing/engine/estimation.py" line="662"/>
         <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
         <translation>Le niveau de confiance doit être compris entre 0 et 1 (reçu {confidence}) ; utilisez p. ex. 0.95.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="682"/>
+        <location filename="../processing/engine/estimation.py" line="666"/>
         <source>Unknown interval method {method!r}; use one of {methods}.</source>
         <translation>Méthode d'intervalle inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="686"/>
+        <location filename="../processing/engine/estimation.py" line="670"/>
         <source>Unknown variance method {method!r}; use one of {methods}.</source>
         <translation>Méthode de variance inconnue {method!r} ; utilisez l'une de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="690"/>
+        <location filename="../processing/engine/estimation.py" line="674"/>
         <source>The detection probability must lie in (0, 1] (got {p}).</source>
         <translation>La probabilité de détection doit être dans ]0, 1] (reçu {p}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="693"/>
+        <location filename="../processing/engine/estimation.py" line="677"/>
         <source>The standard error of the detection probability must be 0 or more.</source>
         <translation>L'erreur type de la probabilité de détection doit valoir 0 ou plus.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="712"/>
+        <location filename="../processing/engine/estimation.py" line="696"/>
         <source>unit_ids must have one id per unit.</source>
         <translation>unit_ids doit avoir un identifiant par unité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="716"/>
+        <location filename="../processing/engine/estimation.py" line="700"/>
         <source>counts, unit_areas and strata must have one value per unit.</source>
         <translation>counts, unit_areas et strata doivent avoir une valeur par unité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="755"/>
+        <location filename="../processing/engine/estimation.py" line="739"/>
         <source>Strata {ids} have no area. Check the strata layer&apos;s geometries.</source>
         <translation>Les strates {ids} n'ont pas de surface. Vérifiez les géométries de la couche des strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="768"/>
+        <location filename="../processing/engine/estimation.py" line="752"/>
         <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
         <translation>Les unités {ids} n'ont pas de strate (le champ de strate est vide). Renseignez leur strate, ou omettez le champ de strate pour traiter la base de sondage comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="779"/>
+        <location filename="../processing/engine/estimation.py" line="763"/>
         <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
         <translation>Les unités {ids} ont des identifiants de strate ({names}) absents de la couche des strates. Vérifiez le champ de strate des unités et le champ d'identifiant de la couche des strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="725"/>
+        <location filename="../processing/engine/estimation.py" line="709"/>
         <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
         <translation>{n} unité(s) n'ont pas de comptage et sont traitées comme non inventoriées (non-réponse) : {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="731"/>
+        <location filename="../processing/engine/estimation.py" line="715"/>
         <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
         <translation>Aucune unité n'a de comptage : rien ne peut être estimé. Saisissez les comptages des unités inventoriées (0 si rien n'a été vu) dans le champ de comptage.</translation>
     </message>
@@ -4223,37 +4367,37 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation type="obsolete">Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="828"/>
+        <location filename="../processing/engine/estimation.py" line="812"/>
         <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
         <translation>Les données de présence doivent valoir 0 ou 1 ; les unités {ids} contiennent d'autres valeurs. Utilisez les comptages sans l'option de présence, ou recodez le champ.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="836"/>
+        <location filename="../processing/engine/estimation.py" line="820"/>
         <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
         <translation>La probabilité de détection n'a pas été appliquée aux données de présence : diviser une proportion d'unités occupées par p n'est pas une correction d'occupation, qui demande des visites répétées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="797"/>
+        <location filename="../processing/engine/estimation.py" line="781"/>
         <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
         <translation>Aucune unité des strates {ids} n'a été inventoriée : leur abondance ne peut pas être estimée. Inventoriez-y des unités, ou choisissez d'exclure ces strates (l'estimation couvre alors une base de sondage plus petite).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="804"/>
+        <location filename="../processing/engine/estimation.py" line="788"/>
         <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
         <translation>Les strates {ids} n'avaient aucune unité inventoriée et ont été exclues : la base de sondage a diminué de {dropped_area:.6g} unités de surface, et l'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="912"/>
+        <location filename="../processing/engine/estimation.py" line="896"/>
         <source>The local neighbourhood variance needs the positions of the units.</source>
         <translation>La variance de voisinage local a besoin des positions des unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="917"/>
+        <location filename="../processing/engine/estimation.py" line="901"/>
         <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
         <translation>Les unités {ids} n'ont pas de position : la variance de voisinage local ne peut pas les utiliser. Donnez leurs emplacements, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1016"/>
+        <location filename="../processing/engine/estimation.py" line="1000"/>
         <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
         <translation>Dans les strates {ids}, la surface inventoriée dépasse la surface de la strate. Vérifiez les surfaces des unités et l'unité de surface, ou désactivez la correction de population finie.</translation>
     </message>
@@ -4268,7 +4412,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation type="obsolete">Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1090"/>
+        <location filename="../processing/engine/estimation.py" line="1074"/>
         <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
         <translation>La seule strate n'a qu'une unité inventoriée : aucune variance, erreur type ou intervalle ne peut être estimé. Inventoriez au moins deux unités.</translation>
     </message>
@@ -4278,7 +4422,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation type="obsolete">Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1454"/>
+        <location filename="../processing/engine/estimation.py" line="1438"/>
         <source>The bootstrap needs a random generator (rng).</source>
         <translation>Le bootstrap a besoin d'un générateur aléatoire (rng).</translation>
     </message>
@@ -4293,12 +4437,12 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation type="obsolete">Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1219"/>
+        <location filename="../processing/engine/estimation.py" line="1203"/>
         <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability&apos;s own CV is {cv_p:.3g}. Improve the detection study first.</source>
         <translation>Le CV cible {target_cv:.3g} ne peut pas être atteint avec plus d'unités : le CV propre de la probabilité de détection est de {cv_p:.3g}. Améliorez d'abord l'étude de détection.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1231"/>
+        <location filename="../processing/engine/estimation.py" line="1215"/>
         <source>No variation was observed, so the next survey&apos;s sample sizes are set to the minimum of 2 per stratum.</source>
         <translation>Aucune variation n'a été observée : les tailles d'échantillon du prochain inventaire sont fixées au minimum de 2 par strate.</translation>
     </message>
@@ -4328,297 +4472,297 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Il ne reste rien de la base de sondage après la zone tampon intérieure (EDGE_BUFFER = {edge_buffer:g} m) : les {hectares:.4g} ha restants se trouvent tous à moins de cette distance de la limite de la zone d'étude (emprise de la zone d'étude {width:.0f} m x {height:.0f} m). Utilisez un EDGE_BUFFER plus petit.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/geometry.py" line="203"/>
+        <location filename="../processing/engine/geometry.py" line="221"/>
         <source>{first} and {second} ({area:.4g} {unit})</source>
         <translation>{first} et {second} ({area:.4g} {unit})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/halton.py" line="209"/>
+        <location filename="../processing/engine/halton.py" line="210"/>
         <source>No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a sample unit. Check the frame for slivers.</source>
         <translation>Aucun point n'a pu être tiré dans une surface de {area:.3g} m² : elle est trop mince pour accueillir une unité d'échantillonnage. Cherchez les liserés dans la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="204"/>
+        <location filename="../processing/engine/layout.py" line="206"/>
         <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
         <translation>DESIGN doit valoir 0 (aléatoire simple), 1 (grille systématique) ou 2 (spatialement équilibré).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="84"/>
+        <location filename="../processing/engine/layout.py" line="86"/>
         <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité ponctuelle ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="85"/>
+        <location filename="../processing/engine/layout.py" line="87"/>
         <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité carrée ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="86"/>
+        <location filename="../processing/engine/layout.py" line="88"/>
         <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité circulaire ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="87"/>
+        <location filename="../processing/engine/layout.py" line="89"/>
         <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
         <translation>SIZE doit dépasser 0 m pour une unité linéaire ; il vaut {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="212"/>
+        <location filename="../processing/engine/layout.py" line="214"/>
         <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
         <translation>BEARING doit valoir -1 (aléatoire) ou être compris entre 0 et 360 degrés ; il vaut {bearing}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="216"/>
+        <location filename="../processing/engine/layout.py" line="218"/>
         <source>MIN_SPACING must be 0 or more metres.</source>
         <translation>MIN_SPACING doit valoir 0 mètre ou plus.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="218"/>
+        <location filename="../processing/engine/layout.py" line="220"/>
         <source>RESERVE must be 0 or a positive whole number.</source>
         <translation>RESERVE doit valoir 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="408"/>
+        <location filename="../processing/engine/layout.py" line="410"/>
         <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
         <translation>{field} est vide (NULL) ou n'est pas un nombre pour la ou les entités {ids}. Donnez à chaque strate un nombre entier d'unités, ou laissez N_FIELD vide pour utiliser N_UNITS.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="415"/>
+        <location filename="../processing/engine/layout.py" line="417"/>
         <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
         <translation>{field} est négatif pour la ou les entités {ids}. Utilisez 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="422"/>
+        <location filename="../processing/engine/layout.py" line="424"/>
         <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
         <translation>{field} n'est pas un nombre entier pour la ou les entités {ids}. Arrondissez d'abord l'allocation à des unités entières.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="506"/>
+        <location filename="../processing/engine/layout.py" line="476"/>
         <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
         <translation>Indiquez N_FIELD (unités par strate) ou N_UNITS (un total d'au moins 1).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="522"/>
+        <location filename="../processing/engine/layout.py" line="524"/>
         <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
         <translation>Une géométrie invalide a été réparée pour la ou les entités {ids} ; vérifiez leurs contours.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="526"/>
+        <location filename="../processing/engine/layout.py" line="528"/>
         <source>Empty or zero-area feature(s) {ids} were skipped.</source>
         <translation>Les entités vides ou de surface nulle {ids} ont été ignorées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="529"/>
+        <location filename="../processing/engine/layout.py" line="531"/>
         <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
         <translation>Les entités {ids} ont moins de {area:g} m² de surface (des liserés, laissés par exemple par une superposition ou une reprojection) et ont été écartées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="535"/>
+        <location filename="../processing/engine/layout.py" line="536"/>
         <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
         <translation>La base de sondage n'a aucun polygone de {area:g} m² ou plus : chaque entité est vide, de surface nulle ou n'est qu'un liseré.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="546"/>
+        <location filename="../processing/engine/layout.py" line="567"/>
         <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
         <translation>{field} est vide (NULL) pour l'entité {fid}. Donnez-lui une valeur de strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="574"/>
+        <location filename="../processing/engine/layout.py" line="621"/>
         <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
         <translation>Les entités de la base de sondage (sans champ de strate) portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités ou choisissez un champ de strate pour que chaque entité soit une strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="574"/>
+        <location filename="../processing/engine/layout.py" line="621"/>
         <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
         <translation>Les entités de la strate {key} portent des valeurs de {n_field} différentes ({values}) (entités {ids}). {n_field} est le nombre d'unités de toute la strate : donnez la même valeur à ses entités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="591"/>
+        <location filename="../processing/engine/layout.py" line="606"/>
         <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
         <translation>N_UNITS = {n_units} fait moins de {minimum} par strate pour {n_strata} strates ; chaque strate en reçoit {minimum} ({total} unités).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="90"/>
+        <location filename="../processing/engine/layout.py" line="92"/>
         <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="95"/>
+        <location filename="../processing/engine/layout.py" line="97"/>
         <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="100"/>
+        <location filename="../processing/engine/layout.py" line="102"/>
         <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="105"/>
+        <location filename="../processing/engine/layout.py" line="107"/>
         <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La base de sondage est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="110"/>
+        <location filename="../processing/engine/layout.py" line="112"/>
         <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité ponctuelle de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="115"/>
+        <location filename="../processing/engine/layout.py" line="117"/>
         <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité carrée de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="120"/>
+        <location filename="../processing/engine/layout.py" line="122"/>
         <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité circulaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="125"/>
+        <location filename="../processing/engine/layout.py" line="127"/>
         <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="607"/>
+        <location filename="../processing/engine/layout.py" line="667"/>
         <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="607"/>
+        <location filename="../processing/engine/layout.py" line="667"/>
         <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="617"/>
+        <location filename="../processing/engine/layout.py" line="678"/>
         <source>The frame gets no units; the estimate cannot speak for it.</source>
         <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="617"/>
+        <location filename="../processing/engine/layout.py" line="678"/>
         <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
         <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="622"/>
+        <location filename="../processing/engine/layout.py" line="683"/>
         <source>The frame gets one unit only; its variance cannot be estimated.</source>
         <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="622"/>
+        <location filename="../processing/engine/layout.py" line="683"/>
         <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
         <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="647"/>
+        <location filename="../processing/engine/layout.py" line="771"/>
         <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
         <translation>Des strates se chevauchent ({pairs}) : un lieu n'appartient qu'à une strate, et les unités d'une zone commune seraient tirées dans les deux strates et pondérées deux fois. Rendez les polygones des strates disjoints (par exemple avec les outils Différence ou Union de l'hôte) et relancez.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="651"/>
+        <location filename="../processing/engine/layout.py" line="775"/>
         <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
         <translation>Des strates se chevauchent légèrement ({pairs}) ; les unités qui s'y trouvent appartiennent aux deux. Rendez les polygones des strates disjoints si ce n'est pas qu'une imprécision de numérisation.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="736"/>
+        <location filename="../processing/engine/layout.py" line="861"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="736"/>
+        <location filename="../processing/engine/layout.py" line="861"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="836"/>
+        <location filename="../processing/engine/layout.py" line="963"/>
         <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
         <translation>Une grille systématique de pas {spacing:.3g} m sur une surface de {area:,.1f} m² étalée sur {width:,.0f} m x {height:,.0f} m demanderait {count:,} points candidats. La surface est un liseré ou bien trop petite pour le nombre d'unités : cherchez les liserés dans la base de sondage, demandez moins d'unités ou choisissez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="905"/>
+        <location filename="../processing/engine/layout.py" line="1009"/>
         <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="905"/>
+        <location filename="../processing/engine/layout.py" line="1009"/>
         <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="1028"/>
         <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="1028"/>
         <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="936"/>
+        <location filename="../processing/engine/layout.py" line="1040"/>
         <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="936"/>
+        <location filename="../processing/engine/layout.py" line="1040"/>
         <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="944"/>
+        <location filename="../processing/engine/layout.py" line="1049"/>
         <source>The frame has only {n} of {r} reserve units.</source>
         <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="944"/>
+        <location filename="../processing/engine/layout.py" line="1049"/>
         <source>Stratum {key} has only {n} of {r} reserve units.</source>
         <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="145"/>
+        <location filename="../processing/engine/layout.py" line="147"/>
         <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>début du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="148"/>
+        <location filename="../processing/engine/layout.py" line="150"/>
         <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>début du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="151"/>
+        <location filename="../processing/engine/layout.py" line="153"/>
         <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin du transect {unit} (principal, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="154"/>
+        <location filename="../processing/engine/layout.py" line="156"/>
         <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin du transect {unit} (de réserve, strate {stratum}, azimut {bearing:.0f} deg)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="137"/>
+        <location filename="../processing/engine/layout.py" line="139"/>
         <source>point unit {unit} (primary, stratum {stratum})</source>
         <translation>unité ponctuelle {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="138"/>
+        <location filename="../processing/engine/layout.py" line="140"/>
         <source>point unit {unit} (reserve, stratum {stratum})</source>
         <translation>unité ponctuelle {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="139"/>
+        <location filename="../processing/engine/layout.py" line="141"/>
         <source>square unit {unit} (primary, stratum {stratum})</source>
         <translation>unité carrée {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="140"/>
+        <location filename="../processing/engine/layout.py" line="142"/>
         <source>square unit {unit} (reserve, stratum {stratum})</source>
         <translation>unité carrée {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="141"/>
+        <location filename="../processing/engine/layout.py" line="143"/>
         <source>circle unit {unit} (primary, stratum {stratum})</source>
         <translation>unité circulaire {unit} (principale, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="142"/>
+        <location filename="../processing/engine/layout.py" line="144"/>
         <source>circle unit {unit} (reserve, stratum {stratum})</source>
         <translation>unité circulaire {unit} (de réserve, strate {stratum})</translation>
     </message>
@@ -4638,162 +4782,162 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>La base de sondage ne contient aucune cellule raster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1261"/>
+        <location filename="../processing/engine/stratification.py" line="1401"/>
         <source>Covariate &apos;{name}&apos; is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
         <translation>La covariable « {name} » est constante ({value:g}) sur la base de sondage : elle ne peut pas définir de strates. Utilisez une autre covariable, ou vérifiez la base de sondage et le raster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1302"/>
+        <location filename="../processing/engine/stratification.py" line="1419"/>
         <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
         <translation>METHOD inconnu {method!r} : utilisez 0 (quantiles) à 4 (classes du raster).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1305"/>
+        <location filename="../processing/engine/stratification.py" line="1423"/>
         <source>Ask for at least 2 strata (STRATA).</source>
         <translation>Demandez au moins 2 strates (STRATA).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1306"/>
+        <location filename="../processing/engine/stratification.py" line="1430"/>
         <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
         <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables ({names}). Vérifiez que les rasters couvrent la base de sondage et que leur valeur NoData est juste.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1342"/>
+        <location filename="../processing/engine/stratification.py" line="1483"/>
         <source>Covariate &apos;{name}&apos; takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>La covariable « {name} » ne prend que {n_distinct} valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1356"/>
+        <location filename="../processing/engine/stratification.py" line="1498"/>
         <source>Some boundaries coincide (many cells share the same value of &apos;{name}&apos;); {formed} strata are formed instead of {k}.</source>
         <translation>Certaines limites coïncident (beaucoup de cellules partagent la même valeur de « {name} ») ; {formed} strates sont formées au lieu de {k}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1370"/>
+        <location filename="../processing/engine/stratification.py" line="1514"/>
         <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1375"/>
+        <location filename="../processing/engine/stratification.py" line="1519"/>
         <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes dans un échantillon de {sample_n} cellules, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1386"/>
+        <location filename="../processing/engine/stratification.py" line="1533"/>
         <source>Covariate &apos;{name}&apos; has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host&apos;s reclassify by table tool), or choose another METHOD.</source>
         <translation>La covariable « {name} » a plus de {max_classes} classes (au moins {n_distinct} valeurs distinctes sur la base de sondage) : reclassez-la d'abord en {max_classes} classes ou moins (par exemple avec l'outil de reclassement par table de l'hôte), ou choisissez une autre METHOD.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1403"/>
+        <location filename="../processing/engine/stratification.py" line="1590"/>
         <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
         <translation>{dropped} des {k} strates ne contiennent aucune cellule et ont été retirées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1481"/>
+        <location filename="../processing/engine/stratification.py" line="1684"/>
         <source>{name} class {value}</source>
         <translation>{name} : classe {value}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1484"/>
+        <location filename="../processing/engine/stratification.py" line="1687"/>
         <source>mean {values}</source>
         <translation>moyenne {values}</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="94"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="47"/>
         <source>Covariate &apos;{name}&apos; cannot be read ({error}). Check the file.</source>
         <translation>La covariable « {name} » ne peut pas être lue ({error}). Vérifiez le fichier.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="98"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="51"/>
         <source>Covariate &apos;{name}&apos; has no band {band}.</source>
         <translation>La covariable « {name} » n'a pas de bande {band}.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="199"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="131"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="231"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="163"/>
         <source>The frame has no polygon.</source>
         <translation>La base de sondage n'a aucun polygone.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="275"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="207"/>
         <source>The frame does not overlap covariate &apos;{name}&apos; ({path}). Use a raster that covers the frame, or check both layers&apos; CRS.</source>
         <translation>La base de sondage ne recouvre pas la covariable « {name} » ({path}). Utilisez un raster qui couvre la base de sondage, ou vérifiez le SCR des deux couches.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="441"/>
+        <location filename="../processing/gdal_io/stratum_raster.py" line="16"/>
         <source>Cannot write the stratum raster &apos;{path}&apos;.</source>
         <translation>Impossible d'écrire le raster des strates « {path} ».</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="808"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="124"/>
         <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
         <translation>Avec MIN_AREA = {min_area:g} ha, la fusion des taches plus petites n'a laissé qu'une seule strate : il n'y a plus rien à stratifier. Réduisez MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="815"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="132"/>
         <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
         <translation>{merged} strates n'étaient faites que de taches sous MIN_AREA et ont été fusionnées avec leurs voisines.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="823"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="140"/>
         <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of &apos;{name}&apos; that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
         <translation>La fusion des taches sous MIN_AREA a fait passer des cellules d'une strate à l'autre : la part de la variance de « {name} » expliquée par les strates est tombée de {before:.2f} à {after:.2f}. Un MIN_AREA plus petit garde les strates plus proches des covariables.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="828"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="146"/>
         <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
         <translation>{n} tache(s) couvrant {ha:,.2f} ha restent sous MIN_AREA ({min_area:g} ha) : elles ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData). Retirez ces îlots de la base de sondage, comblez les NoData des covariables, ou réduisez MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="840"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="163"/>
         <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
         <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="867"/>
+        <location filename="../processing/gdal_io/surface.py" line="25"/>
         <source>The density surface &apos;{name}&apos; cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
         <translation>La surface de densité « {name} » ne peut pas être lue par GDAL ({error}). Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="879"/>
+        <location filename="../processing/gdal_io/surface.py" line="37"/>
         <source>The density surface &apos;{name}&apos; does not overlap the sampling frame. Check that both cover the same area.</source>
         <translation>La surface de densité « {name} » ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="888"/>
+        <location filename="../processing/gdal_io/surface.py" line="46"/>
         <source>The density surface &apos;{name}&apos; could not be warped to {crs} ({error}).</source>
         <translation>La surface de densité « {name} » n'a pas pu être reprojetée en {crs} ({error}).</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="102"/>
+        <location filename="../processing/gdal_io/masking.py" line="102"/>
         <source>The mask raster (MASK) &apos;{source}&apos; cannot be opened by GDAL.</source>
         <translation>Le raster de masque (MASK) « {source} » ne peut pas être ouvert par GDAL.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="130"/>
+        <location filename="../processing/gdal_io/masking.py" line="130"/>
         <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
         <translation>Le raster de masque (MASK) demanderait {rows} x {cols} cellules sur la zone d'étude, soit plus de {max_cells:,}. Rééchantillonnez d'abord le raster en cellules plus grossières.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="170"/>
+        <location filename="../processing/gdal_io/masking.py" line="170"/>
         <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
         <translation>Le raster de masque (MASK) ne peut pas être reprojeté dans le SCR de calcul.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="201"/>
+        <location filename="../processing/gdal_io/masking.py" line="201"/>
         <source>GDAL could not turn the masked raster cells into polygons.</source>
         <translation>GDAL n'a pas pu transformer les cellules masquées du raster en polygones.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="242"/>
+        <location filename="../processing/gdal_io/masking.py" line="242"/>
         <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
         <translation>MASK_MIN ({mask_min:g}) est supérieur à MASK_MAX ({mask_max:g}) ; aucune cellule ne pourrait être gardée. Inversez les deux valeurs ou laissez l'une d'elles vide.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="248"/>
+        <location filename="../processing/gdal_io/masking.py" line="248"/>
         <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
         <translation>Le raster de masque (MASK) n'a pas de bande {band} ; il en a {count}.</translation>
     </message>
@@ -4848,167 +4992,167 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>La couche des animaux ne contient aucun animal : il n'y a rien à détecter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="168"/>
+        <location filename="../processing/engine/occupancy.py" line="159"/>
         <source>Layer {layer}: occupancy needs at least 2 occasions (history fields); {n} given. With one visit per site, detection and occupancy cannot be told apart.</source>
         <translation>Couche {layer} : l'occupation demande au moins 2 occasions (champs d'historique) ; {n} indiquée(s). Avec une seule visite par site, la détection et l'occupation ne peuvent pas être distinguées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="178"/>
+        <location filename="../processing/engine/occupancy.py" line="169"/>
         <source>Layer {layer}, history field {field}: sites {ids} hold a value other than 1 (detected), 0 (not detected) or NULL (not surveyed). Correct these values and run again.</source>
         <translation>Couche {layer}, champ d'historique {field} : les sites {ids} contiennent une valeur autre que 1 (détectée), 0 (non détectée) ou NULL (non échantillonné). Corrigez ces valeurs et relancez.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="186"/>
+        <location filename="../processing/engine/occupancy.py" line="177"/>
         <source>Layer {layer}: no site was surveyed on any occasion (every history value is NULL).</source>
         <translation>Couche {layer} : aucun site n'a été échantillonné à aucune occasion (toutes les valeurs d'historique sont NULL).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="190"/>
+        <location filename="../processing/engine/occupancy.py" line="181"/>
         <source>Layer {layer}: the species was not detected at any site, so occupancy and detection cannot be estimated (every history is 0).</source>
         <translation>Couche {layer} : l'espèce n'a été détectée sur aucun site, l'occupation et la détection ne peuvent donc pas être estimées (tous les historiques valent 0).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="199"/>
+        <location filename="../processing/engine/occupancy.py" line="190"/>
         <source>Layer {layer}: {n} sites have an empty (NULL) site id. Give every site an id, or leave SITE_ID_FIELD empty to use the feature ids.</source>
         <translation>Couche {layer} : {n} sites ont un identifiant de site vide (NULL). Donnez un identifiant à chaque site, ou laissez SITE_ID_FIELD vide pour utiliser les identifiants d'entité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="209"/>
+        <location filename="../processing/engine/occupancy.py" line="200"/>
         <source>Layer {layer}: site ids {ids} occur more than once. Each site needs one row holding all its occasions; merge the rows or correct the ids.</source>
         <translation>Couche {layer} : les identifiants de site {ids} apparaissent plus d'une fois. Chaque site demande une seule ligne contenant toutes ses occasions ; fusionnez les lignes ou corrigez les identifiants.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="237"/>
+        <location filename="../processing/engine/occupancy.py" line="228"/>
         <source>Model line {line!r}: write the occupancy terms after psi: and the detection terms after p:, for example psi: elevation p: effort.</source>
         <translation>Ligne de modèle {line!r} : écrivez les termes d'occupation après psi: et les termes de détection après p:, par exemple psi: elevation p: effort.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="256"/>
+        <location filename="../processing/engine/occupancy.py" line="247"/>
         <source>Model line {line!r}: effort varies by occasion and acts on detection only; move it after p:.</source>
         <translation>Ligne de modèle {line!r} : effort varie selon l'occasion et n'agit que sur la détection ; placez-le après p:.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <location filename="../processing/engine/occupancy.py" line="254"/>
         <source>Model line {line!r}: {name} is not a numeric field of the sites layer (give EFFORT_FIELDS to use effort). Use the field names as they are in the layer.</source>
         <translation>Ligne de modèle {line!r} : {name} n'est pas un champ numérique de la couche des sites (indiquez EFFORT_FIELDS pour utiliser effort). Utilisez les noms de champs tels qu'ils figurent dans la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <location filename="../processing/engine/occupancy.py" line="254"/>
         <source>Model line {line!r}: {name} is not a numeric field of the sites layer. Use the field names as they are in the layer.</source>
         <translation>Ligne de modèle {line!r} : {name} n'est pas un champ numérique de la couche des sites. Utilisez les noms de champs tels qu'ils figurent dans la couche.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="299"/>
+        <location filename="../processing/engine/occupancy.py" line="290"/>
         <source>CONFIDENCE must be at least 0.5 and below 1; it is {value}.</source>
         <translation>CONFIDENCE doit valoir au moins 0.5 et moins de 1 ; il vaut {value}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="302"/>
+        <location filename="../processing/engine/occupancy.py" line="293"/>
         <source>TARGET_SE must be 0 (no advice) or more; it is {value}.</source>
         <translation>TARGET_SE doit valoir 0 (pas de conseil) ou plus ; il vaut {value}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="305"/>
+        <location filename="../processing/engine/occupancy.py" line="296"/>
         <source>The number of goodness-of-fit replicates must be 0 or a positive whole number.</source>
         <translation>Le nombre de réplicats du test d'adéquation doit valoir 0 ou un nombre entier positif.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="318"/>
+        <location filename="../processing/engine/occupancy.py" line="309"/>
         <source>A model uses effort but no EFFORT_FIELDS were given.</source>
         <translation>Un modèle utilise effort mais aucun champ EFFORT_FIELDS n'a été indiqué.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="335"/>
+        <location filename="../processing/engine/occupancy.py" line="326"/>
         <source>Layer {layer} has no covariate field {field}.</source>
         <translation>La couche {layer} n'a pas de champ de covariable {field}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="341"/>
+        <location filename="../processing/engine/occupancy.py" line="332"/>
         <source>Layer {layer}, covariate field {field}: surveyed sites {ids} have no number (NULL or text). Fill in the values, leave these sites out, or drop the covariate.</source>
         <translation>Couche {layer}, champ de covariable {field} : les sites échantillonnés {ids} n'ont pas de nombre (NULL ou texte). Renseignez les valeurs, écartez ces sites, ou retirez la covariable.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="347"/>
+        <location filename="../processing/engine/occupancy.py" line="338"/>
         <source>Layer {layer}, covariate field {field}: every surveyed site has the same value ({value:g}), so its effect cannot be estimated. Drop it from the model.</source>
         <translation>Couche {layer}, champ de covariable {field} : tous les sites échantillonnés ont la même valeur ({value:g}), son effet ne peut donc pas être estimé. Retirez-la du modèle.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="356"/>
+        <location filename="../processing/engine/occupancy.py" line="347"/>
         <source>Give one effort field per history field, in the same order: {k} history fields and {e} effort fields.</source>
         <translation>Indiquez un champ d'effort par champ d'historique, dans le même ordre : {k} champs d'historique et {e} champs d'effort.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="371"/>
+        <location filename="../processing/engine/occupancy.py" line="362"/>
         <source>Layer {layer}, effort fields {fields}: surveyed sites {ids} have no effort, or a negative one, on an occasion they were surveyed. Give every survey its effort.</source>
         <translation>Couche {layer}, champs d'effort {fields} : les sites échantillonnés {ids} n'ont pas d'effort, ou un effort négatif, à une occasion où ils ont été échantillonnés. Donnez son effort à chaque visite.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="377"/>
+        <location filename="../processing/engine/occupancy.py" line="368"/>
         <source>Layer {layer}: the effort is the same on every survey, so its effect cannot be estimated. Leave EFFORT_FIELDS empty.</source>
         <translation>Couche {layer} : l'effort est le même à chaque visite, son effet ne peut donc pas être estimé. Laissez EFFORT_FIELDS vide.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="742"/>
+        <location filename="../processing/engine/occupancy.py" line="733"/>
         <source>The search for the maximum stopped after {n} iterations without converging.</source>
         <translation>La recherche du maximum s'est arrêtée après {n} itérations sans converger.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="754"/>
+        <location filename="../processing/engine/occupancy.py" line="745"/>
         <source>The observed information is not positive definite at the maximum: the parameters cannot all be estimated from these data (collinear covariates, or too few detections).</source>
         <translation>L'information observée n'est pas définie positive au maximum : les paramètres ne peuvent pas tous être estimés à partir de ces données (covariables colinéaires, ou trop peu de détections).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1040"/>
+        <location filename="../processing/engine/occupancy.py" line="1031"/>
         <source>The occupancy model ({model}) could not be fitted: {why} No estimate is given. Try fewer covariates, more sites or more occasions.</source>
         <translation>Le modèle d'occupation ({model}) n'a pas pu être ajusté : {why} Aucune estimation n'est donnée. Essayez moins de covariables, plus de sites ou plus d'occasions.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1045"/>
+        <location filename="../processing/engine/occupancy.py" line="1036"/>
         <source>The model {model} could not be fitted and is left out of the comparison: {why}</source>
         <translation>Le modèle {model} n'a pas pu être ajusté et est exclu de la comparaison : {why}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1049"/>
+        <location filename="../processing/engine/occupancy.py" line="1040"/>
         <source>Sites {ids} have no surveyed occasion (every history value NULL) and were left out of the analysis.</source>
         <translation>Les sites {ids} n'ont aucune occasion échantillonnée (toutes les valeurs d'historique NULL) et ont été écartés de l'analyse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1057"/>
+        <location filename="../processing/engine/occupancy.py" line="1048"/>
         <source>The goodness-of-fit test was skipped: with {k} occasions there are too many possible detection histories to enumerate.</source>
         <translation>Le test d'adéquation n'a pas été fait : avec {k} occasions, il y a trop d'historiques de détection possibles à énumérer.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1061"/>
+        <location filename="../processing/engine/occupancy.py" line="1052"/>
         <source>The goodness-of-fit test was skipped: the model has parameters at the boundary.</source>
         <translation>Le test d'adéquation n'a pas été fait : le modèle a des paramètres à la borne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <location filename="../processing/engine/occupancy.py" line="1066"/>
         <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with every site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
         <translation>psi est à la borne de son domaine (estimation {psi:.4f}) : les données sont compatibles avec l'occupation de tous les sites. Son erreur type et son intervalle ne peuvent pas être calculés à partir de l'information ; les autres estimations sont conditionnelles à cette valeur.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <location filename="../processing/engine/occupancy.py" line="1066"/>
         <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with no site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
         <translation>psi est à la borne de son domaine (estimation {psi:.4f}) : les données sont compatibles avec le fait qu'aucun site ne soit occupé. Son erreur type et son intervalle ne peuvent pas être calculés à partir de l'information ; les autres estimations sont conditionnelles à cette valeur.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1085"/>
+        <location filename="../processing/engine/occupancy.py" line="1076"/>
         <source>p is at the boundary of its range (estimate {p:.4f}): every survey of a site with a detection detected the species. Its standard error cannot be computed; psi is then the naive occupancy.</source>
         <translation>p est à la borne de son domaine (estimation {p:.4f}) : chaque visite d'un site avec une détection a détecté l'espèce. Son erreur type ne peut pas être calculée ; psi est alors l'occupation naïve.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1090"/>
+        <location filename="../processing/engine/occupancy.py" line="1081"/>
         <source>Parameter {name} is at the boundary (a logit beyond {limit:g}): a covariate separates the sites, or a probability is 0 or 1. Its standard error cannot be computed; simplify the model.</source>
         <translation>Le paramètre {name} est à la borne (un logit au-delà de {limit:g}) : une covariable sépare les sites, ou une probabilité vaut 0 ou 1. Son erreur type ne peut pas être calculée ; simplifiez le modèle.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1100"/>
+        <location filename="../processing/engine/occupancy.py" line="1091"/>
         <source>{n} bootstrap data sets could not be fitted and were left out of the goodness-of-fit test.</source>
         <translation>{n} jeux de données bootstrap n'ont pas pu être ajustés et ont été exclus du test d'adéquation.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1104"/>
+        <location filename="../processing/engine/occupancy.py" line="1095"/>
         <source>The goodness-of-fit test rejects the model (p = {p:.3f}, c-hat = {c:.2f}): the histories vary more than the model allows. Standard errors may be too small; multiply their squares by c-hat, or add covariates.</source>
         <translation>Le test d'adéquation rejette le modèle (p = {p:.3f}, c-hat = {c:.2f}) : les historiques varient plus que le modèle ne le permet. Les erreurs types sont peut-être trop petites ; multipliez leurs carrés par c-hat, ou ajoutez des covariables.</translation>
     </message>
@@ -5163,7 +5307,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). L'échantillonnage « plus » est sans biais : la cause probable est donc l'estimateur par le ratio avec très peu d'animaux par unité, ou une grille systématique dont le nombre réalisé d'unités varie avec la surface ; davantage d'unités le réduisent.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="251"/>
+        <location filename="../processing/engine/distance_density.py" line="244"/>
         <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
         <translation>Le type d'inventaire doit être 'line' ou 'point' (reçu '{survey}').</translation>
     </message>
@@ -5218,197 +5362,197 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Aucune fonction de détection n'a pu être ajustée à ces {n} distances. Vérifiez les distances et la distance de troncature.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="118"/>
+        <location filename="../processing/engine/distance_density.py" line="111"/>
         <source>Layer &apos;{layer}&apos;: {n} units have no id in the field &apos;{field}&apos;. Give every unit its id.</source>
         <translation>Couche « {layer} » : {n} unités n'ont pas d'identifiant dans le champ « {field} ». Donnez à chaque unité son identifiant.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="124"/>
+        <location filename="../processing/engine/distance_density.py" line="117"/>
         <source>Layer &apos;{layer}&apos;: the unit ids {ids} occur more than once in the field &apos;{field}&apos;. Each unit needs its own id.</source>
         <translation>Couche « {layer} » : les identifiants d'unité {ids} apparaissent plus d'une fois dans le champ « {field} ». Chaque unité demande son propre identifiant.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="133"/>
+        <location filename="../processing/engine/distance_density.py" line="126"/>
         <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
         <translation>Couche « {layer} » : les transects {ids} ont une longueur nulle. Supprimez-les ou tracez leur ligne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="137"/>
+        <location filename="../processing/engine/distance_density.py" line="130"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
         <translation>Couche « {layer} » : les points {ids} n'ont aucune visite. Donnez à chaque point inventorié son nombre de visites (1 ou plus), ou supprimez les points qui n'ont pas été inventoriés.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="146"/>
+        <location filename="../processing/engine/distance_density.py" line="139"/>
         <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
         <translation>Couche « {layer} » : les unités {ids} n'ont pas de strate, ou une strate que la couche des strates n'a pas ({strata}). Donnez à chaque unité l'identifiant de sa strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="156"/>
+        <location filename="../processing/engine/distance_density.py" line="149"/>
         <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
         <translation>Les strates {strata} n'ont aucun transect ni point inventorié. Inventoriez-les, ou retirez-les de la couche des strates (l'estimation ne porte alors que sur les autres strates).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="163"/>
+        <location filename="../processing/engine/distance_density.py" line="156"/>
         <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
         <translation>Les strates {strata} n'ont qu'un transect ou un point chacune ; la variance du taux de rencontre en demande au moins 2 par strate. Fusionnez chacune avec une strate voisine dans la couche des strates et dans le champ de strate des unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="184"/>
+        <location filename="../processing/engine/distance_density.py" line="177"/>
         <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
         <translation>Couche « {layer} » : des observations nomment des unités que la couche « {units} » n'a pas (champ « {field} ») : {ids}. Corrigez ces identifiants d'unité, ou ajoutez les unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="192"/>
+        <location filename="../processing/engine/distance_density.py" line="185"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
         <translation>Couche « {layer} » : les observations {ids} n'ont pas de distance dans le champ « {field} » (vide ou qui n'est pas un nombre). Renseignez les distances, ou supprimez ces observations.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="199"/>
+        <location filename="../processing/engine/distance_density.py" line="192"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
         <translation>Couche « {layer} » : les observations {ids} ont une distance négative dans le champ « {field} ». Les distances se mesurent depuis la ligne ou le point vers l'extérieur et valent 0 m ou plus ; corrigez-les.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="211"/>
+        <location filename="../processing/engine/distance_density.py" line="204"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
         <translation>Couche « {layer} » : les observations {ids} n'ont pas de taille de groupe supérieure à 0 dans le champ « {field} ». Renseignez le nombre d'animaux vus dans chaque groupe (1 pour un animal seul), ou ne choisissez pas de champ de taille des groupes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="224"/>
+        <location filename="../processing/engine/distance_density.py" line="217"/>
         <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
         <translation>Les classes de distance doivent commencer à 0 m et croître, avec au moins deux classes (reçu {cutpoints}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="232"/>
+        <location filename="../processing/engine/distance_density.py" line="225"/>
         <source>There are no observations: a detection function needs at least {minimum} detections.</source>
         <translation>Il n'y a aucune observation : une fonction de détection demande au moins {minimum} détections.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="261"/>
+        <location filename="../processing/engine/distance_density.py" line="254"/>
         <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
         <translation>Seules {n} détections se trouvent en deçà de la distance de troncature de {w:g} m ; une fonction de détection en demande au moins {minimum} (pratique courante : 60 à 80). Inventoriez davantage de transects ou de points, ou augmentez la distance de troncature.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="269"/>
+        <location filename="../processing/engine/distance_density.py" line="262"/>
         <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
         <translation>Seules {n} détections se trouvent en deçà de la distance de troncature : la fonction de détection repose sur peu de distances (la pratique courante en demande 60 à 80), si bien que sa forme et la densité sont incertaines, et l'AIC peut choisir un modèle par hasard.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="419"/>
+        <location filename="../processing/engine/distance_density.py" line="412"/>
         <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
         <translation>Une fonction de détection par strate demande au moins {minimum} détections dans chaque strate en deçà de la distance de troncature ; ces strates en ont moins : {strata}. Utilisez une seule fonction de détection pour toutes les strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="438"/>
+        <location filename="../processing/engine/distance_density.py" line="431"/>
         <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
         <translation>Strate {stratum} : sa fonction de détection repose sur {n} détections (la pratique courante en demande 60 à 80 par fonction) ; envisagez une seule fonction pour toutes les strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="444"/>
+        <location filename="../processing/engine/distance_density.py" line="438"/>
         <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
         <translation>La fonction de détection choisie ({model}{at}) s'ajuste mal aux distances (test d'adéquation p = {p:.3f}). Cherchez dans l'histogramme une accumulation sur des distances rondes ou un pic à 0, et envisagez des classes de distance ou une autre troncature.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="451"/>
+        <location filename="../processing/engine/distance_density.py" line="445"/>
         <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
         <translation>La fonction de détection choisie ({model}) a un paramètre à la limite de son domaine, si bien que sa variance n'est pas fiable ; essayez une autre troncature ou une autre fonction clé.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="457"/>
+        <location filename="../processing/engine/distance_density.py" line="451"/>
         <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
         <translation>La variance de la fonction de détection ({model}) n'a pas pu être calculée (la vraisemblance est plate à son maximum) ; son CV manque dans l'intervalle.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="662"/>
+        <location filename="../processing/engine/distance_density.py" line="656"/>
         <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
         <translation>Le bootstrap a échoué : {failed} des {n} rééchantillonnages n'ont pas pu être ajustés. Relancez sans le bootstrap.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="750"/>
+        <location filename="../processing/engine/distance_density.py" line="744"/>
         <source>Unknown group-size method &apos;{method}&apos;.</source>
         <translation>Méthode de taille des groupes inconnue '{method}'.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="755"/>
+        <location filename="../processing/engine/distance_density.py" line="749"/>
         <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
         <translation>Le niveau de confiance doit être compris entre 0.5 et 1 (reçu {level:g}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="772"/>
+        <location filename="../processing/engine/distance_density.py" line="766"/>
         <source>The bootstrap needs a random generator (a seed).</source>
         <translation>Le bootstrap a besoin d'un générateur aléatoire (une graine).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="780"/>
+        <location filename="../processing/engine/distance_density.py" line="774"/>
         <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
         <translation>{failed} des {n} rééchantillonnages bootstrap n'ont pas pu être ajustés et ont été écartés ; l'intervalle bootstrap est peut-être trop étroit.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="697"/>
+        <location filename="../processing/engine/estimation.py" line="681"/>
         <source>The degrees of freedom of the detection estimate must be 0 (known p) or more.</source>
         <translation>Les degrés de liberté de l'estimation de la détection doivent valoir 0 (p connu) ou plus.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="738"/>
+        <location filename="../processing/engine/estimation.py" line="722"/>
         <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
         <translation>Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="821"/>
+        <location filename="../processing/engine/estimation.py" line="805"/>
         <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
         <translation>Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="865"/>
+        <location filename="../processing/engine/estimation.py" line="849"/>
         <source>The finite-population correction was not applied in strata {ids}: their units come from a design whose units may overlap ({records}: simple random centres, or a grid denser than the units). Their possible positions form a continuous population, which has no such correction (Cordy 1993); applying it would make the interval too narrow. A layout with MIN_SPACING of at least the unit&apos;s width, a systematic grid or a spatially balanced layout keeps the units apart.</source>
         <translation>La correction pour population finie n'a pas été appliquée dans les strates {ids} : leurs unités viennent d'un plan dont les unités peuvent se chevaucher ({records} : centres aléatoires simples, ou grille plus dense que les unités). Leurs positions possibles forment une population continue, qui n'a pas de telle correction (Cordy 1993) ; l'appliquer rendrait l'intervalle trop étroit. Une disposition avec un MIN_SPACING d'au moins la largeur de l'unité, une grille systématique ou une disposition spatialement équilibrée tient les unités séparées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="884"/>
+        <location filename="../processing/engine/estimation.py" line="868"/>
         <source>The expansion area of strata {ids} is smaller than the stratum: the plus region holds the stratum. Check the units&apos; edge record.</source>
         <translation>La surface d'extension des strates {ids} est plus petite que la strate : la région « plus » contient la strate. Vérifiez l'enregistrement du bord (edge) des unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="903"/>
+        <location filename="../processing/engine/estimation.py" line="887"/>
         <source>In strata {ids} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
         <translation>Dans les strates {ids}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1064"/>
+        <location filename="../processing/engine/estimation.py" line="1048"/>
         <source>Strata {ids} have fewer than 3 units: their variance uses the simple random sampling formula.</source>
         <translation>Les strates {ids} ont moins de 3 unités : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1078"/>
+        <location filename="../processing/engine/estimation.py" line="1062"/>
         <source>{label} (one unit) with {other}</source>
         <translation>{label} (une unité) avec {other}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1083"/>
+        <location filename="../processing/engine/estimation.py" line="1067"/>
         <source>Strata {groups}: a stratum with one surveyed unit takes its variance from the collapsed-strata pairs formula with its partner (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow weights for unequal sizes), which counts the difference between the two strata as variance and so tends to be too large; the partner keeps its own variance.</source>
         <translation>Strates {groups} : une strate avec une seule unité inventoriée tire sa variance de la formule des paires de strates regroupées avec sa partenaire (Cochran 1977, §5A.12 ; poids de Hansen, Hurwitz &amp; Madow pour des tailles inégales), qui compte la différence entre les deux strates comme de la variance et tend donc à être trop grande ; la partenaire garde sa propre variance.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1243"/>
+        <location filename="../processing/engine/estimation.py" line="1227"/>
         <source>Even every possible unit in every stratum ({n:,}) would miss the target CV {target_cv:.3g}: n_next is every unit.</source>
         <translation>Même toutes les unités possibles de chaque strate ({n:,}) manqueraient le CV cible {target_cv:.3g} : n_next vaut toutes les unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1466"/>
+        <location filename="../processing/engine/estimation.py" line="1450"/>
         <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
         <translation>L'erreur type de la probabilité de détection ({se:.3g}) dépasse la moitié de p ({p:.3g}) : l'étude de détection est trop petite pour corriger les comptages de façon fiable, et la méthode delta sur laquelle repose l'intervalle est médiocre pour un tel CV. Agrandissez l'étude de détection.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1478"/>
+        <location filename="../processing/engine/estimation.py" line="1462"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
         <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0, et l'intervalle est la limite supérieure unilatérale {hi:.4g} à {level:.0%} (limite de Poisson exacte pour un comptage de 0, en supposant une seule densité sur la base de sondage).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1486"/>
+        <location filename="../processing/engine/estimation.py" line="1470"/>
         <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
         <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur intervalle est la limite supérieure unilatérale d'un comptage de 0 (limite de Poisson exacte), et leur erreur type de 0 sous-estime l'incertitude globale (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1530"/>
+        <location filename="../processing/engine/estimation.py" line="1514"/>
         <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
         <translation>Dans les strates {ids}, les unités enregistrent des portées différentes (reach_m) : la plus grande est utilisée pour la région « plus ».</translation>
     </message>
@@ -5432,6 +5576,266 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <source>Units {ids} are neither points nor lines of some length; simulated distances need line transects or point stations.</source>
         <translation>Les unités {ids} ne sont ni des points ni des lignes d'une certaine longueur ; les distances simulées demandent des transects linéaires ou des stations ponctuelles.</translation>
     </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="437"/>
+        <source>, stratum {stratum}</source>
+        <translation>, strate {stratum}</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="37"/>
+        <source>every year</source>
+        <translation>chaque année</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="37"/>
+        <source>rotating panels</source>
+        <translation>panels rotatifs</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="37"/>
+        <source>split panels</source>
+        <translation>panels partagés</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="104"/>
+        <source>PANEL_DESIGN must be 0 (every year), 1 (rotating) or 2 (split); got {design}.</source>
+        <translation>PANEL_DESIGN doit valoir 0 (chaque année), 1 (rotatifs) ou 2 (partagés) ; reçu {design}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="109"/>
+        <source>YEARS must be between 1 and {most}; got {years}.</source>
+        <translation>YEARS doit être compris entre 1 et {most} ; reçu {years}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="116"/>
+        <source>Rotating and split designs need at least 2 rotating panels (PANELS = {panels}); with one panel every unit is visited every year: choose the every-year design.</source>
+        <translation>Les plans à panels rotatifs et partagés exigent au moins 2 panels rotatifs (PANELS = {panels}) ; avec un seul panel, chaque unité est visitée chaque année : choisissez le plan « chaque année ».</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="122"/>
+        <source>With {panels} panels over {years} years, panels {first} to {panels} would never be visited: use at most {years} panels or more years.</source>
+        <translation>Avec {panels} panels sur {years} ans, les panels {first} à {panels} ne seraient jamais visités : utilisez au plus {years} panels ou davantage d'années.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="129"/>
+        <source>CORE_SHARE must lie between 0 and 1 for split panels (the share of units visited every year); got {share:g}.</source>
+        <translation>CORE_SHARE doit être compris entre 0 et 1 pour les panels partagés (la part des unités visitées chaque année) ; reçu {share:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="230"/>
+        <source>The units layer has no primary unit to assign to panels.</source>
+        <translation>La couche des unités n'a aucune unité principale à affecter à des panels.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="239"/>
+        <source>Units {ids} have no draw order (draw_ord is empty). Panels follow the draw order of the layout: fill it or choose another draw-order field.</source>
+        <translation>Les unités {ids} n'ont pas d'ordre de tirage (draw_ord est vide). Les panels suivent l'ordre de tirage de la disposition : remplissez-le ou choisissez un autre champ d'ordre de tirage.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="251"/>
+        <source>Units {ids} share their draw order with another primary unit of the same stratum. Each stratum&apos;s draw order must run 1, 2, 3, ... without repeats: use the layout&apos;s draw_ord field.</source>
+        <translation>Les unités {ids} partagent leur ordre de tirage avec une autre unité principale de la même strate. L'ordre de tirage de chaque strate doit aller 1, 2, 3, ... sans répétition : utilisez le champ draw_ord de la disposition.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="301"/>
+        <source>Stratum {key} has {n} primary units, too few for {k} panels: panels {empty} get none of its units in that stratum.</source>
+        <translation>La strate {key} a {n} unités principales, trop peu pour {k} panels : les panels {empty} n'y reçoivent aucune unité.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="310"/>
+        <source>The units have no draw-order field: panels follow the order of the features in the layer. Panels are evenly spread only when that order is the draw order of a spatially balanced layout.</source>
+        <translation>Les unités n'ont pas de champ d'ordre de tirage : les panels suivent l'ordre des entités dans la couche. Les panels ne sont uniformément répartis que si cet ordre est l'ordre de tirage d'une disposition spatialement équilibrée.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="504"/>
+        <source>The layout was simple random (its units&apos; design field says so): each panel is a random part of it, not an evenly spread sample of the frame. Use a spatially balanced layout for evenly spread panels.</source>
+        <translation>La disposition était aléatoire simple (le champ design de ses unités l'indique) : chaque panel en est une partie aléatoire, non un échantillon uniformément réparti de la base de sondage. Utilisez une disposition spatialement équilibrée pour obtenir des panels uniformément répartis.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="509"/>
+        <source>The layout was a systematic grid (its units&apos; design field says so): its draw order runs row by row, so consecutive blocks of it are bands across the frame. Use a spatially balanced layout for evenly spread panels.</source>
+        <translation>La disposition était une grille systématique (le champ design de ses unités l'indique) : son ordre de tirage va ligne par ligne, si bien que ses blocs consécutifs sont des bandes à travers la base de sondage. Utilisez une disposition spatialement équilibrée pour obtenir des panels uniformément répartis.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="515"/>
+        <source>The panels are not more evenly spread than random parts of the layout (p = {p:.2f}). The layout was probably simple random or a systematic grid: each panel then covers the frame unevenly. Use a spatially balanced layout for evenly spread panels.</source>
+        <translation>Les panels ne sont pas répartis plus uniformément que des parties aléatoires de la disposition (p = {p:.2f}). La disposition était probablement aléatoire simple ou une grille systématique : chaque panel couvre alors la base de sondage de façon inégale. Utilisez une disposition spatialement équilibrée pour obtenir des panels uniformément répartis.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="139"/>
+        <source>Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records.</source>
+        <translation>Les enregistrements {ids} n'ont pas d'identifiant d'unité ou pas d'année sous forme de nombre entier. Renseignez les deux, ou supprimez ces enregistrements.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="147"/>
+        <source>Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) when the unit was not surveyed.</source>
+        <translation>Les enregistrements {ids} ont un comptage négatif ou non numérique. Les comptages valent 0 ou plus ; laissez le comptage vide (NULL) quand l'unité n'a pas été inventoriée.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="155"/>
+        <source>Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the unit-area field empty.</source>
+        <translation>Les enregistrements {ids} n'ont pas de surface d'unité (ou une surface qui n'est pas supérieure à 0). Donnez sa surface à chaque enregistrement inventorié, ou laissez vide le champ de surface d'unité.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="170"/>
+        <source>A trend needs counts from at least {k} different years; the records hold {found}.</source>
+        <translation>Une tendance exige des comptages d'au moins {k} années différentes ; les enregistrements en contiennent {found}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="184"/>
+        <source>Units were counted twice in one year (unit, year and record ids): {items}. Keep one record per unit and year (add the counts of repeated visits first).</source>
+        <translation>Des unités ont été comptées deux fois la même année (unité, année et identifiants d'enregistrement) : {items}. Gardez un seul enregistrement par unité et par année (additionnez d'abord les comptages des visites répétées).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="204"/>
+        <source>Units {ids} lie in more than one stratum across their records. A unit keeps its stratum over the years: correct the stratum field.</source>
+        <translation>Les unités {ids} se trouvent dans plus d'une strate selon leurs enregistrements. Une unité garde sa strate au fil des années : corrigez le champ de strate.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="572"/>
+        <source>CONFIDENCE must lie between 0.5 and 1 (for example 0.95); got {c:g}.</source>
+        <translation>CONFIDENCE doit être compris entre 0.5 et 1 (par exemple 0.95) ; reçu {c:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="679"/>
+        <source>Every count is 0: no trend can be estimated from records without animals.</source>
+        <translation>Tous les comptages valent 0 : aucune tendance ne peut être estimée à partir d'enregistrements sans animaux.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="684"/>
+        <source>The trend cannot be estimated: no unit with animals was counted in two different years. A trend needs units revisited over the years.</source>
+        <translation>La tendance ne peut pas être estimée : aucune unité avec des animaux n'a été comptée deux années différentes. Une tendance exige des unités revisitées au fil des années.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="689"/>
+        <source>The trend did not converge (the counts may lie all in the first or all in the last years). Check the year and count fields.</source>
+        <translation>L'ajustement de la tendance n'a pas convergé (les comptages se trouvent peut-être tous dans les premières ou tous dans les dernières années). Vérifiez les champs d'année et de comptage.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="716"/>
+        <source>This revisit design leaves no degrees of freedom for year-to-year variation (the panels do not link enough years): the interval allows only for variation between units, and is too narrow if whole years differ. Add a core of units visited every year.</source>
+        <translation>Ce plan de revisite ne laisse aucun degré de liberté pour la variation d'une année à l'autre (les panels ne relient pas assez d'années) : l'intervalle ne tient compte que de la variation entre unités, et il est trop étroit si des années entières diffèrent. Ajoutez un noyau d'unités visitées chaque année.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="787"/>
+        <source>Records {ids} have no whole-number year.</source>
+        <translation>Les enregistrements {ids} n'ont pas d'année sous forme de nombre entier.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="793"/>
+        <source>Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years without an estimate, or use the unit counts instead.</source>
+        <translation>Les enregistrements {ids} n'ont pas d'estimation supérieure à 0. Une tendance log-linéaire exige des estimations supérieures à 0 : écartez les années sans estimation, ou utilisez plutôt les comptages par unité.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="800"/>
+        <source>Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the estimate step writes it).</source>
+        <translation>Les enregistrements {ids} n'ont pas d'erreur type supérieure à 0. Chaque estimation annuelle a besoin de son erreur type (l'étape d'estimation l'écrit).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="809"/>
+        <source>Years {years} have more than one estimate. Keep one estimate per year (for the estimate step&apos;s table: its rows &apos;all&apos;, or one stratum).</source>
+        <translation>Les années {years} ont plus d'une estimation. Gardez une seule estimation par année (pour la table de l'étape d'estimation : ses lignes 'all', ou une seule strate).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="815"/>
+        <source>A trend needs estimates from at least {k} different years; the records hold {n}.</source>
+        <translation>Une tendance exige des estimations d'au moins {k} années différentes ; les enregistrements en contiennent {n}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="867"/>
+        <source>Only {k} years: the year-to-year variation and the trend are both poorly known, and the interval is wide.</source>
+        <translation>Seulement {k} années : la variation d'une année à l'autre et la tendance sont toutes deux mal connues, et l'intervalle est large.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="82"/>
+        <source>The panels layer holds no unit with visit years (field years).</source>
+        <translation>La couche des panels ne contient aucune unité avec des années de visite (champ years).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="120"/>
+        <source>CHANGES must be a list of annual changes in % per year, separated by commas (for example -3, -5); got &apos;{text}&apos;.</source>
+        <translation>CHANGES doit être une liste de variations annuelles en % par an, séparées par des virgules (par exemple -3, -5) ; reçu « {text} ».</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="126"/>
+        <source>CHANGES is empty: give at least one annual change in % (for example -3).</source>
+        <translation>CHANGES est vide : donnez au moins une variation annuelle en % (par exemple -3).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="130"/>
+        <source>Annual changes must be above -100 % per year; got {values}.</source>
+        <translation>Les variations annuelles doivent être supérieures à -100 % par an ; reçu {values}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="142"/>
+        <source>N_UNITS = {n} is fewer than the {k} panels of the design: every panel needs a unit.</source>
+        <translation>N_UNITS = {n} est inférieur aux {k} panels du plan : chaque panel a besoin d'une unité.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="147"/>
+        <source>A trend needs at least {k} years; YEARS = {years}.</source>
+        <translation>Une tendance exige au moins {k} années ; YEARS = {years}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="152"/>
+        <source>REPLICATES must lie between 10 and {most}; got {r}.</source>
+        <translation>REPLICATES doit être compris entre 10 et {most} ; reçu {r}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="157"/>
+        <source>MEAN_COUNT must be above 0 (animals per unit in the first year).</source>
+        <translation>MEAN_COUNT doit être supérieur à 0 (animaux par unité la première année).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="161"/>
+        <source>The standard deviations SD_UNIT, SD_UNIT_YEAR and SD_YEAR cannot be negative.</source>
+        <translation>Les écarts-types SD_UNIT, SD_UNIT_YEAR et SD_YEAR ne peuvent pas être négatifs.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="165"/>
+        <source>DETECTION must lie in (0, 1]; got {p:g}.</source>
+        <translation>DETECTION doit appartenir à (0, 1] ; reçu {p:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="170"/>
+        <source>ALPHA must lie between 0 and 0.5 (for example 0.05 or 0.1); got {a:g}.</source>
+        <translation>ALPHA doit être compris entre 0 et 0.5 (par exemple 0.05 ou 0.1) ; reçu {a:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="191"/>
+        <source>The pilot table has no stratum with 2 or more units and a mean and SD of the counts (fields n, mean_c, sd_c of the estimate step).</source>
+        <translation>La table pilote n'a aucune strate avec 2 unités ou plus et une moyenne et un écart-type des comptages (champs n, mean_c, sd_c de l'étape d'estimation).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="199"/>
+        <source>The pilot counted no animal: its mean count is 0, so no power can be computed.</source>
+        <translation>Le pilote n'a compté aucun animal : son comptage moyen vaut 0, si bien qu'aucune puissance ne peut être calculée.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="228"/>
+        <source>This revisit design never links enough years to test a trend (each panel must be visited in several years, or a core visited every year): use fewer panels, a core, or more years.</source>
+        <translation>Ce plan de revisite ne relie jamais assez d'années pour tester une tendance (chaque panel doit être visité plusieurs années, ou un noyau chaque année) : utilisez moins de panels, un noyau ou davantage d'années.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="391"/>
+        <source>In up to {n} of {r} simulated programmes the trend could not be estimated (too few animals counted in revisited units); they count as not detected. Raise MEAN_COUNT or the number of units if that is unrealistic.</source>
+        <translation>Dans au plus {n} des {r} programmes simulés, la tendance n'a pas pu être estimée (trop peu d'animaux comptés dans les unités revisitées) ; ils comptent comme non détectés. Augmentez MEAN_COUNT ou le nombre d'unités si c'est irréaliste.</translation>
+    </message>
+    <message>
+        <location filename="../processing/gdal_io/patches.py" line="217"/>
+        <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be turned into polygons: the covariate is speckled at the scale of its cells. Set MIN_AREA to {suggested:g} ha or more (it is {min_area:g} ha): patches below it join a neighbouring stratum, which leaves at most {limit:,} patches on the {area:,.0f} ha stratified. Smoothing the covariate first also helps.</source>
+        <translation>Les strates forment {n:,} taches (groupes 4-connexes de cellules d'une même strate), plus que les {limit:,} qui peuvent être converties en polygones : la covariable est mouchetée à l'échelle de ses cellules. Fixez MIN_AREA à {suggested:g} ha ou plus (il vaut {min_area:g} ha) : les taches plus petites rejoignent une strate voisine, ce qui laisse au plus {limit:,} taches sur les {area:,.0f} ha stratifiés. Lisser d'abord la covariable aide aussi.</translation>
+    </message>
+    <message>
+        <location filename="../processing/gdal_io/patches.py" line="230"/>
+        <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be merged below MIN_AREA in bounded memory: the covariate is speckled at the scale of its cells. Smooth or coarsen it first (for example, resample it with the average to cells of about {cell:g} m, so that one cell covers MIN_AREA), then run the stratification again.</source>
+        <translation>Les strates forment {n:,} taches (groupes 4-connexes de cellules d'une même strate), plus que les {limit:,} que la fusion des taches sous MIN_AREA peut traiter en mémoire bornée : la covariable est mouchetée à l'échelle de ses cellules. Lissez-la ou agrandissez ses cellules d'abord (par exemple, rééchantillonnez-la par la moyenne en cellules d'environ {cell:g} m, pour qu'une cellule couvre MIN_AREA), puis relancez la stratification.</translation>
+    </message>
+    <message>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="110"/>
+        <source>The strata formed too many small patches to merge one by one: patches below {cells:,} cells were first merged into their largest neighbour (the rule of GDAL&apos;s sieve filter), which can join a mosaic of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer to its pattern.</source>
+        <translation>Les strates formaient trop de petites taches pour les fusionner une à une : les taches de moins de {cells:,} cellules ont d'abord été fusionnées avec leur plus grande voisine (la règle du filtre tamis de GDAL), ce qui peut réunir une mosaïque de petites taches en une seule strate. Lisser la covariable avant de stratifier garde les strates plus proches de sa structure.</translation>
+    </message>
 </context>
 <context>
     <name>PlotwisePlugin</name>
@@ -5454,17 +5858,17 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
 <context>
     <name>PlotwiseProvider</name>
     <message>
-        <location filename="../processing/provider.py" line="98"/>
+        <location filename="../processing/provider.py" line="104"/>
         <source>Plotwise</source>
         <translation>Plotwise</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="101"/>
+        <location filename="../processing/provider.py" line="107"/>
         <source>Plotwise survey design and estimation</source>
         <translation>Plotwise : conception d'inventaires et estimation</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="121"/>
+        <location filename="../processing/provider.py" line="127"/>
         <source>The example model {path} could not be read.</source>
         <translation>Le modèle d'exemple {path} n'a pas pu être lu.</translation>
     </message>
@@ -5487,12 +5891,12 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Entrées et paramètres</translation>
     </message>
     <message>
-        <location filename="../processing/report/occupancy.py" line="153"/>
+        <location filename="../processing/report/trend.py" line="226"/>
         <source>Item</source>
         <translation>Élément</translation>
     </message>
     <message>
-        <location filename="../processing/report/occupancy.py" line="153"/>
+        <location filename="../processing/report/trend.py" line="226"/>
         <source>Value</source>
         <translation>Valeur</translation>
     </message>
@@ -5587,7 +5991,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Sites ombrés selon psi_cond, la probabilité que le site soit occupé sachant son historique de détection (1 là où l'espèce a été détectée)</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="90"/>
+        <location filename="../processing/report/trendpower.py" line="153"/>
         <source>Method</source>
         <translation>Méthode</translation>
     </message>
@@ -5672,7 +6076,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>non utilisée (pas de bootstrap)</translation>
     </message>
     <message>
-        <location filename="../processing/report/occupancy.py" line="140"/>
+        <location filename="../processing/report/panels.py" line="117"/>
         <source>CRS</source>
         <translation>SCR</translation>
     </message>
@@ -6167,7 +6571,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="201"/>
+        <location filename="../processing/report/trend.py" line="38"/>
         <source>Stratum</source>
         <translation>Strate</translation>
     </message>
@@ -6307,7 +6711,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Couche des strates</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="204"/>
+        <location filename="../processing/report/estimate.py" line="205"/>
         <source>Computation CRS</source>
         <translation>SCR de calcul</translation>
     </message>
@@ -6382,7 +6786,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Disposition prévue</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="209"/>
+        <location filename="../processing/report/estimate.py" line="210"/>
         <source>Finite-population correction</source>
         <translation>Correction pour population finie</translation>
     </message>
@@ -6437,7 +6841,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>CV attendu (exp_cv)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="379"/>
+        <location filename="../processing/report/estimate.py" line="380"/>
         <source>all strata</source>
         <translation>toutes les strates</translation>
     </message>
@@ -6587,7 +6991,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>néant</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="200"/>
+        <location filename="../processing/report/trend.py" line="157"/>
         <source>Stratum field</source>
         <translation>Champ de strate</translation>
     </message>
@@ -6667,17 +7071,17 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>voisinage local</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="164"/>
+        <location filename="../processing/report/estimate.py" line="165"/>
         <source>simple random sampling formula</source>
         <translation>formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="206"/>
+        <location filename="../processing/report/trend.py" line="158"/>
         <source>Confidence level</source>
         <translation>Niveau de confiance</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="222"/>
+        <location filename="../processing/report/trendpower.py" line="110"/>
         <source>Seed</source>
         <translation>Graine</translation>
     </message>
@@ -6807,7 +7211,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="307"/>
+        <location filename="../processing/report/trendpower.py" line="24"/>
         <source>Units</source>
         <translation>Unités</translation>
     </message>
@@ -6822,7 +7226,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Pour {name} : </translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="125"/>
+        <location filename="../processing/report/trend.py" line="118"/>
         <source>{level} interval</source>
         <translation>intervalle à {level}</translation>
     </message>
@@ -6847,7 +7251,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>animaux estimés dans la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="244"/>
+        <location filename="../processing/report/trend.py" line="188"/>
         <source>CV</source>
         <translation>CV</translation>
     </message>
@@ -6942,7 +7346,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Type d'inventaire</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="201"/>
+        <location filename="../processing/report/panels.py" line="103"/>
         <source>none: one stratum</source>
         <translation>aucun : une seule strate</translation>
     </message>
@@ -6967,7 +7371,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>aucun : chaque détection est un animal</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="203"/>
+        <location filename="../processing/report/estimate.py" line="204"/>
         <source>Strata (frame)</source>
         <translation>Strates (base de sondage)</translation>
     </message>
@@ -7002,12 +7406,12 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Taille des groupes</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="205"/>
+        <location filename="../processing/report/estimate.py" line="206"/>
         <source>Area unit</source>
         <translation>Unité de surface</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="219"/>
+        <location filename="../processing/report/estimate.py" line="220"/>
         <source>Bootstrap resamples</source>
         <translation>Rééchantillonnages bootstrap</translation>
     </message>
@@ -7157,7 +7561,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Détections par visite</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="235"/>
+        <location filename="../processing/report/estimate.py" line="236"/>
         <source>Area ({unit})</source>
         <translation>Surface ({unit})</translation>
     </message>
@@ -7172,17 +7576,17 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Animaux par {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/trend.py" line="38"/>
         <source>Lower limit</source>
         <translation>Limite inférieure</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/trend.py" line="38"/>
         <source>Upper limit</source>
         <translation>Limite supérieure</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="245"/>
+        <location filename="../processing/report/estimate.py" line="246"/>
         <source>df</source>
         <translation>ddl</translation>
     </message>
@@ -7327,307 +7731,307 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Densité à partir des distances de détection</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="87"/>
+        <location filename="../processing/report/estimate.py" line="88"/>
         <source>Naive occupancy from presence data</source>
         <translation>Occupation naïve à partir de données de présence</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="87"/>
+        <location filename="../processing/report/estimate.py" line="88"/>
         <source>Density and abundance estimate</source>
         <translation>Estimation de la densité et de l'abondance</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="106"/>
+        <location filename="../processing/report/estimate.py" line="107"/>
         <source>proportion of units occupied (naive)</source>
         <translation>proportion d'unités occupées (naïve)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="106"/>
+        <location filename="../processing/report/estimate.py" line="107"/>
         <source>occupied units</source>
         <translation>unités occupées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="109"/>
+        <location filename="../processing/report/estimate.py" line="110"/>
         <source>density per {unit}</source>
         <translation>densité par {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="109"/>
+        <location filename="../processing/report/estimate.py" line="110"/>
         <source>animals</source>
         <translation>animaux</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="118"/>
+        <location filename="../processing/report/estimate.py" line="119"/>
         <source>0 – {hi} (one-sided)</source>
         <translation>0 – {hi} (unilatéral)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="124"/>
+        <location filename="../processing/report/estimate.py" line="125"/>
         <source>estimated {what} in the frame</source>
         <translation>estimation des {what} dans la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="128"/>
+        <location filename="../processing/report/estimate.py" line="129"/>
         <source>units surveyed</source>
         <translation>unités inventoriées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="131"/>
+        <location filename="../processing/report/estimate.py" line="132"/>
         <source>true total of the simulated population</source>
         <translation>vrai total de la population simulée</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="137"/>
+        <location filename="../processing/report/estimate.py" line="138"/>
         <source>covers</source>
         <translation>contient</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="137"/>
+        <location filename="../processing/report/estimate.py" line="138"/>
         <source>misses</source>
         <translation>ne contient pas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="159"/>
+        <location filename="../processing/report/estimate.py" line="160"/>
         <source>t with Satterthwaite degrees of freedom</source>
         <translation>t avec les degrés de liberté de Satterthwaite</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="160"/>
+        <location filename="../processing/report/estimate.py" line="161"/>
         <source>log-normal (with t)</source>
         <translation>log-normal (avec t)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="161"/>
+        <location filename="../processing/report/estimate.py" line="162"/>
         <source>stratified percentile bootstrap</source>
         <translation>bootstrap stratifié des percentiles</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="165"/>
+        <location filename="../processing/report/estimate.py" line="166"/>
         <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="166"/>
+        <location filename="../processing/report/estimate.py" line="167"/>
         <source>local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>voisinage local, mis à l'échelle de la formule simple (notre variante)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="176"/>
+        <location filename="../processing/report/estimate.py" line="177"/>
         <source>plus sampling (units count only inside their stratum)</source>
         <translation>échantillonnage « plus » (les unités ne comptent que dans leur strate)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="177"/>
+        <location filename="../processing/report/estimate.py" line="178"/>
         <source>units kept wholly inside their stratum</source>
         <translation>unités gardées entièrement dans leur strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="178"/>
+        <location filename="../processing/report/estimate.py" line="179"/>
         <source>no record: whole units</source>
         <translation>pas d'enregistrement : unités entières</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="180"/>
+        <location filename="../processing/report/estimate.py" line="181"/>
         <source>field {field} (m²)</source>
         <translation>champ {field} (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="180"/>
+        <location filename="../processing/report/estimate.py" line="181"/>
         <source>polygon area</source>
         <translation>surface du polygone</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="186"/>
+        <location filename="../processing/report/estimate.py" line="187"/>
         <source>strip width</source>
         <translation>largeur de bande</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="188"/>
+        <location filename="../processing/report/estimate.py" line="189"/>
         <source>fixed</source>
         <translation>fixe</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="190"/>
+        <location filename="../processing/report/estimate.py" line="191"/>
         <source>asked for; applied in strata {yes}, refused in {no} (units may overlap)</source>
         <translation>demandée ; appliquée dans les strates {yes}, refusée dans {no} (les unités peuvent se chevaucher)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="197"/>
+        <location filename="../processing/report/estimate.py" line="198"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="198"/>
+        <location filename="../processing/report/trend.py" line="148"/>
         <source>Count field</source>
         <translation>Champ de comptage</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="199"/>
+        <location filename="../processing/report/estimate.py" line="200"/>
         <source> (presence/absence)</source>
         <translation> (présence/absence)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="202"/>
+        <location filename="../processing/report/estimate.py" line="203"/>
         <source>Unit area</source>
         <translation>Surface d'une unité</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/estimate.py" line="326"/>
         <source>Interval</source>
         <translation>Intervalle</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="208"/>
+        <location filename="../processing/report/estimate.py" line="209"/>
         <source>Variance estimator</source>
         <translation>Estimateur de variance</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="210"/>
+        <location filename="../processing/report/estimate.py" line="211"/>
         <source>Edge protocol of the units</source>
         <translation>Protocole de bord des unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="211"/>
+        <location filename="../processing/report/estimate.py" line="212"/>
         <source>Detection probability p</source>
         <translation>Probabilité de détection p</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="214"/>
+        <location filename="../processing/report/estimate.py" line="215"/>
         <source>Target CV for the next survey</source>
         <translation>CV cible pour le prochain inventaire</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="222"/>
+        <location filename="../processing/report/estimate.py" line="223"/>
         <source>not used (no random draws without the bootstrap)</source>
         <translation>non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="232"/>
+        <location filename="../processing/report/estimate.py" line="233"/>
         <source>Estimates by stratum</source>
         <translation>Estimations par strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="236"/>
+        <location filename="../processing/report/estimate.py" line="237"/>
         <source>Units (n)</source>
         <translation>Unités (n)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="237"/>
+        <location filename="../processing/report/estimate.py" line="238"/>
         <source>Not surveyed</source>
         <translation>Non inventoriées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="238"/>
+        <location filename="../processing/report/estimate.py" line="239"/>
         <source>Mean count</source>
         <translation>Comptage moyen</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="239"/>
+        <location filename="../processing/report/estimate.py" line="240"/>
         <source>SD of counts</source>
         <translation>Écart-type des comptages</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="279"/>
+        <location filename="../processing/report/estimate.py" line="280"/>
         <source>Occupied units</source>
         <translation>Unités occupées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="279"/>
+        <location filename="../processing/report/estimate.py" line="280"/>
         <source>Abundance</source>
         <translation>Abondance</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="257"/>
+        <location filename="../processing/report/estimate.py" line="258"/>
         <source>Units next time (n_next)</source>
         <translation>Unités la prochaine fois (n_next)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="272"/>
+        <location filename="../processing/report/estimate.py" line="273"/>
         <source>{what}, limits at {level}.</source>
         <translation>{what}, limites à {level}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="279"/>
+        <location filename="../processing/report/estimate.py" line="280"/>
         <source>{what} in the frame, limits at {level}.</source>
         <translation>{what} dans la base de sondage, limites à {level}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="308"/>
+        <location filename="../processing/report/estimate.py" line="309"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
         <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="314"/>
+        <location filename="../processing/report/estimate.py" line="315"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="324"/>
+        <location filename="../processing/report/estimate.py" line="325"/>
         <source>The overall interval by method</source>
         <translation>L'intervalle global selon la méthode</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/estimate.py" line="326"/>
         <source>Used in the outputs</source>
         <translation>Utilisé dans les sorties</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>overall abundance in a resample</source>
         <translation>abondance globale dans un rééchantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>resamples</source>
         <translation>rééchantillonnages</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>{level} percentile limits</source>
         <translation>limites des percentiles à {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
         <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="378"/>
+        <location filename="../processing/report/estimate.py" line="379"/>
         <source>true density (simulation)</source>
         <translation>vraie densité (simulation)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="388"/>
+        <location filename="../processing/report/estimate.py" line="389"/>
         <source>{what} by stratum with {level} confidence intervals</source>
         <translation>{what} par strate avec intervalles de confiance à {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="403"/>
+        <location filename="../processing/report/estimate.py" line="404"/>
         <source>lowest</source>
         <translation>minimum</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="403"/>
+        <location filename="../processing/report/estimate.py" line="404"/>
         <source>highest</source>
         <translation>maximum</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="414"/>
+        <location filename="../processing/report/estimate.py" line="415"/>
         <source>surveyed units</source>
         <translation>unités inventoriées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="424"/>
+        <location filename="../processing/report/estimate.py" line="425"/>
         <source>not surveyed</source>
         <translation>non inventoriées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="433"/>
+        <location filename="../processing/report/estimate.py" line="434"/>
         <source>Strata shaded by {what}, with the units</source>
         <translation>Strates ombrées selon {what}, avec les unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="600"/>
+        <location filename="../processing/report/trendpower.py" line="177"/>
         <source>Cautions</source>
         <translation>Mises en garde</translation>
     </message>
@@ -7692,160 +8096,895 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="137"/>
+        <location filename="../processing/report/estimate.py" line="138"/>
         <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
         <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="290"/>
+        <location filename="../processing/report/estimate.py" line="291"/>
         <source>† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit −ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided by p with detection. For the frame it assumes one density over the strata.</source>
         <translation>† Tous les comptages valaient 0 : l'estimation vaut 0 et l'intervalle va de 0 à la limite supérieure unilatérale −ln(1 − {level}) · A / Σa d'un comptage de Poisson de 0 (Garwood 1936 ; environ 3 · A / Σa à 95 %), divisée par p avec la détection. Pour la base de sondage, elle suppose une seule densité sur les strates.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="299"/>
+        <location filename="../processing/report/estimate.py" line="300"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
         <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="344"/>
+        <location filename="../processing/report/estimate.py" line="345"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
         <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="442"/>
+        <location filename="../processing/report/estimate.py" line="443"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
         <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="453"/>
+        <location filename="../processing/report/estimate.py" line="454"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
         <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie s'applique et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="465"/>
+        <location filename="../processing/report/estimate.py" line="466"/>
         <source>Edges: the units were laid out by plus sampling (Gregoire &amp; Valentine 2008, ch. 10): their centres were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside its own stratum. Every animal then has the same chance of being counted, and the counts expand to the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).</source>
         <translation>Bords : les unités ont été disposées par échantillonnage « plus » (Gregoire &amp; Valentine 2008, ch. 10) : leurs centres ont été tirés sur chaque strate agrandie de la portée de l'unité, et chaque unité ne compte que les animaux situés dans sa propre strate. Chaque animal a alors la même chance d'être compté, et les comptages sont étendus à la surface agrandie A⁺_h : N_h = A⁺_h Σy/Σa (colonne des surfaces d'extension dans la sortie).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="475"/>
+        <location filename="../processing/report/estimate.py" line="476"/>
         <source>Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit&apos;s reach of the edge; the estimate carries the inner density over that band. Where the animals near the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.</source>
         <translation>Bords : les unités ont été gardées entièrement dans leurs strates, si bien qu'aucune unité n'atteint la bande située à moins d'une portée d'unité du bord ; l'estimation reporte la densité intérieure sur cette bande. Là où les animaux proches du bord diffèrent (une rive, une lisière de forêt), elle est biaisée ; l'échantillonnage « plus » (INSIDE désactivé) ne l'est pas.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="488"/>
+        <location filename="../processing/report/estimate.py" line="489"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, eq. 3.75), with df_p = {df} for p.</source>
         <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté des deux parts se combinent selon la règle de Satterthwaite, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, éq. 3.75), avec df_p = {df} pour p.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="500"/>
+        <location filename="../processing/report/estimate.py" line="501"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds. The observed SDs are themselves uncertain, especially from few units.</source>
         <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types qu'implique maintenant l'estimateur de variance (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 et au plus les unités que contient une strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="512"/>
+        <location filename="../processing/report/estimate.py" line="513"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
         <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="512"/>
+        <location filename="../processing/report/estimate.py" line="513"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go below 0.</source>
         <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(t_df · √ln(1 + CV²)), t avec les degrés de liberté de Satterthwaite de l'estimation (Buckland et al. 2001, §3.6.1 ; le quantile normal seulement pour des ddl infinis, Burnham et al. 1987). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="512"/>
+        <location filename="../processing/report/estimate.py" line="513"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction where it applies (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
         <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie là où elle s'applique (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="542"/>
+        <location filename="../processing/report/estimate.py" line="543"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to the same variance. For a simple random layout use the simple formula.</source>
         <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, avec des poids dont la somme vaut 1 sur chaque voisinage et sur chaque unité, et v = Σ_i Σ_j w_ij (z_j − z̄_i)². Ses degrés de liberté sont ceux d'une forme quadratique, (tr Q)² / tr Q² (Box 1954), et le bootstrap disperse ses rééchantillonnages jusqu'à la même variance. Pour une disposition aléatoire simple, utilisez la formule simple.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="553"/>
+        <location filename="../processing/report/estimate.py" line="554"/>
         <source>Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on average with the simple formula where the population has no spatial pattern; the published sum falls about a quarter short there. This scaling is ours, not Stevens &amp; Olsen's.</source>
         <translation>Notre variante : la double somme est multipliée par n / Σ_i (1 − Σ_j w_ij²), pour qu'elle concorde en moyenne avec la formule simple là où la population n'a pas de structure spatiale ; la somme publiée y est inférieure d'environ un quart. Cette mise à l'échelle est la nôtre, pas celle de Stevens &amp; Olsen.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="562"/>
+        <location filename="../processing/report/estimate.py" line="563"/>
         <source>Strata with one surveyed unit were paired with a partner fixed before the counts were seen (the stratum sharing the longest edge on the map, or else the next stratum in id order). Two one-unit strata share the pairs formula v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, with the weights of Hansen, Hurwitz &amp; Madow 1953); a one-unit stratum paired with a stratum of several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's spread, while the partner keeps its own variance. Differences between the paired strata count as variance, so these standard errors tend to be too large; each such stratum has 1 degree of freedom.</source>
         <translation>Les strates avec une seule unité inventoriée ont été associées à une partenaire fixée avant que les comptages ne soient vus (la strate qui partage la plus longue limite sur la carte, ou à défaut la strate suivante dans l'ordre des identifiants). Deux strates d'une seule unité partagent la formule des paires v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, avec les poids de Hansen, Hurwitz &amp; Madow 1953) ; une strate d'une seule unité associée à une strate de plusieurs unités prend (D̂_1 − D̂_2)² − v(D̂_2), au moins la variance qu'a une unité avec la dispersion de la partenaire, tandis que la partenaire garde sa propre variance. Les différences entre strates associées comptent comme variance, si bien que ces erreurs types tendent à être trop grandes ; chacune de ces strates a 1 degré de liberté.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="579"/>
+        <location filename="../processing/report/estimate.py" line="580"/>
         <source>The finite-population correction was refused in strata {ids}: their units come from a simple random layout whose units may overlap, a continuous population of possible units, which has no such correction (Cordy 1993).</source>
         <translation>La correction pour population finie a été refusée dans les strates {ids} : leurs unités viennent d'une disposition aléatoire simple dont les unités peuvent se chevaucher, une population continue d'unités possibles, qui n'a pas de telle correction (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="588"/>
+        <location filename="../processing/report/estimate.py" line="589"/>
         <source>The finite-population correction assumes that the units do not overlap and were drawn without replacement from the units that tile each stratum. The units carry no design record (they did not come from plotwise:layout), so this could not be checked: if they may overlap, switch the correction off.</source>
         <translation>La correction pour population finie suppose que les unités ne se chevauchent pas et ont été tirées sans remise parmi les unités qui pavent chaque strate. Les unités ne portent aucun enregistrement de plan (elles ne viennent pas de plotwise:layout), si bien que cela n'a pas pu être vérifié : si elles peuvent se chevaucher, désactivez la correction.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="601"/>
+        <location filename="../processing/report/estimate.py" line="602"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
         <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="609"/>
+        <location filename="../processing/report/estimate.py" line="610"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
         <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="617"/>
+        <location filename="../processing/report/estimate.py" line="618"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
         <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="626"/>
+        <location filename="../processing/report/estimate.py" line="627"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
         <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="633"/>
+        <location filename="../processing/report/estimate.py" line="634"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
         <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="25"/>
+        <source>every year</source>
+        <translation>chaque année</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="25"/>
+        <source>rotating panels</source>
+        <translation>panels rotatifs</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="25"/>
+        <source>split panels</source>
+        <translation>panels partagés</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="41"/>
+        <source>Panel</source>
+        <translation>Panel</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="30"/>
+        <source>Visited in</source>
+        <translation>Années de visite</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Year</source>
+        <translation>Année</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="35"/>
+        <source>Panels visited</source>
+        <translation>Panels visités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="35"/>
+        <source>Field days</source>
+        <translation>Jours de terrain</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="41"/>
+        <source>Spread measure</source>
+        <translation>Mesure de répartition</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="41"/>
+        <source>Random panels of the same make-up</source>
+        <translation>Panels aléatoires de même composition</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="70"/>
+        <source>every year (all units)</source>
+        <translation>chaque année (toutes les unités)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="72"/>
+        <source>core (every year)</source>
+        <translation>noyau (chaque année)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="73"/>
+        <source>panel {p}</source>
+        <translation>panel {p}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="83"/>
+        <source>design</source>
+        <translation>plan</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="83"/>
+        <source>units in panels</source>
+        <translation>unités dans les panels</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="128"/>
+        <source>units per year</source>
+        <translation>unités par an</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="118"/>
+        <source>years</source>
+        <translation>années</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="102"/>
+        <source>none: the order of the features</source>
+        <translation>aucun : l'ordre des entités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="105"/>
+        <source>Units layer</source>
+        <translation>Couche des unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="106"/>
+        <source>Panel design (PANEL_DESIGN)</source>
+        <translation>Plan de panels (PANEL_DESIGN)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="107"/>
+        <source>Rotating panels (PANELS)</source>
+        <translation>Panels rotatifs (PANELS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="108"/>
+        <source>Share of units in the core (CORE_SHARE)</source>
+        <translation>Part des unités dans le noyau (CORE_SHARE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="110"/>
+        <source>First year (START_YEAR)</source>
+        <translation>Première année (START_YEAR)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="95"/>
+        <source>Years (YEARS)</source>
+        <translation>Années (YEARS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="112"/>
+        <source>Draw-order field</source>
+        <translation>Champ d'ordre de tirage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="114"/>
+        <source>Field days per unit visit</source>
+        <translation>Jours de terrain par visite d'unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="115"/>
+        <source>Reserve units (no panel)</source>
+        <translation>Unités de réserve (sans panel)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="116"/>
+        <source>Seed (balance check only)</source>
+        <translation>Graine (contrôle de l'équilibre seulement)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="127"/>
+        <source>Schedule</source>
+        <translation>Calendrier</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="130"/>
+        <source>Years in which each panel is visited, with its number of units; the last row adds them up.</source>
+        <translation>Années de visite de chaque panel, avec son nombre d'unités ; la dernière ligne en fait la somme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="143"/>
+        <source>Units of each stratum in each panel.</source>
+        <translation>Unités de chaque strate dans chaque panel.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="148"/>
+        <source>Spread of the panels</source>
+        <translation>Répartition des panels</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="150"/>
+        <source>The layout records a spatially balanced design (the units&apos; design field).</source>
+        <translation>La disposition enregistre un plan spatialement équilibré (champ design des unités).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="153"/>
+        <source>The layout records a simple random design (the units&apos; design field): each panel is a random part of it, not an evenly spread sample of the frame.</source>
+        <translation>La disposition enregistre un plan aléatoire simple (champ design des unités) : chaque panel en est une partie aléatoire, non un échantillon uniformément réparti de la base de sondage.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="158"/>
+        <source>The layout records a systematic grid (the units&apos; design field): its draw order runs row by row, so the panels are bands across the frame.</source>
+        <translation>La disposition enregistre une grille systématique (champ design des unités) : son ordre de tirage va ligne par ligne, si bien que les panels sont des bandes à travers la base de sondage.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="163"/>
+        <source>The units carry no design record (the design field of plotwise:layout): the check below tells whether the panels are evenly spread.</source>
+        <translation>Les unités ne portent aucun enregistrement du plan (le champ design de plotwise:layout) : le contrôle ci-dessous indique si les panels sont uniformément répartis.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="168"/>
+        <source>No panel could be checked: the units need at least 3 positions not on one line, and a panel at least 2 units.</source>
+        <translation>Aucun panel n'a pu être contrôlé : il faut aux unités au moins 3 positions non alignées, et à un panel au moins 2 unités.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="174"/>
+        <source>Spread measure of Stevens &amp; Olsen (2004) over the whole layout: 0 for a perfectly even spread, larger for clumps and gaps. The random panels take the same number of units from each stratum (median over the rearrangements of the check).</source>
+        <translation>Mesure de répartition de Stevens &amp; Olsen (2004) sur l'ensemble de la disposition : 0 pour une répartition parfaitement uniforme, plus grande en cas d'agrégats et de lacunes. Les panels aléatoires prennent le même nombre d'unités dans chaque strate (médiane sur les réarrangements du contrôle).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="180"/>
+        <source>The panels are more evenly spread than random parts of the layout (their spread measure is {r:.0%} of that of random panels), though with this few units the check cannot confirm it (p = {p:.3f} from {b} random rearrangements).</source>
+        <translation>Les panels sont répartis plus uniformément que des parties aléatoires de la disposition (leur mesure de répartition vaut {r:.0%} de celle des panels aléatoires), mais avec si peu d'unités le contrôle ne peut pas le confirmer (p = {p:.3f} sur {b} réarrangements aléatoires).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="186"/>
+        <source>The panels are more evenly spread than random parts of the layout (p = {p:.3f} from {b} random rearrangements): as expected when the layout is spatially balanced and the panels follow its draw order.</source>
+        <translation>Les panels sont répartis plus uniformément que des parties aléatoires de la disposition (p = {p:.3f} sur {b} réarrangements aléatoires) : c'est ce qu'on attend quand la disposition est spatialement équilibrée et que les panels suivent son ordre de tirage.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="192"/>
+        <source>The panels are not shown to be more evenly spread than random parts of the layout (p = {p:.3f} from {b} random rearrangements). If the layout was simple random, each panel is just a random part of it; if it was a systematic grid, whose draw order runs row by row, the panels are bands. For evenly spread panels, lay out the units with the spatially balanced design. With few units the check may also miss a real balance.</source>
+        <translation>Rien ne montre que les panels soient répartis plus uniformément que des parties aléatoires de la disposition (p = {p:.3f} sur {b} réarrangements aléatoires). Si la disposition était aléatoire simple, chaque panel n'en est qu'une partie aléatoire ; si c'était une grille systématique, dont l'ordre de tirage va ligne par ligne, les panels sont des bandes. Pour des panels uniformément répartis, disposez les unités avec le plan spatialement équilibré. Avec peu d'unités, le contrôle peut aussi manquer un équilibre réel.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="203"/>
+        <source>Within each stratum the primary units are taken in draw order and cut into consecutive blocks: the core (split panels) first, then panel 1, panel 2 and so on, as evenly as possible. Rotating panel p is visited in the years start + (p − 1) + m·K, so that each of its units is revisited every K years and about 1/K of the rotating units are surveyed each year; the core, and the single panel of the every-year design, are visited every year (Urquhart &amp; Kincaid 1999; McDonald 2003).</source>
+        <translation>Au sein de chaque strate, les unités principales sont prises dans l'ordre de tirage et découpées en blocs consécutifs : le noyau (panels partagés) d'abord, puis le panel 1, le panel 2 et ainsi de suite, aussi égaux que possible. Le panel rotatif p est visité les années début + (p − 1) + m·K, si bien que chacune de ses unités est revisitée tous les K ans et qu'environ 1/K des unités des panels rotatifs sont inventoriées chaque année ; le noyau, et le panel unique du plan « chaque année », sont visités chaque année (Urquhart &amp; Kincaid 1999 ; McDonald 2003).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="210"/>
+        <source>In a spatially balanced layout every run of consecutive units of the draw order is itself spread over the stratum (Robertson et al. 2013), so each panel covers the whole stratum. The check compares the Voronoi spread measure of the panels (Stevens &amp; Olsen 2004), computed over a fine grid on the convex hull of the units, with random rearrangements of the panels within each stratum.</source>
+        <translation>Dans une disposition spatialement équilibrée, toute suite d'unités consécutives de l'ordre de tirage est elle-même répartie sur la strate (Robertson et al. 2013), si bien que chaque panel couvre toute la strate. Le contrôle compare la mesure de répartition de Voronoï des panels (Stevens &amp; Olsen 2004), calculée sur une grille fine couvrant l'enveloppe convexe des unités, à des réarrangements aléatoires des panels au sein de chaque strate.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="216"/>
+        <source>Reserve units get no panel. A reserve that replaces a primary unit takes over the primary&apos;s panel and years; record the replacement.</source>
+        <translation>Les unités de réserve ne reçoivent aucun panel. Une réserve qui remplace une unité principale reprend le panel et les années de celle-ci ; notez le remplacement.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="220"/>
+        <source>Revisiting the same units every year gives the most precise trend for the effort; rotating panels cover more ground over a cycle but link the years only through the units they share. The split design keeps a core for the year-to-year links. Compare the options with the power analysis (plotwise:trendpower) before committing to a schedule.</source>
+        <translation>Revisiter les mêmes unités chaque année donne la tendance la plus précise pour l'effort consenti ; les panels rotatifs couvrent davantage de terrain sur un cycle mais ne relient les années que par les unités qu'ils ont en commun. Le plan à panels partagés garde un noyau pour relier les années entre elles. Comparez les options avec l'analyse de puissance (plotwise:trendpower) avant de vous engager sur un calendrier.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Index</source>
+        <translation>Indice</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Trend</source>
+        <translation>Tendance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Trend, lower</source>
+        <translation>Tendance, limite inférieure</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Trend, upper</source>
+        <translation>Tendance, limite supérieure</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="38"/>
+        <source>Change per year (%)</source>
+        <translation>Variation annuelle (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="38"/>
+        <source>p-value</source>
+        <translation>Valeur p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Units in the records</source>
+        <translation>Unités dans les enregistrements</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Units in the fit (some animals counted)</source>
+        <translation>Unités dans l'ajustement (au moins un animal compté)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Records used</source>
+        <translation>Enregistrements utilisés</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Records without a count (not surveyed)</source>
+        <translation>Enregistrements sans comptage (non inventoriés)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Scale between units (Pearson)</source>
+        <translation>Facteur d'échelle entre unités (Pearson)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Standard error of the log change allowing only for variation between units</source>
+        <translation>Erreur type de la variation logarithmique ne tenant compte que de la variation entre unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Year-to-year SD, log scale (method of moments)</source>
+        <translation>Écart-type d'une année à l'autre, échelle logarithmique (méthode des moments)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Scale between units within years (Pearson)</source>
+        <translation>Facteur d'échelle entre unités au sein des années (Pearson)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Deviance drop from the trend to one effect per year</source>
+        <translation>Baisse de déviance de la tendance à un effet par année</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Degrees of freedom between years</source>
+        <translation>Degrés de liberté entre années</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="223"/>
+        <source>Standard error of the log change used</source>
+        <translation>Erreur type retenue de la variation logarithmique</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Linked sets of units and years</source>
+        <translation>Ensembles liés d'unités et d'années</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="94"/>
+        <source>The change per year could not be estimated.</source>
+        <translation>La variation annuelle n'a pas pu être estimée.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="97"/>
+        <source>no change (0.0% per year)</source>
+        <translation>aucune variation (0.0% par an)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="99"/>
+        <source>a decline of {c} per year</source>
+        <translation>une baisse de {c} par an</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="101"/>
+        <source>an increase of {c} per year</source>
+        <translation>une hausse de {c} par an</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="104"/>
+        <source>{level} interval {a} to {b}</source>
+        <translation>intervalle à {level} de {a} à {b}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="107"/>
+        <source>{level} interval from a decline of {a} to an increase of {b}</source>
+        <translation>intervalle à {level} d'une baisse de {a} à une hausse de {b}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="118"/>
+        <source>change per year</source>
+        <translation>variation annuelle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="118"/>
+        <source>p-value (no trend)</source>
+        <translation>valeur p (absence de tendance)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="126"/>
+        <source>Over {first}–{last} the trend is {words}.</source>
+        <translation>Tendance sur la période {first}–{last} : {words}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="143"/>
+        <source>Input</source>
+        <translation>Entrée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="152"/>
+        <source>Source (SOURCE)</source>
+        <translation>Source (SOURCE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="145"/>
+        <source>unit counts</source>
+        <translation>comptages par unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="147"/>
+        <source>Unit id field</source>
+        <translation>Champ d'identifiant d'unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="149"/>
+        <source>Unit area field</source>
+        <translation>Champ de surface d'unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="149"/>
+        <source>none: equal effort</source>
+        <translation>aucun : effort égal</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="152"/>
+        <source>yearly estimates</source>
+        <translation>estimations annuelles</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="154"/>
+        <source>Estimate field</source>
+        <translation>Champ d'estimation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="155"/>
+        <source>Standard error field</source>
+        <translation>Champ d'erreur type</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="156"/>
+        <source>Year field</source>
+        <translation>Champ d'année</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="159"/>
+        <source>not used (no random draws)</source>
+        <translation>non utilisée (aucun tirage aléatoire)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="166"/>
+        <source>Yearly index and trend</source>
+        <translation>Indice annuel et tendance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="168"/>
+        <source>mean count per unit</source>
+        <translation>comptage moyen par unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="169"/>
+        <source>Index: the expected mean count per unit in each year, at the mean survey effort.</source>
+        <translation>Indice : le comptage moyen attendu par unité pour chaque année, à l'effort d'inventaire moyen.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="172"/>
+        <source>estimate</source>
+        <translation>estimation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="173"/>
+        <source>Index: the yearly estimate; its interval shows the sampling error only.</source>
+        <translation>Indice : l'estimation annuelle ; son intervalle ne montre que l'erreur d'échantillonnage.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="175"/>
+        <source>year</source>
+        <translation>année</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="175"/>
+        <source>yearly index</source>
+        <translation>indice annuel</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="175"/>
+        <source>trend</source>
+        <translation>tendance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="180"/>
+        <source>Yearly index with {level} intervals (points and bars) and the fitted trend with its {level} band.</source>
+        <translation>Indice annuel avec intervalles à {level} (points et barres) et tendance ajustée avec sa bande à {level}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="216"/>
+        <source>The fit</source>
+        <translation>L'ajustement</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="202"/>
+        <source>Units that counted no animal in any visit carry no information on the trend and were left out of the fit: {ids}.</source>
+        <translation>Les unités où aucun animal n'a été compté lors d'aucune visite n'apportent aucune information sur la tendance et ont été écartées de l'ajustement : {ids}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="207"/>
+        <source>Trend by stratum</source>
+        <translation>Tendance par strate</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="209"/>
+        <source>Each stratum&apos;s units fitted on their own; strata with too few units or years show no value.</source>
+        <translation>Les unités de chaque strate sont ajustées séparément ; les strates avec trop peu d'unités ou d'années n'affichent aucune valeur.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="218"/>
+        <source>Year-to-year process SD (log scale)</source>
+        <translation>Écart-type de processus d'une année à l'autre (échelle logarithmique)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="219"/>
+        <source>Weighted residual sum of squares without process variance</source>
+        <translation>Somme pondérée des carrés des résidus sans variance de processus</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="220"/>
+        <source>Residual mean square that scales the variance</source>
+        <translation>Carré moyen résiduel qui met la variance à l'échelle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="221"/>
+        <source>Standard error of the log change with sampling error only</source>
+        <translation>Erreur type de la variation logarithmique avec la seule erreur d'échantillonnage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="224"/>
+        <source>Degrees of freedom</source>
+        <translation>Degrés de liberté</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="234"/>
+        <source>The counts follow a log-linear Poisson model with one effect per unit and a common change per year, log E[y] = log(effort) + unit effect + β·year (McCullagh &amp; Nelder 1989). Given β the unit effects have a closed form, so β is fitted by Newton's method on the profile likelihood. The change per year is exp(β) − 1.</source>
+        <translation>Les comptages suivent un modèle de Poisson log-linéaire avec un effet par unité et une variation annuelle commune, log E[y] = log(effort) + effet de l'unité + β·année (McCullagh &amp; Nelder 1989). À β donné, les effets des unités ont une forme explicite, si bien que β est ajusté par la méthode de Newton sur la vraisemblance profilée. La variation annuelle vaut exp(β) − 1.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="240"/>
+        <source>Overdispersion (quasi-likelihood): counts of one year share that year's conditions. The model with one effect per year (fitted by iterative proportional fitting; Bishop, Fienberg &amp; Holland 1975) is compared with the trend model: the deviance drop per degree of freedom scales the variance of β (McCullagh &amp; Nelder 1989), in proportion to how strongly the slope depends on single years, and β is tested with Student's t on the degrees of freedom between years. So years that differ as a whole widen the interval. The year-to-year SD is estimated from the same drop by the method of moments (DerSimonian &amp; Laird 1986, here for a log-linear model). The standard error allowing only for variation between units (the Pearson-scaled GLM) is shown for comparison. The index of each year is the year model's expected mean count per unit, with delta-method intervals from the Pearson scale within years.</source>
+        <translation>Surdispersion (quasi-vraisemblance) : les comptages d'une même année partagent les conditions de cette année. Le modèle avec un effet par année (estimé par ajustement proportionnel itératif ; Bishop, Fienberg &amp; Holland 1975) est comparé au modèle de tendance : la baisse de déviance par degré de liberté met à l'échelle la variance de β (McCullagh &amp; Nelder 1989), en proportion de la force avec laquelle la pente dépend d'années isolées, et β est testé par le t de Student sur les degrés de liberté entre années. Ainsi, des années qui diffèrent dans leur ensemble élargissent l'intervalle. L'écart-type d'une année à l'autre est estimé à partir de la même baisse par la méthode des moments (DerSimonian &amp; Laird 1986, ici pour un modèle log-linéaire). L'erreur type qui ne tient compte que de la variation entre unités (le GLM mis à l'échelle de Pearson) est donnée pour comparaison. L'indice de chaque année est le comptage moyen attendu par unité du modèle par année, avec des intervalles par la méthode delta tirés du facteur d'échelle de Pearson au sein des années.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="253"/>
+        <source>The log yearly estimates are regressed on year by weighted least squares. Each year's variance is its sampling variance ln(1 + CV²) plus the year-to-year process variance τ², estimated by the method of moments (DerSimonian &amp; Laird 1986; Thompson &amp; Sharp 1999), so that a noisy year counts less and real ups and downs between years widen the interval. The variance of the slope is scaled by the weighted residual mean square and tested with t on k − 2 degrees of freedom (Hartung &amp; Knapp 2001).</source>
+        <translation>Les logarithmes des estimations annuelles sont régressés sur l'année par moindres carrés pondérés. La variance de chaque année est sa variance d'échantillonnage ln(1 + CV²) plus la variance de processus d'une année à l'autre τ², estimée par la méthode des moments (DerSimonian &amp; Laird 1986 ; Thompson &amp; Sharp 1999), si bien qu'une année bruitée pèse moins et que de vraies hausses et baisses entre années élargissent l'intervalle. La variance de la pente est mise à l'échelle par le carré moyen résiduel pondéré et testée par t sur k − 2 degrés de liberté (Hartung &amp; Knapp 2001).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="264"/>
+        <source>A trend in counts is a trend in the population only if detection did not change: new observers, another season or time of day, denser vegetation or a different method change the counts without any change in the animals. Keep the field protocol the same, or measure detection each year.</source>
+        <translation>Une tendance des comptages n'est une tendance de la population que si la détection n'a pas changé : de nouveaux observateurs, une autre saison ou heure de la journée, une végétation plus dense ou une méthode différente changent les comptages sans aucun changement chez les animaux. Gardez le même protocole de terrain, ou mesurez la détection chaque année.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="269"/>
+        <source>The trend is the average change over these years, on a log scale. It is not a forecast, and it says nothing about units or land outside the programme&apos;s frame.</source>
+        <translation>La tendance est la variation moyenne sur ces années, sur une échelle logarithmique. Ce n'est pas une prévision, et elle ne dit rien des unités ou des terrains hors de la base de sondage du programme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Years</source>
+        <translation>Années</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Change (% per year)</source>
+        <translation>Variation (% par an)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Power</source>
+        <translation>Puissance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Monte Carlo SE</source>
+        <translation>Erreur type de Monte-Carlo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Fits that failed</source>
+        <translation>Ajustements échoués</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="46"/>
+        <source>{c:+g}% per year</source>
+        <translation>{c:+g}% par an</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="55"/>
+        <source>power for {c} after {t} years</source>
+        <translation>puissance pour {c} après {t} ans</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="60"/>
+        <source>years for 80% power ({c})</source>
+        <translation>années pour une puissance de 80% ({c})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="60"/>
+        <source>more than {t}</source>
+        <translation>plus de {t}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="67"/>
+        <source>A change of {c} is detected with 80% power after {t} years of this programme.</source>
+        <translation>Une variation de {c} est détectée avec une puissance de 80% après {t} ans de ce programme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="72"/>
+        <source>A change of {c} is not detected with 80% power within {t} years of this programme.</source>
+        <translation>Une variation de {c} n'est pas détectée avec une puissance de 80% en {t} ans de ce programme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="89"/>
+        <source>{design} (from {layer})</source>
+        <translation>{design} (d'après {layer})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="91"/>
+        <source>two-sided</source>
+        <translation>bilatéral</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="92"/>
+        <source>one-sided, in the direction of the change</source>
+        <translation>unilatéral, dans le sens de la variation</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="94"/>
+        <source>Units (N_UNITS)</source>
+        <translation>Unités (N_UNITS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="96"/>
+        <source>Panel design</source>
+        <translation>Plan de panels</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="97"/>
+        <source>Changes to detect (% per year)</source>
+        <translation>Variations à détecter (% par an)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="99"/>
+        <source>Mean animals per unit in the first year (MEAN_COUNT)</source>
+        <translation>Nombre moyen d'animaux par unité la première année (MEAN_COUNT)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="101"/>
+        <source>SD between units, log scale (SD_UNIT)</source>
+        <translation>Écart-type entre unités, échelle logarithmique (SD_UNIT)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="102"/>
+        <source>SD unit × year, log scale (SD_UNIT_YEAR)</source>
+        <translation>Écart-type unité × année, échelle logarithmique (SD_UNIT_YEAR)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="103"/>
+        <source>SD year to year, log scale (SD_YEAR)</source>
+        <translation>Écart-type d'une année à l'autre, échelle logarithmique (SD_YEAR)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="104"/>
+        <source>Mean count and SD between units from</source>
+        <translation>Comptage moyen et écart-type entre unités tirés de</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="105"/>
+        <source>the parameters</source>
+        <translation>les paramètres</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="106"/>
+        <source>Detection probability (DETECTION)</source>
+        <translation>Probabilité de détection (DETECTION)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="107"/>
+        <source>Significance level (ALPHA)</source>
+        <translation>Seuil de signification (ALPHA)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="108"/>
+        <source>Test</source>
+        <translation>Test</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="109"/>
+        <source>Replicates (REPLICATES)</source>
+        <translation>Réplicats (REPLICATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="111"/>
+        <source>Largest Monte Carlo standard error of a power</source>
+        <translation>Plus grande erreur type de Monte-Carlo d'une puissance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="127"/>
+        <source>80%</source>
+        <translation>80%</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="128"/>
+        <source>power</source>
+        <translation>puissance</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="129"/>
+        <source>Power against years</source>
+        <translation>Puissance en fonction des années</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="130"/>
+        <source>years of the programme</source>
+        <translation>années du programme</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="132"/>
+        <source>Power with {n} units against the number of years; bars: ±2 Monte Carlo SE.</source>
+        <translation>Puissance avec {n} unités en fonction du nombre d'années ; barres : ±2 erreurs types de Monte-Carlo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="136"/>
+        <source>Power against units</source>
+        <translation>Puissance en fonction des unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="137"/>
+        <source>units</source>
+        <translation>unités</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="139"/>
+        <source>Power after {t} years against the number of units; bars: ±2 Monte Carlo SE.</source>
+        <translation>Puissance après {t} ans en fonction du nombre d'unités ; barres : ±2 erreurs types de Monte-Carlo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="154"/>
+        <source>Each of the {r:,} replicates simulates the counts of every unit in every year it is visited: count ~ Poisson(p·λ), log λ = log(mean) + β·t + unit effect + year effect + unit × year effect, with normal effects of the SDs given (on the log scale) and β = ln(1 + change/100). The replicate's trend is estimated with the same log-linear Poisson model with unit effects and quasi-likelihood scale between years as plotwise:trend, and the change counts as detected when its t test rejects at level {a:g}. Power is the share of replicates with a detection; its Monte Carlo SE is √(P(1 − P)/R) (Gerrodette 1987 for the setting).</source>
+        <translation>Chacun des {r:,} réplicats simule les comptages de chaque unité pour chaque année où elle est visitée : comptage ~ Poisson(p·λ), log λ = log(moyenne) + β·t + effet de l'unité + effet de l'année + effet unité × année, avec des effets normaux d'écarts-types donnés (sur l'échelle logarithmique) et β = ln(1 + variation/100). La tendance du réplicat est estimée avec le même modèle de Poisson log-linéaire à effets d'unité et facteur d'échelle de quasi-vraisemblance entre années que plotwise:trend, et la variation compte comme détectée quand son test t rejette l'absence de tendance au seuil {a:g}. La puissance est la part des réplicats avec une détection ; son erreur type de Monte-Carlo vaut √(P(1 − P)/R) (Gerrodette 1987 pour le cadre).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="163"/>
+        <source>Shorter programmes are the first years of the same simulated programmes; programmes with other numbers of units are the first units of larger simulated programmes, assigned to panels anew. Power for a programme of fewer years is shown only from the first length that leaves a degree of freedom for year-to-year variation.</source>
+        <translation>Les programmes plus courts sont les premières années des mêmes programmes simulés ; les programmes avec d'autres nombres d'unités sont les premières unités de programmes simulés plus grands, réaffectées à des panels. La puissance d'un programme de moins d'années n'est indiquée qu'à partir de la première durée qui laisse un degré de liberté pour la variation d'une année à l'autre.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="169"/>
+        <source>A one-season pilot gives the mean count and the spread between units (the estimate step's mean_c and sd_c): with a Poisson–log-normal count, SD_UNIT² = ln(1 + (s² − m)/m²) − SD_UNIT_YEAR². The unit × year and year-to-year SDs need several years of counts.</source>
+        <translation>Un pilote d'une saison donne le comptage moyen et la dispersion entre unités (mean_c et sd_c de l'étape d'estimation) : avec un comptage Poisson–log-normal, SD_UNIT² = ln(1 + (s² − m)/m²) − SD_UNIT_YEAR². Les écarts-types unité × année et d'une année à l'autre exigent plusieurs années de comptages.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="178"/>
+        <source>Power depends on the variance components assumed: the spread between units, the unit × year noise and above all the year-to-year variation shared by all units. Larger values than those entered give less power. The defaults are illustrative, not measured: use values from a pilot or from earlier years of the programme, and try a range.</source>
+        <translation>La puissance dépend des composantes de la variance supposées : la dispersion entre unités, le bruit unité × année et surtout la variation d'une année à l'autre commune à toutes les unités. Des valeurs plus grandes que celles saisies donnent moins de puissance. Les valeurs par défaut sont illustratives, non mesurées : utilisez des valeurs tirées d'un pilote ou des années précédentes du programme, et essayez une gamme de valeurs.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="184"/>
+        <source>The simulation assumes a steady change in % per year, constant detection, and that every planned visit happens. Missed visits, a change in detection or a trend that is not steady reduce the power.</source>
+        <translation>La simulation suppose une variation régulière en % par an, une détection constante et que chaque visite prévue a lieu. Des visites manquées, un changement de la détection ou une tendance irrégulière réduisent la puissance.</translation>
     </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
     <message>
-        <location filename="../processing/styles.py" line="220"/>
+        <location filename="../processing/styles.py" line="207"/>
         <source>primary unit</source>
         <translation>unité principale</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="221"/>
+        <location filename="../processing/styles.py" line="208"/>
         <source>reserve unit</source>
         <translation>unité de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="351"/>
+        <location filename="../processing/styles.py" line="338"/>
         <source>per {unit}</source>
         <translation>par {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="265"/>
+        <location filename="../processing/styles.py" line="252"/>
         <source>Density (animals {per})</source>
         <translation>Densité (animaux {per})</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="295"/>
+        <location filename="../processing/styles.py" line="282"/>
         <source>no estimate (no surveyed unit)</source>
         <translation>pas d'estimation (aucune unité inventoriée)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="405"/>
+        <location filename="../processing/styles.py" line="392"/>
         <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
         <translation>La couche {name} n'a pas pu recevoir son style ({error}) ; elle garde le style par défaut.</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="457"/>
+        <location filename="../processing/styles.py" line="444"/>
         <source>left out (no surveyed occasion)</source>
         <translation>écarté (aucune occasion échantillonnée)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="459"/>
+        <location filename="../processing/styles.py" line="446"/>
         <source>Occupancy given the detections (psi_cond)</source>
         <translation>Occupation sachant les détections (psi_cond)</translation>
     </message>
@@ -7888,17 +9027,17 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Unités avec comptages simulés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="200"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="199"/>
         <source>has no geometry</source>
         <translation>n'a pas de géométrie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="205"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="204"/>
         <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
         <translation>Couche « {layer} » : ces entités ne peuvent pas être comptées : {items}. Les unités ponctuelles et linéaires ont besoin d'un champ « area_m2 » positif (l'étape de disposition l'écrit) ; les polygones ont besoin d'une géométrie.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="181"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="180"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
     </message>
@@ -7968,17 +9107,17 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Observations avec les distances</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="249"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="245"/>
         <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
         <translation>Couche « {layer} » : les points des animaux {ids} n'ont pas de taille de groupe supérieure à 0 dans le champ « {field} ». Renseignez-la, ou ne choisissez pas de champ de taille des groupes.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="262"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="258"/>
         <source>Animals within {w:.1f} m of the lines or points are counted.</source>
         <translation>Les animaux à moins de {w:.1f} m des lignes ou des points sont comptés.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="285"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="281"/>
         <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
         <translation>Aucune fonction de détection n'a été choisie, il n'y a donc pas de distances : la couche des observations est vide.</translation>
     </message>
@@ -8036,7 +9175,7 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Stations avec historiques de détection</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatedetections.py" line="109"/>
+        <location filename="../processing/algorithms/simulatedetections.py" line="108"/>
         <source>{n} stations, {k} occasions: the species was detected at {d} stations ({g} animal groups).</source>
         <translation>{n} stations, {k} occasions : l'espèce a été détectée à {d} stations ({g} groupes d'animaux).</translation>
     </message>
@@ -8201,25 +9340,25 @@ Vérifiez l'accès à chaque station et sa sécurité avant le travail de terrai
     <message>
         <location filename="../processing/algorithms/stations.py" line="137"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation>La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
+        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="166"/>
+        <location filename="../processing/algorithms/stations.py" line="162"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="180"/>
+        <location filename="../processing/algorithms/stations.py" line="176"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="181"/>
+        <location filename="../processing/algorithms/stations.py" line="177"/>
         <source>{n} primary and {r} reserve stations, {s:.0f} m apart.</source>
         <translation>{n} stations principales et {r} de réserve, espacées de {s:.0f} m.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="199"/>
+        <location filename="../processing/algorithms/stations.py" line="195"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
@@ -8227,409 +9366,723 @@ Vérifiez l'accès à chaque station et sa sécurité avant le travail de terrai
 <context>
     <name>Stratify</name>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="67"/>
+        <location filename="../processing/algorithms/stratify.py" line="69"/>
         <source>Quantile (equal areas on the first covariate)</source>
         <translation>Quantiles (surfaces égales sur la première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="68"/>
+        <location filename="../processing/algorithms/stratify.py" line="70"/>
         <source>Equal interval (on the first covariate)</source>
         <translation>Intervalles égaux (sur la première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="69"/>
+        <location filename="../processing/algorithms/stratify.py" line="71"/>
         <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
         <translation>Racine cumulée des fréquences (Dalenius–Hodges, première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="70"/>
+        <location filename="../processing/algorithms/stratify.py" line="72"/>
         <source>k-means (all covariates, standardised)</source>
         <translation>k-moyennes (toutes les covariables, standardisées)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="71"/>
+        <location filename="../processing/algorithms/stratify.py" line="73"/>
         <source>Raster classes (each class of the first covariate)</source>
         <translation>Classes raster (chaque classe de la première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="75"/>
+        <location filename="../processing/algorithms/stratify.py" line="77"/>
         <source>Stratify from raster covariates</source>
         <translation>Stratifier à partir de covariables raster</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="78"/>
+        <location filename="../processing/algorithms/stratify.py" line="80"/>
         <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Forme des strates (zones de densité attendue semblable) à partir de covariables raster telles que l'altitude, un indice de végétation ou une carte d'occupation du sol. Seules comptent les cellules dont le centre est dans la base de sondage. Une cellule NoData dans une covariable est écartée et sa surface signalée.&lt;/p&gt;&lt;p&gt;Les covariables sont mises sur la grille de la première, dans le SCR de la base de sondage (une base en coordonnées géographiques est projetée dans la zone UTM de son centre). Les rasters dans un autre SCR ou sur une autre grille sont rééchantillonnés à la volée (bilinéaire ; plus proche voisin pour les classes raster). Les rasters sont lus bloc par bloc, si bien que la mémoire reste bornée quelle que soit leur taille.&lt;/p&gt;&lt;h3&gt;Méthodes&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantiles&lt;/b&gt; : strates de surface égale le long de la première covariable. Les limites sont les quantiles empiriques exacts des cellules de la base (Hyndman &amp;amp; Fan 1996, définition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalles égaux&lt;/b&gt; : l'étendue de la première covariable découpée en largeurs égales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Racine cumulée des fréquences&lt;/b&gt; : la règle de Dalenius &amp;amp; Hodges (1959) sur un histogramme à 100 classes de la première covariable (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-moyennes&lt;/b&gt; : toutes les covariables standardisées à moyenne 0 et écart-type 1, graines k-means++ (Arthur &amp;amp; Vassilvitskii 2007) et itérations de Lloyd sur un échantillon aléatoire de 100 000 cellules tiré avec la graine ; puis chaque cellule va au centre le plus proche.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Classes raster&lt;/b&gt; : chaque valeur de la première covariable (un raster catégoriel, 50 classes au plus) forme une strate ; le nombre de strates est ignoré.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Les strates sont numérotées de 1 à k par moyenne croissante de la première covariable. Les taches (4-connexité) plus petites que la surface minimale (ha) rejoignent une strate voisine avant que les strates ne soient converties en polygones : les grains par le tamis de GDAL, puis chaque petite tache, de la plus petite à la plus grande, rejoint la voisine qui l'amène à la surface minimale. Une tache qui ne touche aucune autre strate reste, avec un avertissement.&lt;/p&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Raster des strates : la strate de chaque cellule (0 = aucune).&lt;/li&gt;&lt;li&gt;Strates : un multipolygone par strate avec &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cellules × surface d'une cellule), &lt;i&gt;cov_mean&lt;/i&gt; et &lt;i&gt;cov_sd&lt;/i&gt; de la première covariable, et &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … pour les autres (écart-type sur les cellules de la strate).&lt;/li&gt;&lt;li&gt;Rapport : limites, surfaces, statistiques des covariables par strate, part de la variance de chaque covariable expliquée par les strates (R²), un histogramme avec les limites et une carte.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La graine aléatoire ne sert qu'aux k-moyennes (0 en tire une et l'enregistre).&lt;/p&gt;&lt;p&gt;Les strates sont un outil statistique : avant le travail de terrain, vérifiez l'accès à chaque unité et sa sécurité.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="113"/>
+        <location filename="../processing/algorithms/stratify.py" line="129"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="115"/>
+        <location filename="../processing/algorithms/stratify.py" line="131"/>
         <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
         <translation>Covariables raster (bande 1 de chacune ; la première fixe la grille)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="118"/>
+        <location filename="../processing/algorithms/stratify.py" line="134"/>
         <source>Method</source>
         <translation>Méthode</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="120"/>
+        <location filename="../processing/algorithms/stratify.py" line="136"/>
         <source>Number of strata (ignored for raster classes)</source>
         <translation>Nombre de strates (ignoré pour les classes raster)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="123"/>
+        <location filename="../processing/algorithms/stratify.py" line="139"/>
         <source>Minimum patch area (ha); smaller patches join a neighbour</source>
         <translation>Surface minimale d'une tache (ha) ; les taches plus petites rejoignent une voisine</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="127"/>
+        <location filename="../processing/algorithms/stratify.py" line="143"/>
         <source>Stratum raster</source>
         <translation>Raster des strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="251"/>
+        <location filename="../processing/algorithms/stratify.py" line="269"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="131"/>
+        <location filename="../processing/algorithms/stratify.py" line="147"/>
         <source>Number of strata formed</source>
         <translation>Nombre de strates formées</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="132"/>
+        <location filename="../processing/algorithms/stratify.py" line="148"/>
         <source>Share of the first covariate's variance explained by the strata (R²)</source>
         <translation>Part de la variance de la première covariable expliquée par les strates (R²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="139"/>
+        <location filename="../processing/algorithms/stratify.py" line="155"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="141"/>
+        <location filename="../processing/algorithms/stratify.py" line="157"/>
         <source>COVARIATES holds {n} rasters; use at most {m}.</source>
         <translation>COVARIATES contient {n} rasters ; utilisez-en au plus {m}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="146"/>
+        <location filename="../processing/algorithms/stratify.py" line="162"/>
         <source>COVARIATES: &apos;{name}&apos; is not a raster layer.</source>
         <translation>COVARIATES : « {name} » n'est pas une couche raster.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="148"/>
+        <location filename="../processing/algorithms/stratify.py" line="165"/>
         <source>Covariate &apos;{name}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
         <translation>La covariable « {name} » n'est pas un fichier raster lisible par GDAL. Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="176"/>
+        <location filename="../processing/algorithms/stratify.py" line="193"/>
         <source>Layer &apos;{layer}&apos; (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
         <translation>La couche « {layer} » (FRAME) n'a aucun polygone de surface positive. Choisissez la couche de la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="191"/>
+        <location filename="../processing/algorithms/stratify.py" line="208"/>
         <source>Warped onto the grid of &apos;{first}&apos; in {crs}: {names}.</source>
         <translation>Rééchantillonnées sur la grille de « {first} » en {crs} : {names}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="214"/>
+        <location filename="../processing/algorithms/stratify.py" line="231"/>
         <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
         <translation>{k} strates sur {ha} ha ; R² de « {name} » : {r2}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="235"/>
+        <location filename="../processing/algorithms/stratify.py" line="253"/>
         <source>Strata from raster covariates</source>
         <translation>Strates à partir de covariables raster</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <location filename="../processing/algorithms/stratify.py" line="258"/>
         <source>strata</source>
         <translation>strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>area stratified (ha)</source>
         <translation>surface stratifiée (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <location filename="../processing/algorithms/stratify.py" line="258"/>
         <source>frame covered</source>
         <translation>part de la base couverte</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <location filename="../processing/algorithms/stratify.py" line="258"/>
         <source>R² of {name}</source>
         <translation>R² de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="246"/>
+        <location filename="../processing/algorithms/stratify.py" line="264"/>
         <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
         <translation>Les strates couvrent les cellules de la base de sondage qui ont une valeur dans chaque covariable ({ha} ha). Un inventaire alloué sur ces strates ne vaut que pour cette surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Stratum</source>
         <translation>Strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Label</source>
         <translation>Libellé</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Area (ha)</source>
         <translation>Surface (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>% of area</source>
         <translation>% de la surface</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Cells</source>
         <translation>Cellules</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <location filename="../processing/algorithms/stratify.py" line="273"/>
         <source>{name} mean</source>
         <translation>moyenne de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <location filename="../processing/algorithms/stratify.py" line="273"/>
         <source>{name} SD</source>
         <translation>écart-type de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="265"/>
+        <location filename="../processing/algorithms/stratify.py" line="283"/>
         <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
         <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avec leur plus grande voisine (tamis GDAL, 4-connexité) avant la vectorisation ; surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir quelques cellules que la règle seule aurait mises dans une strate voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="271"/>
+        <location filename="../processing/algorithms/stratify.py" line="289"/>
         <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
         <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avant la vectorisation (4-connexité) : les taches minuscules (moins de {specks} cellules) avec leur plus grande voisine (tamis GDAL), puis {n} autres taches, de la plus petite à la plus grande, chacune avec la strate voisine qui formait la plus petite tache d'au moins {ha} ha (ou, à défaut, la plus grande), afin qu'une mosaïque de petites taches ne soit pas absorbée par une seule tache qui grandit. Surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir des cellules que la règle seule aurait mises dans une autre strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="282"/>
+        <location filename="../processing/algorithms/stratify.py" line="300"/>
         <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
         <translation>{n} tache(s) couvrant {area} ha ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData) et restent plus petites que {ha} ha.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="288"/>
+        <location filename="../processing/algorithms/stratify.py" line="306"/>
         <source>Every patch of the strata now covers at least {ha} ha.</source>
         <translation>Chaque tache des strates couvre désormais au moins {ha} ha.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="292"/>
+        <location filename="../processing/algorithms/stratify.py" line="310"/>
         <source>Method: {name}</source>
         <translation>Méthode : {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="296"/>
+        <location filename="../processing/algorithms/stratify.py" line="314"/>
         <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
         <translation>La strate h contient les cellules telles que b(h−1) ≤ {name} &lt; b(h). Limites sur {name} :</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="299"/>
+        <location filename="../processing/algorithms/stratify.py" line="317"/>
         <source>Boundary</source>
         <translation>Limite</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>Value</source>
         <translation>Valeur</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="302"/>
+        <location filename="../processing/algorithms/stratify.py" line="320"/>
         <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
         <translation>Quantiles empiriques exacts à h/k des cellules de la base (Hyndman &amp; Fan 1996, définition 7), trouvés en deux passes : un histogramme à 64 000 classes situe chaque quantile, puis les cellules de cette classe sont triées.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="307"/>
+        <location filename="../processing/algorithms/stratify.py" line="325"/>
         <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
         <translation>Dalenius &amp; Hodges (1959) : sur un histogramme de {name} à {n} classes, les limites sont les bornes supérieures des classes où le cumul de √f est le plus proche de h/k de son total.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="313"/>
+        <location filename="../processing/algorithms/stratify.py" line="331"/>
         <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
         <translation>Covariables standardisées avec leur moyenne et leur écart-type sur la base ; graines k-means++ et itérations de Lloyd sur un échantillon aléatoire de {m} cellules (graine {seed}) ; {it} itérations. Puis chaque cellule est allée au centre le plus proche.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="319"/>
+        <location filename="../processing/algorithms/stratify.py" line="337"/>
         <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
         <translation>Chaque classe de « {name} » forme une strate ({k} classes).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="321"/>
+        <location filename="../processing/algorithms/stratify.py" line="339"/>
         <source>Share of covariate variance explained by the strata (R²)</source>
         <translation>Part de la variance des covariables expliquée par les strates (R²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>Covariate</source>
         <translation>Covariable</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>Mean</source>
         <translation>Moyenne</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>SD</source>
         <translation>Écart-type</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>R²</source>
         <translation>R²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="325"/>
+        <location filename="../processing/algorithms/stratify.py" line="343"/>
         <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
         <translation>R² = 1 − Σ N_h S_h² / (N S²) : la part inter-strates de la variance de la covariable sur les cellules. Pour une grandeur qui suit exactement la covariable, une allocation proportionnelle sur ces strates réduirait la variance de la moyenne estimée de cette part par rapport à un échantillonnage aléatoire simple (Cochran 1977, ch. 5, approximation pour grande population). Le gain pour la densité animale est d'autant plus faible que la densité suit moins étroitement la covariable.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="332"/>
+        <location filename="../processing/algorithms/stratify.py" line="350"/>
         <source>Histogram of {name}</source>
         <translation>Histogramme de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>stratum {h}</source>
         <translation>strate {h}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>cells</source>
         <translation>cellules</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
         <translation>Cellules de la base selon {name}, colorées par strate ; tirets : limites des strates.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
         <translation>Cellules de la base selon {name}, colorées par strate (les strates des k-moyennes peuvent se chevaucher sur une covariable).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="347"/>
+        <location filename="../processing/algorithms/stratify.py" line="365"/>
         <source>Map</source>
         <translation>Carte</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="349"/>
+        <location filename="../processing/algorithms/stratify.py" line="368"/>
         <source>Strata within the sampling frame</source>
         <translation>Strates dans la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="351"/>
+        <location filename="../processing/algorithms/stratify.py" line="370"/>
         <source>Coverage</source>
         <translation>Couverture</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>Item</source>
         <translation>Élément</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>frame area (ha)</source>
         <translation>surface de la base (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>frame area outside the first covariate&apos;s extent (ha)</source>
         <translation>surface de la base hors de l'emprise de la première covariable (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>frame cells with NoData in a covariate (ha)</source>
         <translation>cellules de la base NoData dans une covariable (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>share of the frame covered</source>
         <translation>part de la base couverte</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>cells stratified</source>
         <translation>cellules stratifiées</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>cell size (m)</source>
         <translation>taille de cellule (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>grid</source>
         <translation>grille</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>covariates warped on the fly</source>
         <translation>covariables rééchantillonnées à la volée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>none</source>
         <translation>aucune</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="367"/>
+        <location filename="../processing/algorithms/stratify.py" line="386"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="369"/>
+        <location filename="../processing/algorithms/stratify.py" line="388"/>
         <source>Sampling frame (FRAME)</source>
         <translation>Base de sondage (FRAME)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="370"/>
+        <location filename="../processing/algorithms/stratify.py" line="389"/>
         <source>Covariates (COVARIATES)</source>
         <translation>Covariables (COVARIATES)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="371"/>
+        <location filename="../processing/algorithms/stratify.py" line="390"/>
         <source>Method (METHOD)</source>
         <translation>Méthode (METHOD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <location filename="../processing/algorithms/stratify.py" line="391"/>
         <source>Number of strata (STRATA)</source>
         <translation>Nombre de strates (STRATA)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <location filename="../processing/algorithms/stratify.py" line="391"/>
         <source>ignored</source>
         <translation>ignoré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="373"/>
+        <location filename="../processing/algorithms/stratify.py" line="392"/>
         <source>Minimum patch area (MIN_AREA, ha)</source>
         <translation>Surface minimale d'une tache (MIN_AREA, ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="374"/>
+        <location filename="../processing/algorithms/stratify.py" line="393"/>
         <source>CRS of the computation and the outputs</source>
         <translation>SCR du calcul et des sorties</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="377"/>
+        <location filename="../processing/algorithms/stratify.py" line="396"/>
         <source>Seed (SEED)</source>
         <translation>Graine (SEED)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stratify.py" line="112"/>
+        <source>&lt;h3&gt;Minimum patch area&lt;/h3&gt;&lt;p&gt;The default of {default:g} ha is chosen for field teams: a patch smaller than a few sample units is not a stratum. Four 20 m × 20 m plots 50 m apart need about 1 ha; a zone smaller than that cannot hold the units a stratum needs for its own variance, and on the map it is noise of the covariate, not a zone to survey. Raise it for larger units (transects, camera stations); 0 keeps every cell's stratum.&lt;/p&gt;&lt;p&gt;A speckled covariate (a 10 m vegetation index, a noisy classification) can form millions of patches. The patches are counted before they are merged and before they are turned into polygons: strata with more than {max_patches:,} patches stop the run with an error that gives their number and a MIN_AREA that brings them under the limit, and a covariate too speckled to merge in bounded memory (more than {max_sieve:,} patches) stops it with advice to smooth or coarsen the covariate first. When the patches left after merging the specks are too many to merge one by one, patches below MIN_AREA first join their largest neighbour (the rule of GDAL's sieve filter), with a warning.&lt;/p&gt;</source>
+        <translation>&lt;h3&gt;Surface minimale d'une tache&lt;/h3&gt;&lt;p&gt;La valeur par défaut de {default:g} ha est choisie pour les équipes de terrain : une tache plus petite que quelques unités d'échantillonnage n'est pas une strate. Quatre placettes de 20 m × 20 m espacées de 50 m demandent environ 1 ha ; une zone plus petite ne peut pas contenir les unités dont une strate a besoin pour sa propre variance, et sur la carte c'est du bruit de la covariable, pas une zone à inventorier. Augmentez-la pour des unités plus grandes (transects, stations de pièges photographiques) ; 0 garde la strate de chaque cellule.&lt;/p&gt;&lt;p&gt;Une covariable mouchetée (un indice de végétation à 10 m, une classification bruitée) peut former des millions de taches. Les taches sont comptées avant d'être fusionnées et avant d'être converties en polygones : des strates de plus de {max_patches:,} taches arrêtent le traitement avec une erreur qui donne leur nombre et un MIN_AREA qui les ramène sous la limite, et une covariable trop mouchetée pour être fusionnée en mémoire bornée (plus de {max_sieve:,} taches) l'arrête avec le conseil de lisser la covariable ou d'agrandir ses cellules d'abord. Quand les taches restant après la fusion des taches minuscules sont trop nombreuses pour être fusionnées une à une, les taches sous MIN_AREA rejoignent d'abord leur plus grande voisine (la règle du filtre tamis de GDAL), avec un avertissement.&lt;/p&gt;</translation>
+    </message>
+</context>
+<context>
+    <name>Trend</name>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="128"/>
+        <source>Trend over years</source>
+        <translation>Tendance au fil des années</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="43"/>
+        <source>Estimates the change per year of a monitored population, with its confidence interval and p-value, and a yearly index.
+
+Input: a layer or table with one record per unit and year (unit counts), or one record per year (yearly estimates).
+Source 0, unit counts: unit id, year and count fields; optionally a stratum field (a trend per stratum is added to the report) and a unit-area field (the area or length surveyed in that record: counts are compared per unit of effort). A NULL count means not surveyed. Units need not be surveyed every year (revisit panels). The model is log-linear Poisson with one effect per unit, log E[count] = log(area) + unit effect + β·year (McCullagh &amp; Nelder 1989), fitted by Newton's method with the unit effects in closed form. Overdispersion by quasi-likelihood: the interval uses the deviance drop between a model with one effect per year and the trend model, per degree of freedom, so that years that differ as a whole (weather, observers) widen it, with Student's t. Units that never counted an animal are left out of the fit (they carry no information on the trend).
+Source 1, yearly estimates: year, estimate and standard-error fields (for example the abund and abund_se of the estimate step, one season per record; with a stratum field, the rows 'all' are used). Weighted log-linear regression in which each year's variance is its sampling variance ln(1 + CV²) plus the year-to-year process variance, estimated by the method of moments (DerSimonian &amp; Laird 1986; Thompson &amp; Sharp 1999); the slope's variance is scaled by the residual mean square, with t on k − 2 degrees of freedom (Hartung &amp; Knapp 2001).
+Confidence level: of the intervals (default 0.95).
+
+Outputs: the yearly index table (year, index with index_lo and index_hi, and the fitted trend with trend_lo and trend_hi); the numbers CHANGE, CHANGE_LO, CHANGE_HI (% per year) and P_VALUE (two-sided, no trend); an HTML report with the index and the trend, the change per year in words, and the cautions.
+
+At least 3 years are needed; a unit counted twice in a year, negative counts or estimates not above 0 stop the run, naming the records.
+
+A trend in counts is a trend in the population only if detection did not change over the years.
+
+References: McCullagh &amp; Nelder (1989); Bishop, Fienberg &amp; Holland (1975); DerSimonian &amp; Laird (1986); Thompson &amp; Sharp (1999); Hartung &amp; Knapp (2001); Urquhart &amp; Kincaid (1999).</source>
+        <translation>Estime la variation annuelle d'une population suivie, avec son intervalle de confiance et sa valeur p, ainsi qu'un indice annuel.
+
+Entrée : une couche ou une table avec un enregistrement par unité et par année (comptages par unité), ou un enregistrement par année (estimations annuelles).
+Source 0, comptages par unité : champs d'identifiant d'unité, d'année et de comptage ; en option un champ de strate (une tendance par strate est ajoutée au rapport) et un champ de surface d'unité (la surface ou la longueur inventoriée dans cet enregistrement : les comptages sont comparés par unité d'effort). Un comptage NULL signifie non inventorié. Les unités n'ont pas besoin d'être inventoriées chaque année (panels de revisite). Le modèle est un modèle de Poisson log-linéaire avec un effet par unité, log E[comptage] = log(surface) + effet de l'unité + β·année (McCullagh &amp; Nelder 1989), ajusté par la méthode de Newton avec les effets des unités sous forme explicite. Surdispersion par quasi-vraisemblance : l'intervalle utilise la baisse de déviance entre un modèle à un effet par année et le modèle de tendance, par degré de liberté, si bien que des années qui diffèrent dans leur ensemble (météo, observateurs) l'élargissent, avec le t de Student. Les unités qui n'ont jamais compté d'animal sont écartées de l'ajustement (elles n'apportent aucune information sur la tendance).
+Source 1, estimations annuelles : champs d'année, d'estimation et d'erreur type (par exemple abund et abund_se de l'étape d'estimation, une saison par enregistrement ; avec un champ de strate, les lignes 'all' sont utilisées). Régression log-linéaire pondérée dans laquelle la variance de chaque année est sa variance d'échantillonnage ln(1 + CV²) plus la variance de processus d'une année à l'autre, estimée par la méthode des moments (DerSimonian &amp; Laird 1986 ; Thompson &amp; Sharp 1999) ; la variance de la pente est mise à l'échelle par le carré moyen résiduel, avec t sur k − 2 degrés de liberté (Hartung &amp; Knapp 2001).
+Niveau de confiance : celui des intervalles (0.95 par défaut).
+
+Sorties : la table de l'indice annuel (year, index avec index_lo et index_hi, et la tendance ajustée avec trend_lo et trend_hi) ; les valeurs CHANGE, CHANGE_LO, CHANGE_HI (% par an) et P_VALUE (bilatérale, absence de tendance) ; un rapport HTML avec l'indice et la tendance, la variation annuelle en toutes lettres et les mises en garde.
+
+Il faut au moins 3 années ; une unité comptée deux fois la même année, des comptages négatifs ou des estimations non supérieures à 0 arrêtent le traitement, en nommant les enregistrements.
+
+Une tendance des comptages n'est une tendance de la population que si la détection n'a pas changé au fil des années.
+
+Références : McCullagh &amp; Nelder (1989) ; Bishop, Fienberg &amp; Holland (1975) ; DerSimonian &amp; Laird (1986) ; Thompson &amp; Sharp (1999) ; Hartung &amp; Knapp (2001) ; Urquhart &amp; Kincaid (1999).</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="76"/>
+        <source>Counts or yearly estimates (layer or table)</source>
+        <translation>Comptages ou estimations annuelles (couche ou table)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="78"/>
+        <source>What the input holds</source>
+        <translation>Contenu de l'entrée</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="78"/>
+        <source>Unit counts</source>
+        <translation>Comptages par unité</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="78"/>
+        <source>Yearly estimates</source>
+        <translation>Estimations annuelles</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Unit id field (unit counts)</source>
+        <translation>Champ d'identifiant d'unité (comptages par unité)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Year field</source>
+        <translation>Champ d'année</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Count field (unit counts)</source>
+        <translation>Champ de comptage (comptages par unité)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Estimate field (yearly estimates)</source>
+        <translation>Champ d'estimation (estimations annuelles)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Standard-error field (yearly estimates)</source>
+        <translation>Champ d'erreur type (estimations annuelles)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Stratum field (optional)</source>
+        <translation>Champ de strate (facultatif)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Unit-area field: area surveyed per record (optional)</source>
+        <translation>Champ de surface d'unité : surface inventoriée par enregistrement (facultatif)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="93"/>
+        <source>Confidence level</source>
+        <translation>Niveau de confiance</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="96"/>
+        <source>Yearly index</source>
+        <translation>Indice annuel</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>Change per year (%)</source>
+        <translation>Variation annuelle (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>Lower limit of the change per year (%)</source>
+        <translation>Limite inférieure de la variation annuelle (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>Upper limit of the change per year (%)</source>
+        <translation>Limite supérieure de la variation annuelle (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>p-value of the trend (two-sided)</source>
+        <translation>Valeur p de la tendance (bilatérale)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="130"/>
+        <source>Change per year: {c:+.2f}% ({lo:+.2f}% to {hi:+.2f}%), p = {p:.3g}.</source>
+        <translation>Variation annuelle : {c:+.2f}% ({lo:+.2f}% à {hi:+.2f}%), p = {p:.3g}.</translation>
+    </message>
+</context>
+<context>
+    <name>TrendPower</name>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="191"/>
+        <source>Power to detect a trend</source>
+        <translation>Puissance pour détecter une tendance</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="46"/>
+        <source>Estimates, by simulation, how likely a monitoring programme is to detect a given change per year: the power, by number of years and number of units, and the years needed for 80% power.
+
+Units per year and panels: N_UNITS units over YEARS years, in the panel design of plotwise:panels (0 every unit every year; 1 rotating: PANELS panels, each unit once every PANELS years; 2 split: a core of CORE_SHARE of the units every year plus rotating panels). Or give a panels layer (the output of plotwise:panels): its units and their visit years replace N_UNITS, YEARS and the design.
+Changes to detect: annual changes in % per year, several separated by commas (e.g. -3, -5).
+Mean count: the mean number of animals per unit in the first year (before detection).
+Variance components, as standard deviations on the log scale: between units (SD_UNIT, lasting differences between units), unit × year (SD_UNIT_YEAR, a unit's ups and downs) and year to year (SD_YEAR, shared by all units: weather, observers, conditions). The defaults (1.0, 0.3, 0.1) are illustrative only: use your own values. A pilot table (the estimate step's output table, fields n, mean_c and sd_c) can give the mean count and SD_UNIT: they are then taken from it by matching a Poisson–log-normal count. The other two need several years of counts.
+Detection probability: each animal is counted with this probability (constant over the years).
+Significance level and test: the level of the t test on the trend; two-sided, or one-sided in the direction of the change. 0.1 is often used in monitoring (common practice).
+Replicates: simulated programmes per change (1,000 give a Monte Carlo SE of at most 0.016). Random seed: 0 draws one and records it.
+
+Each replicate simulates Poisson counts for every unit and visit, estimates the trend with the same model as plotwise:trend (log-linear Poisson with unit effects, quasi-likelihood scale between years) and records whether the change was detected (Gerrodette 1987 for the setting).
+
+Outputs: a table of power with its Monte Carlo SE by years, n_units and change; an HTML report with the power curves against years and against units and the years needed for 80% power. Power depends on the variance components assumed.
+
+References: Gerrodette (1987); Urquhart &amp; Kincaid (1999); McDonald (2003); McCullagh &amp; Nelder (1989).
+
+A monitoring programme sends teams out every year: check every unit's access and safety before each season; the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Estime, par simulation, la probabilité qu'un programme de suivi détecte une variation annuelle donnée : la puissance, selon le nombre d'années et le nombre d'unités, et les années nécessaires pour une puissance de 80 %.
+
+Unités par an et panels : N_UNITS unités sur YEARS années, dans le plan de panels de plotwise:panels (0 toutes les unités chaque année ; 1 rotatifs : PANELS panels, chaque unité une fois tous les PANELS ans ; 2 partagés : un noyau de CORE_SHARE des unités chaque année plus des panels rotatifs). Ou donnez une couche de panels (la sortie de plotwise:panels) : ses unités et leurs années de visite remplacent N_UNITS, YEARS et le plan.
+Variations à détecter : variations annuelles en % par an, plusieurs séparées par des virgules (p. ex. -3, -5).
+Comptage moyen : le nombre moyen d'animaux par unité la première année (avant détection).
+Composantes de la variance, sous forme d'écarts-types sur l'échelle logarithmique : entre unités (SD_UNIT, différences durables entre unités), unité × année (SD_UNIT_YEAR, les hauts et les bas d'une unité) et d'une année à l'autre (SD_YEAR, communs à toutes les unités : météo, observateurs, conditions). Les valeurs par défaut (1.0, 0.3, 0.1) ne sont qu'illustratives : utilisez vos propres valeurs. Une table pilote (la table de sortie de l'étape d'estimation, champs n, mean_c et sd_c) peut donner le comptage moyen et SD_UNIT : ils en sont alors tirés en ajustant un comptage Poisson–log-normal. Les deux autres exigent plusieurs années de comptages.
+Probabilité de détection : chaque animal est compté avec cette probabilité (constante au fil des années).
+Seuil de signification et test : le seuil du test t sur la tendance ; bilatéral, ou unilatéral dans le sens de la variation. 0.1 est souvent utilisé en suivi (pratique courante).
+Réplicats : programmes simulés par variation (1 000 donnent une erreur type de Monte-Carlo d'au plus 0.016). Graine aléatoire : 0 en tire une et l'enregistre.
+
+Chaque réplicat simule des comptages de Poisson pour chaque unité et chaque visite, estime la tendance avec le même modèle que plotwise:trend (Poisson log-linéaire avec effets d'unité, facteur d'échelle de quasi-vraisemblance entre années) et enregistre si la variation a été détectée (Gerrodette 1987 pour le cadre).
+
+Sorties : une table de la puissance avec son erreur type de Monte-Carlo selon years, n_units et change ; un rapport HTML avec les courbes de puissance en fonction des années et des unités, et les années nécessaires pour une puissance de 80 %. La puissance dépend des composantes de la variance supposées.
+
+Références : Gerrodette (1987) ; Urquhart &amp; Kincaid (1999) ; McDonald (2003) ; McCullagh &amp; Nelder (1989).
+
+Un programme de suivi envoie des équipes sur le terrain chaque année : vérifiez l'accès à chaque unité et sa sécurité avant chaque saison ; l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="79"/>
+        <source>Units (N_UNITS)</source>
+        <translation>Unités (N_UNITS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="81"/>
+        <source>Years of the programme</source>
+        <translation>Années du programme</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Panel design</source>
+        <translation>Plan de panels</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Every unit every year</source>
+        <translation>Toutes les unités chaque année</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Rotating panels</source>
+        <translation>Panels rotatifs</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Split panels (core + rotating)</source>
+        <translation>Panels partagés (noyau + rotatifs)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="88"/>
+        <source>Rotating panels (K)</source>
+        <translation>Panels rotatifs (K)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="91"/>
+        <source>Share of units in the core (split panels)</source>
+        <translation>Part des unités dans le noyau (panels partagés)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="94"/>
+        <source>Panels layer (output of plotwise:panels; replaces the design)</source>
+        <translation>Couche des panels (sortie de plotwise:panels ; remplace le plan)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="97"/>
+        <source>Changes to detect (% per year, comma-separated)</source>
+        <translation>Variations à détecter (% par an, séparées par des virgules)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>Mean animals per unit in the first year</source>
+        <translation>Nombre moyen d'animaux par unité la première année</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>SD between units (log scale)</source>
+        <translation>Écart-type entre unités (échelle logarithmique)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>SD unit × year (log scale)</source>
+        <translation>Écart-type unité × année (échelle logarithmique)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>SD year to year (log scale)</source>
+        <translation>Écart-type d'une année à l'autre (échelle logarithmique)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="107"/>
+        <source>Pilot estimate table (gives the mean count and SD between units; optional)</source>
+        <translation>Table d'estimation pilote (donne le comptage moyen et l'écart-type entre unités ; facultative)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="110"/>
+        <source>Detection probability</source>
+        <translation>Probabilité de détection</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="113"/>
+        <source>Significance level</source>
+        <translation>Seuil de signification</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="115"/>
+        <source>Two-sided test</source>
+        <translation>Test bilatéral</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="116"/>
+        <source>Replicates</source>
+        <translation>Réplicats</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="120"/>
+        <source>Power table</source>
+        <translation>Table de puissance</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="128"/>
+        <source>every unit every year</source>
+        <translation>toutes les unités chaque année</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="128"/>
+        <source>rotating panels</source>
+        <translation>panels rotatifs</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="128"/>
+        <source>split panels</source>
+        <translation>panels partagés</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="138"/>
+        <source>(K = {k})</source>
+        <translation>(K = {k})</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="144"/>
+        <source>{k} panels from the layer</source>
+        <translation>{k} panels tirés de la couche</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="187"/>
+        <source>Change {c:+g}% per year: 80% power after {t} years.</source>
+        <translation>Variation de {c:+g}% par an : puissance de 80% après {t} ans.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="187"/>
+        <source>Change {c:+g}% per year: 80% power not reached within {t} years.</source>
+        <translation>Variation de {c:+g}% par an : puissance de 80% non atteinte en {t} ans.</translation>
     </message>
 </context>
 </TS>
