@@ -93,7 +93,7 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
         <translation>Proporcional al área</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <location filename="../processing/algorithms/allocate.py" line="292"/>
         <source>Neyman</source>
         <translation>Neyman</translation>
     </message>
@@ -145,65 +145,65 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
     <message>
         <location filename="../processing/algorithms/allocate.py" line="190"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
-        <translation>La capa «{layer}» no tiene el campo «{field}»: se usan las áreas de los polígonos.</translation>
+        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}»: se usan las áreas de los polígonos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="202"/>
+        <location filename="../processing/algorithms/allocate.py" line="194"/>
         <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
         <translation>La capa «{layer}» no tiene ningún estrato con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="217"/>
+        <location filename="../processing/algorithms/allocate.py" line="209"/>
         <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
         <translation>campo «{name}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="224"/>
         <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
         <translation>No hay campo de DE piloto: se usa como sustituto la DE de la covariable («{field}»). Esto supone que los conteos siguen a la covariable; sustitúyala por la DE de un muestreo piloto cuando la tenga. Los errores estándar esperados quedan entonces en unidades de la covariable, no en conteos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>polygon area</source>
         <translation>área del polígono</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>pilot SD</source>
         <translation>desviación estándar piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>pilot mean</source>
         <translation>media piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="240"/>
+        <location filename="../processing/algorithms/allocate.py" line="232"/>
         <source>cost</source>
         <translation>coste</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="276"/>
+        <location filename="../processing/algorithms/allocate.py" line="268"/>
         <source>The output layer could not be created.</source>
         <translation>No se pudo crear la capa de salida.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="286"/>
+        <location filename="../processing/algorithms/allocate.py" line="278"/>
         <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
         <translation>{total} unidades asignadas ({method}); CV esperado de la densidad global: {cv}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="299"/>
+        <location filename="../processing/algorithms/allocate.py" line="291"/>
         <source>equal</source>
         <translation>igual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="299"/>
+        <location filename="../processing/algorithms/allocate.py" line="291"/>
         <source>proportional to area</source>
         <translation>proporcional al área</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
+        <location filename="../processing/algorithms/allocate.py" line="292"/>
         <source>optimal with cost</source>
         <translation>óptima con coste</translation>
     </message>
@@ -504,6 +504,11 @@ Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad
         <location filename="../processing/algorithms/allocate.py" line="159"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/allocate.py" line="185"/>
+        <source>Layer &apos;{layer}&apos; has no area field: the polygon areas are used.</source>
+        <translation>La capa «{layer}» no tiene campo de área: se usan las áreas de los polígonos.</translation>
     </message>
 </context>
 <context>
@@ -829,7 +834,7 @@ Las estimaciones de un muestreo sobre este marco valen solo para el marco. Exclu
 <context>
     <name>CompareDesigns</name>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="61"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="62"/>
         <source>Compare survey designs by simulation</source>
         <translation>Comparar diseños de muestreo por simulación</translation>
     </message>
@@ -867,37 +872,37 @@ Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación
 La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="110"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
         <source>Density surface (expected animals per km²)</source>
         <translation>Superficie de densidad (animales esperados por km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="112"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="114"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="115"/>
         <source>Strata (for the stratified designs)</source>
         <translation>Estratos (para los diseños estratificados)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="119"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="120"/>
         <source>Stratum field</source>
         <translation>Campo de estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Designs to compare</source>
         <translation>Diseños que comparar</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Simple random</source>
         <translation>Aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Stratified, proportional allocation</source>
         <translation>Estratificado, asignación proporcional</translation>
     </message>
@@ -907,167 +912,167 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
         <translation type="obsolete">Estratificado, asignación de Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="133"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="134"/>
         <source>Number of units</source>
         <translation>Número de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Unit shape</source>
         <translation>Forma de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Point station</source>
         <translation>Estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Square plot</source>
         <translation>Parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Circular plot</source>
         <translation>Parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="138"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Line transect</source>
         <translation>Transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="145"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="146"/>
         <source>Unit size (m): counting radius, side, radius or transect length</source>
         <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="151"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="152"/>
         <source>Half-width of a transect&apos;s counting strip (m)</source>
         <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="157"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="158"/>
         <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
         <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="164"/>
         <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
         <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="170"/>
         <source>Simulated surveys per design</source>
         <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="176"/>
         <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
         <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Variance estimator for the grid and balanced designs</source>
         <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Simple random sampling formula</source>
         <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="189"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="190"/>
         <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
         <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="201"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Design comparison</source>
         <translation>Comparación de diseños</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="205"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="206"/>
         <source>Recommended design</source>
         <translation>Diseño recomendado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="211"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="212"/>
         <source>The density surface could not be opened.</source>
         <translation>No se pudo abrir la superficie de densidad.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="214"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="215"/>
         <source>The sampling frame could not be opened.</source>
         <translation>No se pudo abrir el marco de muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="219"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
         <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
         <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/comparedesigns.py" line="233"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
-        <translation>La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
+        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="244"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
         <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
         <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="255"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
         <source>No strata were given: the stratified designs are left out ({names}).</source>
         <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="259"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="254"/>
         <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
         <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="277"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="272"/>
         <source>Reading the density surface…</source>
         <translation>Leyendo la superficie de densidad…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="283"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="278"/>
         <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
         <translation>La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="308"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="303"/>
         <source>Simulating {n} units…</source>
         <translation>Simulando {n} unidades…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="314"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="309"/>
         <source>{n} units were left out of the range: {why}</source>
         <translation>{n} unidades quedaron fuera del rango: {why}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="321"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="316"/>
         <source>The output table could not be created.</source>
         <translation>No se pudo crear la tabla de salida.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="340"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="335"/>
         <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
         <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
     </message>
@@ -1442,7 +1447,7 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
         <translation type="obsolete">La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="68"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="69"/>
         <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -1475,22 +1480,22 @@ Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación
 La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Stratified, Neyman allocation with the true S_h (best case)</source>
         <translation>Estratificado, asignación de Neyman con la S_h verdadera (mejor caso)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
         <source>Stratified, Neyman allocation from a pilot survey</source>
         <translation>Estratificado, asignación de Neyman a partir de un muestreo piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>Vecindario local, escalado a la fórmula simple (nuestra variante)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="195"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="196"/>
         <source>Pilot units per stratum for the pilot-based Neyman design</source>
         <translation>Unidades piloto por estrato para el diseño de Neyman basado en un piloto</translation>
     </message>
@@ -1931,85 +1936,85 @@ Seguridad en el terreno: el muestreo de distancias envía observadores a lo larg
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="234"/>
         <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
-        <translation>La capa «{layer}» no tiene campo para {what}. Elija el campo que los contiene.</translation>
+        <translation type="obsolete">La capa «{layer}» no tiene campo para {what}. Elija el campo que los contiene.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="232"/>
         <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
         <translation>Los intervalos de distancia «{text}» no son números. Escriba los límites de los intervalos en m, desde 0, separados por comas, p. ej. 0, 10, 25, 50, 100.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="256"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="242"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>Layer &apos;{layer}&apos; holds {kinds} geometries, but the survey type is {survey}. Choose the survey type that matches the units (line transects need lines, point transects points).</source>
         <translation>La capa «{layer}» contiene geometrías {kinds}, pero el tipo de muestreo es: {survey}. Elija el tipo de muestreo que corresponde a las unidades (los transectos lineales necesitan líneas; los puntuales, puntos).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>line transects</source>
         <translation>transectos lineales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="260"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="246"/>
         <source>point transects</source>
         <translation>transectos puntuales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="273"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="259"/>
         <source>{n} reserve unit(s) without observations were left out (not surveyed).</source>
         <translation>Se dejaron fuera {n} unidad(es) de reserva sin observaciones (no muestreada(s)).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="294"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="280"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have a number of visits in the field &apos;{field}&apos; that is not a whole number of 0 or more. Correct them.</source>
         <translation>Capa «{layer}»: los puntos {ids} tienen en el campo «{field}» un número de visitas que no es un número entero de 0 o más. Corríjalos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="299"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="285"/>
         <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
         <translation>Capa «{layer}»: hay observaciones que nombran los puntos {ids}, cuyo campo de visitas «{field}» está vacío o es 0. Indique su número de visitas o corrija los identificadores de unidad de las observaciones.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="305"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="291"/>
         <source>{n} point(s) with no visits were left out (not surveyed).</source>
         <translation>Se dejaron fuera {n} punto(s) sin visitas (no muestreado(s)).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="315"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="300"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos, o indique una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="319"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="304"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
         <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="327"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="312"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>unit ids</source>
-        <translation>los identificadores de unidad</translation>
+        <translation type="obsolete">los identificadores de unidad</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/distancedensity.py" line="347"/>
         <source>distances</source>
-        <translation>las distancias</translation>
+        <translation type="obsolete">las distancias</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="447"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="430"/>
         <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
         <translation>Función de detección{where}: {model}, P = {p:.3f}, ancho efectivo {esw:.1f} m, {n} detecciones.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="451"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="434"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
@@ -2017,7 +2022,7 @@ Seguridad en el terreno: el muestreo de distancias envía observadores a lo larg
 <context>
     <name>Estimate</name>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="73"/>
+        <location filename="../processing/algorithms/estimate.py" line="74"/>
         <source>Estimate density and abundance</source>
         <translation>Estimar la densidad y la abundancia</translation>
     </message>
@@ -2071,202 +2076,202 @@ Total verdadero: solo para simulaciones y formación. El informe lo muestra ento
 Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="138"/>
+        <location filename="../processing/algorithms/estimate.py" line="139"/>
         <source>Sample units with counts</source>
         <translation>Unidades de muestreo con conteos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="140"/>
+        <location filename="../processing/algorithms/estimate.py" line="141"/>
         <source>Count field</source>
         <translation>Campo de conteo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="142"/>
+        <location filename="../processing/algorithms/estimate.py" line="143"/>
         <source>Stratum field of the units</source>
         <translation>Campo de estrato de las unidades</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="145"/>
+        <location filename="../processing/algorithms/estimate.py" line="146"/>
         <source>Unit area field (m²)</source>
         <translation>Campo de área de la unidad (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="148"/>
+        <location filename="../processing/algorithms/estimate.py" line="149"/>
         <source>Fixed unit area for points and lines (m²; 0: not used)</source>
         <translation>Área fija de la unidad para puntos y líneas (m²; 0: no se usa)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="151"/>
+        <location filename="../processing/algorithms/estimate.py" line="152"/>
         <source>Strip width of line transects (m, full width; 0: not used)</source>
         <translation>Ancho de franja de los transectos lineales (m, ancho total; 0: no se usa)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="154"/>
+        <location filename="../processing/algorithms/estimate.py" line="155"/>
         <source>Strata (the frame)</source>
         <translation>Estratos (el marco)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="156"/>
+        <location filename="../processing/algorithms/estimate.py" line="157"/>
         <source>Stratum id field of the strata</source>
         <translation>Campo identificador de los estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="159"/>
+        <location filename="../processing/algorithms/estimate.py" line="160"/>
         <source>Confidence level</source>
         <translation>Nivel de confianza</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>Confidence interval</source>
         <translation>Intervalo de confianza</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>t with Satterthwaite degrees of freedom</source>
         <translation>t con los grados de libertad de Satterthwaite</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>Log-normal</source>
         <translation>Log-normal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="162"/>
+        <location filename="../processing/algorithms/estimate.py" line="163"/>
         <source>Stratified bootstrap (2,000 resamples)</source>
         <translation>Bootstrap estratificado (2.000 remuestreos)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="166"/>
+        <location filename="../processing/algorithms/estimate.py" line="167"/>
         <source>Finite-population correction</source>
         <translation>Corrección por población finita</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="168"/>
+        <location filename="../processing/algorithms/estimate.py" line="169"/>
         <source>Detection probability p (from a separate study; 1: all seen)</source>
         <translation>Probabilidad de detección p (de un estudio aparte; 1: todos vistos)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="171"/>
+        <location filename="../processing/algorithms/estimate.py" line="172"/>
         <source>Standard error of p</source>
         <translation>Error estándar de p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="175"/>
         <source>Area unit of the results</source>
         <translation>Unidad de área de los resultados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="175"/>
         <source>km²</source>
         <translation>km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="174"/>
+        <location filename="../processing/algorithms/estimate.py" line="175"/>
         <source>hectares</source>
         <translation>hectáreas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="177"/>
+        <location filename="../processing/algorithms/estimate.py" line="178"/>
         <source>Target CV for the next survey (0: not used; e.g. 0.15)</source>
         <translation>CV objetivo para el próximo muestreo (0: no se usa; p. ej. 0.15)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Variance estimator</source>
         <translation>Estimador de la varianza</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Simple random sampling formula</source>
         <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Local neighbourhood (systematic or spatially balanced layouts)</source>
         <translation>Vecindario local (disposiciones sistemáticas o espacialmente equilibradas)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="191"/>
+        <location filename="../processing/algorithms/estimate.py" line="192"/>
         <source>The count field holds presence (1) / absence (0)</source>
         <translation>El campo de conteo contiene presencia (1) / ausencia (0)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="193"/>
+        <location filename="../processing/algorithms/estimate.py" line="194"/>
         <source>Leave out strata with no surveyed unit (the frame shrinks)</source>
         <translation>Dejar fuera los estratos sin unidades muestreadas (el marco se reduce)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="196"/>
+        <location filename="../processing/algorithms/estimate.py" line="197"/>
         <source>True total of a simulated population (simulations and training only; 0: none)</source>
         <translation>Total verdadero de una población simulada (solo simulaciones y formación; 0: ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="201"/>
+        <location filename="../processing/algorithms/estimate.py" line="202"/>
         <source>Strata with estimates</source>
         <translation>Estratos con estimaciones</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="203"/>
+        <location filename="../processing/algorithms/estimate.py" line="204"/>
         <source>Estimate table</source>
         <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Overall density</source>
         <translation>Densidad global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>SE of the overall density</source>
         <translation>Error estándar de la densidad global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Overall abundance</source>
         <translation>Abundancia global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Lower confidence limit of the abundance</source>
         <translation>Límite inferior de confianza de la abundancia</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>Upper confidence limit of the abundance</source>
         <translation>Límite superior de confianza de la abundancia</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="206"/>
+        <location filename="../processing/algorithms/estimate.py" line="207"/>
         <source>CV of the overall estimate</source>
         <translation>CV de la estimación global</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="323"/>
         <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
-        <translation>La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
+        <translation type="obsolete">La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="333"/>
+        <location filename="../processing/algorithms/estimate.py" line="322"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos (plotwise:stratify escribe 'stratum') o dé una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="338"/>
+        <location filename="../processing/algorithms/estimate.py" line="327"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
         <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato y no se usa el campo «{field}» de las unidades. Si las unidades se asignaron a los estratos de forma desigual, dé en su lugar los estratos: una media no estratificada está entonces sesgada.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="241"/>
+        <location filename="../processing/algorithms/estimate.py" line="236"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="247"/>
+        <location filename="../processing/algorithms/estimate.py" line="242"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="290"/>
+        <location filename="../processing/algorithms/estimate.py" line="285"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
@@ -2281,7 +2286,7 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation type="obsolete">Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="302"/>
+        <location filename="../processing/algorithms/estimate.py" line="297"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
@@ -2736,7 +2741,7 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation type="obsolete">El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="76"/>
+        <location filename="../processing/algorithms/estimate.py" line="77"/>
         <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
 
 Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added.
@@ -2793,12 +2798,12 @@ Total verdadero: solo para simulaciones y formación. El informe lo muestra ento
 Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="181"/>
+        <location filename="../processing/algorithms/estimate.py" line="182"/>
         <source>Degrees of freedom of the detection estimate (0: p known)</source>
         <translation>Grados de libertad de la estimación de la detección (0: p conocida)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="186"/>
+        <location filename="../processing/algorithms/estimate.py" line="187"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>Vecindario local, escalado a la fórmula simple (nuestra variante)</translation>
     </message>
@@ -2911,27 +2916,27 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation>Número total de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="45"/>
+        <location filename="../processing/provider.py" line="51"/>
         <source>Example chain: plan a survey (frame, strata, effort, layout)</source>
         <translation>Cadena de ejemplo: planificar un muestreo (marco, estratos, esfuerzo, disposición)</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="45"/>
+        <location filename="../processing/provider.py" line="51"/>
         <source>Builds the sampling frame (study area minus exclusions and cells over the slope limit), draws k-means strata from the covariate rasters, allocates the units by Neyman allocation with the covariate standard deviation as a proxy, and lays out spatially balanced square plots with 3 reserve units per stratum. Open it in the modeler to change any step. Check every unit&apos;s access and safety before sending a team: the tool never makes a location safe. Follow your agency&apos;s field-safety rules and local law.</source>
         <translation>Construye el marco de muestreo (área de estudio menos las exclusiones y las celdas por encima de la pendiente límite), forma estratos por k-medias a partir de los rásteres de covariables, reparte las unidades por asignación de Neyman con la desviación estándar de la covariable como sustituto y dispone parcelas cuadradas espacialmente equilibradas con 3 unidades de reserva por estrato. Ábrala en el modelador para cambiar cualquier paso. Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="55"/>
+        <location filename="../processing/provider.py" line="61"/>
         <source>Example chain: estimate from simulated counts</source>
         <translation>Cadena de ejemplo: estimar a partir de conteos simulados</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="55"/>
+        <location filename="../processing/provider.py" line="61"/>
         <source>For training: fills the units&apos; count field from a simulated population, then estimates density and abundance per stratum and overall. With real fieldwork, run the estimate on the counted units instead.</source>
         <translation>Para formación: rellena el campo de conteo de las unidades a partir de una población simulada y luego estima la densidad y la abundancia por estrato y en total. Con trabajo de campo real, ejecute en su lugar la estimación sobre las unidades contadas.</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="84"/>
+        <location filename="../processing/provider.py" line="90"/>
         <source>Example chains</source>
         <translation>Cadenas de ejemplo</translation>
     </message>
@@ -2939,7 +2944,7 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="71"/>
+        <location filename="../processing/algorithms/layout.py" line="66"/>
         <source>Lay out sample units</source>
         <translation>Disponer las unidades de muestreo</translation>
     </message>
@@ -2985,77 +2990,77 @@ Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato m
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="118"/>
+        <location filename="../processing/algorithms/layout.py" line="113"/>
         <source>Sampling frame or strata</source>
         <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="121"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="127"/>
+        <location filename="../processing/algorithms/layout.py" line="122"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="133"/>
+        <location filename="../processing/algorithms/layout.py" line="128"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Número total de unidades (si no se da un campo de unidades)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Design</source>
         <translation>Diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Simple random</source>
         <translation>Aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="139"/>
+        <location filename="../processing/algorithms/layout.py" line="134"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Unit shape</source>
         <translation>Forma de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Point station</source>
         <translation>Estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Square plot</source>
         <translation>Parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Circular plot</source>
         <translation>Parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="145"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Line transect</source>
         <translation>Transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="152"/>
+        <location filename="../processing/algorithms/layout.py" line="147"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="158"/>
+        <location filename="../processing/algorithms/layout.py" line="153"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
     </message>
@@ -3065,332 +3070,332 @@ Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Com
         <translation type="obsolete">Mantener cada unidad por completo dentro de su estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="169"/>
+        <location filename="../processing/algorithms/layout.py" line="164"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="175"/>
+        <location filename="../processing/algorithms/layout.py" line="170"/>
         <source>Reserve units per stratum</source>
         <translation>Unidades de reserva por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="181"/>
+        <location filename="../processing/algorithms/layout.py" line="176"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="182"/>
+        <location filename="../processing/algorithms/layout.py" line="177"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="182"/>
+        <location filename="../processing/algorithms/layout.py" line="177"/>
         <source>GPX files (*.gpx)</source>
         <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="196"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
+        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/layout.py" line="223"/>
         <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
-        <translation>Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
+        <translation type="obsolete">Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="241"/>
+        <location filename="../processing/algorithms/layout.py" line="213"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="241"/>
+        <location filename="../processing/algorithms/layout.py" line="213"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="255"/>
+        <location filename="../processing/algorithms/layout.py" line="228"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="259"/>
+        <location filename="../processing/algorithms/layout.py" line="232"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="274"/>
+        <location filename="../processing/algorithms/layout.py" line="279"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="277"/>
+        <location filename="../processing/algorithms/layout.py" line="245"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="291"/>
+        <location filename="../processing/algorithms/layout.py" line="283"/>
         <source>the frame</source>
         <translation>el marco</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="291"/>
+        <location filename="../processing/algorithms/layout.py" line="283"/>
         <source>stratum {key}</source>
         <translation>estrato {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="333"/>
+        <location filename="../processing/algorithms/layout.py" line="325"/>
         <source>Sample-unit layout</source>
         <translation>Disposición de las unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="449"/>
+        <location filename="../processing/algorithms/layout.py" line="441"/>
         <source>primary units</source>
         <translation>unidades principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="449"/>
+        <location filename="../processing/algorithms/layout.py" line="441"/>
         <source>reserve units</source>
         <translation>unidades de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="337"/>
+        <location filename="../processing/algorithms/layout.py" line="329"/>
         <source>strata</source>
         <translation>estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="337"/>
+        <location filename="../processing/algorithms/layout.py" line="329"/>
         <source>design</source>
         <translation>diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="343"/>
+        <location filename="../processing/algorithms/layout.py" line="335"/>
         <source>Replacing units in the field</source>
         <translation>Sustituir unidades en el terreno</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
+        <location filename="../processing/algorithms/layout.py" line="336"/>
         <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
         <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="350"/>
+        <location filename="../processing/algorithms/layout.py" line="342"/>
         <source>Units per stratum</source>
         <translation>Unidades por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Stratum</source>
         <translation>Estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Area (ha)</source>
         <translation>Área (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Effective area (ha)</source>
         <translation>Área efectiva (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Units asked</source>
         <translation>Unidades pedidas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="352"/>
+        <location filename="../processing/algorithms/layout.py" line="344"/>
         <source>Primary</source>
         <translation>Principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="353"/>
+        <location filename="../processing/algorithms/layout.py" line="345"/>
         <source>Reserve</source>
         <translation>Reservas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="353"/>
+        <location filename="../processing/algorithms/layout.py" line="345"/>
         <source>incl_p</source>
         <translation>incl_p</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="353"/>
+        <location filename="../processing/algorithms/layout.py" line="345"/>
         <source>weight</source>
         <translation>weight</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="355"/>
+        <location filename="../processing/algorithms/layout.py" line="347"/>
         <source>Grid spacing (m)</source>
         <translation>Espaciado de la cuadrícula (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="355"/>
+        <location filename="../processing/algorithms/layout.py" line="347"/>
         <source>Grid rotation (°)</source>
         <translation>Rotación de la cuadrícula (°)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="358"/>
+        <location filename="../processing/algorithms/layout.py" line="350"/>
         <source>frame</source>
         <translation>marco</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="365"/>
+        <location filename="../processing/algorithms/layout.py" line="357"/>
         <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
         <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="365"/>
+        <location filename="../processing/algorithms/layout.py" line="357"/>
         <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
         <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="381"/>
+        <location filename="../processing/algorithms/layout.py" line="373"/>
         <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
         <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="388"/>
+        <location filename="../processing/algorithms/layout.py" line="380"/>
         <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
         <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="392"/>
+        <location filename="../processing/algorithms/layout.py" line="384"/>
         <source>Map</source>
         <translation>Mapa</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="393"/>
+        <location filename="../processing/algorithms/layout.py" line="385"/>
         <source>Strata (filled), primary units (dark) and reserve units (light)</source>
         <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="394"/>
+        <location filename="../processing/algorithms/layout.py" line="386"/>
         <source>Method</source>
         <translation>Método</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="398"/>
+        <location filename="../processing/algorithms/layout.py" line="390"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Frame (FRAME)</source>
         <translation>Marco (FRAME)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Stratum field (STRATUM_FIELD)</source>
         <translation>Campo de estrato (STRATUM_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>(none: one stratum)</source>
         <translation>(ninguno: un solo estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Units per stratum field (N_FIELD)</source>
         <translation>Campo de unidades por estrato (N_FIELD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>(none)</source>
         <translation>(ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Total units (N_UNITS)</source>
         <translation>Total de unidades (N_UNITS)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>(not used)</source>
         <translation>(no se usa)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Design (DESIGN)</source>
         <translation>Diseño (DESIGN)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Unit shape (SHAPE)</source>
         <translation>Forma de la unidad (SHAPE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Unit size (SIZE, m)</source>
         <translation>Tamaño de la unidad (SIZE, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Bearing (BEARING, degrees)</source>
         <translation>Rumbo (BEARING, grados)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>random</source>
         <translation>aleatorio</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Keep inside (INSIDE)</source>
         <translation>Mantener dentro (INSIDE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>yes</source>
         <translation>sí</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>no</source>
         <translation>no</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Minimum spacing (MIN_SPACING, m)</source>
         <translation>Separación mínima (MIN_SPACING, m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Reserves per stratum (RESERVE)</source>
         <translation>Reservas por estrato (RESERVE)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>Seed (SEED)</source>
         <translation>Semilla (SEED)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="399"/>
+        <location filename="../processing/algorithms/layout.py" line="391"/>
         <source>CRS of the computation and the output</source>
         <translation>SRC del cálculo y de la salida</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="419"/>
+        <location filename="../processing/algorithms/layout.py" line="411"/>
         <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
         <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="421"/>
+        <location filename="../processing/algorithms/layout.py" line="413"/>
         <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
         <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="423"/>
+        <location filename="../processing/algorithms/layout.py" line="415"/>
         <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
         <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="430"/>
+        <location filename="../processing/algorithms/layout.py" line="422"/>
         <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
         <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="74"/>
+        <location filename="../processing/algorithms/layout.py" line="69"/>
         <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -3431,12 +3436,12 @@ Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato m
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="164"/>
+        <location filename="../processing/algorithms/layout.py" line="159"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
         <translation>Mantener cada unidad por completo dentro de su estrato (desactivado: muestreo «plus»)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="371"/>
+        <location filename="../processing/algorithms/layout.py" line="363"/>
         <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
         <translation>Muestreo «plus»: los centros se sortearon sobre cada estrato ampliado en {r} m (el alcance de la unidad), así que las unidades cercanas al borde lo sobrepasan, y algunos centros quedan fuera de su estrato. Muestree solo la parte de cada unidad dentro de su propio estrato y cuente solo los animales que haya allí (el mapa muestra los estratos); una unidad que no alcanza nada de su estrato cuenta 0. No entre nunca en terreno excluido o peligroso para llegar a un centro: muestree la parte dentro del estrato desde su interior. El área efectiva es el área ampliada, y plotwise:estimate extiende los conteos a ella (Gregoire &amp; Valentine 2008, cap. 10).</translation>
     </message>
@@ -3606,22 +3611,151 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
     <message>
         <location filename="../processing/algorithms/occupancy.py" line="137"/>
         <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Choose existing fields.</source>
-        <translation>La capa «{layer}» no tiene el campo {fields} ({param}). Elija campos existentes.</translation>
+        <translation type="obsolete">La capa «{layer}» no tiene el campo {fields} ({param}). Elija campos existentes.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="165"/>
+        <location filename="../processing/algorithms/occupancy.py" line="155"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="185"/>
+        <location filename="../processing/algorithms/occupancy.py" line="175"/>
         <source>(a table: no map)</source>
         <translation>(una tabla: sin mapa)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="195"/>
+        <location filename="../processing/algorithms/occupancy.py" line="185"/>
         <source>ψ = {psi:.3f} (SE {se}), p = {p:.3f}, naive occupancy {naive:.3f}, {n} sites.</source>
         <translation>ψ = {psi:.3f} (EE {se}), p = {p:.3f}, ocupación ingenua {naive:.3f}, {n} sitios.</translation>
+    </message>
+</context>
+<context>
+    <name>Panels</name>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="40"/>
+        <source>Revisit panels for monitoring</source>
+        <translation>Paneles de revisita para el seguimiento</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="43"/>
+        <source>Assigns the units of a layout to revisit panels for a monitoring programme over several years, and writes the schedule: which units are surveyed in which year.
+
+Sample units: the layout's units (any geometry). Units whose role is reserve get no panel; a reserve that replaces a primary unit takes over the primary's panel and years.
+Panel design: every year (one panel, panel 0, visited every year); rotating panels (PANELS panels, panel p visited in the years start + (p − 1), start + (p − 1) + K, ..., so each unit once every K years); split panels (a core, panel 0, visited every year, plus K rotating panels).
+Rotating panels (K): 2 or more, at most the number of years. Share of units in the core: split panels only, between 0 and 1.
+First year and years: the programme's calendar; at most 50 years.
+Draw-order field (default draw_ord, as the layout writes it): panels follow the draw order within each stratum, in consecutive blocks: the core first, then panel 1, panel 2, ... In a spatially balanced layout every run of consecutive units of the draw order is spread over the stratum (Robertson et al. 2013), so every panel is. Without the field, the order of the features is used, with a warning.
+Stratum field (default stratum): panels are cut within each stratum, so each panel holds every stratum's share.
+Field days per unit visit (0: none): adds field days to the schedule.
+Random seed: only for the check of the panels' spread (the panels themselves follow the draw order).
+
+The layout's design: plotwise:layout records it in the units' design field. A simple random layout (random, random_sep) gives panels that are random parts of it, a systematic grid (grid, grid_ovl) bands, because its draw order runs row by row: both are warned about. Without the field, the check below decides.
+The check: the spread of each panel is measured by the Voronoi measure of Stevens &amp; Olsen (2004) over a fine grid on the convex hull of the units, and compared with random rearrangements of the panels within each stratum. When the panels are not more evenly spread than chance (and not clearly more even than random panels either: a spread measure at least 90% of theirs), a warning says so: the layout was probably simple random (each panel is then a random part of it) or a systematic grid (whose draw order runs row by row, so panels are bands). With few units the check can miss a real balance.
+
+Outputs: the units with panel (0 core or every-year panel, 1..K rotating, empty for reserves) and years (the years the unit is visited, comma-separated); the schedule table (year, panel, n_units, days); an HTML report with the schedule as a chart.
+
+References: Urquhart &amp; Kincaid (1999); McDonald (2003); Robertson et al. (2013); Stevens &amp; Olsen (2004).
+
+Field safety: check every unit's access and safety before sending a team, each year again: the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Asigna las unidades de una disposición a paneles de revisita para un programa de seguimiento de varios años, y escribe el calendario: qué unidades se muestrean en qué año.
+
+Unidades de muestreo: las unidades de la disposición (cualquier geometría). Las unidades cuyo rol es reserve no reciben panel; una reserva que sustituye a una unidad principal hereda el panel y los años de esta.
+Diseño de paneles: cada año (un solo panel, el panel 0, visitado cada año); paneles rotativos (PANELS paneles; el panel p se visita en los años inicio + (p − 1), inicio + (p − 1) + K, ..., de modo que cada unidad se visita una vez cada K años); paneles divididos (un núcleo, el panel 0, visitado cada año, más K paneles rotativos).
+Paneles rotativos (K): 2 o más, como máximo el número de años. Proporción de unidades en el núcleo: solo paneles divididos, entre 0 y 1.
+Primer año y años: el calendario del programa; como máximo 50 años.
+Campo de orden de sorteo (draw_ord por defecto, como lo escribe la disposición): los paneles siguen el orden de sorteo dentro de cada estrato, en bloques consecutivos: primero el núcleo, luego el panel 1, el panel 2, ... En una disposición espacialmente equilibrada, cada tramo de unidades consecutivas del orden de sorteo está repartido por el estrato (Robertson et al. 2013), así que cada panel también lo está. Sin el campo se usa el orden de las entidades, con una advertencia.
+Campo de estrato (stratum por defecto): los paneles se forman dentro de cada estrato, de modo que cada panel contiene la parte de cada estrato.
+Jornadas de campo por visita a una unidad (0: ninguna): añade las jornadas de campo al calendario.
+Semilla aleatoria: solo para la comprobación del reparto de los paneles (los paneles en sí siguen el orden de sorteo).
+
+El diseño de la disposición: plotwise:layout lo registra en el campo design de las unidades. Una disposición aleatoria simple (random, random_sep) da paneles que son partes aleatorias de ella, y una cuadrícula sistemática (grid, grid_ovl) da bandas, porque su orden de sorteo avanza fila por fila: en ambos casos se emite una advertencia. Sin el campo, decide la comprobación que sigue.
+La comprobación: el reparto de cada panel se mide con la medida de Voronoi de Stevens &amp; Olsen (2004) sobre una malla fina en la envolvente convexa de las unidades, y se compara con reordenaciones aleatorias de los paneles dentro de cada estrato. Cuando los paneles no están repartidos de modo más uniforme que al azar (ni claramente más uniforme que paneles aleatorios: una medida de reparto de al menos el 90 % de la de estos), una advertencia lo indica: la disposición probablemente era aleatoria simple (cada panel es entonces una parte aleatoria de ella) o una cuadrícula sistemática (cuyo orden de sorteo avanza fila por fila, de modo que los paneles son bandas). Con pocas unidades, la comprobación puede no detectar un equilibrio real.
+
+Salidas: las unidades con panel (0 para el núcleo o el panel de cada año, 1..K para los paneles rotativos, vacío para las reservas) y years (los años en que se visita la unidad, separados por comas); la tabla del calendario (year, panel, n_units, days); un informe HTML con el calendario en forma de gráfico.
+
+Referencias: Urquhart &amp; Kincaid (1999); McDonald (2003); Robertson et al. (2013); Stevens &amp; Olsen (2004).
+
+Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo, y de nuevo cada año: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="83"/>
+        <source>Sample units (a layout)</source>
+        <translation>Unidades de muestreo (una disposición)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Panel design</source>
+        <translation>Diseño de paneles</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Every unit every year</source>
+        <translation>Todas las unidades cada año</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Rotating panels</source>
+        <translation>Paneles rotativos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="85"/>
+        <source>Split panels (core + rotating)</source>
+        <translation>Paneles divididos (núcleo + rotativos)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="89"/>
+        <source>Rotating panels (K: each unit once every K years)</source>
+        <translation>Paneles rotativos (K: cada unidad una vez cada K años)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="92"/>
+        <source>Share of units in the core (split panels)</source>
+        <translation>Proporción de unidades en el núcleo (paneles divididos)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="95"/>
+        <source>First year</source>
+        <translation>Primer año</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="98"/>
+        <source>Years of the programme</source>
+        <translation>Años del programa</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="101"/>
+        <source>Draw-order field</source>
+        <translation>Campo de orden de sorteo</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="104"/>
+        <source>Stratum field</source>
+        <translation>Campo de estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="106"/>
+        <source>Field days per unit visit (0: none)</source>
+        <translation>Jornadas de campo por visita a una unidad (0: ninguna)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="110"/>
+        <source>Units with panels</source>
+        <translation>Unidades con paneles</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="111"/>
+        <source>Schedule</source>
+        <translation>Calendario</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="137"/>
+        <source>Layer &apos;{layer}&apos;: features {ids} have no geometry. Every unit needs its location: remove them or give them a geometry.</source>
+        <translation>Capa «{layer}»: las entidades {ids} no tienen geometría. Cada unidad necesita su ubicación: elimínelas o deles una geometría.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/panels.py" line="158"/>
+        <source>Revisit panels</source>
+        <translation>Paneles de revisita</translation>
     </message>
 </context>
 <context>
@@ -3667,60 +3801,70 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="174"/>
+        <location filename="../processing/algorithms/base.py" line="210"/>
         <source>Report written to {path}</source>
         <translation>Informe escrito en {path}</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/base.py" line="154"/>
+        <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Its fields are: {available}. Choose one of them.</source>
+        <translation>La capa «{layer}» no tiene el campo {fields} ({param}). Sus campos son: {available}. Elija uno de ellos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/base.py" line="162"/>
+        <source>Choose a field of layer &apos;{layer}&apos; for {param}. Its fields are: {available}.</source>
+        <translation>Elija un campo de la capa «{layer}» para {param}. Sus campos son: {available}.</translation>
     </message>
 </context>
 <context>
     <name>PlotwiseBridge</name>
     <message>
-        <location filename="../processing/bridge.py" line="54"/>
+        <location filename="../processing/bridge.py" line="56"/>
         <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
         <translation>La capa «{layer}» no tiene un sistema de referencia de coordenadas válido. Defina su SRC (Propiedades de la capa → Fuente) y vuelva a ejecutar.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="68"/>
+        <location filename="../processing/bridge.py" line="70"/>
         <source>Layer &apos;{layer}&apos; is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
         <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="110"/>
+        <location filename="../processing/bridge.py" line="118"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="119"/>
+        <location filename="../processing/bridge.py" line="415"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="153"/>
+        <location filename="../processing/bridge.py" line="166"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="159"/>
+        <location filename="../processing/bridge.py" line="172"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
         <location filename="../processing/bridge.py" line="182"/>
         <source> and {n} more</source>
-        <translation> y {n} más</translation>
+        <translation type="obsolete"> y {n} más</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="283"/>
+        <location filename="../processing/bridge.py" line="342"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="312"/>
+        <location filename="../processing/bridge.py" line="371"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="318"/>
+        <location filename="../processing/bridge.py" line="377"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
@@ -3728,177 +3872,177 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
 <context>
     <name>PlotwiseEngine</name>
     <message>
-        <location filename="../processing/engine/allocation.py" line="49"/>
+        <location filename="../processing/engine/allocation.py" line="50"/>
         <source>stratum area</source>
         <translation>área del estrato</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="50"/>
+        <location filename="../processing/engine/allocation.py" line="51"/>
         <source>pilot standard deviation</source>
         <translation>desviación estándar piloto</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="51"/>
+        <location filename="../processing/engine/allocation.py" line="52"/>
         <source>pilot mean count</source>
         <translation>conteo medio piloto</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="52"/>
+        <location filename="../processing/engine/allocation.py" line="53"/>
         <source>cost per unit</source>
         <translation>coste por unidad</translation>
     </message>
     <message>
         <location filename="../processing/engine/occupancy.py" line="76"/>
         <source>{shown} and {more} more</source>
-        <translation>{shown} y {more} más</translation>
+        <translation type="obsolete">{shown} y {more} más</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="435"/>
+        <location filename="../processing/engine/allocation.py" line="433"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos; is empty (NULL) for feature(s) {ids}. Give every stratum an id, or remove those features from the layer.</source>
         <translation>El campo de estrato «{field}» de la capa «{layer}» está vacío (NULL) para las entidades {ids}. Dé un identificador a cada estrato, o quite esas entidades de la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="453"/>
+        <location filename="../processing/engine/allocation.py" line="451"/>
         <source>Features {ids} of layer &apos;{layer}&apos; carry the same stratum id {value} in field &apos;{field}&apos;, so each would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Las entidades {ids} de la capa «{layer}» llevan el mismo identificador de estrato {value} en el campo «{field}», así que cada una recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="461"/>
+        <location filename="../processing/engine/allocation.py" line="459"/>
         <source>Several stratum ids in field &apos;{field}&apos; of layer &apos;{layer}&apos; are carried by more than one feature: {value} (features {ids}) and {more} other id(s) ({others}), so each of those features would get its own allocation. Dissolve the strata by &apos;{field}&apos; first (the host&apos;s Dissolve tool; then recompute the area field, or leave AREA_FIELD empty to use the polygon areas), or give each feature its own id.</source>
         <translation>Varios identificadores de estrato del campo «{field}» de la capa «{layer}» los llevan varias entidades: {value} (entidades {ids}) y {more} identificador(es) más ({others}), así que cada una de esas entidades recibiría su propia asignación. Disuelva primero los estratos por «{field}» (herramienta Disolver del anfitrión; después recalcule el campo de área, o deje AREA_FIELD vacío para usar el área de los polígonos), o dé a cada entidad su propio identificador.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="482"/>
+        <location filename="../processing/engine/allocation.py" line="480"/>
         <source>The {name} is NULL or negative for stratum feature(s) {shown}. Fill in a non-negative value for every stratum, or remove those strata from the layer.</source>
         <translation>Valor NULL o negativo ({name}) para las entidades de estrato {shown}. Introduzca un valor no negativo para cada estrato, o quite esos estratos de la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="487"/>
+        <location filename="../processing/engine/allocation.py" line="485"/>
         <source>The {name} is NULL, negative or zero for stratum feature(s) {shown}. Fill in a positive value for every stratum, or remove those strata from the layer.</source>
         <translation>Valor NULL, negativo o cero ({name}) para las entidades de estrato {shown}. Introduzca un valor positivo para cada estrato, o quite esos estratos de la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="532"/>
+        <location filename="../processing/engine/allocation.py" line="530"/>
         <source>Unknown allocation method {method!r}; use one of: {methods}.</source>
         <translation>Método de asignación desconocido {method!r}; use uno de: {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="537"/>
+        <location filename="../processing/engine/allocation.py" line="535"/>
         <source>The strata layer has no features. Run the stratification first.</source>
         <translation>La capa de estratos no tiene entidades. Ejecute primero la estratificación.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="543"/>
+        <location filename="../processing/engine/allocation.py" line="541"/>
         <source>The unit area must be a positive number.</source>
         <translation>El área de la unidad debe ser un número positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="546"/>
+        <location filename="../processing/engine/allocation.py" line="544"/>
         <source>The minimum per stratum must be at least 1 (2 lets each stratum variance be estimated).</source>
         <translation>El mínimo por estrato debe ser al menos 1 (2 permite estimar la varianza de cada estrato).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="557"/>
+        <location filename="../processing/engine/allocation.py" line="555"/>
         <source>The cost method needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>El método por coste necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="557"/>
+        <location filename="../processing/engine/allocation.py" line="555"/>
         <source>The budget needs a cost per unit for every stratum: choose the cost field.</source>
         <translation>El presupuesto necesita un coste por unidad para cada estrato: elija el campo de coste.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="566"/>
+        <location filename="../processing/engine/allocation.py" line="564"/>
         <source>The fixed cost must be zero or positive.</source>
         <translation>El coste fijo debe ser cero o positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="604"/>
+        <location filename="../processing/engine/allocation.py" line="602"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (proportional to area).</source>
         <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (proporcional al área).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="608"/>
+        <location filename="../processing/engine/allocation.py" line="606"/>
         <source>No pilot standard deviations: the allocation assumes equal SDs in all strata (area / square root of cost).</source>
         <translation>Sin desviaciones estándar piloto: la asignación supone desviaciones iguales en todos los estratos (área / raíz cuadrada del coste).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="612"/>
+        <location filename="../processing/engine/allocation.py" line="610"/>
         <source>All pilot standard deviations are zero: proportional allocation is used instead.</source>
         <translation>Todas las desviaciones estándar piloto son cero: se usa en su lugar la asignación proporcional.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="617"/>
+        <location filename="../processing/engine/allocation.py" line="615"/>
         <source>The {name} is zero for stratum feature(s) {shown}: they get only the minimum of {minimum} unit(s). A pilot with no variation is rarely the truth; check it.</source>
         <translation>Valor cero ({name}) para las entidades de estrato {shown}: reciben solo el mínimo de {minimum} unidad(es). Un piloto sin variación rara vez refleja la realidad; compruébelo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="580"/>
+        <location filename="../processing/engine/allocation.py" line="578"/>
         <source>Stratum feature(s) {shown} are smaller than one sample unit of {unit_area:g}. Merge them with a neighbour or use a smaller unit area.</source>
         <translation>Las entidades de estrato {shown} son más pequeñas que una unidad de muestreo de {unit_area:g}. Fusiónelas con una vecina o use un área de unidad menor.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="590"/>
+        <location filename="../processing/engine/allocation.py" line="588"/>
         <source>Stratum feature(s) {shown} hold fewer than {minimum} units: they get all the units that fit.</source>
         <translation>Las entidades de estrato {shown} contienen menos de {minimum} unidades: reciben todas las unidades que caben.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="569"/>
+        <location filename="../processing/engine/allocation.py" line="567"/>
         <source>A target CV is set: the budget is not used.</source>
         <translation>Hay un CV objetivo: no se usa el presupuesto.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="630"/>
+        <location filename="../processing/engine/allocation.py" line="628"/>
         <source>The budget {budget:g} is below the minimum of {minimum:g} (fixed cost {fixed_cost:g} plus {per_stratum} unit(s) in every stratum at its cost). Raise the budget or lower the minimum per stratum.</source>
         <translation>El presupuesto {budget:g} es inferior al mínimo de {minimum:g} (coste fijo {fixed_cost:g} más {per_stratum} unidad(es) en cada estrato a su coste). Aumente el presupuesto o baje el mínimo por estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="639"/>
+        <location filename="../processing/engine/allocation.py" line="637"/>
         <source>The budget exceeds the cost of every unit that fits ({maximum:g}): all units are taken.</source>
         <translation>El presupuesto supera el coste de todas las unidades que caben ({maximum:g}): se toman todas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="650"/>
+        <location filename="../processing/engine/allocation.py" line="648"/>
         <source>Give a total number of units, a budget (with costs) or a target CV.</source>
         <translation>Indique un número total de unidades, un presupuesto (con costes) o un CV objetivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="654"/>
+        <location filename="../processing/engine/allocation.py" line="652"/>
         <source>The total of {total} units is below the minimum of {minimum} ({per_stratum} per stratum over {n_strata} strata). Raise the total or lower the minimum.</source>
         <translation>El total de {total} unidades es inferior al mínimo de {minimum} ({per_stratum} por estrato en {n_strata} estratos). Aumente el total o baje el mínimo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="660"/>
+        <location filename="../processing/engine/allocation.py" line="658"/>
         <source>The total of {total} units exceeds the {fit} units of {unit_area:g} that fit in the strata. Lower the total or use smaller units.</source>
         <translation>El total de {total} unidades supera las {fit} unidades de {unit_area:g} que caben en los estratos. Baje el total o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="673"/>
+        <location filename="../processing/engine/allocation.py" line="671"/>
         <source>Stratum feature(s) {shown} get one unit only: their variance cannot be estimated.</source>
         <translation>Las entidades de estrato {shown} reciben una sola unidad: su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="679"/>
+        <location filename="../processing/engine/allocation.py" line="677"/>
         <source>Stratum feature(s) {shown} are sampled completely (every unit that fits).</source>
         <translation>Las entidades de estrato {shown} se muestrean por completo (todas las unidades que caben).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="684"/>
+        <location filename="../processing/engine/allocation.py" line="682"/>
         <source>The {name} is zero in stratum feature(s) {shown}: their CV is undefined.</source>
         <translation>Valor cero ({name}) en las entidades de estrato {shown}: su CV no está definido.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="782"/>
+        <location filename="../processing/engine/allocation.py" line="780"/>
         <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
         <translation>Un CV objetivo necesita la desviación estándar piloto y el conteo medio piloto por unidad: elija el campo de DE y el campo de media.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="788"/>
+        <location filename="../processing/engine/allocation.py" line="786"/>
         <source>The {name} is zero in every stratum: no CV can be computed.</source>
         <translation>Valor cero ({name}) en todos los estratos: no puede calcularse ningún CV.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="799"/>
+        <location filename="../processing/engine/allocation.py" line="797"/>
         <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
         <translation>El CV objetivo de {target_cv:.3g} no puede alcanzarse: incluso las {fit} unidades que caben dan un CV esperado de {cv:.3g}. Acepte un CV de al menos {cv:.3g}, o use unidades más pequeñas.</translation>
     </message>
@@ -3983,7 +4127,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Los estratos {ids} no contienen ningún centro de celda de la superficie de densidad dentro del marco de muestreo. Quítelos, fusiónelos con un vecino, o use una superficie más fina.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="207"/>
+        <location filename="../processing/engine/layout.py" line="209"/>
         <source>SHAPE must be 0 (point), 1 (square), 2 (circle) or 3 (line transect).</source>
         <translation>SHAPE debe ser 0 (punto), 1 (cuadrado), 2 (círculo) o 3 (transecto lineal).</translation>
     </message>
@@ -4043,7 +4187,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>El diseño «{design}» necesita estratos: indique la capa STRATA.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="74"/>
+        <location filename="../processing/engine/layout.py" line="76"/>
         <source>simple random</source>
         <translation>aleatorio simple</translation>
     </message>
@@ -4058,12 +4202,12 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation type="obsolete">estratificado Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="74"/>
+        <location filename="../processing/engine/layout.py" line="76"/>
         <source>systematic grid</source>
         <translation>cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="74"/>
+        <location filename="../processing/engine/layout.py" line="76"/>
         <source>spatially balanced</source>
         <translation>espacialmente equilibrado</translation>
     </message>
@@ -4118,102 +4262,102 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>El rango de unidades tiene más de 20 valores; indique como máximo 20.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/geometry.py" line="211"/>
+        <location filename="../processing/engine/listing.py" line="19"/>
         <source>{shown} … ({n} in all)</source>
         <translation>{shown} … ({n} en total)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="394"/>
+        <location filename="../processing/engine/estimation.py" line="378"/>
         <source>The {count_name} field holds values that are not numbers for units {ids}. Enter a whole count (0 when surveyed and none seen) or leave the field empty (NULL) for units that were not surveyed.</source>
         <translation>El campo {count_name} contiene valores que no son números para las unidades {ids}. Introduzca un conteo entero (0 si se muestreó y no se vio ninguno) o deje el campo vacío (NULL) para las unidades no muestreadas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="405"/>
+        <location filename="../processing/engine/estimation.py" line="389"/>
         <source>The {count_name} field holds negative or infinite counts for units {ids}. Counts must be 0 or more; correct them, or leave the field empty (NULL) if the unit was not surveyed.</source>
         <translation>El campo {count_name} contiene conteos negativos o infinitos para las unidades {ids}. Los conteos deben ser 0 o más; corríjalos, o deje el campo vacío (NULL) si la unidad no se muestreó.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="578"/>
+        <location filename="../processing/engine/estimation.py" line="562"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons cover {area:.4g} {unit} that no stratum covers, so the estimate would silently speak for a smaller frame. Give each polygon the id of its stratum, delete the polygons that are not part of the frame, or choose to leave out strata with no surveyed unit (the frame then shrinks).</source>
         <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos cubren {area:.4g} {unit} que ningún estrato cubre, así que la estimación hablaría sin avisar de un marco de muestreo más pequeño. Dé a cada polígono el identificador de su estrato, elimine los polígonos que no forman parte del marco, o elija dejar fuera los estratos sin unidades muestreadas (el marco se reduce entonces).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="587"/>
+        <location filename="../processing/engine/estimation.py" line="571"/>
         <source>Layer &apos;{layer}&apos;: the stratum id field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. These polygons were left out, and the frame shrank by the {area:.4g} {unit} of them that no stratum covers. To keep them in the frame, give each polygon the id of its stratum.</source>
         <translation>Capa «{layer}»: el campo de identificador de estrato «{field}» está vacío (NULL) para los identificadores de entidad {ids}. Estos polígonos se dejaron fuera, y el marco de muestreo se redujo en la parte que ningún estrato cubre: {area:.4g} {unit}. Para mantenerlos en el marco, dé a cada polígono el identificador de su estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="550"/>
+        <location filename="../processing/engine/estimation.py" line="534"/>
         <source>Layer &apos;{layer}&apos;: no polygon has a stratum id in the field &apos;{field}&apos;. Fill in the stratum ids, or choose the field that holds them.</source>
         <translation>Capa «{layer}»: ningún polígono tiene identificador de estrato en el campo «{field}». Rellene los identificadores de estrato, o elija el campo que los contiene.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="607"/>
+        <location filename="../processing/engine/estimation.py" line="591"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) would be counted in more than one stratum, which inflates the frame area and the abundance. Fix the strata polygons so that they do not overlap: each piece of land belongs to one stratum only (cut each overlap out of all strata but one, or redraw the shared edges).</source>
         <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se contarían en más de un estrato, lo que infla el área del marco de muestreo y la abundancia. Corrija los polígonos de los estratos para que no se solapen: cada trozo de terreno pertenece a un solo estrato (recorte cada solape de todos los estratos salvo uno, o vuelva a trazar los bordes comunes).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="616"/>
+        <location filename="../processing/engine/estimation.py" line="600"/>
         <source>Layer &apos;{layer}&apos;: the strata overlap: {pairs}. In all, {area:.4g} {unit} ({percent:.3g} % of the {covered:.4g} {unit} the strata cover) is counted in more than one stratum, so the frame area and the abundance are slightly too large. Fix the strata polygons so that they do not overlap (snap the shared edges, or cut each overlap out of all strata but one).</source>
         <translation>Capa «{layer}»: los estratos se solapan: {pairs}. En total, {area:.4g} {unit} ({percent:.3g} % de la superficie cubierta por los estratos, {covered:.4g} {unit}) se cuentan en más de un estrato, por lo que el área del marco de muestreo y la abundancia son algo mayores de lo debido. Corrija los polígonos de los estratos para que no se solapen (ajuste los bordes comunes con el autoensamblado, o recorte cada solape de todos los estratos salvo uno).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="678"/>
+        <location filename="../processing/engine/estimation.py" line="662"/>
         <source>The confidence level must lie between 0 and 1 (got {confidence}); use e.g. 0.95.</source>
         <translation>El nivel de confianza debe estar entre 0 y 1 (se recibió {confidence}); use p. ej. 0.95.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="682"/>
+        <location filename="../processing/engine/estimation.py" line="666"/>
         <source>Unknown interval method {method!r}; use one of {methods}.</source>
         <translation>Método de intervalo desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="686"/>
+        <location filename="../processing/engine/estimation.py" line="670"/>
         <source>Unknown variance method {method!r}; use one of {methods}.</source>
         <translation>Método de varianza desconocido {method!r}; use uno de {methods}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="690"/>
+        <location filename="../processing/engine/estimation.py" line="674"/>
         <source>The detection probability must lie in (0, 1] (got {p}).</source>
         <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {p}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="693"/>
+        <location filename="../processing/engine/estimation.py" line="677"/>
         <source>The standard error of the detection probability must be 0 or more.</source>
         <translation>El error estándar de la probabilidad de detección debe ser 0 o más.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="712"/>
+        <location filename="../processing/engine/estimation.py" line="696"/>
         <source>unit_ids must have one id per unit.</source>
         <translation>unit_ids debe tener un identificador por unidad.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="716"/>
+        <location filename="../processing/engine/estimation.py" line="700"/>
         <source>counts, unit_areas and strata must have one value per unit.</source>
         <translation>counts, unit_areas y strata deben tener un valor por unidad.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="755"/>
+        <location filename="../processing/engine/estimation.py" line="739"/>
         <source>Strata {ids} have no area. Check the strata layer&apos;s geometries.</source>
         <translation>Los estratos {ids} no tienen área. Compruebe las geometrías de la capa de estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="768"/>
+        <location filename="../processing/engine/estimation.py" line="752"/>
         <source>Units {ids} have no stratum (the stratum field is empty). Fill in their stratum, or leave the stratum field out to treat the frame as one stratum.</source>
         <translation>Las unidades {ids} no tienen estrato (el campo de estrato está vacío). Rellene su estrato, u omita el campo de estrato para tratar el marco de muestreo como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="779"/>
+        <location filename="../processing/engine/estimation.py" line="763"/>
         <source>Units {ids} have stratum ids ({names}) that are not in the strata layer. Check the stratum field of the units and the id field of the strata layer.</source>
         <translation>Las unidades {ids} tienen identificadores de estrato ({names}) que no están en la capa de estratos. Compruebe el campo de estrato de las unidades y el campo identificador de la capa de estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="725"/>
+        <location filename="../processing/engine/estimation.py" line="709"/>
         <source>{n} unit(s) have no count and are treated as not surveyed (non-response): {ids}.</source>
         <translation>{n} unidad(es) no tienen conteo y se tratan como no muestreadas (no respuesta): {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="731"/>
+        <location filename="../processing/engine/estimation.py" line="715"/>
         <source>No unit has a count, so nothing can be estimated. Enter the counts of the surveyed units (0 when none was seen) in the count field.</source>
         <translation>Ninguna unidad tiene conteo, así que no puede estimarse nada. Introduzca los conteos de las unidades muestreadas (0 si no se vio ninguno) en el campo de conteo.</translation>
     </message>
@@ -4223,37 +4367,37 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation type="obsolete">Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="828"/>
+        <location filename="../processing/engine/estimation.py" line="812"/>
         <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
         <translation>Los datos de presencia deben ser 0 o 1; las unidades {ids} contienen otros valores. Use los conteos sin la opción de presencia, o recodifique el campo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="836"/>
+        <location filename="../processing/engine/estimation.py" line="820"/>
         <source>The detection probability was not applied to presence data: dividing a proportion of occupied units by p is not an occupancy correction, which needs repeat visits.</source>
         <translation>La probabilidad de detección no se aplicó a los datos de presencia: dividir una proporción de unidades ocupadas por p no es una corrección de ocupación, que requiere visitas repetidas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="797"/>
+        <location filename="../processing/engine/estimation.py" line="781"/>
         <source>No unit of strata {ids} was surveyed, so their abundance cannot be estimated. Survey units there, or choose to leave these strata out (the estimate then covers a smaller frame).</source>
         <translation>Ninguna unidad de los estratos {ids} se muestreó, así que su abundancia no puede estimarse. Muestree unidades allí, o elija dejar fuera esos estratos (la estimación cubre entonces un marco de muestreo menor).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="804"/>
+        <location filename="../processing/engine/estimation.py" line="788"/>
         <source>Strata {ids} had no surveyed unit and were left out: the frame shrank by {dropped_area:.6g} area units, and the estimate covers the remaining strata only.</source>
         <translation>Los estratos {ids} no tenían ninguna unidad muestreada y se dejaron fuera: el marco de muestreo se redujo en {dropped_area:.6g} unidades de área, y la estimación cubre solo los estratos restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="912"/>
+        <location filename="../processing/engine/estimation.py" line="896"/>
         <source>The local neighbourhood variance needs the positions of the units.</source>
         <translation>La varianza de vecindad local necesita las posiciones de las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="917"/>
+        <location filename="../processing/engine/estimation.py" line="901"/>
         <source>Units {ids} have no position, so the local neighbourhood variance cannot use them. Give their locations, or use the simple random sampling formula.</source>
         <translation>Las unidades {ids} no tienen posición, así que la varianza de vecindad local no puede usarlas. Indique sus ubicaciones, o use la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1016"/>
+        <location filename="../processing/engine/estimation.py" line="1000"/>
         <source>In strata {ids} the surveyed area exceeds the stratum area. Check the unit areas and the area unit, or switch off the finite-population correction.</source>
         <translation>En los estratos {ids} el área muestreada supera el área del estrato. Compruebe las áreas de las unidades y la unidad de área, o desactive la corrección por población finita.</translation>
     </message>
@@ -4268,7 +4412,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation type="obsolete">Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1090"/>
+        <location filename="../processing/engine/estimation.py" line="1074"/>
         <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
         <translation>El único estrato tiene una sola unidad muestreada: no puede estimarse ninguna varianza, error estándar ni intervalo. Muestree al menos dos unidades.</translation>
     </message>
@@ -4278,7 +4422,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation type="obsolete">Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1454"/>
+        <location filename="../processing/engine/estimation.py" line="1438"/>
         <source>The bootstrap needs a random generator (rng).</source>
         <translation>El bootstrap necesita un generador aleatorio (rng).</translation>
     </message>
@@ -4293,12 +4437,12 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation type="obsolete">En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1219"/>
+        <location filename="../processing/engine/estimation.py" line="1203"/>
         <source>The target CV {target_cv:.3g} cannot be reached by more units: the detection probability&apos;s own CV is {cv_p:.3g}. Improve the detection study first.</source>
         <translation>El CV objetivo {target_cv:.3g} no puede alcanzarse con más unidades: el CV propio de la probabilidad de detección es {cv_p:.3g}. Mejore primero el estudio de detección.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1231"/>
+        <location filename="../processing/engine/estimation.py" line="1215"/>
         <source>No variation was observed, so the next survey&apos;s sample sizes are set to the minimum of 2 per stratum.</source>
         <translation>No se observó variación, así que los tamaños de muestra del próximo muestreo se fijan en el mínimo de 2 por estrato.</translation>
     </message>
@@ -4328,297 +4472,297 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>No queda nada del marco de muestreo tras el búfer interior (EDGE_BUFFER = {edge_buffer:g} m): las {hectares:.4g} ha restantes están todas a menos de esa distancia del límite del área de estudio (extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/geometry.py" line="203"/>
+        <location filename="../processing/engine/geometry.py" line="221"/>
         <source>{first} and {second} ({area:.4g} {unit})</source>
         <translation>{first} y {second} ({area:.4g} {unit})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/halton.py" line="209"/>
+        <location filename="../processing/engine/halton.py" line="210"/>
         <source>No point of an area of {area:.3g} m² could be drawn: it is too thin to hold a sample unit. Check the frame for slivers.</source>
         <translation>No se pudo sortear ningún punto en un área de {area:.3g} m²: es demasiado delgada para contener una unidad de muestreo. Busque astillas en el marco.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="204"/>
+        <location filename="../processing/engine/layout.py" line="206"/>
         <source>DESIGN must be 0 (simple random), 1 (systematic grid) or 2 (spatially balanced).</source>
         <translation>DESIGN debe ser 0 (aleatorio simple), 1 (cuadrícula sistemática) o 2 (espacialmente equilibrado).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="84"/>
+        <location filename="../processing/engine/layout.py" line="86"/>
         <source>SIZE must be more than 0 m for a point unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad puntual; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="85"/>
+        <location filename="../processing/engine/layout.py" line="87"/>
         <source>SIZE must be more than 0 m for a square unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad cuadrada; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="86"/>
+        <location filename="../processing/engine/layout.py" line="88"/>
         <source>SIZE must be more than 0 m for a circle unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad circular; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="87"/>
+        <location filename="../processing/engine/layout.py" line="89"/>
         <source>SIZE must be more than 0 m for a line unit; it is {size}.</source>
         <translation>SIZE debe ser mayor que 0 m para una unidad lineal; es {size}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="212"/>
+        <location filename="../processing/engine/layout.py" line="214"/>
         <source>BEARING must be -1 (random) or between 0 and 360 degrees; it is {bearing}.</source>
         <translation>BEARING debe ser -1 (aleatorio) o estar entre 0 y 360 grados; es {bearing}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="216"/>
+        <location filename="../processing/engine/layout.py" line="218"/>
         <source>MIN_SPACING must be 0 or more metres.</source>
         <translation>MIN_SPACING debe ser 0 metros o más.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="218"/>
+        <location filename="../processing/engine/layout.py" line="220"/>
         <source>RESERVE must be 0 or a positive whole number.</source>
         <translation>RESERVE debe ser 0 o un número entero positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="408"/>
+        <location filename="../processing/engine/layout.py" line="410"/>
         <source>{field} is empty (NULL) or not a number for feature(s) {ids}. Give every stratum a whole number of units, or leave N_FIELD unset to use N_UNITS.</source>
         <translation>{field} está vacío (NULL) o no es un número para las entidades {ids}. Dé a cada estrato un número entero de unidades, o deje N_FIELD sin definir para usar N_UNITS.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="415"/>
+        <location filename="../processing/engine/layout.py" line="417"/>
         <source>{field} is negative for feature(s) {ids}. Use 0 or a positive whole number.</source>
         <translation>{field} es negativo para las entidades {ids}. Use 0 o un número entero positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="422"/>
+        <location filename="../processing/engine/layout.py" line="424"/>
         <source>{field} is not a whole number for feature(s) {ids}. Round the allocation to whole units first.</source>
         <translation>{field} no es un número entero para las entidades {ids}. Redondee primero la asignación a unidades enteras.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="506"/>
+        <location filename="../processing/engine/layout.py" line="476"/>
         <source>Give N_FIELD (units per stratum) or N_UNITS (a total of at least 1).</source>
         <translation>Indique N_FIELD (unidades por estrato) o N_UNITS (un total de al menos 1).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="522"/>
+        <location filename="../processing/engine/layout.py" line="524"/>
         <source>Invalid geometry was repaired for feature(s) {ids}; check their outlines.</source>
         <translation>Se reparó una geometría no válida en las entidades {ids}; compruebe sus contornos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="526"/>
+        <location filename="../processing/engine/layout.py" line="528"/>
         <source>Empty or zero-area feature(s) {ids} were skipped.</source>
         <translation>Se omitieron las entidades vacías o de área nula {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="529"/>
+        <location filename="../processing/engine/layout.py" line="531"/>
         <source>Feature(s) {ids} have less than {area:g} m² of area (slivers, e.g. left over by an overlay or a reprojection) and were skipped.</source>
         <translation>Las entidades {ids} tienen menos de {area:g} m² de área (astillas, dejadas por ejemplo por una superposición o una reproyección) y se han omitido.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="535"/>
+        <location filename="../processing/engine/layout.py" line="536"/>
         <source>The frame has no polygon of {area:g} m² or more: every feature is empty, has zero area or is a sliver.</source>
         <translation>El marco de muestreo no tiene ningún polígono de {area:g} m² o más: cada entidad está vacía, tiene área nula o es una astilla.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="546"/>
+        <location filename="../processing/engine/layout.py" line="567"/>
         <source>{field} is empty (NULL) for feature {fid}. Give it a stratum value.</source>
         <translation>{field} está vacío (NULL) para la entidad {fid}. Dele un valor de estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="574"/>
+        <location filename="../processing/engine/layout.py" line="621"/>
         <source>The features of the frame (no stratum field) carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value or choose a stratum field so that each feature is a stratum.</source>
         <translation>Las entidades del marco de muestreo (sin campo de estrato) tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades o elija un campo de estrato para que cada entidad sea un estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="574"/>
+        <location filename="../processing/engine/layout.py" line="621"/>
         <source>The features of stratum {key} carry different {n_field} values ({values}) (features {ids}). {n_field} is the number of units of the whole stratum: give its features the same value.</source>
         <translation>Las entidades del estrato {key} tienen valores de {n_field} distintos ({values}) (entidades {ids}). {n_field} es el número de unidades de todo el estrato: dé el mismo valor a sus entidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="591"/>
+        <location filename="../processing/engine/layout.py" line="606"/>
         <source>N_UNITS = {n_units} is fewer than {minimum} per stratum for {n_strata} strata; every stratum gets {minimum} ({total} units).</source>
         <translation>N_UNITS = {n_units} es menos de {minimum} por estrato para {n_strata} estratos; cada estrato recibe {minimum} ({total} unidades).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="90"/>
+        <location filename="../processing/engine/layout.py" line="92"/>
         <source>The frame is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="95"/>
+        <location filename="../processing/engine/layout.py" line="97"/>
         <source>The frame is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="100"/>
+        <location filename="../processing/engine/layout.py" line="102"/>
         <source>The frame is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="105"/>
+        <location filename="../processing/engine/layout.py" line="107"/>
         <source>The frame is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El marco de muestreo es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="110"/>
+        <location filename="../processing/engine/layout.py" line="112"/>
         <source>Stratum {key} is too small for a point unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad puntual de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="115"/>
+        <location filename="../processing/engine/layout.py" line="117"/>
         <source>Stratum {key} is too small for a square unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad cuadrada de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="120"/>
+        <location filename="../processing/engine/layout.py" line="122"/>
         <source>Stratum {key} is too small for a circle unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad circular de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="125"/>
+        <location filename="../processing/engine/layout.py" line="127"/>
         <source>Stratum {key} is too small for a line unit of SIZE {size:g} m wholly inside it: no point lies {radius:.1f} m or more from its edge (features {ids}). Use a smaller SIZE, untick INSIDE, or merge the stratum with a neighbour.</source>
         <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="607"/>
+        <location filename="../processing/engine/layout.py" line="667"/>
         <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="607"/>
+        <location filename="../processing/engine/layout.py" line="667"/>
         <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="617"/>
+        <location filename="../processing/engine/layout.py" line="678"/>
         <source>The frame gets no units; the estimate cannot speak for it.</source>
         <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="617"/>
+        <location filename="../processing/engine/layout.py" line="678"/>
         <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
         <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="622"/>
+        <location filename="../processing/engine/layout.py" line="683"/>
         <source>The frame gets one unit only; its variance cannot be estimated.</source>
         <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="622"/>
+        <location filename="../processing/engine/layout.py" line="683"/>
         <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
         <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="647"/>
+        <location filename="../processing/engine/layout.py" line="771"/>
         <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
         <translation>Hay estratos que se solapan ({pairs}): un lugar pertenece a un solo estrato, y las unidades de una zona común se sortearían en ambos estratos y se ponderarían dos veces. Haga disjuntos los polígonos de los estratos (por ejemplo con las herramientas Diferencia o Unión del anfitrión) y vuelva a ejecutar.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="651"/>
+        <location filename="../processing/engine/layout.py" line="775"/>
         <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
         <translation>Hay estratos que se solapan ligeramente ({pairs}); las unidades allí pertenecen a ambos. Haga disjuntos los polígonos de los estratos si es más que ruido de digitalización.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="736"/>
+        <location filename="../processing/engine/layout.py" line="861"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="736"/>
+        <location filename="../processing/engine/layout.py" line="861"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="836"/>
+        <location filename="../processing/engine/layout.py" line="963"/>
         <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
         <translation>Una cuadrícula sistemática de espaciado {spacing:.3g} m sobre un área de {area:,.1f} m² extendida sobre {width:,.0f} m x {height:,.0f} m necesitaría {count:,} puntos candidatos. El área es una astilla o demasiado pequeña para el número de unidades: busque astillas en el marco, pida menos unidades o use otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="905"/>
+        <location filename="../processing/engine/layout.py" line="1009"/>
         <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="905"/>
+        <location filename="../processing/engine/layout.py" line="1009"/>
         <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="1028"/>
         <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="925"/>
+        <location filename="../processing/engine/layout.py" line="1028"/>
         <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="936"/>
+        <location filename="../processing/engine/layout.py" line="1040"/>
         <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="936"/>
+        <location filename="../processing/engine/layout.py" line="1040"/>
         <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="944"/>
+        <location filename="../processing/engine/layout.py" line="1049"/>
         <source>The frame has only {n} of {r} reserve units.</source>
         <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="944"/>
+        <location filename="../processing/engine/layout.py" line="1049"/>
         <source>Stratum {key} has only {n} of {r} reserve units.</source>
         <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="145"/>
+        <location filename="../processing/engine/layout.py" line="147"/>
         <source>start of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>inicio del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="148"/>
+        <location filename="../processing/engine/layout.py" line="150"/>
         <source>start of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>inicio del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="151"/>
+        <location filename="../processing/engine/layout.py" line="153"/>
         <source>end of transect {unit} (primary, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin del transecto {unit} (principal, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="154"/>
+        <location filename="../processing/engine/layout.py" line="156"/>
         <source>end of transect {unit} (reserve, stratum {stratum}, bearing {bearing:.0f} deg)</source>
         <translation>fin del transecto {unit} (de reserva, estrato {stratum}, rumbo {bearing:.0f} grados)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="137"/>
+        <location filename="../processing/engine/layout.py" line="139"/>
         <source>point unit {unit} (primary, stratum {stratum})</source>
         <translation>unidad puntual {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="138"/>
+        <location filename="../processing/engine/layout.py" line="140"/>
         <source>point unit {unit} (reserve, stratum {stratum})</source>
         <translation>unidad puntual {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="139"/>
+        <location filename="../processing/engine/layout.py" line="141"/>
         <source>square unit {unit} (primary, stratum {stratum})</source>
         <translation>unidad cuadrada {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="140"/>
+        <location filename="../processing/engine/layout.py" line="142"/>
         <source>square unit {unit} (reserve, stratum {stratum})</source>
         <translation>unidad cuadrada {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="141"/>
+        <location filename="../processing/engine/layout.py" line="143"/>
         <source>circle unit {unit} (primary, stratum {stratum})</source>
         <translation>unidad circular {unit} (principal, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="142"/>
+        <location filename="../processing/engine/layout.py" line="144"/>
         <source>circle unit {unit} (reserve, stratum {stratum})</source>
         <translation>unidad circular {unit} (de reserva, estrato {stratum})</translation>
     </message>
@@ -4638,162 +4782,162 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>El marco de muestreo no contiene ninguna celda ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1261"/>
+        <location filename="../processing/engine/stratification.py" line="1401"/>
         <source>Covariate &apos;{name}&apos; is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
         <translation>La covariable «{name}» es constante ({value:g}) en el marco de muestreo: no puede definir estratos. Use otra covariable, o compruebe el marco y el ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1302"/>
+        <location filename="../processing/engine/stratification.py" line="1419"/>
         <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
         <translation>METHOD desconocido {method!r}: use de 0 (cuantiles) a 4 (clases del ráster).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1305"/>
+        <location filename="../processing/engine/stratification.py" line="1423"/>
         <source>Ask for at least 2 strata (STRATA).</source>
         <translation>Pida al menos 2 estratos (STRATA).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1306"/>
+        <location filename="../processing/engine/stratification.py" line="1430"/>
         <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
         <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables ({names}). Compruebe que los rásteres cubren el marco y que su valor NoData es correcto.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1342"/>
+        <location filename="../processing/engine/stratification.py" line="1483"/>
         <source>Covariate &apos;{name}&apos; takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>La covariable «{name}» toma solo {n_distinct} valores distintos en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1356"/>
+        <location filename="../processing/engine/stratification.py" line="1498"/>
         <source>Some boundaries coincide (many cells share the same value of &apos;{name}&apos;); {formed} strata are formed instead of {k}.</source>
         <translation>Algunos límites coinciden (muchas celdas comparten el mismo valor de «{name}»); se forman {formed} estratos en lugar de {k}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1370"/>
+        <location filename="../processing/engine/stratification.py" line="1514"/>
         <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1375"/>
+        <location filename="../processing/engine/stratification.py" line="1519"/>
         <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en una muestra de {sample_n} celdas, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1386"/>
+        <location filename="../processing/engine/stratification.py" line="1533"/>
         <source>Covariate &apos;{name}&apos; has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host&apos;s reclassify by table tool), or choose another METHOD.</source>
         <translation>La covariable «{name}» tiene más de {max_classes} clases (al menos {n_distinct} valores distintos en el marco de muestreo): reclasifíquela primero en {max_classes} clases o menos (por ejemplo con la herramienta de reclasificación por tabla del anfitrión), o elija otro METHOD.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1403"/>
+        <location filename="../processing/engine/stratification.py" line="1590"/>
         <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
         <translation>{dropped} de los {k} estratos no contienen ninguna celda y se quitaron.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1481"/>
+        <location filename="../processing/engine/stratification.py" line="1684"/>
         <source>{name} class {value}</source>
         <translation>{name}: clase {value}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1484"/>
+        <location filename="../processing/engine/stratification.py" line="1687"/>
         <source>mean {values}</source>
         <translation>media {values}</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="94"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="47"/>
         <source>Covariate &apos;{name}&apos; cannot be read ({error}). Check the file.</source>
         <translation>La covariable «{name}» no puede leerse ({error}). Compruebe el archivo.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="98"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="51"/>
         <source>Covariate &apos;{name}&apos; has no band {band}.</source>
         <translation>La covariable «{name}» no tiene banda {band}.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="199"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="131"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="231"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="163"/>
         <source>The frame has no polygon.</source>
         <translation>El marco de muestreo no tiene ningún polígono.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="275"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="207"/>
         <source>The frame does not overlap covariate &apos;{name}&apos; ({path}). Use a raster that covers the frame, or check both layers&apos; CRS.</source>
         <translation>El marco de muestreo no se superpone a la covariable «{name}» ({path}). Use un ráster que cubra el marco, o compruebe el SRC de ambas capas.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="441"/>
+        <location filename="../processing/gdal_io/stratum_raster.py" line="16"/>
         <source>Cannot write the stratum raster &apos;{path}&apos;.</source>
         <translation>No se puede escribir el ráster de estratos «{path}».</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="808"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="124"/>
         <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
         <translation>Con MIN_AREA = {min_area:g} ha, la fusión de las manchas más pequeñas dejó un solo estrato: no queda nada que estratificar. Reduzca MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="815"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="132"/>
         <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
         <translation>{merged} estratos constaban solo de manchas por debajo de MIN_AREA y se fusionaron con sus vecinos.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="823"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="140"/>
         <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of &apos;{name}&apos; that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
         <translation>La fusión de las manchas por debajo de MIN_AREA pasó celdas de un estrato a otro: la parte de la varianza de «{name}» que explican los estratos bajó de {before:.2f} a {after:.2f}. Un MIN_AREA menor mantiene los estratos más cerca de las covariables.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="828"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="146"/>
         <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
         <translation>{n} mancha(s) que cubren {ha:,.2f} ha quedan por debajo de MIN_AREA ({min_area:g} ha): no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData). Quite esas islas del marco de muestreo, rellene los NoData de las covariables, o reduzca MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="840"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="163"/>
         <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
         <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="867"/>
+        <location filename="../processing/gdal_io/surface.py" line="25"/>
         <source>The density surface &apos;{name}&apos; cannot be read by GDAL ({error}). Save it as a GeoTIFF first.</source>
         <translation>GDAL no puede leer la superficie de densidad «{name}» ({error}). Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="879"/>
+        <location filename="../processing/gdal_io/surface.py" line="37"/>
         <source>The density surface &apos;{name}&apos; does not overlap the sampling frame. Check that both cover the same area.</source>
         <translation>La superficie de densidad «{name}» no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_io.py" line="888"/>
+        <location filename="../processing/gdal_io/surface.py" line="46"/>
         <source>The density surface &apos;{name}&apos; could not be warped to {crs} ({error}).</source>
         <translation>No se pudo reproyectar la superficie de densidad «{name}» a {crs} ({error}).</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="102"/>
+        <location filename="../processing/gdal_io/masking.py" line="102"/>
         <source>The mask raster (MASK) &apos;{source}&apos; cannot be opened by GDAL.</source>
         <translation>GDAL no puede abrir el ráster de máscara (MASK) «{source}».</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="130"/>
+        <location filename="../processing/gdal_io/masking.py" line="130"/>
         <source>The mask raster (MASK) would need {rows} x {cols} cells over the study area; that is more than {max_cells:,}. Resample the raster to coarser cells first.</source>
         <translation>El ráster de máscara (MASK) necesitaría {rows} x {cols} celdas sobre el área de estudio, más de {max_cells:,}. Remuestree primero el ráster a celdas más gruesas.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="170"/>
+        <location filename="../processing/gdal_io/masking.py" line="170"/>
         <source>The mask raster (MASK) cannot be reprojected to the computation CRS.</source>
         <translation>El ráster de máscara (MASK) no puede reproyectarse al SRC de cálculo.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="201"/>
+        <location filename="../processing/gdal_io/masking.py" line="201"/>
         <source>GDAL could not turn the masked raster cells into polygons.</source>
         <translation>GDAL no pudo convertir las celdas enmascaradas del ráster en polígonos.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="242"/>
+        <location filename="../processing/gdal_io/masking.py" line="242"/>
         <source>MASK_MIN ({mask_min:g}) is greater than MASK_MAX ({mask_max:g}); no cell could be kept. Swap the two values or leave one of them empty.</source>
         <translation>MASK_MIN ({mask_min:g}) es mayor que MASK_MAX ({mask_max:g}); no podría conservarse ninguna celda. Intercambie los dos valores o deje uno de ellos vacío.</translation>
     </message>
     <message>
-        <location filename="../processing/raster_masking.py" line="248"/>
+        <location filename="../processing/gdal_io/masking.py" line="248"/>
         <source>The mask raster (MASK) has no band {band}; it has {count}.</source>
         <translation>El ráster de máscara (MASK) no tiene banda {band}; tiene {count}.</translation>
     </message>
@@ -4848,167 +4992,167 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>La capa de animales no contiene ningún animal: no hay nada que detectar.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="168"/>
+        <location filename="../processing/engine/occupancy.py" line="159"/>
         <source>Layer {layer}: occupancy needs at least 2 occasions (history fields); {n} given. With one visit per site, detection and occupancy cannot be told apart.</source>
         <translation>Capa {layer}: la ocupación necesita al menos 2 ocasiones (campos del historial); {n} indicada(s). Con una sola visita por sitio, la detección y la ocupación no pueden distinguirse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="178"/>
+        <location filename="../processing/engine/occupancy.py" line="169"/>
         <source>Layer {layer}, history field {field}: sites {ids} hold a value other than 1 (detected), 0 (not detected) or NULL (not surveyed). Correct these values and run again.</source>
         <translation>Capa {layer}, campo del historial {field}: los sitios {ids} contienen un valor distinto de 1 (detectada), 0 (no detectada) o NULL (no muestreado). Corrija estos valores y vuelva a ejecutar.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="186"/>
+        <location filename="../processing/engine/occupancy.py" line="177"/>
         <source>Layer {layer}: no site was surveyed on any occasion (every history value is NULL).</source>
         <translation>Capa {layer}: ningún sitio se muestreó en ninguna ocasión (todos los valores del historial son NULL).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="190"/>
+        <location filename="../processing/engine/occupancy.py" line="181"/>
         <source>Layer {layer}: the species was not detected at any site, so occupancy and detection cannot be estimated (every history is 0).</source>
         <translation>Capa {layer}: la especie no se detectó en ningún sitio, así que la ocupación y la detección no pueden estimarse (todos los historiales son 0).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="199"/>
+        <location filename="../processing/engine/occupancy.py" line="190"/>
         <source>Layer {layer}: {n} sites have an empty (NULL) site id. Give every site an id, or leave SITE_ID_FIELD empty to use the feature ids.</source>
         <translation>Capa {layer}: {n} sitios tienen un identificador de sitio vacío (NULL). Dé un identificador a cada sitio, o deje SITE_ID_FIELD vacío para usar los identificadores de entidad.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="209"/>
+        <location filename="../processing/engine/occupancy.py" line="200"/>
         <source>Layer {layer}: site ids {ids} occur more than once. Each site needs one row holding all its occasions; merge the rows or correct the ids.</source>
         <translation>Capa {layer}: los identificadores de sitio {ids} aparecen más de una vez. Cada sitio necesita una sola fila con todas sus ocasiones; combine las filas o corrija los identificadores.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="237"/>
+        <location filename="../processing/engine/occupancy.py" line="228"/>
         <source>Model line {line!r}: write the occupancy terms after psi: and the detection terms after p:, for example psi: elevation p: effort.</source>
         <translation>Línea de modelo {line!r}: escriba los términos de ocupación después de psi: y los de detección después de p:, por ejemplo psi: elevation p: effort.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="256"/>
+        <location filename="../processing/engine/occupancy.py" line="247"/>
         <source>Model line {line!r}: effort varies by occasion and acts on detection only; move it after p:.</source>
         <translation>Línea de modelo {line!r}: effort varía según la ocasión y solo actúa sobre la detección; colóquelo después de p:.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <location filename="../processing/engine/occupancy.py" line="254"/>
         <source>Model line {line!r}: {name} is not a numeric field of the sites layer (give EFFORT_FIELDS to use effort). Use the field names as they are in the layer.</source>
         <translation>Línea de modelo {line!r}: {name} no es un campo numérico de la capa de sitios (indique EFFORT_FIELDS para usar effort). Use los nombres de los campos tal como están en la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="263"/>
+        <location filename="../processing/engine/occupancy.py" line="254"/>
         <source>Model line {line!r}: {name} is not a numeric field of the sites layer. Use the field names as they are in the layer.</source>
         <translation>Línea de modelo {line!r}: {name} no es un campo numérico de la capa de sitios. Use los nombres de los campos tal como están en la capa.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="299"/>
+        <location filename="../processing/engine/occupancy.py" line="290"/>
         <source>CONFIDENCE must be at least 0.5 and below 1; it is {value}.</source>
         <translation>CONFIDENCE debe ser al menos 0.5 y menor que 1; es {value}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="302"/>
+        <location filename="../processing/engine/occupancy.py" line="293"/>
         <source>TARGET_SE must be 0 (no advice) or more; it is {value}.</source>
         <translation>TARGET_SE debe ser 0 (sin recomendaciones) o más; es {value}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="305"/>
+        <location filename="../processing/engine/occupancy.py" line="296"/>
         <source>The number of goodness-of-fit replicates must be 0 or a positive whole number.</source>
         <translation>El número de réplicas de la prueba de bondad de ajuste debe ser 0 o un número entero positivo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="318"/>
+        <location filename="../processing/engine/occupancy.py" line="309"/>
         <source>A model uses effort but no EFFORT_FIELDS were given.</source>
         <translation>Un modelo usa effort pero no se indicó ningún EFFORT_FIELDS.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="335"/>
+        <location filename="../processing/engine/occupancy.py" line="326"/>
         <source>Layer {layer} has no covariate field {field}.</source>
         <translation>La capa {layer} no tiene el campo de covariable {field}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="341"/>
+        <location filename="../processing/engine/occupancy.py" line="332"/>
         <source>Layer {layer}, covariate field {field}: surveyed sites {ids} have no number (NULL or text). Fill in the values, leave these sites out, or drop the covariate.</source>
         <translation>Capa {layer}, campo de covariable {field}: los sitios muestreados {ids} no tienen un número (NULL o texto). Rellene los valores, deje fuera esos sitios o quite la covariable.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="347"/>
+        <location filename="../processing/engine/occupancy.py" line="338"/>
         <source>Layer {layer}, covariate field {field}: every surveyed site has the same value ({value:g}), so its effect cannot be estimated. Drop it from the model.</source>
         <translation>Capa {layer}, campo de covariable {field}: todos los sitios muestreados tienen el mismo valor ({value:g}), así que su efecto no puede estimarse. Quítela del modelo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="356"/>
+        <location filename="../processing/engine/occupancy.py" line="347"/>
         <source>Give one effort field per history field, in the same order: {k} history fields and {e} effort fields.</source>
         <translation>Indique un campo de esfuerzo por campo del historial, en el mismo orden: {k} campos del historial y {e} campos de esfuerzo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="371"/>
+        <location filename="../processing/engine/occupancy.py" line="362"/>
         <source>Layer {layer}, effort fields {fields}: surveyed sites {ids} have no effort, or a negative one, on an occasion they were surveyed. Give every survey its effort.</source>
         <translation>Capa {layer}, campos de esfuerzo {fields}: los sitios muestreados {ids} no tienen esfuerzo, o lo tienen negativo, en una ocasión en la que se muestrearon. Dé a cada visita su esfuerzo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="377"/>
+        <location filename="../processing/engine/occupancy.py" line="368"/>
         <source>Layer {layer}: the effort is the same on every survey, so its effect cannot be estimated. Leave EFFORT_FIELDS empty.</source>
         <translation>Capa {layer}: el esfuerzo es el mismo en todas las visitas, así que su efecto no puede estimarse. Deje EFFORT_FIELDS vacío.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="742"/>
+        <location filename="../processing/engine/occupancy.py" line="733"/>
         <source>The search for the maximum stopped after {n} iterations without converging.</source>
         <translation>La búsqueda del máximo se detuvo tras {n} iteraciones sin converger.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="754"/>
+        <location filename="../processing/engine/occupancy.py" line="745"/>
         <source>The observed information is not positive definite at the maximum: the parameters cannot all be estimated from these data (collinear covariates, or too few detections).</source>
         <translation>La información observada no es definida positiva en el máximo: no todos los parámetros pueden estimarse con estos datos (covariables colineales o muy pocas detecciones).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1040"/>
+        <location filename="../processing/engine/occupancy.py" line="1031"/>
         <source>The occupancy model ({model}) could not be fitted: {why} No estimate is given. Try fewer covariates, more sites or more occasions.</source>
         <translation>No se pudo ajustar el modelo de ocupación ({model}): {why} No se da ninguna estimación. Pruebe con menos covariables, más sitios o más ocasiones.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1045"/>
+        <location filename="../processing/engine/occupancy.py" line="1036"/>
         <source>The model {model} could not be fitted and is left out of the comparison: {why}</source>
         <translation>No se pudo ajustar el modelo {model} y queda fuera de la comparación: {why}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1049"/>
+        <location filename="../processing/engine/occupancy.py" line="1040"/>
         <source>Sites {ids} have no surveyed occasion (every history value NULL) and were left out of the analysis.</source>
         <translation>Los sitios {ids} no tienen ninguna ocasión muestreada (todos los valores del historial NULL) y se dejaron fuera del análisis.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1057"/>
+        <location filename="../processing/engine/occupancy.py" line="1048"/>
         <source>The goodness-of-fit test was skipped: with {k} occasions there are too many possible detection histories to enumerate.</source>
         <translation>Se omitió la prueba de bondad de ajuste: con {k} ocasiones hay demasiados historiales de detección posibles para enumerarlos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1061"/>
+        <location filename="../processing/engine/occupancy.py" line="1052"/>
         <source>The goodness-of-fit test was skipped: the model has parameters at the boundary.</source>
         <translation>Se omitió la prueba de bondad de ajuste: el modelo tiene parámetros en el límite.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <location filename="../processing/engine/occupancy.py" line="1066"/>
         <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with every site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
         <translation>psi está en el límite de su rango (estimación {psi:.4f}): los datos son compatibles con que todos los sitios estén ocupados. Su error estándar y su intervalo no pueden calcularse a partir de la información; las demás estimaciones están condicionadas a ese valor.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1075"/>
+        <location filename="../processing/engine/occupancy.py" line="1066"/>
         <source>psi is at the boundary of its range (estimate {psi:.4f}): the data are consistent with no site being occupied. Its standard error and interval cannot be computed from the information; the other estimates are conditional on it.</source>
         <translation>psi está en el límite de su rango (estimación {psi:.4f}): los datos son compatibles con que ningún sitio esté ocupado. Su error estándar y su intervalo no pueden calcularse a partir de la información; las demás estimaciones están condicionadas a ese valor.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1085"/>
+        <location filename="../processing/engine/occupancy.py" line="1076"/>
         <source>p is at the boundary of its range (estimate {p:.4f}): every survey of a site with a detection detected the species. Its standard error cannot be computed; psi is then the naive occupancy.</source>
         <translation>p está en el límite de su rango (estimación {p:.4f}): todas las visitas a un sitio con alguna detección detectaron la especie. Su error estándar no puede calcularse; psi es entonces la ocupación ingenua.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1090"/>
+        <location filename="../processing/engine/occupancy.py" line="1081"/>
         <source>Parameter {name} is at the boundary (a logit beyond {limit:g}): a covariate separates the sites, or a probability is 0 or 1. Its standard error cannot be computed; simplify the model.</source>
         <translation>El parámetro {name} está en el límite (un logit más allá de {limit:g}): una covariable separa los sitios, o una probabilidad es 0 o 1. Su error estándar no puede calcularse; simplifique el modelo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1100"/>
+        <location filename="../processing/engine/occupancy.py" line="1091"/>
         <source>{n} bootstrap data sets could not be fitted and were left out of the goodness-of-fit test.</source>
         <translation>No se pudieron ajustar {n} conjuntos de datos bootstrap y se dejaron fuera de la prueba de bondad de ajuste.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/occupancy.py" line="1104"/>
+        <location filename="../processing/engine/occupancy.py" line="1095"/>
         <source>The goodness-of-fit test rejects the model (p = {p:.3f}, c-hat = {c:.2f}): the histories vary more than the model allows. Standard errors may be too small; multiply their squares by c-hat, or add covariates.</source>
         <translation>La prueba de bondad de ajuste rechaza el modelo (p = {p:.3f}, c-hat = {c:.2f}): los historiales varían más de lo que el modelo permite. Los errores estándar pueden ser demasiado pequeños; multiplique sus cuadrados por c-hat, o añada covariables.</translation>
     </message>
@@ -5163,7 +5307,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). El muestreo «plus» es insesgado, así que la causa probable es el estimador de razón con muy pocos animales por unidad, o una cuadrícula sistemática cuyo número realizado de unidades varía con la superficie; más unidades lo reducen.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="251"/>
+        <location filename="../processing/engine/distance_density.py" line="244"/>
         <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
         <translation>El tipo de muestreo debe ser 'line' o 'point' (se recibió '{survey}').</translation>
     </message>
@@ -5218,197 +5362,197 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>No se pudo ajustar ninguna función de detección a estas {n} distancias. Compruebe las distancias y la distancia de truncamiento.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="118"/>
+        <location filename="../processing/engine/distance_density.py" line="111"/>
         <source>Layer &apos;{layer}&apos;: {n} units have no id in the field &apos;{field}&apos;. Give every unit its id.</source>
         <translation>Capa «{layer}»: {n} unidades no tienen identificador en el campo «{field}». Dé a cada unidad su identificador.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="124"/>
+        <location filename="../processing/engine/distance_density.py" line="117"/>
         <source>Layer &apos;{layer}&apos;: the unit ids {ids} occur more than once in the field &apos;{field}&apos;. Each unit needs its own id.</source>
         <translation>Capa «{layer}»: los identificadores de unidad {ids} aparecen más de una vez en el campo «{field}». Cada unidad necesita su propio identificador.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="133"/>
+        <location filename="../processing/engine/distance_density.py" line="126"/>
         <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
         <translation>Capa «{layer}»: los transectos {ids} tienen longitud cero. Elimínelos o dibuje su línea.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="137"/>
+        <location filename="../processing/engine/distance_density.py" line="130"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
         <translation>Capa «{layer}»: los puntos {ids} no tienen visitas. Indique para cada punto muestreado su número de visitas (1 o más), o elimine los puntos que no se muestrearon.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="146"/>
+        <location filename="../processing/engine/distance_density.py" line="139"/>
         <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
         <translation>Capa «{layer}»: las unidades {ids} no tienen estrato, o tienen un estrato que la capa de estratos no tiene ({strata}). Dé a cada unidad el identificador de su estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="156"/>
+        <location filename="../processing/engine/distance_density.py" line="149"/>
         <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
         <translation>Los estratos {strata} no tienen ningún transecto ni punto muestreado. Muestréelos, o quítelos de la capa de estratos (la estimación solo se refiere entonces a los demás estratos).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="163"/>
+        <location filename="../processing/engine/distance_density.py" line="156"/>
         <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
         <translation>Los estratos {strata} tienen un solo transecto o punto cada uno; la varianza de la tasa de encuentro necesita al menos 2 por estrato. Fusione cada uno con un estrato vecino en la capa de estratos y en el campo de estrato de las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="184"/>
+        <location filename="../processing/engine/distance_density.py" line="177"/>
         <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
         <translation>Capa «{layer}»: hay observaciones que nombran unidades que la capa «{units}» no tiene (campo «{field}»): {ids}. Corrija esos identificadores de unidad o añada las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="192"/>
+        <location filename="../processing/engine/distance_density.py" line="185"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
         <translation>Capa «{layer}»: las observaciones {ids} no tienen distancia en el campo «{field}» (vacío o no es un número). Rellene las distancias o elimine esas observaciones.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="199"/>
+        <location filename="../processing/engine/distance_density.py" line="192"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
         <translation>Capa «{layer}»: las observaciones {ids} tienen una distancia negativa en el campo «{field}». Las distancias se miden desde la línea o el punto hacia fuera y son de 0 m o más; corríjalas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="211"/>
+        <location filename="../processing/engine/distance_density.py" line="204"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
         <translation>Capa «{layer}»: las observaciones {ids} no tienen un tamaño de grupo mayor que 0 en el campo «{field}». Rellene el número de animales vistos en cada grupo (1 para un animal solo) o no elija ningún campo de tamaño de grupo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="224"/>
+        <location filename="../processing/engine/distance_density.py" line="217"/>
         <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
         <translation>Los intervalos de distancia deben empezar en 0 m y crecer, con al menos dos intervalos (se recibió {cutpoints}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="232"/>
+        <location filename="../processing/engine/distance_density.py" line="225"/>
         <source>There are no observations: a detection function needs at least {minimum} detections.</source>
         <translation>No hay observaciones: una función de detección necesita al menos {minimum} detecciones.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="261"/>
+        <location filename="../processing/engine/distance_density.py" line="254"/>
         <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
         <translation>Solo {n} detecciones quedan dentro de la distancia de truncamiento de {w:g} m; una función de detección necesita al menos {minimum} (práctica habitual: de 60 a 80). Muestree más transectos o puntos, o aumente la distancia de truncamiento.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="269"/>
+        <location filename="../processing/engine/distance_density.py" line="262"/>
         <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
         <translation>Solo {n} detecciones quedan dentro de la distancia de truncamiento: la función de detección se basa en pocas distancias (la práctica habitual pide de 60 a 80), así que su forma y la densidad son inciertas, y el AIC puede elegir un modelo por azar.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="419"/>
+        <location filename="../processing/engine/distance_density.py" line="412"/>
         <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
         <translation>Una función de detección por estrato necesita al menos {minimum} detecciones en cada estrato dentro de la distancia de truncamiento; estos estratos tienen menos: {strata}. Use una sola función de detección para todos los estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="438"/>
+        <location filename="../processing/engine/distance_density.py" line="431"/>
         <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
         <translation>Estrato {stratum}: su función de detección se basa en {n} detecciones (la práctica habitual pide de 60 a 80 por función); considere una sola función para todos los estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="444"/>
+        <location filename="../processing/engine/distance_density.py" line="438"/>
         <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
         <translation>La función de detección elegida ({model}{at}) se ajusta mal a las distancias (prueba de bondad de ajuste p = {p:.3f}). Busque en el histograma acumulaciones en distancias redondas o un pico en 0, y considere intervalos de distancia u otro truncamiento.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="451"/>
+        <location filename="../processing/engine/distance_density.py" line="445"/>
         <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
         <translation>La función de detección elegida ({model}) tiene un parámetro en el límite de su rango, así que su varianza no es fiable; pruebe otro truncamiento u otra función clave.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="457"/>
+        <location filename="../processing/engine/distance_density.py" line="451"/>
         <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
         <translation>No se pudo calcular la varianza de la función de detección ({model}) (la verosimilitud es plana en su máximo); su CV falta en el intervalo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="662"/>
+        <location filename="../processing/engine/distance_density.py" line="656"/>
         <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
         <translation>El bootstrap falló: no se pudieron ajustar {failed} de los {n} remuestreos. Ejecute sin el bootstrap.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="750"/>
+        <location filename="../processing/engine/distance_density.py" line="744"/>
         <source>Unknown group-size method &apos;{method}&apos;.</source>
         <translation>Método de tamaño de grupo desconocido '{method}'.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="755"/>
+        <location filename="../processing/engine/distance_density.py" line="749"/>
         <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
         <translation>El nivel de confianza debe estar entre 0.5 y 1 (se recibió {level:g}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="772"/>
+        <location filename="../processing/engine/distance_density.py" line="766"/>
         <source>The bootstrap needs a random generator (a seed).</source>
         <translation>El bootstrap necesita un generador aleatorio (una semilla).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="780"/>
+        <location filename="../processing/engine/distance_density.py" line="774"/>
         <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
         <translation>No se pudieron ajustar {failed} de los {n} remuestreos bootstrap y se dejaron fuera; el intervalo bootstrap puede ser demasiado estrecho.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="697"/>
+        <location filename="../processing/engine/estimation.py" line="681"/>
         <source>The degrees of freedom of the detection estimate must be 0 (known p) or more.</source>
         <translation>Los grados de libertad de la estimación de la detección deben ser 0 (p conocida) o más.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="738"/>
+        <location filename="../processing/engine/estimation.py" line="722"/>
         <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
         <translation>Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="821"/>
+        <location filename="../processing/engine/estimation.py" line="805"/>
         <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
         <translation>Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="865"/>
+        <location filename="../processing/engine/estimation.py" line="849"/>
         <source>The finite-population correction was not applied in strata {ids}: their units come from a design whose units may overlap ({records}: simple random centres, or a grid denser than the units). Their possible positions form a continuous population, which has no such correction (Cordy 1993); applying it would make the interval too narrow. A layout with MIN_SPACING of at least the unit&apos;s width, a systematic grid or a spatially balanced layout keeps the units apart.</source>
         <translation>La corrección por población finita no se aplicó en los estratos {ids}: sus unidades proceden de un diseño cuyas unidades pueden solaparse ({records}: centros aleatorios simples, o una cuadrícula más densa que las unidades). Sus posiciones posibles forman una población continua, que no tiene tal corrección (Cordy 1993); aplicarla haría el intervalo demasiado estrecho. Una disposición con MIN_SPACING de al menos el ancho de la unidad, una cuadrícula sistemática o una disposición espacialmente equilibrada mantiene separadas las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="884"/>
+        <location filename="../processing/engine/estimation.py" line="868"/>
         <source>The expansion area of strata {ids} is smaller than the stratum: the plus region holds the stratum. Check the units&apos; edge record.</source>
         <translation>El área de expansión de los estratos {ids} es menor que el estrato: la región «plus» contiene el estrato. Compruebe el registro del borde (edge) de las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="903"/>
+        <location filename="../processing/engine/estimation.py" line="887"/>
         <source>In strata {ids} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
         <translation>En los estratos {ids} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1064"/>
+        <location filename="../processing/engine/estimation.py" line="1048"/>
         <source>Strata {ids} have fewer than 3 units: their variance uses the simple random sampling formula.</source>
         <translation>Los estratos {ids} tienen menos de 3 unidades: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1078"/>
+        <location filename="../processing/engine/estimation.py" line="1062"/>
         <source>{label} (one unit) with {other}</source>
         <translation>{label} (una unidad) con {other}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1083"/>
+        <location filename="../processing/engine/estimation.py" line="1067"/>
         <source>Strata {groups}: a stratum with one surveyed unit takes its variance from the collapsed-strata pairs formula with its partner (Cochran 1977, §5A.12; Hansen, Hurwitz &amp; Madow weights for unequal sizes), which counts the difference between the two strata as variance and so tends to be too large; the partner keeps its own variance.</source>
         <translation>Estratos {groups}: un estrato con una sola unidad muestreada toma su varianza de la fórmula de pares de estratos agrupados con su pareja (Cochran 1977, §5A.12; pesos de Hansen, Hurwitz &amp; Madow para tamaños desiguales), que cuenta la diferencia entre los dos estratos como varianza y por eso tiende a ser demasiado grande; la pareja conserva su propia varianza.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1243"/>
+        <location filename="../processing/engine/estimation.py" line="1227"/>
         <source>Even every possible unit in every stratum ({n:,}) would miss the target CV {target_cv:.3g}: n_next is every unit.</source>
         <translation>Incluso todas las unidades posibles de cada estrato ({n:,}) quedarían lejos del CV objetivo {target_cv:.3g}: n_next son todas las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1466"/>
+        <location filename="../processing/engine/estimation.py" line="1450"/>
         <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
         <translation>El error estándar de la probabilidad de detección ({se:.3g}) supera la mitad de p ({p:.3g}): el estudio de detección es demasiado pequeño para corregir los conteos de forma fiable, y el método delta en que se basa el intervalo es pobre con ese CV. Amplíe el estudio de detección.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1478"/>
+        <location filename="../processing/engine/estimation.py" line="1462"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
         <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0, y el intervalo es el límite superior unilateral {hi:.4g} al {level:.0%} (límite de Poisson exacto para un conteo de 0, suponiendo una sola densidad en el marco).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1486"/>
+        <location filename="../processing/engine/estimation.py" line="1470"/>
         <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
         <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su intervalo es el límite superior unilateral de un conteo de 0 (límite de Poisson exacto), y su error estándar de 0 subestima la incertidumbre global (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1530"/>
+        <location filename="../processing/engine/estimation.py" line="1514"/>
         <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
         <translation>En los estratos {ids} las unidades registran alcances distintos (reach_m): se usa el mayor para la región «plus».</translation>
     </message>
@@ -5432,6 +5576,266 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <source>Units {ids} are neither points nor lines of some length; simulated distances need line transects or point stations.</source>
         <translation>Las unidades {ids} no son ni puntos ni líneas de cierta longitud; las distancias simuladas necesitan transectos lineales o estaciones puntuales.</translation>
     </message>
+    <message>
+        <location filename="../processing/engine/distance_density.py" line="437"/>
+        <source>, stratum {stratum}</source>
+        <translation>, estrato {stratum}</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="37"/>
+        <source>every year</source>
+        <translation>cada año</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="37"/>
+        <source>rotating panels</source>
+        <translation>paneles rotativos</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="37"/>
+        <source>split panels</source>
+        <translation>paneles divididos</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="104"/>
+        <source>PANEL_DESIGN must be 0 (every year), 1 (rotating) or 2 (split); got {design}.</source>
+        <translation>PANEL_DESIGN debe ser 0 (cada año), 1 (rotativos) o 2 (divididos); se recibió {design}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="109"/>
+        <source>YEARS must be between 1 and {most}; got {years}.</source>
+        <translation>YEARS debe estar entre 1 y {most}; se recibió {years}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="116"/>
+        <source>Rotating and split designs need at least 2 rotating panels (PANELS = {panels}); with one panel every unit is visited every year: choose the every-year design.</source>
+        <translation>Los diseños de paneles rotativos y divididos necesitan al menos 2 paneles rotativos (PANELS = {panels}); con un solo panel, cada unidad se visita cada año: elija el diseño «cada año».</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="122"/>
+        <source>With {panels} panels over {years} years, panels {first} to {panels} would never be visited: use at most {years} panels or more years.</source>
+        <translation>Con {panels} paneles en {years} años, los paneles {first} a {panels} nunca se visitarían: use como máximo {years} paneles o más años.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="129"/>
+        <source>CORE_SHARE must lie between 0 and 1 for split panels (the share of units visited every year); got {share:g}.</source>
+        <translation>CORE_SHARE debe estar entre 0 y 1 para los paneles divididos (la proporción de unidades visitadas cada año); se recibió {share:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="230"/>
+        <source>The units layer has no primary unit to assign to panels.</source>
+        <translation>La capa de unidades no tiene ninguna unidad principal que asignar a paneles.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="239"/>
+        <source>Units {ids} have no draw order (draw_ord is empty). Panels follow the draw order of the layout: fill it or choose another draw-order field.</source>
+        <translation>Las unidades {ids} no tienen orden de sorteo (draw_ord está vacío). Los paneles siguen el orden de sorteo de la disposición: rellénelo o elija otro campo de orden de sorteo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="251"/>
+        <source>Units {ids} share their draw order with another primary unit of the same stratum. Each stratum&apos;s draw order must run 1, 2, 3, ... without repeats: use the layout&apos;s draw_ord field.</source>
+        <translation>Las unidades {ids} comparten su orden de sorteo con otra unidad principal del mismo estrato. El orden de sorteo de cada estrato debe ir 1, 2, 3, ... sin repeticiones: use el campo draw_ord de la disposición.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="301"/>
+        <source>Stratum {key} has {n} primary units, too few for {k} panels: panels {empty} get none of its units in that stratum.</source>
+        <translation>El estrato {key} tiene {n} unidades principales, demasiado pocas para {k} paneles: los paneles {empty} no reciben ninguna unidad en ese estrato.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="310"/>
+        <source>The units have no draw-order field: panels follow the order of the features in the layer. Panels are evenly spread only when that order is the draw order of a spatially balanced layout.</source>
+        <translation>Las unidades no tienen campo de orden de sorteo: los paneles siguen el orden de las entidades en la capa. Los paneles solo quedan repartidos de modo uniforme si ese orden es el orden de sorteo de una disposición espacialmente equilibrada.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="504"/>
+        <source>The layout was simple random (its units&apos; design field says so): each panel is a random part of it, not an evenly spread sample of the frame. Use a spatially balanced layout for evenly spread panels.</source>
+        <translation>La disposición era aleatoria simple (lo indica el campo design de sus unidades): cada panel es una parte aleatoria de ella, no una muestra repartida de modo uniforme por el marco. Use una disposición espacialmente equilibrada para obtener paneles repartidos de modo uniforme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="509"/>
+        <source>The layout was a systematic grid (its units&apos; design field says so): its draw order runs row by row, so consecutive blocks of it are bands across the frame. Use a spatially balanced layout for evenly spread panels.</source>
+        <translation>La disposición era una cuadrícula sistemática (lo indica el campo design de sus unidades): su orden de sorteo avanza fila por fila, de modo que sus bloques consecutivos son bandas que atraviesan el marco. Use una disposición espacialmente equilibrada para obtener paneles repartidos de modo uniforme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/panels.py" line="515"/>
+        <source>The panels are not more evenly spread than random parts of the layout (p = {p:.2f}). The layout was probably simple random or a systematic grid: each panel then covers the frame unevenly. Use a spatially balanced layout for evenly spread panels.</source>
+        <translation>Los paneles no están repartidos de modo más uniforme que partes aleatorias de la disposición (p = {p:.2f}). La disposición probablemente era aleatoria simple o una cuadrícula sistemática: cada panel cubre entonces el marco de forma desigual. Use una disposición espacialmente equilibrada para obtener paneles repartidos de modo uniforme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="139"/>
+        <source>Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records.</source>
+        <translation>Los registros {ids} no tienen identificador de unidad o no tienen un año en número entero. Rellene ambos o elimine los registros.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="147"/>
+        <source>Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) when the unit was not surveyed.</source>
+        <translation>Los registros {ids} tienen un conteo negativo o no numérico. Los conteos son 0 o más; deje el conteo vacío (NULL) cuando la unidad no se muestreó.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="155"/>
+        <source>Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the unit-area field empty.</source>
+        <translation>Los registros {ids} no tienen área de la unidad (o tienen una que no es mayor que 0). Indique el área de cada registro muestreado, o deje vacío el campo de área de la unidad.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="170"/>
+        <source>A trend needs counts from at least {k} different years; the records hold {found}.</source>
+        <translation>Una tendencia necesita conteos de al menos {k} años distintos; los registros contienen {found}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="184"/>
+        <source>Units were counted twice in one year (unit, year and record ids): {items}. Keep one record per unit and year (add the counts of repeated visits first).</source>
+        <translation>Hay unidades contadas dos veces en un mismo año (unidad, año e identificadores de registro): {items}. Conserve un registro por unidad y año (sume antes los conteos de las visitas repetidas).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="204"/>
+        <source>Units {ids} lie in more than one stratum across their records. A unit keeps its stratum over the years: correct the stratum field.</source>
+        <translation>Las unidades {ids} figuran en más de un estrato según sus registros. Una unidad conserva su estrato a lo largo de los años: corrija el campo de estrato.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="572"/>
+        <source>CONFIDENCE must lie between 0.5 and 1 (for example 0.95); got {c:g}.</source>
+        <translation>CONFIDENCE debe estar entre 0.5 y 1 (por ejemplo 0.95); se recibió {c:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="679"/>
+        <source>Every count is 0: no trend can be estimated from records without animals.</source>
+        <translation>Todos los conteos son 0: no se puede estimar ninguna tendencia a partir de registros sin animales.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="684"/>
+        <source>The trend cannot be estimated: no unit with animals was counted in two different years. A trend needs units revisited over the years.</source>
+        <translation>No se puede estimar la tendencia: ninguna unidad con animales se contó en dos años distintos. Una tendencia necesita unidades revisitadas a lo largo de los años.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="689"/>
+        <source>The trend did not converge (the counts may lie all in the first or all in the last years). Check the year and count fields.</source>
+        <translation>El ajuste de la tendencia no convergió (puede que los conteos estén todos en los primeros o todos en los últimos años). Compruebe los campos de año y de conteo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="716"/>
+        <source>This revisit design leaves no degrees of freedom for year-to-year variation (the panels do not link enough years): the interval allows only for variation between units, and is too narrow if whole years differ. Add a core of units visited every year.</source>
+        <translation>Este diseño de revisita no deja grados de libertad para la variación entre años (los paneles no enlazan suficientes años): el intervalo solo tiene en cuenta la variación entre unidades y es demasiado estrecho si difieren años enteros. Añada un núcleo de unidades visitadas cada año.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="787"/>
+        <source>Records {ids} have no whole-number year.</source>
+        <translation>Los registros {ids} no tienen un año en número entero.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="793"/>
+        <source>Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years without an estimate, or use the unit counts instead.</source>
+        <translation>Los registros {ids} no tienen una estimación mayor que 0. Una tendencia log-lineal necesita estimaciones mayores que 0: deje fuera los años sin estimación o use en su lugar los conteos por unidad.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="800"/>
+        <source>Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the estimate step writes it).</source>
+        <translation>Los registros {ids} no tienen un error estándar mayor que 0. Cada estimación anual necesita su error estándar (el paso de estimación lo escribe).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="809"/>
+        <source>Years {years} have more than one estimate. Keep one estimate per year (for the estimate step&apos;s table: its rows &apos;all&apos;, or one stratum).</source>
+        <translation>Los años {years} tienen más de una estimación. Conserve una estimación por año (para la tabla del paso de estimación: sus filas 'all', o un solo estrato).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="815"/>
+        <source>A trend needs estimates from at least {k} different years; the records hold {n}.</source>
+        <translation>Una tendencia necesita estimaciones de al menos {k} años distintos; los registros contienen {n}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend.py" line="867"/>
+        <source>Only {k} years: the year-to-year variation and the trend are both poorly known, and the interval is wide.</source>
+        <translation>Solo {k} años: tanto la variación entre años como la tendencia se conocen mal, y el intervalo es amplio.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="82"/>
+        <source>The panels layer holds no unit with visit years (field years).</source>
+        <translation>La capa de paneles no contiene ninguna unidad con años de visita (campo years).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="120"/>
+        <source>CHANGES must be a list of annual changes in % per year, separated by commas (for example -3, -5); got &apos;{text}&apos;.</source>
+        <translation>CHANGES debe ser una lista de cambios anuales en % por año, separados por comas (por ejemplo -3, -5); se recibió «{text}».</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="126"/>
+        <source>CHANGES is empty: give at least one annual change in % (for example -3).</source>
+        <translation>CHANGES está vacío: indique al menos un cambio anual en % (por ejemplo -3).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="130"/>
+        <source>Annual changes must be above -100 % per year; got {values}.</source>
+        <translation>Los cambios anuales deben ser mayores que -100 % por año; se recibió {values}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="142"/>
+        <source>N_UNITS = {n} is fewer than the {k} panels of the design: every panel needs a unit.</source>
+        <translation>N_UNITS = {n} es menor que los {k} paneles del diseño: cada panel necesita una unidad.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="147"/>
+        <source>A trend needs at least {k} years; YEARS = {years}.</source>
+        <translation>Una tendencia necesita al menos {k} años; YEARS = {years}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="152"/>
+        <source>REPLICATES must lie between 10 and {most}; got {r}.</source>
+        <translation>REPLICATES debe estar entre 10 y {most}; se recibió {r}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="157"/>
+        <source>MEAN_COUNT must be above 0 (animals per unit in the first year).</source>
+        <translation>MEAN_COUNT debe ser mayor que 0 (animales por unidad en el primer año).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="161"/>
+        <source>The standard deviations SD_UNIT, SD_UNIT_YEAR and SD_YEAR cannot be negative.</source>
+        <translation>Las desviaciones estándar SD_UNIT, SD_UNIT_YEAR y SD_YEAR no pueden ser negativas.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="165"/>
+        <source>DETECTION must lie in (0, 1]; got {p:g}.</source>
+        <translation>DETECTION debe estar en (0, 1]; se recibió {p:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="170"/>
+        <source>ALPHA must lie between 0 and 0.5 (for example 0.05 or 0.1); got {a:g}.</source>
+        <translation>ALPHA debe estar entre 0 y 0.5 (por ejemplo 0.05 o 0.1); se recibió {a:g}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="191"/>
+        <source>The pilot table has no stratum with 2 or more units and a mean and SD of the counts (fields n, mean_c, sd_c of the estimate step).</source>
+        <translation>La tabla piloto no tiene ningún estrato con 2 o más unidades y una media y una DE de los conteos (campos n, mean_c, sd_c del paso de estimación).</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="199"/>
+        <source>The pilot counted no animal: its mean count is 0, so no power can be computed.</source>
+        <translation>El piloto no contó ningún animal: su conteo medio es 0, así que no se puede calcular ninguna potencia.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="228"/>
+        <source>This revisit design never links enough years to test a trend (each panel must be visited in several years, or a core visited every year): use fewer panels, a core, or more years.</source>
+        <translation>Este diseño de revisita nunca enlaza suficientes años para contrastar una tendencia (cada panel debe visitarse en varios años, o un núcleo cada año): use menos paneles, un núcleo o más años.</translation>
+    </message>
+    <message>
+        <location filename="../processing/engine/trend_power.py" line="391"/>
+        <source>In up to {n} of {r} simulated programmes the trend could not be estimated (too few animals counted in revisited units); they count as not detected. Raise MEAN_COUNT or the number of units if that is unrealistic.</source>
+        <translation>En hasta {n} de los {r} programas simulados no se pudo estimar la tendencia (demasiado pocos animales contados en las unidades revisitadas); cuentan como no detectados. Aumente MEAN_COUNT o el número de unidades si eso no es realista.</translation>
+    </message>
+    <message>
+        <location filename="../processing/gdal_io/patches.py" line="217"/>
+        <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be turned into polygons: the covariate is speckled at the scale of its cells. Set MIN_AREA to {suggested:g} ha or more (it is {min_area:g} ha): patches below it join a neighbouring stratum, which leaves at most {limit:,} patches on the {area:,.0f} ha stratified. Smoothing the covariate first also helps.</source>
+        <translation>Los estratos forman {n:,} manchas (grupos con conectividad 4 de celdas de un mismo estrato), más que las {limit:,} que se pueden convertir en polígonos: la covariable está moteada a la escala de sus celdas. Fije MIN_AREA en {suggested:g} ha o más (ahora es {min_area:g} ha): las manchas menores se unen a un estrato vecino, lo que deja como máximo {limit:,} manchas en las {area:,.0f} ha estratificadas. También ayuda suavizar antes la covariable.</translation>
+    </message>
+    <message>
+        <location filename="../processing/gdal_io/patches.py" line="230"/>
+        <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be merged below MIN_AREA in bounded memory: the covariate is speckled at the scale of its cells. Smooth or coarsen it first (for example, resample it with the average to cells of about {cell:g} m, so that one cell covers MIN_AREA), then run the stratification again.</source>
+        <translation>Los estratos forman {n:,} manchas (grupos con conectividad 4 de celdas de un mismo estrato), más que las {limit:,} que la fusión de las manchas por debajo de MIN_AREA puede tratar con memoria acotada: la covariable está moteada a la escala de sus celdas. Suavícela o aumente antes su tamaño de celda (por ejemplo, remuestréela con la media a celdas de unos {cell:g} m, de modo que una celda cubra MIN_AREA) y vuelva a ejecutar la estratificación.</translation>
+    </message>
+    <message>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="110"/>
+        <source>The strata formed too many small patches to merge one by one: patches below {cells:,} cells were first merged into their largest neighbour (the rule of GDAL&apos;s sieve filter), which can join a mosaic of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer to its pattern.</source>
+        <translation>Los estratos formaban demasiadas manchas pequeñas para fusionarlas una a una: las manchas de menos de {cells:,} celdas se fusionaron primero con su vecina mayor (la regla del filtro de criba de GDAL), lo que puede unir un mosaico de manchas pequeñas en un solo estrato. Suavizar la covariable antes de estratificar mantiene los estratos más cerca de su patrón.</translation>
+    </message>
 </context>
 <context>
     <name>PlotwisePlugin</name>
@@ -5454,17 +5858,17 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
 <context>
     <name>PlotwiseProvider</name>
     <message>
-        <location filename="../processing/provider.py" line="98"/>
+        <location filename="../processing/provider.py" line="104"/>
         <source>Plotwise</source>
         <translation>Plotwise</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="101"/>
+        <location filename="../processing/provider.py" line="107"/>
         <source>Plotwise survey design and estimation</source>
         <translation>Plotwise: diseño de muestreos y estimación</translation>
     </message>
     <message>
-        <location filename="../processing/provider.py" line="121"/>
+        <location filename="../processing/provider.py" line="127"/>
         <source>The example model {path} could not be read.</source>
         <translation>No se pudo leer el modelo de ejemplo {path}.</translation>
     </message>
@@ -5487,12 +5891,12 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Entradas y parámetros</translation>
     </message>
     <message>
-        <location filename="../processing/report/occupancy.py" line="153"/>
+        <location filename="../processing/report/trend.py" line="226"/>
         <source>Item</source>
         <translation>Elemento</translation>
     </message>
     <message>
-        <location filename="../processing/report/occupancy.py" line="153"/>
+        <location filename="../processing/report/trend.py" line="226"/>
         <source>Value</source>
         <translation>Valor</translation>
     </message>
@@ -5587,7 +5991,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Sitios sombreados según psi_cond, la probabilidad de que el sitio esté ocupado dado su historial de detección (1 donde se detectó la especie)</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="90"/>
+        <location filename="../processing/report/trendpower.py" line="153"/>
         <source>Method</source>
         <translation>Método</translation>
     </message>
@@ -5672,7 +6076,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>no se usa (sin bootstrap)</translation>
     </message>
     <message>
-        <location filename="../processing/report/occupancy.py" line="140"/>
+        <location filename="../processing/report/panels.py" line="117"/>
         <source>CRS</source>
         <translation>SRC</translation>
     </message>
@@ -6167,7 +6571,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>marco</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="201"/>
+        <location filename="../processing/report/trend.py" line="38"/>
         <source>Stratum</source>
         <translation>Estrato</translation>
     </message>
@@ -6307,7 +6711,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Capa de estratos</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="204"/>
+        <location filename="../processing/report/estimate.py" line="205"/>
         <source>Computation CRS</source>
         <translation>SRC de cálculo</translation>
     </message>
@@ -6382,7 +6786,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Disposición prevista</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="209"/>
+        <location filename="../processing/report/estimate.py" line="210"/>
         <source>Finite-population correction</source>
         <translation>Corrección por población finita</translation>
     </message>
@@ -6437,7 +6841,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>CV esperado (exp_cv)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="379"/>
+        <location filename="../processing/report/estimate.py" line="380"/>
         <source>all strata</source>
         <translation>todos los estratos</translation>
     </message>
@@ -6587,7 +6991,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>ninguno</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="200"/>
+        <location filename="../processing/report/trend.py" line="157"/>
         <source>Stratum field</source>
         <translation>Campo de estrato</translation>
     </message>
@@ -6667,17 +7071,17 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>vecindario local</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="164"/>
+        <location filename="../processing/report/estimate.py" line="165"/>
         <source>simple random sampling formula</source>
         <translation>fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="206"/>
+        <location filename="../processing/report/trend.py" line="158"/>
         <source>Confidence level</source>
         <translation>Nivel de confianza</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="222"/>
+        <location filename="../processing/report/trendpower.py" line="110"/>
         <source>Seed</source>
         <translation>Semilla</translation>
     </message>
@@ -6807,7 +7211,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="307"/>
+        <location filename="../processing/report/trendpower.py" line="24"/>
         <source>Units</source>
         <translation>Unidades</translation>
     </message>
@@ -6822,7 +7226,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Para {name}: </translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="125"/>
+        <location filename="../processing/report/trend.py" line="118"/>
         <source>{level} interval</source>
         <translation>intervalo al {level}</translation>
     </message>
@@ -6847,7 +7251,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>animales estimados en el marco</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="244"/>
+        <location filename="../processing/report/trend.py" line="188"/>
         <source>CV</source>
         <translation>CV</translation>
     </message>
@@ -6942,7 +7346,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Tipo de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="201"/>
+        <location filename="../processing/report/panels.py" line="103"/>
         <source>none: one stratum</source>
         <translation>ninguno: un solo estrato</translation>
     </message>
@@ -6967,7 +7371,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>ninguno: cada detección es un animal</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="203"/>
+        <location filename="../processing/report/estimate.py" line="204"/>
         <source>Strata (frame)</source>
         <translation>Estratos (marco)</translation>
     </message>
@@ -7002,12 +7406,12 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Tamaño de grupo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="205"/>
+        <location filename="../processing/report/estimate.py" line="206"/>
         <source>Area unit</source>
         <translation>Unidad de área</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="219"/>
+        <location filename="../processing/report/estimate.py" line="220"/>
         <source>Bootstrap resamples</source>
         <translation>Remuestreos bootstrap</translation>
     </message>
@@ -7157,7 +7561,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Detecciones por visita</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="235"/>
+        <location filename="../processing/report/estimate.py" line="236"/>
         <source>Area ({unit})</source>
         <translation>Área ({unit})</translation>
     </message>
@@ -7172,17 +7576,17 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Animales por {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/trend.py" line="38"/>
         <source>Lower limit</source>
         <translation>Límite inferior</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/trend.py" line="38"/>
         <source>Upper limit</source>
         <translation>Límite superior</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="245"/>
+        <location filename="../processing/report/estimate.py" line="246"/>
         <source>df</source>
         <translation>gl</translation>
     </message>
@@ -7327,307 +7731,307 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Densidad a partir de las distancias de detección</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="87"/>
+        <location filename="../processing/report/estimate.py" line="88"/>
         <source>Naive occupancy from presence data</source>
         <translation>Ocupación ingenua a partir de datos de presencia</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="87"/>
+        <location filename="../processing/report/estimate.py" line="88"/>
         <source>Density and abundance estimate</source>
         <translation>Estimación de la densidad y la abundancia</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="106"/>
+        <location filename="../processing/report/estimate.py" line="107"/>
         <source>proportion of units occupied (naive)</source>
         <translation>proporción de unidades ocupadas (ingenua)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="106"/>
+        <location filename="../processing/report/estimate.py" line="107"/>
         <source>occupied units</source>
         <translation>unidades ocupadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="109"/>
+        <location filename="../processing/report/estimate.py" line="110"/>
         <source>density per {unit}</source>
         <translation>densidad por {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="109"/>
+        <location filename="../processing/report/estimate.py" line="110"/>
         <source>animals</source>
         <translation>animales</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="118"/>
+        <location filename="../processing/report/estimate.py" line="119"/>
         <source>0 – {hi} (one-sided)</source>
         <translation>0 – {hi} (unilateral)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="124"/>
+        <location filename="../processing/report/estimate.py" line="125"/>
         <source>estimated {what} in the frame</source>
         <translation>estimación de {what} en el marco</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="128"/>
+        <location filename="../processing/report/estimate.py" line="129"/>
         <source>units surveyed</source>
         <translation>unidades muestreadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="131"/>
+        <location filename="../processing/report/estimate.py" line="132"/>
         <source>true total of the simulated population</source>
         <translation>total verdadero de la población simulada</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="137"/>
+        <location filename="../processing/report/estimate.py" line="138"/>
         <source>covers</source>
         <translation>contiene</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="137"/>
+        <location filename="../processing/report/estimate.py" line="138"/>
         <source>misses</source>
         <translation>no contiene</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="159"/>
+        <location filename="../processing/report/estimate.py" line="160"/>
         <source>t with Satterthwaite degrees of freedom</source>
         <translation>t con los grados de libertad de Satterthwaite</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="160"/>
+        <location filename="../processing/report/estimate.py" line="161"/>
         <source>log-normal (with t)</source>
         <translation>log-normal (con t)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="161"/>
+        <location filename="../processing/report/estimate.py" line="162"/>
         <source>stratified percentile bootstrap</source>
         <translation>bootstrap estratificado de percentiles</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="165"/>
+        <location filename="../processing/report/estimate.py" line="166"/>
         <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="166"/>
+        <location filename="../processing/report/estimate.py" line="167"/>
         <source>local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>vecindario local, escalado a la fórmula simple (nuestra variante)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="176"/>
+        <location filename="../processing/report/estimate.py" line="177"/>
         <source>plus sampling (units count only inside their stratum)</source>
         <translation>muestreo «plus» (las unidades solo cuentan dentro de su estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="177"/>
+        <location filename="../processing/report/estimate.py" line="178"/>
         <source>units kept wholly inside their stratum</source>
         <translation>unidades mantenidas por completo dentro de su estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="178"/>
+        <location filename="../processing/report/estimate.py" line="179"/>
         <source>no record: whole units</source>
         <translation>sin registro: unidades enteras</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="180"/>
+        <location filename="../processing/report/estimate.py" line="181"/>
         <source>field {field} (m²)</source>
         <translation>campo {field} (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="180"/>
+        <location filename="../processing/report/estimate.py" line="181"/>
         <source>polygon area</source>
         <translation>área del polígono</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="186"/>
+        <location filename="../processing/report/estimate.py" line="187"/>
         <source>strip width</source>
         <translation>ancho de franja</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="188"/>
+        <location filename="../processing/report/estimate.py" line="189"/>
         <source>fixed</source>
         <translation>fija</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="190"/>
+        <location filename="../processing/report/estimate.py" line="191"/>
         <source>asked for; applied in strata {yes}, refused in {no} (units may overlap)</source>
         <translation>solicitada; aplicada en los estratos {yes}, rechazada en {no} (las unidades pueden solaparse)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="197"/>
+        <location filename="../processing/report/estimate.py" line="198"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="198"/>
+        <location filename="../processing/report/trend.py" line="148"/>
         <source>Count field</source>
         <translation>Campo de conteo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="199"/>
+        <location filename="../processing/report/estimate.py" line="200"/>
         <source> (presence/absence)</source>
         <translation> (presencia/ausencia)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="202"/>
+        <location filename="../processing/report/estimate.py" line="203"/>
         <source>Unit area</source>
         <translation>Área de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/estimate.py" line="326"/>
         <source>Interval</source>
         <translation>Intervalo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="208"/>
+        <location filename="../processing/report/estimate.py" line="209"/>
         <source>Variance estimator</source>
         <translation>Estimador de la varianza</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="210"/>
+        <location filename="../processing/report/estimate.py" line="211"/>
         <source>Edge protocol of the units</source>
         <translation>Protocolo de borde de las unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="211"/>
+        <location filename="../processing/report/estimate.py" line="212"/>
         <source>Detection probability p</source>
         <translation>Probabilidad de detección p</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="214"/>
+        <location filename="../processing/report/estimate.py" line="215"/>
         <source>Target CV for the next survey</source>
         <translation>CV objetivo para el próximo muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="222"/>
+        <location filename="../processing/report/estimate.py" line="223"/>
         <source>not used (no random draws without the bootstrap)</source>
         <translation>no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="232"/>
+        <location filename="../processing/report/estimate.py" line="233"/>
         <source>Estimates by stratum</source>
         <translation>Estimaciones por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="236"/>
+        <location filename="../processing/report/estimate.py" line="237"/>
         <source>Units (n)</source>
         <translation>Unidades (n)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="237"/>
+        <location filename="../processing/report/estimate.py" line="238"/>
         <source>Not surveyed</source>
         <translation>No muestreadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="238"/>
+        <location filename="../processing/report/estimate.py" line="239"/>
         <source>Mean count</source>
         <translation>Conteo medio</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="239"/>
+        <location filename="../processing/report/estimate.py" line="240"/>
         <source>SD of counts</source>
         <translation>DE de los conteos</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="279"/>
+        <location filename="../processing/report/estimate.py" line="280"/>
         <source>Occupied units</source>
         <translation>Unidades ocupadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="279"/>
+        <location filename="../processing/report/estimate.py" line="280"/>
         <source>Abundance</source>
         <translation>Abundancia</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="257"/>
+        <location filename="../processing/report/estimate.py" line="258"/>
         <source>Units next time (n_next)</source>
         <translation>Unidades la próxima vez (n_next)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="272"/>
+        <location filename="../processing/report/estimate.py" line="273"/>
         <source>{what}, limits at {level}.</source>
         <translation>{what}, límites al {level}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="279"/>
+        <location filename="../processing/report/estimate.py" line="280"/>
         <source>{what} in the frame, limits at {level}.</source>
         <translation>{what} en el marco, límites al {level}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="308"/>
+        <location filename="../processing/report/estimate.py" line="309"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
         <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="314"/>
+        <location filename="../processing/report/estimate.py" line="315"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="324"/>
+        <location filename="../processing/report/estimate.py" line="325"/>
         <source>The overall interval by method</source>
         <translation>El intervalo global según el método</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/estimate.py" line="326"/>
         <source>Used in the outputs</source>
         <translation>Usado en las salidas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>overall abundance in a resample</source>
         <translation>abundancia global en un remuestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>resamples</source>
         <translation>remuestreos</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>{level} percentile limits</source>
         <translation>límites de percentiles al {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="356"/>
+        <location filename="../processing/report/estimate.py" line="357"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
         <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="378"/>
+        <location filename="../processing/report/estimate.py" line="379"/>
         <source>true density (simulation)</source>
         <translation>densidad verdadera (simulación)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="388"/>
+        <location filename="../processing/report/estimate.py" line="389"/>
         <source>{what} by stratum with {level} confidence intervals</source>
         <translation>{what} por estrato con intervalos de confianza al {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="403"/>
+        <location filename="../processing/report/estimate.py" line="404"/>
         <source>lowest</source>
         <translation>mínimo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="403"/>
+        <location filename="../processing/report/estimate.py" line="404"/>
         <source>highest</source>
         <translation>máximo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="414"/>
+        <location filename="../processing/report/estimate.py" line="415"/>
         <source>surveyed units</source>
         <translation>unidades muestreadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="424"/>
+        <location filename="../processing/report/estimate.py" line="425"/>
         <source>not surveyed</source>
         <translation>no muestreadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="433"/>
+        <location filename="../processing/report/estimate.py" line="434"/>
         <source>Strata shaded by {what}, with the units</source>
         <translation>Estratos sombreados según {what}, con las unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="600"/>
+        <location filename="../processing/report/trendpower.py" line="177"/>
         <source>Cautions</source>
         <translation>Precauciones</translation>
     </message>
@@ -7692,160 +8096,895 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="137"/>
+        <location filename="../processing/report/estimate.py" line="138"/>
         <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
         <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="290"/>
+        <location filename="../processing/report/estimate.py" line="291"/>
         <source>† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit −ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided by p with detection. For the frame it assumes one density over the strata.</source>
         <translation>† Todos los conteos fueron 0: la estimación es 0 y el intervalo va de 0 al límite superior unilateral −ln(1 − {level}) · A / Σa de un conteo de Poisson de 0 (Garwood 1936; unas 3 · A / Σa al 95 %), dividido por p con detección. Para el marco supone una sola densidad en los estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="299"/>
+        <location filename="../processing/report/estimate.py" line="300"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
         <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="344"/>
+        <location filename="../processing/report/estimate.py" line="345"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
         <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="442"/>
+        <location filename="../processing/report/estimate.py" line="443"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
         <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="453"/>
+        <location filename="../processing/report/estimate.py" line="454"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
         <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="465"/>
+        <location filename="../processing/report/estimate.py" line="466"/>
         <source>Edges: the units were laid out by plus sampling (Gregoire &amp; Valentine 2008, ch. 10): their centres were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside its own stratum. Every animal then has the same chance of being counted, and the counts expand to the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).</source>
         <translation>Bordes: las unidades se dispusieron por muestreo «plus» (Gregoire &amp; Valentine 2008, cap. 10): sus centros se sortearon sobre cada estrato ampliado en el alcance de la unidad, y cada unidad solo cuenta los animales dentro de su propio estrato. Cada animal tiene entonces la misma probabilidad de ser contado, y los conteos se extienden al área ampliada A⁺_h: N_h = A⁺_h Σy/Σa (columna de las áreas de expansión en la salida).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="475"/>
+        <location filename="../processing/report/estimate.py" line="476"/>
         <source>Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit&apos;s reach of the edge; the estimate carries the inner density over that band. Where the animals near the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.</source>
         <translation>Bordes: las unidades se mantuvieron por completo dentro de sus estratos, así que ninguna unidad alcanza la franja situada a menos de un alcance de unidad del borde; la estimación traslada la densidad interior a esa franja. Donde los animales cercanos al borde difieren (una orilla, el borde de un bosque), está sesgada; el muestreo «plus» (INSIDE desactivado) no lo está.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="488"/>
+        <location filename="../processing/report/estimate.py" line="489"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, eq. 3.75), with df_p = {df} for p.</source>
         <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad de ambas partes se combinan por la regla de Satterthwaite, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, ec. 3.75), con df_p = {df} para p.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="500"/>
+        <location filename="../processing/report/estimate.py" line="501"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds. The observed SDs are themselves uncertain, especially from few units.</source>
         <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar que implica ahora el estimador de la varianza (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 y como máximo las unidades que contiene un estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="512"/>
+        <location filename="../processing/report/estimate.py" line="513"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
         <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="512"/>
+        <location filename="../processing/report/estimate.py" line="513"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go below 0.</source>
         <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(t_df · √ln(1 + CV²)), t con los grados de libertad de Satterthwaite de la estimación (Buckland et al. 2001, §3.6.1; el cuantil normal solo para gl infinitos, Burnham et al. 1987). Son asimétricos y nunca bajan de 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="512"/>
+        <location filename="../processing/report/estimate.py" line="513"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction where it applies (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
         <translation>Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita donde se aplica (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="542"/>
+        <location filename="../processing/report/estimate.py" line="543"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to the same variance. For a simple random layout use the simple formula.</source>
         <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, con pesos que suman 1 en cada vecindario y en cada unidad, y v = Σ_i Σ_j w_ij (z_j − z̄_i)². Sus grados de libertad son los de una forma cuadrática, (tr Q)² / tr Q² (Box 1954), y el bootstrap dispersa sus remuestreos hasta la misma varianza. Para una disposición aleatoria simple use la fórmula simple.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="553"/>
+        <location filename="../processing/report/estimate.py" line="554"/>
         <source>Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on average with the simple formula where the population has no spatial pattern; the published sum falls about a quarter short there. This scaling is ours, not Stevens &amp; Olsen's.</source>
         <translation>Nuestra variante: la doble suma se multiplica por n / Σ_i (1 − Σ_j w_ij²), para que coincida en promedio con la fórmula simple donde la población no tiene estructura espacial; la suma publicada se queda allí corta en alrededor de un cuarto. Este escalado es nuestro, no de Stevens &amp; Olsen.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="562"/>
+        <location filename="../processing/report/estimate.py" line="563"/>
         <source>Strata with one surveyed unit were paired with a partner fixed before the counts were seen (the stratum sharing the longest edge on the map, or else the next stratum in id order). Two one-unit strata share the pairs formula v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, with the weights of Hansen, Hurwitz &amp; Madow 1953); a one-unit stratum paired with a stratum of several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's spread, while the partner keeps its own variance. Differences between the paired strata count as variance, so these standard errors tend to be too large; each such stratum has 1 degree of freedom.</source>
         <translation>Los estratos con una sola unidad muestreada se emparejaron con una pareja fijada antes de ver los conteos (el estrato que comparte el límite más largo en el mapa o, si no, el siguiente estrato en el orden de identificadores). Dos estratos de una sola unidad comparten la fórmula de pares v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, con los pesos de Hansen, Hurwitz &amp; Madow 1953); un estrato de una sola unidad emparejado con un estrato de varias unidades toma (D̂_1 − D̂_2)² − v(D̂_2), como mínimo la varianza que tiene una unidad con la dispersión de la pareja, mientras que la pareja conserva su propia varianza. Las diferencias entre los estratos emparejados cuentan como varianza, por lo que estos errores estándar tienden a ser demasiado grandes; cada uno de esos estratos tiene 1 grado de libertad.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="579"/>
+        <location filename="../processing/report/estimate.py" line="580"/>
         <source>The finite-population correction was refused in strata {ids}: their units come from a simple random layout whose units may overlap, a continuous population of possible units, which has no such correction (Cordy 1993).</source>
         <translation>La corrección por población finita se rechazó en los estratos {ids}: sus unidades proceden de una disposición aleatoria simple cuyas unidades pueden solaparse, una población continua de unidades posibles, que no tiene tal corrección (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="588"/>
+        <location filename="../processing/report/estimate.py" line="589"/>
         <source>The finite-population correction assumes that the units do not overlap and were drawn without replacement from the units that tile each stratum. The units carry no design record (they did not come from plotwise:layout), so this could not be checked: if they may overlap, switch the correction off.</source>
         <translation>La corrección por población finita supone que las unidades no se solapan y se sortearon sin reposición entre las unidades que teselan cada estrato. Las unidades no llevan registro de diseño (no proceden de plotwise:layout), así que esto no pudo comprobarse: si pueden solaparse, desactive la corrección.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="601"/>
+        <location filename="../processing/report/estimate.py" line="602"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
         <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="609"/>
+        <location filename="../processing/report/estimate.py" line="610"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
         <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="617"/>
+        <location filename="../processing/report/estimate.py" line="618"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
         <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="626"/>
+        <location filename="../processing/report/estimate.py" line="627"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
         <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="633"/>
+        <location filename="../processing/report/estimate.py" line="634"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
         <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="25"/>
+        <source>every year</source>
+        <translation>cada año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="25"/>
+        <source>rotating panels</source>
+        <translation>paneles rotativos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="25"/>
+        <source>split panels</source>
+        <translation>paneles divididos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="41"/>
+        <source>Panel</source>
+        <translation>Panel</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="30"/>
+        <source>Visited in</source>
+        <translation>Años de visita</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Year</source>
+        <translation>Año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="35"/>
+        <source>Panels visited</source>
+        <translation>Paneles visitados</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="35"/>
+        <source>Field days</source>
+        <translation>Jornadas de campo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="41"/>
+        <source>Spread measure</source>
+        <translation>Medida de reparto</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="41"/>
+        <source>Random panels of the same make-up</source>
+        <translation>Paneles aleatorios de la misma composición</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="70"/>
+        <source>every year (all units)</source>
+        <translation>cada año (todas las unidades)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="72"/>
+        <source>core (every year)</source>
+        <translation>núcleo (cada año)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="73"/>
+        <source>panel {p}</source>
+        <translation>panel {p}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="83"/>
+        <source>design</source>
+        <translation>diseño</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="83"/>
+        <source>units in panels</source>
+        <translation>unidades en los paneles</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="128"/>
+        <source>units per year</source>
+        <translation>unidades por año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="118"/>
+        <source>years</source>
+        <translation>años</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="102"/>
+        <source>none: the order of the features</source>
+        <translation>ninguno: el orden de las entidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="105"/>
+        <source>Units layer</source>
+        <translation>Capa de unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="106"/>
+        <source>Panel design (PANEL_DESIGN)</source>
+        <translation>Diseño de paneles (PANEL_DESIGN)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="107"/>
+        <source>Rotating panels (PANELS)</source>
+        <translation>Paneles rotativos (PANELS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="108"/>
+        <source>Share of units in the core (CORE_SHARE)</source>
+        <translation>Proporción de unidades en el núcleo (CORE_SHARE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="110"/>
+        <source>First year (START_YEAR)</source>
+        <translation>Primer año (START_YEAR)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="95"/>
+        <source>Years (YEARS)</source>
+        <translation>Años (YEARS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="112"/>
+        <source>Draw-order field</source>
+        <translation>Campo de orden de sorteo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="114"/>
+        <source>Field days per unit visit</source>
+        <translation>Jornadas de campo por visita a una unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="115"/>
+        <source>Reserve units (no panel)</source>
+        <translation>Unidades de reserva (sin panel)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="116"/>
+        <source>Seed (balance check only)</source>
+        <translation>Semilla (solo para la comprobación del equilibrio)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="127"/>
+        <source>Schedule</source>
+        <translation>Calendario</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="130"/>
+        <source>Years in which each panel is visited, with its number of units; the last row adds them up.</source>
+        <translation>Años en que se visita cada panel, con su número de unidades; la última fila los suma.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="143"/>
+        <source>Units of each stratum in each panel.</source>
+        <translation>Unidades de cada estrato en cada panel.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="148"/>
+        <source>Spread of the panels</source>
+        <translation>Reparto espacial de los paneles</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="150"/>
+        <source>The layout records a spatially balanced design (the units&apos; design field).</source>
+        <translation>La disposición registra un diseño espacialmente equilibrado (campo design de las unidades).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="153"/>
+        <source>The layout records a simple random design (the units&apos; design field): each panel is a random part of it, not an evenly spread sample of the frame.</source>
+        <translation>La disposición registra un diseño aleatorio simple (campo design de las unidades): cada panel es una parte aleatoria de ella, no una muestra repartida de modo uniforme por el marco.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="158"/>
+        <source>The layout records a systematic grid (the units&apos; design field): its draw order runs row by row, so the panels are bands across the frame.</source>
+        <translation>La disposición registra una cuadrícula sistemática (campo design de las unidades): su orden de sorteo avanza fila por fila, de modo que los paneles son bandas que atraviesan el marco.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="163"/>
+        <source>The units carry no design record (the design field of plotwise:layout): the check below tells whether the panels are evenly spread.</source>
+        <translation>Las unidades no llevan registro del diseño (el campo design de plotwise:layout): la comprobación de abajo indica si los paneles están repartidos de modo uniforme.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="168"/>
+        <source>No panel could be checked: the units need at least 3 positions not on one line, and a panel at least 2 units.</source>
+        <translation>No se pudo comprobar ningún panel: las unidades necesitan al menos 3 posiciones no alineadas, y un panel al menos 2 unidades.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="174"/>
+        <source>Spread measure of Stevens &amp; Olsen (2004) over the whole layout: 0 for a perfectly even spread, larger for clumps and gaps. The random panels take the same number of units from each stratum (median over the rearrangements of the check).</source>
+        <translation>Medida de reparto de Stevens &amp; Olsen (2004) sobre toda la disposición: 0 para un reparto perfectamente uniforme, mayor cuando hay agrupaciones y huecos. Los paneles aleatorios toman el mismo número de unidades de cada estrato (mediana sobre las reordenaciones de la comprobación).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="180"/>
+        <source>The panels are more evenly spread than random parts of the layout (their spread measure is {r:.0%} of that of random panels), though with this few units the check cannot confirm it (p = {p:.3f} from {b} random rearrangements).</source>
+        <translation>Los paneles están repartidos de modo más uniforme que partes aleatorias de la disposición (su medida de reparto es el {r:.0%} de la de los paneles aleatorios), aunque con tan pocas unidades la comprobación no puede confirmarlo (p = {p:.3f} con {b} reordenaciones aleatorias).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="186"/>
+        <source>The panels are more evenly spread than random parts of the layout (p = {p:.3f} from {b} random rearrangements): as expected when the layout is spatially balanced and the panels follow its draw order.</source>
+        <translation>Los paneles están repartidos de modo más uniforme que partes aleatorias de la disposición (p = {p:.3f} con {b} reordenaciones aleatorias): lo esperado cuando la disposición es espacialmente equilibrada y los paneles siguen su orden de sorteo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="192"/>
+        <source>The panels are not shown to be more evenly spread than random parts of the layout (p = {p:.3f} from {b} random rearrangements). If the layout was simple random, each panel is just a random part of it; if it was a systematic grid, whose draw order runs row by row, the panels are bands. For evenly spread panels, lay out the units with the spatially balanced design. With few units the check may also miss a real balance.</source>
+        <translation>No se demuestra que los paneles estén repartidos de modo más uniforme que partes aleatorias de la disposición (p = {p:.3f} con {b} reordenaciones aleatorias). Si la disposición era aleatoria simple, cada panel es solo una parte aleatoria de ella; si era una cuadrícula sistemática, cuyo orden de sorteo avanza fila por fila, los paneles son bandas. Para obtener paneles repartidos de modo uniforme, disponga las unidades con el diseño espacialmente equilibrado. Con pocas unidades, la comprobación también puede no detectar un equilibrio real.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="203"/>
+        <source>Within each stratum the primary units are taken in draw order and cut into consecutive blocks: the core (split panels) first, then panel 1, panel 2 and so on, as evenly as possible. Rotating panel p is visited in the years start + (p − 1) + m·K, so that each of its units is revisited every K years and about 1/K of the rotating units are surveyed each year; the core, and the single panel of the every-year design, are visited every year (Urquhart &amp; Kincaid 1999; McDonald 2003).</source>
+        <translation>Dentro de cada estrato, las unidades principales se toman en orden de sorteo y se cortan en bloques consecutivos: primero el núcleo (paneles divididos), luego el panel 1, el panel 2 y así sucesivamente, lo más iguales posible. El panel rotativo p se visita en los años inicio + (p − 1) + m·K, de modo que cada una de sus unidades se revisita cada K años y cerca de 1/K de las unidades de los paneles rotativos se muestrea cada año; el núcleo, y el panel único del diseño «cada año», se visitan cada año (Urquhart &amp; Kincaid 1999; McDonald 2003).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="210"/>
+        <source>In a spatially balanced layout every run of consecutive units of the draw order is itself spread over the stratum (Robertson et al. 2013), so each panel covers the whole stratum. The check compares the Voronoi spread measure of the panels (Stevens &amp; Olsen 2004), computed over a fine grid on the convex hull of the units, with random rearrangements of the panels within each stratum.</source>
+        <translation>En una disposición espacialmente equilibrada, cada tramo de unidades consecutivas del orden de sorteo está a su vez repartido por el estrato (Robertson et al. 2013), de modo que cada panel cubre todo el estrato. La comprobación compara la medida de reparto de Voronoi de los paneles (Stevens &amp; Olsen 2004), calculada sobre una malla fina en la envolvente convexa de las unidades, con reordenaciones aleatorias de los paneles dentro de cada estrato.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="216"/>
+        <source>Reserve units get no panel. A reserve that replaces a primary unit takes over the primary&apos;s panel and years; record the replacement.</source>
+        <translation>Las unidades de reserva no reciben panel. Una reserva que sustituye a una unidad principal hereda el panel y los años de esta; registre la sustitución.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/panels.py" line="220"/>
+        <source>Revisiting the same units every year gives the most precise trend for the effort; rotating panels cover more ground over a cycle but link the years only through the units they share. The split design keeps a core for the year-to-year links. Compare the options with the power analysis (plotwise:trendpower) before committing to a schedule.</source>
+        <translation>Revisitar las mismas unidades cada año da la tendencia más precisa para el esfuerzo invertido; los paneles rotativos cubren más terreno a lo largo de un ciclo, pero enlazan los años solo mediante las unidades que comparten. El diseño de paneles divididos conserva un núcleo para enlazar unos años con otros. Compare las opciones con el análisis de potencia (plotwise:trendpower) antes de comprometerse con un calendario.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Index</source>
+        <translation>Índice</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Trend</source>
+        <translation>Tendencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Trend, lower</source>
+        <translation>Tendencia, límite inferior</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="29"/>
+        <source>Trend, upper</source>
+        <translation>Tendencia, límite superior</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="38"/>
+        <source>Change per year (%)</source>
+        <translation>Cambio anual (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="38"/>
+        <source>p-value</source>
+        <translation>Valor p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Units in the records</source>
+        <translation>Unidades en los registros</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Units in the fit (some animals counted)</source>
+        <translation>Unidades en el ajuste (algún animal contado)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Records used</source>
+        <translation>Registros usados</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Records without a count (not surveyed)</source>
+        <translation>Registros sin conteo (no muestreados)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Scale between units (Pearson)</source>
+        <translation>Factor de escala entre unidades (Pearson)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Standard error of the log change allowing only for variation between units</source>
+        <translation>Error estándar del cambio logarítmico teniendo en cuenta solo la variación entre unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Year-to-year SD, log scale (method of moments)</source>
+        <translation>DE entre años, escala logarítmica (método de los momentos)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Scale between units within years (Pearson)</source>
+        <translation>Factor de escala entre unidades dentro de cada año (Pearson)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Deviance drop from the trend to one effect per year</source>
+        <translation>Descenso de la devianza de la tendencia a un efecto por año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Degrees of freedom between years</source>
+        <translation>Grados de libertad entre años</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="223"/>
+        <source>Standard error of the log change used</source>
+        <translation>Error estándar usado del cambio logarítmico</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="46"/>
+        <source>Linked sets of units and years</source>
+        <translation>Conjuntos enlazados de unidades y años</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="94"/>
+        <source>The change per year could not be estimated.</source>
+        <translation>No se pudo estimar el cambio anual.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="97"/>
+        <source>no change (0.0% per year)</source>
+        <translation>ningún cambio (0.0% por año)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="99"/>
+        <source>a decline of {c} per year</source>
+        <translation>un descenso del {c} por año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="101"/>
+        <source>an increase of {c} per year</source>
+        <translation>un aumento del {c} por año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="104"/>
+        <source>{level} interval {a} to {b}</source>
+        <translation>intervalo al {level} de {a} a {b}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="107"/>
+        <source>{level} interval from a decline of {a} to an increase of {b}</source>
+        <translation>intervalo al {level} desde un descenso del {a} hasta un aumento del {b}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="118"/>
+        <source>change per year</source>
+        <translation>cambio anual</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="118"/>
+        <source>p-value (no trend)</source>
+        <translation>valor p (sin tendencia)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="126"/>
+        <source>Over {first}–{last} the trend is {words}.</source>
+        <translation>Tendencia en el periodo {first}–{last}: {words}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="143"/>
+        <source>Input</source>
+        <translation>Entrada</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="152"/>
+        <source>Source (SOURCE)</source>
+        <translation>Fuente (SOURCE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="145"/>
+        <source>unit counts</source>
+        <translation>conteos por unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="147"/>
+        <source>Unit id field</source>
+        <translation>Campo identificador de unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="149"/>
+        <source>Unit area field</source>
+        <translation>Campo de área de la unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="149"/>
+        <source>none: equal effort</source>
+        <translation>ninguno: esfuerzo igual</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="152"/>
+        <source>yearly estimates</source>
+        <translation>estimaciones anuales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="154"/>
+        <source>Estimate field</source>
+        <translation>Campo de estimación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="155"/>
+        <source>Standard error field</source>
+        <translation>Campo de error estándar</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="156"/>
+        <source>Year field</source>
+        <translation>Campo de año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="159"/>
+        <source>not used (no random draws)</source>
+        <translation>no se usa (sin sorteos aleatorios)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="166"/>
+        <source>Yearly index and trend</source>
+        <translation>Índice anual y tendencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="168"/>
+        <source>mean count per unit</source>
+        <translation>conteo medio por unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="169"/>
+        <source>Index: the expected mean count per unit in each year, at the mean survey effort.</source>
+        <translation>Índice: el conteo medio esperado por unidad en cada año, con el esfuerzo de muestreo medio.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="172"/>
+        <source>estimate</source>
+        <translation>estimación</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="173"/>
+        <source>Index: the yearly estimate; its interval shows the sampling error only.</source>
+        <translation>Índice: la estimación anual; su intervalo solo muestra el error de muestreo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="175"/>
+        <source>year</source>
+        <translation>año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="175"/>
+        <source>yearly index</source>
+        <translation>índice anual</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="175"/>
+        <source>trend</source>
+        <translation>tendencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="180"/>
+        <source>Yearly index with {level} intervals (points and bars) and the fitted trend with its {level} band.</source>
+        <translation>Índice anual con intervalos al {level} (puntos y barras) y tendencia ajustada con su banda al {level}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="216"/>
+        <source>The fit</source>
+        <translation>El ajuste</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="202"/>
+        <source>Units that counted no animal in any visit carry no information on the trend and were left out of the fit: {ids}.</source>
+        <translation>Las unidades en las que no se contó ningún animal en ninguna visita no aportan información sobre la tendencia y se dejaron fuera del ajuste: {ids}.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="207"/>
+        <source>Trend by stratum</source>
+        <translation>Tendencia por estrato</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="209"/>
+        <source>Each stratum&apos;s units fitted on their own; strata with too few units or years show no value.</source>
+        <translation>Las unidades de cada estrato se ajustan por separado; los estratos con demasiado pocas unidades o años no muestran ningún valor.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="218"/>
+        <source>Year-to-year process SD (log scale)</source>
+        <translation>DE del proceso entre años (escala logarítmica)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="219"/>
+        <source>Weighted residual sum of squares without process variance</source>
+        <translation>Suma ponderada de cuadrados de los residuos sin varianza del proceso</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="220"/>
+        <source>Residual mean square that scales the variance</source>
+        <translation>Cuadrado medio residual que escala la varianza</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="221"/>
+        <source>Standard error of the log change with sampling error only</source>
+        <translation>Error estándar del cambio logarítmico solo con el error de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="224"/>
+        <source>Degrees of freedom</source>
+        <translation>Grados de libertad</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="234"/>
+        <source>The counts follow a log-linear Poisson model with one effect per unit and a common change per year, log E[y] = log(effort) + unit effect + β·year (McCullagh &amp; Nelder 1989). Given β the unit effects have a closed form, so β is fitted by Newton's method on the profile likelihood. The change per year is exp(β) − 1.</source>
+        <translation>Los conteos siguen un modelo de Poisson log-lineal con un efecto por unidad y un cambio anual común, log E[y] = log(esfuerzo) + efecto de la unidad + β·año (McCullagh &amp; Nelder 1989). Dado β, los efectos de las unidades tienen forma cerrada, por lo que β se ajusta por el método de Newton sobre la verosimilitud perfilada. El cambio anual es exp(β) − 1.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="240"/>
+        <source>Overdispersion (quasi-likelihood): counts of one year share that year's conditions. The model with one effect per year (fitted by iterative proportional fitting; Bishop, Fienberg &amp; Holland 1975) is compared with the trend model: the deviance drop per degree of freedom scales the variance of β (McCullagh &amp; Nelder 1989), in proportion to how strongly the slope depends on single years, and β is tested with Student's t on the degrees of freedom between years. So years that differ as a whole widen the interval. The year-to-year SD is estimated from the same drop by the method of moments (DerSimonian &amp; Laird 1986, here for a log-linear model). The standard error allowing only for variation between units (the Pearson-scaled GLM) is shown for comparison. The index of each year is the year model's expected mean count per unit, with delta-method intervals from the Pearson scale within years.</source>
+        <translation>Sobredispersión (cuasi-verosimilitud): los conteos de un mismo año comparten las condiciones de ese año. El modelo con un efecto por año (ajustado por ajuste proporcional iterativo; Bishop, Fienberg &amp; Holland 1975) se compara con el modelo de tendencia: el descenso de la devianza por grado de libertad escala la varianza de β (McCullagh &amp; Nelder 1989), en proporción a lo mucho que la pendiente depende de años concretos, y β se contrasta con la t de Student con los grados de libertad entre años. Así, los años que difieren en su conjunto ensanchan el intervalo. La DE entre años se estima a partir del mismo descenso por el método de los momentos (DerSimonian &amp; Laird 1986, aquí para un modelo log-lineal). El error estándar que solo tiene en cuenta la variación entre unidades (el GLM escalado por Pearson) se muestra para comparar. El índice de cada año es el conteo medio esperado por unidad del modelo por año, con intervalos por el método delta a partir del factor de escala de Pearson dentro de los años.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="253"/>
+        <source>The log yearly estimates are regressed on year by weighted least squares. Each year's variance is its sampling variance ln(1 + CV²) plus the year-to-year process variance τ², estimated by the method of moments (DerSimonian &amp; Laird 1986; Thompson &amp; Sharp 1999), so that a noisy year counts less and real ups and downs between years widen the interval. The variance of the slope is scaled by the weighted residual mean square and tested with t on k − 2 degrees of freedom (Hartung &amp; Knapp 2001).</source>
+        <translation>Los logaritmos de las estimaciones anuales se regresan sobre el año por mínimos cuadrados ponderados. La varianza de cada año es su varianza de muestreo ln(1 + CV²) más la varianza del proceso entre años τ², estimada por el método de los momentos (DerSimonian &amp; Laird 1986; Thompson &amp; Sharp 1999), de modo que un año ruidoso cuenta menos y las subidas y bajadas reales entre años ensanchan el intervalo. La varianza de la pendiente se escala por el cuadrado medio residual ponderado y se contrasta con t con k − 2 grados de libertad (Hartung &amp; Knapp 2001).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="264"/>
+        <source>A trend in counts is a trend in the population only if detection did not change: new observers, another season or time of day, denser vegetation or a different method change the counts without any change in the animals. Keep the field protocol the same, or measure detection each year.</source>
+        <translation>Una tendencia en los conteos solo es una tendencia de la población si la detección no cambió: observadores nuevos, otra época del año u hora del día, una vegetación más densa o un método distinto cambian los conteos sin que cambien los animales. Mantenga el mismo protocolo de campo, o mida la detección cada año.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trend.py" line="269"/>
+        <source>The trend is the average change over these years, on a log scale. It is not a forecast, and it says nothing about units or land outside the programme&apos;s frame.</source>
+        <translation>La tendencia es el cambio medio a lo largo de estos años, en escala logarítmica. No es una previsión, y no dice nada de unidades ni terrenos fuera del marco del programa.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Years</source>
+        <translation>Años</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Change (% per year)</source>
+        <translation>Cambio (% por año)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Power</source>
+        <translation>Potencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Monte Carlo SE</source>
+        <translation>EE de Monte Carlo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="24"/>
+        <source>Fits that failed</source>
+        <translation>Ajustes fallidos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="46"/>
+        <source>{c:+g}% per year</source>
+        <translation>{c:+g}% por año</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="55"/>
+        <source>power for {c} after {t} years</source>
+        <translation>potencia para {c} tras {t} años</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="60"/>
+        <source>years for 80% power ({c})</source>
+        <translation>años para una potencia del 80% ({c})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="60"/>
+        <source>more than {t}</source>
+        <translation>más de {t}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="67"/>
+        <source>A change of {c} is detected with 80% power after {t} years of this programme.</source>
+        <translation>Un cambio de {c} se detecta con una potencia del 80% tras {t} años de este programa.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="72"/>
+        <source>A change of {c} is not detected with 80% power within {t} years of this programme.</source>
+        <translation>Un cambio de {c} no se detecta con una potencia del 80% en {t} años de este programa.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="89"/>
+        <source>{design} (from {layer})</source>
+        <translation>{design} (a partir de {layer})</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="91"/>
+        <source>two-sided</source>
+        <translation>bilateral</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="92"/>
+        <source>one-sided, in the direction of the change</source>
+        <translation>unilateral, en el sentido del cambio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="94"/>
+        <source>Units (N_UNITS)</source>
+        <translation>Unidades (N_UNITS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="96"/>
+        <source>Panel design</source>
+        <translation>Diseño de paneles</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="97"/>
+        <source>Changes to detect (% per year)</source>
+        <translation>Cambios que detectar (% por año)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="99"/>
+        <source>Mean animals per unit in the first year (MEAN_COUNT)</source>
+        <translation>Media de animales por unidad en el primer año (MEAN_COUNT)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="101"/>
+        <source>SD between units, log scale (SD_UNIT)</source>
+        <translation>DE entre unidades, escala logarítmica (SD_UNIT)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="102"/>
+        <source>SD unit × year, log scale (SD_UNIT_YEAR)</source>
+        <translation>DE unidad × año, escala logarítmica (SD_UNIT_YEAR)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="103"/>
+        <source>SD year to year, log scale (SD_YEAR)</source>
+        <translation>DE entre años, escala logarítmica (SD_YEAR)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="104"/>
+        <source>Mean count and SD between units from</source>
+        <translation>Conteo medio y DE entre unidades tomados de</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="105"/>
+        <source>the parameters</source>
+        <translation>los parámetros</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="106"/>
+        <source>Detection probability (DETECTION)</source>
+        <translation>Probabilidad de detección (DETECTION)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="107"/>
+        <source>Significance level (ALPHA)</source>
+        <translation>Nivel de significación (ALPHA)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="108"/>
+        <source>Test</source>
+        <translation>Prueba</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="109"/>
+        <source>Replicates (REPLICATES)</source>
+        <translation>Réplicas (REPLICATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="111"/>
+        <source>Largest Monte Carlo standard error of a power</source>
+        <translation>Mayor error estándar de Monte Carlo de una potencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="127"/>
+        <source>80%</source>
+        <translation>80%</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="128"/>
+        <source>power</source>
+        <translation>potencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="129"/>
+        <source>Power against years</source>
+        <translation>Potencia frente a los años</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="130"/>
+        <source>years of the programme</source>
+        <translation>años del programa</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="132"/>
+        <source>Power with {n} units against the number of years; bars: ±2 Monte Carlo SE.</source>
+        <translation>Potencia con {n} unidades frente al número de años; barras: ±2 EE de Monte Carlo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="136"/>
+        <source>Power against units</source>
+        <translation>Potencia frente a las unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="137"/>
+        <source>units</source>
+        <translation>unidades</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="139"/>
+        <source>Power after {t} years against the number of units; bars: ±2 Monte Carlo SE.</source>
+        <translation>Potencia tras {t} años frente al número de unidades; barras: ±2 EE de Monte Carlo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="154"/>
+        <source>Each of the {r:,} replicates simulates the counts of every unit in every year it is visited: count ~ Poisson(p·λ), log λ = log(mean) + β·t + unit effect + year effect + unit × year effect, with normal effects of the SDs given (on the log scale) and β = ln(1 + change/100). The replicate's trend is estimated with the same log-linear Poisson model with unit effects and quasi-likelihood scale between years as plotwise:trend, and the change counts as detected when its t test rejects at level {a:g}. Power is the share of replicates with a detection; its Monte Carlo SE is √(P(1 − P)/R) (Gerrodette 1987 for the setting).</source>
+        <translation>Cada una de las {r:,} réplicas simula los conteos de cada unidad en cada año en que se visita: conteo ~ Poisson(p·λ), log λ = log(media) + β·t + efecto de la unidad + efecto del año + efecto unidad × año, con efectos normales de las DE indicadas (en escala logarítmica) y β = ln(1 + cambio/100). La tendencia de la réplica se estima con el mismo modelo de Poisson log-lineal con efectos de unidad y factor de escala de cuasi-verosimilitud entre años que plotwise:trend, y el cambio cuenta como detectado cuando su prueba t rechaza la ausencia de tendencia al nivel {a:g}. La potencia es la proporción de réplicas con detección; su EE de Monte Carlo es √(P(1 − P)/R) (Gerrodette 1987 para el planteamiento).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="163"/>
+        <source>Shorter programmes are the first years of the same simulated programmes; programmes with other numbers of units are the first units of larger simulated programmes, assigned to panels anew. Power for a programme of fewer years is shown only from the first length that leaves a degree of freedom for year-to-year variation.</source>
+        <translation>Los programas más cortos son los primeros años de los mismos programas simulados; los programas con otros números de unidades son las primeras unidades de programas simulados mayores, asignadas de nuevo a paneles. La potencia de un programa de menos años solo se muestra a partir de la primera duración que deja un grado de libertad para la variación entre años.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="169"/>
+        <source>A one-season pilot gives the mean count and the spread between units (the estimate step's mean_c and sd_c): with a Poisson–log-normal count, SD_UNIT² = ln(1 + (s² − m)/m²) − SD_UNIT_YEAR². The unit × year and year-to-year SDs need several years of counts.</source>
+        <translation>Un piloto de una temporada da el conteo medio y la dispersión entre unidades (mean_c y sd_c del paso de estimación): con un conteo Poisson–log-normal, SD_UNIT² = ln(1 + (s² − m)/m²) − SD_UNIT_YEAR². Las DE unidad × año y entre años necesitan varios años de conteos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="178"/>
+        <source>Power depends on the variance components assumed: the spread between units, the unit × year noise and above all the year-to-year variation shared by all units. Larger values than those entered give less power. The defaults are illustrative, not measured: use values from a pilot or from earlier years of the programme, and try a range.</source>
+        <translation>La potencia depende de los componentes de la varianza supuestos: la dispersión entre unidades, el ruido unidad × año y, sobre todo, la variación entre años común a todas las unidades. Valores mayores que los introducidos dan menos potencia. Los valores por defecto son ilustrativos, no medidos: use valores de un piloto o de años anteriores del programa, y pruebe un intervalo de valores.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/trendpower.py" line="184"/>
+        <source>The simulation assumes a steady change in % per year, constant detection, and that every planned visit happens. Missed visits, a change in detection or a trend that is not steady reduce the power.</source>
+        <translation>La simulación supone un cambio regular en % por año, una detección constante y que se realiza cada visita prevista. Las visitas perdidas, un cambio en la detección o una tendencia irregular reducen la potencia.</translation>
     </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
     <message>
-        <location filename="../processing/styles.py" line="220"/>
+        <location filename="../processing/styles.py" line="207"/>
         <source>primary unit</source>
         <translation>unidad principal</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="221"/>
+        <location filename="../processing/styles.py" line="208"/>
         <source>reserve unit</source>
         <translation>unidad de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="351"/>
+        <location filename="../processing/styles.py" line="338"/>
         <source>per {unit}</source>
         <translation>por {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="265"/>
+        <location filename="../processing/styles.py" line="252"/>
         <source>Density (animals {per})</source>
         <translation>Densidad (animales {per})</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="295"/>
+        <location filename="../processing/styles.py" line="282"/>
         <source>no estimate (no surveyed unit)</source>
         <translation>sin estimación (ninguna unidad muestreada)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="405"/>
+        <location filename="../processing/styles.py" line="392"/>
         <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
         <translation>No se pudo aplicar el estilo a la capa {name} ({error}); conserva el estilo predeterminado.</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="457"/>
+        <location filename="../processing/styles.py" line="444"/>
         <source>left out (no surveyed occasion)</source>
         <translation>dejado fuera (ninguna ocasión muestreada)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="459"/>
+        <location filename="../processing/styles.py" line="446"/>
         <source>Occupancy given the detections (psi_cond)</source>
         <translation>Ocupación dadas las detecciones (psi_cond)</translation>
     </message>
@@ -7888,17 +9027,17 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Unidades con conteos simulados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="200"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="199"/>
         <source>has no geometry</source>
         <translation>no tiene geometría</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="205"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="204"/>
         <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
         <translation>Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="181"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="180"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
     </message>
@@ -7968,17 +9107,17 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Observaciones con las distancias</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="249"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="245"/>
         <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
         <translation>Capa «{layer}»: los puntos de animales {ids} no tienen un tamaño de grupo mayor que 0 en el campo «{field}». Rellénelo o no elija ningún campo de tamaño de grupo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="262"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="258"/>
         <source>Animals within {w:.1f} m of the lines or points are counted.</source>
         <translation>Se cuentan los animales a menos de {w:.1f} m de las líneas o de los puntos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="285"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="281"/>
         <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
         <translation>No se eligió ninguna función de detección, así que no hay distancias: la capa de observaciones está vacía.</translation>
     </message>
@@ -8036,7 +9175,7 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Estaciones con historiales de detección</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatedetections.py" line="109"/>
+        <location filename="../processing/algorithms/simulatedetections.py" line="108"/>
         <source>{n} stations, {k} occasions: the species was detected at {d} stations ({g} animal groups).</source>
         <translation>{n} estaciones, {k} ocasiones: la especie se detectó en {d} estaciones ({g} grupos de animales).</translation>
     </message>
@@ -8201,25 +9340,25 @@ Compruebe el acceso y la seguridad de cada estación antes del trabajo de campo:
     <message>
         <location filename="../processing/algorithms/stations.py" line="137"/>
         <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation>La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
+        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="166"/>
+        <location filename="../processing/algorithms/stations.py" line="162"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="180"/>
+        <location filename="../processing/algorithms/stations.py" line="176"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="181"/>
+        <location filename="../processing/algorithms/stations.py" line="177"/>
         <source>{n} primary and {r} reserve stations, {s:.0f} m apart.</source>
         <translation>{n} estaciones principales y {r} de reserva, separadas {s:.0f} m.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="199"/>
+        <location filename="../processing/algorithms/stations.py" line="195"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
@@ -8227,409 +9366,723 @@ Compruebe el acceso y la seguridad de cada estación antes del trabajo de campo:
 <context>
     <name>Stratify</name>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="67"/>
+        <location filename="../processing/algorithms/stratify.py" line="69"/>
         <source>Quantile (equal areas on the first covariate)</source>
         <translation>Cuantiles (áreas iguales sobre la primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="68"/>
+        <location filename="../processing/algorithms/stratify.py" line="70"/>
         <source>Equal interval (on the first covariate)</source>
         <translation>Intervalos iguales (sobre la primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="69"/>
+        <location filename="../processing/algorithms/stratify.py" line="71"/>
         <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
         <translation>Raíz acumulada de las frecuencias (Dalenius–Hodges, primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="70"/>
+        <location filename="../processing/algorithms/stratify.py" line="72"/>
         <source>k-means (all covariates, standardised)</source>
         <translation>k-medias (todas las covariables, estandarizadas)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="71"/>
+        <location filename="../processing/algorithms/stratify.py" line="73"/>
         <source>Raster classes (each class of the first covariate)</source>
         <translation>Clases del ráster (cada clase de la primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="75"/>
+        <location filename="../processing/algorithms/stratify.py" line="77"/>
         <source>Stratify from raster covariates</source>
         <translation>Estratificar a partir de covariables ráster</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="78"/>
+        <location filename="../processing/algorithms/stratify.py" line="80"/>
         <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Forma estratos (zonas de densidad esperada similar) a partir de covariables ráster como la altitud, un índice de vegetación o un mapa de cobertura del suelo. Solo cuentan las celdas cuyo centro está dentro del marco de muestreo. Una celda con NoData en alguna covariable se deja fuera y se informa de su área.&lt;/p&gt;&lt;p&gt;Las covariables se llevan a la malla de la primera, en el SRC del marco (un marco en coordenadas geográficas se proyecta a la zona UTM de su centro). Los rásteres en otro SRC o en otra malla se remuestrean al vuelo (bilineal; vecino más próximo para las clases del ráster). Los rásteres se leen bloque a bloque, de modo que la memoria queda acotada sea cual sea su tamaño.&lt;/p&gt;&lt;h3&gt;Métodos&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Cuantiles&lt;/b&gt;: estratos de igual área a lo largo de la primera covariable. Los límites son los cuantiles muestrales exactos de las celdas del marco (Hyndman &amp;amp; Fan 1996, definición 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalos iguales&lt;/b&gt;: el rango de la primera covariable dividido en anchos iguales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raíz acumulada de las frecuencias&lt;/b&gt;: la regla de Dalenius &amp;amp; Hodges (1959) sobre un histograma de 100 clases de la primera covariable (Cochran 1977, cap. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-medias&lt;/b&gt;: todas las covariables estandarizadas a media 0 y DE 1, semillas k-means++ (Arthur &amp;amp; Vassilvitskii 2007) e iteraciones de Lloyd sobre una muestra aleatoria de 100.000 celdas sorteada con la semilla; después cada celda va al centro más próximo.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Clases del ráster&lt;/b&gt;: cada valor de la primera covariable (un ráster categórico, como máximo 50 clases) es un estrato; el número de estratos se ignora.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Los estratos se numeran de 1 a k por media creciente de la primera covariable. Las manchas (conectividad 4) menores que el área mínima (ha) se unen a un estrato vecino antes de convertir los estratos en polígonos: los granos mediante la criba de GDAL y luego cada mancha pequeña, de la menor a la mayor, al vecino que la lleva al área mínima. Una mancha que no toca ningún otro estrato se queda, con una advertencia.&lt;/p&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Ráster de estratos: el estrato de cada celda (0 = ninguno).&lt;/li&gt;&lt;li&gt;Estratos: un multipolígono por estrato con &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (celdas × área de la celda), &lt;i&gt;cov_mean&lt;/i&gt; y &lt;i&gt;cov_sd&lt;/i&gt; de la primera covariable, y &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … para las demás (DE sobre las celdas del estrato).&lt;/li&gt;&lt;li&gt;Informe: límites, áreas, estadísticas de las covariables por estrato, la parte de la varianza de cada covariable que explican los estratos (R²), un histograma con los límites y un mapa.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La semilla aleatoria solo la usa k-medias (0 sortea una y la registra).&lt;/p&gt;&lt;p&gt;Los estratos son un recurso estadístico: antes del trabajo de campo, compruebe el acceso y la seguridad de cada unidad.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="113"/>
+        <location filename="../processing/algorithms/stratify.py" line="129"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="115"/>
+        <location filename="../processing/algorithms/stratify.py" line="131"/>
         <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
         <translation>Covariables ráster (banda 1 de cada una; la primera fija la malla)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="118"/>
+        <location filename="../processing/algorithms/stratify.py" line="134"/>
         <source>Method</source>
         <translation>Método</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="120"/>
+        <location filename="../processing/algorithms/stratify.py" line="136"/>
         <source>Number of strata (ignored for raster classes)</source>
         <translation>Número de estratos (se ignora con clases del ráster)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="123"/>
+        <location filename="../processing/algorithms/stratify.py" line="139"/>
         <source>Minimum patch area (ha); smaller patches join a neighbour</source>
         <translation>Área mínima de mancha (ha); las manchas menores se unen a una vecina</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="127"/>
+        <location filename="../processing/algorithms/stratify.py" line="143"/>
         <source>Stratum raster</source>
         <translation>Ráster de estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="251"/>
+        <location filename="../processing/algorithms/stratify.py" line="269"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="131"/>
+        <location filename="../processing/algorithms/stratify.py" line="147"/>
         <source>Number of strata formed</source>
         <translation>Número de estratos formados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="132"/>
+        <location filename="../processing/algorithms/stratify.py" line="148"/>
         <source>Share of the first covariate's variance explained by the strata (R²)</source>
         <translation>Parte de la varianza de la primera covariable explicada por los estratos (R²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="139"/>
+        <location filename="../processing/algorithms/stratify.py" line="155"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="141"/>
+        <location filename="../processing/algorithms/stratify.py" line="157"/>
         <source>COVARIATES holds {n} rasters; use at most {m}.</source>
         <translation>COVARIATES contiene {n} rásteres; use como máximo {m}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="146"/>
+        <location filename="../processing/algorithms/stratify.py" line="162"/>
         <source>COVARIATES: &apos;{name}&apos; is not a raster layer.</source>
         <translation>COVARIATES: «{name}» no es una capa ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="148"/>
+        <location filename="../processing/algorithms/stratify.py" line="165"/>
         <source>Covariate &apos;{name}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
         <translation>La covariable «{name}» no es un archivo ráster que GDAL pueda leer. Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="176"/>
+        <location filename="../processing/algorithms/stratify.py" line="193"/>
         <source>Layer &apos;{layer}&apos; (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
         <translation>La capa «{layer}» (FRAME) no tiene ningún polígono con área positiva. Elija la capa del marco de muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="191"/>
+        <location filename="../processing/algorithms/stratify.py" line="208"/>
         <source>Warped onto the grid of &apos;{first}&apos; in {crs}: {names}.</source>
         <translation>Remuestreadas sobre la malla de «{first}» en {crs}: {names}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="214"/>
+        <location filename="../processing/algorithms/stratify.py" line="231"/>
         <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
         <translation>{k} estratos en {ha} ha; R² de «{name}»: {r2}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="235"/>
+        <location filename="../processing/algorithms/stratify.py" line="253"/>
         <source>Strata from raster covariates</source>
         <translation>Estratos a partir de covariables ráster</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <location filename="../processing/algorithms/stratify.py" line="258"/>
         <source>strata</source>
         <translation>estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>area stratified (ha)</source>
         <translation>área estratificada (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <location filename="../processing/algorithms/stratify.py" line="258"/>
         <source>frame covered</source>
         <translation>parte del marco cubierta</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="240"/>
+        <location filename="../processing/algorithms/stratify.py" line="258"/>
         <source>R² of {name}</source>
         <translation>R² de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="246"/>
+        <location filename="../processing/algorithms/stratify.py" line="264"/>
         <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
         <translation>Los estratos cubren las celdas del marco que tienen valor en todas las covariables ({ha} ha). Un muestreo asignado sobre estos estratos solo vale para esa área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Stratum</source>
         <translation>Estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Label</source>
         <translation>Etiqueta</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Area (ha)</source>
         <translation>Área (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>% of area</source>
         <translation>% del área</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="252"/>
+        <location filename="../processing/algorithms/stratify.py" line="270"/>
         <source>Cells</source>
         <translation>Celdas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <location filename="../processing/algorithms/stratify.py" line="273"/>
         <source>{name} mean</source>
         <translation>media de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="255"/>
+        <location filename="../processing/algorithms/stratify.py" line="273"/>
         <source>{name} SD</source>
         <translation>DE de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="265"/>
+        <location filename="../processing/algorithms/stratify.py" line="283"/>
         <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
         <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron con su vecina mayor (criba de GDAL, conectividad 4) antes de vectorizar; las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener algunas celdas que la regla por sí sola habría puesto en un estrato vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="271"/>
+        <location filename="../processing/algorithms/stratify.py" line="289"/>
         <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
         <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron antes de vectorizar (conectividad 4): las manchas diminutas (menos de {specks} celdas) con su vecina mayor (criba de GDAL), y después otras {n} manchas, de la menor a la mayor, cada una con el estrato vecino que formaba la mancha más pequeña de al menos {ha} ha (o, en su defecto, la mayor), para que un mosaico de manchas pequeñas no quede absorbido por una sola mancha que crece. Las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener celdas que la regla por sí sola habría puesto en otro estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="282"/>
+        <location filename="../processing/algorithms/stratify.py" line="300"/>
         <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
         <translation>{n} mancha(s) que cubren {area} ha no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData) y siguen siendo menores de {ha} ha.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="288"/>
+        <location filename="../processing/algorithms/stratify.py" line="306"/>
         <source>Every patch of the strata now covers at least {ha} ha.</source>
         <translation>Cada mancha de los estratos cubre ahora al menos {ha} ha.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="292"/>
+        <location filename="../processing/algorithms/stratify.py" line="310"/>
         <source>Method: {name}</source>
         <translation>Método: {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="296"/>
+        <location filename="../processing/algorithms/stratify.py" line="314"/>
         <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
         <translation>El estrato h contiene las celdas con b(h−1) ≤ {name} &lt; b(h). Límites sobre {name}:</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="299"/>
+        <location filename="../processing/algorithms/stratify.py" line="317"/>
         <source>Boundary</source>
         <translation>Límite</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>Value</source>
         <translation>Valor</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="302"/>
+        <location filename="../processing/algorithms/stratify.py" line="320"/>
         <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
         <translation>Cuantiles muestrales exactos en h/k de las celdas del marco (Hyndman &amp; Fan 1996, definición 7), hallados en dos pasadas: un histograma de 64.000 clases localiza cada cuantil y luego se ordenan las celdas de esa clase.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="307"/>
+        <location filename="../processing/algorithms/stratify.py" line="325"/>
         <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
         <translation>Dalenius &amp; Hodges (1959): sobre un histograma de {name} de {n} clases, los límites son los extremos superiores de las clases donde la suma acumulada de √f está más cerca de h/k de su total.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="313"/>
+        <location filename="../processing/algorithms/stratify.py" line="331"/>
         <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
         <translation>Covariables estandarizadas con su media y su DE sobre el marco; semillas k-means++ e iteraciones de Lloyd sobre una muestra aleatoria de {m} celdas (semilla {seed}); {it} iteraciones. Después cada celda fue al centro más próximo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="319"/>
+        <location filename="../processing/algorithms/stratify.py" line="337"/>
         <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
         <translation>Cada clase de «{name}» es un estrato ({k} clases).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="321"/>
+        <location filename="../processing/algorithms/stratify.py" line="339"/>
         <source>Share of covariate variance explained by the strata (R²)</source>
         <translation>Parte de la varianza de las covariables explicada por los estratos (R²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>Covariate</source>
         <translation>Covariable</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>Mean</source>
         <translation>Media</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>SD</source>
         <translation>DE</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="322"/>
+        <location filename="../processing/algorithms/stratify.py" line="340"/>
         <source>R²</source>
         <translation>R²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="325"/>
+        <location filename="../processing/algorithms/stratify.py" line="343"/>
         <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
         <translation>R² = 1 − Σ N_h S_h² / (N S²): la parte entre estratos de la varianza de la covariable sobre las celdas. Para una magnitud que sigue exactamente a la covariable, la asignación proporcional sobre estos estratos reduciría la varianza de la media estimada en esta parte respecto al muestreo aleatorio simple (Cochran 1977, cap. 5, aproximación para poblaciones grandes). La ganancia para la densidad animal es menor cuanto menos sigue la densidad a la covariable.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="332"/>
+        <location filename="../processing/algorithms/stratify.py" line="350"/>
         <source>Histogram of {name}</source>
         <translation>Histograma de {name}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>stratum {h}</source>
         <translation>estrato {h}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>cells</source>
         <translation>celdas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
         <translation>Celdas del marco según {name}, coloreadas por estrato; líneas discontinuas: límites de los estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="338"/>
+        <location filename="../processing/algorithms/stratify.py" line="356"/>
         <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
         <translation>Celdas del marco según {name}, coloreadas por estrato (los estratos de k-medias pueden solaparse en una covariable).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="347"/>
+        <location filename="../processing/algorithms/stratify.py" line="365"/>
         <source>Map</source>
         <translation>Mapa</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="349"/>
+        <location filename="../processing/algorithms/stratify.py" line="368"/>
         <source>Strata within the sampling frame</source>
         <translation>Estratos dentro del marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="351"/>
+        <location filename="../processing/algorithms/stratify.py" line="370"/>
         <source>Coverage</source>
         <translation>Cobertura</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>Item</source>
         <translation>Elemento</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>frame area (ha)</source>
         <translation>área del marco (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>frame area outside the first covariate&apos;s extent (ha)</source>
         <translation>área del marco fuera de la extensión de la primera covariable (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>frame cells with NoData in a covariate (ha)</source>
         <translation>celdas del marco con NoData en alguna covariable (ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>share of the frame covered</source>
         <translation>parte del marco cubierta</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>cells stratified</source>
         <translation>celdas estratificadas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>cell size (m)</source>
         <translation>tamaño de celda (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>grid</source>
         <translation>malla</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>covariates warped on the fly</source>
         <translation>covariables remuestreadas al vuelo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="353"/>
+        <location filename="../processing/algorithms/stratify.py" line="372"/>
         <source>none</source>
         <translation>ninguna</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="367"/>
+        <location filename="../processing/algorithms/stratify.py" line="386"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="369"/>
+        <location filename="../processing/algorithms/stratify.py" line="388"/>
         <source>Sampling frame (FRAME)</source>
         <translation>Marco de muestreo (FRAME)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="370"/>
+        <location filename="../processing/algorithms/stratify.py" line="389"/>
         <source>Covariates (COVARIATES)</source>
         <translation>Covariables (COVARIATES)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="371"/>
+        <location filename="../processing/algorithms/stratify.py" line="390"/>
         <source>Method (METHOD)</source>
         <translation>Método (METHOD)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <location filename="../processing/algorithms/stratify.py" line="391"/>
         <source>Number of strata (STRATA)</source>
         <translation>Número de estratos (STRATA)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
+        <location filename="../processing/algorithms/stratify.py" line="391"/>
         <source>ignored</source>
         <translation>ignorado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="373"/>
+        <location filename="../processing/algorithms/stratify.py" line="392"/>
         <source>Minimum patch area (MIN_AREA, ha)</source>
         <translation>Área mínima de mancha (MIN_AREA, ha)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="374"/>
+        <location filename="../processing/algorithms/stratify.py" line="393"/>
         <source>CRS of the computation and the outputs</source>
         <translation>SRC del cálculo y de las salidas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="377"/>
+        <location filename="../processing/algorithms/stratify.py" line="396"/>
         <source>Seed (SEED)</source>
         <translation>Semilla (SEED)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/stratify.py" line="112"/>
+        <source>&lt;h3&gt;Minimum patch area&lt;/h3&gt;&lt;p&gt;The default of {default:g} ha is chosen for field teams: a patch smaller than a few sample units is not a stratum. Four 20 m × 20 m plots 50 m apart need about 1 ha; a zone smaller than that cannot hold the units a stratum needs for its own variance, and on the map it is noise of the covariate, not a zone to survey. Raise it for larger units (transects, camera stations); 0 keeps every cell's stratum.&lt;/p&gt;&lt;p&gt;A speckled covariate (a 10 m vegetation index, a noisy classification) can form millions of patches. The patches are counted before they are merged and before they are turned into polygons: strata with more than {max_patches:,} patches stop the run with an error that gives their number and a MIN_AREA that brings them under the limit, and a covariate too speckled to merge in bounded memory (more than {max_sieve:,} patches) stops it with advice to smooth or coarsen the covariate first. When the patches left after merging the specks are too many to merge one by one, patches below MIN_AREA first join their largest neighbour (the rule of GDAL's sieve filter), with a warning.&lt;/p&gt;</source>
+        <translation>&lt;h3&gt;Área mínima de mancha&lt;/h3&gt;&lt;p&gt;El valor por defecto de {default:g} ha está pensado para los equipos de campo: una mancha menor que unas pocas unidades de muestreo no es un estrato. Cuatro parcelas de 20 m × 20 m separadas 50 m necesitan alrededor de 1 ha; una zona menor no puede contener las unidades que un estrato necesita para su propia varianza, y en el mapa es ruido de la covariable, no una zona que muestrear. Auméntelo para unidades mayores (transectos, estaciones de cámaras trampa); 0 conserva el estrato de cada celda.&lt;/p&gt;&lt;p&gt;Una covariable moteada (un índice de vegetación a 10 m, una clasificación ruidosa) puede formar millones de manchas. Las manchas se cuentan antes de fusionarlas y antes de convertirlas en polígonos: los estratos con más de {max_patches:,} manchas detienen la ejecución con un error que indica su número y un MIN_AREA que las deja por debajo del límite, y una covariable demasiado moteada para fusionarla con memoria acotada (más de {max_sieve:,} manchas) la detiene con el consejo de suavizar la covariable o aumentar antes su tamaño de celda. Cuando las manchas que quedan tras fusionar las manchas diminutas son demasiadas para fusionarlas una a una, las manchas por debajo de MIN_AREA se unen primero a su vecina mayor (la regla del filtro de criba de GDAL), con una advertencia.&lt;/p&gt;</translation>
+    </message>
+</context>
+<context>
+    <name>Trend</name>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="128"/>
+        <source>Trend over years</source>
+        <translation>Tendencia a lo largo de los años</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="43"/>
+        <source>Estimates the change per year of a monitored population, with its confidence interval and p-value, and a yearly index.
+
+Input: a layer or table with one record per unit and year (unit counts), or one record per year (yearly estimates).
+Source 0, unit counts: unit id, year and count fields; optionally a stratum field (a trend per stratum is added to the report) and a unit-area field (the area or length surveyed in that record: counts are compared per unit of effort). A NULL count means not surveyed. Units need not be surveyed every year (revisit panels). The model is log-linear Poisson with one effect per unit, log E[count] = log(area) + unit effect + β·year (McCullagh &amp; Nelder 1989), fitted by Newton's method with the unit effects in closed form. Overdispersion by quasi-likelihood: the interval uses the deviance drop between a model with one effect per year and the trend model, per degree of freedom, so that years that differ as a whole (weather, observers) widen it, with Student's t. Units that never counted an animal are left out of the fit (they carry no information on the trend).
+Source 1, yearly estimates: year, estimate and standard-error fields (for example the abund and abund_se of the estimate step, one season per record; with a stratum field, the rows 'all' are used). Weighted log-linear regression in which each year's variance is its sampling variance ln(1 + CV²) plus the year-to-year process variance, estimated by the method of moments (DerSimonian &amp; Laird 1986; Thompson &amp; Sharp 1999); the slope's variance is scaled by the residual mean square, with t on k − 2 degrees of freedom (Hartung &amp; Knapp 2001).
+Confidence level: of the intervals (default 0.95).
+
+Outputs: the yearly index table (year, index with index_lo and index_hi, and the fitted trend with trend_lo and trend_hi); the numbers CHANGE, CHANGE_LO, CHANGE_HI (% per year) and P_VALUE (two-sided, no trend); an HTML report with the index and the trend, the change per year in words, and the cautions.
+
+At least 3 years are needed; a unit counted twice in a year, negative counts or estimates not above 0 stop the run, naming the records.
+
+A trend in counts is a trend in the population only if detection did not change over the years.
+
+References: McCullagh &amp; Nelder (1989); Bishop, Fienberg &amp; Holland (1975); DerSimonian &amp; Laird (1986); Thompson &amp; Sharp (1999); Hartung &amp; Knapp (2001); Urquhart &amp; Kincaid (1999).</source>
+        <translation>Estima el cambio anual de una población en seguimiento, con su intervalo de confianza y su valor p, y un índice anual.
+
+Entrada: una capa o tabla con un registro por unidad y año (conteos por unidad), o un registro por año (estimaciones anuales).
+Fuente 0, conteos por unidad: campos de identificador de unidad, año y conteo; opcionalmente un campo de estrato (se añade al informe una tendencia por estrato) y un campo de área de la unidad (el área o la longitud muestreada en ese registro: los conteos se comparan por unidad de esfuerzo). Un conteo NULL significa no muestreado. No hace falta muestrear las unidades cada año (paneles de revisita). El modelo es de Poisson log-lineal con un efecto por unidad, log E[conteo] = log(área) + efecto de la unidad + β·año (McCullagh &amp; Nelder 1989), ajustado por el método de Newton con los efectos de las unidades en forma cerrada. Sobredispersión por cuasi-verosimilitud: el intervalo usa el descenso de la devianza entre un modelo con un efecto por año y el modelo de tendencia, por grado de libertad, de modo que los años que difieren en su conjunto (meteorología, observadores) lo ensanchan, con la t de Student. Las unidades que nunca contaron un animal se dejan fuera del ajuste (no aportan información sobre la tendencia).
+Fuente 1, estimaciones anuales: campos de año, estimación y error estándar (por ejemplo abund y abund_se del paso de estimación, una temporada por registro; con un campo de estrato se usan las filas 'all'). Regresión log-lineal ponderada en la que la varianza de cada año es su varianza de muestreo ln(1 + CV²) más la varianza del proceso entre años, estimada por el método de los momentos (DerSimonian &amp; Laird 1986; Thompson &amp; Sharp 1999); la varianza de la pendiente se escala por el cuadrado medio residual, con t con k − 2 grados de libertad (Hartung &amp; Knapp 2001).
+Nivel de confianza: el de los intervalos (0.95 por defecto).
+
+Salidas: la tabla del índice anual (year, index con index_lo e index_hi, y la tendencia ajustada con trend_lo y trend_hi); los valores CHANGE, CHANGE_LO, CHANGE_HI (% por año) y P_VALUE (bilateral, sin tendencia); un informe HTML con el índice y la tendencia, el cambio anual expresado en palabras y las precauciones.
+
+Se necesitan al menos 3 años; una unidad contada dos veces en un año, conteos negativos o estimaciones no mayores que 0 detienen la ejecución, nombrando los registros.
+
+Una tendencia en los conteos solo es una tendencia de la población si la detección no cambió a lo largo de los años.
+
+Referencias: McCullagh &amp; Nelder (1989); Bishop, Fienberg &amp; Holland (1975); DerSimonian &amp; Laird (1986); Thompson &amp; Sharp (1999); Hartung &amp; Knapp (2001); Urquhart &amp; Kincaid (1999).</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="76"/>
+        <source>Counts or yearly estimates (layer or table)</source>
+        <translation>Conteos o estimaciones anuales (capa o tabla)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="78"/>
+        <source>What the input holds</source>
+        <translation>Contenido de la entrada</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="78"/>
+        <source>Unit counts</source>
+        <translation>Conteos por unidad</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="78"/>
+        <source>Yearly estimates</source>
+        <translation>Estimaciones anuales</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Unit id field (unit counts)</source>
+        <translation>Campo identificador de unidad (conteos por unidad)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Year field</source>
+        <translation>Campo de año</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Count field (unit counts)</source>
+        <translation>Campo de conteo (conteos por unidad)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Estimate field (yearly estimates)</source>
+        <translation>Campo de estimación (estimaciones anuales)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Standard-error field (yearly estimates)</source>
+        <translation>Campo de error estándar (estimaciones anuales)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Stratum field (optional)</source>
+        <translation>Campo de estrato (opcional)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="81"/>
+        <source>Unit-area field: area surveyed per record (optional)</source>
+        <translation>Campo de área de la unidad: área muestreada por registro (opcional)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="93"/>
+        <source>Confidence level</source>
+        <translation>Nivel de confianza</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="96"/>
+        <source>Yearly index</source>
+        <translation>Índice anual</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>Change per year (%)</source>
+        <translation>Cambio anual (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>Lower limit of the change per year (%)</source>
+        <translation>Límite inferior del cambio anual (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>Upper limit of the change per year (%)</source>
+        <translation>Límite superior del cambio anual (%)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="99"/>
+        <source>p-value of the trend (two-sided)</source>
+        <translation>Valor p de la tendencia (bilateral)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trend.py" line="130"/>
+        <source>Change per year: {c:+.2f}% ({lo:+.2f}% to {hi:+.2f}%), p = {p:.3g}.</source>
+        <translation>Cambio anual: {c:+.2f}% ({lo:+.2f}% a {hi:+.2f}%), p = {p:.3g}.</translation>
+    </message>
+</context>
+<context>
+    <name>TrendPower</name>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="191"/>
+        <source>Power to detect a trend</source>
+        <translation>Potencia para detectar una tendencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="46"/>
+        <source>Estimates, by simulation, how likely a monitoring programme is to detect a given change per year: the power, by number of years and number of units, and the years needed for 80% power.
+
+Units per year and panels: N_UNITS units over YEARS years, in the panel design of plotwise:panels (0 every unit every year; 1 rotating: PANELS panels, each unit once every PANELS years; 2 split: a core of CORE_SHARE of the units every year plus rotating panels). Or give a panels layer (the output of plotwise:panels): its units and their visit years replace N_UNITS, YEARS and the design.
+Changes to detect: annual changes in % per year, several separated by commas (e.g. -3, -5).
+Mean count: the mean number of animals per unit in the first year (before detection).
+Variance components, as standard deviations on the log scale: between units (SD_UNIT, lasting differences between units), unit × year (SD_UNIT_YEAR, a unit's ups and downs) and year to year (SD_YEAR, shared by all units: weather, observers, conditions). The defaults (1.0, 0.3, 0.1) are illustrative only: use your own values. A pilot table (the estimate step's output table, fields n, mean_c and sd_c) can give the mean count and SD_UNIT: they are then taken from it by matching a Poisson–log-normal count. The other two need several years of counts.
+Detection probability: each animal is counted with this probability (constant over the years).
+Significance level and test: the level of the t test on the trend; two-sided, or one-sided in the direction of the change. 0.1 is often used in monitoring (common practice).
+Replicates: simulated programmes per change (1,000 give a Monte Carlo SE of at most 0.016). Random seed: 0 draws one and records it.
+
+Each replicate simulates Poisson counts for every unit and visit, estimates the trend with the same model as plotwise:trend (log-linear Poisson with unit effects, quasi-likelihood scale between years) and records whether the change was detected (Gerrodette 1987 for the setting).
+
+Outputs: a table of power with its Monte Carlo SE by years, n_units and change; an HTML report with the power curves against years and against units and the years needed for 80% power. Power depends on the variance components assumed.
+
+References: Gerrodette (1987); Urquhart &amp; Kincaid (1999); McDonald (2003); McCullagh &amp; Nelder (1989).
+
+A monitoring programme sends teams out every year: check every unit's access and safety before each season; the tool never makes a location safe. Follow your agency's field-safety rules and local law.</source>
+        <translation>Estima, por simulación, la probabilidad de que un programa de seguimiento detecte un cambio anual dado: la potencia, según el número de años y el número de unidades, y los años necesarios para una potencia del 80 %.
+
+Unidades por año y paneles: N_UNITS unidades durante YEARS años, en el diseño de paneles de plotwise:panels (0 todas las unidades cada año; 1 rotativos: PANELS paneles, cada unidad una vez cada PANELS años; 2 divididos: un núcleo con la proporción CORE_SHARE de las unidades cada año más paneles rotativos). O indique una capa de paneles (la salida de plotwise:panels): sus unidades y sus años de visita sustituyen a N_UNITS, YEARS y el diseño.
+Cambios que detectar: cambios anuales en % por año, varios separados por comas (p. ej. -3, -5).
+Conteo medio: el número medio de animales por unidad en el primer año (antes de la detección).
+Componentes de la varianza, como desviaciones estándar en escala logarítmica: entre unidades (SD_UNIT, diferencias duraderas entre unidades), unidad × año (SD_UNIT_YEAR, las subidas y bajadas de una unidad) y entre años (SD_YEAR, común a todas las unidades: meteorología, observadores, condiciones). Los valores por defecto (1.0, 0.3, 0.1) son solo ilustrativos: use sus propios valores. Una tabla piloto (la tabla de salida del paso de estimación, campos n, mean_c y sd_c) puede dar el conteo medio y SD_UNIT: se toman entonces de ella ajustando un conteo Poisson–log-normal. Los otros dos necesitan varios años de conteos.
+Probabilidad de detección: cada animal se cuenta con esta probabilidad (constante a lo largo de los años).
+Nivel de significación y prueba: el nivel de la prueba t sobre la tendencia; bilateral, o unilateral en el sentido del cambio. En seguimiento se usa a menudo 0.1 (práctica habitual).
+Réplicas: programas simulados por cambio (1000 dan un EE de Monte Carlo de como máximo 0.016). Semilla aleatoria: 0 sortea una y la registra.
+
+Cada réplica simula conteos de Poisson para cada unidad y visita, estima la tendencia con el mismo modelo que plotwise:trend (Poisson log-lineal con efectos de unidad, factor de escala de cuasi-verosimilitud entre años) y registra si se detectó el cambio (Gerrodette 1987 para el planteamiento).
+
+Salidas: una tabla de la potencia con su EE de Monte Carlo por years, n_units y change; un informe HTML con las curvas de potencia frente a los años y frente a las unidades, y los años necesarios para una potencia del 80 %. La potencia depende de los componentes de la varianza supuestos.
+
+Referencias: Gerrodette (1987); Urquhart &amp; Kincaid (1999); McDonald (2003); McCullagh &amp; Nelder (1989).
+
+Un programa de seguimiento envía equipos al campo cada año: compruebe el acceso y la seguridad de cada unidad antes de cada temporada; la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="79"/>
+        <source>Units (N_UNITS)</source>
+        <translation>Unidades (N_UNITS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="81"/>
+        <source>Years of the programme</source>
+        <translation>Años del programa</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Panel design</source>
+        <translation>Diseño de paneles</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Every unit every year</source>
+        <translation>Todas las unidades cada año</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Rotating panels</source>
+        <translation>Paneles rotativos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="84"/>
+        <source>Split panels (core + rotating)</source>
+        <translation>Paneles divididos (núcleo + rotativos)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="88"/>
+        <source>Rotating panels (K)</source>
+        <translation>Paneles rotativos (K)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="91"/>
+        <source>Share of units in the core (split panels)</source>
+        <translation>Proporción de unidades en el núcleo (paneles divididos)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="94"/>
+        <source>Panels layer (output of plotwise:panels; replaces the design)</source>
+        <translation>Capa de paneles (salida de plotwise:panels; sustituye al diseño)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="97"/>
+        <source>Changes to detect (% per year, comma-separated)</source>
+        <translation>Cambios que detectar (% por año, separados por comas)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>Mean animals per unit in the first year</source>
+        <translation>Media de animales por unidad en el primer año</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>SD between units (log scale)</source>
+        <translation>DE entre unidades (escala logarítmica)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>SD unit × year (log scale)</source>
+        <translation>DE unidad × año (escala logarítmica)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="99"/>
+        <source>SD year to year (log scale)</source>
+        <translation>DE entre años (escala logarítmica)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="107"/>
+        <source>Pilot estimate table (gives the mean count and SD between units; optional)</source>
+        <translation>Tabla de estimación piloto (da el conteo medio y la DE entre unidades; opcional)</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="110"/>
+        <source>Detection probability</source>
+        <translation>Probabilidad de detección</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="113"/>
+        <source>Significance level</source>
+        <translation>Nivel de significación</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="115"/>
+        <source>Two-sided test</source>
+        <translation>Prueba bilateral</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="116"/>
+        <source>Replicates</source>
+        <translation>Réplicas</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="120"/>
+        <source>Power table</source>
+        <translation>Tabla de potencia</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="128"/>
+        <source>every unit every year</source>
+        <translation>todas las unidades cada año</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="128"/>
+        <source>rotating panels</source>
+        <translation>paneles rotativos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="128"/>
+        <source>split panels</source>
+        <translation>paneles divididos</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="138"/>
+        <source>(K = {k})</source>
+        <translation>(K = {k})</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="144"/>
+        <source>{k} panels from the layer</source>
+        <translation>{k} paneles tomados de la capa</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="187"/>
+        <source>Change {c:+g}% per year: 80% power after {t} years.</source>
+        <translation>Cambio de {c:+g}% por año: potencia del 80% tras {t} años.</translation>
+    </message>
+    <message>
+        <location filename="../processing/algorithms/trendpower.py" line="187"/>
+        <source>Change {c:+g}% per year: 80% power not reached within {t} years.</source>
+        <translation>Cambio de {c:+g}% por año: potencia del 80% no alcanzada en {t} años.</translation>
     </message>
 </context>
 </TS>
