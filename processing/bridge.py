@@ -78,6 +78,11 @@ def computation_crs(source_crs, extent, context, feedback, layer_name=""):
     return crs
 
 
+def crs_label(crs):
+    """The CRS as reports name it: "EPSG:32736 (WGS 84 / UTM zone 36S)"."""
+    return f"{crs.authid()} ({crs.description()})"
+
+
 def crs_wkt(crs):
     return crs.toWkt(QgsCoordinateReferenceSystem.WKT_PREFERRED) if hasattr(QgsCoordinateReferenceSystem, "WKT_PREFERRED") else crs.toWkt()
 

@@ -68,6 +68,15 @@ def format_number(value, digits=3):
     return str(value)
 
 
+def crs_text(report, crs, projected_from=None):
+    """The computation CRS for a report's parameters (``crs``: "EPSG:… (name)"), saying which CRS the
+    frame was projected from (to the UTM zone of its centre) when it was."""
+    if not projected_from:
+        return crs
+    return crs + report.translate(
+        "PlotwiseReport", ", projected from {src} (UTM zone of the frame's centre)").format(src=projected_from)
+
+
 class Report:
     """Collects the blocks of one report and renders them as one HTML page."""
 
