@@ -12,8 +12,8 @@ from .. import compat
 from .. import bridge
 from ..engine import frame as frame_engine
 from ..gdal_io.masking import mask_polygons
-from ..report import MapLayer, format_number, map_svg
-from ..report.style import ACCENT, CAUTION_EDGE, INK, MUTED
+from ..report import format_number
+from ..report.buildframe import BuildFrameReportInputs, buildframe_report
 from .base import PlotwiseAlgorithm
 
 
@@ -144,9 +144,45 @@ class BuildFrame(PlotwiseAlgorithm):
         study_name = source.sourceName() or self.INPUT
         exclude = self.parameterAsSource(parameters, self.EXCLUDE, context)
         mask_layer = self.parameterAsRasterLayer(parameters, self.MASK, context)
+        mask_min, mask_max = self._mask_limits(parameters, context, mask_layer)
+        edge_buffer = self.parameterAsDouble(parameters, self.EDGE_BUFFER, context)
+
+        crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, study_name)
+        projected_from = source.sourceCrs().authid() if crs != source.sourceCrs() else None
+        feedback.setProgress(2)
+        study, exclusions, exclude_name, warnings = self._read_study_and_exclusions(
+            source, exclude, crs, context, feedback, study_name)
+        feedback.setProgress(10)
+        raster = None
+        if mask_layer is not None:
+            raster = self._read_mask(mask_layer, mask_min, mask_max, study.union, crs, feedback, warnings)
+
+        with self.engine_errors():
+            result = frame_engine.build_frame(
+                study.geometries, exclusions, raster.polygons if raster is not None else None, edge_buffer,
+                progress=self.progress_callback(feedback, 50, 90),
+            )
+        dest_id = self._write_frame(parameters, context, feedback, result, crs)
+        feedback.setProgress(95)
+
+        inputs = BuildFrameReportInputs(
+            study=study_name, crs=bridge.crs_label(crs), study_union=study.union, exclude=exclude_name,
+            mask=mask_layer.name() if mask_layer is not None else None, mask_min=mask_min, mask_max=mask_max,
+            edge_buffer=edge_buffer, projected_from=projected_from, exclusions=tuple(exclusions or ()),
+            mask_polygons=tuple(raster.polygons) if raster is not None else ())
+        report = buildframe_report(self.new_report(""), result, raster, inputs, warnings)
+        outputs = {self.OUTPUT: dest_id}
+        self.style_output(context, dest_id, "frame")
+        path = self.write_report(report, parameters, context, feedback)
+        if path:
+            outputs[self.REPORT] = path
+        feedback.setProgress(100)
+        return outputs
+
+    def _mask_limits(self, parameters, context, mask_layer):
+        """MASK_MIN and MASK_MAX (None when empty), checked against each other and against MASK."""
         mask_min = self._optional_number(parameters, self.MASK_MIN, context)
         mask_max = self._optional_number(parameters, self.MASK_MAX, context)
-        edge_buffer = self.parameterAsDouble(parameters, self.EDGE_BUFFER, context)
         if mask_layer is None and (mask_min is not None or mask_max is not None):
             raise QgsProcessingException(
                 self.tr("MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. "
@@ -157,14 +193,11 @@ class BuildFrame(PlotwiseAlgorithm):
                 self.tr("The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest "
                         "(MASK_MAX = {hi}). Swap them or leave one empty.").format(lo=mask_min, hi=mask_max)
             )
+        return mask_min, mask_max
 
-        crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, study_name)
-        projected_from = source.sourceCrs().authid() if crs != source.sourceCrs() else None
-        warnings = []
-        feedback.setProgress(2)
-
-        study, found = self._read_polygons(source, crs, context, feedback, study_name)
-        warnings += found
+    def _read_study_and_exclusions(self, source, exclude, crs, context, feedback, study_name):
+        """The study area's cleaned polygons, the excluded polygons (or None), their layer's name, the warnings."""
+        study, warnings = self._read_polygons(source, crs, context, feedback, study_name)
         if not study.geometries:
             raise QgsProcessingException(
                 self.tr("Layer '{layer}' (INPUT) has no polygon with a positive area. "
@@ -178,58 +211,52 @@ class BuildFrame(PlotwiseAlgorithm):
             exclusions = cleaned.geometries
         if feedback.isCanceled():
             raise self.cancelled_error()
-        feedback.setProgress(10)
+        return study, exclusions, exclude_name, warnings
 
-        raster = None
-        mask = None
-        study_union = study.union
-        if mask_layer is not None:
-            if mask_min is None and mask_max is None:
-                warnings.append(
-                    self.tr("Mask raster '{layer}' is given without limits: only its NoData cells are excluded.").format(
-                        layer=mask_layer.name()
-                    )
+    def _read_mask(self, mask_layer, mask_min, mask_max, study_union, crs, feedback, warnings):
+        """The mask raster's out-of-range cells as polygons (:class:`gdal_io.masking.RasterMask`)."""
+        if mask_min is None and mask_max is None:
+            warnings.append(
+                self.tr("Mask raster '{layer}' is given without limits: only its NoData cells are excluded.").format(
+                    layer=mask_layer.name()
                 )
-                feedback.pushWarning(warnings[-1])
-            if mask_layer.providerType() != "gdal":
-                raise QgsProcessingException(
-                    self.tr("Mask raster '{layer}' is not a file raster that GDAL can read. "
-                            "Save it as a GeoTIFF first.").format(layer=mask_layer.name())
-                )
-            feedback.pushInfo(self.tr("Reading mask raster '{layer}'…").format(layer=mask_layer.name()))
-            with self.engine_errors():
-                raster = mask_polygons(
-                    mask_layer.source(),
-                    study_union.bounds,
-                    bridge.crs_wkt(crs),
-                    mask_min,
-                    mask_max,
-                    source_crs=bridge.crs_wkt(mask_layer.crs()) if mask_layer.crs().isValid() else None,
-                    progress=self.progress_callback(feedback, 10, 50),
-                )
-            mask = raster.polygons
-            if raster.warped:
-                feedback.pushInfo(
-                    self.tr("Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.").format(
-                        crs=crs.authid(), rows=raster.shape[0], cols=raster.shape[1],
-                        size=format_number(raster.cell_area_m2 ** 0.5),
-                    )
-                )
-            if raster.uncovered_cells:
-                warnings.append(
-                    self.tr("Mask raster '{layer}' does not cover {n} of the {total} cells over the study "
-                            "area's extent; those cells count as NoData and are excluded.").format(
-                        layer=mask_layer.name(), n=raster.uncovered_cells, total=raster.total_cells
-                    )
-                )
-                feedback.pushWarning(warnings[-1])
-
-        with self.engine_errors():
-            result = frame_engine.build_frame(
-                study.geometries, exclusions, mask, edge_buffer,
-                progress=self.progress_callback(feedback, 50, 90),
             )
+            feedback.pushWarning(warnings[-1])
+        if mask_layer.providerType() != "gdal":
+            raise QgsProcessingException(
+                self.tr("Mask raster '{layer}' is not a file raster that GDAL can read. "
+                        "Save it as a GeoTIFF first.").format(layer=mask_layer.name())
+            )
+        feedback.pushInfo(self.tr("Reading mask raster '{layer}'…").format(layer=mask_layer.name()))
+        with self.engine_errors():
+            raster = mask_polygons(
+                mask_layer.source(),
+                study_union.bounds,
+                bridge.crs_wkt(crs),
+                mask_min,
+                mask_max,
+                source_crs=bridge.crs_wkt(mask_layer.crs()) if mask_layer.crs().isValid() else None,
+                progress=self.progress_callback(feedback, 10, 50),
+            )
+        if raster.warped:
+            feedback.pushInfo(
+                self.tr("Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.").format(
+                    crs=crs.authid(), rows=raster.shape[0], cols=raster.shape[1],
+                    size=format_number(raster.cell_area_m2 ** 0.5),
+                )
+            )
+        if raster.uncovered_cells:
+            warnings.append(
+                self.tr("Mask raster '{layer}' does not cover {n} of the {total} cells over the study "
+                        "area's extent; those cells count as NoData and are excluded.").format(
+                    layer=mask_layer.name(), n=raster.uncovered_cells, total=raster.total_cells
+                )
+            )
+            feedback.pushWarning(warnings[-1])
+        return raster
 
+    def _write_frame(self, parameters, context, feedback, result, crs):
+        """The frame as one multipolygon feature (frame_id, area_ha); returns the sink's id."""
         geometry = result.geometry
         if isinstance(geometry, Polygon):
             geometry = MultiPolygon([geometry])
@@ -246,123 +273,4 @@ class BuildFrame(PlotwiseAlgorithm):
                 pct=format_number(100 * result.kept_fraction),
             )
         )
-        feedback.setProgress(95)
-
-        report = self._report(
-            result, study_union, exclusions, mask, raster, crs, projected_from, warnings,
-            {
-                "study": study_name, "exclude": exclude_name,
-                "mask": mask_layer.name() if mask_layer is not None else None,
-                "mask_min": mask_min, "mask_max": mask_max, "edge": edge_buffer,
-            },
-        )
-        outputs = {self.OUTPUT: dest_id}
-        self.style_output(context, dest_id, "frame")
-        path = self.write_report(report, parameters, context, feedback)
-        if path:
-            outputs[self.REPORT] = path
-        feedback.setProgress(100)
-        return outputs
-
-    # -- report ----------------------------------------------------------------------
-    def _report(self, result, study_union, exclusions, mask, raster, crs, projected_from, warnings, inputs):
-        report = self.new_report(self.tr("Sampling frame"))
-        report.field_safety()
-        report.warnings(warnings)
-        study_ha = result.study_area_m2 / 1e4
-        report.key_figures([
-            (self.tr("study area (ha)"), format_number(study_ha)),
-            (self.tr("frame (ha)"), format_number(result.area_ha)),
-            (self.tr("kept"), f"{format_number(100 * result.kept_fraction)} %"),
-        ])
-        report.note(
-            self.tr("Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the "
-               "whole study area.").format(ha=format_number(result.area_ha))
-        )
-        report.section(self.tr("Area kept and area lost to each rule"))
-        rule_names = {
-            "exclude": self.tr("lost to the excluded polygons (EXCLUDE)"),
-            "mask": self.tr("lost to the raster mask (MASK outside the accepted range, or NoData)"),
-            "edge_buffer": self.tr("lost to the inward edge buffer (EDGE_BUFFER)"),
-        }
-        rows = [[self.tr("study area"), study_ha, 100.0]]
-        for loss in result.losses:
-            rows.append([rule_names[loss.rule], loss.area_ha, 100 * loss.area_m2 / result.study_area_m2])
-        rows.append([self.tr("sampling frame (kept)"), result.area_ha, 100 * result.kept_fraction])
-        report.table([self.tr("Item"), self.tr("Area (ha)"), self.tr("% of study area")], rows)
-        report.paragraph(
-            self.tr("Rules are applied in the order shown; each is charged only with area that was still in "
-               "the frame, so the frame and the areas lost add up to the study area.")
-        )
-        if raster is not None:
-            report.subsection(self.tr("Mask raster"))
-            report.table([self.tr("Item"), self.tr("Value")], [
-                [self.tr("cells tested over the study area's extent"), raster.total_cells],
-                [self.tr("cell size (m)"), raster.cell_area_m2 ** 0.5],
-                [self.tr("cells below the lowest accepted value"), raster.below_cells],
-                [self.tr("cells above the highest accepted value"), raster.above_cells],
-                [self.tr("NoData cells (including cells outside the raster)"), raster.nodata_cells],
-                [self.tr("reprojected on the fly (nearest neighbour)"), self.tr("yes") if raster.warped else self.tr("no")],
-            ])
-
-        report.section(self.tr("Map"))
-        report.figure(self._map(result, study_union, exclusions, mask), self.tr("Frame (filled), with the areas lost to each rule"))
-
-        def shown(value):
-            return self.tr("(none)") if value is None else value
-
-        crs_text = f"{crs.authid()} ({crs.description()})"
-        if projected_from:
-            crs_text += self.tr(", projected from {src} (UTM zone of the study area's centre)").format(src=projected_from)
-        report.parameters({
-            self.tr("Study area (INPUT)"): inputs["study"],
-            self.tr("Areas to exclude (EXCLUDE)"): shown(inputs["exclude"]),
-            self.tr("Mask raster (MASK)"): shown(inputs["mask"]),
-            self.tr("Lowest accepted mask value (MASK_MIN)"): shown(inputs["mask_min"]),
-            self.tr("Highest accepted mask value (MASK_MAX)"): shown(inputs["mask_max"]),
-            self.tr("Inward edge buffer (EDGE_BUFFER, m)"): inputs["edge"],
-            self.tr("CRS of the computation and the output"): crs_text,
-        })
-        return report
-
-    @staticmethod
-    def _for_screen(geometry, tolerance, max_ring_points=500):
-        """``geometry`` simplified until no ring has more than ``max_ring_points`` vertices.
-
-        Raster-cell outlines are staircases with many vertices; simplifying them (rather than
-        dropping vertices) keeps the map faithful at report size.
-        """
-        for _ in range(8):
-            simple = geometry.simplify(tolerance, preserve_topology=True)
-            rings = [r for p in getattr(simple, "geoms", [simple]) if p.geom_type == "Polygon"
-                     for r in (p.exterior, *p.interiors)]
-            if not rings or max(len(r.coords) for r in rings) <= max_ring_points:
-                return simple
-            tolerance *= 2.0
-        return simple
-
-    def _map(self, result, study_union, exclusions, mask):
-        minx, miny, maxx, maxy = study_union.bounds
-        tolerance = max(maxx - minx, maxy - miny) / 1800.0  # about half a pixel at 900 px
-
-        def for_display(geometries, already_shown=None):
-            # the part of the study area that this rule removed, simplified for the screen
-            if not geometries:
-                return ()
-            merged = frame_engine.dissolve(geometries).intersection(study_union)
-            if already_shown is not None and not already_shown.is_empty:
-                merged = merged.difference(already_shown)
-            merged = self._for_screen(merged, tolerance)
-            return (merged,) if not merged.is_empty else ()
-
-        layers = [MapLayer((self._for_screen(result.geometry, tolerance),),
-                           label=self.tr("sampling frame"), fill=ACCENT, stroke=ACCENT, opacity=0.55)]
-        if exclusions:
-            layers.append(MapLayer(for_display(exclusions), label=self.tr("excluded polygons"),
-                                   fill=MUTED, stroke=MUTED, opacity=0.6))
-        if mask:
-            shown = frame_engine.dissolve(exclusions) if exclusions else None
-            layers.append(MapLayer(for_display(mask, shown), label=self.tr("raster mask"),
-                                   fill=CAUTION_EDGE, stroke="none", opacity=0.6, stroke_width=0))
-        layers.append(MapLayer((study_union,), label=self.tr("study area boundary"), stroke=INK, stroke_width=1.5))
-        return map_svg(layers)
+        return dest_id
