@@ -1,6 +1,4 @@
 """plotwise:layout: sample units over a frame or its strata, with reserves and GPS waypoints."""
-import math
-
 import numpy as np
 from qgis.core import (
     QgsField,
@@ -13,34 +11,12 @@ from qgis.core import (
     QgsProcessingParameterFileDestination,
     QgsProcessingParameterNumber,
 )
-from shapely.geometry import LineString, Polygon
 
 from .. import compat
 from .. import bridge
-from ..engine import geometry
 from ..engine import layout as engine
-from ..report import MapLayer, category_colour, format_number, map_svg
-from ..report.style import INK, MUTED
+from ..report.layout import LayoutReportInputs, layout_report
 from .base import PlotwiseAlgorithm
-
-REFERENCES = (
-    "Robertson, B. L., Brown, J. A., McDonald, T. & Jaksons, P. (2013). BAS: Balanced acceptance "
-    "sampling of natural resources. Biometrics 69, 776-784.",
-    "Halton, J. H. (1960). On the efficiency of certain quasi-random sequences of points in evaluating "
-    "multi-dimensional integrals. Numerische Mathematik 2, 84-90.",
-    "Stevens, D. L. & Olsen, A. R. (2004). Spatially balanced sampling of natural resources. Journal of "
-    "the American Statistical Association 99, 262-278.",
-    "Cochran, W. G. (1977). Sampling Techniques, 3rd ed. Wiley (ch. 5 stratified, ch. 8 systematic sampling).",
-    "Cordy, C. B. (1993). An extension of the Horvitz-Thompson theorem to point sampling from a continuous "
-    "universe. Statistics & Probability Letters 18, 353-362.",
-    "Diggle, P. J. (2003). Statistical Analysis of Spatial Point Patterns, 2nd ed. Arnold (simple sequential inhibition).",
-    "Turk, G. (1990). Generating random points in triangles. In Graphics Gems, ed. A. Glassner, 24-28. Academic Press.",
-    "Gregoire, T. G. & Valentine, H. T. (2008). Sampling Strategies for Natural Resources and the Environment. "
-    "Chapman & Hall/CRC, ch. 10 (plus sampling at the edges).",
-)
-
-MAX_MAP_UNITS = 3000  # more units than this are drawn as a systematic subset on the report map
-
 
 class LayoutUnits(PlotwiseAlgorithm):
     """Draws sample units per stratum: simple random, systematic grid or spatially balanced."""
@@ -201,6 +177,34 @@ class LayoutUnits(PlotwiseAlgorithm):
         projected_from = source.sourceCrs().authid() if crs != source.sourceCrs() else None
         feedback.setProgress(2)
 
+        frame, result, warnings = self._draw_layout(source, crs, context, feedback, layer_name, stratum_field, n_field,
+                                                    n_units, spec, seeded)
+        with self.discard_on_failure(self.parameterAsOutputLayer(parameters, self.OUTPUT, context)):
+            dest_id = self._write_units(parameters, context, feedback, source, stratum_field, result, crs)
+        outputs = {self.OUTPUT: dest_id}
+        self.style_output(context, dest_id, "units")
+        gpx_path = self._write_gpx(parameters, context, feedback, result, crs)
+        if gpx_path:
+            outputs[self.OUTPUT_GPX] = gpx_path
+        feedback.setProgress(90)
+        for s in result.strata:
+            feedback.pushInfo(
+                self.tr("{stratum}: {n} primary and {r} reserve units").format(
+                    stratum=self._stratum_text(s.key), n=s.n_primary, r=s.n_reserve
+                )
+            )
+        inputs = LayoutReportInputs(frame=layer_name, seed=seeded.seed, crs=bridge.crs_label(crs),
+                                    stratum_field=stratum_field, n_field=n_field, n_units=n_units,
+                                    projected_from=projected_from)
+        report = layout_report(self.new_report(""), result, frame, inputs, warnings)
+        path = self.write_report(report, parameters, context, feedback)
+        if path:
+            outputs[self.REPORT] = path
+        feedback.setProgress(100)
+        return outputs
+
+    def _draw_layout(self, source, crs, context, feedback, layer_name, stratum_field, n_field, n_units, spec, seeded):
+        """Read the frame, prepare its strata and draw the units; returns ``(frame, layout, warnings)``."""
         records = bridge.read_features(  # the engine repairs what the host's validity check flags
             source, crs, context, feedback, [f for f in (stratum_field, n_field) if f], layer_name,
             repair=False, drop_empty=False, check_validity=True,
@@ -217,43 +221,25 @@ class LayoutUnits(PlotwiseAlgorithm):
                 n_values=records.attributes[n_field] if n_field else None,
                 n_units=n_units,
                 spec=spec,
-                stratum_field=self.tr("Stratum field '{field}' of layer '{layer}'").format(field=stratum_field, layer=layer_name),
+                stratum_field=self.tr("Stratum field '{field}' of layer '{layer}'").format(
+                    field=stratum_field, layer=layer_name),
                 n_field=self.tr("Units field '{field}' of layer '{layer}'").format(field=n_field, layer=layer_name),
                 valid=records.valid,
             )
             feedback.setProgress(30)
             result = engine.draw_layout(
-                frame, spec, seeded.generator, crs=bridge.crs_wkt(crs), progress=self.progress_callback(feedback, 30, 70)
+                frame, spec, seeded.generator, crs=bridge.crs_wkt(crs),
+                progress=self.progress_callback(feedback, 30, 70)
             )
         warnings = [self.tr("Layer '{layer}': {text}").format(layer=layer_name, text=self.translate_message(w))
                     for w in result.warnings]
         self.push_warnings(feedback, warnings)
         if len(result) == 0:
             raise QgsProcessingException(
-                self.tr("No unit could be placed in layer '{layer}'. Ask for more units or use another design.").format(layer=layer_name)
+                self.tr("No unit could be placed in layer '{layer}'. Ask for more units or use another design.").format(
+                    layer=layer_name)
             )
-
-        with self.discard_on_failure(self.parameterAsOutputLayer(parameters, self.OUTPUT, context)):
-            dest_id = self._write_units(parameters, context, feedback, source, stratum_field, result, crs)
-        outputs = {self.OUTPUT: dest_id}
-        self.style_output(context, dest_id, "units")
-        gpx_path = self._write_gpx(parameters, context, feedback, result, crs)
-        if gpx_path:
-            outputs[self.OUTPUT_GPX] = gpx_path
-        feedback.setProgress(90)
-        for s in result.strata:
-            feedback.pushInfo(
-                self.tr("{stratum}: {n} primary and {r} reserve units").format(
-                    stratum=self._stratum_text(s.key), n=s.n_primary, r=s.n_reserve
-                )
-            )
-        report = self._report(result, frame, spec, seeded.seed, crs, projected_from, warnings,
-                              layer_name, stratum_field, n_field, n_units)
-        path = self.write_report(report, parameters, context, feedback)
-        if path:
-            outputs[self.REPORT] = path
-        feedback.setProgress(100)
-        return outputs
+        return frame, result, warnings
 
     def _layout_spec(self, parameters, context):
         with self.engine_errors():
@@ -319,142 +305,3 @@ class LayoutUnits(PlotwiseAlgorithm):
         if not written:
             raise self.cancelled_error()
         return dest_id
-
-    # -- report ----------------------------------------------------------------------
-    def _report(self, result, frame, spec, seed, crs, projected_from, warnings, layer_name, stratum_field, n_field, n_units):
-        report = self.new_report(self.tr("Sample-unit layout"))
-        report.field_safety()
-        report.warnings(warnings)
-        primary = result.is_primary
-        report.key_figures([
-            (self.tr("primary units"), format_number(int(primary.sum()))),
-            (self.tr("reserve units"), format_number(int((~primary).sum()))),
-            (self.tr("strata"), format_number(len(result.strata))),
-            (self.tr("design"), self.engine_term(engine.DESIGNS[spec.design])),
-        ])
-        report.section(self.tr("Replacing units in the field"))
-        report.note(
-            self.tr("A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced "
-               "by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary "
-               "as not surveyed and why; never move a unit to a more convenient place, and never take a reserve "
-               "of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.")
-        )
-        report.section(self.tr("Units per stratum"))
-        systematic = spec.design == engine.SYSTEMATIC_GRID
-        header = [self.tr("Stratum"), self.tr("Area (ha)"), self.tr("Effective area (ha)"), self.tr("Units asked"), self.tr("Primary"),
-                  self.tr("Reserve"), self.tr("incl_p"), self.tr("weight")]
-        if systematic:
-            header += [self.tr("Grid spacing (m)"), self.tr("Grid rotation (°)")]
-        rows = []
-        for s in result.strata:
-            row = [self.tr("frame") if s.key is None else str(s.key), s.area / 1e4, s.effective_area / 1e4, s.n_requested,
-                   s.n_primary, s.n_reserve, s.incl_p, 1.0 / s.incl_p if s.incl_p and s.incl_p > 0 else None]
-            if systematic:
-                row += [s.spacing, s.rotation]
-            rows.append(row)
-        report.table(header, rows)
-        density = not (spec.unit_area > 0)
-        report.paragraph(
-            self.tr("incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is "
-               "the area in m² each unit stands for (Cordy 1993).") if density else
-            self.tr("incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.")
-        )
-        if not spec.inside and spec.reach > 0:
-            report.paragraph(
-                self.tr("Plus sampling: centres were drawn over each stratum grown by {r} m (the unit's reach), so "
-                   "units near the edge reach over it, and some centres lie outside their stratum. Survey only the "
-                   "part of each unit inside its own stratum and count only the animals there (the map shows the "
-                   "strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or "
-                   "unsafe ground to reach a centre: survey the part inside the stratum from within it. The "
-                   "effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire & "
-                   "Valentine 2008, ch. 10).").format(r=format_number(spec.reach))
-            )
-        if spec.inside and spec.radius > 0:
-            report.paragraph(
-                self.tr("Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m "
-                   "(the unit's circumscribing radius). The effective area is that shrunk area and the inclusion "
-                   "probabilities use it; the edge strip is covered less often, which the report of the estimate "
-                   "should mention.").format(r=format_number(spec.radius))
-            )
-        if systematic:
-            report.paragraph(
-                self.tr("The grid spacing is √(A/n) for the asked n; with a random start the realised number of units "
-                   "varies around n (column Primary) while the inclusion density stays n/A everywhere.")
-            )
-        report.section(self.tr("Map"))
-        report.figure(self._map(result, frame), self.tr("Strata (filled), primary units (dark) and reserve units (light)"))
-        report.section(self.tr("Method"))
-        report.paragraph(self._method_text(spec))
-        crs_text = f"{crs.authid()} ({crs.description()})"
-        if projected_from:
-            crs_text += self.tr(", projected from {src} (UTM zone of the frame's centre)").format(src=projected_from)
-        report.parameters({
-            self.tr("Frame (FRAME)"): layer_name,
-            self.tr("Stratum field (STRATUM_FIELD)"): stratum_field or self.tr("(none: one stratum)"),
-            self.tr("Units per stratum field (N_FIELD)"): n_field or self.tr("(none)"),
-            self.tr("Total units (N_UNITS)"): n_units if not n_field else self.tr("(not used)"),
-            self.tr("Design (DESIGN)"): self.engine_term(engine.DESIGNS[spec.design]),
-            self.tr("Unit shape (SHAPE)"): self.engine_term(engine.SHAPES[spec.shape]),
-            self.tr("Unit size (SIZE, m)"): spec.size,
-            self.tr("Bearing (BEARING, degrees)"): self.tr("random") if spec.bearing == engine.RANDOM_BEARING else spec.bearing,
-            self.tr("Keep inside (INSIDE)"): self.tr("yes") if spec.inside else self.tr("no"),
-            self.tr("Minimum spacing (MIN_SPACING, m)"): spec.min_spacing,
-            self.tr("Reserves per stratum (RESERVE)"): spec.reserve,
-            self.tr("Seed (SEED)"): seed,
-            self.tr("CRS of the computation and the output"): crs_text,
-        })
-        report.references(REFERENCES)
-        return report
-
-    def _method_text(self, spec):
-        text = {
-            engine.SIMPLE_RANDOM: self.tr("Simple random: every centre is an independent uniform point of its stratum (a "
-                                     "triangle chosen with probability proportional to its area, then a uniform point in it)."),
-            engine.SYSTEMATIC_GRID: self.tr("Systematic grid: a square grid with a uniform random start in one grid cell "
-                                       "and a rotation, per stratum; reserves are the centres of the grid cells, in random order."),
-            engine.SPATIALLY_BALANCED: self.tr("Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). "
-                                          "A Halton sequence in bases 2 and 3 is laid over the stratum's bounding box and "
-                                          "its points inside the stratum are kept in order. The random start is a uniform "
-                                          "random point of the stratum, so that every location has the same chance for "
-                                          "any sample size; reserves are the next points of the same sequence."),
-        }[spec.design]
-        if spec.min_spacing > 0:
-            text += " " + self.tr("A candidate closer than {d} m to an accepted unit is passed over (simple sequential "
-                             "inhibition), which lowers the chance of locations next to units slightly.").format(
-                d=format_number(spec.min_spacing))
-        return text
-
-    def _map(self, result, frame):
-        layers = []
-        minx, miny, maxx, maxy = np.array([s.geometry.bounds for s in frame.strata]).T
-        pixel = max(maxx.max() - minx.min(), maxy.max() - miny.min(), 1.0) / 900.0
-        geoms = []
-        for s in frame.strata:  # thinned, then a fast Douglas-Peucker pass: the map needs half a pixel
-            quick = geometry.thinned_outline(s.geometry).simplify(0.5 * pixel, preserve_topology=False)
-            geoms.append(quick if not quick.is_empty else s.geometry)
-        fills = tuple(category_colour(i) for i in range(len(geoms)))
-        legend = tuple((self._stratum_text(s.key), category_colour(i)) for i, s in enumerate(frame.strata))
-        layers.append(MapLayer(tuple(geoms), fills=fills, fill=fills[0] if fills else "none", stroke=MUTED,
-                               stroke_width=0.8, opacity=0.35, legend=legend if len(geoms) > 1 else ()))
-        primary = result.is_primary
-        small = 2 * result.spec.radius < 6 * pixel  # plots under a few pixels are drawn as their centres
-        for role_mask, label, fill in ((primary, self.tr("primary units"), INK),
-                                       (~primary, self.tr("reserve units"), "#ffffff")):
-            idx = np.flatnonzero(role_mask)
-            if len(idx) > MAX_MAP_UNITS:
-                idx = idx[:: int(math.ceil(len(idx) / MAX_MAP_UNITS))]
-            if len(idx) == 0:
-                continue
-            outlines = ()
-            if result.spec.shape == engine.LINE or (result.spec.shape in (engine.SQUARE, engine.CIRCLE) and not small):
-                outlines = tuple(self._unit_shape(result, i) for i in idx)
-            layers.append(MapLayer(outlines, label=label, fill=fill, stroke=INK, stroke_width=0.8, point_radius=2.5,
-                                   points=result.centres[idx] if not outlines else None))
-        return map_svg(layers)
-
-    @staticmethod
-    def _unit_shape(result, i):
-        xy = result.outlines[i]
-        if result.spec.shape == engine.LINE:
-            return LineString(xy)
-        return Polygon(xy)

@@ -10,8 +10,8 @@ import numpy as np
 
 from ..engine.errors import QT_TRANSLATE_NOOP
 from .html import Report, format_number
-from .style import INK, MUTED
-from .svg import MapLayer, category_colour, map_svg
+from .style import INK
+from .svg import MapLayer, map_svg, strata_layer
 
 REFERENCES = (
     "Sollmann, R., Gardner, B. & Belant, J. L. (2012). How does spatial study design influence density estimates "
@@ -236,18 +236,7 @@ def _method_text(spec, report):
 def stations_map(result, report, max_points=5000):
     """Strata filled by category, primary stations dark, reserves light."""
     frame = result.frame
-    bounds = np.array([s.geometry.bounds for s in frame.strata])
-    pixel = max(bounds[:, 2].max() - bounds[:, 0].min(), bounds[:, 3].max() - bounds[:, 1].min(), 1.0) / 900.0
-    geoms = []
-    for s in frame.strata:
-        quick = s.geometry.simplify(0.5 * pixel, preserve_topology=False)
-        geoms.append(quick if not quick.is_empty else s.geometry)
-    fills = tuple(category_colour(i) for i in range(len(geoms)))
-    names = [report.translate("PlotwiseReport", "the frame") if s.key is None else
-             report.translate("PlotwiseReport", "stratum {key}").format(key=s.key) for s in frame.strata]
-    legend = tuple((name, category_colour(i)) for i, name in enumerate(names))
-    layers = [MapLayer(tuple(geoms), fills=fills, fill=fills[0], stroke=MUTED, stroke_width=0.8, opacity=0.35,
-                       legend=legend if len(geoms) > 1 else ())]
+    layers = [strata_layer(report, frame.strata)[0]]
     primary = result.is_primary
     labels = (report.translate("PlotwiseReport", "primary stations"),
               report.translate("PlotwiseReport", "reserve stations"))

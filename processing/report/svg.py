@@ -160,6 +160,34 @@ def map_svg(layers, width=900, height=None, title=None, scale_bar=True):
     return "".join(out)
 
 
+def stratum_name(report, key):
+    """A stratum as the reports name it: "stratum 2", or "the frame" for a frame without strata (key None)."""
+    if key is None:
+        return report.translate("PlotwiseReport", "the frame")
+    return report.translate("PlotwiseReport", "stratum {key}").format(key=key)
+
+
+def strata_layer(report, strata, thin=None, width=900):
+    """The strata (objects with ``geometry`` and ``key``) filled by category, as one map layer, and the
+    map's pixel (m).
+
+    Each outline is simplified to half a pixel of a ``width``-pixel map (a fast Douglas-Peucker pass, after
+    ``thin(geometry)`` when given); the legend names the strata (none for a single stratum).
+    """
+    bounds = np.array([s.geometry.bounds for s in strata])
+    pixel = max(bounds[:, 2].max() - bounds[:, 0].min(), bounds[:, 3].max() - bounds[:, 1].min(), 1.0) / width
+    geoms = []
+    for s in strata:
+        outline = thin(s.geometry) if thin is not None else s.geometry
+        quick = outline.simplify(0.5 * pixel, preserve_topology=False)
+        geoms.append(quick if not quick.is_empty else s.geometry)
+    fills = tuple(category_colour(i) for i in range(len(geoms)))
+    legend = tuple((stratum_name(report, s.key), category_colour(i)) for i, s in enumerate(strata))
+    layer = MapLayer(tuple(geoms), fills=fills, fill=fills[0] if fills else "none", stroke=MUTED, stroke_width=0.8,
+                     opacity=0.35, legend=legend if len(geoms) > 1 else ())
+    return layer, pixel
+
+
 def _nice_length(metres):
     """A round length (1, 2 or 5 × 10^k metres) near ``metres``."""
     if metres <= 0:
