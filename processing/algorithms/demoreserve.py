@@ -11,8 +11,7 @@ from qgis.core import (
 from .. import compat
 from .. import bridge
 from ..engine import demo_reserve
-from ..report import MapLayer, map_svg
-from ..report.style import CATEGORY_COLOURS
+from ..report.demoreserve import demoreserve_report
 from .base import PlotwiseAlgorithm
 
 
@@ -125,7 +124,8 @@ class DemoReserve(PlotwiseAlgorithm):
                 g=reserve.n_groups, e=reserve.expected_total,
             )
         )
-        results[self.REPORT] = self.write_report(self._report(reserve, cell_size, crs), parameters, context, feedback)
+        report = demoreserve_report(self.new_report(""), reserve, cell_size, bridge.crs_label(crs))
+        results[self.REPORT] = self.write_report(report, parameters, context, feedback)
         for key, style in ((self.OUTPUT_AREA, "outline"), (self.OUTPUT_EXCLUDED, "excluded"), (self.OUTPUT_ELEVATION, "elevation"),
                            (self.OUTPUT_GREENNESS, "greenness"), (self.OUTPUT_INTENSITY, "intensity"), (self.OUTPUT_ANIMALS, "animals")):
             if results.get(key):
@@ -135,53 +135,3 @@ class DemoReserve(PlotwiseAlgorithm):
     def _check_sink(self, sink, key):
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError({}, key))
-
-    def _report(self, reserve, cell_size, crs):
-        report = self.new_report(self.tr("Demo reserve: {name}").format(name=demo_reserve.RESERVE_NAME))
-        report.note(self.tr(
-            "Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist."
-        ).format(name=demo_reserve.RESERVE_NAME, desc=self.engine_term(demo_reserve.SPECIES_DESCRIPTION)))
-        report.key_figures([
-            (self.tr("reserve area"), f"{reserve.boundary.area / 1e6:,.1f} km²"),
-            (self.tr("true number of velmar"), f"{reserve.true_total:,}"),
-            (self.tr("expected number"), f"{reserve.expected_total:,.0f} ± {reserve.total_variance ** 0.5:,.0f} (1 SD)"),
-            (self.tr("groups"), f"{reserve.n_groups:,}"),
-        ])
-        report.parameters({
-            self.tr("Seed"): reserve.seed,
-            self.tr("Raster cell size (m)"): cell_size,
-            self.tr("CRS"): f"{crs.authid()} ({crs.description()})",
-            self.tr("Mean group size (mu)"): reserve.mean_group_size,
-            self.tr("Group spread, SD of members around the centre (m)"): reserve.group_spread,
-        })
-        report.section(self.tr("Areas"))
-        report.table(
-            [self.tr("Part"), self.tr("Area (km²)")],
-            [[self.tr("Reserve"), reserve.boundary.area / 1e6], [self.tr("Lake (excluded)"), reserve.lake.area / 1e6],
-             [self.tr("Private inholding (excluded)"), reserve.inholding.area / 1e6]],
-        )
-        report.section(self.tr("Map"))
-        from shapely.geometry import MultiPoint
-
-        report.figure(map_svg([
-            MapLayer((reserve.boundary,), label=self.tr("Reserve"), fill="#eef3e8", stroke="#1f3a44", stroke_width=1.5),
-            MapLayer((reserve.lake,), label=self.tr("Lake"), fill="#9cc3d9", stroke="#3b6e8f"),
-            MapLayer((reserve.inholding,), label=self.tr("Private inholding"), fill="#e6d3b3", stroke="#a8875b"),
-            MapLayer((MultiPoint([tuple(p) for p in reserve.animals_xy[::3]]),) if reserve.true_total else (),
-                     label=self.tr("Velmar (every third animal)"), fill=CATEGORY_COLOURS[3], stroke=CATEGORY_COLOURS[3], point_radius=1.2),
-        ]), self.tr("Hollin Ridge Reserve, the excluded areas and the simulated animals."))
-        report.section(self.tr("How the population was simulated"))
-        report.paragraph(self.tr(
-            "Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); "
-            "their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). "
-            "Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal "
-            "displacement of {sigma:g} m; members that fall off the habitat are not part of the population. "
-            "This is a Thomas cluster process. Its expected total and variance are computed from the intensity "
-            "surface on the raster grid."
-        ).format(mu=reserve.mean_group_size, sigma=reserve.group_spread))
-        report.references([
-            "Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25.",
-            "Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns. 3rd ed. CRC Press.",
-        ])
-        report.field_safety()
-        return report
