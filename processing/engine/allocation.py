@@ -751,17 +751,8 @@ def allocate(
                        min_per_stratum, ids, names, fpc)
     used, warnings = _method_applied(inp)
     warnings = list(inp.warnings) + warnings
-    scores = allocation_scores(used, inp.area, inp.s, inp.c)
-    if inp.target == "target_cv":
-        n, x = _allocation_for_cv(float(inp.target_cv), scores, inp.area, inp.unit_area, inp.s, inp.m, inp.lower,
-                                  inp.upper, inp.fpc, inp.names)
-    elif inp.target == "budget":
-        n, x, more = _allocation_for_budget(inp, scores)
-        warnings += more
-    else:
-        n, x, more = _allocation_for_total(inp, scores)
-        warnings += more
-    warnings += _result_warnings(inp, n, x)
+    n, x, more = _units_for_target(inp, allocation_scores(used, inp.area, inp.s, inp.c))
+    warnings += more + _result_warnings(inp, n, x)
     total = int(n.sum())
     precision = expected_precision(n, inp.area, inp.unit_area, inp.s, inp.m, inp.fpc)
     comparison = compare_methods(total, inp.area, inp.unit_area, inp.s, inp.m, inp.lower, inp.upper,
@@ -772,6 +763,17 @@ def allocate(
         cost=float(inp.fixed_cost + np.sum(inp.c * n)) if inp.c is not None else np.nan,
         precision=precision, comparison=comparison, warnings=tuple(warnings), fpc=inp.fpc,
     )
+
+
+def _units_for_target(inp, scores):
+    """Whole and continuous units per stratum for the run's target (target CV, budget or total), and warnings."""
+    if inp.target == "target_cv":
+        n, x = _allocation_for_cv(float(inp.target_cv), scores, inp.area, inp.unit_area, inp.s, inp.m, inp.lower,
+                                  inp.upper, inp.fpc, inp.names)
+        return n, x, []
+    if inp.target == "budget":
+        return _allocation_for_budget(inp, scores)
+    return _allocation_for_total(inp, scores)
 
 
 def _allocation_for_cv(target_cv, scores, area, unit_area, s, m, lower, upper, fpc, names):

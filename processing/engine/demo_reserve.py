@@ -169,6 +169,56 @@ def cell_centres(geotransform, shape):
     return np.meshgrid(xs, ys)
 
 
+def reserve_grid(boundary, cell_size, margin=1500.0):
+    """The rasters' grid: ``margin`` m around the reserve, snapped to ``cell_size``; ``(geotransform, x, y)``
+    with the cell centres' coordinates."""
+    minx, miny, maxx, maxy = boundary.bounds
+    minx, miny = np.floor((minx - margin) / cell_size) * cell_size, np.floor((miny - margin) / cell_size) * cell_size
+    maxx, maxy = np.ceil((maxx + margin) / cell_size) * cell_size, np.ceil((maxy + margin) / cell_size) * cell_size
+    cols, rows = int(round((maxx - minx) / cell_size)), int(round((maxy - miny) / cell_size))
+    geotransform = (minx, cell_size, 0.0, maxy, 0.0, -cell_size)
+    xx, yy = cell_centres(geotransform, (rows, cols))
+    return geotransform, xx, yy
+
+
+def terrain_and_greenness(rng, xx, yy, boundary, progress=None):
+    """Elevation (m: fractal terrain and an escarpment) and greenness (0–1, falling with relief, plus texture)."""
+    terrain = fractal_surface(rng, xx, yy)
+    elevation = 1180.0 + 190.0 * terrain + escarpment(rng, xx, yy, boundary)
+    _check(progress, 0.4)
+    texture = fractal_surface(rng, xx, yy, beta=2.4, shortest=150.0, longest=6000.0)
+    relief = (elevation - elevation.min()) / np.ptp(elevation)
+    greenness = np.clip(0.78 - 0.5 * relief + 0.07 * texture, 0.02, 0.98)
+    return elevation, greenness
+
+
+def group_centre_intensity(greenness, elevation, habitat, cell_area, mu):
+    """kappa(x), groups per m²: proportional to exp(0.9 z_greenness − 0.6 z_elevation) on the habitat,
+    scaled so that the expected number of animals before edge losses is TARGET_ANIMALS."""
+    z_green = (greenness - greenness[habitat].mean()) / greenness[habitat].std()
+    z_elev = (elevation - elevation[habitat].mean()) / elevation[habitat].std()
+    log_relative = 0.9 * z_green - 0.6 * z_elev
+    relative = np.where(habitat, np.exp(log_relative), 0.0)
+    return relative * (TARGET_ANIMALS / mu) / (relative.sum() * cell_area)
+
+
+def thomas_animals(rng, xx, yy, group_expectation, cell_size, mu, sigma):
+    """One realisation of the Thomas process: Poisson groups per cell (uniform within the cell), a Poisson
+    number of members (mean ``mu``) per group, normal displacements (SD ``sigma`` m) around the centre.
+
+    Returns ``(x, y, group index, number of groups)`` of every member, before the habitat is applied.
+    """
+    groups_per_cell = rng.poisson(group_expectation.ravel())
+    cell_index = np.repeat(np.arange(groups_per_cell.size), groups_per_cell)
+    gx = xx.ravel()[cell_index] + rng.uniform(-0.5, 0.5, cell_index.size) * cell_size
+    gy = yy.ravel()[cell_index] + rng.uniform(-0.5, 0.5, cell_index.size) * cell_size
+    members = rng.poisson(mu, cell_index.size)
+    group_of = np.repeat(np.arange(cell_index.size), members)
+    ax = gx[group_of] + rng.normal(0.0, sigma, group_of.size)
+    ay = gy[group_of] + rng.normal(0.0, sigma, group_of.size)
+    return ax, ay, group_of, int(cell_index.size)
+
+
 def build_demo_reserve(rng, seed, cell_size=50.0, progress=None):
     """Build the whole scenario from one generator.
 
@@ -187,51 +237,25 @@ def build_demo_reserve(rng, seed, cell_size=50.0, progress=None):
     boundary = reserve_boundary(rng, area_km2)
     lake = lake_polygon(rng, boundary)
     inholding = inholding_polygon(rng, boundary)
-
-    margin = 1500.0
-    minx, miny, maxx, maxy = boundary.bounds
-    minx, miny = np.floor((minx - margin) / cell_size) * cell_size, np.floor((miny - margin) / cell_size) * cell_size
-    maxx, maxy = np.ceil((maxx + margin) / cell_size) * cell_size, np.ceil((maxy + margin) / cell_size) * cell_size
-    cols, rows = int(round((maxx - minx) / cell_size)), int(round((maxy - miny) / cell_size))
-    geotransform = (minx, cell_size, 0.0, maxy, 0.0, -cell_size)
-    xx, yy = cell_centres(geotransform, (rows, cols))
+    geotransform, xx, yy = reserve_grid(boundary, cell_size)
     _check(progress, 0.1)
-
-    terrain = fractal_surface(rng, xx, yy)
-    elevation = 1180.0 + 190.0 * terrain + escarpment(rng, xx, yy, boundary)
-    _check(progress, 0.4)
-    texture = fractal_surface(rng, xx, yy, beta=2.4, shortest=150.0, longest=6000.0)
-    relief = (elevation - elevation.min()) / np.ptp(elevation)
-    greenness = np.clip(0.78 - 0.5 * relief + 0.07 * texture, 0.02, 0.98)
+    elevation, greenness = terrain_and_greenness(rng, xx, yy, boundary, progress)
 
     inside = contains_xy(boundary, xx.ravel(), yy.ravel()).reshape(xx.shape)
     in_lake = contains_xy(lake, xx.ravel(), yy.ravel()).reshape(xx.shape)
     habitat = inside & ~in_lake
-
-    # group-centre intensity: rises with greenness, falls with elevation (standardised)
-    z_green = (greenness - greenness[habitat].mean()) / greenness[habitat].std()
-    z_elev = (elevation - elevation[habitat].mean()) / elevation[habitat].std()
-    log_relative = 0.9 * z_green - 0.6 * z_elev
-    relative = np.where(habitat, np.exp(log_relative), 0.0)
     cell_area = cell_size * cell_size
     mu, sigma = MEAN_GROUP_SIZE, GROUP_SPREAD_M
-    kappa = relative * (TARGET_ANIMALS / mu) / (relative.sum() * cell_area)  # groups per m²
+    kappa = group_centre_intensity(greenness, elevation, habitat, cell_area, mu)
 
+    # moments of the Thomas process: members off the habitat are lost (q, the kernel's share on habitat)
     q = habitat_fraction(habitat, sigma / cell_size)
     group_expectation = kappa * cell_area  # expected groups per cell
     expected_total = float(np.sum(group_expectation * mu * q))
     total_variance = float(np.sum(group_expectation * (mu * q + (mu * q) ** 2)))
     intensity = ndimage.gaussian_filter(kappa * mu, sigma / cell_size, mode="constant", truncate=4.0) * habitat * 1e6
 
-    # realise: groups per cell, uniform within the cell; then members around each centre
-    groups_per_cell = rng.poisson(group_expectation.ravel())
-    cell_index = np.repeat(np.arange(groups_per_cell.size), groups_per_cell)
-    gx = xx.ravel()[cell_index] + rng.uniform(-0.5, 0.5, cell_index.size) * cell_size
-    gy = yy.ravel()[cell_index] + rng.uniform(-0.5, 0.5, cell_index.size) * cell_size
-    members = rng.poisson(mu, cell_index.size)
-    group_of = np.repeat(np.arange(cell_index.size), members)
-    ax = gx[group_of] + rng.normal(0.0, sigma, group_of.size)
-    ay = gy[group_of] + rng.normal(0.0, sigma, group_of.size)
+    ax, ay, group_of, n_groups = thomas_animals(rng, xx, yy, group_expectation, cell_size, mu, sigma)
     keep = contains_xy(boundary, ax, ay) & ~contains_xy(lake, ax, ay)
     _check(progress, 0.9)
 
@@ -247,7 +271,7 @@ def build_demo_reserve(rng, seed, cell_size=50.0, progress=None):
         intensity=intensity.astype(np.float32),
         animals_xy=np.column_stack([ax[keep], ay[keep]]),
         group_ids=group_of[keep] + 1,
-        n_groups=int(cell_index.size),
+        n_groups=n_groups,
         expected_total=expected_total,
         total_variance=total_variance,
         mean_group_size=mu,

@@ -1307,35 +1307,11 @@ def _rescaled_resamples(y_pool, a_pool, estimate, scale, n_bootstrap, rng, chunk
     return out
 
 
-def estimate_density(
-    counts,
-    unit_areas,
-    strata,
-    stratum_areas,
-    *,
-    unit_ids=None,
-    confidence=0.95,
-    ci_method=CI_T,
-    fpc=False,
-    detection_p=1.0,
-    detection_se=0.0,
-    detection_df=0.0,
-    target_cv=None,
-    variance_method=VARIANCE_SRS,
-    coords=None,
-    presence=False,
-    drop_empty_strata=False,
-    neighbours=None,
-    roles=None,
-    designs=None,
-    edges=None,
-    incl_p=None,
-    expansion_areas=None,
-    layer="units",
-    rng=None,
-    n_bootstrap=MIN_BOOTSTRAP,
-    progress=None,
-):
+def estimate_density(counts, unit_areas, strata, stratum_areas, *, unit_ids=None, confidence=0.95, ci_method=CI_T,
+                     fpc=False, detection_p=1.0, detection_se=0.0, detection_df=0.0, target_cv=None,
+                     variance_method=VARIANCE_SRS, coords=None, presence=False, drop_empty_strata=False,
+                     neighbours=None, roles=None, designs=None, edges=None, incl_p=None, expansion_areas=None,
+                     layer="units", rng=None, n_bootstrap=MIN_BOOTSTRAP, progress=None):
     """Stratified density and abundance with standard errors and intervals.
 
     Parameters
@@ -1405,6 +1381,12 @@ def estimate_density(
     inp = _estimate_iv(counts, unit_areas, strata, stratum_areas, unit_ids=unit_ids, settings=settings,
                        coords=coords, drop_empty_strata=drop_empty_strata, neighbours=neighbours, roles=roles,
                        designs=designs, edges=edges, incl_p=incl_p, expansion_areas=expansion_areas, layer=layer)
+    return _stratified_estimate(inp, rng, progress)
+
+
+def _stratified_estimate(inp, rng, progress):
+    """The steps of :func:`estimate_density` on checked input: stratum sums, count variances, the bootstrap
+    when asked for, the stratum and overall rows, the next survey's sample size, the warnings."""
     sums = stratum_sums(inp)
     var = count_variances(inp, sums)
     if progress is not None and progress(0.2):

@@ -218,6 +218,40 @@ def build_frame(study_area, exclusions=None, mask=None, edge_buffer=0.0, progres
         If the study area has no area, ``edge_buffer`` is negative, or a rule
         removes everything that was left (the message names the rule).
     """
+    inp = _build_frame_iv(study_area, exclusions, mask, edge_buffer, progress)
+    frame = inp.study
+    losses = []
+    for k, (rule, geoms) in enumerate(inp.steps):
+        _check_cancel(progress, (k + 0.1) / (len(inp.steps) + 1))
+        before = float(frame.area)
+        frame = _apply_rule(frame, rule, geoms, inp)
+        after = float(frame.area) if not frame.is_empty else 0.0
+        losses.append(FrameLoss(rule, _RULE_LABEL[rule], before - after))
+        if frame.is_empty or after <= 0.0:
+            raise InputError(_emptied_message(rule, before, inp.edge_buffer, inp.study))
+    _check_cancel(progress, 1.0)
+    if not frame.is_valid:
+        frame = valid_polygonal(frame)
+    return SamplingFrame(
+        geometry=frame,
+        study_area_m2=inp.study_m2,
+        area_m2=float(frame.area),
+        losses=tuple(losses),
+        edge_buffer_m=inp.edge_buffer,
+    )
+
+
+@dataclass(frozen=True)
+class _FrameInput:
+    """The checked inputs of :func:`build_frame`: the dissolved study area and the rules to apply, in order."""
+
+    study: BaseGeometry
+    study_m2: float
+    steps: tuple  # (rule, geometries or None)
+    edge_buffer: float
+
+
+def _build_frame_iv(study_area, exclusions, mask, edge_buffer, progress):
     edge_buffer = float(edge_buffer or 0.0)
     if not np.isfinite(edge_buffer) or edge_buffer < 0:
         raise InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
@@ -231,9 +265,6 @@ def build_frame(study_area, exclusions=None, mask=None, edge_buffer=0.0, progres
             QT_TRANSLATE_NOOP("PlotwiseEngine", "The study area (INPUT) has no polygon with a positive area. "
             "Check that the layer holds polygons and is in a projected CRS in metres.")
         ))
-
-    frame = study
-    losses = []
     steps = []
     if exclusions is not None:
         steps.append(("exclude", exclusions))
@@ -241,34 +272,23 @@ def build_frame(study_area, exclusions=None, mask=None, edge_buffer=0.0, progres
         steps.append(("mask", mask))
     if edge_buffer > 0:
         steps.append(("edge_buffer", None))
+    return _FrameInput(study, study_m2, tuple(steps), edge_buffer)
 
-    for k, (rule, geoms) in enumerate(steps):
-        _check_cancel(progress, (k + 0.1) / (len(steps) + 1))
-        before = float(frame.area)
-        if rule == "edge_buffer":
-            inner = polygonal_part(study.buffer(-edge_buffer))
-            frame = polygonal_part(frame.intersection(inner)) if not inner.is_empty else Polygon()
-        else:
-            removed = dissolve(geoms)
-            if not removed.is_empty:
-                frame = polygonal_part(frame.difference(removed))
-        # an overlay leaves slivers where edges nearly coincide (e.g. layers reprojected from other CRS):
-        # parts under 1 m² are no frame, and count as lost to the rule that cut them off
-        frame, _ = without_slivers(frame)
-        after = float(frame.area) if not frame.is_empty else 0.0
-        losses.append(FrameLoss(rule, _RULE_LABEL[rule], before - after))
-        if frame.is_empty or after <= 0.0:
-            raise InputError(_emptied_message(rule, before, edge_buffer, study))
-    _check_cancel(progress, 1.0)
-    if not frame.is_valid:
-        frame = valid_polygonal(frame)
-    return SamplingFrame(
-        geometry=frame,
-        study_area_m2=study_m2,
-        area_m2=float(frame.area),
-        losses=tuple(losses),
-        edge_buffer_m=edge_buffer,
-    )
+
+def _apply_rule(frame, rule, geoms, inp):
+    """The frame after one rule: the rule's polygons removed, or the part farther than the edge buffer from
+    the study area's boundary kept."""
+    if rule == "edge_buffer":
+        inner = polygonal_part(inp.study.buffer(-inp.edge_buffer))
+        frame = polygonal_part(frame.intersection(inner)) if not inner.is_empty else Polygon()
+    else:
+        removed = dissolve(geoms)
+        if not removed.is_empty:
+            frame = polygonal_part(frame.difference(removed))
+    # an overlay leaves slivers where edges nearly coincide (e.g. layers reprojected from other CRS):
+    # parts under 1 m² are no frame, and count as lost to the rule that cut them off
+    frame, _ = without_slivers(frame)
+    return frame
 
 
 def _emptied_message(rule, before_m2, edge_buffer, study):
