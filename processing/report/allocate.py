@@ -46,46 +46,75 @@ def method_names_of(report):
 
 def allocate_report(report, result, labels, inputs, warnings):
     """Fill ``report`` with the allocation (named fields of :class:`engine.allocation.Allocation`); returns it."""
-    layer, crs, unit_area_m2 = inputs.layer, inputs.crs, inputs.unit_area_m2
-    sd_field, sd_proxy, mean_field, cost_field = inputs.sd_field, inputs.sd_proxy, inputs.mean_field, inputs.cost_field
-    cost_in_days, settings = inputs.cost_in_days, inputs.settings
-    p = result.precision
-    with_mean = mean_field is not None
-    with_sd = sd_field is not None
-    # density SE per km² (areas are in ha in the engine)
-    se_km2 = p.se_density / KM2_PER_HA
     report.title = report.translate("PlotwiseReport", "Allocation of survey effort")
-    method_names = method_names_of(report)
-    cost_unit = (
-        report.translate("PlotwiseReport", "field days")
-        if cost_in_days
-        else report.translate("PlotwiseReport", "cost units")
+    _key_figures(report, result, inputs)
+    _parameters(report, result, inputs)
+    report.warnings(warnings)
+    _units_per_stratum(report, result, labels, inputs)
+    report.figure(
+        svg.bar_chart_svg(
+            [str(label) for label in labels],
+            [int(v) for v in result.n],
+            report.translate("PlotwiseReport", "units per stratum"),
+        ),
+        report.translate("PlotwiseReport", "Units allocated to each stratum"),
     )
+    _precision_and_cost(report, result, inputs)
+    _methods_compared(report, result, labels, inputs)
+    report.references(REFERENCES)
+    report.field_safety()
+    return report
+
+
+def _cost_unit(report, inputs):
+    if inputs.cost_in_days:
+        return report.translate("PlotwiseReport", "field days")
+    return report.translate("PlotwiseReport", "cost units")
+
+
+def _se_label(report, inputs):
+    if inputs.sd_proxy:
+        return report.translate("PlotwiseReport", "SE of mean per unit (covariate units)")
+    return report.translate("PlotwiseReport", "SE of mean count per unit")
+
+
+def _key_figures(report, result, inputs):
+    p = result.precision
     figures = [
         (report.translate("PlotwiseReport", "units in total"), f"{result.total:,}"),
-        (report.translate("PlotwiseReport", "method"), method_names[result.method_used]),
+        (report.translate("PlotwiseReport", "method"), method_names_of(report)[result.method_used]),
     ]
-    if with_mean and np.isfinite(p.cv):
+    if inputs.mean_field is not None and np.isfinite(p.cv):
         figures.append((report.translate("PlotwiseReport", "expected CV of the overall density"), f"{p.cv:.3f}"))
-    if cost_field:
+    if inputs.cost_field:
         figures.append(
             (
                 report.translate("PlotwiseReport", "field days needed")
-                if cost_in_days
+                if inputs.cost_in_days
                 else report.translate("PlotwiseReport", "cost"),
                 f"{result.cost:,.1f}",
             )
         )
     report.key_figures(figures)
+
+
+def _parameters(report, result, inputs):
+    settings, cost_field = inputs.settings, inputs.cost_field
+    method_names = method_names_of(report)
     targets = {
         "total": report.translate("PlotwiseReport", "a total number of units"),
         "budget": report.translate("PlotwiseReport", "a budget"),
         "target_cv": report.translate("PlotwiseReport", "a target CV"),
     }
+    sd_text = "–"
+    if inputs.sd_field is not None:
+        proxy = report.translate("PlotwiseReport", " (covariate proxy)") if inputs.sd_proxy else ""
+        sd_text = inputs.sd_field + proxy
+    yes, no = report.translate("PlotwiseReport", "yes"), report.translate("PlotwiseReport", "no")
     report.parameters(
         {
-            report.translate("PlotwiseReport", "Strata layer"): layer,
-            report.translate("PlotwiseReport", "Computation CRS"): crs,
+            report.translate("PlotwiseReport", "Strata layer"): inputs.layer,
+            report.translate("PlotwiseReport", "Computation CRS"): inputs.crs,
             report.translate("PlotwiseReport", "Method asked for"): method_names[result.method],
             report.translate("PlotwiseReport", "Method applied"): method_names[result.method_used],
             report.translate("PlotwiseReport", "Target"): targets[result.target],
@@ -96,32 +125,23 @@ def allocate_report(report, result, labels, inputs, warnings):
             report.translate("PlotwiseReport", "Target CV"): settings["target_cv"]
             if result.target == "target_cv"
             else "–",
-            report.translate("PlotwiseReport", "Unit area (m²)"): unit_area_m2,
+            report.translate("PlotwiseReport", "Unit area (m²)"): inputs.unit_area_m2,
             report.translate("PlotwiseReport", "Minimum units per stratum"): settings["min_per_stratum"],
-            report.translate("PlotwiseReport", "SD field"): (
-                sd_field + (report.translate("PlotwiseReport", " (covariate proxy)") if sd_proxy else "")
-            )
-            if with_sd
-            else "–",
-            report.translate("PlotwiseReport", "Mean field"): mean_field or "–",
-            report.translate("PlotwiseReport", "Cost field"): (f"{cost_field} ({cost_unit})" if cost_field else "–"),
+            report.translate("PlotwiseReport", "SD field"): sd_text,
+            report.translate("PlotwiseReport", "Mean field"): inputs.mean_field or "–",
+            report.translate("PlotwiseReport", "Cost field"): (
+                f"{cost_field} ({_cost_unit(report, inputs)})" if cost_field else "–"),
             report.translate("PlotwiseReport", "Fixed cost c0"): settings["fixed_cost"] if cost_field else "–",
             report.translate("PlotwiseReport", "Layout to come"): inputs.layout_design or "–",
-            report.translate("PlotwiseReport", "Finite-population correction"): report.translate(
-                "PlotwiseReport", "yes"
-            )
-            if result.fpc
-            else report.translate("PlotwiseReport", "no"),
+            report.translate("PlotwiseReport", "Finite-population correction"): yes if result.fpc else no,
         }
     )
-    report.warnings(warnings)
 
+
+def _units_per_stratum(report, result, labels, inputs):
+    p = result.precision
+    with_sd, with_mean, sd_proxy = inputs.sd_field is not None, inputs.mean_field is not None, inputs.sd_proxy
     report.section(report.translate("PlotwiseReport", "Units per stratum"))
-    se_label = (
-        report.translate("PlotwiseReport", "SE of mean per unit (covariate units)")
-        if sd_proxy
-        else report.translate("PlotwiseReport", "SE of mean count per unit")
-    )
     header = [
         report.translate("PlotwiseReport", "Stratum"),
         report.translate("PlotwiseReport", "Units that fit"),
@@ -131,7 +151,7 @@ def allocate_report(report, result, labels, inputs, warnings):
         report.translate("PlotwiseReport", "Sampling fraction"),
     ]
     if with_sd:
-        header.append(se_label)
+        header.append(_se_label(report, inputs))
         if not sd_proxy:
             header.append(report.translate("PlotwiseReport", "SE of density (per km²)"))
     if with_mean:
@@ -164,19 +184,15 @@ def allocate_report(report, result, labels, inputs, warnings):
     if with_sd:
         overall.append(float(p.se_mean))
         if not sd_proxy:
-            overall.append(float(se_km2))
+            overall.append(float(p.se_density / KM2_PER_HA))  # density SE per km² (areas are in ha in the engine)
     if with_mean:
         overall.append(float(p.cv))
     rows.append(overall)
     report.table(header, rows)
-    report.figure(
-        svg.bar_chart_svg(
-            [str(label) for label in labels],
-            [int(v) for v in result.n],
-            report.translate("PlotwiseReport", "units per stratum"),
-        ),
-        report.translate("PlotwiseReport", "Units allocated to each stratum"),
-    )
+
+
+def _precision_and_cost(report, result, inputs):
+    """What the expected precision assumes (with or without the correction), and the cost of the design."""
     report.note(
         report.translate(
             "PlotwiseReport",
@@ -192,21 +208,26 @@ def allocate_report(report, result, labels, inputs, warnings):
             "population (Cordy 1993). Real precision depends on the counts the survey finds."
         )
     )
-    if cost_field:
+    if inputs.cost_field:
+        settings = inputs.settings
         report.paragraph(
             report.translate(
                 "PlotwiseReport", "{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}."
             ).format(
                 what=report.translate("PlotwiseReport", "Field days needed")
-                if cost_in_days
+                if inputs.cost_in_days
                 else report.translate("PlotwiseReport", "Cost of the design"),
                 c0=settings["fixed_cost"],
                 var=result.cost - settings["fixed_cost"],
                 total=result.cost,
-                unit=cost_unit,
+                unit=_cost_unit(report, inputs),
             )
         )
 
+
+def _methods_compared(report, result, labels, inputs):
+    with_sd, with_mean = inputs.sd_field is not None, inputs.mean_field is not None
+    method_names = method_names_of(report)
     report.section(
         report.translate("PlotwiseReport", "What the choice of method buys, at {n} units").format(n=result.total)
     )
@@ -214,7 +235,8 @@ def allocate_report(report, result, labels, inputs, warnings):
         report.translate("PlotwiseReport", "stratum {label}").format(label=label) for label in labels
     ]
     if with_sd:
-        header += [se_label, report.translate("PlotwiseReport", "Variance relative to the applied allocation")]
+        header += [_se_label(report, inputs),
+                   report.translate("PlotwiseReport", "Variance relative to the applied allocation")]
     if with_mean:
         header.append(report.translate("PlotwiseReport", "Expected CV"))
     rows = []
@@ -232,6 +254,3 @@ def allocate_report(report, result, labels, inputs, warnings):
                 "PlotwiseReport", "Without standard deviations the precision of the designs cannot be compared."
             )
         )
-    report.references(REFERENCES)
-    report.field_safety()
-    return report

@@ -41,8 +41,25 @@ def _pct(value, digits=1):
 def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
     """Fill ``report`` from the :class:`engine.design_comparison.Comparison` (named fields); returns it."""
     report.title = report.translate("PlotwiseReport", "Survey designs compared by simulation")
-    grid = setup.grid
     best = comparison.by_design(comparison.recommended) if comparison.recommended is not None else None
+    _key_figures(report, best, setup.grid)
+    _parameters(report, setup, settings)
+    report.warnings(warnings)
+    _performance(report, comparison, settings)
+    _recommendation(report, comparison, best)
+    if setup.strata is not None:
+        _strata_section(report, comparison, setup)
+    if curve:
+        _curve_section(report, comparison, curve)
+    _simulation_method(report, comparison, settings)
+    report.references(REFERENCES)
+    if settings["variance_method"] == "local":
+        report.references([LOCAL_REFERENCE])
+    report.field_safety()
+    return report
+
+
+def _key_figures(report, best, grid):
     figures = []
     if best is not None:
         figures += [
@@ -53,6 +70,10 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
         ]
     figures.append((report.translate("PlotwiseReport", "expected animals in the frame"), f"{grid.expected_total:,.0f}"))
     report.key_figures(figures)
+
+
+def _parameters(report, setup, settings):
+    grid = setup.grid
     shapes = [
         report.translate("PlotwiseReport", "point station"),
         report.translate("PlotwiseReport", "square plot"),
@@ -104,8 +125,10 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
         report.translate("PlotwiseReport", "Seed"): settings["seed"],
     }
     report.parameters(params)
-    report.warnings(warnings)
 
+
+def _performance(report, comparison, settings):
+    """Bias, SE, RMSE and coverage of each design at the chosen n, with their Monte Carlo error."""
     report.section(report.translate("PlotwiseReport", "How the designs did at {n} units").format(n=comparison.n_units))
     header = [
         report.translate("PlotwiseReport", "Design"),
@@ -163,6 +186,8 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
             "PlotwiseReport", "Root mean square error of the abundance estimate, by design (lower is better)"
         ),
     )
+
+def _recommendation(report, comparison, best):
     report.section(report.translate("PlotwiseReport", "Recommendation"))
     if best is None:
         report.paragraph(report.translate("PlotwiseReport", "No design gave estimates: see the warnings."))
@@ -204,11 +229,9 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
                 )
             )
 
-    if setup.strata is not None:
-        _strata_section(report, comparison, setup)
-    if curve:
-        _curve_section(report, comparison, curve)
 
+def _simulation_method(report, comparison, settings):
+    """How the populations and the surveys were simulated, and what the comparison assumes."""
     report.section(report.translate("PlotwiseReport", "How the simulation works"))
     report.paragraph(
         report.translate(
@@ -241,11 +264,6 @@ def comparedesigns_report(report, comparison, curve, setup, settings, warnings):
             "use the comparison to rank designs and to size the effort, not as a promise of precision."
         )
     )
-    report.references(REFERENCES)
-    if settings["variance_method"] == "local":
-        report.references([LOCAL_REFERENCE])
-    report.field_safety()
-    return report
 
 
 def _strata_section(report, comparison, setup):

@@ -287,6 +287,12 @@ def _tables(report, result, inputs):
             level=level,
         ),
     )
+    _table_notes(report, result, per, level)
+    _intervals_table(report, result, level)
+
+
+def _table_notes(report, result, per, level):
+    """Below the tables: zero counts, strata left out, units not surveyed and reserves skipped."""
     if any(r.upper_only for r in result.table()):
         report.note(
             report.translate(
@@ -317,7 +323,6 @@ def _tables(report, result, inputs):
                 n=result.unused_reserves
             )
         )
-    _intervals_table(report, result, level)
 
 
 def _intervals_table(report, result, level):

@@ -71,81 +71,115 @@ def map_svg(layers, width=900, height=None, title=None, scale_bar=True):
     point_sets = [np.asarray(layer.points, dtype=float).reshape(-1, 2) for layer in layers if layer.points is not None]
     point_sets = [p for p in point_sets if len(p)]
     if not geoms and not point_sets:
-        return f'<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 {width} 60"><text x="10" y="30" {FONT}>no geometry</text></svg>'
+        return (f'<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 {width} 60"><text x="10" y="30" {FONT}>'
+                f"no geometry</text></svg>")
     bounds = np.array([g.bounds for g in geoms] + [(*p.min(axis=0), *p.max(axis=0)) for p in point_sets])
-    minx, miny = bounds[:, 0].min(), bounds[:, 1].min()
-    maxx, maxy = bounds[:, 2].max(), bounds[:, 3].max()
-    span_x = max(maxx - minx, 1e-9)
-    span_y = max(maxy - miny, 1e-9)
-    pad = 20
-    legend_h = 22 * (sum(1 for layer in layers if layer.label) + sum(len(layer.legend) for layer in layers)) + 10
-    plot_w = width - 2 * pad
-    scale = plot_w / span_x
-    plot_h = span_y * scale
-    if height is not None and plot_h > height:
-        scale = height / span_y
-        plot_h = height
-    total_h = int(plot_h + 2 * pad + 30 + legend_h)
-
-    def tx(xy):
-        out = np.empty_like(xy, dtype=float)
-        out[:, 0] = pad + (xy[:, 0] - minx) * scale
-        out[:, 1] = pad + (maxy - xy[:, 1]) * scale
-        return out
-
-    out = [f'<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 {width} {total_h}" role="img">']
+    view = _MapView.fitted(bounds, width, height, layers)
+    out = [f'<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 {width} {view.total_height}" role="img">']
     if title:
         out.append(f"<title>{escape(title)}</title>")
     for layer in layers:
-        for i, g in enumerate(layer.geometries):
-            if g is None or g.is_empty:
-                continue
-            fill = layer.fills[i] if layer.fills else layer.fill
-            for part in _geom_parts(_for_screen(g, 1.0 / scale)):
-                kind = part.geom_type
-                if kind == "Polygon":
-                    d = _ring_path(part.exterior.coords, tx)
-                    for ring in part.interiors:
-                        d += " " + _ring_path(ring.coords, tx)
-                    out.append(
-                        f'<path d="{d}" fill="{fill}" fill-rule="evenodd" fill-opacity="{layer.opacity}" '
-                        f'stroke="{layer.stroke}" stroke-width="{layer.stroke_width}"/>'
-                    )
-                elif kind in ("LineString", "LinearRing"):
-                    xy = tx(np.asarray(part.coords)[:, :2])
-                    pts = " ".join(f"{x:.1f},{y:.1f}" for x, y in xy)
-                    out.append(
-                        f'<polyline points="{pts}" fill="none" stroke="{layer.stroke}" '
-                        f'stroke-width="{max(layer.stroke_width, 1.5)}"/>'
-                    )
-                elif kind == "Point":
-                    x, y = tx(np.array([[part.x, part.y]]))[0]
-                    out.append(
-                        f'<circle cx="{x:.1f}" cy="{y:.1f}" r="{layer.point_radius}" fill="{fill if fill != "none" else layer.stroke}" '
-                        f'stroke="{layer.stroke}" stroke-width="0.6"/>'
-                    )
-        if layer.points is not None and len(layer.points):
-            fill = layer.fill if layer.fill != "none" else layer.stroke
-            out.append(f'<g fill="{fill}" stroke="{layer.stroke}" stroke-width="0.6">')
-            out.extend(
-                f'<circle cx="{x:.1f}" cy="{y:.1f}" r="{layer.point_radius}"/>'
-                for x, y in tx(np.asarray(layer.points, dtype=float).reshape(-1, 2)).tolist()
-            )
-            out.append("</g>")
-    y0 = pad + plot_h + 20
+        out.extend(_layer_markup(layer, view))
+    y0 = view.pad + view.plot_height + 20
     if scale_bar:
-        km = _nice_length(span_x / 4.0)
-        bar_px = km * scale
-        out.append(f'<rect x="{pad}" y="{y0 - 6:.1f}" width="{bar_px:.1f}" height="5" fill="{INK}"/>')
-        out.append(
-            f'<text x="{pad + bar_px + 6:.1f}" y="{y0:.1f}" font-size="12" {FONT} fill="{INK}">'
-            f"{escape(format_number(km / 1000.0))} km</text>"
+        out.extend(_scale_bar_and_north_arrow(view, width, y0))
+    out.extend(_legend(layers, view.pad, y0 + 22))
+    out.append("</svg>")
+    return "".join(out)
+
+
+@dataclass(frozen=True)
+class _MapView:
+    """Where the map's coordinates land on the page: ``x → pad + (x − minx)·scale``, north up."""
+
+    minx: float
+    maxy: float
+    span_x: float
+    scale: float
+    pad: int
+    plot_height: float
+    total_height: int
+
+    @classmethod
+    def fitted(cls, bounds, width, height, layers, pad=20):
+        minx, miny = bounds[:, 0].min(), bounds[:, 1].min()
+        maxx, maxy = bounds[:, 2].max(), bounds[:, 3].max()
+        span_x = max(maxx - minx, 1e-9)
+        span_y = max(maxy - miny, 1e-9)
+        legend_h = 22 * (sum(1 for layer in layers if layer.label) + sum(len(layer.legend) for layer in layers)) + 10
+        scale = (width - 2 * pad) / span_x
+        plot_h = span_y * scale
+        if height is not None and plot_h > height:
+            scale = height / span_y
+            plot_h = height
+        return cls(minx, maxy, span_x, scale, pad, plot_h, int(plot_h + 2 * pad + 30 + legend_h))
+
+    def tx(self, xy):
+        out = np.empty_like(xy, dtype=float)
+        out[:, 0] = self.pad + (xy[:, 0] - self.minx) * self.scale
+        out[:, 1] = self.pad + (self.maxy - xy[:, 1]) * self.scale
+        return out
+
+
+def _layer_markup(layer, view):
+    """SVG elements of one layer: its polygons, lines and points, then its point array."""
+    out = []
+    for i, g in enumerate(layer.geometries):
+        if g is None or g.is_empty:
+            continue
+        fill = layer.fills[i] if layer.fills else layer.fill
+        for part in _geom_parts(_for_screen(g, 1.0 / view.scale)):
+            kind = part.geom_type
+            if kind == "Polygon":
+                d = _ring_path(part.exterior.coords, view.tx)
+                for ring in part.interiors:
+                    d += " " + _ring_path(ring.coords, view.tx)
+                out.append(
+                    f'<path d="{d}" fill="{fill}" fill-rule="evenodd" fill-opacity="{layer.opacity}" '
+                    f'stroke="{layer.stroke}" stroke-width="{layer.stroke_width}"/>'
+                )
+            elif kind in ("LineString", "LinearRing"):
+                xy = view.tx(np.asarray(part.coords)[:, :2])
+                pts = " ".join(f"{x:.1f},{y:.1f}" for x, y in xy)
+                out.append(
+                    f'<polyline points="{pts}" fill="none" stroke="{layer.stroke}" '
+                    f'stroke-width="{max(layer.stroke_width, 1.5)}"/>'
+                )
+            elif kind == "Point":
+                x, y = view.tx(np.array([[part.x, part.y]]))[0]
+                colour = fill if fill != "none" else layer.stroke
+                out.append(
+                    f'<circle cx="{x:.1f}" cy="{y:.1f}" r="{layer.point_radius}" fill="{colour}" '
+                    f'stroke="{layer.stroke}" stroke-width="0.6"/>'
+                )
+    if layer.points is not None and len(layer.points):
+        fill = layer.fill if layer.fill != "none" else layer.stroke
+        out.append(f'<g fill="{fill}" stroke="{layer.stroke}" stroke-width="0.6">')
+        out.extend(
+            f'<circle cx="{x:.1f}" cy="{y:.1f}" r="{layer.point_radius}"/>'
+            for x, y in view.tx(np.asarray(layer.points, dtype=float).reshape(-1, 2)).tolist()
         )
-        out.append(
-            f'<text x="{width - pad - 10}" y="{pad + 14}" font-size="14" {FONT} fill="{INK}" text-anchor="middle">N</text>'
-            f'<path d="M{width - pad - 10},{pad + 18} l-5,14 l5,-4 l5,4 Z" fill="{INK}"/>'
-        )
-    y = y0 + 22
+        out.append("</g>")
+    return out
+
+
+def _scale_bar_and_north_arrow(view, width, y0):
+    pad = view.pad
+    km = _nice_length(view.span_x / 4.0)
+    bar_px = km * view.scale
+    return [
+        f'<rect x="{pad}" y="{y0 - 6:.1f}" width="{bar_px:.1f}" height="5" fill="{INK}"/>',
+        f'<text x="{pad + bar_px + 6:.1f}" y="{y0:.1f}" font-size="12" {FONT} fill="{INK}">'
+        f"{escape(format_number(km / 1000.0))} km</text>",
+        f'<text x="{width - pad - 10}" y="{pad + 14}" font-size="14" {FONT} fill="{INK}" '
+        f'text-anchor="middle">N</text>'
+        f'<path d="M{width - pad - 10},{pad + 18} l-5,14 l5,-4 l5,4 Z" fill="{INK}"/>',
+    ]
+
+
+def _legend(layers, pad, y):
+    """One swatch and label per labelled layer and per extra legend entry, from ``y`` down."""
+    out = []
     for layer in layers:
         entries = []
         if layer.label:
@@ -153,11 +187,11 @@ def map_svg(layers, width=900, height=None, title=None, scale_bar=True):
             entries.append((layer.label, swatch))
         entries.extend(layer.legend)
         for label, colour in entries:
-            out.append(f'<rect x="{pad}" y="{y - 11}" width="14" height="14" fill="{colour}" stroke="{INK}" stroke-width="0.5"/>')
+            out.append(f'<rect x="{pad}" y="{y - 11}" width="14" height="14" fill="{colour}" stroke="{INK}" '
+                       f'stroke-width="0.5"/>')
             out.append(f'<text x="{pad + 20}" y="{y}" font-size="12" {FONT} fill="{INK}">{escape(label)}</text>')
             y += 22
-    out.append("</svg>")
-    return "".join(out)
+    return out
 
 
 def stratum_name(report, key):
