@@ -1,4 +1,6 @@
 """plotwise:allocate: how many sample units each stratum gets, and the precision they buy."""
+from dataclasses import dataclass
+
 import numpy as np
 from qgis.core import (
     QgsFields,
@@ -25,13 +27,17 @@ SD_PROXY_FIELD = "cov_sd"  # written by plotwise:stratify
 # LAYOUT_DESIGN: the layout that will place the units, as the design record it will write
 LAYOUT_RECORDS = (edge.RANDOM, edge.RANDOM_APART, edge.GRID, edge.BALANCED)
 
-REFERENCES = (
-    "Neyman, J. (1934). On the two different aspects of the representative method: the method of "
-    "stratified sampling and the method of purposive selection. Journal of the Royal Statistical "
-    "Society 97, 558-625.",
-    "Cochran, W. G. (1977). Sampling Techniques, 3rd ed., chapter 5 (stratified random sampling). Wiley.",
-)
 
+@dataclass(frozen=True)
+class _StrataFields:
+    """The fields of the strata layer the run uses (None: not given)."""
+
+    stratum: object
+    area: object
+    sd: object
+    mean: object
+    cost: object
+    sd_proxy: bool = False  # the covariate SD of plotwise:stratify stands in for a pilot SD
 
 class Allocate(PlotwiseAlgorithm):
     ALGORITHM_NAME = "allocate"
@@ -87,6 +93,14 @@ class Allocate(PlotwiseAlgorithm):
         )
 
     def initAlgorithm(self, config=None):  # noqa: N802 (host naming)
+        self._add_strata_parameters()
+        self._add_target_parameters()
+        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Strata with allocation")))
+        self.add_report_parameter()
+        self.addOutput(QgsProcessingOutputNumber(self.EXPECTED_CV, self.tr("Expected CV of the overall density")))
+
+    def _add_strata_parameters(self):
+        """The strata layer and its fields: identifier, area, pilot SD and mean, cost."""
         self.addParameter(
             QgsProcessingParameterFeatureSource(self.STRATA, self.tr("Strata"), [compat.TYPE_VECTOR_POLYGON])
         )
@@ -119,6 +133,9 @@ class Allocate(PlotwiseAlgorithm):
                 type=compat.NUMBER_DOUBLE, defaultValue=0.0, minValue=0.0,
             )
         )
+
+    def _add_target_parameters(self):
+        """The method, the target (total, budget or CV), the unit, the minimum and the layout to come."""
         self.addParameter(
             QgsProcessingParameterEnum(
                 self.METHOD,
@@ -164,9 +181,6 @@ class Allocate(PlotwiseAlgorithm):
                  self.tr("Systematic grid"), self.tr("Spatially balanced")], defaultValue=3, optional=True,
             )
         )
-        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Strata with allocation")))
-        self.add_report_parameter()
-        self.addOutput(QgsProcessingOutputNumber(self.EXPECTED_CV, self.tr("Expected CV of the overall density")))
 
     # ------------------------------------------------------------------------------
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
@@ -174,8 +188,45 @@ class Allocate(PlotwiseAlgorithm):
         if source is None:
             raise QgsProcessingException(self.tr("The strata layer could not be opened."))
         layer = source.sourceName()
-        field_names = source.fields().names()
+        fields = self._strata_fields(parameters, context, source, layer, feedback)
+        crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, layer)
+        records = bridge.read_features(source, crs, context, feedback, source.fields().names(), layer_name=layer)
+        if len(records) == 0:
+            raise QgsProcessingException(self.tr("Layer '{layer}' has no strata with an area.").format(layer=layer))
+        fids = [int(f) for f in records.fids]
+        if fields.stratum:  # one feature per stratum, each with an id: layout relies on both
+            with self.engine_errors():
+                allocation.check_stratum_ids(records.attributes[fields.stratum], fids, layer, fields.stratum)
+        labels = records.attributes[fields.stratum] if fields.stratum else fids
 
+        method = allocation.METHODS[self.parameterAsEnum(parameters, self.METHOD, context)]
+        unit_area_m2 = self.parameterAsDouble(parameters, self.UNIT_AREA, context)
+        settings = self._settings(parameters, context)
+        layout_design = LAYOUT_RECORDS[self.parameterAsEnum(parameters, self.LAYOUT_DESIGN, context)]
+        warnings = list(records.warnings) + self._proxy_warnings(fields)
+        result = self._allocate(records, fields, layer, method, unit_area_m2, settings, layout_design)
+        warnings.extend(self.translate_message(w) for w in result.warnings)
+        self.push_warnings(feedback, warnings[len(records.warnings):])
+        feedback.setProgress(60)
+        dest_id = self._write_strata(parameters, context, feedback, source, records, result, fields, crs)
+
+        overall_cv = result.precision.cv if fields.mean and np.isfinite(result.precision.cv) else None
+        inputs = report_allocate.AllocateReportInputs(
+            layer, crs.authid(), unit_area_m2, fields.sd, fields.sd_proxy, fields.mean, fields.cost,
+            self.parameterAsBool(parameters, self.COST_IN_DAYS, context), settings, layout_design)
+        report = report_allocate.allocate_report(self.new_report(""), result, labels, inputs, warnings)
+        report_path = self.write_report(report, parameters, context, feedback)
+        feedback.pushInfo(
+            self.tr("{total} units allocated ({method}); expected CV of the overall density: {cv}.").format(
+                total=result.total, method=self._method_names()[result.method_used],
+                cv="–" if overall_cv is None else f"{overall_cv:.3f}")
+        )
+        feedback.setProgress(100)
+        self.style_output(context, dest_id, "strata", field=fields.stratum)
+        return {self.OUTPUT: dest_id, self.REPORT: report_path, self.EXPECTED_CV: overall_cv}
+
+    def _strata_fields(self, parameters, context, source, layer, feedback):
+        """The fields chosen (by the one policy for a field the layer lacks), with the covariate SD as proxy."""
         def field(name):
             return self.field_name(parameters, name, context, source, layer)
 
@@ -185,20 +236,33 @@ class Allocate(PlotwiseAlgorithm):
             feedback.pushInfo(self.tr("Layer '{layer}' has no area field: the polygon areas are used.").format(
                 layer=layer))
         sd_proxy = False
-        if sd_field is None and SD_PROXY_FIELD in field_names:
+        if sd_field is None and SD_PROXY_FIELD in source.fields().names():
             sd_field, sd_proxy = SD_PROXY_FIELD, True
+        return _StrataFields(stratum_field, area_field, sd_field, mean_field, cost_field, sd_proxy)
 
-        crs = bridge.computation_crs(source.sourceCrs(), source.sourceExtent(), context, feedback, layer)
-        records = bridge.read_features(source, crs, context, feedback, field_names, layer_name=layer)
-        if len(records) == 0:
-            raise QgsProcessingException(self.tr("Layer '{layer}' has no strata with an area.").format(layer=layer))
-        fids = [int(f) for f in records.fids]
-        if stratum_field:  # one feature per stratum, each with an id: layout relies on both
-            with self.engine_errors():
-                allocation.check_stratum_ids(records.attributes[stratum_field], fids, layer, stratum_field)
-        labels = records.attributes[stratum_field] if stratum_field else fids
-        if area_field:
-            areas_ha = records.attributes[area_field]
+    def _settings(self, parameters, context):
+        """The target and bounds, as the engine's keywords."""
+        return dict(
+            total=self.parameterAsInt(parameters, self.TOTAL, context),
+            budget=self.parameterAsDouble(parameters, self.BUDGET, context),
+            target_cv=self.parameterAsDouble(parameters, self.TARGET_CV, context),
+            fixed_cost=self.parameterAsDouble(parameters, self.FIXED_COST, context),
+            min_per_stratum=self.parameterAsInt(parameters, self.MIN_PER_STRATUM, context),
+        )
+
+    def _proxy_warnings(self, fields):
+        if not fields.sd_proxy:
+            return []
+        return [self.tr(
+            "No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts "
+            "scale with the covariate; replace it with the SD of a pilot survey when you have one. The "
+            "expected SEs are then in covariate units, not counts."
+        ).format(field=SD_PROXY_FIELD)]
+
+    def _allocate(self, records, fields, layer, method, unit_area_m2, settings, layout_design):
+        """The engine's allocation of the strata in ``records``, naming the fields in its messages."""
+        if fields.area:
+            areas_ha = records.attributes[fields.area]
         else:
             areas_ha = [g.area * HA_PER_M2 for g in records.geometries]
 
@@ -208,81 +272,46 @@ class Allocate(PlotwiseAlgorithm):
         def naming(name, fallback):
             return self.tr("field '{name}' of layer '{layer}'").format(name=name, layer=layer) if name else fallback
 
-        method = allocation.METHODS[self.parameterAsEnum(parameters, self.METHOD, context)]
-        unit_area_m2 = self.parameterAsDouble(parameters, self.UNIT_AREA, context)
-        cost_in_days = self.parameterAsBool(parameters, self.COST_IN_DAYS, context)
-        settings = dict(
-            total=self.parameterAsInt(parameters, self.TOTAL, context),
-            budget=self.parameterAsDouble(parameters, self.BUDGET, context),
-            target_cv=self.parameterAsDouble(parameters, self.TARGET_CV, context),
-            fixed_cost=self.parameterAsDouble(parameters, self.FIXED_COST, context),
-            min_per_stratum=self.parameterAsInt(parameters, self.MIN_PER_STRATUM, context),
-        )
-        layout_design = LAYOUT_RECORDS[self.parameterAsEnum(parameters, self.LAYOUT_DESIGN, context)]
-        warnings = list(records.warnings)
-        if sd_proxy:
-            warnings.append(
-                self.tr(
-                    "No pilot SD field: the covariate SD ('{field}') is used as a proxy. This assumes that counts "
-                    "scale with the covariate; replace it with the SD of a pilot survey when you have one. The "
-                    "expected SEs are then in covariate units, not counts."
-                ).format(field=SD_PROXY_FIELD)
-            )
         with self.engine_errors():
-            result = allocation.allocate(
+            return allocation.allocate(
                 areas_ha,
                 unit_area_m2 * HA_PER_M2,
                 method,
-                sds=column(sd_field),
-                means=column(mean_field),
-                costs=column(cost_field),
-                ids=fids,
+                sds=column(fields.sd),
+                means=column(fields.mean),
+                costs=column(fields.cost),
+                ids=[int(f) for f in records.fids],
                 names={
-                    "area": naming(area_field, self.tr("polygon area")),
-                    "sd": naming(sd_field, self.tr("pilot SD")),
-                    "mean": naming(mean_field, self.tr("pilot mean")),
-                    "cost": naming(cost_field, self.tr("cost")),
+                    "area": naming(fields.area, self.tr("polygon area")),
+                    "sd": naming(fields.sd, self.tr("pilot SD")),
+                    "mean": naming(fields.mean, self.tr("pilot mean")),
+                    "cost": naming(fields.cost, self.tr("cost")),
                 },
                 layout_design=layout_design,
                 **settings,
             )
-        warnings.extend(self.translate_message(w) for w in result.warnings)
-        self.push_warnings(feedback, warnings[len(records.warnings):])
-        feedback.setProgress(60)
 
-        # output: the input fields, plus (or refreshed) n_alloc and exp_cv
-        fields = QgsFields(source.fields())
+    def _write_strata(self, parameters, context, feedback, source, records, result, fields, crs):
+        """The input fields, plus (or refreshed) n_alloc and exp_cv; returns the sink's id."""
+        out_fields = QgsFields(source.fields())
         for name, kind in (("n_alloc", "int"), ("exp_cv", "double")):
-            if fields.lookupField(name) < 0:
-                fields.append(compat.make_field(name, kind))
-        names_out = fields.names()
+            if out_fields.lookupField(name) < 0:
+                out_fields.append(compat.make_field(name, kind))
+        field_names, names_out = source.fields().names(), out_fields.names()
         exp_cv = result.precision.stratum_cv
         rows = []
         for i in range(len(records)):
             values = {name: records.attributes[name][i] for name in field_names}
             values["n_alloc"] = int(result.n[i])
-            values["exp_cv"] = float(exp_cv[i]) if mean_field else None
+            values["exp_cv"] = float(exp_cv[i]) if fields.mean else None
             rows.append([values.get(name) for name in names_out])
-        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, fields, QgsWkbTypes.multiType(source.wkbType()), crs)
+        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, out_fields,
+                                             QgsWkbTypes.multiType(source.wkbType()), crs)
         if sink is None:
             raise QgsProcessingException(self.tr("The output layer could not be created."))
-        if not bridge.write_features(sink, fields, records.geometries, rows, feedback, (60.0, 90.0)):
+        if not bridge.write_features(sink, out_fields, records.geometries, rows, feedback, (60.0, 90.0)):
             raise self.cancelled_error()
-
-        overall_cv = result.precision.cv if mean_field and np.isfinite(result.precision.cv) else None
-        inputs = report_allocate.AllocateReportInputs(
-            layer, crs.authid(), unit_area_m2, sd_field, sd_proxy, mean_field, cost_field, cost_in_days, settings,
-            layout_design)
-        report = report_allocate.allocate_report(self.new_report(""), result, labels, inputs, warnings)
-        report_path = self.write_report(report, parameters, context, feedback)
-        feedback.pushInfo(
-            self.tr("{total} units allocated ({method}); expected CV of the overall density: {cv}.").format(
-                total=result.total, method=self._method_names()[result.method_used],
-                cv="–" if overall_cv is None else f"{overall_cv:.3f}")
-        )
-        feedback.setProgress(100)
-        self.style_output(context, dest_id, "strata", field=stratum_field)
-        return {self.OUTPUT: dest_id, self.REPORT: report_path, self.EXPECTED_CV: overall_cv}
+        return dest_id
 
     # ------------------------------------------------------------------------------
     def _method_names(self):

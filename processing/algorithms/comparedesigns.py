@@ -1,4 +1,5 @@
 """plotwise:comparedesigns: survey designs compared by simulating surveys of a density surface."""
+from dataclasses import dataclass
 
 import numpy as np
 from qgis.core import (
@@ -108,7 +109,20 @@ class CompareDesigns(PlotwiseAlgorithm):
         )
 
     def initAlgorithm(self, config=None):  # noqa: N802 (host naming)
-        self.addParameter(QgsProcessingParameterRasterLayer(self.SURFACE, self.tr("Density surface (expected animals per km²)")))
+        self._add_input_parameters()
+        self._add_unit_parameters()
+        self._add_simulation_parameters()
+        self.add_seed_parameter()
+        self.addParameter(
+            QgsProcessingParameterFeatureSink(self.OUTPUT_TABLE, self.tr("Design comparison"), compat.TYPE_VECTOR)
+        )
+        self.add_report_parameter()
+        self.addOutput(QgsProcessingOutputString(self.RECOMMENDED, self.tr("Recommended design")))
+
+    def _add_input_parameters(self):
+        """The density surface, the frame, the strata and the designs to compare."""
+        self.addParameter(QgsProcessingParameterRasterLayer(
+            self.SURFACE, self.tr("Density surface (expected animals per km²)")))
         self.addParameter(
             QgsProcessingParameterFeatureSource(self.FRAME, self.tr("Sampling frame"), [compat.TYPE_VECTOR_POLYGON])
         )
@@ -131,6 +145,9 @@ class CompareDesigns(PlotwiseAlgorithm):
                 allowMultiple=True, defaultValue=[0, 1, 2, 3, 4],
             )
         )
+
+    def _add_unit_parameters(self):
+        """How many units, of which shape, size and bearing, and the edge rule."""
         self.addParameter(
             QgsProcessingParameterNumber(
                 self.N_UNITS, self.tr("Number of units"), type=compat.NUMBER_INTEGER, defaultValue=30, minValue=2
@@ -167,6 +184,9 @@ class CompareDesigns(PlotwiseAlgorithm):
                 defaultValue=False,
             )
         )
+
+    def _add_simulation_parameters(self):
+        """Replicates, count distribution, variance estimator, range of n and the pilot's size."""
         self.addParameter(
             QgsProcessingParameterNumber(
                 self.REPLICATES, self.tr("Simulated surveys per design"), type=compat.NUMBER_INTEGER,
@@ -198,76 +218,19 @@ class CompareDesigns(PlotwiseAlgorithm):
             type=compat.NUMBER_INTEGER, defaultValue=engine.DEFAULT_PILOT_UNITS, minValue=2, maxValue=1000)
         pilot.setFlags(pilot.flags() | compat.FLAG_ADVANCED)
         self.addParameter(pilot)
-        self.add_seed_parameter()
-        self.addParameter(
-            QgsProcessingParameterFeatureSink(self.OUTPUT_TABLE, self.tr("Design comparison"), compat.TYPE_VECTOR)
-        )
-        self.add_report_parameter()
-        self.addOutput(QgsProcessingOutputString(self.RECOMMENDED, self.tr("Recommended design")))
 
     # ------------------------------------------------------------------------------
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 (host naming)
         surface = self.parameterAsRasterLayer(parameters, self.SURFACE, context)
         if surface is None or not surface.isValid():
             raise QgsProcessingException(self.tr("The density surface could not be opened."))
-        frame_source = self.parameterAsSource(parameters, self.FRAME, context)
-        if frame_source is None:
-            raise QgsProcessingException(self.tr("The sampling frame could not be opened."))
-        frame_name = frame_source.sourceName()
-        crs = bridge.computation_crs(frame_source.sourceCrs(), frame_source.sourceExtent(), context, feedback, frame_name)
-        frame_records = bridge.read_features(frame_source, crs, context, feedback, layer_name=frame_name)
-        if len(frame_records) == 0:
-            raise QgsProcessingException(
-                self.tr("Layer '{layer}' has no polygon with an area.").format(layer=frame_name))
+        frame_name, crs, frame_records, warnings = self._read_frame(parameters, context, feedback)
         frame = unary_union([g for g in frame_records.geometries if g is not None])
-        warnings = list(frame_records.warnings)
-
-        strata_source = self.parameterAsSource(parameters, self.STRATA, context)
-        strata = keys = strata_ids = None
-        strata_name = stratum_field = None
-        if strata_source is not None:
-            strata_name = strata_source.sourceName()
-            stratum_field = self.field_name(parameters, self.STRATUM_FIELD, context, strata_source, strata_name)
-            records = bridge.read_features(strata_source, crs, context, feedback,
-                                           [stratum_field] if stratum_field else [], layer_name=strata_name)
-            warnings.extend(records.warnings)
-            strata = list(records.geometries)
-            strata_ids = [int(f) for f in records.fids]
-            keys = list(records.attributes[stratum_field]) if stratum_field else list(strata_ids)
-            nulls = [int(f) for f, k in zip(records.fids, keys) if k is None]
-            if nulls:
-                raise QgsProcessingException(
-                    self.tr("Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every "
-                            "stratum a value.").format(layer=strata_name, field=stratum_field, ids=bridge.listed_ids(nulls)))
-            if not strata:
-                strata = keys = strata_ids = None
-
+        strata = self._read_strata(parameters, context, feedback, crs, warnings)
         already_pushed = len(warnings)  # bridge.read_features pushes its own warnings
-        designs = sorted(set(self.parameterAsEnums(parameters, self.DESIGNS, context))) or list(range(5))
-        if strata is None:
-            dropped = [d for d in designs if d in engine.STRATIFIED_DESIGNS]
-            if dropped:
-                warnings.append(self.tr("No strata were given: the stratified designs are left out ({names}).").format(
-                    names=", ".join(self.design_name(d) for d in dropped)))
-                designs = [d for d in designs if d not in engine.STRATIFIED_DESIGNS]
-            if not designs:
-                raise QgsProcessingException(
-                    self.tr("The stratified designs need strata: give the strata layer, or choose another design."))
-
-        shape = self.parameterAsEnum(parameters, self.SHAPE, context)
-        size = self.parameterAsDouble(parameters, self.SIZE, context)
-        half_width = self.parameterAsDouble(parameters, self.HALF_WIDTH, context)
-        bearing = self.parameterAsDouble(parameters, self.BEARING, context)
-        if bearing < 0:
-            bearing = -1.0
-        inside = self.parameterAsBool(parameters, self.INSIDE, context)
-        n_units = self.parameterAsInt(parameters, self.N_UNITS, context)
-        replicates = self.parameterAsInt(parameters, self.REPLICATES, context)
-        k = self.parameterAsDouble(parameters, self.OVERDISPERSION, context)
-        variance_method = estimation.VARIANCE_METHODS[self.parameterAsEnum(parameters, self.VARIANCE_METHOD, context)]
-        pilot_units = self.parameterAsInt(parameters, self.PILOT_UNITS, context)
+        designs = self._designs(parameters, context, strata.geometries is not None, warnings)
+        run = self._run_settings(parameters, context)
         seeded = self.seeded_generator(parameters, context, feedback)
-        rng = seeded.generator
 
         feedback.pushInfo(self.tr("Reading the density surface…"))
         with self.engine_errors():
@@ -278,58 +241,24 @@ class CompareDesigns(PlotwiseAlgorithm):
             warnings.append(self.tr("The density surface was warped to {crs} (bilinear) to match the frame.").format(
                 crs=crs.authid()))
         feedback.setProgress(3)
-
         with self.engine_errors():
             n_range = engine.parse_unit_range(self.parameterAsString(parameters, self.N_RANGE, context))
-            grid = engine.population_grid(density, geotransform, frame, strata, keys,
+            grid = engine.population_grid(density, geotransform, frame, strata.geometries, strata.keys,
                                            progress=self.progress_callback(feedback, 3, 6))
-            region = engine.counting_region(shape, size, half_width)
-            frame_parts = [(g, int(f)) for g, f in zip(frame_records.geometries, frame_records.fids) if g is not None]
-            setup = engine.prepare_comparison(grid, frame, region, shape, size, rng, strata, keys, bearing, k,
-                                              inside=inside, strata_ids=strata_ids,
-                                              frame_parts=[g for g, _ in frame_parts],
-                                              frame_ids=[f for _, f in frame_parts], pilot_units=pilot_units)
+            setup = self._prepare(grid, frame, frame_records, strata, run, seeded.generator)
             warnings.extend(self.translate_message(w) for w in setup.warnings)
-            main_end = 70.0 if [m for m in n_range if m != n_units] else 95.0
-            comparison = engine.compare_designs(
-                setup, designs, n_units, replicates, rng, variance_method=variance_method,
-                progress=self.progress_callback(feedback, 6, main_end))
-            warnings.extend(self.translate_message(w) for w in comparison.warnings)
-            curve = []
-            n_range = tuple(m for m in n_range if m != n_units)  # the main comparison stands for N_UNITS
-            for i, m in enumerate(n_range):
-                start = main_end + (95.0 - main_end) * i / len(n_range)
-                stop = main_end + (95.0 - main_end) * (i + 1) / len(n_range)
-                feedback.pushInfo(self.tr("Simulating {n} units…").format(n=m))
-                try:
-                    curve.append(engine.compare_designs(
-                        setup, designs, m, replicates, rng, variance_method=variance_method,
-                        progress=self.progress_callback(feedback, start, stop)))
-                except InputError as error:  # e.g. fewer units than two per stratum: that n is left out
-                    warnings.append(self.tr("{n} units were left out of the range: {why}").format(
-                        n=m, why=self.translate_message(error.detail or error.message)))
+            n_range = tuple(m for m in n_range if m != run["n_units"])  # the main comparison stands for N_UNITS
+            comparison, curve = self._simulate(setup, designs, run, n_range, seeded.generator, feedback, warnings)
         self.push_warnings(feedback, warnings[already_pushed:])
+        dest_id = self._write_table(parameters, context, feedback, comparison, crs)
 
-        fields = bridge.make_fields(OUTPUT_FIELDS)
-        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT_TABLE, context, fields, compat.WKB_NOGEOMETRY, crs)
-        if sink is None:
-            raise QgsProcessingException(self.tr("The output table could not be created."))
-        rows = [performance_row(p, comparison.recommended) for p in comparison.performance]
-        if not bridge.write_features(sink, fields, [None] * len(rows), rows, feedback, (95.0, 97.0)):
-            raise self.cancelled_error()
-
-        recommended = engine.DESIGNS[comparison.recommended] if comparison.recommended is not None else ""
-        settings = {
-            "surface": surface.name(), "frame": frame_name, "strata": strata_name, "stratum_field": stratum_field,
-            "crs": crs.authid(), "shape": shape, "size": size, "half_width": half_width, "bearing": bearing,
-            "inside": inside,
-            "n_units": n_units, "replicates": replicates, "k": k, "variance_method": variance_method,
-            "seed": seeded.seed, "n_range": n_range,
-        }
-        settings["pilot_units"] = pilot_units
+        settings = {"surface": surface.name(), "frame": frame_name, "strata": strata.name,
+                    "stratum_field": strata.field, "crs": crs.authid(), **run, "seed": seeded.seed,
+                    "n_range": n_range}
         report = report_comparedesigns.comparedesigns_report(self.new_report(""), comparison, curve, setup, settings,
                                                              warnings)
         report_path = self.write_report(report, parameters, context, feedback)
+        recommended = engine.DESIGNS[comparison.recommended] if comparison.recommended is not None else ""
         if recommended:
             best = comparison.by_design(comparison.recommended)
             feedback.pushInfo(self.tr("Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; "
@@ -337,6 +266,127 @@ class CompareDesigns(PlotwiseAlgorithm):
                                                                       rel=best.rel_rmse, cov=best.coverage))
         feedback.setProgress(100)
         return {self.OUTPUT_TABLE: dest_id, self.REPORT: report_path, self.RECOMMENDED: recommended}
+
+    def _read_frame(self, parameters, context, feedback):
+        """The frame layer's name, the computation CRS, its features there and their warnings."""
+        frame_source = self.parameterAsSource(parameters, self.FRAME, context)
+        if frame_source is None:
+            raise QgsProcessingException(self.tr("The sampling frame could not be opened."))
+        frame_name = frame_source.sourceName()
+        crs = bridge.computation_crs(frame_source.sourceCrs(), frame_source.sourceExtent(), context, feedback,
+                                     frame_name)
+        frame_records = bridge.read_features(frame_source, crs, context, feedback, layer_name=frame_name)
+        if len(frame_records) == 0:
+            raise QgsProcessingException(
+                self.tr("Layer '{layer}' has no polygon with an area.").format(layer=frame_name))
+        return frame_name, crs, frame_records, list(frame_records.warnings)
+
+    def _read_strata(self, parameters, context, feedback, crs, warnings):
+        """The strata given (geometries, keys and feature ids all None when there are none)."""
+        strata_source = self.parameterAsSource(parameters, self.STRATA, context)
+        if strata_source is None:
+            return _Strata()
+        strata_name = strata_source.sourceName()
+        stratum_field = self.field_name(parameters, self.STRATUM_FIELD, context, strata_source, strata_name)
+        records = bridge.read_features(strata_source, crs, context, feedback,
+                                       [stratum_field] if stratum_field else [], layer_name=strata_name)
+        warnings.extend(records.warnings)
+        strata_ids = [int(f) for f in records.fids]
+        keys = list(records.attributes[stratum_field]) if stratum_field else list(strata_ids)
+        nulls = [int(f) for f, k in zip(records.fids, keys) if k is None]
+        if nulls:
+            raise QgsProcessingException(
+                self.tr("Layer '{layer}': field '{field}' is empty (NULL) for feature id(s) {ids}. Give every "
+                        "stratum a value.").format(layer=strata_name, field=stratum_field,
+                                                   ids=bridge.listed_ids(nulls)))
+        if not records.geometries:
+            return _Strata(strata_name, stratum_field)
+        return _Strata(strata_name, stratum_field, list(records.geometries), keys, strata_ids)
+
+    def _designs(self, parameters, context, with_strata, warnings):
+        """The designs to compare; without strata the stratified ones are left out, with a warning."""
+        designs = sorted(set(self.parameterAsEnums(parameters, self.DESIGNS, context))) or list(range(5))
+        if with_strata:
+            return designs
+        dropped = [d for d in designs if d in engine.STRATIFIED_DESIGNS]
+        if dropped:
+            warnings.append(self.tr("No strata were given: the stratified designs are left out ({names}).").format(
+                names=", ".join(self.design_name(d) for d in dropped)))
+            designs = [d for d in designs if d not in engine.STRATIFIED_DESIGNS]
+        if not designs:
+            raise QgsProcessingException(
+                self.tr("The stratified designs need strata: give the strata layer, or choose another design."))
+        return designs
+
+    def _run_settings(self, parameters, context):
+        """The units and the simulation, as the report's settings name them."""
+        bearing = self.parameterAsDouble(parameters, self.BEARING, context)
+        return {
+            "shape": self.parameterAsEnum(parameters, self.SHAPE, context),
+            "size": self.parameterAsDouble(parameters, self.SIZE, context),
+            "half_width": self.parameterAsDouble(parameters, self.HALF_WIDTH, context),
+            "bearing": -1.0 if bearing < 0 else bearing,
+            "inside": self.parameterAsBool(parameters, self.INSIDE, context),
+            "n_units": self.parameterAsInt(parameters, self.N_UNITS, context),
+            "replicates": self.parameterAsInt(parameters, self.REPLICATES, context),
+            "k": self.parameterAsDouble(parameters, self.OVERDISPERSION, context),
+            "variance_method": estimation.VARIANCE_METHODS[
+                self.parameterAsEnum(parameters, self.VARIANCE_METHOD, context)],
+            "pilot_units": self.parameterAsInt(parameters, self.PILOT_UNITS, context),
+        }
+
+    @staticmethod
+    def _prepare(grid, frame, frame_records, strata, run, rng):
+        """The engine's comparison setup: counting region, strata on the grid, frame parts and their ids."""
+        region = engine.counting_region(run["shape"], run["size"], run["half_width"])
+        frame_parts = [(g, int(f)) for g, f in zip(frame_records.geometries, frame_records.fids) if g is not None]
+        return engine.prepare_comparison(grid, frame, region, run["shape"], run["size"], rng, strata.geometries,
+                                         strata.keys, run["bearing"], run["k"], inside=run["inside"],
+                                         strata_ids=strata.ids, frame_parts=[g for g, _ in frame_parts],
+                                         frame_ids=[f for _, f in frame_parts], pilot_units=run["pilot_units"])
+
+    def _simulate(self, setup, designs, run, n_range, rng, feedback, warnings):
+        """The comparison at N_UNITS, then at each other n of the range (the RMSE curve)."""
+        main_end = 70.0 if n_range else 95.0
+        comparison = engine.compare_designs(
+            setup, designs, run["n_units"], run["replicates"], rng, variance_method=run["variance_method"],
+            progress=self.progress_callback(feedback, 6, main_end))
+        warnings.extend(self.translate_message(w) for w in comparison.warnings)
+        curve = []
+        for i, m in enumerate(n_range):
+            start = main_end + (95.0 - main_end) * i / len(n_range)
+            stop = main_end + (95.0 - main_end) * (i + 1) / len(n_range)
+            feedback.pushInfo(self.tr("Simulating {n} units…").format(n=m))
+            try:
+                curve.append(engine.compare_designs(
+                    setup, designs, m, run["replicates"], rng, variance_method=run["variance_method"],
+                    progress=self.progress_callback(feedback, start, stop)))
+            except InputError as error:  # e.g. fewer units than two per stratum: that n is left out
+                warnings.append(self.tr("{n} units were left out of the range: {why}").format(
+                    n=m, why=self.translate_message(error.detail or error.message)))
+        return comparison, curve
+
+    def _write_table(self, parameters, context, feedback, comparison, crs):
+        """One row per design (OUTPUT_FIELDS); returns the sink's id."""
+        fields = bridge.make_fields(OUTPUT_FIELDS)
+        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT_TABLE, context, fields, compat.WKB_NOGEOMETRY, crs)
+        if sink is None:
+            raise QgsProcessingException(self.tr("The output table could not be created."))
+        rows = [performance_row(p, comparison.recommended) for p in comparison.performance]
+        if not bridge.write_features(sink, fields, [None] * len(rows), rows, feedback, (95.0, 97.0)):
+            raise self.cancelled_error()
+        return dest_id
+
+
+@dataclass(frozen=True)
+class _Strata:
+    """The strata layer's name and field, and its geometries, keys and feature ids (None without strata)."""
+
+    name: object = None
+    field: object = None
+    geometries: object = None
+    keys: object = None
+    ids: object = None
 
 
 def performance_row(p, recommended):
