@@ -222,64 +222,19 @@ class Estimate(PlotwiseAlgorithm):
                 self.invalidSourceError(parameters, self.UNITS if units is None else self.STRATA))
         fields, warnings = self._fields(parameters, context, units, strata_source)
         area_unit = self.parameterAsEnum(parameters, self.AREA_UNIT, context)
-        m2_per_unit = M2_PER[area_unit]
         settings = self._settings(parameters, context)
         seeded = self.seeded_generator(parameters, context, feedback) if settings["ci_method"] == "bootstrap" else None
 
-        # -- read ------------------------------------------------------------------
         crs = bridge.computation_crs(units.sourceCrs(), units.sourceExtent(), context, feedback, units.sourceName())
-        wanted = [fields["count"]] + [f for f in (fields["stratum"], fields["area"]) + RECORD_FIELDS
-                                      if f and f in units.fields().names()]
-        records = bridge.read_features(units, crs, context, feedback, tuple(dict.fromkeys(wanted)),
-                                       layer_name=units.sourceName(), drop_empty=False)
-        if len(records) == 0:
-            raise QgsProcessingException(self.tr("Layer '{layer}' has no features.").format(layer=units.sourceName()))
-        feedback.setProgress(15)
-        strata_records = bridge.read_features(strata_source, crs, context, feedback,
-                                              (fields["strata_id"],) if fields["strata_id"] else (),
-                                              layer_name=strata_source.sourceName())
-        if len(strata_records) == 0:
-            raise QgsProcessingException(self.tr("Layer '{layer}' has no polygons with an area.").format(
-                layer=strata_source.sourceName()))
-        feedback.setProgress(30)
+        records, strata_records = self._read(units, strata_source, fields, crs, context, feedback)
         warnings = list(records.warnings) + list(strata_records.warnings) + warnings
         already_pushed = len(records.warnings) + len(strata_records.warnings)  # read_features pushes its own
-
-        attrs = records.attributes
-        ids = np.array(attrs["unit_id"] if "unit_id" in attrs else records.fids.tolist(), dtype=object)
-        ids = np.where([v is None for v in ids], records.fids.astype(object), ids)
-        counts = np.array(attrs[fields["count"]], dtype=object)
-        if fields["stratum"]:
-            unit_strata = np.array(attrs[fields["stratum"]], dtype=object)
-            strata_ids = strata_records.attributes[fields["strata_id"]]
-        else:
-            unit_strata = np.full(len(records), ONE_STRATUM, dtype=object)
-            strata_ids = [ONE_STRATUM] * len(strata_records)
         strip_width = self.parameterAsDouble(parameters, self.STRIP_WIDTH, context)
         unit_area_m2 = self.parameterAsDouble(parameters, self.UNIT_AREA, context)
-        with self.engine_errors():
-            frame = estimation.frame_strata(
-                strata_ids, strata_records.geometries, strata_records.fids.tolist(), m2_per_unit=m2_per_unit,
-                unit=UNIT_NAMES[area_unit], layer=strata_source.sourceName(), field=fields["strata_id"] or "",
-                drop_unlabelled=settings["drop_empty_strata"])
-            expansion, expansion_warnings = estimation.plus_expansion(
-                frame.geometries, unit_strata, attrs.get("edge"), attrs.get("reach_m"), m2_per_unit)
-            # a one-unit stratum is paired with the stratum it shares the longest edge with on the map
-            labels = list(frame.geometries)
-            touching = variance.adjacent_strata([frame.geometries[k] for k in labels])
-            neighbours = {labels[i]: [labels[j] for j in js] for i, js in touching.items()}
-            areas_m2 = estimation.surveyed_areas(
-                records.geometries, attrs[fields["area"]] if fields["area"] else None, unit_area_m2, strip_width)
-            coords = np.array([[g.centroid.x, g.centroid.y] if g is not None else [np.nan, np.nan]
-                               for g in records.geometries]) if settings["variance_method"] != "srs" else None
-            result = estimation.estimate_density(
-                counts, areas_m2 / m2_per_unit, unit_strata, frame.areas, unit_ids=ids, coords=coords,
-                neighbours=neighbours, roles=attrs.get("role"), designs=attrs.get("design"), edges=attrs.get("edge"),
-                incl_p=attrs.get("incl_p"), expansion_areas=expansion, layer=units.sourceName(),
-                rng=None if seeded is None else seeded.generator, progress=self.progress_callback(feedback, 30, 80),
-                **settings)
-        warnings.extend(self.translate_message(w) for w in list(frame.warnings) + expansion_warnings
-                        + list(result.warnings))
+        frame, result, counts, found = self._estimate(
+            records, strata_records, fields, settings, area_unit, unit_area_m2, strip_width, units.sourceName(),
+            strata_source.sourceName(), seeded, feedback)
+        warnings.extend(self.translate_message(w) for w in found)
         self.push_warnings(feedback, warnings[already_pushed:])
         if result.unused_reserves:
             feedback.pushInfo(self.tr("{n} unused reserve unit(s) without a count were skipped.").format(
@@ -345,6 +300,61 @@ class Estimate(PlotwiseAlgorithm):
             presence=self.parameterAsBool(parameters, self.PRESENCE, context),
             drop_empty_strata=self.parameterAsBool(parameters, self.DROP_EMPTY, context),
         )
+
+    def _read(self, units, strata_source, fields, crs, context, feedback):
+        """The units (the count, stratum, area and design-record fields) and the strata, in ``crs``."""
+        wanted = [fields["count"]] + [f for f in (fields["stratum"], fields["area"]) + RECORD_FIELDS
+                                      if f and f in units.fields().names()]
+        records = bridge.read_features(units, crs, context, feedback, tuple(dict.fromkeys(wanted)),
+                                       layer_name=units.sourceName(), drop_empty=False)
+        if len(records) == 0:
+            raise QgsProcessingException(self.tr("Layer '{layer}' has no features.").format(layer=units.sourceName()))
+        feedback.setProgress(15)
+        strata_records = bridge.read_features(strata_source, crs, context, feedback,
+                                              (fields["strata_id"],) if fields["strata_id"] else (),
+                                              layer_name=strata_source.sourceName())
+        if len(strata_records) == 0:
+            raise QgsProcessingException(self.tr("Layer '{layer}' has no polygons with an area.").format(
+                layer=strata_source.sourceName()))
+        feedback.setProgress(30)
+        return records, strata_records
+
+    def _estimate(self, records, strata_records, fields, settings, area_unit, unit_area_m2, strip_width, units_name,
+                  strata_name, seeded, feedback):
+        """The frame's strata and the engine's estimate; returns them, the counts and the engine's warnings."""
+        m2_per_unit = M2_PER[area_unit]
+        attrs = records.attributes
+        ids = np.array(attrs["unit_id"] if "unit_id" in attrs else records.fids.tolist(), dtype=object)
+        ids = np.where([v is None for v in ids], records.fids.astype(object), ids)
+        counts = np.array(attrs[fields["count"]], dtype=object)
+        if fields["stratum"]:
+            unit_strata = np.array(attrs[fields["stratum"]], dtype=object)
+            strata_ids = strata_records.attributes[fields["strata_id"]]
+        else:
+            unit_strata = np.full(len(records), ONE_STRATUM, dtype=object)
+            strata_ids = [ONE_STRATUM] * len(strata_records)
+        with self.engine_errors():
+            frame = estimation.frame_strata(
+                strata_ids, strata_records.geometries, strata_records.fids.tolist(), m2_per_unit=m2_per_unit,
+                unit=UNIT_NAMES[area_unit], layer=strata_name, field=fields["strata_id"] or "",
+                drop_unlabelled=settings["drop_empty_strata"])
+            expansion, expansion_warnings = estimation.plus_expansion(
+                frame.geometries, unit_strata, attrs.get("edge"), attrs.get("reach_m"), m2_per_unit)
+            # a one-unit stratum is paired with the stratum it shares the longest edge with on the map
+            labels = list(frame.geometries)
+            touching = variance.adjacent_strata([frame.geometries[k] for k in labels])
+            neighbours = {labels[i]: [labels[j] for j in js] for i, js in touching.items()}
+            areas_m2 = estimation.surveyed_areas(
+                records.geometries, attrs[fields["area"]] if fields["area"] else None, unit_area_m2, strip_width)
+            coords = np.array([[g.centroid.x, g.centroid.y] if g is not None else [np.nan, np.nan]
+                               for g in records.geometries]) if settings["variance_method"] != "srs" else None
+            result = estimation.estimate_density(
+                counts, areas_m2 / m2_per_unit, unit_strata, frame.areas, unit_ids=ids, coords=coords,
+                neighbours=neighbours, roles=attrs.get("role"), designs=attrs.get("design"), edges=attrs.get("edge"),
+                incl_p=attrs.get("incl_p"), expansion_areas=expansion, layer=units_name,
+                rng=None if seeded is None else seeded.generator, progress=self.progress_callback(feedback, 30, 80),
+                **settings)
+        return frame, result, counts, list(frame.warnings) + expansion_warnings + list(result.warnings)
 
     def _write(self, parameters, context, feedback, result, frame, crs, area_unit):
         fields = bridge.make_fields(OUTPUT_FIELDS)
