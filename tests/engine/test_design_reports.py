@@ -9,7 +9,7 @@ import html
 import re
 
 import numpy as np
-from osgeo import gdal
+from osgeo import gdal, gdal_array
 from pyproj import CRS
 from shapely import wkb
 from shapely.geometry import box
@@ -54,15 +54,12 @@ def _table(page, first_heading):
     raise AssertionError(f"no table headed {first_heading!r}")
 
 
-def _write_tif(path, values, geotransform, nodata=None):
-    ds = gdal.GetDriverByName("GTiff").Create(str(path), values.shape[1], values.shape[0], 1, gdal.GDT_Float32)
-    ds.SetGeoTransform(geotransform)
-    ds.SetProjection(UTM33)
-    band = ds.GetRasterBand(1)
-    if nodata is not None:
-        band.SetNoDataValue(nodata)
-    band.WriteArray(values)
-    ds = None
+def _write_tif(path, values, geotransform):
+    """``values`` as a one-band GeoTIFF in UTM zone 33N."""
+    grid = gdal_array.OpenArray(np.ascontiguousarray(values))
+    grid.SetGeoTransform(geotransform)
+    grid.SetProjection(UTM33)
+    gdal.Translate(str(path), grid, format="GTiff")
     return str(path)
 
 
