@@ -121,6 +121,21 @@ FIELD_NUMERIC = _first(
 FIELD_ANY = _first(lambda: Qgis.ProcessingFieldParameterDataType.Any, lambda: QgsProcessingParameterField.Any)
 
 
+# Print layouts (processing/print_layout.py): page orientation, units, legend style, PDF export.
+from qgis.core import (  # noqa: E402
+    QgsLayoutExporter,
+    QgsLayoutItemPage,
+    QgsLegendStyle,
+    QgsRenderContext,
+    QgsUnitTypes,
+)
+
+PAGE_LANDSCAPE = _first(lambda: QgsLayoutItemPage.Orientation.Landscape, lambda: QgsLayoutItemPage.Landscape)
+DISTANCE_KILOMETERS = _first(lambda: Qgis.DistanceUnit.Kilometers, lambda: QgsUnitTypes.DistanceKilometers)
+LEGEND_TITLE = _first(lambda: QgsLegendStyle.Style.Title, lambda: QgsLegendStyle.Title)
+TEXT_ALWAYS_TEXT = _first(lambda: Qgis.TextRenderFormat.AlwaysText, lambda: QgsRenderContext.TextFormatAlwaysText)
+EXPORT_SUCCESS = _first(lambda: QgsLayoutExporter.ExportResult.Success, lambda: QgsLayoutExporter.Success)
+
 def parameter_as_fields(algorithm, parameters, name, context):
     """The field names a field parameter holds: ``parameterAsStrings`` on newer hosts, ``parameterAsFields``
     (deprecated there) on 3.22."""

@@ -1,45 +1,31 @@
-"""The demo's print layout: built on the demo reserve, exported to PDF, checked as an image.
+"""The print layout (processing/print_layout.py, used by the demo chain): built on the demo reserve, exported
+to PDF, checked as an image.
 
 Outside references: poppler's ``pdfinfo`` (page count and size), ``pdftoppm`` (the page as a
 PNG), ``pdftotext`` (the words on the page); ISO 216 for the A4 size (297 mm × 210 mm,
 841.89 × 595.28 pt).
 """
-import importlib.util
 import re
 import shutil
 import subprocess
-import sys
 import unicodedata
 from pathlib import Path
 
 import pytest
 
-REPO = Path(__file__).resolve().parents[2]
 POPPLER = all(shutil.which(tool) for tool in ("pdfinfo", "pdftoppm", "pdftotext"))
 pytestmark = pytest.mark.skipif(not POPPLER, reason="poppler-utils is not installed (`make setup` installs it)")
 DPI = 50
 TITLE = "Hollin Ridge Reserve (invented): print test"
 
 
-def demo_chain():
-    """scripts/demo_chain.py as a module (its host imports happen inside its functions)."""
-    scripts = str(REPO / "scripts")
-    if scripts not in sys.path:
-        sys.path.append(scripts)
-    spec = importlib.util.spec_from_file_location("plotwise_demo_chain", REPO / "scripts" / "demo_chain.py")
-    module = importlib.util.module_from_spec(spec)
-    spec.loader.exec_module(module)
-    return module
-
-
 @pytest.fixture(scope="module")
 def exported(demo_reserve_outputs, tmp_path_factory):
     from qgis.core import QgsProject, QgsVectorLayer
 
-    from plotwise.processing import styles
+    from plotwise.processing import print_layout, styles
 
     folder = tmp_path_factory.mktemp("print_layout")
-    chain = demo_chain()
     project = QgsProject()
     project.setTitle(TITLE)
     layers = []
@@ -53,8 +39,8 @@ def exported(demo_reserve_outputs, tmp_path_factory):
         layers.append(layer)
     project.setCrs(layers[-1].crs())
     columns = [("kind", "Kind", None), ("name", "Name", None), ("area_ha", "Area (ha)", 1)]
-    layout = chain.add_print_layout(project, TITLE, layers, layers[1], columns, note="test")
-    pdf = chain.export_pdf(layout, folder / "map.pdf")
+    layout = print_layout.add_print_layout(project, TITLE, layers, layers[1], columns, note="test")
+    pdf = print_layout.export_pdf(layout, folder / "map.pdf")
     project_path = folder / "map.qgz"
     assert project.write(str(project_path))
     subprocess.run(["pdftoppm", "-r", str(DPI), "-png", "-singlefile", str(pdf), str(folder / "page")], check=True, timeout=60)
@@ -125,11 +111,12 @@ def test_pdf_holds_title_date_legend_scale_table_and_caution(exported):
 def test_layout_travels_in_the_project(exported):
     from qgis.core import QgsProject
 
-    chain = demo_chain()
+    from plotwise.processing.print_layout import PRINT_LAYOUT_NAME
+
     project = QgsProject()
     assert project.read(str(exported["project"]))
     try:
-        check_read_back(project, project.layoutManager().layoutByName(chain.PRINT_LAYOUT_NAME))
+        check_read_back(project, project.layoutManager().layoutByName(PRINT_LAYOUT_NAME))
     finally:
         project.layoutManager().clear()
         project.removeAllMapLayers()
@@ -158,14 +145,12 @@ def check_read_back(project, layout):
     assert symbol["style"] == "b_diagonal"
 
 
-def test_demo_print_layout_with_the_estimate_table(demo_reserve_outputs, tmp_path):
-    """The demo's own step (write_print_layout) on the reserve layers and a small estimate table."""
-    from types import SimpleNamespace
-
+def test_survey_map_with_the_estimate_table(demo_reserve_outputs, tmp_path):
+    """The demo's print step (print_survey_map) on the reserve layers and a small estimate table."""
     from osgeo import ogr
     from qgis.core import QgsProject, QgsVectorLayer
 
-    from plotwise.processing import styles
+    from plotwise.processing import print_layout, styles
 
     # an estimate table with the pinned fields (invented numbers), as plotwise:estimate writes it
     gpkg = tmp_path / "demo.gpkg"
@@ -184,20 +169,24 @@ def test_demo_print_layout_with_the_estimate_table(demo_reserve_outputs, tmp_pat
         table.CreateFeature(feature)
     source = None
 
-    chain = demo_chain()
     project = QgsProject.instance()
     project.clear()
     project.setTitle(TITLE)
     try:
+        layers = {}
         for name, key, style in (("Reserve boundary", "OUTPUT_AREA", "outline"),
                                  ("Excluded areas", "OUTPUT_EXCLUDED", "excluded"),
                                  ("Simulated velmar", "OUTPUT_ANIMALS", "animals")):
-            layer = QgsVectorLayer(demo_reserve_outputs[key], name, "ogr")
-            styles.apply_style(layer, style)
-            project.addMapLayer(layer)
-        project.setCrs(layer.crs())
-        demo = SimpleNamespace(out=tmp_path, layer_uri=lambda name: f"{gpkg}|layername={name}")
-        pdf = chain.write_print_layout(demo, tmp_path / "demo.qgz")
+            layers[name] = QgsVectorLayer(demo_reserve_outputs[key], name, "ogr")
+            styles.apply_style(layers[name], style)
+            project.addMapLayer(layers[name])
+        project.setCrs(layers["Reserve boundary"].crs())
+        estimates = QgsVectorLayer(f"{gpkg}|layername=estimate_table", "Estimate table", "ogr")
+        assert estimates.isValid()
+        project.addMapLayer(estimates)
+        pdf = print_layout.print_survey_map(
+            project, [layers["Excluded areas"], layers["Reserve boundary"]], estimates,
+            print_layout.estimate_table_columns("km²"), tmp_path / "demo.qgz", tmp_path / "demo.pdf", note="test")
         text = subprocess.run(["pdftotext", "-layout", str(pdf), "-"], capture_output=True, text=True, check=True).stdout
         words = " ".join(unicodedata.normalize("NFKC", text).split())
         # NFKC also turns "km²" into "km2"
@@ -208,6 +197,7 @@ def test_demo_print_layout_with_the_estimate_table(demo_reserve_outputs, tmp_pat
         shown = {node.name(): node.isVisible() for node in root.findLayers()}
         assert shown["Reserve boundary"] and shown["Excluded areas"] and not shown["Simulated velmar"]
         assert root.customLayerOrder()[0].name() == "Excluded areas"  # print layers first, on top
+        assert (tmp_path / "demo.qgz").is_file()
     finally:
         project.layoutManager().clear()
         project.clear()
