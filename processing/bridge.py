@@ -84,7 +84,9 @@ def crs_label(crs):
 
 
 def crs_wkt(crs):
-    return crs.toWkt(QgsCoordinateReferenceSystem.WKT_PREFERRED) if hasattr(QgsCoordinateReferenceSystem, "WKT_PREFERRED") else crs.toWkt()
+    if hasattr(QgsCoordinateReferenceSystem, "WKT_PREFERRED"):
+        return crs.toWkt(QgsCoordinateReferenceSystem.WKT_PREFERRED)
+    return crs.toWkt()
 
 
 # -- reading -----------------------------------------------------------------------

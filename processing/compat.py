@@ -62,7 +62,8 @@ def field_is_numeric(field):
 # Processing source types: Qgis.ProcessingSourceType from 3.36 on.
 TYPE_VECTOR_POLYGON = _first(lambda: Qgis.ProcessingSourceType.VectorPolygon, lambda: QgsProcessing.TypeVectorPolygon)
 TYPE_VECTOR_POINT = _first(lambda: Qgis.ProcessingSourceType.VectorPoint, lambda: QgsProcessing.TypeVectorPoint)
-TYPE_VECTOR_ANY = _first(lambda: Qgis.ProcessingSourceType.VectorAnyGeometry, lambda: QgsProcessing.TypeVectorAnyGeometry)
+TYPE_VECTOR_ANY = _first(lambda: Qgis.ProcessingSourceType.VectorAnyGeometry,
+                         lambda: QgsProcessing.TypeVectorAnyGeometry)
 TYPE_VECTOR_LINE = _first(lambda: Qgis.ProcessingSourceType.VectorLine, lambda: QgsProcessing.TypeVectorLine)
 TYPE_VECTOR = _first(lambda: Qgis.ProcessingSourceType.Vector, lambda: QgsProcessing.TypeVector)
 TYPE_RASTER = _first(lambda: Qgis.ProcessingSourceType.Raster, lambda: QgsProcessing.TypeRaster)

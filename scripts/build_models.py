@@ -21,7 +21,6 @@ def build():
         QgsProcessingModelChildParameterSource as Source,
         QgsProcessingModelOutput as Output,
         QgsProcessingModelParameter as ModelParameter,
-        QgsProcessingParameterBoolean,
         QgsProcessingParameterFeatureSource,
         QgsProcessingParameterMultipleLayers,
         QgsProcessingParameterNumber,
@@ -53,25 +52,28 @@ def build():
         model.addChildAlgorithm(step)
         return step
 
-    static, param, output, expr = Source.fromStaticValue, Source.fromModelParameter, Source.fromChildOutput, Source.fromExpression
+    static, param = Source.fromStaticValue, Source.fromModelParameter
+    output, expr = Source.fromChildOutput, Source.fromExpression
 
     # 1. frame -> strata -> effort -> layout
     plan = Model("plan_survey", "Example chains", "examples")
     parameter(plan, QgsProcessingParameterFeatureSource("study_area", QT_TRANSLATE_NOOP("ExampleChain", "Study area"),
         [compat.TYPE_VECTOR_POLYGON]), 40, 40)
-    parameter(plan, QgsProcessingParameterFeatureSource("exclusions", QT_TRANSLATE_NOOP("ExampleChain", "Excluded areas"),
-        [compat.TYPE_VECTOR_POLYGON], optional=True), 40, 100)
-    parameter(plan, QgsProcessingParameterRasterLayer("slope", QT_TRANSLATE_NOOP("ExampleChain", "Slope raster (degrees)"),
-        optional=True), 40, 160)
-    parameter(plan, QgsProcessingParameterNumber("max_slope", QT_TRANSLATE_NOOP("ExampleChain", "Steepest slope surveyed (degrees)"),
+    parameter(plan, QgsProcessingParameterFeatureSource("exclusions",
+        QT_TRANSLATE_NOOP("ExampleChain", "Excluded areas"), [compat.TYPE_VECTOR_POLYGON], optional=True), 40, 100)
+    parameter(plan, QgsProcessingParameterRasterLayer("slope",
+        QT_TRANSLATE_NOOP("ExampleChain", "Slope raster (degrees)"), optional=True), 40, 160)
+    parameter(plan, QgsProcessingParameterNumber("max_slope",
+        QT_TRANSLATE_NOOP("ExampleChain", "Steepest slope surveyed (degrees)"),
         compat.NUMBER_DOUBLE, 30.0, False, 0.0, 90.0), 40, 220)
-    parameter(plan, QgsProcessingParameterMultipleLayers("covariates", QT_TRANSLATE_NOOP("ExampleChain", "Covariate rasters"),
-        compat.TYPE_RASTER), 40, 280)
+    parameter(plan, QgsProcessingParameterMultipleLayers("covariates",
+        QT_TRANSLATE_NOOP("ExampleChain", "Covariate rasters"), compat.TYPE_RASTER), 40, 280)
     parameter(plan, QgsProcessingParameterNumber("n_strata", QT_TRANSLATE_NOOP("ExampleChain", "Number of strata"),
         compat.NUMBER_INTEGER, 4, False, 2, 20), 40, 340)
-    parameter(plan, QgsProcessingParameterNumber("total_units", QT_TRANSLATE_NOOP("ExampleChain", "Total number of units"),
-        compat.NUMBER_INTEGER, 60, False, 2), 40, 400)
-    parameter(plan, QgsProcessingParameterNumber("plot_side", QT_TRANSLATE_NOOP("ExampleChain", "Side of the square plots (m)"),
+    parameter(plan, QgsProcessingParameterNumber("total_units",
+        QT_TRANSLATE_NOOP("ExampleChain", "Total number of units"), compat.NUMBER_INTEGER, 60, False, 2), 40, 400)
+    parameter(plan, QgsProcessingParameterNumber("plot_side",
+        QT_TRANSLATE_NOOP("ExampleChain", "Side of the square plots (m)"),
         compat.NUMBER_DOUBLE, 400.0, False, 1.0), 40, 460)
     parameter(plan, QgsProcessingParameterNumber("seed", QT_TRANSLATE_NOOP("ExampleChain", "Random seed (0 draws one)"),
         compat.NUMBER_INTEGER, 1, False, 0), 40, 520)
@@ -104,10 +106,11 @@ def build():
         [compat.TYPE_VECTOR_POINT]), 40, 100)
     parameter(count, QgsProcessingParameterFeatureSource("strata", QT_TRANSLATE_NOOP("ExampleChain", "Strata"),
         [compat.TYPE_VECTOR_POLYGON]), 40, 160)
-    parameter(count, QgsProcessingParameterNumber("detection", QT_TRANSLATE_NOOP("ExampleChain", "Detection probability"),
+    parameter(count, QgsProcessingParameterNumber("detection",
+        QT_TRANSLATE_NOOP("ExampleChain", "Detection probability"),
         compat.NUMBER_DOUBLE, 1.0, False, 0.001, 1.0), 40, 220)
-    parameter(count, QgsProcessingParameterNumber("seed", QT_TRANSLATE_NOOP("ExampleChain", "Random seed (0 draws one)"),
-        compat.NUMBER_INTEGER, 1, False, 0), 40, 280)
+    parameter(count, QgsProcessingParameterNumber("seed",
+        QT_TRANSLATE_NOOP("ExampleChain", "Random seed (0 draws one)"), compat.NUMBER_INTEGER, 1, False, 0), 40, 280)
     child(count, "counts", "plotwise:simulatecounts", "Simulated counts", {
         "UNITS": param("units"), "ANIMALS": param("animals"), "DETECTION": param("detection"), "SEED": param("seed"),
     }, {"OUTPUT": (QT_TRANSLATE_NOOP("ExampleChain", "Units with counts"), "OUTPUT")}, 320, 40)

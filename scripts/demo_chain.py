@@ -7,7 +7,6 @@ a step whose algorithm is not available yet says so and is skipped.
 """
 import os
 import shutil
-import sys
 from dataclasses import dataclass, field
 from pathlib import Path
 
@@ -179,7 +178,8 @@ def step_pilot(demo):
         "REPORT": demo.report("04b_pilot_estimate"),
     })
     demo.results["pilot"] = {"layout": layout, "counts": counts, "estimate": estimate}
-    print(f"    pilot: {estimate['ABUNDANCE']:,.0f} velmar (CV {estimate['CV']:.2f}); its per-stratum SDs feed the allocation")
+    print(f"    pilot: {estimate['ABUNDANCE']:,.0f} velmar (CV {estimate['CV']:.2f}); "
+          "its per-stratum SDs feed the allocation")
 
 
 def step_allocate(demo):
@@ -451,7 +451,8 @@ def step_distance(demo):
           f"{true_total:,.0f} ({'inside' if covered else 'outside'} the interval)")
 
 
-STEPS = [step_reserve, step_frame, step_stratify, step_pilot, step_allocate, step_layout, step_counts, step_estimate, step_compare]
+STEPS = [step_reserve, step_frame, step_stratify, step_pilot, step_allocate, step_layout, step_counts, step_estimate,
+         step_compare]
 STEPS.append(step_camera_season)
 STEPS.append(step_distance)
 

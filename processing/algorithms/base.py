@@ -18,7 +18,8 @@ from ..engine.rng import make_rng
 from ..report import Report
 from .. import styles
 
-ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__)))), "plugin", "icons", "plotwise.svg")
+ICON = os.path.join(os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__)))), "plugin", "icons",
+                    "plotwise.svg")
 
 # group id -> display name (translated in group())
 GROUPS = {
@@ -160,7 +161,8 @@ class PlotwiseAlgorithm(QgsProcessingAlgorithm):
         chosen = [field for field in chosen if field in available]
         if required and not chosen:
             raise QgsProcessingException(QCoreApplication.translate(
-                "PlotwiseAlgorithm", "Choose a field of layer '{layer}' for {param}. Its fields are: {available}.").format(
+                "PlotwiseAlgorithm",
+                "Choose a field of layer '{layer}' for {param}. Its fields are: {available}.").format(
                 layer=layer_name or (source.sourceName() if source is not None else name), param=name,
                 available=", ".join(available)))
         return chosen

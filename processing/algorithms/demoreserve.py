@@ -46,7 +46,8 @@ class DemoReserve(PlotwiseAlgorithm):
             "number of animals per km² is written as a raster, so that survey designs and estimates can be "
             "checked against the truth.</p>"
             "<h3>Parameters</h3><ul>"
-            "<li><b>Random seed</b>: the same seed gives the same reserve and animals. 0 draws a seed and records it.</li>"
+            "<li><b>Random seed</b>: the same seed gives the same reserve and animals. 0 draws a seed and records "
+            "it.</li>"
             "<li><b>Raster cell size</b>: metres, 10 to 500 (default 50).</li></ul>"
             "<h3>Outputs</h3><ul><li>Reserve boundary (<i>name</i>, <i>area_ha</i>)</li>"
             "<li>Excluded areas (<i>kind</i> lake or inholding, <i>name</i>, <i>area_ha</i>)</li>"
@@ -65,13 +66,17 @@ class DemoReserve(PlotwiseAlgorithm):
                 defaultValue=50.0, minValue=10.0, maxValue=500.0,
             )
         )
-        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_AREA, self.tr("Reserve boundary"), compat.TYPE_VECTOR_POLYGON))
-        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_EXCLUDED, self.tr("Excluded areas (lake, inholding)"), compat.TYPE_VECTOR_POLYGON))
+        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_AREA, self.tr("Reserve boundary"),
+                                                            compat.TYPE_VECTOR_POLYGON))
+        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_EXCLUDED,
+                                                            self.tr("Excluded areas (lake, inholding)"),
+                                                            compat.TYPE_VECTOR_POLYGON))
         self.addParameter(QgsProcessingParameterRasterDestination(self.OUTPUT_ELEVATION, self.tr("Elevation (m)")))
         self.addParameter(QgsProcessingParameterRasterDestination(self.OUTPUT_GREENNESS, self.tr("Greenness (0–1)")))
         self.addParameter(QgsProcessingParameterRasterDestination(
             self.OUTPUT_INTENSITY, self.tr("Expected animals per km²"), optional=True, createByDefault=False))
-        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_ANIMALS, self.tr("Simulated animals"), compat.TYPE_VECTOR_POINT))
+        self.addParameter(QgsProcessingParameterFeatureSink(self.OUTPUT_ANIMALS, self.tr("Simulated animals"),
+                                                            compat.TYPE_VECTOR_POINT))
         self.add_report_parameter()
         self.addOutput(QgsProcessingOutputNumber(self.TRUE_TOTAL, self.tr("True number of animals")))
         self.addOutput(QgsProcessingOutputNumber(self.EXPECTED_TOTAL, self.tr("Expected number of animals")))
@@ -87,20 +92,25 @@ class DemoReserve(PlotwiseAlgorithm):
         results = {self.TRUE_TOTAL: reserve.true_total, self.EXPECTED_TOTAL: reserve.expected_total}
 
         fields = bridge.make_fields([("name", "string", 80), ("area_ha", "double", 14, 2)])
-        sink, results[self.OUTPUT_AREA] = self.parameterAsSink(parameters, self.OUTPUT_AREA, context, fields, compat.WKB_MULTIPOLYGON, crs)
+        sink, results[self.OUTPUT_AREA] = self.parameterAsSink(parameters, self.OUTPUT_AREA, context, fields,
+                                                               compat.WKB_MULTIPOLYGON, crs)
         self._check_sink(sink, self.OUTPUT_AREA)
-        bridge.write_features(sink, fields, [reserve.boundary], [[demo_reserve.RESERVE_NAME, reserve.boundary.area / 1e4]])
+        bridge.write_features(sink, fields, [reserve.boundary],
+                              [[demo_reserve.RESERVE_NAME, reserve.boundary.area / 1e4]])
 
         fields = bridge.make_fields([("kind", "string", 20), ("name", "string", 80), ("area_ha", "double", 14, 2)])
-        sink, results[self.OUTPUT_EXCLUDED] = self.parameterAsSink(parameters, self.OUTPUT_EXCLUDED, context, fields, compat.WKB_MULTIPOLYGON, crs)
+        sink, results[self.OUTPUT_EXCLUDED] = self.parameterAsSink(parameters, self.OUTPUT_EXCLUDED, context, fields,
+                                                                   compat.WKB_MULTIPOLYGON, crs)
         self._check_sink(sink, self.OUTPUT_EXCLUDED)
         bridge.write_features(
             sink, fields, [reserve.lake, reserve.inholding],
-            [["lake", "Tarnmere", reserve.lake.area / 1e4], ["inholding", "Quillimer croft (private)", reserve.inholding.area / 1e4]],
+            [["lake", "Tarnmere", reserve.lake.area / 1e4],
+             ["inholding", "Quillimer croft (private)", reserve.inholding.area / 1e4]],
         )
         feedback.setProgress(75)
 
-        for key, array in ((self.OUTPUT_ELEVATION, reserve.elevation), (self.OUTPUT_GREENNESS, reserve.greenness), (self.OUTPUT_INTENSITY, reserve.intensity)):
+        for key, array in ((self.OUTPUT_ELEVATION, reserve.elevation), (self.OUTPUT_GREENNESS, reserve.greenness),
+                           (self.OUTPUT_INTENSITY, reserve.intensity)):
             path = self.parameterAsOutputLayer(parameters, key, context)
             if not path:  # an optional output left out
                 continue
@@ -109,7 +119,8 @@ class DemoReserve(PlotwiseAlgorithm):
         feedback.setProgress(85)
 
         fields = bridge.make_fields([("animal_id", "int"), ("group_id", "int")])
-        sink, results[self.OUTPUT_ANIMALS] = self.parameterAsSink(parameters, self.OUTPUT_ANIMALS, context, fields, compat.WKB_POINT, crs)
+        sink, results[self.OUTPUT_ANIMALS] = self.parameterAsSink(parameters, self.OUTPUT_ANIMALS, context, fields,
+                                                                  compat.WKB_POINT, crs)
         self._check_sink(sink, self.OUTPUT_ANIMALS)
         from shapely.geometry import Point
 
@@ -126,8 +137,9 @@ class DemoReserve(PlotwiseAlgorithm):
         )
         report = demoreserve_report(self.new_report(""), reserve, cell_size, bridge.crs_label(crs))
         results[self.REPORT] = self.write_report(report, parameters, context, feedback)
-        for key, style in ((self.OUTPUT_AREA, "outline"), (self.OUTPUT_EXCLUDED, "excluded"), (self.OUTPUT_ELEVATION, "elevation"),
-                           (self.OUTPUT_GREENNESS, "greenness"), (self.OUTPUT_INTENSITY, "intensity"), (self.OUTPUT_ANIMALS, "animals")):
+        for key, style in ((self.OUTPUT_AREA, "outline"), (self.OUTPUT_EXCLUDED, "excluded"),
+                           (self.OUTPUT_ELEVATION, "elevation"), (self.OUTPUT_GREENNESS, "greenness"),
+                           (self.OUTPUT_INTENSITY, "intensity"), (self.OUTPUT_ANIMALS, "animals")):
             if results.get(key):
                 self.style_output(context, results[key], style)
         return results

@@ -279,7 +279,8 @@ class DistanceDensity(PlotwiseAlgorithm):
         if bad:
             raise QgsProcessingException(self.tr(
                 "Layer '{layer}': the points {ids} have a number of visits in the field '{field}' that is not a "
-                "whole number of 0 or more. Correct them.").format(layer=layer, ids=bridge.listed_ids(bad), field=field))
+                "whole number of 0 or more. Correct them.").format(layer=layer, ids=bridge.listed_ids(bad),
+                                                                  field=field))
         unvisited = [lab for lab, v, k in zip(labels, visits, keep) if v == 0 and lab in observed_units and k]
         if unvisited:
             raise QgsProcessingException(self.tr(

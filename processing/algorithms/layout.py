@@ -77,17 +77,18 @@ class LayoutUnits(PlotwiseAlgorithm):
             "without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), an "
             "empty count field for the field teams, and the design record for the estimate: design (random, "
             "random_sep, grid, grid_ovl or balanced: whether the units can overlap, which decides the "
-            "finite-population correction), edge (plus or inside) and reach_m (R, m). The GPX file holds one waypoint per unit (a start and an end "
-            "waypoint per transect), named by unit_id.\n\n"
-            "Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one "
-            "a warning. Features under 1 m² (slivers) are skipped, with a warning.\n\n"
+            "finite-population correction), edge (plus or inside) and reach_m (R, m). The GPX file holds one "
+            "waypoint per unit (a start and an end waypoint per transect), named by unit_id.\n\n"
+            "Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller "
+            "one a warning. Features under 1 m² (slivers) are skipped, with a warning.\n\n"
             "A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's "
             "access and safety before fieldwork: the tool never makes a location safe."
         )
 
     def initAlgorithm(self, config=None):  # noqa: N802 (host naming)
         self.addParameter(
-            QgsProcessingParameterFeatureSource(self.FRAME, self.tr("Sampling frame or strata"), [compat.TYPE_VECTOR_POLYGON])
+            QgsProcessingParameterFeatureSource(self.FRAME, self.tr("Sampling frame or strata"),
+                                                [compat.TYPE_VECTOR_POLYGON])
         )
         self.addParameter(
             QgsProcessingParameterField(
@@ -145,7 +146,8 @@ class LayoutUnits(PlotwiseAlgorithm):
         )
         self.addParameter(
             QgsProcessingParameterNumber(
-                self.RESERVE, self.tr("Reserve units per stratum"), type=compat.NUMBER_INTEGER, defaultValue=0, minValue=0,
+                self.RESERVE, self.tr("Reserve units per stratum"), type=compat.NUMBER_INTEGER, defaultValue=0,
+                minValue=0,
             )
         )
         self.add_seed_parameter()

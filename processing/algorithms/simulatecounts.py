@@ -85,8 +85,10 @@ class SimulateCounts(PlotwiseAlgorithm):
         )
 
     def initAlgorithm(self, config=None):  # noqa: N802
-        self.addParameter(QgsProcessingParameterFeatureSource(self.UNITS, self.tr("Sample units"), [compat.TYPE_VECTOR_ANY]))
-        self.addParameter(QgsProcessingParameterFeatureSource(self.ANIMALS, self.tr("Animal points"), [compat.TYPE_VECTOR_POINT]))
+        self.addParameter(QgsProcessingParameterFeatureSource(self.UNITS, self.tr("Sample units"),
+                                                              [compat.TYPE_VECTOR_ANY]))
+        self.addParameter(QgsProcessingParameterFeatureSource(self.ANIMALS, self.tr("Animal points"),
+                                                              [compat.TYPE_VECTOR_POINT]))
         self.addParameter(
             QgsProcessingParameterNumber(
                 self.DETECTION, self.tr("Detection probability"), type=compat.NUMBER_DOUBLE,
@@ -128,7 +130,8 @@ class SimulateCounts(PlotwiseAlgorithm):
         units = self.parameterAsSource(parameters, self.UNITS, context)
         animals = self.parameterAsSource(parameters, self.ANIMALS, context)
         if units is None or animals is None:
-            raise QgsProcessingException(self.invalidSourceError(parameters, self.UNITS if units is None else self.ANIMALS))
+            raise QgsProcessingException(self.invalidSourceError(parameters,
+                                                                 self.UNITS if units is None else self.ANIMALS))
         detection = self.parameterAsDouble(parameters, self.DETECTION, context)
         count_reserves = self.parameterAsBoolean(parameters, self.COUNT_RESERVES, context)
         function = self.parameterAsEnum(parameters, self.DETECTION_FUNCTION, context)
@@ -158,7 +161,8 @@ class SimulateCounts(PlotwiseAlgorithm):
             if out_fields.lookupField(name) < 0:
                 out_fields.append(compat.make_field(name, "int"))
         count_index, present_index = out_fields.lookupField("count"), out_fields.lookupField("present")
-        sink, dest = self.parameterAsSink(parameters, self.OUTPUT, context, out_fields, units.wkbType(), units.sourceCrs())
+        sink, dest = self.parameterAsSink(parameters, self.OUTPUT, context, out_fields, units.wkbType(),
+                                          units.sourceCrs())
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
         by_fid = {int(fid): i for i, fid in enumerate(unit_records.fids)}
@@ -178,7 +182,8 @@ class SimulateCounts(PlotwiseAlgorithm):
         surveyed = [count_reserves or role != "reserve" for role in roles]
         seen = sum(int(v) for v, s in zip(result.seen, surveyed) if s)
         feedback.pushInfo(
-            self.tr("{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.").format(
+            self.tr("{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve "
+                    "units left empty.").format(
                 n=sum(surveyed), seen=seen, present=int(result.present.sum()), p=detection, r=len(roles) - sum(surveyed)
             )
         )
@@ -193,7 +198,8 @@ class SimulateCounts(PlotwiseAlgorithm):
     def _counts(self, parameters, context, feedback, crs, unit_records, animal_records, detection, seeded, layer):
         """Counts by binomial thinning in each unit's counting region (no detection function)."""
         regions, problems = [], []
-        for fid, geometry, area in zip(unit_records.fids, unit_records.geometries, unit_records.attributes.get("area_m2", [None] * len(unit_records))):
+        for fid, geometry, area in zip(unit_records.fids, unit_records.geometries,
+                                       unit_records.attributes.get("area_m2", [None] * len(unit_records))):
             try:
                 if geometry is None:
                     raise InputError(self.tr("has no geometry"))

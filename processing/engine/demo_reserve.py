@@ -84,7 +84,8 @@ def reserve_boundary(rng, area_km2):
     shape = Polygon(np.column_stack([np.cos(theta) * radius, np.sin(theta) * radius]))
     scale = np.sqrt(area_km2 * 1e6 / shape.area)
     shape = affinity.scale(shape, scale, scale * rng.uniform(0.75, 0.95), origin=(0, 0))
-    shape = affinity.scale(shape, np.sqrt(area_km2 * 1e6 / shape.area), np.sqrt(area_km2 * 1e6 / shape.area), origin=(0, 0))
+    shape = affinity.scale(shape, np.sqrt(area_km2 * 1e6 / shape.area), np.sqrt(area_km2 * 1e6 / shape.area),
+                           origin=(0, 0))
     shape = affinity.rotate(shape, rng.uniform(0, 180), origin=(0, 0))
     return affinity.translate(shape, *ORIGIN)
 

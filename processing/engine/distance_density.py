@@ -118,7 +118,8 @@ def _units_iv(unit_ids, unit_strata, effort, stratum_areas, survey, names):
             "PlotwiseEngine",
             "Layer '{layer}': the unit ids {ids} occur more than once in the field '{field}'. Each unit needs its own "
             "id."),
-            layer=names.units, ids=listed_ids(labels[counts > 1]), field=names.unit_field), ids=list(labels[counts > 1]))
+            layer=names.units, ids=listed_ids(labels[counts > 1]), field=names.unit_field),
+            ids=list(labels[counts > 1]))
     effort = np.asarray(effort, dtype=float)
     bad = ~(np.isfinite(effort) & (effort > 0))
     if bad.any():
@@ -178,7 +179,8 @@ def _observations_iv(obs_unit_ids, distances, sizes, obs_ids, ids, names):
             "PlotwiseEngine",
             "Layer '{layer}': observations name units that the layer '{units}' does not have (field '{field}'): "
             "{ids}. Correct these unit ids, or add the units."),
-            layer=names.observations, units=names.units, field=names.obs_unit_field, ids=listed_ids(unknown)), ids=unknown)
+            layer=names.observations, units=names.units, field=names.obs_unit_field, ids=listed_ids(unknown)),
+            ids=unknown)
     x = _numbers(distances)
     missing = ~np.isfinite(x)
     if missing.any():
@@ -434,7 +436,9 @@ def detection_warnings(analyses, per_stratum):
                 "per function); consider one function for all strata."),
                 stratum=where, n=a.n))
         if np.isfinite(fit.gof_p) and fit.gof_p < 0.05:
-            where_text = message(QT_TRANSLATE_NOOP("PlotwiseEngine", ", stratum {stratum}"), stratum=where) if where else ""
+            where_text = ""
+            if where:
+                where_text = message(QT_TRANSLATE_NOOP("PlotwiseEngine", ", stratum {stratum}"), stratum=where)
             warnings.append(message(QT_TRANSLATE_NOOP(
                 "PlotwiseEngine",
                 "The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). "

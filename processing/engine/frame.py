@@ -21,7 +21,7 @@ Every function here is pure shapely/numpy and works with shapely 1.8 and 2.0.
 from dataclasses import dataclass, field
 
 import numpy as np
-from shapely.geometry import MultiPolygon, Polygon
+from shapely.geometry import Polygon
 from shapely.geometry.base import BaseGeometry
 from shapely.ops import unary_union
 

@@ -658,7 +658,8 @@ def sampling_region(key, geometry, area, n, feature_ids, spec):
     effective = float(region.area) if not region.is_empty else 0.0
     if effective <= 0 and n + spec.reserve > 0:
         raise InputError(
-            message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius, ids=listed_ids(feature_ids)),
+            message(_TOO_SMALL[key is None, spec.shape], key=key, size=spec.size, radius=radius,
+                    ids=listed_ids(feature_ids)),
             ids=list(feature_ids),
         )
     warnings = []

@@ -147,7 +147,8 @@ class Report:
     def parameters(self, mapping, heading=None):
         """Inputs and parameters as a two-column table (seed and CRS belong here too)."""
         self.section(heading or self.translate("PlotwiseReport", "Inputs and parameters"))
-        rows = [[k, str(v) if isinstance(v, numbers.Integral) and not isinstance(v, bool) else v] for k, v in mapping.items()]
+        rows = [[k, str(v) if isinstance(v, numbers.Integral) and not isinstance(v, bool) else v]
+                for k, v in mapping.items()]
         header = [self.translate("PlotwiseReport", "Item"), self.translate("PlotwiseReport", "Value")]
         self.table(header, rows)  # whole numbers (seeds, ids) without separators
 

@@ -249,9 +249,12 @@ def _histogram_axes(lo, hi, sx, left, top, pw, ph, height, x_label, y_label):
         f'<line x1="{left}" y1="{top}" x2="{left}" y2="{top + ph}" stroke="{INK}"/>',
     ]
     for t in _axis_ticks(lo, hi):
-        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" fill="{INK}">{escape(format_number(float(t)))}</text>')
-    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(x_label)}</text>')
-    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
+        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" '
+                   f'fill="{INK}">{escape(format_number(float(t)))}</text>')
+    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" '
+               f'fill="{INK}">{escape(x_label)}</text>')
+    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" '
+               f'transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
     return out
 
 
@@ -274,13 +277,16 @@ def histogram_svg(edges, counts, marks=(), x_label="", y_label="cells", width=90
     out = [f'<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 {width} {height}" role="img">']
     for i, c in enumerate(counts):
         x0, x1 = sx(edges[i]), sx(edges[i + 1])
-        out.append(f'<rect x="{x0:.1f}" y="{sy(c):.1f}" width="{max(x1 - x0 - 0.5, 0.5):.1f}" height="{top + ph - sy(c):.1f}" fill="{ACCENT}" fill-opacity="0.75"/>')
+        out.append(f'<rect x="{x0:.1f}" y="{sy(c):.1f}" width="{max(x1 - x0 - 0.5, 0.5):.1f}" '
+                   f'height="{top + ph - sy(c):.1f}" fill="{ACCENT}" fill-opacity="0.75"/>')
     for m in marks:
         x = sx(m)
-        out.append(f'<line x1="{x:.1f}" y1="{top}" x2="{x:.1f}" y2="{top + ph}" stroke="#b4443b" stroke-width="2" stroke-dasharray="6,3"/>')
+        out.append(f'<line x1="{x:.1f}" y1="{top}" x2="{x:.1f}" y2="{top + ph}" stroke="#b4443b" stroke-width="2" '
+                   f'stroke-dasharray="6,3"/>')
     out.extend(_histogram_axes(lo, hi, sx, left, top, pw, ph, height, x_label, y_label))
     if mark_label and len(marks):
-        out.append(f'<text x="{left + pw}" y="{top + 10}" font-size="11" {FONT} text-anchor="end" fill="#b4443b">{escape(mark_label)}</text>')
+        out.append(f'<text x="{left + pw}" y="{top + 10}" font-size="11" {FONT} text-anchor="end" '
+                   f'fill="#b4443b">{escape(mark_label)}</text>')
     out.append("</svg>")
     return "".join(out)
 
@@ -290,7 +296,8 @@ def interval_chart_svg(labels, estimates, lows, highs, value_label="", width=900
     n = len(labels)
     row_h, left, right, top = 30, 160, 30, 20
     height = top + row_h * n + 50
-    values = np.array([v for v in list(lows) + list(highs) + list(estimates) if v is not None and np.isfinite(v)] or [0.0, 1.0])
+    values = [v for v in list(lows) + list(highs) + list(estimates) if v is not None and np.isfinite(v)]
+    values = np.array(values or [0.0, 1.0])
     lo = min(0.0, values.min())
     hi = values.max() if values.max() > lo else lo + 1.0
     if reference is not None and np.isfinite(reference):
@@ -305,21 +312,28 @@ def interval_chart_svg(labels, estimates, lows, highs, value_label="", width=900
     for t in _axis_ticks(lo, hi):
         x = sx(t)
         out.append(f'<line x1="{x:.1f}" y1="{top - 5}" x2="{x:.1f}" y2="{top + row_h * n}" stroke="{RULE}"/>')
-        out.append(f'<text x="{x:.1f}" y="{top + row_h * n + 16}" font-size="11" {FONT} text-anchor="middle" fill="{INK}">{escape(format_number(float(t)))}</text>')
+        out.append(f'<text x="{x:.1f}" y="{top + row_h * n + 16}" font-size="11" {FONT} text-anchor="middle" '
+                   f'fill="{INK}">{escape(format_number(float(t)))}</text>')
     if reference is not None and np.isfinite(reference):
         x = sx(reference)
-        out.append(f'<line x1="{x:.1f}" y1="{top - 5}" x2="{x:.1f}" y2="{top + row_h * n}" stroke="#b4443b" stroke-dasharray="5,3" stroke-width="1.5"/>')
-        out.append(f'<text x="{x + 4:.1f}" y="{top + 6}" font-size="11" {FONT} fill="#b4443b">{escape(reference_label)}</text>')
+        out.append(f'<line x1="{x:.1f}" y1="{top - 5}" x2="{x:.1f}" y2="{top + row_h * n}" stroke="#b4443b" '
+                   f'stroke-dasharray="5,3" stroke-width="1.5"/>')
+        out.append(f'<text x="{x + 4:.1f}" y="{top + 6}" font-size="11" {FONT} '
+                   f'fill="#b4443b">{escape(reference_label)}</text>')
     for i, (label, est, a, b) in enumerate(zip(labels, estimates, lows, highs)):
         y = top + row_h * i + row_h / 2
-        out.append(f'<text x="{left - 8}" y="{y + 4:.1f}" font-size="12" {FONT} text-anchor="end" fill="{INK}">{escape(label)}</text>')
+        out.append(f'<text x="{left - 8}" y="{y + 4:.1f}" font-size="12" {FONT} text-anchor="end" '
+                   f'fill="{INK}">{escape(label)}</text>')
         if a is not None and b is not None and np.isfinite(a) and np.isfinite(b):
-            out.append(f'<line x1="{sx(a):.1f}" y1="{y:.1f}" x2="{sx(b):.1f}" y2="{y:.1f}" stroke="{INK}" stroke-width="2"/>')
+            out.append(f'<line x1="{sx(a):.1f}" y1="{y:.1f}" x2="{sx(b):.1f}" y2="{y:.1f}" stroke="{INK}" '
+                       f'stroke-width="2"/>')
             for v in (a, b):
-                out.append(f'<line x1="{sx(v):.1f}" y1="{y - 6:.1f}" x2="{sx(v):.1f}" y2="{y + 6:.1f}" stroke="{INK}" stroke-width="2"/>')
+                out.append(f'<line x1="{sx(v):.1f}" y1="{y - 6:.1f}" x2="{sx(v):.1f}" y2="{y + 6:.1f}" stroke="{INK}" '
+                           f'stroke-width="2"/>')
         if est is not None and np.isfinite(est):
             out.append(f'<circle cx="{sx(est):.1f}" cy="{y:.1f}" r="5" fill="{category_colour(i)}" stroke="{INK}"/>')
-    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 8}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(value_label)}</text>')
+    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 8}" font-size="12" {FONT} text-anchor="middle" '
+               f'fill="{INK}">{escape(value_label)}</text>')
     out.append("</svg>")
     return "".join(out)
 
@@ -336,10 +350,13 @@ def bar_chart_svg(labels, values, value_label="", width=900, highlight=None):
     for i, (label, v) in enumerate(zip(labels, vals)):
         y = top + row_h * i
         colour = ACCENT if highlight is None or i == highlight else MUTED
-        out.append(f'<text x="{left - 8}" y="{y + row_h / 2 + 4:.1f}" font-size="12" {FONT} text-anchor="end" fill="{INK}">{escape(label)}</text>')
+        out.append(f'<text x="{left - 8}" y="{y + row_h / 2 + 4:.1f}" font-size="12" {FONT} text-anchor="end" '
+                   f'fill="{INK}">{escape(label)}</text>')
         out.append(f'<rect x="{left}" y="{y + 4}" width="{v / vmax * pw:.1f}" height="{row_h - 8}" fill="{colour}"/>')
-        out.append(f'<text x="{left + v / vmax * pw + 6:.1f}" y="{y + row_h / 2 + 4:.1f}" font-size="11" {FONT} fill="{INK}">{escape(format_number(float(v)))}</text>')
-    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 8}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(value_label)}</text>')
+        out.append(f'<text x="{left + v / vmax * pw + 6:.1f}" y="{y + row_h / 2 + 4:.1f}" font-size="11" {FONT} '
+                   f'fill="{INK}">{escape(format_number(float(v)))}</text>')
+    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 8}" font-size="12" {FONT} text-anchor="middle" '
+               f'fill="{INK}">{escape(value_label)}</text>')
     out.append("</svg>")
     return "".join(out)
 
@@ -364,9 +381,11 @@ def line_chart_svg(x, series, x_label="", y_label="", width=900, height=320):
     out.append(f'<line x1="{left}" y1="{top + ph}" x2="{left + pw}" y2="{top + ph}" stroke="{INK}"/>')
     out.append(f'<line x1="{left}" y1="{top}" x2="{left}" y2="{top + ph}" stroke="{INK}"/>')
     for t in _axis_ticks(xlo, xhi):
-        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" fill="{INK}">{escape(format_number(float(t)))}</text>')
+        out.append(f'<text x="{sx(t):.1f}" y="{top + ph + 16}" font-size="11" {FONT} text-anchor="middle" '
+                   f'fill="{INK}">{escape(format_number(float(t)))}</text>')
     for t in _axis_ticks(ylo, yhi):
-        out.append(f'<text x="{left - 6}" y="{sy(t) + 4:.1f}" font-size="11" {FONT} text-anchor="end" fill="{INK}">{escape(format_number(float(t)))}</text>')
+        out.append(f'<text x="{left - 6}" y="{sy(t) + 4:.1f}" font-size="11" {FONT} text-anchor="end" '
+                   f'fill="{INK}">{escape(format_number(float(t)))}</text>')
     for i, (label, values) in enumerate(series):
         values = np.asarray(values, dtype=float)
         pts = " ".join(f"{sx(a):.1f},{sy(b):.1f}" for a, b in zip(x, values) if np.isfinite(b))
@@ -375,13 +394,16 @@ def line_chart_svg(x, series, x_label="", y_label="", width=900, height=320):
         ly = top + 16 + 20 * i
         out.append(f'<rect x="{left + pw + 12}" y="{ly - 10}" width="14" height="4" fill="{colour}"/>')
         out.append(f'<text x="{left + pw + 32}" y="{ly - 4}" font-size="11" {FONT} fill="{INK}">{escape(label)}</text>')
-    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" fill="{INK}">{escape(x_label)}</text>')
-    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
+    out.append(f'<text x="{left + pw / 2:.1f}" y="{height - 6}" font-size="12" {FONT} text-anchor="middle" '
+               f'fill="{INK}">{escape(x_label)}</text>')
+    out.append(f'<text x="14" y="{top + ph / 2:.1f}" font-size="12" {FONT} text-anchor="middle" fill="{INK}" '
+               f'transform="rotate(-90 14 {top + ph / 2:.1f})">{escape(y_label)}</text>')
     out.append("</svg>")
     return "".join(out)
 
 
-def stacked_histogram_svg(edges, counts, colours, labels=(), marks=(), x_label="", y_label="cells", width=900, height=320):
+def stacked_histogram_svg(edges, counts, colours, labels=(), marks=(), x_label="", y_label="cells", width=900,
+                          height=320):
     """A histogram whose bars are stacked by group (rows of ``counts``, e.g. strata), with a legend.
 
     ``counts`` is (groups, bins) over bins ``edges``; ``colours`` gives one colour per group;
@@ -411,15 +433,18 @@ def stacked_histogram_svg(edges, counts, colours, labels=(), marks=(), x_label="
             h = sh(counts[g, i])
             if h <= 0:
                 continue
-            out.append(f'<rect x="{x0:.1f}" y="{base - h:.1f}" width="{max(x1 - x0 - 0.5, 0.5):.1f}" height="{h:.1f}" fill="{colours[g % len(colours)]}"/>')
+            out.append(f'<rect x="{x0:.1f}" y="{base - h:.1f}" width="{max(x1 - x0 - 0.5, 0.5):.1f}" height="{h:.1f}" '
+                       f'fill="{colours[g % len(colours)]}"/>')
             base -= h
     for m in marks:
         x = sx(m)
-        out.append(f'<line x1="{x:.1f}" y1="{top}" x2="{x:.1f}" y2="{top + ph}" stroke="{INK}" stroke-width="1.5" stroke-dasharray="6,3"/>')
+        out.append(f'<line x1="{x:.1f}" y1="{top}" x2="{x:.1f}" y2="{top + ph}" stroke="{INK}" stroke-width="1.5" '
+                   f'stroke-dasharray="6,3"/>')
     out.extend(_histogram_axes(lo, hi, sx, left, top, pw, ph, height, x_label, y_label))
     for g, label in enumerate(labels):
         y = top + 14 + 20 * g
-        out.append(f'<rect x="{left + pw + 14}" y="{y - 10}" width="12" height="12" fill="{colours[g % len(colours)]}"/>')
+        out.append(f'<rect x="{left + pw + 14}" y="{y - 10}" width="12" height="12" '
+                   f'fill="{colours[g % len(colours)]}"/>')
         out.append(f'<text x="{left + pw + 32}" y="{y}" font-size="11" {FONT} fill="{INK}">{escape(label)}</text>')
     out.append("</svg>")
     return "".join(out)

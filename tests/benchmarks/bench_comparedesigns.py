@@ -60,7 +60,8 @@ def engine_run():
     print(f"set-up (cells in frame and strata, S_h):        {t1 - t0:7.2f} s")
     print(f"5 designs × {REPLICATES} replicates, n = {N_UNITS}:        {t2 - t1:7.2f} s")
     total = t2 - t0
-    print(f"total                                           {total:7.2f} s   ({total / TARGET_S:.2f} of the 60 s target)")
+    print(f"total                                           {total:7.2f} s   "
+          f"({total / TARGET_S:.2f} of the 60 s target)")
     for p in comparison.performance:
         print(f"  {p.name:<24s} rel. bias {p.rel_bias:+.3f}  RMSE {p.rmse:8.1f}  coverage {p.coverage:.3f}")
     return total, density, gt, frame
@@ -110,7 +111,8 @@ def main():
     if per is not None:
         extrapolated = per * 5 * REPLICATES
         print(f"host algorithms, one design and replicate:       {per:7.2f} s  → about {extrapolated / 3600:.1f} h for "
-              f"5 × {REPLICATES}, a population raster per replicate and design; ratio host / engine ≈ {extrapolated / total:,.0f})")
+              f"5 × {REPLICATES}, a population raster per replicate and design; "
+              f"ratio host / engine ≈ {extrapolated / total:,.0f})")
 
 
 if __name__ == "__main__":

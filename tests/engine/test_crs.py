@@ -6,7 +6,8 @@ from pyproj.database import query_utm_crs_info
 from plotwise.processing.engine.crs import utm_epsg_for_lonlat
 
 
-@pytest.mark.parametrize("lon, lat", [(33.4, -23.1), (-71.2, -44.9), (8.05, 46.5), (151.0, -33.8), (-179.5, 0.5), (36.6, 1.0)])
+@pytest.mark.parametrize("lon, lat",
+                         [(33.4, -23.1), (-71.2, -44.9), (8.05, 46.5), (151.0, -33.8), (-179.5, 0.5), (36.6, 1.0)])
 def test_utm_zone_matches_pyproj_database(lon, lat):
     # pyproj.database.query_utm_crs_info lists the WGS 84 UTM zones whose area of use holds the point
     infos = query_utm_crs_info(datum_name="WGS 84", area_of_interest=AreaOfInterest(lon, lat, lon, lat))
@@ -30,7 +31,9 @@ PROBE = """
 import importlib.util, json, os, sys, warnings
 if sys.argv[1] == "engine":
     spec = importlib.util.spec_from_file_location("engine_probe", {init!r}, submodule_search_locations=[{folder!r}])
-    module = importlib.util.module_from_spec(spec); sys.modules["engine_probe"] = module; spec.loader.exec_module(module)
+    module = importlib.util.module_from_spec(spec)
+    sys.modules["engine_probe"] = module
+    spec.loader.exec_module(module)
 with warnings.catch_warnings(record=True) as caught:
     warnings.simplefilter("always")
     import pyproj

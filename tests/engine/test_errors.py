@@ -117,7 +117,8 @@ def test_layout_messages():
     )
     with pytest.raises(InputError) as err:
         layout.counts_from_field([2.5], [4], "n_alloc")
-    assert err.value.message == "n_alloc is not a whole number for feature(s) 4. Round the allocation to whole units first."
+    assert err.value.message == ("n_alloc is not a whole number for feature(s) 4. "
+                                 "Round the allocation to whole units first.")
 
 
 def test_frame_stratification_estimation_messages():

@@ -28,7 +28,8 @@ POLYGONS = {
     "holes_and_parts": Point(0, 0).buffer(1000).difference(Point(300, 0).buffer(300)).union(Point(3000, 0).buffer(500)),
     "comb": comb(),
     "L": Polygon([(0, 0), (10, 0), (10, 1), (1, 1), (1, 10), (0, 10)]),
-    "spiral_notch": Polygon([(0, 0), (10, 0), (10, 10), (2, 10), (2, 4), (6, 4), (6, 6), (4, 6), (4, 8), (8, 8), (8, 2), (0, 2)]),
+    "spiral_notch": Polygon([(0, 0), (10, 0), (10, 10), (2, 10), (2, 4), (6, 4), (6, 6), (4, 6), (4, 8), (8, 8), (8, 2),
+                             (0, 2)]),
 }
 
 
@@ -67,9 +68,11 @@ def test_uniform_points_pass_chisquare(method):
     assert geo.contains_xy(poly, pts[:, 0], pts[:, 1]).all()
     cells = [box(i, j, i + 1, j + 1) for i in range(10) for j in range(10)]
     expected = np.array([poly.intersection(c).area for c in cells]) / poly.area * len(pts)
-    counts = np.array(
-        [((pts[:, 0] >= c.bounds[0]) & (pts[:, 0] < c.bounds[2]) & (pts[:, 1] >= c.bounds[1]) & (pts[:, 1] < c.bounds[3])).sum() for c in cells]
-    )
+    counts = np.array([
+        ((pts[:, 0] >= c.bounds[0]) & (pts[:, 0] < c.bounds[2]) & (pts[:, 1] >= c.bounds[1])
+         & (pts[:, 1] < c.bounds[3])).sum()
+        for c in cells
+    ])
     keep = expected > 0
     assert counts[~keep].sum() == 0
     assert stats.chisquare(counts[keep], expected[keep]).pvalue > 0.001  # scipy.stats.chisquare

@@ -23,8 +23,11 @@ class NoHost(importlib.abc.MetaPathFinder):
 
 sys.meta_path.insert(0, NoHost())
 sys.path[:] = [p for p in sys.path if p not in ("", ".")]
-spec = importlib.util.spec_from_file_location("plotwise", {root!r} + "/__init__.py", submodule_search_locations=[{root!r}])
-package = importlib.util.module_from_spec(spec); sys.modules["plotwise"] = package; spec.loader.exec_module(package)
+spec = importlib.util.spec_from_file_location("plotwise", {root!r} + "/__init__.py",
+                                              submodule_search_locations=[{root!r}])
+package = importlib.util.module_from_spec(spec)
+sys.modules["plotwise"] = package
+spec.loader.exec_module(package)
 failed = []
 for name in {modules!r}:
     try:

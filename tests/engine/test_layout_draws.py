@@ -81,7 +81,8 @@ def test_inclusion_is_uniform_over_seeds(stratum, design, cover, bearing):
     )
     xs, ys, share = cell_expected(stratum)
     res = chisquare_counts(pts, xs, ys, share)
-    print(f"{L.DESIGNS[design]} ({cover} cover, bearing {bearing:g}): {len(pts)} units, chi-square p = {res.pvalue:.4f}")
+    print(f"{L.DESIGNS[design]} ({cover} cover, bearing {bearing:g}): {len(pts)} units, "
+          f"chi-square p = {res.pvalue:.4f}")
     assert res.pvalue > 0.001  # scipy.stats.chisquare, uniform inclusion
 
 

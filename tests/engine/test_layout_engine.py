@@ -61,7 +61,8 @@ def test_bad_n_field_names_the_feature(values, word, ids):
 def test_invalid_repaired_and_empty_skipped_with_warnings():
     bow = Polygon([(0, 0), (200, 200), (200, 0), (0, 200)])
     flat = Polygon([(0, 0), (10, 0), (20, 0)])
-    frame = L.prepare_strata([bow, flat, box(300, 0, 500, 200)], feature_ids=[1, 2, 3], strata=["a", "a", "b"], n_units=6)
+    frame = L.prepare_strata([bow, flat, box(300, 0, 500, 200)], feature_ids=[1, 2, 3], strata=["a", "a", "b"],
+                             n_units=6)
     text = " ".join(frame.warnings)
     assert "repaired" in text and "1" in text
     assert "skipped" in text and frame.skipped_ids == (2,)
@@ -71,7 +72,8 @@ def test_invalid_repaired_and_empty_skipped_with_warnings():
 def test_inside_stratum_too_small_names_it():
     spec = L.LayoutSpec(shape=2, size=30, inside=True)
     with pytest.raises(InputError, match="Stratum tiny") as err:
-        L.prepare_strata([box(0, 0, 1000, 1000), box(1000, 0, 1040, 1000)], strata=["big", "tiny"], n_units=6, spec=spec)
+        L.prepare_strata([box(0, 0, 1000, 1000), box(1000, 0, 1040, 1000)], strata=["big", "tiny"], n_units=6,
+                         spec=spec)
     assert "SIZE" in str(err.value)
 
 
@@ -108,14 +110,16 @@ def test_points_use_inclusion_density():
 def test_lon_lat_match_pyproj():
     spec = L.LayoutSpec()
     lay = L.layout_units([box(500000, 9000000, 502000, 9002000)], spec, np.random.default_rng(4), n_units=8, crs=CRS)
-    lon, lat = pyproj.Transformer.from_crs(CRS, "EPSG:4326", always_xy=True).transform(lay.centres[:, 0], lay.centres[:, 1])
+    to_wgs84 = pyproj.Transformer.from_crs(CRS, "EPSG:4326", always_xy=True)
+    lon, lat = to_wgs84.transform(lay.centres[:, 0], lay.centres[:, 1])
     np.testing.assert_allclose(lay.lon, lon)  # pyproj as the oracle
     np.testing.assert_allclose(lay.lat, lat)
     assert (lay.lat < 0).all()
 
 
 def test_unit_ids_and_strata_order():
-    lay = L.layout_units([box(0, 0, 100, 100), box(100, 0, 300, 100)], L.LayoutSpec(reserve=1), np.random.default_rng(2), strata=[2, 1], n_units=6)
+    lay = L.layout_units([box(0, 0, 100, 100), box(100, 0, 300, 100)], L.LayoutSpec(reserve=1),
+                         np.random.default_rng(2), strata=[2, 1], n_units=6)
     assert lay.unit_id[0] == "S1-001" and lay.stratum[0] == 1
     assert lay.unit_id[-1].startswith("S2-")
 

@@ -21,7 +21,7 @@ def plotwise_provider(qgis_app, qgis_processing):
 def run_alg(plotwise_provider):
     """Run a Processing algorithm by id and return its results (raises QgsProcessingException on failure)."""
     import processing
-    from qgis.core import QgsProcessingContext, QgsProcessingFeedback
+    from qgis.core import QgsProcessingFeedback
 
     def run(algorithm_id, parameters, feedback=None, context=None):
         return processing.run(algorithm_id, parameters, feedback=feedback or QgsProcessingFeedback(), context=context)

@@ -7,7 +7,6 @@ qgis_core = pytest.importorskip("qgis.core")
 from qgis.core import (  # noqa: E402
     QgsApplication,
     QgsFeature,
-    QgsField,
     QgsGeometry,
     QgsProcessingException,
     QgsVectorLayer,

@@ -64,7 +64,8 @@ def test_simulate_counts_on_polygons(run_alg, demo_reserve_outputs):
         feature.setAttributes([f"U{i}", None])
         features.append(feature)
     units.dataProvider().addFeatures(features)
-    result = run_alg("plotwise:simulatecounts", {"UNITS": units, "ANIMALS": animals, "DETECTION": 1.0, "SEED": 3, "OUTPUT": "memory:"})
+    result = run_alg("plotwise:simulatecounts",
+                     {"UNITS": units, "ANIMALS": animals, "DETECTION": 1.0, "SEED": 3, "OUTPUT": "memory:"})
     out = result["OUTPUT"]
     got = {f["unit_id"]: f["count"] for f in out.getFeatures()}
     for i, (x, y, side) in enumerate(boxes):
@@ -82,7 +83,8 @@ def test_simulate_counts_point_units_need_area(run_alg, demo_reserve_outputs):
     feature.setAttributes(["S1"])
     units.dataProvider().addFeatures([feature])
     with pytest.raises(QgsProcessingException, match="area_m2"):
-        run_alg("plotwise:simulatecounts", {"UNITS": units, "ANIMALS": demo_reserve_outputs["OUTPUT_ANIMALS"], "OUTPUT": "memory:"})
+        run_alg("plotwise:simulatecounts",
+                {"UNITS": units, "ANIMALS": demo_reserve_outputs["OUTPUT_ANIMALS"], "OUTPUT": "memory:"})
 
 
 def test_reserve_units_stay_unsurveyed_unless_asked(run_alg, demo_reserve_outputs):

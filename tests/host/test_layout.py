@@ -68,8 +68,8 @@ def test_balanced_circles_fields_gpx_and_report(registered, tmp_path):
     report = tmp_path / "layout.html"
     result = processing.run("plotwise:layout", base_parameters(strata_layer(), OUTPUT_GPX=str(gpx), REPORT=str(report)))
     out = result["OUTPUT"]
-    assert out.fields().names() == ["unit_id", "stratum", "role", "draw_ord", "area_m2", "incl_p", "weight", "lon", "lat",
-                                    "count", "design", "edge", "reach_m"]
+    assert out.fields().names() == ["unit_id", "stratum", "role", "draw_ord", "area_m2", "incl_p", "weight", "lon",
+                                    "lat", "count", "design", "edge", "reach_m"]
     feats = list(out.getFeatures())
     assert len(feats) == 6 + 4 + 3 + 3 * 2
     geoms = {s: shapely_wkt.loads(w) for s, _, w in STRATA}
@@ -152,7 +152,8 @@ def test_bad_n_field_names_the_feature(registered, value, word):
 def test_stratum_too_small_for_inside_units(registered):
     import processing
 
-    rows = STRATA + [(4, 2, "POLYGON((506000 9000000, 506030 9000000, 506030 9001000, 506000 9001000, 506000 9000000))")]
+    rows = STRATA + [
+        (4, 2, "POLYGON((506000 9000000, 506030 9000000, 506030 9001000, 506000 9001000, 506000 9000000))")]
     with pytest.raises(QgsProcessingException, match="tratum 4 is too small"):
         processing.run("plotwise:layout", base_parameters(strata_layer(rows)))
 
@@ -173,7 +174,8 @@ def test_invalid_repaired_and_empty_skipped_with_warnings(registered):
     ]
 
     fb = RecordingFeedback()
-    result = processing.run("plotwise:layout", base_parameters(strata_layer(rows), INSIDE=False, MIN_SPACING=0.0), feedback=fb)
+    result = processing.run("plotwise:layout", base_parameters(strata_layer(rows), INSIDE=False, MIN_SPACING=0.0),
+                            feedback=fb)
     text = " ".join(fb.warnings)
     assert "repaired" in text and "skipped" in text
     assert {f["stratum"] for f in result["OUTPUT"].getFeatures()} == {1, 2, 3, 4}

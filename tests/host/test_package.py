@@ -16,7 +16,8 @@ pytestmark = pytest.mark.package
 def package_zip():
     run = subprocess.run(["make", "-s", "package"], cwd=REPO, capture_output=True, text=True, timeout=300)
     assert run.returncode == 0, run.stderr
-    version = next(l.split("=", 1)[1] for l in (REPO / "metadata.txt").read_text().splitlines() if l.startswith("version="))
+    version = next(line.split("=", 1)[1] for line in (REPO / "metadata.txt").read_text().splitlines()
+                   if line.startswith("version="))
     path = REPO / "dist" / f"plotwise-{version}.zip"
     assert path.exists()
     return path
@@ -25,7 +26,8 @@ def package_zip():
 def test_zip_holds_runtime_files_only(package_zip):
     names = zipfile.ZipFile(package_zip).namelist()
     assert {n.split("/")[0] for n in names} == {"plotwise"}
-    for required in ("plotwise/__init__.py", "plotwise/metadata.txt", "plotwise/processing/provider.py", "plotwise/LICENSE"):
+    for required in ("plotwise/__init__.py", "plotwise/metadata.txt", "plotwise/processing/provider.py",
+                     "plotwise/LICENSE"):
         assert required in names
     for name in names:
         assert not name.startswith(("plotwise/tests/", "plotwise/.venv", "plotwise/scripts/", "plotwise/.git"))
@@ -37,7 +39,8 @@ def test_zip_installs_and_runs_in_a_fresh_profile(package_zip, tmp_path):
     plugins = profile / "profiles" / "default" / "python" / "plugins"
     plugins.mkdir(parents=True)
     zipfile.ZipFile(package_zip).extractall(plugins)
-    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(profile), QT_QPA_PLATFORM="offscreen", XDG_RUNTIME_DIR=str(tmp_path))
+    env = dict(os.environ, QGIS_CUSTOM_CONFIG_PATH=str(profile), QT_QPA_PLATFORM="offscreen",
+               XDG_RUNTIME_DIR=str(tmp_path))
 
     def qgis_process(*args):
         run = subprocess.run([QGIS_PROCESS, *args], capture_output=True, text=True, env=env, timeout=300)

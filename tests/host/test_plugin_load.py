@@ -75,14 +75,15 @@ def _load_plugin(tmp_path, block_shapely):
     run = subprocess.run([sys.executable, str(path)], capture_output=True, text=True, timeout=120, env=env)
     assert run.returncode == 0, run.stderr
     assert "Traceback" not in run.stderr, run.stderr
-    line = next(l for l in run.stdout.splitlines() if l.startswith("RESULT "))
+    line = next(text for text in run.stdout.splitlines() if text.startswith("RESULT "))
     return json.loads(line[len("RESULT "):])
 
 
 def test_plugin_registers_and_unloads_provider(tmp_path):
     result = _load_plugin(tmp_path, block_shapely=False)
     assert result["provider"] is True
-    assert {"plotwise:demoreserve", "plotwise:simulatecounts", "plotwise:layout", "plotwise:estimate"} <= set(result["algorithms"])
+    expected = {"plotwise:demoreserve", "plotwise:simulatecounts", "plotwise:layout", "plotwise:estimate"}
+    assert expected <= set(result["algorithms"])
     assert result["bar"] == [] and result["after_unload"] is False
 
 

@@ -43,7 +43,8 @@ def exported(demo_reserve_outputs, tmp_path_factory):
     pdf = print_layout.export_pdf(layout, folder / "map.pdf")
     project_path = folder / "map.qgz"
     assert project.write(str(project_path))
-    subprocess.run(["pdftoppm", "-r", str(DPI), "-png", "-singlefile", str(pdf), str(folder / "page")], check=True, timeout=60)
+    subprocess.run(["pdftoppm", "-r", str(DPI), "-png", "-singlefile", str(pdf), str(folder / "page")], check=True,
+                   timeout=60)
     del layout
     yield {"pdf": Path(pdf), "png": folder / "page.png", "project": project_path}
     # tear down in order (layouts, then layers): a standalone project can crash when left to the collector
@@ -187,10 +188,12 @@ def test_survey_map_with_the_estimate_table(demo_reserve_outputs, tmp_path):
         pdf = print_layout.print_survey_map(
             project, [layers["Excluded areas"], layers["Reserve boundary"]], estimates,
             print_layout.estimate_table_columns("km²"), tmp_path / "demo.qgz", tmp_path / "demo.pdf", note="test")
-        text = subprocess.run(["pdftotext", "-layout", str(pdf), "-"], capture_output=True, text=True, check=True).stdout
+        text = subprocess.run(["pdftotext", "-layout", str(pdf), "-"], capture_output=True, text=True,
+                              check=True).stdout
         words = " ".join(unicodedata.normalize("NFKC", text).split())
         # NFKC also turns "km²" into "km2"
-        for expected in ("Density per km2", "Units next time", "all", "7.50", "208", "392", "0.147", "Reserve boundary"):
+        for expected in ("Density per km2", "Units next time", "all", "7.50", "208", "392", "0.147",
+                         "Reserve boundary"):
             assert expected in words, expected
         assert "NULL" not in words  # a missing value prints as a dash
         root = project.layerTreeRoot()

@@ -21,9 +21,9 @@ How it is checked, and why this way:
 * **Nothing overflows its width at 1,024 px.** Nothing is injected into a report. A
   wrapper page (the test's own, with a measuring script) holds each report unchanged in an
   ``<iframe srcdoc>`` exactly 1,024 px wide, sandboxed without scripts; ``srcdoc`` frames
-  share the wrapper's origin (``allow-same-origin``), so the script can read their layout. For every element it checks that the right edge lies
-  within the frame's width, and that no element with clipped or scrolled overflow (such as
-  the horizontal scroller around a wide table) is wider inside than its box. The document's
+  share the wrapper's origin (``allow-same-origin``), so the script can read their layout. For every element it
+  checks that the right edge lies within the frame's width, and that no element with clipped or scrolled
+  overflow (such as the horizontal scroller around a wide table) is wider inside than its box. The document's
   ``scrollWidth`` must equal its ``clientWidth``. The result is written into the wrapper's DOM
   and read with ``--dump-dom``. A canary frame with a 1,200 px wide block proves the
   measurement sees an overflow.
@@ -142,7 +142,8 @@ def run_in_frames(folder, documents, check_source, argument, stem):
     scripts (``allow-same-origin`` only, so the wrapper can read them): a script that escaped
     into a report could not run, or block Chromium with a dialog."""
     frames = "".join(
-        f'<iframe id="{html.escape(name)}" sandbox="allow-same-origin" srcdoc="{html.escape(text, quote=True)}"></iframe>'
+        f'<iframe id="{html.escape(name)}" sandbox="allow-same-origin" '
+        f'srcdoc="{html.escape(text, quote=True)}"></iframe>'
         for name, text in documents.items()
     )
     runner = (
@@ -177,8 +178,10 @@ def measure_reports(folder, documents):
 class ExternalReferences(html.parser.HTMLParser):
     """Elements and attributes that could load something from outside the document."""
 
-    FORBIDDEN_TAGS = {"script", "link", "iframe", "frame", "object", "embed", "base", "applet", "audio", "video", "source"}
-    URL_ATTRIBUTES = {"src", "href", "xlink:href", "srcset", "action", "formaction", "poster", "data", "background", "manifest"}
+    FORBIDDEN_TAGS = {"script", "link", "iframe", "frame", "object", "embed", "base", "applet", "audio", "video",
+                      "source"}
+    URL_ATTRIBUTES = {"src", "href", "xlink:href", "srcset", "action", "formaction", "poster", "data", "background",
+                      "manifest"}
 
     def __init__(self):
         super().__init__(convert_charrefs=True)
@@ -440,7 +443,8 @@ def rendered(chain_reports, tmp_path_factory):
     """One Chromium run measures every report (and two canaries); one run per report takes its PNG."""
     folder = tmp_path_factory.mktemp("chromium")
     documents = {alg.split(":")[1]: Path(path).read_text(encoding="utf-8") for alg, path in chain_reports.items()}
-    documents["canary-wide"] = '<!DOCTYPE html><html><body style="margin:0"><div style="width:1200px">wide</div></body></html>'
+    documents["canary-wide"] = ('<!DOCTYPE html><html><body style="margin:0"><div style="width:1200px">wide</div>'
+                                '</body></html>')
     measured, requests = measure_reports(folder, documents)
     keep = os.environ.get("PLOTWISE_REPORT_PNG")
     png_folder = Path(keep) if keep else folder

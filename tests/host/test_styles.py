@@ -237,7 +237,8 @@ def test_toolbox_run_loads_the_demo_reserve_styled(plotwise_provider, tmp_path):
         boundary = layers["Reserve boundary"].renderer().symbol()
         assert boundary.symbolLayer(0).properties()["outline_color"].startswith("31,58,68")  # INK
         assert INK == "#1f3a44"
-        assert layers["Excluded areas (lake, inholding)"].renderer().symbol().symbolLayer(0).properties()["style"] == "b_diagonal"
+        hatching = layers["Excluded areas (lake, inholding)"].renderer().symbol().symbolLayer(0).properties()
+        assert hatching["style"] == "b_diagonal"
         assert layers["Simulated animals"].renderer().symbol().color().name() == styles.ANIMAL_COLOUR
         ramp = layers["Expected animals per km²"].renderer().shader().rasterShaderFunction().colorRampItemList()
         assert ramp[-1].color.name() == styles.DENSITY_RAMP[-1]
@@ -256,7 +257,8 @@ def test_every_spatial_output_loads_styled(plotwise_provider, demo_reserve_outpu
     project = QgsProject.instance()
     project.removeAllMapLayers()
     try:
-        run_chain(tmp_path, demo_reserve_outputs, run=lambda alg, parameters: processing.runAndLoadResults(alg, parameters))
+        run_chain(tmp_path, demo_reserve_outputs,
+                  run=lambda alg, parameters: processing.runAndLoadResults(alg, parameters))
         spatial = [layer for layer in project.mapLayers().values()
                    if isinstance(layer, QgsRasterLayer) or layer.isSpatial()]
         applied = {layer.name(): layer.customProperty(styles.STYLE_PROPERTY) for layer in spatial}

@@ -97,7 +97,7 @@ def _toolbox(tmp_path_factory, locale, override=True):
                QGIS_CUSTOM_CONFIG_PATH=private, QGIS_OPTIONS_PATH=private)
     run = subprocess.run([sys.executable, str(script)], capture_output=True, text=True, timeout=180, env=env)
     assert run.returncode == 0, run.stderr
-    line = next((l for l in run.stdout.splitlines() if l.startswith("RESULT ")), None)
+    line = next((text for text in run.stdout.splitlines() if text.startswith("RESULT ")), None)
     assert line, run.stdout + run.stderr
     return json.loads(line[len("RESULT "):])
 
