@@ -1,4 +1,4 @@
-# Plotwise: make setup | test | demo | package | translations | update-translations
+# Plotwise: make setup | lint | test | demo | package | translations | update-translations
 # Every target is idempotent. `make test` and `make demo` each start from nothing on Debian 12.
 
 SHELL := /bin/bash
@@ -71,8 +71,9 @@ update-translations:
 lint: $(VENV)/.ready
 	$(VENV)/bin/ruff check .
 
-# The suite twice: the host's stock shapely (1.8 on Debian 12), then shapely 2.0.
-test: setup
+# Lint first (a long line or an unused import fails the build), then the suite twice: the host's stock
+# shapely (1.8 on Debian 12), then shapely 2.0.
+test: setup lint
 	$(MAKE) --no-print-directory test-shapely18
 	$(MAKE) --no-print-directory test-shapely2
 
