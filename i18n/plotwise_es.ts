@@ -4,451 +4,177 @@
 <context>
     <name>Allocate</name>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="59"/>
+        <location filename="../processing/algorithms/allocate.py" line="65"/>
         <source>Allocate effort to strata</source>
         <translation>Asignar el esfuerzo a los estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="59"/>
-        <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
-
-Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
-
-Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall density meets it, with the finite-population correction; else a budget (if above 0, needs the cost field); else the total number of units.
-
-Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches a bound keeps it and the rest is shared among the others, until stable. Whole units are rounded by largest remainder, keeping the total.
-
-Area field: the stratum area in hectares (default area_ha, as written by the stratification); when it is empty or missing, the polygon area is used.
-SD field: the pilot standard deviation of counts per unit. Without it the covariate SD (cov_sd) is used as a proxy, which assumes that counts scale with the covariate; without either, the allocation is proportional.
-Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
-
-Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-        <translation type="obsolete">Decide cuántas unidades de muestreo recibe cada estrato y muestra de antemano la precisión que aportan.
-
-Métodos: igual; proporcional al área del estrato; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, cap. 5); óptima con coste, n_h ∝ A_h·S_h/√c_h, con un presupuesto C = c0 + Σ c_h·n_h (Cochran 1977, cap. 5).
-
-Objetivo: un CV objetivo (si es mayor que 0) busca el menor total cuyo coeficiente de variación esperado de la densidad global lo cumple, con la corrección por población finita; si no, un presupuesto (si es mayor que 0, necesita el campo de coste); si no, el número total de unidades.
-
-Límites: al menos el mínimo por estrato (2 por defecto, para que se pueda estimar la varianza de cada estrato) y como máximo las unidades que caben (área del estrato / área de la unidad). Un estrato que alcanza un límite lo conserva y el resto se reparte entre los demás, hasta que se estabiliza. Las unidades enteras se redondean por el mayor resto, conservando el total.
-
-Campo de área: el área del estrato en hectáreas (area_ha por defecto, como lo escribe la estratificación); si está vacío o falta, se usa el área del polígono.
-Campo de DE: la desviación estándar piloto de los conteos por unidad. Sin él se usa como sustituto la DE de la covariable (cov_sd), lo que supone que los conteos siguen a la covariable; sin ninguno de los dos, la asignación es proporcional.
-Campo de media: el conteo medio piloto por unidad, necesario para los CV y para un CV objetivo. Campo de coste: coste de muestrear una unidad en cada estrato (por ejemplo, jornadas de campo).
-
-Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad del estrato), y un informe que compara la asignación igual, la proporcional y la de Neyman con el mismo total.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="90"/>
+        <location filename="../processing/algorithms/allocate.py" line="104"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="93"/>
+        <location filename="../processing/algorithms/allocate.py" line="107"/>
         <source>Stratum identifier field</source>
         <translation>Campo identificador del estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="99"/>
+        <location filename="../processing/algorithms/allocate.py" line="113"/>
         <source>Stratum area field (hectares; empty: polygon area)</source>
         <translation>Campo de área del estrato (hectáreas; vacío: área del polígono)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="105"/>
+        <location filename="../processing/algorithms/allocate.py" line="119"/>
         <source>Pilot SD of counts per unit</source>
         <translation>Desviación estándar piloto de los conteos por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="105"/>
+        <location filename="../processing/algorithms/allocate.py" line="119"/>
         <source>Pilot mean count per unit</source>
         <translation>Conteo medio piloto por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="105"/>
+        <location filename="../processing/algorithms/allocate.py" line="119"/>
         <source>Cost per unit</source>
         <translation>Coste por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="113"/>
+        <location filename="../processing/algorithms/allocate.py" line="127"/>
         <source>Costs are field days</source>
         <translation>Los costes son jornadas de campo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="116"/>
+        <location filename="../processing/algorithms/allocate.py" line="130"/>
         <source>Fixed cost of the survey (c0, in the cost unit)</source>
         <translation>Coste fijo del muestreo (c0, en la unidad de coste)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Allocation method</source>
         <translation>Método de asignación</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Equal</source>
         <translation>Igual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Proportional to area</source>
         <translation>Proporcional al área</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="292"/>
+        <location filename="../processing/algorithms/allocate.py" line="321"/>
         <source>Neyman</source>
         <translation>Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Optimal with cost</source>
         <translation>Óptima con coste</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="130"/>
+        <location filename="../processing/algorithms/allocate.py" line="147"/>
         <source>Total number of units</source>
         <translation>Número total de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="135"/>
+        <location filename="../processing/algorithms/allocate.py" line="152"/>
         <source>Budget (0: not used; needs the cost field)</source>
         <translation>Presupuesto (0: no se usa; necesita el campo de coste)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="141"/>
+        <location filename="../processing/algorithms/allocate.py" line="158"/>
         <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
         <translation>CV objetivo de la densidad global (0: no se usa; p. ej. 0.2)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="147"/>
+        <location filename="../processing/algorithms/allocate.py" line="164"/>
         <source>Area of one sample unit (m²)</source>
         <translation>Área de una unidad de muestreo (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="153"/>
+        <location filename="../processing/algorithms/allocate.py" line="170"/>
         <source>Minimum units per stratum</source>
         <translation>Mínimo de unidades por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="167"/>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
         <source>Strata with allocation</source>
         <translation>Estratos con asignación</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="169"/>
+        <location filename="../processing/algorithms/allocate.py" line="100"/>
         <source>Expected CV of the overall density</source>
         <translation>CV esperado de la densidad global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="175"/>
+        <location filename="../processing/algorithms/allocate.py" line="189"/>
         <source>The strata layer could not be opened.</source>
         <translation>No se pudo abrir la capa de estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="190"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
-        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}»: se usan las áreas de los polígonos.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="194"/>
+        <location filename="../processing/algorithms/allocate.py" line="195"/>
         <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
         <translation>La capa «{layer}» no tiene ningún estrato con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="209"/>
+        <location filename="../processing/algorithms/allocate.py" line="273"/>
         <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
         <translation>campo «{name}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="256"/>
         <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
         <translation>No hay campo de DE piloto: se usa como sustituto la DE de la covariable («{field}»). Esto supone que los conteos siguen a la covariable; sustitúyala por la DE de un muestreo piloto cuando la tenga. Los errores estándar esperados quedan entonces en unidades de la covariable, no en conteos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>polygon area</source>
         <translation>área del polígono</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>pilot SD</source>
         <translation>desviación estándar piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>pilot mean</source>
         <translation>media piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>cost</source>
         <translation>coste</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="268"/>
+        <location filename="../processing/algorithms/allocate.py" line="311"/>
         <source>The output layer could not be created.</source>
         <translation>No se pudo crear la capa de salida.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="278"/>
+        <location filename="../processing/algorithms/allocate.py" line="219"/>
         <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
         <translation>{total} unidades asignadas ({method}); CV esperado de la densidad global: {cv}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="291"/>
+        <location filename="../processing/algorithms/allocate.py" line="320"/>
         <source>equal</source>
         <translation>igual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="291"/>
+        <location filename="../processing/algorithms/allocate.py" line="320"/>
         <source>proportional to area</source>
         <translation>proporcional al área</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="292"/>
+        <location filename="../processing/algorithms/allocate.py" line="321"/>
         <source>optimal with cost</source>
         <translation>óptima con coste</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="293"/>
-        <source>Allocation of survey effort</source>
-        <translation type="obsolete">Asignación del esfuerzo de muestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="295"/>
-        <source>field days</source>
-        <translation type="obsolete">jornadas de campo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="295"/>
-        <source>cost units</source>
-        <translation type="obsolete">unidades de coste</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="296"/>
-        <source>units in total</source>
-        <translation type="obsolete">unidades en total</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="296"/>
-        <source>method</source>
-        <translation type="obsolete">método</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="298"/>
-        <source>expected CV of the overall density</source>
-        <translation type="obsolete">CV esperado de la densidad global</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
-        <source>field days needed</source>
-        <translation type="obsolete">jornadas de campo necesarias</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="302"/>
-        <source>a total number of units</source>
-        <translation type="obsolete">un número total de unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="302"/>
-        <source>a budget</source>
-        <translation type="obsolete">un presupuesto</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="302"/>
-        <source>a target CV</source>
-        <translation type="obsolete">un CV objetivo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Strata layer</source>
-        <translation type="obsolete">Capa de estratos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Computation CRS</source>
-        <translation type="obsolete">SRC de cálculo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Method asked for</source>
-        <translation type="obsolete">Método solicitado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Method applied</source>
-        <translation type="obsolete">Método aplicado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Target</source>
-        <translation type="obsolete">Objetivo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Total asked for</source>
-        <translation type="obsolete">Total solicitado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Budget</source>
-        <translation type="obsolete">Presupuesto</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Target CV</source>
-        <translation type="obsolete">CV objetivo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Unit area (m²)</source>
-        <translation type="obsolete">Área de la unidad (m²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>SD field</source>
-        <translation type="obsolete">Campo de DE</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source> (covariate proxy)</source>
-        <translation type="obsolete"> (sustituto por la covariable)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Mean field</source>
-        <translation type="obsolete">Campo de media</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Cost field</source>
-        <translation type="obsolete">Campo de coste</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Fixed cost c0</source>
-        <translation type="obsolete">Coste fijo c0</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="321"/>
-        <source>Units per stratum</source>
-        <translation type="obsolete">Unidades por estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="322"/>
-        <source>SE of mean per unit (covariate units)</source>
-        <translation type="obsolete">Error estándar de la media por unidad (unidades de la covariable)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="322"/>
-        <source>SE of mean count per unit</source>
-        <translation type="obsolete">Error estándar del conteo medio por unidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Stratum</source>
-        <translation type="obsolete">Estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Units that fit</source>
-        <translation type="obsolete">Unidades que caben</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Lower bound</source>
-        <translation type="obsolete">Límite inferior</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Share before rounding</source>
-        <translation type="obsolete">Cuota antes del redondeo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="324"/>
-        <source>Units (n_alloc)</source>
-        <translation type="obsolete">Unidades (n_alloc)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="324"/>
-        <source>Sampling fraction</source>
-        <translation type="obsolete">Fracción de muestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="328"/>
-        <source>SE of density (per km²)</source>
-        <translation type="obsolete">Error estándar de la densidad (por km²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="330"/>
-        <source>Expected CV (exp_cv)</source>
-        <translation type="obsolete">CV esperado (exp_cv)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="342"/>
-        <source>all strata</source>
-        <translation type="obsolete">todos los estratos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="352"/>
-        <source>units per stratum</source>
-        <translation type="obsolete">unidades por estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="352"/>
-        <source>Units allocated to each stratum</source>
-        <translation type="obsolete">Unidades asignadas a cada estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="356"/>
-        <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-        <translation type="obsolete">La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="361"/>
-        <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-        <translation type="obsolete">{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="361"/>
-        <source>Field days needed</source>
-        <translation type="obsolete">Jornadas de campo necesarias</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="361"/>
-        <source>Cost of the design</source>
-        <translation type="obsolete">Coste del diseño</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="368"/>
-        <source>What the choice of method buys, at {n} units</source>
-        <translation type="obsolete">Lo que aporta la elección del método, con {n} unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="369"/>
-        <source>Method</source>
-        <translation type="obsolete">Método</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="369"/>
-        <source>stratum {label}</source>
-        <translation type="obsolete">estrato {label}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="371"/>
-        <source>Variance relative to the applied allocation</source>
-        <translation type="obsolete">Varianza relativa a la asignación aplicada</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="373"/>
-        <source>Expected CV</source>
-        <translation type="obsolete">CV esperado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="384"/>
-        <source>Without standard deviations the precision of the designs cannot be compared.</source>
-        <translation type="obsolete">Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="62"/>
+        <location filename="../processing/algorithms/allocate.py" line="68"/>
         <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
 
 Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
@@ -481,32 +207,32 @@ Disposición prevista: la corrección por población finita 1 − n·a/A solo se
 Salida: los estratos con n_alloc (unidades) y exp_cv (CV esperado de la densidad del estrato), y un informe que compara la asignación igual, la proporcional y la de Neyman con el mismo total.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Layout to come (decides the finite-population correction)</source>
         <translation>Disposición prevista (decide la corrección por población finita)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Simple random (units may overlap: no correction)</source>
         <translation>Aleatorio simple (las unidades pueden solaparse: sin corrección)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Simple random with a minimum spacing of at least the unit&apos;s width</source>
         <translation>Aleatorio simple con una separación mínima de al menos el ancho de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="185"/>
+        <location filename="../processing/algorithms/allocate.py" line="236"/>
         <source>Layer &apos;{layer}&apos; has no area field: the polygon areas are used.</source>
         <translation>La capa «{layer}» no tiene campo de área: se usan las áreas de los polígonos.</translation>
     </message>
@@ -576,7 +302,7 @@ Las estimaciones de un muestreo sobre este marco valen solo para el marco. Exclu
         <translation>Franja interior en el borde (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="269"/>
+        <location filename="../processing/algorithms/buildframe.py" line="102"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
@@ -591,863 +317,255 @@ Las estimaciones de un muestreo sobre este marco valen solo para el marco. Exclu
         <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="151"/>
+        <location filename="../processing/algorithms/buildframe.py" line="187"/>
         <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
         <translation>MASK_MIN o MASK_MAX tiene valor pero no se ha dado ningún ráster de máscara (MASK). Elija un ráster o deje vacíos ambos límites.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="156"/>
+        <location filename="../processing/algorithms/buildframe.py" line="192"/>
         <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
         <translation>El valor mínimo aceptado de la máscara (MASK_MIN = {lo}) es mayor que el máximo (MASK_MAX = {hi}). Intercámbielos o deje uno vacío.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="169"/>
+        <location filename="../processing/algorithms/buildframe.py" line="202"/>
         <source>Layer &apos;{layer}&apos; (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
         <translation>La capa «{layer}» (INPUT) no tiene ningún polígono con área positiva. Elija la capa de polígonos del área de estudio.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="188"/>
+        <location filename="../processing/algorithms/buildframe.py" line="219"/>
         <source>Mask raster &apos;{layer}&apos; is given without limits: only its NoData cells are excluded.</source>
         <translation>El ráster de máscara «{layer}» se ha dado sin límites: solo se excluyen sus celdas NoData.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="195"/>
+        <location filename="../processing/algorithms/buildframe.py" line="226"/>
         <source>Mask raster &apos;{layer}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
         <translation>El ráster de máscara «{layer}» no es un archivo ráster que GDAL pueda leer. Guárdelo primero como GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="199"/>
+        <location filename="../processing/algorithms/buildframe.py" line="230"/>
         <source>Reading mask raster '{layer}'…</source>
         <translation>Leyendo el ráster de máscara «{layer}»…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="212"/>
+        <location filename="../processing/algorithms/buildframe.py" line="242"/>
         <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
         <translation>Ráster de máscara reproyectado al vuelo a {crs}: {rows} × {cols} celdas de {size} m.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="219"/>
+        <location filename="../processing/algorithms/buildframe.py" line="249"/>
         <source>Mask raster &apos;{layer}&apos; does not cover {n} of the {total} cells over the study area&apos;s extent; those cells count as NoData and are excluded.</source>
         <translation>El ráster de máscara «{layer}» no cubre {n} de las {total} celdas de la extensión del área de estudio; esas celdas cuentan como NoData y se excluyen.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="243"/>
+        <location filename="../processing/algorithms/buildframe.py" line="270"/>
         <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
         <translation>Marco: {kept} ha de {total} ha ({pct} %).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="273"/>
-        <source>study area (ha)</source>
-        <translation>área de estudio (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="273"/>
-        <source>frame (ha)</source>
-        <translation>marco (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="273"/>
-        <source>kept</source>
-        <translation>conservado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="278"/>
-        <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
-        <translation>Las estimaciones de un muestreo sobre este marco valen solo para el marco ({ha} ha), no para toda el área de estudio.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="282"/>
-        <source>Area kept and area lost to each rule</source>
-        <translation>Área conservada y área perdida por cada regla</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="284"/>
-        <source>lost to the excluded polygons (EXCLUDE)</source>
-        <translation>perdida por los polígonos excluidos (EXCLUDE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="285"/>
-        <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
-        <translation>perdida por la máscara ráster (MASK fuera del intervalo aceptado, o NoData)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="286"/>
-        <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
-        <translation>perdida por la franja interior del borde (EDGE_BUFFER)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="288"/>
-        <source>study area</source>
-        <translation>área de estudio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="291"/>
-        <source>sampling frame (kept)</source>
-        <translation>marco de muestreo (conservado)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>Item</source>
-        <translation>Elemento</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="292"/>
-        <source>Area (ha)</source>
-        <translation>Área (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="292"/>
-        <source>% of study area</source>
-        <translation>% del área de estudio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="293"/>
-        <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
-        <translation>Las reglas se aplican en el orden mostrado; a cada una solo se le imputa el área que seguía en el marco, de modo que el marco y las áreas perdidas suman el área de estudio.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="298"/>
-        <source>Mask raster</source>
-        <translation>Ráster de máscara</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>Value</source>
-        <translation>Valor</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cells tested over the study area&apos;s extent</source>
-        <translation>celdas comprobadas en la extensión del área de estudio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cell size (m)</source>
-        <translation>tamaño de celda (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cells below the lowest accepted value</source>
-        <translation>celdas por debajo del valor mínimo aceptado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cells above the highest accepted value</source>
-        <translation>celdas por encima del valor máximo aceptado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>NoData cells (including cells outside the raster)</source>
-        <translation>celdas NoData (incluidas las celdas fuera del ráster)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>reprojected on the fly (nearest neighbour)</source>
-        <translation>reproyectado al vuelo (vecino más próximo)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>yes</source>
-        <translation>sí</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>no</source>
-        <translation>no</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="308"/>
-        <source>Map</source>
-        <translation>Mapa</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="309"/>
-        <source>Frame (filled), with the areas lost to each rule</source>
-        <translation>Marco (relleno), con las áreas perdidas por cada regla</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="312"/>
-        <source>(none)</source>
-        <translation>(ninguno)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="316"/>
-        <source>, projected from {src} (UTM zone of the study area&apos;s centre)</source>
-        <translation>, proyectado desde {src} (zona UTM del centro del área de estudio)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Study area (INPUT)</source>
-        <translation>Área de estudio (INPUT)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Areas to exclude (EXCLUDE)</source>
-        <translation>Zonas que excluir (EXCLUDE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Mask raster (MASK)</source>
-        <translation>Ráster de máscara (MASK)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Lowest accepted mask value (MASK_MIN)</source>
-        <translation>Valor mínimo aceptado de la máscara (MASK_MIN)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Highest accepted mask value (MASK_MAX)</source>
-        <translation>Valor máximo aceptado de la máscara (MASK_MAX)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Inward edge buffer (EDGE_BUFFER, m)</source>
-        <translation>Franja interior del borde (EDGE_BUFFER, m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>CRS of the computation and the output</source>
-        <translation>SRC del cálculo y de la salida</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="358"/>
-        <source>sampling frame</source>
-        <translation>marco de muestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="361"/>
-        <source>excluded polygons</source>
-        <translation>polígonos excluidos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="365"/>
-        <source>raster mask</source>
-        <translation>máscara ráster</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="367"/>
-        <source>study area boundary</source>
-        <translation>límite del área de estudio</translation>
     </message>
 </context>
 <context>
     <name>CompareDesigns</name>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="62"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="63"/>
         <source>Compare survey designs by simulation</source>
         <translation>Comparar diseños de muestreo por simulación</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="87"/>
-        <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
-
-Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
-
-Each replicate realises a population: Poisson counts in every surface cell, or with an overdispersion k above 0 negative binomial counts (gamma-Poisson, variance μ + μ²/k per cell). Every chosen design is then laid out with the layout engine, its units count the animals in the cells they cover (the part inside the frame or their stratum), and the abundance is estimated with the estimation engine (ratio estimator, t interval with Satterthwaite df; Cochran 1977). All designs survey the same populations, so their differences are not blurred.
-
-Designs: simple random; stratified with proportional allocation; stratified with Neyman allocation, n_h ∝ A_h·S_h with S_h the SD of a unit's count implied by the surface (Neyman 1934); systematic grid with a random start (its n varies); spatially balanced (balanced acceptance sampling, Robertson et al. 2013).
-
-Units: point station (size = counting radius), square plot (side), circular plot (radius), line transect (length, counting a strip of the given half-width on each side). Bearing in degrees clockwise from grid north, −1 random. Keep units inside: centres are drawn from each stratum shrunk by the unit's radius, as the layout's option does. Otherwise a unit reaching over the edge of its stratum or of the frame counts only the part inside, and its area is that part.
-
-Output table, one row per design: rel_bias (relative bias against each population's true total), emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % intervals holding the truth), mean_n (mean units surveyed), alloc (units per stratum), recommend (1 for the recommended design: the lowest RMSE among designs whose intervals cover at least 90 %).
-
-Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
-
-The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="obsolete">Antes del trabajo de campo: ¿qué diseño, y cuántas unidades, dan una estimación útil en esta zona? El algoritmo simula muchos muestreos de una superficie de densidad plausible e informa de cómo le fue a cada diseño.
-
-Superficie: un ráster de animales esperados por km² (de un modelo de hábitat, un mapa de expertos o un muestreo anterior), reproyectado al SRC del marco cuando hace falta. Marco: el marco de muestreo. Estratos (opcionales, con el campo de estrato, 'stratum' por defecto): necesarios para los dos diseños estratificados.
-
-Cada réplica genera una población: conteos de Poisson en cada celda de la superficie o, con una sobredispersión k mayor que 0, conteos binomiales negativos (gamma-Poisson, varianza μ + μ²/k por celda). Luego cada diseño elegido se dispone con el motor de disposición, sus unidades cuentan los animales de las celdas que cubren (la parte dentro del marco o de su estrato) y la abundancia se estima con el motor de estimación (estimador de razón, intervalo t con gl de Satterthwaite; Cochran 1977). Todos los diseños muestrean las mismas poblaciones, de modo que sus diferencias no se difuminan.
-
-Diseños: aleatorio simple; estratificado con asignación proporcional; estratificado con asignación de Neyman, n_h ∝ A_h·S_h con S_h la DE del conteo de una unidad implicada por la superficie (Neyman 1934); cuadrícula sistemática con inicio aleatorio (su n varía); espacialmente equilibrado (muestreo por aceptación equilibrada, Robertson et al. 2013).
-
-Unidades: estación puntual (tamaño = radio de conteo), parcela cuadrada (lado), parcela circular (radio), transecto lineal (longitud, contando una franja de la semianchura indicada a cada lado). Rumbo en grados en sentido horario desde el norte de la cuadrícula, −1 aleatorio. Mantener las unidades dentro: los centros se sortean en cada estrato reducido en el radio de la unidad, como hace la opción de la disposición. Si no, una unidad que sobresale del borde de su estrato o del marco solo cuenta la parte interior, y su área es esa parte.
-
-Tabla de salida, una fila por diseño: rel_bias (sesgo relativo frente al total verdadero de cada población), emp_se (DE de los errores), rmse (raíz del error cuadrático medio) y rmse_mcse (su error estándar de Monte Carlo), rel_rmse (rmse / total verdadero medio), mean_cv (CV estimado medio), coverage (proporción de intervalos al 95 % que contienen la verdad), mean_n (media de unidades muestreadas), alloc (unidades por estrato), recommend (1 para el diseño recomendado: la menor RECM entre los diseños cuyos intervalos cubren al menos el 90 %).
-
-Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación se repite con cada n y el informe dibuja la RECM frente a n, mostrando dónde más esfuerzo deja de compensar.
-
-La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Density surface (expected animals per km²)</source>
         <translation>Superficie de densidad (animales esperados por km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="112"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="126"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="115"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="129"/>
         <source>Strata (for the stratified designs)</source>
         <translation>Estratos (para los diseños estratificados)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="120"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="134"/>
         <source>Stratum field</source>
         <translation>Campo de estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Designs to compare</source>
         <translation>Diseños que comparar</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Simple random</source>
         <translation>Aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Stratified, proportional allocation</source>
         <translation>Estratificado, asignación proporcional</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
-        <source>Stratified, Neyman allocation</source>
-        <translation type="obsolete">Estratificado, asignación de Neyman</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="134"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="151"/>
         <source>Number of units</source>
         <translation>Número de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Unit shape</source>
         <translation>Forma de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Point station</source>
         <translation>Estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Square plot</source>
         <translation>Parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Circular plot</source>
         <translation>Parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Line transect</source>
         <translation>Transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="146"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
         <source>Unit size (m): counting radius, side, radius or transect length</source>
         <translation>Tamaño de la unidad (m): radio de conteo, lado, radio o longitud del transecto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="152"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
         <source>Half-width of a transect&apos;s counting strip (m)</source>
         <translation>Semianchura de la franja de conteo de un transecto (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="158"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
         <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
         <translation>Rumbo de las unidades y de la cuadrícula (grados desde el norte de la cuadrícula; −1 aleatorio)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="164"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
         <translation>Mantener las unidades por completo dentro de su estrato (como la opción de la disposición)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="170"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="190"/>
         <source>Simulated surveys per design</source>
         <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="176"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="196"/>
         <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
         <translation>Sobredispersión k de la binomial negativa (0: conteos de Poisson)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Variance estimator for the grid and balanced designs</source>
         <translation>Estimador de la varianza para los diseños en cuadrícula y equilibrados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Simple random sampling formula</source>
         <translation>Fórmula del muestreo aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>Vecindario local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="190"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="210"/>
         <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
         <translation>Rango de unidades para la RECM frente a n (p. ej. 20, 40, 80 o 20:100:20; vacío: ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="116"/>
         <source>Design comparison</source>
         <translation>Comparación de diseños</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="206"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="120"/>
         <source>Recommended design</source>
         <translation>Diseño recomendado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="212"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="226"/>
         <source>The density surface could not be opened.</source>
         <translation>No se pudo abrir la superficie de densidad.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="215"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="274"/>
         <source>The sampling frame could not be opened.</source>
         <translation>No se pudo abrir el marco de muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="280"/>
         <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
         <translation>La capa «{layer}» no tiene ningún polígono con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="233"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
-        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}». Elija el campo que contiene los identificadores de estrato.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="298"/>
         <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
         <translation>Capa «{layer}»: el campo «{field}» está vacío (NULL) en las entidades {ids}. Dé un valor a cada estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="313"/>
         <source>No strata were given: the stratified designs are left out ({names}).</source>
         <translation>No se dieron estratos: se dejan fuera los diseños estratificados ({names}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="254"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="317"/>
         <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
         <translation>Los diseños estratificados necesitan estratos: indique la capa de estratos o elija otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="272"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="235"/>
         <source>Reading the density surface…</source>
         <translation>Leyendo la superficie de densidad…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="278"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="241"/>
         <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
         <translation>La superficie de densidad se reproyectó a {crs} (bilineal) para ajustarse al marco.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="303"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
         <source>Simulating {n} units…</source>
         <translation>Simulando {n} unidades…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="309"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>{n} units were left out of the range: {why}</source>
         <translation>{n} unidades quedaron fuera del rango: {why}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="316"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
         <source>The output table could not be created.</source>
         <translation>No se pudo crear la tabla de salida.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="335"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="264"/>
         <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
         <translation>Diseño recomendado: {name} (RECM {rmse:.1f} animales, {rel:.1%} del total; cobertura {cov:.0%}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="352"/>
-        <source>Survey designs compared by simulation</source>
-        <translation type="obsolete">Diseños de muestreo comparados por simulación</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="358"/>
-        <source>recommended design</source>
-        <translation type="obsolete">diseño recomendado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
-        <source>its RMSE (animals)</source>
-        <translation type="obsolete">su RECM (animales)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="360"/>
-        <source>its RMSE relative to the total</source>
-        <translation type="obsolete">su RECM relativa al total</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="361"/>
-        <source>its 95 % interval coverage</source>
-        <translation type="obsolete">cobertura de sus intervalos al 95 %</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="363"/>
-        <source>expected animals in the frame</source>
-        <translation type="obsolete">animales esperados en el marco</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>point station</source>
-        <translation type="obsolete">estación puntual</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>square plot</source>
-        <translation type="obsolete">parcela cuadrada</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>circular plot</source>
-        <translation type="obsolete">parcela circular</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>line transect</source>
-        <translation type="obsolete">transecto lineal</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>counting radius</source>
-        <translation type="obsolete">radio de conteo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>side</source>
-        <translation type="obsolete">lado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>radius</source>
-        <translation type="obsolete">radio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>length</source>
-        <translation type="obsolete">longitud</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="370"/>
-        <source>, strip half-width {w:g} m</source>
-        <translation type="obsolete">, semianchura de franja {w:g} m</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="372"/>
-        <source>Density surface</source>
-        <translation type="obsolete">Superficie de densidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="474"/>
-        <source>Strata</source>
-        <translation type="obsolete">Estratos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
-        <source>none</source>
-        <translation type="obsolete">ninguno</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
-        <source>feature id</source>
-        <translation type="obsolete">identificador de entidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="376"/>
-        <source>Computation CRS</source>
-        <translation type="obsolete">SRC de cálculo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="377"/>
-        <source>Surface cell</source>
-        <translation type="obsolete">Celda de la superficie</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="378"/>
-        <source>Sub-cells per cell side (for counting)</source>
-        <translation type="obsolete">Subceldas por lado de celda (para el conteo)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="379"/>
-        <source>Unit</source>
-        <translation type="obsolete">Unidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="380"/>
-        <source>Counted area per unit (m²)</source>
-        <translation type="obsolete">Área contada por unidad (m²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
-        <source>Bearing</source>
-        <translation type="obsolete">Rumbo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
-        <source>random</source>
-        <translation type="obsolete">aleatorio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
-        <source>Units wholly inside their stratum</source>
-        <translation type="obsolete">Unidades por completo dentro de su estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
-        <source>yes</source>
-        <translation type="obsolete">sí</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
-        <source>no</source>
-        <translation type="obsolete">no</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
-        <source>Counts per cell</source>
-        <translation type="obsolete">Conteos por celda</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
-        <source>negative binomial, k = {k:g}</source>
-        <translation type="obsolete">binomial negativa, k = {k:g}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
-        <source>Poisson</source>
-        <translation type="obsolete">Poisson</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
-        <source>Variance estimator (grid, balanced)</source>
-        <translation type="obsolete">Estimador de la varianza (cuadrícula, equilibrado)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
-        <source>local neighbourhood</source>
-        <translation type="obsolete">vecindario local</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
-        <source>simple random sampling formula</source>
-        <translation type="obsolete">fórmula del muestreo aleatorio simple</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="389"/>
-        <source>Confidence level</source>
-        <translation type="obsolete">Nivel de confianza</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="390"/>
-        <source>Seed</source>
-        <translation type="obsolete">Semilla</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="395"/>
-        <source>How the designs did at {n} units</source>
-        <translation type="obsolete">Resultados de los diseños con {n} unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Design</source>
-        <translation type="obsolete">Diseño</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Mean units surveyed</source>
-        <translation type="obsolete">Media de unidades muestreadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Relative bias</source>
-        <translation type="obsolete">Sesgo relativo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Empirical SE (animals)</source>
-        <translation type="obsolete">Error estándar empírico (animales)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="510"/>
-        <source>RMSE (animals)</source>
-        <translation type="obsolete">RECM (animales)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
-        <source>± Monte Carlo SE</source>
-        <translation type="obsolete">± error estándar de Monte Carlo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
-        <source>RMSE / total</source>
-        <translation type="obsolete">RECM / total</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
-        <source>Mean estimated CV</source>
-        <translation type="obsolete">CV estimado medio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
-        <source>95 % interval coverage</source>
-        <translation type="obsolete">Cobertura de los intervalos al 95 %</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
-        <source>Surveys without an estimate</source>
-        <translation type="obsolete">Muestreos sin estimación</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="410"/>
-        <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-        <translation type="obsolete">Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
-        <source>RMSE of the abundance (animals)</source>
-        <translation type="obsolete">RECM de la abundancia (animales)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
-        <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-        <translation type="obsolete">Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="421"/>
-        <source>Recommendation</source>
-        <translation type="obsolete">Recomendación</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="423"/>
-        <source>No design gave estimates: see the warnings.</source>
-        <translation type="obsolete">Ningún diseño dio estimaciones: vea las advertencias.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="425"/>
-        <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-        <translation type="obsolete">{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="431"/>
-        <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-        <translation type="obsolete">{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="438"/>
-        <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-        <translation type="obsolete">Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="443"/>
-        <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-        <translation type="obsolete">El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="452"/>
-        <source>How the simulation works</source>
-        <translation type="obsolete">Cómo funciona la simulación</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="453"/>
-        <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-        <translation type="obsolete">Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición, cada unidad cuenta los animales de las celdas cuyos centros cubre (solo la parte dentro del marco, o dentro de su propio estrato en los diseños estratificados), y la abundancia se estima con el motor de estimación: el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="462"/>
-        <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-        <translation type="obsolete">Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>Stratum</source>
-        <translation type="obsolete">Estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>Area (km²)</source>
-        <translation type="obsolete">Área (km²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>Mean expected count per unit</source>
-        <translation type="obsolete">Conteo esperado medio por unidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>S_h (count SD per unit)</source>
-        <translation type="obsolete">S_h (DE del conteo por unidad)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="479"/>
-        <source>Units, proportional</source>
-        <translation type="obsolete">Unidades, proporcional</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="481"/>
-        <source>Units, Neyman</source>
-        <translation type="obsolete">Unidades, Neyman</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="491"/>
-        <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-        <translation type="obsolete">S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="498"/>
-        <source>RMSE against the number of units</source>
-        <translation type="obsolete">RECM frente al número de unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
-        <source>number of units</source>
-        <translation type="obsolete">número de unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
-        <source>RMSE of the abundance estimate against the number of units</source>
-        <translation type="obsolete">RECM de la estimación de la abundancia frente al número de unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="508"/>
-        <source>Units</source>
-        <translation type="obsolete">Unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="516"/>
-        <source>{a} → {b} units: RMSE {change:+.0%}</source>
-        <translation type="obsolete">{a} → {b} unidades: RECM {change:+.0%}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="517"/>
-        <source>For {name}: </source>
-        <translation type="obsolete">Para {name}: </translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="518"/>
-        <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-        <translation type="obsolete">La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="69"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="70"/>
         <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -1480,22 +598,22 @@ Rango de unidades (opcional), p. ej. '20, 40, 80' o '20:100:20': la comparación
 La simulación supone que la superficie es correcta y que se cuenta cada animal de una unidad. Los resultados valen lo que vale la superficie. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Stratified, Neyman allocation with the true S_h (best case)</source>
         <translation>Estratificado, asignación de Neyman con la S_h verdadera (mejor caso)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Stratified, Neyman allocation from a pilot survey</source>
         <translation>Estratificado, asignación de Neyman a partir de un muestreo piloto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>Vecindario local, escalado a la fórmula simple (nuestra variante)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="196"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="216"/>
         <source>Pilot units per stratum for the pilot-based Neyman design</source>
         <translation>Unidades piloto por estrato para el diseño de Neyman basado en un piloto</translation>
     </message>
@@ -1503,17 +621,17 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
 <context>
     <name>DemoReserve</name>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="34"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="33"/>
         <source>Demo reserve with a simulated population</source>
         <translation>Reserva de demostración con una población simulada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="37"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="36"/>
         <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Construye Hollin Ridge Reserve, una reserva de montaña inventada para demostraciones, formación y pruebas, y una población simulada de velmar, un antílope herbívoro inventado. Nada de ello describe un lugar o una especie reales.&lt;/p&gt;&lt;p&gt;La reserva abarca 250–350 km² en WGS 84 / UTM zona 36S, con un límite irregular, un lago y un enclave privado (ambos en la capa de zonas excluidas), un ráster de altitud (relieve fractal sintético con un escarpe abrupto) y un ráster de verdor (un índice de vegetación de 0 a 1, correlacionado con la altitud, más ruido).&lt;/p&gt;&lt;p&gt;Los velmar viven en grupos: un proceso de conglomerados de Thomas no homogéneo cuyos centros de grupo son más densos donde el verdor es alto y la altitud baja. El total verdadero se conoce, y el número esperado de animales por km² se escribe como ráster, para poder contrastar los diseños de muestreo y las estimaciones con la verdad.&lt;/p&gt;&lt;h3&gt;Parámetros&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: la misma semilla da la misma reserva y los mismos animales. 0 sortea una y la registra.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Tamaño de celda del ráster&lt;/b&gt;: metros, de 10 a 500 (50 por defecto).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Límite de la reserva (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zonas excluidas (&lt;i&gt;kind&lt;/i&gt; lake o inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rásteres de altitud (m), verdor (0–1) y velmar esperados por km²&lt;/li&gt;&lt;li&gt;Animales (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un informe HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Referencias: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="63"/>
         <source>Raster cell size (m)</source>
         <translation>Tamaño de celda del ráster (m)</translation>
     </message>
@@ -1523,159 +641,44 @@ La simulación supone que la superficie es correcta y que se cuenta cada animal 
         <translation>Límite de la reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="70"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="71"/>
         <source>Excluded areas (lake, inholding)</source>
         <translation>Zonas excluidas (lago, enclave)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="71"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="74"/>
         <source>Elevation (m)</source>
         <translation>Altitud (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="72"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="75"/>
         <source>Greenness (0–1)</source>
         <translation>Verdor (0–1)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="73"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="76"/>
         <source>Expected animals per km²</source>
         <translation>Animales esperados por km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="75"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="78"/>
         <source>Simulated animals</source>
         <translation>Animales simulados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="81"/>
         <source>True number of animals</source>
         <translation>Número verdadero de animales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="78"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="82"/>
         <source>Expected number of animals</source>
         <translation>Número esperado de animales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="122"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="132"/>
         <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
         <translation>{name}: {area:,.1f} km², {n:,} velmar en {g:,} grupos (esperados: {e:,.0f}).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
-        <source>Demo reserve: {name}</source>
-        <translation>Reserva de demostración: {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="141"/>
-        <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
-        <translation>Datos inventados para demostraciones, formación y pruebas. {name} y el velmar ({desc}) no existen.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>reserve area</source>
-        <translation>superficie de la reserva</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>true number of velmar</source>
-        <translation>número verdadero de velmar</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>expected number</source>
-        <translation>número esperado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>groups</source>
-        <translation>grupos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>Seed</source>
-        <translation>Semilla</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>CRS</source>
-        <translation>SRC</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>Mean group size (mu)</source>
-        <translation>Tamaño medio de los grupos (mu)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>Group spread, SD of members around the centre (m)</source>
-        <translation>Dispersión de los grupos, desviación estándar de los miembros alrededor del centro (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="157"/>
-        <source>Areas</source>
-        <translation>Zonas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Part</source>
-        <translation>Parte</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Area (km²)</source>
-        <translation>Área (km²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Reserve</source>
-        <translation>Reserva</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Lake (excluded)</source>
-        <translation>Lago (excluido)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Private inholding (excluded)</source>
-        <translation>Enclave privado (excluido)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="163"/>
-        <source>Map</source>
-        <translation>Mapa</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Lake</source>
-        <translation>Lago</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Private inholding</source>
-        <translation>Enclave privado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Velmar (every third animal)</source>
-        <translation>Velmar (uno de cada tres animales)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
-        <translation>Hollin Ridge Reserve, las zonas excluidas y los animales simulados.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="173"/>
-        <source>How the population was simulated</source>
-        <translation>Cómo se simuló la población</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="174"/>
-        <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
-        <translation>Los centros de grupo forman un proceso de Poisson no homogéneo sobre el hábitat (la reserva sin el lago); su intensidad es proporcional a exp(0,9 × verdor estandarizado − 0,6 × altitud estandarizada). Cada grupo tiene un número de miembros de Poisson (media {mu:g}) dispersos alrededor de su centro con un desplazamiento normal de {sigma:g} m; los miembros que caen fuera del hábitat no forman parte de la población. Es un proceso de conglomerados de Thomas. Su total esperado y su varianza se calculan a partir de la superficie de intensidad en la malla del ráster.</translation>
     </message>
 </context>
 <context>
@@ -1934,11 +937,6 @@ Seguridad en el terreno: el muestreo de distancias envía observadores a lo larg
         <translation>Remuestreos bootstrap sobre los transectos (0: ninguno)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="234"/>
-        <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
-        <translation type="obsolete">La capa «{layer}» no tiene campo para {what}. Elija el campo que los contiene.</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/distancedensity.py" line="232"/>
         <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
         <translation>Los intervalos de distancia «{text}» no son números. Escriba los límites de los intervalos en m, desde 0, separados por comas, p. ej. 0, 10, 25, 50, 100.</translation>
@@ -1974,47 +972,37 @@ Seguridad en el terreno: el muestreo de distancias envía observadores a lo larg
         <translation>Capa «{layer}»: los puntos {ids} tienen en el campo «{field}» un número de visitas que no es un número entero de 0 o más. Corríjalos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="285"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="286"/>
         <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
         <translation>Capa «{layer}»: hay observaciones que nombran los puntos {ids}, cuyo campo de visitas «{field}» está vacío o es 0. Indique su número de visitas o corrija los identificadores de unidad de las observaciones.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="291"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="292"/>
         <source>{n} point(s) with no visits were left out (not surveyed).</source>
         <translation>Se dejaron fuera {n} punto(s) sin visitas (no muestreado(s)).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="300"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="301"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos, o indique una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="304"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="305"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
         <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="312"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="313"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
-        <source>unit ids</source>
-        <translation type="obsolete">los identificadores de unidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
-        <source>distances</source>
-        <translation type="obsolete">las distancias</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="430"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="431"/>
         <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
         <translation>Función de detección{where}: {model}, P = {p:.3f}, ancho efectivo {esw:.1f} m, {n} detecciones.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="434"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="435"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
@@ -2025,55 +1013,6 @@ Seguridad en el terreno: el muestreo de distancias envía observadores a lo larg
         <location filename="../processing/algorithms/estimate.py" line="74"/>
         <source>Estimate density and abundance</source>
         <translation>Estimar la densidad y la abundancia</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="111"/>
-        <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
-
-Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
-
-Counts: a NULL count means the unit was not surveyed: it is left out and listed as non-response. Reserve units (role = reserve) without a count are unused reserves and are skipped quietly; reserves that were surveyed count like any other unit. 0 means surveyed, none seen. Negative or non-numeric counts stop the run, naming the units.
-
-Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is above 0, else the polygon's area, else for lines the strip width × the line's length, else the fixed unit area for points and lines.
-
-Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is collapsed with a neighbour for its variance (Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so. Strata must not overlap (an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning), and every strata polygon needs its id: a polygon without one is an error, unless strata with no surveyed unit may be left out.
-
-Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a rescaled stratified percentile bootstrap of 2,000 resamples (seeded; Rao &amp; Wu 1988), which carries the finite-population correction.
-
-Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance.
-
-Detection: with a detection probability p below 1, estimates are divided by p and the squared CVs add (delta method, Seber 1982). p and its SE must come from a separate study.
-
-Presence data: with the presence option a 0/1 field gives the stratified proportion of units where the species was detected (naive occupancy, not corrected for detection), and abund is the number of occupied units in the frame.
-
-Target CV (above 0): n_next is the number of units each stratum needs next time for that CV of the overall abundance, by Neyman allocation on the observed standard deviations (Neyman 1934; Cochran 1977, eq. 5.26).
-
-True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
-
-Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-        <translation type="obsolete">Estima la densidad y la abundancia por estrato y para todo el marco de muestreo a partir de los conteos en las unidades de muestreo, con error estándar, coeficiente de variación (CV) e intervalo de confianza, y el tamaño de muestra que necesita el próximo muestreo.
-
-Estimador: D_h = Σy / Σa por estrato (el estimador de razón; con unidades iguales, el conteo medio dividido por el área de la unidad), con su varianza linealizada (Cochran 1977, cap. 5 y 6); abundancia N_h = D_h·A_h; en total N = Σ N_h y D = N / Σ A_h, sumando las varianzas. La corrección por población finita 1 − Σa/A_h se aplica cuando se pide.
-
-Conteos: un conteo NULL significa que la unidad no se muestreó: se deja fuera y se lista como no respuesta. Las unidades de reserva (role = reserve) sin conteo son reservas no usadas y se omiten sin aviso; las reservas que se muestrearon cuentan como cualquier otra unidad. 0 significa muestreada, ningún animal visto. Los conteos negativos o no numéricos detienen la ejecución, nombrando las unidades.
-
-Área de la unidad (m²): el campo de área de la unidad (area_m2 por defecto, como lo escribe la disposición) si es mayor que 0; si no, el área del polígono; si no, para líneas, el ancho de franja × la longitud de la línea; si no, el área fija de la unidad para puntos y líneas.
-
-Estratos: polígonos con un campo identificador que corresponde al campo de estrato de las unidades; sus áreas definen el marco. Cuando las unidades no tienen campo de estrato, o la capa de estratos es un solo polígono sin campo identificador, todas las unidades forman un solo estrato sobre el marco. Un estrato con una sola unidad muestreada se agrupa con un vecino para su varianza (Cochran 1977, §5A.12), con una advertencia. Un estrato sin ninguna es un error, salvo que decida dejarlo fuera: entonces el marco se reduce y el informe lo indica. Los estratos no deben solaparse (un solapamiento de más del 0,1 % del estrato menor es un error, uno menor una advertencia), y cada polígono de estrato necesita su identificador: un polígono sin él es un error, salvo que se puedan dejar fuera los estratos sin unidades muestreadas.
-
-Intervalos: t con los grados de libertad de Satterthwaite (Satterthwaite 1946; Cochran 1977); log-normal, de N/C a N·C con C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); o un bootstrap estratificado de percentiles reescalado con 2.000 remuestreos (con semilla; Rao &amp; Wu 1988), que incluye la corrección por población finita.
-
-Varianza: la fórmula del muestreo aleatorio simple, o el estimador de vecindario local (Stevens &amp; Olsen 2003) para cuadrículas sistemáticas y disposiciones espacialmente equilibradas, donde la fórmula simple sobrestima la varianza.
-
-Detección: con una probabilidad de detección p menor que 1, las estimaciones se dividen por p y los CV al cuadrado se suman (método delta, Seber 1982). p y su error estándar deben proceder de un estudio aparte.
-
-Datos de presencia: con la opción de presencia, un campo 0/1 da la proporción estratificada de unidades donde se detectó la especie (ocupación ingenua, sin corregir por la detección), y abund es el número de unidades ocupadas en el marco.
-
-CV objetivo (mayor que 0): n_next es el número de unidades que cada estrato necesita la próxima vez para ese CV de la abundancia global, por asignación de Neyman sobre las desviaciones estándar observadas (Neyman 1934; Cochran 1977, ec. 5.26).
-
-Total verdadero: solo para simulaciones y formación. El informe lo muestra entonces junto a la estimación; en un muestreo real el total verdadero nunca se conoce.
-
-Salidas: los polígonos de los estratos con los campos de la estimación (para un mapa de coropletas), una tabla con una fila por estrato y una fila 'all', un informe HTML y los valores globales para los modelos.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="139"/>
@@ -2246,499 +1185,34 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation>CV de la estimación global</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="323"/>
-        <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
-        <translation type="obsolete">La capa «{layer}» no tiene el campo de conteo «{field}». Elija el campo que contiene los conteos.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="322"/>
+        <location filename="../processing/algorithms/estimate.py" line="277"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La capa «{layer}» no tiene un campo identificador de estrato que corresponda al campo «{field}» de las unidades. Elija el campo identificador de la capa de estratos (plotwise:stratify escribe 'stratum') o dé una capa de marco de un solo polígono para tratar el marco como un solo estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="327"/>
+        <location filename="../processing/algorithms/estimate.py" line="282"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
         <translation>La capa «{layer}» es un solo polígono sin campo identificador de estrato: el marco se trata como un solo estrato y no se usa el campo «{field}» de las unidades. Si las unidades se asignaron a los estratos de forma desigual, dé en su lugar los estratos: una media no estratificada está entonces sesgada.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="236"/>
+        <location filename="../processing/algorithms/estimate.py" line="311"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La capa «{layer}» no tiene entidades.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="242"/>
+        <location filename="../processing/algorithms/estimate.py" line="317"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La capa «{layer}» no tiene polígonos con área.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="285"/>
+        <location filename="../processing/algorithms/estimate.py" line="240"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="343"/>
-        <source>Layer &apos;{layer}&apos;: units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
-        <translation type="obsolete">Capa «{layer}»: las unidades {ids} no tienen geometría, así que la varianza de vecindario local no puede usarlas. Deles su ubicación o use la fórmula del muestreo aleatorio simple.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="350"/>
-        <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-        <translation type="obsolete">Todos los conteos son 0 o 1. Si el campo registra presencia/ausencia, vuelva a ejecutar con la opción de presencia: el resultado es entonces la proporción de unidades ocupadas (ocupación ingenua).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="297"/>
+        <location filename="../processing/algorithms/estimate.py" line="252"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abundancia global {n:,.1f} ({lo:,.1f} a {hi:,.1f}), CV {cv:.3f}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="419"/>
-        <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-        <translation type="obsolete">Capa «{layer}»: las unidades {ids} no tienen área muestreada. Las unidades de punto necesitan el campo de área de la unidad (area_m2 mayor que 0) o un área fija de la unidad (m²); las de línea, el campo de área, un ancho de franja o un área fija; los polígonos usan su propia área.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="438"/>
-        <source>In strata {strata} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-        <translation type="obsolete">En los estratos {strata} las probabilidades de inclusión de las unidades (incl_p) difieren. Este estimador supone probabilidades iguales dentro de un estrato; compruebe el diseño del que proceden las unidades.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="458"/>
-        <source>occupied units</source>
-        <translation type="obsolete">unidades ocupadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="458"/>
-        <source>animals</source>
-        <translation type="obsolete">animales</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="459"/>
-        <source>Naive occupancy from presence data</source>
-        <translation type="obsolete">Ocupación ingenua a partir de datos de presencia</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="459"/>
-        <source>Density and abundance estimate</source>
-        <translation type="obsolete">Estimación de la densidad y la abundancia</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="462"/>
-        <source>proportion of units occupied (naive)</source>
-        <translation type="obsolete">proporción de unidades ocupadas (ingenua)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="462"/>
-        <source>density per {unit}</source>
-        <translation type="obsolete">densidad por {unit}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="464"/>
-        <source>estimated {what} in the frame</source>
-        <translation type="obsolete">estimación de {what} en el marco</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="465"/>
-        <source>{level} interval</source>
-        <translation type="obsolete">intervalo al {level}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="518"/>
-        <source>CV</source>
-        <translation type="obsolete">CV</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="468"/>
-        <source>units surveyed</source>
-        <translation type="obsolete">unidades muestreadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="471"/>
-        <source>true total of the simulated population</source>
-        <translation type="obsolete">total verdadero de la población simulada</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="476"/>
-        <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-        <translation type="obsolete">Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="476"/>
-        <source>covers</source>
-        <translation type="obsolete">contiene</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="476"/>
-        <source>misses</source>
-        <translation type="obsolete">no contiene</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="484"/>
-        <source>log-normal</source>
-        <translation type="obsolete">log-normal</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="485"/>
-        <source>stratified percentile bootstrap</source>
-        <translation type="obsolete">bootstrap estratificado de percentiles</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="486"/>
-        <source>simple random sampling formula</source>
-        <translation type="obsolete">fórmula del muestreo aleatorio simple</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="487"/>
-        <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-        <translation type="obsolete">vecindario local (Stevens &amp; Olsen 2003)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="489"/>
-        <source>Sample units</source>
-        <translation type="obsolete">Unidades de muestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="490"/>
-        <source> (presence/absence)</source>
-        <translation type="obsolete"> (presencia/ausencia)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="491"/>
-        <source>Stratum field</source>
-        <translation type="obsolete">Campo de estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="491"/>
-        <source>none: one stratum</source>
-        <translation type="obsolete">ninguno: un solo estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="492"/>
-        <source>Unit area</source>
-        <translation type="obsolete">Área de la unidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="492"/>
-        <source>field {field} (m²)</source>
-        <translation type="obsolete">campo {field} (m²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="492"/>
-        <source>polygon area</source>
-        <translation type="obsolete">área del polígono</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="494"/>
-        <source>strip width</source>
-        <translation type="obsolete">ancho de franja</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="495"/>
-        <source>fixed</source>
-        <translation type="obsolete">fija</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="496"/>
-        <source>Strata (frame)</source>
-        <translation type="obsolete">Estratos (marco)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="497"/>
-        <source>Computation CRS</source>
-        <translation type="obsolete">SRC de cálculo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="498"/>
-        <source>Area unit</source>
-        <translation type="obsolete">Unidad de área</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Interval</source>
-        <translation type="obsolete">Intervalo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>yes</source>
-        <translation type="obsolete">sí</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>no</source>
-        <translation type="obsolete">no</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="503"/>
-        <source>Detection probability p</source>
-        <translation type="obsolete">Probabilidad de detección p</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="504"/>
-        <source>Target CV for the next survey</source>
-        <translation type="obsolete">CV objetivo para el próximo muestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="507"/>
-        <source>Bootstrap resamples</source>
-        <translation type="obsolete">Remuestreos bootstrap</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="510"/>
-        <source>Seed</source>
-        <translation type="obsolete">Semilla</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="510"/>
-        <source>not used (no random draws without the bootstrap)</source>
-        <translation type="obsolete">no se usa (sin sorteos aleatorios sin el bootstrap)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="514"/>
-        <source>Estimates by stratum</source>
-        <translation type="obsolete">Estimaciones por estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="519"/>
-        <source>Stratum</source>
-        <translation type="obsolete">Estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="515"/>
-        <source>Area ({unit})</source>
-        <translation type="obsolete">Área ({unit})</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="515"/>
-        <source>Units (n)</source>
-        <translation type="obsolete">Unidades (n)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="515"/>
-        <source>Not surveyed</source>
-        <translation type="obsolete">No muestreadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="516"/>
-        <source>Mean count</source>
-        <translation type="obsolete">Conteo medio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="516"/>
-        <source>SD of counts</source>
-        <translation type="obsolete">DE de los conteos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="519"/>
-        <source>SE</source>
-        <translation type="obsolete">EE</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Lower limit</source>
-        <translation type="obsolete">Límite inferior</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Upper limit</source>
-        <translation type="obsolete">Límite superior</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="518"/>
-        <source>df</source>
-        <translation type="obsolete">gl</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="532"/>
-        <source>Occupied units</source>
-        <translation type="obsolete">Unidades ocupadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="532"/>
-        <source>Abundance</source>
-        <translation type="obsolete">Abundancia</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="522"/>
-        <source>Units next time (n_next)</source>
-        <translation type="obsolete">Unidades la próxima vez (n_next)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="569"/>
-        <source>all strata</source>
-        <translation type="obsolete">todos los estratos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="530"/>
-        <source>{what}, limits at {level}.</source>
-        <translation type="obsolete">{what}, límites al {level}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="532"/>
-        <source>{what} in the frame, limits at {level}.</source>
-        <translation type="obsolete">{what} en el marco, límites al {level}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="535"/>
-        <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-        <translation type="obsolete">El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="540"/>
-        <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-        <translation type="obsolete">No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="543"/>
-        <source>The overall interval by method</source>
-        <translation type="obsolete">El intervalo global según el método</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Used in the outputs</source>
-        <translation type="obsolete">Usado en las salidas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="548"/>
-        <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-        <translation type="obsolete">El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>overall abundance in a resample</source>
-        <translation type="obsolete">abundancia global en un remuestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>resamples</source>
-        <translation type="obsolete">remuestreos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>{level} percentile limits</source>
-        <translation type="obsolete">límites de percentiles al {level}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>The {n:,} bootstrap resamples of the overall abundance</source>
-        <translation type="obsolete">Los {n:,} remuestreos bootstrap de la abundancia global</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="568"/>
-        <source>true density (simulation)</source>
-        <translation type="obsolete">densidad verdadera (simulación)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="573"/>
-        <source>{what} by stratum with {level} confidence intervals</source>
-        <translation type="obsolete">{what} por estrato con intervalos de confianza al {level}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="581"/>
-        <source>lowest</source>
-        <translation type="obsolete">mínimo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="581"/>
-        <source>highest</source>
-        <translation type="obsolete">máximo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="589"/>
-        <source>surveyed units</source>
-        <translation type="obsolete">unidades muestreadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="593"/>
-        <source>not surveyed</source>
-        <translation type="obsolete">no muestreadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="595"/>
-        <source>Strata shaded by {what}, with the units</source>
-        <translation type="obsolete">Estratos sombreados según {what}, con las unidades</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="598"/>
-        <source>Method</source>
-        <translation type="obsolete">Método</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="600"/>
-        <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-        <translation type="obsolete">El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="607"/>
-        <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-        <translation type="obsolete">La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="614"/>
-        <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-        <translation type="obsolete">Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="614"/>
-        <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
-        <translation type="obsolete">Los intervalos son log-normales: de N/C a N·C con C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). Son asimétricos y nunca bajan de 0.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="614"/>
-        <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-        <translation type="obsolete">Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita cuando se pide (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="628"/>
-        <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
-        <translation type="obsolete">Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, y solo las diferencias dentro de los vecindarios cuentan como varianza. Para disposiciones sistemáticas y espacialmente equilibradas, la fórmula del muestreo aleatorio simple sobrestima la varianza; este estimador no, siempre que la disposición fuera realmente sistemática o espacialmente equilibrada; para una disposición aleatoria simple use la fórmula simple. La suma de las varianzas locales se escala una vez para que coincida en promedio con la fórmula simple cuando la población no tiene estructura espacial (decisión nuestra).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="637"/>
-        <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
-        <translation type="obsolete">Los estratos con una sola unidad muestreada se agruparon con un vecino (entre los estratos que lo tocan en el mapa o, si no, los estratos contiguos en el orden de identificadores, el de densidad más próxima): los miembros de un grupo comparten la varianza residual combinada del grupo (Cochran 1977, §5A.12). Las diferencias entre los estratos agrupados cuentan entonces como varianza, por lo que sus errores estándar tienden a ser demasiado grandes.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="643"/>
-        <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit&apos;s count minus the group&apos;s density times the unit&apos;s area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
-        <translation type="obsolete">En el bootstrap, un estrato agrupado toma tantos residuos como unidades tiene entre las unidades combinadas de su grupo (el conteo de cada unidad menos la densidad del grupo por el área de la unidad), los suma a su propia estimación y los reescala, de modo que sus remuestreos están centrados en su propia estimación y varían tanto como indica la varianza de estratos agrupados.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="649"/>
-        <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval&apos;s degrees of freedom combine the two parts (Buckland et al. 2001), p&apos;s part counting as known with infinite degrees of freedom.</source>
-        <translation type="obsolete">Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad del intervalo t combinan ambas partes (Buckland et al. 2001), contando la de p como conocida con grados de libertad infinitos.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="656"/>
-        <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
-        <translation type="obsolete">Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar observadas ahora (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 por estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="662"/>
-        <source>Cautions</source>
-        <translation type="obsolete">Precauciones</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="663"/>
-        <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-        <translation type="obsolete">La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="667"/>
-        <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-        <translation type="obsolete">Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="670"/>
-        <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-        <translation type="obsolete">Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="675"/>
-        <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-        <translation type="obsolete">Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="678"/>
-        <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-        <translation type="obsolete">El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="77"/>
@@ -2811,72 +1285,72 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
 <context>
     <name>ExampleChain</name>
     <message>
-        <location filename="../scripts/build_models.py" line="111"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Units with counts</source>
         <translation>Unidades con conteos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="114"/>
+        <location filename="../scripts/build_models.py" line="117"/>
         <source>Estimate by stratum</source>
         <translation>Estimación por estrato</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="114"/>
+        <location filename="../scripts/build_models.py" line="117"/>
         <source>Estimate report</source>
         <translation>Informe de la estimación</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="114"/>
+        <location filename="../scripts/build_models.py" line="117"/>
         <source>Estimate table</source>
         <translation>Tabla de estimaciones</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="103"/>
+        <location filename="../scripts/build_models.py" line="105"/>
         <source>Animal points</source>
         <translation>Puntos de animales</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="107"/>
+        <location filename="../scripts/build_models.py" line="109"/>
         <source>Detection probability</source>
         <translation>Probabilidad de detección</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="109"/>
+        <location filename="../scripts/build_models.py" line="112"/>
         <source>Random seed (0 draws one)</source>
         <translation>Semilla aleatoria (0 sortea una)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="105"/>
+        <location filename="../scripts/build_models.py" line="107"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="101"/>
+        <location filename="../scripts/build_models.py" line="103"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="86"/>
+        <location filename="../scripts/build_models.py" line="88"/>
         <source>Strata with units allocated</source>
         <translation>Estratos con unidades asignadas</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="78"/>
+        <location filename="../scripts/build_models.py" line="80"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="93"/>
         <source>Layout report</source>
         <translation>Informe de la disposición</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="93"/>
         <source>Waypoints (GPX)</source>
         <translation>Puntos de paso (GPX)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="68"/>
+        <location filename="../scripts/build_models.py" line="69"/>
         <source>Covariate rasters</source>
         <translation>Rásteres de covariables</translation>
     </message>
@@ -2891,12 +1365,12 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation>Pendiente máxima muestreada (grados)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="70"/>
+        <location filename="../scripts/build_models.py" line="71"/>
         <source>Number of strata</source>
         <translation>Número de estratos</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="74"/>
+        <location filename="../scripts/build_models.py" line="75"/>
         <source>Side of the square plots (m)</source>
         <translation>Lado de las parcelas cuadradas (m)</translation>
     </message>
@@ -2911,7 +1385,7 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
         <translation>Área de estudio</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="72"/>
+        <location filename="../scripts/build_models.py" line="73"/>
         <source>Total number of units</source>
         <translation>Número total de unidades</translation>
     </message>
@@ -2944,458 +1418,152 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="66"/>
+        <location filename="../processing/algorithms/layout.py" line="42"/>
         <source>Lay out sample units</source>
         <translation>Disponer las unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="72"/>
-        <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
-
-Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
-
-Designs:
-• Simple random: independent points, uniform over the stratum (triangles chosen by area, then a point within; Turk 1990).
-• Systematic grid: a square grid of spacing √(A/n) with a random start; with bearing −1 the grid also gets a random rotation, otherwise it is turned to the bearing. The realised number of units varies around n and is reported.
-• Spatially balanced: balanced acceptance sampling on a Halton sequence (Robertson et al. 2013). Every leading part of the draw order is itself spread evenly, so reserves are the next points of the same sequence. The start is a uniform random point of the stratum, which keeps inclusion equal for any sample size.
-
-Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in degrees clockwise from grid north, or −1 for a random bearing per unit.
-Keep units inside: centres are drawn from the stratum shrunk by the unit's circumscribing radius, so every unit lies wholly inside its stratum; the shrunk (effective) area is reported and used for the inclusion probabilities.
-Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.
-Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit that cannot be surveyed is replaced by the next unused reserve of the same stratum.
-
-Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an empty count field for the field teams. The GPX file holds one waypoint per unit (a start and an end waypoint per transect), named by unit_id.
-
-Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
-
-A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="obsolete">Sortea las unidades de muestreo de un muestreo sobre un marco de muestreo, estrato por estrato (un estrato por valor del campo de estrato; sin él, el marco es un solo estrato).
-
-Unidades por estrato: el campo de unidades (por ejemplo n_alloc del paso de asignación; el mismo número entero en cada entidad de un estrato); si no, el total repartido en proporción al área con al menos 2 por estrato.
-
-Diseños:
-• Aleatorio simple: puntos independientes, uniformes en el estrato (triángulos elegidos según su área y luego un punto dentro; Turk 1990).
-• Cuadrícula sistemática: una cuadrícula cuadrada de espaciado √(A/n) con un inicio aleatorio; con rumbo −1 la cuadrícula recibe además una rotación aleatoria; si no, se orienta según el rumbo. El número de unidades obtenido varía en torno a n y se indica.
-• Espacialmente equilibrado: muestreo por aceptación equilibrada sobre una secuencia de Halton (Robertson et al. 2013). Cada tramo inicial del orden de sorteo está a su vez repartido de modo uniforme, de modo que las reservas son los puntos siguientes de la misma secuencia. El inicio es un punto aleatorio uniforme del estrato, lo que mantiene la inclusión igual para cualquier tamaño de muestra.
-
-Formas: estación puntual (tamaño: radio de conteo opcional, m), parcela cuadrada (tamaño: lado, m), parcela circular (tamaño: radio, m), transecto lineal (tamaño: longitud, m; centrado en el punto sorteado). Rumbo en grados en sentido horario desde el norte de la cuadrícula, o −1 para un rumbo aleatorio por unidad.
-Mantener las unidades dentro: los centros se sortean en el estrato reducido en el radio circunscrito de la unidad, de modo que cada unidad queda por completo dentro de su estrato; el área reducida (efectiva) se indica y se usa para las probabilidades de inclusión.
-Separación mínima (m) entre los centros de todas las unidades, principales y de reserva, en toda la disposición.
-Reservas: unidades adicionales por estrato, role = reserve, en orden de sorteo. Regla de sustitución: una unidad principal que no se puede muestrear se sustituye por la siguiente reserva no usada del mismo estrato.
-
-Campos de salida: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; para transectos y puntos sin radio, la densidad de inclusión n/A por m²), weight = 1/incl_p, lon/lat (WGS 84) y un campo count vacío para los equipos de campo. El archivo GPX contiene un punto de paso por unidad (uno de inicio y otro de fin por transecto), con el nombre de unit_id.
-
-Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato menor es un error, uno menor una advertencia. Las entidades de menos de 1 m² (astillas) se omiten, con una advertencia.
-
-Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="113"/>
+        <location filename="../processing/algorithms/layout.py" line="89"/>
         <source>Sampling frame or strata</source>
         <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="116"/>
+        <location filename="../processing/algorithms/layout.py" line="93"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="122"/>
+        <location filename="../processing/algorithms/layout.py" line="99"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="128"/>
+        <location filename="../processing/algorithms/layout.py" line="105"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Número total de unidades (si no se da un campo de unidades)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Design</source>
         <translation>Diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Simple random</source>
         <translation>Aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Unit shape</source>
         <translation>Forma de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Point station</source>
         <translation>Estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Square plot</source>
         <translation>Parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Circular plot</source>
         <translation>Parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Line transect</source>
         <translation>Transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="147"/>
+        <location filename="../processing/algorithms/layout.py" line="124"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="153"/>
+        <location filename="../processing/algorithms/layout.py" line="130"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="154"/>
-        <source>Keep every unit wholly inside its stratum</source>
-        <translation type="obsolete">Mantener cada unidad por completo dentro de su estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="164"/>
+        <location filename="../processing/algorithms/layout.py" line="141"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <location filename="../processing/algorithms/layout.py" line="147"/>
         <source>Reserve units per stratum</source>
         <translation>Unidades de reserva por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="176"/>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="177"/>
+        <location filename="../processing/algorithms/layout.py" line="155"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="177"/>
+        <location filename="../processing/algorithms/layout.py" line="155"/>
         <source>GPX files (*.gpx)</source>
         <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="196"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="223"/>
-        <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
-        <translation type="obsolete">Indique un campo de unidades por estrato (N_FIELD) o un número total de unidades (N_UNITS) de al menos 1.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="213"/>
+        <location filename="../processing/algorithms/layout.py" line="219"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="213"/>
+        <location filename="../processing/algorithms/layout.py" line="219"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="228"/>
+        <location filename="../processing/algorithms/layout.py" line="236"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="232"/>
+        <location filename="../processing/algorithms/layout.py" line="240"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <location filename="../processing/algorithms/layout.py" line="267"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="245"/>
+        <location filename="../processing/algorithms/layout.py" line="193"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="283"/>
+        <location filename="../processing/algorithms/layout.py" line="271"/>
         <source>the frame</source>
         <translation>el marco</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="283"/>
+        <location filename="../processing/algorithms/layout.py" line="271"/>
         <source>stratum {key}</source>
         <translation>estrato {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="325"/>
-        <source>Sample-unit layout</source>
-        <translation>Disposición de las unidades de muestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="441"/>
-        <source>primary units</source>
-        <translation>unidades principales</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="441"/>
-        <source>reserve units</source>
-        <translation>unidades de reserva</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="329"/>
-        <source>strata</source>
-        <translation>estratos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="329"/>
-        <source>design</source>
-        <translation>diseño</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="335"/>
-        <source>Replacing units in the field</source>
-        <translation>Sustituir unidades en el terreno</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="336"/>
-        <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
-        <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="342"/>
-        <source>Units per stratum</source>
-        <translation>Unidades por estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Stratum</source>
-        <translation>Estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Area (ha)</source>
-        <translation>Área (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Effective area (ha)</source>
-        <translation>Área efectiva (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Units asked</source>
-        <translation>Unidades pedidas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Primary</source>
-        <translation>Principales</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="345"/>
-        <source>Reserve</source>
-        <translation>Reservas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="345"/>
-        <source>incl_p</source>
-        <translation>incl_p</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="345"/>
-        <source>weight</source>
-        <translation>weight</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="347"/>
-        <source>Grid spacing (m)</source>
-        <translation>Espaciado de la cuadrícula (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="347"/>
-        <source>Grid rotation (°)</source>
-        <translation>Rotación de la cuadrícula (°)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="350"/>
-        <source>frame</source>
-        <translation>marco</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="357"/>
-        <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
-        <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="357"/>
-        <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
-        <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="373"/>
-        <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
-        <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="380"/>
-        <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
-        <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="384"/>
-        <source>Map</source>
-        <translation>Mapa</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="385"/>
-        <source>Strata (filled), primary units (dark) and reserve units (light)</source>
-        <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="386"/>
-        <source>Method</source>
-        <translation>Método</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="390"/>
-        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
-        <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Frame (FRAME)</source>
-        <translation>Marco (FRAME)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Stratum field (STRATUM_FIELD)</source>
-        <translation>Campo de estrato (STRATUM_FIELD)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>(none: one stratum)</source>
-        <translation>(ninguno: un solo estrato)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Units per stratum field (N_FIELD)</source>
-        <translation>Campo de unidades por estrato (N_FIELD)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>(none)</source>
-        <translation>(ninguno)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Total units (N_UNITS)</source>
-        <translation>Total de unidades (N_UNITS)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>(not used)</source>
-        <translation>(no se usa)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Design (DESIGN)</source>
-        <translation>Diseño (DESIGN)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Unit shape (SHAPE)</source>
-        <translation>Forma de la unidad (SHAPE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Unit size (SIZE, m)</source>
-        <translation>Tamaño de la unidad (SIZE, m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Bearing (BEARING, degrees)</source>
-        <translation>Rumbo (BEARING, grados)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>random</source>
-        <translation>aleatorio</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Keep inside (INSIDE)</source>
-        <translation>Mantener dentro (INSIDE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>yes</source>
-        <translation>sí</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>no</source>
-        <translation>no</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Minimum spacing (MIN_SPACING, m)</source>
-        <translation>Separación mínima (MIN_SPACING, m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Reserves per stratum (RESERVE)</source>
-        <translation>Reservas por estrato (RESERVE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Seed (SEED)</source>
-        <translation>Semilla (SEED)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>CRS of the computation and the output</source>
-        <translation>SRC del cálculo y de la salida</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="411"/>
-        <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
-        <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="413"/>
-        <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
-        <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="415"/>
-        <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
-        <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="422"/>
-        <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
-        <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="69"/>
+        <location filename="../processing/algorithms/layout.py" line="45"/>
         <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -3436,14 +1604,9 @@ Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato m
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="159"/>
+        <location filename="../processing/algorithms/layout.py" line="136"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
         <translation>Mantener cada unidad por completo dentro de su estrato (desactivado: muestreo «plus»)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="363"/>
-        <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
-        <translation>Muestreo «plus»: los centros se sortearon sobre cada estrato ampliado en {r} m (el alcance de la unidad), así que las unidades cercanas al borde lo sobrepasan, y algunos centros quedan fuera de su estrato. Muestree solo la parte de cada unidad dentro de su propio estrato y cuente solo los animales que haya allí (el mapa muestra los estratos); una unidad que no alcanza nada de su estrato cuenta 0. No entre nunca en terreno excluido o peligroso para llegar a un centro: muestree la parte dentro del estrato desde su interior. El área efectiva es el área ampliada, y plotwise:estimate extiende los conteos a ella (Gregoire &amp; Valentine 2008, cap. 10).</translation>
     </message>
 </context>
 <context>
@@ -3609,11 +1772,6 @@ Las recomendaciones de diseño implican más trabajo de campo: compruebe el acce
         <translation>Valor p de la prueba de bondad de ajuste</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="137"/>
-        <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Choose existing fields.</source>
-        <translation type="obsolete">La capa «{layer}» no tiene el campo {fields} ({param}). Elija campos existentes.</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/occupancy.py" line="155"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La capa «{layer}» no tiene entidades.</translation>
@@ -3761,57 +1919,57 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
 <context>
     <name>PlotwiseAlgorithm</name>
     <message>
-        <location filename="../processing/algorithms/base.py" line="25"/>
+        <location filename="../processing/algorithms/base.py" line="26"/>
         <source>Survey design</source>
         <translation>Diseño del muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="26"/>
+        <location filename="../processing/algorithms/base.py" line="27"/>
         <source>Estimation</source>
         <translation>Estimación</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="27"/>
+        <location filename="../processing/algorithms/base.py" line="28"/>
         <source>Demo and training</source>
         <translation>Demostración y formación</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="69"/>
+        <location filename="../processing/algorithms/base.py" line="70"/>
         <source>Random seed (0 draws one and records it)</source>
         <translation>Semilla aleatoria (0 sortea una y la registra)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="81"/>
+        <location filename="../processing/algorithms/base.py" line="82"/>
         <source>Report (HTML)</source>
         <translation>Informe (HTML)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="81"/>
+        <location filename="../processing/algorithms/base.py" line="82"/>
         <source>HTML files (*.html)</source>
         <translation>Archivos HTML (*.html)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="96"/>
+        <location filename="../processing/algorithms/base.py" line="97"/>
         <source>Seed used: {seed}</source>
         <translation>Semilla usada: {seed}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="122"/>
+        <location filename="../processing/algorithms/base.py" line="123"/>
         <source>Cancelled by the user. No result was written.</source>
         <translation>Cancelado por el usuario. No se ha escrito ningún resultado.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="210"/>
+        <location filename="../processing/algorithms/base.py" line="212"/>
         <source>Report written to {path}</source>
         <translation>Informe escrito en {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="154"/>
+        <location filename="../processing/algorithms/base.py" line="155"/>
         <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Its fields are: {available}. Choose one of them.</source>
         <translation>La capa «{layer}» no tiene el campo {fields} ({param}). Sus campos son: {available}. Elija uno de ellos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="162"/>
+        <location filename="../processing/algorithms/base.py" line="163"/>
         <source>Choose a field of layer &apos;{layer}&apos; for {param}. Its fields are: {available}.</source>
         <translation>Elija un campo de la capa «{layer}» para {param}. Sus campos son: {available}.</translation>
     </message>
@@ -3829,42 +1987,37 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="118"/>
+        <location filename="../processing/bridge.py" line="125"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="415"/>
+        <location filename="../processing/bridge.py" line="422"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="166"/>
+        <location filename="../processing/bridge.py" line="173"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="172"/>
+        <location filename="../processing/bridge.py" line="179"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="182"/>
-        <source> and {n} more</source>
-        <translation type="obsolete"> y {n} más</translation>
-    </message>
-    <message>
-        <location filename="../processing/bridge.py" line="342"/>
+        <location filename="../processing/bridge.py" line="349"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="371"/>
+        <location filename="../processing/bridge.py" line="378"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="377"/>
+        <location filename="../processing/bridge.py" line="384"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
@@ -3890,11 +2043,6 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <location filename="../processing/engine/allocation.py" line="53"/>
         <source>cost per unit</source>
         <translation>coste por unidad</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/occupancy.py" line="76"/>
-        <source>{shown} and {more} more</source>
-        <translation type="obsolete">{shown} y {more} más</translation>
     </message>
     <message>
         <location filename="../processing/engine/allocation.py" line="433"/>
@@ -4032,17 +2180,17 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Valor cero ({name}) en las entidades de estrato {shown}: su CV no está definido.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="780"/>
+        <location filename="../processing/engine/allocation.py" line="782"/>
         <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
         <translation>Un CV objetivo necesita la desviación estándar piloto y el conteo medio piloto por unidad: elija el campo de DE y el campo de media.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="786"/>
+        <location filename="../processing/engine/allocation.py" line="788"/>
         <source>The {name} is zero in every stratum: no CV can be computed.</source>
         <translation>Valor cero ({name}) en todos los estratos: no puede calcularse ningún CV.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="797"/>
+        <location filename="../processing/engine/allocation.py" line="799"/>
         <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
         <translation>El CV objetivo de {target_cv:.3g} no puede alcanzarse: incluso las {fit} unidades que caben dan un CV esperado de {cv:.3g}. Acepte un CV de al menos {cv:.3g}, o use unidades más pequeñas.</translation>
     </message>
@@ -4067,12 +2215,12 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>La probabilidad de detección debe estar en (0, 1] (se recibió {detection:g}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/demo_reserve.py" line="108"/>
+        <location filename="../processing/engine/demo_reserve.py" line="109"/>
         <source>Could not place the demo lake; try another seed.</source>
         <translation>No se pudo colocar el lago de demostración; pruebe otra semilla.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/demo_reserve.py" line="184"/>
+        <location filename="../processing/engine/demo_reserve.py" line="235"/>
         <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
         <translation>El tamaño de celda debe estar entre 10 y 500 m (se recibió {cell_size:g} m).</translation>
     </message>
@@ -4197,11 +2345,6 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>estratificado proporcional</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="84"/>
-        <source>stratified Neyman</source>
-        <translation type="obsolete">estratificado Neyman</translation>
-    </message>
-    <message>
         <location filename="../processing/engine/layout.py" line="76"/>
         <source>systematic grid</source>
         <translation>cuadrícula sistemática</translation>
@@ -4220,16 +2363,6 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <location filename="../processing/engine/design_comparison.py" line="939"/>
         <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
         <translation>Cada muestreo simulado contaría unos {millions:.0f} millones de celdas de la superficie ({units} unidades de {unit_area:,.0f} m² en celdas de {cell_width:g} m), demasiadas para simular. Remuestree la superficie a celdas más gruesas, o compare menos diseños o unidades.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/design_comparison.py" line="1080"/>
-        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
-        <translation type="obsolete">{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde de su estrato cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas, o estratos menos numerosos y más compactos, lo reducen.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/design_comparison.py" line="1080"/>
-        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
-        <translation type="obsolete">{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades cercanas al borde del marco de muestreo cuentan solo la parte interior (o, mantenidas dentro, nunca llegan al borde), así que las zonas de borde pesan menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. Unidades más pequeñas lo reducen.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1223"/>
@@ -4362,11 +2495,6 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Ninguna unidad tiene conteo, así que no puede estimarse nada. Introduzca los conteos de las unidades muestreadas (0 si no se vio ninguno) en el campo de conteo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="702"/>
-        <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
-        <translation type="obsolete">Las unidades {ids} no tienen un área muestreada positiva. Indique un campo de área de unidad con valores mayores que 0, o un área de unidad fija para puntos y líneas.</translation>
-    </message>
-    <message>
         <location filename="../processing/engine/estimation.py" line="812"/>
         <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
         <translation>Los datos de presencia deben ser 0 o 1; las unidades {ids} contienen otros valores. Use los conteos sin la opción de presencia, o recodifique el campo.</translation>
@@ -4402,39 +2530,14 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>En los estratos {ids} el área muestreada supera el área del estrato. Compruebe las áreas de las unidades y la unidad de área, o desactive la corrección por población finita.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="835"/>
-        <source>{label} (one unit) collapsed with {others}</source>
-        <translation type="obsolete">{label} (una unidad) agrupado con {others}</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="842"/>
-        <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
-        <translation type="obsolete">Estratos {groups}: su varianza procede del estimador de estratos agrupados (Cochran 1977, §5A.12), que cuenta las diferencias entre los estratos agrupados como varianza y por eso tiende a ser demasiado grande.</translation>
-    </message>
-    <message>
         <location filename="../processing/engine/estimation.py" line="1074"/>
         <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
         <translation>El único estrato tiene una sola unidad muestreada: no puede estimarse ninguna varianza, error estándar ni intervalo. Muestree al menos dos unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="863"/>
-        <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
-        <translation type="obsolete">Los estratos {ids} tienen menos de 3 unidades o se agruparon: su varianza usa la fórmula del muestreo aleatorio simple.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="1438"/>
+        <location filename="../processing/engine/estimation.py" line="1420"/>
         <source>The bootstrap needs a random generator (rng).</source>
         <translation>El bootstrap necesita un generador aleatorio (rng).</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="932"/>
-        <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
-        <translation type="obsolete">No se contó ningún animal en las unidades muestreadas: la estimación es 0 y su CV no está definido.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="936"/>
-        <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
-        <translation type="obsolete">En los estratos {ids} todas las unidades muestreadas contaron 0: su error estándar es 0, lo que subestima la incertidumbre (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1203"/>
@@ -4447,27 +2550,27 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>No se observó variación, así que los tamaños de muestra del próximo muestreo se fijan en el mínimo de 2 por estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="223"/>
+        <location filename="../processing/engine/frame.py" line="257"/>
         <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
         <translation>EDGE_BUFFER es {edge_buffer} m; debe ser cero o una distancia positiva en metros.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="230"/>
+        <location filename="../processing/engine/frame.py" line="264"/>
         <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
         <translation>El área de estudio (INPUT) no tiene ningún polígono con área positiva. Compruebe que la capa contiene polígonos y está en un SRC proyectado en metros.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="278"/>
+        <location filename="../processing/engine/frame.py" line="298"/>
         <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
         <translation>No queda nada del área de estudio (INPUT) tras quitar los polígonos excluidos (EXCLUDE): cubren las {hectares:.4g} ha. Compruebe que EXCLUDE contiene solo las zonas que hay que dejar fuera.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="284"/>
+        <location filename="../processing/engine/frame.py" line="304"/>
         <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster&apos;s units, or check that the raster covers the study area.</source>
         <translation>No queda nada del marco de muestreo tras la máscara ráster (MASK): cada celda de las {hectares:.4g} ha restantes está fuera de [MASK_MIN, MASK_MAX] o es NoData. Amplíe el rango, compruebe las unidades del ráster, o compruebe que el ráster cubre el área de estudio.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="291"/>
+        <location filename="../processing/engine/frame.py" line="311"/>
         <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area&apos;s boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
         <translation>No queda nada del marco de muestreo tras el búfer interior (EDGE_BUFFER = {edge_buffer:g} m): las {hectares:.4g} ha restantes están todas a menos de esa distancia del límite del área de estudio (extensión del área de estudio {width:.0f} m x {height:.0f} m). Use un EDGE_BUFFER menor.</translation>
     </message>
@@ -4622,97 +2725,97 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>El estrato {key} es demasiado pequeño para una unidad lineal de SIZE {size:g} m totalmente dentro: ningún punto está a {radius:.1f} m o más de su borde (entidades {ids}). Use un SIZE menor, desmarque INSIDE, o fusione el estrato con un vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="667"/>
+        <location filename="../processing/engine/layout.py" line="668"/>
         <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Mantener las unidades dentro deja {share:.0%} del marco de muestreo (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="667"/>
+        <location filename="../processing/engine/layout.py" line="668"/>
         <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Mantener las unidades dentro deja {share:.0%} del estrato {key} (la franja a menos de {radius:g} m de su borde) donde no puede caer ningún centro de unidad; la estimación extiende la densidad de la parte interior a esa franja. Si la densidad cambia cerca de los bordes, desactive INSIDE o use unidades más pequeñas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="678"/>
+        <location filename="../processing/engine/layout.py" line="679"/>
         <source>The frame gets no units; the estimate cannot speak for it.</source>
         <translation>El marco de muestreo no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="678"/>
+        <location filename="../processing/engine/layout.py" line="679"/>
         <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
         <translation>El estrato {key} no recibe unidades; la estimación no puede representarlo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="683"/>
+        <location filename="../processing/engine/layout.py" line="684"/>
         <source>The frame gets one unit only; its variance cannot be estimated.</source>
         <translation>El marco de muestreo recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="683"/>
+        <location filename="../processing/engine/layout.py" line="684"/>
         <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
         <translation>El estrato {key} recibe una sola unidad; su varianza no puede estimarse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="771"/>
+        <location filename="../processing/engine/layout.py" line="772"/>
         <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
         <translation>Hay estratos que se solapan ({pairs}): un lugar pertenece a un solo estrato, y las unidades de una zona común se sortearían en ambos estratos y se ponderarían dos veces. Haga disjuntos los polígonos de los estratos (por ejemplo con las herramientas Diferencia o Unión del anfitrión) y vuelva a ejecutar.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="775"/>
+        <location filename="../processing/engine/layout.py" line="776"/>
         <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
         <translation>Hay estratos que se solapan ligeramente ({pairs}); las unidades allí pertenecen a ambos. Haga disjuntos los polígonos de los estratos si es más que ruido de digitalización.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="861"/>
+        <location filename="../processing/engine/layout.py" line="862"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el marco de muestreo: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="861"/>
+        <location filename="../processing/engine/layout.py" line="862"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m no puede cumplirse en el estrato {key}: se pidieron {wanted} unidades (principales y de reserva), el sorteo colocó {placed}, y caben como mucho unas {fit} unidades con esa separación (una red hexagonal, la disposición más densa; las disposiciones aleatorias se llenan mucho antes). Pida menos unidades o reservas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="963"/>
+        <location filename="../processing/engine/layout.py" line="964"/>
         <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
         <translation>Una cuadrícula sistemática de espaciado {spacing:.3g} m sobre un área de {area:,.1f} m² extendida sobre {width:,.0f} m x {height:,.0f} m necesitaría {count:,} puntos candidatos. El área es una astilla o demasiado pequeña para el número de unidades: busque astillas en el marco, pida menos unidades o use otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1009"/>
+        <location filename="../processing/engine/layout.py" line="1010"/>
         <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>La separación de la cuadrícula para {n} unidades en el marco de muestreo sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1009"/>
+        <location filename="../processing/engine/layout.py" line="1010"/>
         <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>La separación de la cuadrícula para {n} unidades en el estrato {key} sería de {spacing:.1f} m, por debajo de MIN_SPACING = {min_spacing:g} m. Una cuadrícula cuadrada a {min_spacing:g} m contiene allí unas {fit} unidades: pida como mucho esas, o baje MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1028"/>
+        <location filename="../processing/engine/layout.py" line="1029"/>
         <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>Se quitaron {n} unidad(es) de cuadrícula del marco de muestreo: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1028"/>
+        <location filename="../processing/engine/layout.py" line="1029"/>
         <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>Se quitaron {n} unidad(es) de cuadrícula del estrato {key}: más cerca que MIN_SPACING de unidades de un estrato vecino.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1040"/>
+        <location filename="../processing/engine/layout.py" line="1041"/>
         <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Ningún punto de la cuadrícula cayó en el marco de muestreo (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1040"/>
+        <location filename="../processing/engine/layout.py" line="1041"/>
         <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Ningún punto de la cuadrícula cayó en el estrato {key} (separación {spacing:.1f} m); no recibe unidades. Use el diseño aleatorio simple o espacialmente equilibrado para estratos pequeños o estrechos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1049"/>
+        <location filename="../processing/engine/layout.py" line="1050"/>
         <source>The frame has only {n} of {r} reserve units.</source>
         <translation>El marco de muestreo tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1049"/>
+        <location filename="../processing/engine/layout.py" line="1050"/>
         <source>Stratum {key} has only {n} of {r} reserve units.</source>
         <translation>El estrato {key} tiene solo {n} de las {r} unidades de reserva.</translation>
     </message>
@@ -5307,7 +3410,7 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). El muestreo «plus» es insesgado, así que la causa probable es el estimador de razón con muy pocos animales por unidad, o una cuadrícula sistemática cuyo número realizado de unidades varía con la superficie; más unidades lo reducen.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="244"/>
+        <location filename="../processing/engine/distance_density.py" line="246"/>
         <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
         <translation>El tipo de muestreo debe ser 'line' o 'point' (se recibió '{survey}').</translation>
     </message>
@@ -5372,117 +3475,117 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Capa «{layer}»: los identificadores de unidad {ids} aparecen más de una vez en el campo «{field}». Cada unidad necesita su propio identificador.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="126"/>
+        <location filename="../processing/engine/distance_density.py" line="127"/>
         <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
         <translation>Capa «{layer}»: los transectos {ids} tienen longitud cero. Elimínelos o dibuje su línea.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="130"/>
+        <location filename="../processing/engine/distance_density.py" line="131"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
         <translation>Capa «{layer}»: los puntos {ids} no tienen visitas. Indique para cada punto muestreado su número de visitas (1 o más), o elimine los puntos que no se muestrearon.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="139"/>
+        <location filename="../processing/engine/distance_density.py" line="140"/>
         <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
         <translation>Capa «{layer}»: las unidades {ids} no tienen estrato, o tienen un estrato que la capa de estratos no tiene ({strata}). Dé a cada unidad el identificador de su estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="149"/>
+        <location filename="../processing/engine/distance_density.py" line="150"/>
         <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
         <translation>Los estratos {strata} no tienen ningún transecto ni punto muestreado. Muestréelos, o quítelos de la capa de estratos (la estimación solo se refiere entonces a los demás estratos).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="156"/>
+        <location filename="../processing/engine/distance_density.py" line="157"/>
         <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
         <translation>Los estratos {strata} tienen un solo transecto o punto cada uno; la varianza de la tasa de encuentro necesita al menos 2 por estrato. Fusione cada uno con un estrato vecino en la capa de estratos y en el campo de estrato de las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="177"/>
+        <location filename="../processing/engine/distance_density.py" line="178"/>
         <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
         <translation>Capa «{layer}»: hay observaciones que nombran unidades que la capa «{units}» no tiene (campo «{field}»): {ids}. Corrija esos identificadores de unidad o añada las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="185"/>
+        <location filename="../processing/engine/distance_density.py" line="187"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
         <translation>Capa «{layer}»: las observaciones {ids} no tienen distancia en el campo «{field}» (vacío o no es un número). Rellene las distancias o elimine esas observaciones.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="192"/>
+        <location filename="../processing/engine/distance_density.py" line="194"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
         <translation>Capa «{layer}»: las observaciones {ids} tienen una distancia negativa en el campo «{field}». Las distancias se miden desde la línea o el punto hacia fuera y son de 0 m o más; corríjalas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="204"/>
+        <location filename="../processing/engine/distance_density.py" line="206"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
         <translation>Capa «{layer}»: las observaciones {ids} no tienen un tamaño de grupo mayor que 0 en el campo «{field}». Rellene el número de animales vistos en cada grupo (1 para un animal solo) o no elija ningún campo de tamaño de grupo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="217"/>
+        <location filename="../processing/engine/distance_density.py" line="219"/>
         <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
         <translation>Los intervalos de distancia deben empezar en 0 m y crecer, con al menos dos intervalos (se recibió {cutpoints}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="225"/>
+        <location filename="../processing/engine/distance_density.py" line="227"/>
         <source>There are no observations: a detection function needs at least {minimum} detections.</source>
         <translation>No hay observaciones: una función de detección necesita al menos {minimum} detecciones.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="254"/>
+        <location filename="../processing/engine/distance_density.py" line="256"/>
         <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
         <translation>Solo {n} detecciones quedan dentro de la distancia de truncamiento de {w:g} m; una función de detección necesita al menos {minimum} (práctica habitual: de 60 a 80). Muestree más transectos o puntos, o aumente la distancia de truncamiento.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="262"/>
+        <location filename="../processing/engine/distance_density.py" line="264"/>
         <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
         <translation>Solo {n} detecciones quedan dentro de la distancia de truncamiento: la función de detección se basa en pocas distancias (la práctica habitual pide de 60 a 80), así que su forma y la densidad son inciertas, y el AIC puede elegir un modelo por azar.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="412"/>
+        <location filename="../processing/engine/distance_density.py" line="414"/>
         <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
         <translation>Una función de detección por estrato necesita al menos {minimum} detecciones en cada estrato dentro de la distancia de truncamiento; estos estratos tienen menos: {strata}. Use una sola función de detección para todos los estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="431"/>
+        <location filename="../processing/engine/distance_density.py" line="433"/>
         <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
         <translation>Estrato {stratum}: su función de detección se basa en {n} detecciones (la práctica habitual pide de 60 a 80 por función); considere una sola función para todos los estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="438"/>
+        <location filename="../processing/engine/distance_density.py" line="442"/>
         <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
         <translation>La función de detección elegida ({model}{at}) se ajusta mal a las distancias (prueba de bondad de ajuste p = {p:.3f}). Busque en el histograma acumulaciones en distancias redondas o un pico en 0, y considere intervalos de distancia u otro truncamiento.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="445"/>
+        <location filename="../processing/engine/distance_density.py" line="449"/>
         <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
         <translation>La función de detección elegida ({model}) tiene un parámetro en el límite de su rango, así que su varianza no es fiable; pruebe otro truncamiento u otra función clave.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="451"/>
+        <location filename="../processing/engine/distance_density.py" line="455"/>
         <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
         <translation>No se pudo calcular la varianza de la función de detección ({model}) (la verosimilitud es plana en su máximo); su CV falta en el intervalo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="656"/>
+        <location filename="../processing/engine/distance_density.py" line="660"/>
         <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
         <translation>El bootstrap falló: no se pudieron ajustar {failed} de los {n} remuestreos. Ejecute sin el bootstrap.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="744"/>
+        <location filename="../processing/engine/distance_density.py" line="748"/>
         <source>Unknown group-size method &apos;{method}&apos;.</source>
         <translation>Método de tamaño de grupo desconocido '{method}'.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="749"/>
+        <location filename="../processing/engine/distance_density.py" line="753"/>
         <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
         <translation>El nivel de confianza debe estar entre 0.5 y 1 (se recibió {level:g}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="766"/>
+        <location filename="../processing/engine/distance_density.py" line="770"/>
         <source>The bootstrap needs a random generator (a seed).</source>
         <translation>El bootstrap necesita un generador aleatorio (una semilla).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="774"/>
+        <location filename="../processing/engine/distance_density.py" line="778"/>
         <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
         <translation>No se pudieron ajustar {failed} de los {n} remuestreos bootstrap y se dejaron fuera; el intervalo bootstrap puede ser demasiado estrecho.</translation>
     </message>
@@ -5537,22 +3640,22 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Incluso todas las unidades posibles de cada estrato ({n:,}) quedarían lejos del CV objetivo {target_cv:.3g}: n_next son todas las unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1450"/>
+        <location filename="../processing/engine/estimation.py" line="1432"/>
         <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
         <translation>El error estándar de la probabilidad de detección ({se:.3g}) supera la mitad de p ({p:.3g}): el estudio de detección es demasiado pequeño para corregir los conteos de forma fiable, y el método delta en que se basa el intervalo es pobre con ese CV. Amplíe el estudio de detección.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1462"/>
+        <location filename="../processing/engine/estimation.py" line="1444"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
         <translation>No se contó ningún animal en las unidades muestreadas: la estimación es 0, y el intervalo es el límite superior unilateral {hi:.4g} al {level:.0%} (límite de Poisson exacto para un conteo de 0, suponiendo una sola densidad en el marco).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1470"/>
+        <location filename="../processing/engine/estimation.py" line="1452"/>
         <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
         <translation>En los estratos {ids} todas las unidades muestreadas contaron 0: su intervalo es el límite superior unilateral de un conteo de 0 (límite de Poisson exacto), y su error estándar de 0 subestima la incertidumbre global (la especie puede estar presente pero ser rara allí).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1514"/>
+        <location filename="../processing/engine/estimation.py" line="1496"/>
         <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
         <translation>En los estratos {ids} las unidades registran alcances distintos (reach_m): se usa el mayor para la región «plus».</translation>
     </message>
@@ -5577,7 +3680,7 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Las unidades {ids} no son ni puntos ni líneas de cierta longitud; las distancias simuladas necesitan transectos lineales o estaciones puntuales.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="437"/>
+        <location filename="../processing/engine/distance_density.py" line="441"/>
         <source>, stratum {stratum}</source>
         <translation>, estrato {stratum}</translation>
     </message>
@@ -5876,17 +3979,17 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
 <context>
     <name>PlotwiseReport</name>
     <message>
-        <location filename="../processing/report/html.py" line="120"/>
+        <location filename="../processing/report/layout.py" line="152"/>
         <source>yes</source>
         <translation>sí</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="120"/>
+        <location filename="../processing/report/layout.py" line="152"/>
         <source>no</source>
         <translation>no</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="140"/>
+        <location filename="../processing/report/html.py" line="149"/>
         <source>Inputs and parameters</source>
         <translation>Entradas y parámetros</translation>
     </message>
@@ -5901,17 +4004,17 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Valor</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="169"/>
+        <location filename="../processing/report/html.py" line="179"/>
         <source>Written</source>
         <translation>Generado el</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="171"/>
+        <location filename="../processing/report/html.py" line="181"/>
         <source>algorithm</source>
         <translation>algoritmo</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="174"/>
+        <location filename="../processing/report/html.py" line="184"/>
         <source>Field safety</source>
         <translation>Seguridad en el terreno</translation>
     </message>
@@ -5921,12 +4024,12 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Compruebe el acceso y la seguridad de cada unidad antes de enviar un equipo. Esta herramienta elige ubicaciones solo por razones estadísticas: nunca hace que una ubicación sea segura para llegar a ella ni para trabajar en ella. El terreno escarpado, remoto o inundado, la fauna, el tiempo atmosférico y las tierras privadas pueden poner a las personas en riesgo. Siga las normas de seguridad en el terreno de su organismo y la legislación local, y excluya o sustituya cualquier unidad a la que no se pueda llegar con seguridad (regístrela como no muestreada).</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="179"/>
+        <location filename="../processing/report/html.py" line="189"/>
         <source>Warnings</source>
         <translation>Advertencias</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="184"/>
+        <location filename="../processing/report/html.py" line="194"/>
         <source>Method references</source>
         <translation>Referencias de los métodos</translation>
     </message>
@@ -6066,7 +4169,7 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Réplicas de la prueba de bondad de ajuste (GOF_REPLICATES)</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="120"/>
+        <location filename="../processing/report/stratify.py" line="263"/>
         <source>Seed (SEED)</source>
         <translation>Semilla (SEED)</translation>
     </message>
@@ -6331,7 +4434,7 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>{lo} a {hi}</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="29"/>
+        <location filename="../processing/report/stratify.py" line="232"/>
         <source>grid</source>
         <translation>cuadrícula</translation>
     </message>
@@ -6361,12 +4464,12 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Estaciones de cámaras trampa y grabadoras</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="252"/>
+        <location filename="../processing/report/stations.py" line="241"/>
         <source>primary stations</source>
         <translation>estaciones principales</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="252"/>
+        <location filename="../processing/report/stations.py" line="241"/>
         <source>reserve stations</source>
         <translation>estaciones de reserva</translation>
     </message>
@@ -6391,7 +4494,7 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Una estación principal que no se puede instalar (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente estación de reserva no usada de su estrato, en orden de sorteo (draw_ord); en los conglomerados, un conglomerado entero se sustituye por el siguiente conglomerado de reserva. Registre la principal como no instalada y el motivo; nunca traslade una estación a un lugar más cómodo.</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="87"/>
+        <location filename="../processing/report/stratify.py" line="63"/>
         <source>Map</source>
         <translation>Mapa</translation>
     </message>
@@ -6576,7 +4679,7 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="201"/>
+        <location filename="../processing/report/stratify.py" line="95"/>
         <source>Area (ha)</source>
         <translation>Área (ha)</translation>
     </message>
@@ -6621,12 +4724,12 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>MIN_SPACING = {d} m se cumple entre todas las estaciones de la disposición.</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="246"/>
+        <location filename="../processing/report/svg.py" line="200"/>
         <source>the frame</source>
         <translation>el marco</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="247"/>
+        <location filename="../processing/report/svg.py" line="201"/>
         <source>stratum {key}</source>
         <translation>estrato {key}</translation>
     </message>
@@ -6651,62 +4754,62 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>óptima con coste</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="57"/>
+        <location filename="../processing/report/allocate.py" line="49"/>
         <source>Allocation of survey effort</source>
         <translation>Asignación del esfuerzo de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="59"/>
+        <location filename="../processing/report/allocate.py" line="71"/>
         <source>field days</source>
         <translation>jornadas de campo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="59"/>
+        <location filename="../processing/report/allocate.py" line="72"/>
         <source>cost units</source>
         <translation>unidades de coste</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="65"/>
+        <location filename="../processing/report/allocate.py" line="84"/>
         <source>units in total</source>
         <translation>unidades en total</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="66"/>
+        <location filename="../processing/report/allocate.py" line="85"/>
         <source>method</source>
         <translation>método</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="69"/>
+        <location filename="../processing/report/allocate.py" line="88"/>
         <source>expected CV of the overall density</source>
         <translation>CV esperado de la densidad global</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="71"/>
+        <location filename="../processing/report/allocate.py" line="90"/>
         <source>field days needed</source>
         <translation>jornadas de campo necesarias</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="71"/>
+        <location filename="../processing/report/allocate.py" line="90"/>
         <source>cost</source>
         <translation>coste</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="81"/>
+        <location filename="../processing/report/allocate.py" line="105"/>
         <source>a total number of units</source>
         <translation>un número total de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="82"/>
+        <location filename="../processing/report/allocate.py" line="106"/>
         <source>a budget</source>
         <translation>un presupuesto</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="83"/>
+        <location filename="../processing/report/allocate.py" line="107"/>
         <source>a target CV</source>
         <translation>un CV objetivo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Strata layer</source>
         <translation>Capa de estratos</translation>
     </message>
@@ -6716,72 +4819,72 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>SRC de cálculo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Method asked for</source>
         <translation>Método solicitado</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Method applied</source>
         <translation>Método aplicado</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Target</source>
         <translation>Objetivo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Total asked for</source>
         <translation>Total solicitado</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Budget</source>
         <translation>Presupuesto</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Target CV</source>
         <translation>CV objetivo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Unit area (m²)</source>
         <translation>Área de la unidad (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Minimum units per stratum</source>
         <translation>Mínimo de unidades por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>SD field</source>
         <translation>Campo de DE</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="111"/>
         <source> (covariate proxy)</source>
         <translation> (sustituto por la covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Mean field</source>
         <translation>Campo de media</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Cost field</source>
         <translation>Campo de coste</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Fixed cost c0</source>
         <translation>Coste fijo c0</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Layout to come</source>
         <translation>Disposición prevista</translation>
     </message>
@@ -6791,107 +4894,107 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Corrección por población finita</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="119"/>
+        <location filename="../processing/report/layout.py" line="93"/>
         <source>Units per stratum</source>
         <translation>Unidades por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="120"/>
+        <location filename="../processing/report/allocate.py" line="77"/>
         <source>SE of mean per unit (covariate units)</source>
         <translation>Error estándar de la media por unidad (unidades de la covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="120"/>
+        <location filename="../processing/report/allocate.py" line="78"/>
         <source>SE of mean count per unit</source>
         <translation>Error estándar del conteo medio por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="127"/>
+        <location filename="../processing/report/allocate.py" line="147"/>
         <source>Units that fit</source>
         <translation>Unidades que caben</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="128"/>
+        <location filename="../processing/report/allocate.py" line="148"/>
         <source>Lower bound</source>
         <translation>Límite inferior</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="129"/>
+        <location filename="../processing/report/allocate.py" line="149"/>
         <source>Share before rounding</source>
         <translation>Cuota antes del redondeo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="130"/>
+        <location filename="../processing/report/allocate.py" line="150"/>
         <source>Units (n_alloc)</source>
         <translation>Unidades (n_alloc)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="131"/>
+        <location filename="../processing/report/allocate.py" line="151"/>
         <source>Sampling fraction</source>
         <translation>Fracción de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="136"/>
+        <location filename="../processing/report/allocate.py" line="156"/>
         <source>SE of density (per km²)</source>
         <translation>Error estándar de la densidad (por km²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="138"/>
+        <location filename="../processing/report/allocate.py" line="158"/>
         <source>Expected CV (exp_cv)</source>
         <translation>CV esperado (exp_cv)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="380"/>
+        <location filename="../processing/report/estimate.py" line="385"/>
         <source>all strata</source>
         <translation>todos los estratos</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="172"/>
+        <location filename="../processing/report/allocate.py" line="54"/>
         <source>units per stratum</source>
         <translation>unidades por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="172"/>
+        <location filename="../processing/report/allocate.py" line="54"/>
         <source>Units allocated to each stratum</source>
         <translation>Unidades asignadas a cada estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="196"/>
+        <location filename="../processing/report/allocate.py" line="213"/>
         <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
         <translation>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="196"/>
+        <location filename="../processing/report/allocate.py" line="213"/>
         <source>Field days needed</source>
         <translation>Jornadas de campo necesarias</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="196"/>
+        <location filename="../processing/report/allocate.py" line="213"/>
         <source>Cost of the design</source>
         <translation>Coste del diseño</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="210"/>
+        <location filename="../processing/report/allocate.py" line="231"/>
         <source>What the choice of method buys, at {n} units</source>
         <translation>Lo que aporta la elección del método, con {n} unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="214"/>
+        <location filename="../processing/report/allocate.py" line="235"/>
         <source>stratum {label}</source>
         <translation>estrato {label}</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="217"/>
+        <location filename="../processing/report/allocate.py" line="239"/>
         <source>Variance relative to the applied allocation</source>
         <translation>Varianza relativa a la asignación aplicada</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="219"/>
+        <location filename="../processing/report/allocate.py" line="241"/>
         <source>Expected CV</source>
         <translation>CV esperado</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="230"/>
+        <location filename="../processing/report/allocate.py" line="252"/>
         <source>Without standard deviations the precision of the designs cannot be compared.</source>
         <translation>Sin desviaciones estándar no se puede comparar la precisión de los diseños.</translation>
     </message>
@@ -6901,92 +5004,92 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Diseños de muestreo comparados por simulación</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="49"/>
+        <location filename="../processing/report/comparedesigns.py" line="66"/>
         <source>recommended design</source>
         <translation>diseño recomendado</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="50"/>
+        <location filename="../processing/report/comparedesigns.py" line="67"/>
         <source>its RMSE (animals)</source>
         <translation>su RECM (animales)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="51"/>
+        <location filename="../processing/report/comparedesigns.py" line="68"/>
         <source>its RMSE relative to the total</source>
         <translation>su RECM relativa al total</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="52"/>
+        <location filename="../processing/report/comparedesigns.py" line="69"/>
         <source>its 95 % interval coverage</source>
         <translation>cobertura de sus intervalos al 95 %</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="54"/>
+        <location filename="../processing/report/comparedesigns.py" line="71"/>
         <source>expected animals in the frame</source>
         <translation>animales esperados en el marco</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="57"/>
+        <location filename="../processing/report/comparedesigns.py" line="78"/>
         <source>point station</source>
         <translation>estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="58"/>
+        <location filename="../processing/report/comparedesigns.py" line="79"/>
         <source>square plot</source>
         <translation>parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="59"/>
+        <location filename="../processing/report/comparedesigns.py" line="80"/>
         <source>circular plot</source>
         <translation>parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="60"/>
+        <location filename="../processing/report/comparedesigns.py" line="81"/>
         <source>line transect</source>
         <translation>transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="63"/>
+        <location filename="../processing/report/comparedesigns.py" line="84"/>
         <source>counting radius</source>
         <translation>radio de conteo</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="64"/>
+        <location filename="../processing/report/comparedesigns.py" line="85"/>
         <source>side</source>
         <translation>lado</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="65"/>
+        <location filename="../processing/report/comparedesigns.py" line="86"/>
         <source>radius</source>
         <translation>radio</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="66"/>
+        <location filename="../processing/report/comparedesigns.py" line="87"/>
         <source>length</source>
         <translation>longitud</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="71"/>
+        <location filename="../processing/report/comparedesigns.py" line="92"/>
         <source>, strip half-width {w:g} m</source>
         <translation>, semianchura de franja {w:g} m</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="73"/>
+        <location filename="../processing/report/comparedesigns.py" line="94"/>
         <source>Density surface</source>
         <translation>Superficie de densidad</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="74"/>
+        <location filename="../processing/report/comparedesigns.py" line="95"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="252"/>
+        <location filename="../processing/report/stratify.py" line="93"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../processing/report/distancedensity.py" line="147"/>
+        <location filename="../processing/report/stratify.py" line="232"/>
         <source>none</source>
         <translation>ninguno</translation>
     </message>
@@ -6996,77 +5099,77 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Campo de estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="77"/>
+        <location filename="../processing/report/comparedesigns.py" line="98"/>
         <source>feature id</source>
         <translation>identificador de entidad</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="79"/>
+        <location filename="../processing/report/comparedesigns.py" line="100"/>
         <source>Surface cell</source>
         <translation>Celda de la superficie</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="80"/>
+        <location filename="../processing/report/comparedesigns.py" line="101"/>
         <source>Sub-cells per cell side (for counting)</source>
         <translation>Subceldas por lado de celda (para el conteo)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="81"/>
+        <location filename="../processing/report/comparedesigns.py" line="102"/>
         <source>Unit</source>
         <translation>Unidad</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="82"/>
+        <location filename="../processing/report/comparedesigns.py" line="103"/>
         <source>Counted area per unit (m²)</source>
         <translation>Área contada por unidad (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <location filename="../processing/report/comparedesigns.py" line="104"/>
         <source>Bearing</source>
         <translation>Rumbo</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <location filename="../processing/report/layout.py" line="150"/>
         <source>random</source>
         <translation>aleatorio</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="86"/>
+        <location filename="../processing/report/comparedesigns.py" line="107"/>
         <source>Units wholly inside their stratum</source>
         <translation>Unidades por completo dentro de su estrato</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="91"/>
+        <location filename="../processing/report/comparedesigns.py" line="112"/>
         <source>Number of units</source>
         <translation>Número de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="92"/>
+        <location filename="../processing/report/comparedesigns.py" line="113"/>
         <source>Simulated surveys per design</source>
         <translation>Muestreos simulados por diseño</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>Counts per cell</source>
         <translation>Conteos por celda</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>negative binomial, k = {k:g}</source>
         <translation>binomial negativa, k = {k:g}</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>Poisson</source>
         <translation>Poisson</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <location filename="../processing/report/comparedesigns.py" line="119"/>
         <source>Variance estimator (grid, balanced)</source>
         <translation>Estimador de la varianza (cuadrícula, equilibrado)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <location filename="../processing/report/comparedesigns.py" line="119"/>
         <source>local neighbourhood</source>
         <translation>vecindario local</translation>
     </message>
@@ -7086,127 +5189,127 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Semilla</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="109"/>
+        <location filename="../processing/report/comparedesigns.py" line="132"/>
         <source>How the designs did at {n} units</source>
         <translation>Resultados de los diseños con {n} unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="111"/>
+        <location filename="../processing/report/comparedesigns.py" line="134"/>
         <source>Design</source>
         <translation>Diseño</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="112"/>
+        <location filename="../processing/report/comparedesigns.py" line="135"/>
         <source>Mean units surveyed</source>
         <translation>Media de unidades muestreadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="113"/>
+        <location filename="../processing/report/comparedesigns.py" line="136"/>
         <source>Relative bias</source>
         <translation>Sesgo relativo</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="114"/>
+        <location filename="../processing/report/comparedesigns.py" line="137"/>
         <source>Empirical SE (animals)</source>
         <translation>Error estándar empírico (animales)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="311"/>
+        <location filename="../processing/report/comparedesigns.py" line="329"/>
         <source>RMSE (animals)</source>
         <translation>RECM (animales)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="116"/>
+        <location filename="../processing/report/comparedesigns.py" line="139"/>
         <source>± Monte Carlo SE</source>
         <translation>± error estándar de Monte Carlo</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="117"/>
+        <location filename="../processing/report/comparedesigns.py" line="140"/>
         <source>RMSE / total</source>
         <translation>RECM / total</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="118"/>
+        <location filename="../processing/report/comparedesigns.py" line="141"/>
         <source>Mean estimated CV</source>
         <translation>CV estimado medio</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="119"/>
+        <location filename="../processing/report/comparedesigns.py" line="142"/>
         <source>95 % interval coverage</source>
         <translation>Cobertura de los intervalos al 95 %</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="120"/>
+        <location filename="../processing/report/comparedesigns.py" line="143"/>
         <source>Surveys without an estimate</source>
         <translation>Muestreos sin estimación</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <location filename="../processing/report/comparedesigns.py" line="178"/>
         <source>RMSE of the abundance (animals)</source>
         <translation>RECM de la abundancia (animales)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <location filename="../processing/report/comparedesigns.py" line="178"/>
         <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
         <translation>Raíz del error cuadrático medio de la estimación de la abundancia, por diseño (menor es mejor)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="166"/>
+        <location filename="../processing/report/comparedesigns.py" line="191"/>
         <source>Recommendation</source>
         <translation>Recomendación</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="168"/>
+        <location filename="../processing/report/comparedesigns.py" line="193"/>
         <source>No design gave estimates: see the warnings.</source>
         <translation>Ningún diseño dio estimaciones: vea las advertencias.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="212"/>
+        <location filename="../processing/report/comparedesigns.py" line="235"/>
         <source>How the simulation works</source>
         <translation>Cómo funciona la simulación</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="257"/>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
         <source>Area (km²)</source>
         <translation>Área (km²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="258"/>
+        <location filename="../processing/report/comparedesigns.py" line="276"/>
         <source>Mean expected count per unit</source>
         <translation>Conteo esperado medio por unidad</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="259"/>
+        <location filename="../processing/report/comparedesigns.py" line="277"/>
         <source>S_h (count SD per unit)</source>
         <translation>S_h (DE del conteo por unidad)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="262"/>
+        <location filename="../processing/report/comparedesigns.py" line="280"/>
         <source>Units, proportional</source>
         <translation>Unidades, proporcional</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="264"/>
+        <location filename="../processing/report/comparedesigns.py" line="282"/>
         <source>Units, Neyman (best case)</source>
         <translation>Unidades, Neyman (mejor caso)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="266"/>
+        <location filename="../processing/report/comparedesigns.py" line="284"/>
         <source>Units, Neyman from a pilot (mean)</source>
         <translation>Unidades, Neyman a partir de un piloto (media)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="292"/>
+        <location filename="../processing/report/comparedesigns.py" line="310"/>
         <source>RMSE against the number of units</source>
         <translation>RECM frente al número de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <location filename="../processing/report/comparedesigns.py" line="316"/>
         <source>number of units</source>
         <translation>número de unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <location filename="../processing/report/comparedesigns.py" line="316"/>
         <source>RMSE of the abundance estimate against the number of units</source>
         <translation>RECM de la estimación de la abundancia frente al número de unidades</translation>
     </message>
@@ -7216,12 +5319,12 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Unidades</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="318"/>
+        <location filename="../processing/report/comparedesigns.py" line="336"/>
         <source>{a} → {b} units: RMSE {change:+.0%}</source>
         <translation>{a} → {b} unidades: RECM {change:+.0%}</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="323"/>
+        <location filename="../processing/report/comparedesigns.py" line="341"/>
         <source>For {name}: </source>
         <translation>Para {name}: </translation>
     </message>
@@ -7876,7 +5979,7 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Área de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="326"/>
+        <location filename="../processing/report/estimate.py" line="331"/>
         <source>Interval</source>
         <translation>Intervalo</translation>
     </message>
@@ -7956,77 +6059,77 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>{what} en el marco, límites al {level}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="309"/>
+        <location filename="../processing/report/estimate.py" line="315"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
         <translation>No respuesta: {n} unidad(es) no se muestrearon (sin conteo) y se dejaron fuera: {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="315"/>
+        <location filename="../processing/report/estimate.py" line="321"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>Se omitieron {n} unidad(es) de reserva no usada(s) sin conteo.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/estimate.py" line="330"/>
         <source>The overall interval by method</source>
         <translation>El intervalo global según el método</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="326"/>
+        <location filename="../processing/report/estimate.py" line="331"/>
         <source>Used in the outputs</source>
         <translation>Usado en las salidas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>overall abundance in a resample</source>
         <translation>abundancia global en un remuestreo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>resamples</source>
         <translation>remuestreos</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>{level} percentile limits</source>
         <translation>límites de percentiles al {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
         <translation>Los {n:,} remuestreos bootstrap de la abundancia global</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="379"/>
+        <location filename="../processing/report/estimate.py" line="384"/>
         <source>true density (simulation)</source>
         <translation>densidad verdadera (simulación)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="389"/>
+        <location filename="../processing/report/estimate.py" line="394"/>
         <source>{what} by stratum with {level} confidence intervals</source>
         <translation>{what} por estrato con intervalos de confianza al {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="404"/>
+        <location filename="../processing/report/estimate.py" line="409"/>
         <source>lowest</source>
         <translation>mínimo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="404"/>
+        <location filename="../processing/report/estimate.py" line="409"/>
         <source>highest</source>
         <translation>máximo</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="415"/>
+        <location filename="../processing/report/estimate.py" line="420"/>
         <source>surveyed units</source>
         <translation>unidades muestreadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="425"/>
+        <location filename="../processing/report/estimate.py" line="430"/>
         <source>not surveyed</source>
         <translation>no muestreadas</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="434"/>
+        <location filename="../processing/report/estimate.py" line="439"/>
         <source>Strata shaded by {what}, with the units</source>
         <translation>Estratos sombreados según {what}, con las unidades</translation>
     </message>
@@ -8036,62 +6139,62 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Precauciones</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="180"/>
+        <location filename="../processing/report/allocate.py" line="196"/>
         <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction 1 − n_h·a/A_h, since the layout named draws units that do not overlap (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
         <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, con la corrección por población finita 1 − n_h·a/A_h, ya que la disposición indicada sortea unidades que no se solapan (Cochran 1977, cap. 5). La precisión real depende de los conteos que obtenga el muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="180"/>
+        <location filename="../processing/report/allocate.py" line="196"/>
         <source>Expected precision uses the pilot figures as if they were the truth, without a finite-population correction: a simple random layout&apos;s units may overlap, so their possible positions are a continuous population (Cordy 1993). Real precision depends on the counts the survey finds.</source>
         <translation>La precisión esperada usa las cifras piloto como si fueran la verdad, sin corrección por población finita: las unidades de una disposición aleatoria simple pueden solaparse, así que sus posiciones posibles forman una población continua (Cordy 1993). La precisión real depende de los conteos que obtenga el muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="145"/>
+        <location filename="../processing/report/comparedesigns.py" line="168"/>
         <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
         <translation>Cada cifra es a su vez una estimación a partir de {reps} muestreos simulados: sesgos relativos de en torno a ±{noise:.1%} no se distinguen de cero, y RECM más próximas que dos errores estándar de Monte Carlo son un empate. Más muestreos por diseño estrechan ambos.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="170"/>
+        <location filename="../processing/report/comparedesigns.py" line="195"/>
         <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
         <translation>{name} dio la menor raíz del error cuadrático medio ({rmse:,.1f} animales, {rel:.1%} del total verdadero medio de {total:,.0f}) entre los diseños cuyos intervalos al 95 % contuvieron la verdad al menos el 90 % de las veces.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="177"/>
+        <location filename="../processing/report/comparedesigns.py" line="202"/>
         <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
         <translation>{others} lo hicieron casi igual de bien: las diferencias quedan dentro del error de Monte Carlo de la simulación. Entre ellos, elija el más fácil de llevar a cabo en el terreno.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="189"/>
+        <location filename="../processing/report/comparedesigns.py" line="214"/>
         <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
         <translation>Los intervalos de {names} contuvieron la verdad menos del 90 % de las veces: su precisión declarada induciría a error.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="199"/>
+        <location filename="../processing/report/comparedesigns.py" line="224"/>
         <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
         <translation>El número de unidades de la cuadrícula sistemática varía de un muestreo a otro (se muestra la media). Con la fórmula del muestreo aleatorio simple su intervalo suele ser conservador en superficies suaves.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="213"/>
+        <location filename="../processing/report/comparedesigns.py" line="236"/>
         <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine and follows the real chain&apos;s edge protocol: by default plus sampling, with centres over each stratum (or the frame) grown by the unit&apos;s reach (and half a surface cell), each unit counting the animals of the cells of its own stratum whose centres it covers, with its nominal area, and the estimation engine expanding the counts to the grown area (Gregoire &amp; Valentine 2008, ch. 10); the abundance is the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
         <translation>Cada muestreo simulado genera una población sobre la superficie: conteos de Poisson en cada celda, o conteos binomiales negativos (gamma-Poisson) cuando k es mayor que 0. Todos los diseños muestrean las mismas poblaciones. Cada diseño se dispone con el motor de disposición y sigue el protocolo de borde de la cadena real: por defecto el muestreo «plus», con centros sobre cada estrato (o el marco) ampliado en el alcance de la unidad (y media celda de la superficie), cada unidad contando los animales de las celdas de su propio estrato cuyos centros cubre, con su área nominal, y el motor de estimación extendiendo los conteos al área ampliada (Gregoire &amp; Valentine 2008, cap. 10); la abundancia es el estimador de razón con su intervalo t (grados de libertad de Satterthwaite). Cada estimación se juzga frente al total verdadero de su propia población.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="227"/>
+        <location filename="../processing/report/comparedesigns.py" line="250"/>
         <source>The stratified Neyman design with the true S_h is the best case: it allocates with the standard deviations the surface implies, which no survey knows. The pilot-based Neyman design estimates S_h in every simulated survey from a pilot of {pilot} simple random units per stratum (an independent realisation: a pilot season), as a survey would; its pilot units are not counted in its n.</source>
         <translation>El diseño estratificado de Neyman con la S_h verdadera es el mejor caso: asigna con las desviaciones estándar que implica la superficie, que ningún muestreo conoce. El diseño de Neyman basado en un piloto estima S_h en cada muestreo simulado a partir de un piloto de {pilot} unidades aleatorias simples por estrato (una realización independiente: una temporada piloto), como lo haría un muestreo; sus unidades piloto no se cuentan en su n.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="236"/>
+        <location filename="../processing/report/comparedesigns.py" line="259"/>
         <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
         <translation>Supuestos: la superficie es la verdad, se cuenta cada animal de una unidad (sin error de detección), los animales no se mueven durante el muestreo y se puede llegar a cada unidad. Ningún muestreo real cumple exactamente ninguno de ellos; use la comparación para ordenar los diseños y dimensionar el esfuerzo, no como una promesa de precisión.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="280"/>
+        <location filename="../processing/report/comparedesigns.py" line="298"/>
         <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
         <translation>S_h es la desviación estándar del conteo de una unidad en el estrato implicada por la superficie: la dispersión de los conteos esperados sobre {draws} posiciones aleatorias de unidades más la variación de Poisson (y binomial negativa) en torno a ellos. La asignación de Neyman da a cada estrato unidades en proporción a A_h·S_h (Neyman 1934; Cochran 1977, §5.5), con al menos 2 por estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="328"/>
+        <location filename="../processing/report/comparedesigns.py" line="346"/>
         <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
         <translation>La RECM de un diseño disminuye aproximadamente como 1/√n: duplicar las unidades la reduce en torno a un 30 %. Donde la curva se aplana, más unidades aportan poco; dedique mejor el esfuerzo a mejores conteos (detección) o a una mejor superficie.</translation>
     </message>
@@ -8101,112 +6204,112 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Solo simulación: el total verdadero ({truth:,.0f}) se conoce aquí porque la población se simuló. La estimación es {est:,.0f} ({error:+.1%} respecto a la verdad), y el intervalo al {level} {verdict} la verdad. Solo una simulación puede mostrarlo; un muestreo real nunca conoce su total verdadero, y el intervalo de un muestreo puede no contenerlo por azar (debería ocurrir en torno al {miss:.0%} de los muestreos).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="291"/>
+        <location filename="../processing/report/estimate.py" line="297"/>
         <source>† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit −ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided by p with detection. For the frame it assumes one density over the strata.</source>
         <translation>† Todos los conteos fueron 0: la estimación es 0 y el intervalo va de 0 al límite superior unilateral −ln(1 − {level}) · A / Σa de un conteo de Poisson de 0 (Garwood 1936; unas 3 · A / Σa al 95 %), dividido por p con detección. Para el marco supone una sola densidad en los estratos.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="300"/>
+        <location filename="../processing/report/estimate.py" line="306"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
         <translation>El marco se redujo: los estratos {strata} no tenían unidades muestreadas y se dejaron fuera ({area:,.3g} {unit}). La estimación solo cubre los estratos restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="345"/>
+        <location filename="../processing/report/estimate.py" line="350"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
         <translation>El intervalo t es simétrico respecto a la estimación; el intervalo log-normal es asimétrico hacia la derecha, como la distribución muestral de una estimación basada en conteos, y se adapta mejor a muestras pequeñas de animales agregados. Elija el método antes de mirar los resultados.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="443"/>
+        <location filename="../processing/report/estimate.py" line="448"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
         <translation>El valor de cada estrato es la proporción de sus unidades muestreadas donde se detectó la especie; el valor del marco pondera los estratos por el número de unidades que contienen (área / área de la unidad). Es la ocupación ingenua: no está corregida por la detección, por lo que subestima la ocupación real siempre que la especie pueda estar presente y pasar inadvertida. La ocupación corregida por la detección requiere visitas repetidas a las mismas unidades (modelos de ocupación).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="454"/>
+        <location filename="../processing/report/estimate.py" line="459"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
         <translation>La densidad de cada estrato es el conteo total dividido por el área total muestreada, D_h = Σy/Σa (el estimador de razón, Cochran 1977, cap. 6), con la varianza linealizada v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), donde f_h = Σa/A_h cuando se aplica la corrección por población finita y 0 en otro caso. La abundancia es N_h = D_h A_h; la abundancia del marco es la suma sobre los estratos, su varianza la suma de las varianzas de los estratos y su densidad N / Σ A_h (Cochran 1977, cap. 5).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="466"/>
+        <location filename="../processing/report/estimate.py" line="471"/>
         <source>Edges: the units were laid out by plus sampling (Gregoire &amp; Valentine 2008, ch. 10): their centres were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside its own stratum. Every animal then has the same chance of being counted, and the counts expand to the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).</source>
         <translation>Bordes: las unidades se dispusieron por muestreo «plus» (Gregoire &amp; Valentine 2008, cap. 10): sus centros se sortearon sobre cada estrato ampliado en el alcance de la unidad, y cada unidad solo cuenta los animales dentro de su propio estrato. Cada animal tiene entonces la misma probabilidad de ser contado, y los conteos se extienden al área ampliada A⁺_h: N_h = A⁺_h Σy/Σa (columna de las áreas de expansión en la salida).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="476"/>
+        <location filename="../processing/report/estimate.py" line="481"/>
         <source>Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit&apos;s reach of the edge; the estimate carries the inner density over that band. Where the animals near the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.</source>
         <translation>Bordes: las unidades se mantuvieron por completo dentro de sus estratos, así que ninguna unidad alcanza la franja situada a menos de un alcance de unidad del borde; la estimación traslada la densidad interior a esa franja. Donde los animales cercanos al borde difieren (una orilla, el borde de un bosque), está sesgada; el muestreo «plus» (INSIDE desactivado) no lo está.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="489"/>
+        <location filename="../processing/report/estimate.py" line="494"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, eq. 3.75), with df_p = {df} for p.</source>
         <translation>Detección: las estimaciones se dividen por p = {p:g}, y los CV al cuadrado de la estimación de los conteos y de p (EE {se:g}, CV {cv:.3f}) se suman (método delta, Seber 1982). Los grados de libertad de ambas partes se combinan por la regla de Satterthwaite, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, ec. 3.75), con df_p = {df} para p.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="501"/>
+        <location filename="../processing/report/estimate.py" line="506"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds. The observed SDs are themselves uncertain, especially from few units.</source>
         <translation>Próximo muestreo: n_next es el número de unidades que cada estrato necesita para un CV de {cv:g} de la abundancia global, por asignación de Neyman n_h ∝ M_h S_h sobre las desviaciones estándar que implica ahora el estimador de la varianza (Neyman 1934; Cochran 1977, ec. 5.26), al menos 2 y como máximo las unidades que contiene un estrato. Las DE observadas son a su vez inciertas, sobre todo con pocas unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="513"/>
+        <location filename="../processing/report/estimate.py" line="518"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
         <translation>Los intervalos usan la t de Student con los grados de libertad efectivos de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, cap. 5). Los límites inferiores por debajo de 0 se muestran como 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="513"/>
+        <location filename="../processing/report/estimate.py" line="518"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go below 0.</source>
         <translation>Los intervalos son log-normales: de N/C a N·C con C = exp(t_df · √ln(1 + CV²)), t con los grados de libertad de Satterthwaite de la estimación (Buckland et al. 2001, §3.6.1; el cuantil normal solo para gl infinitos, Burnham et al. 1987). Son asimétricos y nunca bajan de 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="513"/>
+        <location filename="../processing/report/estimate.py" line="518"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction where it applies (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
         <translation>Los intervalos son intervalos bootstrap estratificados de percentiles reescalados, a partir de {b:,} remuestreos tomados con la semilla registrada: en cada estrato se toman n − 1 unidades con reposición y su densidad se acerca a la estimación del estrato por el factor √(1 − f), de modo que los remuestreos varían tanto como indica la varianza estratificada, con la corrección por población finita donde se aplica (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="543"/>
+        <location filename="../processing/report/estimate.py" line="548"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to the same variance. For a simple random layout use the simple formula.</source>
         <translation>Las varianzas usan el estimador de vecindario local de Stevens &amp; Olsen (2003): cada unidad y sus tres unidades más próximas en el estrato forman un vecindario, con pesos que suman 1 en cada vecindario y en cada unidad, y v = Σ_i Σ_j w_ij (z_j − z̄_i)². Sus grados de libertad son los de una forma cuadrática, (tr Q)² / tr Q² (Box 1954), y el bootstrap dispersa sus remuestreos hasta la misma varianza. Para una disposición aleatoria simple use la fórmula simple.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="554"/>
+        <location filename="../processing/report/estimate.py" line="559"/>
         <source>Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on average with the simple formula where the population has no spatial pattern; the published sum falls about a quarter short there. This scaling is ours, not Stevens &amp; Olsen's.</source>
         <translation>Nuestra variante: la doble suma se multiplica por n / Σ_i (1 − Σ_j w_ij²), para que coincida en promedio con la fórmula simple donde la población no tiene estructura espacial; la suma publicada se queda allí corta en alrededor de un cuarto. Este escalado es nuestro, no de Stevens &amp; Olsen.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="563"/>
+        <location filename="../processing/report/estimate.py" line="568"/>
         <source>Strata with one surveyed unit were paired with a partner fixed before the counts were seen (the stratum sharing the longest edge on the map, or else the next stratum in id order). Two one-unit strata share the pairs formula v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, with the weights of Hansen, Hurwitz &amp; Madow 1953); a one-unit stratum paired with a stratum of several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's spread, while the partner keeps its own variance. Differences between the paired strata count as variance, so these standard errors tend to be too large; each such stratum has 1 degree of freedom.</source>
         <translation>Los estratos con una sola unidad muestreada se emparejaron con una pareja fijada antes de ver los conteos (el estrato que comparte el límite más largo en el mapa o, si no, el siguiente estrato en el orden de identificadores). Dos estratos de una sola unidad comparten la fórmula de pares v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, con los pesos de Hansen, Hurwitz &amp; Madow 1953); un estrato de una sola unidad emparejado con un estrato de varias unidades toma (D̂_1 − D̂_2)² − v(D̂_2), como mínimo la varianza que tiene una unidad con la dispersión de la pareja, mientras que la pareja conserva su propia varianza. Las diferencias entre los estratos emparejados cuentan como varianza, por lo que estos errores estándar tienden a ser demasiado grandes; cada uno de esos estratos tiene 1 grado de libertad.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="580"/>
+        <location filename="../processing/report/estimate.py" line="585"/>
         <source>The finite-population correction was refused in strata {ids}: their units come from a simple random layout whose units may overlap, a continuous population of possible units, which has no such correction (Cordy 1993).</source>
         <translation>La corrección por población finita se rechazó en los estratos {ids}: sus unidades proceden de una disposición aleatoria simple cuyas unidades pueden solaparse, una población continua de unidades posibles, que no tiene tal corrección (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="589"/>
+        <location filename="../processing/report/estimate.py" line="594"/>
         <source>The finite-population correction assumes that the units do not overlap and were drawn without replacement from the units that tile each stratum. The units carry no design record (they did not come from plotwise:layout), so this could not be checked: if they may overlap, switch the correction off.</source>
         <translation>La corrección por población finita supone que las unidades no se solapan y se sortearon sin reposición entre las unidades que teselan cada estrato. Las unidades no llevan registro de diseño (no proceden de plotwise:layout), así que esto no pudo comprobarse: si pueden solaparse, desactive la corrección.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="602"/>
+        <location filename="../processing/report/estimate.py" line="607"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
         <translation>La inferencia solo cubre el marco de muestreo: los polígonos de estratos dados aquí. No dice nada del terreno fuera de ellos (zonas excluidas, terreno inaccesible, tierras vecinas).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="610"/>
+        <location filename="../processing/report/estimate.py" line="615"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
         <translation>Datos de presencia: una no detección no es una ausencia. La ocupación ingenua necesita visitas repetidas para poder corregirse por la detección.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="618"/>
+        <location filename="../processing/report/estimate.py" line="623"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
         <translation>Detección: p debe proceder de un estudio aparte (doble observador, animales marcados, muestreo de distancias) de la misma especie, estación, hábitat y observadores. Si la detección en este muestreo difiere, la estimación está sesgada en el mismo factor, y ningún intervalo de aquí lo muestra.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="627"/>
+        <location filename="../processing/report/estimate.py" line="632"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
         <translation>Detección: con p = 1 la estimación supone que se contó cada animal de una unidad muestreada. Los animales no vistos la hacen demasiado baja, y el intervalo no muestra ese sesgo.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="634"/>
+        <location filename="../processing/report/estimate.py" line="639"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
         <translation>El diseño del que proceden las unidades: las fórmulas suponen que las unidades se colocaron al azar dentro de cada estrato con probabilidades iguales (disposición aleatoria simple, en cuadrícula sistemática o espacialmente equilibrada), que las unidades no muestreadas faltan por azar y que las unidades de reserva sustituyeron a las principales en orden de sorteo. Las unidades elegidas por comodidad (cerca de caminos o campamentos) u omitidas por lo que se esperaba encontrar en ellas sesgan la estimación de formas que ningún error estándar muestra.</translation>
     </message>
@@ -8945,6 +7048,641 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <source>The simulation assumes a steady change in % per year, constant detection, and that every planned visit happens. Missed visits, a change in detection or a trend that is not steady reduce the power.</source>
         <translation>La simulación supone un cambio regular en % por año, una detección constante y que se realiza cada visita prevista. Las visitas perdidas, un cambio en la detección o una tendencia irregular reducen la potencia.</translation>
     </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="41"/>
+        <source>study area (ha)</source>
+        <translation>área de estudio (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="41"/>
+        <source>frame (ha)</source>
+        <translation>marco (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="41"/>
+        <source>kept</source>
+        <translation>conservado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="46"/>
+        <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
+        <translation>Las estimaciones de un muestreo sobre este marco valen solo para el marco ({ha} ha), no para toda el área de estudio.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="54"/>
+        <source>Frame (filled), with the areas lost to each rule</source>
+        <translation>Marco (relleno), con las áreas perdidas por cada regla</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="61"/>
+        <source>Area kept and area lost to each rule</source>
+        <translation>Área conservada y área perdida por cada regla</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="63"/>
+        <source>lost to the excluded polygons (EXCLUDE)</source>
+        <translation>perdida por los polígonos excluidos (EXCLUDE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="64"/>
+        <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
+        <translation>perdida por la máscara ráster (MASK fuera del intervalo aceptado, o NoData)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="66"/>
+        <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
+        <translation>perdida por la franja interior del borde (EDGE_BUFFER)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="68"/>
+        <source>study area</source>
+        <translation>área de estudio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="71"/>
+        <source>sampling frame (kept)</source>
+        <translation>marco de muestreo (conservado)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="73"/>
+        <source>% of study area</source>
+        <translation>% del área de estudio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="75"/>
+        <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
+        <translation>Las reglas se aplican en el orden mostrado; a cada una solo se le imputa el área que seguía en el marco, de modo que el marco y las áreas perdidas suman el área de estudio.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="82"/>
+        <source>Mask raster</source>
+        <translation>Ráster de máscara</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>cells tested over the study area&apos;s extent</source>
+        <translation>celdas comprobadas en la extensión del área de estudio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>cell size (m)</source>
+        <translation>tamaño de celda (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>cells below the lowest accepted value</source>
+        <translation>celdas por debajo del valor mínimo aceptado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>cells above the highest accepted value</source>
+        <translation>celdas por encima del valor máximo aceptado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>NoData cells (including cells outside the raster)</source>
+        <translation>celdas NoData (incluidas las celdas fuera del ráster)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>reprojected on the fly (nearest neighbour)</source>
+        <translation>reproyectado al vuelo (vecino más próximo)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="101"/>
+        <source>, projected from {src} (UTM zone of the study area&apos;s centre)</source>
+        <translation>, proyectado desde {src} (zona UTM del centro del área de estudio)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Study area (INPUT)</source>
+        <translation>Área de estudio (INPUT)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Areas to exclude (EXCLUDE)</source>
+        <translation>Zonas que excluir (EXCLUDE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Mask raster (MASK)</source>
+        <translation>Ráster de máscara (MASK)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Lowest accepted mask value (MASK_MIN)</source>
+        <translation>Valor mínimo aceptado de la máscara (MASK_MIN)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Highest accepted mask value (MASK_MAX)</source>
+        <translation>Valor máximo aceptado de la máscara (MASK_MAX)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Inward edge buffer (EDGE_BUFFER, m)</source>
+        <translation>Franja interior del borde (EDGE_BUFFER, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="147"/>
+        <source>sampling frame</source>
+        <translation>marco de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="151"/>
+        <source>excluded polygons</source>
+        <translation>polígonos excluidos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="155"/>
+        <source>raster mask</source>
+        <translation>máscara ráster</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="157"/>
+        <source>study area boundary</source>
+        <translation>límite del área de estudio</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="22"/>
+        <source>Demo reserve: {name}</source>
+        <translation>Reserva de demostración: {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="23"/>
+        <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
+        <translation>Datos inventados para demostraciones, formación y pruebas. {name} y el velmar ({desc}) no existen.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>reserve area</source>
+        <translation>superficie de la reserva</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>true number of velmar</source>
+        <translation>número verdadero de velmar</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>expected number</source>
+        <translation>número esperado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>groups</source>
+        <translation>grupos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="35"/>
+        <source>Raster cell size (m)</source>
+        <translation>Tamaño de celda del ráster (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="35"/>
+        <source>Mean group size (mu)</source>
+        <translation>Tamaño medio de los grupos (mu)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="35"/>
+        <source>Group spread, SD of members around the centre (m)</source>
+        <translation>Dispersión de los grupos, desviación estándar de los miembros alrededor del centro (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="42"/>
+        <source>Areas</source>
+        <translation>Zonas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
+        <source>Part</source>
+        <translation>Parte</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
+        <source>Lake (excluded)</source>
+        <translation>Lago (excluido)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
+        <source>Private inholding (excluded)</source>
+        <translation>Enclave privado (excluido)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="50"/>
+        <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
+        <translation>Hollin Ridge Reserve, las zonas excluidas y los animales simulados.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="52"/>
+        <source>How the population was simulated</source>
+        <translation>Cómo se simuló la población</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="53"/>
+        <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
+        <translation>Los centros de grupo forman un proceso de Poisson no homogéneo sobre el hábitat (la reserva sin el lago); su intensidad es proporcional a exp(0,9 × verdor estandarizado − 0,6 × altitud estandarizada). Cada grupo tiene un número de miembros de Poisson (media {mu:g}) dispersos alrededor de su centro con un desplazamiento normal de {sigma:g} m; los miembros que caen fuera del hábitat no forman parte de la población. Es un proceso de conglomerados de Thomas. Su total esperado y su varianza se calculan a partir de la superficie de intensidad en la malla del ráster.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="70"/>
+        <source>Lake</source>
+        <translation>Lago</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="70"/>
+        <source>Private inholding</source>
+        <translation>Enclave privado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="70"/>
+        <source>Velmar (every third animal)</source>
+        <translation>Velmar (uno de cada tres animales)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/html.py" line="76"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="62"/>
+        <source>Sample-unit layout</source>
+        <translation>Disposición de las unidades de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="212"/>
+        <source>primary units</source>
+        <translation>unidades principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="212"/>
+        <source>reserve units</source>
+        <translation>unidades de reserva</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="76"/>
+        <source>strata</source>
+        <translation>estratos</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="72"/>
+        <source>Replacing units in the field</source>
+        <translation>Sustituir unidades en el terreno</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="73"/>
+        <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
+        <translation>Una unidad principal que no se puede muestrear (sin acceso seguro, sin permiso, inundada, ...) se sustituye por la siguiente unidad de reserva no usada del mismo estrato, en orden de sorteo (draw_ord). Registre la principal como no muestreada y el motivo; nunca traslade una unidad a un lugar más cómodo ni tome una reserva de otro estrato. Las reservas llevan los mismos incl_p y weight que las principales a las que sustituyen.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="82"/>
+        <source>Strata (filled), primary units (dark) and reserve units (light)</source>
+        <translation>Estratos (rellenos), unidades principales (oscuras) y unidades de reserva (claras)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="95"/>
+        <source>Effective area (ha)</source>
+        <translation>Área efectiva (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="96"/>
+        <source>Units asked</source>
+        <translation>Unidades pedidas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="97"/>
+        <source>incl_p</source>
+        <translation>incl_p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="98"/>
+        <source>weight</source>
+        <translation>weight</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="100"/>
+        <source>Grid spacing (m)</source>
+        <translation>Espaciado de la cuadrícula (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="101"/>
+        <source>Grid rotation (°)</source>
+        <translation>Rotación de la cuadrícula (°)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="116"/>
+        <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
+        <translation>incl_p es la densidad de inclusión n/A por m² (las unidades no tienen área propia); weight = A/n es el área en m² que representa cada unidad (Cordy 1993).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="121"/>
+        <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
+        <translation>incl_p = n × área de la unidad / área del estrato es la probabilidad de inclusión de primer orden de cada unidad; weight = 1/incl_p.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="126"/>
+        <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
+        <translation>Muestreo «plus»: los centros se sortearon sobre cada estrato ampliado en {r} m (el alcance de la unidad), así que las unidades cercanas al borde lo sobrepasan, y algunos centros quedan fuera de su estrato. Muestree solo la parte de cada unidad dentro de su propio estrato y cuente solo los animales que haya allí (el mapa muestra los estratos); una unidad que no alcanza nada de su estrato cuenta 0. No entre nunca en terreno excluido o peligroso para llegar a un centro: muestree la parte dentro del estrato desde su interior. El área efectiva es el área ampliada, y plotwise:estimate extiende los conteos a ella (Gregoire &amp; Valentine 2008, cap. 10).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="136"/>
+        <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
+        <translation>Las unidades se mantienen por completo dentro de su estrato: los centros se sortearon en el estrato reducido en {r} m (el radio circunscrito de la unidad). El área efectiva es esa área reducida y las probabilidades de inclusión la usan; la franja del borde se cubre con menos frecuencia, lo que el informe de la estimación debería mencionar.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="143"/>
+        <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
+        <translation>El espaciado de la cuadrícula es √(A/n) para el n pedido; con un inicio aleatorio, el número de unidades obtenido varía en torno a n (columna Principales) mientras la densidad de inclusión sigue siendo n/A en todas partes.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Units per stratum field (N_FIELD)</source>
+        <translation>Campo de unidades por estrato (N_FIELD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Total units (N_UNITS)</source>
+        <translation>Total de unidades (N_UNITS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Design (DESIGN)</source>
+        <translation>Diseño (DESIGN)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Unit shape (SHAPE)</source>
+        <translation>Forma de la unidad (SHAPE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Unit size (SIZE, m)</source>
+        <translation>Tamaño de la unidad (SIZE, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Bearing (BEARING, degrees)</source>
+        <translation>Rumbo (BEARING, grados)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Keep inside (INSIDE)</source>
+        <translation>Mantener dentro (INSIDE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="178"/>
+        <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
+        <translation>Aleatorio simple: cada centro es un punto uniforme independiente de su estrato (un triángulo elegido con probabilidad proporcional a su área y luego un punto uniforme dentro de él).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="183"/>
+        <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
+        <translation>Cuadrícula sistemática: una cuadrícula cuadrada con un inicio aleatorio uniforme en una celda y una rotación, por estrato; las reservas son los centros de las celdas de la cuadrícula, en orden aleatorio.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="188"/>
+        <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
+        <translation>Espacialmente equilibrado: muestreo por aceptación equilibrada (Robertson et al. 2013). Una secuencia de Halton en bases 2 y 3 se coloca sobre el rectángulo envolvente del estrato y sus puntos dentro del estrato se conservan en orden. El inicio aleatorio es un punto aleatorio uniforme del estrato, para que cada ubicación tenga la misma probabilidad con cualquier tamaño de muestra; las reservas son los puntos siguientes de la misma secuencia.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="196"/>
+        <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
+        <translation>Un candidato a menos de {d} m de una unidad aceptada se descarta (inhibición secuencial simple), lo que reduce ligeramente la probabilidad de las ubicaciones cercanas a las unidades.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="54"/>
+        <source>Strata from raster covariates</source>
+        <translation>Estratos a partir de covariables ráster</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="65"/>
+        <source>Strata within the sampling frame</source>
+        <translation>Estratos dentro del marco de muestreo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>area stratified (ha)</source>
+        <translation>área estratificada (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="76"/>
+        <source>frame covered</source>
+        <translation>parte del marco cubierta</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="76"/>
+        <source>R² of {name}</source>
+        <translation>R² de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="83"/>
+        <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
+        <translation>Los estratos cubren las celdas del marco que tienen valor en todas las covariables ({ha} ha). Un muestreo asignado sobre estos estratos solo vale para esa área.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="94"/>
+        <source>Label</source>
+        <translation>Etiqueta</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="95"/>
+        <source>% of area</source>
+        <translation>% del área</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="96"/>
+        <source>Cells</source>
+        <translation>Celdas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="99"/>
+        <source>{name} mean</source>
+        <translation>media de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="100"/>
+        <source>{name} SD</source>
+        <translation>DE de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="116"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
+        <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron con su vecina mayor (criba de GDAL, conectividad 4) antes de vectorizar; las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener algunas celdas que la regla por sí sola habría puesto en un estrato vecino.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="123"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
+        <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron antes de vectorizar (conectividad 4): las manchas diminutas (menos de {specks} celdas) con su vecina mayor (criba de GDAL), y después otras {n} manchas, de la menor a la mayor, cada una con el estrato vecino que formaba la mancha más pequeña de al menos {ha} ha (o, en su defecto, la mayor), para que un mosaico de manchas pequeñas no quede absorbido por una sola mancha que crece. Las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener celdas que la regla por sí sola habría puesto en otro estrato.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="134"/>
+        <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
+        <translation>{n} mancha(s) que cubren {area} ha no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData) y siguen siendo menores de {ha} ha.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="141"/>
+        <source>Every patch of the strata now covers at least {ha} ha.</source>
+        <translation>Cada mancha de los estratos cubre ahora al menos {ha} ha.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="149"/>
+        <source>Method: {name}</source>
+        <translation>Método: {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="154"/>
+        <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
+        <translation>Covariables estandarizadas con su media y su DE sobre el marco; semillas k-means++ e iteraciones de Lloyd sobre una muestra aleatoria de {m} celdas (semilla {seed}); {it} iteraciones. Después cada celda fue al centro más próximo.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="162"/>
+        <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
+        <translation>Cada clase de «{name}» es un estrato ({k} clases).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="170"/>
+        <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
+        <translation>El estrato h contiene las celdas con b(h−1) ≤ {name} &lt; b(h). Límites sobre {name}:</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="173"/>
+        <source>Boundary</source>
+        <translation>Límite</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="176"/>
+        <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
+        <translation>Cuantiles muestrales exactos en h/k de las celdas del marco (Hyndman &amp; Fan 1996, definición 7), hallados en dos pasadas: un histograma de 64.000 clases localiza cada cuantil y luego se ordenan las celdas de esa clase.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="182"/>
+        <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
+        <translation>Dalenius &amp; Hodges (1959): sobre un histograma de {name} de {n} clases, los límites son los extremos superiores de las clases donde la suma acumulada de √f está más cerca de h/k de su total.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="191"/>
+        <source>Share of covariate variance explained by the strata (R²)</source>
+        <translation>Parte de la varianza de las covariables explicada por los estratos (R²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>Covariate</source>
+        <translation>Covariable</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>Mean</source>
+        <translation>Media</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>SD</source>
+        <translation>DE</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>R²</source>
+        <translation>R²</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="196"/>
+        <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
+        <translation>R² = 1 − Σ N_h S_h² / (N S²): la parte entre estratos de la varianza de la covariable sobre las celdas. Para una magnitud que sigue exactamente a la covariable, la asignación proporcional sobre estos estratos reduciría la varianza de la media estimada en esta parte respecto al muestreo aleatorio simple (Cochran 1977, cap. 5, aproximación para poblaciones grandes). La ganancia para la densidad animal es menor cuanto menos sigue la densidad a la covariable.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="210"/>
+        <source>Histogram of {name}</source>
+        <translation>Histograma de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="216"/>
+        <source>stratum {h}</source>
+        <translation>estrato {h}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="216"/>
+        <source>cells</source>
+        <translation>celdas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="221"/>
+        <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
+        <translation>Celdas del marco según {name}, coloreadas por estrato; líneas discontinuas: límites de los estratos.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="224"/>
+        <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
+        <translation>Celdas del marco según {name}, coloreadas por estrato (los estratos de k-medias pueden solaparse en una covariable).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="231"/>
+        <source>Coverage</source>
+        <translation>Cobertura</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>frame area (ha)</source>
+        <translation>área del marco (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>frame area outside the first covariate&apos;s extent (ha)</source>
+        <translation>área del marco fuera de la extensión de la primera covariable (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>frame cells with NoData in a covariate (ha)</source>
+        <translation>celdas del marco con NoData en alguna covariable (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>share of the frame covered</source>
+        <translation>parte del marco cubierta</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>cells stratified</source>
+        <translation>celdas estratificadas</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>covariates warped on the fly</source>
+        <translation>covariables remuestreadas al vuelo</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="251"/>
+        <source>ignored</source>
+        <translation>ignorado</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="254"/>
+        <source>Sampling frame (FRAME)</source>
+        <translation>Marco de muestreo (FRAME)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="255"/>
+        <source>Covariates (COVARIATES)</source>
+        <translation>Covariables (COVARIATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="256"/>
+        <source>Method (METHOD)</source>
+        <translation>Método (METHOD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="257"/>
+        <source>Number of strata (STRATA)</source>
+        <translation>Número de estratos (STRATA)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="258"/>
+        <source>Minimum patch area (MIN_AREA, ha)</source>
+        <translation>Área mínima de mancha (MIN_AREA, ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="259"/>
+        <source>CRS of the computation and the outputs</source>
+        <translation>SRC del cálculo y de las salidas</translation>
+    </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
@@ -8997,47 +7735,42 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>Simular conteos en las unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="32"/>
-        <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-        <translation type="obsolete">&lt;p&gt;Rellena el campo &lt;i&gt;count&lt;/i&gt; de las unidades de muestreo con el número de animales simulados vistos en cada una, para formación, demostraciones y pruebas de la estimación. En un muestreo real los conteos se introducen después del trabajo de campo.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unidades de muestreo&lt;/b&gt;: los polígonos cuentan los animales que contienen. Los puntos cuentan dentro de un círculo de área &lt;i&gt;area_m2&lt;/i&gt; de la unidad, las líneas dentro de una franja de esa área a lo largo de la línea.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Puntos de animales&lt;/b&gt;: un punto por animal, por ejemplo los animales simulados de la reserva de demostración.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilidad de detección&lt;/b&gt;: cada animal de una unidad se ve con esta probabilidad (aclarado binomial). 1 significa que se ve a todos los animales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Contar también las unidades de reserva&lt;/b&gt;: desactivado por defecto, para que las unidades cuyo &lt;i&gt;role&lt;/i&gt; es &lt;i&gt;reserve&lt;/i&gt; conserven un conteo vacío (no muestreadas), como en un muestreo en el que ninguna unidad principal tuvo que sustituirse.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Semilla aleatoria&lt;/b&gt;: 0 sortea una y la registra.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La salida es una copia de las unidades con &lt;i&gt;count&lt;/i&gt; relleno (añadido si falta) y &lt;i&gt;present&lt;/i&gt;, los animales realmente presentes en la unidad. La entrada no se modifica.&lt;/p&gt;</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="88"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="89"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="90"/>
         <source>Animal points</source>
         <translation>Puntos de animales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="90"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="92"/>
         <source>Detection probability</source>
         <translation>Probabilidad de detección</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="96"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="98"/>
         <source>Count reserve units too</source>
         <translation>Contar también las unidades de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="106"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="108"/>
         <source>Units with simulated counts</source>
         <translation>Unidades con conteos simulados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="199"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="205"/>
         <source>has no geometry</source>
         <translation>no tiene geometría</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="204"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="210"/>
         <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
         <translation>Capa «{layer}»: estas entidades no se pueden contar: {items}. Las unidades de punto y de línea necesitan un campo «area_m2» positivo (lo escribe el paso de disposición); los polígonos necesitan una geometría.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="180"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="184"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unidades contadas: {seen} animales vistos de {present} presentes (detección {p:g}); {r} unidades de reserva quedan vacías.</translation>
     </message>
@@ -9052,72 +7785,72 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>&lt;p&gt;Distancias (para el algoritmo de densidad a partir de distancias):&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Función de detección&lt;/b&gt;: ninguna (la probabilidad de detección indicada arriba, la misma a cualquier distancia), o seminormal g(x) = exp(−x²/2σ²) o tasa de riesgo (hazard-rate) g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), para transectos lineales y estaciones puntuales. Cada animal a menos de la distancia máxima de una unidad se ve entonces con probabilidad p·g(x), con x su distancia perpendicular a la línea o su distancia al punto y p la probabilidad de detección indicada arriba (1: los animales sobre la línea se ven siempre, como supone el muestreo de distancias).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Escala σ (m)&lt;/b&gt; y &lt;b&gt;forma b de la tasa de riesgo&lt;/b&gt; de la función de detección.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Distancia máxima (m)&lt;/b&gt;: los animales más alejados de la línea o del punto no se cuentan; 0 toma la distancia donde g cae al 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Campo de tamaño de grupo&lt;/b&gt; de los puntos de animales (opcional): cada punto es entonces un grupo de ese número de animales; si no, cada punto es un animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observaciones&lt;/b&gt; (opcional, con una función de detección): un punto por avistamiento en la posición del animal, con &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) y &lt;i&gt;size&lt;/i&gt;, listo para el algoritmo de densidad a partir de distancias.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Con una función de detección, &lt;i&gt;present&lt;/i&gt; cuenta los animales a menos de la distancia máxima, y los estratos no se usan: una línea o un punto ve los animales a menos de la distancia máxima a ambos lados de un límite de estrato, como hacen los observadores.&lt;/p&gt;&lt;p&gt;Referencia: Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="100"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="102"/>
         <source>Strata: count only inside each unit&apos;s stratum (plus sampling)</source>
         <translation>Estratos: contar solo dentro del estrato de cada unidad (muestreo «plus»)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="103"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="105"/>
         <source>Stratum id field of the strata</source>
         <translation>Campo identificador de los estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>Detection function (line transects and point stations)</source>
         <translation>Función de detección (transectos lineales y estaciones puntuales)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>None: the same detection probability at every distance</source>
         <translation>Ninguna: la misma probabilidad de detección a cualquier distancia</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>Half-normal</source>
         <translation>Seminormal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>Hazard-rate</source>
         <translation>Tasa de riesgo (hazard-rate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="111"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="113"/>
         <source>Scale σ of the detection function (m)</source>
         <translation>Escala σ de la función de detección (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="114"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="116"/>
         <source>Shape b of the hazard-rate</source>
         <translation>Forma b de la tasa de riesgo (hazard-rate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="117"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="119"/>
         <source>Maximum distance from the line or point (m; 0: where g falls to 1 %)</source>
         <translation>Distancia máxima a la línea o al punto (m; 0: donde g cae al 1 %)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="120"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="122"/>
         <source>Group size field of the animal points</source>
         <translation>Campo de tamaño de grupo de los puntos de animales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="123"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
         <source>Observations with distances</source>
         <translation>Observaciones con las distancias</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="245"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="251"/>
         <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
         <translation>Capa «{layer}»: los puntos de animales {ids} no tienen un tamaño de grupo mayor que 0 en el campo «{field}». Rellénelo o no elija ningún campo de tamaño de grupo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="258"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="264"/>
         <source>Animals within {w:.1f} m of the lines or points are counted.</source>
         <translation>Se cuentan los animales a menos de {w:.1f} m de las líneas o de los puntos.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="281"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="287"/>
         <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
         <translation>No se eligió ninguna función de detección, así que no hay distancias: la capa de observaciones está vacía.</translation>
     </message>
@@ -9338,11 +8071,6 @@ Compruebe el acceso y la seguridad de cada estación antes del trabajo de campo:
         <translation>Número de estaciones principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="137"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation type="obsolete">La capa «{layer}» no tiene el campo «{field}» ({param}). Elija un campo existente.</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/stations.py" line="162"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Capa «{layer}»: {text}</translation>
@@ -9366,412 +8094,122 @@ Compruebe el acceso y la seguridad de cada estación antes del trabajo de campo:
 <context>
     <name>Stratify</name>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="69"/>
+        <location filename="../processing/algorithms/stratify.py" line="55"/>
         <source>Quantile (equal areas on the first covariate)</source>
         <translation>Cuantiles (áreas iguales sobre la primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="70"/>
+        <location filename="../processing/algorithms/stratify.py" line="56"/>
         <source>Equal interval (on the first covariate)</source>
         <translation>Intervalos iguales (sobre la primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="71"/>
+        <location filename="../processing/algorithms/stratify.py" line="57"/>
         <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
         <translation>Raíz acumulada de las frecuencias (Dalenius–Hodges, primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="72"/>
+        <location filename="../processing/algorithms/stratify.py" line="58"/>
         <source>k-means (all covariates, standardised)</source>
         <translation>k-medias (todas las covariables, estandarizadas)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="73"/>
+        <location filename="../processing/algorithms/stratify.py" line="59"/>
         <source>Raster classes (each class of the first covariate)</source>
         <translation>Clases del ráster (cada clase de la primera covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="77"/>
+        <location filename="../processing/algorithms/stratify.py" line="63"/>
         <source>Stratify from raster covariates</source>
         <translation>Estratificar a partir de covariables ráster</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="80"/>
+        <location filename="../processing/algorithms/stratify.py" line="66"/>
         <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Forma estratos (zonas de densidad esperada similar) a partir de covariables ráster como la altitud, un índice de vegetación o un mapa de cobertura del suelo. Solo cuentan las celdas cuyo centro está dentro del marco de muestreo. Una celda con NoData en alguna covariable se deja fuera y se informa de su área.&lt;/p&gt;&lt;p&gt;Las covariables se llevan a la malla de la primera, en el SRC del marco (un marco en coordenadas geográficas se proyecta a la zona UTM de su centro). Los rásteres en otro SRC o en otra malla se remuestrean al vuelo (bilineal; vecino más próximo para las clases del ráster). Los rásteres se leen bloque a bloque, de modo que la memoria queda acotada sea cual sea su tamaño.&lt;/p&gt;&lt;h3&gt;Métodos&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Cuantiles&lt;/b&gt;: estratos de igual área a lo largo de la primera covariable. Los límites son los cuantiles muestrales exactos de las celdas del marco (Hyndman &amp;amp; Fan 1996, definición 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalos iguales&lt;/b&gt;: el rango de la primera covariable dividido en anchos iguales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raíz acumulada de las frecuencias&lt;/b&gt;: la regla de Dalenius &amp;amp; Hodges (1959) sobre un histograma de 100 clases de la primera covariable (Cochran 1977, cap. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-medias&lt;/b&gt;: todas las covariables estandarizadas a media 0 y DE 1, semillas k-means++ (Arthur &amp;amp; Vassilvitskii 2007) e iteraciones de Lloyd sobre una muestra aleatoria de 100.000 celdas sorteada con la semilla; después cada celda va al centro más próximo.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Clases del ráster&lt;/b&gt;: cada valor de la primera covariable (un ráster categórico, como máximo 50 clases) es un estrato; el número de estratos se ignora.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Los estratos se numeran de 1 a k por media creciente de la primera covariable. Las manchas (conectividad 4) menores que el área mínima (ha) se unen a un estrato vecino antes de convertir los estratos en polígonos: los granos mediante la criba de GDAL y luego cada mancha pequeña, de la menor a la mayor, al vecino que la lleva al área mínima. Una mancha que no toca ningún otro estrato se queda, con una advertencia.&lt;/p&gt;&lt;h3&gt;Salidas&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Ráster de estratos: el estrato de cada celda (0 = ninguno).&lt;/li&gt;&lt;li&gt;Estratos: un multipolígono por estrato con &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (celdas × área de la celda), &lt;i&gt;cov_mean&lt;/i&gt; y &lt;i&gt;cov_sd&lt;/i&gt; de la primera covariable, y &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … para las demás (DE sobre las celdas del estrato).&lt;/li&gt;&lt;li&gt;Informe: límites, áreas, estadísticas de las covariables por estrato, la parte de la varianza de cada covariable que explican los estratos (R²), un histograma con los límites y un mapa.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La semilla aleatoria solo la usa k-medias (0 sortea una y la registra).&lt;/p&gt;&lt;p&gt;Los estratos son un recurso estadístico: antes del trabajo de campo, compruebe el acceso y la seguridad de cada unidad.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="129"/>
+        <location filename="../processing/algorithms/stratify.py" line="115"/>
         <source>Sampling frame</source>
         <translation>Marco de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="131"/>
+        <location filename="../processing/algorithms/stratify.py" line="117"/>
         <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
         <translation>Covariables ráster (banda 1 de cada una; la primera fija la malla)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="134"/>
+        <location filename="../processing/algorithms/stratify.py" line="120"/>
         <source>Method</source>
         <translation>Método</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="136"/>
+        <location filename="../processing/algorithms/stratify.py" line="122"/>
         <source>Number of strata (ignored for raster classes)</source>
         <translation>Número de estratos (se ignora con clases del ráster)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="139"/>
+        <location filename="../processing/algorithms/stratify.py" line="125"/>
         <source>Minimum patch area (ha); smaller patches join a neighbour</source>
         <translation>Área mínima de mancha (ha); las manchas menores se unen a una vecina</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="143"/>
+        <location filename="../processing/algorithms/stratify.py" line="129"/>
         <source>Stratum raster</source>
         <translation>Ráster de estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="269"/>
+        <location filename="../processing/algorithms/stratify.py" line="130"/>
         <source>Strata</source>
         <translation>Estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="147"/>
+        <location filename="../processing/algorithms/stratify.py" line="133"/>
         <source>Number of strata formed</source>
         <translation>Número de estratos formados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="148"/>
+        <location filename="../processing/algorithms/stratify.py" line="134"/>
         <source>Share of the first covariate's variance explained by the strata (R²)</source>
         <translation>Parte de la varianza de la primera covariable explicada por los estratos (R²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="155"/>
+        <location filename="../processing/algorithms/stratify.py" line="141"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="157"/>
+        <location filename="../processing/algorithms/stratify.py" line="143"/>
         <source>COVARIATES holds {n} rasters; use at most {m}.</source>
         <translation>COVARIATES contiene {n} rásteres; use como máximo {m}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="162"/>
+        <location filename="../processing/algorithms/stratify.py" line="148"/>
         <source>COVARIATES: &apos;{name}&apos; is not a raster layer.</source>
         <translation>COVARIATES: «{name}» no es una capa ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="165"/>
+        <location filename="../processing/algorithms/stratify.py" line="151"/>
         <source>Covariate &apos;{name}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
         <translation>La covariable «{name}» no es un archivo ráster que GDAL pueda leer. Guárdela primero como GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="193"/>
+        <location filename="../processing/algorithms/stratify.py" line="222"/>
         <source>Layer &apos;{layer}&apos; (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
         <translation>La capa «{layer}» (FRAME) no tiene ningún polígono con área positiva. Elija la capa del marco de muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="208"/>
+        <location filename="../processing/algorithms/stratify.py" line="187"/>
         <source>Warped onto the grid of &apos;{first}&apos; in {crs}: {names}.</source>
         <translation>Remuestreadas sobre la malla de «{first}» en {crs}: {names}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="231"/>
+        <location filename="../processing/algorithms/stratify.py" line="196"/>
         <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
         <translation>{k} estratos en {ha} ha; R² de «{name}»: {r2}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="253"/>
-        <source>Strata from raster covariates</source>
-        <translation>Estratos a partir de covariables ráster</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="258"/>
-        <source>strata</source>
-        <translation>estratos</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>area stratified (ha)</source>
-        <translation>área estratificada (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="258"/>
-        <source>frame covered</source>
-        <translation>parte del marco cubierta</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="258"/>
-        <source>R² of {name}</source>
-        <translation>R² de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="264"/>
-        <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
-        <translation>Los estratos cubren las celdas del marco que tienen valor en todas las covariables ({ha} ha). Un muestreo asignado sobre estos estratos solo vale para esa área.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Stratum</source>
-        <translation>Estrato</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Label</source>
-        <translation>Etiqueta</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Area (ha)</source>
-        <translation>Área (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>% of area</source>
-        <translation>% del área</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Cells</source>
-        <translation>Celdas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="273"/>
-        <source>{name} mean</source>
-        <translation>media de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="273"/>
-        <source>{name} SD</source>
-        <translation>DE de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="283"/>
-        <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
-        <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron con su vecina mayor (criba de GDAL, conectividad 4) antes de vectorizar; las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener algunas celdas que la regla por sí sola habría puesto en un estrato vecino.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="289"/>
-        <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
-        <translation>Las manchas menores de {ha} ha ({cells} celdas) se fusionaron antes de vectorizar (conectividad 4): las manchas diminutas (menos de {specks} celdas) con su vecina mayor (criba de GDAL), y después otras {n} manchas, de la menor a la mayor, cada una con el estrato vecino que formaba la mancha más pequeña de al menos {ha} ha (o, en su defecto, la mayor), para que un mosaico de manchas pequeñas no quede absorbido por una sola mancha que crece. Las áreas y estadísticas son las posteriores a la fusión, por lo que un estrato puede contener celdas que la regla por sí sola habría puesto en otro estrato.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="300"/>
-        <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
-        <translation>{n} mancha(s) que cubren {area} ha no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData) y siguen siendo menores de {ha} ha.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="306"/>
-        <source>Every patch of the strata now covers at least {ha} ha.</source>
-        <translation>Cada mancha de los estratos cubre ahora al menos {ha} ha.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="310"/>
-        <source>Method: {name}</source>
-        <translation>Método: {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="314"/>
-        <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
-        <translation>El estrato h contiene las celdas con b(h−1) ≤ {name} &lt; b(h). Límites sobre {name}:</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="317"/>
-        <source>Boundary</source>
-        <translation>Límite</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>Value</source>
-        <translation>Valor</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="320"/>
-        <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
-        <translation>Cuantiles muestrales exactos en h/k de las celdas del marco (Hyndman &amp; Fan 1996, definición 7), hallados en dos pasadas: un histograma de 64.000 clases localiza cada cuantil y luego se ordenan las celdas de esa clase.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="325"/>
-        <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
-        <translation>Dalenius &amp; Hodges (1959): sobre un histograma de {name} de {n} clases, los límites son los extremos superiores de las clases donde la suma acumulada de √f está más cerca de h/k de su total.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="331"/>
-        <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
-        <translation>Covariables estandarizadas con su media y su DE sobre el marco; semillas k-means++ e iteraciones de Lloyd sobre una muestra aleatoria de {m} celdas (semilla {seed}); {it} iteraciones. Después cada celda fue al centro más próximo.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="337"/>
-        <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
-        <translation>Cada clase de «{name}» es un estrato ({k} clases).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="339"/>
-        <source>Share of covariate variance explained by the strata (R²)</source>
-        <translation>Parte de la varianza de las covariables explicada por los estratos (R²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>Covariate</source>
-        <translation>Covariable</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>Mean</source>
-        <translation>Media</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>SD</source>
-        <translation>DE</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>R²</source>
-        <translation>R²</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="343"/>
-        <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
-        <translation>R² = 1 − Σ N_h S_h² / (N S²): la parte entre estratos de la varianza de la covariable sobre las celdas. Para una magnitud que sigue exactamente a la covariable, la asignación proporcional sobre estos estratos reduciría la varianza de la media estimada en esta parte respecto al muestreo aleatorio simple (Cochran 1977, cap. 5, aproximación para poblaciones grandes). La ganancia para la densidad animal es menor cuanto menos sigue la densidad a la covariable.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="350"/>
-        <source>Histogram of {name}</source>
-        <translation>Histograma de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>stratum {h}</source>
-        <translation>estrato {h}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>cells</source>
-        <translation>celdas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
-        <translation>Celdas del marco según {name}, coloreadas por estrato; líneas discontinuas: límites de los estratos.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
-        <translation>Celdas del marco según {name}, coloreadas por estrato (los estratos de k-medias pueden solaparse en una covariable).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="365"/>
-        <source>Map</source>
-        <translation>Mapa</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="368"/>
-        <source>Strata within the sampling frame</source>
-        <translation>Estratos dentro del marco de muestreo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="370"/>
-        <source>Coverage</source>
-        <translation>Cobertura</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>Item</source>
-        <translation>Elemento</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>frame area (ha)</source>
-        <translation>área del marco (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>frame area outside the first covariate&apos;s extent (ha)</source>
-        <translation>área del marco fuera de la extensión de la primera covariable (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>frame cells with NoData in a covariate (ha)</source>
-        <translation>celdas del marco con NoData en alguna covariable (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>share of the frame covered</source>
-        <translation>parte del marco cubierta</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>cells stratified</source>
-        <translation>celdas estratificadas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>cell size (m)</source>
-        <translation>tamaño de celda (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>grid</source>
-        <translation>malla</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>covariates warped on the fly</source>
-        <translation>covariables remuestreadas al vuelo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>none</source>
-        <translation>ninguna</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="386"/>
-        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
-        <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="388"/>
-        <source>Sampling frame (FRAME)</source>
-        <translation>Marco de muestreo (FRAME)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="389"/>
-        <source>Covariates (COVARIATES)</source>
-        <translation>Covariables (COVARIATES)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="390"/>
-        <source>Method (METHOD)</source>
-        <translation>Método (METHOD)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="391"/>
-        <source>Number of strata (STRATA)</source>
-        <translation>Número de estratos (STRATA)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="391"/>
-        <source>ignored</source>
-        <translation>ignorado</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="392"/>
-        <source>Minimum patch area (MIN_AREA, ha)</source>
-        <translation>Área mínima de mancha (MIN_AREA, ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="393"/>
-        <source>CRS of the computation and the outputs</source>
-        <translation>SRC del cálculo y de las salidas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="396"/>
-        <source>Seed (SEED)</source>
-        <translation>Semilla (SEED)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="112"/>
+        <location filename="../processing/algorithms/stratify.py" line="98"/>
         <source>&lt;h3&gt;Minimum patch area&lt;/h3&gt;&lt;p&gt;The default of {default:g} ha is chosen for field teams: a patch smaller than a few sample units is not a stratum. Four 20 m × 20 m plots 50 m apart need about 1 ha; a zone smaller than that cannot hold the units a stratum needs for its own variance, and on the map it is noise of the covariate, not a zone to survey. Raise it for larger units (transects, camera stations); 0 keeps every cell's stratum.&lt;/p&gt;&lt;p&gt;A speckled covariate (a 10 m vegetation index, a noisy classification) can form millions of patches. The patches are counted before they are merged and before they are turned into polygons: strata with more than {max_patches:,} patches stop the run with an error that gives their number and a MIN_AREA that brings them under the limit, and a covariate too speckled to merge in bounded memory (more than {max_sieve:,} patches) stops it with advice to smooth or coarsen the covariate first. When the patches left after merging the specks are too many to merge one by one, patches below MIN_AREA first join their largest neighbour (the rule of GDAL's sieve filter), with a warning.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Área mínima de mancha&lt;/h3&gt;&lt;p&gt;El valor por defecto de {default:g} ha está pensado para los equipos de campo: una mancha menor que unas pocas unidades de muestreo no es un estrato. Cuatro parcelas de 20 m × 20 m separadas 50 m necesitan alrededor de 1 ha; una zona menor no puede contener las unidades que un estrato necesita para su propia varianza, y en el mapa es ruido de la covariable, no una zona que muestrear. Auméntelo para unidades mayores (transectos, estaciones de cámaras trampa); 0 conserva el estrato de cada celda.&lt;/p&gt;&lt;p&gt;Una covariable moteada (un índice de vegetación a 10 m, una clasificación ruidosa) puede formar millones de manchas. Las manchas se cuentan antes de fusionarlas y antes de convertirlas en polígonos: los estratos con más de {max_patches:,} manchas detienen la ejecución con un error que indica su número y un MIN_AREA que las deja por debajo del límite, y una covariable demasiado moteada para fusionarla con memoria acotada (más de {max_sieve:,} manchas) la detiene con el consejo de suavizar la covariable o aumentar antes su tamaño de celda. Cuando las manchas que quedan tras fusionar las manchas diminutas son demasiadas para fusionarlas una a una, las manchas por debajo de MIN_AREA se unen primero a su vecina mayor (la regla del filtro de criba de GDAL), con una advertencia.&lt;/p&gt;</translation>
     </message>

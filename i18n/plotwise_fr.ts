@@ -4,451 +4,177 @@
 <context>
     <name>Allocate</name>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="59"/>
+        <location filename="../processing/algorithms/allocate.py" line="65"/>
         <source>Allocate effort to strata</source>
         <translation>Répartir l'effort entre les strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="59"/>
-        <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
-
-Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
-
-Target: a target CV (if above 0) finds the smallest total whose expected CV of the overall density meets it, with the finite-population correction; else a budget (if above 0, needs the cost field); else the total number of units.
-
-Bounds: at least the minimum per stratum (2 by default, so that each stratum variance can be estimated) and at most the units that fit (stratum area / unit area). A stratum that reaches a bound keeps it and the rest is shared among the others, until stable. Whole units are rounded by largest remainder, keeping the total.
-
-Area field: the stratum area in hectares (default area_ha, as written by the stratification); when it is empty or missing, the polygon area is used.
-SD field: the pilot standard deviation of counts per unit. Without it the covariate SD (cov_sd) is used as a proxy, which assumes that counts scale with the covariate; without either, the allocation is proportional.
-Mean field: the pilot mean count per unit, needed for CVs and for a target CV. Cost field: cost of surveying one unit in each stratum (for instance field days).
-
-Output: the strata with n_alloc (units) and exp_cv (expected CV of the stratum density), and a report comparing equal, proportional and Neyman allocation at the same total.</source>
-        <translation type="obsolete">Décide combien d'unités d'échantillonnage reçoit chaque strate, et montre à l'avance la précision qu'elles apportent.
-
-Méthodes : égale ; proportionnelle à la surface de la strate ; Neyman, n_h ∝ A_h·S_h (Neyman 1934 ; Cochran 1977, ch. 5) ; optimale avec coût, n_h ∝ A_h·S_h/√c_h, sous un budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
-
-Objectif : un CV cible (s'il est supérieur à 0) trouve le plus petit total dont le coefficient de variation attendu de la densité globale l'atteint, avec la correction pour population finie ; sinon un budget (s'il est supérieur à 0, il faut le champ de coût) ; sinon le nombre total d'unités.
-
-Bornes : au moins le minimum par strate (2 par défaut, pour que la variance de chaque strate puisse être estimée) et au plus les unités qui y tiennent (surface de la strate / surface d'une unité). Une strate qui atteint une borne la garde et le reste est partagé entre les autres, jusqu'à stabilité. Les unités entières sont arrondies par le plus fort reste, en conservant le total.
-
-Champ de surface : la surface de la strate en hectares (area_ha par défaut, tel qu'écrit par la stratification) ; s'il est vide ou absent, la surface du polygone est utilisée.
-Champ d'écart-type : l'écart-type pilote des comptages par unité. Sans lui, l'écart-type de la covariable (cov_sd) sert de substitut, ce qui suppose que les comptages suivent la covariable ; sans l'un ni l'autre, l'allocation est proportionnelle.
-Champ de moyenne : le comptage moyen pilote par unité, nécessaire aux CV et à un CV cible. Champ de coût : coût de l'inventaire d'une unité dans chaque strate (par exemple en jours de terrain).
-
-Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité de la strate), et un rapport comparant les allocations égale, proportionnelle et de Neyman pour le même total.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="90"/>
+        <location filename="../processing/algorithms/allocate.py" line="104"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="93"/>
+        <location filename="../processing/algorithms/allocate.py" line="107"/>
         <source>Stratum identifier field</source>
         <translation>Champ d'identifiant de strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="99"/>
+        <location filename="../processing/algorithms/allocate.py" line="113"/>
         <source>Stratum area field (hectares; empty: polygon area)</source>
         <translation>Champ de surface de la strate (hectares ; vide : surface du polygone)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="105"/>
+        <location filename="../processing/algorithms/allocate.py" line="119"/>
         <source>Pilot SD of counts per unit</source>
         <translation>Écart-type pilote des comptages par unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="105"/>
+        <location filename="../processing/algorithms/allocate.py" line="119"/>
         <source>Pilot mean count per unit</source>
         <translation>Comptage moyen pilote par unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="105"/>
+        <location filename="../processing/algorithms/allocate.py" line="119"/>
         <source>Cost per unit</source>
         <translation>Coût par unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="113"/>
+        <location filename="../processing/algorithms/allocate.py" line="127"/>
         <source>Costs are field days</source>
         <translation>Les coûts sont des jours de terrain</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="116"/>
+        <location filename="../processing/algorithms/allocate.py" line="130"/>
         <source>Fixed cost of the survey (c0, in the cost unit)</source>
         <translation>Coût fixe de l'inventaire (c0, dans l'unité de coût)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Allocation method</source>
         <translation>Méthode d'allocation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Equal</source>
         <translation>Égale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Proportional to area</source>
         <translation>Proportionnelle à la surface</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="292"/>
+        <location filename="../processing/algorithms/allocate.py" line="321"/>
         <source>Neyman</source>
         <translation>Neyman</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="122"/>
+        <location filename="../processing/algorithms/allocate.py" line="139"/>
         <source>Optimal with cost</source>
         <translation>Optimale avec coût</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="130"/>
+        <location filename="../processing/algorithms/allocate.py" line="147"/>
         <source>Total number of units</source>
         <translation>Nombre total d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="135"/>
+        <location filename="../processing/algorithms/allocate.py" line="152"/>
         <source>Budget (0: not used; needs the cost field)</source>
         <translation>Budget (0 : non utilisé ; nécessite le champ de coût)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="141"/>
+        <location filename="../processing/algorithms/allocate.py" line="158"/>
         <source>Target CV of the overall density (0: not used; e.g. 0.2)</source>
         <translation>CV cible de la densité globale (0 : non utilisé ; p. ex. 0.2)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="147"/>
+        <location filename="../processing/algorithms/allocate.py" line="164"/>
         <source>Area of one sample unit (m²)</source>
         <translation>Surface d'une unité d'échantillonnage (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="153"/>
+        <location filename="../processing/algorithms/allocate.py" line="170"/>
         <source>Minimum units per stratum</source>
         <translation>Nombre minimal d'unités par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="167"/>
+        <location filename="../processing/algorithms/allocate.py" line="98"/>
         <source>Strata with allocation</source>
         <translation>Strates avec allocation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="169"/>
+        <location filename="../processing/algorithms/allocate.py" line="100"/>
         <source>Expected CV of the overall density</source>
         <translation>CV attendu de la densité globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="175"/>
+        <location filename="../processing/algorithms/allocate.py" line="189"/>
         <source>The strata layer could not be opened.</source>
         <translation>La couche des strates n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="190"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;: the polygon areas are used.</source>
-        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} » : les surfaces des polygones sont utilisées.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="194"/>
+        <location filename="../processing/algorithms/allocate.py" line="195"/>
         <source>Layer &apos;{layer}&apos; has no strata with an area.</source>
         <translation>La couche « {layer} » n'a aucune strate ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="209"/>
+        <location filename="../processing/algorithms/allocate.py" line="273"/>
         <source>field &apos;{name}&apos; of layer &apos;{layer}&apos;</source>
         <translation>champ « {name} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="224"/>
+        <location filename="../processing/algorithms/allocate.py" line="256"/>
         <source>No pilot SD field: the covariate SD (&apos;{field}&apos;) is used as a proxy. This assumes that counts scale with the covariate; replace it with the SD of a pilot survey when you have one. The expected SEs are then in covariate units, not counts.</source>
         <translation>Pas de champ d'écart-type pilote : l'écart-type de la covariable (« {field} ») sert de substitut. Cela suppose que les comptages suivent la covariable ; remplacez-le par l'écart-type d'un inventaire pilote dès que vous en avez un. Les erreurs types attendues sont alors dans les unités de la covariable, pas en comptages.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>polygon area</source>
         <translation>surface du polygone</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>pilot SD</source>
         <translation>écart-type pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>pilot mean</source>
         <translation>moyenne pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="232"/>
+        <location filename="../processing/algorithms/allocate.py" line="276"/>
         <source>cost</source>
         <translation>coût</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="268"/>
+        <location filename="../processing/algorithms/allocate.py" line="311"/>
         <source>The output layer could not be created.</source>
         <translation>La couche de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="278"/>
+        <location filename="../processing/algorithms/allocate.py" line="219"/>
         <source>{total} units allocated ({method}); expected CV of the overall density: {cv}.</source>
         <translation>{total} unités allouées ({method}) ; CV attendu de la densité globale : {cv}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="291"/>
+        <location filename="../processing/algorithms/allocate.py" line="320"/>
         <source>equal</source>
         <translation>égale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="291"/>
+        <location filename="../processing/algorithms/allocate.py" line="320"/>
         <source>proportional to area</source>
         <translation>proportionnelle à la surface</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="292"/>
+        <location filename="../processing/algorithms/allocate.py" line="321"/>
         <source>optimal with cost</source>
         <translation>optimale avec coût</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="293"/>
-        <source>Allocation of survey effort</source>
-        <translation type="obsolete">Allocation de l'effort d'inventaire</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="295"/>
-        <source>field days</source>
-        <translation type="obsolete">jours de terrain</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="295"/>
-        <source>cost units</source>
-        <translation type="obsolete">unités de coût</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="296"/>
-        <source>units in total</source>
-        <translation type="obsolete">unités au total</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="296"/>
-        <source>method</source>
-        <translation type="obsolete">méthode</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="298"/>
-        <source>expected CV of the overall density</source>
-        <translation type="obsolete">CV attendu de la densité globale</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="300"/>
-        <source>field days needed</source>
-        <translation type="obsolete">jours de terrain nécessaires</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="302"/>
-        <source>a total number of units</source>
-        <translation type="obsolete">un nombre total d'unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="302"/>
-        <source>a budget</source>
-        <translation type="obsolete">un budget</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="302"/>
-        <source>a target CV</source>
-        <translation type="obsolete">un CV cible</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Strata layer</source>
-        <translation type="obsolete">Couche des strates</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Computation CRS</source>
-        <translation type="obsolete">SCR de calcul</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Method asked for</source>
-        <translation type="obsolete">Méthode demandée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Method applied</source>
-        <translation type="obsolete">Méthode appliquée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Target</source>
-        <translation type="obsolete">Objectif</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Total asked for</source>
-        <translation type="obsolete">Total demandé</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Budget</source>
-        <translation type="obsolete">Budget</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Target CV</source>
-        <translation type="obsolete">CV cible</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Unit area (m²)</source>
-        <translation type="obsolete">Surface d'une unité (m²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>SD field</source>
-        <translation type="obsolete">Champ d'écart-type</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source> (covariate proxy)</source>
-        <translation type="obsolete"> (substitut par la covariable)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Mean field</source>
-        <translation type="obsolete">Champ de moyenne</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Cost field</source>
-        <translation type="obsolete">Champ de coût</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="303"/>
-        <source>Fixed cost c0</source>
-        <translation type="obsolete">Coût fixe c0</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="321"/>
-        <source>Units per stratum</source>
-        <translation type="obsolete">Unités par strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="322"/>
-        <source>SE of mean per unit (covariate units)</source>
-        <translation type="obsolete">Erreur type de la moyenne par unité (unités de la covariable)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="322"/>
-        <source>SE of mean count per unit</source>
-        <translation type="obsolete">Erreur type du comptage moyen par unité</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Stratum</source>
-        <translation type="obsolete">Strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Units that fit</source>
-        <translation type="obsolete">Unités qui y tiennent</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Lower bound</source>
-        <translation type="obsolete">Borne inférieure</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="323"/>
-        <source>Share before rounding</source>
-        <translation type="obsolete">Part avant arrondi</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="324"/>
-        <source>Units (n_alloc)</source>
-        <translation type="obsolete">Unités (n_alloc)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="324"/>
-        <source>Sampling fraction</source>
-        <translation type="obsolete">Fraction d'échantillonnage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="328"/>
-        <source>SE of density (per km²)</source>
-        <translation type="obsolete">Erreur type de la densité (par km²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="330"/>
-        <source>Expected CV (exp_cv)</source>
-        <translation type="obsolete">CV attendu (exp_cv)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="342"/>
-        <source>all strata</source>
-        <translation type="obsolete">toutes les strates</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="352"/>
-        <source>units per stratum</source>
-        <translation type="obsolete">unités par strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="352"/>
-        <source>Units allocated to each stratum</source>
-        <translation type="obsolete">Unités allouées à chaque strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="356"/>
-        <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
-        <translation type="obsolete">La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="361"/>
-        <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
-        <translation type="obsolete">{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="361"/>
-        <source>Field days needed</source>
-        <translation type="obsolete">Jours de terrain nécessaires</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="361"/>
-        <source>Cost of the design</source>
-        <translation type="obsolete">Coût du plan</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="368"/>
-        <source>What the choice of method buys, at {n} units</source>
-        <translation type="obsolete">Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="369"/>
-        <source>Method</source>
-        <translation type="obsolete">Méthode</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="369"/>
-        <source>stratum {label}</source>
-        <translation type="obsolete">strate {label}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="371"/>
-        <source>Variance relative to the applied allocation</source>
-        <translation type="obsolete">Variance relative à l'allocation appliquée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="373"/>
-        <source>Expected CV</source>
-        <translation type="obsolete">CV attendu</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="384"/>
-        <source>Without standard deviations the precision of the designs cannot be compared.</source>
-        <translation type="obsolete">Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/allocate.py" line="62"/>
+        <location filename="../processing/algorithms/allocate.py" line="68"/>
         <source>Decides how many sample units each stratum gets, and shows beforehand the precision they buy.
 
 Methods: equal; proportional to stratum area; Neyman, n_h ∝ A_h·S_h (Neyman 1934; Cochran 1977, ch. 5); optimal with cost, n_h ∝ A_h·S_h/√c_h, under a budget C = c0 + Σ c_h·n_h (Cochran 1977, ch. 5).
@@ -481,32 +207,32 @@ Disposition prévue : la correction pour population finie 1 − n·a/A n'est uti
 Sortie : les strates avec n_alloc (unités) et exp_cv (CV attendu de la densité de la strate), et un rapport comparant les allocations égale, proportionnelle et de Neyman pour le même total.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Layout to come (decides the finite-population correction)</source>
         <translation>Disposition prévue (décide de la correction pour population finie)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Simple random (units may overlap: no correction)</source>
         <translation>Aléatoire simple (les unités peuvent se chevaucher : pas de correction)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Simple random with a minimum spacing of at least the unit&apos;s width</source>
         <translation>Aléatoire simple avec un espacement minimal d'au moins la largeur de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="159"/>
+        <location filename="../processing/algorithms/allocate.py" line="176"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/allocate.py" line="185"/>
+        <location filename="../processing/algorithms/allocate.py" line="236"/>
         <source>Layer &apos;{layer}&apos; has no area field: the polygon areas are used.</source>
         <translation>La couche « {layer} » n'a pas de champ de surface : les surfaces des polygones sont utilisées.</translation>
     </message>
@@ -576,7 +302,7 @@ Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclu
         <translation>Zone tampon intérieure en bordure (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="269"/>
+        <location filename="../processing/algorithms/buildframe.py" line="102"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
@@ -591,863 +317,255 @@ Les estimations d'un inventaire sur cette base ne valent que pour la base. Exclu
         <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="151"/>
+        <location filename="../processing/algorithms/buildframe.py" line="187"/>
         <source>MASK_MIN or MASK_MAX is set but no mask raster (MASK) is given. Choose a raster or leave both limits empty.</source>
         <translation>MASK_MIN ou MASK_MAX est renseigné mais aucun raster de masque (MASK) n'est donné. Choisissez un raster ou laissez les deux limites vides.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="156"/>
+        <location filename="../processing/algorithms/buildframe.py" line="192"/>
         <source>The lowest accepted mask value (MASK_MIN = {lo}) is greater than the highest (MASK_MAX = {hi}). Swap them or leave one empty.</source>
         <translation>La valeur de masque minimale acceptée (MASK_MIN = {lo}) est supérieure à la maximale (MASK_MAX = {hi}). Inversez-les ou laissez-en une vide.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="169"/>
+        <location filename="../processing/algorithms/buildframe.py" line="202"/>
         <source>Layer &apos;{layer}&apos; (INPUT) has no polygon with a positive area. Choose the study-area polygon layer.</source>
         <translation>La couche « {layer} » (INPUT) n'a aucun polygone de surface positive. Choisissez la couche de polygones de la zone d'étude.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="188"/>
+        <location filename="../processing/algorithms/buildframe.py" line="219"/>
         <source>Mask raster &apos;{layer}&apos; is given without limits: only its NoData cells are excluded.</source>
         <translation>Le raster de masque « {layer} » est donné sans limites : seules ses cellules NoData sont exclues.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="195"/>
+        <location filename="../processing/algorithms/buildframe.py" line="226"/>
         <source>Mask raster &apos;{layer}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
         <translation>Le raster de masque « {layer} » n'est pas un fichier raster lisible par GDAL. Enregistrez-le d'abord en GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="199"/>
+        <location filename="../processing/algorithms/buildframe.py" line="230"/>
         <source>Reading mask raster '{layer}'…</source>
         <translation>Chargement du raster de masque « {layer} »…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="212"/>
+        <location filename="../processing/algorithms/buildframe.py" line="242"/>
         <source>Mask raster reprojected to {crs} on the fly: {rows} × {cols} cells of {size} m.</source>
         <translation>Raster de masque reprojeté à la volée en {crs} : {rows} × {cols} cellules de {size} m.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="219"/>
+        <location filename="../processing/algorithms/buildframe.py" line="249"/>
         <source>Mask raster &apos;{layer}&apos; does not cover {n} of the {total} cells over the study area&apos;s extent; those cells count as NoData and are excluded.</source>
         <translation>Le raster de masque « {layer} » ne couvre pas {n} des {total} cellules de l'emprise de la zone d'étude ; ces cellules comptent comme NoData et sont exclues.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/buildframe.py" line="243"/>
+        <location filename="../processing/algorithms/buildframe.py" line="270"/>
         <source>Frame: {kept} ha of {total} ha ({pct} %).</source>
         <translation>Base de sondage : {kept} ha sur {total} ha ({pct} %).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="273"/>
-        <source>study area (ha)</source>
-        <translation>zone d'étude (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="273"/>
-        <source>frame (ha)</source>
-        <translation>base de sondage (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="273"/>
-        <source>kept</source>
-        <translation>conservé</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="278"/>
-        <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
-        <translation>Les estimations d'un inventaire sur cette base ne valent que pour la base ({ha} ha), pas pour toute la zone d'étude.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="282"/>
-        <source>Area kept and area lost to each rule</source>
-        <translation>Surface conservée et surface perdue par chaque règle</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="284"/>
-        <source>lost to the excluded polygons (EXCLUDE)</source>
-        <translation>perdue par les polygones exclus (EXCLUDE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="285"/>
-        <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
-        <translation>perdue par le masque raster (MASK hors de l'intervalle accepté, ou NoData)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="286"/>
-        <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
-        <translation>perdue par la zone tampon intérieure (EDGE_BUFFER)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="288"/>
-        <source>study area</source>
-        <translation>zone d'étude</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="291"/>
-        <source>sampling frame (kept)</source>
-        <translation>base de sondage (conservée)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>Item</source>
-        <translation>Élément</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="292"/>
-        <source>Area (ha)</source>
-        <translation>Surface (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="292"/>
-        <source>% of study area</source>
-        <translation>% de la zone d'étude</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="293"/>
-        <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
-        <translation>Les règles sont appliquées dans l'ordre indiqué ; chacune n'est comptée que pour la surface encore dans la base, si bien que la base et les surfaces perdues totalisent la zone d'étude.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="298"/>
-        <source>Mask raster</source>
-        <translation>Raster de masque</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>Value</source>
-        <translation>Valeur</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cells tested over the study area&apos;s extent</source>
-        <translation>cellules testées sur l'emprise de la zone d'étude</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cell size (m)</source>
-        <translation>taille de cellule (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cells below the lowest accepted value</source>
-        <translation>cellules sous la valeur minimale acceptée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>cells above the highest accepted value</source>
-        <translation>cellules au-dessus de la valeur maximale acceptée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>NoData cells (including cells outside the raster)</source>
-        <translation>cellules NoData (y compris les cellules hors du raster)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>reprojected on the fly (nearest neighbour)</source>
-        <translation>reprojeté à la volée (plus proche voisin)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>yes</source>
-        <translation>oui</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="299"/>
-        <source>no</source>
-        <translation>non</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="308"/>
-        <source>Map</source>
-        <translation>Carte</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="309"/>
-        <source>Frame (filled), with the areas lost to each rule</source>
-        <translation>Base de sondage (remplie), avec les surfaces perdues par chaque règle</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="312"/>
-        <source>(none)</source>
-        <translation>(aucun)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="316"/>
-        <source>, projected from {src} (UTM zone of the study area&apos;s centre)</source>
-        <translation>, projeté depuis {src} (zone UTM du centre de la zone d'étude)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Study area (INPUT)</source>
-        <translation>Zone d'étude (INPUT)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Areas to exclude (EXCLUDE)</source>
-        <translation>Zones à exclure (EXCLUDE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Mask raster (MASK)</source>
-        <translation>Raster de masque (MASK)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Lowest accepted mask value (MASK_MIN)</source>
-        <translation>Valeur de masque minimale acceptée (MASK_MIN)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Highest accepted mask value (MASK_MAX)</source>
-        <translation>Valeur de masque maximale acceptée (MASK_MAX)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>Inward edge buffer (EDGE_BUFFER, m)</source>
-        <translation>Zone tampon intérieure (EDGE_BUFFER, m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="317"/>
-        <source>CRS of the computation and the output</source>
-        <translation>SCR du calcul et de la sortie</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="358"/>
-        <source>sampling frame</source>
-        <translation>base de sondage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="361"/>
-        <source>excluded polygons</source>
-        <translation>polygones exclus</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="365"/>
-        <source>raster mask</source>
-        <translation>masque raster</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/buildframe.py" line="367"/>
-        <source>study area boundary</source>
-        <translation>limite de la zone d'étude</translation>
     </message>
 </context>
 <context>
     <name>CompareDesigns</name>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="62"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="63"/>
         <source>Compare survey designs by simulation</source>
         <translation>Comparer des plans d'inventaire par simulation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="87"/>
-        <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
-
-Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
-
-Each replicate realises a population: Poisson counts in every surface cell, or with an overdispersion k above 0 negative binomial counts (gamma-Poisson, variance μ + μ²/k per cell). Every chosen design is then laid out with the layout engine, its units count the animals in the cells they cover (the part inside the frame or their stratum), and the abundance is estimated with the estimation engine (ratio estimator, t interval with Satterthwaite df; Cochran 1977). All designs survey the same populations, so their differences are not blurred.
-
-Designs: simple random; stratified with proportional allocation; stratified with Neyman allocation, n_h ∝ A_h·S_h with S_h the SD of a unit's count implied by the surface (Neyman 1934); systematic grid with a random start (its n varies); spatially balanced (balanced acceptance sampling, Robertson et al. 2013).
-
-Units: point station (size = counting radius), square plot (side), circular plot (radius), line transect (length, counting a strip of the given half-width on each side). Bearing in degrees clockwise from grid north, −1 random. Keep units inside: centres are drawn from each stratum shrunk by the unit's radius, as the layout's option does. Otherwise a unit reaching over the edge of its stratum or of the frame counts only the part inside, and its area is that part.
-
-Output table, one row per design: rel_bias (relative bias against each population's true total), emp_se (SD of the errors), rmse (root mean square error) and rmse_mcse (its Monte Carlo SE), rel_rmse (rmse / mean true total), mean_cv (mean estimated CV), coverage (share of 95 % intervals holding the truth), mean_n (mean units surveyed), alloc (units per stratum), recommend (1 for the recommended design: the lowest RMSE among designs whose intervals cover at least 90 %).
-
-Range of units (optional), e.g. '20, 40, 80' or '20:100:20': the comparison is repeated at each n and the report draws RMSE against n, showing where more effort stops paying.
-
-The simulation assumes the surface is right and every animal in a unit is counted. Results are only as good as the surface. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="obsolete">Avant le terrain : quel plan, et combien d'unités, donnent une estimation utilisable sur cette zone ? L'algorithme simule de nombreux inventaires d'une surface de densité plausible et indique comment chaque plan s'en est sorti.
-
-Surface : un raster d'animaux attendus par km² (issu d'un modèle d'habitat, d'une carte d'expert ou d'un inventaire antérieur), reprojeté dans le SCR de la base si nécessaire. Base : la base de sondage. Strates (facultatives, avec le champ de strate, 'stratum' par défaut) : nécessaires aux deux plans stratifiés.
-
-Chaque réplique réalise une population : comptages de Poisson dans chaque cellule de la surface ou, avec une surdispersion k supérieure à 0, comptages binomiaux négatifs (gamma-Poisson, variance μ + μ²/k par cellule). Chaque plan choisi est ensuite disposé avec le moteur de disposition, ses unités comptent les animaux des cellules qu'elles couvrent (la partie dans la base ou dans leur strate), et l'abondance est estimée avec le moteur d'estimation (estimateur par le ratio, intervalle t avec ddl de Satterthwaite ; Cochran 1977). Tous les plans inventorient les mêmes populations, si bien que leurs différences ne sont pas brouillées.
-
-Plans : aléatoire simple ; stratifié avec allocation proportionnelle ; stratifié avec allocation de Neyman, n_h ∝ A_h·S_h où S_h est l'écart-type du comptage d'une unité impliqué par la surface (Neyman 1934) ; grille systématique avec départ aléatoire (son n varie) ; spatialement équilibré (échantillonnage par acceptation équilibrée, Robertson et al. 2013).
-
-Unités : station ponctuelle (taille = rayon de comptage), placette carrée (côté), placette circulaire (rayon), transect linéaire (longueur, comptage sur une bande de la demi-largeur donnée de chaque côté). Azimut en degrés dans le sens horaire depuis le nord de la grille, −1 aléatoire. Garder les unités à l'intérieur : les centres sont tirés dans chaque strate réduite du rayon de l'unité, comme le fait l'option de la disposition. Sinon, une unité qui déborde de sa strate ou de la base ne compte que la partie intérieure, et sa surface est cette partie.
-
-Table de sortie, une ligne par plan : rel_bias (biais relatif par rapport au vrai total de chaque population), emp_se (écart-type des erreurs), rmse (racine de l'erreur quadratique moyenne) et rmse_mcse (son erreur type de Monte-Carlo), rel_rmse (rmse / vrai total moyen), mean_cv (CV estimé moyen), coverage (part des intervalles à 95 % contenant la vérité), mean_n (nombre moyen d'unités inventoriées), alloc (unités par strate), recommend (1 pour le plan recommandé : la plus faible REQM parmi les plans dont les intervalles couvrent au moins 90 %).
-
-Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparaison est répétée pour chaque n et le rapport trace la REQM en fonction de n, montrant où davantage d'effort cesse de payer.
-
-La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="111"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="124"/>
         <source>Density surface (expected animals per km²)</source>
         <translation>Surface de densité (animaux attendus par km²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="112"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="126"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="115"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="129"/>
         <source>Strata (for the stratified designs)</source>
         <translation>Strates (pour les plans stratifiés)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="120"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="134"/>
         <source>Stratum field</source>
         <translation>Champ de strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Designs to compare</source>
         <translation>Plans à comparer</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Simple random</source>
         <translation>Aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Stratified, proportional allocation</source>
         <translation>Stratifié, allocation proportionnelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="137"/>
-        <source>Stratified, Neyman allocation</source>
-        <translation type="obsolete">Stratifié, allocation de Neyman</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="134"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="151"/>
         <source>Number of units</source>
         <translation>Nombre d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Unit shape</source>
         <translation>Forme de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Point station</source>
         <translation>Station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Square plot</source>
         <translation>Placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Circular plot</source>
         <translation>Placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="156"/>
         <source>Line transect</source>
         <translation>Transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="146"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="163"/>
         <source>Unit size (m): counting radius, side, radius or transect length</source>
         <translation>Taille de l'unité (m) : rayon de comptage, côté, rayon ou longueur du transect</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="152"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="169"/>
         <source>Half-width of a transect&apos;s counting strip (m)</source>
         <translation>Demi-largeur de la bande de comptage d'un transect (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="158"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="175"/>
         <source>Bearing of units and grid (degrees from grid north; −1 random)</source>
         <translation>Azimut des unités et de la grille (degrés depuis le nord de la grille ; −1 aléatoire)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="164"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="181"/>
         <source>Keep units wholly inside their stratum (as the layout&apos;s option)</source>
         <translation>Garder les unités entièrement dans leur strate (comme l'option de la disposition)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="170"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="190"/>
         <source>Simulated surveys per design</source>
         <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="176"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="196"/>
         <source>Overdispersion k of the negative binomial (0: Poisson counts)</source>
         <translation>Surdispersion k de la binomiale négative (0 : comptages de Poisson)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Variance estimator for the grid and balanced designs</source>
         <translation>Estimateur de variance pour les plans en grille et équilibrés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Simple random sampling formula</source>
         <translation>Formule de l'échantillonnage aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Local neighbourhood (Stevens &amp; Olsen 2003)</source>
         <translation>Voisinage local (Stevens &amp; Olsen 2003)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="190"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="210"/>
         <source>Range of units for RMSE against n (e.g. 20, 40, 80 or 20:100:20; empty: none)</source>
         <translation>Gamme d'unités pour la REQM en fonction de n (p. ex. 20, 40, 80 ou 20:100:20 ; vide : aucune)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="116"/>
         <source>Design comparison</source>
         <translation>Comparaison des plans</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="206"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="120"/>
         <source>Recommended design</source>
         <translation>Plan recommandé</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="212"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="226"/>
         <source>The density surface could not be opened.</source>
         <translation>La surface de densité n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="215"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="274"/>
         <source>The sampling frame could not be opened.</source>
         <translation>La base de sondage n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="220"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="280"/>
         <source>Layer &apos;{layer}&apos; has no polygon with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="233"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos;. Choose the field that holds the stratum ids.</source>
-        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} ». Choisissez le champ qui contient les identifiants de strate.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="239"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="298"/>
         <source>Layer &apos;{layer}&apos;: field &apos;{field}&apos; is empty (NULL) for feature id(s) {ids}. Give every stratum a value.</source>
         <translation>Couche « {layer} » : le champ « {field} » est vide (NULL) pour les entités {ids}. Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="250"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="313"/>
         <source>No strata were given: the stratified designs are left out ({names}).</source>
         <translation>Aucune strate n'a été donnée : les plans stratifiés sont écartés ({names}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="254"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="317"/>
         <source>The stratified designs need strata: give the strata layer, or choose another design.</source>
         <translation>Les plans stratifiés ont besoin de strates : donnez la couche des strates, ou choisissez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="272"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="235"/>
         <source>Reading the density surface…</source>
         <translation>Chargement de la surface de densité…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="278"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="241"/>
         <source>The density surface was warped to {crs} (bilinear) to match the frame.</source>
         <translation>La surface de densité a été reprojetée en {crs} (bilinéaire) pour correspondre à la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="303"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
         <source>Simulating {n} units…</source>
         <translation>Simulation avec {n} unités…</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="309"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
         <source>{n} units were left out of the range: {why}</source>
         <translation>{n} unités ont été retirées de la gamme : {why}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="316"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
         <source>The output table could not be created.</source>
         <translation>La table de sortie n'a pas pu être créée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="335"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="264"/>
         <source>Recommended design: {name} (RMSE {rmse:.1f} animals, {rel:.1%} of the total; coverage {cov:.0%}).</source>
         <translation>Plan recommandé : {name} (REQM {rmse:.1f} animaux, {rel:.1%} du total ; couverture {cov:.0%}).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="352"/>
-        <source>Survey designs compared by simulation</source>
-        <translation type="obsolete">Plans d'inventaire comparés par simulation</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="358"/>
-        <source>recommended design</source>
-        <translation type="obsolete">plan recommandé</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="359"/>
-        <source>its RMSE (animals)</source>
-        <translation type="obsolete">sa REQM (animaux)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="360"/>
-        <source>its RMSE relative to the total</source>
-        <translation type="obsolete">sa REQM relative au total</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="361"/>
-        <source>its 95 % interval coverage</source>
-        <translation type="obsolete">couverture de ses intervalles à 95 %</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="363"/>
-        <source>expected animals in the frame</source>
-        <translation type="obsolete">animaux attendus dans la base de sondage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>point station</source>
-        <translation type="obsolete">station ponctuelle</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>square plot</source>
-        <translation type="obsolete">placette carrée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>circular plot</source>
-        <translation type="obsolete">placette circulaire</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="365"/>
-        <source>line transect</source>
-        <translation type="obsolete">transect linéaire</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>counting radius</source>
-        <translation type="obsolete">rayon de comptage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>side</source>
-        <translation type="obsolete">côté</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>radius</source>
-        <translation type="obsolete">rayon</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="366"/>
-        <source>length</source>
-        <translation type="obsolete">longueur</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="370"/>
-        <source>, strip half-width {w:g} m</source>
-        <translation type="obsolete">, demi-largeur de bande {w:g} m</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="372"/>
-        <source>Density surface</source>
-        <translation type="obsolete">Surface de densité</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="474"/>
-        <source>Strata</source>
-        <translation type="obsolete">Strates</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="374"/>
-        <source>none</source>
-        <translation type="obsolete">aucune</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="375"/>
-        <source>feature id</source>
-        <translation type="obsolete">identifiant d'entité</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="376"/>
-        <source>Computation CRS</source>
-        <translation type="obsolete">SCR de calcul</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="377"/>
-        <source>Surface cell</source>
-        <translation type="obsolete">Cellule de la surface</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="378"/>
-        <source>Sub-cells per cell side (for counting)</source>
-        <translation type="obsolete">Sous-cellules par côté de cellule (pour le comptage)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="379"/>
-        <source>Unit</source>
-        <translation type="obsolete">Unité</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="380"/>
-        <source>Counted area per unit (m²)</source>
-        <translation type="obsolete">Surface comptée par unité (m²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
-        <source>Bearing</source>
-        <translation type="obsolete">Azimut</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="381"/>
-        <source>random</source>
-        <translation type="obsolete">aléatoire</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
-        <source>Units wholly inside their stratum</source>
-        <translation type="obsolete">Unités entièrement dans leur strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
-        <source>yes</source>
-        <translation type="obsolete">oui</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="382"/>
-        <source>no</source>
-        <translation type="obsolete">non</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
-        <source>Counts per cell</source>
-        <translation type="obsolete">Comptages par cellule</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
-        <source>negative binomial, k = {k:g}</source>
-        <translation type="obsolete">binomiale négative, k = {k:g}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="385"/>
-        <source>Poisson</source>
-        <translation type="obsolete">Poisson</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
-        <source>Variance estimator (grid, balanced)</source>
-        <translation type="obsolete">Estimateur de variance (grille, équilibré)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
-        <source>local neighbourhood</source>
-        <translation type="obsolete">voisinage local</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="387"/>
-        <source>simple random sampling formula</source>
-        <translation type="obsolete">formule de l'échantillonnage aléatoire simple</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="389"/>
-        <source>Confidence level</source>
-        <translation type="obsolete">Niveau de confiance</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="390"/>
-        <source>Seed</source>
-        <translation type="obsolete">Graine</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="395"/>
-        <source>How the designs did at {n} units</source>
-        <translation type="obsolete">Résultats des plans pour {n} unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Design</source>
-        <translation type="obsolete">Plan</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Mean units surveyed</source>
-        <translation type="obsolete">Unités inventoriées en moyenne</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Relative bias</source>
-        <translation type="obsolete">Biais relatif</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="396"/>
-        <source>Empirical SE (animals)</source>
-        <translation type="obsolete">Erreur type empirique (animaux)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="510"/>
-        <source>RMSE (animals)</source>
-        <translation type="obsolete">REQM (animaux)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
-        <source>± Monte Carlo SE</source>
-        <translation type="obsolete">± erreur type de Monte-Carlo</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
-        <source>RMSE / total</source>
-        <translation type="obsolete">REQM / total</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="397"/>
-        <source>Mean estimated CV</source>
-        <translation type="obsolete">CV estimé moyen</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
-        <source>95 % interval coverage</source>
-        <translation type="obsolete">Couverture des intervalles à 95 %</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="398"/>
-        <source>Surveys without an estimate</source>
-        <translation type="obsolete">Inventaires sans estimation</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="410"/>
-        <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
-        <translation type="obsolete">Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
-        <source>RMSE of the abundance (animals)</source>
-        <translation type="obsolete">REQM de l'abondance (animaux)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="416"/>
-        <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
-        <translation type="obsolete">Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="421"/>
-        <source>Recommendation</source>
-        <translation type="obsolete">Recommandation</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="423"/>
-        <source>No design gave estimates: see the warnings.</source>
-        <translation type="obsolete">Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="425"/>
-        <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
-        <translation type="obsolete">{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="431"/>
-        <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
-        <translation type="obsolete">{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="438"/>
-        <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
-        <translation type="obsolete">Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="443"/>
-        <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
-        <translation type="obsolete">Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="452"/>
-        <source>How the simulation works</source>
-        <translation type="obsolete">Fonctionnement de la simulation</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="453"/>
-        <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine, each unit counts the animals of the cells whose centres it covers (only the part inside the frame, or inside its own stratum for the stratified designs), and the abundance is estimated with the estimation engine: the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
-        <translation type="obsolete">Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition, chaque unité compte les animaux des cellules dont elle couvre le centre (seulement la partie dans la base, ou dans sa propre strate pour les plans stratifiés), et l'abondance est estimée avec le moteur d'estimation : l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="462"/>
-        <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
-        <translation type="obsolete">Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>Stratum</source>
-        <translation type="obsolete">Strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>Area (km²)</source>
-        <translation type="obsolete">Surface (km²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>Mean expected count per unit</source>
-        <translation type="obsolete">Comptage attendu moyen par unité</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="477"/>
-        <source>S_h (count SD per unit)</source>
-        <translation type="obsolete">S_h (écart-type du comptage par unité)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="479"/>
-        <source>Units, proportional</source>
-        <translation type="obsolete">Unités, proportionnelle</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="481"/>
-        <source>Units, Neyman</source>
-        <translation type="obsolete">Unités, Neyman</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="491"/>
-        <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
-        <translation type="obsolete">S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="498"/>
-        <source>RMSE against the number of units</source>
-        <translation type="obsolete">REQM en fonction du nombre d'unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
-        <source>number of units</source>
-        <translation type="obsolete">nombre d'unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="504"/>
-        <source>RMSE of the abundance estimate against the number of units</source>
-        <translation type="obsolete">REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="508"/>
-        <source>Units</source>
-        <translation type="obsolete">Unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="516"/>
-        <source>{a} → {b} units: RMSE {change:+.0%}</source>
-        <translation type="obsolete">{a} → {b} unités : REQM {change:+.0%}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="517"/>
-        <source>For {name}: </source>
-        <translation type="obsolete">Pour {name} : </translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="518"/>
-        <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
-        <translation type="obsolete">La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="69"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="70"/>
         <source>Before fieldwork: which design, and how many units, give a usable estimate on this area? The algorithm simulates many surveys of a plausible density surface and reports how each design did.
 
 Surface: a raster of expected animals per km² (from a habitat model, an expert map or an earlier survey), warped to the frame's CRS when needed. Frame: the sampling frame. Strata (optional, with the stratum field, default 'stratum'): needed by the two stratified designs.
@@ -1480,22 +598,22 @@ Gamme d'unités (facultative), p. ex. '20, 40, 80' ou '20:100:20' : la comparais
 La simulation suppose que la surface est juste et que chaque animal d'une unité est compté. Les résultats ne valent que ce que vaut la surface. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Stratified, Neyman allocation with the true S_h (best case)</source>
         <translation>Stratifié, allocation de Neyman avec le vrai S_h (meilleur cas)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="125"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="139"/>
         <source>Stratified, Neyman allocation from a pilot survey</source>
         <translation>Stratifié, allocation de Neyman d'après un inventaire pilote</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="182"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="202"/>
         <source>Local neighbourhood, scaled to the simple formula (our variant)</source>
         <translation>Voisinage local, mis à l'échelle de la formule simple (notre variante)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/comparedesigns.py" line="196"/>
+        <location filename="../processing/algorithms/comparedesigns.py" line="216"/>
         <source>Pilot units per stratum for the pilot-based Neyman design</source>
         <translation>Unités pilotes par strate pour le plan de Neyman fondé sur un pilote</translation>
     </message>
@@ -1503,17 +621,17 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
 <context>
     <name>DemoReserve</name>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="34"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="33"/>
         <source>Demo reserve with a simulated population</source>
         <translation>Réserve de démonstration avec une population simulée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="37"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="36"/>
         <source>&lt;p&gt;Builds Hollin Ridge Reserve, an invented upland reserve for demonstrations, training and tests, and a simulated population of the velmar, an invented grazing antelope. Nothing in it describes a real place or species.&lt;/p&gt;&lt;p&gt;The reserve covers 250–350 km² in WGS 84 / UTM zone 36S, with an irregular boundary, a lake and a private inholding (both in the excluded-areas layer), an elevation raster (synthetic fractal terrain with a steep escarpment) and a greenness raster (a vegetation index from 0 to 1, correlated with elevation, plus noise).&lt;/p&gt;&lt;p&gt;The velmar live in groups: an inhomogeneous Thomas cluster process whose group centres are denser where greenness is high and elevation low. The true total is known, and the expected number of animals per km² is written as a raster, so that survey designs and estimates can be checked against the truth.&lt;/p&gt;&lt;h3&gt;Parameters&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: the same seed gives the same reserve and animals. 0 draws a seed and records it.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster cell size&lt;/b&gt;: metres, 10 to 500 (default 50).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Reserve boundary (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Excluded areas (&lt;i&gt;kind&lt;/i&gt; lake or inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Elevation (m), greenness (0–1) and expected velmar per km² rasters&lt;/li&gt;&lt;li&gt;Animals (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;An HTML report&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;References: Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Construit Hollin Ridge Reserve, une réserve d'altitude inventée pour les démonstrations, la formation et les tests, et une population simulée de velmar, une antilope brouteuse inventée. Rien ici ne décrit un lieu ou une espèce réels.&lt;/p&gt;&lt;p&gt;La réserve couvre 250–350 km² en WGS 84 / UTM zone 36S, avec une limite irrégulière, un lac et une enclave privée (tous deux dans la couche des zones exclues), un raster d'altitude (relief fractal synthétique avec un escarpement abrupt) et un raster de verdure (un indice de végétation de 0 à 1, corrélé à l'altitude, plus du bruit).&lt;/p&gt;&lt;p&gt;Les velmar vivent en groupes : un processus d'agrégats de Thomas inhomogène dont les centres de groupe sont plus denses là où la verdure est forte et l'altitude basse. Le vrai total est connu, et le nombre attendu d'animaux par km² est écrit dans un raster, afin de pouvoir confronter les plans d'inventaire et les estimations à la vérité.&lt;/p&gt;&lt;h3&gt;Paramètres&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : la même graine donne la même réserve et les mêmes animaux. 0 en tire une et l'enregistre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Taille de cellule raster&lt;/b&gt; : en mètres, de 10 à 500 (50 par défaut).&lt;/li&gt;&lt;/ul&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Limite de la réserve (&lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Zones exclues (&lt;i&gt;kind&lt;/i&gt; lake ou inholding, &lt;i&gt;name&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Rasters d'altitude (m), de verdure (0–1) et de velmar attendus par km²&lt;/li&gt;&lt;li&gt;Animaux (&lt;i&gt;animal_id&lt;/i&gt;, &lt;i&gt;group_id&lt;/i&gt;)&lt;/li&gt;&lt;li&gt;Un rapport HTML&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Références : Thomas, M. (1949) A generalization of Poisson's binomial limit for use in ecology. Biometrika 36:18–25. Diggle, P. J. (2013) Statistical Analysis of Spatial and Spatio-Temporal Point Patterns, 3rd ed., CRC Press.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="63"/>
         <source>Raster cell size (m)</source>
         <translation>Taille de cellule raster (m)</translation>
     </message>
@@ -1523,159 +641,44 @@ La simulation suppose que la surface est juste et que chaque animal d'une unité
         <translation>Limite de la réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="70"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="71"/>
         <source>Excluded areas (lake, inholding)</source>
         <translation>Zones exclues (lac, enclave)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="71"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="74"/>
         <source>Elevation (m)</source>
         <translation>Altitude (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="72"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="75"/>
         <source>Greenness (0–1)</source>
         <translation>Verdure (0–1)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="73"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="76"/>
         <source>Expected animals per km²</source>
         <translation>Animaux attendus par km²</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="75"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="78"/>
         <source>Simulated animals</source>
         <translation>Animaux simulés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="77"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="81"/>
         <source>True number of animals</source>
         <translation>Nombre réel d'animaux</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="78"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="82"/>
         <source>Expected number of animals</source>
         <translation>Nombre attendu d'animaux</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="122"/>
+        <location filename="../processing/algorithms/demoreserve.py" line="132"/>
         <source>{name}: {area:,.1f} km², {n:,} velmar in {g:,} groups (expected {e:,.0f}).</source>
         <translation>{name} : {area:,.1f} km², {n:,} velmar en {g:,} groupes (attendus : {e:,.0f}).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="140"/>
-        <source>Demo reserve: {name}</source>
-        <translation>Réserve de démonstration : {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="141"/>
-        <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
-        <translation>Données inventées pour les démonstrations, la formation et les tests. {name} et le velmar ({desc}) n'existent pas.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>reserve area</source>
-        <translation>surface de la réserve</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>true number of velmar</source>
-        <translation>nombre réel de velmar</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>expected number</source>
-        <translation>nombre attendu</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="144"/>
-        <source>groups</source>
-        <translation>groupes</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>Seed</source>
-        <translation>Graine</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>CRS</source>
-        <translation>SCR</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>Mean group size (mu)</source>
-        <translation>Taille moyenne des groupes (mu)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="150"/>
-        <source>Group spread, SD of members around the centre (m)</source>
-        <translation>Dispersion des groupes, écart-type des membres autour du centre (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="157"/>
-        <source>Areas</source>
-        <translation>Zones</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Part</source>
-        <translation>Partie</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Area (km²)</source>
-        <translation>Surface (km²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Reserve</source>
-        <translation>Réserve</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Lake (excluded)</source>
-        <translation>Lac (exclu)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="158"/>
-        <source>Private inholding (excluded)</source>
-        <translation>Enclave privée (exclue)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="163"/>
-        <source>Map</source>
-        <translation>Carte</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Lake</source>
-        <translation>Lac</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Private inholding</source>
-        <translation>Enclave privée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Velmar (every third animal)</source>
-        <translation>Velmar (un animal sur trois)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="166"/>
-        <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
-        <translation>Hollin Ridge Reserve, les zones exclues et les animaux simulés.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="173"/>
-        <source>How the population was simulated</source>
-        <translation>Comment la population a été simulée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/demoreserve.py" line="174"/>
-        <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
-        <translation>Les centres de groupe forment un processus de Poisson inhomogène sur l'habitat (la réserve sans le lac) ; leur intensité est proportionnelle à exp(0,9 × verdure standardisée − 0,6 × altitude standardisée). Chaque groupe a un nombre de membres suivant une loi de Poisson (moyenne {mu:g}), dispersés autour de son centre avec un déplacement normal de {sigma:g} m ; les membres qui tombent hors de l'habitat ne font pas partie de la population. C'est un processus d'agrégats de Thomas. Son total attendu et sa variance sont calculés à partir de la surface d'intensité sur la grille du raster.</translation>
     </message>
 </context>
 <context>
@@ -1934,11 +937,6 @@ Sécurité sur le terrain : l'échantillonnage par distance envoie des observate
         <translation>Rééchantillonnages bootstrap sur les transects (0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="234"/>
-        <source>Layer &apos;{layer}&apos; has no field for the {what}. Choose the field that holds it.</source>
-        <translation type="obsolete">La couche « {layer} » n'a pas de champ pour {what}. Choisissez le champ qui les contient.</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/distancedensity.py" line="232"/>
         <source>The distance bands &apos;{text}&apos; are not numbers. Write the band edges in m, from 0, separated by commas, e.g. 0, 10, 25, 50, 100.</source>
         <translation>Les classes de distance « {text} » ne sont pas des nombres. Écrivez les bornes des classes en m, depuis 0, séparées par des virgules, p. ex. 0, 10, 25, 50, 100.</translation>
@@ -1974,47 +972,37 @@ Sécurité sur le terrain : l'échantillonnage par distance envoie des observate
         <translation>Couche « {layer} » : les points {ids} ont dans le champ « {field} » un nombre de visites qui n'est pas un nombre entier supérieur ou égal à 0. Corrigez-les.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="285"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="286"/>
         <source>Layer &apos;{layer}&apos;: observations name the points {ids}, whose visits field &apos;{field}&apos; is empty or 0. Give them their number of visits, or correct the observations&apos; unit ids.</source>
         <translation>Couche « {layer} » : des observations nomment les points {ids}, dont le champ des visites « {field} » est vide ou vaut 0. Donnez-leur leur nombre de visites, ou corrigez les identifiants d'unité des observations.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="291"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="292"/>
         <source>{n} point(s) with no visits were left out (not surveyed).</source>
         <translation>{n} point(s) sans visite ont été écarté(s) (non inventorié(s)).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="300"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="301"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field, or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates, ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="304"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="305"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum.</source>
         <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base de sondage est traitée comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="312"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="313"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
-        <source>unit ids</source>
-        <translation type="obsolete">les identifiants d'unité</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="347"/>
-        <source>distances</source>
-        <translation type="obsolete">les distances</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="430"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="431"/>
         <source>Detection function{where}: {model}, P = {p:.3f}, effective width {esw:.1f} m, {n} detections.</source>
         <translation>Fonction de détection{where} : {model}, P = {p:.3f}, largeur effective {esw:.1f} m, {n} détections.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/distancedensity.py" line="434"/>
+        <location filename="../processing/algorithms/distancedensity.py" line="435"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
     </message>
@@ -2025,55 +1013,6 @@ Sécurité sur le terrain : l'échantillonnage par distance envoie des observate
         <location filename="../processing/algorithms/estimate.py" line="74"/>
         <source>Estimate density and abundance</source>
         <translation>Estimer la densité et l'abondance</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="111"/>
-        <source>Estimates density and abundance per stratum and for the whole frame from the counts in the sample units, with standard error, CV and confidence interval, and the sample size the next survey needs.
-
-Estimator: D_h = Σy / Σa per stratum (the ratio estimator; with equal units, the mean count divided by the unit area), with its linearised variance (Cochran 1977, ch. 5 and 6); abundance N_h = D_h·A_h; overall N = Σ N_h and D = N / Σ A_h, with the variances added. The finite-population correction 1 − Σa/A_h is applied when asked for.
-
-Counts: a NULL count means the unit was not surveyed: it is left out and listed as non-response. Reserve units (role = reserve) without a count are unused reserves and are skipped quietly; reserves that were surveyed count like any other unit. 0 means surveyed, none seen. Negative or non-numeric counts stop the run, naming the units.
-
-Unit area (m²): the unit area field (default area_m2, as the layout writes it) when it is above 0, else the polygon's area, else for lines the strip width × the line's length, else the fixed unit area for points and lines.
-
-Strata: polygons with an id field matching the units' stratum field; their areas define the frame. When the units have no stratum field, or the strata layer is a single polygon without an id field, all units form one stratum over the frame. A stratum with one surveyed unit is collapsed with a neighbour for its variance (Cochran 1977, §5A.12), with a warning. A stratum with none is an error, unless you choose to leave it out: then the frame shrinks, and the report says so. Strata must not overlap (an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning), and every strata polygon needs its id: a polygon without one is an error, unless strata with no surveyed unit may be left out.
-
-Intervals: t with Satterthwaite's degrees of freedom (Satterthwaite 1946; Cochran 1977); log-normal, N/C to N·C with C = exp(z√ln(1+CV²)) (Burnham et al. 1987; Buckland et al. 2001); or a rescaled stratified percentile bootstrap of 2,000 resamples (seeded; Rao &amp; Wu 1988), which carries the finite-population correction.
-
-Variance: the simple random sampling formula, or the local neighbourhood estimator (Stevens &amp; Olsen 2003) for systematic grids and spatially balanced layouts, where the simple formula overstates the variance.
-
-Detection: with a detection probability p below 1, estimates are divided by p and the squared CVs add (delta method, Seber 1982). p and its SE must come from a separate study.
-
-Presence data: with the presence option a 0/1 field gives the stratified proportion of units where the species was detected (naive occupancy, not corrected for detection), and abund is the number of occupied units in the frame.
-
-Target CV (above 0): n_next is the number of units each stratum needs next time for that CV of the overall abundance, by Neyman allocation on the observed standard deviations (Neyman 1934; Cochran 1977, eq. 5.26).
-
-True total: for simulations and training only. The report then shows it beside the estimate; in a real survey the true total is never known.
-
-Outputs: the strata polygons with the estimate fields (for a choropleth), a table with one row per stratum and a row 'all', an HTML report, and the overall numbers for models.</source>
-        <translation type="obsolete">Estime la densité et l'abondance par strate et pour toute la base de sondage à partir des comptages dans les unités d'échantillonnage, avec erreur type, coefficient de variation (CV) et intervalle de confiance, ainsi que la taille d'échantillon nécessaire au prochain inventaire.
-
-Estimateur : D_h = Σy / Σa par strate (l'estimateur par le ratio ; avec des unités égales, le comptage moyen divisé par la surface d'une unité), avec sa variance linéarisée (Cochran 1977, ch. 5 et 6) ; abondance N_h = D_h·A_h ; au total N = Σ N_h et D = N / Σ A_h, les variances s'additionnant. La correction pour population finie 1 − Σa/A_h est appliquée sur demande.
-
-Comptages : un comptage NULL signifie que l'unité n'a pas été inventoriée : elle est écartée et listée comme non-réponse. Les unités de réserve (role = reserve) sans comptage sont des réserves non utilisées et sont ignorées sans avertissement ; les réserves inventoriées comptent comme toute autre unité. 0 signifie inventoriée, aucun animal vu. Des comptages négatifs ou non numériques arrêtent le traitement, en nommant les unités.
-
-Surface d'une unité (m²) : le champ de surface d'unité (area_m2 par défaut, tel que l'écrit la disposition) s'il est supérieur à 0, sinon la surface du polygone, sinon pour les lignes la largeur de bande × la longueur de la ligne, sinon la surface d'unité fixe pour les points et les lignes.
-
-Strates : des polygones avec un champ d'identifiant correspondant au champ de strate des unités ; leurs surfaces définissent la base de sondage. Quand les unités n'ont pas de champ de strate, ou que la couche des strates est un seul polygone sans champ d'identifiant, toutes les unités forment une seule strate sur la base. Une strate avec une seule unité inventoriée est regroupée avec une voisine pour sa variance (Cochran 1977, §5A.12), avec un avertissement. Une strate sans unité inventoriée est une erreur, sauf si vous choisissez de l'écarter : la base se réduit alors, et le rapport le dit. Les strates ne doivent pas se chevaucher (un chevauchement de plus de 0,1 % de la plus petite strate est une erreur, un plus petit un avertissement), et chaque polygone de strate doit porter son identifiant : un polygone sans identifiant est une erreur, sauf si les strates sans unité inventoriée peuvent être écartées.
-
-Intervalles : t avec les degrés de liberté de Satterthwaite (Satterthwaite 1946 ; Cochran 1977) ; log-normal, de N/C à N·C avec C = exp(z√ln(1+CV²)) (Burnham et al. 1987 ; Buckland et al. 2001) ; ou un bootstrap stratifié des percentiles, remis à l'échelle, sur 2 000 rééchantillonnages (avec graine ; Rao &amp; Wu 1988), qui tient compte de la correction pour population finie.
-
-Variance : la formule de l'échantillonnage aléatoire simple, ou l'estimateur de voisinage local (Stevens &amp; Olsen 2003) pour les grilles systématiques et les dispositions spatialement équilibrées, où la formule simple surestime la variance.
-
-Détection : avec une probabilité de détection p inférieure à 1, les estimations sont divisées par p et les CV au carré s'additionnent (méthode delta, Seber 1982). p et son erreur type doivent provenir d'une étude distincte.
-
-Données de présence : avec l'option présence, un champ 0/1 donne la proportion stratifiée d'unités où l'espèce a été détectée (occupation naïve, non corrigée de la détection), et abund est le nombre d'unités occupées dans la base.
-
-CV cible (supérieur à 0) : n_next est le nombre d'unités dont chaque strate aura besoin la prochaine fois pour ce CV de l'abondance globale, par allocation de Neyman sur les écarts-types observés (Neyman 1934 ; Cochran 1977, éq. 5.26).
-
-Vrai total : pour les simulations et la formation uniquement. Le rapport l'affiche alors à côté de l'estimation ; dans un vrai inventaire, le vrai total n'est jamais connu.
-
-Sorties : les polygones des strates avec les champs d'estimation (pour une carte choroplèthe), une table avec une ligne par strate et une ligne 'all', un rapport HTML, et les valeurs globales pour les modèles.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="139"/>
@@ -2246,499 +1185,34 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation>CV de l'estimation globale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="323"/>
-        <source>Layer &apos;{layer}&apos; has no count field &apos;{field}&apos;. Choose the field that holds the counts.</source>
-        <translation type="obsolete">La couche « {layer} » n'a pas de champ de comptage « {field} ». Choisissez le champ qui contient les comptages.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="322"/>
+        <location filename="../processing/algorithms/estimate.py" line="277"/>
         <source>Layer &apos;{layer}&apos; has no stratum id field matching the units&apos; field &apos;{field}&apos;. Choose the strata layer&apos;s id field (plotwise:stratify writes &apos;stratum&apos;), or give a frame layer of one polygon to treat the frame as one stratum.</source>
         <translation>La couche « {layer} » n'a pas de champ d'identifiant de strate correspondant au champ « {field} » des unités. Choisissez le champ d'identifiant de la couche des strates (plotwise:stratify écrit 'stratum'), ou donnez une couche de base de sondage d'un seul polygone pour traiter la base comme une seule strate.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="327"/>
+        <location filename="../processing/algorithms/estimate.py" line="282"/>
         <source>Layer &apos;{layer}&apos; is one polygon without a stratum id field: the frame is treated as one stratum, and the units&apos; field &apos;{field}&apos; is not used. If the units were allocated to strata unequally, give the strata instead: an unstratified mean is then biased.</source>
         <translation>La couche « {layer} » est un seul polygone sans champ d'identifiant de strate : la base est traitée comme une seule strate, et le champ « {field} » des unités n'est pas utilisé. Si les unités ont été allouées aux strates de façon inégale, donnez plutôt les strates : une moyenne non stratifiée est alors biaisée.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="236"/>
+        <location filename="../processing/algorithms/estimate.py" line="311"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La couche « {layer} » n'a aucune entité.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="242"/>
+        <location filename="../processing/algorithms/estimate.py" line="317"/>
         <source>Layer &apos;{layer}&apos; has no polygons with an area.</source>
         <translation>La couche « {layer} » n'a aucun polygone ayant une surface.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="285"/>
+        <location filename="../processing/algorithms/estimate.py" line="240"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/estimate.py" line="343"/>
-        <source>Layer &apos;{layer}&apos;: units {ids} have no geometry, so the local neighbourhood variance cannot use them. Give them their location, or use the simple random sampling formula.</source>
-        <translation type="obsolete">Couche « {layer} » : les unités {ids} n'ont pas de géométrie, la variance de voisinage local ne peut donc pas les utiliser. Donnez-leur leur position, ou utilisez la formule de l'échantillonnage aléatoire simple.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="350"/>
-        <source>Every count is 0 or 1. If the field records presence/absence, run again with the presence option: the result is then the proportion of units occupied (naive occupancy).</source>
-        <translation type="obsolete">Tous les comptages valent 0 ou 1. Si le champ enregistre présence/absence, relancez avec l'option présence : le résultat est alors la proportion d'unités occupées (occupation naïve).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="297"/>
+        <location filename="../processing/algorithms/estimate.py" line="252"/>
         <source>Overall abundance {n:,.1f} ({lo:,.1f} to {hi:,.1f}), CV {cv:.3f}.</source>
         <translation>Abondance globale {n:,.1f} ({lo:,.1f} à {hi:,.1f}), CV {cv:.3f}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="419"/>
-        <source>Layer '{layer}': units {ids} have no surveyed area. Point units need the unit area field (area_m2 above 0) or a fixed unit area (m²); line units the area field, a strip width or a fixed unit area; polygons use their own area.</source>
-        <translation type="obsolete">Couche « {layer} » : les unités {ids} n'ont pas de surface inventoriée. Les unités ponctuelles ont besoin du champ de surface d'unité (area_m2 supérieur à 0) ou d'une surface d'unité fixe (m²) ; les unités linéaires du champ de surface, d'une largeur de bande ou d'une surface d'unité fixe ; les polygones utilisent leur propre surface.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="438"/>
-        <source>In strata {strata} the units&apos; inclusion probabilities (incl_p) differ. This estimator assumes equal chances within a stratum; check the design the units came from.</source>
-        <translation type="obsolete">Dans les strates {strata}, les probabilités d'inclusion des unités (incl_p) diffèrent. Cet estimateur suppose des chances égales dans une strate ; vérifiez le plan dont viennent les unités.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="458"/>
-        <source>occupied units</source>
-        <translation type="obsolete">unités occupées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="458"/>
-        <source>animals</source>
-        <translation type="obsolete">animaux</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="459"/>
-        <source>Naive occupancy from presence data</source>
-        <translation type="obsolete">Occupation naïve à partir de données de présence</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="459"/>
-        <source>Density and abundance estimate</source>
-        <translation type="obsolete">Estimation de la densité et de l'abondance</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="462"/>
-        <source>proportion of units occupied (naive)</source>
-        <translation type="obsolete">proportion d'unités occupées (naïve)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="462"/>
-        <source>density per {unit}</source>
-        <translation type="obsolete">densité par {unit}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="464"/>
-        <source>estimated {what} in the frame</source>
-        <translation type="obsolete">estimation des {what} dans la base de sondage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="465"/>
-        <source>{level} interval</source>
-        <translation type="obsolete">intervalle à {level}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="518"/>
-        <source>CV</source>
-        <translation type="obsolete">CV</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="468"/>
-        <source>units surveyed</source>
-        <translation type="obsolete">unités inventoriées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="471"/>
-        <source>true total of the simulated population</source>
-        <translation type="obsolete">vrai total de la population simulée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="476"/>
-        <source>Simulation only: the true total ({truth:,.0f}) is known here because the population was simulated. The estimate is {est:,.0f} ({error:+.1%} from the truth), and the {level} interval {verdict} the truth. Only a simulation can show this; a real survey never knows its true total, and one survey&apos;s interval may miss it by chance (about {miss:.0%} of surveys should).</source>
-        <translation type="obsolete">Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="476"/>
-        <source>covers</source>
-        <translation type="obsolete">contient</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="476"/>
-        <source>misses</source>
-        <translation type="obsolete">ne contient pas</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="484"/>
-        <source>log-normal</source>
-        <translation type="obsolete">log-normal</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="485"/>
-        <source>stratified percentile bootstrap</source>
-        <translation type="obsolete">bootstrap stratifié des percentiles</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="486"/>
-        <source>simple random sampling formula</source>
-        <translation type="obsolete">formule de l'échantillonnage aléatoire simple</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="487"/>
-        <source>local neighbourhood (Stevens &amp; Olsen 2003)</source>
-        <translation type="obsolete">voisinage local (Stevens &amp; Olsen 2003)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="489"/>
-        <source>Sample units</source>
-        <translation type="obsolete">Unités d'échantillonnage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="490"/>
-        <source> (presence/absence)</source>
-        <translation type="obsolete"> (présence/absence)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="491"/>
-        <source>Stratum field</source>
-        <translation type="obsolete">Champ de strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="491"/>
-        <source>none: one stratum</source>
-        <translation type="obsolete">aucun : une seule strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="492"/>
-        <source>Unit area</source>
-        <translation type="obsolete">Surface d'une unité</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="492"/>
-        <source>field {field} (m²)</source>
-        <translation type="obsolete">champ {field} (m²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="492"/>
-        <source>polygon area</source>
-        <translation type="obsolete">surface du polygone</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="494"/>
-        <source>strip width</source>
-        <translation type="obsolete">largeur de bande</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="495"/>
-        <source>fixed</source>
-        <translation type="obsolete">fixe</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="496"/>
-        <source>Strata (frame)</source>
-        <translation type="obsolete">Strates (base de sondage)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="497"/>
-        <source>Computation CRS</source>
-        <translation type="obsolete">SCR de calcul</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="498"/>
-        <source>Area unit</source>
-        <translation type="obsolete">Unité de surface</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Interval</source>
-        <translation type="obsolete">Intervalle</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>yes</source>
-        <translation type="obsolete">oui</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>no</source>
-        <translation type="obsolete">non</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="503"/>
-        <source>Detection probability p</source>
-        <translation type="obsolete">Probabilité de détection p</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="504"/>
-        <source>Target CV for the next survey</source>
-        <translation type="obsolete">CV cible pour le prochain inventaire</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="507"/>
-        <source>Bootstrap resamples</source>
-        <translation type="obsolete">Rééchantillonnages bootstrap</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="510"/>
-        <source>Seed</source>
-        <translation type="obsolete">Graine</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="510"/>
-        <source>not used (no random draws without the bootstrap)</source>
-        <translation type="obsolete">non utilisée (pas de tirage aléatoire sans le bootstrap)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="514"/>
-        <source>Estimates by stratum</source>
-        <translation type="obsolete">Estimations par strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="519"/>
-        <source>Stratum</source>
-        <translation type="obsolete">Strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="515"/>
-        <source>Area ({unit})</source>
-        <translation type="obsolete">Surface ({unit})</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="515"/>
-        <source>Units (n)</source>
-        <translation type="obsolete">Unités (n)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="515"/>
-        <source>Not surveyed</source>
-        <translation type="obsolete">Non inventoriées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="516"/>
-        <source>Mean count</source>
-        <translation type="obsolete">Comptage moyen</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="516"/>
-        <source>SD of counts</source>
-        <translation type="obsolete">Écart-type des comptages</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="519"/>
-        <source>SE</source>
-        <translation type="obsolete">Erreur type</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Lower limit</source>
-        <translation type="obsolete">Limite inférieure</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Upper limit</source>
-        <translation type="obsolete">Limite supérieure</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="518"/>
-        <source>df</source>
-        <translation type="obsolete">ddl</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="532"/>
-        <source>Occupied units</source>
-        <translation type="obsolete">Unités occupées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="532"/>
-        <source>Abundance</source>
-        <translation type="obsolete">Abondance</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="522"/>
-        <source>Units next time (n_next)</source>
-        <translation type="obsolete">Unités la prochaine fois (n_next)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="569"/>
-        <source>all strata</source>
-        <translation type="obsolete">toutes les strates</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="530"/>
-        <source>{what}, limits at {level}.</source>
-        <translation type="obsolete">{what}, limites à {level}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="532"/>
-        <source>{what} in the frame, limits at {level}.</source>
-        <translation type="obsolete">{what} dans la base de sondage, limites à {level}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="535"/>
-        <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
-        <translation type="obsolete">La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="540"/>
-        <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
-        <translation type="obsolete">Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="543"/>
-        <source>The overall interval by method</source>
-        <translation type="obsolete">L'intervalle global selon la méthode</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="544"/>
-        <source>Used in the outputs</source>
-        <translation type="obsolete">Utilisé dans les sorties</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="548"/>
-        <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
-        <translation type="obsolete">L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>overall abundance in a resample</source>
-        <translation type="obsolete">abondance globale dans un rééchantillonnage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>resamples</source>
-        <translation type="obsolete">rééchantillonnages</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>{level} percentile limits</source>
-        <translation type="obsolete">limites des percentiles à {level}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="555"/>
-        <source>The {n:,} bootstrap resamples of the overall abundance</source>
-        <translation type="obsolete">Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="568"/>
-        <source>true density (simulation)</source>
-        <translation type="obsolete">vraie densité (simulation)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="573"/>
-        <source>{what} by stratum with {level} confidence intervals</source>
-        <translation type="obsolete">{what} par strate avec intervalles de confiance à {level}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="581"/>
-        <source>lowest</source>
-        <translation type="obsolete">minimum</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="581"/>
-        <source>highest</source>
-        <translation type="obsolete">maximum</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="589"/>
-        <source>surveyed units</source>
-        <translation type="obsolete">unités inventoriées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="593"/>
-        <source>not surveyed</source>
-        <translation type="obsolete">non inventoriées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="595"/>
-        <source>Strata shaded by {what}, with the units</source>
-        <translation type="obsolete">Strates ombrées selon {what}, avec les unités</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="598"/>
-        <source>Method</source>
-        <translation type="obsolete">Méthode</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="600"/>
-        <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
-        <translation type="obsolete">La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="607"/>
-        <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction is applied and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
-        <translation type="obsolete">La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie est appliquée et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="614"/>
-        <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
-        <translation type="obsolete">Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / (n_h − 1)) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="614"/>
-        <source>Intervals are log-normal: N/C to N·C with C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987; Buckland et al. 2001). They are asymmetric and never go below 0.</source>
-        <translation type="obsolete">Les intervalles sont log-normaux : de N/C à N·C avec C = exp(z·√ln(1 + CV²)) (Burnham et al. 1987 ; Buckland et al. 2001). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="614"/>
-        <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction when it is asked for (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
-        <translation type="obsolete">Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie quand elle est demandée (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="628"/>
-        <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood, and only differences within neighbourhoods count as variance. For systematic and spatially balanced layouts the simple random sampling formula overstates the variance; this estimator does not, as long as the layout really was systematic or spatially balanced; for a simple random layout use the simple formula. The sum of the local variances is scaled once so that it agrees on average with the simple formula when the population has no spatial pattern (our choice).</source>
-        <translation type="obsolete">Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, et seules les différences à l'intérieur des voisinages comptent comme variance. Pour les dispositions systématiques et spatialement équilibrées, la formule de l'échantillonnage aléatoire simple surestime la variance ; cet estimateur non, pourvu que la disposition ait réellement été systématique ou spatialement équilibrée ; pour une disposition aléatoire simple, utilisez la formule simple. La somme des variances locales est mise à l'échelle une fois pour concorder en moyenne avec la formule simple quand la population n'a pas de structure spatiale (notre choix).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="637"/>
-        <source>Strata with one surveyed unit were collapsed with a neighbour (of the strata touching it on the map, or else the strata next to it in id order, the one with the closer density): the members of a collapsed group share the group's pooled residual variance (Cochran 1977, §5A.12). Differences between the collapsed strata then count as variance, so their standard errors tend to be too large.</source>
-        <translation type="obsolete">Les strates avec une seule unité inventoriée ont été regroupées avec une voisine (parmi les strates qui la touchent sur la carte, ou à défaut les strates voisines dans l'ordre des identifiants, celle dont la densité est la plus proche) : les membres d'un groupe partagent la variance résiduelle commune du groupe (Cochran 1977, §5A.12). Les différences entre strates regroupées comptent alors comme variance, si bien que leurs erreurs types tendent à être trop grandes.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="643"/>
-        <source>In the bootstrap, a collapsed stratum draws as many residuals as it has units from the pooled units of its group (each unit&apos;s count minus the group&apos;s density times the unit&apos;s area), adds them to its own estimate and rescales them, so that its resamples are centred on its own estimate and vary as much as the collapsed-strata variance says.</source>
-        <translation type="obsolete">Dans le bootstrap, une strate regroupée tire autant de résidus qu'elle a d'unités parmi les unités mises en commun de son groupe (le comptage de chaque unité moins la densité du groupe multipliée par la surface de l'unité), les ajoute à sa propre estimation et les remet à l'échelle, de sorte que ses rééchantillonnages sont centrés sur sa propre estimation et varient autant que l'indique la variance des strates regroupées.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="649"/>
-        <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The t interval&apos;s degrees of freedom combine the two parts (Buckland et al. 2001), p&apos;s part counting as known with infinite degrees of freedom.</source>
-        <translation type="obsolete">Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté de l'intervalle t combinent les deux parts (Buckland et al. 2001), celle de p étant comptée comme connue avec des degrés de liberté infinis.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="656"/>
-        <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations observed now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 per stratum. The observed SDs are themselves uncertain, especially from few units.</source>
-        <translation type="obsolete">Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types observés maintenant (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 par strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="662"/>
-        <source>Cautions</source>
-        <translation type="obsolete">Mises en garde</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="663"/>
-        <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
-        <translation type="obsolete">L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="667"/>
-        <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
-        <translation type="obsolete">Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="670"/>
-        <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
-        <translation type="obsolete">Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="675"/>
-        <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
-        <translation type="obsolete">Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/estimate.py" line="678"/>
-        <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
-        <translation type="obsolete">Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
     </message>
     <message>
         <location filename="../processing/algorithms/estimate.py" line="77"/>
@@ -2811,72 +1285,72 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
 <context>
     <name>ExampleChain</name>
     <message>
-        <location filename="../scripts/build_models.py" line="111"/>
+        <location filename="../scripts/build_models.py" line="114"/>
         <source>Units with counts</source>
         <translation>Unités avec comptages</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="114"/>
+        <location filename="../scripts/build_models.py" line="117"/>
         <source>Estimate by stratum</source>
         <translation>Estimation par strate</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="114"/>
+        <location filename="../scripts/build_models.py" line="117"/>
         <source>Estimate report</source>
         <translation>Rapport d'estimation</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="114"/>
+        <location filename="../scripts/build_models.py" line="117"/>
         <source>Estimate table</source>
         <translation>Table des estimations</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="103"/>
+        <location filename="../scripts/build_models.py" line="105"/>
         <source>Animal points</source>
         <translation>Points des animaux</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="107"/>
+        <location filename="../scripts/build_models.py" line="109"/>
         <source>Detection probability</source>
         <translation>Probabilité de détection</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="109"/>
+        <location filename="../scripts/build_models.py" line="112"/>
         <source>Random seed (0 draws one)</source>
         <translation>Graine aléatoire (0 en tire une)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="105"/>
+        <location filename="../scripts/build_models.py" line="107"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="101"/>
+        <location filename="../scripts/build_models.py" line="103"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="86"/>
+        <location filename="../scripts/build_models.py" line="88"/>
         <source>Strata with units allocated</source>
         <translation>Strates avec unités allouées</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="78"/>
+        <location filename="../scripts/build_models.py" line="80"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="93"/>
         <source>Layout report</source>
         <translation>Rapport de disposition</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="91"/>
+        <location filename="../scripts/build_models.py" line="93"/>
         <source>Waypoints (GPX)</source>
         <translation>Points de passage (GPX)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="68"/>
+        <location filename="../scripts/build_models.py" line="69"/>
         <source>Covariate rasters</source>
         <translation>Rasters de covariables</translation>
     </message>
@@ -2891,12 +1365,12 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation>Pente maximale inventoriée (degrés)</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="70"/>
+        <location filename="../scripts/build_models.py" line="71"/>
         <source>Number of strata</source>
         <translation>Nombre de strates</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="74"/>
+        <location filename="../scripts/build_models.py" line="75"/>
         <source>Side of the square plots (m)</source>
         <translation>Côté des placettes carrées (m)</translation>
     </message>
@@ -2911,7 +1385,7 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
         <translation>Zone d'étude</translation>
     </message>
     <message>
-        <location filename="../scripts/build_models.py" line="72"/>
+        <location filename="../scripts/build_models.py" line="73"/>
         <source>Total number of units</source>
         <translation>Nombre total d'unités</translation>
     </message>
@@ -2944,458 +1418,152 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="66"/>
+        <location filename="../processing/algorithms/layout.py" line="42"/>
         <source>Lay out sample units</source>
         <translation>Disposer les unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="72"/>
-        <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
-
-Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
-
-Designs:
-• Simple random: independent points, uniform over the stratum (triangles chosen by area, then a point within; Turk 1990).
-• Systematic grid: a square grid of spacing √(A/n) with a random start; with bearing −1 the grid also gets a random rotation, otherwise it is turned to the bearing. The realised number of units varies around n and is reported.
-• Spatially balanced: balanced acceptance sampling on a Halton sequence (Robertson et al. 2013). Every leading part of the draw order is itself spread evenly, so reserves are the next points of the same sequence. The start is a uniform random point of the stratum, which keeps inclusion equal for any sample size.
-
-Shapes: point station (size: optional counting radius, m), square plot (size: side, m), circular plot (size: radius, m), line transect (size: length, m; centred on the drawn point). Bearing in degrees clockwise from grid north, or −1 for a random bearing per unit.
-Keep units inside: centres are drawn from the stratum shrunk by the unit's circumscribing radius, so every unit lies wholly inside its stratum; the shrunk (effective) area is reported and used for the inclusion probabilities.
-Minimum spacing (m) between the centres of all units, primaries and reserves, over the whole layout.
-Reserves: extra units per stratum, role = reserve, in draw order. Replacement rule: a primary unit that cannot be surveyed is replaced by the next unused reserve of the same stratum.
-
-Output fields: unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A; for transects and points without a radius the inclusion density n/A per m²), weight = 1/incl_p, lon/lat (WGS 84), and an empty count field for the field teams. The GPX file holds one waypoint per unit (a start and an end waypoint per transect), named by unit_id.
-
-Strata must not overlap: an overlap of more than 0.1 % of the smaller stratum is an error, a smaller one a warning. Features under 1 m² (slivers) are skipped, with a warning.
-
-A frame in geographic coordinates is projected to the UTM zone of its centre. Check every unit's access and safety before fieldwork: the tool never makes a location safe.</source>
-        <translation type="obsolete">Tire les unités d'échantillonnage d'un inventaire sur une base de sondage, strate par strate (une strate par valeur du champ de strate ; sans lui, la base forme une seule strate).
-
-Unités par strate : le champ d'unités (par exemple n_alloc de l'étape d'allocation ; le même nombre entier sur chaque entité d'une strate), sinon le total réparti proportionnellement à la surface avec au moins 2 par strate.
-
-Plans :
-• Aléatoire simple : points indépendants, uniformes sur la strate (triangles choisis selon leur surface, puis un point à l'intérieur ; Turk 1990).
-• Grille systématique : une grille carrée de pas √(A/n) avec un départ aléatoire ; avec un azimut de −1 la grille reçoit aussi une rotation aléatoire, sinon elle est orientée selon l'azimut. Le nombre d'unités obtenu varie autour de n et il est indiqué.
-• Spatialement équilibré : échantillonnage par acceptation équilibrée sur une suite de Halton (Robertson et al. 2013). Chaque début de l'ordre de tirage est lui-même réparti uniformément, si bien que les réserves sont les points suivants de la même suite. Le départ est un point aléatoire uniforme de la strate, ce qui garde l'inclusion égale pour toute taille d'échantillon.
-
-Formes : station ponctuelle (taille : rayon de comptage facultatif, m), placette carrée (taille : côté, m), placette circulaire (taille : rayon, m), transect linéaire (taille : longueur, m ; centré sur le point tiré). Azimut en degrés dans le sens horaire depuis le nord de la grille, ou −1 pour un azimut aléatoire par unité.
-Garder les unités à l'intérieur : les centres sont tirés dans la strate réduite du rayon circonscrit de l'unité, si bien que chaque unité est entièrement dans sa strate ; la surface réduite (effective) est indiquée et utilisée pour les probabilités d'inclusion.
-Espacement minimal (m) entre les centres de toutes les unités, principales et de réserve, sur toute la disposition.
-Réserves : unités supplémentaires par strate, role = reserve, dans l'ordre de tirage. Règle de remplacement : une unité principale qui ne peut pas être inventoriée est remplacée par la réserve suivante non utilisée de la même strate.
-
-Champs de sortie : unit_id, stratum, role, draw_ord, area_m2, incl_p (n·a/A ; pour les transects et les points sans rayon, la densité d'inclusion n/A par m²), weight = 1/incl_p, lon/lat (WGS 84), et un champ count vide pour les équipes de terrain. Le fichier GPX contient un point de passage par unité (un point de début et un de fin par transect), nommé par unit_id.
-
-Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de la plus petite strate est une erreur, un plus petit un avertissement. Les entités de moins de 1 m² (liserés) sont écartées, avec un avertissement.
-
-Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="113"/>
+        <location filename="../processing/algorithms/layout.py" line="89"/>
         <source>Sampling frame or strata</source>
         <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="116"/>
+        <location filename="../processing/algorithms/layout.py" line="93"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="122"/>
+        <location filename="../processing/algorithms/layout.py" line="99"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="128"/>
+        <location filename="../processing/algorithms/layout.py" line="105"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Nombre total d'unités (sans champ d'unités)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Design</source>
         <translation>Plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Simple random</source>
         <translation>Aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="134"/>
+        <location filename="../processing/algorithms/layout.py" line="111"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Unit shape</source>
         <translation>Forme de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Point station</source>
         <translation>Station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Square plot</source>
         <translation>Placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Circular plot</source>
         <translation>Placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="140"/>
+        <location filename="../processing/algorithms/layout.py" line="117"/>
         <source>Line transect</source>
         <translation>Transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="147"/>
+        <location filename="../processing/algorithms/layout.py" line="124"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="153"/>
+        <location filename="../processing/algorithms/layout.py" line="130"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="154"/>
-        <source>Keep every unit wholly inside its stratum</source>
-        <translation type="obsolete">Garder chaque unité entièrement dans sa strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="164"/>
+        <location filename="../processing/algorithms/layout.py" line="141"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="170"/>
+        <location filename="../processing/algorithms/layout.py" line="147"/>
         <source>Reserve units per stratum</source>
         <translation>Unités de réserve par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="176"/>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="177"/>
+        <location filename="../processing/algorithms/layout.py" line="155"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="177"/>
+        <location filename="../processing/algorithms/layout.py" line="155"/>
         <source>GPX files (*.gpx)</source>
         <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="196"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="223"/>
-        <source>Give a units-per-stratum field (N_FIELD) or a total number of units (N_UNITS) of at least 1.</source>
-        <translation type="obsolete">Donnez un champ d'unités par strate (N_FIELD) ou un nombre total d'unités (N_UNITS) d'au moins 1.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="213"/>
+        <location filename="../processing/algorithms/layout.py" line="219"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="213"/>
+        <location filename="../processing/algorithms/layout.py" line="219"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="228"/>
+        <location filename="../processing/algorithms/layout.py" line="236"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="232"/>
+        <location filename="../processing/algorithms/layout.py" line="240"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="279"/>
+        <location filename="../processing/algorithms/layout.py" line="267"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="245"/>
+        <location filename="../processing/algorithms/layout.py" line="193"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="283"/>
+        <location filename="../processing/algorithms/layout.py" line="271"/>
         <source>the frame</source>
         <translation>la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="283"/>
+        <location filename="../processing/algorithms/layout.py" line="271"/>
         <source>stratum {key}</source>
         <translation>strate {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="325"/>
-        <source>Sample-unit layout</source>
-        <translation>Disposition des unités d'échantillonnage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="441"/>
-        <source>primary units</source>
-        <translation>unités principales</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="441"/>
-        <source>reserve units</source>
-        <translation>unités de réserve</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="329"/>
-        <source>strata</source>
-        <translation>strates</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="329"/>
-        <source>design</source>
-        <translation>plan</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="335"/>
-        <source>Replacing units in the field</source>
-        <translation>Remplacer des unités sur le terrain</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="336"/>
-        <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
-        <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="342"/>
-        <source>Units per stratum</source>
-        <translation>Unités par strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Stratum</source>
-        <translation>Strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Area (ha)</source>
-        <translation>Surface (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Effective area (ha)</source>
-        <translation>Surface effective (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Units asked</source>
-        <translation>Unités demandées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="344"/>
-        <source>Primary</source>
-        <translation>Principales</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="345"/>
-        <source>Reserve</source>
-        <translation>Réserves</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="345"/>
-        <source>incl_p</source>
-        <translation>incl_p</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="345"/>
-        <source>weight</source>
-        <translation>weight</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="347"/>
-        <source>Grid spacing (m)</source>
-        <translation>Pas de la grille (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="347"/>
-        <source>Grid rotation (°)</source>
-        <translation>Rotation de la grille (°)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="350"/>
-        <source>frame</source>
-        <translation>base de sondage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="357"/>
-        <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
-        <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="357"/>
-        <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
-        <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="373"/>
-        <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
-        <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="380"/>
-        <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
-        <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="384"/>
-        <source>Map</source>
-        <translation>Carte</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="385"/>
-        <source>Strata (filled), primary units (dark) and reserve units (light)</source>
-        <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="386"/>
-        <source>Method</source>
-        <translation>Méthode</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="390"/>
-        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
-        <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Frame (FRAME)</source>
-        <translation>Base de sondage (FRAME)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Stratum field (STRATUM_FIELD)</source>
-        <translation>Champ de strate (STRATUM_FIELD)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>(none: one stratum)</source>
-        <translation>(aucun : une seule strate)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Units per stratum field (N_FIELD)</source>
-        <translation>Champ d'unités par strate (N_FIELD)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>(none)</source>
-        <translation>(aucun)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Total units (N_UNITS)</source>
-        <translation>Total d'unités (N_UNITS)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>(not used)</source>
-        <translation>(non utilisé)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Design (DESIGN)</source>
-        <translation>Plan (DESIGN)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Unit shape (SHAPE)</source>
-        <translation>Forme de l'unité (SHAPE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Unit size (SIZE, m)</source>
-        <translation>Taille de l'unité (SIZE, m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Bearing (BEARING, degrees)</source>
-        <translation>Azimut (BEARING, degrés)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>random</source>
-        <translation>aléatoire</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Keep inside (INSIDE)</source>
-        <translation>Garder à l'intérieur (INSIDE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>yes</source>
-        <translation>oui</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>no</source>
-        <translation>non</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Minimum spacing (MIN_SPACING, m)</source>
-        <translation>Espacement minimal (MIN_SPACING, m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Reserves per stratum (RESERVE)</source>
-        <translation>Réserves par strate (RESERVE)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>Seed (SEED)</source>
-        <translation>Graine (SEED)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="391"/>
-        <source>CRS of the computation and the output</source>
-        <translation>SCR du calcul et de la sortie</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="411"/>
-        <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
-        <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="413"/>
-        <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
-        <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="415"/>
-        <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
-        <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="422"/>
-        <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
-        <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="69"/>
+        <location filename="../processing/algorithms/layout.py" line="45"/>
         <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -3436,14 +1604,9 @@ Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de 
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="159"/>
+        <location filename="../processing/algorithms/layout.py" line="136"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
         <translation>Garder chaque unité entièrement dans sa strate (désactivé : échantillonnage « plus »)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/layout.py" line="363"/>
-        <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
-        <translation>Échantillonnage « plus » : les centres ont été tirés sur chaque strate agrandie de {r} m (la portée de l'unité), si bien que les unités proches du bord le dépassent, et certains centres sont hors de leur strate. N'inventoriez que la partie de chaque unité située dans sa propre strate et ne comptez que les animaux qui s'y trouvent (la carte montre les strates) ; une unité qui n'atteint aucune partie de sa strate compte 0. Ne pénétrez jamais dans un terrain exclu ou dangereux pour atteindre un centre : inventoriez la partie située dans la strate depuis l'intérieur de celle-ci. La surface effective est la surface agrandie, et plotwise:estimate y étend les comptages (Gregoire &amp; Valentine 2008, ch. 10).</translation>
     </message>
 </context>
 <context>
@@ -3609,11 +1772,6 @@ Les conseils pour le plan d'échantillonnage entraînent davantage de travail de
         <translation>Valeur p du test d'adéquation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/occupancy.py" line="137"/>
-        <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Choose existing fields.</source>
-        <translation type="obsolete">La couche « {layer} » n'a pas de champ {fields} ({param}). Choisissez des champs existants.</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/occupancy.py" line="155"/>
         <source>Layer &apos;{layer}&apos; has no features.</source>
         <translation>La couche « {layer} » n'a aucune entité.</translation>
@@ -3761,57 +1919,57 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
 <context>
     <name>PlotwiseAlgorithm</name>
     <message>
-        <location filename="../processing/algorithms/base.py" line="25"/>
+        <location filename="../processing/algorithms/base.py" line="26"/>
         <source>Survey design</source>
         <translation>Conception de l'inventaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="26"/>
+        <location filename="../processing/algorithms/base.py" line="27"/>
         <source>Estimation</source>
         <translation>Estimation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="27"/>
+        <location filename="../processing/algorithms/base.py" line="28"/>
         <source>Demo and training</source>
         <translation>Démonstration et formation</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="69"/>
+        <location filename="../processing/algorithms/base.py" line="70"/>
         <source>Random seed (0 draws one and records it)</source>
         <translation>Graine aléatoire (0 en tire une et l'enregistre)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="81"/>
+        <location filename="../processing/algorithms/base.py" line="82"/>
         <source>Report (HTML)</source>
         <translation>Rapport (HTML)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="81"/>
+        <location filename="../processing/algorithms/base.py" line="82"/>
         <source>HTML files (*.html)</source>
         <translation>Fichiers HTML (*.html)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="96"/>
+        <location filename="../processing/algorithms/base.py" line="97"/>
         <source>Seed used: {seed}</source>
         <translation>Graine utilisée : {seed}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="122"/>
+        <location filename="../processing/algorithms/base.py" line="123"/>
         <source>Cancelled by the user. No result was written.</source>
         <translation>Annulé par l'utilisateur. Aucun résultat n'a été écrit.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="210"/>
+        <location filename="../processing/algorithms/base.py" line="212"/>
         <source>Report written to {path}</source>
         <translation>Rapport écrit dans {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="154"/>
+        <location filename="../processing/algorithms/base.py" line="155"/>
         <source>Layer &apos;{layer}&apos; has no field {fields} ({param}). Its fields are: {available}. Choose one of them.</source>
         <translation>La couche « {layer} » n'a pas de champ {fields} ({param}). Ses champs sont : {available}. Choisissez-en un.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/base.py" line="162"/>
+        <location filename="../processing/algorithms/base.py" line="163"/>
         <source>Choose a field of layer &apos;{layer}&apos; for {param}. Its fields are: {available}.</source>
         <translation>Choisissez un champ de la couche « {layer} » pour {param}. Ses champs sont : {available}.</translation>
     </message>
@@ -3829,42 +1987,37 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="118"/>
+        <location filename="../processing/bridge.py" line="125"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="415"/>
+        <location filename="../processing/bridge.py" line="422"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="166"/>
+        <location filename="../processing/bridge.py" line="173"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="172"/>
+        <location filename="../processing/bridge.py" line="179"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="182"/>
-        <source> and {n} more</source>
-        <translation type="obsolete"> et {n} autres</translation>
-    </message>
-    <message>
-        <location filename="../processing/bridge.py" line="342"/>
+        <location filename="../processing/bridge.py" line="349"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="371"/>
+        <location filename="../processing/bridge.py" line="378"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="377"/>
+        <location filename="../processing/bridge.py" line="384"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
@@ -3890,11 +2043,6 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <location filename="../processing/engine/allocation.py" line="53"/>
         <source>cost per unit</source>
         <translation>coût par unité</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/occupancy.py" line="76"/>
-        <source>{shown} and {more} more</source>
-        <translation type="obsolete">{shown} et {more} autres</translation>
     </message>
     <message>
         <location filename="../processing/engine/allocation.py" line="433"/>
@@ -4032,17 +2180,17 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Valeur nulle ({name}) dans la ou les entités de strate {shown} : leur CV n'est pas défini.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="780"/>
+        <location filename="../processing/engine/allocation.py" line="782"/>
         <source>A target CV needs both the pilot standard deviation and the pilot mean count per unit: choose the SD field and the mean field.</source>
         <translation>Un CV cible a besoin de l'écart-type pilote et du comptage moyen pilote par unité : choisissez le champ d'écart-type et le champ de moyenne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="786"/>
+        <location filename="../processing/engine/allocation.py" line="788"/>
         <source>The {name} is zero in every stratum: no CV can be computed.</source>
         <translation>Valeur nulle ({name}) dans toutes les strates : aucun CV ne peut être calculé.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/allocation.py" line="797"/>
+        <location filename="../processing/engine/allocation.py" line="799"/>
         <source>The target CV of {target_cv:.3g} cannot be reached: even all {fit} units that fit give an expected CV of {cv:.3g}. Accept a CV of at least {cv:.3g}, or use smaller units.</source>
         <translation>Le CV cible de {target_cv:.3g} ne peut pas être atteint : même les {fit} unités qui tiennent donnent un CV attendu de {cv:.3g}. Acceptez un CV d'au moins {cv:.3g}, ou utilisez des unités plus petites.</translation>
     </message>
@@ -4067,12 +2215,12 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>La probabilité de détection doit être dans ]0, 1] (reçu {detection:g}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/demo_reserve.py" line="108"/>
+        <location filename="../processing/engine/demo_reserve.py" line="109"/>
         <source>Could not place the demo lake; try another seed.</source>
         <translation>Impossible de placer le lac de démonstration ; essayez une autre graine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/demo_reserve.py" line="184"/>
+        <location filename="../processing/engine/demo_reserve.py" line="235"/>
         <source>The cell size must be between 10 and 500 m (got {cell_size:g} m).</source>
         <translation>La taille de cellule doit être comprise entre 10 et 500 m (reçu {cell_size:g} m).</translation>
     </message>
@@ -4197,11 +2345,6 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>stratifié proportionnel</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="84"/>
-        <source>stratified Neyman</source>
-        <translation type="obsolete">stratifié Neyman</translation>
-    </message>
-    <message>
         <location filename="../processing/engine/layout.py" line="76"/>
         <source>systematic grid</source>
         <translation>grille systématique</translation>
@@ -4220,16 +2363,6 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <location filename="../processing/engine/design_comparison.py" line="939"/>
         <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
         <translation>Chaque inventaire simulé compterait environ {millions:.0f} millions de cellules de la surface ({units} unités de {unit_area:,.0f} m² sur des cellules de {cell_width:g} m), trop pour être simulé. Rééchantillonnez la surface en cellules plus grossières, ou comparez moins de plans ou d'unités.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/design_comparison.py" line="1080"/>
-        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of their stratum count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units, or fewer and more compact strata, reduce it.</source>
-        <translation type="obsolete">{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de leur strate ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites, ou des strates moins nombreuses et plus compactes, le réduisent.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/design_comparison.py" line="1080"/>
-        <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units near the edge of the frame count only the part inside it (or, kept inside, never reach the edge), so edge areas weigh less in the estimate; where their density differs from the interior, the estimate is biased. Smaller units reduce it.</source>
-        <translation type="obsolete">{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités proches du bord de la base de sondage ne comptent que la partie intérieure (ou, gardées à l'intérieur, n'atteignent jamais le bord), si bien que les zones de bord pèsent moins dans l'estimation ; là où leur densité diffère de l'intérieur, l'estimation est biaisée. Des unités plus petites le réduisent.</translation>
     </message>
     <message>
         <location filename="../processing/engine/design_comparison.py" line="1223"/>
@@ -4362,11 +2495,6 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Aucune unité n'a de comptage : rien ne peut être estimé. Saisissez les comptages des unités inventoriées (0 si rien n'a été vu) dans le champ de comptage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="702"/>
-        <source>Units {ids} have no positive surveyed area. Give a unit area field with values above 0, or a fixed unit area for points and lines.</source>
-        <translation type="obsolete">Les unités {ids} n'ont pas de surface inventoriée positive. Donnez un champ de surface d'unité avec des valeurs supérieures à 0, ou une surface d'unité fixe pour les points et les lignes.</translation>
-    </message>
-    <message>
         <location filename="../processing/engine/estimation.py" line="812"/>
         <source>Presence data must be 0 or 1; units {ids} hold other values. Use the counts without the presence option, or recode the field.</source>
         <translation>Les données de présence doivent valoir 0 ou 1 ; les unités {ids} contiennent d'autres valeurs. Utilisez les comptages sans l'option de présence, ou recodez le champ.</translation>
@@ -4402,39 +2530,14 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Dans les strates {ids}, la surface inventoriée dépasse la surface de la strate. Vérifiez les surfaces des unités et l'unité de surface, ou désactivez la correction de population finie.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="835"/>
-        <source>{label} (one unit) collapsed with {others}</source>
-        <translation type="obsolete">{label} (une unité) regroupée avec {others}</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="842"/>
-        <source>Strata {groups}: their variance comes from the collapsed-strata estimator (Cochran 1977, §5A.12), which counts differences between the collapsed strata as variance and so tends to be too large.</source>
-        <translation type="obsolete">Strates {groups} : leur variance vient de l'estimateur des strates regroupées (Cochran 1977, §5A.12), qui compte les différences entre strates regroupées comme de la variance et tend donc à être trop grande.</translation>
-    </message>
-    <message>
         <location filename="../processing/engine/estimation.py" line="1074"/>
         <source>The only stratum has one surveyed unit: no variance, standard error or interval can be estimated. Survey at least two units.</source>
         <translation>La seule strate n'a qu'une unité inventoriée : aucune variance, erreur type ou intervalle ne peut être estimé. Inventoriez au moins deux unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="863"/>
-        <source>Strata {ids} have fewer than 3 units or were collapsed: their variance uses the simple random sampling formula.</source>
-        <translation type="obsolete">Les strates {ids} ont moins de 3 unités ou ont été regroupées : leur variance utilise la formule de l'échantillonnage aléatoire simple.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="1438"/>
+        <location filename="../processing/engine/estimation.py" line="1420"/>
         <source>The bootstrap needs a random generator (rng).</source>
         <translation>Le bootstrap a besoin d'un générateur aléatoire (rng).</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="932"/>
-        <source>No animal was counted in any surveyed unit: the estimate is 0 and its CV undefined.</source>
-        <translation type="obsolete">Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0 et son CV n'est pas défini.</translation>
-    </message>
-    <message>
-        <location filename="../processing/engine/estimation.py" line="936"/>
-        <source>In strata {ids} every surveyed unit counted 0: their standard error is 0, which understates the uncertainty (the species may be present but rare there).</source>
-        <translation type="obsolete">Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur erreur type vaut 0, ce qui sous-estime l'incertitude (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
         <location filename="../processing/engine/estimation.py" line="1203"/>
@@ -4447,27 +2550,27 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Aucune variation n'a été observée : les tailles d'échantillon du prochain inventaire sont fixées au minimum de 2 par strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="223"/>
+        <location filename="../processing/engine/frame.py" line="257"/>
         <source>EDGE_BUFFER is {edge_buffer} m; it must be zero or a positive distance in metres.</source>
         <translation>EDGE_BUFFER vaut {edge_buffer} m ; il doit être nul ou une distance positive en mètres.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="230"/>
+        <location filename="../processing/engine/frame.py" line="264"/>
         <source>The study area (INPUT) has no polygon with a positive area. Check that the layer holds polygons and is in a projected CRS in metres.</source>
         <translation>La zone d'étude (INPUT) n'a aucun polygone de surface positive. Vérifiez que la couche contient des polygones et qu'elle est dans un SCR projeté en mètres.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="278"/>
+        <location filename="../processing/engine/frame.py" line="298"/>
         <source>Nothing is left of the study area (INPUT) after removing the excluded polygons (EXCLUDE): they cover all {hectares:.4g} ha. Check that EXCLUDE holds only the areas to leave out.</source>
         <translation>Il ne reste rien de la zone d'étude (INPUT) après retrait des polygones exclus (EXCLUDE) : ils en couvrent la totalité, {hectares:.4g} ha. Vérifiez qu'EXCLUDE ne contient que les zones à écarter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="284"/>
+        <location filename="../processing/engine/frame.py" line="304"/>
         <source>Nothing is left of the frame after the raster mask (MASK): every cell over the remaining {hectares:.4g} ha is outside [MASK_MIN, MASK_MAX] or NoData. Widen the range, check the raster&apos;s units, or check that the raster covers the study area.</source>
         <translation>Il ne reste rien de la base de sondage après le masque raster (MASK) : chaque cellule des {hectares:.4g} ha restants est hors de [MASK_MIN, MASK_MAX] ou NoData. Élargissez l'intervalle, vérifiez les unités du raster, ou vérifiez que le raster couvre la zone d'étude.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/frame.py" line="291"/>
+        <location filename="../processing/engine/frame.py" line="311"/>
         <source>Nothing is left of the frame after the inward edge buffer (EDGE_BUFFER = {edge_buffer:g} m): the remaining {hectares:.4g} ha all lie within that distance of the study area&apos;s boundary (study area extent {width:.0f} m x {height:.0f} m). Use a smaller EDGE_BUFFER.</source>
         <translation>Il ne reste rien de la base de sondage après la zone tampon intérieure (EDGE_BUFFER = {edge_buffer:g} m) : les {hectares:.4g} ha restants se trouvent tous à moins de cette distance de la limite de la zone d'étude (emprise de la zone d'étude {width:.0f} m x {height:.0f} m). Utilisez un EDGE_BUFFER plus petit.</translation>
     </message>
@@ -4622,97 +2725,97 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>La strate {key} est trop petite pour une unité linéaire de SIZE {size:g} m entièrement à l'intérieur : aucun point n'est à {radius:.1f} m ou plus de son bord (entités {ids}). Utilisez un SIZE plus petit, décochez INSIDE, ou fusionnez la strate avec une voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="667"/>
+        <location filename="../processing/engine/layout.py" line="668"/>
         <source>Keeping units inside leaves {share:.0%} of the frame (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Garder les unités à l'intérieur laisse {share:.0%} de la base de sondage (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="667"/>
+        <location filename="../processing/engine/layout.py" line="668"/>
         <source>Keeping units inside leaves {share:.0%} of stratum {key} (the band within {radius:g} m of its edge) where no unit centre can fall; the estimate carries the inner part&apos;s density over that band. If density differs near edges, turn INSIDE off or use smaller units.</source>
         <translation>Garder les unités à l'intérieur laisse {share:.0%} de la strate {key} (la bande à moins de {radius:g} m de son bord) où aucun centre d'unité ne peut tomber ; l'estimation étend la densité de la partie intérieure à cette bande. Si la densité diffère près des bords, désactivez INSIDE ou utilisez des unités plus petites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="678"/>
+        <location filename="../processing/engine/layout.py" line="679"/>
         <source>The frame gets no units; the estimate cannot speak for it.</source>
         <translation>La base de sondage ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="678"/>
+        <location filename="../processing/engine/layout.py" line="679"/>
         <source>Stratum {key} gets no units; the estimate cannot speak for it.</source>
         <translation>La strate {key} ne reçoit aucune unité ; l'estimation ne peut pas la représenter.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="683"/>
+        <location filename="../processing/engine/layout.py" line="684"/>
         <source>The frame gets one unit only; its variance cannot be estimated.</source>
         <translation>La base de sondage ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="683"/>
+        <location filename="../processing/engine/layout.py" line="684"/>
         <source>Stratum {key} gets one unit only; its variance cannot be estimated.</source>
         <translation>La strate {key} ne reçoit qu'une unité ; sa variance ne peut pas être estimée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="771"/>
+        <location filename="../processing/engine/layout.py" line="772"/>
         <source>Strata overlap ({pairs}): a location belongs to one stratum only, and units in a shared area would be drawn in both strata and weighted twice. Make the strata polygons disjoint (for example with the host&apos;s Difference or Union tools) and run again.</source>
         <translation>Des strates se chevauchent ({pairs}) : un lieu n'appartient qu'à une strate, et les unités d'une zone commune seraient tirées dans les deux strates et pondérées deux fois. Rendez les polygones des strates disjoints (par exemple avec les outils Différence ou Union de l'hôte) et relancez.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="775"/>
+        <location filename="../processing/engine/layout.py" line="776"/>
         <source>Strata overlap slightly ({pairs}); units there belong to both. Make the strata polygons disjoint if this is more than digitising noise.</source>
         <translation>Des strates se chevauchent légèrement ({pairs}) ; les unités qui s'y trouvent appartiennent aux deux. Rendez les polygones des strates disjoints si ce n'est pas qu'une imprécision de numérisation.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="861"/>
+        <location filename="../processing/engine/layout.py" line="862"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in the frame: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la base de sondage : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="861"/>
+        <location filename="../processing/engine/layout.py" line="862"/>
         <source>MIN_SPACING = {spacing:g} m cannot be met in stratum {key}: {wanted} units were asked for (primaries and reserves), the draw placed {placed}, and at most about {fit} units fit at that spacing (a hexagonal lattice, the densest arrangement; random layouts fill up well before that). Ask for fewer units or reserves, or lower MIN_SPACING.</source>
         <translation>MIN_SPACING = {spacing:g} m ne peut pas être respecté dans la strate {key} : {wanted} unités étaient demandées (principales et de réserve), le tirage en a placé {placed}, et au plus environ {fit} unités tiennent à cet espacement (un réseau hexagonal, l'arrangement le plus dense ; les dispositions aléatoires se remplissent bien avant). Demandez moins d'unités ou de réserves, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="963"/>
+        <location filename="../processing/engine/layout.py" line="964"/>
         <source>A systematic grid of spacing {spacing:.3g} m over an area of {area:,.1f} m² that spreads over {width:,.0f} m x {height:,.0f} m would need {count:,} candidate points. The area is a thin sliver or far too small for the number of units: check the frame for slivers, ask for fewer units, or use another design.</source>
         <translation>Une grille systématique de pas {spacing:.3g} m sur une surface de {area:,.1f} m² étalée sur {width:,.0f} m x {height:,.0f} m demanderait {count:,} points candidats. La surface est un liseré ou bien trop petite pour le nombre d'unités : cherchez les liserés dans la base de sondage, demandez moins d'unités ou choisissez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1009"/>
+        <location filename="../processing/engine/layout.py" line="1010"/>
         <source>The grid spacing for {n} units in the frame would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>L'espacement de grille pour {n} unités dans la base de sondage serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1009"/>
+        <location filename="../processing/engine/layout.py" line="1010"/>
         <source>The grid spacing for {n} units in stratum {key} would be {spacing:.1f} m, below MIN_SPACING = {min_spacing:g} m. A square grid at {min_spacing:g} m holds about {fit} units there: ask for at most that many, or lower MIN_SPACING.</source>
         <translation>L'espacement de grille pour {n} unités dans la strate {key} serait de {spacing:.1f} m, sous MIN_SPACING = {min_spacing:g} m. Une grille carrée à {min_spacing:g} m y contient environ {fit} unités : demandez-en au plus autant, ou baissez MIN_SPACING.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1028"/>
+        <location filename="../processing/engine/layout.py" line="1029"/>
         <source>{n} grid unit(s) of the frame were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>{n} unité(s) de grille de la base de sondage ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1028"/>
+        <location filename="../processing/engine/layout.py" line="1029"/>
         <source>{n} grid unit(s) of stratum {key} were dropped: closer than MIN_SPACING to units of a neighbouring stratum.</source>
         <translation>{n} unité(s) de grille de la strate {key} ont été retirées : plus proches que MIN_SPACING d'unités d'une strate voisine.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1040"/>
+        <location filename="../processing/engine/layout.py" line="1041"/>
         <source>No grid point fell in the frame (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Aucun point de grille n'est tombé dans la base de sondage (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1040"/>
+        <location filename="../processing/engine/layout.py" line="1041"/>
         <source>No grid point fell in stratum {key} (spacing {spacing:.1f} m); it gets no units. Use the simple random or spatially balanced design for small or thin strata.</source>
         <translation>Aucun point de grille n'est tombé dans la strate {key} (espacement {spacing:.1f} m) ; elle ne reçoit aucune unité. Utilisez le plan aléatoire simple ou spatialement équilibré pour les strates petites ou étroites.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1049"/>
+        <location filename="../processing/engine/layout.py" line="1050"/>
         <source>The frame has only {n} of {r} reserve units.</source>
         <translation>La base de sondage n'a que {n} des {r} unités de réserve.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/layout.py" line="1049"/>
+        <location filename="../processing/engine/layout.py" line="1050"/>
         <source>Stratum {key} has only {n} of {r} reserve units.</source>
         <translation>La strate {key} n'a que {n} des {r} unités de réserve.</translation>
     </message>
@@ -5307,7 +3410,7 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). L'échantillonnage « plus » est sans biais : la cause probable est donc l'estimateur par le ratio avec très peu d'animaux par unité, ou une grille systématique dont le nombre réalisé d'unités varie avec la surface ; davantage d'unités le réduisent.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="244"/>
+        <location filename="../processing/engine/distance_density.py" line="246"/>
         <source>The survey type must be &apos;line&apos; or &apos;point&apos; (got &apos;{survey}&apos;).</source>
         <translation>Le type d'inventaire doit être 'line' ou 'point' (reçu '{survey}').</translation>
     </message>
@@ -5372,117 +3475,117 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Couche « {layer} » : les identifiants d'unité {ids} apparaissent plus d'une fois dans le champ « {field} ». Chaque unité demande son propre identifiant.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="126"/>
+        <location filename="../processing/engine/distance_density.py" line="127"/>
         <source>Layer &apos;{layer}&apos;: the transects {ids} have zero length. Delete them or draw their line.</source>
         <translation>Couche « {layer} » : les transects {ids} ont une longueur nulle. Supprimez-les ou tracez leur ligne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="130"/>
+        <location filename="../processing/engine/distance_density.py" line="131"/>
         <source>Layer &apos;{layer}&apos;: the points {ids} have no visits. Give each surveyed point its number of visits (1 or more), or delete the points that were not surveyed.</source>
         <translation>Couche « {layer} » : les points {ids} n'ont aucune visite. Donnez à chaque point inventorié son nombre de visites (1 ou plus), ou supprimez les points qui n'ont pas été inventoriés.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="139"/>
+        <location filename="../processing/engine/distance_density.py" line="140"/>
         <source>Layer &apos;{layer}&apos;: the units {ids} have no stratum, or a stratum that the strata layer does not have ({strata}). Give each unit the id of its stratum.</source>
         <translation>Couche « {layer} » : les unités {ids} n'ont pas de strate, ou une strate que la couche des strates n'a pas ({strata}). Donnez à chaque unité l'identifiant de sa strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="149"/>
+        <location filename="../processing/engine/distance_density.py" line="150"/>
         <source>The strata {strata} have no surveyed transect or point. Survey them, or leave them out of the strata layer (the estimate then speaks for the other strata only).</source>
         <translation>Les strates {strata} n'ont aucun transect ni point inventorié. Inventoriez-les, ou retirez-les de la couche des strates (l'estimation ne porte alors que sur les autres strates).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="156"/>
+        <location filename="../processing/engine/distance_density.py" line="157"/>
         <source>The strata {strata} have one transect or point each; the encounter rate&apos;s variance needs at least 2 per stratum. Merge each with a neighbouring stratum in the strata layer and the units&apos; stratum field.</source>
         <translation>Les strates {strata} n'ont qu'un transect ou un point chacune ; la variance du taux de rencontre en demande au moins 2 par strate. Fusionnez chacune avec une strate voisine dans la couche des strates et dans le champ de strate des unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="177"/>
+        <location filename="../processing/engine/distance_density.py" line="178"/>
         <source>Layer &apos;{layer}&apos;: observations name units that the layer &apos;{units}&apos; does not have (field &apos;{field}&apos;): {ids}. Correct these unit ids, or add the units.</source>
         <translation>Couche « {layer} » : des observations nomment des unités que la couche « {units} » n'a pas (champ « {field} ») : {ids}. Corrigez ces identifiants d'unité, ou ajoutez les unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="185"/>
+        <location filename="../processing/engine/distance_density.py" line="187"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no distance in the field &apos;{field}&apos; (empty or not a number). Fill in the distances, or delete those observations.</source>
         <translation>Couche « {layer} » : les observations {ids} n'ont pas de distance dans le champ « {field} » (vide ou qui n'est pas un nombre). Renseignez les distances, ou supprimez ces observations.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="192"/>
+        <location filename="../processing/engine/distance_density.py" line="194"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have a negative distance in the field &apos;{field}&apos;. Distances are measured from the line or the point outwards and are 0 m or more; correct them.</source>
         <translation>Couche « {layer} » : les observations {ids} ont une distance négative dans le champ « {field} ». Les distances se mesurent depuis la ligne ou le point vers l'extérieur et valent 0 m ou plus ; corrigez-les.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="204"/>
+        <location filename="../processing/engine/distance_density.py" line="206"/>
         <source>Layer &apos;{layer}&apos;: the observations {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill in the number of animals seen in each group (1 for a single animal), or choose no group-size field.</source>
         <translation>Couche « {layer} » : les observations {ids} n'ont pas de taille de groupe supérieure à 0 dans le champ « {field} ». Renseignez le nombre d'animaux vus dans chaque groupe (1 pour un animal seul), ou ne choisissez pas de champ de taille des groupes.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="217"/>
+        <location filename="../processing/engine/distance_density.py" line="219"/>
         <source>The distance bands must start at 0 m and increase, with at least two bands (got {cutpoints}).</source>
         <translation>Les classes de distance doivent commencer à 0 m et croître, avec au moins deux classes (reçu {cutpoints}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="225"/>
+        <location filename="../processing/engine/distance_density.py" line="227"/>
         <source>There are no observations: a detection function needs at least {minimum} detections.</source>
         <translation>Il n'y a aucune observation : une fonction de détection demande au moins {minimum} détections.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="254"/>
+        <location filename="../processing/engine/distance_density.py" line="256"/>
         <source>Only {n} detections lie within the truncation distance of {w:g} m; a detection function needs at least {minimum} (common practice: 60 to 80). Survey more transects or points, or raise the truncation distance.</source>
         <translation>Seules {n} détections se trouvent en deçà de la distance de troncature de {w:g} m ; une fonction de détection en demande au moins {minimum} (pratique courante : 60 à 80). Inventoriez davantage de transects ou de points, ou augmentez la distance de troncature.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="262"/>
+        <location filename="../processing/engine/distance_density.py" line="264"/>
         <source>Only {n} detections lie within the truncation distance: the detection function rests on few distances (common practice asks for 60 to 80), so its shape and the density are uncertain, and AIC may choose a model by chance.</source>
         <translation>Seules {n} détections se trouvent en deçà de la distance de troncature : la fonction de détection repose sur peu de distances (la pratique courante en demande 60 à 80), si bien que sa forme et la densité sont incertaines, et l'AIC peut choisir un modèle par hasard.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="412"/>
+        <location filename="../processing/engine/distance_density.py" line="414"/>
         <source>A detection function per stratum needs at least {minimum} detections in each stratum within the truncation distance; these strata have fewer: {strata}. Use one detection function for all strata.</source>
         <translation>Une fonction de détection par strate demande au moins {minimum} détections dans chaque strate en deçà de la distance de troncature ; ces strates en ont moins : {strata}. Utilisez une seule fonction de détection pour toutes les strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="431"/>
+        <location filename="../processing/engine/distance_density.py" line="433"/>
         <source>Stratum {stratum}: its detection function rests on {n} detections (common practice asks for 60 to 80 per function); consider one function for all strata.</source>
         <translation>Strate {stratum} : sa fonction de détection repose sur {n} détections (la pratique courante en demande 60 à 80 par fonction) ; envisagez une seule fonction pour toutes les strates.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="438"/>
+        <location filename="../processing/engine/distance_density.py" line="442"/>
         <source>The chosen detection function ({model}{at}) fits the distances poorly (goodness-of-fit p = {p:.3f}). Look at the histogram for heaping at round distances or a spike at 0, and consider distance bands or another truncation.</source>
         <translation>La fonction de détection choisie ({model}{at}) s'ajuste mal aux distances (test d'adéquation p = {p:.3f}). Cherchez dans l'histogramme une accumulation sur des distances rondes ou un pic à 0, et envisagez des classes de distance ou une autre troncature.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="445"/>
+        <location filename="../processing/engine/distance_density.py" line="449"/>
         <source>The chosen detection function ({model}) has a parameter at the limit of its range, so its variance is unreliable; try another truncation or key.</source>
         <translation>La fonction de détection choisie ({model}) a un paramètre à la limite de son domaine, si bien que sa variance n'est pas fiable ; essayez une autre troncature ou une autre fonction clé.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="451"/>
+        <location filename="../processing/engine/distance_density.py" line="455"/>
         <source>The variance of the detection function ({model}) could not be computed (the likelihood is flat at its maximum); its CV is missing from the interval.</source>
         <translation>La variance de la fonction de détection ({model}) n'a pas pu être calculée (la vraisemblance est plate à son maximum) ; son CV manque dans l'intervalle.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="656"/>
+        <location filename="../processing/engine/distance_density.py" line="660"/>
         <source>The bootstrap failed: {failed} of {n} resamples could not be fitted. Run without the bootstrap.</source>
         <translation>Le bootstrap a échoué : {failed} des {n} rééchantillonnages n'ont pas pu être ajustés. Relancez sans le bootstrap.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="744"/>
+        <location filename="../processing/engine/distance_density.py" line="748"/>
         <source>Unknown group-size method &apos;{method}&apos;.</source>
         <translation>Méthode de taille des groupes inconnue '{method}'.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="749"/>
+        <location filename="../processing/engine/distance_density.py" line="753"/>
         <source>The confidence level must be between 0.5 and 1 (got {level:g}).</source>
         <translation>Le niveau de confiance doit être compris entre 0.5 et 1 (reçu {level:g}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="766"/>
+        <location filename="../processing/engine/distance_density.py" line="770"/>
         <source>The bootstrap needs a random generator (a seed).</source>
         <translation>Le bootstrap a besoin d'un générateur aléatoire (une graine).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="774"/>
+        <location filename="../processing/engine/distance_density.py" line="778"/>
         <source>{failed} of {n} bootstrap resamples could not be fitted and were left out; the bootstrap interval may be too narrow.</source>
         <translation>{failed} des {n} rééchantillonnages bootstrap n'ont pas pu être ajustés et ont été écartés ; l'intervalle bootstrap est peut-être trop étroit.</translation>
     </message>
@@ -5537,22 +3640,22 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Même toutes les unités possibles de chaque strate ({n:,}) manqueraient le CV cible {target_cv:.3g} : n_next vaut toutes les unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1450"/>
+        <location filename="../processing/engine/estimation.py" line="1432"/>
         <source>The standard error of the detection probability ({se:.3g}) is more than half of p ({p:.3g}): the detection study is too small to correct the counts reliably, and the delta method behind the interval is poor at such a CV. Enlarge the detection study.</source>
         <translation>L'erreur type de la probabilité de détection ({se:.3g}) dépasse la moitié de p ({p:.3g}) : l'étude de détection est trop petite pour corriger les comptages de façon fiable, et la méthode delta sur laquelle repose l'intervalle est médiocre pour un tel CV. Agrandissez l'étude de détection.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1462"/>
+        <location filename="../processing/engine/estimation.py" line="1444"/>
         <source>No animal was counted in any surveyed unit: the estimate is 0, and the interval is the one-sided upper limit {hi:.4g} at {level:.0%} (exact Poisson limit for a count of 0, assuming one density over the frame).</source>
         <translation>Aucun animal n'a été compté dans les unités inventoriées : l'estimation vaut 0, et l'intervalle est la limite supérieure unilatérale {hi:.4g} à {level:.0%} (limite de Poisson exacte pour un comptage de 0, en supposant une seule densité sur la base de sondage).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1470"/>
+        <location filename="../processing/engine/estimation.py" line="1452"/>
         <source>In strata {ids} every surveyed unit counted 0: their interval is the one-sided upper limit of a count of 0 (exact Poisson limit), and their standard error of 0 understates the overall uncertainty (the species may be present but rare there).</source>
         <translation>Dans les strates {ids}, toutes les unités inventoriées ont compté 0 : leur intervalle est la limite supérieure unilatérale d'un comptage de 0 (limite de Poisson exacte), et leur erreur type de 0 sous-estime l'incertitude globale (l'espèce peut y être présente mais rare).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/estimation.py" line="1514"/>
+        <location filename="../processing/engine/estimation.py" line="1496"/>
         <source>In strata {ids} the units record different reaches (reach_m): the largest is used for the plus region.</source>
         <translation>Dans les strates {ids}, les unités enregistrent des portées différentes (reach_m) : la plus grande est utilisée pour la région « plus ».</translation>
     </message>
@@ -5577,7 +3680,7 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Les unités {ids} ne sont ni des points ni des lignes d'une certaine longueur ; les distances simulées demandent des transects linéaires ou des stations ponctuelles.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/distance_density.py" line="437"/>
+        <location filename="../processing/engine/distance_density.py" line="441"/>
         <source>, stratum {stratum}</source>
         <translation>, strate {stratum}</translation>
     </message>
@@ -5876,17 +3979,17 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
 <context>
     <name>PlotwiseReport</name>
     <message>
-        <location filename="../processing/report/html.py" line="120"/>
+        <location filename="../processing/report/layout.py" line="152"/>
         <source>yes</source>
         <translation>oui</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="120"/>
+        <location filename="../processing/report/layout.py" line="152"/>
         <source>no</source>
         <translation>non</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="140"/>
+        <location filename="../processing/report/html.py" line="149"/>
         <source>Inputs and parameters</source>
         <translation>Entrées et paramètres</translation>
     </message>
@@ -5901,17 +4004,17 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Valeur</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="169"/>
+        <location filename="../processing/report/html.py" line="179"/>
         <source>Written</source>
         <translation>Généré le</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="171"/>
+        <location filename="../processing/report/html.py" line="181"/>
         <source>algorithm</source>
         <translation>algorithme</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="174"/>
+        <location filename="../processing/report/html.py" line="184"/>
         <source>Field safety</source>
         <translation>Sécurité sur le terrain</translation>
     </message>
@@ -5921,12 +4024,12 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Vérifiez l'accès à chaque unité et sa sécurité avant d'y envoyer une équipe. Cet outil choisit des emplacements pour des raisons uniquement statistiques : il ne rend jamais un emplacement sûr à atteindre ni sûr pour y travailler. Un terrain escarpé, isolé ou inondé, la faune, la météo et les terrains privés peuvent mettre des personnes en danger. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale, et écartez ou remplacez toute unité qui ne peut pas être atteinte en sécurité (notez-la comme non inventoriée).</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="179"/>
+        <location filename="../processing/report/html.py" line="189"/>
         <source>Warnings</source>
         <translation>Avertissements</translation>
     </message>
     <message>
-        <location filename="../processing/report/html.py" line="184"/>
+        <location filename="../processing/report/html.py" line="194"/>
         <source>Method references</source>
         <translation>Références des méthodes</translation>
     </message>
@@ -6066,7 +4169,7 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Réplicats du test d'adéquation (GOF_REPLICATES)</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="120"/>
+        <location filename="../processing/report/stratify.py" line="263"/>
         <source>Seed (SEED)</source>
         <translation>Graine (SEED)</translation>
     </message>
@@ -6331,7 +4434,7 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>{lo} à {hi}</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="29"/>
+        <location filename="../processing/report/stratify.py" line="232"/>
         <source>grid</source>
         <translation>grille</translation>
     </message>
@@ -6361,12 +4464,12 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Stations de pièges photographiques et d'enregistreurs</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="252"/>
+        <location filename="../processing/report/stations.py" line="241"/>
         <source>primary stations</source>
         <translation>stations principales</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="252"/>
+        <location filename="../processing/report/stations.py" line="241"/>
         <source>reserve stations</source>
         <translation>stations de réserve</translation>
     </message>
@@ -6391,7 +4494,7 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Une station principale qui ne peut pas être installée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par la station de réserve suivante non utilisée de sa strate, dans l'ordre de tirage (draw_ord) ; pour les grappes, une grappe entière est remplacée par la grappe de réserve suivante. Notez la station principale comme non installée et pourquoi ; ne déplacez jamais une station vers un endroit plus commode.</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="87"/>
+        <location filename="../processing/report/stratify.py" line="63"/>
         <source>Map</source>
         <translation>Carte</translation>
     </message>
@@ -6576,7 +4679,7 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="201"/>
+        <location filename="../processing/report/stratify.py" line="95"/>
         <source>Area (ha)</source>
         <translation>Surface (ha)</translation>
     </message>
@@ -6621,12 +4724,12 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>MIN_SPACING = {d} m est respecté entre toutes les stations de la disposition.</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="246"/>
+        <location filename="../processing/report/svg.py" line="200"/>
         <source>the frame</source>
         <translation>la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/report/stations.py" line="247"/>
+        <location filename="../processing/report/svg.py" line="201"/>
         <source>stratum {key}</source>
         <translation>strate {key}</translation>
     </message>
@@ -6651,62 +4754,62 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>optimale avec coût</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="57"/>
+        <location filename="../processing/report/allocate.py" line="49"/>
         <source>Allocation of survey effort</source>
         <translation>Allocation de l'effort d'inventaire</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="59"/>
+        <location filename="../processing/report/allocate.py" line="71"/>
         <source>field days</source>
         <translation>jours de terrain</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="59"/>
+        <location filename="../processing/report/allocate.py" line="72"/>
         <source>cost units</source>
         <translation>unités de coût</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="65"/>
+        <location filename="../processing/report/allocate.py" line="84"/>
         <source>units in total</source>
         <translation>unités au total</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="66"/>
+        <location filename="../processing/report/allocate.py" line="85"/>
         <source>method</source>
         <translation>méthode</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="69"/>
+        <location filename="../processing/report/allocate.py" line="88"/>
         <source>expected CV of the overall density</source>
         <translation>CV attendu de la densité globale</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="71"/>
+        <location filename="../processing/report/allocate.py" line="90"/>
         <source>field days needed</source>
         <translation>jours de terrain nécessaires</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="71"/>
+        <location filename="../processing/report/allocate.py" line="90"/>
         <source>cost</source>
         <translation>coût</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="81"/>
+        <location filename="../processing/report/allocate.py" line="105"/>
         <source>a total number of units</source>
         <translation>un nombre total d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="82"/>
+        <location filename="../processing/report/allocate.py" line="106"/>
         <source>a budget</source>
         <translation>un budget</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="83"/>
+        <location filename="../processing/report/allocate.py" line="107"/>
         <source>a target CV</source>
         <translation>un CV cible</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Strata layer</source>
         <translation>Couche des strates</translation>
     </message>
@@ -6716,72 +4819,72 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>SCR de calcul</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Method asked for</source>
         <translation>Méthode demandée</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Method applied</source>
         <translation>Méthode appliquée</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Target</source>
         <translation>Objectif</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Total asked for</source>
         <translation>Total demandé</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Budget</source>
         <translation>Budget</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Target CV</source>
         <translation>CV cible</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Unit area (m²)</source>
         <translation>Surface d'une unité (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Minimum units per stratum</source>
         <translation>Nombre minimal d'unités par strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>SD field</source>
         <translation>Champ d'écart-type</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="111"/>
         <source> (covariate proxy)</source>
         <translation> (substitut par la covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Mean field</source>
         <translation>Champ de moyenne</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Cost field</source>
         <translation>Champ de coût</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Fixed cost c0</source>
         <translation>Coût fixe c0</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="85"/>
+        <location filename="../processing/report/allocate.py" line="114"/>
         <source>Layout to come</source>
         <translation>Disposition prévue</translation>
     </message>
@@ -6791,107 +4894,107 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Correction pour population finie</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="119"/>
+        <location filename="../processing/report/layout.py" line="93"/>
         <source>Units per stratum</source>
         <translation>Unités par strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="120"/>
+        <location filename="../processing/report/allocate.py" line="77"/>
         <source>SE of mean per unit (covariate units)</source>
         <translation>Erreur type de la moyenne par unité (unités de la covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="120"/>
+        <location filename="../processing/report/allocate.py" line="78"/>
         <source>SE of mean count per unit</source>
         <translation>Erreur type du comptage moyen par unité</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="127"/>
+        <location filename="../processing/report/allocate.py" line="147"/>
         <source>Units that fit</source>
         <translation>Unités qui y tiennent</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="128"/>
+        <location filename="../processing/report/allocate.py" line="148"/>
         <source>Lower bound</source>
         <translation>Borne inférieure</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="129"/>
+        <location filename="../processing/report/allocate.py" line="149"/>
         <source>Share before rounding</source>
         <translation>Part avant arrondi</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="130"/>
+        <location filename="../processing/report/allocate.py" line="150"/>
         <source>Units (n_alloc)</source>
         <translation>Unités (n_alloc)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="131"/>
+        <location filename="../processing/report/allocate.py" line="151"/>
         <source>Sampling fraction</source>
         <translation>Fraction d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="136"/>
+        <location filename="../processing/report/allocate.py" line="156"/>
         <source>SE of density (per km²)</source>
         <translation>Erreur type de la densité (par km²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="138"/>
+        <location filename="../processing/report/allocate.py" line="158"/>
         <source>Expected CV (exp_cv)</source>
         <translation>CV attendu (exp_cv)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="380"/>
+        <location filename="../processing/report/estimate.py" line="385"/>
         <source>all strata</source>
         <translation>toutes les strates</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="172"/>
+        <location filename="../processing/report/allocate.py" line="54"/>
         <source>units per stratum</source>
         <translation>unités par strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="172"/>
+        <location filename="../processing/report/allocate.py" line="54"/>
         <source>Units allocated to each stratum</source>
         <translation>Unités allouées à chaque strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="196"/>
+        <location filename="../processing/report/allocate.py" line="213"/>
         <source>{what}: c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</source>
         <translation>{what} : c0 + Σ c_h·n_h = {c0:g} + {var:,.1f} = {total:,.1f} {unit}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="196"/>
+        <location filename="../processing/report/allocate.py" line="213"/>
         <source>Field days needed</source>
         <translation>Jours de terrain nécessaires</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="196"/>
+        <location filename="../processing/report/allocate.py" line="213"/>
         <source>Cost of the design</source>
         <translation>Coût du plan</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="210"/>
+        <location filename="../processing/report/allocate.py" line="231"/>
         <source>What the choice of method buys, at {n} units</source>
         <translation>Ce qu'apporte le choix de la méthode, pour {n} unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="214"/>
+        <location filename="../processing/report/allocate.py" line="235"/>
         <source>stratum {label}</source>
         <translation>strate {label}</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="217"/>
+        <location filename="../processing/report/allocate.py" line="239"/>
         <source>Variance relative to the applied allocation</source>
         <translation>Variance relative à l'allocation appliquée</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="219"/>
+        <location filename="../processing/report/allocate.py" line="241"/>
         <source>Expected CV</source>
         <translation>CV attendu</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="230"/>
+        <location filename="../processing/report/allocate.py" line="252"/>
         <source>Without standard deviations the precision of the designs cannot be compared.</source>
         <translation>Sans écarts-types, la précision des plans ne peut pas être comparée.</translation>
     </message>
@@ -6901,92 +5004,92 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Plans d'inventaire comparés par simulation</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="49"/>
+        <location filename="../processing/report/comparedesigns.py" line="66"/>
         <source>recommended design</source>
         <translation>plan recommandé</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="50"/>
+        <location filename="../processing/report/comparedesigns.py" line="67"/>
         <source>its RMSE (animals)</source>
         <translation>sa REQM (animaux)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="51"/>
+        <location filename="../processing/report/comparedesigns.py" line="68"/>
         <source>its RMSE relative to the total</source>
         <translation>sa REQM relative au total</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="52"/>
+        <location filename="../processing/report/comparedesigns.py" line="69"/>
         <source>its 95 % interval coverage</source>
         <translation>couverture de ses intervalles à 95 %</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="54"/>
+        <location filename="../processing/report/comparedesigns.py" line="71"/>
         <source>expected animals in the frame</source>
         <translation>animaux attendus dans la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="57"/>
+        <location filename="../processing/report/comparedesigns.py" line="78"/>
         <source>point station</source>
         <translation>station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="58"/>
+        <location filename="../processing/report/comparedesigns.py" line="79"/>
         <source>square plot</source>
         <translation>placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="59"/>
+        <location filename="../processing/report/comparedesigns.py" line="80"/>
         <source>circular plot</source>
         <translation>placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="60"/>
+        <location filename="../processing/report/comparedesigns.py" line="81"/>
         <source>line transect</source>
         <translation>transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="63"/>
+        <location filename="../processing/report/comparedesigns.py" line="84"/>
         <source>counting radius</source>
         <translation>rayon de comptage</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="64"/>
+        <location filename="../processing/report/comparedesigns.py" line="85"/>
         <source>side</source>
         <translation>côté</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="65"/>
+        <location filename="../processing/report/comparedesigns.py" line="86"/>
         <source>radius</source>
         <translation>rayon</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="66"/>
+        <location filename="../processing/report/comparedesigns.py" line="87"/>
         <source>length</source>
         <translation>longueur</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="71"/>
+        <location filename="../processing/report/comparedesigns.py" line="92"/>
         <source>, strip half-width {w:g} m</source>
         <translation>, demi-largeur de bande {w:g} m</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="73"/>
+        <location filename="../processing/report/comparedesigns.py" line="94"/>
         <source>Density surface</source>
         <translation>Surface de densité</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="74"/>
+        <location filename="../processing/report/comparedesigns.py" line="95"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="252"/>
+        <location filename="../processing/report/stratify.py" line="93"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../processing/report/distancedensity.py" line="147"/>
+        <location filename="../processing/report/stratify.py" line="232"/>
         <source>none</source>
         <translation>néant</translation>
     </message>
@@ -6996,77 +5099,77 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Champ de strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="77"/>
+        <location filename="../processing/report/comparedesigns.py" line="98"/>
         <source>feature id</source>
         <translation>identifiant d'entité</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="79"/>
+        <location filename="../processing/report/comparedesigns.py" line="100"/>
         <source>Surface cell</source>
         <translation>Cellule de la surface</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="80"/>
+        <location filename="../processing/report/comparedesigns.py" line="101"/>
         <source>Sub-cells per cell side (for counting)</source>
         <translation>Sous-cellules par côté de cellule (pour le comptage)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="81"/>
+        <location filename="../processing/report/comparedesigns.py" line="102"/>
         <source>Unit</source>
         <translation>Unité</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="82"/>
+        <location filename="../processing/report/comparedesigns.py" line="103"/>
         <source>Counted area per unit (m²)</source>
         <translation>Surface comptée par unité (m²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <location filename="../processing/report/comparedesigns.py" line="104"/>
         <source>Bearing</source>
         <translation>Azimut</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="83"/>
+        <location filename="../processing/report/layout.py" line="150"/>
         <source>random</source>
         <translation>aléatoire</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="86"/>
+        <location filename="../processing/report/comparedesigns.py" line="107"/>
         <source>Units wholly inside their stratum</source>
         <translation>Unités entièrement dans leur strate</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="91"/>
+        <location filename="../processing/report/comparedesigns.py" line="112"/>
         <source>Number of units</source>
         <translation>Nombre d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="92"/>
+        <location filename="../processing/report/comparedesigns.py" line="113"/>
         <source>Simulated surveys per design</source>
         <translation>Inventaires simulés par plan</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>Counts per cell</source>
         <translation>Comptages par cellule</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>negative binomial, k = {k:g}</source>
         <translation>binomiale négative, k = {k:g}</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="93"/>
+        <location filename="../processing/report/comparedesigns.py" line="114"/>
         <source>Poisson</source>
         <translation>Poisson</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <location filename="../processing/report/comparedesigns.py" line="119"/>
         <source>Variance estimator (grid, balanced)</source>
         <translation>Estimateur de variance (grille, équilibré)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="98"/>
+        <location filename="../processing/report/comparedesigns.py" line="119"/>
         <source>local neighbourhood</source>
         <translation>voisinage local</translation>
     </message>
@@ -7086,127 +5189,127 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Graine</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="109"/>
+        <location filename="../processing/report/comparedesigns.py" line="132"/>
         <source>How the designs did at {n} units</source>
         <translation>Résultats des plans pour {n} unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="111"/>
+        <location filename="../processing/report/comparedesigns.py" line="134"/>
         <source>Design</source>
         <translation>Plan</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="112"/>
+        <location filename="../processing/report/comparedesigns.py" line="135"/>
         <source>Mean units surveyed</source>
         <translation>Unités inventoriées en moyenne</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="113"/>
+        <location filename="../processing/report/comparedesigns.py" line="136"/>
         <source>Relative bias</source>
         <translation>Biais relatif</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="114"/>
+        <location filename="../processing/report/comparedesigns.py" line="137"/>
         <source>Empirical SE (animals)</source>
         <translation>Erreur type empirique (animaux)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="311"/>
+        <location filename="../processing/report/comparedesigns.py" line="329"/>
         <source>RMSE (animals)</source>
         <translation>REQM (animaux)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="116"/>
+        <location filename="../processing/report/comparedesigns.py" line="139"/>
         <source>± Monte Carlo SE</source>
         <translation>± erreur type de Monte-Carlo</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="117"/>
+        <location filename="../processing/report/comparedesigns.py" line="140"/>
         <source>RMSE / total</source>
         <translation>REQM / total</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="118"/>
+        <location filename="../processing/report/comparedesigns.py" line="141"/>
         <source>Mean estimated CV</source>
         <translation>CV estimé moyen</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="119"/>
+        <location filename="../processing/report/comparedesigns.py" line="142"/>
         <source>95 % interval coverage</source>
         <translation>Couverture des intervalles à 95 %</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="120"/>
+        <location filename="../processing/report/comparedesigns.py" line="143"/>
         <source>Surveys without an estimate</source>
         <translation>Inventaires sans estimation</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <location filename="../processing/report/comparedesigns.py" line="178"/>
         <source>RMSE of the abundance (animals)</source>
         <translation>REQM de l'abondance (animaux)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="155"/>
+        <location filename="../processing/report/comparedesigns.py" line="178"/>
         <source>Root mean square error of the abundance estimate, by design (lower is better)</source>
         <translation>Racine de l'erreur quadratique moyenne de l'estimation de l'abondance, par plan (plus bas est meilleur)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="166"/>
+        <location filename="../processing/report/comparedesigns.py" line="191"/>
         <source>Recommendation</source>
         <translation>Recommandation</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="168"/>
+        <location filename="../processing/report/comparedesigns.py" line="193"/>
         <source>No design gave estimates: see the warnings.</source>
         <translation>Aucun plan n'a donné d'estimation : voir les avertissements.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="212"/>
+        <location filename="../processing/report/comparedesigns.py" line="235"/>
         <source>How the simulation works</source>
         <translation>Fonctionnement de la simulation</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="257"/>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
         <source>Area (km²)</source>
         <translation>Surface (km²)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="258"/>
+        <location filename="../processing/report/comparedesigns.py" line="276"/>
         <source>Mean expected count per unit</source>
         <translation>Comptage attendu moyen par unité</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="259"/>
+        <location filename="../processing/report/comparedesigns.py" line="277"/>
         <source>S_h (count SD per unit)</source>
         <translation>S_h (écart-type du comptage par unité)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="262"/>
+        <location filename="../processing/report/comparedesigns.py" line="280"/>
         <source>Units, proportional</source>
         <translation>Unités, proportionnelle</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="264"/>
+        <location filename="../processing/report/comparedesigns.py" line="282"/>
         <source>Units, Neyman (best case)</source>
         <translation>Unités, Neyman (meilleur cas)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="266"/>
+        <location filename="../processing/report/comparedesigns.py" line="284"/>
         <source>Units, Neyman from a pilot (mean)</source>
         <translation>Unités, Neyman d'après un pilote (moyenne)</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="292"/>
+        <location filename="../processing/report/comparedesigns.py" line="310"/>
         <source>RMSE against the number of units</source>
         <translation>REQM en fonction du nombre d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <location filename="../processing/report/comparedesigns.py" line="316"/>
         <source>number of units</source>
         <translation>nombre d'unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="298"/>
+        <location filename="../processing/report/comparedesigns.py" line="316"/>
         <source>RMSE of the abundance estimate against the number of units</source>
         <translation>REQM de l'estimation de l'abondance en fonction du nombre d'unités</translation>
     </message>
@@ -7216,12 +5319,12 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Unités</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="318"/>
+        <location filename="../processing/report/comparedesigns.py" line="336"/>
         <source>{a} → {b} units: RMSE {change:+.0%}</source>
         <translation>{a} → {b} unités : REQM {change:+.0%}</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="323"/>
+        <location filename="../processing/report/comparedesigns.py" line="341"/>
         <source>For {name}: </source>
         <translation>Pour {name} : </translation>
     </message>
@@ -7876,7 +5979,7 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Surface d'une unité</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="326"/>
+        <location filename="../processing/report/estimate.py" line="331"/>
         <source>Interval</source>
         <translation>Intervalle</translation>
     </message>
@@ -7956,77 +6059,77 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>{what} dans la base de sondage, limites à {level}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="309"/>
+        <location filename="../processing/report/estimate.py" line="315"/>
         <source>Non-response: {n} unit(s) were not surveyed (no count) and were left out: {ids}.</source>
         <translation>Non-réponse : {n} unité(s) n'ont pas été inventoriée(s) (pas de comptage) et ont été écartée(s) : {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="315"/>
+        <location filename="../processing/report/estimate.py" line="321"/>
         <source>{n} unused reserve unit(s) without a count were skipped.</source>
         <translation>{n} unité(s) de réserve non utilisée(s) sans comptage ont été ignorée(s).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="325"/>
+        <location filename="../processing/report/estimate.py" line="330"/>
         <source>The overall interval by method</source>
         <translation>L'intervalle global selon la méthode</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="326"/>
+        <location filename="../processing/report/estimate.py" line="331"/>
         <source>Used in the outputs</source>
         <translation>Utilisé dans les sorties</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>overall abundance in a resample</source>
         <translation>abondance globale dans un rééchantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>resamples</source>
         <translation>rééchantillonnages</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>{level} percentile limits</source>
         <translation>limites des percentiles à {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="357"/>
+        <location filename="../processing/report/estimate.py" line="362"/>
         <source>The {n:,} bootstrap resamples of the overall abundance</source>
         <translation>Les {n:,} rééchantillonnages bootstrap de l'abondance globale</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="379"/>
+        <location filename="../processing/report/estimate.py" line="384"/>
         <source>true density (simulation)</source>
         <translation>vraie densité (simulation)</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="389"/>
+        <location filename="../processing/report/estimate.py" line="394"/>
         <source>{what} by stratum with {level} confidence intervals</source>
         <translation>{what} par strate avec intervalles de confiance à {level}</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="404"/>
+        <location filename="../processing/report/estimate.py" line="409"/>
         <source>lowest</source>
         <translation>minimum</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="404"/>
+        <location filename="../processing/report/estimate.py" line="409"/>
         <source>highest</source>
         <translation>maximum</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="415"/>
+        <location filename="../processing/report/estimate.py" line="420"/>
         <source>surveyed units</source>
         <translation>unités inventoriées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="425"/>
+        <location filename="../processing/report/estimate.py" line="430"/>
         <source>not surveyed</source>
         <translation>non inventoriées</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="434"/>
+        <location filename="../processing/report/estimate.py" line="439"/>
         <source>Strata shaded by {what}, with the units</source>
         <translation>Strates ombrées selon {what}, avec les unités</translation>
     </message>
@@ -8036,62 +6139,62 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Mises en garde</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="180"/>
+        <location filename="../processing/report/allocate.py" line="196"/>
         <source>Expected precision uses the pilot figures as if they were the truth, with the finite-population correction 1 − n_h·a/A_h, since the layout named draws units that do not overlap (Cochran 1977, ch. 5). Real precision depends on the counts the survey finds.</source>
         <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, avec la correction pour population finie 1 − n_h·a/A_h, puisque la disposition indiquée tire des unités qui ne se chevauchent pas (Cochran 1977, ch. 5). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
     </message>
     <message>
-        <location filename="../processing/report/allocate.py" line="180"/>
+        <location filename="../processing/report/allocate.py" line="196"/>
         <source>Expected precision uses the pilot figures as if they were the truth, without a finite-population correction: a simple random layout&apos;s units may overlap, so their possible positions are a continuous population (Cordy 1993). Real precision depends on the counts the survey finds.</source>
         <translation>La précision attendue utilise les chiffres pilotes comme s'ils étaient la vérité, sans correction pour population finie : les unités d'une disposition aléatoire simple peuvent se chevaucher, si bien que leurs positions possibles forment une population continue (Cordy 1993). La précision réelle dépend des comptages que l'inventaire obtiendra.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="145"/>
+        <location filename="../processing/report/comparedesigns.py" line="168"/>
         <source>Each figure is itself an estimate from {reps} simulated surveys: relative biases within about ±{noise:.1%} cannot be told from zero, and RMSEs closer than two Monte Carlo SEs are a tie. More surveys per design narrow both.</source>
         <translation>Chaque chiffre est lui-même une estimation tirée de {reps} inventaires simulés : des biais relatifs d'environ ±{noise:.1%} ne se distinguent pas de zéro, et des REQM plus proches que deux erreurs types de Monte-Carlo sont à égalité. Davantage d'inventaires par plan resserrent les deux.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="170"/>
+        <location filename="../processing/report/comparedesigns.py" line="195"/>
         <source>{name} gave the lowest root mean square error ({rmse:,.1f} animals, {rel:.1%} of the mean true total of {total:,.0f}) among the designs whose 95 % intervals held the truth at least 90 % of the time.</source>
         <translation>{name} a donné la plus faible racine de l'erreur quadratique moyenne ({rmse:,.1f} animaux, {rel:.1%} du vrai total moyen de {total:,.0f}) parmi les plans dont les intervalles à 95 % ont contenu la vérité au moins 90 % du temps.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="177"/>
+        <location filename="../processing/report/comparedesigns.py" line="202"/>
         <source>{others} did about as well: the differences lie within the Monte Carlo error of the simulation. Among these, choose the one that is easiest to carry out in the field.</source>
         <translation>{others} ont fait à peu près aussi bien : les différences restent dans l'erreur de Monte-Carlo de la simulation. Parmi eux, choisissez celui qui est le plus facile à mettre en œuvre sur le terrain.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="189"/>
+        <location filename="../processing/report/comparedesigns.py" line="214"/>
         <source>The intervals of {names} held the truth less than 90 % of the time: their stated precision would mislead.</source>
         <translation>Les intervalles de {names} ont contenu la vérité moins de 90 % du temps : leur précision affichée serait trompeuse.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="199"/>
+        <location filename="../processing/report/comparedesigns.py" line="224"/>
         <source>The systematic grid&apos;s number of units varies from survey to survey (mean shown). With the simple random sampling formula its interval is usually conservative on smooth surfaces.</source>
         <translation>Le nombre d'unités de la grille systématique varie d'un inventaire à l'autre (moyenne indiquée). Avec la formule de l'échantillonnage aléatoire simple, son intervalle est en général conservateur sur des surfaces lisses.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="213"/>
+        <location filename="../processing/report/comparedesigns.py" line="236"/>
         <source>Each simulated survey draws a population on the surface: Poisson counts in every surface cell, or negative binomial counts (gamma-Poisson) when k is above 0. All designs survey the same populations. Every design is laid out with the layout engine and follows the real chain&apos;s edge protocol: by default plus sampling, with centres over each stratum (or the frame) grown by the unit&apos;s reach (and half a surface cell), each unit counting the animals of the cells of its own stratum whose centres it covers, with its nominal area, and the estimation engine expanding the counts to the grown area (Gregoire &amp; Valentine 2008, ch. 10); the abundance is the ratio estimator with its t interval (Satterthwaite degrees of freedom). Each estimate is judged against the true total of its own population.</source>
         <translation>Chaque inventaire simulé tire une population sur la surface : comptages de Poisson dans chaque cellule, ou comptages binomiaux négatifs (gamma-Poisson) quand k est supérieur à 0. Tous les plans inventorient les mêmes populations. Chaque plan est disposé avec le moteur de disposition et suit le protocole de bord de la chaîne réelle : par défaut l'échantillonnage « plus », avec des centres sur chaque strate (ou la base) agrandie de la portée de l'unité (et d'une demi-cellule de la surface), chaque unité comptant les animaux des cellules de sa propre strate dont elle couvre le centre, avec sa surface nominale, et le moteur d'estimation étendant les comptages à la surface agrandie (Gregoire &amp; Valentine 2008, ch. 10) ; l'abondance est l'estimateur par le ratio avec son intervalle t (degrés de liberté de Satterthwaite). Chaque estimation est jugée par rapport au vrai total de sa propre population.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="227"/>
+        <location filename="../processing/report/comparedesigns.py" line="250"/>
         <source>The stratified Neyman design with the true S_h is the best case: it allocates with the standard deviations the surface implies, which no survey knows. The pilot-based Neyman design estimates S_h in every simulated survey from a pilot of {pilot} simple random units per stratum (an independent realisation: a pilot season), as a survey would; its pilot units are not counted in its n.</source>
         <translation>Le plan stratifié de Neyman avec le vrai S_h est le meilleur cas : il répartit selon les écarts-types qu'implique la surface, qu'aucun inventaire ne connaît. Le plan de Neyman fondé sur un pilote estime S_h dans chaque inventaire simulé à partir d'un pilote de {pilot} unités aléatoires simples par strate (une réalisation indépendante : une saison pilote), comme le ferait un inventaire ; ses unités pilotes ne sont pas comptées dans son n.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="236"/>
+        <location filename="../processing/report/comparedesigns.py" line="259"/>
         <source>Assumptions: the surface is the truth, every animal in a unit is counted (no detection error), animals do not move during the survey, and every unit can be reached. Real surveys meet none of these exactly; use the comparison to rank designs and to size the effort, not as a promise of precision.</source>
         <translation>Hypothèses : la surface est la vérité, chaque animal d'une unité est compté (pas d'erreur de détection), les animaux ne se déplacent pas pendant l'inventaire et chaque unité peut être atteinte. Aucun vrai inventaire ne les remplit exactement ; utilisez la comparaison pour classer les plans et dimensionner l'effort, pas comme une promesse de précision.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="280"/>
+        <location filename="../processing/report/comparedesigns.py" line="298"/>
         <source>S_h is the standard deviation of one unit's count in the stratum implied by the surface: the spread of the expected counts over {draws} random unit positions plus the Poisson (and negative binomial) variation about them. Neyman allocation gives each stratum units in proportion to A_h·S_h (Neyman 1934; Cochran 1977, §5.5), with at least 2 per stratum.</source>
         <translation>S_h est l'écart-type du comptage d'une unité dans la strate impliqué par la surface : la dispersion des comptages attendus sur {draws} positions aléatoires d'unités plus la variation de Poisson (et binomiale négative) autour d'eux. L'allocation de Neyman donne à chaque strate des unités proportionnellement à A_h·S_h (Neyman 1934 ; Cochran 1977, §5.5), avec au moins 2 par strate.</translation>
     </message>
     <message>
-        <location filename="../processing/report/comparedesigns.py" line="328"/>
+        <location filename="../processing/report/comparedesigns.py" line="346"/>
         <source>The RMSE of a design falls roughly as 1/√n: doubling the units lowers it by about 30 %. Where the curve flattens, more units buy little; spend the effort on better counts (detection) or a better surface instead.</source>
         <translation>La REQM d'un plan décroît à peu près comme 1/√n : doubler les unités la réduit d'environ 30 %. Là où la courbe s'aplatit, davantage d'unités apportent peu ; consacrez plutôt l'effort à de meilleurs comptages (détection) ou à une meilleure surface.</translation>
     </message>
@@ -8101,112 +6204,112 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Simulation uniquement : le vrai total ({truth:,.0f}) est connu ici parce que la population a été simulée. L'estimation est de {est:,.0f} ({error:+.1%} par rapport à la vérité), et l'intervalle à {level} {verdict} la vérité. Seule une simulation peut le montrer ; un vrai inventaire ne connaît jamais son vrai total, et l'intervalle d'un inventaire peut le manquer par hasard (ce devrait être le cas d'environ {miss:.0%} des inventaires).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="291"/>
+        <location filename="../processing/report/estimate.py" line="297"/>
         <source>† Every count was 0: the estimate is 0 and the interval runs from 0 to the one-sided upper limit −ln(1 − {level}) · A / Σa of a Poisson count of 0 (Garwood 1936; about 3 · A / Σa at 95 %), divided by p with detection. For the frame it assumes one density over the strata.</source>
         <translation>† Tous les comptages valaient 0 : l'estimation vaut 0 et l'intervalle va de 0 à la limite supérieure unilatérale −ln(1 − {level}) · A / Σa d'un comptage de Poisson de 0 (Garwood 1936 ; environ 3 · A / Σa à 95 %), divisée par p avec la détection. Pour la base de sondage, elle suppose une seule densité sur les strates.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="300"/>
+        <location filename="../processing/report/estimate.py" line="306"/>
         <source>The frame shrank: strata {strata} had no surveyed unit and were left out ({area:,.3g} {unit}). The estimate covers the remaining strata only.</source>
         <translation>La base de sondage s'est réduite : les strates {strata} n'avaient aucune unité inventoriée et ont été écartées ({area:,.3g} {unit}). L'estimation ne couvre que les strates restantes.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="345"/>
+        <location filename="../processing/report/estimate.py" line="350"/>
         <source>The t interval is symmetric about the estimate; the log-normal interval is skewed to the right like the sampling distribution of a count-based estimate, and suits small samples of clumped animals better. Choose the method before looking at the results.</source>
         <translation>L'intervalle t est symétrique autour de l'estimation ; l'intervalle log-normal est asymétrique vers la droite comme la distribution d'échantillonnage d'une estimation fondée sur des comptages, et convient mieux aux petits échantillons d'animaux agrégés. Choisissez la méthode avant de regarder les résultats.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="443"/>
+        <location filename="../processing/report/estimate.py" line="448"/>
         <source>Each stratum&apos;s value is the proportion of its surveyed units where the species was detected; the frame&apos;s value weights the strata by the number of units they hold (area / unit area). This is naive occupancy: it is not corrected for detection, so it understates true occupancy whenever the species can be present and missed. Detection-corrected occupancy needs repeat visits to the same units (occupancy models).</source>
         <translation>La valeur de chaque strate est la proportion de ses unités inventoriées où l'espèce a été détectée ; la valeur de la base pondère les strates par le nombre d'unités qu'elles contiennent (surface / surface d'une unité). C'est l'occupation naïve : elle n'est pas corrigée de la détection, et sous-estime donc l'occupation réelle dès que l'espèce peut être présente sans être vue. Une occupation corrigée de la détection exige des visites répétées des mêmes unités (modèles d'occupation).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="454"/>
+        <location filename="../processing/report/estimate.py" line="459"/>
         <source>Density in each stratum is the total count divided by the total surveyed area, D_h = Σy/Σa (the ratio estimator, Cochran 1977, ch. 6), with the linearised variance v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), where f_h = Σa/A_h when the finite-population correction applies and 0 otherwise. Abundance is N_h = D_h A_h; the frame's abundance is the sum over strata, its variance the sum of the strata variances, and its density N / Σ A_h (Cochran 1977, ch. 5).</source>
         <translation>La densité de chaque strate est le comptage total divisé par la surface totale inventoriée, D_h = Σy/Σa (l'estimateur par le ratio, Cochran 1977, ch. 6), avec la variance linéarisée v(D_h) = (1 − f_h)/(n_h ā_h²) · Σ(y − D_h a)²/(n_h − 1), où f_h = Σa/A_h quand la correction pour population finie s'applique et 0 sinon. L'abondance est N_h = D_h A_h ; l'abondance de la base est la somme sur les strates, sa variance la somme des variances des strates, et sa densité N / Σ A_h (Cochran 1977, ch. 5).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="466"/>
+        <location filename="../processing/report/estimate.py" line="471"/>
         <source>Edges: the units were laid out by plus sampling (Gregoire &amp; Valentine 2008, ch. 10): their centres were drawn over each stratum grown by the unit's reach, and each unit counts only the animals inside its own stratum. Every animal then has the same chance of being counted, and the counts expand to the grown area A⁺_h: N_h = A⁺_h Σy/Σa (column of the expansion areas in the output).</source>
         <translation>Bords : les unités ont été disposées par échantillonnage « plus » (Gregoire &amp; Valentine 2008, ch. 10) : leurs centres ont été tirés sur chaque strate agrandie de la portée de l'unité, et chaque unité ne compte que les animaux situés dans sa propre strate. Chaque animal a alors la même chance d'être compté, et les comptages sont étendus à la surface agrandie A⁺_h : N_h = A⁺_h Σy/Σa (colonne des surfaces d'extension dans la sortie).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="476"/>
+        <location filename="../processing/report/estimate.py" line="481"/>
         <source>Edges: the units were kept wholly inside their strata, so no unit reaches the band within a unit&apos;s reach of the edge; the estimate carries the inner density over that band. Where the animals near the edge differ (a shore, a forest edge), it is biased; plus sampling (INSIDE off) is not.</source>
         <translation>Bords : les unités ont été gardées entièrement dans leurs strates, si bien qu'aucune unité n'atteint la bande située à moins d'une portée d'unité du bord ; l'estimation reporte la densité intérieure sur cette bande. Là où les animaux proches du bord diffèrent (une rive, une lisière de forêt), elle est biaisée ; l'échantillonnage « plus » (INSIDE désactivé) ne l'est pas.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="489"/>
+        <location filename="../processing/report/estimate.py" line="494"/>
         <source>Detection: estimates are divided by p = {p:g}, and the squared CVs of the count estimate and of p (SE {se:g}, CV {cv:.3f}) add (delta method, Seber 1982). The degrees of freedom of the two parts combine by Satterthwaite's rule, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, eq. 3.75), with df_p = {df} for p.</source>
         <translation>Détection : les estimations sont divisées par p = {p:g}, et les CV au carré de l'estimation des comptages et de p (erreur type {se:g}, CV {cv:.3f}) s'additionnent (méthode delta, Seber 1982). Les degrés de liberté des deux parts se combinent selon la règle de Satterthwaite, df = CV⁴ / (CV_n⁴/df_n + CV_p⁴/df_p) (Buckland et al. 2001, éq. 3.75), avec df_p = {df} pour p.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="501"/>
+        <location filename="../processing/report/estimate.py" line="506"/>
         <source>Next survey: n_next is the number of units each stratum needs for a CV of {cv:g} of the overall abundance, by Neyman allocation n_h ∝ M_h S_h on the standard deviations the variance estimator implies now (Neyman 1934; Cochran 1977, eq. 5.26), at least 2 and at most the units a stratum holds. The observed SDs are themselves uncertain, especially from few units.</source>
         <translation>Prochain inventaire : n_next est le nombre d'unités dont chaque strate a besoin pour un CV de {cv:g} de l'abondance globale, par allocation de Neyman n_h ∝ M_h S_h sur les écarts-types qu'implique maintenant l'estimateur de variance (Neyman 1934 ; Cochran 1977, éq. 5.26), au moins 2 et au plus les unités que contient une strate. Les écarts-types observés sont eux-mêmes incertains, surtout avec peu d'unités.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="513"/>
+        <location filename="../processing/report/estimate.py" line="518"/>
         <source>Intervals use Student's t with Satterthwaite's effective degrees of freedom, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946; Cochran 1977, ch. 5). Lower limits below 0 are shown as 0.</source>
         <translation>Les intervalles utilisent le t de Student avec les degrés de liberté effectifs de Satterthwaite, ν = (Σ v_h)² / Σ (v_h² / ν_h) (Satterthwaite 1946 ; Cochran 1977, ch. 5). Les limites inférieures sous 0 sont affichées comme 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="513"/>
+        <location filename="../processing/report/estimate.py" line="518"/>
         <source>Intervals are log-normal: N/C to N·C with C = exp(t_df · √ln(1 + CV²)), t with the estimate's Satterthwaite degrees of freedom (Buckland et al. 2001, §3.6.1; the normal quantile only for infinite df, Burnham et al. 1987). They are asymmetric and never go below 0.</source>
         <translation>Les intervalles sont log-normaux : de N/C à N·C avec C = exp(t_df · √ln(1 + CV²)), t avec les degrés de liberté de Satterthwaite de l'estimation (Buckland et al. 2001, §3.6.1 ; le quantile normal seulement pour des ddl infinis, Burnham et al. 1987). Ils sont asymétriques et ne descendent jamais sous 0.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="513"/>
+        <location filename="../processing/report/estimate.py" line="518"/>
         <source>Intervals are rescaled stratified percentile bootstrap intervals, from {b:,} resamples drawn from the recorded seed: in each stratum n − 1 units are drawn with replacement and their density is moved towards the stratum's estimate by the factor √(1 − f), so that the resamples vary as much as the stratified variance says, with the finite-population correction where it applies (Rao &amp; Wu 1988; Efron &amp; Tibshirani 1993).</source>
         <translation>Les intervalles sont des intervalles bootstrap stratifiés des percentiles, remis à l'échelle, issus de {b:,} rééchantillonnages tirés à partir de la graine enregistrée : dans chaque strate, n − 1 unités sont tirées avec remise et leur densité est rapprochée de l'estimation de la strate par le facteur √(1 − f), de sorte que les rééchantillonnages varient autant que l'indique la variance stratifiée, avec la correction pour population finie là où elle s'applique (Rao &amp; Wu 1988 ; Efron &amp; Tibshirani 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="543"/>
+        <location filename="../processing/report/estimate.py" line="548"/>
         <source>Variances use the local neighbourhood estimator of Stevens &amp; Olsen (2003): each unit and its three nearest units in the stratum form a neighbourhood with weights that sum to 1 over each neighbourhood and over each unit, and v = Σ_i Σ_j w_ij (z_j − z̄_i)². Its degrees of freedom are those of a quadratic form, (tr Q)² / tr Q² (Box 1954), and the bootstrap spreads its resamples to the same variance. For a simple random layout use the simple formula.</source>
         <translation>Les variances utilisent l'estimateur de voisinage local de Stevens &amp; Olsen (2003) : chaque unité et ses trois plus proches voisines dans la strate forment un voisinage, avec des poids dont la somme vaut 1 sur chaque voisinage et sur chaque unité, et v = Σ_i Σ_j w_ij (z_j − z̄_i)². Ses degrés de liberté sont ceux d'une forme quadratique, (tr Q)² / tr Q² (Box 1954), et le bootstrap disperse ses rééchantillonnages jusqu'à la même variance. Pour une disposition aléatoire simple, utilisez la formule simple.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="554"/>
+        <location filename="../processing/report/estimate.py" line="559"/>
         <source>Our variant: the double sum is multiplied by n / Σ_i (1 − Σ_j w_ij²), so that it agrees on average with the simple formula where the population has no spatial pattern; the published sum falls about a quarter short there. This scaling is ours, not Stevens &amp; Olsen's.</source>
         <translation>Notre variante : la double somme est multipliée par n / Σ_i (1 − Σ_j w_ij²), pour qu'elle concorde en moyenne avec la formule simple là où la population n'a pas de structure spatiale ; la somme publiée y est inférieure d'environ un quart. Cette mise à l'échelle est la nôtre, pas celle de Stevens &amp; Olsen.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="563"/>
+        <location filename="../processing/report/estimate.py" line="568"/>
         <source>Strata with one surveyed unit were paired with a partner fixed before the counts were seen (the stratum sharing the longest edge on the map, or else the next stratum in id order). Two one-unit strata share the pairs formula v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, with the weights of Hansen, Hurwitz &amp; Madow 1953); a one-unit stratum paired with a stratum of several units takes (D̂_1 − D̂_2)² − v(D̂_2), at least the variance one unit has with the partner's spread, while the partner keeps its own variance. Differences between the paired strata count as variance, so these standard errors tend to be too large; each such stratum has 1 degree of freedom.</source>
         <translation>Les strates avec une seule unité inventoriée ont été associées à une partenaire fixée avant que les comptages ne soient vus (la strate qui partage la plus longue limite sur la carte, ou à défaut la strate suivante dans l'ordre des identifiants). Deux strates d'une seule unité partagent la formule des paires v = 4 (A_2 Ŷ_1 − A_1 Ŷ_2)² / (A_1 + A_2)² (Cochran 1977, §5A.12, avec les poids de Hansen, Hurwitz &amp; Madow 1953) ; une strate d'une seule unité associée à une strate de plusieurs unités prend (D̂_1 − D̂_2)² − v(D̂_2), au moins la variance qu'a une unité avec la dispersion de la partenaire, tandis que la partenaire garde sa propre variance. Les différences entre strates associées comptent comme variance, si bien que ces erreurs types tendent à être trop grandes ; chacune de ces strates a 1 degré de liberté.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="580"/>
+        <location filename="../processing/report/estimate.py" line="585"/>
         <source>The finite-population correction was refused in strata {ids}: their units come from a simple random layout whose units may overlap, a continuous population of possible units, which has no such correction (Cordy 1993).</source>
         <translation>La correction pour population finie a été refusée dans les strates {ids} : leurs unités viennent d'une disposition aléatoire simple dont les unités peuvent se chevaucher, une population continue d'unités possibles, qui n'a pas de telle correction (Cordy 1993).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="589"/>
+        <location filename="../processing/report/estimate.py" line="594"/>
         <source>The finite-population correction assumes that the units do not overlap and were drawn without replacement from the units that tile each stratum. The units carry no design record (they did not come from plotwise:layout), so this could not be checked: if they may overlap, switch the correction off.</source>
         <translation>La correction pour population finie suppose que les unités ne se chevauchent pas et ont été tirées sans remise parmi les unités qui pavent chaque strate. Les unités ne portent aucun enregistrement de plan (elles ne viennent pas de plotwise:layout), si bien que cela n'a pas pu être vérifié : si elles peuvent se chevaucher, désactivez la correction.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="602"/>
+        <location filename="../processing/report/estimate.py" line="607"/>
         <source>The inference covers the sampling frame only: the strata polygons given here. It says nothing about land outside them (excluded areas, inaccessible ground, neighbouring land).</source>
         <translation>L'inférence ne couvre que la base de sondage : les polygones de strates donnés ici. Elle ne dit rien des terrains en dehors (zones exclues, terrains inaccessibles, terres voisines).</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="610"/>
+        <location filename="../processing/report/estimate.py" line="615"/>
         <source>Presence data: a non-detection is not an absence. Naive occupancy needs repeat visits before it can be corrected for detection.</source>
         <translation>Données de présence : une non-détection n'est pas une absence. L'occupation naïve exige des visites répétées pour pouvoir être corrigée de la détection.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="618"/>
+        <location filename="../processing/report/estimate.py" line="623"/>
         <source>Detection: p must come from a separate study (double observers, marked animals, distance sampling) of the same species, season, habitat and observers. If the detection in this survey differs, the estimate is biased by the same factor, and no interval here shows it.</source>
         <translation>Détection : p doit provenir d'une étude distincte (double observateur, animaux marqués, échantillonnage par distance) de la même espèce, à la même saison, dans le même habitat et avec les mêmes observateurs. Si la détection de cet inventaire diffère, l'estimation est biaisée du même facteur, et aucun intervalle ici ne le montre.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="627"/>
+        <location filename="../processing/report/estimate.py" line="632"/>
         <source>Detection: with p = 1 the estimate assumes every animal in a surveyed unit was counted. Animals missed make it too low, and the interval does not show that bias.</source>
         <translation>Détection : avec p = 1, l'estimation suppose que chaque animal d'une unité inventoriée a été compté. Les animaux manqués la rendent trop basse, et l'intervalle ne montre pas ce biais.</translation>
     </message>
     <message>
-        <location filename="../processing/report/estimate.py" line="634"/>
+        <location filename="../processing/report/estimate.py" line="639"/>
         <source>The design the units came from: the formulas assume the units were placed at random within each stratum with equal chances (simple random, systematic grid or spatially balanced layout), that unsurveyed units are missing by chance, and that reserve units replaced primaries in draw order. Units chosen for convenience (near roads or camps) or skipped because of what was expected there bias the estimate in ways no standard error shows.</source>
         <translation>Le plan dont viennent les unités : les formules supposent que les unités ont été placées au hasard dans chaque strate avec des chances égales (disposition aléatoire simple, en grille systématique ou spatialement équilibrée), que les unités non inventoriées manquent par hasard, et que les unités de réserve ont remplacé les principales dans l'ordre de tirage. Des unités choisies par commodité (près des routes ou des camps) ou sautées à cause de ce qu'on s'attendait à y trouver biaisent l'estimation d'une façon qu'aucune erreur type ne montre.</translation>
     </message>
@@ -8945,6 +7048,641 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <source>The simulation assumes a steady change in % per year, constant detection, and that every planned visit happens. Missed visits, a change in detection or a trend that is not steady reduce the power.</source>
         <translation>La simulation suppose une variation régulière en % par an, une détection constante et que chaque visite prévue a lieu. Des visites manquées, un changement de la détection ou une tendance irrégulière réduisent la puissance.</translation>
     </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="41"/>
+        <source>study area (ha)</source>
+        <translation>zone d'étude (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="41"/>
+        <source>frame (ha)</source>
+        <translation>base de sondage (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="41"/>
+        <source>kept</source>
+        <translation>conservé</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="46"/>
+        <source>Estimates from a survey on this frame apply to the frame ({ha} ha) only, not to the whole study area.</source>
+        <translation>Les estimations d'un inventaire sur cette base ne valent que pour la base ({ha} ha), pas pour toute la zone d'étude.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="54"/>
+        <source>Frame (filled), with the areas lost to each rule</source>
+        <translation>Base de sondage (remplie), avec les surfaces perdues par chaque règle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="61"/>
+        <source>Area kept and area lost to each rule</source>
+        <translation>Surface conservée et surface perdue par chaque règle</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="63"/>
+        <source>lost to the excluded polygons (EXCLUDE)</source>
+        <translation>perdue par les polygones exclus (EXCLUDE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="64"/>
+        <source>lost to the raster mask (MASK outside the accepted range, or NoData)</source>
+        <translation>perdue par le masque raster (MASK hors de l'intervalle accepté, ou NoData)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="66"/>
+        <source>lost to the inward edge buffer (EDGE_BUFFER)</source>
+        <translation>perdue par la zone tampon intérieure (EDGE_BUFFER)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="68"/>
+        <source>study area</source>
+        <translation>zone d'étude</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="71"/>
+        <source>sampling frame (kept)</source>
+        <translation>base de sondage (conservée)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="73"/>
+        <source>% of study area</source>
+        <translation>% de la zone d'étude</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="75"/>
+        <source>Rules are applied in the order shown; each is charged only with area that was still in the frame, so the frame and the areas lost add up to the study area.</source>
+        <translation>Les règles sont appliquées dans l'ordre indiqué ; chacune n'est comptée que pour la surface encore dans la base, si bien que la base et les surfaces perdues totalisent la zone d'étude.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="82"/>
+        <source>Mask raster</source>
+        <translation>Raster de masque</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>cells tested over the study area&apos;s extent</source>
+        <translation>cellules testées sur l'emprise de la zone d'étude</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>cell size (m)</source>
+        <translation>taille de cellule (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>cells below the lowest accepted value</source>
+        <translation>cellules sous la valeur minimale acceptée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>cells above the highest accepted value</source>
+        <translation>cellules au-dessus de la valeur maximale acceptée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>NoData cells (including cells outside the raster)</source>
+        <translation>cellules NoData (y compris les cellules hors du raster)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="84"/>
+        <source>reprojected on the fly (nearest neighbour)</source>
+        <translation>reprojeté à la volée (plus proche voisin)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="101"/>
+        <source>, projected from {src} (UTM zone of the study area&apos;s centre)</source>
+        <translation>, projeté depuis {src} (zone UTM du centre de la zone d'étude)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Study area (INPUT)</source>
+        <translation>Zone d'étude (INPUT)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Areas to exclude (EXCLUDE)</source>
+        <translation>Zones à exclure (EXCLUDE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Mask raster (MASK)</source>
+        <translation>Raster de masque (MASK)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Lowest accepted mask value (MASK_MIN)</source>
+        <translation>Valeur de masque minimale acceptée (MASK_MIN)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Highest accepted mask value (MASK_MAX)</source>
+        <translation>Valeur de masque maximale acceptée (MASK_MAX)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="104"/>
+        <source>Inward edge buffer (EDGE_BUFFER, m)</source>
+        <translation>Zone tampon intérieure (EDGE_BUFFER, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="147"/>
+        <source>sampling frame</source>
+        <translation>base de sondage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="151"/>
+        <source>excluded polygons</source>
+        <translation>polygones exclus</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="155"/>
+        <source>raster mask</source>
+        <translation>masque raster</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/buildframe.py" line="157"/>
+        <source>study area boundary</source>
+        <translation>limite de la zone d'étude</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="22"/>
+        <source>Demo reserve: {name}</source>
+        <translation>Réserve de démonstration : {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="23"/>
+        <source>Invented data for demonstrations, training and tests. {name} and the velmar ({desc}) do not exist.</source>
+        <translation>Données inventées pour les démonstrations, la formation et les tests. {name} et le velmar ({desc}) n'existent pas.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>reserve area</source>
+        <translation>surface de la réserve</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>true number of velmar</source>
+        <translation>nombre réel de velmar</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>expected number</source>
+        <translation>nombre attendu</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="28"/>
+        <source>groups</source>
+        <translation>groupes</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="35"/>
+        <source>Raster cell size (m)</source>
+        <translation>Taille de cellule raster (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="35"/>
+        <source>Mean group size (mu)</source>
+        <translation>Taille moyenne des groupes (mu)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="35"/>
+        <source>Group spread, SD of members around the centre (m)</source>
+        <translation>Dispersion des groupes, écart-type des membres autour du centre (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="42"/>
+        <source>Areas</source>
+        <translation>Zones</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
+        <source>Part</source>
+        <translation>Partie</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
+        <source>Lake (excluded)</source>
+        <translation>Lac (exclu)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="43"/>
+        <source>Private inholding (excluded)</source>
+        <translation>Enclave privée (exclue)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="50"/>
+        <source>Hollin Ridge Reserve, the excluded areas and the simulated animals.</source>
+        <translation>Hollin Ridge Reserve, les zones exclues et les animaux simulés.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="52"/>
+        <source>How the population was simulated</source>
+        <translation>Comment la population a été simulée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="53"/>
+        <source>Group centres form an inhomogeneous Poisson process on the habitat (the reserve without the lake); their intensity is proportional to exp(0.9 × standardised greenness − 0.6 × standardised elevation). Each group has a Poisson number of members (mean {mu:g}) spread around its centre with a normal displacement of {sigma:g} m; members that fall off the habitat are not part of the population. This is a Thomas cluster process. Its expected total and variance are computed from the intensity surface on the raster grid.</source>
+        <translation>Les centres de groupe forment un processus de Poisson inhomogène sur l'habitat (la réserve sans le lac) ; leur intensité est proportionnelle à exp(0,9 × verdure standardisée − 0,6 × altitude standardisée). Chaque groupe a un nombre de membres suivant une loi de Poisson (moyenne {mu:g}), dispersés autour de son centre avec un déplacement normal de {sigma:g} m ; les membres qui tombent hors de l'habitat ne font pas partie de la population. C'est un processus d'agrégats de Thomas. Son total attendu et sa variance sont calculés à partir de la surface d'intensité sur la grille du raster.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="70"/>
+        <source>Lake</source>
+        <translation>Lac</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="70"/>
+        <source>Private inholding</source>
+        <translation>Enclave privée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/demoreserve.py" line="70"/>
+        <source>Velmar (every third animal)</source>
+        <translation>Velmar (un animal sur trois)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/html.py" line="76"/>
+        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
+        <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="62"/>
+        <source>Sample-unit layout</source>
+        <translation>Disposition des unités d'échantillonnage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="212"/>
+        <source>primary units</source>
+        <translation>unités principales</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="212"/>
+        <source>reserve units</source>
+        <translation>unités de réserve</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="76"/>
+        <source>strata</source>
+        <translation>strates</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="72"/>
+        <source>Replacing units in the field</source>
+        <translation>Remplacer des unités sur le terrain</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="73"/>
+        <source>A primary unit that cannot be surveyed (no safe access, no permission, flooded, ...) is replaced by the next unused reserve unit of the same stratum, in draw order (draw_ord). Record the primary as not surveyed and why; never move a unit to a more convenient place, and never take a reserve of another stratum. Reserves carry the same incl_p and weight as the primaries they replace.</source>
+        <translation>Une unité principale qui ne peut pas être inventoriée (pas d'accès sûr, pas d'autorisation, inondée, ...) est remplacée par l'unité de réserve suivante non utilisée de la même strate, dans l'ordre de tirage (draw_ord). Notez l'unité principale comme non inventoriée et pourquoi ; ne déplacez jamais une unité vers un endroit plus commode, et ne prenez jamais une réserve d'une autre strate. Les réserves portent les mêmes incl_p et weight que les unités principales qu'elles remplacent.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="82"/>
+        <source>Strata (filled), primary units (dark) and reserve units (light)</source>
+        <translation>Strates (remplies), unités principales (foncées) et unités de réserve (claires)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="95"/>
+        <source>Effective area (ha)</source>
+        <translation>Surface effective (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="96"/>
+        <source>Units asked</source>
+        <translation>Unités demandées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="97"/>
+        <source>incl_p</source>
+        <translation>incl_p</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="98"/>
+        <source>weight</source>
+        <translation>weight</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="100"/>
+        <source>Grid spacing (m)</source>
+        <translation>Pas de la grille (m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="101"/>
+        <source>Grid rotation (°)</source>
+        <translation>Rotation de la grille (°)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="116"/>
+        <source>incl_p is the inclusion density n/A per m² (the units have no area of their own); weight = A/n is the area in m² each unit stands for (Cordy 1993).</source>
+        <translation>incl_p est la densité d'inclusion n/A par m² (les unités n'ont pas de surface propre) ; weight = A/n est la surface en m² que représente chaque unité (Cordy 1993).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="121"/>
+        <source>incl_p = n × unit area / stratum area is each unit's first-order inclusion probability; weight = 1/incl_p.</source>
+        <translation>incl_p = n × surface d'une unité / surface de la strate est la probabilité d'inclusion d'ordre un de chaque unité ; weight = 1/incl_p.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="126"/>
+        <source>Plus sampling: centres were drawn over each stratum grown by {r} m (the unit&apos;s reach), so units near the edge reach over it, and some centres lie outside their stratum. Survey only the part of each unit inside its own stratum and count only the animals there (the map shows the strata); a unit that reaches nothing of its stratum counts 0. Never cross into excluded or unsafe ground to reach a centre: survey the part inside the stratum from within it. The effective area is the grown area, and plotwise:estimate expands the counts to it (Gregoire &amp; Valentine 2008, ch. 10).</source>
+        <translation>Échantillonnage « plus » : les centres ont été tirés sur chaque strate agrandie de {r} m (la portée de l'unité), si bien que les unités proches du bord le dépassent, et certains centres sont hors de leur strate. N'inventoriez que la partie de chaque unité située dans sa propre strate et ne comptez que les animaux qui s'y trouvent (la carte montre les strates) ; une unité qui n'atteint aucune partie de sa strate compte 0. Ne pénétrez jamais dans un terrain exclu ou dangereux pour atteindre un centre : inventoriez la partie située dans la strate depuis l'intérieur de celle-ci. La surface effective est la surface agrandie, et plotwise:estimate y étend les comptages (Gregoire &amp; Valentine 2008, ch. 10).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="136"/>
+        <source>Units are kept wholly inside their stratum: centres were drawn from the stratum shrunk by {r} m (the unit&apos;s circumscribing radius). The effective area is that shrunk area and the inclusion probabilities use it; the edge strip is covered less often, which the report of the estimate should mention.</source>
+        <translation>Les unités sont gardées entièrement dans leur strate : les centres ont été tirés dans la strate réduite de {r} m (le rayon circonscrit de l'unité). La surface effective est cette surface réduite et les probabilités d'inclusion l'utilisent ; la bande de bordure est moins souvent couverte, ce que le rapport de l'estimation devrait mentionner.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="143"/>
+        <source>The grid spacing is √(A/n) for the asked n; with a random start the realised number of units varies around n (column Primary) while the inclusion density stays n/A everywhere.</source>
+        <translation>Le pas de la grille est √(A/n) pour le n demandé ; avec un départ aléatoire, le nombre d'unités obtenu varie autour de n (colonne Principales) tandis que la densité d'inclusion reste n/A partout.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Units per stratum field (N_FIELD)</source>
+        <translation>Champ d'unités par strate (N_FIELD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Total units (N_UNITS)</source>
+        <translation>Total d'unités (N_UNITS)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Design (DESIGN)</source>
+        <translation>Plan (DESIGN)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Unit shape (SHAPE)</source>
+        <translation>Forme de l'unité (SHAPE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Unit size (SIZE, m)</source>
+        <translation>Taille de l'unité (SIZE, m)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Bearing (BEARING, degrees)</source>
+        <translation>Azimut (BEARING, degrés)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="153"/>
+        <source>Keep inside (INSIDE)</source>
+        <translation>Garder à l'intérieur (INSIDE)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="178"/>
+        <source>Simple random: every centre is an independent uniform point of its stratum (a triangle chosen with probability proportional to its area, then a uniform point in it).</source>
+        <translation>Aléatoire simple : chaque centre est un point uniforme indépendant de sa strate (un triangle choisi avec une probabilité proportionnelle à sa surface, puis un point uniforme dans celui-ci).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="183"/>
+        <source>Systematic grid: a square grid with a uniform random start in one grid cell and a rotation, per stratum; reserves are the centres of the grid cells, in random order.</source>
+        <translation>Grille systématique : une grille carrée avec un départ aléatoire uniforme dans une maille et une rotation, par strate ; les réserves sont les centres des mailles, dans un ordre aléatoire.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="188"/>
+        <source>Spatially balanced: balanced acceptance sampling (Robertson et al. 2013). A Halton sequence in bases 2 and 3 is laid over the stratum&apos;s bounding box and its points inside the stratum are kept in order. The random start is a uniform random point of the stratum, so that every location has the same chance for any sample size; reserves are the next points of the same sequence.</source>
+        <translation>Spatialement équilibré : échantillonnage par acceptation équilibrée (Robertson et al. 2013). Une suite de Halton en bases 2 et 3 est posée sur le rectangle englobant de la strate et ses points situés dans la strate sont gardés dans l'ordre. Le départ aléatoire est un point aléatoire uniforme de la strate, pour que chaque emplacement ait la même chance quelle que soit la taille d'échantillon ; les réserves sont les points suivants de la même suite.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/layout.py" line="196"/>
+        <source>A candidate closer than {d} m to an accepted unit is passed over (simple sequential inhibition), which lowers the chance of locations next to units slightly.</source>
+        <translation>Un candidat à moins de {d} m d'une unité acceptée est écarté (inhibition séquentielle simple), ce qui diminue légèrement la chance des emplacements voisins des unités.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="54"/>
+        <source>Strata from raster covariates</source>
+        <translation>Strates à partir de covariables raster</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="65"/>
+        <source>Strata within the sampling frame</source>
+        <translation>Strates dans la base de sondage</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>area stratified (ha)</source>
+        <translation>surface stratifiée (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="76"/>
+        <source>frame covered</source>
+        <translation>part de la base couverte</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="76"/>
+        <source>R² of {name}</source>
+        <translation>R² de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="83"/>
+        <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
+        <translation>Les strates couvrent les cellules de la base de sondage qui ont une valeur dans chaque covariable ({ha} ha). Un inventaire alloué sur ces strates ne vaut que pour cette surface.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="94"/>
+        <source>Label</source>
+        <translation>Libellé</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="95"/>
+        <source>% of area</source>
+        <translation>% de la surface</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="96"/>
+        <source>Cells</source>
+        <translation>Cellules</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="99"/>
+        <source>{name} mean</source>
+        <translation>moyenne de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="100"/>
+        <source>{name} SD</source>
+        <translation>écart-type de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="116"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
+        <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avec leur plus grande voisine (tamis GDAL, 4-connexité) avant la vectorisation ; surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir quelques cellules que la règle seule aurait mises dans une strate voisine.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="123"/>
+        <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
+        <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avant la vectorisation (4-connexité) : les taches minuscules (moins de {specks} cellules) avec leur plus grande voisine (tamis GDAL), puis {n} autres taches, de la plus petite à la plus grande, chacune avec la strate voisine qui formait la plus petite tache d'au moins {ha} ha (ou, à défaut, la plus grande), afin qu'une mosaïque de petites taches ne soit pas absorbée par une seule tache qui grandit. Surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir des cellules que la règle seule aurait mises dans une autre strate.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="134"/>
+        <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
+        <translation>{n} tache(s) couvrant {area} ha ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData) et restent plus petites que {ha} ha.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="141"/>
+        <source>Every patch of the strata now covers at least {ha} ha.</source>
+        <translation>Chaque tache des strates couvre désormais au moins {ha} ha.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="149"/>
+        <source>Method: {name}</source>
+        <translation>Méthode : {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="154"/>
+        <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
+        <translation>Covariables standardisées avec leur moyenne et leur écart-type sur la base ; graines k-means++ et itérations de Lloyd sur un échantillon aléatoire de {m} cellules (graine {seed}) ; {it} itérations. Puis chaque cellule est allée au centre le plus proche.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="162"/>
+        <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
+        <translation>Chaque classe de « {name} » forme une strate ({k} classes).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="170"/>
+        <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
+        <translation>La strate h contient les cellules telles que b(h−1) ≤ {name} &lt; b(h). Limites sur {name} :</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="173"/>
+        <source>Boundary</source>
+        <translation>Limite</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="176"/>
+        <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
+        <translation>Quantiles empiriques exacts à h/k des cellules de la base (Hyndman &amp; Fan 1996, définition 7), trouvés en deux passes : un histogramme à 64 000 classes situe chaque quantile, puis les cellules de cette classe sont triées.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="182"/>
+        <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
+        <translation>Dalenius &amp; Hodges (1959) : sur un histogramme de {name} à {n} classes, les limites sont les bornes supérieures des classes où le cumul de √f est le plus proche de h/k de son total.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="191"/>
+        <source>Share of covariate variance explained by the strata (R²)</source>
+        <translation>Part de la variance des covariables expliquée par les strates (R²)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>Covariate</source>
+        <translation>Covariable</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>Mean</source>
+        <translation>Moyenne</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>SD</source>
+        <translation>Écart-type</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="192"/>
+        <source>R²</source>
+        <translation>R²</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="196"/>
+        <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
+        <translation>R² = 1 − Σ N_h S_h² / (N S²) : la part inter-strates de la variance de la covariable sur les cellules. Pour une grandeur qui suit exactement la covariable, une allocation proportionnelle sur ces strates réduirait la variance de la moyenne estimée de cette part par rapport à un échantillonnage aléatoire simple (Cochran 1977, ch. 5, approximation pour grande population). Le gain pour la densité animale est d'autant plus faible que la densité suit moins étroitement la covariable.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="210"/>
+        <source>Histogram of {name}</source>
+        <translation>Histogramme de {name}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="216"/>
+        <source>stratum {h}</source>
+        <translation>strate {h}</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="216"/>
+        <source>cells</source>
+        <translation>cellules</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="221"/>
+        <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
+        <translation>Cellules de la base selon {name}, colorées par strate ; tirets : limites des strates.</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="224"/>
+        <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
+        <translation>Cellules de la base selon {name}, colorées par strate (les strates des k-moyennes peuvent se chevaucher sur une covariable).</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="231"/>
+        <source>Coverage</source>
+        <translation>Couverture</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>frame area (ha)</source>
+        <translation>surface de la base (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>frame area outside the first covariate&apos;s extent (ha)</source>
+        <translation>surface de la base hors de l'emprise de la première covariable (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>frame cells with NoData in a covariate (ha)</source>
+        <translation>cellules de la base NoData dans une covariable (ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>share of the frame covered</source>
+        <translation>part de la base couverte</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>cells stratified</source>
+        <translation>cellules stratifiées</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="232"/>
+        <source>covariates warped on the fly</source>
+        <translation>covariables rééchantillonnées à la volée</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="251"/>
+        <source>ignored</source>
+        <translation>ignoré</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="254"/>
+        <source>Sampling frame (FRAME)</source>
+        <translation>Base de sondage (FRAME)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="255"/>
+        <source>Covariates (COVARIATES)</source>
+        <translation>Covariables (COVARIATES)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="256"/>
+        <source>Method (METHOD)</source>
+        <translation>Méthode (METHOD)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="257"/>
+        <source>Number of strata (STRATA)</source>
+        <translation>Nombre de strates (STRATA)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="258"/>
+        <source>Minimum patch area (MIN_AREA, ha)</source>
+        <translation>Surface minimale d'une tache (MIN_AREA, ha)</translation>
+    </message>
+    <message>
+        <location filename="../processing/report/stratify.py" line="259"/>
+        <source>CRS of the computation and the outputs</source>
+        <translation>SCR du calcul et des sorties</translation>
+    </message>
 </context>
 <context>
     <name>PlotwiseStyles</name>
@@ -8997,47 +7735,42 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Simuler des comptages dans les unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="32"/>
-        <source>&lt;p&gt;Fills the &lt;i&gt;count&lt;/i&gt; field of sample units with the number of simulated animals seen in each, for training, demonstrations and tests of the estimate. Real surveys type the counts in after fieldwork instead.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Sample units&lt;/b&gt;: polygons count the animals inside them. Points count within a circle of the unit&apos;s &lt;i&gt;area_m2&lt;/i&gt;, lines within a strip of that area along the line.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Animal points&lt;/b&gt;: one point per animal, for example the demo reserve&apos;s simulated animals.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Detection probability&lt;/b&gt;: each animal in a unit is seen with this probability (binomial thinning). 1 means every animal is seen.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Count reserve units too&lt;/b&gt;: off by default, so that units whose &lt;i&gt;role&lt;/i&gt; is &lt;i&gt;reserve&lt;/i&gt; keep an empty count (not surveyed), as in a survey where no primary unit needed replacing.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Random seed&lt;/b&gt;: 0 draws a seed and records it.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The output is a copy of the units with &lt;i&gt;count&lt;/i&gt; filled (added when missing) and &lt;i&gt;present&lt;/i&gt;, the animals actually in the unit. The input is not changed.&lt;/p&gt;</source>
-        <translation type="obsolete">&lt;p&gt;Remplit le champ &lt;i&gt;count&lt;/i&gt; des unités d'échantillonnage avec le nombre d'animaux simulés vus dans chacune, pour la formation, les démonstrations et les tests de l'estimation. Dans un vrai inventaire, les comptages sont saisis après le travail de terrain.&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Unités d'échantillonnage&lt;/b&gt; : les polygones comptent les animaux qu'ils contiennent. Les points comptent dans un cercle de surface &lt;i&gt;area_m2&lt;/i&gt; de l'unité, les lignes dans une bande de cette surface le long de la ligne.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Points des animaux&lt;/b&gt; : un point par animal, par exemple les animaux simulés de la réserve de démonstration.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Probabilité de détection&lt;/b&gt; : chaque animal présent dans une unité est vu avec cette probabilité (amincissement binomial). 1 signifie que chaque animal est vu.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Compter aussi les unités de réserve&lt;/b&gt; : désactivé par défaut, pour que les unités dont le &lt;i&gt;role&lt;/i&gt; est &lt;i&gt;reserve&lt;/i&gt; gardent un comptage vide (non inventoriées), comme dans un inventaire où aucune unité principale n'a dû être remplacée.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Graine aléatoire&lt;/b&gt; : 0 en tire une et l'enregistre.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La sortie est une copie des unités avec &lt;i&gt;count&lt;/i&gt; rempli (ajouté s'il manque) et &lt;i&gt;present&lt;/i&gt;, les animaux réellement présents dans l'unité. L'entrée n'est pas modifiée.&lt;/p&gt;</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/simulatecounts.py" line="88"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="89"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="90"/>
         <source>Animal points</source>
         <translation>Points des animaux</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="90"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="92"/>
         <source>Detection probability</source>
         <translation>Probabilité de détection</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="96"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="98"/>
         <source>Count reserve units too</source>
         <translation>Compter aussi les unités de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="106"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="108"/>
         <source>Units with simulated counts</source>
         <translation>Unités avec comptages simulés</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="199"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="205"/>
         <source>has no geometry</source>
         <translation>n'a pas de géométrie</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="204"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="210"/>
         <source>Layer &apos;{layer}&apos;: these features cannot be counted: {items}. Point and line units need a positive &apos;area_m2&apos; field (the layout step writes it); polygons need a geometry.</source>
         <translation>Couche « {layer} » : ces entités ne peuvent pas être comptées : {items}. Les unités ponctuelles et linéaires ont besoin d'un champ « area_m2 » positif (l'étape de disposition l'écrit) ; les polygones ont besoin d'une géométrie.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="180"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="184"/>
         <source>{n} units counted: {seen} animals seen of {present} present (detection {p:g}); {r} reserve units left empty.</source>
         <translation>{n} unités comptées : {seen} animaux vus sur {present} présents (détection {p:g}) ; {r} unités de réserve laissées vides.</translation>
     </message>
@@ -9052,72 +7785,72 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>&lt;p&gt;Distances (pour l'algorithme de densité à partir des distances) :&lt;/p&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Fonction de détection&lt;/b&gt; : aucune (la probabilité de détection ci-dessus, la même à toute distance), ou demi-normale g(x) = exp(−x²/2σ²) ou taux de risque (hazard-rate) g(x) = 1 − exp(−(x/σ)^−b) (Buckland et al. 2001), pour les transects linéaires et les stations ponctuelles. Chaque animal situé à moins de la distance maximale d'une unité est alors vu avec la probabilité p·g(x), x étant sa distance perpendiculaire à la ligne ou sa distance au point, et p la probabilité de détection ci-dessus (1 : les animaux sur la ligne sont toujours vus, comme le suppose l'échantillonnage par distance).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Échelle σ (m)&lt;/b&gt; et &lt;b&gt;forme b du taux de risque&lt;/b&gt; de la fonction de détection.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Distance maximale (m)&lt;/b&gt; : les animaux plus éloignés de la ligne ou du point ne sont pas comptés ; 0 prend la distance où g tombe à 1 %.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Champ de taille des groupes&lt;/b&gt; des points des animaux (facultatif) : chaque point est alors un groupe d'autant d'animaux ; sinon chaque point est un animal.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Observations&lt;/b&gt; (facultatif, avec une fonction de détection) : un point par observation à la position de l'animal, avec &lt;i&gt;unit_id&lt;/i&gt;, &lt;i&gt;distance&lt;/i&gt; (m) et &lt;i&gt;size&lt;/i&gt;, prêt pour l'algorithme de densité à partir des distances.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Avec une fonction de détection, &lt;i&gt;present&lt;/i&gt; compte les animaux situés à moins de la distance maximale, et les strates ne sont pas utilisées : une ligne ou un point voit les animaux à moins de la distance maximale des deux côtés d'une limite de strate, comme les observateurs.&lt;/p&gt;&lt;p&gt;Référence : Buckland, S. T. et al. (2001) Introduction to Distance Sampling. Oxford University Press.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="100"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="102"/>
         <source>Strata: count only inside each unit&apos;s stratum (plus sampling)</source>
         <translation>Strates : ne compter que dans la strate de chaque unité (échantillonnage « plus »)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="103"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="105"/>
         <source>Stratum id field of the strata</source>
         <translation>Champ d'identifiant des strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>Detection function (line transects and point stations)</source>
         <translation>Fonction de détection (transects linéaires et stations ponctuelles)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>None: the same detection probability at every distance</source>
         <translation>Aucune : la même probabilité de détection à toute distance</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>Half-normal</source>
         <translation>Demi-normale</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="107"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="109"/>
         <source>Hazard-rate</source>
         <translation>Taux de risque (hazard-rate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="111"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="113"/>
         <source>Scale σ of the detection function (m)</source>
         <translation>Échelle σ de la fonction de détection (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="114"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="116"/>
         <source>Shape b of the hazard-rate</source>
         <translation>Forme b du taux de risque (hazard-rate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="117"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="119"/>
         <source>Maximum distance from the line or point (m; 0: where g falls to 1 %)</source>
         <translation>Distance maximale de la ligne ou du point (m ; 0 : là où g tombe à 1 %)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="120"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="122"/>
         <source>Group size field of the animal points</source>
         <translation>Champ de taille des groupes des points des animaux</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="123"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="125"/>
         <source>Observations with distances</source>
         <translation>Observations avec les distances</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="245"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="251"/>
         <source>Layer &apos;{layer}&apos;: the animal points {ids} have no group size above 0 in the field &apos;{field}&apos;. Fill it in, or choose no group size field.</source>
         <translation>Couche « {layer} » : les points des animaux {ids} n'ont pas de taille de groupe supérieure à 0 dans le champ « {field} ». Renseignez-la, ou ne choisissez pas de champ de taille des groupes.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="258"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="264"/>
         <source>Animals within {w:.1f} m of the lines or points are counted.</source>
         <translation>Les animaux à moins de {w:.1f} m des lignes ou des points sont comptés.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/simulatecounts.py" line="281"/>
+        <location filename="../processing/algorithms/simulatecounts.py" line="287"/>
         <source>No detection function was chosen, so there are no distances: the observations layer is empty.</source>
         <translation>Aucune fonction de détection n'a été choisie, il n'y a donc pas de distances : la couche des observations est vide.</translation>
     </message>
@@ -9338,11 +8071,6 @@ Vérifiez l'accès à chaque station et sa sécurité avant le travail de terrai
         <translation>Nombre de stations principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="137"/>
-        <source>Layer &apos;{layer}&apos; has no field &apos;{field}&apos; ({param}). Choose an existing field.</source>
-        <translation type="obsolete">La couche « {layer} » n'a pas de champ « {field} » ({param}). Choisissez un champ existant.</translation>
-    </message>
-    <message>
         <location filename="../processing/algorithms/stations.py" line="162"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Couche « {layer} » : {text}</translation>
@@ -9366,412 +8094,122 @@ Vérifiez l'accès à chaque station et sa sécurité avant le travail de terrai
 <context>
     <name>Stratify</name>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="69"/>
+        <location filename="../processing/algorithms/stratify.py" line="55"/>
         <source>Quantile (equal areas on the first covariate)</source>
         <translation>Quantiles (surfaces égales sur la première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="70"/>
+        <location filename="../processing/algorithms/stratify.py" line="56"/>
         <source>Equal interval (on the first covariate)</source>
         <translation>Intervalles égaux (sur la première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="71"/>
+        <location filename="../processing/algorithms/stratify.py" line="57"/>
         <source>Cumulative root frequency (Dalenius–Hodges, first covariate)</source>
         <translation>Racine cumulée des fréquences (Dalenius–Hodges, première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="72"/>
+        <location filename="../processing/algorithms/stratify.py" line="58"/>
         <source>k-means (all covariates, standardised)</source>
         <translation>k-moyennes (toutes les covariables, standardisées)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="73"/>
+        <location filename="../processing/algorithms/stratify.py" line="59"/>
         <source>Raster classes (each class of the first covariate)</source>
         <translation>Classes raster (chaque classe de la première covariable)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="77"/>
+        <location filename="../processing/algorithms/stratify.py" line="63"/>
         <source>Stratify from raster covariates</source>
         <translation>Stratifier à partir de covariables raster</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="80"/>
+        <location filename="../processing/algorithms/stratify.py" line="66"/>
         <source>&lt;p&gt;Draws strata (zones of similar expected density) from raster covariates such as elevation, a vegetation index or a land-cover map. Only cells whose centre lies inside the sampling frame count. A cell with NoData in any covariate is left out and its area reported.&lt;/p&gt;&lt;p&gt;The covariates are put on the grid of the first one, in the frame's CRS (a geographic frame is projected to the UTM zone of its centre). Rasters in another CRS or on another grid are warped on the fly (bilinear; nearest neighbour for raster classes). Rasters are read block by block, so memory stays bounded whatever their size.&lt;/p&gt;&lt;h3&gt;Methods&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantile&lt;/b&gt;: strata of equal area along the first covariate. The boundaries are the exact sample quantiles of the frame's cells (Hyndman &amp;amp; Fan 1996, definition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Equal interval&lt;/b&gt;: the first covariate's range cut into equal widths.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Cumulative root frequency&lt;/b&gt;: the Dalenius &amp;amp; Hodges (1959) rule on a 100-class histogram of the first covariate (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-means&lt;/b&gt;: all covariates standardised to mean 0 and SD 1, k-means++ seeds (Arthur &amp;amp; Vassilvitskii 2007) and Lloyd iterations on a random sample of 100,000 cells drawn with the seed; then every cell goes to its nearest centre.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Raster classes&lt;/b&gt;: each value of the first covariate (a categorical raster, at most 50 classes) is one stratum; the number of strata is ignored.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Strata are numbered 1..k by increasing mean of the first covariate. Patches (4-connected) smaller than the minimum patch area (ha) join a neighbouring stratum before the strata are turned into polygons: specks through GDAL's sieve, then each small patch, smallest first, the neighbour that brings it to the minimum area. A patch that touches no other stratum stays, with a warning.&lt;/p&gt;&lt;h3&gt;Outputs&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Stratum raster: the stratum of each cell (0 = none).&lt;/li&gt;&lt;li&gt;Strata: one multipolygon per stratum with &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cells × cell area), &lt;i&gt;cov_mean&lt;/i&gt; and &lt;i&gt;cov_sd&lt;/i&gt; of the first covariate, and &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … for the others (SD over the stratum's cells).&lt;/li&gt;&lt;li&gt;Report: boundaries, areas, covariate statistics per stratum, the share of each covariate's variance the strata explain (R²), a histogram with the boundaries and a map.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;The random seed is used by k-means only (0 draws one and records it).&lt;/p&gt;&lt;p&gt;Strata are a statistical device: before fieldwork, check every unit's access and safety.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Forme des strates (zones de densité attendue semblable) à partir de covariables raster telles que l'altitude, un indice de végétation ou une carte d'occupation du sol. Seules comptent les cellules dont le centre est dans la base de sondage. Une cellule NoData dans une covariable est écartée et sa surface signalée.&lt;/p&gt;&lt;p&gt;Les covariables sont mises sur la grille de la première, dans le SCR de la base de sondage (une base en coordonnées géographiques est projetée dans la zone UTM de son centre). Les rasters dans un autre SCR ou sur une autre grille sont rééchantillonnés à la volée (bilinéaire ; plus proche voisin pour les classes raster). Les rasters sont lus bloc par bloc, si bien que la mémoire reste bornée quelle que soit leur taille.&lt;/p&gt;&lt;h3&gt;Méthodes&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;&lt;b&gt;Quantiles&lt;/b&gt; : strates de surface égale le long de la première covariable. Les limites sont les quantiles empiriques exacts des cellules de la base (Hyndman &amp;amp; Fan 1996, définition 7).&lt;/li&gt;&lt;li&gt;&lt;b&gt;Intervalles égaux&lt;/b&gt; : l'étendue de la première covariable découpée en largeurs égales.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Racine cumulée des fréquences&lt;/b&gt; : la règle de Dalenius &amp;amp; Hodges (1959) sur un histogramme à 100 classes de la première covariable (Cochran 1977, ch. 5A).&lt;/li&gt;&lt;li&gt;&lt;b&gt;k-moyennes&lt;/b&gt; : toutes les covariables standardisées à moyenne 0 et écart-type 1, graines k-means++ (Arthur &amp;amp; Vassilvitskii 2007) et itérations de Lloyd sur un échantillon aléatoire de 100 000 cellules tiré avec la graine ; puis chaque cellule va au centre le plus proche.&lt;/li&gt;&lt;li&gt;&lt;b&gt;Classes raster&lt;/b&gt; : chaque valeur de la première covariable (un raster catégoriel, 50 classes au plus) forme une strate ; le nombre de strates est ignoré.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;Les strates sont numérotées de 1 à k par moyenne croissante de la première covariable. Les taches (4-connexité) plus petites que la surface minimale (ha) rejoignent une strate voisine avant que les strates ne soient converties en polygones : les grains par le tamis de GDAL, puis chaque petite tache, de la plus petite à la plus grande, rejoint la voisine qui l'amène à la surface minimale. Une tache qui ne touche aucune autre strate reste, avec un avertissement.&lt;/p&gt;&lt;h3&gt;Sorties&lt;/h3&gt;&lt;ul&gt;&lt;li&gt;Raster des strates : la strate de chaque cellule (0 = aucune).&lt;/li&gt;&lt;li&gt;Strates : un multipolygone par strate avec &lt;i&gt;stratum&lt;/i&gt;, &lt;i&gt;label&lt;/i&gt;, &lt;i&gt;area_ha&lt;/i&gt; (cellules × surface d'une cellule), &lt;i&gt;cov_mean&lt;/i&gt; et &lt;i&gt;cov_sd&lt;/i&gt; de la première covariable, et &lt;i&gt;cov2_mean&lt;/i&gt;, &lt;i&gt;cov2_sd&lt;/i&gt;, … pour les autres (écart-type sur les cellules de la strate).&lt;/li&gt;&lt;li&gt;Rapport : limites, surfaces, statistiques des covariables par strate, part de la variance de chaque covariable expliquée par les strates (R²), un histogramme avec les limites et une carte.&lt;/li&gt;&lt;/ul&gt;&lt;p&gt;La graine aléatoire ne sert qu'aux k-moyennes (0 en tire une et l'enregistre).&lt;/p&gt;&lt;p&gt;Les strates sont un outil statistique : avant le travail de terrain, vérifiez l'accès à chaque unité et sa sécurité.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="129"/>
+        <location filename="../processing/algorithms/stratify.py" line="115"/>
         <source>Sampling frame</source>
         <translation>Base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="131"/>
+        <location filename="../processing/algorithms/stratify.py" line="117"/>
         <source>Raster covariates (band 1 of each; the first one sets the grid)</source>
         <translation>Covariables raster (bande 1 de chacune ; la première fixe la grille)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="134"/>
+        <location filename="../processing/algorithms/stratify.py" line="120"/>
         <source>Method</source>
         <translation>Méthode</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="136"/>
+        <location filename="../processing/algorithms/stratify.py" line="122"/>
         <source>Number of strata (ignored for raster classes)</source>
         <translation>Nombre de strates (ignoré pour les classes raster)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="139"/>
+        <location filename="../processing/algorithms/stratify.py" line="125"/>
         <source>Minimum patch area (ha); smaller patches join a neighbour</source>
         <translation>Surface minimale d'une tache (ha) ; les taches plus petites rejoignent une voisine</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="143"/>
+        <location filename="../processing/algorithms/stratify.py" line="129"/>
         <source>Stratum raster</source>
         <translation>Raster des strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="269"/>
+        <location filename="../processing/algorithms/stratify.py" line="130"/>
         <source>Strata</source>
         <translation>Strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="147"/>
+        <location filename="../processing/algorithms/stratify.py" line="133"/>
         <source>Number of strata formed</source>
         <translation>Nombre de strates formées</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="148"/>
+        <location filename="../processing/algorithms/stratify.py" line="134"/>
         <source>Share of the first covariate's variance explained by the strata (R²)</source>
         <translation>Part de la variance de la première covariable expliquée par les strates (R²)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="155"/>
+        <location filename="../processing/algorithms/stratify.py" line="141"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="157"/>
+        <location filename="../processing/algorithms/stratify.py" line="143"/>
         <source>COVARIATES holds {n} rasters; use at most {m}.</source>
         <translation>COVARIATES contient {n} rasters ; utilisez-en au plus {m}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="162"/>
+        <location filename="../processing/algorithms/stratify.py" line="148"/>
         <source>COVARIATES: &apos;{name}&apos; is not a raster layer.</source>
         <translation>COVARIATES : « {name} » n'est pas une couche raster.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="165"/>
+        <location filename="../processing/algorithms/stratify.py" line="151"/>
         <source>Covariate &apos;{name}&apos; is not a file raster that GDAL can read. Save it as a GeoTIFF first.</source>
         <translation>La covariable « {name} » n'est pas un fichier raster lisible par GDAL. Enregistrez-la d'abord en GeoTIFF.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="193"/>
+        <location filename="../processing/algorithms/stratify.py" line="222"/>
         <source>Layer &apos;{layer}&apos; (FRAME) has no polygon with a positive area. Choose the sampling-frame layer.</source>
         <translation>La couche « {layer} » (FRAME) n'a aucun polygone de surface positive. Choisissez la couche de la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="208"/>
+        <location filename="../processing/algorithms/stratify.py" line="187"/>
         <source>Warped onto the grid of &apos;{first}&apos; in {crs}: {names}.</source>
         <translation>Rééchantillonnées sur la grille de « {first} » en {crs} : {names}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="231"/>
+        <location filename="../processing/algorithms/stratify.py" line="196"/>
         <source>{k} strata on {ha} ha; R² of '{name}': {r2}.</source>
         <translation>{k} strates sur {ha} ha ; R² de « {name} » : {r2}.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stratify.py" line="253"/>
-        <source>Strata from raster covariates</source>
-        <translation>Strates à partir de covariables raster</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="258"/>
-        <source>strata</source>
-        <translation>strates</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>area stratified (ha)</source>
-        <translation>surface stratifiée (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="258"/>
-        <source>frame covered</source>
-        <translation>part de la base couverte</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="258"/>
-        <source>R² of {name}</source>
-        <translation>R² de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="264"/>
-        <source>The strata cover the frame&apos;s cells that have a value in every covariate ({ha} ha). A survey allocated on these strata speaks for that area only.</source>
-        <translation>Les strates couvrent les cellules de la base de sondage qui ont une valeur dans chaque covariable ({ha} ha). Un inventaire alloué sur ces strates ne vaut que pour cette surface.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Stratum</source>
-        <translation>Strate</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Label</source>
-        <translation>Libellé</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Area (ha)</source>
-        <translation>Surface (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>% of area</source>
-        <translation>% de la surface</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="270"/>
-        <source>Cells</source>
-        <translation>Cellules</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="273"/>
-        <source>{name} mean</source>
-        <translation>moyenne de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="273"/>
-        <source>{name} SD</source>
-        <translation>écart-type de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="283"/>
-        <source>Patches smaller than {ha} ha ({cells} cells) were merged into their largest neighbour (GDAL sieve, 4-connected) before polygonising; areas and statistics are those after merging, so a stratum may hold a few cells that the rule alone would have put in a neighbouring stratum.</source>
-        <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avec leur plus grande voisine (tamis GDAL, 4-connexité) avant la vectorisation ; surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir quelques cellules que la règle seule aurait mises dans une strate voisine.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="289"/>
-        <source>Patches smaller than {ha} ha ({cells} cells) were merged before polygonising (4-connected): specks of fewer than {specks} cells into their largest neighbour (GDAL sieve), then {n} more patches, smallest first, each into the neighbouring stratum that made the smallest patch of at least {ha} ha (or, failing that, the largest patch), so that a mosaic of small patches is not swallowed by one growing patch. Areas and statistics are those after merging, so a stratum may hold cells that the rule alone would have put in another stratum.</source>
-        <translation>Les taches de moins de {ha} ha ({cells} cellules) ont été fusionnées avant la vectorisation (4-connexité) : les taches minuscules (moins de {specks} cellules) avec leur plus grande voisine (tamis GDAL), puis {n} autres taches, de la plus petite à la plus grande, chacune avec la strate voisine qui formait la plus petite tache d'au moins {ha} ha (ou, à défaut, la plus grande), afin qu'une mosaïque de petites taches ne soit pas absorbée par une seule tache qui grandit. Surfaces et statistiques sont celles d'après la fusion, si bien qu'une strate peut contenir des cellules que la règle seule aurait mises dans une autre strate.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="300"/>
-        <source>{n} patch(es) covering {area} ha touch no other stratum (islands of the frame, or patches ringed by NoData) and stay smaller than {ha} ha.</source>
-        <translation>{n} tache(s) couvrant {area} ha ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData) et restent plus petites que {ha} ha.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="306"/>
-        <source>Every patch of the strata now covers at least {ha} ha.</source>
-        <translation>Chaque tache des strates couvre désormais au moins {ha} ha.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="310"/>
-        <source>Method: {name}</source>
-        <translation>Méthode : {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="314"/>
-        <source>Stratum h holds the cells with b(h−1) ≤ {name} &lt; b(h). Boundaries on {name}:</source>
-        <translation>La strate h contient les cellules telles que b(h−1) ≤ {name} &lt; b(h). Limites sur {name} :</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="317"/>
-        <source>Boundary</source>
-        <translation>Limite</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>Value</source>
-        <translation>Valeur</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="320"/>
-        <source>Exact sample quantiles at h/k of the frame&apos;s cells (Hyndman &amp; Fan 1996, definition 7), found in two passes: a 64,000-class histogram locates each quantile, then the cells of that class are sorted.</source>
-        <translation>Quantiles empiriques exacts à h/k des cellules de la base (Hyndman &amp; Fan 1996, définition 7), trouvés en deux passes : un histogramme à 64 000 classes situe chaque quantile, puis les cellules de cette classe sont triées.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="325"/>
-        <source>Dalenius &amp; Hodges (1959): on a {n}-class histogram of {name}, the boundaries are the class tops where the cumulative √f is nearest to h/k of its total.</source>
-        <translation>Dalenius &amp; Hodges (1959) : sur un histogramme de {name} à {n} classes, les limites sont les bornes supérieures des classes où le cumul de √f est le plus proche de h/k de son total.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="331"/>
-        <source>Covariates standardised with their mean and SD over the frame; k-means++ seeds and Lloyd iterations on a random sample of {m} cells (seed {seed}); {it} iterations. Then every cell went to its nearest centre.</source>
-        <translation>Covariables standardisées avec leur moyenne et leur écart-type sur la base ; graines k-means++ et itérations de Lloyd sur un échantillon aléatoire de {m} cellules (graine {seed}) ; {it} itérations. Puis chaque cellule est allée au centre le plus proche.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="337"/>
-        <source>Each class of &apos;{name}&apos; is one stratum ({k} classes).</source>
-        <translation>Chaque classe de « {name} » forme une strate ({k} classes).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="339"/>
-        <source>Share of covariate variance explained by the strata (R²)</source>
-        <translation>Part de la variance des covariables expliquée par les strates (R²)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>Covariate</source>
-        <translation>Covariable</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>Mean</source>
-        <translation>Moyenne</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>SD</source>
-        <translation>Écart-type</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="340"/>
-        <source>R²</source>
-        <translation>R²</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="343"/>
-        <source>R² = 1 − Σ N_h S_h² / (N S²): the between-strata share of the covariate's variance over the cells. For a quantity that follows the covariate exactly, proportional allocation over these strata would lower the variance of the estimated mean by this share compared with simple random sampling (Cochran 1977, ch. 5, large-population approximation). The gain for animal density is smaller the less closely density follows the covariate.</source>
-        <translation>R² = 1 − Σ N_h S_h² / (N S²) : la part inter-strates de la variance de la covariable sur les cellules. Pour une grandeur qui suit exactement la covariable, une allocation proportionnelle sur ces strates réduirait la variance de la moyenne estimée de cette part par rapport à un échantillonnage aléatoire simple (Cochran 1977, ch. 5, approximation pour grande population). Le gain pour la densité animale est d'autant plus faible que la densité suit moins étroitement la covariable.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="350"/>
-        <source>Histogram of {name}</source>
-        <translation>Histogramme de {name}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>stratum {h}</source>
-        <translation>strate {h}</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>cells</source>
-        <translation>cellules</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>Frame cells by {name}, coloured by stratum; dashed lines: stratum boundaries.</source>
-        <translation>Cellules de la base selon {name}, colorées par strate ; tirets : limites des strates.</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="356"/>
-        <source>Frame cells by {name}, coloured by stratum (k-means strata may overlap on one covariate).</source>
-        <translation>Cellules de la base selon {name}, colorées par strate (les strates des k-moyennes peuvent se chevaucher sur une covariable).</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="365"/>
-        <source>Map</source>
-        <translation>Carte</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="368"/>
-        <source>Strata within the sampling frame</source>
-        <translation>Strates dans la base de sondage</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="370"/>
-        <source>Coverage</source>
-        <translation>Couverture</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>Item</source>
-        <translation>Élément</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>frame area (ha)</source>
-        <translation>surface de la base (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>frame area outside the first covariate&apos;s extent (ha)</source>
-        <translation>surface de la base hors de l'emprise de la première covariable (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>frame cells with NoData in a covariate (ha)</source>
-        <translation>cellules de la base NoData dans une covariable (ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>share of the frame covered</source>
-        <translation>part de la base couverte</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>cells stratified</source>
-        <translation>cellules stratifiées</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>cell size (m)</source>
-        <translation>taille de cellule (m)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>grid</source>
-        <translation>grille</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>covariates warped on the fly</source>
-        <translation>covariables rééchantillonnées à la volée</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="372"/>
-        <source>none</source>
-        <translation>aucune</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="386"/>
-        <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
-        <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="388"/>
-        <source>Sampling frame (FRAME)</source>
-        <translation>Base de sondage (FRAME)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="389"/>
-        <source>Covariates (COVARIATES)</source>
-        <translation>Covariables (COVARIATES)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="390"/>
-        <source>Method (METHOD)</source>
-        <translation>Méthode (METHOD)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="391"/>
-        <source>Number of strata (STRATA)</source>
-        <translation>Nombre de strates (STRATA)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="391"/>
-        <source>ignored</source>
-        <translation>ignoré</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="392"/>
-        <source>Minimum patch area (MIN_AREA, ha)</source>
-        <translation>Surface minimale d'une tache (MIN_AREA, ha)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="393"/>
-        <source>CRS of the computation and the outputs</source>
-        <translation>SCR du calcul et des sorties</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="396"/>
-        <source>Seed (SEED)</source>
-        <translation>Graine (SEED)</translation>
-    </message>
-    <message>
-        <location filename="../processing/algorithms/stratify.py" line="112"/>
+        <location filename="../processing/algorithms/stratify.py" line="98"/>
         <source>&lt;h3&gt;Minimum patch area&lt;/h3&gt;&lt;p&gt;The default of {default:g} ha is chosen for field teams: a patch smaller than a few sample units is not a stratum. Four 20 m × 20 m plots 50 m apart need about 1 ha; a zone smaller than that cannot hold the units a stratum needs for its own variance, and on the map it is noise of the covariate, not a zone to survey. Raise it for larger units (transects, camera stations); 0 keeps every cell's stratum.&lt;/p&gt;&lt;p&gt;A speckled covariate (a 10 m vegetation index, a noisy classification) can form millions of patches. The patches are counted before they are merged and before they are turned into polygons: strata with more than {max_patches:,} patches stop the run with an error that gives their number and a MIN_AREA that brings them under the limit, and a covariate too speckled to merge in bounded memory (more than {max_sieve:,} patches) stops it with advice to smooth or coarsen the covariate first. When the patches left after merging the specks are too many to merge one by one, patches below MIN_AREA first join their largest neighbour (the rule of GDAL's sieve filter), with a warning.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Surface minimale d'une tache&lt;/h3&gt;&lt;p&gt;La valeur par défaut de {default:g} ha est choisie pour les équipes de terrain : une tache plus petite que quelques unités d'échantillonnage n'est pas une strate. Quatre placettes de 20 m × 20 m espacées de 50 m demandent environ 1 ha ; une zone plus petite ne peut pas contenir les unités dont une strate a besoin pour sa propre variance, et sur la carte c'est du bruit de la covariable, pas une zone à inventorier. Augmentez-la pour des unités plus grandes (transects, stations de pièges photographiques) ; 0 garde la strate de chaque cellule.&lt;/p&gt;&lt;p&gt;Une covariable mouchetée (un indice de végétation à 10 m, une classification bruitée) peut former des millions de taches. Les taches sont comptées avant d'être fusionnées et avant d'être converties en polygones : des strates de plus de {max_patches:,} taches arrêtent le traitement avec une erreur qui donne leur nombre et un MIN_AREA qui les ramène sous la limite, et une covariable trop mouchetée pour être fusionnée en mémoire bornée (plus de {max_sieve:,} taches) l'arrête avec le conseil de lisser la covariable ou d'agrandir ses cellules d'abord. Quand les taches restant après la fusion des taches minuscules sont trop nombreuses pour être fusionnées une à une, les taches sous MIN_AREA rejoignent d'abord leur plus grande voisine (la règle du filtre tamis de GDAL), avec un avertissement.&lt;/p&gt;</translation>
     </message>

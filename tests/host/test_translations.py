@@ -57,10 +57,11 @@ LOADER = textwrap.dedent(
             "outputs": [o.description() for o in alg.outputDefinitions()],
         }})
     layout = provider.algorithm("layout")  # a report as the algorithms build it (translate hook)
-    report = layout.new_report(layout.tr("Sample-unit layout"))
+    from qgis.PyQt.QtCore import QCoreApplication
+    report = layout.new_report(QCoreApplication.translate("PlotwiseReport", "Sample-unit layout"))
     report.field_safety()
     report.warnings(["w"])
-    report.parameters({{layout.tr("Seed (SEED)"): 1}})
+    report.parameters({{report.translate("PlotwiseReport", "Seed (SEED)"): 1}})
     report.references(["r"])
     print("RESULT " + json.dumps({{"provider": provider.longName(), "algorithms": algorithms,
                                    "report": report.render()}}))
