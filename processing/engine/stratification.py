@@ -906,10 +906,9 @@ def accumulate_statistics(source, n_strata, rule=None, write=None, shift=None, c
     StratumStatistics
     """
     k = int(n_strata)
-    nested = isinstance(rule, ThresholdRule) and len(rule.boundaries) <= 16 and not extremes and chart_range is None
 
     def work(block):
-        return _block_sums(block, k, rule, shift, chart_range, extremes, nested, write is not None)
+        return _block_sums(block, k, rule, shift, chart_range, extremes, write is not None)
 
     s1 = s2 = mn = mx = None
     count = np.zeros(k + 1, np.int64)
@@ -957,7 +956,7 @@ def _n_covariates(source):
     return 0
 
 
-def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
+def _block_sums(block, k, rule, shift, chart_range, extremes, want_ids):
     """One block's share of :func:`accumulate_statistics`: ``(window, ids or None, sums)``.
 
     ``sums`` = (frame cells, N_h, sum(x-c), sum((x-c)^2), min-c, max-c, chart);
@@ -968,37 +967,11 @@ def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
     nf = int(np.count_nonzero(block.in_frame))
     cols = [_valid_values(block, c) for c in range(ncov)]
     n = cols[0].size
-    empty = (nf, None, None, None, None, None, None)
     full = None
     if n == 0:
         if want_ids and rule is not None:
             full = np.zeros(block.valid.shape, np.uint8)
-        return block.window, full, empty
-    count = np.zeros(k + 1, np.int64)
-    s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
-    if nested:
-        # threshold strata are nested upper sets {x >= b_j}: sums over them by masked
-        # reductions, then differences (cheaper than bincount on long runs of equal ids)
-        v = cols[rule.covariate].astype(_work_dtype(cols[rule.covariate].dtype), copy=False)
-        upper = [np.greater_equal(v, exact_threshold(b, v.dtype), out=_scratch(f"upper{j}", n, bool))
-                 for j, b in enumerate(rule.boundaries)]
-        ids = np.ones(n, np.uint8)
-        for m in upper:
-            ids += m
-        if want_ids:
-            full = block.spread(ids)
-        n_ge = np.array([n] + [np.count_nonzero(m) for m in upper] + [0])
-        count[1:] = n_ge[:-1] - n_ge[1:]
-        for c in range(ncov):
-            x = _scratch("x", n, np.float64)
-            np.subtract(cols[c], c0[c], out=x, dtype=np.float64)
-            x2 = _scratch("x2", n, np.float64)
-            np.multiply(x, x, out=x2)
-            a = np.array([x.sum()] + [np.sum(x, where=m) for m in upper] + [0.0])
-            b = np.array([x2.sum()] + [np.sum(x2, where=m) for m in upper] + [0.0])
-            s1[c, 1:] = a[:-1] - a[1:]
-            s2[c, 1:] = b[:-1] - b[1:]
-        return block.window, full, (nf, count, s1, s2, None, None, None)
+        return block.window, full, (nf, None, None, None, None, None, None)
     if rule is not None:
         ids = rule.assign(cols)
         if want_ids:
@@ -1007,36 +980,54 @@ def _block_sums(block, k, rule, shift, chart_range, extremes, nested, want_ids):
         ids = block.strata[block.valid]
         if ids.max() > k:
             raise ValueError("stratum raster holds ids beyond n_strata")
-    ids = ids.astype(np.intp)
-    count = np.bincount(ids, minlength=k + 1)
-    present = np.flatnonzero(count)
-    mn = mx = None
-    if extremes:
-        mn, mx = np.full((ncov, k + 1), np.inf), np.full((ncov, k + 1), -np.inf)
-        if present.size > 1:
-            order = np.argsort(ids.astype(np.uint16), kind="stable")  # radix sort for small integer ids
-            starts = np.concatenate([[0], np.cumsum(count[present])[:-1]])
-    for c in range(ncov):
-        x = cols[c].astype(np.float64)
-        x -= c0[c]
-        if extremes:
-            if present.size == 1:
-                mn[c, present[0]], mx[c, present[0]] = x.min(), x.max()
-            else:
-                xs = x[order]
-                mn[c, present] = np.minimum.reduceat(xs, starts)
-                mx[c, present] = np.maximum.reduceat(xs, starts)
-        s1[c] = np.bincount(ids, weights=x, minlength=k + 1)
-        x *= x
-        s2[c] = np.bincount(ids, weights=x, minlength=k + 1)
+    count, s1, s2, mn, mx = stratum_sums(ids, cols, c0, k, extremes)
     chart = None
     if chart_range is not None:
         v0 = cols[0].astype(_work_dtype(cols[0].dtype), copy=False)
         cls = histogram_class_index(v0, chart_range[0], chart_range[1], CHART_BINS)
-        ids *= CHART_BINS
-        cls += ids
+        cls += ids.astype(np.intp) * CHART_BINS
         chart = np.bincount(cls, minlength=(k + 1) * CHART_BINS)
     return block.window, full, (nf, count, s1, s2, mn, mx, chart)
+
+
+def run_starts(ids):
+    """Index of the first cell of each run (a stretch of equal ids) of a 1-D array."""
+    starts = np.flatnonzero(ids[1:] != ids[:-1])
+    starts += 1
+    return np.concatenate([np.zeros(1, starts.dtype), starts]) if ids.size else starts
+
+
+def stratum_sums(ids, cols, shift, k, extremes=False):
+    """Per stratum h and covariate x: N_h, sum(x - c), sum((x - c)^2) and, with ``extremes``, min and max - c.
+
+    ``ids`` and each of ``cols`` hold the same cells in reading order, where a
+    stratum's cells lie in runs (stretches of one id, long on a smooth
+    covariate): each run is summed with ``numpy.add.reduceat`` and the runs'
+    sums are added up per stratum (``numpy.bincount``), far cheaper than one
+    masked sum per stratum. Arrays are (n_covariates, k+1), column 0 for id 0.
+    """
+    ncov, n = len(cols), ids.size
+    starts = run_starts(ids)
+    run_ids = ids[starts].astype(np.intp)
+    lengths = np.diff(np.append(starts, n))
+    count = np.bincount(run_ids, weights=lengths, minlength=k + 1).astype(np.int64)
+    s1, s2 = np.zeros((ncov, k + 1)), np.zeros((ncov, k + 1))
+    mn = mx = None
+    if extremes:
+        mn, mx = np.full((ncov, k + 1), np.inf), np.full((ncov, k + 1), -np.inf)
+        present = np.flatnonzero(count)
+        order = np.argsort(run_ids.astype(np.uint16), kind="stable")  # radix sort for small integer ids
+        firsts = np.concatenate([[0], np.cumsum(np.bincount(run_ids, minlength=k + 1)[present])[:-1]])
+    x = _scratch("x", n, np.float64)
+    for c in range(ncov):
+        np.subtract(cols[c], shift[c], out=x, dtype=np.float64)
+        if extremes:
+            mn[c, present] = np.minimum.reduceat(np.minimum.reduceat(x, starts)[order], firsts)
+            mx[c, present] = np.maximum.reduceat(np.maximum.reduceat(x, starts)[order], firsts)
+        s1[c] = np.bincount(run_ids, weights=np.add.reduceat(x, starts), minlength=k + 1)
+        np.multiply(x, x, out=x)
+        s2[c] = np.bincount(run_ids, weights=np.add.reduceat(x, starts), minlength=k + 1)
+    return count, s1, s2, mn, mx
 
 
 def stratum_order(statistics):
