@@ -148,6 +148,11 @@ class ArrayCellSource:
     def blocks(self):
         return self.blocks_where(None)
 
+    def windows(self):
+        """``(xoff, yoff, xsize, ysize)`` of each block, in reading order."""
+        rows, cols = self.shape
+        return [(0, y0, cols, min(rows, y0 + self.block_rows) - y0) for y0 in range(0, rows, self.block_rows)]
+
     def blocks_where(self, keep):
         """The blocks whose ``keep`` entry is True (all when ``keep`` is None)."""
         rows, cols = self.shape
@@ -1030,6 +1035,101 @@ def stratum_sums(ids, cols, shift, k, extremes=False):
     return count, s1, s2, mn, mx
 
 
+@dataclass(frozen=True)
+class CellMoves:
+    """Runs of cells (stretches along one row of the grid) that moved from one stratum to another.
+
+    ``first`` is the flat index (row × ``width`` + column) of each run's first
+    cell on the source's grid, in increasing order; ``length`` its cells; ``old``
+    and ``new`` the stratum ids (1..k) before and after.
+    """
+
+    width: int
+    first: np.ndarray
+    length: np.ndarray
+    old: np.ndarray
+    new: np.ndarray
+
+    @property
+    def cells(self):
+        return int(np.sum(self.length))
+
+    def cells_in(self, window):
+        """The moved cells inside ``window`` (xoff, yoff, xsize, ysize): flat indexes in it, old and new ids."""
+        x0, y0, xs, ys = (int(v) for v in window)
+        a, b = np.searchsorted(self.first, [y0 * self.width, (y0 + ys) * self.width])
+        row, col = np.divmod(self.first[a:b], self.width)
+        c0, c1 = np.maximum(col, x0), np.minimum(col + self.length[a:b], x0 + xs)
+        ok = c1 > c0
+        lengths = (c1 - c0)[ok]
+        start = (row[ok] - y0) * xs + (c0[ok] - x0)
+        flat = np.repeat(start - np.cumsum(lengths) + lengths, lengths) + np.arange(int(lengths.sum()))
+        return flat, np.repeat(self.old[a:b][ok], lengths), np.repeat(self.new[a:b][ok], lengths)
+
+
+def statistics_after_moves(source, statistics, moves, histogram=None, progress=None):
+    """Per-stratum statistics after ``moves`` (:class:`CellMoves`) changed some cells' stratum, from those cells.
+
+    With c the overall mean, S1_h = sum(x - c) = N_h (mean_h - c) and
+    S2_h = sum((x - c)^2) = N_h (sd_h^2 + (mean_h - c)^2) over stratum h: a
+    moved cell's 1, x - c and (x - c)^2 leave its old stratum's sums and join
+    the new one's, and so does its count in the report's histogram (by its fine
+    class of ``histogram`` as :func:`chart_from_histogram` bins, else by its
+    value over the chart range). Only the blocks holding moved cells are read
+    (sources with a ``windows()`` method). A minimum and maximum cannot be
+    updated this way: ``statistics`` must have none (threshold rules).
+    """
+    k, shift = statistics.n_strata, statistics.overall_mean()
+    windows = list(source.windows()) if hasattr(source, "windows") else None
+    keep = None if windows is None else np.array([moves.cells_in(w)[0].size > 0 for w in windows], bool)
+    bins = statistics.chart_counts.shape[1]
+    chart_of_fine = None if histogram is None else chart_classes(histogram, statistics.chart_range, bins)
+
+    def work(block):
+        flat, old, new = moves.cells_in(block.window)
+        if not flat.size:
+            return None
+        old, new = old.astype(np.intp), new.astype(np.intp)
+        xs = [block.values[c].reshape(-1)[flat] for c in range(len(block.values))]
+        x = [v.astype(np.float64) - shift[c] for c, v in enumerate(xs)]
+        v0 = xs[0].astype(_work_dtype(xs[0].dtype), copy=False)
+        if chart_of_fine is None:
+            cls = histogram_class_index(v0, statistics.chart_range[0], statistics.chart_range[1], bins)
+        else:
+            cls = chart_of_fine[histogram_class_index(v0, histogram.lo, histogram.hi, histogram.counts.size)]
+
+        def change(weights=None, by=None, size=k + 1):
+            to, fro = (new, old) if by is None else (new * bins + by, old * bins + by)
+            return np.bincount(to, weights, minlength=size) - np.bincount(fro, weights, minlength=size)
+        return (change(), np.array([change(d) for d in x]), np.array([change(d * d) for d in x]),
+                change(by=cls, size=(k + 1) * bins))
+
+    dn, ds1, ds2 = np.zeros(k + 1, np.int64), np.zeros((len(shift), k + 1)), np.zeros((len(shift), k + 1))
+    dchart = np.zeros((k + 1) * bins, np.int64)
+    for part in map_blocks(source, work, progress, keep=keep):
+        if part is not None:
+            dn += part[0]
+            ds1 += part[1]
+            ds2 += part[2]
+            dchart += part[3]
+    return _statistics_with_changes(statistics, shift, dn[1:], ds1[:, 1:].T, ds2[:, 1:].T,
+                                    dchart.reshape(k + 1, bins)[1:])
+
+
+def _statistics_with_changes(statistics, shift, dn, ds1, ds2, dchart):
+    """Statistics with changes of N_h, S1_h and S2_h (:func:`statistics_after_moves`) added."""
+    n0 = statistics.count.astype(float)[:, None]
+    dev = np.where(n0 > 0, statistics.mean - shift, 0.0)
+    s1 = n0 * dev + ds1
+    s2 = n0 * (np.where(n0 > 0, statistics.sd**2, 0.0) + dev**2) + ds2
+    count = statistics.count + dn
+    with np.errstate(invalid="ignore", divide="ignore"):
+        m = s1 / count[:, None]
+        var = np.maximum(s2 / count[:, None] - m**2, 0.0)
+    return StratumStatistics(count, m + shift, np.sqrt(var), statistics.minimum, statistics.maximum,
+                             statistics.chart_range, statistics.chart_counts + dchart, statistics.cells_in_frame)
+
+
 def stratum_order(statistics):
     """Lookup table old id -> new id: non-empty strata renumbered 1..m by first-covariate mean.
 
@@ -1342,6 +1442,8 @@ class Stratification:
     value_range: tuple
     kmeans: KMeansFit = None
     warnings: tuple = field(default_factory=tuple)
+    histogram: Histogram = None
+    """Threshold methods: the fine histogram of the first covariate (:func:`statistics_after_moves` uses it)."""
 
     @property
     def n_strata(self):
@@ -1369,7 +1471,7 @@ class Stratification:
         prov = self.provisional if provisional is None else np.asarray(provisional)
         return Stratification(self.method, self.rule, self.boundaries, statistics, np.arange(k + 1),
                               prov, statistics.total, self.n_distinct, self.sample_size, self.value_range,
-                              self.kmeans, self.warnings)
+                              self.kmeans, self.warnings, self.histogram)
 
 
 def count_distinct(source, cap, covariate=0, progress=None):
@@ -1584,7 +1686,7 @@ def stratify_cells(source, method, n_strata, names, rng=None, value_range=None, 
     boundaries = rule.boundaries if isinstance(rule, ThresholdRule) else None
     return Stratification(method, rule, boundaries, stats.reordered(order), lut, order, int(stats.total),
                           int(n_distinct), int(sample_n), (float(first.vmin), float(first.vmax)), kfit,
-                          tuple(warnings))
+                          tuple(warnings), hist)
 
 
 def _assign_and_count(source, rule, hist, first, write, progress):
@@ -1599,22 +1701,47 @@ def _assign_and_count(source, rule, hist, first, write, progress):
                                   extremes=not threshold, progress=progress)
     if threshold:
         stats = replace(stats, chart_range=value_range,
-                        chart_counts=chart_from_histogram(hist, rule.boundaries, value_range))
+                        chart_counts=chart_from_histogram(hist, rule.boundaries, value_range, stats.count))
     return stats
 
 
-def chart_from_histogram(hist, boundaries, value_range, bins=CHART_BINS):
+def chart_from_histogram(hist, boundaries, value_range, counts=None, bins=CHART_BINS):
     """(k, bins) counts for the report's histogram, re-binned from a fine histogram.
 
-    Each fine class goes whole to the chart class and the stratum of its centre,
-    so the split at a boundary is exact to one fine class (1/64,000 of the range);
-    the chart is for display only.
+    Each fine class goes to the chart class of its centre (:func:`chart_classes`).
+    Without ``counts`` a fine class goes whole to the stratum of its centre. With
+    ``counts`` (the exact cells per stratum) the fine classes that a boundary
+    cuts are split exactly: the cells at or above boundary b_i are the top
+    N_{i+1} + ... + N_k cells, so the class holding the cell of rank
+    n - (N_{i+1} + ... + N_k) is the one cut by b_i, and the count above b_i in
+    it follows from the cumulative histogram. Every cell is then counted in its
+    own stratum; the chart is for display, its classes exact to one fine class
+    (1/64,000 of the range).
     """
-    centres = 0.5 * (hist.edges[:-1] + hist.edges[1:])
-    cls = histogram_class_index(centres, value_range[0], value_range[1], bins)
-    h = np.searchsorted(np.asarray(boundaries, float), centres, side="right")
     k = len(boundaries) + 1
-    return np.bincount(h * bins + cls, weights=hist.counts, minlength=k * bins).reshape(k, bins).astype(np.int64)
+    cls = chart_classes(hist, value_range, bins)
+    if counts is None:
+        centres = 0.5 * (hist.edges[:-1] + hist.edges[1:])
+        h = np.searchsorted(np.asarray(boundaries, float), centres, side="right")
+        return np.bincount(h * bins + cls, weights=hist.counts, minlength=k * bins).reshape(k, bins).astype(np.int64)
+    cum = np.cumsum(hist.counts)
+    n = int(cum[-1])
+    above = np.cumsum(np.asarray(counts, np.int64)[::-1])[::-1][1:]  # cells at or above each boundary
+    rank = n - above
+    cut = np.minimum(np.searchsorted(cum, rank, side="right"), cum.size - 1)  # the fine class cut by each boundary
+    moved = np.where(rank < n, cum[cut] - rank, 0)  # its cells at or above the boundary
+    h = np.searchsorted(cut, np.arange(cum.size), side="left")  # stratum of the cells below every cut in the class
+    chart = np.bincount(h * bins + cls, weights=hist.counts, minlength=k * bins).astype(np.int64).reshape(k, bins)
+    for i in range(k - 1):  # boundary i moves its class's cells above it from stratum i to i + 1
+        chart[i, cls[cut[i]]] -= moved[i]
+        chart[i + 1, cls[cut[i]]] += moved[i]
+    return chart
+
+
+def chart_classes(hist, value_range, bins=CHART_BINS):
+    """The chart class of each fine class of ``hist``: the class of its centre over ``value_range``."""
+    centres = 0.5 * (hist.edges[:-1] + hist.edges[1:])
+    return histogram_class_index(centres, value_range[0], value_range[1], bins)
 
 
 # ---------------------------------------------------------------------------

@@ -360,6 +360,9 @@ class _StackSource:
     def blocks(self):
         return self.blocks_where(None)
 
+    def windows(self):
+        return self.stack.windows()
+
     def blocks_where(self, keep):
         if self.strata_path is None:
             yield from self.stack.blocks(keep=keep)

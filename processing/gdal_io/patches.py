@@ -1,5 +1,5 @@
 """Patches of the stratum raster below the minimum area: GDAL's speck sieve, then the patch-graph merge."""
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 import math
 
 import numpy as np
@@ -8,8 +8,9 @@ from osgeo import gdal
 from ..engine import stratification as strat
 from ..engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 from .covariate_stack import BLOCK_CELLS
-from .grids import GdalProgress
+from .grids import GdalProgress, Grid
 from .runs import StripRuns, run_links
+from .stratum_raster import StratumRaster
 
 #: MIN_AREA (ha) offered by the algorithm (our choice): a patch of a stratum should hold a few sample units with
 #: room between them (four 20 m x 20 m plots 50 m apart fill about 1 ha); smaller patches are noise of the
@@ -258,17 +259,26 @@ class PatchCheck:
     left_cells: int
     patches: int = -1
     sieved_to: int = 0
+    moves: strat.CellMoves = None
+    """The runs of cells the merge moved to another stratum (None when GDAL's sieve changed the raster too)."""
 
 
-def enforce_min_area(path, min_cells, min_area_ha=0.0, block_cells=BLOCK_CELLS, progress=None):
+def enforce_min_area(path, min_cells, min_area_ha=0.0, block_cells=BLOCK_CELLS, progress=None, runs_at_most=None,
+                     out_path=None):
     """Bring every patch of the stratum raster up to ``min_cells``, in bounded memory and time.
 
     Steps: count the patches and runs (:func:`count_patches_and_runs`); with more
     than :data:`MAX_SIEVE_PATCHES` patches an :class:`InputError`; with more than
     :data:`MAX_GRAPH_RUNS` runs, GDAL's speck sieve in place first
     (:func:`sieve_strata`); then :func:`merge_raster_patches`. With
-    ``min_cells`` <= 1 it only counts.
+    ``min_cells`` <= 1 it only counts. ``runs_at_most`` (an upper bound on the
+    runs, from writing the raster) skips the count when it is within both
+    limits: there are no more patches than runs of ids above 0. With
+    ``out_path`` the merged raster is written there (``path`` is then a
+    provisional raster, which the speck sieve may change).
     """
+    if min_cells > 1 and runs_at_most is not None and runs_at_most <= min(MAX_GRAPH_RUNS, MAX_SIEVE_PATCHES):
+        return merge_raster_patches(path, min_cells, block_cells, progress, out_path)
     counted, runs = count_patches_and_runs(path, strat.scaled_progress(progress, 0, 0.15))
     if min_cells <= 1:
         return PatchCheck(0, 0, 0, counted)
@@ -276,7 +286,9 @@ def enforce_min_area(path, min_cells, min_area_ha=0.0, block_cells=BLOCK_CELLS, 
         raise too_speckled(counted, min_area_ha)
     if runs > MAX_GRAPH_RUNS:
         sieve_strata(path, min_cells, strat.scaled_progress(progress, 0.15, 0.4))
-    return merge_raster_patches(path, min_cells, block_cells, strat.scaled_progress(progress, 0.4, 1.0))
+        return replace(merge_raster_patches(path, min_cells, block_cells, strat.scaled_progress(progress, 0.4, 1.0),
+                                            out_path), moves=None)
+    return merge_raster_patches(path, min_cells, block_cells, strat.scaled_progress(progress, 0.4, 1.0), out_path)
 
 
 def _pair_codes(a, b):
@@ -295,7 +307,7 @@ def _count_codes(codes, counts, new_codes, new_counts=None):
     return merged, np.rint(total).astype(np.int64)
 
 
-def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None):
+def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None, out_path=None):
     """Merge the patches below ``min_cells``: specks by the sieve rule, then the patch-graph merge.
 
     Two passes over the stratum raster by strips of full rows. The first finds
@@ -309,9 +321,11 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
     while more than :data:`MAX_GRAPH_PATCHES` patches are left, the threshold
     doubles up to ``min_cells`` (``sieved_to`` in the result); then the
     patch-graph merge (:func:`~..engine.stratification.merge_patch_graph`) takes
-    the rest. The second pass rewrites the strips whose runs changed stratum.
-    Memory grows with the number of runs, not with the raster. (``block_cells``
-    is kept for callers; the strips follow :data:`STRIP_CELLS`.)
+    the rest. The second pass rewrites the strips whose runs changed stratum,
+    in place, or writes every strip to a fresh raster at ``out_path`` (GDAL
+    rewrites compressed tiles in place several times slower than it writes new
+    ones). Memory grows with the number of runs, not with the raster.
+    (``block_cells`` is kept for callers; the strips follow :data:`STRIP_CELLS`.)
 
     Returns
     -------
@@ -319,11 +333,14 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
     """
     if min_cells <= 1:
         return PatchCheck(0, 0, 0)
-    ds = gdal.Open(path, gdal.GA_Update)
+    ds = gdal.Open(path, gdal.GA_Update if out_path is None else gdal.GA_ReadOnly)
     band = ds.GetRasterBand(1)
+    out = None if out_path is None else StratumRaster(out_path, Grid(ds.GetGeoTransform(), ds.RasterXSize,
+                                                                     ds.RasterYSize, ds.GetProjection()))
     try:
         graph = _run_graph(band, strat.scaled_progress(progress, 0, 0.6))
         if graph.lengths.size == 0 or not np.any(graph.values):
+            _rewrite_runs(band, graph, graph.values, out=out)
             return PatchCheck(0, 0, 0, 0)
         patch, patch_sizes, patch_strata = _number_patches(graph)
         a, b = patch[graph.codes >> 32], patch[graph.codes & 0xFFFFFFFF]
@@ -339,9 +356,11 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
             check = PatchCheck(merge.merged, int(merge.left.size), int(merge.left_cells.sum()), merge.patches,
                                sieved_to)
         run_strata = final[groups.group[patch]].astype(np.uint8)
-        _rewrite_runs(band, graph, run_strata, strat.scaled_progress(progress, 0.6, 1))
-        return check
+        moves = _rewrite_runs(band, graph, run_strata, strat.scaled_progress(progress, 0.6, 1), out)
+        return replace(check, moves=moves)
     finally:
+        if out is not None:
+            out.close()
         band.FlushCache()
         band = ds = None
 
@@ -476,17 +495,32 @@ def _number_patches(graph):
     return patch, patch_sizes, patch_strata
 
 
-def _rewrite_runs(band, graph, run_strata, progress=None):
-    """Pass 2 of :func:`merge_raster_patches`: the strips whose runs changed stratum, rebuilt from their runs."""
+def _rewrite_runs(band, graph, run_strata, progress=None, out=None):
+    """Pass 2 of :func:`merge_raster_patches`: the cells of the runs that changed stratum rewritten, strip by strip.
+
+    In place, or every strip written to ``out`` (a :class:`~.stratum_raster.StratumRaster`).
+    Returns the runs moved (:class:`~..engine.stratification.CellMoves`).
+    """
     run_strata = np.where(graph.values > 0, run_strata, 0).astype(np.uint8)
     changed = run_strata != graph.values
-    offset = 0
+    moved = np.flatnonzero(changed)
     width = band.XSize
+    moves = strat.CellMoves(width, graph.first[moved], graph.lengths[moved], graph.values[moved], run_strata[moved])
+    offset = 0
     for i, (y0, n_rows, count) in enumerate(graph.strips):
-        part = slice(offset, offset + count)
-        if changed[part].any():
-            band.WriteArray(np.repeat(run_strata[part], graph.lengths[part]).reshape(n_rows, width), 0, y0)
+        changes = changed[offset:offset + count].any()
+        if changes or out is not None:
+            ids = band.ReadAsArray(0, y0, width, n_rows)
+            if changes:
+                flat, _, new = moves.cells_in((0, y0, width, n_rows))
+                ids.reshape(-1)[flat] = new
+            if out is None:
+                band.WriteArray(ids, 0, y0)
+            else:
+                out.write((0, y0), ids)
+                out.flush()
             band.FlushCache()
         offset += count
         if progress is not None and progress((i + 1) / len(graph.strips)):
             raise Cancelled("Stratification cancelled.")
+    return moves

@@ -1,5 +1,6 @@
 """The whole stratification on GDAL rasters: stack, assign, merge small patches, polygonise (no host import)."""
 from dataclasses import dataclass, field, replace
+import os
 
 import numpy as np
 
@@ -65,12 +66,14 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
     """
     categorical = method == strat.RASTER_CLASSES
     with CovariateStack(covariates, frame_wkb, crs_wkt, categorical, block_cells) as stack:
-        res = assign_strata(stack, method, n_strata, output_raster, rng, sample_size,
-                            strat.scaled_progress(progress, 0, 0.75))
-        warnings = list(res.warnings)
         cells = sieve_cells(min_area_ha, stack.cell_area)
+        # patches to merge: the assignment goes to a provisional raster, the merge writes the output once
+        provisional = os.path.join(stack.workdir, "strata_provisional.tif") if cells > 1 else output_raster
+        res, runs = assign_strata(stack, method, n_strata, provisional, rng, sample_size,
+                                  strat.scaled_progress(progress, 0, 0.75))
+        warnings = list(res.warnings)
         res, patches = merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_cells, warnings,
-                                            strat.scaled_progress(progress, 0.75, 0.9))
+                                            strat.scaled_progress(progress, 0.75, 0.9), runs, provisional)
         if patches.patches > patch_limits.MAX_POLYGON_PATCHES:
             raise too_many_patches(patches.patches, res.cells_valid * stack.cell_area / 10000.0, min_area_ha)
         polygons = polygonise_strata(output_raster, res.n_strata, strat.scaled_progress(progress, 0.9, 1.0))
@@ -82,7 +85,8 @@ def assign_strata(stack, method, n_strata, output_raster, rng=None, sample_size=
     """The rule and every cell's stratum (:func:`~..engine.stratification.stratify_cells`), written as a raster.
 
     The strata are renumbered by first-covariate mean in the raster when the
-    engine reordered or dropped some.
+    engine reordered or dropped some. Returns ``(result, runs)``: ``runs`` is an
+    upper bound on the raster's runs of equal ids along the rows.
     """
     writer = StratumRaster(output_raster, stack.grid)
     try:
@@ -94,16 +98,21 @@ def assign_strata(stack, method, n_strata, output_raster, rng=None, sample_size=
         writer.close()
     if res.needs_remap:
         remap_strata(output_raster, res.lut, progress=strat.scaled_progress(progress, 0.93, 1.0))
-    return res
+    return res, writer.row_runs
 
 
-def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_cells, warnings, progress=None):
-    """Patches below ``cells`` cells merged (:func:`~.patches.enforce_min_area`), statistics recounted.
+def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_cells, warnings, progress=None,
+                         runs=None, provisional=None):
+    """Patches below ``cells`` cells merged (:func:`~.patches.enforce_min_area`), statistics updated.
 
     Returns ``(result, PatchCheck)``; warnings are appended to ``warnings``. With
-    ``cells`` <= 1 the patches are only counted.
+    ``cells`` <= 1 the patches are only counted. ``runs``: an upper bound on the
+    raster's runs (:func:`assign_strata`). ``provisional``: the raster the
+    assignment wrote, when not ``output_raster`` (the merge then writes that).
     """
-    patches = enforce_min_area(output_raster, cells, min_area_ha, block_cells, strat.scaled_progress(progress, 0, 0.6))
+    source = output_raster if provisional is None else provisional
+    patches = enforce_min_area(source, cells, min_area_ha, block_cells, strat.scaled_progress(progress, 0, 0.6),
+                               runs, None if source == output_raster else output_raster)
     if cells <= 1:
         return res, patches
     if patches.sieved_to:
@@ -114,11 +123,7 @@ def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_ce
             "of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer "
             "to its pattern."),
             cells=int(patches.sieved_to)))
-    threshold = isinstance(res.rule, strat.ThresholdRule)  # their strata need no minimum and maximum, as before
-    stats = strat.accumulate_statistics(stack.source(output_raster), res.n_strata,
-                                        shift=res.statistics.overall_mean(), chart_range=res.statistics.chart_range,
-                                        extremes=not threshold,
-                                        progress=strat.scaled_progress(progress, 0.6, 1.0))
+    stats = _statistics_after_merge(stack, res, patches, output_raster, strat.scaled_progress(progress, 0.6, 1.0))
     lut, order = strat.stratum_order(stats)
     if order.size < 2:
         raise InputError(message(
@@ -150,6 +155,17 @@ def merge_below_min_area(stack, res, output_raster, cells, min_area_ha, block_ce
             "the frame, fill the NoData in the covariates, or lower MIN_AREA."),
             n=patches.left, ha=patches.left_cells * stack.cell_area / 10000.0, min_area=min_area_ha))
     return res, patches
+
+
+def _statistics_after_merge(stack, res, patches, output_raster, progress):
+    """The strata's statistics after the merge: from the moved cells alone when the strata need no minimum and
+    maximum (threshold rules) and the merge knows every cell it moved; else recounted over every cell."""
+    threshold = isinstance(res.rule, strat.ThresholdRule)  # their strata need no minimum and maximum, as before
+    if threshold and patches.moves is not None:
+        return strat.statistics_after_moves(stack.source(), res.statistics, patches.moves, res.histogram, progress)
+    return strat.accumulate_statistics(stack.source(output_raster), res.n_strata, shift=res.statistics.overall_mean(),
+                                       chart_range=res.statistics.chart_range, extremes=not threshold,
+                                       progress=progress)
 
 
 def _raster_stratification(stack, res, polygons, cells, patches, output_raster, warnings):

@@ -6,10 +6,15 @@ from ..engine.errors import QT_TRANSLATE_NOOP, Cancelled, InputError, message
 
 
 class StratumRaster:
-    """Byte GeoTIFF of stratum ids on the stack grid (0 = NoData), written block by block."""
+    """Byte GeoTIFF of stratum ids on the stack grid (0 = NoData), written block by block.
+
+    ``row_runs`` counts the runs (stretches of one id along a row) of the blocks
+    written: an upper bound on the runs along the raster's full rows.
+    """
 
     def __init__(self, path, grid):
         self.path = path
+        self.row_runs = 0
         opts = ["TILED=YES", "BIGTIFF=IF_SAFER"] + _fast_compression()
         self.ds = gdal.GetDriverByName("GTiff").Create(path, grid.width, grid.height, 1, gdal.GDT_Byte, opts)
         if self.ds is None:
@@ -24,10 +29,16 @@ class StratumRaster:
     FLUSH_BLOCKS = 64
 
     def write(self, window, ids):
-        self.band.WriteArray(ids.astype(np.uint8, copy=False), int(window[0]), int(window[1]))
+        ids = ids.astype(np.uint8, copy=False)
+        self.row_runs += ids.shape[0] + int(np.count_nonzero(ids[:, 1:] != ids[:, :-1]))
+        self.band.WriteArray(ids, int(window[0]), int(window[1]))
         self._written = getattr(self, "_written", 0) + 1
         if self._written % self.FLUSH_BLOCKS == 0:
             self.band.FlushCache()
+
+    def flush(self):
+        """Hand the blocks written so far to the file (GDAL's cache would otherwise keep them)."""
+        self.band.FlushCache()
 
     def close(self):
         if self.ds is not None:
