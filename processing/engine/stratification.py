@@ -523,13 +523,18 @@ def _order_statistics(source, ranks, histogram, covariate, cap, progress):
         level0[[t["chain"][0][3] for t in tasks]] = True
         keep = _blocks_holding(histogram.block_ranges, np.flatnonzero(level0), source.n_blocks)
 
+        near = _class_neighbourhoods(histogram, np.flatnonzero(level0))
+
         def work(block, tasks=tasks, level0=level0):
             """Per task: the block's member cells (or their sub-histogram), their min and max."""
             v = _column(block, covariate)
             out = []
             if not v.size:
                 return out
-            i0 = histogram_class_index(v, histogram.lo, histogram.hi, bins, reuse=True)
+            v = _cells_near(v, near)
+            if not v.size:
+                return [None] * len(tasks)
+            i0 = histogram_class_index(v, histogram.lo, histogram.hi, bins)
             keep = level0[i0]
             v, i0 = v[keep], i0[keep]
             for t in tasks:
@@ -577,6 +582,37 @@ def _order_statistics(source, ranks, histogram, covariate, cap, progress):
         tasks = nxt
         level += 1
     return [result[int(r)] for r in ranks]
+
+
+def _class_neighbourhoods(histogram, classes):
+    """Value intervals that hold every cell of the given classes: each class widened by a class width and
+    four units in the last place on both sides (rounding of the class index), overlapping ones joined."""
+    bins = histogram.counts.size
+    width = (histogram.hi - histogram.lo) / bins
+    slack = width + 4 * float(np.spacing(np.float32(max(abs(histogram.lo), abs(histogram.hi)))))
+    lows = np.where(classes > 0, histogram.lo + classes * width - slack, -np.inf)
+    highs = np.where(classes < bins - 1, histogram.lo + (classes + 1) * width + slack, np.inf)
+    intervals = []
+    for a, b in zip(lows, highs):
+        if intervals and a <= intervals[-1][1]:
+            intervals[-1][1] = max(intervals[-1][1], b)
+        else:
+            intervals.append([a, b])
+    return intervals
+
+
+def _cells_near(v, intervals):
+    """The values of ``v`` inside any of ``intervals`` (a cheap filter before the exact class index)."""
+    vmin, vmax = v.min(), v.max()
+    inside = None
+    for a, b in intervals:
+        if b < vmin or a > vmax:
+            continue
+        m = v >= v.dtype.type(a) if np.isfinite(a) else np.ones(v.shape, bool)
+        if np.isfinite(b):
+            m &= v <= v.dtype.type(b)
+        inside = m if inside is None else (inside | m)
+    return v[:0] if inside is None else v[inside]
 
 
 def _blocks_holding(block_ranges, classes, n_blocks):
