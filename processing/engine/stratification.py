@@ -184,6 +184,24 @@ def scaled_progress(progress, start, stop):
     return lambda f: progress(start + (stop - start) * min(1.0, max(0.0, f)))
 
 
+def throttled_progress(progress, step=0.005):
+    """A progress callable that passes on a fraction only once it has grown by ``step`` (and at the end).
+
+    The host's progress report costs a fraction of a millisecond a call, and the
+    passes tick once per block; in between the callable answers "not cancelled".
+    """
+    if progress is None:
+        return None
+    last = [-1.0]
+
+    def tick(fraction):
+        if fraction - last[0] < step and fraction < 1.0:
+            return False
+        last[0] = fraction
+        return progress(fraction)
+    return tick
+
+
 def _tick(progress, i, n):
     if progress is not None and progress((i + 1) / max(1, n)):
         raise Cancelled("Stratification cancelled.")

@@ -296,17 +296,6 @@ def _pair_codes(a, b):
     return (np.minimum(a, b) << 32) | np.maximum(a, b)
 
 
-def _count_codes(codes, counts, new_codes, new_counts=None):
-    """Add ``new_codes`` (with ``new_counts``, default one each) to the running (codes, counts)."""
-    if new_codes.size == 0:
-        return codes, counts
-    if new_counts is None:
-        new_codes, new_counts = np.unique(new_codes, return_counts=True)
-    merged, inverse = np.unique(np.concatenate([codes, new_codes]), return_inverse=True)
-    total = np.bincount(inverse, weights=np.concatenate([counts, new_counts]), minlength=merged.size)
-    return merged, np.rint(total).astype(np.int64)
-
-
 def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None, out_path=None):
     """Merge the patches below ``min_cells``: specks by the sieve rule, then the patch-graph merge.
 
@@ -343,9 +332,9 @@ def merge_raster_patches(path, min_cells, block_cells=BLOCK_CELLS, progress=None
             _rewrite_runs(band, graph, graph.values, out=out)
             return PatchCheck(0, 0, 0, 0)
         patch, patch_sizes, patch_strata = _number_patches(graph)
-        a, b = patch[graph.codes >> 32], patch[graph.codes & 0xFFFFFFFF]
-        pair_codes, shared = _count_codes(np.zeros(0, np.int64), np.zeros(0, np.int64), _pair_codes(a, b),
-                                          graph.counts)
+        pair_codes, shared = np.unique(_pair_codes(patch[graph.codes >> 32], patch[graph.codes & 0xFFFFFFFF]),
+                                       return_counts=True)
+        shared = shared.astype(np.int64)
         pairs = np.column_stack([pair_codes >> 32, pair_codes & 0xFFFFFFFF])
         groups, sieved_to = _sieve_groups(patch_sizes, patch_strata, pairs, shared, int(min_cells))
         if groups.n_patches > MAX_GRAPH_PATCHES:
@@ -394,8 +383,8 @@ class _RunGraph:
     ``strips`` are the (first row, rows, runs) read; per run: ``lengths``, ``values``
     (stratum id) and ``first`` (flat index of its first cell in the raster);
     ``link_a``/``link_b`` pair runs of one stratum that share a cell edge;
-    ``codes``/``counts`` are the pairs of runs of two strata that share cell
-    edges (:func:`_pair_codes`), and how many.
+    ``codes`` holds, per cell edge between two strata, the pair of runs on its
+    sides (:func:`_pair_codes`).
     """
 
     strips: list
@@ -405,7 +394,6 @@ class _RunGraph:
     link_a: np.ndarray
     link_b: np.ndarray
     codes: np.ndarray
-    counts: np.ndarray
 
 
 def _neighbour_runs(ids, runs, prev, prev_runs):
@@ -414,7 +402,9 @@ def _neighbour_runs(ids, runs, prev, prev_runs):
     values = ids.ravel()[runs.first]
     k = np.flatnonzero((values[:-1] > 0) & (values[1:] > 0) & (runs.first[1:] % width != 0))
     a, b = [k + runs.offset], [k + 1 + runs.offset]
-    down = np.flatnonzero((ids[:-1] != ids[1:]) & (ids[:-1] > 0) & (ids[1:] > 0))
+    down = np.flatnonzero(ids[:-1] != ids[1:])  # few cells: the tests for id 0 on those alone
+    flat_ids = ids.ravel()
+    down = down[(flat_ids[down] > 0) & (flat_ids[down + width] > 0)]
     a.append(runs.run_of(down))
     b.append(runs.run_of(down + width))
     if prev is not None:
@@ -458,9 +448,8 @@ def _run_graph(band, progress=None):
     def joined(parts, dtype=np.int64):
         return np.concatenate(parts).astype(dtype, copy=False) if parts else empty.astype(dtype)
 
-    codes, counts = np.unique(joined(neighbours), return_counts=True)
     return _RunGraph(strips, joined(lengths), joined(values, np.uint8), joined(first), joined(link_a),
-                     joined(link_b), codes, counts.astype(np.int64))
+                     joined(link_b), joined(neighbours))
 
 
 def _number_patches(graph):
@@ -475,8 +464,22 @@ def _number_patches(graph):
 
     n = graph.lengths.size
     matrix = coo_matrix((np.ones(graph.link_a.size, np.int8), (graph.link_a, graph.link_b)), shape=(n, n))
-    _, comp = connected_components(matrix, directed=False)
-    comp = np.where(graph.values > 0, comp, -1)
+    n_comp, comp = connected_components(matrix, directed=False)
+    inside = graph.values > 0
+    peak = np.maximum.accumulate(comp)
+    if peak[0] == 0 and peak[-1] == n_comp - 1 and not np.any(np.diff(peak) > 1):
+        # components numbered in the order of their first run, hence of their first cell (scipy numbers them
+        # so): the patches keep that order, without a sort
+        is_patch = np.zeros(n_comp, bool)
+        is_patch[comp[inside]] = True
+        rank = np.cumsum(is_patch)
+        patch = np.where(inside, rank[comp], 0)
+        patch_sizes = np.bincount(patch, weights=graph.lengths, minlength=int(rank[-1]) + 1).astype(np.int64)
+        patch_sizes[0] = 0
+        patch_strata = np.zeros(int(rank[-1]) + 1, np.int64)
+        patch_strata[patch[inside]] = graph.values[inside]
+        return patch, patch_sizes, patch_strata
+    comp = np.where(inside, comp, -1)
     stratum_comps, comp = np.unique(comp, return_inverse=True)
     if stratum_comps[0] == -1:  # the runs of id 0 form no patch
         comp -= 1

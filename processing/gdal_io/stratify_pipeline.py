@@ -65,6 +65,7 @@ def stratify_rasters(covariates, frame_wkb, crs_wkt, method, n_strata, output_ra
     polygonise (:func:`~.polygonising.polygonise_strata`).
     """
     categorical = method == strat.RASTER_CLASSES
+    progress = strat.throttled_progress(progress)
     with CovariateStack(covariates, frame_wkb, crs_wkt, categorical, block_cells) as stack:
         cells = sieve_cells(min_area_ha, stack.cell_area)
         # patches to merge: the assignment goes to a provisional raster, the merge writes the output once
