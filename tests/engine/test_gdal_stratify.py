@@ -9,6 +9,7 @@ from shapely.geometry import Polygon, box
 from shapely.geometry.polygon import orient
 from shapely.ops import transform
 
+from plotwise.processing.gdal_io import patches
 from plotwise.processing.gdal_io.covariate_stack import Covariate, block_windows
 from plotwise.processing.gdal_io.stratify_pipeline import stratify_rasters
 from plotwise.processing.engine import stratification as s
@@ -179,6 +180,50 @@ def test_sieve_leaves_no_patch_below_min_area(tmp_path):
         np.testing.assert_allclose(r.result.statistics.mean[h, 0], noisy[ids == h + 1].astype(float).mean(),
                                    rtol=1e-9)
     np.testing.assert_allclose(r.area_ha, np.bincount(ids.ravel(), minlength=5)[1:] * 0.09)
+
+
+def test_statistics_after_the_merge_equal_numpy_on_the_written_raster(tmp_path, monkeypatch):
+    # oracle: numpy on the stratum raster written. Two covariates (elevation and a smoothed noise on the same
+    # grid); the merge moves cells between strata and the statistics follow the moved cells alone: no
+    # recount over the raster and no separate patch count (the runs written are few)
+    elev = _elevation()
+    other = ndimage.gaussian_filter(np.random.default_rng(8).normal(size=(H, W)), 3.0).astype(np.float32)
+    p1, p2 = _write(tmp_path / "e.tif", elev, nodata=-9999), _write(tmp_path / "o.tif", other)
+    covariates = [Covariate(p1, "e"), Covariate(p2, "o")]
+    unmerged = str(tmp_path / "unmerged.tif")
+    stratify_rasters(covariates, [FRAME.wkb], UTM33, s.QUANTILE, 4, unmerged)
+    rules = []
+    accumulate = s.accumulate_statistics
+
+    def spy(source, n_strata, rule=None, *args, **kwargs):
+        rules.append(rule)
+        return accumulate(source, n_strata, rule, *args, **kwargs)
+
+    monkeypatch.setattr(s, "accumulate_statistics", spy)
+    monkeypatch.setattr(patches, "count_patches_and_runs", lambda *a, **k: pytest.fail("no separate patch count"))
+    out = str(tmp_path / "st.tif")
+    r = stratify_rasters(covariates, [FRAME.wkb], UTM33, s.QUANTILE, 4, out, min_area_ha=2.0, block_cells=4000)
+    assert None not in rules  # the only pass summing statistics is the assignment's
+    ids = _read(out)
+    assert np.count_nonzero(ids != _read(unmerged)) > 100  # the merge moved cells
+    gt = gdal.Open(out).GetGeoTransform()  # the raster covers the frame's window of the grid
+    c0, r0 = round((gt[0] - GT[0]) / GT[1]), round((gt[3] - GT[3]) / GT[5])
+    window = (slice(r0, r0 + ids.shape[0]), slice(c0, c0 + ids.shape[1]))
+    elev, other = elev[window], other[window]
+    x, y = (v[window] for v in _centres())
+    ok = _contains(FRAME, x, y) & (elev != -9999)
+    np.testing.assert_array_equal(ids > 0, ok)
+    np.testing.assert_allclose(r.area_ha, np.bincount(ids[ok], minlength=5)[1:] * 0.09)
+    st = r.result.statistics
+    for c, values in enumerate((elev, other)):
+        groups = [values[ids == h].astype(float) for h in range(1, r.result.n_strata + 1)]
+        np.testing.assert_allclose(st.mean[:, c], [g.mean() for g in groups], rtol=1e-9)
+        np.testing.assert_allclose(st.sd[:, c], [g.std() for g in groups], rtol=1e-7)
+    np.testing.assert_array_equal(st.chart_counts.sum(axis=1), st.count)
+    assert st.chart_counts.min() >= 0
+    for h in range(1, r.result.n_strata + 1):  # every patch reaches MIN_AREA (23 cells), scipy 4-connected
+        lab, _ = ndimage.label(ids == h)
+        assert np.bincount(lab.ravel())[1:].min() >= 23
 
 
 def test_small_blocks_give_the_same_strata(tmp_path):

@@ -198,6 +198,76 @@ def test_stratum_statistics_and_r_squared_equal_numpy(method):
     assert r.statistics.chart_counts.sum() == ok.sum()
 
 
+def test_exact_quantiles_of_large_values_in_a_narrow_range():
+    # float32 cells near 10^6 spread over 2 m: the fine classes are narrower than float32's resolution there
+    rng = np.random.default_rng(4)
+    a = (1.0e6 + rng.normal(0, 0.5, (180, 140))).astype(np.float32)
+    src = s.ArrayCellSource([a], block_rows=21)
+    p = [0.2, 0.4, 0.6, 0.8]
+    q, _ = s.exact_quantiles(src, p)
+    np.testing.assert_array_equal(q, np.quantile(a.astype(float).ravel(), p))  # numpy.quantile
+
+
+def test_report_histogram_counts_every_cell_in_its_own_stratum():
+    # the chart is re-binned from the fine histogram; the fine classes cut by a boundary are split exactly, so
+    # each stratum's row holds its own cells: row sums equal numpy's counts of b_{h-1} <= x < b_h
+    a, frame = _gamma_field(seed=5)
+    src = s.ArrayCellSource([a], frame, block_rows=29)
+    r = s.stratify_cells(src, s.QUANTILE, 6, ["gamma"])
+    cells = a[frame & np.isfinite(a)].astype(float)
+    counts = np.bincount(np.digitize(cells, np.quantile(cells, np.arange(1, 6) / 6)), minlength=6)  # numpy
+    chart = r.statistics.chart_counts
+    assert chart.min() >= 0
+    np.testing.assert_array_equal(chart.sum(axis=1), counts)
+
+
+def _row_runs(ids):
+    """Flat index of the first cell, length and id of every run of equal ids along the rows (numpy)."""
+    start = np.ones(ids.shape, bool)
+    start[:, 1:] = ids[:, 1:] != ids[:, :-1]
+    first = np.flatnonzero(start)
+    return first, np.diff(np.append(first, ids.size)), ids.ravel()[first]
+
+
+@pytest.mark.parametrize("use_histogram", [True, False])
+def test_statistics_after_moves_equal_numpy_on_the_moved_strata(use_histogram):
+    # truth by construction: a quarter of the runs of a quantile stratification move to a random other
+    # stratum; numpy recomputes the strata's counts, means and SDs on the moved raster
+    covs = _three_covariates(seed=9)
+    src = s.ArrayCellSource(covs, block_rows=11)
+    out, write = _ids_raster(src)
+    k = 4
+    r = s.stratify_cells(src, s.QUANTILE, k, ["a", "b", "c"], write=write)
+    ids = r.lut[out]
+    stats = r.statistics
+    if not use_histogram:  # a chart counted cell by cell over the chart range instead
+        stats = s.accumulate_statistics(src.with_strata(ids), k, shift=stats.overall_mean(),
+                                        chart_range=stats.chart_range, extremes=False)
+    rng = np.random.default_rng(2)
+    first, length, old = _row_runs(ids)
+    pick = np.flatnonzero((old > 0) & (rng.random(old.size) < 0.25))
+    new = (old[pick] - 1 + rng.integers(1, k, pick.size)) % k + 1
+    moves = s.CellMoves(ids.shape[1], first[pick], length[pick], old[pick], new)
+    after = s.statistics_after_moves(src, stats, moves, r.histogram if use_histogram else None)
+    moved = ids.copy().ravel()
+    for f, n, h in zip(first[pick], length[pick], new):
+        moved[f:f + n] = h
+    moved = moved.reshape(ids.shape)
+    ok = np.all([np.isfinite(c) for c in covs], axis=0)
+    np.testing.assert_array_equal(after.count, np.bincount(moved[ok], minlength=k + 1)[1:])
+    for c in range(3):
+        groups = [covs[c][ok & (moved == h)] for h in range(1, k + 1)]
+        np.testing.assert_allclose(after.mean[:, c], [g.mean() for g in groups], rtol=1e-10)
+        np.testing.assert_allclose(after.sd[:, c], [g.std() for g in groups], rtol=1e-8)
+    assert after.chart_counts.min() >= 0
+    np.testing.assert_array_equal(after.chart_counts.sum(axis=1), after.count)
+    if not use_histogram:  # numpy.histogram of each stratum's first covariate over the chart range
+        lo, hi = stats.chart_range
+        for h in range(k):
+            ref, _ = np.histogram(covs[0][ok & (moved == h + 1)], bins=s.CHART_BINS, range=(lo, hi))
+            np.testing.assert_array_equal(after.chart_counts[h], ref)
+
+
 # --- classes and bad input -----------------------------------------------------------------------------
 
 def test_raster_classes_become_strata():
