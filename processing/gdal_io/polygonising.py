@@ -196,16 +196,18 @@ def _successors(seg, width, height):
     keys = key(seg.stratum, vertex(seg.start), seg.direction)
     order = np.argsort(keys, kind="stable")
     sorted_keys = keys[order]
-    end = vertex(seg.end)
-    found = []
-    for turn in (1, 3):  # the left turn, the right turn
-        want = key(seg.stratum, end, (seg.direction + turn) % 4)
-        asked = np.argsort(want)
-        at = np.minimum(np.searchsorted(sorted_keys, want[asked]), keys.size - 1)
-        hit = np.full(keys.size, -1, np.int64)
-        hit[asked] = np.where(sorted_keys[at] == want[asked], order[at], -1)
-        found.append(hit)
-    left, right = found
+    want = key(seg.stratum, vertex(seg.end), 0)  # the first key of the segments of the stratum starting there
+    asked = np.argsort(want)
+    at = np.searchsorted(sorted_keys, want[asked])
+    turn = {1: np.full(keys.size, -1, np.int64), 3: np.full(keys.size, -1, np.int64)}  # the left, the right turn
+    for step in (0, 1):  # at most two segments of one stratum start at a vertex (two cells meeting at a corner)
+        pos = np.minimum(at + step, keys.size - 1)
+        found = sorted_keys[pos]
+        here = (found >> 2) == (want[asked] >> 2)
+        for t, hit in turn.items():
+            ok = here & ((found & 3) == (seg.direction[asked] + t) % 4)
+            hit[asked[ok]] = order[pos[ok]]
+    left, right = turn[1], turn[3]
     # where both exist, two cells of the stratum meet at a corner: one patch goes on with the right turn (its
     # ring splits into an outer ring and a hole that touch there), two patches with the left (each its own ring)
     same_patch = (right >= 0) & (seg.patch[np.maximum(right, 0)] == seg.patch)
