@@ -79,14 +79,18 @@ class CellBlock:
         Stratum id per cell (0 = none) when the source carries a stratum raster.
     nodata : sequence or None
         NoData value per covariate (None: NaN only).
+    on_all_valid : callable or None
+        Called with the answer of :attr:`all_valid` once it is worked out (a
+        source can remember it for later passes over the same cells).
     """
 
-    __slots__ = ("window", "values", "in_frame", "strata", "nodata", "_valid", "_all_valid")
+    __slots__ = ("window", "values", "in_frame", "strata", "nodata", "_valid", "_all_valid", "_on_all_valid")
 
-    def __init__(self, window, values, in_frame, valid=None, strata=None, nodata=None):
+    def __init__(self, window, values, in_frame, valid=None, strata=None, nodata=None, on_all_valid=None):
         self.window, self.values, self.in_frame = window, values, in_frame
         self.strata, self.nodata, self._valid = strata, nodata, valid
         self._all_valid = None
+        self._on_all_valid = on_all_valid
 
     @property
     def valid(self):
@@ -100,6 +104,8 @@ class CellBlock:
         """True when every cell of the block is valid (a block wholly inside the frame, without NoData)."""
         if self._all_valid is None:
             self._all_valid = bool(self.valid.all())
+            if self._on_all_valid is not None:
+                self._on_all_valid(self._all_valid)
         return self._all_valid
 
     def spread(self, ids):
@@ -417,6 +423,32 @@ def histogram_class_index(v, lo, hi, bins, reuse=False):
     return out
 
 
+def class_counts(v, lo, hi, bins, ends):
+    """``numpy.bincount(histogram_class_index(v, lo, hi, bins), minlength=bins)``, faster inside the range.
+
+    ``ends`` holds ``v``'s minimum and maximum. When the unclipped class
+    positions ``(v - lo) * bins / (hi - lo)`` of both ends lie in (-1, bins + 1),
+    so do all the others (the arithmetic is monotone): truncation to int32 then
+    gives every class as the clipped index does, but for position ``bins``,
+    counted with the last class; no clipping pass is needed.
+    """
+    dt = v.dtype
+    scale = dt.type(bins / (hi - lo)) if hi > lo else dt.type(0)
+    edge = (np.asarray(ends, dt) - dt.type(lo)) * scale
+    if not (edge[0] > -1 and edge[1] < bins + 1):
+        return np.bincount(histogram_class_index(v, lo, hi, bins, reuse=True), minlength=bins)
+    t = _scratch("class-float", v.size, dt)
+    np.subtract(v, dt.type(lo), out=t)
+    t *= scale
+    small = _scratch("class-int32", v.size, np.int32)
+    np.copyto(small, t, casting="unsafe")  # truncation, as astype
+    index = _scratch("class-index", v.size, np.intp)
+    np.copyto(index, small)
+    counts = np.bincount(index, minlength=bins + 1)
+    counts[bins - 1] += counts[bins]
+    return counts[:bins]
+
+
 def streamed_histogram(source, bins, value_range=None, covariate=0, progress=None):
     """Frequency table of one covariate in one pass over the valid cells.
 
@@ -437,9 +469,9 @@ def streamed_histogram(source, bins, value_range=None, covariate=0, progress=Non
         v = _column(block, covariate)
         if not v.size:
             return None
-        counts = np.bincount(histogram_class_index(v, lo, hi, bins, reuse=True), minlength=bins)
         ends = np.array([v.min(), v.max()], v.dtype)
-        return counts, float(ends[0]), float(ends[1]), histogram_class_index(ends, lo, hi, bins)
+        return class_counts(v, lo, hi, bins, ends), float(ends[0]), float(ends[1]), histogram_class_index(ends, lo, hi,
+                                                                                                           bins)
 
     counts = np.zeros(bins, np.int64)
     vmin, vmax = math.inf, -math.inf

@@ -28,6 +28,9 @@ BLOCK_CELLS = 1 << 18
 MEM_MASK_CELLS = 1 << 25
 #: blocks read between two releases of GDAL's block cache (16 blocks: 4 Mi cells, 16 MB of float32 per band)
 CACHE_RELEASE_BLOCKS = 16
+#: what a pass found out about a block, kept for the next passes: no cell in the frame; every cell in the frame
+#: and with a value in every covariate (its frame mask and validity need no reading or testing again)
+_OUTSIDE, _VALID = 1, 2
 
 
 @dataclass(frozen=True)
@@ -202,6 +205,7 @@ class CovariateStack:
         self._windows = block_windows(self.grid.width, self.grid.height, band0.GetBlockSize(), (c0, r0),
                                        block_cells)
         self.n_blocks = len(self._windows)
+        self._known = {}  # block index -> _OUTSIDE or _VALID, once a pass has found it so
 
     def _no_overlap(self):
         return InputError(message(QT_TRANSLATE_NOOP("PlotwiseEngine",
@@ -244,7 +248,8 @@ class CovariateStack:
             ds = gdal.GetDriverByName("MEM").Create("", g.width, g.height, 1, gdal.GDT_Byte)
         else:
             ds = gdal.GetDriverByName("GTiff").Create(os.path.join(self.workdir, "frame.tif"), g.width, g.height,
-                                                      1, gdal.GDT_Byte, ["TILED=YES", "SPARSE_OK=YES"])
+                                                      1, gdal.GDT_Byte, ["TILED=YES", "SPARSE_OK=YES", "BLOCKXSIZE=512",
+                                                                         "BLOCKYSIZE=512"])
         ds.SetGeoTransform(g.geotransform)
         ds.SetProjection(g.crs_wkt)
         mem = ogr.GetDriverByName("Memory").CreateDataSource("frame")
@@ -253,6 +258,7 @@ class CovariateStack:
         feat.SetGeometry(frame)
         layer.CreateFeature(feat)
         gdal.RasterizeLayer(ds, [1], layer, burn_values=[1])
+        ds.FlushCache()  # read back from the file, not from GDAL's cache of written blocks (three times slower)
         return ds
 
     # -- serving -------------------------------------------------------------
@@ -283,20 +289,38 @@ class CovariateStack:
         for i, win in enumerate(self.windows()):
             if keep is not None and not keep[i]:
                 continue
+            if i % CACHE_RELEASE_BLOCKS == 0:
+                self._release_cache(strata_band)
             xo, yo, xs, ys = win
-            mask = self._mask_band.ReadAsArray(xo, yo, xs, ys, buf_obj=ring.get("frame", (ys, xs), np.uint8))
-            frame = mask.view(bool)  # burnt 0/1
+            known = self._known.get(i)
+            if known == _OUTSIDE:
+                frame = np.broadcast_to(np.zeros(1, bool), (ys, xs))
+            elif known == _VALID:  # wholly inside the frame, a value in every covariate: seen in an earlier pass
+                frame = np.broadcast_to(np.ones(1, bool), (ys, xs))
+                vals = tuple(r.read(xo, yo, xs, ys, ring) for r in self._readers)
+                strata = None if strata_band is None else strata_band.ReadAsArray(xo, yo, xs, ys)
+                yield strat.CellBlock(win, vals, frame, frame, strata, self.nodata)
+                continue
+            else:
+                frame = self._mask_band.ReadAsArray(xo, yo, xs, ys, buf_obj=ring.get("frame", (ys, xs), np.uint8))
+                frame = frame.view(bool)  # burnt 0/1
             if not frame.any():
+                self._known[i] = _OUTSIDE
                 empty = np.broadcast_to(np.zeros(1, np.float32), (ys, xs))
-                vals = (empty,) * len(self._readers)
-                yield strat.CellBlock(win, vals, frame, frame, None if strata_band is None else
-                                      np.zeros((ys, xs), np.uint8))
+                yield strat.CellBlock(win, (empty,) * len(self._readers), frame, frame,
+                                      None if strata_band is None else np.zeros((ys, xs), np.uint8))
                 continue
             vals = tuple(r.read(xo, yo, xs, ys, ring) for r in self._readers)
             strata = None if strata_band is None else strata_band.ReadAsArray(xo, yo, xs, ys)
-            yield strat.CellBlock(win, vals, frame, None, strata, self.nodata)  # validity: worked out by the worker
-            if i % CACHE_RELEASE_BLOCKS == CACHE_RELEASE_BLOCKS - 1:
-                self._release_cache(strata_band)
+            remember = self._remember_valid(i) if frame.all() else None
+            # validity: worked out by the worker
+            yield strat.CellBlock(win, vals, frame, None, strata, self.nodata, on_all_valid=remember)
+
+    def _remember_valid(self, i):
+        def remember(all_valid):
+            if all_valid:
+                self._known[i] = _VALID
+        return remember
 
     def _release_cache(self, strata_band=None):
         """Drop GDAL's cached blocks of the bands read: every block is read into our own buffers.
