@@ -178,14 +178,20 @@ class PopulationGrid:
         """Area of every stratum, from its cells (km²)."""
         return self.stratum_cells * self.cell_area / M2_PER_KM2
 
-    @property
+    @functools.cached_property
     def expected_total(self):
-        """``Σ μ_c`` over the frame."""
+        """``Σ μ_c`` over the frame (computed once: every replicate needs it)."""
         return float(self.mu.sum())
 
-    @property
+    @functools.cached_property
     def sum_mu_squared(self):
+        """``Σ μ_c²`` over the frame (computed once)."""
         return float(np.sum(self.mu * self.mu))
+
+    @functools.cached_property
+    def count_tables(self):
+        """The grid's :class:`CountTables` (built once, on first use)."""
+        return count_tables(self)
 
 
 def population_grid(density, geotransform, frame, strata=None, keys=None, progress=None):
@@ -458,8 +464,23 @@ def _slab(a, p, q):
     return lo, hi
 
 
-def unit_cells(centres, bearings, region, grid, factor, unit_codes=None):
-    """The sub-cells whose centres lie in each unit (and in its stratum).
+@dataclass(frozen=True, eq=False)
+class UnitRows:
+    """The rows of sub-cells each unit spans: one entry per (unit, row) with at least one covered sub-cell.
+
+    ``row`` is the row on the subdivided grid, ``c_lo`` and ``c_hi`` the first
+    and last covered sub-cell column (inclusive).
+    """
+
+    unit: np.ndarray
+    row: np.ndarray
+    c_lo: np.ndarray
+    c_hi: np.ndarray
+    factor: int
+
+
+def unit_rows(centres, bearings, region, grid, factor):
+    """The column interval of sub-cell centres each unit covers, row by row.
 
     Rows of sub-cells are taken within the region's reach of the centre; on a
     row at height ``y`` the covered x form one interval: ``|x − x0| ≤
@@ -476,13 +497,10 @@ def unit_cells(centres, bearings, region, grid, factor, unit_codes=None):
     grid : PopulationGrid
     factor : int
         Sub-cells per cell side.
-    unit_codes : ndarray of int, optional
-        Stratum code of each unit: the unit counts only cells of that stratum;
-        -1 (or None) counts every cell of the frame.
 
     Returns
     -------
-    UnitCells
+    UnitRows
     """
     centres = np.asarray(centres, dtype=float).reshape(-1, 2)
     bearings = np.broadcast_to(np.asarray(bearings, dtype=float), (len(centres),))
@@ -513,20 +531,139 @@ def unit_cells(centres, bearings, region, grid, factor, unit_codes=None):
         lo, hi = np.maximum(lo1, lo2), np.minimum(hi1, hi2)
     x = cx[unit]
     big = float(cols_f + 2)
-    c_lo = np.clip(np.ceil(np.clip((x + lo - ox) / fdx - 0.5, -2.0, big)), 0, cols_f)
-    c_hi = np.clip(np.floor(np.clip((x + hi - ox) / fdx - 0.5, -2.0, big)), -1, cols_f - 1)
-    n_cols = np.maximum(c_hi - c_lo + 1, 0).astype(np.int64)
-    span, step = _ragged(n_cols)
-    col = c_lo.astype(np.int64)[span] + step
-    row = row[span]
-    unit = unit[span]
+    c_lo = np.clip(np.ceil(np.clip((x + lo - ox) / fdx - 0.5, -2.0, big)), 0, cols_f).astype(np.int64)
+    c_hi = np.clip(np.floor(np.clip((x + hi - ox) / fdx - 0.5, -2.0, big)), -1, cols_f - 1).astype(np.int64)
+    some = c_hi >= c_lo
+    return UnitRows(unit[some], row[some], c_lo[some], c_hi[some], f)
+
+
+def unit_cells(centres, bearings, region, grid, factor, unit_codes=None):
+    """The sub-cells whose centres lie in each unit (and in its stratum).
+
+    The rows and column intervals of :func:`unit_rows`, expanded to sub-cells
+    by :func:`row_cells`.
+
+    Parameters
+    ----------
+    centres, bearings, region, grid, factor
+        As for :func:`unit_rows`.
+    unit_codes : ndarray of int, optional
+        Stratum code of each unit: the unit counts only cells of that stratum;
+        -1 (or None) counts every cell of the frame.
+
+    Returns
+    -------
+    UnitCells
+    """
+    return row_cells(unit_rows(centres, bearings, region, grid, factor), grid, unit_codes)
+
+
+def row_cells(rows, grid, unit_codes=None):
+    """The sub-cells of the intervals of ``rows`` (a :class:`UnitRows`) that lie in the frame and in each
+    unit's stratum (``unit_codes``, as for :func:`unit_cells`)."""
+    f = rows.factor
+    w = grid.shape[1]
+    span, step = _ragged(rows.c_hi - rows.c_lo + 1)
+    col = rows.c_lo[span] + step
+    row = rows.row[span]
+    unit = rows.unit[span]
     coarse = (row // f) * w + (col // f)
     code = grid.code.ravel()[coarse]
     keep = code >= 0
     if unit_codes is not None:
         wanted = np.asarray(unit_codes)[unit]
         keep &= (wanted < 0) | (code == wanted)
-    return UnitCells(unit[keep], row[keep] * cols_f + col[keep], coarse[keep], f)
+    return UnitCells(unit[keep], row[keep] * (w * f) + col[keep], coarse[keep], f)
+
+
+def _some_rows(rows, keep):
+    """The entries of ``rows`` where ``keep`` (one bool per entry) holds."""
+    return UnitRows(rows.unit[keep], rows.row[keep], rows.c_lo[keep], rows.c_hi[keep], rows.factor)
+
+
+# ----------------------------------------------------------------------------
+# expected counts of units from row sums
+# ----------------------------------------------------------------------------
+@dataclass(frozen=True, eq=False)
+class CountTables:
+    """Row sums of a :class:`PopulationGrid` that give a unit's expected count without visiting its cells.
+
+    Attributes
+    ----------
+    prefix : ndarray, shape (rows, cols + 1)
+        ``prefix[r, c] = Σ_{c' < c} μ[r, c']``: the running sum of every row
+        (a summed-area table in one direction; Crow 1984), so that
+        ``Σ_{c=a}^{b} μ[r, c] = prefix[r, b + 1] − prefix[r, a]``.
+    run_end : ndarray of int32, shape (rows, cols)
+        Last column of the run of equal stratum codes that holds the cell: a
+        row interval ``[a, b]`` lies in one stratum when ``run_end[r, a] ≥ b``.
+    """
+
+    prefix: np.ndarray
+    run_end: np.ndarray
+
+
+def count_tables(grid):
+    """The :class:`CountTables` of ``grid`` (about 12 bytes per cell)."""
+    h, w = grid.shape
+    prefix = np.zeros((h, w + 1))
+    np.cumsum(grid.mu, axis=1, out=prefix[:, 1:])
+    ends = np.empty((h, w), dtype=np.int32)
+    ends[:, -1] = w - 1
+    last = np.arange(w - 1, dtype=np.int32)
+    ends[:, :-1] = np.where(grid.code[:, 1:] != grid.code[:, :-1], last, w)
+    run_end = np.minimum.accumulate(ends[:, ::-1], axis=1)[:, ::-1]
+    return CountTables(np.ascontiguousarray(prefix), np.ascontiguousarray(run_end))
+
+
+def expected_unit_counts(rows, grid, n_units, unit_codes=None):
+    """``Λ_u = Σ_c μ_c m_c / f²``: each unit's expected count, from row sums.
+
+    On a row of sub-cells the interval ``[a, b]`` of covered sub-cell columns
+    spans the surface cells ``A = a // f`` to ``B = b // f``; every sub-cell
+    carries ``μ / f²`` of its cell, so the row holds
+
+        ``f Σ_{c=A}^{B} μ_c − (a − f A) μ_A − (f B + f − 1 − b) μ_B``
+
+    sub-cell shares (the cells from A to B counted whole, less the sub-cells
+    left of ``a`` and right of ``b``), the running sums of
+    :class:`CountTables` giving the middle sum in two look-ups. Cells outside
+    the frame have ``μ = 0``. A unit of a stratum counts only that stratum's
+    cells: a row within one run of the stratum's code is summed so, and the
+    few rows that cross a stratum's edge sub-cell by sub-cell. The cells
+    counted are those of :func:`unit_cells` for the same rows.
+
+    Parameters
+    ----------
+    rows : UnitRows
+    grid : PopulationGrid
+    n_units : int
+    unit_codes : ndarray of int, optional
+        Stratum code of each unit (-1 or None: the whole frame).
+
+    Returns
+    -------
+    ndarray, shape (n_units,)
+    """
+    f = rows.factor
+    tables = grid.count_tables
+    r, a, b = rows.row // f, rows.c_lo, rows.c_hi
+    first, last = a // f, b // f
+    mu = grid.mu
+    share = tables.prefix[r, last + 1] - tables.prefix[r, first]
+    if f > 1:  # the sub-cells of the end cells outside the interval
+        share = f * share - (a - f * first) * mu[r, first] - (f * last + f - 1 - b) * mu[r, last]
+    if unit_codes is not None:
+        wanted = np.asarray(unit_codes)[rows.unit]
+        own = np.flatnonzero(wanted >= 0)  # rows of units that count one stratum
+        ro, fo, lo = r[own], first[own], last[own]
+        mixed = own[(grid.code[ro, fo] != wanted[own]) | (tables.run_end[ro, fo] < lo)]
+        if mixed.size:  # rows over a stratum's edge: their sub-cells one by one
+            span, step = _ragged(b[mixed] - a[mixed] + 1)
+            cells = r[mixed][span] * grid.shape[1] + (a[mixed][span] + step) // f
+            mine = grid.code.ravel()[cells] == wanted[mixed][span]
+            share[mixed] = np.bincount(span, weights=np.where(mine, mu.ravel()[cells], 0.0), minlength=mixed.size)
+    return np.bincount(rows.unit, weights=share, minlength=n_units) / float(f * f)
 
 
 # ----------------------------------------------------------------------------
@@ -565,6 +702,25 @@ def realise_counts(cells, n_units, grid, rng, overdispersion=0.0):
     -------
     RealisedCounts
     """
+    covered = _covered_animals(cells, n_units, grid, rng, overdispersion)
+    rest = _rest_of_frame(grid, rng, overdispersion, covered)
+    return RealisedCounts(covered.counts, covered.areas_m2, float(covered.animals + rest))
+
+
+@dataclass(frozen=True, eq=False)
+class _Covered:
+    """The animals realised in covered sub-cells, and what their surface cells leave to the rest of the frame."""
+
+    counts: np.ndarray
+    areas_m2: np.ndarray
+    animals: float
+    mu_sum: float
+    mu_square: float
+    partly: float
+
+
+def _covered_animals(cells, n_units, grid, rng, overdispersion):
+    """``Poisson(μ_c G_c / f²)`` in every covered sub-cell, summed per unit (see :func:`realise_counts`)."""
     f2 = float(cells.factor) ** 2
     k = float(overdispersion or 0.0)
     fine, first, inverse = np.unique(cells.fine, return_index=True, return_inverse=True)
@@ -575,14 +731,115 @@ def realise_counts(cells, n_units, grid, rng, overdispersion=0.0):
     animals = rng.poisson((mu_c * g / f2)[c_inverse]) if fine.size else np.zeros(0, dtype=np.int64)
     counts = np.bincount(cells.unit, weights=animals[inverse], minlength=n_units)
     areas = np.bincount(cells.unit, minlength=n_units) * (grid.cell_area / f2)
-    rest_mean = max(grid.expected_total - float(mu_c.sum()), 0.0)
-    rest_square = max(grid.sum_mu_squared - float(np.sum(mu_c * mu_c)), 0.0)
     partly = float(np.sum(mu_c * g * (1.0 - fine_per_coarse / f2)))
+    return _Covered(counts, areas, float(animals.sum()), float(mu_c.sum()), float(np.sum(mu_c * mu_c)), partly)
+
+
+def _rest_of_frame(grid, rng, overdispersion, covered, apart_mean=0.0):
+    """One draw for the animals of the frame outside the covered sub-cells (see the module docstring).
+
+    ``apart_mean``: the expected count of units realised whole (:func:`realise_survey`), which leaves the rest.
+    """
+    k = float(overdispersion or 0.0)
+    rest_mean = max(grid.expected_total - covered.mu_sum - apart_mean, 0.0)
+    rest_square = max(grid.sum_mu_squared - covered.mu_square, 0.0)
     if k > 0 and rest_mean > 0 and rest_square > 0:
         shape = k * rest_mean ** 2 / rest_square
         rest_mean = rng.gamma(shape, rest_mean / shape)
-    rest = rng.poisson(rest_mean + partly)
-    return RealisedCounts(counts, areas, float(animals.sum() + rest))
+    return rng.poisson(rest_mean + covered.partly)
+
+
+def units_apart(rows, grid, n_units):
+    """True for each unit that covers no surface cell another unit covers.
+
+    On every row of surface cells a unit covers the columns between the ends
+    of its sub-cell intervals on that row (all of them when the unit is
+    convex; more, which is safe, otherwise). The (unit, row) intervals sorted
+    by row and first column overlap an earlier one exactly when the running
+    maximum of the earlier ends reaches their start, and the earlier interval
+    that holds that maximum overlaps them too (a sweep over the intervals, as
+    in Bentley & Ottmann 1979); every unit of such a pair may share cells.
+
+    Parameters
+    ----------
+    rows : UnitRows
+        From :func:`unit_rows` (ordered by unit, then row).
+    grid : PopulationGrid
+    n_units : int
+
+    Returns
+    -------
+    ndarray of bool, shape (n_units,)
+    """
+    f = rows.factor
+    w = grid.shape[1]
+    apart = np.ones(int(n_units), dtype=bool)
+    if rows.unit.size == 0:
+        return apart
+    coarse_row = rows.row // f
+    key = rows.unit * grid.shape[0] + coarse_row
+    starts = np.flatnonzero(np.r_[True, key[1:] != key[:-1]])
+    lo = np.minimum.reduceat(rows.c_lo // f, starts) + coarse_row[starts] * w
+    hi = np.maximum.reduceat(rows.c_hi // f, starts) + coarse_row[starts] * w
+    order = np.argsort(lo, kind="stable")
+    unit, lo, hi = rows.unit[starts][order], lo[order], hi[order]
+    reach = np.maximum.accumulate(hi)
+    holder = np.maximum.accumulate(np.where(hi == reach, np.arange(hi.size), 0))
+    later = np.flatnonzero(reach[:-1] >= lo[1:]) + 1
+    apart[unit[later]] = False
+    apart[unit[holder[later - 1]]] = False
+    return apart
+
+
+@dataclass(frozen=True, eq=False)
+class SurveyCounts:
+    """Counts of one simulated survey: per unit, the realised total of the frame, and how many units were
+    realised whole (:func:`realise_survey`)."""
+
+    counts: np.ndarray
+    total: float
+    n_apart: int
+
+
+def realise_survey(centres, bearings, unit_codes, setup, rng):
+    """Realise one population and count it in every unit of a survey.
+
+    For Poisson counts the animals of a unit that covers no surface cell
+    another unit covers (:func:`units_apart`) are one draw ``Poisson(Λ_u)``, with
+    ``Λ_u`` from :func:`expected_unit_counts`: the sum of independent Poisson
+    counts over its sub-cells has exactly that law (Johnson, Kemp & Kotz 2005,
+    §4.8), and its cells are counted by no other unit. Units that may share
+    cells, and every unit of negative binomial counts (whose cells each carry
+    their own gamma multiplier), are realised sub-cell by sub-cell as in
+    :func:`realise_counts`, so that overlapping units count the same animals.
+    The rest of the frame is one draw, its mean less the units' expected counts.
+
+    Parameters
+    ----------
+    centres : ndarray, shape (n, 2)
+    bearings : ndarray, shape (n,)
+    unit_codes : ndarray of int, shape (n,)
+        Stratum code of each unit (-1: the whole frame).
+    setup : ComparisonSetup
+    rng : numpy.random.Generator
+
+    Returns
+    -------
+    SurveyCounts
+    """
+    grid, k = setup.grid, setup.overdispersion
+    n = len(np.asarray(centres).reshape(-1, 2))
+    unit_codes = np.broadcast_to(np.asarray(unit_codes), (n,))
+    rows = unit_rows(centres, bearings, setup.region, grid, setup.factor)
+    apart = units_apart(rows, grid, n) if k == 0 else np.zeros(n, dtype=bool)
+    whole = apart[rows.unit]
+    covered = _covered_animals(row_cells(_some_rows(rows, ~whole), grid, unit_codes), n, grid, rng, k)
+    lam = expected_unit_counts(_some_rows(rows, whole), grid, n, unit_codes)[apart]
+    own = rng.poisson(lam) if lam.size else np.zeros(0, dtype=np.int64)
+    rest = _rest_of_frame(grid, rng, k, covered, float(lam.sum()))
+    counts = np.array(covered.counts, dtype=float)
+    counts[apart] = own
+    return SurveyCounts(counts, float(covered.animals + own.sum() + rest), int(apart.sum()))
 
 
 # ----------------------------------------------------------------------------
@@ -740,12 +997,11 @@ def stratum_unit_sd(grid, prepared, codes, region, factor, bearing, overdispersi
     spec = layout.LayoutSpec(bearing=float(bearing))
     for st, code in zip(prepared.strata, codes):  # a loop over strata (tens)
         centres = layout.simple_random_centres(st, draws, rng)
-        cells = unit_cells(centres, _bearings(spec, len(centres), rng), region, grid, factor,
-                           np.full(len(centres), code))
-        mu = grid.mu.ravel()[cells.coarse] / f2
-        lam = np.bincount(cells.unit, weights=mu, minlength=len(centres))
+        bearings, unit_codes = _bearings(spec, len(centres), rng), np.full(len(centres), code)
+        lam = expected_unit_counts(unit_rows(centres, bearings, region, grid, factor), grid, len(centres), unit_codes)
         extra = np.zeros(len(centres))
-        if overdispersion > 0 and cells.unit.size:
+        if overdispersion > 0:
+            cells = unit_cells(centres, bearings, region, grid, factor, unit_codes)
             pair = cells.unit.astype(np.int64) * grid.mu.size + cells.coarse
             uniq, m = np.unique(pair, return_counts=True)
             mu_pair = grid.mu.ravel()[uniq % grid.mu.size] * m / f2
@@ -834,14 +1090,16 @@ def pilot_sd(setup, rng):
     sds = []
     for st, code in zip(setup.strata.strata, setup.stratum_codes):  # a loop over strata (tens)
         centres = layout.simple_random_centres(st, setup.pilot_units, rng)
-        cells = unit_cells(centres, _bearings(setup.spec, len(centres), rng), setup.region, grid, setup.factor,
-                           np.full(len(centres), code))
-        pair = cells.unit.astype(np.int64) * grid.mu.size + cells.coarse
-        uniq, m = np.unique(pair, return_counts=True)
-        mu_pair = grid.mu.ravel()[uniq % grid.mu.size] * m / f2
+        bearings, unit_codes = _bearings(setup.spec, len(centres), rng), np.full(len(centres), code)
         if k > 0:
-            mu_pair = mu_pair * rng.gamma(k, 1.0 / k, size=uniq.size)
-        lam = np.bincount(uniq // grid.mu.size, weights=mu_pair, minlength=len(centres))
+            cells = unit_cells(centres, bearings, setup.region, grid, setup.factor, unit_codes)
+            pair = cells.unit.astype(np.int64) * grid.mu.size + cells.coarse
+            uniq, m = np.unique(pair, return_counts=True)
+            mu_pair = grid.mu.ravel()[uniq % grid.mu.size] * m / f2 * rng.gamma(k, 1.0 / k, size=uniq.size)
+            lam = np.bincount(uniq // grid.mu.size, weights=mu_pair, minlength=len(centres))
+        else:
+            lam = expected_unit_counts(unit_rows(centres, bearings, setup.region, grid, setup.factor), grid,
+                                       len(centres), unit_codes)
         sds.append(float(np.std(rng.poisson(lam), ddof=1)))
     return np.asarray(sds)
 
@@ -956,9 +1214,7 @@ def _replicate(setup, plans, rng, confidence, variance_method):
         labels.append(np.repeat(np.asarray(plan.labels, dtype=object), per))
         owners.append(np.full(len(drawn.centres), j))
     all_centres = np.concatenate(centres)
-    cells = unit_cells(all_centres, np.concatenate(bearings), setup.region, setup.grid, setup.factor,
-                       np.concatenate(codes))
-    realised = realise_counts(cells, len(all_centres), setup.grid, rng, setup.overdispersion)
+    realised = realise_survey(all_centres, np.concatenate(bearings), np.concatenate(codes), setup, rng)
     owner = np.concatenate(owners)
     local = {SYSTEMATIC_GRID, SPATIALLY_BALANCED}
     rows = {}
