@@ -430,7 +430,7 @@ def counts_from_field(values, feature_ids, field_name="N_FIELD"):
     return np.asarray(out, dtype=int)
 
 
-def stratum_label(key):
+def unit_id_prefix(key):
     """Unit-id prefix for a stratum value: ``S3`` for 3, ``forest`` for "forest"."""
     if key is None:
         return "U"
@@ -572,7 +572,7 @@ def merge_strata(frame_input, kept):
             )
         groups.setdefault(key, []).append((i, g))
     keys = sorted(groups, key=natural_key)
-    labels = [stratum_label(k) for k in keys]
+    labels = [unit_id_prefix(k) for k in keys]
     if len(set(labels)) != len(labels):  # e.g. "a b" and "a_b"
         labels = [f"S{j + 1}" for j in range(len(keys))]
     merged = []
