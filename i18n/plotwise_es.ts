@@ -1987,37 +1987,37 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="125"/>
+        <location filename="../processing/bridge.py" line="137"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="422"/>
+        <location filename="../processing/bridge.py" line="118"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="173"/>
+        <location filename="../processing/bridge.py" line="177"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="179"/>
+        <location filename="../processing/bridge.py" line="183"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="349"/>
+        <location filename="../processing/bridge.py" line="353"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="378"/>
+        <location filename="../processing/bridge.py" line="382"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="384"/>
+        <location filename="../processing/bridge.py" line="388"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
@@ -2225,52 +2225,52 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>El tamaño de celda debe estar entre 10 y 500 m (se recibió {cell_size:g} m).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="223"/>
+        <location filename="../processing/engine/design_comparison.py" line="229"/>
         <source>The density surface must be a single raster band.</source>
         <translation>La superficie de densidad debe ser una sola banda ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="227"/>
+        <location filename="../processing/engine/design_comparison.py" line="233"/>
         <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
         <translation>La superficie de densidad debe ser un ráster orientado al norte (sin rotación); reproyéctela primero.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="236"/>
+        <location filename="../processing/engine/design_comparison.py" line="242"/>
         <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
         <translation>La superficie de densidad no se superpone al marco de muestreo. Compruebe que ambos cubren la misma zona (y sus sistemas de referencia de coordenadas).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="261"/>
+        <location filename="../processing/engine/design_comparison.py" line="267"/>
         <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
         <translation>Un estrato no tiene valor de estrato (NULL). Dé un valor a cada estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="293"/>
+        <location filename="../processing/engine/design_comparison.py" line="299"/>
         <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
         <translation>{overlap} celda(s) de la superficie están en más de un estrato; cada una se asignó al primero. Los estratos no deberían superponerse.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="305"/>
+        <location filename="../processing/engine/design_comparison.py" line="311"/>
         <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
         <translation>Ningún centro de celda de la superficie de densidad cae en el marco de muestreo: las celdas son demasiado gruesas para él, o ambos no se superponen.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="312"/>
+        <location filename="../processing/engine/design_comparison.py" line="318"/>
         <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
         <translation>La superficie de densidad tiene {n} celda(s) negativa(s) en el marco de muestreo. Los animales esperados por km² deben ser 0 o más: corrija la superficie (por ejemplo, recórtela en 0).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="319"/>
+        <location filename="../processing/engine/design_comparison.py" line="325"/>
         <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
         <translation>{n} celda(s) del marco de muestreo ({share:.1%}) no tienen valor en la superficie de densidad y quedan fuera de la población: la comparación vale para el resto del marco.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="327"/>
+        <location filename="../processing/engine/design_comparison.py" line="333"/>
         <source>The density surface has no value in the frame.</source>
         <translation>La superficie de densidad no tiene ningún valor en el marco de muestreo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="333"/>
+        <location filename="../processing/engine/design_comparison.py" line="339"/>
         <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
         <translation>Los estratos {ids} no contienen ningún centro de celda de la superficie de densidad dentro del marco de muestreo. Quítelos, fusiónelos con un vecino, o use una superficie más fina.</translation>
     </message>
@@ -2300,37 +2300,37 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>SIZE debe ser mayor que 0 m: es el tamaño de la unidad lineal.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="408"/>
+        <location filename="../processing/engine/design_comparison.py" line="414"/>
         <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
         <translation>Un transecto lineal necesita la semianchura de su franja de conteo (más de 0 m): los animales se cuentan hasta esa distancia a cada lado de la línea.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="675"/>
+        <location filename="../processing/engine/design_comparison.py" line="932"/>
         <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
         <translation>La sobredispersión k debe ser 0 (conteos de Poisson) o más.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="696"/>
+        <location filename="../processing/engine/design_comparison.py" line="953"/>
         <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
         <translation>Los estratos cubren el {share:.1%} del marco de muestreo: cada diseño se compara en la parte que cubren.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="706"/>
+        <location filename="../processing/engine/design_comparison.py" line="963"/>
         <source>A stratum of the layout has no cells on the surface grid.</source>
         <translation>Un estrato de la disposición no tiene celdas en la cuadrícula de la superficie.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="790"/>
+        <location filename="../processing/engine/design_comparison.py" line="1046"/>
         <source>Unknown design {design}; use 0 to {last}.</source>
         <translation>Diseño desconocido {design}; use de 0 a {last}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="794"/>
+        <location filename="../processing/engine/design_comparison.py" line="1050"/>
         <source>N_UNITS must be at least {minimum}.</source>
         <translation>N_UNITS debe ser al menos {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="804"/>
+        <location filename="../processing/engine/design_comparison.py" line="1060"/>
         <source>The {design} design needs strata: give the STRATA layer.</source>
         <translation>El diseño «{design}» necesita estratos: indique la capa STRATA.</translation>
     </message>
@@ -2355,42 +2355,42 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="912"/>
+        <location filename="../processing/engine/design_comparison.py" line="1170"/>
         <source>REPLICATES must be at least 2.</source>
         <translation>REPLICATES debe ser al menos 2.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="939"/>
+        <location filename="../processing/engine/design_comparison.py" line="1197"/>
         <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
         <translation>Cada muestreo simulado contaría unos {millions:.0f} millones de celdas de la superficie ({units} unidades de {unit_area:,.0f} m² en celdas de {cell_width:g} m), demasiadas para simular. Remuestree la superficie a celdas más gruesas, o compare menos diseños o unidades.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1223"/>
+        <location filename="../processing/engine/design_comparison.py" line="1479"/>
         <source>{design}: {warning}</source>
         <translation>{design}: {warning}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1226"/>
+        <location filename="../processing/engine/design_comparison.py" line="1482"/>
         <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
         <translation>{design} con {n_units} unidades: {failed} de los {replicates} muestreos simulados no dieron estimación (un estrato sin unidad contada, o ninguna unidad en el marco de muestreo); se excluyen de sus cifras.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1266"/>
+        <location filename="../processing/engine/design_comparison.py" line="1522"/>
         <source>The range of units &apos;{text}&apos; cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
         <translation>El rango de unidades «{text}» no puede leerse. Indique números enteros separados por comas (p. ej. 20, 40, 80) o inicio:fin:paso (p. ej. 20:100:20).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1273"/>
+        <location filename="../processing/engine/design_comparison.py" line="1529"/>
         <source>In the range of units &apos;{text}&apos;, &apos;{part}&apos; starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
         <translation>En el rango de unidades «{text}», «{part}» empieza por encima de donde termina (inicio {start}, fin {stop}), así que no contiene ningún número de unidades. Escriba inicio:fin:paso con el inicio menor o igual que el fin (p. ej. {stop}:{start}:{step}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1279"/>
+        <location filename="../processing/engine/design_comparison.py" line="1535"/>
         <source>Every number of units in the range must be at least {minimum}.</source>
         <translation>Cada número de unidades del rango debe ser al menos {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1283"/>
+        <location filename="../processing/engine/design_comparison.py" line="1539"/>
         <source>The range of units holds more than 20 values; give at most 20.</source>
         <translation>El rango de unidades tiene más de 20 valores; indique como máximo 20.</translation>
     </message>
@@ -2870,132 +2870,132 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>unidad circular {unit} (de reserva, estrato {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="484"/>
+        <location filename="../processing/engine/stratification.py" line="539"/>
         <source>No cell of the frame has a value in every covariate.</source>
         <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="675"/>
+        <location filename="../processing/engine/stratification.py" line="766"/>
         <source>The covariates take fewer distinct value combinations than strata asked for.</source>
         <translation>Las covariables toman menos combinaciones de valores distintas que estratos pedidos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="937"/>
+        <location filename="../processing/engine/stratification.py" line="1027"/>
         <source>The frame holds no raster cell.</source>
         <translation>El marco de muestreo no contiene ninguna celda ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1401"/>
+        <location filename="../processing/engine/stratification.py" line="1580"/>
         <source>Covariate &apos;{name}&apos; is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
         <translation>La covariable «{name}» es constante ({value:g}) en el marco de muestreo: no puede definir estratos. Use otra covariable, o compruebe el marco y el ráster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1419"/>
+        <location filename="../processing/engine/stratification.py" line="1598"/>
         <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
         <translation>METHOD desconocido {method!r}: use de 0 (cuantiles) a 4 (clases del ráster).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1423"/>
+        <location filename="../processing/engine/stratification.py" line="1602"/>
         <source>Ask for at least 2 strata (STRATA).</source>
         <translation>Pida al menos 2 estratos (STRATA).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1430"/>
+        <location filename="../processing/engine/stratification.py" line="1609"/>
         <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
         <translation>Ninguna celda del marco de muestreo tiene valor en todas las covariables ({names}). Compruebe que los rásteres cubren el marco y que su valor NoData es correcto.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1483"/>
+        <location filename="../processing/engine/stratification.py" line="1662"/>
         <source>Covariate &apos;{name}&apos; takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>La covariable «{name}» toma solo {n_distinct} valores distintos en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1498"/>
+        <location filename="../processing/engine/stratification.py" line="1677"/>
         <source>Some boundaries coincide (many cells share the same value of &apos;{name}&apos;); {formed} strata are formed instead of {k}.</source>
         <translation>Algunos límites coinciden (muchas celdas comparten el mismo valor de «{name}»); se forman {formed} estratos en lugar de {k}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1514"/>
+        <location filename="../processing/engine/stratification.py" line="1693"/>
         <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en el marco de muestreo, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1519"/>
+        <location filename="../processing/engine/stratification.py" line="1698"/>
         <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Las covariables toman solo {n_distinct} combinaciones de valores distintas en una muestra de {sample_n} celdas, menos que los {k} estratos pedidos. Baje STRATA a {n_distinct} o menos.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1533"/>
+        <location filename="../processing/engine/stratification.py" line="1712"/>
         <source>Covariate &apos;{name}&apos; has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host&apos;s reclassify by table tool), or choose another METHOD.</source>
         <translation>La covariable «{name}» tiene más de {max_classes} clases (al menos {n_distinct} valores distintos en el marco de muestreo): reclasifíquela primero en {max_classes} clases o menos (por ejemplo con la herramienta de reclasificación por tabla del anfitrión), o elija otro METHOD.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1590"/>
+        <location filename="../processing/engine/stratification.py" line="1769"/>
         <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
         <translation>{dropped} de los {k} estratos no contienen ninguna celda y se quitaron.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1684"/>
+        <location filename="../processing/engine/stratification.py" line="1888"/>
         <source>{name} class {value}</source>
         <translation>{name}: clase {value}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1687"/>
+        <location filename="../processing/engine/stratification.py" line="1891"/>
         <source>mean {values}</source>
         <translation>media {values}</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="47"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="50"/>
         <source>Covariate &apos;{name}&apos; cannot be read ({error}). Check the file.</source>
         <translation>La covariable «{name}» no puede leerse ({error}). Compruebe el archivo.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="51"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="54"/>
         <source>Covariate &apos;{name}&apos; has no band {band}.</source>
         <translation>La covariable «{name}» no tiene banda {band}.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="131"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="134"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Indique al menos un ráster en COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="163"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="166"/>
         <source>The frame has no polygon.</source>
         <translation>El marco de muestreo no tiene ningún polígono.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="207"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="211"/>
         <source>The frame does not overlap covariate &apos;{name}&apos; ({path}). Use a raster that covers the frame, or check both layers&apos; CRS.</source>
         <translation>El marco de muestreo no se superpone a la covariable «{name}» ({path}). Use un ráster que cubra el marco, o compruebe el SRC de ambas capas.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratum_raster.py" line="16"/>
+        <location filename="../processing/gdal_io/stratum_raster.py" line="21"/>
         <source>Cannot write the stratum raster &apos;{path}&apos;.</source>
         <translation>No se puede escribir el ráster de estratos «{path}».</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="124"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="130"/>
         <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
         <translation>Con MIN_AREA = {min_area:g} ha, la fusión de las manchas más pequeñas dejó un solo estrato: no queda nada que estratificar. Reduzca MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="132"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="138"/>
         <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
         <translation>{merged} estratos constaban solo de manchas por debajo de MIN_AREA y se fusionaron con sus vecinos.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="140"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="146"/>
         <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of &apos;{name}&apos; that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
         <translation>La fusión de las manchas por debajo de MIN_AREA pasó celdas de un estrato a otro: la parte de la varianza de «{name}» que explican los estratos bajó de {before:.2f} a {after:.2f}. Un MIN_AREA menor mantiene los estratos más cerca de las covariables.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="146"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="152"/>
         <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
         <translation>{n} mancha(s) que cubren {ha:,.2f} ha quedan por debajo de MIN_AREA ({min_area:g} ha): no tocan ningún otro estrato (islas del marco de muestreo, o manchas rodeadas de NoData). Quite esas islas del marco de muestreo, rellene los NoData de las covariables, o reduzca MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="163"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="180"/>
         <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
         <translation>Las covariables cubren el {percent:.1f}% del marco de muestreo: {outside_ha:,.2f} ha quedan fuera de los rásteres y {nodata_ha:,.2f} ha son NoData en al menos una covariable; los estratos valen solo para la parte cubierta.</translation>
     </message>
@@ -3395,17 +3395,17 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>estratificado Neyman (piloto)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="678"/>
+        <location filename="../processing/engine/design_comparison.py" line="935"/>
         <source>The pilot needs at least 2 units per stratum.</source>
         <translation>El piloto necesita al menos 2 unidades por estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <location filename="../processing/engine/design_comparison.py" line="1445"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units kept inside never reach the edge of the frame or of their stratum, so the edge band weighs less in the estimate; where its density differs from the interior, the estimate is biased. Plus sampling (INSIDE off) removes this bias.</source>
         <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). Causa probable: las unidades mantenidas dentro nunca llegan al borde del marco de muestreo ni de su estrato, así que la franja del borde pesa menos en la estimación; donde su densidad difiere del interior, la estimación está sesgada. El muestreo «plus» (INSIDE desactivado) elimina este sesgo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <location filename="../processing/engine/design_comparison.py" line="1445"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). Plus sampling is unbiased, so the likely cause is the ratio estimator with very few animals per unit, or a systematic grid whose realised number of units varies with the surface; more units reduce it.</source>
         <translation>{design} con {n_units} unidades: sesgo relativo {bias:+.1%}, por encima del ruido de la simulación (±{noise:.1%} con {replicates} muestreos simulados; prueba al nivel del {level:.0%} sobre el conjunto de {tests} diseño(s)). El muestreo «plus» es insesgado, así que la causa probable es el estimador de razón con muy pocos animales por unidad, o una cuadrícula sistemática cuyo número realizado de unidades varía con la superficie; más unidades lo reducen.</translation>
     </message>
@@ -3925,17 +3925,17 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>En hasta {n} de los {r} programas simulados no se pudo estimar la tendencia (demasiado pocos animales contados en las unidades revisitadas); cuentan como no detectados. Aumente MEAN_COUNT o el número de unidades si eso no es realista.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/patches.py" line="217"/>
+        <location filename="../processing/gdal_io/patches.py" line="218"/>
         <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be turned into polygons: the covariate is speckled at the scale of its cells. Set MIN_AREA to {suggested:g} ha or more (it is {min_area:g} ha): patches below it join a neighbouring stratum, which leaves at most {limit:,} patches on the {area:,.0f} ha stratified. Smoothing the covariate first also helps.</source>
         <translation>Los estratos forman {n:,} manchas (grupos con conectividad 4 de celdas de un mismo estrato), más que las {limit:,} que se pueden convertir en polígonos: la covariable está moteada a la escala de sus celdas. Fije MIN_AREA en {suggested:g} ha o más (ahora es {min_area:g} ha): las manchas menores se unen a un estrato vecino, lo que deja como máximo {limit:,} manchas en las {area:,.0f} ha estratificadas. También ayuda suavizar antes la covariable.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/patches.py" line="230"/>
+        <location filename="../processing/gdal_io/patches.py" line="231"/>
         <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be merged below MIN_AREA in bounded memory: the covariate is speckled at the scale of its cells. Smooth or coarsen it first (for example, resample it with the average to cells of about {cell:g} m, so that one cell covers MIN_AREA), then run the stratification again.</source>
         <translation>Los estratos forman {n:,} manchas (grupos con conectividad 4 de celdas de un mismo estrato), más que las {limit:,} que la fusión de las manchas por debajo de MIN_AREA puede tratar con memoria acotada: la covariable está moteada a la escala de sus celdas. Suavícela o aumente antes su tamaño de celda (por ejemplo, remuestréela con la media a celdas de unos {cell:g} m, de modo que una celda cubra MIN_AREA) y vuelva a ejecutar la estratificación.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="110"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="120"/>
         <source>The strata formed too many small patches to merge one by one: patches below {cells:,} cells were first merged into their largest neighbour (the rule of GDAL&apos;s sieve filter), which can join a mosaic of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer to its pattern.</source>
         <translation>Los estratos formaban demasiadas manchas pequeñas para fusionarlas una a una: las manchas de menos de {cells:,} celdas se fusionaron primero con su vecina mayor (la regla del filtro de criba de GDAL), lo que puede unir un mosaico de manchas pequeñas en un solo estrato. Suavizar la covariable antes de estratificar mantiene los estratos más cerca de su patrón.</translation>
     </message>

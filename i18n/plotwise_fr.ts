@@ -1987,37 +1987,37 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="125"/>
+        <location filename="../processing/bridge.py" line="137"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="422"/>
+        <location filename="../processing/bridge.py" line="118"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="173"/>
+        <location filename="../processing/bridge.py" line="177"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="179"/>
+        <location filename="../processing/bridge.py" line="183"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="349"/>
+        <location filename="../processing/bridge.py" line="353"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="378"/>
+        <location filename="../processing/bridge.py" line="382"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="384"/>
+        <location filename="../processing/bridge.py" line="388"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
@@ -2225,52 +2225,52 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>La taille de cellule doit être comprise entre 10 et 500 m (reçu {cell_size:g} m).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="223"/>
+        <location filename="../processing/engine/design_comparison.py" line="229"/>
         <source>The density surface must be a single raster band.</source>
         <translation>La surface de densité doit être une seule bande raster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="227"/>
+        <location filename="../processing/engine/design_comparison.py" line="233"/>
         <source>The density surface must be a north-up raster (no rotation); warp it first.</source>
         <translation>La surface de densité doit être un raster orienté nord en haut (sans rotation) ; reprojetez-la d'abord.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="236"/>
+        <location filename="../processing/engine/design_comparison.py" line="242"/>
         <source>The density surface does not overlap the frame. Check that both cover the same area (and their coordinate reference systems).</source>
         <translation>La surface de densité ne recouvre pas la base de sondage. Vérifiez que les deux couvrent la même zone (et leurs systèmes de coordonnées de référence).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="261"/>
+        <location filename="../processing/engine/design_comparison.py" line="267"/>
         <source>A stratum has no stratum value (NULL). Give every stratum a value.</source>
         <translation>Une strate n'a pas de valeur de strate (NULL). Donnez une valeur à chaque strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="293"/>
+        <location filename="../processing/engine/design_comparison.py" line="299"/>
         <source>{overlap} surface cell(s) lie in more than one stratum; each was given to the first of them. Strata should not overlap.</source>
         <translation>{overlap} cellule(s) de la surface se trouvent dans plus d'une strate ; chacune a été attribuée à la première. Les strates ne devraient pas se chevaucher.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="305"/>
+        <location filename="../processing/engine/design_comparison.py" line="311"/>
         <source>No cell centre of the density surface lies in the frame: the surface cells are too coarse for the frame, or the two do not overlap.</source>
         <translation>Aucun centre de cellule de la surface de densité ne se trouve dans la base de sondage : les cellules sont trop grossières pour elle, ou les deux ne se recouvrent pas.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="312"/>
+        <location filename="../processing/engine/design_comparison.py" line="318"/>
         <source>The density surface has {n} negative cell(s) in the frame. Expected animals per km² must be 0 or more: correct the surface (for instance clip it at 0).</source>
         <translation>La surface de densité a {n} cellule(s) négative(s) dans la base de sondage. Le nombre attendu d'animaux par km² doit être de 0 ou plus : corrigez la surface (par exemple en la bornant à 0).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="319"/>
+        <location filename="../processing/engine/design_comparison.py" line="325"/>
         <source>{n} cell(s) of the frame ({share:.1%}) have no value on the density surface and are left out of the population: the comparison speaks for the rest of the frame.</source>
         <translation>{n} cellule(s) de la base de sondage ({share:.1%}) n'ont pas de valeur sur la surface de densité et sont exclues de la population : la comparaison vaut pour le reste de la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="327"/>
+        <location filename="../processing/engine/design_comparison.py" line="333"/>
         <source>The density surface has no value in the frame.</source>
         <translation>La surface de densité n'a aucune valeur dans la base de sondage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="333"/>
+        <location filename="../processing/engine/design_comparison.py" line="339"/>
         <source>Strata {ids} hold no cell centre of the density surface inside the frame. Remove them, merge them with a neighbour, or use a finer surface.</source>
         <translation>Les strates {ids} ne contiennent aucun centre de cellule de la surface de densité dans la base de sondage. Retirez-les, fusionnez-les avec une voisine, ou utilisez une surface plus fine.</translation>
     </message>
@@ -2300,37 +2300,37 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>SIZE doit dépasser 0 m : c'est la taille de l'unité linéaire.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="408"/>
+        <location filename="../processing/engine/design_comparison.py" line="414"/>
         <source>A line transect needs the half-width of its counting strip (more than 0 m): animals are counted up to that distance on either side of the line.</source>
         <translation>Un transect linéaire a besoin de la demi-largeur de sa bande de comptage (plus de 0 m) : les animaux sont comptés jusqu'à cette distance de part et d'autre de la ligne.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="675"/>
+        <location filename="../processing/engine/design_comparison.py" line="932"/>
         <source>The overdispersion k must be 0 (Poisson counts) or more.</source>
         <translation>La surdispersion k doit valoir 0 (comptages de Poisson) ou plus.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="696"/>
+        <location filename="../processing/engine/design_comparison.py" line="953"/>
         <source>The strata cover {share:.1%} of the frame: every design is compared on the part the strata cover.</source>
         <translation>Les strates couvrent {share:.1%} de la base de sondage : chaque plan est comparé sur la partie qu'elles couvrent.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="706"/>
+        <location filename="../processing/engine/design_comparison.py" line="963"/>
         <source>A stratum of the layout has no cells on the surface grid.</source>
         <translation>Une strate de la disposition n'a aucune cellule sur la grille de la surface.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="790"/>
+        <location filename="../processing/engine/design_comparison.py" line="1046"/>
         <source>Unknown design {design}; use 0 to {last}.</source>
         <translation>Plan inconnu {design} ; utilisez 0 à {last}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="794"/>
+        <location filename="../processing/engine/design_comparison.py" line="1050"/>
         <source>N_UNITS must be at least {minimum}.</source>
         <translation>N_UNITS doit valoir au moins {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="804"/>
+        <location filename="../processing/engine/design_comparison.py" line="1060"/>
         <source>The {design} design needs strata: give the STRATA layer.</source>
         <translation>Le plan « {design} » a besoin de strates : indiquez la couche STRATA.</translation>
     </message>
@@ -2355,42 +2355,42 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="912"/>
+        <location filename="../processing/engine/design_comparison.py" line="1170"/>
         <source>REPLICATES must be at least 2.</source>
         <translation>REPLICATES doit valoir au moins 2.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="939"/>
+        <location filename="../processing/engine/design_comparison.py" line="1197"/>
         <source>Each simulated survey would count about {millions:.0f} million surface cells ({units} units of {unit_area:,.0f} m² on {cell_width:g} m cells), too many to simulate. Resample the surface to coarser cells, or compare fewer designs or units.</source>
         <translation>Chaque inventaire simulé compterait environ {millions:.0f} millions de cellules de la surface ({units} unités de {unit_area:,.0f} m² sur des cellules de {cell_width:g} m), trop pour être simulé. Rééchantillonnez la surface en cellules plus grossières, ou comparez moins de plans ou d'unités.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1223"/>
+        <location filename="../processing/engine/design_comparison.py" line="1479"/>
         <source>{design}: {warning}</source>
         <translation>{design} : {warning}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1226"/>
+        <location filename="../processing/engine/design_comparison.py" line="1482"/>
         <source>{design} at {n_units} units: {failed} of {replicates} simulated surveys gave no estimate (a stratum without a counted unit, or no unit in the frame); they are left out of its figures.</source>
         <translation>{design} avec {n_units} unités : {failed} des {replicates} inventaires simulés n'ont donné aucune estimation (une strate sans unité comptée, ou aucune unité dans la base de sondage) ; ils sont exclus de ses chiffres.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1266"/>
+        <location filename="../processing/engine/design_comparison.py" line="1522"/>
         <source>The range of units &apos;{text}&apos; cannot be read. Give whole numbers separated by commas (e.g. 20, 40, 80) or start:stop:step (e.g. 20:100:20).</source>
         <translation>La plage d'unités « {text} » ne peut pas être lue. Donnez des nombres entiers séparés par des virgules (p. ex. 20, 40, 80) ou début:fin:pas (p. ex. 20:100:20).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1273"/>
+        <location filename="../processing/engine/design_comparison.py" line="1529"/>
         <source>In the range of units &apos;{text}&apos;, &apos;{part}&apos; starts above where it stops (start {start}, stop {stop}), so it holds no number of units. Write start:stop:step with the start at or below the stop (e.g. {stop}:{start}:{step}).</source>
         <translation>Dans la plage d'unités « {text} », « {part} » commence au-dessus de sa fin (début {start}, fin {stop}) et ne contient donc aucun nombre d'unités. Écrivez début:fin:pas avec un début inférieur ou égal à la fin (p. ex. {stop}:{start}:{step}).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1279"/>
+        <location filename="../processing/engine/design_comparison.py" line="1535"/>
         <source>Every number of units in the range must be at least {minimum}.</source>
         <translation>Chaque nombre d'unités de la plage doit valoir au moins {minimum}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1283"/>
+        <location filename="../processing/engine/design_comparison.py" line="1539"/>
         <source>The range of units holds more than 20 values; give at most 20.</source>
         <translation>La plage d'unités contient plus de 20 valeurs ; donnez-en au plus 20.</translation>
     </message>
@@ -2870,132 +2870,132 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>unité circulaire {unit} (de réserve, strate {stratum})</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="484"/>
+        <location filename="../processing/engine/stratification.py" line="539"/>
         <source>No cell of the frame has a value in every covariate.</source>
         <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="675"/>
+        <location filename="../processing/engine/stratification.py" line="766"/>
         <source>The covariates take fewer distinct value combinations than strata asked for.</source>
         <translation>Les covariables prennent moins de combinaisons de valeurs distinctes que de strates demandées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="937"/>
+        <location filename="../processing/engine/stratification.py" line="1027"/>
         <source>The frame holds no raster cell.</source>
         <translation>La base de sondage ne contient aucune cellule raster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1401"/>
+        <location filename="../processing/engine/stratification.py" line="1580"/>
         <source>Covariate &apos;{name}&apos; is constant ({value:g}) over the frame: it cannot define strata. Use another covariate, or check the frame and the raster.</source>
         <translation>La covariable « {name} » est constante ({value:g}) sur la base de sondage : elle ne peut pas définir de strates. Utilisez une autre covariable, ou vérifiez la base de sondage et le raster.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1419"/>
+        <location filename="../processing/engine/stratification.py" line="1598"/>
         <source>Unknown METHOD {method!r}: use 0 (quantile) to 4 (raster classes).</source>
         <translation>METHOD inconnu {method!r} : utilisez 0 (quantiles) à 4 (classes du raster).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1423"/>
+        <location filename="../processing/engine/stratification.py" line="1602"/>
         <source>Ask for at least 2 strata (STRATA).</source>
         <translation>Demandez au moins 2 strates (STRATA).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1430"/>
+        <location filename="../processing/engine/stratification.py" line="1609"/>
         <source>No cell of the frame has a value in every covariate ({names}). Check that the rasters cover the frame and that their NoData value is right.</source>
         <translation>Aucune cellule de la base de sondage n'a de valeur dans toutes les covariables ({names}). Vérifiez que les rasters couvrent la base de sondage et que leur valeur NoData est juste.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1483"/>
+        <location filename="../processing/engine/stratification.py" line="1662"/>
         <source>Covariate &apos;{name}&apos; takes only {n_distinct} distinct values over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>La covariable « {name} » ne prend que {n_distinct} valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1498"/>
+        <location filename="../processing/engine/stratification.py" line="1677"/>
         <source>Some boundaries coincide (many cells share the same value of &apos;{name}&apos;); {formed} strata are formed instead of {k}.</source>
         <translation>Certaines limites coïncident (beaucoup de cellules partagent la même valeur de « {name} ») ; {formed} strates sont formées au lieu de {k}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1514"/>
+        <location filename="../processing/engine/stratification.py" line="1693"/>
         <source>The covariates take only {n_distinct} distinct value combinations over the frame, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes sur la base de sondage, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1519"/>
+        <location filename="../processing/engine/stratification.py" line="1698"/>
         <source>The covariates take only {n_distinct} distinct value combinations in a sample of {sample_n} cells, fewer than the {k} strata asked for. Lower STRATA to {n_distinct} or fewer.</source>
         <translation>Les covariables ne prennent que {n_distinct} combinaisons de valeurs distinctes dans un échantillon de {sample_n} cellules, moins que les {k} strates demandées. Ramenez STRATA à {n_distinct} ou moins.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1533"/>
+        <location filename="../processing/engine/stratification.py" line="1712"/>
         <source>Covariate &apos;{name}&apos; has more than {max_classes} classes (at least {n_distinct} distinct values over the frame): reclassify it into {max_classes} classes or fewer first (for example with the host&apos;s reclassify by table tool), or choose another METHOD.</source>
         <translation>La covariable « {name} » a plus de {max_classes} classes (au moins {n_distinct} valeurs distinctes sur la base de sondage) : reclassez-la d'abord en {max_classes} classes ou moins (par exemple avec l'outil de reclassement par table de l'hôte), ou choisissez une autre METHOD.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1590"/>
+        <location filename="../processing/engine/stratification.py" line="1769"/>
         <source>{dropped} of the {k} strata hold no cell and were dropped.</source>
         <translation>{dropped} des {k} strates ne contiennent aucune cellule et ont été retirées.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1684"/>
+        <location filename="../processing/engine/stratification.py" line="1888"/>
         <source>{name} class {value}</source>
         <translation>{name} : classe {value}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/stratification.py" line="1687"/>
+        <location filename="../processing/engine/stratification.py" line="1891"/>
         <source>mean {values}</source>
         <translation>moyenne {values}</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="47"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="50"/>
         <source>Covariate &apos;{name}&apos; cannot be read ({error}). Check the file.</source>
         <translation>La covariable « {name} » ne peut pas être lue ({error}). Vérifiez le fichier.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="51"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="54"/>
         <source>Covariate &apos;{name}&apos; has no band {band}.</source>
         <translation>La covariable « {name} » n'a pas de bande {band}.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="131"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="134"/>
         <source>Give at least one raster in COVARIATES.</source>
         <translation>Donnez au moins un raster dans COVARIATES.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="163"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="166"/>
         <source>The frame has no polygon.</source>
         <translation>La base de sondage n'a aucun polygone.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/covariate_stack.py" line="207"/>
+        <location filename="../processing/gdal_io/covariate_stack.py" line="211"/>
         <source>The frame does not overlap covariate &apos;{name}&apos; ({path}). Use a raster that covers the frame, or check both layers&apos; CRS.</source>
         <translation>La base de sondage ne recouvre pas la covariable « {name} » ({path}). Utilisez un raster qui couvre la base de sondage, ou vérifiez le SCR des deux couches.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratum_raster.py" line="16"/>
+        <location filename="../processing/gdal_io/stratum_raster.py" line="21"/>
         <source>Cannot write the stratum raster &apos;{path}&apos;.</source>
         <translation>Impossible d'écrire le raster des strates « {path} ».</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="124"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="130"/>
         <source>With MIN_AREA {min_area:g} ha, merging the patches below it left a single stratum, so there is nothing to stratify. Lower MIN_AREA.</source>
         <translation>Avec MIN_AREA = {min_area:g} ha, la fusion des taches plus petites n'a laissé qu'une seule strate : il n'y a plus rien à stratifier. Réduisez MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="132"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="138"/>
         <source>{merged} strata consisted only of patches below MIN_AREA and were merged away.</source>
         <translation>{merged} strates n'étaient faites que de taches sous MIN_AREA et ont été fusionnées avec leurs voisines.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="140"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="146"/>
         <source>Merging the patches below MIN_AREA moved cells between strata: the share of the variance of &apos;{name}&apos; that the strata explain fell from {before:.2f} to {after:.2f}. A smaller MIN_AREA keeps the strata closer to the covariates.</source>
         <translation>La fusion des taches sous MIN_AREA a fait passer des cellules d'une strate à l'autre : la part de la variance de « {name} » expliquée par les strates est tombée de {before:.2f} à {after:.2f}. Un MIN_AREA plus petit garde les strates plus proches des covariables.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="146"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="152"/>
         <source>{n} patch(es) covering {ha:,.2f} ha stay below MIN_AREA ({min_area:g} ha): they touch no other stratum (islands of the frame, or patches ringed by NoData). Remove such islands from the frame, fill the NoData in the covariates, or lower MIN_AREA.</source>
         <translation>{n} tache(s) couvrant {ha:,.2f} ha restent sous MIN_AREA ({min_area:g} ha) : elles ne touchent aucune autre strate (îlots de la base de sondage, ou taches entourées de NoData). Retirez ces îlots de la base de sondage, comblez les NoData des covariables, ou réduisez MIN_AREA.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="163"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="180"/>
         <source>The covariates cover {percent:.1f}% of the frame: {outside_ha:,.2f} ha lie outside the rasters and {nodata_ha:,.2f} ha have NoData in at least one covariate; the strata speak for the covered part only.</source>
         <translation>Les covariables couvrent {percent:.1f}% de la base de sondage : {outside_ha:,.2f} ha sont hors des rasters et {nodata_ha:,.2f} ha sont NoData dans au moins une covariable ; les strates ne valent que pour la partie couverte.</translation>
     </message>
@@ -3395,17 +3395,17 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>stratifié Neyman (pilote)</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="678"/>
+        <location filename="../processing/engine/design_comparison.py" line="935"/>
         <source>The pilot needs at least 2 units per stratum.</source>
         <translation>Le pilote demande au moins 2 unités par strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <location filename="../processing/engine/design_comparison.py" line="1445"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). A likely cause: units kept inside never reach the edge of the frame or of their stratum, so the edge band weighs less in the estimate; where its density differs from the interior, the estimate is biased. Plus sampling (INSIDE off) removes this bias.</source>
         <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). Cause probable : les unités gardées à l'intérieur n'atteignent jamais le bord de la base de sondage ou de leur strate, si bien que la bande de bordure pèse moins dans l'estimation ; là où sa densité diffère de l'intérieur, l'estimation est biaisée. L'échantillonnage « plus » (INSIDE désactivé) supprime ce biais.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/design_comparison.py" line="1189"/>
+        <location filename="../processing/engine/design_comparison.py" line="1445"/>
         <source>{design} at {n_units} units: relative bias {bias:+.1%}, beyond the simulation's noise (±{noise:.1%} with {replicates} simulated surveys; tested at the {level:.0%} level across {tests} design(s)). Plus sampling is unbiased, so the likely cause is the ratio estimator with very few animals per unit, or a systematic grid whose realised number of units varies with the surface; more units reduce it.</source>
         <translation>{design} avec {n_units} unités : biais relatif {bias:+.1%}, au-delà du bruit de la simulation (±{noise:.1%} avec {replicates} inventaires simulés ; test au seuil de {level:.0%} sur l'ensemble des {tests} plan(s)). L'échantillonnage « plus » est sans biais : la cause probable est donc l'estimateur par le ratio avec très peu d'animaux par unité, ou une grille systématique dont le nombre réalisé d'unités varie avec la surface ; davantage d'unités le réduisent.</translation>
     </message>
@@ -3925,17 +3925,17 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>Dans au plus {n} des {r} programmes simulés, la tendance n'a pas pu être estimée (trop peu d'animaux comptés dans les unités revisitées) ; ils comptent comme non détectés. Augmentez MEAN_COUNT ou le nombre d'unités si c'est irréaliste.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/patches.py" line="217"/>
+        <location filename="../processing/gdal_io/patches.py" line="218"/>
         <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be turned into polygons: the covariate is speckled at the scale of its cells. Set MIN_AREA to {suggested:g} ha or more (it is {min_area:g} ha): patches below it join a neighbouring stratum, which leaves at most {limit:,} patches on the {area:,.0f} ha stratified. Smoothing the covariate first also helps.</source>
         <translation>Les strates forment {n:,} taches (groupes 4-connexes de cellules d'une même strate), plus que les {limit:,} qui peuvent être converties en polygones : la covariable est mouchetée à l'échelle de ses cellules. Fixez MIN_AREA à {suggested:g} ha ou plus (il vaut {min_area:g} ha) : les taches plus petites rejoignent une strate voisine, ce qui laisse au plus {limit:,} taches sur les {area:,.0f} ha stratifiés. Lisser d'abord la covariable aide aussi.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/patches.py" line="230"/>
+        <location filename="../processing/gdal_io/patches.py" line="231"/>
         <source>The strata form {n:,} patches (4-connected groups of cells of one stratum), more than the {limit:,} that can be merged below MIN_AREA in bounded memory: the covariate is speckled at the scale of its cells. Smooth or coarsen it first (for example, resample it with the average to cells of about {cell:g} m, so that one cell covers MIN_AREA), then run the stratification again.</source>
         <translation>Les strates forment {n:,} taches (groupes 4-connexes de cellules d'une même strate), plus que les {limit:,} que la fusion des taches sous MIN_AREA peut traiter en mémoire bornée : la covariable est mouchetée à l'échelle de ses cellules. Lissez-la ou agrandissez ses cellules d'abord (par exemple, rééchantillonnez-la par la moyenne en cellules d'environ {cell:g} m, pour qu'une cellule couvre MIN_AREA), puis relancez la stratification.</translation>
     </message>
     <message>
-        <location filename="../processing/gdal_io/stratify_pipeline.py" line="110"/>
+        <location filename="../processing/gdal_io/stratify_pipeline.py" line="120"/>
         <source>The strata formed too many small patches to merge one by one: patches below {cells:,} cells were first merged into their largest neighbour (the rule of GDAL&apos;s sieve filter), which can join a mosaic of small patches into one stratum. Smoothing the covariate before stratifying keeps the strata closer to its pattern.</source>
         <translation>Les strates formaient trop de petites taches pour les fusionner une à une : les taches de moins de {cells:,} cellules ont d'abord été fusionnées avec leur plus grande voisine (la règle du filtre tamis de GDAL), ce qui peut réunir une mosaïque de petites taches en une seule strate. Lisser la covariable avant de stratifier garde les strates plus proches de sa structure.</translation>
     </message>

@@ -110,6 +110,18 @@ class FeatureRecords:
         return len(self.fids)
 
 
+def require_fields(source, field_names, layer_name):
+    """``source``'s fields, after checking that it has each of ``field_names`` (empty names skipped)."""
+    fields = source.fields()
+    missing = [name for name in field_names if name and fields.lookupField(name) < 0]
+    if missing:
+        raise QgsProcessingException(
+            QCoreApplication.translate(
+                "PlotwiseBridge", "Layer '{layer}' has no field named {names}. Choose an existing field.").format(
+                layer=layer_name, names=", ".join(f"'{m}'" for m in missing)))
+    return fields
+
+
 def read_features(source, target_crs, context, feedback, field_names=(), layer_name="", repair=True, drop_empty=True,
                   check_validity=False):
     """Read ``source`` (a ``QgsProcessingFeatureSource``) into :class:`FeatureRecords`.
@@ -128,15 +140,7 @@ def read_features(source, target_crs, context, feedback, field_names=(), layer_n
     layer_name = layer_name or source.sourceName()
     # the host would drop or refuse invalid features before we can repair them and say so
     source.setInvalidGeometryCheck(compat.GEOMETRY_NO_CHECK)
-    fields = source.fields()
-    missing = [name for name in field_names if name and fields.lookupField(name) < 0]
-    if missing:
-        raise QgsProcessingException(
-            QCoreApplication.translate(
-                "PlotwiseBridge", "Layer '{layer}' has no field named {names}. Choose an existing field.").format(
-                layer=layer_name, names=", ".join(f"'{m}'" for m in missing)
-            )
-        )
+    require_fields(source, field_names, layer_name)
     request = QgsFeatureRequest()
     request.setDestinationCrs(target_crs, context.transformContext())
     fids, geometries, valid = [], [], []
@@ -416,13 +420,7 @@ def read_attributes(source, field_names, layer_name=""):
     """The values of ``field_names`` of every feature of ``source`` (a table or a layer), without
     geometry: ``(feature ids, {field: [plain values]})``. Missing fields are an error naming them."""
     layer_name = layer_name or source.sourceName()
-    fields = source.fields()
-    missing = [name for name in field_names if name and fields.lookupField(name) < 0]
-    if missing:
-        raise QgsProcessingException(
-            QCoreApplication.translate(
-                "PlotwiseBridge", "Layer '{layer}' has no field named {names}. Choose an existing field.").format(
-                layer=layer_name, names=", ".join(f"'{m}'" for m in missing)))
+    fields = require_fields(source, field_names, layer_name)
     request = QgsFeatureRequest()
     request.setFlags(_NO_GEOMETRY)
     request.setSubsetOfAttributes([fields.lookupField(name) for name in field_names if name])
