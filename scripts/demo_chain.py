@@ -415,7 +415,7 @@ def step_distance(demo):
         # inside these patchy strata would leave their edges unsampled
         "SIZE": 2000.0, "BEARING": -1.0, "INSIDE": False, "MIN_SPACING": 0.0, "RESERVE": 0, "SEED": SEED + 20,
         "OUTPUT": demo.table("transects"), "OUTPUT_GPX": str(demo.out / "transects.gpx"),
-        "REPORT": demo.report("09a_transects"),
+        "REPORT": demo.report("11a_transects"),
     })
     sighted = demo.run("plotwise:simulatecounts", {
         "UNITS": lines["OUTPUT"], "ANIMALS": demo.layer_uri("animals"), "DETECTION": 1.0, "SEED": SEED + 21,
@@ -428,7 +428,7 @@ def step_distance(demo):
         "SIZE_FIELD": "size", "SURVEY_TYPE": 0, "TRUNCATION": 0.0, "KEYS": [0, 1, 2],
         "STRATA": stratify["OUTPUT"], "STRATA_ID_FIELD": "stratum", "CONFIDENCE": 0.95, "AREA_UNIT": 0,
         "SEED": SEED + 22, "OUTPUT": demo.table("distance_estimate"), "OUTPUT_MODELS": demo.table("distance_models"),
-        "REPORT": demo.report("09b_distance_density"),
+        "REPORT": demo.report("11b_distance_density"),
     })
     demo.results["distance"] = results
     demo.layers += [
@@ -474,7 +474,7 @@ def step_monitoring(demo):
         "UNITS": layout["OUTPUT"], "PANEL_DESIGN": 2, "PANELS": 3, "CORE_SHARE": 0.3,  # a core + 3 rotating panels
         "START_YEAR": first, "YEARS": MONITORING_YEARS, "UNIT_DAYS": 0.5, "SEED": SEED + 40,
         "OUTPUT": demo.table("panels"), "OUTPUT_SCHEDULE": demo.table("panel_schedule"),
-        "REPORT": demo.report("11_panels"),
+        "REPORT": demo.report("12_panels"),
     })
     demo.layers.append(("Revisit panels", demo.layer_uri("panels"), "ogr", "panels"))
     pilot = (demo.results.get("estimate") or {}).get("OUTPUT_TABLE")
@@ -483,13 +483,13 @@ def step_monitoring(demo):
         "SD_UNIT_YEAR": 0.3, "SD_YEAR": 0.1,  # illustrative: a single season cannot measure these
         **({"PILOT": pilot} if pilot else {"MEAN_COUNT": 1.5, "SD_UNIT": 1.0}),
         "DETECTION": 0.9, "ALPHA": 0.05, "TWO_SIDED": True, "REPLICATES": 1000, "SEED": SEED + 41,
-        "OUTPUT_TABLE": demo.table("trend_power"), "REPORT": demo.report("12_trend_power"),
+        "OUTPUT_TABLE": demo.table("trend_power"), "REPORT": demo.report("13_trend_power"),
     })
     counts = simulate_monitoring_years(demo, first)
     trend = demo.run("plotwise:trend", {
         "INPUT": counts, "SOURCE": 0, "UNIT_ID_FIELD": "unit_id", "YEAR_FIELD": "year", "COUNT_FIELD": "count",
         "STRATUM_FIELD": "stratum", "CONFIDENCE": 0.95,
-        "OUTPUT_TABLE": demo.table("velmar_index"), "REPORT": demo.report("13_trend"),
+        "OUTPUT_TABLE": demo.table("velmar_index"), "REPORT": demo.report("14_trend"),
     })
     demo.results["monitoring"] = {"panels": panels, "power": power, "trend": trend}
     print(f"    split panels over {first}-{first + MONITORING_YEARS - 1}; simulated decline {VELMAR_CHANGE:g}% per "
