@@ -1418,152 +1418,152 @@ Salidas: los polígonos de los estratos con los campos de la estimación (para u
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="42"/>
+        <location filename="../processing/algorithms/layout.py" line="41"/>
         <source>Lay out sample units</source>
         <translation>Disponer las unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="89"/>
+        <location filename="../processing/algorithms/layout.py" line="88"/>
         <source>Sampling frame or strata</source>
         <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="93"/>
+        <location filename="../processing/algorithms/layout.py" line="92"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="99"/>
+        <location filename="../processing/algorithms/layout.py" line="98"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Campo de unidades por estrato (p. ej. n_alloc; vacío: total repartido según el área)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="105"/>
+        <location filename="../processing/algorithms/layout.py" line="104"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Número total de unidades (si no se da un campo de unidades)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Design</source>
         <translation>Diseño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Simple random</source>
         <translation>Aleatorio simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Systematic grid</source>
         <translation>Cuadrícula sistemática</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Spatially balanced</source>
         <translation>Espacialmente equilibrado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Unit shape</source>
         <translation>Forma de la unidad</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Point station</source>
         <translation>Estación puntual</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Square plot</source>
         <translation>Parcela cuadrada</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Circular plot</source>
         <translation>Parcela circular</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Line transect</source>
         <translation>Transecto lineal</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="124"/>
+        <location filename="../processing/algorithms/layout.py" line="123"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Tamaño de la unidad (m): lado del cuadrado, radio del círculo, longitud del transecto, radio de conteo del punto</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="130"/>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Rumbo (grados desde el norte de la cuadrícula; -1: aleatorio)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="141"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Separación mínima entre los centros de las unidades (m; 0: ninguna)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="147"/>
+        <location filename="../processing/algorithms/layout.py" line="146"/>
         <source>Reserve units per stratum</source>
         <translation>Unidades de reserva por estrato</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="154"/>
+        <location filename="../processing/algorithms/layout.py" line="153"/>
         <source>Sample units</source>
         <translation>Unidades de muestreo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="155"/>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="155"/>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>GPX files (*.gpx)</source>
         <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="219"/>
+        <location filename="../processing/algorithms/layout.py" line="218"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de estrato «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="219"/>
+        <location filename="../processing/algorithms/layout.py" line="218"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Campo de unidades «{field}» de la capa «{layer}»</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="236"/>
+        <location filename="../processing/algorithms/layout.py" line="235"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="240"/>
+        <location filename="../processing/algorithms/layout.py" line="239"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>No se pudo colocar ninguna unidad en la capa «{layer}». Pida más unidades o use otro diseño.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="267"/>
+        <location filename="../processing/algorithms/layout.py" line="266"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="193"/>
+        <location filename="../processing/algorithms/layout.py" line="192"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum}: {n} unidades principales y {r} de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="271"/>
+        <location filename="../processing/algorithms/layout.py" line="270"/>
         <source>the frame</source>
         <translation>el marco</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="271"/>
+        <location filename="../processing/algorithms/layout.py" line="270"/>
         <source>stratum {key}</source>
         <translation>estrato {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="45"/>
+        <location filename="../processing/algorithms/layout.py" line="44"/>
         <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -1604,7 +1604,7 @@ Los estratos no deben solaparse: un solapamiento de más del 0,1 % del estrato m
 Un marco en coordenadas geográficas se proyecta a la zona UTM de su centro. Compruebe el acceso y la seguridad de cada unidad antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="136"/>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
         <translation>Mantener cada unidad por completo dentro de su estrato (desactivado: muestreo «plus»)</translation>
     </message>
@@ -1977,47 +1977,47 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
 <context>
     <name>PlotwiseBridge</name>
     <message>
-        <location filename="../processing/bridge.py" line="56"/>
+        <location filename="../processing/bridge.py" line="57"/>
         <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
         <translation>La capa «{layer}» no tiene un sistema de referencia de coordenadas válido. Defina su SRC (Propiedades de la capa → Fuente) y vuelva a ejecutar.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="70"/>
+        <location filename="../processing/bridge.py" line="71"/>
         <source>Layer &apos;{layer}&apos; is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
         <translation>La capa «{layer}» está en coordenadas geográficas ({src}); se calcula en {dst} ({name}), la zona UTM de su centro.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="137"/>
+        <location filename="../processing/bridge.py" line="138"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>No se pudo abrir la capa de entrada «{layer}».</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="118"/>
+        <location filename="../processing/bridge.py" line="119"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La capa «{layer}» no tiene ningún campo llamado {names}. Elija un campo existente.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="177"/>
+        <location filename="../processing/bridge.py" line="178"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Capa «{layer}»: geometría no válida reparada para los identificadores de entidad {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="183"/>
+        <location filename="../processing/bridge.py" line="184"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Capa «{layer}»: entidades vacías o de área nula omitidas (identificadores {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="353"/>
+        <location filename="../processing/bridge.py" line="364"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo ráster {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="382"/>
+        <location filename="../processing/bridge.py" line="393"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL no tiene aquí controlador GPX; no se puede escribir el archivo GPX.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="388"/>
+        <location filename="../processing/bridge.py" line="399"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>No se pudo crear el archivo GPX {path}. Compruebe que la carpeta existe y admite escritura.</translation>
     </message>
@@ -7916,12 +7916,12 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
 <context>
     <name>Stations</name>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="48"/>
+        <location filename="../processing/algorithms/stations.py" line="47"/>
         <source>Lay out camera-trap or recorder stations</source>
         <translation>Disponer estaciones de cámaras trampa o grabadoras</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="51"/>
+        <location filename="../processing/algorithms/stations.py" line="50"/>
         <source>Places camera-trap or acoustic-recorder stations over a sampling frame (optionally by stratum), spaced from the species' home range, with reserve stations and GPS waypoints.
 
 Spacing: from the home range (km²), taken as the 95% range of a circular bivariate normal distribution of the animal's positions, σ = √(HR/π) / 2.448. Rule 0, independent occupancy sites: stations at least one home-range diameter 2√(HR/π) apart (common practice). Rule 1, spatial capture-recapture: stations about 2σ apart (Sollmann et al. 2012; Sun et al. 2014). A spacing (m) above 0 replaces the rule.
@@ -7956,137 +7956,137 @@ Campos de salida: station, stratum, cluster, role (primary o reserve), draw_ord,
 Compruebe el acceso y la seguridad de cada estación antes del trabajo de campo: la herramienta nunca hace que una ubicación sea segura. Siga las normas de seguridad en el terreno de su organismo y la legislación local.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="80"/>
+        <location filename="../processing/algorithms/stations.py" line="79"/>
         <source>Sampling frame or strata</source>
         <translation>Marco de muestreo o estratos</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="82"/>
+        <location filename="../processing/algorithms/stations.py" line="81"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Campo de estrato (vacío: el marco es un solo estrato)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="85"/>
+        <location filename="../processing/algorithms/stations.py" line="84"/>
         <source>Number of stations (grid: 0 takes every grid point)</source>
         <translation>Número de estaciones (cuadrícula: 0 toma todos los puntos de la cuadrícula)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Array</source>
         <translation>Dispositivo</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Grid</source>
         <translation>Cuadrícula</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Clusters</source>
         <translation>Conglomerados</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Balanced single stations</source>
         <translation>Estaciones individuales equilibradas</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="91"/>
+        <location filename="../processing/algorithms/stations.py" line="90"/>
         <source>Home range of the species (km²; 0: not given)</source>
         <translation>Ámbito hogareño de la especie (km²; 0: no indicado)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="94"/>
+        <location filename="../processing/algorithms/stations.py" line="93"/>
         <source>Station spacing (m; 0: from the home range)</source>
         <translation>Separación entre estaciones (m; 0: a partir del ámbito hogareño)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <location filename="../processing/algorithms/stations.py" line="96"/>
         <source>Spacing rule (when the spacing comes from the home range)</source>
         <translation>Regla de separación (cuando la separación procede del ámbito hogareño)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <location filename="../processing/algorithms/stations.py" line="96"/>
         <source>Independent occupancy sites: one home-range diameter</source>
         <translation>Sitios de ocupación independientes: un diámetro de ámbito hogareño</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <location filename="../processing/algorithms/stations.py" line="96"/>
         <source>Spatial capture-recapture: 2σ</source>
         <translation>Captura-recaptura espacial: 2σ</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="101"/>
+        <location filename="../processing/algorithms/stations.py" line="100"/>
         <source>Stations per cluster</source>
         <translation>Estaciones por conglomerado</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="104"/>
+        <location filename="../processing/algorithms/stations.py" line="103"/>
         <source>Minimum spacing between stations (m; 0: none)</source>
         <translation>Separación mínima entre estaciones (m; 0: ninguna)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="107"/>
+        <location filename="../processing/algorithms/stations.py" line="106"/>
         <source>Reserve stations per stratum (clusters: reserve clusters)</source>
         <translation>Estaciones de reserva por estrato (conglomerados: conglomerados de reserva)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <location filename="../processing/algorithms/stations.py" line="110"/>
         <source>Service time per station visit (hours, travel included; 0: not given)</source>
         <translation>Tiempo de revisión por visita a una estación (horas, desplazamiento incluido; 0: no indicado)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <location filename="../processing/algorithms/stations.py" line="110"/>
         <source>Working day of a field team (hours)</source>
         <translation>Jornada de trabajo de un equipo de campo (horas)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="119"/>
+        <location filename="../processing/algorithms/stations.py" line="118"/>
         <source>Stations</source>
         <translation>Estaciones</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <location filename="../processing/algorithms/stations.py" line="119"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Puntos de paso para GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <location filename="../processing/algorithms/stations.py" line="119"/>
         <source>GPX files (*.gpx)</source>
         <translation>Archivos GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <location filename="../processing/algorithms/stations.py" line="123"/>
         <source>Station spacing used (m)</source>
         <translation>Separación entre estaciones usada (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <location filename="../processing/algorithms/stations.py" line="123"/>
         <source>σ of the home range (m)</source>
         <translation>σ del ámbito hogareño (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <location filename="../processing/algorithms/stations.py" line="123"/>
         <source>Number of primary stations</source>
         <translation>Número de estaciones principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="162"/>
+        <location filename="../processing/algorithms/stations.py" line="161"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Capa «{layer}»: {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="176"/>
+        <location filename="../processing/algorithms/stations.py" line="175"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} puntos de paso escritos en {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="177"/>
+        <location filename="../processing/algorithms/stations.py" line="176"/>
         <source>{n} primary and {r} reserve stations, {s:.0f} m apart.</source>
         <translation>{n} estaciones principales y {r} de reserva, separadas {s:.0f} m.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="195"/>
+        <location filename="../processing/algorithms/stations.py" line="194"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, proyectado desde {src} (zona UTM del centro del marco)</translation>
     </message>

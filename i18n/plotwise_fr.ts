@@ -1418,152 +1418,152 @@ Sorties : les polygones des strates avec les champs d'estimation (pour une carte
 <context>
     <name>LayoutUnits</name>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="42"/>
+        <location filename="../processing/algorithms/layout.py" line="41"/>
         <source>Lay out sample units</source>
         <translation>Disposer les unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="89"/>
+        <location filename="../processing/algorithms/layout.py" line="88"/>
         <source>Sampling frame or strata</source>
         <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="93"/>
+        <location filename="../processing/algorithms/layout.py" line="92"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="99"/>
+        <location filename="../processing/algorithms/layout.py" line="98"/>
         <source>Units per stratum field (e.g. n_alloc; empty: split the total by area)</source>
         <translation>Champ d'unités par strate (p. ex. n_alloc ; vide : total réparti selon la surface)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="105"/>
+        <location filename="../processing/algorithms/layout.py" line="104"/>
         <source>Total number of units (when no units field is given)</source>
         <translation>Nombre total d'unités (sans champ d'unités)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Design</source>
         <translation>Plan</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Simple random</source>
         <translation>Aléatoire simple</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Systematic grid</source>
         <translation>Grille systématique</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="111"/>
+        <location filename="../processing/algorithms/layout.py" line="110"/>
         <source>Spatially balanced</source>
         <translation>Spatialement équilibré</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Unit shape</source>
         <translation>Forme de l'unité</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Point station</source>
         <translation>Station ponctuelle</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Square plot</source>
         <translation>Placette carrée</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Circular plot</source>
         <translation>Placette circulaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="117"/>
+        <location filename="../processing/algorithms/layout.py" line="116"/>
         <source>Line transect</source>
         <translation>Transect linéaire</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="124"/>
+        <location filename="../processing/algorithms/layout.py" line="123"/>
         <source>Unit size (m): square side, circle radius, transect length, point counting radius</source>
         <translation>Taille de l'unité (m) : côté du carré, rayon du cercle, longueur du transect, rayon de comptage du point</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="130"/>
+        <location filename="../processing/algorithms/layout.py" line="129"/>
         <source>Bearing (degrees from grid north; -1: random)</source>
         <translation>Azimut (degrés depuis le nord de la grille ; -1 : aléatoire)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="141"/>
+        <location filename="../processing/algorithms/layout.py" line="140"/>
         <source>Minimum spacing between unit centres (m; 0: none)</source>
         <translation>Espacement minimal entre les centres des unités (m ; 0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="147"/>
+        <location filename="../processing/algorithms/layout.py" line="146"/>
         <source>Reserve units per stratum</source>
         <translation>Unités de réserve par strate</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="154"/>
+        <location filename="../processing/algorithms/layout.py" line="153"/>
         <source>Sample units</source>
         <translation>Unités d'échantillonnage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="155"/>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="155"/>
+        <location filename="../processing/algorithms/layout.py" line="154"/>
         <source>GPX files (*.gpx)</source>
         <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="219"/>
+        <location filename="../processing/algorithms/layout.py" line="218"/>
         <source>Stratum field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ de strate « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="219"/>
+        <location filename="../processing/algorithms/layout.py" line="218"/>
         <source>Units field &apos;{field}&apos; of layer &apos;{layer}&apos;</source>
         <translation>Champ d'unités « {field} » de la couche « {layer} »</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="236"/>
+        <location filename="../processing/algorithms/layout.py" line="235"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="240"/>
+        <location filename="../processing/algorithms/layout.py" line="239"/>
         <source>No unit could be placed in layer &apos;{layer}&apos;. Ask for more units or use another design.</source>
         <translation>Aucune unité n'a pu être placée dans la couche « {layer} ». Demandez plus d'unités ou utilisez un autre plan.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="267"/>
+        <location filename="../processing/algorithms/layout.py" line="266"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="193"/>
+        <location filename="../processing/algorithms/layout.py" line="192"/>
         <source>{stratum}: {n} primary and {r} reserve units</source>
         <translation>{stratum} : {n} unités principales et {r} de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="271"/>
+        <location filename="../processing/algorithms/layout.py" line="270"/>
         <source>the frame</source>
         <translation>la base de sondage</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="271"/>
+        <location filename="../processing/algorithms/layout.py" line="270"/>
         <source>stratum {key}</source>
         <translation>strate {key}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="45"/>
+        <location filename="../processing/algorithms/layout.py" line="44"/>
         <source>Draws the sample units of a survey over a sampling frame, stratum by stratum (one stratum per value of the stratum field; without it the frame is one stratum).
 
 Units per stratum: the units field (for example n_alloc from the allocation step; the same whole number on every feature of a stratum), else the total split in proportion to area with at least 2 per stratum.
@@ -1604,7 +1604,7 @@ Les strates ne doivent pas se chevaucher : un chevauchement de plus de 0,1 % de 
 Une base de sondage en coordonnées géographiques est projetée dans la zone UTM de son centre. Vérifiez l'accès à chaque unité et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/layout.py" line="136"/>
+        <location filename="../processing/algorithms/layout.py" line="135"/>
         <source>Keep every unit wholly inside its stratum (off: plus sampling)</source>
         <translation>Garder chaque unité entièrement dans sa strate (désactivé : échantillonnage « plus »)</translation>
     </message>
@@ -1977,47 +1977,47 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
 <context>
     <name>PlotwiseBridge</name>
     <message>
-        <location filename="../processing/bridge.py" line="56"/>
+        <location filename="../processing/bridge.py" line="57"/>
         <source>Layer '{layer}' has no valid coordinate reference system. Set its CRS (Layer Properties → Source) and run again.</source>
         <translation>La couche « {layer} » n'a pas de système de coordonnées de référence valide. Définissez son SCR (Propriétés de la couche → Source) et relancez.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="70"/>
+        <location filename="../processing/bridge.py" line="71"/>
         <source>Layer &apos;{layer}&apos; is in geographic coordinates ({src}); computing in {dst} ({name}), the UTM zone of its centre.</source>
         <translation>La couche « {layer} » est en coordonnées géographiques ({src}) ; calcul en {dst} ({name}), la zone UTM de son centre.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="137"/>
+        <location filename="../processing/bridge.py" line="138"/>
         <source>The input layer &apos;{layer}&apos; could not be opened.</source>
         <translation>La couche d'entrée « {layer} » n'a pas pu être ouverte.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="118"/>
+        <location filename="../processing/bridge.py" line="119"/>
         <source>Layer &apos;{layer}&apos; has no field named {names}. Choose an existing field.</source>
         <translation>La couche « {layer} » n'a pas de champ nommé {names}. Choisissez un champ existant.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="177"/>
+        <location filename="../processing/bridge.py" line="178"/>
         <source>Layer &apos;{layer}&apos;: invalid geometry repaired for feature id(s) {ids}.</source>
         <translation>Couche « {layer} » : géométrie invalide réparée pour le ou les identifiants d'entité {ids}.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="183"/>
+        <location filename="../processing/bridge.py" line="184"/>
         <source>Layer &apos;{layer}&apos;: empty or zero-area feature id(s) {ids} skipped.</source>
         <translation>Couche « {layer} » : entités vides ou de surface nulle ignorées (identifiants {ids}).</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="353"/>
+        <location filename="../processing/bridge.py" line="364"/>
         <source>Could not create the raster file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier raster {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="382"/>
+        <location filename="../processing/bridge.py" line="393"/>
         <source>GDAL has no GPX driver here; the GPX file cannot be written.</source>
         <translation>GDAL n'a pas de pilote GPX ici ; le fichier GPX ne peut pas être écrit.</translation>
     </message>
     <message>
-        <location filename="../processing/bridge.py" line="388"/>
+        <location filename="../processing/bridge.py" line="399"/>
         <source>Could not create the GPX file {path}. Check the folder exists and is writable.</source>
         <translation>Impossible de créer le fichier GPX {path}. Vérifiez que le dossier existe et est accessible en écriture.</translation>
     </message>
@@ -7916,12 +7916,12 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
 <context>
     <name>Stations</name>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="48"/>
+        <location filename="../processing/algorithms/stations.py" line="47"/>
         <source>Lay out camera-trap or recorder stations</source>
         <translation>Disposer des stations de pièges photographiques ou d'enregistreurs</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="51"/>
+        <location filename="../processing/algorithms/stations.py" line="50"/>
         <source>Places camera-trap or acoustic-recorder stations over a sampling frame (optionally by stratum), spaced from the species' home range, with reserve stations and GPS waypoints.
 
 Spacing: from the home range (km²), taken as the 95% range of a circular bivariate normal distribution of the animal's positions, σ = √(HR/π) / 2.448. Rule 0, independent occupancy sites: stations at least one home-range diameter 2√(HR/π) apart (common practice). Rule 1, spatial capture-recapture: stations about 2σ apart (Sollmann et al. 2012; Sun et al. 2014). A spacing (m) above 0 replaces the rule.
@@ -7956,137 +7956,137 @@ Champs de sortie : station, stratum, cluster, role (primary ou reserve), draw_or
 Vérifiez l'accès à chaque station et sa sécurité avant le travail de terrain : l'outil ne rend jamais un emplacement sûr. Respectez les règles de sécurité sur le terrain de votre organisme et la législation locale.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="80"/>
+        <location filename="../processing/algorithms/stations.py" line="79"/>
         <source>Sampling frame or strata</source>
         <translation>Base de sondage ou strates</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="82"/>
+        <location filename="../processing/algorithms/stations.py" line="81"/>
         <source>Stratum field (empty: the frame is one stratum)</source>
         <translation>Champ de strate (vide : la base forme une seule strate)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="85"/>
+        <location filename="../processing/algorithms/stations.py" line="84"/>
         <source>Number of stations (grid: 0 takes every grid point)</source>
         <translation>Nombre de stations (grille : 0 prend chaque point de la grille)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Array</source>
         <translation>Dispositif</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Grid</source>
         <translation>Grille</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Clusters</source>
         <translation>Grappes</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="88"/>
+        <location filename="../processing/algorithms/stations.py" line="87"/>
         <source>Balanced single stations</source>
         <translation>Stations isolées équilibrées</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="91"/>
+        <location filename="../processing/algorithms/stations.py" line="90"/>
         <source>Home range of the species (km²; 0: not given)</source>
         <translation>Domaine vital de l'espèce (km² ; 0 : non indiqué)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="94"/>
+        <location filename="../processing/algorithms/stations.py" line="93"/>
         <source>Station spacing (m; 0: from the home range)</source>
         <translation>Espacement des stations (m ; 0 : d'après le domaine vital)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <location filename="../processing/algorithms/stations.py" line="96"/>
         <source>Spacing rule (when the spacing comes from the home range)</source>
         <translation>Règle d'espacement (quand l'espacement vient du domaine vital)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <location filename="../processing/algorithms/stations.py" line="96"/>
         <source>Independent occupancy sites: one home-range diameter</source>
         <translation>Sites d'occupation indépendants : un diamètre de domaine vital</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="97"/>
+        <location filename="../processing/algorithms/stations.py" line="96"/>
         <source>Spatial capture-recapture: 2σ</source>
         <translation>Capture-recapture spatiale : 2σ</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="101"/>
+        <location filename="../processing/algorithms/stations.py" line="100"/>
         <source>Stations per cluster</source>
         <translation>Stations par grappe</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="104"/>
+        <location filename="../processing/algorithms/stations.py" line="103"/>
         <source>Minimum spacing between stations (m; 0: none)</source>
         <translation>Espacement minimal entre les stations (m ; 0 : aucun)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="107"/>
+        <location filename="../processing/algorithms/stations.py" line="106"/>
         <source>Reserve stations per stratum (clusters: reserve clusters)</source>
         <translation>Stations de réserve par strate (grappes : grappes de réserve)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <location filename="../processing/algorithms/stations.py" line="110"/>
         <source>Service time per station visit (hours, travel included; 0: not given)</source>
         <translation>Durée d'intervention par visite de station (heures, déplacement compris ; 0 : non indiquée)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="111"/>
+        <location filename="../processing/algorithms/stations.py" line="110"/>
         <source>Working day of a field team (hours)</source>
         <translation>Journée de travail d'une équipe de terrain (heures)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="119"/>
+        <location filename="../processing/algorithms/stations.py" line="118"/>
         <source>Stations</source>
         <translation>Stations</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <location filename="../processing/algorithms/stations.py" line="119"/>
         <source>Waypoints for GPS (GPX)</source>
         <translation>Points de passage pour GPS (GPX)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="120"/>
+        <location filename="../processing/algorithms/stations.py" line="119"/>
         <source>GPX files (*.gpx)</source>
         <translation>Fichiers GPX (*.gpx)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <location filename="../processing/algorithms/stations.py" line="123"/>
         <source>Station spacing used (m)</source>
         <translation>Espacement des stations utilisé (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <location filename="../processing/algorithms/stations.py" line="123"/>
         <source>σ of the home range (m)</source>
         <translation>σ du domaine vital (m)</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="124"/>
+        <location filename="../processing/algorithms/stations.py" line="123"/>
         <source>Number of primary stations</source>
         <translation>Nombre de stations principales</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="162"/>
+        <location filename="../processing/algorithms/stations.py" line="161"/>
         <source>Layer &apos;{layer}&apos;: {text}</source>
         <translation>Couche « {layer} » : {text}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="176"/>
+        <location filename="../processing/algorithms/stations.py" line="175"/>
         <source>{n} waypoints written to {path}</source>
         <translation>{n} points de passage écrits dans {path}</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="177"/>
+        <location filename="../processing/algorithms/stations.py" line="176"/>
         <source>{n} primary and {r} reserve stations, {s:.0f} m apart.</source>
         <translation>{n} stations principales et {r} de réserve, espacées de {s:.0f} m.</translation>
     </message>
     <message>
-        <location filename="../processing/algorithms/stations.py" line="195"/>
+        <location filename="../processing/algorithms/stations.py" line="194"/>
         <source>, projected from {src} (UTM zone of the frame&apos;s centre)</source>
         <translation>, projeté depuis {src} (zone UTM du centre de la base de sondage)</translation>
     </message>

@@ -14,6 +14,7 @@ from qgis.core import (
     QgsCoordinateTransform,
     QgsFeature,
     QgsFeatureRequest,
+    QgsField,
     QgsFields,
     QgsGeometry,
     QgsProcessingException,
@@ -207,6 +208,16 @@ def listed_ids(ids):
 
 
 # -- writing -----------------------------------------------------------------------
+def stratum_field_like(source, stratum_field):
+    """The output field ``stratum``: of the type of ``source``'s field ``stratum_field``, or an integer
+    field when there is none (one stratum)."""
+    if not stratum_field:
+        return compat.make_field("stratum", "int")
+    stratum = QgsField(source.fields().field(stratum_field))
+    stratum.setName("stratum")
+    return stratum
+
+
 def make_fields(spec):
     """``QgsFields`` from ``[(name, kind), ...]`` or ``[(name, kind, length, precision), ...]``."""
     fields = QgsFields()

@@ -1,7 +1,6 @@
 """plotwise:layout: sample units over a frame or its strata, with reserves and GPS waypoints."""
 import numpy as np
 from qgis.core import (
-    QgsField,
     QgsProcessingException,
     QgsProcessingParameterBoolean,
     QgsProcessingParameterEnum,
@@ -274,12 +273,7 @@ class LayoutUnits(PlotwiseAlgorithm):
     def _write_units(self, parameters, context, feedback, source, stratum_field, result, crs):
         spec = result.spec
         fields = bridge.make_fields([("unit_id", "string", 24)])
-        if stratum_field:
-            stratum = QgsField(source.fields().field(stratum_field))
-            stratum.setName("stratum")
-            fields.append(stratum)
-        else:
-            fields.append(compat.make_field("stratum", "int"))
+        fields.append(bridge.stratum_field_like(source, stratum_field))
         for item in (
             ("role", "string", 8), ("draw_ord", "int"), ("area_m2", "double", 20, 3), ("incl_p", "double", 24, 12),
             ("weight", "double", 24, 6), ("lon", "double", 14, 8), ("lat", "double", 14, 8), ("count", "int"),

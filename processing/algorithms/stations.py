@@ -1,7 +1,6 @@
 """plotwise:stations: camera-trap or recorder stations over a frame, spaced from the species' home range."""
 from qgis.PyQt.QtCore import QCoreApplication
 from qgis.core import (
-    QgsField,
     QgsProcessingException,
     QgsProcessingOutputNumber,
     QgsProcessingParameterEnum,
@@ -198,12 +197,7 @@ class Stations(PlotwiseAlgorithm):
 
     def _write_stations(self, parameters, context, feedback, source, stratum_field, result, crs):
         fields = bridge.make_fields([("station", "string", 24)])
-        if stratum_field:
-            stratum = QgsField(source.fields().field(stratum_field))
-            stratum.setName("stratum")
-            fields.append(stratum)
-        else:
-            fields.append(compat.make_field("stratum", "int"))
+        fields.append(bridge.stratum_field_like(source, stratum_field))
         for item in (("cluster", "string", 24), ("role", "string", 8), ("draw_ord", "int"), ("lon", "double", 14, 8),
                      ("lat", "double", 14, 8)):
             fields.append(compat.make_field(*item))
