@@ -614,3 +614,28 @@ def test_english_host_keeps_english(english):
     names = {a["id"]: a["displayName"] for a in english["algorithms"]}
     assert names["plotwise:estimate"] == "Estimate density and abundance"
     assert english["provider"] == "Plotwise survey design and estimation"
+
+
+def test_carry_translations_fills_a_moved_string_only(tmp_path):
+    """scripts/carry_translations.py: an unfinished entry takes the translation of an obsolete entry with the
+    same English (a string that changed context); one whose English changed stays unfinished."""
+    import importlib.util
+
+    spec = importlib.util.spec_from_file_location("carry_translations", REPO / "scripts" / "carry_translations.py")
+    carry = importlib.util.module_from_spec(spec)
+    spec.loader.exec_module(carry)
+    ts = tmp_path / "x.ts"
+    ts.write_text(
+        '<?xml version="1.0" encoding="utf-8"?>\n<!DOCTYPE TS>\n<TS version="2.1" language="fr_FR">\n'
+        "<context><name>Old</name>"
+        "<message><source>Strata</source><translation type=\"obsolete\">Strates</translation></message>"
+        "<message><source>Units</source><translation type=\"obsolete\">Unités</translation></message></context>"
+        "<context><name>PlotwiseReport</name>"
+        "<message><source>Strata</source><translation type=\"unfinished\"></translation></message>"
+        "<message><source>Units.</source><translation type=\"unfinished\"></translation></message></context>"
+        "</TS>\n", encoding="utf-8")
+    carry.carry(str(ts))
+    report = next(c for c in ET.parse(ts).getroot().iter("context") if c.findtext("name") == "PlotwiseReport")
+    entries = {m.findtext("source"): m.find("translation") for m in report.iter("message")}
+    assert entries["Strata"].text == "Strates" and entries["Strata"].get("type") is None
+    assert entries["Units."].get("type") == "unfinished" and not entries["Units."].text
