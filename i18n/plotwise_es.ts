@@ -7687,42 +7687,42 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
 <context>
     <name>PlotwiseStyles</name>
     <message>
-        <location filename="../processing/styles.py" line="207"/>
+        <location filename="../processing/styles.py" line="200"/>
         <source>primary unit</source>
         <translation>unidad principal</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="208"/>
+        <location filename="../processing/styles.py" line="201"/>
         <source>reserve unit</source>
         <translation>unidad de reserva</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="338"/>
+        <location filename="../processing/styles.py" line="331"/>
         <source>per {unit}</source>
         <translation>por {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="252"/>
+        <location filename="../processing/styles.py" line="245"/>
         <source>Density (animals {per})</source>
         <translation>Densidad (animales {per})</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="282"/>
+        <location filename="../processing/styles.py" line="275"/>
         <source>no estimate (no surveyed unit)</source>
         <translation>sin estimación (ninguna unidad muestreada)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="392"/>
+        <location filename="../processing/styles.py" line="385"/>
         <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
         <translation>No se pudo aplicar el estilo a la capa {name} ({error}); conserva el estilo predeterminado.</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="444"/>
+        <location filename="../processing/styles.py" line="437"/>
         <source>left out (no surveyed occasion)</source>
         <translation>dejado fuera (ninguna ocasión muestreada)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="446"/>
+        <location filename="../processing/styles.py" line="439"/>
         <source>Occupancy given the detections (psi_cond)</source>
         <translation>Ocupación dadas las detecciones (psi_cond)</translation>
     </message>

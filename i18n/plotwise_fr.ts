@@ -7687,42 +7687,42 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
 <context>
     <name>PlotwiseStyles</name>
     <message>
-        <location filename="../processing/styles.py" line="207"/>
+        <location filename="../processing/styles.py" line="200"/>
         <source>primary unit</source>
         <translation>unité principale</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="208"/>
+        <location filename="../processing/styles.py" line="201"/>
         <source>reserve unit</source>
         <translation>unité de réserve</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="338"/>
+        <location filename="../processing/styles.py" line="331"/>
         <source>per {unit}</source>
         <translation>par {unit}</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="252"/>
+        <location filename="../processing/styles.py" line="245"/>
         <source>Density (animals {per})</source>
         <translation>Densité (animaux {per})</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="282"/>
+        <location filename="../processing/styles.py" line="275"/>
         <source>no estimate (no surveyed unit)</source>
         <translation>pas d'estimation (aucune unité inventoriée)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="392"/>
+        <location filename="../processing/styles.py" line="385"/>
         <source>The layer {name} could not be styled ({error}); it keeps the default style.</source>
         <translation>La couche {name} n'a pas pu recevoir son style ({error}) ; elle garde le style par défaut.</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="444"/>
+        <location filename="../processing/styles.py" line="437"/>
         <source>left out (no surveyed occasion)</source>
         <translation>écarté (aucune occasion échantillonnée)</translation>
     </message>
     <message>
-        <location filename="../processing/styles.py" line="446"/>
+        <location filename="../processing/styles.py" line="439"/>
         <source>Occupancy given the detections (psi_cond)</source>
         <translation>Occupation sachant les détections (psi_cond)</translation>
     </message>

@@ -419,21 +419,13 @@ def write_gpx_waypoints(path, names, lon, lat, descriptions=None, kinds=None):
     return path
 
 
-try:  # Qgis.FeatureRequestFlag from 3.36 on
-    from qgis.core import Qgis as _Qgis
-
-    _NO_GEOMETRY = _Qgis.FeatureRequestFlag.NoGeometry
-except AttributeError:
-    _NO_GEOMETRY = QgsFeatureRequest.NoGeometry
-
-
 def read_attributes(source, field_names, layer_name=""):
     """The values of ``field_names`` of every feature of ``source`` (a table or a layer), without
     geometry: ``(feature ids, {field: [plain values]})``. Missing fields are an error naming them."""
     layer_name = layer_name or source.sourceName()
     fields = require_fields(source, field_names, layer_name)
     request = QgsFeatureRequest()
-    request.setFlags(_NO_GEOMETRY)
+    request.setFlags(compat.REQUEST_NO_GEOMETRY)
     request.setSubsetOfAttributes([fields.lookupField(name) for name in field_names if name])
     fids, values = [], {name: [] for name in field_names if name}
     for feature in source.getFeatures(request):

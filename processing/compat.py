@@ -107,6 +107,8 @@ LEVEL_CRITICAL = _first(lambda: Qgis.MessageLevel.Critical, lambda: Qgis.Critica
 from qgis.core import QgsFeatureRequest  # noqa: E402
 
 GEOMETRY_NO_CHECK = _first(lambda: Qgis.InvalidGeometryCheck.NoCheck, lambda: QgsFeatureRequest.GeometryNoCheck)
+# Feature request without geometry: Qgis.FeatureRequestFlag from 3.36 on.
+REQUEST_NO_GEOMETRY = _first(lambda: Qgis.FeatureRequestFlag.NoGeometry, lambda: QgsFeatureRequest.NoGeometry)
 
 # Sink flags (fully scoped: works on 3.22 and 4.x).
 from qgis.core import QgsFeatureSink  # noqa: E402

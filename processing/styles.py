@@ -16,7 +16,6 @@ Two ways in:
   ``PlotwiseAlgorithm.style_output(context, dest_id, style_name)``.
 """
 from qgis.core import (
-    Qgis,
     QgsBasicNumericFormat,
     QgsCategorizedSymbolRenderer,
     QgsClassificationQuantile,
@@ -65,12 +64,6 @@ GREENNESS_RAMP = ("#f5efd9", "#d7e2b4", "#a3c68a", "#5c9e6e", "#2f6a44")
 DENSITY_CLASSES = 5
 
 
-try:  # Qgis.FeatureRequestFlag from 3.36 on
-    _NO_GEOMETRY = Qgis.FeatureRequestFlag.NoGeometry
-except AttributeError:
-    _NO_GEOMETRY = QgsFeatureRequest.NoGeometry
-
-
 # -- building blocks -------------------------------------------------------------------
 def colour_ramp(colours):
     """A ``QgsGradientColorRamp`` through ``colours`` at even steps."""
@@ -107,7 +100,7 @@ def _labels_for(layer, field, label_field):
     if layer.fields().lookupField(label_field) < 0:
         return {}
     request = QgsFeatureRequest()
-    request.setFlags(_NO_GEOMETRY)
+    request.setFlags(compat.REQUEST_NO_GEOMETRY)
     request.setSubsetOfAttributes([field, label_field], layer.fields())
     labels = {}
     for feature in layer.getFeatures(request):
