@@ -3685,167 +3685,167 @@ Seguridad en el terreno: compruebe el acceso y la seguridad de cada unidad antes
         <translation>, estrato {stratum}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="37"/>
+        <location filename="../processing/engine/panels.py" line="38"/>
         <source>every year</source>
         <translation>cada año</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="37"/>
+        <location filename="../processing/engine/panels.py" line="38"/>
         <source>rotating panels</source>
         <translation>paneles rotativos</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="37"/>
+        <location filename="../processing/engine/panels.py" line="38"/>
         <source>split panels</source>
         <translation>paneles divididos</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="104"/>
+        <location filename="../processing/engine/panels.py" line="105"/>
         <source>PANEL_DESIGN must be 0 (every year), 1 (rotating) or 2 (split); got {design}.</source>
         <translation>PANEL_DESIGN debe ser 0 (cada año), 1 (rotativos) o 2 (divididos); se recibió {design}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="109"/>
+        <location filename="../processing/engine/panels.py" line="110"/>
         <source>YEARS must be between 1 and {most}; got {years}.</source>
         <translation>YEARS debe estar entre 1 y {most}; se recibió {years}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="116"/>
+        <location filename="../processing/engine/panels.py" line="117"/>
         <source>Rotating and split designs need at least 2 rotating panels (PANELS = {panels}); with one panel every unit is visited every year: choose the every-year design.</source>
         <translation>Los diseños de paneles rotativos y divididos necesitan al menos 2 paneles rotativos (PANELS = {panels}); con un solo panel, cada unidad se visita cada año: elija el diseño «cada año».</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="122"/>
+        <location filename="../processing/engine/panels.py" line="123"/>
         <source>With {panels} panels over {years} years, panels {first} to {panels} would never be visited: use at most {years} panels or more years.</source>
         <translation>Con {panels} paneles en {years} años, los paneles {first} a {panels} nunca se visitarían: use como máximo {years} paneles o más años.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="129"/>
+        <location filename="../processing/engine/panels.py" line="130"/>
         <source>CORE_SHARE must lie between 0 and 1 for split panels (the share of units visited every year); got {share:g}.</source>
         <translation>CORE_SHARE debe estar entre 0 y 1 para los paneles divididos (la proporción de unidades visitadas cada año); se recibió {share:g}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="230"/>
+        <location filename="../processing/engine/panels.py" line="231"/>
         <source>The units layer has no primary unit to assign to panels.</source>
         <translation>La capa de unidades no tiene ninguna unidad principal que asignar a paneles.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="239"/>
+        <location filename="../processing/engine/panels.py" line="240"/>
         <source>Units {ids} have no draw order (draw_ord is empty). Panels follow the draw order of the layout: fill it or choose another draw-order field.</source>
         <translation>Las unidades {ids} no tienen orden de sorteo (draw_ord está vacío). Los paneles siguen el orden de sorteo de la disposición: rellénelo o elija otro campo de orden de sorteo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="251"/>
+        <location filename="../processing/engine/panels.py" line="252"/>
         <source>Units {ids} share their draw order with another primary unit of the same stratum. Each stratum&apos;s draw order must run 1, 2, 3, ... without repeats: use the layout&apos;s draw_ord field.</source>
         <translation>Las unidades {ids} comparten su orden de sorteo con otra unidad principal del mismo estrato. El orden de sorteo de cada estrato debe ir 1, 2, 3, ... sin repeticiones: use el campo draw_ord de la disposición.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="301"/>
+        <location filename="../processing/engine/panels.py" line="297"/>
         <source>Stratum {key} has {n} primary units, too few for {k} panels: panels {empty} get none of its units in that stratum.</source>
         <translation>El estrato {key} tiene {n} unidades principales, demasiado pocas para {k} paneles: los paneles {empty} no reciben ninguna unidad en ese estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="310"/>
+        <location filename="../processing/engine/panels.py" line="306"/>
         <source>The units have no draw-order field: panels follow the order of the features in the layer. Panels are evenly spread only when that order is the draw order of a spatially balanced layout.</source>
         <translation>Las unidades no tienen campo de orden de sorteo: los paneles siguen el orden de las entidades en la capa. Los paneles solo quedan repartidos de modo uniforme si ese orden es el orden de sorteo de una disposición espacialmente equilibrada.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="504"/>
+        <location filename="../processing/engine/panels.py" line="500"/>
         <source>The layout was simple random (its units&apos; design field says so): each panel is a random part of it, not an evenly spread sample of the frame. Use a spatially balanced layout for evenly spread panels.</source>
         <translation>La disposición era aleatoria simple (lo indica el campo design de sus unidades): cada panel es una parte aleatoria de ella, no una muestra repartida de modo uniforme por el marco. Use una disposición espacialmente equilibrada para obtener paneles repartidos de modo uniforme.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="509"/>
+        <location filename="../processing/engine/panels.py" line="505"/>
         <source>The layout was a systematic grid (its units&apos; design field says so): its draw order runs row by row, so consecutive blocks of it are bands across the frame. Use a spatially balanced layout for evenly spread panels.</source>
         <translation>La disposición era una cuadrícula sistemática (lo indica el campo design de sus unidades): su orden de sorteo avanza fila por fila, de modo que sus bloques consecutivos son bandas que atraviesan el marco. Use una disposición espacialmente equilibrada para obtener paneles repartidos de modo uniforme.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="515"/>
+        <location filename="../processing/engine/panels.py" line="511"/>
         <source>The panels are not more evenly spread than random parts of the layout (p = {p:.2f}). The layout was probably simple random or a systematic grid: each panel then covers the frame unevenly. Use a spatially balanced layout for evenly spread panels.</source>
         <translation>Los paneles no están repartidos de modo más uniforme que partes aleatorias de la disposición (p = {p:.2f}). La disposición probablemente era aleatoria simple o una cuadrícula sistemática: cada panel cubre entonces el marco de forma desigual. Use una disposición espacialmente equilibrada para obtener paneles repartidos de modo uniforme.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="139"/>
+        <location filename="../processing/engine/trend.py" line="150"/>
         <source>Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records.</source>
         <translation>Los registros {ids} no tienen identificador de unidad o no tienen un año en número entero. Rellene ambos o elimine los registros.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="147"/>
+        <location filename="../processing/engine/trend.py" line="155"/>
         <source>Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) when the unit was not surveyed.</source>
         <translation>Los registros {ids} tienen un conteo negativo o no numérico. Los conteos son 0 o más; deje el conteo vacío (NULL) cuando la unidad no se muestreó.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="155"/>
+        <location filename="../processing/engine/trend.py" line="160"/>
         <source>Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the unit-area field empty.</source>
         <translation>Los registros {ids} no tienen área de la unidad (o tienen una que no es mayor que 0). Indique el área de cada registro muestreado, o deje vacío el campo de área de la unidad.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="170"/>
+        <location filename="../processing/engine/trend.py" line="174"/>
         <source>A trend needs counts from at least {k} different years; the records hold {found}.</source>
         <translation>Una tendencia necesita conteos de al menos {k} años distintos; los registros contienen {found}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="184"/>
+        <location filename="../processing/engine/trend.py" line="188"/>
         <source>Units were counted twice in one year (unit, year and record ids): {items}. Keep one record per unit and year (add the counts of repeated visits first).</source>
         <translation>Hay unidades contadas dos veces en un mismo año (unidad, año e identificadores de registro): {items}. Conserve un registro por unidad y año (sume antes los conteos de las visitas repetidas).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="204"/>
+        <location filename="../processing/engine/trend.py" line="208"/>
         <source>Units {ids} lie in more than one stratum across their records. A unit keeps its stratum over the years: correct the stratum field.</source>
         <translation>Las unidades {ids} figuran en más de un estrato según sus registros. Una unidad conserva su estrato a lo largo de los años: corrija el campo de estrato.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="572"/>
+        <location filename="../processing/engine/trend.py" line="576"/>
         <source>CONFIDENCE must lie between 0.5 and 1 (for example 0.95); got {c:g}.</source>
         <translation>CONFIDENCE debe estar entre 0.5 y 1 (por ejemplo 0.95); se recibió {c:g}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="679"/>
+        <location filename="../processing/engine/trend.py" line="683"/>
         <source>Every count is 0: no trend can be estimated from records without animals.</source>
         <translation>Todos los conteos son 0: no se puede estimar ninguna tendencia a partir de registros sin animales.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="684"/>
+        <location filename="../processing/engine/trend.py" line="688"/>
         <source>The trend cannot be estimated: no unit with animals was counted in two different years. A trend needs units revisited over the years.</source>
         <translation>No se puede estimar la tendencia: ninguna unidad con animales se contó en dos años distintos. Una tendencia necesita unidades revisitadas a lo largo de los años.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="689"/>
+        <location filename="../processing/engine/trend.py" line="693"/>
         <source>The trend did not converge (the counts may lie all in the first or all in the last years). Check the year and count fields.</source>
         <translation>El ajuste de la tendencia no convergió (puede que los conteos estén todos en los primeros o todos en los últimos años). Compruebe los campos de año y de conteo.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="716"/>
+        <location filename="../processing/engine/trend.py" line="720"/>
         <source>This revisit design leaves no degrees of freedom for year-to-year variation (the panels do not link enough years): the interval allows only for variation between units, and is too narrow if whole years differ. Add a core of units visited every year.</source>
         <translation>Este diseño de revisita no deja grados de libertad para la variación entre años (los paneles no enlazan suficientes años): el intervalo solo tiene en cuenta la variación entre unidades y es demasiado estrecho si difieren años enteros. Añada un núcleo de unidades visitadas cada año.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="787"/>
+        <location filename="../processing/engine/trend.py" line="789"/>
         <source>Records {ids} have no whole-number year.</source>
         <translation>Los registros {ids} no tienen un año en número entero.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="793"/>
+        <location filename="../processing/engine/trend.py" line="792"/>
         <source>Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years without an estimate, or use the unit counts instead.</source>
         <translation>Los registros {ids} no tienen una estimación mayor que 0. Una tendencia log-lineal necesita estimaciones mayores que 0: deje fuera los años sin estimación o use en su lugar los conteos por unidad.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="800"/>
+        <location filename="../processing/engine/trend.py" line="796"/>
         <source>Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the estimate step writes it).</source>
         <translation>Los registros {ids} no tienen un error estándar mayor que 0. Cada estimación anual necesita su error estándar (el paso de estimación lo escribe).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="809"/>
+        <location filename="../processing/engine/trend.py" line="804"/>
         <source>Years {years} have more than one estimate. Keep one estimate per year (for the estimate step&apos;s table: its rows &apos;all&apos;, or one stratum).</source>
         <translation>Los años {years} tienen más de una estimación. Conserve una estimación por año (para la tabla del paso de estimación: sus filas 'all', o un solo estrato).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="815"/>
+        <location filename="../processing/engine/trend.py" line="810"/>
         <source>A trend needs estimates from at least {k} different years; the records hold {n}.</source>
         <translation>Una tendencia necesita estimaciones de al menos {k} años distintos; los registros contienen {n}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="867"/>
+        <location filename="../processing/engine/trend.py" line="862"/>
         <source>Only {k} years: the year-to-year variation and the trend are both poorly known, and the interval is wide.</source>
         <translation>Solo {k} años: tanto la variación entre años como la tendencia se conocen mal, y el intervalo es amplio.</translation>
     </message>

@@ -3685,167 +3685,167 @@ Sécurité sur le terrain : vérifiez l'accès à chaque unité et sa sécurité
         <translation>, strate {stratum}</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="37"/>
+        <location filename="../processing/engine/panels.py" line="38"/>
         <source>every year</source>
         <translation>chaque année</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="37"/>
+        <location filename="../processing/engine/panels.py" line="38"/>
         <source>rotating panels</source>
         <translation>panels rotatifs</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="37"/>
+        <location filename="../processing/engine/panels.py" line="38"/>
         <source>split panels</source>
         <translation>panels partagés</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="104"/>
+        <location filename="../processing/engine/panels.py" line="105"/>
         <source>PANEL_DESIGN must be 0 (every year), 1 (rotating) or 2 (split); got {design}.</source>
         <translation>PANEL_DESIGN doit valoir 0 (chaque année), 1 (rotatifs) ou 2 (partagés) ; reçu {design}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="109"/>
+        <location filename="../processing/engine/panels.py" line="110"/>
         <source>YEARS must be between 1 and {most}; got {years}.</source>
         <translation>YEARS doit être compris entre 1 et {most} ; reçu {years}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="116"/>
+        <location filename="../processing/engine/panels.py" line="117"/>
         <source>Rotating and split designs need at least 2 rotating panels (PANELS = {panels}); with one panel every unit is visited every year: choose the every-year design.</source>
         <translation>Les plans à panels rotatifs et partagés exigent au moins 2 panels rotatifs (PANELS = {panels}) ; avec un seul panel, chaque unité est visitée chaque année : choisissez le plan « chaque année ».</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="122"/>
+        <location filename="../processing/engine/panels.py" line="123"/>
         <source>With {panels} panels over {years} years, panels {first} to {panels} would never be visited: use at most {years} panels or more years.</source>
         <translation>Avec {panels} panels sur {years} ans, les panels {first} à {panels} ne seraient jamais visités : utilisez au plus {years} panels ou davantage d'années.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="129"/>
+        <location filename="../processing/engine/panels.py" line="130"/>
         <source>CORE_SHARE must lie between 0 and 1 for split panels (the share of units visited every year); got {share:g}.</source>
         <translation>CORE_SHARE doit être compris entre 0 et 1 pour les panels partagés (la part des unités visitées chaque année) ; reçu {share:g}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="230"/>
+        <location filename="../processing/engine/panels.py" line="231"/>
         <source>The units layer has no primary unit to assign to panels.</source>
         <translation>La couche des unités n'a aucune unité principale à affecter à des panels.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="239"/>
+        <location filename="../processing/engine/panels.py" line="240"/>
         <source>Units {ids} have no draw order (draw_ord is empty). Panels follow the draw order of the layout: fill it or choose another draw-order field.</source>
         <translation>Les unités {ids} n'ont pas d'ordre de tirage (draw_ord est vide). Les panels suivent l'ordre de tirage de la disposition : remplissez-le ou choisissez un autre champ d'ordre de tirage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="251"/>
+        <location filename="../processing/engine/panels.py" line="252"/>
         <source>Units {ids} share their draw order with another primary unit of the same stratum. Each stratum&apos;s draw order must run 1, 2, 3, ... without repeats: use the layout&apos;s draw_ord field.</source>
         <translation>Les unités {ids} partagent leur ordre de tirage avec une autre unité principale de la même strate. L'ordre de tirage de chaque strate doit aller 1, 2, 3, ... sans répétition : utilisez le champ draw_ord de la disposition.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="301"/>
+        <location filename="../processing/engine/panels.py" line="297"/>
         <source>Stratum {key} has {n} primary units, too few for {k} panels: panels {empty} get none of its units in that stratum.</source>
         <translation>La strate {key} a {n} unités principales, trop peu pour {k} panels : les panels {empty} n'y reçoivent aucune unité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="310"/>
+        <location filename="../processing/engine/panels.py" line="306"/>
         <source>The units have no draw-order field: panels follow the order of the features in the layer. Panels are evenly spread only when that order is the draw order of a spatially balanced layout.</source>
         <translation>Les unités n'ont pas de champ d'ordre de tirage : les panels suivent l'ordre des entités dans la couche. Les panels ne sont uniformément répartis que si cet ordre est l'ordre de tirage d'une disposition spatialement équilibrée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="504"/>
+        <location filename="../processing/engine/panels.py" line="500"/>
         <source>The layout was simple random (its units&apos; design field says so): each panel is a random part of it, not an evenly spread sample of the frame. Use a spatially balanced layout for evenly spread panels.</source>
         <translation>La disposition était aléatoire simple (le champ design de ses unités l'indique) : chaque panel en est une partie aléatoire, non un échantillon uniformément réparti de la base de sondage. Utilisez une disposition spatialement équilibrée pour obtenir des panels uniformément répartis.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="509"/>
+        <location filename="../processing/engine/panels.py" line="505"/>
         <source>The layout was a systematic grid (its units&apos; design field says so): its draw order runs row by row, so consecutive blocks of it are bands across the frame. Use a spatially balanced layout for evenly spread panels.</source>
         <translation>La disposition était une grille systématique (le champ design de ses unités l'indique) : son ordre de tirage va ligne par ligne, si bien que ses blocs consécutifs sont des bandes à travers la base de sondage. Utilisez une disposition spatialement équilibrée pour obtenir des panels uniformément répartis.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/panels.py" line="515"/>
+        <location filename="../processing/engine/panels.py" line="511"/>
         <source>The panels are not more evenly spread than random parts of the layout (p = {p:.2f}). The layout was probably simple random or a systematic grid: each panel then covers the frame unevenly. Use a spatially balanced layout for evenly spread panels.</source>
         <translation>Les panels ne sont pas répartis plus uniformément que des parties aléatoires de la disposition (p = {p:.2f}). La disposition était probablement aléatoire simple ou une grille systématique : chaque panel couvre alors la base de sondage de façon inégale. Utilisez une disposition spatialement équilibrée pour obtenir des panels uniformément répartis.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="139"/>
+        <location filename="../processing/engine/trend.py" line="150"/>
         <source>Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records.</source>
         <translation>Les enregistrements {ids} n'ont pas d'identifiant d'unité ou pas d'année sous forme de nombre entier. Renseignez les deux, ou supprimez ces enregistrements.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="147"/>
+        <location filename="../processing/engine/trend.py" line="155"/>
         <source>Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) when the unit was not surveyed.</source>
         <translation>Les enregistrements {ids} ont un comptage négatif ou non numérique. Les comptages valent 0 ou plus ; laissez le comptage vide (NULL) quand l'unité n'a pas été inventoriée.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="155"/>
+        <location filename="../processing/engine/trend.py" line="160"/>
         <source>Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the unit-area field empty.</source>
         <translation>Les enregistrements {ids} n'ont pas de surface d'unité (ou une surface qui n'est pas supérieure à 0). Donnez sa surface à chaque enregistrement inventorié, ou laissez vide le champ de surface d'unité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="170"/>
+        <location filename="../processing/engine/trend.py" line="174"/>
         <source>A trend needs counts from at least {k} different years; the records hold {found}.</source>
         <translation>Une tendance exige des comptages d'au moins {k} années différentes ; les enregistrements en contiennent {found}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="184"/>
+        <location filename="../processing/engine/trend.py" line="188"/>
         <source>Units were counted twice in one year (unit, year and record ids): {items}. Keep one record per unit and year (add the counts of repeated visits first).</source>
         <translation>Des unités ont été comptées deux fois la même année (unité, année et identifiants d'enregistrement) : {items}. Gardez un seul enregistrement par unité et par année (additionnez d'abord les comptages des visites répétées).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="204"/>
+        <location filename="../processing/engine/trend.py" line="208"/>
         <source>Units {ids} lie in more than one stratum across their records. A unit keeps its stratum over the years: correct the stratum field.</source>
         <translation>Les unités {ids} se trouvent dans plus d'une strate selon leurs enregistrements. Une unité garde sa strate au fil des années : corrigez le champ de strate.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="572"/>
+        <location filename="../processing/engine/trend.py" line="576"/>
         <source>CONFIDENCE must lie between 0.5 and 1 (for example 0.95); got {c:g}.</source>
         <translation>CONFIDENCE doit être compris entre 0.5 et 1 (par exemple 0.95) ; reçu {c:g}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="679"/>
+        <location filename="../processing/engine/trend.py" line="683"/>
         <source>Every count is 0: no trend can be estimated from records without animals.</source>
         <translation>Tous les comptages valent 0 : aucune tendance ne peut être estimée à partir d'enregistrements sans animaux.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="684"/>
+        <location filename="../processing/engine/trend.py" line="688"/>
         <source>The trend cannot be estimated: no unit with animals was counted in two different years. A trend needs units revisited over the years.</source>
         <translation>La tendance ne peut pas être estimée : aucune unité avec des animaux n'a été comptée deux années différentes. Une tendance exige des unités revisitées au fil des années.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="689"/>
+        <location filename="../processing/engine/trend.py" line="693"/>
         <source>The trend did not converge (the counts may lie all in the first or all in the last years). Check the year and count fields.</source>
         <translation>L'ajustement de la tendance n'a pas convergé (les comptages se trouvent peut-être tous dans les premières ou tous dans les dernières années). Vérifiez les champs d'année et de comptage.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="716"/>
+        <location filename="../processing/engine/trend.py" line="720"/>
         <source>This revisit design leaves no degrees of freedom for year-to-year variation (the panels do not link enough years): the interval allows only for variation between units, and is too narrow if whole years differ. Add a core of units visited every year.</source>
         <translation>Ce plan de revisite ne laisse aucun degré de liberté pour la variation d'une année à l'autre (les panels ne relient pas assez d'années) : l'intervalle ne tient compte que de la variation entre unités, et il est trop étroit si des années entières diffèrent. Ajoutez un noyau d'unités visitées chaque année.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="787"/>
+        <location filename="../processing/engine/trend.py" line="789"/>
         <source>Records {ids} have no whole-number year.</source>
         <translation>Les enregistrements {ids} n'ont pas d'année sous forme de nombre entier.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="793"/>
+        <location filename="../processing/engine/trend.py" line="792"/>
         <source>Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years without an estimate, or use the unit counts instead.</source>
         <translation>Les enregistrements {ids} n'ont pas d'estimation supérieure à 0. Une tendance log-linéaire exige des estimations supérieures à 0 : écartez les années sans estimation, ou utilisez plutôt les comptages par unité.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="800"/>
+        <location filename="../processing/engine/trend.py" line="796"/>
         <source>Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the estimate step writes it).</source>
         <translation>Les enregistrements {ids} n'ont pas d'erreur type supérieure à 0. Chaque estimation annuelle a besoin de son erreur type (l'étape d'estimation l'écrit).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="809"/>
+        <location filename="../processing/engine/trend.py" line="804"/>
         <source>Years {years} have more than one estimate. Keep one estimate per year (for the estimate step&apos;s table: its rows &apos;all&apos;, or one stratum).</source>
         <translation>Les années {years} ont plus d'une estimation. Gardez une seule estimation par année (pour la table de l'étape d'estimation : ses lignes 'all', ou une seule strate).</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="815"/>
+        <location filename="../processing/engine/trend.py" line="810"/>
         <source>A trend needs estimates from at least {k} different years; the records hold {n}.</source>
         <translation>Une tendance exige des estimations d'au moins {k} années différentes ; les enregistrements en contiennent {n}.</translation>
     </message>
     <message>
-        <location filename="../processing/engine/trend.py" line="867"/>
+        <location filename="../processing/engine/trend.py" line="862"/>
         <source>Only {k} years: the year-to-year variation and the trend are both poorly known, and the interval is wide.</source>
         <translation>Seulement {k} années : la variation d'une année à l'autre et la tendance sont toutes deux mal connues, et l'intervalle est large.</translation>
     </message>

@@ -32,6 +32,7 @@ from shapely.geometry import MultiPoint
 from .edge import BALANCED, GRID, GRID_OVERLAP, RANDOM, RANDOM_APART
 from .errors import QT_TRANSLATE_NOOP, InputError, message
 from .geometry import contains_xy
+from .listing import listed_ids
 
 EVERY_YEAR, ROTATING, SPLIT = 0, 1, 2
 DESIGNS = (
@@ -240,7 +241,7 @@ def _units_iv(unit_ids, strata, draw_ord, roles):
             "PlotwiseEngine",
             "Units {ids} have no draw order (draw_ord is empty). Panels follow the draw order of the layout: fill it "
             "or choose another draw-order field."),
-            ids=_id_text(missing)), ids=missing)
+            ids=listed_ids(missing)), ids=missing)
     repeated = []
     for key in dict.fromkeys(strata):
         members = np.flatnonzero(primary & np.array([s == key for s in strata]))
@@ -252,13 +253,8 @@ def _units_iv(unit_ids, strata, draw_ord, roles):
             "PlotwiseEngine",
             "Units {ids} share their draw order with another primary unit of the same stratum. Each stratum's draw "
             "order must run 1, 2, 3, ... without repeats: use the layout's draw_ord field."),
-            ids=_id_text(repeated)), ids=repeated)
+            ids=listed_ids(repeated)), ids=repeated)
     return _UnitsInput(tuple(unit_ids), strata, values, primary, True)
-
-
-def _id_text(ids, limit=20):
-    ids = [str(i) for i in ids]
-    return ", ".join(ids[:limit]) + (f" (+{len(ids) - limit})" if len(ids) > limit else "")
 
 
 def assign_panels(unit_ids, spec, strata=None, draw_ord=None, roles=None, days_per_unit=0.0):
