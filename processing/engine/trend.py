@@ -109,6 +109,19 @@ def _as_float(values):
     return np.array([np.nan if v is None else float(v) for v in values], dtype=float)
 
 
+def _whole(values):
+    """True where the floats ``values`` are finite whole numbers."""
+    with np.errstate(invalid="ignore"):
+        return np.isfinite(values) & (values == np.round(values))
+
+
+def _refuse_records(record_ids, mask, text):
+    """Stop with ``text`` (a ``PlotwiseEngine`` text with ``{ids}``), naming the records where ``mask`` holds."""
+    bad = [record_ids[i] for i in np.flatnonzero(mask)]
+    if bad:
+        raise InputError(message(text, ids=listed_ids(bad)), ids=bad)
+
+
 def count_table_iv(unit_ids, years, counts, effort=None, strata=None, record_ids=None):
     """Check unit-count records and arrange them as a :class:`CountTable`.
 
@@ -133,30 +146,21 @@ def count_table_iv(unit_ids, years, counts, effort=None, strata=None, record_ids
     n = len(unit_ids)
     record_ids = list(record_ids) if record_ids is not None else list(range(1, n + 1))
     year_values = _as_float(years)
-    bad = [record_ids[i] for i in range(n) if unit_ids[i] is None or not np.isfinite(year_values[i])
-           or year_values[i] != np.round(year_values[i])]
-    if bad:
-        raise InputError(message(QT_TRANSLATE_NOOP(
-            "PlotwiseEngine",
-            "Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records."),
-            ids=listed_ids(bad)), ids=bad)
+    no_unit = np.array([u is None for u in unit_ids], dtype=bool)
+    _refuse_records(record_ids, no_unit | ~_whole(year_values), QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Records {ids} have no unit id or no whole-number year. Fill both in, or remove the records."))
     count_values = _as_float(counts)
     given = np.array([c is not None for c in counts], dtype=bool)
-    bad = [record_ids[i] for i in np.flatnonzero(given & ~(np.isfinite(count_values) & (count_values >= 0)))]
-    if bad:
-        raise InputError(message(QT_TRANSLATE_NOOP(
-            "PlotwiseEngine",
-            "Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) "
-            "when the unit was not surveyed."),
-            ids=listed_ids(bad)), ids=bad)
+    _refuse_records(record_ids, given & ~(np.isfinite(count_values) & (count_values >= 0)), QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Records {ids} have a negative or non-numeric count. Counts are 0 or more; leave the count empty (NULL) "
+        "when the unit was not surveyed."))
     effort_values = np.ones(n) if effort is None else _as_float(effort)
-    bad = [record_ids[i] for i in np.flatnonzero(given & ~(np.isfinite(effort_values) & (effort_values > 0)))]
-    if bad:
-        raise InputError(message(QT_TRANSLATE_NOOP(
-            "PlotwiseEngine",
-            "Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the "
-            "unit-area field empty."),
-            ids=listed_ids(bad)), ids=bad)
+    _refuse_records(record_ids, given & ~(np.isfinite(effort_values) & (effort_values > 0)), QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Records {ids} have no unit area (or one not above 0). Give every surveyed record its area, or leave the "
+        "unit-area field empty."))
     keep = np.flatnonzero(given)
     return _arrange_counts(
         [unit_ids[i] for i in keep], year_values[keep].astype(int), count_values[keep], effort_values[keep],
@@ -782,26 +786,17 @@ def estimate_series_iv(years, estimates, ses, record_ids=None):
     n = len(years)
     record_ids = list(record_ids) if record_ids is not None else list(range(1, n + 1))
     y, e, s = _as_float(years), _as_float(estimates), _as_float(ses)
-    bad = [record_ids[i] for i in range(n) if not np.isfinite(y[i]) or y[i] != np.round(y[i])]
-    if bad:
-        raise InputError(message(QT_TRANSLATE_NOOP(
-            "PlotwiseEngine",
-            "Records {ids} have no whole-number year."),
-            ids=listed_ids(bad)), ids=bad)
-    bad = [record_ids[i] for i in range(n) if not (np.isfinite(e[i]) and e[i] > 0)]
-    if bad:
-        raise InputError(message(QT_TRANSLATE_NOOP(
-            "PlotwiseEngine",
-            "Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years "
-            "without an estimate, or use the unit counts instead."),
-            ids=listed_ids(bad)), ids=bad)
-    bad = [record_ids[i] for i in range(n) if not (np.isfinite(s[i]) and s[i] > 0)]
-    if bad:
-        raise InputError(message(QT_TRANSLATE_NOOP(
-            "PlotwiseEngine",
-            "Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the "
-            "estimate step writes it)."),
-            ids=listed_ids(bad)), ids=bad)
+    _refuse_records(record_ids, ~_whole(y), QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Records {ids} have no whole-number year."))
+    _refuse_records(record_ids, ~(np.isfinite(e) & (e > 0)), QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Records {ids} have no estimate above 0. A log-linear trend needs estimates above 0: leave out years "
+        "without an estimate, or use the unit counts instead."))
+    _refuse_records(record_ids, ~(np.isfinite(s) & (s > 0)), QT_TRANSLATE_NOOP(
+        "PlotwiseEngine",
+        "Records {ids} have no standard error above 0. Every yearly estimate needs its standard error (the "
+        "estimate step writes it)."))
     order = np.argsort(y, kind="stable")
     y, e, s = y[order], e[order], s[order]
     twice = sorted({int(v) for v in y[1:][np.diff(y) == 0]})

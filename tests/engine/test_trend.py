@@ -230,6 +230,22 @@ def test_count_records_are_checked():
         tr.estimate_series_iv([2020, 2020, 2021, 2022], [10, 11, 12, 13], [1, 1, 1, 1])
 
 
+def test_each_bad_record_is_named_by_its_id():
+    """Truth by construction: the records made bad are the ones the error names, and no other."""
+    with pytest.raises(InputError, match="no unit id or no whole-number year") as caught:
+        tr.count_table_iv(["a", None, "c", "d"], [2020, 2021, 2022.5, None], [1, 2, 3, 4], record_ids=[5, 6, 7, 8])
+    assert caught.value.ids == [6, 7, 8]
+    with pytest.raises(InputError, match="no unit area") as caught:
+        tr.count_table_iv(["a", "b", "c"], [2020, 2021, 2022], [1, None, 3], [1.0, 0.0, -1.0], record_ids=[1, 2, 3])
+    assert caught.value.ids == [3]  # record 2 was not surveyed (NULL count): its area is not needed
+    with pytest.raises(InputError, match="no whole-number year") as caught:
+        tr.estimate_series_iv([2020, 2021.5, None], [10, 11, 12], [1, 1, 1], record_ids=["x", "y", "z"])
+    assert caught.value.ids == ["y", "z"]
+    with pytest.raises(InputError, match="no standard error above 0") as caught:
+        tr.estimate_series_iv([2020, 2021, 2022], [10, 11, 12], [1, None, -1])
+    assert caught.value.ids == [2, 3]
+
+
 def test_overall_rows_of_an_estimate_table():
     assert tr.overall_rows(["1", "2", "all", "1", "2", "all"]).tolist() == [False, False, True] * 2
     assert tr.overall_rows(["a", "a"]).all()
